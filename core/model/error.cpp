@@ -9,8 +9,8 @@ QString Error::toString() const
     return QStringLiteral("%1 (%2)").arg(message, cause);
 }
 
-std::unexpected<Error> failAt(ErrorCode code, const QString &file, qint64 line, qint64 column,
-                              const QString &what)
+std::unexpected<Error> failAt(
+    ErrorCode code, const QString &file, qint64 line, qint64 column, const QString &what)
 {
     QString where = file;
     if (line > 0)
@@ -29,17 +29,30 @@ std::unexpected<Error> failAt(ErrorCode code, const QString &file, qint64 line, 
 QString errorCodeName(ErrorCode code)
 {
     switch (code) {
-    case ErrorCode::InvalidArgument: return QStringLiteral("invalid-argument");
-    case ErrorCode::NotFound: return QStringLiteral("not-found");
-    case ErrorCode::InvalidInput: return QStringLiteral("invalid-input");
-    case ErrorCode::Duplicate: return QStringLiteral("duplicate");
-    case ErrorCode::Io: return QStringLiteral("io");
-    case ErrorCode::Busy: return QStringLiteral("busy");
-    case ErrorCode::Constraint: return QStringLiteral("constraint");
-    case ErrorCode::Corrupt: return QStringLiteral("corrupt");
-    case ErrorCode::NewerSchema: return QStringLiteral("newer-schema");
-    case ErrorCode::Unsupported: return QStringLiteral("unsupported");
-    case ErrorCode::Internal: return QStringLiteral("internal");
+    case ErrorCode::InvalidArgument:
+        return QStringLiteral("invalid-argument");
+    case ErrorCode::NotFound:
+        return QStringLiteral("not-found");
+    case ErrorCode::InvalidInput:
+        return QStringLiteral("invalid-input");
+    case ErrorCode::Duplicate:
+        return QStringLiteral("duplicate");
+    case ErrorCode::Io:
+        return QStringLiteral("io");
+    case ErrorCode::Busy:
+        return QStringLiteral("busy");
+    case ErrorCode::Constraint:
+        return QStringLiteral("constraint");
+    case ErrorCode::Corrupt:
+        return QStringLiteral("corrupt");
+    case ErrorCode::NewerSchema:
+        return QStringLiteral("newer-schema");
+    case ErrorCode::Unsupported:
+        return QStringLiteral("unsupported");
+    case ErrorCode::Cancelled:
+        return QStringLiteral("cancelled");
+    case ErrorCode::Internal:
+        return QStringLiteral("internal");
     }
     return QStringLiteral("internal");
 }

@@ -9,17 +9,18 @@ namespace fourfold {
 
 // What kind of failure, so that a front end can branch on it.
 enum class ErrorCode {
-    InvalidArgument,   // the caller passed something that cannot be right (bad range, unknown id)
-    NotFound,          // a named object does not exist
-    InvalidInput,      // a file or record is malformed (bad UTF-8, bad JSON, missing field...)
-    Duplicate,         // an id or text that must be unique is already there
-    Io,                // a file could not be opened, read or written
-    Busy,              // the project file is locked by another writer
-    Constraint,        // the database refused a change (foreign key, unique, check)
-    Corrupt,           // the project file is damaged or not a Fourfold project
-    NewerSchema,       // the project file was written by a newer Fourfold
-    Unsupported,       // a valid request this version cannot serve
-    Internal,          // a bug: an invariant did not hold
+    InvalidArgument, // the caller passed something that cannot be right (bad range, unknown id)
+    NotFound, // a named object does not exist
+    InvalidInput, // a file or record is malformed (bad UTF-8, bad JSON, missing field...)
+    Duplicate, // an id or text that must be unique is already there
+    Io, // a file could not be opened, read or written
+    Busy, // the project file is locked by another writer
+    Constraint, // the database refused a change (foreign key, unique, check)
+    Corrupt, // the project file is damaged or not a Fourfold project
+    NewerSchema, // the project file was written by a newer Fourfold
+    Unsupported, // a valid request this version cannot serve
+    Cancelled, // the user stopped a long operation; nothing was changed
+    Internal, // a bug: an invariant did not hold
 };
 
 // One failure: a code, one translated sentence naming the object (file, line, article),
@@ -37,15 +38,15 @@ struct Error {
     QString toString() const;
 };
 
-template <typename T>
+template<typename T>
 using Result = std::expected<T, Error>;
 
 using Status = std::expected<void, Error>;
 
 // An input-file failure: the message is prefixed "FILE:LINE:COLUMN: " (column and line left out
 // when 0), and the location is kept in the fields as well.
-std::unexpected<Error> failAt(ErrorCode code, const QString &file, qint64 line, qint64 column,
-                              const QString &what);
+std::unexpected<Error> failAt(
+    ErrorCode code, const QString &file, qint64 line, qint64 column, const QString &what);
 
 // Shorthand for `return fail(ErrorCode::X, tr("..."))` inside functions returning Result<T>.
 inline std::unexpected<Error> fail(ErrorCode code, QString message, QString cause = {})
@@ -61,3 +62,11 @@ inline std::unexpected<Error> fail(ErrorCode code, QString message, QString caus
 QString errorCodeName(ErrorCode code);
 
 } // namespace fourfold
+
+// Returns early from a function returning Result<T> or Status when `expr` (a Result or Status)
+// holds an error: FOURFOLD_TRY_STATUS(store::appendEvent(...));
+#define FOURFOLD_TRY_STATUS(expr)                                                                  \
+    do {                                                                                           \
+        if (auto fourfoldTryResult = (expr); !fourfoldTryResult)                                   \
+            return std::unexpected(fourfoldTryResult.error());                                     \
+    } while (false)

@@ -5,10 +5,14 @@ namespace fourfold {
 QString functionKey(FramingFunction f)
 {
     switch (f) {
-    case FramingFunction::Problem: return QStringLiteral("problem");
-    case FramingFunction::Cause: return QStringLiteral("cause");
-    case FramingFunction::Evaluation: return QStringLiteral("evaluation");
-    case FramingFunction::Remedy: return QStringLiteral("remedy");
+    case FramingFunction::Problem:
+        return QStringLiteral("problem");
+    case FramingFunction::Cause:
+        return QStringLiteral("cause");
+    case FramingFunction::Evaluation:
+        return QStringLiteral("evaluation");
+    case FramingFunction::Remedy:
+        return QStringLiteral("remedy");
     }
     return {};
 }

@@ -10,9 +10,8 @@ namespace fourfold {
 
 enum class FramingFunction { Problem = 0, Cause = 1, Evaluation = 2, Remedy = 3 };
 
-inline constexpr std::array<FramingFunction, 4> kFramingFunctions{
-    FramingFunction::Problem, FramingFunction::Cause, FramingFunction::Evaluation,
-    FramingFunction::Remedy};
+inline constexpr std::array<FramingFunction, 4> kFramingFunctions {FramingFunction::Problem,
+    FramingFunction::Cause, FramingFunction::Evaluation, FramingFunction::Remedy};
 
 // The short label used in files and the CLI: "problem", "cause", "evaluation", "remedy".
 QString functionKey(FramingFunction f);

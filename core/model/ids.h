@@ -11,7 +11,7 @@
 
 namespace fourfold {
 
-template <typename Tag>
+template<typename Tag>
 struct Id {
     qint64 value = 0;
 

@@ -5,9 +5,12 @@ namespace fourfold {
 QString paragraphRoleKey(ParagraphRole role)
 {
     switch (role) {
-    case ParagraphRole::Intro: return QStringLiteral("intro");
-    case ParagraphRole::Body: return QStringLiteral("body");
-    case ParagraphRole::Conclusion: return QStringLiteral("conclusion");
+    case ParagraphRole::Intro:
+        return QStringLiteral("intro");
+    case ParagraphRole::Body:
+        return QStringLiteral("body");
+    case ParagraphRole::Conclusion:
+        return QStringLiteral("conclusion");
     }
     return {};
 }

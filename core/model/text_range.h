@@ -33,7 +33,7 @@ struct TextRange {
     {
         if (!overlaps(other))
             return std::nullopt;
-        return TextRange{std::max(start, other.start), std::min(end, other.end)};
+        return TextRange {std::max(start, other.start), std::min(end, other.end)};
     }
     friend constexpr bool operator==(const TextRange &, const TextRange &) = default;
     friend constexpr auto operator<=>(const TextRange &, const TextRange &) = default;

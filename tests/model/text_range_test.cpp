@@ -7,18 +7,18 @@ using namespace fourfold;
 
 TEST_CASE("TextRange is half-open")
 {
-    const TextRange r{2, 5};
+    const TextRange r {2, 5};
     CHECK(r.length() == 3);
     CHECK(r.contains(2));
     CHECK(r.contains(4));
     CHECK_FALSE(r.contains(5));
-    CHECK(r.overlaps(TextRange{4, 9}));
-    CHECK_FALSE(r.overlaps(TextRange{5, 9})); // touching is not overlapping
-    CHECK(r.intersect(TextRange{4, 9}) == TextRange{4, 5});
-    CHECK_FALSE(r.intersect(TextRange{0, 2}).has_value());
-    CHECK(r.contains(TextRange{2, 5}));
-    CHECK_FALSE(r.contains(TextRange{1, 5}));
-    CHECK_FALSE(TextRange{3, 2}.isValid());
+    CHECK(r.overlaps(TextRange {4, 9}));
+    CHECK_FALSE(r.overlaps(TextRange {5, 9})); // touching is not overlapping
+    CHECK(r.intersect(TextRange {4, 9}) == TextRange {4, 5});
+    CHECK_FALSE(r.intersect(TextRange {0, 2}).has_value());
+    CHECK(r.contains(TextRange {2, 5}));
+    CHECK_FALSE(r.contains(TextRange {1, 5}));
+    CHECK_FALSE(TextRange {3, 2}.isValid());
 }
 
 TEST_CASE("framing function keys round-trip")

@@ -1,8 +1,8 @@
 #include "tests/support/test_support.h"
 
 #include <QDir>
-#include <QFileInfo>
 #include <QFile>
+#include <QFileInfo>
 
 namespace fourfold::test {
 
