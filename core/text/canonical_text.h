@@ -9,17 +9,21 @@
 
 namespace fourfold {
 
-// Decodes UTF-8 strictly. On invalid UTF-8 (overlong forms, surrogates, truncated sequences,
-// bytes 0xC0/0xC1/0xF5..0xFF) returns ErrorCode::InvalidInput naming `sourceName`, the 1-based
-// line and the 1-based byte column of the first bad byte. A leading BOM is accepted and dropped.
-// NUL bytes are refused as well (they mark a binary file).
+// Decodes UTF-8 strictly (Unicode 15.0 §3.9 Table 3-7). On invalid UTF-8 (overlong forms,
+// surrogates, code points above U+10FFFF, truncated sequences, stray continuation bytes, bytes
+// 0xC0/0xC1/0xF5..0xFF) returns ErrorCode::InvalidInput naming `sourceName`, the 1-based line
+// and the 1-based byte column of the first byte of the first ill-formed sequence, its value and
+// what is wrong. Lines end at LF, CRLF or a lone CR; columns count raw bytes from the line start
+// (on line 1 a BOM counts). A leading BOM is accepted and dropped. NUL bytes are refused as well
+// (they mark a binary file). Line ends are kept as they are: see canonicalText().
 Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceName);
 
-// Returns the canonical form of `text`: BOM removed, CRLF and lone CR turned into LF, Unicode
-// NFC. Never fails for valid UTF-16 input; unpaired surrogates are replaced by U+FFFD.
+// Returns the canonical form of `text`: leading BOMs (U+FEFF) removed, CRLF and lone CR turned
+// into LF, Unicode NFC (UAX #15). Never fails; unpaired surrogates are replaced by U+FFFD.
+// Idempotent: canonicalText(canonicalText(x)) == canonicalText(x).
 QString canonicalText(const QString &text);
 
-// True if `text` is already canonical (canonicalText(text) == text).
+// True if `text` is already canonical (canonicalText(text) == text), without copying it.
 bool isCanonicalText(const QString &text);
 
 // Lower-case hex SHA-256 of the UTF-8 encoding of `text` (64 characters).
