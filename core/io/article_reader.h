@@ -1,7 +1,66 @@
 #pragma once
 // Reading articles from files: plain text (a file or a folder of files), HTML, JSON Lines and
 // CSV. Each file is read all-or-nothing: the first problem makes the whole file fail with an
-// Error naming file, line (and column for JSON) and what is wrong.
+// Error naming file, line (and column where known) and what is wrong.
+//
+// Common rules (every format)
+// - Input must be UTF-8; a leading BOM is dropped. Invalid UTF-8 and NUL bytes (binary files)
+//   are refused with the line and column of the first bad byte (decodeUtf8Strict).
+// - A file may be at most maxImportFileSize bytes; larger files are refused before reading.
+// - Every article needs a non-blank id and a non-blank text; ids are unique within a file (and
+//   within a folder of text files). Titles may be empty. Syntax and type errors are reported
+//   before these checks, so the first syntax error wins over an earlier duplicate id.
+// - An empty file, or one without a single article, is an error ("contains no articles").
+// - ImportOptions::language fills in records that name no language.
+// - Error codes: InvalidInput for malformed content, Duplicate for a repeated id, Io for a file
+//   that cannot be read, Unsupported for an unknown format, InvalidArgument for a bad
+//   ImportOptions::csvColumns.
+//
+// Plain text (.txt, .text): one article per file; id = the file name without its last suffix.
+// Paragraphs are runs of non-blank lines; blank (or whitespace-only) lines separate them and
+// the body joins paragraphs with exactly one blank line ("\n\n"); line ends become LF; the
+// lines themselves are kept as they are. Title: the first paragraph is the title when it is a
+// single line of at most maxTextTitleLength characters and another paragraph follows;
+// otherwise the title is the file name without its last suffix and every paragraph is body.
+//
+// HTML (.html, .htm), parsed with libxml2's error-tolerant HTML parser; the file must be UTF-8
+// (a <meta charset> declaring anything else is ignored). Body: every heading (h1-h6) and block
+// (p, li, blockquote, pre, td, th, dd, dt, figcaption, div and other block elements) becomes
+// its own paragraph, with ASCII whitespace collapsed to one space and entities decoded; <br>
+// is a line break and two or more in a row a paragraph break; inside <pre> line breaks are
+// kept. Dropped with their content: head, script, style, noscript, template, nav, footer,
+// aside, form, iframe, svg, math, object, embed, canvas, audio, video, button, select,
+// textarea, elements with the `hidden` attribute or aria-hidden="true", and a <header> that
+// is the page's banner (not inside article, main or section: the HTML-AAM mapping of header
+// to the banner role); a <header> inside an article keeps its headline and standfirst.
+// Title: <meta property="og:title">, else <title>, else the first <h1>, else the file name
+// without its last suffix; the first heading of the body is left out of the body when its
+// text equals the title, so the headline is not there twice. Outlet: og:site_name. Published:
+// article:published_time, else the datetime of the first <time> in the body. Language: the
+// lang attribute of <html>. Meta tags are matched on their property or name attribute.
+//
+// JSON Lines (.jsonl, .ndjson; https://jsonlines.org): one JSON object per line (LF or CRLF);
+// whitespace-only lines are skipped. Fields: "id", "title", "text" (required strings),
+// "outlet", "published", "language" (optional strings; null = absent) and "meta" (optional
+// object; null = absent). Any other top-level field is an error naming it, so that a typo
+// ("titel") cannot silently drop data; put further data inside "meta". Syntax errors give
+// the line and the 1-based column in characters (code points). A last line that is cut off
+// (no final newline and the JSON ends early) is reported as truncated. Strings must be valid
+// Unicode (no unpaired surrogate escapes, RFC 8259 §8.2). A line may be at most
+// maxJsonLineSize bytes of UTF-8. Duplicate keys inside one object: the last one wins (Qt's
+// parser keeps it).
+//
+// CSV (.csv; RFC 4180): comma-separated, fields optionally enclosed in double quotes, a
+// double quote inside a quoted field written twice, quoted fields may hold commas and line
+// breaks; records end with CRLF, LF or a lone CR; the last record may end without one. A
+// double quote inside an unquoted field, or anything but a comma or line break after a
+// closing quote, is an error. Completely empty lines are skipped. The first record is the
+// header (names trimmed; each must be non-empty and unique); every record must have as many
+// fields as the header. Columns are found by name (see ImportOptions::csvColumns); required
+// columns: id, title, text; optional: outlet, published, language; every other column goes
+// into meta as a string, keyed by its header name. Line numbers are physical lines of the
+// file: a record that spans lines is reported at its first line; an unterminated quoted field
+// is reported where its opening quote is.
 
 #include "core/io/imported_article.h"
 #include "core/model/error.h"
@@ -16,10 +75,20 @@ namespace fourfold {
 
 enum class ImportFormat { Text, Html, JsonLines, Csv };
 
+// The largest file any reader accepts, in bytes (1 GiB).
+inline constexpr qint64 maxImportFileSize = qint64(1) << 30;
+// The longest line of a JSON Lines file, in bytes of UTF-8 without the line break (64 MiB).
+inline constexpr qint64 maxJsonLineSize = qint64(64) << 20;
+// The longest first line of a text file that can be its title, in UTF-16 code units.
+inline constexpr qsizetype maxTextTitleLength = 200;
+
 // "txt", "html", "jsonl", "csv".
 QString importFormatKey(ImportFormat format);
+// The format for a key: the keys above and the aliases "text", "htm", "ndjson" (any letter
+// case); nothing for any other key.
 std::optional<ImportFormat> importFormatFromKey(const QString &key);
-// From the file name's suffix (.txt/.text, .html/.htm, .jsonl/.ndjson, .csv); nothing otherwise.
+// From the file name's suffix (.txt/.text, .html/.htm, .jsonl/.ndjson, .csv; any letter case);
+// nothing otherwise.
 std::optional<ImportFormat> importFormatFromPath(const QString &path);
 
 struct ImportOptions {
@@ -30,14 +99,19 @@ struct ImportOptions {
     QString language;
     // CSV: maps Fourfold's field names (id, title, text, outlet, published, language) to the
     // CSV header names that hold them; a field not in the map is looked up under its own name.
+    // A mapped column must exist in the header; a key that is not one of these field names
+    // is an ErrorCode::InvalidArgument error.
     QHash<QString, QString> csvColumns;
 };
 
 // Reads every article of `path`: a file, or for plain text a folder of *.txt files (sorted by
 // name, not recursive). Returns the articles in file order, or the first error (nothing is
-// returned for a file with any error). Duplicate ids inside one file are an error
-// (ErrorCode::Duplicate, naming both lines). An empty file is an error.
-Result<std::vector<ImportedArticle>> readArticles(const QString &path,
-                                                  const ImportOptions &options);
+// returned for a file with any error; a folder fails as a whole). Duplicate ids inside one
+// file are an error (ErrorCode::Duplicate, naming both lines). An empty file is an error.
+// A missing or unreadable path is ErrorCode::Io; a file whose format is neither forced nor
+// known from its suffix, or a folder with a forced format other than Text, is
+// ErrorCode::Unsupported. The rules of each format are described at the top of this file.
+Result<std::vector<ImportedArticle>> readArticles(
+    const QString &path, const ImportOptions &options);
 
 } // namespace fourfold

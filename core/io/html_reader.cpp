@@ -1,0 +1,384 @@
+#include "core/io/html_reader.h"
+
+#include "core/text/canonical_text.h"
+
+#include <QCoreApplication>
+#include <QFileInfo>
+#include <QRegularExpression>
+#include <QStringList>
+
+#include <libxml/HTMLparser.h>
+#include <libxml/parser.h>
+#include <libxml/tree.h>
+#include <libxml/xmlerror.h>
+
+#include <algorithm>
+#include <array>
+#include <memory>
+#include <string_view>
+#include <vector>
+
+namespace fourfold {
+
+namespace {
+
+// Elements whose content is never article text: scripts and styles, page furniture, forms
+// and embedded objects (common practice for extracting the readable text of a page).
+// clang-format off
+constexpr std::array<std::string_view, 20> droppedElements{
+    "aside", "audio", "button", "canvas", "embed", "footer", "form", "head", "iframe", "math",
+    "nav", "noscript", "object", "script", "select", "style", "svg", "template", "textarea",
+    "video",
+};
+// clang-format on
+
+// Elements that start and end a paragraph of their own (the block-level elements of HTML 4.01
+// and the HTML Standard's flow content that is rendered as a block).
+// clang-format off
+constexpr std::array<std::string_view, 45> blockElements{
+    "address", "article", "aside", "blockquote", "body", "caption", "center", "dd", "details",
+    "dialog", "dir", "div", "dl", "dt", "fieldset", "figcaption", "figure", "footer", "form", "h1",
+    "h2", "h3", "h4", "h5", "h6", "header", "hgroup", "hr", "html", "legend", "li", "main", "menu",
+    "nav", "ol", "p", "pre", "section", "summary", "table", "tbody", "td", "th", "thead", "tr",
+};
+// clang-format on
+
+constexpr std::array<std::string_view, 6> headingElements {"h1", "h2", "h3", "h4", "h5", "h6"};
+
+template<std::size_t N>
+bool isOneOf(std::string_view name, const std::array<std::string_view, N> &names)
+{
+    return std::ranges::find(names, name) != names.end();
+}
+
+std::string_view elementName(const xmlNode *node)
+{
+    return node->name ? std::string_view(reinterpret_cast<const char *>(node->name))
+                      : std::string_view();
+}
+
+QString fromXml(const xmlChar *text)
+{
+    return text ? QString::fromUtf8(reinterpret_cast<const char *>(text)) : QString();
+}
+
+QString attribute(const xmlNode *node, const char *name)
+{
+    xmlChar *value = xmlGetProp(node, reinterpret_cast<const xmlChar *>(name));
+    QString result = fromXml(value);
+    xmlFree(value);
+    return result;
+}
+
+QString textContent(const xmlNode *node)
+{
+    xmlChar *content = xmlNodeGetContent(node);
+    QString result = fromXml(content);
+    xmlFree(content);
+    return result.simplified();
+}
+
+bool hasAncestor(const xmlNode *node, std::initializer_list<std::string_view> names)
+{
+    for (const xmlNode *p = node->parent; p; p = p->parent) {
+        if (p->type == XML_ELEMENT_NODE && std::ranges::find(names, elementName(p)) != names.end())
+            return true;
+    }
+    return false;
+}
+
+bool isDropped(const xmlNode *node, std::string_view name)
+{
+    if (isOneOf(name, droppedElements))
+        return true;
+    if (xmlHasProp(node, reinterpret_cast<const xmlChar *>("hidden")))
+        return true;
+    if (attribute(node, "aria-hidden").trimmed().compare(u"true", Qt::CaseInsensitive) == 0)
+        return true;
+    // HTML-AAM: a header maps to the banner role (page furniture) unless it is inside an
+    // article, aside, main, nav or section element, where it introduces that content.
+    return name == "header" && !hasAncestor(node, {"article", "aside", "main", "nav", "section"});
+}
+
+// Visits the subtree of `root` depth first. `enter(node)` returns whether to visit the node's
+// children; `leave(node)` is called after the children of every node entered that way. Not
+// recursive, so that deeply nested pages cannot exhaust the stack.
+template<typename Enter, typename Leave>
+void walk(xmlNode *root, Enter enter, Leave leave)
+{
+    xmlNode *node = root;
+    while (node) {
+        if (enter(node)) {
+            if (node->children) {
+                node = node->children;
+                continue;
+            }
+            leave(node);
+        }
+        while (node != root && !node->next) {
+            node = node->parent;
+            leave(node);
+        }
+        if (node == root)
+            break;
+        node = node->next;
+    }
+}
+
+template<typename Visit>
+void forEachElement(xmlNode *root, Visit visit)
+{
+    walk(
+        root,
+        [&](xmlNode *node) {
+            if (node->type != XML_ELEMENT_NODE)
+                return false;
+            visit(node);
+            return true;
+        },
+        [](xmlNode *) {});
+}
+
+struct Block {
+    QString text;
+    bool heading = false;
+};
+
+// Gathers the text of the page into paragraphs, collapsing whitespace as a browser renders it.
+class BlockCollector
+{
+public:
+    int headingDepth = 0;
+    int preDepth = 0;
+    std::vector<Block> blocks;
+
+    void addText(QStringView text)
+    {
+        for (const QChar c : text) {
+            // ASCII whitespace as the HTML Standard defines it: TAB, LF, FF, CR, SPACE.
+            const bool space = c == u' ' || c == u'\t' || c == u'\n' || c == u'\f' || c == u'\r';
+            if (!space) {
+                if (m_pendingSpace && !m_current.isEmpty() && !m_current.endsWith(u'\n'))
+                    m_current.append(u' ');
+                m_pendingSpace = false;
+                m_current.append(c);
+            } else if (preDepth > 0 && c == u'\n') {
+                addLineBreak();
+            } else if (preDepth == 0 || c != u'\r') {
+                m_pendingSpace = true;
+            }
+        }
+    }
+
+    void addLineBreak()
+    {
+        m_current.append(u'\n');
+        m_pendingSpace = false;
+    }
+
+    // Ends the current block: its lines are trimmed, and an empty line (two line breaks in a
+    // row) splits it into paragraphs.
+    void endBlock()
+    {
+        QStringList paragraph;
+        const auto endParagraph = [&] {
+            if (!paragraph.isEmpty())
+                blocks.push_back(Block {paragraph.join(u'\n'), headingDepth > 0});
+            paragraph.clear();
+        };
+        for (const QStringView line : QStringView(m_current).split(u'\n')) {
+            const QStringView trimmed = line.trimmed();
+            if (trimmed.isEmpty())
+                endParagraph();
+            else
+                paragraph.append(trimmed.toString());
+        }
+        endParagraph();
+        m_current.clear();
+        m_pendingSpace = false;
+    }
+
+private:
+    QString m_current;
+    bool m_pendingSpace = false;
+};
+
+struct XmlDocFree {
+    void operator()(xmlDoc *doc) const { xmlFreeDoc(doc); }
+};
+
+struct HtmlContextFree {
+    void operator()(htmlParserCtxt *context) const { htmlFreeParserCtxt(context); }
+};
+
+void initialiseLibxml2()
+{
+    // xmlInitParser sets up global tables; once, before any thread parses.
+    static const bool initialised = [] {
+        xmlInitParser();
+        return true;
+    }();
+    Q_UNUSED(initialised);
+}
+
+// The character set the page declares in its first 1024 bytes (the window of the HTML
+// Standard's "prescan a byte stream to determine its encoding"), or an empty string.
+QString declaredCharset(const QByteArray &bytes)
+{
+    static const QRegularExpression charset(
+        QStringLiteral("charset\\s*=\\s*[\"']?\\s*([A-Za-z0-9._:-]+)"),
+        QRegularExpression::CaseInsensitiveOption);
+    const QRegularExpressionMatch match = charset.match(QString::fromLatin1(bytes.left(1024)));
+    return match.hasMatch() ? match.captured(1) : QString();
+}
+
+} // namespace
+
+Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &file)
+{
+    Result<QString> decoded = decodeUtf8Strict(bytes, file);
+    if (!decoded) {
+        Error error = decoded.error();
+        const QString charset = declaredCharset(bytes);
+        if (!charset.isEmpty() && charset.compare(u"utf-8", Qt::CaseInsensitive) != 0
+            && charset.compare(u"utf8", Qt::CaseInsensitive) != 0) {
+            error.message += QLatin1Char(' ')
+                + QCoreApplication::translate("ArticleReader",
+                    "The page declares the character set \"%1\"; "
+                    "convert it to UTF-8 first.")
+                      .arg(charset);
+        }
+        return std::unexpected(std::move(error));
+    }
+    const QString baseName = QFileInfo(file).completeBaseName();
+
+    initialiseLibxml2();
+    // Valid UTF-8 by now; libxml2 gets the bytes without a BOM and is told to ignore any
+    // <meta charset>, which would otherwise make it decode them again as something else.
+    // XML_PARSE_HUGE lifts libxml2's nesting limit of 256 (the file size limit bounds the
+    // input already, and the walk below is not recursive).
+    const qsizetype skip = bytes.startsWith("\xEF\xBB\xBF") ? 3 : 0;
+    const std::unique_ptr<htmlParserCtxt, HtmlContextFree> context(htmlNewParserCtxt());
+    if (!context) {
+        return failAt(ErrorCode::Internal, file, 0, 0,
+            QCoreApplication::translate("ArticleReader", "the HTML parser could not be started"));
+    }
+    const int parseOptions = int(HTML_PARSE_NOERROR) | int(HTML_PARSE_NOWARNING)
+        | int(HTML_PARSE_NONET) | int(HTML_PARSE_IGNORE_ENC) | int(XML_PARSE_HUGE);
+    const std::unique_ptr<xmlDoc, XmlDocFree> doc(
+        htmlCtxtReadMemory(context.get(), bytes.constData() + skip,
+            static_cast<int>(bytes.size() - skip), nullptr, "UTF-8", parseOptions));
+    // The HTML parser recovers from bad markup on its own; it only halts (and then leaves a
+    // partial tree) on a fatal error such as running out of memory. Half a page is refused.
+    if (context->disableSAX != 0 || context->instate == XML_PARSER_EOF) {
+        const xmlError *last = xmlCtxtGetLastError(context.get());
+        auto error = failAt(ErrorCode::InvalidInput, file, last ? last->line : 0, 0,
+            QCoreApplication::translate("ArticleReader",
+                "the HTML parser stopped before the end "
+                "of the page"));
+        if (last && last->message)
+            error.error().cause = QString::fromUtf8(last->message).trimmed();
+        return error;
+    }
+    xmlNode *root = doc ? xmlDocGetRootElement(doc.get()) : nullptr;
+    if (!root) {
+        return failAt(ErrorCode::InvalidInput, file, 0, 0,
+            QCoreApplication::translate("ArticleReader",
+                "the file contains no articles: the page "
+                "holds no text"));
+    }
+
+    ImportedArticle article;
+    article.externalId = baseName;
+    article.sourceLine = 1;
+    article.language = attribute(root, "lang").trimmed();
+
+    QString pageTitle;
+    QString ogTitle;
+    QString firstH1;
+    QString metaPublished;
+    forEachElement(root, [&](xmlNode *node) {
+        const std::string_view name = elementName(node);
+        if (name == "title" && pageTitle.isEmpty() && !hasAncestor(node, {"svg"})) {
+            pageTitle = textContent(node);
+        } else if (name == "h1" && firstH1.isEmpty()) {
+            firstH1 = textContent(node);
+        } else if (name == "meta") {
+            QString key = attribute(node, "property").trimmed();
+            if (key.isEmpty())
+                key = attribute(node, "name").trimmed();
+            const QString content = attribute(node, "content").simplified();
+            // The Open Graph protocol (ogp.me): og:title, og:site_name, and the article
+            // type's article:published_time.
+            if (key == u"og:title" && ogTitle.isEmpty())
+                ogTitle = content;
+            else if (key == u"og:site_name" && article.outlet.isEmpty())
+                article.outlet = content;
+            else if (key == u"article:published_time" && metaPublished.isEmpty())
+                metaPublished = content;
+        }
+    });
+
+    BlockCollector collector;
+    QString timePublished;
+    walk(
+        root,
+        [&](xmlNode *node) {
+            if (node->type == XML_TEXT_NODE || node->type == XML_CDATA_SECTION_NODE) {
+                collector.addText(fromXml(node->content));
+                return false;
+            }
+            if (node->type != XML_ELEMENT_NODE)
+                return false;
+            const std::string_view name = elementName(node);
+            if (name == "br") {
+                collector.addLineBreak();
+                return false;
+            }
+            const bool block = isOneOf(name, blockElements);
+            if (block)
+                collector.endBlock();
+            if (isDropped(node, name))
+                return false;
+            if (isOneOf(name, headingElements))
+                ++collector.headingDepth;
+            if (name == "pre")
+                ++collector.preDepth;
+            if (name == "time" && timePublished.isEmpty())
+                timePublished = attribute(node, "datetime").trimmed();
+            return true;
+        },
+        [&](xmlNode *node) {
+            const std::string_view name = elementName(node);
+            if (isOneOf(name, blockElements))
+                collector.endBlock();
+            if (isOneOf(name, headingElements))
+                --collector.headingDepth;
+            if (name == "pre")
+                --collector.preDepth;
+        });
+    collector.endBlock();
+
+    std::vector<Block> &blocks = collector.blocks;
+    article.title = !ogTitle.isEmpty() ? ogTitle
+        : !pageTitle.isEmpty()         ? pageTitle
+        : !firstH1.isEmpty()           ? firstH1
+                                       : baseName;
+    const auto firstHeading = std::ranges::find_if(blocks, &Block::heading);
+    if (firstHeading != blocks.end() && firstHeading->text.simplified() == article.title)
+        blocks.erase(firstHeading);
+    if (blocks.empty()) {
+        return failAt(ErrorCode::InvalidInput, file, 0, 0,
+            QCoreApplication::translate("ArticleReader",
+                "the file contains no articles: the page holds no text outside "
+                "scripts, styles, navigation, forms and other dropped elements"));
+    }
+    QStringList paragraphs;
+    for (const Block &b : blocks)
+        paragraphs.append(b.text);
+    article.text = paragraphs.join(QLatin1StringView("\n\n"));
+    article.published = !metaPublished.isEmpty() ? metaPublished : timePublished;
+    return article;
+}
+
+} // namespace fourfold
