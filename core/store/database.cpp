@@ -1,0 +1,159 @@
+#include "core/store/database.h"
+
+#include "core/store/statement.h"
+
+#include <QCoreApplication>
+
+#include <sqlite3.h>
+
+namespace fourfold {
+
+ErrorCode errorCodeForSqlite(int rc)
+{
+    switch (rc & 0xff) {
+    case SQLITE_BUSY:
+    case SQLITE_LOCKED:
+        return ErrorCode::Busy;
+    case SQLITE_CONSTRAINT:
+        return ErrorCode::Constraint;
+    case SQLITE_CORRUPT:
+    case SQLITE_NOTADB:
+        return ErrorCode::Corrupt;
+    case SQLITE_CANTOPEN:
+    case SQLITE_IOERR:
+    case SQLITE_FULL:
+    case SQLITE_READONLY:
+    case SQLITE_PERM:
+        return ErrorCode::Io;
+    default:
+        return ErrorCode::Internal;
+    }
+}
+
+Database::~Database()
+{
+    close();
+}
+
+Database::Database(Database &&other) noexcept
+    : m_db(std::exchange(other.m_db, nullptr))
+    , m_path(std::move(other.m_path))
+    , m_faultHook(std::move(other.m_faultHook))
+{ }
+
+Database &Database::operator=(Database &&other) noexcept
+{
+    if (this != &other) {
+        close();
+        m_db = std::exchange(other.m_db, nullptr);
+        m_path = std::move(other.m_path);
+        m_faultHook = std::move(other.m_faultHook);
+    }
+    return *this;
+}
+
+void Database::close()
+{
+    if (m_db) {
+        sqlite3_close_v2(m_db);
+        m_db = nullptr;
+    }
+}
+
+Result<Database> Database::open(const QString &path, OpenMode mode)
+{
+    int flags = SQLITE_OPEN_NOMUTEX;
+    switch (mode) {
+    case OpenMode::ReadOnly:
+        flags |= SQLITE_OPEN_READONLY;
+        break;
+    case OpenMode::ReadWrite:
+        flags |= SQLITE_OPEN_READWRITE;
+        break;
+    case OpenMode::ReadWriteCreate:
+        flags |= SQLITE_OPEN_READWRITE | SQLITE_OPEN_CREATE;
+        break;
+    }
+    Database db;
+    db.m_path = path;
+    const int rc = sqlite3_open_v2(path.toUtf8().constData(), &db.m_db, flags, nullptr);
+    if (rc != SQLITE_OK) {
+        Error e = db.errorFor(rc,
+            QCoreApplication::translate("Database", "Cannot open the project file %1.").arg(path));
+        if (e.code == ErrorCode::Internal)
+            e.code = ErrorCode::Io;
+        return std::unexpected(e);
+    }
+    sqlite3_extended_result_codes(db.m_db, 1);
+    sqlite3_busy_timeout(db.m_db, 5000);
+    // Reading the schema is the first touch of the file: a non-database fails here.
+    if (auto st = db.exec(
+            QStringLiteral("PRAGMA foreign_keys = ON; SELECT count(*) FROM sqlite_schema;"));
+        !st) {
+        Error e = st.error();
+        e.message = QCoreApplication::translate(
+            "Database", "%1 is not a Fourfold project file or is damaged.")
+                        .arg(path);
+        if (e.code == ErrorCode::Internal)
+            e.code = ErrorCode::Corrupt;
+        return std::unexpected(e);
+    }
+    if (mode != OpenMode::ReadOnly) {
+        if (auto st =
+                db.exec(QStringLiteral("PRAGMA journal_mode = WAL; PRAGMA synchronous = NORMAL;"));
+            !st)
+            return std::unexpected(st.error());
+    }
+    return db;
+}
+
+Status Database::exec(const QString &sql)
+{
+    char *message = nullptr;
+    const int rc = sqlite3_exec(m_db, sql.toUtf8().constData(), nullptr, nullptr, &message);
+    if (rc != SQLITE_OK) {
+        Error e;
+        e.code = errorCodeForSqlite(rc);
+        e.message =
+            QCoreApplication::translate("Database", "The project file could not be updated.");
+        e.cause = QString::fromUtf8(message ? message : sqlite3_errstr(rc));
+        sqlite3_free(message);
+        return std::unexpected(e);
+    }
+    return {};
+}
+
+Result<Statement> Database::prepare(const QString &sql) const
+{
+    sqlite3_stmt *stmt = nullptr;
+    const QByteArray utf8 = sql.toUtf8();
+    const int rc = sqlite3_prepare_v3(m_db, utf8.constData(), int(utf8.size()), 0, &stmt, nullptr);
+    if (rc != SQLITE_OK)
+        return std::unexpected(errorFor(
+            rc, QCoreApplication::translate("Database", "A query could not be prepared.")));
+    return Statement(this, stmt);
+}
+
+qint64 Database::lastInsertRowId() const
+{
+    return sqlite3_last_insert_rowid(m_db);
+}
+
+qint64 Database::changes() const
+{
+    return sqlite3_changes64(m_db);
+}
+
+Error Database::errorFor(int rc, const QString &what) const
+{
+    Error e;
+    e.code = errorCodeForSqlite(rc);
+    e.message = what;
+    e.cause =
+        m_db ? QString::fromUtf8(sqlite3_errmsg(m_db)) : QString::fromUtf8(sqlite3_errstr(rc));
+    if (e.cause == QLatin1String("not an error"))
+        e.cause = QString::fromUtf8(sqlite3_errstr(rc));
+    return e;
+}
+
+} // namespace fourfold

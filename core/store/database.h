@@ -1,0 +1,72 @@
+#pragma once
+// One thin, RAII layer over SQLite's C API: a connection with Fourfold's pragmas, errors as
+// values with distinct codes for busy, constraint and corrupt, and plain SQL execution.
+// Values always go through Statement's bound parameters, never into SQL text.
+
+#include "core/model/error.h"
+
+#include <QString>
+
+#include <functional>
+#include <memory>
+
+struct sqlite3;
+
+namespace fourfold {
+
+class Statement;
+
+class Database
+{
+public:
+    enum class OpenMode { ReadWrite, ReadWriteCreate, ReadOnly };
+
+    Database() = default;
+    ~Database();
+    Database(Database &&other) noexcept;
+    Database &operator=(Database &&other) noexcept;
+    Database(const Database &) = delete;
+    Database &operator=(const Database &) = delete;
+
+    // Opens `path` and sets foreign_keys=ON, a 5 s busy timeout and (unless read-only) WAL mode.
+    // Fails with Io if the file cannot be opened or created, Corrupt if it is not an SQLite file.
+    static Result<Database> open(const QString &path, OpenMode mode);
+
+    bool isOpen() const { return m_db != nullptr; }
+    QString path() const { return m_path; }
+    sqlite3 *handle() const { return m_db; }
+
+    // Runs one or more SQL statements without parameters (schema, pragmas). Fails with the
+    // mapped error code and SQLite's message as the cause.
+    Status exec(const QString &sql);
+
+    // Compiles one statement. Fails with the mapped error code.
+    Result<Statement> prepare(const QString &sql) const;
+
+    // The rowid of the last successful INSERT on this connection.
+    qint64 lastInsertRowId() const;
+    // Rows changed by the last INSERT/UPDATE/DELETE.
+    qint64 changes() const;
+
+    // The error for SQLite result code `rc` with the connection's current message as the cause;
+    // `what` is the sentence shown to people.
+    Error errorFor(int rc, const QString &what) const;
+
+    // A test hook for fault injection: called before every Statement::step(); returning a
+    // non-zero SQLite result code makes that step fail with it. Empty in production.
+    using FaultHook = std::function<int()>;
+    void setFaultHook(FaultHook hook) { m_faultHook = std::move(hook); }
+    const FaultHook &faultHook() const { return m_faultHook; }
+
+private:
+    void close();
+
+    sqlite3 *m_db = nullptr;
+    QString m_path;
+    FaultHook m_faultHook;
+};
+
+// Maps an SQLite primary result code to Fourfold's error code.
+ErrorCode errorCodeForSqlite(int rc);
+
+} // namespace fourfold

@@ -1,0 +1,202 @@
+#include "core/store/project_tables.h"
+
+#include "core/store/store_util.h"
+
+#include <QCoreApplication>
+
+namespace fourfold::store {
+
+Result<std::optional<QString>> setting(const Database &db, const QString &key)
+{
+    auto stmt = db.prepare(QStringLiteral("SELECT value FROM project_setting WHERE key = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, key);
+    auto row = stmt->step();
+    if (!row)
+        return std::unexpected(row.error());
+    if (!*row)
+        return std::optional<QString> {};
+    return std::optional<QString> {stmt->columnText(0)};
+}
+
+Status setSetting(Database &db, const QString &key, const QString &value)
+{
+    auto stmt =
+        db.prepare(QStringLiteral("INSERT INTO project_setting (key, value) VALUES (?1, ?2) "
+                                  "ON CONFLICT (key) DO UPDATE SET value = excluded.value"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, key).bind(2, value);
+    return stmt->run();
+}
+
+Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase phase)
+{
+    auto stmt = db.prepare(QStringLiteral("INSERT INTO assignment (uuid, article_id, coder_id, "
+                                          "phase, created_at) VALUES (?1, ?2, ?3, ?4, ?5)"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, newUuid())
+        .bind(2, article.value)
+        .bind(3, coder.value)
+        .bind(4, phaseKey(phase))
+        .bind(5, now());
+    if (auto st = stmt->run(); !st) {
+        Error e = st.error();
+        if (e.code == ErrorCode::Constraint)
+            e.message = QCoreApplication::translate("ProjectTables",
+                "The article is already assigned to this coder in this phase, or one of them does "
+                "not exist.");
+        return std::unexpected(e);
+    }
+    return {};
+}
+
+Result<ProjectTally> projectTally(const Database &db)
+{
+    ProjectTally t;
+    struct Count {
+        qint64 *target;
+        const char *sql;
+    };
+    const Count counts[] = {
+        {&t.articles, "SELECT count(*) FROM article WHERE deleted = 0"},
+        {&t.codePoints, "SELECT coalesce(sum(length), 0) FROM article WHERE deleted = 0"},
+        {&t.paragraphs,
+            "SELECT count(*) FROM paragraph p JOIN article a ON a.id = p.article_id WHERE "
+            "a.deleted = 0"},
+        {&t.sentences,
+            "SELECT coalesce(sum(u.sentence_count), 0) FROM article_units u JOIN article a ON a.id "
+            "= u.article_id WHERE a.deleted = 0"},
+        {&t.tokens,
+            "SELECT coalesce(sum(u.token_count), 0) FROM article_units u JOIN article a ON a.id = "
+            "u.article_id WHERE a.deleted = 0"},
+        {&t.coders, "SELECT count(*) FROM coder WHERE deleted = 0"},
+        {&t.assignments, "SELECT count(*) FROM assignment WHERE deleted = 0"},
+        {&t.annotations, "SELECT count(*) FROM annotation WHERE deleted = 0"},
+        {&t.links, "SELECT count(*) FROM annotation_link WHERE deleted = 0"},
+        {&t.judgements, "SELECT count(*) FROM judgement WHERE deleted = 0"},
+        {&t.goldAnnotations, "SELECT count(*) FROM gold_annotation WHERE deleted = 0"},
+        {&t.extractorRuns, "SELECT count(*) FROM extractor_run"},
+        {&t.codebookVersions, "SELECT count(*) FROM codebook_version"},
+        {&t.events, "SELECT count(*) FROM event_log"},
+    };
+    for (const Count &c : counts) {
+        auto v = scalar(db, QString::fromLatin1(c.sql));
+        if (!v)
+            return std::unexpected(v.error());
+        *c.target = *v;
+    }
+
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT c.id, a.function, count(a.id) FROM coder c "
+                       "LEFT JOIN annotation a ON a.coder_id = c.id AND a.deleted = 0 "
+                       "WHERE c.deleted = 0 GROUP BY c.id, a.function ORDER BY c.pseudonym"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    while (true) {
+        auto row = stmt->step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            break;
+        const CoderId coder {stmt->columnInt(0)};
+        if (t.perCoder.empty() || t.perCoder.back().coder != coder)
+            t.perCoder.push_back(CoderTally {coder, 0, {}});
+        if (auto f = functionFromKey(stmt->columnText(1))) {
+            const qint64 n = stmt->columnInt(2);
+            t.perCoder.back().perFunction[size_t(*f)] += n;
+            t.perCoder.back().annotations += n;
+            t.perFunction[size_t(*f)] += n;
+        }
+    }
+    return t;
+}
+
+Result<std::vector<StoredSpan>> allStoredSpans(const Database &db)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT 'annotation', id, article_id, start, end, quote FROM annotation "
+        "UNION ALL SELECT 'gold', id, article_id, start, end, quote FROM gold_annotation "
+        "UNION ALL SELECT 'extracted', id, article_id, start, end, NULL FROM extracted_span"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    std::vector<StoredSpan> out;
+    while (true) {
+        auto row = stmt->step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            break;
+        StoredSpan s;
+        s.layer = stmt->columnText(0);
+        s.rowId = stmt->columnInt(1);
+        s.article = ArticleId {stmt->columnInt(2)};
+        s.range = TextRange {stmt->columnInt(3), stmt->columnInt(4)};
+        if (!stmt->columnIsNull(5))
+            s.quote = stmt->columnText(5);
+        out.push_back(std::move(s));
+    }
+    return out;
+}
+
+Result<std::vector<StoredArticle>> allStoredArticles(const Database &db)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT id, external_id, text, length, sha256 FROM article ORDER BY id"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    std::vector<StoredArticle> out;
+    while (true) {
+        auto row = stmt->step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            break;
+        out.push_back(StoredArticle {ArticleId {stmt->columnInt(0)}, stmt->columnText(1),
+            stmt->columnText(2), stmt->columnInt(3), stmt->columnText(4)});
+    }
+    return out;
+}
+
+Result<QStringList> sqliteChecks(const Database &db)
+{
+    QStringList problems;
+    auto integrity = db.prepare(QStringLiteral("PRAGMA integrity_check"));
+    if (!integrity)
+        return std::unexpected(integrity.error());
+    while (true) {
+        auto row = integrity->step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            break;
+        const QString line = integrity->columnText(0);
+        if (line != QLatin1String("ok"))
+            problems << QStringLiteral("integrity_check: %1").arg(line);
+    }
+    auto fk = db.prepare(QStringLiteral("PRAGMA foreign_key_check"));
+    if (!fk)
+        return std::unexpected(fk.error());
+    while (true) {
+        auto row = fk->step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            break;
+        problems << QStringLiteral("foreign_key_check: row %1 of %2 refers to a missing row of %3")
+                        .arg(fk->columnInt(1))
+                        .arg(fk->columnText(0), fk->columnText(2));
+    }
+    // FTS5's own consistency check raises SQLITE_CORRUPT_VTAB when the index is off.
+    auto fts = db.prepare(
+        QStringLiteral("INSERT INTO article_fts(article_fts, rank) VALUES ('integrity-check', 1)"));
+    if (!fts)
+        return std::unexpected(fts.error());
+    if (auto st = fts->run(); !st)
+        problems << QStringLiteral("full-text index: %1").arg(st.error().cause);
+    return problems;
+}
+
+} // namespace fourfold::store

@@ -1,0 +1,76 @@
+#pragma once
+// Project-wide queries: settings, assignments, counts for `info`, and every stored span for
+// the integrity check.
+
+#include "core/model/annotation.h"
+#include "core/model/error.h"
+#include "core/model/framing_function.h"
+
+#include <QString>
+
+#include <array>
+#include <optional>
+#include <vector>
+
+namespace fourfold {
+class Database;
+namespace store {
+
+Result<std::optional<QString>> setting(const Database &db, const QString &key);
+Status setSetting(Database &db, const QString &key, const QString &value);
+
+// Assigns `article` to `coder` in `phase` (uuid made here). Duplicate if it already is.
+Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase phase);
+
+struct CoderTally {
+    CoderId coder;
+    qint64 annotations = 0;
+    std::array<qint64, 4> perFunction {}; // indexed by FramingFunction
+};
+
+struct ProjectTally {
+    qint64 articles = 0;
+    qint64 paragraphs = 0;
+    qint64 sentences = 0;
+    qint64 tokens = 0;
+    qint64 codePoints = 0;
+    qint64 coders = 0;
+    qint64 assignments = 0;
+    qint64 annotations = 0; // live
+    std::array<qint64, 4> perFunction {};
+    std::vector<CoderTally> perCoder; // every live coder, also those with no annotations
+    qint64 links = 0;
+    qint64 judgements = 0;
+    qint64 goldAnnotations = 0;
+    qint64 extractorRuns = 0;
+    qint64 codebookVersions = 0;
+    qint64 events = 0;
+};
+Result<ProjectTally> projectTally(const Database &db);
+
+// One stored span of any layer, for checking.
+struct StoredSpan {
+    QString layer; // "annotation", "gold", "extracted"
+    qint64 rowId = 0;
+    ArticleId article;
+    TextRange range;
+    std::optional<QString> quote; // extracted spans store no quote
+};
+Result<std::vector<StoredSpan>> allStoredSpans(const Database &db);
+
+// The raw fields of every article row that the integrity check recomputes.
+struct StoredArticle {
+    ArticleId id;
+    QString externalId;
+    QString text;
+    qint64 length = 0;
+    QString sha256;
+};
+Result<std::vector<StoredArticle>> allStoredArticles(const Database &db);
+
+// SQLite's own checks: PRAGMA integrity_check, PRAGMA foreign_key_check and the FTS5
+// index check. Returns the problems found (empty when all is well).
+Result<QStringList> sqliteChecks(const Database &db);
+
+} // namespace store
+} // namespace fourfold

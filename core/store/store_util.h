@@ -1,0 +1,40 @@
+#pragma once
+// Small helpers shared by the table code of core/store.
+
+#include "core/model/error.h"
+#include "core/store/database.h"
+#include "core/store/statement.h"
+
+#include <QDateTime>
+#include <QJsonDocument>
+#include <QJsonObject>
+#include <QUuid>
+
+namespace fourfold::store {
+
+inline QString newUuid()
+{
+    return QUuid::createUuid().toString(QUuid::WithoutBraces);
+}
+
+// Now, as stored: ISO 8601 UTC with milliseconds.
+inline QString now()
+{
+    return QDateTime::currentDateTimeUtc().toString(Qt::ISODateWithMs);
+}
+
+inline QString toJsonText(const QJsonObject &o)
+{
+    return QString::fromUtf8(QJsonDocument(o).toJson(QJsonDocument::Compact));
+}
+
+inline QJsonObject fromJsonText(const QString &text)
+{
+    return QJsonDocument::fromJson(text.toUtf8()).object();
+}
+
+// Runs `sql` with no bindings and returns the first column of the first row as an integer
+// (0 when there is no row).
+Result<qint64> scalar(const Database &db, const QString &sql);
+
+} // namespace fourfold::store
