@@ -1,0 +1,275 @@
+#include "core/project/annotation_edits.h"
+
+#include "core/store/annotation_table.h"
+#include "core/store/article_table.h"
+#include "core/store/codebook_table.h"
+#include "core/store/store_util.h"
+#include "core/text/offset_map.h"
+
+#include <QCoreApplication>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("AnnotationEdits", text);
+}
+
+// The quote at `range` of the article, after checking that the range lies inside its text.
+Result<QString> quoteAt(const Database &db, ArticleId article, const TextRange &range)
+{
+    auto text = store::articleText(db, article);
+    if (!text)
+        return std::unexpected(text.error());
+    const OffsetMap map(*text);
+    if (!range.isValid() || range.isEmpty() || range.end > map.codePointCount())
+        return fail(ErrorCode::InvalidArgument,
+            tr("The span [%1, %2) does not lie inside the article's text of %3 characters.")
+                .arg(range.start)
+                .arg(range.end)
+                .arg(map.codePointCount()));
+    return OffsetMap::slice(*text, range);
+}
+
+Status checkContent(const Database &db, ArticleId article, const AnnotationContent &content,
+    QString *quote, CodebookVersionId *version)
+{
+    auto q = quoteAt(db, article, content.range);
+    if (!q)
+        return std::unexpected(q.error());
+    auto book = store::currentCodebook(db);
+    if (!book)
+        return std::unexpected(book.error());
+    FOURFOLD_TRY_STATUS(book->validateAttributes(content.function, content.attributes));
+    if (content.confidence && (*content.confidence < 0.0 || *content.confidence > 1.0))
+        return fail(ErrorCode::InvalidArgument, tr("A confidence must lie between 0 and 1."));
+    *quote = *q;
+    *version = book->versionId;
+    return {};
+}
+
+Result<Annotation> liveAnnotation(const Database &db, AnnotationId id)
+{
+    auto row = store::annotation(db, id);
+    if (!row)
+        return std::unexpected(row.error());
+    if (row->deleted)
+        return fail(ErrorCode::NotFound, tr("Annotation #%1 has been deleted.").arg(id.value));
+    return row;
+}
+
+} // namespace
+
+AddAnnotationEdit::AddAnnotationEdit(
+    ArticleId article, CoderId coder, AnnotationContent content, Phase phase)
+    : Edit(coder)
+{
+    m_row.uuid = store::newUuid();
+    m_row.article = article;
+    m_row.coder = coder;
+    m_row.content = std::move(content);
+    m_row.phase = phase;
+    m_row.createdAt = store::now();
+    m_row.modifiedAt = m_row.createdAt;
+}
+
+QString AddAnnotationEdit::text() const
+{
+    return tr("Add %1 span").arg(functionKey(m_row.content.function));
+}
+
+Status AddAnnotationEdit::apply(Database &db)
+{
+    Annotation row = m_row;
+    FOURFOLD_TRY_STATUS(
+        checkContent(db, row.article, row.content, &row.quote, &row.codebookVersion));
+    auto id = store::insertAnnotation(db, row);
+    if (!id) {
+        Error e = id.error();
+        if (e.code == ErrorCode::Constraint)
+            e.message = tr("The span could not be added: its article or coder does not exist.");
+        return std::unexpected(e);
+    }
+    row.id = *id;
+    m_row = row;
+    return {};
+}
+
+Status AddAnnotationEdit::revert(Database &db)
+{
+    return store::removeAnnotationRow(db, m_row.id);
+}
+
+ChangeAnnotationEdit::ChangeAnnotationEdit(
+    AnnotationId id, AnnotationContent content, CoderId actor)
+    : Edit(actor)
+    , m_id(id)
+    , m_content(std::move(content))
+{ }
+
+QString ChangeAnnotationEdit::text() const
+{
+    return tr("Change %1 span").arg(functionKey(m_content.function));
+}
+
+Status ChangeAnnotationEdit::apply(Database &db)
+{
+    auto before = liveAnnotation(db, m_id);
+    if (!before)
+        return std::unexpected(before.error());
+    Annotation after = *before;
+    after.content = m_content;
+    FOURFOLD_TRY_STATUS(
+        checkContent(db, after.article, after.content, &after.quote, &after.codebookVersion));
+    after.modifiedAt = store::now();
+    FOURFOLD_TRY_STATUS(store::updateAnnotation(db, after));
+    m_before = *before;
+    return {};
+}
+
+Status ChangeAnnotationEdit::revert(Database &db)
+{
+    if (!m_before)
+        return fail(ErrorCode::Internal, tr("An edit that was never applied cannot be undone."));
+    return store::updateAnnotation(db, *m_before);
+}
+
+DeleteAnnotationEdit::DeleteAnnotationEdit(AnnotationId id, CoderId actor)
+    : Edit(actor)
+    , m_id(id)
+{ }
+
+QString DeleteAnnotationEdit::text() const
+{
+    return m_before ? tr("Delete %1 span").arg(functionKey(m_before->content.function))
+                    : tr("Delete span");
+}
+
+Status DeleteAnnotationEdit::apply(Database &db)
+{
+    auto before = liveAnnotation(db, m_id);
+    if (!before)
+        return std::unexpected(before.error());
+    Annotation after = *before;
+    after.deleted = true;
+    after.modifiedAt = store::now();
+    FOURFOLD_TRY_STATUS(store::updateAnnotation(db, after));
+    m_before = *before;
+    return {};
+}
+
+Status DeleteAnnotationEdit::revert(Database &db)
+{
+    if (!m_before)
+        return fail(ErrorCode::Internal, tr("An edit that was never applied cannot be undone."));
+    return store::updateAnnotation(db, *m_before);
+}
+
+LinkAnnotationsEdit::LinkAnnotationsEdit(
+    AnnotationId source, AnnotationId target, QString type, CoderId actor)
+    : Edit(actor)
+{
+    m_row.uuid = store::newUuid();
+    m_row.source = source;
+    m_row.target = target;
+    m_row.type = std::move(type);
+    m_row.createdAt = store::now();
+}
+
+QString LinkAnnotationsEdit::text() const
+{
+    return tr("Link spans (%1)").arg(m_row.type);
+}
+
+Status LinkAnnotationsEdit::apply(Database &db)
+{
+    if (m_row.source == m_row.target)
+        return fail(ErrorCode::InvalidArgument, tr("A span cannot be linked to itself."));
+    if (m_row.type.trimmed().isEmpty())
+        return fail(ErrorCode::InvalidArgument, tr("A link needs a type."));
+    auto source = liveAnnotation(db, m_row.source);
+    if (!source)
+        return std::unexpected(source.error());
+    auto target = liveAnnotation(db, m_row.target);
+    if (!target)
+        return std::unexpected(target.error());
+    if (source->article != target->article)
+        return fail(
+            ErrorCode::InvalidArgument, tr("Only spans of the same article can be linked."));
+    auto id = store::insertLink(db, m_row);
+    if (!id)
+        return std::unexpected(id.error());
+    m_row.id = *id;
+    return {};
+}
+
+Status LinkAnnotationsEdit::revert(Database &db)
+{
+    return store::removeLinkRow(db, m_row.id);
+}
+
+SetJudgementEdit::SetJudgementEdit(
+    ArticleId article, CoderId coder, QString itemKey, QString value, Phase phase)
+    : Edit(coder)
+{
+    m_after.uuid = store::newUuid();
+    m_after.article = article;
+    m_after.coder = coder;
+    m_after.itemKey = std::move(itemKey);
+    m_after.value = std::move(value);
+    m_after.phase = phase;
+    m_after.createdAt = store::now();
+    m_after.modifiedAt = m_after.createdAt;
+}
+
+QString SetJudgementEdit::text() const
+{
+    return tr("Answer \"%1\"").arg(m_after.itemKey);
+}
+
+Status SetJudgementEdit::apply(Database &db)
+{
+    auto book = store::currentCodebook(db);
+    if (!book)
+        return std::unexpected(book.error());
+    FOURFOLD_TRY_STATUS(book->validateJudgement(m_after.itemKey, m_after.value));
+    auto existing =
+        store::judgement(db, m_after.article, m_after.coder, m_after.itemKey, m_after.phase);
+    if (!existing)
+        return std::unexpected(existing.error());
+    Judgement after = m_after;
+    after.codebookVersion = book->versionId;
+    if (*existing) {
+        const Judgement before = **existing;
+        after.id = before.id;
+        after.uuid = before.uuid;
+        after.createdAt = before.createdAt;
+        after.modifiedAt = store::now();
+        FOURFOLD_TRY_STATUS(store::updateJudgement(db, after));
+        m_before = before;
+    } else {
+        auto id = store::insertJudgement(db, after);
+        if (!id) {
+            Error e = id.error();
+            if (e.code == ErrorCode::Constraint)
+                e.message =
+                    tr("The answer could not be stored: its article or coder does not exist.");
+            return std::unexpected(e);
+        }
+        after.id = *id;
+        m_before.reset();
+    }
+    m_after = after;
+    return {};
+}
+
+Status SetJudgementEdit::revert(Database &db)
+{
+    if (m_before)
+        return store::updateJudgement(db, *m_before);
+    return store::removeJudgementRow(db, m_after.id);
+}
+
+} // namespace fourfold

@@ -1,0 +1,161 @@
+#include "core/project/coding_import.h"
+
+#include "core/project/annotation_edits.h"
+#include "core/project/project.h"
+#include "core/text/canonical_text.h"
+#include "core/text/offset_map.h"
+
+#include <QCoreApplication>
+#include <QFile>
+#include <QHash>
+#include <QJsonDocument>
+#include <QJsonObject>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("CodingImport", text);
+}
+
+Result<QString> requiredString(
+    const QJsonObject &o, const char *key, const QString &file, qint64 line)
+{
+    const QJsonValue v = o.value(QLatin1String(key));
+    if (v.isUndefined())
+        return failAt(ErrorCode::InvalidInput, file, line, 0,
+            tr("missing required field \"%1\".").arg(QLatin1String(key)));
+    if (!v.isString() || v.toString().isEmpty())
+        return failAt(ErrorCode::InvalidInput, file, line, 0,
+            tr("field \"%1\" must be a non-empty string.").arg(QLatin1String(key)));
+    return v.toString();
+}
+
+} // namespace
+
+Result<CodingImportReport> importQuotedCodings(Project &project, const QString &path, Phase phase)
+{
+    QFile file(path);
+    if (!file.open(QIODevice::ReadOnly))
+        return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));
+    auto decoded = decodeUtf8Strict(file.readAll(), path);
+    if (!decoded)
+        return std::unexpected(decoded.error());
+
+    auto coders = project.coders();
+    if (!coders)
+        return std::unexpected(coders.error());
+    QHash<QString, CoderId> coderIds;
+    for (const Coder &c : *coders)
+        coderIds.insert(c.pseudonym, c.id);
+
+    struct Known {
+        ArticleId id;
+        QString text;
+    };
+    QHash<QString, Known> articles;
+    CodingImportReport report;
+
+    auto work = [&]() -> Status {
+        const QStringList lines = decoded->split(QLatin1Char('\n'));
+        for (qsizetype i = 0; i < lines.size(); ++i) {
+            const qint64 lineNo = i + 1;
+            if (lines[i].trimmed().isEmpty())
+                continue;
+            QJsonParseError error;
+            const QJsonDocument doc = QJsonDocument::fromJson(lines[i].toUtf8(), &error);
+            if (error.error != QJsonParseError::NoError || !doc.isObject())
+                return failAt(ErrorCode::InvalidInput, path, lineNo,
+                    error.error != QJsonParseError::NoError ? error.offset + 1 : 0,
+                    tr("not a JSON object (%1).")
+                        .arg(error.error != QJsonParseError::NoError ? error.errorString()
+                                                                     : tr("another JSON value")));
+            const QJsonObject o = doc.object();
+            auto articleKey = requiredString(o, "article", path, lineNo);
+            if (!articleKey)
+                return std::unexpected(articleKey.error());
+            auto coderKey = requiredString(o, "coder", path, lineNo);
+            if (!coderKey)
+                return std::unexpected(coderKey.error());
+            if (!coderIds.contains(*coderKey))
+                return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                    tr("unknown coder \"%1\".").arg(*coderKey));
+            if (!articles.contains(*articleKey)) {
+                auto id = project.articleByExternalId(*articleKey);
+                if (!id)
+                    return std::unexpected(id.error());
+                if (!*id)
+                    return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                        tr("unknown article \"%1\".").arg(*articleKey));
+                auto article = project.article(**id);
+                if (!article)
+                    return std::unexpected(article.error());
+                articles.insert(*articleKey, Known {**id, article->text});
+            }
+            const Known &article = articles[*articleKey];
+            const CoderId coder = coderIds.value(*coderKey);
+
+            if (o.contains(QLatin1String("item"))) {
+                auto item = requiredString(o, "item", path, lineNo);
+                if (!item)
+                    return std::unexpected(item.error());
+                auto value = requiredString(o, "value", path, lineNo);
+                if (!value)
+                    return std::unexpected(value.error());
+                SetJudgementEdit edit(article.id, coder, *item, *value, phase);
+                if (auto st = project.apply(edit); !st)
+                    return failAt(st.error().code, path, lineNo, 0, st.error().message);
+                ++report.judgements;
+                continue;
+            }
+
+            auto functionName = requiredString(o, "function", path, lineNo);
+            if (!functionName)
+                return std::unexpected(functionName.error());
+            const auto function = functionFromKey(*functionName);
+            if (!function)
+                return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                    tr("unknown function \"%1\" (expected problem, cause, evaluation or remedy).")
+                        .arg(*functionName));
+            auto quoteRaw = requiredString(o, "quote", path, lineNo);
+            if (!quoteRaw)
+                return std::unexpected(quoteRaw.error());
+            const QString quote = canonicalText(*quoteRaw);
+            const QJsonValue occurrenceValue = o.value(QLatin1String("occurrence"));
+            if (!occurrenceValue.isUndefined()
+                && (!occurrenceValue.isDouble() || occurrenceValue.toInt() < 1))
+                return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                    tr("field \"occurrence\" must be a whole number from 1."));
+            const int occurrence = occurrenceValue.isUndefined() ? 1 : occurrenceValue.toInt();
+            qsizetype at = -1;
+            for (int n = 0; n < occurrence; ++n) {
+                at = article.text.indexOf(quote, at + 1);
+                if (at < 0)
+                    return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                        tr("the quote \"%1\" does not occur %2 time(s) in article \"%3\".")
+                            .arg(quote.left(60))
+                            .arg(occurrence)
+                            .arg(*articleKey));
+            }
+            const OffsetMap map(article.text);
+            AnnotationContent content;
+            content.function = *function;
+            content.range = map.codePointRangeFromUtf16(at, at + quote.size());
+            content.attributes = o.value(QLatin1String("attributes")).toObject();
+            content.note = o.value(QLatin1String("note")).toString();
+            if (o.value(QLatin1String("confidence")).isDouble())
+                content.confidence = o.value(QLatin1String("confidence")).toDouble();
+            AddAnnotationEdit edit(article.id, coder, content, phase);
+            if (auto st = project.apply(edit); !st)
+                return failAt(st.error().code, path, lineNo, 0, st.error().message);
+            ++report.spans;
+        }
+        return {};
+    };
+    FOURFOLD_TRY_STATUS(project.batch(work));
+    return report;
+}
+
+} // namespace fourfold

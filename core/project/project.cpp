@@ -1,0 +1,281 @@
+#include "core/project/project.h"
+
+#include "core/project/edit.h"
+#include "core/store/annotation_table.h"
+#include "core/store/article_table.h"
+#include "core/store/codebook_table.h"
+#include "core/store/coder_table.h"
+#include "core/store/event_log.h"
+#include "core/store/project_tables.h"
+#include "core/store/savepoint.h"
+#include "core/store/schema.h"
+#include "core/store/store_util.h"
+
+#include <QCoreApplication>
+#include <QFile>
+#include <QFileInfo>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("Project", text);
+}
+
+const QString kNameKey = QStringLiteral("name");
+const QString kLanguageKey = QStringLiteral("default_language");
+const QString kUuidKey = QStringLiteral("project_uuid");
+
+Result<Codebook> defaultCodebook()
+{
+    QFile file(QStringLiteral(":/fourfold/codebook/default_codebook.json"));
+    if (!file.open(QIODevice::ReadOnly))
+        return fail(ErrorCode::Internal, tr("The default codebook is missing from this build."));
+    return Codebook::fromJson(file.readAll(), file.fileName());
+}
+
+void removeProjectFiles(const QString &path)
+{
+    for (const char *suffix : {"", "-wal", "-shm"})
+        QFile::remove(path + QLatin1String(suffix));
+}
+
+} // namespace
+
+Result<Project> Project::create(const QString &path, const Settings &settings)
+{
+    if (QFileInfo::exists(path))
+        return fail(ErrorCode::Duplicate,
+            tr("%1 already exists; choose another name or open it.").arg(path));
+    auto book = defaultCodebook();
+    if (!book)
+        return std::unexpected(book.error());
+    auto db = Database::open(path, Database::OpenMode::ReadWriteCreate);
+    if (!db)
+        return std::unexpected(db.error());
+    Project project(std::move(*db));
+    auto build = [&]() -> Status {
+        FOURFOLD_TRY_STATUS(prepareSchema(project.m_db));
+        FOURFOLD_TRY_STATUS(project.m_db.exec(QStringLiteral("BEGIN IMMEDIATE")));
+        auto body = [&]() -> Status {
+            FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kNameKey,
+                settings.name.isEmpty() ? QFileInfo(path).completeBaseName() : settings.name));
+            FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kLanguageKey,
+                settings.defaultLanguage.isEmpty() ? QStringLiteral("en")
+                                                   : settings.defaultLanguage));
+            FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kUuidKey, store::newUuid()));
+            auto version =
+                store::insertCodebookVersion(project.m_db, *book, tr("Default codebook"));
+            if (!version)
+                return std::unexpected(version.error());
+            return store::appendEvent(project.m_db, CoderId {}, QStringLiteral("project.create"),
+                QStringLiteral("project"), QString());
+        };
+        if (auto st = body(); !st) {
+            (void)project.m_db.exec(QStringLiteral("ROLLBACK"));
+            return st;
+        }
+        return project.m_db.exec(QStringLiteral("COMMIT"));
+    };
+    if (auto st = build(); !st) {
+        project.m_db = Database();
+        removeProjectFiles(path);
+        return std::unexpected(st.error());
+    }
+    FOURFOLD_TRY_STATUS(project.loadSettings());
+    return project;
+}
+
+Result<Project> Project::open(const QString &path)
+{
+    if (!QFileInfo::exists(path))
+        return fail(ErrorCode::NotFound, tr("There is no project file %1.").arg(path));
+    auto db = Database::open(path, Database::OpenMode::ReadWrite);
+    if (!db)
+        return std::unexpected(db.error());
+    Project project(std::move(*db));
+    FOURFOLD_TRY_STATUS(prepareSchema(project.m_db, &project.m_backupPath));
+    FOURFOLD_TRY_STATUS(project.loadSettings());
+    return project;
+}
+
+Status Project::loadSettings()
+{
+    auto name = store::setting(m_db, kNameKey);
+    if (!name)
+        return std::unexpected(name.error());
+    auto language = store::setting(m_db, kLanguageKey);
+    if (!language)
+        return std::unexpected(language.error());
+    m_settings.name = name->value_or(QFileInfo(m_db.path()).completeBaseName());
+    m_settings.defaultLanguage = language->value_or(QStringLiteral("en"));
+    return {};
+}
+
+Result<std::vector<ArticleSummary>> Project::articles() const
+{
+    return store::articleSummaries(m_db);
+}
+
+Result<Article> Project::article(ArticleId id) const
+{
+    return store::article(m_db, id);
+}
+
+Result<std::optional<ArticleId>> Project::articleByExternalId(const QString &externalId) const
+{
+    return store::articleIdByExternalId(m_db, externalId);
+}
+
+Result<std::vector<ArticleId>> Project::searchArticles(const QString &query) const
+{
+    return store::searchArticles(m_db, query);
+}
+
+Result<CoderId> Project::addCoder(const QString &name, const QString &pseudonym, CoderRole role)
+{
+    if (name.trimmed().isEmpty() || pseudonym.trimmed().isEmpty())
+        return fail(ErrorCode::InvalidArgument, tr("A coder needs a name and a pseudonym."));
+    auto sp = Savepoint::begin(m_db);
+    if (!sp)
+        return std::unexpected(sp.error());
+    Coder coder;
+    coder.uuid = store::newUuid();
+    coder.name = name.trimmed();
+    coder.pseudonym = pseudonym.trimmed();
+    coder.role = role;
+    auto id = store::insertCoder(m_db, coder);
+    if (!id)
+        return std::unexpected(id.error());
+    FOURFOLD_TRY_STATUS(
+        store::appendEvent(m_db, CoderId {}, QStringLiteral("coder.add"), QStringLiteral("coder"),
+            coder.uuid, QJsonObject {{QStringLiteral("pseudonym"), coder.pseudonym}}));
+    FOURFOLD_TRY_STATUS(sp->commit());
+    return id;
+}
+
+Result<std::vector<Coder>> Project::coders() const
+{
+    return store::coders(m_db);
+}
+
+Result<std::optional<Coder>> Project::coderByPseudonym(const QString &pseudonym) const
+{
+    auto all = store::coders(m_db);
+    if (!all)
+        return std::unexpected(all.error());
+    for (const Coder &c : *all)
+        if (c.pseudonym == pseudonym)
+            return std::optional<Coder> {c};
+    return std::optional<Coder> {};
+}
+
+Result<Codebook> Project::codebook() const
+{
+    return store::currentCodebook(m_db);
+}
+
+Status Project::assign(ArticleId article, CoderId coder, Phase phase)
+{
+    auto sp = Savepoint::begin(m_db);
+    if (!sp)
+        return std::unexpected(sp.error());
+    FOURFOLD_TRY_STATUS(store::insertAssignment(m_db, article, coder, phase));
+    FOURFOLD_TRY_STATUS(store::appendEvent(m_db, CoderId {}, QStringLiteral("assignment.add"),
+        QStringLiteral("assignment"), QString(),
+        QJsonObject {{QStringLiteral("article"), article.value},
+            {QStringLiteral("coder"), coder.value}, {QStringLiteral("phase"), phaseKey(phase)}}));
+    return sp->commit();
+}
+
+Result<std::vector<Annotation>> Project::annotations(
+    ArticleId article, std::optional<CoderId> coder) const
+{
+    return store::annotations(m_db, article, coder);
+}
+
+Result<Annotation> Project::annotation(AnnotationId id) const
+{
+    return store::annotation(m_db, id);
+}
+
+Result<std::vector<AnnotationLink>> Project::links(ArticleId article) const
+{
+    return store::links(m_db, article);
+}
+
+Result<std::vector<Judgement>> Project::judgements(ArticleId article) const
+{
+    return store::judgements(m_db, article);
+}
+
+Status Project::apply(Edit &edit)
+{
+    auto sp = Savepoint::begin(m_db);
+    if (!sp)
+        return std::unexpected(sp.error());
+    FOURFOLD_TRY_STATUS(edit.apply(m_db));
+    FOURFOLD_TRY_STATUS(store::appendEvent(
+        m_db, edit.actor(), edit.action(), edit.objectType(), edit.objectUuid()));
+    return sp->commit();
+}
+
+Status Project::revert(Edit &edit)
+{
+    auto sp = Savepoint::begin(m_db);
+    if (!sp)
+        return std::unexpected(sp.error());
+    FOURFOLD_TRY_STATUS(edit.revert(m_db));
+    FOURFOLD_TRY_STATUS(store::appendEvent(m_db, edit.actor(),
+        QStringLiteral("undo:") + edit.action(), edit.objectType(), edit.objectUuid()));
+    return sp->commit();
+}
+
+Status Project::batch(const std::function<Status()> &work)
+{
+    auto sp = Savepoint::begin(m_db);
+    if (!sp)
+        return std::unexpected(sp.error());
+    FOURFOLD_TRY_STATUS(work());
+    return sp->commit();
+}
+
+Result<ProjectCounts> Project::counts() const
+{
+    auto tally = store::projectTally(m_db);
+    if (!tally)
+        return std::unexpected(tally.error());
+    auto allCoders = store::coders(m_db);
+    if (!allCoders)
+        return std::unexpected(allCoders.error());
+    auto book = store::currentCodebook(m_db);
+    if (!book)
+        return std::unexpected(book.error());
+    ProjectCounts c;
+    c.articles = tally->articles;
+    c.paragraphs = tally->paragraphs;
+    c.sentences = tally->sentences;
+    c.tokens = tally->tokens;
+    c.codePoints = tally->codePoints;
+    c.coders = tally->coders;
+    c.assignments = tally->assignments;
+    c.annotations = tally->annotations;
+    c.perFunction = tally->perFunction;
+    c.links = tally->links;
+    c.judgements = tally->judgements;
+    c.goldAnnotations = tally->goldAnnotations;
+    c.extractorRuns = tally->extractorRuns;
+    c.codebookVersion = book->number;
+    c.events = tally->events;
+    for (const store::CoderTally &t : tally->perCoder) {
+        auto coder = std::find_if(
+            allCoders->begin(), allCoders->end(), [&](const Coder &x) { return x.id == t.coder; });
+        if (coder != allCoders->end())
+            c.perCoder.push_back(CoderCounts {*coder, t.annotations, t.perFunction});
+    }
+    return c;
+}
+
+} // namespace fourfold

@@ -1,0 +1,114 @@
+#pragma once
+// Project: the one facade both front ends use (design.md §2). A project is one SQLite file;
+// every change is committed at once through an Edit or an import, so there is no Save.
+
+#include "core/io/article_reader.h"
+#include "core/model/annotation.h"
+#include "core/model/article.h"
+#include "core/model/codebook.h"
+#include "core/model/coder.h"
+#include "core/model/error.h"
+#include "core/project/import_report.h"
+#include "core/project/integrity_report.h"
+#include "core/project/project_counts.h"
+#include "core/store/database.h"
+
+#include <QString>
+
+#include <functional>
+#include <optional>
+#include <vector>
+
+namespace fourfold {
+
+class Edit;
+
+class Project
+{
+public:
+    struct Settings {
+        QString name; // shown in window titles and reports
+        QString defaultLanguage = QStringLiteral("en"); // BCP 47, for articles naming none
+    };
+
+    // Creates a new project file at `path` with the default codebook. Fails with Duplicate if
+    // the file exists, Io if it cannot be written; a failed creation leaves no file behind.
+    static Result<Project> create(const QString &path, const Settings &settings);
+    static Result<Project> create(const QString &path) { return create(path, Settings {}); }
+    // Opens an existing project file. NotFound if there is none; Corrupt if it is not a
+    // Fourfold project; NewerSchema if a newer Fourfold wrote it (the file is not touched); an
+    // older file is backed up (see backupPath()) and upgraded.
+    static Result<Project> open(const QString &path);
+
+    Project(Project &&) noexcept = default;
+    Project &operator=(Project &&) noexcept = default;
+
+    QString path() const { return m_db.path(); }
+    // Where the pre-upgrade copy went if open() upgraded the file; empty otherwise.
+    QString backupPath() const { return m_backupPath; }
+    Settings settings() const { return m_settings; }
+
+    // --- articles -------------------------------------------------------------------------
+    using ImportProgress = std::function<bool(qsizetype done, qsizetype total)>;
+    // Reads `path` (see readArticles) and adds its articles in one transaction: texts are made
+    // canonical, hashed and segmented. Articles whose text is already in the project (same
+    // SHA-256) are skipped and listed in the report. All-or-nothing: on any error (including an
+    // external id that is already in the project with another text) nothing is added.
+    // `progress`, if given, is called after each article; returning false cancels (Cancelled).
+    Result<ImportReport> importFile(
+        const QString &path, const ImportOptions &options, const ImportProgress &progress = {});
+    // The same for articles already read; `sourceName` names them in messages.
+    Result<ImportReport> importArticles(const std::vector<ImportedArticle> &articles,
+        const QString &sourceName, const ImportProgress &progress = {});
+
+    Result<std::vector<ArticleSummary>> articles() const;
+    Result<Article> article(ArticleId id) const;
+    Result<std::optional<ArticleId>> articleByExternalId(const QString &externalId) const;
+    // Full-text search over titles and texts (SQLite FTS5 syntax), best match first.
+    Result<std::vector<ArticleId>> searchArticles(const QString &query) const;
+
+    // --- coders and codebook --------------------------------------------------------------
+    // Adds a coder; Duplicate if the pseudonym is taken, InvalidArgument if name or pseudonym
+    // is empty.
+    Result<CoderId> addCoder(const QString &name, const QString &pseudonym, CoderRole role);
+    Result<std::vector<Coder>> coders() const;
+    Result<std::optional<Coder>> coderByPseudonym(const QString &pseudonym) const;
+    // The current codebook version.
+    Result<Codebook> codebook() const;
+    Status assign(ArticleId article, CoderId coder, Phase phase);
+
+    // --- annotations ----------------------------------------------------------------------
+    Result<std::vector<Annotation>> annotations(
+        ArticleId article, std::optional<CoderId> coder = std::nullopt) const;
+    Result<Annotation> annotation(AnnotationId id) const;
+    Result<std::vector<AnnotationLink>> links(ArticleId article) const;
+    Result<std::vector<Judgement>> judgements(ArticleId article) const;
+
+    // Applies `edit` in one savepoint and logs it: committed at once or not at all.
+    Status apply(Edit &edit);
+    // Reverts an applied `edit` the same way (logged as an undo).
+    Status revert(Edit &edit);
+    // Runs `work` (which may apply many edits) as one unit: if it fails, everything it wrote is
+    // rolled back and its error returned.
+    Status batch(const std::function<Status()> &work);
+
+    // --- overview -------------------------------------------------------------------------
+    Result<ProjectCounts> counts() const;
+    // Checks the file (see IntegrityReport). Fails only if the checks themselves cannot run.
+    Result<IntegrityReport> check() const;
+
+    // For tests: the underlying connection (fault injection, dumps). Not for front ends.
+    Database &databaseForTesting() { return m_db; }
+
+private:
+    explicit Project(Database db)
+        : m_db(std::move(db))
+    { }
+    Status loadSettings();
+
+    Database m_db;
+    Settings m_settings;
+    QString m_backupPath;
+};
+
+} // namespace fourfold

@@ -1,0 +1,128 @@
+// Project::importFile / importArticles: canonical text, hashing, segmentation and storage of
+// new articles, one transaction per source.
+#include "core/model/paragraph_role.h"
+#include "core/project/project.h"
+#include "core/store/article_table.h"
+#include "core/store/event_log.h"
+#include "core/store/savepoint.h"
+#include "core/store/store_util.h"
+#include "core/text/canonical_text.h"
+#include "core/text/offset_map.h"
+#include "core/text/segmenter.h"
+
+#include <QCoreApplication>
+#include <QHash>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("ProjectImport", text);
+}
+
+// Makes one stored article from an imported record, or an error naming its source line.
+Result<Article> prepareArticle(
+    const ImportedArticle &in, const QString &sourceName, const QString &defaultLanguage)
+{
+    const QString file = in.sourceFile.isEmpty() ? sourceName : in.sourceFile;
+    Article a;
+    a.text = canonicalText(in.text);
+    if (a.text.trimmed().isEmpty())
+        return failAt(ErrorCode::InvalidInput, file, in.sourceLine, 0,
+            tr("the article \"%1\" has no text.").arg(in.externalId));
+    a.summary.uuid = store::newUuid();
+    a.summary.externalId = in.externalId;
+    a.summary.title = canonicalText(in.title).simplified();
+    a.summary.outlet = canonicalText(in.outlet).simplified();
+    a.summary.published = in.published.trimmed();
+    a.summary.language = in.language.trimmed().isEmpty() ? defaultLanguage : in.language.trimmed();
+    a.summary.length = OffsetMap(a.text).codePointCount();
+    a.summary.sha256 = textSha256(a.text);
+    a.metadata = in.meta;
+    a.source = file;
+
+    auto units = segmentText(a.text, a.summary.language);
+    if (!units)
+        return failAt(units.error().code, file, in.sourceLine, 0,
+            tr("the article \"%1\" cannot be segmented: %2")
+                .arg(in.externalId, units.error().message));
+    const qsizetype n = qsizetype(units->paragraphs.size());
+    for (qsizetype i = 0; i < n; ++i)
+        a.paragraphs.push_back(
+            Paragraph {units->paragraphs[size_t(i)], defaultParagraphRole(i, n)});
+    a.sentences = std::move(units->sentences);
+    a.tokens = std::move(units->tokens);
+    return a;
+}
+
+} // namespace
+
+Result<ImportReport> Project::importFile(
+    const QString &path, const ImportOptions &options, const ImportProgress &progress)
+{
+    auto records = readArticles(path, options);
+    if (!records)
+        return std::unexpected(records.error());
+    return importArticles(*records, path, progress);
+}
+
+Result<ImportReport> Project::importArticles(const std::vector<ImportedArticle> &records,
+    const QString &sourceName, const ImportProgress &progress)
+{
+    ImportReport report;
+    report.source = sourceName;
+    auto sp = Savepoint::begin(m_db);
+    if (!sp)
+        return std::unexpected(sp.error());
+
+    QHash<QString, QString> shaInThisImport; // sha256 → external id of its first article
+    qsizetype done = 0;
+    for (const ImportedArticle &in : records) {
+        auto prepared = prepareArticle(in, sourceName, m_settings.defaultLanguage);
+        if (!prepared)
+            return std::unexpected(prepared.error());
+        const QString &sha = prepared->summary.sha256;
+
+        auto sameText = store::articleIdBySha256(m_db, sha);
+        if (!sameText)
+            return std::unexpected(sameText.error());
+        if (*sameText || shaInThisImport.contains(sha)) {
+            QString other = shaInThisImport.value(sha);
+            if (other.isEmpty()) {
+                auto existing = store::article(m_db, **sameText);
+                other = existing ? existing->summary.externalId : QString();
+            }
+            report.skipped.push_back(SkippedArticle {in.externalId, in.sourceLine,
+                tr("same text as the article \"%1\" already in the project").arg(other)});
+        } else {
+            auto sameId = store::articleIdByExternalId(m_db, in.externalId);
+            if (!sameId)
+                return std::unexpected(sameId.error());
+            if (*sameId)
+                return failAt(ErrorCode::Duplicate, prepared->source, in.sourceLine, 0,
+                    tr("the id \"%1\" is already used by another article in the project, with a "
+                       "different text.")
+                        .arg(in.externalId));
+            auto id = store::insertArticle(m_db, *prepared);
+            if (!id)
+                return std::unexpected(id.error());
+            shaInThisImport.insert(sha, in.externalId);
+            report.added.push_back(*id);
+        }
+        ++done;
+        if (progress && !progress(done, qsizetype(records.size())))
+            return fail(ErrorCode::Cancelled,
+                tr("The import of %1 was cancelled; nothing was added.").arg(sourceName));
+    }
+    FOURFOLD_TRY_STATUS(store::appendEvent(m_db, CoderId {}, QStringLiteral("articles.import"),
+        QStringLiteral("source"), QString(),
+        QJsonObject {{QStringLiteral("source"), sourceName},
+            {QStringLiteral("added"), qint64(report.added.size())},
+            {QStringLiteral("skipped"), qint64(report.skipped.size())}}));
+    FOURFOLD_TRY_STATUS(sp->commit());
+    return report;
+}
+
+} // namespace fourfold

@@ -1,0 +1,251 @@
+#include "core/project/annotation_edits.h"
+#include "project_fixture.h"
+#include "tests/support/db_dump.h"
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+struct EditFixture : ProjectFixture {
+    ArticleId f1;
+    CoderId c1;
+    EditFixture()
+    {
+        importJsonl(kTwoArticles);
+        f1 = articleId(QStringLiteral("f1"));
+        c1 = addCoder(QStringLiteral("C01"));
+    }
+    QString dump() { return dumpDatabase(project.databaseForTesting()); }
+
+    AnnotationId add(FramingFunction function, TextRange range, QJsonObject attributes = {})
+    {
+        AddAnnotationEdit edit(f1, c1, AnnotationContent {function, range, attributes, {}, {}});
+        REQUIRE(project.apply(edit));
+        return edit.annotationId();
+    }
+};
+
+// "The ferry to Brakwater will stop in May. Dr. Ilse Varn blames the budget.\n\n..."
+constexpr TextRange kFirstSentence {0, 40};
+constexpr TextRange kBlame {41, 73};
+
+} // namespace
+
+TEST_CASE("an added span stores the quote from the text and the codebook version")
+{
+    EditFixture f;
+    const AnnotationId id = f.add(FramingFunction::Cause, kBlame,
+        QJsonObject {{QStringLiteral("actor"), QStringLiteral("budget")}});
+    auto a = f.project.annotation(id);
+    REQUIRE(a);
+    CHECK(a->quote == QStringLiteral("Dr. Ilse Varn blames the budget."));
+    CHECK(a->content.function == FramingFunction::Cause);
+    CHECK(a->coder == f.c1);
+    CHECK(a->codebookVersion.isValid());
+    CHECK(a->uuid.size() == 36);
+}
+
+TEST_CASE("edits apply and revert to an identical database dump")
+{
+    EditFixture f;
+    const AnnotationId existing = f.add(FramingFunction::Problem, kFirstSentence);
+    const AnnotationId other = f.add(FramingFunction::Cause, kBlame);
+    const QString before = f.dump();
+
+    std::unique_ptr<Edit> edit;
+    SECTION("add")
+    {
+        edit = std::make_unique<AddAnnotationEdit>(f.f1, f.c1,
+            AnnotationContent {FramingFunction::Remedy, {75, 107},
+                {{QStringLiteral("explicitness"), QStringLiteral("explicit")}},
+                QStringLiteral("a note"), 0.5});
+    }
+    SECTION("change")
+    {
+        edit = std::make_unique<ChangeAnnotationEdit>(existing,
+            AnnotationContent {FramingFunction::Evaluation, {4, 9},
+                {{QStringLiteral("polarity"), QStringLiteral("neutral")}}, {}, 1.0},
+            f.c1);
+    }
+    SECTION("delete")
+    {
+        edit = std::make_unique<DeleteAnnotationEdit>(existing, f.c1);
+    }
+    SECTION("link")
+    {
+        edit = std::make_unique<LinkAnnotationsEdit>(
+            other, existing, QStringLiteral("explains"), f.c1);
+    }
+    SECTION("answer an article-level item, first time and again")
+    {
+        SetJudgementEdit first(
+            f.f1, f.c1, QStringLiteral("dominant_function"), QStringLiteral("problem"));
+        REQUIRE(f.project.apply(first));
+        edit = std::make_unique<SetJudgementEdit>(
+            f.f1, f.c1, QStringLiteral("dominant_function"), QStringLiteral("cause"));
+        REQUIRE(f.project.apply(*edit));
+        auto j = f.project.judgements(f.f1);
+        REQUIRE(j);
+        REQUIRE(j->size() == 1);
+        CHECK((*j)[0].value == QStringLiteral("cause"));
+        REQUIRE(f.project.revert(*edit));
+        REQUIRE(f.project.revert(first));
+        CHECK(f.dump() == before);
+        return;
+    }
+    REQUIRE(f.project.apply(*edit));
+    const QString applied = f.dump();
+    CHECK(applied != before);
+    REQUIRE(f.project.revert(*edit));
+    CHECK(f.dump() == before);
+    // Redo gives the same state again, with the same uuids (only modification times may move).
+    REQUIRE(f.project.apply(*edit));
+    CHECK(f.dump().count(QLatin1Char('\n')) == applied.count(QLatin1Char('\n')));
+    REQUIRE(f.project.revert(*edit));
+    CHECK(f.dump() == before);
+}
+
+TEST_CASE("a redone add keeps its uuid")
+{
+    EditFixture f;
+    AddAnnotationEdit edit(
+        f.f1, f.c1, AnnotationContent {FramingFunction::Problem, kFirstSentence, {}, {}, {}});
+    REQUIRE(f.project.apply(edit));
+    const QString uuid = f.project.annotation(edit.annotationId())->uuid;
+    REQUIRE(f.project.revert(edit));
+    REQUIRE(f.project.apply(edit));
+    CHECK(f.project.annotation(edit.annotationId())->uuid == uuid);
+}
+
+TEST_CASE("a deleted span is a tombstone, not a lost row")
+{
+    EditFixture f;
+    const AnnotationId id = f.add(FramingFunction::Problem, kFirstSentence);
+    DeleteAnnotationEdit del(id, f.c1);
+    REQUIRE(f.project.apply(del));
+    auto live = f.project.annotations(f.f1);
+    REQUIRE(live);
+    CHECK(live->empty());
+    auto row = f.project.annotation(id);
+    REQUIRE(row);
+    CHECK(row->deleted);
+    // Deleting it again is refused.
+    DeleteAnnotationEdit again(id, f.c1);
+    auto st = f.project.apply(again);
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::NotFound);
+}
+
+TEST_CASE("invalid edits are refused and change nothing")
+{
+    EditFixture f;
+    const AnnotationId a = f.add(FramingFunction::Problem, kFirstSentence);
+    const QString before = f.dump();
+    struct Case {
+        const char *name;
+        std::function<std::unique_ptr<Edit>()> make;
+        ErrorCode code;
+    };
+    const Case cases[] = {
+        {"range past the end",
+            [&] {
+                return std::make_unique<AddAnnotationEdit>(f.f1, f.c1,
+                    AnnotationContent {FramingFunction::Problem, {100, 500}, {}, {}, {}});
+            },
+            ErrorCode::InvalidArgument},
+        {"empty range",
+            [&] {
+                return std::make_unique<AddAnnotationEdit>(
+                    f.f1, f.c1, AnnotationContent {FramingFunction::Problem, {5, 5}, {}, {}, {}});
+            },
+            ErrorCode::InvalidArgument},
+        {"attribute not in the schema",
+            [&] {
+                return std::make_unique<AddAnnotationEdit>(f.f1, f.c1,
+                    AnnotationContent {FramingFunction::Problem, {0, 5},
+                        {{QStringLiteral("polarity"), QStringLiteral("negative")}}, {}, {}});
+            },
+            ErrorCode::InvalidInput},
+        {"value not in the value set",
+            [&] {
+                return std::make_unique<AddAnnotationEdit>(f.f1, f.c1,
+                    AnnotationContent {FramingFunction::Evaluation, {0, 5},
+                        {{QStringLiteral("polarity"), QStringLiteral("furious")}}, {}, {}});
+            },
+            ErrorCode::InvalidInput},
+        {"confidence above 1",
+            [&] {
+                return std::make_unique<AddAnnotationEdit>(
+                    f.f1, f.c1, AnnotationContent {FramingFunction::Problem, {0, 5}, {}, {}, 1.5});
+            },
+            ErrorCode::InvalidArgument},
+        {"unknown coder",
+            [&] {
+                return std::make_unique<AddAnnotationEdit>(f.f1, CoderId {99},
+                    AnnotationContent {FramingFunction::Problem, {0, 5}, {}, {}, {}});
+            },
+            ErrorCode::Constraint},
+        {"unknown article",
+            [&] {
+                return std::make_unique<AddAnnotationEdit>(ArticleId {99}, f.c1,
+                    AnnotationContent {FramingFunction::Problem, {0, 5}, {}, {}, {}});
+            },
+            ErrorCode::NotFound},
+        {"self link",
+            [&] {
+                return std::make_unique<LinkAnnotationsEdit>(a, a, QStringLiteral("judges"), f.c1);
+            },
+            ErrorCode::InvalidArgument},
+        {"change of a missing span",
+            [&] {
+                return std::make_unique<ChangeAnnotationEdit>(AnnotationId {99},
+                    AnnotationContent {FramingFunction::Problem, {0, 5}, {}, {}, {}}, f.c1);
+            },
+            ErrorCode::NotFound},
+        {"unknown item",
+            [&] {
+                return std::make_unique<SetJudgementEdit>(
+                    f.f1, f.c1, QStringLiteral("tone"), QStringLiteral("dark"));
+            },
+            ErrorCode::NotFound},
+    };
+    for (const Case &c : cases) {
+        INFO(c.name);
+        auto edit = c.make();
+        auto st = f.project.apply(*edit);
+        REQUIRE_FALSE(st);
+        CHECK(st.error().code == c.code);
+        CHECK(f.dump() == before);
+    }
+}
+
+TEST_CASE("links between spans of two articles are refused")
+{
+    EditFixture f;
+    const AnnotationId a = f.add(FramingFunction::Problem, kFirstSentence);
+    AddAnnotationEdit inOther(f.articleId(QStringLiteral("f2")), f.c1,
+        AnnotationContent {FramingFunction::Problem, {0, 5}, {}, {}, {}});
+    REQUIRE(f.project.apply(inOther));
+    LinkAnnotationsEdit link(a, inOther.annotationId(), QStringLiteral("judges"), f.c1);
+    auto st = f.project.apply(link);
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::InvalidArgument);
+}
+
+TEST_CASE("every edit and its undo are written to the event log")
+{
+    EditFixture f;
+    auto eventCount = [&] {
+        auto c = f.project.counts();
+        REQUIRE(c);
+        return c->events;
+    };
+    const qint64 before = eventCount();
+    AddAnnotationEdit edit(
+        f.f1, f.c1, AnnotationContent {FramingFunction::Problem, kFirstSentence, {}, {}, {}});
+    REQUIRE(f.project.apply(edit));
+    CHECK(eventCount() == before + 1);
+    REQUIRE(f.project.revert(edit));
+    CHECK(eventCount() == before + 2);
+}

@@ -1,0 +1,88 @@
+#include "core/project/coding_import.h"
+#include "project_fixture.h"
+#include "tests/support/db_dump.h"
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+struct CodingFixture : ProjectFixture {
+    CodingFixture()
+    {
+        importJsonl(kTwoArticles);
+        addCoder(QStringLiteral("C01"));
+    }
+    Result<CodingImportReport> run(const QByteArray &jsonl)
+    {
+        return importQuotedCodings(
+            project, writeFile(dir, QStringLiteral("codings.jsonl"), jsonl), Phase::Reliability);
+    }
+};
+
+} // namespace
+
+TEST_CASE("quote-anchored codings land on the right code points")
+{
+    CodingFixture f;
+    auto r = f.run("{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":"
+                   "\"blames the budget\",\"attributes\":{\"actor\":\"budget\"}}\n"
+                   "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
+                   "\"The\",\"occurrence\":2}\n"
+                   "\n"
+                   "{\"article\":\"f2\",\"coder\":\"C01\",\"item\":\"dominant_function\",\"value\":"
+                   "\"evaluation\"}\n");
+    REQUIRE(r);
+    CHECK(r->spans == 2);
+    CHECK(r->judgements == 1);
+    auto spans = f.project.annotations(f.articleId(QStringLiteral("f1")));
+    REQUIRE(spans);
+    REQUIRE(spans->size() == 2);
+    CHECK((*spans)[0].content.range == TextRange {55, 72});
+    CHECK((*spans)[0].quote == QStringLiteral("blames the budget"));
+    CHECK((*spans)[0].phase == Phase::Reliability);
+    // The second "The" opens the second paragraph at code point 75.
+    CHECK((*spans)[1].content.range == TextRange {75, 78});
+}
+
+TEST_CASE("a bad codings file names the line and changes nothing")
+{
+    CodingFixture f;
+    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    struct Case {
+        QByteArray second;
+        const char *expected;
+    };
+    const Case cases[] = {
+        {"{\"article\":\"f9\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"x\"}",
+            "unknown article"},
+        {"{\"article\":\"f1\",\"coder\":\"C09\",\"function\":\"cause\",\"quote\":\"x\"}",
+            "unknown coder"},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"solution\",\"quote\":\"ferry\"}",
+            "unknown function"},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"zeppelin\"}",
+            "does not occur"},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"ferry\","
+         "\"occurrence\":2}",
+            "does not occur 2"},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\"}",
+            "missing required field \"quote\""},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":7}",
+            "\"quote\" must be a non-empty string"},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"evaluation\",\"quote\":\"ferry\","
+         "\"attributes\":{\"polarity\":\"angry\"}}",
+            "not a value"},
+        {"{\"article\":\"f1\"", "not a JSON object"},
+    };
+    for (const Case &c : cases) {
+        INFO(c.expected);
+        auto r = f.run(
+            "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":\"ferry\"}\n"
+            + c.second + "\n");
+        REQUIRE_FALSE(r);
+        CHECK(r.error().line == 2);
+        CHECK(r.error().message.contains(QString::fromUtf8(c.expected)));
+        CHECK(r.error().message.contains(QStringLiteral("codings.jsonl:2")));
+        CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    }
+}

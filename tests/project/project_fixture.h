@@ -1,0 +1,55 @@
+#pragma once
+// A project in a temporary directory with a few invented articles, for the project tests.
+
+#include "core/project/project.h"
+#include "tests/support/test_support.h"
+
+namespace fourfold::test {
+
+struct ProjectFixture {
+    QTemporaryDir dir;
+    Project project = makeProject();
+
+    Project makeProject()
+    {
+        auto p = Project::create(dir.filePath(QStringLiteral("t.fourfold")));
+        REQUIRE(p);
+        return std::move(*p);
+    }
+
+    // Imports `jsonl` (written to a file named `name`) and requires success.
+    ImportReport importJsonl(
+        const QByteArray &jsonl, const QString &name = QStringLiteral("a.jsonl"))
+    {
+        auto r = project.importFile(writeFile(dir, name, jsonl), ImportOptions {});
+        REQUIRE(r);
+        return *r;
+    }
+
+    ArticleId articleId(const QString &externalId)
+    {
+        auto id = project.articleByExternalId(externalId);
+        REQUIRE(id);
+        REQUIRE(id->has_value());
+        return **id;
+    }
+
+    CoderId addCoder(const QString &pseudonym)
+    {
+        auto id = project.addCoder(
+            QStringLiteral("Test person ") + pseudonym, pseudonym, CoderRole::Coder);
+        REQUIRE(id);
+        return *id;
+    }
+};
+
+// Two invented articles (demo-style data), one English, one Dutch.
+inline const QByteArray kTwoArticles =
+    "{\"id\":\"f1\",\"title\":\"Ferry to stop\",\"language\":\"en\",\"outlet\":\"Test Gazette\","
+    "\"text\":\"The ferry to Brakwater will stop in May. Dr. Ilse Varn blames the budget.\\n\\n"
+    "The council must find the money. It is a disgrace.\"}\n"
+    "{\"id\":\"f2\",\"title\":\"Windpark\",\"language\":\"nl\","
+    "\"text\":\"Het windpark komt er, bijv. op de dijk. Bewoners zijn boos.\\n\\nDe gemeente moet "
+    "praten.\"}\n";
+
+} // namespace fourfold::test

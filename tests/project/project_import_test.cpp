@@ -1,0 +1,166 @@
+#include "core/store/statement.h"
+#include "core/text/canonical_text.h"
+#include "core/text/offset_map.h"
+#include "project_fixture.h"
+#include "tests/support/db_dump.h"
+
+#include <QCryptographicHash>
+
+#include <sqlite3.h>
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+TEST_CASE("import stores canonical text, its hash and frozen units")
+{
+    ProjectFixture f;
+    // NFD input ("e" + combining acute) and CRLF line ends become NFC and LF (UAX #15).
+    const QByteArray jsonl = "{\"id\":\"n1\",\"title\":\"Cafe\\u0301 "
+                             "closes\",\"text\":\"Cafe\\u0301 closes.\\r\\n\\r\\nIt is sad.\"}\n";
+    auto report = f.importJsonl(jsonl);
+    REQUIRE(report.added.size() == 1);
+    auto article = f.project.article(report.added[0]);
+    REQUIRE(article);
+    CHECK(article->text == QStringLiteral("Caf\u00E9 closes.\n\nIt is sad."));
+    CHECK(article->summary.title == QStringLiteral("Caf\u00E9 closes"));
+    CHECK(article->summary.length == 24);
+    CHECK(article->summary.sha256 == textSha256(article->text));
+    // SHA-256 of the UTF-8 bytes, computed independently with Qt (FIPS 180-4).
+    CHECK(article->summary.sha256
+        == QString::fromLatin1(
+            QCryptographicHash::hash(article->text.toUtf8(), QCryptographicHash::Sha256).toHex()));
+    CHECK(article->summary.language == QStringLiteral("en")); // the project default
+    REQUIRE(article->paragraphs.size() == 2);
+    CHECK(article->paragraphs[0].range == TextRange {0, 12});
+    CHECK(article->paragraphs[0].role == ParagraphRole::Intro);
+    CHECK(article->paragraphs[1].range == TextRange {14, 24});
+    CHECK(article->paragraphs[1].role == ParagraphRole::Conclusion);
+    CHECK(article->sentences.size() == 2);
+    // Tokens: Café, closes, ., It, is, sad, .
+    CHECK(article->tokens.size() == 7);
+}
+
+TEST_CASE("paragraph roles follow position: intro, body, conclusion")
+{
+    ProjectFixture f;
+    auto report = f.importJsonl(
+        "{\"id\":\"r\",\"title\":\"T\",\"text\":\"One.\\n\\nTwo.\\n\\nThree.\\n\\nFour.\"}\n");
+    auto article = f.project.article(report.added[0]);
+    REQUIRE(article);
+    REQUIRE(article->paragraphs.size() == 4);
+    CHECK(article->paragraphs[0].role == ParagraphRole::Intro);
+    CHECK(article->paragraphs[1].role == ParagraphRole::Body);
+    CHECK(article->paragraphs[2].role == ParagraphRole::Body);
+    CHECK(article->paragraphs[3].role == ParagraphRole::Conclusion);
+}
+
+TEST_CASE("duplicate texts are reported and skipped, within a file and across imports")
+{
+    ProjectFixture f;
+    f.importJsonl(kTwoArticles);
+    const QByteArray second =
+        "{\"id\":\"g1\",\"title\":\"Copy\",\"text\":\"Het windpark komt er, bijv. op de dijk. "
+        "Bewoners zijn boos.\\n\\nDe gemeente moet praten.\"}\n"
+        "{\"id\":\"g2\",\"title\":\"New\",\"text\":\"A new text.\"}\n"
+        "{\"id\":\"g3\",\"title\":\"New again\",\"text\":\"A new text.\"}\n";
+    auto report = f.importJsonl(second, QStringLiteral("b.jsonl"));
+    CHECK(report.added.size() == 1);
+    REQUIRE(report.skipped.size() == 2);
+    CHECK(report.skipped[0].externalId == QStringLiteral("g1"));
+    CHECK(report.skipped[0].line == 1);
+    CHECK(report.skipped[0].reason.contains(QStringLiteral("f2")));
+    CHECK(report.skipped[1].externalId == QStringLiteral("g3"));
+    CHECK(report.skipped[1].line == 3);
+    CHECK(report.skipped[1].reason.contains(QStringLiteral("g2")));
+}
+
+TEST_CASE("an import that fails leaves the project exactly as it was")
+{
+    ProjectFixture f;
+    f.importJsonl(kTwoArticles);
+    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+
+    SECTION("an id already used by another text")
+    {
+        auto r = f.project.importFile(
+            writeFile(f.dir, QStringLiteral("c.jsonl"),
+                "{\"id\":\"x1\",\"title\":\"Fine\",\"text\":\"Fine text.\"}\n"
+                "{\"id\":\"f1\",\"title\":\"Clash\",\"text\":\"Other text.\"}\n"),
+            ImportOptions {});
+        REQUIRE_FALSE(r);
+        CHECK(r.error().code == ErrorCode::Duplicate);
+        CHECK(r.error().line == 2);
+        CHECK(r.error().message.contains(QStringLiteral("c.jsonl:2")));
+    }
+    SECTION("an unknown language tag")
+    {
+        auto r =
+            f.project.importFile(writeFile(f.dir, QStringLiteral("d.jsonl"),
+                                     "{\"id\":\"x1\",\"title\":\"Fine\",\"text\":\"Fine text.\"}\n"
+                                     "{\"id\":\"x2\",\"title\":\"Odd\",\"language\":\"!!not a "
+                                     "tag\",\"text\":\"Text.\"}\n"),
+                ImportOptions {});
+        REQUIRE_FALSE(r);
+        CHECK(r.error().line == 2);
+    }
+    SECTION("a malformed line")
+    {
+        auto r = f.project.importFile(
+            writeFile(f.dir, QStringLiteral("e.jsonl"),
+                "{\"id\":\"x1\",\"title\":\"Fine\",\"text\":\"Fine text.\"}\n{oops\n"),
+            ImportOptions {});
+        REQUIRE_FALSE(r);
+        CHECK(r.error().code == ErrorCode::InvalidInput);
+    }
+    SECTION("a cancelled import")
+    {
+        auto r = f.project.importFile(writeFile(f.dir, QStringLiteral("f.jsonl"),
+                                          "{\"id\":\"x1\",\"title\":\"A\",\"text\":\"First.\"}\n"
+                                          "{\"id\":\"x2\",\"title\":\"B\",\"text\":\"Second.\"}\n"),
+            ImportOptions {}, [](qsizetype done, qsizetype) { return done < 2; });
+        REQUIRE_FALSE(r);
+        CHECK(r.error().code == ErrorCode::Cancelled);
+    }
+    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+}
+
+TEST_CASE("fault injection: a failure at any step of an import writes nothing")
+{
+    // After SQLite's own test practice: fail the Nth step and prove nothing was written.
+    ProjectFixture f;
+    const QString path = writeFile(f.dir, QStringLiteral("a.jsonl"), kTwoArticles);
+    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    int failures = 0;
+    for (int n = 1; n < 200; ++n) {
+        int steps = 0;
+        f.project.databaseForTesting().setFaultHook(
+            [&] { return ++steps == n ? SQLITE_IOERR : SQLITE_OK; });
+        auto r = f.project.importFile(path, ImportOptions {});
+        f.project.databaseForTesting().setFaultHook({});
+        if (r) {
+            // The first n that no longer fails: the import needed fewer than n steps.
+            CHECK(r->added.size() == 2);
+            break;
+        }
+        ++failures;
+        CHECK(r.error().code == ErrorCode::Io);
+        REQUIRE(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    }
+    CHECK(failures > 10);
+}
+
+TEST_CASE("full-text search finds articles by words of their text")
+{
+    ProjectFixture f;
+    f.importJsonl(kTwoArticles);
+    auto hits = f.project.searchArticles(QStringLiteral("dijk"));
+    REQUIRE(hits);
+    REQUIRE(hits->size() == 1);
+    CHECK((*hits)[0] == f.articleId(QStringLiteral("f2")));
+    auto none = f.project.searchArticles(QStringLiteral("zeppelin"));
+    REQUIRE(none);
+    CHECK(none->empty());
+    auto bad = f.project.searchArticles(QStringLiteral("\"unclosed"));
+    REQUIRE_FALSE(bad);
+    CHECK(bad.error().code == ErrorCode::InvalidArgument);
+}
