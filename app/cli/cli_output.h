@@ -1,0 +1,41 @@
+#pragma once
+// Conventions shared by every subcommand of fourfold-cli: results on stdout, one-line errors on
+// stderr, and exit codes scripts can rely on.
+
+#include "core/model/error.h"
+
+#include <QCommandLineParser>
+#include <QJsonObject>
+#include <QString>
+#include <QStringList>
+
+namespace fourfold::cli {
+
+enum ExitCode {
+    ExitOk = 0,
+    ExitFailure = 1, // the command ran and failed (bad input, integrity problems, ...)
+    ExitUsage = 2, // the command line itself is wrong
+};
+
+// Writes `text` and a newline to stdout / stderr (UTF-8).
+void out(const QString &text);
+void err(const QString &text);
+// Writes "fourfold-cli: <message>" for `error` to stderr and returns ExitFailure.
+int report(const Error &error);
+// Writes a usage error and a hint to run --help; returns ExitUsage.
+int usageError(const QString &command, const QString &message);
+void printJson(const QJsonObject &object);
+
+// Parses `arguments` (the subcommand's name first) with `parser` after adding --help. Returns
+// -1 to go on, or an exit code (help printed: ExitOk; bad options: ExitUsage).
+int parseCommandLine(QCommandLineParser &parser, const QString &command, const QString &description,
+    const QStringList &arguments);
+
+// Each subcommand takes its arguments with the subcommand's name first.
+int runNew(const QStringList &arguments);
+int runImport(const QStringList &arguments);
+int runInfo(const QStringList &arguments);
+int runCheck(const QStringList &arguments);
+int runBuildSample(const QStringList &arguments);
+
+} // namespace fourfold::cli

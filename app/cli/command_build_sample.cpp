@@ -1,0 +1,146 @@
+// build-sample: makes the demo project file from the plain source files in sample-project/
+// (study.json, articles.jsonl, codings.jsonl), so that no binary project is committed.
+
+#include "app/cli/cli_output.h"
+#include "core/project/coding_import.h"
+#include "core/project/project.h"
+
+#include <QCoreApplication>
+#include <QDir>
+#include <QFile>
+#include <QFileInfo>
+#include <QJsonArray>
+#include <QJsonDocument>
+
+namespace fourfold::cli {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("cli", text);
+}
+
+Result<QJsonObject> readStudy(const QString &path)
+{
+    QFile file(path);
+    if (!file.open(QIODevice::ReadOnly))
+        return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));
+    QJsonParseError error;
+    const QJsonDocument doc = QJsonDocument::fromJson(file.readAll(), &error);
+    if (error.error != QJsonParseError::NoError || !doc.isObject())
+        return fail(ErrorCode::InvalidInput,
+            tr("%1: not a JSON object (%2).").arg(path, error.errorString()));
+    return doc.object();
+}
+
+// Builds the whole project at `target`; the caller removes it on failure.
+Status build(const QString &sourceDir, const QString &target)
+{
+    const QDir dir(sourceDir);
+    const QString studyPath = dir.filePath(QStringLiteral("study.json"));
+    auto study = readStudy(studyPath);
+    if (!study)
+        return std::unexpected(study.error());
+
+    Project::Settings settings;
+    settings.name = study->value(QLatin1String("name")).toString();
+    settings.defaultLanguage =
+        study->value(QLatin1String("language")).toString(QStringLiteral("en"));
+    auto project = Project::create(target, settings);
+    if (!project)
+        return std::unexpected(project.error());
+
+    std::vector<CoderId> reliabilityCoders;
+    for (const QJsonValue &v : study->value(QLatin1String("coders")).toArray()) {
+        const QJsonObject c = v.toObject();
+        const auto role =
+            coderRoleFromKey(c.value(QLatin1String("role")).toString(QStringLiteral("coder")));
+        if (!role)
+            return fail(ErrorCode::InvalidInput,
+                tr("%1: a coder's role must be \"coder\" or \"lead\".").arg(studyPath));
+        auto id = project->addCoder(c.value(QLatin1String("name")).toString(),
+            c.value(QLatin1String("pseudonym")).toString(), *role);
+        if (!id)
+            return std::unexpected(id.error());
+        if (*role == CoderRole::Coder)
+            reliabilityCoders.push_back(*id);
+    }
+
+    ImportOptions options;
+    auto imported = project->importFile(dir.filePath(QStringLiteral("articles.jsonl")), options);
+    if (!imported)
+        return std::unexpected(imported.error());
+
+    for (const QJsonValue &v : study->value(QLatin1String("reliabilityArticles")).toArray()) {
+        auto article = project->articleByExternalId(v.toString());
+        if (!article)
+            return std::unexpected(article.error());
+        if (!*article)
+            return fail(ErrorCode::InvalidInput,
+                tr("%1: the reliability article \"%2\" is not in articles.jsonl.")
+                    .arg(studyPath, v.toString()));
+        for (CoderId coder : reliabilityCoders)
+            FOURFOLD_TRY_STATUS(project->assign(**article, coder, Phase::Reliability));
+    }
+
+    auto codings = importQuotedCodings(
+        *project, dir.filePath(QStringLiteral("codings.jsonl")), Phase::Reliability);
+    if (!codings)
+        return std::unexpected(codings.error());
+    out(tr("Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements.")
+            .arg(target)
+            .arg(imported->added.size())
+            .arg(study->value(QLatin1String("coders")).toArray().size())
+            .arg(codings->spans)
+            .arg(codings->judgements));
+    return {};
+}
+
+void removeProjectFiles(const QString &path)
+{
+    for (const char *suffix : {"", "-wal", "-shm"})
+        QFile::remove(path + QLatin1String(suffix));
+}
+
+} // namespace
+
+int runBuildSample(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("build-sample");
+    QCommandLineParser parser;
+    const QCommandLineOption force(QStringLiteral("force"), tr("Replace OUT if it exists."));
+    parser.addOption(force);
+    parser.addPositionalArgument(QStringLiteral("SOURCE"),
+        tr("The folder with study.json, articles.jsonl and codings.jsonl."));
+    parser.addPositionalArgument(
+        QStringLiteral("OUT"), tr("The project file to write (*.fourfold)."));
+    if (int rc = parseCommandLine(parser, command,
+            tr("Build the demo project (invented data) from its source files."), arguments);
+        rc >= 0)
+        return rc;
+    if (parser.positionalArguments().size() != 2)
+        return usageError(command, tr("expected a source folder and an output file."));
+    const QString source = parser.positionalArguments().at(0);
+    const QString target = parser.positionalArguments().at(1);
+    if (QFileInfo::exists(target) && !parser.isSet(force))
+        return report(Error {ErrorCode::Duplicate,
+            tr("%1 already exists; add --force to replace it.").arg(target), {}, {}, 0, 0});
+
+    // Built beside the target and renamed at the end, so a failed build leaves no half project.
+    const QString temporary = target + QStringLiteral(".building");
+    removeProjectFiles(temporary);
+    if (auto st = build(source, temporary); !st) {
+        removeProjectFiles(temporary);
+        return report(st.error());
+    }
+    removeProjectFiles(target);
+    if (!QFile::rename(temporary, target)) {
+        removeProjectFiles(temporary);
+        return report(Error {
+            ErrorCode::Io, tr("Cannot move the new project to %1.").arg(target), {}, {}, 0, 0});
+    }
+    return ExitOk;
+}
+
+} // namespace fourfold::cli

@@ -1,0 +1,86 @@
+// fourfold-cli: Fourfold's jobs without a window, for scripts and pipelines.
+
+#include "app/cli/cli_output.h"
+
+#include <QCoreApplication>
+
+#include <functional>
+#include <map>
+
+using namespace fourfold::cli;
+
+namespace {
+
+struct Command {
+    const char *summary;
+    std::function<int(const QStringList &)> run;
+};
+
+const std::map<QString, Command> &commands()
+{
+    static const std::map<QString, Command> table {
+        {QStringLiteral("new"),
+            {QT_TRANSLATE_NOOP("cli", "Create an empty project file with the default codebook."),
+                runNew}},
+        {QStringLiteral("import"),
+            {QT_TRANSLATE_NOOP("cli", "Import articles from text, HTML, JSON Lines or CSV files."),
+                runImport}},
+        {QStringLiteral("info"),
+            {QT_TRANSLATE_NOOP(
+                 "cli", "Show what a project holds: articles, units, coders, annotations."),
+                runInfo}},
+        {QStringLiteral("check"),
+            {QT_TRANSLATE_NOOP("cli", "Check a project file's integrity."), runCheck}},
+        {QStringLiteral("build-sample"),
+            {QT_TRANSLATE_NOOP("cli", "Build the demo project from its source files."),
+                runBuildSample}},
+    };
+    return table;
+}
+
+void printUsage()
+{
+    out(QCoreApplication::translate("cli", "Usage: fourfold-cli COMMAND [options] [arguments]"));
+    out(QString());
+    out(QCoreApplication::translate("cli", "Commands:"));
+    for (const auto &[name, command] : commands())
+        out(QStringLiteral("  %1  %2")
+                .arg(name, -13)
+                .arg(QCoreApplication::translate("cli", command.summary)));
+    out(QString());
+    out(QCoreApplication::translate(
+        "cli", "Run \"fourfold-cli COMMAND --help\" for a command's options."));
+}
+
+} // namespace
+
+int main(int argc, char *argv[])
+{
+    QCoreApplication app(argc, argv);
+    QCoreApplication::setApplicationName(QStringLiteral("fourfold-cli"));
+    QCoreApplication::setApplicationVersion(QStringLiteral(FOURFOLD_VERSION));
+
+    const QStringList args = app.arguments();
+    if (args.size() < 2) {
+        printUsage();
+        return ExitUsage;
+    }
+    const QString name = args.at(1);
+    if (name == QLatin1String("--help") || name == QLatin1String("-h")
+        || name == QLatin1String("help")) {
+        printUsage();
+        return ExitOk;
+    }
+    if (name == QLatin1String("--version")) {
+        out(QStringLiteral("fourfold-cli %1").arg(QCoreApplication::applicationVersion()));
+        return ExitOk;
+    }
+    const auto it = commands().find(name);
+    if (it == commands().end()) {
+        err(QCoreApplication::translate("cli", "fourfold-cli: unknown command \"%1\".").arg(name));
+        err(QCoreApplication::translate(
+            "cli", "Run \"fourfold-cli --help\" for the list of commands."));
+        return ExitUsage;
+    }
+    return it->second.run(args.mid(1));
+}
