@@ -274,4 +274,21 @@ QSet<QString> sentenceAbbreviations(const char *icuBaseName)
     return set;
 }
 
+QSet<QString> monthsAfterOrdinal(const char *icuBaseName)
+{
+    const icu::Locale locale(icuBaseName);
+    if (std::strcmp(locale.getLanguage(), "de") != 0)
+        return {};
+    // Full names (with the Austrian "Jänner" and "Feber") and the usual short forms.
+    return QSet<QString> {QStringLiteral("Januar"), QStringLiteral("Jänner"),
+        QStringLiteral("Februar"), QStringLiteral("Feber"), QStringLiteral("März"),
+        QStringLiteral("April"), QStringLiteral("Mai"), QStringLiteral("Juni"),
+        QStringLiteral("Juli"), QStringLiteral("August"), QStringLiteral("September"),
+        QStringLiteral("Oktober"), QStringLiteral("November"), QStringLiteral("Dezember"),
+        QStringLiteral("Jan."), QStringLiteral("Feb."), QStringLiteral("Mrz."),
+        QStringLiteral("Apr."), QStringLiteral("Jun."), QStringLiteral("Jul."),
+        QStringLiteral("Aug."), QStringLiteral("Sep."), QStringLiteral("Sept."),
+        QStringLiteral("Okt."), QStringLiteral("Nov."), QStringLiteral("Dez.")};
+}
+
 } // namespace fourfold

@@ -15,4 +15,9 @@ namespace fourfold {
 // entry that starts with a lower-case letter is also stored capitalised ("bijv." and "Bijv.").
 QSet<QString> sentenceAbbreviations(const char *icuBaseName);
 
+// Words after which a full stop that follows a day number ("am 1. September") does not end a
+// sentence, for languages that write ordinals with a full stop before a month name (German:
+// "1. September", "9. Juni"; common practice of German orthography). Empty for other languages.
+QSet<QString> monthsAfterOrdinal(const char *icuBaseName);
+
 } // namespace fourfold

@@ -115,13 +115,20 @@ Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceN
     const qsizetype n = bytes.size();
     const qsizetype bom = (n >= 3 && p[0] == 0xEF && p[1] == 0xBB && p[2] == 0xBF) ? 3 : 0;
     qint64 line = 1;
-    qsizetype lineStart = 0;
+    qsizetype lineStart = bom;
     for (qsizetype i = bom; i < n;) {
         const unsigned char b = p[i];
-        const qint64 column = i - lineStart + 1;
+        // The column counts characters (code points), like the JSON and CSV readers' columns; the
+        // bytes before `i` on this line are valid UTF-8, so their lead bytes are the characters.
+        const auto column = [&] {
+            qint64 characters = 0;
+            for (qsizetype k = lineStart; k < i; ++k)
+                characters += (p[k] & 0xC0) != 0x80 ? 1 : 0;
+            return characters + 1;
+        };
         if (b < 0x80) {
             if (b == 0) {
-                return failAt(ErrorCode::InvalidInput, sourceName, line, column,
+                return failAt(ErrorCode::InvalidInput, sourceName, line, column(),
                     tr("NUL byte (0x00): the file looks binary, not like text. "
                        "Import a UTF-8 text file."));
             }
@@ -139,9 +146,9 @@ Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceN
         unsigned char low = 0x80;
         unsigned char high = 0xBF;
         if (b < 0xC0)
-            return utf8Error(sourceName, line, column, b, Utf8Fault::LoneContinuation);
+            return utf8Error(sourceName, line, column(), b, Utf8Fault::LoneContinuation);
         if (b < 0xC2)
-            return utf8Error(sourceName, line, column, b, Utf8Fault::Overlong);
+            return utf8Error(sourceName, line, column(), b, Utf8Fault::Overlong);
         if (b < 0xE0) {
             length = 2;
         } else if (b < 0xF0) {
@@ -157,18 +164,18 @@ Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceN
             else if (b == 0xF4)
                 high = 0x8F;
         } else {
-            return utf8Error(sourceName, line, column, b, Utf8Fault::NeverValid);
+            return utf8Error(sourceName, line, column(), b, Utf8Fault::NeverValid);
         }
         for (int k = 1; k < length; ++k) {
             if (i + k >= n || (p[i + k] & 0xC0) != 0x80)
-                return utf8Error(sourceName, line, column, b, Utf8Fault::Truncated);
+                return utf8Error(sourceName, line, column(), b, Utf8Fault::Truncated);
         }
         const unsigned char second = p[i + 1];
         if (second < low)
-            return utf8Error(sourceName, line, column, b, Utf8Fault::Overlong);
+            return utf8Error(sourceName, line, column(), b, Utf8Fault::Overlong);
         if (second > high) {
-            return utf8Error(
-                sourceName, line, column, b, b == 0xED ? Utf8Fault::Surrogate : Utf8Fault::TooHigh);
+            return utf8Error(sourceName, line, column(), b,
+                b == 0xED ? Utf8Fault::Surrogate : Utf8Fault::TooHigh);
         }
         i += length;
     }

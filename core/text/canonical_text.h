@@ -12,10 +12,11 @@ namespace fourfold {
 // Decodes UTF-8 strictly (Unicode 15.0 §3.9 Table 3-7). On invalid UTF-8 (overlong forms,
 // surrogates, code points above U+10FFFF, truncated sequences, stray continuation bytes, bytes
 // 0xC0/0xC1/0xF5..0xFF) returns ErrorCode::InvalidInput naming `sourceName`, the 1-based line
-// and the 1-based byte column of the first byte of the first ill-formed sequence, its value and
-// what is wrong. Lines end at LF, CRLF or a lone CR; columns count raw bytes from the line start
-// (on line 1 a BOM counts). A leading BOM is accepted and dropped. NUL bytes are refused as well
-// (they mark a binary file). Line ends are kept as they are: see canonicalText().
+// and the 1-based column of the first byte of the first ill-formed sequence, its value and
+// what is wrong. Lines end at LF, CRLF or a lone CR; the column counts characters (code points)
+// from the line start, as the JSON and CSV readers do (a BOM does not count). A leading BOM is
+// accepted and dropped. NUL bytes are refused as well (they mark a binary file). Line ends are kept
+// as they are: see canonicalText().
 Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceName);
 
 // Returns the canonical form of `text`: leading BOMs (U+FEFF) removed, CRLF and lone CR turned

@@ -58,6 +58,7 @@ struct LanguageSegmenters {
     std::unique_ptr<icu::BreakIterator> sentence;
     std::unique_ptr<icu::BreakIterator> word;
     QSet<QString> abbreviations;
+    QSet<QString> monthsAfterOrdinal;
 };
 
 LanguageSegmenters *segmentersFor(const icu::Locale &locale, UErrorCode &status)
@@ -72,6 +73,7 @@ LanguageSegmenters *segmentersFor(const icu::Locale &locale, UErrorCode &status)
     if (U_FAILURE(status) || !entry->sentence || !entry->word)
         return nullptr;
     entry->abbreviations = sentenceAbbreviations(locale.getBaseName());
+    entry->monthsAfterOrdinal = monthsAfterOrdinal(locale.getBaseName());
     // A project has a handful of languages; the bound only guards against a caller cycling
     // through many tags.
     if (cache.size() >= 32)
@@ -161,6 +163,41 @@ bool followsAbbreviation(std::u16string_view p, qsizetype at, const QSet<QString
         }
     }
     return false;
+}
+
+// Whether the break at `at` follows a day number written as an ordinal ("1.", "31.") that a
+// month name follows ("am 1. September"): German dates, where the full stop marks the ordinal.
+bool followsOrdinalBeforeMonth(std::u16string_view p, qsizetype at, const QSet<QString> &months)
+{
+    if (months.isEmpty())
+        return false;
+    const auto n = static_cast<qsizetype>(p.size());
+    qsizetype end = at;
+    while (end > 0 && isSpace(p[end - 1]))
+        --end;
+    if (end < 2 || p[end - 1] != u'.')
+        return false;
+    qsizetype digits = 0;
+    while (end - 1 - digits > 0 && u_isdigit(p[end - 2 - digits]))
+        ++digits;
+    if (digits == 0 || digits > 2)
+        return false;
+    const qsizetype wordStart = end - 1 - digits;
+    if (wordStart > 0 && !isSpace(p[wordStart - 1]) && p[wordStart - 1] != u'(')
+        return false;
+    qsizetype pos = at;
+    while (pos < n && isSpace(p[pos]))
+        ++pos;
+    qsizetype wordEnd = pos;
+    while (wordEnd < n && (u_isalpha(p[wordEnd]) || p[wordEnd] == u'.'))
+        ++wordEnd;
+    QString next = QStringView(p.substr(pos, wordEnd - pos)).toString();
+    if (months.contains(next))
+        return true;
+    // "September." at a sentence end still names the month.
+    if (next.endsWith(QLatin1Char('.')))
+        next.chop(1);
+    return months.contains(next);
 }
 
 // Trims White_Space from both ends of s[start, end); the result is empty if nothing else is left.
@@ -267,7 +304,9 @@ Result<Segmentation> segmentText(const QString &text, const QString &languageTag
         for (int32_t boundary = sentenceIt.next(); boundary != icu::BreakIterator::DONE;
              boundary = sentenceIt.next()) {
             if (boundary < static_cast<qsizetype>(paragraph.size())
-                && followsAbbreviation(paragraph, boundary, segmenters->abbreviations))
+                && (followsAbbreviation(paragraph, boundary, segmenters->abbreviations)
+                    || followsOrdinalBeforeMonth(
+                        paragraph, boundary, segmenters->monthsAfterOrdinal)))
                 continue;
             const auto [start, end] = trimmed(f, paraStart + sentenceStart, paraStart + boundary);
             sentenceStart = boundary;

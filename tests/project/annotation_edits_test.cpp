@@ -1,4 +1,5 @@
 #include "core/project/annotation_edits.h"
+#include "core/project/paragraph_role_edit.h"
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -71,6 +72,10 @@ TEST_CASE("edits apply and revert to an identical database dump")
     SECTION("delete")
     {
         edit = std::make_unique<DeleteAnnotationEdit>(existing, f.c1);
+    }
+    SECTION("paragraph role")
+    {
+        edit = std::make_unique<SetParagraphRoleEdit>(f.f1, 1, ParagraphRole::Body, f.c1);
     }
     SECTION("link")
     {
@@ -248,4 +253,18 @@ TEST_CASE("every edit and its undo are written to the event log")
     CHECK(eventCount() == before + 1);
     REQUIRE(f.project.revert(edit));
     CHECK(eventCount() == before + 2);
+}
+
+TEST_CASE("a lead can change a paragraph's role; an unknown paragraph is refused")
+{
+    EditFixture f;
+    SetParagraphRoleEdit edit(f.f1, 0, ParagraphRole::Body, f.c1);
+    REQUIRE(f.project.apply(edit));
+    CHECK(f.project.article(f.f1)->paragraphs[0].role == ParagraphRole::Body);
+    REQUIRE(f.project.revert(edit));
+    CHECK(f.project.article(f.f1)->paragraphs[0].role == ParagraphRole::Intro);
+    SetParagraphRoleEdit missing(f.f1, 7, ParagraphRole::Body, f.c1);
+    auto st = f.project.apply(missing);
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::NotFound);
 }

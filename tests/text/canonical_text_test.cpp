@@ -75,11 +75,11 @@ TEST_CASE("decodeUtf8Strict drops a leading BOM and keeps everything else")
     CHECK(decodeUtf8Strict(bytes("caf\xC3\xA9"sv), {}).value() == QStringLiteral("café"));
 }
 
-TEST_CASE("decodeUtf8Strict names the line, byte column and fault of the first bad byte")
+TEST_CASE("decodeUtf8Strict names the line, column and fault of the first bad byte")
 {
     // Ill-formed sequences from Unicode 15.0 §3.9 (Table 3-7, and the examples of maximal
     // subparts in "U+FFFD Substitution of Maximal Subparts"). Lines end at LF, CRLF or CR;
-    // columns count bytes from the line start.
+    // columns count characters (code points) from the line start.
     struct Case {
         const char *name;
         std::string_view input;
@@ -97,7 +97,7 @@ TEST_CASE("decodeUtf8Strict names the line, byte column and fault of the first b
             "invalid UTF-8 (byte 0xF0): an overlong encoding"},
         {"lone continuation 80", "x\x80"sv, 1, 2,
             "invalid UTF-8 (byte 0x80): a continuation byte without a lead byte"},
-        {"continuation after a complete sequence", "\xC3\xA9\xA9"sv, 1, 3,
+        {"continuation after a complete sequence", "\xC3\xA9\xA9"sv, 1, 2,
             "invalid UTF-8 (byte 0xA9): a continuation byte without a lead byte"},
         {"truncated E2 82 at the end", "ab\xE2\x82"sv, 1, 3,
             "invalid UTF-8 (byte 0xE2): the multi-byte sequence it starts is cut short"},
@@ -118,7 +118,7 @@ TEST_CASE("decodeUtf8Strict names the line, byte column and fault of the first b
         {"five-byte form F8", "\xF8\x88\x80\x80\x80"sv, 1, 1,
             "invalid UTF-8 (byte 0xF8): this byte never occurs in UTF-8"},
         {"FF", "\r\r\xFF"sv, 3, 1, "invalid UTF-8 (byte 0xFF): this byte never occurs in UTF-8"},
-        {"BOM counts as bytes of line 1", "\xEF\xBB\xBF\x80"sv, 1, 4,
+        {"a BOM is not a character of line 1", "\xEF\xBB\xBF\x80"sv, 1, 1,
             "invalid UTF-8 (byte 0x80): a continuation byte without a lead byte"},
         {"NUL byte", "abc\0def"sv, 1, 4, "NUL byte (0x00): the file looks binary"},
     };
@@ -168,19 +168,18 @@ TEST_CASE("decodeUtf8Strict agrees with ICU's strict decoder on random byte stri
         int32_t i = (n >= 3 && s[0] == 0xEF && s[1] == 0xBB && s[2] == 0xBF) ? 3 : 0;
         std::vector<char32_t> expected;
         qint64 line = 1;
-        int32_t lineStart = 0;
+        size_t lineFirstChar = 0; // index into `expected` of the line's first character
         qint64 badColumn = 0;
         while (i < n) {
-            const int32_t start = i;
             UChar32 c = 0;
             U8_NEXT(s, i, n, c);
             if (c < 0) {
-                badColumn = start - lineStart + 1;
+                badColumn = qint64(expected.size() - lineFirstChar) + 1;
                 break;
             }
             if (c == '\n' || (c == '\r' && (i == n || s[i] != '\n'))) {
                 ++line;
-                lineStart = i;
+                lineFirstChar = expected.size() + 1;
             }
             expected.push_back(static_cast<char32_t>(c));
         }
