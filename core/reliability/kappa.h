@@ -1,0 +1,107 @@
+#pragma once
+// Chance-corrected agreement for categorical codes: Cohen's kappa (unweighted and weighted),
+// Scott's pi, Bennett–Alpert–Goldstein S, percent agreement, Fleiss' kappa and Light's kappa.
+//
+// Conventions (all functions): categories are the value codes 0..k−1 of the whole data set
+// (ReliabilityData::values), not only those that occur; a cell holding a code outside 0..k−1
+// counts as missing. A statistic that cannot be computed has no value and a reason, never NaN.
+
+#include "core/reliability/reliability_data.h"
+
+#include <optional>
+#include <vector>
+
+namespace fourfold::reliability {
+
+// A k × k table of counts (rows: coder 1, columns: coder 2), row-major.
+struct ContingencyTable {
+    int categories = 0;
+    std::vector<double> counts;
+};
+
+// The table of coders `coderA` (rows) and `coderB` (columns) over the units where both have a
+// value; categories = data.values. Coder indices out of range, or cells whose size is not
+// units × coders, give a table of zeros (which every statistic reports as undefined).
+ContingencyTable contingencyTable(const ReliabilityData &data, int coderA, int coderB);
+
+enum class KappaWeights { None, Linear, Quadratic, Custom };
+
+struct KappaResult {
+    std::optional<double> value;
+    UndefinedReason reason;
+    // p_o and p_e. Weighted: in agreement-weight form, 1 − Σ w·p_ij / w_max and
+    // 1 − Σ w·p_i.·p_.j / w_max (w: disagreement weights), so value = (p_o − p_e) / (1 − p_e).
+    double observedAgreement = 0;
+    double chanceAgreement = 0;
+    std::optional<double> standardError; // Fleiss, Cohen & Everitt (1969), non-null
+    std::optional<double> ciLow, ciHigh; // value ± 1.96 · standardError (not clipped)
+    std::optional<double> nullStandardError; // for the test of kappa = 0
+    // Cohen (1960): the largest kappa the marginals allow; unweighted kappa only.
+    std::optional<double> kappaMax;
+    double n = 0; // the sum of the table's counts
+};
+
+// Cohen (1960); weighted per Cohen (1968) with disagreement weights: Linear |i−j|, Quadratic
+// (i−j)² by category position (0..k−1), or `customWeights` (k × k, row-major, finite, ≥ 0, zero
+// diagonal, not all zero; need not be symmetric). Kappa and its standard errors do not change
+// when all weights are multiplied by a positive constant. Undefined (value nothing, reason set,
+// no standard errors) when the table is malformed (counts not k × k, negative or not finite),
+// the custom weights are invalid, n = 0, or p_e = 1 (no expected disagreement). Standard errors
+// are the large-sample ones of Fleiss, Cohen & Everitt (1969); both are 0 at perfect agreement.
+KappaResult cohenKappa(const ContingencyTable &table, KappaWeights weights = KappaWeights::None,
+    const std::vector<double> &customWeights = {});
+
+struct SimpleAgreement {
+    std::optional<double> value;
+    UndefinedReason reason;
+    // The two agreements the index is built from, where it has them (Scott's pi, S: p_o and
+    // chance; percent agreement: observedAgreement = value, chanceAgreement 0; Light's kappa:
+    // both 0, it is a mean of kappas).
+    double observedAgreement = 0;
+    double chanceAgreement = 0;
+};
+// Scott (1955): pi = (p_o − p_e) / (1 − p_e) with p_e = Σ ((p_i. + p_.i) / 2)², chance from
+// the pooled marginals of both coders. Undefined for a malformed table, n = 0 or p_e = 1.
+SimpleAgreement scottPi(const ContingencyTable &table);
+// Bennett, Alpert & Goldstein (1954) S = Brennan & Prediger (1981): (p_o − 1/k) / (1 − 1/k)
+// with k = table.categories, the categories of the whole data set (including those that do
+// not occur; NLTK's AnnotationTask.S counts only occurring labels). Undefined for k < 2, a
+// malformed table or n = 0.
+SimpleAgreement bennettS(const ContingencyTable &table);
+// Share of agreeing ordered pairs of values within units over all pairable ordered pairs, for
+// any number of coders and missing data: Σ_u Σ_v n_uv (n_uv − 1) / Σ_u m_u (m_u − 1), where
+// unit u holds m_u values, n_uv of them equal to v; units with fewer than two values drop out.
+// Units therefore weigh by their number of pairs. With complete data it is the mean over
+// coder pairs of the share of units the pair coded alike; with two coders, the share of units
+// both coded alike. Undefined when no unit holds two values.
+SimpleAgreement percentAgreement(const ReliabilityData &data);
+
+struct FleissResult {
+    std::optional<double> value;
+    UndefinedReason reason;
+    double meanObservedAgreement = 0; // P̄
+    double chanceAgreement = 0; // P̄e = Σ p_j²
+    std::optional<double> nullStandardError; // Fleiss, Nee & Landis (1979)
+    // κ_j (Fleiss 1971) and its null standard error per category; nothing for a category
+    // that no rating or every rating uses (p_j q_j = 0). Empty when the table is malformed.
+    std::vector<std::optional<double>> perCategory;
+    std::vector<std::optional<double>> perCategoryNullStandardError;
+    int subjects = 0; // N
+    double ratersPerSubject = 0; // n
+    std::vector<double> categoryShares; // p_j, the share of all ratings in category j
+};
+// Fleiss (1971) on a subjects × categories table of counts (non-negative, finite; need not be
+// integers); every subject must have the same number n ≥ 2 of ratings (complete data), else
+// undefined with a reason. Also undefined when there are no subjects or only one category is
+// used (P̄e = 1). With n = 2 it equals Scott's pi of the two raters (Fleiss 1971).
+FleissResult fleissKappa(const std::vector<std::vector<double>> &counts);
+// The subjects × categories counts (data.values columns) of the complete units of `data`
+// (units with a missing cell are left out). Empty for malformed data.
+std::vector<std::vector<double>> categoryCounts(const ReliabilityData &data);
+
+// Light (1971): the mean of Cohen's (unweighted) kappa over all pairs of coders, each pair
+// over the units both coded. Undefined with fewer than two coders or when any pair's kappa is
+// undefined (the reason names the pair by coder index, from 0).
+SimpleAgreement lightKappa(const ReliabilityData &data);
+
+} // namespace fourfold::reliability
