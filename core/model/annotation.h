@@ -50,6 +50,14 @@ struct AnnotationLink {
     bool deleted = false;
 };
 
+// Which coder codes which article in which phase.
+struct Assignment {
+    ArticleId article;
+    CoderId coder;
+    Phase phase = Phase::Production;
+    QString status;  // "assigned", "started", "done"
+};
+
 // A coder's answer to an article-level item of the codebook.
 struct Judgement {
     JudgementId id;

@@ -211,6 +211,21 @@ Result<std::vector<Judgement>> Project::judgements(ArticleId article) const
     return store::judgements(m_db, article);
 }
 
+Result<std::vector<Annotation>> Project::allAnnotations() const
+{
+    return store::allAnnotations(m_db);
+}
+
+Result<std::vector<Judgement>> Project::allJudgements() const
+{
+    return store::allJudgements(m_db);
+}
+
+Result<std::vector<Assignment>> Project::assignments() const
+{
+    return store::assignments(m_db);
+}
+
 Status Project::apply(Edit &edit)
 {
     auto sp = Savepoint::begin(m_db);

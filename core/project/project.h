@@ -83,6 +83,10 @@ public:
     Result<Annotation> annotation(AnnotationId id) const;
     Result<std::vector<AnnotationLink>> links(ArticleId article) const;
     Result<std::vector<Judgement>> judgements(ArticleId article) const;
+    // Every live annotation / judgement / assignment of the project (for reliability work).
+    Result<std::vector<Annotation>> allAnnotations() const;
+    Result<std::vector<Judgement>> allJudgements() const;
+    Result<std::vector<Assignment>> assignments() const;
 
     // Applies `edit` in one savepoint and logs it: committed at once or not at all.
     Status apply(Edit &edit);

@@ -298,6 +298,15 @@ Result<std::vector<Judgement>> judgements(const Database &db, ArticleId article)
     return readAll<Judgement>(*stmt, readJudgement);
 }
 
+Result<std::vector<Judgement>> allJudgements(const Database &db)
+{
+    auto stmt = db.prepare(QStringLiteral("SELECT %1 FROM judgement WHERE deleted = 0 ORDER BY article_id, coder_id, item_key, id")
+                               .arg(kJudgementColumns));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    return readAll<Judgement>(*stmt, readJudgement);
+}
+
 Result<JudgementId> insertJudgement(Database &db, const Judgement &j)
 {
     auto stmt = db.prepare(QStringLiteral(

@@ -38,6 +38,8 @@ Result<std::vector<AnnotationLink>> links(const Database &db, ArticleId article)
 Result<std::optional<Judgement>> judgement(
     const Database &db, ArticleId article, CoderId coder, const QString &itemKey, Phase phase);
 Result<std::vector<Judgement>> judgements(const Database &db, ArticleId article);
+// Every live judgement of the project, ordered by article, coder, item.
+Result<std::vector<Judgement>> allJudgements(const Database &db);
 Result<JudgementId> insertJudgement(Database &db, const Judgement &j);
 Status updateJudgement(Database &db, const Judgement &j);
 Status removeJudgementRow(Database &db, JudgementId id);

@@ -53,6 +53,25 @@ Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase ph
     return {};
 }
 
+Result<std::vector<Assignment>> assignments(const Database &db)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT article_id, coder_id, phase, status FROM assignment WHERE deleted = 0 ORDER BY article_id, coder_id, phase"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    std::vector<Assignment> out;
+    while (true) {
+        auto row = stmt->step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            break;
+        out.push_back(Assignment{ArticleId{stmt->columnInt(0)}, CoderId{stmt->columnInt(1)},
+                                 phaseFromKey(stmt->columnText(2)).value_or(Phase::Production), stmt->columnText(3)});
+    }
+    return out;
+}
+
 Result<ProjectTally> projectTally(const Database &db)
 {
     ProjectTally t;

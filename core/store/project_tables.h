@@ -22,6 +22,9 @@ Status setSetting(Database &db, const QString &key, const QString &value);
 // Assigns `article` to `coder` in `phase` (uuid made here). Duplicate if it already is.
 Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase phase);
 
+// Every live assignment, ordered by article and coder.
+Result<std::vector<Assignment>> assignments(const Database &db);
+
 struct CoderTally {
     CoderId coder;
     qint64 annotations = 0;

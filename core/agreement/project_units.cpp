@@ -1,0 +1,308 @@
+#include "core/agreement/project_units.h"
+
+#include "core/project/project.h"
+
+#include <QCoreApplication>
+#include <QHash>
+#include <QSet>
+
+#include <algorithm>
+#include <map>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
+{
+    return QCoreApplication::translate("ProjectUnits", text, disambiguation, n);
+}
+
+// What the unitizers need of a project, gathered once.
+struct Selection {
+    std::vector<Coder> coders; // selected, in the order asked for (or pseudonym order)
+    std::vector<ArticleSummary> articles; // selected
+    QHash<qint64, int> coderIndex; // coder id → column
+    QSet<QPair<qint64, qint64>> coded; // (article, coder) pairs coded
+    std::vector<Annotation> annotations; // live, in phase, of selected coders and articles
+    std::vector<Judgement> judgements;
+};
+
+bool inPhase(const std::optional<Phase> &phase, Phase p)
+{
+    return !phase || *phase == p;
+}
+
+Result<Selection> gather(const Project &project, const UnitSelection &sel)
+{
+    Selection s;
+    auto coders = project.coders();
+    if (!coders)
+        return std::unexpected(coders.error());
+    auto articles = project.articles();
+    if (!articles)
+        return std::unexpected(articles.error());
+    auto annotations = project.allAnnotations();
+    if (!annotations)
+        return std::unexpected(annotations.error());
+    auto judgements = project.allJudgements();
+    if (!judgements)
+        return std::unexpected(judgements.error());
+    auto assignments = project.assignments();
+    if (!assignments)
+        return std::unexpected(assignments.error());
+
+    QSet<qint64> articleIds;
+    if (sel.articles.isEmpty()) {
+        s.articles = *articles;
+    } else {
+        for (const QString &id : sel.articles) {
+            auto it = std::find_if(articles->begin(), articles->end(),
+                [&](const ArticleSummary &a) { return a.externalId == id; });
+            if (it == articles->end())
+                return fail(
+                    ErrorCode::NotFound, tr("There is no article \"%1\" in the project.").arg(id));
+            s.articles.push_back(*it);
+        }
+    }
+    for (const ArticleSummary &a : s.articles)
+        articleIds.insert(a.id.value);
+
+    if (sel.coders.isEmpty()) {
+        QSet<qint64> active;
+        for (const Annotation &a : *annotations)
+            if (inPhase(sel.phase, a.phase) && articleIds.contains(a.article.value))
+                active.insert(a.coder.value);
+        for (const Judgement &j : *judgements)
+            if (inPhase(sel.phase, j.phase) && articleIds.contains(j.article.value))
+                active.insert(j.coder.value);
+        for (const Coder &c : *coders)
+            if (active.contains(c.id.value))
+                s.coders.push_back(c);
+    } else {
+        for (const QString &pseudonym : sel.coders) {
+            auto it = std::find_if(coders->begin(), coders->end(),
+                [&](const Coder &c) { return c.pseudonym == pseudonym; });
+            if (it == coders->end())
+                return fail(ErrorCode::NotFound,
+                    tr("There is no coder \"%1\" in the project.").arg(pseudonym));
+            s.coders.push_back(*it);
+        }
+    }
+    if (s.coders.size() < 2)
+        return fail(ErrorCode::InvalidArgument,
+            tr("Reliability needs at least two coders; the selection has %n.", nullptr,
+                int(s.coders.size())));
+    for (size_t i = 0; i < s.coders.size(); ++i)
+        s.coderIndex.insert(s.coders[i].id.value, int(i));
+
+    for (const Assignment &a : *assignments)
+        if (inPhase(sel.phase, a.phase) && articleIds.contains(a.article.value)
+            && s.coderIndex.contains(a.coder.value))
+            s.coded.insert({a.article.value, a.coder.value});
+    for (const Annotation &a : *annotations)
+        if (inPhase(sel.phase, a.phase) && articleIds.contains(a.article.value)
+            && s.coderIndex.contains(a.coder.value)) {
+            s.coded.insert({a.article.value, a.coder.value});
+            s.annotations.push_back(a);
+        }
+    for (const Judgement &j : *judgements)
+        if (inPhase(sel.phase, j.phase) && articleIds.contains(j.article.value)
+            && s.coderIndex.contains(j.coder.value)) {
+            s.coded.insert({j.article.value, j.coder.value});
+            s.judgements.push_back(j);
+        }
+    return s;
+}
+
+QString setLabel(unsigned mask)
+{
+    QStringList keys;
+    for (FramingFunction f : kFramingFunctions)
+        if (mask & (1u << unsigned(f)))
+            keys << functionKey(f);
+    return keys.isEmpty() ? QStringLiteral("{}") : keys.join(QLatin1Char('|'));
+}
+
+} // namespace
+
+QString unitKindKey(UnitKind kind)
+{
+    switch (kind) {
+    case UnitKind::Article:
+        return QStringLiteral("article");
+    case UnitKind::Paragraph:
+        return QStringLiteral("paragraph");
+    case UnitKind::Sentence:
+        return QStringLiteral("sentence");
+    case UnitKind::Token:
+        return QStringLiteral("token");
+    case UnitKind::Continuum:
+        return QStringLiteral("continuum");
+    }
+    return {};
+}
+
+std::optional<UnitKind> unitKindFromKey(const QString &key)
+{
+    for (UnitKind k : {UnitKind::Article, UnitKind::Paragraph, UnitKind::Sentence, UnitKind::Token,
+             UnitKind::Continuum})
+        if (unitKindKey(k) == key)
+            return k;
+    return std::nullopt;
+}
+
+Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &sel)
+{
+    if (sel.unit == UnitKind::Continuum)
+        return fail(ErrorCode::InvalidArgument,
+            tr("Continuum units are compared with unitizing alpha, not as a table."));
+    auto gathered = gather(project, sel);
+    if (!gathered)
+        return std::unexpected(gathered.error());
+    const Selection &s = *gathered;
+    ReliabilityTable table;
+    table.source = project.path();
+    for (const Coder &c : s.coders)
+        table.coders << c.pseudonym;
+    const qsizetype coders = table.coders.size();
+
+    // Annotations per (article, coder), sorted by start.
+    std::map<std::pair<qint64, int>, std::vector<const Annotation *>> spans;
+    for (const Annotation &a : s.annotations)
+        if (!sel.function || a.content.function == *sel.function)
+            spans[{a.article.value, s.coderIndex.value(a.coder.value)}].push_back(&a);
+
+    for (const ArticleSummary &summary : s.articles) {
+        const qint64 articleId = summary.id.value;
+        bool anyCoder = false;
+        for (const Coder &c : s.coders)
+            anyCoder = anyCoder || s.coded.contains({articleId, c.id.value});
+        if (!anyCoder)
+            continue;
+
+        if (sel.unit == UnitKind::Article) {
+            QStringList row(coders, QString());
+            for (const Judgement &j : s.judgements)
+                if (j.article.value == articleId && j.itemKey == sel.item)
+                    row[s.coderIndex.value(j.coder.value)] = j.value;
+            table.units << summary.externalId;
+            table.cells.push_back(row);
+            continue;
+        }
+
+        auto article = project.article(summary.id);
+        if (!article)
+            return std::unexpected(article.error());
+        std::vector<TextRange> units;
+        QString prefix;
+        switch (sel.unit) {
+        case UnitKind::Paragraph:
+            for (const Paragraph &p : article->paragraphs)
+                units.push_back(p.range);
+            prefix = QStringLiteral("#p");
+            break;
+        case UnitKind::Sentence:
+            units = article->sentences;
+            prefix = QStringLiteral("#s");
+            break;
+        default:
+            units = article->tokens;
+            prefix = QStringLiteral("#t");
+            break;
+        }
+        // masks[unit][coder]: bit f set when a span of function f overlaps the unit.
+        std::vector<std::vector<unsigned>> masks(
+            units.size(), std::vector<unsigned>(size_t(coders), 0));
+        for (qsizetype c = 0; c < coders; ++c) {
+            auto it = spans.find({articleId, int(c)});
+            if (it == spans.end())
+                continue;
+            for (const Annotation *a : it->second) {
+                const TextRange r = a->content.range;
+                // Units are sorted and disjoint: find the first that ends after the span starts.
+                auto first = std::partition_point(units.begin(), units.end(),
+                    [&](const TextRange &u) { return u.end <= r.start; });
+                for (auto u = first; u != units.end() && u->start < r.end; ++u)
+                    masks[size_t(u - units.begin())][size_t(c)] |= 1u
+                        << unsigned(a->content.function);
+            }
+        }
+        for (size_t u = 0; u < units.size(); ++u) {
+            QStringList row;
+            for (qsizetype c = 0; c < coders; ++c) {
+                if (!s.coded.contains({articleId, s.coders[size_t(c)].id.value})) {
+                    row << QString();
+                } else if (sel.function) {
+                    row << (masks[u][size_t(c)] ? QStringLiteral("present")
+                                                : QStringLiteral("absent"));
+                } else {
+                    row << setLabel(masks[u][size_t(c)]);
+                }
+            }
+            table.units << summary.externalId + prefix + QString::number(u + 1);
+            table.cells.push_back(row);
+        }
+    }
+    if (table.units.isEmpty())
+        return fail(ErrorCode::NotFound,
+            tr("None of the selected coders coded any of the selected articles."));
+    return table;
+}
+
+Result<ContinuumData> continuumData(const Project &project, const UnitSelection &sel)
+{
+    auto gathered = gather(project, sel);
+    if (!gathered)
+        return std::unexpected(gathered.error());
+    const Selection &s = *gathered;
+    ContinuumData out;
+    out.categories = sel.function ? 1 : 4;
+    for (const Coder &c : s.coders)
+        out.coders << c.pseudonym;
+
+    // Per (article, coder, category): the spans, to be merged where they overlap.
+    std::map<std::tuple<qint64, int, int>, std::vector<TextRange>> spans;
+    for (const Annotation &a : s.annotations) {
+        if (sel.function && a.content.function != *sel.function)
+            continue;
+        const int category = sel.function ? 0 : int(a.content.function);
+        spans[{a.article.value, s.coderIndex.value(a.coder.value), category}].push_back(
+            a.content.range);
+    }
+    for (const ArticleSummary &summary : s.articles) {
+        const bool all = std::all_of(s.coders.begin(), s.coders.end(), [&](const Coder &c) {
+            return s.coded.contains({summary.id.value, c.id.value});
+        });
+        if (!all)
+            continue;
+        const std::int64_t offset = out.length;
+        out.articles << summary.externalId;
+        out.length += summary.length;
+        for (size_t c = 0; c < s.coders.size(); ++c)
+            for (int category = 0; category < out.categories; ++category) {
+                auto it = spans.find({summary.id.value, int(c), category});
+                if (it == spans.end())
+                    continue;
+                std::vector<TextRange> ranges = it->second;
+                std::sort(ranges.begin(), ranges.end());
+                std::vector<TextRange> merged;
+                for (const TextRange &r : ranges) {
+                    if (!merged.empty() && r.start < merged.back().end)
+                        merged.back().end = std::max(merged.back().end, r.end);
+                    else
+                        merged.push_back(r);
+                }
+                for (const TextRange &r : merged)
+                    out.units.push_back(reliability::ContinuumUnit {
+                        int(c), category, offset + r.start, offset + r.end});
+            }
+    }
+    if (out.articles.isEmpty())
+        return fail(ErrorCode::NotFound,
+            tr("No article was coded by all of the selected coders, so there is no common "
+               "continuum."));
+    return out;
+}
+
+} // namespace fourfold

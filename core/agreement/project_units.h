@@ -1,0 +1,59 @@
+#pragma once
+// Unitizers: from a project's annotations to reliability data (design.md §5). A coder who did
+// not code an article is missing for its units, never "absent": a coder coded an article if
+// they are assigned to it (in the chosen phase) or have any annotation or answer on it.
+
+#include "core/io/reliability_table_reader.h"
+#include "core/model/annotation.h"
+#include "core/model/error.h"
+#include "core/model/framing_function.h"
+#include "core/reliability/unitizing_alpha.h"
+
+#include <QStringList>
+
+#include <optional>
+#include <vector>
+
+namespace fourfold {
+
+class Project;
+
+enum class UnitKind { Article, Paragraph, Sentence, Token, Continuum };
+QString unitKindKey(UnitKind kind); // "article", "paragraph", "sentence", "token", "continuum"
+std::optional<UnitKind> unitKindFromKey(const QString &key);
+
+struct UnitSelection {
+    UnitKind unit = UnitKind::Sentence;
+    // One function (present/absent per unit), or all four (the set of functions per unit).
+    std::optional<FramingFunction> function;
+    // Coders by pseudonym; empty = every coder with at least one annotation or answer in the
+    // selection.
+    QStringList coders;
+    std::optional<Phase> phase;
+    // Articles by external id; empty = all.
+    QStringList articles;
+    // The article-level item for UnitKind::Article.
+    QString item = QStringLiteral("dominant_function");
+};
+
+// The units × coders table for article, paragraph, sentence or token units. A unit's value for
+// a coder: "present"/"absent" (one function: a span of that function overlaps the unit by at
+// least one code point), the set of functions of overlapping spans ("cause|problem", "{}" for
+// none), or the answer to the item (article units). Unit ids are "<article id>#p3" (paragraph
+// 3, 1-based), "#s12", "#t120", or the article id. Fails with NotFound for an unknown coder or
+// article, InvalidArgument for the continuum (see continuumData) or fewer than two coders.
+Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &selection);
+
+// The continuum for unitizing alpha: the texts of the articles that every selected coder coded,
+// laid end to end, and each coder's spans on it (category = function index; overlapping spans
+// of one coder and function are merged into one unit).
+struct ContinuumData {
+    QStringList coders;
+    QStringList articles; // external ids, in continuum order
+    std::int64_t length = 0;
+    std::vector<reliability::ContinuumUnit> units;
+    int categories = 4; // 4, or 1 when one function is selected (category 0)
+};
+Result<ContinuumData> continuumData(const Project &project, const UnitSelection &selection);
+
+} // namespace fourfold

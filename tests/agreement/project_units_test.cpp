@@ -1,0 +1,161 @@
+#include "core/agreement/project_units.h"
+#include "core/project/annotation_edits.h"
+#include "tests/project/project_fixture.h"
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+// f1: "The ferry to Brakwater will stop in May. Dr. Ilse Varn blames the budget.\n\n
+//      The council must find the money. It is a disgrace."
+// Sentences: [0,40) [41,73) [75,107) [108,125).
+struct UnitsFixture : ProjectFixture {
+    ArticleId f1, f2;
+    CoderId c1, c2, c3;
+    UnitsFixture()
+    {
+        importJsonl(kTwoArticles);
+        f1 = articleId(QStringLiteral("f1"));
+        f2 = articleId(QStringLiteral("f2"));
+        c1 = addCoder(QStringLiteral("C01"));
+        c2 = addCoder(QStringLiteral("C02"));
+        c3 = addCoder(QStringLiteral("C03"));
+        REQUIRE(project.assign(f1, c1, Phase::Reliability));
+        REQUIRE(project.assign(f1, c2, Phase::Reliability));
+        REQUIRE(project.assign(f2, c3, Phase::Reliability));
+        add(f1, c1, FramingFunction::Problem, {0, 40});
+        add(f1, c1, FramingFunction::Cause, {55, 72});
+        add(f1, c2, FramingFunction::Problem, {4, 22}); // inside sentence 1
+        add(f1, c2, FramingFunction::Remedy, {75, 107});
+        add(f1, c2, FramingFunction::Evaluation, {100, 115}); // crosses sentences 3 and 4
+        add(f2, c3, FramingFunction::Evaluation, {0, 10});
+    }
+    void add(ArticleId a, CoderId c, FramingFunction f, TextRange r)
+    {
+        AddAnnotationEdit edit(a, c, AnnotationContent {f, r, {}, {}, {}}, Phase::Reliability);
+        REQUIRE(project.apply(edit));
+    }
+};
+
+} // namespace
+
+TEST_CASE("sentence units: presence of one function, and missing where a coder did not code")
+{
+    UnitsFixture f;
+    UnitSelection s;
+    s.unit = UnitKind::Sentence;
+    s.function = FramingFunction::Problem;
+    auto t = unitTable(f.project, s);
+    REQUIRE(t);
+    CHECK(t->coders
+        == QStringList {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")});
+    // f1 has 4 sentences, f2 has 3 ("bijv." does not end one): 7 units.
+    REQUIRE(t->units.size() == 7);
+    CHECK(t->units[0] == QStringLiteral("f1#s1"));
+    CHECK(t->cells[0]
+        == QStringList {QStringLiteral("present"), QStringLiteral("present"), QString()});
+    CHECK(
+        t->cells[1] == QStringList {QStringLiteral("absent"), QStringLiteral("absent"), QString()});
+    // In f2 only C03 coded: the others are missing, never "absent".
+    CHECK(t->cells[4] == QStringList {QString(), QString(), QStringLiteral("absent")});
+}
+
+TEST_CASE("sentence units with all functions hold the set of functions")
+{
+    UnitsFixture f;
+    UnitSelection s;
+    s.unit = UnitKind::Sentence;
+    auto t = unitTable(f.project, s);
+    REQUIRE(t);
+    CHECK(t->cells[1] == QStringList {QStringLiteral("cause"), QStringLiteral("{}"), QString()});
+    CHECK(t->cells[2]
+        == QStringList {QStringLiteral("{}"), QStringLiteral("evaluation|remedy"), QString()});
+    CHECK(
+        t->cells[3] == QStringList {QStringLiteral("{}"), QStringLiteral("evaluation"), QString()});
+    CHECK(t->cells[4] == QStringList {QString(), QString(), QStringLiteral("evaluation")});
+}
+
+TEST_CASE("paragraph and token units; coders can be chosen")
+{
+    UnitsFixture f;
+    UnitSelection s;
+    s.unit = UnitKind::Paragraph;
+    s.function = FramingFunction::Remedy;
+    s.coders = {QStringLiteral("C02"), QStringLiteral("C01")};
+    auto t = unitTable(f.project, s);
+    REQUIRE(t);
+    CHECK(t->coders == QStringList {QStringLiteral("C02"), QStringLiteral("C01")});
+    // f1's two paragraphs (f2 was coded by neither C01 nor C02, so it has no units).
+    REQUIRE(t->units == QStringList {QStringLiteral("f1#p1"), QStringLiteral("f1#p2")});
+    CHECK(t->cells[1] == QStringList {QStringLiteral("present"), QStringLiteral("absent")});
+
+    s.unit = UnitKind::Token;
+    s.function = FramingFunction::Problem;
+    auto tokens = unitTable(f.project, s);
+    REQUIRE(tokens);
+    // Tokens "The ferry to Brakwater will stop in May ." — C02's span [4,22) covers
+    // ferry..Brakwater.
+    CHECK(tokens->cells[0] == QStringList {QStringLiteral("absent"), QStringLiteral("present")});
+    CHECK(tokens->cells[1] == QStringList {QStringLiteral("present"), QStringLiteral("present")});
+    CHECK(tokens->cells[4] == QStringList {QStringLiteral("absent"), QStringLiteral("present")});
+}
+
+TEST_CASE("article units carry the answers to an item")
+{
+    UnitsFixture f;
+    SetJudgementEdit a(f.f1, f.c1, QStringLiteral("dominant_function"), QStringLiteral("problem"),
+        Phase::Reliability);
+    SetJudgementEdit b(f.f1, f.c2, QStringLiteral("dominant_function"), QStringLiteral("remedy"),
+        Phase::Reliability);
+    REQUIRE(f.project.apply(a));
+    REQUIRE(f.project.apply(b));
+    UnitSelection s;
+    s.unit = UnitKind::Article;
+    auto t = unitTable(f.project, s);
+    REQUIRE(t);
+    REQUIRE(t->units == QStringList {QStringLiteral("f1"), QStringLiteral("f2")});
+    CHECK(t->cells[0]
+        == QStringList {QStringLiteral("problem"), QStringLiteral("remedy"), QString()});
+    CHECK(t->cells[1] == QStringList {QString(), QString(), QString()});
+}
+
+TEST_CASE("the continuum holds the articles every coder coded, with merged spans")
+{
+    UnitsFixture f;
+    f.add(f.f1, f.c1, FramingFunction::Problem, {30, 50}); // overlaps C01's [0,40): merged
+    UnitSelection s;
+    s.unit = UnitKind::Continuum;
+    s.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+    auto c = continuumData(f.project, s);
+    REQUIRE(c);
+    CHECK(c->articles == QStringList {QStringLiteral("f1")});
+    CHECK(c->length == 125);
+    int problemUnitsOfC01 = 0;
+    for (const auto &u : c->units)
+        if (u.coder == 0 && u.category == int(FramingFunction::Problem)) {
+            ++problemUnitsOfC01;
+            CHECK(u.begin == 0);
+            CHECK(u.end == 50);
+        }
+    CHECK(problemUnitsOfC01 == 1);
+
+    s.coders.clear();
+    auto none = continuumData(f.project, s); // C03 coded only f2, the others only f1
+    REQUIRE_FALSE(none);
+    CHECK(none.error().code == ErrorCode::NotFound);
+}
+
+TEST_CASE("fewer than two coders or an unknown coder are refused")
+{
+    UnitsFixture f;
+    UnitSelection s;
+    s.coders = {QStringLiteral("C01")};
+    auto one = unitTable(f.project, s);
+    REQUIRE_FALSE(one);
+    CHECK(one.error().code == ErrorCode::InvalidArgument);
+    s.coders = {QStringLiteral("C01"), QStringLiteral("C99")};
+    auto unknown = unitTable(f.project, s);
+    REQUIRE_FALSE(unknown);
+    CHECK(unknown.error().code == ErrorCode::NotFound);
+}

@@ -1,0 +1,49 @@
+#include "core/io/reliability_table_reader.h"
+#include "tests/support/test_support.h"
+
+using namespace fourfold;
+using fourfold::test::writeFile;
+
+TEST_CASE("a reliability matrix reads with missing cells and quoted values")
+{
+    QTemporaryDir dir;
+    const QString path =
+        writeFile(dir, QStringLiteral("m.csv"), "unit,A,B,C\nu1,x,,\"y, z\"\r\nu2, x ,x,x\n");
+    auto t = readReliabilityTable(path);
+    REQUIRE(t);
+    CHECK(t->coders == QStringList {QStringLiteral("A"), QStringLiteral("B"), QStringLiteral("C")});
+    CHECK(t->units == QStringList {QStringLiteral("u1"), QStringLiteral("u2")});
+    CHECK(t->cells[0] == QStringList {QStringLiteral("x"), QString(), QStringLiteral("y, z")});
+    CHECK(
+        t->cells[1] == QStringList {QStringLiteral("x"), QStringLiteral("x"), QStringLiteral("x")});
+    CHECK(t->lines == std::vector<qint64> {2, 3});
+}
+
+TEST_CASE("malformed matrices are refused with the line and what is wrong")
+{
+    struct Case {
+        const char *name;
+        QByteArray content;
+        qint64 line;
+        const char *expected;
+    };
+    const Case cases[] = {
+        {"empty file", "", 1, "the file is empty"},
+        {"one coder only", "unit,A\nu1,x\n", 1, "at least two coders"},
+        {"header without unit", "id,A,B\nu1,x,y\n", 1, "must be \"unit\""},
+        {"ragged row", "unit,A,B\nu1,x,y\nu2,x\n", 3, "has 2 fields but the header has 3"},
+        {"repeated unit", "unit,A,B\nu1,x,y\nu1,x,x\n", 3, "appears twice (first on line 2)"},
+        {"repeated coder", "unit,A,A\nu1,x,y\n", 1, "appears twice in the header"},
+        {"header only", "unit,A,B\n", 1, "no units"},
+        {"unterminated quote", "unit,A,B\nu1,\"x,y\n", 2, "quote"},
+    };
+    for (const Case &c : cases) {
+        INFO(c.name);
+        QTemporaryDir dir;
+        auto t = readReliabilityTable(writeFile(dir, QStringLiteral("m.csv"), c.content));
+        REQUIRE_FALSE(t);
+        CHECK(t.error().code == ErrorCode::InvalidInput);
+        CHECK(t.error().line == c.line);
+        CHECK(t.error().message.contains(QString::fromUtf8(c.expected)));
+    }
+}
