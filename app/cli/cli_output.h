@@ -37,5 +37,6 @@ int runImport(const QStringList &arguments);
 int runInfo(const QStringList &arguments);
 int runCheck(const QStringList &arguments);
 int runBuildSample(const QStringList &arguments);
+int runAgree(const QStringList &arguments);
 
 } // namespace fourfold::cli

@@ -31,6 +31,7 @@ const std::map<QString, Command> &commands()
                 runInfo}},
         {QStringLiteral("check"),
             {QT_TRANSLATE_NOOP("cli", "Check a project file's integrity."), runCheck}},
+        {QStringLiteral("agree"), {QT_TRANSLATE_NOOP("cli", "Inter-coder reliability of a matrix file or of a project's codings."), runAgree}},
         {QStringLiteral("build-sample"),
             {QT_TRANSLATE_NOOP("cli", "Build the demo project from its source files."),
                 runBuildSample}},

@@ -1,0 +1,232 @@
+// agree: inter-coder reliability of a raw matrix (--data FILE.csv) or of a project's codings.
+
+#include "app/cli/cli_output.h"
+#include "core/agreement/agreement_report.h"
+#include "core/agreement/project_units.h"
+#include "core/project/project.h"
+#include "core/reliability/unitizing_alpha.h"
+
+#include <QCoreApplication>
+#include <QJsonArray>
+
+namespace fourfold::cli {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("cli", text);
+}
+
+QJsonObject unitizingJson(const reliability::UnitizingCategoryResult &r)
+{
+    QJsonObject o {
+        {QStringLiteral("value"), r.value ? QJsonValue(*r.value) : QJsonValue(QJsonValue::Null)},
+        {QStringLiteral("observed_disagreement"), r.observedDisagreement},
+        {QStringLiteral("expected_disagreement"), r.expectedDisagreement},
+        {QStringLiteral("verdict"), alphaVerdict(r.value)}};
+    if (!r.value)
+        o.insert(QStringLiteral("reason"), QString::fromStdString(r.reason));
+    return o;
+}
+
+int runContinuum(const Project &project, const UnitSelection &selection, bool json)
+{
+    auto continuum = continuumData(project, selection);
+    if (!continuum)
+        return report(continuum.error());
+    const reliability::UnitizingResult result = reliability::unitizingAlpha(0, continuum->length,
+        int(continuum->coders.size()), continuum->categories, continuum->units);
+    if (!result.inputError.empty())
+        return report(Error {ErrorCode::Internal, tr("The continuum could not be compared."),
+            QString::fromStdString(result.inputError), {}, 0, 0});
+    QStringList names;
+    if (selection.function)
+        names << functionKey(*selection.function);
+    else
+        for (FramingFunction f : kFramingFunctions)
+            names << functionKey(f);
+    if (json) {
+        QJsonObject perFunction;
+        for (qsizetype i = 0; i < names.size() && size_t(i) < result.perCategory.size(); ++i)
+            perFunction.insert(names[i], unitizingJson(result.perCategory[size_t(i)]));
+        printJson(QJsonObject {{QStringLiteral("unit"), QStringLiteral("continuum")},
+            {QStringLiteral("coders"), QJsonArray::fromStringList(continuum->coders)},
+            {QStringLiteral("articles"), QJsonArray::fromStringList(continuum->articles)},
+            {QStringLiteral("length"), qint64(continuum->length)},
+            {QStringLiteral("unitizing_alpha"),
+                QJsonObject {{QStringLiteral("per_function"), perFunction},
+                    {QStringLiteral("overall"), unitizingJson(result.overall)}}}});
+        return ExitOk;
+    }
+    out(tr("Coders        %1 (%2)")
+            .arg(continuum->coders.size())
+            .arg(continuum->coders.join(QStringLiteral(", "))));
+    out(tr("Continuum     %1 articles coded by all, %2 characters")
+            .arg(continuum->articles.size())
+            .arg(continuum->length));
+    auto line = [](const QString &name, const reliability::UnitizingCategoryResult &r) {
+        return QStringLiteral("  %1 %2  %3")
+            .arg(name, -12)
+            .arg(r.value ? QString::number(*r.value, 'f', 3) : tr("undefined"), 9)
+            .arg(r.value ? alphaVerdict(r.value) : QString::fromStdString(r.reason));
+    };
+    out(tr("Unitizing alpha (Krippendorff 2004)"));
+    for (qsizetype i = 0; i < names.size() && size_t(i) < result.perCategory.size(); ++i)
+        out(line(names[i], result.perCategory[size_t(i)]));
+    if (names.size() > 1)
+        out(line(tr("all"), result.overall));
+    return ExitOk;
+}
+
+} // namespace
+
+int runAgree(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("agree");
+    QCommandLineParser parser;
+    const QCommandLineOption data(QStringLiteral("data"),
+        tr("A raw reliability matrix: CSV with the header unit,<coder>,<coder>,...; an empty cell "
+           "is missing."),
+        QStringLiteral("FILE"));
+    const QCommandLineOption level(QStringLiteral("level"),
+        tr("Level of measurement: nominal (default), ordinal, interval or ratio."),
+        QStringLiteral("LEVEL"), QStringLiteral("nominal"));
+    const QCommandLineOption order(QStringLiteral("order"),
+        tr("Ordinal labels from lowest to highest, e.g. negative,neutral,positive."),
+        QStringLiteral("A,B,C"));
+    const QCommandLineOption distance(QStringLiteral("distance"),
+        tr("Cells are sets of labels separated by | ({} = empty set), compared with jaccard or "
+           "masi."),
+        QStringLiteral("NAME"));
+    const QCommandLineOption unit(QStringLiteral("unit"),
+        tr("With a project: article, paragraph, sentence, token or continuum."),
+        QStringLiteral("UNIT"));
+    const QCommandLineOption function(QStringLiteral("function"),
+        tr("With a project: problem, cause, evaluation, remedy or all (default all)."),
+        QStringLiteral("FUNCTION"), QStringLiteral("all"));
+    const QCommandLineOption coders(QStringLiteral("coders"),
+        tr("With a project: the coders' pseudonyms (default: everyone who coded)."),
+        QStringLiteral("A,B,..."));
+    const QCommandLineOption phase(QStringLiteral("phase"),
+        tr("With a project: only this phase (training, pilot, reliability, production)."),
+        QStringLiteral("PHASE"));
+    const QCommandLineOption item(QStringLiteral("item"),
+        tr("With --unit article: the article-level item (default dominant_function)."),
+        QStringLiteral("KEY"), QStringLiteral("dominant_function"));
+    const QCommandLineOption bootstrap(QStringLiteral("bootstrap"),
+        tr("Bootstrap replicates for alpha's 95% interval (both methods, labelled)."),
+        QStringLiteral("N"), QStringLiteral("0"));
+    const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
+        QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
+    parser.addOptions(
+        {data, level, order, distance, unit, function, coders, phase, item, bootstrap, seed, json});
+    parser.addPositionalArgument(
+        QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
+    if (int rc = parseCommandLine(parser, command,
+            tr("Inter-coder reliability: Krippendorff's alpha (with bootstrap intervals), percent "
+               "agreement, Cohen's, "
+               "Fleiss' and Light's kappa, Scott's pi, Bennett's S; unitizing alpha on the "
+               "continuum."),
+            arguments);
+        rc >= 0)
+        return rc;
+
+    AgreementOptions agreementOptions;
+    bool ok = false;
+    agreementOptions.bootstrapReplicates = parser.value(bootstrap).toInt(&ok);
+    if (!ok || agreementOptions.bootstrapReplicates < 0
+        || agreementOptions.bootstrapReplicates > 1000000)
+        return usageError(
+            command, tr("--bootstrap expects a number of replicates from 0 to 1000000."));
+    agreementOptions.seed = parser.value(seed).toULongLong(&ok);
+    if (!ok)
+        return usageError(command, tr("--seed expects a non-negative whole number."));
+
+    EncodingOptions encoding;
+    const auto levelValue = levelFromKey(parser.value(level));
+    if (!levelValue)
+        return usageError(command,
+            tr("unknown level \"%1\" (expected nominal, ordinal, interval or ratio).")
+                .arg(parser.value(level)));
+    encoding.level = *levelValue;
+    if (parser.isSet(order)) {
+        encoding.order = parser.value(order).split(QLatin1Char(','));
+        for (QString &o : encoding.order)
+            o = o.trimmed();
+        if (encoding.level != reliability::Level::Ordinal)
+            return usageError(
+                command, tr("--order is for the ordinal level; add --level ordinal."));
+    }
+    if (parser.isSet(distance)) {
+        encoding.distance = setDistanceFromKey(parser.value(distance));
+        if (!encoding.distance)
+            return usageError(command,
+                tr("unknown distance \"%1\" (expected jaccard or masi).")
+                    .arg(parser.value(distance)));
+    }
+
+    ReliabilityTable table;
+    QString scale;
+    if (parser.isSet(data)) {
+        if (!parser.positionalArguments().isEmpty())
+            return usageError(command, tr("give either --data FILE or a project, not both."));
+        auto read = readReliabilityTable(parser.value(data));
+        if (!read)
+            return report(read.error());
+        table = std::move(*read);
+    } else {
+        if (parser.positionalArguments().size() != 1)
+            return usageError(command, tr("expected a project file, or --data FILE."));
+        if (!parser.isSet(unit))
+            return usageError(command,
+                tr("with a project, say which units to compare: --unit "
+                   "article|paragraph|sentence|token|continuum."));
+        UnitSelection selection;
+        const auto kind = unitKindFromKey(parser.value(unit));
+        if (!kind)
+            return usageError(command, tr("unknown unit \"%1\".").arg(parser.value(unit)));
+        selection.unit = *kind;
+        if (parser.value(function) != QLatin1String("all")) {
+            selection.function = functionFromKey(parser.value(function));
+            if (!selection.function)
+                return usageError(command,
+                    tr("unknown function \"%1\" (expected problem, cause, evaluation, remedy or "
+                       "all).")
+                        .arg(parser.value(function)));
+        }
+        if (parser.isSet(coders))
+            selection.coders = parser.value(coders).split(QLatin1Char(','), Qt::SkipEmptyParts);
+        if (parser.isSet(phase)) {
+            selection.phase = phaseFromKey(parser.value(phase));
+            if (!selection.phase)
+                return usageError(command, tr("unknown phase \"%1\".").arg(parser.value(phase)));
+        }
+        selection.item = parser.value(item);
+        auto project = Project::open(parser.positionalArguments().first());
+        if (!project)
+            return report(project.error());
+        if (selection.unit == UnitKind::Continuum)
+            return runContinuum(*project, selection, parser.isSet(json));
+        auto built = unitTable(*project, selection);
+        if (!built)
+            return report(built.error());
+        table = std::move(*built);
+        if (selection.unit != UnitKind::Article && !selection.function && !encoding.distance)
+            encoding.distance = reliability::SetDistance::Masi;
+    }
+    scale = encoding.distance ? setDistanceKey(*encoding.distance) : levelKey(encoding.level);
+    auto encoded = encodeTable(table, encoding);
+    if (!encoded)
+        return report(encoded.error());
+    const AgreementReport result =
+        computeAgreement(*encoded, table.coders, scale, agreementOptions);
+    if (parser.isSet(json))
+        printJson(agreementJson(result));
+    else
+        out(agreementText(result));
+    return ExitOk;
+}
+
+} // namespace fourfold::cli
