@@ -4,6 +4,7 @@
 #include "core/agreement/agreement_report.h"
 #include "core/agreement/project_units.h"
 #include "core/project/project.h"
+#include "core/reliability/span_scores.h"
 #include "core/reliability/unitizing_alpha.h"
 
 #include <QCoreApplication>
@@ -30,6 +31,37 @@ QJsonObject unitizingJson(const reliability::UnitizingCategoryResult &r)
     return o;
 }
 
+// Positive specific agreement per coder pair and function: strict span F1 (same boundaries) and
+// overlap F1 (any overlap), which are symmetric in the pair (Hripcsak & Rothschild 2005).
+struct PairSpanAgreement {
+    int a = 0, b = 0;
+    std::vector<std::optional<double>> strict, overlap; // per category
+};
+
+std::vector<PairSpanAgreement> spanAgreement(const ContinuumData &c)
+{
+    std::vector<PairSpanAgreement> out;
+    for (int a = 0; a < int(c.coders.size()); ++a)
+        for (int b = a + 1; b < int(c.coders.size()); ++b) {
+            PairSpanAgreement p;
+            p.a = a;
+            p.b = b;
+            for (int category = 0; category < c.categories; ++category) {
+                std::vector<reliability::LabelledSpan> ref, pred;
+                for (const reliability::ContinuumUnit &u : c.units)
+                    if (u.category == category && (u.coder == a || u.coder == b))
+                        (u.coder == a ? ref : pred)
+                            .push_back(reliability::LabelledSpan {0, 0, u.begin, u.end});
+                p.strict.push_back(
+                    reliability::scoreSpans(ref, pred, 1, reliability::MatchMode::Strict).micro.f1);
+                p.overlap.push_back(
+                    reliability::scoreSpans(ref, pred, 1, reliability::MatchMode::Type).micro.f1);
+            }
+            out.push_back(p);
+        }
+    return out;
+}
+
 int runContinuum(const Project &project, const UnitSelection &selection, bool json)
 {
     auto continuum = continuumData(project, selection);
@@ -50,7 +82,25 @@ int runContinuum(const Project &project, const UnitSelection &selection, bool js
         QJsonObject perFunction;
         for (qsizetype i = 0; i < names.size() && size_t(i) < result.perCategory.size(); ++i)
             perFunction.insert(names[i], unitizingJson(result.perCategory[size_t(i)]));
+        QJsonArray pairs;
+        for (const PairSpanAgreement &p : spanAgreement(*continuum)) {
+            QJsonObject per;
+            for (qsizetype i = 0; i < names.size(); ++i) {
+                const auto &strict = p.strict[size_t(i)];
+                const auto &overlap = p.overlap[size_t(i)];
+                per.insert(names[i],
+                    QJsonObject {
+                        {QStringLiteral("strict_f1"), strict ? QJsonValue(*strict) : QJsonValue()},
+                        {QStringLiteral("overlap_f1"),
+                            overlap ? QJsonValue(*overlap) : QJsonValue()}});
+            }
+            pairs.append(
+                QJsonObject {{QStringLiteral("coders"),
+                                 QJsonArray {continuum->coders[p.a], continuum->coders[p.b]}},
+                    {QStringLiteral("per_function"), per}});
+        }
         printJson(QJsonObject {{QStringLiteral("unit"), QStringLiteral("continuum")},
+            {QStringLiteral("span_agreement"), pairs},
             {QStringLiteral("coders"), QJsonArray::fromStringList(continuum->coders)},
             {QStringLiteral("articles"), QJsonArray::fromStringList(continuum->articles)},
             {QStringLiteral("length"), qint64(continuum->length)},
@@ -76,6 +126,20 @@ int runContinuum(const Project &project, const UnitSelection &selection, bool js
         out(line(names[i], result.perCategory[size_t(i)]));
     if (names.size() > 1)
         out(line(tr("all"), result.overall));
+    out(tr("Positive specific agreement per pair (span F1: same boundaries / any overlap)"));
+    for (const PairSpanAgreement &p : spanAgreement(*continuum)) {
+        QStringList parts;
+        for (qsizetype i = 0; i < names.size(); ++i)
+            parts << QStringLiteral("%1 %2/%3")
+                         .arg(names[i])
+                         .arg(p.strict[size_t(i)] ? QString::number(*p.strict[size_t(i)], 'f', 2)
+                                                  : QStringLiteral("–"))
+                         .arg(p.overlap[size_t(i)] ? QString::number(*p.overlap[size_t(i)], 'f', 2)
+                                                   : QStringLiteral("–"));
+        out(QStringLiteral("  %1 × %2  %3")
+                .arg(continuum->coders[p.a], continuum->coders[p.b],
+                    parts.join(QStringLiteral("  "))));
+    }
     return ExitOk;
 }
 
@@ -100,7 +164,8 @@ int runAgree(const QStringList &arguments)
            "masi."),
         QStringLiteral("NAME"));
     const QCommandLineOption unit(QStringLiteral("unit"),
-        tr("With a project: article, paragraph, sentence, token or continuum."),
+        tr("With a project: article, paragraph, sentence, token, span (an attribute on matched "
+           "passages) or continuum."),
         QStringLiteral("UNIT"));
     const QCommandLineOption function(QStringLiteral("function"),
         tr("With a project: problem, cause, evaluation, remedy or all (default all)."),
@@ -111,6 +176,12 @@ int runAgree(const QStringList &arguments)
     const QCommandLineOption phase(QStringLiteral("phase"),
         tr("With a project: only this phase (training, pilot, reliability, production)."),
         QStringLiteral("PHASE"));
+    const QCommandLineOption attribute(QStringLiteral("attribute"),
+        tr("With --unit span: the attribute compared on passages matched across coders, e.g. "
+           "polarity (with --function evaluation)."),
+        QStringLiteral("KEY"));
+    const QCommandLineOption articles(QStringLiteral("articles"),
+        tr("With a project: only these articles (ids)."), QStringLiteral("ID,..."));
     const QCommandLineOption item(QStringLiteral("item"),
         tr("With --unit article: the article-level item (default dominant_function)."),
         QStringLiteral("KEY"), QStringLiteral("dominant_function"));
@@ -120,8 +191,8 @@ int runAgree(const QStringList &arguments)
     const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
         QStringLiteral("S"), QStringLiteral("1"));
     const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
-    parser.addOptions(
-        {data, level, order, distance, unit, function, coders, phase, item, bootstrap, seed, json});
+    parser.addOptions({data, level, order, distance, unit, function, coders, phase, articles, item,
+        attribute, bootstrap, seed, json});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
     if (int rc = parseCommandLine(parser, command,
@@ -182,7 +253,7 @@ int runAgree(const QStringList &arguments)
         if (!parser.isSet(unit))
             return usageError(command,
                 tr("with a project, say which units to compare: --unit "
-                   "article|paragraph|sentence|token|continuum."));
+                   "article|paragraph|sentence|token|span|continuum."));
         UnitSelection selection;
         const auto kind = unitKindFromKey(parser.value(unit));
         if (!kind)
@@ -204,16 +275,49 @@ int runAgree(const QStringList &arguments)
                 return usageError(command, tr("unknown phase \"%1\".").arg(parser.value(phase)));
         }
         selection.item = parser.value(item);
+        selection.attribute = parser.value(attribute);
+        if (parser.isSet(articles))
+            selection.articles = parser.value(articles).split(QLatin1Char(','), Qt::SkipEmptyParts);
         auto project = Project::open(parser.positionalArguments().first());
         if (!project)
             return report(project.error());
+        // Span attributes and article items take their level and value order from the codebook
+        // unless the command line says otherwise.
+        if (!parser.isSet(level) && !parser.isSet(order)) {
+            auto book = project->codebook();
+            if (!book)
+                return report(book.error());
+            std::optional<MeasurementLevel> bookLevel;
+            QStringList bookValues;
+            if (selection.unit == UnitKind::Span && selection.function) {
+                for (const AttributeSpec &a : book->definition(*selection.function).attributes)
+                    if (a.key == selection.attribute) {
+                        bookLevel = a.level;
+                        bookValues = a.values;
+                    }
+                if (!bookLevel)
+                    return usageError(command,
+                        tr("the codebook has no attribute \"%1\" for %2.")
+                            .arg(selection.attribute, functionKey(*selection.function)));
+            } else if (selection.unit == UnitKind::Article) {
+                if (const ArticleItem *i = book->item(selection.item)) {
+                    bookLevel = i->level;
+                    bookValues = i->values;
+                }
+            }
+            if (bookLevel == MeasurementLevel::Ordinal) {
+                encoding.level = reliability::Level::Ordinal;
+                encoding.order = bookValues;
+            }
+        }
         if (selection.unit == UnitKind::Continuum)
             return runContinuum(*project, selection, parser.isSet(json));
         auto built = unitTable(*project, selection);
         if (!built)
             return report(built.error());
         table = std::move(*built);
-        if (selection.unit != UnitKind::Article && !selection.function && !encoding.distance)
+        if (selection.unit != UnitKind::Article && selection.unit != UnitKind::Span
+            && !selection.function && !encoding.distance)
             encoding.distance = reliability::SetDistance::Masi;
     }
     scale = encoding.distance ? setDistanceKey(*encoding.distance) : levelKey(encoding.level);

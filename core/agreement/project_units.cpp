@@ -115,6 +115,58 @@ Result<Selection> gather(const Project &project, const UnitSelection &sel)
     return s;
 }
 
+// Span units of one article: passages of overlapping spans (union-find over the overlap graph)
+// and each coder's attribute value in each passage.
+void addSpanUnits(ReliabilityTable &table, const QString &articleId,
+    const std::vector<const Annotation *> &spans, const QHash<qint64, int> &coderIndex,
+    const QString &attribute, qsizetype coders)
+{
+    const size_t n = spans.size();
+    std::vector<size_t> parent(n);
+    for (size_t i = 0; i < n; ++i)
+        parent[i] = i;
+    auto find = [&](size_t i) {
+        while (parent[i] != i)
+            i = parent[i] = parent[parent[i]];
+        return i;
+    };
+    for (size_t i = 0; i < n; ++i)
+        for (size_t j = i + 1; j < n; ++j)
+            if (spans[i]->coder != spans[j]->coder
+                && spans[i]->content.range.overlaps(spans[j]->content.range))
+                parent[find(i)] = find(j);
+    // Components in order of their first span's start (spans come sorted by start).
+    std::vector<size_t> order;
+    std::map<size_t, std::vector<size_t>> members;
+    for (size_t i = 0; i < n; ++i) {
+        const size_t root = find(i);
+        if (!members.count(root))
+            order.push_back(root);
+        members[root].push_back(i);
+    }
+    int passage = 0;
+    for (size_t root : order) {
+        const std::vector<size_t> &m = members[root];
+        // Coders without a span in the passage are missing: an attribute of nothing is not a value.
+        QStringList row(coders, QString());
+        std::vector<qint64> bestOverlap(size_t(row.size()), -1);
+        for (size_t i : m) {
+            qint64 overlap = 0;
+            for (size_t j : m)
+                if (spans[j]->coder != spans[i]->coder)
+                    if (auto x = spans[i]->content.range.intersect(spans[j]->content.range))
+                        overlap += x->length();
+            const int c = coderIndex.value(spans[i]->coder.value);
+            if (overlap > bestOverlap[size_t(c)]) {
+                bestOverlap[size_t(c)] = overlap;
+                row[c] = spans[i]->content.attributes.value(attribute).toString().trimmed();
+            }
+        }
+        table.units << QStringLiteral("%1#a%2").arg(articleId).arg(++passage);
+        table.cells.push_back(row);
+    }
+}
+
 QString setLabel(unsigned mask)
 {
     QStringList keys;
@@ -137,6 +189,8 @@ QString unitKindKey(UnitKind kind)
         return QStringLiteral("sentence");
     case UnitKind::Token:
         return QStringLiteral("token");
+    case UnitKind::Span:
+        return QStringLiteral("span");
     case UnitKind::Continuum:
         return QStringLiteral("continuum");
     }
@@ -146,7 +200,7 @@ QString unitKindKey(UnitKind kind)
 std::optional<UnitKind> unitKindFromKey(const QString &key)
 {
     for (UnitKind k : {UnitKind::Article, UnitKind::Paragraph, UnitKind::Sentence, UnitKind::Token,
-             UnitKind::Continuum})
+             UnitKind::Span, UnitKind::Continuum})
         if (unitKindKey(k) == key)
             return k;
     return std::nullopt;
@@ -157,6 +211,9 @@ Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &
     if (sel.unit == UnitKind::Continuum)
         return fail(ErrorCode::InvalidArgument,
             tr("Continuum units are compared with unitizing alpha, not as a table."));
+    if (sel.unit == UnitKind::Span && (!sel.function || sel.attribute.isEmpty()))
+        return fail(ErrorCode::InvalidArgument,
+            tr("Span units compare an attribute: name one function and one of its attributes."));
     auto gathered = gather(project, sel);
     if (!gathered)
         return std::unexpected(gathered.error());
@@ -181,6 +238,20 @@ Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &
         if (!anyCoder)
             continue;
 
+        if (sel.unit == UnitKind::Span) {
+            std::vector<const Annotation *> articleSpans;
+            for (qsizetype c = 0; c < coders; ++c)
+                if (auto it = spans.find({articleId, int(c)}); it != spans.end())
+                    articleSpans.insert(articleSpans.end(), it->second.begin(), it->second.end());
+            std::sort(articleSpans.begin(), articleSpans.end(),
+                [](const Annotation *a, const Annotation *b) {
+                    return std::pair(a->content.range.start, a->id.value)
+                        < std::pair(b->content.range.start, b->id.value);
+                });
+            addSpanUnits(
+                table, summary.externalId, articleSpans, s.coderIndex, sel.attribute, coders);
+            continue;
+        }
         if (sel.unit == UnitKind::Article) {
             QStringList row(coders, QString());
             for (const Judgement &j : s.judgements)

@@ -18,8 +18,9 @@ namespace fourfold {
 
 class Project;
 
-enum class UnitKind { Article, Paragraph, Sentence, Token, Continuum };
-QString unitKindKey(UnitKind kind); // "article", "paragraph", "sentence", "token", "continuum"
+enum class UnitKind { Article, Paragraph, Sentence, Token, Span, Continuum };
+// "article", "paragraph", "sentence", "token", "span", "continuum"
+QString unitKindKey(UnitKind kind);
 std::optional<UnitKind> unitKindFromKey(const QString &key);
 
 struct UnitSelection {
@@ -34,14 +35,22 @@ struct UnitSelection {
     QStringList articles;
     // The article-level item for UnitKind::Article.
     QString item = QStringLiteral("dominant_function");
+    // The span attribute for UnitKind::Span (e.g. "polarity" of evaluation spans).
+    QString attribute;
 };
 
 // The units × coders table for article, paragraph, sentence or token units. A unit's value for
 // a coder: "present"/"absent" (one function: a span of that function overlaps the unit by at
 // least one code point), the set of functions of overlapping spans ("cause|problem", "{}" for
 // none), or the answer to the item (article units). Unit ids are "<article id>#p3" (paragraph
-// 3, 1-based), "#s12", "#t120", or the article id. Fails with NotFound for an unknown coder or
-// article, InvalidArgument for the continuum (see continuumData) or fewer than two coders.
+// 3, 1-based), "#s12", "#t120", or the article id.
+// Span units (attributes on passages matched across coders): the spans of the selected function
+// that overlap across coders form one passage (connected components of the overlap graph); a
+// coder's value is the attribute of their span in the passage that overlaps the others most
+// (missing when they have none there or left the attribute empty). Unit ids "<article>#a3".
+// Fails with NotFound for an unknown coder or article, InvalidArgument for the continuum (see
+// continuumData), for span units without one function and an attribute, or fewer than two
+// coders.
 Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &selection);
 
 // The continuum for unitizing alpha: the texts of the articles that every selected coder coded,

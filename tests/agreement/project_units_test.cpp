@@ -159,3 +159,38 @@ TEST_CASE("fewer than two coders or an unknown coder are refused")
     REQUIRE_FALSE(unknown);
     CHECK(unknown.error().code == ErrorCode::NotFound);
 }
+
+TEST_CASE("span units compare an attribute on passages matched across coders")
+{
+    UnitsFixture f;
+    auto add = [&](CoderId c, TextRange r, const char *polarity) {
+        AnnotationContent content{FramingFunction::Evaluation, r, {}, {}, {}};
+        if (polarity)
+            content.attributes.insert(QStringLiteral("polarity"), QString::fromLatin1(polarity));
+        AddAnnotationEdit edit(f.f1, c, content, Phase::Reliability);
+        REQUIRE(f.project.apply(edit));
+    };
+    // The fixture's C02 evaluation [100,115) has no polarity. Passage 1: C01 [0,30) negative and
+    // C02 [10,40) neutral overlap; passage 2 is C01's [41,50) alone; passage 3 joins C01's
+    // [108,125) positive with C02's [100,115), whose empty polarity is missing.
+    add(f.c1, {0, 30}, "negative");
+    add(f.c2, {10, 40}, "neutral");
+    add(f.c1, {108, 125}, "positive");
+    add(f.c1, {41, 50}, "negative");
+    UnitSelection s;
+    s.unit = UnitKind::Span;
+    s.function = FramingFunction::Evaluation;
+    s.attribute = QStringLiteral("polarity");
+    s.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+    auto t = unitTable(f.project, s);
+    REQUIRE(t);
+    REQUIRE(t->units == QStringList{QStringLiteral("f1#a1"), QStringLiteral("f1#a2"), QStringLiteral("f1#a3")});
+    CHECK(t->cells[0] == QStringList{QStringLiteral("negative"), QStringLiteral("neutral")});
+    CHECK(t->cells[1] == QStringList{QStringLiteral("negative"), QString()});
+    CHECK(t->cells[2] == QStringList{QStringLiteral("positive"), QString()});
+
+    s.attribute.clear();
+    auto refused = unitTable(f.project, s);
+    REQUIRE_FALSE(refused);
+    CHECK(refused.error().code == ErrorCode::InvalidArgument);
+}

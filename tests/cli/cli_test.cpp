@@ -5,6 +5,7 @@
 #include <QJsonArray>
 #include <QJsonDocument>
 #include <QJsonObject>
+#include <QJsonValue>
 #include <QProcess>
 
 using namespace fourfold;
@@ -40,7 +41,7 @@ QJsonObject json(const Run &r)
 
 TEST_CASE("every subcommand answers --help with exit 0")
 {
-    for (const char *command : {"new", "import", "info", "check", "build-sample"}) {
+    for (const char *command : {"new", "import", "info", "check", "build-sample", "agree"}) {
         INFO(command);
         const Run r = cli({QString::fromLatin1(command), QStringLiteral("--help")});
         CHECK(r.exitCode == 0);
@@ -169,4 +170,95 @@ TEST_CASE("the sample project builds and its figures are true")
     for (auto it = perFunction.cbegin(); it != perFunction.cend(); ++it)
         CHECK(pf.value(it.key()).toInt() == it.value());
     CHECK(info.value(QStringLiteral("coders")).toInt() == 4);
+}
+
+TEST_CASE("agree --data reproduces Krippendorff's worked example and refuses bad matrices")
+{
+    QTemporaryDir dir;
+    // Krippendorff (2011), "Computing Krippendorff's Alpha-Reliability", §C–D (also Krippendorff
+    // 2004, p. 230): 4 coders × 12 units, values 1–5, "." missing → nominal 0.743, interval 0.849.
+    const QString path = writeFile(dir, QStringLiteral("k.csv"),
+                                   "unit,A,B,C,D\n1,1,1,,1\n2,2,2,3,2\n3,3,3,3,3\n4,3,3,3,3\n5,2,2,2,2\n6,1,2,3,4\n"
+                                   "7,4,4,4,4\n8,1,1,2,1\n9,2,2,2,2\n10,,5,5,5\n11,,,1,1\n12,,3,,\n");
+    Run r = cli({QStringLiteral("agree"), QStringLiteral("--data"), path, QStringLiteral("--json")});
+    REQUIRE(r.exitCode == 0);
+    QJsonObject o = json(r);
+    CHECK(o.value(QStringLiteral("pairable_values")).toDouble() == 40);
+    CHECK(o.value(QStringLiteral("pairable_units")).toInt() == 11);
+    CHECK(o.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("value")).toDouble() == Approx(0.743).margin(5e-4));
+    CHECK(o.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("level")).toString() == QStringLiteral("nominal"));
+    // Missing cells: no Cohen's kappa, no Fleiss' kappa.
+    CHECK_FALSE(o.contains(QStringLiteral("cohen_kappa")));
+    CHECK_FALSE(o.contains(QStringLiteral("fleiss_kappa")));
+
+    r = cli({QStringLiteral("agree"), QStringLiteral("--data"), path, QStringLiteral("--level"), QStringLiteral("interval"),
+             QStringLiteral("--bootstrap"), QStringLiteral("200"), QStringLiteral("--seed"), QStringLiteral("5"), QStringLiteral("--json")});
+    REQUIRE(r.exitCode == 0);
+    o = json(r);
+    CHECK(o.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("value")).toDouble() == Approx(0.849).margin(5e-4));
+    const QJsonObject boot = o.value(QStringLiteral("bootstrap")).toObject();
+    CHECK(boot.value(QStringLiteral("method")).toString().contains(QStringLiteral("Hayes & Krippendorff")));
+    CHECK(boot.value(QStringLiteral("replicates")).toInt() == 200);
+    CHECK(boot.value(QStringLiteral("seed")).toString() == QStringLiteral("5"));
+    CHECK(boot.value(QStringLiteral("ci95")).toArray().size() == 2);
+    CHECK(boot.value(QStringLiteral("q_below")).toObject().contains(QStringLiteral("0.667")));
+    CHECK(o.value(QStringLiteral("bootstrap_units")).toObject().value(QStringLiteral("method")).toString().contains(QStringLiteral("unit")));
+
+    // Two coders, complete: the kappa family appears; an undefined alpha is null with a reason.
+    const QString same = writeFile(dir, QStringLiteral("s.csv"), "unit,A,B\n1,x,x\n2,x,x\n");
+    o = json(cli({QStringLiteral("agree"), QStringLiteral("--data"), same, QStringLiteral("--json")}));
+    CHECK(o.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("value")).isNull());
+    CHECK_FALSE(o.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("reason")).toString().isEmpty());
+    CHECK(o.contains(QStringLiteral("cohen_kappa")));
+    CHECK(o.value(QStringLiteral("scott_pi")).isNull());
+    CHECK(o.contains(QStringLiteral("scott_pi_reason")));
+
+    struct Bad {
+        QByteArray content;
+        QStringList extra;
+        const char *expected;
+    };
+    const Bad bad[] = {
+        {"unit,A,B\n1,x,y\n2,x\n", {}, ":3: this row has 2 fields"},
+        {"unit,A,B\n1,1,2\n2,1,two\n", {QStringLiteral("--level"), QStringLiteral("interval")}, ":3: unit \"2\", coder \"B\": \"two\" is not a number"},
+        {"unit,A\n1,x\n", {}, "at least two coders"},
+        {"", {}, "the file is empty"},
+    };
+    for (const Bad &b : bad) {
+        INFO(b.expected);
+        const QString p = writeFile(dir, QStringLiteral("bad.csv"), b.content);
+        r = cli(QStringList{QStringLiteral("agree"), QStringLiteral("--data"), p} + b.extra);
+        CHECK(r.exitCode == 1);
+        CHECK(r.err.contains(QString::fromUtf8(b.expected)));
+        CHECK(r.err.count(QLatin1Char('\n')) == 1);
+    }
+}
+
+TEST_CASE("agree on the sample project: units, functions, continuum")
+{
+    QTemporaryDir dir;
+    const QString project = dir.filePath(QStringLiteral("demo.fourfold"));
+    REQUIRE(cli({QStringLiteral("build-sample"), QStringLiteral(FOURFOLD_SAMPLE_DIR), project}).exitCode == 0);
+    QJsonObject o = json(cli({QStringLiteral("agree"), project, QStringLiteral("--unit"), QStringLiteral("sentence"),
+                              QStringLiteral("--function"), QStringLiteral("remedy"), QStringLiteral("--json")}));
+    CHECK(o.value(QStringLiteral("coders")).toArray().size() == 3);
+    const double remedy = o.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("value")).toDouble();
+    CHECK(remedy > 0.0);
+    CHECK(remedy < 1.0);
+    // Leaving out the coder who misses most remedies (C03) raises agreement on remedies.
+    o = json(cli({QStringLiteral("agree"), project, QStringLiteral("--unit"), QStringLiteral("sentence"), QStringLiteral("--function"),
+                  QStringLiteral("remedy"), QStringLiteral("--coders"), QStringLiteral("C01,C02"), QStringLiteral("--json")}));
+    CHECK(o.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("value")).toDouble() > remedy);
+    CHECK(o.contains(QStringLiteral("cohen_kappa")));
+
+    o = json(cli({QStringLiteral("agree"), project, QStringLiteral("--unit"), QStringLiteral("continuum"), QStringLiteral("--json")}));
+    const QJsonObject u = o.value(QStringLiteral("unitizing_alpha")).toObject();
+    CHECK(u.value(QStringLiteral("per_function")).toObject().size() == 4);
+    CHECK(u.value(QStringLiteral("overall")).toObject().value(QStringLiteral("value")).isDouble());
+    CHECK(o.value(QStringLiteral("span_agreement")).toArray().size() == 3);
+
+    const Run bad = cli({QStringLiteral("agree"), project, QStringLiteral("--unit"), QStringLiteral("sentence"), QStringLiteral("--coders"),
+                         QStringLiteral("C01,C77")});
+    CHECK(bad.exitCode == 1);
+    CHECK(bad.err.contains(QStringLiteral("no coder \"C77\"")));
 }
