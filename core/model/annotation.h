@@ -56,6 +56,7 @@ struct Assignment {
     CoderId coder;
     Phase phase = Phase::Production;
     QString status;  // "assigned", "started", "done"
+    qint64 activeSeconds = 0;
 };
 
 // A coder's answer to an article-level item of the codebook.

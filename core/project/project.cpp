@@ -226,6 +226,19 @@ Result<std::vector<Assignment>> Project::assignments() const
     return store::assignments(m_db);
 }
 
+Status Project::addCodingTime(ArticleId article, CoderId coder, qint64 seconds)
+{
+    if (seconds <= 0)
+        return {};
+    auto all = store::assignments(m_db);
+    if (!all)
+        return std::unexpected(all.error());
+    for (const Assignment &a : *all)
+        if (a.article == article && a.coder == coder)
+            return store::addAssignmentSeconds(m_db, article, coder, a.phase, seconds);
+    return {};
+}
+
 Status Project::apply(Edit &edit)
 {
     auto sp = Savepoint::begin(m_db);

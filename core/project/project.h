@@ -88,6 +88,10 @@ public:
     Result<std::vector<Judgement>> allJudgements() const;
     Result<std::vector<Assignment>> assignments() const;
 
+    // Adds `seconds` of active coding time to the coder's first assignment of the article (no
+    // assignment: nothing is recorded). Not an edit: time is not undone.
+    Status addCodingTime(ArticleId article, CoderId coder, qint64 seconds);
+
     // Applies `edit` in one savepoint and logs it: committed at once or not at all.
     Status apply(Edit &edit);
     // Reverts an applied `edit` the same way (logged as an undo).

@@ -56,7 +56,8 @@ Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase ph
 Result<std::vector<Assignment>> assignments(const Database &db)
 {
     auto stmt = db.prepare(QStringLiteral(
-        "SELECT article_id, coder_id, phase, status FROM assignment WHERE deleted = 0 ORDER BY article_id, coder_id, phase"));
+        "SELECT article_id, coder_id, phase, status, active_seconds FROM assignment WHERE deleted = 0 "
+        "ORDER BY article_id, coder_id, phase"));
     if (!stmt)
         return std::unexpected(stmt.error());
     std::vector<Assignment> out;
@@ -67,9 +68,41 @@ Result<std::vector<Assignment>> assignments(const Database &db)
         if (!*row)
             break;
         out.push_back(Assignment{ArticleId{stmt->columnInt(0)}, CoderId{stmt->columnInt(1)},
-                                 phaseFromKey(stmt->columnText(2)).value_or(Phase::Production), stmt->columnText(3)});
+                                 phaseFromKey(stmt->columnText(2)).value_or(Phase::Production), stmt->columnText(3),
+                                 stmt->columnInt(4)});
     }
     return out;
+}
+
+Result<qint64> setAssignmentStatus(Database &db, ArticleId article, CoderId coder, Phase phase, const QString &status)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "UPDATE assignment SET status = ?4 WHERE article_id = ?1 AND coder_id = ?2 AND phase = ?3 AND deleted = 0"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, article.value).bind(2, coder.value).bind(3, phaseKey(phase)).bind(4, status);
+    FOURFOLD_TRY_STATUS(stmt->run());
+    return db.changes();
+}
+
+Status addAssignmentSeconds(Database &db, ArticleId article, CoderId coder, Phase phase, qint64 seconds)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "UPDATE assignment SET active_seconds = active_seconds + ?4 WHERE article_id = ?1 AND coder_id = ?2 "
+        "AND phase = ?3 AND deleted = 0"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, article.value).bind(2, coder.value).bind(3, phaseKey(phase)).bind(4, seconds);
+    return stmt->run();
+}
+
+Status removeAssignment(Database &db, ArticleId article, CoderId coder, Phase phase)
+{
+    auto stmt = db.prepare(QStringLiteral("DELETE FROM assignment WHERE article_id = ?1 AND coder_id = ?2 AND phase = ?3"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, article.value).bind(2, coder.value).bind(3, phaseKey(phase));
+    return stmt->run();
 }
 
 Result<ProjectTally> projectTally(const Database &db)

@@ -24,6 +24,14 @@ Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase ph
 
 // Every live assignment, ordered by article and coder.
 Result<std::vector<Assignment>> assignments(const Database &db);
+// Sets the status of every live assignment of `coder` on `article`; returns how many rows
+// changed.
+Result<qint64> setAssignmentStatus(Database &db, ArticleId article, CoderId coder, Phase phase,
+                                   const QString &status);
+// Adds active coding time to the coder's assignment of the article in `phase`.
+Status addAssignmentSeconds(Database &db, ArticleId article, CoderId coder, Phase phase, qint64 seconds);
+// Removes an assignment row for good (only to revert the edit that created it).
+Status removeAssignment(Database &db, ArticleId article, CoderId coder, Phase phase);
 
 struct CoderTally {
     CoderId coder;

@@ -6,6 +6,7 @@
 #include <QCoreApplication>
 #include <QFile>
 
+#include <algorithm>
 #include <array>
 
 namespace fourfold {
@@ -230,7 +231,15 @@ CREATE TRIGGER article_fts_update AFTER UPDATE OF title, text ON article BEGIN
 END;
 )sql";
 
-constexpr std::array<const char *, kSchemaVersion> kMigrations {kMigration1, kMigration2};
+// Migration 3: active coding time per assignment (seconds; idle time is not counted).
+constexpr const char *kMigration3 = R"sql(
+ALTER TABLE assignment ADD COLUMN active_seconds INTEGER NOT NULL DEFAULT 0 CHECK (active_seconds >= 0);
+)sql";
+
+constexpr std::array<const char *, kSchemaVersion> kMigrations {kMigration1, kMigration2, kMigration3};
+// A migration left out of the list would silently do nothing: every slot must hold one.
+static_assert(std::ranges::none_of(kMigrations, [](const char *m) { return m == nullptr; }),
+    "kSchemaVersion is higher than the number of migrations in kMigrations");
 
 Result<qint64> pragmaValue(Database &db, const char *pragma)
 {

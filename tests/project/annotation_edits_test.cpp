@@ -1,4 +1,5 @@
 #include "core/project/annotation_edits.h"
+#include "core/project/article_status_edit.h"
 #include "core/project/paragraph_role_edit.h"
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
@@ -52,7 +53,7 @@ TEST_CASE("edits apply and revert to an identical database dump")
     EditFixture f;
     const AnnotationId existing = f.add(FramingFunction::Problem, kFirstSentence);
     const AnnotationId other = f.add(FramingFunction::Cause, kBlame);
-    const QString before = f.dump();
+    QString before = f.dump();
 
     std::unique_ptr<Edit> edit;
     SECTION("add")
@@ -72,6 +73,16 @@ TEST_CASE("edits apply and revert to an identical database dump")
     SECTION("delete")
     {
         edit = std::make_unique<DeleteAnnotationEdit>(existing, f.c1);
+    }
+    SECTION("mark done without an assignment (creates one)")
+    {
+        edit = std::make_unique<SetArticleStatusEdit>(f.f1, f.c1, QStringLiteral("done"));
+    }
+    SECTION("mark done with an assignment")
+    {
+        REQUIRE(f.project.assign(f.f1, f.c1, Phase::Pilot));
+        before = f.dump();
+        edit = std::make_unique<SetArticleStatusEdit>(f.f1, f.c1, QStringLiteral("done"));
     }
     SECTION("paragraph role")
     {
@@ -267,4 +278,25 @@ TEST_CASE("a lead can change a paragraph's role; an unknown paragraph is refused
     auto st = f.project.apply(missing);
     REQUIRE_FALSE(st);
     CHECK(st.error().code == ErrorCode::NotFound);
+}
+
+TEST_CASE("article status lives on the coder's assignments; coding time adds up")
+{
+    EditFixture f;
+    REQUIRE(f.project.assign(f.f1, f.c1, Phase::Reliability));
+    SetArticleStatusEdit done(f.f1, f.c1, QStringLiteral("done"));
+    REQUIRE(f.project.apply(done));
+    REQUIRE(f.project.addCodingTime(f.f1, f.c1, 40));
+    REQUIRE(f.project.addCodingTime(f.f1, f.c1, 2));
+    auto a = f.project.assignments();
+    REQUIRE(a);
+    REQUIRE(a->size() == 1);
+    CHECK((*a)[0].status == QStringLiteral("done"));
+    CHECK((*a)[0].activeSeconds == 42);
+    REQUIRE(f.project.revert(done));
+    CHECK((*f.project.assignments())[0].status == QStringLiteral("assigned"));
+    SetArticleStatusEdit bad(f.f1, f.c1, QStringLiteral("finished"));
+    auto st = f.project.apply(bad);
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::InvalidArgument);
 }

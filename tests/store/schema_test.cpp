@@ -141,3 +141,25 @@ TEST_CASE("the schema refuses spans that are empty or reversed")
     REQUIRE_FALSE(st);
     CHECK(st.error().code == ErrorCode::Constraint);
 }
+
+TEST_CASE("a version-2 file gains active coding time on its assignments, starting at zero")
+{
+    QTemporaryDir dir;
+    const QString path = dir.filePath(QStringLiteral("v2.fourfold"));
+    {
+        Database db = openNew(path);
+        REQUIRE(createSchemaAtVersion(db, 2));
+        REQUIRE(db.exec(QStringLiteral(
+            "INSERT INTO coder (uuid, name, pseudonym, role, created_at) VALUES ('c', 'Test person', 'C01', 'coder', 't');"
+            "INSERT INTO article (uuid, external_id, title, language, text, length, sha256, imported_at) "
+            "VALUES ('u1', 'a1', 'T', 'en', 'text', 4, 'h', 't');"
+            "INSERT INTO assignment (uuid, article_id, coder_id, phase, created_at) VALUES ('s', 1, 1, 'pilot', 't');")));
+    }
+    Database db = openNew(path);
+    QString backup;
+    REQUIRE(prepareSchema(db, &backup));
+    CHECK(backup.endsWith(QStringLiteral(".v2.bak")));
+    CHECK(scalarOf(db, QStringLiteral("PRAGMA user_version")) == 3);
+    CHECK(scalarOf(db, QStringLiteral("SELECT active_seconds FROM assignment")) == 0);
+    CHECK(scalarOf(db, QStringLiteral("SELECT count(*) FROM assignment WHERE phase = 'pilot'")) == 1);
+}

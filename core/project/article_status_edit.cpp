@@ -1,0 +1,58 @@
+#include "core/project/article_status_edit.h"
+
+#include "core/store/project_tables.h"
+
+#include <QCoreApplication>
+
+namespace fourfold {
+
+SetArticleStatusEdit::SetArticleStatusEdit(ArticleId article, CoderId coder, QString status)
+    : Edit(coder)
+    , m_article(article)
+    , m_coder(coder)
+    , m_status(std::move(status))
+{
+}
+
+QString SetArticleStatusEdit::text() const
+{
+    if (m_status == QLatin1String("done"))
+        return QCoreApplication::translate("ArticleStatusEdit", "Mark article as done");
+    return QCoreApplication::translate("ArticleStatusEdit", "Mark article as %1").arg(m_status);
+}
+
+Status SetArticleStatusEdit::apply(Database &db)
+{
+    if (m_status != QLatin1String("assigned") && m_status != QLatin1String("started") && m_status != QLatin1String("done"))
+        return fail(ErrorCode::InvalidArgument,
+                    QCoreApplication::translate("ArticleStatusEdit", "\"%1\" is not a status (assigned, started, done).").arg(m_status));
+    auto all = store::assignments(db);
+    if (!all)
+        return std::unexpected(all.error());
+    std::vector<std::pair<Phase, QString>> before;
+    for (const Assignment &a : *all)
+        if (a.article == m_article && a.coder == m_coder)
+            before.emplace_back(a.phase, a.status);
+    if (before.empty()) {
+        FOURFOLD_TRY_STATUS(store::insertAssignment(db, m_article, m_coder, Phase::Production));
+        FOURFOLD_TRY_STATUS(store::setAssignmentStatus(db, m_article, m_coder, Phase::Production, m_status));
+        m_created = true;
+    } else {
+        for (const auto &[phase, status] : before)
+            FOURFOLD_TRY_STATUS(store::setAssignmentStatus(db, m_article, m_coder, phase, m_status));
+        m_created = false;
+    }
+    m_before = std::move(before);
+    return {};
+}
+
+Status SetArticleStatusEdit::revert(Database &db)
+{
+    if (m_created)
+        return store::removeAssignment(db, m_article, m_coder, Phase::Production);
+    for (const auto &[phase, status] : m_before)
+        FOURFOLD_TRY_STATUS(store::setAssignmentStatus(db, m_article, m_coder, phase, status));
+    return {};
+}
+
+} // namespace fourfold
