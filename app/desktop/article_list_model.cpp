@@ -4,18 +4,42 @@ namespace fourfold {
 
 ArticleListModel::ArticleListModel(QObject *parent)
     : QAbstractTableModel(parent)
-{ }
+{
+}
 
-void ArticleListModel::setArticles(std::vector<ArticleSummary> articles)
+void ArticleListModel::setArticles(std::vector<ArticleRow> rows)
 {
     beginResetModel();
-    m_articles = std::move(articles);
+    m_rows = std::move(rows);
     endResetModel();
+}
+
+void ArticleListModel::updateArticle(ArticleId id, const QString &status, qint64 seconds)
+{
+    const int row = rowOf(id);
+    if (row < 0)
+        return;
+    m_rows[size_t(row)].status = status;
+    m_rows[size_t(row)].seconds = seconds;
+    emit dataChanged(index(row, Status), index(row, Time));
+}
+
+int ArticleListModel::rowOf(ArticleId id) const
+{
+    for (size_t i = 0; i < m_rows.size(); ++i)
+        if (m_rows[i].summary.id == id)
+            return int(i);
+    return -1;
+}
+
+ArticleId ArticleListModel::articleAt(int row) const
+{
+    return row >= 0 && size_t(row) < m_rows.size() ? m_rows[size_t(row)].summary.id : ArticleId{};
 }
 
 int ArticleListModel::rowCount(const QModelIndex &parent) const
 {
-    return parent.isValid() ? 0 : int(m_articles.size());
+    return parent.isValid() ? 0 : int(m_rows.size());
 }
 
 int ArticleListModel::columnCount(const QModelIndex &parent) const
@@ -23,26 +47,41 @@ int ArticleListModel::columnCount(const QModelIndex &parent) const
     return parent.isValid() ? 0 : ColumnCount;
 }
 
+QString ArticleListModel::statusLabel(const QString &status)
+{
+    if (status == QLatin1String("done"))
+        return tr("done");
+    if (status == QLatin1String("started"))
+        return tr("in progress");
+    return tr("not started");
+}
+
 QVariant ArticleListModel::data(const QModelIndex &index, int role) const
 {
     if (!checkIndex(index, CheckIndexOption::IndexIsValid))
         return {};
-    const ArticleSummary &a = m_articles[size_t(index.row())];
+    const ArticleRow &r = m_rows[size_t(index.row())];
     if (role == ArticleIdRole)
-        return a.id.value;
-    if (role == Qt::TextAlignmentRole && index.column() == Length)
+        return r.summary.id.value;
+    if (role == StatusRole)
+        return r.status;
+    if (role == Qt::TextAlignmentRole && (index.column() == Length || index.column() == Time))
         return int(Qt::AlignRight | Qt::AlignVCenter);
     if (role != Qt::DisplayRole && role != Qt::ToolTipRole)
         return {};
     switch (index.column()) {
     case Title:
-        return a.title;
+        return r.summary.title;
     case Outlet:
-        return a.outlet;
+        return r.summary.outlet;
     case Language:
-        return a.language;
+        return r.summary.language;
     case Length:
-        return a.length;
+        return r.summary.length;
+    case Status:
+        return statusLabel(r.status);
+    case Time:
+        return r.seconds > 0 ? QStringLiteral("%1:%2").arg(r.seconds / 60).arg(r.seconds % 60, 2, 10, QLatin1Char('0')) : QString();
     }
     return {};
 }
@@ -57,9 +96,13 @@ QVariant ArticleListModel::headerData(int section, Qt::Orientation orientation, 
     case Outlet:
         return tr("Outlet");
     case Language:
-        return tr("Language");
+        return tr("Lang.");
     case Length:
         return tr("Characters");
+    case Status:
+        return tr("Status");
+    case Time:
+        return tr("Time");
     }
     return {};
 }

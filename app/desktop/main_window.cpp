@@ -1,33 +1,55 @@
 #include "app/desktop/main_window.h"
 
+#include "app/desktop/activity_clock.h"
+#include "app/desktop/article_filter.h"
 #include "app/desktop/article_list_model.h"
+#include "app/desktop/codebook_panel.h"
+#include "app/desktop/coder_dialog.h"
+#include "app/desktop/coding_session.h"
+#include "app/desktop/frame_card.h"
+#include "app/desktop/function_style.h"
+#include "app/desktop/item_form.h"
+#include "app/desktop/reading_view.h"
+#include "app/desktop/span_editor.h"
 
+#include <QActionGroup>
 #include <QApplication>
+#include <QCloseEvent>
+#include <QComboBox>
+#include <QDir>
 #include <QFileDialog>
+#include <QFileInfo>
+#include <QHBoxLayout>
 #include <QHeaderView>
 #include <QKeySequence>
 #include <QLabel>
+#include <QLineEdit>
+#include <QListWidget>
 #include <QMenuBar>
 #include <QMessageBox>
+#include <QPushButton>
+#include <QSettings>
 #include <QSplitter>
+#include <QStackedWidget>
 #include <QStatusBar>
+#include <QTabWidget>
 #include <QTableView>
-#include <QTextBrowser>
+#include <QTimer>
+#include <QToolButton>
+#include <QUndoStack>
+#include <QVBoxLayout>
 
 namespace fourfold {
 
 namespace {
 
-QString roleLabel(ParagraphRole role)
+QString samplePath()
 {
-    switch (role) {
-    case ParagraphRole::Intro:
-        return MainWindow::tr("intro");
-    case ParagraphRole::Body:
-        return MainWindow::tr("body");
-    case ParagraphRole::Conclusion:
-        return MainWindow::tr("conclusion");
-    }
+    // In the build tree the sample project sits beside app/: build/sample-project/demo.fourfold.
+    const QDir bin(QCoreApplication::applicationDirPath());
+    for (const QString &candidate : {QStringLiteral("../../sample-project/demo.fourfold"), QStringLiteral("../sample-project/demo.fourfold")})
+        if (QFileInfo::exists(bin.filePath(candidate)))
+            return QFileInfo(bin.filePath(candidate)).canonicalFilePath();
     return {};
 }
 
@@ -35,100 +57,528 @@ QString roleLabel(ParagraphRole role)
 
 MainWindow::MainWindow(QWidget *parent)
     : QMainWindow(parent)
-    , m_articles(new ArticleListModel(this))
+    , m_clock(new ActivityClock(this))
 {
-    setWindowTitle(tr("Fourfold"));
+    m_pages = new QStackedWidget(this);
+    m_pages->addWidget(buildStartPage());
+    m_pages->addWidget(buildDesk());
+    setCentralWidget(m_pages);
+    buildMenus();
+    m_who = new QLabel(this);
+    statusBar()->addPermanentWidget(m_who);
+    updateTitle();
+    resize(1500, 920);
+
+    // Hand active time to the project every half minute, so a crash loses little of it.
+    auto *flush = new QTimer(this);
+    connect(flush, &QTimer::timeout, this, &MainWindow::flushTime);
+    flush->start(30 * 1000);
+}
+
+MainWindow::~MainWindow() = default;
+
+QWidget *MainWindow::buildStartPage()
+{
+    auto *page = new QWidget(this);
+    auto *outer = new QVBoxLayout(page);
+    outer->addStretch(2);
+    auto *title = new QLabel(tr("<h1>Fourfold</h1><p>Manual frame analysis of news and opinion articles: "
+                                "problem, cause, evaluation, remedy.</p>"),
+                             page);
+    title->setAlignment(Qt::AlignCenter);
+    outer->addWidget(title);
+    auto *buttons = new QHBoxLayout;
+    buttons->addStretch();
+    auto *open = new QPushButton(tr("Open a project…"), page);
+    connect(open, &QPushButton::clicked, this, &MainWindow::chooseProject);
+    buttons->addWidget(open);
+    auto *sample = new QPushButton(tr("Open the sample project"), page);
+    sample->setEnabled(!samplePath().isEmpty());
+    sample->setToolTip(tr("Invented demo data: three local controversies, three coders."));
+    connect(sample, &QPushButton::clicked, this, &MainWindow::openSample);
+    buttons->addWidget(sample);
+    buttons->addStretch();
+    outer->addLayout(buttons);
+    auto *recent = new QListWidget(page);
+    recent->setAccessibleName(tr("Recent projects"));
+    recent->setMaximumWidth(640);
+    for (const QString &p : QSettings().value(QStringLiteral("recentProjects")).toStringList())
+        recent->addItem(p);
+    connect(recent, &QListWidget::itemActivated, this, [this](QListWidgetItem *item) {
+        if (auto st = openProject(item->text()); !st && st.error().code != ErrorCode::Cancelled)
+            QMessageBox::warning(this, tr("Cannot open project"), st.error().toString());
+    });
+    auto *recentRow = new QHBoxLayout;
+    recentRow->addStretch();
+    recentRow->addWidget(recent);
+    recentRow->addStretch();
+    outer->addSpacing(16);
+    outer->addWidget(new QLabel(tr("Recent projects"), page), 0, Qt::AlignHCenter);
+    outer->addLayout(recentRow);
+    outer->addStretch(3);
+    return page;
+}
+
+QWidget *MainWindow::buildDesk()
+{
     auto *splitter = new QSplitter(this);
-    m_list = new QTableView(splitter);
-    m_list->setModel(m_articles);
+
+    // Left: the article list with search and a status filter.
+    auto *left = new QWidget(splitter);
+    auto *leftLayout = new QVBoxLayout(left);
+    leftLayout->setContentsMargins(0, 0, 0, 0);
+    m_search = new QLineEdit(left);
+    m_search->setPlaceholderText(tr("Search the texts…"));
+    m_search->setClearButtonEnabled(true);
+    m_search->setAccessibleName(tr("Search articles"));
+    connect(m_search, &QLineEdit::returnPressed, this, [this] { search(m_search->text()); });
+    connect(m_search, &QLineEdit::textChanged, this, [this](const QString &t) {
+        if (t.isEmpty())
+            search(QString());
+    });
+    m_statusFilter = new QComboBox(left);
+    m_statusFilter->setAccessibleName(tr("Status filter"));
+    m_statusFilter->addItem(tr("All articles"), QString());
+    m_statusFilter->addItem(tr("Not started"), QStringLiteral("assigned"));
+    m_statusFilter->addItem(tr("In progress"), QStringLiteral("started"));
+    m_statusFilter->addItem(tr("Done"), QStringLiteral("done"));
+    auto *filters = new QHBoxLayout;
+    filters->addWidget(m_search, 3);
+    filters->addWidget(m_statusFilter, 1);
+    leftLayout->addLayout(filters);
+    m_articles = new ArticleListModel(this);
+    m_filter = new ArticleFilter(this);
+    m_filter->setSourceModel(m_articles);
+    connect(m_statusFilter, &QComboBox::currentIndexChanged, this, [this] { m_filter->setStatus(m_statusFilter->currentData().toString()); });
+    m_list = new QTableView(left);
+    m_list->setModel(m_filter);
     m_list->setSelectionBehavior(QAbstractItemView::SelectRows);
     m_list->setSelectionMode(QAbstractItemView::SingleSelection);
     m_list->verticalHeader()->hide();
-    m_list->horizontalHeader()->setSectionResizeMode(ArticleListModel::Title, QHeaderView::Stretch);
+    m_list->setWordWrap(false);
     m_list->setAccessibleName(tr("Articles"));
-    m_reader = new QTextBrowser(splitter);
-    m_reader->setAccessibleName(tr("Article text"));
-    m_reader->setOpenLinks(false);
-    splitter->addWidget(m_list);
-    splitter->addWidget(m_reader);
+    m_list->horizontalHeader()->setSectionResizeMode(ArticleListModel::Title, QHeaderView::Stretch);
+    leftLayout->addWidget(m_list);
+    connect(m_list->selectionModel(), &QItemSelectionModel::currentRowChanged, this, [this](const QModelIndex &current) {
+        if (current.isValid())
+            openArticle(ArticleId{current.data(ArticleListModel::ArticleIdRole).toLongLong()});
+    });
+
+    // Middle: the function buttons above the article.
+    auto *middle = new QWidget(splitter);
+    auto *middleLayout = new QVBoxLayout(middle);
+    middleLayout->setContentsMargins(0, 0, 0, 0);
+    auto *bar = new QHBoxLayout;
+    m_articleHeader = new QLabel(middle);
+    m_articleHeader->setTextFormat(Qt::RichText);
+    m_articleHeader->setWordWrap(true);
+    middleLayout->addWidget(m_articleHeader);
+    m_reading = new ReadingView(middle);
+    for (FramingFunction f : kFramingFunctions) {
+        const FunctionStyle style = functionStyle(f);
+        auto *button = new QToolButton(middle);
+        button->setText(QStringLiteral("%1  %2  ·  %3").arg(style.letter).arg(functionName(f)).arg(functionShortcutKey(f)));
+        button->setToolTip(tr("Mark the selected text as %1 (key %2)").arg(functionName(f)).arg(functionShortcutKey(f)));
+        button->setAccessibleName(functionName(f));
+        button->setStyleSheet(QStringLiteral("QToolButton { border-bottom: 3px solid %1; padding: 3px 8px; }").arg(style.colour.name()));
+        connect(button, &QToolButton::clicked, this, [this, f] { m_reading->requestFunction(f); });
+        bar->addWidget(button);
+    }
+    bar->addStretch();
+    auto *done = new QPushButton(tr("Mark as done"), middle);
+    done->setToolTip(tr("Mark this article as done and open the next one (Ctrl+Return)"));
+    connect(done, &QPushButton::clicked, this, &MainWindow::markDone);
+    bar->addWidget(done);
+    middleLayout->addLayout(bar);
+    middleLayout->addWidget(m_reading, 1);
+
+    // Right: the frame card, the items under it, then the span editor and the codebook.
+    auto *right = new QSplitter(Qt::Vertical, splitter);
+    m_card = new FrameCard(right);
+    m_items = nullptr;  // made once a session exists (it needs one)
+    m_tabs = new QTabWidget(right);
+    right->addWidget(m_card);
+    right->addWidget(m_tabs);
+    right->setStretchFactor(0, 3);
+    right->setStretchFactor(1, 2);
+
+    splitter->addWidget(left);
+    splitter->addWidget(middle);
+    splitter->addWidget(right);
     splitter->setStretchFactor(0, 2);
-    splitter->setStretchFactor(1, 3);
-    setCentralWidget(splitter);
+    splitter->setStretchFactor(1, 5);
+    splitter->setStretchFactor(2, 3);
+    splitter->setSizes({360, 760, 420});
 
-    QMenu *file = menuBar()->addMenu(tr("&Project"));
-    file->addAction(tr("&Open…"), QKeySequence::Open, this, &MainWindow::openDialog);
-    file->addSeparator();
-    file->addAction(tr("&Quit"), QKeySequence::Quit, qApp, &QApplication::quit);
-
-    m_status = new QLabel(this);
-    statusBar()->addWidget(m_status);
-    m_status->setText(tr("No project open."));
-
-    connect(m_list->selectionModel(), &QItemSelectionModel::currentRowChanged, this,
-        [this](const QModelIndex &current) {
-            if (current.isValid())
-                showArticle(ArticleId {current.data(ArticleListModel::ArticleIdRole).toLongLong()});
-        });
-    resize(1280, 800);
+    connect(m_reading, &ReadingView::createSpanRequested, this, [this](FramingFunction f, TextRange range) {
+        if (!m_session || !m_article.isValid())
+            return;
+        if (m_session->addSpan(m_article, f, range))
+            selectSpan(m_session->lastAddedSpan());
+    });
+    connect(m_reading, &ReadingView::relabelSpanRequested, this, [this](AnnotationId id, FramingFunction f) {
+        if (auto span = m_session->project().annotation(id)) {
+            AnnotationContent content = span->content;
+            if (content.function != f)
+                content.attributes = {};  // attributes belong to the old function's schema
+            content.function = f;
+            (void)m_session->changeSpan(id, content);
+        }
+    });
+    connect(m_reading, &ReadingView::resizeSpanRequested, this, [this](AnnotationId id, TextRange range) {
+        if (auto span = m_session->project().annotation(id)) {
+            AnnotationContent content = span->content;
+            content.range = range;
+            (void)m_session->changeSpan(id, content);
+        }
+    });
+    connect(m_reading, &ReadingView::deleteSpanRequested, this, [this](AnnotationId id) {
+        if (m_session->deleteSpan(id))
+            selectSpan(AnnotationId{});
+    });
+    connect(m_reading, &ReadingView::spanActivated, this, &MainWindow::selectSpan);
+    connect(m_card, &FrameCard::spanActivated, this, [this](AnnotationId id) {
+        selectSpan(id);
+        m_reading->scrollToSpan(id);
+    });
+    return splitter;
 }
 
-Status MainWindow::openProject(const QString &path)
+void MainWindow::buildMenus()
+{
+    QMenu *project = menuBar()->addMenu(tr("&Project"));
+    project->addAction(tr("&Open…"), QKeySequence::Open, this, &MainWindow::chooseProject);
+    project->addAction(tr("Open the &sample project"), this, &MainWindow::openSample);
+    project->addSeparator();
+    project->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
+
+    QMenu *edit = menuBar()->addMenu(tr("&Edit"));
+    m_undo = edit->addAction(tr("&Undo"));
+    m_undo->setShortcut(QKeySequence::Undo);
+    m_undo->setEnabled(false);
+    m_redo = edit->addAction(tr("&Redo"));
+    m_redo->setShortcut(QKeySequence::Redo);
+    m_redo->setEnabled(false);
+
+    QMenu *code = menuBar()->addMenu(tr("&Code"));
+    for (FramingFunction f : kFramingFunctions) {
+        // The keys 1–4 are handled by the reading desk itself; the menu shows them.
+        QAction *a = code->addAction(tr("Mark as %1\t%2").arg(functionName(f)).arg(functionShortcutKey(f)));
+        connect(a, &QAction::triggered, this, [this, f] { m_reading->requestFunction(f); });
+    }
+    code->addSeparator();
+    code->addAction(tr("Mark article as &done"), QKeySequence(Qt::CTRL | Qt::Key_Return), this, &MainWindow::markDone);
+    code->addAction(tr("&Next article"), QKeySequence(Qt::CTRL | Qt::Key_PageDown), this, &MainWindow::nextArticle);
+    code->addAction(tr("&Find in texts"), QKeySequence::Find, this, [this] { m_search->setFocus(); });
+
+    QMenu *view = menuBar()->addMenu(tr("&View"));
+    m_showAll = view->addAction(tr("Show &every coder's spans (leads only)"));
+    m_showAll->setCheckable(true);
+    m_showAll->setEnabled(false);
+    connect(m_showAll, &QAction::toggled, this, [this](bool on) {
+        if (m_session)
+            m_session->setShowAllCoders(on);
+        refreshArticle();
+    });
+
+    QMenu *settings = menuBar()->addMenu(tr("&Settings"));
+    QMenu *language = settings->addMenu(tr("&Language"));
+    auto *group = new QActionGroup(this);
+    const QString current = QSettings().value(QStringLiteral("language"), QStringLiteral("system")).toString();
+    for (const auto &[languageCode, name] :
+         {std::pair{QStringLiteral("system"), tr("System language")}, std::pair{QStringLiteral("en"), QStringLiteral("English")},
+          std::pair{QStringLiteral("nl"), QStringLiteral("Nederlands")}, std::pair{QStringLiteral("de"), QStringLiteral("Deutsch")}}) {
+        QAction *a = language->addAction(name);
+        a->setCheckable(true);
+        a->setChecked(languageCode == current);
+        group->addAction(a);
+        connect(a, &QAction::triggered, this, [this, c = languageCode] { setLanguage(c); });
+    }
+
+    QMenu *help = menuBar()->addMenu(tr("&Help"));
+    help->addAction(tr("&Keyboard shortcuts"), QKeySequence::HelpContents, this, &MainWindow::showShortcuts);
+}
+
+Status MainWindow::openProject(const QString &path, const QString &pseudonym)
 {
     auto project = Project::open(path);
     if (!project)
         return std::unexpected(project.error());
-    auto articles = project->articles();
-    if (!articles)
-        return std::unexpected(articles.error());
-    auto counts = project->counts();
-    m_project.emplace(std::move(*project));
-    m_articles->setArticles(std::move(*articles));
-    m_list->resizeColumnsToContents();
-    m_list->horizontalHeader()->setSectionResizeMode(ArticleListModel::Title, QHeaderView::Stretch);
-    setWindowTitle(tr("%1 — Fourfold").arg(m_project->settings().name));
-    if (counts)
-        m_status->setText(tr("%1 articles · %2 coders · %3 annotations")
-                              .arg(counts->articles)
-                              .arg(counts->coders)
-                              .arg(counts->annotations));
-    if (m_articles->rowCount() > 0)
+    auto coders = project->coders();
+    if (!coders)
+        return std::unexpected(coders.error());
+    std::optional<Coder> who;
+    if (!pseudonym.isEmpty()) {
+        for (const Coder &c : *coders)
+            if (c.pseudonym == pseudonym)
+                who = c;
+        if (!who)
+            return fail(ErrorCode::NotFound, tr("The project has no coder \"%1\".").arg(pseudonym));
+    } else {
+        CoderDialog dialog(project->settings().name, *coders, this);
+        if (dialog.exec() != QDialog::Accepted || !dialog.chosen())
+            return fail(ErrorCode::Cancelled, tr("Nobody was chosen to code."));
+        who = dialog.chosen();
+    }
+
+    flushTime();
+    if (m_items) {
+        delete m_items;
+        m_items = nullptr;
+    }
+    m_tabs->clear();
+    delete m_spanEditor;
+    delete m_codebook;
+    m_session = std::make_unique<CodingSession>(std::move(*project), *who);
+    m_article = ArticleId{};
+    m_selected = AnnotationId{};
+
+    m_items = new ItemForm(m_session.get(), this);
+    if (auto *right = qobject_cast<QSplitter *>(m_card->parentWidget()))
+        right->insertWidget(1, m_items);
+    m_spanEditor = new SpanEditor(m_session.get(), m_tabs);
+    m_spanEditor->setCodebook(m_session->codebook());
+    m_items->setCodebook(m_session->codebook());
+    m_codebook = new CodebookPanel(m_tabs);
+    m_codebook->setCodebook(m_session->codebook());
+    m_tabs->addTab(m_spanEditor, tr("Span"));
+    m_tabs->addTab(m_codebook, tr("Codebook"));
+
+    QUndoStack *stack = m_session->undoStack();
+    // A note still being typed is committed first, so that undo takes back the latest change.
+    disconnect(m_undo, &QAction::triggered, nullptr, nullptr);
+    disconnect(m_redo, &QAction::triggered, nullptr, nullptr);
+    connect(m_undo, &QAction::triggered, this, [this] {
+        m_spanEditor->commitPendingEdits();
+        m_session->undoStack()->undo();
+    });
+    connect(m_redo, &QAction::triggered, this, [this] {
+        m_spanEditor->commitPendingEdits();
+        m_session->undoStack()->redo();
+    });
+    connect(stack, &QUndoStack::canUndoChanged, m_undo, &QAction::setEnabled);
+    connect(stack, &QUndoStack::canRedoChanged, m_redo, &QAction::setEnabled);
+    connect(stack, &QUndoStack::undoTextChanged, this, [this](const QString &t) { m_undo->setText(t.isEmpty() ? tr("&Undo") : tr("&Undo %1").arg(t)); });
+    connect(stack, &QUndoStack::redoTextChanged, this, [this](const QString &t) { m_redo->setText(t.isEmpty() ? tr("&Redo") : tr("&Redo %1").arg(t)); });
+    connect(m_session.get(), &CodingSession::articleChanged, this, [this](ArticleId id) {
+        if (id == m_article)
+            refreshArticle();
+        m_articles->updateArticle(id, m_session->articleStatus(id), m_session->secondsSpent(id));
+    });
+    connect(m_session.get(), &CodingSession::errorOccurred, this, &MainWindow::showError);
+    m_showAll->setEnabled(m_session->isLead());
+    m_showAll->setChecked(false);
+
+    QSettings settings;
+    QStringList recent = settings.value(QStringLiteral("recentProjects")).toStringList();
+    recent.removeAll(path);
+    recent.prepend(QFileInfo(path).absoluteFilePath());
+    settings.setValue(QStringLiteral("recentProjects"), recent.mid(0, 8));
+
+    m_pages->setCurrentIndex(1);
+    refreshList();
+    updateTitle();
+    if (m_filter->rowCount() > 0)
         m_list->selectRow(0);
     return {};
 }
 
-void MainWindow::showArticle(ArticleId id)
+void MainWindow::refreshList()
 {
-    if (!m_project)
-        return;
-    auto article = m_project->article(id);
-    if (!article) {
-        statusBar()->showMessage(article.error().message, 8000);
-        return;
-    }
-    QString html =
-        QStringLiteral("<h2>%1</h2><p style='color:palette(mid)'>%2 · %3 · %4</p>")
-            .arg(article->summary.title.toHtmlEscaped(), article->summary.outlet.toHtmlEscaped(),
-                article->summary.published.toHtmlEscaped(),
-                article->summary.language.toHtmlEscaped());
-    const QList<uint> ucs4 = article->text.toUcs4();
-    for (const Paragraph &p : article->paragraphs) {
-        const QString paragraph =
-            QString::fromUcs4(reinterpret_cast<const char32_t *>(ucs4.constData() + p.range.start),
-                qsizetype(p.range.length()));
-        html += QStringLiteral("<p><small style='color:gray'>[%1]</small> %2</p>")
-                    .arg(roleLabel(p.role), paragraph.toHtmlEscaped());
-    }
-    m_reader->setHtml(html);
+    std::vector<ArticleRow> rows;
+    for (const ArticleSummary &a : m_session->visibleArticles())
+        rows.push_back(ArticleRow{a, m_session->articleStatus(a.id), m_session->secondsSpent(a.id)});
+    m_articles->setArticles(std::move(rows));
+    // The list is narrow: title, language, status and time; outlet and length are in the header
+    // above the article.
+    m_list->setColumnHidden(ArticleListModel::Outlet, true);
+    m_list->setColumnHidden(ArticleListModel::Length, true);
+    m_list->resizeColumnsToContents();
+    m_list->horizontalHeader()->setSectionResizeMode(ArticleListModel::Title, QHeaderView::Stretch);
 }
 
-void MainWindow::openDialog()
+void MainWindow::openArticle(ArticleId id)
 {
-    const QString path = QFileDialog::getOpenFileName(
-        this, tr("Open project"), QString(), tr("Fourfold projects (*.fourfold)"));
+    if (!m_session || id == m_article)
+        return;
+    flushTime();
+    auto article = m_session->project().article(id);
+    if (!article) {
+        showError(article.error().toString());
+        return;
+    }
+    m_article = id;
+    m_selected = AnnotationId{};
+    m_articleHeader->setText(QStringLiteral("<b>%1</b><br><span style='color:palette(mid)'>%2 · %3 · %4</span>")
+                                 .arg(article->summary.title.toHtmlEscaped(), article->summary.outlet.toHtmlEscaped(),
+                                      article->summary.published.toHtmlEscaped(), article->summary.language.toHtmlEscaped()));
+    m_reading->setArticle(*article);
+    refreshArticle();
+    const int row = m_filter->mapFromSource(m_articles->index(m_articles->rowOf(id), 0)).row();
+    if (row >= 0 && m_list->currentIndex().row() != row)
+        m_list->selectRow(row);
+}
+
+void MainWindow::refreshArticle()
+{
+    if (!m_session || !m_article.isValid())
+        return;
+    auto article = m_session->project().article(m_article);
+    if (!article)
+        return;
+    const std::vector<Annotation> spans = m_session->visibleAnnotations(m_article);
+    m_reading->setSpans(spans);
+    m_card->setSpans(article->text, spans);
+    m_items->setArticle(m_article, m_session->ownJudgements(m_article));
+    if (std::none_of(spans.begin(), spans.end(), [this](const Annotation &a) { return a.id == m_selected; }))
+        m_selected = AnnotationId{};
+    selectSpan(m_selected);
+}
+
+void MainWindow::selectSpan(AnnotationId id)
+{
+    m_selected = id;
+    m_reading->setSelectedSpan(id);
+    m_card->setSelectedSpan(id);
+    if (!m_session || !m_article.isValid())
+        return;
+    const std::vector<Annotation> spans = m_session->visibleAnnotations(m_article);
+    std::optional<Annotation> span;
+    for (const Annotation &a : spans)
+        if (a.id == id)
+            span = a;
+    auto links = m_session->project().links(m_article);
+    m_spanEditor->setSpan(span, spans, links ? *links : std::vector<AnnotationLink>{});
+    if (span)
+        m_codebook->showFunction(span->content.function);
+}
+
+void MainWindow::flushTime()
+{
+    const qint64 seconds = m_clock->takeSeconds();
+    if (m_session && m_article.isValid() && seconds > 0) {
+        m_session->addCodingTime(m_article, seconds);
+        m_articles->updateArticle(m_article, m_session->articleStatus(m_article), m_session->secondsSpent(m_article));
+    }
+}
+
+void MainWindow::markDone()
+{
+    if (!m_session || !m_article.isValid())
+        return;
+    flushTime();
+    if (m_session->markDone(m_article))
+        nextArticle();
+}
+
+void MainWindow::nextArticle()
+{
+    // The next article in the list that is not done yet, wrapping around.
+    const int rows = m_filter->rowCount();
+    const int current = m_list->currentIndex().row();
+    for (int step = 1; step <= rows; ++step) {
+        const QModelIndex index = m_filter->index((current + step) % rows, 0);
+        if (index.data(ArticleListModel::StatusRole).toString() != QLatin1String("done")) {
+            m_list->selectRow(index.row());
+            return;
+        }
+    }
+    statusBar()->showMessage(tr("Every article in the list is done."), 6000);
+}
+
+void MainWindow::search(const QString &query)
+{
+    if (!m_session)
+        return;
+    if (query.trimmed().isEmpty()) {
+        m_filter->setMatches(std::nullopt);
+        return;
+    }
+    auto hits = m_session->project().searchArticles(query);
+    if (!hits) {
+        statusBar()->showMessage(hits.error().message, 6000);
+        return;
+    }
+    QSet<qint64> ids;
+    for (ArticleId id : *hits)
+        ids.insert(id.value);
+    m_filter->setMatches(ids);
+    statusBar()->showMessage(tr("%n article(s) contain \"%1\".", nullptr, int(ids.size())).arg(query), 6000);
+}
+
+void MainWindow::chooseProject()
+{
+    const QString path = QFileDialog::getOpenFileName(this, tr("Open project"), QString(), tr("Fourfold projects (*.fourfold)"));
     if (path.isEmpty())
         return;
-    if (auto st = openProject(path); !st)
+    if (auto st = openProject(path); !st && st.error().code != ErrorCode::Cancelled)
         QMessageBox::warning(this, tr("Cannot open project"), st.error().toString());
+}
+
+void MainWindow::openSample()
+{
+    const QString path = samplePath();
+    if (path.isEmpty())
+        return;
+    if (auto st = openProject(path); !st && st.error().code != ErrorCode::Cancelled)
+        QMessageBox::warning(this, tr("Cannot open project"), st.error().toString());
+}
+
+void MainWindow::setLanguage(const QString &code)
+{
+    QSettings().setValue(QStringLiteral("language"), code);
+    statusBar()->showMessage(tr("The language changes when Fourfold starts again."), 8000);
+}
+
+void MainWindow::showError(const QString &message)
+{
+    // Not modal: the change simply did not happen, and the reason stays visible for a while.
+    statusBar()->showMessage(message, 10000);
+}
+
+void MainWindow::updateTitle()
+{
+    if (!m_session) {
+        setWindowTitle(tr("Fourfold"));
+        m_who->setText(tr("No project open"));
+        return;
+    }
+    const Coder &c = m_session->coder();
+    const QString role = m_session->isLead() ? tr("lead") : tr("coder");
+    setWindowTitle(tr("%1 — coding as %2 (%3) — Fourfold").arg(m_session->project().settings().name, c.pseudonym, role));
+    m_who->setText(m_session->isLead() ? tr("Coding as %1 · %2 · lead: every article").arg(c.pseudonym, c.name)
+                                       : tr("Coding as %1 · %2 · blind: only your own spans").arg(c.pseudonym, c.name));
+}
+
+void MainWindow::showShortcuts()
+{
+    QString rows;
+    auto row = [&rows](const QString &keys, const QString &what) {
+        rows += QStringLiteral("<tr><td style='padding-right:18px'><b>%1</b></td><td>%2</td></tr>").arg(keys.toHtmlEscaped(), what.toHtmlEscaped());
+    };
+    for (FramingFunction f : kFramingFunctions)
+        row(QString::number(functionShortcutKey(f)), tr("Mark the selected text as %1 (snapped to whole words; hold Alt for the exact selection); "
+                                                        "with a span selected: relabel it")
+                                                         .arg(functionName(f)));
+    row(tr("Delete"), tr("Delete the selected span"));
+    row(QKeySequence(QKeySequence::Undo).toString(QKeySequence::NativeText), tr("Undo the last change"));
+    row(QKeySequence(QKeySequence::Redo).toString(QKeySequence::NativeText), tr("Redo"));
+    row(QStringLiteral("Ctrl+Return"), tr("Mark the article as done and open the next"));
+    row(QStringLiteral("Ctrl+PgDown"), tr("Next article that is not done"));
+    row(QKeySequence(QKeySequence::Find).toString(QKeySequence::NativeText), tr("Search the texts"));
+    QMessageBox box(this);
+    box.setWindowTitle(tr("Keyboard shortcuts"));
+    box.setTextFormat(Qt::RichText);
+    box.setText(QStringLiteral("<table>%1</table><p>%2</p>").arg(rows, tr("Span resizing keys are listed in the reading desk's tooltip.")));
+    box.exec();
+}
+
+void MainWindow::closeEvent(QCloseEvent *event)
+{
+    if (m_spanEditor)
+        m_spanEditor->commitPendingEdits();
+    flushTime();
+    QMainWindow::closeEvent(event);
 }
 
 } // namespace fourfold

@@ -1,39 +1,99 @@
 #pragma once
-// The workbench window. For now a reader: the project's articles on the left, the selected
-// article's canonical text with its paragraph roles on the right. The coding desk builds on it.
+// The workbench window: a start page, then the coding desk — the article list on the left, the
+// article with its spans in the middle, and on the right the frame card, the article-level
+// items, the span editor and the codebook.
 
 #include "core/project/project.h"
 
 #include <QMainWindow>
 
-#include <optional>
+#include <memory>
 
+class QAction;
+class QComboBox;
 class QLabel;
+class QLineEdit;
+class QStackedWidget;
+class QTabWidget;
 class QTableView;
-class QTextBrowser;
 
 namespace fourfold {
 
+class ActivityClock;
+class ArticleFilter;
 class ArticleListModel;
+class CodebookPanel;
+class CodingSession;
+class FrameCard;
+class ItemForm;
+class ReadingView;
+class SpanEditor;
 
 class MainWindow : public QMainWindow
 {
     Q_OBJECT
 public:
     explicit MainWindow(QWidget *parent = nullptr);
+    ~MainWindow() override;
 
-    // Opens `path` and shows its articles. Returns the error to present if it cannot.
-    Status openProject(const QString &path);
+    // Opens `path` and starts coding as the coder with `pseudonym`, or asks who codes when it is
+    // empty. Returns the error to present if the project cannot be opened (or nobody is chosen:
+    // Cancelled).
+    Status openProject(const QString &path, const QString &pseudonym = {});
+
+    // For tests and screenshots.
+    CodingSession *session() const { return m_session.get(); }
+    ReadingView *readingView() const { return m_reading; }
+    FrameCard *frameCard() const { return m_card; }
+    SpanEditor *spanEditor() const { return m_spanEditor; }
+    ItemForm *itemForm() const { return m_items; }
+    QTableView *articleList() const { return m_list; }
+    ArticleId currentArticle() const { return m_article; }
+    void openArticle(ArticleId id);
+    void selectSpan(AnnotationId id);
+    void showShortcuts();
+
+protected:
+    void closeEvent(QCloseEvent *event) override;
 
 private:
-    void showArticle(ArticleId id);
-    void openDialog();
+    QWidget *buildStartPage();
+    QWidget *buildDesk();
+    void buildMenus();
+    void refreshList();
+    void refreshArticle();
+    void flushTime();
+    void markDone();
+    void nextArticle();
+    void search(const QString &query);
+    void chooseProject();
+    void openSample();
+    void setLanguage(const QString &code);
+    void showError(const QString &message);
+    void updateTitle();
 
-    std::optional<Project> m_project;
+    std::unique_ptr<CodingSession> m_session;
+    ArticleId m_article;
+    AnnotationId m_selected;
+
+    QStackedWidget *m_pages = nullptr;
     ArticleListModel *m_articles = nullptr;
+    ArticleFilter *m_filter = nullptr;
     QTableView *m_list = nullptr;
-    QTextBrowser *m_reader = nullptr;
-    QLabel *m_status = nullptr;
+    QLineEdit *m_search = nullptr;
+    QComboBox *m_statusFilter = nullptr;
+    ReadingView *m_reading = nullptr;
+    QLabel *m_articleHeader = nullptr;
+    FrameCard *m_card = nullptr;
+    ItemForm *m_items = nullptr;
+    QTabWidget *m_tabs = nullptr;
+    SpanEditor *m_spanEditor = nullptr;
+    CodebookPanel *m_codebook = nullptr;
+    QLabel *m_who = nullptr;
+    QAction *m_showAll = nullptr;
+    QAction *m_undo = nullptr;
+    QAction *m_redo = nullptr;
+    ActivityClock *m_clock = nullptr;
 };
 
 } // namespace fourfold

@@ -5,9 +5,11 @@
 // in resources/codebook/default_codebook.json.
 
 #include "app/desktop/codebook_panel.h"
+#include "app/desktop/coding_session.h"
 #include "app/desktop/frame_card.h"
 #include "app/desktop/item_form.h"
 #include "app/desktop/span_editor.h"
+#include "tests/project/project_fixture.h"
 #include "tests/support/test_support.h"
 
 #include <QAbstractButton>
@@ -89,11 +91,13 @@ TEST_CASE("the frame card shows all four functions, with counts, in reading orde
 {
     FrameCard card;
     std::vector<Annotation> spans {
-        span(3, FramingFunction::Problem, {26, 56}, QStringLiteral("The council blames the budget.")),
+        span(3, FramingFunction::Problem, {26, 56},
+            QStringLiteral("The council blames the budget.")),
         span(1, FramingFunction::Problem, {0, 23}, QStringLiteral("The ferry stops in May.")),
         span(2, FramingFunction::Evaluation, {57, 72}, QStringLiteral("That is unfair.")),
     };
-    Annotation deleted = span(4, FramingFunction::Remedy, {73, 88}, QStringLiteral("Keep the ferry."));
+    Annotation deleted =
+        span(4, FramingFunction::Remedy, {73, 88}, QStringLiteral("Keep the ferry."));
     deleted.deleted = true;
     spans.push_back(deleted);
     card.setSpans(kText, spans);
@@ -122,6 +126,14 @@ TEST_CASE("the frame card shows all four functions, with counts, in reading orde
     CHECK(problem[0].contains(QStringLiteral("The ferry stops in May.")));
     CHECK(problem[1].contains(QStringLiteral("The council blames the budget.")));
     CHECK(quotesIn(section(card, FramingFunction::Cause)).isEmpty());
+
+    // A refresh that changes nothing shown (here a note) keeps the quotes as they are, so a
+    // click in progress on one is not lost.
+    const QAbstractButton *first =
+        section(card, FramingFunction::Problem)->findChild<QAbstractButton *>();
+    spans[0].content.note = QStringLiteral("changed");
+    card.setSpans(kText, spans);
+    CHECK(section(card, FramingFunction::Problem)->findChild<QAbstractButton *>() == first);
 
     // Recounted when the spans change: the same card, now with nothing coded.
     card.setSpans(kText, {});
@@ -158,13 +170,22 @@ TEST_CASE("activating a quote on the frame card names its span")
     REQUIRE(spy.count() == 1);
     CHECK(spy.at(0).at(0).value<AnnotationId>() == AnnotationId {12});
 
-    // Keyboard: Space on the focused quote (common practice for push-button-like controls).
-    auto *problem = section(card, FramingFunction::Problem)->findChild<QAbstractButton *>();
-    REQUIRE(problem);
-    CHECK(problem->focusPolicy() & Qt::TabFocus);
-    QTest::keyClick(problem, Qt::Key_Space);
-    REQUIRE(spy.count() == 2);
-    CHECK(spy.at(1).at(0).value<AnnotationId>() == AnnotationId {11});
+    // Keyboard: the card is one tab stop; the current quote follows the click, Up/Down/Home
+    // move through the quotes in the order shown (problem before remedy), Space or Enter
+    // activates (common practice for lists).
+    CHECK(card.focusPolicy() & Qt::TabFocus);
+    auto activatedByKeys = [&](std::initializer_list<Qt::Key> keys) {
+        for (Qt::Key key : keys)
+            QTest::keyClick(&card, key);
+        REQUIRE(!spy.isEmpty());
+        return spy.last().at(0).value<AnnotationId>();
+    };
+    CHECK(activatedByKeys({Qt::Key_Space}) == AnnotationId {12});
+    CHECK(activatedByKeys({Qt::Key_Home, Qt::Key_Space}) == AnnotationId {11});
+    CHECK(activatedByKeys({Qt::Key_Down, Qt::Key_Return}) == AnnotationId {12});
+    CHECK(activatedByKeys({Qt::Key_Down, Qt::Key_Enter}) == AnnotationId {12}); // stays at the end
+    CHECK(activatedByKeys({Qt::Key_Up, Qt::Key_Space}) == AnnotationId {11});
+    CHECK(spy.count() == 6);
 
     card.setSelectedSpan(AnnotationId {12});
     CHECK(card.selectedSpan() == AnnotationId {12});
@@ -245,13 +266,14 @@ struct EditorFixture {
     QSignalSpy links {&editor, &SpanEditor::linkRequested};
     Annotation problem =
         span(21, FramingFunction::Problem, {0, 23}, QStringLiteral("The ferry stops in May."));
-    Annotation cause = span(22, FramingFunction::Cause, {26, 56},
-        QStringLiteral("The council blames the budget."),
-        QJsonObject {{QStringLiteral("actor"), QStringLiteral("council")}});
-    Annotation evaluation = span(23, FramingFunction::Evaluation, {57, 72},
-        QStringLiteral("That is unfair."),
-        QJsonObject {{QStringLiteral("polarity"), QStringLiteral("negative")}});
-    Annotation remedy = span(24, FramingFunction::Remedy, {73, 88}, QStringLiteral("Keep the ferry."));
+    Annotation cause =
+        span(22, FramingFunction::Cause, {26, 56}, QStringLiteral("The council blames the budget."),
+            QJsonObject {{QStringLiteral("actor"), QStringLiteral("council")}});
+    Annotation evaluation =
+        span(23, FramingFunction::Evaluation, {57, 72}, QStringLiteral("That is unfair."),
+            QJsonObject {{QStringLiteral("polarity"), QStringLiteral("negative")}});
+    Annotation remedy =
+        span(24, FramingFunction::Remedy, {73, 88}, QStringLiteral("Keep the ferry."));
 
     EditorFixture()
     {
@@ -300,8 +322,8 @@ TEST_CASE("each change in the span editor is one edit with the full new content"
         const AnnotationContent c = f.lastEdit();
         CHECK(c.function == FramingFunction::Evaluation);
         CHECK(c.range == TextRange {57, 72});
-        CHECK(c.attributes
-            == QJsonObject {{QStringLiteral("polarity"), QStringLiteral("neutral")}});
+        CHECK(
+            c.attributes == QJsonObject {{QStringLiteral("polarity"), QStringLiteral("neutral")}});
         CHECK(c.confidence == 0.8);
     }
     SECTION("a note is committed when its field is left, not per keystroke")
@@ -337,6 +359,10 @@ TEST_CASE("each change in the span editor is one edit with the full new content"
         CHECK(f.lastEdit().attributes.isEmpty()); // "polarity" is not a cause attribute
         // The fields now follow the cause schema: a free-text actor, no polarity.
         auto *actor = childNamed<QLineEdit>(f.editor, QStringLiteral("Actor held responsible"));
+        // Keyboard: the new field comes right after the function in the tab order.
+        CHECK(childNamed<QAbstractButton>(f.editor, QStringLiteral("Function: Remedy"))
+                  ->nextInFocusChain()
+            == actor);
         actor->setFocus();
         QTest::keyClicks(actor, QStringLiteral("the council"));
         CHECK(f.edits.count() == 1);
@@ -382,7 +408,7 @@ TEST_CASE("the span editor links an evaluation to a cause and a remedy to a prob
     REQUIRE(target->count() == 3); // every other span
     CHECK(target->itemData(0).toLongLong() == 22);
     CHECK(!target->isHidden());
-    target->setCurrentIndex(0);
+    CHECK(target->currentIndex() == 0); // the first cause is proposed
     QTest::mouseClick(link, Qt::LeftButton);
     REQUIRE(f.links.count() == 1);
     CHECK(f.links.at(0).at(0).value<AnnotationId>() == AnnotationId {23});
@@ -414,4 +440,52 @@ TEST_CASE("the span editor links an evaluation to a cause and a remedy to a prob
     REQUIRE(f.links.count() == 2);
     CHECK(f.links.at(1).at(1).value<AnnotationId>() == AnnotationId {21});
     CHECK(f.links.at(1).at(2).toString() == QStringLiteral("addresses"));
+}
+
+TEST_CASE("with a coding session, each change in the panels is one undoable edit of the project")
+{
+    ProjectFixture f;
+    f.importJsonl(kTwoArticles);
+    const ArticleId article = f.articleId(QStringLiteral("f1"));
+    const CoderId coderId = f.addCoder(QStringLiteral("C01"));
+    auto coder = f.project.coderByPseudonym(QStringLiteral("C01"));
+    REQUIRE(coder);
+    REQUIRE(coder->has_value());
+    CHECK((*coder)->id == coderId);
+    CodingSession session(std::move(f.project), **coder);
+    QUndoStack *undo = session.undoStack();
+
+    // "It is a disgrace." is code points 108..125 of f1 (see kTwoArticles).
+    REQUIRE(session.addSpan(article, FramingFunction::Evaluation, TextRange {108, 125}));
+    const AnnotationId id = session.lastAddedSpan();
+    const std::vector<Annotation> spans = session.visibleAnnotations(article);
+    REQUIRE(spans.size() == 1);
+    const int steps = undo->count();
+
+    SpanEditor editor(&session);
+    editor.setSpan(spans[0], spans, {});
+    auto *polarity = childNamed<QComboBox>(editor, QStringLiteral("Polarity"));
+    polarity->setFocus();
+    QTest::keyClick(polarity, Qt::Key_Down); // not set → negative
+    CHECK(undo->count() == steps + 1);
+    auto stored = session.project().annotation(id);
+    REQUIRE(stored);
+    CHECK(stored->content.attributes
+        == QJsonObject {{QStringLiteral("polarity"), QStringLiteral("negative")}});
+    undo->undo();
+    stored = session.project().annotation(id);
+    REQUIRE(stored);
+    CHECK(stored->content.attributes.isEmpty());
+
+    ItemForm items(&session);
+    items.setArticle(article, session.ownJudgements(article));
+    auto *dominant = childNamed<QComboBox>(
+        items, QStringLiteral("Which framing function dominates the article as a whole?"));
+    dominant->setFocus();
+    QTest::keyClick(dominant, Qt::Key_Down); // not answered → problem
+    const std::vector<Judgement> answers = session.ownJudgements(article);
+    REQUIRE(answers.size() == 1);
+    CHECK(answers[0].itemKey == QStringLiteral("dominant_function"));
+    CHECK(answers[0].value == QStringLiteral("problem"));
+    CHECK(undo->index() == steps + 1); // the undone attribute edit was replaced by the answer
 }

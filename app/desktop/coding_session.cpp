@@ -1,0 +1,169 @@
+#include "app/desktop/coding_session.h"
+
+#include "app/desktop/edit_command.h"
+#include "core/project/annotation_edits.h"
+#include "core/project/article_status_edit.h"
+
+#include <QSet>
+
+namespace fourfold {
+
+CodingSession::CodingSession(Project project, Coder coder, QObject *parent)
+    : QObject(parent)
+    , m_project(std::move(project))
+    , m_coder(std::move(coder))
+{
+    if (auto book = m_project.codebook())
+        m_codebook = *book;
+}
+
+CodingSession::~CodingSession()
+{
+    // Commands refer to the project: drop them before it goes.
+    m_undo.clear();
+}
+
+void CodingSession::setShowAllCoders(bool on)
+{
+    m_showAll = on;
+}
+
+std::vector<ArticleSummary> CodingSession::visibleArticles() const
+{
+    auto all = m_project.articles();
+    if (!all)
+        return {};
+    if (isLead())
+        return *all;
+    QSet<qint64> assigned;
+    if (auto a = m_project.assignments())
+        for (const Assignment &x : *a)
+            if (x.coder == m_coder.id)
+                assigned.insert(x.article.value);
+    std::vector<ArticleSummary> out;
+    for (const ArticleSummary &s : *all)
+        if (assigned.contains(s.id.value))
+            out.push_back(s);
+    return out;
+}
+
+QString CodingSession::articleStatus(ArticleId article) const
+{
+    QString status = QStringLiteral("assigned");
+    if (auto a = m_project.assignments())
+        for (const Assignment &x : *a)
+            if (x.coder == m_coder.id && x.article == article) {
+                if (x.status == QLatin1String("done"))
+                    return x.status;
+                if (x.status == QLatin1String("started"))
+                    status = x.status;
+            }
+    // Spans or answers mean the work has started, whatever the assignment says.
+    if (status == QLatin1String("assigned")) {
+        if (auto own = m_project.annotations(article, m_coder.id); own && !own->empty())
+            status = QStringLiteral("started");
+    }
+    return status;
+}
+
+qint64 CodingSession::secondsSpent(ArticleId article) const
+{
+    qint64 seconds = 0;
+    if (auto a = m_project.assignments())
+        for (const Assignment &x : *a)
+            if (x.coder == m_coder.id && x.article == article)
+                seconds += x.activeSeconds;
+    return seconds;
+}
+
+Phase CodingSession::phaseOf(ArticleId article) const
+{
+    if (auto a = m_project.assignments())
+        for (const Assignment &x : *a)
+            if (x.coder == m_coder.id && x.article == article)
+                return x.phase;
+    return Phase::Production;
+}
+
+std::vector<Annotation> CodingSession::visibleAnnotations(ArticleId article) const
+{
+    auto spans = showsAllCoders() ? m_project.annotations(article) : m_project.annotations(article, m_coder.id);
+    return spans ? *spans : std::vector<Annotation>{};
+}
+
+std::vector<Judgement> CodingSession::ownJudgements(ArticleId article) const
+{
+    std::vector<Judgement> out;
+    if (auto all = m_project.judgements(article))
+        for (const Judgement &j : *all)
+            if (j.coder == m_coder.id)
+                out.push_back(j);
+    return out;
+}
+
+Status CodingSession::push(std::unique_ptr<Edit> edit, ArticleId article)
+{
+    auto *command = new EditCommand(this, std::move(edit), article);
+    // push() runs redo(); a command whose redo failed marks itself obsolete and is deleted.
+    QString error;
+    auto connection = connect(this, &CodingSession::errorOccurred, this, [&error](const QString &m) { error = m; });
+    m_undo.push(command);
+    disconnect(connection);
+    if (!error.isEmpty())
+        return fail(ErrorCode::InvalidInput, error);
+    return {};
+}
+
+Status CodingSession::addSpan(ArticleId article, FramingFunction function, TextRange range)
+{
+    auto edit = std::make_unique<AddAnnotationEdit>(article, m_coder.id, AnnotationContent{function, range, {}, {}, {}},
+                                                    phaseOf(article));
+    AddAnnotationEdit *raw = edit.get();
+    FOURFOLD_TRY_STATUS(push(std::move(edit), article));
+    m_lastAdded = raw->annotationId();
+    return {};
+}
+
+Status CodingSession::changeSpan(AnnotationId id, const AnnotationContent &content)
+{
+    auto span = m_project.annotation(id);
+    if (!span)
+        return std::unexpected(span.error());
+    return push(std::make_unique<ChangeAnnotationEdit>(id, content, m_coder.id), span->article);
+}
+
+Status CodingSession::deleteSpan(AnnotationId id)
+{
+    auto span = m_project.annotation(id);
+    if (!span)
+        return std::unexpected(span.error());
+    return push(std::make_unique<DeleteAnnotationEdit>(id, m_coder.id), span->article);
+}
+
+Status CodingSession::linkSpans(AnnotationId source, AnnotationId target, const QString &type)
+{
+    auto span = m_project.annotation(source);
+    if (!span)
+        return std::unexpected(span.error());
+    return push(std::make_unique<LinkAnnotationsEdit>(source, target, type, m_coder.id), span->article);
+}
+
+Status CodingSession::answerItem(ArticleId article, const QString &itemKey, const QString &value)
+{
+    return push(std::make_unique<SetJudgementEdit>(article, m_coder.id, itemKey, value, phaseOf(article)), article);
+}
+
+Status CodingSession::markDone(ArticleId article)
+{
+    FOURFOLD_TRY_STATUS(push(std::make_unique<SetArticleStatusEdit>(article, m_coder.id, QStringLiteral("done")), article));
+    emit statusChanged(article);
+    return {};
+}
+
+void CodingSession::addCodingTime(ArticleId article, qint64 seconds)
+{
+    if (auto st = m_project.addCodingTime(article, m_coder.id, seconds); !st)
+        emit errorOccurred(st.error().toString());
+}
+
+} // namespace fourfold

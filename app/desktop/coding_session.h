@@ -1,0 +1,82 @@
+#pragma once
+// The open project as one person codes it: who is coding, what they may see (blind coding: a
+// coder sees only their own spans and the articles assigned to them), and every change as one
+// undoable command over a core edit, written to the project file at once. Views read from the
+// session and ask it for changes; they never write to the project themselves.
+
+#include "core/project/project.h"
+
+#include <QObject>
+#include <QUndoStack>
+
+#include <vector>
+
+namespace fourfold {
+
+class Edit;
+
+class CodingSession : public QObject
+{
+    Q_OBJECT
+public:
+    CodingSession(Project project, Coder coder, QObject *parent = nullptr);
+    ~CodingSession() override;
+
+    Project &project() { return m_project; }
+    const Project &project() const { return m_project; }
+    const Coder &coder() const { return m_coder; }
+    bool isLead() const { return m_coder.role == CoderRole::Lead; }
+    const Codebook &codebook() const { return m_codebook; }
+    QUndoStack *undoStack() { return &m_undo; }
+
+    // Leads may show every coder's spans on the desk; coders never can.
+    bool showsAllCoders() const { return isLead() && m_showAll; }
+    void setShowAllCoders(bool on);
+
+    // The articles this person may open: their assignments (a lead: all articles).
+    std::vector<ArticleSummary> visibleArticles() const;
+    // This person's status of an article: "assigned" (not started), "started" or "done".
+    QString articleStatus(ArticleId article) const;
+    // Seconds of active coding time recorded for this person on the article.
+    qint64 secondsSpent(ArticleId article) const;
+    // The spans shown on the desk: this person's own, or everyone's when showsAllCoders().
+    std::vector<Annotation> visibleAnnotations(ArticleId article) const;
+    // This person's answers to article-level items.
+    std::vector<Judgement> ownJudgements(ArticleId article) const;
+
+    // Changes. Each is one command on the undo stack, applied (and committed) at once. On
+    // failure nothing is pushed, errorOccurred() is emitted, and the error is returned.
+    Status addSpan(ArticleId article, FramingFunction function, TextRange range);
+    Status changeSpan(AnnotationId id, const AnnotationContent &content);
+    Status deleteSpan(AnnotationId id);
+    Status linkSpans(AnnotationId source, AnnotationId target, const QString &type);
+    Status answerItem(ArticleId article, const QString &itemKey, const QString &value);
+    Status markDone(ArticleId article);
+    // Records active coding time (not undoable, not a user edit).
+    void addCodingTime(ArticleId article, qint64 seconds);
+
+    // The phase this person codes the article in: that of their assignment (production if none).
+    Phase phaseOf(ArticleId article) const;
+
+    // The id of the span the last successful addSpan() created.
+    AnnotationId lastAddedSpan() const { return m_lastAdded; }
+
+signals:
+    // After any change to spans, links or answers of `article` (including undo and redo).
+    void articleChanged(ArticleId article);
+    void statusChanged(ArticleId article);
+    void errorOccurred(const QString &message);
+
+private:
+    friend class EditCommand;
+    Status push(std::unique_ptr<Edit> edit, ArticleId article);
+
+    Project m_project;
+    Coder m_coder;
+    Codebook m_codebook;
+    QUndoStack m_undo;
+    bool m_showAll = false;
+    AnnotationId m_lastAdded;
+};
+
+} // namespace fourfold

@@ -1,0 +1,42 @@
+#include "app/desktop/edit_command.h"
+
+#include "app/desktop/coding_session.h"
+#include "core/project/edit.h"
+
+namespace fourfold {
+
+EditCommand::EditCommand(CodingSession *session, std::unique_ptr<Edit> edit, ArticleId article)
+    : m_session(session)
+    , m_edit(std::move(edit))
+    , m_article(article)
+{
+    setText(m_edit->text());
+}
+
+EditCommand::~EditCommand() = default;
+
+void EditCommand::redo()
+{
+    auto st = m_session->project().apply(*m_edit);
+    m_ok = bool(st);
+    if (!st) {
+        // A failed first redo is never kept on the stack (QUndoStack drops obsolete commands).
+        setObsolete(true);
+        emit m_session->errorOccurred(st.error().toString());
+        return;
+    }
+    emit m_session->articleChanged(m_article);
+}
+
+void EditCommand::undo()
+{
+    auto st = m_session->project().revert(*m_edit);
+    m_ok = bool(st);
+    if (!st) {
+        emit m_session->errorOccurred(st.error().toString());
+        return;
+    }
+    emit m_session->articleChanged(m_article);
+}
+
+} // namespace fourfold

@@ -1,0 +1,250 @@
+#pragma once
+// The reading desk's article view: one article's canonical text, read-only and selectable, with
+// the coder's spans drawn in four lanes under each line of text (one lane per framing function,
+// see function_style.h), a letter badge at each span's start, and the selected span tinted with
+// drag handles at both ends. Keyboard first: select text, press 1-4.
+//
+// Positions in this class's API are half-open code-point ranges (TextRange) into the canonical
+// text, as everywhere in Fourfold; the view converts to and from Qt's UTF-16 positions with
+// OffsetMap only (design.md §3).
+//
+// Keys (while the view has focus; they take precedence over window shortcuts):
+//   1-4                with a text selection: create a span of that function, snapped to whole
+//                      words (UAX #29 word boundaries); Alt+1-4: exactly the selection, snapped
+//                      only to whole grapheme clusters. With no text selection and a span
+//                      selected: relabel that span.
+//   Delete, Backspace  delete the selected span.
+//   Alt+Down, Alt+Up   select the next / previous span (from the caret when none is selected).
+//   Alt+Left/Right     move the selected span's start one word earlier / later.
+//   Alt+Shift+Left/Right  move the selected span's end one word earlier / later.
+//                      (Mirrored where the text at that end runs right to left, as the caret is.)
+//   Escape             clear the span selection, else the text selection.
+//   Arrows, Shift+arrows, Ctrl+A, Ctrl+C: caret, selection and copy, as in any text view.
+// Mouse: drag to select text; click a span's text, lane or badge to select it (clicking again on
+// nested spans cycles through them, shortest first); drag a handle of the selected span to move
+// that end (snapped to words, exact with Alt held at release).
+//
+// Overlapping spans: each function has its own lane, so spans of different functions never
+// cover each other. Where two or more spans of the SAME function overlap, their lane is drawn as
+// a double rule over the shared stretch; each span keeps its own start badge and end tick, so
+// the count and extent of each stays visible. Hovering a lane lists the spans under the pointer.
+
+#include "core/model/annotation.h"
+#include "core/model/article.h"
+#include "core/text/offset_map.h"
+#include "core/text/segmenter.h"
+
+#include <QHash>
+#include <QPoint>
+#include <QTextEdit>
+
+#include <array>
+#include <vector>
+
+class QTextBlock;
+class QTextLine;
+
+namespace fourfold {
+
+class ReadingView : public QTextEdit
+{
+    Q_OBJECT
+public:
+    explicit ReadingView(QWidget *parent = nullptr);
+    ~ReadingView() override;
+
+    // Shows `article`'s canonical text, its paragraph roles in the margin and uses its tokens
+    // for word snapping. Clears the spans, the span selection and the text selection. Do not
+    // use QTextEdit's own text setters on this view: the positions must stay the article's.
+    void setArticle(const Article &article);
+    const Article &article() const { return m_article; }
+
+    // The spans to draw (already filtered for blind coding by the caller). Deleted spans and
+    // spans whose range is empty or lies outside the text are skipped. Keeps the selected span
+    // if its id is still present, else clears the selection. Geometry is cached per range, so
+    // resending the list with one span more or changed costs only that span.
+    void setSpans(const std::vector<Annotation> &spans);
+    const std::vector<Annotation> &spans() const { return m_annotations; }
+
+    // Selects span `id` (an invalid id or one not shown clears the selection) and draws it
+    // emphasised. Collapses the text selection. Emits selectedSpanChanged() if it changed, never
+    // spanActivated() (that is for the user's own choice).
+    void setSelectedSpan(AnnotationId id);
+    // The selected span, or an invalid id (0) when none is.
+    AnnotationId selectedSpan() const { return m_selected; }
+
+    // Scrolls so that span `id`'s first line is in view with some context above it; does nothing
+    // for an id not shown.
+    void scrollToSpan(AnnotationId id);
+
+    // The current text selection as code points, snapped to whole words (the article's UAX #29
+    // tokens; leading and trailing white space trimmed) unless `exact`, in which case it is only
+    // widened to whole grapheme clusters. {-1, -1} when nothing is selected or the selection
+    // holds no word token (e.g. only white space; not checked for an article without tokens).
+    TextRange selectionRange(bool exact) const;
+
+    // Selects `codePoints` (an empty range places the caret there without a selection; an
+    // invalid or out-of-bounds range clears the selection). Clears the span selection if the
+    // new text selection is not empty.
+    void setTextSelection(const TextRange &codePoints);
+
+signals:
+    // Keys 1-4 or requestFunction() with a text selection: a new span of `function` over
+    // `range` (code points; snapped to words unless Alt was held).
+    void createSpanRequested(FramingFunction function, TextRange range);
+    // Keys 1-4 with a span selected and no text selection, when the function differs.
+    void relabelSpanRequested(AnnotationId id, FramingFunction function);
+    // The selected span's new extent (code points, never empty): Alt(+Shift)+Left/Right, or a
+    // handle dragged and released.
+    void resizeSpanRequested(AnnotationId id, TextRange range);
+    // Delete or Backspace with a span selected.
+    void deleteSpanRequested(AnnotationId id);
+    // The user selected span `id` (click, or Alt+Up/Down); the view has already selected it.
+    void spanActivated(AnnotationId id);
+    // The selected span changed for any reason; an invalid id when none is selected.
+    void selectedSpanChanged(AnnotationId id);
+
+public slots:
+    // Same as pressing the function's key (1-4) without Alt: create over the word-snapped text
+    // selection, else relabel the selected span.
+    void requestFunction(FramingFunction f);
+    // Alt+Down / Alt+Up: select the next / previous span in reading order and scroll to it.
+    void selectNextSpan();
+    void selectPreviousSpan();
+
+protected:
+    bool event(QEvent *e) override;
+    bool viewportEvent(QEvent *e) override;
+    void paintEvent(QPaintEvent *e) override;
+    void resizeEvent(QResizeEvent *e) override;
+    void changeEvent(QEvent *e) override;
+    void keyPressEvent(QKeyEvent *e) override;
+    void mousePressEvent(QMouseEvent *e) override;
+    void mouseMoveEvent(QMouseEvent *e) override;
+    void mouseDoubleClickEvent(QMouseEvent *e) override;
+    void mouseReleaseEvent(QMouseEvent *e) override;
+    void contextMenuEvent(QContextMenuEvent *e) override;
+
+private:
+    // A span as drawn: its function and both position units.
+    struct Span {
+        AnnotationId id;
+        FramingFunction function = FramingFunction::Problem;
+        TextRange range; // code points
+        TextRange range16; // UTF-16 positions in the document
+    };
+    // One visual piece of a range on one text line, in document coordinates.
+    struct Piece {
+        qreal x1 = 0;
+        qreal x2 = 0;
+        qreal lineTop = 0;
+        qreal lineBottom = 0; // bottom of the glyphs; the lanes start below it
+        qint64 lineKey = 0; // block number and line index: same value, same line
+    };
+    // Where a range lies on screen, computed once from the text layout and cached.
+    struct Geometry {
+        std::vector<Piece> pieces;
+        QPointF start; // caret x at the range's start, top of its line
+        qreal startBottom = 0;
+        bool startRtl = false;
+        QPointF end; // caret x at the range's end, top of its line
+        qreal endBottom = 0;
+        bool endRtl = false;
+    };
+    // Sizes derived from the font, so everything scales with it (and with the screen's DPI).
+    struct Metrics {
+        qreal pitch = 4; // distance between lanes
+        qreal stroke = 2; // lane line width
+        qreal gap = 2; // between the glyphs and the first lane
+        qreal zone = 20; // lanes' total height under a line
+        qreal readingWidth = 600; // the text column
+        qreal labelColumn = 80; // the paragraph-role margin
+        qreal handleRadius = 4;
+        QFont badgeFont;
+        QFont labelFont;
+    };
+    // What a pointer position hits.
+    struct Hit {
+        enum Kind { Nothing, Text, Lane, Badge, StartHandle, EndHandle } kind = Nothing;
+        std::vector<AnnotationId> spans; // shortest first
+    };
+    struct Badge {
+        QRectF rect; // document coordinates
+        const Span *span = nullptr;
+        bool rtl = false;
+    };
+    struct Drag {
+        bool active = false;
+        bool moveStart = false;
+        AnnotationId id;
+        TextRange original; // code points
+        TextRange preview; // code points
+    };
+
+    void rebuildDocument();
+    void updateMetrics();
+    void updateMargins();
+    void updateColours();
+    void updateEmphasis();
+    void updateAccessibleDescription();
+    void invalidateGeometry();
+
+    const Span *spanById(AnnotationId id) const;
+    QColor laneColour(FramingFunction f) const { return m_laneColours[std::size_t(f)]; }
+    qreal laneY(qreal lineBottom, int lane) const;
+    const Geometry &geometry(const TextRange &range16) const;
+    Geometry computeGeometry(const TextRange &range16) const;
+    void addPieces(const QTextBlock &block, const QTextLine &line, qint64 from16, qint64 to16,
+        std::vector<Piece> &pieces) const;
+    bool isRtlAt(qint64 pos16, const QTextBlock &block) const;
+    TextRange visibleRange16(const QRect &viewportRect) const;
+    std::vector<const Span *> spansIn(const TextRange &range16) const;
+    QRectF badgeRect(const Geometry &g) const;
+    std::vector<Badge> layoutBadges(const std::vector<const Span *> &spans) const;
+
+    void paintLanes(QPainter &p, const std::vector<const Span *> &visible, const QRectF &clip);
+    void paintSelection(QPainter &p);
+    void paintRoleLabels(QPainter &p, const TextRange &visible16);
+
+    Hit hitTest(const QPoint &viewportPos) const;
+    qint64 codePointAt(const QPoint &viewportPos) const;
+    void selectSpanByUser(AnnotationId id);
+    void selectFromHit(const Hit &hit);
+    void applyFunction(FramingFunction f, bool exact);
+    void resizeByWord(bool moveStart, int direction);
+    void clearTextSelection();
+    bool wantsKey(const QKeyEvent *e) const;
+    void updateDragPreview(const QPoint &viewportPos, bool exact);
+
+    Article m_article;
+    OffsetMap m_map {QString()};
+    Segmentation m_segmentation;
+    bool m_hasRtl = false;
+    std::vector<qint64> m_paragraphStarts16; // sorted, with m_paragraphRoles
+    std::vector<ParagraphRole> m_paragraphRoles;
+
+    std::vector<Annotation> m_annotations;
+    std::vector<Span> m_spans; // sorted by UTF-16 start, then end, then id
+    QHash<qint64, qsizetype> m_indexById;
+    AnnotationId m_selected;
+    Drag m_drag;
+
+    Metrics m_metrics;
+    std::array<QColor, 4> m_laneColours;
+    std::array<QColor, 4> m_badgeFill;
+    std::array<QColor, 4> m_badgeText;
+    bool m_dark = false;
+    qreal m_leftMargin = -1;
+    qreal m_rightMargin = -1;
+
+    // Range geometry keyed by (start16, end16); valid for m_geometryWidth.
+    mutable QHash<quint64, Geometry> m_geometry;
+    mutable int m_geometryWidth = -1;
+
+    QPoint m_pressPos;
+    bool m_pressOnText = false;
+    AnnotationId m_pendingSpanClick;
+    bool m_changingSelection = false;
+};
+
+} // namespace fourfold

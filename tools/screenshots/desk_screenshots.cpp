@@ -1,0 +1,94 @@
+// Writes the README's screenshots of the desktop program from the sample project, offscreen:
+//   fourfold_screenshots SAMPLE_PROJECT OUT_DIR
+// (CMake target `screenshots` runs it into docs/screenshots.) Nothing here is edited by hand.
+
+#include "app/desktop/coder_dialog.h"
+#include "app/desktop/coding_session.h"
+#include "app/desktop/main_window.h"
+#include "app/desktop/reading_view.h"
+
+#include <QApplication>
+#include <QDir>
+#include <QFile>
+#include <QStandardPaths>
+#include <QTemporaryDir>
+#include <QTimer>
+
+#include <cstdio>
+
+using namespace fourfold;
+
+namespace {
+
+bool save(QWidget &w, const QString &dir, const char *name)
+{
+    QApplication::processEvents();
+    const QString path = QDir(dir).filePath(QString::fromLatin1(name));
+    const bool ok = w.grab().save(path);
+    std::printf("%s %s\n", ok ? "wrote" : "FAILED", qPrintable(path));
+    return ok;
+}
+
+} // namespace
+
+int main(int argc, char *argv[])
+{
+    if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
+        qputenv("QT_QPA_PLATFORM", "offscreen");
+    QStandardPaths::setTestModeEnabled(true);
+    QApplication app(argc, argv);
+    QApplication::setOrganizationName(QStringLiteral("FourfoldScreenshots"));
+    if (argc < 3) {
+        std::fprintf(stderr, "usage: fourfold_screenshots SAMPLE_PROJECT OUT_DIR\n");
+        return 2;
+    }
+    QTemporaryDir temp;
+    const QString project = temp.filePath(QStringLiteral("demo.fourfold"));
+    if (!QFile::copy(QString::fromLocal8Bit(argv[1]), project))
+        return 1;
+    QFile::setPermissions(project, QFile::ReadOwner | QFile::WriteOwner);
+    const QString out = QString::fromLocal8Bit(argv[2]);
+    QDir().mkpath(out);
+    bool ok = true;
+
+    {
+        MainWindow start;
+        start.resize(1200, 700);
+        start.show();
+        ok &= save(start, out, "start.png");
+    }
+    {
+        auto p = Project::open(project);
+        if (!p)
+            return 1;
+        CoderDialog dialog(p->settings().name, *p->coders());
+        dialog.resize(560, 360);
+        dialog.show();
+        ok &= save(dialog, out, "coder-dialog.png");
+    }
+    {
+        MainWindow w;
+        w.resize(1600, 960);
+        if (!w.openProject(project, QStringLiteral("C01")))
+            return 1;
+        w.show();
+        // The first assigned opinion piece, with its first evaluation span selected.
+        auto id = w.session()->project().articleByExternalId(QStringLiteral("hb-02"));
+        if (id && *id) {
+            w.openArticle(**id);
+            for (const Annotation &a : w.session()->visibleAnnotations(**id))
+                if (a.content.function == FramingFunction::Evaluation) {
+                    w.selectSpan(a.id);
+                    break;
+                }
+        }
+        ok &= save(w, out, "desk.png");
+        auto nl = w.session()->project().articleByExternalId(QStringLiteral("mv-02"));
+        if (nl && *nl) {
+            w.openArticle(**nl);
+            w.selectSpan(AnnotationId{});
+        }
+        ok &= save(w, out, "desk-dutch.png");
+    }
+    return ok ? 0 : 1;
+}
