@@ -237,6 +237,11 @@ QWidget *MainWindow::buildDesk()
             selectSpan(AnnotationId{});
     });
     connect(m_reading, &ReadingView::spanActivated, this, &MainWindow::selectSpan);
+    // A new text selection clears the view's span selection: the panels follow.
+    connect(m_reading, &ReadingView::selectedSpanChanged, this, [this](AnnotationId id) {
+        if (id != m_selected)
+            selectSpan(id);
+    });
     connect(m_card, &FrameCard::spanActivated, this, [this](AnnotationId id) {
         selectSpan(id);
         m_reading->scrollToSpan(id);
