@@ -103,7 +103,8 @@ QWidget *MainWindow::buildStartPage()
     recent->setAccessibleName(tr("Recent projects"));
     recent->setMaximumWidth(640);
     for (const QString &p : QSettings().value(QStringLiteral("recentProjects")).toStringList())
-        recent->addItem(p);
+        if (QFileInfo::exists(p))  // moved or deleted projects are not offered
+            recent->addItem(p);
     connect(recent, &QListWidget::itemActivated, this, [this](QListWidgetItem *item) {
         if (auto st = openProject(item->text()); !st && st.error().code != ErrorCode::Cancelled)
             QMessageBox::warning(this, tr("Cannot open project"), st.error().toString());
@@ -112,8 +113,11 @@ QWidget *MainWindow::buildStartPage()
     recentRow->addStretch();
     recentRow->addWidget(recent);
     recentRow->addStretch();
+    auto *recentLabel = new QLabel(tr("Recent projects"), page);
+    recentLabel->setVisible(recent->count() > 0);
+    recent->setVisible(recent->count() > 0);
     outer->addSpacing(16);
-    outer->addWidget(new QLabel(tr("Recent projects"), page), 0, Qt::AlignHCenter);
+    outer->addWidget(recentLabel, 0, Qt::AlignHCenter);
     outer->addLayout(recentRow);
     outer->addStretch(3);
     return page;
@@ -194,7 +198,7 @@ QWidget *MainWindow::buildDesk()
 
     // Right: the frame card, the items under it, then the span editor and the codebook.
     auto *right = new QSplitter(Qt::Vertical, splitter);
-    m_card = new FrameCard(right);
+    m_card = new FrameCard(right);  // scrolls by itself when an article has many spans
     m_items = nullptr;  // made once a session exists (it needs one)
     m_tabs = new QTabWidget(right);
     right->addWidget(m_card);
@@ -339,7 +343,7 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
     m_selected = AnnotationId{};
 
     m_items = new ItemForm(m_session.get(), this);
-    if (auto *right = qobject_cast<QSplitter *>(m_card->parentWidget()))
+    if (auto *right = qobject_cast<QSplitter *>(m_tabs->parentWidget()))
         right->insertWidget(1, m_items);
     m_spanEditor = new SpanEditor(m_session.get(), m_tabs);
     m_spanEditor->setCodebook(m_session->codebook());

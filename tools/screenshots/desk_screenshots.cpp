@@ -11,7 +11,9 @@
 #include <QDir>
 #include <QFile>
 #include <QStandardPaths>
+#include <QSettings>
 #include <QTemporaryDir>
+#include <QThread>
 #include <QTimer>
 
 #include <cstdio>
@@ -22,7 +24,11 @@ namespace {
 
 bool save(QWidget &w, const QString &dir, const char *name)
 {
-    QApplication::processEvents();
+    // Let layouts settle: a rebuilt frame card asks its scroll area for room over several passes.
+    for (int i = 0; i < 10; ++i) {
+        QApplication::processEvents();
+        QThread::msleep(10);
+    }
     const QString path = QDir(dir).filePath(QString::fromLatin1(name));
     const bool ok = w.grab().save(path);
     std::printf("%s %s\n", ok ? "wrote" : "FAILED", qPrintable(path));
@@ -38,6 +44,7 @@ int main(int argc, char *argv[])
     QStandardPaths::setTestModeEnabled(true);
     QApplication app(argc, argv);
     QApplication::setOrganizationName(QStringLiteral("FourfoldScreenshots"));
+    QSettings().clear();  // no recent projects from earlier runs
     if (argc < 3) {
         std::fprintf(stderr, "usage: fourfold_screenshots SAMPLE_PROJECT OUT_DIR\n");
         return 2;
@@ -89,6 +96,19 @@ int main(int argc, char *argv[])
             w.selectSpan(AnnotationId{});
         }
         ok &= save(w, out, "desk-dutch.png");
+    }
+    {
+        // A lead sees every article; with "every coder's spans" on, all three coders' spans.
+        MainWindow w;
+        w.resize(1600, 960);
+        if (!w.openProject(project, QStringLiteral("L01")))
+            return 1;
+        w.show();
+        w.session()->setShowAllCoders(true);
+        auto id = w.session()->project().articleByExternalId(QStringLiteral("qs-01"));
+        if (id && *id)
+            w.openArticle(**id);
+        ok &= save(w, out, "desk-lead-all-coders.png");
     }
     return ok ? 0 : 1;
 }
