@@ -6,8 +6,7 @@ namespace fourfold {
 
 ArticleFilter::ArticleFilter(QObject *parent)
     : QSortFilterProxyModel(parent)
-{
-}
+{ }
 
 void ArticleFilter::setStatus(const QString &status)
 {

@@ -4,8 +4,7 @@ namespace fourfold {
 
 ArticleListModel::ArticleListModel(QObject *parent)
     : QAbstractTableModel(parent)
-{
-}
+{ }
 
 void ArticleListModel::setArticles(std::vector<ArticleRow> rows)
 {
@@ -34,7 +33,7 @@ int ArticleListModel::rowOf(ArticleId id) const
 
 ArticleId ArticleListModel::articleAt(int row) const
 {
-    return row >= 0 && size_t(row) < m_rows.size() ? m_rows[size_t(row)].summary.id : ArticleId{};
+    return row >= 0 && size_t(row) < m_rows.size() ? m_rows[size_t(row)].summary.id : ArticleId {};
 }
 
 int ArticleListModel::rowCount(const QModelIndex &parent) const
@@ -81,7 +80,10 @@ QVariant ArticleListModel::data(const QModelIndex &index, int role) const
     case Status:
         return statusLabel(r.status);
     case Time:
-        return r.seconds > 0 ? QStringLiteral("%1:%2").arg(r.seconds / 60).arg(r.seconds % 60, 2, 10, QLatin1Char('0')) : QString();
+        return r.seconds > 0 ? QStringLiteral("%1:%2")
+                                   .arg(r.seconds / 60)
+                                   .arg(r.seconds % 60, 2, 10, QLatin1Char('0'))
+                             : QString();
     }
     return {};
 }

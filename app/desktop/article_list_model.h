@@ -12,7 +12,7 @@ namespace fourfold {
 
 struct ArticleRow {
     ArticleSummary summary;
-    QString status;  // "assigned", "started", "done"
+    QString status; // "assigned", "started", "done"
     qint64 seconds = 0;
 };
 
@@ -37,7 +37,8 @@ public:
     int rowCount(const QModelIndex &parent = {}) const override;
     int columnCount(const QModelIndex &parent = {}) const override;
     QVariant data(const QModelIndex &index, int role = Qt::DisplayRole) const override;
-    QVariant headerData(int section, Qt::Orientation orientation, int role = Qt::DisplayRole) const override;
+    QVariant headerData(
+        int section, Qt::Orientation orientation, int role = Qt::DisplayRole) const override;
 
     // "not started", "in progress", "done" (translated).
     static QString statusLabel(const QString &status);

@@ -8,22 +8,26 @@
 
 namespace fourfold {
 
-CoderDialog::CoderDialog(const QString &projectName, const std::vector<Coder> &coders, QWidget *parent)
+CoderDialog::CoderDialog(
+    const QString &projectName, const std::vector<Coder> &coders, QWidget *parent)
     : QDialog(parent)
     , m_coders(coders)
 {
     setWindowTitle(tr("Who is coding?"));
     auto *layout = new QVBoxLayout(this);
-    auto *intro = new QLabel(tr("<b>%1</b><br>Choose who you are. A coder sees only their own spans and the articles "
-                                "assigned to them; a lead sees every article.")
-                                 .arg(projectName.toHtmlEscaped()),
-                             this);
+    auto *intro = new QLabel(
+        tr("<b>%1</b><br>Choose who you are. A coder sees only their own spans and the articles "
+           "assigned to them; a lead sees every article.")
+            .arg(projectName.toHtmlEscaped()),
+        this);
     intro->setWordWrap(true);
     layout->addWidget(intro);
     m_list = new QListWidget(this);
     m_list->setAccessibleName(tr("Coders"));
     for (const Coder &c : m_coders)
-        m_list->addItem(QStringLiteral("%1 — %2 (%3)").arg(c.pseudonym, c.name, c.role == CoderRole::Lead ? tr("lead") : tr("coder")));
+        m_list->addItem(
+            QStringLiteral("%1 — %2 (%3)")
+                .arg(c.pseudonym, c.name, c.role == CoderRole::Lead ? tr("lead") : tr("coder")));
     if (!m_coders.empty())
         m_list->setCurrentRow(0);
     layout->addWidget(m_list);

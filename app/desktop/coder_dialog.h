@@ -17,7 +17,8 @@ class CoderDialog : public QDialog
 {
     Q_OBJECT
 public:
-    CoderDialog(const QString &projectName, const std::vector<Coder> &coders, QWidget *parent = nullptr);
+    CoderDialog(
+        const QString &projectName, const std::vector<Coder> &coders, QWidget *parent = nullptr);
     std::optional<Coder> chosen() const;
 
 private:

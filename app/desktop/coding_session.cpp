@@ -87,8 +87,9 @@ Phase CodingSession::phaseOf(ArticleId article) const
 
 std::vector<Annotation> CodingSession::visibleAnnotations(ArticleId article) const
 {
-    auto spans = showsAllCoders() ? m_project.annotations(article) : m_project.annotations(article, m_coder.id);
-    return spans ? *spans : std::vector<Annotation>{};
+    auto spans = showsAllCoders() ? m_project.annotations(article)
+                                  : m_project.annotations(article, m_coder.id);
+    return spans ? *spans : std::vector<Annotation> {};
 }
 
 std::vector<Judgement> CodingSession::ownJudgements(ArticleId article) const
@@ -106,7 +107,8 @@ Status CodingSession::push(std::unique_ptr<Edit> edit, ArticleId article)
     auto *command = new EditCommand(this, std::move(edit), article);
     // push() runs redo(); a command whose redo failed marks itself obsolete and is deleted.
     QString error;
-    auto connection = connect(this, &CodingSession::errorOccurred, this, [&error](const QString &m) { error = m; });
+    auto connection = connect(
+        this, &CodingSession::errorOccurred, this, [&error](const QString &m) { error = m; });
     m_undo.push(command);
     disconnect(connection);
     if (!error.isEmpty())
@@ -116,8 +118,8 @@ Status CodingSession::push(std::unique_ptr<Edit> edit, ArticleId article)
 
 Status CodingSession::addSpan(ArticleId article, FramingFunction function, TextRange range)
 {
-    auto edit = std::make_unique<AddAnnotationEdit>(article, m_coder.id, AnnotationContent{function, range, {}, {}, {}},
-                                                    phaseOf(article));
+    auto edit = std::make_unique<AddAnnotationEdit>(
+        article, m_coder.id, AnnotationContent {function, range, {}, {}, {}}, phaseOf(article));
     AddAnnotationEdit *raw = edit.get();
     FOURFOLD_TRY_STATUS(push(std::move(edit), article));
     m_lastAdded = raw->annotationId();
@@ -145,17 +147,22 @@ Status CodingSession::linkSpans(AnnotationId source, AnnotationId target, const 
     auto span = m_project.annotation(source);
     if (!span)
         return std::unexpected(span.error());
-    return push(std::make_unique<LinkAnnotationsEdit>(source, target, type, m_coder.id), span->article);
+    return push(
+        std::make_unique<LinkAnnotationsEdit>(source, target, type, m_coder.id), span->article);
 }
 
 Status CodingSession::answerItem(ArticleId article, const QString &itemKey, const QString &value)
 {
-    return push(std::make_unique<SetJudgementEdit>(article, m_coder.id, itemKey, value, phaseOf(article)), article);
+    return push(
+        std::make_unique<SetJudgementEdit>(article, m_coder.id, itemKey, value, phaseOf(article)),
+        article);
 }
 
 Status CodingSession::markDone(ArticleId article)
 {
-    FOURFOLD_TRY_STATUS(push(std::make_unique<SetArticleStatusEdit>(article, m_coder.id, QStringLiteral("done")), article));
+    FOURFOLD_TRY_STATUS(
+        push(std::make_unique<SetArticleStatusEdit>(article, m_coder.id, QStringLiteral("done")),
+            article));
     emit statusChanged(article);
     return {};
 }

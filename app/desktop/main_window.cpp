@@ -25,6 +25,7 @@
 #include <QLabel>
 #include <QLineEdit>
 #include <QListWidget>
+#include <QMenu>
 #include <QMenuBar>
 #include <QMessageBox>
 #include <QPushButton>
@@ -47,7 +48,8 @@ QString samplePath()
 {
     // In the build tree the sample project sits beside app/: build/sample-project/demo.fourfold.
     const QDir bin(QCoreApplication::applicationDirPath());
-    for (const QString &candidate : {QStringLiteral("../../sample-project/demo.fourfold"), QStringLiteral("../sample-project/demo.fourfold")})
+    for (const QString &candidate : {QStringLiteral("../../sample-project/demo.fourfold"),
+             QStringLiteral("../sample-project/demo.fourfold")})
         if (QFileInfo::exists(bin.filePath(candidate)))
             return QFileInfo(bin.filePath(candidate)).canonicalFilePath();
     return {};
@@ -82,9 +84,10 @@ QWidget *MainWindow::buildStartPage()
     auto *page = new QWidget(this);
     auto *outer = new QVBoxLayout(page);
     outer->addStretch(2);
-    auto *title = new QLabel(tr("<h1>Fourfold</h1><p>Manual frame analysis of news and opinion articles: "
-                                "problem, cause, evaluation, remedy.</p>"),
-                             page);
+    auto *title =
+        new QLabel(tr("<h1>Fourfold</h1><p>Manual frame analysis of news and opinion articles: "
+                      "problem, cause, evaluation, remedy.</p>"),
+            page);
     title->setAlignment(Qt::AlignCenter);
     outer->addWidget(title);
     auto *buttons = new QHBoxLayout;
@@ -103,7 +106,7 @@ QWidget *MainWindow::buildStartPage()
     recent->setAccessibleName(tr("Recent projects"));
     recent->setMaximumWidth(640);
     for (const QString &p : QSettings().value(QStringLiteral("recentProjects")).toStringList())
-        if (QFileInfo::exists(p))  // moved or deleted projects are not offered
+        if (QFileInfo::exists(p)) // moved or deleted projects are not offered
             recent->addItem(p);
     connect(recent, &QListWidget::itemActivated, this, [this](QListWidgetItem *item) {
         if (auto st = openProject(item->text()); !st && st.error().code != ErrorCode::Cancelled)
@@ -153,7 +156,8 @@ QWidget *MainWindow::buildDesk()
     m_articles = new ArticleListModel(this);
     m_filter = new ArticleFilter(this);
     m_filter->setSourceModel(m_articles);
-    connect(m_statusFilter, &QComboBox::currentIndexChanged, this, [this] { m_filter->setStatus(m_statusFilter->currentData().toString()); });
+    connect(m_statusFilter, &QComboBox::currentIndexChanged, this,
+        [this] { m_filter->setStatus(m_statusFilter->currentData().toString()); });
     m_list = new QTableView(left);
     m_list->setModel(m_filter);
     m_list->setSelectionBehavior(QAbstractItemView::SelectRows);
@@ -163,10 +167,27 @@ QWidget *MainWindow::buildDesk()
     m_list->setAccessibleName(tr("Articles"));
     m_list->horizontalHeader()->setSectionResizeMode(ArticleListModel::Title, QHeaderView::Stretch);
     leftLayout->addWidget(m_list);
-    connect(m_list->selectionModel(), &QItemSelectionModel::currentRowChanged, this, [this](const QModelIndex &current) {
-        if (current.isValid())
-            openArticle(ArticleId{current.data(ArticleListModel::ArticleIdRole).toLongLong()});
-    });
+    // Right-click on the header shows or hides columns (outlet and length start hidden).
+    m_list->horizontalHeader()->setContextMenuPolicy(Qt::CustomContextMenu);
+    connect(m_list->horizontalHeader(), &QWidget::customContextMenuRequested, this,
+        [this](const QPoint &pos) {
+            QMenu menu(this);
+            for (int c = 0; c < ArticleListModel::ColumnCount; ++c) {
+                if (c == ArticleListModel::Title)
+                    continue;
+                QAction *a = menu.addAction(m_articles->headerData(c, Qt::Horizontal).toString());
+                a->setCheckable(true);
+                a->setChecked(!m_list->isColumnHidden(c));
+                connect(a, &QAction::toggled, this,
+                    [this, c](bool on) { m_list->setColumnHidden(c, !on); });
+            }
+            menu.exec(m_list->horizontalHeader()->mapToGlobal(pos));
+        });
+    connect(m_list->selectionModel(), &QItemSelectionModel::currentRowChanged, this,
+        [this](const QModelIndex &current) {
+            if (current.isValid())
+                openArticle(ArticleId {current.data(ArticleListModel::ArticleIdRole).toLongLong()});
+        });
 
     // Middle: the function buttons above the article.
     auto *middle = new QWidget(splitter);
@@ -181,10 +202,17 @@ QWidget *MainWindow::buildDesk()
     for (FramingFunction f : kFramingFunctions) {
         const FunctionStyle style = functionStyle(f);
         auto *button = new QToolButton(middle);
-        button->setText(QStringLiteral("%1  %2  ·  %3").arg(style.letter).arg(functionName(f)).arg(functionShortcutKey(f)));
-        button->setToolTip(tr("Mark the selected text as %1 (key %2)").arg(functionName(f)).arg(functionShortcutKey(f)));
+        button->setText(QStringLiteral("%1  %2  ·  %3")
+                            .arg(style.letter)
+                            .arg(functionName(f))
+                            .arg(functionShortcutKey(f)));
+        button->setToolTip(tr("Mark the selected text as %1 (key %2)")
+                               .arg(functionName(f))
+                               .arg(functionShortcutKey(f)));
         button->setAccessibleName(functionName(f));
-        button->setStyleSheet(QStringLiteral("QToolButton { border-bottom: 3px solid %1; padding: 3px 8px; }").arg(style.colour.name()));
+        button->setStyleSheet(
+            QStringLiteral("QToolButton { border-bottom: 3px solid %1; padding: 3px 8px; }")
+                .arg(style.colour.name()));
         connect(button, &QToolButton::clicked, this, [this, f] { m_reading->requestFunction(f); });
         bar->addWidget(button);
     }
@@ -198,8 +226,8 @@ QWidget *MainWindow::buildDesk()
 
     // Right: the frame card, the items under it, then the span editor and the codebook.
     auto *right = new QSplitter(Qt::Vertical, splitter);
-    m_card = new FrameCard(right);  // scrolls by itself when an article has many spans
-    m_items = nullptr;  // made once a session exists (it needs one)
+    m_card = new FrameCard(right); // scrolls by itself when an article has many spans
+    m_items = nullptr; // made once a session exists (it needs one)
     m_tabs = new QTabWidget(right);
     right->addWidget(m_card);
     right->addWidget(m_tabs);
@@ -214,31 +242,34 @@ QWidget *MainWindow::buildDesk()
     splitter->setStretchFactor(2, 3);
     splitter->setSizes({360, 760, 420});
 
-    connect(m_reading, &ReadingView::createSpanRequested, this, [this](FramingFunction f, TextRange range) {
-        if (!m_session || !m_article.isValid())
-            return;
-        if (m_session->addSpan(m_article, f, range))
-            selectSpan(m_session->lastAddedSpan());
-    });
-    connect(m_reading, &ReadingView::relabelSpanRequested, this, [this](AnnotationId id, FramingFunction f) {
-        if (auto span = m_session->project().annotation(id)) {
-            AnnotationContent content = span->content;
-            if (content.function != f)
-                content.attributes = {};  // attributes belong to the old function's schema
-            content.function = f;
-            (void)m_session->changeSpan(id, content);
-        }
-    });
-    connect(m_reading, &ReadingView::resizeSpanRequested, this, [this](AnnotationId id, TextRange range) {
-        if (auto span = m_session->project().annotation(id)) {
-            AnnotationContent content = span->content;
-            content.range = range;
-            (void)m_session->changeSpan(id, content);
-        }
-    });
+    connect(m_reading, &ReadingView::createSpanRequested, this,
+        [this](FramingFunction f, TextRange range) {
+            if (!m_session || !m_article.isValid())
+                return;
+            if (m_session->addSpan(m_article, f, range))
+                selectSpan(m_session->lastAddedSpan());
+        });
+    connect(m_reading, &ReadingView::relabelSpanRequested, this,
+        [this](AnnotationId id, FramingFunction f) {
+            if (auto span = m_session->project().annotation(id)) {
+                AnnotationContent content = span->content;
+                if (content.function != f)
+                    content.attributes = {}; // attributes belong to the old function's schema
+                content.function = f;
+                (void)m_session->changeSpan(id, content);
+            }
+        });
+    connect(m_reading, &ReadingView::resizeSpanRequested, this,
+        [this](AnnotationId id, TextRange range) {
+            if (auto span = m_session->project().annotation(id)) {
+                AnnotationContent content = span->content;
+                content.range = range;
+                (void)m_session->changeSpan(id, content);
+            }
+        });
     connect(m_reading, &ReadingView::deleteSpanRequested, this, [this](AnnotationId id) {
         if (m_session->deleteSpan(id))
-            selectSpan(AnnotationId{});
+            selectSpan(AnnotationId {});
     });
     connect(m_reading, &ReadingView::spanActivated, this, &MainWindow::selectSpan);
     // A new text selection clears the view's span selection: the panels follow.
@@ -272,13 +303,17 @@ void MainWindow::buildMenus()
     QMenu *code = menuBar()->addMenu(tr("&Code"));
     for (FramingFunction f : kFramingFunctions) {
         // The keys 1–4 are handled by the reading desk itself; the menu shows them.
-        QAction *a = code->addAction(tr("Mark as %1\t%2").arg(functionName(f)).arg(functionShortcutKey(f)));
+        QAction *a =
+            code->addAction(tr("Mark as %1\t%2").arg(functionName(f)).arg(functionShortcutKey(f)));
         connect(a, &QAction::triggered, this, [this, f] { m_reading->requestFunction(f); });
     }
     code->addSeparator();
-    code->addAction(tr("Mark article as &done"), QKeySequence(Qt::CTRL | Qt::Key_Return), this, &MainWindow::markDone);
-    code->addAction(tr("&Next article"), QKeySequence(Qt::CTRL | Qt::Key_PageDown), this, &MainWindow::nextArticle);
-    code->addAction(tr("&Find in texts"), QKeySequence::Find, this, [this] { m_search->setFocus(); });
+    code->addAction(tr("Mark article as &done"), QKeySequence(Qt::CTRL | Qt::Key_Return), this,
+        &MainWindow::markDone);
+    code->addAction(tr("&Next article"), QKeySequence(Qt::CTRL | Qt::Key_PageDown), this,
+        &MainWindow::nextArticle);
+    code->addAction(
+        tr("&Find in texts"), QKeySequence::Find, this, [this] { m_search->setFocus(); });
 
     QMenu *view = menuBar()->addMenu(tr("&View"));
     m_showAll = view->addAction(tr("Show &every coder's spans (leads only)"));
@@ -293,10 +328,13 @@ void MainWindow::buildMenus()
     QMenu *settings = menuBar()->addMenu(tr("&Settings"));
     QMenu *language = settings->addMenu(tr("&Language"));
     auto *group = new QActionGroup(this);
-    const QString current = QSettings().value(QStringLiteral("language"), QStringLiteral("system")).toString();
+    const QString current =
+        QSettings().value(QStringLiteral("language"), QStringLiteral("system")).toString();
     for (const auto &[languageCode, name] :
-         {std::pair{QStringLiteral("system"), tr("System language")}, std::pair{QStringLiteral("en"), QStringLiteral("English")},
-          std::pair{QStringLiteral("nl"), QStringLiteral("Nederlands")}, std::pair{QStringLiteral("de"), QStringLiteral("Deutsch")}}) {
+        {std::pair {QStringLiteral("system"), tr("System language")},
+            std::pair {QStringLiteral("en"), QStringLiteral("English")},
+            std::pair {QStringLiteral("nl"), QStringLiteral("Nederlands")},
+            std::pair {QStringLiteral("de"), QStringLiteral("Deutsch")}}) {
         QAction *a = language->addAction(name);
         a->setCheckable(true);
         a->setChecked(languageCode == current);
@@ -305,7 +343,8 @@ void MainWindow::buildMenus()
     }
 
     QMenu *help = menuBar()->addMenu(tr("&Help"));
-    help->addAction(tr("&Keyboard shortcuts"), QKeySequence::HelpContents, this, &MainWindow::showShortcuts);
+    help->addAction(
+        tr("&Keyboard shortcuts"), QKeySequence::HelpContents, this, &MainWindow::showShortcuts);
 }
 
 Status MainWindow::openProject(const QString &path, const QString &pseudonym)
@@ -339,8 +378,8 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
     delete m_spanEditor;
     delete m_codebook;
     m_session = std::make_unique<CodingSession>(std::move(*project), *who);
-    m_article = ArticleId{};
-    m_selected = AnnotationId{};
+    m_article = ArticleId {};
+    m_selected = AnnotationId {};
 
     m_items = new ItemForm(m_session.get(), this);
     if (auto *right = qobject_cast<QSplitter *>(m_tabs->parentWidget()))
@@ -367,8 +406,12 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
     });
     connect(stack, &QUndoStack::canUndoChanged, m_undo, &QAction::setEnabled);
     connect(stack, &QUndoStack::canRedoChanged, m_redo, &QAction::setEnabled);
-    connect(stack, &QUndoStack::undoTextChanged, this, [this](const QString &t) { m_undo->setText(t.isEmpty() ? tr("&Undo") : tr("&Undo %1").arg(t)); });
-    connect(stack, &QUndoStack::redoTextChanged, this, [this](const QString &t) { m_redo->setText(t.isEmpty() ? tr("&Redo") : tr("&Redo %1").arg(t)); });
+    connect(stack, &QUndoStack::undoTextChanged, this, [this](const QString &t) {
+        m_undo->setText(t.isEmpty() ? tr("&Undo") : tr("&Undo %1").arg(t));
+    });
+    connect(stack, &QUndoStack::redoTextChanged, this, [this](const QString &t) {
+        m_redo->setText(t.isEmpty() ? tr("&Redo") : tr("&Redo %1").arg(t));
+    });
     connect(m_session.get(), &CodingSession::articleChanged, this, [this](ArticleId id) {
         if (id == m_article)
             refreshArticle();
@@ -396,12 +439,15 @@ void MainWindow::refreshList()
 {
     std::vector<ArticleRow> rows;
     for (const ArticleSummary &a : m_session->visibleArticles())
-        rows.push_back(ArticleRow{a, m_session->articleStatus(a.id), m_session->secondsSpent(a.id)});
+        rows.push_back(
+            ArticleRow {a, m_session->articleStatus(a.id), m_session->secondsSpent(a.id)});
     m_articles->setArticles(std::move(rows));
     // The list is narrow: title, language, status and time; outlet and length are in the header
     // above the article.
-    m_list->setColumnHidden(ArticleListModel::Outlet, true);
-    m_list->setColumnHidden(ArticleListModel::Length, true);
+    if (!std::exchange(m_columnsChosen, true)) { // hide them once; later the person's choice stands
+        m_list->setColumnHidden(ArticleListModel::Outlet, true);
+        m_list->setColumnHidden(ArticleListModel::Length, true);
+    }
     m_list->resizeColumnsToContents();
     m_list->horizontalHeader()->setSectionResizeMode(ArticleListModel::Title, QHeaderView::Stretch);
 }
@@ -417,11 +463,15 @@ void MainWindow::openArticle(ArticleId id)
         return;
     }
     m_article = id;
-    m_selected = AnnotationId{};
-    m_articleHeader->setText(QStringLiteral("<b>%1</b><br><span style='color:palette(mid)'>%2 · %3 · %4</span>")
-                                 .arg(article->summary.title.toHtmlEscaped(), article->summary.outlet.toHtmlEscaped(),
-                                      article->summary.published.toHtmlEscaped(), article->summary.language.toHtmlEscaped()));
+    m_selected = AnnotationId {};
+    m_articleHeader->setText(
+        QStringLiteral("<b>%1</b><br><span style='color:palette(mid)'>%2 · %3 · %4</span>")
+            .arg(article->summary.title.toHtmlEscaped(), article->summary.outlet.toHtmlEscaped(),
+                article->summary.published.toHtmlEscaped(),
+                article->summary.language.toHtmlEscaped()));
     m_reading->setArticle(*article);
+    if (!m_search->text().trimmed().isEmpty())
+        m_reading->setSearchHighlight(m_search->text());
     refreshArticle();
     const int row = m_filter->mapFromSource(m_articles->index(m_articles->rowOf(id), 0)).row();
     if (row >= 0 && m_list->currentIndex().row() != row)
@@ -439,8 +489,9 @@ void MainWindow::refreshArticle()
     m_reading->setSpans(spans);
     m_card->setSpans(article->text, spans);
     m_items->setArticle(m_article, m_session->ownJudgements(m_article));
-    if (std::none_of(spans.begin(), spans.end(), [this](const Annotation &a) { return a.id == m_selected; }))
-        m_selected = AnnotationId{};
+    if (std::none_of(
+            spans.begin(), spans.end(), [this](const Annotation &a) { return a.id == m_selected; }))
+        m_selected = AnnotationId {};
     selectSpan(m_selected);
 }
 
@@ -457,7 +508,7 @@ void MainWindow::selectSpan(AnnotationId id)
         if (a.id == id)
             span = a;
     auto links = m_session->project().links(m_article);
-    m_spanEditor->setSpan(span, spans, links ? *links : std::vector<AnnotationLink>{});
+    m_spanEditor->setSpan(span, spans, links ? *links : std::vector<AnnotationLink> {});
     if (span)
         m_codebook->showFunction(span->content.function);
 }
@@ -467,7 +518,8 @@ void MainWindow::flushTime()
     const qint64 seconds = m_clock->takeSeconds();
     if (m_session && m_article.isValid() && seconds > 0) {
         m_session->addCodingTime(m_article, seconds);
-        m_articles->updateArticle(m_article, m_session->articleStatus(m_article), m_session->secondsSpent(m_article));
+        m_articles->updateArticle(
+            m_article, m_session->articleStatus(m_article), m_session->secondsSpent(m_article));
     }
 }
 
@@ -499,6 +551,7 @@ void MainWindow::search(const QString &query)
 {
     if (!m_session)
         return;
+    m_reading->setSearchHighlight(query);
     if (query.trimmed().isEmpty()) {
         m_filter->setMatches(std::nullopt);
         return;
@@ -512,12 +565,14 @@ void MainWindow::search(const QString &query)
     for (ArticleId id : *hits)
         ids.insert(id.value);
     m_filter->setMatches(ids);
-    statusBar()->showMessage(tr("%n article(s) contain \"%1\".", nullptr, int(ids.size())).arg(query), 6000);
+    statusBar()->showMessage(
+        tr("%n article(s) contain \"%1\".", nullptr, int(ids.size())).arg(query), 6000);
 }
 
 void MainWindow::chooseProject()
 {
-    const QString path = QFileDialog::getOpenFileName(this, tr("Open project"), QString(), tr("Fourfold projects (*.fourfold)"));
+    const QString path = QFileDialog::getOpenFileName(
+        this, tr("Open project"), QString(), tr("Fourfold projects (*.fourfold)"));
     if (path.isEmpty())
         return;
     if (auto st = openProject(path); !st && st.error().code != ErrorCode::Cancelled)
@@ -554,31 +609,39 @@ void MainWindow::updateTitle()
     }
     const Coder &c = m_session->coder();
     const QString role = m_session->isLead() ? tr("lead") : tr("coder");
-    setWindowTitle(tr("%1 — coding as %2 (%3) — Fourfold").arg(m_session->project().settings().name, c.pseudonym, role));
-    m_who->setText(m_session->isLead() ? tr("Coding as %1 · %2 · lead: every article").arg(c.pseudonym, c.name)
-                                       : tr("Coding as %1 · %2 · blind: only your own spans").arg(c.pseudonym, c.name));
+    setWindowTitle(tr("%1 — coding as %2 (%3) — Fourfold")
+                       .arg(m_session->project().settings().name, c.pseudonym, role));
+    m_who->setText(m_session->isLead()
+            ? tr("Coding as %1 · %2 · lead: every article").arg(c.pseudonym, c.name)
+            : tr("Coding as %1 · %2 · blind: only your own spans").arg(c.pseudonym, c.name));
 }
 
 void MainWindow::showShortcuts()
 {
     QString rows;
     auto row = [&rows](const QString &keys, const QString &what) {
-        rows += QStringLiteral("<tr><td style='padding-right:18px'><b>%1</b></td><td>%2</td></tr>").arg(keys.toHtmlEscaped(), what.toHtmlEscaped());
+        rows += QStringLiteral("<tr><td style='padding-right:18px'><b>%1</b></td><td>%2</td></tr>")
+                    .arg(keys.toHtmlEscaped(), what.toHtmlEscaped());
     };
     for (FramingFunction f : kFramingFunctions)
-        row(QString::number(functionShortcutKey(f)), tr("Mark the selected text as %1 (snapped to whole words; hold Alt for the exact selection); "
-                                                        "with a span selected: relabel it")
-                                                         .arg(functionName(f)));
+        row(QString::number(functionShortcutKey(f)),
+            tr("Mark the selected text as %1 (snapped to whole words; hold Alt for the exact "
+               "selection); "
+               "with a span selected: relabel it")
+                .arg(functionName(f)));
     row(tr("Delete"), tr("Delete the selected span"));
-    row(QKeySequence(QKeySequence::Undo).toString(QKeySequence::NativeText), tr("Undo the last change"));
+    row(QKeySequence(QKeySequence::Undo).toString(QKeySequence::NativeText),
+        tr("Undo the last change"));
     row(QKeySequence(QKeySequence::Redo).toString(QKeySequence::NativeText), tr("Redo"));
     row(QStringLiteral("Ctrl+Return"), tr("Mark the article as done and open the next"));
     row(QStringLiteral("Ctrl+PgDown"), tr("Next article that is not done"));
-    row(QKeySequence(QKeySequence::Find).toString(QKeySequence::NativeText), tr("Search the texts"));
+    row(QKeySequence(QKeySequence::Find).toString(QKeySequence::NativeText),
+        tr("Search the texts"));
     QMessageBox box(this);
     box.setWindowTitle(tr("Keyboard shortcuts"));
     box.setTextFormat(Qt::RichText);
-    box.setText(QStringLiteral("<table>%1</table><p>%2</p>").arg(rows, tr("Span resizing keys are listed in the reading desk's tooltip.")));
+    box.setText(QStringLiteral("<table>%1</table><p>%2</p>")
+                    .arg(rows, tr("Span resizing keys are listed in the reading desk's tooltip.")));
     box.exec();
 }
 

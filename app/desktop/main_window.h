@@ -48,6 +48,7 @@ public:
     SpanEditor *spanEditor() const { return m_spanEditor; }
     ItemForm *itemForm() const { return m_items; }
     QTableView *articleList() const { return m_list; }
+    QLineEdit *searchField() const { return m_search; }
     ArticleId currentArticle() const { return m_article; }
     void openArticle(ArticleId id);
     void selectSpan(AnnotationId id);
@@ -94,6 +95,7 @@ private:
     QAction *m_undo = nullptr;
     QAction *m_redo = nullptr;
     ActivityClock *m_clock = nullptr;
+    bool m_columnsChosen = false;
 };
 
 } // namespace fourfold

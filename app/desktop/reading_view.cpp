@@ -13,6 +13,7 @@
 #include <QMenu>
 #include <QMouseEvent>
 #include <QPainter>
+#include <QRegularExpression>
 #include <QScopedValueRollback>
 #include <QScrollBar>
 #include <QTextBlock>
@@ -134,6 +135,7 @@ ReadingView::~ReadingView() = default;
 
 void ReadingView::setArticle(const Article &article)
 {
+    m_searchHits.clear();
     m_article = article;
     m_map = OffsetMap(m_article.text);
     m_segmentation = {};
@@ -856,9 +858,41 @@ void ReadingView::changeEvent(QEvent *e)
     }
 }
 
+int ReadingView::setSearchHighlight(const QString &query)
+{
+    m_searchHits.clear();
+    const QString &text = m_article.text;
+    for (QString term :
+        query.split(QRegularExpression(QStringLiteral("\\s+")), Qt::SkipEmptyParts)) {
+        term.remove(QLatin1Char('"'));
+        if (term.endsWith(QLatin1Char('*')))
+            term.chop(1);
+        if (term.isEmpty() || term == QLatin1String("AND") || term == QLatin1String("OR")
+            || term == QLatin1String("NOT") || term.startsWith(QLatin1String("NEAR")))
+            continue;
+        for (qsizetype at = text.indexOf(term, 0, Qt::CaseInsensitive); at >= 0;
+             at = text.indexOf(term, at + term.size(), Qt::CaseInsensitive))
+            m_searchHits.push_back(TextRange {at, at + term.size()});
+    }
+    updateEmphasis();
+    return int(m_searchHits.size());
+}
+
 void ReadingView::updateEmphasis()
 {
     QList<QTextEdit::ExtraSelection> selections;
+    for (const TextRange &hit : m_searchHits) {
+        QTextEdit::ExtraSelection mark;
+        mark.cursor = QTextCursor(document());
+        mark.cursor.setPosition(int(hit.start));
+        mark.cursor.setPosition(int(hit.end), QTextCursor::KeepAnchor);
+        // Okabe–Ito yellow, which no function uses; background only, so the layout (and the
+        // cached span geometry) stays as it is.
+        QColor yellow(0xF0, 0xE4, 0x42);
+        yellow.setAlphaF(m_dark ? 0.35f : 0.55f);
+        mark.format.setBackground(yellow);
+        selections << mark;
+    }
     const Span *span = spanById(m_drag.active ? m_drag.id : m_selected);
     if (span) {
         const TextRange r16 = m_drag.active ? m_map.utf16Range(m_drag.preview) : span->range16;

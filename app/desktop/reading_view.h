@@ -87,6 +87,10 @@ public:
     // invalid or out-of-bounds range clears the selection). Clears the span selection if the
     // new text selection is not empty.
     void setTextSelection(const TextRange &codePoints);
+    // Marks every occurrence of the words of a full-text search (case-insensitive; FTS5
+    // operators, quotes and a trailing * are ignored) with a search-hit background; an empty
+    // query clears the marks. Returns how many occurrences were marked.
+    int setSearchHighlight(const QString &query);
 
 signals:
     // Keys 1-4 or requestFunction() with a text selection: a new span of `function` over
@@ -126,6 +130,7 @@ protected:
     void contextMenuEvent(QContextMenuEvent *e) override;
 
 private:
+    std::vector<TextRange> m_searchHits; // UTF-16 ranges of search hits
     // A span as drawn: its function and both position units.
     struct Span {
         AnnotationId id;

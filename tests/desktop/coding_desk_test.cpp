@@ -9,6 +9,7 @@
 
 #include <QFile>
 #include <QLabel>
+#include <QLineEdit>
 #include <QSet>
 #include <QTableView>
 #include <QTest>
@@ -31,10 +32,13 @@ struct DeskFixture {
         auto p = Project::open(path);
         REQUIRE(p);
         // "Café 🚢 Brakwater" in NFC, with a surrogate pair (U+1F6A2) and a ZWJ family emoji.
-        const QByteArray jsonl = "{\"id\":\"emoji-01\",\"title\":\"Caf\\u00e9 ferry\",\"language\":\"en\",\"text\":"
-                                 "\"The caf\\u00e9 \\ud83d\\udea2 at Brakwater is closing. \\ud83d\\udc68\\u200d\\ud83d\\udc69\\u200d\\ud83d\\udc67 "
-                                 "Families blame the na\\u00efve council.\"}\n";
-        REQUIRE(p->importFile(writeFile(dir, QStringLiteral("emoji.jsonl"), jsonl), ImportOptions{}));
+        const QByteArray jsonl =
+            "{\"id\":\"emoji-01\",\"title\":\"Caf\\u00e9 ferry\",\"language\":\"en\",\"text\":"
+            "\"The caf\\u00e9 \\ud83d\\udea2 at Brakwater is closing. "
+            "\\ud83d\\udc68\\u200d\\ud83d\\udc69\\u200d\\ud83d\\udc67 "
+            "Families blame the na\\u00efve council.\"}\n";
+        REQUIRE(
+            p->importFile(writeFile(dir, QStringLiteral("emoji.jsonl"), jsonl), ImportOptions {}));
         auto id = p->articleByExternalId(QStringLiteral("emoji-01"));
         REQUIRE(id);
         auto c01 = p->coderByPseudonym(QStringLiteral("C01"));
@@ -63,7 +67,8 @@ TextRange rangeOf(MainWindow &w, ArticleId article, const QString &needle)
 
 } // namespace
 
-TEST_CASE("a coder selects text, presses 2, and a cause span with exact code-point offsets is stored")
+TEST_CASE(
+    "a coder selects text, presses 2, and a cause span with exact code-point offsets is stored")
 {
     DeskFixture f;
     MainWindow w;
@@ -76,7 +81,7 @@ TEST_CASE("a coder selects text, presses 2, and a cause span with exact code-poi
     // "Families blame the naïve council": after 🚢 (2 UTF-16 units, 1 code point) and the family
     // emoji (5 code points, 8 UTF-16 units) the code-point offsets differ from Qt's.
     const TextRange target = rangeOf(w, article, QStringLiteral("blame the na\u00efve council"));
-    CHECK(target.start == 51);  // counted by hand in code points (W3C TextPositionSelector rule)
+    CHECK(target.start == 51); // counted by hand in code points (W3C TextPositionSelector rule)
     w.readingView()->setTextSelection(target);
     QTest::keyClick(w.readingView(), Qt::Key_2);
 
@@ -135,7 +140,7 @@ TEST_CASE("Alt keeps the exact selection; without it the span snaps to whole wor
     const ArticleId article = articleId(w, "emoji-01");
     w.openArticle(article);
     const TextRange word = rangeOf(w, article, QStringLiteral("Brakwater"));
-    const TextRange inside{word.start + 2, word.end - 2};
+    const TextRange inside {word.start + 2, word.end - 2};
     w.readingView()->setTextSelection(inside);
     QTest::keyClick(w.readingView(), Qt::Key_1);
     w.readingView()->setTextSelection(inside);
@@ -146,7 +151,7 @@ TEST_CASE("Alt keeps the exact selection; without it the span snaps to whole wor
     QSet<qint64> starts;
     for (const Annotation &a : *spans) {
         if (a.content.function == FramingFunction::Problem)
-            CHECK(a.content.range == word);  // snapped to the word (UAX #29 word boundaries)
+            CHECK(a.content.range == word); // snapped to the word (UAX #29 word boundaries)
         else
             CHECK(a.content.range == inside);
     }
@@ -209,7 +214,8 @@ TEST_CASE("a coder sees only their own spans and their assigned articles, anywhe
         for (const QLabel *label : w.frameCard()->findChildren<QLabel *>())
             shown += label->text() + QLatin1Char('\n');
         for (const QString &q : others) {
-            const bool alsoMine = std::any_of(mine.begin(), mine.end(), [&](const QString &m) { return m.left(30) == q.left(30); });
+            const bool alsoMine = std::any_of(mine.begin(), mine.end(),
+                [&](const QString &m) { return m.left(30) == q.left(30); });
             if (alsoMine)
                 continue;
             INFO(q.toStdString());
@@ -217,4 +223,29 @@ TEST_CASE("a coder sees only their own spans and their assigned articles, anywhe
             CHECK_FALSE(shown.contains(q.left(30).toHtmlEscaped()));
         }
     }
+}
+
+TEST_CASE("full-text search narrows the list and marks the hits in the text")
+{
+    DeskFixture f;
+    MainWindow w;
+    REQUIRE(w.openProject(f.path, QStringLiteral("C01")));
+    w.show();
+    const int all = w.articleList()->model()->rowCount();
+    QTest::keyClicks(w.searchField(), QStringLiteral("dijk"));
+    QTest::keyClick(w.searchField(), Qt::Key_Return);
+    const int hits = w.articleList()->model()->rowCount();
+    CHECK(hits > 0);
+    CHECK(hits < all);
+    // Every listed article contains the word (checked on the stored text, not through FTS5).
+    for (int row = 0; row < hits; ++row) {
+        w.articleList()->selectRow(row);
+        auto article = w.session()->project().article(w.currentArticle());
+        REQUIRE(article);
+        CHECK(article->text.contains(QStringLiteral("dijk"), Qt::CaseInsensitive));
+        CHECK(w.readingView()->setSearchHighlight(QStringLiteral("dijk"))
+            == article->text.count(QStringLiteral("dijk"), Qt::CaseInsensitive));
+    }
+    w.searchField()->clear();
+    CHECK(w.articleList()->model()->rowCount() == all);
 }

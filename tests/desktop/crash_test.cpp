@@ -32,7 +32,7 @@ TEST_CASE("a process killed while coding leaves every committed span in the proj
         }
     }
     REQUIRE(committed >= 5);
-    helper.kill();  // SIGKILL: no destructor, no clean close of SQLite
+    helper.kill(); // SIGKILL: no destructor, no clean close of SQLite
     REQUIRE(helper.waitForFinished());
 
     auto p = Project::open(path);

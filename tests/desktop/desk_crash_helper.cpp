@@ -29,7 +29,7 @@ int main(int argc, char *argv[])
         return 1;
     const ArticleSummary &article = articles.front();
     for (qint64 n = 1; n * 4 + 3 < article.length; ++n) {
-        if (!session.addSpan(article.id, FramingFunction::Remedy, TextRange{n * 4, n * 4 + 3}))
+        if (!session.addSpan(article.id, FramingFunction::Remedy, TextRange {n * 4, n * 4 + 3}))
             return 1;
         std::printf("committed %lld\n", n);
         std::fflush(stdout);

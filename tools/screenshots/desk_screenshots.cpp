@@ -10,8 +10,8 @@
 #include <QApplication>
 #include <QDir>
 #include <QFile>
-#include <QStandardPaths>
 #include <QSettings>
+#include <QStandardPaths>
 #include <QTemporaryDir>
 #include <QThread>
 #include <QTimer>
@@ -44,7 +44,7 @@ int main(int argc, char *argv[])
     QStandardPaths::setTestModeEnabled(true);
     QApplication app(argc, argv);
     QApplication::setOrganizationName(QStringLiteral("FourfoldScreenshots"));
-    QSettings().clear();  // no recent projects from earlier runs
+    QSettings().clear(); // no recent projects from earlier runs
     if (argc < 3) {
         std::fprintf(stderr, "usage: fourfold_screenshots SAMPLE_PROJECT OUT_DIR\n");
         return 2;
@@ -93,7 +93,7 @@ int main(int argc, char *argv[])
         auto nl = w.session()->project().articleByExternalId(QStringLiteral("mv-02"));
         if (nl && *nl) {
             w.openArticle(**nl);
-            w.selectSpan(AnnotationId{});
+            w.selectSpan(AnnotationId {});
         }
         ok &= save(w, out, "desk-dutch.png");
     }
