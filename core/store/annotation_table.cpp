@@ -300,7 +300,8 @@ Result<std::vector<Judgement>> judgements(const Database &db, ArticleId article)
 
 Result<std::vector<Judgement>> allJudgements(const Database &db)
 {
-    auto stmt = db.prepare(QStringLiteral("SELECT %1 FROM judgement WHERE deleted = 0 ORDER BY article_id, coder_id, item_key, id")
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT %1 FROM judgement WHERE deleted = 0 ORDER BY article_id, coder_id, item_key, id")
                                .arg(kJudgementColumns));
     if (!stmt)
         return std::unexpected(stmt.error());

@@ -10,6 +10,9 @@
 #include <QJsonObject>
 #include <QUuid>
 
+#include <type_traits>
+#include <vector>
+
 namespace fourfold::store {
 
 inline QString newUuid()
@@ -31,6 +34,23 @@ inline QString toJsonText(const QJsonObject &o)
 inline QJsonObject fromJsonText(const QString &text)
 {
     return QJsonDocument::fromJson(text.toUtf8()).object();
+}
+
+// Steps through every row of `stmt` and turns each into a value with `read(stmt)`; the first
+// stepping error ends it.
+template<typename Reader>
+auto collectRows(Statement &stmt, Reader read)
+    -> Result<std::vector<std::invoke_result_t<Reader, const Statement &>>>
+{
+    std::vector<std::invoke_result_t<Reader, const Statement &>> out;
+    while (true) {
+        auto row = stmt.step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            return out;
+        out.push_back(read(stmt));
+    }
 }
 
 // Runs `sql` with no bindings and returns the first column of the first row as an integer
