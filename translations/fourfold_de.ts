@@ -666,7 +666,7 @@
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
         <translation>Keine Textstelle ausgewählt.
 
-Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bearbeiten, oder wählen Sie Text aus und drücken Sie 1 bis 4, um ihn zu codieren.</translation>
+Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bearbeiten, oder wählen Sie Text aus und drücken Sie 1 bis 4, um ihn zu codieren.</translation>
     </message>
     <message>
         <location filename="../app/desktop/span_editor.cpp" line="182"/>

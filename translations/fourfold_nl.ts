@@ -666,7 +666,7 @@
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
         <translation>Geen fragment geselecteerd.
 
-Klik op een fragment in de tekst of op de framekaart om het te bewerken, of selecteer tekst en druk op 1 tot en met 4 om die te coderen.</translation>
+Klik op een fragment in de tekst of op de framekaart om het te bewerken, of selecteer tekst en druk op 1 tot en met 4 om die te coderen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/span_editor.cpp" line="182"/>

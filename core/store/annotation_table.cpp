@@ -53,21 +53,6 @@ void bindAnnotation(Statement &s, const Annotation &a)
         .bind(16, qint64(a.deleted ? 1 : 0));
 }
 
-template<typename T, typename Reader>
-Result<std::vector<T>> readAll(Statement &stmt, Reader read)
-{
-    std::vector<T> out;
-    while (true) {
-        auto row = stmt.step();
-        if (!row)
-            return std::unexpected(row.error());
-        if (!*row)
-            break;
-        out.push_back(read(stmt));
-    }
-    return out;
-}
-
 Status requireOneChange(const Database &db, const char *what, qint64 id)
 {
     if (db.changes() != 1)
@@ -186,7 +171,7 @@ Result<std::vector<Annotation>> annotations(
         stmt->bind(2, coder->value);
     else
         stmt->bindNull(2);
-    return readAll<Annotation>(*stmt, readAnnotation);
+    return collectRows(*stmt, readAnnotation);
 }
 
 Result<std::vector<Annotation>> allAnnotations(const Database &db)
@@ -196,7 +181,7 @@ Result<std::vector<Annotation>> allAnnotations(const Database &db)
                                .arg(kAnnotationColumns));
     if (!stmt)
         return std::unexpected(stmt.error());
-    return readAll<Annotation>(*stmt, readAnnotation);
+    return collectRows(*stmt, readAnnotation);
 }
 
 Result<LinkId> insertLink(Database &db, const AnnotationLink &l)
@@ -265,7 +250,7 @@ Result<std::vector<AnnotationLink>> links(const Database &db, ArticleId article)
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, article.value);
-    return readAll<AnnotationLink>(*stmt, readLink);
+    return collectRows(*stmt, readLink);
 }
 
 Result<std::optional<Judgement>> judgement(
@@ -295,7 +280,7 @@ Result<std::vector<Judgement>> judgements(const Database &db, ArticleId article)
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, article.value);
-    return readAll<Judgement>(*stmt, readJudgement);
+    return collectRows(*stmt, readJudgement);
 }
 
 Result<std::vector<Judgement>> allJudgements(const Database &db)
@@ -305,7 +290,7 @@ Result<std::vector<Judgement>> allJudgements(const Database &db)
                                .arg(kJudgementColumns));
     if (!stmt)
         return std::unexpected(stmt.error());
-    return readAll<Judgement>(*stmt, readJudgement);
+    return collectRows(*stmt, readJudgement);
 }
 
 Result<JudgementId> insertJudgement(Database &db, const Judgement &j)
