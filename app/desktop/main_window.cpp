@@ -8,6 +8,7 @@
 #include "app/desktop/coding_session.h"
 #include "app/desktop/frame_card.h"
 #include "app/desktop/function_style.h"
+#include "app/desktop/import_dialog.h"
 #include "app/desktop/item_form.h"
 #include "app/desktop/reading_view.h"
 #include "app/desktop/span_editor.h"
@@ -287,7 +288,10 @@ QWidget *MainWindow::buildDesk()
 void MainWindow::buildMenus()
 {
     QMenu *project = menuBar()->addMenu(tr("&Project"));
+    project->addAction(tr("&New project…"), QKeySequence::New, this, &MainWindow::createProject);
     project->addAction(tr("&Open…"), QKeySequence::Open, this, &MainWindow::chooseProject);
+    m_import = project->addAction(tr("&Import articles…"), this, &MainWindow::importArticles);
+    m_import->setEnabled(false);
     project->addAction(tr("Open the &sample project"), this, &MainWindow::openSample);
     project->addSeparator();
     project->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
@@ -363,7 +367,7 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
         if (!who)
             return fail(ErrorCode::NotFound, tr("The project has no coder \"%1\".").arg(pseudonym));
     } else {
-        CoderDialog dialog(project->settings().name, *coders, this);
+        CoderDialog dialog(project->settings().name, *coders, this, &*project);
         if (dialog.exec() != QDialog::Accepted || !dialog.chosen())
             return fail(ErrorCode::Cancelled, tr("Nobody was chosen to code."));
         who = dialog.chosen();
@@ -419,6 +423,7 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
     });
     connect(m_session.get(), &CodingSession::errorOccurred, this, &MainWindow::showError);
     m_showAll->setEnabled(m_session->isLead());
+    m_import->setEnabled(m_session->isLead());
     m_showAll->setChecked(false);
 
     QSettings settings;
@@ -567,6 +572,40 @@ void MainWindow::search(const QString &query)
     m_filter->setMatches(ids);
     statusBar()->showMessage(
         tr("%n article(s) contain \"%1\".", nullptr, int(ids.size())).arg(query), 6000);
+}
+
+void MainWindow::createProject()
+{
+    QString path = QFileDialog::getSaveFileName(
+        this, tr("New project"), QString(), tr("Fourfold projects (*.fourfold)"));
+    if (path.isEmpty())
+        return;
+    if (!path.endsWith(QLatin1String(".fourfold")))
+        path += QLatin1String(".fourfold");
+    {
+        // Created and closed at once; opening asks who codes, where a new project first gets
+        // its first person.
+        auto project = Project::create(path);
+        if (!project) {
+            QMessageBox::warning(this, tr("Cannot create project"), project.error().toString());
+            return;
+        }
+    }
+    if (auto st = openProject(path); !st && st.error().code != ErrorCode::Cancelled)
+        QMessageBox::warning(this, tr("Cannot open project"), st.error().toString());
+}
+
+void MainWindow::importArticles()
+{
+    if (!m_session)
+        return;
+    const QStringList files = QFileDialog::getOpenFileNames(this, tr("Import articles"), QString(),
+        tr("Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv)"));
+    if (files.isEmpty())
+        return;
+    const ImportOutcome outcome = importWithProgress(m_session->project(), files, this);
+    refreshList();
+    showImportReport(outcome, this);
 }
 
 void MainWindow::chooseProject()

@@ -68,6 +68,8 @@ private:
     void nextArticle();
     void search(const QString &query);
     void chooseProject();
+    void createProject();
+    void importArticles();
     void openSample();
     void setLanguage(const QString &code);
     void showError(const QString &message);
@@ -92,6 +94,7 @@ private:
     CodebookPanel *m_codebook = nullptr;
     QLabel *m_who = nullptr;
     QAction *m_showAll = nullptr;
+    QAction *m_import = nullptr;
     QAction *m_undo = nullptr;
     QAction *m_redo = nullptr;
     ActivityClock *m_clock = nullptr;

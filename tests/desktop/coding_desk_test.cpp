@@ -1,6 +1,7 @@
 // The coding desk driven through its real widgets, offscreen, on a copy of the sample project.
 #include "app/desktop/coding_session.h"
 #include "app/desktop/frame_card.h"
+#include "app/desktop/import_dialog.h"
 #include "app/desktop/main_window.h"
 #include "app/desktop/reading_view.h"
 #include "core/project/project.h"
@@ -248,4 +249,32 @@ TEST_CASE("full-text search narrows the list and marks the hits in the text")
     }
     w.searchField()->clear();
     CHECK(w.articleList()->model()->rowCount() == all);
+}
+
+TEST_CASE("importing from the window reports added, skipped and refused articles with their lines")
+{
+    QTemporaryDir dir;
+    const QString path = dir.filePath(QStringLiteral("new.fourfold"));
+    {
+        auto p = Project::create(path);
+        REQUIRE(p);
+        REQUIRE(p->addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead));
+    }
+    MainWindow w;
+    REQUIRE(w.openProject(path, QStringLiteral("L01")));
+    const QString good = writeFile(dir, QStringLiteral("good.jsonl"),
+        "{\"id\":\"a\",\"title\":\"A\",\"text\":\"First "
+        "text.\"}\n{\"id\":\"b\",\"title\":\"B\",\"text\":\"First text.\"}\n");
+    const QString bad = writeFile(dir, QStringLiteral("bad.jsonl"),
+        "{\"id\":\"c\",\"title\":\"C\",\"text\":\"Fine.\"}\n{\"id\":\"d\",\"title\":3,\"text\":"
+        "\"x\"}\n");
+    const ImportOutcome outcome = importWithProgress(w.session()->project(), {good, bad}, &w);
+    CHECK(outcome.added == 1);
+    CHECK_FALSE(outcome.cancelled);
+    const QString report = outcome.lines.join(QLatin1Char('\n'));
+    CHECK(report.contains(QStringLiteral("good.jsonl: 1 article(s) added")));
+    CHECK(report.contains(QStringLiteral("line 2 (b): skipped")));
+    CHECK(report.contains(QStringLiteral("bad.jsonl: not imported")));
+    CHECK(report.contains(QStringLiteral("bad.jsonl:2")));
+    CHECK(w.session()->project().articles()->size() == 1);
 }

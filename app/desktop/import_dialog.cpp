@@ -1,0 +1,85 @@
+#include "app/desktop/import_dialog.h"
+
+#include <QApplication>
+#include <QDialog>
+#include <QDialogButtonBox>
+#include <QFileInfo>
+#include <QLabel>
+#include <QListWidget>
+#include <QProgressDialog>
+#include <QVBoxLayout>
+
+namespace fourfold {
+
+ImportOutcome importWithProgress(Project &project, const QStringList &files, QWidget *parent)
+{
+    ImportOutcome outcome;
+    QProgressDialog progress(QApplication::translate("ImportDialog", "Importing articles…"),
+        QApplication::translate("ImportDialog", "Cancel"), 0, 100, parent);
+    progress.setWindowModality(Qt::WindowModal);
+    progress.setMinimumDuration(300);
+    for (qsizetype i = 0; i < files.size(); ++i) {
+        const QString name = QFileInfo(files[i]).fileName();
+        progress.setLabelText(QApplication::translate("ImportDialog", "Importing %1 (%2 of %3)…")
+                                  .arg(name)
+                                  .arg(i + 1)
+                                  .arg(files.size()));
+        auto records = readArticles(files[i], ImportOptions {});
+        if (!records) {
+            outcome.lines << QApplication::translate("ImportDialog", "%1: not imported — %2")
+                                 .arg(name, records.error().message);
+            continue;
+        }
+        progress.setMaximum(int(records->size()));
+        auto report = project.importArticles(*records, files[i], [&](qsizetype done, qsizetype) {
+            progress.setValue(int(done));
+            QApplication::processEvents();
+            return !progress.wasCanceled();
+        });
+        if (!report) {
+            if (report.error().code == ErrorCode::Cancelled) {
+                outcome.cancelled = true;
+                outcome.lines << QApplication::translate(
+                    "ImportDialog", "%1: cancelled; nothing from this file was added.")
+                                     .arg(name);
+                break;
+            }
+            outcome.lines << QApplication::translate("ImportDialog", "%1: not imported — %2")
+                                 .arg(name, report.error().message);
+            continue;
+        }
+        outcome.added += qint64(report->added.size());
+        outcome.lines << QApplication::translate(
+            "ImportDialog", "%1: %n article(s) added", nullptr, int(report->added.size()))
+                             .arg(name);
+        for (const SkippedArticle &s : report->skipped)
+            outcome.lines << QApplication::translate(
+                "ImportDialog", "    line %1 (%2): skipped, %3")
+                                 .arg(s.line)
+                                 .arg(s.externalId, s.reason);
+    }
+    progress.setValue(progress.maximum());
+    return outcome;
+}
+
+void showImportReport(const ImportOutcome &outcome, QWidget *parent)
+{
+    auto *dialog = new QDialog(parent);
+    dialog->setAttribute(Qt::WA_DeleteOnClose);
+    dialog->setWindowTitle(QApplication::translate("ImportDialog", "Import report"));
+    auto *layout = new QVBoxLayout(dialog);
+    layout->addWidget(new QLabel(QApplication::translate("ImportDialog", "%n article(s) added.",
+                                     nullptr, int(outcome.added)),
+        dialog));
+    auto *list = new QListWidget(dialog);
+    list->setAccessibleName(QApplication::translate("ImportDialog", "Import report"));
+    list->addItems(outcome.lines);
+    layout->addWidget(list);
+    auto *buttons = new QDialogButtonBox(QDialogButtonBox::Close, dialog);
+    QObject::connect(buttons, &QDialogButtonBox::rejected, dialog, &QDialog::close);
+    layout->addWidget(buttons);
+    dialog->resize(640, 360);
+    dialog->show();
+}
+
+} // namespace fourfold
