@@ -25,49 +25,105 @@
     </message>
 </context>
 <context>
+    <name>ImportDialog</name>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="17"/>
+        <source>Importing articles…</source>
+        <translation>Artikel werden importiert…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="18"/>
+        <source>Cancel</source>
+        <translation>Abbrechen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="23"/>
+        <source>Importing %1 (%2 of %3)…</source>
+        <translation>%1 wird importiert (%2 von %3)…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="29"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="47"/>
+        <source>%1: not imported — %2</source>
+        <translation>%1: nicht importiert — %2</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="42"/>
+        <source>%1: cancelled; nothing from this file was added.</source>
+        <translation>%1: abgebrochen; aus dieser Datei wurde nichts hinzugefügt.</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/import_dialog.cpp" line="52"/>
+        <source>%1: %n article(s) added</source>
+        <translation>
+            <numerusform>%1: %n Artikel hinzugefügt</numerusform>
+            <numerusform>%1: %n Artikel hinzugefügt</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="56"/>
+        <source>    line %1 (%2): skipped, %3</source>
+        <translation>    Zeile %1 (%2): übersprungen, %3</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="69"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="75"/>
+        <source>Import report</source>
+        <translation>Importbericht</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/import_dialog.cpp" line="71"/>
+        <source>%n article(s) added.</source>
+        <translation>
+            <numerusform>%n Artikel hinzugefügt.</numerusform>
+            <numerusform>%n Artikel hinzugefügt.</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>fourfold::ArticleListModel</name>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="53"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="52"/>
         <source>done</source>
         <translation>erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="55"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="54"/>
         <source>in progress</source>
         <translation>in Arbeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="56"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="55"/>
         <source>not started</source>
         <translation>nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="95"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="97"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="97"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="99"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="99"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="101"/>
         <source>Lang.</source>
         <translation>Spr.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="103"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="105"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="105"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="107"/>
         <source>Time</source>
         <translation>Zeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="101"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="103"/>
         <source>Characters</source>
         <translation>Zeichen</translation>
     </message>
@@ -153,34 +209,68 @@
 <context>
     <name>fourfold::CoderDialog</name>
     <message>
-        <location filename="../app/desktop/coder_dialog.cpp" line="15"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="22"/>
         <source>Who is coding?</source>
         <translation>Wer codiert?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coder_dialog.cpp" line="17"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="25"/>
         <source>&lt;b&gt;%1&lt;/b&gt;&lt;br&gt;Choose who you are. A coder sees only their own spans and the articles assigned to them; a lead sees every article.</source>
         <translation>&lt;b&gt;%1&lt;/b&gt;&lt;br&gt;Wählen Sie aus, wer Sie sind. Codierende sehen nur ihre eigenen Textstellen und die ihnen zugewiesenen Artikel; die Leitung sieht alle Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coder_dialog.cpp" line="24"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="32"/>
         <source>Coders</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coder_dialog.cpp" line="26"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="36"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="65"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="90"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coder_dialog.cpp" line="26"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="36"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="64"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="90"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coder_dialog.cpp" line="31"/>
+        <location filename="../app/desktop/coder_dialog.cpp" line="41"/>
         <source>Start coding</source>
         <translation>Codierung starten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_dialog.cpp" line="44"/>
+        <source>Add a person…</source>
+        <translation>Person hinzufügen…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_dialog.cpp" line="58"/>
+        <source>Add a person</source>
+        <translation>Person hinzufügen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_dialog.cpp" line="62"/>
+        <source>e.g. C04 — the only name written to exports</source>
+        <translation>z.&#xa0;B. C04 — der einzige Name, der in Exporte geschrieben wird</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_dialog.cpp" line="66"/>
+        <source>Name:</source>
+        <translation>Name:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_dialog.cpp" line="67"/>
+        <source>Pseudonym:</source>
+        <translation>Pseudonym:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_dialog.cpp" line="68"/>
+        <source>Role:</source>
+        <translation>Rolle:</translation>
     </message>
 </context>
 <context>
@@ -238,225 +328,235 @@
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="547"/>
+        <location filename="../app/desktop/main_window.cpp" line="645"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="159"/>
+        <location filename="../app/desktop/main_window.cpp" line="168"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="85"/>
+        <location filename="../app/desktop/main_window.cpp" line="89"/>
         <source>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manual frame analysis of news and opinion articles: problem, cause, evaluation, remedy.&lt;/p&gt;</source>
         <translation>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manuelle Frame-Analyse von Nachrichten- und Meinungsartikeln: Problem, Ursache, Bewertung, Lösung.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="92"/>
+        <location filename="../app/desktop/main_window.cpp" line="96"/>
         <source>Open a project…</source>
         <translation>Projekt öffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="95"/>
+        <location filename="../app/desktop/main_window.cpp" line="99"/>
         <source>Open the sample project</source>
         <translation>Beispielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="97"/>
+        <location filename="../app/desktop/main_window.cpp" line="101"/>
         <source>Invented demo data: three local controversies, three coders.</source>
         <translation>Erfundene Demodaten: drei lokale Streitfragen, drei Codierende.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="103"/>
-        <location filename="../app/desktop/main_window.cpp" line="116"/>
+        <location filename="../app/desktop/main_window.cpp" line="107"/>
+        <location filename="../app/desktop/main_window.cpp" line="120"/>
         <source>Recent projects</source>
         <translation>Zuletzt geöffnete Projekte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="131"/>
+        <location filename="../app/desktop/main_window.cpp" line="139"/>
         <source>Search the texts…</source>
         <translation>Texte durchsuchen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="133"/>
+        <location filename="../app/desktop/main_window.cpp" line="141"/>
         <source>Search articles</source>
         <translation>Artikel durchsuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="140"/>
+        <location filename="../app/desktop/main_window.cpp" line="148"/>
         <source>Status filter</source>
         <translation>Statusfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="141"/>
+        <location filename="../app/desktop/main_window.cpp" line="149"/>
         <source>All articles</source>
         <translation>Alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="142"/>
+        <location filename="../app/desktop/main_window.cpp" line="150"/>
         <source>Not started</source>
         <translation>Nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="143"/>
+        <location filename="../app/desktop/main_window.cpp" line="151"/>
         <source>In progress</source>
         <translation>In Arbeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="144"/>
+        <location filename="../app/desktop/main_window.cpp" line="152"/>
         <source>Done</source>
         <translation>Erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="181"/>
+        <location filename="../app/desktop/main_window.cpp" line="210"/>
         <source>Mark the selected text as %1 (key %2)</source>
         <translation>Ausgewählten Text als %1 markieren (Taste %2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="188"/>
+        <location filename="../app/desktop/main_window.cpp" line="221"/>
         <source>Mark as done</source>
         <translation>Als erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="189"/>
+        <location filename="../app/desktop/main_window.cpp" line="222"/>
         <source>Mark this article as done and open the next one (Ctrl+Return)</source>
         <translation>Diesen Artikel als erledigt markieren und den nächsten öffnen (Strg+Eingabe)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="254"/>
+        <location filename="../app/desktop/main_window.cpp" line="290"/>
         <source>&amp;Project</source>
         <translation>&amp;Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="255"/>
+        <location filename="../app/desktop/main_window.cpp" line="291"/>
+        <source>&amp;New project…</source>
+        <translation>&amp;Neues Projekt…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="292"/>
         <source>&amp;Open…</source>
         <translation>Ö&amp;ffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="256"/>
+        <location filename="../app/desktop/main_window.cpp" line="293"/>
+        <source>&amp;Import articles…</source>
+        <translation>Artikel &amp;importieren…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="295"/>
         <source>Open the &amp;sample project</source>
         <translation>Bei&amp;spielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="258"/>
+        <location filename="../app/desktop/main_window.cpp" line="297"/>
         <source>&amp;Quit</source>
         <translation>&amp;Beenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="260"/>
+        <location filename="../app/desktop/main_window.cpp" line="299"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="261"/>
-        <location filename="../app/desktop/main_window.cpp" line="366"/>
+        <location filename="../app/desktop/main_window.cpp" line="300"/>
+        <location filename="../app/desktop/main_window.cpp" line="414"/>
         <source>&amp;Undo</source>
         <translation>&amp;Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="264"/>
-        <location filename="../app/desktop/main_window.cpp" line="367"/>
+        <location filename="../app/desktop/main_window.cpp" line="303"/>
+        <location filename="../app/desktop/main_window.cpp" line="417"/>
         <source>&amp;Redo</source>
         <translation>&amp;Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="268"/>
+        <location filename="../app/desktop/main_window.cpp" line="307"/>
         <source>&amp;Code</source>
         <translation>&amp;Codieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="271"/>
+        <location filename="../app/desktop/main_window.cpp" line="311"/>
         <source>Mark as %1	%2</source>
         <translation>Als %1 markieren	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="275"/>
+        <location filename="../app/desktop/main_window.cpp" line="315"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel als &amp;erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="276"/>
+        <location filename="../app/desktop/main_window.cpp" line="317"/>
         <source>&amp;Next article</source>
         <translation>&amp;Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="277"/>
+        <location filename="../app/desktop/main_window.cpp" line="320"/>
         <source>&amp;Find in texts</source>
         <translation>In Texten &amp;suchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="279"/>
+        <location filename="../app/desktop/main_window.cpp" line="322"/>
         <source>&amp;View</source>
         <translation>&amp;Ansicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="280"/>
+        <location filename="../app/desktop/main_window.cpp" line="323"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Textstellen &amp;aller Codierenden zeigen (nur Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="289"/>
+        <location filename="../app/desktop/main_window.cpp" line="332"/>
         <source>&amp;Settings</source>
         <translation>&amp;Einstellungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="290"/>
+        <location filename="../app/desktop/main_window.cpp" line="333"/>
         <source>&amp;Language</source>
         <translation>&amp;Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="294"/>
+        <location filename="../app/desktop/main_window.cpp" line="338"/>
         <source>System language</source>
         <translation>Systemsprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="303"/>
+        <location filename="../app/desktop/main_window.cpp" line="349"/>
         <source>&amp;Help</source>
         <translation>&amp;Hilfe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="304"/>
+        <location filename="../app/desktop/main_window.cpp" line="351"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="321"/>
+        <location filename="../app/desktop/main_window.cpp" line="368"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Im Projekt gibt es keine Codierenden mit dem Pseudonym „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="325"/>
+        <location filename="../app/desktop/main_window.cpp" line="372"/>
         <source>Nobody was chosen to code.</source>
         <translation>Es wurde niemand zum Codieren ausgewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="349"/>
+        <location filename="../app/desktop/main_window.cpp" line="396"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="350"/>
+        <location filename="../app/desktop/main_window.cpp" line="397"/>
         <source>Codebook</source>
         <translation>Codebuch</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="366"/>
+        <location filename="../app/desktop/main_window.cpp" line="414"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Rückgängig: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="367"/>
+        <location filename="../app/desktop/main_window.cpp" line="417"/>
         <source>&amp;Redo %1</source>
         <translation>&amp;Wiederholen: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="491"/>
+        <location filename="../app/desktop/main_window.cpp" line="552"/>
         <source>Every article in the list is done.</source>
         <translation>Alle Artikel in der Liste sind erledigt.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="511"/>
+        <location filename="../app/desktop/main_window.cpp" line="574"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n Artikel enthält „%1“.</numerusform>
@@ -464,104 +564,126 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="535"/>
+        <location filename="../app/desktop/main_window.cpp" line="580"/>
+        <source>New project</source>
+        <translation>Neues Projekt</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="590"/>
+        <source>Cannot create project</source>
+        <translation>Projekt kann nicht erstellt werden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="602"/>
+        <source>Import articles</source>
+        <translation>Artikel importieren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="603"/>
+        <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv)</source>
+        <translation>Artikel (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="633"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>Die Sprache wechselt beim nächsten Start von Fourfold.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="548"/>
+        <location filename="../app/desktop/main_window.cpp" line="646"/>
         <source>No project open</source>
         <translation>Kein Projekt geöffnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="552"/>
+        <location filename="../app/desktop/main_window.cpp" line="650"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="552"/>
+        <location filename="../app/desktop/main_window.cpp" line="650"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="553"/>
+        <location filename="../app/desktop/main_window.cpp" line="651"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — Codieren als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="554"/>
+        <location filename="../app/desktop/main_window.cpp" line="654"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Codieren als %1 · %2 · Leitung: alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="555"/>
+        <location filename="../app/desktop/main_window.cpp" line="655"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Codieren als %1 · %2 · blind: nur eigene Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="565"/>
+        <location filename="../app/desktop/main_window.cpp" line="667"/>
         <source>Mark the selected text as %1 (snapped to whole words; hold Alt for the exact selection); with a span selected: relabel it</source>
         <translation>Ausgewählten Text als %1 markieren (auf ganze Wörter erweitert; Alt gedrückt halten für die genaue Auswahl); bei ausgewählter Textstelle: deren Funktion ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="568"/>
+        <location filename="../app/desktop/main_window.cpp" line="671"/>
         <source>Delete</source>
         <translation>Entf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="568"/>
+        <location filename="../app/desktop/main_window.cpp" line="671"/>
         <source>Delete the selected span</source>
         <translation>Ausgewählte Textstelle löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="569"/>
+        <location filename="../app/desktop/main_window.cpp" line="673"/>
         <source>Undo the last change</source>
         <translation>Letzte Änderung rückgängig machen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="570"/>
+        <location filename="../app/desktop/main_window.cpp" line="674"/>
         <source>Redo</source>
         <translation>Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="571"/>
+        <location filename="../app/desktop/main_window.cpp" line="675"/>
         <source>Mark the article as done and open the next</source>
         <translation>Artikel als erledigt markieren und den nächsten öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="572"/>
+        <location filename="../app/desktop/main_window.cpp" line="676"/>
         <source>Next article that is not done</source>
         <translation>Nächster noch nicht erledigter Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="573"/>
+        <location filename="../app/desktop/main_window.cpp" line="678"/>
         <source>Search the texts</source>
         <translation>Texte durchsuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="575"/>
+        <location filename="../app/desktop/main_window.cpp" line="680"/>
         <source>Keyboard shortcuts</source>
         <translation>Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="577"/>
+        <location filename="../app/desktop/main_window.cpp" line="683"/>
         <source>Span resizing keys are listed in the reading desk&apos;s tooltip.</source>
         <translation>Die Tasten zum Ändern der Länge einer Textstelle stehen im Tooltip des Lesebereichs.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="516"/>
+        <location filename="../app/desktop/main_window.cpp" line="614"/>
         <source>Open project</source>
         <translation>Projekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="516"/>
+        <location filename="../app/desktop/main_window.cpp" line="580"/>
+        <location filename="../app/desktop/main_window.cpp" line="614"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-Projekte (*.fourfold)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="109"/>
-        <location filename="../app/desktop/main_window.cpp" line="520"/>
-        <location filename="../app/desktop/main_window.cpp" line="529"/>
+        <location filename="../app/desktop/main_window.cpp" line="114"/>
+        <location filename="../app/desktop/main_window.cpp" line="595"/>
+        <location filename="../app/desktop/main_window.cpp" line="618"/>
+        <location filename="../app/desktop/main_window.cpp" line="627"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
     </message>
@@ -569,47 +691,47 @@
 <context>
     <name>fourfold::ReadingView</name>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="83"/>
+        <location filename="../app/desktop/reading_view.cpp" line="84"/>
         <source>intro</source>
         <translation>Einleitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="85"/>
+        <location filename="../app/desktop/reading_view.cpp" line="86"/>
         <source>body</source>
         <translation>Hauptteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="87"/>
+        <location filename="../app/desktop/reading_view.cpp" line="88"/>
         <source>conclusion</source>
         <translation>Schluss</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="112"/>
+        <location filename="../app/desktop/reading_view.cpp" line="113"/>
         <source>Article text</source>
         <translation>Artikeltext</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="655"/>
+        <location filename="../app/desktop/reading_view.cpp" line="657"/>
         <source>Mark as %1</source>
         <translation>Als %1 markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="656"/>
+        <location filename="../app/desktop/reading_view.cpp" line="658"/>
         <source>Change to %1</source>
         <translation>In %1 ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="661"/>
+        <location filename="../app/desktop/reading_view.cpp" line="663"/>
         <source>Delete span</source>
         <translation>Textstelle löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="687"/>
+        <location filename="../app/desktop/reading_view.cpp" line="689"/>
         <source>%1: “%2”</source>
         <translation>%1: „%2“</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="884"/>
+        <location filename="../app/desktop/reading_view.cpp" line="918"/>
         <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Alt+Down and Alt+Up move between spans.</source>
         <translation>
             <numerusform>%n Textstelle. Wählen Sie Text aus und drücken Sie 1 bis 4, um eine Framing-Funktion zu markieren; Alt+Pfeil nach unten und Alt+Pfeil nach oben wechseln zwischen Textstellen.</numerusform>
@@ -617,7 +739,7 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="893"/>
+        <location filename="../app/desktop/reading_view.cpp" line="927"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Alt+Left/Right and Alt+Shift+Left/Right to resize.</source>
         <translation>Ausgewählte Textstelle: %1, „%2“. 1 bis 4 ändert die Funktion, Entf löscht, Alt+Links/Rechts und Alt+Umschalt+Links/Rechts ändern die Länge.</translation>
     </message>
@@ -666,7 +788,7 @@
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
         <translation>Keine Textstelle ausgewählt.
 
-Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bearbeiten, oder wählen Sie Text aus und drücken Sie 1 bis 4, um ihn zu codieren.</translation>
+Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bearbeiten, oder wählen Sie Text aus und drücken Sie 1&#xa0;bis&#xa0;4, um ihn zu codieren.</translation>
     </message>
     <message>
         <location filename="../app/desktop/span_editor.cpp" line="182"/>
