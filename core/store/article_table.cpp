@@ -112,16 +112,7 @@ Result<std::vector<ArticleSummary>> articleSummaries(const Database &db)
                                .arg(kSummaryColumns));
     if (!stmt)
         return std::unexpected(stmt.error());
-    std::vector<ArticleSummary> out;
-    while (true) {
-        auto row = stmt->step();
-        if (!row)
-            return std::unexpected(row.error());
-        if (!*row)
-            break;
-        out.push_back(readSummary(*stmt));
-    }
-    return out;
+    return collectRows(*stmt, readSummary);
 }
 
 Result<Article> article(const Database &db, ArticleId id)

@@ -36,22 +36,15 @@ Result<std::vector<Coder>> coders(const Database &db)
         "SELECT id, uuid, name, pseudonym, role FROM coder WHERE deleted = 0 ORDER BY pseudonym"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    std::vector<Coder> out;
-    while (true) {
-        auto row = stmt->step();
-        if (!row)
-            return std::unexpected(row.error());
-        if (!*row)
-            break;
+    return collectRows(*stmt, [](const Statement &row) {
         Coder c;
-        c.id = CoderId {stmt->columnInt(0)};
-        c.uuid = stmt->columnText(1);
-        c.name = stmt->columnText(2);
-        c.pseudonym = stmt->columnText(3);
-        c.role = coderRoleFromKey(stmt->columnText(4)).value_or(CoderRole::Coder);
-        out.push_back(c);
-    }
-    return out;
+        c.id = CoderId {row.columnInt(0)};
+        c.uuid = row.columnText(1);
+        c.name = row.columnText(2);
+        c.pseudonym = row.columnText(3);
+        c.role = coderRoleFromKey(row.columnText(4)).value_or(CoderRole::Coder);
+        return c;
+    });
 }
 
 } // namespace fourfold::store

@@ -55,29 +55,23 @@ Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase ph
 
 Result<std::vector<Assignment>> assignments(const Database &db)
 {
-    auto stmt = db.prepare(QStringLiteral(
-        "SELECT article_id, coder_id, phase, status, active_seconds FROM assignment WHERE deleted = 0 "
-        "ORDER BY article_id, coder_id, phase"));
+    auto stmt = db.prepare(QStringLiteral("SELECT article_id, coder_id, phase, status, "
+                                          "active_seconds FROM assignment WHERE deleted = 0 "
+                                          "ORDER BY article_id, coder_id, phase"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    std::vector<Assignment> out;
-    while (true) {
-        auto row = stmt->step();
-        if (!row)
-            return std::unexpected(row.error());
-        if (!*row)
-            break;
-        out.push_back(Assignment{ArticleId{stmt->columnInt(0)}, CoderId{stmt->columnInt(1)},
-                                 phaseFromKey(stmt->columnText(2)).value_or(Phase::Production), stmt->columnText(3),
-                                 stmt->columnInt(4)});
-    }
-    return out;
+    return collectRows(*stmt, [](const Statement &row) {
+        return Assignment {ArticleId {row.columnInt(0)}, CoderId {row.columnInt(1)},
+            phaseFromKey(row.columnText(2)).value_or(Phase::Production), row.columnText(3),
+            row.columnInt(4)};
+    });
 }
 
-Result<qint64> setAssignmentStatus(Database &db, ArticleId article, CoderId coder, Phase phase, const QString &status)
+Result<qint64> setAssignmentStatus(
+    Database &db, ArticleId article, CoderId coder, Phase phase, const QString &status)
 {
-    auto stmt = db.prepare(QStringLiteral(
-        "UPDATE assignment SET status = ?4 WHERE article_id = ?1 AND coder_id = ?2 AND phase = ?3 AND deleted = 0"));
+    auto stmt = db.prepare(QStringLiteral("UPDATE assignment SET status = ?4 WHERE article_id = ?1 "
+                                          "AND coder_id = ?2 AND phase = ?3 AND deleted = 0"));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, article.value).bind(2, coder.value).bind(3, phaseKey(phase)).bind(4, status);
@@ -85,11 +79,12 @@ Result<qint64> setAssignmentStatus(Database &db, ArticleId article, CoderId code
     return db.changes();
 }
 
-Status addAssignmentSeconds(Database &db, ArticleId article, CoderId coder, Phase phase, qint64 seconds)
+Status addAssignmentSeconds(
+    Database &db, ArticleId article, CoderId coder, Phase phase, qint64 seconds)
 {
-    auto stmt = db.prepare(QStringLiteral(
-        "UPDATE assignment SET active_seconds = active_seconds + ?4 WHERE article_id = ?1 AND coder_id = ?2 "
-        "AND phase = ?3 AND deleted = 0"));
+    auto stmt = db.prepare(QStringLiteral("UPDATE assignment SET active_seconds = active_seconds + "
+                                          "?4 WHERE article_id = ?1 AND coder_id = ?2 "
+                                          "AND phase = ?3 AND deleted = 0"));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, article.value).bind(2, coder.value).bind(3, phaseKey(phase)).bind(4, seconds);
@@ -98,7 +93,8 @@ Status addAssignmentSeconds(Database &db, ArticleId article, CoderId coder, Phas
 
 Status removeAssignment(Database &db, ArticleId article, CoderId coder, Phase phase)
 {
-    auto stmt = db.prepare(QStringLiteral("DELETE FROM assignment WHERE article_id = ?1 AND coder_id = ?2 AND phase = ?3"));
+    auto stmt = db.prepare(QStringLiteral(
+        "DELETE FROM assignment WHERE article_id = ?1 AND coder_id = ?2 AND phase = ?3"));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, article.value).bind(2, coder.value).bind(3, phaseKey(phase));
@@ -174,23 +170,16 @@ Result<std::vector<StoredSpan>> allStoredSpans(const Database &db)
         "UNION ALL SELECT 'extracted', id, article_id, start, end, NULL FROM extracted_span"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    std::vector<StoredSpan> out;
-    while (true) {
-        auto row = stmt->step();
-        if (!row)
-            return std::unexpected(row.error());
-        if (!*row)
-            break;
-        StoredSpan s;
-        s.layer = stmt->columnText(0);
-        s.rowId = stmt->columnInt(1);
-        s.article = ArticleId {stmt->columnInt(2)};
-        s.range = TextRange {stmt->columnInt(3), stmt->columnInt(4)};
-        if (!stmt->columnIsNull(5))
-            s.quote = stmt->columnText(5);
-        out.push_back(std::move(s));
-    }
-    return out;
+    return collectRows(*stmt, [](const Statement &row) {
+        StoredSpan span;
+        span.layer = row.columnText(0);
+        span.rowId = row.columnInt(1);
+        span.article = ArticleId {row.columnInt(2)};
+        span.range = TextRange {row.columnInt(3), row.columnInt(4)};
+        if (!row.columnIsNull(5))
+            span.quote = row.columnText(5);
+        return span;
+    });
 }
 
 Result<std::vector<StoredArticle>> allStoredArticles(const Database &db)
@@ -199,17 +188,10 @@ Result<std::vector<StoredArticle>> allStoredArticles(const Database &db)
         QStringLiteral("SELECT id, external_id, text, length, sha256 FROM article ORDER BY id"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    std::vector<StoredArticle> out;
-    while (true) {
-        auto row = stmt->step();
-        if (!row)
-            return std::unexpected(row.error());
-        if (!*row)
-            break;
-        out.push_back(StoredArticle {ArticleId {stmt->columnInt(0)}, stmt->columnText(1),
-            stmt->columnText(2), stmt->columnInt(3), stmt->columnText(4)});
-    }
-    return out;
+    return collectRows(*stmt, [](const Statement &row) {
+        return StoredArticle {ArticleId {row.columnInt(0)}, row.columnText(1), row.columnText(2),
+            row.columnInt(3), row.columnText(4)};
+    });
 }
 
 Result<QStringList> sqliteChecks(const Database &db)

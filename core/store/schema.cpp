@@ -236,7 +236,8 @@ constexpr const char *kMigration3 = R"sql(
 ALTER TABLE assignment ADD COLUMN active_seconds INTEGER NOT NULL DEFAULT 0 CHECK (active_seconds >= 0);
 )sql";
 
-constexpr std::array<const char *, kSchemaVersion> kMigrations {kMigration1, kMigration2, kMigration3};
+constexpr std::array<const char *, kSchemaVersion> kMigrations {
+    kMigration1, kMigration2, kMigration3};
 // A migration left out of the list would silently do nothing: every slot must hold one.
 static_assert(std::ranges::none_of(kMigrations, [](const char *m) { return m == nullptr; }),
     "kSchemaVersion is higher than the number of migrations in kMigrations");
