@@ -11,10 +11,10 @@
 namespace fourfold {
 
 struct FunctionStyle {
-    QColor colour;       // Okabe & Ito (2008) colour-blind-safe palette
-    QChar letter;        // badge: P, C, E, R
-    Qt::PenStyle line;   // the lane's line pattern
-    int lane = 0;        // 0..3, top to bottom under a line of text
+    QColor colour; // Okabe & Ito (2008) colour-blind-safe palette
+    QChar letter; // badge: P, C, E, R
+    Qt::PenStyle line; // the lane's line pattern
+    int lane = 0; // 0..3, top to bottom under a line of text
 };
 
 FunctionStyle functionStyle(FramingFunction f);
@@ -22,5 +22,7 @@ FunctionStyle functionStyle(FramingFunction f);
 QString functionName(FramingFunction f);
 // The key that applies the function: 1..4.
 int functionShortcutKey(FramingFunction f);
+// Black or white, whichever contrasts more with `background` (for the badge letter).
+QColor badgeTextColour(const QColor &background);
 
 } // namespace fourfold

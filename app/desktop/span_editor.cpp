@@ -39,18 +39,6 @@ constexpr double kNotSet = -0.1;
 constexpr int kSettleMs = 700;
 constexpr int kQuoteChars = 90;
 
-// WCAG 2.1 relative luminance (W3C, "Web Content Accessibility Guidelines 2.1", definition of
-// relative luminance): the badge letter is black or white, whichever contrasts more.
-QColor badgeTextColour(const QColor &background)
-{
-    auto linear = [](float v) {
-        return v <= 0.04045f ? double(v) / 12.92 : std::pow((double(v) + 0.055) / 1.055, 2.4);
-    };
-    const double l = 0.2126 * linear(background.redF()) + 0.7152 * linear(background.greenF())
-        + 0.0722 * linear(background.blueF());
-    return (l + 0.05) / 0.05 >= 1.05 / (l + 0.05) ? QColor(Qt::black) : QColor(Qt::white);
-}
-
 // The function's letter on its colour, drawn for 1×, 2× and 3× screens.
 QIcon badgeIcon(FramingFunction function)
 {

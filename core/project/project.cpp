@@ -272,38 +272,7 @@ Status Project::batch(const std::function<Status()> &work)
 
 Result<ProjectCounts> Project::counts() const
 {
-    auto tally = store::projectTally(m_db);
-    if (!tally)
-        return std::unexpected(tally.error());
-    auto allCoders = store::coders(m_db);
-    if (!allCoders)
-        return std::unexpected(allCoders.error());
-    auto book = store::currentCodebook(m_db);
-    if (!book)
-        return std::unexpected(book.error());
-    ProjectCounts c;
-    c.articles = tally->articles;
-    c.paragraphs = tally->paragraphs;
-    c.sentences = tally->sentences;
-    c.tokens = tally->tokens;
-    c.codePoints = tally->codePoints;
-    c.coders = tally->coders;
-    c.assignments = tally->assignments;
-    c.annotations = tally->annotations;
-    c.perFunction = tally->perFunction;
-    c.links = tally->links;
-    c.judgements = tally->judgements;
-    c.goldAnnotations = tally->goldAnnotations;
-    c.extractorRuns = tally->extractorRuns;
-    c.codebookVersion = book->number;
-    c.events = tally->events;
-    for (const store::CoderTally &t : tally->perCoder) {
-        auto coder = std::find_if(
-            allCoders->begin(), allCoders->end(), [&](const Coder &x) { return x.id == t.coder; });
-        if (coder != allCoders->end())
-            c.perCoder.push_back(CoderCounts {*coder, t.annotations, t.perFunction});
-    }
-    return c;
+    return store::projectCounts(m_db);
 }
 
 } // namespace fourfold

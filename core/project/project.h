@@ -8,9 +8,9 @@
 #include "core/model/codebook.h"
 #include "core/model/coder.h"
 #include "core/model/error.h"
+#include "core/model/project_counts.h"
 #include "core/project/import_report.h"
 #include "core/project/integrity_report.h"
-#include "core/project/project_counts.h"
 #include "core/store/database.h"
 
 #include <QString>

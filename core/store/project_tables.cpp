@@ -1,5 +1,6 @@
 #include "core/store/project_tables.h"
 
+#include "core/store/coder_table.h"
 #include "core/store/store_util.h"
 
 #include <QCoreApplication>
@@ -101,9 +102,9 @@ Status removeAssignment(Database &db, ArticleId article, CoderId coder, Phase ph
     return stmt->run();
 }
 
-Result<ProjectTally> projectTally(const Database &db)
+Result<ProjectCounts> projectCounts(const Database &db)
 {
-    ProjectTally t;
+    ProjectCounts t;
     struct Count {
         qint64 *target;
         const char *sql;
@@ -127,7 +128,7 @@ Result<ProjectTally> projectTally(const Database &db)
         {&t.judgements, "SELECT count(*) FROM judgement WHERE deleted = 0"},
         {&t.goldAnnotations, "SELECT count(*) FROM gold_annotation WHERE deleted = 0"},
         {&t.extractorRuns, "SELECT count(*) FROM extractor_run"},
-        {&t.codebookVersions, "SELECT count(*) FROM codebook_version"},
+        {&t.codebookVersion, "SELECT coalesce(max(number), 0) FROM codebook_version"},
         {&t.events, "SELECT count(*) FROM event_log"},
     };
     for (const Count &c : counts) {
@@ -137,27 +138,30 @@ Result<ProjectTally> projectTally(const Database &db)
         *c.target = *v;
     }
 
-    auto stmt = db.prepare(
-        QStringLiteral("SELECT c.id, a.function, count(a.id) FROM coder c "
-                       "LEFT JOIN annotation a ON a.coder_id = c.id AND a.deleted = 0 "
-                       "WHERE c.deleted = 0 GROUP BY c.id, a.function ORDER BY c.pseudonym"));
+    auto allCoders = coders(db);
+    if (!allCoders)
+        return std::unexpected(allCoders.error());
+    for (const Coder &c : *allCoders)
+        t.perCoder.push_back(CoderCounts {c, 0, {}});
+    auto stmt = db.prepare(QStringLiteral("SELECT coder_id, function, count(*) FROM annotation "
+                                          "WHERE deleted = 0 GROUP BY coder_id, function"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    while (true) {
-        auto row = stmt->step();
-        if (!row)
-            return std::unexpected(row.error());
-        if (!*row)
-            break;
-        const CoderId coder {stmt->columnInt(0)};
-        if (t.perCoder.empty() || t.perCoder.back().coder != coder)
-            t.perCoder.push_back(CoderTally {coder, 0, {}});
-        if (auto f = functionFromKey(stmt->columnText(1))) {
-            const qint64 n = stmt->columnInt(2);
-            t.perCoder.back().perFunction[size_t(*f)] += n;
-            t.perCoder.back().annotations += n;
-            t.perFunction[size_t(*f)] += n;
-        }
+    auto rows = collectRows(*stmt, [](const Statement &row) {
+        return std::tuple(
+            CoderId {row.columnInt(0)}, functionFromKey(row.columnText(1)), row.columnInt(2));
+    });
+    if (!rows)
+        return std::unexpected(rows.error());
+    for (const auto &[coder, function, n] : *rows) {
+        if (!function)
+            continue;
+        t.perFunction[size_t(*function)] += n;
+        for (CoderCounts &c : t.perCoder)
+            if (c.coder.id == coder) {
+                c.perFunction[size_t(*function)] += n;
+                c.annotations += n;
+            }
     }
     return t;
 }

@@ -5,6 +5,7 @@
 #include "core/model/annotation.h"
 #include "core/model/error.h"
 #include "core/model/framing_function.h"
+#include "core/model/project_counts.h"
 
 #include <QString>
 
@@ -26,38 +27,17 @@ Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase ph
 Result<std::vector<Assignment>> assignments(const Database &db);
 // Sets the status of every live assignment of `coder` on `article`; returns how many rows
 // changed.
-Result<qint64> setAssignmentStatus(Database &db, ArticleId article, CoderId coder, Phase phase,
-                                   const QString &status);
+Result<qint64> setAssignmentStatus(
+    Database &db, ArticleId article, CoderId coder, Phase phase, const QString &status);
 // Adds active coding time to the coder's assignment of the article in `phase`.
-Status addAssignmentSeconds(Database &db, ArticleId article, CoderId coder, Phase phase, qint64 seconds);
+Status addAssignmentSeconds(
+    Database &db, ArticleId article, CoderId coder, Phase phase, qint64 seconds);
 // Removes an assignment row for good (only to revert the edit that created it).
 Status removeAssignment(Database &db, ArticleId article, CoderId coder, Phase phase);
 
-struct CoderTally {
-    CoderId coder;
-    qint64 annotations = 0;
-    std::array<qint64, 4> perFunction {}; // indexed by FramingFunction
-};
-
-struct ProjectTally {
-    qint64 articles = 0;
-    qint64 paragraphs = 0;
-    qint64 sentences = 0;
-    qint64 tokens = 0;
-    qint64 codePoints = 0;
-    qint64 coders = 0;
-    qint64 assignments = 0;
-    qint64 annotations = 0; // live
-    std::array<qint64, 4> perFunction {};
-    std::vector<CoderTally> perCoder; // every live coder, also those with no annotations
-    qint64 links = 0;
-    qint64 judgements = 0;
-    qint64 goldAnnotations = 0;
-    qint64 extractorRuns = 0;
-    qint64 codebookVersions = 0;
-    qint64 events = 0;
-};
-Result<ProjectTally> projectTally(const Database &db);
+// The figures of `fourfold-cli info`: live rows only; every live coder appears in perCoder,
+// also those with no annotations.
+Result<ProjectCounts> projectCounts(const Database &db);
 
 // One stored span of any layer, for checking.
 struct StoredSpan {

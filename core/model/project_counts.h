@@ -29,7 +29,7 @@ struct ProjectCounts {
     qint64 judgements = 0;
     qint64 goldAnnotations = 0;
     qint64 extractorRuns = 0;
-    int codebookVersion = 0;
+    qint64 codebookVersion = 0; // the current version's number
     qint64 events = 0;
 };
 
