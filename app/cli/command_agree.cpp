@@ -180,6 +180,8 @@ int runAgree(const QStringList &arguments)
         tr("With --unit span: the attribute compared on passages matched across coders, e.g. "
            "polarity (with --function evaluation)."),
         QStringLiteral("KEY"));
+    const QCommandLineOption withGold(QStringLiteral("with-gold"),
+        tr("With a project: add the adjudicated gold standard as one more coder, \"gold\"."));
     const QCommandLineOption articles(QStringLiteral("articles"),
         tr("With a project: only these articles (ids)."), QStringLiteral("ID,..."));
     const QCommandLineOption item(QStringLiteral("item"),
@@ -192,7 +194,7 @@ int runAgree(const QStringList &arguments)
         QStringLiteral("S"), QStringLiteral("1"));
     const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
     parser.addOptions({data, level, order, distance, unit, function, coders, phase, articles, item,
-        attribute, bootstrap, seed, json});
+        attribute, withGold, bootstrap, seed, json});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
     if (int rc = parseCommandLine(parser, command,
@@ -276,6 +278,7 @@ int runAgree(const QStringList &arguments)
         }
         selection.item = parser.value(item);
         selection.attribute = parser.value(attribute);
+        selection.includeGold = parser.isSet(withGold);
         if (parser.isSet(articles))
             selection.articles = parser.value(articles).split(QLatin1Char(','), Qt::SkipEmptyParts);
         auto project = Project::open(parser.positionalArguments().first());

@@ -93,8 +93,33 @@ Result<Selection> gather(const Project &project, const UnitSelection &sel)
         return fail(ErrorCode::InvalidArgument,
             tr("Reliability needs at least two coders; the selection has %n.", nullptr,
                 int(s.coders.size())));
+    // The gold standard joins as one more coder; its id -1 cannot clash with a row id.
+    constexpr qint64 kGold = -1;
+    if (sel.includeGold) {
+        Coder gold;
+        gold.id = CoderId {kGold};
+        gold.name = gold.pseudonym = QStringLiteral("gold");
+        s.coders.push_back(gold);
+    }
     for (size_t i = 0; i < s.coders.size(); ++i)
         s.coderIndex.insert(s.coders[i].id.value, int(i));
+    if (sel.includeGold) {
+        auto golds = project.goldAnnotations();
+        if (!golds)
+            return std::unexpected(golds.error());
+        for (const GoldAnnotation &g : *golds) {
+            if (!articleIds.contains(g.article.value))
+                continue;
+            Annotation a;
+            a.id = AnnotationId {-g.id.value};
+            a.article = g.article;
+            a.coder = CoderId {kGold};
+            a.content = g.content;
+            a.quote = g.quote;
+            s.coded.insert({g.article.value, kGold});
+            s.annotations.push_back(a);
+        }
+    }
 
     for (const Assignment &a : *assignments)
         if (inPhase(sel.phase, a.phase) && articleIds.contains(a.article.value)

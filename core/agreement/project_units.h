@@ -37,6 +37,8 @@ struct UnitSelection {
     QString item = QStringLiteral("dominant_function");
     // The span attribute for UnitKind::Span (e.g. "polarity" of evaluation spans).
     QString attribute;
+    // Adds the gold standard as one more coder, "gold", on the articles that have gold spans.
+    bool includeGold = false;
 };
 
 // The units × coders table for article, paragraph, sentence or token units. A unit's value for

@@ -9,6 +9,7 @@
 #include <QString>
 
 #include <optional>
+#include <vector>
 
 namespace fourfold {
 
@@ -47,6 +48,21 @@ struct AnnotationLink {
     AnnotationId target;
     QString type; // e.g. "judges" (evaluation → cause), "addresses" (remedy → problem)
     QString createdAt;
+    bool deleted = false;
+};
+
+// An adjudicated span of the gold standard, with its provenance: the coders' annotations it was
+// taken from, who decided, when and why. Raw annotations are never changed by adjudication.
+struct GoldAnnotation {
+    GoldId id;
+    QString uuid;
+    ArticleId article;
+    AnnotationContent content;  // note and confidence are not used for gold
+    QString quote;
+    CoderId decidedBy;
+    QString decidedAt;
+    QString rationale;
+    std::vector<AnnotationId> sources;
     bool deleted = false;
 };
 

@@ -33,7 +33,19 @@ Result<QString> quoteAt(const Database &db, ArticleId article, const TextRange &
     return OffsetMap::slice(*text, range);
 }
 
-Status checkContent(const Database &db, ArticleId article, const AnnotationContent &content,
+Result<Annotation> liveAnnotation(const Database &db, AnnotationId id)
+{
+    auto row = store::annotation(db, id);
+    if (!row)
+        return std::unexpected(row.error());
+    if (row->deleted)
+        return fail(ErrorCode::NotFound, tr("Annotation #%1 has been deleted.").arg(id.value));
+    return row;
+}
+
+} // namespace
+
+Status validateSpanContent(const Database &db, ArticleId article, const AnnotationContent &content,
     QString *quote, CodebookVersionId *version)
 {
     auto q = quoteAt(db, article, content.range);
@@ -49,18 +61,6 @@ Status checkContent(const Database &db, ArticleId article, const AnnotationConte
     *version = book->versionId;
     return {};
 }
-
-Result<Annotation> liveAnnotation(const Database &db, AnnotationId id)
-{
-    auto row = store::annotation(db, id);
-    if (!row)
-        return std::unexpected(row.error());
-    if (row->deleted)
-        return fail(ErrorCode::NotFound, tr("Annotation #%1 has been deleted.").arg(id.value));
-    return row;
-}
-
-} // namespace
 
 AddAnnotationEdit::AddAnnotationEdit(
     ArticleId article, CoderId coder, AnnotationContent content, Phase phase)
@@ -84,7 +84,7 @@ Status AddAnnotationEdit::apply(Database &db)
 {
     Annotation row = m_row;
     FOURFOLD_TRY_STATUS(
-        checkContent(db, row.article, row.content, &row.quote, &row.codebookVersion));
+        validateSpanContent(db, row.article, row.content, &row.quote, &row.codebookVersion));
     auto id = store::insertAnnotation(db, row);
     if (!id) {
         Error e = id.error();
@@ -121,8 +121,8 @@ Status ChangeAnnotationEdit::apply(Database &db)
         return std::unexpected(before.error());
     Annotation after = *before;
     after.content = m_content;
-    FOURFOLD_TRY_STATUS(
-        checkContent(db, after.article, after.content, &after.quote, &after.codebookVersion));
+    FOURFOLD_TRY_STATUS(validateSpanContent(
+        db, after.article, after.content, &after.quote, &after.codebookVersion));
     after.modifiedAt = store::now();
     FOURFOLD_TRY_STATUS(store::updateAnnotation(db, after));
     m_before = *before;

@@ -9,6 +9,13 @@
 
 namespace fourfold {
 
+// Checks a span's content against its article and the current codebook: the range must be a
+// non-empty range inside the text (InvalidArgument), the attributes must fit the function's
+// schema (InvalidInput), a confidence must lie in [0, 1]. On success sets the quote at the
+// range and the current codebook version.
+Status validateSpanContent(const Database &db, ArticleId article, const AnnotationContent &content,
+    QString *quote, CodebookVersionId *version);
+
 // Adds a span. The quote is taken from the text; the codebook version is the current one.
 // apply() fails with InvalidArgument if the range is empty or outside the text, InvalidInput if
 // the attributes do not fit the codebook, NotFound for an unknown article or coder.

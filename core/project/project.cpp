@@ -6,6 +6,7 @@
 #include "core/store/codebook_table.h"
 #include "core/store/coder_table.h"
 #include "core/store/event_log.h"
+#include "core/store/gold_table.h"
 #include "core/store/project_tables.h"
 #include "core/store/savepoint.h"
 #include "core/store/schema.h"
@@ -209,6 +210,11 @@ Result<std::vector<AnnotationLink>> Project::links(ArticleId article) const
 Result<std::vector<Judgement>> Project::judgements(ArticleId article) const
 {
     return store::judgements(m_db, article);
+}
+
+Result<std::vector<GoldAnnotation>> Project::goldAnnotations(ArticleId article) const
+{
+    return store::goldAnnotations(m_db, article);
 }
 
 Result<std::vector<Annotation>> Project::allAnnotations() const

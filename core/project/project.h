@@ -83,6 +83,8 @@ public:
     Result<Annotation> annotation(AnnotationId id) const;
     Result<std::vector<AnnotationLink>> links(ArticleId article) const;
     Result<std::vector<Judgement>> judgements(ArticleId article) const;
+    // The live gold spans of an article (of every article when `article` is invalid).
+    Result<std::vector<GoldAnnotation>> goldAnnotations(ArticleId article = {}) const;
     // Every live annotation / judgement / assignment of the project (for reliability work).
     Result<std::vector<Annotation>> allAnnotations() const;
     Result<std::vector<Judgement>> allJudgements() const;

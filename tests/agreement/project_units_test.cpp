@@ -1,5 +1,6 @@
 #include "core/agreement/project_units.h"
 #include "core/project/annotation_edits.h"
+#include "core/project/gold_edits.h"
 #include "tests/project/project_fixture.h"
 
 using namespace fourfold;
@@ -164,7 +165,7 @@ TEST_CASE("span units compare an attribute on passages matched across coders")
 {
     UnitsFixture f;
     auto add = [&](CoderId c, TextRange r, const char *polarity) {
-        AnnotationContent content{FramingFunction::Evaluation, r, {}, {}, {}};
+        AnnotationContent content {FramingFunction::Evaluation, r, {}, {}, {}};
         if (polarity)
             content.attributes.insert(QStringLiteral("polarity"), QString::fromLatin1(polarity));
         AddAnnotationEdit edit(f.f1, c, content, Phase::Reliability);
@@ -184,13 +185,40 @@ TEST_CASE("span units compare an attribute on passages matched across coders")
     s.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
     auto t = unitTable(f.project, s);
     REQUIRE(t);
-    REQUIRE(t->units == QStringList{QStringLiteral("f1#a1"), QStringLiteral("f1#a2"), QStringLiteral("f1#a3")});
-    CHECK(t->cells[0] == QStringList{QStringLiteral("negative"), QStringLiteral("neutral")});
-    CHECK(t->cells[1] == QStringList{QStringLiteral("negative"), QString()});
-    CHECK(t->cells[2] == QStringList{QStringLiteral("positive"), QString()});
+    REQUIRE(t->units
+        == QStringList {QStringLiteral("f1#a1"), QStringLiteral("f1#a2"), QStringLiteral("f1#a3")});
+    CHECK(t->cells[0] == QStringList {QStringLiteral("negative"), QStringLiteral("neutral")});
+    CHECK(t->cells[1] == QStringList {QStringLiteral("negative"), QString()});
+    CHECK(t->cells[2] == QStringList {QStringLiteral("positive"), QString()});
 
     s.attribute.clear();
     auto refused = unitTable(f.project, s);
     REQUIRE_FALSE(refused);
     CHECK(refused.error().code == ErrorCode::InvalidArgument);
+}
+
+TEST_CASE("the gold standard can join as one more coder")
+{
+    UnitsFixture f;
+    auto lead =
+        f.project.addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead);
+    REQUIRE(lead);
+    AdjudicateSpanEdit gold(
+        f.f1, *lead, AnnotationContent {FramingFunction::Problem, {0, 40}, {}, {}, {}}, {}, {});
+    REQUIRE(f.project.apply(gold));
+    UnitSelection s;
+    s.unit = UnitKind::Sentence;
+    s.function = FramingFunction::Problem;
+    s.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+    s.includeGold = true;
+    auto t = unitTable(f.project, s);
+    REQUIRE(t);
+    CHECK(t->coders
+        == QStringList {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("gold")});
+    CHECK(t->cells[0]
+        == QStringList {
+            QStringLiteral("present"), QStringLiteral("present"), QStringLiteral("present")});
+    CHECK(t->cells[1]
+        == QStringList {
+            QStringLiteral("absent"), QStringLiteral("absent"), QStringLiteral("absent")});
 }
