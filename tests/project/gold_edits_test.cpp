@@ -42,7 +42,7 @@ TEST_CASE("a lead's gold span keeps its provenance and leaves the raw coding unt
     AdjudicateSpanEdit edit(f.f1, f.lead,
         AnnotationContent {FramingFunction::Cause, {55, 72},
             {{QStringLiteral("actor"), QStringLiteral("budget")}}, {}, {}},
-        {f.span}, QStringLiteral("Only the attribution, not the speaker."));
+        {f.span}, QStringLiteral("Only the attribution, not who says it."));
     REQUIRE(f.project.apply(edit));
     auto gold = f.project.goldAnnotations(f.f1);
     REQUIRE(gold);
@@ -51,7 +51,7 @@ TEST_CASE("a lead's gold span keeps its provenance and leaves the raw coding unt
     CHECK(g.quote == QStringLiteral("blames the budget"));
     CHECK(g.decidedBy == f.lead);
     CHECK(g.sources == std::vector<AnnotationId> {f.span});
-    CHECK(g.rationale == QStringLiteral("Only the attribution, not the speaker."));
+    CHECK(g.rationale == QStringLiteral("Only the attribution, not who says it."));
     // The coder's own annotation is exactly as it was.
     CHECK(dumpDatabase(f.project.databaseForTesting(),
               {QStringLiteral("event_log"), QStringLiteral("gold_annotation"),
