@@ -104,15 +104,13 @@ std::vector<Judgement> CodingSession::ownJudgements(ArticleId article) const
 
 Status CodingSession::push(std::unique_ptr<Edit> edit, ArticleId article)
 {
-    auto *command = new EditCommand(this, std::move(edit), article);
-    // push() runs redo(); a command whose redo failed marks itself obsolete and is deleted.
-    QString error;
-    auto connection = connect(
-        this, &CodingSession::errorOccurred, this, [&error](const QString &m) { error = m; });
-    m_undo.push(command);
-    disconnect(connection);
-    if (!error.isEmpty())
-        return fail(ErrorCode::InvalidInput, error);
+    // Applied first, so that a refused edit reports its own error and never reaches the stack.
+    if (auto st = m_project.apply(*edit); !st) {
+        emit errorOccurred(st.error().toString());
+        return st;
+    }
+    m_undo.push(new EditCommand(this, std::move(edit), article));
+    emit articleChanged(article);
     return {};
 }
 

@@ -3,6 +3,8 @@
 #include "app/desktop/coding_session.h"
 #include "core/project/edit.h"
 
+#include <utility>
+
 namespace fourfold {
 
 EditCommand::EditCommand(CodingSession *session, std::unique_ptr<Edit> edit, ArticleId article)
@@ -17,11 +19,9 @@ EditCommand::~EditCommand() = default;
 
 void EditCommand::redo()
 {
-    auto st = m_session->project().apply(*m_edit);
-    m_ok = bool(st);
-    if (!st) {
-        // A failed first redo is never kept on the stack (QUndoStack drops obsolete commands).
-        setObsolete(true);
+    if (!std::exchange(m_pushed, true))
+        return; // the first redo() is the push of an edit the session already applied
+    if (auto st = m_session->project().apply(*m_edit); !st) {
         emit m_session->errorOccurred(st.error().toString());
         return;
     }
@@ -31,7 +31,6 @@ void EditCommand::redo()
 void EditCommand::undo()
 {
     auto st = m_session->project().revert(*m_edit);
-    m_ok = bool(st);
     if (!st) {
         emit m_session->errorOccurred(st.error().toString());
         return;

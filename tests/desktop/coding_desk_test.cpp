@@ -278,3 +278,16 @@ TEST_CASE("importing from the window reports added, skipped and refused articles
     CHECK(report.contains(QStringLiteral("bad.jsonl:2")));
     CHECK(w.session()->project().articles()->size() == 1);
 }
+
+TEST_CASE("a refused change keeps its error and never reaches the undo stack")
+{
+    DeskFixture f;
+    MainWindow w;
+    REQUIRE(w.openProject(f.path, QStringLiteral("C01")));
+    const ArticleId article = articleId(w, "emoji-01");
+    auto st = w.session()->addSpan(article, FramingFunction::Problem, TextRange {0, 100000});
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::InvalidArgument);  // the range lies outside the text
+    CHECK(w.session()->undoStack()->count() == 0);
+    CHECK(w.session()->project().annotations(article)->empty());
+}
