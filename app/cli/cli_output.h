@@ -38,5 +38,12 @@ int runInfo(const QStringList &arguments);
 int runCheck(const QStringList &arguments);
 int runBuildSample(const QStringList &arguments);
 int runAgree(const QStringList &arguments);
+int runExtract(const QStringList &arguments);
+int runScore(const QStringList &arguments);
+int runExport(const QStringList &arguments);
+int runReport(const QStringList &arguments);
+int runAssign(const QStringList &arguments);
+int runHandout(const QStringList &arguments);
+int runMerge(const QStringList &arguments);
 
 } // namespace fourfold::cli

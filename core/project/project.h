@@ -111,6 +111,11 @@ public:
     Database &databaseForTesting() { return m_db; }
 
 private:
+    // Facades of core that sit beside Project and share its connection (design.md §2).
+    friend class ExtractorRuns;
+    friend class CoderCopies;
+    friend class StudyDesign;
+
     explicit Project(Database db)
         : m_db(std::move(db))
     { }

@@ -236,8 +236,51 @@ constexpr const char *kMigration3 = R"sql(
 ALTER TABLE assignment ADD COLUMN active_seconds INTEGER NOT NULL DEFAULT 0 CHECK (active_seconds >= 0);
 )sql";
 
+// Migration 4: coder copies, and adjudication decisions that put nothing into gold.
+constexpr const char *kMigration4 = R"sql(
+-- In a coder copy: each object as it was handed out (a digest of its content), so that a merge
+-- can tell the coder's changes from changes made meanwhile in the main project.
+CREATE TABLE copy_base (
+  object_type TEXT NOT NULL,
+  uuid        TEXT NOT NULL,
+  digest      TEXT NOT NULL,
+  PRIMARY KEY (object_type, uuid)
+) STRICT, WITHOUT ROWID;
+
+-- In the main project: every merged copy, and the conflicts left for the lead to decide.
+CREATE TABLE copy_merge (
+  id        INTEGER PRIMARY KEY,
+  copy_uuid TEXT NOT NULL,
+  coder_id  INTEGER NOT NULL REFERENCES coder(id),
+  merged_at TEXT NOT NULL,
+  detail    TEXT NOT NULL DEFAULT '{}'
+) STRICT;
+
+CREATE TABLE merge_conflict (
+  id          INTEGER PRIMARY KEY,
+  uuid        TEXT NOT NULL UNIQUE,
+  object_type TEXT NOT NULL,
+  object_uuid TEXT NOT NULL,
+  copy_uuid   TEXT NOT NULL,
+  theirs      TEXT NOT NULL,
+  detected_at TEXT NOT NULL,
+  resolution  TEXT NOT NULL DEFAULT ''
+) STRICT;
+
+-- A lead's decision that a coder's span does not belong in gold (a rejection), with its reason.
+CREATE TABLE gold_rejection (
+  id            INTEGER PRIMARY KEY,
+  uuid          TEXT NOT NULL UNIQUE,
+  annotation_id INTEGER NOT NULL REFERENCES annotation(id),
+  decided_by    INTEGER NOT NULL REFERENCES coder(id),
+  decided_at    TEXT NOT NULL,
+  rationale     TEXT NOT NULL DEFAULT '',
+  deleted       INTEGER NOT NULL DEFAULT 0 CHECK (deleted IN (0, 1))
+) STRICT;
+)sql";
+
 constexpr std::array<const char *, kSchemaVersion> kMigrations {
-    kMigration1, kMigration2, kMigration3};
+    kMigration1, kMigration2, kMigration3, kMigration4};
 // A migration left out of the list would silently do nothing: every slot must hold one.
 static_assert(std::ranges::none_of(kMigrations, [](const char *m) { return m == nullptr; }),
     "kSchemaVersion is higher than the number of migrations in kMigrations");

@@ -159,7 +159,7 @@ TEST_CASE("a version-2 file gains active coding time on its assignments, startin
     QString backup;
     REQUIRE(prepareSchema(db, &backup));
     CHECK(backup.endsWith(QStringLiteral(".v2.bak")));
-    CHECK(scalarOf(db, QStringLiteral("PRAGMA user_version")) == 3);
+    CHECK(scalarOf(db, QStringLiteral("PRAGMA user_version")) == kSchemaVersion);
     CHECK(scalarOf(db, QStringLiteral("SELECT active_seconds FROM assignment")) == 0);
     CHECK(scalarOf(db, QStringLiteral("SELECT count(*) FROM assignment WHERE phase = 'pilot'")) == 1);
 }
