@@ -1,5 +1,5 @@
 // build-sample: makes the demo project file from the plain source files in sample-project/
-// (study.json, articles.jsonl, codings.jsonl), so that no binary project is committed.
+// (study.json, articles.jsonl, codings.jsonl, gold.jsonl), so that no binary project is committed.
 
 #include "app/cli/cli_output.h"
 #include "core/project/coding_import.h"
@@ -88,12 +88,19 @@ Status build(const QString &sourceDir, const QString &target)
         *project, dir.filePath(QStringLiteral("codings.jsonl")), Phase::Reliability);
     if (!codings)
         return std::unexpected(codings.error());
-    out(tr("Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements.")
+    // The lead's adjudicated gold for some of the reliability articles (the rest are left for
+    // trying out the comparison).
+    auto gold = importQuotedCodings(
+        *project, dir.filePath(QStringLiteral("gold.jsonl")), Phase::Reliability);
+    if (!gold)
+        return std::unexpected(gold.error());
+    out(tr("Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans.")
             .arg(target)
             .arg(imported->added.size())
             .arg(study->value(QLatin1String("coders")).toArray().size())
             .arg(codings->spans)
-            .arg(codings->judgements));
+            .arg(codings->judgements)
+            .arg(gold->gold));
     return {};
 }
 
@@ -112,7 +119,7 @@ int runBuildSample(const QStringList &arguments)
     const QCommandLineOption force(QStringLiteral("force"), tr("Replace OUT if it exists."));
     parser.addOption(force);
     parser.addPositionalArgument(QStringLiteral("SOURCE"),
-        tr("The folder with study.json, articles.jsonl and codings.jsonl."));
+        tr("The folder with study.json, articles.jsonl, codings.jsonl and gold.jsonl."));
     parser.addPositionalArgument(
         QStringLiteral("OUT"), tr("The project file to write (*.fourfold)."));
     if (int rc = parseCommandLine(parser, command,

@@ -1,6 +1,7 @@
 #include "core/project/coding_import.h"
 
 #include "core/project/annotation_edits.h"
+#include "core/project/gold_edits.h"
 #include "core/project/project.h"
 #include "core/text/canonical_text.h"
 #include "core/text/offset_map.h"
@@ -147,6 +148,30 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             content.note = o.value(QLatin1String("note")).toString();
             if (o.value(QLatin1String("confidence")).isDouble())
                 content.confidence = o.value(QLatin1String("confidence")).toDouble();
+            const QJsonValue goldValue = o.value(QLatin1String("gold"));
+            if (!goldValue.isUndefined() && !goldValue.isBool())
+                return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                    tr("field \"gold\" must be true or false."));
+            if (goldValue.toBool()) {
+                // A lead's gold span: its provenance is every live span of the same function
+                // that overlaps it.
+                auto existing = project.annotations(article.id);
+                if (!existing)
+                    return std::unexpected(existing.error());
+                std::vector<AnnotationId> sources;
+                for (const Annotation &a : *existing)
+                    if (a.content.function == content.function
+                        && a.content.range.overlaps(content.range))
+                        sources.push_back(a.id);
+                content.note.clear();
+                content.confidence.reset();
+                AdjudicateSpanEdit edit(article.id, coder, content, std::move(sources),
+                    o.value(QLatin1String("rationale")).toString());
+                if (auto st = project.apply(edit); !st)
+                    return failAt(st.error().code, path, lineNo, 0, st.error().message);
+                ++report.gold;
+                continue;
+            }
             AddAnnotationEdit edit(article.id, coder, content, phase);
             if (auto st = project.apply(edit); !st)
                 return failAt(st.error().code, path, lineNo, 0, st.error().message);

@@ -6,6 +6,9 @@
 //   {"article": ID, "coder": PSEUDONYM, "function": "cause", "quote": "...", "occurrence": 1,
 //    "attributes": {...}, "note": "...", "confidence": 0.8}
 //   {"article": ID, "coder": PSEUDONYM, "item": "dominant_function", "value": "problem"}
+//   {"article": ID, "coder": LEAD, "gold": true, "function": "cause", "quote": "...",
+//    "rationale": "..."}   (a gold span; its sources are the overlapping spans of that function
+//                          already in the project, so gold lines come after the codings)
 
 #include "core/model/annotation.h"
 #include "core/model/error.h"
@@ -19,6 +22,7 @@ class Project;
 struct CodingImportReport {
     qint64 spans = 0;
     qint64 judgements = 0;
+    qint64 gold = 0;
 };
 
 // Reads `path` and adds every span and answer in `phase`, all-or-nothing. Fails with

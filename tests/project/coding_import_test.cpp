@@ -2,6 +2,8 @@
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
 
+#include <algorithm>
+
 using namespace fourfold;
 using namespace fourfold::test;
 
@@ -85,4 +87,42 @@ TEST_CASE("a bad codings file names the line and changes nothing")
         CHECK(r.error().message.contains(QStringLiteral("codings.jsonl:2")));
         CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
     }
+}
+
+TEST_CASE("a lead's gold line becomes a gold span with the overlapping spans as provenance")
+{
+    CodingFixture f;
+    f.addCoder(QStringLiteral("L01"), CoderRole::Lead);
+    auto r = f.run("{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":"
+                   "\"blames the budget\"}\n"
+                   "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
+                   "\"blames\"}\n"
+                   "{\"article\":\"f1\",\"coder\":\"L01\",\"gold\":true,\"function\":\"cause\","
+                   "\"quote\":\"the budget\",\"rationale\":\"the actor only\"}\n");
+    REQUIRE(r);
+    CHECK(r->spans == 2);
+    CHECK(r->gold == 1);
+    auto gold = f.project.goldAnnotations(f.articleId(QStringLiteral("f1")));
+    REQUIRE(gold);
+    REQUIRE(gold->size() == 1);
+    CHECK((*gold)[0].content.range == TextRange {62, 72});
+    CHECK((*gold)[0].rationale == QStringLiteral("the actor only"));
+    // Only the cause span overlaps with the same function; the problem span is not a source.
+    auto spans = f.project.annotations(f.articleId(QStringLiteral("f1")));
+    REQUIRE(spans);
+    const auto cause = std::ranges::find_if(*spans,
+        [](const Annotation &a) { return a.content.function == FramingFunction::Cause; });
+    REQUIRE(cause != spans->end());
+    REQUIRE((*gold)[0].sources.size() == 1);
+    CHECK((*gold)[0].sources[0] == cause->id);
+}
+
+TEST_CASE("a gold line from a coder who is not a lead is refused with its line")
+{
+    CodingFixture f;
+    auto r = f.run("{\"article\":\"f1\",\"coder\":\"C01\",\"gold\":true,\"function\":\"cause\","
+                   "\"quote\":\"the budget\"}\n");
+    REQUIRE_FALSE(r);
+    CHECK(r.error().line == 1);
+    CHECK(f.project.goldAnnotations()->empty());
 }

@@ -34,10 +34,10 @@ struct ProjectFixture {
         return **id;
     }
 
-    CoderId addCoder(const QString &pseudonym)
+    CoderId addCoder(const QString &pseudonym, CoderRole role = CoderRole::Coder)
     {
         auto id = project.addCoder(
-            QStringLiteral("Test person ") + pseudonym, pseudonym, CoderRole::Coder);
+            QStringLiteral("Test person ") + pseudonym, pseudonym, role);
         REQUIRE(id);
         return *id;
     }
