@@ -1,0 +1,213 @@
+#include "core/extract/extractor_runs.h"
+
+#include "core/extract/extractor.h"
+#include "core/extract/extractor_protocol.h"
+#include "core/project/project.h"
+#include "core/store/event_log.h"
+#include "core/store/extractor_run_table.h"
+#include "core/store/savepoint.h"
+#include "core/store/store_util.h"
+
+#include <QCoreApplication>
+#include <QCryptographicHash>
+#include <QFile>
+#include <QFileInfo>
+#include <QHash>
+#include <QSet>
+
+#include <algorithm>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("ExtractorRuns", text);
+}
+
+// InvalidArgument for an unusable name, Duplicate for a taken one.
+Status checkNewName(const Project &project, const QString &name)
+{
+    if (name.trimmed().isEmpty() || name != name.trimmed())
+        return fail(ErrorCode::InvalidArgument,
+            tr("A run needs a name without leading or trailing spaces."));
+    if (std::ranges::any_of(name, [](QChar c) { return c.category() == QChar::Other_Control; }))
+        return fail(ErrorCode::InvalidArgument, tr("A run name may not hold control characters."));
+    auto existing = ExtractorRuns::runByName(project, name);
+    if (!existing)
+        return std::unexpected(existing.error());
+    if (existing->has_value())
+        return fail(ErrorCode::Duplicate,
+            tr("There is already a run called \"%1\"; choose another name or delete it first.")
+                .arg(name));
+    return {};
+}
+
+} // namespace
+
+Result<std::vector<ExtractorRun>> ExtractorRuns::runs(const Project &project)
+{
+    return store::runs(project.m_db);
+}
+
+Result<std::optional<ExtractorRun>> ExtractorRuns::runByName(
+    const Project &project, const QString &name)
+{
+    return store::runByName(project.m_db, name);
+}
+
+Result<std::vector<ExtractedSpan>> ExtractorRuns::spans(
+    const Project &project, RunId run, ArticleId article)
+{
+    return store::extractedSpans(project.m_db, run, article);
+}
+
+Result<qint64> ExtractorRuns::spanCount(const Project &project, RunId run)
+{
+    return store::extractedSpanCount(project.m_db, run);
+}
+
+Result<ExtractorRun> ExtractorRuns::create(Project &project, Extractor &extractor,
+    const QString &name, const std::vector<ArticleId> &articles)
+{
+    FOURFOLD_TRY_STATUS(checkNewName(project, name));
+    std::vector<ArticleId> ids = articles;
+    if (ids.empty()) {
+        auto summaries = project.articles();
+        if (!summaries)
+            return std::unexpected(summaries.error());
+        for (const ArticleSummary &s : *summaries)
+            ids.push_back(s.id);
+    }
+    std::vector<Article> input;
+    input.reserve(ids.size());
+    for (ArticleId id : ids) {
+        auto article = project.article(id);
+        if (!article)
+            return std::unexpected(article.error());
+        input.push_back(std::move(*article));
+    }
+    auto found = extractor.extract(input);
+    if (!found)
+        return std::unexpected(found.error());
+
+    ExtractorRun run;
+    run.name = name;
+    run.version = extractor.version();
+    run.parameters = extractor.parameters();
+    run.parameters.insert(QStringLiteral("extractor"), extractor.kind());
+    return storeRun(project, std::move(run), *found);
+}
+
+Result<ExtractorRun> ExtractorRuns::importRun(Project &project, const QString &name,
+    const QString &path, const QString &version, const QJsonObject &parameters)
+{
+    FOURFOLD_TRY_STATUS(checkNewName(project, name));
+    QFile file(path);
+    if (!file.open(QIODevice::ReadOnly))
+        return fail(ErrorCode::Io, tr("%1 cannot be read.").arg(path), file.errorString());
+    const QByteArray bytes = file.readAll();
+    if (file.error() != QFileDevice::NoError)
+        return fail(ErrorCode::Io, tr("%1 cannot be read.").arg(path), file.errorString());
+
+    auto summaries = project.articles();
+    if (!summaries)
+        return std::unexpected(summaries.error());
+    QHash<QString, SpanTarget> targets;
+    for (const ArticleSummary &s : *summaries)
+        targets.insert(s.externalId, SpanTarget {s.id, s.length});
+    auto spans = readSpanFile(bytes, path, targets);
+    if (!spans)
+        return std::unexpected(spans.error());
+
+    ExtractorRun run;
+    run.name = name;
+    run.version = version;
+    run.parameters = parameters;
+    run.parameters.insert(QStringLiteral("extractor"), QStringLiteral("file"));
+    run.parameters.insert(QStringLiteral("file"), QFileInfo(path).fileName());
+    run.parameters.insert(QStringLiteral("sha256"),
+        QString::fromLatin1(QCryptographicHash::hash(bytes, QCryptographicHash::Sha256).toHex()));
+    return storeRun(project, std::move(run), *spans);
+}
+
+Result<ExtractorRun> ExtractorRuns::storeRun(
+    Project &project, ExtractorRun run, const std::vector<ExtractedSpan> &spans)
+{
+    FOURFOLD_TRY_STATUS(checkNewName(project, run.name));
+    auto summaries = project.articles();
+    if (!summaries)
+        return std::unexpected(summaries.error());
+    QHash<ArticleId, const ArticleSummary *> byId;
+    for (const ArticleSummary &s : *summaries)
+        byId.insert(s.id, &s);
+    QSet<ArticleId> articlesWithSpans;
+    for (const ExtractedSpan &span : spans) {
+        const ArticleSummary *article = byId.value(span.article, nullptr);
+        if (!article)
+            return fail(ErrorCode::NotFound,
+                tr("A span of run \"%1\" names article #%2, which is not in the project.")
+                    .arg(run.name)
+                    .arg(span.article.value));
+        if (span.range.start < 0 || span.range.end <= span.range.start
+            || span.range.end > article->length)
+            return fail(ErrorCode::InvalidInput,
+                tr("A span of run \"%1\", [%2, %3), does not lie inside article %4 (%5 code "
+                   "points) or is empty.")
+                    .arg(run.name)
+                    .arg(span.range.start)
+                    .arg(span.range.end)
+                    .arg(article->externalId)
+                    .arg(article->length));
+        articlesWithSpans.insert(span.article);
+    }
+
+    std::vector<ExtractedSpan> sorted = spans;
+    std::ranges::stable_sort(sorted, [](const ExtractedSpan &a, const ExtractedSpan &b) {
+        return std::tie(a.article, a.range) < std::tie(b.article, b.range);
+    });
+    run.uuid = store::newUuid();
+    run.createdAt = store::now();
+
+    Database &db = project.m_db;
+    auto sp = Savepoint::begin(db);
+    if (!sp)
+        return std::unexpected(sp.error());
+    auto id = store::insertRun(db, run);
+    if (!id)
+        return std::unexpected(id.error());
+    run.id = *id;
+    FOURFOLD_TRY_STATUS(store::insertExtractedSpans(db, run.id, sorted));
+    FOURFOLD_TRY_STATUS(store::appendEvent(db, CoderId {}, QStringLiteral("extractor_run.add"),
+        QStringLiteral("extractor_run"), run.uuid,
+        QJsonObject {{QStringLiteral("name"), run.name}, {QStringLiteral("version"), run.version},
+            {QStringLiteral("parameters"), run.parameters},
+            {QStringLiteral("spans"), qint64(sorted.size())},
+            {QStringLiteral("articlesWithSpans"), qint64(articlesWithSpans.size())}}));
+    FOURFOLD_TRY_STATUS(sp->commit());
+    return run;
+}
+
+Status ExtractorRuns::deleteRun(Project &project, const QString &name)
+{
+    auto run = runByName(project, name);
+    if (!run)
+        return std::unexpected(run.error());
+    if (!run->has_value())
+        return fail(ErrorCode::NotFound, tr("There is no run called \"%1\".").arg(name));
+    auto count = spanCount(project, (*run)->id);
+    if (!count)
+        return std::unexpected(count.error());
+    Database &db = project.m_db;
+    auto sp = Savepoint::begin(db);
+    if (!sp)
+        return std::unexpected(sp.error());
+    FOURFOLD_TRY_STATUS(store::removeRun(db, (*run)->id));
+    FOURFOLD_TRY_STATUS(store::appendEvent(db, CoderId {}, QStringLiteral("extractor_run.delete"),
+        QStringLiteral("extractor_run"), (*run)->uuid,
+        QJsonObject {{QStringLiteral("name"), name}, {QStringLiteral("spans"), *count}}));
+    return sp->commit();
+}
+
+} // namespace fourfold
