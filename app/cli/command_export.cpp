@@ -1,11 +1,114 @@
-// PLACEHOLDER: replaced by the work that owns this subcommand.
+// export: a span layer (gold, coders, coder:PSEUDONYM, run:NAME) as JSON Lines, W3C Web
+// Annotations, IOB2 tokens or CSV, optionally split by article, with a manifest.
+
 #include "app/cli/cli_output.h"
+#include "core/exchange/layer_export.h"
+#include "core/project/project.h"
+
+#include <QCoreApplication>
+#include <QDir>
 
 namespace fourfold::cli {
 
-int runExport(const QStringList &)
+namespace {
+
+QString tr(const char *text)
 {
-    return usageError(QStringLiteral("export"), QStringLiteral("not built yet."));
+    return QCoreApplication::translate("cli", text);
+}
+
+} // namespace
+
+int runExport(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("export");
+    QCommandLineParser parser;
+    const QCommandLineOption layer(QStringLiteral("layer"),
+        tr("What to export: gold, coders, coder:PSEUDONYM or run:NAME."), QStringLiteral("LAYER"));
+    const QCommandLineOption format(QStringLiteral("format"),
+        tr("jsonl (spans and articles), w3c (Web Annotation JSON-LD), bio (IOB2 tokens, one "
+           "column per function) or csv (article × variable)."),
+        QStringLiteral("FORMAT"));
+    const QCommandLineOption outDir(QStringLiteral("out"),
+        tr("The output directory (created if needed)."), QStringLiteral("DIR"));
+    const QCommandLineOption split(QStringLiteral("split"),
+        tr("Split by article, stratified by function presence: train/dev/test or train/test "
+           "percentages, e.g. 80/10/10."),
+        QStringLiteral("A/B/C"));
+    const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the split (default 1)."),
+        QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption noText(QStringLiteral("no-text"),
+        tr("Write offsets and hashes only: no texts, quotes, tokens or titles."));
+    const QCommandLineOption json(QStringLiteral("json"), tr("Print the manifest as JSON."));
+    parser.addOptions({layer, format, outDir, split, seed, noText, json});
+    parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
+    if (int rc = parseCommandLine(parser, command,
+            tr("Exports gold, codings or a run's spans for data teams and statistics packages; "
+               "coders appear only by pseudonym."),
+            arguments);
+        rc >= 0)
+        return rc;
+    if (parser.positionalArguments().size() != 1)
+        return usageError(command, tr("expected one project file."));
+    if (!parser.isSet(layer))
+        return usageError(
+            command, tr("say what to export: --layer gold|coders|coder:PSEUDONYM|run:NAME."));
+    if (!parser.isSet(format))
+        return usageError(command, tr("say which format: --format jsonl|w3c|bio|csv."));
+    if (!parser.isSet(outDir) || parser.value(outDir).isEmpty())
+        return usageError(command, tr("say where to write: --out DIR."));
+    ExportOptions options;
+    auto spec = LayerSpec::parse(parser.value(layer));
+    if (!spec)
+        return usageError(command, spec.error().message);
+    options.layer = *spec;
+    const auto formatValue = exportFormatFromKey(parser.value(format));
+    if (!formatValue)
+        return usageError(command,
+            tr("unknown format \"%1\" (expected jsonl, w3c, bio or csv).")
+                .arg(parser.value(format)));
+    options.format = *formatValue;
+    options.outDir = parser.value(outDir);
+    if (parser.isSet(split)) {
+        auto ratios = SplitRatios::parse(parser.value(split));
+        if (!ratios)
+            return usageError(command, ratios.error().message);
+        options.split = *ratios;
+    }
+    bool ok = false;
+    options.seed = parser.value(seed).toULongLong(&ok);
+    if (!ok)
+        return usageError(command, tr("--seed expects a non-negative whole number."));
+    options.withText = !parser.isSet(noText);
+    options.version = QCoreApplication::applicationVersion();
+
+    auto project = Project::open(parser.positionalArguments().first());
+    if (!project)
+        return report(project.error());
+    auto exported = exportLayer(*project, options);
+    if (!exported)
+        return report(exported.error());
+    if (parser.isSet(json)) {
+        printJson(exported->manifest);
+        return ExitOk;
+    }
+    out(tr("Exported %1 as %2 into %3:")
+            .arg(options.layer.key(), exportFormatKey(options.format),
+                QDir::toNativeSeparators(options.outDir)));
+    const QJsonObject splits = exported->manifest.value(QStringLiteral("splits")).toObject();
+    const QStringList names =
+        options.split ? options.split->names : QStringList {QStringLiteral("all")};
+    for (const QString &name : names) {
+        const QJsonObject s = splits.value(name).toObject();
+        out(tr("  %1: %2 articles, %3 spans")
+                .arg(name)
+                .arg(s.value(QStringLiteral("articles")).toInteger())
+                .arg(s.value(QStringLiteral("spans")).toInteger()));
+    }
+    for (const ExportedFile &f : exported->files)
+        out(QStringLiteral("  %1  %2").arg(f.sha256, f.name));
+    out(QStringLiteral("  manifest.json"));
+    return ExitOk;
 }
 
 } // namespace fourfold::cli

@@ -1,10 +1,60 @@
 #include "app/cli/cli_output.h"
+#include "core/exchange/w3c_import.h"
+#include "core/project/coding_import.h"
 #include "core/project/project.h"
 
 #include <QCoreApplication>
 #include <QJsonArray>
 
 namespace fourfold::cli {
+
+namespace {
+
+// Imports codings rather than articles: W3C Web Annotations (as `export --format w3c` writes
+// them) or quote-anchored codings. Each file is all-or-nothing.
+int importCodings(Project &project, const QStringList &files, bool w3c, Phase phase, bool json)
+{
+    QJsonArray done;
+    for (const QString &file : files) {
+        qint64 spans = 0;
+        qint64 judgements = 0;
+        qint64 gold = 0;
+        QStringList created;
+        if (w3c) {
+            auto result = importW3cAnnotations(project, file, phase);
+            if (!result)
+                return report(result.error());
+            spans = result->spans;
+            created = result->codersCreated;
+        } else {
+            auto result = importQuotedCodings(project, file, phase);
+            if (!result)
+                return report(result.error());
+            spans = result->spans;
+            judgements = result->judgements;
+            gold = result->gold;
+        }
+        done.append(QJsonObject {{QStringLiteral("file"), file}, {QStringLiteral("spans"), spans},
+            {QStringLiteral("judgements"), judgements}, {QStringLiteral("gold"), gold},
+            {QStringLiteral("codersCreated"), QJsonArray::fromStringList(created)}});
+        if (!json) {
+            out(QCoreApplication::translate("cli", "%1: %2 spans, %3 answers, %4 gold spans added")
+                    .arg(file)
+                    .arg(spans)
+                    .arg(judgements)
+                    .arg(gold));
+            if (!created.isEmpty())
+                out(QCoreApplication::translate("cli", "  new coders: %1")
+                        .arg(created.join(QStringLiteral(", "))));
+        }
+    }
+    if (json)
+        printJson(QJsonObject {
+            {QStringLiteral("project"), project.path()}, {QStringLiteral("files"), done}});
+    return ExitOk;
+}
+
+} // namespace
 
 int runImport(const QStringList &arguments)
 {
@@ -25,14 +75,29 @@ int runImport(const QStringList &arguments)
         QStringLiteral("FIELD=HEADER"));
     const QCommandLineOption json(
         QStringLiteral("json"), QCoreApplication::translate("cli", "Print the report as JSON."));
-    parser.addOptions({format, language, column, json});
+    const QCommandLineOption w3c(QStringLiteral("w3c"),
+        QCoreApplication::translate("cli",
+            "The files hold W3C Web Annotations (from \"export --format w3c\"): import them as "
+            "codings of the articles already in the project."));
+    const QCommandLineOption codings(QStringLiteral("codings"),
+        QCoreApplication::translate("cli",
+            "The files hold quote-anchored codings (JSON Lines, see sample-project/README.md)."));
+    const QCommandLineOption phase(QStringLiteral("phase"),
+        QCoreApplication::translate("cli",
+            "With --w3c or --codings: the phase of the imported codings (training, pilot, "
+            "reliability, production; default production)."),
+        QStringLiteral("PHASE"));
+    parser.addOptions({format, language, column, json, w3c, codings, phase});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), QCoreApplication::translate("cli", "The project file."));
     parser.addPositionalArgument(QStringLiteral("FILE..."),
         QCoreApplication::translate("cli",
             "Files (or, for text, folders) to import. Each file is imported whole or not at all."));
     if (int rc = parseCommandLine(parser, command,
-            QCoreApplication::translate("cli", "Import articles into a project."), arguments);
+            QCoreApplication::translate("cli",
+                "Import articles into a project (or, with --w3c or --codings, codings of its "
+                "articles)."),
+            arguments);
         rc >= 0)
         return rc;
     const QStringList positional = parser.positionalArguments();
@@ -60,6 +125,20 @@ int runImport(const QStringList &arguments)
         options.csvColumns.insert(mapping.left(eq), mapping.mid(eq + 1));
     }
 
+    if (parser.isSet(w3c) && parser.isSet(codings))
+        return usageError(command,
+            QCoreApplication::translate("cli", "choose either --w3c or --codings."));
+    Phase codingPhase = Phase::Production;
+    if (parser.isSet(phase)) {
+        const auto chosen = phaseFromKey(parser.value(phase));
+        if (!chosen)
+            return usageError(command,
+                QCoreApplication::translate("cli",
+                    "unknown phase \"%1\" (expected training, pilot, reliability or production).")
+                    .arg(parser.value(phase)));
+        codingPhase = *chosen;
+    }
+
     auto project = Project::open(positional.first());
     if (!project)
         return report(project.error());
@@ -67,6 +146,9 @@ int runImport(const QStringList &arguments)
         err(QCoreApplication::translate(
             "cli", "Upgraded the project file; the old version is kept as %1.")
                 .arg(project->backupPath()));
+    if (parser.isSet(w3c) || parser.isSet(codings))
+        return importCodings(
+            *project, positional.mid(1), parser.isSet(w3c), codingPhase, parser.isSet(json));
 
     QJsonArray files;
     qint64 added = 0;

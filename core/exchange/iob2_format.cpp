@@ -1,0 +1,184 @@
+#include "core/exchange/iob2_format.h"
+
+#include "core/text/offset_map.h"
+
+#include <QCoreApplication>
+
+#include <algorithm>
+#include <array>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("Iob2Format", text);
+}
+
+// Ranges of one function, overlapping ones merged (a column holds one chunk at a time).
+std::vector<TextRange> mergedRanges(const std::vector<Iob2Span> &spans, FramingFunction f)
+{
+    std::vector<TextRange> ranges;
+    for (const Iob2Span &s : spans)
+        if (s.function == f && !s.range.isEmpty())
+            ranges.push_back(s.range);
+    std::sort(ranges.begin(), ranges.end());
+    std::vector<TextRange> merged;
+    for (const TextRange &r : ranges) {
+        if (!merged.empty() && r.start < merged.back().end)
+            merged.back().end = std::max(merged.back().end, r.end);
+        else
+            merged.push_back(r);
+    }
+    return merged;
+}
+
+QString tokenText(const QString &text, const OffsetMap &map, const TextRange &token)
+{
+    const TextRange u = map.utf16Range(token);
+    if (u.start < 0)
+        return QStringLiteral("_");
+    QString t = text.mid(u.start, u.length());
+    // Tokens hold no white space; guard the format's separators all the same.
+    for (QChar &c : t)
+        if (c == QLatin1Char('\t') || c == QLatin1Char('\n') || c == QLatin1Char('\r'))
+            c = QLatin1Char(' ');
+    return t.isEmpty() ? QStringLiteral("_") : t;
+}
+
+} // namespace
+
+QByteArray writeIob2(const std::vector<Iob2Document> &documents, bool withText)
+{
+    QString out = QStringLiteral("# fourfold iob2: token start end");
+    for (FramingFunction f : kFramingFunctions)
+        out += QLatin1Char(' ') + functionKey(f);
+    out += QLatin1Char('\n');
+    for (const Iob2Document &d : documents) {
+        out += QStringLiteral("# article = %1\n# sha256 = %2\n# source = %3\n")
+                   .arg(d.externalId, d.sha256, d.source);
+        const bool text = withText && !d.text.isEmpty();
+        const OffsetMap map(text ? d.text : QString());
+        std::array<std::vector<TextRange>, 4> ranges;
+        std::array<std::size_t, 4> next {};
+        std::array<qint64, 4> open {-1, -1, -1, -1}; // start of the chunk the last token was in
+        for (FramingFunction f : kFramingFunctions)
+            ranges[std::size_t(f)] = mergedRanges(d.spans, f);
+        for (const TextRange &token : d.tokens) {
+            out += text ? tokenText(d.text, map, token) : QStringLiteral("_");
+            out += QStringLiteral("\t%1\t%2").arg(token.start).arg(token.end);
+            for (FramingFunction f : kFramingFunctions) {
+                const std::size_t i = std::size_t(f);
+                auto &n = next[i];
+                while (n < ranges[i].size() && ranges[i][n].end <= token.start)
+                    ++n;
+                QString tag = QStringLiteral("O");
+                if (n < ranges[i].size() && ranges[i][n].overlaps(token)) {
+                    const bool continues = open[i] == ranges[i][n].start;
+                    tag =
+                        (continues ? QStringLiteral("I-") : QStringLiteral("B-")) + functionKey(f);
+                    open[i] = ranges[i][n].start;
+                } else {
+                    open[i] = -1;
+                }
+                out += QLatin1Char('\t') + tag;
+            }
+            out += QLatin1Char('\n');
+        }
+        out += QLatin1Char('\n');
+    }
+    return out.toUtf8();
+}
+
+Result<std::vector<Iob2Document>> readIob2(const QByteArray &bytes, const QString &file)
+{
+    std::vector<Iob2Document> docs;
+    const QString all = QString::fromUtf8(bytes);
+    const QStringList lines = all.split(QLatin1Char('\n'));
+    Iob2Document *doc = nullptr;
+    std::array<qint64, 4> open {-1, -1, -1, -1};
+    std::array<qint64, 4> openEnd {};
+    auto close = [&](std::size_t i) {
+        if (doc && open[i] >= 0)
+            doc->spans.push_back(Iob2Span {kFramingFunctions[i], TextRange {open[i], openEnd[i]}});
+        open[i] = -1;
+    };
+    auto finish = [&]() {
+        for (std::size_t i = 0; i < 4; ++i)
+            close(i);
+        if (doc)
+            std::sort(
+                doc->spans.begin(), doc->spans.end(), [](const Iob2Span &a, const Iob2Span &b) {
+                    return std::pair(int(a.function), a.range)
+                        < std::pair(int(b.function), b.range);
+                });
+    };
+    for (qsizetype n = 0; n < lines.size(); ++n) {
+        const QString &line = lines[n];
+        const qint64 lineNo = n + 1;
+        if (line.isEmpty()) {
+            finish();
+            doc = nullptr;
+            continue;
+        }
+        if (line.startsWith(QLatin1Char('#'))) {
+            const qsizetype eq = line.indexOf(QStringLiteral(" = "));
+            if (eq < 0)
+                continue;
+            const QString key = line.mid(1, eq - 1).trimmed();
+            const QString value = line.mid(eq + 3);
+            if (key == QLatin1String("article")) {
+                finish();
+                docs.push_back(Iob2Document {});
+                doc = &docs.back();
+                doc->externalId = value;
+            } else if (doc && key == QLatin1String("sha256")) {
+                doc->sha256 = value;
+            } else if (doc && key == QLatin1String("source")) {
+                doc->source = value;
+            }
+            continue;
+        }
+        if (!doc)
+            return failAt(ErrorCode::InvalidInput, file, lineNo, 1,
+                tr("A token row comes before any \"# article = ...\" line."));
+        const QStringList fields = line.split(QLatin1Char('\t'));
+        if (fields.size() != 7)
+            return failAt(ErrorCode::InvalidInput, file, lineNo, 1,
+                tr("A token row needs 7 tab-separated fields (token, start, end and one tag per "
+                   "function); this one has %1.")
+                    .arg(fields.size()));
+        bool okStart = false, okEnd = false;
+        const TextRange token {fields[1].toLongLong(&okStart), fields[2].toLongLong(&okEnd)};
+        if (!okStart || !okEnd || token.start < 0 || token.end <= token.start)
+            return failAt(ErrorCode::InvalidInput, file, lineNo, fields[0].size() + 2,
+                tr("The token's start and end must be whole numbers with start < end."));
+        doc->tokens.push_back(token);
+        qint64 column = fields[0].size() + fields[1].size() + fields[2].size() + 4;
+        for (std::size_t i = 0; i < 4; ++i) {
+            const QString &tag = fields[qsizetype(i) + 3];
+            const QString key = functionKey(kFramingFunctions[i]);
+            if (tag == QLatin1String("O")) {
+                close(i);
+            } else if (tag == QStringLiteral("B-") + key) {
+                close(i);
+                open[i] = token.start;
+                openEnd[i] = token.end;
+            } else if (tag == QStringLiteral("I-") + key) {
+                if (open[i] < 0)
+                    return failAt(ErrorCode::InvalidInput, file, lineNo, column,
+                        tr("\"%1\" continues no chunk: in IOB2 a chunk starts with B-.").arg(tag));
+                openEnd[i] = token.end;
+            } else {
+                return failAt(ErrorCode::InvalidInput, file, lineNo, column,
+                    tr("The tag \"%1\" is not O, B-%2 or I-%2.").arg(tag, key));
+            }
+            column += tag.size() + 1;
+        }
+    }
+    finish();
+    return docs;
+}
+
+} // namespace fourfold

@@ -1,0 +1,74 @@
+#pragma once
+// Exporting a span layer (gold, coders, coder:PSEUDONYM, run:NAME) for data teams and
+// statistics packages, split by article, with a manifest. See the README section "Exports".
+//
+// Files written into the output directory, per split (train/dev/test, or "all" without a
+// split):
+//   jsonl  <split>.jsonl           one span per line: article, sha256, start, end (code points),
+//                                  function, attributes, coder (pseudonym; null for runs),
+//                                  source, id, score (runs), quote (unless the text is withheld)
+//          <split>.articles.jsonl  one article per line: article, sha256, language, length,
+//                                  title and text (unless withheld)
+//   w3c    <split>.jsonld          a W3C AnnotationCollection (w3c_format.h)
+//   bio    <split>.bio             IOB2 tokens, one column per function (iob2_format.h); with the
+//                                  coders layer one file per coder: <split>.<pseudonym>.bio
+//   csv    <split>.csv             one row per article and source (RFC 4180): per function
+//                                  present (0/1), spans (count), share (covered code points /
+//                                  length)
+//   manifest.json                  every file's SHA-256 and size, the codebook version, the layer,
+//                                  the format, the seed, the split ratios, and per split the
+//                                  articles and spans per function
+// Coders appear only by pseudonym. With the text withheld, no text, quote, token or title is
+// written: only offsets and hashes.
+
+#include "core/exchange/article_split.h"
+#include "core/model/error.h"
+#include "core/scoring/span_layer.h"
+
+#include <QJsonObject>
+#include <QString>
+
+#include <cstdint>
+#include <optional>
+#include <vector>
+
+namespace fourfold {
+
+class Project;
+
+enum class ExportFormat { Jsonl, W3c, Iob2, Csv };
+// "jsonl", "w3c", "bio", "csv".
+QString exportFormatKey(ExportFormat format);
+std::optional<ExportFormat> exportFormatFromKey(const QString &key);
+
+struct ExportOptions {
+    LayerSpec layer;
+    ExportFormat format = ExportFormat::Jsonl;
+    QString outDir;
+    std::optional<SplitRatios> split; // nothing: one split "all"
+    std::uint64_t seed = 1;
+    bool withText = true;
+    QString version; // Fourfold's version, for the generator fields
+};
+
+struct ExportedFile {
+    QString name; // relative to the output directory
+    QString split;
+    QString sha256;
+    qint64 bytes = 0;
+};
+
+struct ExportReport {
+    std::vector<ExportedFile> files; // without the manifest
+    QJsonObject manifest;
+    // Split of each exported article by external id.
+    std::vector<std::pair<QString, QString>> articleSplits;
+};
+
+// Writes the export. Fails with NotFound for an unknown coder or run, InvalidArgument when the
+// layer covers no article, Io naming the file that could not be written (files written before
+// it stay; the manifest is written last, so an export without a manifest is incomplete), or
+// with the store's error.
+Result<ExportReport> exportLayer(const Project &project, const ExportOptions &options);
+
+} // namespace fourfold

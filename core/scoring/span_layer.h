@@ -1,0 +1,73 @@
+#pragma once
+// A span layer: one named set of spans of a project, as scoring and export read it.
+//   gold            the adjudicated gold standard
+//   coders          every coder's annotations
+//   coder:PSEUDONYM one coder's annotations
+//   run:NAME        the spans of one extractor run (read through ExtractorRuns)
+// Coders appear only by their pseudonym: names never leave the project (DEVELOPERS.md).
+
+#include "core/model/error.h"
+#include "core/model/framing_function.h"
+#include "core/model/ids.h"
+#include "core/model/text_range.h"
+
+#include <QJsonObject>
+#include <QString>
+
+#include <optional>
+#include <vector>
+
+namespace fourfold {
+
+class Project;
+
+enum class LayerKind { Gold, Coders, Coder, Run };
+
+struct LayerSpec {
+    LayerKind kind = LayerKind::Gold;
+    QString name; // the pseudonym (Coder) or the run's name (Run); empty otherwise
+
+    // "gold", "coders", "coder:C01", "run:NAME".
+    QString key() const;
+    // Parses the forms of key(). Fails with InvalidArgument naming the text for anything else.
+    static Result<LayerSpec> parse(const QString &text);
+};
+
+// One span of a layer.
+struct LayerSpan {
+    ArticleId article;
+    FramingFunction function = FramingFunction::Problem;
+    TextRange range; // code points into the article's canonical text
+    QJsonObject attributes;
+    std::optional<double> score; // run spans: the extractor's confidence, if any
+    // Who made the span: the coder's pseudonym; for gold the pseudonym of the lead who decided;
+    // empty for run spans.
+    QString coder;
+    // The column the span belongs to: the pseudonym (coder layers), "gold", or "run:NAME".
+    QString source;
+    QString uuid; // of the annotation or gold span; empty for run spans
+    QString createdAt; // ISO 8601 UTC; gold: when it was decided; run: the run's time
+};
+
+// Which article a source of the layer covers: the coder coded it (assigned in any phase, or
+// has an annotation on it), gold exists for it (at least one gold span), or the run saw it
+// (a run covers every article of the project).
+struct LayerCoverage {
+    ArticleId article;
+    QString source;
+};
+
+struct SpanLayer {
+    LayerSpec spec;
+    QStringList sources; // in order: pseudonyms by pseudonym, or "gold", or "run:NAME"
+    std::vector<LayerCoverage> coverage; // by article (project order), then source order
+    std::vector<LayerSpan> spans; // by article (project order), source, start, end, function
+    // The articles covered by any source, in project order.
+    std::vector<ArticleId> articles() const;
+};
+
+// Reads the layer `spec` of `project`. Fails with NotFound naming the coder or run that does
+// not exist, or with the store's error.
+Result<SpanLayer> resolveLayer(const Project &project, const LayerSpec &spec);
+
+} // namespace fourfold

@@ -1,0 +1,167 @@
+#include "core/exchange/layer_export.h"
+#include "core/exchange/w3c_import.h"
+#include "tests/scoring/scoring_fixture.h"
+#include "tests/support/db_dump.h"
+
+#include <QDir>
+#include <QJsonDocument>
+
+#include <set>
+
+using namespace fourfold;
+
+namespace {
+
+using F = FramingFunction;
+
+// The options of an export of `layer` as `format` into `dir`; the rest at their defaults.
+inline fourfold::ExportOptions exportOptions(
+    const fourfold::LayerSpec &layer, fourfold::ExportFormat format, const QString &dir = {})
+{
+    fourfold::ExportOptions o;
+    o.layer = layer;
+    o.format = format;
+    o.outDir = dir;
+    return o;
+}
+
+using SpanKey = std::tuple<QString, QString, int, qint64, qint64, QString>;
+
+// Every live annotation as (article external id, coder pseudonym, function, start, end,
+// attributes as compact JSON).
+std::multiset<SpanKey> spansOf(const Project &p)
+{
+    std::multiset<SpanKey> out;
+    auto coders = p.coders();
+    REQUIRE(coders);
+    auto articles = p.articles();
+    REQUIRE(articles);
+    auto all = p.allAnnotations();
+    REQUIRE(all);
+    for (const Annotation &a : *all) {
+        QString coder, article;
+        for (const Coder &c : *coders)
+            if (c.id == a.coder)
+                coder = c.pseudonym;
+        for (const ArticleSummary &s : *articles)
+            if (s.id == a.article)
+                article = s.externalId;
+        out.insert({article, coder, int(a.content.function), a.content.range.start,
+            a.content.range.end,
+            QString::fromUtf8(QJsonDocument(a.content.attributes).toJson(QJsonDocument::Compact))});
+    }
+    return out;
+}
+
+struct RoundTrip : test::ScoringFixture {
+    CoderId c1 = addCoder(QStringLiteral("C01"));
+    CoderId c2 = addCoder(QStringLiteral("C02"));
+    QString exported;
+
+    RoundTrip()
+    {
+        code(f1, c1, F::Problem, 0, 40);
+        code(f1, c1, F::Evaluation, 108, 125,
+            QJsonObject {{QStringLiteral("polarity"), QStringLiteral("negative")}});
+        code(f1, c2, F::Problem, 4, 22);
+        code(f2, c2, F::Remedy, 61, 85);
+        code(f2, c2, F::Cause, 40, 59);
+        ExportOptions o = exportOptions(LayerSpec {LayerKind::Coders, {}}, ExportFormat::W3c,
+            dir.filePath(QStringLiteral("w3c")));
+        REQUIRE(exportLayer(project, o));
+        exported = QDir(o.outDir).filePath(QStringLiteral("all.jsonld"));
+    }
+
+    // A new project holding the same articles, with C01 known and C02 not.
+    Project freshProject(const QString &name)
+    {
+        auto p = Project::create(dir.filePath(name));
+        REQUIRE(p);
+        REQUIRE(
+            p->importFile(test::writeFile(dir, name + QStringLiteral(".jsonl"), test::kTwoArticles),
+                ImportOptions {}));
+        REQUIRE(p->addCoder(QStringLiteral("Someone"), QStringLiteral("C01"), CoderRole::Coder));
+        return std::move(*p);
+    }
+};
+
+} // namespace
+
+TEST_CASE_METHOD(RoundTrip, "importing the W3C export reproduces every span", "[exchange][w3c]")
+{
+    Project fresh = freshProject(QStringLiteral("fresh.fourfold"));
+    auto report = importW3cAnnotations(fresh, exported);
+    REQUIRE(report);
+    CHECK(report->spans == 5);
+    CHECK(report->codersCreated == QStringList {QStringLiteral("C02")});
+    CHECK(spansOf(fresh) == spansOf(project));
+    CHECK(spansOf(fresh).size() == 5);
+}
+
+TEST_CASE_METHOD(RoundTrip, "the W3C import refuses bad files whole, naming file and position",
+    "[exchange][w3c]")
+{
+    const QByteArray good = test::readFile(exported);
+    struct Case {
+        const char *name;
+        QByteArray bytes;
+        qint64 line; // 0: not checked
+        const char *message;
+    };
+    QByteArray wrongQuote = good;
+    wrongQuote.replace("\"exact\": \"It is a disgrace.\"", "\"exact\": \"It is a delight.\"");
+    QByteArray unknownArticle = good;
+    unknownArticle.replace("ni:///sha-256;", "ni:///sha-256;A");
+    QByteArray badFunction = good;
+    badFunction.replace("\"value\": \"remedy\"", "\"value\": \"solution\"");
+    QByteArray badAttribute = good;
+    badAttribute.replace("negative", "furious");
+    QByteArray outside = good;
+    outside.replace("\"end\": 125", "\"end\": 999");
+    const Case cases[] = {
+        {"truncated", good.left(good.size() / 2), 0, "not valid JSON"},
+        {"not json", "{\n  \"type\": AnnotationCollection\n}", 2, "not valid JSON"},
+        {"wrong root", "{\"type\": \"Thing\"}", 1, "neither an AnnotationCollection"},
+        {"wrong quote", wrongQuote, 0, "is not the article's text"},
+        {"unknown article", unknownArticle, 0, "ni:///sha-256"},
+        {"bad function", badFunction, 0, "not a framing function"},
+        {"bad attribute", badAttribute, 0, "furious"},
+        {"outside", outside, 0, "outside the article"},
+    };
+    for (const Case &c : cases) {
+        INFO(c.name);
+        Project fresh = freshProject(
+            QStringLiteral("f-%1.fourfold")
+                .arg(QString::fromUtf8(c.name).replace(QLatin1Char(' '), QLatin1Char('-'))));
+        const QString before = test::dumpDatabase(fresh.databaseForTesting());
+        const QString path = test::writeFile(dir, QStringLiteral("bad.jsonld"), c.bytes);
+        auto r = importW3cAnnotations(fresh, path);
+        REQUIRE_FALSE(r);
+        CHECK(r.error().code == ErrorCode::InvalidInput);
+        CHECK(r.error().file == path);
+        CHECK(r.error().message.contains(QString::fromUtf8(c.message)));
+        if (c.line)
+            CHECK(r.error().line == c.line);
+        // Annotation errors point at the annotation's id in the file.
+        if (QByteArray(c.name) != "truncated" && QByteArray(c.name) != "not json"
+            && QByteArray(c.name) != "wrong root")
+            CHECK(r.error().line > 1);
+        // All-or-nothing: neither spans nor coders were added.
+        CHECK(test::dumpDatabase(fresh.databaseForTesting()) == before);
+    }
+}
+
+TEST_CASE_METHOD(RoundTrip, "a run's W3C export cannot become a coder's codings", "[exchange][w3c]")
+{
+    storeRun(QStringLiteral("r"), {{f1, F::Remedy, 75, 107}});
+    ExportOptions o = exportOptions(LayerSpec {LayerKind::Run, QStringLiteral("r")},
+        ExportFormat::W3c, dir.filePath(QStringLiteral("run")));
+    REQUIRE(exportLayer(project, o));
+    Project fresh = freshProject(QStringLiteral("run.fourfold"));
+    auto r = importW3cAnnotations(fresh, QDir(o.outDir).filePath(QStringLiteral("all.jsonld")));
+    REQUIRE_FALSE(r);
+    CHECK(r.error().message.contains(QStringLiteral("software")));
+    auto missing = importW3cAnnotations(fresh, dir.filePath(QStringLiteral("none.jsonld")));
+    REQUIRE_FALSE(missing);
+    CHECK(missing.error().code == ErrorCode::Io);
+}
