@@ -238,13 +238,17 @@ ALTER TABLE assignment ADD COLUMN active_seconds INTEGER NOT NULL DEFAULT 0 CHEC
 
 // Migration 4: coder copies, and adjudication decisions that put nothing into gold.
 constexpr const char *kMigration4 = R"sql(
--- In a coder copy: each object as it was handed out (a digest of its content), so that a merge
--- can tell the coder's changes from changes made meanwhile in the main project.
+-- The common base of a coder copy and its project: each object's content digest (SHA-256 of
+-- its portable form) and, for assignments, the active coding seconds. In a coder copy: as handed
+-- out. In the project: as agreed at the last merge of that copy. A merge compares both sides with
+-- it to tell the coder's changes from changes made meanwhile in the project.
 CREATE TABLE copy_base (
-  object_type TEXT NOT NULL,
+  copy_uuid   TEXT NOT NULL,
+  object_type TEXT NOT NULL CHECK (object_type IN ('annotation', 'link', 'judgement', 'assignment')),
   uuid        TEXT NOT NULL,
   digest      TEXT NOT NULL,
-  PRIMARY KEY (object_type, uuid)
+  seconds     INTEGER NOT NULL DEFAULT 0,
+  PRIMARY KEY (copy_uuid, object_type, uuid)
 ) STRICT, WITHOUT ROWID;
 
 -- In the main project: every merged copy, and the conflicts left for the lead to decide.
@@ -256,15 +260,18 @@ CREATE TABLE copy_merge (
   detail    TEXT NOT NULL DEFAULT '{}'
 ) STRICT;
 
+-- mine / theirs: the object's portable JSON in the project / in the copy when it was found.
 CREATE TABLE merge_conflict (
   id          INTEGER PRIMARY KEY,
   uuid        TEXT NOT NULL UNIQUE,
   object_type TEXT NOT NULL,
   object_uuid TEXT NOT NULL,
   copy_uuid   TEXT NOT NULL,
+  mine        TEXT NOT NULL,
   theirs      TEXT NOT NULL,
   detected_at TEXT NOT NULL,
-  resolution  TEXT NOT NULL DEFAULT ''
+  resolution  TEXT NOT NULL DEFAULT '' CHECK (resolution IN ('', 'mine', 'theirs')),
+  resolved_at TEXT NOT NULL DEFAULT ''
 ) STRICT;
 
 -- A lead's decision that a coder's span does not belong in gold (a rejection), with its reason.

@@ -1,0 +1,189 @@
+// `fourfold-cli handout` and `merge` as a script sees them: exit codes (0 ok, 1 failed, 2 usage),
+// one-line errors on stderr, JSON output; the project file checked before and after.
+#include "copies_fixture.h"
+
+#include <QJsonArray>
+#include <QJsonDocument>
+#include <QProcess>
+
+#include <sqlite3.h>
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+struct Run {
+    int exitCode = -1;
+    QString out;
+    QString err;
+};
+
+Run cli(const QStringList &args)
+{
+    QProcess p;
+    p.start(QStringLiteral(FOURFOLD_CLI), args);
+    REQUIRE(p.waitForFinished(120000));
+    return Run {p.exitCode(), QString::fromUtf8(p.readAllStandardOutput()),
+        QString::fromUtf8(p.readAllStandardError())};
+}
+
+QJsonObject json(const Run &r)
+{
+    QJsonParseError e;
+    const QJsonDocument doc = QJsonDocument::fromJson(r.out.toUtf8(), &e);
+    INFO(r.out.toStdString() << r.err.toStdString());
+    REQUIRE(e.error == QJsonParseError::NoError);
+    return doc.object();
+}
+
+void execSql(const QString &path, const char *sql)
+{
+    sqlite3 *db = nullptr;
+    REQUIRE(sqlite3_open_v2(path.toUtf8().constData(), &db, SQLITE_OPEN_READWRITE, nullptr)
+        == SQLITE_OK);
+    const int rc = sqlite3_exec(db, sql, nullptr, nullptr, nullptr);
+    sqlite3_close(db);
+    REQUIRE(rc == SQLITE_OK);
+}
+
+// Changes the actor of the coder's cause span on f1 in the project file `path`.
+void changeCauseActor(const QString &path, const QString &actor)
+{
+    auto p = Project::open(path);
+    REQUIRE(p);
+    auto c = p->coderByPseudonym(QStringLiteral("C01"));
+    REQUIRE(c);
+    auto f1 = p->articleByExternalId(QStringLiteral("f1"));
+    REQUIRE(f1);
+    auto list = p->annotations(**f1, (*c)->id);
+    REQUIRE(list);
+    for (const Annotation &a : *list)
+        if (a.content.function == FramingFunction::Cause) {
+            AnnotationContent content = a.content;
+            content.attributes = {{QStringLiteral("actor"), actor}};
+            ChangeAnnotationEdit edit(a.id, content, (*c)->id);
+            REQUIRE(p->apply(edit));
+        }
+}
+
+} // namespace
+
+TEST_CASE("handout and merge answer --help and refuse wrong command lines with exit 2")
+{
+    for (const char *command : {"handout", "merge"}) {
+        const Run r = cli({QString::fromLatin1(command), QStringLiteral("--help")});
+        CHECK(r.exitCode == 0);
+        CHECK(r.out.contains(QStringLiteral("Usage: fourfold-cli %1").arg(QLatin1String(command))));
+    }
+    CHECK(cli({QStringLiteral("handout"), QStringLiteral("p.fourfold"), QStringLiteral("--out"),
+                  QStringLiteral("x")})
+              .exitCode
+        == 2);
+    CHECK(cli({QStringLiteral("merge"), QStringLiteral("p.fourfold")}).exitCode == 2);
+    const Run r = cli({QStringLiteral("merge"), QStringLiteral("p.fourfold"),
+        QStringLiteral("--resolve"), QStringLiteral("u")});
+    CHECK(r.exitCode == 2);
+    CHECK(r.err.contains(QStringLiteral("--keep")));
+    CHECK(cli({QStringLiteral("merge"), QStringLiteral("p.fourfold"), QStringLiteral("--resolve"),
+                  QStringLiteral("u"), QStringLiteral("--keep"), QStringLiteral("yours")})
+              .exitCode
+        == 2);
+}
+
+TEST_CASE("a coder copy handed out, edited, merged, merged again, tampered and in conflict")
+{
+    CopiesFixture f;
+    f.main.reset();
+    const QString main = f.mainPath;
+    const QString copy = f.dir.filePath(QStringLiteral("c01.fourfold"));
+
+    Run r = cli({QStringLiteral("handout"), main, QStringLiteral("--coder"), QStringLiteral("C01"),
+        QStringLiteral("--out"), copy, QStringLiteral("--json")});
+    REQUIRE(r.exitCode == 0);
+    QJsonObject o = json(r);
+    CHECK(o.value(QStringLiteral("coder")).toString() == QStringLiteral("C01"));
+    CHECK(o.value(QStringLiteral("articles")).toInteger() == 2);
+    CHECK(o.value(QStringLiteral("annotations")).toInteger() == 3);
+    CHECK_FALSE(r.out.contains(QStringLiteral("Noor"))); // pseudonyms only
+
+    r = cli({QStringLiteral("handout"), main, QStringLiteral("--coder"), QStringLiteral("C01"),
+        QStringLiteral("--out"), copy});
+    CHECK(r.exitCode == 1);
+    CHECK(r.err.startsWith(QStringLiteral("fourfold-cli: ")));
+    CHECK(r.err.count(QLatin1Char('\n')) == 1);
+
+    changeCauseActor(copy, QStringLiteral("the harbour board"));
+    r = cli({QStringLiteral("merge"), main, copy, QStringLiteral("--json")});
+    REQUIRE(r.exitCode == 0);
+    o = json(r);
+    QJsonObject merged = o.value(QStringLiteral("merged")).toArray().at(0).toObject();
+    CHECK(merged.value(QStringLiteral("changed")).toInteger() == 1);
+    CHECK(merged.value(QStringLiteral("alreadyMerged")).toBool() == false);
+    CHECK(o.value(QStringLiteral("openConflicts")).toInteger() == 0);
+
+    r = cli({QStringLiteral("merge"), main, copy});
+    CHECK(r.exitCode == 0);
+    CHECK(r.out.contains(QStringLiteral("nothing new")));
+
+    const QString infoBefore = cli({QStringLiteral("info"), main, QStringLiteral("--json")}).out;
+    const QString tampered = f.dir.filePath(QStringLiteral("tampered.fourfold"));
+    REQUIRE(QFile::copy(copy, tampered));
+    execSql(tampered, "UPDATE article SET text = text || ' ' WHERE external_id = 'f2'");
+    r = cli({QStringLiteral("merge"), main, tampered});
+    CHECK(r.exitCode == 1);
+    CHECK(r.err.contains(QStringLiteral("The text of article \"f2\"")));
+    CHECK(r.err.count(QLatin1Char('\n')) == 1);
+    CHECK(cli({QStringLiteral("info"), main, QStringLiteral("--json")}).out == infoBefore);
+
+    // The same span changed in the project and in the copy: a conflict, listed and resolved.
+    changeCauseActor(main, QStringLiteral("the province"));
+    changeCauseActor(copy, QStringLiteral("the ferry company"));
+    r = cli({QStringLiteral("merge"), main, copy});
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.out.contains(QStringLiteral("conflicts 1,")));
+    CHECK(r.out.contains(QStringLiteral("Open conflicts waiting for your decision: 1")));
+    CHECK(r.out.contains(QStringLiteral("--conflicts")));
+    r = cli(
+        {QStringLiteral("merge"), main, QStringLiteral("--conflicts"), QStringLiteral("--json")});
+    REQUIRE(r.exitCode == 0);
+    const QJsonArray conflicts = json(r).value(QStringLiteral("conflicts")).toArray();
+    REQUIRE(conflicts.size() == 1);
+    const QJsonObject c = conflicts.at(0).toObject();
+    CHECK(c.value(QStringLiteral("coder")).toString() == QStringLiteral("C01"));
+    CHECK(c.value(QStringLiteral("type")).toString() == QStringLiteral("annotation"));
+    CHECK(c.value(QStringLiteral("article")).toString() == QStringLiteral("f1"));
+    CHECK(c.value(QStringLiteral("mine"))
+              .toObject()
+              .value(QStringLiteral("attributes"))
+              .toString()
+              .contains(QStringLiteral("the province")));
+    r = cli({QStringLiteral("merge"), main, QStringLiteral("--conflicts")});
+    CHECK(r.out.contains(QStringLiteral(" on article f1")));
+    CHECK(r.out.contains(QStringLiteral("mine (project): cause [")));
+    CHECK(r.out.contains(QStringLiteral("the province")));
+    CHECK(r.out.contains(QStringLiteral("theirs (copy):  cause [")));
+    CHECK(r.out.contains(QStringLiteral("the ferry company")));
+    r = cli({QStringLiteral("merge"), main, QStringLiteral("--resolve"),
+        c.value(QStringLiteral("conflict")).toString(), QStringLiteral("--keep"),
+        QStringLiteral("theirs")});
+    CHECK(r.exitCode == 0);
+    r = cli({QStringLiteral("merge"), main, QStringLiteral("--conflicts")});
+    CHECK(r.out.contains(QStringLiteral("No open merge conflicts.")));
+    r = cli({QStringLiteral("merge"), main, QStringLiteral("--resolve"),
+        c.value(QStringLiteral("conflict")).toString(), QStringLiteral("--keep"),
+        QStringLiteral("mine")});
+    CHECK(r.exitCode == 1);
+    {
+        auto p = Project::open(main);
+        REQUIRE(p);
+        auto all = p->allAnnotations();
+        REQUIRE(all);
+        CHECK(std::ranges::count_if(*all, [](const Annotation &a) {
+            return a.content.attributes.value(QStringLiteral("actor")).toString()
+                == QStringLiteral("the ferry company");
+        }) == 1);
+    }
+    r = cli({QStringLiteral("check"), main});
+    CHECK(r.exitCode == 0);
+}
