@@ -43,6 +43,7 @@ int runScore(const QStringList &arguments);
 int runExport(const QStringList &arguments);
 int runReport(const QStringList &arguments);
 int runAssign(const QStringList &arguments);
+int runCodebook(const QStringList &arguments);
 int runHandout(const QStringList &arguments);
 int runMerge(const QStringList &arguments);
 

@@ -3,9 +3,13 @@
 #include "app/cli/cli_output.h"
 
 #include <QCoreApplication>
+#ifdef FOURFOLD_HAVE_REPORT
+#include <QGuiApplication>
+#endif
 
 #include <functional>
 #include <map>
+#include <memory>
 
 using namespace fourfold::cli;
 
@@ -37,6 +41,7 @@ const std::map<QString, Command> &commands()
         {QStringLiteral("export"), {QT_TRANSLATE_NOOP("cli", "Export gold, codings or a run as JSON Lines, W3C Web Annotation, IOB2 or CSV."), runExport}},
         {QStringLiteral("report"), {QT_TRANSLATE_NOOP("cli", "Write the reliability report (HTML or PDF)."), runReport}},
         {QStringLiteral("assign"), {QT_TRANSLATE_NOOP("cli", "Assign articles to coders and draw the reliability subsample."), runAssign}},
+        {QStringLiteral("codebook"), {QT_TRANSLATE_NOOP("cli", "List codebook versions, add one from a JSON file, and show what changed."), runCodebook}},
         {QStringLiteral("handout"), {QT_TRANSLATE_NOOP("cli", "Write a coder copy holding only that coder's articles and annotations."), runHandout}},
         {QStringLiteral("merge"), {QT_TRANSLATE_NOOP("cli", "Merge returned coder copies into the project."), runMerge}},
         {QStringLiteral("build-sample"),
@@ -64,7 +69,19 @@ void printUsage()
 
 int main(int argc, char *argv[])
 {
-    QCoreApplication app(argc, argv);
+    // `report` paints (QTextDocument, QPdfWriter) and needs a QGuiApplication; without a display
+    // it uses the offscreen platform. Every other command stays on QCoreApplication.
+    std::unique_ptr<QCoreApplication> application;
+#ifdef FOURFOLD_HAVE_REPORT
+    if (argc > 1 && qstrcmp(argv[1], "report") == 0) {
+        if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM"))
+            qputenv("QT_QPA_PLATFORM", "offscreen");
+        application = std::make_unique<QGuiApplication>(argc, argv);
+    }
+#endif
+    if (!application)
+        application = std::make_unique<QCoreApplication>(argc, argv);
+    QCoreApplication &app = *application;
     QCoreApplication::setApplicationName(QStringLiteral("fourfold-cli"));
     QCoreApplication::setApplicationVersion(QStringLiteral(FOURFOLD_VERSION));
 

@@ -1,5 +1,6 @@
 #include "core/project/annotation_edits.h"
 
+#include "core/project/study_design.h"
 #include "core/store/annotation_table.h"
 #include "core/store/article_table.h"
 #include "core/store/codebook_table.h"
@@ -85,6 +86,11 @@ Status AddAnnotationEdit::apply(Database &db)
     Annotation row = m_row;
     FOURFOLD_TRY_STATUS(
         validateSpanContent(db, row.article, row.content, &row.quote, &row.codebookVersion));
+    // The phase follows the coder's assignment of the article (issue 7).
+    auto phase = StudyDesign::phaseForNewCoding(db, row.article, row.coder, row.phase);
+    if (!phase)
+        return std::unexpected(phase.error());
+    row.phase = *phase;
     auto id = store::insertAnnotation(db, row);
     if (!id) {
         Error e = id.error();
@@ -235,6 +241,11 @@ Status SetJudgementEdit::apply(Database &db)
     if (!book)
         return std::unexpected(book.error());
     FOURFOLD_TRY_STATUS(book->validateJudgement(m_after.itemKey, m_after.value));
+    // The phase follows the coder's assignment of the article (issue 7).
+    auto phase = StudyDesign::phaseForNewCoding(db, m_after.article, m_after.coder, m_after.phase);
+    if (!phase)
+        return std::unexpected(phase.error());
+    m_after.phase = *phase;
     auto existing =
         store::judgement(db, m_after.article, m_after.coder, m_after.itemKey, m_after.phase);
     if (!existing)

@@ -7,24 +7,42 @@
 namespace fourfold::store {
 
 Result<CodebookVersionId> insertCodebookVersion(
-    Database &db, const Codebook &codebook, const QString &note)
+    Database &db, const Codebook &codebook, const QString &note, CoderId author)
 {
     auto next =
         scalar(db, QStringLiteral("SELECT coalesce(max(number), 0) + 1 FROM codebook_version"));
     if (!next)
         return std::unexpected(next.error());
     auto stmt = db.prepare(QStringLiteral("INSERT INTO codebook_version (uuid, number, created_at, "
-                                          "note, content) VALUES (?1, ?2, ?3, ?4, ?5)"));
+                                          "note, content, created_by) VALUES (?1, ?2, ?3, ?4, ?5, "
+                                          "nullif(?6, 0))"));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, newUuid())
         .bind(2, *next)
         .bind(3, now())
         .bind(4, note)
-        .bind(5, toJsonText(codebook.toJson()));
+        .bind(5, toJsonText(codebook.toJson()))
+        .bind(6, author.value);
     FOURFOLD_TRY_STATUS(stmt->run());
     return CodebookVersionId {db.lastInsertRowId()};
 }
+
+namespace {
+
+// Reads the codebook in the current row of `stmt` (columns id, number, content).
+Result<Codebook> readCodebook(Statement &stmt)
+{
+    auto book = Codebook::fromJson(stmt.columnText(2).toUtf8(),
+        QCoreApplication::translate("CodebookTable", "codebook version %1").arg(stmt.columnInt(1)));
+    if (!book)
+        return std::unexpected(book.error());
+    book->versionId = CodebookVersionId {stmt.columnInt(0)};
+    book->number = int(stmt.columnInt(1));
+    return book;
+}
+
+} // namespace
 
 Result<Codebook> currentCodebook(const Database &db)
 {
@@ -38,14 +56,37 @@ Result<Codebook> currentCodebook(const Database &db)
     if (!*row)
         return fail(ErrorCode::NotFound,
             QCoreApplication::translate("CodebookTable", "The project has no codebook."));
-    auto book = Codebook::fromJson(stmt->columnText(2).toUtf8(),
-        QCoreApplication::translate("CodebookTable", "codebook version %1")
-            .arg(stmt->columnInt(1)));
-    if (!book)
-        return std::unexpected(book.error());
-    book->versionId = CodebookVersionId {stmt->columnInt(0)};
-    book->number = int(stmt->columnInt(1));
-    return book;
+    return readCodebook(*stmt);
+}
+
+Result<Codebook> codebookByNumber(const Database &db, int number)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT id, number, content FROM codebook_version WHERE number = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, number);
+    auto row = stmt->step();
+    if (!row)
+        return std::unexpected(row.error());
+    if (!*row)
+        return fail(ErrorCode::NotFound,
+            QCoreApplication::translate("CodebookTable", "The project has no codebook version %1.")
+                .arg(number));
+    return readCodebook(*stmt);
+}
+
+Result<std::vector<CodebookVersionRow>> codebookVersionRows(const Database &db)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT v.id, v.number, v.created_at, coalesce(c.pseudonym, ''), v.note "
+        "FROM codebook_version v LEFT JOIN coder c ON c.id = v.created_by ORDER BY v.number"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    return collectRows(*stmt, [](const Statement &row) {
+        return CodebookVersionRow {CodebookVersionId {row.columnInt(0)}, int(row.columnInt(1)),
+            row.columnText(2), row.columnText(3), row.columnText(4)};
+    });
 }
 
 } // namespace fourfold::store
