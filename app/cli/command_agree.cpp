@@ -2,6 +2,7 @@
 
 #include "app/cli/cli_output.h"
 #include "core/agreement/agreement_report.h"
+#include "core/agreement/diagnostics.h"
 #include "core/agreement/project_units.h"
 #include "core/project/project.h"
 #include "core/reliability/span_scores.h"
@@ -143,6 +144,99 @@ int runContinuum(const Project &project, const UnitSelection &selection, bool js
     return ExitOk;
 }
 
+QJsonValue optionalNumber(const std::optional<double> &v)
+{
+    return v ? QJsonValue(*v) : QJsonValue(QJsonValue::Null);
+}
+
+QJsonArray leaveOneOutJson(const std::vector<LeaveOneOut> &entries, const QString &nameKey)
+{
+    QJsonArray a;
+    for (const LeaveOneOut &e : entries) {
+        QJsonObject o {{nameKey, e.name},
+            {QStringLiteral("alpha_without"), optionalNumber(e.alpha)},
+            {QStringLiteral("change"), optionalNumber(e.change)},
+            {QStringLiteral("pairable_values_without"), e.pairableValues},
+            {QStringLiteral("units"), e.units}};
+        if (!e.alpha)
+            o.insert(QStringLiteral("reason"), QString::fromStdString(e.reason));
+        a.append(o);
+    }
+    return a;
+}
+
+QString functionLabel(int index)
+{
+    return index < 4 ? functionKey(kFramingFunctions[size_t(index)]) : QStringLiteral("none");
+}
+
+QJsonObject matchingJson(const SpanMatching &m)
+{
+    QJsonArray rows;
+    for (int r = 0; r < 4; ++r) {
+        QJsonObject row;
+        for (int c = 0; c < FunctionConfusion::kSize; ++c)
+            row.insert(functionLabel(c), m.confusion.at(r, c));
+        rows.append(QJsonObject {
+            {QStringLiteral("function"), functionLabel(r)}, {QStringLiteral("other"), row}});
+    }
+    QJsonArray habits;
+    for (const BoundaryHabit &b : m.boundaries)
+        habits.append(
+            QJsonObject {{QStringLiteral("coder"), b.coder}, {QStringLiteral("matches"), b.matches},
+                {QStringLiteral("mean_length_difference"), b.meanLengthDifference},
+                {QStringLiteral("standard_error"), b.standardError},
+                {QStringLiteral("mean_start_difference"), b.meanStartDifference},
+                {QStringLiteral("mean_end_difference"), b.meanEndDifference},
+                {QStringLiteral("share_longer"), b.shareLonger},
+                {QStringLiteral("share_shorter"), b.shareShorter},
+                {QStringLiteral("systematic"), b.systematic}});
+    return QJsonObject {{QStringLiteral("coders"), QJsonArray::fromStringList(m.coders)},
+        {QStringLiteral("pairs_compared"), m.pairsCompared}, {QStringLiteral("confusion"), rows},
+        {QStringLiteral("boundaries"), habits}};
+}
+
+QStringList leaveOneOutText(const std::vector<LeaveOneOut> &entries)
+{
+    QStringList lines;
+    for (const LeaveOneOut &e : entries)
+        lines << QStringLiteral("  %1 %2  %3  units %4")
+                     .arg(e.name, -14)
+                     .arg(e.alpha ? QString::number(*e.alpha, 'f', 3) : tr("undefined"), 9)
+                     .arg(e.change ? QString::asprintf("%+.3f", *e.change) : QStringLiteral("–"), 7)
+                     .arg(e.units);
+    return lines;
+}
+
+QStringList matchingText(const SpanMatching &m)
+{
+    QStringList lines;
+    lines << tr("Function confusion on matched spans (rows: a coder's function; columns: the "
+                "other coder's at the best-overlapping span)");
+    QString header = QStringLiteral("  %1").arg(QString(), -11);
+    for (int c = 0; c < FunctionConfusion::kSize; ++c)
+        header += QStringLiteral("%1").arg(functionLabel(c), 11);
+    lines << header;
+    for (int r = 0; r < 4; ++r) {
+        QString line = QStringLiteral("  %1").arg(functionLabel(r), -11);
+        for (int c = 0; c < FunctionConfusion::kSize; ++c)
+            line += QStringLiteral("%1").arg(m.confusion.at(r, c), 11, 'f', 0);
+        lines << line;
+    }
+    lines << tr("Boundary habits (this coder's span − the other's, code points, same function)");
+    for (const BoundaryHabit &b : m.boundaries)
+        lines << QStringLiteral("  %1 length %2 ± %3  start %4  end %5  longer %6%  %7 matches%8")
+                     .arg(b.coder, -8)
+                     .arg(QString::asprintf("%+.1f", b.meanLengthDifference), 7)
+                     .arg(b.standardError, 0, 'f', 1)
+                     .arg(QString::asprintf("%+.1f", b.meanStartDifference))
+                     .arg(QString::asprintf("%+.1f", b.meanEndDifference))
+                     .arg(b.shareLonger * 100.0, 0, 'f', 0)
+                     .arg(b.matches)
+                     .arg(b.systematic ? tr("  systematic") : QString());
+    return lines;
+}
+
 } // namespace
 
 int runAgree(const QStringList &arguments)
@@ -193,8 +287,12 @@ int runAgree(const QStringList &arguments)
     const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
         QStringLiteral("S"), QStringLiteral("1"));
     const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
+    const QCommandLineOption diagnostics(QStringLiteral("diagnostics"),
+        tr("Also show where reliability is lost: alpha without each coder and without each "
+           "article (the costliest first), and with a project the function confusion on matched "
+           "spans and the coders' boundary habits."));
     parser.addOptions({data, level, order, distance, unit, function, coders, phase, articles, item,
-        attribute, withGold, bootstrap, seed, json});
+        attribute, withGold, bootstrap, seed, json, diagnostics});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
     if (int rc = parseCommandLine(parser, command,
@@ -242,6 +340,8 @@ int runAgree(const QStringList &arguments)
 
     ReliabilityTable table;
     QString scale;
+    std::optional<Project> openProject;
+    UnitSelection selection;
     if (parser.isSet(data)) {
         if (!parser.positionalArguments().isEmpty())
             return usageError(command, tr("give either --data FILE or a project, not both."));
@@ -256,7 +356,6 @@ int runAgree(const QStringList &arguments)
             return usageError(command,
                 tr("with a project, say which units to compare: --unit "
                    "article|paragraph|sentence|token|span|continuum."));
-        UnitSelection selection;
         const auto kind = unitKindFromKey(parser.value(unit));
         if (!kind)
             return usageError(command, tr("unknown unit \"%1\".").arg(parser.value(unit)));
@@ -281,9 +380,11 @@ int runAgree(const QStringList &arguments)
         selection.includeGold = parser.isSet(withGold);
         if (parser.isSet(articles))
             selection.articles = parser.value(articles).split(QLatin1Char(','), Qt::SkipEmptyParts);
-        auto project = Project::open(parser.positionalArguments().first());
-        if (!project)
-            return report(project.error());
+        auto opened = Project::open(parser.positionalArguments().first());
+        if (!opened)
+            return report(opened.error());
+        openProject = std::move(*opened);
+        Project *project = &*openProject;
         // Span attributes and article items take their level and value order from the codebook
         // unless the command line says otherwise.
         if (!parser.isSet(level) && !parser.isSet(order)) {
@@ -329,10 +430,46 @@ int runAgree(const QStringList &arguments)
         return report(encoded.error());
     const AgreementReport result =
         computeAgreement(*encoded, table.coders, scale, agreementOptions);
-    if (parser.isSet(json))
-        printJson(agreementJson(result));
-    else
-        out(agreementText(result));
+    if (!parser.isSet(diagnostics)) {
+        if (parser.isSet(json))
+            printJson(agreementJson(result));
+        else
+            out(agreementText(result));
+        return ExitOk;
+    }
+    auto coderCosts = leaveOneCoderOut(*encoded, table.coders);
+    if (!coderCosts)
+        return report(coderCosts.error());
+    auto articleCosts = leaveOneArticleOut(*encoded, table.units);
+    if (!articleCosts)
+        return report(articleCosts.error());
+    std::optional<SpanMatching> matching;
+    if (openProject) {
+        auto matched = matchSpans(*openProject, selection);
+        if (!matched)
+            return report(matched.error());
+        matching = std::move(*matched);
+    }
+    if (parser.isSet(json)) {
+        QJsonObject o = agreementJson(result);
+        QJsonObject d {{QStringLiteral("leave_one_coder_out"),
+                           leaveOneOutJson(*coderCosts, QStringLiteral("coder"))},
+            {QStringLiteral("leave_one_article_out"),
+                leaveOneOutJson(*articleCosts, QStringLiteral("article"))}};
+        if (matching)
+            d.insert(QStringLiteral("span_matching"), matchingJson(*matching));
+        o.insert(QStringLiteral("diagnostics"), d);
+        printJson(o);
+        return ExitOk;
+    }
+    QStringList lines {agreementText(result)};
+    lines << tr("Alpha without each coder (costliest first; change = without − with all)");
+    lines << leaveOneOutText(*coderCosts);
+    lines << tr("Alpha without each article (costliest first)");
+    lines << leaveOneOutText(*articleCosts);
+    if (matching)
+        lines << matchingText(*matching);
+    out(lines.join(QLatin1Char('\n')));
     return ExitOk;
 }
 

@@ -1,0 +1,433 @@
+#include "core/agreement/diagnostics.h"
+
+#include "core/project/project.h"
+
+#include <QCoreApplication>
+#include <QDateTime>
+#include <QHash>
+#include <QRegularExpression>
+#include <QSet>
+
+#include <algorithm>
+#include <cmath>
+#include <map>
+
+namespace fourfold {
+
+using namespace reliability;
+
+namespace {
+
+QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
+{
+    return QCoreApplication::translate("Diagnostics", text, disambiguation, n);
+}
+
+std::unexpected<Error> cancelled()
+{
+    return fail(ErrorCode::Cancelled, tr("The diagnostics were cancelled."));
+}
+
+bool carryOn(const DiagnosticsProgress &progress, int done, int total)
+{
+    return !progress || progress(done, total);
+}
+
+// Sorts the entries that cost most first: the largest rise of alpha when left out; undefined
+// changes last; ties by name so that the order is stable.
+void sortByCost(std::vector<LeaveOneOut> &entries)
+{
+    std::sort(entries.begin(), entries.end(), [](const LeaveOneOut &a, const LeaveOneOut &b) {
+        if (a.change.has_value() != b.change.has_value())
+            return a.change.has_value();
+        if (a.change && b.change && *a.change != *b.change)
+            return *a.change > *b.change;
+        return a.name < b.name;
+    });
+}
+
+LeaveOneOut entry(
+    const QString &name, const AlphaResult &without, const AlphaResult &all, int units)
+{
+    LeaveOneOut e;
+    e.name = name;
+    e.alpha = without.value;
+    e.reason = without.reason;
+    e.pairableValues = without.pairableValues;
+    e.units = units;
+    if (without.value && all.value)
+        e.change = *without.value - *all.value;
+    return e;
+}
+
+} // namespace
+
+double FunctionConfusion::matched() const
+{
+    double n = 0;
+    for (int r = 0; r < kSize; ++r)
+        for (int c = 0; c < kSize - 1; ++c)
+            n += at(r, c);
+    return n;
+}
+
+double FunctionConfusion::sameFunction() const
+{
+    double n = 0;
+    for (int f = 0; f < kSize - 1; ++f)
+        n += at(f, f);
+    return n;
+}
+
+QString unitArticle(const QString &unitId)
+{
+    static const QRegularExpression suffix(QStringLiteral("#[psta][0-9]+$"));
+    const QRegularExpressionMatch m = suffix.match(unitId);
+    return m.hasMatch() ? unitId.left(m.capturedStart()) : unitId;
+}
+
+Result<std::vector<LeaveOneOut>> leaveOneCoderOut(
+    const EncodedData &encoded, const QStringList &coders, const DiagnosticsProgress &progress)
+{
+    const ReliabilityData &data = encoded.data;
+    if (coders.size() != data.coders || !dataProblem(data).empty())
+        return fail(ErrorCode::InvalidArgument,
+            tr("The coders named do not match the columns of the reliability data."));
+    const AlphaResult all = krippendorffAlpha(data, encoded.metric);
+    std::vector<LeaveOneOut> out;
+    for (int left = 0; left < data.coders; ++left) {
+        if (!carryOn(progress, left, data.coders))
+            return cancelled();
+        ReliabilityData rest;
+        rest.units = data.units;
+        rest.coders = data.coders - 1;
+        rest.values = data.values;
+        rest.cells.reserve(size_t(rest.units) * size_t(rest.coders));
+        int coded = 0;
+        for (int u = 0; u < data.units; ++u) {
+            for (int c = 0; c < data.coders; ++c)
+                if (c != left)
+                    rest.cells.push_back(data.at(u, c));
+            coded += data.at(u, left) != kMissing ? 1 : 0;
+        }
+        out.push_back(entry(coders[left], krippendorffAlpha(rest, encoded.metric), all, coded));
+    }
+    if (!carryOn(progress, data.coders, data.coders))
+        return cancelled();
+    sortByCost(out);
+    return out;
+}
+
+Result<std::vector<LeaveOneOut>> leaveOneArticleOut(
+    const EncodedData &encoded, const QStringList &units, const DiagnosticsProgress &progress)
+{
+    const ReliabilityData &data = encoded.data;
+    if (units.size() != data.units || !dataProblem(data).empty())
+        return fail(ErrorCode::InvalidArgument,
+            tr("The units named do not match the rows of the reliability data."));
+    const AlphaResult all = krippendorffAlpha(data, encoded.metric);
+    // Articles in the order of their first unit.
+    QStringList articles;
+    std::vector<int> articleOf(size_t(data.units));
+    QHash<QString, int> index;
+    for (int u = 0; u < data.units; ++u) {
+        const QString a = unitArticle(units[u]);
+        auto it = index.constFind(a);
+        if (it == index.constEnd()) {
+            it = index.insert(a, int(articles.size()));
+            articles << a;
+        }
+        articleOf[size_t(u)] = *it;
+    }
+    std::vector<LeaveOneOut> out;
+    const int total = int(articles.size());
+    for (int left = 0; left < total; ++left) {
+        if (!carryOn(progress, left, total))
+            return cancelled();
+        ReliabilityData rest;
+        rest.coders = data.coders;
+        rest.values = data.values;
+        int own = 0;
+        for (int u = 0; u < data.units; ++u) {
+            if (articleOf[size_t(u)] == left) {
+                ++own;
+                continue;
+            }
+            for (int c = 0; c < data.coders; ++c)
+                rest.cells.push_back(data.at(u, c));
+            ++rest.units;
+        }
+        out.push_back(entry(articles[left], krippendorffAlpha(rest, encoded.metric), all, own));
+    }
+    if (!carryOn(progress, total, total))
+        return cancelled();
+    sortByCost(out);
+    return out;
+}
+
+namespace {
+
+// The coders a selection covers: as asked, or everyone with an annotation or answer in the
+// selected phase and articles (the rule of unitTable()).
+Result<QStringList> selectedCoders(const Project &project, const UnitSelection &sel)
+{
+    auto coders = project.coders();
+    if (!coders)
+        return std::unexpected(coders.error());
+    auto articles = project.articles();
+    if (!articles)
+        return std::unexpected(articles.error());
+    for (const QString &id : sel.articles)
+        if (std::none_of(articles->begin(), articles->end(),
+                [&](const ArticleSummary &a) { return a.externalId == id; }))
+            return fail(
+                ErrorCode::NotFound, tr("There is no article \"%1\" in the project.").arg(id));
+    if (!sel.coders.isEmpty()) {
+        for (const QString &pseudonym : sel.coders)
+            if (std::none_of(coders->begin(), coders->end(),
+                    [&](const Coder &c) { return c.pseudonym == pseudonym; }))
+                return fail(ErrorCode::NotFound,
+                    tr("There is no coder \"%1\" in the project.").arg(pseudonym));
+        return sel.coders;
+    }
+    auto annotations = project.allAnnotations();
+    if (!annotations)
+        return std::unexpected(annotations.error());
+    auto judgements = project.allJudgements();
+    if (!judgements)
+        return std::unexpected(judgements.error());
+    QSet<qint64> articleIds;
+    for (const ArticleSummary &a : *articles)
+        if (sel.articles.isEmpty() || sel.articles.contains(a.externalId))
+            articleIds.insert(a.id.value);
+    QSet<qint64> active;
+    for (const Annotation &a : *annotations)
+        if ((!sel.phase || *sel.phase == a.phase) && articleIds.contains(a.article.value))
+            active.insert(a.coder.value);
+    for (const Judgement &j : *judgements)
+        if ((!sel.phase || *sel.phase == j.phase) && articleIds.contains(j.article.value))
+            active.insert(j.coder.value);
+    QStringList out;
+    for (const Coder &c : *coders)
+        if (active.contains(c.id.value))
+            out << c.pseudonym;
+    return out;
+}
+
+struct HabitSums {
+    int n = 0;
+    double length = 0, lengthSquares = 0, start = 0, end = 0;
+    int longer = 0, shorter = 0;
+};
+
+// One direction of a pair: each unit of `from` against the unit of `to` that overlaps it most
+// (ties: the earlier one). Units are sorted by begin within a coder.
+void matchDirection(const std::vector<ContinuumUnit> &from, const std::vector<ContinuumUnit> &to,
+    FunctionConfusion &confusion, HabitSums &habit)
+{
+    for (const ContinuumUnit &a : from) {
+        const ContinuumUnit *best = nullptr;
+        std::int64_t bestOverlap = 0;
+        for (const ContinuumUnit &b : to) {
+            if (b.begin >= a.end)
+                break;
+            const std::int64_t overlap = std::min(a.end, b.end) - std::max(a.begin, b.begin);
+            if (overlap > bestOverlap) {
+                bestOverlap = overlap;
+                best = &b;
+            }
+        }
+        const int row = a.category;
+        const int column = best ? best->category : FunctionConfusion::kSize - 1;
+        confusion.counts[size_t(row * FunctionConfusion::kSize + column)] += 1;
+        if (best && best->category == a.category) {
+            const double d = double((a.end - a.begin) - (best->end - best->begin));
+            ++habit.n;
+            habit.length += d;
+            habit.lengthSquares += d * d;
+            habit.start += double(a.begin - best->begin);
+            habit.end += double(a.end - best->end);
+            habit.longer += d > 0 ? 1 : 0;
+            habit.shorter += d < 0 ? 1 : 0;
+        }
+    }
+}
+
+} // namespace
+
+Result<SpanMatching> matchSpans(
+    const Project &project, const UnitSelection &selection, const DiagnosticsProgress &progress)
+{
+    auto coders = selectedCoders(project, selection);
+    if (!coders)
+        return std::unexpected(coders.error());
+    if (coders->size() < 2)
+        return fail(ErrorCode::InvalidArgument,
+            tr("Reliability needs at least two coders; the selection has %n.", nullptr,
+                int(coders->size())));
+    SpanMatching out;
+    out.coders = *coders;
+    std::vector<HabitSums> habits(size_t(coders->size()));
+    const int n = int(coders->size());
+    const int total = n * (n - 1) / 2;
+    int done = 0;
+    for (int a = 0; a < n; ++a)
+        for (int b = a + 1; b < n; ++b) {
+            if (!carryOn(progress, done++, total))
+                return cancelled();
+            UnitSelection pair = selection;
+            pair.unit = UnitKind::Continuum;
+            pair.function.reset();
+            pair.includeGold = false;
+            pair.coders = QStringList {(*coders)[a], (*coders)[b]};
+            auto continuum = continuumData(project, pair);
+            if (!continuum) {
+                // Coders and articles were checked above, so NotFound means the pair coded no
+                // article in common: nothing to compare.
+                if (continuum.error().code == ErrorCode::NotFound)
+                    continue;
+                return std::unexpected(continuum.error());
+            }
+            ++out.pairsCompared;
+            std::vector<ContinuumUnit> first, second;
+            for (const ContinuumUnit &u : continuum->units)
+                (u.coder == 0 ? first : second).push_back(u);
+            auto byBegin = [](const ContinuumUnit &x, const ContinuumUnit &y) {
+                return std::pair(x.begin, x.end) < std::pair(y.begin, y.end);
+            };
+            std::sort(first.begin(), first.end(), byBegin);
+            std::sort(second.begin(), second.end(), byBegin);
+            matchDirection(first, second, out.confusion, habits[size_t(a)]);
+            matchDirection(second, first, out.confusion, habits[size_t(b)]);
+        }
+    if (!carryOn(progress, total, total))
+        return cancelled();
+    for (int c = 0; c < n; ++c) {
+        const HabitSums &h = habits[size_t(c)];
+        if (h.n == 0)
+            continue;
+        BoundaryHabit b;
+        b.coder = (*coders)[c];
+        b.matches = h.n;
+        b.meanLengthDifference = h.length / h.n;
+        b.meanStartDifference = h.start / h.n;
+        b.meanEndDifference = h.end / h.n;
+        b.shareLonger = double(h.longer) / h.n;
+        b.shareShorter = double(h.shorter) / h.n;
+        if (h.n >= 2) {
+            const double variance = std::max(0.0,
+                (h.lengthSquares - h.n * b.meanLengthDifference * b.meanLengthDifference)
+                    / (h.n - 1));
+            b.standardError = std::sqrt(variance / h.n);
+        }
+        b.systematic = h.n >= 5 && std::abs(b.meanLengthDifference) > 2 * b.standardError;
+        out.boundaries.push_back(b);
+    }
+    std::sort(out.boundaries.begin(), out.boundaries.end(),
+        [](const BoundaryHabit &x, const BoundaryHabit &y) {
+            const double ax = std::abs(x.meanLengthDifference);
+            const double ay = std::abs(y.meanLengthDifference);
+            return ax != ay ? ax > ay : x.coder < y.coder;
+        });
+    return out;
+}
+
+Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
+    const UnitSelection &selection, const ReliabilityTable &table, const EncodingOptions &encoding,
+    PeriodKind kind, int batchSize, const DiagnosticsProgress &progress)
+{
+    if (batchSize < 1)
+        return fail(ErrorCode::InvalidArgument, tr("A batch holds at least one article."));
+    auto coders = project.coders();
+    if (!coders)
+        return std::unexpected(coders.error());
+    auto articles = project.articles();
+    if (!articles)
+        return std::unexpected(articles.error());
+    auto annotations = project.allAnnotations();
+    if (!annotations)
+        return std::unexpected(annotations.error());
+    auto judgements = project.allJudgements();
+    if (!judgements)
+        return std::unexpected(judgements.error());
+    QSet<qint64> coderIds;
+    for (const Coder &c : *coders)
+        if (table.coders.contains(c.pseudonym))
+            coderIds.insert(c.id.value);
+    QHash<qint64, QString> externalId;
+    for (const ArticleSummary &a : *articles)
+        externalId.insert(a.id.value, a.externalId);
+
+    // The first coding of each article: (time, row id) so that equal times keep a stable order.
+    std::map<QString, std::pair<QString, qint64>> first;
+    auto note = [&](qint64 article, qint64 coder, const QString &at, qint64 rowId, Phase phase) {
+        if (!coderIds.contains(coder) || (selection.phase && *selection.phase != phase))
+            return;
+        const QString id = externalId.value(article);
+        const std::pair<QString, qint64> key {at, rowId};
+        auto it = first.find(id);
+        if (it == first.end() || key < it->second)
+            first[id] = key;
+    };
+    for (const Annotation &a : *annotations)
+        note(a.article.value, a.coder.value, a.createdAt, a.id.value, a.phase);
+    for (const Judgement &j : *judgements)
+        note(j.article.value, j.coder.value, j.createdAt, j.id.value, j.phase);
+
+    // Articles of the table, in coding order.
+    QSet<QString> inTable;
+    for (const QString &u : table.units)
+        inTable.insert(unitArticle(u));
+    std::vector<std::pair<std::pair<QString, qint64>, QString>> ordered;
+    for (const auto &[id, key] : first)
+        if (inTable.contains(id))
+            ordered.push_back({key, id});
+    std::sort(ordered.begin(), ordered.end());
+
+    std::vector<PeriodAlpha> periods;
+    QHash<QString, int> periodOf;
+    for (size_t i = 0; i < ordered.size(); ++i) {
+        QString label;
+        if (kind == PeriodKind::Week) {
+            const QDateTime at = QDateTime::fromString(ordered[i].first.first, Qt::ISODateWithMs);
+            int year = 0;
+            const int week = at.isValid() ? at.toUTC().date().weekNumber(&year) : 0;
+            label = at.isValid()
+                ? QStringLiteral("%1-W%2").arg(year).arg(week, 2, 10, QLatin1Char('0'))
+                : tr("no date");
+        } else {
+            const size_t from = i - i % size_t(batchSize);
+            const size_t to = std::min(ordered.size(), from + size_t(batchSize));
+            label = from + 1 == to ? QString::number(from + 1)
+                                   : QStringLiteral("%1–%2").arg(from + 1).arg(to);
+        }
+        if (periods.empty() || periods.back().label != label) {
+            periods.push_back(PeriodAlpha {label, {}, {}});
+        }
+        periods.back().articles << ordered[i].second;
+        periodOf.insert(ordered[i].second, int(periods.size()) - 1);
+    }
+    for (size_t p = 0; p < periods.size(); ++p) {
+        if (!carryOn(progress, int(p), int(periods.size())))
+            return cancelled();
+        ReliabilityTable part;
+        part.coders = table.coders;
+        part.source = table.source;
+        for (qsizetype u = 0; u < table.units.size(); ++u)
+            if (periodOf.value(unitArticle(table.units[u]), -1) == int(p)) {
+                part.units << table.units[u];
+                part.cells.push_back(table.cells[size_t(u)]);
+                if (size_t(u) < table.lines.size())
+                    part.lines.push_back(table.lines[size_t(u)]);
+            }
+        auto encoded = encodeTable(part, encoding);
+        if (!encoded)
+            return std::unexpected(encoded.error());
+        periods[p].alpha = krippendorffAlpha(encoded->data, encoded->metric);
+    }
+    if (!carryOn(progress, int(periods.size()), int(periods.size())))
+        return cancelled();
+    return periods;
+}
+
+} // namespace fourfold
