@@ -2,6 +2,10 @@
 // (study.json, articles.jsonl, codings.jsonl, gold.jsonl), so that no binary project is committed.
 
 #include "app/cli/cli_output.h"
+#include "core/extract/cue_baseline.h"
+#include "core/extract/extractor_runs.h"
+#include "core/extract/position_baseline.h"
+#include "core/project/article_status_edit.h"
 #include "core/project/coding_import.h"
 #include "core/project/project.h"
 
@@ -94,7 +98,29 @@ Status build(const QString &sourceDir, const QString &target)
         *project, dir.filePath(QStringLiteral("gold.jsonl")), Phase::Reliability);
     if (!gold)
         return std::unexpected(gold.error());
-    out(tr("Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans.")
+    // The demo coders have finished their reliability articles (so progress shows agreement).
+    auto assignments = project->assignments();
+    if (!assignments)
+        return std::unexpected(assignments.error());
+    for (const Assignment &a : *assignments) {
+        SetArticleStatusEdit done(a.article, a.coder, QStringLiteral("done"));
+        FOURFOLD_TRY_STATUS(project->apply(done));
+    }
+
+    // Both built-in baselines, run with their default parameters, for the extractor window.
+    auto position = PositionBaseline::create();
+    if (!position)
+        return std::unexpected(position.error());
+    if (auto run = ExtractorRuns::create(*project, *position, QStringLiteral("position")); !run)
+        return std::unexpected(run.error());
+    auto cues = CueBaseline::create();
+    if (!cues)
+        return std::unexpected(cues.error());
+    if (auto run = ExtractorRuns::create(*project, *cues, QStringLiteral("cues")); !run)
+        return std::unexpected(run.error());
+
+    out(tr("Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans, "
+           "2 baseline runs.")
             .arg(target)
             .arg(imported->added.size())
             .arg(study->value(QLatin1String("coders")).toArray().size())
