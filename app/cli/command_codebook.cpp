@@ -106,9 +106,9 @@ int runCodebook(const QStringList &arguments)
             if (!lead)
                 return report(lead.error());
             if (!*lead)
-                return report(fail(ErrorCode::NotFound,
-                    tr("There is no coder \"%1\" in the project.").arg(parser.value(by)))
-                                  .error());
+                return report(Error {ErrorCode::NotFound,
+                    tr("There is no coder \"%1\" in the project.").arg(parser.value(by)), {}, {},
+                    0, 0});
             author = (*lead)->id;
         }
         auto before = project->codebook();

@@ -1,11 +1,138 @@
-// PLACEHOLDER: replaced by the work that owns this subcommand.
+// report: the reliability report of a project as a self-contained HTML file and/or a PDF.
+
 #include "app/cli/cli_output.h"
+
+#include <QCoreApplication>
+
+#ifdef FOURFOLD_HAVE_REPORT
+#include "app/report/report_writer.h"
+#include "core/project/project.h"
+
+#include <QFileInfo>
+#endif
 
 namespace fourfold::cli {
 
-int runReport(const QStringList &)
+namespace {
+
+QString tr(const char *text)
 {
-    return usageError(QStringLiteral("report"), QStringLiteral("not built yet."));
+    return QCoreApplication::translate("cli", text);
 }
+
+} // namespace
+
+#ifdef FOURFOLD_HAVE_REPORT
+
+int runReport(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("report");
+    QCommandLineParser parser;
+    const QCommandLineOption outFile(QStringLiteral("out"),
+        tr("The report file: FILE.html (self-contained) or FILE.pdf; give --out twice for both."),
+        QStringLiteral("FILE"));
+    const QCommandLineOption unit(QStringLiteral("unit"),
+        tr("The unit of the four function variables: paragraph, sentence (default) or token."),
+        QStringLiteral("UNIT"), QStringLiteral("sentence"));
+    const QCommandLineOption phase(QStringLiteral("phase"),
+        tr("Only this phase (training, pilot, reliability, production); default all."),
+        QStringLiteral("PHASE"));
+    const QCommandLineOption coders(QStringLiteral("coders"),
+        tr("The coders' pseudonyms (default: everyone who coded)."), QStringLiteral("A,B,..."));
+    const QCommandLineOption bootstrap(QStringLiteral("bootstrap"),
+        tr("Bootstrap replicates for alpha's 95% intervals (default 1000; 0 = none)."),
+        QStringLiteral("N"), QStringLiteral("1000"));
+    const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
+        QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption title(
+        QStringLiteral("title"), tr("The report's title."), QStringLiteral("TEXT"));
+    const QCommandLineOption json(
+        QStringLiteral("json"), tr("Also print the report's figures as JSON on stdout."));
+    parser.addOptions({outFile, unit, phase, coders, bootstrap, seed, title, json});
+    parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
+    if (int rc = parseCommandLine(parser, command,
+            tr("Write the reliability report: method text with the items of Lombard, "
+               "Snyder-Duch & Bracken (2002), Krippendorff's alpha per variable with bootstrap "
+               "intervals, coders and pairs, charts. Every figure equals what \"fourfold-cli "
+               "agree\" prints for the same selection."),
+            arguments);
+        rc >= 0)
+        return rc;
+    if (parser.positionalArguments().size() != 1)
+        return usageError(command, tr("expected one project file."));
+    const QStringList outputs = parser.values(outFile);
+    if (outputs.isEmpty())
+        return usageError(command, tr("say where to write the report: --out FILE.html|FILE.pdf."));
+    for (const QString &o : outputs) {
+        const QString suffix = QFileInfo(o).suffix().toLower();
+        if (suffix != QLatin1String("html") && suffix != QLatin1String("htm")
+            && suffix != QLatin1String("pdf"))
+            return usageError(
+                command, tr("the report file \"%1\" must end in .html or .pdf.").arg(o));
+    }
+
+    ReportOptions options;
+    const auto unitKind = unitKindFromKey(parser.value(unit));
+    if (!unitKind
+        || (*unitKind != UnitKind::Paragraph && *unitKind != UnitKind::Sentence
+            && *unitKind != UnitKind::Token))
+        return usageError(command,
+            tr("unknown unit \"%1\" (expected paragraph, sentence or token).")
+                .arg(parser.value(unit)));
+    options.unit = *unitKind;
+    if (parser.isSet(phase)) {
+        options.phase = phaseFromKey(parser.value(phase));
+        if (!options.phase)
+            return usageError(command, tr("unknown phase \"%1\".").arg(parser.value(phase)));
+    }
+    if (parser.isSet(coders))
+        options.coders = parser.value(coders).split(QLatin1Char(','), Qt::SkipEmptyParts);
+    bool ok = false;
+    options.bootstrapReplicates = parser.value(bootstrap).toInt(&ok);
+    if (!ok || options.bootstrapReplicates < 0 || options.bootstrapReplicates > 1000000)
+        return usageError(
+            command, tr("--bootstrap expects a number of replicates from 0 to 1000000."));
+    options.seed = parser.value(seed).toULongLong(&ok);
+    if (!ok)
+        return usageError(command, tr("--seed expects a non-negative whole number."));
+    options.title = parser.value(title);
+
+    auto project = Project::open(parser.positionalArguments().first());
+    if (!project)
+        return report(project.error());
+    auto data = gatherReportData(*project, options);
+    if (!data)
+        return report(data.error());
+    for (const QString &o : outputs) {
+        const bool pdf =
+            QFileInfo(o).suffix().compare(QLatin1String("pdf"), Qt::CaseInsensitive) == 0;
+        auto written = pdf ? writeReportPdf(*data, o) : writeReportHtml(*data, o);
+        if (!written)
+            return report(written.error());
+        if (!parser.isSet(json))
+            out(tr("Wrote %1").arg(o));
+    }
+    if (parser.isSet(json))
+        printJson(data->toJson());
+    return ExitOk;
+}
+
+#else
+
+int runReport(const QStringList &arguments)
+{
+    QCommandLineParser parser;
+    if (int rc = parseCommandLine(parser, QStringLiteral("report"),
+            tr("Write the reliability report (needs a build with FOURFOLD_BUILD_DESKTOP=ON)."),
+            arguments);
+        rc >= 0)
+        return rc;
+    return report(Error {ErrorCode::Unsupported,
+        tr("This fourfold-cli was built without the graphical libraries, so it cannot write "
+           "reports; rebuild with FOURFOLD_BUILD_DESKTOP=ON."),
+        {}, {}, 0, 0});
+}
+
+#endif
 
 } // namespace fourfold::cli

@@ -1,0 +1,460 @@
+#include "app/report/report_data.h"
+
+#include "core/agreement/agreement_report.h"
+#include "core/agreement/diagnostics.h"
+#include "core/agreement/value_encoding.h"
+#include "core/project/project.h"
+#include "core/project/study_design.h"
+#include "core/reliability/unitizing_alpha.h"
+
+#include <QCoreApplication>
+#include <QDateTime>
+#include <QHash>
+#include <QJsonArray>
+#include <QSet>
+
+#include <algorithm>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("ReportData", text);
+}
+
+bool inPhase(const std::optional<Phase> &phase, Phase p)
+{
+    return !phase || *phase == p;
+}
+
+// The agree options shared by every analysis of the report.
+QStringList commonArguments(const ReportOptions &options, bool bootstrap)
+{
+    QStringList args;
+    if (options.phase)
+        args << QStringLiteral("--phase") << phaseKey(*options.phase);
+    if (!options.coders.isEmpty())
+        args << QStringLiteral("--coders") << options.coders.join(QLatin1Char(','));
+    if (bootstrap && options.bootstrapReplicates > 0)
+        args << QStringLiteral("--bootstrap") << QString::number(options.bootstrapReplicates)
+             << QStringLiteral("--seed") << QString::number(options.seed);
+    return args;
+}
+
+// What `fourfold-cli agree` computes for a project selection (app/cli/command_agree.cpp): the
+// level comes from the codebook for span attributes and article items (only an ordinal level
+// changes the encoding), and units carrying all four functions are sets compared with MASI.
+QJsonValue optionalNumber(const std::optional<double> &v)
+{
+    return v ? QJsonValue(*v) : QJsonValue(QJsonValue::Null);
+}
+
+// agree --diagnostics (app/cli/command_agree.cpp): alpha without each coder and each article.
+QJsonArray leaveOneOutJson(const std::vector<LeaveOneOut> &entries, const QString &nameKey)
+{
+    QJsonArray a;
+    for (const LeaveOneOut &e : entries) {
+        QJsonObject o {{nameKey, e.name},
+            {QStringLiteral("alpha_without"), optionalNumber(e.alpha)},
+            {QStringLiteral("change"), optionalNumber(e.change)},
+            {QStringLiteral("pairable_values_without"), e.pairableValues},
+            {QStringLiteral("units"), e.units}};
+        if (!e.alpha)
+            o.insert(QStringLiteral("reason"), QString::fromStdString(e.reason));
+        a.append(o);
+    }
+    return a;
+}
+
+// The function confusion of agree --diagnostics (its boundary habits are left out).
+QJsonObject confusionJson(const SpanMatching &m)
+{
+    auto label = [](int index) {
+        return index < 4 ? functionKey(kFramingFunctions[size_t(index)]) : QStringLiteral("none");
+    };
+    QJsonArray rows;
+    for (int r = 0; r < 4; ++r) {
+        QJsonObject row;
+        for (int c = 0; c < FunctionConfusion::kSize; ++c)
+            row.insert(label(c), m.confusion.at(r, c));
+        rows.append(
+            QJsonObject {{QStringLiteral("function"), label(r)}, {QStringLiteral("other"), row}});
+    }
+    return QJsonObject {{QStringLiteral("coders"), QJsonArray::fromStringList(m.coders)},
+        {QStringLiteral("pairs_compared"), m.pairsCompared}, {QStringLiteral("confusion"), rows}};
+}
+
+Result<QJsonObject> agreeJson(const Project &project, const Codebook &book,
+    const UnitSelection &selection, const ReportOptions &options, bool diagnostics = false)
+{
+    EncodingOptions encoding;
+    std::optional<MeasurementLevel> bookLevel;
+    QStringList bookValues;
+    if (selection.unit == UnitKind::Span && selection.function) {
+        for (const AttributeSpec &a : book.definition(*selection.function).attributes)
+            if (a.key == selection.attribute) {
+                bookLevel = a.level;
+                bookValues = a.values;
+            }
+    } else if (selection.unit == UnitKind::Article) {
+        if (const ArticleItem *i = book.item(selection.item)) {
+            bookLevel = i->level;
+            bookValues = i->values;
+        }
+    }
+    if (bookLevel == MeasurementLevel::Ordinal) {
+        encoding.level = reliability::Level::Ordinal;
+        encoding.order = bookValues;
+    }
+    auto table = unitTable(project, selection);
+    if (!table)
+        return std::unexpected(table.error());
+    if (selection.unit != UnitKind::Article && selection.unit != UnitKind::Span
+        && !selection.function)
+        encoding.distance = reliability::SetDistance::Masi;
+    const QString scale =
+        encoding.distance ? setDistanceKey(*encoding.distance) : levelKey(encoding.level);
+    auto encoded = encodeTable(*table, encoding);
+    if (!encoded)
+        return std::unexpected(encoded.error());
+    AgreementOptions agreementOptions;
+    agreementOptions.bootstrapReplicates = options.bootstrapReplicates;
+    agreementOptions.seed = options.seed;
+    QJsonObject json =
+        agreementJson(computeAgreement(*encoded, table->coders, scale, agreementOptions));
+    if (!diagnostics)
+        return json;
+    auto coderCosts = leaveOneCoderOut(*encoded, table->coders);
+    if (!coderCosts)
+        return std::unexpected(coderCosts.error());
+    auto articleCosts = leaveOneArticleOut(*encoded, table->units);
+    if (!articleCosts)
+        return std::unexpected(articleCosts.error());
+    auto matching = matchSpans(project, selection);
+    if (!matching)
+        return std::unexpected(matching.error());
+    json.insert(QStringLiteral("diagnostics"),
+        QJsonObject {{QStringLiteral("leave_one_coder_out"),
+                         leaveOneOutJson(*coderCosts, QStringLiteral("coder"))},
+            {QStringLiteral("leave_one_article_out"),
+                leaveOneOutJson(*articleCosts, QStringLiteral("article"))},
+            {QStringLiteral("span_matching"), confusionJson(*matching)}});
+    return json;
+}
+
+// "The 9 articles were drawn as a simple random sample (seed 7) from 40 articles on 2026-…".
+QString drawText(const Draw &draw)
+{
+    const QString how = draw.method == QLatin1String("stratified") && draw.stratify
+        ? tr("a sample stratified by %1").arg(stratumKey(*draw.stratify))
+        : tr("a simple random sample");
+    return tr("The %1 articles of the %2 phase were drawn as %3 (seed %4) from a frame of %5 "
+              "articles with no earlier assignment, on %6.")
+        .arg(QString::number(draw.articles.size()), phaseKey(draw.phase), how,
+            QString::number(draw.seed), QString::number(draw.frameArticles), draw.drawnAt.left(10));
+}
+
+QJsonObject unitizingJson(const reliability::UnitizingCategoryResult &r)
+{
+    QJsonObject o {
+        {QStringLiteral("value"), r.value ? QJsonValue(*r.value) : QJsonValue(QJsonValue::Null)},
+        {QStringLiteral("observed_disagreement"), r.observedDisagreement},
+        {QStringLiteral("expected_disagreement"), r.expectedDisagreement},
+        {QStringLiteral("verdict"), alphaVerdict(r.value)}};
+    if (!r.value)
+        o.insert(QStringLiteral("reason"), QString::fromStdString(r.reason));
+    return o;
+}
+
+// agree --unit continuum --json without its span_agreement part.
+Result<QJsonObject> continuumJson(const Project &project, const UnitSelection &selection)
+{
+    auto continuum = continuumData(project, selection);
+    if (!continuum)
+        return std::unexpected(continuum.error());
+    const reliability::UnitizingResult result = reliability::unitizingAlpha(0, continuum->length,
+        int(continuum->coders.size()), continuum->categories, continuum->units);
+    if (!result.inputError.empty())
+        return fail(ErrorCode::Internal, tr("The continuum could not be compared."),
+            QString::fromStdString(result.inputError));
+    QJsonObject perFunction;
+    for (FramingFunction f : kFramingFunctions)
+        if (size_t(f) < result.perCategory.size())
+            perFunction.insert(functionKey(f), unitizingJson(result.perCategory[size_t(f)]));
+    return QJsonObject {{QStringLiteral("unit"), QStringLiteral("continuum")},
+        {QStringLiteral("coders"), QJsonArray::fromStringList(continuum->coders)},
+        {QStringLiteral("articles"), QJsonArray::fromStringList(continuum->articles)},
+        {QStringLiteral("length"), qint64(continuum->length)},
+        {QStringLiteral("unitizing_alpha"),
+            QJsonObject {{QStringLiteral("per_function"), perFunction},
+                {QStringLiteral("overall"), unitizingJson(result.overall)}}}};
+}
+
+QString functionLabel(const Codebook &book, FramingFunction f)
+{
+    const QString label = book.definition(f).label;
+    return label.isEmpty() ? functionKey(f) : label;
+}
+
+} // namespace
+
+const ReportAnalysis *ReportData::analysis(const QString &id) const
+{
+    for (const ReportAnalysis &a : analyses)
+        if (a.id == id)
+            return &a;
+    return nullptr;
+}
+
+QJsonObject ReportData::toJson() const
+{
+    QJsonArray analysisArray;
+    for (const ReportAnalysis &a : analyses) {
+        QJsonObject o {{QStringLiteral("id"), a.id}, {QStringLiteral("label"), a.label},
+            {QStringLiteral("kind"), a.kind},
+            {QStringLiteral("agree_arguments"), QJsonArray::fromStringList(a.agreeArguments)}};
+        if (a.error.isEmpty())
+            o.insert(QStringLiteral("result"), a.result);
+        else
+            o.insert(QStringLiteral("error"), a.error);
+        analysisArray.append(o);
+    }
+    QJsonArray coderArray;
+    for (const ReportCoder &c : coders) {
+        QJsonObject perFunction;
+        for (FramingFunction f : kFramingFunctions)
+            perFunction.insert(functionKey(f), c.perFunction[size_t(f)]);
+        coderArray.append(QJsonObject {{QStringLiteral("pseudonym"), c.pseudonym},
+            {QStringLiteral("role"), c.role}, {QStringLiteral("articles"), c.articles},
+            {QStringLiteral("shared_articles"), c.reliabilityArticles},
+            {QStringLiteral("spans"), c.spans}, {QStringLiteral("spans_per_function"), perFunction},
+            {QStringLiteral("answers"), c.answers}});
+    }
+    QJsonObject selection {{QStringLiteral("unit"), unitKindKey(options.unit)},
+        {QStringLiteral("phase"),
+            options.phase ? QJsonValue(phaseKey(*options.phase)) : QJsonValue(QJsonValue::Null)},
+        {QStringLiteral("coders"), QJsonArray::fromStringList(options.coders)},
+        {QStringLiteral("bootstrap"), options.bootstrapReplicates},
+        {QStringLiteral("seed"), QString::number(options.seed)}};
+    return QJsonObject {{QStringLiteral("format"), QStringLiteral("fourfold-reliability-report/1")},
+        {QStringLiteral("title"), title}, {QStringLiteral("project"), projectName},
+        {QStringLiteral("generated_at"), generatedAt}, {QStringLiteral("program"), program},
+        {QStringLiteral("selection"), selection}, {QStringLiteral("analyses"), analysisArray},
+        {QStringLiteral("coders"), coderArray},
+        {QStringLiteral("sample"),
+            QJsonObject {{QStringLiteral("project_articles"), projectArticles},
+                {QStringLiteral("coded_articles"), codedArticles},
+                {QStringLiteral("shared_articles"), sharedArticles},
+                {QStringLiteral("all_coder_articles"), allCoderArticles},
+                {QStringLiteral("draw"),
+                    sampleDraw.isEmpty() ? QJsonValue(QJsonValue::Null) : QJsonValue(sampleDraw)},
+                {QStringLiteral("draw_record"),
+                    drawRecord.isEmpty() ? QJsonValue(QJsonValue::Null) : QJsonValue(drawRecord)},
+                {QStringLiteral("training_articles"), trainingArticles},
+                {QStringLiteral("pilot_articles"), pilotArticles}}},
+        {QStringLiteral("gold"),
+            QJsonObject {{QStringLiteral("spans"), goldSpans},
+                {QStringLiteral("articles"), goldArticles},
+                {QStringLiteral("with_rationale"), goldWithRationale},
+                {QStringLiteral("decided_by"), QJsonArray::fromStringList(goldDeciders)}}},
+        {QStringLiteral("codebook"),
+            QJsonObject {{QStringLiteral("version"), codebookNumber},
+                {QStringLiteral("name"), codebookName}, {QStringLiteral("codings"), codingsTotal},
+                {QStringLiteral("codings_other_version"), codingsOtherVersion}}}};
+}
+
+Result<ReportData> gatherReportData(const Project &project, const ReportOptions &options)
+{
+    if (options.unit != UnitKind::Paragraph && options.unit != UnitKind::Sentence
+        && options.unit != UnitKind::Token)
+        return fail(ErrorCode::InvalidArgument,
+            tr("The report's unit must be paragraph, sentence or token."));
+    ReportData d;
+    d.options = options;
+    d.projectName = project.settings().name;
+    d.title = options.title.isEmpty()
+        ? (d.projectName.isEmpty() ? tr("Reliability report")
+                                   : tr("Reliability report: %1").arg(d.projectName))
+        : options.title;
+    d.generatedAt = QDateTime::currentDateTimeUtc().toString(Qt::ISODate);
+    d.program = QStringLiteral("Fourfold %1").arg(QCoreApplication::applicationVersion());
+
+    auto book = project.codebook();
+    if (!book)
+        return std::unexpected(book.error());
+    d.codebookNumber = book->number;
+    d.codebookName = book->name;
+
+    UnitSelection base;
+    base.phase = options.phase;
+    base.coders = options.coders;
+    const QStringList common = commonArguments(options, true);
+
+    // The four functions, one binary variable each, then all four as one set-valued variable.
+    for (FramingFunction f : kFramingFunctions) {
+        UnitSelection s = base;
+        s.unit = options.unit;
+        s.function = f;
+        auto json = agreeJson(project, *book, s, options, true);
+        if (!json)
+            return std::unexpected(json.error());
+        d.analyses.push_back({QStringLiteral("function-%1").arg(functionKey(f)),
+            functionLabel(*book, f), functionLabel(*book, f), QStringLiteral("function"),
+            QStringList {QStringLiteral("--unit"), unitKindKey(options.unit),
+                QStringLiteral("--function"), functionKey(f), QStringLiteral("--diagnostics")}
+                + common,
+            *json, {}});
+    }
+    {
+        UnitSelection s = base;
+        s.unit = options.unit;
+        auto json = agreeJson(project, *book, s, options);
+        if (!json)
+            return std::unexpected(json.error());
+        d.analyses.push_back({QStringLiteral("functions"), tr("All four functions (MASI)"),
+            tr("All four (MASI)"), QStringLiteral("functions"),
+            QStringList {QStringLiteral("--unit"), unitKindKey(options.unit)} + common, *json, {}});
+    }
+    // Article-level items and the spans' choice attributes: their own errors do not stop the
+    // report (an attribute nobody filled in has no units).
+    for (const ArticleItem &item : book->items) {
+        UnitSelection s = base;
+        s.unit = UnitKind::Article;
+        s.item = item.key;
+        auto json = agreeJson(project, *book, s, options);
+        d.analyses.push_back({QStringLiteral("item-%1").arg(item.key),
+            item.question.isEmpty() ? item.key : item.question,
+            QString(item.key).replace(QLatin1Char('_'), QLatin1Char(' ')), QStringLiteral("item"),
+            QStringList {QStringLiteral("--unit"), QStringLiteral("article"),
+                QStringLiteral("--item"), item.key}
+                + common,
+            json ? *json : QJsonObject {}, json ? QString() : json.error().message});
+    }
+    for (FramingFunction f : kFramingFunctions)
+        for (const AttributeSpec &a : book->definition(f).attributes) {
+            if (a.type != AttributeSpec::Type::Choice)
+                continue;
+            UnitSelection s = base;
+            s.unit = UnitKind::Span;
+            s.function = f;
+            s.attribute = a.key;
+            auto json = agreeJson(project, *book, s, options);
+            d.analyses.push_back({QStringLiteral("attribute-%1-%2").arg(functionKey(f), a.key),
+                QStringLiteral("%1: %2").arg(
+                    functionLabel(*book, f), a.label.isEmpty() ? a.key : a.label),
+                QStringLiteral("%1: %2").arg(functionKey(f), a.key), QStringLiteral("attribute"),
+                QStringList {QStringLiteral("--unit"), QStringLiteral("span"),
+                    QStringLiteral("--function"), functionKey(f), QStringLiteral("--attribute"),
+                    a.key}
+                    + common,
+                json ? *json : QJsonObject {}, json ? QString() : json.error().message});
+        }
+    {
+        UnitSelection s = base;
+        s.unit = UnitKind::Continuum;
+        auto json = continuumJson(project, s);
+        d.analyses.push_back({QStringLiteral("continuum"), tr("Spans on the continuum"),
+            tr("continuum"), QStringLiteral("continuum"),
+            QStringList {QStringLiteral("--unit"), QStringLiteral("continuum")}
+                + commonArguments(options, false),
+            json ? *json : QJsonObject {}, json ? QString() : json.error().message});
+    }
+
+    // Who coded how much: the same rule as the unitizers (assigned in the phase, or any span or
+    // answer), restricted to the coders the analyses used.
+    QSet<QString> selected;
+    for (const QJsonValue &v : d.analyses.front().result.value(QStringLiteral("coders")).toArray())
+        selected.insert(v.toString());
+    auto coders = project.coders();
+    auto articles = project.articles();
+    auto annotations = project.allAnnotations();
+    auto judgements = project.allJudgements();
+    auto assignments = project.assignments();
+    auto gold = project.goldAnnotations();
+    for (const Error *e : {coders ? nullptr : &coders.error(),
+             articles ? nullptr : &articles.error(), annotations ? nullptr : &annotations.error(),
+             judgements ? nullptr : &judgements.error(),
+             assignments ? nullptr : &assignments.error(), gold ? nullptr : &gold.error()})
+        if (e)
+            return std::unexpected(*e);
+    d.projectArticles = int(articles->size());
+    QHash<qint64, int> column; // coder id → index into d.coders
+    QHash<qint64, QString> pseudonyms;
+    for (const Coder &c : *coders) {
+        pseudonyms.insert(c.id.value, c.pseudonym);
+        if (!selected.contains(c.pseudonym))
+            continue;
+        column.insert(c.id.value, int(d.coders.size()));
+        d.coders.push_back({c.pseudonym, coderRoleKey(c.role), 0, 0, 0, {}, 0});
+    }
+    QHash<qint64, QSet<qint64>> codedBy; // article → coders
+    QSet<qint64> trainingArticles, pilotArticles;
+    for (const Assignment &a : *assignments) {
+        if (a.phase == Phase::Training)
+            trainingArticles.insert(a.article.value);
+        if (a.phase == Phase::Pilot)
+            pilotArticles.insert(a.article.value);
+        if (inPhase(options.phase, a.phase) && column.contains(a.coder.value))
+            codedBy[a.article.value].insert(a.coder.value);
+    }
+    d.trainingArticles = int(trainingArticles.size());
+    d.pilotArticles = int(pilotArticles.size());
+    for (const Annotation &a : *annotations) {
+        if (!inPhase(options.phase, a.phase) || !column.contains(a.coder.value))
+            continue;
+        codedBy[a.article.value].insert(a.coder.value);
+        ReportCoder &c = d.coders[size_t(column.value(a.coder.value))];
+        ++c.spans;
+        ++c.perFunction[size_t(a.content.function)];
+        ++d.codingsTotal;
+        if (a.codebookVersion != book->versionId)
+            ++d.codingsOtherVersion;
+    }
+    for (const Judgement &j : *judgements) {
+        if (!inPhase(options.phase, j.phase) || !column.contains(j.coder.value))
+            continue;
+        codedBy[j.article.value].insert(j.coder.value);
+        ++d.coders[size_t(column.value(j.coder.value))].answers;
+        ++d.codingsTotal;
+        if (j.codebookVersion != book->versionId)
+            ++d.codingsOtherVersion;
+    }
+    for (auto it = codedBy.cbegin(); it != codedBy.cend(); ++it) {
+        ++d.codedArticles;
+        const bool shared = it.value().size() >= 2;
+        d.sharedArticles += shared ? 1 : 0;
+        d.allCoderArticles += it.value().size() == qsizetype(d.coders.size()) ? 1 : 0;
+        for (qint64 coder : it.value()) {
+            ReportCoder &c = d.coders[size_t(column.value(coder))];
+            ++c.articles;
+            c.reliabilityArticles += shared ? 1 : 0;
+        }
+    }
+    QSet<qint64> goldArticles;
+    QSet<QString> deciders;
+    for (const GoldAnnotation &g : *gold) {
+        if (!codedBy.contains(g.article.value))
+            continue;
+        ++d.goldSpans;
+        goldArticles.insert(g.article.value);
+        d.goldWithRationale += g.rationale.trimmed().isEmpty() ? 0 : 1;
+        deciders.insert(pseudonyms.value(g.decidedBy.value));
+    }
+    d.goldArticles = int(goldArticles.size());
+    if (!options.phase || *options.phase == Phase::Reliability) {
+        auto draw = StudyDesign::recordedDraw(project, Phase::Reliability);
+        if (!draw)
+            return std::unexpected(draw.error());
+        if (*draw) {
+            d.sampleDraw = drawText(**draw);
+            d.drawRecord = StudyDesign::drawJson(**draw);
+        }
+    }
+    d.goldDeciders = QStringList(deciders.begin(), deciders.end());
+    d.goldDeciders.sort();
+    return d;
+}
+
+} // namespace fourfold

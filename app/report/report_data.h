@@ -1,0 +1,94 @@
+#pragma once
+// The figures of a reliability report, gathered once from a project: every reliability figure
+// is the JSON that `fourfold-cli agree --json` prints for the same selection, kept together with
+// the agree arguments that reproduce it, so the report and the CLI can never disagree.
+
+#include "core/agreement/project_units.h"
+#include "core/model/annotation.h"
+#include "core/model/error.h"
+
+#include <QJsonObject>
+#include <QString>
+#include <QStringList>
+
+#include <array>
+#include <cstdint>
+#include <optional>
+#include <vector>
+
+namespace fourfold {
+
+class Project;
+
+struct ReportOptions {
+    // The unit of the per-function variables: paragraph, sentence or token.
+    UnitKind unit = UnitKind::Sentence;
+    std::optional<Phase> phase; // none = every phase
+    QStringList coders; // pseudonyms; empty = everyone who coded in the selection
+    int bootstrapReplicates = 1000; // 0 = no confidence intervals
+    std::uint64_t seed = 1;
+    QString title; // empty = "Reliability report: <project name>"
+};
+
+// One call of the agreement engine: its id in the report (e.g. "function-problem"), what it
+// measures, the agree arguments after the project file, and agree's JSON (or why it failed).
+struct ReportAnalysis {
+    QString id;
+    QString label; // e.g. "Problem definition"
+    QString shortLabel; // for charts, e.g. "dominant function", "evaluation: polarity"
+    QString kind; // "function", "functions", "item", "attribute", "continuum"
+    QStringList agreeArguments;
+    QJsonObject result; // empty when `error` is set
+    QString error;
+};
+
+// How much one coder coded in the selection (pseudonym only: names are personal data).
+struct ReportCoder {
+    QString pseudonym;
+    QString role; // "coder", "lead"
+    int articles = 0; // articles coded (assigned, or with a span or an answer)
+    int reliabilityArticles = 0; // of those, articles also coded by another selected coder
+    int spans = 0;
+    std::array<int, 4> perFunction {}; // spans per FramingFunction
+    int answers = 0; // answers to article-level items
+};
+
+struct ReportData {
+    ReportOptions options;
+    QString title;
+    QString projectName;
+    QString generatedAt; // ISO 8601 UTC
+    QString program; // "Fourfold <version>"
+    std::vector<ReportAnalysis> analyses;
+    std::vector<ReportCoder> coders;
+    int projectArticles = 0; // every article in the project
+    int codedArticles = 0; // articles coded by at least one selected coder
+    int sharedArticles = 0; // articles coded by two or more selected coders
+    int allCoderArticles = 0; // articles coded by every selected coder
+    QString sampleDraw; // how the reliability sample was drawn, if the project records it
+    QJsonObject drawRecord; // the recorded draw (StudyDesign::drawJson), or empty
+    // Gold standard (adjudication) on the selected articles.
+    int goldSpans = 0;
+    int goldArticles = 0;
+    int goldWithRationale = 0;
+    QStringList goldDeciders; // pseudonyms
+    // Codebook: the current version and how many selected codings used another one.
+    int codebookNumber = 0;
+    QString codebookName;
+    int codingsTotal = 0;
+    int codingsOtherVersion = 0;
+    int trainingArticles = 0; // articles with training-phase assignments (any coder)
+    int pilotArticles = 0;
+
+    // The analysis with `id`, or nullptr.
+    const ReportAnalysis *analysis(const QString &id) const;
+    // Everything above as JSON (the machine-readable copy embedded in the HTML report).
+    QJsonObject toJson() const;
+};
+
+// Gathers the report's figures. Fails with agree's errors for the per-function analyses (e.g.
+// InvalidArgument when fewer than two coders coded); analyses of single items or attributes
+// that cannot be computed keep their error in ReportAnalysis::error instead.
+Result<ReportData> gatherReportData(const Project &project, const ReportOptions &options);
+
+} // namespace fourfold
