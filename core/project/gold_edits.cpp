@@ -107,4 +107,110 @@ Status WithdrawGoldEdit::revert(Database &db)
     return store::setGoldDeleted(db, m_id, false);
 }
 
+RejectSpansEdit::RejectSpansEdit(std::vector<AnnotationId> spans, CoderId lead, QString rationale)
+    : Edit(lead)
+{
+    const QString at = store::now();
+    for (AnnotationId span : spans) {
+        GoldRejection r;
+        r.uuid = store::newUuid();
+        r.annotation = span;
+        r.decidedBy = lead;
+        r.decidedAt = at;
+        r.rationale = rationale;
+        m_rows.push_back(r);
+    }
+}
+
+QString RejectSpansEdit::text() const
+{
+    return QCoreApplication::translate(
+        "GoldEdits", "Reject %n span(s)", nullptr, int(m_rows.size()));
+}
+
+QString RejectSpansEdit::objectUuid() const
+{
+    return m_rows.empty() ? QString() : m_rows.front().uuid;
+}
+
+Status RejectSpansEdit::apply(Database &db)
+{
+    FOURFOLD_TRY_STATUS(requireLead(db, actor()));
+    if (m_rows.empty())
+        return fail(ErrorCode::InvalidArgument, tr("Choose at least one span to reject."));
+    auto live = store::goldRejections(db, ArticleId {});
+    if (!live)
+        return std::unexpected(live.error());
+    std::vector<GoldRejection> rows = m_rows;
+    for (GoldRejection &r : rows) {
+        auto a = store::annotation(db, r.annotation);
+        if (!a)
+            return std::unexpected(a.error());
+        if (a->deleted)
+            return fail(ErrorCode::InvalidArgument, tr("Only a live span can be rejected."));
+        const bool already = std::ranges::any_of(
+            *live, [&](const GoldRejection &x) { return x.annotation == r.annotation; });
+        const bool twice = std::ranges::count(rows, r.annotation, &GoldRejection::annotation) > 1;
+        if (already || twice)
+            return fail(ErrorCode::InvalidArgument,
+                tr("A span is already rejected: %1").arg(a->quote.left(40)));
+        auto id = store::insertRejection(db, r);
+        if (!id)
+            return std::unexpected(id.error());
+        r.id = *id;
+    }
+    m_rows = std::move(rows);
+    return {};
+}
+
+Status RejectSpansEdit::revert(Database &db)
+{
+    for (auto it = m_rows.rbegin(); it != m_rows.rend(); ++it)
+        FOURFOLD_TRY_STATUS(store::removeRejection(db, it->id));
+    return {};
+}
+
+AcceptSpansEdit::AcceptSpansEdit(
+    ArticleId article, CoderId lead, std::vector<GoldCandidate> spans, QString rationale)
+    : Edit(lead)
+{
+    for (GoldCandidate &c : spans)
+        m_spans.emplace_back(article, lead, std::move(c.content), std::move(c.sources), rationale);
+}
+
+QString AcceptSpansEdit::text() const
+{
+    return QCoreApplication::translate(
+        "GoldEdits", "Accept %n agreed span(s) into gold", nullptr, int(m_spans.size()));
+}
+
+QString AcceptSpansEdit::objectUuid() const
+{
+    return m_spans.empty() ? QString() : m_spans.front().objectUuid();
+}
+
+Status AcceptSpansEdit::apply(Database &db)
+{
+    if (m_spans.empty())
+        return fail(ErrorCode::InvalidArgument, tr("There are no spans to accept."));
+    for (AdjudicateSpanEdit &e : m_spans)
+        FOURFOLD_TRY_STATUS(e.apply(db)); // the caller's savepoint undoes the earlier ones
+    return {};
+}
+
+Status AcceptSpansEdit::revert(Database &db)
+{
+    for (auto it = m_spans.rbegin(); it != m_spans.rend(); ++it)
+        FOURFOLD_TRY_STATUS(it->revert(db));
+    return {};
+}
+
+std::vector<GoldId> AcceptSpansEdit::goldIds() const
+{
+    std::vector<GoldId> out;
+    for (const AdjudicateSpanEdit &e : m_spans)
+        out.push_back(e.goldId());
+    return out;
+}
+
 } // namespace fourfold

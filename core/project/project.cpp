@@ -217,6 +217,11 @@ Result<std::vector<GoldAnnotation>> Project::goldAnnotations(ArticleId article) 
     return store::goldAnnotations(m_db, article);
 }
 
+Result<std::vector<GoldRejection>> Project::goldRejections(ArticleId article) const
+{
+    return store::goldRejections(m_db, article);
+}
+
 Result<std::vector<Annotation>> Project::allAnnotations() const
 {
     return store::allAnnotations(m_db);

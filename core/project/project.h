@@ -12,6 +12,7 @@
 #include "core/project/import_report.h"
 #include "core/project/integrity_report.h"
 #include "core/store/database.h"
+#include "core/store/gold_table.h"
 
 #include <QString>
 
@@ -85,6 +86,8 @@ public:
     Result<std::vector<Judgement>> judgements(ArticleId article) const;
     // The live gold spans of an article (of every article when `article` is invalid).
     Result<std::vector<GoldAnnotation>> goldAnnotations(ArticleId article = {}) const;
+    // The live rejections of coders' spans of an article (every article when invalid).
+    Result<std::vector<GoldRejection>> goldRejections(ArticleId article = {}) const;
     // Every live annotation / judgement / assignment of the project (for reliability work).
     Result<std::vector<Annotation>> allAnnotations() const;
     Result<std::vector<Judgement>> allJudgements() const;

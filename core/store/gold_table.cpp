@@ -148,4 +148,57 @@ Result<std::vector<GoldAnnotation>> goldAnnotations(const Database &db, ArticleI
     return rows;
 }
 
+Result<qint64> insertRejection(Database &db, const GoldRejection &r)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "INSERT INTO gold_rejection (uuid, annotation_id, decided_by, decided_at, rationale, "
+        "deleted) VALUES (?1, ?2, ?3, ?4, ?5, ?6)"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, r.uuid)
+        .bind(2, r.annotation.value)
+        .bind(3, r.decidedBy.value)
+        .bind(4, r.decidedAt)
+        .bind(5, r.rationale)
+        .bind(6, qint64(r.deleted));
+    FOURFOLD_TRY_STATUS(stmt->run());
+    return db.lastInsertRowId();
+}
+
+Status removeRejection(Database &db, qint64 id)
+{
+    auto stmt = db.prepare(QStringLiteral("DELETE FROM gold_rejection WHERE id = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, id);
+    FOURFOLD_TRY_STATUS(stmt->run());
+    if (db.changes() != 1)
+        return fail(ErrorCode::NotFound,
+            QCoreApplication::translate("GoldTable", "There is no rejection #%1 in the project.")
+                .arg(id));
+    return {};
+}
+
+Result<std::vector<GoldRejection>> goldRejections(const Database &db, ArticleId article)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT r.id, r.uuid, r.annotation_id, r.decided_by, r.decided_at, r.rationale, r.deleted "
+        "FROM gold_rejection r JOIN annotation a ON a.id = r.annotation_id "
+        "WHERE r.deleted = 0 AND (?1 = 0 OR a.article_id = ?1) ORDER BY r.annotation_id, r.id"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, article.value);
+    return collectRows(*stmt, [](const Statement &row) {
+        GoldRejection r;
+        r.id = row.columnInt(0);
+        r.uuid = row.columnText(1);
+        r.annotation = AnnotationId {row.columnInt(2)};
+        r.decidedBy = CoderId {row.columnInt(3)};
+        r.decidedAt = row.columnText(4);
+        r.rationale = row.columnText(5);
+        r.deleted = row.columnInt(6) != 0;
+        return r;
+    });
+}
+
 } // namespace fourfold::store

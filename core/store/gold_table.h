@@ -1,5 +1,6 @@
 #pragma once
-// Gold rows (adjudicated spans) and their provenance.
+// Gold rows (adjudicated spans) and their provenance, and the lead's rejections of coders' spans
+// (decisions that put nothing into gold).
 
 #include "core/model/annotation.h"
 #include "core/model/error.h"
@@ -8,6 +9,19 @@
 
 namespace fourfold {
 class Database;
+
+// A lead's decision that a coder's span does not belong in gold, with its reason. The span
+// itself is not changed.
+struct GoldRejection {
+    qint64 id = 0;
+    QString uuid;
+    AnnotationId annotation;
+    CoderId decidedBy;
+    QString decidedAt; // ISO 8601 UTC
+    QString rationale;
+    bool deleted = false;
+};
+
 namespace store {
 
 // Inserts `g` (uuid, times, deleted flag as given; `g.id` ignored) and one provenance row per
@@ -21,6 +35,14 @@ Status removeGold(Database &db, GoldId id);
 Result<GoldAnnotation> gold(const Database &db, GoldId id);
 // The live gold spans of an article (every article when `article` is invalid), by start.
 Result<std::vector<GoldAnnotation>> goldAnnotations(const Database &db, ArticleId article);
+
+// Inserts a rejection (`r.id` ignored). Constraint if the annotation or the coder does not exist.
+Result<qint64> insertRejection(Database &db, const GoldRejection &r);
+// Removes a rejection row for good (only to revert the edit that created it). NotFound if none.
+Status removeRejection(Database &db, qint64 id);
+// The live rejections of the spans of an article (every article when `article` is invalid), by
+// annotation id.
+Result<std::vector<GoldRejection>> goldRejections(const Database &db, ArticleId article);
 
 } // namespace store
 } // namespace fourfold

@@ -1,0 +1,347 @@
+#include "core/agreement/disagreements.h"
+
+#include "core/project/project.h"
+
+#include <QCoreApplication>
+#include <QSet>
+
+#include <algorithm>
+#include <map>
+#include <set>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("Disagreements", text);
+}
+
+// An attribute left empty is no value: {"polarity": ""} and {} say the same.
+QJsonObject normalised(const QJsonObject &attributes)
+{
+    QJsonObject out;
+    for (auto it = attributes.begin(); it != attributes.end(); ++it) {
+        if (it->isNull() || it->isUndefined())
+            continue;
+        if (it->isString() && it->toString().trimmed().isEmpty())
+            continue;
+        out.insert(it.key(), *it);
+    }
+    return out;
+}
+
+bool sameContent(const Annotation &a, const Annotation &b)
+{
+    return a.content.function == b.content.function && a.content.range == b.content.range
+        && normalised(a.content.attributes) == normalised(b.content.attributes);
+}
+
+// The kinds of disagreement among the spans of one passage (see the header).
+unsigned classify(const std::vector<Annotation> &spans, const std::vector<CoderId> &present,
+    const std::vector<CoderId> &missing)
+{
+    unsigned kinds = 0;
+    auto set = [&](DisagreementKind k) { kinds |= 1u << unsigned(k); };
+    if (!missing.empty())
+        set(DisagreementKind::Presence);
+    if (present.size() < 2)
+        return kinds;
+    auto spansOf = [&](CoderId c, std::optional<FramingFunction> f) {
+        std::vector<const Annotation *> out;
+        for (const Annotation &a : spans)
+            if (a.coder == c && (!f || a.content.function == *f))
+                out.push_back(&a);
+        return out;
+    };
+    auto functionsOf = [&](CoderId c) {
+        unsigned m = 0;
+        for (const Annotation *a : spansOf(c, std::nullopt))
+            m |= 1u << unsigned(a->content.function);
+        return m;
+    };
+    const unsigned first = functionsOf(present.front());
+    unsigned shared = first;
+    for (CoderId c : present) {
+        const unsigned m = functionsOf(c);
+        if (m != first)
+            set(DisagreementKind::Function);
+        shared &= m;
+    }
+    for (FramingFunction f : kFramingFunctions) {
+        if (!(shared & (1u << unsigned(f))))
+            continue;
+        auto rangesOf = [&](CoderId c) {
+            std::set<TextRange> r;
+            for (const Annotation *a : spansOf(c, f))
+                r.insert(a->content.range);
+            return r;
+        };
+        const std::set<TextRange> base = rangesOf(present.front());
+        std::set<TextRange> common = base;
+        for (CoderId c : present) {
+            const std::set<TextRange> r = rangesOf(c);
+            if (r != base)
+                set(DisagreementKind::Boundary);
+            std::set<TextRange> keep;
+            std::ranges::set_intersection(common, r, std::inserter(keep, keep.begin()));
+            common = std::move(keep);
+        }
+        // Attributes are compared where the coders marked the same range with the same function.
+        for (const TextRange &range : common) {
+            std::optional<QJsonObject> seen;
+            for (CoderId c : present)
+                for (const Annotation *a : spansOf(c, f))
+                    if (a->content.range == range) {
+                        const QJsonObject attrs = normalised(a->content.attributes);
+                        if (seen && *seen != attrs)
+                            set(DisagreementKind::Attributes);
+                        seen = attrs;
+                    }
+        }
+    }
+    return kinds;
+}
+
+bool touches(const Passage &p, const ComparisonFilter &filter)
+{
+    return !filter.function || (p.functions() & (1u << unsigned(*filter.function)));
+}
+
+} // namespace
+
+QString disagreementKindKey(DisagreementKind kind)
+{
+    switch (kind) {
+    case DisagreementKind::Presence:
+        return QStringLiteral("presence");
+    case DisagreementKind::Function:
+        return QStringLiteral("function");
+    case DisagreementKind::Boundary:
+        return QStringLiteral("boundary");
+    case DisagreementKind::Attributes:
+        return QStringLiteral("attributes");
+    }
+    return {};
+}
+
+bool Passage::isResolved() const
+{
+    return !gold.empty() || (!rejected.empty() && std::ranges::all_of(rejected, std::identity {}));
+}
+
+unsigned Passage::functions() const
+{
+    unsigned m = 0;
+    for (const Annotation &a : spans)
+        m |= 1u << unsigned(a.content.function);
+    return m;
+}
+
+std::vector<Passage> comparePassages(const std::vector<Annotation> &allSpans,
+    const std::vector<CoderId> &coders, const std::vector<GoldAnnotation> &gold,
+    const std::vector<AnnotationId> &rejectedSpans)
+{
+    std::vector<Annotation> spans;
+    for (const Annotation &a : allSpans)
+        if (!a.deleted && std::ranges::find(coders, a.coder) != coders.end())
+            spans.push_back(a);
+    std::ranges::sort(spans, [&](const Annotation &a, const Annotation &b) {
+        const auto ca = std::ranges::find(coders, a.coder) - coders.begin();
+        const auto cb = std::ranges::find(coders, b.coder) - coders.begin();
+        return std::tie(a.content.range.start, a.content.range.end, ca, a.id.value)
+            < std::tie(b.content.range.start, b.content.range.end, cb, b.id.value);
+    });
+    // Sorted by start, spans overlap the current component exactly when they start before its
+    // end: a sweep finds the connected components of the overlap graph.
+    std::vector<Passage> out;
+    for (const Annotation &a : spans) {
+        if (out.empty() || a.content.range.start >= out.back().range.end) {
+            Passage p;
+            p.range = a.content.range;
+            out.push_back(std::move(p));
+        }
+        Passage &p = out.back();
+        p.range.end = std::max(p.range.end, a.content.range.end);
+        p.spans.push_back(a);
+        p.rejected.push_back(std::ranges::find(rejectedSpans, a.id) != rejectedSpans.end());
+    }
+    for (Passage &p : out) {
+        for (CoderId c : coders) {
+            const bool has =
+                std::ranges::any_of(p.spans, [&](const Annotation &a) { return a.coder == c; });
+            (has ? p.coders : p.missing).push_back(c);
+        }
+        p.kinds = classify(p.spans, p.coders, p.missing);
+        for (const GoldAnnotation &g : gold)
+            if (!g.deleted && g.content.range.overlaps(p.range))
+                p.gold.push_back(g);
+    }
+    return out;
+}
+
+Result<std::vector<Coder>> articleCoders(const Project &project, ArticleId article)
+{
+    auto coders = project.coders();
+    if (!coders)
+        return std::unexpected(coders.error());
+    auto assignments = project.assignments();
+    if (!assignments)
+        return std::unexpected(assignments.error());
+    auto spans = project.annotations(article);
+    if (!spans)
+        return std::unexpected(spans.error());
+    QSet<qint64> coded;
+    for (const Assignment &a : *assignments)
+        if (a.article == article)
+            coded.insert(a.coder.value);
+    for (const Annotation &a : *spans)
+        if (!a.deleted)
+            coded.insert(a.coder.value);
+    std::vector<Coder> out;
+    for (const Coder &c : *coders)
+        if (coded.contains(c.id.value))
+            out.push_back(c);
+    std::ranges::sort(out, {}, &Coder::pseudonym);
+    return out;
+}
+
+Result<Comparison> compareArticle(
+    const Project &project, ArticleId article, const ComparisonFilter &filter)
+{
+    auto summary = project.article(article);
+    if (!summary)
+        return std::unexpected(summary.error());
+    auto coded = articleCoders(project, article);
+    if (!coded)
+        return std::unexpected(coded.error());
+    Comparison out;
+    out.article = article;
+    if (filter.coderPair) {
+        for (CoderId c : {filter.coderPair->first, filter.coderPair->second}) {
+            if (std::ranges::find(*coded, c, &Coder::id) == coded->end())
+                return fail(ErrorCode::InvalidArgument,
+                    tr("Both coders of the pair must have coded the article \"%1\".")
+                        .arg(summary->summary.title));
+            out.coders.push_back(c);
+        }
+    } else {
+        for (const Coder &c : *coded)
+            out.coders.push_back(c.id);
+    }
+    auto spans = project.annotations(article);
+    if (!spans)
+        return std::unexpected(spans.error());
+    auto gold = project.goldAnnotations(article);
+    if (!gold)
+        return std::unexpected(gold.error());
+    auto rejections = project.goldRejections(article);
+    if (!rejections)
+        return std::unexpected(rejections.error());
+    std::vector<AnnotationId> rejected;
+    for (const GoldRejection &r : *rejections)
+        rejected.push_back(r.annotation);
+    for (Passage &p : comparePassages(*spans, out.coders, *gold, rejected))
+        if (touches(p, filter))
+            out.passages.push_back(std::move(p));
+    return out;
+}
+
+GoldCandidate acceptCandidate(const Passage &passage, const Annotation &span)
+{
+    GoldCandidate c;
+    c.content = span.content;
+    c.content.note.clear();
+    c.content.confidence.reset();
+    for (const Annotation &a : passage.spans)
+        if (sameContent(a, span))
+            c.sources.push_back(a.id);
+    if (std::ranges::find(c.sources, span.id) == c.sources.end())
+        c.sources.push_back(span.id);
+    return c;
+}
+
+Result<GoldCandidate> mergeCandidate(const std::vector<Annotation> &spans)
+{
+    if (spans.empty())
+        return fail(ErrorCode::InvalidArgument, tr("Choose the spans whose boundaries to merge."));
+    GoldCandidate c;
+    c.content = spans.front().content;
+    c.content.note.clear();
+    c.content.confidence.reset();
+    for (const Annotation &a : spans) {
+        if (a.content.function != c.content.function)
+            return fail(ErrorCode::InvalidArgument,
+                tr("Only spans of one function can be merged; accept one of them instead."));
+        c.content.range.start = std::min(c.content.range.start, a.content.range.start);
+        c.content.range.end = std::max(c.content.range.end, a.content.range.end);
+        c.sources.push_back(a.id);
+    }
+    return c;
+}
+
+std::vector<GoldCandidate> agreedCandidates(const Comparison &comparison)
+{
+    std::vector<GoldCandidate> out;
+    for (const Passage &p : comparison.passages) {
+        if (!p.isAgreed() || p.isResolved())
+            continue;
+        std::vector<bool> used(p.spans.size(), false);
+        for (size_t i = 0; i < p.spans.size(); ++i) {
+            if (used[i])
+                continue;
+            GoldCandidate c = acceptCandidate(p, p.spans[i]);
+            for (size_t j = i; j < p.spans.size(); ++j)
+                if (sameContent(p.spans[i], p.spans[j]))
+                    used[j] = true;
+            out.push_back(std::move(c));
+        }
+    }
+    return out;
+}
+
+Result<std::vector<ArticleDisagreement>> disagreementQueue(
+    const Project &project, const ComparisonFilter &filter)
+{
+    auto articles = project.articles();
+    if (!articles)
+        return std::unexpected(articles.error());
+    std::vector<ArticleDisagreement> out;
+    for (const ArticleSummary &summary : *articles) {
+        auto coded = articleCoders(project, summary.id);
+        if (!coded)
+            return std::unexpected(coded.error());
+        if (coded->size() < 2)
+            continue;
+        if (filter.coderPair
+            && (std::ranges::find(*coded, filter.coderPair->first, &Coder::id) == coded->end()
+                || std::ranges::find(*coded, filter.coderPair->second, &Coder::id) == coded->end()))
+            continue;
+        auto comparison = compareArticle(project, summary.id, filter);
+        if (!comparison)
+            return std::unexpected(comparison.error());
+        ArticleDisagreement row;
+        row.article = summary;
+        row.coders = comparison->coders;
+        for (const Passage &p : comparison->passages) {
+            ++row.passages;
+            if (p.isAgreed()) {
+                row.agreedOpen += p.isResolved() ? 0 : 1;
+                continue;
+            }
+            ++row.disagreements;
+            row.unresolved += p.isResolved() ? 0 : 1;
+            for (DisagreementKind k : kDisagreementKinds)
+                row.byKind[size_t(k)] += p.has(k) ? 1 : 0;
+        }
+        out.push_back(std::move(row));
+    }
+    std::ranges::stable_sort(out, [](const ArticleDisagreement &a, const ArticleDisagreement &b) {
+        return std::tuple(-a.unresolved, -a.disagreements, a.article.title)
+            < std::tuple(-b.unresolved, -b.disagreements, b.article.title);
+    });
+    return out;
+}
+
+} // namespace fourfold

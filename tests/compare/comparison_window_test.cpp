@@ -1,0 +1,314 @@
+// The comparison window driven through its widgets and keys, offscreen, on a copy of the sample
+// project (three coders C01..C03 on nine reliability articles, lead L01; gold on a few articles).
+#include "app/desktop/coding_session.h"
+#include "app/desktop/compare/comparison_view.h"
+#include "app/desktop/compare/comparison_window.h"
+#include "app/desktop/compare/disagreement_queue_model.h"
+#include "app/desktop/compare/gold_span_dialog.h"
+#include "core/project/project.h"
+#include "core/text/offset_map.h"
+#include "tests/support/db_dump.h"
+#include "tests/support/test_support.h"
+
+#include <QAbstractItemModelTester>
+#include <QFile>
+#include <QSet>
+#include <QTest>
+#include <QUndoStack>
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+struct CompareFixture {
+    QTemporaryDir dir;
+    std::unique_ptr<CodingSession> session;
+    CompareFixture(const QString &who = QStringLiteral("L01"))
+    {
+        const QString path = dir.filePath(QStringLiteral("demo.fourfold"));
+        REQUIRE(QFile::copy(QStringLiteral(FOURFOLD_SAMPLE_PROJECT), path));
+        QFile::setPermissions(path, QFile::ReadOwner | QFile::WriteOwner);
+        auto p = Project::open(path);
+        REQUIRE(p);
+        auto coder = p->coderByPseudonym(who);
+        REQUIRE(coder);
+        REQUIRE(coder->has_value());
+        session = std::make_unique<CodingSession>(std::move(*p), **coder);
+    }
+    Project &project() { return session->project(); }
+    // Every table but the event log: the whole content of the project file.
+    QString dump() { return dumpDatabase(project().databaseForTesting()); }
+    // The coders' own work: every table but gold, rejections and the event log.
+    QString rawDump()
+    {
+        return dumpDatabase(project().databaseForTesting(),
+            {QStringLiteral("event_log"), QStringLiteral("gold_annotation"),
+                QStringLiteral("gold_source"), QStringLiteral("gold_rejection")});
+    }
+};
+
+void activate(QWidget &w)
+{
+    w.resize(1400, 900);
+    w.show();
+    w.activateWindow();
+    REQUIRE(QTest::qWaitForWindowActive(&w));
+}
+
+} // namespace
+
+TEST_CASE("the queue lists the articles coded by several coders, most disagreements first")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    QAbstractItemModelTester tester(
+        w.queueModel(), QAbstractItemModelTester::FailureReportingMode::Fatal);
+    // Independent count from the raw annotations: articles with spans by two or more coders.
+    auto all = f.project().allAnnotations();
+    REQUIRE(all);
+    QHash<qint64, QSet<qint64>> codersOf;
+    for (const Annotation &a : *all)
+        codersOf[a.article.value].insert(a.coder.value);
+    int several = 0;
+    for (const auto &coders : std::as_const(codersOf))
+        several += coders.size() >= 2 ? 1 : 0;
+    REQUIRE(several == 9); // the sample project's reliability subsample
+    const auto &rows = w.queueModel()->rows();
+    REQUIRE(int(rows.size()) == several);
+    for (size_t i = 1; i < rows.size(); ++i)
+        CHECK(rows[i - 1].unresolved >= rows[i].unresolved);
+    // The window opens the top article with its first undecided disagreement current.
+    CHECK(w.currentArticle() == rows.front().article.id);
+    REQUIRE(w.currentPassage() >= 0);
+    CHECK_FALSE(w.passages()[size_t(w.currentPassage())].isAgreed());
+    // Three coders and gold, one layout per paragraph shared by all columns.
+    auto article = f.project().article(w.currentArticle());
+    REQUIRE(article);
+    CHECK(w.view()->paragraphCount() == qsizetype(article->paragraphs.size()));
+
+    // A coder pair narrows the columns and passages to the two coders.
+    auto c1 = f.project().coderByPseudonym(QStringLiteral("C01"));
+    auto c3 = f.project().coderByPseudonym(QStringLiteral("C03"));
+    REQUIRE((c1 && c3 && *c1 && *c3));
+    w.setCoderPair((*c1)->id, (*c3)->id);
+    for (const Passage &p : w.passages())
+        for (const Annotation &a : p.spans)
+            CHECK((a.coder == (*c1)->id || a.coder == (*c3)->id));
+    w.setCoderPair({}, {});
+    // One function: every passage shown has a span of it.
+    w.setFunctionFilter(FramingFunction::Remedy);
+    REQUIRE_FALSE(w.passages().empty());
+    for (const Passage &p : w.passages())
+        CHECK((p.functions() & (1u << unsigned(FramingFunction::Remedy))));
+}
+
+TEST_CASE("a disagreement is adjudicated into gold with the keyboard, undone, raw codings kept")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    activate(w);
+    const QString before = f.dump();
+    const QString raw = f.rawDump();
+    const ArticleId article = w.currentArticle();
+    // The gold spans already decided on this article (the sample has gold on a few articles).
+    const size_t goldBefore = f.project().goldAnnotations(article)->size();
+
+    // N steps to the next undecided disagreement, P back.
+    const int first = w.currentPassage();
+    QTest::keyClick(&w, Qt::Key_N);
+    const int second = w.currentPassage();
+    CHECK(second != first);
+    CHECK_FALSE(w.passages()[size_t(second)].isAgreed());
+    QTest::keyClick(&w, Qt::Key_P);
+    CHECK(w.currentPassage() == first);
+
+    // Accept the first coder's span of the passage, with a rationale.
+    const Passage passage = w.passages()[size_t(first)];
+    const Annotation chosen = passage.spans.front();
+    w.selectSpans({chosen.id});
+    w.setRationale(QStringLiteral("The coder marks the whole claim."));
+    QTest::keyClick(&w, Qt::Key_A);
+    auto gold = f.project().goldAnnotations(article);
+    REQUIRE(gold);
+    REQUIRE(gold->size() == goldBefore + 1);
+    const auto it = std::ranges::find_if(*gold, [&](const GoldAnnotation &x) {
+        return std::ranges::find(x.sources, chosen.id) != x.sources.end();
+    });
+    REQUIRE(it != gold->end());
+    const GoldAnnotation g = *it;
+    CHECK(g.content.function == chosen.content.function);
+    CHECK(g.content.range == chosen.content.range);
+    CHECK(g.quote == chosen.quote);
+    CHECK(g.decidedBy == f.session->coder().id);
+    CHECK(g.rationale == QStringLiteral("The coder marks the whole claim."));
+    // The passage now counts as decided, in the window and in the queue.
+    CHECK(w.passages()[size_t(w.currentPassage())].isResolved());
+    CHECK(f.rawDump() == raw);
+
+    // Undo (Ctrl+Z) removes the gold span; the project is as it was, content for content.
+    QTest::keyClick(&w, Qt::Key_Z, Qt::ControlModifier);
+    CHECK(f.project().goldAnnotations(article)->size() == goldBefore);
+    CHECK(f.dump() == before);
+    CHECK_FALSE(w.passages()[size_t(w.currentPassage())].isResolved());
+    // Redo brings back the same gold span.
+    f.session->undoStack()->redo();
+    auto again = f.project().goldAnnotations(article);
+    REQUIRE(again);
+    REQUIRE(again->size() == goldBefore + 1);
+    CHECK(std::ranges::any_of(*again, [&](const GoldAnnotation &x) { return x.uuid == g.uuid; }));
+    CHECK(f.rawDump() == raw);
+}
+
+TEST_CASE("reject, merge and accept-all-agreed are single undoable steps")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    activate(w);
+    const QString before = f.dump();
+    const QString raw = f.rawDump();
+    const ArticleId article = w.currentArticle();
+    QUndoStack *undo = f.session->undoStack();
+    const size_t goldAtStart = f.project().goldAnnotations(article)->size();
+
+    // Reject every span of a presence disagreement (a span not every coder has).
+    int presence = -1;
+    for (size_t i = 0; i < w.passages().size(); ++i)
+        if (w.passages()[i].has(DisagreementKind::Presence)) {
+            presence = int(i);
+            break;
+        }
+    REQUIRE(presence >= 0);
+    w.setCurrentPassage(presence);
+    std::vector<AnnotationId> ids;
+    for (const Annotation &a : w.passages()[size_t(presence)].spans)
+        ids.push_back(a.id);
+    w.selectSpans(ids);
+    QTest::keyClick(&w, Qt::Key_R);
+    auto rejections = f.project().goldRejections(article);
+    REQUIRE(rejections);
+    CHECK(rejections->size() == ids.size());
+    CHECK(w.passages()[size_t(presence)].isResolved());
+    CHECK(undo->count() == 1);
+
+    // Merge the boundaries of a boundary disagreement's spans of one function.
+    int boundary = -1;
+    for (size_t i = 0; i < w.passages().size(); ++i)
+        if (w.passages()[i].has(DisagreementKind::Boundary)
+            && !w.passages()[i].has(DisagreementKind::Function) && !w.passages()[i].isResolved()) {
+            boundary = int(i);
+            break;
+        }
+    if (boundary >= 0) {
+        w.setCurrentPassage(boundary);
+        const Passage p = w.passages()[size_t(boundary)];
+        ids.clear();
+        TextRange expected = p.spans.front().content.range;
+        for (const Annotation &a : p.spans)
+            if (a.content.function == p.spans.front().content.function) {
+                ids.push_back(a.id);
+                expected.start = std::min(expected.start, a.content.range.start);
+                expected.end = std::max(expected.end, a.content.range.end);
+            }
+        w.selectSpans(ids);
+        QTest::keyClick(&w, Qt::Key_M);
+        auto gold = f.project().goldAnnotations(article);
+        REQUIRE(gold);
+        REQUIRE(gold->size() == goldAtStart + 1);
+        const auto merged = std::ranges::find_if(*gold, [&](const GoldAnnotation &x) {
+            return std::ranges::find(x.sources, ids.front()) != x.sources.end();
+        });
+        REQUIRE(merged != gold->end());
+        CHECK(merged->content.range == expected);
+        CHECK(merged->sources.size() == ids.size());
+        CHECK(undo->count() == 2);
+    }
+
+    // Accept every agreed passage at once: one step on the undo stack.
+    const int steps = undo->count();
+    const size_t goldBefore = f.project().goldAnnotations(article)->size();
+    auto comparison = compareArticle(f.project(), article);
+    REQUIRE(comparison);
+    const auto agreed = agreedCandidates(*comparison);
+    if (!agreed.empty()) {
+        QTest::keyClick(&w, Qt::Key_A, Qt::ControlModifier | Qt::ShiftModifier);
+        CHECK(f.project().goldAnnotations(article)->size() == goldBefore + agreed.size());
+        CHECK(undo->count() == steps + 1);
+    }
+    CHECK(f.rawDump() == raw);
+    while (undo->canUndo())
+        undo->undo();
+    CHECK(f.dump() == before);
+}
+
+TEST_CASE("a coder cannot adjudicate: the window says so and offers nothing")
+{
+    CompareFixture f(QStringLiteral("C01"));
+    ComparisonWindow w(f.session.get());
+    CHECK(w.queueModel() == nullptr);
+    CHECK(w.currentPassage() == -1);
+}
+
+TEST_CASE("edit decides a gold span with the lead's own function and boundaries")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    const ArticleId article = w.currentArticle();
+    auto text = f.project().article(article);
+    REQUIRE(text);
+    REQUIRE(w.currentPassage() >= 0);
+    const Passage p = w.passages()[size_t(w.currentPassage())];
+    const Annotation &span = p.spans.front();
+
+    // The dialog starts from the span and returns what the lead set.
+    GoldSpanDialog dialog(*text, span.content);
+    AnnotationContent same = dialog.content();
+    CHECK(same.range == span.content.range);
+    CHECK(same.function == span.content.function);
+
+    // A narrower range of another function, decided from that span.
+    const TextRange narrower {span.content.range.start, span.content.range.start + 5};
+    GoldCandidate c;
+    c.content = span.content;
+    c.content.function = FramingFunction::Remedy;
+    c.content.attributes = {}; // the cause's attributes do not fit the remedy's schema
+    c.content.range = narrower;
+    c.sources = {span.id};
+    const size_t goldBefore = f.project().goldAnnotations(article)->size();
+    REQUIRE(w.decide(c));
+    auto gold = f.project().goldAnnotations(article);
+    REQUIRE(gold);
+    REQUIRE(gold->size() == goldBefore + 1);
+    const auto it =
+        std::ranges::find(*gold, narrower, [](const GoldAnnotation &g) { return g.content.range; });
+    REQUIRE(it != gold->end());
+    CHECK(it->content.function == FramingFunction::Remedy);
+    CHECK(it->quote == OffsetMap::slice(text->text, narrower));
+
+    // An empty range is refused with a message, and nothing is pushed.
+    const int steps = f.session->undoStack()->count();
+    c.content.range = TextRange {narrower.start, narrower.start};
+    CHECK_FALSE(w.decide(c));
+    CHECK_FALSE(w.lastMessage().isEmpty());
+    CHECK(f.session->undoStack()->count() == steps);
+}
+
+TEST_CASE("a click in a coder's column makes the passage current and chooses that coder's spans")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    REQUIRE(w.passages().size() >= 2);
+    // The last passage, in the column of the last coder who has a span in it.
+    const int index = int(w.passages().size()) - 1;
+    const Passage p = w.passages().back();
+    const CoderId coder = p.coders.back();
+    auto coders = compareArticle(f.project(), w.currentArticle());
+    REQUIRE(coders);
+    const auto column = std::ranges::find(coders->coders, coder) - coders->coders.begin();
+    emit w.view()->passageClicked(index, int(column));
+    CHECK(w.currentPassage() == index);
+    const auto chosen = w.selectedSpans();
+    REQUIRE_FALSE(chosen.empty());
+    for (const Annotation &a : chosen)
+        CHECK(a.coder == coder);
+}
