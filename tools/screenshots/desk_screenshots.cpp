@@ -6,12 +6,15 @@
 #include "app/desktop/coding_session.h"
 #include "app/desktop/main_window.h"
 #include "app/desktop/reading_view.h"
+#include "app/desktop/reliability/reliability_window.h"
 
 #include <QApplication>
 #include <QDir>
+#include <QEventLoop>
 #include <QFile>
 #include <QSettings>
 #include <QStandardPaths>
+#include <QTabWidget>
 #include <QTemporaryDir>
 #include <QThread>
 #include <QTimer>
@@ -109,6 +112,26 @@ int main(int argc, char *argv[])
         if (id && *id)
             w.openArticle(**id);
         ok &= save(w, out, "desk-lead-all-coders.png");
+    }
+    {
+        // The reliability window: sentences, all four functions, the reliability phase.
+        auto p = Project::open(project);
+        if (!p)
+            return 1;
+        ReliabilityWindow w(*p);
+        w.resize(1440, 900);
+        w.show();
+        QEventLoop loop;
+        QObject::connect(&w, &ReliabilityWindow::computed, &loop, &QEventLoop::quit);
+        w.compute();
+        loop.exec();
+        const char *names[] = {"reliability.png", "reliability-diagnostics.png",
+            "reliability-functions.png", "reliability-pairs.png", "reliability-confusion.png",
+            "reliability-drift.png"};
+        for (int tab = 0; tab < w.tabs()->count() && tab < 6; ++tab) {
+            w.tabs()->setCurrentIndex(tab);
+            ok &= save(w, out, names[tab]);
+        }
     }
     return ok ? 0 : 1;
 }
