@@ -10,8 +10,10 @@
 #include "app/desktop/function_style.h"
 #include "app/desktop/import_dialog.h"
 #include "app/desktop/item_form.h"
+#include "app/desktop/lead_windows.h"
 #include "app/desktop/reading_view.h"
 #include "app/desktop/span_editor.h"
+#include "app/desktop/study/training_feedback_dialog.h"
 
 #include <QActionGroup>
 #include <QApplication>
@@ -61,6 +63,7 @@ QString samplePath()
 MainWindow::MainWindow(QWidget *parent)
     : QMainWindow(parent)
     , m_clock(new ActivityClock(this))
+    , m_lead(new LeadWindows(this))
 {
     m_pages = new QStackedWidget(this);
     m_pages->addWidget(buildStartPage());
@@ -78,7 +81,11 @@ MainWindow::MainWindow(QWidget *parent)
     flush->start(30 * 1000);
 }
 
-MainWindow::~MainWindow() = default;
+MainWindow::~MainWindow()
+{
+    // The lead's windows refer to the session's project: close them before it goes.
+    m_lead->closeAll();
+}
 
 QWidget *MainWindow::buildStartPage()
 {
@@ -318,6 +325,12 @@ void MainWindow::buildMenus()
         &MainWindow::nextArticle);
     code->addAction(
         tr("&Find in texts"), QKeySequence::Find, this, [this] { m_search->setFocus(); });
+    code->addAction(tr("&Training feedback…"), this, [this] {
+        if (!m_session)
+            return;
+        TrainingFeedbackDialog feedback(m_session->project(), m_session->coder().id, this);
+        feedback.exec();
+    });
 
     QMenu *view = menuBar()->addMenu(tr("&View"));
     m_showAll = view->addAction(tr("Show &every coder's spans (leads only)"));
@@ -328,6 +341,23 @@ void MainWindow::buildMenus()
             m_session->setShowAllCoders(on);
         refreshArticle();
     });
+
+    // The lead's work beside the desk; the menu is there for leads only.
+    m_leadMenu = menuBar()->addMenu(tr("&Lead"));
+    m_leadMenu->addAction(tr("&Compare and adjudicate…"), QKeySequence(Qt::CTRL | Qt::Key_K),
+        m_lead, &LeadWindows::openComparison);
+    m_leadMenu->addAction(tr("&Reliability…"), QKeySequence(Qt::CTRL | Qt::Key_R), m_lead,
+        &LeadWindows::openReliability);
+    m_leadMenu->addAction(tr("Write the reliability &report…"), m_lead, &LeadWindows::writeReport);
+    m_leadMenu->addSeparator();
+    m_leadMenu->addAction(tr("&Study design…"), m_lead, &LeadWindows::openStudyDesign);
+    m_leadMenu->addAction(tr("&Progress…"), m_lead, &LeadWindows::openProgress);
+    m_leadMenu->addAction(tr("&Hand out a coder copy…"), m_lead, &LeadWindows::handOutCopy);
+    m_leadMenu->addAction(tr("&Merge returned coder copies…"), m_lead, &LeadWindows::mergeCopies);
+    m_leadMenu->addSeparator();
+    m_leadMenu->addAction(tr("&Extractor runs…"), m_lead, &LeadWindows::openExtractors);
+    m_leadMenu->menuAction()->setVisible(false);
+    connect(m_lead, &LeadWindows::projectChanged, this, &MainWindow::refreshList);
 
     QMenu *settings = menuBar()->addMenu(tr("&Settings"));
     QMenu *language = settings->addMenu(tr("&Language"));
@@ -374,6 +404,7 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
     }
 
     flushTime();
+    m_lead->setSession(nullptr);
     if (m_items) {
         delete m_items;
         m_items = nullptr;
@@ -424,6 +455,9 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
     connect(m_session.get(), &CodingSession::errorOccurred, this, &MainWindow::showError);
     m_showAll->setEnabled(m_session->isLead());
     m_import->setEnabled(m_session->isLead());
+    m_leadMenu->menuAction()->setVisible(m_session->isLead());
+    if (m_session->isLead())
+        m_lead->setSession(m_session.get());
     m_showAll->setChecked(false);
 
     QSettings settings;
@@ -533,8 +567,16 @@ void MainWindow::markDone()
     if (!m_session || !m_article.isValid())
         return;
     flushTime();
-    if (m_session->markDone(m_article))
-        nextArticle();
+    const bool training = m_session->phaseOf(m_article) == Phase::Training;
+    if (!m_session->markDone(m_article))
+        return;
+    // After the last training article: the coder's agreement with the master coding, once.
+    if (training && TrainingFeedbackDialog::isDue(m_session->project(), m_session->coder().id)) {
+        TrainingFeedbackDialog feedback(m_session->project(), m_session->coder().id, this);
+        feedback.exec();
+        refreshList();
+    }
+    nextArticle();
 }
 
 void MainWindow::nextArticle()
@@ -689,6 +731,7 @@ void MainWindow::closeEvent(QCloseEvent *event)
     if (m_spanEditor)
         m_spanEditor->commitPendingEdits();
     flushTime();
+    m_lead->closeAll();
     QMainWindow::closeEvent(event);
 }
 

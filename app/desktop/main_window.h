@@ -13,6 +13,7 @@ class QAction;
 class QComboBox;
 class QLabel;
 class QLineEdit;
+class QMenu;
 class QStackedWidget;
 class QTabWidget;
 class QTableView;
@@ -24,6 +25,7 @@ class ArticleFilter;
 class ArticleListModel;
 class CodebookPanel;
 class CodingSession;
+class LeadWindows;
 class FrameCard;
 class ItemForm;
 class ReadingView;
@@ -42,6 +44,7 @@ public:
     Status openProject(const QString &path, const QString &pseudonym = {});
 
     // For tests and screenshots.
+    LeadWindows *leadWindows() const { return m_lead; }
     CodingSession *session() const { return m_session.get(); }
     ReadingView *readingView() const { return m_reading; }
     FrameCard *frameCard() const { return m_card; }
@@ -98,6 +101,8 @@ private:
     QAction *m_undo = nullptr;
     QAction *m_redo = nullptr;
     ActivityClock *m_clock = nullptr;
+    LeadWindows *m_lead = nullptr;
+    QMenu *m_leadMenu = nullptr;
     bool m_columnsChosen = false;
 };
 

@@ -1,0 +1,196 @@
+#include "app/desktop/lead_windows.h"
+
+#include "app/desktop/coding_session.h"
+#include "app/desktop/compare/comparison_window.h"
+#include "app/desktop/reliability/reliability_window.h"
+#include "app/desktop/runs/extractor_window.h"
+#include "app/desktop/study/progress_board_window.h"
+#include "app/desktop/study/study_design_window.h"
+#include "app/report/report_writer.h"
+#include "core/project/coder_copies.h"
+
+#include <QApplication>
+#include <QFileDialog>
+#include <QFileInfo>
+#include <QInputDialog>
+#include <QMessageBox>
+#include <QWidget>
+
+namespace fourfold {
+
+LeadWindows::LeadWindows(QWidget *owner)
+    : QObject(owner)
+    , m_owner(owner)
+{ }
+
+LeadWindows::~LeadWindows()
+{
+    closeAll();
+}
+
+void LeadWindows::setSession(CodingSession *session)
+{
+    closeAll();
+    m_session = session;
+}
+
+void LeadWindows::closeAll()
+{
+    // Deleted at once, not later: each window holds a reference to the session's project.
+    for (QPointer<QWidget> *w :
+        {&m_comparison, &m_reliability, &m_studyDesign, &m_progress, &m_extractors})
+        delete w->data();
+}
+
+void LeadWindows::raise(QWidget *window)
+{
+    window->setAttribute(Qt::WA_DeleteOnClose);
+    window->show();
+    window->raise();
+    window->activateWindow();
+}
+
+void LeadWindows::openComparison()
+{
+    if (!m_session)
+        return;
+    if (!m_comparison) {
+        auto *w = new ComparisonWindow(m_session);
+        connect(m_session, &QObject::destroyed, w, &QObject::deleteLater);
+        m_comparison = w;
+    }
+    raise(m_comparison);
+}
+
+void LeadWindows::openReliability()
+{
+    if (!m_session)
+        return;
+    if (!m_reliability)
+        m_reliability = new ReliabilityWindow(m_session->project());
+    raise(m_reliability);
+}
+
+void LeadWindows::openStudyDesign()
+{
+    if (!m_session)
+        return;
+    if (!m_studyDesign) {
+        auto *w = new StudyDesignWindow(m_session->project(), m_session->coder().id);
+        connect(w, &StudyDesignWindow::assignmentsChanged, this, &LeadWindows::projectChanged);
+        m_studyDesign = w;
+    }
+    raise(m_studyDesign);
+}
+
+void LeadWindows::openProgress()
+{
+    if (!m_session)
+        return;
+    if (!m_progress)
+        m_progress = new ProgressBoardWindow(m_session->project(), m_session->coder().id);
+    raise(m_progress);
+}
+
+void LeadWindows::openExtractors()
+{
+    if (!m_session)
+        return;
+    if (!m_extractors)
+        m_extractors = new ExtractorWindow(m_session->project());
+    raise(m_extractors);
+}
+
+void LeadWindows::writeReport()
+{
+    if (!m_session)
+        return;
+    const QString base = QFileInfo(m_session->project().path()).completeBaseName();
+    const QString path = QFileDialog::getSaveFileName(m_owner, tr("Write the reliability report"),
+        base + QStringLiteral("-reliability.html"),
+        tr("Web page (*.html);;PDF document (*.pdf)"));
+    if (path.isEmpty())
+        return;
+    QApplication::setOverrideCursor(Qt::WaitCursor);
+    const Status written = fourfold::writeReport(m_session->project(), ReportOptions {}, path);
+    QApplication::restoreOverrideCursor();
+    if (!written)
+        QMessageBox::warning(m_owner, tr("Reliability report"), written.error().message);
+    else
+        QMessageBox::information(
+            m_owner, tr("Reliability report"), tr("The report was written to %1.").arg(path));
+}
+
+void LeadWindows::handOutCopy()
+{
+    if (!m_session)
+        return;
+    auto coders = m_session->project().coders();
+    if (!coders) {
+        QMessageBox::warning(m_owner, tr("Coder copy"), coders.error().message);
+        return;
+    }
+    QStringList choices;
+    for (const Coder &c : *coders)
+        if (c.role == CoderRole::Coder)
+            choices << c.pseudonym;
+    bool ok = false;
+    const QString pseudonym = QInputDialog::getItem(m_owner, tr("Coder copy"),
+        tr("A coder copy holds only the articles assigned to this coder, the codebook and the "
+           "coder's own codings. Whose copy?"),
+        choices, 0, false, &ok);
+    if (!ok || pseudonym.isEmpty())
+        return;
+    const QString base = QFileInfo(m_session->project().path()).completeBaseName();
+    const QString path = QFileDialog::getSaveFileName(m_owner, tr("Write the coder copy"),
+        QStringLiteral("%1-%2.fourfold").arg(base, pseudonym), tr("Fourfold project (*.fourfold)"));
+    if (path.isEmpty())
+        return;
+    auto report = CoderCopies::handout(m_session->project(), pseudonym, path);
+    if (!report) {
+        QMessageBox::warning(m_owner, tr("Coder copy"), report.error().message);
+        return;
+    }
+    QMessageBox::information(m_owner, tr("Coder copy"),
+        tr("Wrote %1 for %2: %n article(s), %3 span(s).", nullptr, int(report->articles))
+            .arg(path, pseudonym)
+            .arg(report->annotations));
+}
+
+void LeadWindows::mergeCopies()
+{
+    if (!m_session)
+        return;
+    const QStringList paths = QFileDialog::getOpenFileNames(m_owner,
+        tr("Merge returned coder copies"), QString(), tr("Fourfold project (*.fourfold)"));
+    if (paths.isEmpty())
+        return;
+    auto reports = CoderCopies::merge(m_session->project(), paths);
+    if (!reports) {
+        QMessageBox::warning(m_owner, tr("Merge coder copies"),
+            tr("Nothing was merged.\n\n%1").arg(reports.error().message));
+        return;
+    }
+    QStringList lines;
+    qint64 conflicts = 0;
+    for (const MergeReport &r : *reports) {
+        conflicts += r.conflicts;
+        lines << (r.alreadyMerged
+                ? tr("%1 (%2): already merged, nothing new.")
+                      .arg(QFileInfo(r.path).fileName(), r.coderPseudonym)
+                : tr("%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).")
+                      .arg(QFileInfo(r.path).fileName(), r.coderPseudonym)
+                      .arg(r.added)
+                      .arg(r.changed)
+                      .arg(r.deleted)
+                      .arg(r.conflicts));
+    }
+    if (conflicts > 0)
+        lines << QString()
+              << tr("Conflicts keep the project's version until you decide: "
+                    "fourfold-cli merge PROJECT --conflicts lists them.");
+    QMessageBox::information(m_owner, tr("Merge coder copies"), lines.join(QLatin1Char('\n')));
+    emit projectChanged();
+}
+
+} // namespace fourfold

@@ -1,0 +1,65 @@
+#pragma once
+// The lead's windows beside the coding desk: comparison and adjudication, reliability, study
+// design, progress, extractor runs; the reliability report; handing out and merging coder copies.
+// Each window is opened once and raised when asked again; all are closed before the project they
+// show goes away.
+
+#include <QObject>
+#include <QPointer>
+
+class QWidget;
+
+namespace fourfold {
+
+class CodingSession;
+
+class LeadWindows : public QObject
+{
+    Q_OBJECT
+public:
+    // `owner` parents the dialogs.
+    explicit LeadWindows(QWidget *owner);
+    ~LeadWindows() override;
+
+    // The session the windows work on; closes every window of the previous one first. May be
+    // null (no project open).
+    void setSession(CodingSession *session);
+    // Closes (and deletes) every open lead window.
+    void closeAll();
+
+    void openComparison();
+    void openReliability();
+    void openStudyDesign();
+    void openProgress();
+    void openExtractors();
+    // Asks for a file name and writes the reliability report (HTML or PDF by its suffix).
+    void writeReport();
+    // Asks for a coder and a file name and writes that coder's copy.
+    void handOutCopy();
+    // Asks for returned copies and merges them; tells what was taken and any conflicts.
+    void mergeCopies();
+
+    // The windows open now (for tests); null when closed.
+    QWidget *comparison() const { return m_comparison; }
+    QWidget *reliability() const { return m_reliability; }
+    QWidget *studyDesign() const { return m_studyDesign; }
+    QWidget *progress() const { return m_progress; }
+    QWidget *extractors() const { return m_extractors; }
+
+signals:
+    // Assignments or codings changed outside the desk (study design, merge): reload the list.
+    void projectChanged();
+
+private:
+    void raise(QWidget *window);
+
+    QWidget *m_owner;
+    CodingSession *m_session = nullptr;
+    QPointer<QWidget> m_comparison;
+    QPointer<QWidget> m_reliability;
+    QPointer<QWidget> m_studyDesign;
+    QPointer<QWidget> m_progress;
+    QPointer<QWidget> m_extractors;
+};
+
+} // namespace fourfold
