@@ -170,7 +170,7 @@ TEST_CASE_METHOD(ExportFixture, "JSON Lines spans and articles", "[exchange][jso
     CHECK(r.files.size() == 2);
 }
 
-TEST_CASE_METHOD(ExportFixture, "--no-text writes offsets and hashes only", "[exchange]")
+TEST_CASE_METHOD(ExportFixture, "an export without text (--no-text) writes offsets and hashes only", "[exchange]")
 {
     for (ExportFormat f :
         {ExportFormat::Jsonl, ExportFormat::W3c, ExportFormat::Iob2, ExportFormat::Csv}) {
