@@ -20,18 +20,6 @@ QString tr(const char *text)
     return QCoreApplication::translate("cli", text);
 }
 
-QJsonObject unitizingJson(const reliability::UnitizingCategoryResult &r)
-{
-    QJsonObject o {
-        {QStringLiteral("value"), r.value ? QJsonValue(*r.value) : QJsonValue(QJsonValue::Null)},
-        {QStringLiteral("observed_disagreement"), r.observedDisagreement},
-        {QStringLiteral("expected_disagreement"), r.expectedDisagreement},
-        {QStringLiteral("verdict"), alphaVerdict(r.value)}};
-    if (!r.value)
-        o.insert(QStringLiteral("reason"), QString::fromStdString(r.reason));
-    return o;
-}
-
 // Positive specific agreement per coder pair and function: strict span F1 (same boundaries) and
 // overlap F1 (any overlap), which are symmetric in the pair (Hripcsak & Rothschild 2005).
 struct PairSpanAgreement {
@@ -144,56 +132,9 @@ int runContinuum(const Project &project, const UnitSelection &selection, bool js
     return ExitOk;
 }
 
-QJsonValue optionalNumber(const std::optional<double> &v)
-{
-    return v ? QJsonValue(*v) : QJsonValue(QJsonValue::Null);
-}
-
-QJsonArray leaveOneOutJson(const std::vector<LeaveOneOut> &entries, const QString &nameKey)
-{
-    QJsonArray a;
-    for (const LeaveOneOut &e : entries) {
-        QJsonObject o {{nameKey, e.name},
-            {QStringLiteral("alpha_without"), optionalNumber(e.alpha)},
-            {QStringLiteral("change"), optionalNumber(e.change)},
-            {QStringLiteral("pairable_values_without"), e.pairableValues},
-            {QStringLiteral("units"), e.units}};
-        if (!e.alpha)
-            o.insert(QStringLiteral("reason"), QString::fromStdString(e.reason));
-        a.append(o);
-    }
-    return a;
-}
-
 QString functionLabel(int index)
 {
     return index < 4 ? functionKey(kFramingFunctions[size_t(index)]) : QStringLiteral("none");
-}
-
-QJsonObject matchingJson(const SpanMatching &m)
-{
-    QJsonArray rows;
-    for (int r = 0; r < 4; ++r) {
-        QJsonObject row;
-        for (int c = 0; c < FunctionConfusion::kSize; ++c)
-            row.insert(functionLabel(c), m.confusion.at(r, c));
-        rows.append(QJsonObject {
-            {QStringLiteral("function"), functionLabel(r)}, {QStringLiteral("other"), row}});
-    }
-    QJsonArray habits;
-    for (const BoundaryHabit &b : m.boundaries)
-        habits.append(
-            QJsonObject {{QStringLiteral("coder"), b.coder}, {QStringLiteral("matches"), b.matches},
-                {QStringLiteral("mean_length_difference"), b.meanLengthDifference},
-                {QStringLiteral("standard_error"), b.standardError},
-                {QStringLiteral("mean_start_difference"), b.meanStartDifference},
-                {QStringLiteral("mean_end_difference"), b.meanEndDifference},
-                {QStringLiteral("share_longer"), b.shareLonger},
-                {QStringLiteral("share_shorter"), b.shareShorter},
-                {QStringLiteral("systematic"), b.systematic}});
-    return QJsonObject {{QStringLiteral("coders"), QJsonArray::fromStringList(m.coders)},
-        {QStringLiteral("pairs_compared"), m.pairsCompared}, {QStringLiteral("confusion"), rows},
-        {QStringLiteral("boundaries"), habits}};
 }
 
 QStringList leaveOneOutText(const std::vector<LeaveOneOut> &entries)
@@ -391,28 +332,8 @@ int runAgree(const QStringList &arguments)
             auto book = project->codebook();
             if (!book)
                 return report(book.error());
-            std::optional<MeasurementLevel> bookLevel;
-            QStringList bookValues;
-            if (selection.unit == UnitKind::Span && selection.function) {
-                for (const AttributeSpec &a : book->definition(*selection.function).attributes)
-                    if (a.key == selection.attribute) {
-                        bookLevel = a.level;
-                        bookValues = a.values;
-                    }
-                if (!bookLevel)
-                    return usageError(command,
-                        tr("the codebook has no attribute \"%1\" for %2.")
-                            .arg(selection.attribute, functionKey(*selection.function)));
-            } else if (selection.unit == UnitKind::Article) {
-                if (const ArticleItem *i = book->item(selection.item)) {
-                    bookLevel = i->level;
-                    bookValues = i->values;
-                }
-            }
-            if (bookLevel == MeasurementLevel::Ordinal) {
-                encoding.level = reliability::Level::Ordinal;
-                encoding.order = bookValues;
-            }
+            if (auto st = applyCodebookLevel(*book, selection, encoding); !st)
+                return usageError(command, st.error().message);
         }
         if (selection.unit == UnitKind::Continuum)
             return runContinuum(*project, selection, parser.isSet(json));
@@ -452,13 +373,8 @@ int runAgree(const QStringList &arguments)
     }
     if (parser.isSet(json)) {
         QJsonObject o = agreementJson(result);
-        QJsonObject d {{QStringLiteral("leave_one_coder_out"),
-                           leaveOneOutJson(*coderCosts, QStringLiteral("coder"))},
-            {QStringLiteral("leave_one_article_out"),
-                leaveOneOutJson(*articleCosts, QStringLiteral("article"))}};
-        if (matching)
-            d.insert(QStringLiteral("span_matching"), matchingJson(*matching));
-        o.insert(QStringLiteral("diagnostics"), d);
+        o.insert(QStringLiteral("diagnostics"),
+            diagnosticsJson(*coderCosts, *articleCosts, matching ? &*matching : nullptr));
         printJson(o);
         return ExitOk;
     }

@@ -46,68 +46,11 @@ QStringList commonArguments(const ReportOptions &options, bool bootstrap)
 // What `fourfold-cli agree` computes for a project selection (app/cli/command_agree.cpp): the
 // level comes from the codebook for span attributes and article items (only an ordinal level
 // changes the encoding), and units carrying all four functions are sets compared with MASI.
-QJsonValue optionalNumber(const std::optional<double> &v)
-{
-    return v ? QJsonValue(*v) : QJsonValue(QJsonValue::Null);
-}
-
-// agree --diagnostics (app/cli/command_agree.cpp): alpha without each coder and each article.
-QJsonArray leaveOneOutJson(const std::vector<LeaveOneOut> &entries, const QString &nameKey)
-{
-    QJsonArray a;
-    for (const LeaveOneOut &e : entries) {
-        QJsonObject o {{nameKey, e.name},
-            {QStringLiteral("alpha_without"), optionalNumber(e.alpha)},
-            {QStringLiteral("change"), optionalNumber(e.change)},
-            {QStringLiteral("pairable_values_without"), e.pairableValues},
-            {QStringLiteral("units"), e.units}};
-        if (!e.alpha)
-            o.insert(QStringLiteral("reason"), QString::fromStdString(e.reason));
-        a.append(o);
-    }
-    return a;
-}
-
-// The function confusion of agree --diagnostics (its boundary habits are left out).
-QJsonObject confusionJson(const SpanMatching &m)
-{
-    auto label = [](int index) {
-        return index < 4 ? functionKey(kFramingFunctions[size_t(index)]) : QStringLiteral("none");
-    };
-    QJsonArray rows;
-    for (int r = 0; r < 4; ++r) {
-        QJsonObject row;
-        for (int c = 0; c < FunctionConfusion::kSize; ++c)
-            row.insert(label(c), m.confusion.at(r, c));
-        rows.append(
-            QJsonObject {{QStringLiteral("function"), label(r)}, {QStringLiteral("other"), row}});
-    }
-    return QJsonObject {{QStringLiteral("coders"), QJsonArray::fromStringList(m.coders)},
-        {QStringLiteral("pairs_compared"), m.pairsCompared}, {QStringLiteral("confusion"), rows}};
-}
-
 Result<QJsonObject> agreeJson(const Project &project, const Codebook &book,
     const UnitSelection &selection, const ReportOptions &options, bool diagnostics = false)
 {
     EncodingOptions encoding;
-    std::optional<MeasurementLevel> bookLevel;
-    QStringList bookValues;
-    if (selection.unit == UnitKind::Span && selection.function) {
-        for (const AttributeSpec &a : book.definition(*selection.function).attributes)
-            if (a.key == selection.attribute) {
-                bookLevel = a.level;
-                bookValues = a.values;
-            }
-    } else if (selection.unit == UnitKind::Article) {
-        if (const ArticleItem *i = book.item(selection.item)) {
-            bookLevel = i->level;
-            bookValues = i->values;
-        }
-    }
-    if (bookLevel == MeasurementLevel::Ordinal) {
-        encoding.level = reliability::Level::Ordinal;
-        encoding.order = bookValues;
-    }
+    FOURFOLD_TRY_STATUS(applyCodebookLevel(book, selection, encoding));
     auto table = unitTable(project, selection);
     if (!table)
         return std::unexpected(table.error());
@@ -136,11 +79,7 @@ Result<QJsonObject> agreeJson(const Project &project, const Codebook &book,
     if (!matching)
         return std::unexpected(matching.error());
     json.insert(QStringLiteral("diagnostics"),
-        QJsonObject {{QStringLiteral("leave_one_coder_out"),
-                         leaveOneOutJson(*coderCosts, QStringLiteral("coder"))},
-            {QStringLiteral("leave_one_article_out"),
-                leaveOneOutJson(*articleCosts, QStringLiteral("article"))},
-            {QStringLiteral("span_matching"), confusionJson(*matching)}});
+        diagnosticsJson(*coderCosts, *articleCosts, &*matching));
     return json;
 }
 
@@ -154,18 +93,6 @@ QString drawText(const Draw &draw)
               "articles with no earlier assignment, on %6.")
         .arg(QString::number(draw.articles.size()), phaseKey(draw.phase), how,
             QString::number(draw.seed), QString::number(draw.frameArticles), draw.drawnAt.left(10));
-}
-
-QJsonObject unitizingJson(const reliability::UnitizingCategoryResult &r)
-{
-    QJsonObject o {
-        {QStringLiteral("value"), r.value ? QJsonValue(*r.value) : QJsonValue(QJsonValue::Null)},
-        {QStringLiteral("observed_disagreement"), r.observedDisagreement},
-        {QStringLiteral("expected_disagreement"), r.expectedDisagreement},
-        {QStringLiteral("verdict"), alphaVerdict(r.value)}};
-    if (!r.value)
-        o.insert(QStringLiteral("reason"), QString::fromStdString(r.reason));
-    return o;
 }
 
 // agree --unit continuum --json without its span_agreement part.

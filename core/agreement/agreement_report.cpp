@@ -291,4 +291,16 @@ QString agreementText(const AgreementReport &r)
     return lines.join(QLatin1Char('\n'));
 }
 
+QJsonObject unitizingJson(const reliability::UnitizingCategoryResult &result)
+{
+    QJsonObject o {{QStringLiteral("value"),
+                       result.value ? QJsonValue(*result.value) : QJsonValue(QJsonValue::Null)},
+        {QStringLiteral("observed_disagreement"), result.observedDisagreement},
+        {QStringLiteral("expected_disagreement"), result.expectedDisagreement},
+        {QStringLiteral("verdict"), alphaVerdict(result.value)}};
+    if (!result.value)
+        o.insert(QStringLiteral("reason"), QString::fromStdString(result.reason));
+    return o;
+}
+
 } // namespace fourfold

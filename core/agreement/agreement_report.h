@@ -7,6 +7,7 @@
 #include "core/reliability/alpha_bootstrap.h"
 #include "core/reliability/kappa.h"
 #include "core/reliability/krippendorff_alpha.h"
+#include "core/reliability/unitizing_alpha.h"
 
 #include <QJsonObject>
 #include <QString>
@@ -71,5 +72,8 @@ QJsonObject agreementJson(const AgreementReport &report);
 QString agreementText(const AgreementReport &report);
 // "reliable (≥ 0.800)", "tentative only (0.667–0.800)", "unreliable (< 0.667)", or "undefined".
 QString alphaVerdict(const std::optional<double> &alpha);
+// One unitizing alpha as `agree --unit continuum --json` writes it: value (null with a reason when
+// undefined), observed and expected disagreement, verdict.
+QJsonObject unitizingJson(const reliability::UnitizingCategoryResult &result);
 
 } // namespace fourfold

@@ -5,6 +5,7 @@
 #include <QCoreApplication>
 #include <QDateTime>
 #include <QHash>
+#include <QJsonArray>
 #include <QRegularExpression>
 #include <QSet>
 
@@ -428,6 +429,72 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
     if (!carryOn(progress, int(periods.size()), int(periods.size())))
         return cancelled();
     return periods;
+}
+
+namespace {
+
+QJsonValue optionalNumber(const std::optional<double> &v)
+{
+    return v ? QJsonValue(*v) : QJsonValue(QJsonValue::Null);
+}
+
+QJsonArray leaveOneOutJson(const std::vector<LeaveOneOut> &entries, const QString &nameKey)
+{
+    QJsonArray a;
+    for (const LeaveOneOut &e : entries) {
+        QJsonObject o {{nameKey, e.name},
+            {QStringLiteral("alpha_without"), optionalNumber(e.alpha)},
+            {QStringLiteral("change"), optionalNumber(e.change)},
+            {QStringLiteral("pairable_values_without"), e.pairableValues},
+            {QStringLiteral("units"), e.units}};
+        if (!e.alpha)
+            o.insert(QStringLiteral("reason"), QString::fromStdString(e.reason));
+        a.append(o);
+    }
+    return a;
+}
+
+QString confusionLabel(int index)
+{
+    return index < 4 ? functionKey(kFramingFunctions[size_t(index)]) : QStringLiteral("none");
+}
+
+QJsonObject matchingJson(const SpanMatching &m)
+{
+    QJsonArray rows;
+    for (int r = 0; r < 4; ++r) {
+        QJsonObject row;
+        for (int c = 0; c < FunctionConfusion::kSize; ++c)
+            row.insert(confusionLabel(c), m.confusion.at(r, c));
+        rows.append(QJsonObject {
+            {QStringLiteral("function"), confusionLabel(r)}, {QStringLiteral("other"), row}});
+    }
+    QJsonArray habits;
+    for (const BoundaryHabit &b : m.boundaries)
+        habits.append(
+            QJsonObject {{QStringLiteral("coder"), b.coder}, {QStringLiteral("matches"), b.matches},
+                {QStringLiteral("mean_length_difference"), b.meanLengthDifference},
+                {QStringLiteral("standard_error"), b.standardError},
+                {QStringLiteral("mean_start_difference"), b.meanStartDifference},
+                {QStringLiteral("mean_end_difference"), b.meanEndDifference},
+                {QStringLiteral("share_longer"), b.shareLonger},
+                {QStringLiteral("share_shorter"), b.shareShorter},
+                {QStringLiteral("systematic"), b.systematic}});
+    return QJsonObject {{QStringLiteral("coders"), QJsonArray::fromStringList(m.coders)},
+        {QStringLiteral("pairs_compared"), m.pairsCompared}, {QStringLiteral("confusion"), rows},
+        {QStringLiteral("boundaries"), habits}};
+}
+
+} // namespace
+
+QJsonObject diagnosticsJson(const std::vector<LeaveOneOut> &coders,
+    const std::vector<LeaveOneOut> &articles, const SpanMatching *matching)
+{
+    QJsonObject d {{QStringLiteral("leave_one_coder_out"), leaveOneOutJson(coders, QStringLiteral("coder"))},
+        {QStringLiteral("leave_one_article_out"), leaveOneOutJson(articles, QStringLiteral("article"))}};
+    if (matching)
+        d.insert(QStringLiteral("span_matching"), matchingJson(*matching));
+    return d;
 }
 
 } // namespace fourfold

@@ -21,6 +21,7 @@
 #include "core/agreement/value_encoding.h"
 #include "core/reliability/krippendorff_alpha.h"
 
+#include <QJsonObject>
 #include <QStringList>
 
 #include <functional>
@@ -103,6 +104,12 @@ struct SpanMatching {
 // selection.function says) on the articles both coded, in the selected phase and articles.
 // Fails with NotFound / InvalidArgument as unitTable() does for an unknown coder or article or
 // fewer than two coders, Cancelled when `progress` returns false.
+// The "diagnostics" object of `agree --diagnostics --json` (keys in the README): the two
+// leave-one-out lists, costliest first, and for a project the span matching (confusion and
+// boundary habits).
+QJsonObject diagnosticsJson(const std::vector<LeaveOneOut> &coders,
+    const std::vector<LeaveOneOut> &articles, const SpanMatching *matching);
+
 Result<SpanMatching> matchSpans(const Project &project, const UnitSelection &selection,
     const DiagnosticsProgress &progress = {});
 

@@ -401,4 +401,32 @@ Result<ContinuumData> continuumData(const Project &project, const UnitSelection 
     return out;
 }
 
+Status applyCodebookLevel(
+    const Codebook &codebook, const UnitSelection &selection, EncodingOptions &encoding)
+{
+    std::optional<MeasurementLevel> level;
+    QStringList values;
+    if (selection.unit == UnitKind::Span && selection.function) {
+        for (const AttributeSpec &a : codebook.definition(*selection.function).attributes)
+            if (a.key == selection.attribute) {
+                level = a.level;
+                values = a.values;
+            }
+        if (!level)
+            return fail(ErrorCode::InvalidArgument,
+                tr("the codebook has no attribute \"%1\" for %2.")
+                    .arg(selection.attribute, functionKey(*selection.function)));
+    } else if (selection.unit == UnitKind::Article) {
+        if (const ArticleItem *i = codebook.item(selection.item)) {
+            level = i->level;
+            values = i->values;
+        }
+    }
+    if (level == MeasurementLevel::Ordinal) {
+        encoding.level = reliability::Level::Ordinal;
+        encoding.order = values;
+    }
+    return {};
+}
+
 } // namespace fourfold

@@ -3,7 +3,9 @@
 // not code an article is missing for its units, never "absent": a coder coded an article if
 // they are assigned to it (in the chosen phase) or have any annotation or answer on it.
 
+#include "core/agreement/value_encoding.h"
 #include "core/io/reliability_table_reader.h"
+#include "core/model/codebook.h"
 #include "core/model/annotation.h"
 #include "core/model/error.h"
 #include "core/model/framing_function.h"
@@ -66,5 +68,11 @@ struct ContinuumData {
     int categories = 4; // 4, or 1 when one function is selected (category 0)
 };
 Result<ContinuumData> continuumData(const Project &project, const UnitSelection &selection);
+
+// Takes the level and value order of the selected span attribute or article item from
+// `codebook` into `encoding` (only an ordinal level changes it: its values in order). Fails with
+// InvalidArgument if a span selection names an attribute the codebook lacks for its function.
+Status applyCodebookLevel(
+    const Codebook &codebook, const UnitSelection &selection, EncodingOptions &encoding);
 
 } // namespace fourfold
