@@ -4,7 +4,12 @@
 
 #include <QCoreApplication>
 #ifdef FOURFOLD_HAVE_REPORT
+#include <QDir>
 #include <QGuiApplication>
+
+#include <cerrno>
+#include <sys/stat.h>
+#include <unistd.h>
 #endif
 
 #include <functional>
@@ -76,6 +81,16 @@ int main(int argc, char *argv[])
     if (argc > 1 && qstrcmp(argv[1], "report") == 0) {
         if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM"))
             qputenv("QT_QPA_PLATFORM", "offscreen");
+        // Qt's platform code wants a private runtime folder and warns on stderr without one
+        // (as in a login-less shell or CI); give it one so the report's output stays clean.
+        if (!qEnvironmentVariableIsSet("XDG_RUNTIME_DIR")) {
+            const QByteArray dir = QDir::temp()
+                                       .filePath(QStringLiteral("fourfold-runtime-%1")
+                                               .arg(QString::number(::getuid())))
+                                       .toLocal8Bit();
+            if (::mkdir(dir.constData(), 0700) == 0 || errno == EEXIST)
+                qputenv("XDG_RUNTIME_DIR", dir);
+        }
         application = std::make_unique<QGuiApplication>(argc, argv);
     }
 #endif
