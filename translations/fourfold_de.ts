@@ -2,6 +2,14 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="de">
 <context>
+    <name>ExtractorJob</name>
+    <message>
+        <location filename="../app/desktop/runs/extractor_job.cpp" line="16"/>
+        <source>Choose at least one run.</source>
+        <translation>Wählen Sie mindestens einen Lauf.</translation>
+    </message>
+</context>
+<context>
     <name>FunctionStyle</name>
     <message>
         <location filename="../app/desktop/function_style.cpp" line="30"/>
@@ -81,6 +89,24 @@
     </message>
 </context>
 <context>
+    <name>ReliabilityJob</name>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="38"/>
+        <source>The computation was cancelled.</source>
+        <translation>Die Berechnung wurde abgebrochen.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="63"/>
+        <source>Choose at least one framing function.</source>
+        <translation>Wählen Sie mindestens eine Framing-Funktion.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="99"/>
+        <source>The continuum could not be compared.</source>
+        <translation>Das Kontinuum konnte nicht verglichen werden.</translation>
+    </message>
+</context>
+<context>
     <name>StudyText</name>
     <message>
         <location filename="../app/desktop/study/study_text.cpp" line="13"/>
@@ -116,29 +142,6 @@
         <location filename="../app/desktop/study/study_text.cpp" line="33"/>
         <source>%1 h %2 min</source>
         <translation>%1 h %2 min</translation>
-    </message>
-</context>
-<context>
-    <name>fourfold</name>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="43"/>
-        <source>The computation was cancelled.</source>
-        <translation>Die Berechnung wurde abgebrochen.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="68"/>
-        <source>Choose at least one framing function.</source>
-        <translation>Wählen Sie mindestens eine Framing-Funktion.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="104"/>
-        <source>The continuum could not be compared.</source>
-        <translation>Das Kontinuum konnte nicht verglichen werden.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/runs/extractor_job.cpp" line="21"/>
-        <source>Choose at least one run.</source>
-        <translation>Wählen Sie mindestens einen Lauf.</translation>
     </message>
 </context>
 <context>
@@ -1177,19 +1180,19 @@
     </message>
     <message numerus="yes">
         <location filename="../app/desktop/runs/extractor_window.cpp" line="638"/>
-        <source>%1: alpha on %n %2 unit(s) with coders %3.</source>
+        <source>%1: alpha on %n unit(s) (%2) with coders %3.</source>
         <translation>
             <numerusform>%1: Alpha auf %n Einheit (%2) mit den Codierenden %3.</numerusform>
             <numerusform>%1: Alpha auf %n Einheiten (%2) mit den Codierenden %3.</numerusform>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="642"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="643"/>
         <source>%1: no band with the coders — %2</source>
         <translation>%1: kein Band mit den Codierenden — %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="645"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="646"/>
         <source>Scored against %1, %2 matching; intervals from %n bootstrap replicate(s) over articles.</source>
         <translation>
             <numerusform>Bewertet gegen %1, Abgleich %2; Intervalle aus %n Bootstrap-Replikation über Artikel.</numerusform>
@@ -1197,7 +1200,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="662"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="663"/>
         <source>Errors of run &lt;b&gt;%1&lt;/b&gt; against %2 (%3 matching) on %n article(s). Double-click an error to see its passage.</source>
         <translation>
             <numerusform>Fehler des Laufs &lt;b&gt;%1&lt;/b&gt; gegen %2 (Abgleich %3) in %n Artikel. Doppelklicken Sie auf einen Fehler, um seine Passage zu sehen.</numerusform>
@@ -1205,43 +1208,43 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="668"/>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="724"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="669"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="725"/>
         <source>No run scored.</source>
         <translation>Kein Lauf bewertet.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="682"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="683"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="712"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="713"/>
         <source>reference</source>
         <translation>Referenz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="717"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="718"/>
         <source>None (false positive)</source>
         <translation>Keine (falsch positiv)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="718"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="719"/>
         <source>None (miss)</source>
         <translation>Keine (verfehlt)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="729"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="730"/>
         <source>Rows: the function %1 gives a span; columns: the function run &lt;b&gt;%2&lt;/b&gt; gives it (%3 matching). The diagonal is agreement on the function.</source>
         <translation>Zeilen: die Funktion, die %1 einer Textstelle gibt; Spalten: die Funktion, die Lauf &lt;b&gt;%2&lt;/b&gt; ihr gibt (Abgleich %3). Die Diagonale ist Übereinstimmung in der Funktion.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="777"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="778"/>
         <source>%1 %2 → run %3: %4</source>
         <translation>%1 %2 → Lauf %3: %4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="783"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="784"/>
         <source>The run gives no matched span another function.</source>
         <translation>Der Lauf gibt keiner zugeordneten Textstelle eine andere Funktion.</translation>
     </message>
@@ -3068,7 +3071,7 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="401"/>
-        <source>&lt;b&gt;No %1 sample is drawn yet.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
+        <source>&lt;b&gt;No sample is drawn yet for the phase %1.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
         <translation>&lt;b&gt;Für die Phase %1 ist noch keine Stichprobe gezogen.&lt;/b&gt; Wählen Sie Umfang, Methode, Seed und Codierende und drücken Sie dann &lt;i&gt;Ziehen&lt;/i&gt;, um die Stichprobe zu sehen und ob sie groß genug ist.</translation>
     </message>
     <message>

@@ -2,6 +2,14 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="nl">
 <context>
+    <name>ExtractorJob</name>
+    <message>
+        <location filename="../app/desktop/runs/extractor_job.cpp" line="16"/>
+        <source>Choose at least one run.</source>
+        <translation>Kies ten minste één run.</translation>
+    </message>
+</context>
+<context>
     <name>FunctionStyle</name>
     <message>
         <location filename="../app/desktop/function_style.cpp" line="30"/>
@@ -81,6 +89,24 @@
     </message>
 </context>
 <context>
+    <name>ReliabilityJob</name>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="38"/>
+        <source>The computation was cancelled.</source>
+        <translation>De berekening is geannuleerd.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="63"/>
+        <source>Choose at least one framing function.</source>
+        <translation>Kies ten minste één framingfunctie.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="99"/>
+        <source>The continuum could not be compared.</source>
+        <translation>Het continuüm kon niet worden vergeleken.</translation>
+    </message>
+</context>
+<context>
     <name>StudyText</name>
     <message>
         <location filename="../app/desktop/study/study_text.cpp" line="13"/>
@@ -116,29 +142,6 @@
         <location filename="../app/desktop/study/study_text.cpp" line="33"/>
         <source>%1 h %2 min</source>
         <translation>%1 u %2 min</translation>
-    </message>
-</context>
-<context>
-    <name>fourfold</name>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="43"/>
-        <source>The computation was cancelled.</source>
-        <translation>De berekening is geannuleerd.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="68"/>
-        <source>Choose at least one framing function.</source>
-        <translation>Kies ten minste één framingfunctie.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="104"/>
-        <source>The continuum could not be compared.</source>
-        <translation>Het continuüm kon niet worden vergeleken.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/runs/extractor_job.cpp" line="21"/>
-        <source>Choose at least one run.</source>
-        <translation>Kies ten minste één run.</translation>
     </message>
 </context>
 <context>
@@ -1177,19 +1180,19 @@
     </message>
     <message numerus="yes">
         <location filename="../app/desktop/runs/extractor_window.cpp" line="638"/>
-        <source>%1: alpha on %n %2 unit(s) with coders %3.</source>
+        <source>%1: alpha on %n unit(s) (%2) with coders %3.</source>
         <translation>
-            <numerusform>%1: alfa op %n %2-eenheid met codeurs %3.</numerusform>
-            <numerusform>%1: alfa op %n %2-eenheden met codeurs %3.</numerusform>
+            <numerusform>%1: alfa op %n eenheid (%2) met codeurs %3.</numerusform>
+            <numerusform>%1: alfa op %n eenheden (%2) met codeurs %3.</numerusform>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="642"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="643"/>
         <source>%1: no band with the coders — %2</source>
         <translation>%1: geen band met de codeurs — %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="645"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="646"/>
         <source>Scored against %1, %2 matching; intervals from %n bootstrap replicate(s) over articles.</source>
         <translation>
             <numerusform>Gescoord tegen %1, vergelijkingswijze %2; intervallen uit %n bootstrapreplicatie over artikelen.</numerusform>
@@ -1197,7 +1200,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="662"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="663"/>
         <source>Errors of run &lt;b&gt;%1&lt;/b&gt; against %2 (%3 matching) on %n article(s). Double-click an error to see its passage.</source>
         <translation>
             <numerusform>Fouten van run &lt;b&gt;%1&lt;/b&gt; tegen %2 (vergelijkingswijze %3) in %n artikel. Dubbelklik op een fout om de passage te zien.</numerusform>
@@ -1205,43 +1208,43 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="668"/>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="724"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="669"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="725"/>
         <source>No run scored.</source>
         <translation>Geen run gescoord.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="682"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="683"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="712"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="713"/>
         <source>reference</source>
         <translation>referentie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="717"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="718"/>
         <source>None (false positive)</source>
         <translation>Geen (fout-positief)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="718"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="719"/>
         <source>None (miss)</source>
         <translation>Geen (gemist)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="729"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="730"/>
         <source>Rows: the function %1 gives a span; columns: the function run &lt;b&gt;%2&lt;/b&gt; gives it (%3 matching). The diagonal is agreement on the function.</source>
         <translation>Rijen: de functie die %1 aan een fragment geeft; kolommen: de functie die run &lt;b&gt;%2&lt;/b&gt; eraan geeft (vergelijkingswijze %3). De diagonaal is overeenstemming over de functie.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="777"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="778"/>
         <source>%1 %2 → run %3: %4</source>
         <translation>%1 %2 → run %3: %4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="783"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="784"/>
         <source>The run gives no matched span another function.</source>
         <translation>De run geeft geen enkel gekoppeld fragment een andere functie.</translation>
     </message>
@@ -3068,7 +3071,7 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="401"/>
-        <source>&lt;b&gt;No %1 sample is drawn yet.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
+        <source>&lt;b&gt;No sample is drawn yet for the phase %1.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
         <translation>&lt;b&gt;Er is nog geen steekproef voor de fase %1 getrokken.&lt;/b&gt; Kies de omvang, methode, seed en codeurs en druk dan op &lt;i&gt;Trekken&lt;/i&gt; om de steekproef te zien en of die groot genoeg is.</translation>
     </message>
     <message>

@@ -8,11 +8,6 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ReliabilityJob", text);
-}
-
 // Counts the job's steps and asks the caller whether to go on.
 class Steps
 {
@@ -40,7 +35,7 @@ private:
 
 std::unexpected<Error> cancelled()
 {
-    return fail(ErrorCode::Cancelled, tr("The computation was cancelled."));
+    return fail(ErrorCode::Cancelled, QCoreApplication::translate("ReliabilityJob", "The computation was cancelled."));
 }
 
 } // namespace
@@ -65,7 +60,7 @@ Result<ReliabilityOutcome> runReliabilityJob(
     const ReliabilityRequest &request, const JobProgress &progress)
 {
     if (request.functions.empty() && request.unit != UnitKind::Article)
-        return fail(ErrorCode::InvalidArgument, tr("Choose at least one framing function."));
+        return fail(ErrorCode::InvalidArgument, QCoreApplication::translate("ReliabilityJob", "Choose at least one framing function."));
     // A connection of this thread's own: the window's connection stays on the GUI thread.
     auto project = Project::open(request.projectPath);
     if (!project)
@@ -101,7 +96,7 @@ Result<ReliabilityOutcome> runReliabilityJob(
         out.unitizing = reliability::unitizingAlpha(0, continuum->length,
             int(continuum->coders.size()), continuum->categories, continuum->units);
         if (!out.unitizing->inputError.empty())
-            return fail(ErrorCode::Internal, tr("The continuum could not be compared."),
+            return fail(ErrorCode::Internal, QCoreApplication::translate("ReliabilityJob", "The continuum could not be compared."),
                 QString::fromStdString(out.unitizing->inputError));
         if (!steps.next())
             return cancelled();

@@ -8,17 +8,12 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ExtractorJob", text);
-}
-
 } // namespace
 
 Result<ExtractorOutcome> runExtractorJob(const ExtractorRequest &request)
 {
     if (request.runs.isEmpty())
-        return fail(ErrorCode::InvalidArgument, tr("Choose at least one run."));
+        return fail(ErrorCode::InvalidArgument, QCoreApplication::translate("ExtractorJob", "Choose at least one run."));
     // A connection of this thread's own: the window's connection stays on the GUI thread.
     auto project = Project::open(request.projectPath);
     if (!project)

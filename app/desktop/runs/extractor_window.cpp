@@ -635,8 +635,9 @@ void ExtractorWindow::showScores()
         addRow(tr("Macro"), QColor(), nullptr, s.macroPrecision, s.macroRecall, s.macroF1,
             s.replicates ? &s.macroIntervals : nullptr, nullptr);
         if (run.agreement)
-            notes << tr("%1: alpha on %n %2 unit(s) with coders %3.", nullptr, run.agreement->units)
-                         .arg(run.run, m_unit->currentText().toLower(),
+            notes << tr("%1: alpha on %n unit(s) (%2) with coders %3.", nullptr,
+                run.agreement->units)
+                         .arg(run.run, m_unit->currentText(),
                              run.agreement->coders.join(QStringLiteral(", ")));
         else
             notes << tr("%1: no band with the coders — %2").arg(run.run, run.agreementError);

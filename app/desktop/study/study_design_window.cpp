@@ -398,9 +398,9 @@ void StudyDesignWindow::loadRecordedDraw()
     }
     m_drawButton->setEnabled(true);
     m_drawState->setText(
-        tr("<b>No %1 sample is drawn yet.</b> Choose the size, method, seed and coders, then "
-           "press <i>Draw</i> to see the sample and whether it is large enough.")
-            .arg(studyPhaseName(drawPhase()).toLower()));
+        tr("<b>No sample is drawn yet for the phase %1.</b> Choose the size, method, seed and "
+           "coders, then press <i>Draw</i> to see the sample and whether it is large enough.")
+            .arg(studyPhaseName(drawPhase())));
     m_advice->hide();
     m_strata->hide();
     m_drawnArticles->clear();
