@@ -476,6 +476,7 @@ void ExtractorWindow::compute()
         return;
     }
     m_pending = false;
+    m_busy = true;
     m_progress->setVisible(true);
     setStatus(tr("Scoring %n run(s)…", nullptr, int(m_running.runs.size())));
     m_watcher.setFuture(
@@ -484,12 +485,14 @@ void ExtractorWindow::compute()
 
 bool ExtractorWindow::isRunning() const
 {
-    return m_watcher.isRunning();
+    // Until finish() has taken the result: the future may be done while its signal is queued.
+    return m_busy;
 }
 
 void ExtractorWindow::finish()
 {
     m_progress->setVisible(false);
+    m_busy = false;
     Result<ExtractorOutcome> result = m_watcher.result();
     if (m_pending) {
         // The controls changed meanwhile: these results are already out of date.

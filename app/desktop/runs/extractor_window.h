@@ -119,6 +119,7 @@ private:
     QFutureWatcher<Result<ExtractorOutcome>> m_watcher;
     ExtractorRequest m_running;
     bool m_pending = false;
+    bool m_busy = false; // a computation started and its result not yet taken
     bool m_filling = false; // controls are being set up: no recomputation yet
     std::optional<ExtractorOutcome> m_outcome;
 };
