@@ -1,10 +1,10 @@
 // `fourfold-cli handout` and `merge` as a script sees them: exit codes (0 ok, 1 failed, 2 usage),
 // one-line errors on stderr, JSON output; the project file checked before and after.
 #include "copies_fixture.h"
+#include "tests/support/cli_run.h"
 
 #include <QJsonArray>
-#include <QJsonDocument>
-#include <QProcess>
+#include <QJsonObject>
 
 #include <sqlite3.h>
 
@@ -13,28 +13,9 @@ using namespace fourfold::test;
 
 namespace {
 
-struct Run {
-    int exitCode = -1;
-    QString out;
-    QString err;
-};
-
-Run cli(const QStringList &args)
+CliRun cli(const QStringList &args)
 {
-    QProcess p;
-    p.start(QStringLiteral(FOURFOLD_CLI), args);
-    REQUIRE(p.waitForFinished(120000));
-    return Run {p.exitCode(), QString::fromUtf8(p.readAllStandardOutput()),
-        QString::fromUtf8(p.readAllStandardError())};
-}
-
-QJsonObject json(const Run &r)
-{
-    QJsonParseError e;
-    const QJsonDocument doc = QJsonDocument::fromJson(r.out.toUtf8(), &e);
-    INFO(r.out.toStdString() << r.err.toStdString());
-    REQUIRE(e.error == QJsonParseError::NoError);
-    return doc.object();
+    return runCli(QStringLiteral(FOURFOLD_CLI), args);
 }
 
 void execSql(const QString &path, const char *sql)
@@ -72,7 +53,7 @@ void changeCauseActor(const QString &path, const QString &actor)
 TEST_CASE("handout and merge answer --help and refuse wrong command lines with exit 2")
 {
     for (const char *command : {"handout", "merge"}) {
-        const Run r = cli({QString::fromLatin1(command), QStringLiteral("--help")});
+        const CliRun r = cli({QString::fromLatin1(command), QStringLiteral("--help")});
         CHECK(r.exitCode == 0);
         CHECK(r.out.contains(QStringLiteral("Usage: fourfold-cli %1").arg(QLatin1String(command))));
     }
@@ -81,7 +62,7 @@ TEST_CASE("handout and merge answer --help and refuse wrong command lines with e
               .exitCode
         == 2);
     CHECK(cli({QStringLiteral("merge"), QStringLiteral("p.fourfold")}).exitCode == 2);
-    const Run r = cli({QStringLiteral("merge"), QStringLiteral("p.fourfold"),
+    const CliRun r = cli({QStringLiteral("merge"), QStringLiteral("p.fourfold"),
         QStringLiteral("--resolve"), QStringLiteral("u")});
     CHECK(r.exitCode == 2);
     CHECK(r.err.contains(QStringLiteral("--keep")));
@@ -98,10 +79,10 @@ TEST_CASE("a coder copy handed out, edited, merged, merged again, tampered and i
     const QString main = f.mainPath;
     const QString copy = f.dir.filePath(QStringLiteral("c01.fourfold"));
 
-    Run r = cli({QStringLiteral("handout"), main, QStringLiteral("--coder"), QStringLiteral("C01"),
-        QStringLiteral("--out"), copy, QStringLiteral("--json")});
+    CliRun r = cli({QStringLiteral("handout"), main, QStringLiteral("--coder"),
+        QStringLiteral("C01"), QStringLiteral("--out"), copy, QStringLiteral("--json")});
     REQUIRE(r.exitCode == 0);
-    QJsonObject o = json(r);
+    QJsonObject o = cliJson(r);
     CHECK(o.value(QStringLiteral("coder")).toString() == QStringLiteral("C01"));
     CHECK(o.value(QStringLiteral("articles")).toInteger() == 2);
     CHECK(o.value(QStringLiteral("annotations")).toInteger() == 3);
@@ -116,7 +97,7 @@ TEST_CASE("a coder copy handed out, edited, merged, merged again, tampered and i
     changeCauseActor(copy, QStringLiteral("the harbour board"));
     r = cli({QStringLiteral("merge"), main, copy, QStringLiteral("--json")});
     REQUIRE(r.exitCode == 0);
-    o = json(r);
+    o = cliJson(r);
     QJsonObject merged = o.value(QStringLiteral("merged")).toArray().at(0).toObject();
     CHECK(merged.value(QStringLiteral("changed")).toInteger() == 1);
     CHECK(merged.value(QStringLiteral("alreadyMerged")).toBool() == false);
@@ -147,7 +128,7 @@ TEST_CASE("a coder copy handed out, edited, merged, merged again, tampered and i
     r = cli(
         {QStringLiteral("merge"), main, QStringLiteral("--conflicts"), QStringLiteral("--json")});
     REQUIRE(r.exitCode == 0);
-    const QJsonArray conflicts = json(r).value(QStringLiteral("conflicts")).toArray();
+    const QJsonArray conflicts = cliJson(r).value(QStringLiteral("conflicts")).toArray();
     REQUIRE(conflicts.size() == 1);
     const QJsonObject c = conflicts.at(0).toObject();
     CHECK(c.value(QStringLiteral("coder")).toString() == QStringLiteral("C01"));

@@ -3,11 +3,10 @@
 // are those of `agree --json` without the flag (the diagnostics are one added key).
 
 #include "tests/diagnostics/planted_project.h"
+#include "tests/support/cli_run.h"
 
 #include <QJsonArray>
-#include <QJsonDocument>
 #include <QJsonObject>
-#include <QProcess>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -16,15 +15,11 @@ namespace {
 
 QJsonObject agreeJson(const QStringList &args)
 {
-    QProcess p;
-    p.start(QStringLiteral(FOURFOLD_CLI), QStringList {QStringLiteral("agree")} + args);
-    REQUIRE(p.waitForFinished(120000));
-    INFO(QString::fromUtf8(p.readAllStandardError()).toStdString());
-    REQUIRE(p.exitCode() == 0);
-    QJsonParseError e;
-    const QJsonDocument doc = QJsonDocument::fromJson(p.readAllStandardOutput(), &e);
-    REQUIRE(e.error == QJsonParseError::NoError);
-    return doc.object();
+    const CliRun run =
+        runCli(QStringLiteral(FOURFOLD_CLI), QStringList {QStringLiteral("agree")} + args);
+    INFO(run.err.toStdString());
+    REQUIRE(run.exitCode == 0);
+    return cliJson(run);
 }
 
 } // namespace

@@ -1,11 +1,11 @@
 // fourfold-cli score and export, run as a program on a project built in a temporary directory.
 
 #include "tests/scoring/scoring_fixture.h"
+#include "tests/support/cli_run.h"
 
 #include <QDir>
 #include <QJsonArray>
 #include <QJsonDocument>
-#include <QProcess>
 
 using namespace fourfold;
 
@@ -13,18 +13,11 @@ namespace {
 
 using F = FramingFunction;
 
-struct Cli {
-    int exitCode = -1;
-    QString out, err;
-};
+using test::CliRun;
 
-Cli cli(const QStringList &args)
+CliRun cli(const QStringList &args)
 {
-    QProcess p;
-    p.start(QStringLiteral(FOURFOLD_CLI), args);
-    REQUIRE(p.waitForFinished(120000));
-    return Cli {p.exitCode(), QString::fromUtf8(p.readAllStandardOutput()),
-        QString::fromUtf8(p.readAllStandardError())};
+    return test::runCli(QStringLiteral(FOURFOLD_CLI), args);
 }
 
 // The hand-worked example of run_scores_test.cpp, scored against gold.
@@ -46,12 +39,12 @@ struct CliFixture : test::ScoringFixture {
 
 TEST_CASE_METHOD(CliFixture, "score prints the SemEval figures as JSON", "[exchange][cli]")
 {
-    const Cli r =
+    const CliRun r =
         cli({QStringLiteral("score"), path, QStringLiteral("--run"), QStringLiteral("hand"),
             QStringLiteral("--match"), QStringLiteral("partial"), QStringLiteral("--json")});
     INFO(r.err.toStdString());
     REQUIRE(r.exitCode == 0);
-    const QJsonObject o = QJsonDocument::fromJson(r.out.toUtf8()).object();
+    const QJsonObject o = test::cliJson(r);
     CHECK(o.value(QStringLiteral("against")).toString() == QStringLiteral("gold"));
     CHECK(o.value(QStringLiteral("match")).toString() == QStringLiteral("partial"));
     const QJsonObject micro = o.value(QStringLiteral("micro")).toObject();
@@ -102,7 +95,7 @@ TEST_CASE_METHOD(
     };
     for (const Case &c : cases) {
         INFO(c.args.join(QLatin1Char(' ')).toStdString());
-        const Cli r = cli(c.args);
+        const CliRun r = cli(c.args);
         CHECK(r.exitCode == c.exitCode);
         CHECK(r.err.contains(QString::fromUtf8(c.message)));
     }
@@ -111,12 +104,12 @@ TEST_CASE_METHOD(
 TEST_CASE_METHOD(CliFixture, "export writes the files and the manifest", "[exchange][cli]")
 {
     const QString out = dir.filePath(QStringLiteral("gold-w3c"));
-    const Cli r = cli({QStringLiteral("export"), path, QStringLiteral("--layer"),
+    const CliRun r = cli({QStringLiteral("export"), path, QStringLiteral("--layer"),
         QStringLiteral("gold"), QStringLiteral("--format"), QStringLiteral("w3c"),
         QStringLiteral("--out"), out, QStringLiteral("--json")});
     INFO(r.err.toStdString());
     REQUIRE(r.exitCode == 0);
-    const QJsonObject manifest = QJsonDocument::fromJson(r.out.toUtf8()).object();
+    const QJsonObject manifest = test::cliJson(r);
     CHECK(manifest.value(QStringLiteral("layer")).toString() == QStringLiteral("gold"));
     CHECK(manifest.value(QStringLiteral("files")).toArray().size() == 1);
     CHECK(QFile::exists(QDir(out).filePath(QStringLiteral("manifest.json"))));

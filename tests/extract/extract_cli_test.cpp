@@ -1,38 +1,19 @@
 // `fourfold-cli extract` as a script sees it: exit codes (0 done, 1 failed, 2 bad command line),
 // one-line errors on stderr, JSON output, and no run left behind after a failure.
 #include "tests/extract/extract_fixture.h"
+#include "tests/support/cli_run.h"
 
 #include <QJsonArray>
-#include <QJsonDocument>
-#include <QProcess>
+#include <QJsonObject>
 
 using namespace fourfold;
 using namespace fourfold::test;
 
 namespace {
 
-struct CliRun {
-    int exitCode = -1;
-    QString out;
-    QString err;
-};
-
 CliRun cli(const QStringList &args)
 {
-    QProcess p;
-    p.start(QStringLiteral(FOURFOLD_CLI), args);
-    REQUIRE(p.waitForFinished(120000));
-    return CliRun {p.exitCode(), QString::fromUtf8(p.readAllStandardOutput()),
-        QString::fromUtf8(p.readAllStandardError())};
-}
-
-QJsonObject json(const CliRun &r)
-{
-    QJsonParseError e;
-    const QJsonDocument doc = QJsonDocument::fromJson(r.out.toUtf8(), &e);
-    INFO(r.out.toStdString() << r.err.toStdString());
-    REQUIRE(e.error == QJsonParseError::NoError);
-    return doc.object();
+    return runCli(QStringLiteral(FOURFOLD_CLI), args);
 }
 
 QStringList runNames(const QString &project)
@@ -41,7 +22,7 @@ QStringList runNames(const QString &project)
         {QStringLiteral("extract"), project, QStringLiteral("--list"), QStringLiteral("--json")});
     REQUIRE(r.exitCode == 0);
     QStringList names;
-    for (const QJsonValue &v : json(r).value(QStringLiteral("runs")).toArray())
+    for (const QJsonValue &v : cliJson(r).value(QStringLiteral("runs")).toArray())
         names << v.toObject().value(QStringLiteral("name")).toString();
     return names;
 }
@@ -63,7 +44,7 @@ TEST_CASE("extract: baselines, list and delete through the CLI")
         QStringLiteral("--run"), QStringLiteral("pos"), QStringLiteral("--param"),
         QStringLiteral("body=cause"), QStringLiteral("--json")});
     REQUIRE(r.exitCode == 0);
-    const QJsonObject run = json(r).value(QStringLiteral("run")).toObject();
+    const QJsonObject run = cliJson(r).value(QStringLiteral("run")).toObject();
     CHECK(run.value(QStringLiteral("name")).toString() == QStringLiteral("pos"));
     CHECK(run.value(QStringLiteral("spans")).toInt() == 4);
     CHECK(run.value(QStringLiteral("spansPerFunction")).toObject()

@@ -6,6 +6,7 @@
 #include "app/report/report_document.h"
 #include "app/report/report_writer.h"
 #include "core/project/project.h"
+#include "tests/support/cli_run.h"
 #include "tests/support/test_support.h"
 
 #include <QDir>
@@ -15,7 +16,6 @@
 #include <QJsonArray>
 #include <QJsonDocument>
 #include <QJsonObject>
-#include <QProcess>
 #include <QRegularExpression>
 #include <QSet>
 #include <QStandardPaths>
@@ -29,29 +29,18 @@ using namespace fourfold::test;
 
 namespace {
 
-struct Run {
-    int exitCode = -1;
-    QString out;
-    QString err;
-};
-
-Run run(const QString &program, const QStringList &args)
+CliRun run(const QString &program, const QStringList &args)
 {
     // A private runtime directory keeps QStandardPaths from warning on stderr where a CI
     // machine has none (the offscreen platform asks for it).
     static QTemporaryDir runtime;
-    QProcess p;
     QProcessEnvironment env = QProcessEnvironment::systemEnvironment();
     if (!env.contains(QStringLiteral("XDG_RUNTIME_DIR")))
         env.insert(QStringLiteral("XDG_RUNTIME_DIR"), runtime.path());
-    p.setProcessEnvironment(env);
-    p.start(program, args);
-    REQUIRE(p.waitForFinished(180000));
-    return Run {p.exitCode(), QString::fromUtf8(p.readAllStandardOutput()),
-        QString::fromUtf8(p.readAllStandardError())};
+    return runCli(program, args, 180000, env);
 }
 
-Run cli(const QStringList &args)
+CliRun cli(const QStringList &args)
 {
     return run(QStringLiteral(FOURFOLD_CLI), args);
 }
@@ -132,13 +121,14 @@ const Sample &sample()
         made->project = made->dir.filePath(QStringLiteral("demo.fourfold"));
         made->html = made->dir.filePath(QStringLiteral("report.html"));
         made->pdf = made->dir.filePath(QStringLiteral("report.pdf"));
-        const Run built = cli(
+        const CliRun built = cli(
             {QStringLiteral("build-sample"), QStringLiteral(FOURFOLD_SAMPLE_DIR), made->project});
         INFO(built.err.toStdString());
         REQUIRE(built.exitCode == 0);
-        const Run written = cli({QStringLiteral("report"), made->project, QStringLiteral("--out"),
-            made->html, QStringLiteral("--out"), made->pdf, QStringLiteral("--bootstrap"),
-            QStringLiteral("500"), QStringLiteral("--seed"), QStringLiteral("7")});
+        const CliRun written =
+            cli({QStringLiteral("report"), made->project, QStringLiteral("--out"), made->html,
+                QStringLiteral("--out"), made->pdf, QStringLiteral("--bootstrap"),
+                QStringLiteral("500"), QStringLiteral("--seed"), QStringLiteral("7")});
         INFO(written.err.toStdString());
         REQUIRE(written.exitCode == 0);
         return made;
@@ -184,7 +174,7 @@ TEST_CASE("every figure of the HTML report equals fourfold-cli agree --json for 
         for (const QJsonValue &arg : a.value(QStringLiteral("agree_arguments")).toArray())
             args << arg.toString();
         args << QStringLiteral("--json");
-        const Run r = cli(args);
+        const CliRun r = cli(args);
         INFO(id.toStdString() << ": " << r.err.toStdString());
         if (a.contains(QStringLiteral("error"))) {
             CHECK(r.exitCode == 1);
@@ -192,7 +182,7 @@ TEST_CASE("every figure of the HTML report equals fourfold-cli agree --json for 
             continue;
         }
         REQUIRE(r.exitCode == 0);
-        agree.insert(id, parseObject(r.out));
+        agree.insert(id, cliJson(r));
         requireContained(a.value(QStringLiteral("result")), agree.value(id), id);
     }
     for (const char *id : {"function-problem", "function-cause", "function-evaluation",
@@ -356,7 +346,7 @@ TEST_CASE("the PDF report renders with pdftoppm and carries the same alpha value
     CHECK(readFile(s.pdf).startsWith("%PDF-"));
 
     QTemporaryDir dir;
-    const Run rendered = run(pdftoppm,
+    const CliRun rendered = run(pdftoppm,
         {QStringLiteral("-r"), QStringLiteral("30"), QStringLiteral("-png"), s.pdf,
             dir.filePath(QStringLiteral("page"))});
     INFO(rendered.err.toStdString());
@@ -376,16 +366,16 @@ TEST_CASE("the PDF report renders with pdftoppm and carries the same alpha value
         CHECK(ink > 50);
     }
 
-    const Run text = run(pdftotext, {QStringLiteral("-layout"), s.pdf, QStringLiteral("-")});
+    const CliRun text = run(pdftotext, {QStringLiteral("-layout"), s.pdf, QStringLiteral("-")});
     REQUIRE(text.exitCode == 0);
     CHECK(text.out.contains(QStringLiteral("Method text")));
     for (const char *function : {"problem", "cause", "evaluation", "remedy"}) {
         INFO(function);
-        const Run r = cli({QStringLiteral("agree"), s.project, QStringLiteral("--unit"),
+        const CliRun r = cli({QStringLiteral("agree"), s.project, QStringLiteral("--unit"),
             QStringLiteral("sentence"), QStringLiteral("--function"), QLatin1String(function),
             QStringLiteral("--json")});
         REQUIRE(r.exitCode == 0);
-        const double alpha = parseObject(r.out)
+        const double alpha = cliJson(r)
                                  .value(QStringLiteral("alpha"))
                                  .toObject()
                                  .value(QStringLiteral("value"))
@@ -398,7 +388,7 @@ TEST_CASE("report: bad command lines and files fail with a message and leave no 
 {
     const Sample &s = sample();
     QTemporaryDir dir;
-    Run r = cli({QStringLiteral("report"), s.project});
+    CliRun r = cli({QStringLiteral("report"), s.project});
     CHECK(r.exitCode == 2);
     CHECK(r.err.contains(QStringLiteral("--out")));
     r = cli({QStringLiteral("report"), s.project, QStringLiteral("--out"),
@@ -437,7 +427,7 @@ TEST_CASE("a recorded draw of the reliability sample is stated in the method tex
     REQUIRE(QFile::copy(s.project, copy));
     // The sample has 16 articles, 9 assigned for reliability (sample-project/README.md): the
     // frame of a new draw is the other 7.
-    Run r = cli({QStringLiteral("assign"), copy, QStringLiteral("--draw"),
+    CliRun r = cli({QStringLiteral("assign"), copy, QStringLiteral("--draw"),
         QStringLiteral("reliability"), QStringLiteral("--size"), QStringLiteral("3"),
         QStringLiteral("--stratify"), QStringLiteral("topic"), QStringLiteral("--seed"),
         QStringLiteral("11"), QStringLiteral("--coders"), QStringLiteral("C01,C02")});

@@ -3,39 +3,20 @@
 #include "core/project/article_status_edit.h"
 #include "core/project/study_design.h"
 #include "tests/study/study_fixture.h"
+#include "tests/support/cli_run.h"
 
 #include <QJsonArray>
 #include <QJsonDocument>
 #include <QJsonObject>
-#include <QProcess>
 
 using namespace fourfold;
 using namespace fourfold::test;
 
 namespace {
 
-struct Run {
-    int exitCode = -1;
-    QString out;
-    QString err;
-};
-
-Run cli(const QStringList &args)
+CliRun cli(const QStringList &args)
 {
-    QProcess p;
-    p.start(QStringLiteral(FOURFOLD_CLI), args);
-    REQUIRE(p.waitForFinished(120000));
-    return Run {p.exitCode(), QString::fromUtf8(p.readAllStandardOutput()),
-        QString::fromUtf8(p.readAllStandardError())};
-}
-
-QJsonObject json(const Run &r)
-{
-    QJsonParseError e;
-    const QJsonDocument doc = QJsonDocument::fromJson(r.out.toUtf8(), &e);
-    INFO(r.out.toStdString() << r.err.toStdString());
-    REQUIRE(e.error == QJsonParseError::NoError);
-    return doc.object();
+    return runCli(QStringLiteral(FOURFOLD_CLI), args);
 }
 
 QStringList strings(const QJsonValue &v)
@@ -70,13 +51,13 @@ TEST_CASE("assign --draw: the core's sample for the seed, recorded and shown")
     auto expected = StudyDesign::planDraw(f.project, r);
     REQUIRE(expected);
 
-    Run run = cli(
+    CliRun run = cli(
         {QStringLiteral("assign"), f.path, QStringLiteral("--draw"), QStringLiteral("reliability"),
             QStringLiteral("--size"), QStringLiteral("5"), QStringLiteral("--stratify"),
             QStringLiteral("outlet"), QStringLiteral("--seed"), QStringLiteral("99"),
             QStringLiteral("--coders"), QStringLiteral("C01,C02,C03"), QStringLiteral("--json")});
     REQUIRE(run.exitCode == 0);
-    QJsonObject o = json(run);
+    QJsonObject o = cliJson(run);
     CHECK(strings(o.value(QStringLiteral("articles"))) == expected->articles);
     CHECK(o.value(QStringLiteral("written")).toBool());
     CHECK(o.value(QStringLiteral("seed")).toString() == QStringLiteral("99"));
@@ -87,7 +68,7 @@ TEST_CASE("assign --draw: the core's sample for the seed, recorded and shown")
     run =
         cli({QStringLiteral("assign"), f.path, QStringLiteral("--show"), QStringLiteral("--json")});
     REQUIRE(run.exitCode == 0);
-    o = json(run);
+    o = cliJson(run);
     CHECK(o.value(QStringLiteral("assignments")).toArray().size() == 15);
     const QJsonArray draws = o.value(QStringLiteral("draws")).toArray();
     REQUIRE(draws.size() == 1);
@@ -122,7 +103,7 @@ TEST_CASE("assign --draw: the core's sample for the seed, recorded and shown")
         QStringLiteral("--coders"), QStringLiteral("C01,C02,C03"), QStringLiteral("--seed"),
         QStringLiteral("3"), QStringLiteral("--json")});
     REQUIRE(run.exitCode == 0);
-    CHECK(json(run).value(QStringLiteral("assignments")).toArray().size() == 15); // 20 − 5
+    CHECK(cliJson(run).value(QStringLiteral("assignments")).toArray().size() == 15); // 20 − 5
 }
 
 TEST_CASE("assign --training and --progress report hand-computed agreement")
@@ -131,7 +112,7 @@ TEST_CASE("assign --training and --progress report hand-computed agreement")
     const CoderId c1 = f.addCoder(QStringLiteral("C01"));
     const CoderId l1 = f.addCoder(QStringLiteral("L01"), CoderRole::Lead);
     const QString path = f.project.path();
-    Run run = cli({QStringLiteral("assign"), path, QStringLiteral("--phase"),
+    CliRun run = cli({QStringLiteral("assign"), path, QStringLiteral("--phase"),
         QStringLiteral("training"), QStringLiteral("--articles"), QStringLiteral("t1"),
         QStringLiteral("--coders"), QStringLiteral("C01,L01")});
     REQUIRE(run.exitCode == 0);
@@ -143,7 +124,7 @@ TEST_CASE("assign --training and --progress report hand-computed agreement")
     run = cli({QStringLiteral("assign"), path, QStringLiteral("--training"), QStringLiteral("C01"),
         QStringLiteral("--json")});
     REQUIRE(run.exitCode == 0);
-    QJsonObject o = json(run);
+    QJsonObject o = cliJson(run);
     CHECK(o.value(QStringLiteral("master")).toString() == QStringLiteral("L01"));
     CHECK(o.value(QStringLiteral("training_complete")).toBool());
     const QJsonObject problem = o.value(QStringLiteral("functions")).toArray()[0].toObject();
@@ -154,7 +135,7 @@ TEST_CASE("assign --training and --progress report hand-computed agreement")
     run = cli(
         {QStringLiteral("assign"), path, QStringLiteral("--progress"), QStringLiteral("--json")});
     REQUIRE(run.exitCode == 0);
-    o = json(run);
+    o = cliJson(run);
     CHECK_FALSE(o.value(QStringLiteral("effort_per_coder")).toBool());
     QJsonArray rows = o.value(QStringLiteral("rows")).toArray();
     REQUIRE(rows.size() == 2);
@@ -176,7 +157,7 @@ TEST_CASE("assign --training and --progress report hand-computed agreement")
         == 0);
     run = cli(
         {QStringLiteral("assign"), path, QStringLiteral("--progress"), QStringLiteral("--json")});
-    rows = json(run).value(QStringLiteral("rows")).toArray();
+    rows = cliJson(run).value(QStringLiteral("rows")).toArray();
     CHECK(rows[0].toObject().value(QStringLiteral("active_seconds")).toInt() == 300);
 }
 
@@ -189,11 +170,11 @@ TEST_CASE("codebook --update and --diff")
     v2.functions[size_t(FramingFunction::Remedy)].definition = QStringLiteral("A call to act.");
     const QString file =
         writeFile(f.dir, QStringLiteral("v2.json"), QJsonDocument(v2.toJson()).toJson());
-    Run run = cli({QStringLiteral("codebook"), f.path, QStringLiteral("--update"), file,
+    CliRun run = cli({QStringLiteral("codebook"), f.path, QStringLiteral("--update"), file,
         QStringLiteral("--note"), QStringLiteral("Shorter remedy definition"),
         QStringLiteral("--json")});
     REQUIRE(run.exitCode == 0);
-    QJsonObject o = json(run);
+    QJsonObject o = cliJson(run);
     CHECK(o.value(QStringLiteral("version")).toInt() == 2);
     const QJsonArray changes = o.value(QStringLiteral("changes")).toArray();
     REQUIRE(changes.size() == 1);

@@ -5,53 +5,18 @@
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/compare/disagreement_queue_model.h"
-
-#include <QApplication>
-#include <QDir>
-#include <QFile>
-#include <QStandardPaths>
-#include <QTemporaryDir>
-#include <QThread>
-
-#include <cstdio>
+#include "tools/screenshots/screenshot_support.h"
 
 using namespace fourfold;
-
-namespace {
-
-bool save(QWidget &w, const QString &dir, const char *name)
-{
-    for (int i = 0; i < 10; ++i) {
-        QApplication::processEvents();
-        QThread::msleep(10);
-    }
-    const QString path = QDir(dir).filePath(QString::fromLatin1(name));
-    const bool ok = w.grab().save(path);
-    std::printf("%s %s\n", ok ? "wrote" : "FAILED", qPrintable(path));
-    return ok;
-}
-
-} // namespace
+using fourfold::screenshots::saveGrab;
 
 int main(int argc, char *argv[])
 {
-    if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
-        qputenv("QT_QPA_PLATFORM", "offscreen");
-    QStandardPaths::setTestModeEnabled(true);
-    QApplication app(argc, argv);
-    QApplication::setOrganizationName(QStringLiteral("FourfoldScreenshots"));
-    if (argc < 3) {
-        std::fprintf(stderr, "usage: fourfold_compare_screenshots SAMPLE_PROJECT OUT_DIR\n");
-        return 2;
-    }
-    QTemporaryDir temp;
-    const QString path = temp.filePath(QStringLiteral("demo.fourfold"));
-    if (!QFile::copy(QString::fromLocal8Bit(argv[1]), path))
-        return 1;
-    QFile::setPermissions(path, QFile::ReadOwner | QFile::WriteOwner);
-    const QString out = QString::fromLocal8Bit(argv[2]);
-    QDir().mkpath(out);
-    auto project = Project::open(path);
+    screenshots::ScreenshotApp app(argc, argv);
+    if (app.failure())
+        return app.failure();
+    const QString out = app.outDir();
+    auto project = Project::open(app.project());
     if (!project)
         return 1;
     auto lead = project->coderByPseudonym(QStringLiteral("L01"));
@@ -64,7 +29,7 @@ int main(int argc, char *argv[])
         ComparisonWindow w(&session);
         w.resize(1600, 960);
         w.show();
-        ok &= save(w, out, "comparison.png");
+        ok &= saveGrab(w, out, "comparison.png");
     }
     {
         // An article whose gold is decided: the gold column beside the coders.
@@ -77,7 +42,7 @@ int main(int argc, char *argv[])
                 break;
             }
         w.setCurrentPassage(0);
-        ok &= save(w, out, "comparison-gold.png");
+        ok &= saveGrab(w, out, "comparison-gold.png");
     }
     {
         // Two coders only, at a span one of them does not have.
@@ -93,7 +58,7 @@ int main(int argc, char *argv[])
                 w.setCurrentPassage(int(i));
                 break;
             }
-        ok &= save(w, out, "comparison-pair.png");
+        ok &= saveGrab(w, out, "comparison-pair.png");
     }
     return ok ? 0 : 1;
 }

@@ -7,65 +7,28 @@
 #include "app/desktop/main_window.h"
 #include "app/desktop/reading_view.h"
 #include "app/desktop/reliability/reliability_window.h"
+#include "tools/screenshots/screenshot_support.h"
 
-#include <QApplication>
-#include <QDir>
 #include <QEventLoop>
-#include <QFile>
-#include <QSettings>
-#include <QStandardPaths>
 #include <QTabWidget>
-#include <QTemporaryDir>
-#include <QThread>
-#include <QTimer>
-
-#include <cstdio>
 
 using namespace fourfold;
-
-namespace {
-
-bool save(QWidget &w, const QString &dir, const char *name)
-{
-    // Let layouts settle: a rebuilt frame card asks its scroll area for room over several passes.
-    for (int i = 0; i < 10; ++i) {
-        QApplication::processEvents();
-        QThread::msleep(10);
-    }
-    const QString path = QDir(dir).filePath(QString::fromLatin1(name));
-    const bool ok = w.grab().save(path);
-    std::printf("%s %s\n", ok ? "wrote" : "FAILED", qPrintable(path));
-    return ok;
-}
-
-} // namespace
+using fourfold::screenshots::saveGrab;
 
 int main(int argc, char *argv[])
 {
-    if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
-        qputenv("QT_QPA_PLATFORM", "offscreen");
-    QStandardPaths::setTestModeEnabled(true);
-    QApplication app(argc, argv);
-    QApplication::setOrganizationName(QStringLiteral("FourfoldScreenshots"));
-    QSettings().clear(); // no recent projects from earlier runs
-    if (argc < 3) {
-        std::fprintf(stderr, "usage: fourfold_screenshots SAMPLE_PROJECT OUT_DIR\n");
-        return 2;
-    }
-    QTemporaryDir temp;
-    const QString project = temp.filePath(QStringLiteral("demo.fourfold"));
-    if (!QFile::copy(QString::fromLocal8Bit(argv[1]), project))
-        return 1;
-    QFile::setPermissions(project, QFile::ReadOwner | QFile::WriteOwner);
-    const QString out = QString::fromLocal8Bit(argv[2]);
-    QDir().mkpath(out);
+    screenshots::ScreenshotApp app(argc, argv);
+    if (app.failure())
+        return app.failure();
+    const QString out = app.outDir();
+    const QString project = app.project();
     bool ok = true;
 
     {
         MainWindow start;
         start.resize(1200, 700);
         start.show();
-        ok &= save(start, out, "start.png");
+        ok &= saveGrab(start, out, "start.png");
     }
     {
         auto p = Project::open(project);
@@ -74,7 +37,7 @@ int main(int argc, char *argv[])
         CoderDialog dialog(p->settings().name, *p->coders());
         dialog.resize(560, 360);
         dialog.show();
-        ok &= save(dialog, out, "coder-dialog.png");
+        ok &= saveGrab(dialog, out, "coder-dialog.png");
     }
     {
         MainWindow w;
@@ -92,13 +55,13 @@ int main(int argc, char *argv[])
                     break;
                 }
         }
-        ok &= save(w, out, "desk.png");
+        ok &= saveGrab(w, out, "desk.png");
         auto nl = w.session()->project().articleByExternalId(QStringLiteral("mv-02"));
         if (nl && *nl) {
             w.openArticle(**nl);
             w.selectSpan(AnnotationId {});
         }
-        ok &= save(w, out, "desk-dutch.png");
+        ok &= saveGrab(w, out, "desk-dutch.png");
     }
     {
         // A lead sees every article; with "every coder's spans" on, all three coders' spans.
@@ -111,7 +74,7 @@ int main(int argc, char *argv[])
         auto id = w.session()->project().articleByExternalId(QStringLiteral("qs-01"));
         if (id && *id)
             w.openArticle(**id);
-        ok &= save(w, out, "desk-lead-all-coders.png");
+        ok &= saveGrab(w, out, "desk-lead-all-coders.png");
     }
     {
         // The reliability window: sentences, all four functions, the reliability phase.
@@ -130,7 +93,7 @@ int main(int argc, char *argv[])
             "reliability-drift.png"};
         for (int tab = 0; tab < w.tabs()->count() && tab < 6; ++tab) {
             w.tabs()->setCurrentIndex(tab);
-            ok &= save(w, out, names[tab]);
+            ok &= saveGrab(w, out, names[tab]);
         }
     }
     return ok ? 0 : 1;

@@ -11,35 +11,19 @@
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/project.h"
+#include "tools/screenshots/screenshot_support.h"
 
-#include <QApplication>
 #include <QComboBox>
-#include <QDir>
-#include <QFile>
 #include <QLineEdit>
 #include <QPushButton>
 #include <QSpinBox>
-#include <QStandardPaths>
-#include <QTemporaryDir>
-#include <QThread>
 
 #include <cstdio>
 
 using namespace fourfold;
+using fourfold::screenshots::saveGrab;
 
 namespace {
-
-bool save(QWidget &w, const QString &dir, const char *name)
-{
-    for (int i = 0; i < 10; ++i) {
-        QApplication::processEvents();
-        QThread::msleep(10);
-    }
-    const QString path = QDir(dir).filePath(QString::fromLatin1(name));
-    const bool ok = w.grab().save(path);
-    std::printf("%s %s\n", ok ? "wrote" : "FAILED", qPrintable(path));
-    return ok;
-}
 
 bool check(const Status &st, const char *what)
 {
@@ -86,22 +70,11 @@ bool codeTraining(Project &p, const QString &externalId, CoderId who,
 
 int main(int argc, char *argv[])
 {
-    if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
-        qputenv("QT_QPA_PLATFORM", "offscreen");
-    QStandardPaths::setTestModeEnabled(true);
-    QApplication app(argc, argv);
-    if (argc < 3) {
-        std::fprintf(stderr, "usage: fourfold_study_screenshots SAMPLE_PROJECT OUT_DIR\n");
-        return 2;
-    }
-    QTemporaryDir temp;
-    const QString path = temp.filePath(QStringLiteral("demo.fourfold"));
-    if (!QFile::copy(QString::fromLocal8Bit(argv[1]), path))
-        return 1;
-    QFile::setPermissions(path, QFile::ReadOwner | QFile::WriteOwner);
-    const QString out = QString::fromLocal8Bit(argv[2]);
-    QDir().mkpath(out);
-    auto project = Project::open(path);
+    screenshots::ScreenshotApp app(argc, argv);
+    if (app.failure())
+        return app.failure();
+    const QString out = app.outDir();
+    auto project = Project::open(app.project());
     if (!project)
         return 1;
     Project &p = *project;
@@ -132,17 +105,17 @@ int main(int argc, char *argv[])
         stratify->setCurrentIndex(stratify->findData(QStringLiteral("topic")));
         w.findChild<QLineEdit *>(QStringLiteral("draw-seed"))->setText(QStringLiteral("20261202"));
         w.findChild<QPushButton *>(QStringLiteral("draw-plan"))->click();
-        ok &= save(w, out, "study-design.png");
+        ok &= saveGrab(w, out, "study-design.png");
         w.findChild<QPushButton *>(QStringLiteral("draw-commit"))->click();
 
         // The rest dealt single-coded, then the assignments by coder and phase.
         w.showPage(StudyDesignWindow::RestPage);
         w.findChild<QLineEdit *>(QStringLiteral("rest-seed"))->setText(QStringLiteral("7"));
         w.findChild<QPushButton *>(QStringLiteral("rest-plan"))->click();
-        ok &= save(w, out, "study-rest.png");
+        ok &= saveGrab(w, out, "study-rest.png");
         w.findChild<QPushButton *>(QStringLiteral("rest-commit"))->click();
         w.showPage(StudyDesignWindow::AssignmentsPage);
-        ok &= save(w, out, "study-assignments.png");
+        ok &= saveGrab(w, out, "study-assignments.png");
     }
 
     // A second codebook version: the remedy narrowed, a decision rule added to the cause.
@@ -184,19 +157,19 @@ int main(int argc, char *argv[])
         w.resize(1280, 800);
         w.show();
         w.showPage(StudyDesignWindow::CodebookPage);
-        ok &= save(w, out, "study-codebook.png");
+        ok &= saveGrab(w, out, "study-codebook.png");
     }
     {
         ProgressBoardWindow board(p, lead);
         board.resize(1100, 720);
         board.show();
-        ok &= save(board, out, "progress.png");
+        ok &= saveGrab(board, out, "progress.png");
     }
     {
         TrainingFeedbackDialog dialog(p, coderId(p, QStringLiteral("C01")));
         dialog.resize(900, 380);
         dialog.show();
-        ok &= save(dialog, out, "training-feedback.png");
+        ok &= saveGrab(dialog, out, "training-feedback.png");
     }
     return ok ? 0 : 1;
 }
