@@ -13,27 +13,6 @@ QString tr(const char *text)
 
 } // namespace
 
-QString jsonTypeName(const QJsonValue &value)
-{
-    switch (value.type()) {
-    case QJsonValue::Null:
-        return QStringLiteral("null");
-    case QJsonValue::Bool:
-        return QStringLiteral("boolean");
-    case QJsonValue::Double:
-        return QStringLiteral("number");
-    case QJsonValue::String:
-        return QStringLiteral("string");
-    case QJsonValue::Array:
-        return QStringLiteral("array");
-    case QJsonValue::Object:
-        return QStringLiteral("object");
-    case QJsonValue::Undefined:
-        break;
-    }
-    return QStringLiteral("undefined");
-}
-
 Result<std::pair<QString, QJsonValue>> parseParameter(const QString &keyValue)
 {
     const qsizetype eq = keyValue.indexOf(u'=');

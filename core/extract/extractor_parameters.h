@@ -3,6 +3,7 @@
 // command line ("key=value"), and one check that refuses unknown keys and wrong types, so that a
 // mistyped parameter never passes silently.
 
+#include "core/io/json_type_name.h"
 #include "core/model/error.h"
 
 #include <QJsonObject>
@@ -22,8 +23,5 @@ Result<std::pair<QString, QJsonValue>> parseParameter(const QString &keyValue);
 // InvalidArgument naming the key, the extractor `kind` and the keys it knows otherwise.
 Result<QJsonObject> mergeParameters(
     const QString &kind, const QJsonObject &defaults, const QJsonObject &given);
-
-// The JSON type of `value` in words ("number", "string", ...), for messages.
-QString jsonTypeName(const QJsonValue &value);
 
 } // namespace fourfold

@@ -1,6 +1,7 @@
 #include "core/io/jsonl_reader.h"
 
 #include "core/io/article_reader.h"
+#include "core/io/json_type_name.h"
 #include "core/text/canonical_text.h"
 
 #include <QCoreApplication>
@@ -27,27 +28,6 @@ constexpr std::array<QLatin1StringView, 7> knownFields {
     QLatin1StringView("language"),
     QLatin1StringView("meta"),
 };
-
-QString jsonTypeName(const QJsonValue &value)
-{
-    switch (value.type()) {
-    case QJsonValue::Null:
-        return QStringLiteral("null");
-    case QJsonValue::Bool:
-        return QStringLiteral("boolean");
-    case QJsonValue::Double:
-        return QStringLiteral("number");
-    case QJsonValue::String:
-        return QStringLiteral("string");
-    case QJsonValue::Array:
-        return QStringLiteral("array");
-    case QJsonValue::Object:
-        return QStringLiteral("object");
-    case QJsonValue::Undefined:
-        break;
-    }
-    return QStringLiteral("undefined");
-}
 
 // The 1-based column, in code points, of byte `offset` of the UTF-8 `bytes`.
 qint64 columnOfByte(const QByteArray &bytes, qsizetype offset)
