@@ -17,6 +17,24 @@ QString tr(const char *text)
     return QCoreApplication::translate("cli", text);
 }
 
+// A split that got no article (too few articles for its share) is written empty; say so on
+// stderr, so that a pipeline does not train or test on nothing unawares.
+void warnEmptySplits(const QJsonObject &manifest, const ExportOptions &options)
+{
+    if (!options.split)
+        return;
+    const QJsonObject splits = manifest.value(QStringLiteral("splits")).toObject();
+    qint64 total = 0;
+    for (const QString &name : options.split->names)
+        total += splits.value(name).toObject().value(QStringLiteral("articles")).toInteger();
+    for (const QString &name : options.split->names)
+        if (splits.value(name).toObject().value(QStringLiteral("articles")).toInteger() == 0)
+            err(tr("fourfold-cli: note: the %1 split is empty; %2 article(s) are too few for "
+                   "these shares.")
+                    .arg(name)
+                    .arg(total));
+}
+
 } // namespace
 
 int runExport(const QStringList &arguments)
@@ -90,6 +108,7 @@ int runExport(const QStringList &arguments)
         return report(exported.error());
     if (parser.isSet(json)) {
         printJson(exported->manifest);
+        warnEmptySplits(exported->manifest, options);
         return ExitOk;
     }
     out(tr("Exported %1 as %2 into %3:")
@@ -108,6 +127,7 @@ int runExport(const QStringList &arguments)
     for (const ExportedFile &f : exported->files)
         out(QStringLiteral("  %1  %2").arg(f.sha256, f.name));
     out(QStringLiteral("  manifest.json"));
+    warnEmptySplits(exported->manifest, options);
     return ExitOk;
 }
 

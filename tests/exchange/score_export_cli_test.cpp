@@ -118,3 +118,18 @@ TEST_CASE_METHOD(CliFixture, "export writes the files and the manifest", "[excha
             .object();
     CHECK(collection.value(QStringLiteral("total")).toInt() == 4);
 }
+
+TEST_CASE_METHOD(CliFixture,
+    "a split too small for its shares is written empty and named on stderr", "[exchange][cli]")
+{
+    // Gold covers one article: 80/20 puts it in train and leaves test empty.
+    const QString out = dir.filePath(QStringLiteral("gold-split"));
+    const CliRun r = cli({QStringLiteral("export"), path, QStringLiteral("--layer"),
+        QStringLiteral("gold"), QStringLiteral("--format"), QStringLiteral("jsonl"),
+        QStringLiteral("--out"), out, QStringLiteral("--split"), QStringLiteral("80/20"),
+        QStringLiteral("--seed"), QStringLiteral("5")});
+    INFO(r.err.toStdString());
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.err.contains(QStringLiteral("the test split is empty; 1 article(s)")));
+    CHECK_FALSE(r.err.contains(QStringLiteral("the train split is empty")));
+}
