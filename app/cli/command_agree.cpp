@@ -51,9 +51,9 @@ std::vector<PairSpanAgreement> spanAgreement(const ContinuumData &c)
     return out;
 }
 
-int runContinuum(const Project &project, const UnitSelection &selection, bool json)
+int runContinuum(const CountedCodings &counted, const UnitSelection &selection, bool json)
 {
-    auto continuum = continuumData(project, selection);
+    auto continuum = continuumData(counted, selection);
     if (!continuum)
         return report(continuum.error());
     const reliability::UnitizingResult result = reliability::unitizingAlpha(0, continuum->length,
@@ -93,11 +93,14 @@ int runContinuum(const Project &project, const UnitSelection &selection, bool js
             {QStringLiteral("coders"), QJsonArray::fromStringList(continuum->coders)},
             {QStringLiteral("articles"), QJsonArray::fromStringList(continuum->articles)},
             {QStringLiteral("length"), qint64(continuum->length)},
+            {QStringLiteral("left_out"), leftOutJson(counted.leftOut)},
             {QStringLiteral("unitizing_alpha"),
                 QJsonObject {{QStringLiteral("per_function"), perFunction},
                     {QStringLiteral("overall"), unitizingJson(result.overall)}}}});
         return ExitOk;
     }
+    for (const QString &l : leftOutLines(counted.leftOut))
+        out(tr("Left out      %1").arg(l));
     out(tr("Coders        %1 (%2)")
             .arg(continuum->coders.size())
             .arg(continuum->coders.join(QStringLiteral(", "))));
@@ -219,6 +222,9 @@ int runAgree(const QStringList &arguments)
         tr("With a project: add the adjudicated gold standard as one more coder, \"gold\"."));
     const QCommandLineOption articles(QStringLiteral("articles"),
         tr("With a project: only these articles (ids)."), QStringLiteral("ID,..."));
+    const QCommandLineOption includeUnfinished(QStringLiteral("include-unfinished"),
+        tr("With a project: also count articles that coders started but did not mark done "
+           "(left out and listed by default)."));
     const QCommandLineOption item(QStringLiteral("item"),
         tr("With --unit article: the article-level item (default dominant_function)."),
         QStringLiteral("KEY"), QStringLiteral("dominant_function"));
@@ -233,7 +239,7 @@ int runAgree(const QStringList &arguments)
            "article (the costliest first), and with a project the function confusion on matched "
            "spans and the coders' boundary habits."));
     parser.addOptions({data, level, order, distance, unit, function, coders, phase, articles, item,
-        attribute, withGold, bootstrap, seed, json, diagnostics});
+        attribute, withGold, includeUnfinished, bootstrap, seed, json, diagnostics});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
     if (int rc = parseCommandLine(parser, command,
@@ -283,9 +289,12 @@ int runAgree(const QStringList &arguments)
     QString scale;
     std::optional<Project> openProject;
     UnitSelection selection;
+    std::vector<CountedCodings::LeftOut> leftOut;
     if (parser.isSet(data)) {
         if (!parser.positionalArguments().isEmpty())
             return usageError(command, tr("give either --data FILE or a project, not both."));
+        if (parser.isSet(includeUnfinished))
+            return usageError(command, tr("--include-unfinished is for a project, not --data."));
         auto read = readReliabilityTable(parser.value(data));
         if (!read)
             return report(read.error());
@@ -319,6 +328,7 @@ int runAgree(const QStringList &arguments)
         selection.item = parser.value(item);
         selection.attribute = parser.value(attribute);
         selection.includeGold = parser.isSet(withGold);
+        selection.includeUnfinished = parser.isSet(includeUnfinished);
         if (parser.isSet(articles))
             selection.articles = parser.value(articles).split(QLatin1Char(','), Qt::SkipEmptyParts);
         auto opened = Project::open(parser.positionalArguments().first());
@@ -335,9 +345,13 @@ int runAgree(const QStringList &arguments)
             if (auto st = applyCodebookLevel(*book, selection, encoding); !st)
                 return usageError(command, st.error().message);
         }
+        auto counted = countedCodings(*project, selection);
+        if (!counted)
+            return report(counted.error());
         if (selection.unit == UnitKind::Continuum)
-            return runContinuum(*project, selection, parser.isSet(json));
-        auto built = unitTable(*project, selection);
+            return runContinuum(*counted, selection, parser.isSet(json));
+        leftOut = counted->leftOut;
+        auto built = unitTable(*project, *counted, selection);
         if (!built)
             return report(built.error());
         table = std::move(*built);
@@ -351,11 +365,19 @@ int runAgree(const QStringList &arguments)
         return report(encoded.error());
     const AgreementReport result =
         computeAgreement(*encoded, table.coders, scale, agreementOptions);
+    // What was left out (articles in progress) goes beside the figures, for a project.
+    const auto withLeftOut = [&](QJsonObject o) {
+        if (openProject)
+            o.insert(QStringLiteral("left_out"), leftOutJson(leftOut));
+        return o;
+    };
+    const QString leftOutText = leftOutLines(leftOut).join(QLatin1Char('\n'));
     if (!parser.isSet(diagnostics)) {
         if (parser.isSet(json))
-            printJson(agreementJson(result));
+            printJson(withLeftOut(agreementJson(result)));
         else
-            out(agreementText(result));
+            out(leftOutText.isEmpty() ? agreementText(result)
+                                      : agreementText(result) + QLatin1Char('\n') + leftOutText);
         return ExitOk;
     }
     auto coderCosts = leaveOneCoderOut(*encoded, table.coders);
@@ -372,13 +394,15 @@ int runAgree(const QStringList &arguments)
         matching = std::move(*matched);
     }
     if (parser.isSet(json)) {
-        QJsonObject o = agreementJson(result);
+        QJsonObject o = withLeftOut(agreementJson(result));
         o.insert(QStringLiteral("diagnostics"),
             diagnosticsJson(*coderCosts, *articleCosts, matching ? &*matching : nullptr));
         printJson(o);
         return ExitOk;
     }
     QStringList lines {agreementText(result)};
+    if (!leftOutText.isEmpty())
+        lines << leftOutText;
     lines << tr("Alpha without each coder (costliest first; change = without − with all)");
     lines << leaveOneOutText(*coderCosts);
     lines << tr("Alpha without each article (costliest first)");

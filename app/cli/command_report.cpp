@@ -48,7 +48,11 @@ int runReport(const QStringList &arguments)
         QStringLiteral("title"), tr("The report's title."), QStringLiteral("TEXT"));
     const QCommandLineOption json(
         QStringLiteral("json"), tr("Also print the report's figures as JSON on stdout."));
-    parser.addOptions({outFile, unit, phase, coders, bootstrap, seed, title, json});
+    const QCommandLineOption includeUnfinished(QStringLiteral("include-unfinished"),
+        tr("Also count articles that coders started but did not mark done (left out and listed "
+           "by default)."));
+    parser.addOptions(
+        {outFile, unit, phase, coders, includeUnfinished, bootstrap, seed, title, json});
     parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
     if (int rc = parseCommandLine(parser, command,
             tr("Write the reliability report: method text with the items of Lombard, "
@@ -96,6 +100,7 @@ int runReport(const QStringList &arguments)
     if (!ok)
         return usageError(command, tr("--seed expects a non-negative whole number."));
     options.title = parser.value(title);
+    options.includeUnfinished = parser.isSet(includeUnfinished);
 
     auto project = Project::open(parser.positionalArguments().first());
     if (!project)

@@ -24,11 +24,6 @@ QString tr(const char *text)
     return QCoreApplication::translate("ReportData", text);
 }
 
-bool inPhase(const std::optional<Phase> &phase, Phase p)
-{
-    return !phase || *phase == p;
-}
-
 // The agree options shared by every analysis of the report.
 QStringList commonArguments(const ReportOptions &options, bool bootstrap)
 {
@@ -37,6 +32,8 @@ QStringList commonArguments(const ReportOptions &options, bool bootstrap)
         args << QStringLiteral("--phase") << phaseKey(*options.phase);
     if (!options.coders.isEmpty())
         args << QStringLiteral("--coders") << options.coders.join(QLatin1Char(','));
+    if (options.includeUnfinished)
+        args << QStringLiteral("--include-unfinished");
     if (bootstrap && options.bootstrapReplicates > 0)
         args << QStringLiteral("--bootstrap") << QString::number(options.bootstrapReplicates)
              << QStringLiteral("--seed") << QString::number(options.seed);
@@ -46,12 +43,13 @@ QStringList commonArguments(const ReportOptions &options, bool bootstrap)
 // What `fourfold-cli agree` computes for a project selection (app/cli/command_agree.cpp): the
 // level comes from the codebook for span attributes and article items (only an ordinal level
 // changes the encoding), and units carrying all four functions are sets compared with MASI.
-Result<QJsonObject> agreeJson(const Project &project, const Codebook &book,
-    const UnitSelection &selection, const ReportOptions &options, bool diagnostics = false)
+Result<QJsonObject> agreeJson(const Project &project, const CountedCodings &counted,
+    const Codebook &book, const UnitSelection &selection, const ReportOptions &options,
+    bool diagnostics = false)
 {
     EncodingOptions encoding;
     FOURFOLD_TRY_STATUS(applyCodebookLevel(book, selection, encoding));
-    auto table = unitTable(project, selection);
+    auto table = unitTable(project, counted, selection);
     if (!table)
         return std::unexpected(table.error());
     if (selection.unit != UnitKind::Article && selection.unit != UnitKind::Span
@@ -78,8 +76,8 @@ Result<QJsonObject> agreeJson(const Project &project, const Codebook &book,
     auto matching = matchSpans(project, selection);
     if (!matching)
         return std::unexpected(matching.error());
-    json.insert(QStringLiteral("diagnostics"),
-        diagnosticsJson(*coderCosts, *articleCosts, &*matching));
+    json.insert(
+        QStringLiteral("diagnostics"), diagnosticsJson(*coderCosts, *articleCosts, &*matching));
     return json;
 }
 
@@ -96,9 +94,9 @@ QString drawText(const Draw &draw)
 }
 
 // agree --unit continuum --json without its span_agreement part.
-Result<QJsonObject> continuumJson(const Project &project, const UnitSelection &selection)
+Result<QJsonObject> continuumJson(const CountedCodings &counted, const UnitSelection &selection)
 {
-    auto continuum = continuumData(project, selection);
+    auto continuum = continuumData(counted, selection);
     if (!continuum)
         return std::unexpected(continuum.error());
     const reliability::UnitizingResult result = reliability::unitizingAlpha(0, continuum->length,
@@ -163,6 +161,8 @@ QJsonObject ReportData::toJson() const
         {QStringLiteral("phase"),
             options.phase ? QJsonValue(phaseKey(*options.phase)) : QJsonValue(QJsonValue::Null)},
         {QStringLiteral("coders"), QJsonArray::fromStringList(options.coders)},
+        {QStringLiteral("include_unfinished"), options.includeUnfinished},
+        {QStringLiteral("left_out"), leftOutJson(leftOut)},
         {QStringLiteral("bootstrap"), options.bootstrapReplicates},
         {QStringLiteral("seed"), QString::number(options.seed)}};
     return QJsonObject {{QStringLiteral("format"), QStringLiteral("fourfold-reliability-report/1")},
@@ -217,14 +217,19 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     UnitSelection base;
     base.phase = options.phase;
     base.coders = options.coders;
+    base.includeUnfinished = options.includeUnfinished;
     const QStringList common = commonArguments(options, true);
+    // One read of the codings that count serves every analysis.
+    auto counted = countedCodings(project, base);
+    if (!counted)
+        return std::unexpected(counted.error());
 
     // The four functions, one binary variable each, then all four as one set-valued variable.
     for (FramingFunction f : kFramingFunctions) {
         UnitSelection s = base;
         s.unit = options.unit;
         s.function = f;
-        auto json = agreeJson(project, *book, s, options, true);
+        auto json = agreeJson(project, *counted, *book, s, options, true);
         if (!json)
             return std::unexpected(json.error());
         d.analyses.push_back({QStringLiteral("function-%1").arg(functionKey(f)),
@@ -237,7 +242,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     {
         UnitSelection s = base;
         s.unit = options.unit;
-        auto json = agreeJson(project, *book, s, options);
+        auto json = agreeJson(project, *counted, *book, s, options);
         if (!json)
             return std::unexpected(json.error());
         d.analyses.push_back({QStringLiteral("functions"), tr("All four functions (MASI)"),
@@ -250,7 +255,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
         UnitSelection s = base;
         s.unit = UnitKind::Article;
         s.item = item.key;
-        auto json = agreeJson(project, *book, s, options);
+        auto json = agreeJson(project, *counted, *book, s, options);
         d.analyses.push_back({QStringLiteral("item-%1").arg(item.key),
             item.question.isEmpty() ? item.key : item.question,
             QString(item.key).replace(QLatin1Char('_'), QLatin1Char(' ')), QStringLiteral("item"),
@@ -267,7 +272,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
             s.unit = UnitKind::Span;
             s.function = f;
             s.attribute = a.key;
-            auto json = agreeJson(project, *book, s, options);
+            auto json = agreeJson(project, *counted, *book, s, options);
             d.analyses.push_back({QStringLiteral("attribute-%1-%2").arg(functionKey(f), a.key),
                 QStringLiteral("%1: %2").arg(
                     functionLabel(*book, f), a.label.isEmpty() ? a.key : a.label),
@@ -281,7 +286,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     {
         UnitSelection s = base;
         s.unit = UnitKind::Continuum;
-        auto json = continuumJson(project, s);
+        auto json = continuumJson(*counted, s);
         d.analyses.push_back({QStringLiteral("continuum"), tr("Spans on the continuum"),
             tr("continuum"), QStringLiteral("continuum"),
             QStringList {QStringLiteral("--unit"), QStringLiteral("continuum")}
@@ -289,30 +294,27 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
             json ? *json : QJsonObject {}, json ? QString() : json.error().message});
     }
 
-    // Who coded how much: the same rule as the unitizers (assigned in the phase, or any span or
-    // answer), restricted to the coders the analyses used.
-    QSet<QString> selected;
-    for (const QJsonValue &v : d.analyses.front().result.value(QStringLiteral("coders")).toArray())
-        selected.insert(v.toString());
-    auto coders = project.coders();
+    // Who coded how much: the codings that count (the unitizers' rule), for the coders the
+    // analyses used.
     auto articles = project.articles();
-    auto annotations = project.allAnnotations();
-    auto judgements = project.allJudgements();
+    if (!articles)
+        return std::unexpected(articles.error());
     auto assignments = project.assignments();
+    if (!assignments)
+        return std::unexpected(assignments.error());
     auto gold = project.goldAnnotations();
-    for (const Error *e : {coders ? nullptr : &coders.error(),
-             articles ? nullptr : &articles.error(), annotations ? nullptr : &annotations.error(),
-             judgements ? nullptr : &judgements.error(),
-             assignments ? nullptr : &assignments.error(), gold ? nullptr : &gold.error()})
-        if (e)
-            return std::unexpected(*e);
+    if (!gold)
+        return std::unexpected(gold.error());
+    auto coders = project.coders();
+    if (!coders)
+        return std::unexpected(coders.error());
     d.projectArticles = int(articles->size());
+    d.leftOut = counted->leftOut;
     QHash<qint64, int> column; // coder id → index into d.coders
     QHash<qint64, QString> pseudonyms;
-    for (const Coder &c : *coders) {
+    for (const Coder &c : *coders)
         pseudonyms.insert(c.id.value, c.pseudonym);
-        if (!selected.contains(c.pseudonym))
-            continue;
+    for (const Coder &c : counted->coders) {
         column.insert(c.id.value, int(d.coders.size()));
         d.coders.push_back({c.pseudonym, coderRoleKey(c.role), 0, 0, 0, {}, 0});
     }
@@ -323,15 +325,12 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
             trainingArticles.insert(a.article.value);
         if (a.phase == Phase::Pilot)
             pilotArticles.insert(a.article.value);
-        if (inPhase(options.phase, a.phase) && column.contains(a.coder.value))
-            codedBy[a.article.value].insert(a.coder.value);
     }
     d.trainingArticles = int(trainingArticles.size());
     d.pilotArticles = int(pilotArticles.size());
-    for (const Annotation &a : *annotations) {
-        if (!inPhase(options.phase, a.phase) || !column.contains(a.coder.value))
-            continue;
-        codedBy[a.article.value].insert(a.coder.value);
+    for (const auto &[article, coder] : counted->counted)
+        codedBy[article].insert(coder);
+    for (const Annotation &a : counted->annotations) {
         ReportCoder &c = d.coders[size_t(column.value(a.coder.value))];
         ++c.spans;
         ++c.perFunction[size_t(a.content.function)];
@@ -339,10 +338,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
         if (a.codebookVersion != book->versionId)
             ++d.codingsOtherVersion;
     }
-    for (const Judgement &j : *judgements) {
-        if (!inPhase(options.phase, j.phase) || !column.contains(j.coder.value))
-            continue;
-        codedBy[j.article.value].insert(j.coder.value);
+    for (const Judgement &j : counted->judgements) {
         ++d.coders[size_t(column.value(j.coder.value))].answers;
         ++d.codingsTotal;
         if (j.codebookVersion != book->versionId)

@@ -24,7 +24,9 @@ struct ReportOptions {
     // The unit of the per-function variables: paragraph, sentence or token.
     UnitKind unit = UnitKind::Sentence;
     std::optional<Phase> phase; // none = every phase
-    QStringList coders; // pseudonyms; empty = everyone who coded in the selection
+    QStringList coders; // pseudonyms; empty = everyone whose coding counts in the selection
+    // Takes articles the coders started but did not mark done in (CodingScope).
+    bool includeUnfinished = false;
     int bootstrapReplicates = 1000; // 0 = no confidence intervals
     std::uint64_t seed = 1;
     QString title; // empty = "Reliability report: <project name>"
@@ -46,8 +48,8 @@ struct ReportAnalysis {
 struct ReportCoder {
     QString pseudonym;
     QString role; // "coder", "lead"
-    int articles = 0; // articles coded (assigned, or with a span or an answer)
-    int reliabilityArticles = 0; // of those, articles also coded by another selected coder
+    int articles = 0; // articles whose coding counts (marked done; see CodingScope)
+    int reliabilityArticles = 0; // of those, articles that count for another selected coder too
     int spans = 0;
     std::array<int, 4> perFunction {}; // spans per FramingFunction
     int answers = 0; // answers to article-level items
@@ -65,6 +67,8 @@ struct ReportData {
     int codedArticles = 0; // articles coded by at least one selected coder
     int sharedArticles = 0; // articles coded by two or more selected coders
     int allCoderArticles = 0; // articles coded by every selected coder
+    // Articles in progress left out, per coder (empty when taken in or when there are none).
+    std::vector<CountedCodings::LeftOut> leftOut;
     QString sampleDraw; // how the reliability sample was drawn, if the project records it
     QJsonObject drawRecord; // the recorded draw (StudyDesign::drawJson), or empty
     // Gold standard (adjudication) on the selected articles.

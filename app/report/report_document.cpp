@@ -271,6 +271,17 @@ QString Builder::methodText() const
     p += tr("%1 coders (%2) took part: %3. ")
              .arg(QString::number(coders), pseudonyms.join(QStringLiteral(", ")),
                  amounts.join(QStringLiteral("; ")));
+    if (m_d.options.includeUnfinished) {
+        p += tr("Articles that coders had started but not yet marked as finished were included. ");
+    } else {
+        p += tr("Only articles that a coder had marked as finished count for that coder. ");
+        QStringList left;
+        for (const CountedCodings::LeftOut &l : m_d.leftOut)
+            left << tr("%1 (%2)").arg(esc(l.coder)).arg(l.articles.size());
+        if (!left.isEmpty())
+            p += tr("Articles still in progress were left out: %1. ")
+                     .arg(left.join(QStringLiteral(", ")));
+    }
     if (m_d.trainingArticles > 0 || m_d.pilotArticles > 0)
         p += tr("Before the reliability coding, coders trained on %1 articles and coded a pilot "
                 "of %2 articles; %3. ")

@@ -168,53 +168,6 @@ Result<std::vector<LeaveOneOut>> leaveOneArticleOut(
 
 namespace {
 
-// The coders a selection covers: as asked, or everyone with an annotation or answer in the
-// selected phase and articles (the rule of unitTable()).
-Result<QStringList> selectedCoders(const Project &project, const UnitSelection &sel)
-{
-    auto coders = project.coders();
-    if (!coders)
-        return std::unexpected(coders.error());
-    auto articles = project.articles();
-    if (!articles)
-        return std::unexpected(articles.error());
-    for (const QString &id : sel.articles)
-        if (std::none_of(articles->begin(), articles->end(),
-                [&](const ArticleSummary &a) { return a.externalId == id; }))
-            return fail(
-                ErrorCode::NotFound, tr("There is no article \"%1\" in the project.").arg(id));
-    if (!sel.coders.isEmpty()) {
-        for (const QString &pseudonym : sel.coders)
-            if (std::none_of(coders->begin(), coders->end(),
-                    [&](const Coder &c) { return c.pseudonym == pseudonym; }))
-                return fail(ErrorCode::NotFound,
-                    tr("There is no coder \"%1\" in the project.").arg(pseudonym));
-        return sel.coders;
-    }
-    auto annotations = project.allAnnotations();
-    if (!annotations)
-        return std::unexpected(annotations.error());
-    auto judgements = project.allJudgements();
-    if (!judgements)
-        return std::unexpected(judgements.error());
-    QSet<qint64> articleIds;
-    for (const ArticleSummary &a : *articles)
-        if (sel.articles.isEmpty() || sel.articles.contains(a.externalId))
-            articleIds.insert(a.id.value);
-    QSet<qint64> active;
-    for (const Annotation &a : *annotations)
-        if ((!sel.phase || *sel.phase == a.phase) && articleIds.contains(a.article.value))
-            active.insert(a.coder.value);
-    for (const Judgement &j : *judgements)
-        if ((!sel.phase || *sel.phase == j.phase) && articleIds.contains(j.article.value))
-            active.insert(j.coder.value);
-    QStringList out;
-    for (const Coder &c : *coders)
-        if (active.contains(c.id.value))
-            out << c.pseudonym;
-    return out;
-}
-
 struct HabitSums {
     int n = 0;
     double length = 0, lengthSquares = 0, start = 0, end = 0;
@@ -259,13 +212,15 @@ void matchDirection(const std::vector<ContinuumUnit> &from, const std::vector<Co
 Result<SpanMatching> matchSpans(
     const Project &project, const UnitSelection &selection, const DiagnosticsProgress &progress)
 {
-    auto coders = selectedCoders(project, selection);
-    if (!coders)
-        return std::unexpected(coders.error());
-    if (coders->size() < 2)
-        return fail(ErrorCode::InvalidArgument,
-            tr("Reliability needs at least two coders; the selection has %n.", nullptr,
-                int(coders->size())));
+    UnitSelection base = selection;
+    base.includeGold = false;
+    auto counted = countedCodings(project, base);
+    if (!counted)
+        return std::unexpected(counted.error());
+    QStringList pseudonyms;
+    for (const Coder &c : counted->coders)
+        pseudonyms << c.pseudonym;
+    const QStringList *coders = &pseudonyms;
     SpanMatching out;
     out.coders = *coders;
     std::vector<HabitSums> habits(size_t(coders->size()));
@@ -276,12 +231,11 @@ Result<SpanMatching> matchSpans(
         for (int b = a + 1; b < n; ++b) {
             if (!carryOn(progress, done++, total))
                 return cancelled();
-            UnitSelection pair = selection;
+            UnitSelection pair = base;
             pair.unit = UnitKind::Continuum;
             pair.function.reset();
-            pair.includeGold = false;
             pair.coders = QStringList {(*coders)[a], (*coders)[b]};
-            auto continuum = continuumData(project, pair);
+            auto continuum = continuumData(*counted, pair);
             if (!continuum) {
                 // Coders and articles were checked above, so NotFound means the pair coded no
                 // article in common: nothing to compare.
@@ -339,46 +293,41 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
 {
     if (batchSize < 1)
         return fail(ErrorCode::InvalidArgument, tr("A batch holds at least one article."));
-    auto coders = project.coders();
-    if (!coders)
-        return std::unexpected(coders.error());
-    auto articles = project.articles();
-    if (!articles)
-        return std::unexpected(articles.error());
-    auto annotations = project.allAnnotations();
-    if (!annotations)
-        return std::unexpected(annotations.error());
-    auto judgements = project.allJudgements();
-    if (!judgements)
-        return std::unexpected(judgements.error());
-    QSet<qint64> coderIds;
-    for (const Coder &c : *coders)
-        if (table.coders.contains(c.pseudonym))
-            coderIds.insert(c.id.value);
+    // The codings that count, as the table was built from them.
+    UnitSelection counting = selection;
+    counting.coders = table.coders;
+    counting.coders.removeAll(QStringLiteral("gold"));
+    counting.includeGold = false;
+    auto counted = countedCodings(project, counting);
+    if (!counted)
+        return std::unexpected(counted.error());
     QHash<qint64, QString> externalId;
-    for (const ArticleSummary &a : *articles)
+    for (const ArticleSummary &a : counted->articles)
         externalId.insert(a.id.value, a.externalId);
 
     // The first coding of each article: (time, row id) so that equal times keep a stable order.
     std::map<QString, std::pair<QString, qint64>> first;
-    auto note = [&](qint64 article, qint64 coder, const QString &at, qint64 rowId, Phase phase) {
-        if (!coderIds.contains(coder) || (selection.phase && *selection.phase != phase))
-            return;
+    auto note = [&](qint64 article, const QString &at, qint64 rowId) {
         const QString id = externalId.value(article);
         const std::pair<QString, qint64> key {at, rowId};
         auto it = first.find(id);
         if (it == first.end() || key < it->second)
             first[id] = key;
     };
-    for (const Annotation &a : *annotations)
-        note(a.article.value, a.coder.value, a.createdAt, a.id.value, a.phase);
-    for (const Judgement &j : *judgements)
-        note(j.article.value, j.coder.value, j.createdAt, j.id.value, j.phase);
+    for (const Annotation &a : counted->annotations)
+        note(a.article.value, a.createdAt, a.id.value);
+    for (const Judgement &j : counted->judgements)
+        note(j.article.value, j.createdAt, j.id.value);
 
-    // Articles of the table, in coding order.
+    // Articles of the table with a pairable unit (two coders' values), in coding order: an
+    // article only one coder has finished adds nothing a period could compare.
     QSet<QString> inTable;
-    for (const QString &u : table.units)
-        inTable.insert(unitArticle(u));
+    for (qsizetype u = 0; u < table.units.size(); ++u) {
+        const QStringList &row = table.cells[size_t(u)];
+        if (std::count_if(row.begin(), row.end(), [](const QString &v) { return !v.isEmpty(); })
+            >= 2)
+            inTable.insert(unitArticle(table.units[u]));
+    }
     std::vector<std::pair<std::pair<QString, qint64>, QString>> ordered;
     for (const auto &[id, key] : first)
         if (inTable.contains(id))
@@ -490,8 +439,10 @@ QJsonObject matchingJson(const SpanMatching &m)
 QJsonObject diagnosticsJson(const std::vector<LeaveOneOut> &coders,
     const std::vector<LeaveOneOut> &articles, const SpanMatching *matching)
 {
-    QJsonObject d {{QStringLiteral("leave_one_coder_out"), leaveOneOutJson(coders, QStringLiteral("coder"))},
-        {QStringLiteral("leave_one_article_out"), leaveOneOutJson(articles, QStringLiteral("article"))}};
+    QJsonObject d {
+        {QStringLiteral("leave_one_coder_out"), leaveOneOutJson(coders, QStringLiteral("coder"))},
+        {QStringLiteral("leave_one_article_out"),
+            leaveOneOutJson(articles, QStringLiteral("article"))}};
     if (matching)
         d.insert(QStringLiteral("span_matching"), matchingJson(*matching));
     return d;

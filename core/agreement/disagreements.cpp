@@ -1,5 +1,6 @@
 #include "core/agreement/disagreements.h"
 
+#include "core/project/coding_scope.h"
 #include "core/project/project.h"
 
 #include <QCoreApplication>
@@ -181,48 +182,62 @@ std::vector<Passage> comparePassages(const std::vector<Annotation> &allSpans,
     return out;
 }
 
-Result<std::vector<Coder>> articleCoders(const Project &project, ArticleId article)
+namespace {
+
+// The coders of `coders` whose coding of `article` counts, in pseudonym order.
+std::vector<Coder> countingCoders(
+    const std::vector<Coder> &coders, const CodingScope &scope, ArticleId article)
 {
-    auto coders = project.coders();
-    if (!coders)
-        return std::unexpected(coders.error());
-    auto assignments = project.assignments();
-    if (!assignments)
-        return std::unexpected(assignments.error());
-    auto spans = project.annotations(article);
-    if (!spans)
-        return std::unexpected(spans.error());
-    QSet<qint64> coded;
-    for (const Assignment &a : *assignments)
-        if (a.article == article)
-            coded.insert(a.coder.value);
-    for (const Annotation &a : *spans)
-        if (!a.deleted)
-            coded.insert(a.coder.value);
     std::vector<Coder> out;
-    for (const Coder &c : *coders)
-        if (coded.contains(c.id.value))
+    for (const Coder &c : coders)
+        if (scope.counts(article, c.id))
             out.push_back(c);
     std::ranges::sort(out, {}, &Coder::pseudonym);
     return out;
 }
 
+Result<Comparison> compareWith(const Project &project, ArticleId article,
+    const std::vector<Coder> &coded, const ComparisonFilter &filter);
+
+} // namespace
+
+Result<std::vector<Coder>> articleCoders(
+    const Project &project, ArticleId article, bool includeUnfinished)
+{
+    auto coders = project.coders();
+    if (!coders)
+        return std::unexpected(coders.error());
+    auto scope = CodingScope::load(project, CodingScopeOptions {includeUnfinished, {}});
+    if (!scope)
+        return std::unexpected(scope.error());
+    return countingCoders(*coders, *scope, article);
+}
+
 Result<Comparison> compareArticle(
     const Project &project, ArticleId article, const ComparisonFilter &filter)
+{
+    auto coded = articleCoders(project, article, filter.includeUnfinished);
+    if (!coded)
+        return std::unexpected(coded.error());
+    return compareWith(project, article, *coded, filter);
+}
+
+namespace {
+
+Result<Comparison> compareWith(const Project &project, ArticleId article,
+    const std::vector<Coder> &codedCoders, const ComparisonFilter &filter)
 {
     auto summary = project.article(article);
     if (!summary)
         return std::unexpected(summary.error());
-    auto coded = articleCoders(project, article);
-    if (!coded)
-        return std::unexpected(coded.error());
+    const std::vector<Coder> *coded = &codedCoders;
     Comparison out;
     out.article = article;
     if (filter.coderPair) {
         for (CoderId c : {filter.coderPair->first, filter.coderPair->second}) {
             if (std::ranges::find(*coded, c, &Coder::id) == coded->end())
                 return fail(ErrorCode::InvalidArgument,
-                    tr("Both coders of the pair must have coded the article \"%1\".")
+                    tr("Both coders of the pair must have marked the article \"%1\" done.")
                         .arg(summary->summary.title));
             out.coders.push_back(c);
         }
@@ -247,6 +262,8 @@ Result<Comparison> compareArticle(
             out.passages.push_back(std::move(p));
     return out;
 }
+
+} // namespace
 
 GoldCandidate acceptCandidate(const Passage &passage, const Annotation &span)
 {
@@ -307,18 +324,23 @@ Result<std::vector<ArticleDisagreement>> disagreementQueue(
     auto articles = project.articles();
     if (!articles)
         return std::unexpected(articles.error());
+    auto coders = project.coders();
+    if (!coders)
+        return std::unexpected(coders.error());
+    auto scope = CodingScope::load(project, CodingScopeOptions {filter.includeUnfinished, {}});
+    if (!scope)
+        return std::unexpected(scope.error());
     std::vector<ArticleDisagreement> out;
     for (const ArticleSummary &summary : *articles) {
-        auto coded = articleCoders(project, summary.id);
-        if (!coded)
-            return std::unexpected(coded.error());
+        const std::vector<Coder> codedCoders = countingCoders(*coders, *scope, summary.id);
+        const std::vector<Coder> *coded = &codedCoders;
         if (coded->size() < 2)
             continue;
         if (filter.coderPair
             && (std::ranges::find(*coded, filter.coderPair->first, &Coder::id) == coded->end()
                 || std::ranges::find(*coded, filter.coderPair->second, &Coder::id) == coded->end()))
             continue;
-        auto comparison = compareArticle(project, summary.id, filter);
+        auto comparison = compareWith(project, summary.id, *coded, filter);
         if (!comparison)
             return std::unexpected(comparison.error());
         ArticleDisagreement row;

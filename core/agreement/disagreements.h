@@ -58,6 +58,8 @@ struct Comparison {
 struct ComparisonFilter {
     std::optional<FramingFunction> function;
     std::optional<std::pair<CoderId, CoderId>> coderPair;
+    // Compares coders on articles they started but have not marked done, too (CodingScope).
+    bool includeUnfinished = false;
 };
 
 // The pure part: passages of `spans` (only those of `coders` are used; the others are ignored)
@@ -67,9 +69,10 @@ std::vector<Passage> comparePassages(const std::vector<Annotation> &spans,
     const std::vector<CoderId> &coders, const std::vector<GoldAnnotation> &gold = {},
     const std::vector<AnnotationId> &rejectedSpans = {});
 
-// The coders who coded `article`: assigned to it in any phase or with a live span on it, in
-// pseudonym order. Fails only if the project cannot be read.
-Result<std::vector<Coder>> articleCoders(const Project &project, ArticleId article);
+// The coders whose coding of `article` counts (CodingScope: marked done, or in progress too when
+// `includeUnfinished`), in pseudonym order. Fails only if the project cannot be read.
+Result<std::vector<Coder>> articleCoders(
+    const Project &project, ArticleId article, bool includeUnfinished = false);
 
 // Compares `article` between the coders of `filter.coderPair` (both), or else every coder who
 // coded it, and keeps the passages that touch `filter.function` (a span of it) if one is given.
@@ -102,7 +105,8 @@ struct ArticleDisagreement {
     std::array<int, 4> byKind {}; // passages with each DisagreementKind
 };
 
-// Every article coded by at least two coders (or by both coders of the filter's pair), compared
+// Every article whose coding counts for at least two coders (or for both coders of the filter's
+// pair), compared
 // under `filter`, most unresolved disagreements first (then most disagreements, then title).
 // Fails only if the project cannot be read.
 Result<std::vector<ArticleDisagreement>> disagreementQueue(

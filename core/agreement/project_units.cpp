@@ -1,9 +1,11 @@
 #include "core/agreement/project_units.h"
 
+#include "core/project/coding_scope.h"
 #include "core/project/project.h"
 
 #include <QCoreApplication>
 #include <QHash>
+#include <QJsonObject>
 #include <QSet>
 
 #include <algorithm>
@@ -18,67 +20,44 @@ QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
     return QCoreApplication::translate("ProjectUnits", text, disambiguation, n);
 }
 
-// What the unitizers need of a project, gathered once.
-struct Selection {
-    std::vector<Coder> coders; // selected, in the order asked for (or pseudonym order)
-    std::vector<ArticleSummary> articles; // selected
-    QHash<qint64, int> coderIndex; // coder id → column
-    QSet<QPair<qint64, qint64>> coded; // (article, coder) pairs coded
-    std::vector<Annotation> annotations; // live, in phase, of selected coders and articles
-    std::vector<Judgement> judgements;
-};
-
 bool inPhase(const std::optional<Phase> &phase, Phase p)
 {
     return !phase || *phase == p;
 }
 
-Result<Selection> gather(const Project &project, const UnitSelection &sel)
+} // namespace
+
+Result<CountedCodings> countedCodings(const Project &project, const UnitSelection &sel)
 {
-    Selection s;
+    CountedCodings s;
     auto coders = project.coders();
     if (!coders)
         return std::unexpected(coders.error());
     auto articles = project.articles();
     if (!articles)
         return std::unexpected(articles.error());
-    auto annotations = project.allAnnotations();
-    if (!annotations)
-        return std::unexpected(annotations.error());
-    auto judgements = project.allJudgements();
-    if (!judgements)
-        return std::unexpected(judgements.error());
-    auto assignments = project.assignments();
-    if (!assignments)
-        return std::unexpected(assignments.error());
+    auto scope = CodingScope::load(project, CodingScopeOptions {sel.includeUnfinished, sel.phase});
+    if (!scope)
+        return std::unexpected(scope.error());
 
-    QSet<qint64> articleIds;
     if (sel.articles.isEmpty()) {
         s.articles = *articles;
     } else {
+        QHash<QString, const ArticleSummary *> byId;
+        for (const ArticleSummary &a : *articles)
+            byId.insert(a.externalId, &a);
         for (const QString &id : sel.articles) {
-            auto it = std::find_if(articles->begin(), articles->end(),
-                [&](const ArticleSummary &a) { return a.externalId == id; });
-            if (it == articles->end())
+            const ArticleSummary *a = byId.value(id);
+            if (!a)
                 return fail(
                     ErrorCode::NotFound, tr("There is no article \"%1\" in the project.").arg(id));
-            s.articles.push_back(*it);
+            s.articles.push_back(*a);
         }
     }
-    for (const ArticleSummary &a : s.articles)
-        articleIds.insert(a.id.value);
 
+    std::vector<Coder> candidates;
     if (sel.coders.isEmpty()) {
-        QSet<qint64> active;
-        for (const Annotation &a : *annotations)
-            if (inPhase(sel.phase, a.phase) && articleIds.contains(a.article.value))
-                active.insert(a.coder.value);
-        for (const Judgement &j : *judgements)
-            if (inPhase(sel.phase, j.phase) && articleIds.contains(j.article.value))
-                active.insert(j.coder.value);
-        for (const Coder &c : *coders)
-            if (active.contains(c.id.value))
-                s.coders.push_back(c);
+        candidates = *coders;
     } else {
         for (const QString &pseudonym : sel.coders) {
             auto it = std::find_if(coders->begin(), coders->end(),
@@ -86,13 +65,33 @@ Result<Selection> gather(const Project &project, const UnitSelection &sel)
             if (it == coders->end())
                 return fail(ErrorCode::NotFound,
                     tr("There is no coder \"%1\" in the project.").arg(pseudonym));
-            s.coders.push_back(*it);
+            candidates.push_back(*it);
         }
+    }
+    for (const Coder &c : candidates) {
+        CountedCodings::LeftOut left {c.pseudonym, {}};
+        bool any = false;
+        for (const ArticleSummary &a : s.articles) {
+            if (scope->counts(a.id, c.id)) {
+                any = true;
+                s.counted.insert({a.id.value, c.id.value});
+            } else if (scope->leftOut(a.id, c.id)) {
+                left.articles << a.externalId;
+            }
+        }
+        if (!left.articles.isEmpty())
+            s.leftOut.push_back(std::move(left));
+        // Without a list of coders, a coder is compared when something of theirs counts.
+        if (any || !sel.coders.isEmpty())
+            s.coders.push_back(c);
     }
     if (s.coders.size() < 2)
         return fail(ErrorCode::InvalidArgument,
             tr("Reliability needs at least two coders; the selection has %n.", nullptr,
                 int(s.coders.size())));
+    QSet<qint64> articleIds;
+    for (const ArticleSummary &a : s.articles)
+        articleIds.insert(a.id.value);
     // The gold standard joins as one more coder; its id -1 cannot clash with a row id.
     constexpr qint64 kGold = -1;
     if (sel.includeGold) {
@@ -104,6 +103,7 @@ Result<Selection> gather(const Project &project, const UnitSelection &sel)
     for (size_t i = 0; i < s.coders.size(); ++i)
         s.coderIndex.insert(s.coders[i].id.value, int(i));
     if (sel.includeGold) {
+        // Gold counts on the articles it covers.
         auto golds = project.goldAnnotations();
         if (!golds)
             return std::unexpected(golds.error());
@@ -116,29 +116,47 @@ Result<Selection> gather(const Project &project, const UnitSelection &sel)
             a.coder = CoderId {kGold};
             a.content = g.content;
             a.quote = g.quote;
-            s.coded.insert({g.article.value, kGold});
+            s.counted.insert({g.article.value, kGold});
             s.annotations.push_back(a);
         }
     }
 
-    for (const Assignment &a : *assignments)
-        if (inPhase(sel.phase, a.phase) && articleIds.contains(a.article.value)
+    auto annotations = project.allAnnotations();
+    if (!annotations)
+        return std::unexpected(annotations.error());
+    for (Annotation &a : *annotations)
+        if (inPhase(sel.phase, a.phase) && s.counts(a.article.value, a.coder.value)
             && s.coderIndex.contains(a.coder.value))
-            s.coded.insert({a.article.value, a.coder.value});
-    for (const Annotation &a : *annotations)
-        if (inPhase(sel.phase, a.phase) && articleIds.contains(a.article.value)
-            && s.coderIndex.contains(a.coder.value)) {
-            s.coded.insert({a.article.value, a.coder.value});
-            s.annotations.push_back(a);
-        }
-    for (const Judgement &j : *judgements)
-        if (inPhase(sel.phase, j.phase) && articleIds.contains(j.article.value)
-            && s.coderIndex.contains(j.coder.value)) {
-            s.coded.insert({j.article.value, j.coder.value});
-            s.judgements.push_back(j);
-        }
+            s.annotations.push_back(std::move(a));
+    auto judgements = project.allJudgements();
+    if (!judgements)
+        return std::unexpected(judgements.error());
+    for (Judgement &j : *judgements)
+        if (inPhase(sel.phase, j.phase) && s.counts(j.article.value, j.coder.value)
+            && s.coderIndex.contains(j.coder.value))
+            s.judgements.push_back(std::move(j));
     return s;
 }
+
+QStringList leftOutLines(const std::vector<CountedCodings::LeftOut> &leftOut)
+{
+    QStringList out;
+    for (const CountedCodings::LeftOut &l : leftOut)
+        out << tr("%1: %n article(s) in progress left out", nullptr, int(l.articles.size()))
+                   .arg(l.coder);
+    return out;
+}
+
+QJsonArray leftOutJson(const std::vector<CountedCodings::LeftOut> &leftOut)
+{
+    QJsonArray out;
+    for (const CountedCodings::LeftOut &l : leftOut)
+        out.append(QJsonObject {{QStringLiteral("coder"), l.coder},
+            {QStringLiteral("articles"), QJsonArray::fromStringList(l.articles)}});
+    return out;
+}
+
+namespace {
 
 // Span units of one article: passages of overlapping spans (union-find over the overlap graph)
 // and each coder's attribute value in each passage.
@@ -233,16 +251,21 @@ std::optional<UnitKind> unitKindFromKey(const QString &key)
 
 Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &sel)
 {
+    auto counted = countedCodings(project, sel);
+    if (!counted)
+        return std::unexpected(counted.error());
+    return unitTable(project, *counted, sel);
+}
+
+Result<ReliabilityTable> unitTable(
+    const Project &project, const CountedCodings &s, const UnitSelection &sel)
+{
     if (sel.unit == UnitKind::Continuum)
         return fail(ErrorCode::InvalidArgument,
             tr("Continuum units are compared with unitizing alpha, not as a table."));
     if (sel.unit == UnitKind::Span && (!sel.function || sel.attribute.isEmpty()))
         return fail(ErrorCode::InvalidArgument,
             tr("Span units compare an attribute: name one function and one of its attributes."));
-    auto gathered = gather(project, sel);
-    if (!gathered)
-        return std::unexpected(gathered.error());
-    const Selection &s = *gathered;
     ReliabilityTable table;
     table.source = project.path();
     for (const Coder &c : s.coders)
@@ -259,7 +282,7 @@ Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &
         const qint64 articleId = summary.id.value;
         bool anyCoder = false;
         for (const Coder &c : s.coders)
-            anyCoder = anyCoder || s.coded.contains({articleId, c.id.value});
+            anyCoder = anyCoder || s.counts(articleId, c.id.value);
         if (!anyCoder)
             continue;
 
@@ -327,7 +350,7 @@ Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &
         for (size_t u = 0; u < units.size(); ++u) {
             QStringList row;
             for (qsizetype c = 0; c < coders; ++c) {
-                if (!s.coded.contains({articleId, s.coders[size_t(c)].id.value})) {
+                if (!s.counts(articleId, s.coders[size_t(c)].id.value)) {
                     row << QString();
                 } else if (sel.function) {
                     row << (masks[u][size_t(c)] ? QStringLiteral("present")
@@ -342,42 +365,60 @@ Result<ReliabilityTable> unitTable(const Project &project, const UnitSelection &
     }
     if (table.units.isEmpty())
         return fail(ErrorCode::NotFound,
-            tr("None of the selected coders coded any of the selected articles."));
+            tr("None of the selected coders has marked any of the selected articles done."));
     return table;
 }
 
 Result<ContinuumData> continuumData(const Project &project, const UnitSelection &sel)
 {
-    auto gathered = gather(project, sel);
-    if (!gathered)
-        return std::unexpected(gathered.error());
-    const Selection &s = *gathered;
+    auto counted = countedCodings(project, sel);
+    if (!counted)
+        return std::unexpected(counted.error());
+    return continuumData(*counted, sel);
+}
+
+Result<ContinuumData> continuumData(const CountedCodings &s, const UnitSelection &sel)
+{
+    // The coders on the continuum: those of the selection that were read, else all read.
+    std::vector<const Coder *> coders;
+    for (const Coder &c : s.coders)
+        if (sel.coders.isEmpty() || sel.coders.contains(c.pseudonym)
+            || (sel.includeGold && c.id.value < 0))
+            coders.push_back(&c);
+    if (coders.size() < 2)
+        return fail(ErrorCode::InvalidArgument,
+            tr("Reliability needs at least two coders; the selection has %n.", nullptr,
+                int(coders.size())));
+    QHash<qint64, int> column;
     ContinuumData out;
     out.categories = sel.function ? 1 : 4;
-    for (const Coder &c : s.coders)
-        out.coders << c.pseudonym;
+    for (const Coder *c : coders) {
+        column.insert(c->id.value, int(out.coders.size()));
+        out.coders << c->pseudonym;
+    }
 
     // Per (article, coder, category): the spans, to be merged where they overlap.
     std::map<std::tuple<qint64, int, int>, std::vector<TextRange>> spans;
     for (const Annotation &a : s.annotations) {
         if (sel.function && a.content.function != *sel.function)
             continue;
+        auto c = column.constFind(a.coder.value);
+        if (c == column.cend())
+            continue;
         const int category = sel.function ? 0 : int(a.content.function);
-        spans[{a.article.value, s.coderIndex.value(a.coder.value), category}].push_back(
-            a.content.range);
+        spans[{a.article.value, c.value(), category}].push_back(a.content.range);
     }
     for (const ArticleSummary &summary : s.articles) {
-        const bool all = std::all_of(s.coders.begin(), s.coders.end(), [&](const Coder &c) {
-            return s.coded.contains({summary.id.value, c.id.value});
-        });
+        const bool all = std::all_of(coders.begin(), coders.end(),
+            [&](const Coder *c) { return s.counts(summary.id.value, c->id.value); });
         if (!all)
             continue;
         const std::int64_t offset = out.length;
         out.articles << summary.externalId;
         out.length += summary.length;
-        for (size_t c = 0; c < s.coders.size(); ++c)
+        for (int c = 0; c < int(coders.size()); ++c)
             for (int category = 0; category < out.categories; ++category) {
-                auto it = spans.find({summary.id.value, int(c), category});
+                auto it = spans.find({summary.id.value, c, category});
                 if (it == spans.end())
                     continue;
                 std::vector<TextRange> ranges = it->second;
@@ -390,13 +431,13 @@ Result<ContinuumData> continuumData(const Project &project, const UnitSelection 
                         merged.push_back(r);
                 }
                 for (const TextRange &r : merged)
-                    out.units.push_back(reliability::ContinuumUnit {
-                        int(c), category, offset + r.start, offset + r.end});
+                    out.units.push_back(
+                        reliability::ContinuumUnit {c, category, offset + r.start, offset + r.end});
             }
     }
     if (out.articles.isEmpty())
         return fail(ErrorCode::NotFound,
-            tr("No article was coded by all of the selected coders, so there is no common "
+            tr("No article was marked done by all of the selected coders, so there is no common "
                "continuum."));
     return out;
 }

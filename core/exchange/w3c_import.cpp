@@ -2,6 +2,7 @@
 
 #include "core/exchange/w3c_format.h"
 #include "core/project/annotation_edits.h"
+#include "core/project/article_status_edit.h"
 #include "core/project/project.h"
 #include "core/text/offset_map.h"
 
@@ -12,6 +13,8 @@
 #include <QJsonDocument>
 
 #include <map>
+#include <set>
+#include <utility>
 
 namespace fourfold {
 
@@ -145,6 +148,7 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
     }
 
     W3cImportReport report;
+    std::set<std::pair<qint64, qint64>> finished; // (article, coder) with imported codings
     auto status = project.batch([&]() -> Status {
         QHash<QString, CoderId> coders;
         for (const Pending &p : pending) {
@@ -173,7 +177,15 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
                 return applied;
             }
             ++report.spans;
+            finished.insert({p.article.value, coder->value});
         }
+        // Imported codings are finished work: each article counts for its coder (CodingScope).
+        for (const auto &[article, coder] : finished) {
+            SetArticleStatusEdit done(
+                ArticleId {article}, CoderId {coder}, QStringLiteral("done"), phase);
+            FOURFOLD_TRY_STATUS(project.apply(done));
+        }
+        report.articlesDone = qint64(finished.size());
         return {};
     });
     if (!status)

@@ -6,13 +6,14 @@
 
 namespace fourfold {
 
-SetArticleStatusEdit::SetArticleStatusEdit(ArticleId article, CoderId coder, QString status)
+SetArticleStatusEdit::SetArticleStatusEdit(
+    ArticleId article, CoderId coder, QString status, Phase phaseIfNew)
     : Edit(coder)
     , m_article(article)
     , m_coder(coder)
     , m_status(std::move(status))
-{
-}
+    , m_phaseIfNew(phaseIfNew)
+{ }
 
 QString SetArticleStatusEdit::text() const
 {
@@ -23,9 +24,12 @@ QString SetArticleStatusEdit::text() const
 
 Status SetArticleStatusEdit::apply(Database &db)
 {
-    if (m_status != QLatin1String("assigned") && m_status != QLatin1String("started") && m_status != QLatin1String("done"))
+    if (m_status != QLatin1String("assigned") && m_status != QLatin1String("started")
+        && m_status != QLatin1String("done"))
         return fail(ErrorCode::InvalidArgument,
-                    QCoreApplication::translate("ArticleStatusEdit", "\"%1\" is not a status (assigned, started, done).").arg(m_status));
+            QCoreApplication::translate(
+                "ArticleStatusEdit", "\"%1\" is not a status (assigned, started, done).")
+                .arg(m_status));
     auto all = store::assignments(db);
     if (!all)
         return std::unexpected(all.error());
@@ -34,12 +38,14 @@ Status SetArticleStatusEdit::apply(Database &db)
         if (a.article == m_article && a.coder == m_coder)
             before.emplace_back(a.phase, a.status);
     if (before.empty()) {
-        FOURFOLD_TRY_STATUS(store::insertAssignment(db, m_article, m_coder, Phase::Production));
-        FOURFOLD_TRY_STATUS(store::setAssignmentStatus(db, m_article, m_coder, Phase::Production, m_status));
+        FOURFOLD_TRY_STATUS(store::insertAssignment(db, m_article, m_coder, m_phaseIfNew));
+        FOURFOLD_TRY_STATUS(
+            store::setAssignmentStatus(db, m_article, m_coder, m_phaseIfNew, m_status));
         m_created = true;
     } else {
         for (const auto &[phase, status] : before)
-            FOURFOLD_TRY_STATUS(store::setAssignmentStatus(db, m_article, m_coder, phase, m_status));
+            FOURFOLD_TRY_STATUS(
+                store::setAssignmentStatus(db, m_article, m_coder, phase, m_status));
         m_created = false;
     }
     m_before = std::move(before);
@@ -49,7 +55,7 @@ Status SetArticleStatusEdit::apply(Database &db)
 Status SetArticleStatusEdit::revert(Database &db)
 {
     if (m_created)
-        return store::removeAssignment(db, m_article, m_coder, Phase::Production);
+        return store::removeAssignment(db, m_article, m_coder, m_phaseIfNew);
     for (const auto &[phase, status] : m_before)
         FOURFOLD_TRY_STATUS(store::setAssignmentStatus(db, m_article, m_coder, phase, status));
     return {};

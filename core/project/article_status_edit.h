@@ -1,7 +1,8 @@
 #pragma once
 // A coder's progress on an article: "assigned" (not started), "started" or "done", kept on their
-// assignments. Marking an article the coder has no assignment for (a lead coding freely) creates
-// a production-phase assignment, which reverting removes again.
+// assignments. Marking an article the coder has no assignment for (a lead coding freely, or
+// imported codings) creates an assignment in `phaseIfNew` (production unless said), which
+// reverting removes again.
 
 #include "core/model/annotation.h"
 #include "core/project/edit.h"
@@ -15,7 +16,8 @@ class SetArticleStatusEdit : public Edit
 {
 public:
     // `status` is "assigned", "started" or "done"; apply() fails with InvalidArgument otherwise.
-    SetArticleStatusEdit(ArticleId article, CoderId coder, QString status);
+    SetArticleStatusEdit(
+        ArticleId article, CoderId coder, QString status, Phase phaseIfNew = Phase::Production);
     QString text() const override;
     QString action() const override { return QStringLiteral("article.status"); }
     QString objectType() const override { return QStringLiteral("assignment"); }
@@ -27,7 +29,8 @@ private:
     ArticleId m_article;
     CoderId m_coder;
     QString m_status;
-    std::vector<std::pair<Phase, QString>> m_before;  // each assignment's phase and old status
+    Phase m_phaseIfNew = Phase::Production;
+    std::vector<std::pair<Phase, QString>> m_before; // each assignment's phase and old status
     bool m_created = false;
 };
 

@@ -1,6 +1,7 @@
 #include "core/project/coding_import.h"
 
 #include "core/project/annotation_edits.h"
+#include "core/project/article_status_edit.h"
 #include "core/project/gold_edits.h"
 #include "core/project/project.h"
 #include "core/text/canonical_text.h"
@@ -11,6 +12,9 @@
 #include <QHash>
 #include <QJsonDocument>
 #include <QJsonObject>
+
+#include <set>
+#include <utility>
 
 namespace fourfold {
 
@@ -58,6 +62,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
     };
     QHash<QString, Known> articles;
     CodingImportReport report;
+    std::set<std::pair<qint64, qint64>> finished; // (article, coder) with imported codings
 
     auto work = [&]() -> Status {
         const QStringList lines = decoded->split(QLatin1Char('\n'));
@@ -109,6 +114,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 if (auto st = project.apply(edit); !st)
                     return failAt(st.error().code, path, lineNo, 0, st.error().message);
                 ++report.judgements;
+                finished.insert({article.id.value, coder.value});
                 continue;
             }
 
@@ -176,7 +182,16 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             if (auto st = project.apply(edit); !st)
                 return failAt(st.error().code, path, lineNo, 0, st.error().message);
             ++report.spans;
+            finished.insert({article.id.value, coder.value});
         }
+        // Imported codings are finished work: each article is marked done for its coder, so
+        // that it counts (CodingScope).
+        for (const auto &[article, coder] : finished) {
+            SetArticleStatusEdit done(
+                ArticleId {article}, CoderId {coder}, QStringLiteral("done"), phase);
+            FOURFOLD_TRY_STATUS(project.apply(done));
+        }
+        report.articlesDone = qint64(finished.size());
         return {};
     };
     FOURFOLD_TRY_STATUS(project.batch(work));

@@ -23,9 +23,11 @@ struct CodingImportReport {
     qint64 spans = 0;
     qint64 judgements = 0;
     qint64 gold = 0;
+    qint64 articlesDone = 0; // (article, coder) pairs marked done by the import
 };
 
-// Reads `path` and adds every span and answer in `phase`, all-or-nothing. Fails with
+// Reads `path` and adds every span and answer in `phase`, all-or-nothing. Imported codings are
+// finished work: every article they cover is marked done for its coder (CodingScope). Fails with
 // InvalidInput naming file, line and what is wrong: bad JSON, a missing or mistyped field, an
 // unknown article, coder or function, a quote that does not occur (often enough) in the
 // article, attributes the codebook does not allow.

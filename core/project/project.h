@@ -118,6 +118,7 @@ private:
     friend class ExtractorRuns;
     friend class CoderCopies;
     friend class StudyDesign;
+    friend class CodingScope;
 
     explicit Project(Database db)
         : m_db(std::move(db))

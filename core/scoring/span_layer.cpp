@@ -1,6 +1,7 @@
 #include "core/scoring/span_layer.h"
 
 #include "core/extract/extractor_runs.h"
+#include "core/project/coding_scope.h"
 #include "core/project/project.h"
 
 #include <QCoreApplication>
@@ -59,7 +60,8 @@ std::vector<ArticleId> SpanLayer::articles() const
     return out;
 }
 
-Result<SpanLayer> resolveLayer(const Project &project, const LayerSpec &spec)
+Result<SpanLayer> resolveLayer(
+    const Project &project, const LayerSpec &spec, bool includeUnfinished)
 {
     SpanLayer layer;
     layer.spec = spec;
@@ -107,17 +109,20 @@ Result<SpanLayer> resolveLayer(const Project &project, const LayerSpec &spec)
         if (spec.kind == LayerKind::Coder && chosen.isEmpty())
             return fail(
                 ErrorCode::NotFound, tr("There is no coder \"%1\" in the project.").arg(spec.name));
-        auto assignments = project.assignments();
-        if (!assignments)
-            return std::unexpected(assignments.error());
-        for (const Assignment &a : *assignments)
-            if (chosen.contains(a.coder.value))
-                covered.insert({a.article.value, pseudonyms.value(a.coder.value)});
+        // A coder covers the articles whose coding counts (CodingScope): spans of articles in
+        // progress are neither scored nor exported unless asked for.
+        auto scope = CodingScope::load(project, CodingScopeOptions {includeUnfinished, {}});
+        if (!scope)
+            return std::unexpected(scope.error());
+        for (const ArticleSummary &article : *articles)
+            for (const Coder &c : *coders)
+                if (chosen.contains(c.id.value) && scope->counts(article.id, c.id))
+                    covered.insert({article.id.value, c.pseudonym});
         auto annotations = project.allAnnotations();
         if (!annotations)
             return std::unexpected(annotations.error());
         for (const Annotation &a : *annotations) {
-            if (!chosen.contains(a.coder.value) || a.deleted)
+            if (!chosen.contains(a.coder.value) || a.deleted || !scope->counts(a.article, a.coder))
                 continue;
             LayerSpan s;
             s.article = a.article;

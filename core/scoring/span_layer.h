@@ -49,9 +49,9 @@ struct LayerSpan {
     QString createdAt; // ISO 8601 UTC; gold: when it was decided; run: the run's time
 };
 
-// Which article a source of the layer covers: the coder coded it (assigned in any phase, or
-// has an annotation on it), gold exists for it (at least one gold span), or the run saw it
-// (a run covers every article of the project).
+// Which article a source of the layer covers: the coder's coding of it counts (CodingScope:
+// marked done, or in progress too when asked for), gold exists for it (at least one gold span), or
+// the run saw it (a run covers every article of the project).
 struct LayerCoverage {
     ArticleId article;
     QString source;
@@ -66,8 +66,10 @@ struct SpanLayer {
     std::vector<ArticleId> articles() const;
 };
 
-// Reads the layer `spec` of `project`. Fails with NotFound naming the coder or run that does
-// not exist, or with the store's error.
-Result<SpanLayer> resolveLayer(const Project &project, const LayerSpec &spec);
+// Reads the layer `spec` of `project`; coder layers hold the articles whose coding counts
+// (CodingScope), with articles in progress when `includeUnfinished`. Fails with NotFound naming
+// the coder or run that does not exist, or with the store's error.
+Result<SpanLayer> resolveLayer(
+    const Project &project, const LayerSpec &spec, bool includeUnfinished = false);
 
 } // namespace fourfold

@@ -68,6 +68,20 @@ Result<std::vector<Assignment>> assignments(const Database &db)
     });
 }
 
+Result<std::vector<CodedTriple>> codedTriples(const Database &db)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT article_id, coder_id, phase FROM annotation WHERE deleted = 0 "
+                       "UNION SELECT article_id, coder_id, phase FROM judgement WHERE deleted = 0 "
+                       "ORDER BY 1, 2, 3"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    return collectRows(*stmt, [](const Statement &row) {
+        return CodedTriple {ArticleId {row.columnInt(0)}, CoderId {row.columnInt(1)},
+            phaseFromKey(row.columnText(2)).value_or(Phase::Production)};
+    });
+}
+
 Result<qint64> setAssignmentStatus(
     Database &db, ArticleId article, CoderId coder, Phase phase, const QString &status)
 {

@@ -25,6 +25,14 @@ Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase ph
 
 // Every live assignment, ordered by article and coder.
 Result<std::vector<Assignment>> assignments(const Database &db);
+// One (article, coder, phase) that has at least one live span or answer.
+struct CodedTriple {
+    ArticleId article;
+    CoderId coder;
+    Phase phase = Phase::Production;
+};
+// Every such triple, once, ordered by article, coder and phase (one query).
+Result<std::vector<CodedTriple>> codedTriples(const Database &db);
 // Sets the status of every live assignment of `coder` on `article`; returns how many rows
 // changed.
 Result<qint64> setAssignmentStatus(

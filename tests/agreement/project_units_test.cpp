@@ -31,6 +31,9 @@ struct UnitsFixture : ProjectFixture {
         add(f1, c2, FramingFunction::Remedy, {75, 107});
         add(f1, c2, FramingFunction::Evaluation, {100, 115}); // crosses sentences 3 and 4
         add(f2, c3, FramingFunction::Evaluation, {0, 10});
+        markDone(project, f1, c1);
+        markDone(project, f1, c2);
+        markDone(project, f2, c3);
     }
     void add(ArticleId a, CoderId c, FramingFunction f, TextRange r)
     {

@@ -204,6 +204,8 @@ struct CompareFixture : ProjectFixture {
         add(c1, F::Cause, 41, 73); // boundary
         add(c2, F::Cause, 55, 73);
         add(c1, F::Remedy, 75, 107); // only C01
+        markDone(project, f1, c1);
+        markDone(project, f1, c2);
     }
     AnnotationId add(CoderId coder, F f, qint64 start, qint64 end)
     {

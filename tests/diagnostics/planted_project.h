@@ -43,6 +43,7 @@ struct PlantedProject : ProjectFixture {
             REQUIRE(article->sentences.size() == 6);
             for (size_t c = 0; c < 4; ++c) {
                 REQUIRE(project.assign(id, coders[c], Phase::Reliability));
+                markDone(project, id, coders[c]);
                 auto span = [&](int sentence, FramingFunction f) {
                     TextRange r = article->sentences[size_t(sentence - 1)];
                     if (c != 3)

@@ -1,10 +1,41 @@
 #pragma once
 // A project in a temporary directory with a few invented articles, for the project tests.
 
+#include "core/project/article_status_edit.h"
 #include "core/project/project.h"
 #include "tests/support/test_support.h"
 
+#include <set>
+#include <tuple>
+#include <utility>
+
 namespace fourfold::test {
+
+// Marks `article` done for `coder`, as the coder's "mark as done" on the desk does, so that the
+// coder's codings of it count (CodingScope). A new assignment, if one is needed, is in `phase`.
+inline void markDone(
+    Project &project, ArticleId article, CoderId coder, Phase phase = Phase::Production)
+{
+    SetArticleStatusEdit edit(article, coder, QStringLiteral("done"), phase);
+    REQUIRE(project.apply(edit));
+}
+
+// Marks done every article for every coder who holds a live span or answer on it: the state of
+// a study whose coders have all finished.
+inline void markCodedArticlesDone(Project &project)
+{
+    std::set<std::tuple<qint64, qint64, Phase>> pairs;
+    auto spans = project.allAnnotations();
+    REQUIRE(spans);
+    for (const Annotation &a : *spans)
+        pairs.insert({a.article.value, a.coder.value, a.phase});
+    auto answers = project.allJudgements();
+    REQUIRE(answers);
+    for (const Judgement &j : *answers)
+        pairs.insert({j.article.value, j.coder.value, j.phase});
+    for (const auto &[article, coder, phase] : pairs)
+        markDone(project, ArticleId {article}, CoderId {coder}, phase);
+}
 
 struct ProjectFixture {
     QTemporaryDir dir;
@@ -36,8 +67,7 @@ struct ProjectFixture {
 
     CoderId addCoder(const QString &pseudonym, CoderRole role = CoderRole::Coder)
     {
-        auto id = project.addCoder(
-            QStringLiteral("Test person ") + pseudonym, pseudonym, role);
+        auto id = project.addCoder(QStringLiteral("Test person ") + pseudonym, pseudonym, role);
         REQUIRE(id);
         return *id;
     }

@@ -445,11 +445,15 @@ TEST_CASE("a recorded draw of the reliability sample is stated in the method tex
         figureValue(embeddedFigures(text), QStringLiteral("sample.draw_record")).toObject();
     CHECK(record.value(QStringLiteral("seed")).toString() == QLatin1String("11"));
     CHECK(record.value(QStringLiteral("articles")).toArray().size() == 3);
-    // C01 and C02 coded the 9 reliability articles and the 3 drawn ones (Lombard et al. 2002:
-    // the amount coded by each coder).
+    // C01 and C02 finished the 9 reliability articles; the 3 drawn ones are assigned but nobody
+    // has touched them, so they are not "coded" (Lombard et al. 2002: the amount coded by each
+    // coder).
     CHECK(text.contains(QStringLiteral("C01 coded <span class=\"fig\" "
                                        "data-figure=\"report:coders.0.articles\" "
-                                       "data-format=\"int\">12</span>")));
+                                       "data-format=\"int\">9</span>")));
+    CHECK(text.contains(
+        QStringLiteral("Only articles that a coder had marked as finished count for that coder.")));
+    CHECK_FALSE(text.contains(QStringLiteral("left out")));
 }
 
 TEST_CASE("writeReport: the desktop's entry point writes by suffix and refuses others")

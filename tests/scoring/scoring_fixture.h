@@ -35,6 +35,8 @@ struct ScoringFixture : ProjectFixture {
         auto applied = project.apply(edit);
         INFO((applied ? QString() : applied.error().toString()).toStdString());
         REQUIRE(applied);
+        // The coder has finished the article, so the span counts.
+        markDone(project, article, coder);
         return edit.annotationId();
     }
 

@@ -294,6 +294,15 @@ void ComparisonWindow::buildActions()
     m_showDecided->setToolTip(tr("Also step through disagreements already decided"));
     bar->addWidget(m_showDecided);
     connect(m_showDecided, &QCheckBox::toggled, this, [this] { reloadArticle(); });
+    m_showUnfinished = new QCheckBox(tr("Articles in progress"), bar);
+    m_showUnfinished->setToolTip(tr("Also compare coders on articles they have started but not "
+                                    "yet marked done"));
+    m_showUnfinished->setAccessibleName(tr("Show articles in progress"));
+    bar->addWidget(m_showUnfinished);
+    connect(m_showUnfinished, &QCheckBox::toggled, this, [this] {
+        reloadQueue();
+        reloadArticle();
+    });
     bar->addSeparator();
 
     m_previous = makeAction(tr("Previous"), {Qt::Key_P, QKeySequence(Qt::SHIFT | Qt::Key_F8)},
@@ -359,6 +368,7 @@ ComparisonFilter ComparisonWindow::filter() const
     const QStringList pair = m_pairBox->currentData().toString().split(QLatin1Char(':'));
     if (pair.size() == 2)
         f.coderPair = std::pair {CoderId {pair[0].toLongLong()}, CoderId {pair[1].toLongLong()}};
+    f.includeUnfinished = m_showUnfinished->isChecked();
     return f;
 }
 
@@ -431,7 +441,8 @@ void ComparisonWindow::reloadArticle()
     auto comparison = compareArticle(m_session->project(), m_article, filter());
     if (!comparison) {
         // The pair did not code this article: show every coder instead.
-        comparison = compareArticle(m_session->project(), m_article, {filter().function, {}});
+        comparison = compareArticle(
+            m_session->project(), m_article, {filter().function, {}, filter().includeUnfinished});
         if (!comparison) {
             showMessage(comparison.error().toString(), true);
             return;
@@ -817,8 +828,10 @@ bool ComparisonWindow::acceptAllAgreed()
 {
     if (!m_article.isValid())
         return false;
-    // Agreement among every coder of the article, whatever the filters show.
-    auto all = compareArticle(m_session->project(), m_article);
+    // Agreement among every coder of the article whose coding is shown, whatever the function
+    // and pair filters say.
+    auto all =
+        compareArticle(m_session->project(), m_article, {{}, {}, filter().includeUnfinished});
     if (!all) {
         showMessage(all.error().toString(), true);
         return false;

@@ -100,6 +100,7 @@ private:
     QComboBox *m_functionBox = nullptr;
     QComboBox *m_pairBox = nullptr;
     QCheckBox *m_showDecided = nullptr;
+    QCheckBox *m_showUnfinished = nullptr;
     QLabel *m_passageLabel = nullptr;
     QTreeWidget *m_spanList = nullptr;
     QLabel *m_detail = nullptr;

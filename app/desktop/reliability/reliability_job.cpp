@@ -35,7 +35,8 @@ private:
 
 std::unexpected<Error> cancelled()
 {
-    return fail(ErrorCode::Cancelled, QCoreApplication::translate("ReliabilityJob", "The computation was cancelled."));
+    return fail(ErrorCode::Cancelled,
+        QCoreApplication::translate("ReliabilityJob", "The computation was cancelled."));
 }
 
 } // namespace
@@ -60,7 +61,8 @@ Result<ReliabilityOutcome> runReliabilityJob(
     const ReliabilityRequest &request, const JobProgress &progress)
 {
     if (request.functions.empty() && request.unit != UnitKind::Article)
-        return fail(ErrorCode::InvalidArgument, QCoreApplication::translate("ReliabilityJob", "Choose at least one framing function."));
+        return fail(ErrorCode::InvalidArgument,
+            QCoreApplication::translate("ReliabilityJob", "Choose at least one framing function."));
     // A connection of this thread's own: the window's connection stays on the GUI thread.
     auto project = Project::open(request.projectPath);
     if (!project)
@@ -72,8 +74,14 @@ Result<ReliabilityOutcome> runReliabilityJob(
     base.phase = request.phase;
     base.item = request.item;
     base.includeGold = request.includeGold;
+    base.includeUnfinished = request.includeUnfinished;
+    // One read of the codings that count serves every analysis.
+    auto counted = countedCodings(*project, base);
+    if (!counted)
+        return std::unexpected(counted.error());
 
     ReliabilityOutcome out;
+    out.leftOut = counted->leftOut;
     AgreementOptions agreement;
     agreement.bootstrapReplicates = request.bootstrapReplicates;
     agreement.seed = request.seed;
@@ -87,7 +95,7 @@ Result<ReliabilityOutcome> runReliabilityJob(
         UnitSelection sel = base;
         if (request.functions.size() == 1)
             sel.function = request.functions.front();
-        auto continuum = continuumData(*project, sel);
+        auto continuum = continuumData(*counted, sel);
         if (!continuum)
             return std::unexpected(continuum.error());
         out.coders = continuum->coders;
@@ -96,7 +104,9 @@ Result<ReliabilityOutcome> runReliabilityJob(
         out.unitizing = reliability::unitizingAlpha(0, continuum->length,
             int(continuum->coders.size()), continuum->categories, continuum->units);
         if (!out.unitizing->inputError.empty())
-            return fail(ErrorCode::Internal, QCoreApplication::translate("ReliabilityJob", "The continuum could not be compared."),
+            return fail(ErrorCode::Internal,
+                QCoreApplication::translate(
+                    "ReliabilityJob", "The continuum could not be compared."),
                 QString::fromStdString(out.unitizing->inputError));
         if (!steps.next())
             return cancelled();
@@ -144,7 +154,7 @@ Result<ReliabilityOutcome> runReliabilityJob(
     ReliabilityTable mainTable;
     std::optional<EncodedData> mainEncoded;
     for (const Analysis &a : analyses) {
-        auto table = unitTable(*project, a.selection);
+        auto table = unitTable(*project, *counted, a.selection);
         if (!table)
             return std::unexpected(table.error());
         if (a.sets)

@@ -24,6 +24,8 @@ struct ReliabilityRequest {
     std::optional<Phase> phase;
     QString item = QStringLiteral("dominant_function"); // article units
     bool includeGold = false;
+    // Takes articles coders started but did not mark done in (CodingScope).
+    bool includeUnfinished = false;
     int bootstrapReplicates = 1000;
     std::uint64_t seed = 1;
     PeriodKind period = PeriodKind::Batch;
@@ -40,6 +42,8 @@ struct ReliabilityColumn {
 
 struct ReliabilityOutcome {
     QStringList coders;
+    // Articles in progress left out, per coder (empty when taken in).
+    std::vector<CountedCodings::LeftOut> leftOut;
     std::vector<ReliabilityColumn> columns;
     // The column the diagnostics and the pair heat map are computed on: the sets column when
     // several functions are chosen, else the only one.

@@ -336,6 +336,10 @@ void ReliabilityWindow::buildControls(QWidget *panel)
 
     m_gold = new QCheckBox(tr("Gold joins as a coder"), panel);
     form->addRow(QString(), m_gold);
+    m_unfinished = new QCheckBox(tr("Count articles in progress"), panel);
+    m_unfinished->setToolTip(tr("By default a coder's article counts only once the coder has "
+                                "marked it done; tick to count articles still in progress too."));
+    form->addRow(QString(), m_unfinished);
 
     m_replicates = new QSpinBox(panel);
     m_replicates->setRange(0, 100000);
@@ -409,6 +413,7 @@ ReliabilityRequest ReliabilityWindow::request() const
     if (m_item->count() > 0)
         r.item = m_item->currentData().toString();
     r.includeGold = m_gold->isChecked();
+    r.includeUnfinished = m_unfinished->isChecked();
     r.bootstrapReplicates = m_replicates->value();
     r.period = PeriodKind(m_period->currentData().toInt());
     r.batchSize = m_batchSize->value();
@@ -432,6 +437,7 @@ void ReliabilityWindow::setRequest(const ReliabilityRequest &r)
     if (int i = m_item->findData(r.item); i >= 0)
         m_item->setCurrentIndex(i);
     m_gold->setChecked(r.includeGold);
+    m_unfinished->setChecked(r.includeUnfinished);
     m_replicates->setValue(r.bootstrapReplicates);
     m_period->setCurrentIndex(std::max(0, m_period->findData(int(r.period))));
     m_batchSize->setValue(r.batchSize);
@@ -492,7 +498,9 @@ void ReliabilityWindow::finish()
     } else {
         m_error.clear();
         m_outcome = std::move(*result);
-        m_message->setText(tr("%n coder(s) compared.", nullptr, int(m_outcome->coders.size())));
+        QStringList lines {tr("%n coder(s) compared.", nullptr, int(m_outcome->coders.size()))};
+        lines << leftOutLines(m_outcome->leftOut);
+        m_message->setText(lines.join(QLatin1Char('\n')));
         showOutcome();
     }
     updateControls();

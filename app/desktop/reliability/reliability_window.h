@@ -97,6 +97,7 @@ private:
     QListWidget *m_coders = nullptr;
     QComboBox *m_phase = nullptr;
     QCheckBox *m_gold = nullptr;
+    QCheckBox *m_unfinished = nullptr;
     QSpinBox *m_replicates = nullptr;
     QComboBox *m_period = nullptr;
     QSpinBox *m_batchSize = nullptr;
