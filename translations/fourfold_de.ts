@@ -91,17 +91,17 @@
 <context>
     <name>ReliabilityJob</name>
     <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="38"/>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="39"/>
         <source>The computation was cancelled.</source>
         <translation>Die Berechnung wurde abgebrochen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="63"/>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="65"/>
         <source>Choose at least one framing function.</source>
         <translation>Wählen Sie mindestens eine Framing-Funktion.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="99"/>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="108"/>
         <source>The continuum could not be compared.</source>
         <translation>Das Kontinuum konnte nicht verglichen werden.</translation>
     </message>
@@ -459,8 +459,8 @@
     </message>
     <message>
         <location filename="../app/desktop/compare/comparison_window.cpp" line="259"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="568"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="624"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
         <source>, </source>
         <translation>, </translation>
     </message>
@@ -510,253 +510,268 @@
         <translation>Auch bereits entschiedene Abweichungen durchgehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="299"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="297"/>
+        <source>Articles in progress</source>
+        <translation>Artikel in Bearbeitung</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="298"/>
+        <source>Also compare coders on articles they have started but not yet marked done</source>
+        <translation>Codierer auch bei Artikeln vergleichen, die sie begonnen, aber noch nicht als fertig markiert haben</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <source>Show articles in progress</source>
+        <translation>Artikel in Bearbeitung zeigen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="308"/>
         <source>Previous</source>
         <translation>Zurück</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="309"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorherige nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="301"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
         <source>Next</source>
         <translation>Weiter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="301"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
         <source>Next undecided disagreement</source>
         <translation>Nächste nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="303"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="312"/>
         <source>Previous article</source>
         <translation>Vorheriger Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="304"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="313"/>
         <source>Previous article in the queue</source>
         <translation>Vorheriger Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="309"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
         <source>Next article</source>
         <translation>Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
         <source>Next article in the queue</source>
         <translation>Nächster Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
         <source>Accept</source>
         <translation>Übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Die Textstelle der gewählten codierenden Person in den Goldstandard übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="320"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="329"/>
         <source>Merge</source>
         <translation>Vereinen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="321"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="330"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eine Textstelle, die die gewählten Textstellen umfasst, in den Goldstandard aufnehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="322"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
         <source>Edit…</source>
         <translation>Bearbeiten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="323"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="332"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Eine Goldstandard-Textstelle mit eigener Funktion und eigenen Grenzen festlegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
         <source>Reject</source>
         <translation>Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Festhalten, dass die gewählten Textstellen nicht in den Goldstandard gehören</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
         <source>Withdraw gold</source>
         <translation>Zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Die gewählte Goldstandard-Textstelle zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="329"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
         <source>Accept all agreed</source>
         <translation>Übereinstimmende übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Jede Textstelle übernehmen, in der alle Codierenden des Artikels übereinstimmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="337"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="346"/>
         <source>Undo</source>
         <translation>Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="339"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
         <source>Redo</source>
         <translation>Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="479"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="490"/>
         <source>Gold (%1)</source>
         <translation>Goldstandard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="479"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="616"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="490"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="627"/>
         <source>Gold</source>
         <translation>Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="524"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="535"/>
         <source>No undecided disagreement left in this article. Alt+Down opens the next article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel. Alt+Pfeil nach unten öffnet den nächsten Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="541"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="552"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="557"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="568"/>
         <source>No spans to compare in this article.</source>
         <translation>Keine Textstellen zum Vergleichen in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="558"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="569"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klicken Sie auf eine Passage oder drücken Sie N für die nächste Abweichung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="568"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
         <source>no span by %1</source>
         <translation>keine Textstelle von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="571"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="582"/>
         <source>different functions</source>
         <translation>unterschiedliche Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="584"/>
         <source>different boundaries</source>
         <translation>unterschiedliche Grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="575"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="586"/>
         <source>different attributes</source>
         <translation>unterschiedliche Merkmale</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="583"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="594"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 von %2 (Absatz %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="587"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="598"/>
         <source>the coders agree</source>
         <translation>die Codierenden stimmen überein</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="587"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="598"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="588"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="599"/>
         <source> — decided</source>
         <translation> — entschieden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="607"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="618"/>
         <source>Characters %1 to %2</source>
         <translation>Zeichen %1 bis %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="608"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="619"/>
         <source>rejected</source>
         <translation>verworfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="608"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="619"/>
         <source>in gold</source>
         <translation>im Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="624"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
         <source>drawn by the lead</source>
         <translation>von der Leitung gezogen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="624"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
         <source>from %1</source>
         <translation>von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="626"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="637"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Entschieden von %1 am %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="628"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="639"/>
         <source> Rationale: %1</source>
         <translation> Begründung: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="636"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="647"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Goldstandard %1 entschieden von %2 am %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="722"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="733"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Rückgängig mit %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="734"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="745"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Wählen Sie die Textstelle einer codierenden Person zum Übernehmen (oder mehrere zum Vereinen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="761"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="772"/>
         <source>Choose a passage first.</source>
         <translation>Wählen Sie zuerst eine Passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="799"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="810"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Wählen Sie die zu verwerfenden Textstellen (die noch nicht verworfen sind).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="810"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="821"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Wählen Sie eine Goldstandard-Textstelle zum Zurückziehen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="828"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="841"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>In diesem Artikel ist keine übereinstimmende Passage mehr zu übernehmen.</translation>
     </message>
@@ -1118,7 +1133,7 @@
         <translation>Wählen Sie einen Lauf zum Bewerten aus.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="480"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="481"/>
         <source>Scoring %n run(s)…</source>
         <translation>
             <numerusform>%n Lauf wird bewertet…</numerusform>
@@ -1126,17 +1141,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="530"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="533"/>
         <source>gold</source>
         <translation>Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="530"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="533"/>
         <source>coder %1</source>
         <translation>Codierende %1</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="541"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="544"/>
         <source>%n article(s) with %1 scored.</source>
         <translation>
             <numerusform>%n Artikel mit %1 bewertet.</numerusform>
@@ -1144,42 +1159,42 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="589"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="592"/>
         <source>Precision %1, recall %2 (95% bootstrap intervals)</source>
         <translation>Precision %1, Recall %2 (95-%-Bootstrap-Intervalle)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="608"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="611"/>
         <source>▼ below</source>
         <translation>▼ darunter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="610"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="613"/>
         <source>● inside</source>
         <translation>● innerhalb</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="612"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="615"/>
         <source>▲ above</source>
         <translation>▲ darüber</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="614"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="617"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="633"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="636"/>
         <source>Micro</source>
         <translation>Mikro</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="635"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="638"/>
         <source>Macro</source>
         <translation>Makro</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="638"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="641"/>
         <source>%1: alpha on %n unit(s) (%2) with coders %3.</source>
         <translation>
             <numerusform>%1: Alpha auf %n Einheit (%2) mit den Codierenden %3.</numerusform>
@@ -1187,12 +1202,12 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="643"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="646"/>
         <source>%1: no band with the coders — %2</source>
         <translation>%1: kein Band mit den Codierenden — %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="646"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="649"/>
         <source>Scored against %1, %2 matching; intervals from %n bootstrap replicate(s) over articles.</source>
         <translation>
             <numerusform>Bewertet gegen %1, Abgleich %2; Intervalle aus %n Bootstrap-Replikation über Artikel.</numerusform>
@@ -1200,7 +1215,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="663"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="666"/>
         <source>Errors of run &lt;b&gt;%1&lt;/b&gt; against %2 (%3 matching) on %n article(s). Double-click an error to see its passage.</source>
         <translation>
             <numerusform>Fehler des Laufs &lt;b&gt;%1&lt;/b&gt; gegen %2 (Abgleich %3) in %n Artikel. Doppelklicken Sie auf einen Fehler, um seine Passage zu sehen.</numerusform>
@@ -1208,43 +1223,43 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="669"/>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="725"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="672"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="728"/>
         <source>No run scored.</source>
         <translation>Kein Lauf bewertet.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="683"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="686"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="713"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="716"/>
         <source>reference</source>
         <translation>Referenz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="718"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="721"/>
         <source>None (false positive)</source>
         <translation>Keine (falsch positiv)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="719"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="722"/>
         <source>None (miss)</source>
         <translation>Keine (verfehlt)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="730"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="733"/>
         <source>Rows: the function %1 gives a span; columns: the function run &lt;b&gt;%2&lt;/b&gt; gives it (%3 matching). The diagonal is agreement on the function.</source>
         <translation>Zeilen: die Funktion, die %1 einer Textstelle gibt; Spalten: die Funktion, die Lauf &lt;b&gt;%2&lt;/b&gt; ihr gibt (Abgleich %3). Die Diagonale ist Übereinstimmung in der Funktion.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="778"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="781"/>
         <source>%1 %2 → run %3: %4</source>
         <translation>%1 %2 → Lauf %3: %4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="784"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="787"/>
         <source>The run gives no matched span another function.</source>
         <translation>Der Lauf gibt keiner zugeordneten Textstelle eine andere Funktion.</translation>
     </message>
@@ -1342,52 +1357,52 @@
 <context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="109"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="117"/>
         <source>Write the reliability report</source>
         <translation>Reliabilitätsbericht schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="111"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="119"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webseite (*.html);;PDF-Dokument (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="118"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="121"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="126"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="129"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="121"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="129"/>
         <source>The report was written to %1.</source>
         <translation>Der Bericht wurde nach %1 geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="130"/>
         <location filename="../app/desktop/lead_windows.cpp" line="138"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="151"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="154"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="146"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="159"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="162"/>
         <source>Coder copy</source>
         <translation>Kopie für Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="139"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="147"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Eine Kopie für Codierende enthält nur die dieser Person zugewiesenen Artikel, das Codebuch und ihre eigenen Codierungen. Für wen ist die Kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="145"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="153"/>
         <source>Write the coder copy</source>
         <translation>Kopie für Codierende schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="146"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="165"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="154"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-Projekt (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="155"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="163"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 für %2 geschrieben: %n Artikel, %3 Textstelle(n).</numerusform>
@@ -1395,18 +1410,18 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="165"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
         <source>Merge returned coder copies</source>
         <translation>Zurückgegebene Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="170"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="192"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="178"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
         <source>Merge coder copies</source>
         <translation>Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="171"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="179"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -1415,17 +1430,17 @@
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="179"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="187"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): bereits zusammengeführt, nichts Neues.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="181"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 neu, %4 geändert (%5 gelöscht), %6 Konflikt(e).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="190"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="198"/>
         <source>Conflicts keep the project&apos;s version until you decide: fourfold-cli merge PROJECT --conflicts lists them.</source>
         <translation>Bei Konflikten bleibt die Fassung des Projekts erhalten, bis Sie entscheiden: fourfold-cli merge PROJECT --conflicts listet sie auf.</translation>
     </message>
@@ -2029,9 +2044,9 @@
     </message>
     <message>
         <location filename="../app/desktop/reliability/reliability_window.cpp" line="155"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="558"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="661"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="693"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="566"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="701"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
@@ -2176,67 +2191,77 @@
         <translation>Goldstandard als weitere Codierung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="344"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="339"/>
+        <source>Count articles in progress</source>
+        <translation>Artikel in Bearbeitung mitzählen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="340"/>
+        <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
+        <translation>Standardmäßig zählt ein Artikel eines Codierers erst, wenn er ihn als fertig markiert hat; ankreuzen, um auch Artikel in Bearbeitung mitzuzählen.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="348"/>
         <source>none</source>
         <translation>keine</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="345"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="349"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="348"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="352"/>
         <source>Batches of articles</source>
         <translation>Artikelblöcke</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="349"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="353"/>
         <source>Weeks</source>
         <translation>Wochen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="350"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
         <source>&amp;Drift by</source>
         <translation>&amp;Drift nach</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="358"/>
         <source> articles</source>
         <translation> Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
         <source>Batch &amp;size</source>
         <translation>Block&amp;größe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="357"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
         <source>Co&amp;mpute</source>
         <translation>Be&amp;rechnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="363"/>
         <source>Cancel</source>
         <translation>Abbrechen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="463"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="469"/>
         <source>Computing…</source>
         <translation>Wird berechnet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="473"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="479"/>
         <source>Cancelling after the current step…</source>
         <translation>Abbruch nach dem aktuellen Schritt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="490"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="496"/>
         <source>Cancelled; the results shown are from before.</source>
         <translation>Abgebrochen; die angezeigten Ergebnisse sind von vorher.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="495"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="501"/>
         <source>%n coder(s) compared.</source>
         <translation>
             <numerusform>%n codierende Person verglichen.</numerusform>
@@ -2244,274 +2269,362 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="508"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="516"/>
         <source>Chosen functions (sets)</source>
         <translation>Funktionsmenge</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="527"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
         <source>Alpha</source>
         <translation>Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="527"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
         <source>95% interval (bootstrap)</source>
         <translation>95-%-Intervall (Bootstrap)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="527"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
         <source>q(α &lt; 0.800)</source>
         <translation>q(α &lt; 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="528"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="646"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="528"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
         <source>Percent agreement</source>
         <translation>Prozentuale Übereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="528"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
         <source>Fleiss&apos; kappa</source>
         <translation>Fleiss&apos; Kappa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="532"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
         <source>Cohen&apos;s kappa %1 × %2</source>
         <translation>Cohens Kappa %1 × %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="534"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
         <source>Pairable values</source>
         <translation>Paarbare Werte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="534"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
         <source>Pairable units</source>
         <translation>Paarbare Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="534"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
         <source>Rarest value</source>
         <translation>Seltenster Wert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
         <source>Minimum values (α ≥ 0.800)</source>
         <translation>Mindestzahl an Werten (α ≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
         <source>Sample</source>
         <translation>Stichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="650"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="548"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
         <source>Statistic</source>
         <translation>Kennwert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="566"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="574"/>
         <source>%1, %2 replicates, seed %3</source>
         <translation>%1, %2 Replikationen, Seed %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="592"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="600"/>
         <source>Fleiss&apos; kappa needs every coder on every unit; some cells are missing.</source>
         <translation>Fleiss&apos; Kappa braucht alle Codierenden auf jeder Einheit; einige Zellen fehlen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="610"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="618"/>
         <source>below the minimum</source>
         <translation>unter dem Minimum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="611"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="619"/>
         <source>large enough</source>
         <translation>groß genug</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="627"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="635"/>
         <source>The sample is smaller than Krippendorff&apos;s minimum for the rarest value (alpha ≥ 0.800 at p = 0.05) in: %1. Code more units before relying on these figures.</source>
         <translation>Die Stichprobe ist kleiner als Krippendorffs Minimum für den seltensten Wert (Alpha ≥ 0.800 bei p = 0.05) in: %1. Codieren Sie mehr Einheiten, bevor Sie sich auf diese Werte verlassen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="646"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
         <source>Unitizing alpha</source>
         <translation>Unitizing-Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="646"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
         <source>Observed disagreement D_o</source>
         <translation>Beobachtete Nichtübereinstimmung D_o</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="647"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="655"/>
         <source>Expected disagreement D_e</source>
         <translation>Erwartete Nichtübereinstimmung D_e</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="647"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="655"/>
         <source>Continuum</source>
         <translation>Kontinuum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="652"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="660"/>
         <source>All four, pooled</source>
         <translation>Alle vier, gepoolt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="677"/>
         <source>%1 articles, %2 characters</source>
         <translation>%1 Artikel, %2 Zeichen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="680"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="688"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="680"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="710"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="863"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="688"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="871"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="682"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="690"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="683"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
         <source>Alpha without</source>
         <translation>Alpha ohne</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="683"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
         <source>Change</source>
         <translation>Änderung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="683"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
         <source>Units</source>
         <translation>Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="710"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
         <source>Matches</source>
         <translation>Zuordnungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="710"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
         <source>Length ± SE</source>
         <translation>Länge ± SE</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="710"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
         <source>Start</source>
         <translation>Beginn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
         <source>End</source>
         <translation>Ende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
         <source>Longer</source>
         <translation>Länger</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
         <source>Shorter</source>
         <translation>Kürzer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
         <source>Habit</source>
         <translation>Gewohnheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="733"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="741"/>
         <source>spans systematically longer</source>
         <translation>Textstellen systematisch länger</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="734"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="742"/>
         <source>spans systematically shorter</source>
         <translation>Textstellen systematisch kürzer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="747"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="755"/>
         <source>Alpha per function, with 95% bootstrap intervals</source>
         <translation>Alpha je Funktion, mit 95-%-Bootstrap-Intervallen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="751"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="912"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="759"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="920"/>
         <source>Krippendorff&apos;s alpha</source>
         <translation>Krippendorffs Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="771"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="779"/>
         <source>pooled</source>
         <translation>gepoolt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="855"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="863"/>
         <source>Cohen&apos;s kappa of each pair of coders over the units both coded (%1). Darker: higher agreement; hatched: not defined.</source>
         <translation>Cohens Kappa jedes Paars von Codierenden über die von beiden codierten Einheiten (%1). Dunkler: höhere Übereinstimmung; schraffiert: nicht definiert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="860"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="868"/>
         <source>Continuum units have no per-pair kappa; see the span agreement in the function confusion.</source>
         <translation>Kontinuum-Einheiten haben kein Kappa je Paar; siehe die Übereinstimmung der Textstellen in der Funktionsverwechslung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="877"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="885"/>
         <source>nothing</source>
         <translation>nichts</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="894"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
         <source>A coder&apos;s span</source>
         <translation>Textstelle einer Person</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="894"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
         <source>What another coder gave it</source>
         <translation>Was eine andere Person vergab</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="895"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="903"/>
         <source>Each span of each coder against the best-overlapping span of every other coder (both directions of each pair). Darker: a larger share of the row. &quot;nothing&quot;: no overlapping span.</source>
         <translation>Jede Textstelle jeder codierenden Person gegen die am besten überlappende Textstelle jeder anderen (beide Richtungen jedes Paars). Dunkler: größerer Anteil der Zeile. „nichts“: keine überlappende Textstelle.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="907"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="915"/>
         <source>Alpha by week of first coding — %1</source>
         <translation>Alpha nach Woche der ersten Codierung — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="916"/>
         <source>Alpha by batch of articles, in coding order — %1</source>
         <translation>Alpha nach Artikelblock, in Codierreihenfolge — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="945"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="953"/>
         <source>ISO week</source>
         <translation>ISO-Woche</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="945"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="953"/>
         <source>articles (in coding order)</source>
         <translation>Artikel (in Codierreihenfolge)</translation>
+    </message>
+</context>
+<context>
+    <name>fourfold::ReportOptionsDialog</name>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="22"/>
+        <source>Reliability report</source>
+        <translation>Reliabilitätsbericht</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="26"/>
+        <source>Paragraph</source>
+        <translation>Absatz</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="27"/>
+        <source>Sentence</source>
+        <translation>Satz</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="28"/>
+        <source>Token (word)</source>
+        <translation>Token (Wort)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="30"/>
+        <source>&amp;Unit of the functions</source>
+        <translation>&amp;Einheit der Funktionen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="33"/>
+        <source>All phases</source>
+        <translation>Alle Phasen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="36"/>
+        <source>&amp;Phase</source>
+        <translation>&amp;Phase</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="54"/>
+        <source>&amp;Coders</source>
+        <translation>&amp;Codierer</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="60"/>
+        <source>none</source>
+        <translation>keine</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="61"/>
+        <source> replicates</source>
+        <translation> Replikationen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="62"/>
+        <source>&amp;Bootstrap</source>
+        <translation>&amp;Bootstrap</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="66"/>
+        <source>S&amp;eed</source>
+        <translation>S&amp;eed</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="68"/>
+        <source>Count articles in progress</source>
+        <translation>Artikel in Bearbeitung mitzählen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="69"/>
+        <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
+        <translation>Standardmäßig zählt ein Artikel eines Codierers erst, wenn er ihn als fertig markiert hat; ankreuzen, um auch Artikel in Bearbeitung mitzuzählen.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="74"/>
+        <source>Reliability report: %1</source>
+        <translation>Reliabilitätsbericht: %1</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="75"/>
+        <source>&amp;Title</source>
+        <translation>&amp;Titel</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="78"/>
+        <source>&amp;Write…</source>
+        <translation>&amp;Schreiben…</translation>
     </message>
 </context>
 <context>

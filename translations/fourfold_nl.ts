@@ -91,17 +91,17 @@
 <context>
     <name>ReliabilityJob</name>
     <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="38"/>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="39"/>
         <source>The computation was cancelled.</source>
         <translation>De berekening is geannuleerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="63"/>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="65"/>
         <source>Choose at least one framing function.</source>
         <translation>Kies ten minste één framingfunctie.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="99"/>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="108"/>
         <source>The continuum could not be compared.</source>
         <translation>Het continuüm kon niet worden vergeleken.</translation>
     </message>
@@ -459,8 +459,8 @@
     </message>
     <message>
         <location filename="../app/desktop/compare/comparison_window.cpp" line="259"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="568"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="624"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
         <source>, </source>
         <translation>, </translation>
     </message>
@@ -510,253 +510,268 @@
         <translation>Ook langs verschillen gaan die al beslist zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="299"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="297"/>
+        <source>Articles in progress</source>
+        <translation>Artikelen in bewerking</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="298"/>
+        <source>Also compare coders on articles they have started but not yet marked done</source>
+        <translation>Vergelijk codeurs ook op artikelen die ze begonnen maar nog niet als klaar gemarkeerd hebben</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <source>Show articles in progress</source>
+        <translation>Artikelen in bewerking tonen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="308"/>
         <source>Previous</source>
         <translation>Vorige</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="309"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorig onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="301"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
         <source>Next</source>
         <translation>Volgende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="301"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
         <source>Next undecided disagreement</source>
         <translation>Volgend onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="303"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="312"/>
         <source>Previous article</source>
         <translation>Vorig artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="304"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="313"/>
         <source>Previous article in the queue</source>
         <translation>Vorig artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="309"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
         <source>Next article</source>
         <translation>Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
         <source>Next article in the queue</source>
         <translation>Volgend artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
         <source>Accept</source>
         <translation>Accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Het fragment van de gekozen codeur in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="320"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="329"/>
         <source>Merge</source>
         <translation>Samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="321"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="330"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eén fragment dat de gekozen fragmenten omvat in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="322"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
         <source>Edit…</source>
         <translation>Bewerken…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="323"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="332"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Een fragment voor de gouden standaard vastleggen met een eigen functie en eigen grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
         <source>Reject</source>
         <translation>Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Vastleggen dat de gekozen fragmenten niet in de gouden standaard horen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
         <source>Withdraw gold</source>
         <translation>Terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Het gekozen fragment uit de gouden standaard terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="329"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
         <source>Accept all agreed</source>
         <translation>Alle overeenstemmende accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Elk fragment accepteren waarover alle codeurs van het artikel het eens zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="337"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="346"/>
         <source>Undo</source>
         <translation>Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="339"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
         <source>Redo</source>
         <translation>Opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="479"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="490"/>
         <source>Gold (%1)</source>
         <translation>Gouden standaard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="479"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="616"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="490"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="627"/>
         <source>Gold</source>
         <translation>Gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="524"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="535"/>
         <source>No undecided disagreement left in this article. Alt+Down opens the next article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel. Alt+Pijl-omlaag opent het volgende artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="541"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="552"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="557"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="568"/>
         <source>No spans to compare in this article.</source>
         <translation>Geen fragmenten om te vergelijken in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="558"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="569"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klik op een passage of druk op N voor het volgende verschil.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="568"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
         <source>no span by %1</source>
         <translation>geen fragment van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="571"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="582"/>
         <source>different functions</source>
         <translation>verschillende functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="584"/>
         <source>different boundaries</source>
         <translation>verschillende grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="575"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="586"/>
         <source>different attributes</source>
         <translation>verschillende kenmerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="583"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="594"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 van %2 (alinea %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="587"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="598"/>
         <source>the coders agree</source>
         <translation>de codeurs zijn het eens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="587"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="598"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="588"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="599"/>
         <source> — decided</source>
         <translation> — beslist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="607"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="618"/>
         <source>Characters %1 to %2</source>
         <translation>Tekens %1 tot %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="608"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="619"/>
         <source>rejected</source>
         <translation>verworpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="608"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="619"/>
         <source>in gold</source>
         <translation>in gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="624"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
         <source>drawn by the lead</source>
         <translation>getekend door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="624"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
         <source>from %1</source>
         <translation>van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="626"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="637"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Beslist door %1 op %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="628"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="639"/>
         <source> Rationale: %1</source>
         <translation> Motivering: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="636"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="647"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Gouden standaard %1 beslist door %2 op %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="722"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="733"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Ongedaan maken met %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="734"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="745"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Kies het fragment van één codeur om te accepteren (of meerdere om samen te voegen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="761"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="772"/>
         <source>Choose a passage first.</source>
         <translation>Kies eerst een passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="799"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="810"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Kies de fragmenten om te verwerpen (die nog niet verworpen zijn).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="810"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="821"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Kies één fragment uit de gouden standaard om terug te trekken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="828"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="841"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>Er is in dit artikel geen overeenstemmende passage meer om te accepteren.</translation>
     </message>
@@ -1118,7 +1133,7 @@
         <translation>Selecteer een run om te scoren.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="480"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="481"/>
         <source>Scoring %n run(s)…</source>
         <translation>
             <numerusform>%n run wordt gescoord…</numerusform>
@@ -1126,17 +1141,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="530"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="533"/>
         <source>gold</source>
         <translation>de gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="530"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="533"/>
         <source>coder %1</source>
         <translation>codeur %1</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="541"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="544"/>
         <source>%n article(s) with %1 scored.</source>
         <translation>
             <numerusform>%n artikel met %1 gescoord.</numerusform>
@@ -1144,42 +1159,42 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="589"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="592"/>
         <source>Precision %1, recall %2 (95% bootstrap intervals)</source>
         <translation>Precisie %1, recall %2 (95%-bootstrapintervallen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="608"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="611"/>
         <source>▼ below</source>
         <translation>▼ eronder</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="610"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="613"/>
         <source>● inside</source>
         <translation>● binnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="612"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="615"/>
         <source>▲ above</source>
         <translation>▲ erboven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="614"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="617"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="633"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="636"/>
         <source>Micro</source>
         <translation>Micro</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="635"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="638"/>
         <source>Macro</source>
         <translation>Macro</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="638"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="641"/>
         <source>%1: alpha on %n unit(s) (%2) with coders %3.</source>
         <translation>
             <numerusform>%1: alfa op %n eenheid (%2) met codeurs %3.</numerusform>
@@ -1187,12 +1202,12 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="643"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="646"/>
         <source>%1: no band with the coders — %2</source>
         <translation>%1: geen band met de codeurs — %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="646"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="649"/>
         <source>Scored against %1, %2 matching; intervals from %n bootstrap replicate(s) over articles.</source>
         <translation>
             <numerusform>Gescoord tegen %1, vergelijkingswijze %2; intervallen uit %n bootstrapreplicatie over artikelen.</numerusform>
@@ -1200,7 +1215,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="663"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="666"/>
         <source>Errors of run &lt;b&gt;%1&lt;/b&gt; against %2 (%3 matching) on %n article(s). Double-click an error to see its passage.</source>
         <translation>
             <numerusform>Fouten van run &lt;b&gt;%1&lt;/b&gt; tegen %2 (vergelijkingswijze %3) in %n artikel. Dubbelklik op een fout om de passage te zien.</numerusform>
@@ -1208,43 +1223,43 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="669"/>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="725"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="672"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="728"/>
         <source>No run scored.</source>
         <translation>Geen run gescoord.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="683"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="686"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="713"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="716"/>
         <source>reference</source>
         <translation>referentie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="718"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="721"/>
         <source>None (false positive)</source>
         <translation>Geen (fout-positief)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="719"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="722"/>
         <source>None (miss)</source>
         <translation>Geen (gemist)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="730"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="733"/>
         <source>Rows: the function %1 gives a span; columns: the function run &lt;b&gt;%2&lt;/b&gt; gives it (%3 matching). The diagonal is agreement on the function.</source>
         <translation>Rijen: de functie die %1 aan een fragment geeft; kolommen: de functie die run &lt;b&gt;%2&lt;/b&gt; eraan geeft (vergelijkingswijze %3). De diagonaal is overeenstemming over de functie.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="778"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="781"/>
         <source>%1 %2 → run %3: %4</source>
         <translation>%1 %2 → run %3: %4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/runs/extractor_window.cpp" line="784"/>
+        <location filename="../app/desktop/runs/extractor_window.cpp" line="787"/>
         <source>The run gives no matched span another function.</source>
         <translation>De run geeft geen enkel gekoppeld fragment een andere functie.</translation>
     </message>
@@ -1342,52 +1357,52 @@
 <context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="109"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="117"/>
         <source>Write the reliability report</source>
         <translation>Het betrouwbaarheidsrapport schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="111"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="119"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webpagina (*.html);;PDF-document (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="118"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="121"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="126"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="129"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="121"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="129"/>
         <source>The report was written to %1.</source>
         <translation>Het rapport is geschreven naar %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="130"/>
         <location filename="../app/desktop/lead_windows.cpp" line="138"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="151"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="154"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="146"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="159"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="162"/>
         <source>Coder copy</source>
         <translation>Codeurskopie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="139"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="147"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Een codeurskopie bevat alleen de artikelen die aan deze codeur zijn toegewezen, het codeboek en de eigen coderingen van de codeur. Voor wie is de kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="145"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="153"/>
         <source>Write the coder copy</source>
         <translation>De codeurskopie schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="146"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="165"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="154"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-project (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="155"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="163"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 geschreven voor %2: %n artikel, %3 fragment(en).</numerusform>
@@ -1395,18 +1410,18 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="165"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
         <source>Merge returned coder copies</source>
         <translation>Teruggekomen codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="170"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="192"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="178"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
         <source>Merge coder copies</source>
         <translation>Codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="171"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="179"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -1415,17 +1430,17 @@
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="179"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="187"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): al samengevoegd, niets nieuws.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="181"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 nieuw, %4 gewijzigd (%5 verwijderd), %6 conflict(en).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="190"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="198"/>
         <source>Conflicts keep the project&apos;s version until you decide: fourfold-cli merge PROJECT --conflicts lists them.</source>
         <translation>Bij conflicten blijft de versie van het project staan tot je beslist: fourfold-cli merge PROJECT --conflicts toont ze.</translation>
     </message>
@@ -2029,9 +2044,9 @@
     </message>
     <message>
         <location filename="../app/desktop/reliability/reliability_window.cpp" line="155"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="558"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="661"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="693"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="566"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="701"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
@@ -2176,67 +2191,77 @@
         <translation>Gouden standaard als codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="344"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="339"/>
+        <source>Count articles in progress</source>
+        <translation>Artikelen in bewerking meetellen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="340"/>
+        <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
+        <translation>Standaard telt een artikel van een codeur pas mee als de codeur het als klaar gemarkeerd heeft; vink aan om ook artikelen in bewerking mee te tellen.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="348"/>
         <source>none</source>
         <translation>geen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="345"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="349"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="348"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="352"/>
         <source>Batches of articles</source>
         <translation>Groepen artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="349"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="353"/>
         <source>Weeks</source>
         <translation>Weken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="350"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
         <source>&amp;Drift by</source>
         <translation>&amp;Drift per</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="358"/>
         <source> articles</source>
         <translation> artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
         <source>Batch &amp;size</source>
         <translation>Groeps&amp;grootte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="357"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
         <source>Co&amp;mpute</source>
         <translation>Be&amp;rekenen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="363"/>
         <source>Cancel</source>
         <translation>Annuleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="463"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="469"/>
         <source>Computing…</source>
         <translation>Bezig met berekenen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="473"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="479"/>
         <source>Cancelling after the current step…</source>
         <translation>Annuleren na de huidige stap…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="490"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="496"/>
         <source>Cancelled; the results shown are from before.</source>
         <translation>Geannuleerd; de getoonde resultaten zijn van eerder.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="495"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="501"/>
         <source>%n coder(s) compared.</source>
         <translation>
             <numerusform>%n codeur vergeleken.</numerusform>
@@ -2244,274 +2269,362 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="508"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="516"/>
         <source>Chosen functions (sets)</source>
         <translation>Functieverzameling</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="527"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
         <source>Alpha</source>
         <translation>Alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="527"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
         <source>95% interval (bootstrap)</source>
         <translation>95%-interval (bootstrap)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="527"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
         <source>q(α &lt; 0.800)</source>
         <translation>q(α &lt; 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="528"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="646"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
         <source>Verdict</source>
         <translation>Oordeel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="528"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
         <source>Percent agreement</source>
         <translation>Procentuele overeenstemming</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="528"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
         <source>Fleiss&apos; kappa</source>
         <translation>Fleiss&apos; kappa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="532"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
         <source>Cohen&apos;s kappa %1 × %2</source>
         <translation>Cohens kappa %1 × %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="534"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
         <source>Pairable values</source>
         <translation>Paarbare waarden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="534"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
         <source>Pairable units</source>
         <translation>Paarbare eenheden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="534"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
         <source>Rarest value</source>
         <translation>Zeldzaamste waarde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
         <source>Minimum values (α ≥ 0.800)</source>
         <translation>Benodigde waarden (α ≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
         <source>Sample</source>
         <translation>Steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="650"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="548"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
         <source>Statistic</source>
         <translation>Statistiek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="566"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="574"/>
         <source>%1, %2 replicates, seed %3</source>
         <translation>%1, %2 replicaties, seed %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="592"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="600"/>
         <source>Fleiss&apos; kappa needs every coder on every unit; some cells are missing.</source>
         <translation>Fleiss&apos; kappa vereist elke codeur op elke eenheid; er ontbreken cellen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="610"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="618"/>
         <source>below the minimum</source>
         <translation>onder het minimum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="611"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="619"/>
         <source>large enough</source>
         <translation>groot genoeg</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="627"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="635"/>
         <source>The sample is smaller than Krippendorff&apos;s minimum for the rarest value (alpha ≥ 0.800 at p = 0.05) in: %1. Code more units before relying on these figures.</source>
         <translation>De steekproef is kleiner dan Krippendorffs minimum voor de zeldzaamste waarde (alfa ≥ 0.800 bij p = 0.05) in: %1. Codeer meer eenheden voordat je op deze cijfers vertrouwt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="646"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
         <source>Unitizing alpha</source>
         <translation>Unitizing-alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="646"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
         <source>Observed disagreement D_o</source>
         <translation>Waargenomen onenigheid D_o</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="647"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="655"/>
         <source>Expected disagreement D_e</source>
         <translation>Verwachte onenigheid D_e</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="647"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="655"/>
         <source>Continuum</source>
         <translation>Continuüm</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="652"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="660"/>
         <source>All four, pooled</source>
         <translation>Alle vier, samengenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="677"/>
         <source>%1 articles, %2 characters</source>
         <translation>%1 artikelen, %2 tekens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="680"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="688"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="680"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="710"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="863"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="688"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="871"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="682"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="690"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="683"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
         <source>Alpha without</source>
         <translation>Alfa zonder</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="683"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
         <source>Change</source>
         <translation>Verandering</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="683"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
         <source>Units</source>
         <translation>Eenheden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="710"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
         <source>Matches</source>
         <translation>Koppelingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="710"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
         <source>Length ± SE</source>
         <translation>Lengte ± SE</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="710"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
         <source>Start</source>
         <translation>Begin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
         <source>End</source>
         <translation>Einde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
         <source>Longer</source>
         <translation>Langer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
         <source>Shorter</source>
         <translation>Korter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
         <source>Habit</source>
         <translation>Gewoonte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="733"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="741"/>
         <source>spans systematically longer</source>
         <translation>fragmenten systematisch langer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="734"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="742"/>
         <source>spans systematically shorter</source>
         <translation>fragmenten systematisch korter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="747"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="755"/>
         <source>Alpha per function, with 95% bootstrap intervals</source>
         <translation>Alfa per functie, met 95%-bootstrapintervallen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="751"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="912"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="759"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="920"/>
         <source>Krippendorff&apos;s alpha</source>
         <translation>Krippendorffs alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="771"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="779"/>
         <source>pooled</source>
         <translation>samengenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="855"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="863"/>
         <source>Cohen&apos;s kappa of each pair of coders over the units both coded (%1). Darker: higher agreement; hatched: not defined.</source>
         <translation>Cohens kappa van elk paar codeurs over de eenheden die beide codeerden (%1). Donkerder: hogere overeenstemming; gearceerd: niet gedefinieerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="860"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="868"/>
         <source>Continuum units have no per-pair kappa; see the span agreement in the function confusion.</source>
         <translation>Continuümeenheden hebben geen kappa per paar; zie de overeenstemming van fragmenten in de functieverwarring.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="877"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="885"/>
         <source>nothing</source>
         <translation>niets</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="894"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
         <source>A coder&apos;s span</source>
         <translation>Fragment van een codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="894"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
         <source>What another coder gave it</source>
         <translation>Wat een andere codeur eraan gaf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="895"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="903"/>
         <source>Each span of each coder against the best-overlapping span of every other coder (both directions of each pair). Darker: a larger share of the row. &quot;nothing&quot;: no overlapping span.</source>
         <translation>Elk fragment van elke codeur tegenover het best overlappende fragment van elke andere codeur (beide richtingen van elk paar). Donkerder: een groter deel van de rij. ‘niets’: geen overlappend fragment.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="907"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="915"/>
         <source>Alpha by week of first coding — %1</source>
         <translation>Alfa per week van eerste codering — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="916"/>
         <source>Alpha by batch of articles, in coding order — %1</source>
         <translation>Alfa per groep artikelen, in codeervolgorde — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="945"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="953"/>
         <source>ISO week</source>
         <translation>ISO-week</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="945"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="953"/>
         <source>articles (in coding order)</source>
         <translation>artikelen (in codeervolgorde)</translation>
+    </message>
+</context>
+<context>
+    <name>fourfold::ReportOptionsDialog</name>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="22"/>
+        <source>Reliability report</source>
+        <translation>Betrouwbaarheidsrapport</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="26"/>
+        <source>Paragraph</source>
+        <translation>Alinea</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="27"/>
+        <source>Sentence</source>
+        <translation>Zin</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="28"/>
+        <source>Token (word)</source>
+        <translation>Token (woord)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="30"/>
+        <source>&amp;Unit of the functions</source>
+        <translation>&amp;Eenheid van de functies</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="33"/>
+        <source>All phases</source>
+        <translation>Alle fasen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="36"/>
+        <source>&amp;Phase</source>
+        <translation>&amp;Fase</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="54"/>
+        <source>&amp;Coders</source>
+        <translation>&amp;Codeurs</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="60"/>
+        <source>none</source>
+        <translation>geen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="61"/>
+        <source> replicates</source>
+        <translation> replicaties</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="62"/>
+        <source>&amp;Bootstrap</source>
+        <translation>&amp;Bootstrap</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="66"/>
+        <source>S&amp;eed</source>
+        <translation>Z&amp;aad</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="68"/>
+        <source>Count articles in progress</source>
+        <translation>Artikelen in bewerking meetellen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="69"/>
+        <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
+        <translation>Standaard telt een artikel van een codeur pas mee als de codeur het als klaar gemarkeerd heeft; vink aan om ook artikelen in bewerking mee te tellen.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="74"/>
+        <source>Reliability report: %1</source>
+        <translation>Betrouwbaarheidsrapport: %1</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="75"/>
+        <source>&amp;Title</source>
+        <translation>&amp;Titel</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="78"/>
+        <source>&amp;Write…</source>
+        <translation>&amp;Schrijven…</translation>
     </message>
 </context>
 <context>

@@ -19,6 +19,7 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
         qint64 spans = 0;
         qint64 judgements = 0;
         qint64 gold = 0;
+        qint64 articlesDone = 0;
         QStringList created;
         if (w3c) {
             auto result = importW3cAnnotations(project, file, phase);
@@ -26,6 +27,7 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
                 return report(result.error());
             spans = result->spans;
             created = result->codersCreated;
+            articlesDone = result->articlesDone;
         } else {
             auto result = importQuotedCodings(project, file, phase);
             if (!result)
@@ -33,9 +35,11 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
             spans = result->spans;
             judgements = result->judgements;
             gold = result->gold;
+            articlesDone = result->articlesDone;
         }
         done.append(QJsonObject {{QStringLiteral("file"), file}, {QStringLiteral("spans"), spans},
             {QStringLiteral("judgements"), judgements}, {QStringLiteral("gold"), gold},
+            {QStringLiteral("articles_done"), articlesDone},
             {QStringLiteral("codersCreated"), QJsonArray::fromStringList(created)}});
         if (!json) {
             out(QCoreApplication::translate("cli", "%1: %2 spans, %3 answers, %4 gold spans added")
@@ -43,6 +47,11 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
                     .arg(spans)
                     .arg(judgements)
                     .arg(gold));
+            if (articlesDone > 0)
+                out(QCoreApplication::translate("cli",
+                    "  %1 article(s) marked done for their coders (imported codings count as "
+                    "finished)")
+                        .arg(articlesDone));
             if (!created.isEmpty())
                 out(QCoreApplication::translate("cli", "  new coders: %1")
                         .arg(created.join(QStringLiteral(", "))));

@@ -3,6 +3,7 @@
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/reliability/reliability_window.h"
+#include "app/desktop/reliability/report_options_dialog.h"
 #include "app/desktop/runs/extractor_window.h"
 #include "app/desktop/study/progress_board_window.h"
 #include "app/desktop/study/study_design_window.h"
@@ -105,6 +106,13 @@ void LeadWindows::writeReport()
 {
     if (!m_session)
         return;
+    ReportOptionsDialog choose(m_session->project(), m_owner);
+    // Start from what the lead is looking at in the Reliability window.
+    if (auto *window = qobject_cast<ReliabilityWindow *>(m_reliability.data()))
+        choose.setOptions(reportOptionsFor(window->request()));
+    if (choose.exec() != QDialog::Accepted)
+        return;
+    const ReportOptions options = choose.options();
     const QString base = QFileInfo(m_session->project().path()).completeBaseName();
     const QString path = QFileDialog::getSaveFileName(m_owner, tr("Write the reliability report"),
         base + QStringLiteral("-reliability.html"),
@@ -112,7 +120,7 @@ void LeadWindows::writeReport()
     if (path.isEmpty())
         return;
     QApplication::setOverrideCursor(Qt::WaitCursor);
-    const Status written = fourfold::writeReport(m_session->project(), ReportOptions {}, path);
+    const Status written = fourfold::writeReport(m_session->project(), options, path);
     QApplication::restoreOverrideCursor();
     if (!written)
         QMessageBox::warning(m_owner, tr("Reliability report"), written.error().message);

@@ -5,9 +5,12 @@
 
 #include "app/desktop/reliability/matrix_view.h"
 #include "app/desktop/reliability/reliability_window.h"
+#include "app/desktop/reliability/report_options_dialog.h"
 #include "core/agreement/agreement_report.h"
 #include "tests/diagnostics/planted_project.h"
 
+#include <QCheckBox>
+#include <QLabel>
 #include <QSignalSpy>
 #include <QTabWidget>
 #include <QTableWidget>
@@ -188,4 +191,70 @@ TEST_CASE("a selection the unitizer refuses is reported, not thrown")
     REQUIRE(spy.wait(60000));
     CHECK_FALSE(spy.front().front().toBool());
     CHECK(w.errorMessage().contains(QStringLiteral("at least two coders")));
+}
+
+TEST_CASE("the reliability window leaves articles in progress out and names them until ticked")
+{
+    PlantedProject p;
+    // C02 takes a6 back up: started again, not done.
+    SetArticleStatusEdit reopened(p.articles[5], p.coders[1], QStringLiteral("started"));
+    REQUIRE(p.project.apply(reopened));
+    ReliabilityWindow w(p.project);
+    w.setRequest(plantedRequest());
+    CHECK_FALSE(w.request().includeUnfinished);
+    REQUIRE(computeAndWait(w));
+    REQUIRE(w.outcome());
+    REQUIRE(w.outcome()->leftOut.size() == 1);
+    CHECK(w.outcome()->leftOut[0].coder == QStringLiteral("C02"));
+    CHECK(w.outcome()->leftOut[0].articles == QStringList {QStringLiteral("a6")});
+    const double without = w.outcome()->columns.back().report.alpha.pairableValues;
+    bool named = false;
+    for (QLabel *l : w.findChildren<QLabel *>())
+        named = named || l->text().contains(QStringLiteral("C02: 1 article(s) in progress left out"));
+    CHECK(named);
+
+    QCheckBox *box = nullptr;
+    for (QCheckBox *b : w.findChildren<QCheckBox *>())
+        if (b->text() == QStringLiteral("Count articles in progress"))
+            box = b;
+    REQUIRE(box);
+    box->click();
+    CHECK(w.request().includeUnfinished);
+    REQUIRE(computeAndWait(w));
+    CHECK(w.outcome()->leftOut.empty());
+    // a6's six sentences now carry C02's value as well.
+    CHECK(w.outcome()->columns.back().report.alpha.pairableValues == without + 6);
+}
+
+TEST_CASE("the report dialog starts from the reliability window's choices")
+{
+    PlantedProject p;
+    ReliabilityRequest r = plantedRequest();
+    r.unit = UnitKind::Paragraph;
+    r.coders = {QStringLiteral("C01"), QStringLiteral("C03")};
+    r.includeUnfinished = true;
+    r.seed = 42;
+    const ReportOptions o = reportOptionsFor(r);
+    CHECK(o.unit == UnitKind::Paragraph);
+    CHECK(o.phase == Phase::Reliability);
+    CHECK(o.coders == r.coders);
+    CHECK(o.bootstrapReplicates == 500);
+    CHECK(o.seed == 42);
+    CHECK(o.includeUnfinished);
+    // A unit the report does not take falls back to sentences.
+    r.unit = UnitKind::Continuum;
+    CHECK(reportOptionsFor(r).unit == UnitKind::Sentence);
+
+    ReportOptionsDialog dialog(p.project);
+    // Every coder finished something: all ticked, which is the report's default (no list).
+    CHECK(dialog.options().coders.isEmpty());
+    CHECK_FALSE(dialog.options().includeUnfinished);
+    dialog.setOptions(o);
+    const ReportOptions back = dialog.options();
+    CHECK(back.unit == UnitKind::Paragraph);
+    CHECK(back.phase == Phase::Reliability);
+    CHECK(back.coders == o.coders);
+    CHECK(back.bootstrapReplicates == 500);
+    CHECK(back.seed == 42);
+    CHECK(back.includeUnfinished);
 }

@@ -96,6 +96,16 @@ TEST_CASE_METHOD(RoundTrip, "importing the W3C export reproduces every span", "[
     CHECK(report->codersCreated == QStringList {QStringLiteral("C02")});
     CHECK(spansOf(fresh) == spansOf(project));
     CHECK(spansOf(fresh).size() == 5);
+    // Imported codings are finished work: each (article, coder) is marked done in the import's
+    // phase, so they count for reliability (CodingScope).
+    CHECK(report->articlesDone == 3);
+    auto assignments = fresh.assignments();
+    REQUIRE(assignments);
+    REQUIRE(assignments->size() == 3);
+    for (const Assignment &a : *assignments) {
+        CHECK(a.status == QStringLiteral("done"));
+        CHECK(a.phase == Phase::Production);
+    }
 }
 
 TEST_CASE_METHOD(RoundTrip, "the W3C import refuses bad files whole, naming file and position",

@@ -45,6 +45,16 @@ TEST_CASE("quote-anchored codings land on the right code points")
     CHECK((*spans)[0].phase == Phase::Reliability);
     // The second "The" opens the second paragraph at code point 75.
     CHECK((*spans)[1].content.range == TextRange {75, 78});
+    // Imported codings are finished work: f1 and f2 are marked done for C01 in the import's
+    // phase, so they count for reliability (CodingScope).
+    CHECK(r->articlesDone == 2);
+    auto assignments = f.project.assignments();
+    REQUIRE(assignments);
+    REQUIRE(assignments->size() == 2);
+    for (const Assignment &a : *assignments) {
+        CHECK(a.status == QStringLiteral("done"));
+        CHECK(a.phase == Phase::Reliability);
+    }
 }
 
 TEST_CASE("a bad codings file names the line and changes nothing")

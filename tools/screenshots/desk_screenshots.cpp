@@ -7,6 +7,7 @@
 #include "app/desktop/main_window.h"
 #include "app/desktop/reading_view.h"
 #include "app/desktop/reliability/reliability_window.h"
+#include "app/desktop/reliability/report_options_dialog.h"
 #include "tools/screenshots/screenshot_support.h"
 
 #include <QEventLoop>
@@ -95,6 +96,11 @@ int main(int argc, char *argv[])
             w.tabs()->setCurrentIndex(tab);
             ok &= saveGrab(w, out, names[tab]);
         }
+        // The report's options, started from the window's choices.
+        ReportOptionsDialog dialog(*p);
+        dialog.setOptions(reportOptionsFor(w.request()));
+        dialog.show();
+        ok &= saveGrab(dialog, out, "report-options.png");
     }
     return ok ? 0 : 1;
 }
