@@ -135,8 +135,8 @@ int runImport(const QStringList &arguments)
     }
 
     if (parser.isSet(w3c) && parser.isSet(codings))
-        return usageError(command,
-            QCoreApplication::translate("cli", "choose either --w3c or --codings."));
+        return usageError(
+            command, QCoreApplication::translate("cli", "choose either --w3c or --codings."));
     Phase codingPhase = Phase::Production;
     if (parser.isSet(phase)) {
         const auto chosen = phaseFromKey(parser.value(phase));

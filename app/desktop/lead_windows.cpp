@@ -115,8 +115,7 @@ void LeadWindows::writeReport()
     const ReportOptions options = choose.options();
     const QString base = QFileInfo(m_session->project().path()).completeBaseName();
     const QString path = QFileDialog::getSaveFileName(m_owner, tr("Write the reliability report"),
-        base + QStringLiteral("-reliability.html"),
-        tr("Web page (*.html);;PDF document (*.pdf)"));
+        base + QStringLiteral("-reliability.html"), tr("Web page (*.html);;PDF document (*.pdf)"));
     if (path.isEmpty())
         return;
     QApplication::setOverrideCursor(Qt::WaitCursor);
@@ -169,8 +168,8 @@ void LeadWindows::mergeCopies()
 {
     if (!m_session)
         return;
-    const QStringList paths = QFileDialog::getOpenFileNames(m_owner,
-        tr("Merge returned coder copies"), QString(), tr("Fourfold project (*.fourfold)"));
+    const QStringList paths = QFileDialog::getOpenFileNames(
+        m_owner, tr("Merge returned coder copies"), QString(), tr("Fourfold project (*.fourfold)"));
     if (paths.isEmpty())
         return;
     auto reports = CoderCopies::merge(m_session->project(), paths);
@@ -183,15 +182,14 @@ void LeadWindows::mergeCopies()
     qint64 conflicts = 0;
     for (const MergeReport &r : *reports) {
         conflicts += r.conflicts;
-        lines << (r.alreadyMerged
-                ? tr("%1 (%2): already merged, nothing new.")
-                      .arg(QFileInfo(r.path).fileName(), r.coderPseudonym)
-                : tr("%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).")
-                      .arg(QFileInfo(r.path).fileName(), r.coderPseudonym)
-                      .arg(r.added)
-                      .arg(r.changed)
-                      .arg(r.deleted)
-                      .arg(r.conflicts));
+        lines << (r.alreadyMerged ? tr("%1 (%2): already merged, nothing new.")
+                                        .arg(QFileInfo(r.path).fileName(), r.coderPseudonym)
+                                  : tr("%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).")
+                                        .arg(QFileInfo(r.path).fileName(), r.coderPseudonym)
+                                        .arg(r.added)
+                                        .arg(r.changed)
+                                        .arg(r.deleted)
+                                        .arg(r.conflicts));
     }
     if (conflicts > 0)
         lines << QString()

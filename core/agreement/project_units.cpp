@@ -142,8 +142,9 @@ QStringList leftOutLines(const std::vector<CountedCodings::LeftOut> &leftOut)
 {
     QStringList out;
     for (const CountedCodings::LeftOut &l : leftOut)
-        out << tr("%1: %n article(s) in progress left out", nullptr, int(l.articles.size()))
-                   .arg(l.coder);
+        out << (l.articles.size() == 1
+                ? tr("%1: 1 article in progress left out").arg(l.coder)
+                : tr("%1: %2 articles in progress left out").arg(l.coder).arg(l.articles.size()));
     return out;
 }
 

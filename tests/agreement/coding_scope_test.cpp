@@ -113,7 +113,7 @@ TEST_CASE("unitizers leave articles in progress out and list them")
     CHECK(counted->leftOut[0].coder == QStringLiteral("C02"));
     CHECK(counted->leftOut[0].articles == QStringList {QStringLiteral("f2")});
     CHECK(leftOutLines(counted->leftOut)
-        == QStringList {QStringLiteral("C02: 1 article(s) in progress left out")});
+        == QStringList {QStringLiteral("C02: 1 article in progress left out")});
     auto table = unitTable(f.project, *counted, s);
     REQUIRE(table);
     // Only f1's four sentences: f2 counts for nobody.

@@ -210,7 +210,7 @@ TEST_CASE("the reliability window leaves articles in progress out and names them
     const double without = w.outcome()->columns.back().report.alpha.pairableValues;
     bool named = false;
     for (QLabel *l : w.findChildren<QLabel *>())
-        named = named || l->text().contains(QStringLiteral("C02: 1 article(s) in progress left out"));
+        named = named || l->text().contains(QStringLiteral("C02: 1 article in progress left out"));
     CHECK(named);
 
     QCheckBox *box = nullptr;
