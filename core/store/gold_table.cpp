@@ -133,13 +133,18 @@ Result<GoldAnnotation> gold(const Database &db, GoldId id)
 
 Result<std::vector<GoldAnnotation>> goldAnnotations(const Database &db, ArticleId article)
 {
-    auto stmt = db.prepare(QStringLiteral(
-        "SELECT %1 FROM gold_annotation WHERE deleted = 0 AND (?1 = 0 OR article_id = ?1) "
-        "ORDER BY article_id, start, end, id")
+    // Two statements rather than "?1 = 0 OR article_id = ?1", which SQLite cannot answer from
+    // the index on article_id.
+    auto stmt = db.prepare((article.isValid()
+            ? QStringLiteral("SELECT %1 FROM gold_annotation WHERE deleted = 0 AND article_id = "
+                             "?1 ORDER BY start, end, id")
+            : QStringLiteral("SELECT %1 FROM gold_annotation WHERE deleted = 0 "
+                             "ORDER BY article_id, start, end, id"))
                                .arg(kGoldColumns));
     if (!stmt)
         return std::unexpected(stmt.error());
-    stmt->bind(1, article.value);
+    if (article.isValid())
+        stmt->bind(1, article.value);
     auto rows = collectRows(*stmt, readGold);
     if (!rows)
         return std::unexpected(rows.error());
@@ -181,13 +186,19 @@ Status removeRejection(Database &db, qint64 id)
 
 Result<std::vector<GoldRejection>> goldRejections(const Database &db, ArticleId article)
 {
-    auto stmt = db.prepare(QStringLiteral(
-        "SELECT r.id, r.uuid, r.annotation_id, r.decided_by, r.decided_at, r.rationale, r.deleted "
-        "FROM gold_rejection r JOIN annotation a ON a.id = r.annotation_id "
-        "WHERE r.deleted = 0 AND (?1 = 0 OR a.article_id = ?1) ORDER BY r.annotation_id, r.id"));
+    // As goldAnnotations(): one statement per case, so the article's rows come from indexes.
+    auto stmt = db.prepare(article.isValid()
+            ? QStringLiteral("SELECT r.id, r.uuid, r.annotation_id, r.decided_by, r.decided_at, "
+                             "r.rationale, r.deleted FROM annotation a JOIN gold_rejection r ON "
+                             "r.annotation_id = a.id WHERE a.article_id = ?1 AND r.deleted = 0 "
+                             "ORDER BY r.annotation_id, r.id")
+            : QStringLiteral("SELECT r.id, r.uuid, r.annotation_id, r.decided_by, r.decided_at, "
+                             "r.rationale, r.deleted FROM gold_rejection r WHERE r.deleted = 0 "
+                             "ORDER BY r.annotation_id, r.id"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    stmt->bind(1, article.value);
+    if (article.isValid())
+        stmt->bind(1, article.value);
     return collectRows(*stmt, [](const Statement &row) {
         GoldRejection r;
         r.id = row.columnInt(0);

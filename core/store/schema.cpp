@@ -286,8 +286,19 @@ CREATE TABLE gold_rejection (
 ) STRICT;
 )sql";
 
+// Migration 5: indexes for what is looked up per article or per span at study size (gold of an
+// article, rejections and links of a span, a coder's assignments).
+constexpr const char *kMigration5 = R"sql(
+CREATE INDEX gold_annotation_by_article ON gold_annotation(article_id);
+CREATE INDEX gold_judgement_by_article ON gold_judgement(article_id);
+CREATE INDEX gold_rejection_by_annotation ON gold_rejection(annotation_id);
+CREATE INDEX annotation_link_by_source ON annotation_link(source_id);
+CREATE INDEX annotation_link_by_target ON annotation_link(target_id);
+CREATE INDEX assignment_by_coder ON assignment(coder_id);
+)sql";
+
 constexpr std::array<const char *, kSchemaVersion> kMigrations {
-    kMigration1, kMigration2, kMigration3, kMigration4};
+    kMigration1, kMigration2, kMigration3, kMigration4, kMigration5};
 // A migration left out of the list would silently do nothing: every slot must hold one.
 static_assert(std::ranges::none_of(kMigrations, [](const char *m) { return m == nullptr; }),
     "kSchemaVersion is higher than the number of migrations in kMigrations");

@@ -149,11 +149,14 @@ TEST_CASE("a version-2 file gains active coding time on its assignments, startin
     {
         Database db = openNew(path);
         REQUIRE(createSchemaAtVersion(db, 2));
-        REQUIRE(db.exec(QStringLiteral(
-            "INSERT INTO coder (uuid, name, pseudonym, role, created_at) VALUES ('c', 'Test person', 'C01', 'coder', 't');"
-            "INSERT INTO article (uuid, external_id, title, language, text, length, sha256, imported_at) "
-            "VALUES ('u1', 'a1', 'T', 'en', 'text', 4, 'h', 't');"
-            "INSERT INTO assignment (uuid, article_id, coder_id, phase, created_at) VALUES ('s', 1, 1, 'pilot', 't');")));
+        REQUIRE(
+            db.exec(QStringLiteral("INSERT INTO coder (uuid, name, pseudonym, role, created_at) "
+                                   "VALUES ('c', 'Test person', 'C01', 'coder', 't');"
+                                   "INSERT INTO article (uuid, external_id, title, language, text, "
+                                   "length, sha256, imported_at) "
+                                   "VALUES ('u1', 'a1', 'T', 'en', 'text', 4, 'h', 't');"
+                                   "INSERT INTO assignment (uuid, article_id, coder_id, phase, "
+                                   "created_at) VALUES ('s', 1, 1, 'pilot', 't');")));
     }
     Database db = openNew(path);
     QString backup;
@@ -161,5 +164,55 @@ TEST_CASE("a version-2 file gains active coding time on its assignments, startin
     CHECK(backup.endsWith(QStringLiteral(".v2.bak")));
     CHECK(scalarOf(db, QStringLiteral("PRAGMA user_version")) == kSchemaVersion);
     CHECK(scalarOf(db, QStringLiteral("SELECT active_seconds FROM assignment")) == 0);
-    CHECK(scalarOf(db, QStringLiteral("SELECT count(*) FROM assignment WHERE phase = 'pilot'")) == 1);
+    CHECK(
+        scalarOf(db, QStringLiteral("SELECT count(*) FROM assignment WHERE phase = 'pilot'")) == 1);
+}
+
+TEST_CASE("a version-4 file gains the study-size indexes with its rows kept")
+{
+    QTemporaryDir dir;
+    const QString path = dir.filePath(QStringLiteral("v4.fourfold"));
+    {
+        Database db = openNew(path);
+        REQUIRE(createSchemaAtVersion(db, 4));
+        REQUIRE(db.exec(QStringLiteral("INSERT INTO coder (uuid, name, pseudonym, role, "
+                                       "created_at) VALUES ('c', 'Test lead', 'L01', 'lead', 't');"
+                                       "INSERT INTO article (uuid, external_id, title, language, "
+                                       "text, length, sha256, imported_at) "
+                                       "VALUES ('u1', 'a1', 'T', 'en', 'text', 4, 'h', 't');"
+                                       "INSERT INTO gold_annotation (uuid, article_id, function, "
+                                       "start, end, quote, decided_by, decided_at) "
+                                       "VALUES ('g', 1, 'cause', 0, 4, 'text', 1, 't');")));
+    }
+    Database db = openNew(path);
+    QString backup;
+    REQUIRE(prepareSchema(db, &backup));
+    CHECK(backup.endsWith(QStringLiteral(".v4.bak")));
+    CHECK(scalarOf(db, QStringLiteral("PRAGMA user_version")) == kSchemaVersion);
+    CHECK(scalarOf(db, QStringLiteral("SELECT count(*) FROM gold_annotation WHERE article_id = 1"))
+        == 1);
+    for (const char *index :
+        {"gold_annotation_by_article", "gold_judgement_by_article", "gold_rejection_by_annotation",
+            "annotation_link_by_source", "annotation_link_by_target", "assignment_by_coder"}) {
+        INFO(index);
+        CHECK(scalarOf(db,
+                  QStringLiteral(
+                      "SELECT count(*) FROM sqlite_schema WHERE type = 'index' AND name = '%1'")
+                      .arg(QLatin1String(index)))
+            == 1);
+    }
+    // The article's gold is found through the index, not by scanning the table.
+    auto plan = db.prepare(QStringLiteral(
+        "EXPLAIN QUERY PLAN SELECT id FROM gold_annotation WHERE deleted = 0 AND article_id = ?1"));
+    REQUIRE(plan);
+    plan->bind(1, qint64(1));
+    QString detail;
+    while (true) {
+        auto row = plan->step();
+        REQUIRE(row);
+        if (!*row)
+            break;
+        detail += plan->columnText(3);
+    }
+    CHECK(detail.contains(QStringLiteral("USING INDEX gold_annotation_by_article")));
 }

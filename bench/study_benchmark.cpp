@@ -1,0 +1,195 @@
+// Fourfold at study size: generates a study of N articles (bench/study_generator.h), imports it
+// as a lead would (articles, then quote-anchored codings with gold, then the position baseline as
+// an extractor run), and times every path the study-scale work names, each run three times:
+//   agree on sentences (all functions, 1,000 bootstrap replicates), on tokens, on the continuum,
+//   with diagnostics; the comparison queue; the progress board; the report (HTML and PDF); an
+//   export of every coder's spans as W3C; the desktop opened as the lead (window usable).
+// Prints one table row per path: N, min and median seconds, and the peak memory so far.
+// Build in a Release tree; runs offscreen unless QT_QPA_PLATFORM is set.
+//
+//   study_benchmark [ARTICLES=1000] [CODERS=4] [WORK_DIR=a temporary directory]
+
+#include "app/desktop/main_window.h"
+#include "app/report/report_writer.h"
+#include "bench/study_generator.h"
+#include "core/agreement/agreement_report.h"
+#include "core/agreement/diagnostics.h"
+#include "core/agreement/disagreements.h"
+#include "core/agreement/project_units.h"
+#include "core/exchange/layer_export.h"
+#include "core/extract/extractor_runs.h"
+#include "core/extract/position_baseline.h"
+#include "core/project/coding_import.h"
+#include "core/project/project.h"
+#include "core/project/study_design.h"
+
+#include <QApplication>
+#include <QDir>
+#include <QElapsedTimer>
+#include <QTemporaryDir>
+
+#include <sys/resource.h>
+
+#include <algorithm>
+#include <cstdio>
+#include <functional>
+#include <vector>
+
+using namespace fourfold;
+
+namespace {
+
+double peakMiB()
+{
+    rusage usage {};
+    getrusage(RUSAGE_SELF, &usage);
+    return double(usage.ru_maxrss) / 1024.0;
+}
+
+void fail(const char *what, const Error &e)
+{
+    std::fprintf(stderr, "%s: %s\n", what, qPrintable(e.toString()));
+    std::exit(1);
+}
+
+template<typename T>
+T check(Result<T> r, const char *what)
+{
+    if (!r)
+        fail(what, r.error());
+    return std::move(*r);
+}
+
+void check(const Status &s, const char *what)
+{
+    if (!s)
+        fail(what, s.error());
+}
+
+void row(const char *path, int articles, std::vector<double> seconds)
+{
+    std::sort(seconds.begin(), seconds.end());
+    std::printf("%-44s %7d %9.3f %9.3f %9.0f\n", path, articles, seconds.front(),
+        seconds[seconds.size() / 2], peakMiB());
+    std::fflush(stdout);
+}
+
+void timed(const char *path, int articles, int rounds, const std::function<void()> &work)
+{
+    std::vector<double> seconds;
+    for (int i = 0; i < rounds; ++i) {
+        QElapsedTimer t;
+        t.start();
+        work();
+        seconds.push_back(double(t.nsecsElapsed()) / 1e9);
+    }
+    row(path, articles, seconds);
+}
+
+void agree(const Project &project, UnitKind unit, int replicates, bool diagnostics)
+{
+    UnitSelection s;
+    s.unit = unit;
+    auto counted = check(countedCodings(project, s), "codings");
+    auto table = check(unitTable(project, counted, s), "units");
+    EncodingOptions encoding;
+    encoding.distance = reliability::SetDistance::Masi;
+    auto encoded = check(encodeTable(table, encoding), "encoding");
+    AgreementOptions options;
+    options.bootstrapReplicates = replicates;
+    const AgreementReport report =
+        computeAgreement(encoded, table.coders, QStringLiteral("masi"), options);
+    if (!report.alpha.value)
+        std::fprintf(stderr, "alpha undefined\n");
+    if (diagnostics) {
+        check(leaveOneCoderOut(encoded, table.coders), "leave one coder out");
+        check(leaveOneArticleOut(encoded, table.units), "leave one article out");
+        check(matchSpans(project, s), "span matching");
+    }
+}
+
+} // namespace
+
+int main(int argc, char **argv)
+{
+    if (qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM"))
+        qputenv("QT_QPA_PLATFORM", "offscreen");
+    QApplication app(argc, argv);
+    const int n = argc > 1 ? std::atoi(argv[1]) : 1000;
+    const int coders = argc > 2 ? std::atoi(argv[2]) : 4;
+    QTemporaryDir temporary;
+    const QString dir = argc > 3 ? QString::fromLocal8Bit(argv[3]) : temporary.path();
+    QDir().mkpath(dir);
+
+    bench::StudySpec spec;
+    spec.articles = n;
+    spec.coders = coders;
+    QElapsedTimer clock;
+    clock.start();
+    const bench::StudyFiles files = bench::writeStudy(spec, dir);
+    if (files.articles.isEmpty()) {
+        std::fprintf(stderr, "cannot write the study into %s\n", qPrintable(dir));
+        return 1;
+    }
+    std::printf("study: %d articles, %d coders, %lld spans, %lld answers, %lld gold spans "
+                "(generated in %.1f s)\n",
+        n, coders, files.spans, files.answers, files.goldSpans, double(clock.elapsed()) / 1000);
+    std::printf("%-44s %7s %9s %9s %9s\n", "path", "articles", "min s", "median s", "peak MiB");
+
+    const QString path = QDir(dir).filePath(QStringLiteral("study.fourfold"));
+    QFile::remove(path);
+    Project project = check(Project::create(path), "create");
+    for (int c = 0; c < coders; ++c) {
+        const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
+        check(project.addCoder(QStringLiteral("Coder ") + pseudonym, pseudonym, CoderRole::Coder),
+            "coder");
+    }
+    check(project.addCoder(QStringLiteral("Lead"), QStringLiteral("L01"), CoderRole::Lead), "lead");
+
+    timed("import articles", n, 1,
+        [&] { check(project.importFile(files.articles, ImportOptions {}), "import"); });
+    timed("import codings (spans, answers, gold)", n, 1,
+        [&] { check(importQuotedCodings(project, files.codings, Phase::Production), "codings"); });
+    timed("extract (position baseline)", n, 1, [&] {
+        auto position = check(PositionBaseline::create(), "baseline");
+        check(ExtractorRuns::create(project, position, QStringLiteral("position")), "run");
+    });
+
+    timed("agree sentence, all functions, 1000 replicates", n, 3,
+        [&] { agree(project, UnitKind::Sentence, 1000, false); });
+    timed("agree token, all functions", n, 3, [&] { agree(project, UnitKind::Token, 0, false); });
+    timed(
+        "agree sentence --diagnostics", n, 3, [&] { agree(project, UnitKind::Sentence, 0, true); });
+    timed("agree continuum (C01 and C02)", n, 3, [&] {
+        UnitSelection s;
+        s.unit = UnitKind::Continuum;
+        s.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+        auto data = check(continuumData(project, s), "continuum");
+        reliability::unitizingAlpha(
+            0, data.length, int(data.coders.size()), data.categories, data.units);
+    });
+    timed("comparison queue", n, 3, [&] { check(disagreementQueue(project), "queue"); });
+    timed("progress board", n, 3, [&] { check(StudyDesign::progressBoard(project), "progress"); });
+    timed("report HTML + PDF (1000 replicates)", n, 3, [&] {
+        ReportOptions options;
+        check(writeReport(project, options, QDir(dir).filePath(QStringLiteral("r.html"))),
+            "report html");
+        check(writeReport(project, options, QDir(dir).filePath(QStringLiteral("r.pdf"))),
+            "report pdf");
+    });
+    timed("export coders as W3C", n, 3, [&] {
+        ExportOptions o;
+        o.layer = LayerSpec {LayerKind::Coders, {}};
+        o.format = ExportFormat::W3c;
+        o.outDir = QDir(dir).filePath(QStringLiteral("w3c"));
+        QDir(o.outDir).removeRecursively();
+        check(exportLayer(project, o), "export");
+    });
+    timed("desktop opened as the lead", n, 3, [&] {
+        MainWindow window;
+        check(window.openProject(path, QStringLiteral("L01")), "desktop");
+        window.show();
+        QCoreApplication::processEvents();
+    });
+    return 0;
+}
