@@ -140,25 +140,41 @@ Result<std::vector<LeaveOneOut>> leaveOneArticleOut(
         }
         articleOf[size_t(u)] = *it;
     }
-    std::vector<LeaveOneOut> out;
+    // Alpha without an article from the coincidences of everything minus the article's own
+    // coincidences: coincidences add over units (Krippendorff 2011, §C), so leaving an article
+    // out costs its own units, not a rebuild of all the others.
     const int total = int(articles.size());
+    std::vector<std::vector<int>> unitsOf {static_cast<size_t>(total)};
+    for (int u = 0; u < data.units; ++u)
+        unitsOf[size_t(articleOf[size_t(u)])].push_back(u);
+    const CoincidenceMatrix everything = coincidences(data);
+    std::vector<LeaveOneOut> out;
     for (int left = 0; left < total; ++left) {
         if (!carryOn(progress, left, total))
             return cancelled();
-        ReliabilityData rest;
-        rest.coders = data.coders;
-        rest.values = data.values;
-        int own = 0;
-        for (int u = 0; u < data.units; ++u) {
-            if (articleOf[size_t(u)] == left) {
-                ++own;
-                continue;
-            }
+        ReliabilityData own;
+        own.coders = data.coders;
+        own.values = data.values;
+        own.units = int(unitsOf[size_t(left)].size());
+        for (int u : unitsOf[size_t(left)])
             for (int c = 0; c < data.coders; ++c)
-                rest.cells.push_back(data.at(u, c));
-            ++rest.units;
-        }
-        out.push_back(entry(articles[left], krippendorffAlpha(rest, encoded.metric), all, own));
+                own.cells.push_back(data.at(u, c));
+        const CoincidenceMatrix part = coincidences(own);
+        CoincidenceMatrix rest = everything;
+        // Sums of multiples of 1/(m_u − 1): what is left of an emptied cell is rounding only.
+        const auto minus = [](double &x, double y) {
+            x -= y;
+            if (std::abs(x) < 1e-9)
+                x = 0;
+        };
+        for (size_t i = 0; i < rest.o.size() && i < part.o.size(); ++i)
+            minus(rest.o[i], part.o[i]);
+        for (size_t i = 0; i < rest.marginals.size() && i < part.marginals.size(); ++i)
+            minus(rest.marginals[i], part.marginals[i]);
+        minus(rest.total, part.total);
+        rest.units -= part.units;
+        out.push_back(
+            entry(articles[left], krippendorffAlpha(rest, encoded.metric), all, own.units));
     }
     if (!carryOn(progress, total, total))
         return cancelled();

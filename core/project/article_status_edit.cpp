@@ -1,6 +1,7 @@
 #include "core/project/article_status_edit.h"
 
 #include "core/store/project_tables.h"
+#include "core/store/study_tables.h"
 
 #include <QCoreApplication>
 
@@ -30,13 +31,12 @@ Status SetArticleStatusEdit::apply(Database &db)
             QCoreApplication::translate(
                 "ArticleStatusEdit", "\"%1\" is not a status (assigned, started, done).")
                 .arg(m_status));
-    auto all = store::assignments(db);
-    if (!all)
-        return std::unexpected(all.error());
+    auto mine = store::coderAssignments(db, m_article, m_coder);
+    if (!mine)
+        return std::unexpected(mine.error());
     std::vector<std::pair<Phase, QString>> before;
-    for (const Assignment &a : *all)
-        if (a.article == m_article && a.coder == m_coder)
-            before.emplace_back(a.phase, a.status);
+    for (const Assignment &a : *mine)
+        before.emplace_back(a.phase, a.status);
     if (before.empty()) {
         FOURFOLD_TRY_STATUS(store::insertAssignment(db, m_article, m_coder, m_phaseIfNew));
         FOURFOLD_TRY_STATUS(

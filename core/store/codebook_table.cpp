@@ -3,6 +3,10 @@
 #include "core/store/store_util.h"
 
 #include <QCoreApplication>
+#include <QHash>
+#include <QMutex>
+
+#include <atomic>
 
 namespace fourfold::store {
 
@@ -31,18 +35,46 @@ Result<CodebookVersionId> insertCodebookVersion(
 namespace {
 
 // Reads the codebook in the current row of `stmt` (columns id, number, content).
+// Parsed codebooks by their stored JSON: a version's content never changes, and every span
+// edit validates against the current codebook, so an import of many spans parses it once.
+// Shared by the connections of all threads.
+QMutex cacheMutex;
+QHash<QByteArray, Codebook> parsedCache;
+std::atomic<qint64> parses {0};
+
 Result<Codebook> readCodebook(Statement &stmt)
 {
-    auto book = Codebook::fromJson(stmt.columnText(2).toUtf8(),
-        QCoreApplication::translate("CodebookTable", "codebook version %1").arg(stmt.columnInt(1)));
-    if (!book)
-        return std::unexpected(book.error());
-    book->versionId = CodebookVersionId {stmt.columnInt(0)};
-    book->number = int(stmt.columnInt(1));
+    const QByteArray content = stmt.columnBlob(2);
+    Codebook book;
+    {
+        QMutexLocker lock(&cacheMutex);
+        auto cached = parsedCache.constFind(content);
+        if (cached != parsedCache.constEnd()) {
+            book = *cached;
+        } else {
+            auto parsed = Codebook::fromJson(content,
+                QCoreApplication::translate("CodebookTable", "codebook version %1")
+                    .arg(stmt.columnInt(1)));
+            if (!parsed)
+                return std::unexpected(parsed.error());
+            ++parses;
+            if (parsedCache.size() >= 32)
+                parsedCache.clear();
+            parsedCache.insert(content, *parsed);
+            book = std::move(*parsed);
+        }
+    }
+    book.versionId = CodebookVersionId {stmt.columnInt(0)};
+    book.number = int(stmt.columnInt(1));
     return book;
 }
 
 } // namespace
+
+qint64 codebookParses()
+{
+    return parses.load();
+}
 
 Result<Codebook> currentCodebook(const Database &db)
 {

@@ -14,6 +14,9 @@ namespace store {
 // unknown), and returns its row id.
 Result<CodebookVersionId> insertCodebookVersion(
     Database &db, const Codebook &codebook, const QString &note, CoderId author = {});
+// How many times a stored codebook was parsed in this process (parsed codebooks are kept by
+// content, so this counts distinct contents read). For tests that count work.
+qint64 codebookParses();
 // The current (highest-numbered) version. NotFound if the project has no codebook.
 Result<Codebook> currentCodebook(const Database &db);
 // Version `number`. NotFound if there is none; InvalidInput if its stored JSON is malformed.
