@@ -3,7 +3,9 @@
 #include "app/desktop/edit_command.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
+#include "core/project/coding_scope.h"
 
+#include <QHash>
 #include <QSet>
 
 namespace fourfold {
@@ -28,36 +30,55 @@ void CodingSession::setShowAllCoders(bool on)
     m_showAll = on;
 }
 
-std::vector<ArticleSummary> CodingSession::visibleArticles() const
+std::vector<ArticleRow> CodingSession::articleRows() const
 {
     auto all = m_project.articles();
-    if (!all)
+    auto assignments = m_project.assignments();
+    // Spans or answers mean the work has started, whatever the assignment says (CodingScope
+    // knows who holds codings where).
+    auto scope = CodingScope::load(m_project);
+    if (!all || !assignments || !scope)
         return {};
-    if (isLead())
-        return *all;
-    QSet<qint64> assigned;
-    if (auto a = m_project.assignments())
-        for (const Assignment &x : *a)
-            if (x.coder == m_coder.id)
-                assigned.insert(x.article.value);
-    std::vector<ArticleSummary> out;
-    for (const ArticleSummary &s : *all)
-        if (assigned.contains(s.id.value))
-            out.push_back(s);
+    struct Mine {
+        QString status = QStringLiteral("assigned");
+        qint64 seconds = 0;
+    };
+    QHash<qint64, Mine> mine;
+    for (const Assignment &x : *assignments) {
+        if (x.coder != m_coder.id)
+            continue;
+        Mine &m = mine[x.article.value];
+        m.seconds += x.activeSeconds;
+        if (x.status == QLatin1String("done")
+            || (x.status == QLatin1String("started") && m.status != QLatin1String("done")))
+            m.status = x.status;
+    }
+    std::vector<ArticleRow> out;
+    out.reserve(all->size());
+    for (const ArticleSummary &s : *all) {
+        auto it = mine.constFind(s.id.value);
+        if (it == mine.constEnd() && !isLead())
+            continue;
+        ArticleRow row {s, it == mine.constEnd() ? QStringLiteral("assigned") : it->status,
+            it == mine.constEnd() ? 0 : it->seconds};
+        if (row.status == QLatin1String("assigned")
+            && scope->state(s.id, m_coder.id) != CodingState::Untouched)
+            row.status = QStringLiteral("started");
+        out.push_back(std::move(row));
+    }
     return out;
 }
 
 QString CodingSession::articleStatus(ArticleId article) const
 {
     QString status = QStringLiteral("assigned");
-    if (auto a = m_project.assignments())
-        for (const Assignment &x : *a)
-            if (x.coder == m_coder.id && x.article == article) {
-                if (x.status == QLatin1String("done"))
-                    return x.status;
-                if (x.status == QLatin1String("started"))
-                    status = x.status;
-            }
+    if (auto a = m_project.assignments(article, m_coder.id))
+        for (const Assignment &x : *a) {
+            if (x.status == QLatin1String("done"))
+                return x.status;
+            if (x.status == QLatin1String("started"))
+                status = x.status;
+        }
     // Spans or answers mean the work has started, whatever the assignment says.
     if (status == QLatin1String("assigned")) {
         if (auto own = m_project.annotations(article, m_coder.id); own && !own->empty())
@@ -69,19 +90,17 @@ QString CodingSession::articleStatus(ArticleId article) const
 qint64 CodingSession::secondsSpent(ArticleId article) const
 {
     qint64 seconds = 0;
-    if (auto a = m_project.assignments())
+    if (auto a = m_project.assignments(article, m_coder.id))
         for (const Assignment &x : *a)
-            if (x.coder == m_coder.id && x.article == article)
-                seconds += x.activeSeconds;
+            seconds += x.activeSeconds;
     return seconds;
 }
 
 Phase CodingSession::phaseOf(ArticleId article) const
 {
-    if (auto a = m_project.assignments())
+    if (auto a = m_project.assignments(article, m_coder.id))
         for (const Assignment &x : *a)
-            if (x.coder == m_coder.id && x.article == article)
-                return x.phase;
+            return x.phase;
     return Phase::Production;
 }
 

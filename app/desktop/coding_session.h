@@ -4,6 +4,7 @@
 // undoable command over a core edit, written to the project file at once. Views read from the
 // session and ask it for changes; they never write to the project themselves.
 
+#include "app/desktop/article_list_model.h"
 #include "core/project/project.h"
 
 #include <QObject>
@@ -33,8 +34,10 @@ public:
     bool showsAllCoders() const { return isLead() && m_showAll; }
     void setShowAllCoders(bool on);
 
-    // The articles this person may open: their assignments (a lead: all articles).
-    std::vector<ArticleSummary> visibleArticles() const;
+    // The articles this person may open (their assignments; a lead: all articles) with this
+    // person's status and active seconds on each, read with a fixed number of queries whatever
+    // the number of articles (for the article list).
+    std::vector<ArticleRow> articleRows() const;
     // This person's status of an article: "assigned" (not started), "started" or "done".
     QString articleStatus(ArticleId article) const;
     // Seconds of active coding time recorded for this person on the article.

@@ -476,11 +476,7 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
 
 void MainWindow::refreshList()
 {
-    std::vector<ArticleRow> rows;
-    for (const ArticleSummary &a : m_session->visibleArticles())
-        rows.push_back(
-            ArticleRow {a, m_session->articleStatus(a.id), m_session->secondsSpent(a.id)});
-    m_articles->setArticles(std::move(rows));
+    m_articles->setArticles(m_session->articleRows());
     // The list is narrow: title, language, status and time; outlet and length are in the header
     // above the article.
     if (!std::exchange(m_columnsChosen, true)) { // hide them once; later the person's choice stands

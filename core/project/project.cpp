@@ -11,6 +11,7 @@
 #include "core/store/savepoint.h"
 #include "core/store/schema.h"
 #include "core/store/store_util.h"
+#include "core/store/study_tables.h"
 
 #include <QCoreApplication>
 #include <QFile>
@@ -235,6 +236,11 @@ Result<std::vector<Judgement>> Project::allJudgements() const
 Result<std::vector<Assignment>> Project::assignments() const
 {
     return store::assignments(m_db);
+}
+
+Result<std::vector<Assignment>> Project::assignments(ArticleId article, CoderId coder) const
+{
+    return store::coderAssignments(m_db, article, coder);
 }
 
 Status Project::addCodingTime(ArticleId article, CoderId coder, qint64 seconds)

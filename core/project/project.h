@@ -92,6 +92,8 @@ public:
     Result<std::vector<Annotation>> allAnnotations() const;
     Result<std::vector<Judgement>> allJudgements() const;
     Result<std::vector<Assignment>> assignments() const;
+    // The live assignments of `coder` on `article`, in any phase (one indexed query).
+    Result<std::vector<Assignment>> assignments(ArticleId article, CoderId coder) const;
 
     // Adds `seconds` of active coding time to the coder's first assignment of the article (no
     // assignment: nothing is recorded). Not an edit: time is not undone.

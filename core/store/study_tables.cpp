@@ -27,7 +27,7 @@ Result<std::vector<Assignment>> coderAssignments(
 {
     auto stmt = db.prepare(QStringLiteral("SELECT article_id, coder_id, phase, status, "
                                           "active_seconds FROM assignment WHERE deleted = 0 "
-                                          "AND article_id = ?1 AND coder_id = ?2"));
+                                          "AND article_id = ?1 AND coder_id = ?2 ORDER BY phase"));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, article.value).bind(2, coder.value);

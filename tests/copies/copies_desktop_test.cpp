@@ -19,11 +19,11 @@ TEST_CASE("the coding session opens a coder copy, codes in it and its work merge
         const Coder me = coders->front();
         CHECK(me.pseudonym == QStringLiteral("C02"));
         CodingSession session(std::move(*copy), me);
-        const auto articles = session.visibleArticles();
-        REQUIRE(articles.size() == 2);
-        CHECK(articles[0].externalId == QStringLiteral("f1"));
-        CHECK(articles[1].externalId == QStringLiteral("f3"));
-        const ArticleId f1 = articles[0].id;
+        const auto rows = session.articleRows();
+        REQUIRE(rows.size() == 2);
+        CHECK(rows[0].summary.externalId == QStringLiteral("f1"));
+        CHECK(rows[1].summary.externalId == QStringLiteral("f3"));
+        const ArticleId f1 = rows[0].summary.id;
         CHECK(session.visibleAnnotations(f1).size() == 2); // C02's own two spans, nobody else's
         REQUIRE(session.addSpan(f1, FramingFunction::Cause,
             rangeOf(f.text1, QStringLiteral("Dr. Ilse Varn blames the budget."))));

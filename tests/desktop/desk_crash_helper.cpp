@@ -24,10 +24,10 @@ int main(int argc, char *argv[])
     if (!coder || !*coder)
         return 1;
     CodingSession session(std::move(*project), **coder);
-    const std::vector<ArticleSummary> articles = session.visibleArticles();
-    if (articles.empty())
+    const std::vector<ArticleRow> rows = session.articleRows();
+    if (rows.empty())
         return 1;
-    const ArticleSummary &article = articles.front();
+    const ArticleSummary &article = rows.front().summary;
     for (qint64 n = 1; n * 4 + 3 < article.length; ++n) {
         if (!session.addSpan(article.id, FramingFunction::Remedy, TextRange {n * 4, n * 4 + 3}))
             return 1;
