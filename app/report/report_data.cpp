@@ -43,9 +43,11 @@ QStringList commonArguments(const ReportOptions &options, bool bootstrap)
 // What `fourfold-cli agree` computes for a project selection (app/cli/command_agree.cpp): the
 // level comes from the codebook for span attributes and article items (only an ordinal level
 // changes the encoding), and units carrying all four functions are sets compared with MASI.
+// With `matching` (the span matching of the selection, the same for every function), the
+// diagnostics are added as `agree --diagnostics` writes them.
 Result<QJsonObject> agreeJson(const Project &project, const CountedCodings &counted,
     const Codebook &book, const UnitSelection &selection, const ReportOptions &options,
-    bool diagnostics = false)
+    const SpanMatching *matching = nullptr)
 {
     EncodingOptions encoding;
     FOURFOLD_TRY_STATUS(applyCodebookLevel(book, selection, encoding));
@@ -65,7 +67,7 @@ Result<QJsonObject> agreeJson(const Project &project, const CountedCodings &coun
     agreementOptions.seed = options.seed;
     QJsonObject json =
         agreementJson(computeAgreement(*encoded, table->coders, scale, agreementOptions));
-    if (!diagnostics)
+    if (!matching)
         return json;
     auto coderCosts = leaveOneCoderOut(*encoded, table->coders);
     if (!coderCosts)
@@ -73,11 +75,8 @@ Result<QJsonObject> agreeJson(const Project &project, const CountedCodings &coun
     auto articleCosts = leaveOneArticleOut(*encoded, table->units);
     if (!articleCosts)
         return std::unexpected(articleCosts.error());
-    auto matching = matchSpans(project, selection);
-    if (!matching)
-        return std::unexpected(matching.error());
     json.insert(
-        QStringLiteral("diagnostics"), diagnosticsJson(*coderCosts, *articleCosts, &*matching));
+        QStringLiteral("diagnostics"), diagnosticsJson(*coderCosts, *articleCosts, matching));
     return json;
 }
 
@@ -224,12 +223,16 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     if (!counted)
         return std::unexpected(counted.error());
 
+    // Span matching looks at all four functions whatever the selection says: once for all.
+    auto matching = matchSpans(*counted, base);
+    if (!matching)
+        return std::unexpected(matching.error());
     // The four functions, one binary variable each, then all four as one set-valued variable.
     for (FramingFunction f : kFramingFunctions) {
         UnitSelection s = base;
         s.unit = options.unit;
         s.function = f;
-        auto json = agreeJson(project, *counted, *book, s, options, true);
+        auto json = agreeJson(project, *counted, *book, s, options, &*matching);
         if (!json)
             return std::unexpected(json.error());
         d.analyses.push_back({QStringLiteral("function-%1").arg(functionKey(f)),

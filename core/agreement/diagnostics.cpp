@@ -195,10 +195,16 @@ struct HabitSums {
 void matchDirection(const std::vector<ContinuumUnit> &from, const std::vector<ContinuumUnit> &to,
     FunctionConfusion &confusion, HabitSums &habit)
 {
+    // `from` and `to` are sorted by begin, so the units of `to` that end before the current
+    // unit of `from` begins end before every later one too: skip that prefix once.
+    size_t first = 0;
     for (const ContinuumUnit &a : from) {
+        while (first < to.size() && to[first].end <= a.begin)
+            ++first;
         const ContinuumUnit *best = nullptr;
         std::int64_t bestOverlap = 0;
-        for (const ContinuumUnit &b : to) {
+        for (size_t i = first; i < to.size(); ++i) {
+            const ContinuumUnit &b = to[i];
             if (b.begin >= a.end)
                 break;
             const std::int64_t overlap = std::min(a.end, b.end) - std::max(a.begin, b.begin);
@@ -233,9 +239,23 @@ Result<SpanMatching> matchSpans(
     auto counted = countedCodings(project, base);
     if (!counted)
         return std::unexpected(counted.error());
+    return matchSpans(*counted, base, progress);
+}
+
+Result<SpanMatching> matchSpans(const CountedCodings &codings, const UnitSelection &selection,
+    const DiagnosticsProgress &progress)
+{
+    UnitSelection base = selection;
+    base.includeGold = false;
+    const CountedCodings *counted = &codings;
     QStringList pseudonyms;
     for (const Coder &c : counted->coders)
-        pseudonyms << c.pseudonym;
+        if (c.id.value >= 0) // not gold
+            pseudonyms << c.pseudonym;
+    if (pseudonyms.size() < 2)
+        return fail(ErrorCode::InvalidArgument,
+            tr("Reliability needs at least two coders; the selection has %n.", nullptr,
+                int(pseudonyms.size())));
     const QStringList *coders = &pseudonyms;
     SpanMatching out;
     out.coders = *coders;

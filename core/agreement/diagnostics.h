@@ -112,6 +112,9 @@ QJsonObject diagnosticsJson(const std::vector<LeaveOneOut> &coders,
 
 Result<SpanMatching> matchSpans(const Project &project, const UnitSelection &selection,
     const DiagnosticsProgress &progress = {});
+// The same on codings already read by countedCodings() for the selection (gold is ignored).
+Result<SpanMatching> matchSpans(const CountedCodings &codings, const UnitSelection &selection,
+    const DiagnosticsProgress &progress = {});
 
 enum class PeriodKind { Week, Batch };
 

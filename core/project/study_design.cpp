@@ -161,11 +161,11 @@ std::vector<TextRange> unitsOf(const Article &article, UnitKind kind)
 
 // Whether any of `spans` of function `f` overlaps `unit` by at least one code point (the rule of
 // core/agreement/project_units.h).
-bool marks(const std::vector<Annotation> &spans, FramingFunction f, const TextRange &unit)
+bool marks(const std::vector<const Annotation *> &spans, FramingFunction f, const TextRange &unit)
 {
-    return std::ranges::any_of(spans, [&](const Annotation &a) {
-        return a.content.function == f && a.content.range.start < unit.end
-            && unit.start < a.content.range.end;
+    return std::ranges::any_of(spans, [&](const Annotation *a) {
+        return a->content.function == f && a->content.range.start < unit.end
+            && unit.start < a->content.range.end;
     });
 }
 
@@ -209,15 +209,23 @@ Result<PairMatrix> pairMatrix(ArticleCache &cache, const std::vector<ArticleId> 
     PairMatrix m;
     m.data.coders = 2;
     m.data.values = 2;
+    // Each coder's spans by article, gathered once rather than filtered per article.
+    std::map<qint64, std::vector<const Annotation *>> byArticleA, byArticleB;
+    for (const Annotation &x : a)
+        byArticleA[x.article.value].push_back(&x);
+    for (const Annotation &x : b)
+        byArticleB[x.article.value].push_back(&x);
+    const std::vector<const Annotation *> none;
     for (ArticleId id : articles) {
         auto article = cache.get(id);
         if (!article)
             return std::unexpected(article.error());
-        std::vector<Annotation> spansA, spansB;
-        std::ranges::copy_if(
-            a, std::back_inserter(spansA), [&](const Annotation &x) { return x.article == id; });
-        std::ranges::copy_if(
-            b, std::back_inserter(spansB), [&](const Annotation &x) { return x.article == id; });
+        const auto itA = byArticleA.find(id.value);
+        const auto itB = byArticleB.find(id.value);
+        const std::vector<const Annotation *> &spansA =
+            itA == byArticleA.end() ? none : itA->second;
+        const std::vector<const Annotation *> &spansB =
+            itB == byArticleB.end() ? none : itB->second;
         for (const TextRange &u : unitsOf(**article, unit)) {
             for (FramingFunction f : functions) {
                 const bool inA = marks(spansA, f, u);
@@ -1249,6 +1257,10 @@ Result<ProgressBoard> StudyDesign::progressBoard(const Project &project, std::op
         PhaseEffort effort;
         effort.phase = ph;
         std::map<qint64, std::set<qint64>> doneBy; // coder → articles done
+        std::map<qint64, std::set<qint64>> spannedBy; // coder → articles with spans in the phase
+        for (const Annotation &a : *all)
+            if (a.phase == ph && !a.deleted)
+                spannedBy[a.coder.value].insert(a.article.value);
         for (const auto &[pseudonym, list] : byCoder)
             for (const Assignment &a : list)
                 if (a.status == QStringLiteral("done"))
@@ -1260,12 +1272,8 @@ Result<ProgressBoard> StudyDesign::progressBoard(const Project &project, std::op
                              int *articles) -> Result<std::optional<double>> {
             std::vector<ArticleId> common;
             for (qint64 id : doneBy[x.value]) {
-                const bool yCoded = yNeedsDone
-                    ? doneBy[y.value].contains(id)
-                    : std::ranges::any_of(*all, [&](const Annotation &a) {
-                          return a.coder == y && a.article.value == id && a.phase == ph
-                              && !a.deleted;
-                      });
+                const bool yCoded =
+                    yNeedsDone ? doneBy[y.value].contains(id) : spannedBy[y.value].contains(id);
                 if (yCoded)
                     common.push_back(ArticleId {id});
             }
