@@ -4,6 +4,7 @@
 #include "core/project/project.h"
 
 #include <QCoreApplication>
+#include <QHash>
 #include <QSet>
 
 #include <algorithm>
@@ -196,8 +197,17 @@ std::vector<Coder> countingCoders(
     return out;
 }
 
-Result<Comparison> compareWith(const Project &project, ArticleId article,
-    const std::vector<Coder> &coded, const ComparisonFilter &filter);
+// What one article's comparison needs, read per article (compareArticle) or for every article
+// at once (disagreementQueue).
+struct ArticleCodings {
+    std::vector<Annotation> spans;
+    std::vector<GoldAnnotation> gold;
+    std::vector<AnnotationId> rejected;
+};
+
+// Compares `codings` of the article titled `title` between `coded` under `filter` (in memory).
+Result<Comparison> compareLoaded(ArticleId article, const QString &title,
+    const std::vector<Coder> &coded, const ArticleCodings &codings, const ComparisonFilter &filter);
 
 } // namespace
 
@@ -219,45 +229,46 @@ Result<Comparison> compareArticle(
     auto coded = articleCoders(project, article, filter.includeUnfinished);
     if (!coded)
         return std::unexpected(coded.error());
-    return compareWith(project, article, *coded, filter);
+    auto summary = project.article(article);
+    if (!summary)
+        return std::unexpected(summary.error());
+    ArticleCodings codings;
+    auto spans = project.annotations(article);
+    if (!spans)
+        return std::unexpected(spans.error());
+    codings.spans = std::move(*spans);
+    auto gold = project.goldAnnotations(article);
+    if (!gold)
+        return std::unexpected(gold.error());
+    codings.gold = std::move(*gold);
+    auto rejections = project.goldRejections(article);
+    if (!rejections)
+        return std::unexpected(rejections.error());
+    for (const GoldRejection &r : *rejections)
+        codings.rejected.push_back(r.annotation);
+    return compareLoaded(article, summary->summary.title, *coded, codings, filter);
 }
 
 namespace {
 
-Result<Comparison> compareWith(const Project &project, ArticleId article,
-    const std::vector<Coder> &codedCoders, const ComparisonFilter &filter)
+Result<Comparison> compareLoaded(ArticleId article, const QString &title,
+    const std::vector<Coder> &coded, const ArticleCodings &codings, const ComparisonFilter &filter)
 {
-    auto summary = project.article(article);
-    if (!summary)
-        return std::unexpected(summary.error());
-    const std::vector<Coder> *coded = &codedCoders;
     Comparison out;
     out.article = article;
     if (filter.coderPair) {
         for (CoderId c : {filter.coderPair->first, filter.coderPair->second}) {
-            if (std::ranges::find(*coded, c, &Coder::id) == coded->end())
+            if (std::ranges::find(coded, c, &Coder::id) == coded.end())
                 return fail(ErrorCode::InvalidArgument,
                     tr("Both coders of the pair must have marked the article \"%1\" done.")
-                        .arg(summary->summary.title));
+                        .arg(title));
             out.coders.push_back(c);
         }
     } else {
-        for (const Coder &c : *coded)
+        for (const Coder &c : coded)
             out.coders.push_back(c.id);
     }
-    auto spans = project.annotations(article);
-    if (!spans)
-        return std::unexpected(spans.error());
-    auto gold = project.goldAnnotations(article);
-    if (!gold)
-        return std::unexpected(gold.error());
-    auto rejections = project.goldRejections(article);
-    if (!rejections)
-        return std::unexpected(rejections.error());
-    std::vector<AnnotationId> rejected;
-    for (const GoldRejection &r : *rejections)
-        rejected.push_back(r.annotation);
-    for (Passage &p : comparePassages(*spans, out.coders, *gold, rejected))
+    for (Passage &p : comparePassages(codings.spans, out.coders, codings.gold, codings.rejected))
         if (touches(p, filter))
             out.passages.push_back(std::move(p));
     return out;
@@ -330,6 +341,30 @@ Result<std::vector<ArticleDisagreement>> disagreementQueue(
     auto scope = CodingScope::load(project, CodingScopeOptions {filter.includeUnfinished, {}});
     if (!scope)
         return std::unexpected(scope.error());
+    // Everything the comparisons need, read once and grouped by article: the queue costs the
+    // same few queries whatever the number of articles.
+    std::map<qint64, ArticleCodings> byArticle;
+    auto spans = project.allAnnotations();
+    if (!spans)
+        return std::unexpected(spans.error());
+    QHash<qint64, qint64> articleOfSpan;
+    for (Annotation &a : *spans) {
+        articleOfSpan.insert(a.id.value, a.article.value);
+        byArticle[a.article.value].spans.push_back(std::move(a));
+    }
+    auto gold = project.goldAnnotations();
+    if (!gold)
+        return std::unexpected(gold.error());
+    for (GoldAnnotation &g : *gold)
+        byArticle[g.article.value].gold.push_back(std::move(g));
+    auto rejections = project.goldRejections();
+    if (!rejections)
+        return std::unexpected(rejections.error());
+    for (const GoldRejection &r : *rejections)
+        if (auto it = articleOfSpan.constFind(r.annotation.value); it != articleOfSpan.constEnd())
+            byArticle[it.value()].rejected.push_back(r.annotation);
+    const ArticleCodings nothing;
+
     std::vector<ArticleDisagreement> out;
     for (const ArticleSummary &summary : *articles) {
         const std::vector<Coder> codedCoders = countingCoders(*coders, *scope, summary.id);
@@ -340,7 +375,9 @@ Result<std::vector<ArticleDisagreement>> disagreementQueue(
             && (std::ranges::find(*coded, filter.coderPair->first, &Coder::id) == coded->end()
                 || std::ranges::find(*coded, filter.coderPair->second, &Coder::id) == coded->end()))
             continue;
-        auto comparison = compareWith(project, summary.id, *coded, filter);
+        const auto codings = byArticle.find(summary.id.value);
+        auto comparison = compareLoaded(summary.id, summary.title, *coded,
+            codings == byArticle.end() ? nothing : codings->second, filter);
         if (!comparison)
             return std::unexpected(comparison.error());
         ArticleDisagreement row;

@@ -39,6 +39,7 @@ Database::Database(Database &&other) noexcept
     : m_db(std::exchange(other.m_db, nullptr))
     , m_path(std::move(other.m_path))
     , m_faultHook(std::move(other.m_faultHook))
+    , m_statementsRun(other.m_statementsRun)
 { }
 
 Database &Database::operator=(Database &&other) noexcept
@@ -48,6 +49,7 @@ Database &Database::operator=(Database &&other) noexcept
         m_db = std::exchange(other.m_db, nullptr);
         m_path = std::move(other.m_path);
         m_faultHook = std::move(other.m_faultHook);
+        m_statementsRun = other.m_statementsRun;
     }
     return *this;
 }

@@ -58,12 +58,19 @@ public:
     void setFaultHook(FaultHook hook) { m_faultHook = std::move(hook); }
     const FaultHook &faultHook() const { return m_faultHook; }
 
+    // How many statement runs this connection has started (a run: the first step after
+    // preparing, a reset or the end of the rows). Tests count queries with it: a view that loads
+    // in a bounded number of queries keeps this figure independent of the project's size.
+    qint64 statementsRun() const { return m_statementsRun; }
+    void countStatementRun() const { ++m_statementsRun; }
+
 private:
     void close();
 
     sqlite3 *m_db = nullptr;
     QString m_path;
     FaultHook m_faultHook;
+    mutable qint64 m_statementsRun = 0;
 };
 
 // Maps an SQLite primary result code to Fourfold's error code.

@@ -3,6 +3,7 @@
 #include "core/store/store_util.h"
 
 #include <QCoreApplication>
+#include <QHash>
 
 namespace fourfold::store {
 
@@ -144,12 +145,32 @@ Result<std::vector<GoldAnnotation>> goldAnnotations(const Database &db, ArticleI
     if (!stmt)
         return std::unexpected(stmt.error());
     if (article.isValid())
-        stmt->bind(1, article.value);
+        if (article.isValid())
+            stmt->bind(1, article.value);
     auto rows = collectRows(*stmt, readGold);
     if (!rows)
         return std::unexpected(rows.error());
+    // Every row's sources in one more query, not one query per gold span.
+    auto sources = db.prepare(article.isValid()
+            ? QStringLiteral("SELECT s.gold_id, s.annotation_id FROM gold_annotation g JOIN "
+                             "gold_source s ON s.gold_id = g.id WHERE g.article_id = ?1 AND "
+                             "g.deleted = 0 ORDER BY s.gold_id, s.annotation_id")
+            : QStringLiteral("SELECT gold_id, annotation_id FROM gold_source "
+                             "ORDER BY gold_id, annotation_id"));
+    if (!sources)
+        return std::unexpected(sources.error());
+    if (article.isValid())
+        sources->bind(1, article.value);
+    auto pairs = collectRows(*sources, [](const Statement &row) {
+        return std::pair {row.columnInt(0), AnnotationId {row.columnInt(1)}};
+    });
+    if (!pairs)
+        return std::unexpected(pairs.error());
+    QHash<qint64, std::vector<AnnotationId>> byGold;
+    for (const auto &[gold, annotation] : *pairs)
+        byGold[gold].push_back(annotation);
     for (GoldAnnotation &g : *rows)
-        FOURFOLD_TRY_STATUS(readSources(db, g));
+        g.sources = byGold.value(g.id.value);
     return rows;
 }
 

@@ -76,6 +76,8 @@ Statement &Statement::bindNull(int index)
 Result<bool> Statement::step()
 {
     int rc = SQLITE_OK;
+    if (!sqlite3_stmt_busy(m_stmt))
+        m_db->countStatementRun();
     if (m_db->faultHook())
         rc = m_db->faultHook()();
     if (rc == SQLITE_OK)

@@ -6,6 +6,7 @@
 #include "core/agreement/disagreements.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/gold_edits.h"
+#include "tests/project/double_coded_project.h"
 #include "tests/project/project_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -322,4 +323,24 @@ TEST_CASE("accepting spans is all-or-nothing")
     CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
     AcceptSpansEdit none(f.f1, f.lead, {}, {});
     CHECK_FALSE(f.project.apply(none));
+}
+
+TEST_CASE("the comparison queue reads the same few statements for 6 and for 18 articles")
+{
+    qint64 counts[2] = {};
+    int i = 0;
+    for (int n : {6, 18}) {
+        DoubleCodedProject p(n);
+        qint64 rows = -1;
+        counts[i++] = p.statementsRunBy([&] {
+            auto queue = disagreementQueue(p.project);
+            REQUIRE(queue);
+            rows = qint64(queue->size());
+        });
+        // Every article has two coders who disagree on the second span's function.
+        CHECK(rows == n);
+    }
+    CHECK(counts[0] == counts[1]);
+    CHECK(counts[0] > 0);
+    CHECK(counts[0] <= 12);
 }

@@ -9,6 +9,8 @@
 #include "app/desktop/frame_card.h"
 #include "app/desktop/item_form.h"
 #include "app/desktop/span_editor.h"
+#include "core/store/database.h"
+#include "tests/project/double_coded_project.h"
 #include "tests/project/project_fixture.h"
 #include "tests/support/test_support.h"
 
@@ -488,4 +490,40 @@ TEST_CASE("with a coding session, each change in the panels is one undoable edit
     CHECK(answers[0].itemKey == QStringLiteral("dominant_function"));
     CHECK(answers[0].value == QStringLiteral("problem"));
     CHECK(undo->index() == steps + 1); // the undone attribute edit was replaced by the answer
+}
+
+TEST_CASE("the article list reads the same few statements for 6 and for 18 articles")
+{
+    qint64 counts[2][2] = {};
+    int i = 0;
+    for (int n : {6, 18}) {
+        DoubleCodedProject p(n);
+        auto coders = p.project.coders();
+        REQUIRE(coders);
+        const Coder lead = coders->back();
+        const Coder coder = coders->front();
+        REQUIRE(lead.role == CoderRole::Lead);
+        CodingSession asLead(std::move(p.project), lead);
+        Database &db = asLead.project().databaseForTesting();
+        qint64 before = db.statementsRun();
+        const std::vector<ArticleRow> all = asLead.articleRows();
+        counts[i][0] = db.statementsRun() - before;
+        CHECK(qint64(all.size()) == n);
+        auto reopened = Project::open(asLead.project().path());
+        REQUIRE(reopened);
+        CodingSession asCoder(std::move(*reopened), coder);
+        Database &own = asCoder.project().databaseForTesting();
+        before = own.statementsRun();
+        const std::vector<ArticleRow> mine = asCoder.articleRows();
+        counts[i][1] = own.statementsRun() - before;
+        // C01 codes two of every three articles, all done.
+        CHECK(qint64(mine.size()) == n * 2 / 3);
+        for (const ArticleRow &row : mine)
+            CHECK(row.status == QStringLiteral("done"));
+        ++i;
+    }
+    CHECK(counts[0][0] == counts[1][0]);
+    CHECK(counts[0][1] == counts[1][1]);
+    CHECK(counts[1][0] > 0);
+    CHECK(counts[1][0] <= 6);
 }

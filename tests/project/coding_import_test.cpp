@@ -1,4 +1,5 @@
 #include "core/project/coding_import.h"
+#include "core/store/codebook_table.h"
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -120,8 +121,8 @@ TEST_CASE("a lead's gold line becomes a gold span with the overlapping spans as 
     // Only the cause span overlaps with the same function; the problem span is not a source.
     auto spans = f.project.annotations(f.articleId(QStringLiteral("f1")));
     REQUIRE(spans);
-    const auto cause = std::ranges::find_if(*spans,
-        [](const Annotation &a) { return a.content.function == FramingFunction::Cause; });
+    const auto cause = std::ranges::find_if(
+        *spans, [](const Annotation &a) { return a.content.function == FramingFunction::Cause; });
     REQUIRE(cause != spans->end());
     REQUIRE((*gold)[0].sources.size() == 1);
     CHECK((*gold)[0].sources[0] == cause->id);
@@ -135,4 +136,20 @@ TEST_CASE("a gold line from a coder who is not a lead is refused with its line")
     REQUIRE_FALSE(r);
     CHECK(r.error().line == 1);
     CHECK(f.project.goldAnnotations()->empty());
+}
+
+TEST_CASE("importing many codings parses the codebook at most once")
+{
+    CodingFixture f;
+    QByteArray jsonl;
+    for (int i = 0; i < 40; ++i)
+        jsonl += "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
+                 "\"The ferry\"}\n";
+    const qint64 before = store::codebookParses();
+    auto r = f.run(jsonl);
+    REQUIRE(r);
+    CHECK(r->spans == 40);
+    // Every span is checked against the codebook; its JSON is parsed once (or not at all when
+    // this process has parsed the same codebook before).
+    CHECK(store::codebookParses() - before <= 1);
 }
