@@ -20,6 +20,7 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
         qint64 judgements = 0;
         qint64 gold = 0;
         qint64 articlesDone = 0;
+        qint64 skipped = 0;
         QStringList created;
         if (w3c) {
             auto result = importW3cAnnotations(project, file, phase);
@@ -28,6 +29,7 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
             spans = result->spans;
             created = result->codersCreated;
             articlesDone = result->articlesDone;
+            skipped = result->skipped;
         } else {
             auto result = importQuotedCodings(project, file, phase);
             if (!result)
@@ -39,7 +41,7 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
         }
         done.append(QJsonObject {{QStringLiteral("file"), file}, {QStringLiteral("spans"), spans},
             {QStringLiteral("judgements"), judgements}, {QStringLiteral("gold"), gold},
-            {QStringLiteral("articles_done"), articlesDone},
+            {QStringLiteral("articles_done"), articlesDone}, {QStringLiteral("skipped"), skipped},
             {QStringLiteral("codersCreated"), QJsonArray::fromStringList(created)}});
         if (!json) {
             out(QCoreApplication::translate("cli", "%1: %2 spans, %3 answers, %4 gold spans added")
@@ -47,6 +49,11 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
                     .arg(spans)
                     .arg(judgements)
                     .arg(gold));
+            if (skipped > 0)
+                out(QCoreApplication::translate("cli",
+                    "  %1 annotation(s) skipped: already in the project (same id, or same coder, "
+                    "function and range)")
+                        .arg(skipped));
             if (articlesDone > 0)
                 out(QCoreApplication::translate("cli",
                     "  %1 article(s) marked done for their coders (imported codings count as "

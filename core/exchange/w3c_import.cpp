@@ -14,6 +14,7 @@
 
 #include <map>
 #include <set>
+#include <tuple>
 #include <utility>
 
 namespace fourfold {
@@ -149,6 +150,20 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
 
     W3cImportReport report;
     std::set<std::pair<qint64, qint64>> finished; // (article, coder) with imported codings
+    // What is already there, per article: annotation uuids and (coder, function, range).
+    std::map<qint64, std::set<QString>> uuidsOf;
+    std::map<qint64, std::set<std::tuple<qint64, int, qint64, qint64>>> spansOf;
+    for (const auto &[article, loaded] : articles) {
+        Q_UNUSED(loaded);
+        auto existing = project.annotations(ArticleId {article});
+        if (!existing)
+            return std::unexpected(existing.error());
+        for (const Annotation &a : *existing) {
+            uuidsOf[article].insert(a.uuid);
+            spansOf[article].insert({a.coder.value, int(a.content.function), a.content.range.start,
+                a.content.range.end});
+        }
+    }
     auto status = project.batch([&]() -> Status {
         QHash<QString, CoderId> coders;
         for (const Pending &p : pending) {
@@ -169,6 +184,20 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
                 }
                 coder = coders.insert(p.coder, id);
             }
+            // The same annotation twice (its id, or the same coder, function and range on the
+            // same article) is skipped and reported, never added again.
+            const QString uuid =
+                p.id.startsWith(QLatin1String("urn:uuid:")) ? p.id.mid(9) : QString();
+            const std::tuple key {
+                coder->value, int(p.content.function), p.content.range.start, p.content.range.end};
+            if ((!uuid.isEmpty() && uuidsOf[p.article.value].contains(uuid))
+                || !spansOf[p.article.value].insert(key).second) {
+                ++report.skipped;
+                report.skippedIds << (p.id.isEmpty() ? QString::number(p.index + 1) : p.id);
+                continue;
+            }
+            if (!uuid.isEmpty())
+                uuidsOf[p.article.value].insert(uuid);
             AddAnnotationEdit edit(p.article, *coder, p.content, phase);
             if (auto applied = project.apply(edit); !applied) {
                 if (applied.error().code == ErrorCode::InvalidInput

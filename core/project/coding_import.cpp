@@ -79,6 +79,33 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                         .arg(error.error != QJsonParseError::NoError ? error.errorString()
                                                                      : tr("another JSON value")));
             const QJsonObject o = doc.object();
+            // Strict, as the article readers are: a misspelled or unknown key is an error, never
+            // silently dropped, and so is a value of the wrong type.
+            static const QStringList known {QStringLiteral("article"), QStringLiteral("coder"),
+                QStringLiteral("function"), QStringLiteral("quote"), QStringLiteral("occurrence"),
+                QStringLiteral("attributes"), QStringLiteral("note"), QStringLiteral("confidence"),
+                QStringLiteral("gold"), QStringLiteral("rationale"), QStringLiteral("item"),
+                QStringLiteral("value")};
+            for (const QString &key : o.keys())
+                if (!known.contains(key))
+                    return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                        tr("unknown field \"%1\" (expected article, coder, function, quote, "
+                           "occurrence, attributes, note, confidence, gold, rationale, item, "
+                           "value).")
+                            .arg(key));
+            const auto typed = [&](const char *key, QJsonValue::Type type,
+                                   const QString &what) -> Status {
+                const QJsonValue v = o.value(QLatin1String(key));
+                if (!v.isUndefined() && v.type() != type)
+                    return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                        tr("field \"%1\" must be %2.").arg(QLatin1String(key), what));
+                return {};
+            };
+            FOURFOLD_TRY_STATUS(typed("attributes", QJsonValue::Object, tr("an object")));
+            FOURFOLD_TRY_STATUS(typed("note", QJsonValue::String, tr("text")));
+            FOURFOLD_TRY_STATUS(
+                typed("confidence", QJsonValue::Double, tr("a number from 0 to 1")));
+            FOURFOLD_TRY_STATUS(typed("rationale", QJsonValue::String, tr("text")));
             auto articleKey = requiredString(o, "article", path, lineNo);
             if (!articleKey)
                 return std::unexpected(articleKey.error());

@@ -136,6 +136,11 @@ Result<Statement> Database::prepare(const QString &sql) const
     return Statement(this, stmt);
 }
 
+void Database::setBusyTimeout(int milliseconds)
+{
+    sqlite3_busy_timeout(m_db, milliseconds);
+}
+
 qint64 Database::lastInsertRowId() const
 {
     return sqlite3_last_insert_rowid(m_db);

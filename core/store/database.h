@@ -40,6 +40,10 @@ public:
     // mapped error code and SQLite's message as the cause.
     Status exec(const QString &sql);
 
+    // How long a write waits for another connection's write lock before it fails with Busy
+    // (5,000 ms after open()).
+    void setBusyTimeout(int milliseconds);
+
     // Compiles one statement. Fails with the mapped error code.
     Result<Statement> prepare(const QString &sql) const;
 

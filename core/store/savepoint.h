@@ -1,6 +1,8 @@
 #pragma once
 // RAII savepoint: everything between construction and commit() is one atomic unit; leaving the
-// scope without commit() rolls it all back. Savepoints nest.
+// scope without commit() rolls it all back. Savepoints nest; the outermost one is a write
+// transaction begun at once (BEGIN IMMEDIATE), so a second process that writes the same file
+// waits for the busy timeout instead of failing at its first write.
 
 #include "core/model/error.h"
 
@@ -29,6 +31,7 @@ private:
     { }
     Database *m_db = nullptr;
     bool m_done = false;
+    bool m_outermost = false; // BEGIN IMMEDIATE … COMMIT rather than a named savepoint
 };
 
 } // namespace fourfold

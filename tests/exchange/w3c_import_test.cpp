@@ -175,3 +175,29 @@ TEST_CASE_METHOD(RoundTrip, "a run's W3C export cannot become a coder's codings"
     REQUIRE_FALSE(missing);
     CHECK(missing.error().code == ErrorCode::Io);
 }
+
+TEST_CASE_METHOD(
+    RoundTrip, "importing the same W3C file again adds nothing and says so", "[exchange][w3c]")
+{
+    // Into the project the spans came from: every annotation is there already (same ids).
+    const QString before =
+        test::dumpDatabase(project.databaseForTesting(), {QStringLiteral("event_log")});
+    auto again = importW3cAnnotations(project, exported);
+    REQUIRE(again);
+    CHECK(again->spans == 0);
+    CHECK(again->skipped == 5);
+    CHECK(
+        test::dumpDatabase(project.databaseForTesting(), {QStringLiteral("event_log")}) == before);
+
+    // Into a fresh project twice: the second import finds the same coder, function and range.
+    Project fresh = freshProject(QStringLiteral("twice.fourfold"));
+    auto first = importW3cAnnotations(fresh, exported);
+    REQUIRE(first);
+    CHECK(first->spans == 5);
+    CHECK(first->skipped == 0);
+    auto second = importW3cAnnotations(fresh, exported);
+    REQUIRE(second);
+    CHECK(second->spans == 0);
+    CHECK(second->skipped == 5);
+    CHECK(spansOf(fresh) == spansOf(project));
+}

@@ -86,6 +86,23 @@ TEST_CASE("a bad codings file names the line and changes nothing")
          "\"attributes\":{\"polarity\":\"angry\"}}",
             "not a value"},
         {"{\"article\":\"f1\"", "not a JSON object"},
+        // Misspelled keys and wrong types are refused, never dropped (the actor, note and
+        // confidence would be lost otherwise).
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"ferry\","
+         "\"atributes\":{\"actor\":\"council\"}}",
+            "unknown field \"atributes\""},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"ferry\","
+         "\"notes\":\"x\"}",
+            "unknown field \"notes\""},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"ferry\","
+         "\"attributes\":\"x\"}",
+            "field \"attributes\" must be an object"},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"ferry\","
+         "\"confidence\":\"high\"}",
+            "field \"confidence\" must be a number"},
+        {"{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"ferry\","
+         "\"note\":3}",
+            "field \"note\" must be text"},
     };
     for (const Case &c : cases) {
         INFO(c.expected);

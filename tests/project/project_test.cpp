@@ -1,7 +1,9 @@
+#include "core/project/annotation_edits.h"
 #include "core/project/project.h"
 #include "project_fixture.h"
 
 #include <QFile>
+#include <QProcess>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -89,4 +91,69 @@ TEST_CASE("coders need a name and a unique pseudonym")
     auto empty = f.project.addCoder(QStringLiteral(" "), QStringLiteral("C02"), CoderRole::Coder);
     REQUIRE_FALSE(empty);
     CHECK(empty.error().code == ErrorCode::InvalidArgument);
+}
+
+namespace {
+
+// Another process (Python's sqlite3 module, outside Fourfold) that takes the project's write
+// lock, says "locked", holds it for `seconds` and commits.
+struct LockHolder {
+    QProcess process;
+    LockHolder(const QString &path, double seconds)
+    {
+        process.start(QStringLiteral("/usr/bin/python3"),
+            {QStringLiteral("-c"),
+                QStringLiteral("import sqlite3, sys, time\n"
+                               "c = sqlite3.connect(sys.argv[1], isolation_level=None)\n"
+                               "c.execute('BEGIN IMMEDIATE')\n"
+                               "print('locked', flush=True)\n"
+                               "time.sleep(float(sys.argv[2]))\n"
+                               "c.execute('COMMIT')\n"),
+                path, QString::number(seconds)});
+        REQUIRE(process.waitForStarted(10000));
+        REQUIRE(process.waitForReadyRead(10000));
+        REQUIRE(process.readLine().trimmed() == "locked");
+    }
+    ~LockHolder() { process.waitForFinished(20000); }
+};
+
+} // namespace
+
+TEST_CASE("an edit waits for another process's write and then lands")
+{
+    ProjectFixture f;
+    f.importJsonl(kTwoArticles);
+    const ArticleId f1 = f.articleId(QStringLiteral("f1"));
+    const CoderId c1 = f.addCoder(QStringLiteral("C01"));
+    LockHolder other(f.project.path(), 1.0);
+    // The other writer holds the lock for a second; the busy timeout is five.
+    AddAnnotationEdit edit(
+        f1, c1, AnnotationContent {FramingFunction::Problem, {0, 9}, {}, {}, {}});
+    const Status applied = f.project.apply(edit);
+    INFO((applied ? QString() : applied.error().toString()).toStdString());
+    REQUIRE(applied);
+    auto spans = f.project.annotations(f1);
+    REQUIRE(spans);
+    CHECK(spans->size() == 1);
+}
+
+TEST_CASE("an edit that cannot get the write lock in time fails once and writes nothing")
+{
+    ProjectFixture f;
+    f.importJsonl(kTwoArticles);
+    const ArticleId f1 = f.articleId(QStringLiteral("f1"));
+    const CoderId c1 = f.addCoder(QStringLiteral("C01"));
+    f.project.databaseForTesting().setBusyTimeout(100);
+    LockHolder other(f.project.path(), 2.0);
+    AddAnnotationEdit edit(
+        f1, c1, AnnotationContent {FramingFunction::Problem, {0, 9}, {}, {}, {}});
+    const Status applied = f.project.apply(edit);
+    REQUIRE_FALSE(applied);
+    CHECK(applied.error().code == ErrorCode::Busy);
+    other.process.waitForFinished(20000);
+    auto spans = f.project.annotations(f1);
+    REQUIRE(spans);
+    CHECK(spans->empty());
+    // Once the other writer is done, the same edit lands.
+    REQUIRE(f.project.apply(edit));
 }
