@@ -9,6 +9,7 @@
 #include <QSet>
 
 #include <algorithm>
+#include <array>
 #include <map>
 
 namespace fourfold {
@@ -211,13 +212,22 @@ void addSpanUnits(ReliabilityTable &table, const QString &articleId,
     }
 }
 
-QString setLabel(unsigned mask)
+// The label of a set of functions; the 16 labels are made once and shared (Qt's implicit
+// sharing), so a table of millions of token units holds no string per cell.
+const QString &setLabel(unsigned mask)
 {
-    QStringList keys;
-    for (FramingFunction f : kFramingFunctions)
-        if (mask & (1u << unsigned(f)))
-            keys << functionKey(f);
-    return keys.isEmpty() ? QStringLiteral("{}") : keys.join(QLatin1Char('|'));
+    static const std::array<QString, 16> labels = [] {
+        std::array<QString, 16> out;
+        for (unsigned m = 0; m < 16; ++m) {
+            QStringList keys;
+            for (FramingFunction f : kFramingFunctions)
+                if (m & (1u << unsigned(f)))
+                    keys << functionKey(f);
+            out[m] = keys.isEmpty() ? QStringLiteral("{}") : keys.join(QLatin1Char('|'));
+        }
+        return out;
+    }();
+    return labels[mask & 15u];
 }
 
 } // namespace
@@ -350,6 +360,7 @@ Result<ReliabilityTable> unitTable(
         }
         for (size_t u = 0; u < units.size(); ++u) {
             QStringList row;
+            row.reserve(coders);
             for (qsizetype c = 0; c < coders; ++c) {
                 if (!s.counts(articleId, s.coders[size_t(c)].id.value)) {
                     row << QString();
