@@ -876,11 +876,12 @@ QString Builder::build() const
     section(QStringLiteral("reproduce"), tr("Reproducing the figures"), reproduce());
     section(QStringLiteral("references"), tr("References"), references());
     if (!print) {
-        // The figures in machine-readable form; "</" is escaped so the JSON cannot end the
-        // element early.
+        // The figures in machine-readable form. In JSON a "<" can only stand inside a string,
+        // where \u003c means the same: so no pseudonym or title ("<!--<script", "</script>") can
+        // end the element early or switch the HTML parser's script state.
         QString json =
             QString::fromUtf8(QJsonDocument(m_reportJson).toJson(QJsonDocument::Compact));
-        json.replace(QStringLiteral("</"), QStringLiteral("<\\/"));
+        json.replace(QLatin1Char('<'), QStringLiteral("\\u003c"));
         html += QStringLiteral("<script type=\"application/json\" id=\"fourfold-figures\">%1"
                                "</script>\n")
                     .arg(json);

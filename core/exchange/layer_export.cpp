@@ -27,9 +27,20 @@ QString tr(const char *text)
     return QCoreApplication::translate("LayerExport", text);
 }
 
-// RFC 4180 §2: a field holding a comma, a quote or a line break is quoted, quotes doubled.
-QString csvField(const QString &value)
+// RFC 4180 §2: a field holding a comma, a quote or a line break is quoted, quotes doubled. A
+// text that a spreadsheet would run as a formula (starting with =, +, -, @, a tab or a carriage
+// return) gets a leading apostrophe, unless it is a number (OWASP's advice on CSV injection;
+// common practice).
+QString csvField(const QString &text)
 {
+    QString value = text;
+    static const QString formulaStarts = QStringLiteral("=+-@\t\r");
+    if (!value.isEmpty() && formulaStarts.contains(value.front())) {
+        bool number = false;
+        value.toDouble(&number);
+        if (!number)
+            value.prepend(QLatin1Char('\''));
+    }
     if (!value.contains(QLatin1Char(',')) && !value.contains(QLatin1Char('"'))
         && !value.contains(QLatin1Char('\n')) && !value.contains(QLatin1Char('\r')))
         return value;
@@ -301,15 +312,20 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
                        << functionKey(f) + QStringLiteral("_spans")
                        << functionKey(f) + QStringLiteral("_share");
             QString csv = header.join(QLatin1Char(',')) + QStringLiteral("\r\n");
+            // The spans of each (article, source), gathered once rather than per row.
+            std::map<std::pair<qint64, QString>, std::array<std::vector<TextRange>, 4>> rangesOf;
+            for (const LayerSpan *sp : spans)
+                rangesOf[{sp->article.value, sp->source}][std::size_t(sp->function)].push_back(
+                    sp->range);
             for (const LayerCoverage &c : layer->coverage) {
                 const std::size_t ai = index.value(c.article.value);
                 if (splitOf[ai] != int(s))
                     continue;
                 const Article &a = articles[ai];
-                std::array<std::vector<TextRange>, 4> ranges;
-                for (const LayerSpan *sp : spans)
-                    if (sp->article == c.article && sp->source == c.source)
-                        ranges[std::size_t(sp->function)].push_back(sp->range);
+                const auto found = rangesOf.find({c.article.value, c.source});
+                const std::array<std::vector<TextRange>, 4> ranges = found == rangesOf.end()
+                    ? std::array<std::vector<TextRange>, 4> {}
+                    : found->second;
                 QStringList row {csvField(a.summary.externalId), a.summary.sha256,
                     csvField(a.summary.language), QString::number(a.summary.length),
                     csvField(c.source)};

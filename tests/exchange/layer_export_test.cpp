@@ -170,7 +170,8 @@ TEST_CASE_METHOD(ExportFixture, "JSON Lines spans and articles", "[exchange][jso
     CHECK(r.files.size() == 2);
 }
 
-TEST_CASE_METHOD(ExportFixture, "an export without text (--no-text) writes offsets and hashes only", "[exchange]")
+TEST_CASE_METHOD(ExportFixture, "an export without text (--no-text) writes offsets and hashes only",
+    "[exchange]")
 {
     for (ExportFormat f :
         {ExportFormat::Jsonl, ExportFormat::W3c, ExportFormat::Iob2, ExportFormat::Csv}) {
@@ -331,4 +332,35 @@ TEST_CASE_METHOD(ExportFixture, "a run's spans export with their scores", "[exch
             dir.filePath(QStringLiteral("x"))));
     REQUIRE_FALSE(unknown);
     CHECK(unknown.error().code == ErrorCode::NotFound);
+}
+
+TEST_CASE("CSV cells a spreadsheet would run as formulas are neutralised", "[exchange][csv]")
+{
+    // OWASP's advice on CSV injection (common practice): a leading apostrophe before =, +, -, @,
+    // tab or carriage return, except in numbers.
+    test::ScoringFixture fx;
+    fx.importJsonl("{\"id\":\"=HYPERLINK(\\\"http://x\\\")\",\"title\":\"A\",\"language\":\"en\","
+                   "\"text\":\"The ferry stops.\"}\n"
+                   "{\"id\":\"-7\",\"title\":\"B\",\"language\":\"en\","
+                   "\"text\":\"The dyke holds.\"}\n",
+        QStringLiteral("hostile.jsonl"));
+    auto coder = fx.project.addCoder(
+        QStringLiteral("Someone"), QStringLiteral("@SUM(A1)"), CoderRole::Coder);
+    REQUIRE(coder);
+    fx.code(fx.articleId(QStringLiteral("=HYPERLINK(\"http://x\")")), *coder, F::Problem, 0, 9);
+    fx.code(fx.articleId(QStringLiteral("-7")), *coder, F::Problem, 0, 8);
+    ExportOptions o;
+    o.layer = LayerSpec {LayerKind::Coders, {}};
+    o.format = ExportFormat::Csv;
+    o.outDir = fx.dir.filePath(QStringLiteral("csv"));
+    REQUIRE(exportLayer(fx.project, o));
+    QFile f(QDir(o.outDir).filePath(QStringLiteral("all.csv")));
+    REQUIRE(f.open(QIODevice::ReadOnly));
+    const QString csv = QString::fromUtf8(f.readAll());
+    // The quote inside the id is doubled (RFC 4180), the formula start neutralised.
+    CHECK(csv.contains(QStringLiteral("\"'=HYPERLINK(\"\"http://x\"\")\",")));
+    CHECK(csv.contains(QStringLiteral(",'@SUM(A1),")));
+    CHECK_FALSE(csv.contains(QStringLiteral(",@SUM(A1),")));
+    // A number stays a number.
+    CHECK(csv.contains(QStringLiteral("\r\n-7,")));
 }

@@ -148,9 +148,7 @@ QJsonObject embeddedFigures(const QString &html)
         QRegularExpression::DotMatchesEverythingOption);
     const auto m = script.match(html);
     REQUIRE(m.hasMatch());
-    QString json = m.captured(1);
-    json.replace(QStringLiteral("<\\/"), QStringLiteral("</"));
-    return parseObject(json);
+    return parseObject(m.captured(1));
 }
 
 } // namespace
@@ -503,4 +501,30 @@ TEST_CASE("figureValue and formatFigure follow dotted paths and mark undefined v
     CHECK(formatFigure(QJsonValue(0.6925), QStringLiteral("f3")) == QLatin1String("0.693"));
     CHECK(formatFigure(QJsonValue(0.8966), QStringLiteral("pct")) == QLatin1String("89.7%"));
     CHECK(formatFigure(QJsonValue(218.0), QStringLiteral("int")) == QLatin1String("218"));
+}
+
+TEST_CASE("no title or pseudonym can end the embedded figures early")
+{
+    // HTML Standard §4.12.1.3 (restrictions for contents of script elements): "<!--" and
+    // "</script" must not appear inside; every "<" of the JSON is written as \u003c.
+    const Sample &s = sample();
+    QTemporaryDir dir;
+    const QString copy = dir.filePath(QStringLiteral("hostile.fourfold"));
+    REQUIRE(QFile::copy(s.project, copy));
+    auto project = Project::open(copy);
+    REQUIRE(project);
+    ReportOptions options;
+    options.bootstrapReplicates = 0;
+    options.title = QStringLiteral("</script><!--<script>alert(1)</script>");
+    const QString html = dir.filePath(QStringLiteral("hostile.html"));
+    REQUIRE(writeReport(*project, options, html));
+    const QString text = readText(html);
+    const QString open = QStringLiteral("id=\"fourfold-figures\">");
+    const qsizetype from = text.indexOf(open) + open.size();
+    const qsizetype to = text.indexOf(QStringLiteral("</script>"), from);
+    REQUIRE(from > open.size());
+    REQUIRE(to > from);
+    const QString json = text.mid(from, to - from);
+    CHECK_FALSE(json.contains(QLatin1Char('<')));
+    CHECK(embeddedFigures(text).value(QStringLiteral("title")).toString() == options.title);
 }
