@@ -11,6 +11,7 @@
 #include <QSet>
 
 #include <array>
+#include <cmath>
 #include <memory>
 
 namespace fourfold::cli {
@@ -137,9 +138,13 @@ int runExtract(const QStringList &arguments)
            "otherLanguages (error or skip). --command and --from-file: recorded as given."),
         QStringLiteral("KEY=VALUE"));
     const QCommandLineOption timeoutOption(QStringLiteral("timeout"),
-        tr("--command: stop the program and store nothing after this many seconds (default "
-           "300)."),
-        QStringLiteral("SECONDS"), QStringLiteral("300"));
+        tr("--command: stop the program and store nothing when the whole run takes longer than "
+           "this many seconds (default: no limit)."),
+        QStringLiteral("SECONDS"), QStringLiteral("0"));
+    const QCommandLineOption idleOption(QStringLiteral("idle-timeout"),
+        tr("--command: stop the program and store nothing when it writes nothing for this many "
+           "seconds (default 120; 0: no limit)."),
+        QStringLiteral("SECONDS"), QStringLiteral("120"));
     const QCommandLineOption versionOption(QStringLiteral("version"),
         tr("--command and --from-file: the extractor's own version, stored with the run."),
         QStringLiteral("VERSION"));
@@ -152,7 +157,7 @@ int runExtract(const QStringList &arguments)
         tr("Delete the run called NAME and its spans instead."), QStringLiteral("NAME"));
     const QCommandLineOption json(QStringLiteral("json"), tr("Print the result as JSON."));
     parser.addOptions({extractorOption, commandOption, fromFile, runOption, paramOption,
-        timeoutOption, versionOption, articlesOption, listOption, deleteOption, json});
+        timeoutOption, idleOption, versionOption, articlesOption, listOption, deleteOption, json});
     parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
     if (int rc = parseCommandLine(parser, command,
             tr("Run an extractor over a project's articles and store its spans as a named run, "
@@ -214,10 +219,10 @@ int runExtract(const QStringList &arguments)
                 tr("parameter \"%1\" is set by Fourfold itself; choose another key.")
                     .arg(reserved));
     if (parser.isSet(extractorOption)
-        && (parser.isSet(versionOption) || parser.isSet(timeoutOption)))
+        && (parser.isSet(versionOption) || parser.isSet(timeoutOption) || parser.isSet(idleOption)))
         return usageError(command,
-            tr("--version and --timeout are for --command and --from-file; a built-in baseline "
-               "has its own version."));
+            tr("--version, --timeout and --idle-timeout are for --command and --from-file; a "
+               "built-in baseline has its own version."));
 
     std::vector<ArticleId> articleIds;
     if (parser.isSet(articlesOption)) {
@@ -265,12 +270,19 @@ int runExtract(const QStringList &arguments)
         } else {
             bool ok = false;
             const double timeout = parser.value(timeoutOption).toDouble(&ok);
-            if (!ok || !(timeout > 0))
+            if (!ok || !(timeout >= 0) || !std::isfinite(timeout))
                 return usageError(command,
-                    tr("--timeout expects a positive number of seconds, got \"%1\".")
+                    tr("--timeout expects a number of seconds (0 for no limit), got \"%1\".")
                         .arg(parser.value(timeoutOption)));
-            extractor = std::make_unique<CommandExtractor>(
+            const double idle = parser.value(idleOption).toDouble(&ok);
+            if (!ok || !(idle >= 0) || !std::isfinite(idle))
+                return usageError(command,
+                    tr("--idle-timeout expects a number of seconds (0 for no limit), got \"%1\".")
+                        .arg(parser.value(idleOption)));
+            auto commandExtractor = std::make_unique<CommandExtractor>(
                 parser.value(commandOption), timeout, parser.value(versionOption), given);
+            commandExtractor->setIdleTimeout(idle);
+            extractor = std::move(commandExtractor);
         }
         run = ExtractorRuns::create(*project, *extractor, runName, articleIds);
     }

@@ -4,7 +4,11 @@
 
 #include <QCoreApplication>
 #include <QDeadlineTimer>
+#include <QElapsedTimer>
 #include <QProcess>
+
+#include <signal.h>
+#include <unistd.h>
 
 #include <algorithm>
 #include <cmath>
@@ -52,6 +56,7 @@ QJsonObject CommandExtractor::parameters() const
     QJsonObject p = m_recorded;
     p.insert(QStringLiteral("command"), m_command);
     p.insert(QStringLiteral("timeout"), m_timeoutSeconds);
+    p.insert(QStringLiteral("idle_timeout"), m_idleSeconds);
     return p;
 }
 
@@ -60,9 +65,10 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
     const QStringList words = QProcess::splitCommand(m_command);
     if (words.isEmpty())
         return fail(ErrorCode::InvalidArgument, tr("The extractor command is empty."));
-    if (!(m_timeoutSeconds > 0) || !std::isfinite(m_timeoutSeconds))
-        return fail(
-            ErrorCode::InvalidArgument, tr("The timeout must be a positive number of seconds."));
+    if (m_timeoutSeconds < 0 || !std::isfinite(m_timeoutSeconds) || m_idleSeconds < 0
+        || !std::isfinite(m_idleSeconds))
+        return fail(ErrorCode::InvalidArgument,
+            tr("A timeout must be a positive number of seconds (or 0 for none)."));
 
     QByteArray input;
     QHash<QString, SpanTarget> targets;
@@ -74,26 +80,56 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
     QProcess process;
     process.setProgram(words.front());
     process.setArguments(words.mid(1));
-    const QDeadlineTimer deadline(qint64(std::ceil(std::min(m_timeoutSeconds, 1.0e9) * 1000.0)));
+    // The program leads a process group of its own, so that whatever it starts is stopped with
+    // it (a helper it leaves behind would otherwise outlive the run).
+    process.setChildProcessModifier([] { ::setsid(); });
+    const auto stopGroup = [&process] {
+        if (const qint64 pid = process.processId(); pid > 0)
+            ::kill(-pid_t(pid), SIGKILL);
+    };
+    const QDeadlineTimer deadline = m_timeoutSeconds > 0
+        ? QDeadlineTimer(qint64(std::ceil(std::min(m_timeoutSeconds, 1.0e9) * 1000.0)))
+        : QDeadlineTimer(QDeadlineTimer::Forever);
     process.start();
-    if (!process.waitForStarted(msLeft(deadline)))
+    if (!process.waitForStarted(30000))
         return fail(ErrorCode::Io, tr("The extractor \"%1\" could not be started.").arg(m_command),
             process.errorString());
+    const qint64 group = process.processId();
     process.write(input);
     process.closeWriteChannel();
-    // waitForFinished services stdin, stdout and stderr together, so a program that answers
-    // while it reads cannot block on a full pipe.
-    const bool finished = process.waitForFinished(msLeft(deadline));
-    if (!finished) {
-        process.kill();
-        process.waitForFinished(5000);
-        return fail(ErrorCode::Io,
-            tr("The extractor \"%1\" did not finish within %2 s and was stopped; nothing was "
-               "stored.")
-                .arg(m_command)
-                .arg(m_timeoutSeconds),
-            stderrTail(process.readAllStandardError()));
+    // Wait in short steps: waitForFinished services stdin, stdout and stderr together, so a
+    // program that answers while it reads cannot block on a full pipe. A program that writes
+    // nothing for the idle timeout is stopped; a slow one that keeps answering is not.
+    QElapsedTimer idle;
+    idle.start();
+    qint64 seen = 0;
+    const qint64 idleMs = qint64(std::ceil(std::min(m_idleSeconds, 1.0e9) * 1000.0));
+    while (!process.waitForFinished(std::min(200, msLeft(deadline)))) {
+        if (process.state() == QProcess::NotRunning)
+            break;
+        if (const qint64 now = process.bytesAvailable(); now != seen) {
+            seen = now;
+            idle.restart();
+        }
+        const bool silent = m_idleSeconds > 0 && idle.elapsed() >= idleMs;
+        if (silent || deadline.hasExpired()) {
+            stopGroup();
+            process.waitForFinished(5000);
+            return fail(ErrorCode::Io,
+                silent ? tr("The extractor \"%1\" wrote nothing for %2 s and was stopped; nothing "
+                            "was stored.")
+                             .arg(m_command)
+                             .arg(m_idleSeconds)
+                       : tr("The extractor \"%1\" did not finish within %2 s and was stopped; "
+                            "nothing was stored.")
+                             .arg(m_command)
+                             .arg(m_timeoutSeconds),
+                stderrTail(process.readAllStandardError()));
+        }
     }
+    // The program has ended; anything it started and left running goes with it.
+    if (group > 0)
+        ::kill(-pid_t(group), SIGKILL);
     const QByteArray errors = process.readAllStandardError();
     if (process.exitStatus() == QProcess::CrashExit)
         return fail(ErrorCode::Io,

@@ -8,7 +8,9 @@
 #include "tests/support/db_dump.h"
 
 #include <QElapsedTimer>
+#include <QFile>
 #include <QJsonArray>
+#include <QThread>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -64,6 +66,7 @@ TEST_CASE("external extractor: a good program's spans are stored as a run, offse
     CHECK(run->parameters
         == QJsonObject {{QStringLiteral("extractor"), QStringLiteral("command")},
             {QStringLiteral("command"), command}, {QStringLiteral("timeout"), 30},
+            {QStringLiteral("idle_timeout"), 120},
             {QStringLiteral("model"), QStringLiteral("tiny")}});
 
     auto spans = ExtractorRuns::spans(f.project, run->id);
@@ -259,4 +262,63 @@ TEST_CASE("external extractor: the input lines follow the protocol")
     // "Brakwater’s" is one token (U+2019 is MidNumLet, UAX #29 WB6/WB7); the emoji is the
     // third, one code point wide: [18, 19).
     CHECK(input.value(QStringLiteral("tokens")).toArray().at(2).toArray() == QJsonArray {18, 19});
+}
+
+TEST_CASE("external extractor: a program that goes silent is stopped at the idle timeout")
+{
+    Fixture f;
+    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    // No total limit; one second without output stops it.
+    CommandExtractor extractor(script("hanging_extractor.py"), 0);
+    extractor.setIdleTimeout(1);
+    auto run = ExtractorRuns::create(f.project, extractor, QStringLiteral("r"));
+    REQUIRE_FALSE(run);
+    CHECK(run.error().code == ErrorCode::Io);
+    CHECK(run.error().message
+        == QStringLiteral("The extractor \"%1\" wrote nothing for 1 s and was stopped; nothing "
+                          "was stored.")
+               .arg(script("hanging_extractor.py")));
+    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+}
+
+TEST_CASE("external extractor: a slow program that keeps answering is not stopped")
+{
+    Fixture f;
+    // Two articles, 0.8 s of thinking before each answer: the run takes longer than the 1.2 s
+    // idle timeout, but an answer comes before 1.2 s pass and the idle clock restarts with it.
+    // (The idle clock watches stdout only: a program that only talks on stderr is silent.)
+    CommandExtractor extractor(script("slow_extractor.py", QStringLiteral("0.8")), 0);
+    extractor.setIdleTimeout(1.2);
+    auto run = ExtractorRuns::create(f.project, extractor, QStringLiteral("slow"));
+    INFO((run ? QString() : run.error().toString()).toStdString());
+    REQUIRE(run);
+    CHECK(extractor.parameters().value(QStringLiteral("idle_timeout")).toDouble() == 1.2);
+}
+
+TEST_CASE("external extractor: what the program starts does not outlive the run")
+{
+    Fixture f;
+    const QString pidFile = f.dir.filePath(QStringLiteral("helper.pid"));
+    CommandExtractor extractor(script("orphan_extractor.py", pidFile), 0);
+    auto run = ExtractorRuns::create(f.project, extractor, QStringLiteral("orphan"));
+    INFO((run ? QString() : run.error().toString()).toStdString());
+    REQUIRE(run);
+    const QByteArray pid = readFile(pidFile).trimmed();
+    REQUIRE_FALSE(pid.isEmpty());
+    // The helper's /proc entry is gone, or it is a zombie waiting for its new parent to reap it.
+    QFile stat(QStringLiteral("/proc/%1/stat").arg(QString::fromLatin1(pid)));
+    bool alive = false;
+    for (int i = 0; i < 50; ++i) {
+        alive = stat.open(QIODevice::ReadOnly);
+        if (alive) {
+            const QByteArray fields = stat.readAll();
+            stat.close();
+            const qsizetype close = fields.lastIndexOf(')');
+            alive = close > 0 && fields.mid(close + 2, 1) != "Z";
+        }
+        if (!alive)
+            break;
+        QThread::msleep(20);
+    }
+    CHECK_FALSE(alive);
 }
