@@ -209,6 +209,26 @@ struct ArticleCodings {
 Result<Comparison> compareLoaded(ArticleId article, const QString &title,
     const std::vector<Coder> &coded, const ArticleCodings &codings, const ComparisonFilter &filter);
 
+// The queue's counts for one compared article.
+ArticleDisagreement queueRow(const ArticleSummary &summary, const Comparison &comparison)
+{
+    ArticleDisagreement row;
+    row.article = summary;
+    row.coders = comparison.coders;
+    for (const Passage &p : comparison.passages) {
+        ++row.passages;
+        if (p.isAgreed()) {
+            row.agreedOpen += p.isResolved() ? 0 : 1;
+            continue;
+        }
+        ++row.disagreements;
+        row.unresolved += p.isResolved() ? 0 : 1;
+        for (DisagreementKind k : kDisagreementKinds)
+            row.byKind[size_t(k)] += p.has(k) ? 1 : 0;
+    }
+    return row;
+}
+
 } // namespace
 
 Result<std::vector<Coder>> articleCoders(
@@ -380,27 +400,46 @@ Result<std::vector<ArticleDisagreement>> disagreementQueue(
             codings == byArticle.end() ? nothing : codings->second, filter);
         if (!comparison)
             return std::unexpected(comparison.error());
-        ArticleDisagreement row;
-        row.article = summary;
-        row.coders = comparison->coders;
-        for (const Passage &p : comparison->passages) {
-            ++row.passages;
-            if (p.isAgreed()) {
-                row.agreedOpen += p.isResolved() ? 0 : 1;
-                continue;
-            }
-            ++row.disagreements;
-            row.unresolved += p.isResolved() ? 0 : 1;
-            for (DisagreementKind k : kDisagreementKinds)
-                row.byKind[size_t(k)] += p.has(k) ? 1 : 0;
-        }
-        out.push_back(std::move(row));
+        out.push_back(queueRow(summary, *comparison));
     }
     std::ranges::stable_sort(out, [](const ArticleDisagreement &a, const ArticleDisagreement &b) {
         return std::tuple(-a.unresolved, -a.disagreements, a.article.title)
             < std::tuple(-b.unresolved, -b.disagreements, b.article.title);
     });
     return out;
+}
+
+Result<ArticleDisagreement> articleDisagreement(
+    const Project &project, const ArticleDisagreement &row, const ComparisonFilter &filter)
+{
+    // The article's own rows only (indexed by article): a decision changes gold and rejections,
+    // never which coders count, so the row keeps its coders.
+    ArticleCodings codings;
+    auto spans = project.annotations(row.article.id);
+    if (!spans)
+        return std::unexpected(spans.error());
+    codings.spans = std::move(*spans);
+    auto gold = project.goldAnnotations(row.article.id);
+    if (!gold)
+        return std::unexpected(gold.error());
+    codings.gold = std::move(*gold);
+    auto rejections = project.goldRejections(row.article.id);
+    if (!rejections)
+        return std::unexpected(rejections.error());
+    for (const GoldRejection &r : *rejections)
+        codings.rejected.push_back(r.annotation);
+    std::vector<Coder> coders;
+    for (CoderId id : row.coders) {
+        Coder c;
+        c.id = id;
+        coders.push_back(c);
+    }
+    ComparisonFilter all = filter;
+    all.coderPair.reset(); // the row's coders already are the pair when one is chosen
+    auto comparison = compareLoaded(row.article.id, row.article.title, coders, codings, all);
+    if (!comparison)
+        return std::unexpected(comparison.error());
+    return queueRow(row.article, *comparison);
 }
 
 } // namespace fourfold

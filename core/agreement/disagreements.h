@@ -112,4 +112,10 @@ struct ArticleDisagreement {
 Result<std::vector<ArticleDisagreement>> disagreementQueue(
     const Project &project, const ComparisonFilter &filter = {});
 
+// `row` of the queue computed anew for its article and coders (three indexed queries, whatever
+// the size of the project): what a decision on that article changes, so that a window updates one
+// row instead of recomputing the queue. Fails only if the project cannot be read.
+Result<ArticleDisagreement> articleDisagreement(
+    const Project &project, const ArticleDisagreement &row, const ComparisonFilter &filter = {});
+
 } // namespace fourfold

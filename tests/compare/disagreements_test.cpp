@@ -344,3 +344,45 @@ TEST_CASE("the comparison queue reads the same few statements for 6 and for 18 a
     CHECK(counts[0] > 0);
     CHECK(counts[0] <= 12);
 }
+
+TEST_CASE("a decision recomputes one queue row with the same few statements at any size")
+{
+    qint64 counts[2] = {};
+    int i = 0;
+    for (int n : {6, 18}) {
+        DoubleCodedProject p(n);
+        auto queue = disagreementQueue(p.project);
+        REQUIRE(queue);
+        REQUIRE_FALSE(queue->empty());
+        ArticleDisagreement row = queue->front();
+        const int open = row.unresolved;
+        REQUIRE(open > 0);
+        // The lead rejects every span of the article's disagreeing passages.
+        auto comparison = compareArticle(p.project, row.article.id);
+        REQUIRE(comparison);
+        for (const Passage &passage : comparison->passages)
+            if (!passage.isAgreed() && !passage.isResolved()) {
+                std::vector<AnnotationId> spans;
+                for (const Annotation &a : passage.spans)
+                    spans.push_back(a.id);
+                RejectSpansEdit reject(spans, p.lead, QStringLiteral("not a frame element"));
+                REQUIRE(p.project.apply(reject));
+            }
+        counts[i++] = p.statementsRunBy([&] {
+            auto updated = articleDisagreement(p.project, row);
+            REQUIRE(updated);
+            CHECK(updated->unresolved == 0);
+            CHECK(updated->disagreements == row.disagreements);
+            // The same as the full queue computes for that article.
+            auto again = disagreementQueue(p.project);
+            REQUIRE(again);
+            for (const ArticleDisagreement &r : *again)
+                if (r.article.id == row.article.id) {
+                    CHECK(r.unresolved == updated->unresolved);
+                    CHECK(r.passages == updated->passages);
+                    CHECK(r.agreedOpen == updated->agreedOpen);
+                }
+        });
+    }
+    CHECK(counts[0] == counts[1]);
+}

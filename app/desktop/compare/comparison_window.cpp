@@ -100,8 +100,11 @@ ComparisonWindow::ComparisonWindow(CodingSession *session, QWidget *parent)
         m_coders = *coders;
     buildUi();
     buildActions();
-    connect(session, &CodingSession::articleChanged, this, [this](ArticleId) {
-        reloadQueue();
+    // A decision or its undo changes one article: its row is computed anew where it stands.
+    // Anything else (a coder's edit on the desk may bring an article into the queue) reloads it.
+    connect(session, &CodingSession::articleChanged, this, [this](ArticleId article) {
+        if (!refreshQueueRow(article))
+            reloadQueue();
         reloadArticle();
     });
     reloadQueue();
@@ -733,9 +736,24 @@ bool ComparisonWindow::push(std::unique_ptr<Edit> edit)
     showMessage(tr("%1. Undo with %2.")
                     .arg(text, QKeySequence(QKeySequence::Undo).toString(QKeySequence::NativeText)),
         false);
-    reloadQueue();
+    if (!refreshQueueRow(m_article))
+        reloadQueue();
     reloadArticle();
     return true;
+}
+
+bool ComparisonWindow::refreshQueueRow(ArticleId article)
+{
+    const int at = m_queueModel->rowOf(article);
+    if (at < 0)
+        return false;
+    auto row =
+        articleDisagreement(m_session->project(), m_queueModel->rows()[size_t(at)], filter());
+    if (!row) {
+        showMessage(row.error().toString(), true);
+        return false;
+    }
+    return m_queueModel->updateRow(std::move(*row));
 }
 
 bool ComparisonWindow::acceptSelected()

@@ -74,6 +74,8 @@ private:
     void buildUi();
     void buildActions();
     void reloadQueue();
+    // Recomputes the queue row of `article` in place; false when it has no row (or it failed).
+    bool refreshQueueRow(ArticleId article);
     void reloadArticle();
     void refreshDecisionList();
     void updateActions();

@@ -15,6 +15,16 @@ void DisagreementQueueModel::setRows(
     endResetModel();
 }
 
+bool DisagreementQueueModel::updateRow(ArticleDisagreement row)
+{
+    const int at = rowOf(row.article.id);
+    if (at < 0)
+        return false;
+    m_rows[size_t(at)] = std::move(row);
+    emit dataChanged(index(at, 0), index(at, ColumnCount - 1));
+    return true;
+}
+
 int DisagreementQueueModel::rowOf(ArticleId article) const
 {
     for (size_t i = 0; i < m_rows.size(); ++i)

@@ -22,6 +22,9 @@ public:
     // Replaces the rows; `coderNames` gives each coder's pseudonym for the Coders column.
     void setRows(std::vector<ArticleDisagreement> rows, const QHash<qint64, QString> &coderNames);
     const std::vector<ArticleDisagreement> &rows() const { return m_rows; }
+    // Replaces the row of `row.article` where it stands (the queue keeps its order while the lead
+    // works through it); false when the article has no row.
+    bool updateRow(ArticleDisagreement row);
     // The row of `article`, or -1.
     int rowOf(ArticleId article) const;
 
