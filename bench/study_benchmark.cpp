@@ -169,6 +169,11 @@ int main(int argc, char **argv)
             0, data.length, int(data.coders.size()), data.categories, data.units);
     });
     timed("comparison queue", n, 3, [&] { check(disagreementQueue(project), "queue"); });
+    {
+        const auto queue = check(disagreementQueue(project), "queue");
+        timed("comparison: one decision's queue row", n, 3,
+            [&] { check(articleDisagreement(project, queue.front()), "row"); });
+    }
     timed("progress board", n, 3, [&] { check(StudyDesign::progressBoard(project), "progress"); });
     timed("report HTML + PDF (1000 replicates)", n, 3, [&] {
         ReportOptions options;
