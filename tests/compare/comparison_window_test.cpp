@@ -11,7 +11,10 @@
 #include "tests/support/test_support.h"
 
 #include <QAbstractItemModelTester>
+#include <QAction>
+#include <QApplication>
 #include <QFile>
+#include <QLineEdit>
 #include <QSet>
 #include <QTest>
 #include <QUndoStack>
@@ -311,4 +314,41 @@ TEST_CASE("a click in a coder's column makes the passage current and chooses tha
     REQUIRE_FALSE(chosen.empty());
     for (const Annotation &a : chosen)
         CHECK(a.coder == coder);
+}
+
+TEST_CASE("after a decision with a rationale the next key steps on and the queue keeps its order")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    activate(w);
+    QLineEdit *rationale = w.findChild<QLineEdit *>();
+    REQUIRE(rationale);
+    const int first = w.currentPassage();
+    const ArticleId article = w.currentArticle();
+    std::vector<ArticleId> order;
+    for (const ArticleDisagreement &row : w.queueModel()->rows())
+        order.push_back(row.article.id);
+    w.selectSpans({w.passages()[size_t(first)].spans.front().id});
+    // The lead writes the rationale (Ctrl+L goes to the field) and accepts from the toolbar.
+    QTest::keyClick(&w, Qt::Key_L, Qt::ControlModifier);
+    REQUIRE(rationale->hasFocus());
+    QTest::keyClicks(rationale, QStringLiteral("whole claim"));
+    QAction *accept = nullptr;
+    for (QAction *a : w.findChildren<QAction *>())
+        if (a->text() == QStringLiteral("Accept"))
+            accept = a;
+    REQUIRE(accept);
+    accept->trigger();
+    CHECK(rationale->text().isEmpty());
+    CHECK_FALSE(rationale->hasFocus());
+    // N now steps to the next disagreement instead of typing into the rationale.
+    QTest::keyClick(QApplication::focusWidget(), Qt::Key_N);
+    CHECK(rationale->text().isEmpty());
+    CHECK(w.currentPassage() != first);
+    // The decided article stays where it was in the queue, and stays current.
+    CHECK(w.currentArticle() == article);
+    std::vector<ArticleId> after;
+    for (const ArticleDisagreement &row : w.queueModel()->rows())
+        after.push_back(row.article.id);
+    CHECK(after == order);
 }

@@ -185,6 +185,8 @@ void ComparisonWindow::buildUi()
     panelLayout->setContentsMargins(6, 0, 0, 0);
     m_passageLabel = new QLabel(panel);
     m_passageLabel->setWordWrap(true);
+    // Names, titles and quotes are shown as they are, never read as markup.
+    m_passageLabel->setTextFormat(Qt::PlainText);
     QFont bold = m_passageLabel->font();
     bold.setBold(true);
     m_passageLabel->setFont(bold);
@@ -240,6 +242,7 @@ void ComparisonWindow::buildUi()
     setCentralWidget(splitter);
 
     m_message = new QLabel(this);
+    m_message->setTextFormat(Qt::PlainText);
     statusBar()->addWidget(m_message, 1);
 }
 
@@ -733,6 +736,9 @@ bool ComparisonWindow::push(std::unique_ptr<Edit> edit)
     const QString text = edit->text();
     m_session->undoStack()->push(new EditCommand(m_session, std::move(edit), m_article));
     m_rationale->clear();
+    // The next key (N, A, …) goes to the comparison, not into the rationale just used.
+    if (m_rationale->hasFocus())
+        m_view->setFocus();
     showMessage(tr("%1. Undo with %2.")
                     .arg(text, QKeySequence(QKeySequence::Undo).toString(QKeySequence::NativeText)),
         false);

@@ -365,6 +365,8 @@ void ReliabilityWindow::buildControls(QWidget *panel)
     m_progress->setTextVisible(true);
     m_message = new QLabel(panel);
     m_message->setWordWrap(true);
+    m_message->setTextFormat(
+        Qt::PlainText); // pseudonyms and errors are shown, never read as markup
     m_message->setTextInteractionFlags(Qt::TextSelectableByMouse);
 
     auto *buttons = new QHBoxLayout;
