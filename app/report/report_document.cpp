@@ -1,5 +1,7 @@
 #include "app/report/report_document.h"
 
+#include "core/agreement/agreement_report.h"
+
 #include <QCoreApplication>
 #include <QJsonArray>
 #include <QJsonDocument>
@@ -138,20 +140,32 @@ private:
     }
     QString verdictClass(const std::optional<double> &alpha) const
     {
-        if (!alpha)
+        switch (alphaBand(alpha)) {
+        case AlphaBand::Undefined:
             return QStringLiteral("note");
-        if (*alpha >= 0.800)
+        case AlphaBand::Reliable:
             return QStringLiteral("ok");
-        return *alpha >= 0.667 ? QStringLiteral("tentative") : QStringLiteral("low");
+        case AlphaBand::Tentative:
+            return QStringLiteral("tentative");
+        case AlphaBand::Unreliable:
+            break;
+        }
+        return QStringLiteral("low");
     }
     // Krippendorff (2004, §12.2), as alphaVerdict() in core/agreement.
     static QString shortVerdict(const std::optional<double> &alpha)
     {
-        if (!alpha)
+        switch (alphaBand(alpha)) {
+        case AlphaBand::Undefined:
             return tr("undefined");
-        if (*alpha >= 0.800)
+        case AlphaBand::Reliable:
             return tr("reliable");
-        return *alpha >= 0.667 ? tr("tentative") : tr("unreliable");
+        case AlphaBand::Tentative:
+            return tr("tentative");
+        case AlphaBand::Unreliable:
+            break;
+        }
+        return tr("unreliable");
     }
     QString chip(const QString &analysisId) const
     {

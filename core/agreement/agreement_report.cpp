@@ -76,15 +76,27 @@ QString fixed(const std::optional<double> &v, int decimals = 3)
 
 } // namespace
 
+AlphaBand alphaBand(const std::optional<double> &alpha)
+{
+    if (!alpha)
+        return AlphaBand::Undefined;
+    if (*alpha >= kAlphaReliable)
+        return AlphaBand::Reliable;
+    return *alpha >= kAlphaTentative ? AlphaBand::Tentative : AlphaBand::Unreliable;
+}
+
 QString alphaVerdict(const std::optional<double> &alpha)
 {
-    // Krippendorff (2004), Content Analysis 2nd ed., §12.2.
-    if (!alpha)
+    switch (alphaBand(alpha)) {
+    case AlphaBand::Undefined:
         return tr("undefined");
-    if (*alpha >= 0.800)
+    case AlphaBand::Reliable:
         return tr("reliable (≥ 0.800)");
-    if (*alpha >= 0.667)
+    case AlphaBand::Tentative:
         return tr("tentative conclusions only (0.667–0.800)");
+    case AlphaBand::Unreliable:
+        break;
+    }
     return tr("unreliable (< 0.667)");
 }
 

@@ -70,6 +70,13 @@ AgreementReport computeAgreement(const EncodedData &encoded, const QStringList &
 QJsonObject agreementJson(const AgreementReport &report);
 // A readable table with the verdict against 0.800 and 0.667.
 QString agreementText(const AgreementReport &report);
+// Krippendorff (2004), Content Analysis 2nd ed., §12.2: rely on variables with alpha ≥ 0.800;
+// draw tentative conclusions only from 0.667. Every verdict and colour band of the program (CLI,
+// windows, report) comes from these two figures and alphaBand().
+inline constexpr double kAlphaReliable = 0.800;
+inline constexpr double kAlphaTentative = 0.667;
+enum class AlphaBand { Undefined, Reliable, Tentative, Unreliable };
+AlphaBand alphaBand(const std::optional<double> &alpha);
 // "reliable (≥ 0.800)", "tentative only (0.667–0.800)", "unreliable (< 0.667)", or "undefined".
 QString alphaVerdict(const std::optional<double> &alpha);
 // One unitizing alpha as `agree --unit continuum --json` writes it: value (null with a reason when

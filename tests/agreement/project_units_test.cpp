@@ -1,3 +1,4 @@
+#include "core/agreement/agreement_report.h"
 #include "core/agreement/project_units.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/gold_edits.h"
@@ -224,4 +225,18 @@ TEST_CASE("the gold standard can join as one more coder")
     CHECK(t->cells[1]
         == QStringList {
             QStringLiteral("absent"), QStringLiteral("absent"), QStringLiteral("absent")});
+}
+
+TEST_CASE("one verdict for alpha: Krippendorff's 0.800 and 0.667")
+{
+    // Krippendorff (2004), Content Analysis 2nd ed., §12.2: rely on alpha ≥ 0.800, tentative
+    // conclusions from 0.667; the bands include their lower bounds.
+    CHECK(alphaBand(std::nullopt) == AlphaBand::Undefined);
+    CHECK(alphaBand(1.0) == AlphaBand::Reliable);
+    CHECK(alphaBand(0.800) == AlphaBand::Reliable);
+    CHECK(alphaBand(0.7999) == AlphaBand::Tentative);
+    CHECK(alphaBand(0.667) == AlphaBand::Tentative);
+    CHECK(alphaBand(0.6669) == AlphaBand::Unreliable);
+    CHECK(alphaBand(-0.2) == AlphaBand::Unreliable);
+    CHECK(alphaVerdict(0.75) == QStringLiteral("tentative conclusions only (0.667–0.800)"));
 }

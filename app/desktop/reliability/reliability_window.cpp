@@ -33,11 +33,6 @@ namespace fourfold {
 
 namespace {
 
-// Krippendorff (2004), Content Analysis 2nd ed., §12.2: rely on alpha ≥ 0.800; tentative
-// conclusions only from 0.667.
-constexpr double kRely = 0.800;
-constexpr double kTentative = 0.667;
-
 const QColor kSetsColour(0x44, 0x44, 0x44);
 const QColor kWarningColour(0xA3, 0x4A, 0x00);
 
@@ -112,8 +107,8 @@ void addThresholds(QChart *chart, double from, double to, QAbstractAxis *x, QAbs
         QString name;
         Qt::PenStyle style;
     } lines[] = {
-        {kRely, ReliabilityWindow::tr("0.800: rely on the variable"), Qt::DashLine},
-        {kTentative, ReliabilityWindow::tr("0.667: tentative conclusions only"), Qt::DotLine},
+        {kAlphaReliable, ReliabilityWindow::tr("0.800: rely on the variable"), Qt::DashLine},
+        {kAlphaTentative, ReliabilityWindow::tr("0.667: tentative conclusions only"), Qt::DotLine},
     };
     for (const auto &l : lines) {
         auto *s = new QLineSeries(chart);
@@ -151,12 +146,16 @@ void setAlphaRange(QValueAxis *y, double lowest)
 // A short verdict for the table (Krippendorff 2004, §12.2).
 QString shortVerdict(const std::optional<double> &alpha)
 {
-    if (!alpha)
+    switch (alphaBand(alpha)) {
+    case AlphaBand::Undefined:
         return ReliabilityWindow::tr("undefined");
-    if (*alpha >= kRely)
+    case AlphaBand::Reliable:
         return ReliabilityWindow::tr("reliable (≥ 0.800)");
-    if (*alpha >= kTentative)
+    case AlphaBand::Tentative:
         return ReliabilityWindow::tr("tentative (≥ 0.667)");
+    case AlphaBand::Unreliable:
+        break;
+    }
     return ReliabilityWindow::tr("unreliable (< 0.667)");
 }
 
@@ -578,14 +577,14 @@ void ReliabilityWindow::showSummary()
                     .arg(b.replicates)
                     .arg(b.seed));
             for (const auto &[alphaMin, share] : b.qBelow)
-                if (qFuzzyCompare(alphaMin, kRely))
+                if (qFuzzyCompare(alphaMin, kAlphaReliable))
                     m_summary->setItem(2, col, number(QString::number(share, 'f', 3)));
         } else {
             m_summary->setItem(1, col, number(QStringLiteral("–")));
             m_summary->setItem(2, col, number(QStringLiteral("–")));
         }
         auto *verdict = item(shortVerdict(rep.alpha.value));
-        if (rep.alpha.value && *rep.alpha.value < kTentative)
+        if (rep.alpha.value && *rep.alpha.value < kAlphaTentative)
             verdict->setForeground(kWarningColour);
         m_summary->setItem(3, col, verdict);
         m_summary->setItem(4, col,

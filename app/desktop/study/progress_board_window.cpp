@@ -2,6 +2,7 @@
 
 #include "app/desktop/function_style.h"
 #include "app/desktop/study/study_text.h"
+#include "core/agreement/agreement_report.h"
 #include "core/project/project.h"
 
 #include <QCheckBox>
@@ -188,17 +189,17 @@ void ProgressBoardWindow::refresh()
         QString text = studyCoefficient(row.agreement);
         auto *agreement = cell(text, Qt::AlignCenter);
         if (row.agreement) {
-            const double a = *row.agreement;
-            if (a >= 0.8) {
+            const AlphaBand band = alphaBand(row.agreement);
+            if (band == AlphaBand::Reliable) {
                 agreement->setText(QStringLiteral("✓ ") + text);
                 agreement->setForeground(good.darker(130));
-            } else if (a >= 0.667) {
+            } else if (band == AlphaBand::Tentative) {
                 agreement->setText(QStringLiteral("~ ") + text);
             } else {
                 agreement->setText(QStringLiteral("✗ ") + text);
                 agreement->setForeground(bad);
             }
-            agreement->setData(Qt::UserRole, a);
+            agreement->setData(Qt::UserRole, *row.agreement);
         }
         m_board->setItem(r, AgreementColumn, agreement);
         m_board->setItem(r, ComparedColumn, number(row.comparedArticles));

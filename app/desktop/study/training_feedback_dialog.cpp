@@ -2,6 +2,7 @@
 
 #include "app/desktop/function_style.h"
 #include "app/desktop/study/study_text.h"
+#include "core/agreement/agreement_report.h"
 #include "core/project/project.h"
 
 #include <QComboBox>
@@ -177,7 +178,7 @@ void TrainingFeedbackDialog::refresh()
         QString advice;
         if (f.units == 0)
             advice = tr("nothing to compare");
-        else if (f.alpha && *f.alpha >= 0.8)
+        else if (alphaBand(f.alpha) == AlphaBand::Reliable)
             advice = tr("close to the master");
         else if (f.coderUnits > f.masterUnits)
             advice = tr("you mark it more often than the master: re-read the exclusion rules");
