@@ -1,5 +1,7 @@
 #include "app/report/report_charts.h"
 
+#include "core/agreement/agreement_report.h"
+
 #include <QBuffer>
 #include <QCoreApplication>
 #include <QFont>
@@ -84,7 +86,7 @@ QColor agreementColour(double value)
         QColor colour;
     };
     static const Stop stops[] {{0.0, zero}, {0.5, QColor(0xCF, 0xDB, 0xE8)},
-        {0.667, QColor(0x8E, 0xAE, 0xD3)}, {0.8, QColor(0x3F, 0x6C, 0xA6)},
+        {kAlphaTentative, QColor(0x8E, 0xAE, 0xD3)}, {kAlphaReliable, QColor(0x3F, 0x6C, 0xA6)},
         {1.0, QColor(0x1D, 0x3F, 0x6E)}};
     for (size_t i = 1; i < std::size(stops); ++i)
         if (value <= stops[i].at)
@@ -110,10 +112,10 @@ void paintAlphaChart(QPainter &p, const std::vector<AlphaChartRow> &rows)
     auto x = [&](double v) { return left + (v - low) / (1.0 - low) * kPlotWidth; };
 
     // Krippendorff (2004, §12.2): rely on alpha ≥ 0.800, tentative conclusions from 0.667.
-    p.fillRect(QRectF(QPointF(x(0.667), plotTop), QPointF(x(0.800), plotBottom)),
+    p.fillRect(QRectF(QPointF(x(kAlphaTentative), plotTop), QPointF(x(kAlphaReliable), plotBottom)),
         QColor(0xF6, 0xEE, 0xD9));
-    p.fillRect(
-        QRectF(QPointF(x(0.800), plotTop), QPointF(x(1.0), plotBottom)), QColor(0xE4, 0xEF, 0xE6));
+    p.fillRect(QRectF(QPointF(x(kAlphaReliable), plotTop), QPointF(x(1.0), plotBottom)),
+        QColor(0xE4, 0xEF, 0xE6));
 
     // Grid and axis labels every 0.2.
     p.setFont(chartFont(11));
@@ -126,8 +128,8 @@ void paintAlphaChart(QPainter &p, const std::vector<AlphaChartRow> &rows)
             QString::number(v, 'f', 1));
     }
     for (const auto &[value, style, name] :
-        {std::tuple {0.667, Qt::DashLine, QStringLiteral("0.667")},
-            std::tuple {0.800, Qt::SolidLine, QStringLiteral("0.800")}}) {
+        {std::tuple {kAlphaTentative, Qt::DashLine, QStringLiteral("0.667")},
+            std::tuple {kAlphaReliable, Qt::SolidLine, QStringLiteral("0.800")}}) {
         p.setPen(QPen(QColor(0x55, 0x5B, 0x66), 1.4, style));
         p.drawLine(QPointF(x(value), plotTop - 6), QPointF(x(value), plotBottom));
         p.setPen(kInk);
