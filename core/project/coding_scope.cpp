@@ -3,8 +3,6 @@
 #include "core/project/project.h"
 #include "core/store/project_tables.h"
 
-#include <algorithm>
-
 namespace fourfold {
 
 namespace {
@@ -70,18 +68,6 @@ bool CodingScope::counts(ArticleId article, CoderId coder) const
 bool CodingScope::leftOut(ArticleId article, CoderId coder) const
 {
     return !m_options.includeUnfinished && state(article, coder) == CodingState::InProgress;
-}
-
-std::vector<std::pair<ArticleId, CoderId>> CodingScope::inProgress() const
-{
-    std::vector<std::pair<ArticleId, CoderId>> out;
-    for (auto it = m_states.cbegin(); it != m_states.cend(); ++it)
-        if (it.value() == CodingState::InProgress)
-            out.emplace_back(ArticleId {it.key().first}, CoderId {it.key().second});
-    std::ranges::sort(out, [](const auto &a, const auto &b) {
-        return std::pair(a.first.value, a.second.value) < std::pair(b.first.value, b.second.value);
-    });
-    return out;
 }
 
 } // namespace fourfold

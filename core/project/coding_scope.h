@@ -49,8 +49,6 @@ public:
     bool counts(ArticleId article, CoderId coder) const;
     // Whether the pair is in progress and left out by these options.
     bool leftOut(ArticleId article, CoderId coder) const;
-    // Every pair in progress (article, coder), ordered by article and coder.
-    std::vector<std::pair<ArticleId, CoderId>> inProgress() const;
 
     const CodingScopeOptions &options() const { return m_options; }
 

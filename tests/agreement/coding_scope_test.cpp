@@ -63,7 +63,7 @@ TEST_CASE("an article counts for a coder once the coder marked it done")
     markDone(f.project, f.f1, f.c1);
     CHECK(f.scope().state(f.f1, f.c1) == CodingState::Done);
     CHECK(f.scope().counts(f.f1, f.c1));
-    CHECK(f.scope().inProgress().empty());
+    CHECK_FALSE(f.scope().leftOut(f.f1, f.c1));
     // Nobody else's state moved.
     CHECK(f.scope().state(f.f1, f.c2) == CodingState::Untouched);
     CHECK(f.scope().state(f.f2, f.c1) == CodingState::Untouched);

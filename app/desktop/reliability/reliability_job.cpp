@@ -110,7 +110,7 @@ Result<ReliabilityOutcome> runReliabilityJob(
                 QString::fromStdString(out.unitizing->inputError));
         if (!steps.next())
             return cancelled();
-        auto matching = matchSpans(*project, base, steps.inner());
+        auto matching = matchSpans(*counted, base, steps.inner());
         if (!matching)
             return std::unexpected(matching.error());
         out.matching = std::move(*matching);
@@ -190,7 +190,7 @@ Result<ReliabilityOutcome> runReliabilityJob(
     if (!steps.next())
         return cancelled();
     if (request.unit != UnitKind::Article) {
-        auto matching = matchSpans(*project, base, steps.inner());
+        auto matching = matchSpans(*counted, base, steps.inner());
         if (!matching)
             return std::unexpected(matching.error());
         out.matching = std::move(*matching);
