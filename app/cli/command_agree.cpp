@@ -1,12 +1,8 @@
 // agree: inter-coder reliability of a raw matrix (--data FILE.csv) or of a project's codings.
 
 #include "app/cli/cli_output.h"
-#include "core/agreement/agreement_report.h"
-#include "core/agreement/diagnostics.h"
-#include "core/agreement/project_units.h"
+#include "core/agreement/agreement_run.h"
 #include "core/project/project.h"
-#include "core/reliability/span_scores.h"
-#include "core/reliability/unitizing_alpha.h"
 
 #include <QCoreApplication>
 #include <QJsonArray>
@@ -20,93 +16,28 @@ QString tr(const char *text)
     return QCoreApplication::translate("cli", text);
 }
 
-// Positive specific agreement per coder pair and function: strict span F1 (same boundaries) and
-// overlap F1 (any overlap), which are symmetric in the pair (Hripcsak & Rothschild 2005).
-struct PairSpanAgreement {
-    int a = 0, b = 0;
-    std::vector<std::optional<double>> strict, overlap; // per category
-};
-
-std::vector<PairSpanAgreement> spanAgreement(const ContinuumData &c)
+int runContinuum(const AgreementRun &run, const UnitSelection &selection, bool json)
 {
-    std::vector<PairSpanAgreement> out;
-    for (int a = 0; a < int(c.coders.size()); ++a)
-        for (int b = a + 1; b < int(c.coders.size()); ++b) {
-            PairSpanAgreement p;
-            p.a = a;
-            p.b = b;
-            for (int category = 0; category < c.categories; ++category) {
-                std::vector<reliability::LabelledSpan> ref, pred;
-                for (const reliability::ContinuumUnit &u : c.units)
-                    if (u.category == category && (u.coder == a || u.coder == b))
-                        (u.coder == a ? ref : pred)
-                            .push_back(reliability::LabelledSpan {0, 0, u.begin, u.end});
-                p.strict.push_back(
-                    reliability::scoreSpans(ref, pred, 1, reliability::MatchMode::Strict).micro.f1);
-                p.overlap.push_back(
-                    reliability::scoreSpans(ref, pred, 1, reliability::MatchMode::Type).micro.f1);
-            }
-            out.push_back(p);
-        }
-    return out;
-}
-
-int runContinuum(const CountedCodings &counted, const UnitSelection &selection, bool json)
-{
-    auto continuum = continuumData(counted, selection);
+    auto continuum = run.continuum(selection.function);
     if (!continuum)
         return report(continuum.error());
-    const reliability::UnitizingResult result = reliability::unitizingAlpha(0, continuum->length,
-        int(continuum->coders.size()), continuum->categories, continuum->units);
-    if (!result.inputError.empty())
-        return report(Error {ErrorCode::Internal, tr("The continuum could not be compared."),
-            QString::fromStdString(result.inputError), {}, 0, 0});
-    QStringList names;
-    if (selection.function)
-        names << functionKey(*selection.function);
-    else
-        for (FramingFunction f : kFramingFunctions)
-            names << functionKey(f);
+    const QStringList &names = continuum->categories;
+    const ContinuumData &data = continuum->data;
+    const reliability::UnitizingResult &result = continuum->unitizing;
     if (json) {
-        QJsonObject perFunction;
-        for (qsizetype i = 0; i < names.size() && size_t(i) < result.perCategory.size(); ++i)
-            perFunction.insert(names[i], unitizingJson(result.perCategory[size_t(i)]));
-        QJsonArray pairs;
-        for (const PairSpanAgreement &p : spanAgreement(*continuum)) {
-            QJsonObject per;
-            for (qsizetype i = 0; i < names.size(); ++i) {
-                const auto &strict = p.strict[size_t(i)];
-                const auto &overlap = p.overlap[size_t(i)];
-                per.insert(names[i],
-                    QJsonObject {
-                        {QStringLiteral("strict_f1"), strict ? QJsonValue(*strict) : QJsonValue()},
-                        {QStringLiteral("overlap_f1"),
-                            overlap ? QJsonValue(*overlap) : QJsonValue()}});
-            }
-            pairs.append(
-                QJsonObject {{QStringLiteral("coders"),
-                                 QJsonArray {continuum->coders[p.a], continuum->coders[p.b]}},
-                    {QStringLiteral("per_function"), per}});
-        }
-        printJson(QJsonObject {{QStringLiteral("unit"), QStringLiteral("continuum")},
-            {QStringLiteral("span_agreement"), pairs},
-            {QStringLiteral("coders"), QJsonArray::fromStringList(continuum->coders)},
-            {QStringLiteral("articles"), QJsonArray::fromStringList(continuum->articles)},
-            {QStringLiteral("length"), qint64(continuum->length)},
-            {QStringLiteral("left_out"), leftOutJson(counted.leftOut)},
-            {QStringLiteral("unitizing_alpha"),
-                QJsonObject {{QStringLiteral("per_function"), perFunction},
-                    {QStringLiteral("overall"), unitizingJson(result.overall)}}}});
+        QJsonObject o = continuumJson(*continuum);
+        o.insert(QStringLiteral("left_out"), leftOutJson(run.codings().leftOut));
+        printJson(o);
         return ExitOk;
     }
-    for (const QString &l : leftOutLines(counted.leftOut))
+    for (const QString &l : leftOutLines(run.codings().leftOut))
         out(tr("Left out      %1").arg(l));
     out(tr("Coders        %1 (%2)")
-            .arg(continuum->coders.size())
-            .arg(continuum->coders.join(QStringLiteral(", "))));
+            .arg(data.coders.size())
+            .arg(data.coders.join(QStringLiteral(", "))));
     out(tr("Continuum     %1 articles coded by all, %2 characters")
-            .arg(continuum->articles.size())
-            .arg(continuum->length));
+            .arg(data.articles.size())
+            .arg(data.length));
     auto line = [](const QString &name, const reliability::UnitizingCategoryResult &r) {
         return QStringLiteral("  %1 %2  %3")
             .arg(name, -12)
@@ -119,7 +50,7 @@ int runContinuum(const CountedCodings &counted, const UnitSelection &selection, 
     if (names.size() > 1)
         out(line(tr("all"), result.overall));
     out(tr("Positive specific agreement per pair (span F1: same boundaries / any overlap)"));
-    for (const PairSpanAgreement &p : spanAgreement(*continuum)) {
+    for (const PairSpanAgreement &p : continuum->pairs) {
         QStringList parts;
         for (qsizetype i = 0; i < names.size(); ++i)
             parts << QStringLiteral("%1 %2/%3")
@@ -129,7 +60,7 @@ int runContinuum(const CountedCodings &counted, const UnitSelection &selection, 
                          .arg(p.overlap[size_t(i)] ? QString::number(*p.overlap[size_t(i)], 'f', 2)
                                                    : QStringLiteral("–"));
         out(QStringLiteral("  %1 × %2  %3")
-                .arg(continuum->coders[p.a], continuum->coders[p.b],
+                .arg(data.coders[p.coderA], data.coders[p.coderB],
                     parts.join(QStringLiteral("  "))));
     }
     return ExitOk;
@@ -179,6 +110,57 @@ QStringList matchingText(const SpanMatching &m)
                      .arg(b.matches)
                      .arg(b.systematic ? tr("  systematic") : QString());
     return lines;
+}
+
+// Prints one analysed table: the agreement report, what was left out (for a project) and, with
+// `diagnostics`, where reliability is lost (span matching only for a project).
+int printAgreement(const AnalysisResult &analysed, const AgreementRun *run,
+    const std::vector<CountedCodings::LeftOut> *leftOut, bool json, bool diagnostics)
+{
+    const AgreementReport &result = analysed.report;
+    const auto withLeftOut = [&](QJsonObject o) {
+        if (leftOut)
+            o.insert(QStringLiteral("left_out"), leftOutJson(*leftOut));
+        return o;
+    };
+    const QString leftOutText =
+        leftOut ? leftOutLines(*leftOut).join(QLatin1Char('\n')) : QString();
+    if (!diagnostics) {
+        if (json)
+            printJson(withLeftOut(agreementJson(result)));
+        else
+            out(leftOutText.isEmpty() ? agreementText(result)
+                                      : agreementText(result) + QLatin1Char('\n') + leftOutText);
+        return ExitOk;
+    }
+    auto costs = leaveOneOutCosts(analysed);
+    if (!costs)
+        return report(costs.error());
+    std::optional<SpanMatching> matching;
+    if (run) {
+        auto matched = run->matching();
+        if (!matched)
+            return report(matched.error());
+        matching = std::move(*matched);
+    }
+    if (json) {
+        QJsonObject o = withLeftOut(agreementJson(result));
+        o.insert(QStringLiteral("diagnostics"),
+            diagnosticsJson(costs->coders, costs->articles, matching ? &*matching : nullptr));
+        printJson(o);
+        return ExitOk;
+    }
+    QStringList lines {agreementText(result)};
+    if (!leftOutText.isEmpty())
+        lines << leftOutText;
+    lines << tr("Alpha without each coder (costliest first; change = without − with all)");
+    lines << leaveOneOutText(costs->coders);
+    lines << tr("Alpha without each article (costliest first)");
+    lines << leaveOneOutText(costs->articles);
+    if (matching)
+        lines << matchingText(*matching);
+    out(lines.join(QLatin1Char('\n')));
+    return ExitOk;
 }
 
 } // namespace
@@ -284,12 +266,9 @@ int runAgree(const QStringList &arguments)
                 tr("unknown distance \"%1\" (expected jaccard or masi).")
                     .arg(parser.value(distance)));
     }
+    const bool encodingGiven = parser.isSet(level) || parser.isSet(order) || parser.isSet(distance);
 
-    ReliabilityTable table;
-    QString scale;
-    std::optional<Project> openProject;
-    UnitSelection selection;
-    std::vector<CountedCodings::LeftOut> leftOut;
+    // A raw matrix from a file: its table is compared as it stands.
     if (parser.isSet(data)) {
         if (!parser.positionalArguments().isEmpty())
             return usageError(command, tr("give either --data FILE or a project, not both."));
@@ -298,119 +277,68 @@ int runAgree(const QStringList &arguments)
         auto read = readReliabilityTable(parser.value(data));
         if (!read)
             return report(read.error());
-        table = std::move(*read);
-    } else {
-        if (parser.positionalArguments().size() != 1)
-            return usageError(command, tr("expected a project file, or --data FILE."));
-        if (!parser.isSet(unit))
+        auto analysed = analyseTable(std::move(*read), encoding, agreementOptions);
+        if (!analysed)
+            return report(analysed.error());
+        return printAgreement(
+            *analysed, nullptr, nullptr, parser.isSet(json), parser.isSet(diagnostics));
+    }
+
+    if (parser.positionalArguments().size() != 1)
+        return usageError(command, tr("expected a project file, or --data FILE."));
+    if (!parser.isSet(unit))
+        return usageError(command,
+            tr("with a project, say which units to compare: --unit "
+               "article|paragraph|sentence|token|span|continuum."));
+    const auto kind = unitKindFromKey(parser.value(unit));
+    if (!kind)
+        return usageError(command, tr("unknown unit \"%1\".").arg(parser.value(unit)));
+    UnitSelection selection;
+    AnalysisRequest request;
+    request.unit = *kind;
+    if (parser.value(function) != QLatin1String("all")) {
+        request.function = functionFromKey(parser.value(function));
+        if (!request.function)
             return usageError(command,
-                tr("with a project, say which units to compare: --unit "
-                   "article|paragraph|sentence|token|span|continuum."));
-        const auto kind = unitKindFromKey(parser.value(unit));
-        if (!kind)
-            return usageError(command, tr("unknown unit \"%1\".").arg(parser.value(unit)));
-        selection.unit = *kind;
-        if (parser.value(function) != QLatin1String("all")) {
-            selection.function = functionFromKey(parser.value(function));
-            if (!selection.function)
-                return usageError(command,
-                    tr("unknown function \"%1\" (expected problem, cause, evaluation, remedy or "
-                       "all).")
-                        .arg(parser.value(function)));
-        }
-        if (parser.isSet(coders))
-            selection.coders = parser.value(coders).split(QLatin1Char(','), Qt::SkipEmptyParts);
-        if (parser.isSet(phase)) {
-            selection.phase = phaseFromKey(parser.value(phase));
-            if (!selection.phase)
-                return usageError(command, tr("unknown phase \"%1\".").arg(parser.value(phase)));
-        }
-        selection.item = parser.value(item);
-        selection.attribute = parser.value(attribute);
-        selection.includeGold = parser.isSet(withGold);
-        selection.includeUnfinished = parser.isSet(includeUnfinished);
-        if (parser.isSet(articles))
-            selection.articles = parser.value(articles).split(QLatin1Char(','), Qt::SkipEmptyParts);
-        auto opened = Project::open(parser.positionalArguments().first());
-        if (!opened)
-            return report(opened.error());
-        openProject = std::move(*opened);
-        Project *project = &*openProject;
-        // Span attributes and article items take their level and value order from the codebook
-        // unless the command line says otherwise.
-        if (!parser.isSet(level) && !parser.isSet(order)) {
-            auto book = project->codebook();
-            if (!book)
-                return report(book.error());
-            if (auto st = applyCodebookLevel(*book, selection, encoding); !st)
-                return usageError(command, st.error().message);
-        }
-        auto counted = countedCodings(*project, selection);
-        if (!counted)
-            return report(counted.error());
-        if (selection.unit == UnitKind::Continuum)
-            return runContinuum(*counted, selection, parser.isSet(json));
-        leftOut = counted->leftOut;
-        auto built = unitTable(*project, *counted, selection);
-        if (!built)
-            return report(built.error());
-        table = std::move(*built);
-        if (selection.unit != UnitKind::Article && selection.unit != UnitKind::Span
-            && !selection.function && !encoding.distance)
-            encoding.distance = reliability::SetDistance::Masi;
+                tr("unknown function \"%1\" (expected problem, cause, evaluation, remedy or "
+                   "all).")
+                    .arg(parser.value(function)));
     }
-    scale = encoding.distance ? setDistanceKey(*encoding.distance) : levelKey(encoding.level);
-    auto encoded = encodeTable(table, encoding);
-    if (!encoded)
-        return report(encoded.error());
-    const AgreementReport result =
-        computeAgreement(*encoded, table.coders, scale, agreementOptions);
-    // What was left out (articles in progress) goes beside the figures, for a project.
-    const auto withLeftOut = [&](QJsonObject o) {
-        if (openProject)
-            o.insert(QStringLiteral("left_out"), leftOutJson(leftOut));
-        return o;
-    };
-    const QString leftOutText = leftOutLines(leftOut).join(QLatin1Char('\n'));
-    if (!parser.isSet(diagnostics)) {
-        if (parser.isSet(json))
-            printJson(withLeftOut(agreementJson(result)));
-        else
-            out(leftOutText.isEmpty() ? agreementText(result)
-                                      : agreementText(result) + QLatin1Char('\n') + leftOutText);
-        return ExitOk;
+    if (parser.isSet(coders))
+        selection.coders = parser.value(coders).split(QLatin1Char(','), Qt::SkipEmptyParts);
+    if (parser.isSet(phase)) {
+        selection.phase = phaseFromKey(parser.value(phase));
+        if (!selection.phase)
+            return usageError(command, tr("unknown phase \"%1\".").arg(parser.value(phase)));
     }
-    auto coderCosts = leaveOneCoderOut(*encoded, table.coders);
-    if (!coderCosts)
-        return report(coderCosts.error());
-    auto articleCosts = leaveOneArticleOut(*encoded, table.units);
-    if (!articleCosts)
-        return report(articleCosts.error());
-    std::optional<SpanMatching> matching;
-    if (openProject) {
-        auto matched = matchSpans(*openProject, selection);
-        if (!matched)
-            return report(matched.error());
-        matching = std::move(*matched);
+    request.item = parser.value(item);
+    request.attribute = parser.value(attribute);
+    // Span attributes and article items take their level and value order from the codebook
+    // unless the command line gives an encoding.
+    if (encodingGiven)
+        request.encoding = encoding;
+    selection.includeGold = parser.isSet(withGold);
+    selection.includeUnfinished = parser.isSet(includeUnfinished);
+    if (parser.isSet(articles))
+        selection.articles = parser.value(articles).split(QLatin1Char(','), Qt::SkipEmptyParts);
+    auto project = Project::open(parser.positionalArguments().first());
+    if (!project)
+        return report(project.error());
+    auto run = AgreementRun::load(*project, selection);
+    if (!run)
+        return report(run.error());
+    if (request.unit == UnitKind::Continuum) {
+        selection.function = request.function;
+        return runContinuum(*run, selection, parser.isSet(json));
     }
-    if (parser.isSet(json)) {
-        QJsonObject o = withLeftOut(agreementJson(result));
-        o.insert(QStringLiteral("diagnostics"),
-            diagnosticsJson(*coderCosts, *articleCosts, matching ? &*matching : nullptr));
-        printJson(o);
-        return ExitOk;
-    }
-    QStringList lines {agreementText(result)};
-    if (!leftOutText.isEmpty())
-        lines << leftOutText;
-    lines << tr("Alpha without each coder (costliest first; change = without − with all)");
-    lines << leaveOneOutText(*coderCosts);
-    lines << tr("Alpha without each article (costliest first)");
-    lines << leaveOneOutText(*articleCosts);
-    if (matching)
-        lines << matchingText(*matching);
-    out(lines.join(QLatin1Char('\n')));
-    return ExitOk;
+    if (!encodingGiven)
+        if (auto checked = encodingFor(run->codebook(), request); !checked)
+            return usageError(command, checked.error().message);
+    auto analysed = run->analyse(request, agreementOptions);
+    if (!analysed)
+        return report(analysed.error());
+    return printAgreement(
+        *analysed, &*run, &run->codings().leftOut, parser.isSet(json), parser.isSet(diagnostics));
 }
 
 } // namespace fourfold::cli

@@ -1,11 +1,8 @@
 #include "app/report/report_data.h"
 
-#include "core/agreement/agreement_report.h"
-#include "core/agreement/diagnostics.h"
-#include "core/agreement/value_encoding.h"
+#include "core/agreement/agreement_run.h"
 #include "core/project/project.h"
 #include "core/project/study_design.h"
-#include "core/reliability/unitizing_alpha.h"
 
 #include <QCoreApplication>
 #include <QDateTime>
@@ -40,43 +37,26 @@ QStringList commonArguments(const ReportOptions &options, bool bootstrap)
     return args;
 }
 
-// What `fourfold-cli agree` computes for a project selection (app/cli/command_agree.cpp): the
-// level comes from the codebook for span attributes and article items (only an ordinal level
-// changes the encoding), and units carrying all four functions are sets compared with MASI.
-// With `matching` (the span matching of the selection, the same for every function), the
-// diagnostics are added as `agree --diagnostics` writes them.
-Result<QJsonObject> agreeJson(const Project &project, const CountedCodings &counted,
-    const Codebook &book, const UnitSelection &selection, const ReportOptions &options,
-    const SpanMatching *matching = nullptr)
+// What `fourfold-cli agree --json` prints for one analysis of the run; with `matching` (the span
+// matching of the selection, the same for every function) the diagnostics are added as
+// `agree --diagnostics` writes them.
+Result<QJsonObject> agreeJson(const AgreementRun &run, const AnalysisRequest &request,
+    const ReportOptions &options, const SpanMatching *matching = nullptr)
 {
-    EncodingOptions encoding;
-    FOURFOLD_TRY_STATUS(applyCodebookLevel(book, selection, encoding));
-    auto table = unitTable(project, counted, selection);
-    if (!table)
-        return std::unexpected(table.error());
-    if (selection.unit != UnitKind::Article && selection.unit != UnitKind::Span
-        && !selection.function)
-        encoding.distance = reliability::SetDistance::Masi;
-    const QString scale =
-        encoding.distance ? setDistanceKey(*encoding.distance) : levelKey(encoding.level);
-    auto encoded = encodeTable(*table, encoding);
-    if (!encoded)
-        return std::unexpected(encoded.error());
     AgreementOptions agreementOptions;
     agreementOptions.bootstrapReplicates = options.bootstrapReplicates;
     agreementOptions.seed = options.seed;
-    QJsonObject json =
-        agreementJson(computeAgreement(*encoded, table->coders, scale, agreementOptions));
+    auto analysed = run.analyse(request, agreementOptions);
+    if (!analysed)
+        return std::unexpected(analysed.error());
+    QJsonObject json = agreementJson(analysed->report);
     if (!matching)
         return json;
-    auto coderCosts = leaveOneCoderOut(*encoded, table->coders);
-    if (!coderCosts)
-        return std::unexpected(coderCosts.error());
-    auto articleCosts = leaveOneArticleOut(*encoded, table->units);
-    if (!articleCosts)
-        return std::unexpected(articleCosts.error());
+    auto costs = leaveOneOutCosts(*analysed);
+    if (!costs)
+        return std::unexpected(costs.error());
     json.insert(
-        QStringLiteral("diagnostics"), diagnosticsJson(*coderCosts, *articleCosts, matching));
+        QStringLiteral("diagnostics"), diagnosticsJson(costs->coders, costs->articles, matching));
     return json;
 }
 
@@ -90,30 +70,6 @@ QString drawText(const Draw &draw)
               "articles with no earlier assignment, on %6.")
         .arg(QString::number(draw.articles.size()), phaseKey(draw.phase), how,
             QString::number(draw.seed), QString::number(draw.frameArticles), draw.drawnAt.left(10));
-}
-
-// agree --unit continuum --json without its span_agreement part.
-Result<QJsonObject> continuumJson(const CountedCodings &counted, const UnitSelection &selection)
-{
-    auto continuum = continuumData(counted, selection);
-    if (!continuum)
-        return std::unexpected(continuum.error());
-    const reliability::UnitizingResult result = reliability::unitizingAlpha(0, continuum->length,
-        int(continuum->coders.size()), continuum->categories, continuum->units);
-    if (!result.inputError.empty())
-        return fail(ErrorCode::Internal, tr("The continuum could not be compared."),
-            QString::fromStdString(result.inputError));
-    QJsonObject perFunction;
-    for (FramingFunction f : kFramingFunctions)
-        if (size_t(f) < result.perCategory.size())
-            perFunction.insert(functionKey(f), unitizingJson(result.perCategory[size_t(f)]));
-    return QJsonObject {{QStringLiteral("unit"), QStringLiteral("continuum")},
-        {QStringLiteral("coders"), QJsonArray::fromStringList(continuum->coders)},
-        {QStringLiteral("articles"), QJsonArray::fromStringList(continuum->articles)},
-        {QStringLiteral("length"), qint64(continuum->length)},
-        {QStringLiteral("unitizing_alpha"),
-            QJsonObject {{QStringLiteral("per_function"), perFunction},
-                {QStringLiteral("overall"), unitizingJson(result.overall)}}}};
 }
 
 QString functionLabel(const Codebook &book, FramingFunction f)
@@ -207,32 +163,30 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     d.generatedAt = QDateTime::currentDateTimeUtc().toString(Qt::ISODate);
     d.program = QStringLiteral("Fourfold %1").arg(QCoreApplication::applicationVersion());
 
-    auto book = project.codebook();
-    if (!book)
-        return std::unexpected(book.error());
-    d.codebookNumber = book->number;
-    d.codebookName = book->name;
-
     UnitSelection base;
     base.phase = options.phase;
     base.coders = options.coders;
     base.includeUnfinished = options.includeUnfinished;
     const QStringList common = commonArguments(options, true);
     // One read of the codings that count serves every analysis.
-    auto counted = countedCodings(project, base);
-    if (!counted)
-        return std::unexpected(counted.error());
+    auto run = AgreementRun::load(project, base);
+    if (!run)
+        return std::unexpected(run.error());
+    const Codebook *book = &run->codebook();
+    const CountedCodings *counted = &run->codings();
+    d.codebookNumber = book->number;
+    d.codebookName = book->name;
 
     // Span matching looks at all four functions whatever the selection says: once for all.
-    auto matching = matchSpans(*counted, base);
+    auto matching = run->matching();
     if (!matching)
         return std::unexpected(matching.error());
     // The four functions, one binary variable each, then all four as one set-valued variable.
     for (FramingFunction f : kFramingFunctions) {
-        UnitSelection s = base;
-        s.unit = options.unit;
-        s.function = f;
-        auto json = agreeJson(project, *counted, *book, s, options, &*matching);
+        AnalysisRequest r;
+        r.unit = options.unit;
+        r.function = f;
+        auto json = agreeJson(*run, r, options, &*matching);
         if (!json)
             return std::unexpected(json.error());
         d.analyses.push_back({QStringLiteral("function-%1").arg(functionKey(f)),
@@ -243,9 +197,9 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
             *json, {}});
     }
     {
-        UnitSelection s = base;
-        s.unit = options.unit;
-        auto json = agreeJson(project, *counted, *book, s, options);
+        AnalysisRequest r;
+        r.unit = options.unit;
+        auto json = agreeJson(*run, r, options);
         if (!json)
             return std::unexpected(json.error());
         d.analyses.push_back({QStringLiteral("functions"), tr("All four functions (MASI)"),
@@ -255,10 +209,10 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     // Article-level items and the spans' choice attributes: their own errors do not stop the
     // report (an attribute nobody filled in has no units).
     for (const ArticleItem &item : book->items) {
-        UnitSelection s = base;
-        s.unit = UnitKind::Article;
-        s.item = item.key;
-        auto json = agreeJson(project, *counted, *book, s, options);
+        AnalysisRequest r;
+        r.unit = UnitKind::Article;
+        r.item = item.key;
+        auto json = agreeJson(*run, r, options);
         d.analyses.push_back({QStringLiteral("item-%1").arg(item.key),
             item.question.isEmpty() ? item.key : item.question,
             QString(item.key).replace(QLatin1Char('_'), QLatin1Char(' ')), QStringLiteral("item"),
@@ -271,11 +225,11 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
         for (const AttributeSpec &a : book->definition(f).attributes) {
             if (a.type != AttributeSpec::Type::Choice)
                 continue;
-            UnitSelection s = base;
-            s.unit = UnitKind::Span;
-            s.function = f;
-            s.attribute = a.key;
-            auto json = agreeJson(project, *counted, *book, s, options);
+            AnalysisRequest r;
+            r.unit = UnitKind::Span;
+            r.function = f;
+            r.attribute = a.key;
+            auto json = agreeJson(*run, r, options);
             d.analyses.push_back({QStringLiteral("attribute-%1-%2").arg(functionKey(f), a.key),
                 QStringLiteral("%1: %2").arg(
                     functionLabel(*book, f), a.label.isEmpty() ? a.key : a.label),
@@ -287,9 +241,9 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
                 json ? *json : QJsonObject {}, json ? QString() : json.error().message});
         }
     {
-        UnitSelection s = base;
-        s.unit = UnitKind::Continuum;
-        auto json = continuumJson(*counted, s);
+        auto continuum = run->continuum(std::nullopt);
+        auto json = continuum ? Result<QJsonObject>(continuumJson(*continuum))
+                              : Result<QJsonObject>(std::unexpected(continuum.error()));
         d.analyses.push_back({QStringLiteral("continuum"), tr("Spans on the continuum"),
             tr("continuum"), QStringLiteral("continuum"),
             QStringList {QStringLiteral("--unit"), QStringLiteral("continuum")}

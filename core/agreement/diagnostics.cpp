@@ -327,8 +327,6 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
     const UnitSelection &selection, const ReliabilityTable &table, const EncodingOptions &encoding,
     PeriodKind kind, int batchSize, const DiagnosticsProgress &progress)
 {
-    if (batchSize < 1)
-        return fail(ErrorCode::InvalidArgument, tr("A batch holds at least one article."));
     // The codings that count, as the table was built from them.
     UnitSelection counting = selection;
     counting.coders = table.coders;
@@ -337,8 +335,17 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
     auto counted = countedCodings(project, counting);
     if (!counted)
         return std::unexpected(counted.error());
+    return alphaByPeriod(*counted, table, encoding, kind, batchSize, progress);
+}
+
+Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
+    const ReliabilityTable &table, const EncodingOptions &encoding, PeriodKind kind, int batchSize,
+    const DiagnosticsProgress &progress)
+{
+    if (batchSize < 1)
+        return fail(ErrorCode::InvalidArgument, tr("A batch holds at least one article."));
     QHash<qint64, QString> externalId;
-    for (const ArticleSummary &a : counted->articles)
+    for (const ArticleSummary &a : counted.articles)
         externalId.insert(a.id.value, a.externalId);
 
     // The first coding of each article: (time, row id) so that equal times keep a stable order.
@@ -350,10 +357,13 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
         if (it == first.end() || key < it->second)
             first[id] = key;
     };
-    for (const Annotation &a : counted->annotations)
-        note(a.article.value, a.createdAt, a.id.value);
-    for (const Judgement &j : counted->judgements)
-        note(j.article.value, j.createdAt, j.id.value);
+    // Gold (a negative coder id) is no coder's first coding.
+    for (const Annotation &a : counted.annotations)
+        if (a.coder.value >= 0)
+            note(a.article.value, a.createdAt, a.id.value);
+    for (const Judgement &j : counted.judgements)
+        if (j.coder.value >= 0)
+            note(j.article.value, j.createdAt, j.id.value);
 
     // Articles of the table with a pairable unit (two coders' values), in coding order: an
     // article only one coder has finished adds nothing a period could compare.

@@ -133,5 +133,9 @@ struct PeriodAlpha {
 Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
     const UnitSelection &selection, const ReliabilityTable &table, const EncodingOptions &encoding,
     PeriodKind kind, int batchSize = 3, const DiagnosticsProgress &progress = {});
+// The same on codings already read for the table's selection (gold's codings are skipped).
+Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &codings,
+    const ReliabilityTable &table, const EncodingOptions &encoding, PeriodKind kind,
+    int batchSize = 3, const DiagnosticsProgress &progress = {});
 
 } // namespace fourfold

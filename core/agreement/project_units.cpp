@@ -230,6 +230,54 @@ const QString &setLabel(unsigned mask)
     return labels[mask & 15u];
 }
 
+// Units of one article's segmentation: per unit and coder, "present"/"absent" for one function
+// or the set of functions of the spans that overlap it; missing where the coder's coding of the
+// article does not count.
+void addSegmentUnits(ReliabilityTable &table, const ArticleSummary &summary,
+    const std::vector<TextRange> &units,
+    const std::map<std::pair<qint64, int>, std::vector<const Annotation *>> &spans,
+    const CountedCodings &s, const UnitSelection &sel, const QString &prefix)
+{
+    const qint64 articleId = summary.id.value;
+    const qsizetype coders = table.coders.size();
+    // masks[unit * coders + coder]: bit f set when a span of function f overlaps the unit.
+    std::vector<unsigned> masks(units.size() * size_t(coders), 0);
+    for (qsizetype c = 0; c < coders; ++c) {
+        auto it = spans.find({articleId, int(c)});
+        if (it == spans.end())
+            continue;
+        for (const Annotation *a : it->second) {
+            const TextRange r = a->content.range;
+            // Units are sorted and disjoint: find the first that ends after the span starts.
+            auto first = std::partition_point(
+                units.begin(), units.end(), [&](const TextRange &u) { return u.end <= r.start; });
+            for (auto u = first; u != units.end() && u->start < r.end; ++u)
+                masks[size_t(u - units.begin()) * size_t(coders) + size_t(c)] |= 1u
+                    << unsigned(a->content.function);
+        }
+    }
+    std::vector<bool> counted(size_t(coders), false);
+    for (qsizetype c = 0; c < coders; ++c)
+        counted[size_t(c)] = s.counts(articleId, s.coders[size_t(c)].id.value);
+    static const QString present = QStringLiteral("present");
+    static const QString absent = QStringLiteral("absent");
+    for (size_t u = 0; u < units.size(); ++u) {
+        QStringList row;
+        row.reserve(coders);
+        for (qsizetype c = 0; c < coders; ++c) {
+            const unsigned mask = masks[u * size_t(coders) + size_t(c)];
+            if (!counted[size_t(c)])
+                row << QString();
+            else if (sel.function)
+                row << (mask ? present : absent);
+            else
+                row << setLabel(mask);
+        }
+        table.units << summary.externalId + prefix + QString::number(u + 1);
+        table.cells.push_back(std::move(row));
+    }
+}
+
 } // namespace
 
 QString unitKindKey(UnitKind kind)
@@ -289,18 +337,20 @@ Result<ReliabilityTable> unitTable(
         if (!sel.function || a.content.function == *sel.function)
             spans[{a.article.value, s.coderIndex.value(a.coder.value)}].push_back(&a);
 
-    for (const ArticleSummary &summary : s.articles) {
-        const qint64 articleId = summary.id.value;
-        bool anyCoder = false;
+    // The selected articles some selected coder's coding counts on, in project (id) order.
+    std::vector<const ArticleSummary *> coded;
+    for (const ArticleSummary &summary : s.articles)
         for (const Coder &c : s.coders)
-            anyCoder = anyCoder || s.counts(articleId, c.id.value);
-        if (!anyCoder)
-            continue;
+            if (s.counts(summary.id.value, c.id.value)) {
+                coded.push_back(&summary);
+                break;
+            }
 
-        if (sel.unit == UnitKind::Span) {
+    if (sel.unit == UnitKind::Span) {
+        for (const ArticleSummary *summary : coded) {
             std::vector<const Annotation *> articleSpans;
             for (qsizetype c = 0; c < coders; ++c)
-                if (auto it = spans.find({articleId, int(c)}); it != spans.end())
+                if (auto it = spans.find({summary->id.value, int(c)}); it != spans.end())
                     articleSpans.insert(articleSpans.end(), it->second.begin(), it->second.end());
             std::sort(articleSpans.begin(), articleSpans.end(),
                 [](const Annotation *a, const Annotation *b) {
@@ -308,72 +358,41 @@ Result<ReliabilityTable> unitTable(
                         < std::pair(b->content.range.start, b->id.value);
                 });
             addSpanUnits(
-                table, summary.externalId, articleSpans, s.coderIndex, sel.attribute, coders);
-            continue;
+                table, summary->externalId, articleSpans, s.coderIndex, sel.attribute, coders);
         }
-        if (sel.unit == UnitKind::Article) {
-            QStringList row(coders, QString());
-            for (const Judgement &j : s.judgements)
-                if (j.article.value == articleId && j.itemKey == sel.item)
-                    row[s.coderIndex.value(j.coder.value)] = j.value;
-            table.units << summary.externalId;
-            table.cells.push_back(row);
-            continue;
-        }
-
-        auto article = project.article(summary.id);
-        if (!article)
-            return std::unexpected(article.error());
-        std::vector<TextRange> units;
-        QString prefix;
-        switch (sel.unit) {
-        case UnitKind::Paragraph:
-            for (const Paragraph &p : article->paragraphs)
-                units.push_back(p.range);
-            prefix = QStringLiteral("#p");
-            break;
-        case UnitKind::Sentence:
-            units = article->sentences;
-            prefix = QStringLiteral("#s");
-            break;
-        default:
-            units = article->tokens;
-            prefix = QStringLiteral("#t");
-            break;
-        }
-        // masks[unit][coder]: bit f set when a span of function f overlaps the unit.
-        std::vector<std::vector<unsigned>> masks(
-            units.size(), std::vector<unsigned>(size_t(coders), 0));
-        for (qsizetype c = 0; c < coders; ++c) {
-            auto it = spans.find({articleId, int(c)});
-            if (it == spans.end())
-                continue;
-            for (const Annotation *a : it->second) {
-                const TextRange r = a->content.range;
-                // Units are sorted and disjoint: find the first that ends after the span starts.
-                auto first = std::partition_point(units.begin(), units.end(),
-                    [&](const TextRange &u) { return u.end <= r.start; });
-                for (auto u = first; u != units.end() && u->start < r.end; ++u)
-                    masks[size_t(u - units.begin())][size_t(c)] |= 1u
-                        << unsigned(a->content.function);
+    } else if (sel.unit == UnitKind::Article) {
+        QHash<qint64, QStringList> answers; // article → one answer per coder
+        for (const Judgement &j : s.judgements)
+            if (j.itemKey == sel.item) {
+                auto it = answers.find(j.article.value);
+                if (it == answers.end())
+                    it = answers.insert(j.article.value, QStringList(coders, QString()));
+                (*it)[s.coderIndex.value(j.coder.value)] = j.value;
             }
+        for (const ArticleSummary *summary : coded) {
+            table.units << summary->externalId;
+            table.cells.push_back(answers.value(summary->id.value, QStringList(coders, QString())));
         }
-        for (size_t u = 0; u < units.size(); ++u) {
-            QStringList row;
-            row.reserve(coders);
-            for (qsizetype c = 0; c < coders; ++c) {
-                if (!s.counts(articleId, s.coders[size_t(c)].id.value)) {
-                    row << QString();
-                } else if (sel.function) {
-                    row << (masks[u][size_t(c)] ? QStringLiteral("present")
-                                                : QStringLiteral("absent"));
-                } else {
-                    row << setLabel(masks[u][size_t(c)]);
-                }
-            }
-            table.units << summary.externalId + prefix + QString::number(u + 1);
-            table.cells.push_back(row);
-        }
+    } else {
+        // Paragraphs, sentences or tokens: the segmentation of every article streamed from one
+        // statement in id order, the order of `coded`.
+        QHash<qint64, const ArticleSummary *> wanted;
+        for (const ArticleSummary *summary : coded)
+            wanted.insert(summary->id.value, summary);
+        const SegmentKind kind = sel.unit == UnitKind::Paragraph ? SegmentKind::Paragraphs
+            : sel.unit == UnitKind::Sentence                     ? SegmentKind::Sentences
+                                                                 : SegmentKind::Tokens;
+        const QString prefix = sel.unit == UnitKind::Paragraph ? QStringLiteral("#p")
+            : sel.unit == UnitKind::Sentence                   ? QStringLiteral("#s")
+                                                               : QStringLiteral("#t");
+        FOURFOLD_TRY_STATUS(project.forEachSegmentation(
+            kind, [&](ArticleId id, std::vector<TextRange> &&units) -> Status {
+                const ArticleSummary *summary = wanted.value(id.value);
+                if (!summary)
+                    return {};
+                addSegmentUnits(table, *summary, units, spans, s, sel, prefix);
+                return {};
+            }));
     }
     if (table.units.isEmpty())
         return fail(ErrorCode::NotFound,

@@ -30,6 +30,9 @@ struct Paragraph {
     ParagraphRole role = ParagraphRole::Body;
 };
 
+// The frozen segmentations of an article's text.
+enum class SegmentKind { Paragraphs, Sentences, Tokens };
+
 struct Article {
     ArticleSummary summary;
     QString text; // canonical: NFC, LF

@@ -126,6 +126,12 @@ Result<Article> Project::article(ArticleId id) const
     return store::article(m_db, id);
 }
 
+Status Project::forEachSegmentation(SegmentKind kind,
+    const std::function<Status(ArticleId, std::vector<TextRange> &&)> &visit) const
+{
+    return store::forEachSegmentation(m_db, kind, visit);
+}
+
 Result<std::optional<ArticleId>> Project::articleByExternalId(const QString &externalId) const
 {
     return store::articleIdByExternalId(m_db, externalId);

@@ -64,6 +64,10 @@ public:
 
     Result<std::vector<ArticleSummary>> articles() const;
     Result<Article> article(ArticleId id) const;
+    // One segmentation of every article, streamed in article id order from one statement (see
+    // store::forEachSegmentation): what a table of units over thousands of articles reads.
+    Status forEachSegmentation(SegmentKind kind,
+        const std::function<Status(ArticleId, std::vector<TextRange> &&)> &visit) const;
     Result<std::optional<ArticleId>> articleByExternalId(const QString &externalId) const;
     // Full-text search over titles and texts (SQLite FTS5 syntax), best match first.
     Result<std::vector<ArticleId>> searchArticles(const QString &query) const;

@@ -171,6 +171,51 @@ Result<Article> article(const Database &db, ArticleId id)
     return a;
 }
 
+Status forEachSegmentation(const Database &db, SegmentKind kind,
+    const std::function<Status(ArticleId, std::vector<TextRange> &&)> &visit)
+{
+    if (kind == SegmentKind::Paragraphs) {
+        auto stmt = db.prepare(QStringLiteral(
+            "SELECT article_id, start, end FROM paragraph ORDER BY article_id, idx"));
+        if (!stmt)
+            return std::unexpected(stmt.error());
+        std::vector<TextRange> ranges;
+        qint64 current = 0;
+        while (true) {
+            auto row = stmt->step();
+            if (!row)
+                return std::unexpected(row.error());
+            const qint64 article = *row ? stmt->columnInt(0) : 0;
+            if (!ranges.empty() && (!*row || article != current))
+                FOURFOLD_TRY_STATUS(visit(ArticleId {current}, std::move(ranges)));
+            if (!*row)
+                return {};
+            if (article != current)
+                ranges.clear();
+            current = article;
+            ranges.push_back(TextRange {stmt->columnInt(1), stmt->columnInt(2)});
+        }
+    }
+    auto stmt = db.prepare(QStringLiteral("SELECT article_id, %1 FROM article_units ORDER BY "
+                                          "article_id")
+                               .arg(kind == SegmentKind::Sentences ? QStringLiteral("sentences")
+                                                                    : QStringLiteral("tokens")));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    while (true) {
+        auto row = stmt->step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            return {};
+        auto ranges = decodeRanges(stmt->columnBlob(1));
+        if (!ranges)
+            return std::unexpected(ranges.error());
+        if (!ranges->empty())
+            FOURFOLD_TRY_STATUS(visit(ArticleId {stmt->columnInt(0)}, std::move(*ranges)));
+    }
+}
+
 Result<QString> articleText(const Database &db, ArticleId id)
 {
     auto stmt = db.prepare(QStringLiteral("SELECT text FROM article WHERE id = ?1"));

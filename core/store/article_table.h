@@ -4,6 +4,7 @@
 #include "core/model/article.h"
 #include "core/model/error.h"
 
+#include <functional>
 #include <optional>
 #include <vector>
 
@@ -21,6 +22,11 @@ Result<ArticleId> insertArticle(Database &db, const Article &article);
 Result<std::vector<ArticleSummary>> articleSummaries(const Database &db);
 // One article with its text and segmentation; NotFound if there is none with `id`.
 Result<Article> article(const Database &db, ArticleId id);
+// Streams one segmentation of every article (live or not) in article id order: `visit` gets each
+// article's ranges in text order, from one statement (articles without ranges are not visited).
+// Stops at and returns the first error of `visit` or of the file.
+Status forEachSegmentation(const Database &db, SegmentKind kind,
+    const std::function<Status(ArticleId, std::vector<TextRange> &&)> &visit);
 // The article text only; NotFound if there is none.
 Result<QString> articleText(const Database &db, ArticleId id);
 // The article with this external id or SHA-256, if any.

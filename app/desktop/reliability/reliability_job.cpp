@@ -41,22 +41,6 @@ std::unexpected<Error> cancelled()
 
 } // namespace
 
-ReliabilityTable restrictSets(const ReliabilityTable &table, const QStringList &keep)
-{
-    ReliabilityTable out = table;
-    for (QStringList &row : out.cells)
-        for (QString &cell : row) {
-            if (cell.isEmpty())
-                continue;
-            QStringList kept;
-            for (const QString &key : cell.split(QLatin1Char('|'), Qt::SkipEmptyParts))
-                if (keep.contains(key))
-                    kept << key;
-            cell = kept.isEmpty() ? QStringLiteral("{}") : kept.join(QLatin1Char('|'));
-        }
-    return out;
-}
-
 Result<ReliabilityOutcome> runReliabilityJob(
     const ReliabilityRequest &request, const JobProgress &progress)
 {
@@ -69,48 +53,35 @@ Result<ReliabilityOutcome> runReliabilityJob(
         return std::unexpected(project.error());
 
     UnitSelection base;
-    base.unit = request.unit;
     base.coders = request.coders;
     base.phase = request.phase;
-    base.item = request.item;
     base.includeGold = request.includeGold;
     base.includeUnfinished = request.includeUnfinished;
     // One read of the codings that count serves every analysis.
-    auto counted = countedCodings(*project, base);
-    if (!counted)
-        return std::unexpected(counted.error());
+    auto run = AgreementRun::load(*project, base);
+    if (!run)
+        return std::unexpected(run.error());
 
     ReliabilityOutcome out;
-    out.leftOut = counted->leftOut;
+    out.leftOut = run->codings().leftOut;
     AgreementOptions agreement;
     agreement.bootstrapReplicates = request.bootstrapReplicates;
     agreement.seed = request.seed;
 
-    QStringList keys;
-    for (FramingFunction f : request.functions)
-        keys << functionKey(f);
-
     if (request.unit == UnitKind::Continuum) {
         Steps steps(progress, 2);
-        UnitSelection sel = base;
-        if (request.functions.size() == 1)
-            sel.function = request.functions.front();
-        auto continuum = continuumData(*counted, sel);
+        auto continuum = run->continuum(request.functions.size() == 1
+                ? std::optional<FramingFunction>(request.functions.front())
+                : std::nullopt);
         if (!continuum)
             return std::unexpected(continuum.error());
-        out.coders = continuum->coders;
-        out.continuumArticles = int(continuum->articles.size());
-        out.continuumLength = continuum->length;
-        out.unitizing = reliability::unitizingAlpha(0, continuum->length,
-            int(continuum->coders.size()), continuum->categories, continuum->units);
-        if (!out.unitizing->inputError.empty())
-            return fail(ErrorCode::Internal,
-                QCoreApplication::translate(
-                    "ReliabilityJob", "The continuum could not be compared."),
-                QString::fromStdString(out.unitizing->inputError));
+        out.coders = continuum->data.coders;
+        out.continuumArticles = int(continuum->data.articles.size());
+        out.continuumLength = continuum->data.length;
+        out.unitizing = std::move(continuum->unitizing);
         if (!steps.next())
             return cancelled();
-        auto matching = matchSpans(*counted, base, steps.inner());
+        auto matching = run->matching(steps.inner());
         if (!matching)
             return std::unexpected(matching.error());
         out.matching = std::move(*matching);
@@ -119,88 +90,61 @@ Result<ReliabilityOutcome> runReliabilityJob(
         return out;
     }
 
-    struct Analysis {
-        UnitSelection selection;
-        EncodingOptions encoding;
-        std::optional<FramingFunction> function;
-        bool sets = false;
-    };
-    std::vector<Analysis> analyses;
+    // One column per function, then the chosen functions as sets; or the article item alone.
+    std::vector<AnalysisRequest> analyses;
     if (request.unit == UnitKind::Article) {
-        Analysis a {base, {}, std::nullopt, false};
-        auto book = project->codebook();
-        if (!book)
-            return std::unexpected(book.error());
-        if (const ArticleItem *item = book->item(request.item);
-            item && item->level == MeasurementLevel::Ordinal) {
-            a.encoding.level = reliability::Level::Ordinal;
-            a.encoding.order = item->values;
-        }
+        AnalysisRequest a;
+        a.unit = UnitKind::Article;
+        a.item = request.item;
         analyses.push_back(a);
     } else {
         for (FramingFunction f : request.functions) {
-            Analysis a {base, {}, f, false};
-            a.selection.function = f;
+            AnalysisRequest a;
+            a.unit = request.unit;
+            a.function = f;
             analyses.push_back(a);
         }
         if (request.functions.size() > 1) {
-            Analysis a {base, {}, std::nullopt, true};
-            a.encoding.distance = reliability::SetDistance::Masi;
+            AnalysisRequest a;
+            a.unit = request.unit;
+            a.setFunctions = request.functions;
             analyses.push_back(a);
         }
     }
 
     Steps steps(progress, int(analyses.size()) + 4);
-    ReliabilityTable mainTable;
-    std::optional<EncodedData> mainEncoded;
-    for (const Analysis &a : analyses) {
-        auto table = unitTable(*project, *counted, a.selection);
-        if (!table)
-            return std::unexpected(table.error());
-        if (a.sets)
-            *table = restrictSets(*table, keys);
-        auto encoded = encodeTable(*table, a.encoding);
-        if (!encoded)
-            return std::unexpected(encoded.error());
-        const QString scale =
-            a.encoding.distance ? setDistanceKey(*a.encoding.distance) : levelKey(a.encoding.level);
+    std::optional<AnalysisResult> main;
+    for (const AnalysisRequest &a : analyses) {
+        auto analysed = run->analyse(a, agreement);
+        if (!analysed)
+            return std::unexpected(analysed.error());
         ReliabilityColumn column;
         column.function = a.function;
-        column.report = computeAgreement(*encoded, table->coders, scale, agreement);
+        column.report = analysed->report;
         out.columns.push_back(std::move(column));
-        out.coders = table->coders;
-        mainTable = std::move(*table);
-        mainEncoded = std::move(*encoded);
+        out.coders = analysed->table.coders;
+        main = std::move(*analysed);
         if (!steps.next())
             return cancelled();
     }
     out.mainColumn = int(out.columns.size()) - 1;
-    const Analysis &main = analyses.back();
 
-    auto coderCosts = leaveOneCoderOut(*mainEncoded, mainTable.coders, steps.inner());
-    if (!coderCosts)
-        return std::unexpected(coderCosts.error());
-    out.coderCosts = std::move(*coderCosts);
-    if (!steps.next())
-        return cancelled();
-    auto articleCosts = leaveOneArticleOut(*mainEncoded, mainTable.units, steps.inner());
-    if (!articleCosts)
-        return std::unexpected(articleCosts.error());
-    out.articleCosts = std::move(*articleCosts);
-    if (!steps.next())
+    auto costs = leaveOneOutCosts(*main, steps.inner());
+    if (!costs)
+        return std::unexpected(costs.error());
+    out.coderCosts = std::move(costs->coders);
+    out.articleCosts = std::move(costs->articles);
+    if (!steps.next() || !steps.next())
         return cancelled();
     if (request.unit != UnitKind::Article) {
-        auto matching = matchSpans(*counted, base, steps.inner());
+        auto matching = run->matching(steps.inner());
         if (!matching)
             return std::unexpected(matching.error());
         out.matching = std::move(*matching);
     }
     if (!steps.next())
         return cancelled();
-    // Sets restricted to the chosen functions are not what unitTable gives per period, so the
-    // periods use the main table as built above.
-    auto periods = alphaByPeriod(*project, main.selection, mainTable, main.encoding, request.period,
-        request.batchSize, steps.inner());
+    auto periods = run->periods(*main, request.period, request.batchSize, steps.inner());
     if (!periods)
         return std::unexpected(periods.error());
     out.periods = std::move(*periods);

@@ -3,10 +3,7 @@
 // (QtConcurrent), opens its own connection to the project file, and reports progress through a
 // callback that can cancel it between steps.
 
-#include "core/agreement/agreement_report.h"
-#include "core/agreement/diagnostics.h"
-#include "core/agreement/project_units.h"
-#include "core/reliability/unitizing_alpha.h"
+#include "core/agreement/agreement_run.h"
 
 #include <QString>
 #include <QStringList>
@@ -65,8 +62,5 @@ using JobProgress = DiagnosticsProgress;
 // Cancelled.
 Result<ReliabilityOutcome> runReliabilityJob(
     const ReliabilityRequest &request, const JobProgress &progress = {});
-
-// Keeps only `keep` (function keys) in set labels "cause|problem" ("{}" when none is left).
-ReliabilityTable restrictSets(const ReliabilityTable &table, const QStringList &keep);
 
 } // namespace fourfold

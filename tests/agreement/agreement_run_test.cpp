@@ -1,0 +1,154 @@
+// One agreement run (core/agreement/agreement_run.h): what it reads, how each analysis is encoded,
+// and that restricting sets of functions and taking the run's codings change what they should.
+// The alpha values themselves are checked against published examples in tests/reliability; here
+// they are only compared with each other (agreement of 1 where both coders gave the same values is
+// Krippendorff's definition: no observed disagreement).
+#include "core/agreement/agreement_run.h"
+#include "tests/project/double_coded_project.h"
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+// Every analysis a report asks of a run, with diagnostics and periods.
+void everyAnalysis(const Project &project)
+{
+    // Two coders, so that the continuum (articles every coder coded) is not empty.
+    UnitSelection coders;
+    coders.coders = QStringList {QStringLiteral("C01"), QStringLiteral("C02")};
+    auto run = AgreementRun::load(project, coders);
+    REQUIRE(run);
+    AgreementOptions options;
+    for (FramingFunction f : kFramingFunctions) {
+        AnalysisRequest request;
+        request.function = f;
+        auto analysed = run->analyse(request, options);
+        REQUIRE(analysed);
+        REQUIRE(leaveOneOutCosts(*analysed));
+        REQUIRE(run->periods(*analysed, PeriodKind::Batch, 3));
+    }
+    for (UnitKind unit : {UnitKind::Paragraph, UnitKind::Sentence, UnitKind::Token}) {
+        AnalysisRequest sets;
+        sets.unit = unit;
+        REQUIRE(run->analyse(sets, options));
+    }
+    REQUIRE(run->continuum(std::nullopt));
+    REQUIRE(run->matching());
+}
+
+} // namespace
+
+TEST_CASE("an agreement run reads the same number of statements for 8 and for 40 articles")
+{
+    DoubleCodedProject small(8), large(40);
+    const qint64 atSmall = small.statementsRunBy([&] { everyAnalysis(small.project); });
+    const qint64 atLarge = large.statementsRunBy([&] { everyAnalysis(large.project); });
+    CHECK(atSmall == atLarge);
+    // A handful per read (coders, articles, scope, spans, answers, codebook, segmentations).
+    CHECK(atLarge < 40);
+}
+
+TEST_CASE("set units keep only the chosen functions and are compared with MASI")
+{
+    // Both coders mark the first sentence as problem; in the second, one marks cause and the
+    // other remedy (tests/project/double_coded_project.h).
+    DoubleCodedProject p(6);
+    auto run = AgreementRun::load(p.project, {});
+    REQUIRE(run);
+    AnalysisRequest all;
+    auto allFour = run->analyse(all, {});
+    REQUIRE(allFour);
+    CHECK(allFour->report.scale == QLatin1String("masi"));
+    REQUIRE(allFour->report.alpha.value);
+    CHECK(*allFour->report.alpha.value < 0.9);
+
+    AnalysisRequest problemOnly;
+    problemOnly.setFunctions = {FramingFunction::Problem};
+    auto restricted = run->analyse(problemOnly, {});
+    REQUIRE(restricted);
+    for (const QStringList &row : restricted->table.cells)
+        for (const QString &cell : row)
+            CHECK((
+                cell.isEmpty() || cell == QLatin1String("problem") || cell == QLatin1String("{}")));
+    REQUIRE(restricted->report.alpha.value);
+    CHECK(*restricted->report.alpha.value == 1.0);
+    // The same table as the problem function alone, labelled as sets.
+    AnalysisRequest problem;
+    problem.function = FramingFunction::Problem;
+    auto single = run->analyse(problem, {});
+    REQUIRE(single);
+    CHECK(single->table.units == restricted->table.units);
+    CHECK(single->report.scale == QLatin1String("nominal"));
+}
+
+TEST_CASE("an analysis takes the codebook's level unless the request gives an encoding")
+{
+    DoubleCodedProject p(6);
+    auto run = AgreementRun::load(p.project, {});
+    REQUIRE(run);
+    const Codebook &book = run->codebook();
+
+    AnalysisRequest item;
+    item.unit = UnitKind::Article;
+    item.item = QStringLiteral("dominant_function");
+    auto fromBook = encodingFor(book, item);
+    REQUIRE(fromBook);
+    CHECK(fromBook->level == reliability::Level::Nominal);
+    CHECK_FALSE(fromBook->distance);
+
+    AnalysisRequest given = item;
+    given.encoding = EncodingOptions {reliability::Level::Ordinal, std::nullopt,
+        {QStringLiteral("problem"), QStringLiteral("cause")}};
+    auto replaced = encodingFor(book, given);
+    REQUIRE(replaced);
+    CHECK(replaced->level == reliability::Level::Ordinal);
+    CHECK(replaced->order.size() == 2);
+
+    AnalysisRequest span;
+    span.unit = UnitKind::Span;
+    span.function = FramingFunction::Evaluation;
+    span.attribute = QStringLiteral("no_such_attribute");
+    auto missing = encodingFor(book, span);
+    REQUIRE_FALSE(missing);
+    CHECK(missing.error().code == ErrorCode::InvalidArgument);
+    CHECK(missing.error().message.contains(QLatin1String("no_such_attribute")));
+
+    AnalysisRequest continuum;
+    continuum.unit = UnitKind::Continuum;
+    auto refused = run->analyse(continuum, {});
+    REQUIRE_FALSE(refused);
+    CHECK(refused.error().code == ErrorCode::InvalidArgument);
+}
+
+TEST_CASE("the continuum of a run names its functions and scores every pair of coders")
+{
+    // The continuum holds the articles every selected coder coded: C01 and C02 share every
+    // third article.
+    DoubleCodedProject p(6);
+    UnitSelection twoCoders;
+    twoCoders.coders = QStringList {QStringLiteral("C01"), QStringLiteral("C02")};
+    auto run = AgreementRun::load(p.project, twoCoders);
+    REQUIRE(run);
+    auto all = run->continuum(std::nullopt);
+    REQUIRE(all);
+    CHECK(all->categories
+        == QStringList {QStringLiteral("problem"), QStringLiteral("cause"),
+            QStringLiteral("evaluation"), QStringLiteral("remedy")});
+    CHECK(all->data.articles == QStringList {QStringLiteral("d3"), QStringLiteral("d6")});
+    REQUIRE(all->pairs.size() == 1);
+    for (const PairSpanAgreement &pair : all->pairs) {
+        REQUIRE(pair.strict.size() == 4);
+        // Problem spans are the same in every shared article: strict F1 of 1.
+        REQUIRE(pair.strict[0]);
+        CHECK(*pair.strict[0] == 1.0);
+    }
+    auto one = run->continuum(FramingFunction::Problem);
+    REQUIRE(one);
+    CHECK(one->categories == QStringList {QStringLiteral("problem")});
+    REQUIRE(one->unitizing.perCategory.size() == 1);
+    const QJsonObject json = continuumJson(*one);
+    CHECK(json.value(QStringLiteral("unit")).toString() == QLatin1String("continuum"));
+    CHECK(json.value(QStringLiteral("span_agreement")).toArray().size() == 1);
+    CHECK(json.value(QStringLiteral("length")).toInteger() == one->data.length);
+}
