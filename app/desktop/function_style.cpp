@@ -1,8 +1,8 @@
 #include "app/desktop/function_style.h"
 
-#include <QCoreApplication>
+#include "app/colour/colour.h"
 
-#include <cmath>
+#include <QCoreApplication>
 
 namespace fourfold {
 
@@ -40,14 +40,7 @@ QString functionName(FramingFunction f)
 
 QColor badgeTextColour(const QColor &background)
 {
-    // WCAG 2.1 relative luminance (W3C, "Web Content Accessibility Guidelines 2.1", definition
-    // of relative luminance and contrast ratio).
-    auto linear = [](float v) {
-        return v <= 0.04045f ? double(v) / 12.92 : std::pow((double(v) + 0.055) / 1.055, 2.4);
-    };
-    const double l = 0.2126 * linear(background.redF()) + 0.7152 * linear(background.greenF())
-        + 0.0722 * linear(background.blueF());
-    return (l + 0.05) / 0.05 >= 1.05 / (l + 0.05) ? QColor(Qt::black) : QColor(Qt::white);
+    return readableOn(background);
 }
 
 int functionShortcutKey(FramingFunction f)

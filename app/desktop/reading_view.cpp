@@ -1,5 +1,6 @@
 #include "app/desktop/reading_view.h"
 
+#include "app/colour/colour.h"
 #include "app/desktop/function_style.h"
 
 #include <QAbstractTextDocumentLayout>
@@ -32,36 +33,11 @@ namespace fourfold {
 
 namespace {
 
-// Relative luminance and contrast ratio as defined by WCAG 2.1 (W3C, 2018), "relative
-// luminance" and "contrast ratio" in the glossary.
-qreal relativeLuminance(const QColor &c)
-{
-    auto channel = [](qreal v) {
-        return v <= 0.03928 ? v / 12.92 : std::pow((v + 0.055) / 1.055, 2.4);
-    };
-    return 0.2126 * channel(c.redF()) + 0.7152 * channel(c.greenF()) + 0.0722 * channel(c.blueF());
-}
-
-qreal contrastRatio(const QColor &a, const QColor &b)
-{
-    const qreal la = relativeLuminance(a);
-    const qreal lb = relativeLuminance(b);
-    return (std::max(la, lb) + 0.05) / (std::min(la, lb) + 0.05);
-}
-
-// `a` moved towards `b` by `t` (0..1), channel by channel.
-QColor mix(const QColor &a, const QColor &b, qreal t)
-{
-    return QColor::fromRgbF(float(a.redF() + (b.redF() - a.redF()) * t),
-        float(a.greenF() + (b.greenF() - a.greenF()) * t),
-        float(a.blueF() + (b.blueF() - a.blueF()) * t));
-}
-
 // `c` moved towards `target` in small steps until it reaches `ratio` against `against`.
 QColor withContrast(QColor c, const QColor &target, const QColor &against, qreal ratio)
 {
     for (int i = 0; i < 20 && contrastRatio(c, against) < ratio; ++i)
-        c = mix(c, target, 0.1);
+        c = mixColours(c, target, 0.1);
     return c;
 }
 
@@ -750,7 +726,7 @@ void ReadingView::updateColours()
         if (m_dark)
             lane = withContrast(lane, white, base, 4.5);
         m_laneColours[i] = lane;
-        m_badgeFill[i] = mix(base, lane, m_dark ? 0.22 : 0.12);
+        m_badgeFill[i] = mixColours(base, lane, m_dark ? 0.22 : 0.12);
         m_badgeText[i] = withContrast(lane, m_dark ? white : black, m_badgeFill[i], 4.5);
     }
 }

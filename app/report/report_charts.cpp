@@ -1,5 +1,6 @@
 #include "app/report/report_charts.h"
 
+#include "app/colour/colour.h"
 #include "core/agreement/agreement_report.h"
 
 #include <QBuffer>
@@ -53,47 +54,7 @@ double axisMinimum(const std::vector<AlphaChartRow> &rows)
     return std::max(-1.0, std::floor(low / 0.2) * 0.2);
 }
 
-QColor mix(const QColor &a, const QColor &b, double t)
-{
-    t = std::clamp(t, 0.0, 1.0);
-    return QColor::fromRgbF(float(a.redF() + (b.redF() - a.redF()) * t),
-        float(a.greenF() + (b.greenF() - a.greenF()) * t),
-        float(a.blueF() + (b.blueF() - a.blueF()) * t));
-}
-
-// WCAG 2.1 relative luminance decides between dark and light text on a cell.
-QColor textOn(const QColor &background)
-{
-    auto channel = [](double c) {
-        return c <= 0.04045 ? c / 12.92 : std::pow((c + 0.055) / 1.055, 2.4);
-    };
-    const double l = 0.2126 * channel(background.redF()) + 0.7152 * channel(background.greenF())
-        + 0.0722 * channel(background.blueF());
-    return (l + 0.05) / 0.05 >= 1.05 / (l + 0.05) ? kInk : QColor(Qt::white);
-}
-
 } // namespace
-
-QColor agreementColour(double value)
-{
-    const QColor zero(0xF3, 0xF0, 0xE8);
-    const QColor negative(0xB5, 0x4A, 0x2C);
-    if (value < 0)
-        return mix(zero, negative, -value);
-    // Stops at Krippendorff's (2004) 0.667 and 0.800 make the bands visible in the colours.
-    struct Stop {
-        double at;
-        QColor colour;
-    };
-    static const Stop stops[] {{0.0, zero}, {0.5, QColor(0xCF, 0xDB, 0xE8)},
-        {kAlphaTentative, QColor(0x8E, 0xAE, 0xD3)}, {kAlphaReliable, QColor(0x3F, 0x6C, 0xA6)},
-        {1.0, QColor(0x1D, 0x3F, 0x6E)}};
-    for (size_t i = 1; i < std::size(stops); ++i)
-        if (value <= stops[i].at)
-            return mix(stops[i - 1].colour, stops[i].colour,
-                (value - stops[i - 1].at) / (stops[i].at - stops[i - 1].at));
-    return stops[std::size(stops) - 1].colour;
-}
 
 QSizeF alphaChartSize(const std::vector<AlphaChartRow> &rows)
 {
@@ -227,7 +188,7 @@ void paintKappaHeatMap(QPainter &p, const KappaGrid &grid)
             if (v) {
                 const QColor fill = agreementColour(*v);
                 p.fillRect(cell, fill);
-                p.setPen(textOn(fill));
+                p.setPen(readableOn(fill, kInk));
                 p.drawText(cell, Qt::AlignCenter, QString::number(*v, 'f', 3));
             } else {
                 p.fillRect(cell, QBrush(kRule, Qt::BDiagPattern));

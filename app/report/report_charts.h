@@ -50,8 +50,4 @@ QByteArray chartSvg(const QSizeF &size, const QString &title, const QString &des
 // The drawing as an image `scale` times the size, on white.
 QImage chartImage(const QSizeF &size, double scale, const ChartPainter &paint);
 
-// The colour of kappa (or alpha) `value` in the heat map: a sequential scale from a pale
-// neutral at 0 (and below, in a warm tone) to a deep blue at 1.
-QColor agreementColour(double value);
-
 } // namespace fourfold

@@ -13,6 +13,7 @@
 #include "core/model/coder.h"
 #include "core/model/error.h"
 #include "core/model/framing_function.h"
+#include "core/model/unit_kind.h"
 #include "core/reliability/unitizing_alpha.h"
 
 #include <QHash>
@@ -27,11 +28,6 @@
 namespace fourfold {
 
 class Project;
-
-enum class UnitKind { Article, Paragraph, Sentence, Token, Span, Continuum };
-// "article", "paragraph", "sentence", "token", "span", "continuum"
-QString unitKindKey(UnitKind kind);
-std::optional<UnitKind> unitKindFromKey(const QString &key);
 
 struct UnitSelection {
     UnitKind unit = UnitKind::Sentence;

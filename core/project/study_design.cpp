@@ -128,23 +128,6 @@ QString coderLabel(const Names &names, CoderId id)
 
 // --- units for agreement ------------------------------------------------------------------------
 
-// The key of the unit kinds training feedback uses (as unitKindKey of core/agreement, which
-// core/project cannot link: core/agreement builds on it).
-QString unitName(UnitKind kind)
-{
-    switch (kind) {
-    case UnitKind::Paragraph:
-        return QStringLiteral("paragraph");
-    case UnitKind::Token:
-        return QStringLiteral("token");
-    case UnitKind::Sentence:
-        return QStringLiteral("sentence");
-    default:
-        break;
-    }
-    return QStringLiteral("other");
-}
-
 // The units of `article` of one kind (paragraph, sentence or token).
 std::vector<TextRange> unitsOf(const Article &article, UnitKind kind)
 {
@@ -1098,7 +1081,7 @@ Result<TrainingFeedback> StudyDesign::trainingFeedback(
         return fail(ErrorCode::InvalidArgument,
             tr("Training feedback is computed on paragraphs, sentences or tokens, not on %1 "
                "units.")
-                .arg(unitName(request.unit)));
+                .arg(unitKindKey(request.unit)));
     auto names = loadNames(project.m_db, project);
     if (!names)
         return std::unexpected(names.error());
@@ -1193,7 +1176,7 @@ QJsonObject StudyDesign::trainingFeedbackJson(const TrainingFeedback &feedback)
     }
     return QJsonObject {{QStringLiteral("coder"), feedback.coder},
         {QStringLiteral("master"), feedback.master},
-        {QStringLiteral("unit"), unitName(feedback.unit)},
+        {QStringLiteral("unit"), unitKindKey(feedback.unit)},
         {QStringLiteral("articles"), QJsonArray::fromStringList(feedback.articles)},
         {QStringLiteral("open_articles"), feedback.openArticles},
         {QStringLiteral("training_complete"), feedback.trainingComplete},

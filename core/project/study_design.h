@@ -10,11 +10,11 @@
 // Writing functions run in one savepoint (all-or-nothing) and append to the event log; they are
 // not undoable edits (like Project::assign). Reading functions never write.
 
-#include "core/agreement/project_units.h"
 #include "core/model/annotation.h"
 #include "core/model/codebook.h"
 #include "core/model/error.h"
 #include "core/model/framing_function.h"
+#include "core/model/unit_kind.h"
 
 #include <QJsonObject>
 #include <QString>

@@ -1,6 +1,6 @@
 #include "app/desktop/reliability/matrix_view.h"
 
-#include "app/desktop/function_style.h"
+#include "app/colour/colour.h"
 
 #include <QFontMetrics>
 #include <QPainter>
@@ -18,22 +18,19 @@ constexpr int kMargin = 12;
 
 MatrixView::MatrixView(QWidget *parent)
     : QWidget(parent)
-    , m_highColour(0x00, 0x72, 0xB2)
 {
     setSizePolicy(QSizePolicy::Expanding, QSizePolicy::Expanding);
 }
 
 void MatrixView::setMatrix(const QStringList &rows, const QStringList &columns,
-    const std::vector<std::optional<double>> &shade, const QStringList &texts, double low,
-    double high, const QColor &highColour)
+    const std::vector<std::optional<double>> &shade, const QStringList &texts,
+    const std::function<QColor(double)> &scale)
 {
     m_rows = rows;
     m_columns = columns;
     m_shade = shade;
     m_texts = texts;
-    m_low = low;
-    m_high = high;
-    m_highColour = highColour;
+    m_scale = scale;
     m_shade.resize(size_t(rows.size() * columns.size()));
     while (m_texts.size() < rows.size() * columns.size())
         m_texts << QString();
@@ -86,14 +83,7 @@ QSize MatrixView::minimumSizeHint() const
 
 QColor MatrixView::cellColour(const std::optional<double> &v) const
 {
-    const QColor low(0xF4, 0xF4, 0xF2);
-    if (!v)
-        return low;
-    const double span = m_high - m_low;
-    const double t = span > 0 ? std::clamp((*v - m_low) / span, 0.0, 1.0) : 0.0;
-    auto mix = [t](int a, int b) { return int(a + (b - a) * t + 0.5); };
-    return QColor(mix(low.red(), m_highColour.red()), mix(low.green(), m_highColour.green()),
-        mix(low.blue(), m_highColour.blue()));
+    return v && m_scale ? m_scale(*v) : QColor(0xF4, 0xF4, 0xF2);
 }
 
 void MatrixView::paintEvent(QPaintEvent *)
@@ -161,7 +151,7 @@ void MatrixView::paintEvent(QPaintEvent *)
                     p.drawLine(box.left() + d, box.bottom(), box.left() + d + cell, box.top());
                 p.restore();
             }
-            p.setPen(badgeTextColour(fill));
+            p.setPen(readableOn(fill));
             p.drawText(box, Qt::AlignCenter, m_texts.value(r * columns + c));
         }
     }

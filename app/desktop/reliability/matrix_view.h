@@ -8,6 +8,7 @@
 #include <QStringList>
 #include <QWidget>
 
+#include <functional>
 #include <optional>
 #include <vector>
 
@@ -19,13 +20,13 @@ class MatrixView : public QWidget
 public:
     explicit MatrixView(QWidget *parent = nullptr);
 
-    // `shade` (row-major, rows × columns) places each cell on the scale [low, high]; nothing
+    // `shade` (row-major, rows × columns) gives each cell its colour through `scale`; nothing
     // draws the cell hatched as "not defined". `texts` (same size) are printed in the cells.
     // Row and column labels may carry a colour each (e.g. the function's); an invalid colour
     // prints in the text colour.
     void setMatrix(const QStringList &rows, const QStringList &columns,
-        const std::vector<std::optional<double>> &shade, const QStringList &texts, double low,
-        double high, const QColor &highColour);
+        const std::vector<std::optional<double>> &shade, const QStringList &texts,
+        const std::function<QColor(double)> &scale);
     void setLabelColours(const std::vector<QColor> &rows, const std::vector<QColor> &columns);
     // Titles of the row and column axes, e.g. "This coder's function".
     void setAxisTitles(const QString &rows, const QString &columns);
@@ -47,8 +48,7 @@ private:
     QStringList m_rows, m_columns, m_texts;
     std::vector<QColor> m_rowColours, m_columnColours;
     std::vector<std::optional<double>> m_shade;
-    double m_low = 0, m_high = 1;
-    QColor m_highColour;
+    std::function<QColor(double)> m_scale;
     QString m_rowTitle, m_columnTitle, m_caption;
 };
 

@@ -1,5 +1,6 @@
 #include "app/desktop/reliability/reliability_window.h"
 
+#include "app/colour/colour.h"
 #include "app/desktop/function_style.h"
 #include "app/desktop/reliability/matrix_view.h"
 #include "core/project/project.h"
@@ -860,12 +861,12 @@ void ReliabilityWindow::showPairs()
             }
         for (int i = 0; i < n; ++i)
             texts[i * n + i] = QStringLiteral("—");
-        m_pairs->setMatrix(o.coders, o.coders, shade, texts, 0.0, 1.0, QColor(0x00, 0x72, 0xB2));
+        m_pairs->setMatrix(o.coders, o.coders, shade, texts, agreementColour);
         m_pairs->setCaption(tr("Cohen's kappa of each pair of coders over the units both coded "
                                "(%1). Darker: higher agreement; hatched: not defined.")
                                 .arg(columnTitle(o.columns[size_t(o.mainColumn)])));
     } else {
-        m_pairs->setMatrix(o.coders, o.coders, shade, texts, 0.0, 1.0, QColor(0x00, 0x72, 0xB2));
+        m_pairs->setMatrix(o.coders, o.coders, shade, texts, agreementColour);
         m_pairs->setCaption(tr("Continuum units have no per-pair kappa; see the span agreement "
                                "in the function confusion."));
     }
@@ -898,7 +899,9 @@ void ReliabilityWindow::showConfusion()
             texts << QString::number(count, 'f', 0);
         }
     }
-    m_confusion->setMatrix(rows, columns, shade, texts, 0.0, 1.0, QColor(0x5A, 0x3A, 0x8C));
+    m_confusion->setMatrix(rows, columns, shade, texts, [](double share) {
+        return mixColours(QColor(0xF4, 0xF4, 0xF2), QColor(0x5A, 0x3A, 0x8C), share);
+    });
     m_confusion->setLabelColours(rowColours, columnColours);
     m_confusion->setAxisTitles(tr("A coder's span"), tr("What another coder gave it"));
     m_confusion->setCaption(tr("Each span of each coder against the best-overlapping span of "
