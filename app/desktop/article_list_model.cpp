@@ -31,11 +31,6 @@ int ArticleListModel::rowOf(ArticleId id) const
     return -1;
 }
 
-ArticleId ArticleListModel::articleAt(int row) const
-{
-    return row >= 0 && size_t(row) < m_rows.size() ? m_rows[size_t(row)].summary.id : ArticleId {};
-}
-
 int ArticleListModel::rowCount(const QModelIndex &parent) const
 {
     return parent.isValid() ? 0 : int(m_rows.size());

@@ -32,7 +32,6 @@ public:
     void updateArticle(ArticleId id, const QString &status, qint64 seconds);
     // The row of `id`, or -1.
     int rowOf(ArticleId id) const;
-    ArticleId articleAt(int row) const;
 
     int rowCount(const QModelIndex &parent = {}) const override;
     int columnCount(const QModelIndex &parent = {}) const override;

@@ -168,6 +168,11 @@ Status CodingSession::linkSpans(AnnotationId source, AnnotationId target, const 
         std::make_unique<LinkAnnotationsEdit>(source, target, type, m_coder.id), span->article);
 }
 
+Status CodingSession::unlinkSpans(LinkId id, ArticleId article)
+{
+    return push(std::make_unique<UnlinkAnnotationsEdit>(id, m_coder.id), article);
+}
+
 Status CodingSession::answerItem(ArticleId article, const QString &itemKey, const QString &value)
 {
     return push(
@@ -177,11 +182,8 @@ Status CodingSession::answerItem(ArticleId article, const QString &itemKey, cons
 
 Status CodingSession::markDone(ArticleId article)
 {
-    FOURFOLD_TRY_STATUS(
-        push(std::make_unique<SetArticleStatusEdit>(article, m_coder.id, QStringLiteral("done")),
-            article));
-    emit statusChanged(article);
-    return {};
+    return push(std::make_unique<SetArticleStatusEdit>(article, m_coder.id, QStringLiteral("done")),
+        article);
 }
 
 void CodingSession::addCodingTime(ArticleId article, qint64 seconds)

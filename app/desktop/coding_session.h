@@ -53,6 +53,8 @@ public:
     Status changeSpan(AnnotationId id, const AnnotationContent &content);
     Status deleteSpan(AnnotationId id);
     Status linkSpans(AnnotationId source, AnnotationId target, const QString &type);
+    // Removes link `id` of a span of `article` (undoable).
+    Status unlinkSpans(LinkId id, ArticleId article);
     Status answerItem(ArticleId article, const QString &itemKey, const QString &value);
     Status markDone(ArticleId article);
     // Records active coding time (not undoable, not a user edit).
@@ -67,7 +69,6 @@ public:
 signals:
     // After any change to spans, links or answers of `article` (including undo and redo).
     void articleChanged(ArticleId article);
-    void statusChanged(ArticleId article);
     void errorOccurred(const QString &message);
 
 private:

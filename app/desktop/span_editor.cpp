@@ -142,6 +142,10 @@ SpanEditor::SpanEditor(CodingSession *session, QWidget *parent)
             [this](AnnotationId source, AnnotationId target, const QString &type) {
                 m_session->linkSpans(source, target, type);
             });
+        connect(this, &SpanEditor::unlinkRequested, this, [this](LinkId id) {
+            if (m_span)
+                m_session->unlinkSpans(id, m_span->article);
+        });
         setCodebook(m_session->codebook());
     }
     setSpan(std::nullopt, {}, {});
@@ -231,11 +235,11 @@ QWidget *SpanEditor::makeEditorPage()
     linkColumn->addWidget(m_linkHint);
     auto *linkRow = new QHBoxLayout;
     m_linkLabel = new QLabel(links);
+    m_linkLabel->setSizePolicy(QSizePolicy::Fixed, QSizePolicy::Preferred);
     m_linkTarget = new QComboBox(links);
     m_linkTarget->setAccessibleName(tr("Span to link to"));
     m_linkTarget->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
-    m_linkTarget->setMinimumContentsLength(12);
-    m_linkTarget->setPlaceholderText(tr("no other spans"));
+    m_linkTarget->setMinimumContentsLength(8);
     m_linkLabel->setBuddy(m_linkTarget);
     m_linkButton = new QPushButton(tr("&Link"), links);
     m_linkButton->setAccessibleName(tr("Link to the chosen span"));
@@ -253,7 +257,7 @@ QWidget *SpanEditor::makeEditorPage()
     m_linkList->setAccessibleName(tr("Links of this span"));
     m_linkList->setTextElideMode(Qt::ElideRight);
     m_linkList->setWordWrap(false);
-    m_linkList->setSelectionMode(QAbstractItemView::NoSelection);
+    m_linkList->setSelectionMode(QAbstractItemView::SingleSelection);
     m_linkList->setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
     m_linkList->setIconSize(QSize(16, 16));
     m_linkList->setUniformItemSizes(true);
@@ -261,6 +265,21 @@ QWidget *SpanEditor::makeEditorPage()
     m_noLinks = new QLabel(tr("No links yet."), links);
     m_noLinks->setForegroundRole(QPalette::PlaceholderText);
     linkColumn->addWidget(m_noLinks);
+    m_unlinkButton = new QPushButton(tr("&Remove link"), links);
+    m_unlinkButton->setAccessibleName(tr("Remove the chosen link"));
+    m_unlinkButton->setEnabled(false);
+    auto *unlinkRow = new QHBoxLayout;
+    unlinkRow->addStretch(1);
+    unlinkRow->addWidget(m_unlinkButton);
+    linkColumn->addLayout(unlinkRow);
+    connect(m_linkList, &QListWidget::itemSelectionChanged, this, [this] {
+        m_unlinkButton->setEnabled(!m_linkList->selectedItems().isEmpty() && !isReadOnly());
+    });
+    connect(m_unlinkButton, &QPushButton::clicked, this, [this] {
+        const QList<QListWidgetItem *> chosen = m_linkList->selectedItems();
+        if (!chosen.isEmpty() && !isReadOnly())
+            emit unlinkRequested(LinkId {chosen.front()->data(Qt::UserRole).toLongLong()});
+    });
     column->addWidget(links);
     column->addStretch(1);
     return page;
@@ -414,6 +433,8 @@ void SpanEditor::loadLinks()
     m_linkTarget->setVisible(canLink);
     m_linkButton->setVisible(canLink);
     m_linkLabel->setText(type == kJudges ? tr("&Judges:") : tr("&Addresses:"));
+    m_linkTarget->setPlaceholderText(
+        type == kJudges ? tr("no cause span to link") : tr("no problem span to link"));
 
     auto spanOf = [this](AnnotationId id) -> const Annotation * {
         for (const Annotation &s : m_articleSpans)
@@ -426,16 +447,17 @@ void SpanEditor::loadLinks()
         if (!l.deleted && l.source == a.id && l.type == type)
             linked.push_back(l.target);
 
-    // Cause spans first for an evaluation, problem spans first for a remedy; else reading order.
-    const FramingFunction preferred =
+    // An evaluation judges a cause, a remedy addresses a problem: only spans of that function
+    // are offered, in reading order.
+    const FramingFunction targetFunction =
         type == kJudges ? FramingFunction::Cause : FramingFunction::Problem;
     std::vector<const Annotation *> targets;
     for (const Annotation &s : m_articleSpans)
-        if (!s.deleted && s.id != a.id && std::ranges::find(linked, s.id) == linked.end())
+        if (!s.deleted && s.id != a.id && s.content.function == targetFunction
+            && std::ranges::find(linked, s.id) == linked.end())
             targets.push_back(&s);
-    std::ranges::stable_sort(targets, [preferred](const Annotation *x, const Annotation *y) {
-        return std::tuple(x->content.function != preferred, x->content.range.start)
-            < std::tuple(y->content.function != preferred, y->content.range.start);
+    std::ranges::stable_sort(targets, [](const Annotation *x, const Annotation *y) {
+        return x->content.range.start < y->content.range.start;
     });
     m_linkTarget->clear();
     for (const Annotation *s : targets) {
@@ -464,11 +486,14 @@ void SpanEditor::loadLinks()
             item->setIcon(badgeIcon(other->content.function));
         item->setToolTip(
             other ? QStringLiteral("<p>%1</p>").arg(other->quote.toHtmlEscaped()) : QString());
+        item->setData(Qt::UserRole, l.id.value);
         m_linkList->addItem(item);
     }
     const int rows = std::min(m_linkList->count(), 4);
     m_linkList->setVisible(rows > 0);
     m_noLinks->setVisible(rows == 0);
+    m_unlinkButton->setVisible(rows > 0);
+    m_unlinkButton->setEnabled(false);
     if (rows > 0)
         m_linkList->setFixedHeight(
             rows * m_linkList->sizeHintForRow(0) + 2 * m_linkList->frameWidth());

@@ -33,8 +33,9 @@ class SpanEditor : public QWidget
     Q_OBJECT
 public:
     // With a session, the editor follows the session's codebook, sends every edit to
-    // session->changeSpan() / linkSpans(), and shows other coders' spans read-only. Without one
-    // (nullptr) it only emits contentEdited() and linkRequested().
+    // session->changeSpan() / linkSpans() / unlinkSpans(), and shows other coders' spans
+    // read-only. Without one (nullptr) it only emits contentEdited(), linkRequested() and
+    // unlinkRequested().
     explicit SpanEditor(CodingSession *session, QWidget *parent = nullptr);
     // Drops an edit still in progress: call commitPendingEdits() first to keep it.
     ~SpanEditor() override;
@@ -61,6 +62,8 @@ signals:
     void contentEdited(AnnotationId id, const AnnotationContent &content);
     // The user asked to link span `source` to span `target` with a link of `type`.
     void linkRequested(AnnotationId source, AnnotationId target, const QString &type);
+    // The user asked to remove link `id` of the span.
+    void unlinkRequested(LinkId id);
 
 protected:
     bool eventFilter(QObject *watched, QEvent *event) override;
@@ -102,6 +105,7 @@ private:
     QComboBox *m_linkTarget = nullptr;
     QPushButton *m_linkButton = nullptr;
     QListWidget *m_linkList = nullptr;
+    QPushButton *m_unlinkButton = nullptr;
     QLabel *m_noLinks = nullptr;
 };
 

@@ -113,21 +113,6 @@ bool touches(const Passage &p, const ComparisonFilter &filter)
 
 } // namespace
 
-QString disagreementKindKey(DisagreementKind kind)
-{
-    switch (kind) {
-    case DisagreementKind::Presence:
-        return QStringLiteral("presence");
-    case DisagreementKind::Function:
-        return QStringLiteral("function");
-    case DisagreementKind::Boundary:
-        return QStringLiteral("boundary");
-    case DisagreementKind::Attributes:
-        return QStringLiteral("attributes");
-    }
-    return {};
-}
-
 bool Passage::isResolved() const
 {
     return !gold.empty() || (!rejected.empty() && std::ranges::all_of(rejected, std::identity {}));

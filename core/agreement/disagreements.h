@@ -28,8 +28,6 @@ class Project;
 enum class DisagreementKind { Presence = 0, Function = 1, Boundary = 2, Attributes = 3 };
 inline constexpr std::array<DisagreementKind, 4> kDisagreementKinds {DisagreementKind::Presence,
     DisagreementKind::Function, DisagreementKind::Boundary, DisagreementKind::Attributes};
-// "presence", "function", "boundary", "attributes"
-QString disagreementKindKey(DisagreementKind kind);
 
 struct Passage {
     TextRange range; // the union of its spans (a passage is one interval of the text)

@@ -216,6 +216,32 @@ Status LinkAnnotationsEdit::revert(Database &db)
     return store::removeLinkRow(db, m_row.id);
 }
 
+UnlinkAnnotationsEdit::UnlinkAnnotationsEdit(LinkId id, CoderId actor)
+    : Edit(actor)
+    , m_id(id)
+{ }
+
+QString UnlinkAnnotationsEdit::text() const
+{
+    return tr("Remove link (%1)").arg(m_before ? m_before->type : QString());
+}
+
+Status UnlinkAnnotationsEdit::apply(Database &db)
+{
+    auto row = store::link(db, m_id);
+    if (!row)
+        return std::unexpected(row.error());
+    if (row->deleted)
+        return fail(ErrorCode::NotFound, tr("The link was removed already."));
+    m_before = *row;
+    return store::updateLinkDeleted(db, m_id, true);
+}
+
+Status UnlinkAnnotationsEdit::revert(Database &db)
+{
+    return store::updateLinkDeleted(db, m_id, false);
+}
+
 SetJudgementEdit::SetJudgementEdit(
     ArticleId article, CoderId coder, QString itemKey, QString value, Phase phase)
     : Edit(coder)

@@ -92,6 +92,24 @@ private:
     AnnotationLink m_row;
 };
 
+// Removes a live link (a tombstone, as for annotations); undo brings it back. NotFound if there
+// is no such link or it was removed already.
+class UnlinkAnnotationsEdit : public Edit
+{
+public:
+    UnlinkAnnotationsEdit(LinkId id, CoderId actor);
+    QString text() const override;
+    QString action() const override { return QStringLiteral("link.remove"); }
+    QString objectType() const override { return QStringLiteral("link"); }
+    QString objectUuid() const override { return m_before ? m_before->uuid : QString(); }
+    Status apply(Database &db) override;
+    Status revert(Database &db) override;
+
+private:
+    LinkId m_id;
+    std::optional<AnnotationLink> m_before;
+};
+
 // Sets a coder's answer to an article-level item (replacing an earlier answer in that phase).
 class SetJudgementEdit : public Edit
 {

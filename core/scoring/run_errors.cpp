@@ -48,23 +48,6 @@ QString quoteOf(const OffsetMap &map, const QString &text, const TextRange &rang
 
 } // namespace
 
-QString runErrorKindKey(RunErrorKind kind)
-{
-    switch (kind) {
-    case RunErrorKind::Correct:
-        return QStringLiteral("correct");
-    case RunErrorKind::FalsePositive:
-        return QStringLiteral("false-positive");
-    case RunErrorKind::Miss:
-        return QStringLiteral("miss");
-    case RunErrorKind::WrongFunction:
-        return QStringLiteral("wrong-function");
-    case RunErrorKind::Boundary:
-        return QStringLiteral("boundary");
-    }
-    return {};
-}
-
 FramingFunction RunSpanOutcome::function() const
 {
     return reference ? reference->function : predicted->function;

@@ -36,9 +36,6 @@ class Project;
 
 enum class RunErrorKind { Correct, FalsePositive, Miss, WrongFunction, Boundary };
 
-// "correct", "false-positive", "miss", "wrong-function", "boundary".
-QString runErrorKindKey(RunErrorKind kind);
-
 // One outcome of the matching: a reference span, a run span, or a matched pair of both.
 struct RunSpanOutcome {
     ArticleId article;

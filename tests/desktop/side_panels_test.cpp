@@ -405,9 +405,9 @@ TEST_CASE("the span editor links an evaluation to a cause and a remedy to a prob
     CHECK(SpanEditor::linkTypeFrom(FramingFunction::Remedy) == QStringLiteral("addresses"));
     CHECK(SpanEditor::linkTypeFrom(FramingFunction::Problem).isEmpty());
 
-    // An evaluation: cause spans are offered first, although the problem comes first in the text.
+    // An evaluation judges a cause: only the cause is offered, not the problem before it.
     f.editor.setSpan(f.evaluation, f.all(), {});
-    REQUIRE(target->count() == 3); // every other span
+    REQUIRE(target->count() == 1);
     CHECK(target->itemData(0).toLongLong() == 22);
     CHECK(!target->isHidden());
     CHECK(target->currentIndex() == 0); // the first cause is proposed
@@ -422,9 +422,10 @@ TEST_CASE("the span editor links an evaluation to a cause and a remedy to a prob
     judges.source = AnnotationId {23};
     judges.target = AnnotationId {22};
     judges.type = QStringLiteral("judges");
+    judges.id = LinkId {31};
     f.editor.setSpan(f.evaluation, f.all(), {judges});
-    CHECK(target->count() == 2);
-    CHECK(target->findData(qint64 {22}) < 0);
+    CHECK(target->count() == 0);
+    CHECK_FALSE(link->isEnabled());
     REQUIRE(list->count() == 1);
     CHECK(list->item(0)->text().contains(QStringLiteral("The council blames the budget.")));
 
@@ -434,14 +435,40 @@ TEST_CASE("the span editor links an evaluation to a cause and a remedy to a prob
     REQUIRE(list->count() == 1);
     CHECK(list->item(0)->text().contains(QStringLiteral("That is unfair.")));
 
-    // A remedy: problem spans first, type "addresses".
+    // A remedy addresses a problem: only the problem is offered.
     f.editor.setSpan(f.remedy, f.all(), {judges});
-    REQUIRE(target->count() == 3);
+    REQUIRE(target->count() == 1);
     CHECK(target->itemData(0).toLongLong() == 21);
     QTest::mouseClick(link, Qt::LeftButton);
     REQUIRE(f.links.count() == 2);
     CHECK(f.links.at(1).at(1).value<AnnotationId>() == AnnotationId {21});
     CHECK(f.links.at(1).at(2).toString() == QStringLiteral("addresses"));
+}
+
+TEST_CASE("the span editor removes the chosen link")
+{
+    EditorFixture f;
+    QSignalSpy unlinks {&f.editor, &SpanEditor::unlinkRequested};
+    auto *list = childNamed<QListWidget>(f.editor, QStringLiteral("Links of this span"));
+    auto *remove = childNamed<QPushButton>(f.editor, QStringLiteral("Remove the chosen link"));
+    AnnotationLink judges;
+    judges.id = LinkId {31};
+    judges.source = AnnotationId {23};
+    judges.target = AnnotationId {22};
+    judges.type = QStringLiteral("judges");
+    f.editor.setSpan(f.evaluation, f.all(), {judges});
+    REQUIRE(list->count() == 1);
+    // Nothing chosen, nothing to remove.
+    CHECK(!remove->isHidden());
+    CHECK_FALSE(remove->isEnabled());
+    list->setCurrentRow(0);
+    REQUIRE(remove->isEnabled());
+    QTest::mouseClick(remove, Qt::LeftButton);
+    REQUIRE(unlinks.count() == 1);
+    CHECK(unlinks.at(0).at(0).value<LinkId>() == LinkId {31});
+    // A span without links shows no remove button.
+    f.editor.setSpan(f.problem, f.all(), {});
+    CHECK(remove->isHidden());
 }
 
 TEST_CASE("with a coding session, each change in the panels is one undoable edit of the project")

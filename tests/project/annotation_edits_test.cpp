@@ -93,6 +93,13 @@ TEST_CASE("edits apply and revert to an identical database dump")
         edit = std::make_unique<LinkAnnotationsEdit>(
             other, existing, QStringLiteral("explains"), f.c1);
     }
+    SECTION("unlink")
+    {
+        LinkAnnotationsEdit link(other, existing, QStringLiteral("judges"), f.c1);
+        REQUIRE(f.project.apply(link));
+        before = f.dump();
+        edit = std::make_unique<UnlinkAnnotationsEdit>(link.linkId(), f.c1);
+    }
     SECTION("answer an article-level item, first time and again")
     {
         SetJudgementEdit first(
@@ -247,6 +254,35 @@ TEST_CASE("links between spans of two articles are refused")
     auto st = f.project.apply(link);
     REQUIRE_FALSE(st);
     CHECK(st.error().code == ErrorCode::InvalidArgument);
+}
+
+TEST_CASE("a removed link leaves the article's links and comes back on undo")
+{
+    EditFixture f;
+    const AnnotationId cause = f.add(FramingFunction::Cause, kFirstSentence);
+    const AnnotationId evaluation = f.add(FramingFunction::Evaluation, {75, 107},
+        {{QStringLiteral("polarity"), QStringLiteral("negative")}});
+    LinkAnnotationsEdit link(evaluation, cause, QStringLiteral("judges"), f.c1);
+    REQUIRE(f.project.apply(link));
+    auto linksNow = [&] {
+        auto l = f.project.links(f.f1);
+        REQUIRE(l);
+        return l->size();
+    };
+    REQUIRE(linksNow() == 1);
+    UnlinkAnnotationsEdit unlink(link.linkId(), f.c1);
+    REQUIRE(f.project.apply(unlink));
+    CHECK(linksNow() == 0);
+    CHECK(unlink.text() == QStringLiteral("Remove link (judges)"));
+    // Removing it again is refused: there is nothing left to remove.
+    UnlinkAnnotationsEdit again(link.linkId(), f.c1);
+    auto st = f.project.apply(again);
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::NotFound);
+    REQUIRE(f.project.revert(unlink));
+    CHECK(linksNow() == 1);
+    UnlinkAnnotationsEdit unknown(LinkId {9999}, f.c1);
+    CHECK_FALSE(f.project.apply(unknown));
 }
 
 TEST_CASE("every edit and its undo are written to the event log")
