@@ -162,8 +162,8 @@ Result<ContinuumResult> AgreementRun::continuum(std::optional<FramingFunction> f
     if (!data)
         return std::unexpected(data.error());
     ContinuumResult out;
-    out.unitizing = reliability::unitizingAlpha(
-        0, data->length, int(data->coders.size()), data->categories, data->units);
+    out.unitizing = reliability::unitizingAlpha(0, data->length, int(data->coders.size()),
+        data->categories, data->units, data->sectionBreaks);
     if (!out.unitizing.inputError.empty())
         return fail(ErrorCode::Internal, tr("The continuum could not be compared."),
             QString::fromStdString(out.unitizing.inputError));

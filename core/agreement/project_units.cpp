@@ -417,6 +417,9 @@ Result<ContinuumData> continuumData(const CountedCodings &s, const UnitSelection
         if (!all)
             continue;
         const std::int64_t offset = out.length;
+        if (offset > 0 && summary.length > 0
+            && (out.sectionBreaks.empty() || out.sectionBreaks.back() < offset))
+            out.sectionBreaks.push_back(offset);
         out.articles << summary.externalId;
         out.length += summary.length;
         for (int c = 0; c < int(coders.size()); ++c)

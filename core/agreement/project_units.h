@@ -96,12 +96,14 @@ Result<ReliabilityTable> unitTable(
     const Project &project, const CountedCodings &codings, const UnitSelection &selection);
 
 // The continuum for unitizing alpha: the texts of the articles that every selected coder coded,
-// laid end to end, and each coder's spans on it (category = function index; overlapping spans
-// of one coder and function are merged into one unit).
+// laid end to end as sections, and each coder's spans on it (category = function index; overlapping
+// spans of one coder and function are merged into one unit).
 struct ContinuumData {
     QStringList coders;
     QStringList articles; // external ids, in continuum order
     std::int64_t length = 0;
+    // Where one article ends and the next begins: no gap of unitizing alpha crosses them.
+    std::vector<std::int64_t> sectionBreaks;
     std::vector<reliability::ContinuumUnit> units;
     int categories = 4; // 4, or 1 when one function is selected (category 0)
 };

@@ -49,7 +49,7 @@ std::string describe(const ContinuumUnit &u, std::size_t index)
 }
 
 std::string validate(std::int64_t begin, std::int64_t end, int coders, int categories,
-    const std::vector<ContinuumUnit> &units)
+    const std::vector<ContinuumUnit> &units, const std::vector<std::int64_t> &breaks)
 {
     if (end <= begin)
         return "the continuum [" + std::to_string(begin) + ", " + std::to_string(end)
@@ -69,6 +69,21 @@ std::string validate(std::int64_t begin, std::int64_t end, int coders, int categ
         if (u.begin < begin || u.end > end)
             return describe(u, k) + ": the unit lies outside the continuum ["
                 + std::to_string(begin) + ", " + std::to_string(end) + ")";
+    }
+    for (std::size_t k = 0; k < breaks.size(); ++k) {
+        if (breaks[k] <= begin || breaks[k] >= end)
+            return "section break " + std::to_string(breaks[k]) + " lies outside ("
+                + std::to_string(begin) + ", " + std::to_string(end) + ")";
+        if (k > 0 && breaks[k] <= breaks[k - 1])
+            return "section breaks must be ascending (" + std::to_string(breaks[k - 1]) + ", "
+                + std::to_string(breaks[k]) + ")";
+    }
+    for (std::size_t k = 0; k < units.size(); ++k) {
+        const ContinuumUnit &u = units[k];
+        const auto next = std::upper_bound(breaks.begin(), breaks.end(), u.begin);
+        if (next != breaks.end() && *next < u.end)
+            return describe(u, k) + ": the unit crosses the section break at "
+                + std::to_string(*next);
     }
     std::vector<std::size_t> order(units.size());
     std::iota(order.begin(), order.end(), std::size_t(0));
@@ -127,8 +142,8 @@ struct Disagreements {
 };
 
 // D_o(c) and D_e(c) of Krippendorff (2004), §11.6 (see the equations at the top of this file).
-Disagreements categoryDisagreements(
-    const std::vector<std::vector<Interval>> &byCoder, std::int64_t begin, std::int64_t end)
+Disagreements categoryDisagreements(const std::vector<std::vector<Interval>> &byCoder,
+    std::int64_t begin, std::int64_t end, const std::vector<std::int64_t> &breaks)
 {
     Disagreements d;
     const double length = double(end) - double(begin);
@@ -141,16 +156,26 @@ Disagreements categoryDisagreements(
     // Both ordered pairs (i, j) and (j, i) count: factor 2 over the unordered pairs.
     d.observed = 2 * pairSum / (m * (m - 1) * length * length);
 
+    // Each coder's gaps: the complement of their units, cut at every section break.
     std::vector<double> gaps;
+    const auto addGaps = [&](std::int64_t from, std::int64_t to) {
+        auto cut = std::upper_bound(breaks.begin(), breaks.end(), from);
+        for (; cut != breaks.end() && *cut < to; ++cut) {
+            gaps.push_back(double(*cut) - double(from));
+            from = *cut;
+        }
+        if (to > from)
+            gaps.push_back(double(to) - double(from));
+    };
     for (const std::vector<Interval> &units : byCoder) {
         std::int64_t cursor = begin;
         for (const Interval &u : units) {
             if (u.begin > cursor)
-                gaps.push_back(double(u.begin) - double(cursor));
+                addGaps(cursor, u.begin);
             cursor = u.end;
         }
         if (end > cursor)
-            gaps.push_back(double(end) - double(cursor));
+            addGaps(cursor, end);
         d.units += units.size();
     }
     std::sort(gaps.begin(), gaps.end());
@@ -193,8 +218,14 @@ UnitizingCategoryResult undefinedResult(UndefinedReason reason)
 UnitizingResult unitizingAlpha(std::int64_t begin, std::int64_t end, int coders, int categories,
     const std::vector<ContinuumUnit> &units)
 {
+    return unitizingAlpha(begin, end, coders, categories, units, {});
+}
+
+UnitizingResult unitizingAlpha(std::int64_t begin, std::int64_t end, int coders, int categories,
+    const std::vector<ContinuumUnit> &units, const std::vector<std::int64_t> &breaks)
+{
     UnitizingResult result;
-    result.inputError = validate(begin, end, coders, categories, units);
+    result.inputError = validate(begin, end, coders, categories, units, breaks);
     if (!result.inputError.empty()) {
         result.overall = undefinedResult("invalid input: " + result.inputError);
         return result;
@@ -220,7 +251,7 @@ UnitizingResult unitizingAlpha(std::int64_t begin, std::int64_t end, int coders,
     double observedSum = 0;
     double expectedSum = 0;
     for (const auto &byCoder : byCategory) {
-        const Disagreements d = categoryDisagreements(byCoder, begin, end);
+        const Disagreements d = categoryDisagreements(byCoder, begin, end, breaks);
         UnitizingCategoryResult r;
         r.observedDisagreement = d.observed;
         r.expectedDisagreement = d.expected;

@@ -6,7 +6,10 @@
 //
 // The continuum is discrete (code points): a section [b, e) has length e − b, and a unit of
 // length l fits into a gap of length g at g − l + 1 positions, as in Krippendorff's D_e.
-// For several articles coded by the same coders, lay their continua end to end.
+// Several articles coded by the same coders are laid end to end as sections of one continuum,
+// with a break at each boundary: no unit and no gap crosses a break, so a gap at the end of one
+// article does not join a gap at the start of the next, and the result does not depend on the
+// order in which the articles are laid out.
 //
 // More than two coders: the 2004 definition sums the distances over all ordered pairs of coders
 // and divides by m(m − 1), so D_o is the mean of the pairwise D_o; D_e pools the units and gaps
@@ -55,5 +58,9 @@ struct UnitizingResult {
 // no coder marked a unit of it, or its expected disagreement is 0.
 UnitizingResult unitizingAlpha(std::int64_t begin, std::int64_t end, int coders, int categories,
     const std::vector<ContinuumUnit> &units);
+// The same on a continuum cut into sections at `breaks` (positions strictly inside (begin, end),
+// ascending): every gap ends at a break, and a unit that crosses one is invalid input.
+UnitizingResult unitizingAlpha(std::int64_t begin, std::int64_t end, int coders, int categories,
+    const std::vector<ContinuumUnit> &units, const std::vector<std::int64_t> &breaks);
 
 } // namespace fourfold::reliability

@@ -4,6 +4,7 @@
 // they are only compared with each other (agreement of 1 where both coders gave the same values is
 // Krippendorff's definition: no observed disagreement).
 #include "core/agreement/agreement_run.h"
+#include "core/project/annotation_edits.h"
 #include "tests/project/double_coded_project.h"
 
 using namespace fourfold;
@@ -151,4 +152,56 @@ TEST_CASE("the continuum of a run names its functions and scores every pair of c
     CHECK(json.value(QStringLiteral("unit")).toString() == QLatin1String("continuum"));
     CHECK(json.value(QStringLiteral("span_agreement")).toArray().size() == 1);
     CHECK(json.value(QStringLiteral("length")).toInteger() == one->data.length);
+}
+
+TEST_CASE("unitizing alpha of a project does not depend on the order its articles were imported")
+{
+    // The same three articles and the same codings, imported in two orders. Each article is its
+    // own section of the continuum, so gaps at article ends never join (Krippendorff 2004, §11.6,
+    // defines the measure on one continuum; sections per article are this program's reading of
+    // it for many articles, stated in the README).
+    const QStringList lines {
+        QStringLiteral("{\"id\":\"o1\",\"title\":\"One\",\"language\":\"en\",\"text\":\"The "
+                       "harbour of Wendmoor will close. The levy is to blame for it all.\"}"),
+        QStringLiteral("{\"id\":\"o2\",\"title\":\"Two\",\"language\":\"en\",\"text\":\"Fares "
+                       "rise again. Nobody asked the riders. The board should listen.\"}"),
+        QStringLiteral("{\"id\":\"o3\",\"title\":\"Three\",\"language\":\"en\",\"text\":\"A "
+                       "quiet week at the quay.\"}")};
+    struct Coding {
+        const char *article;
+        int coder;
+        FramingFunction function;
+        TextRange range;
+    };
+    const std::vector<Coding> codings {{"o1", 0, FramingFunction::Problem, {0, 31}},
+        {"o1", 1, FramingFunction::Problem, {4, 31}}, {"o1", 0, FramingFunction::Cause, {32, 50}},
+        {"o2", 0, FramingFunction::Problem, {0, 17}}, {"o2", 1, FramingFunction::Problem, {0, 12}},
+        {"o2", 1, FramingFunction::Remedy, {38, 60}}, {"o3", 1, FramingFunction::Problem, {2, 12}}};
+    auto alphaFor = [&](const QList<int> &order) {
+        ProjectFixture f;
+        QByteArray jsonl;
+        for (int i : order)
+            jsonl += (lines[i] + QLatin1Char('\n')).toUtf8();
+        f.importJsonl(jsonl);
+        const std::array<CoderId, 2> coders {
+            f.addCoder(QStringLiteral("C01")), f.addCoder(QStringLiteral("C02"))};
+        for (const Coding &c : codings) {
+            AddAnnotationEdit edit(f.articleId(QLatin1String(c.article)), coders[size_t(c.coder)],
+                AnnotationContent {c.function, c.range, {}, {}, {}});
+            REQUIRE(f.project.apply(edit));
+        }
+        for (const char *a : {"o1", "o2", "o3"})
+            for (CoderId c : coders)
+                markDone(f.project, f.articleId(QLatin1String(a)), c);
+        auto run = AgreementRun::load(f.project, {});
+        REQUIRE(run);
+        auto continuum = run->continuum(std::nullopt);
+        REQUIRE(continuum);
+        CHECK(continuum->data.sectionBreaks.size() == 2);
+        REQUIRE(continuum->unitizing.overall.value);
+        return *continuum->unitizing.overall.value;
+    };
+    const double forward = alphaFor({0, 1, 2});
+    CHECK_THAT(alphaFor({2, 0, 1}), Catch::Matchers::WithinAbs(forward, 1e-12));
+    CHECK_THAT(alphaFor({1, 2, 0}), Catch::Matchers::WithinAbs(forward, 1e-12));
 }

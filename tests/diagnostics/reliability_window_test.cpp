@@ -153,7 +153,7 @@ TEST_CASE("the reliability window on the continuum gives unitizing alpha")
     auto continuum = continuumData(p.project, all);
     REQUIRE(continuum);
     const auto u = reliability::unitizingAlpha(0, continuum->length, int(continuum->coders.size()),
-        continuum->categories, continuum->units);
+        continuum->categories, continuum->units, continuum->sectionBreaks);
     REQUIRE(u.overall.value);
     CHECK(cell(t, 0, 5) == QString::number(*u.overall.value, 'f', 3));
     CHECK(cell(w.boundaryTable(), 0, 0) == QStringLiteral("C04"));

@@ -523,3 +523,76 @@ TEST_CASE("unitizing alpha rejects invalid units, naming the unit")
         unitizingAlpha(0, 100, 2, 2, {{0, 0, 10, 20}, {0, 0, 20, 30}, {0, 1, 15, 25}});
     CHECK(ok.inputError.empty());
 }
+
+TEST_CASE("articles laid end to end as sections give the same unitizing alpha in any order")
+{
+    // Property: each article is its own section (no gap crosses a break), so the order in which
+    // articles are laid out cannot matter: observed disagreement is local to overlapping units
+    // and the expected disagreement sums over a multiset of units and gaps.
+    std::mt19937 rng(20261204);
+    std::uniform_int_distribution<int> lengthDist(60, 160);
+    struct Section {
+        std::int64_t length;
+        std::vector<ContinuumUnit> units; // on [0, length)
+    };
+    std::vector<Section> sections;
+    for (int s = 0; s < 5; ++s) {
+        Section section;
+        section.length = lengthDist(rng);
+        section.units = randomUnits(rng, 0, section.length, 3, 2, 20, 25);
+        sections.push_back(std::move(section));
+    }
+    auto layOut = [&](const std::vector<int> &order, bool withBreaks) {
+        std::vector<ContinuumUnit> units;
+        std::vector<std::int64_t> breaks;
+        std::int64_t offset = 0;
+        for (int s : order) {
+            if (offset > 0 && withBreaks)
+                breaks.push_back(offset);
+            for (ContinuumUnit u : sections[std::size_t(s)].units) {
+                u.begin += offset;
+                u.end += offset;
+                units.push_back(u);
+            }
+            offset += sections[std::size_t(s)].length;
+        }
+        return unitizingAlpha(0, offset, 3, 2, units, breaks);
+    };
+    std::vector<int> order = {0, 1, 2, 3, 4};
+    const UnitizingResult reference = layOut(order, true);
+    REQUIRE(reference.inputError.empty());
+    REQUIRE(reference.overall.value);
+    bool plainDiffers = false;
+    const UnitizingResult plainReference = layOut(order, false);
+    for (int round = 0; round < 12; ++round) {
+        std::shuffle(order.begin(), order.end(), rng);
+        const UnitizingResult r = layOut(order, true);
+        REQUIRE(r.overall.value);
+        CHECK_THAT(*r.overall.value, WithinAbs(*reference.overall.value, 1e-12));
+        for (std::size_t c = 0; c < 2; ++c)
+            CHECK_THAT(r.perCategory[c].expectedDisagreement,
+                WithinRel(reference.perCategory[c].expectedDisagreement, 1e-12));
+        // Without breaks, gaps at the ends of articles join across boundaries, so some order
+        // changes the figure: the defect the sections remove.
+        const UnitizingResult plain = layOut(order, false);
+        plainDiffers =
+            plainDiffers || std::abs(*plain.overall.value - *plainReference.overall.value) > 1e-9;
+    }
+    CHECK(plainDiffers);
+}
+
+TEST_CASE("a unit crossing a section break, or breaks out of order, are invalid input")
+{
+    const std::vector<ContinuumUnit> units {{0, 0, 10, 30}, {1, 0, 12, 28}};
+    const UnitizingResult crossing = unitizingAlpha(0, 100, 2, 1, units, {20});
+    CHECK_THAT(crossing.inputError, Contains("crosses the section break at 20"));
+    CHECK_FALSE(crossing.overall.value);
+    const UnitizingResult descending = unitizingAlpha(0, 100, 2, 1, units, {60, 40});
+    CHECK_THAT(descending.inputError, Contains("ascending"));
+    const UnitizingResult outside = unitizingAlpha(0, 100, 2, 1, units, {100});
+    CHECK_THAT(outside.inputError, Contains("outside"));
+    // A break where the units touch it is fine.
+    const UnitizingResult touching = unitizingAlpha(0, 100, 2, 1, units, {30, 50});
+    CHECK(touching.inputError.empty());
+    REQUIRE(touching.overall.value);
+}
