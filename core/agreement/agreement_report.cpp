@@ -5,6 +5,8 @@
 #include <QCoreApplication>
 #include <QJsonArray>
 
+#include <cmath>
+
 namespace fourfold {
 
 using namespace reliability;
@@ -28,6 +30,14 @@ QJsonObject valueObject(const std::optional<double> &value, const UndefinedReaso
     if (!value)
         o.insert(QStringLiteral("reason"), QString::fromStdString(reason));
     return o;
+}
+
+// D_o or D_e: four decimals, or four significant digits for very large data values.
+QString disagreementText(double d)
+{
+    if (!std::isfinite(d))
+        return tr("beyond a double");
+    return std::abs(d) < 1e6 ? QString::number(d, 'f', 4) : QString::number(d, 'g', 4);
 }
 
 QJsonObject kappaJson(const KappaResult &k)
@@ -174,8 +184,12 @@ QJsonObject agreementJson(const AgreementReport &r)
 {
     QJsonObject alpha = valueObject(r.alpha.value, r.alpha.reason);
     alpha.insert(QStringLiteral("level"), r.scale);
-    alpha.insert(QStringLiteral("observed_disagreement"), r.alpha.observedDisagreement);
-    alpha.insert(QStringLiteral("expected_disagreement"), r.alpha.expectedDisagreement);
+    // In the data's own units; null where that is beyond a double (values near 1e154 and up).
+    const auto finite = [](double d) {
+        return std::isfinite(d) ? QJsonValue(d) : QJsonValue(QJsonValue::Null);
+    };
+    alpha.insert(QStringLiteral("observed_disagreement"), finite(r.alpha.observedUnscaled()));
+    alpha.insert(QStringLiteral("expected_disagreement"), finite(r.alpha.expectedUnscaled()));
     alpha.insert(QStringLiteral("verdict"), alphaVerdict(r.alpha.value));
 
     QJsonObject o {{QStringLiteral("coders"), QJsonArray::fromStringList(r.coders)},
@@ -242,8 +256,8 @@ QString agreementText(const AgreementReport &r)
         alphaLine += QStringLiteral(" — ") + QString::fromStdString(r.alpha.reason);
     else
         alphaLine += QStringLiteral("   D_o %1, D_e %2   %3")
-                         .arg(r.alpha.observedDisagreement, 0, 'f', 4)
-                         .arg(r.alpha.expectedDisagreement, 0, 'f', 4)
+                         .arg(disagreementText(r.alpha.observedUnscaled()))
+                         .arg(disagreementText(r.alpha.expectedUnscaled()))
                          .arg(alphaVerdict(r.alpha.value));
     lines << alphaLine;
     for (const auto &b : {r.pairBootstrap, r.unitBootstrap}) {

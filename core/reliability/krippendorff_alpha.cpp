@@ -1,5 +1,6 @@
 #include "core/reliability/krippendorff_alpha.h"
 
+#include <cmath>
 #include <cstdint>
 
 namespace fourfold::reliability {
@@ -104,6 +105,30 @@ CoincidenceMatrix coincidences(const ReliabilityData &data)
     return countCoincidences(data);
 }
 
+double AlphaResult::observedUnscaled() const
+{
+    return std::ldexp(observedDisagreement, scaleExponent);
+}
+
+double AlphaResult::expectedUnscaled() const
+{
+    return std::ldexp(expectedDisagreement, scaleExponent);
+}
+
+int differenceScale(const Metric &metric)
+{
+    if (metric.level != Level::Interval && metric.level != Level::Ratio)
+        return 0;
+    double largest = 0;
+    for (double v : metric.numeric)
+        largest = std::max(largest, std::abs(v));
+    // Between 2^-200 and 2^200 every δ² stays below 2^402 (sums of up to 2^500 of them stay
+    // finite) and no difference of distinct numbers squares to 0.
+    const bool outside =
+        largest > std::ldexp(1.0, 200) || (largest > 0 && largest < std::ldexp(1.0, -200));
+    return outside ? std::ilogb(largest) : 0;
+}
+
 std::vector<double> differenceMatrix(const Metric &metric, const CoincidenceMatrix &c)
 {
     if (!metricProblem(metric, c.values).empty())
@@ -113,8 +138,9 @@ std::vector<double> differenceMatrix(const Metric &metric, const CoincidenceMatr
         return metric.custom;
 
     std::vector<double> delta(v * v, 0.0);
+    const int scale = differenceScale(metric);
     auto number = [&](std::size_t code) {
-        return metric.numeric.empty() ? double(code) : metric.numeric[code];
+        return metric.numeric.empty() ? double(code) : std::ldexp(metric.numeric[code], -scale);
     };
     switch (metric.level) {
     case Level::Nominal:
@@ -185,6 +211,9 @@ AlphaResult krippendorffAlpha(const CoincidenceMatrix &c, const Metric &metric)
         return result;
     }
     result.delta = differenceMatrix(metric, c);
+    // The ratio metric is free of units; the interval metric's δ² scales with the square.
+    if (metric.level == Level::Interval && metric.custom.empty())
+        result.scaleExponent = 2 * differenceScale(metric);
 
     // D_o = (1/n) Σ_c Σ_k o_ck δ²_ck and D_e = 1/(n(n − 1)) Σ_c Σ_k n_c n_k δ²_ck
     // (Krippendorff 2011, §C–D).
@@ -206,6 +235,11 @@ AlphaResult krippendorffAlpha(const CoincidenceMatrix &c, const Metric &metric)
     }
     result.observedDisagreement = observed / n;
     result.expectedDisagreement = expected / (n * (n - 1));
+    if (!std::isfinite(result.observedDisagreement)
+        || !std::isfinite(result.expectedDisagreement)) {
+        result.reason = "the differences between the values are too large to compute";
+        return result;
+    }
     if (occurring < 2) {
         result.reason = "only one value occurs among the pairable values (expected "
                         "disagreement is 0)";

@@ -34,6 +34,13 @@ struct AlphaResult {
     double pairableValues = 0; // n
     CoincidenceMatrix coincidences;
     std::vector<double> delta; // the δ² used, values × values
+    // D_o, D_e and delta are in units of 2^scaleExponent: interval values beyond 2^200 (or all
+    // below 2^-200) in magnitude are first divided by a power of two (exactly, without rounding)
+    // so that no squared difference overflows or vanishes; alpha is the same either way. 0 for
+    // other data.
+    int scaleExponent = 0;
+    double observedUnscaled() const;
+    double expectedUnscaled() const;
 };
 
 // alpha = 1 − D_o / D_e. Undefined (with a reason, never NaN and never 1) when there are fewer
@@ -47,7 +54,11 @@ AlphaResult krippendorffAlpha(const ReliabilityData &data, const Metric &metric)
 AlphaResult krippendorffAlpha(const CoincidenceMatrix &c, const Metric &metric);
 
 // The δ² matrix for `metric` given the coincidence marginals (the ordinal difference needs them).
-// Empty if the metric is unusable for c.values (see metricProblem()).
+// Empty if the metric is unusable for c.values (see metricProblem()). Interval and ratio numbers
+// of extreme magnitude are divided by 2^k first (see differenceScale()).
 std::vector<double> differenceMatrix(const Metric &metric, const CoincidenceMatrix &c);
+// The k of that division: 0 unless the largest interval or ratio magnitude lies outside
+// [2^-200, 2^200].
+int differenceScale(const Metric &metric);
 
 } // namespace fourfold::reliability

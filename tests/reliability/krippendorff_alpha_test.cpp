@@ -534,3 +534,38 @@ TEST_CASE("differenceMatrix gives the ordinal differences from the marginals", "
     CHECK(delta[2 * 5 + 2] == 0);
     CHECK(differenceMatrix(metricOf(Level::Interval, {1, 2}), c).empty()); // 2 numbers, 5 values
 }
+
+TEST_CASE("interval and ratio alpha hold for values whose squares overflow or vanish", "[alpha]")
+{
+    // Krippendorff (2011), §D: interval 0.849 (D_o 0.433, D_e 2.872) and ratio 0.797 on values
+    // 1–5. Interval alpha does not change when every value is multiplied by the same number
+    // (δ² and so D_o and D_e scale with its square); the ratio metric has no unit at all.
+    const ReliabilityData data = krippendorffC();
+    for (double factor : {1e160, 1e200, 1e300, 1e-300}) {
+        INFO("factor " << factor);
+        std::vector<double> scaled;
+        for (double v : kOneToFive)
+            scaled.push_back(v * factor);
+        const AlphaResult interval = krippendorffAlpha(data, metricOf(Level::Interval, scaled));
+        REQUIRE(interval.value);
+        CHECK_THAT(*interval.value, WithinAbs(0.849, 5e-4));
+        CHECK(std::isfinite(interval.observedDisagreement));
+        // D_o in the data's units, 0.433 × factor², where that is a normal double.
+        const double published = 0.433 * factor * factor;
+        if (std::isnormal(published))
+            CHECK_THAT(interval.observedUnscaled(), Catch::Matchers::WithinRel(published, 2e-3));
+        const AlphaResult ratio = krippendorffAlpha(data, metricOf(Level::Ratio, scaled));
+        REQUIRE(ratio.value);
+        CHECK_THAT(*ratio.value, WithinAbs(0.797, 5e-4));
+    }
+    // 1e300: D_o in the data's units (about 4e599) is beyond a double, alpha is not.
+    std::vector<double> huge;
+    for (double v : kOneToFive)
+        huge.push_back(v * 1e300);
+    const AlphaResult r = krippendorffAlpha(data, metricOf(Level::Interval, huge));
+    REQUIRE(r.value);
+    CHECK(std::isinf(r.observedUnscaled()));
+    CHECK(r.scaleExponent > 0);
+    // Ordinary values are not rescaled: the published D_o and D_e stay as they are.
+    CHECK(krippendorffAlpha(data, metricOf(Level::Interval, kOneToFive)).scaleExponent == 0);
+}
