@@ -2,6 +2,7 @@
 
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
+#include "app/desktop/message_bar.h"
 #include "app/desktop/reliability/reliability_window.h"
 #include "app/desktop/reliability/report_options_dialog.h"
 #include "app/desktop/runs/extractor_window.h"
@@ -11,17 +12,21 @@
 #include "core/project/coder_copies.h"
 
 #include <QApplication>
+#include <QDesktopServices>
+#include <QDir>
 #include <QFileDialog>
 #include <QFileInfo>
 #include <QInputDialog>
 #include <QMessageBox>
+#include <QUrl>
 #include <QWidget>
 
 namespace fourfold {
 
-LeadWindows::LeadWindows(QWidget *owner)
+LeadWindows::LeadWindows(QWidget *owner, MessageBar *messages)
     : QObject(owner)
     , m_owner(owner)
+    , m_messages(messages)
 { }
 
 LeadWindows::~LeadWindows()
@@ -121,11 +126,16 @@ void LeadWindows::writeReport()
     QApplication::setOverrideCursor(Qt::WaitCursor);
     const Status written = fourfold::writeReport(m_session->project(), options, path);
     QApplication::restoreOverrideCursor();
-    if (!written)
+    if (!written) {
         QMessageBox::warning(m_owner, tr("Reliability report"), written.error().message);
-    else
-        QMessageBox::information(
-            m_owner, tr("Reliability report"), tr("The report was written to %1.").arg(path));
+        return;
+    }
+    m_messages->showMessage(MessageBar::Kind::Success,
+        tr("The reliability report was written to %1.").arg(QDir::toNativeSeparators(path)),
+        {{tr("&Open"), [path] { QDesktopServices::openUrl(QUrl::fromLocalFile(path)); }},
+            {tr("Open the &folder"), [path] {
+                 QDesktopServices::openUrl(QUrl::fromLocalFile(QFileInfo(path).absolutePath()));
+             }}});
 }
 
 void LeadWindows::handOutCopy()
@@ -158,10 +168,13 @@ void LeadWindows::handOutCopy()
         QMessageBox::warning(m_owner, tr("Coder copy"), report.error().message);
         return;
     }
-    QMessageBox::information(m_owner, tr("Coder copy"),
+    m_messages->showMessage(MessageBar::Kind::Success,
         tr("Wrote %1 for %2: %n article(s), %3 span(s).", nullptr, int(report->articles))
-            .arg(path, pseudonym)
-            .arg(report->annotations));
+            .arg(QDir::toNativeSeparators(path), pseudonym)
+            .arg(report->annotations),
+        {{tr("Open the &folder"), [path] {
+              QDesktopServices::openUrl(QUrl::fromLocalFile(QFileInfo(path).absolutePath()));
+          }}});
 }
 
 void LeadWindows::mergeCopies()
@@ -191,11 +204,14 @@ void LeadWindows::mergeCopies()
                                         .arg(r.deleted)
                                         .arg(r.conflicts));
     }
-    if (conflicts > 0)
-        lines << QString()
-              << tr("Conflicts keep the project's version until you decide: "
-                    "fourfold-cli merge PROJECT --conflicts lists them.");
-    QMessageBox::information(m_owner, tr("Merge coder copies"), lines.join(QLatin1Char('\n')));
+    const QString summary = conflicts > 0
+        ? tr("Merged %n copy(ies); %1 conflict(s) keep the project's version until you decide "
+             "(fourfold-cli merge PROJECT --conflicts lists them).",
+            nullptr, int(reports->size()))
+              .arg(conflicts)
+        : tr("Merged %n copy(ies).", nullptr, int(reports->size()));
+    m_messages->showMessage(conflicts > 0 ? MessageBar::Kind::Warning : MessageBar::Kind::Success,
+        summary, {}, lines.join(QLatin1Char('\n')));
     emit projectChanged();
 }
 

@@ -13,12 +13,14 @@ namespace fourfold {
 
 class CodingSession;
 
+class MessageBar;
+
 class LeadWindows : public QObject
 {
     Q_OBJECT
 public:
-    // `owner` parents the dialogs.
-    explicit LeadWindows(QWidget *owner);
+    // `owner` parents the dialogs; results are told in `messages` (the owner's message bar).
+    LeadWindows(QWidget *owner, MessageBar *messages);
     ~LeadWindows() override;
 
     // The session the windows work on; closes every window of the previous one first. May be
@@ -54,6 +56,7 @@ private:
     void raise(QWidget *window);
 
     QWidget *m_owner;
+    MessageBar *m_messages;
     CodingSession *m_session = nullptr;
     QPointer<QWidget> m_comparison;
     QPointer<QWidget> m_reliability;

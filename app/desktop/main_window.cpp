@@ -11,6 +11,7 @@
 #include "app/desktop/import_dialog.h"
 #include "app/desktop/item_form.h"
 #include "app/desktop/lead_windows.h"
+#include "app/desktop/message_bar.h"
 #include "app/desktop/reading_view.h"
 #include "app/desktop/span_editor.h"
 #include "app/desktop/study/training_feedback_dialog.h"
@@ -63,12 +64,19 @@ QString samplePath()
 MainWindow::MainWindow(QWidget *parent)
     : QMainWindow(parent)
     , m_clock(new ActivityClock(this))
-    , m_lead(new LeadWindows(this))
+    , m_messages(new MessageBar(this))
+    , m_lead(new LeadWindows(this, m_messages))
 {
     m_pages = new QStackedWidget(this);
     m_pages->addWidget(buildStartPage());
     m_pages->addWidget(buildDesk());
-    setCentralWidget(m_pages);
+    auto *central = new QWidget(this);
+    auto *centralColumn = new QVBoxLayout(central);
+    centralColumn->setContentsMargins(0, 0, 0, 0);
+    centralColumn->setSpacing(0);
+    centralColumn->addWidget(m_messages);
+    centralColumn->addWidget(m_pages, 1);
+    setCentralWidget(central);
     buildMenus();
     m_who = new QLabel(this);
     statusBar()->addPermanentWidget(m_who);
@@ -587,7 +595,8 @@ void MainWindow::nextArticle()
             return;
         }
     }
-    statusBar()->showMessage(tr("Every article in the list is done."), 6000);
+    m_messages->showMessage(
+        MessageBar::Kind::Information, tr("Every article in the list is done."), {}, {}, 8);
 }
 
 void MainWindow::search(const QString &query)
@@ -601,7 +610,7 @@ void MainWindow::search(const QString &query)
     }
     auto hits = m_session->project().searchArticles(query);
     if (!hits) {
-        statusBar()->showMessage(hits.error().message, 6000);
+        m_messages->showMessage(MessageBar::Kind::Warning, hits.error().message);
         return;
     }
     QSet<qint64> ids;
@@ -668,13 +677,14 @@ void MainWindow::openSample()
 void MainWindow::setLanguage(const QString &code)
 {
     QSettings().setValue(QStringLiteral("language"), code);
-    statusBar()->showMessage(tr("The language changes when Fourfold starts again."), 8000);
+    m_messages->showMessage(MessageBar::Kind::Information,
+        tr("The language changes when Fourfold starts again."), {}, {}, 10);
 }
 
 void MainWindow::showError(const QString &message)
 {
-    // Not modal: the change simply did not happen, and the reason stays visible for a while.
-    statusBar()->showMessage(message, 10000);
+    // Not modal: the change simply did not happen; the reason stays until closed or replaced.
+    m_messages->showMessage(MessageBar::Kind::Error, message);
 }
 
 void MainWindow::updateTitle()

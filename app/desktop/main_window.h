@@ -26,6 +26,7 @@ class ArticleListModel;
 class CodebookPanel;
 class CodingSession;
 class LeadWindows;
+class MessageBar;
 class FrameCard;
 class ItemForm;
 class ReadingView;
@@ -45,6 +46,7 @@ public:
 
     // For tests and screenshots.
     LeadWindows *leadWindows() const { return m_lead; }
+    MessageBar *messageBar() const { return m_messages; }
     CodingSession *session() const { return m_session.get(); }
     ReadingView *readingView() const { return m_reading; }
     FrameCard *frameCard() const { return m_card; }
@@ -101,6 +103,7 @@ private:
     QAction *m_undo = nullptr;
     QAction *m_redo = nullptr;
     ActivityClock *m_clock = nullptr;
+    MessageBar *m_messages = nullptr;
     LeadWindows *m_lead = nullptr;
     QMenu *m_leadMenu = nullptr;
     bool m_columnsChosen = false;

@@ -5,6 +5,7 @@
 #include "app/desktop/coder_dialog.h"
 #include "app/desktop/coding_session.h"
 #include "app/desktop/main_window.h"
+#include "app/desktop/message_bar.h"
 #include "app/desktop/reading_view.h"
 #include "app/desktop/reliability/reliability_window.h"
 #include "app/desktop/reliability/report_options_dialog.h"
@@ -12,6 +13,7 @@
 
 #include <QEventLoop>
 #include <QTabWidget>
+#include <QToolButton>
 
 using namespace fourfold;
 using fourfold::screenshots::saveGrab;
@@ -76,6 +78,17 @@ int main(int argc, char *argv[])
         if (id && *id)
             w.openArticle(**id);
         ok &= saveGrab(w, out, "desk-lead-all-coders.png");
+        // A result told in the message bar: merged copies, one conflict, details open.
+        w.messageBar()->showMessage(MessageBar::Kind::Warning,
+            QStringLiteral("Merged 2 copies; 1 conflict(s) keep the project's version until you "
+                           "decide (fourfold-cli merge PROJECT --conflicts lists them)."),
+            {},
+            QStringLiteral("demo-C02.fourfold (C02): 3 new, 1 changed (0 deleted), 1 conflict(s).\n"
+                           "demo-C03.fourfold (C03): already merged, nothing new."));
+        for (QToolButton *b : w.messageBar()->findChildren<QToolButton *>())
+            if (b->text() == QStringLiteral("&Details"))
+                b->click();
+        ok &= saveGrab(w, out, "message-bar.png");
     }
     {
         // The reliability window: sentences, all four functions, the reliability phase.
