@@ -327,3 +327,27 @@ TEST_CASE("a span's quote and bounds count code points beyond ASCII and the BMP"
     CHECK(refused.error().code == ErrorCode::InvalidArgument);
     CHECK(refused.error().message.contains(QStringLiteral("of 27 characters")));
 }
+
+TEST_CASE("an edit that fails inside a batch without its own savepoint fails the whole batch")
+{
+    EditFixture f;
+    const QString before = f.dump();
+    AddAnnotationEdit good(
+        f.f1, f.c1, AnnotationContent {FramingFunction::Problem, kFirstSentence, {}, {}, {}});
+    AddAnnotationEdit bad(
+        f.f1, f.c1, AnnotationContent {FramingFunction::Problem, {100, 500}, {}, {}, {}});
+    // The work goes on after the failure and reports success; the batch still fails.
+    const Status st = f.project.batch([&]() -> Status {
+        REQUIRE(f.project.applyInBatch(good));
+        CHECK_FALSE(f.project.applyInBatch(bad));
+        return {};
+    });
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::InvalidArgument);
+    CHECK(f.dump() == before);
+    // Outside a batch it is refused.
+    const Status alone = f.project.applyInBatch(good);
+    REQUIRE_FALSE(alone);
+    CHECK(alone.error().code == ErrorCode::Internal);
+    CHECK(f.dump() == before);
+}
