@@ -167,7 +167,8 @@ Result<ReliabilityTable> readReliabilityTable(const QString &path)
         const QStringView unit = fields[0].trimmed();
         if (unit.isEmpty())
             return failAt(ErrorCode::InvalidInput, path, line, 1, tr("the unit id is empty."));
-        table.units << unit.toString();
+        // The id refers into the file's text, which the table keeps: no string per unit.
+        table.units << QString::fromRawData(unit.data(), unit.size());
         table.lines.push_back(line);
         if (const qsizetype first = seen.insertLast(); first >= 0) {
             const qint64 firstLine = table.lines[size_t(first)];
@@ -189,7 +190,8 @@ Result<ReliabilityTable> readReliabilityTable(const QString &path)
         table.cells.push_back(std::move(cells));
         return {};
     };
-    FOURFOLD_TRY_STATUS(forEachCsvRecord(*text, path, readRecord));
+    table.storage = std::move(*text);
+    FOURFOLD_TRY_STATUS(forEachCsvRecord(table.storage, path, readRecord));
     if (columns == 0)
         return failAt(ErrorCode::InvalidInput, path, 1, 0,
             tr("the file is empty; expected a header row \"unit,<coder>,<coder>,...\"."));
