@@ -5,8 +5,10 @@
 #include <QMap>
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <map>
+#include <numeric>
 #include <set>
 
 namespace fourfold {
@@ -41,6 +43,48 @@ QStringList setMembers(const QString &cell)
     parts.removeDuplicates();
     parts.sort();
     return parts;
+}
+
+struct DistinctLabels {
+    QStringList labels; // in the order they first appear (unit by unit, coder by coder)
+    std::vector<std::pair<size_t, qsizetype>> first; // (unit, coder) where each first appears
+};
+
+// The distinct labels of the table's non-empty cells; `cells` (units × coders) gets each cell's
+// label index, or kMissing for an empty cell.
+DistinctLabels distinctLabels(const ReliabilityTable &table, std::vector<int> &cells)
+{
+    const qsizetype coders = table.coders.size();
+    cells.assign(table.cells.size() * size_t(coders), kMissing);
+    DistinctLabels out;
+    QHash<QString, int> index;
+    // Cells that share their characters (the reader interns labels, so a label's cells do)
+    // are recognised by address and length without hashing the text: within this call the
+    // table does not change, so equal address and length mean equal text.
+    struct Seen {
+        const QChar *data = nullptr;
+        qsizetype size = 0;
+        int label = 0;
+    };
+    std::array<Seen, 64> seen {};
+    for (size_t u = 0; u < table.cells.size(); ++u)
+        for (qsizetype c = 0; c < coders; ++c) {
+            const QString &cell = table.cells[u][c];
+            if (cell.isEmpty())
+                continue;
+            Seen &s = seen[(quintptr(cell.constData()) >> 4) % seen.size()];
+            if (s.data != cell.constData() || s.size != cell.size()) {
+                auto found = index.constFind(cell);
+                if (found == index.constEnd()) {
+                    found = index.insert(cell, int(out.labels.size()));
+                    out.labels << cell;
+                    out.first.emplace_back(u, c);
+                }
+                s = Seen {cell.constData(), cell.size(), *found};
+            }
+            cells[u * size_t(coders) + size_t(c)] = s.label;
+        }
+    return out;
 }
 
 } // namespace
@@ -89,22 +133,30 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
     const qsizetype coders = table.coders.size();
     out.data.units = int(units);
     out.data.coders = int(coders);
-    out.data.cells.assign(units * size_t(coders), kMissing);
     out.metric.level = options.level;
+    if (options.distance && options.level != Level::Nominal)
+        return fail(ErrorCode::InvalidArgument,
+            tr("A set distance (Jaccard, MASI) cannot be combined with the %1 level.")
+                .arg(levelKey(options.level)));
+
+    // Each distinct label is read once: the cells first hold the index of their label (in the
+    // order labels first appear), which the label's code then replaces.
+    const DistinctLabels distinct = distinctLabels(table, out.data.cells);
+    std::vector<int> codeOf(size_t(distinct.labels.size()), 0);
+    const auto labelError = [&](qsizetype label, const QString &what) {
+        const auto [u, c] = distinct.first[size_t(label)];
+        return cellError(table, u, c, what);
+    };
 
     if (options.distance) {
-        if (options.level != Level::Nominal)
-            return fail(ErrorCode::InvalidArgument,
-                tr("A set distance (Jaccard, MASI) cannot be combined with the %1 level.")
-                    .arg(levelKey(options.level)));
         // Distinct sets, in sorted order of their canonical "a|b" form.
         std::map<QString, QStringList> sets;
-        for (const QStringList &row : table.cells)
-            for (const QString &cell : row)
-                if (!cell.isEmpty()) {
-                    const QStringList members = setMembers(cell);
-                    sets.emplace(members.join(QLatin1Char('|')), members);
-                }
+        std::vector<QString> keyOf;
+        for (const QString &cell : distinct.labels) {
+            const QStringList members = setMembers(cell);
+            keyOf.push_back(members.join(QLatin1Char('|')));
+            sets.emplace(keyOf.back(), members);
+        }
         QStringList labels; // every label in any set, sorted
         for (const auto &[key, members] : sets)
             labels << members;
@@ -120,82 +172,66 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
                 ids.push_back(int(labels.indexOf(m)));
             memberCodes.push_back(ids);
         }
-        for (size_t u = 0; u < units; ++u)
-            for (qsizetype c = 0; c < coders; ++c) {
-                const QString &cell = table.cells[u][c];
-                if (!cell.isEmpty())
-                    out.data.cells[u * size_t(coders) + size_t(c)] =
-                        code.value(setMembers(cell).join(QLatin1Char('|')));
-            }
+        for (size_t l = 0; l < keyOf.size(); ++l)
+            codeOf[l] = code.value(keyOf[l]);
         out.data.values = int(memberCodes.size());
         out.metric.custom = setDistanceMatrix(memberCodes, *options.distance);
-        return out;
-    }
-
-    const bool ranked = options.level == Level::Ordinal && !options.order.isEmpty();
-    const bool numeric = !ranked && options.level != Level::Nominal;
-    if (ranked) {
-        out.valueLabels = options.order;
-        for (qsizetype i = 0; i < options.order.size(); ++i)
-            out.metric.numeric.push_back(double(i));
-    }
-    // Collect the distinct values first, so that codes follow the label or number order.
-    std::set<QString> labels;
-    std::set<double> numbers;
-    for (size_t u = 0; u < units; ++u)
-        for (qsizetype c = 0; c < coders; ++c) {
-            const QString &cell = table.cells[u][c];
-            if (cell.isEmpty())
-                continue;
+    } else {
+        const bool ranked = options.level == Level::Ordinal && !options.order.isEmpty();
+        const bool numeric = !ranked && options.level != Level::Nominal;
+        std::vector<double> numberOf; // per distinct label, when numeric
+        for (qsizetype l = 0; l < distinct.labels.size(); ++l) {
+            const QString &cell = distinct.labels[l];
             if (ranked) {
                 if (!options.order.contains(cell))
-                    return cellError(table, u, c,
+                    return labelError(l,
                         tr("\"%1\" is not one of the ordered values (%2).")
                             .arg(cell, options.order.join(QStringLiteral(", "))));
             } else if (numeric) {
                 bool ok = false;
                 const double v = cell.toDouble(&ok);
                 if (!ok || !std::isfinite(v))
-                    return cellError(table, u, c,
+                    return labelError(l,
                         tr("\"%1\" is not a number, as the %2 level needs.")
                             .arg(cell, levelKey(options.level)));
                 if (options.level == Level::Ratio && v < 0)
-                    return cellError(
-                        table, u, c, tr("%1 is negative; ratio values cannot be.").arg(cell));
-                numbers.insert(v);
-            } else {
-                labels.insert(cell);
+                    return labelError(l, tr("%1 is negative; ratio values cannot be.").arg(cell));
+                numberOf.push_back(v);
             }
         }
-    if (numeric) {
-        for (double v : numbers) {
-            out.metric.numeric.push_back(v);
-            out.valueLabels << QString::number(v, 'g', 17);
+        // Codes follow the given order, the size of the numbers or the sorted labels.
+        if (ranked) {
+            out.valueLabels = options.order;
+            for (qsizetype i = 0; i < options.order.size(); ++i)
+                out.metric.numeric.push_back(double(i));
+            for (qsizetype l = 0; l < distinct.labels.size(); ++l)
+                codeOf[size_t(l)] = int(options.order.lastIndexOf(distinct.labels[l]));
+        } else if (numeric) {
+            std::map<double, int> numberCode;
+            for (double v : numberOf)
+                numberCode.emplace(v, 0);
+            for (auto &[v, code] : numberCode) {
+                code = int(out.metric.numeric.size());
+                out.metric.numeric.push_back(v);
+                out.valueLabels << QString::number(v, 'g', 17);
+            }
+            for (size_t l = 0; l < numberOf.size(); ++l)
+                codeOf[l] = numberCode.at(numberOf[l]);
+        } else {
+            std::vector<qsizetype> sorted(size_t(distinct.labels.size()));
+            std::iota(sorted.begin(), sorted.end(), 0);
+            std::ranges::sort(sorted,
+                [&](qsizetype a, qsizetype b) { return distinct.labels[a] < distinct.labels[b]; });
+            for (qsizetype l : sorted) {
+                codeOf[size_t(l)] = int(out.valueLabels.size());
+                out.valueLabels << distinct.labels[l];
+            }
         }
-    } else if (!ranked) {
-        for (const QString &l : labels)
-            out.valueLabels << l;
+        out.data.values = int(out.valueLabels.size());
     }
-    std::map<double, int> numberCode;
-    for (double v : numbers)
-        numberCode.emplace(v, int(numberCode.size()));
-    QHash<QString, int> labelCode;
-    for (qsizetype i = 0; i < out.valueLabels.size(); ++i)
-        labelCode.insert(out.valueLabels[i], int(i));
-    for (size_t u = 0; u < units; ++u)
-        for (qsizetype c = 0; c < coders; ++c) {
-            const QString &cell = table.cells[u][c];
-            if (cell.isEmpty())
-                continue;
-            int value = 0;
-            if (numeric) {
-                value = numberCode.at(cell.toDouble());
-            } else {
-                value = labelCode.value(cell);
-            }
-            out.data.cells[u * size_t(coders) + size_t(c)] = value;
-        }
-    out.data.values = int(out.valueLabels.size());
+    for (int &cell : out.data.cells)
+        if (cell != kMissing)
+            cell = codeOf[size_t(cell)];
     return out;
 }
 

@@ -49,45 +49,56 @@ QString tokenText(const QString &text, const OffsetMap &map, const TextRange &to
 
 } // namespace
 
-QByteArray writeIob2(const std::vector<Iob2Document> &documents, bool withText)
+QByteArray iob2Header()
 {
     QString out = QStringLiteral("# fourfold iob2: token start end");
     for (FramingFunction f : kFramingFunctions)
         out += QLatin1Char(' ') + functionKey(f);
     out += QLatin1Char('\n');
-    for (const Iob2Document &d : documents) {
-        out += QStringLiteral("# article = %1\n# sha256 = %2\n# source = %3\n")
-                   .arg(d.externalId, d.sha256, d.source);
-        const bool text = withText && !d.text.isEmpty();
-        const OffsetMap map(text ? d.text : QString());
-        std::array<std::vector<TextRange>, 4> ranges;
-        std::array<std::size_t, 4> next {};
-        std::array<qint64, 4> open {-1, -1, -1, -1}; // start of the chunk the last token was in
-        for (FramingFunction f : kFramingFunctions)
-            ranges[std::size_t(f)] = mergedRanges(d.spans, f);
-        for (const TextRange &token : d.tokens) {
-            out += text ? tokenText(d.text, map, token) : QStringLiteral("_");
-            out += QStringLiteral("\t%1\t%2").arg(token.start).arg(token.end);
-            for (FramingFunction f : kFramingFunctions) {
-                const std::size_t i = std::size_t(f);
-                auto &n = next[i];
-                while (n < ranges[i].size() && ranges[i][n].end <= token.start)
-                    ++n;
-                QString tag = QStringLiteral("O");
-                if (n < ranges[i].size() && ranges[i][n].overlaps(token)) {
-                    const bool continues = open[i] == ranges[i][n].start;
-                    tag =
-                        (continues ? QStringLiteral("I-") : QStringLiteral("B-")) + functionKey(f);
-                    open[i] = ranges[i][n].start;
-                } else {
-                    open[i] = -1;
-                }
-                out += QLatin1Char('\t') + tag;
+    return out.toUtf8();
+}
+
+QByteArray writeIob2(const std::vector<Iob2Document> &documents, bool withText)
+{
+    QByteArray out = iob2Header();
+    for (const Iob2Document &d : documents)
+        out += writeIob2Document(d, withText);
+    return out;
+}
+
+QByteArray writeIob2Document(const Iob2Document &d, bool withText)
+{
+    QString out;
+    out += QStringLiteral("# article = %1\n# sha256 = %2\n# source = %3\n")
+               .arg(d.externalId, d.sha256, d.source);
+    const bool text = withText && !d.text.isEmpty();
+    const OffsetMap map(text ? d.text : QString());
+    std::array<std::vector<TextRange>, 4> ranges;
+    std::array<std::size_t, 4> next {};
+    std::array<qint64, 4> open {-1, -1, -1, -1}; // start of the chunk the last token was in
+    for (FramingFunction f : kFramingFunctions)
+        ranges[std::size_t(f)] = mergedRanges(d.spans, f);
+    for (const TextRange &token : d.tokens) {
+        out += text ? tokenText(d.text, map, token) : QStringLiteral("_");
+        out += QStringLiteral("\t%1\t%2").arg(token.start).arg(token.end);
+        for (FramingFunction f : kFramingFunctions) {
+            const std::size_t i = std::size_t(f);
+            auto &n = next[i];
+            while (n < ranges[i].size() && ranges[i][n].end <= token.start)
+                ++n;
+            QString tag = QStringLiteral("O");
+            if (n < ranges[i].size() && ranges[i][n].overlaps(token)) {
+                const bool continues = open[i] == ranges[i][n].start;
+                tag = (continues ? QStringLiteral("I-") : QStringLiteral("B-")) + functionKey(f);
+                open[i] = ranges[i][n].start;
+            } else {
+                open[i] = -1;
             }
-            out += QLatin1Char('\n');
+            out += QLatin1Char('\t') + tag;
         }
         out += QLatin1Char('\n');
     }
+    out += QLatin1Char('\n');
     return out.toUtf8();
 }
 

@@ -49,6 +49,10 @@ struct Iob2Document {
 // Writes the documents in the format above (UTF-8, LF). Token texts come from `text` unless
 // `withText` is false (or the text is empty).
 QByteArray writeIob2(const std::vector<Iob2Document> &documents, bool withText);
+// The parts of that file, for writing it a document at a time: the header line, then each
+// document (its comment lines, its tokens and the blank line that ends it).
+QByteArray iob2Header();
+QByteArray writeIob2Document(const Iob2Document &document, bool withText);
 
 // Reads a file written by writeIob2 and re-assembles the spans of each document (text left
 // empty; tokens and spans filled, spans in order of function then start). Fails with

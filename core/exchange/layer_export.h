@@ -63,6 +63,9 @@ struct ExportReport {
     QJsonObject manifest;
     // Split of each exported article by external id.
     std::vector<std::pair<QString, QString>> articleSplits;
+    // How many times an article's text was read: the export reads one article at a time, once
+    // per split and format whatever the number of sources (coders) covering it.
+    qint64 articleReads = 0;
 };
 
 // Writes the export. Fails with NotFound for an unknown coder or run, InvalidArgument when the

@@ -13,6 +13,7 @@
 #include <QJsonDocument>
 
 #include <map>
+#include <optional>
 #include <set>
 #include <tuple>
 #include <utility>
@@ -79,7 +80,10 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
     QHash<QString, ArticleId> bySha;
     for (const ArticleSummary &a : *summaries)
         bySha.insert(a.sha256, a.id);
-    std::map<qint64, Article> articles;
+    // The text of the article of the last annotation only (an export lists an article's
+    // annotations together), and the articles met, in order.
+    std::optional<Article> current;
+    std::set<qint64> articles;
 
     struct Pending {
         ArticleId article;
@@ -117,14 +121,14 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
             return where(i, id,
                 tr("no article of the project has the text with SHA-256 %1.")
                     .arg(span->articleSha256));
-        auto cached = articles.find(article->value);
-        if (cached == articles.end()) {
+        if (!current || current->summary.id != *article) {
             auto loaded = project.article(*article);
             if (!loaded)
                 return std::unexpected(loaded.error());
-            cached = articles.emplace(article->value, std::move(*loaded)).first;
+            current = std::move(*loaded);
+            articles.insert(article->value);
         }
-        const Article &a = cached->second;
+        const Article &a = *current;
         if (span->range.end > a.summary.length)
             return where(i, id,
                 tr("the range [%1, %2) lies outside the article's %3 code points.")
@@ -153,8 +157,8 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
     // What is already there, per article: annotation uuids and (coder, function, range).
     std::map<qint64, std::set<QString>> uuidsOf;
     std::map<qint64, std::set<std::tuple<qint64, int, qint64, qint64>>> spansOf;
-    for (const auto &[article, loaded] : articles) {
-        Q_UNUSED(loaded);
+    current.reset();
+    for (const qint64 article : articles) {
         auto existing = project.annotations(ArticleId {article});
         if (!existing)
             return std::unexpected(existing.error());
@@ -199,7 +203,7 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
             if (!uuid.isEmpty())
                 uuidsOf[p.article.value].insert(uuid);
             AddAnnotationEdit edit(p.article, *coder, p.content, phase);
-            if (auto applied = project.apply(edit); !applied) {
+            if (auto applied = project.applyInBatch(edit); !applied) {
                 if (applied.error().code == ErrorCode::InvalidInput
                     || applied.error().code == ErrorCode::InvalidArgument)
                     return where(p.index, p.id, applied.error().message);
@@ -212,7 +216,7 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
         for (const auto &[article, coder] : finished) {
             SetArticleStatusEdit done(
                 ArticleId {article}, CoderId {coder}, QStringLiteral("done"), phase);
-            FOURFOLD_TRY_STATUS(project.apply(done));
+            FOURFOLD_TRY_STATUS(project.applyInBatch(done));
         }
         report.articlesDone = qint64(finished.size());
         return {};

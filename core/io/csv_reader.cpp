@@ -46,134 +46,177 @@ QString quotedList(const QStringList &names)
 
 } // namespace
 
-Result<std::vector<CsvRecord>> parseCsvRecords(const QString &text, const QString &file)
+Status forEachCsvRecord(QStringView text, const QString &file, const CsvRecordSink &sink)
 {
-    std::vector<CsvRecord> records;
-    QStringList fields;
-    QString field;
+    std::vector<QStringView> fields;
+    std::vector<QString> unescaped; // quoted fields that held doubled quotes, this record
     CsvState state = CsvState::FieldStart;
     bool inRecord = false;
+    bool doubledQuote = false; // in the quoted field being read
     qint64 line = 1;
-    qint64 column = 0; // of the character being read, 1-based in code points
+    qsizetype lineStart = 0; // where the current line begins in `text`
     qint64 recordLine = 0;
+    qsizetype fieldStart = 0; // first character of the field (after its opening quote)
+    qsizetype quoteEnd = 0; // the closing quote of a quoted field
     qint64 quoteLine = 0;
-    qint64 quoteColumn = 0;
+    qsizetype quoteLineStart = 0;
+    qsizetype quoteAt = 0; // the opening quote
 
-    const auto endField = [&] {
-        fields.append(field);
-        field.clear();
+    // 1-based column in code points of the character at `at` on the line beginning at `from`.
+    const auto columnOf = [&](qsizetype from, qsizetype at) {
+        qint64 column = 0;
+        for (qsizetype k = from; k <= at; ++k)
+            if (!text[k].isLowSurrogate())
+                ++column;
+        return column;
     };
-    const auto endRecord = [&] {
-        endField();
-        records.push_back(CsvRecord {fields, recordLine});
+    const auto endQuotedField = [&] {
+        QStringView field = text.sliced(fieldStart, quoteEnd - fieldStart);
+        if (doubledQuote) {
+            // §2.7: a doubled quote stands for one.
+            unescaped.push_back(
+                field.toString().replace(QStringLiteral("\"\""), QStringLiteral("\"")));
+            field = unescaped.back();
+        }
+        fields.push_back(field);
+    };
+    const auto endRecord = [&]() -> Status {
+        Status st = sink(fields, recordLine);
         fields.clear();
+        unescaped.clear();
         inRecord = false;
         state = CsvState::FieldStart;
+        return st;
     };
-    const auto beginRecordIfNeeded = [&] {
+    const auto beginRecordIfNeeded = [&](qsizetype at) {
         if (!inRecord) {
             inRecord = true;
             recordLine = line;
         }
+        fieldStart = at;
     };
 
     const qsizetype size = text.size();
     qsizetype i = 0;
     while (i < size) {
-        const QChar c = text.at(i);
+        const QChar c = text[i];
         const bool lineBreak = c == u'\n' || c == u'\r';
         // CRLF is one line break; so are a lone LF and a lone CR.
-        const qsizetype width = (c == u'\r' && i + 1 < size && text.at(i + 1) == u'\n') ? 2 : 1;
-        if (!c.isLowSurrogate())
-            ++column;
+        const qsizetype width = (c == u'\r' && i + 1 < size && text[i + 1] == u'\n') ? 2 : 1;
 
         switch (state) {
         case CsvState::FieldStart:
             if (c == u'"') {
-                beginRecordIfNeeded();
+                beginRecordIfNeeded(i + 1);
                 state = CsvState::Quoted;
+                doubledQuote = false;
                 quoteLine = line;
-                quoteColumn = column;
+                quoteLineStart = lineStart;
+                quoteAt = i;
             } else if (c == u',') {
-                beginRecordIfNeeded();
-                endField();
+                beginRecordIfNeeded(i);
+                fields.push_back(QStringView());
             } else if (lineBreak) {
                 // A record that ends in a comma has an empty last field; an empty line is
                 // no record at all (skipped).
-                if (inRecord)
-                    endRecord();
+                if (inRecord) {
+                    fields.push_back(QStringView());
+                    FOURFOLD_TRY_STATUS(endRecord());
+                }
             } else {
-                beginRecordIfNeeded();
-                field.append(c);
+                beginRecordIfNeeded(i);
                 state = CsvState::Unquoted;
             }
             break;
         case CsvState::Unquoted:
             if (c == u',') {
-                endField();
+                fields.push_back(text.sliced(fieldStart, i - fieldStart));
                 state = CsvState::FieldStart;
             } else if (lineBreak) {
-                endRecord();
+                fields.push_back(text.sliced(fieldStart, i - fieldStart));
+                FOURFOLD_TRY_STATUS(endRecord());
             } else if (c == u'"') {
                 // RFC 4180 §2.5: a field that is not enclosed in double quotes may not hold one.
-                return failAt(ErrorCode::InvalidInput, file, line, column,
+                return failAt(ErrorCode::InvalidInput, file, line, columnOf(lineStart, i),
                     QCoreApplication::translate("ArticleReader",
                         "a double quote inside a field that does not begin with one; "
                         "enclose the field in double quotes and write the inner "
                         "quote twice (RFC 4180)"));
-            } else {
-                field.append(c);
             }
             break;
         case CsvState::Quoted:
-            if (c == u'"')
+            // Line breaks inside are kept (§2.6).
+            if (c == u'"') {
                 state = CsvState::QuoteInQuoted;
-            else
-                field.append(QStringView(text).mid(i, width)); // line breaks kept (§2.6)
+                quoteEnd = i;
+            }
             break;
         case CsvState::QuoteInQuoted:
             if (c == u'"') {
-                field.append(u'"'); // §2.7: a doubled quote stands for one
+                doubledQuote = true;
                 state = CsvState::Quoted;
             } else if (c == u',') {
-                endField();
+                endQuotedField();
                 state = CsvState::FieldStart;
             } else if (lineBreak) {
-                endRecord();
+                endQuotedField();
+                FOURFOLD_TRY_STATUS(endRecord());
             } else {
-                return failAt(ErrorCode::InvalidInput, file, line, column,
+                return failAt(ErrorCode::InvalidInput, file, line, columnOf(lineStart, i),
                     QCoreApplication::translate("ArticleReader",
                         "unexpected character after the closing double quote of a "
                         "field (opened at line %1, column %2); a double quote "
                         "inside a quoted field must be written twice (RFC 4180)")
                         .arg(quoteLine)
-                        .arg(quoteColumn));
+                        .arg(columnOf(quoteLineStart, quoteAt)));
             }
             break;
         }
 
+        i += width;
         if (lineBreak) {
             ++line;
-            column = 0;
+            lineStart = i;
         }
-        i += width;
     }
 
     switch (state) {
     case CsvState::FieldStart:
-        if (inRecord)
-            endRecord();
+        if (inRecord) {
+            fields.push_back(QStringView());
+            FOURFOLD_TRY_STATUS(endRecord());
+        }
         break;
     case CsvState::Unquoted:
+        // §2.2: the last record need not end with a line break.
+        fields.push_back(text.sliced(fieldStart, size - fieldStart));
+        FOURFOLD_TRY_STATUS(endRecord());
+        break;
     case CsvState::QuoteInQuoted:
-        endRecord(); // §2.2: the last record need not end with a line break
+        endQuotedField();
+        FOURFOLD_TRY_STATUS(endRecord());
         break;
     case CsvState::Quoted:
-        return failAt(ErrorCode::InvalidInput, file, quoteLine, quoteColumn,
+        return failAt(ErrorCode::InvalidInput, file, quoteLine, columnOf(quoteLineStart, quoteAt),
             QCoreApplication::translate("ArticleReader",
                 "the quoted field that begins here is never "
                 "closed: a closing double quote is missing"));
     }
+    return {};
+}
+
+Result<std::vector<CsvRecord>> parseCsvRecords(const QString &text, const QString &file)
+{
+    std::vector<CsvRecord> records;
+    FOURFOLD_TRY_STATUS(
+        forEachCsvRecord(text, file, [&](const std::vector<QStringView> &fields, qint64 line) {
+            CsvRecord record {{}, line};
+            record.fields.reserve(qsizetype(fields.size()));
+            for (QStringView field : fields)
+                record.fields.append(field.toString());
+            records.push_back(std::move(record));
+            return Status {};
+        }));
     return records;
 }
 

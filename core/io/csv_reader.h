@@ -9,6 +9,7 @@
 #include <QString>
 #include <QStringList>
 
+#include <functional>
 #include <vector>
 
 namespace fourfold {
@@ -25,6 +26,14 @@ struct CsvRecord {
 // and the column (1-based, in code points) of the fault; an unterminated quoted field is
 // reported at its opening quote.
 Result<std::vector<CsvRecord>> parseCsvRecords(const QString &text, const QString &file);
+
+// Receives one record: its fields as views (into the text, or for a quoted field holding a
+// doubled quote into the reader's buffer; valid only during the call) and the line where it
+// begins. An error stops the reading and is returned.
+using CsvRecordSink = std::function<Status(const std::vector<QStringView> &fields, qint64 line)>;
+// The same reading as parseCsvRecords, one record at a time and without a string per field:
+// the records up to the first fault reach `sink`, then the fault is returned as there.
+Status forEachCsvRecord(QStringView text, const QString &file, const CsvRecordSink &sink);
 
 // Reads the articles of a CSV file's bytes (UTF-8). `columns` maps Fourfold field names to
 // header names (ImportOptions::csvColumns). Returns the articles in record order without

@@ -17,6 +17,10 @@ struct ReliabilityTable {
     std::vector<QStringList> cells; // per unit, one trimmed cell per coder ("" = missing)
     std::vector<qint64> lines; // the line each unit's row begins on
     QString source; // the file, for messages
+    // The text read from the file when the unit ids refer into it rather than holding copies
+    // (QString::fromRawData); kept with the table, and shared by its copies, for as long as they
+    // live.
+    QString storage;
 };
 
 // Reads `path`. Fails with InvalidInput naming file and line for: invalid UTF-8, bad quoting,

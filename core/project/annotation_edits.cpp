@@ -5,7 +5,6 @@
 #include "core/store/article_table.h"
 #include "core/store/codebook_table.h"
 #include "core/store/store_util.h"
-#include "core/text/offset_map.h"
 
 #include <QCoreApplication>
 
@@ -21,17 +20,16 @@ QString tr(const char *text)
 // The quote at `range` of the article, after checking that the range lies inside its text.
 Result<QString> quoteAt(const Database &db, ArticleId article, const TextRange &range)
 {
-    auto text = store::articleText(db, article);
-    if (!text)
-        return std::unexpected(text.error());
-    const OffsetMap map(*text);
-    if (!range.isValid() || range.isEmpty() || range.end > map.codePointCount())
+    auto slice = store::articleSlice(db, article, range);
+    if (!slice)
+        return std::unexpected(slice.error());
+    if (!range.isValid() || range.isEmpty() || range.end > slice->length)
         return fail(ErrorCode::InvalidArgument,
             tr("The span [%1, %2) does not lie inside the article's text of %3 characters.")
                 .arg(range.start)
                 .arg(range.end)
-                .arg(map.codePointCount()));
-    return OffsetMap::slice(*text, range);
+                .arg(slice->length));
+    return slice->text;
 }
 
 Result<Annotation> liveAnnotation(const Database &db, AnnotationId id)

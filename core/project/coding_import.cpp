@@ -13,6 +13,7 @@
 #include <QJsonDocument>
 #include <QJsonObject>
 
+#include <optional>
 #include <set>
 #include <utility>
 
@@ -45,9 +46,6 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
         return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));
-    auto decoded = decodeUtf8Strict(file.readAll(), path);
-    if (!decoded)
-        return std::unexpected(decoded.error());
 
     auto coders = project.coders();
     if (!coders)
@@ -56,22 +54,46 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
     for (const Coder &c : *coders)
         coderIds.insert(c.pseudonym, c.id);
 
-    struct Known {
+    // Article ids by external id, looked up once each; the text (and its offset map) of the
+    // article of the last line only, since lines come grouped by article: memory stays bounded
+    // by one article, not the study.
+    QHash<QString, ArticleId> articleIds;
+    struct Current {
         ArticleId id;
         QString text;
-    };
-    QHash<QString, Known> articles;
+        OffsetMap map {QString()};
+        // Its live spans, read at its first gold line; a span added after them drops them.
+        std::optional<std::vector<Annotation>> spans;
+    } article;
     CodingImportReport report;
     std::set<std::pair<qint64, qint64>> finished; // (article, coder) with imported codings
 
+    // Known keys of a line. Strict, as the article readers are: a misspelled or unknown key is
+    // an error, never silently dropped, and so is a value of the wrong type.
+    const QStringList known {QStringLiteral("article"), QStringLiteral("coder"),
+        QStringLiteral("function"), QStringLiteral("quote"), QStringLiteral("occurrence"),
+        QStringLiteral("attributes"), QStringLiteral("note"), QStringLiteral("confidence"),
+        QStringLiteral("gold"), QStringLiteral("rationale"), QStringLiteral("item"),
+        QStringLiteral("value")};
     auto work = [&]() -> Status {
-        const QStringList lines = decoded->split(QLatin1Char('\n'));
-        for (qsizetype i = 0; i < lines.size(); ++i) {
-            const qint64 lineNo = i + 1;
-            if (lines[i].trimmed().isEmpty())
+        // The file is read a line at a time: memory stays bounded by one line.
+        QByteArray line;
+        for (qint64 lineNo = 1; !file.atEnd(); ++lineNo) {
+            line = file.readLine();
+            if (lineNo == 1 && line.startsWith("\xEF\xBB\xBF"))
+                line.remove(0, 3);
+            if (auto valid = decodeUtf8Strict(line, path); !valid) {
+                // Reported as the check of the whole file reports it, at the line and column a
+                // text editor shows (there a lone CR ends a line too).
+                file.seek(0);
+                if (auto whole = decodeUtf8Strict(file.readAll(), path); !whole)
+                    return std::unexpected(whole.error());
+                return std::unexpected(valid.error());
+            }
+            if (QByteArrayView(line).trimmed().isEmpty())
                 continue;
             QJsonParseError error;
-            const QJsonDocument doc = QJsonDocument::fromJson(lines[i].toUtf8(), &error);
+            const QJsonDocument doc = QJsonDocument::fromJson(line, &error);
             if (error.error != QJsonParseError::NoError || !doc.isObject())
                 return failAt(ErrorCode::InvalidInput, path, lineNo,
                     error.error != QJsonParseError::NoError ? error.offset + 1 : 0,
@@ -79,15 +101,8 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                         .arg(error.error != QJsonParseError::NoError ? error.errorString()
                                                                      : tr("another JSON value")));
             const QJsonObject o = doc.object();
-            // Strict, as the article readers are: a misspelled or unknown key is an error, never
-            // silently dropped, and so is a value of the wrong type.
-            static const QStringList known {QStringLiteral("article"), QStringLiteral("coder"),
-                QStringLiteral("function"), QStringLiteral("quote"), QStringLiteral("occurrence"),
-                QStringLiteral("attributes"), QStringLiteral("note"), QStringLiteral("confidence"),
-                QStringLiteral("gold"), QStringLiteral("rationale"), QStringLiteral("item"),
-                QStringLiteral("value")};
-            for (const QString &key : o.keys())
-                if (!known.contains(key))
+            for (auto it = o.begin(); it != o.end(); ++it)
+                if (const QString key = it.key(); !known.contains(key))
                     return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
                         tr("unknown field \"%1\" (expected article, coder, function, quote, "
                            "occurrence, attributes, note, confidence, gold, rationale, item, "
@@ -115,19 +130,22 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             if (!coderIds.contains(*coderKey))
                 return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
                     tr("unknown coder \"%1\".").arg(*coderKey));
-            if (!articles.contains(*articleKey)) {
+            auto articleId = articleIds.constFind(*articleKey);
+            if (articleId == articleIds.constEnd()) {
                 auto id = project.articleByExternalId(*articleKey);
                 if (!id)
                     return std::unexpected(id.error());
                 if (!*id)
                     return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
                         tr("unknown article \"%1\".").arg(*articleKey));
-                auto article = project.article(**id);
-                if (!article)
-                    return std::unexpected(article.error());
-                articles.insert(*articleKey, Known {**id, article->text});
+                articleId = articleIds.insert(*articleKey, **id);
             }
-            const Known &article = articles[*articleKey];
+            if (article.id != *articleId) {
+                auto loaded = project.article(*articleId);
+                if (!loaded)
+                    return std::unexpected(loaded.error());
+                article = Current {*articleId, loaded->text, OffsetMap(loaded->text), {}};
+            }
             const CoderId coder = coderIds.value(*coderKey);
 
             if (o.contains(QLatin1String("item"))) {
@@ -138,7 +156,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 if (!value)
                     return std::unexpected(value.error());
                 SetJudgementEdit edit(article.id, coder, *item, *value, phase);
-                if (auto st = project.apply(edit); !st)
+                if (auto st = project.applyInBatch(edit); !st)
                     return failAt(st.error().code, path, lineNo, 0, st.error().message);
                 ++report.judgements;
                 finished.insert({article.id.value, coder.value});
@@ -173,10 +191,9 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                             .arg(occurrence)
                             .arg(*articleKey));
             }
-            const OffsetMap map(article.text);
             AnnotationContent content;
             content.function = *function;
-            content.range = map.codePointRangeFromUtf16(at, at + quote.size());
+            content.range = article.map.codePointRangeFromUtf16(at, at + quote.size());
             content.attributes = o.value(QLatin1String("attributes")).toObject();
             content.note = o.value(QLatin1String("note")).toString();
             if (o.value(QLatin1String("confidence")).isDouble())
@@ -188,11 +205,14 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             if (goldValue.toBool()) {
                 // A lead's gold span: its provenance is every live span of the same function
                 // that overlaps it.
-                auto existing = project.annotations(article.id);
-                if (!existing)
-                    return std::unexpected(existing.error());
+                if (!article.spans) {
+                    auto existing = project.annotations(article.id);
+                    if (!existing)
+                        return std::unexpected(existing.error());
+                    article.spans = std::move(*existing);
+                }
                 std::vector<AnnotationId> sources;
-                for (const Annotation &a : *existing)
+                for (const Annotation &a : *article.spans)
                     if (a.content.function == content.function
                         && a.content.range.overlaps(content.range))
                         sources.push_back(a.id);
@@ -200,23 +220,24 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 content.confidence.reset();
                 AdjudicateSpanEdit edit(article.id, coder, content, std::move(sources),
                     o.value(QLatin1String("rationale")).toString());
-                if (auto st = project.apply(edit); !st)
+                if (auto st = project.applyInBatch(edit); !st)
                     return failAt(st.error().code, path, lineNo, 0, st.error().message);
                 ++report.gold;
                 continue;
             }
             AddAnnotationEdit edit(article.id, coder, content, phase);
-            if (auto st = project.apply(edit); !st)
+            if (auto st = project.applyInBatch(edit); !st)
                 return failAt(st.error().code, path, lineNo, 0, st.error().message);
             ++report.spans;
+            article.spans.reset();
             finished.insert({article.id.value, coder.value});
         }
         // Imported codings are finished work: each article is marked done for its coder, so
         // that it counts (CodingScope).
-        for (const auto &[article, coder] : finished) {
+        for (const auto &[articleValue, coderValue] : finished) {
             SetArticleStatusEdit done(
-                ArticleId {article}, CoderId {coder}, QStringLiteral("done"), phase);
-            FOURFOLD_TRY_STATUS(project.apply(done));
+                ArticleId {articleValue}, CoderId {coderValue}, QStringLiteral("done"), phase);
+            FOURFOLD_TRY_STATUS(project.applyInBatch(done));
         }
         report.articlesDone = qint64(finished.size());
         return {};

@@ -289,8 +289,28 @@ Status Project::batch(const std::function<Status()> &work)
     auto sp = Savepoint::begin(m_db);
     if (!sp)
         return std::unexpected(sp.error());
-    FOURFOLD_TRY_STATUS(work());
+    std::optional<Error> outerError = std::exchange(m_batchError, std::nullopt);
+    ++m_batchDepth;
+    Status st = work();
+    --m_batchDepth;
+    std::optional<Error> failedEdit = std::exchange(m_batchError, std::move(outerError));
+    FOURFOLD_TRY_STATUS(st);
+    if (failedEdit)
+        return std::unexpected(*failedEdit);
     return sp->commit();
+}
+
+Status Project::applyInBatch(Edit &edit)
+{
+    if (m_batchDepth == 0)
+        return fail(ErrorCode::Internal, tr("An edit without its own savepoint needs a batch."));
+    Status st = edit.apply(m_db);
+    if (st)
+        st = store::appendEvent(
+            m_db, edit.actor(), edit.action(), edit.objectType(), edit.objectUuid());
+    if (!st && !m_batchError)
+        m_batchError = st.error();
+    return st;
 }
 
 Result<ProjectCounts> Project::counts() const

@@ -110,6 +110,11 @@ public:
     // Runs `work` (which may apply many edits) as one unit: if it fails, everything it wrote is
     // rolled back and its error returned.
     Status batch(const std::function<Status()> &work);
+    // Applies and logs `edit` inside the running batch() without a savepoint of its own, for
+    // imports of many rows that give up at their first failure: a failed edit may leave partial
+    // writes, so its failure also fails the batch (rolled back with that error even if `work`
+    // goes on and returns success). Internal if no batch is running.
+    Status applyInBatch(Edit &edit);
 
     // --- overview -------------------------------------------------------------------------
     Result<ProjectCounts> counts() const;
@@ -134,6 +139,8 @@ private:
     Database m_db;
     Settings m_settings;
     QString m_backupPath;
+    int m_batchDepth = 0;
+    std::optional<Error> m_batchError; // set by a failed applyInBatch() of the innermost batch
 };
 
 } // namespace fourfold

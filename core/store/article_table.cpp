@@ -199,7 +199,7 @@ Status forEachSegmentation(const Database &db, SegmentKind kind,
     auto stmt = db.prepare(QStringLiteral("SELECT article_id, %1 FROM article_units ORDER BY "
                                           "article_id")
                                .arg(kind == SegmentKind::Sentences ? QStringLiteral("sentences")
-                                                                    : QStringLiteral("tokens")));
+                                                                   : QStringLiteral("tokens")));
     if (!stmt)
         return std::unexpected(stmt.error());
     while (true) {
@@ -216,12 +216,13 @@ Status forEachSegmentation(const Database &db, SegmentKind kind,
     }
 }
 
-Result<QString> articleText(const Database &db, ArticleId id)
+Result<ArticleSlice> articleSlice(const Database &db, ArticleId id, const TextRange &range)
 {
-    auto stmt = db.prepare(QStringLiteral("SELECT text FROM article WHERE id = ?1"));
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT length, substr(text, ?2 + 1, ?3) FROM article WHERE id = ?1"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    stmt->bind(1, id.value);
+    stmt->bind(1, id.value).bind(2, range.start).bind(3, range.end - range.start);
     auto row = stmt->step();
     if (!row)
         return std::unexpected(row.error());
@@ -229,7 +230,7 @@ Result<QString> articleText(const Database &db, ArticleId id)
         return fail(ErrorCode::NotFound,
             QCoreApplication::translate("ArticleTable", "There is no article #%1 in the project.")
                 .arg(id.value));
-    return stmt->columnText(0);
+    return ArticleSlice {stmt->columnInt(0), stmt->columnText(1)};
 }
 
 Result<std::optional<ArticleId>> articleIdByExternalId(

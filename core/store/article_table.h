@@ -27,8 +27,14 @@ Result<Article> article(const Database &db, ArticleId id);
 // Stops at and returns the first error of `visit` or of the file.
 Status forEachSegmentation(const Database &db, SegmentKind kind,
     const std::function<Status(ArticleId, std::vector<TextRange> &&)> &visit);
-// The article text only; NotFound if there is none.
-Result<QString> articleText(const Database &db, ArticleId id);
+// The part of an article's text at a code-point range, read without the rest of the text.
+struct ArticleSlice {
+    qint64 length = 0; // the whole text's length in code points
+    QString text; // the text at the range, if the range lies inside [0, length]
+};
+// The article's length and its text at `range` (SQLite's length() and substr() count
+// characters, which in its UTF-8 text are code points). NotFound if there is no article `id`.
+Result<ArticleSlice> articleSlice(const Database &db, ArticleId id, const TextRange &range);
 // The article with this external id or SHA-256, if any.
 Result<std::optional<ArticleId>> articleIdByExternalId(
     const Database &db, const QString &externalId);

@@ -34,25 +34,26 @@ Result<CodebookVersionId> insertCodebookVersion(
 
 namespace {
 
-// Reads the codebook in the current row of `stmt` (columns id, number, content).
-// Parsed codebooks by their stored JSON: a version's content never changes, and every span
-// edit validates against the current codebook, so an import of many spans parses it once.
-// Shared by the connections of all threads.
+// Reads the codebook in the current row of `stmt` (columns id, number, content, uuid).
+// Parsed codebooks by their version's uuid: a version's content never changes once stored (a
+// copy of the project keeps the uuid with the same content), and every span edit validates
+// against the current codebook, so an import of many spans parses it once and reads its
+// content once. Shared by the connections of all threads.
 QMutex cacheMutex;
-QHash<QByteArray, Codebook> parsedCache;
+QHash<QString, Codebook> parsedCache;
 std::atomic<qint64> parses {0};
 
 Result<Codebook> readCodebook(Statement &stmt)
 {
-    const QByteArray content = stmt.columnBlob(2);
+    const QString uuid = stmt.columnText(3);
     Codebook book;
     {
         QMutexLocker lock(&cacheMutex);
-        auto cached = parsedCache.constFind(content);
+        auto cached = parsedCache.constFind(uuid);
         if (cached != parsedCache.constEnd()) {
             book = *cached;
         } else {
-            auto parsed = Codebook::fromJson(content,
+            auto parsed = Codebook::fromJson(stmt.columnBlob(2),
                 QCoreApplication::translate("CodebookTable", "codebook version %1")
                     .arg(stmt.columnInt(1)));
             if (!parsed)
@@ -60,7 +61,7 @@ Result<Codebook> readCodebook(Statement &stmt)
             ++parses;
             if (parsedCache.size() >= 32)
                 parsedCache.clear();
-            parsedCache.insert(content, *parsed);
+            parsedCache.insert(uuid, *parsed);
             book = std::move(*parsed);
         }
     }
@@ -79,7 +80,7 @@ qint64 codebookParses()
 Result<Codebook> currentCodebook(const Database &db)
 {
     auto stmt = db.prepare(QStringLiteral(
-        "SELECT id, number, content FROM codebook_version ORDER BY number DESC LIMIT 1"));
+        "SELECT id, number, content, uuid FROM codebook_version ORDER BY number DESC LIMIT 1"));
     if (!stmt)
         return std::unexpected(stmt.error());
     auto row = stmt->step();
@@ -94,7 +95,7 @@ Result<Codebook> currentCodebook(const Database &db)
 Result<Codebook> codebookByNumber(const Database &db, int number)
 {
     auto stmt = db.prepare(
-        QStringLiteral("SELECT id, number, content FROM codebook_version WHERE number = ?1"));
+        QStringLiteral("SELECT id, number, content, uuid FROM codebook_version WHERE number = ?1"));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, number);

@@ -15,7 +15,7 @@ namespace store {
 Result<CodebookVersionId> insertCodebookVersion(
     Database &db, const Codebook &codebook, const QString &note, CoderId author = {});
 // How many times a stored codebook was parsed in this process (parsed codebooks are kept by
-// content, so this counts distinct contents read). For tests that count work.
+// their version's uuid, so this counts distinct versions read). For tests that count work.
 qint64 codebookParses();
 // The current (highest-numbered) version. NotFound if the project has no codebook.
 Result<Codebook> currentCodebook(const Database &db);

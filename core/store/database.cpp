@@ -8,6 +8,13 @@
 
 namespace fourfold {
 
+namespace {
+
+// Enough for every query of the program's busiest path; more are compiled for each use.
+constexpr qsizetype kMaxIdleStatements = 128;
+
+} // namespace
+
 ErrorCode errorCodeForSqlite(int rc)
 {
     switch (rc & 0xff) {
@@ -40,6 +47,8 @@ Database::Database(Database &&other) noexcept
     , m_path(std::move(other.m_path))
     , m_faultHook(std::move(other.m_faultHook))
     , m_statementsRun(other.m_statementsRun)
+    , m_statementsPrepared(other.m_statementsPrepared)
+    , m_idle(std::exchange(other.m_idle, {}))
 { }
 
 Database &Database::operator=(Database &&other) noexcept
@@ -50,12 +59,17 @@ Database &Database::operator=(Database &&other) noexcept
         m_path = std::move(other.m_path);
         m_faultHook = std::move(other.m_faultHook);
         m_statementsRun = other.m_statementsRun;
+        m_statementsPrepared = other.m_statementsPrepared;
+        m_idle = std::exchange(other.m_idle, {});
     }
     return *this;
 }
 
 void Database::close()
 {
+    for (sqlite3_stmt *stmt : std::as_const(m_idle))
+        sqlite3_finalize(stmt);
+    m_idle.clear();
     if (m_db) {
         sqlite3_close_v2(m_db);
         m_db = nullptr;
@@ -101,8 +115,8 @@ Result<Database> Database::open(const QString &path, OpenMode mode)
         return std::unexpected(e);
     }
     if (mode != OpenMode::ReadOnly) {
-        if (auto st =
-                db.exec(QStringLiteral("PRAGMA journal_mode = WAL; PRAGMA synchronous = NORMAL;"));
+        if (auto st = db.exec(QStringLiteral("PRAGMA journal_mode = WAL; PRAGMA synchronous = "
+                                             "NORMAL; PRAGMA cache_size = -65536;"));
             !st)
             return std::unexpected(st.error());
     }
@@ -127,13 +141,28 @@ Status Database::exec(const QString &sql)
 
 Result<Statement> Database::prepare(const QString &sql) const
 {
+    if (sqlite3_stmt *idle = m_idle.take(sql))
+        return Statement(this, idle, sql);
     sqlite3_stmt *stmt = nullptr;
     const QByteArray utf8 = sql.toUtf8();
-    const int rc = sqlite3_prepare_v3(m_db, utf8.constData(), int(utf8.size()), 0, &stmt, nullptr);
+    const int rc = sqlite3_prepare_v3(
+        m_db, utf8.constData(), int(utf8.size()), SQLITE_PREPARE_PERSISTENT, &stmt, nullptr);
     if (rc != SQLITE_OK)
         return std::unexpected(errorFor(
             rc, QCoreApplication::translate("Database", "A query could not be prepared.")));
-    return Statement(this, stmt);
+    ++m_statementsPrepared;
+    return Statement(this, stmt, sql);
+}
+
+void Database::recycle(const QString &sql, sqlite3_stmt *stmt) const
+{
+    sqlite3_reset(stmt);
+    sqlite3_clear_bindings(stmt);
+    if (!m_db || m_idle.size() >= kMaxIdleStatements || m_idle.contains(sql)) {
+        sqlite3_finalize(stmt);
+        return;
+    }
+    m_idle.insert(sql, stmt);
 }
 
 void Database::setBusyTimeout(int milliseconds)

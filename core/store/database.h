@@ -5,12 +5,14 @@
 
 #include "core/model/error.h"
 
+#include <QHash>
 #include <QString>
 
 #include <functional>
 #include <memory>
 
 struct sqlite3;
+struct sqlite3_stmt;
 
 namespace fourfold {
 
@@ -44,7 +46,9 @@ public:
     // (5,000 ms after open()).
     void setBusyTimeout(int milliseconds);
 
-    // Compiles one statement. Fails with the mapped error code.
+    // Compiles one statement, or takes the one compiled before for the same `sql` that is not
+    // in use: a finished Statement goes back to the connection (reset, bindings cleared), so a
+    // query run once per row is compiled once per connection. Fails with the mapped error code.
     Result<Statement> prepare(const QString &sql) const;
 
     // The rowid of the last successful INSERT on this connection.
@@ -67,14 +71,24 @@ public:
     // in a bounded number of queries keeps this figure independent of the project's size.
     qint64 statementsRun() const { return m_statementsRun; }
     void countStatementRun() const { ++m_statementsRun; }
+    // How many statements this connection has compiled (prepare() calls that found no finished
+    // statement of the same SQL to reuse). Tests check that an import compiles a fixed number
+    // whatever the number of its rows.
+    qint64 statementsPrepared() const { return m_statementsPrepared; }
 
 private:
+    friend class Statement;
     void close();
+    // Takes back a finished statement of `sql` for reuse (Statement's destructor).
+    void recycle(const QString &sql, sqlite3_stmt *stmt) const;
 
     sqlite3 *m_db = nullptr;
     QString m_path;
     FaultHook m_faultHook;
     mutable qint64 m_statementsRun = 0;
+    mutable qint64 m_statementsPrepared = 0;
+    // Finished statements by their SQL, at most one per text and kMaxIdleStatements in all.
+    mutable QHash<QString, sqlite3_stmt *> m_idle;
 };
 
 // Maps an SQLite primary result code to Fourfold's error code.

@@ -10,29 +10,42 @@
 
 namespace fourfold {
 
-Statement::Statement(const Database *db, sqlite3_stmt *stmt)
+Statement::Statement(const Database *db, sqlite3_stmt *stmt, QString sql)
     : m_db(db)
     , m_stmt(stmt)
+    , m_sql(std::move(sql))
 { }
 
 Statement::~Statement()
 {
-    sqlite3_finalize(m_stmt);
+    release();
 }
 
 Statement::Statement(Statement &&other) noexcept
     : m_db(other.m_db)
     , m_stmt(std::exchange(other.m_stmt, nullptr))
+    , m_sql(std::move(other.m_sql))
 { }
 
 Statement &Statement::operator=(Statement &&other) noexcept
 {
     if (this != &other) {
-        sqlite3_finalize(m_stmt);
+        release();
         m_db = other.m_db;
         m_stmt = std::exchange(other.m_stmt, nullptr);
+        m_sql = std::move(other.m_sql);
     }
     return *this;
+}
+
+void Statement::release()
+{
+    if (!m_stmt)
+        return;
+    if (m_db && !m_sql.isEmpty())
+        m_db->recycle(m_sql, std::exchange(m_stmt, nullptr));
+    else
+        sqlite3_finalize(std::exchange(m_stmt, nullptr));
 }
 
 Statement &Statement::bind(int index, qint64 value)

@@ -17,7 +17,8 @@ class Database;
 class Statement
 {
 public:
-    Statement(const Database *db, sqlite3_stmt *stmt);
+    // Owns `stmt`; when `sql` is given, hands it back to `db` for reuse when destroyed.
+    Statement(const Database *db, sqlite3_stmt *stmt, QString sql = {});
     ~Statement();
     Statement(Statement &&other) noexcept;
     Statement &operator=(Statement &&other) noexcept;
@@ -47,8 +48,12 @@ public:
     std::optional<double> columnOptionalDouble(int index) const;
 
 private:
+    // Gives the statement back to its connection for reuse, or finalizes it.
+    void release();
+
     const Database *m_db = nullptr;
     sqlite3_stmt *m_stmt = nullptr;
+    QString m_sql; // the key under which the connection keeps it for reuse; empty: finalized
 };
 
 } // namespace fourfold

@@ -20,10 +20,18 @@ inline QString newUuid()
     return QUuid::createUuid().toString(QUuid::WithoutBraces);
 }
 
-// Now, as stored: ISO 8601 UTC with milliseconds.
+// Now, as stored: ISO 8601 UTC with milliseconds. Formatted once per millisecond (per thread):
+// an import stamps many rows within one.
 inline QString now()
 {
-    return QDateTime::currentDateTimeUtc().toString(Qt::ISODateWithMs);
+    thread_local qint64 formattedAt = -1;
+    thread_local QString formatted;
+    const qint64 ms = QDateTime::currentMSecsSinceEpoch();
+    if (ms != formattedAt) {
+        formatted = QDateTime::fromMSecsSinceEpoch(ms, Qt::UTC).toString(Qt::ISODateWithMs);
+        formattedAt = ms;
+    }
+    return formatted;
 }
 
 inline QString toJsonText(const QJsonObject &o)

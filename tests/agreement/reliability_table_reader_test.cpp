@@ -47,3 +47,36 @@ TEST_CASE("malformed matrices are refused with the line and what is wrong")
         CHECK(t.error().message.contains(QString::fromUtf8(c.expected)));
     }
 }
+
+TEST_CASE("cells with the same label share one string and a late repeated unit is found")
+{
+    // A string per distinct label, not per cell (the reader interns cell values); the
+    // repeated unit check holds thousands of units without a second copy of their ids.
+    QByteArray csv = "unit,A,B,C\n";
+    for (int u = 1; u <= 5000; ++u)
+        csv += "u" + QByteArray::number(u) + (u % 2 ? ",x,y, x \n" : ",y,,\"x\"\n");
+    QTemporaryDir dir;
+    auto t = readReliabilityTable(writeFile(dir, QStringLiteral("m.csv"), csv));
+    REQUIRE(t);
+    REQUIRE(t->cells.size() == 5000);
+    const QChar *x = t->cells[0][0].constData();
+    const QChar *y = t->cells[0][1].constData();
+    CHECK(x != y);
+    for (const QStringList &row : t->cells)
+        for (const QString &cell : row) {
+            if (cell == QLatin1String("x"))
+                CHECK(cell.constData() == x);
+            else if (cell == QLatin1String("y"))
+                CHECK(cell.constData() == y);
+            else
+                CHECK(cell.isEmpty());
+        }
+    CHECK(t->cells[1] == QStringList {QStringLiteral("y"), QString(), QStringLiteral("x")});
+
+    csv += "u1234,x,x,x\n";
+    auto repeated = readReliabilityTable(writeFile(dir, QStringLiteral("r.csv"), csv));
+    REQUIRE_FALSE(repeated);
+    CHECK(repeated.error().line == 5002);
+    CHECK(repeated.error().message.contains(
+        QStringLiteral("the unit \"u1234\" appears twice (first on line 1235)")));
+}

@@ -1,6 +1,9 @@
 #include "core/agreement/value_encoding.h"
 #include "tests/support/test_support.h"
 
+#include <algorithm>
+#include <random>
+
 using namespace fourfold;
 using namespace fourfold::reliability;
 
@@ -93,4 +96,88 @@ TEST_CASE("cells that do not fit the level are refused with file, line and cell"
     REQUIRE_FALSE(u);
     CHECK(
         u.error().message.contains(QStringLiteral("\"medium\" is not one of the ordered values")));
+}
+
+TEST_CASE("the first cell in unit order that does not fit is the one reported")
+{
+    EncodingOptions o;
+    o.level = Level::Interval;
+    // "x" and "y" are both refused; "x" (unit 2, coder A) comes before "y" (unit 2, coder B)
+    // although "y" alone would be reported too.
+    auto e = encodeTable(table({{QStringLiteral("1"), QStringLiteral("2")},
+                             {QStringLiteral("x"), QStringLiteral("y")},
+                             {QStringLiteral("y"), QStringLiteral("x")}}),
+        o);
+    REQUIRE_FALSE(e);
+    CHECK(e.error().line == 3);
+    CHECK(e.error().message.contains(QStringLiteral("unit \"u2\", coder \"A\": \"x\"")));
+}
+
+TEST_CASE("codes match a naive encoding on random tables with shared and unshared cells")
+{
+    // The reference: distinct labels sorted, each cell's code its label's position (nominal),
+    // or distinct numbers sorted (interval); written without any shortcut.
+    std::mt19937 rng(11);
+    const QStringList pool {QStringLiteral("a"), QStringLiteral("b"), QStringLiteral("ab"),
+        QStringLiteral("10"), QStringLiteral("9"), QStringLiteral("1e1"), QStringLiteral("-2")};
+    for (int round = 0; round < 200; ++round) {
+        const int units = 1 + int(rng() % 40);
+        std::vector<QStringList> cells;
+        for (int u = 0; u < units; ++u) {
+            QStringList row;
+            for (int c = 0; c < 2; ++c) {
+                const size_t pick = rng() % (size_t(pool.size()) + 1);
+                if (pick == size_t(pool.size()))
+                    row << QString();
+                else if (rng() % 2)
+                    row << pool[qsizetype(pick)]; // shares the pool's characters
+                else
+                    row << QString(pool[qsizetype(pick)].constData(),
+                        pool[qsizetype(pick)].size()); // its own copy
+            }
+            cells.push_back(row);
+        }
+        for (const Level level : {Level::Nominal, Level::Interval}) {
+            EncodingOptions o;
+            o.level = level;
+            const bool numeric = level == Level::Interval;
+            std::vector<QStringList> usable = cells;
+            if (numeric)
+                for (QStringList &row : usable)
+                    for (QString &cell : row)
+                        if (!cell.isEmpty()
+                            && (cell == QLatin1String("a") || cell == QLatin1String("b")
+                                || cell == QLatin1String("ab")))
+                            cell.clear();
+            auto e = encodeTable(table(usable), o);
+            REQUIRE(e);
+            std::vector<QString> labels;
+            std::vector<double> numbers;
+            for (const QStringList &row : usable)
+                for (const QString &cell : row)
+                    if (!cell.isEmpty()) {
+                        labels.push_back(cell);
+                        numbers.push_back(cell.toDouble());
+                    }
+            std::sort(labels.begin(), labels.end());
+            labels.erase(std::unique(labels.begin(), labels.end()), labels.end());
+            std::sort(numbers.begin(), numbers.end());
+            numbers.erase(std::unique(numbers.begin(), numbers.end()), numbers.end());
+            std::vector<int> expected;
+            for (const QStringList &row : usable)
+                for (const QString &cell : row) {
+                    if (cell.isEmpty())
+                        expected.push_back(kMissing);
+                    else if (numeric)
+                        expected.push_back(
+                            int(std::find(numbers.begin(), numbers.end(), cell.toDouble())
+                                - numbers.begin()));
+                    else
+                        expected.push_back(
+                            int(std::find(labels.begin(), labels.end(), cell) - labels.begin()));
+                }
+            CHECK(e->data.cells == expected);
+            CHECK(e->data.values == int(numeric ? numbers.size() : labels.size()));
+        }
+    }
 }

@@ -1,6 +1,7 @@
 #include "core/exchange/iob2_format.h"
 #include "core/exchange/layer_export.h"
 #include "core/text/offset_map.h"
+#include "tests/project/double_coded_project.h"
 #include "tests/scoring/scoring_fixture.h"
 
 #include <QCryptographicHash>
@@ -363,4 +364,47 @@ TEST_CASE("CSV cells a spreadsheet would run as formulas are neutralised", "[exc
     CHECK_FALSE(csv.contains(QStringLiteral(",@SUM(A1),")));
     // A number stays a number.
     CHECK(csv.contains(QStringLiteral("\r\n-7,")));
+}
+
+TEST_CASE_METHOD(ExportFixture, "the W3C file written a span at a time is what one document gives",
+    "[exchange][w3c]")
+{
+    // The items are streamed into the collection's frame; the file must be exactly Qt's
+    // indented form of the whole collection.
+    run(exportOptions(LayerSpec {LayerKind::Gold, {}}, ExportFormat::W3c));
+    const QByteArray bytes = file(ExportFormat::W3c, QStringLiteral("all.jsonld"));
+    const QJsonDocument doc = QJsonDocument::fromJson(bytes);
+    REQUIRE(doc.isObject());
+    CHECK(doc.object().value(QStringLiteral("total")).toInt() == 3);
+    CHECK(doc.object()
+              .value(QStringLiteral("first"))
+              .toObject()
+              .value(QStringLiteral("items"))
+              .toArray()
+              .size()
+        == 3);
+    CHECK(doc.toJson(QJsonDocument::Indented) == bytes);
+}
+
+TEST_CASE(
+    "an export reads each article once whatever the number of coders covering it", "[exchange]")
+{
+    // Double-coded articles: two coders cover each one, so a writer that read the article per
+    // coder's file would read it twice. Statements run grow by the same number per article.
+    const int sizes[3] = {6, 12, 24};
+    qint64 run[3][2] = {};
+    for (int i = 0; i < 3; ++i) {
+        test::DoubleCodedProject p(sizes[i]);
+        for (const ExportFormat format : {ExportFormat::Iob2, ExportFormat::W3c}) {
+            ExportOptions o = exportOptions(LayerSpec {LayerKind::Coders, {}}, format,
+                p.dir.filePath(QStringLiteral("out-") + exportFormatKey(format)));
+            Result<ExportReport> r;
+            run[i][format == ExportFormat::W3c] =
+                p.statementsRunBy([&] { r = exportLayer(p.project, o); });
+            REQUIRE(r);
+            CHECK(r->articleReads == sizes[i]);
+        }
+    }
+    for (int f = 0; f < 2; ++f)
+        CHECK(run[2][f] - run[1][f] == 2 * (run[1][f] - run[0][f]));
 }

@@ -1,5 +1,6 @@
 #include "core/exchange/layer_export.h"
 #include "core/exchange/w3c_import.h"
+#include "tests/project/double_coded_project.h"
 #include "tests/scoring/scoring_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -200,4 +201,43 @@ TEST_CASE_METHOD(
     CHECK(second->spans == 0);
     CHECK(second->skipped == 5);
     CHECK(spansOf(fresh) == spansOf(project));
+}
+
+TEST_CASE("a W3C import compiles the same statements for 6 articles as for 24", "[exchange][w3c]")
+{
+    // Every annotation reuses the prepared statements of the one before; the statements run
+    // grow by the same number per article, never with what is already stored.
+    const int sizes[3] = {6, 12, 24};
+    qint64 prepared[3] = {};
+    qint64 run[3] = {};
+    for (int i = 0; i < 3; ++i) {
+        test::DoubleCodedProject source(sizes[i]);
+        const QString out = source.dir.filePath(QStringLiteral("w3c"));
+        REQUIRE(exportLayer(source.project,
+            exportOptions(LayerSpec {LayerKind::Coders, {}}, ExportFormat::W3c, out)));
+        // The same articles, without codings.
+        test::ProjectFixture target;
+        QByteArray jsonl;
+        for (int a = 1; a <= sizes[i]; ++a)
+            jsonl += QStringLiteral("{\"id\":\"d%1\",\"title\":\"Piece %1\",\"language\":\"en\","
+                                    "\"text\":\"The quay of Oslade %1 is closing. The levy is "
+                                    "to blame. The town must act now.\"}\n")
+                         .arg(a)
+                         .toUtf8();
+        target.importJsonl(jsonl);
+        const Database &db = target.project.databaseForTesting();
+        const qint64 preparedBefore = db.statementsPrepared();
+        const qint64 runBefore = db.statementsRun();
+        auto r = importW3cAnnotations(target.project, out + QStringLiteral("/all.jsonld"));
+        INFO((r ? QString() : r.error().toString()).toStdString());
+        REQUIRE(r);
+        CHECK(r->spans == 4 * sizes[i]);
+        CHECK(r->skipped == 0);
+        prepared[i] = db.statementsPrepared() - preparedBefore;
+        run[i] = db.statementsRun() - runBefore;
+    }
+    CHECK(prepared[0] > 0);
+    CHECK(prepared[1] == prepared[0]);
+    CHECK(prepared[2] == prepared[0]);
+    CHECK(run[2] - run[1] == 2 * (run[1] - run[0]));
 }

@@ -336,3 +336,54 @@ TEST_CASE("article status lives on the coder's assignments; coding time adds up"
     REQUIRE_FALSE(st);
     CHECK(st.error().code == ErrorCode::InvalidArgument);
 }
+
+TEST_CASE("a span's quote and bounds count code points beyond ASCII and the BMP")
+{
+    ProjectFixture f;
+    // "Café 🚢 Brakwater 渡船 closes." : é is 2 UTF-8 bytes, the ship 4 bytes and 2 UTF-16
+    // units, each CJK character 3 bytes; 27 code points in all.
+    f.importJsonl("{\"id\":\"w1\",\"title\":\"W\",\"language\":\"en\",\"text\":"
+                  "\"Caf\xC3\xA9 \xF0\x9F\x9A\xA2 Brakwater \xE6\xB8\xA1\xE8\x88\xB9 closes.\"}\n");
+    const ArticleId w1 = f.articleId(QStringLiteral("w1"));
+    const CoderId c1 = f.addCoder(QStringLiteral("C01"));
+    AddAnnotationEdit ship(
+        w1, c1, AnnotationContent {FramingFunction::Problem, {5, 16}, {}, {}, {}});
+    REQUIRE(f.project.apply(ship));
+    CHECK(f.project.annotation(ship.annotationId())->quote
+        == QString::fromUtf8("\xF0\x9F\x9A\xA2 Brakwater"));
+    AddAnnotationEdit last(
+        w1, c1, AnnotationContent {FramingFunction::Cause, {17, 27}, {}, {}, {}});
+    REQUIRE(f.project.apply(last));
+    CHECK(f.project.annotation(last.annotationId())->quote
+        == QString::fromUtf8("\xE6\xB8\xA1\xE8\x88\xB9 closes."));
+    AddAnnotationEdit past(
+        w1, c1, AnnotationContent {FramingFunction::Cause, {17, 28}, {}, {}, {}});
+    const Status refused = f.project.apply(past);
+    REQUIRE_FALSE(refused);
+    CHECK(refused.error().code == ErrorCode::InvalidArgument);
+    CHECK(refused.error().message.contains(QStringLiteral("of 27 characters")));
+}
+
+TEST_CASE("an edit that fails inside a batch without its own savepoint fails the whole batch")
+{
+    EditFixture f;
+    const QString before = f.dump();
+    AddAnnotationEdit good(
+        f.f1, f.c1, AnnotationContent {FramingFunction::Problem, kFirstSentence, {}, {}, {}});
+    AddAnnotationEdit bad(
+        f.f1, f.c1, AnnotationContent {FramingFunction::Problem, {100, 500}, {}, {}, {}});
+    // The work goes on after the failure and reports success; the batch still fails.
+    const Status st = f.project.batch([&]() -> Status {
+        REQUIRE(f.project.applyInBatch(good));
+        CHECK_FALSE(f.project.applyInBatch(bad));
+        return {};
+    });
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::InvalidArgument);
+    CHECK(f.dump() == before);
+    // Outside a batch it is refused.
+    const Status alone = f.project.applyInBatch(good);
+    REQUIRE_FALSE(alone);
+    CHECK(alone.error().code == ErrorCode::Internal);
+    CHECK(f.dump() == before);
+}

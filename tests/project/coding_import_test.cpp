@@ -170,3 +170,60 @@ TEST_CASE("importing many codings parses the codebook at most once")
     // this process has parsed the same codebook before).
     CHECK(store::codebookParses() - before <= 1);
 }
+
+TEST_CASE("a codings import compiles the same statements for 40 lines as for 160")
+{
+    // Every kind of row (span, answer, gold, article marked done) reuses its prepared
+    // statements, so what an import compiles does not grow with its lines; and the statements
+    // it runs grow by the same number per line, never with what is already stored.
+    const int sizes[3] = {10, 20, 40};
+    qint64 prepared[3] = {};
+    qint64 run[3] = {};
+    for (int i = 0; i < 3; ++i) {
+        CodingFixture f;
+        f.addCoder(QStringLiteral("L01"), CoderRole::Lead);
+        QByteArray jsonl = "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\","
+                           "\"quote\":\"The ferry\"}\n";
+        for (int k = 0; k < sizes[i]; ++k)
+            jsonl += "{\"article\":\"f2\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":"
+                     "\"windpark\"}\n"
+                     "{\"article\":\"f2\",\"coder\":\"C01\",\"item\":\"dominant_function\","
+                     "\"value\":\"cause\"}\n";
+        // Gold lines whose one source is the span on f1.
+        for (int k = 0; k < sizes[i]; ++k)
+            jsonl += "{\"article\":\"f1\",\"coder\":\"L01\",\"gold\":true,\"function\":"
+                     "\"problem\",\"quote\":\"ferry\"}\n";
+        const Database &db = f.project.databaseForTesting();
+        const qint64 preparedBefore = db.statementsPrepared();
+        const qint64 runBefore = db.statementsRun();
+        auto r = f.run(jsonl);
+        INFO((r ? QString() : r.error().toString()).toStdString());
+        REQUIRE(r);
+        CHECK(r->spans == 1 + sizes[i]);
+        CHECK(r->judgements == sizes[i]);
+        CHECK(r->gold == sizes[i]);
+        CHECK(r->articlesDone == 2);
+        prepared[i] = db.statementsPrepared() - preparedBefore;
+        run[i] = db.statementsRun() - runBefore;
+    }
+    CHECK(prepared[0] > 0);
+    CHECK(prepared[1] == prepared[0]);
+    CHECK(prepared[2] == prepared[0]);
+    CHECK(run[2] - run[1] == 2 * (run[1] - run[0]));
+}
+
+TEST_CASE("invalid UTF-8 in a codings file names its line and column and changes nothing")
+{
+    CodingFixture f;
+    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    auto r = f.run("{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
+                   "\"ferry\"}\n"
+                   "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
+                   "\"f\xC3\"}\n");
+    REQUIRE_FALSE(r);
+    CHECK(r.error().code == ErrorCode::InvalidInput);
+    CHECK(r.error().line == 2);
+    CHECK(r.error().column == 62);
+    CHECK(r.error().message.contains(QStringLiteral("codings.jsonl:2:62")));
+    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+}
