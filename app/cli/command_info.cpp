@@ -1,6 +1,5 @@
 #include "app/cli/cli_output.h"
 #include "core/project/project.h"
-#include "core/store/schema.h"
 
 #include <QCoreApplication>
 #include <QJsonArray>
@@ -72,7 +71,7 @@ int runInfo(const QStringList &arguments)
         printJson(QJsonObject {
             {QStringLiteral("project"), project->settings().name},
             {QStringLiteral("file"), project->path()},
-            {QStringLiteral("schemaVersion"), kSchemaVersion},
+            {QStringLiteral("schemaVersion"), Project::schemaVersion()},
             {QStringLiteral("codebookVersion"), counts->codebookVersion},
             {QStringLiteral("defaultLanguage"), project->settings().defaultLanguage},
             {QStringLiteral("articles"), counts->articles},
@@ -101,7 +100,7 @@ int runInfo(const QStringList &arguments)
             .arg(project->settings().name, project->path()));
     out(QCoreApplication::translate(
         "cli", "Schema       version %1; codebook version %2; default language %3")
-            .arg(kSchemaVersion)
+            .arg(Project::schemaVersion())
             .arg(counts->codebookVersion)
             .arg(project->settings().defaultLanguage));
     out(QCoreApplication::translate("cli", "Articles     %1 (%2)")

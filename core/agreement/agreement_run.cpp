@@ -6,6 +6,8 @@
 #include <QCoreApplication>
 #include <QJsonArray>
 
+#include <algorithm>
+
 namespace fourfold {
 
 namespace {
@@ -44,11 +46,17 @@ std::vector<PairSpanAgreement> pairSpanAgreement(const ContinuumData &c)
             p.coderA = a;
             p.coderB = b;
             for (int category = 0; category < c.categories; ++category) {
+                // Each article (section of the continuum) is its own document, so matching
+                // advances article by article instead of scanning the whole continuum.
                 std::vector<reliability::LabelledSpan> ref, pred;
                 for (const reliability::ContinuumUnit &u : c.units)
-                    if (u.category == category && (u.coder == a || u.coder == b))
+                    if (u.category == category && (u.coder == a || u.coder == b)) {
+                        const int section = int(std::upper_bound(c.sectionBreaks.begin(),
+                                                    c.sectionBreaks.end(), u.begin)
+                            - c.sectionBreaks.begin());
                         (u.coder == a ? ref : pred)
-                            .push_back(reliability::LabelledSpan {0, 0, u.begin, u.end});
+                            .push_back(reliability::LabelledSpan {section, 0, u.begin, u.end});
+                    }
                 p.strict.push_back(
                     reliability::scoreSpans(ref, pred, 1, reliability::MatchMode::Strict).micro.f1);
                 p.overlap.push_back(

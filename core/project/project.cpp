@@ -126,6 +126,11 @@ Result<Article> Project::article(ArticleId id) const
     return store::article(m_db, id);
 }
 
+int Project::schemaVersion()
+{
+    return kSchemaVersion;
+}
+
 Status Project::forEachSegmentation(SegmentKind kind,
     const std::function<Status(ArticleId, std::vector<TextRange> &&)> &visit) const
 {

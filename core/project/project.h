@@ -40,6 +40,8 @@ public:
     // Fourfold project; NewerSchema if a newer Fourfold wrote it (the file is not touched); an
     // older file is backed up (see backupPath()) and upgraded.
     static Result<Project> open(const QString &path);
+    // The schema version this program writes (older files are migrated up to it when opened).
+    static int schemaVersion();
 
     Project(Project &&) noexcept = default;
     Project &operator=(Project &&) noexcept = default;
