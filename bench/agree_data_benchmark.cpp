@@ -7,6 +7,7 @@
 //
 //   agree_data_benchmark [UNITS=1000000] [CODERS=4] [CSV=a temporary file]
 
+#include "bench/bench_support.h"
 #include "core/agreement/value_encoding.h"
 #include "core/io/reliability_table_reader.h"
 #include "core/reliability/krippendorff_alpha.h"
@@ -28,15 +29,9 @@
 #include <vector>
 
 using namespace fourfold;
+using namespace fourfold::bench;
 
 namespace {
-
-double peakMiB()
-{
-    rusage usage {};
-    getrusage(RUSAGE_SELF, &usage);
-    return double(usage.ru_maxrss) / 1024.0;
-}
 
 bool writeMatrix(const QString &path, int units, int coders)
 {

@@ -5,6 +5,7 @@
 //
 //   coding_import_benchmark [ARTICLES=1000] [WORK_DIR=a temporary directory]
 
+#include "bench/bench_support.h"
 #include "bench/study_generator.h"
 #include "core/project/coding_import.h"
 #include "core/project/project.h"
@@ -22,27 +23,7 @@
 #include <vector>
 
 using namespace fourfold;
-
-namespace {
-
-double peakMiB()
-{
-    rusage usage {};
-    getrusage(RUSAGE_SELF, &usage);
-    return double(usage.ru_maxrss) / 1024.0;
-}
-
-template<typename T>
-T check(Result<T> r, const char *what)
-{
-    if (!r) {
-        std::fprintf(stderr, "%s: %s\n", what, qPrintable(r.error().toString()));
-        std::exit(1);
-    }
-    return std::move(*r);
-}
-
-} // namespace
+using namespace fourfold::bench;
 
 int main(int argc, char **argv)
 {

@@ -6,6 +6,7 @@
 //
 //   exchange_benchmark [ARTICLES=1000] [WORK_DIR=a temporary directory]
 
+#include "bench/bench_support.h"
 #include "bench/study_generator.h"
 #include "core/exchange/layer_export.h"
 #include "core/exchange/w3c_import.h"
@@ -26,25 +27,9 @@
 #include <vector>
 
 using namespace fourfold;
+using namespace fourfold::bench;
 
 namespace {
-
-double peakMiB()
-{
-    rusage usage {};
-    getrusage(RUSAGE_SELF, &usage);
-    return double(usage.ru_maxrss) / 1024.0;
-}
-
-template<typename T>
-T check(Result<T> r, const char *what)
-{
-    if (!r) {
-        std::fprintf(stderr, "%s: %s\n", what, qPrintable(r.error().toString()));
-        std::exit(1);
-    }
-    return std::move(*r);
-}
 
 void timed(const char *path, int articles, const std::function<void()> &work)
 {

@@ -11,8 +11,9 @@
 
 #include "app/desktop/main_window.h"
 #include "app/report/report_writer.h"
+#include "bench/bench_support.h"
 #include "bench/study_generator.h"
-#include "core/agreement/agreement_report.h"
+#include "core/agreement/agreement_run.h"
 #include "core/agreement/diagnostics.h"
 #include "core/agreement/disagreements.h"
 #include "core/agreement/project_units.h"
@@ -36,35 +37,9 @@
 #include <vector>
 
 using namespace fourfold;
+using namespace fourfold::bench;
 
 namespace {
-
-double peakMiB()
-{
-    rusage usage {};
-    getrusage(RUSAGE_SELF, &usage);
-    return double(usage.ru_maxrss) / 1024.0;
-}
-
-void fail(const char *what, const Error &e)
-{
-    std::fprintf(stderr, "%s: %s\n", what, qPrintable(e.toString()));
-    std::exit(1);
-}
-
-template<typename T>
-T check(Result<T> r, const char *what)
-{
-    if (!r)
-        fail(what, r.error());
-    return std::move(*r);
-}
-
-void check(const Status &s, const char *what)
-{
-    if (!s)
-        fail(what, s.error());
-}
 
 void row(const char *path, int articles, std::vector<double> seconds)
 {
@@ -86,25 +61,20 @@ void timed(const char *path, int articles, int rounds, const std::function<void(
     row(path, articles, seconds);
 }
 
+// What `fourfold-cli agree PROJECT --unit UNIT` computes, through the same AgreementRun.
 void agree(const Project &project, UnitKind unit, int replicates, bool diagnostics)
 {
-    UnitSelection s;
-    s.unit = unit;
-    auto counted = check(countedCodings(project, s), "codings");
-    auto table = check(unitTable(project, counted, s), "units");
-    EncodingOptions encoding;
-    encoding.distance = reliability::SetDistance::Masi;
-    auto encoded = check(encodeTable(table, encoding), "encoding");
+    const AgreementRun run = check(AgreementRun::load(project, {}), "codings");
+    AnalysisRequest request;
+    request.unit = unit;
     AgreementOptions options;
     options.bootstrapReplicates = replicates;
-    const AgreementReport report =
-        computeAgreement(encoded, table.coders, QStringLiteral("masi"), options);
-    if (!report.alpha.value)
+    const AnalysisResult analysed = check(run.analyse(request, options), "agreement");
+    if (!analysed.report.alpha.value)
         std::fprintf(stderr, "alpha undefined\n");
     if (diagnostics) {
-        check(leaveOneCoderOut(encoded, table.coders), "leave one coder out");
-        check(leaveOneArticleOut(encoded, table.units), "leave one article out");
-        check(matchSpans(project, s), "span matching");
+        check(leaveOneOutCosts(analysed), "leave one out");
+        check(run.matching(), "span matching");
     }
 }
 
@@ -162,11 +132,9 @@ int main(int argc, char **argv)
         "agree sentence --diagnostics", n, 3, [&] { agree(project, UnitKind::Sentence, 0, true); });
     timed("agree continuum (C01 and C02)", n, 3, [&] {
         UnitSelection s;
-        s.unit = UnitKind::Continuum;
         s.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
-        auto data = check(continuumData(project, s), "continuum");
-        reliability::unitizingAlpha(
-            0, data.length, int(data.coders.size()), data.categories, data.units);
+        const AgreementRun run = check(AgreementRun::load(project, s), "codings");
+        check(run.continuum(std::nullopt), "continuum");
     });
     timed("comparison queue", n, 3, [&] { check(disagreementQueue(project), "queue"); });
     {

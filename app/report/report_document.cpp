@@ -315,8 +315,8 @@ QString Builder::methodText() const
         QString v = tr("%1 α = %2")
                         .arg(esc(a->label.toLower()),
                             fig(a->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
-        if (a->result.contains(QStringLiteral("bootstrap")))
-            v += tr(" (95% CI %1)").arg(interval(a->id, QStringLiteral("bootstrap")));
+        if (a->result.contains(QStringLiteral("bootstrap_units")))
+            v += tr(" (95% CI %1)").arg(interval(a->id, QStringLiteral("bootstrap_units")));
         values << v;
     }
     const ReportAnalysis *all = m_d.analysis(QStringLiteral("functions"));
@@ -335,8 +335,10 @@ QString Builder::methodText() const
                      fig(all->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
     p += QStringLiteral(". ");
     if (m_d.options.bootstrapReplicates > 0)
-        p += esc(tr("Intervals are 95% bootstrap intervals from %1 resamples of pairable values "
-                    "(Hayes & Krippendorff, 2007). ")
+        p += esc(tr("Intervals are 95% percentile bootstrap intervals from %1 resamples of the "
+                    "units; the table also gives the interval from resampled pairable values "
+                    "(Hayes & Krippendorff, 2007), which is narrower than its nominal level when "
+                    "more than two coders are compared. ")
                      .arg(m_d.options.bootstrapReplicates));
     p += esc(tr("Following Krippendorff (2004), variables with α\u00a0≥\u00a00.800 are relied on "
                 "and variables with 0.667\u00a0≤\u00a0α\u00a0<\u00a00.800 support tentative "
@@ -441,8 +443,8 @@ QString Builder::variableTable() const
         "<th class=\"num\" width=\"8%\">α</th><th class=\"num\" width=\"13%\">%3</th>"
         "<th class=\"num\" width=\"13%\">%4</th><th class=\"num\" width=\"9%\">%5</th>"
         "<th width=\"17%\">%6</th></tr>")
-                .arg(esc(tr("Units")), esc(tr("Pairable values")), esc(tr("95% CI, pairs")),
-                    esc(tr("95% CI, units")), esc(tr("Agreement")), esc(tr("Verdict")));
+                .arg(esc(tr("Units")), esc(tr("Pairable values")), esc(tr("95% CI, units")),
+                    esc(tr("95% CI, pairs")), esc(tr("Agreement")), esc(tr("Verdict")));
     for (const ReportAnalysis &a : m_d.analyses) {
         if (a.kind == QLatin1String("continuum"))
             continue;
@@ -468,8 +470,8 @@ QString Builder::variableTable() const
                     .arg(fig(a.id, QStringLiteral("units"), QStringLiteral("int")),
                         fig(a.id, QStringLiteral("pairable_values"), QStringLiteral("int")),
                         fig(a.id, QStringLiteral("alpha.value"), QStringLiteral("f3")),
-                        interval(a.id, QStringLiteral("bootstrap")),
                         interval(a.id, QStringLiteral("bootstrap_units")),
+                        interval(a.id, QStringLiteral("bootstrap")),
                         fig(a.id, QStringLiteral("percent_agreement"), QStringLiteral("pct")));
         html += QStringLiteral("<td class=\"%1\">%2</td></tr>")
                     .arg(verdictClass(alpha),
@@ -481,9 +483,10 @@ QString Builder::variableTable() const
                 .arg(esc(tr("Units: %1 (articles for article-level items; passages matched "
                             "across coders for span attributes). Agreement: percent agreement, "
                             "which is not chance-corrected and is never reported alone "
-                            "(Lombard et al., 2002). Pairs: pairable values resampled with the "
-                            "expected disagreement held fixed (Hayes & Krippendorff, 2007); "
-                            "units: units resampled, percentile interval.")
+                            "(Lombard et al., 2002). Units: units resampled, percentile "
+                            "interval (the interval to report); pairs: pairable values resampled "
+                            "with the expected disagreement held fixed (Hayes & Krippendorff, "
+                            "2007), too narrow with more than two coders.")
                              .arg(unitWord(2))));
     return html;
 }

@@ -195,9 +195,11 @@ ReliabilityWindow::ReliabilityWindow(Project &project, QWidget *parent)
     m_summary->setSelectionBehavior(QAbstractItemView::SelectItems);
     tableLayout->addWidget(m_summary, 1);
     tableLayout->addWidget(note(tr("Alpha: Krippendorff's alpha, coincidence form (Krippendorff "
-                                   "2011). Interval: 95% bootstrap, pairs of values resampled "
-                                   "(Hayes & Krippendorff 2007); q(α < 0.800): share of "
-                                   "replicates below 0.800. Verdict: Krippendorff (2004, §12.2). "
+                                   "2011). Interval: 95% bootstrap, units resampled "
+                                   "(percentile; the pair interval of Hayes & Krippendorff 2007 "
+                                   "is in the report, and it is too narrow with more than two "
+                                   "coders); q(α < 0.800): share of replicates below 0.800. "
+                                   "Verdict: Krippendorff (2004, §12.2). "
                                    "Minimum values: Krippendorff (2004, §11.4) after Bloch & "
                                    "Kraemer (1989), for the rarest value at p = 0.05. Cohen's "
                                    "kappa per pair over the units both coded (Cohen 1960); "
@@ -534,7 +536,7 @@ void ReliabilityWindow::showOutcome()
 void ReliabilityWindow::showSummary()
 {
     const ReliabilityOutcome &o = *m_outcome;
-    QStringList rows {tr("Alpha"), tr("95% interval (bootstrap)"), tr("q(α < 0.800)"),
+    QStringList rows {tr("Alpha"), tr("95% interval (units resampled)"), tr("q(α < 0.800)"),
         tr("Verdict"), tr("Percent agreement"), tr("Fleiss' kappa")};
     const int pairRow = int(rows.size());
     const std::vector<PairAgreement> &pairs = o.columns.front().report.pairs;
@@ -568,8 +570,8 @@ void ReliabilityWindow::showSummary()
                     : tr("undefined")));
         if (!rep.alpha.value)
             m_summary->item(0, col)->setToolTip(QString::fromStdString(rep.alpha.reason));
-        if (rep.pairBootstrap && rep.pairBootstrap->ciLow) {
-            const auto &b = *rep.pairBootstrap;
+        if (rep.unitBootstrap && rep.unitBootstrap->ciLow) {
+            const auto &b = *rep.unitBootstrap;
             m_summary->setItem(
                 1, col, number(QStringLiteral("[%1, %2]").arg(fixed(b.ciLow), fixed(b.ciHigh))));
             m_summary->item(1, col)->setToolTip(
@@ -783,9 +785,9 @@ void ReliabilityWindow::showFunctionChart()
     } else {
         for (const ReliabilityColumn &c : o.columns) {
             Point p {columnTitle(c), c.function, c.report.alpha.value, {}, {}};
-            if (c.report.pairBootstrap) {
-                p.low = c.report.pairBootstrap->ciLow;
-                p.high = c.report.pairBootstrap->ciHigh;
+            if (c.report.unitBootstrap) {
+                p.low = c.report.unitBootstrap->ciLow;
+                p.high = c.report.unitBootstrap->ciHigh;
             }
             points.push_back(p);
         }
