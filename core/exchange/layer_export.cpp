@@ -12,6 +12,7 @@
 #include <QJsonArray>
 #include <QJsonDocument>
 #include <QSaveFile>
+#include <QSet>
 #include <QUrl>
 #include <QUuid>
 
@@ -89,6 +90,26 @@ QString fileSafe(const QString &s)
             ? c
             : QLatin1Char('_');
     return out;
+}
+
+// One file-name part per source, distinct even where their safe forms meet ("X/1", "X_1" and
+// "X?1" all read "X_1") and where only case differs (case-insensitive file systems): the first
+// keeps the plain form, the next get "-2", "-3", ... in source order. Parts are at most 60
+// characters, so a long pseudonym never makes a name the file system refuses.
+QStringList sourceFileParts(const QStringList &sources)
+{
+    constexpr qsizetype kMost = 60;
+    QStringList parts;
+    QSet<QString> taken;
+    for (const QString &source : sources) {
+        const QString base = fileSafe(source).left(kMost);
+        QString part = base;
+        for (int n = 2; taken.contains(part.toCaseFolded()); ++n)
+            part = base + QStringLiteral("-%1").arg(n);
+        taken.insert(part.toCaseFolded());
+        parts << part;
+    }
+    return parts;
 }
 
 // A file of the export written as it is made: its bytes go to disk and into its SHA-256 at
@@ -417,9 +438,10 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
         case ExportFormat::Iob2: {
             // One file per source, all written in one pass over the articles.
             std::vector<std::unique_ptr<StreamedFile>> files;
-            for (const QString &source : layer->sources) {
+            const QStringList parts = sourceFileParts(layer->sources);
+            for (const QString &part : parts) {
                 const QString name = layer->sources.size() > 1
-                    ? QStringLiteral("%1.%2.bio").arg(split, fileSafe(source))
+                    ? QStringLiteral("%1.%2.bio").arg(split, part)
                     : split + QStringLiteral(".bio");
                 files.push_back(std::make_unique<StreamedFile>(dir, name));
                 FOURFOLD_TRY_STATUS(files.back()->open());

@@ -6,6 +6,7 @@
 
 #include <QCryptographicHash>
 #include <QDir>
+#include <QFileInfo>
 #include <QJsonArray>
 #include <QJsonDocument>
 
@@ -407,4 +408,42 @@ TEST_CASE(
     }
     for (int f = 0; f < 2; ++f)
         CHECK(run[2][f] - run[1][f] == 2 * (run[1][f] - run[0][f]));
+}
+
+TEST_CASE("pseudonyms whose file names meet still export to one file each", "[exchange][iob2]")
+{
+    // "X/1", "X_1" and "X?1" all become "X_1" in a file name, "x_1" differs only in case, and a
+    // 300-character pseudonym is longer than a file system allows: every coder still gets a file
+    // of their own, and the manifest lists exactly the files written.
+    test::ScoringFixture fx;
+    const QStringList pseudonyms {QStringLiteral("X/1"), QStringLiteral("X_1"),
+        QStringLiteral("X?1"), QStringLiteral("x_1"), QString(300, QLatin1Char('L'))};
+    for (const QString &p : pseudonyms) {
+        auto coder = fx.project.addCoder(QStringLiteral("Someone"), p, CoderRole::Coder);
+        REQUIRE(coder);
+        fx.code(fx.f1, *coder, F::Problem, 0, 9);
+    }
+    ExportOptions o;
+    o.layer = LayerSpec {LayerKind::Coders, {}};
+    o.format = ExportFormat::Iob2;
+    o.outDir = fx.dir.filePath(QStringLiteral("bio"));
+    auto report = exportLayer(fx.project, o);
+    REQUIRE(report);
+    REQUIRE(report->files.size() == 5);
+    std::set<QString> names;
+    for (const ExportedFile &f : report->files) {
+        names.insert(f.name.toCaseFolded());
+        CHECK(f.name.size() < 80);
+        CHECK(QFileInfo::exists(QDir(o.outDir).filePath(f.name)));
+    }
+    CHECK(names.size() == 5);
+    // Each file holds the documents of one coder, named in its header.
+    std::set<QString> sources;
+    for (const ExportedFile &f : report->files) {
+        const QByteArray bytes = test::readFile(QDir(o.outDir).filePath(f.name));
+        for (const QString &p : pseudonyms)
+            if (bytes.contains(("source = " + p + "\n").toUtf8()))
+                sources.insert(p);
+    }
+    CHECK(sources.size() == 5);
 }
