@@ -4,6 +4,7 @@
 #include "core/reliability/span_scores.h"
 
 #include <QCoreApplication>
+#include <QHash>
 #include <QJsonArray>
 
 #include <algorithm>
@@ -18,18 +19,27 @@ QString tr(const char *text)
 }
 
 // Keeps only `keep` (function keys) in set labels "cause|problem" ("{}" when none is left).
+// Identical rows are restricted once and stay shared (see unitTable()).
 void restrictSets(ReliabilityTable &table, const QStringList &keep)
 {
-    for (QStringList &row : table.cells)
-        for (QString &cell : row) {
-            if (cell.isEmpty())
-                continue;
-            QStringList kept;
-            for (const QString &key : cell.split(QLatin1Char('|'), Qt::SkipEmptyParts))
-                if (keep.contains(key))
-                    kept << key;
-            cell = kept.isEmpty() ? QStringLiteral("{}") : kept.join(QLatin1Char('|'));
+    QHash<QStringList, QStringList> restricted;
+    for (QStringList &row : table.cells) {
+        auto it = restricted.constFind(row);
+        if (it == restricted.cend()) {
+            QStringList out = row;
+            for (QString &cell : out) {
+                if (cell.isEmpty())
+                    continue;
+                QStringList kept;
+                for (const QString &key : cell.split(QLatin1Char('|'), Qt::SkipEmptyParts))
+                    if (keep.contains(key))
+                        kept << key;
+                cell = kept.isEmpty() ? QStringLiteral("{}") : kept.join(QLatin1Char('|'));
+            }
+            it = restricted.insert(row, out);
         }
+        row = *it;
+    }
 }
 
 bool isSetUnit(const AnalysisRequest &request)

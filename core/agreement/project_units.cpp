@@ -11,6 +11,8 @@
 #include <algorithm>
 #include <array>
 #include <map>
+#include <string>
+#include <unordered_map>
 
 namespace fourfold {
 
@@ -233,10 +235,15 @@ const QString &setLabel(unsigned mask)
 // Units of one article's segmentation: per unit and coder, "present"/"absent" for one function
 // or the set of functions of the spans that overlap it; missing where the coder's coding of the
 // article does not count.
+// Rows of a table of segments by the value each coder gave (one byte per coder: the mask of
+// functions, or 0xff for missing). Identical rows share one QStringList (Qt's implicit sharing),
+// so a table of millions of token units holds a few hundred rows of strings, not millions.
+using SharedRows = std::unordered_map<std::string, QStringList>;
+
 void addSegmentUnits(ReliabilityTable &table, const ArticleSummary &summary,
     const std::vector<TextRange> &units,
     const std::map<std::pair<qint64, int>, std::vector<const Annotation *>> &spans,
-    const CountedCodings &s, const UnitSelection &sel, const QString &prefix)
+    const CountedCodings &s, const UnitSelection &sel, const QString &prefix, SharedRows &rows)
 {
     const qint64 articleId = summary.id.value;
     const qsizetype coders = table.coders.size();
@@ -261,20 +268,46 @@ void addSegmentUnits(ReliabilityTable &table, const ArticleSummary &summary,
         counted[size_t(c)] = s.counts(articleId, s.coders[size_t(c)].id.value);
     static const QString present = QStringLiteral("present");
     static const QString absent = QStringLiteral("absent");
+    // The article's unit ids in one string the table keeps; each id refers into it
+    // (QString::fromRawData), so a million units cost no million small allocations.
+    QString ids;
+    std::vector<std::pair<qsizetype, qsizetype>> idAt; // (start, length) in `ids`
+    idAt.reserve(units.size());
     for (size_t u = 0; u < units.size(); ++u) {
-        QStringList row;
-        row.reserve(coders);
+        const qsizetype start = ids.size();
+        ids += summary.externalId;
+        ids += prefix;
+        ids += QString::number(u + 1);
+        idAt.emplace_back(start, ids.size() - start);
+    }
+    table.storageParts.push_back(ids);
+    const QChar *idData = table.storageParts.back().constData();
+
+    std::string key(size_t(coders), '\0');
+    for (size_t u = 0; u < units.size(); ++u) {
         for (qsizetype c = 0; c < coders; ++c) {
             const unsigned mask = masks[u * size_t(coders) + size_t(c)];
-            if (!counted[size_t(c)])
-                row << QString();
-            else if (sel.function)
-                row << (mask ? present : absent);
-            else
-                row << setLabel(mask);
+            key[size_t(c)] = !counted[size_t(c)] ? char(0xff)
+                : sel.function                   ? char(mask ? 1 : 0)
+                                                 : char(mask);
         }
-        table.units << summary.externalId + prefix + QString::number(u + 1);
-        table.cells.push_back(std::move(row));
+        auto shared = rows.find(key);
+        if (shared == rows.end()) {
+            QStringList row;
+            row.reserve(coders);
+            for (qsizetype c = 0; c < coders; ++c) {
+                const unsigned mask = masks[u * size_t(coders) + size_t(c)];
+                if (!counted[size_t(c)])
+                    row << QString();
+                else if (sel.function)
+                    row << (mask ? present : absent);
+                else
+                    row << setLabel(mask);
+            }
+            shared = rows.emplace(key, std::move(row)).first;
+        }
+        table.units << QString::fromRawData(idData + idAt[u].first, idAt[u].second);
+        table.cells.push_back(shared->second);
     }
 }
 
@@ -357,12 +390,13 @@ Result<ReliabilityTable> unitTable(
         const QString prefix = sel.unit == UnitKind::Paragraph ? QStringLiteral("#p")
             : sel.unit == UnitKind::Sentence                   ? QStringLiteral("#s")
                                                                : QStringLiteral("#t");
+        SharedRows rows;
         FOURFOLD_TRY_STATUS(project.forEachSegmentation(
             kind, [&](ArticleId id, std::vector<TextRange> &&units) -> Status {
                 const ArticleSummary *summary = wanted.value(id.value);
                 if (!summary)
                     return {};
-                addSegmentUnits(table, *summary, units, spans, s, sel, prefix);
+                addSegmentUnits(table, *summary, units, spans, s, sel, prefix, rows);
                 return {};
             }));
     }

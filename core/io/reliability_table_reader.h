@@ -21,6 +21,8 @@ struct ReliabilityTable {
     // (QString::fromRawData); kept with the table, and shared by its copies, for as long as they
     // live.
     QString storage;
+    // More text unit ids refer into (a table built from a project keeps one per article).
+    std::vector<QString> storageParts;
 };
 
 // Reads `path`. Fails with InvalidInput naming file and line for: invalid UTF-8, bad quoting,
