@@ -35,11 +35,7 @@ int main(int argc, char **argv)
 
     bench::StudySpec spec;
     spec.articles = n;
-    const bench::StudyFiles files = bench::writeStudy(spec, dir);
-    if (files.articles.isEmpty()) {
-        std::fprintf(stderr, "cannot write the study into %s\n", qPrintable(dir));
-        return 1;
-    }
+    const bench::StudyFiles files = bench::writeStudyOrExit(spec, dir);
     const QString base = QDir(dir).filePath(QStringLiteral("template.fourfold"));
     QFile::remove(base);
     {

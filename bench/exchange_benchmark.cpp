@@ -63,11 +63,7 @@ int main(int argc, char **argv)
     QDir().mkpath(dir);
     bench::StudySpec spec;
     spec.articles = n;
-    const bench::StudyFiles files = bench::writeStudy(spec, dir);
-    if (files.articles.isEmpty()) {
-        std::fprintf(stderr, "cannot write the study into %s\n", qPrintable(dir));
-        return 1;
-    }
+    const bench::StudyFiles files = bench::writeStudyOrExit(spec, dir);
     const QString base = QDir(dir).filePath(QStringLiteral("articles.fourfold"));
     const QString study = QDir(dir).filePath(QStringLiteral("study.fourfold"));
     removeProject(base);

@@ -96,11 +96,7 @@ int main(int argc, char **argv)
     spec.coders = coders;
     QElapsedTimer clock;
     clock.start();
-    const bench::StudyFiles files = bench::writeStudy(spec, dir);
-    if (files.articles.isEmpty()) {
-        std::fprintf(stderr, "cannot write the study into %s\n", qPrintable(dir));
-        return 1;
-    }
+    const bench::StudyFiles files = bench::writeStudyOrExit(spec, dir);
     std::printf("study: %d articles, %d coders, %lld spans, %lld answers, %lld gold spans "
                 "(generated in %.1f s)\n",
         n, coders, files.spans, files.answers, files.goldSpans, double(clock.elapsed()) / 1000);

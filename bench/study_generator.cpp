@@ -6,6 +6,8 @@
 #include <QJsonObject>
 
 #include <array>
+#include <cstdio>
+#include <cstdlib>
 #include <random>
 #include <vector>
 
@@ -118,6 +120,16 @@ StudyFiles writeStudy(const StudySpec &spec, const QString &dir)
     if (articles.error() != QFile::NoError || codings.error() != QFile::NoError)
         return {};
     return out;
+}
+
+StudyFiles writeStudyOrExit(const StudySpec &spec, const QString &dir)
+{
+    StudyFiles files = writeStudy(spec, dir);
+    if (files.articles.isEmpty()) {
+        std::fprintf(stderr, "cannot write the study into %s\n", qPrintable(dir));
+        std::exit(1);
+    }
+    return files;
 }
 
 } // namespace fourfold::bench

@@ -34,5 +34,8 @@ struct StudyFiles {
 // Writes the study into `dir` (which must exist). Returns empty paths if a file cannot be
 // written.
 StudyFiles writeStudy(const StudySpec &spec, const QString &dir);
+// The same for a benchmark program: says why on stderr and ends the program if the files cannot
+// be written.
+StudyFiles writeStudyOrExit(const StudySpec &spec, const QString &dir);
 
 } // namespace fourfold::bench
