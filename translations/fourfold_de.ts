@@ -96,14 +96,9 @@
         <translation>Die Berechnung wurde abgebrochen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="65"/>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="49"/>
         <source>Choose at least one framing function.</source>
         <translation>Wählen Sie mindestens eine Framing-Funktion.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="108"/>
-        <source>The continuum could not be compared.</source>
-        <translation>Das Kontinuum konnte nicht verglichen werden.</translation>
     </message>
 </context>
 <context>
@@ -147,47 +142,47 @@
 <context>
     <name>fourfold::ArticleListModel</name>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="52"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="47"/>
         <source>done</source>
         <translation>erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="54"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="49"/>
         <source>in progress</source>
         <translation>in Arbeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="55"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="50"/>
         <source>not started</source>
         <translation>nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="97"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="92"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="99"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="94"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="101"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="96"/>
         <source>Lang.</source>
         <translation>Spr.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="105"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="100"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="107"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="102"/>
         <source>Time</source>
         <translation>Zeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="103"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="98"/>
         <source>Characters</source>
         <translation>Zeichen</translation>
     </message>
@@ -403,375 +398,375 @@
         <translation>Nur die Leitung vergleicht Codierende und entscheidet über den Goldstandard. Öffnen Sie das Projekt als Leitung, um dieses Fenster zu verwenden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="138"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="141"/>
         <source>Articles to adjudicate</source>
         <translation>Zu entscheidende Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="139"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="142"/>
         <source>Articles coded by several coders, most undecided disagreements first. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
         <translation>Von mehreren Codierenden codierte Artikel, die mit den meisten nicht entschiedenen Abweichungen zuerst. Offen: nicht entschiedene Abweichungen; Übereinstimmend: Passagen, in denen alle Codierenden übereinstimmen und die noch nicht im Goldstandard sind.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="156"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="159"/>
         <source>Margin: ∅ a coder has no span here · ≠ different functions · ↔ different boundaries · ≈ different attributes · ✓ decided. Lanes under each line: problem (solid), cause (dashed), evaluation (dotted), remedy (dash-dot). Hatched: this coder has no span in the passage.</source>
         <translation>Rand: ∅ eine codierende Person hat hier keine Textstelle · ≠ unterschiedliche Funktionen · ↔ unterschiedliche Grenzen · ≈ unterschiedliche Merkmale · ✓ entschieden. Spuren unter jeder Zeile: Problem (durchgezogen), Ursache (gestrichelt), Bewertung (gepunktet), Lösung (Strich-Punkt). Schraffiert: diese codierende Person hat in der Passage keine Textstelle.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="191"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="196"/>
         <source>Who</source>
         <translation>Wer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="191"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="196"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="191"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="196"/>
         <source>Decision</source>
         <translation>Entscheidung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="196"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="201"/>
         <source>Spans of the passage</source>
         <translation>Textstellen der Passage</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="207"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="212"/>
         <source>&amp;Rationale (optional, kept with the decision):</source>
         <translation>&amp;Begründung (optional, wird mit der Entscheidung gespeichert):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="209"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="214"/>
         <source>Why this decision, for the method section</source>
         <translation>Warum diese Entscheidung, für den Methodenteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="213"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="218"/>
         <source>Keys: N / P next and previous disagreement, Alt+Down / Alt+Up next and previous article; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; Ctrl+Shift+A accept all agreed; Ctrl+L rationale; Ctrl+Z undo.</source>
         <translation>Tasten: N / P nächste und vorherige Abweichung, Alt+Pfeil nach unten / Alt+Pfeil nach oben nächster und vorheriger Artikel; A gewählte Textstelle übernehmen, M gewählte Textstellen vereinen, E bearbeiten, R verwerfen, W Goldstandard-Textstelle zurückziehen; Strg+Umschalt+A alle übereinstimmenden übernehmen; Strg+L Begründung; Strg+Z rückgängig.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="245"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="251"/>
         <source>Comparison</source>
         <translation>Vergleich</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="259"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="265"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="585"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="641"/>
         <source>, </source>
         <translation>, </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="265"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="271"/>
         <source>Function: </source>
         <translation>Funktion: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="267"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="273"/>
         <source>All functions</source>
         <translation>Alle Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="270"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="276"/>
         <source>Function filter</source>
         <translation>Funktionsfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="276"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="282"/>
         <source>  Coders: </source>
         <translation>  Codierende: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="278"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="284"/>
         <source>All coders</source>
         <translation>Alle Codierenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="285"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="291"/>
         <source>%1 and %2</source>
         <translation>%1 und %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="287"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="293"/>
         <source>Coder pair filter</source>
         <translation>Filter nach Codierpaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="293"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="299"/>
         <source>Show decided</source>
         <translation>Entschiedene zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="294"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
         <source>Also step through disagreements already decided</source>
         <translation>Auch bereits entschiedene Abweichungen durchgehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="297"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="303"/>
         <source>Articles in progress</source>
         <translation>Artikel in Bearbeitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="298"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="304"/>
         <source>Also compare coders on articles they have started but not yet marked done</source>
         <translation>Codierer auch bei Artikeln vergleichen, die sie begonnen, aber noch nicht als fertig markiert haben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="306"/>
         <source>Show articles in progress</source>
         <translation>Artikel in Bearbeitung zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="308"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="314"/>
         <source>Previous</source>
         <translation>Zurück</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="309"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="315"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorherige nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="316"/>
         <source>Next</source>
         <translation>Weiter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="316"/>
         <source>Next undecided disagreement</source>
         <translation>Nächste nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="312"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
         <source>Previous article</source>
         <translation>Vorheriger Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="313"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
         <source>Previous article in the queue</source>
         <translation>Vorheriger Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="324"/>
         <source>Next article</source>
         <translation>Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
         <source>Next article in the queue</source>
         <translation>Nächster Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="333"/>
         <source>Accept</source>
         <translation>Übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="333"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Die Textstelle der gewählten codierenden Person in den Goldstandard übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="329"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
         <source>Merge</source>
         <translation>Vereinen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="330"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eine Textstelle, die die gewählten Textstellen umfasst, in den Goldstandard aufnehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="337"/>
         <source>Edit…</source>
         <translation>Bearbeiten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="332"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Eine Goldstandard-Textstelle mit eigener Funktion und eigenen Grenzen festlegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
         <source>Reject</source>
         <translation>Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="341"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Festhalten, dass die gewählten Textstellen nicht in den Goldstandard gehören</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="342"/>
         <source>Withdraw gold</source>
         <translation>Zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="342"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Die gewählte Goldstandard-Textstelle zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="344"/>
         <source>Accept all agreed</source>
         <translation>Übereinstimmende übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="346"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Jede Textstelle übernehmen, in der alle Codierenden des Artikels übereinstimmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="346"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
         <source>Undo</source>
         <translation>Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="354"/>
         <source>Redo</source>
         <translation>Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="490"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="496"/>
         <source>Gold (%1)</source>
         <translation>Goldstandard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="490"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="627"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="496"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="633"/>
         <source>Gold</source>
         <translation>Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="535"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="541"/>
         <source>No undecided disagreement left in this article. Alt+Down opens the next article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel. Alt+Pfeil nach unten öffnet den nächsten Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="552"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="558"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="568"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="574"/>
         <source>No spans to compare in this article.</source>
         <translation>Keine Textstellen zum Vergleichen in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="569"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="575"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klicken Sie auf eine Passage oder drücken Sie N für die nächste Abweichung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="585"/>
         <source>no span by %1</source>
         <translation>keine Textstelle von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="582"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="588"/>
         <source>different functions</source>
         <translation>unterschiedliche Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="584"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="590"/>
         <source>different boundaries</source>
         <translation>unterschiedliche Grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="586"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="592"/>
         <source>different attributes</source>
         <translation>unterschiedliche Merkmale</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="594"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="600"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 von %2 (Absatz %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="598"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="604"/>
         <source>the coders agree</source>
         <translation>die Codierenden stimmen überein</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="598"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="604"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="599"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="605"/>
         <source> — decided</source>
         <translation> — entschieden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="618"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="624"/>
         <source>Characters %1 to %2</source>
         <translation>Zeichen %1 bis %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="619"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="625"/>
         <source>rejected</source>
         <translation>verworfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="619"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="625"/>
         <source>in gold</source>
         <translation>im Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="641"/>
         <source>drawn by the lead</source>
         <translation>von der Leitung gezogen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="641"/>
         <source>from %1</source>
         <translation>von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="637"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="643"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Entschieden von %1 am %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="639"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="645"/>
         <source> Rationale: %1</source>
         <translation> Begründung: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="647"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="653"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Goldstandard %1 entschieden von %2 am %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="733"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="742"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Rückgängig mit %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="745"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="769"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Wählen Sie die Textstelle einer codierenden Person zum Übernehmen (oder mehrere zum Vereinen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="772"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="796"/>
         <source>Choose a passage first.</source>
         <translation>Wählen Sie zuerst eine Passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="810"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="834"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Wählen Sie die zu verwerfenden Textstellen (die noch nicht verworfen sind).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="821"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="845"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Wählen Sie eine Goldstandard-Textstelle zum Zurückziehen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="841"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="865"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>In diesem Artikel ist keine übereinstimmende Passage mehr zu übernehmen.</translation>
     </message>
@@ -779,47 +774,47 @@
 <context>
     <name>fourfold::DisagreementQueueModel</name>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="64"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="74"/>
         <source>%1 passages: %2 with a disagreement (%3 undecided), %4 agreed and not yet in gold. Only one coder or not all: %5; function: %6; boundaries: %7; attributes: %8.</source>
         <translation>%1 Passagen: %2 mit Abweichung (%3 nicht entschieden), %4 übereinstimmend und noch nicht im Goldstandard. Nur eine codierende Person oder nicht alle: %5; Funktion: %6; Grenzen: %7; Merkmale: %8.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="86"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="96"/>
         <source>Passages with a disagreement not yet decided</source>
         <translation>Passagen mit noch nicht entschiedener Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="88"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="98"/>
         <source>Passages with a disagreement, decided or not</source>
         <translation>Passagen mit Abweichung, entschieden oder nicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="90"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="100"/>
         <source>Passages all coders agree on that are not yet in gold</source>
         <translation>Passagen, in denen alle Codierenden übereinstimmen und die noch nicht im Goldstandard sind</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="99"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="109"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="101"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="111"/>
         <source>Open</source>
         <translation>Offen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="103"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="113"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="105"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="115"/>
         <source>Agreed</source>
         <translation>Übereinst.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="107"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="117"/>
         <source>Coders</source>
         <translation>Codierende</translation>
     </message>
@@ -1357,52 +1352,61 @@
 <context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="117"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="122"/>
         <source>Write the reliability report</source>
         <translation>Reliabilitätsbericht schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="119"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="123"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webseite (*.html);;PDF-Dokument (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="126"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="129"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="130"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="129"/>
-        <source>The report was written to %1.</source>
-        <translation>Der Bericht wurde nach %1 geschrieben.</translation>
+        <location filename="../app/desktop/lead_windows.cpp" line="134"/>
+        <source>The reliability report was written to %1.</source>
+        <translation>Der Reliabilitätsbericht wurde nach %1 geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="138"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="146"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="159"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="162"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="135"/>
+        <source>&amp;Open</source>
+        <translation>&amp;Öffnen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/lead_windows.cpp" line="136"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="175"/>
+        <source>Open the &amp;folder</source>
+        <translation>&amp;Ordner öffnen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/lead_windows.cpp" line="147"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="155"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="168"/>
         <source>Coder copy</source>
         <translation>Kopie für Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="147"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="156"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Eine Kopie für Codierende enthält nur die dieser Person zugewiesenen Artikel, das Codebuch und ihre eigenen Codierungen. Für wen ist die Kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="153"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="162"/>
         <source>Write the coder copy</source>
         <translation>Kopie für Codierende schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="154"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="163"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="185"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-Projekt (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="163"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="172"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 für %2 geschrieben: %n Artikel, %3 Textstelle(n).</numerusform>
@@ -1410,18 +1414,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="185"/>
         <source>Merge returned coder copies</source>
         <translation>Zurückgegebene Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="178"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="190"/>
         <source>Merge coder copies</source>
         <translation>Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="179"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="191"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -1430,303 +1433,314 @@
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="187"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="198"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): bereits zusammengeführt, nichts Neues.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 neu, %4 geändert (%5 gelöscht), %6 Konflikt(e).</translation>
     </message>
-    <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="198"/>
-        <source>Conflicts keep the project&apos;s version until you decide: fourfold-cli merge PROJECT --conflicts lists them.</source>
-        <translation>Bei Konflikten bleibt die Fassung des Projekts erhalten, bis Sie entscheiden: fourfold-cli merge PROJECT --conflicts listet sie auf.</translation>
+    <message numerus="yes">
+        <location filename="../app/desktop/lead_windows.cpp" line="208"/>
+        <source>Merged %n copy(ies); %1 conflict(s) keep the project&apos;s version until you decide (fourfold-cli merge PROJECT --conflicts lists them).</source>
+        <translation>
+            <numerusform>%n Kopie zusammengeführt; %1 Konflikt(e) behalten die Fassung des Projekts, bis Sie entscheiden (fourfold-cli merge PROJECT --conflicts listet sie).</numerusform>
+            <numerusform>%n Kopien zusammengeführt; %1 Konflikt(e) behalten die Fassung des Projekts, bis Sie entscheiden (fourfold-cli merge PROJECT --conflicts listet sie).</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/lead_windows.cpp" line="212"/>
+        <source>Merged %n copy(ies).</source>
+        <translation>
+            <numerusform>%n Kopie zusammengeführt.</numerusform>
+            <numerusform>%n Kopien zusammengeführt.</numerusform>
+        </translation>
     </message>
 </context>
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="687"/>
+        <location filename="../app/desktop/main_window.cpp" line="693"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="175"/>
+        <location filename="../app/desktop/main_window.cpp" line="183"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="96"/>
+        <location filename="../app/desktop/main_window.cpp" line="104"/>
         <source>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manual frame analysis of news and opinion articles: problem, cause, evaluation, remedy.&lt;/p&gt;</source>
         <translation>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manuelle Frame-Analyse von Nachrichten- und Meinungsartikeln: Problem, Ursache, Bewertung, Lösung.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="103"/>
+        <location filename="../app/desktop/main_window.cpp" line="111"/>
         <source>Open a project…</source>
         <translation>Projekt öffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="106"/>
+        <location filename="../app/desktop/main_window.cpp" line="114"/>
         <source>Open the sample project</source>
         <translation>Beispielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="108"/>
+        <location filename="../app/desktop/main_window.cpp" line="116"/>
         <source>Invented demo data: three local controversies, three coders.</source>
         <translation>Erfundene Demodaten: drei lokale Streitfragen, drei Codierende.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="114"/>
-        <location filename="../app/desktop/main_window.cpp" line="127"/>
+        <location filename="../app/desktop/main_window.cpp" line="122"/>
+        <location filename="../app/desktop/main_window.cpp" line="135"/>
         <source>Recent projects</source>
         <translation>Zuletzt geöffnete Projekte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="146"/>
+        <location filename="../app/desktop/main_window.cpp" line="154"/>
         <source>Search the texts…</source>
         <translation>Texte durchsuchen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="148"/>
+        <location filename="../app/desktop/main_window.cpp" line="156"/>
         <source>Search articles</source>
         <translation>Artikel durchsuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="155"/>
+        <location filename="../app/desktop/main_window.cpp" line="163"/>
         <source>Status filter</source>
         <translation>Statusfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="156"/>
+        <location filename="../app/desktop/main_window.cpp" line="164"/>
         <source>All articles</source>
         <translation>Alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="157"/>
+        <location filename="../app/desktop/main_window.cpp" line="165"/>
         <source>Not started</source>
         <translation>Nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="158"/>
+        <location filename="../app/desktop/main_window.cpp" line="166"/>
         <source>In progress</source>
         <translation>In Arbeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="159"/>
+        <location filename="../app/desktop/main_window.cpp" line="167"/>
         <source>Done</source>
         <translation>Erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="217"/>
+        <location filename="../app/desktop/main_window.cpp" line="225"/>
         <source>Mark the selected text as %1 (key %2)</source>
         <translation>Ausgewählten Text als %1 markieren (Taste %2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="228"/>
+        <location filename="../app/desktop/main_window.cpp" line="236"/>
         <source>Mark as done</source>
         <translation>Als erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="229"/>
+        <location filename="../app/desktop/main_window.cpp" line="237"/>
         <source>Mark this article as done and open the next one (Ctrl+Return)</source>
         <translation>Diesen Artikel als erledigt markieren und den nächsten öffnen (Strg+Eingabe)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="297"/>
+        <location filename="../app/desktop/main_window.cpp" line="305"/>
         <source>&amp;Project</source>
         <translation>&amp;Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="298"/>
+        <location filename="../app/desktop/main_window.cpp" line="306"/>
         <source>&amp;New project…</source>
         <translation>&amp;Neues Projekt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="299"/>
+        <location filename="../app/desktop/main_window.cpp" line="307"/>
         <source>&amp;Open…</source>
         <translation>Ö&amp;ffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="300"/>
+        <location filename="../app/desktop/main_window.cpp" line="308"/>
         <source>&amp;Import articles…</source>
         <translation>Artikel &amp;importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="302"/>
+        <location filename="../app/desktop/main_window.cpp" line="310"/>
         <source>Open the &amp;sample project</source>
         <translation>Bei&amp;spielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="304"/>
+        <location filename="../app/desktop/main_window.cpp" line="312"/>
         <source>&amp;Quit</source>
         <translation>&amp;Beenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="306"/>
+        <location filename="../app/desktop/main_window.cpp" line="314"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="307"/>
-        <location filename="../app/desktop/main_window.cpp" line="445"/>
+        <location filename="../app/desktop/main_window.cpp" line="315"/>
+        <location filename="../app/desktop/main_window.cpp" line="453"/>
         <source>&amp;Undo</source>
         <translation>&amp;Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="310"/>
-        <location filename="../app/desktop/main_window.cpp" line="448"/>
+        <location filename="../app/desktop/main_window.cpp" line="318"/>
+        <location filename="../app/desktop/main_window.cpp" line="456"/>
         <source>&amp;Redo</source>
         <translation>&amp;Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="314"/>
+        <location filename="../app/desktop/main_window.cpp" line="322"/>
         <source>&amp;Code</source>
         <translation>&amp;Codieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="318"/>
+        <location filename="../app/desktop/main_window.cpp" line="326"/>
         <source>Mark as %1	%2</source>
         <translation>Als %1 markieren	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="322"/>
+        <location filename="../app/desktop/main_window.cpp" line="330"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel als &amp;erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="324"/>
+        <location filename="../app/desktop/main_window.cpp" line="332"/>
         <source>&amp;Next article</source>
         <translation>&amp;Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="327"/>
+        <location filename="../app/desktop/main_window.cpp" line="335"/>
         <source>&amp;Find in texts</source>
         <translation>In Texten &amp;suchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="328"/>
+        <location filename="../app/desktop/main_window.cpp" line="336"/>
         <source>&amp;Training feedback…</source>
         <translation>&amp;Trainingsfeedback…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="335"/>
+        <location filename="../app/desktop/main_window.cpp" line="343"/>
         <source>&amp;View</source>
         <translation>&amp;Ansicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="336"/>
+        <location filename="../app/desktop/main_window.cpp" line="344"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Textstellen &amp;aller Codierenden zeigen (nur Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="346"/>
+        <location filename="../app/desktop/main_window.cpp" line="354"/>
         <source>&amp;Lead</source>
         <translation>&amp;Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="347"/>
+        <location filename="../app/desktop/main_window.cpp" line="355"/>
         <source>&amp;Compare and adjudicate…</source>
         <translation>&amp;Vergleichen und entscheiden…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="349"/>
+        <location filename="../app/desktop/main_window.cpp" line="357"/>
         <source>&amp;Reliability…</source>
         <translation>&amp;Reliabilität…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="351"/>
+        <location filename="../app/desktop/main_window.cpp" line="359"/>
         <source>Write the reliability &amp;report…</source>
         <translation>Reliabilitäts&amp;bericht schreiben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="353"/>
+        <location filename="../app/desktop/main_window.cpp" line="361"/>
         <source>&amp;Study design…</source>
         <translation>&amp;Studiendesign…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="354"/>
+        <location filename="../app/desktop/main_window.cpp" line="362"/>
         <source>&amp;Progress…</source>
         <translation>&amp;Fortschritt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="355"/>
+        <location filename="../app/desktop/main_window.cpp" line="363"/>
         <source>&amp;Hand out a coder copy…</source>
         <translation>&amp;Kopie für Codierende ausgeben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="356"/>
+        <location filename="../app/desktop/main_window.cpp" line="364"/>
         <source>&amp;Merge returned coder copies…</source>
         <translation>Zurückgegebene Kopien &amp;zusammenführen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="358"/>
+        <location filename="../app/desktop/main_window.cpp" line="366"/>
         <source>&amp;Extractor runs…</source>
         <translation>&amp;Extraktorläufe…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="362"/>
+        <location filename="../app/desktop/main_window.cpp" line="370"/>
         <source>&amp;Settings</source>
         <translation>&amp;Einstellungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="363"/>
+        <location filename="../app/desktop/main_window.cpp" line="371"/>
         <source>&amp;Language</source>
         <translation>&amp;Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="368"/>
+        <location filename="../app/desktop/main_window.cpp" line="376"/>
         <source>System language</source>
         <translation>Systemsprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="379"/>
+        <location filename="../app/desktop/main_window.cpp" line="387"/>
         <source>&amp;Help</source>
         <translation>&amp;Hilfe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="381"/>
+        <location filename="../app/desktop/main_window.cpp" line="389"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="398"/>
+        <location filename="../app/desktop/main_window.cpp" line="406"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Im Projekt gibt es keine Codierenden mit dem Pseudonym „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="402"/>
+        <location filename="../app/desktop/main_window.cpp" line="410"/>
         <source>Nobody was chosen to code.</source>
         <translation>Es wurde niemand zum Codieren ausgewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="427"/>
+        <location filename="../app/desktop/main_window.cpp" line="435"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="428"/>
+        <location filename="../app/desktop/main_window.cpp" line="436"/>
         <source>Codebook</source>
         <translation>Codebuch</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="445"/>
+        <location filename="../app/desktop/main_window.cpp" line="453"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Rückgängig: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="448"/>
+        <location filename="../app/desktop/main_window.cpp" line="456"/>
         <source>&amp;Redo %1</source>
         <translation>&amp;Wiederholen: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="594"/>
+        <location filename="../app/desktop/main_window.cpp" line="599"/>
         <source>Every article in the list is done.</source>
         <translation>Alle Artikel in der Liste sind erledigt.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="616"/>
+        <location filename="../app/desktop/main_window.cpp" line="621"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n Artikel enthält „%1“.</numerusform>
@@ -1734,242 +1748,266 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="622"/>
+        <location filename="../app/desktop/main_window.cpp" line="627"/>
         <source>New project</source>
         <translation>Neues Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="632"/>
+        <location filename="../app/desktop/main_window.cpp" line="637"/>
         <source>Cannot create project</source>
         <translation>Projekt kann nicht erstellt werden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="644"/>
+        <location filename="../app/desktop/main_window.cpp" line="649"/>
         <source>Import articles</source>
         <translation>Artikel importieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="645"/>
+        <location filename="../app/desktop/main_window.cpp" line="650"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv)</source>
         <translation>Artikel (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="675"/>
+        <location filename="../app/desktop/main_window.cpp" line="681"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>Die Sprache wechselt beim nächsten Start von Fourfold.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="688"/>
+        <location filename="../app/desktop/main_window.cpp" line="694"/>
         <source>No project open</source>
         <translation>Kein Projekt geöffnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="692"/>
+        <location filename="../app/desktop/main_window.cpp" line="698"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="692"/>
+        <location filename="../app/desktop/main_window.cpp" line="698"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="693"/>
+        <location filename="../app/desktop/main_window.cpp" line="699"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — Codieren als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="696"/>
+        <location filename="../app/desktop/main_window.cpp" line="702"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Codieren als %1 · %2 · Leitung: alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="697"/>
+        <location filename="../app/desktop/main_window.cpp" line="703"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Codieren als %1 · %2 · blind: nur eigene Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="709"/>
+        <location filename="../app/desktop/main_window.cpp" line="715"/>
         <source>Mark the selected text as %1 (snapped to whole words; hold Alt for the exact selection); with a span selected: relabel it</source>
         <translation>Ausgewählten Text als %1 markieren (auf ganze Wörter erweitert; Alt gedrückt halten für die genaue Auswahl); bei ausgewählter Textstelle: deren Funktion ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="713"/>
+        <location filename="../app/desktop/main_window.cpp" line="719"/>
         <source>Delete</source>
         <translation>Entf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="713"/>
+        <location filename="../app/desktop/main_window.cpp" line="719"/>
         <source>Delete the selected span</source>
         <translation>Ausgewählte Textstelle löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="715"/>
+        <location filename="../app/desktop/main_window.cpp" line="721"/>
         <source>Undo the last change</source>
         <translation>Letzte Änderung rückgängig machen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="716"/>
+        <location filename="../app/desktop/main_window.cpp" line="722"/>
         <source>Redo</source>
         <translation>Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="717"/>
+        <location filename="../app/desktop/main_window.cpp" line="723"/>
         <source>Mark the article as done and open the next</source>
         <translation>Artikel als erledigt markieren und den nächsten öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="718"/>
+        <location filename="../app/desktop/main_window.cpp" line="724"/>
         <source>Next article that is not done</source>
         <translation>Nächster noch nicht erledigter Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="720"/>
+        <location filename="../app/desktop/main_window.cpp" line="726"/>
         <source>Search the texts</source>
         <translation>Texte durchsuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="722"/>
+        <location filename="../app/desktop/main_window.cpp" line="728"/>
         <source>Keyboard shortcuts</source>
         <translation>Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="725"/>
+        <location filename="../app/desktop/main_window.cpp" line="731"/>
         <source>Span resizing keys are listed in the reading desk&apos;s tooltip.</source>
         <translation>Die Tasten zum Ändern der Länge einer Textstelle stehen im Tooltip des Lesebereichs.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="656"/>
+        <location filename="../app/desktop/main_window.cpp" line="661"/>
         <source>Open project</source>
         <translation>Projekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="622"/>
-        <location filename="../app/desktop/main_window.cpp" line="656"/>
+        <location filename="../app/desktop/main_window.cpp" line="627"/>
+        <location filename="../app/desktop/main_window.cpp" line="661"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-Projekte (*.fourfold)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="121"/>
-        <location filename="../app/desktop/main_window.cpp" line="637"/>
-        <location filename="../app/desktop/main_window.cpp" line="660"/>
-        <location filename="../app/desktop/main_window.cpp" line="669"/>
+        <location filename="../app/desktop/main_window.cpp" line="129"/>
+        <location filename="../app/desktop/main_window.cpp" line="642"/>
+        <location filename="../app/desktop/main_window.cpp" line="665"/>
+        <location filename="../app/desktop/main_window.cpp" line="674"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
     </message>
 </context>
 <context>
+    <name>fourfold::MessageBar</name>
+    <message>
+        <location filename="../app/desktop/message_bar.cpp" line="68"/>
+        <source>Message</source>
+        <translation>Meldung</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/message_bar.cpp" line="83"/>
+        <source>&amp;Details</source>
+        <translation>&amp;Details</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/message_bar.cpp" line="89"/>
+        <location filename="../app/desktop/message_bar.cpp" line="90"/>
+        <source>Close the message</source>
+        <translation>Meldung schließen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/message_bar.cpp" line="95"/>
+        <source>Details of the message</source>
+        <translation>Details der Meldung</translation>
+    </message>
+</context>
+<context>
     <name>fourfold::ProgressBoardWindow</name>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="62"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="63"/>
         <source>Progress — %1</source>
         <translation>Fortschritt — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="72"/>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="95"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="73"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="96"/>
         <source>Phase</source>
         <translation>Phase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="73"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="74"/>
         <source>All phases</source>
         <translation>Alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="76"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="77"/>
         <source>Show:</source>
         <translation>Zeigen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="78"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="79"/>
         <source>Reload</source>
         <translation>Neu laden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
         <source>Assigned</source>
         <translation>Zugewiesen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
         <source>Started</source>
         <translation>Begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="179"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="180"/>
         <source>Done</source>
         <translation>Erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="84"/>
         <source>Agreement so far (α)</source>
         <translation>Übereinstimmung (α)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="84"/>
         <source>Compared articles</source>
         <translation>Verglichene Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="84"/>
         <source>Active time</source>
         <translation>Aktive Zeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="86"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="87"/>
         <source>Krippendorff&apos;s alpha on the articles the coder finished: in training with the lead&apos;s master coding, in the other phases the mean over every coder who finished the same articles. ✓ at .800 or more, ~ from .667 (tentative), ✗ below.</source>
         <translation>Krippendorffs Alpha auf den Artikeln, die die Person abgeschlossen hat: im Training mit der Mastercodierung der Leitung, in den anderen Phasen der Mittelwert über alle Codierenden, die dieselben Artikel abgeschlossen haben. ✓ ab .800, ~ ab .667 (vorläufig), ✗ darunter.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="93"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="94"/>
         <source>Effort</source>
         <translation>Aufwand</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="95"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="96"/>
         <source>Articles done</source>
         <translation>Erledigte Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="95"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="96"/>
         <source>Active time, all coders</source>
         <translation>Aktive Zeit, alle Codierenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="96"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="97"/>
         <source>Mean per done article</source>
         <translation>Mittel je erledigtem Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="101"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="102"/>
         <source>Show active time per coder</source>
         <translation>Aktive Zeit je codierender Person zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="105"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="106"/>
         <source>Off by default: time is shown only summed over all coders. Recording and showing how long each person works can count as monitoring employees, which may need the coders&apos; agreement or a works council&apos;s consent. Turn it on only if your study has that agreement; the change is written to the project&apos;s log. Only a lead can switch it.</source>
         <translation>Standardmäßig aus: Zeit wird nur über alle Codierenden summiert angezeigt. Zu erfassen und anzuzeigen, wie lange jede Person arbeitet, kann als Beschäftigtenüberwachung gelten, die das Einverständnis der Codierenden oder die Zustimmung eines Betriebsrats erfordern kann. Schalten Sie es nur ein, wenn Ihre Studie dieses Einverständnis hat; die Änderung wird im Protokoll des Projekts vermerkt. Nur die Leitung kann es umschalten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="178"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="179"/>
         <source>%1 of %2</source>
         <translation>%1 von %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="228"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="229"/>
         <source>&lt;b&gt;No assignments yet.&lt;/b&gt; Plan them in the study design window.</source>
         <translation>&lt;b&gt;Noch keine Zuweisungen.&lt;/b&gt; Planen Sie sie im Fenster Studiendesign.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="229"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="230"/>
         <source>&lt;b&gt;%1 of %2 assignments done&lt;/b&gt; · %3 of active coding time in all.</source>
         <translation>&lt;b&gt;%1 von %2 Zuweisungen erledigt&lt;/b&gt; · insgesamt %3 aktive Codierzeit.</translation>
     </message>
@@ -1977,47 +2015,47 @@
 <context>
     <name>fourfold::ReadingView</name>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="84"/>
+        <location filename="../app/desktop/reading_view.cpp" line="60"/>
         <source>intro</source>
         <translation>Einleitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="86"/>
+        <location filename="../app/desktop/reading_view.cpp" line="62"/>
         <source>body</source>
         <translation>Hauptteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="88"/>
+        <location filename="../app/desktop/reading_view.cpp" line="64"/>
         <source>conclusion</source>
         <translation>Schluss</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="113"/>
+        <location filename="../app/desktop/reading_view.cpp" line="89"/>
         <source>Article text</source>
         <translation>Artikeltext</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="657"/>
+        <location filename="../app/desktop/reading_view.cpp" line="633"/>
         <source>Mark as %1</source>
         <translation>Als %1 markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="658"/>
+        <location filename="../app/desktop/reading_view.cpp" line="634"/>
         <source>Change to %1</source>
         <translation>In %1 ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="663"/>
+        <location filename="../app/desktop/reading_view.cpp" line="639"/>
         <source>Delete span</source>
         <translation>Textstelle löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="689"/>
+        <location filename="../app/desktop/reading_view.cpp" line="665"/>
         <source>%1: “%2”</source>
         <translation>%1: „%2“</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="918"/>
+        <location filename="../app/desktop/reading_view.cpp" line="894"/>
         <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Alt+Down and Alt+Up move between spans.</source>
         <translation>
             <numerusform>%n Textstelle. Wählen Sie Text aus und drücken Sie 1 bis 4, um eine Framing-Funktion zu markieren; Alt+Pfeil nach unten und Alt+Pfeil nach oben wechseln zwischen Textstellen.</numerusform>
@@ -2025,7 +2063,7 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="927"/>
+        <location filename="../app/desktop/reading_view.cpp" line="903"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Alt+Left/Right and Alt+Shift+Left/Right to resize.</source>
         <translation>Ausgewählte Textstelle: %1, „%2“. 1 bis 4 ändert die Funktion, Entf löscht, Alt+Links/Rechts und Alt+Umschalt+Links/Rechts ändern die Länge.</translation>
     </message>
@@ -2033,30 +2071,30 @@
 <context>
     <name>fourfold::ReliabilityWindow</name>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="115"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="111"/>
         <source>0.800: rely on the variable</source>
         <translation>0.800: auf die Variable verlassen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="116"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="112"/>
         <source>0.667: tentative conclusions only</source>
         <translation>0.667: nur vorläufige Schlüsse</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="155"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="566"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="701"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="152"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="570"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="673"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="705"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="157"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="154"/>
         <source>reliable (≥ 0.800)</source>
         <translation>reliabel (≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="159"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="156"/>
         <source>tentative (≥ 0.667)</source>
         <translation>vorläufig (≥ 0.667)</translation>
     </message>
@@ -2071,197 +2109,192 @@
         <translation>Reliabilität — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="197"/>
-        <source>Alpha: Krippendorff&apos;s alpha, coincidence form (Krippendorff 2011). Interval: 95% bootstrap, pairs of values resampled (Hayes &amp; Krippendorff 2007); q(α &lt; 0.800): share of replicates below 0.800. Verdict: Krippendorff (2004, §12.2). Minimum values: Krippendorff (2004, §11.4) after Bloch &amp; Kraemer (1989), for the rarest value at p = 0.05. Cohen&apos;s kappa per pair over the units both coded (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) needs every coder on every unit.</source>
-        <translation>Alpha: Krippendorffs Alpha, Koinzidenzform (Krippendorff 2011). Intervall: 95-%-Bootstrap, Wertepaare neu gezogen (Hayes &amp; Krippendorff 2007); q(α &lt; 0.800): Anteil der Replikationen unter 0.800. Urteil: Krippendorff (2004, §12.2). Mindestzahl an Werten: Krippendorff (2004, §11.4) nach Bloch &amp; Kraemer (1989), für den seltensten Wert bei p = 0.05. Cohens Kappa je Paar über die von beiden codierten Einheiten (Cohen 1960); Fleiss&apos; Kappa (Fleiss 1971) braucht alle Codierenden auf jeder Einheit.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="206"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="208"/>
         <source>Table</source>
         <translation>Tabelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="220"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="222"/>
         <source>Alpha without each coder</source>
         <translation>Alpha ohne jeweils eine codierende Person</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="223"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="225"/>
         <source>Alpha without each article (the costliest first)</source>
         <translation>Alpha ohne jeweils einen Artikel (der teuerste zuerst)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="226"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="228"/>
         <source>Change = alpha without it − alpha with everything: positive means leaving it out raises alpha, so it costs reliability (leave-one-out, common practice). A diagnostic for training and codebook work, not a licence to report the higher figure.</source>
         <translation>Änderung = Alpha ohne − Alpha mit allem: positiv heißt, Weglassen erhöht Alpha, es kostet also Reliabilität (Leave-one-out, gängige Praxis). Eine Diagnose für Schulung und Codebucharbeit, kein Freibrief, die höhere Zahl zu berichten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="231"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="233"/>
         <source>Boundary habits on matched spans</source>
         <translation>Grenzgewohnheiten bei zugeordneten Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="234"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="236"/>
         <source>Each span against the other coder&apos;s span of the same function that overlaps it most; differences are this coder&apos;s minus the other&apos;s, in characters (code points). Systematic: the mean differs from 0 by more than two standard errors over at least 5 matches (a rough screen, common practice).</source>
         <translation>Jede Textstelle gegen die am stärksten überlappende Textstelle derselben Funktion der anderen Person; Differenzen sind die dieser Person minus die der anderen, in Zeichen (Codepunkten). Systematisch: Der Mittelwert weicht über mindestens 5 Zuordnungen um mehr als zwei Standardfehler von 0 ab (grobe Prüfung, gängige Praxis).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="241"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="243"/>
         <source>Diagnostics</source>
         <translation>Diagnose</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="246"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
         <source>Alpha per function</source>
         <translation>Alpha je Funktion</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="250"/>
         <source>Coder pairs</source>
         <translation>Codierpaare</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="250"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="252"/>
         <source>Function confusion</source>
         <translation>Funktionsverwechslung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="253"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="255"/>
         <source>Alpha over time</source>
         <translation>Alpha im Zeitverlauf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="278"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="280"/>
         <source>Article item</source>
         <translation>Artikel-Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="279"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="281"/>
         <source>Paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="280"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="282"/>
         <source>Sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="281"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="283"/>
         <source>Token (word)</source>
         <translation>Token (Wort)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="282"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="284"/>
         <source>Continuum (spans, unitizing alpha)</source>
         <translation>Kontinuum (Textstellen, Unitizing-Alpha)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="287"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="289"/>
         <source>&amp;Unit</source>
         <translation>&amp;Einheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="293"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="295"/>
         <source>&amp;Item</source>
         <translation>&amp;Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="309"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="311"/>
         <source>Functions</source>
         <translation>Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="328"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="330"/>
         <source>&amp;Coders</source>
         <translation>&amp;Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="331"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="333"/>
         <source>All phases</source>
         <translation>Alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="335"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="337"/>
         <source>&amp;Phase</source>
         <translation>&amp;Phase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="337"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="339"/>
         <source>Gold joins as a coder</source>
         <translation>Goldstandard als weitere Codierung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="339"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="341"/>
         <source>Count articles in progress</source>
         <translation>Artikel in Bearbeitung mitzählen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="340"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="342"/>
         <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
         <translation>Standardmäßig zählt ein Artikel eines Codierers erst, wenn er ihn als fertig markiert hat; ankreuzen, um auch Artikel in Bearbeitung mitzuzählen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="348"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="350"/>
         <source>none</source>
         <translation>keine</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="349"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="351"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="352"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
         <source>Batches of articles</source>
         <translation>Artikelblöcke</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="353"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
         <source>Weeks</source>
         <translation>Wochen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
         <source>&amp;Drift by</source>
         <translation>&amp;Drift nach</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="358"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
         <source> articles</source>
         <translation> Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
         <source>Batch &amp;size</source>
         <translation>Block&amp;größe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="363"/>
         <source>Co&amp;mpute</source>
         <translation>Be&amp;rechnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="363"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
         <source>Cancel</source>
         <translation>Abbrechen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="469"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="473"/>
         <source>Computing…</source>
         <translation>Wird berechnet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="479"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="483"/>
         <source>Cancelling after the current step…</source>
         <translation>Abbruch nach dem aktuellen Schritt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="496"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="500"/>
         <source>Cancelled; the results shown are from before.</source>
         <translation>Abgebrochen; die angezeigten Ergebnisse sind von vorher.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="501"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="505"/>
         <source>%n coder(s) compared.</source>
         <translation>
             <numerusform>%n codierende Person verglichen.</numerusform>
@@ -2269,272 +2302,277 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="516"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="520"/>
         <source>Chosen functions (sets)</source>
         <translation>Funktionsmenge</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
         <source>Alpha</source>
         <translation>Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
-        <source>95% interval (bootstrap)</source>
-        <translation>95-%-Intervall (Bootstrap)</translation>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="197"/>
+        <source>Alpha: Krippendorff&apos;s alpha, coincidence form (Krippendorff 2011). Interval: 95% bootstrap, units resampled (percentile; the pair interval of Hayes &amp; Krippendorff 2007 is in the report, and it is too narrow with more than two coders); q(α &lt; 0.800): share of replicates below 0.800. Verdict: Krippendorff (2004, §12.2). Minimum values: Krippendorff (2004, §11.4) after Bloch &amp; Kraemer (1989), for the rarest value at p = 0.05. Cohen&apos;s kappa per pair over the units both coded (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) needs every coder on every unit.</source>
+        <translation>Alpha: Krippendorffs Alpha, Koinzidenzform (Krippendorff 2011). Intervall: 95-%-Bootstrap, Einheiten neu gezogen (Perzentil; das Paarintervall nach Hayes &amp; Krippendorff 2007 steht im Bericht und ist bei mehr als zwei Codierenden zu schmal); q(α &lt; 0.800): Anteil der Replikationen unter 0.800. Urteil: Krippendorff (2004, §12.2). Mindestzahl an Werten: Krippendorff (2004, §11.4) nach Bloch &amp; Kraemer (1989), für den seltensten Wert bei p = 0.05. Cohens Kappa je Paar über die von beiden codierten Einheiten (Cohen 1960); Fleiss' Kappa (Fleiss 1971) braucht alle Codierenden auf jeder Einheit.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
         <source>q(α &lt; 0.800)</source>
         <translation>q(α &lt; 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
+        <source>95% interval (units resampled)</source>
+        <translation>95-%-Intervall (Einheiten neu gezogen)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
         <source>Percent agreement</source>
         <translation>Prozentuale Übereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
         <source>Fleiss&apos; kappa</source>
         <translation>Fleiss&apos; Kappa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
         <source>Cohen&apos;s kappa %1 × %2</source>
         <translation>Cohens Kappa %1 × %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
         <source>Pairable values</source>
         <translation>Paarbare Werte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
         <source>Pairable units</source>
         <translation>Paarbare Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
         <source>Rarest value</source>
         <translation>Seltenster Wert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="547"/>
         <source>Minimum values (α ≥ 0.800)</source>
         <translation>Mindestzahl an Werten (α ≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="547"/>
         <source>Sample</source>
         <translation>Stichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="548"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="662"/>
         <source>Statistic</source>
         <translation>Kennwert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="574"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="578"/>
         <source>%1, %2 replicates, seed %3</source>
         <translation>%1, %2 Replikationen, Seed %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="600"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="604"/>
         <source>Fleiss&apos; kappa needs every coder on every unit; some cells are missing.</source>
         <translation>Fleiss&apos; Kappa braucht alle Codierenden auf jeder Einheit; einige Zellen fehlen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="618"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="622"/>
         <source>below the minimum</source>
         <translation>unter dem Minimum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="619"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="623"/>
         <source>large enough</source>
         <translation>groß genug</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="635"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="639"/>
         <source>The sample is smaller than Krippendorff&apos;s minimum for the rarest value (alpha ≥ 0.800 at p = 0.05) in: %1. Code more units before relying on these figures.</source>
         <translation>Die Stichprobe ist kleiner als Krippendorffs Minimum für den seltensten Wert (Alpha ≥ 0.800 bei p = 0.05) in: %1. Codieren Sie mehr Einheiten, bevor Sie sich auf diese Werte verlassen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
         <source>Unitizing alpha</source>
         <translation>Unitizing-Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
         <source>Observed disagreement D_o</source>
         <translation>Beobachtete Nichtübereinstimmung D_o</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="655"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="659"/>
         <source>Expected disagreement D_e</source>
         <translation>Erwartete Nichtübereinstimmung D_e</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="655"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="659"/>
         <source>Continuum</source>
         <translation>Kontinuum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="660"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
         <source>All four, pooled</source>
         <translation>Alle vier, gepoolt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="677"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
         <source>%1 articles, %2 characters</source>
         <translation>%1 Artikel, %2 Zeichen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="688"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="692"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="688"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="871"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="692"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="875"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="690"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="694"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
         <source>Alpha without</source>
         <translation>Alpha ohne</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
         <source>Change</source>
         <translation>Änderung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
         <source>Units</source>
         <translation>Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>Matches</source>
         <translation>Zuordnungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>Length ± SE</source>
         <translation>Länge ± SE</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>Start</source>
         <translation>Beginn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
         <source>End</source>
         <translation>Ende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
         <source>Longer</source>
         <translation>Länger</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
         <source>Shorter</source>
         <translation>Kürzer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
         <source>Habit</source>
         <translation>Gewohnheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="741"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="745"/>
         <source>spans systematically longer</source>
         <translation>Textstellen systematisch länger</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="742"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="746"/>
         <source>spans systematically shorter</source>
         <translation>Textstellen systematisch kürzer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="755"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="759"/>
         <source>Alpha per function, with 95% bootstrap intervals</source>
         <translation>Alpha je Funktion, mit 95-%-Bootstrap-Intervallen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="759"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="920"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="763"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="926"/>
         <source>Krippendorff&apos;s alpha</source>
         <translation>Krippendorffs Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="779"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="783"/>
         <source>pooled</source>
         <translation>gepoolt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="863"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="867"/>
         <source>Cohen&apos;s kappa of each pair of coders over the units both coded (%1). Darker: higher agreement; hatched: not defined.</source>
         <translation>Cohens Kappa jedes Paars von Codierenden über die von beiden codierten Einheiten (%1). Dunkler: höhere Übereinstimmung; schraffiert: nicht definiert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="868"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="872"/>
         <source>Continuum units have no per-pair kappa; see the span agreement in the function confusion.</source>
         <translation>Kontinuum-Einheiten haben kein Kappa je Paar; siehe die Übereinstimmung der Textstellen in der Funktionsverwechslung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="885"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="889"/>
         <source>nothing</source>
         <translation>nichts</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
         <source>A coder&apos;s span</source>
         <translation>Textstelle einer Person</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
         <source>What another coder gave it</source>
         <translation>Was eine andere Person vergab</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="903"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="909"/>
         <source>Each span of each coder against the best-overlapping span of every other coder (both directions of each pair). Darker: a larger share of the row. &quot;nothing&quot;: no overlapping span.</source>
         <translation>Jede Textstelle jeder codierenden Person gegen die am besten überlappende Textstelle jeder anderen (beide Richtungen jedes Paars). Dunkler: größerer Anteil der Zeile. „nichts“: keine überlappende Textstelle.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="915"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="921"/>
         <source>Alpha by week of first coding — %1</source>
         <translation>Alpha nach Woche der ersten Codierung — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="916"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="922"/>
         <source>Alpha by batch of articles, in coding order — %1</source>
         <translation>Alpha nach Artikelblock, in Codierreihenfolge — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="953"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="959"/>
         <source>ISO week</source>
         <translation>ISO-Woche</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="953"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="959"/>
         <source>articles (in coding order)</source>
         <translation>Artikel (in Codierreihenfolge)</translation>
     </message>
@@ -2843,129 +2881,144 @@ Click a span in the text or on the frame card to edit it, or select text and pre
 Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bearbeiten, oder wählen Sie Text aus und drücken Sie 1&#xa0;bis&#xa0;4, um ihn zu codieren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="170"/>
+        <location filename="../app/desktop/span_editor.cpp" line="174"/>
         <source>Another coder&apos;s span: shown, not editable.</source>
         <translation>Textstelle einer anderen codierenden Person: sichtbar, nicht bearbeitbar.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="187"/>
+        <location filename="../app/desktop/span_editor.cpp" line="191"/>
         <source>Function: %1</source>
         <translation>Funktion: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="191"/>
+        <location filename="../app/desktop/span_editor.cpp" line="195"/>
         <source>&amp;Function:</source>
         <translation>&amp;Funktion:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="198"/>
+        <location filename="../app/desktop/span_editor.cpp" line="202"/>
         <source>Note</source>
         <translation>Notiz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="202"/>
+        <location filename="../app/desktop/span_editor.cpp" line="206"/>
         <source>&amp;Note:</source>
         <translation>&amp;Notiz:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="207"/>
+        <location filename="../app/desktop/span_editor.cpp" line="211"/>
         <source>Confidence</source>
         <translation>Sicherheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="211"/>
-        <location filename="../app/desktop/span_editor.cpp" line="343"/>
-        <location filename="../app/desktop/span_editor.cpp" line="351"/>
+        <location filename="../app/desktop/span_editor.cpp" line="215"/>
+        <location filename="../app/desktop/span_editor.cpp" line="362"/>
+        <location filename="../app/desktop/span_editor.cpp" line="370"/>
         <source>not set</source>
         <translation>nicht angegeben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="214"/>
+        <location filename="../app/desktop/span_editor.cpp" line="218"/>
         <source>How sure you are of this span, from 0 (a guess) to 1 (certain).</source>
         <translation>Wie sicher Sie sich bei dieser Textstelle sind, von 0 (geraten) bis 1 (sicher).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="215"/>
+        <location filename="../app/desktop/span_editor.cpp" line="219"/>
         <source>&amp;Confidence:</source>
         <translation>&amp;Sicherheit:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="224"/>
+        <location filename="../app/desktop/span_editor.cpp" line="228"/>
         <source>Links</source>
         <translation>Verknüpfungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="226"/>
+        <location filename="../app/desktop/span_editor.cpp" line="230"/>
         <source>Links start from an evaluation (to the cause it judges) or from a remedy (to the problem it addresses).</source>
         <translation>Verknüpfungen gehen von einer Bewertung (zur bewerteten Ursache) oder von einer Lösung (zum behandelten Problem) aus.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="235"/>
+        <location filename="../app/desktop/span_editor.cpp" line="240"/>
         <source>Span to link to</source>
         <translation>Zu verknüpfende Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="238"/>
-        <source>no other spans</source>
-        <translation>keine weiteren Textstellen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/span_editor.cpp" line="240"/>
+        <location filename="../app/desktop/span_editor.cpp" line="244"/>
         <source>&amp;Link</source>
         <translation>&amp;Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="241"/>
+        <location filename="../app/desktop/span_editor.cpp" line="245"/>
         <source>Link to the chosen span</source>
         <translation>Mit der gewählten Textstelle verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="253"/>
+        <location filename="../app/desktop/span_editor.cpp" line="257"/>
         <source>Links of this span</source>
         <translation>Verknüpfungen dieser Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="261"/>
+        <location filename="../app/desktop/span_editor.cpp" line="265"/>
         <source>No links yet.</source>
         <translation>Noch keine Verknüpfungen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="358"/>
+        <location filename="../app/desktop/span_editor.cpp" line="268"/>
+        <source>&amp;Remove link</source>
+        <translation>Verknüpfung &amp;entfernen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/span_editor.cpp" line="269"/>
+        <source>Remove the chosen link</source>
+        <translation>Die gewählte Verknüpfung entfernen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/span_editor.cpp" line="377"/>
         <source>%1:</source>
         <translation>%1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="398"/>
+        <location filename="../app/desktop/span_editor.cpp" line="417"/>
         <source>No note.</source>
         <translation>Keine Notiz.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="398"/>
+        <location filename="../app/desktop/span_editor.cpp" line="417"/>
         <source>Why this span, doubts, a question for the lead…</source>
         <translation>Warum diese Textstelle, Zweifel, eine Frage an die Leitung…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="416"/>
+        <location filename="../app/desktop/span_editor.cpp" line="435"/>
         <source>&amp;Judges:</source>
         <translation>Be&amp;wertet:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="416"/>
+        <location filename="../app/desktop/span_editor.cpp" line="435"/>
         <source>&amp;Addresses:</source>
         <translation>Behan&amp;delt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="445"/>
+        <location filename="../app/desktop/span_editor.cpp" line="437"/>
+        <source>no cause span to link</source>
+        <translation>keine Ursachen-Textstelle zum Verknüpfen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/span_editor.cpp" line="437"/>
+        <source>no problem span to link</source>
+        <translation>keine Problem-Textstelle zum Verknüpfen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/span_editor.cpp" line="467"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="461"/>
+        <location filename="../app/desktop/span_editor.cpp" line="483"/>
         <source>a span not shown here</source>
         <translation>eine hier nicht angezeigte Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="462"/>
+        <location filename="../app/desktop/span_editor.cpp" line="484"/>
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>
@@ -3606,87 +3659,87 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
 <context>
     <name>fourfold::TrainingFeedbackDialog</name>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="38"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="39"/>
         <source>Training feedback — %1</source>
         <translation>Trainingsfeedback — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="46"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="47"/>
         <source>Compared per:</source>
         <translation>Verglichen je:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="49"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="50"/>
         <source>Unit</source>
         <translation>Einheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="50"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="51"/>
         <source>sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="51"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="52"/>
         <source>paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="52"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="53"/>
         <source>word</source>
         <translation>Wort</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="59"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="60"/>
         <source>Agreement per function</source>
         <translation>Übereinstimmung je Funktion</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="60"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
         <source>Function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="60"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
         <source>Same as the master</source>
         <translation>Wie der Master</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="60"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
         <source>α</source>
         <translation>α</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="62"/>
         <source>You marked / master marked</source>
         <translation>Sie markiert / Master markiert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="62"/>
         <source>What it suggests</source>
         <translation>Was es nahelegt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="70"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="71"/>
         <source>Most units carry no function, so &quot;same as the master&quot; is high even when your spans differ; α corrects for that agreement by chance (Krippendorff). Aim for α of .800 or more.</source>
         <translation>Die meisten Einheiten tragen keine Funktion, daher ist „wie der Master“ hoch, auch wenn Ihre Textstellen abweichen; α korrigiert diese zufällige Übereinstimmung (Krippendorff). Ziel ist ein α von .800 oder mehr.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="84"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="85"/>
         <source>On to the real work</source>
         <translation>Weiter zur eigentlichen Arbeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="122"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="123"/>
         <source>&lt;b&gt;No feedback yet.&lt;/b&gt; %1</source>
         <translation>&lt;b&gt;Noch kein Feedback.&lt;/b&gt; %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="130"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="131"/>
         <source>&lt;b&gt;No finished training article to compare yet.&lt;/b&gt; Feedback comes once you mark a training article as done.</source>
         <translation>&lt;b&gt;Noch kein abgeschlossener Trainingsartikel zum Vergleichen.&lt;/b&gt; Feedback gibt es, sobald Sie einen Trainingsartikel als erledigt markieren.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="134"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="135"/>
         <source>&lt;b&gt;%1, your coding of %n training article(s) compared with the master coding of %2&lt;/b&gt;, %3 by %3: in how many did you and the master agree on whether the function is there?</source>
         <translation>
             <numerusform>&lt;b&gt;%1, Ihre Codierung von %n Trainingsartikel verglichen mit der Mastercodierung von %2&lt;/b&gt;, %3 für %3: In wie vielen stimmten Sie und der Master darin überein, ob die Funktion vorliegt?</numerusform>
@@ -3694,42 +3747,42 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="157"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="158"/>
         <source>%1 % (%2 of %3)</source>
         <translation>%1 % (%2 von %3)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="173"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="174"/>
         <source>%1 / %2</source>
         <translation>%1 / %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="179"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="180"/>
         <source>nothing to compare</source>
         <translation>nichts zu vergleichen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="181"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="182"/>
         <source>close to the master</source>
         <translation>nah am Master</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="183"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="184"/>
         <source>you mark it more often than the master: re-read the exclusion rules</source>
         <translation>Sie markieren sie öfter als der Master: Ausschlussregeln erneut lesen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="185"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="186"/>
         <source>you miss some: re-read the definition and examples</source>
         <translation>Sie übersehen einige: Definition und Beispiele erneut lesen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="187"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="188"/>
         <source>as often, but in other places: compare your spans with the lead&apos;s</source>
         <translation>gleich oft, aber an anderen Stellen: Vergleichen Sie Ihre Textstellen mit denen der Leitung</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="194"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="195"/>
         <source>You have %n training article(s) still open. Finish them before the real work starts.</source>
         <translation>
             <numerusform>Sie haben noch %n offenen Trainingsartikel. Schließen Sie ihn ab, bevor die eigentliche Arbeit beginnt.</numerusform>
@@ -3737,7 +3790,7 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="200"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="201"/>
         <source>Training is complete. Talk over the functions with low agreement with your lead, then go on to your assigned articles.</source>
         <translation>Das Training ist abgeschlossen. Besprechen Sie die Funktionen mit geringer Übereinstimmung mit der Leitung und fahren Sie dann mit Ihren zugewiesenen Artikeln fort.</translation>
     </message>

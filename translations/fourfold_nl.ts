@@ -96,14 +96,9 @@
         <translation>De berekening is geannuleerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="65"/>
+        <location filename="../app/desktop/reliability/reliability_job.cpp" line="49"/>
         <source>Choose at least one framing function.</source>
         <translation>Kies ten minste één framingfunctie.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_job.cpp" line="108"/>
-        <source>The continuum could not be compared.</source>
-        <translation>Het continuüm kon niet worden vergeleken.</translation>
     </message>
 </context>
 <context>
@@ -147,47 +142,47 @@
 <context>
     <name>fourfold::ArticleListModel</name>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="52"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="47"/>
         <source>done</source>
         <translation>klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="54"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="49"/>
         <source>in progress</source>
         <translation>bezig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="55"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="50"/>
         <source>not started</source>
         <translation>niet begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="97"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="92"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="99"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="94"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="101"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="96"/>
         <source>Lang.</source>
         <translation>Taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="105"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="100"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="107"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="102"/>
         <source>Time</source>
         <translation>Tijd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/article_list_model.cpp" line="103"/>
+        <location filename="../app/desktop/article_list_model.cpp" line="98"/>
         <source>Characters</source>
         <translation>Tekens</translation>
     </message>
@@ -403,375 +398,375 @@
         <translation>Alleen een coördinator vergelijkt codeurs en beslist over de gouden standaard. Open het project als coördinator om dit venster te gebruiken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="138"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="141"/>
         <source>Articles to adjudicate</source>
         <translation>Te beslissen artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="139"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="142"/>
         <source>Articles coded by several coders, most undecided disagreements first. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
         <translation>Artikelen die door meerdere codeurs zijn gecodeerd, die met de meeste onbesliste verschillen eerst. Open: onbesliste verschillen; Eens: passages waarover alle codeurs het eens zijn en die nog niet in de gouden standaard staan.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="156"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="159"/>
         <source>Margin: ∅ a coder has no span here · ≠ different functions · ↔ different boundaries · ≈ different attributes · ✓ decided. Lanes under each line: problem (solid), cause (dashed), evaluation (dotted), remedy (dash-dot). Hatched: this coder has no span in the passage.</source>
         <translation>Marge: ∅ een codeur heeft hier geen fragment · ≠ verschillende functies · ↔ verschillende grenzen · ≈ verschillende kenmerken · ✓ beslist. Banen onder elke regel: probleem (doorgetrokken), oorzaak (gestreept), evaluatie (gestippeld), oplossing (streep-punt). Gearceerd: deze codeur heeft geen fragment in de passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="191"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="196"/>
         <source>Who</source>
         <translation>Wie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="191"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="196"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="191"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="196"/>
         <source>Decision</source>
         <translation>Beslissing</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="196"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="201"/>
         <source>Spans of the passage</source>
         <translation>Fragmenten van de passage</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="207"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="212"/>
         <source>&amp;Rationale (optional, kept with the decision):</source>
         <translation>&amp;Motivering (optioneel, wordt bij de beslissing bewaard):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="209"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="214"/>
         <source>Why this decision, for the method section</source>
         <translation>Waarom deze beslissing, voor de methodesectie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="213"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="218"/>
         <source>Keys: N / P next and previous disagreement, Alt+Down / Alt+Up next and previous article; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; Ctrl+Shift+A accept all agreed; Ctrl+L rationale; Ctrl+Z undo.</source>
         <translation>Toetsen: N / P volgend en vorig verschil, Alt+Pijl-omlaag / Alt+Pijl-omhoog volgend en vorig artikel; A het gekozen fragment accepteren, M de gekozen fragmenten samenvoegen, E bewerken, R verwerpen, W een fragment uit de gouden standaard terugtrekken; Ctrl+Shift+A alle overeenstemmende accepteren; Ctrl+L motivering; Ctrl+Z ongedaan maken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="245"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="251"/>
         <source>Comparison</source>
         <translation>Vergelijking</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="259"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="265"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="585"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="641"/>
         <source>, </source>
         <translation>, </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="265"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="271"/>
         <source>Function: </source>
         <translation>Functie: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="267"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="273"/>
         <source>All functions</source>
         <translation>Alle functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="270"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="276"/>
         <source>Function filter</source>
         <translation>Functiefilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="276"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="282"/>
         <source>  Coders: </source>
         <translation>  Codeurs: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="278"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="284"/>
         <source>All coders</source>
         <translation>Alle codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="285"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="291"/>
         <source>%1 and %2</source>
         <translation>%1 en %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="287"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="293"/>
         <source>Coder pair filter</source>
         <translation>Filter op codeurspaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="293"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="299"/>
         <source>Show decided</source>
         <translation>Besliste tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="294"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
         <source>Also step through disagreements already decided</source>
         <translation>Ook langs verschillen gaan die al beslist zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="297"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="303"/>
         <source>Articles in progress</source>
         <translation>Artikelen in bewerking</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="298"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="304"/>
         <source>Also compare coders on articles they have started but not yet marked done</source>
         <translation>Vergelijk codeurs ook op artikelen die ze begonnen maar nog niet als klaar gemarkeerd hebben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="306"/>
         <source>Show articles in progress</source>
         <translation>Artikelen in bewerking tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="308"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="314"/>
         <source>Previous</source>
         <translation>Vorige</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="309"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="315"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorig onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="316"/>
         <source>Next</source>
         <translation>Volgende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="316"/>
         <source>Next undecided disagreement</source>
         <translation>Volgend onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="312"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
         <source>Previous article</source>
         <translation>Vorig artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="313"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
         <source>Previous article in the queue</source>
         <translation>Vorig artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="318"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="324"/>
         <source>Next article</source>
         <translation>Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
         <source>Next article in the queue</source>
         <translation>Volgend artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="333"/>
         <source>Accept</source>
         <translation>Accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="333"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Het fragment van de gekozen codeur in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="329"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
         <source>Merge</source>
         <translation>Samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="330"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eén fragment dat de gekozen fragmenten omvat in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="337"/>
         <source>Edit…</source>
         <translation>Bewerken…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="332"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Een fragment voor de gouden standaard vastleggen met een eigen functie en eigen grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
         <source>Reject</source>
         <translation>Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="341"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Vastleggen dat de gekozen fragmenten niet in de gouden standaard horen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="342"/>
         <source>Withdraw gold</source>
         <translation>Terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="342"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Het gekozen fragment uit de gouden standaard terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="344"/>
         <source>Accept all agreed</source>
         <translation>Alle overeenstemmende accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="346"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Elk fragment accepteren waarover alle codeurs van het artikel het eens zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="346"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
         <source>Undo</source>
         <translation>Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="354"/>
         <source>Redo</source>
         <translation>Opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="490"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="496"/>
         <source>Gold (%1)</source>
         <translation>Gouden standaard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="490"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="627"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="496"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="633"/>
         <source>Gold</source>
         <translation>Gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="535"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="541"/>
         <source>No undecided disagreement left in this article. Alt+Down opens the next article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel. Alt+Pijl-omlaag opent het volgende artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="552"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="558"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="568"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="574"/>
         <source>No spans to compare in this article.</source>
         <translation>Geen fragmenten om te vergelijken in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="569"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="575"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klik op een passage of druk op N voor het volgende verschil.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="585"/>
         <source>no span by %1</source>
         <translation>geen fragment van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="582"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="588"/>
         <source>different functions</source>
         <translation>verschillende functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="584"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="590"/>
         <source>different boundaries</source>
         <translation>verschillende grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="586"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="592"/>
         <source>different attributes</source>
         <translation>verschillende kenmerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="594"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="600"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 van %2 (alinea %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="598"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="604"/>
         <source>the coders agree</source>
         <translation>de codeurs zijn het eens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="598"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="604"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="599"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="605"/>
         <source> — decided</source>
         <translation> — beslist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="618"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="624"/>
         <source>Characters %1 to %2</source>
         <translation>Tekens %1 tot %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="619"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="625"/>
         <source>rejected</source>
         <translation>verworpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="619"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="625"/>
         <source>in gold</source>
         <translation>in gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="641"/>
         <source>drawn by the lead</source>
         <translation>getekend door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="641"/>
         <source>from %1</source>
         <translation>van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="637"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="643"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Beslist door %1 op %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="639"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="645"/>
         <source> Rationale: %1</source>
         <translation> Motivering: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="647"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="653"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Gouden standaard %1 beslist door %2 op %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="733"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="742"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Ongedaan maken met %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="745"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="769"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Kies het fragment van één codeur om te accepteren (of meerdere om samen te voegen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="772"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="796"/>
         <source>Choose a passage first.</source>
         <translation>Kies eerst een passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="810"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="834"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Kies de fragmenten om te verwerpen (die nog niet verworpen zijn).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="821"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="845"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Kies één fragment uit de gouden standaard om terug te trekken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="841"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="865"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>Er is in dit artikel geen overeenstemmende passage meer om te accepteren.</translation>
     </message>
@@ -779,47 +774,47 @@
 <context>
     <name>fourfold::DisagreementQueueModel</name>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="64"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="74"/>
         <source>%1 passages: %2 with a disagreement (%3 undecided), %4 agreed and not yet in gold. Only one coder or not all: %5; function: %6; boundaries: %7; attributes: %8.</source>
         <translation>%1 passages: %2 met een verschil (%3 onbeslist), %4 overeenstemmend en nog niet in de gouden standaard. Slechts één codeur of niet alle: %5; functie: %6; grenzen: %7; kenmerken: %8.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="86"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="96"/>
         <source>Passages with a disagreement not yet decided</source>
         <translation>Passages met een verschil waarover nog niet is beslist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="88"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="98"/>
         <source>Passages with a disagreement, decided or not</source>
         <translation>Passages met een verschil, beslist of niet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="90"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="100"/>
         <source>Passages all coders agree on that are not yet in gold</source>
         <translation>Passages waarover alle codeurs het eens zijn en die nog niet in de gouden standaard staan</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="99"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="109"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="101"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="111"/>
         <source>Open</source>
         <translation>Open</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="103"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="113"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="105"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="115"/>
         <source>Agreed</source>
         <translation>Eens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="107"/>
+        <location filename="../app/desktop/compare/disagreement_queue_model.cpp" line="117"/>
         <source>Coders</source>
         <translation>Codeurs</translation>
     </message>
@@ -1357,52 +1352,61 @@
 <context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="117"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="122"/>
         <source>Write the reliability report</source>
         <translation>Het betrouwbaarheidsrapport schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="119"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="123"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webpagina (*.html);;PDF-document (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="126"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="129"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="130"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="129"/>
-        <source>The report was written to %1.</source>
-        <translation>Het rapport is geschreven naar %1.</translation>
+        <location filename="../app/desktop/lead_windows.cpp" line="134"/>
+        <source>The reliability report was written to %1.</source>
+        <translation>Het betrouwbaarheidsrapport is geschreven naar %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="138"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="146"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="159"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="162"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="135"/>
+        <source>&amp;Open</source>
+        <translation>&amp;Openen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/lead_windows.cpp" line="136"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="175"/>
+        <source>Open the &amp;folder</source>
+        <translation>De &amp;map openen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/lead_windows.cpp" line="147"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="155"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="168"/>
         <source>Coder copy</source>
         <translation>Codeurskopie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="147"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="156"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Een codeurskopie bevat alleen de artikelen die aan deze codeur zijn toegewezen, het codeboek en de eigen coderingen van de codeur. Voor wie is de kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="153"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="162"/>
         <source>Write the coder copy</source>
         <translation>De codeurskopie schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="154"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="163"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="185"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-project (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="163"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="172"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 geschreven voor %2: %n artikel, %3 fragment(en).</numerusform>
@@ -1410,18 +1414,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="185"/>
         <source>Merge returned coder copies</source>
         <translation>Teruggekomen codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="178"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="190"/>
         <source>Merge coder copies</source>
         <translation>Codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="179"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="191"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -1430,303 +1433,314 @@
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="187"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="198"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): al samengevoegd, niets nieuws.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 nieuw, %4 gewijzigd (%5 verwijderd), %6 conflict(en).</translation>
     </message>
-    <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="198"/>
-        <source>Conflicts keep the project&apos;s version until you decide: fourfold-cli merge PROJECT --conflicts lists them.</source>
-        <translation>Bij conflicten blijft de versie van het project staan tot je beslist: fourfold-cli merge PROJECT --conflicts toont ze.</translation>
+    <message numerus="yes">
+        <location filename="../app/desktop/lead_windows.cpp" line="208"/>
+        <source>Merged %n copy(ies); %1 conflict(s) keep the project&apos;s version until you decide (fourfold-cli merge PROJECT --conflicts lists them).</source>
+        <translation>
+            <numerusform>%n kopie samengevoegd; %1 conflict(en) houden de versie van het project tot u beslist (fourfold-cli merge PROJECT --conflicts somt ze op).</numerusform>
+            <numerusform>%n kopieën samengevoegd; %1 conflict(en) houden de versie van het project tot u beslist (fourfold-cli merge PROJECT --conflicts somt ze op).</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/lead_windows.cpp" line="212"/>
+        <source>Merged %n copy(ies).</source>
+        <translation>
+            <numerusform>%n kopie samengevoegd.</numerusform>
+            <numerusform>%n kopieën samengevoegd.</numerusform>
+        </translation>
     </message>
 </context>
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="687"/>
+        <location filename="../app/desktop/main_window.cpp" line="693"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="175"/>
+        <location filename="../app/desktop/main_window.cpp" line="183"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="96"/>
+        <location filename="../app/desktop/main_window.cpp" line="104"/>
         <source>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manual frame analysis of news and opinion articles: problem, cause, evaluation, remedy.&lt;/p&gt;</source>
         <translation>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Handmatige frame-analyse van nieuws- en opinieartikelen: probleem, oorzaak, evaluatie, oplossing.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="103"/>
+        <location filename="../app/desktop/main_window.cpp" line="111"/>
         <source>Open a project…</source>
         <translation>Project openen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="106"/>
+        <location filename="../app/desktop/main_window.cpp" line="114"/>
         <source>Open the sample project</source>
         <translation>Voorbeeldproject openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="108"/>
+        <location filename="../app/desktop/main_window.cpp" line="116"/>
         <source>Invented demo data: three local controversies, three coders.</source>
         <translation>Verzonnen demogegevens: drie lokale kwesties, drie codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="114"/>
-        <location filename="../app/desktop/main_window.cpp" line="127"/>
+        <location filename="../app/desktop/main_window.cpp" line="122"/>
+        <location filename="../app/desktop/main_window.cpp" line="135"/>
         <source>Recent projects</source>
         <translation>Recente projecten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="146"/>
+        <location filename="../app/desktop/main_window.cpp" line="154"/>
         <source>Search the texts…</source>
         <translation>Zoeken in de teksten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="148"/>
+        <location filename="../app/desktop/main_window.cpp" line="156"/>
         <source>Search articles</source>
         <translation>Artikelen doorzoeken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="155"/>
+        <location filename="../app/desktop/main_window.cpp" line="163"/>
         <source>Status filter</source>
         <translation>Statusfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="156"/>
+        <location filename="../app/desktop/main_window.cpp" line="164"/>
         <source>All articles</source>
         <translation>Alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="157"/>
+        <location filename="../app/desktop/main_window.cpp" line="165"/>
         <source>Not started</source>
         <translation>Niet begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="158"/>
+        <location filename="../app/desktop/main_window.cpp" line="166"/>
         <source>In progress</source>
         <translation>Bezig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="159"/>
+        <location filename="../app/desktop/main_window.cpp" line="167"/>
         <source>Done</source>
         <translation>Klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="217"/>
+        <location filename="../app/desktop/main_window.cpp" line="225"/>
         <source>Mark the selected text as %1 (key %2)</source>
         <translation>De geselecteerde tekst markeren als %1 (toets %2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="228"/>
+        <location filename="../app/desktop/main_window.cpp" line="236"/>
         <source>Mark as done</source>
         <translation>Markeren als klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="229"/>
+        <location filename="../app/desktop/main_window.cpp" line="237"/>
         <source>Mark this article as done and open the next one (Ctrl+Return)</source>
         <translation>Dit artikel markeren als klaar en het volgende openen (Ctrl+Return)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="297"/>
+        <location filename="../app/desktop/main_window.cpp" line="305"/>
         <source>&amp;Project</source>
         <translation>&amp;Project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="298"/>
+        <location filename="../app/desktop/main_window.cpp" line="306"/>
         <source>&amp;New project…</source>
         <translation>&amp;Nieuw project…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="299"/>
+        <location filename="../app/desktop/main_window.cpp" line="307"/>
         <source>&amp;Open…</source>
         <translation>&amp;Openen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="300"/>
+        <location filename="../app/desktop/main_window.cpp" line="308"/>
         <source>&amp;Import articles…</source>
         <translation>Artikelen &amp;importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="302"/>
+        <location filename="../app/desktop/main_window.cpp" line="310"/>
         <source>Open the &amp;sample project</source>
         <translation>&amp;Voorbeeldproject openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="304"/>
+        <location filename="../app/desktop/main_window.cpp" line="312"/>
         <source>&amp;Quit</source>
         <translation>&amp;Afsluiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="306"/>
+        <location filename="../app/desktop/main_window.cpp" line="314"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="307"/>
-        <location filename="../app/desktop/main_window.cpp" line="445"/>
+        <location filename="../app/desktop/main_window.cpp" line="315"/>
+        <location filename="../app/desktop/main_window.cpp" line="453"/>
         <source>&amp;Undo</source>
         <translation>&amp;Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="310"/>
-        <location filename="../app/desktop/main_window.cpp" line="448"/>
+        <location filename="../app/desktop/main_window.cpp" line="318"/>
+        <location filename="../app/desktop/main_window.cpp" line="456"/>
         <source>&amp;Redo</source>
         <translation>Opn&amp;ieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="314"/>
+        <location filename="../app/desktop/main_window.cpp" line="322"/>
         <source>&amp;Code</source>
         <translation>&amp;Coderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="318"/>
+        <location filename="../app/desktop/main_window.cpp" line="326"/>
         <source>Mark as %1	%2</source>
         <translation>Markeren als %1	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="322"/>
+        <location filename="../app/desktop/main_window.cpp" line="330"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel markeren als &amp;klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="324"/>
+        <location filename="../app/desktop/main_window.cpp" line="332"/>
         <source>&amp;Next article</source>
         <translation>&amp;Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="327"/>
+        <location filename="../app/desktop/main_window.cpp" line="335"/>
         <source>&amp;Find in texts</source>
         <translation>&amp;Zoeken in teksten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="328"/>
+        <location filename="../app/desktop/main_window.cpp" line="336"/>
         <source>&amp;Training feedback…</source>
         <translation>&amp;Trainingsfeedback…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="335"/>
+        <location filename="../app/desktop/main_window.cpp" line="343"/>
         <source>&amp;View</source>
         <translation>&amp;Weergave</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="336"/>
+        <location filename="../app/desktop/main_window.cpp" line="344"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Fragmenten van &amp;alle codeurs tonen (alleen coördinatoren)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="346"/>
+        <location filename="../app/desktop/main_window.cpp" line="354"/>
         <source>&amp;Lead</source>
         <translation>C&amp;oördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="347"/>
+        <location filename="../app/desktop/main_window.cpp" line="355"/>
         <source>&amp;Compare and adjudicate…</source>
         <translation>&amp;Vergelijken en beslissen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="349"/>
+        <location filename="../app/desktop/main_window.cpp" line="357"/>
         <source>&amp;Reliability…</source>
         <translation>&amp;Betrouwbaarheid…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="351"/>
+        <location filename="../app/desktop/main_window.cpp" line="359"/>
         <source>Write the reliability &amp;report…</source>
         <translation>Betrouwbaarheids&amp;rapport schrijven…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="353"/>
+        <location filename="../app/desktop/main_window.cpp" line="361"/>
         <source>&amp;Study design…</source>
         <translation>&amp;Onderzoeksopzet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="354"/>
+        <location filename="../app/desktop/main_window.cpp" line="362"/>
         <source>&amp;Progress…</source>
         <translation>Voort&amp;gang…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="355"/>
+        <location filename="../app/desktop/main_window.cpp" line="363"/>
         <source>&amp;Hand out a coder copy…</source>
         <translation>Codeurs&amp;kopie uitdelen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="356"/>
+        <location filename="../app/desktop/main_window.cpp" line="364"/>
         <source>&amp;Merge returned coder copies…</source>
         <translation>Teruggekomen codeurskopieën &amp;samenvoegen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="358"/>
+        <location filename="../app/desktop/main_window.cpp" line="366"/>
         <source>&amp;Extractor runs…</source>
         <translation>&amp;Extractorruns…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="362"/>
+        <location filename="../app/desktop/main_window.cpp" line="370"/>
         <source>&amp;Settings</source>
         <translation>&amp;Instellingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="363"/>
+        <location filename="../app/desktop/main_window.cpp" line="371"/>
         <source>&amp;Language</source>
         <translation>&amp;Taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="368"/>
+        <location filename="../app/desktop/main_window.cpp" line="376"/>
         <source>System language</source>
         <translation>Systeemtaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="379"/>
+        <location filename="../app/desktop/main_window.cpp" line="387"/>
         <source>&amp;Help</source>
         <translation>&amp;Help</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="381"/>
+        <location filename="../app/desktop/main_window.cpp" line="389"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="398"/>
+        <location filename="../app/desktop/main_window.cpp" line="406"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Het project heeft geen codeur ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="402"/>
+        <location filename="../app/desktop/main_window.cpp" line="410"/>
         <source>Nobody was chosen to code.</source>
         <translation>Er is niemand gekozen om te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="427"/>
+        <location filename="../app/desktop/main_window.cpp" line="435"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="428"/>
+        <location filename="../app/desktop/main_window.cpp" line="436"/>
         <source>Codebook</source>
         <translation>Codeboek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="445"/>
+        <location filename="../app/desktop/main_window.cpp" line="453"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Ongedaan maken: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="448"/>
+        <location filename="../app/desktop/main_window.cpp" line="456"/>
         <source>&amp;Redo %1</source>
         <translation>Opn&amp;ieuw: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="594"/>
+        <location filename="../app/desktop/main_window.cpp" line="599"/>
         <source>Every article in the list is done.</source>
         <translation>Alle artikelen in de lijst zijn klaar.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="616"/>
+        <location filename="../app/desktop/main_window.cpp" line="621"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n artikel bevat ‘%1’.</numerusform>
@@ -1734,242 +1748,266 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="622"/>
+        <location filename="../app/desktop/main_window.cpp" line="627"/>
         <source>New project</source>
         <translation>Nieuw project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="632"/>
+        <location filename="../app/desktop/main_window.cpp" line="637"/>
         <source>Cannot create project</source>
         <translation>Project kan niet worden aangemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="644"/>
+        <location filename="../app/desktop/main_window.cpp" line="649"/>
         <source>Import articles</source>
         <translation>Artikelen importeren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="645"/>
+        <location filename="../app/desktop/main_window.cpp" line="650"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv)</source>
         <translation>Artikelen (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="675"/>
+        <location filename="../app/desktop/main_window.cpp" line="681"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>De taal verandert wanneer Fourfold opnieuw wordt gestart.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="688"/>
+        <location filename="../app/desktop/main_window.cpp" line="694"/>
         <source>No project open</source>
         <translation>Geen project geopend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="692"/>
+        <location filename="../app/desktop/main_window.cpp" line="698"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="692"/>
+        <location filename="../app/desktop/main_window.cpp" line="698"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="693"/>
+        <location filename="../app/desktop/main_window.cpp" line="699"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — coderen als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="696"/>
+        <location filename="../app/desktop/main_window.cpp" line="702"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Coderen als %1 · %2 · coördinator: alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="697"/>
+        <location filename="../app/desktop/main_window.cpp" line="703"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Coderen als %1 · %2 · blind: alleen je eigen fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="709"/>
+        <location filename="../app/desktop/main_window.cpp" line="715"/>
         <source>Mark the selected text as %1 (snapped to whole words; hold Alt for the exact selection); with a span selected: relabel it</source>
         <translation>De geselecteerde tekst markeren als %1 (afgerond op hele woorden; houd Alt ingedrukt voor de exacte selectie); met een fragment geselecteerd: de functie ervan wijzigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="713"/>
+        <location filename="../app/desktop/main_window.cpp" line="719"/>
         <source>Delete</source>
         <translation>Delete</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="713"/>
+        <location filename="../app/desktop/main_window.cpp" line="719"/>
         <source>Delete the selected span</source>
         <translation>Het geselecteerde fragment verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="715"/>
+        <location filename="../app/desktop/main_window.cpp" line="721"/>
         <source>Undo the last change</source>
         <translation>De laatste wijziging ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="716"/>
+        <location filename="../app/desktop/main_window.cpp" line="722"/>
         <source>Redo</source>
         <translation>Opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="717"/>
+        <location filename="../app/desktop/main_window.cpp" line="723"/>
         <source>Mark the article as done and open the next</source>
         <translation>Het artikel markeren als klaar en het volgende openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="718"/>
+        <location filename="../app/desktop/main_window.cpp" line="724"/>
         <source>Next article that is not done</source>
         <translation>Volgend artikel dat nog niet klaar is</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="720"/>
+        <location filename="../app/desktop/main_window.cpp" line="726"/>
         <source>Search the texts</source>
         <translation>Zoeken in de teksten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="722"/>
+        <location filename="../app/desktop/main_window.cpp" line="728"/>
         <source>Keyboard shortcuts</source>
         <translation>Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="725"/>
+        <location filename="../app/desktop/main_window.cpp" line="731"/>
         <source>Span resizing keys are listed in the reading desk&apos;s tooltip.</source>
         <translation>De toetsen om een fragment groter of kleiner te maken staan in de tooltip van het leesvenster.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="656"/>
+        <location filename="../app/desktop/main_window.cpp" line="661"/>
         <source>Open project</source>
         <translation>Project openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="622"/>
-        <location filename="../app/desktop/main_window.cpp" line="656"/>
+        <location filename="../app/desktop/main_window.cpp" line="627"/>
+        <location filename="../app/desktop/main_window.cpp" line="661"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-projecten (*.fourfold)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="121"/>
-        <location filename="../app/desktop/main_window.cpp" line="637"/>
-        <location filename="../app/desktop/main_window.cpp" line="660"/>
-        <location filename="../app/desktop/main_window.cpp" line="669"/>
+        <location filename="../app/desktop/main_window.cpp" line="129"/>
+        <location filename="../app/desktop/main_window.cpp" line="642"/>
+        <location filename="../app/desktop/main_window.cpp" line="665"/>
+        <location filename="../app/desktop/main_window.cpp" line="674"/>
         <source>Cannot open project</source>
         <translation>Project kan niet worden geopend</translation>
     </message>
 </context>
 <context>
+    <name>fourfold::MessageBar</name>
+    <message>
+        <location filename="../app/desktop/message_bar.cpp" line="68"/>
+        <source>Message</source>
+        <translation>Melding</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/message_bar.cpp" line="83"/>
+        <source>&amp;Details</source>
+        <translation>&amp;Details</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/message_bar.cpp" line="89"/>
+        <location filename="../app/desktop/message_bar.cpp" line="90"/>
+        <source>Close the message</source>
+        <translation>De melding sluiten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/message_bar.cpp" line="95"/>
+        <source>Details of the message</source>
+        <translation>Details van de melding</translation>
+    </message>
+</context>
+<context>
     <name>fourfold::ProgressBoardWindow</name>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="62"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="63"/>
         <source>Progress — %1</source>
         <translation>Voortgang — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="72"/>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="95"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="73"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="96"/>
         <source>Phase</source>
         <translation>Fase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="73"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="74"/>
         <source>All phases</source>
         <translation>Alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="76"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="77"/>
         <source>Show:</source>
         <translation>Tonen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="78"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="79"/>
         <source>Reload</source>
         <translation>Opnieuw laden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
         <source>Assigned</source>
         <translation>Toegewezen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
         <source>Started</source>
         <translation>Begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="82"/>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="179"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="180"/>
         <source>Done</source>
         <translation>Klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="84"/>
         <source>Agreement so far (α)</source>
         <translation>Overeenstemming (α)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="84"/>
         <source>Compared articles</source>
         <translation>Vergeleken artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="84"/>
         <source>Active time</source>
         <translation>Actieve tijd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="86"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="87"/>
         <source>Krippendorff&apos;s alpha on the articles the coder finished: in training with the lead&apos;s master coding, in the other phases the mean over every coder who finished the same articles. ✓ at .800 or more, ~ from .667 (tentative), ✗ below.</source>
         <translation>Krippendorffs alfa over de artikelen die de codeur heeft afgerond: in de training met de mastercodering van de coördinator, in de andere fasen het gemiddelde over alle codeurs die dezelfde artikelen hebben afgerond. ✓ bij .800 of hoger, ~ vanaf .667 (voorlopig), ✗ daaronder.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="93"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="94"/>
         <source>Effort</source>
         <translation>Tijdsbesteding</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="95"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="96"/>
         <source>Articles done</source>
         <translation>Afgeronde artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="95"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="96"/>
         <source>Active time, all coders</source>
         <translation>Actieve tijd, alle codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="96"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="97"/>
         <source>Mean per done article</source>
         <translation>Gemiddelde per afgerond artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="101"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="102"/>
         <source>Show active time per coder</source>
         <translation>Actieve tijd per codeur tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="105"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="106"/>
         <source>Off by default: time is shown only summed over all coders. Recording and showing how long each person works can count as monitoring employees, which may need the coders&apos; agreement or a works council&apos;s consent. Turn it on only if your study has that agreement; the change is written to the project&apos;s log. Only a lead can switch it.</source>
         <translation>Standaard uit: tijd wordt alleen opgeteld over alle codeurs getoond. Vastleggen en tonen hoe lang iedere persoon werkt, kan gelden als het monitoren van werknemers, waarvoor de instemming van de codeurs of van een ondernemingsraad nodig kan zijn. Zet dit alleen aan als je onderzoek die instemming heeft; de wijziging wordt in het logboek van het project geschreven. Alleen een coördinator kan dit omzetten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="178"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="179"/>
         <source>%1 of %2</source>
         <translation>%1 van %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="228"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="229"/>
         <source>&lt;b&gt;No assignments yet.&lt;/b&gt; Plan them in the study design window.</source>
         <translation>&lt;b&gt;Nog geen toewijzingen.&lt;/b&gt; Plan ze in het venster Onderzoeksopzet.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="229"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="230"/>
         <source>&lt;b&gt;%1 of %2 assignments done&lt;/b&gt; · %3 of active coding time in all.</source>
         <translation>&lt;b&gt;%1 van %2 toewijzingen klaar&lt;/b&gt; · %3 actieve codeertijd in totaal.</translation>
     </message>
@@ -1977,47 +2015,47 @@
 <context>
     <name>fourfold::ReadingView</name>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="84"/>
+        <location filename="../app/desktop/reading_view.cpp" line="60"/>
         <source>intro</source>
         <translation>inleiding</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="86"/>
+        <location filename="../app/desktop/reading_view.cpp" line="62"/>
         <source>body</source>
         <translation>kern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="88"/>
+        <location filename="../app/desktop/reading_view.cpp" line="64"/>
         <source>conclusion</source>
         <translation>slot</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="113"/>
+        <location filename="../app/desktop/reading_view.cpp" line="89"/>
         <source>Article text</source>
         <translation>Artikeltekst</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="657"/>
+        <location filename="../app/desktop/reading_view.cpp" line="633"/>
         <source>Mark as %1</source>
         <translation>Markeren als %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="658"/>
+        <location filename="../app/desktop/reading_view.cpp" line="634"/>
         <source>Change to %1</source>
         <translation>Wijzigen in %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="663"/>
+        <location filename="../app/desktop/reading_view.cpp" line="639"/>
         <source>Delete span</source>
         <translation>Fragment verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="689"/>
+        <location filename="../app/desktop/reading_view.cpp" line="665"/>
         <source>%1: “%2”</source>
         <translation>%1: ‘%2’</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="918"/>
+        <location filename="../app/desktop/reading_view.cpp" line="894"/>
         <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Alt+Down and Alt+Up move between spans.</source>
         <translation>
             <numerusform>%n fragment. Selecteer tekst en druk op 1 tot en met 4 om een framingfunctie te markeren; met Alt+Pijl-omlaag en Alt+Pijl-omhoog ga je van fragment naar fragment.</numerusform>
@@ -2025,7 +2063,7 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="927"/>
+        <location filename="../app/desktop/reading_view.cpp" line="903"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Alt+Left/Right and Alt+Shift+Left/Right to resize.</source>
         <translation>Geselecteerd fragment: %1, ‘%2’. Druk op 1 tot en met 4 om de functie te wijzigen, op Delete om het te verwijderen, en op Alt+Links/Rechts en Alt+Shift+Links/Rechts om het groter of kleiner te maken.</translation>
     </message>
@@ -2033,30 +2071,30 @@
 <context>
     <name>fourfold::ReliabilityWindow</name>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="115"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="111"/>
         <source>0.800: rely on the variable</source>
         <translation>0.800: op de variabele vertrouwen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="116"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="112"/>
         <source>0.667: tentative conclusions only</source>
         <translation>0.667: alleen voorlopige conclusies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="155"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="566"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="701"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="152"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="570"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="673"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="705"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="157"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="154"/>
         <source>reliable (≥ 0.800)</source>
         <translation>betrouwbaar (≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="159"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="156"/>
         <source>tentative (≥ 0.667)</source>
         <translation>voorlopig (≥ 0.667)</translation>
     </message>
@@ -2071,197 +2109,192 @@
         <translation>Betrouwbaarheid — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="197"/>
-        <source>Alpha: Krippendorff&apos;s alpha, coincidence form (Krippendorff 2011). Interval: 95% bootstrap, pairs of values resampled (Hayes &amp; Krippendorff 2007); q(α &lt; 0.800): share of replicates below 0.800. Verdict: Krippendorff (2004, §12.2). Minimum values: Krippendorff (2004, §11.4) after Bloch &amp; Kraemer (1989), for the rarest value at p = 0.05. Cohen&apos;s kappa per pair over the units both coded (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) needs every coder on every unit.</source>
-        <translation>Alfa: Krippendorffs alfa, coïncidentievorm (Krippendorff 2011). Interval: 95%-bootstrap, paren van waarden opnieuw getrokken (Hayes &amp; Krippendorff 2007); q(α &lt; 0.800): aandeel replicaties onder 0.800. Oordeel: Krippendorff (2004, §12.2). Benodigde waarden: Krippendorff (2004, §11.4) naar Bloch &amp; Kraemer (1989), voor de zeldzaamste waarde bij p = 0.05. Cohens kappa per paar over de eenheden die beide codeerden (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) vereist elke codeur op elke eenheid.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="206"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="208"/>
         <source>Table</source>
         <translation>Tabel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="220"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="222"/>
         <source>Alpha without each coder</source>
         <translation>Alfa zonder elke codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="223"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="225"/>
         <source>Alpha without each article (the costliest first)</source>
         <translation>Alfa zonder elk artikel (het duurste eerst)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="226"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="228"/>
         <source>Change = alpha without it − alpha with everything: positive means leaving it out raises alpha, so it costs reliability (leave-one-out, common practice). A diagnostic for training and codebook work, not a licence to report the higher figure.</source>
         <translation>Verandering = alfa zonder − alfa met alles: positief betekent dat weglaten de alfa verhoogt, het kost dus betrouwbaarheid (leave-one-out, gangbare praktijk). Een diagnose voor training en codeboekwerk, geen vrijbrief om het hogere cijfer te rapporteren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="231"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="233"/>
         <source>Boundary habits on matched spans</source>
         <translation>Grensgewoonten bij gekoppelde fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="234"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="236"/>
         <source>Each span against the other coder&apos;s span of the same function that overlaps it most; differences are this coder&apos;s minus the other&apos;s, in characters (code points). Systematic: the mean differs from 0 by more than two standard errors over at least 5 matches (a rough screen, common practice).</source>
         <translation>Elk fragment tegenover het fragment van de andere codeur met dezelfde functie dat het het meest overlapt; verschillen zijn die van deze codeur min die van de ander, in tekens (codepunten). Systematisch: het gemiddelde wijkt meer dan twee standaardfouten van 0 af over ten minste 5 koppelingen (een ruwe screening, gangbare praktijk).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="241"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="243"/>
         <source>Diagnostics</source>
         <translation>Diagnose</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="246"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
         <source>Alpha per function</source>
         <translation>Alfa per functie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="250"/>
         <source>Coder pairs</source>
         <translation>Codeursparen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="250"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="252"/>
         <source>Function confusion</source>
         <translation>Functieverwarring</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="253"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="255"/>
         <source>Alpha over time</source>
         <translation>Alfa door de tijd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="278"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="280"/>
         <source>Article item</source>
         <translation>Artikelitem</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="279"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="281"/>
         <source>Paragraph</source>
         <translation>Alinea</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="280"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="282"/>
         <source>Sentence</source>
         <translation>Zin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="281"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="283"/>
         <source>Token (word)</source>
         <translation>Token (woord)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="282"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="284"/>
         <source>Continuum (spans, unitizing alpha)</source>
         <translation>Continuüm (fragmenten, unitizing-alfa)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="287"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="289"/>
         <source>&amp;Unit</source>
         <translation>&amp;Eenheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="293"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="295"/>
         <source>&amp;Item</source>
         <translation>&amp;Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="309"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="311"/>
         <source>Functions</source>
         <translation>Functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="328"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="330"/>
         <source>&amp;Coders</source>
         <translation>&amp;Codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="331"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="333"/>
         <source>All phases</source>
         <translation>Alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="335"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="337"/>
         <source>&amp;Phase</source>
         <translation>&amp;Fase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="337"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="339"/>
         <source>Gold joins as a coder</source>
         <translation>Gouden standaard als codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="339"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="341"/>
         <source>Count articles in progress</source>
         <translation>Artikelen in bewerking meetellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="340"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="342"/>
         <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
         <translation>Standaard telt een artikel van een codeur pas mee als de codeur het als klaar gemarkeerd heeft; vink aan om ook artikelen in bewerking mee te tellen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="348"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="350"/>
         <source>none</source>
         <translation>geen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="349"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="351"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="352"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
         <source>Batches of articles</source>
         <translation>Groepen artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="353"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
         <source>Weeks</source>
         <translation>Weken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
         <source>&amp;Drift by</source>
         <translation>&amp;Drift per</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="358"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
         <source> articles</source>
         <translation> artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
         <source>Batch &amp;size</source>
         <translation>Groeps&amp;grootte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="363"/>
         <source>Co&amp;mpute</source>
         <translation>Be&amp;rekenen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="363"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
         <source>Cancel</source>
         <translation>Annuleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="469"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="473"/>
         <source>Computing…</source>
         <translation>Bezig met berekenen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="479"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="483"/>
         <source>Cancelling after the current step…</source>
         <translation>Annuleren na de huidige stap…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="496"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="500"/>
         <source>Cancelled; the results shown are from before.</source>
         <translation>Geannuleerd; de getoonde resultaten zijn van eerder.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="501"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="505"/>
         <source>%n coder(s) compared.</source>
         <translation>
             <numerusform>%n codeur vergeleken.</numerusform>
@@ -2269,272 +2302,277 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="516"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="520"/>
         <source>Chosen functions (sets)</source>
         <translation>Functieverzameling</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
         <source>Alpha</source>
         <translation>Alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
-        <source>95% interval (bootstrap)</source>
-        <translation>95%-interval (bootstrap)</translation>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="197"/>
+        <source>Alpha: Krippendorff&apos;s alpha, coincidence form (Krippendorff 2011). Interval: 95% bootstrap, units resampled (percentile; the pair interval of Hayes &amp; Krippendorff 2007 is in the report, and it is too narrow with more than two coders); q(α &lt; 0.800): share of replicates below 0.800. Verdict: Krippendorff (2004, §12.2). Minimum values: Krippendorff (2004, §11.4) after Bloch &amp; Kraemer (1989), for the rarest value at p = 0.05. Cohen&apos;s kappa per pair over the units both coded (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) needs every coder on every unit.</source>
+        <translation>Alfa: Krippendorffs alfa, coïncidentievorm (Krippendorff 2011). Interval: 95%-bootstrap, eenheden opnieuw getrokken (percentiel; het paarinterval van Hayes &amp; Krippendorff 2007 staat in het rapport en is te smal bij meer dan twee codeurs); q(α &lt; 0.800): aandeel replicaties onder 0.800. Oordeel: Krippendorff (2004, §12.2). Benodigde waarden: Krippendorff (2004, §11.4) naar Bloch &amp; Kraemer (1989), voor de zeldzaamste waarde bij p = 0.05. Cohens kappa per paar over de eenheden die beide codeerden (Cohen 1960); Fleiss' kappa (Fleiss 1971) vereist elke codeur op elke eenheid.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="535"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
         <source>q(α &lt; 0.800)</source>
         <translation>q(α &lt; 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
+        <source>95% interval (units resampled)</source>
+        <translation>95%-interval (eenheden opnieuw getrokken)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
         <source>Verdict</source>
         <translation>Oordeel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
         <source>Percent agreement</source>
         <translation>Procentuele overeenstemming</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="536"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
         <source>Fleiss&apos; kappa</source>
         <translation>Fleiss&apos; kappa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
         <source>Cohen&apos;s kappa %1 × %2</source>
         <translation>Cohens kappa %1 × %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
         <source>Pairable values</source>
         <translation>Paarbare waarden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
         <source>Pairable units</source>
         <translation>Paarbare eenheden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="542"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
         <source>Rarest value</source>
         <translation>Zeldzaamste waarde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="547"/>
         <source>Minimum values (α ≥ 0.800)</source>
         <translation>Benodigde waarden (α ≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="547"/>
         <source>Sample</source>
         <translation>Steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="548"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="662"/>
         <source>Statistic</source>
         <translation>Statistiek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="574"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="578"/>
         <source>%1, %2 replicates, seed %3</source>
         <translation>%1, %2 replicaties, seed %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="600"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="604"/>
         <source>Fleiss&apos; kappa needs every coder on every unit; some cells are missing.</source>
         <translation>Fleiss&apos; kappa vereist elke codeur op elke eenheid; er ontbreken cellen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="618"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="622"/>
         <source>below the minimum</source>
         <translation>onder het minimum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="619"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="623"/>
         <source>large enough</source>
         <translation>groot genoeg</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="635"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="639"/>
         <source>The sample is smaller than Krippendorff&apos;s minimum for the rarest value (alpha ≥ 0.800 at p = 0.05) in: %1. Code more units before relying on these figures.</source>
         <translation>De steekproef is kleiner dan Krippendorffs minimum voor de zeldzaamste waarde (alfa ≥ 0.800 bij p = 0.05) in: %1. Codeer meer eenheden voordat je op deze cijfers vertrouwt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
         <source>Unitizing alpha</source>
         <translation>Unitizing-alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="654"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
         <source>Observed disagreement D_o</source>
         <translation>Waargenomen onenigheid D_o</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="655"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="659"/>
         <source>Expected disagreement D_e</source>
         <translation>Verwachte onenigheid D_e</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="655"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="659"/>
         <source>Continuum</source>
         <translation>Continuüm</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="660"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
         <source>All four, pooled</source>
         <translation>Alle vier, samengenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="677"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
         <source>%1 articles, %2 characters</source>
         <translation>%1 artikelen, %2 tekens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="688"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="692"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="688"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="871"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="692"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="875"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="690"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="694"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
         <source>Alpha without</source>
         <translation>Alfa zonder</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
         <source>Change</source>
         <translation>Verandering</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="691"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
         <source>Units</source>
         <translation>Eenheden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>Matches</source>
         <translation>Koppelingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>Length ± SE</source>
         <translation>Lengte ± SE</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="718"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>Start</source>
         <translation>Begin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
         <source>End</source>
         <translation>Einde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
         <source>Longer</source>
         <translation>Langer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
         <source>Shorter</source>
         <translation>Korter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="719"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
         <source>Habit</source>
         <translation>Gewoonte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="741"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="745"/>
         <source>spans systematically longer</source>
         <translation>fragmenten systematisch langer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="742"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="746"/>
         <source>spans systematically shorter</source>
         <translation>fragmenten systematisch korter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="755"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="759"/>
         <source>Alpha per function, with 95% bootstrap intervals</source>
         <translation>Alfa per functie, met 95%-bootstrapintervallen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="759"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="920"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="763"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="926"/>
         <source>Krippendorff&apos;s alpha</source>
         <translation>Krippendorffs alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="779"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="783"/>
         <source>pooled</source>
         <translation>samengenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="863"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="867"/>
         <source>Cohen&apos;s kappa of each pair of coders over the units both coded (%1). Darker: higher agreement; hatched: not defined.</source>
         <translation>Cohens kappa van elk paar codeurs over de eenheden die beide codeerden (%1). Donkerder: hogere overeenstemming; gearceerd: niet gedefinieerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="868"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="872"/>
         <source>Continuum units have no per-pair kappa; see the span agreement in the function confusion.</source>
         <translation>Continuümeenheden hebben geen kappa per paar; zie de overeenstemming van fragmenten in de functieverwarring.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="885"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="889"/>
         <source>nothing</source>
         <translation>niets</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
         <source>A coder&apos;s span</source>
         <translation>Fragment van een codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
         <source>What another coder gave it</source>
         <translation>Wat een andere codeur eraan gaf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="903"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="909"/>
         <source>Each span of each coder against the best-overlapping span of every other coder (both directions of each pair). Darker: a larger share of the row. &quot;nothing&quot;: no overlapping span.</source>
         <translation>Elk fragment van elke codeur tegenover het best overlappende fragment van elke andere codeur (beide richtingen van elk paar). Donkerder: een groter deel van de rij. ‘niets’: geen overlappend fragment.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="915"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="921"/>
         <source>Alpha by week of first coding — %1</source>
         <translation>Alfa per week van eerste codering — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="916"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="922"/>
         <source>Alpha by batch of articles, in coding order — %1</source>
         <translation>Alfa per groep artikelen, in codeervolgorde — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="953"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="959"/>
         <source>ISO week</source>
         <translation>ISO-week</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="953"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="959"/>
         <source>articles (in coding order)</source>
         <translation>artikelen (in codeervolgorde)</translation>
     </message>
@@ -2843,129 +2881,144 @@ Click a span in the text or on the frame card to edit it, or select text and pre
 Klik op een fragment in de tekst of op de framekaart om het te bewerken, of selecteer tekst en druk op 1&#xa0;tot&#xa0;en&#xa0;met&#xa0;4 om die te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="170"/>
+        <location filename="../app/desktop/span_editor.cpp" line="174"/>
         <source>Another coder&apos;s span: shown, not editable.</source>
         <translation>Fragment van een andere codeur: zichtbaar, niet bewerkbaar.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="187"/>
+        <location filename="../app/desktop/span_editor.cpp" line="191"/>
         <source>Function: %1</source>
         <translation>Functie: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="191"/>
+        <location filename="../app/desktop/span_editor.cpp" line="195"/>
         <source>&amp;Function:</source>
         <translation>&amp;Functie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="198"/>
+        <location filename="../app/desktop/span_editor.cpp" line="202"/>
         <source>Note</source>
         <translation>Notitie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="202"/>
+        <location filename="../app/desktop/span_editor.cpp" line="206"/>
         <source>&amp;Note:</source>
         <translation>&amp;Notitie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="207"/>
+        <location filename="../app/desktop/span_editor.cpp" line="211"/>
         <source>Confidence</source>
         <translation>Zekerheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="211"/>
-        <location filename="../app/desktop/span_editor.cpp" line="343"/>
-        <location filename="../app/desktop/span_editor.cpp" line="351"/>
+        <location filename="../app/desktop/span_editor.cpp" line="215"/>
+        <location filename="../app/desktop/span_editor.cpp" line="362"/>
+        <location filename="../app/desktop/span_editor.cpp" line="370"/>
         <source>not set</source>
         <translation>niet opgegeven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="214"/>
+        <location filename="../app/desktop/span_editor.cpp" line="218"/>
         <source>How sure you are of this span, from 0 (a guess) to 1 (certain).</source>
         <translation>Hoe zeker je bent van dit fragment, van 0 (een gok) tot 1 (zeker).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="215"/>
+        <location filename="../app/desktop/span_editor.cpp" line="219"/>
         <source>&amp;Confidence:</source>
         <translation>&amp;Zekerheid:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="224"/>
+        <location filename="../app/desktop/span_editor.cpp" line="228"/>
         <source>Links</source>
         <translation>Koppelingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="226"/>
+        <location filename="../app/desktop/span_editor.cpp" line="230"/>
         <source>Links start from an evaluation (to the cause it judges) or from a remedy (to the problem it addresses).</source>
         <translation>Koppelingen beginnen bij een evaluatie (naar de oorzaak die ze beoordeelt) of bij een oplossing (naar het probleem dat ze behandelt).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="235"/>
+        <location filename="../app/desktop/span_editor.cpp" line="240"/>
         <source>Span to link to</source>
         <translation>Fragment om aan te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="238"/>
-        <source>no other spans</source>
-        <translation>geen andere fragmenten</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/span_editor.cpp" line="240"/>
+        <location filename="../app/desktop/span_editor.cpp" line="244"/>
         <source>&amp;Link</source>
         <translation>&amp;Koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="241"/>
+        <location filename="../app/desktop/span_editor.cpp" line="245"/>
         <source>Link to the chosen span</source>
         <translation>Koppelen aan het gekozen fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="253"/>
+        <location filename="../app/desktop/span_editor.cpp" line="257"/>
         <source>Links of this span</source>
         <translation>Koppelingen van dit fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="261"/>
+        <location filename="../app/desktop/span_editor.cpp" line="265"/>
         <source>No links yet.</source>
         <translation>Nog geen koppelingen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="358"/>
+        <location filename="../app/desktop/span_editor.cpp" line="268"/>
+        <source>&amp;Remove link</source>
+        <translation>Koppeling &amp;verwijderen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/span_editor.cpp" line="269"/>
+        <source>Remove the chosen link</source>
+        <translation>De gekozen koppeling verwijderen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/span_editor.cpp" line="377"/>
         <source>%1:</source>
         <translation>%1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="398"/>
+        <location filename="../app/desktop/span_editor.cpp" line="417"/>
         <source>No note.</source>
         <translation>Geen notitie.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="398"/>
+        <location filename="../app/desktop/span_editor.cpp" line="417"/>
         <source>Why this span, doubts, a question for the lead…</source>
         <translation>Waarom dit fragment, twijfels, een vraag voor de coördinator…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="416"/>
+        <location filename="../app/desktop/span_editor.cpp" line="435"/>
         <source>&amp;Judges:</source>
         <translation>Be&amp;oordeelt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="416"/>
+        <location filename="../app/desktop/span_editor.cpp" line="435"/>
         <source>&amp;Addresses:</source>
         <translation>Behan&amp;delt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="445"/>
+        <location filename="../app/desktop/span_editor.cpp" line="437"/>
+        <source>no cause span to link</source>
+        <translation>geen oorzaakfragment om te koppelen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/span_editor.cpp" line="437"/>
+        <source>no problem span to link</source>
+        <translation>geen probleemfragment om te koppelen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/span_editor.cpp" line="467"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="461"/>
+        <location filename="../app/desktop/span_editor.cpp" line="483"/>
         <source>a span not shown here</source>
         <translation>een fragment dat hier niet wordt getoond</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="462"/>
+        <location filename="../app/desktop/span_editor.cpp" line="484"/>
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>
@@ -3606,87 +3659,87 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
 <context>
     <name>fourfold::TrainingFeedbackDialog</name>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="38"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="39"/>
         <source>Training feedback — %1</source>
         <translation>Trainingsfeedback — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="46"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="47"/>
         <source>Compared per:</source>
         <translation>Vergeleken per:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="49"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="50"/>
         <source>Unit</source>
         <translation>Eenheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="50"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="51"/>
         <source>sentence</source>
         <translation>zin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="51"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="52"/>
         <source>paragraph</source>
         <translation>alinea</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="52"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="53"/>
         <source>word</source>
         <translation>woord</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="59"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="60"/>
         <source>Agreement per function</source>
         <translation>Overeenstemming per functie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="60"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
         <source>Function</source>
         <translation>Functie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="60"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
         <source>Same as the master</source>
         <translation>Gelijk aan de master</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="60"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
         <source>α</source>
         <translation>α</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="62"/>
         <source>You marked / master marked</source>
         <translation>Jij markeerde / master markeerde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="61"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="62"/>
         <source>What it suggests</source>
         <translation>Wat het suggereert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="70"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="71"/>
         <source>Most units carry no function, so &quot;same as the master&quot; is high even when your spans differ; α corrects for that agreement by chance (Krippendorff). Aim for α of .800 or more.</source>
         <translation>De meeste eenheden dragen geen functie, dus ‘gelijk aan de master’ is hoog, ook als je fragmenten verschillen; α corrigeert voor die toevallige overeenstemming (Krippendorff). Streef naar een α van .800 of meer.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="84"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="85"/>
         <source>On to the real work</source>
         <translation>Door naar het echte werk</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="122"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="123"/>
         <source>&lt;b&gt;No feedback yet.&lt;/b&gt; %1</source>
         <translation>&lt;b&gt;Nog geen feedback.&lt;/b&gt; %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="130"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="131"/>
         <source>&lt;b&gt;No finished training article to compare yet.&lt;/b&gt; Feedback comes once you mark a training article as done.</source>
         <translation>&lt;b&gt;Nog geen afgerond trainingsartikel om te vergelijken.&lt;/b&gt; Feedback komt zodra je een trainingsartikel als klaar markeert.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="134"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="135"/>
         <source>&lt;b&gt;%1, your coding of %n training article(s) compared with the master coding of %2&lt;/b&gt;, %3 by %3: in how many did you and the master agree on whether the function is there?</source>
         <translation>
             <numerusform>&lt;b&gt;%1, jouw codering van %n trainingsartikel vergeleken met de mastercodering van %2&lt;/b&gt;, %3 voor %3: in hoeveel waren jij en de master het eens over de vraag of de functie aanwezig is?</numerusform>
@@ -3694,42 +3747,42 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="157"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="158"/>
         <source>%1 % (%2 of %3)</source>
         <translation>%1 % (%2 van %3)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="173"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="174"/>
         <source>%1 / %2</source>
         <translation>%1 / %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="179"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="180"/>
         <source>nothing to compare</source>
         <translation>niets om te vergelijken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="181"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="182"/>
         <source>close to the master</source>
         <translation>dicht bij de master</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="183"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="184"/>
         <source>you mark it more often than the master: re-read the exclusion rules</source>
         <translation>je markeert haar vaker dan de master: lees de uitsluitingsregels opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="185"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="186"/>
         <source>you miss some: re-read the definition and examples</source>
         <translation>je mist er enkele: lees de definitie en de voorbeelden opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="187"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="188"/>
         <source>as often, but in other places: compare your spans with the lead&apos;s</source>
         <translation>even vaak, maar op andere plaatsen: vergelijk je fragmenten met die van de coördinator</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="194"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="195"/>
         <source>You have %n training article(s) still open. Finish them before the real work starts.</source>
         <translation>
             <numerusform>Je hebt nog %n trainingsartikel open. Rond het af voordat het echte werk begint.</numerusform>
@@ -3737,7 +3790,7 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="200"/>
+        <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="201"/>
         <source>Training is complete. Talk over the functions with low agreement with your lead, then go on to your assigned articles.</source>
         <translation>De training is afgerond. Bespreek de functies met weinig overeenstemming met je coördinator en ga daarna verder met de artikelen die aan je zijn toegewezen.</translation>
     </message>
