@@ -180,7 +180,8 @@ int runAgree(const QStringList &arguments)
         tr("Ordinal labels from lowest to highest, e.g. negative,neutral,positive."),
         QStringLiteral("A,B,C"));
     const QCommandLineOption distance(QStringLiteral("distance"),
-        tr("Cells are sets of labels separated by | ({} = empty set), compared with jaccard or "
+        tr("Cells are sets of labels separated by | (braces allowed; {} = empty set), compared "
+           "with jaccard or "
            "masi."),
         QStringLiteral("NAME"));
     const QCommandLineOption unit(QStringLiteral("unit"),

@@ -31,15 +31,17 @@ std::unexpected<Error> cellError(
             .arg(table.units.value(qsizetype(unit)), table.coders.value(coder), what));
 }
 
-// Splits a set cell: "a|b" → {a, b}; "{}" → the empty set.
+// Splits a set cell: "a|b" or "{a|b}" → {a, b}; "{}" → the empty set.
 QStringList setMembers(const QString &cell)
 {
-    if (cell == QLatin1String("{}"))
-        return {};
+    QStringView inner(cell);
+    inner = inner.trimmed();
+    if (inner.startsWith(QLatin1Char('{')) && inner.endsWith(QLatin1Char('}')))
+        inner = inner.mid(1, inner.size() - 2);
     QStringList parts;
-    for (const QString &p : cell.split(QLatin1Char('|')))
+    for (QStringView p : inner.split(QLatin1Char('|')))
         if (!p.trimmed().isEmpty())
-            parts << p.trimmed();
+            parts << p.trimmed().toString();
     parts.removeDuplicates();
     parts.sort();
     return parts;

@@ -74,6 +74,23 @@ TEST_CASE("set cells become distinct sets with a distance matrix")
     CHECK(e->metric.custom[0 * 3 + 2] == Approx(1.0));
 }
 
+TEST_CASE("a set cell may be written in braces")
+{
+    // "{cause|problem}" is the set {cause, problem}, not the labels "{cause" and "problem}";
+    // "{}" stays the empty set (common practice for writing sets).
+    EncodingOptions o;
+    o.distance = SetDistance::Masi;
+    auto e =
+        encodeTable(table({{QStringLiteral("{cause|problem}"), QStringLiteral("problem|cause")},
+                        {QStringLiteral("{}"), QStringLiteral("{ problem }")}}),
+            o);
+    REQUIRE(e);
+    CHECK(e->valueLabels
+        == QStringList {
+            QStringLiteral("{}"), QStringLiteral("cause|problem"), QStringLiteral("problem")});
+    CHECK(e->data.cells == std::vector<int> {1, 1, 0, 2});
+}
+
 TEST_CASE("cells that do not fit the level are refused with file, line and cell")
 {
     EncodingOptions o;
