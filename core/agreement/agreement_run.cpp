@@ -173,10 +173,10 @@ Result<AnalysisResult> AgreementRun::analyse(
 
 Result<ContinuumResult> AgreementRun::continuum(std::optional<FramingFunction> function) const
 {
-    AnalysisRequest request;
-    request.unit = UnitKind::Continuum;
-    request.function = function;
-    auto data = continuumData(m_codings, selectionFor(request));
+    UnitSelection selection = m_selection;
+    selection.unit = UnitKind::Continuum;
+    selection.function = function;
+    auto data = continuumData(m_codings, selection);
     if (!data)
         return std::unexpected(data.error());
     ContinuumResult out;

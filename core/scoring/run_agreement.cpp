@@ -86,16 +86,21 @@ Result<RunAgreement> runAgreement(
         runSpans[{s.article.value, int(s.function)}].push_back(s.range);
     std::map<qint64, std::vector<TextRange>> unitCache;
 
+    // The humans' codings that count, read once for the four functions.
+    UnitSelection selection;
+    selection.unit = options.unit;
+    selection.coders = options.coders;
+    selection.phase = options.phase;
+    auto counted = countedCodings(project, selection);
+    if (!counted)
+        return std::unexpected(counted.error());
+
     RunAgreement out;
     out.run = run;
     out.unit = options.unit;
     for (FramingFunction f : kFramingFunctions) {
-        UnitSelection selection;
-        selection.unit = options.unit;
         selection.function = f;
-        selection.coders = options.coders;
-        selection.phase = options.phase;
-        auto table = unitTable(project, selection);
+        auto table = unitTable(project, *counted, selection);
         if (!table)
             return std::unexpected(table.error());
         if (out.coders.isEmpty()) {
