@@ -195,9 +195,51 @@ std::optional<ExportFormat> exportFormatFromKey(const QString &key)
     return std::nullopt;
 }
 
+namespace {
+
+// The collection around a split's items, printed with one item standing in for them all: the
+// items go where it stands, each indented as the document indents it. The count ("total") comes
+// after the items in the printed order, so the tail is printed once the items are counted.
+struct W3cFrame {
+    QByteArray head; // up to the line of the stand-in item
+    QByteArray indent; // the stand-in item's indentation
+    QByteArray tail; // from the end of the stand-in item's line
+    QByteArray emptyTail; // from the start of the line after it (no items: the line goes)
+};
+
+W3cFrame w3cFrame(const QString &layerKey, const QString &split, qint64 total)
+{
+    const QString id = QStringLiteral("urn:fourfold:export:")
+        + QString::fromLatin1(QUrl::toPercentEncoding(layerKey)) + QLatin1Char(':') + split;
+    const QString marker = QStringLiteral("fourfold-items-1f6e3c58-5d0b-4a8e-9c2f-7b41d09e6a35");
+    QJsonObject collection = w3cCollection(id,
+        QCoreApplication::translate("LayerExport", "Fourfold %1 spans, split %2")
+            .arg(layerKey, split),
+        QJsonArray {marker});
+    collection.insert(QStringLiteral("total"), total);
+    const QByteArray frame = QJsonDocument(collection).toJson(QJsonDocument::Indented);
+    const qsizetype at = frame.indexOf('"' + marker.toUtf8() + '"');
+    const qsizetype lineStart = frame.lastIndexOf('\n', at) + 1;
+    const qsizetype lineEnd = frame.indexOf('\n', at);
+    return W3cFrame {frame.left(lineStart), frame.mid(lineStart, at - lineStart),
+        frame.mid(lineEnd), frame.mid(lineEnd + 1)};
+}
+
+// The files of one split and what the manifest says of it.
+struct SplitOutput {
+    QString name;
+    std::vector<std::unique_ptr<StreamedFile>> files;
+    bool noItemYet = true; // w3c
+    QByteArray indent; // w3c: of each item
+    std::array<qint64, 4> spanCount {}, articleCount {};
+    qint64 articles = 0, spans = 0;
+};
+
+} // namespace
+
 Result<ExportReport> exportLayer(const Project &project, const ExportOptions &options)
 {
-    auto layer = resolveLayer(project, options.layer);
+    auto layer = LayerReader::open(project, options.layer);
     if (!layer)
         return std::unexpected(layer.error());
     const std::vector<ArticleId> ids = layer->articles();
@@ -221,29 +263,19 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
         if (auto it = index.constFind(a.id.value); it != index.constEnd())
             articles[*it] = std::move(a);
     all->clear();
-    // The layer lists spans and coverage by article in project order, as `ids` does: each
-    // article's part of them is one run.
-    std::vector<std::pair<std::size_t, std::size_t>> spansOf(articles.size(), {0, 0});
-    for (std::size_t k = 0; k < layer->spans.size(); ++k) {
-        const auto at = index.constFind(layer->spans[k].article.value);
-        if (at == index.constEnd())
-            continue;
-        auto &[begin, end] = spansOf[*at];
-        if (begin == end)
-            begin = k;
-        end = k + 1;
-    }
-    std::vector<std::vector<QString>> sourcesOf(articles.size());
-    for (const LayerCoverage &c : layer->coverage)
-        sourcesOf[index.value(c.article.value)].push_back(c.source);
-    // Function presence per article, the stratum of the split.
-    std::vector<unsigned> masks(articles.size(), 0);
-    for (std::size_t i = 0; i < articles.size(); ++i)
-        for (std::size_t k = spansOf[i].first; k < spansOf[i].second; ++k)
-            masks[i] |= 1u << unsigned(layer->spans[k].function);
+
+    // The split is stratified by the functions present in each article: a first pass over the
+    // spans reads them (one article's spans held at a time), the second writes.
     SplitRatios ratios;
     std::vector<int> splitOf(articles.size(), 0);
     if (options.split) {
+        std::vector<unsigned> masks(articles.size(), 0);
+        FOURFOLD_TRY_STATUS(layer->forEachArticle([&](LayerArticle &&a) -> Status {
+            unsigned &mask = masks[index.value(a.article.value)];
+            for (const LayerSpan &sp : a.spans)
+                mask |= 1u << unsigned(sp.function);
+            return {};
+        }));
         ratios = *options.split;
         QStringList keys;
         for (const ArticleSummary &a : articles)
@@ -262,250 +294,231 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
     if (!dir.mkpath(QStringLiteral(".")))
         return fail(
             ErrorCode::Io, tr("The directory %1 could not be created.").arg(options.outDir));
-    QJsonArray fileList;
-    const auto finish = [&](StreamedFile &file) -> Status {
-        FOURFOLD_TRY_STATUS(file.commit());
-        const ExportedFile e = file.exported();
-        fileList.append(
-            QJsonObject {{QStringLiteral("name"), e.name}, {QStringLiteral("split"), e.split},
-                {QStringLiteral("sha256"), e.sha256}, {QStringLiteral("bytes"), e.bytes}});
-        report.files.push_back(e);
-        return {};
-    };
 
-    const bool text = options.withText;
-    // The article being written; only one is held at a time.
-    std::optional<Article> current;
-    const auto load = [&](std::size_t i) -> Status {
-        if (current && current->summary.id == ids[i])
-            return {};
-        current.reset();
-        auto a = project.article(ids[i]);
-        if (!a)
-            return std::unexpected(a.error());
-        current = std::move(*a);
-        ++report.articleReads;
-        return {};
-    };
-    QJsonObject splitCounts;
-    for (qsizetype s = 0; s < ratios.names.size(); ++s) {
-        const QString split = ratios.names[s];
-        std::vector<std::size_t> members;
-        for (std::size_t i = 0; i < articles.size(); ++i)
-            if (splitOf[i] == int(s))
-                members.push_back(i);
-        // Counts for the manifest.
-        std::array<int, 4> spanCount {}, articleCount {};
-        qint64 spans = 0;
-        for (std::size_t i : members) {
-            for (std::size_t k = spansOf[i].first; k < spansOf[i].second; ++k)
-                ++spanCount[std::size_t(layer->spans[k].function)];
-            spans += qint64(spansOf[i].second - spansOf[i].first);
-            for (FramingFunction f : kFramingFunctions)
-                if (masks[i] & (1u << unsigned(f)))
-                    ++articleCount[std::size_t(f)];
-        }
-        QJsonObject perFunction;
-        for (FramingFunction f : kFramingFunctions)
-            perFunction.insert(functionKey(f),
-                QJsonObject {{QStringLiteral("spans"), spanCount[std::size_t(f)]},
-                    {QStringLiteral("articles"), articleCount[std::size_t(f)]}});
-        splitCounts.insert(split,
-            QJsonObject {{QStringLiteral("articles"), qint64(members.size())},
-                {QStringLiteral("spans"), spans}, {QStringLiteral("per_function"), perFunction}});
-
+    // Every split's files are open at once and written in one pass over the layer.
+    const QStringList &sources = layer->sources();
+    const QStringList sourceParts = sourceFileParts(sources);
+    std::vector<SplitOutput> outputs(std::size_t(ratios.names.size()));
+    for (std::size_t s = 0; s < outputs.size(); ++s) {
+        SplitOutput &out = outputs[s];
+        out.name = ratios.names[qsizetype(s)];
+        QStringList names;
         switch (options.format) {
-        case ExportFormat::Jsonl: {
-            StreamedFile lines(dir, split + QStringLiteral(".jsonl"));
-            StreamedFile articleLines(dir, split + QStringLiteral(".articles.jsonl"));
-            FOURFOLD_TRY_STATUS(lines.open());
-            FOURFOLD_TRY_STATUS(articleLines.open());
-            for (std::size_t i : members) {
-                const ArticleSummary &a = articles[i];
-                if (text)
-                    FOURFOLD_TRY_STATUS(load(i));
-                for (std::size_t k = spansOf[i].first; k < spansOf[i].second; ++k) {
-                    const LayerSpan *sp = &layer->spans[k];
-                    QJsonObject o {{QStringLiteral("article"), a.externalId},
-                        {QStringLiteral("sha256"), a.sha256},
-                        {QStringLiteral("start"), sp->range.start},
-                        {QStringLiteral("end"), sp->range.end},
-                        {QStringLiteral("function"), functionKey(sp->function)},
-                        {QStringLiteral("attributes"), sp->attributes},
-                        {QStringLiteral("coder"),
-                            sp->coder.isEmpty() ? QJsonValue(QJsonValue::Null)
-                                                : QJsonValue(sp->coder)},
-                        {QStringLiteral("source"), sp->source},
-                        {QStringLiteral("id"),
-                            sp->uuid.isEmpty() ? runSpanId(sp->source, a.sha256, *sp)
-                                               : QStringLiteral("urn:uuid:") + sp->uuid}};
-                    if (sp->score)
-                        o.insert(QStringLiteral("score"), *sp->score);
-                    if (text)
-                        o.insert(
-                            QStringLiteral("quote"), OffsetMap::slice(current->text, sp->range));
-                    lines.write(jsonLine(o));
-                }
-                QJsonObject o {{QStringLiteral("article"), a.externalId},
-                    {QStringLiteral("sha256"), a.sha256}, {QStringLiteral("language"), a.language},
-                    {QStringLiteral("length"), a.length}};
-                if (text) {
-                    o.insert(QStringLiteral("title"), a.title);
-                    o.insert(QStringLiteral("text"), current->text);
-                }
-                articleLines.write(jsonLine(o));
-            }
-            FOURFOLD_TRY_STATUS(finish(lines));
-            FOURFOLD_TRY_STATUS(finish(articleLines));
+        case ExportFormat::Jsonl:
+            names << out.name + QStringLiteral(".jsonl")
+                  << out.name + QStringLiteral(".articles.jsonl");
+            break;
+        case ExportFormat::W3c:
+            names << out.name + QStringLiteral(".jsonld");
+            break;
+        case ExportFormat::Iob2:
+            // One file per source.
+            for (const QString &part : sourceParts)
+                names << (sources.size() > 1 ? QStringLiteral("%1.%2.bio").arg(out.name, part)
+                                             : out.name + QStringLiteral(".bio"));
+            break;
+        case ExportFormat::Csv:
+            names << out.name + QStringLiteral(".csv");
             break;
         }
+        for (const QString &name : names) {
+            out.files.push_back(std::make_unique<StreamedFile>(dir, name));
+            FOURFOLD_TRY_STATUS(out.files.back()->open());
+        }
+        switch (options.format) {
+        case ExportFormat::Jsonl:
+            break;
         case ExportFormat::W3c: {
-            StreamedFile file(dir, split + QStringLiteral(".jsonld"));
-            FOURFOLD_TRY_STATUS(file.open());
-            const QString id = QStringLiteral("urn:fourfold:export:")
-                + QString::fromLatin1(QUrl::toPercentEncoding(options.layer.key()))
-                + QLatin1Char(':') + split;
-            // The collection around its items, written with one item standing in for them all:
-            // the items go where it stands, each indented as the document indents it.
-            const QString marker = QStringLiteral("fourfold-items-")
-                + QUuid::createUuid().toString(QUuid::WithoutBraces);
-            QJsonObject collection =
-                w3cCollection(id, tr("Fourfold %1 spans, split %2").arg(options.layer.key(), split),
-                    QJsonArray {marker});
-            collection.insert(QStringLiteral("total"), spans);
-            const QByteArray frame = QJsonDocument(collection).toJson(QJsonDocument::Indented);
-            const qsizetype at = frame.indexOf('"' + marker.toUtf8() + '"');
-            const qsizetype lineStart = frame.lastIndexOf('\n', at) + 1;
-            const QByteArray indent = frame.mid(lineStart, at - lineStart);
-            const qsizetype lineEnd = frame.indexOf('\n', at);
-            file.write(frame.left(lineStart));
-            bool first = true;
-            for (std::size_t i : members) {
-                if (spansOf[i].first == spansOf[i].second)
-                    continue;
-                const ArticleSummary &a = articles[i];
-                std::optional<OffsetMap> map;
-                if (text) {
-                    FOURFOLD_TRY_STATUS(load(i));
-                    map.emplace(current->text);
-                }
-                for (std::size_t k = spansOf[i].first; k < spansOf[i].second; ++k) {
-                    const LayerSpan *sp = &layer->spans[k];
-                    W3cSpan w;
-                    w.id = sp->uuid.isEmpty() ? runSpanId(sp->source, a.sha256, *sp)
-                                              : QStringLiteral("urn:uuid:") + sp->uuid;
-                    w.articleSha256 = a.sha256;
-                    w.function = sp->function;
-                    w.range = sp->range;
-                    w.attributes = sp->attributes;
-                    w.creatorIsSoftware = options.layer.kind == LayerKind::Run;
-                    w.creator = w.creatorIsSoftware
-                        ? sp->source
-                        : (sp->coder.isEmpty() ? sp->source : sp->coder);
-                    w.created = sp->createdAt;
-                    if (text) {
-                        const QString &t = current->text;
-                        const TextRange u = map->utf16Range(sp->range);
-                        const TextRange before = map->utf16Range(
-                            TextRange {std::max<qint64>(0, sp->range.start - 32), sp->range.start});
-                        const TextRange after = map->utf16Range(TextRange {
-                            sp->range.end, std::min(map->codePointCount(), sp->range.end + 32)});
-                        w.quote = t.mid(u.start, u.length());
-                        w.prefix = t.mid(before.start, before.length());
-                        w.suffix = t.mid(after.start, after.length());
-                    }
-                    const QByteArray item = QJsonDocument(w3cAnnotation(w, options.version))
-                                                .toJson(QJsonDocument::Indented);
-                    QByteArray indented = first ? QByteArray() : QByteArrayLiteral(",\n");
-                    first = false;
-                    for (qsizetype from = 0; from < item.size();) {
-                        qsizetype end = item.indexOf('\n', from);
-                        if (end < 0)
-                            end = item.size();
-                        if (from > 0)
-                            indented += '\n';
-                        indented += indent + item.mid(from, end - from);
-                        from = end + 1;
-                    }
-                    file.write(indented);
-                }
-            }
-            // Without items, the line that stood for them goes with its line break.
-            file.write(frame.mid(first ? lineEnd + 1 : lineEnd));
-            FOURFOLD_TRY_STATUS(finish(file));
+            const W3cFrame frame = w3cFrame(options.layer.key(), out.name, 0);
+            out.files[0]->write(frame.head);
+            out.indent = frame.indent;
             break;
         }
-        case ExportFormat::Iob2: {
-            // One file per source, all written in one pass over the articles.
-            std::vector<std::unique_ptr<StreamedFile>> files;
-            const QStringList parts = sourceFileParts(layer->sources);
-            for (const QString &part : parts) {
-                const QString name = layer->sources.size() > 1
-                    ? QStringLiteral("%1.%2.bio").arg(split, part)
-                    : split + QStringLiteral(".bio");
-                files.push_back(std::make_unique<StreamedFile>(dir, name));
-                FOURFOLD_TRY_STATUS(files.back()->open());
-                files.back()->write(iob2Header());
-            }
-            for (std::size_t i : members) {
-                if (sourcesOf[i].empty())
-                    continue;
-                FOURFOLD_TRY_STATUS(load(i));
-                for (const QString &source : sourcesOf[i]) {
-                    Iob2Document d;
-                    d.externalId = articles[i].externalId;
-                    d.sha256 = articles[i].sha256;
-                    d.source = source;
-                    if (text)
-                        d.text = current->text;
-                    d.tokens = current->tokens;
-                    for (std::size_t k = spansOf[i].first; k < spansOf[i].second; ++k)
-                        if (layer->spans[k].source == source)
-                            d.spans.push_back(
-                                Iob2Span {layer->spans[k].function, layer->spans[k].range});
-                    files[std::size_t(layer->sources.indexOf(source))]->write(
-                        writeIob2Document(d, text));
-                }
-            }
-            for (auto &file : files)
-                FOURFOLD_TRY_STATUS(finish(*file));
+        case ExportFormat::Iob2:
+            for (auto &file : out.files)
+                file->write(iob2Header());
             break;
-        }
         case ExportFormat::Csv: {
-            StreamedFile file(dir, split + QStringLiteral(".csv"));
-            FOURFOLD_TRY_STATUS(file.open());
             QStringList header {QStringLiteral("article"), QStringLiteral("sha256"),
                 QStringLiteral("language"), QStringLiteral("length"), QStringLiteral("source")};
             for (FramingFunction f : kFramingFunctions)
                 header << functionKey(f) + QStringLiteral("_present")
                        << functionKey(f) + QStringLiteral("_spans")
                        << functionKey(f) + QStringLiteral("_share");
-            file.write((header.join(QLatin1Char(',')) + QStringLiteral("\r\n")).toUtf8());
-            for (std::size_t i : members) {
-                const ArticleSummary &a = articles[i];
-                for (const QString &source : sourcesOf[i]) {
-                    std::array<std::vector<TextRange>, 4> ranges;
-                    for (std::size_t k = spansOf[i].first; k < spansOf[i].second; ++k)
-                        if (layer->spans[k].source == source)
-                            ranges[std::size_t(layer->spans[k].function)].push_back(
-                                layer->spans[k].range);
-                    QStringList row {csvField(a.externalId), a.sha256, csvField(a.language),
-                        QString::number(a.length), csvField(source)};
-                    for (const auto &r : ranges) {
-                        const double share =
-                            a.length > 0 ? double(covered(r)) / double(a.length) : 0.0;
-                        row << QString::number(r.empty() ? 0 : 1) << QString::number(r.size())
-                            << QString::number(share, 'f', 4);
-                    }
-                    file.write((row.join(QLatin1Char(',')) + QStringLiteral("\r\n")).toUtf8());
-                }
-            }
-            FOURFOLD_TRY_STATUS(finish(file));
+            out.files[0]->write((header.join(QLatin1Char(',')) + QStringLiteral("\r\n")).toUtf8());
             break;
         }
         }
     }
-    current.reset();
+
+    const bool text = options.withText;
+    const bool needsArticle =
+        options.format == ExportFormat::Iob2 || (text && options.format != ExportFormat::Csv);
+    FOURFOLD_TRY_STATUS(layer->forEachArticle([&](LayerArticle &&la) -> Status {
+        const std::size_t i = index.value(la.article.value);
+        const ArticleSummary &a = articles[i];
+        SplitOutput &out = outputs[std::size_t(splitOf[i])];
+        // Counts for the manifest.
+        unsigned mask = 0;
+        for (const LayerSpan &sp : la.spans) {
+            ++out.spanCount[std::size_t(sp.function)];
+            mask |= 1u << unsigned(sp.function);
+        }
+        for (FramingFunction f : kFramingFunctions)
+            if (mask & (1u << unsigned(f)))
+                ++out.articleCount[std::size_t(f)];
+        ++out.articles;
+        out.spans += qint64(la.spans.size());
+
+        // The article's text, read once whatever the number of sources covering it.
+        std::optional<Article> current;
+        const bool hasOutput = options.format != ExportFormat::W3c || !la.spans.empty();
+        if (needsArticle && hasOutput) {
+            auto read = project.article(la.article);
+            if (!read)
+                return std::unexpected(read.error());
+            current = std::move(*read);
+            ++report.articleReads;
+        }
+        const auto spanId = [&](const LayerSpan &sp) {
+            return sp.uuid.isEmpty() ? runSpanId(sp.source, a.sha256, sp)
+                                     : QStringLiteral("urn:uuid:") + sp.uuid;
+        };
+
+        switch (options.format) {
+        case ExportFormat::Jsonl: {
+            for (const LayerSpan &sp : la.spans) {
+                QJsonObject o {{QStringLiteral("article"), a.externalId},
+                    {QStringLiteral("sha256"), a.sha256}, {QStringLiteral("start"), sp.range.start},
+                    {QStringLiteral("end"), sp.range.end},
+                    {QStringLiteral("function"), functionKey(sp.function)},
+                    {QStringLiteral("attributes"), sp.attributes},
+                    {QStringLiteral("coder"),
+                        sp.coder.isEmpty() ? QJsonValue(QJsonValue::Null) : QJsonValue(sp.coder)},
+                    {QStringLiteral("source"), sp.source}, {QStringLiteral("id"), spanId(sp)}};
+                if (sp.score)
+                    o.insert(QStringLiteral("score"), *sp.score);
+                if (text)
+                    o.insert(QStringLiteral("quote"), OffsetMap::slice(current->text, sp.range));
+                out.files[0]->write(jsonLine(o));
+            }
+            QJsonObject o {{QStringLiteral("article"), a.externalId},
+                {QStringLiteral("sha256"), a.sha256}, {QStringLiteral("language"), a.language},
+                {QStringLiteral("length"), a.length}};
+            if (text) {
+                o.insert(QStringLiteral("title"), a.title);
+                o.insert(QStringLiteral("text"), current->text);
+            }
+            out.files[1]->write(jsonLine(o));
+            break;
+        }
+        case ExportFormat::W3c: {
+            if (la.spans.empty())
+                break;
+            std::optional<OffsetMap> map;
+            if (text)
+                map.emplace(current->text);
+            const QByteArray &indent = out.indent;
+            for (const LayerSpan &sp : la.spans) {
+                W3cSpan w;
+                w.id = spanId(sp);
+                w.articleSha256 = a.sha256;
+                w.function = sp.function;
+                w.range = sp.range;
+                w.attributes = sp.attributes;
+                w.creatorIsSoftware = options.layer.kind == LayerKind::Run;
+                w.creator =
+                    w.creatorIsSoftware ? sp.source : (sp.coder.isEmpty() ? sp.source : sp.coder);
+                w.created = sp.createdAt;
+                if (text) {
+                    const QString &t = current->text;
+                    const TextRange u = map->utf16Range(sp.range);
+                    const TextRange before = map->utf16Range(
+                        TextRange {std::max<qint64>(0, sp.range.start - 32), sp.range.start});
+                    const TextRange after = map->utf16Range(TextRange {
+                        sp.range.end, std::min(map->codePointCount(), sp.range.end + 32)});
+                    w.quote = t.mid(u.start, u.length());
+                    w.prefix = t.mid(before.start, before.length());
+                    w.suffix = t.mid(after.start, after.length());
+                }
+                const QByteArray item = QJsonDocument(w3cAnnotation(w, options.version))
+                                            .toJson(QJsonDocument::Indented);
+                QByteArray indented = out.noItemYet ? QByteArray() : QByteArrayLiteral(",\n");
+                out.noItemYet = false;
+                for (qsizetype from = 0; from < item.size();) {
+                    qsizetype end = item.indexOf('\n', from);
+                    if (end < 0)
+                        end = item.size();
+                    if (from > 0)
+                        indented += '\n';
+                    indented += indent + item.mid(from, end - from);
+                    from = end + 1;
+                }
+                out.files[0]->write(indented);
+            }
+            break;
+        }
+        case ExportFormat::Iob2:
+            for (const QString &source : la.sources) {
+                Iob2Document d;
+                d.externalId = a.externalId;
+                d.sha256 = a.sha256;
+                d.source = source;
+                if (text)
+                    d.text = current->text;
+                d.tokens = current->tokens;
+                for (const LayerSpan &sp : la.spans)
+                    if (sp.source == source)
+                        d.spans.push_back(Iob2Span {sp.function, sp.range});
+                out.files[std::size_t(sources.indexOf(source))]->write(writeIob2Document(d, text));
+            }
+            break;
+        case ExportFormat::Csv:
+            for (const QString &source : la.sources) {
+                std::array<std::vector<TextRange>, 4> ranges;
+                for (const LayerSpan &sp : la.spans)
+                    if (sp.source == source)
+                        ranges[std::size_t(sp.function)].push_back(sp.range);
+                QStringList row {csvField(a.externalId), a.sha256, csvField(a.language),
+                    QString::number(a.length), csvField(source)};
+                for (const auto &r : ranges) {
+                    const double share = a.length > 0 ? double(covered(r)) / double(a.length) : 0.0;
+                    row << QString::number(r.empty() ? 0 : 1) << QString::number(r.size())
+                        << QString::number(share, 'f', 4);
+                }
+                out.files[0]->write((row.join(QLatin1Char(',')) + QStringLiteral("\r\n")).toUtf8());
+            }
+            break;
+        }
+        return {};
+    }));
+    report.mostSpansHeld = layer->mostSpansHeld();
+
+    QJsonArray fileList;
+    QJsonObject splitCounts;
+    for (SplitOutput &out : outputs) {
+        if (options.format == ExportFormat::W3c) {
+            const W3cFrame frame = w3cFrame(options.layer.key(), out.name, out.spans);
+            out.files[0]->write(out.noItemYet ? frame.emptyTail : frame.tail);
+        }
+        for (auto &file : out.files) {
+            FOURFOLD_TRY_STATUS(file->commit());
+            const ExportedFile e = file->exported();
+            fileList.append(
+                QJsonObject {{QStringLiteral("name"), e.name}, {QStringLiteral("split"), e.split},
+                    {QStringLiteral("sha256"), e.sha256}, {QStringLiteral("bytes"), e.bytes}});
+            report.files.push_back(e);
+        }
+        QJsonObject perFunction;
+        for (FramingFunction f : kFramingFunctions)
+            perFunction.insert(functionKey(f),
+                QJsonObject {{QStringLiteral("spans"), out.spanCount[std::size_t(f)]},
+                    {QStringLiteral("articles"), out.articleCount[std::size_t(f)]}});
+        splitCounts.insert(out.name,
+            QJsonObject {{QStringLiteral("articles"), out.articles},
+                {QStringLiteral("spans"), out.spans},
+                {QStringLiteral("per_function"), perFunction}});
+    }
 
     QJsonObject ratioObject;
     for (qsizetype s = 0; s < ratios.names.size(); ++s)

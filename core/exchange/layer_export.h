@@ -66,6 +66,8 @@ struct ExportReport {
     // How many times an article's text was read: the export reads one article at a time, once
     // per split and format whatever the number of sources (coders) covering it.
     qint64 articleReads = 0;
+    // The most spans held at once while writing: one article's, never the layer's.
+    std::size_t mostSpansHeld = 0;
 };
 
 // Writes the export. Fails with NotFound for an unknown coder or run, InvalidArgument when the

@@ -63,6 +63,12 @@ Result<std::vector<ExtractedSpan>> ExtractorRuns::spans(
     return store::extractedSpans(project.m_db, run, article);
 }
 
+Status ExtractorRuns::forEachSpan(
+    const Project &project, RunId run, const std::function<Status(ExtractedSpan &&)> &visit)
+{
+    return store::forEachExtractedSpan(project.m_db, run, visit);
+}
+
 Result<qint64> ExtractorRuns::spanCount(const Project &project, RunId run)
 {
     return store::extractedSpanCount(project.m_db, run);

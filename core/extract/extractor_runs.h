@@ -8,6 +8,7 @@
 #include "core/model/error.h"
 #include "core/model/extractor_run.h"
 
+#include <functional>
 #include <optional>
 #include <vector>
 
@@ -27,6 +28,9 @@ public:
     // The spans of `run` (of one article when `article` is valid), by article then start.
     static Result<std::vector<ExtractedSpan>> spans(
         const Project &project, RunId run, ArticleId article = {});
+    // The same spans of the whole run, handed over one at a time (one statement, one row held).
+    static Status forEachSpan(
+        const Project &project, RunId run, const std::function<Status(ExtractedSpan &&)> &visit);
 
     // --- writing runs (each whole or not at all, logged in the event log) -------------------
     // Runs `extractor` over the project's articles (all of them when `articles` is empty) and

@@ -137,6 +137,16 @@ Status Project::forEachSegmentation(SegmentKind kind,
     return store::forEachSegmentation(m_db, kind, visit);
 }
 
+Status Project::forEachAnnotation(const std::function<Status(Annotation &&)> &visit) const
+{
+    return store::forEachAnnotation(m_db, visit);
+}
+
+Status Project::forEachGoldAnnotation(const std::function<Status(GoldAnnotation &&)> &visit) const
+{
+    return store::forEachGoldAnnotation(m_db, visit);
+}
+
 Result<std::optional<ArticleId>> Project::articleByExternalId(const QString &externalId) const
 {
     return store::articleIdByExternalId(m_db, externalId);

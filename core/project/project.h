@@ -96,6 +96,10 @@ public:
     Result<std::vector<GoldRejection>> goldRejections(ArticleId article = {}) const;
     // Every live annotation / judgement / assignment of the project (for reliability work).
     Result<std::vector<Annotation>> allAnnotations() const;
+    // The same annotations (by article, coder, start) and the live gold spans (by article, start,
+    // without their sources), handed over one at a time: one statement each, one row held.
+    Status forEachAnnotation(const std::function<Status(Annotation &&)> &visit) const;
+    Status forEachGoldAnnotation(const std::function<Status(GoldAnnotation &&)> &visit) const;
     Result<std::vector<Judgement>> allJudgements() const;
     Result<std::vector<Assignment>> assignments() const;
     // The live assignments of `coder` on `article`, in any phase (one indexed query).

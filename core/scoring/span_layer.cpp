@@ -9,6 +9,9 @@
 #include <QSet>
 
 #include <algorithm>
+#include <iterator>
+#include <limits>
+#include <tuple>
 
 namespace fourfold {
 
@@ -60,53 +63,45 @@ std::vector<ArticleId> SpanLayer::articles() const
     return out;
 }
 
-Result<SpanLayer> resolveLayer(
+LayerReader::LayerReader(const Project &project, LayerSpec spec)
+    : m_project(&project)
+    , m_spec(std::move(spec))
+{ }
+
+Result<LayerReader> LayerReader::open(
     const Project &project, const LayerSpec &spec, bool includeUnfinished)
 {
-    SpanLayer layer;
-    layer.spec = spec;
+    LayerReader reader(project, spec);
     auto articles = project.articles();
     if (!articles)
         return std::unexpected(articles.error());
     auto coders = project.coders();
     if (!coders)
         return std::unexpected(coders.error());
-    QHash<qint64, QString> pseudonyms;
-    for (const Coder &c : *coders)
-        pseudonyms.insert(c.id.value, c.pseudonym);
-
-    // (article, source) pairs covered, and the spans, before ordering.
-    QSet<QPair<qint64, QString>> covered;
-    std::vector<LayerSpan> spans;
 
     switch (spec.kind) {
     case LayerKind::Gold: {
-        layer.sources << QStringLiteral("gold");
-        auto gold = project.goldAnnotations();
-        if (!gold)
-            return std::unexpected(gold.error());
-        for (const GoldAnnotation &g : *gold) {
-            LayerSpan s;
-            s.article = g.article;
-            s.function = g.content.function;
-            s.range = g.content.range;
-            s.attributes = g.content.attributes;
-            s.coder = pseudonyms.value(g.decidedBy.value);
-            s.source = QStringLiteral("gold");
-            s.uuid = g.uuid;
-            s.createdAt = g.decidedAt;
-            covered.insert({g.article.value, s.source});
-            spans.push_back(std::move(s));
-        }
+        reader.m_sources << QStringLiteral("gold");
+        for (const Coder &c : *coders)
+            reader.m_pseudonyms.insert(c.id.value, c.pseudonym);
+        // Gold covers the articles holding a gold span: their ids, nothing else, are kept.
+        QSet<qint64> withGold;
+        FOURFOLD_TRY_STATUS(project.forEachGoldAnnotation([&](GoldAnnotation &&g) -> Status {
+            withGold.insert(g.article.value);
+            return {};
+        }));
+        for (const ArticleSummary &a : *articles)
+            if (withGold.contains(a.id.value))
+                reader.m_coverage.emplace_back(a.id, 0);
         break;
     }
     case LayerKind::Coders:
     case LayerKind::Coder: {
-        QSet<qint64> chosen;
+        std::vector<const Coder *> chosen;
         for (const Coder &c : *coders)
             if (spec.kind == LayerKind::Coders || c.pseudonym == spec.name)
-                chosen.insert(c.id.value);
-        if (spec.kind == LayerKind::Coder && chosen.isEmpty())
+                chosen.push_back(&c);
+        if (spec.kind == LayerKind::Coder && chosen.empty())
             return fail(
                 ErrorCode::NotFound, tr("There is no coder \"%1\" in the project.").arg(spec.name));
         // A coder covers the articles whose coding counts (CodingScope): spans of articles in
@@ -114,39 +109,33 @@ Result<SpanLayer> resolveLayer(
         auto scope = CodingScope::load(project, CodingScopeOptions {includeUnfinished, {}});
         if (!scope)
             return std::unexpected(scope.error());
+        std::vector<std::pair<ArticleId, const Coder *>> covered;
+        QSet<qint64> active;
         for (const ArticleSummary &article : *articles)
-            for (const Coder &c : *coders)
-                if (chosen.contains(c.id.value) && scope->counts(article.id, c.id))
-                    covered.insert({article.id.value, c.pseudonym});
-        auto annotations = project.allAnnotations();
-        if (!annotations)
-            return std::unexpected(annotations.error());
-        for (const Annotation &a : *annotations) {
-            if (!chosen.contains(a.coder.value) || a.deleted || !scope->counts(a.article, a.coder))
-                continue;
-            LayerSpan s;
-            s.article = a.article;
-            s.function = a.content.function;
-            s.range = a.content.range;
-            s.attributes = a.content.attributes;
-            s.coder = s.source = pseudonyms.value(a.coder.value);
-            s.uuid = a.uuid;
-            s.createdAt = a.createdAt;
-            covered.insert({a.article.value, s.source});
-            spans.push_back(std::move(s));
-        }
+            for (const Coder *c : chosen)
+                if (scope->counts(article.id, c->id)) {
+                    covered.emplace_back(article.id, c);
+                    active.insert(c->id.value);
+                }
         // Every coder of the project for "coders" would list people who coded nothing; only
-        // those who coded something are sources (one coder asked for by name always is).
-        QSet<QString> active;
-        for (const auto &[article, source] : covered)
-            active.insert(source);
-        QStringList sources;
-        for (const Coder &c : *coders)
-            if (chosen.contains(c.id.value)
-                && (spec.kind == LayerKind::Coder || active.contains(c.pseudonym)))
-                sources << c.pseudonym;
-        sources.sort();
-        layer.sources = sources;
+        // those whose coding counts somewhere are sources (one coder asked for by name always is).
+        std::vector<const Coder *> sources;
+        for (const Coder *c : chosen)
+            if (spec.kind == LayerKind::Coder || active.contains(c->id.value))
+                sources.push_back(c);
+        std::sort(sources.begin(), sources.end(),
+            [](const Coder *a, const Coder *b) { return a->pseudonym < b->pseudonym; });
+        for (const Coder *c : sources) {
+            reader.m_coderSource.insert(c->id.value, int(reader.m_sources.size()));
+            reader.m_sources << c->pseudonym;
+        }
+        for (const auto &[article, coder] : covered)
+            reader.m_coverage.emplace_back(article, reader.m_coderSource.value(coder->id.value));
+        // Articles come in project order (by id); within one, by source order.
+        std::sort(
+            reader.m_coverage.begin(), reader.m_coverage.end(), [](const auto &a, const auto &b) {
+                return std::pair(a.first.value, a.second) < std::pair(b.first.value, b.second);
+            });
         break;
     }
     case LayerKind::Run: {
@@ -156,43 +145,133 @@ Result<SpanLayer> resolveLayer(
         if (!*run)
             return fail(ErrorCode::NotFound,
                 tr("There is no extractor run \"%1\" in the project.").arg(spec.name));
-        const QString source = spec.key();
-        layer.sources << source;
+        reader.m_sources << spec.key();
+        reader.m_run = (*run)->id;
+        reader.m_runCreatedAt = (*run)->createdAt;
+        // A run covers every article of the project.
         for (const ArticleSummary &a : *articles)
-            covered.insert({a.id.value, source});
-        auto extracted = ExtractorRuns::spans(project, (*run)->id);
-        if (!extracted)
-            return std::unexpected(extracted.error());
-        for (const ExtractedSpan &e : *extracted) {
-            LayerSpan s;
-            s.article = e.article;
-            s.function = e.function;
-            s.range = e.range;
-            s.attributes = e.attributes;
-            s.score = e.score;
-            s.source = source;
-            s.createdAt = (*run)->createdAt;
-            spans.push_back(std::move(s));
-        }
+            reader.m_coverage.emplace_back(a.id, 0);
         break;
     }
     }
+    return reader;
+}
 
-    QHash<qint64, int> articleOrder;
-    for (const ArticleSummary &a : *articles) {
-        articleOrder.insert(a.id.value, int(articleOrder.size()));
-        for (const QString &source : layer.sources)
-            if (covered.contains({a.id.value, source}))
-                layer.coverage.push_back(LayerCoverage {a.id, source});
+std::vector<ArticleId> LayerReader::articles() const
+{
+    std::vector<ArticleId> out;
+    for (const auto &[article, source] : m_coverage)
+        if (out.empty() || out.back() != article)
+            out.push_back(article);
+    return out;
+}
+
+Status LayerReader::forEachArticle(const std::function<Status(LayerArticle &&)> &visit) const
+{
+    m_mostHeld = 0;
+    std::size_t next = 0; // the first coverage entry not yet handed over
+    std::vector<LayerSpan> held; // the spans of `heldArticle`
+    qint64 heldArticle = 0;
+    // Hands over every covered article before `limit`, the held spans with theirs.
+    const auto handOverBefore = [&](qint64 limit) -> Status {
+        while (next < m_coverage.size() && m_coverage[next].first.value < limit) {
+            LayerArticle a;
+            a.article = m_coverage[next].first;
+            for (; next < m_coverage.size() && m_coverage[next].first == a.article; ++next)
+                a.sources << m_sources[m_coverage[next].second];
+            if (a.article.value == heldArticle) {
+                std::stable_sort(
+                    held.begin(), held.end(), [&](const LayerSpan &x, const LayerSpan &y) {
+                        return std::tuple(m_sources.indexOf(x.source), x.range.start, x.range.end,
+                                   int(x.function))
+                            < std::tuple(m_sources.indexOf(y.source), y.range.start, y.range.end,
+                                int(y.function));
+                    });
+                a.spans = std::move(held);
+                held.clear();
+            }
+            FOURFOLD_TRY_STATUS(visit(std::move(a)));
+        }
+        return {};
+    };
+    // Takes a span of `article` from `source` if that source covers the article.
+    const auto take = [&](ArticleId article, int source, LayerSpan &&span) -> Status {
+        if (article.value != heldArticle) {
+            FOURFOLD_TRY_STATUS(handOverBefore(article.value));
+            held.clear(); // spans of an article no source covers (a deleted one) go
+            heldArticle = article.value;
+        }
+        for (std::size_t k = next; k < m_coverage.size() && m_coverage[k].first == article; ++k)
+            if (m_coverage[k].second == source) {
+                span.article = article;
+                span.source = m_sources[source];
+                held.push_back(std::move(span));
+                m_mostHeld = std::max(m_mostHeld, held.size());
+                break;
+            }
+        return {};
+    };
+
+    switch (m_spec.kind) {
+    case LayerKind::Gold:
+        FOURFOLD_TRY_STATUS(m_project->forEachGoldAnnotation([&](GoldAnnotation &&g) -> Status {
+            LayerSpan s;
+            s.function = g.content.function;
+            s.range = g.content.range;
+            s.attributes = std::move(g.content.attributes);
+            s.coder = m_pseudonyms.value(g.decidedBy.value);
+            s.uuid = std::move(g.uuid);
+            s.createdAt = std::move(g.decidedAt);
+            return take(g.article, 0, std::move(s));
+        }));
+        break;
+    case LayerKind::Coders:
+    case LayerKind::Coder:
+        FOURFOLD_TRY_STATUS(m_project->forEachAnnotation([&](Annotation &&a) -> Status {
+            const int source = sourceOfCoder(a.coder.value);
+            if (source < 0 || a.deleted)
+                return {};
+            LayerSpan s;
+            s.function = a.content.function;
+            s.range = a.content.range;
+            s.attributes = std::move(a.content.attributes);
+            s.coder = m_sources[source];
+            s.uuid = std::move(a.uuid);
+            s.createdAt = std::move(a.createdAt);
+            return take(a.article, source, std::move(s));
+        }));
+        break;
+    case LayerKind::Run:
+        FOURFOLD_TRY_STATUS(
+            ExtractorRuns::forEachSpan(*m_project, m_run, [&](ExtractedSpan &&e) -> Status {
+                LayerSpan s;
+                s.function = e.function;
+                s.range = e.range;
+                s.attributes = std::move(e.attributes);
+                s.score = e.score;
+                s.createdAt = m_runCreatedAt;
+                return take(e.article, 0, std::move(s));
+            }));
+        break;
     }
-    auto sourceIndex = [&](const QString &s) { return layer.sources.indexOf(s); };
-    std::stable_sort(spans.begin(), spans.end(), [&](const LayerSpan &a, const LayerSpan &b) {
-        return std::tuple(articleOrder.value(a.article.value), sourceIndex(a.source), a.range.start,
-                   a.range.end, int(a.function))
-            < std::tuple(articleOrder.value(b.article.value), sourceIndex(b.source), b.range.start,
-                b.range.end, int(b.function));
-    });
-    layer.spans = std::move(spans);
+    return handOverBefore(std::numeric_limits<qint64>::max());
+}
+
+Result<SpanLayer> resolveLayer(
+    const Project &project, const LayerSpec &spec, bool includeUnfinished)
+{
+    auto reader = LayerReader::open(project, spec, includeUnfinished);
+    if (!reader)
+        return std::unexpected(reader.error());
+    SpanLayer layer;
+    layer.spec = spec;
+    layer.sources = reader->sources();
+    FOURFOLD_TRY_STATUS(reader->forEachArticle([&](LayerArticle &&a) -> Status {
+        for (const QString &source : a.sources)
+            layer.coverage.push_back(LayerCoverage {a.article, source});
+        std::move(a.spans.begin(), a.spans.end(), std::back_inserter(layer.spans));
+        return {};
+    }));
     return layer;
 }
 

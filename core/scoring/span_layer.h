@@ -11,9 +11,11 @@
 #include "core/model/ids.h"
 #include "core/model/text_range.h"
 
+#include <QHash>
 #include <QJsonObject>
 #include <QString>
 
+#include <functional>
 #include <optional>
 #include <vector>
 
@@ -66,9 +68,55 @@ struct SpanLayer {
     std::vector<ArticleId> articles() const;
 };
 
-// Reads the layer `spec` of `project`; coder layers hold the articles whose coding counts
-// (CodingScope), with articles in progress when `includeUnfinished`. Fails with NotFound naming
-// the coder or run that does not exist, or with the store's error.
+// One covered article of a layer, as LayerReader hands it over.
+struct LayerArticle {
+    ArticleId article;
+    QStringList sources; // the sources covering it, in the layer's source order
+    std::vector<LayerSpan> spans; // theirs, by source, start, end, function
+};
+
+// A layer read article by article. Opening it reads which sources cover which articles (small:
+// ids only); the spans are then streamed in project order with one statement, one article's
+// spans held at a time, so an export of any size holds about one article's spans.
+class LayerReader
+{
+public:
+    // Coder layers hold the articles whose coding counts (CodingScope), with articles in
+    // progress when `includeUnfinished`. Fails with NotFound naming the coder or run that does
+    // not exist, or with the store's error.
+    static Result<LayerReader> open(
+        const Project &project, const LayerSpec &spec, bool includeUnfinished = false);
+
+    const LayerSpec &spec() const { return m_spec; }
+    // As SpanLayer::sources.
+    const QStringList &sources() const { return m_sources; }
+    // The articles covered by any source, in project order.
+    std::vector<ArticleId> articles() const;
+    // Hands every covered article to `visit` in project order; the first failure ends it.
+    Status forEachArticle(const std::function<Status(LayerArticle &&)> &visit) const;
+    // The most spans the last forEachArticle held at once: one article's, never the layer's.
+    std::size_t mostSpansHeld() const { return m_mostHeld; }
+
+private:
+    LayerReader(const Project &project, LayerSpec spec);
+    // Which source (index into m_sources) a span of the store belongs to, or -1 to leave it.
+    int sourceOfCoder(qint64 coder) const { return m_coderSource.value(coder, -1); }
+
+    const Project *m_project;
+    LayerSpec m_spec;
+    QStringList m_sources;
+    // (article, source index), by article (project order), then source index.
+    std::vector<std::pair<ArticleId, int>> m_coverage;
+    QHash<qint64, int> m_coderSource; // coder layers: coder id -> source index
+    QHash<qint64, QString> m_pseudonyms; // gold: who decided
+    RunId m_run;
+    QString m_runCreatedAt;
+    mutable std::size_t m_mostHeld = 0;
+};
+
+// Reads the whole layer `spec` of `project` (LayerReader collected); coder layers hold the articles
+// whose coding counts (CodingScope), with articles in progress when `includeUnfinished`. Fails with
+// NotFound naming the coder or run that does not exist, or with the store's error.
 Result<SpanLayer> resolveLayer(
     const Project &project, const LayerSpec &spec, bool includeUnfinished = false);
 

@@ -184,6 +184,16 @@ Result<std::vector<Annotation>> allAnnotations(const Database &db)
     return collectRows(*stmt, readAnnotation);
 }
 
+Status forEachAnnotation(const Database &db, const std::function<Status(Annotation &&)> &visit)
+{
+    auto stmt = db.prepare(QStringLiteral("SELECT %1 FROM annotation WHERE deleted = 0 "
+                                          "ORDER BY article_id, coder_id, start, end, id")
+                               .arg(kAnnotationColumns));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    return forEachRow(*stmt, readAnnotation, visit);
+}
+
 Result<LinkId> insertLink(Database &db, const AnnotationLink &l)
 {
     auto stmt = db.prepare(QStringLiteral(

@@ -5,6 +5,7 @@
 #include "core/model/annotation.h"
 #include "core/model/error.h"
 
+#include <functional>
 #include <optional>
 #include <vector>
 
@@ -26,6 +27,8 @@ Result<std::vector<Annotation>> annotations(
     const Database &db, ArticleId article, std::optional<CoderId> coder = std::nullopt);
 // Every live annotation of the project, ordered by article, coder, start.
 Result<std::vector<Annotation>> allAnnotations(const Database &db);
+// The same annotations in the same order, handed to `visit` one at a time (one statement).
+Status forEachAnnotation(const Database &db, const std::function<Status(Annotation &&)> &visit);
 
 Result<LinkId> insertLink(Database &db, const AnnotationLink &link);
 Status updateLinkDeleted(Database &db, LinkId id, bool deleted);

@@ -34,6 +34,12 @@ ExtractedSpan readSpan(const Statement &row)
     return s;
 }
 
+const QString kSpanColumns =
+    QStringLiteral("run_id, article_id, function, start, end, score, attributes");
+const QString kSpanOrder = QStringLiteral(
+    "ORDER BY article_id, start, end, CASE function WHEN 'problem' THEN 0 WHEN 'cause' THEN 1 "
+    "WHEN 'evaluation' THEN 2 ELSE 3 END, id");
+
 } // namespace
 
 Result<RunId> insertRun(Database &db, const ExtractorRun &run)
@@ -112,23 +118,29 @@ Result<std::optional<ExtractorRun>> runByName(const Database &db, const QString 
 
 Result<std::vector<ExtractedSpan>> extractedSpans(const Database &db, RunId run, ArticleId article)
 {
-    const QString columns =
-        QStringLiteral("run_id, article_id, function, start, end, score, attributes");
-    const QString order = QStringLiteral(
-        "ORDER BY article_id, start, end, CASE function WHEN 'problem' THEN 0 WHEN 'cause' THEN 1 "
-        "WHEN 'evaluation' THEN 2 ELSE 3 END, id");
     auto stmt = article.isValid()
         ? db.prepare(QStringLiteral("SELECT %1 FROM extracted_span WHERE run_id = ?1 AND "
                                     "article_id = ?2 %2")
-                         .arg(columns, order))
+                         .arg(kSpanColumns, kSpanOrder))
         : db.prepare(QStringLiteral("SELECT %1 FROM extracted_span WHERE run_id = ?1 %2")
-                         .arg(columns, order));
+                         .arg(kSpanColumns, kSpanOrder));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, run.value);
     if (article.isValid())
         stmt->bind(2, article.value);
     return collectRows(*stmt, readSpan);
+}
+
+Status forEachExtractedSpan(
+    const Database &db, RunId run, const std::function<Status(ExtractedSpan &&)> &visit)
+{
+    auto stmt = db.prepare(QStringLiteral("SELECT %1 FROM extracted_span WHERE run_id = ?1 %2")
+                               .arg(kSpanColumns, kSpanOrder));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, run.value);
+    return forEachRow(*stmt, readSpan, visit);
 }
 
 Result<qint64> extractedSpanCount(const Database &db, RunId run)

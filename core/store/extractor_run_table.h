@@ -5,6 +5,7 @@
 #include "core/model/error.h"
 #include "core/model/extractor_run.h"
 
+#include <functional>
 #include <optional>
 #include <vector>
 
@@ -26,6 +27,9 @@ Result<std::vector<ExtractorRun>> runs(const Database &db);
 Result<std::optional<ExtractorRun>> runByName(const Database &db, const QString &name);
 // The spans of `run` (of one article when `article` is valid), by article, start, end, function.
 Result<std::vector<ExtractedSpan>> extractedSpans(const Database &db, RunId run, ArticleId article);
+// Every span of `run` in the same order, handed to `visit` one at a time (one statement).
+Status forEachExtractedSpan(
+    const Database &db, RunId run, const std::function<Status(ExtractedSpan &&)> &visit);
 // The number of spans of `run`.
 Result<qint64> extractedSpanCount(const Database &db, RunId run);
 

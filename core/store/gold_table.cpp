@@ -145,8 +145,7 @@ Result<std::vector<GoldAnnotation>> goldAnnotations(const Database &db, ArticleI
     if (!stmt)
         return std::unexpected(stmt.error());
     if (article.isValid())
-        if (article.isValid())
-            stmt->bind(1, article.value);
+        stmt->bind(1, article.value);
     auto rows = collectRows(*stmt, readGold);
     if (!rows)
         return std::unexpected(rows.error());
@@ -231,6 +230,17 @@ Result<std::vector<GoldRejection>> goldRejections(const Database &db, ArticleId 
         r.deleted = row.columnInt(6) != 0;
         return r;
     });
+}
+
+Status forEachGoldAnnotation(
+    const Database &db, const std::function<Status(GoldAnnotation &&)> &visit)
+{
+    auto stmt = db.prepare(QStringLiteral("SELECT %1 FROM gold_annotation WHERE deleted = 0 "
+                                          "ORDER BY article_id, start, end, id")
+                               .arg(kGoldColumns));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    return forEachRow(*stmt, readGold, visit);
 }
 
 } // namespace fourfold::store

@@ -5,6 +5,7 @@
 #include "core/model/annotation.h"
 #include "core/model/error.h"
 
+#include <functional>
 #include <vector>
 
 namespace fourfold {
@@ -35,6 +36,10 @@ Status removeGold(Database &db, GoldId id);
 Result<GoldAnnotation> gold(const Database &db, GoldId id);
 // The live gold spans of an article (every article when `article` is invalid), by start.
 Result<std::vector<GoldAnnotation>> goldAnnotations(const Database &db, ArticleId article);
+// Every live gold span by article, start, end, handed to `visit` one at a time, without its
+// sources (`sources` stays empty): one statement.
+Status forEachGoldAnnotation(
+    const Database &db, const std::function<Status(GoldAnnotation &&)> &visit);
 
 // Inserts a rejection (`r.id` ignored). Constraint if the annotation or the coder does not exist.
 Result<qint64> insertRejection(Database &db, const GoldRejection &r);

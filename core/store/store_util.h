@@ -61,6 +61,21 @@ auto collectRows(Statement &stmt, Reader read)
     }
 }
 
+// Steps through every row of `stmt`, turns each into a value with `read(stmt)` and hands it to
+// `visit`, holding one row at a time; the first stepping error or failed visit ends it.
+template<typename Reader, typename Visit>
+Status forEachRow(Statement &stmt, Reader read, const Visit &visit)
+{
+    while (true) {
+        auto row = stmt.step();
+        if (!row)
+            return std::unexpected(row.error());
+        if (!*row)
+            return {};
+        FOURFOLD_TRY_STATUS(visit(read(stmt)));
+    }
+}
+
 // Runs `sql` with no bindings and returns the first column of the first row as an integer
 // (0 when there is no row).
 Result<qint64> scalar(const Database &db, const QString &sql);

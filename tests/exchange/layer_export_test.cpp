@@ -410,6 +410,43 @@ TEST_CASE(
         CHECK(run[2][f] - run[1][f] == 2 * (run[1][f] - run[0][f]));
 }
 
+TEST_CASE("an export holds one article's spans at a time in every format", "[exchange]")
+{
+    // The writer streams the layer article by article: the most spans it holds at once is the
+    // largest article's share of the layer, never the layer, with or without a split.
+    test::DoubleCodedProject p(12);
+    const LayerSpec coders {LayerKind::Coders, {}};
+    auto layer = resolveLayer(p.project, coders);
+    REQUIRE(layer);
+    QHash<qint64, std::size_t> perArticle;
+    for (const LayerSpan &s : layer->spans)
+        ++perArticle[s.article.value];
+    std::size_t largest = 0;
+    for (std::size_t n : std::as_const(perArticle))
+        largest = std::max(largest, n);
+    REQUIRE(largest > 0);
+    REQUIRE(layer->spans.size() > 2 * largest);
+    for (const ExportFormat format :
+        {ExportFormat::Jsonl, ExportFormat::W3c, ExportFormat::Iob2, ExportFormat::Csv})
+        for (const bool split : {false, true}) {
+            ExportOptions o = exportOptions(coders, format,
+                p.dir.filePath(
+                    QStringLiteral("held-%1-%2").arg(exportFormatKey(format)).arg(split)));
+            if (split)
+                o.split =
+                    SplitRatios {{QStringLiteral("train"), QStringLiteral("test")}, {0.5, 0.5}};
+            auto r = exportLayer(p.project, o);
+            REQUIRE(r);
+            INFO(exportFormatKey(format).toStdString() << (split ? " split" : ""));
+            CHECK(r->mostSpansHeld == largest);
+            qint64 spans = 0;
+            const QJsonObject splits = r->manifest.value(QStringLiteral("splits")).toObject();
+            for (const QString &name : splits.keys())
+                spans += splits.value(name).toObject().value(QStringLiteral("spans")).toInteger();
+            CHECK(spans == qint64(layer->spans.size()));
+        }
+}
+
 TEST_CASE("pseudonyms whose file names meet still export to one file each", "[exchange][iob2]")
 {
     // "X/1", "X_1" and "X?1" all become "X_1" in a file name, "x_1" differs only in case, and a
