@@ -6,7 +6,6 @@
 #include <QDateTime>
 #include <QHash>
 #include <QJsonArray>
-#include <QRegularExpression>
 #include <QSet>
 
 #include <algorithm>
@@ -82,9 +81,16 @@ double FunctionConfusion::sameFunction() const
 
 QString unitArticle(const QString &unitId)
 {
-    static const QRegularExpression suffix(QStringLiteral("#[psta][0-9]+$"));
-    const QRegularExpressionMatch m = suffix.match(unitId);
-    return m.hasMatch() ? unitId.left(m.capturedStart()) : unitId;
+    // The unit suffix "#" + one of p, s, t, a + digits, if the id ends in one. Called per unit
+    // of tables with millions, so read by hand rather than by a regular expression.
+    const qsizetype hash = unitId.lastIndexOf(QLatin1Char('#'));
+    if (hash < 0 || hash + 2 >= unitId.size()
+        || !QStringView(u"psta").contains(unitId.at(hash + 1)))
+        return unitId;
+    for (qsizetype i = hash + 2; i < unitId.size(); ++i)
+        if (unitId.at(i) < QLatin1Char('0') || unitId.at(i) > QLatin1Char('9'))
+            return unitId;
+    return unitId.left(hash);
 }
 
 Result<std::vector<LeaveOneOut>> leaveOneCoderOut(
@@ -367,12 +373,14 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
 
     // Articles of the table with a pairable unit (two coders' values), in coding order: an
     // article only one coder has finished adds nothing a period could compare.
+    std::vector<QString> articleOfUnit(std::size_t(table.units.size()));
     QSet<QString> inTable;
     for (qsizetype u = 0; u < table.units.size(); ++u) {
+        articleOfUnit[std::size_t(u)] = unitArticle(table.units[u]);
         const QStringList &row = table.cells[size_t(u)];
         if (std::count_if(row.begin(), row.end(), [](const QString &v) { return !v.isEmpty(); })
             >= 2)
-            inTable.insert(unitArticle(table.units[u]));
+            inTable.insert(articleOfUnit[std::size_t(u)]);
     }
     std::vector<std::pair<std::pair<QString, qint64>, QString>> ordered;
     for (const auto &[id, key] : first)
@@ -403,19 +411,24 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
         periods.back().articles << ordered[i].second;
         periodOf.insert(ordered[i].second, int(periods.size()) - 1);
     }
+    // Each period's units, found in one pass over the table.
+    std::vector<std::vector<qsizetype>> unitsOf(periods.size());
+    for (qsizetype u = 0; u < table.units.size(); ++u)
+        if (const int p = periodOf.value(articleOfUnit[std::size_t(u)], -1); p >= 0)
+            unitsOf[std::size_t(p)].push_back(u);
+    articleOfUnit.clear();
     for (size_t p = 0; p < periods.size(); ++p) {
         if (!carryOn(progress, int(p), int(periods.size())))
             return cancelled();
         ReliabilityTable part;
         part.coders = table.coders;
         part.source = table.source;
-        for (qsizetype u = 0; u < table.units.size(); ++u)
-            if (periodOf.value(unitArticle(table.units[u]), -1) == int(p)) {
-                part.units << table.units[u];
-                part.cells.push_back(table.cells[size_t(u)]);
-                if (size_t(u) < table.lines.size())
-                    part.lines.push_back(table.lines[size_t(u)]);
-            }
+        for (const qsizetype u : unitsOf[p]) {
+            part.units << table.units[u];
+            part.cells.push_back(table.cells[size_t(u)]);
+            if (size_t(u) < table.lines.size())
+                part.lines.push_back(table.lines[size_t(u)]);
+        }
         auto encoded = encodeTable(part, encoding);
         if (!encoded)
             return std::unexpected(encoded.error());

@@ -34,17 +34,18 @@ std::vector<TextRange> mergedRanges(const std::vector<Iob2Span> &spans, FramingF
     return merged;
 }
 
-QString tokenText(const QString &text, const OffsetMap &map, const TextRange &token)
+// The token's text in UTF-8, "_" for none.
+QByteArray tokenText(const QString &text, const OffsetMap &map, const TextRange &token)
 {
     const TextRange u = map.utf16Range(token);
-    if (u.start < 0)
-        return QStringLiteral("_");
-    QString t = text.mid(u.start, u.length());
+    if (u.start < 0 || u.isEmpty())
+        return QByteArrayLiteral("_");
+    QByteArray t = QStringView(text).mid(u.start, u.length()).toUtf8();
     // Tokens hold no white space; guard the format's separators all the same.
-    for (QChar &c : t)
-        if (c == QLatin1Char('\t') || c == QLatin1Char('\n') || c == QLatin1Char('\r'))
-            c = QLatin1Char(' ');
-    return t.isEmpty() ? QStringLiteral("_") : t;
+    for (char &c : t)
+        if (c == '\t' || c == '\n' || c == '\r')
+            c = ' ';
+    return t;
 }
 
 } // namespace
@@ -68,9 +69,19 @@ QByteArray writeIob2(const std::vector<Iob2Document> &documents, bool withText)
 
 QByteArray writeIob2Document(const Iob2Document &d, bool withText)
 {
-    QString out;
-    out += QStringLiteral("# article = %1\n# sha256 = %2\n# source = %3\n")
-               .arg(d.externalId, d.sha256, d.source);
+    // Written straight into UTF-8 bytes, a token line at a time: a document has thousands.
+    static const auto tags = [] {
+        std::array<std::array<QByteArray, 2>, 4> t; // per function: begin, inside
+        for (FramingFunction f : kFramingFunctions) {
+            const QByteArray key = functionKey(f).toUtf8();
+            t[std::size_t(f)] = {"\tB-" + key, "\tI-" + key};
+        }
+        return t;
+    }();
+    QByteArray out = QStringLiteral("# article = %1\n# sha256 = %2\n# source = %3\n")
+                         .arg(d.externalId, d.sha256, d.source)
+                         .toUtf8();
+    out.reserve(out.size() + qsizetype(d.tokens.size()) * 56 + 1);
     const bool text = withText && !d.text.isEmpty();
     const OffsetMap map(text ? d.text : QString());
     std::array<std::vector<TextRange>, 4> ranges;
@@ -79,27 +90,32 @@ QByteArray writeIob2Document(const Iob2Document &d, bool withText)
     for (FramingFunction f : kFramingFunctions)
         ranges[std::size_t(f)] = mergedRanges(d.spans, f);
     for (const TextRange &token : d.tokens) {
-        out += text ? tokenText(d.text, map, token) : QStringLiteral("_");
-        out += QStringLiteral("\t%1\t%2").arg(token.start).arg(token.end);
+        if (text)
+            out += tokenText(d.text, map, token);
+        else
+            out += '_';
+        out += '\t';
+        out += QByteArray::number(token.start);
+        out += '\t';
+        out += QByteArray::number(token.end);
         for (FramingFunction f : kFramingFunctions) {
             const std::size_t i = std::size_t(f);
             auto &n = next[i];
             while (n < ranges[i].size() && ranges[i][n].end <= token.start)
                 ++n;
-            QString tag = QStringLiteral("O");
             if (n < ranges[i].size() && ranges[i][n].overlaps(token)) {
                 const bool continues = open[i] == ranges[i][n].start;
-                tag = (continues ? QStringLiteral("I-") : QStringLiteral("B-")) + functionKey(f);
+                out += tags[i][continues ? 1 : 0];
                 open[i] = ranges[i][n].start;
             } else {
+                out += "\tO";
                 open[i] = -1;
             }
-            out += QLatin1Char('\t') + tag;
         }
-        out += QLatin1Char('\n');
+        out += '\n';
     }
-    out += QLatin1Char('\n');
-    return out.toUtf8();
+    out += '\n';
+    return out;
 }
 
 Result<std::vector<Iob2Document>> readIob2(const QByteArray &bytes, const QString &file)

@@ -117,6 +117,12 @@ TEST_CASE("unitArticle strips the unit suffix made by the unitizers")
     CHECK(unitArticle(QStringLiteral("a7#a1")) == QStringLiteral("a7"));
     CHECK(unitArticle(QStringLiteral("a7")) == QStringLiteral("a7"));
     CHECK(unitArticle(QStringLiteral("x#y#s3")) == QStringLiteral("x#y"));
+    // Not a unit suffix: another letter, no digits, or more after the digits.
+    CHECK(unitArticle(QStringLiteral("a7#x1")) == QStringLiteral("a7#x1"));
+    CHECK(unitArticle(QStringLiteral("a7#s")) == QStringLiteral("a7#s"));
+    CHECK(unitArticle(QStringLiteral("a7#s1b")) == QStringLiteral("a7#s1b"));
+    CHECK(unitArticle(QStringLiteral("a7#s1#")) == QStringLiteral("a7#s1#"));
+    CHECK(unitArticle(QStringLiteral("#t4")) == QString());
 }
 
 TEST_CASE("leave-one-out finds the planted bad coder and the planted bad article in a table")

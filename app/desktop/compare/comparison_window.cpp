@@ -698,6 +698,21 @@ void ComparisonWindow::selectSpans(const std::vector<AnnotationId> &ids)
     reloadArticle();
 }
 
+void ComparisonWindow::selectGold(const std::vector<GoldId> &ids)
+{
+    {
+        const QSignalBlocker block(m_spanList);
+        for (int i = 0; i < m_spanList->topLevelItemCount(); ++i) {
+            QTreeWidgetItem *item = m_spanList->topLevelItem(i);
+            item->setSelected(item->data(0, IsGoldRole).toBool()
+                && std::ranges::find(ids, GoldId {item->data(0, IdRole).toLongLong()})
+                    != ids.end());
+        }
+    }
+    updateActions();
+    reloadArticle();
+}
+
 void ComparisonWindow::setRationale(const QString &text)
 {
     m_rationale->setText(text);

@@ -54,6 +54,8 @@ public:
     std::vector<Annotation> selectedSpans() const;
     // Selects the given spans of the current passage in the decision list.
     void selectSpans(const std::vector<AnnotationId> &ids);
+    // Selects the given gold spans of the current passage (for Withdraw).
+    void selectGold(const std::vector<GoldId> &ids);
     void setRationale(const QString &text);
 
     // Decisions; each pushes one command and returns false (with a message) if it could not.
