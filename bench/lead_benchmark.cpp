@@ -6,6 +6,7 @@
 // Runs on the offscreen platform unless QT_QPA_PLATFORM is set.
 //
 //   lead_benchmark [ARTICLES=1000] [ROUNDS=5] [WORK_DIR=a temporary directory]
+// ROUNDS=0 only opens the comparison window.
 
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
@@ -56,20 +57,24 @@ void print(const char *path, int articles, std::vector<double> seconds)
     std::fflush(stdout);
 }
 
-// Moves to a passage with an undecided disagreement holding spans of at least `spans` coders
-// and selects the first `spans` of them; false if there is none left.
-bool selectDisagreement(ComparisonWindow &w, std::size_t spans)
+// Moves to a passage with an undecided disagreement and no gold yet, and selects `spans` of its
+// spans (all of one function when `oneFunction`); false if there is none left.
+bool selectDisagreement(ComparisonWindow &w, std::size_t spans, bool oneFunction = false)
 {
     for (int tries = 0; tries < 200; ++tries) {
         const int at = w.currentPassage();
         if (at >= 0) {
             const Passage &p = w.passages()[std::size_t(at)];
-            if (!p.isAgreed() && p.gold.empty() && p.spans.size() >= spans) {
+            if (!p.isAgreed() && p.gold.empty()) {
                 std::vector<AnnotationId> ids;
-                for (std::size_t k = 0; k < spans; ++k)
-                    ids.push_back(p.spans[k].id);
-                w.selectSpans(ids);
-                return true;
+                for (const Annotation &a : p.spans)
+                    if (ids.size() < spans
+                        && (!oneFunction || a.content.function == p.spans.front().content.function))
+                        ids.push_back(a.id);
+                if (ids.size() == spans) {
+                    w.selectSpans(ids);
+                    return true;
+                }
             }
         }
         if (!w.nextDisagreement())
@@ -86,7 +91,7 @@ int main(int argc, char **argv)
         qputenv("QT_QPA_PLATFORM", "offscreen");
     QApplication app(argc, argv);
     const int n = argc > 1 ? std::atoi(argv[1]) : 1000;
-    const int rounds = std::max(1, argc > 2 ? std::atoi(argv[2]) : 5);
+    const int rounds = std::max(0, argc > 2 ? std::atoi(argv[2]) : 5);
     QTemporaryDir temporary;
     const QString dir = argc > 3 ? QString::fromLocal8Bit(argv[3]) : temporary.path();
     QDir().mkpath(dir);
@@ -153,7 +158,7 @@ int main(int argc, char **argv)
         if (!selectDisagreement(w, 1))
             break;
         reject.push_back(latency([&] { return w.rejectSelected(); }, "reject"));
-        if (selectDisagreement(w, 2))
+        if (selectDisagreement(w, 2, true))
             merge.push_back(latency([&] { return w.mergeSelected(); }, "merge"));
         if (!selectDisagreement(w, 1))
             break;
@@ -173,19 +178,18 @@ int main(int argc, char **argv)
         w.selectGold({decided->id});
         withdraw.push_back(latency([&] { return w.withdrawSelectedGold(); }, "withdraw"));
     }
-    if (accept.empty()) {
+    if (accept.empty() && rounds > 0) {
         std::fprintf(stderr, "the study has no disagreement to decide\n");
         return 1;
     }
-    print("accept one span", n, accept);
-    print("undo", n, undone);
-    print("redo", n, redone);
-    print("reject one span", n, reject);
-    if (!merge.empty())
-        print("merge two spans", n, merge);
-    print("edit (decide changed boundaries)", n, edit);
-    print("withdraw a gold span", n, withdraw);
+    for (const auto &[what, seconds] : {std::pair {"accept one span", &accept}, {"undo", &undone},
+             {"redo", &redone}, {"reject one span", &reject}, {"merge two spans", &merge},
+             {"edit (decide changed boundaries)", &edit}, {"withdraw a gold span", &withdraw}})
+        if (!seconds->empty())
+            print(what, n, *seconds);
     window.reset();
+    if (rounds == 0)
+        return 0;
 
     // The computation alone, as the window runs it on its worker thread.
     {

@@ -222,7 +222,8 @@ Result<std::vector<Coder>> articleCoders(
     auto coders = project.coders();
     if (!coders)
         return std::unexpected(coders.error());
-    auto scope = CodingScope::load(project, CodingScopeOptions {includeUnfinished, {}});
+    auto scope =
+        CodingScope::loadArticle(project, article, CodingScopeOptions {includeUnfinished, {}});
     if (!scope)
         return std::unexpected(scope.error());
     return countingCoders(*coders, *scope, article);

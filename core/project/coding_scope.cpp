@@ -17,10 +17,16 @@ struct PairFacts {
 
 Result<CodingScope> CodingScope::load(const Project &project, const CodingScopeOptions &options)
 {
-    auto assignments = store::assignments(project.m_db);
+    return loadArticle(project, ArticleId {}, options);
+}
+
+Result<CodingScope> CodingScope::loadArticle(
+    const Project &project, ArticleId article, const CodingScopeOptions &options)
+{
+    auto assignments = store::assignments(project.m_db, article);
     if (!assignments)
         return std::unexpected(assignments.error());
-    auto coded = store::codedTriples(project.m_db);
+    auto coded = store::codedTriples(project.m_db, article);
     if (!coded)
         return std::unexpected(coded.error());
     const auto wanted = [&](Phase p) { return !options.phase || *options.phase == p; };

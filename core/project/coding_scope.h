@@ -39,6 +39,9 @@ public:
     // Reads the assignments and which coders hold spans or answers on which articles (two
     // queries, whatever the size of the project). Fails only when the project cannot be read.
     static Result<CodingScope> load(const Project &project, const CodingScopeOptions &options = {});
+    // The same for one article only (two indexed queries): what opening one article needs.
+    static Result<CodingScope> loadArticle(
+        const Project &project, ArticleId article, const CodingScopeOptions &options = {});
 
     // Done: the coder has an assignment of the article marked done and an assignment, span or
     // answer of it in the phase. InProgress: in the phase, not done, and opened ("started") or

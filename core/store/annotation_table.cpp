@@ -19,14 +19,14 @@ Annotation readAnnotation(const Statement &s)
     a.uuid = s.columnText(1);
     a.article = ArticleId {s.columnInt(2)};
     a.coder = CoderId {s.columnInt(3)};
-    a.content.function = functionFromKey(s.columnText(4)).value_or(FramingFunction::Problem);
+    a.content.function = storedFunction(s.columnUtf8(4)).value_or(FramingFunction::Problem);
     a.content.range = TextRange {s.columnInt(5), s.columnInt(6)};
     a.quote = s.columnText(7);
-    a.content.attributes = fromJsonText(s.columnText(8));
+    a.content.attributes = fromJsonText(s.columnUtf8(8));
     a.content.note = s.columnText(9);
     a.content.confidence = s.columnOptionalDouble(10);
     a.codebookVersion = CodebookVersionId {s.columnInt(11)};
-    a.phase = phaseFromKey(s.columnText(12)).value_or(Phase::Production);
+    a.phase = storedPhase(s.columnUtf8(12)).value_or(Phase::Production);
     a.createdAt = s.columnText(13);
     a.modifiedAt = s.columnText(14);
     a.deleted = s.columnInt(15) != 0;

@@ -71,6 +71,10 @@ public:
     // in a bounded number of queries keeps this figure independent of the project's size.
     qint64 statementsRun() const { return m_statementsRun; }
     void countStatementRun() const { ++m_statementsRun; }
+    // How many result rows this connection has stepped to. A view that reads one article's rows
+    // keeps this figure independent of the project's size, where statementsRun() cannot tell
+    // an indexed query from a scan of a whole table.
+    qint64 rowsRead() const { return m_rowsRead; }
     // How many statements this connection has compiled (prepare() calls that found no finished
     // statement of the same SQL to reuse). Tests check that an import compiles a fixed number
     // whatever the number of its rows.
@@ -86,6 +90,7 @@ private:
     QString m_path;
     FaultHook m_faultHook;
     mutable qint64 m_statementsRun = 0;
+    mutable qint64 m_rowsRead = 0;
     mutable qint64 m_statementsPrepared = 0;
     // Finished statements by their SQL, at most one per text and kMaxIdleStatements in all.
     mutable QHash<QString, sqlite3_stmt *> m_idle;

@@ -54,13 +54,18 @@ Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase ph
     return {};
 }
 
-Result<std::vector<Assignment>> assignments(const Database &db)
+Result<std::vector<Assignment>> assignments(const Database &db, ArticleId article)
 {
-    auto stmt = db.prepare(QStringLiteral("SELECT article_id, coder_id, phase, status, "
-                                          "active_seconds FROM assignment WHERE deleted = 0 "
-                                          "ORDER BY article_id, coder_id, phase"));
+    auto stmt = db.prepare(article.isValid()
+            ? QStringLiteral("SELECT article_id, coder_id, phase, status, active_seconds FROM "
+                             "assignment WHERE deleted = 0 AND article_id = ?1 "
+                             "ORDER BY coder_id, phase")
+            : QStringLiteral("SELECT article_id, coder_id, phase, status, active_seconds FROM "
+                             "assignment WHERE deleted = 0 ORDER BY article_id, coder_id, phase"));
     if (!stmt)
         return std::unexpected(stmt.error());
+    if (article.isValid())
+        stmt->bind(1, article.value);
     return collectRows(*stmt, [](const Statement &row) {
         return Assignment {ArticleId {row.columnInt(0)}, CoderId {row.columnInt(1)},
             phaseFromKey(row.columnText(2)).value_or(Phase::Production), row.columnText(3),
@@ -68,14 +73,21 @@ Result<std::vector<Assignment>> assignments(const Database &db)
     });
 }
 
-Result<std::vector<CodedTriple>> codedTriples(const Database &db)
+Result<std::vector<CodedTriple>> codedTriples(const Database &db, ArticleId article)
 {
-    auto stmt = db.prepare(
-        QStringLiteral("SELECT article_id, coder_id, phase FROM annotation WHERE deleted = 0 "
-                       "UNION SELECT article_id, coder_id, phase FROM judgement WHERE deleted = 0 "
-                       "ORDER BY 1, 2, 3"));
+    // Two statements rather than "?1 IS NULL OR article_id = ?1", which SQLite cannot answer
+    // from the indexes on article_id.
+    auto stmt = db.prepare(article.isValid()
+            ? QStringLiteral("SELECT article_id, coder_id, phase FROM annotation WHERE deleted = 0 "
+                             "AND article_id = ?1 UNION SELECT article_id, coder_id, phase FROM "
+                             "judgement WHERE deleted = 0 AND article_id = ?1 ORDER BY 1, 2, 3")
+            : QStringLiteral("SELECT article_id, coder_id, phase FROM annotation WHERE deleted = 0 "
+                             "UNION SELECT article_id, coder_id, phase FROM judgement WHERE "
+                             "deleted = 0 ORDER BY 1, 2, 3"));
     if (!stmt)
         return std::unexpected(stmt.error());
+    if (article.isValid())
+        stmt->bind(1, article.value);
     return collectRows(*stmt, [](const Statement &row) {
         return CodedTriple {ArticleId {row.columnInt(0)}, CoderId {row.columnInt(1)},
             phaseFromKey(row.columnText(2)).value_or(Phase::Production)};

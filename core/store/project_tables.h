@@ -23,16 +23,18 @@ Status setSetting(Database &db, const QString &key, const QString &value);
 // Assigns `article` to `coder` in `phase` (uuid made here). Duplicate if it already is.
 Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase phase);
 
-// Every live assignment, ordered by article and coder.
-Result<std::vector<Assignment>> assignments(const Database &db);
+// Every live assignment (of one article when `article` is valid: one indexed query), ordered by
+// article and coder.
+Result<std::vector<Assignment>> assignments(const Database &db, ArticleId article = {});
 // One (article, coder, phase) that has at least one live span or answer.
 struct CodedTriple {
     ArticleId article;
     CoderId coder;
     Phase phase = Phase::Production;
 };
-// Every such triple, once, ordered by article, coder and phase (one query).
-Result<std::vector<CodedTriple>> codedTriples(const Database &db);
+// Every such triple (of one article when `article` is valid: indexed), once, ordered by
+// article, coder and phase (one query).
+Result<std::vector<CodedTriple>> codedTriples(const Database &db, ArticleId article = {});
 // Sets the status of every live assignment of `coder` on `article`; returns how many rows
 // changed.
 Result<qint64> setAssignmentStatus(

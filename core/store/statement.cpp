@@ -95,8 +95,10 @@ Result<bool> Statement::step()
         rc = m_db->faultHook()();
     if (rc == SQLITE_OK)
         rc = sqlite3_step(m_stmt);
-    if (rc == SQLITE_ROW)
+    if (rc == SQLITE_ROW) {
+        ++m_db->m_rowsRead;
         return true;
+    }
     if (rc == SQLITE_DONE)
         return false;
     Error e = m_db->errorFor(rc,
@@ -138,6 +140,12 @@ QString Statement::columnText(int index) const
 {
     const auto *text = reinterpret_cast<const char *>(sqlite3_column_text(m_stmt, index));
     return QString::fromUtf8(text, sqlite3_column_bytes(m_stmt, index));
+}
+
+QByteArrayView Statement::columnUtf8(int index) const
+{
+    const auto *text = reinterpret_cast<const char *>(sqlite3_column_text(m_stmt, index));
+    return QByteArrayView(text, sqlite3_column_bytes(m_stmt, index));
 }
 
 QByteArray Statement::columnBlob(int index) const

@@ -44,6 +44,9 @@ public:
     double columnDouble(int index) const;
     bool columnIsNull(int index) const;
     QString columnText(int index) const;
+    // The column's UTF-8 bytes without a copy: valid until the next step, reset or column call
+    // of another type on this column.
+    QByteArrayView columnUtf8(int index) const;
     QByteArray columnBlob(int index) const;
     std::optional<double> columnOptionalDouble(int index) const;
 

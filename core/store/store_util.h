@@ -1,7 +1,9 @@
 #pragma once
 // Small helpers shared by the table code of core/store.
 
+#include "core/model/annotation.h"
 #include "core/model/error.h"
+#include "core/model/framing_function.h"
 #include "core/store/database.h"
 #include "core/store/statement.h"
 
@@ -42,6 +44,32 @@ inline QString toJsonText(const QJsonObject &o)
 inline QJsonObject fromJsonText(const QString &text)
 {
     return QJsonDocument::fromJson(text.toUtf8()).object();
+}
+
+// The same from the column's bytes (Statement::columnUtf8): no string per row, and none at all
+// for the empty object most rows hold.
+inline QJsonObject fromJsonText(QByteArrayView utf8)
+{
+    if (utf8.isEmpty() || utf8 == "{}")
+        return {};
+    return QJsonDocument::fromJson(QByteArray::fromRawData(utf8.data(), utf8.size())).object();
+}
+
+// A framing function or phase as stored (its key), read from the column's bytes.
+inline std::optional<FramingFunction> storedFunction(QByteArrayView key)
+{
+    for (FramingFunction f : kFramingFunctions)
+        if (functionKey(f) == QLatin1StringView(key))
+            return f;
+    return std::nullopt;
+}
+
+inline std::optional<Phase> storedPhase(QByteArrayView key)
+{
+    for (Phase p : {Phase::Training, Phase::Pilot, Phase::Reliability, Phase::Production})
+        if (phaseKey(p) == QLatin1StringView(key))
+            return p;
+    return std::nullopt;
 }
 
 // Steps through every row of `stmt` and turns each into a value with `read(stmt)`; the first

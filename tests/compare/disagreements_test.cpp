@@ -345,6 +345,26 @@ TEST_CASE("the comparison queue reads the same few statements for 6 and for 18 a
     CHECK(counts[0] <= 12);
 }
 
+TEST_CASE("opening one article to compare reads its own rows only at any size")
+{
+    // Which coders count on the article comes from its own assignments and codings (indexed),
+    // not from a scan of every assignment of the project.
+    qint64 rows[2] = {};
+    int i = 0;
+    for (int n : {6, 30}) {
+        DoubleCodedProject p(n);
+        const ArticleId article = p.articles[1]; // coded by two coders, no gold
+        rows[i++] = p.rowsReadBy([&] {
+            auto comparison = compareArticle(p.project, article);
+            REQUIRE(comparison);
+            CHECK(comparison->coders.size() == 2);
+            CHECK(comparison->passages.size() == 2);
+        });
+    }
+    CHECK(rows[0] == rows[1]);
+    CHECK(rows[0] > 0);
+}
+
 TEST_CASE("a decision recomputes one queue row with the same few statements at any size")
 {
     qint64 counts[2] = {};

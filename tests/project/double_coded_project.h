@@ -56,6 +56,15 @@ struct DoubleCodedProject : ProjectFixture {
         REQUIRE(project.apply(edit));
     }
 
+    // Result rows read on the project's connection while `work` runs.
+    template<typename Work>
+    qint64 rowsReadBy(Work &&work)
+    {
+        const qint64 before = project.databaseForTesting().rowsRead();
+        work();
+        return project.databaseForTesting().rowsRead() - before;
+    }
+
     // Statements run on the project's connection while `work` runs.
     template<typename Work>
     qint64 statementsRunBy(Work &&work)
