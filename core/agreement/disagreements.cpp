@@ -8,8 +8,8 @@
 #include <QSet>
 
 #include <algorithm>
-#include <map>
 #include <set>
+#include <unordered_map>
 
 namespace fourfold {
 
@@ -349,15 +349,18 @@ Result<std::vector<ArticleDisagreement>> disagreementQueue(
         return std::unexpected(scope.error());
     // Everything the comparisons need, read once and grouped by article: the queue costs the
     // same few queries whatever the number of articles.
-    std::map<qint64, ArticleCodings> byArticle;
-    auto spans = project.allAnnotations();
-    if (!spans)
-        return std::unexpected(spans.error());
+    std::unordered_map<qint64, ArticleCodings> byArticle;
+    byArticle.reserve(articles->size());
     QHash<qint64, qint64> articleOfSpan;
-    for (Annotation &a : *spans) {
+    // Streamed by article: each span is moved once, into its article's list.
+    ArticleCodings *last = nullptr;
+    FOURFOLD_TRY_STATUS(project.forEachAnnotation([&](Annotation &&a) -> Status {
         articleOfSpan.insert(a.id.value, a.article.value);
-        byArticle[a.article.value].spans.push_back(std::move(a));
-    }
+        if (!last || last->spans.back().article != a.article)
+            last = &byArticle[a.article.value];
+        last->spans.push_back(std::move(a));
+        return {};
+    }));
     auto gold = project.goldAnnotations();
     if (!gold)
         return std::unexpected(gold.error());
