@@ -37,12 +37,13 @@ using namespace fourfold::bench;
 namespace {
 
 // Runs `work`, lets the event loop paint what it changed, and returns the seconds taken.
-double latency(const std::function<bool()> &work, const char *what)
+double latency(
+    const std::function<bool()> &work, const char *what, const ComparisonWindow *w = nullptr)
 {
     QElapsedTimer t;
     t.start();
     if (!work()) {
-        std::fprintf(stderr, "%s failed\n", what);
+        std::fprintf(stderr, "%s failed: %s\n", what, w ? qPrintable(w->lastMessage()) : "");
         std::exit(1);
     }
     QCoreApplication::processEvents();
@@ -67,10 +68,11 @@ bool selectDisagreement(ComparisonWindow &w, std::size_t spans, bool oneFunction
             const Passage &p = w.passages()[std::size_t(at)];
             if (!p.isAgreed() && p.gold.empty()) {
                 std::vector<AnnotationId> ids;
-                for (const Annotation &a : p.spans)
-                    if (ids.size() < spans
-                        && (!oneFunction || a.content.function == p.spans.front().content.function))
-                        ids.push_back(a.id);
+                for (std::size_t k = 0; k < p.spans.size(); ++k)
+                    if (ids.size() < spans && !p.rejected[k]
+                        && (!oneFunction
+                            || p.spans[k].content.function == p.spans.front().content.function))
+                        ids.push_back(p.spans[k].id);
                 if (ids.size() == spans) {
                     w.selectSpans(ids);
                     return true;
@@ -142,7 +144,7 @@ int main(int argc, char **argv)
     for (int round = 0; round < rounds; ++round) {
         if (!selectDisagreement(w, 1))
             break;
-        accept.push_back(latency([&] { return w.acceptSelected(); }, "accept"));
+        accept.push_back(latency([&] { return w.acceptSelected(); }, "accept", &w));
         undone.push_back(latency(
             [&] {
                 undo.undo();
@@ -157,16 +159,16 @@ int main(int argc, char **argv)
             "redo"));
         if (!selectDisagreement(w, 1))
             break;
-        reject.push_back(latency([&] { return w.rejectSelected(); }, "reject"));
+        reject.push_back(latency([&] { return w.rejectSelected(); }, "reject", &w));
         if (selectDisagreement(w, 2, true))
-            merge.push_back(latency([&] { return w.mergeSelected(); }, "merge"));
+            merge.push_back(latency([&] { return w.mergeSelected(); }, "merge", &w));
         if (!selectDisagreement(w, 1))
             break;
         const std::vector<Annotation> chosen = w.selectedSpans();
         GoldCandidate candidate {chosen.front().content, {chosen.front().id}};
         candidate.content.range.end =
             std::max(candidate.content.range.start + 1, candidate.content.range.end - 1);
-        edit.push_back(latency([&] { return w.decide(candidate); }, "edit"));
+        edit.push_back(latency([&] { return w.decide(candidate); }, "edit", &w));
         // The gold span just decided is in the current passage: withdraw it.
         const Passage &p = w.passages()[std::size_t(w.currentPassage())];
         const auto decided = std::ranges::find_if(p.gold,
@@ -176,7 +178,7 @@ int main(int argc, char **argv)
             return 1;
         }
         w.selectGold({decided->id});
-        withdraw.push_back(latency([&] { return w.withdrawSelectedGold(); }, "withdraw"));
+        withdraw.push_back(latency([&] { return w.withdrawSelectedGold(); }, "withdraw", &w));
     }
     if (accept.empty() && rounds > 0) {
         std::fprintf(stderr, "the study has no disagreement to decide\n");
