@@ -352,9 +352,10 @@ Result<std::vector<ArticleDisagreement>> disagreementQueue(
     std::unordered_map<qint64, ArticleCodings> byArticle;
     byArticle.reserve(articles->size());
     QHash<qint64, qint64> articleOfSpan;
-    // Streamed by article: each span is moved once, into its article's list.
+    // Outlines streamed by article (the queue counts passages; quotes and notes are read when
+    // an article is opened): each span is moved once, into its article's list.
     ArticleCodings *last = nullptr;
-    FOURFOLD_TRY_STATUS(project.forEachAnnotation([&](Annotation &&a) -> Status {
+    FOURFOLD_TRY_STATUS(project.forEachAnnotationOutline([&](Annotation &&a) -> Status {
         articleOfSpan.insert(a.id.value, a.article.value);
         if (!last || last->spans.back().article != a.article)
             last = &byArticle[a.article.value];

@@ -142,6 +142,11 @@ Status Project::forEachAnnotation(const std::function<Status(Annotation &&)> &vi
     return store::forEachAnnotation(m_db, visit);
 }
 
+Status Project::forEachAnnotationOutline(const std::function<Status(Annotation &&)> &visit) const
+{
+    return store::forEachAnnotationOutline(m_db, visit);
+}
+
 Status Project::forEachGoldAnnotation(const std::function<Status(GoldAnnotation &&)> &visit) const
 {
     return store::forEachGoldAnnotation(m_db, visit);

@@ -99,6 +99,9 @@ public:
     // The same annotations (by article, coder, start) and the live gold spans (by article, start,
     // without their sources), handed over one at a time: one statement each, one row held.
     Status forEachAnnotation(const std::function<Status(Annotation &&)> &visit) const;
+    // The same as outlines (id, article, coder, function, range, attributes, phase; the rest
+    // empty): what comparing every article's spans needs.
+    Status forEachAnnotationOutline(const std::function<Status(Annotation &&)> &visit) const;
     Status forEachGoldAnnotation(const std::function<Status(GoldAnnotation &&)> &visit) const;
     Result<std::vector<Judgement>> allJudgements() const;
     Result<std::vector<Assignment>> assignments() const;

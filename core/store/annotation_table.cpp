@@ -194,6 +194,31 @@ Status forEachAnnotation(const Database &db, const std::function<Status(Annotati
     return forEachRow(*stmt, readAnnotation, visit);
 }
 
+Status forEachAnnotationOutline(
+    const Database &db, const std::function<Status(Annotation &&)> &visit)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT id, article_id, coder_id, function, start, end, attributes, phase "
+                       "FROM annotation WHERE deleted = 0 ORDER BY article_id, coder_id, start, "
+                       "end, id"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    return forEachRow(
+        *stmt,
+        [](const Statement &s) {
+            Annotation a;
+            a.id = AnnotationId {s.columnInt(0)};
+            a.article = ArticleId {s.columnInt(1)};
+            a.coder = CoderId {s.columnInt(2)};
+            a.content.function = storedFunction(s.columnUtf8(3)).value_or(FramingFunction::Problem);
+            a.content.range = TextRange {s.columnInt(4), s.columnInt(5)};
+            a.content.attributes = fromJsonText(s.columnUtf8(6));
+            a.phase = storedPhase(s.columnUtf8(7)).value_or(Phase::Production);
+            return a;
+        },
+        visit);
+}
+
 Result<LinkId> insertLink(Database &db, const AnnotationLink &l)
 {
     auto stmt = db.prepare(QStringLiteral(
