@@ -203,8 +203,8 @@ Result<SpanMatching> AgreementRun::matching(const DiagnosticsProgress &progress)
 Result<std::vector<PeriodAlpha>> AgreementRun::periods(const AnalysisResult &analysis,
     PeriodKind kind, int batchSize, const DiagnosticsProgress &progress) const
 {
-    return alphaByPeriod(
-        *m_project, m_selection, analysis.table, analysis.encoding, kind, batchSize, progress);
+    // The codings this run read once: a period's first coding is a coder's, never gold's.
+    return alphaByPeriod(m_codings, analysis.table, analysis.encoding, kind, batchSize, progress);
 }
 
 QJsonObject continuumJson(const ContinuumResult &result)

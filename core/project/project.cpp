@@ -142,6 +142,11 @@ Status Project::forEachAnnotation(const std::function<Status(Annotation &&)> &vi
     return store::forEachAnnotation(m_db, visit);
 }
 
+Result<std::vector<std::pair<CoderId, Phase>>> Project::spanCoderPhases() const
+{
+    return store::spanCoderPhases(m_db);
+}
+
 Status Project::forEachAnnotationOutline(const std::function<Status(Annotation &&)> &visit) const
 {
     return store::forEachAnnotationOutline(m_db, visit);

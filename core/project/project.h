@@ -105,6 +105,9 @@ public:
     Status forEachGoldAnnotation(const std::function<Status(GoldAnnotation &&)> &visit) const;
     Result<std::vector<Judgement>> allJudgements() const;
     Result<std::vector<Assignment>> assignments() const;
+    // Every (coder, phase) holding at least one live span, once: who coded what, without
+    // reading the spans.
+    Result<std::vector<std::pair<CoderId, Phase>>> spanCoderPhases() const;
     // The live assignments of `coder` on `article`, in any phase (one indexed query).
     Result<std::vector<Assignment>> assignments(ArticleId article, CoderId coder) const;
 

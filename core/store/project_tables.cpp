@@ -73,6 +73,18 @@ Result<std::vector<Assignment>> assignments(const Database &db, ArticleId articl
     });
 }
 
+Result<std::vector<std::pair<CoderId, Phase>>> spanCoderPhases(const Database &db)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT DISTINCT coder_id, phase FROM annotation WHERE deleted = 0"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    return collectRows(*stmt, [](const Statement &row) {
+        return std::pair {
+            CoderId {row.columnInt(0)}, storedPhase(row.columnUtf8(1)).value_or(Phase::Production)};
+    });
+}
+
 Result<std::vector<CodedTriple>> codedTriples(const Database &db, ArticleId article)
 {
     // Two statements rather than "?1 IS NULL OR article_id = ?1", which SQLite cannot answer

@@ -32,6 +32,8 @@ struct CodedTriple {
     CoderId coder;
     Phase phase = Phase::Production;
 };
+// Every (coder, phase) with at least one live span, once (one query, no text decoded).
+Result<std::vector<std::pair<CoderId, Phase>>> spanCoderPhases(const Database &db);
 // Every such triple (of one article when `article` is valid: indexed), once, ordered by
 // article, coder and phase (one query).
 Result<std::vector<CodedTriple>> codedTriples(const Database &db, ArticleId article = {});

@@ -314,10 +314,10 @@ void ReliabilityWindow::buildControls(QWidget *panel)
     m_coders->setMaximumHeight(120);
     QSet<qint64> active;
     bool anyReliability = false;
-    if (auto annotations = m_project.allAnnotations())
-        for (const Annotation &a : *annotations) {
-            active.insert(a.coder.value);
-            anyReliability = anyReliability || a.phase == Phase::Reliability;
+    if (auto coded = m_project.spanCoderPhases())
+        for (const auto &[coder, phase] : *coded) {
+            active.insert(coder.value);
+            anyReliability = anyReliability || phase == Phase::Reliability;
         }
     if (auto coders = m_project.coders())
         for (const Coder &c : *coders) {
