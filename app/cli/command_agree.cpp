@@ -216,13 +216,18 @@ int runAgree(const QStringList &arguments)
         QStringLiteral("N"), QStringLiteral("0"));
     const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
         QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption weights(QStringLiteral("weights"),
+        tr("Cohen's kappa with disagreement weights by the values' order (Cohen 1968): none "
+           "(default), linear or quadratic. For ordered values: an ordinal item, --order, or "
+           "numbers."),
+        QStringLiteral("W"), QStringLiteral("none"));
     const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
     const QCommandLineOption diagnostics(QStringLiteral("diagnostics"),
         tr("Also show where reliability is lost: alpha without each coder and without each "
            "article (the costliest first), and with a project the function confusion on matched "
            "spans and the coders' boundary habits."));
     parser.addOptions({data, level, order, distance, unit, function, coders, phase, articles, item,
-        attribute, withGold, includeUnfinished, bootstrap, seed, json, diagnostics});
+        attribute, withGold, includeUnfinished, bootstrap, seed, weights, json, diagnostics});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
     if (int rc = parseCommandLine(parser, command,
@@ -244,6 +249,18 @@ int runAgree(const QStringList &arguments)
     agreementOptions.seed = parser.value(seed).toULongLong(&ok);
     if (!ok)
         return usageError(command, tr("--seed expects a non-negative whole number."));
+
+    bool weightsKnown = false;
+    for (const auto w : {reliability::KappaWeights::None, reliability::KappaWeights::Linear,
+             reliability::KappaWeights::Quadratic})
+        if (parser.value(weights) == QLatin1String(reliability::kappaWeightsKey(w))) {
+            agreementOptions.kappaWeights = w;
+            weightsKnown = true;
+        }
+    if (!weightsKnown)
+        return usageError(command,
+            tr("unknown weights \"%1\" (expected none, linear or quadratic).")
+                .arg(parser.value(weights)));
 
     EncodingOptions encoding;
     const auto levelValue = levelFromKey(parser.value(level));

@@ -51,6 +51,7 @@ QJsonObject kappaJson(const KappaResult &k)
     o.insert(QStringLiteral("observed_agreement"), k.observedAgreement);
     o.insert(QStringLiteral("chance_agreement"), k.chanceAgreement);
     o.insert(QStringLiteral("kappa_max"), number(k.kappaMax));
+    o.insert(QStringLiteral("weights"), QString::fromLatin1(kappaWeightsKey(k.weights)));
     return o;
 }
 
@@ -137,7 +138,7 @@ AgreementReport computeAgreement(const EncodedData &encoded, const QStringList &
     r.lightKappa = lightKappa(data);
     if (r.complete && data.coders == 2) {
         const ContingencyTable table = contingencyTable(data, 0, 1);
-        r.cohenKappa = cohenKappa(table);
+        r.cohenKappa = cohenKappa(table, options.kappaWeights);
         r.scottPi = scottPi(table);
         r.bennettS = bennettS(table);
     }
@@ -161,7 +162,7 @@ AgreementReport computeAgreement(const EncodedData &encoded, const QStringList &
             }
             two.units = data.units;
             p.percentAgreement = percentAgreement(two);
-            p.cohenKappa = cohenKappa(table);
+            p.cohenKappa = cohenKappa(table, options.kappaWeights);
             r.pairs.push_back(p);
         }
     // Sample-size advice for the rarest value among the pairable values (Krippendorff 2004,
@@ -282,8 +283,12 @@ QString agreementText(const AgreementReport &r)
                          : tr("undefined"));
     if (r.cohenKappa) {
         const KappaResult &k = *r.cohenKappa;
-        lines << tr("Cohen's kappa %1  (SE %2, 95% CI [%3, %4])")
-                     .arg(fixed(k.value), fixed(k.standardError), fixed(k.ciLow), fixed(k.ciHigh));
+        const QString weighting = k.weights == KappaWeights::Linear ? tr(", linear weights")
+            : k.weights == KappaWeights::Quadratic                  ? tr(", quadratic weights")
+                                                                    : QString();
+        lines << tr("Cohen's kappa %1  (SE %2, 95% CI [%3, %4]%5)")
+                     .arg(fixed(k.value), fixed(k.standardError), fixed(k.ciLow), fixed(k.ciHigh),
+                         weighting);
     }
     if (r.scottPi)
         lines << tr("Scott's pi    %1").arg(fixed(r.scottPi->value));

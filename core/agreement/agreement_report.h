@@ -27,6 +27,9 @@ struct AgreementOptions {
     // tentative conclusions from 0.667).
     double alphaMin = 0.8;
     double significance = 0.05;
+    // Cohen's kappa of two coders and of each pair: unweighted, or weighted by the positions
+    // of the values in their order (Cohen 1968).
+    reliability::KappaWeights kappaWeights = reliability::KappaWeights::None;
 };
 
 struct PairAgreement {

@@ -1,5 +1,7 @@
 #include "core/reliability/kappa.h"
 
+#include "core/reliability/sample_size.h"
+
 #include <algorithm>
 #include <cmath>
 #include <cstddef>
@@ -9,8 +11,8 @@ namespace fourfold::reliability {
 
 namespace {
 
-// The two-sided 95% normal quantile, as printed in the contract (value ± 1.96 SE).
-constexpr double kZ95 = 1.96;
+// The two-sided 95% normal quantile Φ⁻¹(0.975) = 1.95996…, exact to double precision.
+const double kZ95 = normalQuantile(0.975);
 
 std::size_t at(int row, int column, int k)
 {
@@ -153,6 +155,7 @@ KappaResult cohenKappa(
     const ContingencyTable &table, KappaWeights weights, const std::vector<double> &customWeights)
 {
     KappaResult r;
+    r.weights = weights;
     const auto s = tableShares(table, r.reason);
     if (!s)
         return r;
@@ -255,8 +258,9 @@ KappaResult cohenKappa(
     const double nullVariance = sumNull / (s->n * q2);
     r.standardError = std::sqrt(std::max(variance, 0.0));
     r.nullStandardError = std::sqrt(std::max(nullVariance, 0.0));
-    r.ciLow = kappa - kZ95 * *r.standardError;
-    r.ciHigh = kappa + kZ95 * *r.standardError;
+    // Kappa lies in [−1, 1]: the normal interval is clipped to it (common practice).
+    r.ciLow = std::max(-1.0, kappa - kZ95 * *r.standardError);
+    r.ciHigh = std::min(1.0, kappa + kZ95 * *r.standardError);
     return r;
 }
 
@@ -496,6 +500,21 @@ SimpleAgreement lightKappa(const ReliabilityData &data)
     }
     r.value = sum / pairs;
     return r;
+}
+
+const char *kappaWeightsKey(KappaWeights weights)
+{
+    switch (weights) {
+    case KappaWeights::None:
+        return "none";
+    case KappaWeights::Linear:
+        return "linear";
+    case KappaWeights::Quadratic:
+        return "quadratic";
+    case KappaWeights::Custom:
+        return "custom";
+    }
+    return "none";
 }
 
 } // namespace fourfold::reliability

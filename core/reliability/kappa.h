@@ -25,16 +25,20 @@ struct ContingencyTable {
 ContingencyTable contingencyTable(const ReliabilityData &data, int coderA, int coderB);
 
 enum class KappaWeights { None, Linear, Quadratic, Custom };
+// "none", "linear", "quadratic", "custom".
+const char *kappaWeightsKey(KappaWeights weights);
 
 struct KappaResult {
     std::optional<double> value;
     UndefinedReason reason;
+    KappaWeights weights = KappaWeights::None; // as asked for
     // p_o and p_e. Weighted: in agreement-weight form, 1 − Σ w·p_ij / w_max and
     // 1 − Σ w·p_i.·p_.j / w_max (w: disagreement weights), so value = (p_o − p_e) / (1 − p_e).
     double observedAgreement = 0;
     double chanceAgreement = 0;
     std::optional<double> standardError; // Fleiss, Cohen & Everitt (1969), non-null
-    std::optional<double> ciLow, ciHigh; // value ± 1.96 · standardError (not clipped)
+    // value ± Φ⁻¹(0.975) · standardError (1.95996…), clipped to [−1, 1].
+    std::optional<double> ciLow, ciHigh;
     std::optional<double> nullStandardError; // for the test of kappa = 0
     // Cohen (1960): the largest kappa the marginals allow; unweighted kappa only.
     std::optional<double> kappaMax;

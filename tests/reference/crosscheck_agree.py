@@ -7,7 +7,8 @@ On random reliability matrices (2-6 coders, 2-8 values, 0-30% missing cells) it 
   distance function;
 - on complete two-coder data: Cohen's kappa with scikit-learn's cohen_kappa_score and with
   statsmodels' cohens_kappa (also its standard errors, Fleiss, Cohen & Everitt 1969), Scott's pi
-  with NLTK's pi() and Bennett et al.'s S with NLTK's S();
+  with NLTK's pi() and Bennett et al.'s S with NLTK's S(); on ordered values also the linear and
+  quadratic weighted kappa (Cohen 1968, `--weights`) with both libraries;
 - on complete data for any number of coders: Fleiss' kappa with statsmodels' fleiss_kappa and
   NLTK's pi() (multi-pi equals Fleiss' kappa), and percent agreement with NLTK's avg_Ao().
 
@@ -219,6 +220,58 @@ def main():
             check.close("cohen kappa null SE", kappa["se0"], sm["std_kappa0"], context)
             check.close("scott pi", ours["scott_pi"], task.pi(), context)
             check.close("bennett S", ours["bennett_s"], task.S(), context)
+            # Weighted kappa (Cohen 1968) on ordered values: the positions of the values in
+            # their order, as scikit-learn takes them from the sorted labels and statsmodels
+            # from the table's rows.
+            if level in ("ordinal", "interval", "ratio"):
+                for weights in ("linear", "quadratic"):
+                    weighted = run_cli(args.cli, path, ["--level", level, "--weights", weights])
+                    wk = weighted["cohen_kappa"]
+                    if wk["value"] is None:
+                        continue
+                    check.close("weighted kappa %s (sklearn)" % weights, wk["value"],
+                                cohen_kappa_score(a, b, labels=categories, weights=weights), context)
+                    smw = cohens_kappa(table, wt=weights)
+                    check.close("weighted kappa %s (statsmodels)" % weights, wk["value"],
+                                smw["kappa"], context)
+                    check.close("weighted kappa %s SE" % weights, wk["se"], smw["std_kappa"],
+                                context)
+
+    # Weighted kappa on complete two-coder matrices of ordered values: numbers (their order is
+    # their size) and words given an order with --order (not their alphabetical order).
+    words = ["never", "rarely", "sometimes", "often", "always"]
+    for m in range(max(1, args.matrices // 4)):
+        units = rng.randint(8, 60)
+        if m % 2 == 0:
+            labels = sorted(rng.sample(range(-20, 40), rng.randint(2, 6)))
+            extra = ["--level", "interval"]
+            order = labels
+        else:
+            order = words[: rng.randint(2, 5)]
+            labels = order
+            extra = ["--level", "ordinal", "--order", ",".join(order)]
+        rows = [[rng.choice(labels), rng.choice(labels)] for _ in range(units)]
+        if len(set(v for row in rows for v in row)) < 2:
+            continue
+        write_matrix(path, ["c0", "c1"], rows)
+        context = "weighted matrix %d, %s" % (m, " ".join(extra))
+        a = [r[0] for r in rows]
+        b = [r[1] for r in rows]
+        present = [v for v in order if any(v in row for row in rows)]
+        position = {v: i for i, v in enumerate(present)}
+        table = [[0] * len(present) for _ in present]
+        for x, y in zip(a, b):
+            table[position[x]][position[y]] += 1
+        for weights in ("linear", "quadratic"):
+            wk = run_cli(args.cli, path, extra + ["--weights", weights])["cohen_kappa"]
+            if wk["value"] is None:
+                continue
+            check.close("weighted kappa %s (sklearn)" % weights, wk["value"],
+                        cohen_kappa_score(a, b, labels=present, weights=weights), context)
+            smw = cohens_kappa(table, wt=weights)
+            check.close("weighted kappa %s (statsmodels)" % weights, wk["value"], smw["kappa"],
+                        context)
+            check.close("weighted kappa %s SE" % weights, wk["se"], smw["std_kappa"], context)
 
     for name in sorted(check.compared):
         print("%-28s %4d comparisons" % (name, check.compared[name]))

@@ -13,6 +13,9 @@ using Catch::Matchers::WithinAbs;
 
 namespace {
 
+// Φ⁻¹(0.975), the two-sided 95% normal quantile (scipy.stats.norm.ppf(0.975)).
+constexpr double kZ975 = 1.959963984540054;
+
 // Cohen (1960), p. 45 (as reproduced by a third party, see checks.md): rows coder 1, N = 200.
 const ContingencyTable kCohen1960 {3, {88, 14, 18, 10, 40, 10, 2, 6, 12}};
 // Cohen (1968): disagreement weights used with the Cohen (1960) table (third party, checks.md).
@@ -300,11 +303,12 @@ TEST_CASE("Cohen's kappa and its standard errors match statsmodels")
         CHECK_THAT(*r.value, WithinAbs(c.kappa, 1e-9));
         CHECK_THAT(*r.standardError, WithinAbs(c.se, 1e-9));
         CHECK_THAT(*r.nullStandardError, WithinAbs(c.se0, 1e-9));
-        // The contract: a Wald interval value ± 1.96 SE (statsmodels uses 1.95996…).
+        // A Wald interval value ± Φ⁻¹(0.975) SE, as statsmodels computes it (its
+        // stats.norm.ppf(0.975) = 1.959963984540054), clipped to [−1, 1].
         REQUIRE(r.ciLow);
         REQUIRE(r.ciHigh);
-        CHECK_THAT(*r.ciLow, WithinAbs(c.kappa - 1.96 * c.se, 1e-9));
-        CHECK_THAT(*r.ciHigh, WithinAbs(c.kappa + 1.96 * c.se, 1e-9));
+        CHECK_THAT(*r.ciLow, WithinAbs(std::max(-1.0, c.kappa - kZ975 * c.se), 1e-9));
+        CHECK_THAT(*r.ciHigh, WithinAbs(std::min(1.0, c.kappa + kZ975 * c.se), 1e-9));
     }
     // reference: statsmodels 0.13 cohens_kappa, computed offline: kappa_max.
     CHECK_THAT(*cohenKappa(kCohen1960).kappaMax, WithinAbs(0.8305084745762712, 1e-9));
@@ -567,8 +571,12 @@ TEST_CASE("properties of Cohen's kappa on random tables")
         REQUIRE(asym.value);
         CHECK_THAT(*asym.value, WithinAbs(agreementFormKappa(table, asymmetric), 1e-12));
 
-        // The interval is value ± 1.96 SE (the contract), kappa ≤ kappa_max (Cohen 1960).
-        CHECK_THAT(*plain.ciHigh - *plain.value, WithinAbs(1.96 * *plain.standardError, 1e-12));
+        // The interval is value ± Φ⁻¹(0.975) SE clipped to [−1, 1], kappa ≤ kappa_max
+        // (Cohen 1960).
+        CHECK_THAT(*plain.ciHigh,
+            WithinAbs(std::min(1.0, *plain.value + kZ975 * *plain.standardError), 1e-12));
+        CHECK_THAT(*plain.ciLow,
+            WithinAbs(std::max(-1.0, *plain.value - kZ975 * *plain.standardError), 1e-12));
         CHECK(*plain.value <= *plain.kappaMax + 1e-12);
     }
     CHECK(checked > 950);
@@ -745,4 +753,23 @@ TEST_CASE("Fleiss' kappa on degenerate input")
     CHECK(unused.perCategory[1].has_value());
     CHECK_FALSE(unused.perCategory[2].has_value());
     CHECK_FALSE(unused.perCategoryNullStandardError[2].has_value());
+}
+
+TEST_CASE("a small table's kappa interval is clipped to 1")
+{
+    // n = 5: kappa = (0.8 − 0.48) / 0.52 = 0.6154 (Cohen 1960's formula by hand); its standard
+    // error is large enough that value + 1.96 SE passes 1, which no kappa can reach.
+    ContingencyTable t;
+    t.categories = 2;
+    t.counts = {2, 0, 1, 2};
+    const KappaResult r = cohenKappa(t);
+    REQUIRE(r.value);
+    CHECK_THAT(*r.value, WithinAbs(0.32 / 0.52, 1e-12));
+    REQUIRE(r.standardError);
+    REQUIRE(*r.value + kZ975 * *r.standardError > 1.0);
+    CHECK(*r.ciHigh == 1.0);
+    CHECK_THAT(*r.ciLow, WithinAbs(*r.value - kZ975 * *r.standardError, 1e-12));
+    CHECK(r.weights == KappaWeights::None);
+    CHECK(std::string(kappaWeightsKey(cohenKappa(t, KappaWeights::Quadratic).weights))
+        == "quadratic");
 }
