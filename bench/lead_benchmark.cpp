@@ -6,7 +6,8 @@
 // Runs on the offscreen platform unless QT_QPA_PLATFORM is set.
 //
 //   lead_benchmark [ARTICLES=1000] [ROUNDS=5] [WORK_DIR=a temporary directory]
-// ROUNDS=0 takes no decisions.
+// ROUNDS=0 takes no decisions; with FOURFOLD_BENCH_REUSE set, the study an earlier run left in
+// WORK_DIR is used again (its decisions included).
 
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
@@ -100,11 +101,13 @@ int main(int argc, char **argv)
 
     StudySpec spec;
     spec.articles = n;
-    const StudyFiles files = writeStudyOrExit(spec, dir);
     const QString path = QDir(dir).filePath(QStringLiteral("lead.fourfold"));
-    for (const char *suffix : {"", "-wal", "-shm"})
-        QFile::remove(path + QLatin1String(suffix));
-    {
+    // A study made by an earlier run in WORK_DIR is reused when FOURFOLD_BENCH_REUSE is set
+    // (a study of 50,000 articles takes minutes to make).
+    if (qEnvironmentVariableIsEmpty("FOURFOLD_BENCH_REUSE") || !QFile::exists(path)) {
+        const StudyFiles files = writeStudyOrExit(spec, dir);
+        for (const char *suffix : {"", "-wal", "-shm"})
+            QFile::remove(path + QLatin1String(suffix));
         Project project = check(Project::create(path), "create");
         for (int c = 0; c < spec.coders; ++c) {
             const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
@@ -114,8 +117,8 @@ int main(int argc, char **argv)
             "lead");
         check(project.importFile(files.articles, ImportOptions {}), "import articles");
         check(importQuotedCodings(project, files.codings, Phase::Production), "import codings");
+        std::printf("study: %d articles, %d coders, %lld spans\n", n, spec.coders, files.spans);
     }
-    std::printf("study: %d articles, %d coders, %lld spans\n", n, spec.coders, files.spans);
     std::printf("%-40s %7s %9s %9s %9s %9s\n", "path", "articles", "min s", "median s", "max s",
         "peak MiB");
 

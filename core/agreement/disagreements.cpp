@@ -8,6 +8,7 @@
 #include <QSet>
 
 #include <algorithm>
+#include <limits>
 #include <set>
 #include <unordered_map>
 
@@ -347,51 +348,65 @@ Result<std::vector<ArticleDisagreement>> disagreementQueue(
     auto scope = CodingScope::load(project, CodingScopeOptions {filter.includeUnfinished, {}});
     if (!scope)
         return std::unexpected(scope.error());
-    // Everything the comparisons need, read once and grouped by article: the queue costs the
-    // same few queries whatever the number of articles.
-    std::unordered_map<qint64, ArticleCodings> byArticle;
-    byArticle.reserve(articles->size());
-    QHash<qint64, qint64> articleOfSpan;
-    // Outlines streamed by article (the queue counts passages; quotes and notes are read when
-    // an article is opened): each span is moved once, into its article's list.
-    ArticleCodings *last = nullptr;
-    FOURFOLD_TRY_STATUS(project.forEachAnnotationOutline([&](Annotation &&a) -> Status {
-        articleOfSpan.insert(a.id.value, a.article.value);
-        if (!last || last->spans.back().article != a.article)
-            last = &byArticle[a.article.value];
-        last->spans.push_back(std::move(a));
-        return {};
-    }));
+    // Everything the comparisons need, read once: the queue costs the same few queries whatever
+    // the number of articles. Gold (on some articles) and the rejected spans' ids (few) are held;
+    // the spans stream by article, each article compared once its spans are in, so memory holds
+    // one article's spans, not the study's.
+    std::unordered_map<qint64, std::vector<GoldAnnotation>> goldOf;
     auto gold = project.goldAnnotations();
     if (!gold)
         return std::unexpected(gold.error());
     for (GoldAnnotation &g : *gold)
-        byArticle[g.article.value].gold.push_back(std::move(g));
+        goldOf[g.article.value].push_back(std::move(g));
+    gold->clear();
+    QSet<qint64> rejectedIds;
     auto rejections = project.goldRejections();
     if (!rejections)
         return std::unexpected(rejections.error());
     for (const GoldRejection &r : *rejections)
-        if (auto it = articleOfSpan.constFind(r.annotation.value); it != articleOfSpan.constEnd())
-            byArticle[it.value()].rejected.push_back(r.annotation);
-    const ArticleCodings nothing;
+        rejectedIds.insert(r.annotation.value);
 
     std::vector<ArticleDisagreement> out;
-    for (const ArticleSummary &summary : *articles) {
-        const std::vector<Coder> codedCoders = countingCoders(*coders, *scope, summary.id);
-        const std::vector<Coder> *coded = &codedCoders;
-        if (coded->size() < 2)
-            continue;
-        if (filter.coderPair
-            && (std::ranges::find(*coded, filter.coderPair->first, &Coder::id) == coded->end()
-                || std::ranges::find(*coded, filter.coderPair->second, &Coder::id) == coded->end()))
-            continue;
-        const auto codings = byArticle.find(summary.id.value);
-        auto comparison = compareLoaded(summary.id, summary.title, *coded,
-            codings == byArticle.end() ? nothing : codings->second, filter);
-        if (!comparison)
-            return std::unexpected(comparison.error());
-        out.push_back(queueRow(summary, *comparison));
-    }
+    std::size_t next = 0; // the first article not yet compared (project order, by id)
+    ArticleCodings current; // the spans of `currentArticle` read so far
+    qint64 currentArticle = 0;
+    // Compares every article before `limit`; the current article takes its spans along.
+    const auto compareBefore = [&](qint64 limit) -> Status {
+        for (; next < articles->size() && (*articles)[next].id.value < limit; ++next) {
+            const ArticleSummary &summary = (*articles)[next];
+            const std::vector<Coder> coded = countingCoders(*coders, *scope, summary.id);
+            if (coded.size() < 2)
+                continue;
+            if (filter.coderPair
+                && (std::ranges::find(coded, filter.coderPair->first, &Coder::id) == coded.end()
+                    || std::ranges::find(coded, filter.coderPair->second, &Coder::id)
+                        == coded.end()))
+                continue;
+            ArticleCodings codings;
+            if (summary.id.value == currentArticle)
+                codings = std::move(current);
+            if (auto g = goldOf.find(summary.id.value); g != goldOf.end())
+                codings.gold = std::move(g->second);
+            auto comparison = compareLoaded(summary.id, summary.title, coded, codings, filter);
+            if (!comparison)
+                return std::unexpected(comparison.error());
+            out.push_back(queueRow(summary, *comparison));
+        }
+        return {};
+    };
+    // Outlines (the queue counts passages; quotes and notes are read when an article is opened).
+    FOURFOLD_TRY_STATUS(project.forEachAnnotationOutline([&](Annotation &&a) -> Status {
+        if (a.article.value != currentArticle) {
+            FOURFOLD_TRY_STATUS(compareBefore(a.article.value));
+            current = ArticleCodings {}; // spans of an article not in the list go
+            currentArticle = a.article.value;
+        }
+        if (rejectedIds.contains(a.id.value))
+            current.rejected.push_back(a.id);
+        current.spans.push_back(std::move(a));
+        return {};
+    }));
+    FOURFOLD_TRY_STATUS(compareBefore(std::numeric_limits<qint64>::max()));
     std::ranges::stable_sort(out, [](const ArticleDisagreement &a, const ArticleDisagreement &b) {
         return std::tuple(-a.unresolved, -a.disagreements, a.article.title)
             < std::tuple(-b.unresolved, -b.disagreements, b.article.title);
