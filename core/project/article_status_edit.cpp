@@ -1,6 +1,7 @@
 #include "core/project/article_status_edit.h"
 
 #include "core/store/project_tables.h"
+#include "core/store/store_util.h"
 #include "core/store/study_tables.h"
 
 #include <QCoreApplication>
@@ -38,7 +39,11 @@ Status SetArticleStatusEdit::apply(Database &db)
     for (const Assignment &a : *mine)
         before.emplace_back(a.phase, a.status);
     if (before.empty()) {
-        FOURFOLD_TRY_STATUS(store::insertAssignment(db, m_article, m_coder, m_phaseIfNew));
+        // The same row on redo: the uuid made the first time is kept.
+        if (m_createdUuid.isEmpty())
+            m_createdUuid = store::newUuid();
+        FOURFOLD_TRY_STATUS(
+            store::insertAssignment(db, m_article, m_coder, m_phaseIfNew, m_createdUuid));
         FOURFOLD_TRY_STATUS(
             store::setAssignmentStatus(db, m_article, m_coder, m_phaseIfNew, m_status));
         m_created = true;

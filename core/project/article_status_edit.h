@@ -32,6 +32,7 @@ private:
     Phase m_phaseIfNew = Phase::Production;
     std::vector<std::pair<Phase, QString>> m_before; // each assignment's phase and old status
     bool m_created = false;
+    QString m_createdUuid; // of the assignment this edit created, kept for redo
 };
 
 } // namespace fourfold

@@ -32,13 +32,14 @@ Status setSetting(Database &db, const QString &key, const QString &value)
     return stmt->run();
 }
 
-Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase phase)
+Status insertAssignment(
+    Database &db, ArticleId article, CoderId coder, Phase phase, const QString &uuid)
 {
     auto stmt = db.prepare(QStringLiteral("INSERT INTO assignment (uuid, article_id, coder_id, "
                                           "phase, created_at) VALUES (?1, ?2, ?3, ?4, ?5)"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    stmt->bind(1, newUuid())
+    stmt->bind(1, uuid.isEmpty() ? newUuid() : uuid)
         .bind(2, article.value)
         .bind(3, coder.value)
         .bind(4, phaseKey(phase))

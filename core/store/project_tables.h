@@ -20,8 +20,10 @@ namespace store {
 Result<std::optional<QString>> setting(const Database &db, const QString &key);
 Status setSetting(Database &db, const QString &key, const QString &value);
 
-// Assigns `article` to `coder` in `phase` (uuid made here). Duplicate if it already is.
-Status insertAssignment(Database &db, ArticleId article, CoderId coder, Phase phase);
+// Assigns `article` to `coder` in `phase` with `uuid` (made here when empty). Duplicate if it
+// already is.
+Status insertAssignment(
+    Database &db, ArticleId article, CoderId coder, Phase phase, const QString &uuid = {});
 
 // Every live assignment (of one article when `article` is valid: one indexed query), ordered by
 // article and coder.

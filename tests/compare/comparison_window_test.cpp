@@ -202,7 +202,8 @@ TEST_CASE("reject, merge and accept-all-agreed are single undoable steps")
             boundary = int(i);
             break;
         }
-    if (boundary >= 0) {
+    REQUIRE(boundary >= 0); // the sample holds one
+    {
         w.setCurrentPassage(boundary);
         const Passage p = w.passages()[size_t(boundary)];
         ids.clear();

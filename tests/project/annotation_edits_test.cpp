@@ -4,10 +4,20 @@
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
 
+#include <QRegularExpression>
+
 using namespace fourfold;
 using namespace fourfold::test;
 
 namespace {
+
+// A dump with every ISO 8601 time blanked: what a redo must restore exactly.
+QString withoutTimes(QString dump)
+{
+    static const QRegularExpression time(QStringLiteral(
+        "\\d{4}-\\d\\d-\\d\\dT\\d\\d:\\d\\d:\\d\\d(\\.\\d+)?(Z|[+-]\\d\\d:\\d\\d)?"));
+    return dump.replace(time, QStringLiteral("TIME"));
+}
 
 struct EditFixture : ProjectFixture {
     ArticleId f1;
@@ -122,9 +132,9 @@ TEST_CASE("edits apply and revert to an identical database dump")
     CHECK(applied != before);
     REQUIRE(f.project.revert(*edit));
     CHECK(f.dump() == before);
-    // Redo gives the same state again, with the same uuids (only modification times may move).
+    // Redo gives the same state again, with the same uuids (only times may move).
     REQUIRE(f.project.apply(*edit));
-    CHECK(f.dump().count(QLatin1Char('\n')) == applied.count(QLatin1Char('\n')));
+    CHECK(withoutTimes(f.dump()) == withoutTimes(applied));
     REQUIRE(f.project.revert(*edit));
     CHECK(f.dump() == before);
 }
