@@ -7,7 +7,8 @@
 //
 //   lead_benchmark [ARTICLES=1000] [ROUNDS=5] [WORK_DIR=a temporary directory]
 // ROUNDS=0 takes no decisions; with FOURFOLD_BENCH_REUSE set, the study an earlier run left in
-// WORK_DIR is used again (its decisions included).
+// WORK_DIR is used again (its decisions included). FOURFOLD_BENCH_SHOTS=DIR saves pictures of
+// the Reliability window's diagnostics and drift tabs there.
 
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
@@ -23,6 +24,7 @@
 #include <QElapsedTimer>
 #include <QEventLoop>
 #include <QFile>
+#include <QTabWidget>
 #include <QTemporaryDir>
 #include <QTimer>
 #include <QUndoStack>
@@ -228,6 +230,15 @@ int main(int argc, char **argv)
         loop.exec();
         QCoreApplication::processEvents();
         compute.push_back(double(t.nsecsElapsed()) / 1e9);
+        // FOURFOLD_BENCH_SHOTS=DIR: pictures of the diagnostics and drift tabs at this size.
+        if (const QString shots = qEnvironmentVariable("FOURFOLD_BENCH_SHOTS");
+            !shots.isEmpty() && round == 0)
+            for (const int tab : {1, 5}) {
+                r.tabs()->setCurrentIndex(tab);
+                QCoreApplication::processEvents();
+                r.grab().save(
+                    QDir(shots).filePath(QStringLiteral("reliability-%1-%2.png").arg(n).arg(tab)));
+            }
         if (!ok) {
             std::fprintf(stderr, "compute failed: %s\n", qPrintable(r.errorMessage()));
             return 1;

@@ -741,32 +741,32 @@
         <translation>Goldstandard %1 entschieden von %2 am %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="742"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="757"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Rückgängig mit %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="769"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="784"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Wählen Sie die Textstelle einer codierenden Person zum Übernehmen (oder mehrere zum Vereinen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="796"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="811"/>
         <source>Choose a passage first.</source>
         <translation>Wählen Sie zuerst eine Passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="834"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="849"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Wählen Sie die zu verwerfenden Textstellen (die noch nicht verworfen sind).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="845"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="860"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Wählen Sie eine Goldstandard-Textstelle zum Zurückziehen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="865"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="880"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>In diesem Artikel ist keine übereinstimmende Passage mehr zu übernehmen.</translation>
     </message>
@@ -2071,230 +2071,231 @@
 <context>
     <name>fourfold::ReliabilityWindow</name>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="111"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="115"/>
         <source>0.800: rely on the variable</source>
         <translation>0.800: auf die Variable verlassen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="112"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="116"/>
         <source>0.667: tentative conclusions only</source>
         <translation>0.667: nur vorläufige Schlüsse</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="152"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="570"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="673"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="705"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="156"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="575"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="678"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="154"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="158"/>
         <source>reliable (≥ 0.800)</source>
         <translation>reliabel (≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="156"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="160"/>
         <source>tentative (≥ 0.667)</source>
         <translation>vorläufig (≥ 0.667)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="160"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="164"/>
         <source>unreliable (&lt; 0.667)</source>
         <translation>nicht reliabel (&lt; 0.667)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="170"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="174"/>
         <source>Reliability — %1</source>
         <translation>Reliabilität — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="208"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="212"/>
         <source>Table</source>
         <translation>Tabelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="222"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="226"/>
         <source>Alpha without each coder</source>
         <translation>Alpha ohne jeweils eine codierende Person</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="225"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="229"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="707"/>
         <source>Alpha without each article (the costliest first)</source>
         <translation>Alpha ohne jeweils einen Artikel (der teuerste zuerst)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="228"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="233"/>
         <source>Change = alpha without it − alpha with everything: positive means leaving it out raises alpha, so it costs reliability (leave-one-out, common practice). A diagnostic for training and codebook work, not a licence to report the higher figure.</source>
         <translation>Änderung = Alpha ohne − Alpha mit allem: positiv heißt, Weglassen erhöht Alpha, es kostet also Reliabilität (Leave-one-out, gängige Praxis). Eine Diagnose für Schulung und Codebucharbeit, kein Freibrief, die höhere Zahl zu berichten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="233"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="238"/>
         <source>Boundary habits on matched spans</source>
         <translation>Grenzgewohnheiten bei zugeordneten Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="236"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="241"/>
         <source>Each span against the other coder&apos;s span of the same function that overlaps it most; differences are this coder&apos;s minus the other&apos;s, in characters (code points). Systematic: the mean differs from 0 by more than two standard errors over at least 5 matches (a rough screen, common practice).</source>
         <translation>Jede Textstelle gegen die am stärksten überlappende Textstelle derselben Funktion der anderen Person; Differenzen sind die dieser Person minus die der anderen, in Zeichen (Codepunkten). Systematisch: Der Mittelwert weicht über mindestens 5 Zuordnungen um mehr als zwei Standardfehler von 0 ab (grobe Prüfung, gängige Praxis).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="243"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
         <source>Diagnostics</source>
         <translation>Diagnose</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="253"/>
         <source>Alpha per function</source>
         <translation>Alpha je Funktion</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="250"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="255"/>
         <source>Coder pairs</source>
         <translation>Codierpaare</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="252"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="257"/>
         <source>Function confusion</source>
         <translation>Funktionsverwechslung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="255"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="260"/>
         <source>Alpha over time</source>
         <translation>Alpha im Zeitverlauf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="280"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="285"/>
         <source>Article item</source>
         <translation>Artikel-Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="281"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="286"/>
         <source>Paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="282"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="287"/>
         <source>Sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="283"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="288"/>
         <source>Token (word)</source>
         <translation>Token (Wort)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="284"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="289"/>
         <source>Continuum (spans, unitizing alpha)</source>
         <translation>Kontinuum (Textstellen, Unitizing-Alpha)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="289"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="294"/>
         <source>&amp;Unit</source>
         <translation>&amp;Einheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="295"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="300"/>
         <source>&amp;Item</source>
         <translation>&amp;Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="311"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="316"/>
         <source>Functions</source>
         <translation>Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="330"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="335"/>
         <source>&amp;Coders</source>
         <translation>&amp;Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="333"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="338"/>
         <source>All phases</source>
         <translation>Alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="337"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="342"/>
         <source>&amp;Phase</source>
         <translation>&amp;Phase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="339"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="344"/>
         <source>Gold joins as a coder</source>
         <translation>Goldstandard als weitere Codierung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="341"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="346"/>
         <source>Count articles in progress</source>
         <translation>Artikel in Bearbeitung mitzählen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="342"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="347"/>
         <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
         <translation>Standardmäßig zählt ein Artikel eines Codierers erst, wenn er ihn als fertig markiert hat; ankreuzen, um auch Artikel in Bearbeitung mitzuzählen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="350"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
         <source>none</source>
         <translation>keine</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="351"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
         <source>Batches of articles</source>
         <translation>Artikelblöcke</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
         <source>Weeks</source>
         <translation>Wochen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
         <source>&amp;Drift by</source>
         <translation>&amp;Drift nach</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
         <source> articles</source>
         <translation> Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="366"/>
         <source>Batch &amp;size</source>
         <translation>Block&amp;größe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="363"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="368"/>
         <source>Co&amp;mpute</source>
         <translation>Be&amp;rechnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="370"/>
         <source>Cancel</source>
         <translation>Abbrechen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="473"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="478"/>
         <source>Computing…</source>
         <translation>Wird berechnet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="483"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="488"/>
         <source>Cancelling after the current step…</source>
         <translation>Abbruch nach dem aktuellen Schritt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="500"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="505"/>
         <source>Cancelled; the results shown are from before.</source>
         <translation>Abgebrochen; die angezeigten Ergebnisse sind von vorher.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="505"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="510"/>
         <source>%n coder(s) compared.</source>
         <translation>
             <numerusform>%n codierende Person verglichen.</numerusform>
@@ -2302,277 +2303,282 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="520"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="525"/>
         <source>Chosen functions (sets)</source>
         <translation>Funktionsmenge</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
         <source>Alpha</source>
         <translation>Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="197"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="201"/>
         <source>Alpha: Krippendorff&apos;s alpha, coincidence form (Krippendorff 2011). Interval: 95% bootstrap, units resampled (percentile; the pair interval of Hayes &amp; Krippendorff 2007 is in the report, and it is too narrow with more than two coders); q(α &lt; 0.800): share of replicates below 0.800. Verdict: Krippendorff (2004, §12.2). Minimum values: Krippendorff (2004, §11.4) after Bloch &amp; Kraemer (1989), for the rarest value at p = 0.05. Cohen&apos;s kappa per pair over the units both coded (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) needs every coder on every unit.</source>
-        <translation>Alpha: Krippendorffs Alpha, Koinzidenzform (Krippendorff 2011). Intervall: 95-%-Bootstrap, Einheiten neu gezogen (Perzentil; das Paarintervall nach Hayes &amp; Krippendorff 2007 steht im Bericht und ist bei mehr als zwei Codierenden zu schmal); q(α &lt; 0.800): Anteil der Replikationen unter 0.800. Urteil: Krippendorff (2004, §12.2). Mindestzahl an Werten: Krippendorff (2004, §11.4) nach Bloch &amp; Kraemer (1989), für den seltensten Wert bei p = 0.05. Cohens Kappa je Paar über die von beiden codierten Einheiten (Cohen 1960); Fleiss' Kappa (Fleiss 1971) braucht alle Codierenden auf jeder Einheit.</translation>
+        <translation>Alpha: Krippendorffs Alpha, Koinzidenzform (Krippendorff 2011). Intervall: 95-%-Bootstrap, Einheiten neu gezogen (Perzentil; das Paarintervall nach Hayes &amp; Krippendorff 2007 steht im Bericht und ist bei mehr als zwei Codierenden zu schmal); q(α &lt; 0.800): Anteil der Replikationen unter 0.800. Urteil: Krippendorff (2004, §12.2). Mindestzahl an Werten: Krippendorff (2004, §11.4) nach Bloch &amp; Kraemer (1989), für den seltensten Wert bei p = 0.05. Cohens Kappa je Paar über die von beiden codierten Einheiten (Cohen 1960); Fleiss&apos; Kappa (Fleiss 1971) braucht alle Codierenden auf jeder Einheit.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
         <source>q(α &lt; 0.800)</source>
         <translation>q(α &lt; 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
         <source>95% interval (units resampled)</source>
         <translation>95-%-Intervall (Einheiten neu gezogen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
         <source>Percent agreement</source>
         <translation>Prozentuale Übereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
         <source>Fleiss&apos; kappa</source>
         <translation>Fleiss&apos; Kappa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="549"/>
         <source>Cohen&apos;s kappa %1 × %2</source>
         <translation>Cohens Kappa %1 × %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
         <source>Pairable values</source>
         <translation>Paarbare Werte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
         <source>Pairable units</source>
         <translation>Paarbare Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
         <source>Rarest value</source>
         <translation>Seltenster Wert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="547"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
         <source>Minimum values (α ≥ 0.800)</source>
         <translation>Mindestzahl an Werten (α ≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="547"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
         <source>Sample</source>
         <translation>Stichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="662"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="557"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="667"/>
         <source>Statistic</source>
         <translation>Kennwert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="578"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="583"/>
         <source>%1, %2 replicates, seed %3</source>
         <translation>%1, %2 Replikationen, Seed %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="604"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="609"/>
         <source>Fleiss&apos; kappa needs every coder on every unit; some cells are missing.</source>
         <translation>Fleiss&apos; Kappa braucht alle Codierenden auf jeder Einheit; einige Zellen fehlen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="622"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="627"/>
         <source>below the minimum</source>
         <translation>unter dem Minimum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="623"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="628"/>
         <source>large enough</source>
         <translation>groß genug</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="639"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="644"/>
         <source>The sample is smaller than Krippendorff&apos;s minimum for the rarest value (alpha ≥ 0.800 at p = 0.05) in: %1. Code more units before relying on these figures.</source>
         <translation>Die Stichprobe ist kleiner als Krippendorffs Minimum für den seltensten Wert (Alpha ≥ 0.800 bei p = 0.05) in: %1. Codieren Sie mehr Einheiten, bevor Sie sich auf diese Werte verlassen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
         <source>Unitizing alpha</source>
         <translation>Unitizing-Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
         <source>Observed disagreement D_o</source>
         <translation>Beobachtete Nichtübereinstimmung D_o</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="659"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
         <source>Expected disagreement D_e</source>
         <translation>Erwartete Nichtübereinstimmung D_e</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="659"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
         <source>Continuum</source>
         <translation>Kontinuum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
         <source>All four, pooled</source>
         <translation>Alle vier, gepoolt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="686"/>
         <source>%1 articles, %2 characters</source>
         <translation>%1 Artikel, %2 Zeichen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="692"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="704"/>
+        <source>Alpha without each article: the %1 costliest of %2</source>
+        <translation>Alpha ohne jeweils einen Artikel: die %1 teuersten von %2</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="709"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="692"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="875"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="709"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="892"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="694"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
         <source>Alpha without</source>
         <translation>Alpha ohne</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
         <source>Change</source>
         <translation>Änderung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
         <source>Units</source>
         <translation>Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
         <source>Matches</source>
         <translation>Zuordnungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
         <source>Length ± SE</source>
         <translation>Länge ± SE</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
         <source>Start</source>
         <translation>Beginn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>End</source>
         <translation>Ende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>Longer</source>
         <translation>Länger</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>Shorter</source>
         <translation>Kürzer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>Habit</source>
         <translation>Gewohnheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="745"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="762"/>
         <source>spans systematically longer</source>
         <translation>Textstellen systematisch länger</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="746"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="763"/>
         <source>spans systematically shorter</source>
         <translation>Textstellen systematisch kürzer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="759"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="776"/>
         <source>Alpha per function, with 95% bootstrap intervals</source>
         <translation>Alpha je Funktion, mit 95-%-Bootstrap-Intervallen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="763"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="926"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="780"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="943"/>
         <source>Krippendorff&apos;s alpha</source>
         <translation>Krippendorffs Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="783"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="800"/>
         <source>pooled</source>
         <translation>gepoolt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="867"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="884"/>
         <source>Cohen&apos;s kappa of each pair of coders over the units both coded (%1). Darker: higher agreement; hatched: not defined.</source>
         <translation>Cohens Kappa jedes Paars von Codierenden über die von beiden codierten Einheiten (%1). Dunkler: höhere Übereinstimmung; schraffiert: nicht definiert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="872"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="889"/>
         <source>Continuum units have no per-pair kappa; see the span agreement in the function confusion.</source>
         <translation>Kontinuum-Einheiten haben kein Kappa je Paar; siehe die Übereinstimmung der Textstellen in der Funktionsverwechslung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="889"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="906"/>
         <source>nothing</source>
         <translation>nichts</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="925"/>
         <source>A coder&apos;s span</source>
         <translation>Textstelle einer Person</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="925"/>
         <source>What another coder gave it</source>
         <translation>Was eine andere Person vergab</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="909"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="926"/>
         <source>Each span of each coder against the best-overlapping span of every other coder (both directions of each pair). Darker: a larger share of the row. &quot;nothing&quot;: no overlapping span.</source>
         <translation>Jede Textstelle jeder codierenden Person gegen die am besten überlappende Textstelle jeder anderen (beide Richtungen jedes Paars). Dunkler: größerer Anteil der Zeile. „nichts“: keine überlappende Textstelle.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="921"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="938"/>
         <source>Alpha by week of first coding — %1</source>
         <translation>Alpha nach Woche der ersten Codierung — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="922"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="939"/>
         <source>Alpha by batch of articles, in coding order — %1</source>
         <translation>Alpha nach Artikelblock, in Codierreihenfolge — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="959"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="979"/>
         <source>ISO week</source>
         <translation>ISO-Woche</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="959"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="979"/>
         <source>articles (in coding order)</source>
         <translation>Artikel (in Codierreihenfolge)</translation>
     </message>

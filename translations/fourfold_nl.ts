@@ -741,32 +741,32 @@
         <translation>Gouden standaard %1 beslist door %2 op %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="742"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="757"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Ongedaan maken met %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="769"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="784"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Kies het fragment van één codeur om te accepteren (of meerdere om samen te voegen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="796"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="811"/>
         <source>Choose a passage first.</source>
         <translation>Kies eerst een passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="834"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="849"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Kies de fragmenten om te verwerpen (die nog niet verworpen zijn).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="845"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="860"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Kies één fragment uit de gouden standaard om terug te trekken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="865"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="880"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>Er is in dit artikel geen overeenstemmende passage meer om te accepteren.</translation>
     </message>
@@ -2071,230 +2071,231 @@
 <context>
     <name>fourfold::ReliabilityWindow</name>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="111"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="115"/>
         <source>0.800: rely on the variable</source>
         <translation>0.800: op de variabele vertrouwen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="112"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="116"/>
         <source>0.667: tentative conclusions only</source>
         <translation>0.667: alleen voorlopige conclusies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="152"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="570"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="673"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="705"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="156"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="575"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="678"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="154"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="158"/>
         <source>reliable (≥ 0.800)</source>
         <translation>betrouwbaar (≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="156"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="160"/>
         <source>tentative (≥ 0.667)</source>
         <translation>voorlopig (≥ 0.667)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="160"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="164"/>
         <source>unreliable (&lt; 0.667)</source>
         <translation>onbetrouwbaar (&lt; 0.667)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="170"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="174"/>
         <source>Reliability — %1</source>
         <translation>Betrouwbaarheid — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="208"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="212"/>
         <source>Table</source>
         <translation>Tabel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="222"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="226"/>
         <source>Alpha without each coder</source>
         <translation>Alfa zonder elke codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="225"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="229"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="707"/>
         <source>Alpha without each article (the costliest first)</source>
         <translation>Alfa zonder elk artikel (het duurste eerst)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="228"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="233"/>
         <source>Change = alpha without it − alpha with everything: positive means leaving it out raises alpha, so it costs reliability (leave-one-out, common practice). A diagnostic for training and codebook work, not a licence to report the higher figure.</source>
         <translation>Verandering = alfa zonder − alfa met alles: positief betekent dat weglaten de alfa verhoogt, het kost dus betrouwbaarheid (leave-one-out, gangbare praktijk). Een diagnose voor training en codeboekwerk, geen vrijbrief om het hogere cijfer te rapporteren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="233"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="238"/>
         <source>Boundary habits on matched spans</source>
         <translation>Grensgewoonten bij gekoppelde fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="236"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="241"/>
         <source>Each span against the other coder&apos;s span of the same function that overlaps it most; differences are this coder&apos;s minus the other&apos;s, in characters (code points). Systematic: the mean differs from 0 by more than two standard errors over at least 5 matches (a rough screen, common practice).</source>
         <translation>Elk fragment tegenover het fragment van de andere codeur met dezelfde functie dat het het meest overlapt; verschillen zijn die van deze codeur min die van de ander, in tekens (codepunten). Systematisch: het gemiddelde wijkt meer dan twee standaardfouten van 0 af over ten minste 5 koppelingen (een ruwe screening, gangbare praktijk).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="243"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
         <source>Diagnostics</source>
         <translation>Diagnose</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="253"/>
         <source>Alpha per function</source>
         <translation>Alfa per functie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="250"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="255"/>
         <source>Coder pairs</source>
         <translation>Codeursparen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="252"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="257"/>
         <source>Function confusion</source>
         <translation>Functieverwarring</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="255"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="260"/>
         <source>Alpha over time</source>
         <translation>Alfa door de tijd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="280"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="285"/>
         <source>Article item</source>
         <translation>Artikelitem</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="281"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="286"/>
         <source>Paragraph</source>
         <translation>Alinea</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="282"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="287"/>
         <source>Sentence</source>
         <translation>Zin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="283"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="288"/>
         <source>Token (word)</source>
         <translation>Token (woord)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="284"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="289"/>
         <source>Continuum (spans, unitizing alpha)</source>
         <translation>Continuüm (fragmenten, unitizing-alfa)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="289"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="294"/>
         <source>&amp;Unit</source>
         <translation>&amp;Eenheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="295"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="300"/>
         <source>&amp;Item</source>
         <translation>&amp;Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="311"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="316"/>
         <source>Functions</source>
         <translation>Functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="330"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="335"/>
         <source>&amp;Coders</source>
         <translation>&amp;Codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="333"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="338"/>
         <source>All phases</source>
         <translation>Alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="337"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="342"/>
         <source>&amp;Phase</source>
         <translation>&amp;Fase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="339"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="344"/>
         <source>Gold joins as a coder</source>
         <translation>Gouden standaard als codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="341"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="346"/>
         <source>Count articles in progress</source>
         <translation>Artikelen in bewerking meetellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="342"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="347"/>
         <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
         <translation>Standaard telt een artikel van een codeur pas mee als de codeur het als klaar gemarkeerd heeft; vink aan om ook artikelen in bewerking mee te tellen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="350"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
         <source>none</source>
         <translation>geen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="351"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="354"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
         <source>Batches of articles</source>
         <translation>Groepen artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
         <source>Weeks</source>
         <translation>Weken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
         <source>&amp;Drift by</source>
         <translation>&amp;Drift per</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
         <source> articles</source>
         <translation> artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="366"/>
         <source>Batch &amp;size</source>
         <translation>Groeps&amp;grootte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="363"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="368"/>
         <source>Co&amp;mpute</source>
         <translation>Be&amp;rekenen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="370"/>
         <source>Cancel</source>
         <translation>Annuleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="473"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="478"/>
         <source>Computing…</source>
         <translation>Bezig met berekenen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="483"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="488"/>
         <source>Cancelling after the current step…</source>
         <translation>Annuleren na de huidige stap…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="500"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="505"/>
         <source>Cancelled; the results shown are from before.</source>
         <translation>Geannuleerd; de getoonde resultaten zijn van eerder.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="505"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="510"/>
         <source>%n coder(s) compared.</source>
         <translation>
             <numerusform>%n codeur vergeleken.</numerusform>
@@ -2302,277 +2303,282 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="520"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="525"/>
         <source>Chosen functions (sets)</source>
         <translation>Functieverzameling</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
         <source>Alpha</source>
         <translation>Alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="197"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="201"/>
         <source>Alpha: Krippendorff&apos;s alpha, coincidence form (Krippendorff 2011). Interval: 95% bootstrap, units resampled (percentile; the pair interval of Hayes &amp; Krippendorff 2007 is in the report, and it is too narrow with more than two coders); q(α &lt; 0.800): share of replicates below 0.800. Verdict: Krippendorff (2004, §12.2). Minimum values: Krippendorff (2004, §11.4) after Bloch &amp; Kraemer (1989), for the rarest value at p = 0.05. Cohen&apos;s kappa per pair over the units both coded (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) needs every coder on every unit.</source>
-        <translation>Alfa: Krippendorffs alfa, coïncidentievorm (Krippendorff 2011). Interval: 95%-bootstrap, eenheden opnieuw getrokken (percentiel; het paarinterval van Hayes &amp; Krippendorff 2007 staat in het rapport en is te smal bij meer dan twee codeurs); q(α &lt; 0.800): aandeel replicaties onder 0.800. Oordeel: Krippendorff (2004, §12.2). Benodigde waarden: Krippendorff (2004, §11.4) naar Bloch &amp; Kraemer (1989), voor de zeldzaamste waarde bij p = 0.05. Cohens kappa per paar over de eenheden die beide codeerden (Cohen 1960); Fleiss' kappa (Fleiss 1971) vereist elke codeur op elke eenheid.</translation>
+        <translation>Alfa: Krippendorffs alfa, coïncidentievorm (Krippendorff 2011). Interval: 95%-bootstrap, eenheden opnieuw getrokken (percentiel; het paarinterval van Hayes &amp; Krippendorff 2007 staat in het rapport en is te smal bij meer dan twee codeurs); q(α &lt; 0.800): aandeel replicaties onder 0.800. Oordeel: Krippendorff (2004, §12.2). Benodigde waarden: Krippendorff (2004, §11.4) naar Bloch &amp; Kraemer (1989), voor de zeldzaamste waarde bij p = 0.05. Cohens kappa per paar over de eenheden die beide codeerden (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) vereist elke codeur op elke eenheid.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
         <source>q(α &lt; 0.800)</source>
         <translation>q(α &lt; 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="539"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
         <source>95% interval (units resampled)</source>
         <translation>95%-interval (eenheden opnieuw getrokken)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
         <source>Verdict</source>
         <translation>Oordeel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
         <source>Percent agreement</source>
         <translation>Procentuele overeenstemming</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="540"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
         <source>Fleiss&apos; kappa</source>
         <translation>Fleiss&apos; kappa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="549"/>
         <source>Cohen&apos;s kappa %1 × %2</source>
         <translation>Cohens kappa %1 × %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
         <source>Pairable values</source>
         <translation>Paarbare waarden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
         <source>Pairable units</source>
         <translation>Paarbare eenheden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="546"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
         <source>Rarest value</source>
         <translation>Zeldzaamste waarde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="547"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
         <source>Minimum values (α ≥ 0.800)</source>
         <translation>Benodigde waarden (α ≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="547"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
         <source>Sample</source>
         <translation>Steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="662"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="557"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="667"/>
         <source>Statistic</source>
         <translation>Statistiek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="578"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="583"/>
         <source>%1, %2 replicates, seed %3</source>
         <translation>%1, %2 replicaties, seed %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="604"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="609"/>
         <source>Fleiss&apos; kappa needs every coder on every unit; some cells are missing.</source>
         <translation>Fleiss&apos; kappa vereist elke codeur op elke eenheid; er ontbreken cellen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="622"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="627"/>
         <source>below the minimum</source>
         <translation>onder het minimum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="623"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="628"/>
         <source>large enough</source>
         <translation>groot genoeg</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="639"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="644"/>
         <source>The sample is smaller than Krippendorff&apos;s minimum for the rarest value (alpha ≥ 0.800 at p = 0.05) in: %1. Code more units before relying on these figures.</source>
         <translation>De steekproef is kleiner dan Krippendorffs minimum voor de zeldzaamste waarde (alfa ≥ 0.800 bij p = 0.05) in: %1. Codeer meer eenheden voordat je op deze cijfers vertrouwt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
         <source>Unitizing alpha</source>
         <translation>Unitizing-alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="658"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
         <source>Observed disagreement D_o</source>
         <translation>Waargenomen onenigheid D_o</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="659"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
         <source>Expected disagreement D_e</source>
         <translation>Verwachte onenigheid D_e</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="659"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
         <source>Continuum</source>
         <translation>Continuüm</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
         <source>All four, pooled</source>
         <translation>Alle vier, samengenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="686"/>
         <source>%1 articles, %2 characters</source>
         <translation>%1 artikelen, %2 tekens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="692"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="704"/>
+        <source>Alpha without each article: the %1 costliest of %2</source>
+        <translation>Alfa zonder elk artikel: de %1 duurste van %2</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="709"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="692"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="875"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="709"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="892"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="694"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
         <source>Alpha without</source>
         <translation>Alfa zonder</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
         <source>Change</source>
         <translation>Verandering</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="695"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
         <source>Units</source>
         <translation>Eenheden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
         <source>Matches</source>
         <translation>Koppelingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
         <source>Length ± SE</source>
         <translation>Lengte ± SE</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
         <source>Start</source>
         <translation>Begin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>End</source>
         <translation>Einde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>Longer</source>
         <translation>Langer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>Shorter</source>
         <translation>Korter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="723"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>Habit</source>
         <translation>Gewoonte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="745"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="762"/>
         <source>spans systematically longer</source>
         <translation>fragmenten systematisch langer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="746"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="763"/>
         <source>spans systematically shorter</source>
         <translation>fragmenten systematisch korter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="759"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="776"/>
         <source>Alpha per function, with 95% bootstrap intervals</source>
         <translation>Alfa per functie, met 95%-bootstrapintervallen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="763"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="926"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="780"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="943"/>
         <source>Krippendorff&apos;s alpha</source>
         <translation>Krippendorffs alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="783"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="800"/>
         <source>pooled</source>
         <translation>samengenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="867"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="884"/>
         <source>Cohen&apos;s kappa of each pair of coders over the units both coded (%1). Darker: higher agreement; hatched: not defined.</source>
         <translation>Cohens kappa van elk paar codeurs over de eenheden die beide codeerden (%1). Donkerder: hogere overeenstemming; gearceerd: niet gedefinieerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="872"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="889"/>
         <source>Continuum units have no per-pair kappa; see the span agreement in the function confusion.</source>
         <translation>Continuümeenheden hebben geen kappa per paar; zie de overeenstemming van fragmenten in de functieverwarring.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="889"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="906"/>
         <source>nothing</source>
         <translation>niets</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="925"/>
         <source>A coder&apos;s span</source>
         <translation>Fragment van een codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="908"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="925"/>
         <source>What another coder gave it</source>
         <translation>Wat een andere codeur eraan gaf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="909"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="926"/>
         <source>Each span of each coder against the best-overlapping span of every other coder (both directions of each pair). Darker: a larger share of the row. &quot;nothing&quot;: no overlapping span.</source>
         <translation>Elk fragment van elke codeur tegenover het best overlappende fragment van elke andere codeur (beide richtingen van elk paar). Donkerder: een groter deel van de rij. ‘niets’: geen overlappend fragment.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="921"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="938"/>
         <source>Alpha by week of first coding — %1</source>
         <translation>Alfa per week van eerste codering — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="922"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="939"/>
         <source>Alpha by batch of articles, in coding order — %1</source>
         <translation>Alfa per groep artikelen, in codeervolgorde — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="959"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="979"/>
         <source>ISO week</source>
         <translation>ISO-week</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="959"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="979"/>
         <source>articles (in coding order)</source>
         <translation>artikelen (in codeervolgorde)</translation>
     </message>

@@ -8,6 +8,7 @@
 #include "app/desktop/reliability/report_options_dialog.h"
 #include "core/agreement/agreement_report.h"
 #include "tests/diagnostics/planted_project.h"
+#include "tests/project/double_coded_project.h"
 
 #include <QCheckBox>
 #include <QLabel>
@@ -257,4 +258,28 @@ TEST_CASE("the report dialog starts from the reliability window's choices")
     CHECK(back.bootstrapReplicates == 500);
     CHECK(back.seed == 42);
     CHECK(back.includeUnfinished);
+}
+
+TEST_CASE("the window lists the 200 costliest articles of a larger study and says so")
+{
+    // 210 double-coded articles: every one has a leave-one-out cost, the table shows the first
+    // 200 of the core's list (costliest first) and its heading gives both numbers.
+    DoubleCodedProject p(210);
+    ReliabilityWindow w(p.project);
+    ReliabilityRequest r = w.request();
+    r.unit = UnitKind::Sentence;
+    r.functions = {FramingFunction::Problem, FramingFunction::Cause, FramingFunction::Remedy};
+    r.bootstrapReplicates = 0;
+    w.setRequest(r);
+    REQUIRE(computeAndWait(w));
+    REQUIRE(w.outcome()->articleCosts.size() == 210);
+    QTableWidget *t = w.articleCostTable();
+    CHECK(t->rowCount() == 200);
+    CHECK(cell(t, 0, 0) == w.outcome()->articleCosts.front().name);
+    CHECK(cell(t, 199, 0) == w.outcome()->articleCosts[199].name);
+    bool headed = false;
+    for (const QLabel *l : w.findChildren<QLabel *>())
+        headed = headed
+            || l->text() == QStringLiteral("Alpha without each article: the 200 costliest of 210");
+    CHECK(headed);
 }

@@ -29,6 +29,7 @@
 #include <QtConcurrent/QtConcurrentRun>
 
 #include <algorithm>
+#include <cmath>
 
 namespace fourfold {
 
@@ -59,6 +60,9 @@ QTableWidgetItem *number(const QString &text)
 {
     return item(text, Qt::AlignRight | Qt::AlignVCenter);
 }
+
+// The most rows of the table of articles' leave-one-out costs.
+constexpr std::size_t kArticleCostRows = 200;
 
 QTableWidget *makeTable(QWidget *parent)
 {
@@ -223,6 +227,7 @@ ReliabilityWindow::ReliabilityWindow(Project &project, QWidget *parent)
     m_coderCosts = makeTable(diagPage);
     diag->addWidget(m_coderCosts);
     heading(tr("Alpha without each article (the costliest first)"));
+    m_articleCostsHeading = qobject_cast<QLabel *>(diag->itemAt(diag->count() - 1)->widget());
     m_articleCosts = makeTable(diagPage);
     diag->addWidget(m_articleCosts);
     diag->addWidget(note(tr("Change = alpha without it − alpha with everything: positive means "
@@ -687,8 +692,20 @@ void ReliabilityWindow::showContinuumSummary()
 void ReliabilityWindow::showDiagnostics()
 {
     const ReliabilityOutcome &o = *m_outcome;
-    auto fill = [this](QTableWidget *t, const std::vector<LeaveOneOut> &entries, bool articles) {
+    auto fill = [this](QTableWidget *t, std::vector<LeaveOneOut> entries, bool articles) {
         t->clear();
+        // Articles: the costliest ones only (they come costliest first); a study of thousands
+        // would fill a table nobody reads, at a cost that grows with every row.
+        if (articles) {
+            const std::size_t all = entries.size();
+            if (all > kArticleCostRows)
+                entries.resize(kArticleCostRows);
+            m_articleCostsHeading->setText(all > kArticleCostRows
+                    ? tr("Alpha without each article: the %1 costliest of %2")
+                          .arg(kArticleCostRows)
+                          .arg(all)
+                    : tr("Alpha without each article (the costliest first)"));
+        }
         QStringList headers {articles ? tr("Article") : tr("Coder")};
         if (articles)
             headers << tr("Title");
@@ -932,9 +949,12 @@ void ReliabilityWindow::showDrift()
     auto *line = new QLineSeries(chart);
     auto *dots = new QScatterSeries(chart);
     double lowest = 1.0;
+    // At most about ten labels on the axis: every period is drawn, every step-th one named.
+    const int step = std::max(1, int(std::ceil(double(o.periods.size()) / 10.0)));
     for (int i = 0; i < int(o.periods.size()); ++i) {
         const PeriodAlpha &p = o.periods[size_t(i)];
-        x->append(p.label, i);
+        if (i % step == 0)
+            x->append(p.label, i);
         if (!p.alpha.value)
             continue;
         line->append(i, *p.alpha.value);
@@ -945,7 +965,9 @@ void ReliabilityWindow::showDrift()
     pen.setWidthF(2);
     line->setPen(pen);
     dots->setColor(colour);
-    dots->setMarkerSize(10);
+    // A dot per period while they can be told apart; the line alone beyond that.
+    dots->setMarkerSize(o.periods.size() <= 60 ? 10 : 0);
+    dots->setVisible(o.periods.size() <= 60);
     dots->setBorderColor(Qt::white);
     for (QAbstractSeries *s :
         {static_cast<QAbstractSeries *>(line), static_cast<QAbstractSeries *>(dots)}) {

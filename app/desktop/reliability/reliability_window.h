@@ -105,6 +105,7 @@ private:
     QPushButton *m_cancel = nullptr;
     QProgressBar *m_progress = nullptr;
     QLabel *m_message = nullptr;
+    QLabel *m_articleCostsHeading = nullptr;
     QLabel *m_warning = nullptr;
 
     QTabWidget *m_tabs = nullptr;
