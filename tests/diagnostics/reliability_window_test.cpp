@@ -12,11 +12,15 @@
 
 #include <QCheckBox>
 #include <QLabel>
+#include <QProgressBar>
 #include <QSignalSpy>
 #include <QTabWidget>
 #include <QTableWidget>
 #include <QtCharts/QChart>
 #include <QtCharts/QChartView>
+
+#include <algorithm>
+#include <set>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -282,4 +286,26 @@ TEST_CASE("the window lists the 200 costliest articles of a larger study and say
         headed = headed
             || l->text() == QStringLiteral("Alpha without each article: the 200 costliest of 210");
     CHECK(headed);
+}
+
+TEST_CASE("the reliability window's progress bar moves step by step while it computes")
+{
+    // The job reports each analysis and each diagnostic as a step (ReliabilityJob): the bar
+    // takes several values on its way to its maximum, not only "busy" and "done".
+    PlantedProject p;
+    ReliabilityWindow w(p.project);
+    w.setRequest(plantedRequest());
+    auto *bar = w.findChild<QProgressBar *>();
+    REQUIRE(bar);
+    std::vector<int> values;
+    QObject::connect(bar, &QProgressBar::valueChanged, [&](int v) {
+        if (bar->maximum() > 0)
+            values.push_back(v);
+    });
+    REQUIRE(computeAndWait(w));
+    // Five analyses (four functions and the sets) and four diagnostic steps.
+    REQUIRE(values.size() >= 3);
+    CHECK(std::is_sorted(values.begin(), values.end()));
+    CHECK(values.front() < values.back());
+    CHECK(std::set<int>(values.begin(), values.end()).size() >= 3);
 }
