@@ -2,6 +2,7 @@
 
 #include "core/extract/extractor.h"
 #include "core/extract/extractor_protocol.h"
+#include "core/io/input_file.h"
 #include "core/project/project.h"
 #include "core/store/event_log.h"
 #include "core/store/extractor_run_table.h"
@@ -110,6 +111,7 @@ Result<ExtractorRun> ExtractorRuns::importRun(Project &project, const QString &n
     const QString &path, const QString &version, const QJsonObject &parameters)
 {
     FOURFOLD_TRY_STATUS(checkNewName(project, name));
+    FOURFOLD_TRY_STATUS(requireRegularFile(path));
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
         return fail(ErrorCode::Io, tr("%1 cannot be read.").arg(path), file.errorString());

@@ -2,6 +2,7 @@
 
 #include "core/io/csv_reader.h"
 #include "core/io/html_reader.h"
+#include "core/io/input_file.h"
 #include "core/io/jsonl_reader.h"
 #include "core/io/text_reader.h"
 
@@ -23,10 +24,7 @@ Result<QByteArray> readFileBytes(const QString &path)
         return failAt(ErrorCode::Io, path, 0, 0,
             QCoreApplication::translate("ArticleReader", "the file does not exist"));
     }
-    if (!info.isFile()) {
-        return failAt(ErrorCode::Io, path, 0, 0,
-            QCoreApplication::translate("ArticleReader", "this is not a regular file"));
-    }
+    FOURFOLD_TRY_STATUS(requireRegularFile(path));
     if (info.size() > maxImportFileSize) {
         return failAt(ErrorCode::InvalidInput, path, 0, 0,
             QCoreApplication::translate("ArticleReader",

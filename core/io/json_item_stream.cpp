@@ -1,5 +1,7 @@
 #include "core/io/json_item_stream.h"
 
+#include "core/io/input_file.h"
+
 #include <QCoreApplication>
 #include <QFile>
 #include <QJsonArray>
@@ -131,6 +133,7 @@ struct Stop {
 Result<QJsonValue> streamJsonItems(
     const QString &path, const JsonItemPlace &isItem, const JsonItemVisit &visit)
 {
+    FOURFOLD_TRY_STATUS(requireRegularFile(path));
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
         return fail(

@@ -1,6 +1,7 @@
 #include "core/io/reliability_table_reader.h"
 
 #include "core/io/csv_reader.h"
+#include "core/io/input_file.h"
 #include "core/text/canonical_text.h"
 
 #include <QCoreApplication>
@@ -117,6 +118,7 @@ private:
 
 Result<ReliabilityTable> readReliabilityTable(const QString &path)
 {
+    FOURFOLD_TRY_STATUS(requireRegularFile(path));
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
         return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));

@@ -1,5 +1,6 @@
 #include "core/project/coding_import.h"
 
+#include "core/io/input_file.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/gold_edits.h"
@@ -43,6 +44,7 @@ Result<QString> requiredString(
 
 Result<CodingImportReport> importQuotedCodings(Project &project, const QString &path, Phase phase)
 {
+    FOURFOLD_TRY_STATUS(requireRegularFile(path));
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
         return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));
