@@ -10,6 +10,7 @@
 #include <QDir>
 #include <QFile>
 #include <QFileInfo>
+#include <QRegularExpression>
 
 #include <algorithm>
 
@@ -67,6 +68,22 @@ Status checkArticles(
         if (QStringView(article.externalId).trimmed().isEmpty()) {
             return failAt(ErrorCode::InvalidInput, file, article.sourceLine, 0,
                 QCoreApplication::translate("ArticleReader", "the article has no id"));
+        }
+        // A control character (a line break, a tab, NUL, ...) in an id would break every
+        // line-based export that names the article (IOB2 comments, CSV, terminals).
+        if (const auto control = std::ranges::find_if(
+                article.externalId, [](QChar c) { return c.category() == QChar::Other_Control; });
+            control != article.externalId.cend()) {
+            return failAt(ErrorCode::InvalidInput, file, article.sourceLine, 0,
+                QCoreApplication::translate("ArticleReader",
+                    "the id \"%1\" holds a control character (U+%2); ids are one line of "
+                    "printable text")
+                    .arg(QString(article.externalId)
+                             .replace(QRegularExpression(QStringLiteral("\\p{Cc}")),
+                                 QStringLiteral("\uFFFD")))
+                    .arg(QString::number(control->unicode(), 16)
+                             .rightJustified(4, QLatin1Char('0'))
+                             .toUpper()));
         }
         if (QStringView(article.text).trimmed().isEmpty()) {
             return failAt(ErrorCode::InvalidInput, file, article.sourceLine, 0,

@@ -120,6 +120,14 @@ TEST_CASE("JSON Lines: malformed files are refused with line, column and reason"
         {"empty file", "", ErrorCode::InvalidInput, 0, 0, "contains no articles"},
         {"only blank lines", "\n  \r\n\t\n", ErrorCode::InvalidInput, 0, 0,
          "contains no articles"},
+        // An id must be one line of printable text: a line break, a tab or NUL inside it would
+        // break the line-based exports that name the article (common practice).
+        {"a line break in an id", ok + R"({"id":"b\nc","title":"t","text":"x"})" "\n",
+         ErrorCode::InvalidInput, 2, 0, "holds a control character (U+000A)"},
+        {"a tab in an id", R"({"id":"b\tc","title":"t","text":"x"})" "\n",
+         ErrorCode::InvalidInput, 1, 0, "holds a control character (U+0009)"},
+        {"NUL escaped in an id", R"({"id":"b\u0000","title":"t","text":"x"})" "\n",
+         ErrorCode::InvalidInput, 1, 0, "holds a control character (U+0000)"},
     };
     // clang-format on
     for (const BadInput &input : cases)
