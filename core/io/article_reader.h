@@ -7,8 +7,8 @@
 // - Input must be UTF-8; a leading BOM is dropped. Invalid UTF-8 and NUL bytes (binary files)
 //   are refused with the line and column of the first bad byte (decodeUtf8Strict).
 // - A file may be at most maxImportFileSize bytes; larger files are refused before reading.
-// - Every article needs a non-blank id and a non-blank text; ids are unique within a file (and
-//   within a folder of text files). Titles may be empty. Syntax and type errors are reported
+// - Every article needs a non-blank id without control characters (one line of printable text)
+//   and a non-blank text; ids are unique within a file (and within a folder of text files). Titles may be empty. Syntax and type errors are reported
 //   before these checks, so the first syntax error wins over an earlier duplicate id.
 // - An empty file, or one without a single article, is an error ("contains no articles").
 // - ImportOptions::language fills in records that name no language.
