@@ -1,8 +1,9 @@
 #pragma once
-// What every benchmark program needs: the process's peak memory and a way to stop at the first
-// error with its message.
+// What every benchmark program needs: the process's peak memory, a way to stop at the first
+// error with its message, and the people of a generated study.
 
 #include "core/model/error.h"
+#include "core/project/project.h"
 
 #include <sys/resource.h>
 
@@ -38,6 +39,17 @@ inline void check(const Status &s, const char *what)
 {
     if (!s)
         fail(what, s.error());
+}
+
+// The people of a generated study (bench/study_generator.h): coders C01, C02, ... (their
+// pseudonym as name) and the lead L01.
+inline void addStudyPeople(Project &project, int coders)
+{
+    for (int c = 0; c < coders; ++c) {
+        const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
+        check(project.addCoder(pseudonym, pseudonym, CoderRole::Coder), "coder");
+    }
+    check(project.addCoder(QStringLiteral("Lead"), QStringLiteral("L01"), CoderRole::Lead), "lead");
 }
 
 } // namespace fourfold::bench

@@ -40,12 +40,7 @@ int main(int argc, char **argv)
     QFile::remove(base);
     {
         Project project = check(Project::create(base), "create");
-        for (int c = 0; c < spec.coders; ++c) {
-            const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
-            check(project.addCoder(pseudonym, pseudonym, CoderRole::Coder), "coder");
-        }
-        check(project.addCoder(QStringLiteral("Lead"), QStringLiteral("L01"), CoderRole::Lead),
-            "lead");
+        addStudyPeople(project, spec.coders);
         check(project.importFile(files.articles, ImportOptions {}), "import articles");
     }
 

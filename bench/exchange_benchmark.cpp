@@ -74,11 +74,7 @@ int main(int argc, char **argv)
     }
     QFile::copy(base, study);
     Project project = check(Project::open(study), "open");
-    for (int c = 0; c < spec.coders; ++c) {
-        const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
-        check(project.addCoder(pseudonym, pseudonym, CoderRole::Coder), "coder");
-    }
-    check(project.addCoder(QStringLiteral("Lead"), QStringLiteral("L01"), CoderRole::Lead), "lead");
+    addStudyPeople(project, spec.coders);
     check(importQuotedCodings(project, files.codings, Phase::Production), "codings");
 
     const auto exportAs = [&](ExportFormat format, const QString &name) {

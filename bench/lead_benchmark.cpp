@@ -111,12 +111,7 @@ int main(int argc, char **argv)
         for (const char *suffix : {"", "-wal", "-shm"})
             QFile::remove(path + QLatin1String(suffix));
         Project project = check(Project::create(path), "create");
-        for (int c = 0; c < spec.coders; ++c) {
-            const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
-            check(project.addCoder(pseudonym, pseudonym, CoderRole::Coder), "coder");
-        }
-        check(project.addCoder(QStringLiteral("Lead"), QStringLiteral("L01"), CoderRole::Lead),
-            "lead");
+        addStudyPeople(project, spec.coders);
         check(project.importFile(files.articles, ImportOptions {}), "import articles");
         check(importQuotedCodings(project, files.codings, Phase::Production), "import codings");
         std::printf("study: %d articles, %d coders, %lld spans\n", n, spec.coders, files.spans);

@@ -105,12 +105,7 @@ int main(int argc, char **argv)
     const QString path = QDir(dir).filePath(QStringLiteral("study.fourfold"));
     QFile::remove(path);
     Project project = check(Project::create(path), "create");
-    for (int c = 0; c < coders; ++c) {
-        const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
-        check(project.addCoder(QStringLiteral("Coder ") + pseudonym, pseudonym, CoderRole::Coder),
-            "coder");
-    }
-    check(project.addCoder(QStringLiteral("Lead"), QStringLiteral("L01"), CoderRole::Lead), "lead");
+    addStudyPeople(project, coders);
 
     timed("import articles", n, 1,
         [&] { check(project.importFile(files.articles, ImportOptions {}), "import"); });

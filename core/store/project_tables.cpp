@@ -69,7 +69,7 @@ Result<std::vector<Assignment>> assignments(const Database &db, ArticleId articl
         stmt->bind(1, article.value);
     return collectRows(*stmt, [](const Statement &row) {
         return Assignment {ArticleId {row.columnInt(0)}, CoderId {row.columnInt(1)},
-            phaseFromKey(row.columnText(2)).value_or(Phase::Production), row.columnText(3),
+            storedPhase(row.columnUtf8(2)).value_or(Phase::Production), row.columnText(3),
             row.columnInt(4)};
     });
 }
@@ -103,7 +103,7 @@ Result<std::vector<CodedTriple>> codedTriples(const Database &db, ArticleId arti
         stmt->bind(1, article.value);
     return collectRows(*stmt, [](const Statement &row) {
         return CodedTriple {ArticleId {row.columnInt(0)}, CoderId {row.columnInt(1)},
-            phaseFromKey(row.columnText(2)).value_or(Phase::Production)};
+            storedPhase(row.columnUtf8(2)).value_or(Phase::Production)};
     });
 }
 
