@@ -21,6 +21,7 @@
 #include <QProcess>
 #include <QTemporaryDir>
 
+#include <algorithm>
 #include <cstdio>
 #include <random>
 
@@ -112,12 +113,12 @@ int main(int argc, char *argv[])
             return 1;
         }
         const int articles = 1000;
-        const qsizetype perArticle = table->units.size() / 9 > 0 ? table->units.size() / 9 : 1;
-        ReliabilityTable scaled = *table;
-        while (scaled.units.size() < perArticle * articles) {
-            scaled.units += table->units;
-            scaled.cells.insert(scaled.cells.end(), table->cells.begin(), table->cells.end());
-        }
+        const size_t perArticle = std::max<size_t>(1, table->unitCount() / 9);
+        std::vector<size_t> repeated; // the sample's units over and over
+        while (repeated.size() < perArticle * articles)
+            for (size_t u = 0; u < table->unitCount(); ++u)
+                repeated.push_back(u);
+        const ReliabilityTable scaled = table->rows(repeated);
         EncodingOptions e;
         e.distance = SetDistance::Masi;
         t.restart();
@@ -129,10 +130,10 @@ int main(int argc, char *argv[])
             millisecondsOf([&] { a = krippendorffAlpha(encoded->data, encoded->metric); });
         std::printf(
             "token units, all functions (MASI), sample project: %lld units unitized in %.1f ms\n",
-            qint64(table->units.size()), unitizeMs);
+            qint64(table->unitCount()), unitizeMs);
         std::printf("  scaled to ~1,000 articles (%lld units): encoding %.1f ms, alpha %.1f ms "
                     "(alpha %.4f)\n",
-            qint64(scaled.units.size()), encodeMs, alphaMs, a.value.value_or(-1));
+            qint64(scaled.unitCount()), encodeMs, alphaMs, a.value.value_or(-1));
     }
 
     // NLTK on a 10,000-unit slice of the big nominal matrix.

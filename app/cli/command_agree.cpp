@@ -2,6 +2,7 @@
 
 #include "app/cli/cli_output.h"
 #include "core/agreement/agreement_run.h"
+#include "core/io/reliability_table_reader.h"
 #include "core/project/project.h"
 
 #include <QCoreApplication>

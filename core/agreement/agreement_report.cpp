@@ -152,16 +152,7 @@ AgreementReport computeAgreement(const EncodedData &encoded, const QStringList &
             const ContingencyTable table = contingencyTable(data, a, b);
             for (double c : table.counts)
                 p.units += int(c);
-            // The pair's own two-column matrix for percent agreement.
-            ReliabilityData two;
-            two.coders = 2;
-            two.values = data.values;
-            for (int u = 0; u < data.units; ++u) {
-                two.cells.push_back(data.at(u, a));
-                two.cells.push_back(data.at(u, b));
-            }
-            two.units = data.units;
-            p.percentAgreement = percentAgreement(two);
+            p.percentAgreement = percentAgreement(table);
             p.cohenKappa = cohenKappa(table, options.kappaWeights);
             r.pairs.push_back(p);
         }

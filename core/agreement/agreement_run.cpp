@@ -18,28 +18,27 @@ QString tr(const char *text)
     return QCoreApplication::translate("AgreementRun", text);
 }
 
-// Keeps only `keep` (function keys) in set labels "cause|problem" ("{}" when none is left).
-// Identical rows are restricted once and stay shared (see unitTable()).
+// Keeps only `keep` (function keys) in set labels "cause|problem" ("{}" when none is left): each
+// label is restricted once and the cells follow their labels.
 void restrictSets(ReliabilityTable &table, const QStringList &keep)
 {
-    QHash<QStringList, QStringList> restricted;
-    for (QStringList &row : table.cells) {
-        auto it = restricted.constFind(row);
-        if (it == restricted.cend()) {
-            QStringList out = row;
-            for (QString &cell : out) {
-                if (cell.isEmpty())
-                    continue;
-                QStringList kept;
-                for (const QString &key : cell.split(QLatin1Char('|'), Qt::SkipEmptyParts))
-                    if (keep.contains(key))
-                        kept << key;
-                cell = kept.isEmpty() ? QStringLiteral("{}") : kept.join(QLatin1Char('|'));
-            }
-            it = restricted.insert(row, out);
+    QStringList labels;
+    std::vector<qint32> relabel;
+    for (const QString &label : table.labels()) {
+        QStringList kept;
+        for (const QString &key : label.split(QLatin1Char('|'), Qt::SkipEmptyParts))
+            if (keep.contains(key))
+                kept << key;
+        const QString restricted =
+            kept.isEmpty() ? QStringLiteral("{}") : kept.join(QLatin1Char('|'));
+        qsizetype at = labels.indexOf(restricted);
+        if (at < 0) {
+            at = labels.size();
+            labels << restricted;
         }
-        row = *it;
+        relabel.push_back(qint32(at));
     }
+    table.relabel(relabel, labels);
 }
 
 bool isSetUnit(const AnalysisRequest &request)
@@ -120,7 +119,7 @@ Result<LeaveOneOutCosts> leaveOneOutCosts(
     auto coders = leaveOneCoderOut(analysis.encoded, analysis.table.coders, progress);
     if (!coders)
         return std::unexpected(coders.error());
-    auto articles = leaveOneArticleOut(analysis.encoded, analysis.table.units, progress);
+    auto articles = leaveOneArticleOut(analysis.encoded, analysis.table, progress);
     if (!articles)
         return std::unexpected(articles.error());
     return LeaveOneOutCosts {std::move(*coders), std::move(*articles)};

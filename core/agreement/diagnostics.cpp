@@ -79,20 +79,6 @@ double FunctionConfusion::sameFunction() const
     return n;
 }
 
-QString unitArticle(const QString &unitId)
-{
-    // The unit suffix "#" + one of p, s, t, a + digits, if the id ends in one. Called per unit
-    // of tables with millions, so read by hand rather than by a regular expression.
-    const qsizetype hash = unitId.lastIndexOf(QLatin1Char('#'));
-    if (hash < 0 || hash + 2 >= unitId.size()
-        || !QStringView(u"psta").contains(unitId.at(hash + 1)))
-        return unitId;
-    for (qsizetype i = hash + 2; i < unitId.size(); ++i)
-        if (unitId.at(i) < QLatin1Char('0') || unitId.at(i) > QLatin1Char('9'))
-            return unitId;
-    return unitId.left(hash);
-}
-
 Result<std::vector<LeaveOneOut>> leaveOneCoderOut(
     const EncodedData &encoded, const QStringList &coders, const DiagnosticsProgress &progress)
 {
@@ -126,26 +112,16 @@ Result<std::vector<LeaveOneOut>> leaveOneCoderOut(
 }
 
 Result<std::vector<LeaveOneOut>> leaveOneArticleOut(
-    const EncodedData &encoded, const QStringList &units, const DiagnosticsProgress &progress)
+    const EncodedData &encoded, const ReliabilityTable &table, const DiagnosticsProgress &progress)
 {
     const ReliabilityData &data = encoded.data;
-    if (units.size() != data.units || !dataProblem(data).empty())
+    if (table.unitCount() != size_t(data.units) || !dataProblem(data).empty())
         return fail(ErrorCode::InvalidArgument,
             tr("The units named do not match the rows of the reliability data."));
     const AlphaResult all = krippendorffAlpha(data, encoded.metric);
     // Articles in the order of their first unit.
     QStringList articles;
-    std::vector<int> articleOf(size_t(data.units));
-    QHash<QString, int> index;
-    for (int u = 0; u < data.units; ++u) {
-        const QString a = unitArticle(units[u]);
-        auto it = index.constFind(a);
-        if (it == index.constEnd()) {
-            it = index.insert(a, int(articles.size()));
-            articles << a;
-        }
-        articleOf[size_t(u)] = *it;
-    }
+    const std::vector<qint32> articleOf = table.unitArticles(articles);
     // Alpha without an article from the coincidences of everything minus the article's own
     // coincidences: coincidences add over units (Krippendorff 2011, §C), so leaving an article
     // out costs its own units, not a rebuild of all the others.
@@ -373,14 +349,15 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
 
     // Articles of the table with a pairable unit (two coders' values), in coding order: an
     // article only one coder has finished adds nothing a period could compare.
-    std::vector<QString> articleOfUnit(std::size_t(table.units.size()));
+    QStringList tableArticles;
+    std::vector<qint32> articleOfUnit = table.unitArticles(tableArticles);
     QSet<QString> inTable;
-    for (qsizetype u = 0; u < table.units.size(); ++u) {
-        articleOfUnit[std::size_t(u)] = unitArticle(table.units[u]);
-        const QStringList &row = table.cells[size_t(u)];
-        if (std::count_if(row.begin(), row.end(), [](const QString &v) { return !v.isEmpty(); })
+    for (size_t u = 0; u < table.unitCount(); ++u) {
+        const auto row = table.row(u);
+        if (std::count_if(
+                row.begin(), row.end(), [](qint32 v) { return v != ReliabilityTable::kMissing; })
             >= 2)
-            inTable.insert(articleOfUnit[std::size_t(u)]);
+            inTable.insert(tableArticles[articleOfUnit[u]]);
     }
     std::vector<std::pair<std::pair<QString, qint64>, QString>> ordered;
     for (const auto &[id, key] : first)
@@ -412,24 +389,18 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
         periodOf.insert(ordered[i].second, int(periods.size()) - 1);
     }
     // Each period's units, found in one pass over the table.
-    std::vector<std::vector<qsizetype>> unitsOf(periods.size());
-    for (qsizetype u = 0; u < table.units.size(); ++u)
-        if (const int p = periodOf.value(articleOfUnit[std::size_t(u)], -1); p >= 0)
+    std::vector<int> periodOfArticle(size_t(tableArticles.size()), -1);
+    for (qsizetype a = 0; a < tableArticles.size(); ++a)
+        periodOfArticle[size_t(a)] = periodOf.value(tableArticles[a], -1);
+    std::vector<std::vector<size_t>> unitsOf(periods.size());
+    for (size_t u = 0; u < table.unitCount(); ++u)
+        if (const int p = periodOfArticle[size_t(articleOfUnit[u])]; p >= 0)
             unitsOf[std::size_t(p)].push_back(u);
-    articleOfUnit.clear();
+    articleOfUnit = {};
     for (size_t p = 0; p < periods.size(); ++p) {
         if (!carryOn(progress, int(p), int(periods.size())))
             return cancelled();
-        ReliabilityTable part;
-        part.coders = table.coders;
-        part.source = table.source;
-        for (const qsizetype u : unitsOf[p]) {
-            part.units << table.units[u];
-            part.cells.push_back(table.cells[size_t(u)]);
-            if (size_t(u) < table.lines.size())
-                part.lines.push_back(table.lines[size_t(u)]);
-        }
-        auto encoded = encodeTable(part, encoding);
+        auto encoded = encodeTable(table.rows(unitsOf[p]), encoding);
         if (!encoded)
             return std::unexpected(encoded.error());
         periods[p].alpha = krippendorffAlpha(encoded->data, encoded->metric);

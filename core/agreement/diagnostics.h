@@ -54,16 +54,12 @@ struct LeaveOneOut {
 Result<std::vector<LeaveOneOut>> leaveOneCoderOut(const EncodedData &encoded,
     const QStringList &coders, const DiagnosticsProgress &progress = {});
 
-// Alpha without the units of each article in turn (the article of a unit from unitArticle()),
-// sorted as above: the article that costs most first. `units` names the rows of `encoded.data`.
-// Fails with InvalidArgument when `units` does not match the data, Cancelled when `progress`
-// returns false.
-Result<std::vector<LeaveOneOut>> leaveOneArticleOut(
-    const EncodedData &encoded, const QStringList &units, const DiagnosticsProgress &progress = {});
-
-// The article id of a unit id made by unitTable(): "a7#s12" → "a7", "a7#p2", "a7#t3", "a7#a1"
-// likewise; an article unit's id is the article id itself.
-QString unitArticle(const QString &unitId);
+// Alpha without the units of each article in turn (the article of a unit from
+// ReliabilityTable::unitArticles()), sorted as above: the article that costs most first. `table`
+// is the table `encoded` was encoded from. Fails with InvalidArgument when the table does not
+// match the data, Cancelled when `progress` returns false.
+Result<std::vector<LeaveOneOut>> leaveOneArticleOut(const EncodedData &encoded,
+    const ReliabilityTable &table, const DiagnosticsProgress &progress = {});
 
 // Counts of (a coder's function, the other coder's function at the best-overlapping span),
 // summed over ordered pairs of coders. Index 0..3 the functions (FramingFunction order), 4 =

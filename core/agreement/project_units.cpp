@@ -11,8 +11,6 @@
 #include <algorithm>
 #include <array>
 #include <map>
-#include <string>
-#include <unordered_map>
 
 namespace fourfold {
 
@@ -191,12 +189,14 @@ void addSpanUnits(ReliabilityTable &table, const QString &articleId,
             order.push_back(root);
         members[root].push_back(i);
     }
-    int passage = 0;
+    std::vector<qint32> cells; // the passages' rows, one after the other
+    cells.reserve(order.size() * size_t(coders));
     for (size_t root : order) {
         const std::vector<size_t> &m = members[root];
         // Coders without a span in the passage are missing: an attribute of nothing is not a value.
-        QStringList row(coders, QString());
-        std::vector<qint64> bestOverlap(size_t(row.size()), -1);
+        const size_t row = cells.size();
+        cells.resize(row + size_t(coders), ReliabilityTable::kMissing);
+        std::vector<qint64> bestOverlap(size_t(coders), -1);
         for (size_t i : m) {
             qint64 overlap = 0;
             for (size_t j : m)
@@ -206,16 +206,17 @@ void addSpanUnits(ReliabilityTable &table, const QString &articleId,
             const int c = coderIndex.value(spans[i]->coder.value);
             if (overlap > bestOverlap[size_t(c)]) {
                 bestOverlap[size_t(c)] = overlap;
-                row[c] = spans[i]->content.attributes.value(attribute).toString().trimmed();
+                const QString value =
+                    spans[i]->content.attributes.value(attribute).toString().trimmed();
+                cells[row + size_t(c)] =
+                    value.isEmpty() ? ReliabilityTable::kMissing : table.labelIndex(value);
             }
         }
-        table.units << QStringLiteral("%1#a%2").arg(articleId).arg(++passage);
-        table.cells.push_back(row);
     }
+    table.appendNumberedUnits(articleId, QStringLiteral("#a"), cells);
 }
 
-// The label of a set of functions; the 16 labels are made once and shared (Qt's implicit
-// sharing), so a table of millions of token units holds no string per cell.
+// The label of a set of functions ("cause|problem", "{}" for none), made once for the 16 sets.
 const QString &setLabel(unsigned mask)
 {
     static const std::array<QString, 16> labels = [] {
@@ -235,15 +236,10 @@ const QString &setLabel(unsigned mask)
 // Units of one article's segmentation: per unit and coder, "present"/"absent" for one function
 // or the set of functions of the spans that overlap it; missing where the coder's coding of the
 // article does not count.
-// Rows of a table of segments by the value each coder gave (one byte per coder: the mask of
-// functions, or 0xff for missing). Identical rows share one QStringList (Qt's implicit sharing),
-// so a table of millions of token units holds a few hundred rows of strings, not millions.
-using SharedRows = std::unordered_map<std::string, QStringList>;
-
 void addSegmentUnits(ReliabilityTable &table, const ArticleSummary &summary,
     const std::vector<TextRange> &units,
     const std::map<std::pair<qint64, int>, std::vector<const Annotation *>> &spans,
-    const CountedCodings &s, const UnitSelection &sel, const QString &prefix, SharedRows &rows)
+    const CountedCodings &s, const UnitSelection &sel, const QString &prefix)
 {
     const qint64 articleId = summary.id.value;
     const qsizetype coders = table.coders.size();
@@ -266,49 +262,20 @@ void addSegmentUnits(ReliabilityTable &table, const ArticleSummary &summary,
     std::vector<bool> counted(size_t(coders), false);
     for (qsizetype c = 0; c < coders; ++c)
         counted[size_t(c)] = s.counts(articleId, s.coders[size_t(c)].id.value);
-    static const QString present = QStringLiteral("present");
-    static const QString absent = QStringLiteral("absent");
-    // The article's unit ids in one string the table keeps; each id refers into it
-    // (QString::fromRawData), so a million units cost no million small allocations.
-    QString ids;
-    std::vector<std::pair<qsizetype, qsizetype>> idAt; // (start, length) in `ids`
-    idAt.reserve(units.size());
-    for (size_t u = 0; u < units.size(); ++u) {
-        const qsizetype start = ids.size();
-        ids += summary.externalId;
-        ids += prefix;
-        ids += QString::number(u + 1);
-        idAt.emplace_back(start, ids.size() - start);
-    }
-    table.storageParts.push_back(ids);
-    const QChar *idData = table.storageParts.back().constData();
-
-    std::string key(size_t(coders), '\0');
-    for (size_t u = 0; u < units.size(); ++u) {
+    // The label of each value a cell can take (a function mask, or present/absent), looked up
+    // once per table rather than per cell.
+    std::array<qint32, 16> labelOf {};
+    for (unsigned m = 0; m < 16; ++m)
+        labelOf[m] = sel.function
+            ? table.labelIndex(m ? QStringLiteral("present") : QStringLiteral("absent"))
+            : table.labelIndex(setLabel(m));
+    std::vector<qint32> cells(masks.size());
+    for (size_t u = 0; u < units.size(); ++u)
         for (qsizetype c = 0; c < coders; ++c) {
-            const unsigned mask = masks[u * size_t(coders) + size_t(c)];
-            key[size_t(c)] = !counted[size_t(c)] ? char(0xff)
-                : sel.function                   ? char(mask ? 1 : 0)
-                                                 : char(mask);
+            const size_t at = u * size_t(coders) + size_t(c);
+            cells[at] = counted[size_t(c)] ? labelOf[masks[at] & 15u] : ReliabilityTable::kMissing;
         }
-        auto shared = rows.find(key);
-        if (shared == rows.end()) {
-            QStringList row;
-            row.reserve(coders);
-            for (qsizetype c = 0; c < coders; ++c) {
-                const unsigned mask = masks[u * size_t(coders) + size_t(c)];
-                if (!counted[size_t(c)])
-                    row << QString();
-                else if (sel.function)
-                    row << (mask ? present : absent);
-                else
-                    row << setLabel(mask);
-            }
-            shared = rows.emplace(key, std::move(row)).first;
-        }
-        table.units << QString::fromRawData(idData + idAt[u].first, idAt[u].second);
-        table.cells.push_back(shared->second);
-    }
+    table.appendNumberedUnits(summary.externalId, prefix, cells);
 }
 
 } // namespace
@@ -366,17 +333,20 @@ Result<ReliabilityTable> unitTable(
                 table, summary->externalId, articleSpans, s.coderIndex, sel.attribute, coders);
         }
     } else if (sel.unit == UnitKind::Article) {
-        QHash<qint64, QStringList> answers; // article → one answer per coder
+        // article → one answer per coder
+        const std::vector<qint32> none(size_t(coders), ReliabilityTable::kMissing);
+        QHash<qint64, std::vector<qint32>> answers;
         for (const Judgement &j : s.judgements)
             if (j.itemKey == sel.item) {
                 auto it = answers.find(j.article.value);
                 if (it == answers.end())
-                    it = answers.insert(j.article.value, QStringList(coders, QString()));
-                (*it)[s.coderIndex.value(j.coder.value)] = j.value;
+                    it = answers.insert(j.article.value, none);
+                (*it)[size_t(s.coderIndex.value(j.coder.value))] =
+                    j.value.isEmpty() ? ReliabilityTable::kMissing : table.labelIndex(j.value);
             }
         for (const ArticleSummary *summary : coded) {
-            table.units << summary->externalId;
-            table.cells.push_back(answers.value(summary->id.value, QStringList(coders, QString())));
+            auto it = answers.constFind(summary->id.value);
+            table.appendUnit(summary->externalId, it == answers.constEnd() ? none : *it);
         }
     } else {
         // Paragraphs, sentences or tokens: the segmentation of every article streamed from one
@@ -390,17 +360,16 @@ Result<ReliabilityTable> unitTable(
         const QString prefix = sel.unit == UnitKind::Paragraph ? QStringLiteral("#p")
             : sel.unit == UnitKind::Sentence                   ? QStringLiteral("#s")
                                                                : QStringLiteral("#t");
-        SharedRows rows;
         FOURFOLD_TRY_STATUS(project.forEachSegmentation(
             kind, [&](ArticleId id, std::vector<TextRange> &&units) -> Status {
                 const ArticleSummary *summary = wanted.value(id.value);
                 if (!summary)
                     return {};
-                addSegmentUnits(table, *summary, units, spans, s, sel, prefix, rows);
+                addSegmentUnits(table, *summary, units, spans, s, sel, prefix);
                 return {};
             }));
     }
-    if (table.units.isEmpty())
+    if (table.isEmpty())
         return fail(ErrorCode::NotFound,
             tr("None of the selected coders has marked any of the selected articles done."));
     return table;

@@ -6,13 +6,13 @@
 // them in; assigned but untouched articles never count.
 
 #include "core/agreement/value_encoding.h"
-#include "core/io/reliability_table_reader.h"
 #include "core/model/annotation.h"
 #include "core/model/article.h"
 #include "core/model/codebook.h"
 #include "core/model/coder.h"
 #include "core/model/error.h"
 #include "core/model/framing_function.h"
+#include "core/model/reliability_table.h"
 #include "core/model/unit_kind.h"
 #include "core/reliability/unitizing_alpha.h"
 

@@ -25,10 +25,9 @@ QString tr(const char *text)
 std::unexpected<Error> cellError(
     const ReliabilityTable &table, size_t unit, qsizetype coder, const QString &what)
 {
-    const qint64 line = unit < table.lines.size() ? table.lines[unit] : 0;
-    return failAt(ErrorCode::InvalidInput, table.source, line, 0,
+    return failAt(ErrorCode::InvalidInput, table.source, table.unitLine(unit), 0,
         tr("unit \"%1\", coder \"%2\": %3")
-            .arg(table.units.value(qsizetype(unit)), table.coders.value(coder), what));
+            .arg(table.unitId(unit), table.coders.value(coder), what));
 }
 
 // Splits a set cell: "a|b" or "{a|b}" → {a, b}; "{}" → the empty set.
@@ -47,46 +46,27 @@ QStringList setMembers(const QString &cell)
     return parts;
 }
 
-struct DistinctLabels {
-    QStringList labels; // in the order they first appear (unit by unit, coder by coder)
-    std::vector<std::pair<size_t, qsizetype>> first; // (unit, coder) where each first appears
-};
-
-// The distinct labels of the table's non-empty cells; `cells` (units × coders) gets each cell's
-// label index, or kMissing for an empty cell.
-DistinctLabels distinctLabels(const ReliabilityTable &table, std::vector<int> &cells)
+// The labels the table's cells use (a table cut from a larger one may hold labels none of its
+// cells has), as indices into table.labels(), in the order they first appear.
+std::vector<qint32> usedLabels(const ReliabilityTable &table)
 {
-    const qsizetype coders = table.coders.size();
-    cells.assign(table.cells.size() * size_t(coders), kMissing);
-    DistinctLabels out;
-    QHash<QString, int> index;
-    // Cells that share their characters (the reader interns labels, so a label's cells do)
-    // are recognised by address and length without hashing the text: within this call the
-    // table does not change, so equal address and length mean equal text.
-    struct Seen {
-        const QChar *data = nullptr;
-        qsizetype size = 0;
-        int label = 0;
-    };
-    std::array<Seen, 64> seen {};
-    for (size_t u = 0; u < table.cells.size(); ++u)
-        for (qsizetype c = 0; c < coders; ++c) {
-            const QString &cell = table.cells[u][c];
-            if (cell.isEmpty())
-                continue;
-            Seen &s = seen[(quintptr(cell.constData()) >> 4) % seen.size()];
-            if (s.data != cell.constData() || s.size != cell.size()) {
-                auto found = index.constFind(cell);
-                if (found == index.constEnd()) {
-                    found = index.insert(cell, int(out.labels.size()));
-                    out.labels << cell;
-                    out.first.emplace_back(u, c);
-                }
-                s = Seen {cell.constData(), cell.size(), *found};
-            }
-            cells[u * size_t(coders) + size_t(c)] = s.label;
+    std::vector<char> used(size_t(table.labels().size()), 0);
+    std::vector<qint32> out;
+    for (const qint32 l : table.cells())
+        if (l != ReliabilityTable::kMissing && !used[size_t(l)]) {
+            used[size_t(l)] = 1;
+            out.push_back(l);
         }
     return out;
+}
+
+// The first cell (unit by unit, coder by coder) holding label `l`.
+std::pair<size_t, qsizetype> firstCell(const ReliabilityTable &table, qint32 l)
+{
+    const size_t coders = size_t(table.coderCount());
+    const auto &cells = table.cells();
+    const size_t at = size_t(std::find(cells.begin(), cells.end(), l) - cells.begin());
+    return {at / coders, qsizetype(at % coders)};
 }
 
 } // namespace
@@ -131,8 +111,8 @@ std::optional<SetDistance> setDistanceFromKey(const QString &key)
 Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOptions &options)
 {
     EncodedData out;
-    const size_t units = table.cells.size();
-    const qsizetype coders = table.coders.size();
+    const size_t units = table.unitCount();
+    const qsizetype coders = table.coderCount();
     out.data.units = int(units);
     out.data.coders = int(coders);
     out.metric.level = options.level;
@@ -141,12 +121,15 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
             tr("A set distance (Jaccard, MASI) cannot be combined with the %1 level.")
                 .arg(levelKey(options.level)));
 
-    // Each distinct label is read once: the cells first hold the index of their label (in the
-    // order labels first appear), which the label's code then replaces.
-    const DistinctLabels distinct = distinctLabels(table, out.data.cells);
-    std::vector<int> codeOf(size_t(distinct.labels.size()), 0);
+    // Each distinct label is read once: codeOf maps a label index of the table to its value
+    // code, which then replaces it in every cell.
+    const std::vector<qint32> used = usedLabels(table);
+    QStringList distinct; // the used labels, in the order they first appear
+    for (const qint32 l : used)
+        distinct << table.labels()[l];
+    std::vector<int> codeOf(size_t(distinct.size()), 0); // by position in `distinct`
     const auto labelError = [&](qsizetype label, const QString &what) {
-        const auto [u, c] = distinct.first[size_t(label)];
+        const auto [u, c] = firstCell(table, used[size_t(label)]);
         return cellError(table, u, c, what);
     };
 
@@ -154,7 +137,7 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
         // Distinct sets, in sorted order of their canonical "a|b" form.
         std::map<QString, QStringList> sets;
         std::vector<QString> keyOf;
-        for (const QString &cell : distinct.labels) {
+        for (const QString &cell : distinct) {
             const QStringList members = setMembers(cell);
             keyOf.push_back(members.join(QLatin1Char('|')));
             sets.emplace(keyOf.back(), members);
@@ -182,8 +165,8 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
         const bool ranked = options.level == Level::Ordinal && !options.order.isEmpty();
         const bool numeric = !ranked && options.level != Level::Nominal;
         std::vector<double> numberOf; // per distinct label, when numeric
-        for (qsizetype l = 0; l < distinct.labels.size(); ++l) {
-            const QString &cell = distinct.labels[l];
+        for (qsizetype l = 0; l < distinct.size(); ++l) {
+            const QString &cell = distinct[l];
             if (ranked) {
                 if (!options.order.contains(cell))
                     return labelError(l,
@@ -206,8 +189,8 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
             out.valueLabels = options.order;
             for (qsizetype i = 0; i < options.order.size(); ++i)
                 out.metric.numeric.push_back(double(i));
-            for (qsizetype l = 0; l < distinct.labels.size(); ++l)
-                codeOf[size_t(l)] = int(options.order.lastIndexOf(distinct.labels[l]));
+            for (qsizetype l = 0; l < distinct.size(); ++l)
+                codeOf[size_t(l)] = int(options.order.lastIndexOf(distinct[l]));
         } else if (numeric) {
             std::map<double, int> numberCode;
             for (double v : numberOf)
@@ -220,20 +203,25 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
             for (size_t l = 0; l < numberOf.size(); ++l)
                 codeOf[l] = numberCode.at(numberOf[l]);
         } else {
-            std::vector<qsizetype> sorted(size_t(distinct.labels.size()));
+            std::vector<qsizetype> sorted(size_t(distinct.size()));
             std::iota(sorted.begin(), sorted.end(), 0);
-            std::ranges::sort(sorted,
-                [&](qsizetype a, qsizetype b) { return distinct.labels[a] < distinct.labels[b]; });
+            std::ranges::sort(
+                sorted, [&](qsizetype a, qsizetype b) { return distinct[a] < distinct[b]; });
             for (qsizetype l : sorted) {
                 codeOf[size_t(l)] = int(out.valueLabels.size());
-                out.valueLabels << distinct.labels[l];
+                out.valueLabels << distinct[l];
             }
         }
         out.data.values = int(out.valueLabels.size());
     }
-    for (int &cell : out.data.cells)
-        if (cell != kMissing)
-            cell = codeOf[size_t(cell)];
+    std::vector<int> codeOfLabel(size_t(table.labels().size()), kMissing);
+    for (size_t i = 0; i < used.size(); ++i)
+        codeOfLabel[size_t(used[i])] = codeOf[i];
+    out.data.cells.resize(table.cells().size());
+    std::transform(
+        table.cells().begin(), table.cells().end(), out.data.cells.begin(), [&](qint32 l) {
+            return l == ReliabilityTable::kMissing ? kMissing : codeOfLabel[size_t(l)];
+        });
     return out;
 }
 

@@ -2,8 +2,8 @@
 // From a labelled reliability table (cells as text) to the numeric kernels' reliability data:
 // value codes, and the metric for the chosen level of measurement or set distance.
 
-#include "core/io/reliability_table_reader.h"
 #include "core/model/error.h"
+#include "core/model/reliability_table.h"
 #include "core/reliability/reliability_data.h"
 #include "core/reliability/set_distance.h"
 

@@ -21,48 +21,15 @@ QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
     return QCoreApplication::translate("ReliabilityTableReader", text, disambiguation, n);
 }
 
-// Cell values, interned: every cell holding the same label shares one string, so the table
-// holds a string per distinct label rather than per cell.
-class LabelTable
-{
-public:
-    const QString &intern(QStringView cell)
-    {
-        // A study has a handful of labels: comparing with each is cheaper than hashing.
-        if (m_byText.isEmpty()) {
-            for (const QString &label : m_labels)
-                if (label.size() == cell.size() && QStringView(label) == cell)
-                    return label;
-            m_labels.push_back(cell.toString());
-            if (m_labels.size() > kScanned)
-                for (const QString &label : m_labels)
-                    m_byText.insert(QStringView(label), label);
-            return m_labels.back();
-        }
-        auto found = m_byText.constFind(cell);
-        if (found == m_byText.constEnd()) {
-            const QString label = cell.toString();
-            // The key views the characters of the string it maps to, which that string keeps.
-            found = m_byText.insert(QStringView(label), label);
-        }
-        return *found;
-    }
-
-private:
-    static constexpr size_t kScanned = 16;
-    std::vector<QString> m_labels; // while there are at most kScanned
-    QHash<QStringView, QString> m_byText; // once there are more
-};
-
 // The units read so far, for finding a repeated unit id without a second string per unit: an
-// open-addressing set of positions in `units` with their ids' hashes, so that a probe compares
+// open-addressing set of positions in the table with their ids' hashes, so that a probe compares
 // ids only when the hashes agree.
 class UnitIndex
 {
 public:
     // `expected`: how many units will come (the table grows past it if need be).
-    UnitIndex(const QStringList &units, qsizetype expected)
-        : m_units(units)
+    UnitIndex(const ReliabilityTable &table, qsizetype expected)
+        : m_table(table)
     {
         resize(std::bit_ceil(size_t(std::max<qsizetype>(32, 2 * expected))));
     }
@@ -73,8 +40,8 @@ public:
     {
         if (2 * (m_count + 1) > m_slots.size())
             resize(2 * m_slots.size());
-        const quint32 position = quint32(m_units.size() - 1);
-        const QString &unit = m_units[position];
+        const quint32 position = quint32(m_table.unitCount() - 1);
+        const QStringView unit = m_table.ownId(position);
         const quint32 hash = quint32(qHash(unit));
         for (size_t at = hash & m_mask;; at = (at + 1) & m_mask) {
             Slot &slot = m_slots[at];
@@ -83,7 +50,7 @@ public:
                 ++m_count;
                 return -1;
             }
-            if (slot.hash == hash && m_units[slot.position - 1] == unit)
+            if (slot.hash == hash && m_table.ownId(slot.position - 1) == unit)
                 return slot.position - 1;
         }
     }
@@ -91,7 +58,7 @@ public:
 private:
     struct Slot {
         quint32 hash = 0;
-        quint32 position = 0; // in `units`, plus one; 0 for an empty slot
+        quint32 position = 0; // in the table, plus one; 0 for an empty slot
     };
 
     void resize(size_t size)
@@ -108,7 +75,7 @@ private:
             }
     }
 
-    const QStringList &m_units;
+    const ReliabilityTable &m_table;
     std::vector<Slot> m_slots; // a power of two, at most half full
     size_t m_mask = 0;
     size_t m_count = 0;
@@ -132,11 +99,8 @@ Result<ReliabilityTable> readReliabilityTable(const QString &path)
     qint64 headerLine = 0;
     // One row per line at most: the table grows once.
     const qsizetype lines = text->count(QLatin1Char('\n')) + 1;
-    LabelTable labels;
-    UnitIndex seen(table.units, lines);
-    table.units.reserve(lines);
-    table.cells.reserve(size_t(lines));
-    table.lines.reserve(size_t(lines));
+    UnitIndex seen(table, lines);
+    std::vector<qint32> cells;
     const auto readRecord = [&](const std::vector<QStringView> &fields, qint64 line) -> Status {
         if (columns == 0) {
             headerLine = line;
@@ -159,6 +123,7 @@ Result<ReliabilityTable> readReliabilityTable(const QString &path)
                 return failAt(ErrorCode::InvalidInput, path, line, 0,
                     tr("reliability needs at least two coders; the header names %n.", nullptr,
                         int(table.coders.size())));
+            table.reserve(size_t(lines));
             return {};
         }
         if (qsizetype(fields.size()) != columns)
@@ -169,35 +134,24 @@ Result<ReliabilityTable> readReliabilityTable(const QString &path)
         const QStringView unit = fields[0].trimmed();
         if (unit.isEmpty())
             return failAt(ErrorCode::InvalidInput, path, line, 1, tr("the unit id is empty."));
-        // The id refers into the file's text, which the table keeps: no string per unit.
-        table.units << QString::fromRawData(unit.data(), unit.size());
-        table.lines.push_back(line);
-        if (const qsizetype first = seen.insertLast(); first >= 0) {
-            const qint64 firstLine = table.lines[size_t(first)];
-            table.units.removeLast();
-            table.lines.pop_back();
-            return failAt(ErrorCode::InvalidInput, path, line, 1,
-                tr("the unit \"%1\" appears twice (first on line %2).").arg(unit).arg(firstLine));
-        }
-        QStringList cells;
-        cells.reserve(columns - 1);
+        cells.clear();
         for (qsizetype c = 1; c < columns; ++c) {
             const QStringView cell = fields[size_t(c)].trimmed();
-            if (cell.isEmpty()) {
-                cells << QString();
-                continue;
-            }
-            cells << labels.intern(cell);
+            cells.push_back(cell.isEmpty() ? ReliabilityTable::kMissing : table.labelIndex(cell));
         }
-        table.cells.push_back(std::move(cells));
+        table.appendUnit(unit, cells, line);
+        if (const qsizetype first = seen.insertLast(); first >= 0)
+            return failAt(ErrorCode::InvalidInput, path, line, 1,
+                tr("the unit \"%1\" appears twice (first on line %2).")
+                    .arg(unit)
+                    .arg(table.unitLine(size_t(first))));
         return {};
     };
-    table.storage = std::move(*text);
-    FOURFOLD_TRY_STATUS(forEachCsvRecord(table.storage, path, readRecord));
+    FOURFOLD_TRY_STATUS(forEachCsvRecord(*text, path, readRecord));
     if (columns == 0)
         return failAt(ErrorCode::InvalidInput, path, 1, 0,
             tr("the file is empty; expected a header row \"unit,<coder>,<coder>,...\"."));
-    if (table.units.isEmpty())
+    if (table.isEmpty())
         return failAt(ErrorCode::InvalidInput, path, headerLine, 0,
             tr("the file has a header but no units."));
     return table;

@@ -310,6 +310,20 @@ SimpleAgreement bennettS(const ContingencyTable &table)
     return r;
 }
 
+SimpleAgreement percentAgreement(const ContingencyTable &table)
+{
+    SimpleAgreement r;
+    const auto s = tableShares(table, r.reason);
+    if (!s)
+        return r;
+    double alike = 0;
+    for (int i = 0; i < table.categories; ++i)
+        alike += s->cells[at(i, i, table.categories)];
+    r.value = alike;
+    r.observedAgreement = alike;
+    return r;
+}
+
 SimpleAgreement percentAgreement(const ReliabilityData &data)
 {
     SimpleAgreement r;

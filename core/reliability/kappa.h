@@ -79,6 +79,9 @@ SimpleAgreement bennettS(const ContingencyTable &table);
 // coder pairs of the share of units the pair coded alike; with two coders, the share of units
 // both coded alike. Undefined when no unit holds two values.
 SimpleAgreement percentAgreement(const ReliabilityData &data);
+// The same for two coders from their table: the share of the units both coded that they coded
+// alike (its diagonal over its total). Undefined for a malformed table or n = 0.
+SimpleAgreement percentAgreement(const ContingencyTable &table);
 
 struct FleissResult {
     std::optional<double> value;

@@ -22,18 +22,7 @@ QString tr(const char *text)
 // Nominal alpha of the columns `columns` of `table` (Krippendorff 2011, §B).
 PairAlpha alphaOf(const ReliabilityTable &table, const std::vector<qsizetype> &columns)
 {
-    ReliabilityTable sub;
-    sub.source = table.source;
-    for (qsizetype c : columns)
-        sub.coders << table.coders[c];
-    sub.units = table.units;
-    sub.lines = table.lines;
-    for (const QStringList &row : table.cells) {
-        QStringList cells;
-        for (qsizetype c : columns)
-            cells << row[c];
-        sub.cells.push_back(cells);
-    }
+    const ReliabilityTable sub = table.columns(columns);
     PairAlpha out;
     out.first = sub.coders.value(0);
     out.second = sub.coders.value(1);
@@ -105,13 +94,15 @@ Result<RunAgreement> runAgreement(
             return std::unexpected(table.error());
         if (out.coders.isEmpty()) {
             out.coders = table->coders;
-            out.units = int(table->units.size());
+            out.units = int(table->unitCount());
         }
         // The run's column: unit ids are "<external id>#<kind letter><1-based index>".
         const qsizetype humans = table->coders.size();
-        table->coders << runName;
-        for (qsizetype u = 0; u < table->units.size(); ++u) {
-            const QString &unitId = table->units[u];
+        const qint32 presentLabel = table->labelIndex(QStringLiteral("present"));
+        const qint32 absentLabel = table->labelIndex(QStringLiteral("absent"));
+        std::vector<qint32> runColumn(table->unitCount());
+        for (size_t u = 0; u < table->unitCount(); ++u) {
+            const QString unitId = table->unitId(u);
             const qsizetype hash = unitId.lastIndexOf(QLatin1Char('#'));
             const ArticleId article = byExternalId.value(unitId.left(hash));
             const qsizetype index = unitId.mid(hash + 2).toLongLong() - 1;
@@ -135,9 +126,9 @@ Result<RunAgreement> runAgreement(
                         std::any_of(it->second.begin(), it->second.end(), [&](const TextRange &r) {
                             return r.overlaps(cached->second[std::size_t(index)]);
                         });
-            table->cells[std::size_t(u)]
-                << (present ? QStringLiteral("present") : QStringLiteral("absent"));
+            runColumn[u] = present ? presentLabel : absentLabel;
         }
+        table->appendColumn(runName, runColumn);
 
         FunctionBand &band = out.functions[std::size_t(f)];
         band.function = f;

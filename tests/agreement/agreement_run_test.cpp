@@ -68,8 +68,8 @@ TEST_CASE("set units keep only the chosen functions and are compared with MASI")
     problemOnly.setFunctions = {FramingFunction::Problem};
     auto restricted = run->analyse(problemOnly, {});
     REQUIRE(restricted);
-    for (const QStringList &row : restricted->table.cells)
-        for (const QString &cell : row)
+    for (size_t u = 0; u < restricted->table.unitCount(); ++u)
+        for (const QString &cell : restricted->table.rowText(u))
             CHECK((
                 cell.isEmpty() || cell == QLatin1String("problem") || cell == QLatin1String("{}")));
     REQUIRE(restricted->report.alpha.value);
@@ -79,7 +79,7 @@ TEST_CASE("set units keep only the chosen functions and are compared with MASI")
     problem.function = FramingFunction::Problem;
     auto single = run->analyse(problem, {});
     REQUIRE(single);
-    CHECK(single->table.units == restricted->table.units);
+    CHECK(single->table.unitIds() == restricted->table.unitIds());
     CHECK(single->report.scale == QLatin1String("nominal"));
 }
 

@@ -117,15 +117,15 @@ TEST_CASE("unitizers leave articles in progress out and list them")
     auto table = unitTable(f.project, *counted, s);
     REQUIRE(table);
     // Only f1's four sentences: f2 counts for nobody.
-    CHECK(table->units.size() == 4);
-    CHECK(table->units.front() == QStringLiteral("f1#s1"));
+    CHECK(table->unitCount() == 4);
+    CHECK(table->unitId(0) == QStringLiteral("f1#s1"));
 
     s.includeUnfinished = true;
     auto taken = unitTable(f.project, s);
     REQUIRE(taken);
-    CHECK(taken->units.size() == 7);
+    CHECK(taken->unitCount() == 7);
     // f2's first sentence: C02 "absent" (a cause span, no problem), C01 missing.
-    CHECK(taken->cells[4] == QStringList {QString(), QStringLiteral("absent")});
+    CHECK(taken->rowText(4) == QStringList {QString(), QStringLiteral("absent")});
 
     // Named coders are columns even with nothing that counts; the continuum needs all of them.
     UnitSelection named;
@@ -232,10 +232,10 @@ TEST_CASE("property: assignments without codings never change a reliability tabl
                             s.function = functions[size_t(fn)];
                         s.includeUnfinished = unfinished;
                         auto t = unitTable(f.project, s);
-                        QString text = t ? t->units.join(QLatin1Char(' ')) : t.error().message;
+                        QString text = t ? t->unitIds().join(QLatin1Char(' ')) : t.error().message;
                         if (t)
-                            for (const QStringList &row : t->cells)
-                                text += QLatin1Char('|') + row.join(QLatin1Char(','));
+                            for (size_t u = 0; u < t->unitCount(); ++u)
+                                text += QLatin1Char('|') + t->rowText(u).join(QLatin1Char(','));
                         out << text;
                     }
             UnitSelection continuum;

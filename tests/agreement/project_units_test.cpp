@@ -56,14 +56,14 @@ TEST_CASE("sentence units: presence of one function, and missing where a coder d
     CHECK(t->coders
         == QStringList {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")});
     // f1 has 4 sentences, f2 has 3 ("bijv." does not end one): 7 units.
-    REQUIRE(t->units.size() == 7);
-    CHECK(t->units[0] == QStringLiteral("f1#s1"));
-    CHECK(t->cells[0]
+    REQUIRE(t->unitCount() == 7);
+    CHECK(t->unitId(0) == QStringLiteral("f1#s1"));
+    CHECK(t->rowText(0)
         == QStringList {QStringLiteral("present"), QStringLiteral("present"), QString()});
-    CHECK(
-        t->cells[1] == QStringList {QStringLiteral("absent"), QStringLiteral("absent"), QString()});
+    CHECK(t->rowText(1)
+        == QStringList {QStringLiteral("absent"), QStringLiteral("absent"), QString()});
     // In f2 only C03 coded: the others are missing, never "absent".
-    CHECK(t->cells[4] == QStringList {QString(), QString(), QStringLiteral("absent")});
+    CHECK(t->rowText(4) == QStringList {QString(), QString(), QStringLiteral("absent")});
 }
 
 TEST_CASE("sentence units with all functions hold the set of functions")
@@ -73,12 +73,12 @@ TEST_CASE("sentence units with all functions hold the set of functions")
     s.unit = UnitKind::Sentence;
     auto t = unitTable(f.project, s);
     REQUIRE(t);
-    CHECK(t->cells[1] == QStringList {QStringLiteral("cause"), QStringLiteral("{}"), QString()});
-    CHECK(t->cells[2]
+    CHECK(t->rowText(1) == QStringList {QStringLiteral("cause"), QStringLiteral("{}"), QString()});
+    CHECK(t->rowText(2)
         == QStringList {QStringLiteral("{}"), QStringLiteral("evaluation|remedy"), QString()});
-    CHECK(
-        t->cells[3] == QStringList {QStringLiteral("{}"), QStringLiteral("evaluation"), QString()});
-    CHECK(t->cells[4] == QStringList {QString(), QString(), QStringLiteral("evaluation")});
+    CHECK(t->rowText(3)
+        == QStringList {QStringLiteral("{}"), QStringLiteral("evaluation"), QString()});
+    CHECK(t->rowText(4) == QStringList {QString(), QString(), QStringLiteral("evaluation")});
 }
 
 TEST_CASE("paragraph and token units; coders can be chosen")
@@ -92,8 +92,8 @@ TEST_CASE("paragraph and token units; coders can be chosen")
     REQUIRE(t);
     CHECK(t->coders == QStringList {QStringLiteral("C02"), QStringLiteral("C01")});
     // f1's two paragraphs (f2 was coded by neither C01 nor C02, so it has no units).
-    REQUIRE(t->units == QStringList {QStringLiteral("f1#p1"), QStringLiteral("f1#p2")});
-    CHECK(t->cells[1] == QStringList {QStringLiteral("present"), QStringLiteral("absent")});
+    REQUIRE(t->unitIds() == QStringList {QStringLiteral("f1#p1"), QStringLiteral("f1#p2")});
+    CHECK(t->rowText(1) == QStringList {QStringLiteral("present"), QStringLiteral("absent")});
 
     s.unit = UnitKind::Token;
     s.function = FramingFunction::Problem;
@@ -101,9 +101,9 @@ TEST_CASE("paragraph and token units; coders can be chosen")
     REQUIRE(tokens);
     // Tokens "The ferry to Brakwater will stop in May ." — C02's span [4,22) covers
     // ferry..Brakwater.
-    CHECK(tokens->cells[0] == QStringList {QStringLiteral("absent"), QStringLiteral("present")});
-    CHECK(tokens->cells[1] == QStringList {QStringLiteral("present"), QStringLiteral("present")});
-    CHECK(tokens->cells[4] == QStringList {QStringLiteral("absent"), QStringLiteral("present")});
+    CHECK(tokens->rowText(0) == QStringList {QStringLiteral("absent"), QStringLiteral("present")});
+    CHECK(tokens->rowText(1) == QStringList {QStringLiteral("present"), QStringLiteral("present")});
+    CHECK(tokens->rowText(4) == QStringList {QStringLiteral("absent"), QStringLiteral("present")});
 }
 
 TEST_CASE("article units carry the answers to an item")
@@ -119,10 +119,10 @@ TEST_CASE("article units carry the answers to an item")
     s.unit = UnitKind::Article;
     auto t = unitTable(f.project, s);
     REQUIRE(t);
-    REQUIRE(t->units == QStringList {QStringLiteral("f1"), QStringLiteral("f2")});
-    CHECK(t->cells[0]
+    REQUIRE(t->unitIds() == QStringList {QStringLiteral("f1"), QStringLiteral("f2")});
+    CHECK(t->rowText(0)
         == QStringList {QStringLiteral("problem"), QStringLiteral("remedy"), QString()});
-    CHECK(t->cells[1] == QStringList {QString(), QString(), QString()});
+    CHECK(t->rowText(1) == QStringList {QString(), QString(), QString()});
 }
 
 TEST_CASE("the continuum holds the articles every coder coded, with merged spans")
@@ -189,11 +189,11 @@ TEST_CASE("span units compare an attribute on passages matched across coders")
     s.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
     auto t = unitTable(f.project, s);
     REQUIRE(t);
-    REQUIRE(t->units
+    REQUIRE(t->unitIds()
         == QStringList {QStringLiteral("f1#a1"), QStringLiteral("f1#a2"), QStringLiteral("f1#a3")});
-    CHECK(t->cells[0] == QStringList {QStringLiteral("negative"), QStringLiteral("neutral")});
-    CHECK(t->cells[1] == QStringList {QStringLiteral("negative"), QString()});
-    CHECK(t->cells[2] == QStringList {QStringLiteral("positive"), QString()});
+    CHECK(t->rowText(0) == QStringList {QStringLiteral("negative"), QStringLiteral("neutral")});
+    CHECK(t->rowText(1) == QStringList {QStringLiteral("negative"), QString()});
+    CHECK(t->rowText(2) == QStringList {QStringLiteral("positive"), QString()});
 
     s.attribute.clear();
     auto refused = unitTable(f.project, s);
@@ -219,10 +219,10 @@ TEST_CASE("the gold standard can join as one more coder")
     REQUIRE(t);
     CHECK(t->coders
         == QStringList {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("gold")});
-    CHECK(t->cells[0]
+    CHECK(t->rowText(0)
         == QStringList {
             QStringLiteral("present"), QStringLiteral("present"), QStringLiteral("present")});
-    CHECK(t->cells[1]
+    CHECK(t->rowText(1)
         == QStringList {
             QStringLiteral("absent"), QStringLiteral("absent"), QStringLiteral("absent")});
 }

@@ -12,11 +12,12 @@ TEST_CASE("a reliability matrix reads with missing cells and quoted values")
     auto t = readReliabilityTable(path);
     REQUIRE(t);
     CHECK(t->coders == QStringList {QStringLiteral("A"), QStringLiteral("B"), QStringLiteral("C")});
-    CHECK(t->units == QStringList {QStringLiteral("u1"), QStringLiteral("u2")});
-    CHECK(t->cells[0] == QStringList {QStringLiteral("x"), QString(), QStringLiteral("y, z")});
-    CHECK(
-        t->cells[1] == QStringList {QStringLiteral("x"), QStringLiteral("x"), QStringLiteral("x")});
-    CHECK(t->lines == std::vector<qint64> {2, 3});
+    CHECK(t->unitIds() == QStringList {QStringLiteral("u1"), QStringLiteral("u2")});
+    CHECK(t->rowText(0) == QStringList {QStringLiteral("x"), QString(), QStringLiteral("y, z")});
+    CHECK(t->rowText(1)
+        == QStringList {QStringLiteral("x"), QStringLiteral("x"), QStringLiteral("x")});
+    CHECK(t->unitLine(0) == 2);
+    CHECK(t->unitLine(1) == 3);
 }
 
 TEST_CASE("malformed matrices are refused with the line and what is wrong")
@@ -48,30 +49,28 @@ TEST_CASE("malformed matrices are refused with the line and what is wrong")
     }
 }
 
-TEST_CASE("cells with the same label share one string and a late repeated unit is found")
+TEST_CASE("cells hold an index per distinct label and a late repeated unit is found")
 {
-    // A string per distinct label, not per cell (the reader interns cell values); the
-    // repeated unit check holds thousands of units without a second copy of their ids.
+    // A label per distinct value, not per cell (the reader interns cell values); the repeated
+    // unit check holds thousands of units without a second copy of their ids.
     QByteArray csv = "unit,A,B,C\n";
     for (int u = 1; u <= 5000; ++u)
         csv += "u" + QByteArray::number(u) + (u % 2 ? ",x,y, x \n" : ",y,,\"x\"\n");
     QTemporaryDir dir;
     auto t = readReliabilityTable(writeFile(dir, QStringLiteral("m.csv"), csv));
     REQUIRE(t);
-    REQUIRE(t->cells.size() == 5000);
-    const QChar *x = t->cells[0][0].constData();
-    const QChar *y = t->cells[0][1].constData();
-    CHECK(x != y);
-    for (const QStringList &row : t->cells)
-        for (const QString &cell : row) {
-            if (cell == QLatin1String("x"))
-                CHECK(cell.constData() == x);
-            else if (cell == QLatin1String("y"))
-                CHECK(cell.constData() == y);
-            else
-                CHECK(cell.isEmpty());
-        }
-    CHECK(t->cells[1] == QStringList {QStringLiteral("y"), QString(), QStringLiteral("x")});
+    REQUIRE(t->unitCount() == 5000);
+    CHECK(t->labels() == QStringList {QStringLiteral("x"), QStringLiteral("y")});
+    for (size_t u = 0; u < t->unitCount(); ++u) {
+        const std::vector<qint32> expected = u % 2 == 0
+            ? std::vector<qint32> {0, 1, 0}
+            : std::vector<qint32> {1, ReliabilityTable::kMissing, 0};
+        const auto row = t->row(u);
+        CHECK(std::vector<qint32>(row.begin(), row.end()) == expected);
+    }
+    CHECK(t->rowText(1) == QStringList {QStringLiteral("y"), QString(), QStringLiteral("x")});
+    CHECK(t->unitId(4999) == QStringLiteral("u5000"));
+    CHECK(t->unitLine(4999) == 5001);
 
     csv += "u1234,x,x,x\n";
     auto repeated = readReliabilityTable(writeFile(dir, QStringLiteral("r.csv"), csv));

@@ -14,11 +14,8 @@ ReliabilityTable table(std::vector<QStringList> cells)
     ReliabilityTable t;
     t.source = QStringLiteral("m.csv");
     t.coders = {QStringLiteral("A"), QStringLiteral("B")};
-    for (size_t i = 0; i < cells.size(); ++i) {
-        t.units << QStringLiteral("u%1").arg(i + 1);
-        t.lines.push_back(qint64(i) + 2);
-    }
-    t.cells = std::move(cells);
+    for (size_t i = 0; i < cells.size(); ++i)
+        t.appendUnit(QStringLiteral("u%1").arg(i + 1), cells[i], qint64(i) + 2);
     return t;
 }
 

@@ -644,6 +644,10 @@ TEST_CASE("Light's kappa with two coders equals Cohen's kappa")
                 alike += i == j ? table.counts[cell(i, j, 4)] : 0;
             }
         CHECK_THAT(*agreement.value, WithinAbs(alike / both, 1e-15));
+        // From the pair's table it is the same share.
+        const SimpleAgreement fromTable = percentAgreement(table);
+        REQUIRE(fromTable.value);
+        CHECK_THAT(*fromTable.value, WithinAbs(*agreement.value, 1e-15));
         // Fleiss' kappa on the complete units is Scott's pi of the same units (Fleiss 1971).
         if (pi.value)
             CHECK_THAT(*fleiss.value, WithinAbs(*pi.value, 1e-12));
