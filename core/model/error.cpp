@@ -9,21 +9,42 @@ QString Error::toString() const
     return QStringLiteral("%1 (%2)").arg(message, cause);
 }
 
-std::unexpected<Error> failAt(
-    ErrorCode code, const QString &file, qint64 line, qint64 column, const QString &what)
+namespace {
+
+// failAt's prefix: FILE[:LINE[:COLUMN]]: the sentence follows.
+QString placePrefix(const QString &file, qint64 line, qint64 column)
 {
     QString where = file;
     if (line > 0)
         where += QStringLiteral(":%1").arg(line);
     if (line > 0 && column > 0)
         where += QStringLiteral(":%1").arg(column);
+    return where + QStringLiteral(": ");
+}
+
+} // namespace
+
+std::unexpected<Error> failAt(
+    ErrorCode code, const QString &file, qint64 line, qint64 column, const QString &what)
+{
     Error e;
     e.code = code;
-    e.message = QStringLiteral("%1: %2").arg(where, what);
+    e.message = placePrefix(file, line, column) + what;
     e.file = file;
     e.line = line;
     e.column = column;
     return std::unexpected<Error>(std::move(e));
+}
+
+Error movedDown(Error error, qint64 lines)
+{
+    const QString prefix = placePrefix(error.file, error.line, error.column);
+    if (error.line <= 0 || !error.message.startsWith(prefix))
+        return error;
+    error.line += lines;
+    error.message = placePrefix(error.file, error.line, error.column)
+        + error.message.sliced(prefix.size());
+    return error;
 }
 
 QString errorCodeName(ErrorCode code)

@@ -48,6 +48,12 @@ using Status = std::expected<void, Error>;
 std::unexpected<Error> failAt(
     ErrorCode code, const QString &file, qint64 line, qint64 column, const QString &what);
 
+// The same failure `lines` lines further down: for a reader that hands a piece of a file that
+// begins on line `lines` + 1 to a function counting the piece's lines from 1. An error made by
+// failAt with a line gets the new line in its field and its message; any other is returned as
+// it is.
+Error movedDown(Error error, qint64 lines);
+
 // Shorthand for `return fail(ErrorCode::X, tr("..."))` inside functions returning Result<T>.
 inline std::unexpected<Error> fail(ErrorCode code, QString message, QString cause = {})
 {

@@ -2,6 +2,7 @@
 
 #include <QCoreApplication>
 #include <QCryptographicHash>
+#include <QStringDecoder>
 
 #include <unicode/normalizer2.h>
 #include <unicode/unistr.h>
@@ -109,12 +110,16 @@ const char16_t *utf16Data(const QString &text)
 
 } // namespace
 
-Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceName)
+namespace {
+
+Result<QString> decodeStrict(
+    QByteArrayView bytes, const QString &sourceName, qint64 firstLine, bool dropBom)
 {
-    const auto *p = reinterpret_cast<const unsigned char *>(bytes.constData());
+    const auto *p = reinterpret_cast<const unsigned char *>(bytes.data());
     const qsizetype n = bytes.size();
-    const qsizetype bom = (n >= 3 && p[0] == 0xEF && p[1] == 0xBB && p[2] == 0xBF) ? 3 : 0;
-    qint64 line = 1;
+    const qsizetype bom =
+        (dropBom && n >= 3 && p[0] == 0xEF && p[1] == 0xBB && p[2] == 0xBF) ? 3 : 0;
+    qint64 line = firstLine;
     qsizetype lineStart = bom;
     for (qsizetype i = bom; i < n;) {
         const unsigned char b = p[i];
@@ -179,7 +184,24 @@ Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceN
         }
         i += length;
     }
-    return QString::fromUtf8(bytes.constData() + bom, n - bom);
+    if (dropBom)
+        return QString::fromUtf8(bytes.data() + bom, n - bom);
+    // QString::fromUtf8 would drop a leading BOM; in a piece from inside a file it is text.
+    QStringDecoder decoder(QStringConverter::Utf8,
+        QStringConverter::Flag::Stateless | QStringConverter::Flag::ConvertInitialBom);
+    return decoder.decode(bytes);
+}
+
+} // namespace
+
+Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceName)
+{
+    return decodeStrict(bytes, sourceName, 1, true);
+}
+
+Result<QString> decodeUtf8Strict(QByteArrayView bytes, const QString &sourceName, qint64 firstLine)
+{
+    return decodeStrict(bytes, sourceName, firstLine, false);
 }
 
 QString canonicalText(const QString &text)

@@ -5,6 +5,7 @@
 #include "core/model/error.h"
 
 #include <QByteArray>
+#include <QByteArrayView>
 #include <QString>
 
 namespace fourfold {
@@ -18,6 +19,10 @@ namespace fourfold {
 // accepted and dropped. NUL bytes are refused as well (they mark a binary file). Line ends are kept
 // as they are: see canonicalText().
 Result<QString> decodeUtf8Strict(const QByteArray &bytes, const QString &sourceName);
+// The same check for a piece of a longer input that begins at the start of line `firstLine`,
+// for readers that decode a file a line or a record at a time: errors count lines from
+// `firstLine`, and a leading BOM is kept (only the first bytes of the whole input can be one).
+Result<QString> decodeUtf8Strict(QByteArrayView bytes, const QString &sourceName, qint64 firstLine);
 
 // Returns the canonical form of `text`: leading BOMs (U+FEFF) removed, CRLF and lone CR turned
 // into LF, Unicode NFC (UAX #15). Never fails; unpaired surrogates are replaced by U+FFFD.

@@ -75,6 +75,24 @@ TEST_CASE("decodeUtf8Strict drops a leading BOM and keeps everything else")
     CHECK(decodeUtf8Strict(bytes("caf\xC3\xA9"sv), {}).value() == QStringLiteral("café"));
 }
 
+TEST_CASE("decodeUtf8Strict on a piece of a file counts lines from where the piece begins")
+{
+    // The piece "ab\r\ncd\xFF" taken from line 41 of a file: the bad byte is on line 42,
+    // column 3, as the whole file would report it.
+    const Result<QString> bad =
+        decodeUtf8Strict(QByteArrayView("ab\r\ncd\xFF"), QStringLiteral("big.csv"), 41);
+    REQUIRE_FALSE(bad);
+    CHECK(bad.error().line == 42);
+    CHECK(bad.error().column == 3);
+    CHECK(bad.error().message.startsWith(QStringLiteral("big.csv:42:3: invalid UTF-8")));
+    // A piece from inside a file has no BOM: U+FEFF at its start is text.
+    CHECK(decodeUtf8Strict(QByteArrayView("\xEF\xBB\xBF"
+                                          "a"),
+              QStringLiteral("x"), 7)
+              .value()
+        == QStringLiteral("\uFEFFa"));
+}
+
 TEST_CASE("decodeUtf8Strict names the line, column and fault of the first bad byte")
 {
     // Ill-formed sequences from Unicode 15.0 §3.9 (Table 3-7, and the examples of maximal
