@@ -1,83 +1,91 @@
 #include "core/io/article_reader.h"
 
+#include "core/io/chunked_input.h"
 #include "core/io/csv_reader.h"
 #include "core/io/html_reader.h"
-#include "core/io/input_file.h"
 #include "core/io/jsonl_reader.h"
 #include "core/io/text_reader.h"
 
 #include <QCoreApplication>
 #include <QDir>
-#include <QFile>
 #include <QFileInfo>
 #include <QRegularExpression>
 
 #include <algorithm>
+#include <optional>
 
 namespace fourfold {
 
 namespace {
 
-Result<QByteArray> readFileBytes(const QString &path)
+QString tr(const char *text)
 {
-    const QFileInfo info(path);
-    if (!info.exists()) {
-        return failAt(ErrorCode::Io, path, 0, 0,
-            QCoreApplication::translate("ArticleReader", "the file does not exist"));
-    }
-    FOURFOLD_TRY_STATUS(requireRegularFile(path));
-    if (info.size() > maxImportFileSize) {
-        return failAt(ErrorCode::InvalidInput, path, 0, 0,
-            QCoreApplication::translate("ArticleReader",
-                "the file is %1 MiB long; a file may be at "
-                "most %2 MiB")
-                .arg(info.size() >> 20)
-                .arg(maxImportFileSize >> 20));
-    }
-    QFile file(path);
-    if (!file.open(QIODevice::ReadOnly)) {
-        auto error = failAt(ErrorCode::Io, path, 0, 0,
-            QCoreApplication::translate("ArticleReader", "the file cannot be opened for reading"));
-        error.error().cause = file.errorString();
-        return error;
-    }
-    QByteArray bytes = file.readAll();
-    if (file.error() != QFileDevice::NoError) {
-        auto error = failAt(ErrorCode::Io, path, 0, 0,
-            QCoreApplication::translate("ArticleReader", "the file cannot be read"));
-        error.error().cause = file.errorString();
-        return error;
-    }
-    return bytes;
+    return QCoreApplication::translate("ArticleReader", text);
 }
 
 QString noArticles()
 {
-    return QCoreApplication::translate("ArticleReader", "the file contains no articles");
+    return tr("the file contains no articles");
 }
 
-// The checks every format shares, made once the file has been parsed: at least one article,
-// non-blank ids and texts, unique ids; then the defaults for language and source file.
-Status checkArticles(
-    std::vector<ImportedArticle> &articles, const QString &file, const ImportOptions &options)
+// The checks every format shares, one article at a time as the reader hands them over: a
+// non-blank id without control characters, a non-blank text, ids unique within the file; then
+// the defaults for language and source file. A failed check is kept rather than returned: the
+// reader goes on to the end of the file, handing nothing on any more, so that a syntax error
+// further on is the one reported (syntax errors win over these checks).
+class ArticleChecks
 {
-    if (articles.empty())
-        return failAt(ErrorCode::InvalidInput, file, 0, 0, noArticles());
-    QHash<QString, qint64> firstLine;
-    for (ImportedArticle &article : articles) {
-        if (QStringView(article.externalId).trimmed().isEmpty()) {
-            return failAt(ErrorCode::InvalidInput, file, article.sourceLine, 0,
-                QCoreApplication::translate("ArticleReader", "the article has no id"));
+public:
+    ArticleChecks(const QString &file, const ImportOptions &options, ImportedArticleSink next)
+        : m_file(file)
+        , m_options(options)
+        , m_next(std::move(next))
+    { }
+
+    Status take(ImportedArticle &&article)
+    {
+        ++m_count;
+        if (m_failed)
+            return {};
+        if (auto failed = check(article)) {
+            m_failed = std::move(failed);
+            m_firstLine.clear(); // not needed any more
+            return {};
         }
+        m_firstLine.insert(article.externalId, article.sourceLine);
+        if (article.language.isEmpty())
+            article.language = m_options.language;
+        article.sourceFile = m_file;
+        return m_next(std::move(article));
+    }
+
+    // Once the reader has read the whole file without an error: the first failed check, or
+    // "no articles" if none came.
+    Status finish() const
+    {
+        if (m_failed)
+            return std::unexpected(*m_failed);
+        if (m_count == 0)
+            return failAt(ErrorCode::InvalidInput, m_file, 0, 0, noArticles());
+        return {};
+    }
+
+private:
+    std::optional<Error> check(const ImportedArticle &article) const
+    {
+        const auto failed = [&](ErrorCode code, const QString &what) {
+            return failAt(code, m_file, article.sourceLine, 0, what).error();
+        };
+        if (QStringView(article.externalId).trimmed().isEmpty())
+            return failed(ErrorCode::InvalidInput, tr("the article has no id"));
         // A control character (a line break, a tab, NUL, ...) in an id would break every
         // line-based export that names the article (IOB2 comments, CSV, terminals).
         if (const auto control = std::ranges::find_if(
                 article.externalId, [](QChar c) { return c.category() == QChar::Other_Control; });
             control != article.externalId.cend()) {
-            return failAt(ErrorCode::InvalidInput, file, article.sourceLine, 0,
-                QCoreApplication::translate("ArticleReader",
-                    "the id \"%1\" holds a control character (U+%2); ids are one line of "
-                    "printable text")
+            return failed(ErrorCode::InvalidInput,
+                tr("the id \"%1\" holds a control character (U+%2); ids are one line of "
+                   "printable text")
                     .arg(QString(article.externalId)
                              .replace(QRegularExpression(QStringLiteral("\\p{Cc}")),
                                  QStringLiteral("\uFFFD")))
@@ -86,108 +94,124 @@ Status checkArticles(
                              .toUpper()));
         }
         if (QStringView(article.text).trimmed().isEmpty()) {
-            return failAt(ErrorCode::InvalidInput, file, article.sourceLine, 0,
-                QCoreApplication::translate("ArticleReader", "the article \"%1\" has no text")
-                    .arg(article.externalId));
+            return failed(ErrorCode::InvalidInput,
+                tr("the article \"%1\" has no text").arg(article.externalId));
         }
-        const auto seen = firstLine.constFind(article.externalId);
-        if (seen != firstLine.cend()) {
-            return failAt(ErrorCode::Duplicate, file, article.sourceLine, 0,
-                QCoreApplication::translate("ArticleReader",
-                    "duplicate id \"%1\" (first seen on line "
-                    "%2)")
+        const auto seen = m_firstLine.constFind(article.externalId);
+        if (seen != m_firstLine.cend()) {
+            return failed(ErrorCode::Duplicate,
+                tr("duplicate id \"%1\" (first seen on line %2)")
                     .arg(article.externalId)
                     .arg(*seen));
         }
-        firstLine.insert(article.externalId, article.sourceLine);
-        if (article.language.isEmpty())
-            article.language = options.language;
-        article.sourceFile = file;
+        return std::nullopt;
     }
-    return {};
-}
 
-Result<std::vector<ImportedArticle>> readFile(
-    const QString &path, ImportFormat format, const ImportOptions &options)
+    QString m_file;
+    const ImportOptions &m_options;
+    ImportedArticleSink m_next;
+    QHash<QString, qint64> m_firstLine; // the ids so far and where each was seen
+    std::optional<Error> m_failed;
+    qint64 m_count = 0;
+};
+
+// Reads one opened file of `format`, handing each article that passes the checks to `visit`
+// with the bytes read so far: `before` plus this file's position, of `total`.
+Status readOpenFile(ChunkedInput &input, ImportFormat format, const ImportOptions &options,
+    const ArticleVisit &visit, qint64 before, qint64 total)
 {
-    Result<QByteArray> bytes = readFileBytes(path);
-    if (!bytes)
-        return std::unexpected(bytes.error());
-    if (bytes->isEmpty()) {
+    const QString &path = input.path();
+    const bool whole = format == ImportFormat::Text || format == ImportFormat::Html;
+    if (whole && input.size() > maxImportFileSize) {
         return failAt(ErrorCode::InvalidInput, path, 0, 0,
-            QCoreApplication::translate(
-                "ArticleReader", "the file is empty: it contains no articles"));
+            tr("the file is %1 MiB long; a file may be at most %2 MiB")
+                .arg(input.size() >> 20)
+                .arg(maxImportFileSize >> 20));
     }
+    Result<bool> any = input.readMore();
+    if (!any)
+        return std::unexpected(any.error());
+    if (!*any)
+        return failAt(
+            ErrorCode::InvalidInput, path, 0, 0, tr("the file is empty: it contains no articles"));
 
-    std::vector<ImportedArticle> articles;
+    ArticleChecks checks(path, options, [&](ImportedArticle &&article) {
+        return visit(std::move(article), ReadProgress {before + input.position(), total});
+    });
+    const ImportedArticleSink take = [&](ImportedArticle &&article) {
+        return checks.take(std::move(article));
+    };
     switch (format) {
     case ImportFormat::Text:
     case ImportFormat::Html: {
+        Result<QByteArray> bytes = input.readAll();
+        if (!bytes)
+            return std::unexpected(bytes.error());
         Result<ImportedArticle> article = format == ImportFormat::Text
             ? readTextArticle(*bytes, path)
             : readHtmlArticle(*bytes, path);
         if (!article)
             return std::unexpected(article.error());
-        articles.push_back(std::move(*article));
+        FOURFOLD_TRY_STATUS(take(std::move(*article)));
         break;
     }
-    case ImportFormat::JsonLines: {
-        Result<std::vector<ImportedArticle>> read = readJsonLinesArticles(*bytes, path);
-        if (!read)
-            return std::unexpected(read.error());
-        articles = std::move(*read);
+    case ImportFormat::JsonLines:
+        FOURFOLD_TRY_STATUS(readJsonLinesArticles(input, take));
+        break;
+    case ImportFormat::Csv:
+        FOURFOLD_TRY_STATUS(readCsvArticles(input, options.csvColumns, take));
         break;
     }
-    case ImportFormat::Csv: {
-        Result<std::vector<ImportedArticle>> read =
-            readCsvArticles(*bytes, path, options.csvColumns);
-        if (!read)
-            return std::unexpected(read.error());
-        articles = std::move(*read);
-        break;
-    }
-    }
-    if (Status checked = checkArticles(articles, path, options); !checked)
-        return std::unexpected(checked.error());
-    return articles;
+    return checks.finish();
 }
 
-Result<std::vector<ImportedArticle>> readTextFolder(
-    const QString &path, const ImportOptions &options)
+Status readFile(const QString &path, ImportFormat format, const ImportOptions &options,
+    const ArticleVisit &visit)
+{
+    Result<ChunkedInput> input = ChunkedInput::open(path, options.readChunkSize);
+    if (!input)
+        return std::unexpected(input.error());
+    return readOpenFile(*input, format, options, visit, 0, input->size());
+}
+
+Status readTextFolder(const QString &path, const ImportOptions &options, const ArticleVisit &visit)
 {
     QFileInfoList entries = QDir(path).entryInfoList(QDir::Files);
     entries.removeIf([](const QFileInfo &entry) {
         return importFormatFromPath(entry.fileName()) != ImportFormat::Text;
     });
-    if (entries.isEmpty()) {
-        return failAt(ErrorCode::InvalidInput, path, 0, 0,
-            QCoreApplication::translate("ArticleReader", "the folder contains no .txt files"));
-    }
+    if (entries.isEmpty())
+        return failAt(ErrorCode::InvalidInput, path, 0, 0, tr("the folder contains no .txt files"));
     // Code-unit order of the names: the same on every system and locale.
     std::ranges::sort(entries,
         [](const QFileInfo &a, const QFileInfo &b) { return a.fileName() < b.fileName(); });
+    qint64 total = 0;
+    for (const QFileInfo &entry : entries)
+        total += entry.size();
 
-    std::vector<ImportedArticle> articles;
     QHash<QString, QString> firstFile;
+    qint64 before = 0;
     for (const QFileInfo &entry : entries) {
         const QString file = QDir(path).filePath(entry.fileName());
-        Result<std::vector<ImportedArticle>> read = readFile(file, ImportFormat::Text, options);
-        if (!read)
-            return std::unexpected(read.error());
-        for (ImportedArticle &article : *read) {
-            const auto seen = firstFile.constFind(article.externalId);
-            if (seen != firstFile.cend()) {
-                return failAt(ErrorCode::Duplicate, file, 0, 0,
-                    QCoreApplication::translate("ArticleReader",
-                        "duplicate id \"%1\" (first seen in "
-                        "%2)")
-                        .arg(article.externalId, *seen));
-            }
-            firstFile.insert(article.externalId, file);
-            articles.push_back(std::move(article));
-        }
+        Result<ChunkedInput> input = ChunkedInput::open(file, options.readChunkSize);
+        if (!input)
+            return std::unexpected(input.error());
+        FOURFOLD_TRY_STATUS(readOpenFile(
+            *input, ImportFormat::Text, options,
+            [&](ImportedArticle &&article, ReadProgress progress) -> Status {
+                const auto seen = firstFile.constFind(article.externalId);
+                if (seen != firstFile.cend()) {
+                    return failAt(ErrorCode::Duplicate, file, 0, 0,
+                        tr("duplicate id \"%1\" (first seen in %2)")
+                            .arg(article.externalId, *seen));
+                }
+                firstFile.insert(article.externalId, file);
+                return visit(std::move(article), progress);
+            },
+            before, total));
+        before += input->size();
     }
-    return articles;
+    return {};
 }
 
 } // namespace
@@ -229,32 +253,36 @@ std::optional<ImportFormat> importFormatFromPath(const QString &path)
     return importFormatFromKey(suffix);
 }
 
-Result<std::vector<ImportedArticle>> readArticles(const QString &path, const ImportOptions &options)
+Status forEachArticle(const QString &path, const ImportOptions &options, const ArticleVisit &visit)
 {
     const QFileInfo info(path);
     if (info.isDir()) {
         if (options.format && *options.format != ImportFormat::Text) {
             return failAt(ErrorCode::Unsupported, path, 0, 0,
-                QCoreApplication::translate("ArticleReader",
-                    "a folder can only be read as plain text "
-                    "(its .txt files)"));
+                tr("a folder can only be read as plain text (its .txt files)"));
         }
-        return readTextFolder(path, options);
+        return readTextFolder(path, options, visit);
     }
     const std::optional<ImportFormat> format =
         options.format ? options.format : importFormatFromPath(path);
     if (!format) {
-        if (!info.exists()) {
-            return failAt(ErrorCode::Io, path, 0, 0,
-                QCoreApplication::translate("ArticleReader", "the file does not exist"));
-        }
+        if (!info.exists())
+            return failAt(ErrorCode::Io, path, 0, 0, tr("the file does not exist"));
         return failAt(ErrorCode::Unsupported, path, 0, 0,
-            QCoreApplication::translate("ArticleReader",
-                "the format cannot be told from the file "
-                "name; name the file .txt, .html, .jsonl or "
-                ".csv, or choose the format"));
+            tr("the format cannot be told from the file name; name the file .txt, .html, .jsonl "
+               "or .csv, or choose the format"));
     }
-    return readFile(path, *format, options);
+    return readFile(path, *format, options, visit);
+}
+
+Result<std::vector<ImportedArticle>> readArticles(const QString &path, const ImportOptions &options)
+{
+    std::vector<ImportedArticle> articles;
+    FOURFOLD_TRY_STATUS(forEachArticle(path, options, [&](ImportedArticle &&article, ReadProgress) {
+        articles.push_back(std::move(article));
+        return Status {};
+    }));
+    return articles;
 }
 
 } // namespace fourfold

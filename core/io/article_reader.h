@@ -6,10 +6,18 @@
 // Common rules (every format)
 // - Input must be UTF-8; a leading BOM is dropped. Invalid UTF-8 and NUL bytes (binary files)
 //   are refused with the line and column of the first bad byte (decodeUtf8Strict).
-// - A file may be at most maxImportFileSize bytes; larger files are refused before reading.
+// - Plain text and HTML files are read whole and may be at most maxImportFileSize bytes; larger
+//   ones are refused before reading. JSON Lines and CSV files are read a chunk at a time
+//   (ImportOptions::readChunkSize) and hold one line or record at a time, so their size has no
+//   limit; a JSON line may be at most maxJsonLineSize bytes and a CSV record maxCsvRecordSize.
+//   Problems are found in file order: the first line (JSON Lines) or record (CSV) with a
+//   syntax problem is the one reported; within it, invalid UTF-8 comes first.
 // - Every article needs a non-blank id without control characters (one line of printable text)
-//   and a non-blank text; ids are unique within a file (and within a folder of text files). Titles may be empty. Syntax and type errors are reported
-//   before these checks, so the first syntax error wins over an earlier duplicate id.
+//   and a non-blank text; ids are unique within a file (and within a folder of text files); a
+//   repeated id is reported with the line of its first use (only the ids and their lines are
+//   kept, not the articles). Titles may be empty. Syntax and type errors are reported before
+//   these checks, so the first syntax error wins over an earlier duplicate id: after a failed
+//   check the rest of the file is still read for one.
 // - An empty file, or one without a single article, is an error ("contains no articles").
 // - ImportOptions::language fills in records that name no language.
 // - Error codes: InvalidInput for malformed content, Duplicate for a repeated id, Io for a file
@@ -60,14 +68,18 @@
 // columns: id, title, text; optional: outlet, published, language; every other column goes
 // into meta as a string, keyed by its header name. Line numbers are physical lines of the
 // file: a record that spans lines is reported at its first line; an unterminated quoted field
-// is reported where its opening quote is.
+// is reported where its opening quote is. A record, with the line breaks inside its quoted
+// fields, may be at most maxCsvRecordSize bytes of UTF-8; a quoted field left open that runs
+// past the limit is reported where its quote opens.
 
+#include "core/io/chunked_input.h"
 #include "core/io/imported_article.h"
 #include "core/model/error.h"
 
 #include <QHash>
 #include <QString>
 
+#include <functional>
 #include <optional>
 #include <vector>
 
@@ -75,10 +87,12 @@ namespace fourfold {
 
 enum class ImportFormat { Text, Html, JsonLines, Csv };
 
-// The largest file any reader accepts, in bytes (1 GiB).
+// The largest plain text or HTML file (read whole), in bytes (1 GiB).
 inline constexpr qint64 maxImportFileSize = qint64(1) << 30;
 // The longest line of a JSON Lines file, in bytes of UTF-8 without the line break (64 MiB).
 inline constexpr qint64 maxJsonLineSize = qint64(64) << 20;
+// The longest record of a CSV file, in bytes of UTF-8 with its line breaks (64 MiB).
+inline constexpr qint64 maxCsvRecordSize = qint64(64) << 20;
 // The longest first line of a text file that can be its title, in UTF-16 code units.
 inline constexpr qsizetype maxTextTitleLength = 200;
 
@@ -102,15 +116,34 @@ struct ImportOptions {
     // A mapped column must exist in the header; a key that is not one of these field names
     // is an ErrorCode::InvalidArgument error.
     QHash<QString, QString> csvColumns;
+    // How many bytes a JSON Lines or CSV file is read in at a time (tests make it small).
+    qsizetype readChunkSize = defaultReadChunkSize;
 };
 
-// Reads every article of `path`: a file, or for plain text a folder of *.txt files (sorted by
-// name, not recursive). Returns the articles in file order, or the first error (nothing is
-// returned for a file with any error; a folder fails as a whole). Duplicate ids inside one
-// file are an error (ErrorCode::Duplicate, naming both lines). An empty file is an error.
-// A missing or unreadable path is ErrorCode::Io; a file whose format is neither forced nor
-// known from its suffix, or a folder with a forced format other than Text, is
-// ErrorCode::Unsupported. The rules of each format are described at the top of this file.
+// How far a reading has come, for a progress bar: the bytes of input read up to the end of the
+// article just handed over, of all there are (a folder: the sum of its .txt files).
+struct ReadProgress {
+    qint64 bytesRead = 0;
+    qint64 totalBytes = 0;
+};
+// Takes one article that has passed the checks; a failure stops the reading and is returned.
+using ArticleVisit = std::function<Status(ImportedArticle &&article, ReadProgress progress)>;
+
+// Reads the articles of `path`, a file or for plain text a folder of *.txt files (sorted by
+// name, not recursive), handing each to `visit` in file order as soon as it is read and has
+// passed the checks; a JSON Lines or CSV file holds one article at a time. The rules of each
+// format are described at the top of this file. Returns the first error: then `visit` may
+// already have taken articles before it, which a caller that must be all-or-nothing undoes (as
+// Project::importFile does, in one transaction); a failure of `visit` stops the reading at once
+// and is returned as it is. Duplicate ids inside one file are an error (ErrorCode::Duplicate,
+// naming both lines). An empty file is an error. A missing or unreadable path is
+// ErrorCode::Io; a file whose format is neither forced nor known from its suffix, or a folder
+// with a forced format other than Text, is ErrorCode::Unsupported.
+Status forEachArticle(const QString &path, const ImportOptions &options, const ArticleVisit &visit);
+
+// The same, collecting every article: returns them in file order, or the first error (nothing
+// is returned for a file with any error; a folder fails as a whole). Holds the whole file's
+// articles; Project::importFile uses forEachArticle instead.
 Result<std::vector<ImportedArticle>> readArticles(
     const QString &path, const ImportOptions &options);
 

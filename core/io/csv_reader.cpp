@@ -1,13 +1,16 @@
 #include "core/io/csv_reader.h"
 
-#include "core/text/canonical_text.h"
+#include "core/io/chunked_input.h"
+#include "core/io/csv_record_stream.h"
 
 #include <QCoreApplication>
 #include <QJsonObject>
 #include <QSet>
+#include <QStringList>
 
 #include <algorithm>
 #include <array>
+#include <optional>
 
 namespace fourfold {
 
@@ -205,23 +208,87 @@ Status forEachCsvRecord(QStringView text, const QString &file, const CsvRecordSi
     return {};
 }
 
-Result<std::vector<CsvRecord>> parseCsvRecords(const QString &text, const QString &file)
+namespace {
+
+// The header of a CSV file of articles: which column holds which field, and the columns that go
+// into meta.
+struct CsvHeader {
+    QStringList names; // trimmed
+    std::array<qsizetype, fieldColumns.size()> index {}; // per field; -1 = no such column
+    std::vector<qsizetype> metaColumns;
+};
+
+Result<CsvHeader> readHeader(const std::vector<QStringView> &fields, qint64 line,
+    const QString &file, const QHash<QString, QString> &columns)
 {
-    std::vector<CsvRecord> records;
-    FOURFOLD_TRY_STATUS(
-        forEachCsvRecord(text, file, [&](const std::vector<QStringView> &fields, qint64 line) {
-            CsvRecord record {{}, line};
-            record.fields.reserve(qsizetype(fields.size()));
-            for (QStringView field : fields)
-                record.fields.append(field.toString());
-            records.push_back(std::move(record));
-            return Status {};
-        }));
-    return records;
+    CsvHeader header;
+    for (QStringView name : fields)
+        header.names.append(name.trimmed().toString());
+    const QStringList &names = header.names;
+    for (qsizetype c = 0; c < names.size(); ++c) {
+        if (names.at(c).isEmpty()) {
+            return failAt(ErrorCode::InvalidInput, file, line, 0,
+                QCoreApplication::translate("ArticleReader", "column %1 of the header has no name")
+                    .arg(c + 1));
+        }
+        const qsizetype first = names.indexOf(names.at(c));
+        if (first != c) {
+            return failAt(ErrorCode::InvalidInput, file, line, 0,
+                QCoreApplication::translate("ArticleReader",
+                    "the header names column \"%1\" twice (columns "
+                    "%2 and %3)")
+                    .arg(names.at(c))
+                    .arg(first + 1)
+                    .arg(c + 1));
+        }
+    }
+
+    QSet<qsizetype> used;
+    for (std::size_t f = 0; f < fieldColumns.size(); ++f) {
+        const QString fieldName = QString::fromLatin1(fieldColumns[f].field);
+        const bool mapped = columns.contains(fieldName);
+        const QString columnName = columns.value(fieldName, fieldName);
+        header.index[f] = names.indexOf(columnName);
+        if (header.index[f] >= 0) {
+            used.insert(header.index[f]);
+            continue;
+        }
+        if (!fieldColumns[f].required && !mapped)
+            continue;
+        QString sentence = mapped ? QCoreApplication::translate("ArticleReader",
+                               "the header has no column \"%1\" (the column "
+                               "for the field \"%2\"); it has %3")
+                                        .arg(columnName, fieldName, quotedList(names))
+                                  : QCoreApplication::translate("ArticleReader",
+                                      "the header has no column \"%1\", which is "
+                                      "required; it has %2")
+                                        .arg(columnName, quotedList(names));
+        if (names.size() == 1) {
+            for (const QChar separator : {u';', u'\t', u'|'}) {
+                if (names.front().contains(separator)) {
+                    sentence += QLatin1Char(' ')
+                        + QCoreApplication::translate("ArticleReader",
+                            "The header seems to be separated by "
+                            "\"%1\"; only commas separate fields "
+                            "(RFC 4180).")
+                              .arg(separator == u'\t' ? QStringLiteral("\\t") : QString(separator));
+                    break;
+                }
+            }
+        }
+        return failAt(ErrorCode::InvalidInput, file, line, 0, sentence);
+    }
+    for (qsizetype c = 0; c < names.size(); ++c) {
+        if (!used.contains(c))
+            header.metaColumns.push_back(c);
+    }
+    return header;
 }
 
-Result<std::vector<ImportedArticle>> readCsvArticles(
-    const QByteArray &bytes, const QString &file, const QHash<QString, QString> &columns)
+} // namespace
+
+Status readCsvArticles(
+    ChunkedInput &input, const QHash<QString, QString> &columns, const ImportedArticleSink &sink)
 {
     for (auto it = columns.cbegin(); it != columns.cend(); ++it) {
         const bool known = std::ranges::any_of(fieldColumns,
@@ -235,106 +302,40 @@ Result<std::vector<ImportedArticle>> readCsvArticles(
         }
     }
 
-    Result<QString> text = decodeUtf8Strict(bytes, file);
-    if (!text)
-        return std::unexpected(text.error());
-    Result<std::vector<CsvRecord>> parsed = parseCsvRecords(*text, file);
-    if (!parsed)
-        return std::unexpected(parsed.error());
-    const std::vector<CsvRecord> &records = *parsed;
-    if (records.empty())
-        return std::vector<ImportedArticle> {};
-
-    const CsvRecord &headerRecord = records.front();
-    QStringList header;
-    for (const QString &name : headerRecord.fields)
-        header.append(name.trimmed());
-    for (qsizetype c = 0; c < header.size(); ++c) {
-        if (header.at(c).isEmpty()) {
-            return failAt(ErrorCode::InvalidInput, file, headerRecord.line, 0,
-                QCoreApplication::translate("ArticleReader", "column %1 of the header has no name")
-                    .arg(c + 1));
-        }
-        const qsizetype first = header.indexOf(header.at(c));
-        if (first != c) {
-            return failAt(ErrorCode::InvalidInput, file, headerRecord.line, 0,
-                QCoreApplication::translate("ArticleReader",
-                    "the header names column \"%1\" twice (columns "
-                    "%2 and %3)")
-                    .arg(header.at(c))
-                    .arg(first + 1)
-                    .arg(c + 1));
-        }
-    }
-
-    // Field index per Fourfold field (-1 = no such column) and the columns that feed meta.
-    std::array<qsizetype, fieldColumns.size()> index {};
-    QSet<qsizetype> used;
-    for (std::size_t f = 0; f < fieldColumns.size(); ++f) {
-        const QString fieldName = QString::fromLatin1(fieldColumns[f].field);
-        const bool mapped = columns.contains(fieldName);
-        const QString columnName = columns.value(fieldName, fieldName);
-        index[f] = header.indexOf(columnName);
-        if (index[f] >= 0) {
-            used.insert(index[f]);
-            continue;
-        }
-        if (!fieldColumns[f].required && !mapped)
-            continue;
-        QString sentence = mapped ? QCoreApplication::translate("ArticleReader",
-                               "the header has no column \"%1\" (the column "
-                               "for the field \"%2\"); it has %3")
-                                        .arg(columnName, fieldName, quotedList(header))
-                                  : QCoreApplication::translate("ArticleReader",
-                                      "the header has no column \"%1\", which is "
-                                      "required; it has %2")
-                                        .arg(columnName, quotedList(header));
-        if (header.size() == 1) {
-            for (const QChar separator : {u';', u'\t', u'|'}) {
-                if (header.front().contains(separator)) {
-                    sentence += QLatin1Char(' ')
-                        + QCoreApplication::translate("ArticleReader",
-                            "The header seems to be separated by "
-                            "\"%1\"; only commas separate fields "
-                            "(RFC 4180).")
-                              .arg(separator == u'\t' ? QStringLiteral("\\t") : QString(separator));
-                    break;
-                }
+    const QString &file = input.path();
+    std::optional<CsvHeader> header; // the first record
+    return forEachCsvRecordIn(
+        input, [&](const std::vector<QStringView> &fields, qint64 line) -> Status {
+            if (!header) {
+                Result<CsvHeader> read = readHeader(fields, line, file, columns);
+                if (!read)
+                    return std::unexpected(read.error());
+                header = std::move(*read);
+                return {};
             }
-        }
-        return failAt(ErrorCode::InvalidInput, file, headerRecord.line, 0, sentence);
-    }
-
-    const auto value = [&](const CsvRecord &record, std::size_t f) {
-        return index[f] >= 0 ? record.fields.at(index[f]) : QString();
-    };
-
-    std::vector<ImportedArticle> articles;
-    articles.reserve(records.size() - 1);
-    for (std::size_t r = 1; r < records.size(); ++r) {
-        const CsvRecord &record = records[r];
-        if (record.fields.size() != header.size()) {
-            return failAt(ErrorCode::InvalidInput, file, record.line, 0,
-                QCoreApplication::translate(
-                    "ArticleReader", "the record has %1 fields but the header has %2")
-                    .arg(record.fields.size())
-                    .arg(header.size()));
-        }
-        ImportedArticle article;
-        article.externalId = value(record, 0);
-        article.title = value(record, 1);
-        article.text = value(record, 2);
-        article.outlet = value(record, 3);
-        article.published = value(record, 4);
-        article.language = value(record, 5);
-        for (qsizetype c = 0; c < header.size(); ++c) {
-            if (!used.contains(c))
-                article.meta.insert(header.at(c), record.fields.at(c));
-        }
-        article.sourceLine = record.line;
-        articles.push_back(std::move(article));
-    }
-    return articles;
+            if (qsizetype(fields.size()) != header->names.size()) {
+                return failAt(ErrorCode::InvalidInput, file, line, 0,
+                    QCoreApplication::translate(
+                        "ArticleReader", "the record has %1 fields but the header has %2")
+                        .arg(fields.size())
+                        .arg(header->names.size()));
+            }
+            const auto value = [&](std::size_t f) {
+                return header->index[f] >= 0 ? fields[std::size_t(header->index[f])].toString()
+                                             : QString();
+            };
+            ImportedArticle article;
+            article.externalId = value(0);
+            article.title = value(1);
+            article.text = value(2);
+            article.outlet = value(3);
+            article.published = value(4);
+            article.language = value(5);
+            for (const qsizetype c : header->metaColumns)
+                article.meta.insert(header->names.at(c), fields[std::size_t(c)].toString());
+            article.sourceLine = line;
+            return sink(std::move(article));
+        });
 }
 
 } // namespace fourfold

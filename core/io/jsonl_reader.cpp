@@ -1,6 +1,7 @@
 #include "core/io/jsonl_reader.h"
 
 #include "core/io/article_reader.h"
+#include "core/io/chunked_input.h"
 #include "core/io/json_type_name.h"
 #include "core/text/canonical_text.h"
 
@@ -14,6 +15,7 @@
 
 #include <algorithm>
 #include <array>
+#include <cstring>
 
 namespace fourfold {
 
@@ -41,31 +43,14 @@ qint64 columnOfByte(const QByteArray &bytes, qsizetype offset)
     return column;
 }
 
-// Refuses lines longer than maxJsonLineSize before anything is decoded, so that a huge line
-// costs one scan of the bytes and no parsing.
-Status checkLineLengths(const QByteArray &bytes, const QString &file)
+// The line is longer than maxJsonLineSize: refused as soon as that is known, without reading
+// the rest of it.
+Status lineTooLong(const QString &file, qint64 line)
 {
-    qint64 line = 1;
-    qsizetype start = 0;
-    while (start <= bytes.size()) {
-        qsizetype end = bytes.indexOf('\n', start);
-        if (end < 0)
-            end = bytes.size();
-        qsizetype length = end - start;
-        if (length > 0 && bytes.at(end - 1) == '\r')
-            --length;
-        if (length > maxJsonLineSize) {
-            return failAt(ErrorCode::InvalidInput, file, line, 0,
-                QCoreApplication::translate("ArticleReader",
-                    "the line is %1 MiB long; a line may be at "
-                    "most %2 MiB")
-                    .arg(double(length) / double(1 << 20), 0, 'f', 1)
-                    .arg(maxJsonLineSize >> 20));
-        }
-        start = end + 1;
-        ++line;
-    }
-    return {};
+    return failAt(ErrorCode::InvalidInput, file, line, 0,
+        QCoreApplication::translate(
+            "ArticleReader", "the line is longer than %1 MiB; a line may be at most %1 MiB")
+            .arg(maxJsonLineSize >> 20));
 }
 
 // The JSON type of a line that is a single value but not an object or array (Qt's parser
@@ -162,75 +147,99 @@ QString articleFromObject(const QJsonObject &object, ImportedArticle &article)
     return {};
 }
 
-} // namespace
-
-Result<std::vector<ImportedArticle>> readJsonLinesArticles(
-    const QByteArray &bytes, const QString &file)
+// Reads one line (its bytes without the line break): nothing for a blank line, else the
+// article or what is wrong with the line. `unterminated` is a last line without a line break.
+Status readLine(QByteArrayView bytes, const QString &file, qint64 lineNumber, bool unterminated,
+    const ImportedArticleSink &sink)
 {
-    if (Status lengths = checkLineLengths(bytes, file); !lengths)
-        return std::unexpected(lengths.error());
-    Result<QString> decoded = decodeUtf8Strict(bytes, file);
+    Result<QString> decoded = decodeUtf8Strict(bytes, file, lineNumber);
     if (!decoded)
         return std::unexpected(decoded.error());
-    const QString &text = *decoded;
-    const bool endsWithNewline = text.endsWith(u'\n');
+    if (QStringView(*decoded).trimmed().isEmpty())
+        return {};
 
-    std::vector<ImportedArticle> articles;
-    qint64 lineNumber = 0;
-    qsizetype start = 0;
-    while (start < text.size()) {
-        ++lineNumber;
-        qsizetype end = text.indexOf(u'\n', start);
-        const bool lastLine = end < 0 || end + 1 == text.size();
-        if (end < 0)
-            end = text.size();
-        QStringView line = QStringView(text).mid(start, end - start);
-        start = end + 1;
-        if (line.endsWith(u'\r'))
-            line.chop(1);
-        if (line.trimmed().isEmpty())
-            continue;
-
-        const QByteArray utf8 = line.toUtf8();
-        QJsonParseError parseError;
-        const QJsonDocument document = QJsonDocument::fromJson(utf8, &parseError);
-        if (parseError.error != QJsonParseError::NoError) {
-            const qint64 column = columnOfByte(utf8, parseError.offset);
-            const bool ranOut = parseError.error == QJsonParseError::UnterminatedObject
-                || parseError.error == QJsonParseError::UnterminatedArray
-                || parseError.error == QJsonParseError::UnterminatedString
-                || parseError.offset >= utf8.size();
-            if (lastLine && !endsWithNewline && ranOut) {
-                return failAt(ErrorCode::InvalidInput, file, lineNumber, column,
-                    QCoreApplication::translate("ArticleReader",
-                        "the last line is truncated: the JSON ends before the object "
-                        "is complete (%1) and the file does not end with a line break")
-                        .arg(parseError.errorString()));
-            }
-            const QString scalar = scalarTypeOf(utf8);
-            if (!scalar.isEmpty()) {
-                return failAt(ErrorCode::InvalidInput, file, lineNumber, 0,
-                    QCoreApplication::translate("ArticleReader", "expected a JSON object, got %1")
-                        .arg(scalar));
-            }
+    const QByteArray utf8 = QByteArray::fromRawData(bytes.data(), bytes.size());
+    QJsonParseError parseError;
+    const QJsonDocument document = QJsonDocument::fromJson(utf8, &parseError);
+    if (parseError.error != QJsonParseError::NoError) {
+        const qint64 column = columnOfByte(utf8, parseError.offset);
+        const bool ranOut = parseError.error == QJsonParseError::UnterminatedObject
+            || parseError.error == QJsonParseError::UnterminatedArray
+            || parseError.error == QJsonParseError::UnterminatedString
+            || parseError.offset >= utf8.size();
+        if (unterminated && ranOut) {
             return failAt(ErrorCode::InvalidInput, file, lineNumber, column,
-                QCoreApplication::translate("ArticleReader", "invalid JSON: %1")
+                QCoreApplication::translate("ArticleReader",
+                    "the last line is truncated: the JSON ends before the object "
+                    "is complete (%1) and the file does not end with a line break")
                     .arg(parseError.errorString()));
         }
-        if (!document.isObject()) {
+        const QString scalar = scalarTypeOf(utf8);
+        if (!scalar.isEmpty()) {
             return failAt(ErrorCode::InvalidInput, file, lineNumber, 0,
                 QCoreApplication::translate("ArticleReader", "expected a JSON object, got %1")
-                    .arg(QStringLiteral("array")));
+                    .arg(scalar));
         }
-
-        ImportedArticle article;
-        if (const QString problem = articleFromObject(document.object(), article);
-            !problem.isEmpty())
-            return failAt(ErrorCode::InvalidInput, file, lineNumber, 0, problem);
-        article.sourceLine = lineNumber;
-        articles.push_back(std::move(article));
+        return failAt(ErrorCode::InvalidInput, file, lineNumber, column,
+            QCoreApplication::translate("ArticleReader", "invalid JSON: %1")
+                .arg(parseError.errorString()));
     }
-    return articles;
+    if (!document.isObject()) {
+        return failAt(ErrorCode::InvalidInput, file, lineNumber, 0,
+            QCoreApplication::translate("ArticleReader", "expected a JSON object, got %1")
+                .arg(QStringLiteral("array")));
+    }
+
+    ImportedArticle article;
+    if (const QString problem = articleFromObject(document.object(), article); !problem.isEmpty())
+        return failAt(ErrorCode::InvalidInput, file, lineNumber, 0, problem);
+    article.sourceLine = lineNumber;
+    return sink(std::move(article));
+}
+
+} // namespace
+
+Status readJsonLinesArticles(ChunkedInput &input, const ImportedArticleSink &sink)
+{
+    const QString &file = input.path();
+    FOURFOLD_TRY_STATUS(input.dropByteOrderMark());
+    qint64 lineNumber = 0;
+    qsizetype searched = 0; // the pending bytes known to hold no line break
+    bool atEnd = false;
+    for (;;) {
+        const QByteArrayView pending = input.pending();
+        const auto *newline = searched < pending.size()
+            ? static_cast<const char *>(
+                std::memchr(pending.data() + searched, '\n', size_t(pending.size() - searched)))
+            : nullptr;
+        if (!newline && !atEnd) {
+            const qsizetype length = pending.size() - (pending.endsWith('\r') ? 1 : 0);
+            if (length > maxJsonLineSize)
+                return lineTooLong(file, lineNumber + 1);
+            searched = pending.size();
+            Result<bool> more = input.readMore();
+            if (!more)
+                return std::unexpected(more.error());
+            atEnd = !*more;
+            continue;
+        }
+        if (!newline && pending.isEmpty())
+            return {};
+        ++lineNumber;
+        const qsizetype end = newline ? newline - pending.data() : pending.size();
+        QByteArrayView line = pending.first(end);
+        if (line.endsWith('\r'))
+            line.chop(1);
+        if (line.size() > maxJsonLineSize)
+            return lineTooLong(file, lineNumber);
+        // Consumed before it is read: the line stays in the buffer until the next readMore(),
+        // and the position the sink sees is past this article.
+        input.consume(newline ? end + 1 : end);
+        searched = 0;
+        FOURFOLD_TRY_STATUS(readLine(line, file, lineNumber, !newline, sink));
+        if (!newline)
+            return {};
+    }
 }
 
 } // namespace fourfold

@@ -75,17 +75,42 @@ TEST_CASE("readArticles: files that cannot be read", "[io]")
                 == dir.filePath(name) + QStringLiteral(": the file does not exist"));
         }
     }
-    SECTION("a file above the size limit is refused before it is read")
+    SECTION("a text or HTML file above the size limit is refused before it is read")
     {
-        // A sparse file: it takes no disk space and is never read.
-        const QString path = dir.filePath(QStringLiteral("huge.jsonl"));
-        QFile file(path);
-        REQUIRE(file.open(QIODevice::WriteOnly));
-        REQUIRE(file.resize(maxImportFileSize + 1));
-        file.close();
-        const auto result = readArticles(path, {});
-        REQUIRE_FALSE(result.has_value());
-        CHECK(result.error().code == ErrorCode::InvalidInput);
-        CHECK(result.error().message.contains(QStringLiteral("a file may be at most 1024 MiB")));
+        for (const QString &name : {QStringLiteral("huge.txt"), QStringLiteral("huge.html")}) {
+            // A sparse file: it takes no disk space and is never read.
+            const QString path = dir.filePath(name);
+            QFile file(path);
+            REQUIRE(file.open(QIODevice::WriteOnly));
+            REQUIRE(file.resize(maxImportFileSize + 1));
+            file.close();
+            const auto result = readArticles(path, {});
+            REQUIRE_FALSE(result.has_value());
+            CHECK(result.error().code == ErrorCode::InvalidInput);
+            CHECK(result.error().message.contains(
+                QStringLiteral("a file may be at most 1024 MiB")));
+        }
+    }
+    SECTION("JSON Lines and CSV files are streamed: a file above that size is read, not refused")
+    {
+        // The same sparse file of NUL bytes, 1 GiB + 1: read a chunk at a time, it fails on
+        // its content (one line or record longer than the 64 MiB limit, or a binary file),
+        // never on its size.
+        const QString jsonl = dir.filePath(QStringLiteral("huge.jsonl"));
+        const QString csv = dir.filePath(QStringLiteral("huge.csv"));
+        for (const QString &path : {jsonl, csv}) {
+            QFile file(path);
+            REQUIRE(file.open(QIODevice::WriteOnly));
+            REQUIRE(file.resize(maxImportFileSize + 1));
+        }
+        const auto line = readArticles(jsonl, {});
+        REQUIRE_FALSE(line.has_value());
+        CHECK(line.error().line == 1);
+        CHECK(line.error().message.contains(QStringLiteral("a line may be at most 64 MiB")));
+        const auto record = readArticles(csv, {});
+        REQUIRE_FALSE(record.has_value());
+        CHECK(record.error().line == 1);
+        CHECK(record.error().column == 1);
+        CHECK(record.error().message.contains(QStringLiteral("binary")));
     }
 }

@@ -14,6 +14,26 @@ using namespace fourfold::test;
 
 namespace {
 
+// A record as forEachCsvRecord hands it over, its fields copied.
+struct CsvRecord {
+    QStringList fields;
+    qint64 line = 0;
+};
+
+Result<std::vector<CsvRecord>> parseCsvRecords(const QString &text, const QString &file)
+{
+    std::vector<CsvRecord> records;
+    FOURFOLD_TRY_STATUS(
+        forEachCsvRecord(text, file, [&](const std::vector<QStringView> &fields, qint64 line) {
+            CsvRecord record {{}, line};
+            for (QStringView field : fields)
+                record.fields.append(field.toString());
+            records.push_back(std::move(record));
+            return Status {};
+        }));
+    return records;
+}
+
 struct GoodRecords {
     const char *what;
     QString text;
