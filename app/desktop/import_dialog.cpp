@@ -9,13 +9,18 @@
 #include <QProgressDialog>
 #include <QVBoxLayout>
 
+#include <algorithm>
+
 namespace fourfold {
 
 ImportOutcome importWithProgress(Project &project, const QStringList &files, QWidget *parent)
 {
     ImportOutcome outcome;
+    // In thousandths of each file's bytes: a JSON Lines or CSV file is imported as it is read,
+    // so the number of its articles is not known until the end.
+    constexpr int steps = 1000;
     QProgressDialog progress(QApplication::translate("ImportDialog", "Importing articles…"),
-        QApplication::translate("ImportDialog", "Cancel"), 0, 100, parent);
+        QApplication::translate("ImportDialog", "Cancel"), 0, steps, parent);
     progress.setWindowModality(Qt::WindowModal);
     progress.setMinimumDuration(300);
     for (qsizetype i = 0; i < files.size(); ++i) {
@@ -24,18 +29,15 @@ ImportOutcome importWithProgress(Project &project, const QStringList &files, QWi
                                   .arg(name)
                                   .arg(i + 1)
                                   .arg(files.size()));
-        auto records = readArticles(files[i], ImportOptions {});
-        if (!records) {
-            outcome.lines << QApplication::translate("ImportDialog", "%1: not imported — %2")
-                                 .arg(name, records.error().message);
-            continue;
-        }
-        progress.setMaximum(int(records->size()));
-        auto report = project.importArticles(*records, files[i], [&](qsizetype done, qsizetype) {
-            progress.setValue(int(done));
-            QApplication::processEvents();
-            return !progress.wasCanceled();
-        });
+        progress.setValue(0);
+        auto report = project.importFile(
+            files[i], ImportOptions {}, [&](qint64 bytesRead, qint64 totalBytes) {
+                progress.setValue(totalBytes > 0
+                        ? int(std::min(bytesRead, totalBytes) * steps / totalBytes)
+                        : steps);
+                QApplication::processEvents();
+                return !progress.wasCanceled();
+            });
         if (!report) {
             if (report.error().code == ErrorCode::Cancelled) {
                 outcome.cancelled = true;

@@ -52,17 +52,17 @@ public:
     Settings settings() const { return m_settings; }
 
     // --- articles -------------------------------------------------------------------------
-    using ImportProgress = std::function<bool(qsizetype done, qsizetype total)>;
-    // Reads `path` (see readArticles) and adds its articles in one transaction: texts are made
-    // canonical, hashed and segmented. Articles whose text is already in the project (same
-    // SHA-256) are skipped and listed in the report. All-or-nothing: on any error (including an
-    // external id that is already in the project with another text) nothing is added.
-    // `progress`, if given, is called after each article; returning false cancels (Cancelled).
+    // Told the bytes of the file read so far and the file's size (ReadProgress); returning false
+    // cancels.
+    using ImportProgress = std::function<bool(qint64 bytesRead, qint64 totalBytes)>;
+    // Reads `path` (see forEachArticle) and adds its articles in one transaction as they are
+    // read, one at a time: texts are made canonical, hashed and segmented. Articles whose text
+    // is already in the project (same SHA-256) are skipped and listed in the report. All-or-
+    // nothing: on any error (including an external id that is already in the project with
+    // another text, or a bad line after many good ones) nothing is added. `progress`, if given,
+    // is called after each article; returning false cancels (Cancelled).
     Result<ImportReport> importFile(
         const QString &path, const ImportOptions &options, const ImportProgress &progress = {});
-    // The same for articles already read; `sourceName` names them in messages.
-    Result<ImportReport> importArticles(const std::vector<ImportedArticle> &articles,
-        const QString &sourceName, const ImportProgress &progress = {});
 
     Result<std::vector<ArticleSummary>> articles() const;
     Result<Article> article(ArticleId id) const;
@@ -99,8 +99,8 @@ public:
     // The same annotations (by article, coder, start) and the live gold spans (by article, start,
     // without their sources), handed over one at a time: one statement each, one row held.
     Status forEachAnnotation(const std::function<Status(Annotation &&)> &visit) const;
-    // The same as outlines (id, article, coder, function, range, attributes, phase; the rest
-    // empty): what comparing every article's spans needs.
+    // The same as outlines (id, article, coder, function, range, attributes, phase, creation
+    // time; the rest empty): what comparing every article's spans needs.
     Status forEachAnnotationOutline(const std::function<Status(Annotation &&)> &visit) const;
     Status forEachGoldAnnotation(const std::function<Status(GoldAnnotation &&)> &visit) const;
     Result<std::vector<Judgement>> allJudgements() const;

@@ -1,5 +1,5 @@
-// Project::importFile / importArticles: canonical text, hashing, segmentation and storage of
-// new articles, one transaction per source.
+// Project::importFile: canonical text, hashing, segmentation and storage of new articles as
+// they are read, one transaction per source.
 #include "core/model/paragraph_role.h"
 #include "core/project/project.h"
 #include "core/store/article_table.h"
@@ -62,25 +62,15 @@ Result<Article> prepareArticle(
 Result<ImportReport> Project::importFile(
     const QString &path, const ImportOptions &options, const ImportProgress &progress)
 {
-    auto records = readArticles(path, options);
-    if (!records)
-        return std::unexpected(records.error());
-    return importArticles(*records, path, progress);
-}
-
-Result<ImportReport> Project::importArticles(const std::vector<ImportedArticle> &records,
-    const QString &sourceName, const ImportProgress &progress)
-{
     ImportReport report;
-    report.source = sourceName;
+    report.source = path;
     auto sp = Savepoint::begin(m_db);
     if (!sp)
         return std::unexpected(sp.error());
 
     QHash<QString, QString> shaInThisImport; // sha256 → external id of its first article
-    qsizetype done = 0;
-    for (const ImportedArticle &in : records) {
-        auto prepared = prepareArticle(in, sourceName, m_settings.defaultLanguage);
+    const auto add = [&](const ImportedArticle &in) -> Status {
+        auto prepared = prepareArticle(in, path, m_settings.defaultLanguage);
         if (!prepared)
             return std::unexpected(prepared.error());
         const QString &sha = prepared->summary.sha256;
@@ -96,29 +86,34 @@ Result<ImportReport> Project::importArticles(const std::vector<ImportedArticle> 
             }
             report.skipped.push_back(SkippedArticle {in.externalId, in.sourceLine,
                 tr("same text as the article \"%1\" already in the project").arg(other)});
-        } else {
-            auto sameId = store::articleIdByExternalId(m_db, in.externalId);
-            if (!sameId)
-                return std::unexpected(sameId.error());
-            if (*sameId)
-                return failAt(ErrorCode::Duplicate, prepared->source, in.sourceLine, 0,
-                    tr("the id \"%1\" is already used by another article in the project, with a "
-                       "different text.")
-                        .arg(in.externalId));
-            auto id = store::insertArticle(m_db, *prepared);
-            if (!id)
-                return std::unexpected(id.error());
-            shaInThisImport.insert(sha, in.externalId);
-            report.added.push_back(*id);
+            return {};
         }
-        ++done;
-        if (progress && !progress(done, qsizetype(records.size())))
+        auto sameId = store::articleIdByExternalId(m_db, in.externalId);
+        if (!sameId)
+            return std::unexpected(sameId.error());
+        if (*sameId)
+            return failAt(ErrorCode::Duplicate, prepared->source, in.sourceLine, 0,
+                tr("the id \"%1\" is already used by another article in the project, with a "
+                   "different text.")
+                    .arg(in.externalId));
+        auto id = store::insertArticle(m_db, *prepared);
+        if (!id)
+            return std::unexpected(id.error());
+        shaInThisImport.insert(sha, in.externalId);
+        report.added.push_back(*id);
+        return {};
+    };
+    const ArticleVisit visit = [&](ImportedArticle &&in, ReadProgress read) -> Status {
+        FOURFOLD_TRY_STATUS(add(in));
+        if (progress && !progress(read.bytesRead, read.totalBytes))
             return fail(ErrorCode::Cancelled,
-                tr("The import of %1 was cancelled; nothing was added.").arg(sourceName));
-    }
+                tr("The import of %1 was cancelled; nothing was added.").arg(path));
+        return {};
+    };
+    FOURFOLD_TRY_STATUS(forEachArticle(path, options, visit));
     FOURFOLD_TRY_STATUS(store::appendEvent(m_db, CoderId {}, QStringLiteral("articles.import"),
         QStringLiteral("source"), QString(),
-        QJsonObject {{QStringLiteral("source"), sourceName},
+        QJsonObject {{QStringLiteral("source"), path},
             {QStringLiteral("added"), qint64(report.added.size())},
             {QStringLiteral("skipped"), qint64(report.skipped.size())}}));
     FOURFOLD_TRY_STATUS(sp->commit());

@@ -114,12 +114,15 @@ TEST_CASE("an import that fails leaves the project exactly as it was")
     }
     SECTION("a cancelled import")
     {
+        // Cancelled after its second article, the last one: the first is undone as well.
+        int calls = 0;
         auto r = f.project.importFile(writeFile(f.dir, QStringLiteral("f.jsonl"),
                                           "{\"id\":\"x1\",\"title\":\"A\",\"text\":\"First.\"}\n"
                                           "{\"id\":\"x2\",\"title\":\"B\",\"text\":\"Second.\"}\n"),
-            ImportOptions {}, [](qsizetype done, qsizetype) { return done < 2; });
+            ImportOptions {}, [&](qint64, qint64) { return ++calls < 2; });
         REQUIRE_FALSE(r);
         CHECK(r.error().code == ErrorCode::Cancelled);
+        CHECK(calls == 2);
     }
     CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
 }
@@ -163,4 +166,94 @@ TEST_CASE("full-text search finds articles by words of their text")
     auto bad = f.project.searchArticles(QStringLiteral("\"unclosed"));
     REQUIRE_FALSE(bad);
     CHECK(bad.error().code == ErrorCode::InvalidArgument);
+}
+
+namespace {
+
+// `count` articles a0, a1, ... with distinct short texts, as JSON Lines or as CSV with a header.
+QByteArray manyArticles(int count, bool csv)
+{
+    QByteArray bytes = csv ? "id,title,text\r\n" : "";
+    for (int i = 0; i < count; ++i) {
+        bytes += (csv ? QStringLiteral("a%1,Title %1,\"Text number %1.\nIts second line.\"\r\n")
+                      : QStringLiteral("{\"id\":\"a%1\",\"title\":\"Title %1\",\"text\":\"Text "
+                                       "number %1.\\nIts second line.\"}\n"))
+                     .arg(i)
+                     .toUtf8();
+    }
+    return bytes;
+}
+
+} // namespace
+
+TEST_CASE("a large import adds its articles one at a time as the file is read")
+{
+    for (const bool csv : {false, true}) {
+        INFO((csv ? "CSV" : "JSON Lines"));
+        ProjectFixture f;
+        const QByteArray bytes = manyArticles(3000, csv);
+        const QString path = writeFile(
+            f.dir, csv ? QStringLiteral("many.csv") : QStringLiteral("many.jsonl"), bytes);
+        ImportOptions options;
+        options.readChunkSize = 4096;
+        // ImportedArticleCount counts the articles read and not yet dropped: one at a time.
+        const qsizetype before = ImportedArticleCount::alive();
+        ImportedArticleCount::resetMost();
+        qint64 lastRead = 0;
+        qint64 lastTotal = 0;
+        int calls = 0;
+        auto report = f.project.importFile(path, options, [&](qint64 read, qint64 total) {
+            CHECK(read > lastRead);
+            lastRead = read;
+            lastTotal = total;
+            ++calls;
+            return true;
+        });
+        REQUIRE(report);
+        CHECK(report->added.size() == 3000);
+        CHECK(ImportedArticleCount::most() - before == 1);
+        CHECK(calls == 3000);
+        CHECK(lastRead == bytes.size());
+        CHECK(lastTotal == bytes.size());
+        auto stored = f.project.article(f.articleId(QStringLiteral("a2999")));
+        REQUIRE(stored);
+        CHECK(stored->text == QStringLiteral("Text number 2999.\nIts second line."));
+        CHECK(stored->summary.title == QStringLiteral("Title 2999"));
+
+        // The same file again: every text is there already, so nothing is added.
+        auto again = f.project.importFile(path, options);
+        REQUIRE(again);
+        CHECK(again->added.empty());
+        CHECK(again->skipped.size() == 3000);
+        CHECK(f.project.articles()->size() == 3000);
+    }
+}
+
+TEST_CASE("an error on the last line of a large file leaves the project unchanged")
+{
+    for (const bool csv : {false, true}) {
+        INFO((csv ? "CSV" : "JSON Lines"));
+        ProjectFixture f;
+        f.importJsonl(kTwoArticles);
+        const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+        // 3,000 good articles, then a record with a field too few (CSV) or a line that is no
+        // JSON object (JSON Lines), read in small chunks: the articles before it were added
+        // (the progress saw each) and are undone.
+        const QByteArray bytes = manyArticles(3000, csv) + (csv ? "a3000,Title\r\n" : "[1]\n");
+        const QString path =
+            writeFile(f.dir, csv ? QStringLiteral("bad.csv") : QStringLiteral("bad.jsonl"), bytes);
+        ImportOptions options;
+        options.readChunkSize = 4096;
+        int calls = 0;
+        auto r = f.project.importFile(path, options, [&](qint64, qint64) {
+            ++calls;
+            return true;
+        });
+        REQUIRE_FALSE(r);
+        CHECK(r.error().code == ErrorCode::InvalidInput);
+        // CSV: the header, then 3,000 records of two lines each.
+        CHECK(r.error().line == (csv ? 6002 : 3001));
+        CHECK(calls == 3000);
+        CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    }
 }
