@@ -122,13 +122,13 @@ Result<CountedCodings> countedCodings(const Project &project, const UnitSelectio
         }
     }
 
-    auto annotations = project.allAnnotations();
-    if (!annotations)
-        return std::unexpected(annotations.error());
-    for (Annotation &a : *annotations)
+    // Outlines, one row at a time: only the spans that count are kept.
+    FOURFOLD_TRY_STATUS(project.forEachAnnotationOutline([&](Annotation &&a) -> Status {
         if (inPhase(sel.phase, a.phase) && s.counts(a.article.value, a.coder.value)
             && s.coderIndex.contains(a.coder.value))
             s.annotations.push_back(std::move(a));
+        return {};
+    }));
     auto judgements = project.allJudgements();
     if (!judgements)
         return std::unexpected(judgements.error());

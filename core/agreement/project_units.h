@@ -56,7 +56,8 @@ struct CountedCodings {
     std::vector<ArticleSummary> articles; // selected, in project order
     QHash<qint64, int> coderIndex; // coder id → column (gold: -1)
     QSet<QPair<qint64, qint64>> counted; // (article id, coder id) whose codings count
-    std::vector<Annotation> annotations; // live, in phase, of counted pairs
+    // Live, in phase, of counted pairs, as outlines (Project::forEachAnnotationOutline).
+    std::vector<Annotation> annotations;
     std::vector<Judgement> judgements; // likewise
     // Articles in progress left out per coder (selected coders, or any coder when none were
     // named), in coder then article order; empty when the selection takes them in.

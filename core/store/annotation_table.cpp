@@ -198,9 +198,9 @@ Status forEachAnnotationOutline(
     const Database &db, const std::function<Status(Annotation &&)> &visit)
 {
     auto stmt = db.prepare(
-        QStringLiteral("SELECT id, article_id, coder_id, function, start, end, attributes, phase "
-                       "FROM annotation WHERE deleted = 0 ORDER BY article_id, coder_id, start, "
-                       "end, id"));
+        QStringLiteral("SELECT id, article_id, coder_id, function, start, end, attributes, phase, "
+                       "created_at FROM annotation WHERE deleted = 0 ORDER BY article_id, "
+                       "coder_id, start, end, id"));
     if (!stmt)
         return std::unexpected(stmt.error());
     return forEachRow(
@@ -214,6 +214,7 @@ Status forEachAnnotationOutline(
             a.content.range = TextRange {s.columnInt(4), s.columnInt(5)};
             a.content.attributes = fromJsonText(s.columnUtf8(6));
             a.phase = storedPhase(s.columnUtf8(7)).value_or(Phase::Production);
+            a.createdAt = s.columnText(8);
             return a;
         },
         visit);

@@ -29,8 +29,9 @@ Result<std::vector<Annotation>> annotations(
 Result<std::vector<Annotation>> allAnnotations(const Database &db);
 // The same annotations in the same order, handed to `visit` one at a time (one statement).
 Status forEachAnnotation(const Database &db, const std::function<Status(Annotation &&)> &visit);
-// The same annotations as outlines: id, article, coder, function, range, attributes and phase
-// only (no uuid, quote, note, confidence or times), for views that compare spans in bulk.
+// The same annotations as outlines: id, article, coder, function, range, attributes, phase and
+// creation time only (no uuid, quote, note, confidence or other times), for views and
+// computations that compare spans in bulk.
 Status forEachAnnotationOutline(
     const Database &db, const std::function<Status(Annotation &&)> &visit);
 
