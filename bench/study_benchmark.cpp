@@ -8,6 +8,9 @@
 // Build in a Release tree; runs offscreen unless QT_QPA_PLATFORM is set.
 //
 //   study_benchmark [ARTICLES=1000] [CODERS=4] [WORK_DIR=a temporary directory]
+//
+// With FOURFOLD_BENCH_REUSE set, the study an earlier run left in WORK_DIR is opened instead of
+// made again (the imports are then not timed).
 
 #include "app/desktop/main_window.h"
 #include "app/report/report_writer.h"
@@ -27,6 +30,7 @@
 #include <QApplication>
 #include <QDir>
 #include <QElapsedTimer>
+#include <QLineEdit>
 #include <QTemporaryDir>
 
 #include <sys/resource.h>
@@ -34,6 +38,7 @@
 #include <algorithm>
 #include <cstdio>
 #include <functional>
+#include <optional>
 #include <vector>
 
 using namespace fourfold;
@@ -94,27 +99,35 @@ int main(int argc, char **argv)
     bench::StudySpec spec;
     spec.articles = n;
     spec.coders = coders;
-    QElapsedTimer clock;
-    clock.start();
-    const bench::StudyFiles files = bench::writeStudyOrExit(spec, dir);
-    std::printf("study: %d articles, %d coders, %lld spans, %lld answers, %lld gold spans "
-                "(generated in %.1f s)\n",
-        n, coders, files.spans, files.answers, files.goldSpans, double(clock.elapsed()) / 1000);
+    const QString path = QDir(dir).filePath(QStringLiteral("study.fourfold"));
+    const bool reuse = !qEnvironmentVariableIsEmpty("FOURFOLD_BENCH_REUSE") && QFile::exists(path);
+    std::optional<bench::StudyFiles> files;
+    if (!reuse) {
+        QElapsedTimer clock;
+        clock.start();
+        files = bench::writeStudyOrExit(spec, dir);
+        std::printf("study: %d articles, %d coders, %lld spans, %lld answers, %lld gold spans "
+                    "(generated in %.1f s)\n",
+            n, coders, files->spans, files->answers, files->goldSpans,
+            double(clock.elapsed()) / 1000);
+        for (const char *suffix : {"", "-wal", "-shm"})
+            QFile::remove(path + QLatin1String(suffix));
+    }
     std::printf("%-44s %7s %9s %9s %9s\n", "path", "articles", "min s", "median s", "peak MiB");
 
-    const QString path = QDir(dir).filePath(QStringLiteral("study.fourfold"));
-    QFile::remove(path);
-    Project project = check(Project::create(path), "create");
-    addStudyPeople(project, coders);
-
-    timed("import articles", n, 1,
-        [&] { check(project.importFile(files.articles, ImportOptions {}), "import"); });
-    timed("import codings (spans, answers, gold)", n, 1,
-        [&] { check(importQuotedCodings(project, files.codings, Phase::Production), "codings"); });
-    timed("extract (position baseline)", n, 1, [&] {
-        auto position = check(PositionBaseline::create(), "baseline");
-        check(ExtractorRuns::create(project, position, QStringLiteral("position")), "run");
-    });
+    Project project = check(reuse ? Project::open(path) : Project::create(path), "open");
+    if (files) {
+        addStudyPeople(project, coders);
+        timed("import articles", n, 1,
+            [&] { check(project.importFile(files->articles, ImportOptions {}), "import"); });
+        timed("import codings (spans, answers, gold)", n, 1, [&] {
+            check(importQuotedCodings(project, files->codings, Phase::Production), "codings");
+        });
+        timed("extract (position baseline)", n, 1, [&] {
+            auto position = check(PositionBaseline::create(), "baseline");
+            check(ExtractorRuns::create(project, position, QStringLiteral("position")), "run");
+        });
+    }
 
     timed("agree sentence, all functions, 1000 replicates", n, 3,
         [&] { agree(project, UnitKind::Sentence, 1000, false); });
@@ -149,11 +162,29 @@ int main(int argc, char **argv)
         QDir(o.outDir).removeRecursively();
         check(exportLayer(project, o), "export");
     });
-    timed("desktop opened as the lead", n, 3, [&] {
+    const auto openDesktop = [&](const char *label, const QString &as) {
+        timed(label, n, 3, [&] {
+            MainWindow window;
+            check(window.openProject(path, as), "desktop");
+            window.show();
+            QCoreApplication::processEvents();
+        });
+    };
+    openDesktop("desktop opened as the lead", QStringLiteral("L01"));
+    openDesktop("desktop opened as a coder (C01)", QStringLiteral("C01"));
+    {
         MainWindow window;
         check(window.openProject(path, QStringLiteral("L01")), "desktop");
         window.show();
         QCoreApplication::processEvents();
-    });
+        int round = 0;
+        // A word of the generated texts, and a rarer phrase; the list filters to the hits.
+        timed("desktop: full-text search, list filtered", n, 3, [&] {
+            window.searchField()->setText(
+                round++ % 2 ? QStringLiteral("\"harbour levy\"") : QStringLiteral("turbine"));
+            emit window.searchField()->returnPressed();
+            QCoreApplication::processEvents();
+        });
+    }
     return 0;
 }

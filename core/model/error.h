@@ -70,9 +70,14 @@ QString errorCodeName(ErrorCode code);
 } // namespace fourfold
 
 // Returns early from a function returning Result<T> or Status when `expr` (a Result or Status)
-// holds an error: FOURFOLD_TRY_STATUS(store::appendEvent(...));
-#define FOURFOLD_TRY_STATUS(expr)                                                                  \
+// holds an error: FOURFOLD_TRY_STATUS(store::appendEvent(...)). Each use names its result
+// apart (__COUNTER__), so that a use inside a lambda within another's `expr` shadows nothing.
+#define FOURFOLD_TRY_STATUS(expr) FOURFOLD_TRY_STATUS_NUMBERED(expr, __COUNTER__)
+// Two steps, so that __COUNTER__ becomes its number before ## joins it to the name.
+#define FOURFOLD_TRY_STATUS_NUMBERED(expr, n) FOURFOLD_TRY_STATUS_NAMED(expr, n)
+#define FOURFOLD_TRY_STATUS_NAMED(expr, n) FOURFOLD_TRY_STATUS_AS(expr, fourfoldTryResult##n)
+#define FOURFOLD_TRY_STATUS_AS(expr, name)                                                         \
     do {                                                                                           \
-        if (auto fourfoldTryResult = (expr); !fourfoldTryResult)                                   \
-            return std::unexpected(fourfoldTryResult.error());                                     \
+        if (auto name = (expr); !name)                                                             \
+            return std::unexpected(name.error());                                                  \
     } while (false)
