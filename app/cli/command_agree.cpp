@@ -8,13 +8,15 @@
 #include <QCoreApplication>
 #include <QJsonArray>
 
+#include <algorithm>
+
 namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text)
+QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
 {
-    return QCoreApplication::translate("cli", text);
+    return QCoreApplication::translate("cli", text, disambiguation, n);
 }
 
 int runContinuum(const AgreementRun &run, const UnitSelection &selection, bool json)
@@ -156,8 +158,15 @@ int printAgreement(const AnalysisResult &analysed, const AgreementRun *run,
         lines << leftOutText;
     lines << tr("Alpha without each coder (costliest first; change = without − with all)");
     lines << leaveOneOutText(costs->coders);
+    // The costliest articles; a raw matrix of a million rows (each its own article) would
+    // print a million lines. --json lists every one.
+    constexpr size_t kArticleLines = 20;
+    const size_t shown = std::min(costs->articles.size(), kArticleLines);
     lines << tr("Alpha without each article (costliest first)");
-    lines << leaveOneOutText(costs->articles);
+    lines << leaveOneOutText({costs->articles.begin(), costs->articles.begin() + qsizetype(shown)});
+    if (shown < costs->articles.size())
+        lines << tr("  … and %n more (--json lists every one)", nullptr,
+            int(costs->articles.size() - shown));
     if (matching)
         lines << matchingText(*matching);
     out(lines.join(QLatin1Char('\n')));

@@ -4,9 +4,11 @@
 
 #include "tests/diagnostics/planted_project.h"
 #include "tests/support/cli_run.h"
+#include "tests/support/test_support.h"
 
 #include <QJsonArray>
 #include <QJsonObject>
+#include <QTemporaryDir>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -61,4 +63,33 @@ TEST_CASE("agree --diagnostics finds the planted coder, article and habit")
               .value(QStringLiteral("problem"))
               .toDouble()
         == 15.0);
+}
+
+TEST_CASE("agree --data --diagnostics prints the 20 costliest rows and counts the rest")
+{
+    // 25 rows, each its own article (no unit suffix); the row "bad" alone disagrees, so it
+    // costs most and comes first. The JSON lists every row.
+    QByteArray csv = "unit,A,B\n";
+    for (int u = 1; u <= 24; ++u)
+        csv += "r" + QByteArray::number(u) + (u % 3 ? ",x,x\n" : ",y,y\n");
+    csv += "bad,x,y\n";
+    QTemporaryDir dir;
+    const QString path = writeFile(dir, QStringLiteral("m.csv"), csv);
+    const QStringList args {QStringLiteral("--data"), path, QStringLiteral("--diagnostics")};
+    const CliRun text =
+        runCli(QStringLiteral(FOURFOLD_CLI), QStringList {QStringLiteral("agree")} + args);
+    REQUIRE(text.exitCode == 0);
+    const QStringList lines = text.out.split(QLatin1Char('\n'));
+    const qsizetype heading =
+        lines.indexOf(QStringLiteral("Alpha without each article (costliest first)"));
+    REQUIRE(heading >= 0);
+    CHECK(lines[heading + 1].trimmed().startsWith(QStringLiteral("bad ")));
+    CHECK(lines[heading + 21] == QStringLiteral("  … and 5 more (--json lists every one)"));
+    const QJsonObject json = agreeJson(args + QStringList {QStringLiteral("--json")});
+    const QJsonArray articles = json.value(QStringLiteral("diagnostics"))
+                                    .toObject()
+                                    .value(QStringLiteral("leave_one_article_out"))
+                                    .toArray();
+    CHECK(articles.size() == 25);
+    CHECK(articles.first().toObject().value(QStringLiteral("article")) == QStringLiteral("bad"));
 }
