@@ -60,7 +60,14 @@ LeaveOneOut entry(
     return e;
 }
 
+thread_local std::uint64_t cellsCopied = 0;
+
 } // namespace
+
+std::uint64_t leaveOneOutCellsCopied()
+{
+    return cellsCopied;
+}
 
 double FunctionConfusion::matched() const
 {
@@ -138,9 +145,11 @@ Result<std::vector<LeaveOneOut>> leaveOneArticleOut(
         own.coders = data.coders;
         own.values = data.values;
         own.units = int(unitsOf[size_t(left)].size());
+        own.cells.reserve(unitsOf[size_t(left)].size() * size_t(data.coders));
         for (int u : unitsOf[size_t(left)])
             for (int c = 0; c < data.coders; ++c)
                 own.cells.push_back(data.at(u, c));
+        cellsCopied += own.cells.size();
         const CoincidenceMatrix part = coincidences(own);
         CoincidenceMatrix rest = everything;
         // Sums of multiples of 1/(m_u − 1): what is left of an emptied cell is rounding only.

@@ -24,6 +24,7 @@
 #include <QJsonObject>
 #include <QStringList>
 
+#include <cstdint>
 #include <functional>
 #include <optional>
 #include <vector>
@@ -60,6 +61,10 @@ Result<std::vector<LeaveOneOut>> leaveOneCoderOut(const EncodedData &encoded,
 // match the data, Cancelled when `progress` returns false.
 Result<std::vector<LeaveOneOut>> leaveOneArticleOut(const EncodedData &encoded,
     const ReliabilityTable &table, const DiagnosticsProgress &progress = {});
+// Cells copied by leaveOneArticleOut() on this thread so far. Each article's own units are
+// copied once, to subtract their coincidences from the totals, so one call copies every cell
+// of the data once whatever the number of articles (tests count this instead of timing it).
+std::uint64_t leaveOneOutCellsCopied();
 
 // Counts of (a coder's function, the other coder's function at the best-overlapping span),
 // summed over ordered pairs of coders. Index 0..3 the functions (FramingFunction order), 4 =

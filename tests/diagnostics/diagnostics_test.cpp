@@ -358,9 +358,12 @@ TEST_CASE("leaving an article out by subtraction equals recomputing without it")
                 ++encoded.data.units;
             }
         }
+        const std::uint64_t copiedBefore = leaveOneOutCellsCopied();
         auto out = leaveOneArticleOut(encoded, named);
         REQUIRE(out);
         REQUIRE(out->size() == 40);
+        // Each cell is copied once (its article's turn), not once per article.
+        CHECK(leaveOneOutCellsCopied() - copiedBefore == encoded.data.cells.size());
         for (const LeaveOneOut &e : *out) {
             INFO(e.name.toStdString());
             reliability::ReliabilityData rest;
