@@ -10,7 +10,8 @@
 //   study_benchmark [ARTICLES=1000] [CODERS=4] [WORK_DIR=a temporary directory]
 //
 // With FOURFOLD_BENCH_REUSE set, the study an earlier run left in WORK_DIR is opened instead of
-// made again (the imports are then not timed).
+// made again (the imports are then not timed); FOURFOLD_BENCH_ONLY=TEXT times only the paths
+// whose name holds TEXT.
 
 #include "app/desktop/main_window.h"
 #include "app/report/report_writer.h"
@@ -54,8 +55,17 @@ void row(const char *path, int articles, std::vector<double> seconds)
     std::fflush(stdout);
 }
 
+// FOURFOLD_BENCH_ONLY=text times only the paths whose name holds the text (for profiling).
+bool wanted(const char *path)
+{
+    const QByteArray only = qgetenv("FOURFOLD_BENCH_ONLY");
+    return only.isEmpty() || QByteArray(path).contains(only);
+}
+
 void timed(const char *path, int articles, int rounds, const std::function<void()> &work)
 {
+    if (!wanted(path))
+        return;
     std::vector<double> seconds;
     for (int i = 0; i < rounds; ++i) {
         QElapsedTimer t;
@@ -141,7 +151,7 @@ int main(int argc, char **argv)
         check(run.continuum(std::nullopt), "continuum");
     });
     timed("comparison queue", n, 3, [&] { check(disagreementQueue(project), "queue"); });
-    {
+    if (wanted("comparison: one decision's queue row")) {
         const auto queue = check(disagreementQueue(project), "queue");
         timed("comparison: one decision's queue row", n, 3,
             [&] { check(articleDisagreement(project, queue.front()), "row"); });

@@ -21,6 +21,7 @@
 #include <map>
 #include <random>
 #include <set>
+#include <unordered_map>
 
 namespace fourfold {
 
@@ -152,28 +153,45 @@ bool marks(const std::vector<const Annotation *> &spans, FramingFunction f, cons
     });
 }
 
-// Loads articles once per call of a reading function.
-class ArticleCache
+// The units of one kind (paragraphs, sentences or tokens) of the articles a reading function
+// compares, each read once: article by article as asked for, or every article's with one
+// statement (loadAll(), for work across the whole study). Holds the ranges only, not the texts.
+class UnitCache
 {
 public:
-    explicit ArticleCache(const Project &project)
+    UnitCache(const Project &project, UnitKind kind)
         : m_project(project)
+        , m_kind(kind)
     { }
-    Result<const Article *> get(ArticleId id)
+
+    Status loadAll()
     {
-        auto it = m_articles.find(id.value);
-        if (it == m_articles.end()) {
+        const SegmentKind segments = m_kind == UnitKind::Paragraph ? SegmentKind::Paragraphs
+            : m_kind == UnitKind::Token                            ? SegmentKind::Tokens
+                                                                   : SegmentKind::Sentences;
+        return m_project.forEachSegmentation(
+            segments, [&](ArticleId id, std::vector<TextRange> &&units) -> Status {
+                m_units.insert_or_assign(id.value, std::move(units));
+                return {};
+            });
+    }
+
+    Result<const std::vector<TextRange> *> get(ArticleId id)
+    {
+        auto it = m_units.find(id.value);
+        if (it == m_units.end()) {
             auto a = m_project.article(id);
             if (!a)
                 return std::unexpected(a.error());
-            it = m_articles.emplace(id.value, std::move(*a)).first;
+            it = m_units.emplace(id.value, unitsOf(*a, m_kind)).first;
         }
         return &it->second;
     }
 
 private:
     const Project &m_project;
-    std::map<qint64, Article> m_articles;
+    UnitKind m_kind;
+    std::unordered_map<qint64, std::vector<TextRange>> m_units;
 };
 
 // The two-coder present/absent matrix of `functions` over the units of `articles`: a row per
@@ -185,8 +203,8 @@ struct PairMatrix {
     int bMarked = 0;
 };
 
-Result<PairMatrix> pairMatrix(ArticleCache &cache, const std::vector<ArticleId> &articles,
-    UnitKind unit, const std::vector<FramingFunction> &functions, const std::vector<Annotation> &a,
+Result<PairMatrix> pairMatrix(UnitCache &cache, const std::vector<ArticleId> &articles,
+    const std::vector<FramingFunction> &functions, const std::vector<Annotation> &a,
     const std::vector<Annotation> &b)
 {
     PairMatrix m;
@@ -200,16 +218,16 @@ Result<PairMatrix> pairMatrix(ArticleCache &cache, const std::vector<ArticleId> 
         byArticleB[x.article.value].push_back(&x);
     const std::vector<const Annotation *> none;
     for (ArticleId id : articles) {
-        auto article = cache.get(id);
-        if (!article)
-            return std::unexpected(article.error());
+        auto units = cache.get(id);
+        if (!units)
+            return std::unexpected(units.error());
         const auto itA = byArticleA.find(id.value);
         const auto itB = byArticleB.find(id.value);
         const std::vector<const Annotation *> &spansA =
             itA == byArticleA.end() ? none : itA->second;
         const std::vector<const Annotation *> &spansB =
             itB == byArticleB.end() ? none : itB->second;
-        for (const TextRange &u : unitsOf(**article, unit)) {
+        for (const TextRange &u : **units) {
             for (FramingFunction f : functions) {
                 const bool inA = marks(spansA, f, u);
                 const bool inB = marks(spansB, f, u);
@@ -1139,10 +1157,10 @@ Result<TrainingFeedback> StudyDesign::trainingFeedback(
         fb.articles << names->externalIdById.value(id.value);
     fb.trainingComplete = trainingAssignments > 0 && fb.openArticles == 0;
 
-    ArticleCache cache(project);
+    UnitCache cache(project, request.unit);
     for (std::size_t i = 0; i < kFramingFunctions.size(); ++i) {
         const FramingFunction f = kFramingFunctions[i];
-        auto m = pairMatrix(cache, compared, request.unit, {f}, mine, theirs);
+        auto m = pairMatrix(cache, compared, {f}, mine, theirs);
         if (!m)
             return std::unexpected(m.error());
         FunctionAgreement &fa = fb.functions[i];
@@ -1217,14 +1235,33 @@ Result<ProgressBoard> StudyDesign::progressBoard(const Project &project, std::op
     auto assignments = project.assignments();
     if (!assignments)
         return std::unexpected(assignments.error());
-    auto all = project.allAnnotations();
-    if (!all)
-        return std::unexpected(all.error());
+    // Every live span as an outline, by (coder, phase): read once, with one statement.
+    std::map<std::pair<qint64, Phase>, std::vector<Annotation>> spansBy;
+    FOURFOLD_TRY_STATUS(project.forEachAnnotationOutline([&](Annotation &&a) -> Status {
+        spansBy[{a.coder.value, a.phase}].push_back(std::move(a));
+        return {};
+    }));
+    const std::vector<Annotation> noSpans;
+    const auto spansOfIn = [&](CoderId coder, Phase ph) -> const std::vector<Annotation> & {
+        auto it = spansBy.find({coder.value, ph});
+        return it == spansBy.end() ? noSpans : it->second;
+    };
 
     ProgressBoard board;
     board.effortPerCoder = *visible;
-    const std::optional<Coder> master = soleTrainingLead(*names, *all);
-    ArticleCache cache(project);
+    // The one lead with training spans, if there is exactly one.
+    std::optional<Coder> master;
+    int trainingLeads = 0;
+    for (const Coder &c : names->coders)
+        if (c.role == CoderRole::Lead && !spansOfIn(c.id, Phase::Training).empty()) {
+            master = c;
+            ++trainingLeads;
+        }
+    if (trainingLeads != 1)
+        master.reset();
+    // Sentence ranges of every article, read with one statement when first needed.
+    UnitCache cache(project, UnitKind::Sentence);
+    bool unitsLoaded = false;
     const reliability::Metric nominal {reliability::Level::Nominal, {}, {}};
 
     for (Phase ph : kPhases) {
@@ -1241,18 +1278,28 @@ Result<ProgressBoard> StudyDesign::progressBoard(const Project &project, std::op
         effort.phase = ph;
         std::map<qint64, std::set<qint64>> doneBy; // coder → articles done
         std::map<qint64, std::set<qint64>> spannedBy; // coder → articles with spans in the phase
-        for (const Annotation &a : *all)
-            if (a.phase == ph && !a.deleted)
-                spannedBy[a.coder.value].insert(a.article.value);
+        for (const auto &[key, spans] : spansBy)
+            if (key.second == ph)
+                for (const Annotation &a : spans)
+                    spannedBy[key.first].insert(a.article.value);
         for (const auto &[pseudonym, list] : byCoder)
             for (const Assignment &a : list)
                 if (a.status == QStringLiteral("done"))
                     doneBy[a.coder.value].insert(a.article.value);
 
         // Alpha of two coders over the articles both finished (present/absent per unit and
-        // function, pooled as one nominal variable); none when undefined.
+        // function, pooled as one nominal variable); none when undefined. Between two coders who
+        // both must have finished, the figure is the same both ways and computed once.
+        std::map<std::pair<qint64, qint64>, std::pair<std::optional<double>, int>> mutual;
         auto pairAlpha = [&](CoderId x, CoderId y, bool yNeedsDone,
                              int *articles) -> Result<std::optional<double>> {
+            const std::pair<qint64, qint64> key {
+                std::min(x.value, y.value), std::max(x.value, y.value)};
+            if (yNeedsDone)
+                if (auto known = mutual.find(key); known != mutual.end()) {
+                    *articles = known->second.second;
+                    return known->second.first;
+                }
             std::vector<ArticleId> common;
             for (qint64 id : doneBy[x.value]) {
                 const bool yCoded =
@@ -1261,13 +1308,21 @@ Result<ProgressBoard> StudyDesign::progressBoard(const Project &project, std::op
                     common.push_back(ArticleId {id});
             }
             *articles = int(common.size());
-            if (common.empty())
-                return std::optional<double> {};
-            auto m = pairMatrix(cache, common, UnitKind::Sentence, allFunctions(),
-                spansOf(*all, x, ph), spansOf(*all, y, ph));
-            if (!m)
-                return std::unexpected(m.error());
-            return reliability::krippendorffAlpha(m->data, nominal).value;
+            std::optional<double> alpha;
+            if (!common.empty()) {
+                if (!unitsLoaded) {
+                    FOURFOLD_TRY_STATUS(cache.loadAll());
+                    unitsLoaded = true;
+                }
+                auto m =
+                    pairMatrix(cache, common, allFunctions(), spansOfIn(x, ph), spansOfIn(y, ph));
+                if (!m)
+                    return std::unexpected(m.error());
+                alpha = reliability::krippendorffAlpha(m->data, nominal).value;
+            }
+            if (yNeedsDone)
+                mutual.emplace(key, std::pair {alpha, *articles});
+            return alpha;
         };
 
         for (const auto &[pseudonym, list] : byCoder) {

@@ -1,7 +1,8 @@
-// What gathering a report's figures reads: a bounded number of statements whatever the size of
-// the study (the figures themselves are checked against `fourfold-cli agree` in
-// report_writer_test.cpp).
+// What gathering a report's figures and the progress board read: a bounded number of statements
+// whatever the size of the study (the report's figures themselves are checked against
+// `fourfold-cli agree` in report_writer_test.cpp, the board's in tests/study).
 #include "app/report/report_data.h"
+#include "core/project/study_design.h"
 #include "tests/project/double_coded_project.h"
 
 using namespace fourfold;
@@ -19,4 +20,23 @@ TEST_CASE("a report reads the same number of statements for 8 and for 40 article
     CHECK(atSmall == atLarge);
     // Far below the 310 statements one report used to prepare.
     CHECK(atLarge < 25);
+}
+
+TEST_CASE("the progress board reads the same number of statements for 8 and for 40 articles")
+{
+    // It read every article with a statement of its own before (8 and 40 more).
+    DoubleCodedProject small(8), large(40);
+    qint64 atSmall = 0, atLarge = 0;
+    std::optional<double> agreement;
+    atSmall = small.statementsRunBy([&] {
+        auto board = StudyDesign::progressBoard(small.project);
+        REQUIRE(board);
+        REQUIRE_FALSE(board->rows.empty());
+        agreement = board->rows.front().agreement;
+    });
+    atLarge = large.statementsRunBy([&] { REQUIRE(StudyDesign::progressBoard(large.project)); });
+    CHECK(atSmall == atLarge);
+    CHECK(atLarge < 20);
+    // The coders' agreement was computed (the board compares finished articles).
+    CHECK(agreement.has_value());
 }
