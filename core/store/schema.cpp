@@ -297,8 +297,15 @@ CREATE INDEX annotation_link_by_target ON annotation_link(target_id);
 CREATE INDEX assignment_by_coder ON assignment(coder_id);
 )sql";
 
+// Migration 6: who coded what in which phase, answered from the index alone (CodingScope reads it
+// for every article when a window opens; the table rows hold quotes and notes).
+constexpr const char *kMigration6 = R"sql(
+CREATE INDEX annotation_coded ON annotation(article_id, coder_id, phase) WHERE deleted = 0;
+CREATE INDEX judgement_coded ON judgement(article_id, coder_id, phase) WHERE deleted = 0;
+)sql";
+
 constexpr std::array<const char *, kSchemaVersion> kMigrations {
-    kMigration1, kMigration2, kMigration3, kMigration4, kMigration5};
+    kMigration1, kMigration2, kMigration3, kMigration4, kMigration5, kMigration6};
 // A migration left out of the list would silently do nothing: every slot must hold one.
 static_assert(std::ranges::none_of(kMigrations, [](const char *m) { return m == nullptr; }),
     "kSchemaVersion is higher than the number of migrations in kMigrations");
