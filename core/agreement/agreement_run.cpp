@@ -110,6 +110,8 @@ Result<AnalysisResult> analyseTable(
     const QString scale =
         encoding.distance ? setDistanceKey(*encoding.distance) : levelKey(encoding.level);
     AgreementReport report = computeAgreement(*encoded, table.coders, scale, options);
+    // The cells live on as the encoded data: one copy of the unit matrix is kept, not two.
+    table.releaseCells();
     return AnalysisResult {std::move(table), encoding, std::move(*encoded), std::move(report)};
 }
 
@@ -203,7 +205,7 @@ Result<std::vector<PeriodAlpha>> AgreementRun::periods(const AnalysisResult &ana
     PeriodKind kind, int batchSize, const DiagnosticsProgress &progress) const
 {
     // The codings this run read once: a period's first coding is a coder's, never gold's.
-    return alphaByPeriod(m_codings, analysis.table, analysis.encoding, kind, batchSize, progress);
+    return alphaByPeriod(m_codings, analysis.table, analysis.encoded, kind, batchSize, progress);
 }
 
 QJsonObject continuumJson(const ContinuumResult &result)

@@ -38,6 +38,7 @@ struct AnalysisRequest {
 
 // A table of units, as encoded and compared.
 struct AnalysisResult {
+    // The units and coders compared; its cells were released once encoded (see encoded).
     ReliabilityTable table;
     EncodingOptions encoding;
     EncodedData encoded;

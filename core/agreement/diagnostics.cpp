@@ -326,13 +326,20 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
     auto counted = countedCodings(project, counting);
     if (!counted)
         return std::unexpected(counted.error());
-    return alphaByPeriod(*counted, table, encoding, kind, batchSize, progress);
+    auto encoded = encodeTable(table, encoding);
+    if (!encoded)
+        return std::unexpected(encoded.error());
+    return alphaByPeriod(*counted, table, *encoded, kind, batchSize, progress);
 }
 
 Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
-    const ReliabilityTable &table, const EncodingOptions &encoding, PeriodKind kind, int batchSize,
+    const ReliabilityTable &table, const EncodedData &encoded, PeriodKind kind, int batchSize,
     const DiagnosticsProgress &progress)
 {
+    const ReliabilityData &data = encoded.data;
+    if (table.unitCount() != size_t(data.units))
+        return fail(ErrorCode::InvalidArgument,
+            tr("The units named do not match the rows of the reliability data."));
     if (batchSize < 1)
         return fail(ErrorCode::InvalidArgument, tr("A batch holds at least one article."));
     QHash<qint64, QString> externalId;
@@ -362,10 +369,10 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
     std::vector<qint32> articleOfUnit = table.unitArticles(tableArticles);
     QSet<QString> inTable;
     for (size_t u = 0; u < table.unitCount(); ++u) {
-        const auto row = table.row(u);
-        if (std::count_if(
-                row.begin(), row.end(), [](qint32 v) { return v != ReliabilityTable::kMissing; })
-            >= 2)
+        int values = 0;
+        for (int c = 0; c < data.coders; ++c)
+            values += data.at(int(u), c) != kMissing ? 1 : 0;
+        if (values >= 2)
             inTable.insert(tableArticles[articleOfUnit[u]]);
     }
     std::vector<std::pair<std::pair<QString, qint64>, QString>> ordered;
@@ -409,10 +416,15 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
     for (size_t p = 0; p < periods.size(); ++p) {
         if (!carryOn(progress, int(p), int(periods.size())))
             return cancelled();
-        auto encoded = encodeTable(table.rows(unitsOf[p]), encoding);
-        if (!encoded)
-            return std::unexpected(encoded.error());
-        periods[p].alpha = krippendorffAlpha(encoded->data, encoded->metric);
+        ReliabilityData part;
+        part.coders = data.coders;
+        part.values = data.values;
+        part.units = int(unitsOf[p].size());
+        part.cells.reserve(unitsOf[p].size() * size_t(data.coders));
+        for (const size_t u : unitsOf[p])
+            for (int c = 0; c < data.coders; ++c)
+                part.cells.push_back(data.at(int(u), c));
+        periods[p].alpha = krippendorffAlpha(part, encoded.metric);
     }
     if (!carryOn(progress, int(periods.size()), int(periods.size())))
         return cancelled();

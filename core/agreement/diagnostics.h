@@ -134,9 +134,12 @@ struct PeriodAlpha {
 Result<std::vector<PeriodAlpha>> alphaByPeriod(const Project &project,
     const UnitSelection &selection, const ReliabilityTable &table, const EncodingOptions &encoding,
     PeriodKind kind, int batchSize = 3, const DiagnosticsProgress &progress = {});
-// The same on codings already read for the table's selection (gold's codings are skipped).
+// The same on codings already read for the table's selection (gold's codings are skipped) and
+// the table already encoded: `table` names the units (its cells are not read), `encoded` holds
+// them. A period's alpha is that of its rows of `encoded`, which equals alpha of those rows
+// encoded anew (values no row of the period holds add nothing to the coincidences).
 Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &codings,
-    const ReliabilityTable &table, const EncodingOptions &encoding, PeriodKind kind,
-    int batchSize = 3, const DiagnosticsProgress &progress = {});
+    const ReliabilityTable &table, const EncodedData &encoded, PeriodKind kind, int batchSize = 3,
+    const DiagnosticsProgress &progress = {});
 
 } // namespace fourfold

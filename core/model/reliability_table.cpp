@@ -182,11 +182,11 @@ std::vector<qint32> ReliabilityTable::unitArticles(QStringList &articles) const
 }
 
 void ReliabilityTable::appendBlockUnit(
-    const Block &from, size_t unit, const ReliabilityTable &source)
+    const Block &from, size_t unit, const ReliabilityTable &origin)
 {
-    const auto cells = source.row(unit);
+    const auto cells = origin.row(unit);
     if (!from.numbered) {
-        appendUnit(source.ownId(unit), cells, source.unitLine(unit));
+        appendUnit(origin.ownId(unit), cells, origin.unitLine(unit));
         return;
     }
     // A numbered unit joins the last block when it follows on from it.

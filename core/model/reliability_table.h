@@ -57,6 +57,9 @@ public:
     QStringList rowText(size_t unit) const;
     // Every cell, unit by unit (units × coders).
     const std::vector<qint32> &cells() const { return m_cells; }
+    // Frees the cells, keeping coders, labels and units (unitCount() stays): for a table whose
+    // cells now live elsewhere, e.g. encoded. cell() and row() may not be called afterwards.
+    void releaseCells() { m_cells = {}; }
     // Replaces every cell's label index l with relabel[l] (a new index into labels(), which
     // `labels` then become); kMissing stays missing.
     void relabel(const std::vector<qint32> &relabel, const QStringList &labels);
@@ -105,7 +108,7 @@ private:
         size_t firstOwn = 0; // with own ids: the index of the first in m_ownEnd
     };
     const Block &blockOf(size_t unit) const;
-    void appendBlockUnit(const Block &from, size_t unit, const ReliabilityTable &source);
+    void appendBlockUnit(const Block &from, size_t unit, const ReliabilityTable &origin);
 
     static constexpr qsizetype kScannedLabels = 16;
     QStringList m_labels;
