@@ -43,6 +43,7 @@ public:
     // Fails with NotFound naming the article when an article's language has no cue list and
     // "otherLanguages" is "error".
     Result<std::vector<ExtractedSpan>> extract(const std::vector<Article> &articles) override;
+    bool readsArticlesAlone() const override { return true; }
 
     // The spans of one sentence of `article` (`sentence` in code points) under `cues`, with
     // `article` left unset; used by extract() and by tests.

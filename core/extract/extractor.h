@@ -34,6 +34,10 @@ public:
     // unset. Fails (and returns no spans at all) when the extractor cannot do its work, with a
     // sentence that names the article or the output line at fault.
     virtual Result<std::vector<ExtractedSpan>> extract(const std::vector<Article> &articles) = 0;
+    // Whether the spans it finds in an article depend on that article alone: the articles of a
+    // run are then handed over a batch at a time (ExtractorRuns::kArticlesPerBatch) rather than
+    // all at once, so a run over a whole study holds one batch of texts.
+    virtual bool readsArticlesAlone() const { return false; }
 
 protected:
     Extractor() = default;

@@ -87,24 +87,31 @@ Result<ExtractorRun> ExtractorRuns::create(Project &project, Extractor &extracto
         for (const ArticleSummary &s : *summaries)
             ids.push_back(s.id);
     }
+    // The articles in batches when the extractor reads each alone, else all at once.
+    const size_t batch = extractor.readsArticlesAlone() ? kArticlesPerBatch : ids.size();
+    std::vector<ExtractedSpan> found;
     std::vector<Article> input;
-    input.reserve(ids.size());
-    for (ArticleId id : ids) {
-        auto article = project.article(id);
-        if (!article)
-            return std::unexpected(article.error());
-        input.push_back(std::move(*article));
+    for (size_t from = 0; from < ids.size(); from += batch) {
+        input.clear();
+        for (size_t i = from; i < std::min(ids.size(), from + batch); ++i) {
+            auto article = project.article(ids[i]);
+            if (!article)
+                return std::unexpected(article.error());
+            input.push_back(std::move(*article));
+        }
+        auto spans = extractor.extract(input);
+        if (!spans)
+            return std::unexpected(spans.error());
+        found.insert(found.end(), std::make_move_iterator(spans->begin()),
+            std::make_move_iterator(spans->end()));
     }
-    auto found = extractor.extract(input);
-    if (!found)
-        return std::unexpected(found.error());
 
     ExtractorRun run;
     run.name = name;
     run.version = extractor.version();
     run.parameters = extractor.parameters();
     run.parameters.insert(QStringLiteral("extractor"), extractor.kind());
-    return storeRun(project, std::move(run), *found);
+    return storeRun(project, std::move(run), found);
 }
 
 Result<ExtractorRun> ExtractorRuns::importRun(Project &project, const QString &name,

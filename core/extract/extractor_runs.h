@@ -21,6 +21,9 @@ class ExtractorRuns
 {
 public:
     // Every run of the project, oldest first.
+    // How many articles an extractor that reads each article alone is given at a time.
+    static constexpr size_t kArticlesPerBatch = 256;
+
     static Result<std::vector<ExtractorRun>> runs(const Project &project);
     // The run called `name`, or nothing.
     static Result<std::optional<ExtractorRun>> runByName(

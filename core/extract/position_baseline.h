@@ -34,6 +34,7 @@ public:
     QJsonObject parameters() const override { return m_parameters; }
     // Never fails.
     Result<std::vector<ExtractedSpan>> extract(const std::vector<Article> &articles) override;
+    bool readsArticlesAlone() const override { return true; }
 
 private:
     PositionBaseline() = default;

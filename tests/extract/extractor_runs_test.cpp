@@ -286,3 +286,64 @@ TEST_CASE("runs: a malformed span file is refused with file, line and column, no
     REQUIRE_FALSE(missing);
     CHECK(missing.error().code == ErrorCode::Io);
 }
+
+namespace {
+
+// Records the size of every batch it is given and finds one span at the start of each article.
+class BatchRecorder final : public Extractor
+{
+public:
+    explicit BatchRecorder(bool alone)
+        : m_alone(alone)
+    { }
+    std::vector<size_t> batches;
+
+    QString kind() const override { return QStringLiteral("batches"); }
+    QString version() const override { return QStringLiteral("1"); }
+    QJsonObject parameters() const override { return {}; }
+    bool readsArticlesAlone() const override { return m_alone; }
+    Result<std::vector<ExtractedSpan>> extract(const std::vector<Article> &articles) override
+    {
+        batches.push_back(articles.size());
+        std::vector<ExtractedSpan> out;
+        for (const Article &a : articles) {
+            ExtractedSpan s;
+            s.article = a.summary.id;
+            s.range = TextRange {0, 4};
+            out.push_back(s);
+        }
+        return out;
+    }
+
+private:
+    bool m_alone = false;
+};
+
+} // namespace
+
+TEST_CASE("runs: an extractor that reads articles alone gets them a batch at a time")
+{
+    ProjectFixture f;
+    QByteArray jsonl;
+    for (int i = 1; i <= 600; ++i)
+        jsonl += "{\"id\": \"g" + QByteArray::number(i)
+            + "\", \"title\": \"T\", \"text\": \"Ferry fares rise again in town "
+            + QByteArray::number(i) + ".\"}\n";
+    f.importJsonl(jsonl);
+    BatchRecorder alone(true), whole(false);
+    auto a = ExtractorRuns::create(f.project, alone, QStringLiteral("alone"));
+    REQUIRE(a);
+    auto w = ExtractorRuns::create(f.project, whole, QStringLiteral("whole"));
+    REQUIRE(w);
+    // 600 articles: two full batches and the rest; an extractor that may compare articles
+    // across the study (an external program) gets them all at once.
+    CHECK(alone.batches == std::vector<size_t> {256, 256, 88});
+    CHECK(whole.batches == std::vector<size_t> {600});
+    // Every batch's spans are stored, the same as from one call.
+    auto fromBatches = ExtractorRuns::spans(f.project, a->id);
+    auto fromOne = ExtractorRuns::spans(f.project, w->id);
+    REQUIRE(fromBatches);
+    REQUIRE(fromOne);
+    CHECK(fromBatches->size() == 600);
+    CHECK(fromOne->size() == 600);
+}
