@@ -107,8 +107,8 @@ int runCodebook(const QStringList &arguments)
                 return report(lead.error());
             if (!*lead)
                 return report(Error {ErrorCode::NotFound,
-                    tr("There is no coder \"%1\" in the project.").arg(parser.value(by)), {}, {},
-                    0, 0});
+                    tr("There is no coder \"%1\" in the project.").arg(parser.value(by)), {}, {}, 0,
+                    0});
             author = (*lead)->id;
         }
         auto before = project->codebook();

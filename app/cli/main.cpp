@@ -7,9 +7,10 @@
 #include <QDir>
 #include <QGuiApplication>
 
-#include <cerrno>
 #include <sys/stat.h>
 #include <unistd.h>
+
+#include <cerrno>
 #endif
 
 #include <functional>
@@ -40,15 +41,38 @@ const std::map<QString, Command> &commands()
                 runInfo}},
         {QStringLiteral("check"),
             {QT_TRANSLATE_NOOP("cli", "Check a project file's integrity."), runCheck}},
-        {QStringLiteral("agree"), {QT_TRANSLATE_NOOP("cli", "Inter-coder reliability of a matrix file or of a project's codings."), runAgree}},
-        {QStringLiteral("extract"), {QT_TRANSLATE_NOOP("cli", "Run an extractor (built-in baseline or external command) over a project's articles."), runExtract}},
-        {QStringLiteral("score"), {QT_TRANSLATE_NOOP("cli", "Score an extractor run against gold or a coder."), runScore}},
-        {QStringLiteral("export"), {QT_TRANSLATE_NOOP("cli", "Export gold, codings or a run as JSON Lines, W3C Web Annotation, IOB2 or CSV."), runExport}},
-        {QStringLiteral("report"), {QT_TRANSLATE_NOOP("cli", "Write the reliability report (HTML or PDF)."), runReport}},
-        {QStringLiteral("assign"), {QT_TRANSLATE_NOOP("cli", "Assign articles to coders and draw the reliability subsample."), runAssign}},
-        {QStringLiteral("codebook"), {QT_TRANSLATE_NOOP("cli", "List codebook versions, add one from a JSON file, and show what changed."), runCodebook}},
-        {QStringLiteral("handout"), {QT_TRANSLATE_NOOP("cli", "Write a coder copy holding only that coder's articles and annotations."), runHandout}},
-        {QStringLiteral("merge"), {QT_TRANSLATE_NOOP("cli", "Merge returned coder copies into the project."), runMerge}},
+        {QStringLiteral("agree"),
+            {QT_TRANSLATE_NOOP(
+                 "cli", "Inter-coder reliability of a matrix file or of a project's codings."),
+                runAgree}},
+        {QStringLiteral("extract"),
+            {QT_TRANSLATE_NOOP("cli",
+                 "Run an extractor (built-in baseline or external command) over a project's "
+                 "articles."),
+                runExtract}},
+        {QStringLiteral("score"),
+            {QT_TRANSLATE_NOOP("cli", "Score an extractor run against gold or a coder."),
+                runScore}},
+        {QStringLiteral("export"),
+            {QT_TRANSLATE_NOOP("cli",
+                 "Export gold, codings or a run as JSON Lines, W3C Web Annotation, IOB2 or CSV."),
+                runExport}},
+        {QStringLiteral("report"),
+            {QT_TRANSLATE_NOOP("cli", "Write the reliability report (HTML or PDF)."), runReport}},
+        {QStringLiteral("assign"),
+            {QT_TRANSLATE_NOOP(
+                 "cli", "Assign articles to coders and draw the reliability subsample."),
+                runAssign}},
+        {QStringLiteral("codebook"),
+            {QT_TRANSLATE_NOOP(
+                 "cli", "List codebook versions, add one from a JSON file, and show what changed."),
+                runCodebook}},
+        {QStringLiteral("handout"),
+            {QT_TRANSLATE_NOOP(
+                 "cli", "Write a coder copy holding only that coder's articles and annotations."),
+                runHandout}},
+        {QStringLiteral("merge"),
+            {QT_TRANSLATE_NOOP("cli", "Merge returned coder copies into the project."), runMerge}},
         {QStringLiteral("build-sample"),
             {QT_TRANSLATE_NOOP("cli", "Build the demo project from its source files."),
                 runBuildSample}},
@@ -84,10 +108,11 @@ int main(int argc, char *argv[])
         // Qt's platform code wants a private runtime folder and warns on stderr without one
         // (as in a login-less shell or CI); give it one so the report's output stays clean.
         if (!qEnvironmentVariableIsSet("XDG_RUNTIME_DIR")) {
-            const QByteArray dir = QDir::temp()
-                                       .filePath(QStringLiteral("fourfold-runtime-%1")
-                                               .arg(QString::number(::getuid())))
-                                       .toLocal8Bit();
+            const QByteArray dir =
+                QDir::temp()
+                    .filePath(
+                        QStringLiteral("fourfold-runtime-%1").arg(QString::number(::getuid())))
+                    .toLocal8Bit();
             if (::mkdir(dir.constData(), 0700) == 0 || errno == EEXIST)
                 qputenv("XDG_RUNTIME_DIR", dir);
         }

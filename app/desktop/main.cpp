@@ -17,27 +17,34 @@ int main(int argc, char *argv[])
     QApplication::setOrganizationName(QStringLiteral("Fourfold"));
 
     // The language chosen in Settings, else the system's.
-    const QString language = QSettings().value(QStringLiteral("language"), QStringLiteral("system")).toString();
+    const QString language =
+        QSettings().value(QStringLiteral("language"), QStringLiteral("system")).toString();
     const QLocale locale = language == QLatin1String("system") ? QLocale() : QLocale(language);
     QTranslator translator;
-    if (translator.load(locale, QStringLiteral("fourfold"), QStringLiteral("_"), QStringLiteral(":/i18n")))
+    if (translator.load(
+            locale, QStringLiteral("fourfold"), QStringLiteral("_"), QStringLiteral(":/i18n")))
         QApplication::installTranslator(&translator);
 
     QCommandLineParser parser;
-    parser.setApplicationDescription(QApplication::translate("main", "Fourfold: manual frame analysis of news and opinion articles."));
+    parser.setApplicationDescription(QApplication::translate(
+        "main", "Fourfold: manual frame analysis of news and opinion articles."));
     parser.addHelpOption();
-    const QCommandLineOption coder(QStringLiteral("coder"), QApplication::translate("main", "Code as the coder with this pseudonym."),
-                                   QStringLiteral("PSEUDONYM"));
+    const QCommandLineOption coder(QStringLiteral("coder"),
+        QApplication::translate("main", "Code as the coder with this pseudonym."),
+        QStringLiteral("PSEUDONYM"));
     parser.addOption(coder);
-    parser.addPositionalArgument(QStringLiteral("PROJECT"), QApplication::translate("main", "A project file to open (*.fourfold)."));
+    parser.addPositionalArgument(QStringLiteral("PROJECT"),
+        QApplication::translate("main", "A project file to open (*.fourfold)."));
     parser.process(app);
 
     fourfold::MainWindow window;
     window.show();
     if (!parser.positionalArguments().isEmpty()) {
-        const auto st = window.openProject(parser.positionalArguments().first(), parser.value(coder));
+        const auto st =
+            window.openProject(parser.positionalArguments().first(), parser.value(coder));
         if (!st && st.error().code != fourfold::ErrorCode::Cancelled)
-            QMessageBox::warning(&window, QApplication::translate("main", "Cannot open project"), st.error().toString());
+            QMessageBox::warning(&window, QApplication::translate("main", "Cannot open project"),
+                st.error().toString());
     }
     return app.exec();
 }

@@ -57,7 +57,7 @@ struct GoldAnnotation {
     GoldId id;
     QString uuid;
     ArticleId article;
-    AnnotationContent content;  // note and confidence are not used for gold
+    AnnotationContent content; // note and confidence are not used for gold
     QString quote;
     CoderId decidedBy;
     QString decidedAt;
@@ -71,7 +71,7 @@ struct Assignment {
     ArticleId article;
     CoderId coder;
     Phase phase = Phase::Production;
-    QString status;  // "assigned", "started", "done"
+    QString status; // "assigned", "started", "done"
     qint64 activeSeconds = 0;
 };
 

@@ -42,8 +42,8 @@ Error movedDown(Error error, qint64 lines)
     if (error.line <= 0 || !error.message.startsWith(prefix))
         return error;
     error.line += lines;
-    error.message = placePrefix(error.file, error.line, error.column)
-        + error.message.sliced(prefix.size());
+    error.message =
+        placePrefix(error.file, error.line, error.column) + error.message.sliced(prefix.size());
     return error;
 }
 

@@ -287,7 +287,7 @@ TEST_CASE("a refused change keeps its error and never reaches the undo stack")
     const ArticleId article = articleId(w, "emoji-01");
     auto st = w.session()->addSpan(article, FramingFunction::Problem, TextRange {0, 100000});
     REQUIRE_FALSE(st);
-    CHECK(st.error().code == ErrorCode::InvalidArgument);  // the range lies outside the text
+    CHECK(st.error().code == ErrorCode::InvalidArgument); // the range lies outside the text
     CHECK(w.session()->undoStack()->count() == 0);
     CHECK(w.session()->project().annotations(article)->empty());
 }

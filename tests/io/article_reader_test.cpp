@@ -87,8 +87,8 @@ TEST_CASE("readArticles: files that cannot be read", "[io]")
             const auto result = readArticles(path, {});
             REQUIRE_FALSE(result.has_value());
             CHECK(result.error().code == ErrorCode::InvalidInput);
-            CHECK(result.error().message.contains(
-                QStringLiteral("a file may be at most 1024 MiB")));
+            CHECK(
+                result.error().message.contains(QStringLiteral("a file may be at most 1024 MiB")));
         }
     }
     SECTION("JSON Lines and CSV files are streamed: a file above that size is read, not refused")

@@ -1,5 +1,4 @@
 #include "core/model/reliability_table.h"
-
 #include "tests/support/test_support.h"
 
 #include <vector>

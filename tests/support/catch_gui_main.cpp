@@ -1,10 +1,10 @@
 // The Catch2 main of GUI test programs: a QApplication on the offscreen platform, with its own
 // settings so that tests never read or write a person's Fourfold settings.
 #define CATCH_CONFIG_RUNNER
-#include <catch2/catch.hpp>
-
 #include <QApplication>
 #include <QStandardPaths>
+
+#include <catch2/catch.hpp>
 
 int main(int argc, char *argv[])
 {

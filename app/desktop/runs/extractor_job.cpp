@@ -6,14 +6,13 @@
 
 namespace fourfold {
 
-namespace {
-
-} // namespace
+namespace { } // namespace
 
 Result<ExtractorOutcome> runExtractorJob(const ExtractorRequest &request)
 {
     if (request.runs.isEmpty())
-        return fail(ErrorCode::InvalidArgument, QCoreApplication::translate("ExtractorJob", "Choose at least one run."));
+        return fail(ErrorCode::InvalidArgument,
+            QCoreApplication::translate("ExtractorJob", "Choose at least one run."));
     // A connection of this thread's own: the window's connection stays on the GUI thread.
     auto project = Project::open(request.projectPath);
     if (!project)

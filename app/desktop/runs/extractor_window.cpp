@@ -638,8 +638,8 @@ void ExtractorWindow::showScores()
         addRow(tr("Macro"), QColor(), nullptr, s.macroPrecision, s.macroRecall, s.macroF1,
             s.replicates ? &s.macroIntervals : nullptr, nullptr);
         if (run.agreement)
-            notes << tr("%1: alpha on %n unit(s) (%2) with coders %3.", nullptr,
-                run.agreement->units)
+            notes << tr(
+                "%1: alpha on %n unit(s) (%2) with coders %3.", nullptr, run.agreement->units)
                          .arg(run.run, m_unit->currentText(),
                              run.agreement->coders.join(QStringLiteral(", ")));
         else
