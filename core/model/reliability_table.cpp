@@ -27,8 +27,7 @@ qint32 ReliabilityTable::labelIndex(QStringView label)
                 return qint32(i);
         m_labels << label.toString();
         if (m_labels.size() > kScannedLabels)
-            for (qsizetype i = 0; i < m_labels.size(); ++i)
-                m_labelIndex.insert(m_labels[i], qint32(i));
+            indexLabels();
         return qint32(m_labels.size() - 1);
     }
     auto found = m_labelIndex.constFind(label.toString());
@@ -61,8 +60,13 @@ void ReliabilityTable::relabel(const std::vector<qint32> &relabel, const QString
     m_labels = labels;
     m_labelIndex.clear();
     if (m_labels.size() > kScannedLabels)
-        for (qsizetype i = 0; i < m_labels.size(); ++i)
-            m_labelIndex.insert(m_labels[i], qint32(i));
+        indexLabels();
+}
+
+void ReliabilityTable::indexLabels()
+{
+    for (qsizetype i = 0; i < m_labels.size(); ++i)
+        m_labelIndex.insert(m_labels[i], qint32(i));
 }
 
 void ReliabilityTable::reserve(size_t units)
@@ -215,11 +219,19 @@ ReliabilityTable ReliabilityTable::rows(std::span<const size_t> units) const
 
 ReliabilityTable ReliabilityTable::columns(std::span<const qsizetype> columns) const
 {
-    ReliabilityTable out = *this;
-    out.coders.clear();
+    // Everything but the cells is shared (implicitly, for the Qt members) or small; the cells
+    // are not copied only to be replaced.
+    ReliabilityTable out;
+    out.source = source;
+    out.m_labels = m_labels;
+    out.m_labelIndex = m_labelIndex;
+    out.m_unitCount = m_unitCount;
+    out.m_blocks = m_blocks;
+    out.m_ownText = m_ownText;
+    out.m_ownEnd = m_ownEnd;
+    out.m_ownLine = m_ownLine;
     for (qsizetype c : columns)
         out.coders << coders[c];
-    out.m_cells.clear();
     out.m_cells.reserve(m_unitCount * columns.size());
     for (size_t u = 0; u < m_unitCount; ++u)
         for (qsizetype c : columns)

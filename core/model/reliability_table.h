@@ -108,6 +108,8 @@ private:
         size_t firstOwn = 0; // with own ids: the index of the first in m_ownEnd
     };
     const Block &blockOf(size_t unit) const;
+    // Fills m_labelIndex from m_labels (once there are more than kScannedLabels).
+    void indexLabels();
     void appendBlockUnit(const Block &from, size_t unit, const ReliabilityTable &origin);
 
     static constexpr qsizetype kScannedLabels = 16;
