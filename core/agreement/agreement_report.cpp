@@ -150,8 +150,7 @@ AgreementReport computeAgreement(const EncodedData &encoded, const QStringList &
             p.coderA = a;
             p.coderB = b;
             const ContingencyTable table = contingencyTable(data, a, b);
-            for (double c : table.counts)
-                p.units += int(c);
+            p.units = int(table.total());
             p.percentAgreement = percentAgreement(table);
             p.cohenKappa = cohenKappa(table, options.kappaWeights);
             r.pairs.push_back(p);

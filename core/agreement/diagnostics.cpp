@@ -151,19 +151,7 @@ Result<std::vector<LeaveOneOut>> leaveOneArticleOut(
                 own.cells.push_back(data.at(u, c));
         cellsCopied += own.cells.size();
         const CoincidenceMatrix part = coincidences(own);
-        CoincidenceMatrix rest = everything;
-        // Sums of multiples of 1/(m_u − 1): what is left of an emptied cell is rounding only.
-        const auto minus = [](double &x, double y) {
-            x -= y;
-            if (std::abs(x) < 1e-9)
-                x = 0;
-        };
-        for (size_t i = 0; i < rest.o.size() && i < part.o.size(); ++i)
-            minus(rest.o[i], part.o[i]);
-        for (size_t i = 0; i < rest.marginals.size() && i < part.marginals.size(); ++i)
-            minus(rest.marginals[i], part.marginals[i]);
-        minus(rest.total, part.total);
-        rest.units -= part.units;
+        const CoincidenceMatrix rest = withoutPart(everything, part);
         out.push_back(
             entry(articles[left], krippendorffAlpha(rest, encoded.metric), all, own.units));
     }

@@ -98,19 +98,15 @@ void pairResampling(const ReliabilityData &data, const AlphaResult &alpha,
     std::vector<char> &kept)
 {
     const CoincidenceMatrix &c = alpha.coincidences;
-    const std::size_t v = std::size_t(c.values);
 
     // Step one: the segments p_cc = o_cc / n and p_ck = 2 o_ck / n for c < k.
     std::vector<double> weights;
     std::vector<PairCell> cells;
-    for (std::size_t a = 0; a < v; ++a) {
-        for (std::size_t b = a; b < v; ++b) {
-            const double o = c.o[a * v + b];
-            if (!(o > 0))
-                continue;
-            weights.push_back(a == b ? o / c.total : 2.0 * o / c.total);
-            cells.push_back({alpha.delta[a * v + b], a == b});
-        }
+    for (const Coincidence &cell : c.cells) {
+        if (cell.c > cell.k || !(cell.o > 0))
+            continue;
+        weights.push_back(cell.c == cell.k ? cell.o / c.total : 2.0 * cell.o / c.total);
+        cells.push_back({alpha.difference(cell.c, cell.k), cell.c == cell.k});
     }
     const DrawCounts sampler(weights);
 
@@ -158,7 +154,7 @@ void pairResampling(const ReliabilityData &data, const AlphaResult &alpha,
 // add the same to the coincidences, so drawing a unit is drawing its group with probability
 // (units in the group) / (pairable units).
 struct UnitPattern {
-    std::vector<std::pair<std::size_t, double>> cells; // (c · values + k, contribution to o_ck)
+    std::vector<std::pair<std::size_t, double>> cells; // (slot of (c, k), contribution to o_ck)
     double values = 0; // m_u
 };
 
@@ -166,8 +162,18 @@ void unitResampling(const ReliabilityData &data, const Metric &metric, const Alp
     const BootstrapOptions &options, BootstrapResult &result, std::vector<double> &replicateAlphas,
     std::vector<char> &kept)
 {
-    const std::size_t v = std::size_t(data.values);
     const std::size_t coders = std::size_t(data.coders);
+    // The (c, k) entries of the coincidence matrix that any unit adds to, in the matrix's order:
+    // a replicate's matrix holds at most these.
+    const std::vector<Coincidence> &slots = alpha.coincidences.cells;
+    const auto slotOf = [&](int c, int k) {
+        const Coincidence key {c, k, 0};
+        return std::size_t(std::lower_bound(slots.begin(), slots.end(), key,
+                               [](const Coincidence &a, const Coincidence &b) {
+                                   return a.c != b.c ? a.c < b.c : a.k < b.k;
+                               })
+            - slots.begin());
+    };
     std::map<std::vector<int>, std::size_t> index;
     std::vector<UnitPattern> patterns;
     std::vector<double> weights;
@@ -205,8 +211,7 @@ void unitResampling(const ReliabilityData &data, const Metric &metric, const Alp
                 for (const auto &[b, nb] : runs) {
                     const double pairs = double(na) * nb - (a == b ? na : 0);
                     if (pairs > 0)
-                        pattern.cells.emplace_back(
-                            std::size_t(a) * v + std::size_t(b), pairs / double(m - 1));
+                        pattern.cells.emplace_back(slotOf(a, b), pairs / double(m - 1));
                 }
             }
             patterns.push_back(std::move(pattern));
@@ -222,24 +227,24 @@ void unitResampling(const ReliabilityData &data, const Metric &metric, const Alp
         std::mt19937_64 generator(replicateSeed(options.seed, std::uint64_t(r)));
         std::vector<std::int64_t> drawn;
         sampler.draw(units, generator, drawn);
+        std::vector<double> o(slots.size(), 0.0);
         CoincidenceMatrix c;
         c.values = data.values;
-        c.o.assign(v * v, 0.0);
-        c.marginals.assign(v, 0.0);
         for (std::size_t p = 0; p < patterns.size(); ++p) {
             if (drawn[p] == 0)
                 continue;
             const double times = double(drawn[p]);
-            for (const auto &[cell, o] : patterns[p].cells)
-                c.o[cell] += times * o;
+            for (const auto &[slot, contribution] : patterns[p].cells)
+                o[slot] += times * contribution;
             c.total += times * patterns[p].values;
             c.units += int(drawn[p]);
         }
-        for (std::size_t a = 0; a < v; ++a) {
-            double sum = 0;
-            for (std::size_t b = 0; b < v; ++b)
-                sum += c.o[a * v + b];
-            c.marginals[a] = sum;
+        c.marginals.assign(std::size_t(data.values), 0.0);
+        for (std::size_t slot = 0; slot < slots.size(); ++slot) {
+            if (o[slot] == 0)
+                continue;
+            c.cells.push_back({slots[slot].c, slots[slot].k, o[slot]});
+            c.marginals[std::size_t(slots[slot].c)] += o[slot];
         }
         const AlphaResult replicate = krippendorffAlpha(c, metric);
         if (replicate.value) {

@@ -5,6 +5,8 @@
 #include <algorithm>
 #include <cmath>
 #include <cstddef>
+#include <cstdint>
+#include <span>
 #include <string>
 
 namespace fourfold::reliability {
@@ -44,56 +46,141 @@ std::string number(double x)
     return s;
 }
 
-// Cell shares p_ij and the marginal shares p_i. (rows) and p_.j (columns) of a table.
+bool cellBefore(const TableCell &a, const TableCell &b)
+{
+    return a.row != b.row ? a.row < b.row : a.column < b.column;
+}
+
+// Cell shares p_ij (the table's non-zero cells, in its order) and the marginal shares p_i. (rows)
+// and p_.j (columns) of a table.
 struct TableShares {
     double n = 0;
-    std::vector<double> cells, rows, columns;
+    std::vector<TableCell> cells; // count = p_ij
+    std::vector<double> rows, columns;
+    double diagonal = 0; // Σ p_ii
 };
 
 // Validates `table` and returns its shares; on failure sets `reason` and returns nothing.
 std::optional<TableShares> tableShares(const ContingencyTable &table, UndefinedReason &reason)
 {
     const int k = table.categories;
-    if (k < 1 || table.counts.size() != std::size_t(k) * std::size_t(k)) {
+    if (k < 1 || table.malformed) {
         reason = "the contingency table is malformed: it does not hold k × k counts for k ≥ 1 "
                  "categories";
         return std::nullopt;
     }
     TableShares s;
-    for (double c : table.counts) {
-        if (!std::isfinite(c) || c < 0) {
+    for (std::size_t i = 0; i < table.cells.size(); ++i) {
+        const TableCell &cell = table.cells[i];
+        if (!isCode(cell.row, k) || !isCode(cell.column, k)
+            || (i > 0 && !cellBefore(table.cells[i - 1], cell))) {
+            reason = "the contingency table is malformed: a cell lies outside the k × k table, "
+                     "is given twice or out of order";
+            return std::nullopt;
+        }
+        if (!std::isfinite(cell.count) || cell.count < 0) {
             reason = "the contingency table holds a negative or non-finite count";
             return std::nullopt;
         }
-        s.n += c;
+        s.n += cell.count;
     }
     if (s.n <= 0) {
         reason = "no unit was coded by both coders";
         return std::nullopt;
     }
-    s.cells.resize(table.counts.size());
+    s.cells.reserve(table.cells.size());
     s.rows.assign(std::size_t(k), 0.0);
     s.columns.assign(std::size_t(k), 0.0);
-    for (int i = 0; i < k; ++i) {
-        for (int j = 0; j < k; ++j) {
-            const double p = table.counts[at(i, j, k)] / s.n;
-            s.cells[at(i, j, k)] = p;
-            s.rows[std::size_t(i)] += p;
-            s.columns[std::size_t(j)] += p;
-        }
+    for (const TableCell &cell : table.cells) {
+        const double p = cell.count / s.n;
+        s.cells.push_back({cell.row, cell.column, p});
+        s.rows[std::size_t(cell.row)] += p;
+        s.columns[std::size_t(cell.column)] += p;
+        if (cell.row == cell.column)
+            s.diagonal += p;
     }
     return s;
 }
 
-// The k × k disagreement weights of Cohen (1968): 1 − δ_ij for unweighted kappa (Cohen 1960 is
-// the special case), |i − j| or (i − j)² by category position, or the validated custom matrix.
-// Returns a reason when the custom weights are unusable, else an empty string.
-UndefinedReason disagreementWeights(
-    int k, KappaWeights kind, const std::vector<double> &custom, std::vector<double> &w)
+// Σ_i Σ_j r_i c_j (i − j)^p for p ≤ 4, from moments about each side's mean (i − j = X − Y + d
+// with X = i − μ_r, Y = j − μ_c, d = μ_r − μ_c, expanded binomially), so nothing of the size of
+// k^p cancels: O(k) instead of a sum over k² pairs.
+double positionMoment(const std::vector<double> &r, const std::vector<double> &c, int p)
 {
-    w.assign(std::size_t(k) * std::size_t(k), 0.0);
-    if (kind == KappaWeights::Custom) {
-        if (custom.size() != w.size())
+    const auto mean = [](const std::vector<double> &x) {
+        double total = 0, first = 0;
+        for (std::size_t i = 0; i < x.size(); ++i) {
+            total += x[i];
+            first += x[i] * double(i);
+        }
+        return total > 0 ? first / total : 0.0;
+    };
+    const double muR = mean(r), muC = mean(c), d = muR - muC;
+    std::vector<double> rMoments(std::size_t(p) + 1, 0.0); // Σ r_i X^a
+    std::vector<double> cMoments(std::size_t(p) + 1, 0.0); // Σ c_j (d − Y)^b
+    for (std::size_t i = 0; i < r.size(); ++i) {
+        const double x = double(i) - muR;
+        const double y = d - (double(i) - muC);
+        double xa = 1, yb = 1;
+        for (int a = 0; a <= p; ++a) {
+            rMoments[std::size_t(a)] += r[i] * xa;
+            cMoments[std::size_t(a)] += c[i] * yb;
+            xa *= x;
+            yb *= y;
+        }
+    }
+    double sum = 0, binomial = 1;
+    for (int a = 0; a <= p; ++a) {
+        sum += binomial * rMoments[std::size_t(a)] * cMoments[std::size_t(p - a)];
+        binomial = binomial * double(p - a) / double(a + 1);
+    }
+    return sum;
+}
+
+// For every position i: Σ_j x_j |i − j|, from running sums (O(k)).
+std::vector<double> absoluteDistances(const std::vector<double> &x)
+{
+    double total = 0, moment = 0;
+    for (std::size_t j = 0; j < x.size(); ++j) {
+        total += x[j];
+        moment += x[j] * double(j);
+    }
+    std::vector<double> out(x.size(), 0.0);
+    double below = 0, belowMoment = 0; // Σ_{j<i} x_j and Σ_{j<i} j x_j
+    for (std::size_t i = 0; i < x.size(); ++i) {
+        const double position = double(i);
+        const double above = total - below - x[i];
+        const double aboveMoment = moment - belowMoment - x[i] * position;
+        out[i] = (position * below - belowMoment) + (aboveMoment - position * above);
+        below += x[i];
+        belowMoment += x[i] * position;
+    }
+    return out;
+}
+
+// The disagreement weights w_ij of Cohen (1968): 1 − δ_ij for unweighted kappa (Cohen 1960 is
+// the special case), |i − j| or (i − j)² by category position, or a custom k × k matrix.
+class DisagreementWeights
+{
+public:
+    // What kappa and its standard errors need of the weights, given the marginal shares r (rows)
+    // and c (columns); w' = 1 − w / w_max are the agreement weights.
+    struct Sums {
+        double wMax = 0;
+        double expected = 0; // Σ_ij w_ij r_i c_j
+        std::vector<double> byRow; // Σ_j c_j w_ij, per row i
+        std::vector<double> byColumn; // Σ_i r_i w_ij, per column j
+        double agreementSquares = 0; // Σ_ij r_i c_j w'_ij²
+    };
+
+    // A reason when the custom weights are unusable for k categories, else empty.
+    UndefinedReason set(int k, KappaWeights kind, const std::vector<double> &custom)
+    {
+        m_k = k;
+        m_kind = kind;
+        if (kind != KappaWeights::Custom)
+            return {};
+        if (custom.size() != std::size_t(k) * std::size_t(k))
             return "the custom kappa weights are not a k × k matrix for the table's "
                 + std::to_string(k) + " categories";
         for (int i = 0; i < k; ++i) {
@@ -108,45 +195,181 @@ UndefinedReason disagreementWeights(
         }
         if (*std::max_element(custom.begin(), custom.end()) <= 0)
             return "the custom kappa weights are all 0: no disagreement is weighted";
-        w = custom;
+        m_custom = &custom;
         return {};
     }
-    for (int i = 0; i < k; ++i) {
-        for (int j = 0; j < k; ++j) {
-            const double d = std::abs(double(i - j));
-            switch (kind) {
-            case KappaWeights::None:
-            case KappaWeights::Custom:
-                w[at(i, j, k)] = i == j ? 0.0 : 1.0;
-                break;
-            case KappaWeights::Linear:
-                w[at(i, j, k)] = d;
-                break;
-            case KappaWeights::Quadratic:
-                w[at(i, j, k)] = d * d;
-                break;
-            }
+
+    double operator()(int i, int j) const
+    {
+        const double d = std::abs(double(i - j));
+        switch (m_kind) {
+        case KappaWeights::None:
+            return i == j ? 0.0 : 1.0;
+        case KappaWeights::Linear:
+            return d;
+        case KappaWeights::Quadratic:
+            return d * d;
+        case KappaWeights::Custom:
+            return (*m_custom)[at(i, j, m_k)];
         }
+        return 0;
     }
-    return {};
-}
+
+    Sums sums(const std::vector<double> &r, const std::vector<double> &c) const
+    {
+        Sums s;
+        const std::size_t k = std::size_t(m_k);
+        double rTotal = 0, cTotal = 0;
+        for (std::size_t i = 0; i < k; ++i) {
+            rTotal += r[i];
+            cTotal += c[i];
+        }
+        const double both = rTotal * cTotal; // Σ_ij r_i c_j, 1 up to rounding
+        switch (m_kind) {
+        case KappaWeights::None: {
+            double same = 0;
+            s.byRow.resize(k);
+            s.byColumn.resize(k);
+            for (std::size_t i = 0; i < k; ++i) {
+                same += r[i] * c[i];
+                s.byRow[i] = cTotal - c[i];
+                s.byColumn[i] = rTotal - r[i];
+            }
+            s.wMax = 1;
+            s.expected = both - same;
+            s.agreementSquares = same;
+            break;
+        }
+        case KappaWeights::Linear: {
+            s.wMax = double(m_k - 1);
+            s.byRow = absoluteDistances(c);
+            s.byColumn = absoluteDistances(r);
+            for (std::size_t i = 0; i < k; ++i)
+                s.expected += r[i] * s.byRow[i];
+            // (1 − |i − j|/W)² = 1 − 2|i − j|/W + (i − j)²/W².
+            s.agreementSquares =
+                both - 2 * s.expected / s.wMax + positionMoment(r, c, 2) / (s.wMax * s.wMax);
+            break;
+        }
+        case KappaWeights::Quadratic: {
+            s.wMax = double(m_k - 1) * double(m_k - 1);
+            // Σ_j c_j (i − j)² = C (i − μ_c)² + Σ_j c_j (j − μ_c)², likewise for the columns.
+            const auto spread = [&](const std::vector<double> &x, double total) {
+                double mu = 0;
+                for (std::size_t i = 0; i < k; ++i)
+                    mu += x[i] * double(i);
+                mu = total > 0 ? mu / total : 0.0;
+                double variance = 0;
+                for (std::size_t i = 0; i < k; ++i)
+                    variance += x[i] * (double(i) - mu) * (double(i) - mu);
+                std::vector<double> out(k);
+                for (std::size_t i = 0; i < k; ++i)
+                    out[i] = total * (double(i) - mu) * (double(i) - mu) + variance;
+                return out;
+            };
+            s.byRow = spread(c, cTotal);
+            s.byColumn = spread(r, rTotal);
+            for (std::size_t i = 0; i < k; ++i)
+                s.expected += r[i] * s.byRow[i];
+            // (1 − (i − j)²/W)² = 1 − 2(i − j)²/W + (i − j)⁴/W².
+            s.agreementSquares =
+                both - 2 * s.expected / s.wMax + positionMoment(r, c, 4) / (s.wMax * s.wMax);
+            break;
+        }
+        case KappaWeights::Custom: {
+            const std::vector<double> &w = *m_custom;
+            s.wMax = *std::max_element(w.begin(), w.end());
+            s.byRow.assign(k, 0.0);
+            s.byColumn.assign(k, 0.0);
+            for (std::size_t i = 0; i < k; ++i) {
+                for (std::size_t j = 0; j < k; ++j) {
+                    const double x = w[i * k + j];
+                    const double agree = 1 - x / s.wMax;
+                    s.byRow[i] += c[j] * x;
+                    s.byColumn[j] += r[i] * x;
+                    s.expected += r[i] * c[j] * x;
+                    s.agreementSquares += r[i] * c[j] * agree * agree;
+                }
+            }
+            break;
+        }
+        }
+        return s;
+    }
+
+private:
+    int m_k = 0;
+    KappaWeights m_kind = KappaWeights::None;
+    const std::vector<double> *m_custom = nullptr;
+};
 
 } // namespace
+
+ContingencyTable::ContingencyTable(int k, const std::vector<double> &counts)
+    : categories(k)
+{
+    if (k < 0 || counts.size() != std::size_t(k) * std::size_t(k)) {
+        malformed = true;
+        return;
+    }
+    for (int i = 0; i < k; ++i)
+        for (int j = 0; j < k; ++j)
+            if (const double count = counts[at(i, j, k)]; count != 0)
+                cells.push_back({i, j, count});
+}
+
+std::vector<double> ContingencyTable::dense() const
+{
+    const int k = std::max(categories, 0);
+    std::vector<double> out(std::size_t(k) * std::size_t(k), 0.0);
+    for (const TableCell &cell : cells)
+        if (isCode(cell.row, k) && isCode(cell.column, k))
+            out[at(cell.row, cell.column, k)] += cell.count;
+    return out;
+}
+
+double ContingencyTable::total() const
+{
+    double sum = 0;
+    for (const TableCell &cell : cells)
+        sum += cell.count;
+    return sum;
+}
 
 ContingencyTable contingencyTable(const ReliabilityData &data, int coderA, int coderB)
 {
     ContingencyTable table;
     table.categories = std::max(data.values, 0);
     const int k = table.categories;
-    table.counts.assign(std::size_t(k) * std::size_t(k), 0.0);
     if (!wellFormed(data) || coderA < 0 || coderA >= data.coders || coderB < 0
         || coderB >= data.coders)
         return table;
+    const std::size_t kk = std::size_t(k) * std::size_t(k);
+    if (kk <= (std::size_t(1) << 16) && kk <= 4 * std::size_t(data.units)) {
+        std::vector<double> counts(kk, 0.0);
+        for (int u = 0; u < data.units; ++u) {
+            const int a = data.at(u, coderA);
+            const int b = data.at(u, coderB);
+            if (isCode(a, k) && isCode(b, k))
+                counts[at(a, b, k)] += 1.0;
+        }
+        return ContingencyTable(k, counts);
+    }
+    // Many categories: the pairs that occur, sorted and counted.
+    std::vector<std::uint64_t> pairs;
     for (int u = 0; u < data.units; ++u) {
         const int a = data.at(u, coderA);
         const int b = data.at(u, coderB);
         if (isCode(a, k) && isCode(b, k))
-            table.counts[at(a, b, k)] += 1.0;
+            pairs.push_back(std::uint64_t(a) << 32 | std::uint32_t(b));
+    }
+    std::sort(pairs.begin(), pairs.end());
+    for (std::size_t i = 0; i < pairs.size();) {
+        std::size_t j = i;
+        while (j < pairs.size() && pairs[j] == pairs[i])
+            ++j;
+        table.cells.push_back({int(pairs[i] >> 32), int(pairs[i] & 0xFFFFFFFFu), double(j - i)});
+        i = j;
     }
     return table;
 }
@@ -167,23 +390,20 @@ KappaResult cohenKappa(
         r.reason = "the table has a single category: chance agreement is 1, so kappa is undefined";
         return r;
     }
-    std::vector<double> w;
-    if (UndefinedReason bad = disagreementWeights(k, weights, customWeights, w); !bad.empty()) {
+    DisagreementWeights w;
+    if (UndefinedReason bad = w.set(k, weights, customWeights); !bad.empty()) {
         r.reason = std::move(bad);
         return r;
     }
-    const double wMax = *std::max_element(w.begin(), w.end());
+    const DisagreementWeights::Sums sums = w.sums(s->rows, s->columns);
+    const double wMax = sums.wMax;
 
     // Cohen (1968): observed and chance-expected weighted disagreement, Σ w_ij p_ij and
     // Σ w_ij p_i. p_.j; with w_ij = 1 − δ_ij they are 1 − p_o and 1 − p_e of Cohen (1960).
-    double dObserved = 0, dExpected = 0;
-    for (int i = 0; i < k; ++i) {
-        for (int j = 0; j < k; ++j) {
-            const double wij = w[at(i, j, k)];
-            dObserved += wij * s->cells[at(i, j, k)];
-            dExpected += wij * s->rows[std::size_t(i)] * s->columns[std::size_t(j)];
-        }
-    }
+    double dObserved = 0;
+    for (const TableCell &cell : s->cells)
+        dObserved += w(cell.row, cell.column) * cell.count;
+    const double dExpected = sums.expected;
     // Agreement-weight form w' = 1 − w / w_max (Cohen 1968; Fleiss, Cohen & Everitt 1969):
     // p_o = Σ w'_ij p_ij, p_e = Σ w'_ij p_i. p_.j, so 1 − p_o and 1 − p_e are the scaled
     // disagreements (kept as such: they are exactly 0 when no disagreement is expected).
@@ -218,41 +438,41 @@ KappaResult cohenKappa(
     //              − (p_o p_e − 2 p_e + p_o)²] / (n (1 − p_e)⁴)
     //   var0(κ) = [Σ p_i. p_.j (w'_ij − (w̄_i. + w̄_.j))² − p_e²] / (n (1 − p_e)²)
     // The subtracted terms are the squared means of the bracketed quantities under p_ij and
-    // p_i. p_.j, so each bracket is a variance; it is computed about its mean to avoid
-    // cancellation, which keeps it ≥ 0 (0 at perfect agreement).
-    std::vector<double> agree(w.size());
-    for (std::size_t c = 0; c < w.size(); ++c)
-        agree[c] = 1 - w[c] / wMax;
-    std::vector<double> rowMean(std::size_t(k), 0.0), columnMean(std::size_t(k), 0.0);
-    for (int i = 0; i < k; ++i) {
-        for (int j = 0; j < k; ++j) {
-            rowMean[std::size_t(i)] += s->columns[std::size_t(j)] * agree[at(i, j, k)];
-            columnMean[std::size_t(j)] += s->rows[std::size_t(i)] * agree[at(i, j, k)];
-        }
+    // p_i. p_.j, so each bracket is a variance. The first runs over the table's non-zero cells,
+    // about its mean (no cancellation; 0 at perfect agreement). The second runs over all k²
+    // pairs; expanded with Σ_j p_.j w'_ij = w̄_i. and Σ_i p_i. w̄_i. = Σ_j p_.j w̄_.j = p_e it is
+    // Σ p_i. p_.j w'_ij² − Σ p_i. w̄_i.² − Σ p_.j w̄_.j² + p_e², which needs O(k) sums only.
+    std::vector<double> rowMean(static_cast<std::size_t>(k));
+    std::vector<double> columnMean(static_cast<std::size_t>(k));
+    double rTotal = 0, cTotal = 0;
+    for (std::size_t i = 0; i < std::size_t(k); ++i) {
+        rTotal += s->rows[i];
+        cTotal += s->columns[i];
     }
-    auto nonNull = [&](int i, int j) {
-        return agree[at(i, j, k)] * qExpected
-            - (rowMean[std::size_t(i)] + columnMean[std::size_t(j)]) * qObserved;
+    for (std::size_t i = 0; i < std::size_t(k); ++i) {
+        rowMean[i] = cTotal - sums.byRow[i] / wMax;
+        columnMean[i] = rTotal - sums.byColumn[i] / wMax;
+    }
+    auto nonNull = [&](const TableCell &cell) {
+        const double agree = 1 - w(cell.row, cell.column) / wMax;
+        return agree * qExpected
+            - (rowMean[std::size_t(cell.row)] + columnMean[std::size_t(cell.column)]) * qObserved;
     };
-    auto null = [&](int i, int j) {
-        return agree[at(i, j, k)] - (rowMean[std::size_t(i)] + columnMean[std::size_t(j)]);
-    };
-    double meanNonNull = 0, meanNull = 0;
-    for (int i = 0; i < k; ++i) {
-        for (int j = 0; j < k; ++j) {
-            meanNonNull += s->cells[at(i, j, k)] * nonNull(i, j);
-            meanNull += s->rows[std::size_t(i)] * s->columns[std::size_t(j)] * null(i, j);
-        }
+    double meanNonNull = 0;
+    for (const TableCell &cell : s->cells)
+        meanNonNull += cell.count * nonNull(cell);
+    double sumNonNull = 0;
+    for (const TableCell &cell : s->cells) {
+        const double a = nonNull(cell) - meanNonNull;
+        sumNonNull += cell.count * a * a;
     }
-    double sumNonNull = 0, sumNull = 0;
-    for (int i = 0; i < k; ++i) {
-        for (int j = 0; j < k; ++j) {
-            const double a = nonNull(i, j) - meanNonNull;
-            const double b = null(i, j) - meanNull;
-            sumNonNull += s->cells[at(i, j, k)] * a * a;
-            sumNull += s->rows[std::size_t(i)] * s->columns[std::size_t(j)] * b * b;
-        }
+    double rowSquares = 0, columnSquares = 0;
+    for (std::size_t i = 0; i < std::size_t(k); ++i) {
+        rowSquares += s->rows[i] * rowMean[i] * rowMean[i];
+        columnSquares += s->columns[i] * columnMean[i] * columnMean[i];
     }
+    const double pe = r.chanceAgreement;
+    const double sumNull = sums.agreementSquares - rowSquares - columnSquares + pe * pe;
     const double q2 = qExpected * qExpected;
     const double variance = sumNonNull / (s->n * q2 * q2);
     const double nullVariance = sumNull / (s->n * q2);
@@ -271,10 +491,10 @@ SimpleAgreement scottPi(const ContingencyTable &table)
     if (!s)
         return r;
     // Scott (1955): p_e = Σ_i ((p_i. + p_.i) / 2)², the squared pooled shares of both coders.
-    double pObserved = 0, pExpected = 0;
+    const double pObserved = s->diagonal;
+    double pExpected = 0;
     for (int i = 0; i < table.categories; ++i) {
         const double pooled = (s->rows[std::size_t(i)] + s->columns[std::size_t(i)]) / 2;
-        pObserved += s->cells[at(i, i, table.categories)];
         pExpected += pooled * pooled;
     }
     r.observedAgreement = pObserved;
@@ -299,9 +519,7 @@ SimpleAgreement bennettS(const ContingencyTable &table)
         r.reason = "S needs at least two categories";
         return r;
     }
-    double pObserved = 0;
-    for (int i = 0; i < k; ++i)
-        pObserved += s->cells[at(i, i, k)];
+    const double pObserved = s->diagonal;
     // Bennett, Alpert & Goldstein (1954); Brennan & Prediger (1981): chance agreement 1/k.
     const double pChance = 1.0 / k;
     r.observedAgreement = pObserved;
@@ -316,9 +534,7 @@ SimpleAgreement percentAgreement(const ContingencyTable &table)
     const auto s = tableShares(table, r.reason);
     if (!s)
         return r;
-    double alike = 0;
-    for (int i = 0; i < table.categories; ++i)
-        alike += s->cells[at(i, i, table.categories)];
+    const double alike = s->diagonal;
     r.value = alike;
     r.observedAgreement = alike;
     return r;
@@ -366,29 +582,40 @@ SimpleAgreement percentAgreement(const ReliabilityData &data)
     return r;
 }
 
-FleissResult fleissKappa(const std::vector<std::vector<double>> &counts)
+void SubjectCounts::addSubject(const std::vector<double> &counts)
+{
+    for (std::size_t j = 0; j < counts.size(); ++j)
+        if (counts[j] != 0)
+            entries.emplace_back(int(j), counts[j]);
+    starts.push_back(entries.size());
+}
+
+FleissResult fleissKappa(const SubjectCounts &counts)
 {
     FleissResult r;
-    if (counts.empty()) {
+    const int subjects = counts.subjects();
+    if (subjects <= 0) {
         r.reason = "there are no subjects";
         return r;
     }
-    const std::size_t k = counts.front().size();
+    const std::size_t k = std::size_t(std::max(counts.categories, 0));
     if (k == 0) {
         r.reason = "there are no categories";
         return r;
     }
-    const int subjects = int(counts.size());
+    const auto row = [&](int i) {
+        return std::span(counts.entries.data() + counts.starts[std::size_t(i)],
+            counts.starts[std::size_t(i) + 1] - counts.starts[std::size_t(i)]);
+    };
     double raters = 0;
     for (int i = 0; i < subjects; ++i) {
-        const auto &row = counts[std::size_t(i)];
-        if (row.size() != k) {
-            r.reason = "subject " + std::to_string(i + 1) + " has " + std::to_string(row.size())
-                + " categories, subject 1 has " + std::to_string(k);
-            return r;
-        }
         double sum = 0;
-        for (double c : row) {
+        for (const auto &[category, c] : row(i)) {
+            if (category < 0 || std::size_t(category) >= k) {
+                r.reason = "subject " + std::to_string(i + 1) + " has a count for category "
+                    + std::to_string(category) + ", outside 0.." + std::to_string(k - 1);
+                return r;
+            }
             if (!std::isfinite(c) || c < 0) {
                 r.reason =
                     "subject " + std::to_string(i + 1) + " has a negative or non-finite count";
@@ -414,14 +641,17 @@ FleissResult fleissKappa(const std::vector<std::vector<double>> &counts)
     const double bigN = subjects, n = raters;
 
     // Fleiss (1971): p_j = Σ_i n_ij / (N n); P_i = (Σ_j n_ij² − n) / (n (n − 1));
-    // P̄ = Σ P_i / N; P̄e = Σ p_j²; κ = (P̄ − P̄e) / (1 − P̄e).
+    // P̄ = Σ P_i / N; P̄e = Σ p_j²; κ = (P̄ − P̄e) / (1 − P̄e). Per category (below):
+    // Σ_i n_ij (n − n_ij). Zero counts add nothing to either, so only the non-zero ones are read.
     r.categoryShares.assign(k, 0.0);
+    std::vector<double> disagreeing(k, 0.0);
     double pBar = 0;
-    for (const auto &row : counts) {
+    for (int i = 0; i < subjects; ++i) {
         double squares = 0;
-        for (std::size_t j = 0; j < k; ++j) {
-            r.categoryShares[j] += row[j];
-            squares += row[j] * row[j];
+        for (const auto &[category, c] : row(i)) {
+            r.categoryShares[std::size_t(category)] += c;
+            disagreeing[std::size_t(category)] += c * (n - c);
+            squares += c * c;
         }
         pBar += (squares - n) / (n * (n - 1));
     }
@@ -446,10 +676,7 @@ FleissResult fleissKappa(const std::vector<std::vector<double>> &counts)
         const double pq = r.categoryShares[j] * (1 - r.categoryShares[j]);
         if (pq <= 0)
             continue;
-        double disagreeing = 0;
-        for (const auto &row : counts)
-            disagreeing += row[j] * (n - row[j]);
-        r.perCategory[j] = 1 - disagreeing / (bigN * n * (n - 1) * pq);
+        r.perCategory[j] = 1 - disagreeing[j] / (bigN * n * (n - 1) * pq);
         r.perCategoryNullStandardError[j] = std::sqrt(nullVarianceJ);
     }
 
@@ -466,22 +693,50 @@ FleissResult fleissKappa(const std::vector<std::vector<double>> &counts)
     return r;
 }
 
-std::vector<std::vector<double>> categoryCounts(const ReliabilityData &data)
+FleissResult fleissKappa(const std::vector<std::vector<double>> &counts)
 {
-    std::vector<std::vector<double>> counts;
+    SubjectCounts sparse;
+    sparse.categories = counts.empty() ? 0 : int(counts.front().size());
+    for (std::size_t i = 0; i < counts.size(); ++i) {
+        if (counts[i].size() != std::size_t(sparse.categories)) {
+            FleissResult r;
+            r.reason = "subject " + std::to_string(i + 1) + " has "
+                + std::to_string(counts[i].size()) + " categories, subject 1 has "
+                + std::to_string(sparse.categories);
+            return r;
+        }
+        sparse.addSubject(counts[i]);
+    }
+    return fleissKappa(sparse);
+}
+
+SubjectCounts categoryCounts(const ReliabilityData &data)
+{
+    SubjectCounts counts;
+    counts.categories = std::max(data.values, 0);
     if (!wellFormed(data) || data.coders == 0)
         return counts;
+    std::vector<int> row;
     for (int u = 0; u < data.units; ++u) {
-        std::vector<double> row(std::size_t(data.values), 0.0);
+        row.clear();
         bool complete = true;
         for (int c = 0; c < data.coders && complete; ++c) {
             const int v = data.at(u, c);
             complete = isCode(v, data.values);
             if (complete)
-                row[std::size_t(v)] += 1;
+                row.push_back(v);
         }
-        if (complete)
-            counts.push_back(std::move(row));
+        if (!complete)
+            continue;
+        std::sort(row.begin(), row.end());
+        for (std::size_t i = 0; i < row.size();) {
+            std::size_t j = i;
+            while (j < row.size() && row[j] == row[i])
+                ++j;
+            counts.entries.emplace_back(row[i], double(j - i));
+            i = j;
+        }
+        counts.starts.push_back(counts.entries.size());
     }
     return counts;
 }

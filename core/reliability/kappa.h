@@ -8,20 +8,43 @@
 
 #include "core/reliability/reliability_data.h"
 
+#include <cstddef>
 #include <optional>
+#include <utility>
 #include <vector>
 
 namespace fourfold::reliability {
 
-// A k × k table of counts (rows: coder 1, columns: coder 2), row-major.
+// One non-zero cell of a contingency table.
+struct TableCell {
+    int row = 0;
+    int column = 0;
+    double count = 0;
+    bool operator==(const TableCell &) const = default;
+};
+
+// A k × k table of counts (rows: coder 1, columns: coder 2), held as its non-zero cells, so its
+// memory grows with the pairs of categories that occur, not with k².
 struct ContingencyTable {
     int categories = 0;
-    std::vector<double> counts;
+    // Sorted by (row, column), each pair at most once. Every statistic checks the cells: a row or
+    // column outside 0..k−1, a pair given twice or out of order, or a negative or non-finite
+    // count make the table malformed.
+    std::vector<TableCell> cells;
+    // Set when the table was built from counts that are not k × k.
+    bool malformed = false;
+
+    ContingencyTable() = default;
+    // From k × k counts, row-major (the zeros left out).
+    ContingencyTable(int categories, const std::vector<double> &counts);
+    // The k × k counts, row-major; for small tables (tests, display).
+    std::vector<double> dense() const;
+    double total() const;
 };
 
 // The table of coders `coderA` (rows) and `coderB` (columns) over the units where both have a
 // value; categories = data.values. Coder indices out of range, or cells whose size is not
-// units × coders, give a table of zeros (which every statistic reports as undefined).
+// units × coders, give an empty table (which every statistic reports as undefined).
 ContingencyTable contingencyTable(const ReliabilityData &data, int coderA, int coderB);
 
 enum class KappaWeights { None, Linear, Quadratic, Custom };
@@ -49,9 +72,11 @@ struct KappaResult {
 // (i−j)² by category position (0..k−1), or `customWeights` (k × k, row-major, finite, ≥ 0, zero
 // diagonal, not all zero; need not be symmetric). Kappa and its standard errors do not change
 // when all weights are multiplied by a positive constant. Undefined (value nothing, reason set,
-// no standard errors) when the table is malformed (counts not k × k, negative or not finite),
-// the custom weights are invalid, n = 0, or p_e = 1 (no expected disagreement). Standard errors
-// are the large-sample ones of Fleiss, Cohen & Everitt (1969); both are 0 at perfect agreement.
+// no standard errors) when the table is malformed, the custom weights are invalid, n = 0, or
+// p_e = 1 (no expected disagreement). Standard errors are the large-sample ones of Fleiss, Cohen
+// & Everitt (1969); the non-null one is 0 at perfect agreement. Unweighted, linear and quadratic
+// kappa take time and memory in k plus the table's non-zero cells (sums over all k × k pairs are
+// taken in closed form); custom weights are a k × k table and cost k².
 KappaResult cohenKappa(const ContingencyTable &table, KappaWeights weights = KappaWeights::None,
     const std::vector<double> &customWeights = {});
 
@@ -97,14 +122,29 @@ struct FleissResult {
     double ratersPerSubject = 0; // n
     std::vector<double> categoryShares; // p_j, the share of all ratings in category j
 };
-// Fleiss (1971) on a subjects × categories table of counts (non-negative, finite; need not be
-// integers); every subject must have the same number n ≥ 2 of ratings (complete data), else
-// undefined with a reason. Also undefined when there are no subjects or only one category is
-// used (P̄e = 1). With n = 2 it equals Scott's pi of the two raters (Fleiss 1971).
+// The subjects × categories counts of Fleiss (1971), each subject's non-zero counts only:
+// subject i's are entries[starts[i] .. starts[i + 1]), as (category, count).
+struct SubjectCounts {
+    int categories = 0;
+    std::vector<std::size_t> starts {0};
+    std::vector<std::pair<int, double>> entries;
+
+    int subjects() const { return int(starts.size()) - 1; }
+    // Appends a subject from its counts per category (zeros left out).
+    void addSubject(const std::vector<double> &counts);
+};
+
+// Fleiss (1971) on subjects × categories counts (non-negative, finite; need not be integers);
+// every subject must have the same number n ≥ 2 of ratings (complete data), else undefined with
+// a reason. Also undefined when there are no subjects or only one category is used (P̄e = 1).
+// With n = 2 it equals Scott's pi of the two raters (Fleiss 1971). Time and memory grow with the
+// non-zero counts and the categories, not with subjects × categories.
+FleissResult fleissKappa(const SubjectCounts &counts);
+// The same from a dense table (one row per subject, one column per category).
 FleissResult fleissKappa(const std::vector<std::vector<double>> &counts);
-// The subjects × categories counts (data.values columns) of the complete units of `data`
-// (units with a missing cell are left out). Empty for malformed data.
-std::vector<std::vector<double>> categoryCounts(const ReliabilityData &data);
+// The counts (data.values categories) of the complete units of `data` (units with a missing
+// cell are left out). No subjects for malformed data.
+SubjectCounts categoryCounts(const ReliabilityData &data);
 
 // Light (1971): the mean of Cohen's (unweighted) kappa over all pairs of coders, each pair
 // over the units both coded. Undefined with fewer than two coders or when any pair's kappa is

@@ -1,33 +1,63 @@
 #include "core/reliability/krippendorff_alpha.h"
 
+#include <algorithm>
 #include <cmath>
 #include <cstdint>
+#include <unordered_map>
 
 namespace fourfold::reliability {
 
 namespace {
 
-// Above this many cells per matrix the exact integer accumulation (one matrix per distinct
-// number of values in a unit) would cost too much memory; sums are then taken in doubles.
-constexpr std::size_t kMaxExactCells = std::size_t(1) << 16;
+// Up to this many cells per matrix (and no more than a few per cell of the data) the
+// coincidences are counted in dense tables; beyond, in a hash table of the pairs that occur.
+// Both count exact integers per distinct number of values in a unit and give the same result.
+constexpr std::size_t kMaxDenseCells = std::size_t(1) << 16;
+
+// An entry of the sparse count: the pair of values (c, k) within units of m values.
+struct PairKey {
+    int c = 0;
+    int k = 0;
+    std::size_t m = 0;
+    bool operator==(const PairKey &) const = default;
+};
+
+struct PairKeyHash {
+    std::size_t operator()(const PairKey &key) const
+    {
+        std::uint64_t h = std::uint64_t(std::uint32_t(key.c)) << 32 | std::uint32_t(key.k);
+        h ^= std::uint64_t(key.m) * 0x9E3779B97F4A7C15ULL;
+        h ^= h >> 29;
+        return std::size_t(h * 0xBF58476D1CE4E5B9ULL);
+    }
+};
+
+// Marginals n_c = Σ_k o_ck from the sorted entries.
+void addMarginals(CoincidenceMatrix &result)
+{
+    result.marginals.assign(std::size_t(result.values), 0.0);
+    for (const Coincidence &cell : result.cells)
+        result.marginals[std::size_t(cell.c)] += cell.o;
+}
 
 // One pass over the units. Per unit: the number of values m_u and the count n_uc of each value;
 // a unit adds n_uc n_uk − [c = k] n_uc to o_ck, weighted 1 / (m_u − 1) (Krippendorff 2011,
-// §C; Krippendorff 2004, ch. 11). The unweighted sums are integers and are kept apart per m_u,
-// so o_ck is exact up to the final division.
+// §C; Krippendorff 2004, ch. 11). The unweighted sums are integers kept apart per m_u, so o_ck
+// is exact up to the final division, summed over m_u in ascending order.
 CoincidenceMatrix countCoincidences(const ReliabilityData &data)
 {
     CoincidenceMatrix result;
     const std::size_t v = std::size_t(data.values);
     const std::size_t coders = std::size_t(data.coders);
     result.values = data.values;
-    result.o.assign(v * v, 0.0);
     result.marginals.assign(v, 0.0);
     if (v == 0 || coders < 2)
         return result;
 
-    const bool exact = v * v <= kMaxExactCells;
-    std::vector<std::vector<std::int64_t>> sums(exact ? coders + 1 : 0); // by m_u
+    const bool dense = v * v <= kMaxDenseCells
+        && v * v <= 4 * std::size_t(data.units) * std::max<std::size_t>(coders, 1);
+    std::vector<std::vector<std::int64_t>> sums(dense ? coders + 1 : 0); // by m_u
+    std::unordered_map<PairKey, std::int64_t, PairKeyHash> sparse;
     std::vector<int> count(v, 0);
     std::vector<int> seen;
     seen.reserve(coders);
@@ -50,7 +80,7 @@ CoincidenceMatrix countCoincidences(const ReliabilityData &data)
         if (m >= 2) {
             ++pairableUnits;
             pairableValues += std::int64_t(m);
-            if (exact) {
+            if (dense) {
                 std::vector<std::int64_t> &s = sums[m];
                 if (s.empty())
                     s.assign(v * v, 0);
@@ -62,13 +92,13 @@ CoincidenceMatrix countCoincidences(const ReliabilityData &data)
                     row[c] -= nc;
                 }
             } else {
-                const double weight = 1.0 / double(m - 1);
                 for (const int c : seen) {
-                    const double nc = count[std::size_t(c)];
-                    double *row = result.o.data() + std::size_t(c) * v;
-                    for (const int k : seen)
-                        row[k] += weight * nc * count[std::size_t(k)];
-                    row[c] -= weight * nc;
+                    const std::int64_t nc = count[std::size_t(c)];
+                    for (const int k : seen) {
+                        const std::int64_t pairs = nc * count[std::size_t(k)] - (c == k ? nc : 0);
+                        if (pairs > 0)
+                            sparse[PairKey {c, k, m}] += pairs;
+                    }
                 }
             }
         }
@@ -76,33 +106,87 @@ CoincidenceMatrix countCoincidences(const ReliabilityData &data)
             count[std::size_t(value)] = 0;
     }
 
-    if (exact) {
+    if (dense) {
+        std::vector<double> o(v * v, 0.0);
         for (std::size_t m = 2; m < sums.size(); ++m) {
             if (sums[m].empty())
                 continue;
             const double denominator = double(m - 1);
             for (std::size_t i = 0; i < v * v; ++i)
-                result.o[i] += double(sums[m][i]) / denominator;
+                o[i] += double(sums[m][i]) / denominator;
+        }
+        for (std::size_t i = 0; i < v * v; ++i)
+            if (o[i] != 0)
+                result.cells.push_back({int(i / v), int(i % v), o[i]});
+    } else {
+        std::vector<std::pair<PairKey, std::int64_t>> entries(sparse.begin(), sparse.end());
+        sparse = {};
+        std::sort(entries.begin(), entries.end(), [](const auto &a, const auto &b) {
+            const PairKey &x = a.first;
+            const PairKey &y = b.first;
+            return x.c != y.c ? x.c < y.c : x.k != y.k ? x.k < y.k : x.m < y.m;
+        });
+        for (const auto &[key, sum] : entries) {
+            const double o = double(sum) / double(key.m - 1);
+            if (!result.cells.empty() && result.cells.back().c == key.c
+                && result.cells.back().k == key.k)
+                result.cells.back().o += o;
+            else
+                result.cells.push_back({key.c, key.k, o});
         }
     }
-    for (std::size_t c = 0; c < v; ++c) {
-        double sum = 0;
-        for (std::size_t k = 0; k < v; ++k)
-            sum += result.o[c * v + k];
-        result.marginals[c] = sum;
-    }
+    addMarginals(result);
     result.total = double(pairableValues);
     result.units = pairableUnits;
     return result;
 }
 
+bool before(const Coincidence &a, const Coincidence &b)
+{
+    return a.c != b.c ? a.c < b.c : a.k < b.k;
+}
+
 } // namespace
+
+double CoincidenceMatrix::at(int c, int k) const
+{
+    const Coincidence key {c, k, 0};
+    const auto it = std::lower_bound(cells.begin(), cells.end(), key, before);
+    return it != cells.end() && it->c == c && it->k == k ? it->o : 0.0;
+}
 
 CoincidenceMatrix coincidences(const ReliabilityData &data)
 {
     if (!dataProblem(data).empty())
         return {};
     return countCoincidences(data);
+}
+
+CoincidenceMatrix withoutPart(const CoincidenceMatrix &whole, const CoincidenceMatrix &part)
+{
+    // Sums of multiples of 1/(m_u − 1): what is left of an emptied entry is rounding only.
+    const auto minus = [](double x, double y) {
+        const double left = x - y;
+        return std::abs(left) < 1e-9 ? 0.0 : left;
+    };
+    CoincidenceMatrix rest;
+    rest.values = whole.values;
+    rest.cells.reserve(whole.cells.size());
+    auto p = part.cells.begin();
+    for (const Coincidence &cell : whole.cells) {
+        while (p != part.cells.end() && before(*p, cell))
+            ++p;
+        const bool matched = p != part.cells.end() && p->c == cell.c && p->k == cell.k;
+        const double o = matched ? minus(cell.o, p->o) : cell.o;
+        if (o != 0)
+            rest.cells.push_back({cell.c, cell.k, o});
+    }
+    rest.marginals = whole.marginals;
+    for (std::size_t i = 0; i < rest.marginals.size() && i < part.marginals.size(); ++i)
+        rest.marginals[i] = minus(rest.marginals[i], part.marginals[i]);
+    rest.total = minus(whole.total, part.total);
+    rest.units = whole.units - part.units;
+    return rest;
 }
 
 double AlphaResult::observedUnscaled() const
@@ -129,65 +213,118 @@ int differenceScale(const Metric &metric)
     return outside ? std::ilogb(largest) : 0;
 }
 
-std::vector<double> differenceMatrix(const Metric &metric, const CoincidenceMatrix &c)
+Difference::Difference(const Metric &metric, const CoincidenceMatrix &c)
+    : m_level(metric.level)
+    , m_custom(!metric.custom.empty())
+    , m_values(c.values)
+    , m_marginals(c.marginals)
 {
-    if (!metricProblem(metric, c.values).empty())
-        return {};
     const std::size_t v = std::size_t(c.values);
-    if (!metric.custom.empty())
-        return metric.custom;
-
-    std::vector<double> delta(v * v, 0.0);
-    const int scale = differenceScale(metric);
-    auto number = [&](std::size_t code) {
-        return metric.numeric.empty() ? double(code) : std::ldexp(metric.numeric[code], -scale);
-    };
-    switch (metric.level) {
+    if (m_custom) {
+        m_table = metric.custom;
+        return;
+    }
+    switch (m_level) {
     case Level::Nominal:
-        // δ²_ck = 0 if c = k, else 1 (Krippendorff 2011, §E).
-        for (std::size_t a = 0; a < v; ++a)
-            for (std::size_t b = 0; b < v; ++b)
-                delta[a * v + b] = a == b ? 0.0 : 1.0;
         break;
     case Level::Ordinal: {
-        // δ²_ck = (Σ_{g=c..k} n_g − (n_c + n_k)/2)² for c ≤ k, from the marginals of the
-        // pairable values, codes in rank order (Krippendorff 2011, §E).
-        if (c.marginals.size() != v)
-            return {};
-        std::vector<double> prefix(v + 1, 0.0); // prefix[i] = Σ_{g<i} n_g
-        for (std::size_t g = 0; g < v; ++g)
-            prefix[g + 1] = prefix[g] + c.marginals[g];
-        for (std::size_t a = 0; a < v; ++a) {
-            for (std::size_t b = a + 1; b < v; ++b) {
-                const double d =
-                    (prefix[b + 1] - prefix[a]) - (c.marginals[a] + c.marginals[b]) / 2.0;
-                delta[a * v + b] = delta[b * v + a] = d * d;
-            }
+        // δ²_ck = (Σ_{g=c..k} n_g − (n_c + n_k)/2)² for c ≤ k (Krippendorff 2011, §E), which is
+        // (r_k − r_c)² with the mid-rank r_g = Σ_{h<g} n_h + n_g / 2 of each code in rank order.
+        m_numbers.assign(v, 0.0);
+        double below = 0;
+        for (std::size_t g = 0; g < v && g < m_marginals.size(); ++g) {
+            m_numbers[g] = below + m_marginals[g] / 2.0;
+            below += m_marginals[g];
         }
         break;
     }
     case Level::Interval:
-        // δ²_ck = (c − k)² (Krippendorff 2011, §E).
-        for (std::size_t a = 0; a < v; ++a) {
-            for (std::size_t b = 0; b < v; ++b) {
-                const double d = number(a) - number(b);
-                delta[a * v + b] = d * d;
-            }
-        }
-        break;
     case Level::Ratio:
-        // δ²_ck = ((c − k)/(c + k))² (Krippendorff 2011, §E); two codes with the number 0 do
-        // not differ.
-        for (std::size_t a = 0; a < v; ++a) {
-            for (std::size_t b = 0; b < v; ++b) {
-                const double sum = number(a) + number(b);
-                const double d = sum == 0 ? 0.0 : (number(a) - number(b)) / sum;
-                delta[a * v + b] = d * d;
-            }
-        }
+        m_scale = differenceScale(metric);
+        m_numbers.assign(v, 0.0);
+        for (std::size_t g = 0; g < v; ++g)
+            m_numbers[g] =
+                metric.numeric.empty() ? double(g) : std::ldexp(metric.numeric[g], -m_scale);
         break;
     }
-    return delta;
+}
+
+double Difference::operator()(int c, int k) const
+{
+    if (m_custom)
+        return m_table[std::size_t(c) * std::size_t(m_values) + std::size_t(k)];
+    switch (m_level) {
+    case Level::Nominal:
+        // δ²_ck = 0 if c = k, else 1 (Krippendorff 2011, §E).
+        return c == k ? 0.0 : 1.0;
+    case Level::Ordinal:
+    case Level::Interval: {
+        // Interval: δ²_ck = (c − k)² (Krippendorff 2011, §E); ordinal: of the mid-ranks.
+        const double d = m_numbers[std::size_t(c)] - m_numbers[std::size_t(k)];
+        return d * d;
+    }
+    case Level::Ratio: {
+        // δ²_ck = ((c − k)/(c + k))² (Krippendorff 2011, §E); two codes with the number 0 do
+        // not differ.
+        const double a = m_numbers[std::size_t(c)];
+        const double b = m_numbers[std::size_t(k)];
+        const double d = a + b == 0 ? 0.0 : (a - b) / (a + b);
+        return d * d;
+    }
+    }
+    return 0;
+}
+
+double Difference::expectedSum() const
+{
+    std::vector<int> occurring;
+    double n = 0;
+    for (std::size_t g = 0; g < m_marginals.size(); ++g) {
+        if (m_marginals[g] > 0) {
+            occurring.push_back(int(g));
+            n += m_marginals[g];
+        }
+    }
+    // Σ_c Σ_k n_c n_k δ²_ck over the pairs of occurring codes, for metrics without a shortcut.
+    const auto byPairs = [&] {
+        double sum = 0;
+        for (std::size_t a = 0; a < occurring.size(); ++a) {
+            const int c = occurring[a];
+            double row = 0;
+            for (std::size_t b = 0; b < occurring.size(); ++b)
+                row += m_marginals[std::size_t(occurring[b])] * (*this)(c, occurring[b]);
+            sum += m_marginals[std::size_t(c)] * row;
+        }
+        return sum;
+    };
+    if (m_custom)
+        return byPairs();
+    if (m_level == Level::Nominal) {
+        // Σ_{c≠k} n_c n_k = n² − Σ n_c².
+        double squares = 0;
+        for (const int c : occurring)
+            squares += m_marginals[std::size_t(c)] * m_marginals[std::size_t(c)];
+        return n * n - squares;
+    }
+    // Codes whose numbers are all equal do not differ (exactly 0, whatever the rounding).
+    const bool oneNumber = std::all_of(occurring.begin(), occurring.end(),
+        [&](int c) { return m_numbers[std::size_t(c)] == m_numbers[std::size_t(occurring[0])]; });
+    if (occurring.empty() || oneNumber)
+        return 0;
+    if (m_level == Level::Ratio)
+        return byPairs();
+    // Interval and ordinal: Σ_c Σ_k n_c n_k (x_c − x_k)² = 2 n Σ_c n_c (x_c − x̄)² with x̄ the
+    // mean of the pairable values, taken about the mean so that nothing cancels.
+    double mean = 0;
+    for (const int c : occurring)
+        mean += m_marginals[std::size_t(c)] * m_numbers[std::size_t(c)];
+    mean /= n;
+    double squares = 0;
+    for (const int c : occurring) {
+        const double d = m_numbers[std::size_t(c)] - mean;
+        squares += m_marginals[std::size_t(c)] * d * d;
+    }
+    return 2.0 * n * squares;
 }
 
 AlphaResult krippendorffAlpha(const CoincidenceMatrix &c, const Metric &metric)
@@ -197,7 +334,10 @@ AlphaResult krippendorffAlpha(const CoincidenceMatrix &c, const Metric &metric)
     result.pairableUnits = c.units;
     result.pairableValues = c.total;
     const std::size_t v = std::size_t(c.values);
-    if (c.values < 0 || c.o.size() != v * v || c.marginals.size() != v) {
+    const bool inRange = std::all_of(c.cells.begin(), c.cells.end(), [&](const Coincidence &x) {
+        return x.c >= 0 && x.k >= 0 && x.c < c.values && x.k < c.values;
+    });
+    if (c.values < 0 || c.marginals.size() != v || !inRange) {
         result.reason = "the coincidence matrix is malformed";
         return result;
     }
@@ -210,31 +350,21 @@ AlphaResult krippendorffAlpha(const CoincidenceMatrix &c, const Metric &metric)
                         "more coders";
         return result;
     }
-    result.delta = differenceMatrix(metric, c);
+    result.difference = Difference(metric, c);
     // The ratio metric is free of units; the interval metric's δ² scales with the square.
     if (metric.level == Level::Interval && metric.custom.empty())
-        result.scaleExponent = 2 * differenceScale(metric);
+        result.scaleExponent = 2 * result.difference.scaleExponent();
 
     // D_o = (1/n) Σ_c Σ_k o_ck δ²_ck and D_e = 1/(n(n − 1)) Σ_c Σ_k n_c n_k δ²_ck
     // (Krippendorff 2011, §C–D).
     const double n = c.total;
     double observed = 0;
-    double expected = 0;
-    int occurring = 0;
-    for (std::size_t a = 0; a < v; ++a) {
-        if (c.marginals[a] > 0)
-            ++occurring;
-        double rowObserved = 0;
-        double rowExpected = 0;
-        for (std::size_t b = 0; b < v; ++b) {
-            rowObserved += c.o[a * v + b] * result.delta[a * v + b];
-            rowExpected += c.marginals[b] * result.delta[a * v + b];
-        }
-        observed += rowObserved;
-        expected += c.marginals[a] * rowExpected;
-    }
+    for (const Coincidence &cell : c.cells)
+        observed += cell.o * result.difference(cell.c, cell.k);
+    const int occurring =
+        int(std::count_if(c.marginals.begin(), c.marginals.end(), [](double m) { return m > 0; }));
     result.observedDisagreement = observed / n;
-    result.expectedDisagreement = expected / (n * (n - 1));
+    result.expectedDisagreement = result.difference.expectedSum() / (n * (n - 1));
     if (!std::isfinite(result.observedDisagreement)
         || !std::isfinite(result.expectedDisagreement)) {
         result.reason = "the differences between the values are too large to compute";

@@ -204,10 +204,11 @@ TEST_CASE(
     const CoincidenceMatrix &c = alpha.coincidences;
     double mean = 0;
     double square = 0;
-    for (std::size_t i = 0; i < c.o.size(); ++i) {
-        const double p = c.o[i] / c.total;
-        mean += p * alpha.delta[i];
-        square += p * alpha.delta[i] * alpha.delta[i];
+    for (const Coincidence &cell : c.cells) {
+        const double p = cell.o / c.total;
+        const double delta = alpha.difference(cell.c, cell.k);
+        mean += p * delta;
+        square += p * delta * delta;
     }
     const double expectedSd =
         std::sqrt(square - mean * mean) / (std::sqrt(239.0) * alpha.expectedDisagreement);

@@ -13,17 +13,24 @@ using Catch::Matchers::WithinAbs;
 
 namespace {
 
+// A small table written out in full (k × k counts, row-major), as the checks below build them.
+struct DenseTable {
+    int categories = 0;
+    std::vector<double> counts;
+    operator ContingencyTable() const { return ContingencyTable(categories, counts); }
+};
+
 // Φ⁻¹(0.975), the two-sided 95% normal quantile (scipy.stats.norm.ppf(0.975)).
 constexpr double kZ975 = 1.959963984540054;
 
 // Cohen (1960), p. 45 (as reproduced by a third party, see checks.md): rows coder 1, N = 200.
-const ContingencyTable kCohen1960 {3, {88, 14, 18, 10, 40, 10, 2, 6, 12}};
+const DenseTable kCohen1960 {3, {88, 14, 18, 10, 40, 10, 2, 6, 12}};
 // Cohen (1968): disagreement weights used with the Cohen (1960) table (third party, checks.md).
 const std::vector<double> kCohen1968Weights {0, 1, 3, 1, 0, 6, 3, 6, 0};
 // Fixed tables for the statsmodels comparison (invented).
-const ContingencyTable kFour {4, {22, 5, 2, 1, 4, 18, 6, 2, 1, 3, 15, 7, 0, 2, 4, 11}};
+const DenseTable kFour {4, {22, 5, 2, 1, 4, 18, 6, 2, 1, 3, 15, 7, 0, 2, 4, 11}};
 const std::vector<double> kFourWeights {0, 1, 2, 4, 1, 0, 1, 2, 2, 1, 0, 1, 4, 2, 1, 0};
-const ContingencyTable kTwo {2, {20, 5, 10, 15}};
+const DenseTable kTwo {2, {20, 5, 10, 15}};
 
 // Fleiss (1971), Table 1: 30 subjects × 6 raters, counts over 5 categories (checks.md).
 const std::vector<std::vector<double>> kFleiss1971 {
@@ -83,9 +90,9 @@ ReliabilityData fromCoders(const std::vector<int> &a, const std::vector<int> &b,
     return fromUnits(units, values);
 }
 
-ContingencyTable transposed(const ContingencyTable &t)
+DenseTable transposed(const DenseTable &t)
 {
-    ContingencyTable r {t.categories, t.counts};
+    DenseTable r {t.categories, t.counts};
     for (int i = 0; i < t.categories; ++i)
         for (int j = 0; j < t.categories; ++j)
             r.counts[cell(j, i, t.categories)] = t.counts[cell(i, j, t.categories)];
@@ -93,11 +100,11 @@ ContingencyTable transposed(const ContingencyTable &t)
 }
 
 // n units: coder 2 copies coder 1 with probability `copy`, else codes at random (invented).
-ContingencyTable randomTable(std::mt19937 &rng, int k, int n, double copy)
+DenseTable randomTable(std::mt19937 &rng, int k, int n, double copy)
 {
     std::uniform_int_distribution<int> category(0, k - 1);
     std::bernoulli_distribution copies(copy);
-    ContingencyTable t {k, std::vector<double>(std::size_t(k) * std::size_t(k), 0.0)};
+    DenseTable t {k, std::vector<double>(std::size_t(k) * std::size_t(k), 0.0)};
     for (int u = 0; u < n; ++u) {
         const int a = category(rng);
         const int b = copies(rng) ? a : category(rng);
@@ -111,7 +118,7 @@ ContingencyTable randomTable(std::mt19937 &rng, int k, int n, double copy)
 struct NaiveKappa {
     double kappa = 0, se = 0, se0 = 0;
 };
-NaiveKappa naiveUnweighted(const ContingencyTable &t)
+NaiveKappa naiveUnweighted(const DenseTable &t)
 {
     const int k = t.categories;
     const double n = std::accumulate(t.counts.begin(), t.counts.end(), 0.0);
@@ -151,7 +158,7 @@ NaiveKappa naiveUnweighted(const ContingencyTable &t)
 
 // Weighted kappa from agreement weights w' = 1 − w / w_max, (p_o − p_e) / (1 − p_e) (Cohen 1968;
 // Fleiss, Cohen & Everitt 1969), as a check of the disagreement form used in kappa.cpp.
-double agreementFormKappa(const ContingencyTable &t, const std::vector<double> &w)
+double agreementFormKappa(const DenseTable &t, const std::vector<double> &w)
 {
     const int k = t.categories;
     const double n = std::accumulate(t.counts.begin(), t.counts.end(), 0.0);
@@ -326,7 +333,7 @@ TEST_CASE("Cohen's kappa on label vectors matches scikit-learn")
         1, 2, 1, 3, 0, 2, 1, 3, 3, 3, 3, 3, 3, 2, 3, 2, 3};
     const ContingencyTable t = contingencyTable(fromCoders(a, b, 4), 0, 1);
     REQUIRE(t.categories == 4);
-    CHECK(std::accumulate(t.counts.begin(), t.counts.end(), 0.0) == 40);
+    CHECK(t.total() == 40);
     // reference: scikit-learn 1.2 sklearn.metrics.cohen_kappa_score(a, b, weights=None |
     // 'linear' | 'quadratic'), computed offline (Debian python3-sklearn 1.2.1).
     CHECK_THAT(*cohenKappa(t).value, WithinAbs(0.5619208087615839, 1e-9));
@@ -452,7 +459,7 @@ TEST_CASE("Fleiss' kappa with two raters equals Scott's pi")
     std::mt19937 rng(1955);
     for (int t = 0; t < 500; ++t) {
         const int k = 2 + int(rng() % 5);
-        const ContingencyTable table = randomTable(rng, k, 5 + int(rng() % 60), 0.5);
+        const DenseTable table = randomTable(rng, k, 5 + int(rng() % 60), 0.5);
         std::vector<std::vector<double>> counts;
         for (int i = 0; i < k; ++i)
             for (int j = 0; j < k; ++j)
@@ -512,7 +519,7 @@ TEST_CASE("properties of Cohen's kappa on random tables")
     int checked = 0;
     for (int t = 0; t < 1000; ++t) {
         const int k = 2 + int(rng() % 5);
-        const ContingencyTable table = randomTable(rng, k, 10 + int(rng() % 200), 0.6);
+        const DenseTable table = randomTable(rng, k, 10 + int(rng() % 200), 0.6);
         const KappaResult plain = cohenKappa(table);
         if (!plain.value)
             continue;
@@ -538,7 +545,7 @@ TEST_CASE("properties of Cohen's kappa on random tables")
         std::vector<int> perm(static_cast<std::size_t>(k));
         std::iota(perm.begin(), perm.end(), 0);
         std::shuffle(perm.begin(), perm.end(), rng);
-        ContingencyTable relabelled {k, table.counts};
+        DenseTable relabelled {k, table.counts};
         for (int i = 0; i < k; ++i)
             for (int j = 0; j < k; ++j)
                 relabelled.counts[cell(perm[std::size_t(i)], perm[std::size_t(j)], k)] =
@@ -588,7 +595,7 @@ TEST_CASE("perfect agreement gives 1")
     std::mt19937 rng(1);
     for (int t = 0; t < 100; ++t) {
         const int k = 2 + int(rng() % 5);
-        ContingencyTable table {k, std::vector<double>(std::size_t(k * k), 0.0)};
+        DenseTable table {k, std::vector<double>(std::size_t(k * k), 0.0)};
         for (int i = 0; i < k; ++i)
             table.counts[cell(i, i, k)] = double(rng() % 20);
         table.counts[cell(0, 0, k)] += 1;
@@ -640,8 +647,8 @@ TEST_CASE("Light's kappa with two coders equals Cohen's kappa")
         double alike = 0, both = 0;
         for (int i = 0; i < 4; ++i)
             for (int j = 0; j < 4; ++j) {
-                both += table.counts[cell(i, j, 4)];
-                alike += i == j ? table.counts[cell(i, j, 4)] : 0;
+                both += table.dense()[cell(i, j, 4)];
+                alike += i == j ? table.dense()[cell(i, j, 4)] : 0;
             }
         CHECK_THAT(*agreement.value, WithinAbs(alike / both, 1e-15));
         // From the pair's table it is the same share.
@@ -660,16 +667,20 @@ TEST_CASE("contingency table and category counts from reliability data")
     const ContingencyTable t = contingencyTable(d, 0, 2);
     REQUIRE(t.categories == 3);
     // Unit 3's code 7 is outside 0..2 and counts as missing (kappa.h).
-    CHECK(t.counts == std::vector<double> {1, 1, 0, 0, 0, 0, 0, 0, 1});
-    CHECK(contingencyTable(d, 0, 3).counts == std::vector<double>(9, 0.0));
-    CHECK(contingencyTable(d, -1, 0).counts == std::vector<double>(9, 0.0));
-    // Only complete units: 1 and 4.
-    CHECK(categoryCounts(d) == std::vector<std::vector<double>> {{1, 2, 0}, {3, 0, 0}});
+    CHECK(t.dense() == std::vector<double> {1, 1, 0, 0, 0, 0, 0, 0, 1});
+    CHECK(t.cells == std::vector<TableCell> {{0, 0, 1}, {0, 1, 1}, {2, 2, 1}});
+    CHECK(contingencyTable(d, 0, 3).cells.empty());
+    CHECK(contingencyTable(d, -1, 0).cells.empty());
+    // Only complete units: 1 and 4, their non-zero counts by category.
+    const SubjectCounts counts = categoryCounts(d);
+    CHECK(counts.subjects() == 2);
+    CHECK(counts.starts == std::vector<std::size_t> {0, 2, 3});
+    CHECK(counts.entries == std::vector<std::pair<int, double>> {{0, 1}, {1, 2}, {0, 3}});
     ReliabilityData broken = d;
     broken.cells.pop_back();
-    CHECK(categoryCounts(broken).empty());
+    CHECK(categoryCounts(broken).subjects() == 0);
     const ContingencyTable none = contingencyTable(broken, 0, 1);
-    CHECK(none.counts == std::vector<double>(9, 0.0));
+    CHECK(none.cells.empty());
     CHECK(lightKappa(broken).reason
         == "the reliability data are malformed: the number of cells is not units × coders");
 }
@@ -735,7 +746,14 @@ TEST_CASE("degenerate input is undefined with a reason, never NaN")
 
 TEST_CASE("Fleiss' kappa on degenerate input")
 {
-    CHECK(fleissKappa({}).reason == "there are no subjects");
+    CHECK(fleissKappa(std::vector<std::vector<double>> {}).reason == "there are no subjects");
+    CHECK(fleissKappa(SubjectCounts {}).reason == "there are no subjects");
+    SubjectCounts outside;
+    outside.categories = 2;
+    outside.addSubject({1, 1});
+    outside.entries.emplace_back(2, 2.0);
+    outside.starts.push_back(outside.entries.size());
+    CHECK(fleissKappa(outside).reason == "subject 2 has a count for category 2, outside 0..1");
     CHECK(fleissKappa(std::vector<std::vector<double>>(1)).reason == "there are no categories");
     CHECK(fleissKappa({{1, 2}, {1, 2, 0}}).reason == "subject 2 has 3 categories, subject 1 has 2");
     CHECK(fleissKappa({{1, 2}, {2, 2}}).reason
@@ -763,9 +781,7 @@ TEST_CASE("a small table's kappa interval is clipped to 1")
 {
     // n = 5: kappa = (0.8 − 0.48) / 0.52 = 0.6154 (Cohen 1960's formula by hand); its standard
     // error is large enough that value + 1.96 SE passes 1, which no kappa can reach.
-    ContingencyTable t;
-    t.categories = 2;
-    t.counts = {2, 0, 1, 2};
+    const ContingencyTable t {2, {2, 0, 1, 2}};
     const KappaResult r = cohenKappa(t);
     REQUIRE(r.value);
     CHECK_THAT(*r.value, WithinAbs(0.32 / 0.52, 1e-12));
@@ -776,4 +792,116 @@ TEST_CASE("a small table's kappa interval is clipped to 1")
     CHECK(r.weights == KappaWeights::None);
     CHECK(std::string(kappaWeightsKey(cohenKappa(t, KappaWeights::Quadratic).weights))
         == "quadratic");
+}
+
+namespace {
+
+// Weighted kappa and both standard errors of Fleiss, Cohen & Everitt (1969) written out over all
+// k × k pairs, with agreement weights w' = 1 − w / w_max: the check of the closed-form sums
+// kappa.cpp uses for the unweighted, linear and quadratic weights.
+NaiveKappa naiveWeighted(const DenseTable &t, KappaWeights kind)
+{
+    const int k = t.categories;
+    const double n = std::accumulate(t.counts.begin(), t.counts.end(), 0.0);
+    auto w = [&](int i, int j) {
+        const double d = std::abs(double(i - j));
+        return kind == KappaWeights::Linear ? d : kind == KappaWeights::Quadratic ? d * d : d > 0;
+    };
+    const double wMax = kind == KappaWeights::None ? 1.0
+        : kind == KappaWeights::Linear             ? double(k - 1)
+                                                   : double(k - 1) * double(k - 1);
+    auto agree = [&](int i, int j) { return 1 - w(i, j) / wMax; };
+    std::vector<double> row(std::size_t(k), 0.0), col(std::size_t(k), 0.0);
+    for (int i = 0; i < k; ++i)
+        for (int j = 0; j < k; ++j) {
+            row[std::size_t(i)] += t.counts[cell(i, j, k)] / n;
+            col[std::size_t(j)] += t.counts[cell(i, j, k)] / n;
+        }
+    double po = 0, pe = 0;
+    std::vector<double> rowBar(std::size_t(k), 0.0), colBar(std::size_t(k), 0.0);
+    for (int i = 0; i < k; ++i)
+        for (int j = 0; j < k; ++j) {
+            po += agree(i, j) * t.counts[cell(i, j, k)] / n;
+            pe += agree(i, j) * row[std::size_t(i)] * col[std::size_t(j)];
+            rowBar[std::size_t(i)] += col[std::size_t(j)] * agree(i, j);
+            colBar[std::size_t(j)] += row[std::size_t(i)] * agree(i, j);
+        }
+    double a = 0, b = 0;
+    for (int i = 0; i < k; ++i)
+        for (int j = 0; j < k; ++j) {
+            const double bars = rowBar[std::size_t(i)] + colBar[std::size_t(j)];
+            const double x = agree(i, j) * (1 - pe) - bars * (1 - po);
+            a += t.counts[cell(i, j, k)] / n * x * x;
+            const double y = agree(i, j) - bars;
+            b += row[std::size_t(i)] * col[std::size_t(j)] * y * y;
+        }
+    const double d = po * pe - 2 * pe + po;
+    NaiveKappa r;
+    r.kappa = (po - pe) / (1 - pe);
+    r.se = std::sqrt(std::max(0.0, (a - d * d) / (n * std::pow(1 - pe, 4))));
+    r.se0 = std::sqrt(std::max(0.0, (b - pe * pe) / (n * (1 - pe) * (1 - pe))));
+    return r;
+}
+
+} // namespace
+
+TEST_CASE("kappa with hundreds of categories matches the sums over all pairs")
+{
+    // Random tables with 50–400 categories (invented); the closed-form sums of kappa.cpp against
+    // Fleiss, Cohen & Everitt (1969) summed over every pair of categories.
+    std::mt19937 rng(1969);
+    for (int t = 0; t < 30; ++t) {
+        const int k = 50 + int(rng() % 350);
+        const DenseTable table = randomTable(rng, k, 200 + int(rng() % 2000), 0.6);
+        for (KappaWeights kind :
+            {KappaWeights::None, KappaWeights::Linear, KappaWeights::Quadratic}) {
+            const KappaResult r = cohenKappa(table, kind);
+            const NaiveKappa naive = naiveWeighted(table, kind);
+            REQUIRE(r.value);
+            CHECK_THAT(*r.value, WithinAbs(naive.kappa, 1e-10));
+            CHECK_THAT(*r.standardError, WithinAbs(naive.se, 1e-10));
+            CHECK_THAT(*r.nullStandardError, WithinAbs(naive.se0, 1e-10));
+        }
+    }
+}
+
+TEST_CASE("twenty thousand categories take memory in the pairs that occur")
+{
+    // 20,000 units × 2 coders, each unit its own label, the second coder agreeing 80% of the time
+    // (invented). A dense table would hold 4·10^8 counts.
+    const int units = 20000;
+    std::mt19937 rng(20000);
+    std::bernoulli_distribution agrees(0.8);
+    std::uniform_int_distribution<int> anyLabel(0, units - 1);
+    std::vector<int> a, b;
+    for (int u = 0; u < units; ++u) {
+        a.push_back(u);
+        b.push_back(agrees(rng) ? u : anyLabel(rng));
+    }
+    const ReliabilityData data = fromCoders(a, b, units);
+    const ContingencyTable table = contingencyTable(data, 0, 1);
+    CHECK(table.cells.size() <= std::size_t(units));
+    CHECK(table.total() == units);
+    // Cohen (1960) from the label vectors directly: p_o the share alike, p_e Σ p_i. p_.i.
+    std::vector<double> rows(std::size_t(units), 0.0), columns(std::size_t(units), 0.0);
+    double alike = 0;
+    for (int u = 0; u < units; ++u) {
+        rows[std::size_t(a[std::size_t(u)])] += 1.0 / units;
+        columns[std::size_t(b[std::size_t(u)])] += 1.0 / units;
+        alike += a[std::size_t(u)] == b[std::size_t(u)] ? 1.0 / units : 0.0;
+    }
+    double chance = 0;
+    for (int i = 0; i < units; ++i)
+        chance += rows[std::size_t(i)] * columns[std::size_t(i)];
+    const KappaResult kappa = cohenKappa(table);
+    REQUIRE(kappa.value);
+    CHECK_THAT(*kappa.value, WithinAbs((alike - chance) / (1 - chance), 1e-12));
+    // Fleiss' kappa holds each unit's non-zero counts only: at most two per unit.
+    const SubjectCounts counts = categoryCounts(data);
+    CHECK(counts.subjects() == units);
+    CHECK(counts.entries.size() <= std::size_t(2 * units));
+    const FleissResult fleiss = fleissKappa(counts);
+    REQUIRE(fleiss.value);
+    CHECK_THAT(*fleiss.value, WithinAbs(*scottPi(table).value, 1e-12));
+    CHECK(fleiss.perCategory.size() == std::size_t(units));
 }
