@@ -163,6 +163,15 @@ Result<AnalysisResult> AgreementRun::analyse(
     auto table = unitTable(*m_project, m_codings, selectionFor(request));
     if (!table)
         return std::unexpected(table.error());
+    // A value of an older codebook version counts as the current version recodes it; one it does
+    // not know is missing, so that no analysis fails on an older annotation.
+    if (request.unit == UnitKind::Span && request.function)
+        table->recodeLabels([&](const QString &v) {
+            return m_codebook.countedAttributeValue(*request.function, request.attribute, v);
+        });
+    else if (request.unit == UnitKind::Article)
+        table->recodeLabels(
+            [&](const QString &v) { return m_codebook.countedAnswer(request.item, v); });
     if (isSetUnit(request) && !request.setFunctions.empty()) {
         QStringList keep;
         for (FramingFunction f : request.setFunctions)

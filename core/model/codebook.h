@@ -7,9 +7,11 @@
 #include "core/model/ids.h"
 
 #include <QJsonObject>
+#include <QMap>
 #include <QString>
 #include <QStringList>
 
+#include <optional>
 #include <vector>
 
 namespace fourfold {
@@ -26,6 +28,9 @@ struct AttributeSpec {
     Type type = Type::Choice;
     QStringList values; // for Choice, in order (the order matters for ordinal levels)
     MeasurementLevel level = MeasurementLevel::Nominal;
+    // For Choice: values of earlier versions that are no longer in `values`, each with the value
+    // of `values` it now counts as (e.g. "neutral" → "negative" when neutral was merged).
+    QMap<QString, QString> recode;
 };
 
 struct FunctionDefinition {
@@ -43,7 +48,20 @@ struct ArticleItem {
     QString question;
     QStringList values;
     MeasurementLevel level = MeasurementLevel::Nominal;
+    // Answers of earlier versions that are no longer in `values`, each with the value it now
+    // counts as.
+    QMap<QString, QString> recode;
 };
+
+// What `value`, given under any version, counts as under a version with `values` and `recode`:
+// itself when `values` holds it, its recoding, or nothing (a value this version does not know).
+std::optional<QString> countedValue(
+    const QStringList &values, const QMap<QString, QString> &recode, const QString &value);
+
+// How strictly Codebook::fromJson reads: a file to become a new version is read with every rule;
+// a version already stored is read with the schema's keys and types only, so that a project whose
+// codebook was stored under looser rules still opens.
+enum class CodebookCheck { File, Stored };
 
 struct Codebook {
     CodebookVersionId versionId; // row of this version in the project (0 before it is stored)
@@ -52,14 +70,24 @@ struct Codebook {
     std::vector<FunctionDefinition> functions; // exactly four, in kFramingFunctions order
     std::vector<ArticleItem> items;
 
-    // Parses the JSON form. Fails with InvalidInput naming `source` and what is wrong (a missing
-    // function, an attribute without values, an unknown level...).
-    static Result<Codebook> fromJson(const QByteArray &json, const QString &source);
+    // Parses the JSON form (its schema is in the README, "Codebook versions"). Fails with
+    // InvalidInput made by failAt: `source`, the line where the JSON text has one, and what is
+    // wrong, naming the key ("functions[2].definition" must be a string, an unknown key, a fifth
+    // or repeated function, a choice attribute without values, a control character...).
+    static Result<Codebook> fromJson(
+        const QByteArray &json, const QString &source, CodebookCheck check = CodebookCheck::File);
     QJsonObject toJson() const;
 
     const FunctionDefinition &definition(FramingFunction f) const;
     // The item with `key`, or nullptr.
     const ArticleItem *item(const QString &key) const;
+
+    // What `value` of the attribute `attribute` of `f`, given under any version, counts as under
+    // this one (countedValue): `value` itself for a text attribute or one this version lacks.
+    std::optional<QString> countedAttributeValue(
+        FramingFunction f, const QString &attribute, const QString &value) const;
+    // The same for an answer to the item `key`.
+    std::optional<QString> countedAnswer(const QString &key, const QString &value) const;
 
     // Checks `attributes` of a span with function `f` against the schema: every key must be
     // declared for `f`; Choice values must be in the value set; Text values must be strings.

@@ -63,6 +63,28 @@ void ReliabilityTable::relabel(const std::vector<qint32> &relabel, const QString
         indexLabels();
 }
 
+void ReliabilityTable::recodeLabels(
+    const std::function<std::optional<QString>(const QString &)> &counted)
+{
+    QStringList labels;
+    QHash<QString, qint32> index;
+    std::vector<qint32> to(size_t(m_labels.size()), kMissing);
+    for (qsizetype l = 0; l < m_labels.size(); ++l) {
+        const std::optional<QString> label = counted(m_labels[l]);
+        if (!label)
+            continue;
+        const auto found = index.constFind(*label);
+        if (found != index.constEnd()) {
+            to[size_t(l)] = *found;
+            continue;
+        }
+        to[size_t(l)] = qint32(labels.size());
+        index.insert(*label, qint32(labels.size()));
+        labels << *label;
+    }
+    relabel(to, labels);
+}
+
 void ReliabilityTable::indexLabels()
 {
     for (qsizetype i = 0; i < m_labels.size(); ++i)

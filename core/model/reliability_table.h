@@ -13,6 +13,8 @@
 #include <QString>
 #include <QStringList>
 
+#include <functional>
+#include <optional>
 #include <span>
 #include <vector>
 
@@ -63,6 +65,9 @@ public:
     // Replaces every cell's label index l with relabel[l] (a new index into labels(), which
     // `labels` then become); kMissing stays missing.
     void relabel(const std::vector<qint32> &relabel, const QStringList &labels);
+    // Replaces every label with what `counted(label)` gives, labels that become equal merging
+    // into one; a label it gives nothing for becomes missing in every cell.
+    void recodeLabels(const std::function<std::optional<QString>(const QString &)> &counted);
 
     // --- units ----------------------------------------------------------------------------
     // Makes room for `units` more units (of the coders named so far) with ids of their own.

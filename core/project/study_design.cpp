@@ -1,5 +1,6 @@
 #include "core/project/study_design.h"
 
+#include "core/io/input_file.h"
 #include "core/project/project.h"
 #include "core/reliability/krippendorff_alpha.h"
 #include "core/reliability/sample_size.h"
@@ -296,6 +297,15 @@ QString describe(const AttributeSpec &a)
     if (a.type == AttributeSpec::Type::Choice)
         s += QStringLiteral(": %1; %2").arg(joined(a.values), measurementLevelKey(a.level));
     return s + QLatin1Char(')');
+}
+
+// "neutral → negative; unsure → neutral", in order of the recoded value.
+QString recodeText(const QMap<QString, QString> &recode)
+{
+    QStringList parts;
+    for (auto it = recode.begin(); it != recode.end(); ++it)
+        parts << QStringLiteral("%1 → %2").arg(it.key(), it.value());
+    return joined(parts);
 }
 
 QString describe(const ArticleItem &item)
@@ -862,6 +872,65 @@ Result<Phase> StudyDesign::phaseForNewCoding(
 
 // --- codebook versions ---------------------------------------------------------------------------
 
+namespace {
+
+// Whether every value that counts under the version before (its values and recodings) still
+// counts after it: then no value in use can have lost its place.
+bool keepsEveryValue(const QStringList &values, const QMap<QString, QString> &recode,
+    const QStringList &nextValues, const QMap<QString, QString> &nextRecode)
+{
+    const auto counts = [&](const QString &v) {
+        return countedValue(nextValues, nextRecode, v).has_value();
+    };
+    return std::ranges::all_of(values, counts) && std::ranges::all_of(recode.keys(), counts);
+}
+
+Status checkValuesInUse(const Database &db, const Codebook &current, const Codebook &next)
+{
+    for (FramingFunction f : kFramingFunctions) {
+        for (const AttributeSpec &spec : next.definition(f).attributes) {
+            if (spec.type != AttributeSpec::Type::Choice)
+                continue;
+            const auto &before = current.definition(f).attributes;
+            const auto old = std::ranges::find(before, spec.key, &AttributeSpec::key);
+            if (old != before.end() && old->type == AttributeSpec::Type::Choice
+                && keepsEveryValue(old->values, old->recode, spec.values, spec.recode))
+                continue;
+            auto used = store::attributeValuesInUse(db, f, spec.key);
+            if (!used)
+                return std::unexpected(used.error());
+            for (const store::ValueInUse &u : *used)
+                if (!countedValue(spec.values, spec.recode, u.value))
+                    return fail(ErrorCode::InvalidInput,
+                        tr("%1 span(s) of %2 carry the value \"%3\" of the attribute \"%4\", "
+                           "which the new version neither lists nor recodes; add \"recode\": "
+                           "{\"%3\": \"…\"} to the attribute with one of its values (%5).")
+                            .arg(u.count)
+                            .arg(functionKey(f), u.value, spec.key,
+                                spec.values.join(QStringLiteral(", "))));
+        }
+    }
+    for (const ArticleItem &item : next.items) {
+        const ArticleItem *old = current.item(item.key);
+        if (old && keepsEveryValue(old->values, old->recode, item.values, item.recode))
+            continue;
+        auto used = store::itemValuesInUse(db, item.key);
+        if (!used)
+            return std::unexpected(used.error());
+        for (const store::ValueInUse &u : *used)
+            if (!countedValue(item.values, item.recode, u.value))
+                return fail(ErrorCode::InvalidInput,
+                    tr("%1 answer(s) to the item \"%2\" are \"%3\", which the new version "
+                       "neither lists nor recodes; add \"recode\": {\"%3\": \"…\"} to the item "
+                       "with one of its values (%4).")
+                        .arg(u.count)
+                        .arg(item.key, u.value, item.values.join(QStringLiteral(", "))));
+    }
+    return {};
+}
+
+} // namespace
+
 Result<std::vector<CodebookVersionInfo>> StudyDesign::codebookVersions(const Project &project)
 {
     auto rows = store::codebookVersionRows(project.m_db);
@@ -891,6 +960,7 @@ Result<CodebookVersionInfo> StudyDesign::addCodebookVersion(
         return fail(ErrorCode::InvalidArgument,
             tr("The codebook is the same as version %1; no new version was made.")
                 .arg(current->number));
+    FOURFOLD_TRY_STATUS(checkValuesInUse(project.m_db, *current, codebook));
     auto sp = Savepoint::begin(project.m_db);
     if (!sp)
         return std::unexpected(sp.error());
@@ -916,20 +986,11 @@ Result<CodebookVersionInfo> StudyDesign::addCodebookVersion(
 Result<CodebookVersionInfo> StudyDesign::addCodebookVersionFromFile(
     Project &project, const QString &path, const QString &note, CoderId author)
 {
+    FOURFOLD_TRY_STATUS(requireRegularFile(path));
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
         return fail(ErrorCode::Io, tr("%1 cannot be read.").arg(path), file.errorString());
     const QByteArray bytes = file.readAll();
-    // Codebook::fromJson names the file; a syntax error also gets its line and column here.
-    QJsonParseError parseError;
-    (void)QJsonDocument::fromJson(bytes, &parseError);
-    if (parseError.error != QJsonParseError::NoError) {
-        const QByteArray before = bytes.left(parseError.offset);
-        const qsizetype lineStart = before.lastIndexOf('\n') + 1;
-        return failAt(ErrorCode::InvalidInput, path, before.count('\n') + 1,
-            QString::fromUtf8(before.mid(lineStart)).size() + 1,
-            tr("the codebook is not valid JSON: %1.").arg(parseError.errorString()));
-    }
     auto book = Codebook::fromJson(bytes, path);
     if (!book)
         return std::unexpected(book.error());
@@ -961,6 +1022,8 @@ CodebookDiff StudyDesign::diffCodebooks(const Codebook &from, const Codebook &to
             d.compare(ap + QStringLiteral(".values"), f, joined(x.values), joined(y->values));
             d.compare(ap + QStringLiteral(".level"), f, measurementLevelKey(x.level),
                 measurementLevelKey(y->level));
+            d.compare(
+                ap + QStringLiteral(".recode"), f, recodeText(x.recode), recodeText(y->recode));
         }
         for (const AttributeSpec &y : b.attributes)
             if (std::ranges::find(a.attributes, y.key, &AttributeSpec::key) == a.attributes.end())
@@ -978,6 +1041,8 @@ CodebookDiff StudyDesign::diffCodebooks(const Codebook &from, const Codebook &to
             ip + QStringLiteral(".values"), std::nullopt, joined(x.values), joined(y->values));
         d.compare(ip + QStringLiteral(".level"), std::nullopt, measurementLevelKey(x.level),
             measurementLevelKey(y->level));
+        d.compare(ip + QStringLiteral(".recode"), std::nullopt, recodeText(x.recode),
+            recodeText(y->recode));
     }
     for (const ArticleItem &y : to.items)
         if (!from.item(y.key))

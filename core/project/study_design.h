@@ -300,11 +300,14 @@ public:
     static Result<Codebook> codebookVersion(const Project &project, int number);
     // Stores `codebook` as the next version (its versionId and number are ignored) with `note`,
     // made by `author` (may be invalid). Fails with InvalidArgument if it equals the current
-    // version (nothing to record) or the note is empty; the new version on success.
+    // version (nothing to record) or the note is empty, and with InvalidInput naming the value
+    // when a live coder's or gold span (or answer) carries a value of a choice attribute (or
+    // item) that the new version neither lists nor recodes; the new version on success.
     static Result<CodebookVersionInfo> addCodebookVersion(
         Project &project, const Codebook &codebook, const QString &note, CoderId author);
-    // Reads a codebook JSON file (Codebook::fromJson) and adds it as above; InvalidInput naming the
-    // file for a malformed one, Io if it cannot be read.
+    // Reads a codebook JSON file (Codebook::fromJson, every rule) and adds it as above;
+    // InvalidInput naming the file, line and key for a malformed one, Io if it cannot be read or
+    // is not a regular file.
     static Result<CodebookVersionInfo> addCodebookVersionFromFile(
         Project &project, const QString &path, const QString &note, CoderId author);
 

@@ -55,7 +55,8 @@ Result<Codebook> readCodebook(Statement &stmt)
         } else {
             auto parsed = Codebook::fromJson(stmt.columnBlob(2),
                 QCoreApplication::translate("CodebookTable", "codebook version %1")
-                    .arg(stmt.columnInt(1)));
+                    .arg(stmt.columnInt(1)),
+                CodebookCheck::Stored);
             if (!parsed)
                 return std::unexpected(parsed.error());
             ++parses;
@@ -120,6 +121,48 @@ Result<std::vector<CodebookVersionRow>> codebookVersionRows(const Database &db)
         return CodebookVersionRow {CodebookVersionId {row.columnInt(0)}, int(row.columnInt(1)),
             row.columnText(2), row.columnText(3), row.columnText(4)};
     });
+}
+
+namespace {
+
+Result<std::vector<ValueInUse>> valuesInUse(Statement &stmt)
+{
+    return collectRows(stmt, [](const Statement &row) {
+        return ValueInUse {row.columnText(0), row.columnInt(1)};
+    });
+}
+
+} // namespace
+
+Result<std::vector<ValueInUse>> attributeValuesInUse(
+    const Database &db, FramingFunction function, const QString &key)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT value, count(*) FROM ("
+                       " SELECT e.value AS value FROM annotation a, json_each(a.attributes) e"
+                       "  WHERE a.deleted = 0 AND a.function = ?1 AND e.key = ?2"
+                       " UNION ALL"
+                       " SELECT e.value FROM gold_annotation g, json_each(g.attributes) e"
+                       "  WHERE g.deleted = 0 AND g.function = ?1 AND e.key = ?2"
+                       ") GROUP BY value ORDER BY value"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, functionKey(function)).bind(2, key);
+    return valuesInUse(*stmt);
+}
+
+Result<std::vector<ValueInUse>> itemValuesInUse(const Database &db, const QString &key)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT value, count(*) FROM ("
+                       " SELECT value FROM judgement WHERE deleted = 0 AND item_key = ?1"
+                       " UNION ALL"
+                       " SELECT value FROM gold_judgement WHERE deleted = 0 AND item_key = ?1"
+                       ") GROUP BY value ORDER BY value"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, key);
+    return valuesInUse(*stmt);
 }
 
 } // namespace fourfold::store

@@ -33,5 +33,17 @@ struct CodebookVersionRow {
 // Every version, oldest first.
 Result<std::vector<CodebookVersionRow>> codebookVersionRows(const Database &db);
 
+// A value that live rows carry, and how many carry it.
+struct ValueInUse {
+    QString value;
+    qint64 count = 0;
+};
+// The values of the attribute `key` on the live coders' and gold spans of `function`, in
+// order of value.
+Result<std::vector<ValueInUse>> attributeValuesInUse(
+    const Database &db, FramingFunction function, const QString &key);
+// The answers to the item `key` in live coders' and gold judgements, in order of value.
+Result<std::vector<ValueInUse>> itemValuesInUse(const Database &db, const QString &key);
+
 } // namespace store
 } // namespace fourfold
