@@ -38,9 +38,12 @@
 // is a line break and two or more in a row a paragraph break; inside <pre> line breaks are
 // kept. Dropped with their content: head, script, style, noscript, template, nav, footer,
 // aside, form, iframe, svg, math, object, embed, canvas, audio, video, button, select,
-// textarea, elements with the `hidden` attribute or aria-hidden="true", and a <header> that
-// is the page's banner (not inside article, main or section: the HTML-AAM mapping of header
-// to the banner role); a <header> inside an article keeps its headline and standfirst.
+// textarea, elements with aria-hidden="true", and a <header> that is the page's banner (not
+// inside article, main or section: the HTML-AAM mapping of header to the banner role); a
+// <header> inside an article keeps its headline and standfirst. Elements that are not rendered
+// (the `hidden` attribute, or display: none in the style attribute) are dropped too, without
+// ending the paragraph around them. A DOCTYPE's internal subset ("[ <!ENTITY ...> ]") is
+// ignored; a CDATA section ("<![CDATA[...]]>") is read as the text it holds.
 // Title: <meta property="og:title">, else <title>, else the first <h1>, else the file name
 // without its last suffix; the first heading of the body is left out of the body when its
 // text equals the title, so the headline is not there twice. Outlet: og:site_name. Published:

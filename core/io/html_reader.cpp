@@ -14,8 +14,11 @@
 
 #include <algorithm>
 #include <array>
+#include <limits>
 #include <memory>
+#include <optional>
 #include <string_view>
+#include <utility>
 #include <vector>
 
 namespace fourfold {
@@ -87,11 +90,49 @@ bool hasAncestor(const xmlNode *node, std::initializer_list<std::string_view> na
     return false;
 }
 
+// Whether the style attribute sets display to none. Declarations are separated by ";" and the
+// last one of a property wins unless an earlier one is "!important" (CSS Syntax 3 §5.4.5 and
+// CSS Cascade 4 §6.4); comments (/* … */) are ignored.
+bool styledDisplayNone(const xmlNode *node)
+{
+    QString style = attribute(node, "style");
+    if (style.isEmpty())
+        return false;
+    static const QRegularExpression comments(
+        QStringLiteral("/\\*.*?(\\*/|$)"), QRegularExpression::DotMatchesEverythingOption);
+    static const QRegularExpression important(
+        QStringLiteral("!\\s*important\\s*$"), QRegularExpression::CaseInsensitiveOption);
+    style.remove(comments);
+    bool none = false;
+    bool wasImportant = false;
+    for (const QStringView declaration : QStringView(style).split(u';')) {
+        const qsizetype colon = declaration.indexOf(u':');
+        if (colon < 0
+            || declaration.first(colon).trimmed().compare(u"display", Qt::CaseInsensitive) != 0)
+            continue;
+        QString value = declaration.sliced(colon + 1).toString();
+        const bool isImportant = value.contains(important);
+        value.remove(important);
+        if (wasImportant && !isImportant)
+            continue;
+        wasImportant = isImportant;
+        none = value.trimmed().compare(u"none", Qt::CaseInsensitive) == 0;
+    }
+    return none;
+}
+
+// Elements a browser does not render at all: the hidden attribute (HTML Standard §6.1, "The
+// hidden attribute") and display: none in the style attribute. They make no box, so unlike a
+// dropped block they do not end the paragraph around them.
+bool isHidden(const xmlNode *node)
+{
+    return xmlHasProp(node, reinterpret_cast<const xmlChar *>("hidden")) != nullptr
+        || styledDisplayNone(node);
+}
+
 bool isDropped(const xmlNode *node, std::string_view name)
 {
     if (isOneOf(name, droppedElements))
-        return true;
-    if (xmlHasProp(node, reinterpret_cast<const xmlChar *>("hidden")))
         return true;
     if (attribute(node, "aria-hidden").trimmed().compare(u"true", Qt::CaseInsensitive) == 0)
         return true;
@@ -232,6 +273,125 @@ QString declaredCharset(const QByteArray &bytes)
     return match.hasMatch() ? match.captured(1) : QString();
 }
 
+bool startsAt(const QByteArray &bytes, qsizetype at, const char *text)
+{
+    return QByteArrayView(bytes).sliced(at).startsWith(QByteArrayView(text));
+}
+
+// Where the internal subset of the page's DOCTYPE lies ("[" to "]" in "<!DOCTYPE html [
+// <!ENTITY …> ]>", XML 1.0 §2.8), or nothing. The HTML parser does not know internal subsets:
+// it ends the DOCTYPE at the subset's first ">" and reads the rest as text. The DOCTYPE is looked
+// for where it stands, after a byte order mark, whitespace, an XML declaration and comments.
+std::optional<std::pair<qsizetype, qsizetype>> internalSubset(const QByteArray &bytes)
+{
+    const qsizetype n = bytes.size();
+    qsizetype at = bytes.startsWith("\xEF\xBB\xBF") ? 3 : 0;
+    while (true) {
+        while (at < n && QByteArrayView(" \t\r\n\f").contains(bytes.at(at)))
+            ++at;
+        if (startsAt(bytes, at, "<?") || startsAt(bytes, at, "<!--")) {
+            const bool comment = startsAt(bytes, at, "<!--");
+            const qsizetype end = bytes.indexOf(comment ? "-->" : "?>", at + 2);
+            if (end < 0)
+                return std::nullopt;
+            at = end + (comment ? 3 : 2);
+            continue;
+        }
+        break;
+    }
+    if (QByteArrayView(bytes)
+            .sliced(at)
+            .first(std::min<qsizetype>(9, n - at))
+            .compare("<!DOCTYPE", Qt::CaseInsensitive)
+        != 0)
+        return std::nullopt;
+    // The subset opens at a "[" before the DOCTYPE's ">" and closes at the first "]" outside
+    // quoted literals and comments.
+    char quote = 0;
+    qsizetype open = -1;
+    for (qsizetype i = at + 9; i < n && open < 0; ++i) {
+        const char c = bytes.at(i);
+        if (quote != 0) {
+            quote = c == quote ? char(0) : quote;
+        } else if (c == '"' || c == '\'') {
+            quote = c;
+        } else if (c == '>') {
+            return std::nullopt;
+        } else if (c == '[') {
+            open = i;
+        }
+    }
+    if (open < 0)
+        return std::nullopt;
+    for (qsizetype i = open + 1; i < n; ++i) {
+        const char c = bytes.at(i);
+        if (quote != 0) {
+            quote = c == quote ? char(0) : quote;
+        } else if (c == '"' || c == '\'') {
+            quote = c;
+        } else if (startsAt(bytes, i, "<!--")) {
+            const qsizetype end = bytes.indexOf("-->", i + 4);
+            if (end < 0)
+                return std::nullopt;
+            i = end + 2;
+        } else if (c == ']') {
+            return std::pair {open, i};
+        }
+    }
+    return std::nullopt;
+}
+
+// The page as the HTML parser is given it: the DOCTYPE's internal subset blanked (its line breaks
+// kept, so that lines stay where they were), and every CDATA section outside comments ("<![CDATA[
+// … ]]>", XML 1.0 §2.7) replaced by its content as text, with "&", "<" and ">" escaped. The HTML
+// parser knows CDATA sections only inside svg and math; elsewhere it would keep "<![CDATA[" and
+// "]]>" as text and read tags inside as markup. An unclosed section runs to the end of the file.
+// The bytes are shared, not copied, when there is neither.
+QByteArray forHtmlParser(QByteArray bytes)
+{
+    if (const auto subset = internalSubset(bytes)) {
+        for (qsizetype i = subset->first; i <= subset->second; ++i)
+            if (bytes.at(i) != '\n')
+                bytes[i] = ' ';
+    }
+    if (!bytes.contains("<![CDATA["))
+        return bytes;
+    QByteArray out;
+    out.reserve(bytes.size());
+    qsizetype at = 0;
+    while (at < bytes.size()) {
+        const qsizetype cdata = bytes.indexOf("<![CDATA[", at);
+        const qsizetype comment = bytes.indexOf("<!--", at);
+        if (cdata < 0) {
+            out += QByteArrayView(bytes).sliced(at);
+            break;
+        }
+        if (comment >= 0 && comment < cdata) {
+            const qsizetype end = bytes.indexOf("-->", comment + 4);
+            const qsizetype next = end < 0 ? bytes.size() : end + 3;
+            out += QByteArrayView(bytes).sliced(at, next - at);
+            at = next;
+            continue;
+        }
+        out += QByteArrayView(bytes).sliced(at, cdata - at);
+        const qsizetype end = bytes.indexOf("]]>", cdata + 9);
+        const qsizetype contentEnd = end < 0 ? bytes.size() : end;
+        for (qsizetype i = cdata + 9; i < contentEnd; ++i) {
+            const char c = bytes.at(i);
+            if (c == '&')
+                out += "&amp;";
+            else if (c == '<')
+                out += "&lt;";
+            else if (c == '>')
+                out += "&gt;";
+            else
+                out += c;
+        }
+        at = end < 0 ? bytes.size() : end + 3;
+    }
+    return out;
+}
+
 } // namespace
 
 Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &file)
@@ -258,6 +418,11 @@ Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &
     // XML_PARSE_HUGE lifts libxml2's nesting limit of 256 (the file size limit bounds the
     // input already, and the walk below is not recursive).
     const qsizetype skip = bytes.startsWith("\xEF\xBB\xBF") ? 3 : 0;
+    const QByteArray page = forHtmlParser(bytes);
+    if (page.size() - skip > std::numeric_limits<int>::max())
+        return failAt(ErrorCode::InvalidInput, file, 0, 0,
+            QCoreApplication::translate("ArticleReader",
+                "the page is too large for the HTML parser once its CDATA sections are escaped"));
     const std::unique_ptr<htmlParserCtxt, HtmlContextFree> context(htmlNewParserCtxt());
     if (!context) {
         return failAt(ErrorCode::Internal, file, 0, 0,
@@ -266,8 +431,8 @@ Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &
     const int parseOptions = int(HTML_PARSE_NOERROR) | int(HTML_PARSE_NOWARNING)
         | int(HTML_PARSE_NONET) | int(HTML_PARSE_IGNORE_ENC) | int(XML_PARSE_HUGE);
     const std::unique_ptr<xmlDoc, XmlDocFree> doc(
-        htmlCtxtReadMemory(context.get(), bytes.constData() + skip,
-            static_cast<int>(bytes.size() - skip), nullptr, "UTF-8", parseOptions));
+        htmlCtxtReadMemory(context.get(), page.constData() + skip,
+            static_cast<int>(page.size() - skip), nullptr, "UTF-8", parseOptions));
     // The HTML parser recovers from bad markup on its own; it only halts (and then leaves a
     // partial tree) on a fatal error such as running out of memory. Half a page is refused.
     if (context->disableSAX != 0 || context->instate == XML_PARSER_EOF) {
@@ -335,6 +500,8 @@ Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &
                 collector.addLineBreak();
                 return false;
             }
+            if (isHidden(node))
+                return false;
             const bool block = isOneOf(name, blockElements);
             if (block)
                 collector.endBlock();

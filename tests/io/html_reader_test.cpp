@@ -193,3 +193,82 @@ TEST_CASE("HTML: files without text or with bad bytes are refused", "[io][html]"
     for (const BadInput &input : cases)
         checkBadInput(QStringLiteral("bad.html"), input);
 }
+
+TEST_CASE("Issue 20 item 11: elements hidden by display none or the hidden attribute are left out",
+    "[io][html]")
+{
+    // display: none in the style attribute (CSS 2.1 §9.2.4: the element and its descendants
+    // generate no box), with the cascade's order of declarations and !important (CSS Cascade 4
+    // §6.4); the hidden attribute (HTML Standard, "The hidden attribute").
+    const QByteArray page = R"(<html><body>
+<p>Visible one.</p>
+<p style="display:none">NONE-PLAIN</p>
+<div style="color: red; DISPLAY : None ">NONE-SPACED <p>NONE-CHILD</p></div>
+<p style="display: none !important; display: block">NONE-IMPORTANT</p>
+<p style="display: /* a comment */ none">NONE-COMMENTED</p>
+<p style="display: none; display: block">Shown again.</p>
+<p style="visibility: hidden-not; display: inline">Inline shown.</p>
+<div>Before <div style="display:none">NONE-INSIDE</div>after.</div>
+<section hidden><p>HIDDEN-SECTION</p></section>
+<p>Words <span hidden="until-found">HIDDEN-SPAN</span>around <b HIDDEN>HIDDEN-UPPER</b>it.</p>
+</body></html>
+)";
+    const auto result = readBytes(QStringLiteral("hidden.html"), page);
+    REQUIRE(result.has_value());
+    // A hidden element makes no box, so it does not split the paragraph around it.
+    CHECK(result->front().text
+        == QStringLiteral("Visible one.\n\nShown again.\n\nInline shown.\n\nBefore after.\n\n"
+                          "Words around it."));
+    for (const char *marker : {"NONE-PLAIN", "NONE-SPACED", "NONE-CHILD", "NONE-IMPORTANT",
+             "NONE-COMMENTED", "NONE-INSIDE", "HIDDEN-SECTION", "HIDDEN-SPAN", "HIDDEN-UPPER"}) {
+        INFO("marker: " << marker);
+        CHECK_FALSE(result->front().text.contains(QLatin1StringView(marker)));
+    }
+}
+
+TEST_CASE("Issue 20 item 11: a DOCTYPE internal subset never reaches the text", "[io][html]")
+{
+    // The internal subset is the part in brackets (XML 1.0 §2.8, [28] doctypedecl); its
+    // declarations hold ">" inside quoted literals and comments.
+    const QByteArray page = "\xEF\xBB\xBF<?xml version=\"1.0\"?>\n<!-- a comment -->\n"
+                            "<!DOCTYPE html PUBLIC \"-//W3C//DTD XHTML 1.0 Strict//EN\" "
+                            "\"http://www.w3.org/TR/xhtml1/DTD/xhtml1-strict.dtd\" [\n"
+                            "  <!ENTITY brand \"SUBSET-ENTITY > with ] inside\">\n"
+                            "  <!ELEMENT extra ANY>\n"
+                            "  <!-- SUBSET-COMMENT ] > -->\n"
+                            "  <!ATTLIST p data-x CDATA 'SUBSET-ATTLIST>'>\n"
+                            "]>\n"
+                            "<html><body><p>Only this text.</p></body></html>\n";
+    const auto result = readBytes(QStringLiteral("doctype.html"), page);
+    REQUIRE(result.has_value());
+    CHECK(result->front().text == QStringLiteral("Only this text."));
+
+    // A DOCTYPE without a subset and brackets in the body are read as before.
+    const auto plain = readBytes(QStringLiteral("plain.html"),
+        "<!DOCTYPE html>\n<html><body><p>Text [in brackets] &gt; more.</p></body></html>");
+    REQUIRE(plain.has_value());
+    CHECK(plain->front().text == QStringLiteral("Text [in brackets] > more."));
+}
+
+TEST_CASE("Issue 20 item 11: a CDATA section is read as its text without the markers", "[io][html]")
+{
+    // A CDATA section is character data up to the first "]]>" (XML 1.0 §2.7): markup inside is
+    // text, and "<![CDATA[" and "]]>" are not.
+    const QByteArray page =
+        "<html><body>\n"
+        "<p>Before <![CDATA[inside <b>not bold</b> & \"quoted\"\nsecond line]]> after.</p>\n"
+        "<!-- <![CDATA[COMMENT-CDATA]]> -->\n"
+        "<script>//<![CDATA[\nvar SCRIPT_CDATA = 1 < 2;\n//]]></script>\n"
+        "<p><![CDATA[]]>Empty section.</p>\n"
+        "<p>Unclosed <![CDATA[runs <i>to</i> the end\n";
+    const auto result = readBytes(QStringLiteral("cdata.html"), page);
+    REQUIRE(result.has_value());
+    CHECK(result->front().text
+        == QStringLiteral("Before inside <b>not bold</b> & \"quoted\" second line after.\n\n"
+                          "Empty section.\n\n"
+                          "Unclosed runs <i>to</i> the end"));
+    for (const char *marker : {"CDATA[", "]]>", "COMMENT-CDATA", "SCRIPT_CDATA"}) {
+        INFO("marker: " << marker);
+        CHECK_FALSE(result->front().text.contains(QLatin1StringView(marker)));
+    }
+}
