@@ -117,7 +117,10 @@ private:
                 break;
             const QString element = QStringLiteral("%1[%2]").arg(path).arg(index);
             m_lines.insert(element, m_line);
+            const qsizetype begin = m_at;
             value(element);
+            if (m_at == begin && !atEnd())
+                step(); // text QJsonDocument would refuse: move on all the same
             space();
             if (!atEnd() && m_json[m_at] == ',')
                 step();

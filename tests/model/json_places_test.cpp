@@ -46,3 +46,13 @@ TEST_CASE("JsonPlaces finds a key repeated within one object", "[model][json]")
     CHECK(places.repeatedKeyLine() == 3);
     CHECK(places.line(QStringLiteral("a")) == 1);
 }
+
+TEST_CASE("JsonPlaces ends on text that is not JSON", "[model][json]")
+{
+    // Not its input (the contract asks for accepted JSON), but it must still end.
+    for (const char *text : {"[}", "[1 }", "{\"a\": }", "{\"a\"", "[[[", "\"open", "{,,,}"}) {
+        INFO(text);
+        const JsonPlaces places(text);
+        CHECK(places.line(QStringLiteral("[5]")) == 0);
+    }
+}
