@@ -13,6 +13,7 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <optional>
 
 namespace fourfold {
 
@@ -33,6 +34,12 @@ QString stderrTail(const QByteArray &bytes)
     if (tail.size() > 600)
         tail = QStringLiteral("…") + tail.right(600);
     return tail.isEmpty() ? QString() : tr("stderr: %1").arg(tail);
+}
+
+// `bytes` in MiB for a message: "512", "0.25".
+QString mebibytes(qint64 bytes)
+{
+    return QString::number(double(bytes) / double(1 << 20), 'g', 4);
 }
 
 // Milliseconds left before `deadline`, as the int QProcess takes (at least 1).
@@ -95,26 +102,77 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
         return fail(ErrorCode::Io, tr("The extractor \"%1\" could not be started.").arg(m_command),
             process.errorString());
     const qint64 group = process.processId();
+
+    // stdout and stderr are taken as they arrive (the waitFor functions emit readyRead while
+    // they wait), so neither piles up in QProcess's buffers: stdout within the limits, of
+    // stderr only its tail.
+    const QString source = tr("output of \"%1\"").arg(m_command);
+    QByteArray output;
+    QByteArray errors;
+    qint64 lineBytes = 0; // stdout bytes since its last line break
+    qint64 lines = 0; // line breaks on stdout so far
+    std::optional<Error> overflow; // set once a limit is passed; the program is then stopped
+    QElapsedTimer idle;
+    idle.start();
+    m_mostStderrHeld = 0;
+    const auto takeOutput = [&] {
+        const QByteArray chunk = process.readAllStandardOutput();
+        if (chunk.isEmpty() || overflow)
+            return;
+        idle.restart();
+        for (qsizetype from = 0; from <= chunk.size();) {
+            const qsizetype at = chunk.indexOf('\n', from);
+            lineBytes += (at < 0 ? chunk.size() : at) - from;
+            if (lineBytes > m_maxLineBytes) {
+                overflow = failAt(ErrorCode::InvalidInput, source, lines + 1, 0,
+                    tr("a line is longer than %1 MiB, the most one answer may be; the extractor "
+                       "was stopped and nothing was stored.")
+                        .arg(mebibytes(m_maxLineBytes)))
+                               .error();
+                break;
+            }
+            if (at < 0)
+                break;
+            ++lines;
+            lineBytes = 0;
+            from = at + 1;
+        }
+        if (!overflow && output.size() + chunk.size() > m_maxOutputBytes)
+            overflow = failAt(ErrorCode::InvalidInput, source, 0, 0,
+                tr("the extractor wrote more than %1 MiB, the most a run may write; it was "
+                   "stopped and nothing was stored.")
+                    .arg(mebibytes(m_maxOutputBytes)))
+                           .error();
+        if (overflow) {
+            stopGroup();
+            output.clear();
+            return;
+        }
+        output += chunk;
+    };
+    const auto takeErrors = [&] {
+        errors += process.readAllStandardError();
+        m_mostStderrHeld = std::max(m_mostStderrHeld, qint64(errors.size()));
+        if (errors.size() > kStderrTailBytes)
+            errors.remove(0, errors.size() - kStderrTailBytes);
+    };
+    QObject::connect(&process, &QProcess::readyReadStandardOutput, &process, takeOutput);
+    QObject::connect(&process, &QProcess::readyReadStandardError, &process, takeErrors);
+
     process.write(input);
     process.closeWriteChannel();
     // Wait in short steps: waitForFinished services stdin, stdout and stderr together, so a
     // program that answers while it reads cannot block on a full pipe. A program that writes
     // nothing for the idle timeout is stopped; a slow one that keeps answering is not.
-    QElapsedTimer idle;
-    idle.start();
-    qint64 seen = 0;
     const qint64 idleMs = qint64(std::ceil(std::min(m_idleSeconds, 1.0e9) * 1000.0));
     while (!process.waitForFinished(std::min(200, msLeft(deadline)))) {
-        if (process.state() == QProcess::NotRunning)
+        if (process.state() == QProcess::NotRunning || overflow)
             break;
-        if (const qint64 now = process.bytesAvailable(); now != seen) {
-            seen = now;
-            idle.restart();
-        }
         const bool silent = m_idleSeconds > 0 && idle.elapsed() >= idleMs;
         if (silent || deadline.hasExpired()) {
             stopGroup();
             process.waitForFinished(5000);
+            takeErrors();
             return fail(ErrorCode::Io,
                 silent ? tr("The extractor \"%1\" wrote nothing for %2 s and was stopped; nothing "
                             "was stored.")
@@ -124,13 +182,20 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
                             "nothing was stored.")
                              .arg(m_command)
                              .arg(m_timeoutSeconds),
-                stderrTail(process.readAllStandardError()));
+                stderrTail(errors));
         }
+    }
+    if (overflow) {
+        process.waitForFinished(5000);
+        return std::unexpected(std::move(*overflow));
     }
     // The program has ended; anything it started and left running goes with it.
     if (group > 0)
         ::kill(-pid_t(group), SIGKILL);
-    const QByteArray errors = process.readAllStandardError();
+    takeOutput();
+    takeErrors();
+    if (overflow)
+        return std::unexpected(std::move(*overflow));
     if (process.exitStatus() == QProcess::CrashExit)
         return fail(ErrorCode::Io,
             tr("The extractor \"%1\" crashed; nothing was stored.").arg(m_command),
@@ -141,8 +206,7 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
                 .arg(m_command)
                 .arg(process.exitCode()),
             stderrTail(errors));
-    return readExtractorOutput(
-        process.readAllStandardOutput(), tr("output of \"%1\"").arg(m_command), targets);
+    return readExtractorOutput(output, source, targets);
 }
 
 } // namespace fourfold

@@ -4,8 +4,10 @@
 // offsets are code points). Fourfold writes every article, closes stdin, and waits for the
 // program to finish: it is stopped when it writes nothing for the idle timeout (default 120 s) or,
 // if one is set, when the whole run takes longer than the total timeout. The program runs in a
-// process group of its own, which is stopped with it, so nothing it starts outlives the run. The
-// program's stderr is kept for error messages.
+// process group of its own, which is stopped with it, so nothing it starts outlives the run.
+// Its stdout is read as it comes and may hold at most kMaxOutputBytes, in lines of at most
+// kMaxLineBytes; beyond either the program is stopped and the run refused. Of its stderr only
+// the last kStderrTailBytes are kept, for error messages.
 
 #include "core/extract/extractor.h"
 
@@ -14,6 +16,12 @@ namespace fourfold {
 class CommandExtractor final : public Extractor
 {
 public:
+    // The most stdout a run may write (512 MiB) and the longest line in it (64 MiB, as a JSON
+    // Lines article file); the stderr bytes kept (the last 64 KiB).
+    static constexpr qint64 kMaxOutputBytes = qint64(512) << 20;
+    static constexpr qint64 kMaxLineBytes = qint64(64) << 20;
+    static constexpr qint64 kStderrTailBytes = qint64(64) << 10;
+
     // `command` is split into program and arguments like a shell would for plain words and
     // quotes (QProcess::splitCommand); no shell is involved. `timeoutSeconds` bounds the whole
     // run (0: no bound). `version` is the program's own version, stored with the run; `recorded`
@@ -23,6 +31,15 @@ public:
         QString command, double timeoutSeconds, QString version = {}, QJsonObject recorded = {});
     // Seconds the program may write nothing before it is stopped (0: no bound; default 120).
     void setIdleTimeout(double seconds) { m_idleSeconds = seconds; }
+    // Lower bounds than kMaxOutputBytes and kMaxLineBytes (bytes), e.g. for tests.
+    void setOutputLimits(qint64 maxOutputBytes, qint64 maxLineBytes)
+    {
+        m_maxOutputBytes = maxOutputBytes;
+        m_maxLineBytes = maxLineBytes;
+    }
+    // The most stderr bytes the last extract() held at once (for tests: at most about
+    // kStderrTailBytes plus one read).
+    qint64 mostStderrHeld() const { return m_mostStderrHeld; }
 
     QString kind() const override { return QStringLiteral("command"); }
     QString version() const override { return m_version; }
@@ -31,13 +48,17 @@ public:
     // Fails with InvalidArgument for an empty command; Io when the program cannot start, does
     // not finish within the timeouts (it is killed), crashes or exits with a non-zero code (the
     // last lines of its stderr in the message); InvalidInput with the output line for malformed
-    // output, an unknown or repeated article or an article without answer.
+    // output, an unknown or repeated article or an article without answer, and for output beyond
+    // the limits (the program is stopped).
     Result<std::vector<ExtractedSpan>> extract(const std::vector<Article> &articles) override;
 
 private:
     QString m_command;
     double m_timeoutSeconds = 0;
     double m_idleSeconds = 120;
+    qint64 m_maxOutputBytes = kMaxOutputBytes;
+    qint64 m_maxLineBytes = kMaxLineBytes;
+    qint64 m_mostStderrHeld = 0;
     QString m_version;
     QJsonObject m_recorded;
 };

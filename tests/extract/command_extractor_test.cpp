@@ -322,3 +322,69 @@ TEST_CASE("external extractor: what the program starts does not outlive the run"
     }
     CHECK_FALSE(alive);
 }
+
+TEST_CASE("Issue 20 item 6: an extractor that floods stdout is stopped at the output limit")
+{
+    Fixture f;
+    const QString command = QStringLiteral("/bin/sh %1/flooding_extractor.sh stdout")
+                                .arg(QStringLiteral(FOURFOLD_EXTRACT_SCRIPTS));
+    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    CommandExtractor extractor(command, 60);
+    extractor.setOutputLimits(qint64(1) << 20, qint64(256) << 10);
+    auto run = ExtractorRuns::create(f.project, extractor, QStringLiteral("r"));
+    REQUIRE_FALSE(run);
+    CHECK(run.error().code == ErrorCode::InvalidInput);
+    CHECK(run.error().message
+        == QStringLiteral("output of \"%1\": the extractor wrote more than 1 MiB, the most a run "
+                          "may write; it was stopped and nothing was stored.")
+               .arg(command));
+    CHECK(ExtractorRuns::runs(f.project)->empty());
+    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+}
+
+TEST_CASE("Issue 20 item 6: an extractor line beyond the line limit is refused with its line")
+{
+    Fixture f;
+    const QString command = QStringLiteral("/bin/sh %1/flooding_extractor.sh line")
+                                .arg(QStringLiteral(FOURFOLD_EXTRACT_SCRIPTS));
+    CommandExtractor extractor(command, 60);
+    extractor.setOutputLimits(qint64(16) << 20, qint64(256) << 10);
+    auto run = ExtractorRuns::create(f.project, extractor, QStringLiteral("r"));
+    REQUIRE_FALSE(run);
+    CHECK(run.error().code == ErrorCode::InvalidInput);
+    CHECK(run.error().line == 3);
+    CHECK(run.error().message
+        == QStringLiteral("output of \"%1\":3: a line is longer than 0.25 MiB, the most one answer "
+                          "may be; the extractor was stopped and nothing was stored.")
+               .arg(command));
+    CHECK(ExtractorRuns::runs(f.project)->empty());
+}
+
+TEST_CASE("Issue 20 item 6: only the tail of a flooded stderr is held")
+{
+    Fixture f;
+    const QString scripts = QStringLiteral(FOURFOLD_EXTRACT_SCRIPTS);
+    SECTION("a run that succeeds is stored")
+    {
+        CommandExtractor extractor(
+            QStringLiteral("/bin/sh %1/flooding_extractor.sh stderr").arg(scripts), 60);
+        auto run = ExtractorRuns::create(f.project, extractor, QStringLiteral("noisy"));
+        INFO((run ? QString() : run.error().toString()).toStdString());
+        REQUIRE(run);
+        CHECK(ExtractorRuns::runs(f.project)->size() == 1);
+        // 8 MB went through stderr; at most the tail and one read of the pipe were held.
+        CHECK(extractor.mostStderrHeld() >= CommandExtractor::kStderrTailBytes);
+        CHECK(extractor.mostStderrHeld() <= CommandExtractor::kStderrTailBytes + (qint64(1) << 20));
+    }
+    SECTION("a run that fails names the last stderr line")
+    {
+        CommandExtractor extractor(
+            QStringLiteral("/bin/sh %1/flooding_extractor.sh stderr-fail").arg(scripts), 60);
+        auto run = ExtractorRuns::create(f.project, extractor, QStringLiteral("noisy"));
+        REQUIRE_FALSE(run);
+        CHECK(run.error().code == ErrorCode::Io);
+        CHECK(run.error().message.contains(QStringLiteral("exited with code 3")));
+        CHECK(run.error().cause.endsWith(QStringLiteral("LAST-STDERR-LINE")));
+        CHECK(extractor.mostStderrHeld() <= CommandExtractor::kStderrTailBytes + (qint64(1) << 20));
+    }
+}
