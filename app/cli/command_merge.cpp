@@ -64,7 +64,8 @@ int runMerge(const QStringList &arguments)
         QStringLiteral("UUID"));
     const QCommandLineOption keep(QStringLiteral("keep"),
         QCoreApplication::translate("cli",
-            "With --resolve: keep \"mine\" (the project's version) or \"theirs\" (the copy's)."),
+            "With --resolve: keep \"mine\" (the version the project holds) or \"theirs\" (the "
+            "version that lost)."),
         QStringLiteral("mine|theirs"));
     const QCommandLineOption json(
         QStringLiteral("json"), QCoreApplication::translate("cli", "Print the result as JSON."));
@@ -79,9 +80,12 @@ int runMerge(const QStringList &arguments)
                 "Merge returned coder copies into the project, all in one transaction: new and "
                 "changed annotations, links, answers and statuses are taken by uuid, deletions "
                 "as tombstones, coding time is added. Merging a copy again changes nothing. A "
-                "copy of another project or with changed article texts is refused. An object "
-                "changed both in the copy and in the project is a conflict: the project keeps "
-                "its version until you resolve it with --resolve UUID --keep mine|theirs."),
+                "copy of another project, with changed article texts or with rows or log entries "
+                "it "
+                "cannot hold is refused. An object changed differently in the project and a "
+                "copy, or in two copies, is a conflict: the later change is kept (in any order "
+                "of merging), the other is stored until you resolve it with --resolve UUID "
+                "--keep mine|theirs."),
             arguments);
         rc >= 0)
         return rc;
@@ -179,9 +183,9 @@ int runMerge(const QStringList &arguments)
                             ? QString()
                             : QCoreApplication::translate("cli", " (resolved: kept %1)")
                                   .arg(c.resolution)));
-            out(QCoreApplication::translate("cli", "    mine (project): %1")
+            out(QCoreApplication::translate("cli", "    mine (kept):   %1")
                     .arg(describe(c.objectType, c.mine)));
-            out(QCoreApplication::translate("cli", "    theirs (copy):  %1")
+            out(QCoreApplication::translate("cli", "    theirs (lost): %1")
                     .arg(describe(c.objectType, c.theirs)));
         }
         return ExitOk;

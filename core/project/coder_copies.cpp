@@ -1,5 +1,6 @@
 #include "core/project/coder_copies.h"
 
+#include "core/project/copy_validation.h"
 #include "core/project/project.h"
 #include "core/store/coder_table.h"
 #include "core/store/event_log.h"
@@ -8,11 +9,13 @@
 #include "core/store/schema.h"
 #include "core/store/store_util.h"
 #include "core/text/canonical_text.h"
-#include "core/text/offset_map.h"
 
 #include <QCoreApplication>
 #include <QFile>
 #include <QFileInfo>
+
+#include <algorithm>
+#include <limits>
 
 namespace fourfold {
 
@@ -125,6 +128,23 @@ Status writeCopy(Database &copyDb, const QString &sourcePath, const Coder &coder
     return store::detachSource(copyDb);
 }
 
+// Records in the project the hand-out of copy `copyUuid` with the objects `rows`: their base
+// entries and the "copy.handout" event (whose time is the hand-out time), all or nothing.
+Status recordHandout(Database &mainDb, const QString &copyUuid, const Coder &coder,
+    const std::vector<store::PortableRow> &rows)
+{
+    auto sp = Savepoint::begin(mainDb);
+    if (!sp)
+        return std::unexpected(sp.error());
+    for (const store::PortableRow &row : rows)
+        FOURFOLD_TRY_STATUS(store::setCopyBase(
+            mainDb, copyUuid, row, store::BaseEntry {row.digest(), row.seconds}));
+    FOURFOLD_TRY_STATUS(store::appendEvent(mainDb, CoderId {}, QStringLiteral("copy.handout"),
+        QStringLiteral("copy"), copyUuid,
+        QJsonObject {{QStringLiteral("coder"), coder.pseudonym}}));
+    return sp->commit();
+}
+
 // Checks that `copyDb` is a coder copy of the project `mainDb` (uuid `mainUuid`) that may be
 // merged, and returns its settings and coder.
 Result<std::pair<CopyInfo, Coder>> checkCopy(
@@ -206,6 +226,150 @@ Result<std::pair<CopyInfo, Coder>> checkCopy(
     return std::pair {copy, **coder};
 }
 
+// One version of an object competing for its place in the project, and the copy that brought it
+// ("" for the project's own).
+struct Version {
+    store::PortableRow row;
+    QString copy;
+    bool inProject = false;
+};
+
+// The deterministic order of versions in conflict: the later modification time wins, then the
+// higher digest (objects without a modification time, links and statuses, by digest alone).
+bool laterThan(const store::PortableRow &a, const store::PortableRow &b)
+{
+    const QString at = a.content.value(QLatin1String("modified_at")).toString();
+    const QString bt = b.content.value(QLatin1String("modified_at")).toString();
+    if (at != bt)
+        return at > bt;
+    return a.digest() > b.digest();
+}
+
+// Adds `v` to `versions` unless a version with the same content is there; of two such, the one
+// modified later stays (so the same change made in two copies leaves the same row in any order).
+void addVersion(std::vector<Version> &versions, Version v)
+{
+    const QString digest = v.row.digest();
+    for (Version &old : versions)
+        if (old.row.digest() == digest) {
+            if (laterThan(v.row, old.row))
+                old = std::move(v);
+            return;
+        }
+    versions.push_back(std::move(v));
+}
+
+// Makes the open conflicts of `object` exactly the `losers`, each kept against `winner`:
+// conflicts whose version is no longer a loser (superseded by a copy built on it, or now the
+// winner) are removed, the others updated, new losers added. Counts new conflicts in `added`.
+Status reconcileConflicts(Database &db, const store::PortableRow &object,
+    const std::vector<Version> &losers, const QJsonObject &winner, qint64 &added, qint64 &writes)
+{
+    auto open = store::openConflictsOf(db, object.type, object.uuid);
+    if (!open)
+        return std::unexpected(open.error());
+    std::vector<bool> matched(losers.size(), false);
+    for (const store::MergeConflict &c : *open) {
+        const QString digest = store::PortableRow {object.type, object.uuid, c.theirs, 0}.digest();
+        const auto hit = std::ranges::find_if(
+            losers, [&](const Version &v) { return v.row.digest() == digest; });
+        if (hit == losers.end()) {
+            FOURFOLD_TRY_STATUS(store::removeConflict(db, c.uuid));
+            ++writes;
+            continue;
+        }
+        matched[std::size_t(hit - losers.begin())] = true;
+        if (c.theirs != hit->row.content || c.mine != winner) {
+            FOURFOLD_TRY_STATUS(store::updateConflict(db, c.uuid, winner, hit->row.content));
+            ++writes;
+        }
+    }
+    for (std::size_t i = 0; i < losers.size(); ++i) {
+        if (matched[i])
+            continue;
+        store::MergeConflict c;
+        c.objectType = object.type;
+        c.objectUuid = object.uuid;
+        c.copyUuid = losers[i].copy;
+        c.mine = winner;
+        c.theirs = losers[i].row.content;
+        FOURFOLD_TRY_STATUS(store::insertConflict(db, c));
+        ++added;
+        ++writes;
+    }
+    return {};
+}
+
+// The copy a version of the project came from: the copy, other than `exceptCopy`, whose agreed
+// base it is (the copy whose merge brought it, or one handed out with it); "" if none.
+Result<QString> broughtBy(
+    const Database &db, const store::PortableRow &row, const QString &exceptCopy)
+{
+    return store::copyWithBase(db, row, row.digest(), exceptCopy);
+}
+
+// Writes the live answer `winner`, which may meet another live answer to the same item (made
+// independently in another copy): the later one is written live, the other set aside as a
+// tombstone (its modification time kept) and kept as a conflict. True if `winner` was set aside
+// (its conflict is then the open conflict of its object).
+Result<bool> writeAnswer(Database &db, const Version &winner,
+    const QHash<QString, store::PortableRow> &mainRows, qint64 &conflicts, qint64 &writes)
+{
+    auto other = store::otherLiveJudgement(db, winner.row);
+    if (!other)
+        return std::unexpected(other.error());
+    if (!*other) {
+        FOURFOLD_TRY_STATUS(store::writePortableRow(db, winner.row));
+        return false;
+    }
+    const store::PortableRow rival = mainRows.value(QStringLiteral("judgement/") + **other);
+    if (laterThan(winner.row, rival)) {
+        auto by = broughtBy(db, rival, QString());
+        if (!by)
+            return std::unexpected(by.error());
+        FOURFOLD_TRY_STATUS(store::setAsideJudgement(db, rival.uuid));
+        FOURFOLD_TRY_STATUS(store::writePortableRow(db, winner.row));
+        FOURFOLD_TRY_STATUS(reconcileConflicts(
+            db, rival, {Version {rival, *by, true}}, winner.row.content, conflicts, writes));
+        return false;
+    }
+    store::PortableRow setAside = winner.row;
+    setAside.content.insert(QStringLiteral("deleted"), 1);
+    FOURFOLD_TRY_STATUS(store::writePortableRow(db, setAside));
+    FOURFOLD_TRY_STATUS(
+        reconcileConflicts(db, winner.row, {winner}, rival.content, conflicts, writes));
+    return true;
+}
+
+// The project's record of the copy: when it was handed out and the base of every object.
+Result<CopyHandout> handoutRecord(const Database &mainDb, const Database &copyDb,
+    const CopyInfo &info, const Coder &coder, const QString &path)
+{
+    CopyHandout h;
+    h.copyUuid = info.copyUuid;
+    h.coder = coder;
+    auto at = store::handoutTime(mainDb, info.copyUuid);
+    if (!at)
+        return std::unexpected(at.error());
+    if (!*at)
+        return fail(ErrorCode::InvalidInput,
+            tr("%1 names a copy (%2) that this project never handed out; it was not merged.")
+                .arg(path, info.copyUuid));
+    h.handedOutAt = parseStoredTime(**at);
+    auto base = store::copyBase(mainDb, info.copyUuid);
+    if (!base)
+        return std::unexpected(base.error());
+    if (base->isEmpty()) {
+        // Copies handed out before the project kept their base: the copy's own record.
+        base = store::copyBase(copyDb, info.copyUuid);
+        if (!base)
+            return std::unexpected(base.error());
+    }
+    h.base = std::move(*base);
+    h.collectArticles();
+    return h;
+}
+
 Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QString &path)
 {
     if (!QFileInfo::exists(path))
@@ -217,6 +381,10 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
     if (!checked)
         return std::unexpected(checked.error());
     const auto &[info, coder] = *checked;
+    auto handout = handoutRecord(mainDb, *copyDb, info, coder, path);
+    if (!handout)
+        return std::unexpected(handout.error());
+    const QDateTime now = QDateTime::currentDateTimeUtc();
 
     MergeReport report;
     report.path = path;
@@ -226,43 +394,34 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
     auto rows = store::portableRows(*copyDb, info.coderUuid);
     if (!rows)
         return std::unexpected(rows.error());
-    // Spans written outside Fourfold must still lie in their text and quote it exactly.
     auto texts = store::articleFingerprints(*copyDb);
     if (!texts)
         return std::unexpected(texts.error());
     QHash<QString, QString> textByUuid;
-    for (const store::ArticleFingerprint &a : *texts)
+    QHash<QString, QString> externalIds;
+    for (const store::ArticleFingerprint &a : *texts) {
         textByUuid.insert(a.uuid, a.text);
-    for (const store::PortableRow &row : *rows) {
-        if (row.type != QLatin1String("annotation"))
-            continue;
-        const QString text =
-            textByUuid.value(row.content.value(QLatin1String("article")).toString());
-        const TextRange range {row.content.value(QLatin1String("start")).toInteger(),
-            row.content.value(QLatin1String("end")).toInteger()};
-        const OffsetMap map(text);
-        if (!range.isValid() || range.isEmpty() || range.end > map.codePointCount()
-            || OffsetMap::slice(text, range)
-                != row.content.value(QLatin1String("quote")).toString())
-            return fail(ErrorCode::InvalidInput,
-                tr("Span %1 in %2 does not quote its article's text at [%3, %4); the copy was "
-                   "changed outside Fourfold; it was not merged.")
-                    .arg(row.uuid, path)
-                    .arg(range.start)
-                    .arg(range.end));
+        externalIds.insert(a.uuid, a.externalId);
     }
+    FOURFOLD_TRY_STATUS(
+        validateCopyRows(mainDb, *rows, *handout, textByUuid, externalIds, path, now));
+    auto lastEvent = store::lastMergedCopyEvent(mainDb, info.copyUuid);
+    if (!lastEvent)
+        return std::unexpected(lastEvent.error());
+    auto events = store::copyEvents(*copyDb, *lastEvent);
+    if (!events)
+        return std::unexpected(events.error());
+    FOURFOLD_TRY_STATUS(validateCopyEvents(mainDb, *events, *handout, path, now));
+
     auto mainRowList = store::portableRows(mainDb, info.coderUuid);
     if (!mainRowList)
         return std::unexpected(mainRowList.error());
     QHash<QString, store::PortableRow> mainRows;
     for (const store::PortableRow &r : *mainRowList)
         mainRows.insert(r.key(), r);
-    auto copyBase = store::copyBase(*copyDb, info.copyUuid);
-    if (!copyBase)
-        return std::unexpected(copyBase.error());
-    auto mainBase = store::copyBase(mainDb, info.copyUuid);
-    if (!mainBase)
-        return std::unexpected(mainBase.error());
+    auto recordedBase = store::copyBase(mainDb, info.copyUuid);
+    if (!recordedBase)
+        return std::unexpected(recordedBase.error());
 
     auto sp = Savepoint::begin(mainDb);
     if (!sp)
@@ -271,90 +430,94 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
     for (const store::PortableRow &row : *rows) {
         const QString key = row.key();
         const QString theirs = row.digest();
-        std::optional<store::BaseEntry> base;
-        if (mainBase->contains(key))
-            base = mainBase->value(key);
-        else if (copyBase->contains(key))
-            base = copyBase->value(key);
+        const auto base = handout->base.constFind(key);
+        const bool hasBase = base != handout->base.cend();
         const auto mine = mainRows.constFind(key);
+        const bool inProject = mine != mainRows.cend();
 
-        // A live answer of the copy may meet another live answer to the same item in the
-        // project (both made independently): that is a conflict, not something to overwrite.
-        std::optional<store::PortableRow> rival;
-        if (row.type == QLatin1String("judgement") && !row.isDeleted()) {
-            auto other = store::otherLiveJudgement(mainDb, row);
-            if (!other)
-                return std::unexpected(other.error());
-            if (*other)
-                rival = mainRows.value(QStringLiteral("judgement/") + **other);
-        }
-
-        bool conflict = false;
-        bool inserted = false;
-        if (base && base->digest == theirs) {
-            // Unchanged in the copy: whatever the project holds stands.
-        } else if (mine != mainRows.cend() && mine->digest() == theirs) {
-            // The same change on both sides.
-        } else if (rival) {
-            conflict = true;
-        } else if (mine == mainRows.cend() || (base && mine->digest() == base->digest)) {
-            FOURFOLD_TRY_STATUS(store::writePortableRow(mainDb, row));
-            ++writes;
-            if (mine == mainRows.cend()) {
-                inserted = true;
-                ++report.added;
-            } else {
-                ++report.changed;
-                if (row.isDeleted() && !mine->isDeleted())
-                    ++report.deleted;
+        if (!hasBase || base->digest != theirs) {
+            // Changed (or made) in the copy. The competing versions: the project's, the losers
+            // of earlier conflicts, and the copy's, which supersedes the version it was made
+            // from. The latest wins; the others stay open for the lead.
+            auto open = store::openConflictsOf(mainDb, row.type, row.uuid);
+            if (!open)
+                return std::unexpected(open.error());
+            std::vector<Version> versions;
+            if (inProject)
+                addVersion(versions, Version {*mine, QString(), true});
+            for (const store::MergeConflict &c : *open)
+                addVersion(versions,
+                    Version {store::PortableRow {row.type, row.uuid, c.theirs, 0}, c.copyUuid});
+            if (hasBase)
+                std::erase_if(
+                    versions, [&](const Version &v) { return v.row.digest() == base->digest; });
+            addVersion(versions, Version {row, info.copyUuid});
+            const auto winner = std::ranges::max_element(versions,
+                [](const Version &a, const Version &b) { return laterThan(b.row, a.row); });
+            const Version won = *winner;
+            std::vector<Version> losers;
+            for (Version &v : versions) {
+                if (v.row.digest() == won.row.digest())
+                    continue;
+                if (v.inProject) {
+                    auto by = broughtBy(mainDb, v.row, info.copyUuid);
+                    if (!by)
+                        return std::unexpected(by.error());
+                    v.copy = *by;
+                }
+                losers.push_back(v);
             }
-        } else {
-            conflict = true;
-        }
-        if (conflict) {
-            store::MergeConflict c;
-            c.objectType = row.type;
-            c.objectUuid = row.uuid;
-            c.copyUuid = info.copyUuid;
-            c.mine = rival ? rival->content : mine->content;
-            c.theirs = row.content;
-            auto recorded = store::recordConflict(mainDb, c);
-            if (!recorded)
-                return std::unexpected(recorded.error());
-            if (*recorded) {
-                ++report.conflicts;
+            bool setAside = false;
+            if (!inProject || mine->content != won.row.content) {
+                if (won.row.type == QLatin1String("judgement") && !won.row.isDeleted()) {
+                    auto aside = writeAnswer(mainDb, won, mainRows, report.conflicts, writes);
+                    if (!aside)
+                        return std::unexpected(aside.error());
+                    setAside = *aside;
+                } else {
+                    FOURFOLD_TRY_STATUS(store::writePortableRow(mainDb, won.row));
+                }
                 ++writes;
+                if (!inProject) {
+                    ++report.added;
+                } else if (mine->digest() != won.row.digest()) {
+                    ++report.changed;
+                    if (won.row.isDeleted() && !mine->isDeleted())
+                        ++report.deleted;
+                }
             }
+            if (!setAside)
+                FOURFOLD_TRY_STATUS(reconcileConflicts(
+                    mainDb, row, losers, won.row.content, report.conflicts, writes));
         }
 
         qint64 seconds = 0;
         if (row.type == QLatin1String("assignment")) {
             seconds = row.seconds;
-            const qint64 delta = row.seconds - (base ? base->seconds : 0);
-            if (!inserted && delta > 0 && mine != mainRows.cend()) {
+            // validateCopyRows bounds the delta by the time since the hand-out.
+            const qint64 delta = row.seconds - (hasBase ? base->seconds : 0);
+            if (delta > 0 && inProject) {
+                if (mine->seconds > std::numeric_limits<qint64>::max() - delta)
+                    return fail(ErrorCode::InvalidInput,
+                        tr("The coding time in %1 would overflow the project's; it was not "
+                           "merged.")
+                            .arg(path));
                 FOURFOLD_TRY_STATUS(store::addPortableSeconds(mainDb, row, delta));
                 report.seconds += delta;
                 ++writes;
             }
         }
-        // The base is the copy's version as last agreed: it moves to `theirs` unless the two
-        // sides are in conflict, when it stays until the lead decides.
-        const store::BaseEntry next {
-            conflict ? (base ? base->digest : QString()) : theirs, seconds};
-        const auto recordedBase = mainBase->constFind(key);
-        if (recordedBase == mainBase->cend() || recordedBase->digest != next.digest
-            || recordedBase->seconds != next.seconds) {
+        // The base is the copy's version as last seen: whichever version won, merging this copy
+        // again changes nothing.
+        const store::BaseEntry next {theirs, seconds};
+        const auto recorded = recordedBase->constFind(key);
+        if (recorded == recordedBase->cend() || recorded->digest != next.digest
+            || recorded->seconds != next.seconds) {
             FOURFOLD_TRY_STATUS(store::setCopyBase(mainDb, info.copyUuid, row, next));
             ++writes;
         }
     }
     // The coder's own log of the copy joins the project's, once.
-    auto lastEvent = store::lastMergedCopyEvent(mainDb, info.copyUuid);
-    if (!lastEvent)
-        return std::unexpected(lastEvent.error());
-    auto events = store::copyEvents(*copyDb, *lastEvent);
-    if (!events)
-        return std::unexpected(events.error());
     if (writes == 0 && events->empty()) {
         report.alreadyMerged = true;
         return report; // the savepoint rolls back: nothing was written
@@ -437,18 +600,20 @@ Result<HandoutReport> CoderCopies::handout(
                 report.judgements = counts->judgements;
             }
         }
+        // The project keeps its own record of what was handed out: a merge checks the copy
+        // against it, never against the copy's record of itself.
+        auto handedOut = written
+            ? store::portableRows(*copyDb, coder->uuid)
+            : Result<std::vector<store::PortableRow>>(std::unexpected(written.error()));
+        if (handedOut)
+            written = recordHandout(project.m_db, copyUuid, *coder, *handedOut);
+        else
+            written = std::unexpected(handedOut.error());
         if (!written) {
             *copyDb = Database();
             removeFiles(outPath);
             return std::unexpected(written.error());
         }
-    }
-    if (auto st = store::appendEvent(project.m_db, CoderId {}, QStringLiteral("copy.handout"),
-            QStringLiteral("copy"), copyUuid,
-            QJsonObject {{QStringLiteral("coder"), coder->pseudonym}});
-        !st) {
-        removeFiles(outPath);
-        return std::unexpected(st.error());
     }
     report.path = outPath;
     report.copyUuid = copyUuid;
@@ -491,7 +656,8 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
 {
     if (keep != QLatin1String("mine") && keep != QLatin1String("theirs"))
         return fail(ErrorCode::InvalidArgument,
-            tr("Keep \"mine\" (the project's version) or \"theirs\" (the copy's), not \"%1\".")
+            tr("Keep \"mine\" (the version the project holds) or \"theirs\" (the version that "
+               "lost), not \"%1\".")
                 .arg(keep));
     auto open = store::mergeConflicts(project.m_db, false);
     if (!open)
@@ -520,7 +686,7 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
     auto base = store::copyBase(project.m_db, c.copyUuid);
     if (!base)
         return std::unexpected(base.error());
-    const store::BaseEntry settled {theirs.digest(), base->value(theirs.key()).seconds};
+    const auto seen = base->constFind(theirs.key());
     if (keep == QLatin1String("theirs")) {
         if (theirs.type == QLatin1String("judgement") && !theirs.isDeleted()) {
             auto other = store::otherLiveJudgement(project.m_db, theirs);
@@ -531,8 +697,11 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
         }
         FOURFOLD_TRY_STATUS(store::writePortableRow(project.m_db, theirs));
     }
-    // Either way the copy's version is now settled: merging this copy again changes nothing.
-    FOURFOLD_TRY_STATUS(store::setCopyBase(project.m_db, c.copyUuid, theirs, settled));
+    // Either way the losing version is now settled: merging its copy again changes nothing.
+    // (Merges record it as the copy's base already; conflicts from older merges did not.)
+    if (!c.copyUuid.isEmpty() && seen != base->cend() && seen->digest != theirs.digest())
+        FOURFOLD_TRY_STATUS(store::setCopyBase(
+            project.m_db, c.copyUuid, theirs, store::BaseEntry {theirs.digest(), seen->seconds}));
     FOURFOLD_TRY_STATUS(store::setConflictResolution(project.m_db, c.uuid, keep));
     FOURFOLD_TRY_STATUS(store::appendEvent(project.m_db, CoderId {},
         QStringLiteral("conflict.resolve"), c.objectType, c.objectUuid,

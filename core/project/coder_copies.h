@@ -8,13 +8,20 @@
 // nothing else is in it), marked by settings: its own uuid, the uuid of the project it is a copy
 // of and the coder's uuid. Its copy_base table holds a digest of every object as handed out.
 //
+// The project keeps its own record of each hand-out (the base of every object, and the hand-out
+// time in its log); a merge checks every row and log entry of the copy against it
+// (core/project/copy_validation.h) and refuses the whole copy on any mismatch.
+//
 // Merging takes the coder's objects by uuid (assignments by article and phase). For each object
 // a three-way comparison with the common base (the project's record of the last merge of this
-// copy, else the copy's hand-out state) decides: unchanged in the copy → nothing; changed only
-// in the copy (or new) → taken, deletions as tombstones; changed the same way on both sides →
-// nothing; changed differently on both sides → a conflict, stored for the lead, the project
-// keeping its version until the lead resolves it. Active coding time adds up. A merge is one
-// transaction; merging the same copy again writes nothing.
+// copy, else the hand-out) decides: unchanged in the copy → nothing; changed only in the copy
+// (or new) → taken, deletions as tombstones; changed the same way on both sides → nothing;
+// changed differently (in the project, or in another copy merged before) → a conflict: of the
+// competing versions the one modified later wins (ties by the higher digest), the others are
+// stored as open conflicts for the lead; a version a copy was built on no longer competes. The
+// rule looks at the versions, not at which copy came first, so the order of the copies does not
+// change the outcome. Active coding time adds up. A merge is one transaction; merging the same copy
+// again writes nothing.
 
 #include "core/model/coder.h"
 #include "core/model/error.h"
@@ -79,17 +86,20 @@ public:
     // The copy settings of `project`, or nothing if it is not a coder copy.
     static Result<std::optional<CopyInfo>> copyInfo(const Project &project);
 
-    // Merges the copies `paths` (in this order) into `project`, all in one transaction: on any
-    // refusal nothing is written. Refused: a file that is not a Fourfold coder copy (InvalidInput),
-    // a copy of another project (InvalidInput), a copy whose article texts differ from the
-    // project's (InvalidInput, naming the article), a copy holding other coders' rows or
-    // references the project lacks (InvalidInput), a project that is itself a copy (Unsupported).
+    // Merges the copies `paths` into `project`, all in one transaction: on any refusal nothing
+    // is written; the result does not depend on the order of `paths`. Refused: a file that is not
+    // a Fourfold coder copy (InvalidInput), a copy of another project or one it never handed out
+    // (InvalidInput), a copy whose article texts differ from the project's (InvalidInput, naming
+    // the article), a copy holding other coders' rows, references the project lacks or anything
+    // validateCopyRows / validateCopyEvents refuse (InvalidInput, naming file and row or event),
+    // a project that is itself a copy (Unsupported).
     static Result<std::vector<MergeReport>> merge(Project &project, const QStringList &paths);
 
     // The project's merge conflicts: the open ones, or all when `all`.
     static Result<std::vector<store::MergeConflict>> conflicts(const Project &project, bool all);
     // Resolves the open conflict `uuid` (the conflict's uuid, or the object's when it has one
-    // open conflict) by keeping the project's version ("mine") or the copy's ("theirs").
+    // open conflict) by keeping the version the project holds ("mine") or writing the version
+    // that lost ("theirs").
     // NotFound if there is no such open conflict; InvalidArgument for another `keep` or an
     // object with several open conflicts.
     static Status resolve(Project &project, const QString &uuid, const QString &keep);

@@ -352,6 +352,51 @@ Status tombstoneJudgement(Database &db, const QString &uuid)
     return stmt->run();
 }
 
+Status setAsideJudgement(Database &db, const QString &uuid)
+{
+    auto stmt = db.prepare(QStringLiteral("UPDATE judgement SET deleted = 1 WHERE uuid = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, uuid);
+    return stmt->run();
+}
+
+Result<QString> otherUseOfUuid(
+    const Database &db, const QString &uuid, const QString &type, const QString &coderUuid)
+{
+    // ?2 is the row's type, ?3 its coder: the one use that is not another object.
+    auto stmt = db.prepare(
+        QStringLiteral("WITH me AS (SELECT id FROM coder WHERE uuid = ?3) "
+                       "SELECT 'coder' FROM coder WHERE uuid = ?1 "
+                       "UNION ALL SELECT 'article' FROM article WHERE uuid = ?1 "
+                       "UNION ALL SELECT 'codebook version' FROM codebook_version WHERE uuid = ?1 "
+                       "UNION ALL SELECT 'gold span' FROM gold_annotation WHERE uuid = ?1 "
+                       "UNION ALL SELECT 'gold answer' FROM gold_judgement WHERE uuid = ?1 "
+                       "UNION ALL SELECT 'gold rejection' FROM gold_rejection WHERE uuid = ?1 "
+                       "UNION ALL SELECT 'extractor run' FROM extractor_run WHERE uuid = ?1 "
+                       "UNION ALL SELECT 'merge conflict' FROM merge_conflict WHERE uuid = ?1 "
+                       "UNION ALL SELECT CASE WHEN ?2 <> 'assignment' THEN 'assignment' "
+                       "ELSE 'assignment of another coder' END FROM assignment WHERE uuid = ?1 "
+                       "AND (?2 <> 'assignment' OR coder_id NOT IN (SELECT id FROM me)) "
+                       "UNION ALL SELECT CASE WHEN ?2 <> 'annotation' THEN 'span' "
+                       "ELSE 'span of another coder' END FROM annotation WHERE uuid = ?1 "
+                       "AND (?2 <> 'annotation' OR coder_id NOT IN (SELECT id FROM me)) "
+                       "UNION ALL SELECT CASE WHEN ?2 <> 'judgement' THEN 'answer' "
+                       "ELSE 'answer of another coder' END FROM judgement WHERE uuid = ?1 "
+                       "AND (?2 <> 'judgement' OR coder_id NOT IN (SELECT id FROM me)) "
+                       "UNION ALL SELECT CASE WHEN ?2 <> 'link' THEN 'link' "
+                       "ELSE 'link of another coder' END FROM annotation_link l "
+                       "JOIN annotation s ON s.id = l.source_id WHERE l.uuid = ?1 "
+                       "AND (?2 <> 'link' OR s.coder_id NOT IN (SELECT id FROM me)) LIMIT 1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, uuid).bind(2, type).bind(3, coderUuid);
+    auto row = stmt->step();
+    if (!row)
+        return std::unexpected(row.error());
+    return *row ? stmt->columnText(0) : QString();
+}
+
 Result<QHash<QString, BaseEntry>> copyBase(const Database &db, const QString &copyUuid)
 {
     auto stmt = db.prepare(QStringLiteral(
@@ -386,6 +431,37 @@ Status setCopyBase(
         .bind(4, entry.digest)
         .bind(5, entry.seconds);
     return stmt->run();
+}
+
+Result<QString> copyWithBase(
+    const Database &db, const PortableRow &row, const QString &digest, const QString &exceptCopy)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT min(copy_uuid) FROM copy_base WHERE object_type = ?1 AND uuid = ?2 "
+                       "AND digest = ?3 AND copy_uuid <> ?4"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, row.type).bind(2, row.baseId()).bind(3, digest).bind(4, exceptCopy);
+    auto found = stmt->step();
+    if (!found)
+        return std::unexpected(found.error());
+    return *found && !stmt->columnIsNull(0) ? stmt->columnText(0) : QString();
+}
+
+Result<std::optional<QString>> handoutTime(const Database &db, const QString &copyUuid)
+{
+    auto stmt =
+        db.prepare(QStringLiteral("SELECT min(at) FROM event_log WHERE action = 'copy.handout' "
+                                  "AND object_type = 'copy' AND object_uuid = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, copyUuid);
+    auto found = stmt->step();
+    if (!found)
+        return std::unexpected(found.error());
+    if (!*found || stmt->columnIsNull(0))
+        return std::optional<QString> {};
+    return std::optional<QString> {stmt->columnText(0)};
 }
 
 Status attachSource(Database &copyDb, const QString &sourcePath)
@@ -502,15 +578,16 @@ Result<QStringList> codebookVersionUuids(const Database &db)
 
 Result<std::vector<CopyEvent>> copyEvents(const Database &db, qint64 afterId)
 {
-    auto stmt = db.prepare(QStringLiteral("SELECT id, at, coder_id IS NOT NULL, action, "
-                                          "object_type, object_uuid, detail FROM event_log "
-                                          "WHERE id > ?1 ORDER BY id"));
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT e.id, e.at, e.coder_id IS NOT NULL, coalesce(c.uuid, ''), e.action, "
+                       "e.object_type, e.object_uuid, e.detail FROM event_log e "
+                       "LEFT JOIN coder c ON c.id = e.coder_id WHERE e.id > ?1 ORDER BY e.id"));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, afterId);
     return collectRows(*stmt, [](const Statement &s) {
         return CopyEvent {s.columnInt(0), s.columnText(1), s.columnInt(2) != 0, s.columnText(3),
-            s.columnText(4), s.columnText(5), fromJsonText(s.columnText(6))};
+            s.columnText(4), s.columnText(5), s.columnText(6), fromJsonText(s.columnText(7))};
     });
 }
 
@@ -571,46 +648,6 @@ Result<std::vector<MergeConflict>> mergeConflicts(const Database &db, bool all)
     return collectRows(*stmt, readConflict);
 }
 
-Result<bool> recordConflict(Database &db, const MergeConflict &conflict)
-{
-    auto find = db.prepare(
-        QStringLiteral("SELECT uuid, mine, theirs FROM merge_conflict WHERE object_type = ?1 AND "
-                       "object_uuid = ?2 AND copy_uuid = ?3 AND resolution = ''"));
-    if (!find)
-        return std::unexpected(find.error());
-    find->bind(1, conflict.objectType).bind(2, conflict.objectUuid).bind(3, conflict.copyUuid);
-    auto found = find->step();
-    if (!found)
-        return std::unexpected(found.error());
-    const QString mine = toJsonText(conflict.mine);
-    const QString theirs = toJsonText(conflict.theirs);
-    if (*found) {
-        if (find->columnText(1) == mine && find->columnText(2) == theirs)
-            return false;
-        auto update = db.prepare(QStringLiteral(
-            "UPDATE merge_conflict SET mine = ?2, theirs = ?3, detected_at = ?4 WHERE uuid = ?1"));
-        if (!update)
-            return std::unexpected(update.error());
-        update->bind(1, find->columnText(0)).bind(2, mine).bind(3, theirs).bind(4, now());
-        FOURFOLD_TRY_STATUS(update->run());
-        return true;
-    }
-    auto insert = db.prepare(QStringLiteral(
-        "INSERT INTO merge_conflict (uuid, object_type, object_uuid, copy_uuid, mine, theirs, "
-        "detected_at) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)"));
-    if (!insert)
-        return std::unexpected(insert.error());
-    insert->bind(1, newUuid())
-        .bind(2, conflict.objectType)
-        .bind(3, conflict.objectUuid)
-        .bind(4, conflict.copyUuid)
-        .bind(5, mine)
-        .bind(6, theirs)
-        .bind(7, now());
-    FOURFOLD_TRY_STATUS(insert->run());
-    return true;
-}
-
 Status setConflictResolution(Database &db, const QString &uuid, const QString &resolution)
 {
     auto stmt = db.prepare(QStringLiteral("UPDATE merge_conflict SET resolution = ?2, "
@@ -622,6 +659,57 @@ Status setConflictResolution(Database &db, const QString &uuid, const QString &r
     if (db.changes() != 1)
         return fail(ErrorCode::NotFound, tr("There is no open conflict %1.").arg(uuid));
     return {};
+}
+
+Result<std::vector<MergeConflict>> openConflictsOf(
+    const Database &db, const QString &objectType, const QString &objectUuid)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT uuid, object_type, object_uuid, copy_uuid, mine, theirs, detected_at, "
+        "resolution, resolved_at FROM merge_conflict WHERE object_type = ?1 "
+        "AND object_uuid = ?2 AND resolution = '' ORDER BY id"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, objectType).bind(2, objectUuid);
+    return collectRows(*stmt, readConflict);
+}
+
+Status insertConflict(Database &db, const MergeConflict &conflict)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "INSERT INTO merge_conflict (uuid, object_type, object_uuid, copy_uuid, mine, theirs, "
+        "detected_at) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, newUuid())
+        .bind(2, conflict.objectType)
+        .bind(3, conflict.objectUuid)
+        .bind(4, conflict.copyUuid)
+        .bind(5, toJsonText(conflict.mine))
+        .bind(6, toJsonText(conflict.theirs))
+        .bind(7, now());
+    return stmt->run();
+}
+
+Status updateConflict(
+    Database &db, const QString &uuid, const QJsonObject &mine, const QJsonObject &theirs)
+{
+    auto stmt = db.prepare(QStringLiteral("UPDATE merge_conflict SET mine = ?2, theirs = ?3 "
+                                          "WHERE uuid = ?1 AND resolution = ''"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, uuid).bind(2, toJsonText(mine)).bind(3, toJsonText(theirs));
+    return stmt->run();
+}
+
+Status removeConflict(Database &db, const QString &uuid)
+{
+    auto stmt = db.prepare(
+        QStringLiteral("DELETE FROM merge_conflict WHERE uuid = ?1 AND resolution = ''"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, uuid);
+    return stmt->run();
 }
 
 } // namespace fourfold::store

@@ -54,6 +54,14 @@ Status addPortableSeconds(Database &db, const PortableRow &row, qint64 seconds);
 Result<std::optional<QString>> otherLiveJudgement(const Database &db, const PortableRow &row);
 // Tombstones the judgement `uuid` (modified now).
 Status tombstoneJudgement(Database &db, const QString &uuid);
+// Tombstones the judgement `uuid` keeping its modification time: a merge that sets aside an
+// answer writes the same row whatever the order of the copies.
+Status setAsideJudgement(Database &db, const QString &uuid);
+// What the uuid `uuid` already names in this file other than a `type` object of the coder
+// `coderUuid` (for assignments: of that coder): e.g. "gold span", "annotation of another coder",
+// "article"; empty if nothing else. Looks in every table whose rows have a uuid.
+Result<QString> otherUseOfUuid(
+    const Database &db, const QString &uuid, const QString &type, const QString &coderUuid);
 
 // --- the common base ------------------------------------------------------------------------
 struct BaseEntry {
@@ -65,6 +73,12 @@ Result<QHash<QString, BaseEntry>> copyBase(const Database &db, const QString &co
 // Sets the base entry of the object `row` names (its type and baseId()) for `copyUuid`.
 Status setCopyBase(
     Database &db, const QString &copyUuid, const PortableRow &row, const BaseEntry &entry);
+// The smallest copy uuid other than `exceptCopy` whose base entry for the object `row` names has
+// the digest `digest`; empty if none.
+Result<QString> copyWithBase(
+    const Database &db, const PortableRow &row, const QString &digest, const QString &exceptCopy);
+// The time (ISO 8601 UTC) of this project's "copy.handout" event for `copyUuid`, if there is one.
+Result<std::optional<QString>> handoutTime(const Database &db, const QString &copyUuid);
 
 // --- writing a copy -------------------------------------------------------------------------
 // Attaches the project file `sourcePath` as schema "src" of `copyDb` (outside a transaction).
@@ -96,6 +110,7 @@ struct CopyEvent {
     qint64 id = 0; // in the copy's log
     QString at;
     bool byCoder = false; // made by a person (the copy's coder), not by the program
+    QString coderUuid; // that person's uuid in the copy ("" if unknown or by the program)
     QString action;
     QString objectType;
     QString objectUuid;
@@ -121,20 +136,27 @@ struct MergeConflict {
     QString uuid;
     QString objectType;
     QString objectUuid;
-    QString copyUuid;
-    QJsonObject mine; // the project's portable row when found ({} if none)
-    QJsonObject theirs; // the copy's portable row
+    QString copyUuid; // the copy that brought the losing version ("" if the project's own)
+    QJsonObject mine; // the version the project keeps (portable row; {} if none)
+    QJsonObject theirs; // the version that lost (portable row)
     QString detectedAt;
     QString resolution; // "" (open), "mine" or "theirs"
     QString resolvedAt;
 };
 // Conflicts ordered by detection; open ones only unless `all`.
 Result<std::vector<MergeConflict>> mergeConflicts(const Database &db, bool all);
-// Adds an open conflict (uuid made here) or, if one is open for the same object and copy,
-// replaces its mine/theirs. Returns false when an identical open conflict was already there.
-Result<bool> recordConflict(Database &db, const MergeConflict &conflict);
 // Marks the conflict `uuid` resolved with "mine" or "theirs" (now). NotFound if not open.
 Status setConflictResolution(Database &db, const QString &uuid, const QString &resolution);
+// The open conflicts of the object `objectType`/`objectUuid` (of any copy), by detection.
+Result<std::vector<MergeConflict>> openConflictsOf(
+    const Database &db, const QString &objectType, const QString &objectUuid);
+// Adds the open conflict `conflict` (uuid made here, detected now).
+Status insertConflict(Database &db, const MergeConflict &conflict);
+// Replaces the versions of the open conflict `uuid`.
+Status updateConflict(
+    Database &db, const QString &uuid, const QJsonObject &mine, const QJsonObject &theirs);
+// Removes the open conflict `uuid`, whose losing version a later copy superseded.
+Status removeConflict(Database &db, const QString &uuid);
 
 } // namespace store
 } // namespace fourfold

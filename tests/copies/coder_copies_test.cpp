@@ -3,12 +3,14 @@
 // The merge rules are a three-way merge against a common base (common practice in version
 // control, e.g. diff3); the expected values below follow from the edits each test makes.
 #include "copies_fixture.h"
+#include "copy_files.h"
 #include "core/project/article_status_edit.h"
 #include "core/store/schema.h"
 #include "tests/support/db_dump.h"
 
 #include <QFile>
 #include <QJsonDocument>
+#include <QThread>
 
 #include <sqlite3.h>
 
@@ -20,119 +22,6 @@ using namespace fourfold;
 using namespace fourfold::test;
 
 namespace {
-
-// A dump in which row ids are replaced by the uuids they stand for, rows sorted: two files that
-// hold the same objects compare equal whatever order their rows were inserted in.
-QString uuidDump(const Database &db, const QStringList &skip)
-{
-    auto tables = db.prepare(QStringLiteral(
-        "SELECT name FROM sqlite_schema WHERE type = 'table' AND name NOT LIKE 'sqlite_%' "
-        "AND name NOT LIKE 'article_fts%' ORDER BY name"));
-    REQUIRE(tables);
-    QStringList names;
-    while (*tables->step())
-        names << tables->columnText(0);
-    auto hasUuid = [&](const QString &table) {
-        auto s = db.prepare(
-            QStringLiteral("SELECT count(*) FROM pragma_table_info(?1) WHERE name = 'uuid'"));
-        REQUIRE(s);
-        s->bind(1, table);
-        REQUIRE(*s->step());
-        return s->columnInt(0) == 1;
-    };
-    QString dump;
-    for (const QString &name : names) {
-        if (skip.contains(name))
-            continue;
-        std::map<QString, QString> foreign; // column → referenced table (with a uuid)
-        auto fks = db.prepare(
-            QStringLiteral("SELECT \"from\", \"table\" FROM pragma_foreign_key_list(?1)"));
-        REQUIRE(fks);
-        fks->bind(1, name);
-        while (*fks->step())
-            if (hasUuid(fks->columnText(1)))
-                foreign[fks->columnText(0)] = fks->columnText(1);
-        auto cols =
-            db.prepare(QStringLiteral("SELECT name FROM pragma_table_info(?1) ORDER BY cid"));
-        REQUIRE(cols);
-        cols->bind(1, name);
-        QStringList columns;
-        while (*cols->step())
-            columns << cols->columnText(0);
-        const bool ownUuid = hasUuid(name);
-        // Table and column names come from sqlite_schema, not from users.
-        auto rows = db.prepare(QStringLiteral("SELECT * FROM \"%1\"").arg(name));
-        REQUIRE(rows);
-        QStringList lines;
-        while (*rows->step()) {
-            QStringList cells;
-            for (int c = 0; c < columns.size(); ++c) {
-                const QString col = columns[c];
-                QString cell = rows->columnIsNull(c) ? QStringLiteral("NULL") : rows->columnText(c);
-                if (col == QLatin1String("id") && ownUuid)
-                    cell = QStringLiteral("#");
-                else if (foreign.contains(col) && !rows->columnIsNull(c)) {
-                    auto ref = db.prepare(
-                        QStringLiteral("SELECT uuid FROM \"%1\" WHERE id = ?1").arg(foreign[col]));
-                    REQUIRE(ref);
-                    ref->bind(1, rows->columnInt(c));
-                    REQUIRE(*ref->step());
-                    cell = QStringLiteral("->") + ref->columnText(0);
-                }
-                cells << cell;
-            }
-            lines << cells.join(QLatin1Char('|'));
-        }
-        lines.sort();
-        dump += QStringLiteral("## %1\n%2\n").arg(name, lines.join(QLatin1Char('\n')));
-    }
-    return dump;
-}
-
-// What a merge may leave different between orders: the log and the merge bookkeeping.
-const QStringList kOrderFree {QStringLiteral("event_log"), QStringLiteral("copy_merge")};
-
-Project openProject(const QString &path)
-{
-    auto p = Project::open(path);
-    INFO(path.toStdString());
-    REQUIRE(p);
-    return std::move(*p);
-}
-
-Annotation onlyAnnotation(const Project &p, ArticleId a, CoderId c, FramingFunction f)
-{
-    auto list = p.annotations(a, c);
-    REQUIRE(list);
-    std::vector<Annotation> hits;
-    std::ranges::copy_if(*list, std::back_inserter(hits),
-        [&](const Annotation &x) { return x.content.function == f; });
-    REQUIRE(hits.size() == 1);
-    return hits.front();
-}
-
-CoderId coderIn(const Project &p, const QString &pseudonym)
-{
-    auto c = p.coderByPseudonym(pseudonym);
-    REQUIRE(c);
-    REQUIRE(c->has_value());
-    return (*c)->id;
-}
-
-ArticleId articleIn(const Project &p, const QString &externalId)
-{
-    auto id = p.articleByExternalId(externalId);
-    REQUIRE(id);
-    REQUIRE(id->has_value());
-    return **id;
-}
-
-QString textOf(const Project &p, ArticleId a)
-{
-    auto art = p.article(a);
-    REQUIRE(art);
-    return art->text;
-}
 
 // The edits each coder makes in their copy, through the real edits and Project::apply.
 void editC01(const QString &path)
@@ -221,14 +110,6 @@ void editC03(const QString &path)
     REQUIRE(p.addCodingTime(f2, me, 30));
 }
 
-std::vector<MergeReport> mergeInto(Project &p, const QStringList &copies)
-{
-    auto r = CoderCopies::merge(p, copies);
-    INFO((r ? QString() : r.error().toString()).toStdString());
-    REQUIRE(r);
-    return *r;
-}
-
 // Every text cell of every table (FTS shadow tables included) of the SQLite file at `path`,
 // read with the SQLite C API directly, not through Fourfold.
 QStringList everyCell(const QString &path)
@@ -260,34 +141,6 @@ QStringList everyCell(const QString &path)
     }
     sqlite3_close(db);
     return cells;
-}
-
-qint64 count(const QString &path, const char *sql)
-{
-    sqlite3 *db = nullptr;
-    REQUIRE(sqlite3_open_v2(path.toUtf8().constData(), &db, SQLITE_OPEN_READONLY, nullptr)
-        == SQLITE_OK);
-    sqlite3_stmt *s = nullptr;
-    INFO(sql);
-    REQUIRE(sqlite3_prepare_v2(db, sql, -1, &s, nullptr) == SQLITE_OK);
-    REQUIRE(sqlite3_step(s) == SQLITE_ROW);
-    const qint64 n = sqlite3_column_int64(s, 0);
-    sqlite3_finalize(s);
-    sqlite3_close(db);
-    return n;
-}
-
-void execSql(const QString &path, const char *sql)
-{
-    sqlite3 *db = nullptr;
-    REQUIRE(sqlite3_open_v2(path.toUtf8().constData(), &db, SQLITE_OPEN_READWRITE, nullptr)
-        == SQLITE_OK);
-    char *message = nullptr;
-    const int rc = sqlite3_exec(db, sql, nullptr, nullptr, &message);
-    INFO((message ? message : ""));
-    sqlite3_free(message);
-    sqlite3_close(db);
-    REQUIRE(rc == SQLITE_OK);
 }
 
 } // namespace
@@ -632,16 +485,32 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     CHECK(dumpDatabase(f.main->databaseForTesting(), {}) != before);
 }
 
-TEST_CASE("an annotation changed in the copy and in the project is a conflict for the lead")
+TEST_CASE("an object changed in the copy and in the project keeps the later change and leaves "
+          "the other to the lead")
 {
     CopiesFixture f;
+    SetJudgementEdit answered(f.f1, f.c1, QStringLiteral("dominant_function"),
+        QStringLiteral("problem"), Phase::Reliability);
+    REQUIRE(f.main->apply(answered));
     const QString path = f.handout(QStringLiteral("C01"), QStringLiteral("c01.fourfold"));
     const Annotation cause = onlyAnnotation(*f.main, f.f1, f.c1, FramingFunction::Cause);
     const Annotation problem = onlyAnnotation(*f.main, f.f1, f.c1, FramingFunction::Problem);
     const Annotation eval = onlyAnnotation(*f.main, f.f2, f.c1, FramingFunction::Evaluation);
+    auto answerIn = [](Project &p, const QString &value) {
+        const CoderId me = coderIn(p, QStringLiteral("C01"));
+        SetJudgementEdit set(articleIn(p, QStringLiteral("f1")), me,
+            QStringLiteral("dominant_function"), value, Phase::Reliability);
+        REQUIRE(p.apply(set));
+    };
     {
-        // In the project (the coder working at the office once more): the cause's actor, the
-        // problem's note.
+        // First in the copy: another answer.
+        Project copy = openProject(path);
+        answerIn(copy, QStringLiteral("cause"));
+    }
+    QThread::msleep(20); // later edits get later times (milliseconds)
+    {
+        // Then in the project (the coder working at the office once more): the cause's actor,
+        // the problem's note, the evaluation deleted, and the answer changed again.
         AnnotationContent c = cause.content;
         c.attributes = {{QStringLiteral("actor"), QStringLiteral("the mayor")}};
         ChangeAnnotationEdit change(cause.id, c, f.c1);
@@ -652,8 +521,11 @@ TEST_CASE("an annotation changed in the copy and in the project is a conflict fo
         REQUIRE(f.main->apply(same));
         DeleteAnnotationEdit del(eval.id, f.c1);
         REQUIRE(f.main->apply(del));
+        answerIn(*f.main, QStringLiteral("remedy"));
     }
+    QThread::msleep(20);
     {
+        // Last in the copy: another actor, the same note, the evaluation changed.
         Project copy = openProject(path);
         AnnotationContent c = cause.content;
         c.attributes = {{QStringLiteral("actor"), QStringLiteral("the ferry company")}};
@@ -669,50 +541,69 @@ TEST_CASE("an annotation changed in the copy and in the project is a conflict fo
         REQUIRE(copy.apply(changeDeleted));
     }
     auto reports = mergeInto(*f.main, {path});
-    CHECK(reports[0].conflicts == 2); // the cause (two actors) and the evaluation (deleted/changed)
-    CHECK(reports[0].changed == 0); // the same note on both sides is no conflict and no change
+    // The cause (two actors), the evaluation (deleted/changed), the answer (cause/remedy).
+    CHECK(reports[0].conflicts == 3);
+    // The copy's later cause and evaluation are taken; the same note is no change.
+    CHECK(reports[0].changed == 2);
     auto open = CoderCopies::conflicts(*f.main, false);
     REQUIRE(open);
-    REQUIRE(open->size() == 2);
-    // The project keeps its version until the lead decides.
+    REQUIRE(open->size() == 3);
     CHECK(onlyAnnotation(*f.main, f.f1, f.c1, FramingFunction::Cause)
               .content.attributes.value(QStringLiteral("actor"))
               .toString()
-        == QStringLiteral("the mayor"));
+        == QStringLiteral("the ferry company"));
+    auto actorIn = [](const QJsonObject &row) {
+        return QJsonDocument::fromJson(row.value(QStringLiteral("attributes")).toString().toUtf8())
+            .object()
+            .value(QStringLiteral("actor"))
+            .toString();
+    };
     const auto causeConflict = std::ranges::find_if(
         *open, [&](const store::MergeConflict &c) { return c.objectUuid == cause.uuid; });
     REQUIRE(causeConflict != open->end());
-    CHECK(QJsonDocument::fromJson(
-              causeConflict->theirs.value(QStringLiteral("attributes")).toString().toUtf8())
-              .object()
-              .value(QStringLiteral("actor"))
-              .toString()
-        == QStringLiteral("the ferry company"));
+    CHECK(actorIn(causeConflict->mine) == QStringLiteral("the ferry company"));
+    CHECK(actorIn(causeConflict->theirs) == QStringLiteral("the mayor"));
+    CHECK(causeConflict->copyUuid.isEmpty()); // the project's own version lost
+    // The project's answer is later than the copy's: it stays, the copy's is kept for the lead.
+    auto answers = f.main->allJudgements();
+    REQUIRE(answers);
+    for (const Judgement &j : *answers)
+        if (j.coder == f.c1)
+            CHECK(j.value == QStringLiteral("remedy"));
+    const auto answerConflict = std::ranges::find_if(*open,
+        [&](const store::MergeConflict &c) { return c.objectType == QLatin1String("judgement"); });
+    REQUIRE(answerConflict != open->end());
+    CHECK(answerConflict->theirs.value(QStringLiteral("value")).toString()
+        == QStringLiteral("cause"));
+    CHECK(
+        answerConflict->mine.value(QStringLiteral("value")).toString() == QStringLiteral("remedy"));
 
     // Merging again adds no second conflict and changes nothing.
     const QString full = dumpDatabase(f.main->databaseForTesting(), {});
     CHECK(mergeInto(*f.main, {path})[0].alreadyMerged);
     CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == full);
 
-    // The lead takes the copy's cause and keeps the project's deletion.
+    // The lead takes back the project's cause and keeps the copy's evaluation.
     auto bad = CoderCopies::resolve(*f.main, cause.uuid, QStringLiteral("both"));
     REQUIRE_FALSE(bad);
     CHECK(bad.error().code == ErrorCode::InvalidArgument);
     REQUIRE(CoderCopies::resolve(*f.main, cause.uuid, QStringLiteral("theirs")));
     REQUIRE(CoderCopies::resolve(*f.main, eval.uuid, QStringLiteral("mine")));
+    REQUIRE(CoderCopies::resolve(*f.main, answerConflict->uuid, QStringLiteral("mine")));
     CHECK(onlyAnnotation(*f.main, f.f1, f.c1, FramingFunction::Cause)
               .content.attributes.value(QStringLiteral("actor"))
               .toString()
-        == QStringLiteral("the ferry company"));
-    auto c1f2 = f.main->annotations(f.f2, f.c1);
-    REQUIRE(c1f2);
-    CHECK(c1f2->empty());
+        == QStringLiteral("the mayor"));
+    CHECK(onlyAnnotation(*f.main, f.f2, f.c1, FramingFunction::Evaluation)
+              .content.attributes.value(QStringLiteral("polarity"))
+              .toString()
+        == QStringLiteral("neutral"));
     open = CoderCopies::conflicts(*f.main, false);
     REQUIRE(open);
     CHECK(open->empty());
     auto all = CoderCopies::conflicts(*f.main, true);
     REQUIRE(all);
-    CHECK(all->size() == 2);
+    CHECK(all->size() == 3);
     auto again = CoderCopies::resolve(*f.main, cause.uuid, QStringLiteral("mine"));
     REQUIRE_FALSE(again);
     CHECK(again.error().code == ErrorCode::NotFound);
@@ -722,8 +613,9 @@ TEST_CASE("an annotation changed in the copy and in the project is a conflict fo
     CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == settled);
 }
 
-TEST_CASE("two copies for one coder lose nothing in either order")
+TEST_CASE("two copies for one coder give the same project in either order and lose nothing")
 {
+    QString first;
     for (int reversed = 0; reversed < 2; ++reversed) {
         CopiesFixture f;
         const QString a = f.handout(QStringLiteral("C01"), QStringLiteral("a.fourfold"));
@@ -731,6 +623,7 @@ TEST_CASE("two copies for one coder lose nothing in either order")
         const Annotation cause = onlyAnnotation(*f.main, f.f1, f.c1, FramingFunction::Cause);
         for (const auto &[path, actor] : {std::pair {a, QStringLiteral("A's actor")},
                  std::pair {b, QStringLiteral("B's actor")}}) {
+            QThread::msleep(20); // B's change is the later one
             Project copy = openProject(path);
             AnnotationContent c = cause.content;
             c.attributes = {{QStringLiteral("actor"), actor}};
@@ -740,16 +633,17 @@ TEST_CASE("two copies for one coder lose nothing in either order")
         }
         const QStringList order = reversed ? QStringList {b, a} : QStringList {a, b};
         mergeInto(*f.main, order);
-        const QString winner = reversed ? QStringLiteral("B's actor") : QStringLiteral("A's actor");
-        const QString other = reversed ? QStringLiteral("A's actor") : QStringLiteral("B's actor");
         CHECK(onlyAnnotation(*f.main, f.f1, f.c1, FramingFunction::Cause)
                   .content.attributes.value(QStringLiteral("actor"))
                   .toString()
-            == winner);
+            == QStringLiteral("B's actor"));
         auto open = CoderCopies::conflicts(*f.main, false);
         REQUIRE(open);
         REQUIRE(open->size() == 1);
-        CHECK(open->front().theirs.value(QStringLiteral("attributes")).toString().contains(other));
+        CHECK(open->front()
+                  .theirs.value(QStringLiteral("attributes"))
+                  .toString()
+                  .contains(QStringLiteral("A's actor")));
         auto assignments = f.main->assignments();
         REQUIRE(assignments);
         for (const Assignment &x : *assignments)

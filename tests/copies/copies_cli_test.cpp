@@ -5,6 +5,7 @@
 
 #include <QJsonArray>
 #include <QJsonObject>
+#include <QThread>
 
 #include <sqlite3.h>
 
@@ -117,8 +118,10 @@ TEST_CASE("a coder copy handed out, edited, merged, merged again, tampered and i
     CHECK(r.err.count(QLatin1Char('\n')) == 1);
     CHECK(cli({QStringLiteral("info"), main, QStringLiteral("--json")}).out == infoBefore);
 
-    // The same span changed in the project and in the copy: a conflict, listed and resolved.
+    // The same span changed in the project and later in the copy: the copy's later change is
+    // kept, the project's is a conflict, listed and resolved.
     changeCauseActor(main, QStringLiteral("the province"));
+    QThread::msleep(20); // later edits get later times (milliseconds)
     changeCauseActor(copy, QStringLiteral("the ferry company"));
     r = cli({QStringLiteral("merge"), main, copy});
     REQUIRE(r.exitCode == 0);
@@ -138,12 +141,17 @@ TEST_CASE("a coder copy handed out, edited, merged, merged again, tampered and i
               .toObject()
               .value(QStringLiteral("attributes"))
               .toString()
+              .contains(QStringLiteral("the ferry company")));
+    CHECK(c.value(QStringLiteral("theirs"))
+              .toObject()
+              .value(QStringLiteral("attributes"))
+              .toString()
               .contains(QStringLiteral("the province")));
     r = cli({QStringLiteral("merge"), main, QStringLiteral("--conflicts")});
     CHECK(r.out.contains(QStringLiteral(" on article f1")));
-    CHECK(r.out.contains(QStringLiteral("mine (project): cause [")));
+    CHECK(r.out.contains(QStringLiteral("mine (kept):   cause [")));
     CHECK(r.out.contains(QStringLiteral("the province")));
-    CHECK(r.out.contains(QStringLiteral("theirs (copy):  cause [")));
+    CHECK(r.out.contains(QStringLiteral("theirs (lost): cause [")));
     CHECK(r.out.contains(QStringLiteral("the ferry company")));
     r = cli({QStringLiteral("merge"), main, QStringLiteral("--resolve"),
         c.value(QStringLiteral("conflict")).toString(), QStringLiteral("--keep"),
@@ -162,7 +170,7 @@ TEST_CASE("a coder copy handed out, edited, merged, merged again, tampered and i
         REQUIRE(all);
         CHECK(std::ranges::count_if(*all, [](const Annotation &a) {
             return a.content.attributes.value(QStringLiteral("actor")).toString()
-                == QStringLiteral("the ferry company");
+                == QStringLiteral("the province");
         }) == 1);
     }
     r = cli({QStringLiteral("check"), main});
