@@ -408,7 +408,7 @@ TEST_CASE("a new codebook version has a readable diff; older annotations are fla
     const QString attributeKey = evaluation.attributes.front().key;
     evaluation.attributes.front().values << QStringLiteral("mixed");
     evaluation.attributes.push_back(AttributeSpec {QStringLiteral("target"),
-        QStringLiteral("Target"), AttributeSpec::Type::Text, {}, MeasurementLevel::Nominal});
+        QStringLiteral("Target"), AttributeSpec::Type::Text, {}, MeasurementLevel::Nominal, {}});
 
     const QString path =
         writeFile(f.dir, QStringLiteral("v2.json"), QJsonDocument(v2.toJson()).toJson());
