@@ -10,6 +10,22 @@
 
 namespace fourfold {
 
+struct CodingSession::Unsaved {
+    std::unique_ptr<Edit> edit;
+    ArticleId article;
+    ArticleDocument::Parts touched;
+};
+
+namespace {
+
+// Errors of the file rather than of the edit: trying again later can succeed.
+bool worthRetrying(const Error &error)
+{
+    return error.code == ErrorCode::Busy || error.code == ErrorCode::Io;
+}
+
+} // namespace
+
 CodingSession::CodingSession(Project project, Coder coder, QObject *parent)
     : QObject(parent)
     , m_project(std::move(project))
@@ -28,6 +44,22 @@ CodingSession::~CodingSession()
 void CodingSession::setShowAllCoders(bool on)
 {
     m_showAll = on;
+    if (auto st = m_document.setAllCoders(showsAllCoders()); !st)
+        emit errorOccurred(st.error().toString());
+}
+
+Status CodingSession::openDocument(ArticleId article)
+{
+    return m_document.open(article, showsAllCoders());
+}
+
+void CodingSession::changed(ArticleId article, ArticleDocument::Parts touched)
+{
+    if (m_document.isOpen() && m_document.id() == article) {
+        if (auto st = m_document.reload(touched); !st)
+            emit errorOccurred(st.error().toString());
+    }
+    emit articleChanged(article);
 }
 
 std::vector<ArticleRow> CodingSession::articleRows() const
@@ -71,6 +103,8 @@ std::vector<ArticleRow> CodingSession::articleRows() const
 
 QString CodingSession::articleStatus(ArticleId article) const
 {
+    if (m_document.isOpen() && m_document.id() == article)
+        return m_document.status();
     QString status = QStringLiteral("assigned");
     if (auto a = m_project.assignments(article, m_coder.id))
         for (const Assignment &x : *a) {
@@ -89,6 +123,8 @@ QString CodingSession::articleStatus(ArticleId article) const
 
 qint64 CodingSession::secondsSpent(ArticleId article) const
 {
+    if (m_document.isOpen() && m_document.id() == article)
+        return m_document.seconds();
     qint64 seconds = 0;
     if (auto a = m_project.assignments(article, m_coder.id))
         for (const Assignment &x : *a)
@@ -98,6 +134,8 @@ qint64 CodingSession::secondsSpent(ArticleId article) const
 
 Phase CodingSession::phaseOf(ArticleId article) const
 {
+    if (m_document.isOpen() && m_document.id() == article)
+        return m_document.phase();
     if (auto a = m_project.assignments(article, m_coder.id))
         for (const Assignment &x : *a)
             return x.phase;
@@ -121,16 +159,41 @@ std::vector<Judgement> CodingSession::ownJudgements(ArticleId article) const
     return out;
 }
 
-Status CodingSession::push(std::unique_ptr<Edit> edit, ArticleId article)
+Status CodingSession::push(
+    std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched)
 {
     // Applied first, so that a refused edit reports its own error and never reaches the stack.
     if (auto st = m_project.apply(*edit); !st) {
-        emit errorOccurred(st.error().toString());
+        if (worthRetrying(st.error())) {
+            const QString text = edit->text();
+            m_unsaved.reset(new Unsaved {std::move(edit), article, touched});
+            emit editNotSaved(text, st.error().toString());
+        } else {
+            emit errorOccurred(st.error().toString());
+        }
         return st;
     }
-    m_undo.push(new EditCommand(this, std::move(edit), article));
-    emit articleChanged(article);
+    m_undo.push(new EditCommand(this, std::move(edit), article, touched));
+    changed(article, touched);
     return {};
+}
+
+QString CodingSession::unsavedEditText() const
+{
+    return m_unsaved ? m_unsaved->edit->text() : QString();
+}
+
+Status CodingSession::retryUnsavedEdit()
+{
+    if (!m_unsaved)
+        return {};
+    std::unique_ptr<Unsaved> unsaved = std::move(m_unsaved);
+    return push(std::move(unsaved->edit), unsaved->article, unsaved->touched);
+}
+
+void CodingSession::discardUnsavedEdit()
+{
+    m_unsaved.reset();
 }
 
 Status CodingSession::addSpan(ArticleId article, FramingFunction function, TextRange range)
@@ -138,58 +201,77 @@ Status CodingSession::addSpan(ArticleId article, FramingFunction function, TextR
     auto edit = std::make_unique<AddAnnotationEdit>(
         article, m_coder.id, AnnotationContent {function, range, {}, {}, {}}, phaseOf(article));
     AddAnnotationEdit *raw = edit.get();
-    FOURFOLD_TRY_STATUS(push(std::move(edit), article));
+    FOURFOLD_TRY_STATUS(push(std::move(edit), article, ArticleDocument::Part::Spans));
     m_lastAdded = raw->annotationId();
     return {};
 }
 
-Status CodingSession::changeSpan(AnnotationId id, const AnnotationContent &content)
+Result<ArticleId> CodingSession::articleOf(AnnotationId id) const
 {
+    // The open article's spans are at hand; another article's span is read.
+    if (const auto span = m_document.span(id))
+        return span->article;
     auto span = m_project.annotation(id);
     if (!span)
         return std::unexpected(span.error());
-    return push(std::make_unique<ChangeAnnotationEdit>(id, content, m_coder.id), span->article);
+    return span->article;
+}
+
+Status CodingSession::changeSpan(AnnotationId id, const AnnotationContent &content)
+{
+    auto article = articleOf(id);
+    if (!article)
+        return std::unexpected(article.error());
+    return push(std::make_unique<ChangeAnnotationEdit>(id, content, m_coder.id), *article,
+        ArticleDocument::Part::Spans);
 }
 
 Status CodingSession::deleteSpan(AnnotationId id)
 {
-    auto span = m_project.annotation(id);
-    if (!span)
-        return std::unexpected(span.error());
-    return push(std::make_unique<DeleteAnnotationEdit>(id, m_coder.id), span->article);
+    auto article = articleOf(id);
+    if (!article)
+        return std::unexpected(article.error());
+    return push(std::make_unique<DeleteAnnotationEdit>(id, m_coder.id), *article,
+        ArticleDocument::Part::Spans | ArticleDocument::Part::Links);
 }
 
 Status CodingSession::linkSpans(AnnotationId source, AnnotationId target, const QString &type)
 {
-    auto span = m_project.annotation(source);
-    if (!span)
-        return std::unexpected(span.error());
-    return push(
-        std::make_unique<LinkAnnotationsEdit>(source, target, type, m_coder.id), span->article);
+    auto article = articleOf(source);
+    if (!article)
+        return std::unexpected(article.error());
+    return push(std::make_unique<LinkAnnotationsEdit>(source, target, type, m_coder.id), *article,
+        ArticleDocument::Part::Links);
 }
 
 Status CodingSession::unlinkSpans(LinkId id, ArticleId article)
 {
-    return push(std::make_unique<UnlinkAnnotationsEdit>(id, m_coder.id), article);
+    return push(std::make_unique<UnlinkAnnotationsEdit>(id, m_coder.id), article,
+        ArticleDocument::Part::Links);
 }
 
 Status CodingSession::answerItem(ArticleId article, const QString &itemKey, const QString &value)
 {
     return push(
         std::make_unique<SetJudgementEdit>(article, m_coder.id, itemKey, value, phaseOf(article)),
-        article);
+        article, ArticleDocument::Part::Answers);
 }
 
 Status CodingSession::markDone(ArticleId article)
 {
     return push(std::make_unique<SetArticleStatusEdit>(article, m_coder.id, QStringLiteral("done")),
-        article);
+        article, ArticleDocument::Part::Assignments);
 }
 
 void CodingSession::addCodingTime(ArticleId article, qint64 seconds)
 {
-    if (auto st = m_project.addCodingTime(article, m_coder.id, seconds); !st)
+    if (auto st = m_project.addCodingTime(article, m_coder.id, seconds); !st) {
         emit errorOccurred(st.error().toString());
+        return;
+    }
+    if (m_document.isOpen() && m_document.id() == article)
+        if (auto st = m_document.reload(ArticleDocument::Part::Assignments); !st)
+            emit errorOccurred(st.error().toString());
 }
 
 } // namespace fourfold

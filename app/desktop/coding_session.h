@@ -4,12 +4,14 @@
 // undoable command over a core edit, written to the project file at once. Views read from the
 // session and ask it for changes; they never write to the project themselves.
 
+#include "app/desktop/article_document.h"
 #include "app/desktop/article_list_model.h"
 #include "core/project/project.h"
 
 #include <QObject>
 #include <QUndoStack>
 
+#include <memory>
 #include <vector>
 
 namespace fourfold {
@@ -34,11 +36,17 @@ public:
     bool showsAllCoders() const { return isLead() && m_showAll; }
     void setShowAllCoders(bool on);
 
+    // The article open on the desk, kept up to date by every change made through the session
+    // (and its undo and redo): views read it instead of the project.
+    const ArticleDocument &document() const { return m_document; }
+    Status openDocument(ArticleId article);
+
     // The articles this person may open (their assignments; a lead: all articles) with this
     // person's status and active seconds on each, read with a fixed number of queries whatever
     // the number of articles (for the article list).
     std::vector<ArticleRow> articleRows() const;
     // This person's status of an article: "assigned" (not started), "started" or "done".
+    // Of the open document without a read, as the next two.
     QString articleStatus(ArticleId article) const;
     // Seconds of active coding time recorded for this person on the article.
     qint64 secondsSpent(ArticleId article) const;
@@ -60,20 +68,38 @@ public:
     // Records active coding time (not undoable, not a user edit).
     void addCodingTime(ArticleId article, qint64 seconds);
 
-    // The phase this person codes the article in: that of their assignment (production if none).
+    // The phase this person codes the article in: that of their assignment (production if none);
+    // the open document's without a read.
     Phase phaseOf(ArticleId article) const;
+
+    // An edit the project file could not take (another program was writing it past the busy
+    // timeout, or the disk refused): kept here, not on the undo stack, until it is retried or
+    // discarded, so a change the coder made never silently vanishes. A refused edit (invalid,
+    // not allowed) is not kept.
+    bool hasUnsavedEdit() const { return m_unsaved != nullptr; }
+    QString unsavedEditText() const;
+    // Applies the unsaved edit again; on success it joins the undo stack.
+    Status retryUnsavedEdit();
+    void discardUnsavedEdit();
 
     // The id of the span the last successful addSpan() created.
     AnnotationId lastAddedSpan() const { return m_lastAdded; }
 
 signals:
-    // After any change to spans, links or answers of `article` (including undo and redo).
+    // After any change to spans, links, answers or the status of `article` (including undo and
+    // redo), once the open document holds it.
     void articleChanged(ArticleId article);
     void errorOccurred(const QString &message);
+    // An edit could not be written and is kept as unsaved (see hasUnsavedEdit()).
+    void editNotSaved(const QString &editText, const QString &message);
 
 private:
     friend class EditCommand;
-    Status push(std::unique_ptr<Edit> edit, ArticleId article);
+    Status push(std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched);
+    // The article of span `id`.
+    Result<ArticleId> articleOf(AnnotationId id) const;
+    // Reads what changed into the open document (if it is `article`), then says so.
+    void changed(ArticleId article, ArticleDocument::Parts touched);
 
     Project m_project;
     Coder m_coder;
@@ -81,6 +107,9 @@ private:
     QUndoStack m_undo;
     bool m_showAll = false;
     AnnotationId m_lastAdded;
+    ArticleDocument m_document {m_project, m_coder};
+    struct Unsaved;
+    std::unique_ptr<Unsaved> m_unsaved;
 };
 
 } // namespace fourfold

@@ -7,10 +7,12 @@
 
 namespace fourfold {
 
-EditCommand::EditCommand(CodingSession *session, std::unique_ptr<Edit> edit, ArticleId article)
+EditCommand::EditCommand(CodingSession *session, std::unique_ptr<Edit> edit, ArticleId article,
+    ArticleDocument::Parts touched)
     : m_session(session)
     , m_edit(std::move(edit))
     , m_article(article)
+    , m_touched(touched)
 {
     setText(m_edit->text());
 }
@@ -25,7 +27,7 @@ void EditCommand::redo()
         emit m_session->errorOccurred(st.error().toString());
         return;
     }
-    emit m_session->articleChanged(m_article);
+    m_session->changed(m_article, m_touched);
 }
 
 void EditCommand::undo()
@@ -35,7 +37,7 @@ void EditCommand::undo()
         emit m_session->errorOccurred(st.error().toString());
         return;
     }
-    emit m_session->articleChanged(m_article);
+    m_session->changed(m_article, m_touched);
 }
 
 } // namespace fourfold

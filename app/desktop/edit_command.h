@@ -4,6 +4,7 @@
 // redo() re-applies it through the project (one savepoint, committed at once) and undo() reverts
 // it the same way.
 
+#include "app/desktop/article_document.h"
 #include "core/model/ids.h"
 
 #include <QUndoCommand>
@@ -19,7 +20,9 @@ class EditCommand : public QUndoCommand
 {
 public:
     // `edit` has already been applied: the redo() that QUndoStack::push() runs does nothing.
-    EditCommand(CodingSession *session, std::unique_ptr<Edit> edit, ArticleId article);
+    // `touched`: the parts of the article's document the edit changes.
+    EditCommand(CodingSession *session, std::unique_ptr<Edit> edit, ArticleId article,
+        ArticleDocument::Parts touched);
     ~EditCommand() override;
 
     void redo() override;
@@ -29,6 +32,7 @@ private:
     CodingSession *m_session;
     std::unique_ptr<Edit> m_edit;
     ArticleId m_article;
+    ArticleDocument::Parts m_touched;
     bool m_pushed = false;
 };
 

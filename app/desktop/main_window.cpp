@@ -267,7 +267,7 @@ QWidget *MainWindow::buildDesk()
         });
     connect(m_reading, &ReadingView::relabelSpanRequested, this,
         [this](AnnotationId id, FramingFunction f) {
-            if (auto span = m_session->project().annotation(id)) {
+            if (const auto span = m_session->document().span(id)) {
                 AnnotationContent content = span->content;
                 if (content.function != f)
                     content.attributes = {}; // attributes belong to the old function's schema
@@ -277,7 +277,7 @@ QWidget *MainWindow::buildDesk()
         });
     connect(m_reading, &ReadingView::resizeSpanRequested, this,
         [this](AnnotationId id, TextRange range) {
-            if (auto span = m_session->project().annotation(id)) {
+            if (const auto span = m_session->document().span(id)) {
                 AnnotationContent content = span->content;
                 content.range = range;
                 (void)m_session->changeSpan(id, content);
@@ -461,6 +461,7 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
         m_articles->updateArticle(id, m_session->articleStatus(id), m_session->secondsSpent(id));
     });
     connect(m_session.get(), &CodingSession::errorOccurred, this, &MainWindow::showError);
+    connect(m_session.get(), &CodingSession::editNotSaved, this, &MainWindow::showUnsavedEdit);
     m_showAll->setEnabled(m_session->isLead());
     m_import->setEnabled(m_session->isLead());
     m_leadMenu->menuAction()->setVisible(m_session->isLead());
@@ -500,11 +501,11 @@ void MainWindow::openArticle(ArticleId id)
     if (!m_session || id == m_article)
         return;
     flushTime();
-    auto article = m_session->project().article(id);
-    if (!article) {
-        showError(article.error().toString());
+    if (auto st = m_session->openDocument(id); !st) {
+        showError(st.error().toString());
         return;
     }
+    const Article *article = &m_session->document().article();
     m_article = id;
     m_selected = AnnotationId {};
     m_articleHeader->setText(
@@ -523,15 +524,13 @@ void MainWindow::openArticle(ArticleId id)
 
 void MainWindow::refreshArticle()
 {
-    if (!m_session || !m_article.isValid())
+    if (!m_session || !m_article.isValid() || !m_session->document().isOpen())
         return;
-    auto article = m_session->project().article(m_article);
-    if (!article)
-        return;
-    const std::vector<Annotation> spans = m_session->visibleAnnotations(m_article);
+    const ArticleDocument &doc = m_session->document();
+    const std::vector<Annotation> &spans = doc.spans();
     m_reading->setSpans(spans);
-    m_card->setSpans(article->text, spans);
-    m_items->setArticle(m_article, m_session->ownJudgements(m_article));
+    m_card->setSpans(doc.article().text, spans);
+    m_items->setArticle(m_article, doc.answers());
     if (std::none_of(
             spans.begin(), spans.end(), [this](const Annotation &a) { return a.id == m_selected; }))
         m_selected = AnnotationId {};
@@ -543,15 +542,11 @@ void MainWindow::selectSpan(AnnotationId id)
     m_selected = id;
     m_reading->setSelectedSpan(id);
     m_card->setSelectedSpan(id);
-    if (!m_session || !m_article.isValid())
+    if (!m_session || !m_article.isValid() || !m_session->document().isOpen())
         return;
-    const std::vector<Annotation> spans = m_session->visibleAnnotations(m_article);
-    std::optional<Annotation> span;
-    for (const Annotation &a : spans)
-        if (a.id == id)
-            span = a;
-    auto links = m_session->project().links(m_article);
-    m_spanEditor->setSpan(span, spans, links ? *links : std::vector<AnnotationLink> {});
+    const ArticleDocument &doc = m_session->document();
+    const std::optional<Annotation> span = doc.span(id);
+    m_spanEditor->setSpan(span, doc.spans(), doc.links());
     if (span)
         m_codebook->showFunction(span->content.function);
 }
@@ -685,6 +680,23 @@ void MainWindow::showError(const QString &message)
 {
     // Not modal: the change simply did not happen; the reason stays until closed or replaced.
     m_messages->showMessage(MessageBar::Kind::Error, message);
+}
+
+void MainWindow::showUnsavedEdit(const QString &editText, const QString &message)
+{
+    // The change is kept by the session until it is written or given up: it stays on screen
+    // until one of the two, never a status line that passes.
+    m_messages->showMessage(MessageBar::Kind::Error, tr("Not saved: %1. %2").arg(editText, message),
+        {{tr("&Retry"),
+             [this] {
+                 // Failing again shows this message anew (editNotSaved).
+                 if (m_session)
+                     (void)m_session->retryUnsavedEdit();
+             }},
+            {tr("&Discard"), [this] {
+                 if (m_session)
+                     m_session->discardUnsavedEdit();
+             }}});
 }
 
 void MainWindow::updateTitle()

@@ -78,6 +78,7 @@ private:
     void openSample();
     void setLanguage(const QString &code);
     void showError(const QString &message);
+    void showUnsavedEdit(const QString &editText, const QString &message);
     void updateTitle();
 
     std::unique_ptr<CodingSession> m_session;

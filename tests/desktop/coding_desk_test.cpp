@@ -3,6 +3,7 @@
 #include "app/desktop/frame_card.h"
 #include "app/desktop/import_dialog.h"
 #include "app/desktop/main_window.h"
+#include "app/desktop/message_bar.h"
 #include "app/desktop/reading_view.h"
 #include "core/project/project.h"
 #include "core/text/offset_map.h"
@@ -290,4 +291,95 @@ TEST_CASE("a refused change keeps its error and never reaches the undo stack")
     CHECK(st.error().code == ErrorCode::InvalidArgument); // the range lies outside the text
     CHECK(w.session()->undoStack()->count() == 0);
     CHECK(w.session()->project().annotations(article)->empty());
+}
+
+TEST_CASE("a key press and a relabel run a handful of statements")
+{
+    // The desk keeps the open article in a document and reads again only what an edit touched:
+    // a key press costs the edit's own statements (quote, codebook, phase, insert, log) and one
+    // read of the spans, whatever else the desk shows and however many spans the article has.
+    DeskFixture f;
+    MainWindow w;
+    REQUIRE(w.openProject(f.path, QStringLiteral("C01")));
+    w.show();
+    const ArticleId article = articleId(w, "emoji-01");
+    w.openArticle(article);
+    Database &db = w.session()->project().databaseForTesting();
+    const TextRange blame = rangeOf(w, article, QStringLiteral("blame the"));
+    const TextRange families = rangeOf(w, article, QStringLiteral("Families"));
+    const auto statementsOf = [&](const auto &action) {
+        const qint64 before = db.statementsRun();
+        action();
+        return db.statementsRun() - before;
+    };
+
+    w.readingView()->setTextSelection(blame);
+    const qint64 firstKey = statementsOf([&] { QTest::keyClick(w.readingView(), Qt::Key_2); });
+    w.readingView()->setTextSelection(families);
+    const qint64 secondKey = statementsOf([&] { QTest::keyClick(w.readingView(), Qt::Key_1); });
+    const AnnotationId added = w.session()->lastAddedSpan();
+    REQUIRE(w.session()->project().annotations(article, w.session()->coder().id)->size() == 2);
+    CHECK(firstKey <= 6);
+    CHECK(secondKey == firstKey); // one more span on the article costs nothing more
+
+    w.selectSpan(added);
+    const qint64 relabel = statementsOf([&] { QTest::keyClick(w.readingView(), Qt::Key_4); });
+    CHECK(w.session()->project().annotation(added)->content.function == FramingFunction::Remedy);
+    CHECK(relabel <= 6);
+    const qint64 undo = statementsOf([&] { w.session()->undoStack()->undo(); });
+    CHECK(w.session()->project().annotation(added)->content.function == FramingFunction::Problem);
+    CHECK(undo <= 4);
+    // The desk shows what the project holds after all of it.
+    const std::vector<Annotation> stored = *w.session()->project().annotations(article);
+    const std::vector<Annotation> &shown = w.session()->document().spans();
+    REQUIRE(shown.size() == stored.size());
+    for (std::size_t i = 0; i < shown.size(); ++i) {
+        CHECK(shown[i].id == stored[i].id);
+        CHECK(shown[i].content.function == stored[i].content.function);
+        CHECK(shown[i].content.range == stored[i].content.range);
+    }
+    CHECK(w.session()->articleStatus(article) == QStringLiteral("started"));
+}
+
+TEST_CASE("a span the file cannot take while another program writes stays unsaved with Retry")
+{
+    // Another program (the lead's CLI import) holds the project's write lock longer than the desk
+    // waits: the key press must not vanish, but be kept and offered again.
+    DeskFixture f;
+    MainWindow w;
+    REQUIRE(w.openProject(f.path, QStringLiteral("C01")));
+    w.show();
+    const ArticleId article = articleId(w, "emoji-01");
+    w.openArticle(article);
+    w.session()->project().databaseForTesting().setBusyTimeout(50);
+    auto other = Database::open(f.path, Database::OpenMode::ReadWrite);
+    REQUIRE(other);
+    REQUIRE(other->exec(QStringLiteral("BEGIN IMMEDIATE")));
+
+    w.readingView()->setTextSelection(rangeOf(w, article, QStringLiteral("blame the")));
+    QTest::keyClick(w.readingView(), Qt::Key_2);
+    CHECK(w.session()->hasUnsavedEdit());
+    CHECK(w.session()->unsavedEditText() == QStringLiteral("Add cause span"));
+    CHECK_FALSE(w.session()->undoStack()->canUndo());
+    MessageBar *bar = w.findChild<MessageBar *>();
+    REQUIRE(bar);
+    CHECK(bar->kind() == MessageBar::Kind::Error);
+    CHECK(bar->text().startsWith(QStringLiteral("Not saved: Add cause span.")));
+    CHECK(bar->actionTexts() == QStringList {QStringLiteral("Retry"), QStringLiteral("Discard")});
+
+    // Still locked: Retry fails again and the edit is still kept, the bar shown anew.
+    REQUIRE(bar->trigger(QStringLiteral("Retry")));
+    CHECK(w.session()->hasUnsavedEdit());
+    CHECK(bar->text().startsWith(QStringLiteral("Not saved: Add cause span.")));
+
+    // The other program is done: Retry writes the span, which joins the undo stack and the desk.
+    REQUIRE(other->exec(QStringLiteral("COMMIT")));
+    REQUIRE(bar->trigger(QStringLiteral("Retry")));
+    CHECK_FALSE(w.session()->hasUnsavedEdit());
+    auto spans = w.session()->project().annotations(article, w.session()->coder().id);
+    REQUIRE(spans);
+    REQUIRE(spans->size() == 1);
+    CHECK((*spans)[0].quote == QStringLiteral("blame the"));
+    CHECK(w.session()->document().spans().size() == 1);
+    CHECK(w.session()->undoStack()->canUndo());
 }

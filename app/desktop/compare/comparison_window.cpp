@@ -749,7 +749,10 @@ bool ComparisonWindow::push(std::unique_ptr<Edit> edit)
         return false;
     }
     const QString text = edit->text();
-    m_session->undoStack()->push(new EditCommand(m_session, std::move(edit), m_article));
+    // Gold and rejections are not on the desk's document; whatever the edit, its undo reads the
+    // open article again whole if it is this one.
+    m_session->undoStack()->push(
+        new EditCommand(m_session, std::move(edit), m_article, ArticleDocument::Part::Everything));
     m_rationale->clear();
     // The next key (N, A, …) goes to the comparison, not into the rationale just used.
     if (m_rationale->hasFocus())
