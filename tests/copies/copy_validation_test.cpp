@@ -250,6 +250,20 @@ TEST_CASE("Issue 20 item 8: impossible coding time in a copy is refused and neve
               "JOIN coder c ON c.id = s.coder_id WHERE a.external_id = 'f1' AND c.pseudonym = "
               "'C01'")
         == 50070);
+
+    // A project already holding nearly the largest count (written by an older version): the
+    // sum is refused, never wrapped.
+    const QString third = f.handout(QStringLiteral("C01"), QStringLiteral("third.fourfold"));
+    {
+        Project p = openProject(third);
+        REQUIRE(p.addCodingTime(
+            articleIn(p, QStringLiteral("f1")), coderIn(p, QStringLiteral("C01")), 70));
+    }
+    execSql(f.mainPath,
+        QStringLiteral("UPDATE assignment SET active_seconds = 9223372036854775800 WHERE %1 AND "
+                       "coder_id = (SELECT id FROM coder WHERE pseudonym = 'C01')")
+            .arg(f1));
+    refused(f, third, {QStringLiteral("would overflow")});
 }
 
 TEST_CASE("Issue 20 item 8: work on an article not handed out in the copy is refused")
