@@ -14,9 +14,27 @@ void out(const QString &text)
     std::fputc('\n', stdout);
 }
 
+QString printable(const QString &text)
+{
+    QString shown;
+    shown.reserve(text.size());
+    for (const QChar c : text) {
+        const char16_t u = c.unicode();
+        // C0 controls but line feed and tab, DEL and the C1 controls: a terminal would act on
+        // them (colours, the window title, the cursor), so they are written as \xHH.
+        const bool control = (u < 0x20 && u != '\n' && u != '\t') || (u >= 0x7F && u <= 0x9F);
+        if (control)
+            shown += QStringLiteral("\\x")
+                + QString::number(int(u), 16).rightJustified(2, QLatin1Char('0')).toUpper();
+        else
+            shown += c;
+    }
+    return shown;
+}
+
 void err(const QString &text)
 {
-    const QByteArray utf8 = text.toUtf8();
+    const QByteArray utf8 = printable(text).toUtf8();
     std::fwrite(utf8.constData(), 1, size_t(utf8.size()), stderr);
     std::fputc('\n', stderr);
 }

@@ -17,7 +17,11 @@ enum ExitCode {
     ExitUsage = 2, // the command line itself is wrong
 };
 
-// Writes `text` and a newline to stdout / stderr (UTF-8).
+// `text` with every control character a terminal would act on (C0 but line feed and tab, DEL,
+// C1) written as \xHH, so a message quoting hostile input cannot recolour or retitle the
+// terminal.
+QString printable(const QString &text);
+// Writes `text` and a newline to stdout / stderr (UTF-8); stderr through printable().
 void out(const QString &text);
 void err(const QString &text);
 // Writes "fourfold-cli: <message>" for `error` to stderr and returns ExitFailure.

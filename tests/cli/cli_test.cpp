@@ -268,3 +268,19 @@ TEST_CASE("agree on the sample project: units, functions, continuum")
     CHECK(bad.exitCode == 1);
     CHECK(bad.err.contains(QStringLiteral("no coder \"C77\"")));
 }
+
+TEST_CASE("a message quoting input with terminal escapes writes them as text")
+{
+    // A unit id carrying ESC [31m (colour) and an OSC title sequence ending in BEL: the error
+    // quotes the id, and must not hand the sequences to the terminal (common practice for
+    // programs that echo untrusted text).
+    QTemporaryDir dir;
+    const QString data = writeFile(dir, QStringLiteral("escapes.csv"),
+        QByteArray("unit,A,B\nu\x1b[31mX,a,b\nu2,\x1b]0;title\x07,c\n"));
+    const CliRun r = cli({QStringLiteral("agree"), QStringLiteral("--data"), data,
+        QStringLiteral("--level"), QStringLiteral("interval")});
+    CHECK(r.exitCode == 1);
+    CHECK(r.err.contains(QStringLiteral("unit \"u\\x1B[31mX\"")));
+    for (const QChar c : r.err)
+        CHECK((c.unicode() >= 0x20 || c == QLatin1Char('\n')));
+}
