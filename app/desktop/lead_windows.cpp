@@ -205,8 +205,8 @@ void LeadWindows::mergeCopies()
                                         .arg(r.conflicts));
     }
     const QString summary = conflicts > 0
-        ? tr("Merged %n copy(ies); %1 conflict(s) keep the project's version until you decide "
-             "(fourfold-cli merge PROJECT --conflicts lists them).",
+        ? tr("Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits "
+             "for you to decide (fourfold-cli merge PROJECT --conflicts lists them).",
             nullptr, int(reports->size()))
               .arg(conflicts)
         : tr("Merged %n copy(ies).", nullptr, int(reports->size()));
