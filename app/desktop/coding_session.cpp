@@ -1,6 +1,7 @@
 #include "app/desktop/coding_session.h"
 
 #include "app/desktop/edit_command.h"
+#include "core/model/logging.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/coding_scope.h"
@@ -164,6 +165,7 @@ Status CodingSession::push(
 {
     // Applied first, so that a refused edit reports its own error and never reaches the stack.
     if (auto st = m_project.apply(*edit); !st) {
+        logError(lcDesktop(), st.error());
         if (worthRetrying(st.error())) {
             const QString text = edit->text();
             m_unsaved.reset(new Unsaved {std::move(edit), article, touched});

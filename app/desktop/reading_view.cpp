@@ -2,6 +2,7 @@
 
 #include "app/colour/colour.h"
 #include "app/desktop/function_style.h"
+#include "core/model/logging.h"
 
 #include <QAbstractTextDocumentLayout>
 #include <QApplication>
@@ -26,8 +27,6 @@
 
 #include <algorithm>
 #include <cmath>
-
-Q_LOGGING_CATEGORY(lcReadingView, "fourfold.desktop.reading", QtWarningMsg)
 
 namespace fourfold {
 
@@ -159,11 +158,11 @@ void ReadingView::setSpans(const std::vector<Annotation> &spans)
     for (const Annotation &a : spans) {
         if (a.deleted || !a.id.isValid())
             continue;
+        // Every stored span lies in its text (the store checks it, `check` verifies it); one that
+        // does not is left undrawn rather than drawn wrong.
         const TextRange r16 = m_map.utf16Range(a.content.range);
-        if (r16.start < 0 || r16.isEmpty()) {
-            qCDebug(lcReadingView) << "span" << a.id.value << "lies outside the text; not drawn";
+        if (!FOURFOLD_SOFT_ASSERT(lcDesktop(), r16.start >= 0 && !r16.isEmpty()))
             continue;
-        }
         m_spans.push_back({a.id, a.content.function, a.content.range, r16});
     }
     std::sort(m_spans.begin(), m_spans.end(), [](const Span &a, const Span &b) {

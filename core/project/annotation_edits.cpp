@@ -1,5 +1,6 @@
 #include "core/project/annotation_edits.h"
 
+#include "core/model/logging.h"
 #include "core/project/study_design.h"
 #include "core/store/annotation_table.h"
 #include "core/store/article_table.h"
@@ -135,7 +136,7 @@ Status ChangeAnnotationEdit::apply(Database &db)
 
 Status ChangeAnnotationEdit::revert(Database &db)
 {
-    if (!m_before)
+    if (!FOURFOLD_SOFT_ASSERT(lcProject(), m_before))
         return fail(ErrorCode::Internal, tr("An edit that was never applied cannot be undone."));
     return store::updateAnnotation(db, *m_before);
 }
@@ -166,7 +167,7 @@ Status DeleteAnnotationEdit::apply(Database &db)
 
 Status DeleteAnnotationEdit::revert(Database &db)
 {
-    if (!m_before)
+    if (!FOURFOLD_SOFT_ASSERT(lcProject(), m_before))
         return fail(ErrorCode::Internal, tr("An edit that was never applied cannot be undone."));
     return store::updateAnnotation(db, *m_before);
 }

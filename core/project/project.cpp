@@ -1,5 +1,6 @@
 #include "core/project/project.h"
 
+#include "core/model/logging.h"
 #include "core/project/edit.h"
 #include "core/store/annotation_table.h"
 #include "core/store/article_table.h"
@@ -327,7 +328,7 @@ Status Project::batch(const std::function<Status()> &work)
 
 Status Project::applyInBatch(Edit &edit)
 {
-    if (m_batchDepth == 0)
+    if (!FOURFOLD_SOFT_ASSERT(lcProject(), m_batchDepth > 0))
         return fail(ErrorCode::Internal, tr("An edit without its own savepoint needs a batch."));
     Status st = edit.apply(m_db);
     if (st)
