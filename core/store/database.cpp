@@ -3,6 +3,8 @@
 #include "core/store/statement.h"
 
 #include <QCoreApplication>
+#include <QFile>
+#include <QFileInfo>
 
 #include <sqlite3.h>
 
@@ -13,7 +15,39 @@ namespace {
 // Enough for every query of the program's busiest path; more are compiled for each use.
 constexpr qsizetype kMaxIdleStatements = 128;
 
+Database::OpenFaultHook &openFaultHook()
+{
+    static Database::OpenFaultHook hook;
+    return hook;
+}
+
+// The failure of one of open()'s own statements, injected by the test hook or SQLite's.
+int openFault(const char *stage)
+{
+    const auto &hook = openFaultHook();
+    return hook ? hook(QLatin1String(stage)) : SQLITE_OK;
+}
+
+// A full disk is said as such wherever it happens: it is neither damage nor a bug, and the
+// person can do something about it.
+QString diskFullMessage(const QString &path)
+{
+    return QCoreApplication::translate("Database",
+        "The disk holding %1 is full; nothing was written. Free some space and try again.")
+        .arg(path);
+}
+
+bool isDiskFull(int rc)
+{
+    return (rc & 0xff) == SQLITE_FULL;
+}
+
 } // namespace
+
+void Database::setOpenFaultHook(OpenFaultHook hook)
+{
+    openFaultHook() = std::move(hook);
+}
 
 ErrorCode errorCodeForSqlite(int rc)
 {
@@ -90,35 +124,72 @@ Result<Database> Database::open(const QString &path, OpenMode mode)
         flags |= SQLITE_OPEN_READWRITE | SQLITE_OPEN_CREATE;
         break;
     }
+    // A file this call creates goes again if opening fails (a full disk must not leave an empty
+    // project file behind).
+    const bool creates = mode == OpenMode::ReadWriteCreate && !QFileInfo(path).isSymLink()
+        && !QFileInfo::exists(path);
     Database db;
     db.m_path = path;
-    const int rc = sqlite3_open_v2(path.toUtf8().constData(), &db.m_db, flags, nullptr);
-    if (rc != SQLITE_OK) {
-        Error e = db.errorFor(rc,
-            QCoreApplication::translate("Database", "Cannot open the project file %1.").arg(path));
+    const auto failed = [&](Error e) -> Result<Database> {
         if (e.code == ErrorCode::Internal)
             e.code = ErrorCode::Io;
-        return std::unexpected(e);
-    }
+        db.close();
+        if (creates)
+            for (const char *suffix : {"", "-wal", "-shm", "-journal"})
+                QFile::remove(path + QLatin1String(suffix));
+        return std::unexpected(std::move(e));
+    };
+    const int rc = sqlite3_open_v2(path.toUtf8().constData(), &db.m_db, flags, nullptr);
+    if (rc != SQLITE_OK)
+        return failed(db.errorFor(rc,
+            QCoreApplication::translate("Database", "Cannot open the project file %1.").arg(path)));
     sqlite3_extended_result_codes(db.m_db, 1);
     sqlite3_busy_timeout(db.m_db, 5000);
-    // Reading the schema is the first touch of the file: a non-database fails here.
-    if (auto st = db.exec(
+    // Reading the schema is the first touch of the file: a non-database fails here. Only that
+    // (or damage) is called damage; a full disk, a lock or a read error is said as what it is.
+    Status touched = [&]() -> Status {
+        if (const int fault = openFault("read"))
+            return std::unexpected(db.errorFor(fault, QString()));
+        return db.exec(
             QStringLiteral("PRAGMA foreign_keys = ON; SELECT count(*) FROM sqlite_schema;"));
-        !st) {
-        Error e = st.error();
-        e.message = QCoreApplication::translate(
-            "Database", "%1 is not a Fourfold project file or is damaged.")
-                        .arg(path);
-        if (e.code == ErrorCode::Internal)
+    }();
+    if (!touched) {
+        Error e = touched.error();
+        switch (e.code) {
+        case ErrorCode::Busy:
+            e.message = QCoreApplication::translate(
+                "Database", "%1 is locked by another program; try again when it is done.")
+                            .arg(path);
+            break;
+        case ErrorCode::Io:
+            if (!e.message.contains(path))
+                e.message = QCoreApplication::translate("Database", "%1 could not be read: %2.")
+                                .arg(path, e.cause);
+            break;
+        default:
             e.code = ErrorCode::Corrupt;
-        return std::unexpected(e);
+            e.message = QCoreApplication::translate(
+                "Database", "%1 is not a Fourfold project file or is damaged.")
+                            .arg(path);
+            break;
+        }
+        return failed(std::move(e));
     }
     if (mode != OpenMode::ReadOnly) {
-        if (auto st = db.exec(QStringLiteral("PRAGMA journal_mode = WAL; PRAGMA synchronous = "
-                                             "NORMAL; PRAGMA cache_size = -65536;"));
-            !st)
-            return std::unexpected(st.error());
+        Status journal = [&]() -> Status {
+            if (const int fault = openFault("journal"))
+                return std::unexpected(db.errorFor(fault, QString()));
+            return db.exec(QStringLiteral("PRAGMA journal_mode = WAL; PRAGMA synchronous = "
+                                          "NORMAL; PRAGMA cache_size = -65536;"));
+        }();
+        if (!journal) {
+            Error e = journal.error();
+            if (e.message != diskFullMessage(path))
+                e.message = QCoreApplication::translate(
+                    "Database", "The project file %1 could not be prepared for writing.")
+                                .arg(path);
+            return failed(std::move(e));
+        }
     }
     return db;
 }
@@ -130,8 +201,9 @@ Status Database::exec(const QString &sql)
     if (rc != SQLITE_OK) {
         Error e;
         e.code = errorCodeForSqlite(rc);
-        e.message =
-            QCoreApplication::translate("Database", "The project file could not be updated.");
+        e.message = isDiskFull(rc)
+            ? diskFullMessage(m_path)
+            : QCoreApplication::translate("Database", "The project file could not be updated.");
         e.cause = QString::fromUtf8(message ? message : sqlite3_errstr(rc));
         sqlite3_free(message);
         return std::unexpected(e);
@@ -184,7 +256,7 @@ Error Database::errorFor(int rc, const QString &what) const
 {
     Error e;
     e.code = errorCodeForSqlite(rc);
-    e.message = what;
+    e.message = isDiskFull(rc) ? diskFullMessage(m_path) : what;
     e.cause =
         m_db ? QString::fromUtf8(sqlite3_errmsg(m_db)) : QString::fromUtf8(sqlite3_errstr(rc));
     if (e.cause == QLatin1String("not an error"))

@@ -31,8 +31,16 @@ public:
     Database &operator=(const Database &) = delete;
 
     // Opens `path` and sets foreign_keys=ON, a 5 s busy timeout and (unless read-only) WAL mode.
-    // Fails with Io if the file cannot be opened or created, Corrupt if it is not an SQLite file.
+    // Fails with Io if the file cannot be opened, read or created (a full disk is said as such:
+    // "The disk holding … is full"), Busy if another program holds it, Corrupt only if it is not
+    // an SQLite file or is damaged. A file this call created is removed again when it fails.
     static Result<Database> open(const QString &path, OpenMode mode);
+
+    // A test hook for fault injection in open(): called with "read" before the first read of the
+    // file and "journal" before the pragmas that set up writing; a non-zero SQLite result code
+    // makes that stage fail with it. Process-wide; empty in production.
+    using OpenFaultHook = std::function<int(const QString &stage)>;
+    static void setOpenFaultHook(OpenFaultHook hook);
 
     bool isOpen() const { return m_db != nullptr; }
     QString path() const { return m_path; }
@@ -57,7 +65,7 @@ public:
     qint64 changes() const;
 
     // The error for SQLite result code `rc` with the connection's current message as the cause;
-    // `what` is the sentence shown to people.
+    // `what` is the sentence shown to people (for SQLITE_FULL: that the disk is full).
     Error errorFor(int rc, const QString &what) const;
 
     // A test hook for fault injection: called before every Statement::step(); returning a

@@ -5,6 +5,7 @@
 
 #include <QCoreApplication>
 #include <QFile>
+#include <QFileInfo>
 
 #include <algorithm>
 #include <array>
@@ -359,12 +360,18 @@ Status migrate(Database &db, int from, int to)
     return db.exec(QStringLiteral("COMMIT"));
 }
 
-QString freeBackupPath(const QString &path, int version)
+// Whether two files hold the same bytes (read a block at a time).
+bool sameBytes(const QString &a, const QString &b)
 {
-    QString candidate = QStringLiteral("%1.v%2.bak").arg(path).arg(version);
-    for (int n = 2; QFile::exists(candidate); ++n)
-        candidate = QStringLiteral("%1.v%2.%3.bak").arg(path).arg(version).arg(n);
-    return candidate;
+    QFile fa(a), fb(b);
+    if (!fa.open(QIODevice::ReadOnly) || !fb.open(QIODevice::ReadOnly) || fa.size() != fb.size())
+        return false;
+    while (!fa.atEnd()) {
+        const QByteArray block = fa.read(1 << 20);
+        if (block.isEmpty() || block != fb.read(block.size()))
+            return false;
+    }
+    return true;
 }
 
 } // namespace
@@ -385,10 +392,12 @@ Status createSchemaAtVersion(Database &db, int version)
     return migrate(db, 0, version);
 }
 
-Status prepareSchema(Database &db, QString *backupPath)
+namespace {
+
+// The file's schema version after checking its identity: -1 for a new, empty file; Corrupt for
+// another application's file, NewerSchema for a newer Fourfold's.
+Result<int> checkedVersion(Database &db)
 {
-    if (backupPath)
-        backupPath->clear();
     auto appId = pragmaValue(db, "application_id");
     if (!appId)
         return std::unexpected(appId.error());
@@ -396,7 +405,7 @@ Status prepareSchema(Database &db, QString *backupPath)
     if (!empty)
         return std::unexpected(empty.error());
     if (*appId == 0 && *empty)
-        return migrate(db, 0, kSchemaVersion);
+        return -1;
     if (*appId != kApplicationId)
         return fail(ErrorCode::Corrupt,
             QCoreApplication::translate(
@@ -415,20 +424,70 @@ Status prepareSchema(Database &db, QString *backupPath)
                 .arg(db.path())
                 .arg(*version)
                 .arg(kSchemaVersion));
+    return *version;
+}
+
+} // namespace
+
+Result<bool> schemaIsCurrent(Database &db)
+{
+    auto version = checkedVersion(db);
+    if (!version)
+        return std::unexpected(version.error());
+    return *version == kSchemaVersion;
+}
+
+Status prepareSchema(Database &db, QString *backupPath)
+{
+    if (backupPath)
+        backupPath->clear();
+    auto version = checkedVersion(db);
+    if (!version)
+        return std::unexpected(version.error());
+    if (*version < 0)
+        return migrate(db, 0, kSchemaVersion);
     if (*version == kSchemaVersion)
         return {};
 
-    const QString backup = freeBackupPath(db.path(), *version);
+    // One backup per version: written under a temporary name and moved into place whole, so a
+    // kill never leaves half a backup; an upgrade that failed before left one, which is kept
+    // when it holds the same bytes (the file did not change since) and otherwise refused rather
+    // than piled up or overwritten.
+    const QString backup = QStringLiteral("%1.v%2.bak").arg(db.path()).arg(*version);
+    const QString fresh = backup + QStringLiteral(".new");
+    QFile::remove(fresh);
     auto stmt = db.prepare(QStringLiteral("VACUUM INTO ?1"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    stmt->bind(1, backup);
+    stmt->bind(1, fresh);
     if (auto st = stmt->run(); !st) {
+        QFile::remove(fresh);
         Error e = st.error();
+        if (e.message.contains(db.path()))
+            return std::unexpected(e); // a full disk, said as such
         e.message = QCoreApplication::translate(
             "Schema", "Could not back up %1 to %2 before upgrading it; the file was not changed.")
                         .arg(db.path(), backup);
         return std::unexpected(e);
+    }
+    if (QFileInfo::exists(backup) || QFileInfo(backup).isSymLink()) {
+        const bool same = sameBytes(backup, fresh) && !QFileInfo(backup).isSymLink();
+        QFile::remove(fresh);
+        if (!same)
+            return fail(ErrorCode::Duplicate,
+                QCoreApplication::translate("Schema",
+                    "%1 needs upgrading from schema version %2, but its backup %3 from an earlier "
+                    "upgrade differs from it; move the backup away and open the file again. The "
+                    "file was not changed.")
+                    .arg(db.path())
+                    .arg(*version)
+                    .arg(backup));
+    } else if (!QFile::rename(fresh, backup)) {
+        QFile::remove(fresh);
+        return fail(ErrorCode::Io,
+            QCoreApplication::translate("Schema",
+                "Could not back up %1 to %2 before upgrading it; the file was not changed.")
+                .arg(db.path(), backup));
     }
     if (backupPath)
         *backupPath = backup;

@@ -23,9 +23,15 @@ Result<int> schemaVersion(Database &db);
 // - a file with another application_id (or a non-empty file without one) fails with Corrupt;
 // - a newer schema fails with NewerSchema, naming both versions, and the file is untouched;
 // - an older schema is first copied to "<path>.v<old>.bak" (VACUUM INTO; an existing backup is
-//   kept and a numbered name chosen), then migrated in one transaction.
+//   reused when it holds the same bytes, otherwise the upgrade is refused with Duplicate: one
+//   backup per version, never more), then migrated in one transaction.
 // `backupPath`, if given, receives the backup's path (empty when none was made).
 Status prepareSchema(Database &db, QString *backupPath = nullptr);
+
+// Whether an open database (read-only or not) is a Fourfold project at this build's schema
+// version, writing nothing: false for an older schema or an empty file (prepareSchema would
+// change them); fails with Corrupt or NewerSchema as prepareSchema does.
+Result<bool> schemaIsCurrent(Database &db);
 
 // Applies migrations up to `version` on a new file only (tests build older files with it).
 Status createSchemaAtVersion(Database &db, int version);
