@@ -2,9 +2,12 @@
 
 #include "core/io/chunked_input.h"
 #include "core/io/csv_reader.h"
+#include "core/io/feed_reader.h"
 #include "core/io/html_reader.h"
 #include "core/io/jsonl_reader.h"
+#include "core/io/news_xml_reader.h"
 #include "core/io/text_reader.h"
+#include "core/io/xml_document.h"
 
 #include <QCoreApplication>
 #include <QDir>
@@ -115,13 +118,48 @@ private:
     qint64 m_count = 0;
 };
 
-// Reads one opened file of `format`, handing each article that passes the checks to `visit`
-// with the bytes read so far: `before` plus this file's position, of `total`.
-Status readOpenFile(ChunkedInput &input, ImportFormat format, const ImportOptions &options,
-    const ArticleVisit &visit, qint64 before, qint64 total)
+// Reads an XML file whole and hands its articles to `take`: as a feed or a news item when
+// `format` says so, else as whichever its root element makes it.
+Status readXmlArticles(
+    ChunkedInput &input, std::optional<ImportFormat> format, const ImportedArticleSink &take)
 {
     const QString &path = input.path();
-    const bool whole = format == ImportFormat::Text || format == ImportFormat::Html;
+    Result<QByteArray> bytes = input.readAll();
+    if (!bytes)
+        return std::unexpected(bytes.error());
+    Result<XmlDocument> document = XmlDocument::parse(*bytes, path);
+    if (!document)
+        return std::unexpected(document.error());
+    _xmlNode *root = document->root();
+    if (format == ImportFormat::Feed || (!format && isFeedRoot(root)))
+        return readFeedArticles(root, path, take);
+    if (format == ImportFormat::NewsXml || (!format && isNewsXmlRoot(root)))
+        return readNewsXmlArticles(root, path, take);
+    return failAt(ErrorCode::Unsupported, path, xmlLine(root), 0,
+        tr("the XML root element <%1> is neither a feed's (<rss>, Atom's <feed>) nor a news "
+           "item's (<nitf>, NewsML-G2's <newsItem> or <newsMessage>)")
+            .arg(xmlQualifiedName(root)));
+}
+
+// Whether the file's first bytes (after a BOM and whitespace) open markup: a file of unknown
+// suffix that does is read as XML and told by its root element.
+bool looksLikeXml(QByteArrayView start)
+{
+    if (start.startsWith("\xEF\xBB\xBF"))
+        start = start.sliced(3);
+    while (!start.isEmpty() && QByteArrayView(" \t\r\n").contains(start.front()))
+        start = start.sliced(1);
+    return start.startsWith("<");
+}
+
+// Reads one opened file of `format` (none: XML told from its root element), handing each
+// article that passes the checks to `visit` with the bytes read so far: `before` plus this
+// file's position, of `total`.
+Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
+    const ImportOptions &options, const ArticleVisit &visit, qint64 before, qint64 total)
+{
+    const QString &path = input.path();
+    const bool whole = format != ImportFormat::JsonLines && format != ImportFormat::Csv;
     if (whole && input.size() > maxImportFileSize) {
         return failAt(ErrorCode::InvalidInput, path, 0, 0,
             tr("the file is %1 MiB long; a file may be at most %2 MiB")
@@ -141,7 +179,16 @@ Status readOpenFile(ChunkedInput &input, ImportFormat format, const ImportOption
     const ImportedArticleSink take = [&](ImportedArticle &&article) {
         return checks.take(std::move(article));
     };
-    switch (format) {
+    if (!format || format == ImportFormat::Feed || format == ImportFormat::NewsXml) {
+        if (!format && !looksLikeXml(input.pending())) {
+            return failAt(ErrorCode::Unsupported, path, 0, 0,
+                tr("the format cannot be told from the file name or its content; name the file "
+                   ".txt, .html, .jsonl, .csv, .rss, .atom or .xml, or choose the format"));
+        }
+        FOURFOLD_TRY_STATUS(readXmlArticles(input, format, take));
+        return checks.finish();
+    }
+    switch (*format) {
     case ImportFormat::Text:
     case ImportFormat::Html: {
         Result<QByteArray> bytes = input.readAll();
@@ -161,12 +208,15 @@ Status readOpenFile(ChunkedInput &input, ImportFormat format, const ImportOption
     case ImportFormat::Csv:
         FOURFOLD_TRY_STATUS(readCsvArticles(input, options.csvColumns, take));
         break;
+    case ImportFormat::Feed:
+    case ImportFormat::NewsXml:
+        break; // read above
     }
     return checks.finish();
 }
 
-Status readFile(const QString &path, ImportFormat format, const ImportOptions &options,
-    const ArticleVisit &visit)
+Status readFile(const QString &path, std::optional<ImportFormat> format,
+    const ImportOptions &options, const ArticleVisit &visit)
 {
     Result<ChunkedInput> input = ChunkedInput::open(path, options.readChunkSize);
     if (!input)
@@ -227,6 +277,10 @@ QString importFormatKey(ImportFormat format)
         return QStringLiteral("jsonl");
     case ImportFormat::Csv:
         return QStringLiteral("csv");
+    case ImportFormat::Feed:
+        return QStringLiteral("feed");
+    case ImportFormat::NewsXml:
+        return QStringLiteral("newsxml");
     }
     return QStringLiteral("txt");
 }
@@ -242,6 +296,10 @@ std::optional<ImportFormat> importFormatFromKey(const QString &key)
         return ImportFormat::JsonLines;
     if (k == u"csv")
         return ImportFormat::Csv;
+    if (k == u"feed" || k == u"rss" || k == u"atom")
+        return ImportFormat::Feed;
+    if (k == u"newsxml" || k == u"nitf" || k == u"newsml")
+        return ImportFormat::NewsXml;
     return std::nullopt;
 }
 
@@ -263,16 +321,10 @@ Status forEachArticle(const QString &path, const ImportOptions &options, const A
         }
         return readTextFolder(path, options, visit);
     }
+    // No format: .xml and unknown suffixes are told from the content (readOpenFile).
     const std::optional<ImportFormat> format =
         options.format ? options.format : importFormatFromPath(path);
-    if (!format) {
-        if (!info.exists())
-            return failAt(ErrorCode::Io, path, 0, 0, tr("the file does not exist"));
-        return failAt(ErrorCode::Unsupported, path, 0, 0,
-            tr("the format cannot be told from the file name; name the file .txt, .html, .jsonl "
-               "or .csv, or choose the format"));
-    }
-    return readFile(path, *format, options, visit);
+    return readFile(path, format, options, visit);
 }
 
 Result<std::vector<ImportedArticle>> readArticles(const QString &path, const ImportOptions &options)

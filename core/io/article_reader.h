@@ -1,7 +1,8 @@
 #pragma once
-// Reading articles from files: plain text (a file or a folder of files), HTML, JSON Lines and
-// CSV. Each file is read all-or-nothing: the first problem makes the whole file fail with an
-// Error naming file, line (and column where known) and what is wrong.
+// Reading articles from files: plain text (a file or a folder of files), HTML, JSON Lines, CSV,
+// RSS and Atom feeds, and NITF and NewsML-G2 news items. Each file is read all-or-nothing: the
+// first problem makes the whole file fail with an Error naming file, line (and column where known)
+// and what is wrong.
 //
 // Common rules (every format)
 // - Input must be UTF-8; a leading BOM is dropped. Invalid UTF-8 and NUL bytes (binary files)
@@ -20,6 +21,10 @@
 //   check the rest of the file is still read for one.
 // - An empty file, or one without a single article, is an error ("contains no articles").
 // - ImportOptions::language fills in records that name no language.
+// - The format is forced (ImportOptions::format) or told from the suffix; a file named .xml, or
+//   with a suffix that names no format, is read as XML when its first character (after a BOM
+//   and whitespace) is "<", and is a feed or a news item by its root element (<rss>, Atom's
+//   <feed>; <nitf>, NewsML-G2's <newsItem> or <newsMessage>); any other root is Unsupported.
 // - Error codes: InvalidInput for malformed content, Duplicate for a repeated id, Io for a file
 //   that cannot be read, Unsupported for an unknown format, InvalidArgument for a bad
 //   ImportOptions::csvColumns.
@@ -49,6 +54,46 @@
 // text equals the title, so the headline is not there twice. Outlet: og:site_name. Published:
 // article:published_time, else the datetime of the first <time> in the body. Language: the
 // lang attribute of <html>. Meta tags are matched on their property or name attribute.
+//
+// XML (feeds and news items): parsed with libxml2, nothing fetched from outside the file (no
+// network, no DTD, no external entity: a declared external entity or a reference to an entity
+// that is not declared is an error); an entity-expansion bomb is refused by libxml2's limits.
+// The file must be well-formed (libxml2's first error, with its line) and may declare no
+// encoding but UTF-8. Element text is read with internal entities expanded; HTML held in an
+// element is read by the HTML body rules above (htmlParagraphs / htmlFragmentParagraphs).
+//
+// The line of an element (an article's sourceLine, an error's line) is the line where its start
+// tag ends, as libxml2 records it.
+//
+// Feeds (.rss, .atom; format key "feed"): one article per item or entry, sourceLine its line.
+// RSS 2.0 (RSS Advisory Board's specification; <rss version="2.0">, exactly one channel): the
+// body is the item's content:encoded (RSS content module) or else its description, read as
+// HTML; title: <title>; id: <guid>, else <link>; published: <pubDate> (RFC 822) as ISO 8601;
+// outlet: the item's <source>, else the channel's <title>; language: the channel's <language>;
+// meta: link, author, comments, enclosure (its url), categories (an array), and each element of
+// an extension namespace under its prefixed name (its text). An element without a namespace
+// that RSS 2.0 does not define, in an item or channel, is an error. Atom 1.0 (RFC 4287): the body
+// is the entry's content (text, html, xhtml or text/*; content given by src is not fetched and
+// the summary stands for it), else its summary; title: <title> (a Text construct); id: <id>;
+// published: <published>, else <updated> (RFC 3339, kept as given); outlet: the entry's
+// <source> title, else the feed's title; language: xml:lang in scope; meta: link (rel
+// alternate), link:REL for other links, author, contributor, rights, categories (terms), and
+// foreign elements under their prefixed name. An Atom element the RFC does not define in an
+// entry or feed is an error. A feed without items or entries is an error.
+//
+// News items (.nitf, .newsml; format key "newsxml"). NITF 3.x (<nitf>, no namespace or an IPTC
+// NITF one): one article; body: <body.content> by the HTML rules (p, hl2, block, table, lists);
+// title: hedline/hl1, else head/title; id: docdata/doc-id/@id-string, else the file name without
+// its last suffix; published: docdata/date.issue/@norm, else the dateline's story.date/@norm;
+// outlet: pubdata/@name; meta: byline, dateline, provider (distributor, else doc-id/@regsrc),
+// abstract, subjects (tobject.subject: {code: refnum, name: matter or type}), keywords
+// (key-list). NewsML-G2 (namespace http://iptc.org/std/nar/2006-10-01/): a <newsItem> is one
+// article, a <newsMessage> one per newsItem of its itemSet (any other item is an error); id:
+// @guid; title: contentMeta/headline; published: contentCreated, else firstCreated, else
+// versionCreated; language: xml:lang; body: the first inlineXML (NITF or XHTML) or inlineData
+// (text/plain) of the contentSet (remote content is not fetched: an item without inline text is
+// an error); meta: version, byline (by), dateline, slugline, provider (name, literal or qcode),
+// subjects ({code: qcode or uri, name}). Other metadata of these standards is not read.
 //
 // JSON Lines (.jsonl, .ndjson; https://jsonlines.org): one JSON object per line (LF or CRLF);
 // whitespace-only lines are skipped. Fields: "id", "title", "text" (required strings),
@@ -88,7 +133,7 @@
 
 namespace fourfold {
 
-enum class ImportFormat { Text, Html, JsonLines, Csv };
+enum class ImportFormat { Text, Html, JsonLines, Csv, Feed, NewsXml };
 
 // The largest plain text or HTML file (read whole), in bytes (1 GiB).
 inline constexpr qint64 maxImportFileSize = qint64(1) << 30;
@@ -99,17 +144,18 @@ inline constexpr qint64 maxCsvRecordSize = qint64(64) << 20;
 // The longest first line of a text file that can be its title, in UTF-16 code units.
 inline constexpr qsizetype maxTextTitleLength = 200;
 
-// "txt", "html", "jsonl", "csv".
+// "txt", "html", "jsonl", "csv", "feed", "newsxml".
 QString importFormatKey(ImportFormat format);
-// The format for a key: the keys above and the aliases "text", "htm", "ndjson" (any letter
-// case); nothing for any other key.
+// The format for a key: the keys above and the aliases "text", "htm", "ndjson", "rss", "atom",
+// "nitf", "newsml" (any letter case); nothing for any other key.
 std::optional<ImportFormat> importFormatFromKey(const QString &key);
-// From the file name's suffix (.txt/.text, .html/.htm, .jsonl/.ndjson, .csv; any letter case);
-// nothing otherwise.
+// From the file name's suffix (.txt/.text, .html/.htm, .jsonl/.ndjson, .csv, .rss/.atom,
+// .nitf/.newsml: any suffix that is a key; any letter case); nothing otherwise (.xml included:
+// such files are told from their content).
 std::optional<ImportFormat> importFormatFromPath(const QString &path);
 
 struct ImportOptions {
-    // Forced format; if unset, taken from each file's suffix.
+    // Forced format; if unset, taken from each file's suffix (or an XML file's root element).
     std::optional<ImportFormat> format;
     // Language for records that name none (txt, html, CSV without a language column); empty =
     // leave empty, the project fills in its default.
@@ -140,8 +186,9 @@ using ArticleVisit = std::function<Status(ImportedArticle &&article, ReadProgres
 // Project::importFile does, in one transaction); a failure of `visit` stops the reading at once
 // and is returned as it is. Duplicate ids inside one file are an error (ErrorCode::Duplicate,
 // naming both lines). An empty file is an error. A missing or unreadable path is
-// ErrorCode::Io; a file whose format is neither forced nor known from its suffix, or a folder
-// with a forced format other than Text, is ErrorCode::Unsupported.
+// ErrorCode::Io; a file whose format is neither forced nor known from its suffix nor XML with a
+// known root element, or a folder with a forced format other than Text, is
+// ErrorCode::Unsupported.
 Status forEachArticle(const QString &path, const ImportOptions &options, const ArticleVisit &visit);
 
 // The same, collecting every article: returns them in file order, or the first error (nothing

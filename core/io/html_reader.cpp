@@ -392,6 +392,102 @@ QByteArray forHtmlParser(QByteArray bytes)
     return out;
 }
 
+// The paragraphs of the element tree under `root`, by the rules of the HTML reader's body (see
+// article_reader.h); `firstTime`, when given, receives the datetime of the first <time>. An XML
+// tree (XHTML, NITF's body) is read the same way, by its elements' local names; a reference to
+// an entity the parser kept as a reference is read as the entity's text.
+std::vector<Block> collectBlocks(xmlNode *root, QString *firstTime)
+{
+    BlockCollector collector;
+    walk(
+        root,
+        [&](xmlNode *node) {
+            if (node->type == XML_TEXT_NODE || node->type == XML_CDATA_SECTION_NODE) {
+                collector.addText(fromXml(node->content));
+                return false;
+            }
+            if (node->type == XML_ENTITY_REF_NODE) {
+                xmlChar *content = xmlNodeGetContent(node);
+                collector.addText(fromXml(content));
+                xmlFree(content);
+                return false;
+            }
+            if (node->type != XML_ELEMENT_NODE)
+                return false;
+            const std::string_view name = elementName(node);
+            if (name == "br") {
+                collector.addLineBreak();
+                return false;
+            }
+            if (isHidden(node))
+                return false;
+            const bool block = isOneOf(name, blockElements);
+            if (block)
+                collector.endBlock();
+            if (isDropped(node, name))
+                return false;
+            if (isOneOf(name, headingElements))
+                ++collector.headingDepth;
+            if (name == "pre")
+                ++collector.preDepth;
+            if (name == "time" && firstTime && firstTime->isEmpty())
+                *firstTime = attribute(node, "datetime").trimmed();
+            return true;
+        },
+        [&](xmlNode *node) {
+            const std::string_view name = elementName(node);
+            if (isOneOf(name, blockElements))
+                collector.endBlock();
+            if (isOneOf(name, headingElements))
+                --collector.headingDepth;
+            if (name == "pre")
+                --collector.preDepth;
+        });
+    collector.endBlock();
+    return std::move(collector.blocks);
+}
+
+// Parses valid UTF-8 `bytes` with libxml2's HTML parser (no network, no error output). Returns
+// the tree (null for a page without any element), or InvalidInput naming `file` when the parser
+// stopped before the end.
+Result<std::unique_ptr<xmlDoc, XmlDocFree>> parseHtml(const QByteArray &bytes, const QString &file)
+{
+    initialiseLibxml2();
+    // Valid UTF-8 by now; libxml2 gets the bytes without a BOM and is told to ignore any
+    // <meta charset>, which would otherwise make it decode them again as something else.
+    // XML_PARSE_HUGE lifts libxml2's nesting limit of 256 (the file size limit bounds the
+    // input already, and the walk below is not recursive).
+    const qsizetype skip = bytes.startsWith("\xEF\xBB\xBF") ? 3 : 0;
+    const QByteArray page = forHtmlParser(bytes);
+    if (page.size() - skip > std::numeric_limits<int>::max())
+        return failAt(ErrorCode::InvalidInput, file, 0, 0,
+            QCoreApplication::translate("ArticleReader",
+                "the page is too large for the HTML parser once its CDATA sections are escaped"));
+    const std::unique_ptr<htmlParserCtxt, HtmlContextFree> context(htmlNewParserCtxt());
+    if (!context) {
+        return failAt(ErrorCode::Internal, file, 0, 0,
+            QCoreApplication::translate("ArticleReader", "the HTML parser could not be started"));
+    }
+    const int parseOptions = int(HTML_PARSE_NOERROR) | int(HTML_PARSE_NOWARNING)
+        | int(HTML_PARSE_NONET) | int(HTML_PARSE_IGNORE_ENC) | int(XML_PARSE_HUGE);
+    std::unique_ptr<xmlDoc, XmlDocFree> doc(
+        htmlCtxtReadMemory(context.get(), page.constData() + skip,
+            static_cast<int>(page.size() - skip), nullptr, "UTF-8", parseOptions));
+    // The HTML parser recovers from bad markup on its own; it only halts (and then leaves a
+    // partial tree) on a fatal error such as running out of memory. Half a page is refused.
+    if (context->disableSAX != 0 || context->instate == XML_PARSER_EOF) {
+        const xmlError *last = xmlCtxtGetLastError(context.get());
+        auto error = failAt(ErrorCode::InvalidInput, file, last ? last->line : 0, 0,
+            QCoreApplication::translate("ArticleReader",
+                "the HTML parser stopped before the end "
+                "of the page"));
+        if (last && last->message)
+            error.error().cause = QString::fromUtf8(last->message).trimmed();
+        return error;
+    }
+    return doc;
+}
+
 } // namespace
 
 Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &file)
@@ -412,40 +508,10 @@ Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &
     }
     const QString baseName = QFileInfo(file).completeBaseName();
 
-    initialiseLibxml2();
-    // Valid UTF-8 by now; libxml2 gets the bytes without a BOM and is told to ignore any
-    // <meta charset>, which would otherwise make it decode them again as something else.
-    // XML_PARSE_HUGE lifts libxml2's nesting limit of 256 (the file size limit bounds the
-    // input already, and the walk below is not recursive).
-    const qsizetype skip = bytes.startsWith("\xEF\xBB\xBF") ? 3 : 0;
-    const QByteArray page = forHtmlParser(bytes);
-    if (page.size() - skip > std::numeric_limits<int>::max())
-        return failAt(ErrorCode::InvalidInput, file, 0, 0,
-            QCoreApplication::translate("ArticleReader",
-                "the page is too large for the HTML parser once its CDATA sections are escaped"));
-    const std::unique_ptr<htmlParserCtxt, HtmlContextFree> context(htmlNewParserCtxt());
-    if (!context) {
-        return failAt(ErrorCode::Internal, file, 0, 0,
-            QCoreApplication::translate("ArticleReader", "the HTML parser could not be started"));
-    }
-    const int parseOptions = int(HTML_PARSE_NOERROR) | int(HTML_PARSE_NOWARNING)
-        | int(HTML_PARSE_NONET) | int(HTML_PARSE_IGNORE_ENC) | int(XML_PARSE_HUGE);
-    const std::unique_ptr<xmlDoc, XmlDocFree> doc(
-        htmlCtxtReadMemory(context.get(), page.constData() + skip,
-            static_cast<int>(page.size() - skip), nullptr, "UTF-8", parseOptions));
-    // The HTML parser recovers from bad markup on its own; it only halts (and then leaves a
-    // partial tree) on a fatal error such as running out of memory. Half a page is refused.
-    if (context->disableSAX != 0 || context->instate == XML_PARSER_EOF) {
-        const xmlError *last = xmlCtxtGetLastError(context.get());
-        auto error = failAt(ErrorCode::InvalidInput, file, last ? last->line : 0, 0,
-            QCoreApplication::translate("ArticleReader",
-                "the HTML parser stopped before the end "
-                "of the page"));
-        if (last && last->message)
-            error.error().cause = QString::fromUtf8(last->message).trimmed();
-        return error;
-    }
-    xmlNode *root = doc ? xmlDocGetRootElement(doc.get()) : nullptr;
+    Result<std::unique_ptr<xmlDoc, XmlDocFree>> doc = parseHtml(bytes, file);
+    if (!doc)
+        return std::unexpected(doc.error());
+    xmlNode *root = *doc ? xmlDocGetRootElement(doc->get()) : nullptr;
     if (!root) {
         return failAt(ErrorCode::InvalidInput, file, 0, 0,
             QCoreApplication::translate("ArticleReader",
@@ -484,49 +550,9 @@ Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &
         }
     });
 
-    BlockCollector collector;
     QString timePublished;
-    walk(
-        root,
-        [&](xmlNode *node) {
-            if (node->type == XML_TEXT_NODE || node->type == XML_CDATA_SECTION_NODE) {
-                collector.addText(fromXml(node->content));
-                return false;
-            }
-            if (node->type != XML_ELEMENT_NODE)
-                return false;
-            const std::string_view name = elementName(node);
-            if (name == "br") {
-                collector.addLineBreak();
-                return false;
-            }
-            if (isHidden(node))
-                return false;
-            const bool block = isOneOf(name, blockElements);
-            if (block)
-                collector.endBlock();
-            if (isDropped(node, name))
-                return false;
-            if (isOneOf(name, headingElements))
-                ++collector.headingDepth;
-            if (name == "pre")
-                ++collector.preDepth;
-            if (name == "time" && timePublished.isEmpty())
-                timePublished = attribute(node, "datetime").trimmed();
-            return true;
-        },
-        [&](xmlNode *node) {
-            const std::string_view name = elementName(node);
-            if (isOneOf(name, blockElements))
-                collector.endBlock();
-            if (isOneOf(name, headingElements))
-                --collector.headingDepth;
-            if (name == "pre")
-                --collector.preDepth;
-        });
-    collector.endBlock();
+    std::vector<Block> blocks = collectBlocks(root, &timePublished);
 
-    std::vector<Block> &blocks = collector.blocks;
     article.title = !ogTitle.isEmpty() ? ogTitle
         : !pageTitle.isEmpty()         ? pageTitle
         : !firstH1.isEmpty()           ? firstH1
@@ -546,6 +572,37 @@ Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &
     article.text = paragraphs.join(QLatin1StringView("\n\n"));
     article.published = !metaPublished.isEmpty() ? metaPublished : timePublished;
     return article;
+}
+
+QStringList htmlParagraphs(xmlNode *root)
+{
+    QStringList paragraphs;
+    for (const Block &block : collectBlocks(root, nullptr))
+        paragraphs.append(block.text);
+    return paragraphs;
+}
+
+Result<QStringList> htmlFragmentParagraphs(const QString &html, const QString &file, qint64 line)
+{
+    Result<std::unique_ptr<xmlDoc, XmlDocFree>> doc = parseHtml(html.toUtf8(), file);
+    if (!doc) {
+        auto failed = failAt(doc.error().code, file, line, 0,
+            QCoreApplication::translate(
+                "ArticleReader", "the HTML parser stopped before the end of the element's HTML"));
+        failed.error().cause = doc.error().cause;
+        return failed;
+    }
+    xmlNode *root = *doc ? xmlDocGetRootElement(doc->get()) : nullptr;
+    return root ? htmlParagraphs(root) : QStringList();
+}
+
+Result<QStringList> plainTextParagraphs(const QString &text, const QString &file, qint64 line)
+{
+    static const QRegularExpression blankLines(QStringLiteral("\\n[ \\t\\r\\f]*\\n"));
+    QStringList parts = text.split(blankLines);
+    for (QString &part : parts)
+        part = QStringLiteral("<p>") + part.toHtmlEscaped() + QStringLiteral("</p>");
+    return htmlFragmentParagraphs(parts.join(QString()), file, line);
 }
 
 } // namespace fourfold
