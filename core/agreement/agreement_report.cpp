@@ -143,7 +143,7 @@ AgreementReport computeAgreement(const EncodedData &encoded, const QStringList &
         r.bennettS = bennettS(table);
     }
     if (r.complete)
-        r.fleissKappa = fleissKappa(categoryCounts(data));
+        r.fleissKappa = fleissKappa(data);
     for (int a = 0; a < data.coders; ++a)
         for (int b = a + 1; b < data.coders; ++b) {
             PairAgreement p;

@@ -590,6 +590,92 @@ void SubjectCounts::addSubject(const std::vector<double> &counts)
     starts.push_back(entries.size());
 }
 
+// The sums Fleiss (1971) needs, subject by subject, so that a subject's counts are read once
+// and never stored: Σ_i n_ij per category, Σ_i n_ij (n − n_ij) per category and Σ_i P_i.
+class FleissSums
+{
+public:
+    FleissSums(std::size_t categories, double raters)
+        : m_n(raters)
+        , m_shares(categories, 0.0)
+        , m_disagreeing(categories, 0.0)
+    { }
+
+    // One subject's non-zero counts as (category, count); zero counts add nothing.
+    template<typename Entries>
+    void add(const Entries &entries)
+    {
+        double squares = 0;
+        for (const auto &[category, c] : entries) {
+            m_shares[std::size_t(category)] += c;
+            m_disagreeing[std::size_t(category)] += c * (m_n - c);
+            squares += c * c;
+        }
+        m_pBar += (squares - m_n) / (m_n * (m_n - 1));
+        ++m_subjects;
+    }
+
+    FleissResult result()
+    {
+        FleissResult r;
+        r.subjects = m_subjects;
+        r.ratersPerSubject = m_n;
+        if (m_subjects == 0) {
+            r.reason = "there are no subjects";
+            return r;
+        }
+        const double bigN = m_subjects, n = m_n;
+        const std::size_t k = m_shares.size();
+        // Fleiss (1971): p_j = Σ_i n_ij / (N n); P_i = (Σ_j n_ij² − n) / (n (n − 1));
+        // P̄ = Σ P_i / N; P̄e = Σ p_j²; κ = (P̄ − P̄e) / (1 − P̄e).
+        r.categoryShares = std::move(m_shares);
+        const double pBar = m_pBar / bigN;
+        double pExpected = 0, sumPQ = 0, sumPQQminusP = 0;
+        for (double &p : r.categoryShares) {
+            p /= bigN * n;
+            const double q = 1 - p;
+            pExpected += p * p;
+            sumPQ += p * q;
+            sumPQQminusP += p * q * (q - p);
+        }
+        r.meanObservedAgreement = pBar;
+        r.chanceAgreement = pExpected;
+
+        // Fleiss (1971), per category: κ_j = 1 − Σ_i n_ij (n − n_ij) / (N n (n − 1) p_j q_j).
+        // Fleiss, Nee & Landis (1979): under κ_j = 0, var0(κ_j) = 2 / (N n (n − 1)).
+        const double nullVarianceJ = 2 / (bigN * n * (n - 1));
+        r.perCategory.assign(k, std::nullopt);
+        r.perCategoryNullStandardError.assign(k, std::nullopt);
+        for (std::size_t j = 0; j < k; ++j) {
+            const double pq = r.categoryShares[j] * (1 - r.categoryShares[j]);
+            if (pq <= 0)
+                continue;
+            r.perCategory[j] = 1 - m_disagreeing[j] / (bigN * n * (n - 1) * pq);
+            r.perCategoryNullStandardError[j] = std::sqrt(nullVarianceJ);
+        }
+
+        if (sumPQ <= 0) {
+            r.reason = "only one category is used: chance agreement is 1, so Fleiss' kappa is "
+                       "undefined";
+            return r;
+        }
+        r.value = (pBar - pExpected) / (1 - pExpected);
+        // Fleiss, Nee & Landis (1979), the corrected null variance of Fleiss (1971):
+        //   var0(κ) = 2 / (N n (n − 1)) · [(Σ p_j q_j)² − Σ p_j q_j (q_j − p_j)] / (Σ p_j q_j)².
+        const double nullVariance =
+            nullVarianceJ * (sumPQ * sumPQ - sumPQQminusP) / (sumPQ * sumPQ);
+        r.nullStandardError = std::sqrt(std::max(nullVariance, 0.0));
+        return r;
+    }
+
+private:
+    double m_n;
+    std::vector<double> m_shares;
+    std::vector<double> m_disagreeing;
+    double m_pBar = 0;
+    int m_subjects = 0;
+};
+
 FleissResult fleissKappa(const SubjectCounts &counts)
 {
     FleissResult r;
@@ -632,65 +718,14 @@ FleissResult fleissKappa(const SubjectCounts &counts)
             return r;
         }
     }
-    r.subjects = subjects;
-    r.ratersPerSubject = raters;
     if (raters < 2) {
         r.reason = "Fleiss' kappa needs at least two ratings per subject";
         return r;
     }
-    const double bigN = subjects, n = raters;
-
-    // Fleiss (1971): p_j = Σ_i n_ij / (N n); P_i = (Σ_j n_ij² − n) / (n (n − 1));
-    // P̄ = Σ P_i / N; P̄e = Σ p_j²; κ = (P̄ − P̄e) / (1 − P̄e). Per category (below):
-    // Σ_i n_ij (n − n_ij). Zero counts add nothing to either, so only the non-zero ones are read.
-    r.categoryShares.assign(k, 0.0);
-    std::vector<double> disagreeing(k, 0.0);
-    double pBar = 0;
-    for (int i = 0; i < subjects; ++i) {
-        double squares = 0;
-        for (const auto &[category, c] : row(i)) {
-            r.categoryShares[std::size_t(category)] += c;
-            disagreeing[std::size_t(category)] += c * (n - c);
-            squares += c * c;
-        }
-        pBar += (squares - n) / (n * (n - 1));
-    }
-    pBar /= bigN;
-    double pExpected = 0, sumPQ = 0, sumPQQminusP = 0;
-    for (double &p : r.categoryShares) {
-        p /= bigN * n;
-        const double q = 1 - p;
-        pExpected += p * p;
-        sumPQ += p * q;
-        sumPQQminusP += p * q * (q - p);
-    }
-    r.meanObservedAgreement = pBar;
-    r.chanceAgreement = pExpected;
-
-    // Fleiss (1971), per category: κ_j = 1 − Σ_i n_ij (n − n_ij) / (N n (n − 1) p_j q_j).
-    // Fleiss, Nee & Landis (1979): under κ_j = 0, var0(κ_j) = 2 / (N n (n − 1)).
-    const double nullVarianceJ = 2 / (bigN * n * (n - 1));
-    r.perCategory.assign(k, std::nullopt);
-    r.perCategoryNullStandardError.assign(k, std::nullopt);
-    for (std::size_t j = 0; j < k; ++j) {
-        const double pq = r.categoryShares[j] * (1 - r.categoryShares[j]);
-        if (pq <= 0)
-            continue;
-        r.perCategory[j] = 1 - disagreeing[j] / (bigN * n * (n - 1) * pq);
-        r.perCategoryNullStandardError[j] = std::sqrt(nullVarianceJ);
-    }
-
-    if (sumPQ <= 0) {
-        r.reason = "only one category is used: chance agreement is 1, so Fleiss' kappa is "
-                   "undefined";
-        return r;
-    }
-    r.value = (pBar - pExpected) / (1 - pExpected);
-    // Fleiss, Nee & Landis (1979), the corrected null variance of Fleiss (1971):
-    //   var0(κ) = 2 / (N n (n − 1)) · [(Σ p_j q_j)² − Σ p_j q_j (q_j − p_j)] / (Σ p_j q_j)².
-    const double nullVariance = nullVarianceJ * (sumPQ * sumPQ - sumPQQminusP) / (sumPQ * sumPQ);
-    r.nullStandardError = std::sqrt(std::max(nullVariance, 0.0));
-    return r;
+    FleissSums sums(k, raters);
+    for (int i = 0; i < subjects; ++i)
+        sums.add(row(i));
+    return sums.result();
 }
 
 FleissResult fleissKappa(const std::vector<std::vector<double>> &counts)
@@ -708,6 +743,50 @@ FleissResult fleissKappa(const std::vector<std::vector<double>> &counts)
         sparse.addSubject(counts[i]);
     }
     return fleissKappa(sparse);
+}
+
+FleissResult fleissKappa(const ReliabilityData &data)
+{
+    if (!wellFormed(data) || data.coders == 0) {
+        FleissResult r;
+        r.reason = data.coders == 0 && wellFormed(data) ? "there are no subjects" : kMalformedData;
+        return r;
+    }
+    if (data.values <= 0) {
+        FleissResult r;
+        r.reason = "there are no categories";
+        return r;
+    }
+    if (data.coders < 2) {
+        FleissResult r;
+        r.reason = "Fleiss' kappa needs at least two ratings per subject";
+        return r;
+    }
+    FleissSums sums(std::size_t(data.values), double(data.coders));
+    std::vector<int> row;
+    std::vector<std::pair<int, double>> entries;
+    for (int u = 0; u < data.units; ++u) {
+        row.clear();
+        bool complete = true;
+        for (int c = 0; c < data.coders && complete; ++c) {
+            const int v = data.at(u, c);
+            complete = isCode(v, data.values);
+            row.push_back(v);
+        }
+        if (!complete)
+            continue;
+        std::sort(row.begin(), row.end());
+        entries.clear();
+        for (std::size_t i = 0; i < row.size();) {
+            std::size_t j = i;
+            while (j < row.size() && row[j] == row[i])
+                ++j;
+            entries.emplace_back(row[i], double(j - i));
+            i = j;
+        }
+        sums.add(entries);
+    }
+    return sums.result();
 }
 
 SubjectCounts categoryCounts(const ReliabilityData &data)

@@ -142,6 +142,10 @@ struct SubjectCounts {
 FleissResult fleissKappa(const SubjectCounts &counts);
 // The same from a dense table (one row per subject, one column per category).
 FleissResult fleissKappa(const std::vector<std::vector<double>> &counts);
+// Fleiss' kappa of the complete units of `data` (units with a missing cell are left out), read
+// unit by unit: memory in the categories, not in the units. The same as
+// fleissKappa(categoryCounts(data)).
+FleissResult fleissKappa(const ReliabilityData &data);
 // The counts (data.values categories) of the complete units of `data` (units with a missing
 // cell are left out). No subjects for malformed data.
 SubjectCounts categoryCounts(const ReliabilityData &data);
