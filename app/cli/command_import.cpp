@@ -78,7 +78,9 @@ int runImport(const QStringList &arguments)
     QCommandLineParser parser;
     const QCommandLineOption format(QStringLiteral("format"),
         QCoreApplication::translate("cli",
-            "Read every file as txt, html, jsonl or csv (default: from each file's suffix)."),
+            "Read every file as txt, html, jsonl, csv, feed (RSS or Atom) or newsxml (NITF or "
+            "NewsML-G2) (default: from each file's suffix; .xml and unknown suffixes from the "
+            "content)."),
         QStringLiteral("FORMAT"));
     const QCommandLineOption language(QStringLiteral("language"),
         QCoreApplication::translate(
@@ -127,8 +129,8 @@ int runImport(const QStringList &arguments)
         options.format = importFormatFromKey(parser.value(format));
         if (!options.format)
             return usageError(command,
-                QCoreApplication::translate(
-                    "cli", "unknown format \"%1\" (expected txt, html, jsonl or csv).")
+                QCoreApplication::translate("cli",
+                    "unknown format \"%1\" (expected txt, html, jsonl, csv, feed or newsxml).")
                     .arg(parser.value(format)));
     }
     options.language = parser.value(language);
