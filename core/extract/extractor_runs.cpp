@@ -118,13 +118,10 @@ Result<ExtractorRun> ExtractorRuns::importRun(Project &project, const QString &n
     const QString &path, const QString &version, const QJsonObject &parameters)
 {
     FOURFOLD_TRY_STATUS(checkNewName(project, name));
-    FOURFOLD_TRY_STATUS(requireRegularFile(path));
-    QFile file(path);
-    if (!file.open(QIODevice::ReadOnly))
-        return fail(ErrorCode::Io, tr("%1 cannot be read.").arg(path), file.errorString());
-    const QByteArray bytes = file.readAll();
-    if (file.error() != QFileDevice::NoError)
-        return fail(ErrorCode::Io, tr("%1 cannot be read.").arg(path), file.errorString());
+    const auto read = readWholeFile(path, maxWholeFileSize);
+    if (!read)
+        return std::unexpected(read.error());
+    const QByteArray &bytes = *read;
 
     auto summaries = project.articles();
     if (!summaries)

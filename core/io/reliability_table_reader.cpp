@@ -85,11 +85,10 @@ private:
 
 Result<ReliabilityTable> readReliabilityTable(const QString &path)
 {
-    FOURFOLD_TRY_STATUS(requireRegularFile(path));
-    QFile file(path);
-    if (!file.open(QIODevice::ReadOnly))
-        return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));
-    auto text = decodeUtf8Strict(file.readAll(), path);
+    const auto bytes = readWholeFile(path, maxWholeFileSize);
+    if (!bytes)
+        return std::unexpected(bytes.error());
+    auto text = decodeUtf8Strict(*bytes, path);
     if (!text)
         return std::unexpected(text.error());
 

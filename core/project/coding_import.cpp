@@ -1,5 +1,6 @@
 #include "core/project/coding_import.h"
 
+#include "core/io/article_reader.h"
 #include "core/io/input_file.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
@@ -81,7 +82,12 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
         // The file is read a line at a time: memory stays bounded by one line.
         QByteArray line;
         for (qint64 lineNo = 1; !file.atEnd(); ++lineNo) {
-            line = file.readLine();
+            // A line is at most maxJsonLineSize bytes (and its line break): a file of one
+            // endless line must not be held whole.
+            line = file.readLine(maxJsonLineSize + 2);
+            if (line.size() > maxJsonLineSize && !line.endsWith('\n'))
+                return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
+                    tr("the line is longer than %1 MiB").arg(maxJsonLineSize >> 20));
             if (lineNo == 1 && line.startsWith("\xEF\xBB\xBF"))
                 line.remove(0, 3);
             if (auto valid = decodeUtf8Strict(line, path); !valid) {

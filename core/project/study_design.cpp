@@ -986,12 +986,10 @@ Result<CodebookVersionInfo> StudyDesign::addCodebookVersion(
 Result<CodebookVersionInfo> StudyDesign::addCodebookVersionFromFile(
     Project &project, const QString &path, const QString &note, CoderId author)
 {
-    FOURFOLD_TRY_STATUS(requireRegularFile(path));
-    QFile file(path);
-    if (!file.open(QIODevice::ReadOnly))
-        return fail(ErrorCode::Io, tr("%1 cannot be read.").arg(path), file.errorString());
-    const QByteArray bytes = file.readAll();
-    auto book = Codebook::fromJson(bytes, path);
+    const auto bytes = readWholeFile(path, maxCodebookFileSize);
+    if (!bytes)
+        return std::unexpected(bytes.error());
+    auto book = Codebook::fromJson(*bytes, path);
     if (!book)
         return std::unexpected(book.error());
     return addCodebookVersion(project, *book, note, author);
