@@ -349,7 +349,7 @@ int runAgree(const QStringList &arguments)
     selection.includeUnfinished = parser.isSet(includeUnfinished);
     if (parser.isSet(articles))
         selection.articles = parser.value(articles).split(QLatin1Char(','), Qt::SkipEmptyParts);
-    auto project = Project::open(parser.positionalArguments().first());
+    auto project = Project::openForReading(parser.positionalArguments().first());
     if (!project)
         return report(project.error());
     auto run = AgreementRun::load(*project, selection);

@@ -26,7 +26,7 @@ int runCheck(const QStringList &arguments)
         return usageError(QStringLiteral("check"),
             QCoreApplication::translate("cli", "expected exactly one project file."));
 
-    auto project = Project::open(parser.positionalArguments().first());
+    auto project = Project::openForReading(parser.positionalArguments().first());
     if (!project)
         return report(project.error());
     auto result = project->check();

@@ -45,7 +45,7 @@ int runInfo(const QStringList &arguments)
         return usageError(QStringLiteral("info"),
             QCoreApplication::translate("cli", "expected exactly one project file."));
 
-    auto project = Project::open(parser.positionalArguments().first());
+    auto project = Project::openForReading(parser.positionalArguments().first());
     if (!project)
         return report(project.error());
     auto counts = project->counts();

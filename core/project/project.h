@@ -40,6 +40,12 @@ public:
     // Fourfold project; NewerSchema if a newer Fourfold wrote it (the file is not touched); an
     // older file is backed up (see backupPath()) and upgraded.
     static Result<Project> open(const QString &path);
+    // Opens an existing project file for a command that only reads it (check, info, agree,
+    // export, report): as open() where this process may write the file and its folder, and
+    // read-only otherwise (a read-only file, folder or mount), writing nothing. A file at an
+    // older schema is opened with open() and upgraded (it needs write permission then). Fails
+    // as open() does; a change through a read-only project fails with Io.
+    static Result<Project> openForReading(const QString &path);
     // The schema version this program writes (older files are migrated up to it when opened).
     static int schemaVersion();
 

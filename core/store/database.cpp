@@ -5,8 +5,13 @@
 #include <QCoreApplication>
 #include <QFile>
 #include <QFileInfo>
+#include <QUrl>
 
 #include <sqlite3.h>
+#include <unistd.h>
+
+#include <cerrno>
+#include <cstring>
 
 namespace fourfold {
 
@@ -128,6 +133,15 @@ Result<Database> Database::open(const QString &path, OpenMode mode)
     // project file behind).
     const bool creates = mode == OpenMode::ReadWriteCreate && !QFileInfo(path).isSymLink()
         && !QFileInfo::exists(path);
+    // SQLite would open a file it may not write read-only and fail later with a cause that
+    // names no reason; a command that writes says so at once.
+    if (mode == OpenMode::ReadWrite && QFileInfo::exists(path)
+        && ::access(QFile::encodeName(path).constData(), W_OK) != 0)
+        return fail(ErrorCode::Io,
+            QCoreApplication::translate("Database",
+                "%1 is read-only (the file, or the disk it is on); this command writes to it.")
+                .arg(path),
+            QString::fromLocal8Bit(std::strerror(errno)));
     Database db;
     db.m_path = path;
     const auto failed = [&](Error e) -> Result<Database> {
@@ -147,12 +161,29 @@ Result<Database> Database::open(const QString &path, OpenMode mode)
     sqlite3_busy_timeout(db.m_db, 5000);
     // Reading the schema is the first touch of the file: a non-database fails here. Only that
     // (or damage) is called damage; a full disk, a lock or a read error is said as what it is.
-    Status touched = [&]() -> Status {
+    const auto touch = [&]() -> Status {
         if (const int fault = openFault("read"))
             return std::unexpected(db.errorFor(fault, QString()));
         return db.exec(
             QStringLiteral("PRAGMA foreign_keys = ON; SELECT count(*) FROM sqlite_schema;"));
-    }();
+    };
+    Status touched = touch();
+    if (!touched && mode == OpenMode::ReadOnly
+        && (sqlite3_errcode(db.m_db) & 0xff) == SQLITE_CANTOPEN) {
+        // A project (in WAL mode) in a folder nobody may write: SQLite cannot make the shared
+        // memory file a reader needs. Nobody can write the file there either, so it is read as
+        // immutable (https://www.sqlite.org/wal.html#readonly).
+        db.close();
+        const QByteArray uri = QUrl::fromLocalFile(path).toEncoded() + "?immutable=1";
+        const int again =
+            sqlite3_open_v2(uri.constData(), &db.m_db, flags | SQLITE_OPEN_URI, nullptr);
+        if (again != SQLITE_OK)
+            return failed(db.errorFor(again,
+                QCoreApplication::translate("Database", "Cannot open the project file %1.")
+                    .arg(path)));
+        sqlite3_extended_result_codes(db.m_db, 1);
+        touched = touch();
+    }
     if (!touched) {
         Error e = touched.error();
         switch (e.code) {
