@@ -48,7 +48,11 @@ int runExport(const QStringList &arguments)
            "column per function) or csv (article × variable)."),
         QStringLiteral("FORMAT"));
     const QCommandLineOption outDir(QStringLiteral("out"),
-        tr("The output directory (created if needed)."), QStringLiteral("DIR"));
+        tr("The output directory: new or empty (created if needed); the export appears in it "
+           "whole or not at all."),
+        QStringLiteral("DIR"));
+    const QCommandLineOption force(QStringLiteral("force"),
+        tr("Replace an earlier export in --out DIR (a folder holding only export files)."));
     const QCommandLineOption split(QStringLiteral("split"),
         tr("Split by article, stratified by function presence: train/dev/test or train/test "
            "percentages, e.g. 80/10/10."),
@@ -58,7 +62,7 @@ int runExport(const QStringList &arguments)
     const QCommandLineOption noText(QStringLiteral("no-text"),
         tr("Write offsets and hashes only: no texts, quotes, tokens or titles."));
     const QCommandLineOption json(QStringLiteral("json"), tr("Print the manifest as JSON."));
-    parser.addOptions({layer, format, outDir, split, seed, noText, json});
+    parser.addOptions({layer, format, outDir, force, split, seed, noText, json});
     parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
     if (int rc = parseCommandLine(parser, command,
             tr("Exports gold, codings or a run's spans for data teams and statistics packages; "
@@ -99,8 +103,9 @@ int runExport(const QStringList &arguments)
         return usageError(command, tr("--seed expects a non-negative whole number."));
     options.withText = !parser.isSet(noText);
     options.version = QCoreApplication::applicationVersion();
+    options.replace = parser.isSet(force);
 
-    auto project = Project::open(parser.positionalArguments().first());
+    auto project = Project::openForReading(parser.positionalArguments().first());
     if (!project)
         return report(project.error());
     auto exported = exportLayer(*project, options);

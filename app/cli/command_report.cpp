@@ -8,6 +8,7 @@
 #include "app/report/report_writer.h"
 #include "core/project/project.h"
 
+#include <QFile>
 #include <QFileInfo>
 #endif
 
@@ -48,11 +49,13 @@ int runReport(const QStringList &arguments)
         QStringLiteral("title"), tr("The report's title."), QStringLiteral("TEXT"));
     const QCommandLineOption json(
         QStringLiteral("json"), tr("Also print the report's figures as JSON on stdout."));
+    const QCommandLineOption force(
+        QStringLiteral("force"), tr("Replace report files that exist already."));
     const QCommandLineOption includeUnfinished(QStringLiteral("include-unfinished"),
         tr("Also count articles that coders started but did not mark done (left out and listed "
            "by default)."));
     parser.addOptions(
-        {outFile, unit, phase, coders, includeUnfinished, bootstrap, seed, title, json});
+        {outFile, unit, phase, coders, includeUnfinished, bootstrap, seed, title, json, force});
     parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
     if (int rc = parseCommandLine(parser, command,
             tr("Write the reliability report: method text with the items of Lombard, "
@@ -73,6 +76,20 @@ int runReport(const QStringList &arguments)
             && suffix != QLatin1String("pdf"))
             return usageError(
                 command, tr("the report file \"%1\" must end in .html or .pdf.").arg(o));
+        // A report is written beside its name and moved into place (QSaveFile); it never writes
+        // through a link to somewhere else, nor replaces a file unasked.
+        const QFileInfo target(o);
+        if (target.isSymLink())
+            return report(Error {ErrorCode::Io,
+                tr("The report file %1 is a symbolic link; name a real file.").arg(o), {}, o, 0,
+                0});
+        if (target.exists() && !target.isFile())
+            return report(
+                Error {ErrorCode::Io, tr("%1 exists and is not a file.").arg(o), {}, o, 0, 0});
+        if (target.exists() && !parser.isSet(force))
+            return report(Error {ErrorCode::Duplicate,
+                tr("%1 exists already; choose another name or replace it with --force.").arg(o), {},
+                o, 0, 0});
     }
 
     ReportOptions options;
@@ -102,18 +119,26 @@ int runReport(const QStringList &arguments)
     options.title = parser.value(title);
     options.includeUnfinished = parser.isSet(includeUnfinished);
 
-    auto project = Project::open(parser.positionalArguments().first());
+    auto project = Project::openForReading(parser.positionalArguments().first());
     if (!project)
         return report(project.error());
     auto data = gatherReportData(*project, options);
     if (!data)
         return report(data.error());
+    // Both files or neither: a report file this run made goes again when a later one fails.
+    QStringList made;
     for (const QString &o : outputs) {
         const bool pdf =
             QFileInfo(o).suffix().compare(QLatin1String("pdf"), Qt::CaseInsensitive) == 0;
+        const bool existed = QFileInfo::exists(o);
         auto written = pdf ? writeReportPdf(*data, o) : writeReportHtml(*data, o);
-        if (!written)
+        if (!written) {
+            for (const QString &m : made)
+                QFile::remove(m);
             return report(written.error());
+        }
+        if (!existed)
+            made << o;
         if (!parser.isSet(json))
             out(tr("Wrote %1").arg(o));
     }

@@ -1,8 +1,10 @@
 #include "core/exchange/layer_export.h"
 
+#include "core/exchange/export_folder.h"
 #include "core/exchange/iob2_format.h"
 #include "core/exchange/w3c_format.h"
 #include "core/project/project.h"
+#include "core/text/canonical_text.h"
 #include "core/text/offset_map.h"
 
 #include <QCoreApplication>
@@ -117,9 +119,11 @@ QStringList sourceFileParts(const QStringList &sources)
 class StreamedFile
 {
 public:
-    StreamedFile(const QDir &dir, const QString &name)
+    // Written into `dir`; messages name it as `shownDir`/name (the folder it will be moved to).
+    StreamedFile(const QDir &dir, const QString &name, const QString &shownDir)
         : m_file(dir.filePath(name))
         , m_name(name)
+        , m_shown(QDir::toNativeSeparators(QDir(shownDir).filePath(name)))
     { }
 
     // Io naming the file if it cannot be created.
@@ -160,12 +164,12 @@ private:
     std::unexpected<Error> failure() const
     {
         return fail(ErrorCode::Io,
-            tr("The file %1 could not be written: %2.")
-                .arg(m_file.fileName(), m_file.errorString()));
+            tr("The file %1 could not be written: %2.").arg(m_shown, m_file.errorString()));
     }
 
     QSaveFile m_file;
     QString m_name;
+    QString m_shown;
     QCryptographicHash m_hash {QCryptographicHash::Sha256};
     qint64 m_bytes = 0;
 };
@@ -290,10 +294,13 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
     for (std::size_t i = 0; i < articles.size(); ++i)
         report.articleSplits.emplace_back(articles[i].externalId, ratios.names[splitOf[i]]);
 
-    QDir dir(options.outDir);
-    if (!dir.mkpath(QStringLiteral(".")))
-        return fail(
-            ErrorCode::Io, tr("The directory %1 could not be created.").arg(options.outDir));
+    auto folder = ExportFolder::prepare(options.outDir, options.replace);
+    if (!folder)
+        return std::unexpected(folder.error());
+    const QDir dir(folder->path());
+    const auto written = [&](const QString &name) -> Status {
+        return options.afterFile ? options.afterFile(name) : Status {};
+    };
 
     // Every split's files are open at once and written in one pass over the layer.
     const QStringList &sources = layer->sources();
@@ -322,7 +329,7 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
             break;
         }
         for (const QString &name : names) {
-            out.files.push_back(std::make_unique<StreamedFile>(dir, name));
+            out.files.push_back(std::make_unique<StreamedFile>(dir, name, options.outDir));
             FOURFOLD_TRY_STATUS(out.files.back()->open());
         }
         switch (options.format) {
@@ -352,8 +359,6 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
     }
 
     const bool text = options.withText;
-    const bool needsArticle =
-        options.format == ExportFormat::Iob2 || (text && options.format != ExportFormat::Csv);
     FOURFOLD_TRY_STATUS(layer->forEachArticle([&](LayerArticle &&la) -> Status {
         const std::size_t i = index.value(la.article.value);
         const ArticleSummary &a = articles[i];
@@ -370,15 +375,22 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
         ++out.articles;
         out.spans += qint64(la.spans.size());
 
-        // The article's text, read once whatever the number of sources covering it.
+        // The article's text, read once whatever the number of sources covering it, and checked
+        // against the SHA-256 the export writes beside it: a damaged file must not hand out a
+        // hash that does not match its text.
         std::optional<Article> current;
         const bool hasOutput = options.format != ExportFormat::W3c || !la.spans.empty();
-        if (needsArticle && hasOutput) {
+        if (hasOutput) {
             auto read = project.article(la.article);
             if (!read)
                 return std::unexpected(read.error());
             current = std::move(*read);
             ++report.articleReads;
+            if (textSha256(current->text) != a.sha256)
+                return fail(ErrorCode::Corrupt,
+                    tr("The text of article \"%1\" does not match its stored SHA-256 (the "
+                       "project file is damaged); nothing was exported.")
+                        .arg(a.externalId));
         }
         const auto spanId = [&](const LayerSpan &sp) {
             return sp.uuid.isEmpty() ? runSpanId(sp.source, a.sha256, sp)
@@ -504,6 +516,7 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
         for (auto &file : out.files) {
             FOURFOLD_TRY_STATUS(file->commit());
             const ExportedFile e = file->exported();
+            FOURFOLD_TRY_STATUS(written(e.name));
             fileList.append(
                 QJsonObject {{QStringLiteral("name"), e.name}, {QStringLiteral("split"), e.split},
                     {QStringLiteral("sha256"), e.sha256}, {QStringLiteral("bytes"), e.bytes}});
@@ -536,10 +549,12 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
             {QStringLiteral("split_ratios"),
                 options.split ? QJsonValue(ratioObject) : QJsonValue(QJsonValue::Null)},
             {QStringLiteral("splits"), splitCounts}, {QStringLiteral("files"), fileList}};
-    StreamedFile manifest(dir, QStringLiteral("manifest.json"));
+    StreamedFile manifest(dir, QStringLiteral("manifest.json"), options.outDir);
     FOURFOLD_TRY_STATUS(manifest.open());
     manifest.write(QJsonDocument(report.manifest).toJson(QJsonDocument::Indented));
     FOURFOLD_TRY_STATUS(manifest.commit());
+    FOURFOLD_TRY_STATUS(written(QStringLiteral("manifest.json")));
+    FOURFOLD_TRY_STATUS(folder->commit());
     return report;
 }
 

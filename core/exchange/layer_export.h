@@ -29,6 +29,7 @@
 #include <QString>
 
 #include <cstdint>
+#include <functional>
 #include <optional>
 #include <vector>
 
@@ -49,6 +50,12 @@ struct ExportOptions {
     std::uint64_t seed = 1;
     bool withText = true;
     QString version; // Fourfold's version, for the generator fields
+    // Replace an earlier export in outDir (a folder holding only export files); without it a
+    // folder that holds anything is refused.
+    bool replace = false;
+    // A test hook: called after each file is written (its name relative to outDir, the manifest
+    // last), before the export is moved into place; an error stops the export there.
+    std::function<Status(const QString &name)> afterFile;
 };
 
 struct ExportedFile {
@@ -70,10 +77,13 @@ struct ExportReport {
     std::size_t mostSpansHeld = 0;
 };
 
-// Writes the export. Fails with NotFound for an unknown coder or run, InvalidArgument when the
-// layer covers no article, Io naming the file that could not be written (files written before
-// it stay; the manifest is written last, so an export without a manifest is incomplete), or
-// with the store's error.
+// Writes the export into a hidden folder beside outDir and moves it into place whole once every
+// file and the manifest are written (export_folder.h): on any failure outDir is as it was and
+// nothing is left behind. Before an article is written its text is checked against its stored
+// SHA-256. Fails with NotFound for an unknown coder or run, InvalidArgument when the layer
+// covers no article, Io when outDir is a symbolic link or not a folder or a file cannot be
+// written (naming it), Duplicate when outDir holds files and `replace` is not set, Corrupt
+// naming the article whose text does not match its hash, or with the store's error.
 Result<ExportReport> exportLayer(const Project &project, const ExportOptions &options);
 
 } // namespace fourfold
