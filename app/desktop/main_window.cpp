@@ -642,7 +642,8 @@ void MainWindow::importArticles()
     if (!m_session)
         return;
     const QStringList files = QFileDialog::getOpenFileNames(this, tr("Import articles"), QString(),
-        tr("Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv)"));
+        tr("Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf "
+           "*.newsml *.xml)"));
     if (files.isEmpty())
         return;
     const ImportOutcome outcome = importWithProgress(m_session->project(), files, this);

@@ -80,8 +80,9 @@ int main(int argc, char *argv[])
         ok &= saveGrab(w, out, "desk-lead-all-coders.png");
         // A result told in the message bar: merged copies, one conflict, details open.
         w.messageBar()->showMessage(MessageBar::Kind::Warning,
-            QStringLiteral("Merged 2 copies; 1 conflict(s) keep the project's version until you "
-                           "decide (fourfold-cli merge PROJECT --conflicts lists them)."),
+            QStringLiteral("Merged 2 copies; 1 conflict(s): the later change is kept, the other "
+                           "waits for you to decide (fourfold-cli merge PROJECT --conflicts lists "
+                           "them)."),
             {},
             QStringLiteral("demo-C02.fourfold (C02): 3 new, 1 changed (0 deleted), 1 conflict(s).\n"
                            "demo-C03.fourfold (C03): already merged, nothing new."));
