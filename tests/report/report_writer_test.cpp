@@ -528,3 +528,35 @@ TEST_CASE("no title or pseudonym can end the embedded figures early")
     CHECK_FALSE(json.contains(QLatin1Char('<')));
     CHECK(embeddedFigures(text).value(QStringLiteral("title")).toString() == options.title);
 }
+
+TEST_CASE("report --out refuses a symbolic link and replaces a file only with --force")
+{
+    // A report never writes through a link to somewhere else nor replaces a file unasked
+    // (README, "The reliability report").
+    const Sample &s = sample();
+    QTemporaryDir dir;
+    const QString elsewhere = dir.filePath(QStringLiteral("elsewhere.html"));
+    REQUIRE(writeFile(dir, QStringLiteral("elsewhere.html"), QByteArray("keep me")).size() > 0);
+    const QString link = dir.filePath(QStringLiteral("link.html"));
+    REQUIRE(QFile::link(elsewhere, link));
+    CliRun r = cli({QStringLiteral("report"), s.project, QStringLiteral("--out"), link,
+        QStringLiteral("--bootstrap"), QStringLiteral("0")});
+    CHECK(r.exitCode == 1);
+    CHECK(r.err.contains(QStringLiteral("is a symbolic link")));
+    CHECK(readFile(elsewhere) == QByteArray("keep me"));
+
+    const QString existing = dir.filePath(QStringLiteral("existing.html"));
+    REQUIRE(
+        writeFile(dir, QStringLiteral("existing.html"), QByteArray("an older report")).size() > 0);
+    r = cli({QStringLiteral("report"), s.project, QStringLiteral("--out"), existing,
+        QStringLiteral("--bootstrap"), QStringLiteral("0")});
+    CHECK(r.exitCode == 1);
+    CHECK(r.err.contains(QStringLiteral("exists already")));
+    CHECK(readFile(existing) == QByteArray("an older report"));
+
+    r = cli({QStringLiteral("report"), s.project, QStringLiteral("--out"), existing,
+        QStringLiteral("--bootstrap"), QStringLiteral("0"), QStringLiteral("--force")});
+    INFO(r.err.toStdString());
+    CHECK(r.exitCode == 0);
+    CHECK(readText(existing).contains(QStringLiteral("<html")));
+}
