@@ -1,5 +1,6 @@
 #include "core/io/html_reader.h"
 
+#include "core/io/xml_document.h"
 #include "core/text/canonical_text.h"
 
 #include <QCoreApplication>
@@ -60,27 +61,6 @@ std::string_view elementName(const xmlNode *node)
                       : std::string_view();
 }
 
-QString fromXml(const xmlChar *text)
-{
-    return text ? QString::fromUtf8(reinterpret_cast<const char *>(text)) : QString();
-}
-
-QString attribute(const xmlNode *node, const char *name)
-{
-    xmlChar *value = xmlGetProp(node, reinterpret_cast<const xmlChar *>(name));
-    QString result = fromXml(value);
-    xmlFree(value);
-    return result;
-}
-
-QString textContent(const xmlNode *node)
-{
-    xmlChar *content = xmlNodeGetContent(node);
-    QString result = fromXml(content);
-    xmlFree(content);
-    return result.simplified();
-}
-
 bool hasAncestor(const xmlNode *node, std::initializer_list<std::string_view> names)
 {
     for (const xmlNode *p = node->parent; p; p = p->parent) {
@@ -95,7 +75,7 @@ bool hasAncestor(const xmlNode *node, std::initializer_list<std::string_view> na
 // CSS Cascade 4 §6.4); comments (/* … */) are ignored.
 bool styledDisplayNone(const xmlNode *node)
 {
-    QString style = attribute(node, "style");
+    QString style = xmlAttribute(node, "style");
     if (style.isEmpty())
         return false;
     static const QRegularExpression comments(
@@ -134,7 +114,7 @@ bool isDropped(const xmlNode *node, std::string_view name)
 {
     if (isOneOf(name, droppedElements))
         return true;
-    if (attribute(node, "aria-hidden").trimmed().compare(u"true", Qt::CaseInsensitive) == 0)
+    if (xmlAttribute(node, "aria-hidden").trimmed().compare(u"true", Qt::CaseInsensitive) == 0)
         return true;
     // HTML-AAM: a header maps to the banner role (page furniture) unless it is inside an
     // article, aside, main, nav or section element, where it introduces that content.
@@ -431,7 +411,7 @@ std::vector<Block> collectBlocks(xmlNode *root, QString *firstTime)
             if (name == "pre")
                 ++collector.preDepth;
             if (name == "time" && firstTime && firstTime->isEmpty())
-                *firstTime = attribute(node, "datetime").trimmed();
+                *firstTime = xmlAttribute(node, "datetime").trimmed();
             return true;
         },
         [&](xmlNode *node) {
@@ -522,7 +502,7 @@ Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &
     ImportedArticle article;
     article.externalId = baseName;
     article.sourceLine = 1;
-    article.language = attribute(root, "lang").trimmed();
+    article.language = xmlAttribute(root, "lang").trimmed();
 
     QString pageTitle;
     QString ogTitle;
@@ -531,14 +511,14 @@ Result<ImportedArticle> readHtmlArticle(const QByteArray &bytes, const QString &
     forEachElement(root, [&](xmlNode *node) {
         const std::string_view name = elementName(node);
         if (name == "title" && pageTitle.isEmpty() && !hasAncestor(node, {"svg"})) {
-            pageTitle = textContent(node);
+            pageTitle = xmlSimpleText(node);
         } else if (name == "h1" && firstH1.isEmpty()) {
-            firstH1 = textContent(node);
+            firstH1 = xmlSimpleText(node);
         } else if (name == "meta") {
-            QString key = attribute(node, "property").trimmed();
+            QString key = xmlAttribute(node, "property").trimmed();
             if (key.isEmpty())
-                key = attribute(node, "name").trimmed();
-            const QString content = attribute(node, "content").simplified();
+                key = xmlAttribute(node, "name").trimmed();
+            const QString content = xmlAttribute(node, "content").simplified();
             // The Open Graph protocol (ogp.me): og:title, og:site_name, and the article
             // type's article:published_time.
             if (key == u"og:title" && ogTitle.isEmpty())

@@ -21,11 +21,6 @@ QString tr(const char *text)
     return QCoreApplication::translate("ArticleReader", text);
 }
 
-QString fromXml(const xmlChar *text)
-{
-    return text ? QString::fromUtf8(reinterpret_cast<const char *>(text)) : QString();
-}
-
 struct ContextFree {
     void operator()(xmlParserCtxt *context) const { xmlFreeParserCtxt(context); }
 };
@@ -217,6 +212,11 @@ QString xmlQualifiedName(const _xmlNode *node)
     if (node->ns && node->ns->prefix)
         return fromXml(node->ns->prefix) + u':' + fromXml(node->name);
     return fromXml(node->name);
+}
+
+QString fromXml(const xmlChar *text)
+{
+    return text ? QString::fromUtf8(reinterpret_cast<const char *>(text)) : QString();
 }
 
 qint64 xmlLine(const _xmlNode *node)

@@ -48,6 +48,8 @@ QString xmlNamespace(const _xmlNode *node);
 QString xmlQualifiedName(const _xmlNode *node);
 // The element's line in the file (1-based; 0 if libxml2 did not record it).
 qint64 xmlLine(const _xmlNode *node);
+// A libxml2 string (UTF-8; xmlChar is unsigned char) as a QString; a null string for nullptr.
+QString fromXml(const unsigned char *text);
 // The attribute's value (the attribute without a namespace), or a null string if absent.
 QString xmlAttribute(const _xmlNode *node, const char *name);
 // All the text inside the element, entities expanded, as written (not trimmed).
