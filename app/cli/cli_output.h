@@ -42,6 +42,7 @@ int runInfo(const QStringList &arguments);
 int runCheck(const QStringList &arguments);
 int runBuildSample(const QStringList &arguments);
 int runAgree(const QStringList &arguments);
+int runFrames(const QStringList &arguments);
 int runExtract(const QStringList &arguments);
 int runScore(const QStringList &arguments);
 int runExport(const QStringList &arguments);

@@ -45,6 +45,10 @@ const std::map<QString, Command> &commands()
             {QT_TRANSLATE_NOOP(
                  "cli", "Inter-coder reliability of a matrix file or of a project's codings."),
                 runAgree}},
+        {QStringLiteral("frames"),
+            {QT_TRANSLATE_NOOP("cli",
+                 "Frames as clusters of articles by their frame elements (Ward, then k-means)."),
+                runFrames}},
         {QStringLiteral("extract"),
             {QT_TRANSLATE_NOOP("cli",
                  "Run an extractor (built-in baseline or external command) over a project's "

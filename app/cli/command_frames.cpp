@@ -1,0 +1,570 @@
+// frames: the frames of a debate as clusters of articles by their frame elements (Matthes &
+// Kohring 2008: Ward's method, then k-means from Ward's centroids), from a project's layer or a
+// raw articles × variables matrix (--data), with the indices for choosing k, bootstrap stability,
+// frames by outlet, month and language, and the comparison of two layers' frames.
+
+#include "app/cli/cli_output.h"
+#include "core/frames/adjusted_rand.h"
+#include "core/frames/chi_square.h"
+#include "core/frames/cluster_stability.h"
+#include "core/frames/frame_analysis.h"
+#include "core/io/numeric_matrix_reader.h"
+#include "core/project/project.h"
+#include "core/scoring/element_indicators.h"
+
+#include <QCoreApplication>
+#include <QFileInfo>
+#include <QHash>
+#include <QJsonArray>
+#include <QSaveFile>
+
+#include <algorithm>
+#include <map>
+
+namespace fourfold::cli {
+
+namespace {
+
+QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
+{
+    return QCoreApplication::translate("cli", text, disambiguation, n);
+}
+
+using frames::FrameAnalysis;
+using frames::FrameMatrix;
+
+// The articles and variables one analysis runs on, and the groups each article belongs to.
+struct FrameInput {
+    QString source; // the file or "layer gold"
+    QStringList variables;
+    QStringList ids; // the articles as the user knows them
+    std::vector<ArticleId> articles; // project articles (empty for --data)
+    FrameMatrix matrix;
+    // "outlet", "month", "language" -> each article's group
+    std::map<QString, QStringList> groups;
+};
+
+FrameInput fromIndicators(ElementIndicators &&indicators)
+{
+    FrameInput input;
+    input.source = tr("layer %1").arg(indicators.layer);
+    input.variables = indicators.variables;
+    input.matrix.rows = indicators.articles.size();
+    input.matrix.columns = size_t(indicators.variables.size());
+    input.matrix.values = std::move(indicators.values);
+    QStringList &outlet = input.groups[QStringLiteral("outlet")];
+    QStringList &month = input.groups[QStringLiteral("month")];
+    QStringList &language = input.groups[QStringLiteral("language")];
+    const QString unknown = tr("(unknown)");
+    for (const ArticleSummary &a : indicators.articles) {
+        input.articles.push_back(a.id);
+        input.ids << (a.externalId.isEmpty() ? a.uuid : a.externalId);
+        outlet << (a.outlet.isEmpty() ? unknown : a.outlet);
+        // ISO 8601 dates: the month is the first seven characters (YYYY-MM).
+        month << (a.published.size() >= 7 && a.published.at(4) == QLatin1Char('-')
+                ? a.published.left(7)
+                : unknown);
+        language << (a.language.isEmpty() ? unknown : a.language);
+    }
+    return input;
+}
+
+// The rows of `input` whose articles are in `keep` (in input order).
+FrameInput restricted(const FrameInput &input, const QSet<qint64> &keep)
+{
+    FrameInput out;
+    out.source = input.source;
+    out.variables = input.variables;
+    out.matrix.columns = input.matrix.columns;
+    for (size_t r = 0; r < input.matrix.rows; ++r) {
+        if (!keep.contains(input.articles[r].value))
+            continue;
+        out.articles.push_back(input.articles[r]);
+        out.ids << input.ids[qsizetype(r)];
+        out.matrix.values.insert(out.matrix.values.end(), input.matrix.row(r),
+            input.matrix.row(r) + input.matrix.columns);
+        ++out.matrix.rows;
+    }
+    return out;
+}
+
+QJsonValue optionalJson(const std::optional<double> &v)
+{
+    return v ? QJsonValue(*v) : QJsonValue(QJsonValue::Null);
+}
+
+QString number(const std::optional<double> &v, int decimals)
+{
+    return v ? QString::number(*v, 'f', decimals) : QStringLiteral("–");
+}
+
+// A frames × groups table with chi-square and Cramér's V.
+struct GroupTable {
+    QString name;
+    QStringList groups; // sorted
+    std::vector<long long> counts; // frames × groups
+    frames::ChiSquareResult test;
+};
+
+GroupTable groupTable(const QString &name, const QStringList &groupOf, const frames::Partition &p)
+{
+    GroupTable table;
+    table.name = name;
+    QStringList groups = groupOf;
+    groups.sort();
+    groups.removeDuplicates();
+    table.groups = groups;
+    QHash<QString, int> column;
+    for (qsizetype g = 0; g < groups.size(); ++g)
+        column.insert(groups[g], int(g));
+    table.counts.assign(size_t(p.clusters) * size_t(groups.size()), 0);
+    for (size_t i = 0; i < p.labels.size(); ++i)
+        ++table.counts[size_t(p.labels[i]) * size_t(groups.size())
+            + size_t(column.value(groupOf[qsizetype(i)]))];
+    if (auto test = frames::chiSquare(table.counts, p.clusters, int(groups.size())))
+        table.test = *test;
+    return table;
+}
+
+QJsonObject chiSquareJson(const frames::ChiSquareResult &t)
+{
+    QJsonObject o {{QStringLiteral("chi_square"), optionalJson(t.statistic)},
+        {QStringLiteral("df"), t.degreesOfFreedom}, {QStringLiteral("p"), optionalJson(t.pValue)},
+        {QStringLiteral("cramers_v"), optionalJson(t.cramersV)},
+        {QStringLiteral("cells_expected_below_5"), t.smallExpected}};
+    if (!t.reason.empty())
+        o.insert(QStringLiteral("reason"), QString::fromStdString(t.reason));
+    return o;
+}
+
+QString chiSquareText(const frames::ChiSquareResult &t)
+{
+    if (!t.statistic)
+        return tr("chi-square undefined: %1").arg(QString::fromStdString(t.reason));
+    return tr("X² = %1, df = %2, p = %3, Cramér's V = %4%5")
+        .arg(*t.statistic, 0, 'f', 2)
+        .arg(t.degreesOfFreedom)
+        .arg(*t.pValue < 0.001 ? QStringLiteral("< 0.001") : QString::number(*t.pValue, 'f', 3))
+        .arg(*t.cramersV, 0, 'f', 3)
+        .arg(t.smallExpected > 0 ? tr("; %n cell(s) expect fewer than 5", nullptr, t.smallExpected)
+                                 : QString());
+}
+
+// Ward + k-means with k clusters on `matrix` (one thread: replicates run side by side).
+frames::ClusterMethod twoStepMethod(int k)
+{
+    return [k](const FrameMatrix &sample) -> frames::Outcome<frames::Partition> {
+        frames::WardOptions options;
+        options.threads = 1;
+        const auto schedule = frames::wardLinkage(sample, options);
+        if (!schedule)
+            return std::unexpected(schedule.error());
+        auto clusters = frames::twoStepClusters(sample, *schedule, k, 1);
+        if (!clusters)
+            return std::unexpected(clusters.error());
+        return clusters->partition;
+    };
+}
+
+// Writes `article,frame` rows (frames counted from 1), replacing the file whole.
+Status writeAssignments(const QString &path, const FrameInput &input, const frames::Partition &p)
+{
+    QSaveFile file(path);
+    if (!file.open(QIODevice::WriteOnly))
+        return fail(ErrorCode::Io, tr("%1 could not be written.").arg(path), file.errorString());
+    QByteArray bytes = "article,frame\n";
+    for (size_t i = 0; i < p.labels.size(); ++i) {
+        QString id = input.ids[qsizetype(i)];
+        // RFC 4180: a field with a comma, quote or line break is quoted, quotes doubled.
+        if (id.contains(QLatin1Char(',')) || id.contains(QLatin1Char('"'))
+            || id.contains(QLatin1Char('\n')) || id.contains(QLatin1Char('\r')))
+            id = QLatin1Char('"') + id.replace(QLatin1String("\""), QLatin1String("\"\""))
+                + QLatin1Char('"');
+        bytes += id.toUtf8() + ',' + QByteArray::number(p.labels[i] + 1) + '\n';
+    }
+    if (file.write(bytes) != bytes.size() || !file.commit())
+        return fail(ErrorCode::Io, tr("%1 could not be written.").arg(path), file.errorString());
+    return {};
+}
+
+// Reports the failure `failure` (made by fail()) and returns ExitFailure.
+int reportFailure(const std::unexpected<Error> &failure)
+{
+    return report(failure.error());
+}
+
+} // namespace
+
+int runFrames(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("frames");
+    QCommandLineParser parser;
+    const QCommandLineOption data(QStringLiteral("data"),
+        tr("An articles × variables matrix: CSV with a header row <id>,<variable>,... and one "
+           "row per article, its id first; every cell a number (0/1 for element indicators)."),
+        QStringLiteral("FILE"));
+    const QCommandLineOption layer(QStringLiteral("layer"),
+        tr("With a project: whose codings give the element variables: gold (default), "
+           "consensus (an element counts when at least half of the article's coders coded it), "
+           "coder:PSEUDONYM or run:NAME."),
+        QStringLiteral("LAYER"), QStringLiteral("gold"));
+    const QCommandLineOption k(QStringLiteral("k"),
+        tr("The number of frames (default: the one most k-choice indices point at)."),
+        QStringLiteral("K"));
+    const QCommandLineOption maxK(QStringLiteral("max-k"),
+        tr("Compute the k-choice indices for k = 2..K (default 10)."), QStringLiteral("K"),
+        QStringLiteral("10"));
+    const QCommandLineOption bootstrap(QStringLiteral("bootstrap"),
+        tr("Bootstrap replicates for each frame's stability (Hennig 2007; default 0: none)."),
+        QStringLiteral("N"), QStringLiteral("0"));
+    const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
+        QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption compare(QStringLiteral("compare"),
+        tr("With a project: also cluster this layer on the articles both layers hold, with the "
+           "same k, and compare the frames (adjusted Rand index, matched cross-table)."),
+        QStringLiteral("LAYER"));
+    const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
+    const QCommandLineOption outFile(QStringLiteral("out"),
+        tr("Write each article's frame as CSV rows article,frame (frames counted from 1)."),
+        QStringLiteral("FILE"));
+    const QCommandLineOption force(
+        QStringLiteral("force"), tr("Replace the --out file if it exists."));
+    parser.addOptions({data, layer, k, maxK, bootstrap, seed, compare, json, outFile, force});
+    parser.addPositionalArgument(
+        QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
+    if (int rc = parseCommandLine(parser, command,
+            tr("Frames as clusters of articles by their frame elements: Ward's method, then "
+               "k-means from Ward's centroids (Matthes & Kohring 2008); k-choice indices "
+               "(silhouette, Calinski–Harabasz, fusion-coefficient elbow), bootstrap stability, "
+               "frames by outlet, month and language."),
+            arguments);
+        rc >= 0)
+        return rc;
+
+    bool ok = false;
+    frames::FrameAnalysisOptions options;
+    if (parser.isSet(k)) {
+        options.k = parser.value(k).toInt(&ok);
+        if (!ok || options.k < 1)
+            return usageError(command, tr("--k expects a whole number of frames from 1 up."));
+    }
+    options.maxK = parser.value(maxK).toInt(&ok);
+    if (!ok || options.maxK < 2 || options.maxK > 100)
+        return usageError(command, tr("--max-k expects a whole number from 2 to 100."));
+    const int replicates = parser.value(bootstrap).toInt(&ok);
+    if (!ok || replicates < 0 || replicates > 100000)
+        return usageError(
+            command, tr("--bootstrap expects a number of replicates from 0 to 100000."));
+    const quint64 seedValue = parser.value(seed).toULongLong(&ok);
+    if (!ok)
+        return usageError(command, tr("--seed expects a non-negative whole number."));
+    if (parser.isSet(outFile) && QFileInfo::exists(parser.value(outFile)) && !parser.isSet(force))
+        return reportFailure(fail(ErrorCode::Duplicate,
+            tr("%1 exists already; choose another name or replace it with --force.")
+                .arg(parser.value(outFile))));
+
+    FrameInput input;
+    std::optional<FrameInput> other;
+    if (parser.isSet(data)) {
+        if (!parser.positionalArguments().isEmpty())
+            return usageError(command, tr("give either --data FILE or a project, not both."));
+        if (parser.isSet(compare) || parser.isSet(layer))
+            return usageError(command, tr("--layer and --compare are for a project, not --data."));
+        auto read = readNumericMatrix(parser.value(data));
+        if (!read)
+            return report(read.error());
+        input.source = read->source;
+        input.variables = read->variables;
+        input.ids = read->rows;
+        input.matrix.rows = size_t(read->rows.size());
+        input.matrix.columns = size_t(read->variables.size());
+        input.matrix.values = std::move(read->values);
+    } else {
+        if (parser.positionalArguments().size() != 1)
+            return usageError(command, tr("expected a project file, or --data FILE."));
+        auto project = Project::openForReading(parser.positionalArguments().first());
+        if (!project)
+            return report(project.error());
+        auto indicators = elementIndicators(*project, parser.value(layer));
+        if (!indicators)
+            return report(indicators.error());
+        input = fromIndicators(std::move(*indicators));
+        if (parser.isSet(compare)) {
+            auto second = elementIndicators(*project, parser.value(compare));
+            if (!second)
+                return report(second.error());
+            other = fromIndicators(std::move(*second));
+        }
+    }
+    if (input.matrix.rows < 3)
+        return reportFailure(fail(ErrorCode::InvalidInput,
+            tr("%1 holds %n article(s); frames need at least 3.", nullptr, int(input.matrix.rows))
+                .arg(input.source)));
+
+    auto analysed = frames::analyseFrames(input.matrix, options);
+    if (!analysed)
+        return reportFailure(fail(ErrorCode::InvalidInput,
+            tr("%1: %2").arg(input.source, QString::fromStdString(analysed.error()))));
+    const FrameAnalysis &analysis = *analysed;
+    const frames::Partition &partition = analysis.frames.partition;
+
+    std::vector<frames::ClusterStability> stability;
+    if (replicates > 0) {
+        frames::StabilityOptions stabilityOptions;
+        stabilityOptions.replicates = replicates;
+        stabilityOptions.seed = seedValue;
+        auto computed = frames::clusterStability(
+            input.matrix, partition, twoStepMethod(analysis.k), stabilityOptions);
+        if (!computed)
+            return reportFailure(
+                fail(ErrorCode::InvalidInput, QString::fromStdString(computed.error())));
+        stability = std::move(*computed);
+    }
+
+    std::vector<GroupTable> tables;
+    for (const auto &[name, groupOf] : input.groups)
+        tables.push_back(groupTable(name, groupOf, partition));
+
+    // The comparison: both layers clustered on the articles they share, with the same k.
+    QJsonObject comparison;
+    QStringList comparisonText;
+    if (other) {
+        QSet<qint64> inFirst;
+        for (ArticleId a : input.articles)
+            inFirst.insert(a.value);
+        QSet<qint64> common;
+        for (ArticleId a : other->articles)
+            if (inFirst.contains(a.value))
+                common.insert(a.value);
+        const FrameInput a = restricted(input, common);
+        const FrameInput b = restricted(*other, common);
+        if (a.matrix.rows < std::max<size_t>(3, size_t(analysis.k)))
+            return reportFailure(fail(ErrorCode::InvalidInput,
+                tr("%1 and %2 share %n article(s); comparing %3 frames needs more.", nullptr,
+                    int(a.matrix.rows))
+                    .arg(input.source, other->source)
+                    .arg(analysis.k)));
+        frames::FrameAnalysisOptions same = options;
+        same.k = analysis.k;
+        same.maxK = 2;
+        auto first = frames::analyseFrames(a.matrix, same);
+        auto second = frames::analyseFrames(b.matrix, same);
+        if (!first || !second)
+            return reportFailure(fail(ErrorCode::InvalidInput,
+                QString::fromStdString(!first ? first.error() : second.error())));
+        const auto table = frames::crossTable(first->frames.partition, second->frames.partition);
+        if (!table)
+            return reportFailure(fail(ErrorCode::Internal, QString::fromStdString(table.error())));
+        const double ari = frames::adjustedRandIndex(*table);
+        const std::vector<int> match = frames::bestMatching(*table);
+        long long matched = 0;
+        QJsonArray rows;
+        QJsonArray matching;
+        for (int r = 0; r < table->rows; ++r) {
+            QJsonArray row;
+            for (int c = 0; c < table->columns; ++c)
+                row.append(double(table->at(r, c)));
+            rows.append(row);
+            const int m = match[size_t(r)];
+            matching.append(m >= 0 ? QJsonValue(m + 1) : QJsonValue(QJsonValue::Null));
+            if (m >= 0)
+                matched += table->at(r, m);
+        }
+        const double agreement = double(matched) / double(a.matrix.rows);
+        comparison = QJsonObject {{QStringLiteral("layer"), parser.value(compare)},
+            {QStringLiteral("articles"), int(a.matrix.rows)}, {QStringLiteral("k"), analysis.k},
+            {QStringLiteral("adjusted_rand_index"), ari}, {QStringLiteral("cross_table"), rows},
+            {QStringLiteral("matching"), matching}, {QStringLiteral("matched_share"), agreement}};
+        comparisonText << tr("Frames of %1 against %2 on the %n article(s) both hold (k = %3 "
+                             "for both)",
+            nullptr, int(a.matrix.rows))
+                              .arg(input.source, other->source)
+                              .arg(analysis.k);
+        comparisonText
+            << tr("  Adjusted Rand index (Hubert & Arabie 1985)  %1").arg(ari, 0, 'f', 3);
+        comparisonText << tr("  Articles on matched frames                   %1%")
+                              .arg(agreement * 100, 0, 'f', 1);
+        QString header = QStringLiteral("  %1").arg(QString(), -10);
+        for (int c = 0; c < table->columns; ++c)
+            header += QStringLiteral("%1").arg(tr("F%1").arg(c + 1), 8);
+        comparisonText << header
+                + tr("   (rows: %1; columns: %2; * matched)")
+                      .arg(parser.value(layer), parser.value(compare));
+        for (int r = 0; r < table->rows; ++r) {
+            QString line = QStringLiteral("  %1").arg(tr("F%1").arg(r + 1), -10);
+            for (int c = 0; c < table->columns; ++c)
+                line += QStringLiteral("%1").arg(
+                    QString::number(table->at(r, c)) + (match[size_t(r)] == c ? u"*"_qs : u" "_qs),
+                    8);
+            comparisonText << line;
+        }
+    }
+
+    if (parser.isSet(outFile)) {
+        if (auto written = writeAssignments(parser.value(outFile), input, partition); !written)
+            return report(written.error());
+    }
+
+    const size_t n = input.matrix.rows;
+    if (parser.isSet(json)) {
+        QJsonArray kChoice;
+        for (const frames::KChoice &row : analysis.kChoice)
+            kChoice.append(QJsonObject {{QStringLiteral("k"), row.k},
+                {QStringLiteral("silhouette"), optionalJson(row.silhouette.value)},
+                {QStringLiteral("calinski_harabasz"), optionalJson(row.calinskiHarabasz.value)},
+                {QStringLiteral("fusion_jump"), optionalJson(row.fusionJump.value)}});
+        QJsonArray schedule;
+        for (const frames::WardMerge &m : analysis.schedule)
+            schedule.append(QJsonArray {m.first, m.second, m.height, m.size});
+        QJsonArray framesJson;
+        for (size_t f = 0; f < analysis.profiles.size(); ++f) {
+            const frames::FrameProfile &profile = analysis.profiles[f];
+            QJsonArray elements;
+            for (qsizetype v = 0; v < input.variables.size(); ++v) {
+                const frames::VariableProfile &vp = profile.variables[size_t(v)];
+                elements.append(QJsonObject {{QStringLiteral("variable"), input.variables[v]},
+                    {QStringLiteral("share"), vp.share}, {QStringLiteral("overall"), vp.overall},
+                    {QStringLiteral("difference"), vp.difference},
+                    {QStringLiteral("residual"), optionalJson(vp.residual)}});
+            }
+            QJsonArray closest;
+            for (size_t row : profile.closest)
+                closest.append(input.ids[qsizetype(row)]);
+            QJsonObject frame {{QStringLiteral("frame"), int(f) + 1},
+                {QStringLiteral("size"), profile.size},
+                {QStringLiteral("share"), double(profile.size) / double(n)},
+                {QStringLiteral("elements"), elements}, {QStringLiteral("closest"), closest}};
+            if (!stability.empty())
+                frame.insert(QStringLiteral("stability"),
+                    QJsonObject {{QStringLiteral("mean_jaccard"), stability[f].meanJaccard},
+                        {QStringLiteral("replicates"), stability[f].replicatesUsed},
+                        {QStringLiteral("dissolved"), stability[f].dissolved},
+                        {QStringLiteral("recovered"), stability[f].recovered},
+                        {QStringLiteral("flagged"), stability[f].flagged}});
+            framesJson.append(frame);
+        }
+        QJsonObject byGroup;
+        for (const GroupTable &t : tables) {
+            QJsonArray rows;
+            for (int f = 0; f < partition.clusters; ++f) {
+                QJsonArray row;
+                for (qsizetype g = 0; g < t.groups.size(); ++g)
+                    row.append(double(t.counts[size_t(f) * size_t(t.groups.size()) + size_t(g)]));
+                rows.append(row);
+            }
+            QJsonObject o = chiSquareJson(t.test);
+            o.insert(QStringLiteral("groups"), QJsonArray::fromStringList(t.groups));
+            o.insert(QStringLiteral("counts"), rows);
+            byGroup.insert(t.name, o);
+        }
+        QJsonObject o {{QStringLiteral("source"), input.source},
+            {QStringLiteral("articles"), int(n)},
+            {QStringLiteral("variables"), QJsonArray::fromStringList(input.variables)},
+            {QStringLiteral("k"), analysis.k}, {QStringLiteral("k_given"), analysis.kGiven},
+            {QStringLiteral("k_by"),
+                QJsonObject {{QStringLiteral("silhouette"), analysis.kBySilhouette},
+                    {QStringLiteral("calinski_harabasz"), analysis.kByCalinskiHarabasz},
+                    {QStringLiteral("fusion_elbow"), analysis.kByFusion}}},
+            {QStringLiteral("k_choice"), kChoice}, {QStringLiteral("schedule"), schedule},
+            {QStringLiteral("inertia"), analysis.frames.inertia},
+            {QStringLiteral("kmeans_iterations"), analysis.frames.iterations},
+            {QStringLiteral("frames"), framesJson}};
+        if (!stability.empty())
+            o.insert(QStringLiteral("bootstrap"),
+                QJsonObject {{QStringLiteral("replicates"), replicates},
+                    {QStringLiteral("seed"), QString::number(seedValue)}});
+        if (!byGroup.isEmpty())
+            o.insert(QStringLiteral("by"), byGroup);
+        if (!comparison.isEmpty())
+            o.insert(QStringLiteral("compare"), comparison);
+        printJson(o);
+        return ExitOk;
+    }
+
+    QStringList lines;
+    lines << tr("Frames of %1: %2 articles × %3 variables")
+                 .arg(input.source)
+                 .arg(n)
+                 .arg(input.variables.size());
+    lines << tr("Choosing k (each k: Ward, then k-means from Ward's centroids)");
+    lines << tr("  %1 %2 %3 %4")
+                 .arg(tr("k"), 3)
+                 .arg(tr("silhouette"), 11)
+                 .arg(tr("Calinski–Harabasz"), 18)
+                 .arg(tr("fusion jump"), 12);
+    for (const frames::KChoice &row : analysis.kChoice)
+        lines << QStringLiteral("  %1 %2 %3 %4")
+                     .arg(row.k, 3)
+                     .arg(number(row.silhouette.value, 3), 11)
+                     .arg(number(row.calinskiHarabasz.value, 2), 18)
+                     .arg(number(row.fusionJump.value, 3), 12);
+    lines << tr("  Largest: silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k "
+                "= %3")
+                 .arg(analysis.kBySilhouette)
+                 .arg(analysis.kByCalinskiHarabasz)
+                 .arg(analysis.kByFusion);
+    lines << (analysis.kGiven ? tr("Frames (k = %1, given)").arg(analysis.k)
+                              : tr("Frames (k = %1, where most indices point)").arg(analysis.k));
+    for (size_t f = 0; f < analysis.profiles.size(); ++f) {
+        const frames::FrameProfile &profile = analysis.profiles[f];
+        QString head = tr("  Frame %1  %n article(s) (%2%)", nullptr, profile.size)
+                           .arg(f + 1)
+                           .arg(100.0 * profile.size / double(n), 0, 'f', 1);
+        if (!stability.empty())
+            head += tr("  stability %1%2")
+                        .arg(stability[f].meanJaccard, 0, 'f', 2)
+                        .arg(stability[f].flagged ? tr(" (dissolves on resampling)") : QString());
+        lines << head;
+        // The elements that characterise the frame: adjusted residual above 1.96, the largest
+        // first (for numbers from --data that are not 0/1: the largest differences).
+        std::vector<size_t> order(input.variables.size());
+        for (size_t v = 0; v < order.size(); ++v)
+            order[v] = v;
+        auto strength = [&](size_t v) {
+            const frames::VariableProfile &vp = profile.variables[v];
+            return vp.residual ? *vp.residual : vp.difference;
+        };
+        std::stable_sort(order.begin(), order.end(),
+            [&](size_t x, size_t y) { return strength(x) > strength(y); });
+        QStringList shown;
+        for (size_t v : order) {
+            const frames::VariableProfile &vp = profile.variables[v];
+            if (vp.residual ? *vp.residual <= 1.96 : vp.difference <= 0)
+                continue;
+            shown << tr("%1 %2 (all %3%4)")
+                         .arg(input.variables[qsizetype(v)])
+                         .arg(vp.share, 0, 'f', 2)
+                         .arg(vp.overall, 0, 'f', 2)
+                         .arg(
+                             vp.residual ? tr(", r = %1").arg(*vp.residual, 0, 'f', 1) : QString());
+            if (shown.size() == 6)
+                break;
+        }
+        lines << tr("    elements: %1")
+                     .arg(shown.isEmpty() ? tr("none stands out")
+                                          : shown.join(QStringLiteral("; ")));
+        QStringList closest;
+        for (size_t row : profile.closest)
+            closest << input.ids[qsizetype(row)];
+        lines << tr("    closest to the centre: %1").arg(closest.join(QStringLiteral(", ")));
+    }
+    for (const GroupTable &t : tables) {
+        lines << tr("Frames by %1: %2").arg(t.name, chiSquareText(t.test));
+        QString header = QStringLiteral("  %1").arg(QString(), -24);
+        for (int f = 0; f < partition.clusters; ++f)
+            header += QStringLiteral("%1").arg(tr("F%1").arg(f + 1), 7);
+        lines << header;
+        for (qsizetype g = 0; g < t.groups.size(); ++g) {
+            QString line = QStringLiteral("  %1").arg(t.groups[g].left(24), -24);
+            for (int f = 0; f < partition.clusters; ++f)
+                line += QStringLiteral("%1").arg(
+                    t.counts[size_t(f) * size_t(t.groups.size()) + size_t(g)], 7);
+            lines << line;
+        }
+    }
+    lines << comparisonText;
+    out(lines.join(QLatin1Char('\n')));
+    return ExitOk;
+}
+
+} // namespace fourfold::cli

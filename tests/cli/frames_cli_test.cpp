@@ -1,0 +1,264 @@
+// fourfold-cli frames: a matrix file (--data), a project's layers, --out, --compare and the strict
+// reader's errors.
+#include "tests/support/cli_run.h"
+
+#include <QDir>
+#include <QFile>
+#include <QJsonArray>
+#include <QJsonDocument>
+#include <QJsonObject>
+#include <QMap>
+#include <QSet>
+#include <QTemporaryDir>
+
+#include <catch2/catch.hpp>
+
+#include <random>
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+CliRun cli(const QStringList &args)
+{
+    return runCli(QStringLiteral(FOURFOLD_CLI), args);
+}
+
+void writeFile(const QString &path, const QByteArray &bytes)
+{
+    QFile file(path);
+    REQUIRE(file.open(QIODevice::WriteOnly));
+    file.write(bytes);
+}
+
+// 120 invented articles from 3 element profiles over 9 elements (3 each; 0.85 inside, 0.05
+// outside), interleaved; `truth` receives each article's profile.
+QByteArray plantedMatrix(std::vector<int> &truth)
+{
+    std::mt19937_64 generator(17);
+    std::uniform_real_distribution<double> uniform(0.0, 1.0);
+    QByteArray csv = "article";
+    for (int e = 0; e < 9; ++e)
+        csv += ",e" + QByteArray::number(e);
+    csv += '\n';
+    for (int a = 0; a < 120; ++a) {
+        truth.push_back(a % 3);
+        csv += "a" + QByteArray::number(a);
+        for (int e = 0; e < 9; ++e)
+            csv += uniform(generator) < (e / 3 == a % 3 ? 0.85 : 0.05) ? ",1" : ",0";
+        csv += '\n';
+    }
+    return csv;
+}
+
+// The element indicators of the sample project's codings.jsonl for `coders` (one coder, or all
+// three for the consensus: an element counts when at least half of the article's coders coded
+// it), as a --data matrix in the articles' file order. Built here from the source file, apart
+// from the program's own reading of the project. Polarity and explicitness are the default
+// codebook's closed lists.
+QByteArray indicatorsFromSampleFile(const QStringList &coders)
+{
+    const QStringList variables {"problem", "cause", "evaluation", "evaluation:polarity=negative",
+        "evaluation:polarity=neutral", "evaluation:polarity=positive", "remedy",
+        "remedy:explicitness=explicit", "remedy:explicitness=implicit"};
+    QStringList articleOrder;
+    QFile articles(QStringLiteral(FOURFOLD_SAMPLE_DIR "/articles.jsonl"));
+    REQUIRE(articles.open(QIODevice::ReadOnly));
+    for (const QByteArray &line : articles.readAll().split('\n'))
+        if (!line.trimmed().isEmpty())
+            articleOrder << QJsonDocument::fromJson(line).object().value("id").toString();
+    // article -> coder -> elements present
+    QMap<QString, QMap<QString, QSet<QString>>> present;
+    QFile codings(QStringLiteral(FOURFOLD_SAMPLE_DIR "/codings.jsonl"));
+    REQUIRE(codings.open(QIODevice::ReadOnly));
+    for (const QByteArray &line : codings.readAll().split('\n')) {
+        if (line.trimmed().isEmpty())
+            continue;
+        const QJsonObject o = QJsonDocument::fromJson(line).object();
+        const QString coder = o.value("coder").toString();
+        if (!coders.contains(coder) || !o.contains("function"))
+            continue;
+        QSet<QString> &set = present[o.value("article").toString()][coder];
+        const QString f = o.value("function").toString();
+        set.insert(f);
+        const QJsonObject attributes = o.value("attributes").toObject();
+        for (auto it = attributes.begin(); it != attributes.end(); ++it)
+            set.insert(f + ":" + it.key() + "=" + it.value().toString());
+    }
+    QByteArray csv = "article," + variables.join(',').toUtf8() + '\n';
+    for (const QString &article : articleOrder) {
+        if (!present.contains(article))
+            continue;
+        const auto &byCoder = present[article];
+        csv += article.toUtf8();
+        for (const QString &v : variables) {
+            int count = 0;
+            for (const QSet<QString> &set : byCoder)
+                count += set.contains(v) ? 1 : 0;
+            csv += 2 * count >= int(byCoder.size()) && count > 0 ? ",1" : ",0";
+        }
+        csv += '\n';
+    }
+    return csv;
+}
+
+} // namespace
+
+TEST_CASE("frames --data recovers planted frames and writes article and frame rows")
+{
+    QTemporaryDir dir;
+    std::vector<int> truth;
+    const QString matrix = dir.filePath("matrix.csv");
+    writeFile(matrix, plantedMatrix(truth));
+    const QString out = dir.filePath("frames.csv");
+    const CliRun run = cli({"frames", "--data", matrix, "--max-k", "6", "--bootstrap", "20",
+        "--seed", "3", "--json", "--out", out});
+    INFO(run.err.toStdString());
+    REQUIRE(run.exitCode == 0);
+    const QJsonObject o = cliJson(run);
+    CHECK(o.value("articles").toInt() == 120);
+    CHECK(o.value("k").toInt() == 3);
+    CHECK(o.value("k_given").toBool() == false);
+    CHECK(o.value("k_by").toObject().value("silhouette").toInt() == 3);
+    CHECK(o.value("k_choice").toArray().size() == 5);
+    CHECK(o.value("schedule").toArray().size() == 119);
+    const QJsonArray frames = o.value("frames").toArray();
+    REQUIRE(frames.size() == 3);
+    for (const QJsonValue &f : frames) {
+        CHECK(f.toObject().value("stability").toObject().value("mean_jaccard").toDouble() > 0.75);
+        CHECK(f.toObject().value("closest").toArray().size() == 3);
+    }
+    // --out: a header and one row per article; each planted profile lands in one frame.
+    QFile file(out);
+    REQUIRE(file.open(QIODevice::ReadOnly));
+    const QList<QByteArray> lines = file.readAll().trimmed().split('\n');
+    REQUIRE(lines.size() == 121);
+    CHECK(lines[0] == "article,frame");
+    QMap<int, QMap<QByteArray, int>> framesOfProfile;
+    for (int a = 0; a < 120; ++a) {
+        const QList<QByteArray> fields = lines[a + 1].split(',');
+        REQUIRE(fields.size() == 2);
+        CHECK(fields[0] == "a" + QByteArray::number(a));
+        ++framesOfProfile[truth[size_t(a)]][fields[1]];
+    }
+    for (const auto &counts : framesOfProfile) {
+        int largest = 0;
+        for (int c : counts)
+            largest = std::max(largest, c);
+        CHECK(largest >= 36); // at least 90% of the profile's 40 articles in one frame
+    }
+    // The same run again gives the same figures (seeded bootstrap); --out refuses to overwrite.
+    const CliRun again = cli(
+        {"frames", "--data", matrix, "--max-k", "6", "--bootstrap", "20", "--seed", "3", "--json"});
+    CHECK(cliJson(again).value("frames") == o.value("frames"));
+    const CliRun refused = cli({"frames", "--data", matrix, "--out", out});
+    CHECK(refused.exitCode == 1);
+    CHECK(refused.err.contains("--force"));
+}
+
+TEST_CASE("frames --data names file line and column of a bad cell")
+{
+    QTemporaryDir dir;
+    struct Case {
+        const char *csv;
+        const char *expected;
+    };
+    const std::vector<Case> cases {
+        {"article,a,b\nx,1,0\ny,1,abc\n",
+            ":3:3: column 3 (\"b\") holds \"abc\", which is not a number."},
+        {"article,a,b\nx,1,\n", ":2:3: column 3 (\"b\") is empty"},
+        {"article,a,b\nx,1\n", ":2: this row has 2 fields but the header has 3."},
+        {"article,a,b\nx,1,0\nx,0,1\n", ":3:1: the article \"x\" appears twice (first on line 2)."},
+        {"article,a,a\nx,1,0\n", ":1:3: the variable \"a\" appears twice in the header."},
+        {"article\nx\n", ":1: the header names no variable"},
+        {"article,a\n", ":1: the file has a header but no articles."},
+        {"article,a\nx,inf\n", ":2:2: column 2 (\"a\") holds \"inf\", which is not a number."},
+    };
+    for (const Case &c : cases) {
+        const QString path = dir.filePath("bad.csv");
+        writeFile(path, c.csv);
+        const CliRun run = cli({"frames", "--data", path});
+        INFO(c.csv);
+        INFO(run.err.toStdString());
+        CHECK(run.exitCode == 1);
+        CHECK(run.err.contains(path + QString::fromUtf8(c.expected)));
+    }
+    const QString small = dir.filePath("small.csv");
+    writeFile(small, "article,a\nx,1\ny,0\n");
+    CHECK(cli({"frames", "--data", small}).err.contains("frames need at least 3"));
+    CHECK(cli({"frames", "--data", small, "--k", "0"}).exitCode == 2);
+    CHECK(cli({"frames", "--data", small, "--layer", "gold"}).exitCode == 2);
+}
+
+TEST_CASE("frames of a project layer equal frames of the indicators built from the source file")
+{
+    QTemporaryDir dir;
+    const QString project = dir.filePath("demo.fourfold");
+    REQUIRE(cli({"build-sample", FOURFOLD_SAMPLE_DIR, project}).exitCode == 0);
+    // One coder's layer and the consensus of the three: the program's indicators, clustered,
+    // give exactly the figures of the indicators built independently from codings.jsonl.
+    const std::vector<std::pair<QString, QStringList>> layers {
+        {"coder:C01", {"C01"}}, {"consensus", {"C01", "C02", "C03"}}};
+    for (const auto &[layer, coders] : layers) {
+        INFO(layer.toStdString());
+        const QString matrix = dir.filePath("indicators.csv");
+        writeFile(matrix, indicatorsFromSampleFile(coders));
+        const CliRun fromProject =
+            cli({"frames", project, "--layer", layer, "--k", "3", "--max-k", "4", "--json"});
+        INFO(fromProject.err.toStdString());
+        REQUIRE(fromProject.exitCode == 0);
+        const CliRun fromFile =
+            cli({"frames", "--data", matrix, "--k", "3", "--max-k", "4", "--json"});
+        REQUIRE(fromFile.exitCode == 0);
+        const QJsonObject a = cliJson(fromProject);
+        const QJsonObject b = cliJson(fromFile);
+        CHECK(a.value("variables") == b.value("variables"));
+        CHECK(a.value("articles").toInt() == b.value("articles").toInt());
+        CHECK(a.value("articles").toInt() >= 9);
+        CHECK(a.value("schedule") == b.value("schedule"));
+        CHECK(a.value("frames") == b.value("frames"));
+        CHECK(a.value("k_choice") == b.value("k_choice"));
+        // Frames by outlet: one column per outlet, counts adding up to the articles.
+        const QJsonObject byOutlet = a.value("by").toObject().value("outlet").toObject();
+        long long total = 0;
+        for (const QJsonValue &row : byOutlet.value("counts").toArray())
+            for (const QJsonValue &cell : row.toArray())
+                total += cell.toInteger();
+        CHECK(total == a.value("articles").toInt());
+        CHECK(b.value("by").isUndefined()); // --data has no outlets
+    }
+    // --compare: a layer against itself agrees perfectly (ARI 1, all articles on matched frames).
+    const CliRun self = cli({"frames", project, "--layer", "coder:C02", "--compare", "coder:C02",
+        "--k", "3", "--max-k", "3", "--json"});
+    REQUIRE(self.exitCode == 0);
+    const QJsonObject compare = cliJson(self).value("compare").toObject();
+    CHECK(compare.value("adjusted_rand_index").toDouble() == 1.0);
+    CHECK(compare.value("matched_share").toDouble() == 1.0);
+    CHECK(compare.value("cross_table").toArray().size() == 3);
+    // Two coders: the ARI is the one of the printed cross-table (Hubert & Arabie 1985, eq. 5).
+    const CliRun pair = cli({"frames", project, "--layer", "coder:C01", "--compare", "coder:C02",
+        "--k", "2", "--max-k", "2", "--json"});
+    REQUIRE(pair.exitCode == 0);
+    const QJsonObject c = cliJson(pair).value("compare").toObject();
+    double cells = 0, rowPairs = 0, columnPairs = 0, n = 0;
+    std::vector<double> columnSums(2, 0.0);
+    for (const QJsonValue &row : c.value("cross_table").toArray()) {
+        double rowSum = 0;
+        for (qsizetype j = 0; j < row.toArray().size(); ++j) {
+            const double x = row.toArray()[j].toDouble();
+            cells += x * (x - 1) / 2;
+            rowSum += x;
+            columnSums[size_t(j)] += x;
+        }
+        rowPairs += rowSum * (rowSum - 1) / 2;
+        n += rowSum;
+    }
+    for (double s : columnSums)
+        columnPairs += s * (s - 1) / 2;
+    const double expected = rowPairs * columnPairs / (n * (n - 1) / 2);
+    const double ari = (cells - expected) / ((rowPairs + columnPairs) / 2 - expected);
+    CHECK(c.value("adjusted_rand_index").toDouble() == Approx(ari).margin(1e-12));
+    CHECK(cli({"frames", project, "--layer", "coders"}).err.contains("not a layer for frames"));
+    CHECK(cli({"frames", project, "--layer", "coder:NOBODY"}).exitCode == 1);
+}
