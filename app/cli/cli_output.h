@@ -51,5 +51,6 @@ int runAssign(const QStringList &arguments);
 int runCodebook(const QStringList &arguments);
 int runHandout(const QStringList &arguments);
 int runMerge(const QStringList &arguments);
+int runTeam(const QStringList &arguments);
 
 } // namespace fourfold::cli

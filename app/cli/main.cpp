@@ -77,6 +77,10 @@ const std::map<QString, Command> &commands()
                 runHandout}},
         {QStringLiteral("merge"),
             {QT_TRANSLATE_NOOP("cli", "Merge returned coder copies into the project."), runMerge}},
+        {QStringLiteral("team"),
+            {QT_TRANSLATE_NOOP(
+                 "cli", "Team projects on a PostgreSQL server: publish a project (team publish)."),
+                runTeam}},
         {QStringLiteral("build-sample"),
             {QT_TRANSLATE_NOOP("cli", "Build the demo project from its source files."),
                 runBuildSample}},

@@ -148,6 +148,7 @@ private:
     friend class CoderCopies;
     friend class StudyDesign;
     friend class CodingScope;
+    friend class TeamProject;
 
     explicit Project(Database db)
         : m_db(std::move(db))

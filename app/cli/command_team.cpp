@@ -1,0 +1,123 @@
+// fourfold-cli team: team projects on a PostgreSQL server (core/team). "team publish" for now.
+
+#include "app/cli/cli_output.h"
+#include "core/project/project.h"
+#include "core/team/team_project.h"
+
+#include <QCoreApplication>
+#include <QFileInfo>
+#include <QJsonArray>
+
+namespace fourfold::cli {
+
+namespace {
+
+int runTeamPublish(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("team publish");
+    QCommandLineParser parser;
+    const QCommandLineOption server(QStringLiteral("server"),
+        QCoreApplication::translate("cli",
+            "The empty database to publish into, as a libpq connection string or URI "
+            "(postgresql://ADMIN@HOST/DATABASE). Its login must own the database and may create "
+            "roles; its password comes from ~/.pgpass, PGPASSFILE or PGPASSWORD."),
+        QStringLiteral("URL"));
+    const QCommandLineOption credentials(QStringLiteral("credentials-out"),
+        QCoreApplication::translate("cli",
+            "The new (or empty) folder for the people's password files, one "
+            "PSEUDONYM.pgpass each (default: PROJECT.credentials beside the project)."),
+        QStringLiteral("DIR"));
+    const QCommandLineOption as(QStringLiteral("as"),
+        QCoreApplication::translate(
+            "cli", "The lead whose working file the project becomes (needed with several leads)."),
+        QStringLiteral("PSEUDONYM"));
+    const QCommandLineOption json(
+        QStringLiteral("json"), QCoreApplication::translate("cli", "Print the result as JSON."));
+    parser.addOptions({server, credentials, as, json});
+    parser.addPositionalArgument(
+        QStringLiteral("PROJECT"), QCoreApplication::translate("cli", "The project file."));
+    if (int rc = parseCommandLine(parser, command,
+            QCoreApplication::translate("cli",
+                "Create the team project of PROJECT on a PostgreSQL server: the schema, one "
+                "login role per person with a random password (written to a password file per "
+                "person), the row-level security that keeps coders blind, and every shared row. "
+                "No password is stored in the project file."),
+            arguments);
+        rc >= 0)
+        return rc;
+    if (parser.positionalArguments().size() != 1)
+        return usageError(
+            command, QCoreApplication::translate("cli", "expected exactly one project file."));
+    if (!parser.isSet(server) || parser.value(server).trimmed().isEmpty())
+        return usageError(
+            command, QCoreApplication::translate("cli", "name the database with --server URL."));
+    const QString path = parser.positionalArguments().first();
+    const QString dir = parser.isSet(credentials) ? parser.value(credentials)
+                                                  : path + QStringLiteral(".credentials");
+
+    auto project = Project::open(path);
+    if (!project)
+        return report(project.error());
+    auto result = TeamProject::publish(*project, parser.value(server), dir, parser.value(as));
+    if (!result)
+        return report(result.error());
+
+    if (parser.isSet(json)) {
+        QJsonArray logins;
+        for (const TeamLogin &l : result->logins)
+            logins.append(QJsonObject {{QStringLiteral("pseudonym"), l.pseudonym},
+                {QStringLiteral("role"), l.role}, {QStringLiteral("lead"), l.lead},
+                {QStringLiteral("file"), l.passwordFile}});
+        printJson(QJsonObject {{QStringLiteral("server"), result->server},
+            {QStringLiteral("schema_version"), result->schemaVersion},
+            {QStringLiteral("credentials"), result->credentialsDir},
+            {QStringLiteral("logins"), logins}, {QStringLiteral("people"), result->people},
+            {QStringLiteral("articles"), result->articles},
+            {QStringLiteral("codebook_versions"), result->codebookVersions},
+            {QStringLiteral("assignments"), result->assignments},
+            {QStringLiteral("annotations"), result->annotations},
+            {QStringLiteral("links"), result->links},
+            {QStringLiteral("judgements"), result->judgements},
+            {QStringLiteral("gold"), result->gold}, {QStringLiteral("events"), result->events}});
+        return ExitOk;
+    }
+    out(QCoreApplication::translate("cli",
+        "Published %1 to %2 (server schema version %3): %4 articles, %5 annotations, %6 links, "
+        "%7 article judgements, %8 gold decisions, %9 events.")
+            .arg(QFileInfo(path).fileName(), result->server)
+            .arg(result->schemaVersion)
+            .arg(result->articles)
+            .arg(result->annotations)
+            .arg(result->links)
+            .arg(result->judgements)
+            .arg(result->gold)
+            .arg(result->events));
+    out(QCoreApplication::translate("cli",
+        "One login per person; hand each person their own password file (mode 0600) and nothing "
+        "else:"));
+    for (const TeamLogin &l : result->logins)
+        out(QStringLiteral("  %1  %2  %3%4")
+                .arg(l.pseudonym, -8)
+                .arg(l.role, l.passwordFile)
+                .arg(l.lead ? QCoreApplication::translate("cli", "  (lead)") : QString()));
+    return ExitOk;
+}
+
+} // namespace
+
+int runTeam(const QStringList &arguments)
+{
+    const QString sub = arguments.size() > 1 ? arguments.at(1) : QString();
+    if (sub == QLatin1String("publish"))
+        return runTeamPublish(arguments.mid(1));
+    if (sub.isEmpty() || sub == QLatin1String("--help") || sub == QLatin1String("-h")) {
+        out(QCoreApplication::translate("cli", "Usage: fourfold-cli team SUBCOMMAND [options]"));
+        out(QCoreApplication::translate("cli",
+            "  publish   Create the team project of a project file on a PostgreSQL server."));
+        return sub.isEmpty() ? ExitUsage : ExitOk;
+    }
+    return usageError(QStringLiteral("team"),
+        QCoreApplication::translate("cli", "unknown subcommand \"%1\".").arg(sub));
+}
+
+} // namespace fourfold::cli

@@ -1,0 +1,42 @@
+#pragma once
+// The rows of a project file that a team shares on a server (core/team), read in portable form:
+// one JSON object per row whose keys are the server's column names and whose references are
+// uuids, never row ids. The coder's own objects (assignments, annotations, answers, links) come
+// from portableRows (copy_tables.h), the form coder copies compare and merge.
+
+#include "core/model/error.h"
+
+#include <QByteArray>
+#include <QString>
+
+#include <functional>
+
+namespace fourfold {
+class Database;
+namespace store {
+
+// The kinds of shared rows read here, in the order a server must receive them (a row's
+// references come before it).
+enum class SharedKind {
+    Person, // coder: uuid, name, pseudonym, role, created_at, deleted
+    CodebookVersion, // uuid, number, created_at, created_by (person uuid or null), note, content
+    Article, // uuid, external_id, title, outlet, published, language, text, length, sha256,
+             // metadata, imported_at, deleted, paragraphs [{start,end,role}], sentences and
+             // tokens ("\x" + hex of the stored little-endian int32 pairs)
+    GoldAnnotation, // uuid, article, function, start, end, quote, attributes, decided_by,
+                    // decided_at, rationale, deleted
+    GoldSource, // gold, annotation: which coders' spans a gold span was decided from
+    GoldJudgement, // uuid, article, item, value, decided_by, decided_at, rationale, deleted
+    GoldRejection, // uuid, annotation, decided_by, decided_at, rationale, deleted
+    Event, // source_id (the row id in this file), at, person (uuid or null), action,
+           // object_type, object_uuid, detail
+};
+
+// Hands every row of `kind` to `visit` as compact JSON text (UTF-8), one row held at a time, in
+// a stable order (by uuid; events by id). Fails with the store's error, or the first failed
+// visit's.
+Status forEachSharedRow(
+    const Database &db, SharedKind kind, const std::function<Status(const QByteArray &)> &visit);
+
+} // namespace store
+} // namespace fourfold

@@ -1,0 +1,248 @@
+#include "core/team/server_store_connection.h"
+
+#include <QCoreApplication>
+#include <QStringList>
+
+#include <libpq-fe.h>
+
+#include <vector>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("ServerConnection", text);
+}
+
+QString serverText(const char *text)
+{
+    return QString::fromUtf8(text ? text : "").trimmed();
+}
+
+// SQLSTATE classes (PostgreSQL 15 documentation, Appendix A "PostgreSQL Error Codes").
+ErrorCode codeForState(const QByteArray &state)
+{
+    if (state == "42501" || state.startsWith("28"))
+        return ErrorCode::NotAllowed; // insufficient_privilege; invalid authorization
+    if (state.startsWith("23"))
+        return ErrorCode::Constraint; // integrity constraint violation
+    if (state.startsWith("08") || state.startsWith("57"))
+        return ErrorCode::Io; // connection exception; operator intervention (shutdown)
+    if (state == "40001" || state == "40P01" || state == "55P03")
+        return ErrorCode::Busy; // serialization failure, deadlock, lock not available
+    return ErrorCode::InvalidInput;
+}
+
+} // namespace
+
+void ServerResult::Free::operator()(pg_result *r) const
+{
+    PQclear(r);
+}
+
+int ServerResult::rows() const
+{
+    return PQntuples(m_result.get());
+}
+
+int ServerResult::columns() const
+{
+    return PQnfields(m_result.get());
+}
+
+bool ServerResult::isNull(int row, int column) const
+{
+    return PQgetisnull(m_result.get(), row, column) != 0;
+}
+
+QString ServerResult::text(int row, int column) const
+{
+    return QString::fromUtf8(
+        PQgetvalue(m_result.get(), row, column), PQgetlength(m_result.get(), row, column));
+}
+
+QByteArray ServerResult::bytes(int row, int column) const
+{
+    return QByteArray(
+        PQgetvalue(m_result.get(), row, column), PQgetlength(m_result.get(), row, column));
+}
+
+qint64 ServerResult::integer(int row, int column) const
+{
+    return bytes(row, column).toLongLong();
+}
+
+void ServerConnection::Free::operator()(pg_conn *c) const
+{
+    PQfinish(c);
+}
+
+ServerConnection::ServerConnection(pg_conn *conn)
+    : m_conn(conn)
+{ }
+
+Result<ServerConnection> ServerConnection::open(const QString &conninfo)
+{
+    const QByteArray info = conninfo.toUtf8();
+    PGconn *raw = PQconnectdb(info.constData());
+    if (!raw)
+        return fail(ErrorCode::Internal, tr("Out of memory while connecting to the server."));
+    ServerConnection conn(raw);
+    if (PQstatus(raw) != CONNECTION_OK) {
+        const QString cause = serverText(PQerrorMessage(raw));
+        // libpq has no SQLSTATE for a refused login; its message says so.
+        const bool refused = cause.contains(QLatin1String("authentication failed"))
+            || cause.contains(QLatin1String("password")) || cause.contains(QLatin1String("role"));
+        return fail(refused ? ErrorCode::NotAllowed : ErrorCode::Io,
+            refused ? tr("The server refused the login %1.").arg(conn.describe())
+                    : tr("Could not connect to the server %1.").arg(conn.describe()),
+            cause);
+    }
+    // Every text this program sends and reads is UTF-8; times are text, so the zone is moot.
+    if (PQsetClientEncoding(raw, "UTF8") != 0)
+        return fail(ErrorCode::Io, tr("The server %1 cannot speak UTF-8.").arg(conn.describe()),
+            serverText(PQerrorMessage(raw)));
+    return conn;
+}
+
+Result<QString> ServerConnection::withoutPassword(const QString &conninfo)
+{
+    char *error = nullptr;
+    const QByteArray info = conninfo.toUtf8();
+    PQconninfoOption *options = PQconninfoParse(info.constData(), &error);
+    if (!options) {
+        const QString cause = serverText(error);
+        PQfreemem(error);
+        return fail(ErrorCode::InvalidArgument,
+            tr("\"%1\" is not a PostgreSQL connection string.").arg(conninfo), cause);
+    }
+    QStringList pairs;
+    for (PQconninfoOption *o = options; o->keyword; ++o) {
+        if (!o->val || qstrcmp(o->keyword, "password") == 0)
+            continue;
+        QString value = QString::fromUtf8(o->val);
+        value.replace(QLatin1String("\\"), QLatin1String("\\\\"));
+        value.replace(QLatin1String("'"), QLatin1String("\\'"));
+        pairs << QStringLiteral("%1='%2'").arg(QLatin1String(o->keyword), value);
+    }
+    PQconninfoFree(options);
+    return pairs.join(QLatin1Char(' '));
+}
+
+Status ServerConnection::exec(const QString &sql)
+{
+    auto r = query(sql);
+    if (!r)
+        return std::unexpected(r.error());
+    return {};
+}
+
+Result<ServerResult> ServerConnection::query(const QString &sql, const QList<QByteArray> &params)
+{
+    const QByteArray text = sql.toUtf8();
+    std::vector<const char *> values;
+    values.reserve(size_t(params.size()));
+    for (const QByteArray &p : params)
+        values.push_back(p.isNull() ? nullptr : p.constData());
+    PGresult *raw = params.isEmpty()
+        ? PQexec(m_conn.get(), text.constData())
+        : PQexecParams(m_conn.get(), text.constData(), int(params.size()), nullptr, values.data(),
+            nullptr, nullptr, 0);
+    ServerResult result;
+    result.m_result.reset(raw);
+    const ExecStatusType status = raw ? PQresultStatus(raw) : PGRES_FATAL_ERROR;
+    if (status == PGRES_COMMAND_OK || status == PGRES_TUPLES_OK)
+        return result;
+    const QByteArray state = raw ? QByteArray(PQresultErrorField(raw, PG_DIAG_SQLSTATE)) : "08006";
+    const QString cause =
+        serverText(raw ? PQresultErrorMessage(raw) : PQerrorMessage(m_conn.get()));
+    const ErrorCode code =
+        PQstatus(m_conn.get()) != CONNECTION_OK ? ErrorCode::Io : codeForState(state);
+    QString message;
+    switch (code) {
+    case ErrorCode::NotAllowed:
+        message = tr("The server %1 does not allow this for the role %2.").arg(describe(), user());
+        break;
+    case ErrorCode::Constraint:
+        message = tr("The server %1 refused a row that breaks a rule of the team project.")
+                      .arg(describe());
+        break;
+    case ErrorCode::Io:
+        message = tr("The connection to the server %1 was lost.").arg(describe());
+        break;
+    default:
+        message = tr("The server %1 could not run a statement.").arg(describe());
+    }
+    return fail(code, message, cause);
+}
+
+Status ServerConnection::run(const QString &sql, const QList<QByteArray> &params)
+{
+    auto r = query(sql, params);
+    if (!r)
+        return std::unexpected(r.error());
+    return {};
+}
+
+QString ServerConnection::quotedIdentifier(const QString &name) const
+{
+    const QByteArray utf8 = name.toUtf8();
+    char *quoted = PQescapeIdentifier(m_conn.get(), utf8.constData(), size_t(utf8.size()));
+    const QString out = QString::fromUtf8(quoted ? quoted : "");
+    PQfreemem(quoted);
+    return out;
+}
+
+QString ServerConnection::quotedLiteral(const QString &value) const
+{
+    const QByteArray utf8 = value.toUtf8();
+    char *quoted = PQescapeLiteral(m_conn.get(), utf8.constData(), size_t(utf8.size()));
+    const QString out = QString::fromUtf8(quoted ? quoted : "");
+    PQfreemem(quoted);
+    return out;
+}
+
+Result<QString> ServerConnection::passwordVerifier(
+    const QString &role, const QString &password) const
+{
+    const QByteArray pw = password.toUtf8();
+    const QByteArray user = role.toUtf8();
+    char *verifier =
+        PQencryptPasswordConn(m_conn.get(), pw.constData(), user.constData(), "scram-sha-256");
+    if (!verifier)
+        return fail(ErrorCode::Internal,
+            tr("Could not make a SCRAM verifier for the role %1.").arg(role),
+            serverText(PQerrorMessage(m_conn.get())));
+    const QString out = QString::fromUtf8(verifier);
+    PQfreemem(verifier);
+    return out;
+}
+
+QString ServerConnection::host() const
+{
+    return serverText(PQhost(m_conn.get()));
+}
+
+QString ServerConnection::port() const
+{
+    return serverText(PQport(m_conn.get()));
+}
+
+QString ServerConnection::database() const
+{
+    return serverText(PQdb(m_conn.get()));
+}
+
+QString ServerConnection::user() const
+{
+    return serverText(PQuser(m_conn.get()));
+}
+
+QString ServerConnection::describe() const
+{
+    return QStringLiteral("%1@%2:%3/%4").arg(user(), host(), port(), database());
+}
+
+} // namespace fourfold

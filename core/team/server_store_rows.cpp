@@ -1,0 +1,112 @@
+#include "core/team/server_store_rows.h"
+
+#include "core/team/server_store_connection.h"
+
+#include <QString>
+
+namespace fourfold {
+
+namespace {
+
+// The columns a row brings (everything but the change stamp and the event's own id).
+const char *columnsOf(ServerTable table)
+{
+    switch (table) {
+    case ServerTable::Person:
+        return "uuid, name, pseudonym, role, created_at, deleted";
+    case ServerTable::CodebookVersion:
+        return "uuid, number, created_at, created_by, note, content";
+    case ServerTable::Article:
+        return "uuid, external_id, title, outlet, published, language, text, length, sha256, "
+               "metadata, imported_at, deleted, paragraphs, sentences, tokens";
+    case ServerTable::Assignment:
+        return "uuid, article, coder, phase, status, created_at, deleted, active_seconds";
+    case ServerTable::Annotation:
+        return "uuid, article, coder, function, start, \"end\", quote, attributes, note, "
+               "confidence, codebook_version, phase, created_at, modified_at, deleted";
+    case ServerTable::Link:
+        return "uuid, source, target, coder, type, created_at, deleted";
+    case ServerTable::Judgement:
+        return "uuid, article, coder, item, value, codebook_version, phase, created_at, "
+               "modified_at, deleted";
+    case ServerTable::GoldAnnotation:
+        return "uuid, article, function, start, \"end\", quote, attributes, decided_by, "
+               "decided_at, rationale, deleted";
+    case ServerTable::GoldSource:
+        return "gold, annotation";
+    case ServerTable::GoldJudgement:
+        return "uuid, article, item, value, decided_by, decided_at, rationale, deleted";
+    case ServerTable::GoldRejection:
+        return "uuid, annotation, decided_by, decided_at, rationale, deleted";
+    case ServerTable::Event:
+        return "source, source_id, at, person, action, object_type, object_uuid, detail";
+    }
+    return "";
+}
+
+} // namespace
+
+const char *serverTableName(ServerTable table)
+{
+    switch (table) {
+    case ServerTable::Person:
+        return "person";
+    case ServerTable::CodebookVersion:
+        return "codebook_version";
+    case ServerTable::Article:
+        return "article";
+    case ServerTable::Assignment:
+        return "assignment";
+    case ServerTable::Annotation:
+        return "annotation";
+    case ServerTable::Link:
+        return "link";
+    case ServerTable::Judgement:
+        return "judgement";
+    case ServerTable::GoldAnnotation:
+        return "gold_annotation";
+    case ServerTable::GoldSource:
+        return "gold_source";
+    case ServerTable::GoldJudgement:
+        return "gold_judgement";
+    case ServerTable::GoldRejection:
+        return "gold_rejection";
+    case ServerTable::Event:
+        return "event";
+    }
+    return "";
+}
+
+Status insertServerRows(ServerConnection &conn, ServerTable table, const QByteArrayList &rows)
+{
+    if (rows.isEmpty())
+        return {};
+    // Table and column names come from the lists above, never from data; the rows are one
+    // bound parameter (a JSON array) that jsonb_populate_recordset turns into typed rows.
+    const QString name = QLatin1String(serverTableName(table));
+    const QString columns = QLatin1String(columnsOf(table));
+    const QString sql = QStringLiteral("INSERT INTO fourfold.%1 (%2) SELECT %2 FROM "
+                                       "jsonb_populate_recordset(NULL::fourfold.%1, $1::jsonb)")
+                            .arg(name, columns);
+    QByteArray array;
+    array.reserve(rows.size() * 2 + 2);
+    array += '[';
+    for (qsizetype i = 0; i < rows.size(); ++i) {
+        if (i)
+            array += ',';
+        array += rows[i];
+    }
+    array += ']';
+    return conn.run(sql, {array});
+}
+
+Result<qint64> visibleServerRows(ServerConnection &conn, ServerTable table)
+{
+    auto r = conn.query(QStringLiteral("SELECT count(*) FROM fourfold.%1")
+                            .arg(QLatin1String(serverTableName(table))));
+    if (!r)
+        return std::unexpected(r.error());
+    return r->integer(0, 0);
+}
+
+} // namespace fourfold

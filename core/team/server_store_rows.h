@@ -1,0 +1,42 @@
+#pragma once
+// Writing shared rows to a team project's server: each row is a JSON object whose keys are the
+// server table's column names (core/store/shared_rows.h and the coder objects of
+// core/store/copy_tables.h, in portable form). Rows go in batches, one statement per batch.
+
+#include "core/model/error.h"
+
+#include <QByteArray>
+#include <QByteArrayList>
+
+namespace fourfold {
+
+class ServerConnection;
+
+// The server's tables of shared rows.
+enum class ServerTable {
+    Person,
+    CodebookVersion,
+    Article,
+    Assignment,
+    Annotation,
+    Link,
+    Judgement,
+    GoldAnnotation,
+    GoldSource,
+    GoldJudgement,
+    GoldRejection,
+    Event,
+};
+
+// The table's name in the schema "fourfold".
+const char *serverTableName(ServerTable table);
+
+// Inserts `rows` (compact JSON objects, UTF-8) into `table` in one statement. Keys the table does
+// not have are ignored, missing ones take the column's default; the change number is the
+// server's. Fails with the server's error (Constraint, NotAllowed …).
+Status insertServerRows(ServerConnection &conn, ServerTable table, const QByteArrayList &rows);
+
+// How many rows of `table` the connected role may see.
+Result<qint64> visibleServerRows(ServerConnection &conn, ServerTable table);
+
+} // namespace fourfold

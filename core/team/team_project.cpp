@@ -1,0 +1,335 @@
+#include "core/team/team_project.h"
+
+#include "core/project/coder_copies.h"
+#include "core/project/project.h"
+#include "core/store/coder_table.h"
+#include "core/store/copy_tables.h"
+#include "core/store/project_tables.h"
+#include "core/store/shared_rows.h"
+#include "core/store/store_util.h"
+#include "core/team/server_store_connection.h"
+#include "core/team/server_store_roles.h"
+#include "core/team/server_store_rows.h"
+#include "core/team/server_store_schema.h"
+
+#include <QCoreApplication>
+#include <QDir>
+#include <QFile>
+#include <QFileInfo>
+#include <QHash>
+#include <QRandomGenerator>
+#include <QRegularExpression>
+#include <QSaveFile>
+
+#include <algorithm>
+
+namespace fourfold {
+
+namespace {
+
+QString tr(const char *text)
+{
+    return QCoreApplication::translate("TeamProject", text);
+}
+
+// Rows go to the server in batches: one statement per table and about a megabyte of JSON.
+class RowBatch
+{
+public:
+    explicit RowBatch(ServerConnection &conn)
+        : m_conn(conn)
+    { }
+
+    Status add(ServerTable table, QByteArray json)
+    {
+        if (!m_rows.isEmpty() && table != m_table)
+            FOURFOLD_TRY_STATUS(flush());
+        m_table = table;
+        m_bytes += json.size();
+        m_rows.push_back(std::move(json));
+        if (m_bytes > (1 << 20) || m_rows.size() >= 2000)
+            return flush();
+        return {};
+    }
+
+    Status flush()
+    {
+        if (m_rows.isEmpty())
+            return {};
+        auto st = insertServerRows(m_conn, m_table, m_rows);
+        m_rows.clear();
+        m_bytes = 0;
+        return st;
+    }
+
+private:
+    ServerConnection &m_conn;
+    ServerTable m_table = ServerTable::Person;
+    QByteArrayList m_rows;
+    qint64 m_bytes = 0;
+};
+
+// A password of 24 letters and digits (about 143 bits) from the system's random source.
+QString newPassword()
+{
+    static constexpr char kAlphabet[] =
+        "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789";
+    QString out;
+    for (int i = 0; i < 24; ++i)
+        out += QLatin1Char(kAlphabet[QRandomGenerator::system()->bounded(62)]);
+    return out;
+}
+
+// A field of a password file: ':' and '\' escaped with '\' (PostgreSQL 15 documentation,
+// 34.16 "The Password File").
+QString pgpassField(QString value)
+{
+    value.replace(QLatin1String("\\"), QLatin1String("\\\\"));
+    value.replace(QLatin1String(":"), QLatin1String("\\:"));
+    return value;
+}
+
+// The file name for a person's password file: the pseudonym when it makes a plain file name,
+// else the role's name (letters, digits and _ only).
+QString passwordFileName(const QString &pseudonym, const QString &role)
+{
+    static const QRegularExpression plain(QStringLiteral("^[A-Za-z0-9_-][A-Za-z0-9._-]*$"));
+    return (plain.match(pseudonym).hasMatch() ? pseudonym : role) + QStringLiteral(".pgpass");
+}
+
+// Writes `text` to `path` readable and writable by its owner only.
+Status writePrivateFile(const QString &path, const QByteArray &text)
+{
+    QFile file(path);
+    if (!file.open(QIODevice::WriteOnly | QIODevice::NewOnly)
+        || !file.setPermissions(QFileDevice::ReadOwner | QFileDevice::WriteOwner)
+        || file.write(text) != text.size() || !file.flush()) {
+        file.remove();
+        return fail(ErrorCode::Io, tr("Could not write the password file %1.").arg(path),
+            file.errorString());
+    }
+    return {};
+}
+
+// Creates `dir` with mode 0700, or takes an existing empty one (and sets 0700).
+Status prepareCredentialsDir(const QString &dir, bool *created)
+{
+    QFileInfo info(dir);
+    *created = false;
+    if (info.isSymLink())
+        return fail(ErrorCode::InvalidArgument,
+            tr("%1 is a symbolic link; name a new folder for the password files.").arg(dir));
+    if (info.exists()) {
+        if (!info.isDir()
+            || !QDir(dir).isEmpty(
+                QDir::AllEntries | QDir::NoDotAndDotDot | QDir::Hidden | QDir::System))
+            return fail(ErrorCode::Duplicate,
+                tr("%1 is not an empty folder; name a new folder for the password files.")
+                    .arg(dir));
+    } else {
+        if (!QDir().mkpath(dir))
+            return fail(ErrorCode::Io, tr("Could not create the folder %1.").arg(dir));
+        *created = true;
+    }
+    if (!QFile::setPermissions(
+            dir, QFileDevice::ReadOwner | QFileDevice::WriteOwner | QFileDevice::ExeOwner))
+        return fail(ErrorCode::Io, tr("Could not make %1 private to its owner.").arg(dir));
+    return {};
+}
+
+struct PlannedLogin {
+    Coder person;
+    QString role;
+    QString password;
+    QString file;
+};
+
+} // namespace
+
+Result<PublishReport> TeamProject::publish(Project &project, const QString &server,
+    const QString &credentialsDir, const QString &leadPseudonym)
+{
+    auto copy = CoderCopies::copyInfo(project);
+    if (!copy)
+        return std::unexpected(copy.error());
+    if (*copy)
+        return fail(ErrorCode::Unsupported,
+            tr("%1 is a coder copy; publish the main project.").arg(project.path()));
+    auto people = store::coders(project.m_db);
+    if (!people)
+        return std::unexpected(people.error());
+    if (people->empty())
+        return fail(ErrorCode::InvalidArgument,
+            tr("%1 has no people; add the lead and the coders before publishing it.")
+                .arg(project.path()));
+    QStringList leads;
+    for (const Coder &c : *people)
+        if (c.role == CoderRole::Lead)
+            leads << c.pseudonym;
+    QString lead = leadPseudonym;
+    if (lead.isEmpty() && leads.size() == 1)
+        lead = leads.first();
+    if (!leads.contains(lead))
+        return fail(ErrorCode::InvalidArgument,
+            lead.isEmpty()
+                ? tr("%1 has several leads (%2); name the one publishing it.")
+                      .arg(project.path(), leads.join(QStringLiteral(", ")))
+                : tr("%1 has no lead with the pseudonym %2 (leads: %3).")
+                      .arg(project.path(), lead,
+                          leads.isEmpty() ? tr("none") : leads.join(QStringLiteral(", "))));
+    auto recordable = ServerConnection::withoutPassword(server);
+    if (!recordable)
+        return std::unexpected(recordable.error());
+
+    auto conn = ServerConnection::open(server);
+    if (!conn)
+        return std::unexpected(conn.error());
+    PublishReport report;
+    report.server = conn->describe();
+    report.schemaVersion = kServerSchemaVersion;
+    report.credentialsDir = QFileInfo(credentialsDir).absoluteFilePath();
+
+    // One login role per live person; two pseudonyms must not make the same role name.
+    std::vector<PlannedLogin> logins;
+    QHash<QString, QString> pseudonymOfRole;
+    for (const Coder &c : *people) {
+        const QString role = personRole(conn->database(), c.pseudonym);
+        if (pseudonymOfRole.contains(role))
+            return fail(ErrorCode::Duplicate,
+                tr("The pseudonyms %1 and %2 make the same login role %3; rename one of them.")
+                    .arg(pseudonymOfRole.value(role), c.pseudonym, role));
+        pseudonymOfRole.insert(role, c.pseudonym);
+        logins.push_back({c, role, newPassword(),
+            QDir(report.credentialsDir).filePath(passwordFileName(c.pseudonym, role))});
+    }
+
+    bool createdDir = false;
+    FOURFOLD_TRY_STATUS(prepareCredentialsDir(report.credentialsDir, &createdDir));
+    auto undoFiles = [&] {
+        for (const PlannedLogin &l : logins)
+            QFile::remove(l.file);
+        if (createdDir)
+            QDir().rmdir(report.credentialsDir);
+    };
+    auto abandon = [&](const Error &e) -> Result<PublishReport> {
+        (void)conn->exec(QStringLiteral("ROLLBACK"));
+        undoFiles();
+        return std::unexpected(e);
+    };
+
+    if (auto st = conn->exec(QStringLiteral("BEGIN")); !st)
+        return abandon(st.error());
+    auto version = serverSchemaVersion(*conn);
+    if (!version)
+        return abandon(version.error());
+    if (*version != 0)
+        return abandon(fail(ErrorCode::Duplicate,
+            tr("The database %1 holds a team project already; publish into an empty database.")
+                .arg(report.server))
+                           .error());
+    if (auto st = prepareServerSchema(*conn); !st)
+        return abandon(st.error());
+    const QString group = teamGroupRole(conn->database());
+    if (auto st = createTeamGroup(*conn, group); !st)
+        return abandon(st.error());
+
+    // The shared rows, references first.
+    RowBatch batch(*conn);
+    const Database &db = project.m_db;
+    auto sendKind = [&](store::SharedKind kind, ServerTable table, qint64 *count) {
+        return store::forEachSharedRow(db, kind, [&](const QByteArray &json) {
+            if (count)
+                ++*count;
+            return batch.add(table, json);
+        });
+    };
+    qint64 goldSources = 0;
+    Status sent = sendKind(store::SharedKind::Person, ServerTable::Person, &report.people);
+    if (sent)
+        sent = sendKind(store::SharedKind::CodebookVersion, ServerTable::CodebookVersion,
+            &report.codebookVersions);
+    if (sent)
+        sent = sendKind(store::SharedKind::Article, ServerTable::Article, &report.articles);
+    // Each person's own objects in the portable form coder copies merge by.
+    for (const PlannedLogin &l : logins) {
+        if (!sent)
+            break;
+        auto rows = store::portableRows(db, l.person.uuid);
+        if (!rows) {
+            sent = std::unexpected(rows.error());
+            break;
+        }
+        for (const store::PortableRow &row : *rows) {
+            QJsonObject content = row.content;
+            content.insert(QStringLiteral("uuid"), row.uuid);
+            ServerTable table = ServerTable::Annotation;
+            if (row.type == QLatin1String("assignment")) {
+                table = ServerTable::Assignment;
+                content.insert(QStringLiteral("active_seconds"), row.seconds);
+                ++report.assignments;
+            } else if (row.type == QLatin1String("annotation")) {
+                ++report.annotations;
+            } else if (row.type == QLatin1String("judgement")) {
+                table = ServerTable::Judgement;
+                ++report.judgements;
+            } else {
+                table = ServerTable::Link;
+                content.insert(QStringLiteral("coder"), l.person.uuid);
+                ++report.links;
+            }
+            sent = batch.add(table, store::toJsonText(content).toUtf8());
+            if (!sent)
+                break;
+        }
+    }
+    if (sent)
+        sent =
+            sendKind(store::SharedKind::GoldAnnotation, ServerTable::GoldAnnotation, &report.gold);
+    if (sent)
+        sent = sendKind(store::SharedKind::GoldSource, ServerTable::GoldSource, &goldSources);
+    if (sent)
+        sent = sendKind(store::SharedKind::GoldJudgement, ServerTable::GoldJudgement, &report.gold);
+    if (sent)
+        sent = sendKind(store::SharedKind::GoldRejection, ServerTable::GoldRejection, &report.gold);
+    if (sent)
+        sent = sendKind(store::SharedKind::Event, ServerTable::Event, &report.events);
+    if (sent)
+        sent = batch.flush();
+    if (!sent)
+        return abandon(sent.error());
+
+    // Logins last: each password is written to its file before the server takes its verifier,
+    // and the files go again if the transaction does not commit.
+    for (const PlannedLogin &l : logins) {
+        const QString line =
+            QStringLiteral("%1:%2:%3:%4:%5\n")
+                .arg(pgpassField(conn->host()), pgpassField(conn->port()),
+                    pgpassField(conn->database()), pgpassField(l.role), pgpassField(l.password));
+        if (auto st = writePrivateFile(l.file, line.toUtf8()); !st)
+            return abandon(st.error());
+        auto verifier = conn->passwordVerifier(l.role, l.password);
+        if (!verifier)
+            return abandon(verifier.error());
+        if (auto st = createPersonLogin(
+                *conn, l.role, *verifier, group, l.person.uuid, l.person.role == CoderRole::Lead);
+            !st)
+            return abandon(st.error());
+        report.logins.push_back(
+            {l.person.pseudonym, l.role, l.person.role == CoderRole::Lead, l.file});
+    }
+    if (auto st = conn->exec(QStringLiteral("COMMIT")); !st)
+        return abandon(st.error());
+
+    // The server holds the project now; the file records where, and whose working file it is.
+    if (auto st = store::setSetting(project.m_db, serverSettingKey(), *recordable); !st) {
+        Error e = st.error();
+        e.message = tr("The team project is on %1, but %2 could not record it: %3")
+                        .arg(report.server, project.path(), e.message);
+        return std::unexpected(e);
+    }
+    if (auto st = store::setSetting(project.m_db, pseudonymSettingKey(), lead); !st)
+        return std::unexpected(st.error());
+    return report;
+}
+
+} // namespace fourfold

@@ -1,0 +1,69 @@
+#pragma once
+// Team projects on a PostgreSQL server (design.md §9): the facade the front ends use. The
+// server's schema, roles and rows are in the server_store_* files; the project file is read
+// through core/store. No password is ever written into a project file: people log in with
+// libpq's password files.
+
+#include "core/model/error.h"
+
+#include <QString>
+
+#include <vector>
+
+namespace fourfold {
+
+class Project;
+
+// One person's login on the server, as publish made it.
+struct TeamLogin {
+    QString pseudonym;
+    QString role; // the PostgreSQL login role
+    bool lead = false;
+    QString passwordFile; // libpq password file (pgpass format, mode 0600) with the password
+};
+
+struct PublishReport {
+    QString server; // "user@host:port/database" of the publishing login
+    int schemaVersion = 0; // the server schema version written
+    QString credentialsDir;
+    std::vector<TeamLogin> logins; // by pseudonym
+    qint64 people = 0;
+    qint64 articles = 0;
+    qint64 codebookVersions = 0;
+    qint64 assignments = 0;
+    qint64 annotations = 0;
+    qint64 links = 0;
+    qint64 judgements = 0;
+    qint64 gold = 0; // gold spans, answers and rejections
+    qint64 events = 0;
+};
+
+class TeamProject
+{
+public:
+    TeamProject() = delete;
+
+    // The project file's settings keys for its team project: the server's connection string
+    // (without any password) and the pseudonym of the person whose working file it is.
+    static QString serverSettingKey() { return QStringLiteral("team.server"); }
+    static QString pseudonymSettingKey() { return QStringLiteral("team.pseudonym"); }
+
+    // Creates the team project of `project` on the empty database `server` (a libpq connection
+    // string; the login must own the database and may create roles): the schema, a group role
+    // and one login role per live person with a random password, the row-level security
+    // policies, and every shared row of the file. All of it in one transaction: on any failure
+    // the server is left as it was. Each person's password goes into "<pseudonym>.pgpass" in
+    // `credentialsDir` (created with mode 0700; it must be new or empty; the files are 0600).
+    // `project` then records the server and `leadPseudonym` (its lead; the only lead when
+    // empty) in its settings and becomes the lead's working file.
+    // Fails with: Unsupported for a coder copy; InvalidArgument for an unknown lead or several
+    // leads without one named, or a project without people; Duplicate when the database holds
+    // a team project already, a role exists, two pseudonyms make the same role name, or
+    // `credentialsDir` is not empty; Io when the folder cannot be written or the server cannot
+    // be reached; NotAllowed when the login may not create roles or schemas; the server's error
+    // otherwise.
+    static Result<PublishReport> publish(Project &project, const QString &server,
+        const QString &credentialsDir, const QString &leadPseudonym = {});
+};
+
+} // namespace fourfold
