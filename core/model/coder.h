@@ -20,6 +20,7 @@ struct Coder {
     QString name; // display name, shown in the program only
     QString pseudonym; // e.g. "C01": the only identity written to exports
     CoderRole role = CoderRole::Coder;
+    bool disabled = false; // keeps their codings; takes no new assignments and cannot sign in
 };
 
 } // namespace fourfold

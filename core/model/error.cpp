@@ -72,6 +72,8 @@ QString errorCodeName(ErrorCode code)
         return QStringLiteral("unsupported");
     case ErrorCode::Cancelled:
         return QStringLiteral("cancelled");
+    case ErrorCode::NotAllowed:
+        return QStringLiteral("not-allowed");
     case ErrorCode::Internal:
         return QStringLiteral("internal");
     }

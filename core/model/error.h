@@ -20,6 +20,7 @@ enum class ErrorCode {
     NewerSchema, // the project file was written by a newer Fourfold
     Unsupported, // a valid request this version cannot serve
     Cancelled, // the user stopped a long operation; nothing was changed
+    NotAllowed, // the person may not do this (not a lead, a wrong passphrase, a coder copy)
     Internal, // a bug: an invariant did not hold
 };
 

@@ -213,6 +213,14 @@ Result<Codebook> Project::codebook() const
 
 Status Project::assign(ArticleId article, CoderId coder, Phase phase)
 {
+    auto people = store::coders(m_db);
+    if (!people)
+        return std::unexpected(people.error());
+    const auto who = std::ranges::find(*people, coder, &Coder::id);
+    if (who != people->end() && who->disabled)
+        return fail(ErrorCode::InvalidArgument,
+            tr("%1 is disabled and takes no new assignments; enable them first.")
+                .arg(who->pseudonym));
     auto sp = Savepoint::begin(m_db);
     if (!sp)
         return std::unexpected(sp.error());

@@ -81,8 +81,9 @@ public:
     Result<std::vector<ArticleId>> searchArticles(const QString &query) const;
 
     // --- coders and codebook --------------------------------------------------------------
-    // Adds a coder; Duplicate if the pseudonym is taken, InvalidArgument if name or pseudonym
-    // is empty.
+    // Adds a coder for a program building a project (tests, build-sample, imports); Duplicate if
+    // the pseudonym is taken, InvalidArgument if name or pseudonym is empty. A person adding
+    // someone goes through People::add, which checks who asks and takes a lead's passphrase.
     Result<CoderId> addCoder(const QString &name, const QString &pseudonym, CoderRole role);
     Result<std::vector<Coder>> coders() const;
     Result<std::optional<Coder>> coderByPseudonym(const QString &pseudonym) const;
@@ -149,6 +150,7 @@ private:
     friend class StudyDesign;
     friend class CodingScope;
     friend class TeamProject;
+    friend class People;
 
     explicit Project(Database db)
         : m_db(std::move(db))

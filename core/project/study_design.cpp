@@ -106,7 +106,7 @@ Result<Names> loadNames(const Database &db, const Project &project)
 }
 
 // The coders named by `pseudonyms`: NotFound for an unknown one, InvalidArgument for one named
-// twice.
+// twice or a disabled one.
 Result<std::vector<Coder>> resolveCoders(const Names &names, const QStringList &pseudonyms)
 {
     std::vector<Coder> out;
@@ -117,6 +117,9 @@ Result<std::vector<Coder>> resolveCoders(const Names &names, const QStringList &
             return fail(ErrorCode::NotFound, tr("There is no coder \"%1\" in the project.").arg(p));
         if (seen.contains(p))
             return fail(ErrorCode::InvalidArgument, tr("The coder \"%1\" is named twice.").arg(p));
+        if (it->disabled) // keeps their codings, takes no new work
+            return fail(ErrorCode::InvalidArgument,
+                tr("%1 is disabled and takes no new assignments; enable them first.").arg(p));
         seen.insert(p);
         out.push_back(*it);
     }
@@ -790,6 +793,10 @@ Status StudyDesign::commitPlan(
         if (coder == names->coderByPseudonym.constEnd())
             return fail(
                 ErrorCode::NotFound, tr("There is no coder \"%1\" in the project.").arg(row.coder));
+        if (coder->disabled)
+            return fail(ErrorCode::InvalidArgument,
+                tr("%1 is disabled and takes no new assignments; enable them first.")
+                    .arg(row.coder));
         const ArticleId articleId = names->articles[size_t(*article)].id;
         const QString key = QStringLiteral("%1/%2/%3")
                                 .arg(articleId.value)

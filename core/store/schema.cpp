@@ -305,8 +305,17 @@ CREATE INDEX annotation_coded ON annotation(article_id, coder_id, phase) WHERE d
 CREATE INDEX judgement_coded ON judgement(article_id, coder_id, phase) WHERE deleted = 0;
 )sql";
 
+// Migration 7: who may be a lead and who takes part. A lead's passphrase is kept only as a
+// libsodium Argon2id string (algorithm, parameters, salt and hash; '' = none set yet: a lead of an
+// older file sets one the first time they are chosen). A disabled person keeps their codings and
+// takes no new assignments.
+constexpr const char *kMigration7 = R"sql(
+ALTER TABLE coder ADD COLUMN passphrase_hash TEXT NOT NULL DEFAULT '';
+ALTER TABLE coder ADD COLUMN disabled INTEGER NOT NULL DEFAULT 0 CHECK (disabled IN (0, 1));
+)sql";
+
 constexpr std::array<const char *, kSchemaVersion> kMigrations {
-    kMigration1, kMigration2, kMigration3, kMigration4, kMigration5, kMigration6};
+    kMigration1, kMigration2, kMigration3, kMigration4, kMigration5, kMigration6, kMigration7};
 // A migration left out of the list would silently do nothing: every slot must hold one.
 static_assert(std::ranges::none_of(kMigrations, [](const char *m) { return m == nullptr; }),
     "kSchemaVersion is higher than the number of migrations in kMigrations");

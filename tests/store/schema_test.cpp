@@ -216,3 +216,39 @@ TEST_CASE("a version-4 file gains the study-size indexes with its rows kept")
     }
     CHECK(detail.contains(QStringLiteral("USING INDEX gold_annotation_by_article")));
 }
+
+TEST_CASE("a version-6 file gains empty passphrase hashes and enabled people")
+{
+    QTemporaryDir dir;
+    const QString path = dir.filePath(QStringLiteral("v6.fourfold"));
+    {
+        Database db = openNew(path);
+        REQUIRE(createSchemaAtVersion(db, 6));
+        REQUIRE(db.exec(QStringLiteral("INSERT INTO coder (uuid, name, pseudonym, role, "
+                                       "created_at) VALUES ('l', 'Test lead', 'L01', 'lead', 't'),"
+                                       "('c', 'Test coder', 'C01', 'coder', 't');")));
+    }
+    Database db = openNew(path);
+    QString backup;
+    REQUIRE(prepareSchema(db, &backup));
+    CHECK(backup == path + QStringLiteral(".v6.bak"));
+    CHECK(QFile::exists(backup));
+    CHECK(scalarOf(db, QStringLiteral("PRAGMA user_version")) == kSchemaVersion);
+    // Both people kept, neither with a passphrase yet (a lead sets one when first chosen), both
+    // enabled.
+    CHECK(scalarOf(db,
+              QStringLiteral("SELECT count(*) FROM coder WHERE passphrase_hash = '' AND disabled "
+                             "= 0 AND pseudonym IN ('L01', 'C01')"))
+        == 2);
+    // The flag takes 0 or 1 only.
+    auto bad = db.exec(QStringLiteral("UPDATE coder SET disabled = 2 WHERE pseudonym = 'C01'"));
+    REQUIRE_FALSE(bad);
+    CHECK(bad.error().code == ErrorCode::Constraint);
+    // The backup is the version-6 file, without the new columns.
+    Database old = openNew(backup);
+    CHECK(scalarOf(old, QStringLiteral("PRAGMA user_version")) == 6);
+    CHECK(scalarOf(old,
+              QStringLiteral(
+                  "SELECT count(*) FROM pragma_table_info('coder') WHERE name = 'passphrase_hash'"))
+        == 0);
+}
