@@ -18,7 +18,10 @@
 #include <QJsonArray>
 #include <QSaveFile>
 
+#include <unistd.h>
+
 #include <algorithm>
+#include <cstdio>
 #include <map>
 
 namespace fourfold::cli {
@@ -313,6 +316,14 @@ int runFrames(const QStringList &arguments)
         frames::StabilityOptions stabilityOptions;
         stabilityOptions.replicates = replicates;
         stabilityOptions.seed = seedValue;
+        // Progress on a terminal only (a script reading stderr sees errors alone); Ctrl-C stops.
+        const bool terminal = ::isatty(STDERR_FILENO) == 1;
+        if (terminal)
+            stabilityOptions.progress = [replicates](int done) {
+                std::fprintf(stderr, "\rstability: replicate %d of %d", done, replicates);
+                if (done == replicates)
+                    std::fputc('\n', stderr);
+            };
         auto computed = frames::clusterStability(
             input.matrix, partition, twoStepMethod(analysis.k), stabilityOptions);
         if (!computed)
