@@ -1,4 +1,4 @@
-// fourfold-cli team: team projects on a PostgreSQL server (core/team). "team publish" for now.
+// fourfold-cli team: team projects on a PostgreSQL server (core/team): publish and join.
 
 #include "app/cli/cli_output.h"
 #include "core/project/project.h"
@@ -103,6 +103,71 @@ int runTeamPublish(const QStringList &arguments)
     return ExitOk;
 }
 
+int runTeamJoin(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("team join");
+    QCommandLineParser parser;
+    const QCommandLineOption as(QStringLiteral("as"),
+        QCoreApplication::translate("cli", "Your pseudonym in the team project."),
+        QStringLiteral("PSEUDONYM"));
+    const QCommandLineOption outFile(QStringLiteral("out"),
+        QCoreApplication::translate("cli", "The working file to write (a new file)."),
+        QStringLiteral("FILE"));
+    const QCommandLineOption json(
+        QStringLiteral("json"), QCoreApplication::translate("cli", "Print the result as JSON."));
+    parser.addOptions({as, outFile, json});
+    parser.addPositionalArgument(QStringLiteral("URL"),
+        QCoreApplication::translate("cli",
+            "The team project's database with your login role, as a libpq connection string or "
+            "URI (postgresql://ROLE@HOST/DATABASE); the password from your password file "
+            "(PGPASSFILE=PSEUDONYM.pgpass or ~/.pgpass)."));
+    if (int rc = parseCommandLine(parser, command,
+            QCoreApplication::translate("cli",
+                "Write your working file of a team project: what your login role may read on the "
+                "server (for a coder: the codebook, your articles and your own codings)."),
+            arguments);
+        rc >= 0)
+        return rc;
+    if (parser.positionalArguments().size() != 1)
+        return usageError(
+            command, QCoreApplication::translate("cli", "expected exactly one server URL."));
+    if (!parser.isSet(as) || parser.value(as).trimmed().isEmpty())
+        return usageError(
+            command, QCoreApplication::translate("cli", "name yourself with --as PSEUDONYM."));
+    if (!parser.isSet(outFile) || parser.value(outFile).isEmpty())
+        return usageError(
+            command, QCoreApplication::translate("cli", "name the working file with --out FILE."));
+    auto result = TeamProject::join(
+        parser.positionalArguments().first(), parser.value(as).trimmed(), parser.value(outFile));
+    if (!result)
+        return report(result.error());
+    if (parser.isSet(json)) {
+        printJson(QJsonObject {{QStringLiteral("file"), result->path},
+            {QStringLiteral("server"), result->server},
+            {QStringLiteral("pseudonym"), result->pseudonym},
+            {QStringLiteral("lead"), result->lead},
+            {QStringLiteral("last_change"), result->lastChange},
+            {QStringLiteral("people"), result->people},
+            {QStringLiteral("articles"), result->articles},
+            {QStringLiteral("assignments"), result->assignments},
+            {QStringLiteral("annotations"), result->annotations},
+            {QStringLiteral("links"), result->links},
+            {QStringLiteral("judgements"), result->judgements},
+            {QStringLiteral("gold"), result->gold}});
+        return ExitOk;
+    }
+    out(QCoreApplication::translate("cli",
+        "Wrote %1, the working file of %2 from %3: %4 articles, %5 annotations, %6 links, %7 "
+        "article judgements (through change %8).")
+            .arg(result->path, result->pseudonym, result->server)
+            .arg(result->articles)
+            .arg(result->annotations)
+            .arg(result->links)
+            .arg(result->judgements)
+            .arg(result->lastChange));
+    return ExitOk;
+}
+
 } // namespace
 
 int runTeam(const QStringList &arguments)
@@ -110,10 +175,14 @@ int runTeam(const QStringList &arguments)
     const QString sub = arguments.size() > 1 ? arguments.at(1) : QString();
     if (sub == QLatin1String("publish"))
         return runTeamPublish(arguments.mid(1));
+    if (sub == QLatin1String("join"))
+        return runTeamJoin(arguments.mid(1));
     if (sub.isEmpty() || sub == QLatin1String("--help") || sub == QLatin1String("-h")) {
         out(QCoreApplication::translate("cli", "Usage: fourfold-cli team SUBCOMMAND [options]"));
         out(QCoreApplication::translate("cli",
             "  publish   Create the team project of a project file on a PostgreSQL server."));
+        out(QCoreApplication::translate(
+            "cli", "  join      Write your working file of a team project from its server."));
         return sub.isEmpty() ? ExitUsage : ExitOk;
     }
     return usageError(QStringLiteral("team"),

@@ -78,8 +78,9 @@ const std::map<QString, Command> &commands()
         {QStringLiteral("merge"),
             {QT_TRANSLATE_NOOP("cli", "Merge returned coder copies into the project."), runMerge}},
         {QStringLiteral("team"),
-            {QT_TRANSLATE_NOOP(
-                 "cli", "Team projects on a PostgreSQL server: publish a project (team publish)."),
+            {QT_TRANSLATE_NOOP("cli",
+                 "Team projects on a PostgreSQL server: publish a project, join one (team publish, "
+                 "team join)."),
                 runTeam}},
         {QStringLiteral("build-sample"),
             {QT_TRANSLATE_NOOP("cli", "Build the demo project from its source files."),

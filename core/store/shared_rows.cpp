@@ -2,6 +2,12 @@
 
 #include "core/store/store_util.h"
 
+#include <QCoreApplication>
+#include <QJsonValue>
+
+#include <cctype>
+#include <optional>
+
 namespace fourfold::store {
 
 namespace {
@@ -66,7 +72,126 @@ QString sharedRowSql(SharedKind kind)
     return {};
 }
 
+// "\x" + hex, as PostgreSQL writes a bytea and sharedRowSql reads a blob.
+std::optional<QByteArray> fromHexBytes(const QJsonValue &value)
+{
+    const QString text = value.toString();
+    if (!text.startsWith(QLatin1String("\\x")))
+        return std::nullopt;
+    const QByteArray hex = text.mid(2).toLatin1();
+    if (hex.size() % 2 != 0)
+        return std::nullopt;
+    for (char c : hex)
+        if (!std::isxdigit(static_cast<unsigned char>(c)))
+            return std::nullopt;
+    return QByteArray::fromHex(hex);
+}
+
+Status runJson(Database &db, const QString &sql, const QByteArray &json)
+{
+    auto stmt = db.prepare(sql);
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, QString::fromUtf8(json));
+    return stmt->run();
+}
+
 } // namespace
+
+Status writeSharedRow(Database &db, SharedKind kind, const QByteArray &json)
+{
+    const QJsonObject row = QJsonDocument::fromJson(json).object();
+    if (row.isEmpty())
+        return fail(ErrorCode::InvalidInput,
+            QCoreApplication::translate("SharedRows", "A shared row is not a JSON object."));
+    switch (kind) {
+    case SharedKind::Person:
+        return runJson(db,
+            QStringLiteral(
+                "INSERT INTO coder (uuid, name, pseudonym, role, created_at, deleted) SELECT "
+                "j->>'uuid', j->>'name', j->>'pseudonym', j->>'role', j->>'created_at', "
+                "j->>'deleted' FROM (SELECT ?1 AS j)"),
+            json);
+    case SharedKind::CodebookVersion:
+        return runJson(db,
+            QStringLiteral("INSERT INTO codebook_version (uuid, number, created_at, created_by, "
+                           "note, content) SELECT j->>'uuid', j->>'number', j->>'created_at', "
+                           "(SELECT id FROM coder WHERE uuid = j->>'created_by'), j->>'note', "
+                           "j->'content' FROM (SELECT ?1 AS j)"),
+            json);
+    case SharedKind::Article: {
+        const auto sentences = fromHexBytes(row.value(QLatin1String("sentences")));
+        const auto tokens = fromHexBytes(row.value(QLatin1String("tokens")));
+        if (!sentences || !tokens || sentences->size() % 8 != 0 || tokens->size() % 8 != 0)
+            return fail(ErrorCode::InvalidInput,
+                QCoreApplication::translate(
+                    "SharedRows", "The units of the article %1 are not pairs of 32-bit offsets.")
+                    .arg(row.value(QLatin1String("uuid")).toString()));
+        FOURFOLD_TRY_STATUS(runJson(db,
+            QStringLiteral("INSERT INTO article (uuid, external_id, title, outlet, published, "
+                           "language, text, length, sha256, metadata, imported_at, deleted) "
+                           "SELECT j->>'uuid', j->>'external_id', j->>'title', j->>'outlet', "
+                           "j->>'published', j->>'language', j->>'text', j->>'length', "
+                           "j->>'sha256', j->'metadata', j->>'imported_at', j->>'deleted' "
+                           "FROM (SELECT ?1 AS j)"),
+            json));
+        const qint64 id = db.lastInsertRowId();
+        FOURFOLD_TRY_STATUS(runJson(db,
+            QStringLiteral("INSERT INTO paragraph (article_id, idx, start, end, role) SELECT "
+                           "%1, p.key, p.value->>'start', p.value->>'end', p.value->>'role' "
+                           "FROM json_each(?1, '$.paragraphs') p")
+                .arg(id),
+            json));
+        auto units = db.prepare(
+            QStringLiteral("INSERT INTO article_units (article_id, sentence_count, token_count, "
+                           "sentences, tokens) VALUES (?1, ?2, ?3, ?4, ?5)"));
+        if (!units)
+            return std::unexpected(units.error());
+        units->bind(1, id)
+            .bind(2, qint64(sentences->size() / 8))
+            .bind(3, qint64(tokens->size() / 8))
+            .bind(4, *sentences)
+            .bind(5, *tokens);
+        return units->run();
+    }
+    case SharedKind::GoldAnnotation:
+        return runJson(db,
+            QStringLiteral(
+                "INSERT INTO gold_annotation (uuid, article_id, function, start, end, quote, "
+                "attributes, decided_by, decided_at, rationale, deleted) SELECT j->>'uuid', "
+                "(SELECT id FROM article WHERE uuid = j->>'article'), j->>'function', "
+                "j->>'start', j->>'end', j->>'quote', j->>'attributes', (SELECT id FROM coder "
+                "WHERE uuid = j->>'decided_by'), j->>'decided_at', j->>'rationale', j->>'deleted' "
+                "FROM (SELECT ?1 AS j)"),
+            json);
+    case SharedKind::GoldSource:
+        return runJson(db,
+            QStringLiteral("INSERT INTO gold_source (gold_id, annotation_id) SELECT (SELECT id "
+                           "FROM gold_annotation WHERE uuid = j->>'gold'), (SELECT id FROM "
+                           "annotation WHERE uuid = j->>'annotation') FROM (SELECT ?1 AS j)"),
+            json);
+    case SharedKind::GoldJudgement:
+        return runJson(db,
+            QStringLiteral(
+                "INSERT INTO gold_judgement (uuid, article_id, item_key, value, "
+                "decided_by, decided_at, rationale, deleted) SELECT j->>'uuid', "
+                "(SELECT id FROM article WHERE uuid = j->>'article'), j->>'item', "
+                "j->>'value', (SELECT id FROM coder WHERE uuid = j->>'decided_by'), "
+                "j->>'decided_at', j->>'rationale', j->>'deleted' FROM (SELECT ?1 AS j)"),
+            json);
+    case SharedKind::GoldRejection:
+        return runJson(db,
+            QStringLiteral("INSERT INTO gold_rejection (uuid, annotation_id, decided_by, "
+                           "decided_at, rationale, deleted) SELECT j->>'uuid', (SELECT id FROM "
+                           "annotation WHERE uuid = j->>'annotation'), (SELECT id FROM coder "
+                           "WHERE uuid = j->>'decided_by'), j->>'decided_at', j->>'rationale', "
+                           "j->>'deleted' FROM (SELECT ?1 AS j)"),
+            json);
+    case SharedKind::Event:
+        return {};
+    }
+    return {};
+}
 
 Status forEachSharedRow(
     const Database &db, SharedKind kind, const std::function<Status(const QByteArray &)> &visit)

@@ -38,5 +38,12 @@ enum class SharedKind {
 Status forEachSharedRow(
     const Database &db, SharedKind kind, const std::function<Status(const QByteArray &)> &visit);
 
+// Writes one shared row (JSON as forEachSharedRow hands it, or as a team project's server sends
+// it) into this file, mapping uuids to row ids; references the file lacks become NULL where the
+// column allows it (a codebook version's author) and fail with Constraint otherwise. Events are
+// not written. InvalidInput for a row that is not a JSON object or an article whose units are
+// not "\x" + hex.
+Status writeSharedRow(Database &db, SharedKind kind, const QByteArray &json);
+
 } // namespace store
 } // namespace fourfold

@@ -4,6 +4,8 @@
 
 #include <QString>
 
+#include <algorithm>
+
 namespace fourfold {
 
 namespace {
@@ -98,6 +100,26 @@ Status insertServerRows(ServerConnection &conn, ServerTable table, const QByteAr
     }
     array += ']';
     return conn.run(sql, {array});
+}
+
+Result<QByteArrayList> selectServerRows(
+    ServerConnection &conn, ServerTable table, qint64 *lastChange)
+{
+    const QString name = QLatin1String(serverTableName(table));
+    auto r =
+        conn.query(QStringLiteral("SELECT (to_jsonb(t) - 'change' - 'change_xact' - 'id')::text, "
+                                  "t.change FROM fourfold.%1 t ORDER BY t.change")
+                       .arg(name));
+    if (!r)
+        return std::unexpected(r.error());
+    QByteArrayList out;
+    out.reserve(r->rows());
+    for (int i = 0; i < r->rows(); ++i) {
+        out.push_back(r->bytes(i, 0));
+        if (lastChange)
+            *lastChange = std::max(*lastChange, r->integer(i, 1));
+    }
+    return out;
 }
 
 Result<qint64> visibleServerRows(ServerConnection &conn, ServerTable table)

@@ -36,6 +36,12 @@ const char *serverTableName(ServerTable table);
 // server's. Fails with the server's error (Constraint, NotAllowed …).
 Status insertServerRows(ServerConnection &conn, ServerTable table, const QByteArrayList &rows);
 
+// Every row of `table` the connected role may see, as compact JSON objects with the same keys
+// insertServerRows takes (no change stamp, no event id), in change order; `*lastChange` is
+// raised to the highest change number among them. Fails with the server's error.
+Result<QByteArrayList> selectServerRows(
+    ServerConnection &conn, ServerTable table, qint64 *lastChange);
+
 // How many rows of `table` the connected role may see.
 Result<qint64> visibleServerRows(ServerConnection &conn, ServerTable table);
 

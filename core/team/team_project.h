@@ -38,6 +38,21 @@ struct PublishReport {
     qint64 events = 0;
 };
 
+struct JoinReport {
+    QString path;
+    QString server; // "role@host:port/database"
+    QString pseudonym;
+    bool lead = false;
+    qint64 lastChange = 0; // the highest change number the file holds (a later pull starts after)
+    qint64 people = 0;
+    qint64 articles = 0;
+    qint64 assignments = 0;
+    qint64 annotations = 0;
+    qint64 links = 0;
+    qint64 judgements = 0;
+    qint64 gold = 0; // gold spans, answers and rejections
+};
+
 class TeamProject
 {
 public:
@@ -47,6 +62,8 @@ public:
     // (without any password) and the pseudonym of the person whose working file it is.
     static QString serverSettingKey() { return QStringLiteral("team.server"); }
     static QString pseudonymSettingKey() { return QStringLiteral("team.pseudonym"); }
+    // In a working file made by join: the highest server change number it holds.
+    static QString lastChangeSettingKey() { return QStringLiteral("team.last_change"); }
 
     // Creates the team project of `project` on the empty database `server` (a libpq connection
     // string; the login must own the database and may create roles): the schema, a group role
@@ -64,6 +81,19 @@ public:
     // otherwise.
     static Result<PublishReport> publish(Project &project, const QString &server,
         const QString &credentialsDir, const QString &leadPseudonym = {});
+
+    // Writes the new project file `outPath`: a person's working file of the team project on
+    // `server` (a libpq connection string naming the person's login role; the password from
+    // libpq's conventions), holding exactly what that role may read there, from one snapshot:
+    // for a coder the codebook, the coder alone, the articles assigned to them and their own
+    // assignments, spans, links and answers; for a lead everything but the event log. The file
+    // records the server (without a password), the pseudonym and the last change number.
+    // Fails with: Duplicate if `outPath` exists; NotFound when the database holds no team
+    // project; NewerSchema for a newer server; NotAllowed when the login is not a person of the
+    // team; InvalidArgument when the login is another person than `pseudonym`; Io, or the
+    // store's or server's error (no file is left behind).
+    static Result<JoinReport> join(
+        const QString &server, const QString &pseudonym, const QString &outPath);
 };
 
 } // namespace fourfold

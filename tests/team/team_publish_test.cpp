@@ -7,9 +7,8 @@
 #include "core/project/project.h"
 #include "core/store/project_tables.h"
 #include "core/team/team_project.h"
-#include "tests/copies/copies_fixture.h"
 #include "tests/support/cli_run.h"
-#include "tests/support/postgres_cluster.h"
+#include "tests/team/published_project.h"
 #include "tests/team/server_sql.h"
 
 #include <QDir>
@@ -24,42 +23,6 @@ using namespace fourfold;
 using namespace fourfold::test;
 
 namespace {
-
-// The CopiesFixture project (three coders, a lead, six assignments, eight spans, a link, two
-// answers, a gold span) published to a new database.
-struct PublishedProject : CopiesFixture {
-    PostgresCluster &cluster = PostgresCluster::shared();
-    PostgresCluster::TestDatabase db = cluster.newDatabase();
-    QString credentials = dir.filePath(QStringLiteral("credentials"));
-    PublishReport report;
-
-    PublishedProject()
-    {
-        auto r = TeamProject::publish(*main, db.adminConninfo, credentials);
-        INFO((r ? QString() : r.error().toString()).toStdString());
-        REQUIRE(r);
-        report = *r;
-    }
-
-    // A connection as the person `pseudonym`, with the password file publish wrote.
-    QString loginOf(const QString &pseudonym) const
-    {
-        for (const TeamLogin &l : report.logins)
-            if (l.pseudonym == pseudonym)
-                return QStringLiteral("host='%1' dbname='%2' user='%3' passfile='%4'")
-                    .arg(cluster.socketDir(), db.name, l.role, l.passwordFile);
-        FAIL("no login for " << pseudonym.toStdString());
-        return {};
-    }
-
-    QString uuidOf(const QString &pseudonym)
-    {
-        auto c = main->coderByPseudonym(pseudonym);
-        REQUIRE(c);
-        REQUIRE(c->has_value());
-        return (*c)->uuid;
-    }
-};
 
 const QStringList kCoderTables {QStringLiteral("assignment"), QStringLiteral("annotation"),
     QStringLiteral("link"), QStringLiteral("judgement")};

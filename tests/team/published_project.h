@@ -1,0 +1,48 @@
+#pragma once
+// The coder-copies test project (tests/copies/copies_fixture.h: three coders, a lead, six
+// assignments, eight spans, a link, two answers, a gold span) published to a new database of the
+// test program's throwaway cluster.
+
+#include "core/team/team_project.h"
+#include "tests/copies/copies_fixture.h"
+#include "tests/support/postgres_cluster.h"
+
+#include <catch2/catch.hpp>
+
+namespace fourfold::test {
+
+struct PublishedProject : CopiesFixture {
+    PostgresCluster &cluster = PostgresCluster::shared();
+    PostgresCluster::TestDatabase db = cluster.newDatabase();
+    QString credentials = dir.filePath(QStringLiteral("credentials"));
+    PublishReport report;
+
+    PublishedProject()
+    {
+        auto r = TeamProject::publish(*main, db.adminConninfo, credentials);
+        INFO((r ? QString() : r.error().toString()).toStdString());
+        REQUIRE(r);
+        report = *r;
+    }
+
+    // A connection as the person `pseudonym`, with the password file publish wrote.
+    QString loginOf(const QString &pseudonym) const
+    {
+        for (const TeamLogin &l : report.logins)
+            if (l.pseudonym == pseudonym)
+                return QStringLiteral("host='%1' dbname='%2' user='%3' passfile='%4'")
+                    .arg(cluster.socketDir(), db.name, l.role, l.passwordFile);
+        FAIL("no login for " << pseudonym.toStdString());
+        return {};
+    }
+
+    QString uuidOf(const QString &pseudonym)
+    {
+        auto c = main->coderByPseudonym(pseudonym);
+        REQUIRE(c);
+        REQUIRE(c->has_value());
+        return (*c)->uuid;
+    }
+};
+
+} // namespace fourfold::test
