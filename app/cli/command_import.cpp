@@ -78,9 +78,9 @@ int runImport(const QStringList &arguments)
     QCommandLineParser parser;
     const QCommandLineOption format(QStringLiteral("format"),
         QCoreApplication::translate("cli",
-            "Read every file as txt, html, jsonl, csv, feed (RSS or Atom) or newsxml (NITF or "
-            "NewsML-G2) (default: from each file's suffix; .xml and unknown suffixes from the "
-            "content)."),
+            "Read every file as txt, html, jsonl, csv, feed (RSS or Atom), newsxml (NITF or "
+            "NewsML-G2), docx or odt (default: from each file's suffix; .xml and unknown suffixes "
+            "from the content)."),
         QStringLiteral("FORMAT"));
     const QCommandLineOption language(QStringLiteral("language"),
         QCoreApplication::translate(
@@ -130,7 +130,8 @@ int runImport(const QStringList &arguments)
         if (!options.format)
             return usageError(command,
                 QCoreApplication::translate("cli",
-                    "unknown format \"%1\" (expected txt, html, jsonl, csv, feed or newsxml).")
+                    "unknown format \"%1\" (expected txt, html, jsonl, csv, feed, newsxml, docx "
+                    "or odt).")
                     .arg(parser.value(format)));
     }
     options.language = parser.value(language);

@@ -2,10 +2,12 @@
 
 #include "core/io/chunked_input.h"
 #include "core/io/csv_reader.h"
+#include "core/io/docx_reader.h"
 #include "core/io/feed_reader.h"
 #include "core/io/html_reader.h"
 #include "core/io/jsonl_reader.h"
 #include "core/io/news_xml_reader.h"
+#include "core/io/odt_reader.h"
 #include "core/io/text_reader.h"
 #include "core/io/xml_document.h"
 
@@ -183,20 +185,25 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
         if (!format && !looksLikeXml(input.pending())) {
             return failAt(ErrorCode::Unsupported, path, 0, 0,
                 tr("the format cannot be told from the file name or its content; name the file "
-                   ".txt, .html, .jsonl, .csv, .rss, .atom or .xml, or choose the format"));
+                   ".txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt or .xml, or choose "
+                   "the format"));
         }
         FOURFOLD_TRY_STATUS(readXmlArticles(input, format, take));
         return checks.finish();
     }
     switch (*format) {
     case ImportFormat::Text:
-    case ImportFormat::Html: {
+    case ImportFormat::Html:
+    case ImportFormat::Docx:
+    case ImportFormat::Odt: {
         Result<QByteArray> bytes = input.readAll();
         if (!bytes)
             return std::unexpected(bytes.error());
         Result<ImportedArticle> article = format == ImportFormat::Text
             ? readTextArticle(*bytes, path)
-            : readHtmlArticle(*bytes, path);
+            : format == ImportFormat::Html ? readHtmlArticle(*bytes, path)
+            : format == ImportFormat::Docx ? readDocxArticle(*bytes, path, options.zipLimits)
+                                           : readOdtArticle(*bytes, path, options.zipLimits);
         if (!article)
             return std::unexpected(article.error());
         FOURFOLD_TRY_STATUS(take(std::move(*article)));
@@ -281,6 +288,10 @@ QString importFormatKey(ImportFormat format)
         return QStringLiteral("feed");
     case ImportFormat::NewsXml:
         return QStringLiteral("newsxml");
+    case ImportFormat::Docx:
+        return QStringLiteral("docx");
+    case ImportFormat::Odt:
+        return QStringLiteral("odt");
     }
     return QStringLiteral("txt");
 }
@@ -300,6 +311,10 @@ std::optional<ImportFormat> importFormatFromKey(const QString &key)
         return ImportFormat::Feed;
     if (k == u"newsxml" || k == u"nitf" || k == u"newsml")
         return ImportFormat::NewsXml;
+    if (k == u"docx")
+        return ImportFormat::Docx;
+    if (k == u"odt")
+        return ImportFormat::Odt;
     return std::nullopt;
 }
 

@@ -1,8 +1,8 @@
 #pragma once
 // Reading articles from files: plain text (a file or a folder of files), HTML, JSON Lines, CSV,
-// RSS and Atom feeds, and NITF and NewsML-G2 news items. Each file is read all-or-nothing: the
-// first problem makes the whole file fail with an Error naming file, line (and column where known)
-// and what is wrong.
+// RSS and Atom feeds, NITF and NewsML-G2 news items, and DOCX and ODT documents. Each file is
+// read all-or-nothing: the first problem makes the whole file fail with an Error naming file, line
+// (and column where known) and what is wrong.
 //
 // Common rules (every format)
 // - Input must be UTF-8; a leading BOM is dropped. Invalid UTF-8 and NUL bytes (binary files)
@@ -95,6 +95,35 @@
 // an error); meta: version, byline (by), dateline, slugline, provider (name, literal or qcode),
 // subjects ({code: qcode or uri, name}). Other metadata of these standards is not read.
 //
+// Word-processing documents (.docx, ISO/IEC 29500; .odt, OASIS ODF 1.2): one article per file,
+// read whole; id = the file name without its last suffix, sourceLine 1. The file is a zip
+// archive (libzip) whose parts are parsed by the XML rules above. At most ZipLimits::entry bytes
+// (64 MiB) are unpacked from one entry and ZipLimits::total (256 MiB) from the whole archive,
+// counted as they come out (a zip bomb is refused whatever sizes the archive states); an
+// encrypted entry, a password-protected document (DOCX: an OLE compound file; ODT: encryption
+// data in META-INF/manifest.xml), a file that is not a zip archive or is damaged or cut off, a
+// missing main part (DOCX: the officeDocument relationship of _rels/.rels, else
+// word/document.xml; ODT: content.xml) and a package of another kind (ODT: its mimetype; DOCX:
+// a main part that is not <w:document>) are errors naming the file, and the part and its line
+// where the fault is in one. Body: each paragraph (w:p; text:p, text:h) is a paragraph, its
+// whitespace collapsed (tabs are spaces) and line breaks (w:br, w:cr; text:line-break) kept;
+// headings (DOCX: the paragraph style "heading N" or an outline level, followed through the
+// styles it is based on; ODT: text:h) are paragraphs too; lists and sections are read through;
+// tables row by row, each cell's paragraphs as paragraphs (as the HTML reader reads td);
+// text boxes follow the paragraph they are anchored in. Left out: deleted text of tracked
+// changes (w:del, w:moveFrom; text:tracked-changes), field instructions, comments
+// (office:annotation; DOCX comments live in a part that is not read), the fallback of
+// mc:AlternateContent, page headers and footers (parts that are not read), list numbers and
+// bullets (not part of the text), images. Footnotes and endnotes: the marker "[n]" (n = 1, 2, …
+// in the order of reference) stands where the note is referred to and each note follows the
+// body as a paragraph "[n] text"; a reference to a note the document does not hold is an error.
+// Title: dc:title of the metadata (docProps/core.xml; meta.xml), else the first paragraph in the
+// Title style (or one based on it), else the first heading of level 1, else the file name; the
+// first title or heading paragraph is left out of the body when it equals the title. Published:
+// dcterms:created (DOCX) or meta:creation-date (ODT), as written. Language: dc:language. Meta:
+// author (DOCX dc:creator; ODT meta:initial-creator, else dc:creator), subject, description,
+// keywords, modified. A document without text is an error.
+//
 // JSON Lines (.jsonl, .ndjson; https://jsonlines.org): one JSON object per line (LF or CRLF);
 // whitespace-only lines are skipped. Fields: "id", "title", "text" (required strings),
 // "outlet", "published", "language" (optional strings; null = absent) and "meta" (optional
@@ -122,6 +151,7 @@
 
 #include "core/io/chunked_input.h"
 #include "core/io/imported_article.h"
+#include "core/io/zip_archive.h"
 #include "core/model/error.h"
 
 #include <QHash>
@@ -133,7 +163,7 @@
 
 namespace fourfold {
 
-enum class ImportFormat { Text, Html, JsonLines, Csv, Feed, NewsXml };
+enum class ImportFormat { Text, Html, JsonLines, Csv, Feed, NewsXml, Docx, Odt };
 
 // The largest plain text or HTML file (read whole), in bytes (1 GiB).
 inline constexpr qint64 maxImportFileSize = qint64(1) << 30;
@@ -144,14 +174,14 @@ inline constexpr qint64 maxCsvRecordSize = qint64(64) << 20;
 // The longest first line of a text file that can be its title, in UTF-16 code units.
 inline constexpr qsizetype maxTextTitleLength = 200;
 
-// "txt", "html", "jsonl", "csv", "feed", "newsxml".
+// "txt", "html", "jsonl", "csv", "feed", "newsxml", "docx", "odt".
 QString importFormatKey(ImportFormat format);
 // The format for a key: the keys above and the aliases "text", "htm", "ndjson", "rss", "atom",
 // "nitf", "newsml" (any letter case); nothing for any other key.
 std::optional<ImportFormat> importFormatFromKey(const QString &key);
 // From the file name's suffix (.txt/.text, .html/.htm, .jsonl/.ndjson, .csv, .rss/.atom,
-// .nitf/.newsml: any suffix that is a key; any letter case); nothing otherwise (.xml included:
-// such files are told from their content).
+// .nitf/.newsml, .docx, .odt: any suffix that is a key; any letter case); nothing otherwise
+// (.xml included: such files are told from their content).
 std::optional<ImportFormat> importFormatFromPath(const QString &path);
 
 struct ImportOptions {
@@ -167,6 +197,9 @@ struct ImportOptions {
     QHash<QString, QString> csvColumns;
     // How many bytes a JSON Lines or CSV file is read in at a time (tests make it small).
     qsizetype readChunkSize = defaultReadChunkSize;
+    // DOCX and ODT: the most bytes unpacked from one entry of the archive and from all of them
+    // (tests make them small).
+    ZipLimits zipLimits;
 };
 
 // How far a reading has come, for a progress bar: the bytes of input read up to the end of the

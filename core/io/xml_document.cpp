@@ -232,6 +232,19 @@ QString xmlAttribute(const _xmlNode *node, const char *name)
     return result;
 }
 
+QString xmlAnyAttribute(const _xmlNode *node, const char *localName)
+{
+    for (const xmlAttr *attribute = node->properties; attribute; attribute = attribute->next) {
+        if (xmlStrEqual(attribute->name, reinterpret_cast<const xmlChar *>(localName))) {
+            xmlChar *value = xmlNodeListGetString(node->doc, attribute->children, 1);
+            QString result = fromXml(value);
+            xmlFree(value);
+            return result.isNull() ? QStringLiteral("") : result;
+        }
+    }
+    return {};
+}
+
 QString xmlText(const _xmlNode *node)
 {
     xmlChar *content = xmlNodeGetContent(node);

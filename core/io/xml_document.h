@@ -52,6 +52,9 @@ qint64 xmlLine(const _xmlNode *node);
 QString fromXml(const unsigned char *text);
 // The attribute's value (the attribute without a namespace), or a null string if absent.
 QString xmlAttribute(const _xmlNode *node, const char *name);
+// The value of the attribute of this local name in any namespace or none ("val" finds w:val), or
+// a null string if absent.
+QString xmlAnyAttribute(const _xmlNode *node, const char *localName);
 // All the text inside the element, entities expanded, as written (not trimmed).
 QString xmlText(const _xmlNode *node);
 // xmlText with runs of whitespace made one space and trimmed.

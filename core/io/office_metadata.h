@@ -1,0 +1,28 @@
+#pragma once
+// A document's own metadata as word-processing formats keep it: the core properties of an Office
+// Open XML package (docProps/core.xml, ISO/IEC 29500-2 §11) and an OpenDocument's meta.xml (OASIS
+// ODF 1.2 part 1 §4.3), both built on Dublin Core.
+
+#include <QJsonObject>
+#include <QString>
+
+struct _xmlNode;
+
+namespace fourfold {
+
+struct OfficeMetadata {
+    QString title; // dc:title
+    QString created; // dcterms:created (OPC) or meta:creation-date (ODF), as given
+    QString language; // dc:language
+    // author (OPC dc:creator; ODF meta:initial-creator, else dc:creator), subject, description,
+    // keywords (one string; ODF's several meta:keyword joined by ", "), modified (dcterms:modified
+    // or ODF's dc:date); only those the document sets.
+    QJsonObject meta;
+};
+
+// Reads `root`, the root element of docProps/core.xml (cp:coreProperties) or of meta.xml
+// (office:document-meta). Elements it does not know are left out (cp:lastModifiedBy names who
+// saved the file last, not its author; statistics describe the file, not the article).
+OfficeMetadata readOfficeMetadata(_xmlNode *root);
+
+} // namespace fourfold
