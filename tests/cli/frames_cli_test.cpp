@@ -184,6 +184,16 @@ TEST_CASE("frames --data names file line and column of a bad cell")
         CHECK(run.exitCode == 1);
         CHECK(run.err.contains(path + QString::fromUtf8(c.expected)));
     }
+    // Ward's method keeps n(n − 1)/2 distances: above 20,000 articles it refuses (README, Frames).
+    QByteArray large = "article,a\n";
+    for (int a = 0; a < 20001; ++a)
+        large += "a" + QByteArray::number(a) + "," + QByteArray::number(a % 2) + "\n";
+    const QString largeFile = dir.filePath("large.csv");
+    writeFile(largeFile, large);
+    const CliRun tooMany = cli({"frames", "--data", largeFile});
+    CHECK(tooMany.exitCode == 1);
+    CHECK(tooMany.err.contains("takes at most 20000 articles, not 20001"));
+    CHECK(cli({"frames", "--help"}).exitCode == 0);
     const QString small = dir.filePath("small.csv");
     writeFile(small, "article,a\nx,1\ny,0\n");
     CHECK(cli({"frames", "--data", small}).err.contains("frames need at least 3"));
