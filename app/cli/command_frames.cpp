@@ -96,6 +96,12 @@ QJsonValue optionalJson(const std::optional<double> &v)
     return v ? QJsonValue(*v) : QJsonValue(QJsonValue::Null);
 }
 
+// A k an index points at, or "–" when the index is undefined for every k (0).
+QString kText(int k)
+{
+    return k > 0 ? QString::number(k) : QStringLiteral("–");
+}
+
 QString number(const std::optional<double> &v, int decimals)
 {
     return v ? QString::number(*v, 'f', decimals) : QStringLiteral("–");
@@ -511,9 +517,8 @@ int runFrames(const QStringList &arguments)
                      .arg(number(row.fusionJump.value, 3), 12);
     lines << tr("  Largest: silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k "
                 "= %3")
-                 .arg(analysis.kBySilhouette)
-                 .arg(analysis.kByCalinskiHarabasz)
-                 .arg(analysis.kByFusion);
+                 .arg(kText(analysis.kBySilhouette), kText(analysis.kByCalinskiHarabasz),
+                     kText(analysis.kByFusion));
     lines << (analysis.kGiven ? tr("Frames (k = %1, given)").arg(analysis.k)
                               : tr("Frames (k = %1, where most indices point)").arg(analysis.k));
     for (size_t f = 0; f < analysis.profiles.size(); ++f) {
@@ -523,7 +528,9 @@ int runFrames(const QStringList &arguments)
                            .arg(100.0 * profile.size / double(n), 0, 'f', 1);
         if (!stability.empty())
             head += tr("  stability %1%2")
-                        .arg(stability[f].meanJaccard, 0, 'f', 2)
+                        .arg(stability[f].replicatesUsed > 0
+                                ? QString::number(stability[f].meanJaccard, 'f', 2)
+                                : QStringLiteral("–"))
                         .arg(stability[f].flagged ? tr(" (dissolves on resampling)") : QString());
         lines << head;
         // The elements that characterise the frame: adjusted residual above 1.96, the largest
