@@ -45,6 +45,9 @@ struct FrameInput {
     FrameMatrix matrix;
     // "outlet", "month", "language" -> each article's group
     std::map<QString, QStringList> groups;
+    // The consensus layer: the share of each article's coders who coded each element (row-major
+    // as the matrix); empty otherwise.
+    std::vector<double> coderShares;
 };
 
 FrameInput fromIndicators(ElementIndicators &&indicators)
@@ -55,6 +58,8 @@ FrameInput fromIndicators(ElementIndicators &&indicators)
     input.matrix.rows = indicators.articles.size();
     input.matrix.columns = size_t(indicators.variables.size());
     input.matrix.values = std::move(indicators.values);
+    if (indicators.layer == QLatin1String("consensus"))
+        input.coderShares = std::move(indicators.shares);
     QStringList &outlet = input.groups[QStringLiteral("outlet")];
     QStringList &month = input.groups[QStringLiteral("month")];
     QStringList &language = input.groups[QStringLiteral("language")];
@@ -439,10 +444,21 @@ int runFrames(const QStringList &arguments)
             QJsonArray elements;
             for (qsizetype v = 0; v < input.variables.size(); ++v) {
                 const frames::VariableProfile &vp = profile.variables[size_t(v)];
-                elements.append(QJsonObject {{QStringLiteral("variable"), input.variables[v]},
+                QJsonObject element {{QStringLiteral("variable"), input.variables[v]},
                     {QStringLiteral("share"), vp.share}, {QStringLiteral("overall"), vp.overall},
                     {QStringLiteral("difference"), vp.difference},
-                    {QStringLiteral("residual"), optionalJson(vp.residual)}});
+                    {QStringLiteral("residual"), optionalJson(vp.residual)}};
+                if (!input.coderShares.empty()) {
+                    // Consensus: the mean share of the frame's articles' coders who coded it.
+                    double sum = 0;
+                    for (size_t i = 0; i < partition.labels.size(); ++i)
+                        if (size_t(partition.labels[i]) == f)
+                            sum += input.coderShares[i * input.matrix.columns + size_t(v)];
+                    element.insert(QStringLiteral("coder_share"),
+                        profile.size > 0 ? QJsonValue(sum / profile.size)
+                                         : QJsonValue(QJsonValue::Null));
+                }
+                elements.append(element);
             }
             QJsonArray closest;
             for (size_t row : profile.closest)
@@ -503,6 +519,20 @@ int runFrames(const QStringList &arguments)
                  .arg(input.source)
                  .arg(n)
                  .arg(input.variables.size());
+    if (!input.coderShares.empty()) {
+        // How many of the elements present rest on a bare half of the article's coders.
+        qsizetype present = 0;
+        qsizetype atHalf = 0;
+        for (size_t i = 0; i < input.coderShares.size(); ++i)
+            if (input.matrix.values[i] == 1) {
+                ++present;
+                atHalf += input.coderShares[i] == 0.5 ? 1 : 0;
+            }
+        lines << tr("Consensus: an element counts when at least half of the article's coders "
+                    "coded it; %1 of the %2 elements present rest on exactly half.")
+                     .arg(atHalf)
+                     .arg(present);
+    }
     lines << tr("Choosing k (each k: Ward, then k-means from Ward's centroids)");
     lines << tr("  %1 %2 %3 %4")
                  .arg(tr("k"), 3)

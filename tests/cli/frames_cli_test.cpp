@@ -57,7 +57,9 @@ QByteArray plantedMatrix(std::vector<int> &truth)
 // it), as a --data matrix in the articles' file order. Built here from the source file, apart
 // from the program's own reading of the project. Polarity and explicitness are the default
 // codebook's closed lists.
-QByteArray indicatorsFromSampleFile(const QStringList &coders)
+// `shares` (if given) receives each article's share of its coders who coded each variable.
+QByteArray indicatorsFromSampleFile(
+    const QStringList &coders, QMap<QString, QList<double>> *shares = nullptr)
 {
     const QStringList variables {"problem", "cause", "evaluation", "evaluation:polarity=negative",
         "evaluation:polarity=neutral", "evaluation:polarity=positive", "remedy",
@@ -97,6 +99,8 @@ QByteArray indicatorsFromSampleFile(const QStringList &coders)
             for (const QSet<QString> &set : byCoder)
                 count += set.contains(v) ? 1 : 0;
             csv += 2 * count >= int(byCoder.size()) && count > 0 ? ",1" : ",0";
+            if (shares)
+                (*shares)[article] << double(count) / double(byCoder.size());
         }
         csv += '\n';
     }
@@ -213,16 +217,46 @@ TEST_CASE("frames of a project layer equal frames of the indicators built from t
     for (const auto &[layer, coders] : layers) {
         INFO(layer.toStdString());
         const QString matrix = dir.filePath("indicators.csv");
-        writeFile(matrix, indicatorsFromSampleFile(coders));
-        const CliRun fromProject =
-            cli({"frames", project, "--layer", layer, "--k", "3", "--max-k", "4", "--json"});
+        QMap<QString, QList<double>> shares;
+        writeFile(matrix, indicatorsFromSampleFile(coders, &shares));
+        const QString assignments = dir.filePath(layer.section(':', 0, 0) + ".csv");
+        const CliRun fromProject = cli({"frames", project, "--layer", layer, "--k", "3", "--max-k",
+            "4", "--json", "--out", assignments});
         INFO(fromProject.err.toStdString());
         REQUIRE(fromProject.exitCode == 0);
         const CliRun fromFile =
             cli({"frames", "--data", matrix, "--k", "3", "--max-k", "4", "--json"});
         REQUIRE(fromFile.exitCode == 0);
-        const QJsonObject a = cliJson(fromProject);
+        QJsonObject a = cliJson(fromProject);
         const QJsonObject b = cliJson(fromFile);
+        // The consensus adds each element's mean share of coders per frame: the mean, over the
+        // frame's articles (from --out), of the shares counted above. Then it is set aside.
+        QMap<int, QStringList> articlesOf;
+        QFile out(assignments);
+        REQUIRE(out.open(QIODevice::ReadOnly));
+        for (const QByteArray &line : out.readAll().trimmed().split('\n').mid(1))
+            articlesOf[line.split(',')[1].toInt()] << QString::fromUtf8(line.split(',')[0]);
+        QJsonArray frames = a.value("frames").toArray();
+        for (qsizetype f = 0; f < frames.size(); ++f) {
+            QJsonObject frame = frames[f].toObject();
+            QJsonArray elements = frame.value("elements").toArray();
+            for (qsizetype v = 0; v < elements.size(); ++v) {
+                QJsonObject element = elements[v].toObject();
+                CHECK(element.contains("coder_share") == (layer == "consensus"));
+                if (layer == "consensus") {
+                    double sum = 0;
+                    for (const QString &article : articlesOf[int(f) + 1])
+                        sum += shares[article][v];
+                    CHECK(element.value("coder_share").toDouble()
+                        == Approx(sum / double(articlesOf[int(f) + 1].size())).margin(1e-12));
+                }
+                element.remove("coder_share");
+                elements[v] = element;
+            }
+            frame.insert("elements", elements);
+            frames[f] = frame;
+        }
+        a.insert("frames", frames);
         CHECK(a.value("variables") == b.value("variables"));
         CHECK(a.value("articles").toInt() == b.value("articles").toInt());
         CHECK(a.value("articles").toInt() >= 9);
