@@ -317,6 +317,11 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         report.logins.push_back(
             {l.person.pseudonym, l.role, l.person.role == CoderRole::Lead, l.file});
     }
+    // The highest change number of the published rows (nothing else writes before COMMIT).
+    auto last = conn->query(QStringLiteral("SELECT last_value FROM fourfold.change_number"));
+    if (!last)
+        return abandon(last.error());
+    report.lastChange = last->integer(0, 0);
     if (auto st = conn->exec(QStringLiteral("COMMIT")); !st)
         return abandon(st.error());
 
@@ -328,6 +333,10 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         return std::unexpected(e);
     }
     if (auto st = store::setSetting(project.m_db, pseudonymSettingKey(), lead); !st)
+        return std::unexpected(st.error());
+    if (auto st = store::setSetting(
+            project.m_db, lastChangeSettingKey(), QString::number(report.lastChange));
+        !st)
         return std::unexpected(st.error());
     return report;
 }

@@ -26,6 +26,7 @@ struct PublishReport {
     QString server; // "user@host:port/database" of the publishing login
     int schemaVersion = 0; // the server schema version written
     QString credentialsDir;
+    qint64 lastChange = 0; // the highest change number of the published rows
     std::vector<TeamLogin> logins; // by pseudonym
     qint64 people = 0;
     qint64 articles = 0;
@@ -62,7 +63,7 @@ public:
     // (without any password) and the pseudonym of the person whose working file it is.
     static QString serverSettingKey() { return QStringLiteral("team.server"); }
     static QString pseudonymSettingKey() { return QStringLiteral("team.pseudonym"); }
-    // In a working file made by join: the highest server change number it holds.
+    // The highest server change number a working file holds (set by publish and join).
     static QString lastChangeSettingKey() { return QStringLiteral("team.last_change"); }
 
     // Creates the team project of `project` on the empty database `server` (a libpq connection
@@ -71,8 +72,8 @@ public:
     // policies, and every shared row of the file. All of it in one transaction: on any failure
     // the server is left as it was. Each person's password goes into "<pseudonym>.pgpass" in
     // `credentialsDir` (created with mode 0700; it must be new or empty; the files are 0600).
-    // `project` then records the server and `leadPseudonym` (its lead; the only lead when
-    // empty) in its settings and becomes the lead's working file.
+    // `project` then records the server, `leadPseudonym` (its lead; the only lead when empty)
+    // and the last change number in its settings and becomes the lead's working file.
     // Fails with: Unsupported for a coder copy; InvalidArgument for an unknown lead or several
     // leads without one named, or a project without people; Duplicate when the database holds
     // a team project already, a role exists, two pseudonyms make the same role name, or

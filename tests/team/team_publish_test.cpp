@@ -94,6 +94,10 @@ TEST_CASE("Publishing sends every shared row and writes one private password fil
         store::setting(p.main->databaseForTesting(), TeamProject::pseudonymSettingKey());
     REQUIRE(pseudonym);
     CHECK(pseudonym->value_or(QString()) == QLatin1String("L01"));
+    auto lastChange =
+        store::setting(p.main->databaseForTesting(), TeamProject::lastChangeSettingKey());
+    REQUIRE(lastChange);
+    CHECK(lastChange->value_or(QString()).toLongLong() == p.report.lastChange);
 
     // The lead's role reads everything, and every row carries its own change number.
     ServerSql lead(p.loginOf(QStringLiteral("L01")));
@@ -111,6 +115,16 @@ TEST_CASE("Publishing sends every shared row and writes one private password fil
                                     "fourfold.article UNION ALL SELECT change FROM "
                                     "fourfold.assignment) c"))
         == "t");
+    // The last change number the file records is the highest on the server.
+    CHECK(lead.value(QStringLiteral(
+              "SELECT max(change) FROM (SELECT change FROM fourfold.person UNION ALL SELECT "
+              "change FROM fourfold.codebook_version UNION ALL SELECT change FROM "
+              "fourfold.article UNION ALL SELECT change FROM fourfold.assignment UNION ALL "
+              "SELECT change FROM fourfold.annotation UNION ALL SELECT change FROM fourfold.link "
+              "UNION ALL SELECT change FROM fourfold.judgement UNION ALL SELECT change FROM "
+              "fourfold.gold_annotation UNION ALL SELECT change FROM fourfold.gold_source UNION "
+              "ALL SELECT change FROM fourfold.event) c"))
+        == QString::number(p.report.lastChange));
     // Frozen units arrive as stored: the paragraphs of f1 and the sentence pairs as bytes
     // (8 bytes per sentence: two little-endian int32).
     CHECK(lead.value(QStringLiteral("SELECT jsonb_array_length(paragraphs) FROM fourfold.article "
