@@ -6,12 +6,14 @@
 
 #include "app/desktop/article_document.h"
 #include "app/desktop/article_list_model.h"
+#include "core/project/people.h"
 #include "core/project/project.h"
 
 #include <QObject>
 #include <QUndoStack>
 
 #include <memory>
+#include <optional>
 #include <vector>
 
 namespace fourfold {
@@ -28,6 +30,10 @@ public:
     Project &project() { return m_project; }
     const Project &project() const { return m_project; }
     const Coder &coder() const { return m_coder; }
+    // The sign-in that opened the desk (People::signIn), which People's changes ask for; none
+    // when a session was made without one (tests of other windows).
+    void setSignedIn(SignedIn who) { m_signedIn = std::move(who); }
+    const SignedIn *signedIn() const { return m_signedIn ? &*m_signedIn : nullptr; }
     bool isLead() const { return m_coder.role == CoderRole::Lead; }
     const Codebook &codebook() const { return m_codebook; }
     QUndoStack *undoStack() { return &m_undo; }
@@ -103,6 +109,7 @@ private:
 
     Project m_project;
     Coder m_coder;
+    std::optional<SignedIn> m_signedIn;
     Codebook m_codebook;
     QUndoStack m_undo;
     bool m_showAll = false;

@@ -1,5 +1,5 @@
 // fourfold: the desktop workbench. `fourfold [PROJECT] [--coder PSEUDONYM]` opens a project
-// (asking who codes unless --coder says it).
+// (asking who codes unless --coder says it; a lead is asked their passphrase).
 
 #include "app/desktop/main_window.h"
 

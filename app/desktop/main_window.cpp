@@ -389,23 +389,31 @@ void MainWindow::buildMenus()
         tr("&Keyboard shortcuts"), QKeySequence::HelpContents, this, &MainWindow::showShortcuts);
 }
 
-Status MainWindow::openProject(const QString &path, const QString &pseudonym)
+Status MainWindow::openProject(
+    const QString &path, const QString &pseudonym, const std::optional<QString> &passphrase)
 {
     auto project = Project::open(path);
     if (!project)
         return std::unexpected(project.error());
-    auto coders = project->coders();
-    if (!coders)
-        return std::unexpected(coders.error());
-    std::optional<Coder> who;
+    std::optional<SignedIn> who;
     if (!pseudonym.isEmpty()) {
-        for (const Coder &c : *coders)
-            if (c.pseudonym == pseudonym)
-                who = c;
-        if (!who)
-            return fail(ErrorCode::NotFound, tr("The project has no coder \"%1\".").arg(pseudonym));
-    } else {
-        CoderDialog dialog(project->settings().name, *coders, this, &*project);
+        auto state = People::passphraseState(*project, pseudonym);
+        if (!state) {
+            if (state.error().code == ErrorCode::NotFound)
+                return fail(
+                    ErrorCode::NotFound, tr("The project has no coder \"%1\".").arg(pseudonym));
+            return std::unexpected(state.error());
+        }
+        if (*state == PassphraseState::NotNeeded || passphrase) {
+            auto in = People::signIn(*project, pseudonym, passphrase.value_or(QString()));
+            if (!in)
+                return std::unexpected(in.error());
+            who = *in;
+        }
+    }
+    if (!who) {
+        // Nobody named, or a lead named without a passphrase: the dialog asks.
+        CoderDialog dialog(*project, this, pseudonym);
         if (dialog.exec() != QDialog::Accepted || !dialog.chosen())
             return fail(ErrorCode::Cancelled, tr("Nobody was chosen to code."));
         who = dialog.chosen();
@@ -420,7 +428,8 @@ Status MainWindow::openProject(const QString &path, const QString &pseudonym)
     m_tabs->clear();
     delete m_spanEditor;
     delete m_codebook;
-    m_session = std::make_unique<CodingSession>(std::move(*project), *who);
+    m_session = std::make_unique<CodingSession>(std::move(*project), who->person());
+    m_session->setSignedIn(*who);
     m_article = ArticleId {};
     m_selected = AnnotationId {};
 

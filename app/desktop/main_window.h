@@ -8,6 +8,7 @@
 #include <QMainWindow>
 
 #include <memory>
+#include <optional>
 
 class QAction;
 class QComboBox;
@@ -39,10 +40,12 @@ public:
     explicit MainWindow(QWidget *parent = nullptr);
     ~MainWindow() override;
 
-    // Opens `path` and starts coding as the coder with `pseudonym`, or asks who codes when it is
-    // empty. Returns the error to present if the project cannot be opened (or nobody is chosen:
-    // Cancelled).
-    Status openProject(const QString &path, const QString &pseudonym = {});
+    // Opens `path` and starts coding as the person with `pseudonym`, or asks who codes when it is
+    // empty. A lead gives `passphrase` (People::signIn: wrong → NotAllowed; a lead without one
+    // yet sets it); without it the "Who is coding?" dialog asks. Returns the error to present if
+    // the project cannot be opened (or nobody is chosen: Cancelled).
+    Status openProject(const QString &path, const QString &pseudonym = {},
+        const std::optional<QString> &passphrase = std::nullopt);
 
     // For tests and screenshots.
     LeadWindows *leadWindows() const { return m_lead; }

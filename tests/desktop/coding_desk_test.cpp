@@ -262,7 +262,7 @@ TEST_CASE("importing from the window reports added, skipped and refused articles
         REQUIRE(p->addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead));
     }
     MainWindow w;
-    REQUIRE(w.openProject(path, QStringLiteral("L01")));
+    REQUIRE(w.openProject(path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));
     const QString good = writeFile(dir, QStringLiteral("good.jsonl"),
         "{\"id\":\"a\",\"title\":\"A\",\"text\":\"First "
         "text.\"}\n{\"id\":\"b\",\"title\":\"B\",\"text\":\"First text.\"}\n");

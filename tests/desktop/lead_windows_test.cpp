@@ -46,7 +46,7 @@ TEST_CASE("the lead menu is there for a lead and not for a coder")
     QMenu *menu = leadMenu(w);
     REQUIRE(menu);
     CHECK_FALSE(menu->menuAction()->isVisible());
-    REQUIRE(w.openProject(f.path, QStringLiteral("L01")));
+    REQUIRE(w.openProject(f.path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));
     CHECK(menu->menuAction()->isVisible());
     QStringList entries;
     for (QAction *a : menu->actions())
@@ -63,7 +63,7 @@ TEST_CASE("each lead window opens once and all close when another project is ope
 {
     SampleCopy f;
     MainWindow w;
-    REQUIRE(w.openProject(f.path, QStringLiteral("L01")));
+    REQUIRE(w.openProject(f.path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));
     LeadWindows *lead = w.leadWindows();
     lead->openComparison();
     lead->openReliability();

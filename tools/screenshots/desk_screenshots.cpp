@@ -37,7 +37,7 @@ int main(int argc, char *argv[])
         auto p = Project::open(project);
         if (!p)
             return 1;
-        CoderDialog dialog(p->settings().name, *p->coders());
+        CoderDialog dialog(*p);
         dialog.resize(560, 360);
         dialog.show();
         ok &= saveGrab(dialog, out, "coder-dialog.png");
@@ -70,7 +70,7 @@ int main(int argc, char *argv[])
         // A lead sees every article; with "every coder's spans" on, all three coders' spans.
         MainWindow w;
         w.resize(1600, 960);
-        if (!w.openProject(project, QStringLiteral("L01")))
+        if (!w.openProject(project, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")))
             return 1;
         w.show();
         w.session()->setShowAllCoders(true);

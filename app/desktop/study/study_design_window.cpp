@@ -32,6 +32,7 @@
 
 #include <algorithm>
 #include <array>
+#include <iterator>
 #include <set>
 
 namespace fourfold {
@@ -146,7 +147,11 @@ void StudyDesignWindow::refresh()
 void StudyDesignWindow::loadCoders()
 {
     auto coders = m_project.coders();
-    m_coders = coders ? *coders : std::vector<Coder> {};
+    m_coders.clear();
+    // A disabled person keeps their codings but takes no new work: they are not offered.
+    if (coders)
+        std::ranges::copy_if(
+            *coders, std::back_inserter(m_coders), [](const Coder &c) { return !c.disabled; });
 }
 
 void StudyDesignWindow::fillCoderList(QListWidget *list, bool leadsChecked)
