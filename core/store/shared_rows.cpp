@@ -20,7 +20,7 @@ QString sharedRowSql(SharedKind kind)
     case SharedKind::Person:
         return QStringLiteral(
             "SELECT json_object('uuid', uuid, 'name', name, 'pseudonym', pseudonym, 'role', role, "
-            "'created_at', created_at, 'deleted', deleted) FROM coder ORDER BY uuid");
+            "'created_at', created_at, 'deleted', deleted) FROM coder ORDER BY id");
     case SharedKind::CodebookVersion:
         return QStringLiteral(
             "SELECT json_object('uuid', v.uuid, 'number', v.number, 'created_at', v.created_at, "
@@ -36,31 +36,31 @@ QString sharedRowSql(SharedKind kind)
             "p.role)) FROM (SELECT * FROM paragraph WHERE article_id = a.id ORDER BY idx) p)), "
             "'sentences', '\\x' || lower(hex(coalesce(u.sentences, x''))), "
             "'tokens', '\\x' || lower(hex(coalesce(u.tokens, x'')))) "
-            "FROM article a LEFT JOIN article_units u ON u.article_id = a.id ORDER BY a.uuid");
+            "FROM article a LEFT JOIN article_units u ON u.article_id = a.id ORDER BY a.id");
     case SharedKind::GoldAnnotation:
         return QStringLiteral(
             "SELECT json_object('uuid', g.uuid, 'article', a.uuid, 'function', g.function, "
             "'start', g.start, 'end', g.end, 'quote', g.quote, 'attributes', g.attributes, "
             "'decided_by', c.uuid, 'decided_at', g.decided_at, 'rationale', g.rationale, "
             "'deleted', g.deleted) FROM gold_annotation g JOIN article a ON a.id = g.article_id "
-            "JOIN coder c ON c.id = g.decided_by ORDER BY g.uuid");
+            "JOIN coder c ON c.id = g.decided_by ORDER BY g.id");
     case SharedKind::GoldSource:
         return QStringLiteral(
             "SELECT json_object('gold', g.uuid, 'annotation', n.uuid) FROM gold_source s "
             "JOIN gold_annotation g ON g.id = s.gold_id JOIN annotation n ON n.id = "
-            "s.annotation_id ORDER BY g.uuid, n.uuid");
+            "s.annotation_id ORDER BY g.id, n.id");
     case SharedKind::GoldJudgement:
         return QStringLiteral(
             "SELECT json_object('uuid', g.uuid, 'article', a.uuid, 'item', g.item_key, 'value', "
             "g.value, 'decided_by', c.uuid, 'decided_at', g.decided_at, 'rationale', "
             "g.rationale, 'deleted', g.deleted) FROM gold_judgement g JOIN article a ON a.id = "
-            "g.article_id JOIN coder c ON c.id = g.decided_by ORDER BY g.uuid");
+            "g.article_id JOIN coder c ON c.id = g.decided_by ORDER BY g.id");
     case SharedKind::GoldRejection:
         return QStringLiteral(
             "SELECT json_object('uuid', r.uuid, 'annotation', n.uuid, 'decided_by', c.uuid, "
             "'decided_at', r.decided_at, 'rationale', r.rationale, 'deleted', r.deleted) "
             "FROM gold_rejection r JOIN annotation n ON n.id = r.annotation_id "
-            "JOIN coder c ON c.id = r.decided_by ORDER BY r.uuid");
+            "JOIN coder c ON c.id = r.decided_by ORDER BY r.id");
     case SharedKind::Event:
         return QStringLiteral(
             "SELECT json_object('source', '', 'source_id', e.id, 'at', e.at, 'person', c.uuid, "

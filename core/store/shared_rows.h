@@ -33,8 +33,8 @@ enum class SharedKind {
 };
 
 // Hands every row of `kind` to `visit` as compact JSON text (UTF-8), one row held at a time, in
-// a stable order (by uuid; events by id). Fails with the store's error, or the first failed
-// visit's.
+// the file's row order (so a file written from them numbers its rows in the same order). Fails
+// with the store's error, or the first failed visit's.
 Status forEachSharedRow(
     const Database &db, SharedKind kind, const std::function<Status(const QByteArray &)> &visit);
 
