@@ -51,6 +51,7 @@ int runAssign(const QStringList &arguments);
 int runCodebook(const QStringList &arguments);
 int runHandout(const QStringList &arguments);
 int runMerge(const QStringList &arguments);
+int runPeople(const QStringList &arguments);
 int runTeam(const QStringList &arguments);
 
 } // namespace fourfold::cli

@@ -82,6 +82,10 @@ const std::map<QString, Command> &commands()
                  "Team projects on a PostgreSQL server: publish a project, join one (team publish, "
                  "team join)."),
                 runTeam}},
+        {QStringLiteral("people"),
+            {QT_TRANSLATE_NOOP("cli",
+                 "List, add, rename, disable and enable the people of a project (by pseudonym)."),
+                runPeople}},
         {QStringLiteral("build-sample"),
             {QT_TRANSLATE_NOOP("cli", "Build the demo project from its source files."),
                 runBuildSample}},
