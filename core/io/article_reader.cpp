@@ -34,10 +34,10 @@ QString noArticles()
 }
 
 // The checks every format shares, one article at a time as the reader hands them over: a
-// non-blank id without control characters, a non-blank text, ids unique within the file; then
-// the defaults for language and source file. A failed check is kept rather than returned: the
-// reader goes on to the end of the file, handing nothing on any more, so that a syntax error
-// further on is the one reported (syntax errors win over these checks).
+// non-blank id without control characters, no NUL in any field, a non-blank text, ids unique
+// within the file; then the defaults for language and source file. A failed check is kept rather
+// than returned: the reader goes on to the end of the file, handing nothing on any more, so that a
+// syntax error further on is the one reported (syntax errors win over these checks).
 class ArticleChecks
 {
 public:
@@ -99,6 +99,17 @@ private:
                              .toUpper()));
         }
         if (QStringView(article.text).trimmed().isEmpty()) {
+        // A NUL can only come through an escape (\u0000 in JSON, &#0; is refused by XML), since
+        // a NUL byte makes the whole file binary; no text holds one, and C strings end at it.
+        for (const auto &[field, value] :
+            {std::pair {"text", &article.text}, std::pair {"title", &article.title},
+                std::pair {"outlet", &article.outlet}, std::pair {"published", &article.published},
+                std::pair {"language", &article.language}})
+            if (value->contains(QChar(0)))
+                return failed(ErrorCode::InvalidInput,
+                    tr("the %1 of the article \"%2\" holds a NUL character (U+0000), which no "
+                       "text holds")
+                        .arg(QLatin1String(field), article.externalId));
             return failed(ErrorCode::InvalidInput,
                 tr("the article \"%1\" has no text").arg(article.externalId));
         }

@@ -128,6 +128,11 @@ TEST_CASE("JSON Lines: malformed files are refused with line, column and reason"
          ErrorCode::InvalidInput, 1, 0, "holds a control character (U+0009)"},
         {"NUL escaped in an id", R"({"id":"b\u0000","title":"t","text":"x"})" "\n",
          ErrorCode::InvalidInput, 1, 0, "holds a control character (U+0000)"},
+        // Found by fuzz_article_jsonl: a NUL escaped in a text or a title got into the project.
+        {"NUL escaped in a text", ok + R"({"id":"b","title":"t","text":"x\u0000y"})" "\n",
+         ErrorCode::InvalidInput, 2, 0, "the text of the article \"b\" holds a NUL character"},
+        {"NUL escaped in a title", R"({"id":"b","title":"\u0000","text":"x"})" "\n",
+         ErrorCode::InvalidInput, 1, 0, "the title of the article \"b\" holds a NUL character"},
     };
     // clang-format on
     for (const BadInput &input : cases)
