@@ -5,6 +5,7 @@
 #include "core/model/error.h"
 #include "core/model/reliability_table.h"
 
+#include <QByteArray>
 #include <QString>
 
 namespace fourfold {
@@ -14,5 +15,11 @@ namespace fourfold {
 // "unit", fewer than two coders, an empty or repeated coder name, a row with the wrong number of
 // fields, an empty or repeated unit id, or no rows at all; Io if the file cannot be read.
 Result<ReliabilityTable> readReliabilityTable(const QString &path);
+
+// The same reading of a file's bytes through the decoded text, checking everything and saying
+// what is wrong. readReliabilityTable first reads the bytes directly (without a string per
+// cell, see reliability_table_bytes.h) and comes here only when that reading finds something it
+// does not take; both give the same table (a test and the fuzz target compare them).
+Result<ReliabilityTable> readReliabilityTableDecoded(const QByteArray &bytes, const QString &path);
 
 } // namespace fourfold

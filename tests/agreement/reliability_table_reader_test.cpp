@@ -79,3 +79,72 @@ TEST_CASE("cells hold an index per distinct label and a late repeated unit is fo
     CHECK(repeated.error().message.contains(
         QStringLiteral("the unit \"u1234\" appears twice (first on line 1235)")));
 }
+
+namespace {
+
+// Everything a table holds that a reader decides: coders, labels in order, every cell, every
+// unit's id and line.
+QString describe(const ReliabilityTable &t)
+{
+    QString out = t.coders.join(u'|') + u'\n' + t.labels().join(u'|') + u'\n';
+    for (size_t u = 0; u < t.unitCount(); ++u) {
+        out += t.unitId(u) + u'@' + QString::number(t.unitLine(u)) + u':';
+        for (const qint32 cell : t.row(u))
+            out += QString::number(cell) + u',';
+        out += u'\n';
+    }
+    return out;
+}
+
+} // namespace
+
+TEST_CASE("the reading from bytes and the decoded reading give the same table")
+{
+    // readReliabilityTable reads most files straight from their bytes; the decoded reading
+    // (RFC 4180 on the decoded text) is the reference. Inputs that exercise every rule of the
+    // byte reading: CRLF, lone CR and LF; line breaks, commas and doubled quotes inside quotes;
+    // a last record without a line break; a trailing comma; empty lines; a BOM at the start and
+    // one inside a label; spaces QChar::isSpace knows beyond ASCII (NBSP, NEL, EM SPACE) at the
+    // edges of cells; labels and ids outside ASCII; more than 16 labels.
+    const QByteArray inputs[] = {
+        "unit,A,B,C\nu1,x,,\"y, z\"\r\nu2, x ,x,x\n",
+        "\xEF\xBB\xBFunit,A,B\r\nu1,a,b\ru2,\"a\"\"q\"\"\",\"line\none\"\n\nu3,a,",
+        "Unit , A , B \nu1,\xC2\xA0x\xC2\xA0,\xC2\x85x\nu2,\xE2\x80\x83x,\xEF\xBB\xBFx\n"
+        "caf\xC3\xA9,\xF0\x9F\x98\x80,\xE6\x97\xA5\n",
+        "unit,A,B\n\"u,1\",\"\",\"\"\"\"\n\"u\n2\",\"a\r\nb\",c\nu3,,\n",
+    };
+    QTemporaryDir dir;
+    int n = 0;
+    auto compare = [&](const QByteArray &input) {
+        const QString path = writeFile(dir, QStringLiteral("m%1.csv").arg(n++), input);
+        auto fast = readReliabilityTable(path);
+        auto decoded = readReliabilityTableDecoded(input, path);
+        REQUIRE(fast.has_value() == decoded.has_value());
+        if (fast)
+            CHECK(describe(*fast) == describe(*decoded));
+        else
+            CHECK(fast.error().toString() == decoded.error().toString());
+    };
+    for (const QByteArray &input : inputs)
+        compare(input);
+
+    // Many labels (past the handful compared one by one) and random tables built from pieces
+    // that matter to the grammar.
+    QByteArray many = "unit,A,B\n";
+    for (int u = 0; u < 200; ++u)
+        many += "u" + QByteArray::number(u) + ",l" + QByteArray::number(u % 37) + ",l"
+            + QByteArray::number(u % 23) + "\n";
+    compare(many);
+    const char *pieces[] = {
+        "a", "b", " ", "\"", ",", "\n", "\r", "\r\n", "\xC2\xA0", "\xC3\xA9", "\"\"", "u", "1"};
+    quint64 state = 42;
+    for (int round = 0; round < 300; ++round) {
+        QByteArray input = "unit,A,B\n";
+        const int length = int(state % 40);
+        for (int k = 0; k < length; ++k) {
+            state = state * 6364136223846793005ULL + 1442695040888963407ULL; // Knuth's MMIX LCG
+            input += pieces[(state >> 33) % std::size(pieces)];
+        }
+        compare(input);
+    }
+}
