@@ -38,6 +38,7 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
             judgements = result->judgements;
             gold = result->gold;
             articlesDone = result->articlesDone;
+            skipped = result->skipped;
         }
         done.append(QJsonObject {{QStringLiteral("file"), file}, {QStringLiteral("spans"), spans},
             {QStringLiteral("judgements"), judgements}, {QStringLiteral("gold"), gold},
@@ -51,8 +52,8 @@ int importCodings(Project &project, const QStringList &files, bool w3c, Phase ph
                     .arg(gold));
             if (skipped > 0)
                 out(QCoreApplication::translate("cli",
-                    "  %1 annotation(s) skipped: already in the project (same id, or same coder, "
-                    "function and range)")
+                    "  %1 line(s) skipped: already in the project (the same annotation, or the "
+                    "same coder, function and range; the same answer; the same gold span)")
                         .arg(skipped));
             if (articlesDone > 0)
                 out(QCoreApplication::translate("cli",

@@ -15,8 +15,10 @@
 #include <QJsonDocument>
 #include <QJsonObject>
 
+#include <map>
 #include <optional>
 #include <set>
+#include <tuple>
 #include <utility>
 
 namespace fourfold {
@@ -67,6 +69,12 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
         OffsetMap map {QString()};
         // Its live spans, read at its first gold line; a span added after them drops them.
         std::optional<std::vector<Annotation>> spans;
+        // What it already holds (read when the article's first line comes), and what the file
+        // added to it: a line found here is skipped, so importing a file twice adds nothing.
+        std::set<std::tuple<qint64, int, qint64, qint64, int>>
+            spanKeys; // coder, function, range, phase
+        std::set<std::tuple<int, qint64, qint64>> goldKeys; // function, range
+        std::map<std::tuple<qint64, QString, int>, QString> answers; // (coder, item, phase) → value
     } article;
     CodingImportReport report;
     std::set<std::pair<qint64, qint64>> finished; // (article, coder) with imported codings
@@ -152,7 +160,27 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 auto loaded = project.article(*articleId);
                 if (!loaded)
                     return std::unexpected(loaded.error());
-                article = Current {*articleId, loaded->text, OffsetMap(loaded->text), {}};
+                article =
+                    Current {*articleId, loaded->text, OffsetMap(loaded->text), {}, {}, {}, {}};
+                auto spans = project.annotations(article.id);
+                if (!spans)
+                    return std::unexpected(spans.error());
+                for (const Annotation &a : *spans)
+                    article.spanKeys.insert({a.coder.value, int(a.content.function),
+                        a.content.range.start, a.content.range.end, int(a.phase)});
+                article.spans = std::move(*spans);
+                auto gold = project.goldAnnotations(article.id);
+                if (!gold)
+                    return std::unexpected(gold.error());
+                for (const GoldAnnotation &g : *gold)
+                    if (!g.deleted)
+                        article.goldKeys.insert(
+                            {int(g.content.function), g.content.range.start, g.content.range.end});
+                auto answers = project.judgements(article.id);
+                if (!answers)
+                    return std::unexpected(answers.error());
+                for (const Judgement &j : *answers)
+                    article.answers[{j.coder.value, j.itemKey, int(j.phase)}] = j.value;
             }
             const CoderId coder = coderIds.value(*coderKey);
 
@@ -163,6 +191,14 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 auto value = requiredString(o, "value", path, lineNo);
                 if (!value)
                     return std::unexpected(value.error());
+                // An answer that is already the coder's answer is skipped; a different one
+                // replaces it, as on the desk.
+                QString &current = article.answers[{coder.value, *item, int(phase)}];
+                if (current == *value) {
+                    ++report.skipped;
+                    continue;
+                }
+                current = *value;
                 SetJudgementEdit edit(article.id, coder, *item, *value, phase);
                 if (auto st = project.applyInBatch(edit); !st)
                     return failAt(st.error().code, path, lineNo, 0, st.error().message);
@@ -211,6 +247,12 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
                     tr("field \"gold\" must be true or false."));
             if (goldValue.toBool()) {
+                if (!article.goldKeys
+                         .insert({int(content.function), content.range.start, content.range.end})
+                         .second) {
+                    ++report.skipped;
+                    continue;
+                }
                 // A lead's gold span: its provenance is every live span of the same function
                 // that overlaps it.
                 if (!article.spans) {
@@ -231,6 +273,13 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 if (auto st = project.applyInBatch(edit); !st)
                     return failAt(st.error().code, path, lineNo, 0, st.error().message);
                 ++report.gold;
+                continue;
+            }
+            if (!article.spanKeys
+                     .insert({coder.value, int(content.function), content.range.start,
+                         content.range.end, int(phase)})
+                     .second) {
+                ++report.skipped;
                 continue;
             }
             AddAnnotationEdit edit(article.id, coder, content, phase);

@@ -24,9 +24,15 @@ struct CodingImportReport {
     qint64 judgements = 0;
     qint64 gold = 0;
     qint64 articlesDone = 0; // (article, coder) pairs marked done by the import
+    // Lines the project already held (or an earlier line of the file): the same coder, function,
+    // range and phase for a span; the same function and range for a gold span; an answer equal
+    // to the coder's answer to that item in that phase. Skipped, so importing a file twice adds
+    // nothing.
+    qint64 skipped = 0;
 };
 
-// Reads `path` and adds every span and answer in `phase`, all-or-nothing. Imported codings are
+// Reads `path` and adds every span and answer in `phase` that the project does not hold yet
+// (see CodingImportReport::skipped), all-or-nothing. Imported codings are
 // finished work: every article they cover is marked done for its coder (CodingScope). Fails with
 // InvalidInput naming file, line and what is wrong: bad JSON, a missing or mistyped field, an
 // unknown article, coder or function, a quote that does not occur (often enough) in the

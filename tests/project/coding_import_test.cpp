@@ -158,10 +158,13 @@ TEST_CASE("a gold line from a coder who is not a lead is refused with its line")
 TEST_CASE("importing many codings parses the codebook at most once")
 {
     CodingFixture f;
+    // 40 different spans: the first 1, 2, ..., 40 characters of the text (a line the project
+    // already holds would be skipped).
+    const QByteArray text = "The ferry to Brakwater will stop in May. Dr. Ilse Varn";
     QByteArray jsonl;
-    for (int i = 0; i < 40; ++i)
-        jsonl += "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
-                 "\"The ferry\"}\n";
+    for (int i = 1; i <= 40; ++i)
+        jsonl += "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":\""
+            + text.left(i) + "\"}\n";
     const qint64 before = store::codebookParses();
     auto r = f.run(jsonl);
     REQUIRE(r);
@@ -184,15 +187,24 @@ TEST_CASE("a codings import compiles the same statements for 40 lines as for 160
         f.addCoder(QStringLiteral("L01"), CoderRole::Lead);
         QByteArray jsonl = "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\","
                            "\"quote\":\"The ferry\"}\n";
+        // Different spans (the first 1, 2, ... characters of f2) and an answer that changes on
+        // every line: nothing the project already holds, so nothing is skipped.
+        const QByteArray f2 = "Het windpark komt er, bijv. op de dijk. Bewoners zijn boos.";
+        const char *values[2] = {"cause", "remedy"};
         for (int k = 0; k < sizes[i]; ++k)
-            jsonl += "{\"article\":\"f2\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":"
-                     "\"windpark\"}\n"
-                     "{\"article\":\"f2\",\"coder\":\"C01\",\"item\":\"dominant_function\","
-                     "\"value\":\"cause\"}\n";
-        // Gold lines whose one source is the span on f1.
+            jsonl += "{\"article\":\"f2\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\""
+                + f2.left(k + 1)
+                + "\"}\n"
+                  "{\"article\":\"f2\",\"coder\":\"C01\",\"item\":\"dominant_function\","
+                  "\"value\":\""
+                + values[k % 2] + "\"}\n";
+        // Gold lines whose one source is the span on f1 ("The ferry"): its first 1, 2, ...
+        // characters and on into the text.
+        const QByteArray f1 = "The ferry to Brakwater will stop in May. Dr. Ilse Varn blames";
         for (int k = 0; k < sizes[i]; ++k)
             jsonl += "{\"article\":\"f1\",\"coder\":\"L01\",\"gold\":true,\"function\":"
-                     "\"problem\",\"quote\":\"ferry\"}\n";
+                     "\"problem\",\"quote\":\""
+                + f1.left(k + 1) + "\"}\n";
         const Database &db = f.project.databaseForTesting();
         const qint64 preparedBefore = db.statementsPrepared();
         const qint64 runBefore = db.statementsRun();
@@ -226,4 +238,45 @@ TEST_CASE("invalid UTF-8 in a codings file names its line and column and changes
     CHECK(r.error().column == 62);
     CHECK(r.error().message.contains(QStringLiteral("codings.jsonl:2:62")));
     CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+}
+
+TEST_CASE("importing the same codings file twice adds nothing the second time")
+{
+    // The rule every importer keeps (README, "Importing"): a second import of the same lines
+    // adds no span, answer, gold span, status or log entry.
+    CodingFixture f;
+    f.addCoder(QStringLiteral("L01"), CoderRole::Lead);
+    const QByteArray lines =
+        "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":"
+        "\"blames the budget\",\"attributes\":{\"actor\":\"budget\"}}\n"
+        "{\"article\":\"f2\",\"coder\":\"C01\",\"item\":\"dominant_function\",\"value\":"
+        "\"evaluation\"}\n"
+        "{\"article\":\"f1\",\"coder\":\"L01\",\"gold\":true,\"function\":\"cause\","
+        "\"quote\":\"the budget\",\"rationale\":\"the actor only\"}\n";
+    auto first = f.run(lines);
+    REQUIRE(first);
+    CHECK(first->spans == 1);
+    CHECK(first->judgements == 1);
+    CHECK(first->gold == 1);
+    CHECK(first->skipped == 0);
+    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+
+    auto second = f.run(lines);
+    REQUIRE(second);
+    CHECK(second->spans == 0);
+    CHECK(second->judgements == 0);
+    CHECK(second->gold == 0);
+    CHECK(second->articlesDone == 0);
+    CHECK(second->skipped == 3);
+    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+
+    // A line repeated inside one file is added once.
+    CodingFixture g;
+    auto twice = g.run("{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
+                       "\"blames\"}\n"
+                       "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
+                       "\"blames\"}\n");
+    REQUIRE(twice);
+    CHECK(twice->spans == 1);
+    CHECK(twice->skipped == 1);
 }
