@@ -80,8 +80,8 @@ int runImport(const QStringList &arguments)
     const QCommandLineOption format(QStringLiteral("format"),
         QCoreApplication::translate("cli",
             "Read every file as txt, html, jsonl, csv, feed (RSS or Atom), newsxml (NITF or "
-            "NewsML-G2), docx or odt (default: from each file's suffix; .xml and unknown suffixes "
-            "from the content)."),
+            "NewsML-G2), docx, odt or pdf (default: from each file's suffix; .xml and unknown "
+            "suffixes from the content)."),
         QStringLiteral("FORMAT"));
     const QCommandLineOption language(QStringLiteral("language"),
         QCoreApplication::translate(
@@ -131,8 +131,8 @@ int runImport(const QStringList &arguments)
         if (!options.format)
             return usageError(command,
                 QCoreApplication::translate("cli",
-                    "unknown format \"%1\" (expected txt, html, jsonl, csv, feed, newsxml, docx "
-                    "or odt).")
+                    "unknown format \"%1\" (expected txt, html, jsonl, csv, feed, newsxml, docx, "
+                    "odt or pdf).")
                     .arg(parser.value(format)));
     }
     options.language = parser.value(language);

@@ -8,6 +8,7 @@
 #include "core/io/jsonl_reader.h"
 #include "core/io/news_xml_reader.h"
 #include "core/io/odt_reader.h"
+#include "core/io/pdf_reader.h"
 #include "core/io/text_reader.h"
 #include "core/io/xml_document.h"
 
@@ -99,17 +100,17 @@ private:
                              .toUpper()));
         }
         if (QStringView(article.text).trimmed().isEmpty()) {
-        // A NUL can only come through an escape (\u0000 in JSON, &#0; is refused by XML), since
-        // a NUL byte makes the whole file binary; no text holds one, and C strings end at it.
-        for (const auto &[field, value] :
-            {std::pair {"text", &article.text}, std::pair {"title", &article.title},
-                std::pair {"outlet", &article.outlet}, std::pair {"published", &article.published},
-                std::pair {"language", &article.language}})
-            if (value->contains(QChar(0)))
-                return failed(ErrorCode::InvalidInput,
-                    tr("the %1 of the article \"%2\" holds a NUL character (U+0000), which no "
-                       "text holds")
-                        .arg(QLatin1String(field), article.externalId));
+            // A NUL can only come through an escape (\u0000 in JSON, &#0; is refused by XML), since
+            // a NUL byte makes the whole file binary; no text holds one, and C strings end at it.
+            for (const auto &[field, value] : {std::pair {"text", &article.text},
+                     std::pair {"title", &article.title}, std::pair {"outlet", &article.outlet},
+                     std::pair {"published", &article.published},
+                     std::pair {"language", &article.language}})
+                if (value->contains(QChar(0)))
+                    return failed(ErrorCode::InvalidInput,
+                        tr("the %1 of the article \"%2\" holds a NUL character (U+0000), which no "
+                           "text holds")
+                            .arg(QLatin1String(field), article.externalId));
             return failed(ErrorCode::InvalidInput,
                 tr("the article \"%1\" has no text").arg(article.externalId));
         }
@@ -196,7 +197,7 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
         if (!format && !looksLikeXml(input.pending())) {
             return failAt(ErrorCode::Unsupported, path, 0, 0,
                 tr("the format cannot be told from the file name or its content; name the file "
-                   ".txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt or .xml, or choose "
+                   ".txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf or .xml, or choose "
                    "the format"));
         }
         FOURFOLD_TRY_STATUS(readXmlArticles(input, format, take));
@@ -206,7 +207,8 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
     case ImportFormat::Text:
     case ImportFormat::Html:
     case ImportFormat::Docx:
-    case ImportFormat::Odt: {
+    case ImportFormat::Odt:
+    case ImportFormat::Pdf: {
         Result<QByteArray> bytes = input.readAll();
         if (!bytes)
             return std::unexpected(bytes.error());
@@ -214,7 +216,8 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
             ? readTextArticle(*bytes, path)
             : format == ImportFormat::Html ? readHtmlArticle(*bytes, path)
             : format == ImportFormat::Docx ? readDocxArticle(*bytes, path, options.zipLimits)
-                                           : readOdtArticle(*bytes, path, options.zipLimits);
+            : format == ImportFormat::Odt  ? readOdtArticle(*bytes, path, options.zipLimits)
+                                           : readPdfArticle(*bytes, path);
         if (!article)
             return std::unexpected(article.error());
         FOURFOLD_TRY_STATUS(take(std::move(*article)));
@@ -303,6 +306,8 @@ QString importFormatKey(ImportFormat format)
         return QStringLiteral("docx");
     case ImportFormat::Odt:
         return QStringLiteral("odt");
+    case ImportFormat::Pdf:
+        return QStringLiteral("pdf");
     }
     return QStringLiteral("txt");
 }
@@ -326,6 +331,8 @@ std::optional<ImportFormat> importFormatFromKey(const QString &key)
         return ImportFormat::Docx;
     if (k == u"odt")
         return ImportFormat::Odt;
+    if (k == u"pdf")
+        return ImportFormat::Pdf;
     return std::nullopt;
 }
 

@@ -1,6 +1,6 @@
 #pragma once
 // Reading articles from files: plain text (a file or a folder of files), HTML, JSON Lines, CSV,
-// RSS and Atom feeds, NITF and NewsML-G2 news items, and DOCX and ODT documents. Each file is
+// RSS and Atom feeds, NITF and NewsML-G2 news items, DOCX and ODT documents and PDF. Each file is
 // read all-or-nothing: the first problem makes the whole file fail with an Error naming file, line
 // (and column where known) and what is wrong.
 //
@@ -124,6 +124,22 @@
 // author (DOCX dc:creator; ODT meta:initial-creator, else dc:creator), subject, description,
 // keywords, modified. A document without text is an error.
 //
+// PDF (.pdf, through poppler's C++ interface): one article per file, read whole; id = the file
+// name without its last suffix, sourceLine 1. The file must have a "%PDF-" header in its first
+// 1024 bytes. Text: poppler's text layer in its reading order; lines found from the words'
+// boxes; running headers and footers (a line among the first or last two of a page whose text,
+// digits made alike, is there on more than half of the pages and on two at least) and page
+// numbers near the top or bottom edge are dropped; paragraphs are rebuilt from the line spacing
+// (a step of more than 1.3 times the usual spacing, the lower quartile of the steps), first-line
+// indents, and at a page or column change from the length of the last line (shorter than 85% of its
+// page's widest line ends the paragraph); a word hyphenated at a line end is joined when the next
+// line starts with a small letter, and a soft hyphen at a line end is dropped. Title: the Title of
+// the document information dictionary (the first paragraph is left out when it equals it), else a
+// first paragraph of at most maxTextTitleLength characters followed by more, else the file name.
+// Published: CreationDate as ISO 8601 in UTC. Meta: author (Author), pages. Errors: a file that
+// poppler cannot open (damaged), a PDF encrypted with a user password, a PDF without a text layer
+// on any page ("it looks scanned": OCR it first), no text besides headers, footers and numbers.
+//
 // JSON Lines (.jsonl, .ndjson; https://jsonlines.org): one JSON object per line (LF or CRLF);
 // whitespace-only lines are skipped. Fields: "id", "title", "text" (required strings),
 // "outlet", "published", "language" (optional strings; null = absent) and "meta" (optional
@@ -163,7 +179,7 @@
 
 namespace fourfold {
 
-enum class ImportFormat { Text, Html, JsonLines, Csv, Feed, NewsXml, Docx, Odt };
+enum class ImportFormat { Text, Html, JsonLines, Csv, Feed, NewsXml, Docx, Odt, Pdf };
 
 // The largest plain text or HTML file (read whole), in bytes (1 GiB).
 inline constexpr qint64 maxImportFileSize = qint64(1) << 30;
@@ -174,13 +190,13 @@ inline constexpr qint64 maxCsvRecordSize = qint64(64) << 20;
 // The longest first line of a text file that can be its title, in UTF-16 code units.
 inline constexpr qsizetype maxTextTitleLength = 200;
 
-// "txt", "html", "jsonl", "csv", "feed", "newsxml", "docx", "odt".
+// "txt", "html", "jsonl", "csv", "feed", "newsxml", "docx", "odt", "pdf".
 QString importFormatKey(ImportFormat format);
 // The format for a key: the keys above and the aliases "text", "htm", "ndjson", "rss", "atom",
 // "nitf", "newsml" (any letter case); nothing for any other key.
 std::optional<ImportFormat> importFormatFromKey(const QString &key);
 // From the file name's suffix (.txt/.text, .html/.htm, .jsonl/.ndjson, .csv, .rss/.atom,
-// .nitf/.newsml, .docx, .odt: any suffix that is a key; any letter case); nothing otherwise
+// .nitf/.newsml, .docx, .odt, .pdf: any suffix that is a key; any letter case); nothing otherwise
 // (.xml included: such files are told from their content).
 std::optional<ImportFormat> importFormatFromPath(const QString &path);
 
