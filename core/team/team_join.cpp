@@ -10,6 +10,7 @@
 #include "core/team/server_store_rows.h"
 #include "core/team/server_store_schema.h"
 #include "core/team/team_project.h"
+#include "core/team/team_rows.h"
 
 #include <QCoreApplication>
 #include <QFile>
@@ -50,21 +51,6 @@ constexpr Part kParts[] {
     {ServerTable::GoldJudgement, nullptr, store::SharedKind::GoldJudgement},
     {ServerTable::GoldRejection, nullptr, store::SharedKind::GoldRejection},
 };
-
-// A coder's object from the server in the portable form coder copies merge by.
-store::PortableRow portableRow(const char *type, const QByteArray &json)
-{
-    QJsonObject content = store::fromJsonText(QString::fromUtf8(json));
-    store::PortableRow row;
-    row.type = QLatin1String(type);
-    row.uuid = content.take(QStringLiteral("uuid")).toString();
-    if (row.type == QLatin1String("assignment"))
-        row.seconds = content.take(QStringLiteral("active_seconds")).toInteger();
-    if (row.type == QLatin1String("link"))
-        content.remove(QStringLiteral("coder"));
-    row.content = content;
-    return row;
-}
 
 } // namespace
 
@@ -133,8 +119,8 @@ Result<JoinReport> TeamProject::join(
             for (size_t i = 0; i < std::size(kParts); ++i) {
                 for (const QByteArray &json : parts[i]) {
                     if (kParts[i].objectType)
-                        FOURFOLD_TRY_STATUS(
-                            store::writePortableRow(*db, portableRow(kParts[i].objectType, json)));
+                        FOURFOLD_TRY_STATUS(store::writePortableRow(
+                            *db, portableFromServer(QLatin1String(kParts[i].objectType), json)));
                     else
                         FOURFOLD_TRY_STATUS(store::writeSharedRow(*db, kParts[i].kind, json));
                 }

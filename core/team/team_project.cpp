@@ -11,6 +11,7 @@
 #include "core/team/server_store_roles.h"
 #include "core/team/server_store_rows.h"
 #include "core/team/server_store_schema.h"
+#include "core/team/team_rows.h"
 
 #include <QCoreApplication>
 #include <QDir>
@@ -260,24 +261,12 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
             break;
         }
         for (const store::PortableRow &row : *rows) {
-            QJsonObject content = row.content;
-            content.insert(QStringLiteral("uuid"), row.uuid);
-            ServerTable table = ServerTable::Annotation;
-            if (row.type == QLatin1String("assignment")) {
-                table = ServerTable::Assignment;
-                content.insert(QStringLiteral("active_seconds"), row.seconds);
-                ++report.assignments;
-            } else if (row.type == QLatin1String("annotation")) {
-                ++report.annotations;
-            } else if (row.type == QLatin1String("judgement")) {
-                table = ServerTable::Judgement;
-                ++report.judgements;
-            } else {
-                table = ServerTable::Link;
-                content.insert(QStringLiteral("coder"), l.person.uuid);
-                ++report.links;
-            }
-            sent = batch.add(table, store::toJsonText(content).toUtf8());
+            const ServerTable table = serverTableOf(row.type);
+            ++(table == ServerTable::Assignment       ? report.assignments
+                    : table == ServerTable::Judgement ? report.judgements
+                    : table == ServerTable::Link      ? report.links
+                                                      : report.annotations);
+            sent = batch.add(table, serverFromPortable(row, l.person.uuid, row.seconds));
             if (!sent)
                 break;
         }

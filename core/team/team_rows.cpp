@@ -1,0 +1,44 @@
+#include "core/team/team_rows.h"
+
+#include "core/store/store_util.h"
+
+namespace fourfold {
+
+ServerTable serverTableOf(const QString &type)
+{
+    if (type == QLatin1String("assignment"))
+        return ServerTable::Assignment;
+    if (type == QLatin1String("judgement"))
+        return ServerTable::Judgement;
+    if (type == QLatin1String("link"))
+        return ServerTable::Link;
+    return ServerTable::Annotation;
+}
+
+store::PortableRow portableFromServer(const QString &type, const QByteArray &json)
+{
+    QJsonObject content = store::fromJsonText(QString::fromUtf8(json));
+    store::PortableRow row;
+    row.type = type;
+    row.uuid = content.take(QStringLiteral("uuid")).toString();
+    if (type == QLatin1String("assignment"))
+        row.seconds = content.take(QStringLiteral("active_seconds")).toInteger();
+    if (type == QLatin1String("link"))
+        content.remove(QStringLiteral("coder"));
+    row.content = content;
+    return row;
+}
+
+QByteArray serverFromPortable(
+    const store::PortableRow &row, const QString &coderUuid, qint64 seconds)
+{
+    QJsonObject content = row.content;
+    content.insert(QStringLiteral("uuid"), row.uuid);
+    if (row.type == QLatin1String("assignment"))
+        content.insert(QStringLiteral("active_seconds"), seconds);
+    if (row.type == QLatin1String("link"))
+        content.insert(QStringLiteral("coder"), coderUuid);
+    return store::toJsonText(content).toUtf8();
+}
+
+} // namespace fourfold

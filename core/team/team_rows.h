@@ -1,0 +1,23 @@
+#pragma once
+// The coders' objects between a working file and the server: the portable form coder copies
+// merge by (core/store/copy_tables.h) and the server's rows of the same objects (JSON whose keys
+// are the server's columns). No SQL here.
+
+#include "core/store/copy_tables.h"
+#include "core/team/server_store_rows.h"
+
+#include <QByteArray>
+
+namespace fourfold {
+
+// The server table holding objects of the portable type `type` ("assignment", "annotation",
+// "judgement", "link").
+ServerTable serverTableOf(const QString &type);
+// A server row of `type` as a portable row (an assignment's active_seconds as its seconds).
+store::PortableRow portableFromServer(const QString &type, const QByteArray &json);
+// `row` as a server row of the coder `coderUuid`; an assignment carries `seconds` as its
+// active_seconds.
+QByteArray serverFromPortable(
+    const store::PortableRow &row, const QString &coderUuid, qint64 seconds);
+
+} // namespace fourfold
