@@ -1,14 +1,11 @@
 #include "core/io/reliability_table_bytes.h"
 
-#include "core/io/unit_index.h"
-
 #include <QChar>
 #include <QStringDecoder>
 
 #include <algorithm>
 #include <cstring>
 #include <deque>
-#include <memory>
 #include <string>
 #include <string_view>
 #include <unordered_map>
@@ -167,6 +164,29 @@ private:
     std::deque<std::string> m_stored; // the labels' bytes, at fixed addresses
 };
 
+// True if two units share an id. `keys`: each unit's id hash in the high half and its position
+// in the low half; sorted here by hash (least significant digit radix sort of the high half,
+// eight bits a pass: Knuth, TAOCP vol. 3, §5.2.5), so that units with equal ids are neighbours.
+bool hasRepeatedId(const ReliabilityTable &table, std::vector<quint64> &keys)
+{
+    std::vector<quint64> buffer(keys.size());
+    for (int shift = 32; shift < 64; shift += 8) {
+        size_t start[257] = {};
+        for (const quint64 key : keys)
+            ++start[((key >> shift) & 0xFF) + 1];
+        for (int digit = 0; digit < 256; ++digit)
+            start[digit + 1] += start[digit];
+        for (const quint64 key : keys)
+            buffer[start[(key >> shift) & 0xFF]++] = key;
+        keys.swap(buffer);
+    }
+    for (size_t i = 1; i < keys.size(); ++i)
+        for (size_t j = i; j-- > 0 && (keys[j] >> 32) == (keys[i] >> 32);)
+            if (table.ownId(size_t(quint32(keys[j]))) == table.ownId(size_t(quint32(keys[i]))))
+                return true;
+    return false;
+}
+
 } // namespace
 
 std::optional<ReliabilityTable> readReliabilityTableBytes(
@@ -181,7 +201,10 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
     table.source = path;
     Labels labels(table);
     const qsizetype lines = qsizetype(std::ranges::count(bytes, '\n')) + 1;
-    std::unique_ptr<UnitIndex> seen; // made once the header tells how the rows look
+    // Each unit's id hash (high half) and position (low half), checked for repeats at the end:
+    // written in file order, then sorted, which costs less than a probe into a large hash table
+    // per row (a cache miss each).
+    std::vector<quint64> idHashes;
 
     std::vector<std::string_view> fields;
     std::string unescaped; // this record's quoted fields that held doubled quotes, end to end
@@ -210,7 +233,7 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
             if (table.coders.size() < 2)
                 return false;
             table.reserve(size_t(lines));
-            seen = std::make_unique<UnitIndex>(table, lines);
+            idHashes.reserve(size_t(lines));
             return true;
         }
         if (qsizetype(fields.size()) != columns)
@@ -232,8 +255,10 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
         } else {
             unit = text(id);
         }
+        idHashes.push_back(quint64(quint32(std::hash<std::string_view> {}(id))) << 32
+            | quint64(table.unitCount()));
         table.appendUnit(unit, cells, line);
-        return seen->insertLast() < 0;
+        return true;
     };
 
     // RFC 4180 §2 on the bytes, as forEachCsvRecord reads the decoded text (quotes, commas and
@@ -366,7 +391,7 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
     }
     if (inRecord && !endRecord())
         return std::nullopt;
-    if (columns == 0 || table.isEmpty())
+    if (columns == 0 || table.isEmpty() || hasRepeatedId(table, idHashes))
         return std::nullopt;
     return table;
 }
