@@ -80,8 +80,8 @@ int runImport(const QStringList &arguments)
     const QCommandLineOption format(QStringLiteral("format"),
         QCoreApplication::translate("cli",
             "Read every file as txt, html, jsonl, csv, feed (RSS or Atom), newsxml (NITF or "
-            "NewsML-G2), docx, odt or pdf (default: from each file's suffix; .xml and unknown "
-            "suffixes from the content)."),
+            "NewsML-G2), docx, odt, pdf or epub (default: from each file's suffix; .xml and "
+            "unknown suffixes from the content)."),
         QStringLiteral("FORMAT"));
     const QCommandLineOption language(QStringLiteral("language"),
         QCoreApplication::translate(
@@ -92,6 +92,9 @@ int runImport(const QStringList &arguments)
             "CSV: take FIELD (id, title, text, outlet, published, language) from the column "
             "HEADER. Repeatable."),
         QStringLiteral("FIELD=HEADER"));
+    const QCommandLineOption wholeBook(QStringLiteral("whole-book"),
+        QCoreApplication::translate(
+            "cli", "EPUB: import each book as one article instead of one article per chapter."));
     const QCommandLineOption json(
         QStringLiteral("json"), QCoreApplication::translate("cli", "Print the report as JSON."));
     const QCommandLineOption w3c(QStringLiteral("w3c"),
@@ -106,7 +109,7 @@ int runImport(const QStringList &arguments)
             "With --w3c or --codings: the phase of the imported codings (training, pilot, "
             "reliability, production; default production)."),
         QStringLiteral("PHASE"));
-    parser.addOptions({format, language, column, json, w3c, codings, phase});
+    parser.addOptions({format, language, column, wholeBook, json, w3c, codings, phase});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), QCoreApplication::translate("cli", "The project file."));
     parser.addPositionalArgument(QStringLiteral("FILE..."),
@@ -132,10 +135,11 @@ int runImport(const QStringList &arguments)
             return usageError(command,
                 QCoreApplication::translate("cli",
                     "unknown format \"%1\" (expected txt, html, jsonl, csv, feed, newsxml, docx, "
-                    "odt or pdf).")
+                    "odt, pdf or epub).")
                     .arg(parser.value(format)));
     }
     options.language = parser.value(language);
+    options.epubWholeBook = parser.isSet(wholeBook);
     for (const QString &mapping : parser.values(column)) {
         const qsizetype eq = mapping.indexOf(QLatin1Char('='));
         if (eq <= 0 || eq == mapping.size() - 1)

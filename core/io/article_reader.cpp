@@ -3,6 +3,7 @@
 #include "core/io/chunked_input.h"
 #include "core/io/csv_reader.h"
 #include "core/io/docx_reader.h"
+#include "core/io/epub_reader.h"
 #include "core/io/feed_reader.h"
 #include "core/io/html_reader.h"
 #include "core/io/jsonl_reader.h"
@@ -99,18 +100,18 @@ private:
                              .rightJustified(4, QLatin1Char('0'))
                              .toUpper()));
         }
+        // A NUL can only come through an escape (\u0000 in JSON, &#0; is refused by XML), since
+        // a NUL byte makes the whole file binary; no text holds one, and C strings end at it.
+        for (const auto &[field, value] :
+            {std::pair {"text", &article.text}, std::pair {"title", &article.title},
+                std::pair {"outlet", &article.outlet}, std::pair {"published", &article.published},
+                std::pair {"language", &article.language}})
+            if (value->contains(QChar(0)))
+                return failed(ErrorCode::InvalidInput,
+                    tr("the %1 of the article \"%2\" holds a NUL character (U+0000), which no "
+                       "text holds")
+                        .arg(QLatin1String(field), article.externalId));
         if (QStringView(article.text).trimmed().isEmpty()) {
-            // A NUL can only come through an escape (\u0000 in JSON, &#0; is refused by XML), since
-            // a NUL byte makes the whole file binary; no text holds one, and C strings end at it.
-            for (const auto &[field, value] : {std::pair {"text", &article.text},
-                     std::pair {"title", &article.title}, std::pair {"outlet", &article.outlet},
-                     std::pair {"published", &article.published},
-                     std::pair {"language", &article.language}})
-                if (value->contains(QChar(0)))
-                    return failed(ErrorCode::InvalidInput,
-                        tr("the %1 of the article \"%2\" holds a NUL character (U+0000), which no "
-                           "text holds")
-                            .arg(QLatin1String(field), article.externalId));
             return failed(ErrorCode::InvalidInput,
                 tr("the article \"%1\" has no text").arg(article.externalId));
         }
@@ -197,8 +198,8 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
         if (!format && !looksLikeXml(input.pending())) {
             return failAt(ErrorCode::Unsupported, path, 0, 0,
                 tr("the format cannot be told from the file name or its content; name the file "
-                   ".txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf or .xml, or choose "
-                   "the format"));
+                   ".txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf, .epub or .xml, or "
+                   "choose the format"));
         }
         FOURFOLD_TRY_STATUS(readXmlArticles(input, format, take));
         return checks.finish();
@@ -221,6 +222,14 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
         if (!article)
             return std::unexpected(article.error());
         FOURFOLD_TRY_STATUS(take(std::move(*article)));
+        break;
+    }
+    case ImportFormat::Epub: {
+        Result<QByteArray> bytes = input.readAll();
+        if (!bytes)
+            return std::unexpected(bytes.error());
+        FOURFOLD_TRY_STATUS(
+            readEpubArticles(*bytes, path, options.zipLimits, options.epubWholeBook, take));
         break;
     }
     case ImportFormat::JsonLines:
@@ -308,6 +317,8 @@ QString importFormatKey(ImportFormat format)
         return QStringLiteral("odt");
     case ImportFormat::Pdf:
         return QStringLiteral("pdf");
+    case ImportFormat::Epub:
+        return QStringLiteral("epub");
     }
     return QStringLiteral("txt");
 }
@@ -333,6 +344,8 @@ std::optional<ImportFormat> importFormatFromKey(const QString &key)
         return ImportFormat::Odt;
     if (k == u"pdf")
         return ImportFormat::Pdf;
+    if (k == u"epub")
+        return ImportFormat::Epub;
     return std::nullopt;
 }
 

@@ -1,8 +1,8 @@
 #pragma once
 // Reading articles from files: plain text (a file or a folder of files), HTML, JSON Lines, CSV,
-// RSS and Atom feeds, NITF and NewsML-G2 news items, DOCX and ODT documents and PDF. Each file is
-// read all-or-nothing: the first problem makes the whole file fail with an Error naming file, line
-// (and column where known) and what is wrong.
+// RSS and Atom feeds, NITF and NewsML-G2 news items, DOCX and ODT documents, PDF and EPUB. Each
+// file is read all-or-nothing: the first problem makes the whole file fail with an Error naming
+// file, line (and column where known) and what is wrong.
 //
 // Common rules (every format)
 // - Input must be UTF-8; a leading BOM is dropped. Invalid UTF-8 and NUL bytes (binary files)
@@ -140,6 +140,22 @@
 // poppler cannot open (damaged), a PDF encrypted with a user password, a PDF without a text layer
 // on any page ("it looks scanned": OCR it first), no text besides headers, footers and numbers.
 //
+// EPUB 3 (.epub; format key "epub"): a zip archive (the limits and refusals of DOCX and ODT
+// apply) with the mimetype application/epub+zip; META-INF/container.xml names the package
+// document (OPF), whose spine gives the chapters in reading order: each linear XHTML document of
+// the spine, read by the HTML rules above, that holds text (a cover or a page of images is
+// passed over; linear="no" items and SVG pages are left out). One article per chapter: id =
+// the file name without its last suffix, "#" and the manifest item's id; title, text and
+// language as the HTML reader finds them in the chapter; sourceLine = the chapter's place in
+// the spine (1-based); meta: chapter (that place), href (the entry), book (dc:title), author
+// (the dc:creators joined by ", "). With ImportOptions::epubWholeBook one article for the book:
+// id = the file name without its last suffix, title = dc:title (else the file name), text = the
+// chapters' headlines and texts in order. Both: outlet = dc:publisher, published = dc:date (as
+// written), language = dc:language. Errors: a mimetype of another kind, no container.xml or no
+// package document, a spine item the manifest or the archive does not hold, a spine document
+// listed as encrypted in META-INF/encryption.xml (DRM; font obfuscation is no obstacle), a book
+// without text.
+//
 // JSON Lines (.jsonl, .ndjson; https://jsonlines.org): one JSON object per line (LF or CRLF);
 // whitespace-only lines are skipped. Fields: "id", "title", "text" (required strings),
 // "outlet", "published", "language" (optional strings; null = absent) and "meta" (optional
@@ -179,7 +195,7 @@
 
 namespace fourfold {
 
-enum class ImportFormat { Text, Html, JsonLines, Csv, Feed, NewsXml, Docx, Odt, Pdf };
+enum class ImportFormat { Text, Html, JsonLines, Csv, Feed, NewsXml, Docx, Odt, Pdf, Epub };
 
 // The largest plain text or HTML file (read whole), in bytes (1 GiB).
 inline constexpr qint64 maxImportFileSize = qint64(1) << 30;
@@ -190,13 +206,14 @@ inline constexpr qint64 maxCsvRecordSize = qint64(64) << 20;
 // The longest first line of a text file that can be its title, in UTF-16 code units.
 inline constexpr qsizetype maxTextTitleLength = 200;
 
-// "txt", "html", "jsonl", "csv", "feed", "newsxml", "docx", "odt", "pdf".
+// "txt", "html", "jsonl", "csv", "feed", "newsxml", "docx", "odt", "pdf", "epub".
 QString importFormatKey(ImportFormat format);
 // The format for a key: the keys above and the aliases "text", "htm", "ndjson", "rss", "atom",
 // "nitf", "newsml" (any letter case); nothing for any other key.
 std::optional<ImportFormat> importFormatFromKey(const QString &key);
 // From the file name's suffix (.txt/.text, .html/.htm, .jsonl/.ndjson, .csv, .rss/.atom,
-// .nitf/.newsml, .docx, .odt, .pdf: any suffix that is a key; any letter case); nothing otherwise
+// .nitf/.newsml, .docx, .odt, .pdf, .epub: any suffix that is a key; any letter case); nothing
+// otherwise
 // (.xml included: such files are told from their content).
 std::optional<ImportFormat> importFormatFromPath(const QString &path);
 
@@ -213,9 +230,11 @@ struct ImportOptions {
     QHash<QString, QString> csvColumns;
     // How many bytes a JSON Lines or CSV file is read in at a time (tests make it small).
     qsizetype readChunkSize = defaultReadChunkSize;
-    // DOCX and ODT: the most bytes unpacked from one entry of the archive and from all of them
-    // (tests make them small).
+    // DOCX, ODT and EPUB: the most bytes unpacked from one entry of the archive and from all of
+    // them (tests make them small).
     ZipLimits zipLimits;
+    // EPUB: the whole book as one article instead of one article per chapter.
+    bool epubWholeBook = false;
 };
 
 // How far a reading has come, for a progress bar: the bytes of input read up to the end of the
