@@ -241,7 +241,7 @@ QString agreementText(const AgreementReport &r)
     lines << tr("Units         %1; pairable units %2; pairable values %3")
                  .arg(r.units)
                  .arg(r.alpha.pairableUnits)
-                 .arg(r.alpha.pairableValues);
+                 .arg(r.alpha.pairableValues, 0, 'f', 0);
     QString alphaLine = tr("Alpha (%1)  %2").arg(r.scale, fixed(r.alpha.value));
     if (!r.alpha.value)
         alphaLine += QStringLiteral(" — ") + QString::fromStdString(r.alpha.reason);
@@ -303,7 +303,7 @@ QString agreementText(const AgreementReport &r)
     if (r.minimumValues) {
         QString line = tr("Sample size   %1 pairable values; Krippendorff's minimum for alpha ≥ %2 "
                           "at p = 0.05 with the rarest value at %3%: %4")
-                           .arg(r.alpha.pairableValues, 0, 'f', 0) // a count: never 3.2e+06
+                           .arg(r.alpha.pairableValues, 0, 'f', 0)
                            .arg(r.alphaMin, 0, 'f', 3)
                            .arg(*r.rarestProportion * 100.0, 0, 'f', 1)
                            .arg(*r.minimumValues);

@@ -205,3 +205,29 @@ TEST_CASE("unitizing alpha of a project does not depend on the order its article
     CHECK_THAT(alphaFor({2, 0, 1}), Catch::Matchers::WithinAbs(forward, 1e-12));
     CHECK_THAT(alphaFor({1, 2, 0}), Catch::Matchers::WithinAbs(forward, 1e-12));
 }
+
+TEST_CASE("the text of a report prints counts of a million values as whole numbers")
+{
+    // 600,000 units × 2 coders, every cell filled: n = 1,200,000 pairable values (Krippendorff
+    // 2011, §C: n counts the values in units coded by at least two coders). QString::arg of a
+    // double would print 1.2e+06.
+    ReliabilityTable table;
+    table.coders = QStringList {QStringLiteral("A"), QStringLiteral("B")};
+    const qint32 yes = table.labelIndex(u"yes");
+    const qint32 no = table.labelIndex(u"no");
+    std::vector<qint32> column(600000);
+    for (size_t u = 0; u < column.size(); ++u)
+        column[u] = u % 3 == 0 ? no : yes;
+    std::vector<qint32> cells;
+    cells.reserve(2 * column.size());
+    for (size_t u = 0; u < column.size(); ++u) {
+        cells.push_back(column[u]);
+        cells.push_back(u % 5 == 0 ? no : column[u]);
+    }
+    table.appendNumberedUnits(QStringLiteral("a"), QStringLiteral("#u"), cells);
+    auto analysed = analyseTable(std::move(table), EncodingOptions {}, AgreementOptions {});
+    REQUIRE(analysed);
+    const QString text = agreementText(analysed->report);
+    CHECK(text.contains(QStringLiteral("pairable units 600000; pairable values 1200000")));
+    CHECK(text.contains(QStringLiteral("Sample size   1200000 pairable values")));
+}
