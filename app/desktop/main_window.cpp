@@ -652,7 +652,7 @@ void MainWindow::importArticles()
         return;
     const QStringList files = QFileDialog::getOpenFileNames(this, tr("Import articles"), QString(),
         tr("Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf "
-           "*.newsml *.xml)"));
+           "*.newsml *.xml *.docx *.odt *.pdf *.epub)"));
     if (files.isEmpty())
         return;
     const ImportOutcome outcome = importWithProgress(m_session->project(), files, this);
