@@ -1,4 +1,4 @@
-// fourfold-cli team: team projects on a PostgreSQL server (core/team): publish and join.
+// fourfold-cli team: team projects on a PostgreSQL server (core/team): publish, join, sync.
 
 #include "app/cli/cli_output.h"
 #include "core/project/project.h"
@@ -168,6 +168,50 @@ int runTeamJoin(const QStringList &arguments)
     return ExitOk;
 }
 
+int runTeamSync(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("team sync");
+    QCommandLineParser parser;
+    const QCommandLineOption json(
+        QStringLiteral("json"), QCoreApplication::translate("cli", "Print the result as JSON."));
+    parser.addOption(json);
+    parser.addPositionalArgument(
+        QStringLiteral("FILE"), QCoreApplication::translate("cli", "Your team working file."));
+    if (int rc = parseCommandLine(parser, command,
+            QCoreApplication::translate("cli",
+                "Push your changed codings to the team project's server and pull the ones you "
+                "may see, once (assignments, spans, links, answers; coding time adds up). An "
+                "object changed on both sides keeps the later version and is listed as a "
+                "conflict for the lead."),
+            arguments);
+        rc >= 0)
+        return rc;
+    if (parser.positionalArguments().size() != 1)
+        return usageError(
+            command, QCoreApplication::translate("cli", "expected exactly one working file."));
+    auto project = Project::open(parser.positionalArguments().first());
+    if (!project)
+        return report(project.error());
+    auto result = TeamProject::sync(*project);
+    if (!result)
+        return report(result.error());
+    if (parser.isSet(json)) {
+        printJson(QJsonObject {{QStringLiteral("server"), result->server},
+            {QStringLiteral("pushed"), result->pushed}, {QStringLiteral("pulled"), result->pulled},
+            {QStringLiteral("conflicts"), result->conflicts},
+            {QStringLiteral("last_change"), result->lastChange}});
+        return ExitOk;
+    }
+    out(QCoreApplication::translate(
+        "cli", "Synced with %1: %2 sent, %3 received, %4 conflicts (through change %5).")
+            .arg(result->server)
+            .arg(result->pushed)
+            .arg(result->pulled)
+            .arg(result->conflicts)
+            .arg(result->lastChange));
+    return ExitOk;
+}
+
 } // namespace
 
 int runTeam(const QStringList &arguments)
@@ -177,12 +221,16 @@ int runTeam(const QStringList &arguments)
         return runTeamPublish(arguments.mid(1));
     if (sub == QLatin1String("join"))
         return runTeamJoin(arguments.mid(1));
+    if (sub == QLatin1String("sync"))
+        return runTeamSync(arguments.mid(1));
     if (sub.isEmpty() || sub == QLatin1String("--help") || sub == QLatin1String("-h")) {
         out(QCoreApplication::translate("cli", "Usage: fourfold-cli team SUBCOMMAND [options]"));
         out(QCoreApplication::translate("cli",
             "  publish   Create the team project of a project file on a PostgreSQL server."));
         out(QCoreApplication::translate(
             "cli", "  join      Write your working file of a team project from its server."));
+        out(QCoreApplication::translate(
+            "cli", "  sync      Push and pull a working file's codings once."));
         return sub.isEmpty() ? ExitUsage : ExitOk;
     }
     return usageError(QStringLiteral("team"),

@@ -193,6 +193,26 @@ Status writeSharedRow(Database &db, SharedKind kind, const QByteArray &json)
     return {};
 }
 
+Result<QHash<QString, QString>> settingsWithPrefix(const Database &db, const QString &prefix)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT key, value FROM project_setting WHERE substr(key, 1, length(?1)) = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, prefix);
+    QHash<QString, QString> out;
+    FOURFOLD_TRY_STATUS(forEachRow(
+        *stmt,
+        [](const Statement &st) {
+            return std::pair {st.columnText(0), st.columnText(1)};
+        },
+        [&](std::pair<QString, QString> &&kv) -> Status {
+            out.insert(kv.first, kv.second);
+            return {};
+        }));
+    return out;
+}
+
 Status forEachSharedRow(
     const Database &db, SharedKind kind, const std::function<Status(const QByteArray &)> &visit)
 {

@@ -7,6 +7,7 @@
 #include "core/model/error.h"
 
 #include <QByteArray>
+#include <QHash>
 #include <QString>
 
 #include <functional>
@@ -44,6 +45,10 @@ Status forEachSharedRow(
 // not written. InvalidInput for a row that is not a JSON object or an article whose units are
 // not "\x" + hex.
 Status writeSharedRow(Database &db, SharedKind kind, const QByteArray &json);
+
+// Every project setting whose key starts with `prefix`, by key (a team working file keeps the
+// last synced version of each object as "team.base:" settings).
+Result<QHash<QString, QString>> settingsWithPrefix(const Database &db, const QString &prefix);
 
 } // namespace store
 } // namespace fourfold

@@ -3,6 +3,7 @@
 #include "core/team/server_store_connection.h"
 
 #include <QString>
+#include <QStringList>
 
 #include <algorithm>
 
@@ -120,6 +121,91 @@ Result<QByteArrayList> selectServerRows(
             *lastChange = std::max(*lastChange, r->integer(i, 1));
     }
     return out;
+}
+
+Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByteArrayList &rows)
+{
+    if (rows.isEmpty())
+        return {};
+    const QString name = QLatin1String(serverTableName(table));
+    const QStringList columns = QString::fromLatin1(columnsOf(table)).split(QStringLiteral(", "));
+    QStringList sets;
+    for (const QString &c : columns) {
+        if (c == QLatin1String("uuid"))
+            continue;
+        if (c == QLatin1String("active_seconds"))
+            sets << QStringLiteral("active_seconds = fourfold.assignment.active_seconds + "
+                                   "excluded.active_seconds");
+        else
+            sets << QStringLiteral("%1 = excluded.%1").arg(c);
+    }
+    const QString sql =
+        QStringLiteral("INSERT INTO fourfold.%1 (%2) SELECT %2 FROM "
+                       "jsonb_populate_recordset(NULL::fourfold.%1, $1::jsonb) "
+                       "ON CONFLICT (uuid) DO UPDATE SET %3")
+            .arg(name, columns.join(QStringLiteral(", ")), sets.join(QStringLiteral(", ")));
+    QByteArray array = "[";
+    for (qsizetype i = 0; i < rows.size(); ++i) {
+        if (i)
+            array += ',';
+        array += rows[i];
+    }
+    array += ']';
+    if (table == ServerTable::Assignment) {
+        // A coder may change its assignments but never insert one, and INSERT ... ON CONFLICT
+        // needs the insert policy even where it updates: update first, then insert what is new
+        // (only a lead has any).
+        QStringList updates;
+        for (const QString &c : columns)
+            if (c != QLatin1String("uuid"))
+                updates << (c == QLatin1String("active_seconds")
+                        ? QStringLiteral("active_seconds = a.active_seconds + r.active_seconds")
+                        : QStringLiteral("%1 = r.%1").arg(c));
+        FOURFOLD_TRY_STATUS(conn.run(
+            QStringLiteral("UPDATE fourfold.assignment a SET %1 FROM "
+                           "jsonb_populate_recordset(NULL::fourfold.assignment, $1::jsonb) r "
+                           "WHERE a.uuid = r.uuid")
+                .arg(updates.join(QStringLiteral(", "))),
+            {array}));
+        return conn.run(
+            QStringLiteral("INSERT INTO fourfold.assignment (%1) SELECT %1 FROM "
+                           "jsonb_populate_recordset(NULL::fourfold.assignment, $1::jsonb) r "
+                           "WHERE NOT EXISTS (SELECT 1 FROM fourfold.assignment a WHERE a.uuid = "
+                           "r.uuid)")
+                .arg(columns.join(QStringLiteral(", "))),
+            {array});
+    }
+    return conn.run(sql, {array});
+}
+
+Result<QByteArrayList> selectServerRowsSince(ServerConnection &conn, ServerTable table,
+    qint64 afterChange, const QString &fromXact, qint64 *lastChange)
+{
+    const QString name = QLatin1String(serverTableName(table));
+    auto r = conn.query(
+        QStringLiteral("SELECT (to_jsonb(t) - 'change' - 'change_xact' - 'id')::text, t.change "
+                       "FROM fourfold.%1 t WHERE t.change > $1 OR t.change_xact >= $2::xid8 "
+                       "ORDER BY t.change")
+            .arg(name),
+        {QByteArray::number(afterChange), fromXact.toLatin1()});
+    if (!r)
+        return std::unexpected(r.error());
+    QByteArrayList out;
+    out.reserve(r->rows());
+    for (int i = 0; i < r->rows(); ++i) {
+        out.push_back(r->bytes(i, 0));
+        if (lastChange)
+            *lastChange = std::max(*lastChange, r->integer(i, 1));
+    }
+    return out;
+}
+
+Result<QString> serverSnapshotXmin(ServerConnection &conn)
+{
+    auto r = conn.query(QStringLiteral("SELECT pg_snapshot_xmin(pg_current_snapshot())::text"));
+    if (!r)
+        return std::unexpected(r.error());
+    return r->text(0, 0);
 }
 
 Result<qint64> visibleServerRows(ServerConnection &conn, ServerTable table)

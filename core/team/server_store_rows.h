@@ -42,6 +42,23 @@ Status insertServerRows(ServerConnection &conn, ServerTable table, const QByteAr
 Result<QByteArrayList> selectServerRows(
     ServerConnection &conn, ServerTable table, qint64 *lastChange);
 
+// Inserts or overwrites by uuid the coders' objects `rows` of `table` (Assignment, Annotation,
+// Judgement or Link) in one statement; an assignment's "active_seconds" is added to the
+// server's, not written over it. Fails with the server's error (NotAllowed when a row is not the
+// role's to write).
+Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByteArrayList &rows);
+
+// The rows of `table` the role may see that changed after `afterChange` or were written by a
+// transaction at or after `fromXact` (one that may have been running when the last pull took
+// its snapshot, holding a lower change number), in change order; `*lastChange` is raised as in
+// selectServerRows.
+Result<QByteArrayList> selectServerRowsSince(ServerConnection &conn, ServerTable table,
+    qint64 afterChange, const QString &fromXact, qint64 *lastChange);
+
+// The oldest transaction still running as this one sees it (pg_snapshot_xmin of the current
+// snapshot), as text: the next pull reads again whatever such transactions wrote.
+Result<QString> serverSnapshotXmin(ServerConnection &conn);
+
 // How many rows of `table` the connected role may see.
 Result<qint64> visibleServerRows(ServerConnection &conn, ServerTable table);
 

@@ -100,6 +100,9 @@ Result<JoinReport> TeamProject::join(
         return fail(ErrorCode::InvalidArgument,
             tr("The login %1 is %2, not %3.").arg(report.server, report.pseudonym, pseudonym));
 
+    auto xmin = serverSnapshotXmin(*conn);
+    if (!xmin)
+        return std::unexpected(xmin.error());
     std::vector<QByteArrayList> parts;
     for (const Part &part : kParts) {
         auto rows = selectServerRows(*conn, part.table, &report.lastChange);
@@ -118,10 +121,13 @@ Result<JoinReport> TeamProject::join(
         auto body = [&]() -> Status {
             for (size_t i = 0; i < std::size(kParts); ++i) {
                 for (const QByteArray &json : parts[i]) {
-                    if (kParts[i].objectType)
-                        FOURFOLD_TRY_STATUS(store::writePortableRow(
-                            *db, portableFromServer(QLatin1String(kParts[i].objectType), json)));
-                    else
+                    if (kParts[i].objectType) {
+                        const store::PortableRow row =
+                            portableFromServer(QLatin1String(kParts[i].objectType), json);
+                        FOURFOLD_TRY_STATUS(store::writePortableRow(*db, row));
+                        FOURFOLD_TRY_STATUS(
+                            store::setSetting(*db, teamBaseKey(row), teamBaseValue(row)));
+                    } else
                         FOURFOLD_TRY_STATUS(store::writeSharedRow(*db, kParts[i].kind, json));
                 }
             }
@@ -130,6 +136,7 @@ Result<JoinReport> TeamProject::join(
             FOURFOLD_TRY_STATUS(store::setSetting(*db, pseudonymSettingKey(), pseudonym));
             FOURFOLD_TRY_STATUS(
                 store::setSetting(*db, lastChangeSettingKey(), QString::number(report.lastChange)));
+            FOURFOLD_TRY_STATUS(store::setSetting(*db, lastXminSettingKey(), *xmin));
             auto counts = store::projectCounts(*db);
             if (!counts)
                 return std::unexpected(counts.error());

@@ -245,6 +245,7 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         });
     };
     qint64 goldSources = 0;
+    std::vector<std::pair<QString, QString>> bases; // each object's synced version, for sync
     Status sent = sendKind(store::SharedKind::Person, ServerTable::Person, &report.people);
     if (sent)
         sent = sendKind(store::SharedKind::CodebookVersion, ServerTable::CodebookVersion,
@@ -266,6 +267,7 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
                     : table == ServerTable::Judgement ? report.judgements
                     : table == ServerTable::Link      ? report.links
                                                       : report.annotations);
+            bases.emplace_back(teamBaseKey(row), teamBaseValue(row));
             sent = batch.add(table, serverFromPortable(row, l.person.uuid, row.seconds));
             if (!sent)
                 break;
@@ -311,6 +313,9 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
     if (!last)
         return abandon(last.error());
     report.lastChange = last->integer(0, 0);
+    auto xmin = serverSnapshotXmin(*conn);
+    if (!xmin)
+        return abandon(xmin.error());
     if (auto st = conn->exec(QStringLiteral("COMMIT")); !st)
         return abandon(st.error());
 
@@ -323,10 +328,16 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
     }
     if (auto st = store::setSetting(project.m_db, pseudonymSettingKey(), lead); !st)
         return std::unexpected(st.error());
-    if (auto st = store::setSetting(
-            project.m_db, lastChangeSettingKey(), QString::number(report.lastChange));
-        !st)
-        return std::unexpected(st.error());
+    auto recorded = project.batch([&]() -> Status {
+        FOURFOLD_TRY_STATUS(store::setSetting(
+            project.m_db, lastChangeSettingKey(), QString::number(report.lastChange)));
+        FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, lastXminSettingKey(), *xmin));
+        for (const auto &[key, value] : bases)
+            FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, key, value));
+        return {};
+    });
+    if (!recorded)
+        return std::unexpected(recorded.error());
     return report;
 }
 

@@ -54,6 +54,14 @@ struct JoinReport {
     qint64 gold = 0; // gold spans, answers and rejections
 };
 
+struct SyncReport {
+    QString server;
+    qint64 pushed = 0; // objects sent to the server (new or changed here, or coding time)
+    qint64 pulled = 0; // objects written into the file from the server
+    qint64 conflicts = 0; // objects changed both here and there: the later kept, both recorded
+    qint64 lastChange = 0;
+};
+
 class TeamProject
 {
 public:
@@ -65,6 +73,9 @@ public:
     static QString pseudonymSettingKey() { return QStringLiteral("team.pseudonym"); }
     // The highest server change number a working file holds (set by publish and join).
     static QString lastChangeSettingKey() { return QStringLiteral("team.last_change"); }
+    // The oldest server transaction running at the last pull: the next pull reads again what
+    // such transactions wrote (they may hold change numbers below the last one).
+    static QString lastXminSettingKey() { return QStringLiteral("team.last_xmin"); }
 
     // Creates the team project of `project` on the empty database `server` (a libpq connection
     // string; the login must own the database and may create roles): the schema, a group role
@@ -95,6 +106,17 @@ public:
     // store's or server's error (no file is left behind).
     static Result<JoinReport> join(
         const QString &server, const QString &pseudonym, const QString &outPath);
+
+    // Pushes and pulls the coders' objects (assignments with their status and coding time,
+    // spans, links, answers) of the working file `project` once, by the rules of coder copies:
+    // each object is compared with its last synced version; changed only here → sent, changed
+    // only on the server → written here, changed on both → the version modified later is kept
+    // (ties by the higher digest) on both sides and both versions are recorded as a conflict in
+    // this file for the lead; coding time adds up. A coder's file sends only the coder's own
+    // objects (the server refuses anything else). One transaction on each side: on failure
+    // nothing is kept. People, articles, codebook versions and gold are not synced yet.
+    // Fails with InvalidArgument for a file that is not a team working file, or as join.
+    static Result<SyncReport> sync(Project &project);
 };
 
 } // namespace fourfold

@@ -41,4 +41,19 @@ QByteArray serverFromPortable(
     return store::toJsonText(content).toUtf8();
 }
 
+QString teamObjectKey(const store::PortableRow &row)
+{
+    return row.type + QLatin1Char('/') + row.uuid;
+}
+
+QString teamBaseKey(const store::PortableRow &row)
+{
+    return QLatin1String(kTeamBasePrefix) + teamObjectKey(row);
+}
+
+QString teamBaseValue(const store::PortableRow &row)
+{
+    return row.digest() + QLatin1Char(' ') + QString::number(row.seconds);
+}
+
 } // namespace fourfold

@@ -20,4 +20,13 @@ store::PortableRow portableFromServer(const QString &type, const QByteArray &jso
 QByteArray serverFromPortable(
     const store::PortableRow &row, const QString &coderUuid, qint64 seconds);
 
+// An object's key in a team working file: "TYPE/UUID" (PortableRow::key names an assignment by
+// article and phase alone, which is one coder's view; a lead's file holds every coder's).
+QString teamObjectKey(const store::PortableRow &row);
+// The setting key under which a working file keeps the last synced version of `row`
+// ("team.base:" + teamObjectKey), and its value: "DIGEST SECONDS".
+QString teamBaseKey(const store::PortableRow &row);
+QString teamBaseValue(const store::PortableRow &row);
+inline constexpr const char *kTeamBasePrefix = "team.base:";
+
 } // namespace fourfold
