@@ -77,12 +77,9 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
         return fail(ErrorCode::InvalidArgument,
             tr("A timeout must be a positive number of seconds (or 0 for none)."));
 
-    QByteArray input;
     QHash<QString, SpanTarget> targets;
-    for (const Article &a : articles) {
-        input += articleProtocolLine(a);
+    for (const Article &a : articles)
         targets.insert(a.summary.externalId, SpanTarget {a.summary.id, a.summary.length});
-    }
 
     QProcess process;
     process.setProgram(words.front());
@@ -156,11 +153,28 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
         if (errors.size() > kStderrTailBytes)
             errors.remove(0, errors.size() - kStderrTailBytes);
     };
+    // The articles go to stdin as the program takes them, kInputAheadBytes ahead at most: the
+    // protocol lines of a whole study are never held at once (QProcess would copy them into its
+    // write buffer too). Taking input counts as activity for the idle timeout.
+    size_t next = 0;
+    bool allWritten = false;
+    m_mostInputHeld = 0;
+    const auto feed = [&] {
+        while (next < articles.size() && process.bytesToWrite() < kInputAheadBytes)
+            process.write(articleProtocolLine(articles[next++]));
+        m_mostInputHeld = std::max(m_mostInputHeld, process.bytesToWrite());
+        if (next == articles.size() && !allWritten) {
+            allWritten = true;
+            process.closeWriteChannel(); // once what is buffered has gone
+        }
+    };
     QObject::connect(&process, &QProcess::readyReadStandardOutput, &process, takeOutput);
     QObject::connect(&process, &QProcess::readyReadStandardError, &process, takeErrors);
-
-    process.write(input);
-    process.closeWriteChannel();
+    QObject::connect(&process, &QProcess::bytesWritten, &process, [&] {
+        idle.restart();
+        feed();
+    });
+    feed();
     // Wait in short steps: waitForFinished services stdin, stdout and stderr together, so a
     // program that answers while it reads cannot block on a full pipe. A program that writes
     // nothing for the idle timeout is stopped; a slow one that keeps answering is not.

@@ -1,8 +1,9 @@
 #pragma once
 // An external extractor: any program that reads one JSON object per article on stdin and writes
 // one JSON object per article with its spans on stdout (the protocol is in extractor_protocol.h;
-// offsets are code points). Fourfold writes every article, closes stdin, and waits for the
-// program to finish: it is stopped when it writes nothing for the idle timeout (default 120 s) or,
+// offsets are code points). Fourfold writes the articles as the program reads them (never the
+// whole study's lines at once), closes stdin, and waits for the program to finish: it is stopped
+// when for the idle timeout (default 120 s) it has neither read input nor written output or,
 // if one is set, when the whole run takes longer than the total timeout. The program runs in a
 // process group of its own, which is stopped with it, so nothing it starts outlives the run.
 // Its stdout is read as it comes and may hold at most kMaxOutputBytes, in lines of at most
@@ -21,6 +22,8 @@ public:
     static constexpr qint64 kMaxOutputBytes = qint64(512) << 20;
     static constexpr qint64 kMaxLineBytes = qint64(64) << 20;
     static constexpr qint64 kStderrTailBytes = qint64(64) << 10;
+    // How far the articles written to the program's stdin may run ahead of what it has read.
+    static constexpr qint64 kInputAheadBytes = qint64(1) << 20;
 
     // `command` is split into program and arguments like a shell would for plain words and
     // quotes (QProcess::splitCommand); no shell is involved. `timeoutSeconds` bounds the whole
@@ -40,6 +43,9 @@ public:
     // The most stderr bytes the last extract() held at once (for tests: at most about
     // kStderrTailBytes plus one read).
     qint64 mostStderrHeld() const { return m_mostStderrHeld; }
+    // The most protocol bytes the last extract() held for stdin at once (for tests: at most
+    // about kInputAheadBytes plus one article's line, however many articles there are).
+    qint64 mostInputHeld() const { return m_mostInputHeld; }
 
     QString kind() const override { return QStringLiteral("command"); }
     QString version() const override { return m_version; }
@@ -59,6 +65,7 @@ private:
     qint64 m_maxOutputBytes = kMaxOutputBytes;
     qint64 m_maxLineBytes = kMaxLineBytes;
     qint64 m_mostStderrHeld = 0;
+    qint64 m_mostInputHeld = 0;
     QString m_version;
     QJsonObject m_recorded;
 };

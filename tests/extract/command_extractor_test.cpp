@@ -388,3 +388,24 @@ TEST_CASE("Issue 20 item 6: only the tail of a flooded stderr is held")
         CHECK(extractor.mostStderrHeld() <= CommandExtractor::kStderrTailBytes + (qint64(1) << 20));
     }
 }
+
+TEST_CASE("external extractor: the articles go to stdin as the program reads them")
+{
+    // 3,000 articles of 4,000 characters: 12 MB of protocol lines. They are written as the
+    // program takes them, so what waits for stdin stays near kInputAheadBytes (plus one line).
+    std::vector<Article> articles(3000);
+    for (size_t i = 0; i < articles.size(); ++i) {
+        Article &a = articles[i];
+        a.summary.id = ArticleId {qint64(i + 1)};
+        a.summary.externalId = QStringLiteral("a%1").arg(i);
+        a.text = QString(4000, QLatin1Char('x'));
+        a.summary.length = a.text.size();
+    }
+    CommandExtractor extractor(script("first_sentence_extractor.py"), 120);
+    auto spans = extractor.extract(articles);
+    INFO((spans ? QString() : spans.error().toString()).toStdString());
+    REQUIRE(spans);
+    CHECK(spans->empty()); // no sentences given, so no spans
+    CHECK(extractor.mostInputHeld() > 0);
+    CHECK(extractor.mostInputHeld() <= CommandExtractor::kInputAheadBytes + 8192);
+}
