@@ -1,0 +1,806 @@
+#include "app/desktop/codebook/codebook_editor.h"
+
+#include "app/desktop/codebook/codebook_edit_command.h"
+#include "app/desktop/function_style.h"
+#include "app/desktop/message_bar.h"
+#include "core/project/project.h"
+#include "core/project/study_design.h"
+
+#include <QAction>
+#include <QComboBox>
+#include <QDialog>
+#include <QDialogButtonBox>
+#include <QFontDatabase>
+#include <QFormLayout>
+#include <QGroupBox>
+#include <QHBoxLayout>
+#include <QKeyEvent>
+#include <QLabel>
+#include <QLineEdit>
+#include <QListWidget>
+#include <QPlainTextEdit>
+#include <QPushButton>
+#include <QRegularExpression>
+#include <QTabWidget>
+#include <QToolButton>
+#include <QVBoxLayout>
+
+#include <algorithm>
+
+namespace fourfold {
+
+namespace {
+
+const QString kInvalidStyle = QStringLiteral("border: 2px solid #b3261e; border-radius: 2px;");
+constexpr int kItemsTab = 4;
+
+// Decision rules and examples: one per paragraph (an empty line between two), so that a rule
+// may run over several lines.
+QString paragraphs(const QStringList &texts)
+{
+    return texts.join(QStringLiteral("\n\n"));
+}
+
+QStringList fromParagraphs(const QString &text)
+{
+    static const QRegularExpression gap(QStringLiteral(R"(\n[ \t]*\n)"));
+    QStringList out;
+    for (const QString &part : text.split(gap)) {
+        const QString t = part.trimmed();
+        if (!t.isEmpty())
+            out << t;
+    }
+    return out;
+}
+
+// A value list: one value per line, as typed (an empty line is an empty value the check
+// names); only the line break after the last value is not a value.
+QStringList fromLines(const QString &text)
+{
+    if (text.isEmpty())
+        return {};
+    QStringList out = text.split(QLatin1Char('\n'));
+    if (out.size() > 1 && out.back().isEmpty())
+        out.removeLast();
+    return out;
+}
+
+QString levelName(MeasurementLevel level)
+{
+    switch (level) {
+    case MeasurementLevel::Nominal:
+        return CodebookEditor::tr("nominal");
+    case MeasurementLevel::Ordinal:
+        return CodebookEditor::tr("ordinal");
+    case MeasurementLevel::Interval:
+        return CodebookEditor::tr("interval");
+    case MeasurementLevel::Ratio:
+        return CodebookEditor::tr("ratio");
+    }
+    return {};
+}
+
+QString functionPath(int f)
+{
+    return QStringLiteral("functions[%1]").arg(f);
+}
+
+void setText(QLineEdit *edit, const QString &text)
+{
+    if (edit->text() != text)
+        edit->setText(text);
+}
+
+void setText(QPlainTextEdit *edit, const QString &text)
+{
+    if (edit->toPlainText() != text)
+        edit->setPlainText(text);
+}
+
+void setLevel(QComboBox *box, MeasurementLevel level)
+{
+    box->setCurrentIndex(box->findData(measurementLevelKey(level)));
+}
+
+MeasurementLevel levelOf(const QComboBox *box)
+{
+    return measurementLevelFromKey(box->currentData().toString())
+        .value_or(MeasurementLevel::Nominal);
+}
+
+QPlainTextEdit *textBox(QWidget *parent, int lines)
+{
+    auto *edit = new QPlainTextEdit(parent);
+    edit->setTabChangesFocus(true);
+    edit->setUndoRedoEnabled(false); // the editor's stack undoes
+    const int line = edit->fontMetrics().lineSpacing();
+    edit->setMinimumHeight(line * lines + 12);
+    return edit;
+}
+
+} // namespace
+
+CodebookEditor::CodebookEditor(Project &project, CoderId current, QWidget *parent)
+    : QWidget(parent, Qt::Window)
+    , m_project(project)
+    , m_current(current)
+{
+    setWindowTitle(tr("Codebook"));
+    setObjectName(QStringLiteral("codebook-editor"));
+    auto *layout = new QVBoxLayout(this);
+    m_messages = new MessageBar(this);
+    layout->addWidget(m_messages);
+
+    auto *top = new QHBoxLayout;
+    top->addWidget(new QLabel(tr("&Name:"), this));
+    m_name = new QLineEdit(this);
+    m_name->setObjectName(QStringLiteral("codebook-name"));
+    static_cast<QLabel *>(top->itemAt(0)->widget())->setBuddy(m_name);
+    top->addWidget(withErrorLine(m_name, QStringLiteral("name")), 1);
+    m_version = new QLabel(this);
+    m_version->setObjectName(QStringLiteral("codebook-version"));
+    top->addWidget(m_version);
+    layout->addLayout(top);
+
+    m_tabs = new QTabWidget(this);
+    for (FramingFunction f : kFramingFunctions) {
+        const FunctionStyle style = functionStyle(f);
+        m_tabs->addTab(
+            buildFunctionPage(f), QStringLiteral("%1  %2").arg(style.letter).arg(functionName(f)));
+    }
+    m_tabs->addTab(buildItemsPage(), tr("Article-level items"));
+    layout->addWidget(m_tabs, 1);
+    connect(m_tabs, &QTabWidget::currentChanged, this, [this] { showCheck(false); });
+
+    auto *buttons = new QHBoxLayout;
+    QAction *undo = m_undo.createUndoAction(this, tr("&Undo:"));
+    undo->setShortcut(QKeySequence::Undo);
+    QAction *redo = m_undo.createRedoAction(this, tr("&Redo:"));
+    redo->setShortcuts({QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z), QKeySequence::Redo});
+    addAction(undo);
+    addAction(redo);
+    for (QAction *a : {undo, redo}) {
+        auto *b = new QToolButton(this);
+        b->setDefaultAction(a);
+        b->setToolButtonStyle(Qt::ToolButtonTextOnly);
+        buttons->addWidget(b);
+    }
+    buttons->addStretch(1);
+    m_save = new QPushButton(tr("&Save as new version…"), this);
+    m_save->setObjectName(QStringLiteral("codebook-save"));
+    buttons->addWidget(m_save);
+    layout->addLayout(buttons);
+    connect(m_save, &QPushButton::clicked, this, &CodebookEditor::askAndSave);
+    connect(&m_undo, &QUndoStack::cleanChanged, this,
+        [this](bool clean) { setWindowTitle(clean ? tr("Codebook") : tr("Codebook (changed)")); });
+
+    connect(m_name, &QLineEdit::textChanged, this, [this](const QString &text) {
+        edit(QStringLiteral("name"), tr("Edit the codebook's name"),
+            [&](Codebook &b) { b.name = text; });
+    });
+
+    auto book = m_project.codebook();
+    if (book) {
+        m_stored = *book;
+    } else {
+        m_messages->showMessage(MessageBar::Kind::Error, book.error().message);
+        m_save->setEnabled(false);
+    }
+    m_draft = m_stored;
+    load();
+    showCheck(false);
+    resize(1180, 720);
+}
+
+QWidget *CodebookEditor::withErrorLine(QWidget *editor, const QString &key)
+{
+    auto *box = new QWidget(editor->parentWidget());
+    auto *column = new QVBoxLayout(box);
+    column->setContentsMargins(0, 0, 0, 0);
+    column->setSpacing(2);
+    column->addWidget(editor);
+    auto *error = new QLabel(box);
+    error->setObjectName(QStringLiteral("field-error"));
+    error->setWordWrap(true);
+    error->setStyleSheet(QStringLiteral("color: #b3261e;"));
+    error->hide();
+    column->addWidget(error);
+    m_fields.insert(key, {editor, error});
+    editor->installEventFilter(this);
+    return box;
+}
+
+QComboBox *CodebookEditor::levelBox(QWidget *parent)
+{
+    auto *box = new QComboBox(parent);
+    for (MeasurementLevel level : {MeasurementLevel::Nominal, MeasurementLevel::Ordinal,
+             MeasurementLevel::Interval, MeasurementLevel::Ratio})
+        box->addItem(levelName(level), measurementLevelKey(level));
+    box->setToolTip(tr("Level of measurement: it decides which agreement coefficient compares the "
+                       "values (Krippendorff 2004, ch. 11)."));
+    return box;
+}
+
+QWidget *CodebookEditor::buildFunctionPage(FramingFunction f)
+{
+    const int n = int(f);
+    const QString path = functionPath(n);
+    FunctionPage &p = m_functions[size_t(n)];
+    auto *page = new QWidget(this);
+    auto *split = new QHBoxLayout(page);
+
+    auto *texts = new QFormLayout;
+    texts->setFieldGrowthPolicy(QFormLayout::ExpandingFieldsGrow);
+    p.label = new QLineEdit(page);
+    texts->addRow(tr("&Label:"), withErrorLine(p.label, path + QStringLiteral(".label")));
+    p.definition = textBox(page, 4);
+    texts->addRow(
+        tr("&Definition:"), withErrorLine(p.definition, path + QStringLiteral(".definition")));
+    p.rules = textBox(page, 6);
+    p.rules->setPlaceholderText(tr("One decision rule per paragraph (an empty line between two)."));
+    texts->addRow(tr("Decision &rules:"), withErrorLine(p.rules, path + QStringLiteral(".rules")));
+    p.examples = textBox(page, 4);
+    p.examples->setPlaceholderText(tr("One example per paragraph (an empty line between two)."));
+    texts->addRow(tr("E&xamples:"), withErrorLine(p.examples, path + QStringLiteral(".examples")));
+    split->addLayout(texts, 3);
+
+    auto *group = new QGroupBox(tr("Attributes of %1 spans").arg(functionName(f)), page);
+    auto *attributes = new QVBoxLayout(group);
+    p.attributes = new QListWidget(group);
+    p.attributes->setObjectName(QStringLiteral("attribute-list"));
+    p.attributes->setMaximumHeight(p.attributes->fontMetrics().lineSpacing() * 5 + 12);
+    attributes->addWidget(p.attributes);
+    auto *rowButtons = new QHBoxLayout;
+    auto *add = new QPushButton(tr("&Add attribute"), group);
+    p.remove = new QPushButton(tr("Re&move attribute"), group);
+    rowButtons->addWidget(add);
+    rowButtons->addWidget(p.remove);
+    rowButtons->addStretch(1);
+    attributes->addLayout(rowButtons);
+    p.attributeForm = new QWidget(group);
+    auto *form = new QFormLayout(p.attributeForm);
+    form->setContentsMargins(0, 0, 0, 0);
+    p.key = new QLineEdit(p.attributeForm);
+    form->addRow(tr("&Key:"), withErrorLine(p.key, path + QStringLiteral(".attributes.key")));
+    p.attributeLabel = new QLineEdit(p.attributeForm);
+    form->addRow(
+        tr("La&bel:"), withErrorLine(p.attributeLabel, path + QStringLiteral(".attributes.label")));
+    p.type = new QComboBox(p.attributeForm);
+    p.type->addItem(tr("closed list of values"), QStringLiteral("choice"));
+    p.type->addItem(tr("free text"), QStringLiteral("text"));
+    form->addRow(tr("&Type:"), withErrorLine(p.type, path + QStringLiteral(".attributes.type")));
+    p.level = levelBox(p.attributeForm);
+    form->addRow(tr("Le&vel:"), withErrorLine(p.level, path + QStringLiteral(".attributes.level")));
+    p.values = textBox(p.attributeForm, 4);
+    p.values->setPlaceholderText(tr("One value per line, in order."));
+    form->addRow(
+        tr("&Values:"), withErrorLine(p.values, path + QStringLiteral(".attributes.values")));
+    attributes->addWidget(p.attributeForm);
+    attributes->addStretch(1);
+    split->addWidget(group, 2);
+
+    const auto attribute = [this, n](const std::function<void(AttributeSpec &)> &change) {
+        const int row = selectedRow(m_functions[size_t(n)].attributes);
+        return [row, n, change](Codebook &b) {
+            auto &list = b.functions[size_t(n)].attributes;
+            if (row >= 0 && row < int(list.size()))
+                change(list[size_t(row)]);
+        };
+    };
+    const auto attributeField = [this, path, n](const char *member) {
+        return QStringLiteral("%1.attributes[%2].%3")
+            .arg(path)
+            .arg(selectedRow(m_functions[size_t(n)].attributes))
+            .arg(QLatin1String(member));
+    };
+    const QString name = functionName(f);
+    connect(p.label, &QLineEdit::textChanged, this, [=, this](const QString &text) {
+        edit(path + QStringLiteral(".label"), tr("Edit the label of %1").arg(name),
+            [&](Codebook &b) { b.functions[size_t(n)].label = text; });
+    });
+    connect(p.definition, &QPlainTextEdit::textChanged, this, [=, this] {
+        const QString text = m_functions[size_t(n)].definition->toPlainText();
+        edit(path + QStringLiteral(".definition"), tr("Edit the definition of %1").arg(name),
+            [&](Codebook &b) { b.functions[size_t(n)].definition = text; });
+    });
+    connect(p.rules, &QPlainTextEdit::textChanged, this, [=, this] {
+        const QStringList rules = fromParagraphs(m_functions[size_t(n)].rules->toPlainText());
+        edit(path + QStringLiteral(".rules"), tr("Edit the decision rules of %1").arg(name),
+            [&](Codebook &b) { b.functions[size_t(n)].rules = rules; });
+    });
+    connect(p.examples, &QPlainTextEdit::textChanged, this, [=, this] {
+        const QStringList examples = fromParagraphs(m_functions[size_t(n)].examples->toPlainText());
+        edit(path + QStringLiteral(".examples"), tr("Edit the examples of %1").arg(name),
+            [&](Codebook &b) { b.functions[size_t(n)].examples = examples; });
+    });
+    connect(p.key, &QLineEdit::textChanged, this, [=, this](const QString &text) {
+        edit(attributeField("key"), tr("Edit an attribute's key"),
+            attribute([text](AttributeSpec &a) { a.key = text; }));
+    });
+    connect(p.attributeLabel, &QLineEdit::textChanged, this, [=, this](const QString &text) {
+        edit(attributeField("label"), tr("Edit an attribute's label"),
+            attribute([text](AttributeSpec &a) { a.label = text; }));
+    });
+    connect(p.type, &QComboBox::currentIndexChanged, this, [=, this] {
+        const bool text =
+            m_functions[size_t(n)].type->currentData().toString() == QLatin1String("text");
+        edit({}, tr("Change an attribute's type"), attribute([text](AttributeSpec &a) {
+            a.type = text ? AttributeSpec::Type::Text : AttributeSpec::Type::Choice;
+            if (text)
+                a.recode.clear();
+        }));
+    });
+    connect(p.level, &QComboBox::currentIndexChanged, this, [=, this] {
+        const MeasurementLevel level = levelOf(m_functions[size_t(n)].level);
+        edit({}, tr("Change an attribute's level"),
+            attribute([level](AttributeSpec &a) { a.level = level; }));
+    });
+    connect(p.values, &QPlainTextEdit::textChanged, this, [=, this] {
+        const QStringList values = fromLines(m_functions[size_t(n)].values->toPlainText());
+        edit(attributeField("values"), tr("Edit an attribute's values"),
+            attribute([values](AttributeSpec &a) { a.values = values; }));
+    });
+    connect(p.attributes, &QListWidget::currentRowChanged, this, [this, n] {
+        if (m_loading)
+            return;
+        loadAttributeForm(n);
+        showCheck(false);
+    });
+    connect(add, &QPushButton::clicked, this, &CodebookEditor::addRow);
+    connect(p.remove, &QPushButton::clicked, this, &CodebookEditor::removeRow);
+    return page;
+}
+
+QWidget *CodebookEditor::buildItemsPage()
+{
+    ItemsPage &p = m_items;
+    auto *page = new QWidget(this);
+    auto *split = new QHBoxLayout(page);
+    auto *left = new QVBoxLayout;
+    auto *intro = new QLabel(
+        tr("Questions answered once per article, such as which function dominates it."), page);
+    intro->setWordWrap(true);
+    left->addWidget(intro);
+    p.items = new QListWidget(page);
+    p.items->setObjectName(QStringLiteral("item-list"));
+    left->addWidget(p.items, 1);
+    auto *rowButtons = new QHBoxLayout;
+    auto *add = new QPushButton(tr("&Add item"), page);
+    p.remove = new QPushButton(tr("Re&move item"), page);
+    rowButtons->addWidget(add);
+    rowButtons->addWidget(p.remove);
+    rowButtons->addStretch(1);
+    left->addLayout(rowButtons);
+    split->addLayout(left, 2);
+
+    p.form = new QWidget(page);
+    auto *form = new QFormLayout(p.form);
+    form->setFieldGrowthPolicy(QFormLayout::ExpandingFieldsGrow);
+    p.key = new QLineEdit(p.form);
+    form->addRow(tr("&Key:"), withErrorLine(p.key, QStringLiteral("items.key")));
+    p.question = textBox(p.form, 3);
+    form->addRow(tr("&Question:"), withErrorLine(p.question, QStringLiteral("items.question")));
+    p.values = textBox(p.form, 6);
+    p.values->setPlaceholderText(tr("One value per line, in order."));
+    form->addRow(tr("&Values:"), withErrorLine(p.values, QStringLiteral("items.values")));
+    p.level = levelBox(p.form);
+    form->addRow(tr("Le&vel:"), withErrorLine(p.level, QStringLiteral("items.level")));
+    split->addWidget(p.form, 3);
+
+    const auto item = [this](const std::function<void(ArticleItem &)> &change) {
+        const int row = selectedRow(m_items.items);
+        return [row, change](Codebook &b) {
+            if (row >= 0 && row < int(b.items.size()))
+                change(b.items[size_t(row)]);
+        };
+    };
+    const auto itemField = [this](const char *member) {
+        return QStringLiteral("items[%1].%2")
+            .arg(selectedRow(m_items.items))
+            .arg(QLatin1String(member));
+    };
+    connect(p.key, &QLineEdit::textChanged, this, [=, this](const QString &text) {
+        edit(itemField("key"), tr("Edit an item's key"),
+            item([text](ArticleItem &i) { i.key = text; }));
+    });
+    connect(p.question, &QPlainTextEdit::textChanged, this, [=, this] {
+        const QString text = m_items.question->toPlainText();
+        edit(itemField("question"), tr("Edit an item's question"),
+            item([text](ArticleItem &i) { i.question = text; }));
+    });
+    connect(p.values, &QPlainTextEdit::textChanged, this, [=, this] {
+        const QStringList values = fromLines(m_items.values->toPlainText());
+        edit(itemField("values"), tr("Edit an item's values"),
+            item([values](ArticleItem &i) { i.values = values; }));
+    });
+    connect(p.level, &QComboBox::currentIndexChanged, this, [=, this] {
+        const MeasurementLevel level = levelOf(m_items.level);
+        edit({}, tr("Change an item's level"), item([level](ArticleItem &i) { i.level = level; }));
+    });
+    connect(p.items, &QListWidget::currentRowChanged, this, [this] {
+        if (m_loading)
+            return;
+        loadItemForm();
+        showCheck(false);
+    });
+    connect(add, &QPushButton::clicked, this, &CodebookEditor::addRow);
+    connect(p.remove, &QPushButton::clicked, this, &CodebookEditor::removeRow);
+    return page;
+}
+
+int CodebookEditor::selectedRow(const QListWidget *list) const
+{
+    return list->currentRow();
+}
+
+void CodebookEditor::edit(
+    const QString &field, const QString &text, const std::function<void(Codebook &)> &change)
+{
+    if (m_loading)
+        return;
+    Codebook after = m_draft;
+    change(after);
+    if (after.toJson() == m_draft.toJson())
+        return;
+    m_undo.push(
+        new CodebookEditCommand([this](const Codebook &book, bool first) { setDraft(book, first); },
+            m_draft, after, field, text));
+}
+
+void CodebookEditor::setDraft(const Codebook &book, bool keepFields)
+{
+    m_draft = book;
+    if (!keepFields) {
+        load();
+    } else {
+        // Only the lists' keys follow the field typed in.
+        m_loading = true;
+        for (size_t f = 0; f < m_functions.size(); ++f) {
+            QListWidget *list = m_functions[f].attributes;
+            const auto &attributes = m_draft.functions[f].attributes;
+            for (int r = 0; r < list->count() && r < int(attributes.size()); ++r)
+                list->item(r)->setText(attributes[size_t(r)].key);
+        }
+        for (int r = 0; r < m_items.items->count() && r < int(m_draft.items.size()); ++r)
+            m_items.items->item(r)->setText(m_draft.items[size_t(r)].key);
+        m_loading = false;
+    }
+    showCheck(false);
+}
+
+void CodebookEditor::load()
+{
+    m_loading = true;
+    m_version->setText(m_stored.number > 0
+            ? tr("Editing a draft of version %1; saving makes version %2.")
+                  .arg(m_stored.number)
+                  .arg(m_stored.number + 1)
+            : QString());
+    setText(m_name, m_draft.name);
+    for (size_t f = 0; f < m_functions.size() && f < m_draft.functions.size(); ++f) {
+        FunctionPage &p = m_functions[f];
+        const FunctionDefinition &def = m_draft.functions[f];
+        setText(p.label, def.label);
+        setText(p.definition, def.definition);
+        // A rule or example list that reads back the same keeps its text as typed.
+        if (fromParagraphs(p.rules->toPlainText()) != def.rules)
+            setText(p.rules, paragraphs(def.rules));
+        if (fromParagraphs(p.examples->toPlainText()) != def.examples)
+            setText(p.examples, paragraphs(def.examples));
+        const int row = p.attributes->currentRow();
+        p.attributes->clear();
+        for (const AttributeSpec &a : def.attributes)
+            p.attributes->addItem(a.key);
+        p.attributes->setCurrentRow(
+            def.attributes.empty() ? -1 : std::clamp(row, 0, int(def.attributes.size()) - 1));
+        m_loading = false;
+        loadAttributeForm(int(f));
+        m_loading = true;
+    }
+    const int row = m_items.items->currentRow();
+    m_items.items->clear();
+    for (const ArticleItem &item : m_draft.items)
+        m_items.items->addItem(item.key);
+    m_items.items->setCurrentRow(
+        m_draft.items.empty() ? -1 : std::clamp(row, 0, int(m_draft.items.size()) - 1));
+    m_loading = false;
+    loadItemForm();
+}
+
+void CodebookEditor::loadAttributeForm(int f)
+{
+    FunctionPage &p = m_functions[size_t(f)];
+    const auto &attributes = m_draft.functions[size_t(f)].attributes;
+    const int row = p.attributes->currentRow();
+    const bool has = row >= 0 && row < int(attributes.size());
+    p.attributeForm->setEnabled(has);
+    p.remove->setEnabled(has);
+    const AttributeSpec shown = has ? attributes[size_t(row)] : AttributeSpec {};
+    m_loading = true;
+    setText(p.key, shown.key);
+    setText(p.attributeLabel, shown.label);
+    p.type->setCurrentIndex(shown.type == AttributeSpec::Type::Text ? 1 : 0);
+    setLevel(p.level, shown.level);
+    if (fromLines(p.values->toPlainText()) != shown.values || !has)
+        setText(p.values, shown.values.join(QLatin1Char('\n')));
+    p.values->setEnabled(shown.type == AttributeSpec::Type::Choice);
+    m_loading = false;
+}
+
+void CodebookEditor::loadItemForm()
+{
+    ItemsPage &p = m_items;
+    const int row = p.items->currentRow();
+    const bool has = row >= 0 && row < int(m_draft.items.size());
+    p.form->setEnabled(has);
+    p.remove->setEnabled(has);
+    const ArticleItem shown = has ? m_draft.items[size_t(row)] : ArticleItem {};
+    m_loading = true;
+    setText(p.key, shown.key);
+    setText(p.question, shown.question);
+    if (fromLines(p.values->toPlainText()) != shown.values || !has)
+        setText(p.values, shown.values.join(QLatin1Char('\n')));
+    setLevel(p.level, shown.level);
+    m_loading = false;
+}
+
+void CodebookEditor::addRow()
+{
+    const int tab = m_tabs->currentIndex();
+    if (tab == kItemsTab) {
+        const int row = int(m_draft.items.size());
+        edit({}, tr("Add an item"), [row](Codebook &b) {
+            ArticleItem item;
+            item.key = QStringLiteral("item_%1").arg(row + 1);
+            b.items.push_back(item);
+        });
+        selectRow(row);
+        return;
+    }
+    const int row = int(m_draft.functions[size_t(tab)].attributes.size());
+    edit({}, tr("Add an attribute to %1").arg(functionName(kFramingFunctions[size_t(tab)])),
+        [tab, row](Codebook &b) {
+            AttributeSpec a;
+            a.key = QStringLiteral("attribute_%1").arg(row + 1);
+            a.label = a.key;
+            b.functions[size_t(tab)].attributes.push_back(a);
+        });
+    selectRow(row);
+}
+
+void CodebookEditor::removeRow()
+{
+    const int tab = m_tabs->currentIndex();
+    if (tab == kItemsTab) {
+        const int row = m_items.items->currentRow();
+        if (row < 0 || row >= int(m_draft.items.size()))
+            return;
+        edit({}, tr("Remove the item “%1”").arg(m_draft.items[size_t(row)].key),
+            [row](Codebook &b) { b.items.erase(b.items.begin() + row); });
+        return;
+    }
+    auto &attributes = m_draft.functions[size_t(tab)].attributes;
+    const int row = m_functions[size_t(tab)].attributes->currentRow();
+    if (row < 0 || row >= int(attributes.size()))
+        return;
+    edit({}, tr("Remove the attribute “%1”").arg(attributes[size_t(row)].key),
+        [tab, row](Codebook &b) {
+            auto &list = b.functions[size_t(tab)].attributes;
+            list.erase(list.begin() + row);
+        });
+}
+
+void CodebookEditor::showFunction(FramingFunction f)
+{
+    m_tabs->setCurrentIndex(int(f));
+}
+
+void CodebookEditor::showItems()
+{
+    m_tabs->setCurrentIndex(kItemsTab);
+}
+
+void CodebookEditor::selectRow(int row)
+{
+    const int tab = m_tabs->currentIndex();
+    QListWidget *list = tab == kItemsTab ? m_items.items : m_functions[size_t(tab)].attributes;
+    list->setCurrentRow(row);
+}
+
+// "functions[2].attributes[0].values" → "functions[2].attributes.values" (the form's field).
+QString CodebookEditor::fieldKey(const QString &field) const
+{
+    static const QRegularExpression row(QStringLiteral(R"((attributes|^items)\[\d+\])"));
+    QString key = field;
+    key.replace(row, QStringLiteral("\\1"));
+    return key;
+}
+
+QWidget *CodebookEditor::fieldWidget(const QString &field)
+{
+    static const QRegularExpression place(
+        QStringLiteral(R"(^(?:functions\[(\d+)\](?:\.attributes\[(\d+)\])?|items\[(\d+)\]))"));
+    const QRegularExpressionMatch m = place.match(field);
+    if (m.hasMatch()) {
+        if (m.capturedLength(3) > 0) {
+            showItems();
+            selectRow(m.captured(3).toInt());
+        } else {
+            m_tabs->setCurrentIndex(m.captured(1).toInt());
+            if (m.capturedLength(2) > 0)
+                selectRow(m.captured(2).toInt());
+        }
+    }
+    const auto it = m_fields.constFind(fieldKey(field));
+    return it == m_fields.constEnd() ? nullptr : it->editor;
+}
+
+QString CodebookEditor::fieldError(const QString &field) const
+{
+    const QString key = fieldKey(field);
+    if (key != m_errorKey || !m_check.error)
+        return {};
+    // The form shows one row: the error is this field's only when it names the row shown.
+    return m_check.error->field == field ? m_check.error->sentence : QString();
+}
+
+void CodebookEditor::showCheck(bool go)
+{
+    if (!m_errorKey.isEmpty()) {
+        const FieldWidgets &was = m_fields.value(m_errorKey);
+        was.editor->setStyleSheet({});
+        was.error->hide();
+        was.error->clear();
+        m_errorKey.clear();
+    }
+    m_check = checkCodebookDraft(m_draft);
+    m_save->setToolTip(m_check.error ? tr("Fix the marked field first.") : QString());
+    if (!m_check.error)
+        return;
+    const CodebookFieldError &error = *m_check.error;
+    static const QRegularExpression place(
+        QStringLiteral(R"(^(?:functions\[(\d+)\](?:\.attributes\[(\d+)\])?|items\[(\d+)\]))"));
+    const QRegularExpressionMatch m = place.match(error.field);
+    bool onScreen = true;
+    if (m.hasMatch()) {
+        const int tab = m.capturedLength(3) > 0 ? kItemsTab : m.captured(1).toInt();
+        const int row = m.capturedLength(3) > 0 ? m.captured(3).toInt()
+            : m.capturedLength(2) > 0           ? m.captured(2).toInt()
+                                                : -1;
+        if (go) {
+            m_tabs->setCurrentIndex(tab);
+            if (row >= 0)
+                selectRow(row);
+        }
+        const QListWidget *list =
+            tab == kItemsTab ? m_items.items : m_functions[size_t(tab)].attributes;
+        onScreen = m_tabs->currentIndex() == tab && (row < 0 || list->currentRow() == row);
+    }
+    const QString key = fieldKey(error.field);
+    if (!onScreen || !m_fields.contains(key))
+        return;
+    const FieldWidgets &at = m_fields.value(key);
+    at.editor->setStyleSheet(
+        QStringLiteral("%1 { %2 }")
+            .arg(QLatin1String(at.editor->metaObject()->className()), kInvalidStyle));
+    at.error->setText(error.sentence);
+    at.error->show();
+    m_errorKey = key;
+    if (go)
+        at.editor->setFocus();
+}
+
+QString CodebookEditor::diffText() const
+{
+    if (!m_check.candidate)
+        return {};
+    CodebookDiff diff = StudyDesign::diffCodebooks(m_stored, *m_check.candidate);
+    diff.from = m_stored.number;
+    diff.to = m_stored.number + 1;
+    return StudyDesign::codebookDiffText(diff);
+}
+
+bool CodebookEditor::saveAsNewVersion(const QString &note)
+{
+    showCheck(true);
+    if (!m_check.candidate) {
+        m_messages->showMessage(MessageBar::Kind::Warning,
+            tr("The codebook was not saved: the marked field needs a change first."));
+        return false;
+    }
+    if (StudyDesign::diffCodebooks(m_stored, *m_check.candidate).changes.empty()) {
+        m_messages->showMessage(MessageBar::Kind::Information,
+            tr("Nothing was saved: the draft is the same as version %1.").arg(m_stored.number), {},
+            {}, 8);
+        return false;
+    }
+    auto added = StudyDesign::addCodebookVersion(m_project, *m_check.candidate, note, m_current);
+    if (!added) {
+        m_messages->showMessage(MessageBar::Kind::Error, added.error().message);
+        return false;
+    }
+    auto book = m_project.codebook();
+    auto outdated = StudyDesign::outdatedAnnotations(m_project);
+    if (!book || !outdated) {
+        m_messages->showMessage(
+            MessageBar::Kind::Error, (!book ? book.error() : outdated.error()).message);
+        return false;
+    }
+    m_stored = *book;
+    m_draft = m_stored;
+    m_undo.clear();
+    load();
+    showCheck(false);
+    const auto recheck = std::ranges::count_if(
+        *outdated, [](const OutdatedAnnotation &a) { return a.functionChanged; });
+    m_messages->showMessage(MessageBar::Kind::Success,
+        tr("Codebook version %1 saved. %n annotation(s) made under an older version are now "
+           "outdated; %2 of them belong to a function that changed and need a re-check.",
+            nullptr, int(outdated->size()))
+            .arg(added->number)
+            .arg(recheck));
+    emit versionAdded();
+    return true;
+}
+
+void CodebookEditor::askAndSave()
+{
+    showCheck(true);
+    if (!m_check.candidate) {
+        m_messages->showMessage(MessageBar::Kind::Warning,
+            tr("The codebook was not saved: the marked field needs a change first."));
+        return;
+    }
+    QDialog dialog(this);
+    dialog.setWindowTitle(tr("Save as version %1").arg(m_stored.number + 1));
+    auto *layout = new QVBoxLayout(&dialog);
+    layout->addWidget(new QLabel(tr("What changes against version %1:").arg(m_stored.number)));
+    auto *diff = new QPlainTextEdit(&dialog);
+    diff->setReadOnly(true);
+    diff->setFont(QFontDatabase::systemFont(QFontDatabase::FixedFont));
+    diff->setPlainText(diffText());
+    layout->addWidget(diff, 1);
+    auto *noteLabel = new QLabel(tr("&Note (what changed and why):"), &dialog);
+    auto *note = new QLineEdit(&dialog);
+    noteLabel->setBuddy(note);
+    layout->addWidget(noteLabel);
+    layout->addWidget(note);
+    auto *buttons =
+        new QDialogButtonBox(QDialogButtonBox::Save | QDialogButtonBox::Cancel, &dialog);
+    QPushButton *save = buttons->button(QDialogButtonBox::Save);
+    save->setEnabled(false);
+    connect(note, &QLineEdit::textChanged, save,
+        [save](const QString &text) { save->setEnabled(!text.trimmed().isEmpty()); });
+    connect(buttons, &QDialogButtonBox::accepted, &dialog, &QDialog::accept);
+    connect(buttons, &QDialogButtonBox::rejected, &dialog, &QDialog::reject);
+    layout->addWidget(buttons);
+    dialog.resize(720, 420);
+    if (dialog.exec() == QDialog::Accepted)
+        saveAsNewVersion(note->text());
+}
+
+bool CodebookEditor::eventFilter(QObject *watched, QEvent *event)
+{
+    // The fields' own undo would undo keystrokes the stack already holds: the editor's stack
+    // answers Ctrl+Z and Ctrl+Shift+Z in every field.
+    if (event->type() == QEvent::ShortcutOverride || event->type() == QEvent::KeyPress) {
+        auto *key = static_cast<QKeyEvent *>(event);
+        const bool undo = key->matches(QKeySequence::Undo);
+        const bool redo = key->matches(QKeySequence::Redo)
+            || key->keyCombination()
+                == QKeyCombination(Qt::ControlModifier | Qt::ShiftModifier, Qt::Key_Z);
+        if (undo || redo) {
+            event->accept();
+            if (event->type() == QEvent::KeyPress) {
+                if (undo)
+                    m_undo.undo();
+                else
+                    m_undo.redo();
+            }
+            return true;
+        }
+    }
+    return QWidget::eventFilter(watched, event);
+}
+
+} // namespace fourfold

@@ -1,0 +1,150 @@
+#pragma once
+// Lead → Codebook…: the codebook's current version as a draft to edit — each function's label,
+// definition, decision rules, examples and attributes (key, label, type, level, closed value
+// list), and the article-level items (key, question, values, level). Every edit is a step on the
+// editor's own undo stack. The draft is checked with the rules a codebook file is read with, and
+// a failure is shown at its field. "Save as new version…" shows the diff against the current
+// version, asks for a note and stores the draft through StudyDesign::addCodebookVersion — the
+// call `fourfold-cli codebook --update` makes — then says in the message bar how many annotations
+// are now outdated.
+
+#include "app/desktop/codebook/codebook_field_check.h"
+#include "core/model/codebook.h"
+#include "core/model/ids.h"
+
+#include <QHash>
+#include <QUndoStack>
+#include <QWidget>
+
+#include <array>
+
+class QComboBox;
+class QLabel;
+class QLineEdit;
+class QListWidget;
+class QPlainTextEdit;
+class QPushButton;
+class QTabWidget;
+
+namespace fourfold {
+
+class MessageBar;
+class Project;
+
+class CodebookEditor : public QWidget
+{
+    Q_OBJECT
+public:
+    // `project` must outlive the window; `current` is the lead (recorded as the version's
+    // author). The window is a top-level window even with a parent.
+    CodebookEditor(Project &project, CoderId current, QWidget *parent = nullptr);
+
+    const Codebook &stored() const { return m_stored; }
+    const Codebook &draft() const { return m_draft; }
+    QUndoStack *undoStack() { return &m_undo; }
+    MessageBar *messageBar() const { return m_messages; }
+
+    // Which page shows: a function's, or the article-level items (for tests and screenshots).
+    void showFunction(FramingFunction f);
+    void showItems();
+    // Selects an attribute of the function shown, or an item; -1 selects none.
+    void selectRow(int row);
+    // The widget that edits `field` ("name", "functions[2].definition",
+    // "functions[2].attributes[0].values", "items[0].question", ...) after showing its page and
+    // selecting its row; nullptr for a field the editor has not.
+    QWidget *fieldWidget(const QString &field);
+    // The sentence shown under `field`'s widget; empty when the field is fine.
+    QString fieldError(const QString &field) const;
+
+    // The diff of the draft against the current version, as `codebook --diff` words it; empty
+    // when the draft breaks a rule.
+    QString diffText() const;
+    // Checks the draft and stores it as the next version with `note`. False, with the reason at
+    // the field or in the message bar, when nothing was stored.
+    bool saveAsNewVersion(const QString &note);
+
+    // Adds an attribute to the function shown (or an item on the items page), selected.
+    void addRow();
+    // Removes the selected attribute or item.
+    void removeRow();
+
+signals:
+    // A version was stored: the desk's codebook panel reads it again.
+    void versionAdded();
+
+protected:
+    bool eventFilter(QObject *watched, QEvent *event) override;
+
+private:
+    struct FieldWidgets {
+        QWidget *editor = nullptr;
+        QLabel *error = nullptr;
+    };
+    struct FunctionPage {
+        QLineEdit *label = nullptr;
+        QPlainTextEdit *definition = nullptr;
+        QPlainTextEdit *rules = nullptr;
+        QPlainTextEdit *examples = nullptr;
+        QListWidget *attributes = nullptr;
+        QWidget *attributeForm = nullptr;
+        QLineEdit *key = nullptr;
+        QLineEdit *attributeLabel = nullptr;
+        QComboBox *type = nullptr;
+        QComboBox *level = nullptr;
+        QPlainTextEdit *values = nullptr;
+        QPushButton *remove = nullptr;
+    };
+    struct ItemsPage {
+        QListWidget *items = nullptr;
+        QWidget *form = nullptr;
+        QLineEdit *key = nullptr;
+        QPlainTextEdit *question = nullptr;
+        QPlainTextEdit *values = nullptr;
+        QComboBox *level = nullptr;
+        QPushButton *remove = nullptr;
+    };
+
+    QWidget *buildFunctionPage(FramingFunction f);
+    QWidget *buildItemsPage();
+    // Puts `editor` with a hidden error line under it into a column and registers it as `key`
+    // (a field path with the row's index left out: "functions[2].attributes.key", "items.key").
+    QWidget *withErrorLine(QWidget *editor, const QString &key);
+    QComboBox *levelBox(QWidget *parent);
+
+    // Makes `book` the draft; `keepFields` leaves the text fields as they are (the step came from
+    // one of them), refreshing only lists and forms.
+    void setDraft(const Codebook &book, bool keepFields);
+    void load();
+    void loadAttributeForm(int f);
+    void loadItemForm();
+    // One undoable step: `change` applied to a copy of the draft.
+    void edit(
+        const QString &field, const QString &text, const std::function<void(Codebook &)> &change);
+    int selectedRow(const QListWidget *list) const;
+
+    // Checks the draft and shows its first failure at the field when the field is on screen;
+    // `go` first turns to the field's page and row.
+    void showCheck(bool go);
+    QString fieldKey(const QString &field) const;
+    void askAndSave();
+
+    Project &m_project;
+    CoderId m_current;
+    Codebook m_stored;
+    Codebook m_draft;
+    CodebookCheckResult m_check;
+    QUndoStack m_undo;
+    bool m_loading = false;
+
+    MessageBar *m_messages = nullptr;
+    QLabel *m_version = nullptr;
+    QLineEdit *m_name = nullptr;
+    QTabWidget *m_tabs = nullptr;
+    std::array<FunctionPage, 4> m_functions;
+    ItemsPage m_items;
+    QPushButton *m_save = nullptr;
+    QHash<QString, FieldWidgets> m_fields;
+    QString m_errorKey; // the key of m_fields whose error line shows
+};
+
+} // namespace fourfold

@@ -1,0 +1,293 @@
+// Lead → Codebook…: an edit made in the editor becomes the same version, diff and outdated list
+// as `fourfold-cli codebook --update` with the same change written as JSON; a draft that breaks a
+// rule of the codebook file is shown at its field and nothing is stored; undo restores the text.
+#include "app/desktop/codebook/codebook_editor.h"
+#include "app/desktop/lead_windows.h"
+#include "app/desktop/main_window.h"
+#include "app/desktop/message_bar.h"
+#include "core/project/project.h"
+#include "core/project/study_design.h"
+#include "tests/support/cli_run.h"
+#include "tests/support/test_support.h"
+
+#include <QFile>
+#include <QJsonArray>
+#include <QJsonDocument>
+#include <QLabel>
+#include <QLineEdit>
+#include <QPlainTextEdit>
+#include <QPointer>
+#include <QTemporaryDir>
+#include <QTest>
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+const QString kCli = QStringLiteral(FOURFOLD_CLI);
+
+struct SampleCopy {
+    QTemporaryDir dir;
+    QString path;
+    explicit SampleCopy(const QString &name = QStringLiteral("demo.fourfold"))
+    {
+        path = dir.filePath(name);
+        REQUIRE(QFile::copy(QStringLiteral(FOURFOLD_SAMPLE_PROJECT), path));
+        QFile::setPermissions(path, QFile::ReadOwner | QFile::WriteOwner);
+    }
+};
+
+CoderId leadOf(const Project &project)
+{
+    auto lead = project.coderByPseudonym(QStringLiteral("L01"));
+    REQUIRE(lead);
+    REQUIRE(*lead);
+    return (*lead)->id;
+}
+
+QPlainTextEdit *textField(CodebookEditor &w, const QString &field)
+{
+    auto *edit = qobject_cast<QPlainTextEdit *>(w.fieldWidget(field));
+    REQUIRE(edit);
+    return edit;
+}
+
+QLineEdit *lineField(CodebookEditor &w, const QString &field)
+{
+    auto *edit = qobject_cast<QLineEdit *>(w.fieldWidget(field));
+    REQUIRE(edit);
+    return edit;
+}
+
+// The error line under the widget, as the person sees it.
+QString shownError(QWidget *field)
+{
+    const auto labels = field->parentWidget()->findChildren<QLabel *>(
+        QStringLiteral("field-error"), Qt::FindDirectChildrenOnly);
+    REQUIRE(labels.size() == 1);
+    return labels.front()->isVisibleTo(field->window()) ? labels.front()->text() : QString();
+}
+
+const QString kDefinition = QStringLiteral(
+    "A condition the article presents as a problem that needs attention, with its costs or "
+    "benefits.");
+
+} // namespace
+
+TEST_CASE("a codebook change in the editor gives the version diff and outdated list of codebook "
+          "--update")
+{
+    SampleCopy viaEditor(QStringLiteral("editor.fourfold"));
+    SampleCopy viaCli(QStringLiteral("cli.fourfold"));
+
+    // The same change written by hand as the JSON `--update` reads: from `--show` of the
+    // current version, a new value "mixed" in evaluation's closed polarity list and problem's
+    // definition rewritten.
+    auto project = Project::open(viaEditor.path);
+    REQUIRE(project);
+    auto stored = project->codebook();
+    REQUIRE(stored);
+    const int from = stored->number;
+    const CliRun show = runCli(kCli,
+        {QStringLiteral("codebook"), viaCli.path, QStringLiteral("--show"), QString::number(from)});
+    REQUIRE(show.exitCode == 0);
+    QJsonObject book = QJsonDocument::fromJson(show.out.toUtf8()).object();
+    QJsonArray functions = book.value(QStringLiteral("functions")).toArray();
+    REQUIRE(functions.size() == 4);
+    QJsonObject problem = functions[0].toObject();
+    problem.insert(QStringLiteral("definition"), kDefinition);
+    functions[0] = problem;
+    QJsonObject evaluation = functions[2].toObject();
+    QJsonArray attributes = evaluation.value(QStringLiteral("attributes")).toArray();
+    QJsonObject polarity = attributes[0].toObject();
+    REQUIRE(polarity.value(QStringLiteral("key")).toString() == QStringLiteral("polarity"));
+    QJsonArray values = polarity.value(QStringLiteral("values")).toArray();
+    values.append(QStringLiteral("mixed"));
+    polarity.insert(QStringLiteral("values"), values);
+    attributes[0] = polarity;
+    evaluation.insert(QStringLiteral("attributes"), attributes);
+    functions[2] = evaluation;
+    book.insert(QStringLiteral("functions"), functions);
+    const QString file = viaCli.dir.filePath(QStringLiteral("codebook.json"));
+    {
+        QFile out(file);
+        REQUIRE(out.open(QIODevice::WriteOnly));
+        out.write(QJsonDocument(book).toJson());
+    }
+    const QString note = QStringLiteral("mixed polarity; problem definition names costs");
+    const CliRun update = runCli(kCli,
+        {QStringLiteral("codebook"), viaCli.path, QStringLiteral("--update"), file,
+            QStringLiteral("--note"), note, QStringLiteral("--by"), QStringLiteral("L01")});
+    INFO(update.err.toStdString());
+    REQUIRE(update.exitCode == 0);
+
+    // The same change typed into the editor.
+    CodebookEditor w(*project, leadOf(*project));
+    w.show();
+    textField(w, QStringLiteral("functions[0].definition"))->setPlainText(kDefinition);
+    QPlainTextEdit *valuesField = textField(w, QStringLiteral("functions[2].attributes[0].values"));
+    valuesField->setPlainText(valuesField->toPlainText() + QStringLiteral("\nmixed"));
+    CHECK(w.draft().definition(FramingFunction::Evaluation).attributes[0].values
+        == QStringList {QStringLiteral("negative"), QStringLiteral("neutral"),
+            QStringLiteral("positive"), QStringLiteral("mixed")});
+
+    const QStringList diffArgs {QStringLiteral("codebook"), QString(), QStringLiteral("--diff"),
+        QString::number(from), QString::number(from + 1)};
+    QStringList cliDiff = diffArgs;
+    cliDiff[1] = viaCli.path;
+    const CliRun diffByCli = runCli(kCli, cliDiff);
+    REQUIRE(diffByCli.exitCode == 0);
+    // What the save shows first is what `codebook --diff` prints afterwards (plus its newline).
+    CHECK(w.diffText() + QLatin1Char('\n') == diffByCli.out);
+    CHECK(diffByCli.out.contains(QStringLiteral("problem.definition")));
+    CHECK(diffByCli.out.contains(QStringLiteral("evaluation.attributes.polarity.values")));
+
+    REQUIRE(w.saveAsNewVersion(note));
+    CHECK(w.stored().number == from + 1);
+    CHECK(w.undoStack()->count() == 0);
+    CHECK(w.messageBar()->kind() == MessageBar::Kind::Success);
+
+    // The stored versions, their diffs and the outdated lists are the same in both copies.
+    for (const QStringList &args :
+        {QStringList {QStringLiteral("--show"), QString::number(from + 1)},
+            QStringList {QStringLiteral("--diff"), QString::number(from), QString::number(from + 1),
+                QStringLiteral("--json")},
+            QStringList {QStringLiteral("--outdated"), QStringLiteral("--json")}}) {
+        const CliRun a =
+            runCli(kCli, QStringList {QStringLiteral("codebook"), viaEditor.path} + args);
+        const CliRun b = runCli(kCli, QStringList {QStringLiteral("codebook"), viaCli.path} + args);
+        INFO(args.join(QLatin1Char(' ')).toStdString());
+        REQUIRE(a.exitCode == 0);
+        REQUIRE(b.exitCode == 0);
+        CHECK(a.out == b.out);
+    }
+    const QJsonArray outdated =
+        cliJson(runCli(kCli,
+                    {QStringLiteral("codebook"), viaEditor.path, QStringLiteral("--outdated"),
+                        QStringLiteral("--json")}))
+            .value(QStringLiteral("outdated"))
+            .toArray();
+    // The sample's codings were all made under the first version (sample-project/README.md).
+    REQUIRE(!outdated.isEmpty());
+    qsizetype recheck = 0;
+    for (const QJsonValue &row : outdated) {
+        const QString function = row.toObject().value(QStringLiteral("function")).toString();
+        const bool changed = row.toObject().value(QStringLiteral("function_changed")).toBool();
+        CHECK(changed
+            == (function == QLatin1String("problem") || function == QLatin1String("evaluation")));
+        recheck += changed ? 1 : 0;
+    }
+    CHECK(w.messageBar()->text().contains(QStringLiteral("%1 annotation").arg(outdated.size())));
+    CHECK(w.messageBar()->text().contains(QStringLiteral("; %1 of them").arg(recheck)));
+}
+
+TEST_CASE("an invalid codebook draft is shown at its field and nothing is stored")
+{
+    SampleCopy f;
+    auto project = Project::open(f.path);
+    REQUIRE(project);
+    auto versionsBefore = StudyDesign::codebookVersions(*project);
+    REQUIRE(versionsBefore);
+    CodebookEditor w(*project, leadOf(*project));
+    w.show();
+
+    // A choice attribute without values (the file reader's rule: "lists no values").
+    const QString valuesPath = QStringLiteral("functions[2].attributes[0].values");
+    QPlainTextEdit *values = textField(w, valuesPath);
+    values->setPlainText(QString());
+    CHECK(w.fieldError(valuesPath)
+        == QStringLiteral("A choice list needs at least one value (one per line)."));
+    CHECK(shownError(values) == w.fieldError(valuesPath));
+    CHECK(values->styleSheet().contains(QStringLiteral("border")));
+    CHECK(w.diffText().isEmpty());
+    CHECK_FALSE(w.saveAsNewVersion(QStringLiteral("no values")));
+    CHECK(w.messageBar()->kind() == MessageBar::Kind::Warning);
+    CHECK_FALSE(w.messageBar()->text().contains(QStringLiteral("functions[")));
+    w.undoStack()->undo();
+    CHECK(w.fieldError(valuesPath).isEmpty());
+    CHECK_FALSE(values->styleSheet().contains(QStringLiteral("border")));
+
+    // A second attribute of remedy with the key of the first.
+    w.showFunction(FramingFunction::Remedy);
+    w.addRow();
+    const QString keyPath = QStringLiteral("functions[3].attributes[1].key");
+    QLineEdit *key = lineField(w, keyPath);
+    textField(w, QStringLiteral("functions[3].attributes[1].values"))
+        ->setPlainText(QStringLiteral("yes\nno"));
+    CHECK(w.fieldError(keyPath).isEmpty());
+    key->setText(QStringLiteral("explicitness"));
+    CHECK(w.fieldError(keyPath)
+        == QStringLiteral(
+            "Another attribute of this function already has the key “explicitness”."));
+    CHECK(shownError(key) == w.fieldError(keyPath));
+    // Looking at another function and saving turns back to the field.
+    w.showFunction(FramingFunction::Problem);
+    CHECK_FALSE(w.saveAsNewVersion(QStringLiteral("a repeated key")));
+    CHECK(w.fieldWidget(keyPath) == key);
+    CHECK(shownError(key) == w.fieldError(keyPath));
+
+    key->setText(QStringLiteral("clarity"));
+    CHECK(w.fieldError(keyPath).isEmpty());
+    CHECK(shownError(key).isEmpty());
+
+    // A value listed twice in an article-level item names the lines.
+    const QString itemValues = QStringLiteral("items[0].values");
+    QPlainTextEdit *answers = textField(w, itemValues);
+    answers->setPlainText(answers->toPlainText() + QStringLiteral("\nnone"));
+    CHECK(w.fieldError(itemValues) == QStringLiteral("“none” is listed twice (lines 5 and 6)."));
+
+    auto versionsAfter = StudyDesign::codebookVersions(*project);
+    REQUIRE(versionsAfter);
+    CHECK(versionsAfter->size() == versionsBefore->size());
+    auto stored = project->codebook();
+    REQUIRE(stored);
+    CHECK(stored->toJson() == w.stored().toJson());
+}
+
+TEST_CASE("undo in the codebook editor restores the text and redo brings the edit back")
+{
+    SampleCopy f;
+    auto project = Project::open(f.path);
+    REQUIRE(project);
+    CodebookEditor w(*project, leadOf(*project));
+    w.show();
+    QPlainTextEdit *definition = textField(w, QStringLiteral("functions[1].definition"));
+    const QString old = definition->toPlainText();
+    REQUIRE_FALSE(old.isEmpty());
+    // Typed a key at a time: one step for the field.
+    definition->setFocus();
+    definition->moveCursor(QTextCursor::End);
+    QTest::keyClicks(definition, QStringLiteral(" Also"));
+    CHECK(definition->toPlainText() == old + QStringLiteral(" Also"));
+    CHECK(w.undoStack()->count() == 1);
+    QLineEdit *label = lineField(w, QStringLiteral("functions[1].label"));
+    label->setText(QStringLiteral("Cause"));
+    CHECK(w.undoStack()->count() == 2);
+
+    QTest::keyClick(definition, Qt::Key_Z, Qt::ControlModifier);
+    CHECK(label->text() == w.stored().definition(FramingFunction::Cause).label);
+    CHECK(definition->toPlainText() == old + QStringLiteral(" Also"));
+    QTest::keyClick(definition, Qt::Key_Z, Qt::ControlModifier);
+    CHECK(definition->toPlainText() == old);
+    CHECK(w.draft().toJson() == w.stored().toJson());
+    QTest::keyClick(definition, Qt::Key_Z, Qt::ControlModifier | Qt::ShiftModifier);
+    CHECK(definition->toPlainText() == old + QStringLiteral(" Also"));
+    CHECK(w.draft().definition(FramingFunction::Cause).definition == old + QStringLiteral(" Also"));
+}
+
+TEST_CASE("the lead menu opens the codebook editor once")
+{
+    SampleCopy f;
+    MainWindow desk;
+    REQUIRE(
+        desk.openProject(f.path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));
+    desk.leadWindows()->openCodebook();
+    QPointer<QWidget> editor = desk.leadWindows()->codebook();
+    REQUIRE(qobject_cast<CodebookEditor *>(editor.data()));
+    CHECK(editor->isVisible());
+    desk.leadWindows()->openCodebook();
+    CHECK(desk.leadWindows()->codebook() == editor.data());
+    desk.leadWindows()->closeAll();
+    CHECK_FALSE(editor);
+}
