@@ -167,6 +167,32 @@ bool looksLikeXml(QByteArrayView start)
     return start.startsWith("<");
 }
 
+// The kind of a zip container whose suffix names no format: its mimetype entry (EPUB's OCF §3.3,
+// ODF 1.2 part 3 §3.3), else a WordprocessingML main part ([Content_Types].xml's override for
+// word/document.xml, ISO/IEC 29500-2 §10.1.2, or the entry itself).
+Result<ImportFormat> zipContainerFormat(
+    const QByteArray &bytes, const QString &path, ZipLimits limits)
+{
+    Result<ZipArchive> archive = ZipArchive::open(bytes, path, limits);
+    if (!archive)
+        return std::unexpected(archive.error());
+    if (archive->contains(QStringLiteral("mimetype"))) {
+        Result<QByteArray> type = archive->read(QStringLiteral("mimetype"));
+        if (!type)
+            return std::unexpected(type.error());
+        const QByteArray mimetype = type->trimmed();
+        if (mimetype == "application/epub+zip")
+            return ImportFormat::Epub;
+        if (mimetype.startsWith("application/vnd.oasis.opendocument.text"))
+            return ImportFormat::Odt;
+    }
+    if (archive->contains(QStringLiteral("word/document.xml")))
+        return ImportFormat::Docx;
+    return failAt(ErrorCode::Unsupported, path, 0, 0,
+        tr("the file is a zip archive but not a DOCX, ODT or EPUB document; choose the format if "
+           "it is one"));
+}
+
 // Reads one opened file of `format` (none: XML told from its root element), handing each
 // article that passes the checks to `visit` with the bytes read so far: `before` plus this
 // file's position, of `total`.
@@ -194,6 +220,30 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
     const ImportedArticleSink take = [&](ImportedArticle &&article) {
         return checks.take(std::move(article));
     };
+    // A suffix that names no format: a PDF by its header (ISO 32000-1 §7.5.2), a zip container
+    // (APPNOTE.TXT's local file header signature) by its kind; else XML, below.
+    if (!format && input.pending().startsWith("%PDF-"))
+        format = ImportFormat::Pdf;
+    if (!format && input.pending().startsWith("PK\x03\x04")) {
+        Result<QByteArray> bytes = input.readAll();
+        if (!bytes)
+            return std::unexpected(bytes.error());
+        Result<ImportFormat> zipped = zipContainerFormat(*bytes, path, options.zipLimits);
+        if (!zipped)
+            return std::unexpected(zipped.error());
+        if (*zipped == ImportFormat::Epub) {
+            FOURFOLD_TRY_STATUS(
+                readEpubArticles(*bytes, path, options.zipLimits, options.epubWholeBook, take));
+        } else {
+            Result<ImportedArticle> article = *zipped == ImportFormat::Docx
+                ? readDocxArticle(*bytes, path, options.zipLimits)
+                : readOdtArticle(*bytes, path, options.zipLimits);
+            if (!article)
+                return std::unexpected(article.error());
+            FOURFOLD_TRY_STATUS(take(std::move(*article)));
+        }
+        return checks.finish();
+    }
     if (!format || format == ImportFormat::Feed || format == ImportFormat::NewsXml) {
         if (!format && !looksLikeXml(input.pending())) {
             return failAt(ErrorCode::Unsupported, path, 0, 0,

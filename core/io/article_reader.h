@@ -25,6 +25,9 @@
 //   with a suffix that names no format, is read as XML when its first character (after a BOM
 //   and whitespace) is "<", and is a feed or a news item by its root element (<rss>, Atom's
 //   <feed>; <nitf>, NewsML-G2's <newsItem> or <newsMessage>); any other root is Unsupported.
+//   A file of unknown suffix that starts with "%PDF-" is read as PDF, and one that starts with a
+//   zip signature ("PK\3\4") as EPUB or ODT by its mimetype entry, else as DOCX when it holds
+//   word/document.xml (any other zip archive is Unsupported).
 // - Error codes: InvalidInput for malformed content, Duplicate for a repeated id, Io for a file
 //   that cannot be read, Unsupported for an unknown format, InvalidArgument for a bad
 //   ImportOptions::csvColumns.
