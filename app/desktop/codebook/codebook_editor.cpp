@@ -156,7 +156,10 @@ CodebookEditor::CodebookEditor(Project &project, CoderId current, QWidget *paren
     QAction *undo = m_undo.createUndoAction(this, tr("&Undo:"));
     undo->setShortcut(QKeySequence::Undo);
     QAction *redo = m_undo.createRedoAction(this, tr("&Redo:"));
-    redo->setShortcuts({QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z), QKeySequence::Redo});
+    QList<QKeySequence> redoKeys = QKeySequence::keyBindings(QKeySequence::Redo);
+    if (!redoKeys.contains(QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z)))
+        redoKeys.prepend(QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_Z));
+    redo->setShortcuts(redoKeys);
     addAction(undo);
     addAction(redo);
     for (QAction *a : {undo, redo}) {
