@@ -198,6 +198,11 @@ void CodingSession::discardUnsavedEdit()
     m_unsaved.reset();
 }
 
+Status CodingSession::applyProjectEdit(std::unique_ptr<Edit> edit)
+{
+    return push(std::move(edit), ArticleId {}, {});
+}
+
 Status CodingSession::addSpan(ArticleId article, FramingFunction function, TextRange range)
 {
     auto edit = std::make_unique<AddAnnotationEdit>(

@@ -64,6 +64,9 @@ public:
     // Changes. Each is one command on the undo stack, applied (and committed) at once. On
     // failure nothing is pushed, errorOccurred() is emitted, and the error is returned.
     Status addSpan(ArticleId article, FramingFunction function, TextRange range);
+    // An edit about no article (People's changes): applied and put on the undo stack the same
+    // way.
+    Status applyProjectEdit(std::unique_ptr<Edit> edit);
     Status changeSpan(AnnotationId id, const AnnotationContent &content);
     Status deleteSpan(AnnotationId id);
     Status linkSpans(AnnotationId source, AnnotationId target, const QString &type);

@@ -3,6 +3,7 @@
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/message_bar.h"
+#include "app/desktop/people/people_window.h"
 #include "app/desktop/reliability/reliability_window.h"
 #include "app/desktop/reliability/report_options_dialog.h"
 #include "app/desktop/runs/extractor_window.h"
@@ -44,7 +45,7 @@ void LeadWindows::closeAll()
 {
     // Deleted at once, not later: each window holds a reference to the session's project.
     for (QPointer<QWidget> *w :
-        {&m_comparison, &m_reliability, &m_studyDesign, &m_progress, &m_extractors})
+        {&m_comparison, &m_reliability, &m_studyDesign, &m_progress, &m_extractors, &m_people})
         delete w->data();
 }
 
@@ -105,6 +106,18 @@ void LeadWindows::openExtractors()
     if (!m_extractors)
         m_extractors = new ExtractorWindow(m_session->project());
     raise(m_extractors);
+}
+
+void LeadWindows::openPeople()
+{
+    if (!m_session)
+        return;
+    if (!m_people) {
+        auto *w = new PeopleWindow(m_session);
+        connect(m_session, &QObject::destroyed, w, &QObject::deleteLater);
+        m_people = w;
+    }
+    raise(m_people);
 }
 
 void LeadWindows::writeReport()

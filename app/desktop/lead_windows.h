@@ -34,6 +34,7 @@ public:
     void openStudyDesign();
     void openProgress();
     void openExtractors();
+    void openPeople();
     // Asks for a file name and writes the reliability report (HTML or PDF by its suffix).
     void writeReport();
     // Asks for a coder and a file name and writes that coder's copy.
@@ -47,6 +48,7 @@ public:
     QWidget *studyDesign() const { return m_studyDesign; }
     QWidget *progress() const { return m_progress; }
     QWidget *extractors() const { return m_extractors; }
+    QWidget *people() const { return m_people; }
 
 signals:
     // Assignments or codings changed outside the desk (study design, merge): reload the list.
@@ -63,6 +65,7 @@ private:
     QPointer<QWidget> m_studyDesign;
     QPointer<QWidget> m_progress;
     QPointer<QWidget> m_extractors;
+    QPointer<QWidget> m_people;
 };
 
 } // namespace fourfold

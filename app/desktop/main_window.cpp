@@ -360,6 +360,7 @@ void MainWindow::buildMenus()
     m_leadMenu->addSeparator();
     m_leadMenu->addAction(tr("&Study design…"), m_lead, &LeadWindows::openStudyDesign);
     m_leadMenu->addAction(tr("&Progress…"), m_lead, &LeadWindows::openProgress);
+    m_leadMenu->addAction(tr("P&eople…"), m_lead, &LeadWindows::openPeople);
     m_leadMenu->addAction(tr("&Hand out a coder copy…"), m_lead, &LeadWindows::handOutCopy);
     m_leadMenu->addAction(tr("&Merge returned coder copies…"), m_lead, &LeadWindows::mergeCopies);
     m_leadMenu->addSeparator();
