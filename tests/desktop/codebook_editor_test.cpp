@@ -180,6 +180,26 @@ TEST_CASE("a codebook change in the editor gives the version diff and outdated l
     }
     CHECK(w.messageBar()->text().contains(QStringLiteral("%1 annotation").arg(outdated.size())));
     CHECK(w.messageBar()->text().contains(QStringLiteral("; %1 of them").arg(recheck)));
+
+    // A version added elsewhere meanwhile (here the command line) is not overwritten unseen.
+    QJsonObject third = book;
+    third.insert(QStringLiteral("name"), QStringLiteral("Renamed from the command line"));
+    {
+        QFile out(file);
+        REQUIRE(out.open(QIODevice::WriteOnly | QIODevice::Truncate));
+        out.write(QJsonDocument(third).toJson());
+    }
+    REQUIRE(runCli(kCli,
+                {QStringLiteral("codebook"), viaEditor.path, QStringLiteral("--update"), file,
+                    QStringLiteral("--note"), QStringLiteral("renamed")})
+                .exitCode
+        == 0);
+    textField(w, QStringLiteral("functions[1].definition"))->setPlainText(kDefinition);
+    CHECK_FALSE(w.saveAsNewVersion(QStringLiteral("too late")));
+    CHECK(w.messageBar()->kind() == MessageBar::Kind::Warning);
+    auto versions = StudyDesign::codebookVersions(*project);
+    REQUIRE(versions);
+    CHECK(versions->back().number == from + 2);
 }
 
 TEST_CASE("an invalid codebook draft is shown at its field and nothing is stored")

@@ -703,8 +703,28 @@ QString CodebookEditor::diffText() const
     return StudyDesign::codebookDiffText(diff);
 }
 
+bool CodebookEditor::currentIsStored()
+{
+    auto book = m_project.codebook();
+    if (!book) {
+        m_messages->showMessage(MessageBar::Kind::Error, book.error().message);
+        return false;
+    }
+    if (book->number == m_stored.number)
+        return true;
+    // Another window or the command line added a version: the diff would be against an old one.
+    m_messages->showMessage(MessageBar::Kind::Warning,
+        tr("Version %1 was added since this draft was started from version %2; nothing was "
+           "saved. Close the editor and open it again to edit the new version.")
+            .arg(book->number)
+            .arg(m_stored.number));
+    return false;
+}
+
 bool CodebookEditor::saveAsNewVersion(const QString &note)
 {
+    if (!currentIsStored())
+        return false;
     showCheck(true);
     if (!m_check.candidate) {
         m_messages->showMessage(MessageBar::Kind::Warning,
@@ -748,6 +768,8 @@ bool CodebookEditor::saveAsNewVersion(const QString &note)
 
 void CodebookEditor::askAndSave()
 {
+    if (!currentIsStored())
+        return;
     showCheck(true);
     if (!m_check.candidate) {
         m_messages->showMessage(MessageBar::Kind::Warning,

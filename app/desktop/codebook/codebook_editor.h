@@ -126,6 +126,9 @@ private:
     // `go` first turns to the field's page and row.
     void showCheck(bool go);
     QString fieldKey(const QString &field) const;
+    // Whether the project's current version is still the one the draft started from; says why
+    // not in the message bar.
+    bool currentIsStored();
     void askAndSave();
 
     Project &m_project;
