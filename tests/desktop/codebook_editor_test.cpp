@@ -10,11 +10,14 @@
 #include "tests/support/cli_run.h"
 #include "tests/support/test_support.h"
 
+#include <QAction>
 #include <QFile>
 #include <QJsonArray>
 #include <QJsonDocument>
 #include <QLabel>
 #include <QLineEdit>
+#include <QMenu>
+#include <QMenuBar>
 #include <QPlainTextEdit>
 #include <QPointer>
 #include <QTemporaryDir>
@@ -296,13 +299,20 @@ TEST_CASE("undo in the codebook editor restores the text and redo brings the edi
     CHECK(w.draft().definition(FramingFunction::Cause).definition == old + QStringLiteral(" Also"));
 }
 
-TEST_CASE("the lead menu opens the codebook editor once")
+TEST_CASE("the lead menu entry Codebook opens the editor once")
 {
     SampleCopy f;
     MainWindow desk;
     REQUIRE(
         desk.openProject(f.path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));
-    desk.leadWindows()->openCodebook();
+    QAction *entry = nullptr;
+    for (QAction *menu : desk.menuBar()->actions())
+        if (menu->menu() && menu->text().remove(QLatin1Char('&')) == QLatin1String("Lead"))
+            for (QAction *a : menu->menu()->actions())
+                if (a->text().remove(QLatin1Char('&')) == QStringLiteral("Codebook…"))
+                    entry = a;
+    REQUIRE(entry);
+    entry->trigger();
     QPointer<QWidget> editor = desk.leadWindows()->codebook();
     REQUIRE(qobject_cast<CodebookEditor *>(editor.data()));
     CHECK(editor->isVisible());
