@@ -38,6 +38,7 @@ struct CurrentArticle {
 
 Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &path, Phase phase)
 {
+    FOURFOLD_TRY_STATUS(project.checkBeforeImport());
     auto summaries = project.articles();
     if (!summaries)
         return std::unexpected(summaries.error());

@@ -48,6 +48,7 @@ Result<QString> requiredString(
 Result<CodingImportReport> importQuotedCodings(Project &project, const QString &path, Phase phase)
 {
     FOURFOLD_TRY_STATUS(requireRegularFile(path));
+    FOURFOLD_TRY_STATUS(project.checkBeforeImport());
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
         return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));

@@ -139,6 +139,9 @@ public:
     Result<ProjectCounts> counts() const;
     // Checks the file (see IntegrityReport). Fails only if the checks themselves cannot run.
     Result<IntegrityReport> check() const;
+    // SQLite's quick check of the file, made before an import writes into it: Corrupt naming the
+    // file when it is damaged (see store::quickCheck). Takes time in proportion to the file.
+    Status checkBeforeImport() const;
 
     // For tests: the underlying connection (fault injection, dumps). Not for front ends.
     Database &databaseForTesting() { return m_db; }

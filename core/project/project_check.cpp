@@ -19,6 +19,11 @@ QString tr(const char *text)
 
 } // namespace
 
+Status Project::checkBeforeImport() const
+{
+    return store::quickCheck(m_db);
+}
+
 Result<IntegrityReport> Project::check() const
 {
     IntegrityReport report;

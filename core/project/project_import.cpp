@@ -62,6 +62,7 @@ Result<Article> prepareArticle(
 Result<ImportReport> Project::importFile(
     const QString &path, const ImportOptions &options, const ImportProgress &progress)
 {
+    FOURFOLD_TRY_STATUS(checkBeforeImport());
     ImportReport report;
     report.source = path;
     auto sp = Savepoint::begin(m_db);

@@ -239,6 +239,28 @@ Result<std::vector<StoredArticle>> allStoredArticles(const Database &db)
     });
 }
 
+Status quickCheck(const Database &db)
+{
+    auto check = db.prepare(QStringLiteral("PRAGMA quick_check(1)"));
+    if (!check)
+        return std::unexpected(check.error());
+    auto row = check->step();
+    if (!row) {
+        // SQLite itself may stop at the damage (SQLITE_CORRUPT) instead of reporting it.
+        if (row.error().code != ErrorCode::Corrupt)
+            return std::unexpected(row.error());
+    } else if (*row && check->columnText(0) == QLatin1String("ok")) {
+        return {};
+    }
+    const QString problem = row && *row ? check->columnText(0) : row.error().cause;
+    return fail(ErrorCode::Corrupt,
+        QCoreApplication::translate("ProjectTables",
+            "The project file %1 is damaged, so nothing was added to it; `fourfold-cli check` "
+            "lists the damage. Restore it from a backup.")
+            .arg(db.path()),
+        problem);
+}
+
 Result<QStringList> sqliteChecks(const Database &db)
 {
     QStringList problems;

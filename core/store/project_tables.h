@@ -77,5 +77,12 @@ Result<std::vector<StoredArticle>> allStoredArticles(const Database &db);
 // index check. Returns the problems found (empty when all is well).
 Result<QStringList> sqliteChecks(const Database &db);
 
+// SQLite's quick check (PRAGMA quick_check: every page and b-tree, without comparing indexes to
+// their tables; sqlite.org/pragma.html#pragma_quick_check) before a command writes many rows into
+// the file. Fails with ErrorCode::Corrupt naming the file and the first problem: nothing should
+// be added to a damaged file (an import would succeed on many kinds of damage, and exports would
+// then carry it on).
+Status quickCheck(const Database &db);
+
 } // namespace store
 } // namespace fourfold

@@ -1,3 +1,4 @@
+#include "core/project/coding_import.h"
 #include "core/store/statement.h"
 #include "core/text/canonical_text.h"
 #include "core/text/offset_map.h"
@@ -5,6 +6,7 @@
 #include "tests/support/db_dump.h"
 
 #include <QCryptographicHash>
+#include <QFile>
 
 #include <sqlite3.h>
 
@@ -256,4 +258,64 @@ TEST_CASE("an error on the last line of a large file leaves the project unchange
         CHECK(calls == 3000);
         CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
     }
+}
+
+TEST_CASE("issue 20 item 10: an import into a damaged project file is refused and writes nothing")
+{
+    // A b-tree page of a table the import does not write (codebook_version) gets an invalid page
+    // type: SQLite's file format (sqlite.org/fileformat2.html §1.6) allows only 2, 5, 10 and 13
+    // as the first byte of a b-tree page. Opening reads only the schema, so the file opens.
+    QTemporaryDir dir;
+    const QString path = dir.filePath(QStringLiteral("t.fourfold"));
+    {
+        auto p = Project::create(path);
+        REQUIRE(p);
+        REQUIRE(p->importFile(writeFile(dir, QStringLiteral("a.jsonl"), kTwoArticles), {}));
+    }
+    qint64 page = 0;
+    qint64 pageSize = 0;
+    {
+        sqlite3 *raw = nullptr;
+        REQUIRE(
+            sqlite3_open_v2(qPrintable(path), &raw, SQLITE_OPEN_READONLY, nullptr) == SQLITE_OK);
+        sqlite3_stmt *st = nullptr;
+        REQUIRE(sqlite3_prepare_v2(raw,
+                    "SELECT rootpage, (SELECT page_size FROM pragma_page_size) FROM sqlite_schema "
+                    "WHERE name = 'codebook_version'",
+                    -1, &st, nullptr)
+            == SQLITE_OK);
+        REQUIRE(sqlite3_step(st) == SQLITE_ROW);
+        page = sqlite3_column_int64(st, 0);
+        pageSize = sqlite3_column_int64(st, 1);
+        sqlite3_finalize(st);
+        sqlite3_close(raw);
+    }
+    REQUIRE(page > 1);
+    {
+        QFile file(path);
+        REQUIRE(file.open(QIODevice::ReadWrite));
+        REQUIRE(file.seek((page - 1) * pageSize));
+        REQUIRE(file.write(QByteArray(1, '\x7f')) == 1);
+    }
+    auto project = Project::open(path);
+    REQUIRE(project);
+    const QString before =
+        dumpDatabase(project->databaseForTesting(), {QStringLiteral("codebook_version")});
+    auto imported =
+        project->importFile(writeFile(dir, QStringLiteral("b.jsonl"),
+                                "{\"id\":\"n1\",\"title\":\"New\",\"text\":\"A new article.\"}\n"),
+            {});
+    REQUIRE_FALSE(imported);
+    CHECK(imported.error().code == ErrorCode::Corrupt);
+    CHECK(imported.error().message.contains(QStringLiteral("is damaged")));
+    CHECK(imported.error().message.contains(QStringLiteral("fourfold-cli check")));
+    // Codings are refused the same way.
+    auto codings = importQuotedCodings(*project,
+        writeFile(dir, QStringLiteral("c.jsonl"),
+            "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":\"The\"}\n"),
+        Phase::Production);
+    REQUIRE_FALSE(codings);
+    CHECK(codings.error().code == ErrorCode::Corrupt);
+    CHECK(dumpDatabase(project->databaseForTesting(), {QStringLiteral("codebook_version")})
+        == before);
 }
