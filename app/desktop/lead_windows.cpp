@@ -1,5 +1,6 @@
 #include "app/desktop/lead_windows.h"
 
+#include "app/desktop/codebook/codebook_editor.h"
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/message_bar.h"
@@ -44,8 +45,8 @@ void LeadWindows::setSession(CodingSession *session)
 void LeadWindows::closeAll()
 {
     // Deleted at once, not later: each window holds a reference to the session's project.
-    for (QPointer<QWidget> *w :
-        {&m_comparison, &m_reliability, &m_studyDesign, &m_progress, &m_extractors, &m_people})
+    for (QPointer<QWidget> *w : {&m_comparison, &m_reliability, &m_studyDesign, &m_progress,
+             &m_extractors, &m_people, &m_codebook})
         delete w->data();
 }
 
@@ -118,6 +119,22 @@ void LeadWindows::openPeople()
         m_people = w;
     }
     raise(m_people);
+}
+
+void LeadWindows::openCodebook()
+{
+    if (!m_session)
+        return;
+    if (!m_codebook) {
+        auto *w = new CodebookEditor(m_session->project(), m_session->coder().id);
+        connect(w, &CodebookEditor::versionAdded, this, &LeadWindows::projectChanged);
+        connect(w, &CodebookEditor::versionAdded, this, [this] {
+            if (auto *study = qobject_cast<StudyDesignWindow *>(m_studyDesign.data()))
+                study->refresh();
+        });
+        m_codebook = w;
+    }
+    raise(m_codebook);
 }
 
 void LeadWindows::writeReport()

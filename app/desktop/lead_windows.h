@@ -35,6 +35,7 @@ public:
     void openProgress();
     void openExtractors();
     void openPeople();
+    void openCodebook();
     // Asks for a file name and writes the reliability report (HTML or PDF by its suffix).
     void writeReport();
     // Asks for a coder and a file name and writes that coder's copy.
@@ -49,6 +50,7 @@ public:
     QWidget *progress() const { return m_progress; }
     QWidget *extractors() const { return m_extractors; }
     QWidget *people() const { return m_people; }
+    QWidget *codebook() const { return m_codebook; }
 
 signals:
     // Assignments or codings changed outside the desk (study design, merge): reload the list.
@@ -66,6 +68,7 @@ private:
     QPointer<QWidget> m_progress;
     QPointer<QWidget> m_extractors;
     QPointer<QWidget> m_people;
+    QPointer<QWidget> m_codebook;
 };
 
 } // namespace fourfold
