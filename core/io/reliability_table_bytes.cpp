@@ -334,45 +334,25 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
                 i = quote + 1;
                 break;
             }
-            if (i == n)
-                break;
-            if (bytes[i] == ',') {
-                ++i;
-                if (i == n || lineBreakWidth(i)) {
-                    // A record that ends in a comma has an empty last field.
-                    fields.emplace_back();
-                    if (!endRecord())
-                        return std::nullopt;
-                    if (i < n) {
-                        i += lineBreakWidth(i);
-                        ++line;
-                    }
-                }
-                continue;
-            }
-            if (const size_t width = lineBreakWidth(i)) {
-                if (!endRecord())
+        } else {
+            // An unquoted field: up to a comma or a line break; a quote inside is a fault.
+            size_t end = i;
+            while (end < n && bytes[end] != ',' && bytes[end] != '\n' && bytes[end] != '\r') {
+                if (bytes[end] == '"')
                     return std::nullopt;
-                i += width;
-                ++line;
-                continue;
+                ++end;
             }
-            return std::nullopt; // a character after the closing quote
+            fields.push_back(bytes.substr(i, end - i));
+            i = end;
         }
-        // An unquoted field: up to a comma or a line break; a quote inside is a fault.
-        size_t end = i;
-        while (end < n && bytes[end] != ',' && bytes[end] != '\n' && bytes[end] != '\r') {
-            if (bytes[end] == '"')
-                return std::nullopt;
-            ++end;
-        }
-        fields.push_back(bytes.substr(i, end - i));
-        i = end;
+        // After a field: the end, a comma or a line break (after a closing quote anything else
+        // is a fault).
         if (i == n)
             break;
         if (bytes[i] == ',') {
             ++i;
             if (i == n || lineBreakWidth(i)) {
+                // A record that ends in a comma has an empty last field.
                 fields.emplace_back();
                 if (!endRecord())
                     return std::nullopt;
@@ -384,7 +364,7 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
             continue;
         }
         const size_t width = lineBreakWidth(i);
-        if (!endRecord())
+        if (width == 0 || !endRecord())
             return std::nullopt;
         i += width;
         ++line;
