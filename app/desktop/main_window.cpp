@@ -359,6 +359,7 @@ void MainWindow::buildMenus()
     m_leadMenu->addAction(tr("Write the reliability &report…"), m_lead, &LeadWindows::writeReport);
     m_leadMenu->addSeparator();
     m_leadMenu->addAction(tr("&Study design…"), m_lead, &LeadWindows::openStudyDesign);
+    m_leadMenu->addAction(tr("C&odebook…"), m_lead, &LeadWindows::openCodebook);
     m_leadMenu->addAction(tr("&Progress…"), m_lead, &LeadWindows::openProgress);
     m_leadMenu->addAction(tr("P&eople…"), m_lead, &LeadWindows::openPeople);
     m_leadMenu->addAction(tr("&Hand out a coder copy…"), m_lead, &LeadWindows::handOutCopy);
