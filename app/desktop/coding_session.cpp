@@ -163,6 +163,12 @@ std::vector<Judgement> CodingSession::ownJudgements(ArticleId article) const
 Status CodingSession::push(
     std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched)
 {
+    if (m_project.isReadOnly()) {
+        // Not tried at all: a read-only file takes no change, and Retry could not help.
+        Error refused = fail(ErrorCode::NotAllowed, readOnlyMessage()).error();
+        emit errorOccurred(refused.message);
+        return std::unexpected(std::move(refused));
+    }
     // Applied first, so that a refused edit reports its own error and never reaches the stack.
     if (auto st = m_project.apply(*edit); !st) {
         logError(lcDesktop(), st.error());
@@ -178,6 +184,13 @@ Status CodingSession::push(
     m_undo.push(new EditCommand(this, std::move(edit), article, touched));
     changed(article, touched);
     return {};
+}
+
+QString CodingSession::readOnlyMessage() const
+{
+    return tr("%1 is read-only: you can read, compare and compute, but nothing is saved. To "
+              "code, copy the file to a folder you may write to and open the copy.")
+        .arg(m_project.path());
 }
 
 QString CodingSession::unsavedEditText() const
@@ -272,6 +285,8 @@ Status CodingSession::markDone(ArticleId article)
 
 void CodingSession::addCodingTime(ArticleId article, qint64 seconds)
 {
+    if (m_project.isReadOnly())
+        return; // reading a read-only file is not coding time to record
     if (auto st = m_project.addCodingTime(article, m_coder.id, seconds); !st) {
         emit errorOccurred(st.error().toString());
         return;

@@ -81,6 +81,12 @@ public:
     // the open document's without a read.
     Phase phaseOf(ArticleId article) const;
 
+    // A project file this process may not write (a read-only file, folder or mount) is opened
+    // read-only: every change is refused before it is tried, with readOnlyMessage(), and no
+    // coding time is recorded.
+    bool isReadOnly() const { return m_project.isReadOnly(); }
+    QString readOnlyMessage() const;
+
     // An edit the project file could not take (another program was writing it past the busy
     // timeout, or the disk refused): kept here, not on the undo stack, until it is retried or
     // discarded, so a change the coder made never silently vanishes. A refused edit (invalid,

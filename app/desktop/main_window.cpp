@@ -394,7 +394,9 @@ void MainWindow::buildMenus()
 Status MainWindow::openProject(
     const QString &path, const QString &pseudonym, const std::optional<QString> &passphrase)
 {
-    auto project = Project::open(path);
+    // A file this process may not write opens read-only (the window says so) rather than not
+    // at all.
+    auto project = Project::openForReading(path);
     if (!project)
         return std::unexpected(project.error());
     std::optional<SignedIn> who;
@@ -491,6 +493,8 @@ Status MainWindow::openProject(
     updateTitle();
     if (m_filter->rowCount() > 0)
         m_list->selectRow(0);
+    if (m_session->isReadOnly())
+        m_messages->showMessage(MessageBar::Kind::Warning, m_session->readOnlyMessage());
     return {};
 }
 
@@ -720,8 +724,11 @@ void MainWindow::updateTitle()
     }
     const Coder &c = m_session->coder();
     const QString role = m_session->isLead() ? tr("lead") : tr("coder");
-    setWindowTitle(tr("%1 — coding as %2 (%3) — Fourfold")
-                       .arg(m_session->project().settings().name, c.pseudonym, role));
+    setWindowTitle(m_session->isReadOnly()
+            ? tr("%1 — read-only, as %2 (%3) — Fourfold")
+                  .arg(m_session->project().settings().name, c.pseudonym, role)
+            : tr("%1 — coding as %2 (%3) — Fourfold")
+                  .arg(m_session->project().settings().name, c.pseudonym, role));
     m_who->setText(m_session->isLead()
             ? tr("Coding as %1 · %2 · lead: every article").arg(c.pseudonym, c.name)
             : tr("Coding as %1 · %2 · blind: only your own spans").arg(c.pseudonym, c.name));

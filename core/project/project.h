@@ -46,6 +46,9 @@ public:
     // older schema is opened with open() and upgraded (it needs write permission then). Fails
     // as open() does; a change through a read-only project fails with Io.
     static Result<Project> openForReading(const QString &path);
+    // True when the file was opened read-only (openForReading on a file this process may not
+    // write): every change then fails.
+    bool isReadOnly() const;
     // The schema version this program writes (older files are migrated up to it when opened).
     static int schemaVersion();
 

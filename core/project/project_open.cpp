@@ -40,4 +40,9 @@ Result<Project> Project::openForReading(const QString &path)
     return project;
 }
 
+bool Project::isReadOnly() const
+{
+    return m_db.isReadOnly();
+}
+
 } // namespace fourfold

@@ -225,6 +225,11 @@ Result<Database> Database::open(const QString &path, OpenMode mode)
     return db;
 }
 
+bool Database::isReadOnly() const
+{
+    return m_db && sqlite3_db_readonly(m_db, "main") == 1;
+}
+
 Status Database::exec(const QString &sql)
 {
     char *message = nullptr;

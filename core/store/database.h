@@ -43,6 +43,9 @@ public:
     static void setOpenFaultHook(OpenFaultHook hook);
 
     bool isOpen() const { return m_db != nullptr; }
+    // True for a connection that may not write (opened ReadOnly, or SQLite found the file
+    // read-only).
+    bool isReadOnly() const;
     QString path() const { return m_path; }
     sqlite3 *handle() const { return m_db; }
 
