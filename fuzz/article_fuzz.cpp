@@ -1,5 +1,6 @@
 // One article format, chosen by FOURFOLD_FUZZ_FORMAT (an importFormatKey: "txt", "html",
-// "jsonl", "csv", "feed", "newsxml"), read through forEachArticle as `import --format` does.
+// "jsonl", "csv", "feed", "newsxml", "docx", "odt", "pdf", "epub"), read through forEachArticle
+// as `import --format` does.
 // Every article handed over must carry what the shared checks promise; a refusal must name the
 // file.
 
