@@ -4,6 +4,8 @@
 #include <QFile>
 #include <QFileInfo>
 
+#include <algorithm>
+
 namespace fourfold {
 
 namespace {
@@ -38,11 +40,25 @@ Result<QByteArray> readWholeFile(const QString &path, qint64 maxBytes)
     };
     if (file.size() > maxBytes)
         return tooLong();
-    QByteArray bytes = file.read(maxBytes + 1);
-    if (file.error() != QFileDevice::NoError) {
-        auto error = failAt(ErrorCode::Io, path, 0, 0, tr("the file cannot be read"));
-        error.error().cause = file.errorString();
-        return error;
+    // Read into a buffer the size the file has now, plus one step of room for the read that
+    // finds the end: QIODevice::read(maxBytes + 1) would allocate the whole cap (1 GiB) first,
+    // for any file. A file that grows while it is read is read on in steps, up to the limit.
+    constexpr qint64 step = qint64(1) << 20;
+    QByteArray bytes;
+    bytes.reserve(qsizetype(std::min(file.size(), maxBytes) + step));
+    while (bytes.size() <= maxBytes) {
+        const qsizetype at = bytes.size();
+        const qint64 want = std::min(maxBytes + 1 - at, at < file.size() ? file.size() - at : step);
+        bytes.resize(at + qsizetype(want));
+        const qint64 got = file.read(bytes.data() + at, want);
+        if (got < 0) {
+            auto error = failAt(ErrorCode::Io, path, 0, 0, tr("the file cannot be read"));
+            error.error().cause = file.errorString();
+            return error;
+        }
+        bytes.resize(at + qsizetype(got));
+        if (got == 0)
+            break;
     }
     if (bytes.size() > maxBytes)
         return tooLong();

@@ -9,8 +9,10 @@
 #include "core/project/coding_import.h"
 #include "core/project/study_design.h"
 #include "tests/project/project_fixture.h"
+#include "tests/support/cli_run.h"
 
 #include <QFile>
+#include <QJsonObject>
 
 using namespace fourfold;
 
@@ -139,4 +141,30 @@ TEST_CASE("issue 20 item 10: a whole-file read stops at its limit", "[files]")
     auto within = readWholeFile(path, 2 << 20);
     REQUIRE(within);
     CHECK(within->size() == 2 << 20);
+}
+
+TEST_CASE(
+    "issue 20 item 10: a whole-file read takes memory for the file not for the limit", "[files]")
+{
+    // Found by libFuzzer (fuzz_reliability_table): reading a whole file asked for its 1 GiB cap
+    // at once, so `agree --data` on a three-line matrix aborted wherever memory cannot be
+    // promised beyond what is there (here: an address-space limit of 800 MB, set by prlimit).
+    QTemporaryDir dir;
+    const QString path = dir.filePath(QStringLiteral("m.csv"));
+    {
+        QFile f(path);
+        REQUIRE(f.open(QIODevice::WriteOnly));
+        REQUIRE(f.write("unit,A,B\nu1,x,y\nu2,x,x\nu3,y,y\n") > 0);
+    }
+    const test::CliRun r = test::runCli(QStringLiteral("/usr/bin/prlimit"),
+        {QStringLiteral("--as=800000000"), QStringLiteral(FOURFOLD_CLI), QStringLiteral("agree"),
+            QStringLiteral("--data"), path, QStringLiteral("--json")});
+    INFO(r.err.toStdString());
+    REQUIRE(r.exitCode == 0);
+    // Three units, two coders, every cell filled: n = 6 pairable values; nominal alpha
+    // 1 − D_o/D_e = 1 − (2/6)/(3·3·2/(6·5)) = 4/9 (Krippendorff 2011, §C, worked by hand).
+    const QJsonObject report = test::cliJson(r);
+    CHECK(report.value(QStringLiteral("pairable_values")).toDouble() == 6);
+    CHECK(report.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("value")).toDouble()
+        == Approx(4.0 / 9.0).margin(1e-12));
 }
