@@ -5,7 +5,6 @@
 #include "core/io/xml_document.h"
 
 #include <QCoreApplication>
-#include <QFileInfo>
 #include <QHash>
 #include <QRegularExpression>
 
@@ -367,29 +366,11 @@ Result<ImportedArticle> readDocxArticle(
         readNotes(QStringLiteral("endnotes"), endnotes, reader.endnotes, reader.endnotesPart));
     FOURFOLD_TRY_STATUS(reader.blocks(body));
 
-    OfficeMetadata metadata;
-    const QString coreProperties =
-        package->value(QStringLiteral("core-properties"), QStringLiteral("docProps/core.xml"));
-    if (archive.contains(coreProperties)) {
-        Result<XmlDocument> core = parseZipPart(archive, coreProperties);
-        if (!core)
-            return std::unexpected(core.error());
-        metadata = readOfficeMetadata(core->root());
-    }
-
-    if (text.isEmpty())
-        return failAt(ErrorCode::InvalidInput, file, 0, 0,
-            tr("the document holds no text: it contains no articles"));
-    ImportedArticle article;
-    const QString baseName = QFileInfo(file).completeBaseName();
-    article.externalId = baseName;
-    article.title = text.title(metadata.title, baseName);
-    article.text = text.text(article.title);
-    article.published = metadata.created;
-    article.language = metadata.language;
-    article.meta = metadata.meta;
-    article.sourceLine = 1;
-    return article;
+    Result<OfficeMetadata> metadata = readOfficeMetadataPart(archive,
+        package->value(QStringLiteral("core-properties"), QStringLiteral("docProps/core.xml")));
+    if (!metadata)
+        return std::unexpected(metadata.error());
+    return officeDocumentArticle(text, *metadata, file);
 }
 
 } // namespace fourfold

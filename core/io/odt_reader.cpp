@@ -5,7 +5,6 @@
 #include "core/io/xml_document.h"
 
 #include <QCoreApplication>
-#include <QFileInfo>
 #include <QHash>
 
 #include <libxml/tree.h>
@@ -259,28 +258,10 @@ Result<ImportedArticle> readOdtArticle(
     DocumentText text;
     BodyReader(styles, text).blocks(officeText);
 
-    OfficeMetadata metadata;
-    const QString metaPart = QStringLiteral("meta.xml");
-    if (archive.contains(metaPart)) {
-        Result<XmlDocument> meta = parseZipPart(archive, metaPart);
-        if (!meta)
-            return std::unexpected(meta.error());
-        metadata = readOfficeMetadata(meta->root());
-    }
-
-    if (text.isEmpty())
-        return failAt(ErrorCode::InvalidInput, file, 0, 0,
-            tr("the document holds no text: it contains no articles"));
-    ImportedArticle article;
-    const QString baseName = QFileInfo(file).completeBaseName();
-    article.externalId = baseName;
-    article.title = text.title(metadata.title, baseName);
-    article.text = text.text(article.title);
-    article.published = metadata.created;
-    article.language = metadata.language;
-    article.meta = metadata.meta;
-    article.sourceLine = 1;
-    return article;
+    Result<OfficeMetadata> metadata = readOfficeMetadataPart(archive, QStringLiteral("meta.xml"));
+    if (!metadata)
+        return std::unexpected(metadata.error());
+    return officeDocumentArticle(text, *metadata, file);
 }
 
 } // namespace fourfold

@@ -1,7 +1,11 @@
 #include "core/io/office_metadata.h"
 
+#include "core/io/document_text.h"
 #include "core/io/xml_document.h"
+#include "core/io/zip_archive.h"
 
+#include <QCoreApplication>
+#include <QFileInfo>
 #include <QStringList>
 
 #include <libxml/tree.h>
@@ -52,6 +56,35 @@ OfficeMetadata readOfficeMetadata(_xmlNode *root)
     if (!keywords.isEmpty())
         metadata.meta.insert(QStringLiteral("keywords"), keywords.join(QStringLiteral(", ")));
     return metadata;
+}
+
+Result<OfficeMetadata> readOfficeMetadataPart(ZipArchive &archive, const QString &part)
+{
+    if (!archive.contains(part))
+        return OfficeMetadata {};
+    Result<XmlDocument> document = parseZipPart(archive, part);
+    if (!document)
+        return std::unexpected(document.error());
+    return readOfficeMetadata(document->root());
+}
+
+Result<ImportedArticle> officeDocumentArticle(
+    const DocumentText &text, const OfficeMetadata &metadata, const QString &file)
+{
+    if (text.isEmpty())
+        return failAt(ErrorCode::InvalidInput, file, 0, 0,
+            QCoreApplication::translate(
+                "ArticleReader", "the document holds no text: it contains no articles"));
+    ImportedArticle article;
+    const QString baseName = QFileInfo(file).completeBaseName();
+    article.externalId = baseName;
+    article.title = text.title(metadata.title, baseName);
+    article.text = text.text(article.title);
+    article.published = metadata.created;
+    article.language = metadata.language;
+    article.meta = metadata.meta;
+    article.sourceLine = 1;
+    return article;
 }
 
 } // namespace fourfold
