@@ -729,9 +729,13 @@ void MainWindow::updateTitle()
                   .arg(m_session->project().settings().name, c.pseudonym, role)
             : tr("%1 — coding as %2 (%3) — Fourfold")
                   .arg(m_session->project().settings().name, c.pseudonym, role));
-    m_who->setText(m_session->isLead()
-            ? tr("Coding as %1 · %2 · lead: every article").arg(c.pseudonym, c.name)
-            : tr("Coding as %1 · %2 · blind: only your own spans").arg(c.pseudonym, c.name));
+    if (m_session->isReadOnly())
+        m_who->setText(
+            tr("Reading as %1 · %2 · read-only file: nothing is saved").arg(c.pseudonym, c.name));
+    else
+        m_who->setText(m_session->isLead()
+                ? tr("Coding as %1 · %2 · lead: every article").arg(c.pseudonym, c.name)
+                : tr("Coding as %1 · %2 · blind: only your own spans").arg(c.pseudonym, c.name));
 }
 
 void MainWindow::showShortcuts()
