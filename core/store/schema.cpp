@@ -314,8 +314,51 @@ ALTER TABLE coder ADD COLUMN passphrase_hash TEXT NOT NULL DEFAULT '';
 ALTER TABLE coder ADD COLUMN disabled INTEGER NOT NULL DEFAULT 0 CHECK (disabled IN (0, 1));
 )sql";
 
-constexpr std::array<const char *, kSchemaVersion> kMigrations {
-    kMigration1, kMigration2, kMigration3, kMigration4, kMigration5, kMigration6, kMigration7};
+// Migration 8: near copies found at import, and saved frame analyses. An article is a near copy of
+// an older one when the MinHash estimate of their word-shingle Jaccard similarity reaches the
+// import's threshold (exact copies are never stored twice, so they need no row here). A frame
+// analysis keeps its settings (layer, variables, k, the random generator's start) as JSON, each
+// cluster's name and profile, and which frame every article of the analysis fell into.
+constexpr const char *kMigration8 = R"sql(
+CREATE TABLE article_near_copy (
+  article_id INTEGER NOT NULL REFERENCES article(id),
+  other_id   INTEGER NOT NULL REFERENCES article(id),
+  similarity REAL NOT NULL CHECK (similarity >= 0 AND similarity <= 1),
+  found_at   TEXT NOT NULL,
+  PRIMARY KEY (article_id, other_id),
+  CHECK (article_id <> other_id)
+) STRICT, WITHOUT ROWID;
+CREATE INDEX article_near_copy_by_other ON article_near_copy(other_id);
+
+CREATE TABLE frame_analysis (
+  id         INTEGER PRIMARY KEY,
+  uuid       TEXT NOT NULL UNIQUE,
+  name       TEXT NOT NULL,
+  created_at TEXT NOT NULL,
+  created_by INTEGER REFERENCES coder(id),
+  settings   TEXT NOT NULL DEFAULT '{}',
+  deleted    INTEGER NOT NULL DEFAULT 0 CHECK (deleted IN (0, 1))
+) STRICT;
+
+CREATE TABLE frame_cluster (
+  analysis_id INTEGER NOT NULL REFERENCES frame_analysis(id),
+  cluster     INTEGER NOT NULL CHECK (cluster >= 0),
+  name        TEXT NOT NULL DEFAULT '',
+  profile     TEXT NOT NULL DEFAULT '{}',
+  PRIMARY KEY (analysis_id, cluster)
+) STRICT, WITHOUT ROWID;
+
+CREATE TABLE frame_member (
+  analysis_id INTEGER NOT NULL REFERENCES frame_analysis(id),
+  article_id  INTEGER NOT NULL REFERENCES article(id),
+  cluster     INTEGER NOT NULL CHECK (cluster >= 0),
+  PRIMARY KEY (analysis_id, article_id)
+) STRICT, WITHOUT ROWID;
+CREATE INDEX frame_member_by_article ON frame_member(article_id);
+)sql";
+
+constexpr std::array<const char *, kSchemaVersion> kMigrations {kMigration1, kMigration2,
+    kMigration3, kMigration4, kMigration5, kMigration6, kMigration7, kMigration8};
 // A migration left out of the list would silently do nothing: every slot must hold one.
 static_assert(std::ranges::none_of(kMigrations, [](const char *m) { return m == nullptr; }),
     "kSchemaVersion is higher than the number of migrations in kMigrations");

@@ -13,7 +13,7 @@ class Database;
 // 'FFLD': marks an SQLite file as a Fourfold project.
 inline constexpr qint64 kApplicationId = 0x46464C44;
 // The schema version this build writes. Migration n takes a file from version n-1 to n.
-inline constexpr int kSchemaVersion = 7;
+inline constexpr int kSchemaVersion = 8;
 
 // The file's schema version (PRAGMA user_version).
 Result<int> schemaVersion(Database &db);
