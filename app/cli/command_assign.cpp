@@ -65,6 +65,8 @@ void printDraw(const Draw &d)
             .arg(d.frameArticles)
             .arg(d.coders.join(QStringLiteral(", "))));
     if (!d.drawnAt.isEmpty())
+    if (d.nearCopiesLeftOut)
+        out(CliText::tr("  near copies left out of the sampling frame"));
         out(tr("  drawn at %1").arg(d.drawnAt));
     for (const DrawStratum &s : d.strata)
         out(tr("  stratum %1: %2 of %3").arg(s.key).arg(s.drawnArticles).arg(s.frameArticles));
@@ -254,6 +256,9 @@ int runAssign(const QStringList &arguments)
         QStringLiteral("P"), QStringLiteral("0.25"));
     const QCommandLineOption rest(QStringLiteral("rest"),
         tr("Deal every article without any assignment to --coders for production: single or "
+    const QCommandLineOption leaveOutNearCopies(QStringLiteral("leave-out-near-copies"),
+        CliText::tr("With --draw: leave articles found to be near copies of older ones at import "
+                    "out of the sampling frame."));
            "double coding."),
         QStringLiteral("MODE"));
     const QCommandLineOption phase(QStringLiteral("phase"),
@@ -284,10 +289,11 @@ int runAssign(const QStringList &arguments)
     const QCommandLineOption effort(QStringLiteral("effort"),
         tr("Show active time per coder (on) or only in aggregate (off, the default)."),
         QStringLiteral("on|off"));
-    const QCommandLineOption json(QStringLiteral("json"), tr("Print the result as JSON."));
-    parser.addOptions({draw, size, fraction, stratify, seed, alphaMin, rarest, rest, phase,
-        articles, coders, dryRun, show, progress, training, master, unit, effort, json});
-    parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
+    const QCommandLineOption json(QStringLiteral("json"), CliText::tr("Print the result as JSON."));
+    parser.addOptions(
+        {draw, size, fraction, stratify, leaveOutNearCopies, seed, alphaMin, rarest, rest, phase,
+            articles, coders, dryRun, show, progress, training, master, unit, effort, json});
+    parser.addPositionalArgument(QStringLiteral("PROJECT"), CliText::tr("The project file."));
     if (int rc = parseCommandLine(parser, kCommand,
             tr("Assign articles to coders per phase (training, pilot, reliability, production), "
                "draw the reliability subsample with a recorded seed, and follow progress. Give "
@@ -400,6 +406,7 @@ int runAssign(const QStringList &arguments)
             return usageError(kCommand, tr("unknown unit \"%1\".").arg(parser.value(unit)));
         trainingRequest.unit = *u;
     } else if (parser.isSet(effort)) {
+        drawRequest.leaveOutNearCopies = parser.isSet(leaveOutNearCopies);
         const QString v = parser.value(effort);
         if (v != QStringLiteral("on") && v != QStringLiteral("off"))
             return usageError(kCommand, tr("--effort takes on or off, not \"%1\".").arg(v));

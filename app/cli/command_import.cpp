@@ -95,6 +95,12 @@ int runImport(const QStringList &arguments)
     const QCommandLineOption wholeBook(QStringLiteral("whole-book"),
         QCoreApplication::translate(
             "cli", "EPUB: import each book as one article instead of one article per chapter."));
+    const QCommandLineOption nearCopyThreshold(QStringLiteral("near-copy-threshold"),
+        QCoreApplication::translate("cli",
+            "List and record an added article as a near copy of an article in the project when "
+            "the estimated Jaccard similarity of their 5-word shingles is at least J, in (0, 1] "
+            "(default 0.8)."),
+        QStringLiteral("J"));
     const QCommandLineOption json(
         QStringLiteral("json"), QCoreApplication::translate("cli", "Print the report as JSON."));
     const QCommandLineOption w3c(QStringLiteral("w3c"),
@@ -109,7 +115,8 @@ int runImport(const QStringList &arguments)
             "With --w3c or --codings: the phase of the imported codings (training, pilot, "
             "reliability, production; default production)."),
         QStringLiteral("PHASE"));
-    parser.addOptions({format, language, column, wholeBook, json, w3c, codings, phase});
+    parser.addOptions(
+        {format, language, column, wholeBook, nearCopyThreshold, json, w3c, codings, phase});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), QCoreApplication::translate("cli", "The project file."));
     parser.addPositionalArgument(QStringLiteral("FILE..."),
@@ -140,6 +147,15 @@ int runImport(const QStringList &arguments)
     }
     options.language = parser.value(language);
     options.epubWholeBook = parser.isSet(wholeBook);
+    if (parser.isSet(nearCopyThreshold)) {
+        bool ok = false;
+        options.nearCopyThreshold = parser.value(nearCopyThreshold).toDouble(&ok);
+        if (!ok || !(options.nearCopyThreshold > 0.0 && options.nearCopyThreshold <= 1.0))
+            return usageError(command,
+                QCoreApplication::translate(
+                    "cli", "--near-copy-threshold expects a number in (0, 1], got \"%1\".")
+                    .arg(parser.value(nearCopyThreshold)));
+    }
     for (const QString &mapping : parser.values(column)) {
         const qsizetype eq = mapping.indexOf(QLatin1Char('='));
         if (eq <= 0 || eq == mapping.size() - 1)
@@ -191,9 +207,15 @@ int runImport(const QStringList &arguments)
         for (const SkippedArticle &s : result->skipped)
             skipped.append(QJsonObject {{QStringLiteral("id"), s.externalId},
                 {QStringLiteral("line"), s.line}, {QStringLiteral("reason"), s.reason}});
+        QJsonArray nearCopies;
+        for (const NearCopyFound &n : result->nearCopies)
+            nearCopies.append(
+                QJsonObject {{QStringLiteral("id"), n.externalId}, {QStringLiteral("line"), n.line},
+                    {QStringLiteral("near_copy_of"), n.otherExternalId},
+                    {QStringLiteral("similarity"), n.similarity}});
         files.append(QJsonObject {{QStringLiteral("file"), file},
             {QStringLiteral("added"), qint64(result->added.size())},
-            {QStringLiteral("skipped"), skipped}});
+            {QStringLiteral("skipped"), skipped}, {QStringLiteral("near_copies"), nearCopies}});
         if (!parser.isSet(json)) {
             out(QCoreApplication::translate("cli", "%1: %2 added, %3 skipped")
                     .arg(file)
@@ -203,6 +225,12 @@ int runImport(const QStringList &arguments)
                 out(QCoreApplication::translate("cli", "  line %1 (%2): skipped, %3")
                         .arg(s.line)
                         .arg(s.externalId, s.reason));
+            for (const NearCopyFound &n : result->nearCopies)
+                out(QCoreApplication::translate(
+                    "cli", "  line %1 (%2): added, a near copy of \"%3\" (similarity %4)")
+                        .arg(n.line)
+                        .arg(n.externalId, n.otherExternalId)
+                        .arg(n.similarity, 0, 'f', 2));
         }
     }
     if (parser.isSet(json))

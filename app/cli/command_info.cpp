@@ -1,4 +1,5 @@
 #include "app/cli/cli_output.h"
+#include "core/project/near_copies.h"
 #include "core/project/project.h"
 
 #include <QCoreApplication>
@@ -54,6 +55,9 @@ int runInfo(const QStringList &arguments)
     auto articles = project->articles();
     if (!articles)
         return report(articles.error());
+    auto nearCopies = NearCopies::counts(*project);
+    if (!nearCopies)
+        return report(nearCopies.error());
     QMap<QString, qint64> languages;
     for (const ArticleSummary &a : *articles)
         ++languages[a.language];
@@ -76,6 +80,9 @@ int runInfo(const QStringList &arguments)
             {QStringLiteral("defaultLanguage"), project->settings().defaultLanguage},
             {QStringLiteral("articles"), counts->articles},
             {QStringLiteral("languages"), languagesJson},
+            {QStringLiteral("nearCopies"),
+                QJsonObject {{QStringLiteral("articles"), nearCopies->articles},
+                    {QStringLiteral("pairs"), nearCopies->pairs}}},
             {QStringLiteral("paragraphs"), counts->paragraphs},
             {QStringLiteral("sentences"), counts->sentences},
             {QStringLiteral("tokens"), counts->tokens},
@@ -106,6 +113,10 @@ int runInfo(const QStringList &arguments)
     out(QCoreApplication::translate("cli", "Articles     %1 (%2)")
             .arg(counts->articles)
             .arg(languageParts.join(QStringLiteral(", "))));
+    out(QCoreApplication::translate(
+        "cli", "Near copies  %1 article(s) a near copy of an older one (%2 pair(s))")
+            .arg(nearCopies->articles)
+            .arg(nearCopies->pairs));
     out(QCoreApplication::translate(
         "cli", "Units        %1 paragraphs, %2 sentences, %3 tokens, %4 characters")
             .arg(counts->paragraphs)

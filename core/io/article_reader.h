@@ -238,6 +238,9 @@ struct ImportOptions {
     ZipLimits zipLimits;
     // EPUB: the whole book as one article instead of one article per chapter.
     bool epubWholeBook = false;
+    // Project::importFile: an added article whose estimated word-shingle Jaccard similarity to
+    // an article of the project reaches this (in (0, 1]) is recorded as its near copy.
+    double nearCopyThreshold = 0.8;
 };
 
 // How far a reading has come, for a progress bar: the bytes of input read up to the end of the

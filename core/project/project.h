@@ -161,6 +161,10 @@ private:
     explicit Project(Database db)
         : m_db(std::move(db))
     { }
+    friend class NearCopies;
+    friend class SavedFrames;
+    // Tests reach the connection through core/project/testing/project_database.h.
+    friend struct ProjectTestAccess;
     Status loadSettings();
 
     Database m_db;

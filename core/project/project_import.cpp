@@ -1,6 +1,7 @@
 // Project::importFile: canonical text, hashing, segmentation and storage of new articles as
 // they are read, one transaction per source.
 #include "core/model/paragraph_role.h"
+#include "core/project/near_copy_check.h"
 #include "core/project/project.h"
 #include "core/store/article_table.h"
 #include "core/store/event_log.h"
@@ -63,6 +64,7 @@ Result<ImportReport> Project::importFile(
     const QString &path, const ImportOptions &options, const ImportProgress &progress)
 {
     FOURFOLD_TRY_STATUS(checkBeforeImport());
+    FOURFOLD_TRY_STATUS(NearCopyCheck::checkThreshold(options.nearCopyThreshold));
     ImportReport report;
     report.source = path;
     auto sp = Savepoint::begin(m_db);
@@ -71,6 +73,7 @@ Result<ImportReport> Project::importFile(
 
     QHash<QString, QString> shaInThisImport; // sha256 → external id of its first article
     const auto add = [&](const ImportedArticle &in) -> Status {
+    NearCopyCheck nearCopies(options.nearCopyThreshold);
         auto prepared = prepareArticle(in, path, m_settings.defaultLanguage);
         if (!prepared)
             return std::unexpected(prepared.error());
@@ -102,7 +105,8 @@ Result<ImportReport> Project::importFile(
             return std::unexpected(id.error());
         shaInThisImport.insert(sha, in.externalId);
         report.added.push_back(*id);
-        return {};
+        return nearCopies.check(
+            db(), *id, in.externalId, in.sourceLine, prepared->text, report.nearCopies);
     };
     const ArticleVisit visit = [&](ImportedArticle &&in, ReadProgress read) -> Status {
         FOURFOLD_TRY_STATUS(add(in));

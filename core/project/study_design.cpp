@@ -1,6 +1,7 @@
 #include "core/project/study_design.h"
 
 #include "core/io/input_file.h"
+#include "core/project/near_copies.h"
 #include "core/project/project.h"
 #include "core/reliability/krippendorff_alpha.h"
 #include "core/reliability/sample_size.h"
@@ -434,6 +435,13 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
 
     int size = 0;
     if (request.size)
+    if (request.leaveOutNearCopies) {
+        auto nearCopies = NearCopies::list(project);
+        if (!nearCopies)
+            return std::unexpected(nearCopies.error());
+        for (const store::NearCopyRow &row : *nearCopies)
+            excluded.insert(row.article.value);
+    }
         size = *request.size;
     else
         size = int(std::ceil(*request.fraction * frameSize - 1e-9));
@@ -457,6 +465,7 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
         std::vector<std::size_t> order(frame.size());
         for (std::size_t i = 0; i < order.size(); ++i)
             order[i] = i;
+    draw.nearCopiesLeftOut = request.leaveOutNearCopies;
         shuffle(order, engine);
         drawn.assign(order.begin(), order.begin() + size);
     } else {
@@ -612,6 +621,7 @@ QJsonObject StudyDesign::drawJson(const Draw &draw)
                 {QStringLiteral("minimum_values"), a.minimumValues},
                 {QStringLiteral("article_values"), a.articleValues},
                 {QStringLiteral("paragraph_values"), a.paragraphValues},
+        {QStringLiteral("near_copies_left_out"), draw.nearCopiesLeftOut},
                 {QStringLiteral("sentence_values"), a.sentenceValues},
                 {QStringLiteral("sufficient_units"),
                     QJsonArray::fromStringList(a.sufficientUnits)}}},
@@ -660,6 +670,8 @@ Result<Draw> StudyDesign::drawFromJson(const QJsonObject &json)
     d.advice.alphaMin = a.value(QStringLiteral("alpha_min")).toDouble();
     d.advice.significance = a.value(QStringLiteral("significance")).toDouble();
     d.advice.rarestProportion = a.value(QStringLiteral("rarest_proportion")).toDouble();
+    // Absent in records written before near copies were found: nothing was left out then.
+    d.nearCopiesLeftOut = json.value(QStringLiteral("near_copies_left_out")).toBool(false);
     d.advice.minimumValues = a.value(QStringLiteral("minimum_values")).toInt();
     d.advice.articleValues = a.value(QStringLiteral("article_values")).toInteger();
     d.advice.paragraphValues = a.value(QStringLiteral("paragraph_values")).toInteger();

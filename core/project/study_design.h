@@ -63,6 +63,9 @@ struct DrawRequest {
     std::optional<Stratum> stratify; // none = simple random sample
     std::uint64_t seed = 1;
     QStringList coders; // pseudonyms, at least two; every one codes every drawn article
+    // Leave out of the sampling frame every article recorded as a near copy of an older one
+    // (core/project/near_copies.h); the oldest article of each group of near copies stays.
+    bool leaveOutNearCopies = false;
     // For the minimum-sample advice (Krippendorff 2004, §11.4): alpha_min, the significance
     // level, and the expected share of the rarest value (0.25 = four equally frequent values).
     double alphaMin = 0.8;
@@ -100,6 +103,7 @@ struct Draw {
     std::uint64_t seed = 1;
     QStringList coders; // pseudonyms
     int frameArticles = 0; // size of the sampling frame
+    bool nearCopiesLeftOut = false; // DrawRequest::leaveOutNearCopies
     QStringList articles; // drawn external ids, sorted
     std::vector<DrawStratum> strata; // by key; empty for a random draw
     SampleAdvice advice;
@@ -238,15 +242,16 @@ public:
     // --- the reliability subsample draw ---------------------------------------------------
 
     // Plans a draw without writing. The sampling frame is every live article with no assignment in
-    // training, pilot or reliability (production assignments do not matter), sorted by external
-    // id. The sample is reproducible from the seed on every platform:
-    // mt19937_64 (fully specified by C++ [rand.eng.mers]) driving a Fisher–Yates shuffle with
-    // rejection sampling (no std::shuffle or distributions, whose output is
-    // implementation-defined). Stratified: proportional allocation by largest remainder (Hamilton),
-    // each stratum shuffled with the same generator in stratum-key order. Fails with
-    // InvalidArgument for a phase other than Reliability/Pilot, none or both of size and fraction,
-    // a size larger than the frame or below 1, fewer than two coders, a fraction outside (0, 1];
-    // NotFound for an unknown coder (naming it); Duplicate if the phase already has a draw.
+    // training, pilot or reliability (production assignments do not matter), and with
+    // leaveOutNearCopies none recorded as a near copy of an older one, sorted by external id. The
+    // sample is reproducible from the seed on every platform: mt19937_64 (fully specified by C++
+    // [rand.eng.mers]) driving a Fisher–Yates shuffle with rejection sampling (no std::shuffle or
+    // distributions, whose output is implementation-defined). Stratified: proportional allocation
+    // by largest remainder (Hamilton), each stratum shuffled with the same generator in stratum-key
+    // order. Fails with InvalidArgument for a phase other than Reliability/Pilot, none or both of
+    // size and fraction, a size larger than the frame or below 1, fewer than two coders, a fraction
+    // outside (0, 1]; NotFound for an unknown coder (naming it); Duplicate if the phase already has
+    // a draw.
     static Result<Draw> planDraw(const Project &project, const DrawRequest &request);
     // Writes the draw's assignments and its record in one savepoint. Fails as commitPlan, or with
     // Duplicate if a draw of the phase was recorded meanwhile; nothing is written then.
@@ -254,9 +259,10 @@ public:
     // The recorded draw of `phase`, if any. Fails with Corrupt if the record cannot be read.
     static Result<std::optional<Draw>> recordedDraw(const Project &project, Phase phase);
     // The draw as JSON (keys: phase, method, stratify, seed (string, to keep all 64 bits), coders,
-    // frame_articles, articles, strata [{key, frame, drawn}], advice {alpha_min, significance,
-    // rarest_proportion, minimum_values, article_values, paragraph_values, sentence_values,
-    // sufficient_units}, drawn_at). drawFromJson reads it back (Corrupt on a malformed record).
+    // frame_articles, near_copies_left_out, articles, strata [{key, frame, drawn}], advice
+    // {alpha_min, significance, rarest_proportion, minimum_values, article_values,
+    // paragraph_values, sentence_values, sufficient_units}, drawn_at). drawFromJson reads it back
+    // (Corrupt on a malformed record).
     static QJsonObject drawJson(const Draw &draw);
     static Result<Draw> drawFromJson(const QJsonObject &json);
 
