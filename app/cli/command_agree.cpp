@@ -14,10 +14,10 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
-{
-    return QCoreApplication::translate("cli", text, disambiguation, n);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 int runContinuum(const AgreementRun &run, const UnitSelection &selection, bool json)
 {
@@ -34,25 +34,26 @@ int runContinuum(const AgreementRun &run, const UnitSelection &selection, bool j
         return ExitOk;
     }
     for (const QString &l : leftOutLines(run.codings().leftOut))
-        out(tr("Left out      %1").arg(l));
-    out(tr("Coders        %1 (%2)")
+        out(CliText::tr("Left out      %1").arg(l));
+    out(CliText::tr("Coders        %1 (%2)")
             .arg(data.coders.size())
             .arg(data.coders.join(QStringLiteral(", "))));
-    out(tr("Continuum     %1 articles coded by all, %2 characters")
+    out(CliText::tr("Continuum     %1 articles coded by all, %2 characters")
             .arg(data.articles.size())
             .arg(data.length));
     auto line = [](const QString &name, const reliability::UnitizingCategoryResult &r) {
         return QStringLiteral("  %1 %2  %3")
             .arg(name, -12)
-            .arg(r.value ? QString::number(*r.value, 'f', 3) : tr("undefined"), 9)
+            .arg(r.value ? QString::number(*r.value, 'f', 3) : CliText::tr("undefined"), 9)
             .arg(r.value ? alphaVerdict(r.value) : QString::fromStdString(r.reason));
     };
-    out(tr("Unitizing alpha (Krippendorff 2004)"));
+    out(CliText::tr("Unitizing alpha (Krippendorff 2004)"));
     for (qsizetype i = 0; i < names.size() && size_t(i) < result.perCategory.size(); ++i)
         out(line(names[i], result.perCategory[size_t(i)]));
     if (names.size() > 1)
-        out(line(tr("all"), result.overall));
-    out(tr("Positive specific agreement per pair (span F1: same boundaries / any overlap)"));
+        out(line(CliText::tr("all"), result.overall));
+    out(CliText::tr(
+        "Positive specific agreement per pair (span F1: same boundaries / any overlap)"));
     for (const PairSpanAgreement &p : continuum->pairs) {
         QStringList parts;
         for (qsizetype i = 0; i < names.size(); ++i)
@@ -80,7 +81,7 @@ QStringList leaveOneOutText(const std::vector<LeaveOneOut> &entries)
     for (const LeaveOneOut &e : entries)
         lines << QStringLiteral("  %1 %2  %3  units %4")
                      .arg(e.name, -14)
-                     .arg(e.alpha ? QString::number(*e.alpha, 'f', 3) : tr("undefined"), 9)
+                     .arg(e.alpha ? QString::number(*e.alpha, 'f', 3) : CliText::tr("undefined"), 9)
                      .arg(e.change ? QString::asprintf("%+.3f", *e.change) : QStringLiteral("–"), 7)
                      .arg(e.units);
     return lines;
@@ -89,8 +90,9 @@ QStringList leaveOneOutText(const std::vector<LeaveOneOut> &entries)
 QStringList matchingText(const SpanMatching &m)
 {
     QStringList lines;
-    lines << tr("Function confusion on matched spans (rows: a coder's function; columns: the "
-                "other coder's at the best-overlapping span)");
+    lines << CliText::tr(
+        "Function confusion on matched spans (rows: a coder's function; columns: the "
+        "other coder's at the best-overlapping span)");
     QString header = QStringLiteral("  %1").arg(QString(), -11);
     for (int c = 0; c < FunctionConfusion::kSize; ++c)
         header += QStringLiteral("%1").arg(functionLabel(c), 11);
@@ -101,7 +103,8 @@ QStringList matchingText(const SpanMatching &m)
             line += QStringLiteral("%1").arg(m.confusion.at(r, c), 11, 'f', 0);
         lines << line;
     }
-    lines << tr("Boundary habits (this coder's span − the other's, code points, same function)");
+    lines << CliText::tr(
+        "Boundary habits (this coder's span − the other's, code points, same function)");
     for (const BoundaryHabit &b : m.boundaries)
         lines << QStringLiteral("  %1 length %2 ± %3  start %4  end %5  longer %6%  %7 matches%8")
                      .arg(b.coder, -8)
@@ -111,7 +114,7 @@ QStringList matchingText(const SpanMatching &m)
                      .arg(QString::asprintf("%+.1f", b.meanEndDifference))
                      .arg(b.shareLonger * 100.0, 0, 'f', 0)
                      .arg(b.matches)
-                     .arg(b.systematic ? tr("  systematic") : QString());
+                     .arg(b.systematic ? CliText::tr("  systematic") : QString());
     return lines;
 }
 
@@ -156,16 +159,16 @@ int printAgreement(const AnalysisResult &analysed, const AgreementRun *run,
     QStringList lines {agreementText(result)};
     if (!leftOutText.isEmpty())
         lines << leftOutText;
-    lines << tr("Alpha without each coder (costliest first; change = without − with all)");
+    lines << CliText::tr("Alpha without each coder (costliest first; change = without − with all)");
     lines << leaveOneOutText(costs->coders);
     // The costliest articles; a raw matrix of a million rows (each its own article) would
     // print a million lines. --json lists every one.
     constexpr size_t kArticleLines = 20;
     const size_t shown = std::min(costs->articles.size(), kArticleLines);
-    lines << tr("Alpha without each article (costliest first)");
+    lines << CliText::tr("Alpha without each article (costliest first)");
     lines << leaveOneOutText({costs->articles.begin(), costs->articles.begin() + qsizetype(shown)});
     if (shown < costs->articles.size())
-        lines << tr("  … and %n more (--json lists every one)", nullptr,
+        lines << CliText::tr("  … and %n more (--json lists every one)", nullptr,
             int(costs->articles.size() - shown));
     if (matching)
         lines << matchingText(*matching);
@@ -180,71 +183,81 @@ int runAgree(const QStringList &arguments)
     const QString command = QStringLiteral("agree");
     QCommandLineParser parser;
     const QCommandLineOption data(QStringLiteral("data"),
-        tr("A raw reliability matrix: CSV with the header unit,<coder>,<coder>,...; an empty cell "
-           "is missing."),
+        CliText::tr(
+            "A raw reliability matrix: CSV with the header unit,<coder>,<coder>,...; an empty cell "
+            "is missing."),
         QStringLiteral("FILE"));
     const QCommandLineOption level(QStringLiteral("level"),
-        tr("Level of measurement: nominal (default), ordinal, interval or ratio."),
+        CliText::tr("Level of measurement: nominal (default), ordinal, interval or ratio."),
         QStringLiteral("LEVEL"), QStringLiteral("nominal"));
     const QCommandLineOption order(QStringLiteral("order"),
-        tr("Ordinal labels from lowest to highest, e.g. negative,neutral,positive."),
+        CliText::tr("Ordinal labels from lowest to highest, e.g. negative,neutral,positive."),
         QStringLiteral("A,B,C"));
     const QCommandLineOption distance(QStringLiteral("distance"),
-        tr("Cells are sets of labels separated by | (braces allowed; {} = empty set), compared "
-           "with jaccard or "
-           "masi."),
+        CliText::tr(
+            "Cells are sets of labels separated by | (braces allowed; {} = empty set), compared "
+            "with jaccard or "
+            "masi."),
         QStringLiteral("NAME"));
     const QCommandLineOption unit(QStringLiteral("unit"),
-        tr("With a project: article, paragraph, sentence, token, span (an attribute on matched "
-           "passages) or continuum."),
+        CliText::tr(
+            "With a project: article, paragraph, sentence, token, span (an attribute on matched "
+            "passages) or continuum."),
         QStringLiteral("UNIT"));
     const QCommandLineOption function(QStringLiteral("function"),
-        tr("With a project: problem, cause, evaluation, remedy or all (default all)."),
+        CliText::tr("With a project: problem, cause, evaluation, remedy or all (default all)."),
         QStringLiteral("FUNCTION"), QStringLiteral("all"));
     const QCommandLineOption coders(QStringLiteral("coders"),
-        tr("With a project: the coders' pseudonyms (default: everyone who coded)."),
+        CliText::tr("With a project: the coders' pseudonyms (default: everyone who coded)."),
         QStringLiteral("A,B,..."));
     const QCommandLineOption phase(QStringLiteral("phase"),
-        tr("With a project: only this phase (training, pilot, reliability, production)."),
+        CliText::tr("With a project: only this phase (training, pilot, reliability, production)."),
         QStringLiteral("PHASE"));
     const QCommandLineOption attribute(QStringLiteral("attribute"),
-        tr("With --unit span: the attribute compared on passages matched across coders, e.g. "
-           "polarity (with --function evaluation)."),
+        CliText::tr(
+            "With --unit span: the attribute compared on passages matched across coders, e.g. "
+            "polarity (with --function evaluation)."),
         QStringLiteral("KEY"));
     const QCommandLineOption withGold(QStringLiteral("with-gold"),
-        tr("With a project: add the adjudicated gold standard as one more coder, \"gold\"."));
+        CliText::tr(
+            "With a project: add the adjudicated gold standard as one more coder, \"gold\"."));
     const QCommandLineOption articles(QStringLiteral("articles"),
-        tr("With a project: only these articles (ids)."), QStringLiteral("ID,..."));
+        CliText::tr("With a project: only these articles (ids)."), QStringLiteral("ID,..."));
     const QCommandLineOption includeUnfinished(QStringLiteral("include-unfinished"),
-        tr("With a project: also count articles that coders started but did not mark done "
-           "(left out and listed by default)."));
+        CliText::tr("With a project: also count articles that coders started but did not mark done "
+                    "(left out and listed by default)."));
     const QCommandLineOption item(QStringLiteral("item"),
-        tr("With --unit article: the article-level item (default dominant_function)."),
+        CliText::tr("With --unit article: the article-level item (default dominant_function)."),
         QStringLiteral("KEY"), QStringLiteral("dominant_function"));
     const QCommandLineOption bootstrap(QStringLiteral("bootstrap"),
-        tr("Bootstrap replicates for alpha's 95% interval (both methods, labelled)."),
+        CliText::tr("Bootstrap replicates for alpha's 95% interval (both methods, labelled)."),
         QStringLiteral("N"), QStringLiteral("0"));
-    const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
-        QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption seed(QStringLiteral("seed"),
+        CliText::tr("Seed of the bootstrap (default 1)."), QStringLiteral("S"),
+        QStringLiteral("1"));
     const QCommandLineOption weights(QStringLiteral("weights"),
-        tr("Cohen's kappa with disagreement weights by the values' order (Cohen 1968): none "
-           "(default), linear or quadratic. For ordered values: an ordinal item, --order, or "
-           "numbers."),
+        CliText::tr(
+            "Cohen's kappa with disagreement weights by the values' order (Cohen 1968): none "
+            "(default), linear or quadratic. For ordered values: an ordinal item, --order, or "
+            "numbers."),
         QStringLiteral("W"), QStringLiteral("none"));
-    const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
+    const QCommandLineOption json(
+        QStringLiteral("json"), CliText::tr("Print the figures as JSON."));
     const QCommandLineOption diagnostics(QStringLiteral("diagnostics"),
-        tr("Also show where reliability is lost: alpha without each coder and without each "
-           "article (the costliest first), and with a project the function confusion on matched "
-           "spans and the coders' boundary habits."));
+        CliText::tr(
+            "Also show where reliability is lost: alpha without each coder and without each "
+            "article (the costliest first), and with a project the function confusion on matched "
+            "spans and the coders' boundary habits."));
     parser.addOptions({data, level, order, distance, unit, function, coders, phase, articles, item,
         attribute, withGold, includeUnfinished, bootstrap, seed, weights, json, diagnostics});
     parser.addPositionalArgument(
-        QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
+        QStringLiteral("PROJECT"), CliText::tr("The project file (unless --data is given)."));
     if (int rc = parseCommandLine(parser, command,
-            tr("Inter-coder reliability: Krippendorff's alpha (with bootstrap intervals), percent "
-               "agreement, Cohen's, "
-               "Fleiss' and Light's kappa, Scott's pi, Bennett's S; unitizing alpha on the "
-               "continuum."),
+            CliText::tr(
+                "Inter-coder reliability: Krippendorff's alpha (with bootstrap intervals), percent "
+                "agreement, Cohen's, "
+                "Fleiss' and Light's kappa, Scott's pi, Bennett's S; unitizing alpha on the "
+                "continuum."),
             arguments);
         rc >= 0)
         return rc;
@@ -255,10 +268,10 @@ int runAgree(const QStringList &arguments)
     if (!ok || agreementOptions.bootstrapReplicates < 0
         || agreementOptions.bootstrapReplicates > 1000000)
         return usageError(
-            command, tr("--bootstrap expects a number of replicates from 0 to 1000000."));
+            command, CliText::tr("--bootstrap expects a number of replicates from 0 to 1000000."));
     agreementOptions.seed = parser.value(seed).toULongLong(&ok);
     if (!ok)
-        return usageError(command, tr("--seed expects a non-negative whole number."));
+        return usageError(command, CliText::tr("--seed expects a non-negative whole number."));
 
     bool weightsKnown = false;
     for (const auto w : {reliability::KappaWeights::None, reliability::KappaWeights::Linear,
@@ -269,14 +282,14 @@ int runAgree(const QStringList &arguments)
         }
     if (!weightsKnown)
         return usageError(command,
-            tr("unknown weights \"%1\" (expected none, linear or quadratic).")
+            CliText::tr("unknown weights \"%1\" (expected none, linear or quadratic).")
                 .arg(parser.value(weights)));
 
     EncodingOptions encoding;
     const auto levelValue = levelFromKey(parser.value(level));
     if (!levelValue)
         return usageError(command,
-            tr("unknown level \"%1\" (expected nominal, ordinal, interval or ratio).")
+            CliText::tr("unknown level \"%1\" (expected nominal, ordinal, interval or ratio).")
                 .arg(parser.value(level)));
     encoding.level = *levelValue;
     if (parser.isSet(order)) {
@@ -285,13 +298,13 @@ int runAgree(const QStringList &arguments)
             o = o.trimmed();
         if (encoding.level != reliability::Level::Ordinal)
             return usageError(
-                command, tr("--order is for the ordinal level; add --level ordinal."));
+                command, CliText::tr("--order is for the ordinal level; add --level ordinal."));
     }
     if (parser.isSet(distance)) {
         encoding.distance = setDistanceFromKey(parser.value(distance));
         if (!encoding.distance)
             return usageError(command,
-                tr("unknown distance \"%1\" (expected jaccard or masi).")
+                CliText::tr("unknown distance \"%1\" (expected jaccard or masi).")
                     .arg(parser.value(distance)));
     }
     const bool encodingGiven = parser.isSet(level) || parser.isSet(order) || parser.isSet(distance);
@@ -299,9 +312,11 @@ int runAgree(const QStringList &arguments)
     // A raw matrix from a file: its table is compared as it stands.
     if (parser.isSet(data)) {
         if (!parser.positionalArguments().isEmpty())
-            return usageError(command, tr("give either --data FILE or a project, not both."));
+            return usageError(
+                command, CliText::tr("give either --data FILE or a project, not both."));
         if (parser.isSet(includeUnfinished))
-            return usageError(command, tr("--include-unfinished is for a project, not --data."));
+            return usageError(
+                command, CliText::tr("--include-unfinished is for a project, not --data."));
         auto read = readReliabilityTable(parser.value(data));
         if (!read)
             return report(read.error());
@@ -313,14 +328,14 @@ int runAgree(const QStringList &arguments)
     }
 
     if (parser.positionalArguments().size() != 1)
-        return usageError(command, tr("expected a project file, or --data FILE."));
+        return usageError(command, CliText::tr("expected a project file, or --data FILE."));
     if (!parser.isSet(unit))
         return usageError(command,
-            tr("with a project, say which units to compare: --unit "
-               "article|paragraph|sentence|token|span|continuum."));
+            CliText::tr("with a project, say which units to compare: --unit "
+                        "article|paragraph|sentence|token|span|continuum."));
     const auto kind = unitKindFromKey(parser.value(unit));
     if (!kind)
-        return usageError(command, tr("unknown unit \"%1\".").arg(parser.value(unit)));
+        return usageError(command, CliText::tr("unknown unit \"%1\".").arg(parser.value(unit)));
     UnitSelection selection;
     AnalysisRequest request;
     request.unit = *kind;
@@ -328,8 +343,9 @@ int runAgree(const QStringList &arguments)
         request.function = functionFromKey(parser.value(function));
         if (!request.function)
             return usageError(command,
-                tr("unknown function \"%1\" (expected problem, cause, evaluation, remedy or "
-                   "all).")
+                CliText::tr(
+                    "unknown function \"%1\" (expected problem, cause, evaluation, remedy or "
+                    "all).")
                     .arg(parser.value(function)));
     }
     if (parser.isSet(coders))
@@ -337,7 +353,8 @@ int runAgree(const QStringList &arguments)
     if (parser.isSet(phase)) {
         selection.phase = phaseFromKey(parser.value(phase));
         if (!selection.phase)
-            return usageError(command, tr("unknown phase \"%1\".").arg(parser.value(phase)));
+            return usageError(
+                command, CliText::tr("unknown phase \"%1\".").arg(parser.value(phase)));
     }
     request.item = parser.value(item);
     request.attribute = parser.value(attribute);

@@ -15,10 +15,10 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("cli", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 const QString kCommand = QStringLiteral("assign");
 
@@ -57,38 +57,45 @@ void printPlan(const AssignmentPlan &plan)
 
 void printDraw(const Draw &d)
 {
-    out(tr("%1 subsample: %2%3, seed %4; %5 of %6 articles in the sampling frame; coders %7")
+    out(CliText::tr(
+        "%1 subsample: %2%3, seed %4; %5 of %6 articles in the sampling frame; coders %7")
             .arg(phaseKey(d.phase), d.method,
-                d.stratify ? tr(" by %1").arg(stratumKey(*d.stratify)) : QString())
+                d.stratify ? CliText::tr(" by %1").arg(stratumKey(*d.stratify)) : QString())
             .arg(d.seed)
             .arg(d.articles.size())
             .arg(d.frameArticles)
             .arg(d.coders.join(QStringLiteral(", "))));
     if (!d.drawnAt.isEmpty())
-    if (d.nearCopiesLeftOut)
-        out(CliText::tr("  near copies left out of the sampling frame"));
-        out(tr("  drawn at %1").arg(d.drawnAt));
+        if (d.nearCopiesLeftOut)
+            out(CliText::tr("  near copies left out of the sampling frame"));
+    out(CliText::tr("  drawn at %1").arg(d.drawnAt));
     for (const DrawStratum &s : d.strata)
-        out(tr("  stratum %1: %2 of %3").arg(s.key).arg(s.drawnArticles).arg(s.frameArticles));
-    out(tr("  articles: %1").arg(d.articles.join(QStringLiteral(", "))));
+        out(CliText::tr("  stratum %1: %2 of %3")
+                .arg(s.key)
+                .arg(s.drawnArticles)
+                .arg(s.frameArticles));
+    out(CliText::tr("  articles: %1").arg(d.articles.join(QStringLiteral(", "))));
     const SampleAdvice &a = d.advice;
     if (a.minimumValues > 0)
-        out(tr("  Krippendorff's minimum for alpha_min %1 at p = %2 with the rarest value at %3: "
-               "%4 values")
+        out(CliText::tr(
+            "  Krippendorff's minimum for alpha_min %1 at p = %2 with the rarest value at %3: "
+            "%4 values")
                 .arg(a.alphaMin, 0, 'f', 3)
                 .arg(a.significance)
                 .arg(a.rarestProportion)
                 .arg(a.minimumValues));
     else
-        out(tr("  Krippendorff's minimum: not defined for these arguments"));
-    out(tr("  this draw delivers %1 article values, %2 paragraph values, %3 sentence values "
-           "(units × coders)")
+        out(CliText::tr("  Krippendorff's minimum: not defined for these arguments"));
+    out(CliText::tr(
+        "  this draw delivers %1 article values, %2 paragraph values, %3 sentence values "
+        "(units × coders)")
             .arg(a.articleValues)
             .arg(a.paragraphValues)
             .arg(a.sentenceValues));
-    out(a.sufficientUnits.isEmpty()
-            ? tr("  enough for: none of these units; draw more articles or expect a wider interval")
-            : tr("  enough for: %1 units").arg(a.sufficientUnits.join(QStringLiteral(", "))));
+    out(a.sufficientUnits.isEmpty() ? CliText::tr(
+            "  enough for: none of these units; draw more articles or expect a wider interval")
+                                    : CliText::tr("  enough for: %1 units")
+                                          .arg(a.sufficientUnits.join(QStringLiteral(", "))));
 }
 
 QString optionalNumber(const std::optional<double> &v, int decimals = 3)
@@ -124,7 +131,7 @@ int runShow(Project &project, std::optional<Phase> phase, bool json)
             {QStringLiteral("assignments"), list}, {QStringLiteral("draws"), drawList}});
         return ExitOk;
     }
-    out(tr("Assignments: %1").arg(rows->size()));
+    out(CliText::tr("Assignments: %1").arg(rows->size()));
     std::map<QString, QStringList> byArticle;
     for (const AssignmentRow &r : *rows) {
         const QString key = QStringLiteral("%1\t%2").arg(int(r.phase)).arg(r.article);
@@ -155,14 +162,14 @@ int runProgress(Project &project, std::optional<Phase> phase, bool json)
         printJson(StudyDesign::progressBoardJson(*board));
         return ExitOk;
     }
-    out(tr("%1  %2  %3  %4  %5  %6  %7")
-            .arg(tr("phase"), -11)
-            .arg(tr("coder"), -6)
-            .arg(tr("assigned"), 8)
-            .arg(tr("started"), 7)
-            .arg(tr("done"), 5)
-            .arg(tr("alpha"), 6)
-            .arg(board->effortPerCoder ? tr("active") : QString()));
+    out(CliText::tr("%1  %2  %3  %4  %5  %6  %7")
+            .arg(CliText::tr("phase"), -11)
+            .arg(CliText::tr("coder"), -6)
+            .arg(CliText::tr("assigned"), 8)
+            .arg(CliText::tr("started"), 7)
+            .arg(CliText::tr("done"), 5)
+            .arg(CliText::tr("alpha"), 6)
+            .arg(board->effortPerCoder ? CliText::tr("active") : QString()));
     for (const ProgressRow &r : board->rows)
         out(QStringLiteral("%1  %2  %3  %4  %5  %6  %7")
                 .arg(phaseKey(r.phase), -11)
@@ -171,23 +178,25 @@ int runProgress(Project &project, std::optional<Phase> phase, bool json)
                 .arg(r.started, 7)
                 .arg(r.done, 5)
                 .arg(optionalNumber(r.agreement), 6)
-                .arg(r.activeSeconds ? tr("%1 min").arg(double(*r.activeSeconds) / 60.0, 0, 'f', 1)
-                                     : QString()));
+                .arg(r.activeSeconds
+                        ? CliText::tr("%1 min").arg(double(*r.activeSeconds) / 60.0, 0, 'f', 1)
+                        : QString()));
     out(QString());
     out(board->effortPerCoder
-            ? tr("Effort (active time; idle time not counted):")
-            : tr("Effort in aggregate (active time per coder is off; see --effort):"));
+            ? CliText::tr("Effort (active time; idle time not counted):")
+            : CliText::tr("Effort in aggregate (active time per coder is off; see --effort):"));
     for (const PhaseEffort &e : board->effort)
-        out(tr("  %1  %2 articles done, %3 min active, %4 min per done article")
+        out(CliText::tr("  %1  %2 articles done, %3 min active, %4 min per done article")
                 .arg(phaseKey(e.phase), -11)
                 .arg(e.doneArticles)
                 .arg(double(e.activeSeconds) / 60.0, 0, 'f', 1)
                 .arg(e.meanSecondsPerDoneArticle
                         ? QString::number(*e.meanSecondsPerDoneArticle / 60.0, 'f', 1)
                         : QStringLiteral("—")));
-    out(tr("alpha: Krippendorff's alpha (nominal) on present/absent per sentence and function, "
-           "against the lead's master coding in training, else the mean over the coder's "
-           "partners; finished articles only."));
+    out(CliText::tr(
+        "alpha: Krippendorff's alpha (nominal) on present/absent per sentence and function, "
+        "against the lead's master coding in training, else the mean over the coder's "
+        "partners; finished articles only."));
     return ExitOk;
 }
 
@@ -200,17 +209,18 @@ int runTraining(Project &project, const TrainingRequest &request, bool json)
         printJson(StudyDesign::trainingFeedbackJson(*fb));
         return ExitOk;
     }
-    out(tr("Training feedback for %1 against the master coding of %2 (%3 units)")
+    out(CliText::tr("Training feedback for %1 against the master coding of %2 (%3 units)")
             .arg(fb->coder, fb->master, unitKindKey(fb->unit)));
-    out(tr("Finished training articles compared: %1; still open: %2")
-            .arg(fb->articles.isEmpty() ? tr("none") : fb->articles.join(QStringLiteral(", ")))
+    out(CliText::tr("Finished training articles compared: %1; still open: %2")
+            .arg(fb->articles.isEmpty() ? CliText::tr("none")
+                                        : fb->articles.join(QStringLiteral(", ")))
             .arg(fb->openArticles));
-    out(tr("%1  %2  %3  %4  %5")
-            .arg(tr("function"), -10)
-            .arg(tr("units"), 6)
-            .arg(tr("agree %"), 8)
-            .arg(tr("alpha"), 6)
-            .arg(tr("marked (you / master)")));
+    out(CliText::tr("%1  %2  %3  %4  %5")
+            .arg(CliText::tr("function"), -10)
+            .arg(CliText::tr("units"), 6)
+            .arg(CliText::tr("agree %"), 8)
+            .arg(CliText::tr("alpha"), 6)
+            .arg(CliText::tr("marked (you / master)")));
     for (const FunctionAgreement &f : fb->functions)
         out(QStringLiteral("%1  %2  %3  %4  %5 / %6")
                 .arg(functionKey(f.function), -10)
@@ -221,8 +231,9 @@ int runTraining(Project &project, const TrainingRequest &request, bool json)
                 .arg(optionalNumber(f.alpha), 6)
                 .arg(f.coderUnits)
                 .arg(f.masterUnits));
-    out(fb->trainingComplete ? tr("Training complete: the coder can move on to the real work.")
-                             : tr("Training not complete yet."));
+    out(fb->trainingComplete
+            ? CliText::tr("Training complete: the coder can move on to the real work.")
+            : CliText::tr("Training not complete yet."));
     return ExitOk;
 }
 
@@ -232,62 +243,71 @@ int runAssign(const QStringList &arguments)
 {
     QCommandLineParser parser;
     const QCommandLineOption draw(QStringLiteral("draw"),
-        tr("Draw the subsample of this phase (reliability or pilot) that every --coders codes."),
+        CliText::tr(
+            "Draw the subsample of this phase (reliability or pilot) that every --coders codes."),
         QStringLiteral("PHASE"));
-    const QCommandLineOption size(
-        QStringLiteral("size"), tr("With --draw: the number of articles."), QStringLiteral("N"));
+    const QCommandLineOption size(QStringLiteral("size"),
+        CliText::tr("With --draw: the number of articles."), QStringLiteral("N"));
     const QCommandLineOption fraction(QStringLiteral("fraction"),
-        tr("With --draw: the share of the sampling frame (0 < F <= 1, rounded up)."),
+        CliText::tr("With --draw: the share of the sampling frame (0 < F <= 1, rounded up)."),
         QStringLiteral("F"));
     const QCommandLineOption stratify(QStringLiteral("stratify"),
-        tr("With --draw: draw proportionally within outlet, language or topic (metadata key "
-           "\"topic\")."),
+        CliText::tr(
+            "With --draw: draw proportionally within outlet, language or topic (metadata key "
+            "\"topic\")."),
         QStringLiteral("KEY"));
     const QCommandLineOption seed(QStringLiteral("seed"),
-        tr("Seed of the draw or of dealing the rest (default: a random seed, printed and "
-           "recorded)."),
+        CliText::tr("Seed of the draw or of dealing the rest (default: a random seed, printed and "
+                    "recorded)."),
         QStringLiteral("S"));
     const QCommandLineOption alphaMin(QStringLiteral("alpha-min"),
-        tr("With --draw: the smallest acceptable alpha for the sample-size advice (default "
-           "0.8)."),
+        CliText::tr(
+            "With --draw: the smallest acceptable alpha for the sample-size advice (default "
+            "0.8)."),
         QStringLiteral("A"), QStringLiteral("0.8"));
     const QCommandLineOption rarest(QStringLiteral("rarest"),
-        tr("With --draw: the expected share of the rarest value (default 0.25)."),
+        CliText::tr("With --draw: the expected share of the rarest value (default 0.25)."),
         QStringLiteral("P"), QStringLiteral("0.25"));
     const QCommandLineOption rest(QStringLiteral("rest"),
-        tr("Deal every article without any assignment to --coders for production: single or "
-    const QCommandLineOption leaveOutNearCopies(QStringLiteral("leave-out-near-copies"),
-        CliText::tr("With --draw: leave articles found to be near copies of older ones at import "
+        CliText::tr(
+            "Deal every article without any assignment to --coders for production: single "
+            "or " const QCommandLineOption leaveOutNearCopies(
+                QStringLiteral("leave-out-near-copies"),
+                CliText::tr(
+                    "With --draw: leave articles found to be near copies of older ones at import "
                     "out of the sampling frame."));
-           "double coding."),
+            "double coding."),
         QStringLiteral("MODE"));
     const QCommandLineOption phase(QStringLiteral("phase"),
-        tr("With --articles: assign in this phase (training, pilot, reliability, production); "
-           "with --show or --progress: only this phase."),
+        CliText::tr(
+            "With --articles: assign in this phase (training, pilot, reliability, production); "
+            "with --show or --progress: only this phase."),
         QStringLiteral("PHASE"));
     const QCommandLineOption articles(QStringLiteral("articles"),
-        tr("Assign these articles (ids) to every one of --coders in --phase."),
+        CliText::tr("Assign these articles (ids) to every one of --coders in --phase."),
         QStringLiteral("ID,..."));
-    const QCommandLineOption coders(
-        QStringLiteral("coders"), tr("The coders' pseudonyms."), QStringLiteral("C01,C02,..."));
+    const QCommandLineOption coders(QStringLiteral("coders"),
+        CliText::tr("The coders' pseudonyms."), QStringLiteral("C01,C02,..."));
     const QCommandLineOption dryRun(QStringLiteral("dry-run"),
-        tr("With --draw, --rest or --articles: show the plan, write nothing."));
-    const QCommandLineOption show(
-        QStringLiteral("show"), tr("Show the assignments and the draws with their advice."));
+        CliText::tr("With --draw, --rest or --articles: show the plan, write nothing."));
+    const QCommandLineOption show(QStringLiteral("show"),
+        CliText::tr("Show the assignments and the draws with their advice."));
     const QCommandLineOption progress(QStringLiteral("progress"),
-        tr("Show per coder and phase the articles done, agreement so far and effort."));
+        CliText::tr("Show per coder and phase the articles done, agreement so far and effort."));
     const QCommandLineOption training(QStringLiteral("training"),
-        tr("Show this coder's agreement with the master coding on finished training articles."),
+        CliText::tr(
+            "Show this coder's agreement with the master coding on finished training articles."),
         QStringLiteral("CODER"));
     const QCommandLineOption master(QStringLiteral("master"),
-        tr("With --training: the lead whose training coding is the master (default: the one lead "
-           "who coded training articles)."),
+        CliText::tr(
+            "With --training: the lead whose training coding is the master (default: the one lead "
+            "who coded training articles)."),
         QStringLiteral("LEAD"));
     const QCommandLineOption unit(QStringLiteral("unit"),
-        tr("With --training: paragraph, sentence (default) or token."), QStringLiteral("UNIT"),
-        QStringLiteral("sentence"));
+        CliText::tr("With --training: paragraph, sentence (default) or token."),
+        QStringLiteral("UNIT"), QStringLiteral("sentence"));
     const QCommandLineOption effort(QStringLiteral("effort"),
-        tr("Show active time per coder (on) or only in aggregate (off, the default)."),
+        CliText::tr("Show active time per coder (on) or only in aggregate (off, the default)."),
         QStringLiteral("on|off"));
     const QCommandLineOption json(QStringLiteral("json"), CliText::tr("Print the result as JSON."));
     parser.addOptions(
@@ -295,14 +315,15 @@ int runAssign(const QStringList &arguments)
             articles, coders, dryRun, show, progress, training, master, unit, effort, json});
     parser.addPositionalArgument(QStringLiteral("PROJECT"), CliText::tr("The project file."));
     if (int rc = parseCommandLine(parser, kCommand,
-            tr("Assign articles to coders per phase (training, pilot, reliability, production), "
-               "draw the reliability subsample with a recorded seed, and follow progress. Give "
-               "one of --draw, --rest, --articles, --show, --progress, --training, --effort."),
+            CliText::tr(
+                "Assign articles to coders per phase (training, pilot, reliability, production), "
+                "draw the reliability subsample with a recorded seed, and follow progress. Give "
+                "one of --draw, --rest, --articles, --show, --progress, --training, --effort."),
             arguments);
         rc >= 0)
         return rc;
     if (parser.positionalArguments().size() != 1)
-        return usageError(kCommand, tr("expected exactly one project file."));
+        return usageError(kCommand, CliText::tr("expected exactly one project file."));
 
     int actions = 0;
     for (const QCommandLineOption *o :
@@ -310,14 +331,16 @@ int runAssign(const QStringList &arguments)
         actions += parser.isSet(*o) ? 1 : 0;
     if (actions != 1)
         return usageError(kCommand,
-            tr("give exactly one of --draw, --rest, --articles, --show, --progress, --training, "
-               "--effort."));
+            CliText::tr(
+                "give exactly one of --draw, --rest, --articles, --show, --progress, --training, "
+                "--effort."));
 
     std::optional<Phase> phaseFilter;
     if (parser.isSet(phase)) {
         phaseFilter = phaseFromKey(parser.value(phase));
         if (!phaseFilter)
-            return usageError(kCommand, tr("unknown phase \"%1\".").arg(parser.value(phase)));
+            return usageError(
+                kCommand, CliText::tr("unknown phase \"%1\".").arg(parser.value(phase)));
     }
     std::uint64_t seedValue = 0;
     bool seedGiven = parser.isSet(seed);
@@ -326,7 +349,7 @@ int runAssign(const QStringList &arguments)
         seedValue = parser.value(seed).toULongLong(&ok);
         if (!ok)
             return usageError(kCommand,
-                tr("the seed \"%1\" is not a whole number from 0 to 18446744073709551615.")
+                CliText::tr("the seed \"%1\" is not a whole number from 0 to 18446744073709551615.")
                     .arg(parser.value(seed)));
     } else {
         // Kept below 2^53 so that it survives any JSON reader.
@@ -342,25 +365,27 @@ int runAssign(const QStringList &arguments)
     if (parser.isSet(draw)) {
         const auto p = phaseFromKey(parser.value(draw));
         if (!p)
-            return usageError(kCommand, tr("unknown phase \"%1\".").arg(parser.value(draw)));
+            return usageError(
+                kCommand, CliText::tr("unknown phase \"%1\".").arg(parser.value(draw)));
         drawRequest.phase = *p;
         if (parser.isSet(size) == parser.isSet(fraction))
             return usageError(kCommand,
-                parser.isSet(size) ? tr("give --size or --fraction, not both.")
-                                   : tr("--draw needs --size or --fraction."));
+                parser.isSet(size) ? CliText::tr("give --size or --fraction, not both.")
+                                   : CliText::tr("--draw needs --size or --fraction."));
         bool ok = true;
         if (parser.isSet(size)) {
             const int n = parser.value(size).toInt(&ok);
             if (!ok || n < 1)
                 return usageError(kCommand,
-                    tr("--size must be a whole number of articles, at least 1; \"%1\" given.")
+                    CliText::tr(
+                        "--size must be a whole number of articles, at least 1; \"%1\" given.")
                         .arg(parser.value(size)));
             drawRequest.size = n;
         } else {
             const double f = parser.value(fraction).toDouble(&ok);
             if (!ok || !(f > 0.0 && f <= 1.0))
                 return usageError(kCommand,
-                    tr("--fraction must be a number above 0 and at most 1; \"%1\" given.")
+                    CliText::tr("--fraction must be a number above 0 and at most 1; \"%1\" given.")
                         .arg(parser.value(fraction)));
             drawRequest.fraction = f;
         }
@@ -368,18 +393,18 @@ int runAssign(const QStringList &arguments)
             drawRequest.stratify = stratumFromKey(parser.value(stratify));
             if (!drawRequest.stratify)
                 return usageError(kCommand,
-                    tr("--stratify takes outlet, language or topic, not \"%1\".")
+                    CliText::tr("--stratify takes outlet, language or topic, not \"%1\".")
                         .arg(parser.value(stratify)));
         }
         drawRequest.alphaMin = parser.value(alphaMin).toDouble(&ok);
         if (!ok || !(drawRequest.alphaMin > 0.0 && drawRequest.alphaMin < 1.0))
             return usageError(kCommand,
-                tr("--alpha-min must lie between 0 and 1; \"%1\" given.")
+                CliText::tr("--alpha-min must lie between 0 and 1; \"%1\" given.")
                     .arg(parser.value(alphaMin)));
         drawRequest.rarestProportion = parser.value(rarest).toDouble(&ok);
         if (!ok || !(drawRequest.rarestProportion > 0.0 && drawRequest.rarestProportion <= 0.5))
             return usageError(kCommand,
-                tr("--rarest must lie above 0 and at most 0.5; \"%1\" given.")
+                CliText::tr("--rarest must lie above 0 and at most 0.5; \"%1\" given.")
                     .arg(parser.value(rarest)));
         drawRequest.seed = seedValue;
         drawRequest.coders = coderList;
@@ -390,29 +415,32 @@ int runAssign(const QStringList &arguments)
         else if (mode == QStringLiteral("double"))
             restRequest.coding = RestCoding::Double;
         else
-            return usageError(kCommand, tr("--rest takes single or double, not \"%1\".").arg(mode));
+            return usageError(
+                kCommand, CliText::tr("--rest takes single or double, not \"%1\".").arg(mode));
         restRequest.coders = coderList;
         restRequest.seed = seedValue;
     } else if (parser.isSet(articles)) {
         if (!phaseFilter)
-            return usageError(kCommand, tr("--articles needs --phase."));
+            return usageError(kCommand, CliText::tr("--articles needs --phase."));
         if (coderList.isEmpty())
-            return usageError(kCommand, tr("--articles needs --coders."));
+            return usageError(kCommand, CliText::tr("--articles needs --coders."));
     } else if (parser.isSet(training)) {
         trainingRequest.coder = parser.value(training);
         trainingRequest.master = parser.value(master);
         const auto u = unitKindFromKey(parser.value(unit));
         if (!u)
-            return usageError(kCommand, tr("unknown unit \"%1\".").arg(parser.value(unit)));
+            return usageError(
+                kCommand, CliText::tr("unknown unit \"%1\".").arg(parser.value(unit)));
         trainingRequest.unit = *u;
     } else if (parser.isSet(effort)) {
         drawRequest.leaveOutNearCopies = parser.isSet(leaveOutNearCopies);
         const QString v = parser.value(effort);
         if (v != QStringLiteral("on") && v != QStringLiteral("off"))
-            return usageError(kCommand, tr("--effort takes on or off, not \"%1\".").arg(v));
+            return usageError(
+                kCommand, CliText::tr("--effort takes on or off, not \"%1\".").arg(v));
     }
     if ((parser.isSet(draw) || parser.isSet(rest)) && coderList.isEmpty())
-        return usageError(kCommand, tr("name the coders with --coders."));
+        return usageError(kCommand, CliText::tr("name the coders with --coders."));
 
     auto project = Project::open(parser.positionalArguments().first());
     if (!project)
@@ -431,8 +459,8 @@ int runAssign(const QStringList &arguments)
         if (asJson)
             printJson(QJsonObject {{QStringLiteral("effort_per_coder"), on}});
         else
-            out(on ? tr("Active time is now shown per coder.")
-                   : tr("Active time is now shown in aggregate only."));
+            out(on ? CliText::tr("Active time is now shown per coder.")
+                   : CliText::tr("Active time is now shown in aggregate only."));
         return ExitOk;
     }
 
@@ -450,8 +478,8 @@ int runAssign(const QStringList &arguments)
         } else {
             printDraw(*planned);
             out(parser.isSet(dryRun)
-                    ? tr("Dry run: nothing was written.")
-                    : tr("%1 assignments written.").arg(planned->plan.rows.size()));
+                    ? CliText::tr("Dry run: nothing was written.")
+                    : CliText::tr("%1 assignments written.").arg(planned->plan.rows.size()));
         }
         return ExitOk;
     }
@@ -480,9 +508,9 @@ int runAssign(const QStringList &arguments)
     }
     printPlan(*plan);
     if (parser.isSet(rest))
-        out(tr("Seed %1.").arg(seedValue));
-    out(parser.isSet(dryRun) ? tr("Dry run: nothing was written.")
-                             : tr("%1 assignments written.").arg(plan->rows.size()));
+        out(CliText::tr("Seed %1.").arg(seedValue));
+    out(parser.isSet(dryRun) ? CliText::tr("Dry run: nothing was written.")
+                             : CliText::tr("%1 assignments written.").arg(plan->rows.size()));
     return ExitOk;
 }
 

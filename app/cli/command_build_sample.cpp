@@ -20,21 +20,21 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("cli", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 Result<QJsonObject> readStudy(const QString &path)
 {
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
-        return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));
+        return fail(ErrorCode::Io, CliText::tr("Cannot read %1: %2").arg(path, file.errorString()));
     QJsonParseError error;
     const QJsonDocument doc = QJsonDocument::fromJson(file.readAll(), &error);
     if (error.error != QJsonParseError::NoError || !doc.isObject())
         return fail(ErrorCode::InvalidInput,
-            tr("%1: not a JSON object (%2).").arg(path, error.errorString()));
+            CliText::tr("%1: not a JSON object (%2).").arg(path, error.errorString()));
     return doc.object();
 }
 
@@ -62,7 +62,7 @@ Status build(const QString &sourceDir, const QString &target)
             coderRoleFromKey(c.value(QLatin1String("role")).toString(QStringLiteral("coder")));
         if (!role)
             return fail(ErrorCode::InvalidInput,
-                tr("%1: a coder's role must be \"coder\" or \"lead\".").arg(studyPath));
+                CliText::tr("%1: a coder's role must be \"coder\" or \"lead\".").arg(studyPath));
         auto id = project->addCoder(c.value(QLatin1String("name")).toString(),
             c.value(QLatin1String("pseudonym")).toString(), *role);
         if (!id)
@@ -82,7 +82,7 @@ Status build(const QString &sourceDir, const QString &target)
             return std::unexpected(article.error());
         if (!*article)
             return fail(ErrorCode::InvalidInput,
-                tr("%1: the reliability article \"%2\" is not in articles.jsonl.")
+                CliText::tr("%1: the reliability article \"%2\" is not in articles.jsonl.")
                     .arg(studyPath, v.toString()));
         for (CoderId coder : reliabilityCoders)
             FOURFOLD_TRY_STATUS(project->assign(**article, coder, Phase::Reliability));
@@ -119,8 +119,9 @@ Status build(const QString &sourceDir, const QString &target)
     if (auto run = ExtractorRuns::create(*project, *cues, QStringLiteral("cues")); !run)
         return std::unexpected(run.error());
 
-    out(tr("Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans, "
-           "2 baseline runs.")
+    out(CliText::tr(
+        "Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans, "
+        "2 baseline runs.")
             .arg(target)
             .arg(imported->added.size())
             .arg(study->value(QLatin1String("coders")).toArray().size())
@@ -142,23 +143,26 @@ int runBuildSample(const QStringList &arguments)
 {
     const QString command = QStringLiteral("build-sample");
     QCommandLineParser parser;
-    const QCommandLineOption force(QStringLiteral("force"), tr("Replace OUT if it exists."));
+    const QCommandLineOption force(
+        QStringLiteral("force"), CliText::tr("Replace OUT if it exists."));
     parser.addOption(force);
     parser.addPositionalArgument(QStringLiteral("SOURCE"),
-        tr("The folder with study.json, articles.jsonl, codings.jsonl and gold.jsonl."));
+        CliText::tr("The folder with study.json, articles.jsonl, codings.jsonl and gold.jsonl."));
     parser.addPositionalArgument(
-        QStringLiteral("OUT"), tr("The project file to write (*.fourfold)."));
+        QStringLiteral("OUT"), CliText::tr("The project file to write (*.fourfold)."));
     if (int rc = parseCommandLine(parser, command,
-            tr("Build the demo project (invented data) from its source files."), arguments);
+            CliText::tr("Build the demo project (invented data) from its source files."),
+            arguments);
         rc >= 0)
         return rc;
     if (parser.positionalArguments().size() != 2)
-        return usageError(command, tr("expected a source folder and an output file."));
+        return usageError(command, CliText::tr("expected a source folder and an output file."));
     const QString source = parser.positionalArguments().at(0);
     const QString target = parser.positionalArguments().at(1);
     if (QFileInfo::exists(target) && !parser.isSet(force))
         return report(Error {ErrorCode::Duplicate,
-            tr("%1 already exists; add --force to replace it.").arg(target), {}, {}, 0, 0});
+            CliText::tr("%1 already exists; add --force to replace it.").arg(target), {}, {}, 0,
+            0});
 
     // Built beside the target and renamed at the end, so a failed build leaves no half project.
     const QString temporary = target + QStringLiteral(".building");
@@ -170,8 +174,8 @@ int runBuildSample(const QStringList &arguments)
     removeProjectFiles(target);
     if (!QFile::rename(temporary, target)) {
         removeProjectFiles(temporary);
-        return report(Error {
-            ErrorCode::Io, tr("Cannot move the new project to %1.").arg(target), {}, {}, 0, 0});
+        return report(Error {ErrorCode::Io,
+            CliText::tr("Cannot move the new project to %1.").arg(target), {}, {}, 0, 0});
     }
     return ExitOk;
 }

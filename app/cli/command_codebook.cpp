@@ -13,10 +13,10 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("cli", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 const QString kCommand = QStringLiteral("codebook");
 
@@ -33,26 +33,29 @@ int runCodebook(const QStringList &arguments)
 {
     QCommandLineParser parser;
     const QCommandLineOption diff(QStringLiteral("diff"),
-        tr("Print what changed from version A to version B (\"--diff A B\" or \"--diff A,B\"; B "
-           "defaults to the current version)."),
+        CliText::tr(
+            "Print what changed from version A to version B (\"--diff A B\" or \"--diff A,B\"; B "
+            "defaults to the current version)."),
         QStringLiteral("A"));
     const QCommandLineOption update(QStringLiteral("update"),
-        tr("Add the codebook in this JSON file as a new version (needs --note)."),
+        CliText::tr("Add the codebook in this JSON file as a new version (needs --note)."),
         QStringLiteral("FILE"));
-    const QCommandLineOption note(
-        QStringLiteral("note"), tr("With --update: what changed and why."), QStringLiteral("TEXT"));
+    const QCommandLineOption note(QStringLiteral("note"),
+        CliText::tr("With --update: what changed and why."), QStringLiteral("TEXT"));
     const QCommandLineOption by(QStringLiteral("by"),
-        tr("With --update: the lead's pseudonym, recorded as the author."), QStringLiteral("LEAD"));
+        CliText::tr("With --update: the lead's pseudonym, recorded as the author."),
+        QStringLiteral("LEAD"));
     const QCommandLineOption show(QStringLiteral("show"),
-        tr("Print version N as JSON (the form --update reads)."), QStringLiteral("N"));
+        CliText::tr("Print version N as JSON (the form --update reads)."), QStringLiteral("N"));
     const QCommandLineOption outdated(QStringLiteral("outdated"),
-        tr("List the annotations made under an older version than the current one."));
-    const QCommandLineOption json(QStringLiteral("json"), tr("Print the result as JSON."));
+        CliText::tr("List the annotations made under an older version than the current one."));
+    const QCommandLineOption json(QStringLiteral("json"), CliText::tr("Print the result as JSON."));
     parser.addOptions({diff, update, note, by, show, outdated, json});
-    parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
+    parser.addPositionalArgument(QStringLiteral("PROJECT"), CliText::tr("The project file."));
     if (int rc = parseCommandLine(parser, kCommand,
-            tr("Codebook versions: without options, list them; editing definitions, decision "
-               "rules or attributes is recorded as a new version with --update."),
+            CliText::tr(
+                "Codebook versions: without options, list them; editing definitions, decision "
+                "rules or attributes is recorded as a new version with --update."),
             arguments);
         rc >= 0)
         return rc;
@@ -61,11 +64,11 @@ int runCodebook(const QStringList &arguments)
         + (parser.isSet(show) ? 1 : 0) + (parser.isSet(outdated) ? 1 : 0);
     if (actions > 1)
         return usageError(
-            kCommand, tr("give at most one of --diff, --update, --show, --outdated."));
+            kCommand, CliText::tr("give at most one of --diff, --update, --show, --outdated."));
     // "--diff 1 2": the parser leaves the second number as a positional argument.
     const qsizetype expected = parser.isSet(diff) && positional.size() == 2 ? 2 : 1;
     if (positional.size() != expected)
-        return usageError(kCommand, tr("expected exactly one project file."));
+        return usageError(kCommand, CliText::tr("expected exactly one project file."));
 
     std::optional<int> from;
     std::optional<int> to;
@@ -74,13 +77,13 @@ int runCodebook(const QStringList &arguments)
         if (expected == 2)
             parts << positional[1];
         if (parts.size() > 2)
-            return usageError(kCommand, tr("--diff takes two version numbers."));
+            return usageError(kCommand, CliText::tr("--diff takes two version numbers."));
         from = versionNumber(parts[0]);
         if (parts.size() == 2)
             to = versionNumber(parts[1]);
         if (!from || (parts.size() == 2 && !to))
             return usageError(kCommand,
-                tr("--diff takes version numbers (1, 2, ...), not \"%1\".")
+                CliText::tr("--diff takes version numbers (1, 2, ...), not \"%1\".")
                     .arg(parts.join(QLatin1Char(' '))));
     }
     std::optional<int> showNumber;
@@ -88,11 +91,12 @@ int runCodebook(const QStringList &arguments)
         showNumber = versionNumber(parser.value(show));
         if (!showNumber)
             return usageError(kCommand,
-                tr("--show takes a version number (1, 2, ...), not \"%1\".")
+                CliText::tr("--show takes a version number (1, 2, ...), not \"%1\".")
                     .arg(parser.value(show)));
     }
     if (parser.isSet(update) && parser.value(note).trimmed().isEmpty())
-        return usageError(kCommand, tr("--update needs --note saying what changed and why."));
+        return usageError(
+            kCommand, CliText::tr("--update needs --note saying what changed and why."));
 
     auto project = Project::open(positional.first());
     if (!project)
@@ -107,8 +111,8 @@ int runCodebook(const QStringList &arguments)
                 return report(lead.error());
             if (!*lead)
                 return report(Error {ErrorCode::NotFound,
-                    tr("There is no coder \"%1\" in the project.").arg(parser.value(by)), {}, {}, 0,
-                    0});
+                    CliText::tr("There is no coder \"%1\" in the project.").arg(parser.value(by)),
+                    {}, {}, 0, 0});
             author = (*lead)->id;
         }
         auto before = project->codebook();
@@ -126,7 +130,7 @@ int runCodebook(const QStringList &arguments)
             o.insert(QStringLiteral("version"), added->number);
             printJson(o);
         } else {
-            out(tr("Codebook version %1 added.").arg(added->number));
+            out(CliText::tr("Codebook version %1 added.").arg(added->number));
             out(StudyDesign::codebookDiffText(*d));
         }
         return ExitOk;
@@ -173,15 +177,16 @@ int runCodebook(const QStringList &arguments)
             printJson(QJsonObject {{QStringLiteral("outdated"), rows}});
             return ExitOk;
         }
-        out(tr("%1 annotations were made under an older codebook version.").arg(list->size()));
+        out(CliText::tr("%1 annotations were made under an older codebook version.")
+                .arg(list->size()));
         for (const OutdatedAnnotation &a : *list)
-            out(tr("  #%1  %2  %3  %4  version %5%6")
+            out(CliText::tr("  #%1  %2  %3  %4  version %5%6")
                     .arg(a.id.value)
                     .arg(a.article, -12)
                     .arg(a.coder, -6)
                     .arg(functionKey(a.function), -10)
                     .arg(a.version)
-                    .arg(a.functionChanged ? tr("  (its function changed since: re-check)")
+                    .arg(a.functionChanged ? CliText::tr("  (its function changed since: re-check)")
                                            : QString()));
         return ExitOk;
     }

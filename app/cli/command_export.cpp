@@ -12,10 +12,10 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("cli", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 // A split that got no article (too few articles for its share) is written empty; say so on
 // stderr, so that a pipeline does not train or test on nothing unawares.
@@ -29,8 +29,9 @@ void warnEmptySplits(const QJsonObject &manifest, const ExportOptions &options)
         total += splits.value(name).toObject().value(QStringLiteral("articles")).toInteger();
     for (const QString &name : options.split->names)
         if (splits.value(name).toObject().value(QStringLiteral("articles")).toInteger() == 0)
-            err(tr("fourfold-cli: note: the %1 split is empty; %2 article(s) are too few for "
-                   "these shares.")
+            err(CliText::tr(
+                "fourfold-cli: note: the %1 split is empty; %2 article(s) are too few for "
+                "these shares.")
                     .arg(name)
                     .arg(total));
 }
@@ -42,43 +43,50 @@ int runExport(const QStringList &arguments)
     const QString command = QStringLiteral("export");
     QCommandLineParser parser;
     const QCommandLineOption layer(QStringLiteral("layer"),
-        tr("What to export: gold, coders, coder:PSEUDONYM or run:NAME."), QStringLiteral("LAYER"));
+        CliText::tr("What to export: gold, coders, coder:PSEUDONYM or run:NAME."),
+        QStringLiteral("LAYER"));
     const QCommandLineOption format(QStringLiteral("format"),
-        tr("jsonl (spans and articles), w3c (Web Annotation JSON-LD), bio (IOB2 tokens, one "
-           "column per function) or csv (article × variable)."),
+        CliText::tr(
+            "jsonl (spans and articles), w3c (Web Annotation JSON-LD), bio (IOB2 tokens, one "
+            "column per function) or csv (article × variable)."),
         QStringLiteral("FORMAT"));
     const QCommandLineOption outDir(QStringLiteral("out"),
-        tr("The output directory: new or empty (created if needed); the export appears in it "
-           "whole or not at all."),
+        CliText::tr(
+            "The output directory: new or empty (created if needed); the export appears in it "
+            "whole or not at all."),
         QStringLiteral("DIR"));
     const QCommandLineOption force(QStringLiteral("force"),
-        tr("Replace an earlier export in --out DIR (a folder holding only export files)."));
+        CliText::tr(
+            "Replace an earlier export in --out DIR (a folder holding only export files)."));
     const QCommandLineOption split(QStringLiteral("split"),
-        tr("Split by article, stratified by function presence: train/dev/test or train/test "
-           "percentages, e.g. 80/10/10."),
+        CliText::tr(
+            "Split by article, stratified by function presence: train/dev/test or train/test "
+            "percentages, e.g. 80/10/10."),
         QStringLiteral("A/B/C"));
-    const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the split (default 1)."),
-        QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption seed(QStringLiteral("seed"),
+        CliText::tr("Seed of the split (default 1)."), QStringLiteral("S"), QStringLiteral("1"));
     const QCommandLineOption noText(QStringLiteral("no-text"),
-        tr("Write offsets and hashes only: no texts, quotes, tokens or titles."));
-    const QCommandLineOption json(QStringLiteral("json"), tr("Print the manifest as JSON."));
+        CliText::tr("Write offsets and hashes only: no texts, quotes, tokens or titles."));
+    const QCommandLineOption json(
+        QStringLiteral("json"), CliText::tr("Print the manifest as JSON."));
     parser.addOptions({layer, format, outDir, force, split, seed, noText, json});
-    parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
+    parser.addPositionalArgument(QStringLiteral("PROJECT"), CliText::tr("The project file."));
     if (int rc = parseCommandLine(parser, command,
-            tr("Exports gold, codings or a run's spans for data teams and statistics packages; "
-               "coders appear only by pseudonym."),
+            CliText::tr(
+                "Exports gold, codings or a run's spans for data teams and statistics packages; "
+                "coders appear only by pseudonym."),
             arguments);
         rc >= 0)
         return rc;
     if (parser.positionalArguments().size() != 1)
-        return usageError(command, tr("expected one project file."));
+        return usageError(command, CliText::tr("expected one project file."));
     if (!parser.isSet(layer))
-        return usageError(
-            command, tr("say what to export: --layer gold|coders|coder:PSEUDONYM|run:NAME."));
+        return usageError(command,
+            CliText::tr("say what to export: --layer gold|coders|coder:PSEUDONYM|run:NAME."));
     if (!parser.isSet(format))
-        return usageError(command, tr("say which format: --format jsonl|w3c|bio|csv."));
+        return usageError(command, CliText::tr("say which format: --format jsonl|w3c|bio|csv."));
     if (!parser.isSet(outDir) || parser.value(outDir).isEmpty())
-        return usageError(command, tr("say where to write: --out DIR."));
+        return usageError(command, CliText::tr("say where to write: --out DIR."));
     ExportOptions options;
     auto spec = LayerSpec::parse(parser.value(layer));
     if (!spec)
@@ -87,7 +95,7 @@ int runExport(const QStringList &arguments)
     const auto formatValue = exportFormatFromKey(parser.value(format));
     if (!formatValue)
         return usageError(command,
-            tr("unknown format \"%1\" (expected jsonl, w3c, bio or csv).")
+            CliText::tr("unknown format \"%1\" (expected jsonl, w3c, bio or csv).")
                 .arg(parser.value(format)));
     options.format = *formatValue;
     options.outDir = parser.value(outDir);
@@ -100,7 +108,7 @@ int runExport(const QStringList &arguments)
     bool ok = false;
     options.seed = parser.value(seed).toULongLong(&ok);
     if (!ok)
-        return usageError(command, tr("--seed expects a non-negative whole number."));
+        return usageError(command, CliText::tr("--seed expects a non-negative whole number."));
     options.withText = !parser.isSet(noText);
     options.version = QCoreApplication::applicationVersion();
     options.replace = parser.isSet(force);
@@ -116,7 +124,7 @@ int runExport(const QStringList &arguments)
         warnEmptySplits(exported->manifest, options);
         return ExitOk;
     }
-    out(tr("Exported %1 as %2 into %3:")
+    out(CliText::tr("Exported %1 as %2 into %3:")
             .arg(options.layer.key(), exportFormatKey(options.format),
                 QDir::toNativeSeparators(options.outDir)));
     const QJsonObject splits = exported->manifest.value(QStringLiteral("splits")).toObject();
@@ -124,7 +132,7 @@ int runExport(const QStringList &arguments)
         options.split ? options.split->names : QStringList {QStringLiteral("all")};
     for (const QString &name : names) {
         const QJsonObject s = splits.value(name).toObject();
-        out(tr("  %1: %2 articles, %3 spans")
+        out(CliText::tr("  %1: %2 articles, %3 spans")
                 .arg(name)
                 .arg(s.value(QStringLiteral("articles")).toInteger())
                 .arg(s.value(QStringLiteral("spans")).toInteger()));

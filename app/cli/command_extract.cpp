@@ -18,10 +18,10 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("cli", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 QString parametersText(const QJsonObject &parameters)
 {
@@ -91,7 +91,7 @@ int listRuns(const Project &project, bool json)
         return report(runs.error());
     QJsonArray array;
     if (!json && runs->empty())
-        out(tr("No extractor runs."));
+        out(CliText::tr("No extractor runs."));
     for (const ExtractorRun &run : *runs) {
         auto s = summarize(project, run);
         if (!s)
@@ -100,14 +100,14 @@ int listRuns(const Project &project, bool json)
             array.append(runJson(run, *s));
             continue;
         }
-        out(tr("%1  (%2, version %3, %4)")
+        out(CliText::tr("%1  (%2, version %3, %4)")
                 .arg(run.name, run.parameters.value(QLatin1String("extractor")).toString(),
-                    run.version.isEmpty() ? tr("none") : run.version, run.createdAt));
-        out(tr("    %1 spans in %2 articles (%3)")
+                    run.version.isEmpty() ? CliText::tr("none") : run.version, run.createdAt));
+        out(CliText::tr("    %1 spans in %2 articles (%3)")
                 .arg(s->spans)
                 .arg(s->articles)
                 .arg(perFunctionText(*s)));
-        out(tr("    %1").arg(parametersText(run.parameters)));
+        out(CliText::tr("    %1").arg(parametersText(run.parameters)));
     }
     if (json)
         printJson(QJsonObject {{QStringLiteral("runs"), array}});
@@ -121,52 +121,58 @@ int runExtract(const QStringList &arguments)
     const QString command = QStringLiteral("extract");
     QCommandLineParser parser;
     const QCommandLineOption extractorOption(QStringLiteral("extractor"),
-        tr("Run a built-in baseline: position or cues."), QStringLiteral("NAME"));
+        CliText::tr("Run a built-in baseline: position or cues."), QStringLiteral("NAME"));
     const QCommandLineOption commandOption(QStringLiteral("command"),
-        tr("Run an external extractor: a program reading one JSON object per article on stdin "
-           "and writing one per article on stdout (see the README)."),
+        CliText::tr(
+            "Run an external extractor: a program reading one JSON object per article on stdin "
+            "and writing one per article on stdout (see the README)."),
         QStringLiteral("CMD"));
     const QCommandLineOption fromFile(QStringLiteral("from-file"),
-        tr("Import a finished run from a JSON Lines file of spans."), QStringLiteral("SPANS"));
+        CliText::tr("Import a finished run from a JSON Lines file of spans."),
+        QStringLiteral("SPANS"));
     const QCommandLineOption runOption(QStringLiteral("run"),
-        tr("Name of the new run (unique in the project)."), QStringLiteral("NAME"));
+        CliText::tr("Name of the new run (unique in the project)."), QStringLiteral("NAME"));
     const QCommandLineOption paramOption(QStringLiteral("param"),
-        tr("Set a parameter, stored with the run. Repeatable. position: intro, body, conclusion "
-           "(a function or none), unit (paragraph or sentence). cues: weight.modal, "
-           "weight.imperative, weight.connective, weight.attribution, weight.negative, "
-           "weight.positive (numbers), minWeight (number), multiple (true/false), "
-           "otherLanguages (error or skip). --command and --from-file: recorded as given."),
+        CliText::tr(
+            "Set a parameter, stored with the run. Repeatable. position: intro, body, conclusion "
+            "(a function or none), unit (paragraph or sentence). cues: weight.modal, "
+            "weight.imperative, weight.connective, weight.attribution, weight.negative, "
+            "weight.positive (numbers), minWeight (number), multiple (true/false), "
+            "otherLanguages (error or skip). --command and --from-file: recorded as given."),
         QStringLiteral("KEY=VALUE"));
     const QCommandLineOption timeoutOption(QStringLiteral("timeout"),
-        tr("--command: stop the program and store nothing when the whole run takes longer than "
-           "this many seconds (default: no limit)."),
+        CliText::tr(
+            "--command: stop the program and store nothing when the whole run takes longer than "
+            "this many seconds (default: no limit)."),
         QStringLiteral("SECONDS"), QStringLiteral("0"));
     const QCommandLineOption idleOption(QStringLiteral("idle-timeout"),
-        tr("--command: stop the program and store nothing when it writes nothing for this many "
-           "seconds (default 120; 0: no limit)."),
+        CliText::tr(
+            "--command: stop the program and store nothing when it writes nothing for this many "
+            "seconds (default 120; 0: no limit)."),
         QStringLiteral("SECONDS"), QStringLiteral("120"));
     const QCommandLineOption versionOption(QStringLiteral("version"),
-        tr("--command and --from-file: the extractor's own version, stored with the run."),
+        CliText::tr("--command and --from-file: the extractor's own version, stored with the run."),
         QStringLiteral("VERSION"));
     const QCommandLineOption articlesOption(QStringLiteral("articles"),
-        tr("Only these articles (external ids, comma-separated; default: all)."),
+        CliText::tr("Only these articles (external ids, comma-separated; default: all)."),
         QStringLiteral("ID,..."));
     const QCommandLineOption listOption(
-        QStringLiteral("list"), tr("List the project's runs instead."));
+        QStringLiteral("list"), CliText::tr("List the project's runs instead."));
     const QCommandLineOption deleteOption(QStringLiteral("delete"),
-        tr("Delete the run called NAME and its spans instead."), QStringLiteral("NAME"));
-    const QCommandLineOption json(QStringLiteral("json"), tr("Print the result as JSON."));
+        CliText::tr("Delete the run called NAME and its spans instead."), QStringLiteral("NAME"));
+    const QCommandLineOption json(QStringLiteral("json"), CliText::tr("Print the result as JSON."));
     parser.addOptions({extractorOption, commandOption, fromFile, runOption, paramOption,
         timeoutOption, idleOption, versionOption, articlesOption, listOption, deleteOption, json});
-    parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
+    parser.addPositionalArgument(QStringLiteral("PROJECT"), CliText::tr("The project file."));
     if (int rc = parseCommandLine(parser, command,
-            tr("Run an extractor over a project's articles and store its spans as a named run, "
-               "whole or not at all; or import, list or delete runs. Offsets are code points."),
+            CliText::tr(
+                "Run an extractor over a project's articles and store its spans as a named run, "
+                "whole or not at all; or import, list or delete runs. Offsets are code points."),
             arguments);
         rc >= 0)
         return rc;
     if (parser.positionalArguments().size() != 1)
-        return usageError(command, tr("expected exactly one project file."));
+        return usageError(command, CliText::tr("expected exactly one project file."));
 
     const int sources = int(parser.isSet(extractorOption)) + int(parser.isSet(commandOption))
         + int(parser.isSet(fromFile));
@@ -174,17 +180,18 @@ int runExtract(const QStringList &arguments)
         int(sources > 0) + int(parser.isSet(listOption)) + int(parser.isSet(deleteOption));
     if (actions == 0)
         return usageError(command,
-            tr("give --extractor, --command or --from-file with --run NAME, or --list, or "
-               "--delete NAME."));
+            CliText::tr("give --extractor, --command or --from-file with --run NAME, or --list, or "
+                        "--delete NAME."));
     if (sources > 1 || actions > 1)
         return usageError(command,
-            tr("give only one of --extractor, --command, --from-file, --list and --delete."));
+            CliText::tr(
+                "give only one of --extractor, --command, --from-file, --list and --delete."));
 
     auto project = Project::open(parser.positionalArguments().first());
     if (!project)
         return report(project.error());
     if (!project->backupPath().isEmpty())
-        err(tr("Upgraded the project file; the old version is kept as %1.")
+        err(CliText::tr("Upgraded the project file; the old version is kept as %1.")
                 .arg(project->backupPath()));
 
     if (parser.isSet(listOption))
@@ -197,12 +204,12 @@ int runExtract(const QStringList &arguments)
         if (parser.isSet(json))
             printJson(QJsonObject {{QStringLiteral("deleted"), name}});
         else
-            out(tr("Deleted run %1.").arg(name));
+            out(CliText::tr("Deleted run %1.").arg(name));
         return ExitOk;
     }
 
     if (!parser.isSet(runOption) || parser.value(runOption).trimmed().isEmpty())
-        return usageError(command, tr("name the new run with --run NAME."));
+        return usageError(command, CliText::tr("name the new run with --run NAME."));
     const QString runName = parser.value(runOption);
 
     QJsonObject given;
@@ -216,18 +223,19 @@ int runExtract(const QStringList &arguments)
              QStringLiteral("timeout"), QStringLiteral("file"), QStringLiteral("sha256")})
         if (given.contains(reserved))
             return usageError(command,
-                tr("parameter \"%1\" is set by Fourfold itself; choose another key.")
+                CliText::tr("parameter \"%1\" is set by Fourfold itself; choose another key.")
                     .arg(reserved));
     if (parser.isSet(extractorOption)
         && (parser.isSet(versionOption) || parser.isSet(timeoutOption) || parser.isSet(idleOption)))
         return usageError(command,
-            tr("--version, --timeout and --idle-timeout are for --command and --from-file; a "
-               "built-in baseline has its own version."));
+            CliText::tr(
+                "--version, --timeout and --idle-timeout are for --command and --from-file; a "
+                "built-in baseline has its own version."));
 
     std::vector<ArticleId> articleIds;
     if (parser.isSet(articlesOption)) {
         if (parser.isSet(fromFile))
-            return usageError(command, tr("--articles does not apply to --from-file."));
+            return usageError(command, CliText::tr("--articles does not apply to --from-file."));
         for (const QString &externalId :
             parser.value(articlesOption).split(QLatin1Char(','), Qt::SkipEmptyParts)) {
             auto id = project->articleByExternalId(externalId.trimmed());
@@ -235,12 +243,13 @@ int runExtract(const QStringList &arguments)
                 return report(id.error());
             if (!id->has_value())
                 return report(fail(ErrorCode::NotFound,
-                    tr("There is no article \"%1\" in the project.").arg(externalId.trimmed()))
+                    CliText::tr("There is no article \"%1\" in the project.")
+                        .arg(externalId.trimmed()))
                                   .error());
             articleIds.push_back(**id);
         }
         if (articleIds.empty())
-            return usageError(command, tr("--articles names no article."));
+            return usageError(command, CliText::tr("--articles names no article."));
     }
 
     Result<ExtractorRun> run = std::unexpected(Error {});
@@ -263,8 +272,9 @@ int runExtract(const QStringList &arguments)
                 extractor = std::make_unique<CueBaseline>(std::move(*baseline));
             } else {
                 return usageError(command,
-                    tr("unknown extractor \"%1\" (expected position or cues; use --command for "
-                       "your own).")
+                    CliText::tr(
+                        "unknown extractor \"%1\" (expected position or cues; use --command for "
+                        "your own).")
                         .arg(kind));
             }
         } else {
@@ -272,12 +282,14 @@ int runExtract(const QStringList &arguments)
             const double timeout = parser.value(timeoutOption).toDouble(&ok);
             if (!ok || !(timeout >= 0) || !std::isfinite(timeout))
                 return usageError(command,
-                    tr("--timeout expects a number of seconds (0 for no limit), got \"%1\".")
+                    CliText::tr(
+                        "--timeout expects a number of seconds (0 for no limit), got \"%1\".")
                         .arg(parser.value(timeoutOption)));
             const double idle = parser.value(idleOption).toDouble(&ok);
             if (!ok || !(idle >= 0) || !std::isfinite(idle))
                 return usageError(command,
-                    tr("--idle-timeout expects a number of seconds (0 for no limit), got \"%1\".")
+                    CliText::tr(
+                        "--idle-timeout expects a number of seconds (0 for no limit), got \"%1\".")
                         .arg(parser.value(idleOption)));
             auto commandExtractor = std::make_unique<CommandExtractor>(
                 parser.value(commandOption), timeout, parser.value(versionOption), given);
@@ -295,11 +307,11 @@ int runExtract(const QStringList &arguments)
         printJson(QJsonObject {{QStringLiteral("run"), runJson(*run, *summary)}});
         return ExitOk;
     }
-    out(tr("Run          %1 (%2, version %3)")
+    out(CliText::tr("Run          %1 (%2, version %3)")
             .arg(run->name, run->parameters.value(QLatin1String("extractor")).toString(),
-                run->version.isEmpty() ? tr("none") : run->version));
-    out(tr("Parameters   %1").arg(parametersText(run->parameters)));
-    out(tr("Spans        %1 in %2 articles (%3)")
+                run->version.isEmpty() ? CliText::tr("none") : run->version));
+    out(CliText::tr("Parameters   %1").arg(parametersText(run->parameters)));
+    out(CliText::tr("Spans        %1 in %2 articles (%3)")
             .arg(summary->spans)
             .arg(summary->articles)
             .arg(perFunctionText(*summary)));

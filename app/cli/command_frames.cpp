@@ -28,10 +28,10 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
-{
-    return QCoreApplication::translate("cli", text, disambiguation, n);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 using frames::FrameAnalysis;
 using frames::FrameMatrix;
@@ -53,7 +53,7 @@ struct FrameInput {
 FrameInput fromIndicators(ElementIndicators &&indicators)
 {
     FrameInput input;
-    input.source = tr("layer %1").arg(indicators.layer);
+    input.source = CliText::tr("layer %1").arg(indicators.layer);
     input.variables = indicators.variables;
     input.matrix.rows = indicators.articles.size();
     input.matrix.columns = size_t(indicators.variables.size());
@@ -63,7 +63,7 @@ FrameInput fromIndicators(ElementIndicators &&indicators)
     QStringList &outlet = input.groups[QStringLiteral("outlet")];
     QStringList &month = input.groups[QStringLiteral("month")];
     QStringList &language = input.groups[QStringLiteral("language")];
-    const QString unknown = tr("(unknown)");
+    const QString unknown = CliText::tr("(unknown)");
     for (const ArticleSummary &a : indicators.articles) {
         input.articles.push_back(a.id);
         input.ids << (a.externalId.isEmpty() ? a.uuid : a.externalId);
@@ -154,14 +154,15 @@ QJsonObject chiSquareJson(const frames::ChiSquareResult &t)
 QString chiSquareText(const frames::ChiSquareResult &t)
 {
     if (!t.statistic)
-        return tr("chi-square undefined: %1").arg(QString::fromStdString(t.reason));
-    return tr("X² = %1, df = %2, p = %3, Cramér's V = %4%5")
+        return CliText::tr("chi-square undefined: %1").arg(QString::fromStdString(t.reason));
+    return CliText::tr("X² = %1, df = %2, p = %3, Cramér's V = %4%5")
         .arg(*t.statistic, 0, 'f', 2)
         .arg(t.degreesOfFreedom)
         .arg(*t.pValue < 0.001 ? QStringLiteral("< 0.001") : QString::number(*t.pValue, 'f', 3))
         .arg(*t.cramersV, 0, 'f', 3)
-        .arg(t.smallExpected > 0 ? tr("; %n cell(s) expect fewer than 5", nullptr, t.smallExpected)
-                                 : QString());
+        .arg(t.smallExpected > 0
+                ? CliText::tr("; %n cell(s) expect fewer than 5", nullptr, t.smallExpected)
+                : QString());
 }
 
 // Ward + k-means with k clusters on `matrix` (one thread: replicates run side by side).
@@ -185,7 +186,8 @@ Status writeAssignments(const QString &path, const FrameInput &input, const fram
 {
     QSaveFile file(path);
     if (!file.open(QIODevice::WriteOnly))
-        return fail(ErrorCode::Io, tr("%1 could not be written.").arg(path), file.errorString());
+        return fail(
+            ErrorCode::Io, CliText::tr("%1 could not be written.").arg(path), file.errorString());
     QByteArray bytes = "article,frame\n";
     for (size_t i = 0; i < p.labels.size(); ++i) {
         QString id = input.ids[qsizetype(i)];
@@ -197,7 +199,8 @@ Status writeAssignments(const QString &path, const FrameInput &input, const fram
         bytes += id.toUtf8() + ',' + QByteArray::number(p.labels[i] + 1) + '\n';
     }
     if (file.write(bytes) != bytes.size() || !file.commit())
-        return fail(ErrorCode::Io, tr("%1 could not be written.").arg(path), file.errorString());
+        return fail(
+            ErrorCode::Io, CliText::tr("%1 could not be written.").arg(path), file.errorString());
     return {};
 }
 
@@ -214,43 +217,51 @@ int runFrames(const QStringList &arguments)
     const QString command = QStringLiteral("frames");
     QCommandLineParser parser;
     const QCommandLineOption data(QStringLiteral("data"),
-        tr("An articles × variables matrix: CSV with a header row <id>,<variable>,... and one "
-           "row per article, its id first; every cell a number (0/1 for element indicators)."),
+        CliText::tr(
+            "An articles × variables matrix: CSV with a header row <id>,<variable>,... and one "
+            "row per article, its id first; every cell a number (0/1 for element indicators)."),
         QStringLiteral("FILE"));
     const QCommandLineOption layer(QStringLiteral("layer"),
-        tr("With a project: whose codings give the element variables: gold (default), "
-           "consensus (an element counts when at least half of the article's coders coded it), "
-           "coder:PSEUDONYM or run:NAME."),
+        CliText::tr(
+            "With a project: whose codings give the element variables: gold (default), "
+            "consensus (an element counts when at least half of the article's coders coded it), "
+            "coder:PSEUDONYM or run:NAME."),
         QStringLiteral("LAYER"), QStringLiteral("gold"));
     const QCommandLineOption k(QStringLiteral("k"),
-        tr("The number of frames (default: the one most k-choice indices point at)."),
+        CliText::tr("The number of frames (default: the one most k-choice indices point at)."),
         QStringLiteral("K"));
     const QCommandLineOption maxK(QStringLiteral("max-k"),
-        tr("Compute the k-choice indices for k = 2..K (default 10)."), QStringLiteral("K"),
+        CliText::tr("Compute the k-choice indices for k = 2..K (default 10)."), QStringLiteral("K"),
         QStringLiteral("10"));
     const QCommandLineOption bootstrap(QStringLiteral("bootstrap"),
-        tr("Bootstrap replicates for each frame's stability (Hennig 2007; default 0: none)."),
+        CliText::tr(
+            "Bootstrap replicates for each frame's stability (Hennig 2007; default 0: none)."),
         QStringLiteral("N"), QStringLiteral("0"));
-    const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
-        QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption seed(QStringLiteral("seed"),
+        CliText::tr("Seed of the bootstrap (default 1)."), QStringLiteral("S"),
+        QStringLiteral("1"));
     const QCommandLineOption compare(QStringLiteral("compare"),
-        tr("With a project: also cluster this layer on the articles both layers hold, with the "
-           "same k, and compare the frames (adjusted Rand index, matched cross-table)."),
+        CliText::tr(
+            "With a project: also cluster this layer on the articles both layers hold, with the "
+            "same k, and compare the frames (adjusted Rand index, matched cross-table)."),
         QStringLiteral("LAYER"));
-    const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
+    const QCommandLineOption json(
+        QStringLiteral("json"), CliText::tr("Print the figures as JSON."));
     const QCommandLineOption outFile(QStringLiteral("out"),
-        tr("Write each article's frame as CSV rows article,frame (frames counted from 1)."),
+        CliText::tr(
+            "Write each article's frame as CSV rows article,frame (frames counted from 1)."),
         QStringLiteral("FILE"));
     const QCommandLineOption force(
-        QStringLiteral("force"), tr("Replace the --out file if it exists."));
+        QStringLiteral("force"), CliText::tr("Replace the --out file if it exists."));
     parser.addOptions({data, layer, k, maxK, bootstrap, seed, compare, json, outFile, force});
     parser.addPositionalArgument(
-        QStringLiteral("PROJECT"), tr("The project file (unless --data is given)."));
+        QStringLiteral("PROJECT"), CliText::tr("The project file (unless --data is given)."));
     if (int rc = parseCommandLine(parser, command,
-            tr("Frames as clusters of articles by their frame elements: Ward's method, then "
-               "k-means from Ward's centroids (Matthes & Kohring 2008); k-choice indices "
-               "(silhouette, Calinski–Harabasz, fusion-coefficient elbow), bootstrap stability, "
-               "frames by outlet, month and language."),
+            CliText::tr(
+                "Frames as clusters of articles by their frame elements: Ward's method, then "
+                "k-means from Ward's centroids (Matthes & Kohring 2008); k-choice indices "
+                "(silhouette, Calinski–Harabasz, fusion-coefficient elbow), bootstrap stability, "
+                "frames by outlet, month and language."),
             arguments);
         rc >= 0)
         return rc;
@@ -260,30 +271,33 @@ int runFrames(const QStringList &arguments)
     if (parser.isSet(k)) {
         options.k = parser.value(k).toInt(&ok);
         if (!ok || options.k < 1)
-            return usageError(command, tr("--k expects a whole number of frames from 1 up."));
+            return usageError(
+                command, CliText::tr("--k expects a whole number of frames from 1 up."));
     }
     options.maxK = parser.value(maxK).toInt(&ok);
     if (!ok || options.maxK < 2 || options.maxK > 100)
-        return usageError(command, tr("--max-k expects a whole number from 2 to 100."));
+        return usageError(command, CliText::tr("--max-k expects a whole number from 2 to 100."));
     const int replicates = parser.value(bootstrap).toInt(&ok);
     if (!ok || replicates < 0 || replicates > 100000)
         return usageError(
-            command, tr("--bootstrap expects a number of replicates from 0 to 100000."));
+            command, CliText::tr("--bootstrap expects a number of replicates from 0 to 100000."));
     const quint64 seedValue = parser.value(seed).toULongLong(&ok);
     if (!ok)
-        return usageError(command, tr("--seed expects a non-negative whole number."));
+        return usageError(command, CliText::tr("--seed expects a non-negative whole number."));
     if (parser.isSet(outFile) && QFileInfo::exists(parser.value(outFile)) && !parser.isSet(force))
         return reportFailure(fail(ErrorCode::Duplicate,
-            tr("%1 exists already; choose another name or replace it with --force.")
+            CliText::tr("%1 exists already; choose another name or replace it with --force.")
                 .arg(parser.value(outFile))));
 
     FrameInput input;
     std::optional<FrameInput> other;
     if (parser.isSet(data)) {
         if (!parser.positionalArguments().isEmpty())
-            return usageError(command, tr("give either --data FILE or a project, not both."));
+            return usageError(
+                command, CliText::tr("give either --data FILE or a project, not both."));
         if (parser.isSet(compare) || parser.isSet(layer))
-            return usageError(command, tr("--layer and --compare are for a project, not --data."));
+            return usageError(
+                command, CliText::tr("--layer and --compare are for a project, not --data."));
         auto read = readNumericMatrix(parser.value(data));
         if (!read)
             return report(read.error());
@@ -295,7 +309,7 @@ int runFrames(const QStringList &arguments)
         input.matrix.values = std::move(read->values);
     } else {
         if (parser.positionalArguments().size() != 1)
-            return usageError(command, tr("expected a project file, or --data FILE."));
+            return usageError(command, CliText::tr("expected a project file, or --data FILE."));
         auto project = Project::openForReading(parser.positionalArguments().first());
         if (!project)
             return report(project.error());
@@ -312,13 +326,14 @@ int runFrames(const QStringList &arguments)
     }
     if (input.matrix.rows < 3)
         return reportFailure(fail(ErrorCode::InvalidInput,
-            tr("%1 holds %n article(s); frames need at least 3.", nullptr, int(input.matrix.rows))
+            CliText::tr(
+                "%1 holds %n article(s); frames need at least 3.", nullptr, int(input.matrix.rows))
                 .arg(input.source)));
 
     auto analysed = frames::analyseFrames(input.matrix, options);
     if (!analysed)
         return reportFailure(fail(ErrorCode::InvalidInput,
-            tr("%1: %2").arg(input.source, QString::fromStdString(analysed.error()))));
+            CliText::tr("%1: %2").arg(input.source, QString::fromStdString(analysed.error()))));
     const FrameAnalysis &analysis = *analysed;
     const frames::Partition &partition = analysis.frames.partition;
 
@@ -362,8 +377,8 @@ int runFrames(const QStringList &arguments)
         const FrameInput b = restricted(*other, common);
         if (a.matrix.rows < std::max<size_t>(3, size_t(analysis.k)))
             return reportFailure(fail(ErrorCode::InvalidInput,
-                tr("%1 and %2 share %n article(s); comparing %3 frames needs more.", nullptr,
-                    int(a.matrix.rows))
+                CliText::tr("%1 and %2 share %n article(s); comparing %3 frames needs more.",
+                    nullptr, int(a.matrix.rows))
                     .arg(input.source, other->source)
                     .arg(analysis.k)));
         frames::FrameAnalysisOptions same = options;
@@ -397,23 +412,24 @@ int runFrames(const QStringList &arguments)
             {QStringLiteral("articles"), int(a.matrix.rows)}, {QStringLiteral("k"), analysis.k},
             {QStringLiteral("adjusted_rand_index"), ari}, {QStringLiteral("cross_table"), rows},
             {QStringLiteral("matching"), matching}, {QStringLiteral("matched_share"), agreement}};
-        comparisonText << tr("Frames of %1 against %2 on the %n article(s) both hold (k = %3 "
-                             "for both)",
+        comparisonText << CliText::tr(
+            "Frames of %1 against %2 on the %n article(s) both hold (k = %3 "
+            "for both)",
             nullptr, int(a.matrix.rows))
                               .arg(input.source, other->source)
                               .arg(analysis.k);
         comparisonText
-            << tr("  Adjusted Rand index (Hubert & Arabie 1985)  %1").arg(ari, 0, 'f', 3);
-        comparisonText << tr("  Articles on matched frames                   %1%")
+            << CliText::tr("  Adjusted Rand index (Hubert & Arabie 1985)  %1").arg(ari, 0, 'f', 3);
+        comparisonText << CliText::tr("  Articles on matched frames                   %1%")
                               .arg(agreement * 100, 0, 'f', 1);
         QString header = QStringLiteral("  %1").arg(QString(), -10);
         for (int c = 0; c < table->columns; ++c)
-            header += QStringLiteral("%1").arg(tr("F%1").arg(c + 1), 8);
+            header += QStringLiteral("%1").arg(CliText::tr("F%1").arg(c + 1), 8);
         comparisonText << header
-                + tr("   (rows: %1; columns: %2; * matched)")
+                + CliText::tr("   (rows: %1; columns: %2; * matched)")
                       .arg(parser.value(layer), parser.value(compare));
         for (int r = 0; r < table->rows; ++r) {
-            QString line = QStringLiteral("  %1").arg(tr("F%1").arg(r + 1), -10);
+            QString line = QStringLiteral("  %1").arg(CliText::tr("F%1").arg(r + 1), -10);
             for (int c = 0; c < table->columns; ++c)
                 line += QStringLiteral("%1").arg(
                     QString::number(table->at(r, c)) + (match[size_t(r)] == c ? u"*"_qs : u" "_qs),
@@ -515,7 +531,7 @@ int runFrames(const QStringList &arguments)
     }
 
     QStringList lines;
-    lines << tr("Frames of %1: %2 articles × %3 variables")
+    lines << CliText::tr("Frames of %1: %2 articles × %3 variables")
                  .arg(input.source)
                  .arg(n)
                  .arg(input.variables.size());
@@ -528,40 +544,44 @@ int runFrames(const QStringList &arguments)
                 ++present;
                 atHalf += input.coderShares[i] == 0.5 ? 1 : 0;
             }
-        lines << tr("Consensus: an element counts when at least half of the article's coders "
-                    "coded it; %1 of the %2 elements present rest on exactly half.")
+        lines << CliText::tr(
+            "Consensus: an element counts when at least half of the article's coders "
+            "coded it; %1 of the %2 elements present rest on exactly half.")
                      .arg(atHalf)
                      .arg(present);
     }
-    lines << tr("Choosing k (each k: Ward, then k-means from Ward's centroids)");
-    lines << tr("  %1 %2 %3 %4")
-                 .arg(tr("k"), 3)
-                 .arg(tr("silhouette"), 11)
-                 .arg(tr("Calinski–Harabasz"), 18)
-                 .arg(tr("fusion jump"), 12);
+    lines << CliText::tr("Choosing k (each k: Ward, then k-means from Ward's centroids)");
+    lines << CliText::tr("  %1 %2 %3 %4")
+                 .arg(CliText::tr("k"), 3)
+                 .arg(CliText::tr("silhouette"), 11)
+                 .arg(CliText::tr("Calinski–Harabasz"), 18)
+                 .arg(CliText::tr("fusion jump"), 12);
     for (const frames::KChoice &row : analysis.kChoice)
         lines << QStringLiteral("  %1 %2 %3 %4")
                      .arg(row.k, 3)
                      .arg(number(row.silhouette.value, 3), 11)
                      .arg(number(row.calinskiHarabasz.value, 2), 18)
                      .arg(number(row.fusionJump.value, 3), 12);
-    lines << tr("  Largest: silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k "
-                "= %3")
+    lines << CliText::tr(
+        "  Largest: silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k "
+        "= %3")
                  .arg(kText(analysis.kBySilhouette), kText(analysis.kByCalinskiHarabasz),
                      kText(analysis.kByFusion));
-    lines << (analysis.kGiven ? tr("Frames (k = %1, given)").arg(analysis.k)
-                              : tr("Frames (k = %1, where most indices point)").arg(analysis.k));
+    lines << (analysis.kGiven
+            ? CliText::tr("Frames (k = %1, given)").arg(analysis.k)
+            : CliText::tr("Frames (k = %1, where most indices point)").arg(analysis.k));
     for (size_t f = 0; f < analysis.profiles.size(); ++f) {
         const frames::FrameProfile &profile = analysis.profiles[f];
-        QString head = tr("  Frame %1  %n article(s) (%2%)", nullptr, profile.size)
+        QString head = CliText::tr("  Frame %1  %n article(s) (%2%)", nullptr, profile.size)
                            .arg(f + 1)
                            .arg(100.0 * profile.size / double(n), 0, 'f', 1);
         if (!stability.empty())
-            head += tr("  stability %1%2")
+            head += CliText::tr("  stability %1%2")
                         .arg(stability[f].replicatesUsed > 0
                                 ? QString::number(stability[f].meanJaccard, 'f', 2)
                                 : QStringLiteral("–"))
-                        .arg(stability[f].flagged ? tr(" (dissolves on resampling)") : QString());
+                        .arg(stability[f].flagged ? CliText::tr(" (dissolves on resampling)")
+                                                  : QString());
         lines << head;
         // The elements that characterise the frame: adjusted residual above 1.96, the largest
         // first (for numbers from --data that are not 0/1: the largest differences).
@@ -579,28 +599,29 @@ int runFrames(const QStringList &arguments)
             const frames::VariableProfile &vp = profile.variables[v];
             if (vp.residual ? *vp.residual <= 1.96 : vp.difference <= 0)
                 continue;
-            shown << tr("%1 %2 (all %3%4)")
+            shown << CliText::tr("%1 %2 (all %3%4)")
                          .arg(input.variables[qsizetype(v)])
                          .arg(vp.share, 0, 'f', 2)
                          .arg(vp.overall, 0, 'f', 2)
-                         .arg(
-                             vp.residual ? tr(", r = %1").arg(*vp.residual, 0, 'f', 1) : QString());
+                         .arg(vp.residual ? CliText::tr(", r = %1").arg(*vp.residual, 0, 'f', 1)
+                                          : QString());
             if (shown.size() == 6)
                 break;
         }
-        lines << tr("    elements: %1")
-                     .arg(shown.isEmpty() ? tr("none stands out")
+        lines << CliText::tr("    elements: %1")
+                     .arg(shown.isEmpty() ? CliText::tr("none stands out")
                                           : shown.join(QStringLiteral("; ")));
         QStringList closest;
         for (size_t row : profile.closest)
             closest << input.ids[qsizetype(row)];
-        lines << tr("    closest to the centre: %1").arg(closest.join(QStringLiteral(", ")));
+        lines
+            << CliText::tr("    closest to the centre: %1").arg(closest.join(QStringLiteral(", ")));
     }
     for (const GroupTable &t : tables) {
-        lines << tr("Frames by %1: %2").arg(t.name, chiSquareText(t.test));
+        lines << CliText::tr("Frames by %1: %2").arg(t.name, chiSquareText(t.test));
         QString header = QStringLiteral("  %1").arg(QString(), -24);
         for (int f = 0; f < partition.clusters; ++f)
-            header += QStringLiteral("%1").arg(tr("F%1").arg(f + 1), 7);
+            header += QStringLiteral("%1").arg(CliText::tr("F%1").arg(f + 1), 7);
         lines << header;
         for (qsizetype g = 0; g < t.groups.size(); ++g) {
             QString line = QStringLiteral("  %1").arg(t.groups[g].left(24), -24);

@@ -19,10 +19,10 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("cli", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 // The first line of `path` ("-" = standard input), without its line end.
 Result<QString> readPassphrase(const QString &path)
@@ -66,46 +66,54 @@ int runPeople(const QStringList &arguments)
     const QString command = QStringLiteral("people");
     QCommandLineParser parser;
     const QCommandLineOption list(QStringLiteral("list"),
-        tr("List everyone: pseudonym, role, enabled or disabled, and whether a lead's passphrase "
-           "is set (names are not printed)."));
+        CliText::tr(
+            "List everyone: pseudonym, role, enabled or disabled, and whether a lead's passphrase "
+            "is set (names are not printed)."));
     const QCommandLineOption add(QStringLiteral("add"),
-        tr("Add a person with this name (kept in the project, never printed or exported)."),
+        CliText::tr(
+            "Add a person with this name (kept in the project, never printed or exported)."),
         QStringLiteral("NAME"));
     const QCommandLineOption pseudonym(QStringLiteral("pseudonym"),
-        tr("The new person's pseudonym, unique in the project (the only name in exports)."),
+        CliText::tr(
+            "The new person's pseudonym, unique in the project (the only name in exports)."),
         QStringLiteral("P"));
-    const QCommandLineOption role(QStringLiteral("role"), tr("coder (the default) or lead."),
-        QStringLiteral("ROLE"), QStringLiteral("coder"));
+    const QCommandLineOption role(QStringLiteral("role"),
+        CliText::tr("coder (the default) or lead."), QStringLiteral("ROLE"),
+        QStringLiteral("coder"));
     const QCommandLineOption passphraseFile(QStringLiteral("passphrase-file"),
-        tr("A new lead's passphrase: the first line of FILE, or of standard input when FILE is "
-           "-."),
+        CliText::tr(
+            "A new lead's passphrase: the first line of FILE, or of standard input when FILE is "
+            "-."),
         QStringLiteral("FILE"));
     const QCommandLineOption rename(QStringLiteral("rename"),
-        tr("Give the person with pseudonym P the name NAME (the second argument)."),
+        CliText::tr("Give the person with pseudonym P the name NAME (the second argument)."),
         QStringLiteral("P"));
     const QCommandLineOption disable(QStringLiteral("disable"),
-        tr("Disable the person with pseudonym P: their codings stay; they take no new "
-           "assignments and cannot be chosen on the desk."),
+        CliText::tr("Disable the person with pseudonym P: their codings stay; they take no new "
+                    "assignments and cannot be chosen on the desk."),
         QStringLiteral("P"));
-    const QCommandLineOption enable(
-        QStringLiteral("enable"), tr("Enable a disabled person again."), QStringLiteral("P"));
+    const QCommandLineOption enable(QStringLiteral("enable"),
+        CliText::tr("Enable a disabled person again."), QStringLiteral("P"));
     const QCommandLineOption lead(QStringLiteral("lead"),
-        tr("The lead making the change (needed once the project has a lead)."),
+        CliText::tr("The lead making the change (needed once the project has a lead)."),
         QStringLiteral("L"));
     const QCommandLineOption leadPassphraseFile(QStringLiteral("lead-passphrase-file"),
-        tr("That lead's passphrase: the first line of FILE (- or left out: standard input)."),
+        CliText::tr(
+            "That lead's passphrase: the first line of FILE (- or left out: standard input)."),
         QStringLiteral("FILE"));
     const QCommandLineOption json(
-        QStringLiteral("json"), tr("Print the list or the result as JSON."));
+        QStringLiteral("json"), CliText::tr("Print the list or the result as JSON."));
     for (const auto *o : {&list, &add, &pseudonym, &role, &passphraseFile, &rename, &disable,
              &enable, &lead, &leadPassphraseFile, &json})
         parser.addOption(*o);
-    parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
-    parser.addPositionalArgument(QStringLiteral("NAME"), tr("The new name, with --rename."));
+    parser.addPositionalArgument(QStringLiteral("PROJECT"), CliText::tr("The project file."));
+    parser.addPositionalArgument(
+        QStringLiteral("NAME"), CliText::tr("The new name, with --rename."));
     if (int rc = parseCommandLine(parser, command,
-            tr("List and change the people of a project. Changes need a lead (--lead and its "
-               "passphrase) once the project has one; each is logged. Output names people by "
-               "pseudonym only."),
+            CliText::tr(
+                "List and change the people of a project. Changes need a lead (--lead and its "
+                "passphrase) once the project has one; each is logged. Output names people by "
+                "pseudonym only."),
             arguments);
         rc >= 0)
         return rc;
@@ -113,32 +121,34 @@ int runPeople(const QStringList &arguments)
     const int actions = int(parser.isSet(list)) + int(parser.isSet(add)) + int(parser.isSet(rename))
         + int(parser.isSet(disable)) + int(parser.isSet(enable));
     if (actions != 1)
-        return usageError(
-            command, tr("give exactly one of --list, --add, --rename, --disable and --enable."));
+        return usageError(command,
+            CliText::tr("give exactly one of --list, --add, --rename, --disable and --enable."));
     const QStringList positional = parser.positionalArguments();
     if (positional.size() != (parser.isSet(rename) ? 2 : 1))
         return usageError(command,
-            parser.isSet(rename) ? tr("expected the project file and the new name.")
-                                 : tr("expected exactly one project file."));
+            parser.isSet(rename) ? CliText::tr("expected the project file and the new name.")
+                                 : CliText::tr("expected exactly one project file."));
     std::optional<CoderRole> newRole;
     if (parser.isSet(add)) {
         newRole = coderRoleFromKey(parser.value(role));
         if (!newRole)
-            return usageError(
-                command, tr("--role takes coder or lead, not \"%1\".").arg(parser.value(role)));
+            return usageError(command,
+                CliText::tr("--role takes coder or lead, not \"%1\".").arg(parser.value(role)));
         if (!parser.isSet(pseudonym))
-            return usageError(command, tr("name the new person's pseudonym with --pseudonym."));
+            return usageError(
+                command, CliText::tr("name the new person's pseudonym with --pseudonym."));
         if (*newRole == CoderRole::Lead && !parser.isSet(passphraseFile))
             return usageError(command,
-                tr("a lead needs a passphrase: give it with --passphrase-file FILE (- for "
-                   "standard input)."));
+                CliText::tr("a lead needs a passphrase: give it with --passphrase-file FILE (- for "
+                            "standard input)."));
     }
     const bool leadFromStdin = parser.isSet(lead)
         && (!parser.isSet(leadPassphraseFile)
             || parser.value(leadPassphraseFile) == QLatin1String("-"));
     if (leadFromStdin && parser.isSet(add) && parser.value(passphraseFile) == QLatin1String("-"))
         return usageError(command,
-            tr("only one passphrase can come from standard input; give the other in a file."));
+            CliText::tr(
+                "only one passphrase can come from standard input; give the other in a file."));
 
     auto project = Project::open(positional.first());
     if (!project)
@@ -161,10 +171,10 @@ int runPeople(const QStringList &arguments)
                 out(QStringLiteral("%1  %2  %3  %4")
                         .arg(c.pseudonym, -8)
                         .arg(coderRoleKey(c.role), -5)
-                        .arg(c.disabled ? tr("disabled") : tr("enabled"), -8)
+                        .arg(c.disabled ? CliText::tr("disabled") : CliText::tr("enabled"), -8)
                         .arg(c.role == CoderRole::Lead ? (*state == PassphraseState::Set
-                                     ? tr("passphrase set")
-                                     : tr("no passphrase yet (set when first chosen)"))
+                                     ? CliText::tr("passphrase set")
+                                     : CliText::tr("no passphrase yet (set when first chosen)"))
                                                        : QString())
                         .trimmed());
         }
@@ -191,8 +201,9 @@ int runPeople(const QStringList &arguments)
             return report(open.error());
         if (!*open || !parser.isSet(add))
             return usageError(command,
-                tr("changing people needs a lead: name yourself with --lead L (your passphrase "
-                   "on standard input or with --lead-passphrase-file FILE)."));
+                CliText::tr(
+                    "changing people needs a lead: name yourself with --lead L (your passphrase "
+                    "on standard input or with --lead-passphrase-file FILE)."));
     }
 
     Result<std::unique_ptr<Edit>> edit = std::unexpected(Error {});
@@ -209,18 +220,19 @@ int runPeople(const QStringList &arguments)
         const QString p = parser.value(pseudonym).trimmed();
         edit = People::add(
             *project, by ? &*by : nullptr, {parser.value(add), p, *newRole, passphrase});
-        done = tr("Added %1 (%2).").arg(p, coderRoleKey(*newRole));
+        done = CliText::tr("Added %1 (%2).").arg(p, coderRoleKey(*newRole));
         result = {{QStringLiteral("added"), p}, {QStringLiteral("role"), coderRoleKey(*newRole)}};
     } else if (parser.isSet(rename)) {
         edit = People::rename(*project, *by, parser.value(rename), positional.at(1));
-        done = tr("Renamed %1.").arg(parser.value(rename).trimmed());
+        done = CliText::tr("Renamed %1.").arg(parser.value(rename).trimmed());
         result = {{QStringLiteral("renamed"), parser.value(rename).trimmed()}};
     } else {
         const bool off = parser.isSet(disable);
         const QString p = (off ? parser.value(disable) : parser.value(enable)).trimmed();
         edit = People::setDisabled(*project, *by, p, off);
-        done = off ? tr("Disabled %1: their codings stay; they take no new assignments.").arg(p)
-                   : tr("Enabled %1.").arg(p);
+        done = off
+            ? CliText::tr("Disabled %1: their codings stay; they take no new assignments.").arg(p)
+            : CliText::tr("Enabled %1.").arg(p);
         result = {{off ? QStringLiteral("disabled") : QStringLiteral("enabled"), p}};
     }
     if (!edit)

@@ -15,10 +15,10 @@ namespace fourfold::cli {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("cli", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CliText {
+    Q_DECLARE_TR_FUNCTIONS(cli)
+};
 
 QJsonValue number(const std::optional<double> &v)
 {
@@ -105,44 +105,50 @@ int runScore(const QStringList &arguments)
     const QString command = QStringLiteral("score");
     QCommandLineParser parser;
     const QCommandLineOption run(QStringLiteral("run"),
-        tr("The extractor run to score (its name)."), QStringLiteral("NAME"));
+        CliText::tr("The extractor run to score (its name)."), QStringLiteral("NAME"));
     const QCommandLineOption against(QStringLiteral("against"),
-        tr("The reference: gold (default) or a coder's pseudonym."), QStringLiteral("gold|CODER"),
-        QStringLiteral("gold"));
+        CliText::tr("The reference: gold (default) or a coder's pseudonym."),
+        QStringLiteral("gold|CODER"), QStringLiteral("gold"));
     const QCommandLineOption match(QStringLiteral("match"),
-        tr("Span matching (SemEval-2013 Task 9.1): strict (same boundaries and function, "
-           "default), exact (same boundaries), partial (overlap counts half), type (same "
-           "function, any overlap)."),
+        CliText::tr("Span matching (SemEval-2013 Task 9.1): strict (same boundaries and function, "
+                    "default), exact (same boundaries), partial (overlap counts half), type (same "
+                    "function, any overlap)."),
         QStringLiteral("MODE"), QStringLiteral("strict"));
     const QCommandLineOption bootstrap(QStringLiteral("bootstrap"),
-        tr("Bootstrap replicates over articles for the 95% intervals (default 1000; 0 = none)."),
+        CliText::tr(
+            "Bootstrap replicates over articles for the 95% intervals (default 1000; 0 = none)."),
         QStringLiteral("N"), QStringLiteral("1000"));
-    const QCommandLineOption seed(QStringLiteral("seed"), tr("Seed of the bootstrap (default 1)."),
-        QStringLiteral("S"), QStringLiteral("1"));
+    const QCommandLineOption seed(QStringLiteral("seed"),
+        CliText::tr("Seed of the bootstrap (default 1)."), QStringLiteral("S"),
+        QStringLiteral("1"));
     const QCommandLineOption unit(QStringLiteral("unit"),
-        tr("Units on which the run joins the humans for alpha: paragraph, sentence (default) or "
-           "token."),
+        CliText::tr(
+            "Units on which the run joins the humans for alpha: paragraph, sentence (default) or "
+            "token."),
         QStringLiteral("UNIT"), QStringLiteral("sentence"));
     const QCommandLineOption coders(QStringLiteral("coders"),
-        tr("The human coders for alpha (default: everyone who coded)."), QStringLiteral("A,B,..."));
-    const QCommandLineOption json(QStringLiteral("json"), tr("Print the figures as JSON."));
+        CliText::tr("The human coders for alpha (default: everyone who coded)."),
+        QStringLiteral("A,B,..."));
+    const QCommandLineOption json(
+        QStringLiteral("json"), CliText::tr("Print the figures as JSON."));
     parser.addOptions({run, against, match, bootstrap, seed, unit, coders, json});
-    parser.addPositionalArgument(QStringLiteral("PROJECT"), tr("The project file."));
+    parser.addPositionalArgument(QStringLiteral("PROJECT"), CliText::tr("The project file."));
     if (int rc = parseCommandLine(parser, command,
-            tr("Scores an extractor run against the gold standard or one coder: precision, "
-               "recall and F1 per function, micro and macro, with bootstrap intervals over "
-               "articles; and the run's alpha with the humans beside their pairwise range."),
+            CliText::tr(
+                "Scores an extractor run against the gold standard or one coder: precision, "
+                "recall and F1 per function, micro and macro, with bootstrap intervals over "
+                "articles; and the run's alpha with the humans beside their pairwise range."),
             arguments);
         rc >= 0)
         return rc;
     if (parser.positionalArguments().size() != 1)
-        return usageError(command, tr("expected one project file."));
+        return usageError(command, CliText::tr("expected one project file."));
     if (!parser.isSet(run) || parser.value(run).isEmpty())
-        return usageError(command, tr("say which run to score: --run NAME."));
+        return usageError(command, CliText::tr("say which run to score: --run NAME."));
     const auto mode = matchModeFromKey(parser.value(match));
     if (!mode)
         return usageError(command,
-            tr("unknown match mode \"%1\" (expected strict, exact, partial or type).")
+            CliText::tr("unknown match mode \"%1\" (expected strict, exact, partial or type).")
                 .arg(parser.value(match)));
     ScoreOptions options;
     options.mode = *mode;
@@ -150,17 +156,17 @@ int runScore(const QStringList &arguments)
     options.bootstrapReplicates = parser.value(bootstrap).toInt(&ok);
     if (!ok || options.bootstrapReplicates < 0 || options.bootstrapReplicates > 1000000)
         return usageError(
-            command, tr("--bootstrap expects a number of replicates from 0 to 1000000."));
+            command, CliText::tr("--bootstrap expects a number of replicates from 0 to 1000000."));
     options.seed = parser.value(seed).toULongLong(&ok);
     if (!ok)
-        return usageError(command, tr("--seed expects a non-negative whole number."));
+        return usageError(command, CliText::tr("--seed expects a non-negative whole number."));
     RunAgreementOptions agreementOptions;
     const auto unitKind = unitKindFromKey(parser.value(unit));
     if (!unitKind
         || (*unitKind != UnitKind::Paragraph && *unitKind != UnitKind::Sentence
             && *unitKind != UnitKind::Token))
         return usageError(command,
-            tr("unknown unit \"%1\" (expected paragraph, sentence or token).")
+            CliText::tr("unknown unit \"%1\" (expected paragraph, sentence or token).")
                 .arg(parser.value(unit)));
     agreementOptions.unit = *unitKind;
     if (parser.isSet(coders))
@@ -226,13 +232,14 @@ int runScore(const QStringList &arguments)
         return ExitOk;
     }
 
-    out(tr("Run %1 against %2, %3 matching, %4 articles")
+    out(CliText::tr("Run %1 against %2, %3 matching, %4 articles")
             .arg(scores->run,
-                scores->against.kind == LayerKind::Gold ? tr("gold") : scores->against.name,
+                scores->against.kind == LayerKind::Gold ? CliText::tr("gold")
+                                                        : scores->against.name,
                 matchModeKey(scores->mode))
             .arg(scores->articles));
     out(QStringLiteral("  %1 %2 %3 %4 %5 %6 %7 %8  %9 %10 %11%12")
-            .arg(tr("function"), -11)
+            .arg(CliText::tr("function"), -11)
             .arg(QStringLiteral("POS"), 4)
             .arg(QStringLiteral("ACT"), 4)
             .arg(QStringLiteral("COR"), 4)
@@ -243,14 +250,15 @@ int runScore(const QStringList &arguments)
             .arg(QStringLiteral("P"), 6)
             .arg(QStringLiteral("R"), 6)
             .arg(QStringLiteral("F1"), 6)
-            .arg(scores->replicates ? tr("  F1 95% interval (articles resampled)") : QString()));
+            .arg(scores->replicates ? CliText::tr("  F1 95% interval (articles resampled)")
+                                    : QString()));
     for (FramingFunction f : kFramingFunctions)
         out(countsLine(functionKey(f), scores->perFunction[std::size_t(f)],
             scores->replicates ? &scores->perFunctionIntervals[std::size_t(f)].f1 : nullptr));
-    out(countsLine(
-        tr("micro"), scores->micro, scores->replicates ? &scores->microIntervals.f1 : nullptr));
+    out(countsLine(CliText::tr("micro"), scores->micro,
+        scores->replicates ? &scores->microIntervals.f1 : nullptr));
     QString macro = QStringLiteral("  %1 %2  %3 %4 %5")
-                        .arg(tr("macro"), -11)
+                        .arg(CliText::tr("macro"), -11)
                         .arg(QString(), 34)
                         .arg(fixed(scores->macroPrecision), 6)
                         .arg(fixed(scores->macroRecall), 6)
@@ -261,22 +269,23 @@ int runScore(const QStringList &arguments)
                 .arg(fixed(scores->macroIntervals.f1.low), fixed(scores->macroIntervals.f1.high));
     out(macro);
     if (scores->replicates)
-        out(tr("Intervals: %1 bootstrap replicates over articles, seed %2, percentile method.")
+        out(CliText::tr(
+            "Intervals: %1 bootstrap replicates over articles, seed %2, percentile method.")
                 .arg(scores->replicates)
                 .arg(scores->seed));
     out(QString());
     if (!band) {
-        out(tr("Alpha with the humans: not available (%1)").arg(band.error().message));
+        out(CliText::tr("Alpha with the humans: not available (%1)").arg(band.error().message));
         return ExitOk;
     }
-    out(tr("Alpha with the humans (%1 units present/absent, nominal; humans: %2)")
+    out(CliText::tr("Alpha with the humans (%1 units present/absent, nominal; humans: %2)")
             .arg(unitKindKey(band->unit), band->coders.join(QStringLiteral(", "))));
     out(QStringLiteral("  %1 %2 %3 %4  %5")
-            .arg(tr("function"), -11)
-            .arg(tr("human band"), 16)
-            .arg(tr("run (mean)"), 10)
-            .arg(tr("all+run"), 8)
-            .arg(tr("position")));
+            .arg(CliText::tr("function"), -11)
+            .arg(CliText::tr("human band"), 16)
+            .arg(CliText::tr("run (mean)"), 10)
+            .arg(CliText::tr("all+run"), 8)
+            .arg(CliText::tr("position")));
     for (const FunctionBand &b : band->functions)
         out(QStringLiteral("  %1 %2 %3 %4  %5")
                 .arg(functionKey(b.function), -11)

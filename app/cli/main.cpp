@@ -1,6 +1,7 @@
 // fourfold-cli: Fourfold's jobs without a window, for scripts and pipelines.
 
 #include "app/cli/cli_output.h"
+#include "app/i18n/translations.h"
 
 #include <QCoreApplication>
 #ifdef FOURFOLD_HAVE_REPORT
@@ -137,6 +138,8 @@ int main(int argc, char *argv[])
     QCoreApplication &app = *application;
     QCoreApplication::setApplicationName(QStringLiteral("fourfold-cli"));
     QCoreApplication::setApplicationVersion(QStringLiteral(FOURFOLD_VERSION));
+    // Messages in the language of LANGUAGE, LC_ALL, LC_MESSAGES or LANG, as other tools do.
+    fourfold::useLanguage(QLocale());
 
     const QStringList args = app.arguments();
     if (args.size() < 2) {

@@ -2,13 +2,13 @@
 // (asking who codes unless --coder says it; a lead is asked their passphrase).
 
 #include "app/desktop/main_window.h"
+#include "app/i18n/translations.h"
 
 #include <QApplication>
 #include <QCommandLineParser>
 #include <QLocale>
 #include <QMessageBox>
 #include <QSettings>
-#include <QTranslator>
 
 int main(int argc, char *argv[])
 {
@@ -16,14 +16,10 @@ int main(int argc, char *argv[])
     QApplication::setApplicationName(QStringLiteral("Fourfold"));
     QApplication::setOrganizationName(QStringLiteral("Fourfold"));
 
-    // The language chosen in Settings, else the system's.
+    // The language chosen in Settings, else the system's; Qt's own buttons follow it.
     const QString language =
         QSettings().value(QStringLiteral("language"), QStringLiteral("system")).toString();
-    const QLocale locale = language == QLatin1String("system") ? QLocale() : QLocale(language);
-    QTranslator translator;
-    if (translator.load(
-            locale, QStringLiteral("fourfold"), QStringLiteral("_"), QStringLiteral(":/i18n")))
-        QApplication::installTranslator(&translator);
+    fourfold::useLanguage(language == QLatin1String("system") ? QLocale() : QLocale(language));
 
     QCommandLineParser parser;
     parser.setApplicationDescription(QApplication::translate(

@@ -18,10 +18,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ReportCharts", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ReportChartsText {
+    Q_DECLARE_TR_FUNCTIONS(ReportChartsText)
+};
 
 const QColor kInk(0x22, 0x26, 0x2E);
 const QColor kMuted(0x6B, 0x70, 0x7A);
@@ -135,7 +135,7 @@ void paintAlphaChart(QPainter &p, const std::vector<AlphaChartRow> &rows)
         } else {
             p.setPen(kMuted);
             p.drawText(QRectF(left + kPlotWidth + 8, y - kRowHeight / 2, kValueWidth, kRowHeight),
-                Qt::AlignLeft | Qt::AlignVCenter, tr("undef."));
+                Qt::AlignLeft | Qt::AlignVCenter, ReportChartsText::tr("undef."));
         }
     }
 
@@ -148,7 +148,7 @@ void paintAlphaChart(QPainter &p, const std::vector<AlphaChartRow> &rows)
     p.drawLine(QPointF(left + 24, ly - 5), QPointF(left + 24, ly + 5));
     p.setPen(kMuted);
     p.drawText(QRectF(left + 30, ly - 8, 190, 16), Qt::AlignLeft | Qt::AlignVCenter,
-        tr("95% CI, pairs resampled"));
+        ReportChartsText::tr("95% CI, pairs resampled"));
     QColor band = kMuted;
     band.setAlphaF(0.35f);
     p.setPen(Qt::NoPen);
@@ -156,7 +156,7 @@ void paintAlphaChart(QPainter &p, const std::vector<AlphaChartRow> &rows)
     p.drawRoundedRect(QRectF(left + 215, ly - 5, 24, 10), 3, 3);
     p.setPen(kMuted);
     p.drawText(QRectF(left + 245, ly - 8, 200, 16), Qt::AlignLeft | Qt::AlignVCenter,
-        tr("95% CI, units resampled"));
+        ReportChartsText::tr("95% CI, units resampled"));
 }
 
 QSizeF kappaHeatMapSize(const KappaGrid &grid)
@@ -193,7 +193,7 @@ void paintKappaHeatMap(QPainter &p, const KappaGrid &grid)
             } else {
                 p.fillRect(cell, QBrush(kRule, Qt::BDiagPattern));
                 p.setPen(kMuted);
-                p.drawText(cell, Qt::AlignCenter, tr("undefined"));
+                p.drawText(cell, Qt::AlignCenter, ReportChartsText::tr("undefined"));
             }
         }
     }
@@ -210,7 +210,7 @@ void paintKappaHeatMap(QPainter &p, const KappaGrid &grid)
         p.drawText(QRectF(left + sw * (v + 0.2) / 1.2 - 20, sy + 11, 40, 14), Qt::AlignHCenter,
             QString::number(v, 'f', 1));
     p.drawText(QRectF(left + sw + 10, sy - 3, 160, 16), Qt::AlignLeft | Qt::AlignVCenter,
-        tr("Cohen's kappa"));
+        ReportChartsText::tr("Cohen's kappa"));
 }
 
 QByteArray chartSvg(

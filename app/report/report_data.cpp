@@ -16,10 +16,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ReportData", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ReportDataText {
+    Q_DECLARE_TR_FUNCTIONS(ReportDataText)
+};
 
 // The agree options shared by every analysis of the report.
 QStringList commonArguments(const ReportOptions &options, bool bootstrap)
@@ -64,10 +64,11 @@ Result<QJsonObject> agreeJson(const AgreementRun &run, const AnalysisRequest &re
 QString drawText(const Draw &draw)
 {
     const QString how = draw.method == QLatin1String("stratified") && draw.stratify
-        ? tr("a sample stratified by %1").arg(stratumKey(*draw.stratify))
-        : tr("a simple random sample");
-    return tr("The %1 articles of the %2 phase were drawn as %3 (seed %4) from a frame of %5 "
-              "articles with no earlier assignment, on %6.")
+        ? ReportDataText::tr("a sample stratified by %1").arg(stratumKey(*draw.stratify))
+        : ReportDataText::tr("a simple random sample");
+    return ReportDataText::tr(
+        "The %1 articles of the %2 phase were drawn as %3 (seed %4) from a frame of %5 "
+        "articles with no earlier assignment, on %6.")
         .arg(QString::number(draw.articles.size()), phaseKey(draw.phase), how,
             QString::number(draw.seed), QString::number(draw.frameArticles), draw.drawnAt.left(10));
 }
@@ -152,14 +153,14 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     if (options.unit != UnitKind::Paragraph && options.unit != UnitKind::Sentence
         && options.unit != UnitKind::Token)
         return fail(ErrorCode::InvalidArgument,
-            tr("The report's unit must be paragraph, sentence or token."));
+            ReportDataText::tr("The report's unit must be paragraph, sentence or token."));
     ReportData d;
     d.options = options;
     d.projectName = project.settings().name;
-    d.title = options.title.isEmpty()
-        ? (d.projectName.isEmpty() ? tr("Reliability report")
-                                   : tr("Reliability report: %1").arg(d.projectName))
-        : options.title;
+    d.title = options.title.isEmpty() ? (d.projectName.isEmpty()
+                      ? ReportDataText::tr("Reliability report")
+                      : ReportDataText::tr("Reliability report: %1").arg(d.projectName))
+                                      : options.title;
     d.generatedAt = QDateTime::currentDateTimeUtc().toString(Qt::ISODate);
     d.program = QStringLiteral("Fourfold %1").arg(QCoreApplication::applicationVersion());
 
@@ -202,8 +203,9 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
         auto json = agreeJson(*run, r, options);
         if (!json)
             return std::unexpected(json.error());
-        d.analyses.push_back({QStringLiteral("functions"), tr("All four functions (MASI)"),
-            tr("All four (MASI)"), QStringLiteral("functions"),
+        d.analyses.push_back({QStringLiteral("functions"),
+            ReportDataText::tr("All four functions (MASI)"), ReportDataText::tr("All four (MASI)"),
+            QStringLiteral("functions"),
             QStringList {QStringLiteral("--unit"), unitKindKey(options.unit)} + common, *json, {}});
     }
     // Article-level items and the spans' choice attributes: their own errors do not stop the
@@ -244,11 +246,12 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
         auto continuum = run->continuum(std::nullopt);
         auto json = continuum ? Result<QJsonObject>(continuumJson(*continuum))
                               : Result<QJsonObject>(std::unexpected(continuum.error()));
-        d.analyses.push_back({QStringLiteral("continuum"), tr("Spans on the continuum"),
-            tr("continuum"), QStringLiteral("continuum"),
-            QStringList {QStringLiteral("--unit"), QStringLiteral("continuum")}
-                + commonArguments(options, false),
-            json ? *json : QJsonObject {}, json ? QString() : json.error().message});
+        d.analyses.push_back(
+            {QStringLiteral("continuum"), ReportDataText::tr("Spans on the continuum"),
+                ReportDataText::tr("continuum"), QStringLiteral("continuum"),
+                QStringList {QStringLiteral("--unit"), QStringLiteral("continuum")}
+                    + commonArguments(options, false),
+                json ? *json : QJsonObject {}, json ? QString() : json.error().message});
     }
 
     // Who coded how much: the codings that count (the unitizers' rule), for the coders the

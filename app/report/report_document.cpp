@@ -14,10 +14,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
-{
-    return QCoreApplication::translate("ReportDocument", text, disambiguation, n);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ReportDocumentText {
+    Q_DECLARE_TR_FUNCTIONS(ReportDocumentText)
+};
 
 QString esc(const QString &s)
 {
@@ -157,15 +157,15 @@ private:
     {
         switch (alphaBand(alpha)) {
         case AlphaBand::Undefined:
-            return tr("undefined");
+            return ReportDocumentText::tr("undefined");
         case AlphaBand::Reliable:
-            return tr("reliable");
+            return ReportDocumentText::tr("reliable");
         case AlphaBand::Tentative:
-            return tr("tentative");
+            return ReportDocumentText::tr("tentative");
         case AlphaBand::Unreliable:
             break;
         }
-        return tr("unreliable");
+        return ReportDocumentText::tr("unreliable");
     }
     QString chip(const QString &analysisId) const
     {
@@ -221,28 +221,29 @@ QString Builder::unitWord(int n) const
 {
     switch (m_d.options.unit) {
     case UnitKind::Paragraph:
-        return n == 1 ? tr("paragraph") : tr("paragraphs");
+        return n == 1 ? ReportDocumentText::tr("paragraph") : ReportDocumentText::tr("paragraphs");
     case UnitKind::Token:
-        return n == 1 ? tr("token") : tr("tokens");
+        return n == 1 ? ReportDocumentText::tr("token") : ReportDocumentText::tr("tokens");
     default:
-        return n == 1 ? tr("sentence") : tr("sentences");
+        return n == 1 ? ReportDocumentText::tr("sentence") : ReportDocumentText::tr("sentences");
     }
 }
 
 QString Builder::header() const
 {
     QStringList selection;
-    selection << tr("unit: %1").arg(unitKindKey(m_d.options.unit));
-    selection
-        << tr("phase: %1").arg(m_d.options.phase ? phaseKey(*m_d.options.phase) : tr("all phases"));
-    selection << tr("bootstrap: %1 replicates, seed %2")
+    selection << ReportDocumentText::tr("unit: %1").arg(unitKindKey(m_d.options.unit));
+    selection << ReportDocumentText::tr("phase: %1")
+                     .arg(m_d.options.phase ? phaseKey(*m_d.options.phase)
+                                            : ReportDocumentText::tr("all phases"));
+    selection << ReportDocumentText::tr("bootstrap: %1 replicates, seed %2")
                      .arg(m_d.options.bootstrapReplicates)
                      .arg(m_d.options.seed);
     QString h = QStringLiteral("<header class=\"masthead\"><div class=\"kicker\">%1</div>")
-                    .arg(esc(tr("Inter-coder reliability")));
+                    .arg(esc(ReportDocumentText::tr("Inter-coder reliability")));
     h += QStringLiteral("<h1>%1</h1>").arg(esc(m_d.title));
     h += QStringLiteral("<p class=\"meta\">%1</p>")
-             .arg(esc(tr("Project “%1” · written %2 by %3 · %4")
+             .arg(esc(ReportDocumentText::tr("Project “%1” · written %2 by %3 · %4")
                           .arg(m_d.projectName, m_d.generatedAt, m_d.program,
                               selection.join(QStringLiteral(" · ")))));
     h += QStringLiteral("</header>");
@@ -257,7 +258,7 @@ QString Builder::methodText() const
         const ReportCoder &c = m_d.coders[i];
         pseudonyms << esc(c.pseudonym);
         const QString base = QStringLiteral("coders.%1.").arg(i);
-        amounts << tr("%1 coded %2 articles (%3 spans)")
+        amounts << ReportDocumentText::tr("%1 coded %2 articles (%3 spans)")
                        .arg(esc(c.pseudonym),
                            fig(QStringLiteral("report"), base + QStringLiteral("articles"),
                                QStringLiteral("int")),
@@ -267,9 +268,10 @@ QString Builder::methodText() const
     QString html = QStringLiteral("<div class=\"method\">");
 
     // Sample, coders, amount coded, training (Lombard et al. 2002, items 1–4 and 7).
-    QString p = tr("Inter-coder reliability was assessed on a reliability sample of %1 articles "
-                   "that two or more coders coded independently (%2 of them by all %3 coders), "
-                   "out of %4 articles in the project. ")
+    QString p = ReportDocumentText::tr(
+        "Inter-coder reliability was assessed on a reliability sample of %1 articles "
+        "that two or more coders coded independently (%2 of them by all %3 coders), "
+        "out of %4 articles in the project. ")
                     .arg(fig(QStringLiteral("report"), QStringLiteral("sample.shared_articles"),
                              QStringLiteral("int")),
                         fig(QStringLiteral("report"), QStringLiteral("sample.all_coder_articles"),
@@ -278,91 +280,104 @@ QString Builder::methodText() const
                         fig(QStringLiteral("report"), QStringLiteral("sample.project_articles"),
                             QStringLiteral("int")));
     p += m_d.sampleDraw.isEmpty()
-        ? tr("The sample was drawn %1. ")
-              .arg(fillIn(tr("state how the articles were drawn, e.g. a simple random sample "
-                             "of the study's articles, with its size and seed")))
+        ? ReportDocumentText::tr("The sample was drawn %1. ")
+              .arg(fillIn(ReportDocumentText::tr(
+                  "state how the articles were drawn, e.g. a simple random sample "
+                  "of the study's articles, with its size and seed")))
         : esc(m_d.sampleDraw) + QLatin1Char(' ');
-    p += tr("%1 coders (%2) took part: %3. ")
+    p += ReportDocumentText::tr("%1 coders (%2) took part: %3. ")
              .arg(QString::number(coders), pseudonyms.join(QStringLiteral(", ")),
                  amounts.join(QStringLiteral("; ")));
     if (m_d.options.includeUnfinished) {
-        p += tr("Articles that coders had started but not yet marked as finished were included. ");
+        p += ReportDocumentText::tr(
+            "Articles that coders had started but not yet marked as finished were included. ");
     } else {
-        p += tr("Only articles that a coder had marked as finished count for that coder. ");
+        p += ReportDocumentText::tr(
+            "Only articles that a coder had marked as finished count for that coder. ");
         QStringList left;
         for (const CountedCodings::LeftOut &l : m_d.leftOut)
-            left << tr("%1 (%2)").arg(esc(l.coder)).arg(l.articles.size());
+            left << ReportDocumentText::tr("%1 (%2)").arg(esc(l.coder)).arg(l.articles.size());
         if (!left.isEmpty())
-            p += tr("Articles still in progress were left out: %1. ")
+            p += ReportDocumentText::tr("Articles still in progress were left out: %1. ")
                      .arg(left.join(QStringLiteral(", ")));
     }
     if (m_d.trainingArticles > 0 || m_d.pilotArticles > 0)
-        p += tr("Before the reliability coding, coders trained on %1 articles and coded a pilot "
-                "of %2 articles; %3. ")
+        p += ReportDocumentText::tr(
+            "Before the reliability coding, coders trained on %1 articles and coded a pilot "
+            "of %2 articles; %3. ")
                  .arg(fig(QStringLiteral("report"), QStringLiteral("sample.training_articles"),
                           QStringLiteral("int")),
                      fig(QStringLiteral("report"), QStringLiteral("sample.pilot_articles"),
                          QStringLiteral("int")),
-                     fillIn(tr("hours of training")));
+                     fillIn(ReportDocumentText::tr("hours of training")));
     else
-        p += tr("Coder training: %1. ")
-                 .arg(fillIn(tr("describe the training and its approximate hours")));
+        p += ReportDocumentText::tr("Coder training: %1. ")
+                 .arg(fillIn(
+                     ReportDocumentText::tr("describe the training and its approximate hours")));
     html += QStringLiteral("<p>%1</p>").arg(p);
 
     // Index and why, value per variable (items 5 and 6).
     QStringList values;
     for (const ReportAnalysis *a : ofKind(QStringLiteral("function"))) {
-        QString v = tr("%1 α = %2")
+        QString v = ReportDocumentText::tr("%1 α = %2")
                         .arg(esc(a->label.toLower()),
                             fig(a->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
         if (a->result.contains(QStringLiteral("bootstrap_units")))
-            v += tr(" (95% CI %1)").arg(interval(a->id, QStringLiteral("bootstrap_units")));
+            v += ReportDocumentText::tr(" (95% CI %1)")
+                     .arg(interval(a->id, QStringLiteral("bootstrap_units")));
         values << v;
     }
     const ReportAnalysis *all = m_d.analysis(QStringLiteral("functions"));
-    p = tr("Each of Entman's (1993) four framing functions was coded as a span of text; for "
-           "reliability, each function became a binary variable (present or absent) per %1, a "
-           "%2 carrying a function when a coder's span of that function overlaps it. ")
+    p = ReportDocumentText::tr(
+        "Each of Entman's (1993) four framing functions was coded as a span of text; for "
+        "reliability, each function became a binary variable (present or absent) per %1, a "
+        "%2 carrying a function when a coder's span of that function overlaps it. ")
             .arg(unitWord(1), unitWord(1));
-    p += esc(tr("We report Krippendorff's alpha (Krippendorff, 2004) because it handles any "
-                "number of coders, missing data and any level of measurement (Hayes & "
-                "Krippendorff, 2007). "));
-    p += tr("Alpha was %1").arg(values.join(QStringLiteral("; ")));
+    p += esc(ReportDocumentText::tr(
+        "We report Krippendorff's alpha (Krippendorff, 2004) because it handles any "
+        "number of coders, missing data and any level of measurement (Hayes & "
+        "Krippendorff, 2007). "));
+    p += ReportDocumentText::tr("Alpha was %1").arg(values.join(QStringLiteral("; ")));
     if (all)
-        p += tr("; for the set of functions per %1, compared with the MASI distance (Passonneau, "
-                "2006), α = %2")
+        p += ReportDocumentText::tr(
+            "; for the set of functions per %1, compared with the MASI distance (Passonneau, "
+            "2006), α = %2")
                  .arg(unitWord(1),
                      fig(all->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
     p += QStringLiteral(". ");
     if (m_d.options.bootstrapReplicates > 0)
-        p += esc(tr("Intervals are 95% percentile bootstrap intervals from %1 resamples of the "
-                    "units; the table also gives the interval from resampled pairable values "
-                    "(Hayes & Krippendorff, 2007), which is narrower than its nominal level when "
-                    "more than two coders are compared. ")
+        p += esc(ReportDocumentText::tr(
+            "Intervals are 95% percentile bootstrap intervals from %1 resamples of the "
+            "units; the table also gives the interval from resampled pairable values "
+            "(Hayes & Krippendorff, 2007), which is narrower than its nominal level when "
+            "more than two coders are compared. ")
                      .arg(m_d.options.bootstrapReplicates));
-    p += esc(tr("Following Krippendorff (2004), variables with α\u00a0≥\u00a00.800 are relied on "
-                "and variables with 0.667\u00a0≤\u00a0α\u00a0<\u00a00.800 support tentative "
-                "conclusions only. "));
+    p += esc(ReportDocumentText::tr("Following Krippendorff (2004), variables with α\u00a0≥\u00a0"
+                                    "0.800 are relied on "
+                                    "and variables with 0.667\u00a0≤\u00a0α\u00a0<\u00a0"
+                                    "0.800 support tentative "
+                                    "conclusions only. "));
     html += QStringLiteral("<p>%1</p>").arg(p);
 
     QStringList others;
     for (const QString &kind : {QStringLiteral("item"), QStringLiteral("attribute")})
         for (const ReportAnalysis *a : ofKind(kind))
             if (a->error.isEmpty())
-                others << tr("%1 (%2) α = %3")
+                others << ReportDocumentText::tr("%1 (%2) α = %3")
                               .arg(esc(a->label),
                                   esc(value(a->id, QStringLiteral("alpha.level")).toString()),
                                   fig(a->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
     if (!others.isEmpty())
         html += QStringLiteral("<p>%1</p>")
-                    .arg(tr("For the other variables alpha was: %1.")
+                    .arg(ReportDocumentText::tr("For the other variables alpha was: %1.")
                              .arg(others.join(QStringLiteral("; "))));
 
     // Disagreements (item 8) and the codebook (item 9).
     if (m_d.goldSpans > 0)
-        p = tr("Disagreements were resolved by adjudication into a separate gold standard: %1 "
-               "spans on %2 articles, decided by %3, %4 of them with a written rationale. The "
-               "independent codings were kept unchanged; every figure above comes from them. ")
+        p = ReportDocumentText::tr(
+            "Disagreements were resolved by adjudication into a separate gold standard: %1 "
+            "spans on %2 articles, decided by %3, %4 of them with a written rationale. The "
+            "independent codings were kept unchanged; every figure above comes from them. ")
                 .arg(fig(QStringLiteral("report"), QStringLiteral("gold.spans"),
                          QStringLiteral("int")),
                     fig(QStringLiteral("report"), QStringLiteral("gold.articles"),
@@ -371,25 +386,28 @@ QString Builder::methodText() const
                     fig(QStringLiteral("report"), QStringLiteral("gold.with_rationale"),
                         QStringLiteral("int")));
     else
-        p = tr("No adjudication is recorded in the project yet: %1. ")
-                .arg(fillIn(tr("say how disagreements were resolved, e.g. by discussion or by "
-                               "the lead")));
-    p += tr("Coding followed version %1 of the codebook (“%2”)")
+        p = ReportDocumentText::tr("No adjudication is recorded in the project yet: %1. ")
+                .arg(fillIn(ReportDocumentText::tr(
+                    "say how disagreements were resolved, e.g. by discussion or by "
+                    "the lead")));
+    p += ReportDocumentText::tr("Coding followed version %1 of the codebook (“%2”)")
              .arg(fig(QStringLiteral("report"), QStringLiteral("codebook.version"),
                       QStringLiteral("int")),
                  esc(m_d.codebookName));
     if (m_d.codingsOtherVersion > 0)
-        p += tr("; %1 of %2 codings were made under an earlier version")
+        p += ReportDocumentText::tr("; %1 of %2 codings were made under an earlier version")
                  .arg(fig(QStringLiteral("report"),
                           QStringLiteral("codebook.codings_other_version"), QStringLiteral("int")),
                      fig(QStringLiteral("report"), QStringLiteral("codebook.codings"),
                          QStringLiteral("int")));
-    p += tr(", which is available at %1.").arg(fillIn(tr("where readers can obtain it")));
+    p += ReportDocumentText::tr(", which is available at %1.")
+             .arg(fillIn(ReportDocumentText::tr("where readers can obtain it")));
     html += QStringLiteral("<p>%1</p>").arg(p);
     html += QStringLiteral("</div>");
     html += QStringLiteral("<p class=\"note\">%1</p>")
-                .arg(esc(tr("Highlighted brackets are for the authors to complete: the project "
-                            "does not record these facts.")));
+                .arg(esc(ReportDocumentText::tr(
+                    "Highlighted brackets are for the authors to complete: the project "
+                    "does not record these facts.")));
     return html;
 }
 
@@ -404,27 +422,33 @@ QString Builder::checklist() const
     const bool drawKnown = !m_d.sampleDraw.isEmpty();
     const bool trainingKnown = false; // hours are never recorded
     const std::vector<Item> items {
-        {tr("Size of the reliability sample and how it was selected"), drawKnown},
-        {tr("Relationship of the reliability sample to the full sample"), drawKnown},
-        {tr("Number of reliability coders"), true},
-        {tr("Amount of coding conducted by each coder"), true},
-        {tr("Index or indices selected and why"), true},
-        {tr("Reliability for each variable, for each index"), true},
-        {tr("Amount of coder training required to reach reliability"), trainingKnown},
-        {tr("How disagreements were resolved"), m_d.goldSpans > 0},
-        {tr("Where the codebook and coding instructions can be obtained"), false},
+        {ReportDocumentText::tr("Size of the reliability sample and how it was selected"),
+            drawKnown},
+        {ReportDocumentText::tr("Relationship of the reliability sample to the full sample"),
+            drawKnown},
+        {ReportDocumentText::tr("Number of reliability coders"), true},
+        {ReportDocumentText::tr("Amount of coding conducted by each coder"), true},
+        {ReportDocumentText::tr("Index or indices selected and why"), true},
+        {ReportDocumentText::tr("Reliability for each variable, for each index"), true},
+        {ReportDocumentText::tr("Amount of coder training required to reach reliability"),
+            trainingKnown},
+        {ReportDocumentText::tr("How disagreements were resolved"), m_d.goldSpans > 0},
+        {ReportDocumentText::tr("Where the codebook and coding instructions can be obtained"),
+            false},
     };
     QString html = tableOpen();
     html += QStringLiteral("<tr><th>%1</th><th>%2</th><th>%3</th></tr>")
-                .arg(esc(tr("#")), esc(tr("Item")), esc(tr("In this report")));
+                .arg(esc(ReportDocumentText::tr("#")), esc(ReportDocumentText::tr("Item")),
+                    esc(ReportDocumentText::tr("In this report")));
     int n = 0;
     for (const Item &i : items)
         html +=
             QStringLiteral("<tr><td class=\"num\">%1</td><td>%2</td><td class=\"%3\">%4</td></tr>")
                 .arg(++n)
                 .arg(esc(i.text), i.fromProject ? QStringLiteral("ok") : QStringLiteral("todo"),
-                    esc(i.fromProject ? tr("filled in from the project")
-                                      : tr("partly filled in; complete the bracket")));
+                    esc(i.fromProject
+                            ? ReportDocumentText::tr("filled in from the project")
+                            : ReportDocumentText::tr("partly filled in; complete the bracket")));
     html += QStringLiteral("</table>");
     return html;
 }
@@ -436,22 +460,28 @@ QString Builder::variableTable() const
     const bool print = m_flavour == ReportFlavour::Print;
     QString html = tableOpen();
     html += print
-        ? QStringLiteral("<tr><th width=\"24%\">%1</th>").arg(esc(tr("Variable")))
-        : QStringLiteral("<tr><th>%1</th><th>%2</th>").arg(esc(tr("Variable")), esc(tr("Level")));
-    html += QStringLiteral(
-        "<th class=\"num\" width=\"7%\">%1</th><th class=\"num\" width=\"9%\">%2</th>"
-        "<th class=\"num\" width=\"8%\">α</th><th class=\"num\" width=\"13%\">%3</th>"
-        "<th class=\"num\" width=\"13%\">%4</th><th class=\"num\" width=\"9%\">%5</th>"
-        "<th width=\"17%\">%6</th></tr>")
-                .arg(esc(tr("Units")), esc(tr("Pairable values")), esc(tr("95% CI, units")),
-                    esc(tr("95% CI, pairs")), esc(tr("Agreement")), esc(tr("Verdict")));
+        ? QStringLiteral("<tr><th width=\"24%\">%1</th>")
+              .arg(esc(ReportDocumentText::tr("Variable")))
+        : QStringLiteral("<tr><th>%1</th><th>%2</th>")
+              .arg(esc(ReportDocumentText::tr("Variable")), esc(ReportDocumentText::tr("Level")));
+    html +=
+        QStringLiteral(
+            "<th class=\"num\" width=\"7%\">%1</th><th class=\"num\" width=\"9%\">%2</th>"
+            "<th class=\"num\" width=\"8%\">α</th><th class=\"num\" width=\"13%\">%3</th>"
+            "<th class=\"num\" width=\"13%\">%4</th><th class=\"num\" width=\"9%\">%5</th>"
+            "<th width=\"17%\">%6</th></tr>")
+            .arg(esc(ReportDocumentText::tr("Units")),
+                esc(ReportDocumentText::tr("Pairable values")),
+                esc(ReportDocumentText::tr("95% CI, units")),
+                esc(ReportDocumentText::tr("95% CI, pairs")),
+                esc(ReportDocumentText::tr("Agreement")), esc(ReportDocumentText::tr("Verdict")));
     for (const ReportAnalysis &a : m_d.analyses) {
         if (a.kind == QLatin1String("continuum"))
             continue;
         if (!a.error.isEmpty()) {
             html += QStringLiteral("<tr><td>%1</td><td colspan=\"%2\" class=\"note\">%3</td></tr>")
                         .arg(esc(a.label), print ? QStringLiteral("7") : QStringLiteral("8"),
-                            esc(tr("not computed: %1").arg(a.error)));
+                            esc(ReportDocumentText::tr("not computed: %1").arg(a.error)));
             continue;
         }
         const auto alpha = number(value(a.id, QStringLiteral("alpha.value")));
@@ -480,13 +510,14 @@ QString Builder::variableTable() const
     }
     html += QStringLiteral("</table>");
     html += QStringLiteral("<p class=\"note\">%1</p>")
-                .arg(esc(tr("Units: %1 (articles for article-level items; passages matched "
-                            "across coders for span attributes). Agreement: percent agreement, "
-                            "which is not chance-corrected and is never reported alone "
-                            "(Lombard et al., 2002). Units: units resampled, percentile "
-                            "interval (the interval to report); pairs: pairable values resampled "
-                            "with the expected disagreement held fixed (Hayes & Krippendorff, "
-                            "2007), too narrow with more than two coders.")
+                .arg(esc(ReportDocumentText::tr(
+                    "Units: %1 (articles for article-level items; passages matched "
+                    "across coders for span attributes). Agreement: percent agreement, "
+                    "which is not chance-corrected and is never reported alone "
+                    "(Lombard et al., 2002). Units: units resampled, percentile "
+                    "interval (the interval to report); pairs: pairable values resampled "
+                    "with the expected disagreement held fixed (Hayes & Krippendorff, "
+                    "2007), too narrow with more than two coders.")
                              .arg(unitWord(2))));
     return html;
 }
@@ -514,10 +545,11 @@ QString Builder::alphaChart() const
 {
     const std::vector<AlphaChartRow> rows = alphaChartRows(m_d);
     return chart(QStringLiteral("alpha"), alphaChartSize(rows),
-        tr("Krippendorff's alpha per variable"),
-        tr("Krippendorff's alpha per variable (dots) with 95% bootstrap intervals: whiskers "
-           "resample pairable values (Hayes & Krippendorff, 2007), bands resample units. The "
-           "lines mark 0.667 and 0.800 (Krippendorff, 2004)."),
+        ReportDocumentText::tr("Krippendorff's alpha per variable"),
+        ReportDocumentText::tr(
+            "Krippendorff's alpha per variable (dots) with 95% bootstrap intervals: whiskers "
+            "resample pairable values (Hayes & Krippendorff, 2007), bands resample units. The "
+            "lines mark 0.667 and 0.800 (Krippendorff, 2004)."),
         [rows](QPainter &p) { paintAlphaChart(p, rows); });
 }
 
@@ -526,8 +558,11 @@ QString Builder::sampleSize() const
     QString html = tableOpen();
     html += QStringLiteral("<tr><th>%1</th><th class=\"num\">%2</th><th class=\"num\">%3</th>"
                            "<th class=\"num\">%4</th><th>%5</th></tr>")
-                .arg(esc(tr("Variable")), esc(tr("Pairable values")), esc(tr("Rarest value")),
-                    esc(tr("Minimum for α ≥ 0.800")), esc(tr("Enough?")));
+                .arg(esc(ReportDocumentText::tr("Variable")),
+                    esc(ReportDocumentText::tr("Pairable values")),
+                    esc(ReportDocumentText::tr("Rarest value")),
+                    esc(ReportDocumentText::tr("Minimum for α ≥ 0.800")),
+                    esc(ReportDocumentText::tr("Enough?")));
     for (const ReportAnalysis &a : m_d.analyses) {
         if (!a.result.contains(QStringLiteral("sample_size")))
             continue;
@@ -542,12 +577,14 @@ QString Builder::sampleSize() const
                         QStringLiteral("pct")),
                     fig(a.id, QStringLiteral("sample_size.minimum_values"), QStringLiteral("int")),
                     have >= need ? QStringLiteral("ok") : QStringLiteral("low"),
-                    esc(have >= need ? tr("yes") : tr("too few values")));
+                    esc(have >= need ? ReportDocumentText::tr("yes")
+                                     : ReportDocumentText::tr("too few values")));
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
-                .arg(esc(tr("Krippendorff's (2004, §11.4) minimum number of pairable values for "
-                            "α ≥ 0.800 at p = 0.05, after Bloch & Kraemer (1989), given the share "
-                            "of the rarest value.")));
+                .arg(esc(ReportDocumentText::tr(
+                    "Krippendorff's (2004, §11.4) minimum number of pairable values for "
+                    "α ≥ 0.800 at p = 0.05, after Bloch & Kraemer (1989), given the share "
+                    "of the rarest value.")));
     return html;
 }
 
@@ -556,13 +593,16 @@ QString Builder::coderTable() const
     QString html = tableOpen();
     html += QStringLiteral("<tr><th>%1</th><th>%2</th><th class=\"num\">%3</th>"
                            "<th class=\"num\">%4</th><th class=\"num\">%5</th>")
-                .arg(esc(tr("Coder")), esc(tr("Role")), esc(tr("Articles")),
-                    esc(tr("Shared articles")), esc(tr("Spans")));
+                .arg(esc(ReportDocumentText::tr("Coder")), esc(ReportDocumentText::tr("Role")),
+                    esc(ReportDocumentText::tr("Articles")),
+                    esc(ReportDocumentText::tr("Shared articles")),
+                    esc(ReportDocumentText::tr("Spans")));
     for (FramingFunction f : kFramingFunctions)
         html +=
             QStringLiteral("<th class=\"num\">%1%2</th>")
                 .arg(chip(QStringLiteral("function-%1").arg(functionKey(f))), esc(functionKey(f)));
-    html += QStringLiteral("<th class=\"num\">%1</th></tr>").arg(esc(tr("Answers")));
+    html += QStringLiteral("<th class=\"num\">%1</th></tr>")
+                .arg(esc(ReportDocumentText::tr("Answers")));
     for (size_t i = 0; i < m_d.coders.size(); ++i) {
         const QString base = QStringLiteral("coders.%1.").arg(i);
         auto cell = [&](const QString &key) {
@@ -578,27 +618,30 @@ QString Builder::coderTable() const
         html += cell(QStringLiteral("answers")) + QStringLiteral("</tr>");
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
-                .arg(esc(tr("Coders appear by pseudonym only. Articles: coded by the coder "
-                            "(assigned, or with a span or an answer); shared: also coded by "
-                            "another coder in this report.")));
+                .arg(esc(ReportDocumentText::tr(
+                    "Coders appear by pseudonym only. Articles: coded by the coder "
+                    "(assigned, or with a span or an answer); shared: also coded by "
+                    "another coder in this report.")));
     return html;
 }
 
 QString Builder::pairSection() const
 {
     const KappaGrid grid = kappaGrid(m_d);
-    QString html =
-        chart(QStringLiteral("kappa"), kappaHeatMapSize(grid), tr("Cohen's kappa per coder pair"),
-            tr("Cohen's kappa (Cohen, 1960) for each pair of coders and each function, on the %1 "
-               "both coded. Darker is higher; hatched cells are undefined.")
-                .arg(unitWord(2)),
-            [grid](QPainter &p) { paintKappaHeatMap(p, grid); });
+    QString html = chart(QStringLiteral("kappa"), kappaHeatMapSize(grid),
+        ReportDocumentText::tr("Cohen's kappa per coder pair"),
+        ReportDocumentText::tr(
+            "Cohen's kappa (Cohen, 1960) for each pair of coders and each function, on the %1 "
+            "both coded. Darker is higher; hatched cells are undefined.")
+            .arg(unitWord(2)),
+        [grid](QPainter &p) { paintKappaHeatMap(p, grid); });
     html += tableOpen();
     html += QStringLiteral("<tr><th>%1</th><th>%2</th><th class=\"num\">%3</th>"
                            "<th class=\"num\">%4</th><th class=\"num\">κ</th>"
                            "<th class=\"num\">%5</th></tr>")
-                .arg(esc(tr("Variable")), esc(tr("Pair")), esc(tr("Units")), esc(tr("Agreement")),
-                    esc(tr("95% CI")));
+                .arg(esc(ReportDocumentText::tr("Variable")), esc(ReportDocumentText::tr("Pair")),
+                    esc(ReportDocumentText::tr("Units")), esc(ReportDocumentText::tr("Agreement")),
+                    esc(ReportDocumentText::tr("95% CI")));
     for (const ReportAnalysis *a : ofKind(QStringLiteral("function"))) {
         const QJsonArray pairs = a->result.value(QStringLiteral("pairs")).toArray();
         for (qsizetype i = 0; i < pairs.size(); ++i) {
@@ -618,25 +661,29 @@ QString Builder::pairSection() const
         }
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
-                .arg(esc(tr("95% CI: large-sample interval with the standard error of Fleiss, "
-                            "Cohen & Everitt (1969). A coder whose kappa is low with everyone "
-                            "else is worth a look before the coders are retrained.")));
+                .arg(esc(ReportDocumentText::tr(
+                    "95% CI: large-sample interval with the standard error of Fleiss, "
+                    "Cohen & Everitt (1969). A coder whose kappa is low with everyone "
+                    "else is worth a look before the coders are retrained.")));
     return html;
 }
 
 QString Builder::otherCoefficients() const
 {
     QString html = tableOpen();
-    html += QStringLiteral("<tr><th>%1</th><th class=\"num\">%2</th><th class=\"num\">%3</th>"
-                           "<th class=\"num\">%4</th><th class=\"num\">%5</th>"
-                           "<th class=\"num\">%6</th></tr>")
-                .arg(esc(tr("Variable")), esc(tr("Fleiss' κ")), esc(tr("Light's κ")),
-                    esc(tr("Cohen's κ")), esc(tr("Scott's π")), esc(tr("Bennett's S")));
+    html +=
+        QStringLiteral("<tr><th>%1</th><th class=\"num\">%2</th><th class=\"num\">%3</th>"
+                       "<th class=\"num\">%4</th><th class=\"num\">%5</th>"
+                       "<th class=\"num\">%6</th></tr>")
+            .arg(esc(ReportDocumentText::tr("Variable")), esc(ReportDocumentText::tr("Fleiss' κ")),
+                esc(ReportDocumentText::tr("Light's κ")), esc(ReportDocumentText::tr("Cohen's κ")),
+                esc(ReportDocumentText::tr("Scott's π")),
+                esc(ReportDocumentText::tr("Bennett's S")));
     auto cell = [&](const ReportAnalysis &a, const QString &path) {
         return QStringLiteral("<td class=\"num\">%1</td>")
             .arg(a.result.contains(path.section(QLatin1Char('.'), 0, 0))
                     ? fig(a.id, path, QStringLiteral("f3"))
-                    : esc(tr("n/a")));
+                    : esc(ReportDocumentText::tr("n/a")));
     };
     for (const ReportAnalysis &a : m_d.analyses) {
         if (a.kind != QLatin1String("function") && a.kind != QLatin1String("item"))
@@ -650,10 +697,11 @@ QString Builder::otherCoefficients() const
             + QStringLiteral("</tr>");
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
-                .arg(esc(tr("For comparison with older studies: Fleiss (1971) and Light (1971) "
-                            "for any number of coders, Cohen (1960), Scott (1955) and Bennett, "
-                            "Alpert & Goldstein (1954) for two; n/a where their assumptions "
-                            "(complete data, two coders) do not hold.")));
+                .arg(esc(ReportDocumentText::tr(
+                    "For comparison with older studies: Fleiss (1971) and Light (1971) "
+                    "for any number of coders, Cohen (1960), Scott (1955) and Bennett, "
+                    "Alpert & Goldstein (1954) for two; n/a where their assumptions "
+                    "(complete data, two coders) do not hold.")));
     return html;
 }
 
@@ -664,20 +712,23 @@ QString Builder::continuumSection() const
         return {};
     if (!a->error.isEmpty())
         return QStringLiteral("<p class=\"note\">%1</p>")
-            .arg(esc(tr("Not computed: %1").arg(a->error)));
+            .arg(esc(ReportDocumentText::tr("Not computed: %1").arg(a->error)));
     QString html =
         QStringLiteral("<p>%1</p>")
-            .arg(tr("Unitizing alpha (Krippendorff, 2004) compares where the coders "
-                    "put their spans, character by character, on the %1 articles "
-                    "that every coder coded (%2 characters laid end to end).")
+            .arg(ReportDocumentText::tr(
+                "Unitizing alpha (Krippendorff, 2004) compares where the coders "
+                "put their spans, character by character, on the %1 articles "
+                "that every coder coded (%2 characters laid end to end).")
                      .arg(QString::number(
                               a->result.value(QStringLiteral("articles")).toArray().size()),
                          fig(a->id, QStringLiteral("length"), QStringLiteral("int"))));
     html += tableOpen();
     html += QStringLiteral("<tr><th>%1</th><th class=\"num\">%2</th><th class=\"num\">%3</th>"
                            "<th class=\"num\">α<sub>U</sub></th><th>%4</th></tr>")
-                .arg(esc(tr("Function")), esc(tr("Observed disagreement")),
-                    esc(tr("Expected disagreement")), esc(tr("Verdict")));
+                .arg(esc(ReportDocumentText::tr("Function")),
+                    esc(ReportDocumentText::tr("Observed disagreement")),
+                    esc(ReportDocumentText::tr("Expected disagreement")),
+                    esc(ReportDocumentText::tr("Verdict")));
     QStringList keys;
     for (FramingFunction f : kFramingFunctions)
         keys << functionKey(f);
@@ -692,7 +743,7 @@ QString Builder::continuumSection() const
                            "<td class=\"num\"><b>%5</b></td><td class=\"%6\">%7</td></tr>")
                 .arg(key == QLatin1String("overall") ? QString()
                                                      : chip(QStringLiteral("function-%1").arg(key)),
-                    esc(key == QLatin1String("overall") ? tr("all four") : key),
+                    esc(key == QLatin1String("overall") ? ReportDocumentText::tr("all four") : key),
                     fig(a->id, base + QStringLiteral("observed_disagreement"),
                         QStringLiteral("g3")),
                     fig(a->id, base + QStringLiteral("expected_disagreement"),
@@ -710,8 +761,10 @@ QString Builder::diagnosticsSection() const
     const std::vector<const ReportAnalysis *> functions = ofKind(QStringLiteral("function"));
     if (functions.empty() || !functions.front()->result.contains(QStringLiteral("diagnostics")))
         return {};
-    QString html = QStringLiteral("<h3>%1</h3>").arg(esc(tr("Alpha without each coder")));
-    html += tableOpen() + QStringLiteral("<tr><th>%1</th>").arg(esc(tr("Left out")));
+    QString html =
+        QStringLiteral("<h3>%1</h3>").arg(esc(ReportDocumentText::tr("Alpha without each coder")));
+    html += tableOpen()
+        + QStringLiteral("<tr><th>%1</th>").arg(esc(ReportDocumentText::tr("Left out")));
     for (const ReportAnalysis *a : functions)
         html += QStringLiteral("<th class=\"num\">%1%2</th>").arg(chip(a->id), esc(a->shortLabel));
     html += QStringLiteral("</tr>");
@@ -741,17 +794,20 @@ QString Builder::diagnosticsSection() const
         html += QStringLiteral("</tr>");
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
-                .arg(esc(tr("Alpha recomputed without the coder's codings; in brackets the change "
-                            "against all coders (positive: the coder pulls alpha down). A "
-                            "diagnostic for retraining, not a licence to report the better "
-                            "figure (Krippendorff, 2004).")));
+                .arg(esc(ReportDocumentText::tr(
+                    "Alpha recomputed without the coder's codings; in brackets the change "
+                    "against all coders (positive: the coder pulls alpha down). A "
+                    "diagnostic for retraining, not a licence to report the better "
+                    "figure (Krippendorff, 2004).")));
 
-    html += QStringLiteral("<h3>%1</h3>").arg(esc(tr("The article that costs most")));
+    html += QStringLiteral("<h3>%1</h3>")
+                .arg(esc(ReportDocumentText::tr("The article that costs most")));
     html += tableOpen()
         + QStringLiteral("<tr><th>%1</th><th>%2</th><th class=\"num\">%3</th>"
                          "<th class=\"num\">%4</th></tr>")
-              .arg(esc(tr("Variable")), esc(tr("Article")), esc(tr("α without it")),
-                  esc(tr("Change")));
+              .arg(esc(ReportDocumentText::tr("Variable")), esc(ReportDocumentText::tr("Article")),
+                  esc(ReportDocumentText::tr("α without it")),
+                  esc(ReportDocumentText::tr("Change")));
     for (const ReportAnalysis *a : functions) {
         const QString base = QStringLiteral("diagnostics.leave_one_article_out.0.");
         if (value(a->id, base + QStringLiteral("article")).isUndefined())
@@ -773,8 +829,10 @@ QString Builder::diagnosticsSection() const
         return html;
     const QStringList columns {QStringLiteral("problem"), QStringLiteral("cause"),
         QStringLiteral("evaluation"), QStringLiteral("remedy"), QStringLiteral("none")};
-    html += QStringLiteral("<h3>%1</h3>").arg(esc(tr("Function confusion between coders")));
-    html += tableOpen() + QStringLiteral("<tr><th>%1</th>").arg(esc(tr("A coder's span")));
+    html += QStringLiteral("<h3>%1</h3>")
+                .arg(esc(ReportDocumentText::tr("Function confusion between coders")));
+    html += tableOpen()
+        + QStringLiteral("<tr><th>%1</th>").arg(esc(ReportDocumentText::tr("A coder's span")));
     for (const QString &c : columns)
         html += QStringLiteral("<th class=\"num\">%1</th>").arg(esc(c));
     html += QStringLiteral("</tr>");
@@ -792,18 +850,20 @@ QString Builder::diagnosticsSection() const
         html += QStringLiteral("</tr>");
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
-                .arg(esc(tr("For each coder's span, the function the other coder gave the span "
-                            "that overlaps it most (none: nothing there), summed over ordered "
-                            "pairs of coders. Off the diagonal are the confusions a codebook "
-                            "rule could settle.")));
+                .arg(esc(ReportDocumentText::tr(
+                    "For each coder's span, the function the other coder gave the span "
+                    "that overlaps it most (none: nothing there), summed over ordered "
+                    "pairs of coders. Off the diagonal are the confusions a codebook "
+                    "rule could settle.")));
     return html;
 }
 
 QString Builder::reproduce() const
 {
-    QString html = QStringLiteral("<p>%1</p>")
-                       .arg(esc(tr("Every figure above is what these commands print (add "
-                                   "--json for all digits):")));
+    QString html =
+        QStringLiteral("<p>%1</p>")
+            .arg(esc(ReportDocumentText::tr("Every figure above is what these commands print (add "
+                                            "--json for all digits):")));
     QStringList lines;
     for (const ReportAnalysis &a : m_d.analyses)
         lines << QStringLiteral("fourfold-cli agree PROJECT %1")
@@ -861,9 +921,12 @@ QString Builder::references() const
 QString Builder::build() const
 {
     const bool print = m_flavour == ReportFlavour::Print;
-    QString html = QStringLiteral("<!DOCTYPE html>\n<html lang=\"en\"><head><meta "
+    //: The report's language as a BCP 47 tag for <html lang>: nl, de.
+    const QString lang = ReportDocumentText::tr("en");
+    QString html = QStringLiteral("<!DOCTYPE html>\n<html lang=\"%1\"><head><meta "
                                   "charset=\"utf-8\">\n<meta name=\"viewport\" "
-                                  "content=\"width=device-width, initial-scale=1\">\n");
+                                  "content=\"width=device-width, initial-scale=1\">\n")
+                       .arg(esc(lang));
     html += QStringLiteral("<meta name=\"generator\" content=\"%1\">\n").arg(esc(m_d.program));
     html += QStringLiteral("<title>%1</title>\n<style>%2</style>\n</head>\n<body><main>\n")
                 .arg(esc(m_d.title), QString::fromUtf8(print ? kPrintCss : kCss));
@@ -876,22 +939,28 @@ QString Builder::build() const
                                          : QString(),
                         esc(title), body);
     };
-    section(QStringLiteral("method"), tr("Method text"), methodText());
+    section(QStringLiteral("method"), ReportDocumentText::tr("Method text"), methodText());
     section(QStringLiteral("checklist"),
-        tr("Reporting checklist (Lombard, Snyder-Duch & Bracken, 2002)"), checklist());
-    section(QStringLiteral("variables"), tr("Reliability per variable"),
+        ReportDocumentText::tr("Reporting checklist (Lombard, Snyder-Duch & Bracken, 2002)"),
+        checklist());
+    section(QStringLiteral("variables"), ReportDocumentText::tr("Reliability per variable"),
         variableTable() + alphaChart());
-    section(QStringLiteral("sample-size"), tr("Is the sample large enough?"), sampleSize());
-    section(QStringLiteral("coders"), tr("Coders and the amount each coded"), coderTable());
-    section(QStringLiteral("pairs"), tr("Coder pairs"), pairSection());
-    section(QStringLiteral("coefficients"), tr("Other coefficients"), otherCoefficients());
-    section(
-        QStringLiteral("continuum"), tr("Span boundaries: unitizing alpha"), continuumSection());
+    section(QStringLiteral("sample-size"), ReportDocumentText::tr("Is the sample large enough?"),
+        sampleSize());
+    section(QStringLiteral("coders"), ReportDocumentText::tr("Coders and the amount each coded"),
+        coderTable());
+    section(QStringLiteral("pairs"), ReportDocumentText::tr("Coder pairs"), pairSection());
+    section(QStringLiteral("coefficients"), ReportDocumentText::tr("Other coefficients"),
+        otherCoefficients());
+    section(QStringLiteral("continuum"), ReportDocumentText::tr("Span boundaries: unitizing alpha"),
+        continuumSection());
     const QString diagnostics = diagnosticsSection();
     if (!diagnostics.isEmpty())
-        section(QStringLiteral("diagnostics"), tr("Where reliability is lost"), diagnostics);
-    section(QStringLiteral("reproduce"), tr("Reproducing the figures"), reproduce());
-    section(QStringLiteral("references"), tr("References"), references());
+        section(QStringLiteral("diagnostics"), ReportDocumentText::tr("Where reliability is lost"),
+            diagnostics);
+    section(QStringLiteral("reproduce"), ReportDocumentText::tr("Reproducing the figures"),
+        reproduce());
+    section(QStringLiteral("references"), ReportDocumentText::tr("References"), references());
     if (!print) {
         // The figures in machine-readable form. In JSON a "<" can only stand inside a string,
         // where \u003c means the same: so no pseudonym or title ("<!--<script", "</script>") can
@@ -935,9 +1004,9 @@ QJsonValue figureValue(const QJsonObject &object, const QString &path)
 QString formatFigure(const QJsonValue &value, const QString &format)
 {
     if (format == QLatin1String("text"))
-        return value.isString() ? value.toString() : tr("undefined");
+        return value.isString() ? value.toString() : ReportDocumentText::tr("undefined");
     if (!value.isDouble())
-        return tr("undefined");
+        return ReportDocumentText::tr("undefined");
     const double v = value.toDouble();
     if (format == QLatin1String("pct"))
         return QString::number(v * 100.0, 'f', 1) + QLatin1Char('%');

@@ -20,24 +20,26 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ReportWriter", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ReportWriterText {
+    Q_DECLARE_TR_FUNCTIONS(ReportWriterText)
+};
 
 Status needsGui()
 {
     if (qobject_cast<QGuiApplication *>(QCoreApplication::instance()))
         return {};
     return fail(ErrorCode::Unsupported,
-        tr("Writing a report needs the graphical libraries; start the program with a "
-           "QGuiApplication (the offscreen platform will do)."));
+        ReportWriterText::tr(
+            "Writing a report needs the graphical libraries; start the program with a "
+            "QGuiApplication (the offscreen platform will do)."));
 }
 
 Status commit(QSaveFile &file, const QString &path)
 {
     if (!file.commit())
-        return fail(ErrorCode::Io, tr("The report could not be written to %1.").arg(path),
+        return fail(ErrorCode::Io,
+            ReportWriterText::tr("The report could not be written to %1.").arg(path),
             file.errorString());
     return {};
 }
@@ -49,7 +51,8 @@ Status writeReportHtml(const ReportData &data, const QString &path)
     FOURFOLD_TRY_STATUS(needsGui());
     QSaveFile file(path);
     if (!file.open(QIODevice::WriteOnly))
-        return fail(ErrorCode::Io, tr("The report could not be written to %1.").arg(path),
+        return fail(ErrorCode::Io,
+            ReportWriterText::tr("The report could not be written to %1.").arg(path),
             file.errorString());
     file.write(reportHtml(data, ReportFlavour::Html).toUtf8());
     return commit(file, path);
@@ -60,7 +63,8 @@ Status writeReportPdf(const ReportData &data, const QString &path)
     FOURFOLD_TRY_STATUS(needsGui());
     QSaveFile file(path);
     if (!file.open(QIODevice::WriteOnly))
-        return fail(ErrorCode::Io, tr("The report could not be written to %1.").arg(path),
+        return fail(ErrorCode::Io,
+            ReportWriterText::tr("The report could not be written to %1.").arg(path),
             file.errorString());
     {
         QPdfWriter writer(&file);
@@ -94,7 +98,7 @@ Status writeReport(const Project &project, const ReportOptions &options, const Q
     const bool pdf = suffix == QLatin1String("pdf");
     if (!pdf && suffix != QLatin1String("html") && suffix != QLatin1String("htm"))
         return fail(ErrorCode::InvalidArgument,
-            tr("The report file %1 must end in .html or .pdf.").arg(path));
+            ReportWriterText::tr("The report file %1 must end in .html or .pdf.").arg(path));
     FOURFOLD_TRY_STATUS(needsGui());
     auto data = gatherReportData(project, options);
     if (!data)

@@ -13,10 +13,10 @@ using namespace reliability;
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("AgreementReport", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct AgreementReportText {
+    Q_DECLARE_TR_FUNCTIONS(AgreementReportText)
+};
 
 QJsonValue number(const std::optional<double> &v)
 {
@@ -36,7 +36,7 @@ QJsonObject valueObject(const std::optional<double> &value, const UndefinedReaso
 QString disagreementText(double d)
 {
     if (!std::isfinite(d))
-        return tr("beyond a double");
+        return AgreementReportText::tr("beyond a double");
     return std::abs(d) < 1e6 ? QString::number(d, 'f', 4) : QString::number(d, 'g', 4);
 }
 
@@ -82,7 +82,7 @@ void insertScalar(QJsonObject &o, const QString &key, const SimpleAgreement &a)
 
 QString fixed(const std::optional<double> &v, int decimals = 3)
 {
-    return v ? QString::number(*v, 'f', decimals) : tr("undefined");
+    return v ? QString::number(*v, 'f', decimals) : AgreementReportText::tr("undefined");
 }
 
 } // namespace
@@ -100,15 +100,15 @@ QString alphaVerdict(const std::optional<double> &alpha)
 {
     switch (alphaBand(alpha)) {
     case AlphaBand::Undefined:
-        return tr("undefined");
+        return AgreementReportText::tr("undefined");
     case AlphaBand::Reliable:
-        return tr("reliable (≥ 0.800)");
+        return AgreementReportText::tr("reliable (≥ 0.800)");
     case AlphaBand::Tentative:
-        return tr("tentative conclusions only (0.667–0.800)");
+        return AgreementReportText::tr("tentative conclusions only (0.667–0.800)");
     case AlphaBand::Unreliable:
         break;
     }
-    return tr("unreliable (< 0.667)");
+    return AgreementReportText::tr("unreliable (< 0.667)");
 }
 
 AgreementReport computeAgreement(const EncodedData &encoded, const QStringList &coders,
@@ -235,14 +235,15 @@ QJsonObject agreementJson(const AgreementReport &r)
 QString agreementText(const AgreementReport &r)
 {
     QStringList lines;
-    lines << tr("Coders        %1 (%2)")
+    lines << AgreementReportText::tr("Coders        %1 (%2)")
                  .arg(r.coders.size())
                  .arg(r.coders.join(QStringLiteral(", ")));
-    lines << tr("Units         %1; pairable units %2; pairable values %3")
+    lines << AgreementReportText::tr("Units         %1; pairable units %2; pairable values %3")
                  .arg(r.units)
                  .arg(r.alpha.pairableUnits)
                  .arg(r.alpha.pairableValues, 0, 'f', 0);
-    QString alphaLine = tr("Alpha (%1)  %2").arg(r.scale, fixed(r.alpha.value));
+    QString alphaLine =
+        AgreementReportText::tr("Alpha (%1)  %2").arg(r.scale, fixed(r.alpha.value));
     if (!r.alpha.value)
         alphaLine += QStringLiteral(" — ") + QString::fromStdString(r.alpha.reason);
     else
@@ -259,56 +260,58 @@ QString agreementText(const AgreementReport &r)
         QStringList q;
         for (const auto &[alphaMin, share] : b->qBelow)
             q << QStringLiteral("q(α<%1) %2").arg(alphaMin, 0, 'g', 3).arg(share, 0, 'f', 3);
-        lines << tr("  95% CI      [%1, %2]  %3, %4 replicates, seed %5")
+        lines << AgreementReportText::tr("  95% CI      [%1, %2]  %3, %4 replicates, seed %5")
                      .arg(fixed(b->ciLow), fixed(b->ciHigh),
                          QString::fromLatin1(bootstrapMethodName(b->method)))
                      .arg(b->replicates)
                      .arg(b->seed);
         lines << QStringLiteral("              ") + q.join(QStringLiteral("  "));
     }
-    lines << tr("Percent agreement  %1")
+    lines << AgreementReportText::tr("Percent agreement  %1")
                  .arg(r.percentAgreement.value
                          ? QString::number(*r.percentAgreement.value * 100.0, 'f', 1)
                              + QLatin1Char('%')
-                         : tr("undefined"));
+                         : AgreementReportText::tr("undefined"));
     if (r.cohenKappa) {
         const KappaResult &k = *r.cohenKappa;
-        const QString weighting = k.weights == KappaWeights::Linear ? tr(", linear weights")
-            : k.weights == KappaWeights::Quadratic                  ? tr(", quadratic weights")
-                                                                    : QString();
-        lines << tr("Cohen's kappa %1  (SE %2, 95% CI [%3, %4]%5)")
+        const QString weighting = k.weights == KappaWeights::Linear
+            ? AgreementReportText::tr(", linear weights")
+            : k.weights == KappaWeights::Quadratic ? AgreementReportText::tr(", quadratic weights")
+                                                   : QString();
+        lines << AgreementReportText::tr("Cohen's kappa %1  (SE %2, 95% CI [%3, %4]%5)")
                      .arg(fixed(k.value), fixed(k.standardError), fixed(k.ciLow), fixed(k.ciHigh),
                          weighting);
     }
     if (r.scottPi)
-        lines << tr("Scott's pi    %1").arg(fixed(r.scottPi->value));
+        lines << AgreementReportText::tr("Scott's pi    %1").arg(fixed(r.scottPi->value));
     if (r.bennettS)
-        lines << tr("Bennett's S   %1").arg(fixed(r.bennettS->value));
+        lines << AgreementReportText::tr("Bennett's S   %1").arg(fixed(r.bennettS->value));
     if (r.fleissKappa)
-        lines << tr("Fleiss' kappa %1").arg(fixed(r.fleissKappa->value));
+        lines << AgreementReportText::tr("Fleiss' kappa %1").arg(fixed(r.fleissKappa->value));
     if (r.coders.size() > 2)
-        lines << tr("Light's kappa %1").arg(fixed(r.lightKappa.value));
+        lines << AgreementReportText::tr("Light's kappa %1").arg(fixed(r.lightKappa.value));
     if (r.pairs.size() > 1) {
-        lines << tr("Pairs");
+        lines << AgreementReportText::tr("Pairs");
         for (const PairAgreement &p : r.pairs)
-            lines << tr("  %1 × %2  units %3  agreement %4  kappa %5")
+            lines << AgreementReportText::tr("  %1 × %2  units %3  agreement %4  kappa %5")
                          .arg(r.coders.value(p.coderA), r.coders.value(p.coderB))
                          .arg(p.units)
                          .arg(p.percentAgreement.value
                                  ? QString::number(*p.percentAgreement.value * 100.0, 'f', 1)
                                      + QLatin1Char('%')
-                                 : tr("undefined"))
+                                 : AgreementReportText::tr("undefined"))
                          .arg(fixed(p.cohenKappa.value));
     }
     if (r.minimumValues) {
-        QString line = tr("Sample size   %1 pairable values; Krippendorff's minimum for alpha ≥ %2 "
-                          "at p = 0.05 with the rarest value at %3%: %4")
+        QString line = AgreementReportText::tr(
+            "Sample size   %1 pairable values; Krippendorff's minimum for alpha ≥ %2 "
+            "at p = 0.05 with the rarest value at %3%: %4")
                            .arg(r.alpha.pairableValues, 0, 'f', 0)
                            .arg(r.alphaMin, 0, 'f', 3)
                            .arg(*r.rarestProportion * 100.0, 0, 'f', 1)
                            .arg(*r.minimumValues);
         if (r.alpha.pairableValues < *r.minimumValues)
-            line += tr(" — the sample is too small");
+            line += AgreementReportText::tr(" — the sample is too small");
         lines << line;
     }
     return lines.join(QLatin1Char('\n'));

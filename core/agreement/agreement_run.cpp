@@ -13,10 +13,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("AgreementRun", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct AgreementRunText {
+    Q_DECLARE_TR_FUNCTIONS(AgreementRunText)
+};
 
 // Keeps only `keep` (function keys) in set labels "cause|problem" ("{}" when none is left): each
 // label is restricted once and the cells follow their labels.
@@ -156,7 +156,8 @@ Result<AnalysisResult> AgreementRun::analyse(
 {
     if (request.unit == UnitKind::Continuum)
         return fail(ErrorCode::InvalidArgument,
-            tr("The continuum is compared with unitizing alpha, not as a table of units."));
+            AgreementRunText::tr(
+                "The continuum is compared with unitizing alpha, not as a table of units."));
     auto encoding = encodingFor(m_codebook, request);
     if (!encoding)
         return std::unexpected(encoding.error());
@@ -193,7 +194,8 @@ Result<ContinuumResult> AgreementRun::continuum(std::optional<FramingFunction> f
     out.unitizing = reliability::unitizingAlpha(0, data->length, int(data->coders.size()),
         data->categories, data->units, data->sectionBreaks);
     if (!out.unitizing.inputError.empty())
-        return fail(ErrorCode::Internal, tr("The continuum could not be compared."),
+        return fail(ErrorCode::Internal,
+            AgreementRunText::tr("The continuum could not be compared."),
             QString::fromStdString(out.unitizing.inputError));
     if (function)
         out.categories << functionKey(*function);

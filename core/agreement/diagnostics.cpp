@@ -18,14 +18,14 @@ using namespace reliability;
 
 namespace {
 
-QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
-{
-    return QCoreApplication::translate("Diagnostics", text, disambiguation, n);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct DiagnosticsText {
+    Q_DECLARE_TR_FUNCTIONS(DiagnosticsText)
+};
 
 std::unexpected<Error> cancelled()
 {
-    return fail(ErrorCode::Cancelled, tr("The diagnostics were cancelled."));
+    return fail(ErrorCode::Cancelled, DiagnosticsText::tr("The diagnostics were cancelled."));
 }
 
 bool carryOn(const DiagnosticsProgress &progress, int done, int total)
@@ -92,7 +92,8 @@ Result<std::vector<LeaveOneOut>> leaveOneCoderOut(
     const ReliabilityData &data = encoded.data;
     if (coders.size() != data.coders || !dataProblem(data).empty())
         return fail(ErrorCode::InvalidArgument,
-            tr("The coders named do not match the columns of the reliability data."));
+            DiagnosticsText::tr(
+                "The coders named do not match the columns of the reliability data."));
     const AlphaResult all = krippendorffAlpha(data, encoded.metric);
     std::vector<LeaveOneOut> out;
     for (int left = 0; left < data.coders; ++left) {
@@ -124,7 +125,7 @@ Result<std::vector<LeaveOneOut>> leaveOneArticleOut(
     const ReliabilityData &data = encoded.data;
     if (table.unitCount() != size_t(data.units) || !dataProblem(data).empty())
         return fail(ErrorCode::InvalidArgument,
-            tr("The units named do not match the rows of the reliability data."));
+            DiagnosticsText::tr("The units named do not match the rows of the reliability data."));
     const AlphaResult all = krippendorffAlpha(data, encoded.metric);
     // Articles in the order of their first unit.
     QStringList articles;
@@ -233,8 +234,8 @@ Result<SpanMatching> matchSpans(const CountedCodings &codings, const UnitSelecti
             pseudonyms << c.pseudonym;
     if (pseudonyms.size() < 2)
         return fail(ErrorCode::InvalidArgument,
-            tr("Reliability needs at least two coders; the selection has %n.", nullptr,
-                int(pseudonyms.size())));
+            DiagnosticsText::tr("Reliability needs at least two coders; the selection has %n.",
+                nullptr, int(pseudonyms.size())));
     const QStringList *coders = &pseudonyms;
     SpanMatching out;
     out.coders = *coders;
@@ -327,9 +328,10 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
     const ReliabilityData &data = encoded.data;
     if (table.unitCount() != size_t(data.units))
         return fail(ErrorCode::InvalidArgument,
-            tr("The units named do not match the rows of the reliability data."));
+            DiagnosticsText::tr("The units named do not match the rows of the reliability data."));
     if (batchSize < 1)
-        return fail(ErrorCode::InvalidArgument, tr("A batch holds at least one article."));
+        return fail(
+            ErrorCode::InvalidArgument, DiagnosticsText::tr("A batch holds at least one article."));
     QHash<qint64, QString> externalId;
     for (const ArticleSummary &a : counted.articles)
         externalId.insert(a.id.value, a.externalId);
@@ -379,7 +381,7 @@ Result<std::vector<PeriodAlpha>> alphaByPeriod(const CountedCodings &counted,
             const int week = at.isValid() ? at.toUTC().date().weekNumber(&year) : 0;
             label = at.isValid()
                 ? QStringLiteral("%1-W%2").arg(year).arg(week, 2, 10, QLatin1Char('0'))
-                : tr("no date");
+                : DiagnosticsText::tr("no date");
         } else {
             const size_t from = i - i % size_t(batchSize);
             const size_t to = std::min(ordered.size(), from + size_t(batchSize));

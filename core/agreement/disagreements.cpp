@@ -16,10 +16,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("Disagreements", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct DisagreementsText {
+    Q_DECLARE_TR_FUNCTIONS(DisagreementsText)
+};
 
 // An attribute left empty is no value: {"polarity": ""} and {} say the same.
 QJsonObject normalised(const QJsonObject &attributes)
@@ -267,7 +267,8 @@ Result<Comparison> compareLoaded(ArticleId article, const QString &title,
         for (CoderId c : {filter.coderPair->first, filter.coderPair->second}) {
             if (std::ranges::find(coded, c, &Coder::id) == coded.end())
                 return fail(ErrorCode::InvalidArgument,
-                    tr("Both coders of the pair must have marked the article \"%1\" done.")
+                    DisagreementsText::tr(
+                        "Both coders of the pair must have marked the article \"%1\" done.")
                         .arg(title));
             out.coders.push_back(c);
         }
@@ -300,7 +301,8 @@ GoldCandidate acceptCandidate(const Passage &passage, const Annotation &span)
 Result<GoldCandidate> mergeCandidate(const std::vector<Annotation> &spans)
 {
     if (spans.empty())
-        return fail(ErrorCode::InvalidArgument, tr("Choose the spans whose boundaries to merge."));
+        return fail(ErrorCode::InvalidArgument,
+            DisagreementsText::tr("Choose the spans whose boundaries to merge."));
     GoldCandidate c;
     c.content = spans.front().content;
     c.content.note.clear();
@@ -308,7 +310,8 @@ Result<GoldCandidate> mergeCandidate(const std::vector<Annotation> &spans)
     for (const Annotation &a : spans) {
         if (a.content.function != c.content.function)
             return fail(ErrorCode::InvalidArgument,
-                tr("Only spans of one function can be merged; accept one of them instead."));
+                DisagreementsText::tr(
+                    "Only spans of one function can be merged; accept one of them instead."));
         c.content.range.start = std::min(c.content.range.start, a.content.range.start);
         c.content.range.end = std::max(c.content.range.end, a.content.range.end);
         c.sources.push_back(a.id);

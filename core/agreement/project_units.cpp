@@ -16,10 +16,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
-{
-    return QCoreApplication::translate("ProjectUnits", text, disambiguation, n);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ProjectUnitsText {
+    Q_DECLARE_TR_FUNCTIONS(ProjectUnitsText)
+};
 
 bool inPhase(const std::optional<Phase> &phase, Phase p)
 {
@@ -50,8 +50,8 @@ Result<CountedCodings> countedCodings(const Project &project, const UnitSelectio
         for (const QString &id : sel.articles) {
             const ArticleSummary *a = byId.value(id);
             if (!a)
-                return fail(
-                    ErrorCode::NotFound, tr("There is no article \"%1\" in the project.").arg(id));
+                return fail(ErrorCode::NotFound,
+                    ProjectUnitsText::tr("There is no article \"%1\" in the project.").arg(id));
             s.articles.push_back(*a);
         }
     }
@@ -65,7 +65,8 @@ Result<CountedCodings> countedCodings(const Project &project, const UnitSelectio
                 [&](const Coder &c) { return c.pseudonym == pseudonym; });
             if (it == coders->end())
                 return fail(ErrorCode::NotFound,
-                    tr("There is no coder \"%1\" in the project.").arg(pseudonym));
+                    ProjectUnitsText::tr("There is no coder \"%1\" in the project.")
+                        .arg(pseudonym));
             candidates.push_back(*it);
         }
     }
@@ -88,8 +89,8 @@ Result<CountedCodings> countedCodings(const Project &project, const UnitSelectio
     }
     if (s.coders.size() < 2)
         return fail(ErrorCode::InvalidArgument,
-            tr("Reliability needs at least two coders; the selection has %n.", nullptr,
-                int(s.coders.size())));
+            ProjectUnitsText::tr("Reliability needs at least two coders; the selection has %n.",
+                nullptr, int(s.coders.size())));
     QSet<qint64> articleIds;
     for (const ArticleSummary &a : s.articles)
         articleIds.insert(a.id.value);
@@ -144,8 +145,10 @@ QStringList leftOutLines(const std::vector<CountedCodings::LeftOut> &leftOut)
     QStringList out;
     for (const CountedCodings::LeftOut &l : leftOut)
         out << (l.articles.size() == 1
-                ? tr("%1: 1 article in progress left out").arg(l.coder)
-                : tr("%1: %2 articles in progress left out").arg(l.coder).arg(l.articles.size()));
+                ? ProjectUnitsText::tr("%1: 1 article in progress left out").arg(l.coder)
+                : ProjectUnitsText::tr("%1: %2 articles in progress left out")
+                      .arg(l.coder)
+                      .arg(l.articles.size()));
     return out;
 }
 
@@ -293,10 +296,12 @@ Result<ReliabilityTable> unitTable(
 {
     if (sel.unit == UnitKind::Continuum)
         return fail(ErrorCode::InvalidArgument,
-            tr("Continuum units are compared with unitizing alpha, not as a table."));
+            ProjectUnitsText::tr(
+                "Continuum units are compared with unitizing alpha, not as a table."));
     if (sel.unit == UnitKind::Span && (!sel.function || sel.attribute.isEmpty()))
         return fail(ErrorCode::InvalidArgument,
-            tr("Span units compare an attribute: name one function and one of its attributes."));
+            ProjectUnitsText::tr(
+                "Span units compare an attribute: name one function and one of its attributes."));
     ReliabilityTable table;
     table.source = project.path();
     for (const Coder &c : s.coders)
@@ -371,7 +376,8 @@ Result<ReliabilityTable> unitTable(
     }
     if (table.isEmpty())
         return fail(ErrorCode::NotFound,
-            tr("None of the selected coders has marked any of the selected articles done."));
+            ProjectUnitsText::tr(
+                "None of the selected coders has marked any of the selected articles done."));
     return table;
 }
 
@@ -393,8 +399,8 @@ Result<ContinuumData> continuumData(const CountedCodings &s, const UnitSelection
             coders.push_back(&c);
     if (coders.size() < 2)
         return fail(ErrorCode::InvalidArgument,
-            tr("Reliability needs at least two coders; the selection has %n.", nullptr,
-                int(coders.size())));
+            ProjectUnitsText::tr("Reliability needs at least two coders; the selection has %n.",
+                nullptr, int(coders.size())));
     QHash<qint64, int> column;
     ContinuumData out;
     out.categories = sel.function ? 1 : 4;
@@ -446,8 +452,9 @@ Result<ContinuumData> continuumData(const CountedCodings &s, const UnitSelection
     }
     if (out.articles.isEmpty())
         return fail(ErrorCode::NotFound,
-            tr("No article was marked done by all of the selected coders, so there is no common "
-               "continuum."));
+            ProjectUnitsText::tr(
+                "No article was marked done by all of the selected coders, so there is no common "
+                "continuum."));
     return out;
 }
 
@@ -464,7 +471,7 @@ Status applyCodebookLevel(
             }
         if (!level)
             return fail(ErrorCode::InvalidArgument,
-                tr("the codebook has no attribute \"%1\" for %2.")
+                ProjectUnitsText::tr("the codebook has no attribute \"%1\" for %2.")
                     .arg(selection.attribute, functionKey(*selection.function)));
     } else if (selection.unit == UnitKind::Article) {
         if (const ArticleItem *i = codebook.item(selection.item)) {

@@ -17,16 +17,16 @@ using namespace reliability;
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ValueEncoding", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ValueEncodingText {
+    Q_DECLARE_TR_FUNCTIONS(ValueEncodingText)
+};
 
 std::unexpected<Error> cellError(
     const ReliabilityTable &table, size_t unit, qsizetype coder, const QString &what)
 {
     return failAt(ErrorCode::InvalidInput, table.source, table.unitLine(unit), 0,
-        tr("unit \"%1\", coder \"%2\": %3")
+        ValueEncodingText::tr("unit \"%1\", coder \"%2\": %3")
             .arg(table.unitId(unit), table.coders.value(coder), what));
 }
 
@@ -118,7 +118,8 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
     out.metric.level = options.level;
     if (options.distance && options.level != Level::Nominal)
         return fail(ErrorCode::InvalidArgument,
-            tr("A set distance (Jaccard, MASI) cannot be combined with the %1 level.")
+            ValueEncodingText::tr(
+                "A set distance (Jaccard, MASI) cannot be combined with the %1 level.")
                 .arg(levelKey(options.level)));
 
     // Each distinct label is read once: codeOf maps a label index of the table to its value
@@ -170,17 +171,18 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
             if (ranked) {
                 if (!options.order.contains(cell))
                     return labelError(l,
-                        tr("\"%1\" is not one of the ordered values (%2).")
+                        ValueEncodingText::tr("\"%1\" is not one of the ordered values (%2).")
                             .arg(cell, options.order.join(QStringLiteral(", "))));
             } else if (numeric) {
                 bool ok = false;
                 const double v = cell.toDouble(&ok);
                 if (!ok || !std::isfinite(v))
                     return labelError(l,
-                        tr("\"%1\" is not a number, as the %2 level needs.")
+                        ValueEncodingText::tr("\"%1\" is not a number, as the %2 level needs.")
                             .arg(cell, levelKey(options.level)));
                 if (options.level == Level::Ratio && v < 0)
-                    return labelError(l, tr("%1 is negative; ratio values cannot be.").arg(cell));
+                    return labelError(l,
+                        ValueEncodingText::tr("%1 is negative; ratio values cannot be.").arg(cell));
                 numberOf.push_back(v);
             }
         }

@@ -12,10 +12,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleSplit", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleSplitText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleSplitText)
+};
 
 std::uint64_t draw(std::mt19937_64 &rng, std::uint64_t n)
 {
@@ -50,8 +50,9 @@ Result<SplitRatios> SplitRatios::parse(const QString &text)
     }
     if (out.names.isEmpty() || sum != 100)
         return fail(ErrorCode::InvalidArgument,
-            tr("The split \"%1\" is not two or three whole percentages summing to 100 (e.g. "
-               "80/10/10).")
+            ArticleSplitText::tr(
+                "The split \"%1\" is not two or three whole percentages summing to 100 (e.g. "
+                "80/10/10).")
                 .arg(text));
     return out;
 }

@@ -15,10 +15,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ExportFolder", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ExportFolderText {
+    Q_DECLARE_TR_FUNCTIONS(ExportFolderText)
+};
 
 // The names an export writes (layer_export.h): anything else in a folder is not ours to delete.
 bool isExportFileName(const QString &name)
@@ -41,30 +41,35 @@ Result<ExportFolder> ExportFolder::prepare(const QString &target, bool replace)
     const QFileInfo info(clean);
     if (info.isSymLink())
         return fail(ErrorCode::Io,
-            tr("The export folder %1 is a symbolic link; name a real folder.").arg(target));
+            ExportFolderText::tr("The export folder %1 is a symbolic link; name a real folder.")
+                .arg(target));
     if (info.exists() && !info.isDir())
-        return fail(ErrorCode::Io, tr("%1 exists and is not a folder.").arg(target));
+        return fail(
+            ErrorCode::Io, ExportFolderText::tr("%1 exists and is not a folder.").arg(target));
     if (info.isDir()) {
         const QStringList names = QDir(clean).entryList(
             QDir::AllEntries | QDir::Hidden | QDir::System | QDir::NoDotAndDotDot, QDir::Name);
         if (!names.isEmpty() && !replace)
             return fail(ErrorCode::Duplicate,
-                tr("The folder %1 is not empty (%2 entries); choose a new or empty folder, or "
-                   "ask to replace an earlier export in it (--force).")
+                ExportFolderText::tr(
+                    "The folder %1 is not empty (%2 entries); choose a new or empty folder, or "
+                    "ask to replace an earlier export in it (--force).")
                     .arg(target)
                     .arg(names.size()));
         for (const QString &name : names) {
             const QFileInfo entry(QDir(clean).filePath(name));
             if (entry.isSymLink() || !entry.isFile() || !isExportFileName(name))
                 return fail(ErrorCode::Duplicate,
-                    tr("The folder %1 holds %2, which is not a file an export writes; it was "
-                       "left alone. Choose a new or empty folder.")
+                    ExportFolderText::tr(
+                        "The folder %1 holds %2, which is not a file an export writes; it was "
+                        "left alone. Choose a new or empty folder.")
                         .arg(target, name));
         }
     }
     const QString parent = info.absolutePath();
     if (!QDir().mkpath(parent))
-        return fail(ErrorCode::Io, tr("The folder %1 could not be created.").arg(parent));
+        return fail(
+            ErrorCode::Io, ExportFolderText::tr("The folder %1 could not be created.").arg(parent));
 
     ExportFolder folder;
     folder.m_target = clean;
@@ -72,7 +77,7 @@ Result<ExportFolder> ExportFolder::prepare(const QString &target, bool replace)
         QLatin1Char('.') + info.fileName() + QLatin1String(".partial-XXXXXX")));
     if (!folder.m_written->isValid())
         return fail(ErrorCode::Io,
-            tr("A folder to write the export into could not be made in %1: %2.")
+            ExportFolderText::tr("A folder to write the export into could not be made in %1: %2.")
                 .arg(parent, folder.m_written->errorString()));
     // QTemporaryDir makes its folder private (0700); an export folder gets the usual
     // permissions (0777 less the umask), as mkdir would give it.
@@ -94,13 +99,14 @@ Status ExportFolder::commit()
     const QFileInfo target(m_target);
     if (target.isSymLink() || (target.exists() && !target.isDir()))
         return fail(ErrorCode::Io,
-            tr("%1 was replaced by something other than a folder while the export was written; "
-               "nothing was written.")
+            ExportFolderText::tr(
+                "%1 was replaced by something other than a folder while the export was written; "
+                "nothing was written.")
                 .arg(QDir::toNativeSeparators(m_target)));
     if (!target.exists()) {
         if (std::rename(from.constData(), to.constData()) != 0)
             return fail(ErrorCode::Io,
-                tr("The export could not be moved into %1: %2.")
+                ExportFolderText::tr("The export could not be moved into %1: %2.")
                     .arg(QDir::toNativeSeparators(m_target), systemError(errno)));
         m_written->setAutoRemove(false);
         return {};
@@ -111,20 +117,20 @@ Status ExportFolder::commit()
         return {};
     if (errno != EINVAL && errno != ENOSYS)
         return fail(ErrorCode::Io,
-            tr("The export could not be moved into %1: %2.")
+            ExportFolderText::tr("The export could not be moved into %1: %2.")
                 .arg(QDir::toNativeSeparators(m_target), systemError(errno)));
     // A file system without the exchange: move the old folder aside, then the new one in.
     QTemporaryDir aside(m_written->path() + QLatin1String(".old-XXXXXX"));
     if (!aside.isValid() || !QDir().rmdir(aside.path())
         || std::rename(to.constData(), QFile::encodeName(aside.path()).constData()) != 0)
         return fail(ErrorCode::Io,
-            tr("The earlier export in %1 could not be moved aside: %2.")
+            ExportFolderText::tr("The earlier export in %1 could not be moved aside: %2.")
                 .arg(QDir::toNativeSeparators(m_target), systemError(errno)));
     if (std::rename(from.constData(), to.constData()) != 0) {
         const int error = errno;
         std::rename(QFile::encodeName(aside.path()).constData(), to.constData());
         return fail(ErrorCode::Io,
-            tr("The export could not be moved into %1: %2.")
+            ExportFolderText::tr("The export could not be moved into %1: %2.")
                 .arg(QDir::toNativeSeparators(m_target), systemError(error)));
     }
     m_written->setAutoRemove(false);

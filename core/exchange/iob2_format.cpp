@@ -11,10 +11,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("Iob2Format", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct Iob2FormatText {
+    Q_DECLARE_TR_FUNCTIONS(Iob2FormatText)
+};
 
 // Ranges of one function, overlapping ones merged (a column holds one chunk at a time).
 std::vector<TextRange> mergedRanges(const std::vector<Iob2Span> &spans, FramingFunction f)
@@ -169,18 +169,20 @@ Result<std::vector<Iob2Document>> readIob2(const QByteArray &bytes, const QStrin
         }
         if (!doc)
             return failAt(ErrorCode::InvalidInput, file, lineNo, 1,
-                tr("A token row comes before any \"# article = ...\" line."));
+                Iob2FormatText::tr("A token row comes before any \"# article = ...\" line."));
         const QStringList fields = line.split(QLatin1Char('\t'));
         if (fields.size() != 7)
             return failAt(ErrorCode::InvalidInput, file, lineNo, 1,
-                tr("A token row needs 7 tab-separated fields (token, start, end and one tag per "
-                   "function); this one has %1.")
+                Iob2FormatText::tr(
+                    "A token row needs 7 tab-separated fields (token, start, end and one tag per "
+                    "function); this one has %1.")
                     .arg(fields.size()));
         bool okStart = false, okEnd = false;
         const TextRange token {fields[1].toLongLong(&okStart), fields[2].toLongLong(&okEnd)};
         if (!okStart || !okEnd || token.start < 0 || token.end <= token.start)
             return failAt(ErrorCode::InvalidInput, file, lineNo, fields[0].size() + 2,
-                tr("The token's start and end must be whole numbers with start < end."));
+                Iob2FormatText::tr(
+                    "The token's start and end must be whole numbers with start < end."));
         doc->tokens.push_back(token);
         qint64 column = fields[0].size() + fields[1].size() + fields[2].size() + 4;
         for (std::size_t i = 0; i < 4; ++i) {
@@ -195,11 +197,13 @@ Result<std::vector<Iob2Document>> readIob2(const QByteArray &bytes, const QStrin
             } else if (tag == QStringLiteral("I-") + key) {
                 if (open[i] < 0)
                     return failAt(ErrorCode::InvalidInput, file, lineNo, column,
-                        tr("\"%1\" continues no chunk: in IOB2 a chunk starts with B-.").arg(tag));
+                        Iob2FormatText::tr(
+                            "\"%1\" continues no chunk: in IOB2 a chunk starts with B-.")
+                            .arg(tag));
                 openEnd[i] = token.end;
             } else {
                 return failAt(ErrorCode::InvalidInput, file, lineNo, column,
-                    tr("The tag \"%1\" is not O, B-%2 or I-%2.").arg(tag, key));
+                    Iob2FormatText::tr("The tag \"%1\" is not O, B-%2 or I-%2.").arg(tag, key));
             }
             column += tag.size() + 1;
         }

@@ -26,10 +26,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("LayerExport", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct LayerExportText {
+    Q_DECLARE_TR_FUNCTIONS(LayerExportText)
+};
 
 // RFC 4180 §2: a field holding a comma, a quote or a line break is quoted, quotes doubled. A
 // text that a spreadsheet would run as a formula (starting with =, +, -, @, a tab or a carriage
@@ -164,7 +164,8 @@ private:
     std::unexpected<Error> failure() const
     {
         return fail(ErrorCode::Io,
-            tr("The file %1 could not be written: %2.").arg(m_shown, m_file.errorString()));
+            LayerExportText::tr("The file %1 could not be written: %2.")
+                .arg(m_shown, m_file.errorString()));
     }
 
     QSaveFile m_file;
@@ -216,10 +217,9 @@ W3cFrame w3cFrame(const QString &layerKey, const QString &split, qint64 total)
     const QString id = QStringLiteral("urn:fourfold:export:")
         + QString::fromLatin1(QUrl::toPercentEncoding(layerKey)) + QLatin1Char(':') + split;
     const QString marker = QStringLiteral("fourfold-items-1f6e3c58-5d0b-4a8e-9c2f-7b41d09e6a35");
-    QJsonObject collection = w3cCollection(id,
-        QCoreApplication::translate("LayerExport", "Fourfold %1 spans, split %2")
-            .arg(layerKey, split),
-        QJsonArray {marker});
+    QJsonObject collection =
+        w3cCollection(id, LayerExportText::tr("Fourfold %1 spans, split %2").arg(layerKey, split),
+            QJsonArray {marker});
     collection.insert(QStringLiteral("total"), total);
     const QByteArray frame = QJsonDocument(collection).toJson(QJsonDocument::Indented);
     const qsizetype at = frame.indexOf('"' + marker.toUtf8() + '"');
@@ -249,7 +249,8 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
     const std::vector<ArticleId> ids = layer->articles();
     if (ids.empty())
         return fail(ErrorCode::InvalidArgument,
-            tr("The layer \"%1\" covers no article, so there is nothing to export.")
+            LayerExportText::tr(
+                "The layer \"%1\" covers no article, so there is nothing to export.")
                 .arg(options.layer.key()));
     auto codebook = project.codebook();
     if (!codebook)
@@ -388,8 +389,9 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
             ++report.articleReads;
             if (textSha256(current->text) != a.sha256)
                 return fail(ErrorCode::Corrupt,
-                    tr("The text of article \"%1\" does not match its stored SHA-256 (the "
-                       "project file is damaged); nothing was exported.")
+                    LayerExportText::tr(
+                        "The text of article \"%1\" does not match its stored SHA-256 (the "
+                        "project file is damaged); nothing was exported.")
                         .arg(a.externalId));
         }
         const auto spanId = [&](const LayerSpan &sp) {

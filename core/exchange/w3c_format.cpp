@@ -9,10 +9,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("W3cFormat", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct W3cFormatText {
+    Q_DECLARE_TR_FUNCTIONS(W3cFormatText)
+};
 
 const QString kContext = QStringLiteral("http://www.w3.org/ns/anno.jsonld");
 const QString kNiPrefix = QStringLiteral("ni:///sha-256;");
@@ -115,7 +115,7 @@ Result<W3cSpan> readW3cAnnotation(const QJsonObject &a)
     auto bad = [](const QString &what) { return fail(ErrorCode::InvalidInput, what); };
     W3cSpan s;
     if (a.value(QStringLiteral("type")).toString() != QLatin1String("Annotation"))
-        return bad(tr("its \"type\" is not \"Annotation\"."));
+        return bad(W3cFormatText::tr("its \"type\" is not \"Annotation\"."));
     s.id = a.value(QStringLiteral("id")).toString();
     s.created = a.value(QStringLiteral("created")).toString();
     const QJsonValue targetValue = a.value(QStringLiteral("target"));
@@ -126,9 +126,10 @@ Result<W3cSpan> readW3cAnnotation(const QJsonObject &a)
         : target.value(QStringLiteral("source")).toString();
     const auto sha = sha256FromNiUri(source);
     if (!sha)
-        return bad(tr("its target has no source of the form \"ni:///sha-256;…\" naming the "
-                      "article's text (found \"%1\").")
-                       .arg(source));
+        return bad(
+            W3cFormatText::tr("its target has no source of the form \"ni:///sha-256;…\" naming the "
+                              "article's text (found \"%1\").")
+                .arg(source));
     s.articleSha256 = *sha;
     bool position = false;
     for (const QJsonValue &v : asArray(target.value(QStringLiteral("selector")))) {
@@ -140,11 +141,12 @@ Result<W3cSpan> readW3cAnnotation(const QJsonObject &a)
             if (!start.isDouble() || !end.isDouble()
                 || start.toDouble() != double(start.toInteger())
                 || end.toDouble() != double(end.toInteger()))
-                return bad(
-                    tr("its TextPositionSelector needs whole numbers \"start\" and \"end\"."));
+                return bad(W3cFormatText::tr(
+                    "its TextPositionSelector needs whole numbers \"start\" and \"end\"."));
             s.range = TextRange {start.toInteger(), end.toInteger()};
             if (s.range.start < 0 || s.range.end <= s.range.start)
-                return bad(tr("its TextPositionSelector range [%1, %2) is empty or negative.")
+                return bad(W3cFormatText::tr(
+                    "its TextPositionSelector range [%1, %2) is empty or negative.")
                                .arg(s.range.start)
                                .arg(s.range.end));
             position = true;
@@ -155,7 +157,7 @@ Result<W3cSpan> readW3cAnnotation(const QJsonObject &a)
         }
     }
     if (!position)
-        return bad(tr("its target has no TextPositionSelector."));
+        return bad(W3cFormatText::tr("its target has no TextPositionSelector."));
     bool function = false;
     for (const QJsonValue &v : asArray(a.value(QStringLiteral("body")))) {
         const QJsonObject body = v.toObject();
@@ -164,8 +166,9 @@ Result<W3cSpan> readW3cAnnotation(const QJsonObject &a)
         if (purpose == QLatin1String("classifying")) {
             const auto f = functionFromKey(value);
             if (!f)
-                return bad(tr("its classifying body \"%1\" is not a framing function (problem, "
-                              "cause, evaluation or remedy).")
+                return bad(W3cFormatText::tr(
+                    "its classifying body \"%1\" is not a framing function (problem, "
+                    "cause, evaluation or remedy).")
                                .arg(value));
             s.function = *f;
             function = true;
@@ -175,12 +178,13 @@ Result<W3cSpan> readW3cAnnotation(const QJsonObject &a)
             QJsonParseError error;
             const QJsonDocument doc = QJsonDocument::fromJson(value.toUtf8(), &error);
             if (error.error != QJsonParseError::NoError || !doc.isObject())
-                return bad(tr("its describing body is not a JSON object of attributes."));
+                return bad(
+                    W3cFormatText::tr("its describing body is not a JSON object of attributes."));
             s.attributes = doc.object();
         }
     }
     if (!function)
-        return bad(tr("it has no classifying body naming a framing function."));
+        return bad(W3cFormatText::tr("it has no classifying body naming a framing function."));
     const QJsonObject creator = a.value(QStringLiteral("creator")).toObject();
     const QString type = creator.value(QStringLiteral("type")).toString();
     s.creatorIsSoftware = type == QLatin1String("Software");
@@ -192,7 +196,7 @@ Result<W3cSpan> readW3cAnnotation(const QJsonObject &a)
             s.creator = id.mid(kCoderPrefix.size());
     }
     if (s.creator.trimmed().isEmpty())
-        return bad(tr("it has no creator with a pseudonym (\"nickname\")."));
+        return bad(W3cFormatText::tr("it has no creator with a pseudonym (\"nickname\")."));
     return s;
 }
 

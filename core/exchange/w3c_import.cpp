@@ -20,10 +20,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("W3cImport", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct W3cImportText {
+    Q_DECLARE_TR_FUNCTIONS(W3cImportText)
+};
 
 // The article being imported into, with what it holds already: annotation uuids and
 // (coder, function, start, end). Only one article is held at a time (an export lists an
@@ -61,7 +61,7 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
         const QString id = item.value(QStringLiteral("id")).toString();
         const auto bad = [&](const QString &what) {
             return failAt(ErrorCode::InvalidInput, path, where.line, where.column,
-                tr("Annotation %1%2: %3")
+                W3cImportText::tr("Annotation %1%2: %3")
                     .arg(at + 1)
                     .arg(id.isEmpty() ? QString() : QStringLiteral(" (%1)").arg(id), what));
         };
@@ -69,12 +69,12 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
         if (!span)
             return bad(span.error().message);
         if (span->creatorIsSoftware)
-            return bad(
-                tr("its creator \"%1\" is software; only coders' annotations can be imported.")
-                    .arg(span->creator));
+            return bad(W3cImportText::tr(
+                "its creator \"%1\" is software; only coders' annotations can be imported.")
+                           .arg(span->creator));
         const auto article = bySha.constFind(span->articleSha256);
         if (article == bySha.constEnd())
-            return bad(tr("no article of the project has the text with SHA-256 %1.")
+            return bad(W3cImportText::tr("no article of the project has the text with SHA-256 %1.")
                            .arg(span->articleSha256));
         if (!current || current->article.summary.id != *article) {
             current.reset();
@@ -94,12 +94,13 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
         }
         const Article &a = current->article;
         if (span->range.end > a.summary.length)
-            return bad(tr("the range [%1, %2) lies outside the article's %3 code points.")
-                           .arg(span->range.start)
-                           .arg(span->range.end)
-                           .arg(a.summary.length));
+            return bad(
+                W3cImportText::tr("the range [%1, %2) lies outside the article's %3 code points.")
+                    .arg(span->range.start)
+                    .arg(span->range.end)
+                    .arg(a.summary.length));
         if (span->quote && OffsetMap::slice(a.text, span->range) != *span->quote)
-            return bad(tr("the quote \"%1\" is not the article's text at [%2, %3).")
+            return bad(W3cImportText::tr("the quote \"%1\" is not the article's text at [%2, %3).")
                            .arg(*span->quote)
                            .arg(span->range.start)
                            .arg(span->range.end));
@@ -173,19 +174,22 @@ Result<W3cImportReport> importW3cAnnotations(Project &project, const QString &pa
                             .value(QStringLiteral("items"))
                             .isArray())
                     return failAt(ErrorCode::InvalidInput, path, 1, 1,
-                        tr("The collection does not hold its annotations inline (\"first\" must "
-                           "be an AnnotationPage object with \"items\")."));
+                        W3cImportText::tr(
+                            "The collection does not hold its annotations inline (\"first\" must "
+                            "be an AnnotationPage object with \"items\")."));
             } else if (type == QLatin1String("Annotation") && index == 0) {
                 FOURFOLD_TRY_STATUS(take(root, JsonPlace {1, 1}));
             } else {
                 return failAt(ErrorCode::InvalidInput, path, 1, 1,
-                    tr("The file holds neither an AnnotationCollection, nor an Annotation, nor "
-                       "an array of annotations."));
+                    W3cImportText::tr(
+                        "The file holds neither an AnnotationCollection, nor an Annotation, nor "
+                        "an array of annotations."));
             }
         } else if (!rest->isArray()) {
             return failAt(ErrorCode::InvalidInput, path, 1, 1,
-                tr("The file holds neither an AnnotationCollection, nor an Annotation, nor an "
-                   "array of annotations."));
+                W3cImportText::tr(
+                    "The file holds neither an AnnotationCollection, nor an Annotation, nor an "
+                    "array of annotations."));
         }
         // Imported codings are finished work: each article counts for its coder (CodingScope).
         for (const auto &[article, coder] : finished) {

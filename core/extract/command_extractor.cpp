@@ -19,10 +19,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("CommandExtractor", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CommandExtractorText {
+    Q_DECLARE_TR_FUNCTIONS(CommandExtractorText)
+};
 
 // The last few lines of the program's stderr, for the error's cause.
 QString stderrTail(const QByteArray &bytes)
@@ -33,7 +33,7 @@ QString stderrTail(const QByteArray &bytes)
     QString tail = lines.join(QStringLiteral(" | ")).trimmed();
     if (tail.size() > 600)
         tail = QStringLiteral("…") + tail.right(600);
-    return tail.isEmpty() ? QString() : tr("stderr: %1").arg(tail);
+    return tail.isEmpty() ? QString() : CommandExtractorText::tr("stderr: %1").arg(tail);
 }
 
 // `bytes` in MiB for a message: "512", "0.25".
@@ -71,11 +71,13 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
 {
     const QStringList words = QProcess::splitCommand(m_command);
     if (words.isEmpty())
-        return fail(ErrorCode::InvalidArgument, tr("The extractor command is empty."));
+        return fail(ErrorCode::InvalidArgument,
+            CommandExtractorText::tr("The extractor command is empty."));
     if (m_timeoutSeconds < 0 || !std::isfinite(m_timeoutSeconds) || m_idleSeconds < 0
         || !std::isfinite(m_idleSeconds))
         return fail(ErrorCode::InvalidArgument,
-            tr("A timeout must be a positive number of seconds (or 0 for none)."));
+            CommandExtractorText::tr(
+                "A timeout must be a positive number of seconds (or 0 for none)."));
 
     QHash<QString, SpanTarget> targets;
     for (const Article &a : articles)
@@ -96,14 +98,15 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
         : QDeadlineTimer(QDeadlineTimer::Forever);
     process.start();
     if (!process.waitForStarted(30000))
-        return fail(ErrorCode::Io, tr("The extractor \"%1\" could not be started.").arg(m_command),
+        return fail(ErrorCode::Io,
+            CommandExtractorText::tr("The extractor \"%1\" could not be started.").arg(m_command),
             process.errorString());
     const qint64 group = process.processId();
 
     // stdout and stderr are taken as they arrive (the waitFor functions emit readyRead while
     // they wait), so neither piles up in QProcess's buffers: stdout within the limits, of
     // stderr only its tail.
-    const QString source = tr("output of \"%1\"").arg(m_command);
+    const QString source = CommandExtractorText::tr("output of \"%1\"").arg(m_command);
     QByteArray output;
     QByteArray errors;
     qint64 lineBytes = 0; // stdout bytes since its last line break
@@ -122,8 +125,9 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
             lineBytes += (at < 0 ? chunk.size() : at) - from;
             if (lineBytes > m_maxLineBytes) {
                 overflow = failAt(ErrorCode::InvalidInput, source, lines + 1, 0,
-                    tr("a line is longer than %1 MiB, the most one answer may be; the extractor "
-                       "was stopped and nothing was stored.")
+                    CommandExtractorText::tr(
+                        "a line is longer than %1 MiB, the most one answer may be; the extractor "
+                        "was stopped and nothing was stored.")
                         .arg(mebibytes(m_maxLineBytes)))
                                .error();
                 break;
@@ -136,8 +140,9 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
         }
         if (!overflow && output.size() + chunk.size() > m_maxOutputBytes)
             overflow = failAt(ErrorCode::InvalidInput, source, 0, 0,
-                tr("the extractor wrote more than %1 MiB, the most a run may write; it was "
-                   "stopped and nothing was stored.")
+                CommandExtractorText::tr(
+                    "the extractor wrote more than %1 MiB, the most a run may write; it was "
+                    "stopped and nothing was stored.")
                     .arg(mebibytes(m_maxOutputBytes)))
                            .error();
         if (overflow) {
@@ -188,12 +193,14 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
             process.waitForFinished(5000);
             takeErrors();
             return fail(ErrorCode::Io,
-                silent ? tr("The extractor \"%1\" wrote nothing for %2 s and was stopped; nothing "
-                            "was stored.")
+                silent ? CommandExtractorText::tr(
+                    "The extractor \"%1\" wrote nothing for %2 s and was stopped; nothing "
+                    "was stored.")
                              .arg(m_command)
                              .arg(m_idleSeconds)
-                       : tr("The extractor \"%1\" did not finish within %2 s and was stopped; "
-                            "nothing was stored.")
+                       : CommandExtractorText::tr(
+                           "The extractor \"%1\" did not finish within %2 s and was stopped; "
+                           "nothing was stored.")
                              .arg(m_command)
                              .arg(m_timeoutSeconds),
                 stderrTail(errors));
@@ -212,11 +219,13 @@ Result<std::vector<ExtractedSpan>> CommandExtractor::extract(const std::vector<A
         return std::unexpected(std::move(*overflow));
     if (process.exitStatus() == QProcess::CrashExit)
         return fail(ErrorCode::Io,
-            tr("The extractor \"%1\" crashed; nothing was stored.").arg(m_command),
+            CommandExtractorText::tr("The extractor \"%1\" crashed; nothing was stored.")
+                .arg(m_command),
             stderrTail(errors));
     if (process.exitCode() != 0)
         return fail(ErrorCode::Io,
-            tr("The extractor \"%1\" exited with code %2; nothing was stored.")
+            CommandExtractorText::tr(
+                "The extractor \"%1\" exited with code %2; nothing was stored.")
                 .arg(m_command)
                 .arg(process.exitCode()),
             stderrTail(errors));

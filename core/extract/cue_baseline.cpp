@@ -14,10 +14,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("CueBaseline", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CueBaselineText {
+    Q_DECLARE_TR_FUNCTIONS(CueBaselineText)
+};
 
 bool isWordToken(const QString &token)
 {
@@ -66,8 +66,9 @@ Result<CueBaseline> CueBaseline::create(const QJsonObject &parameters)
         const double w = merged->value(key).toDouble();
         if (!std::isfinite(w) || w < 0)
             return fail(ErrorCode::InvalidArgument,
-                tr("parameter \"%1\" of the cues extractor must be a number of at least 0, got "
-                   "%2.")
+                CueBaselineText::tr(
+                    "parameter \"%1\" of the cues extractor must be a number of at least 0, got "
+                    "%2.")
                     .arg(key)
                     .arg(w));
         baseline.m_weights.insert(name, w);
@@ -75,14 +76,16 @@ Result<CueBaseline> CueBaseline::create(const QJsonObject &parameters)
     baseline.m_minWeight = merged->value(QLatin1String("minWeight")).toDouble();
     if (!std::isfinite(baseline.m_minWeight) || baseline.m_minWeight <= 0)
         return fail(ErrorCode::InvalidArgument,
-            tr("parameter \"minWeight\" of the cues extractor must be a number above 0, got %1.")
+            CueBaselineText::tr(
+                "parameter \"minWeight\" of the cues extractor must be a number above 0, got %1.")
                 .arg(baseline.m_minWeight));
     baseline.m_multiple = merged->value(QLatin1String("multiple")).toBool();
     const QString other = merged->value(QLatin1String("otherLanguages")).toString();
     if (other != QLatin1String("error") && other != QLatin1String("skip"))
         return fail(ErrorCode::InvalidArgument,
-            tr("parameter \"otherLanguages\" of the cues extractor must be error or skip, got "
-               "\"%1\".")
+            CueBaselineText::tr(
+                "parameter \"otherLanguages\" of the cues extractor must be error or skip, got "
+                "\"%1\".")
                 .arg(other));
     baseline.m_skipOtherLanguages = other == QLatin1String("skip");
     return baseline;
@@ -170,9 +173,10 @@ Result<std::vector<ExtractedSpan>> CueBaseline::extract(const std::vector<Articl
                     continue;
                 Error e = list.error();
                 if (e.code == ErrorCode::NotFound)
-                    e.message = tr("Article %1 is in language \"%2\", which has no cue list (the "
-                                   "cue baseline knows %3); pass otherLanguages=skip to leave "
-                                   "such articles out.")
+                    e.message = CueBaselineText::tr(
+                        "Article %1 is in language \"%2\", which has no cue list (the "
+                        "cue baseline knows %3); pass otherLanguages=skip to leave "
+                        "such articles out.")
                                     .arg(article.summary.externalId, language,
                                         CueList::builtInLanguages().join(QStringLiteral(", ")));
                 return std::unexpected(e);

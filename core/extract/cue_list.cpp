@@ -11,10 +11,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("CueList", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CueListText {
+    Q_DECLARE_TR_FUNCTIONS(CueListText)
+};
 
 QString primaryLanguage(const QString &tag)
 {
@@ -53,12 +53,12 @@ Result<CueList> CueList::builtIn(const QString &languageTag)
     const QString language = primaryLanguage(languageTag);
     if (!builtInLanguages().contains(language))
         return fail(ErrorCode::NotFound,
-            tr("There is no cue list for language \"%1\"; the cue baseline knows %2.")
+            CueListText::tr("There is no cue list for language \"%1\"; the cue baseline knows %2.")
                 .arg(languageTag, builtInLanguages().join(QStringLiteral(", "))));
     QFile file(QStringLiteral(":/fourfold/cues/%1.json").arg(language));
     if (!file.open(QIODevice::ReadOnly))
         return fail(ErrorCode::Internal,
-            tr("The cue list for \"%1\" is missing from this build.").arg(language));
+            CueListText::tr("The cue list for \"%1\" is missing from this build.").arg(language));
     return fromJson(file.readAll(), file.fileName());
 }
 
@@ -68,12 +68,13 @@ Result<CueList> CueList::fromJson(const QByteArray &json, const QString &file)
     const QJsonDocument doc = QJsonDocument::fromJson(json, &parseError);
     if (parseError.error != QJsonParseError::NoError)
         return fail(ErrorCode::InvalidInput,
-            tr("%1: not valid JSON (%2).").arg(file, parseError.errorString()));
+            CueListText::tr("%1: not valid JSON (%2).").arg(file, parseError.errorString()));
     const QJsonObject root = doc.object();
     CueList list;
     list.m_language = root.value(QLatin1String("language")).toString();
     if (list.m_language.isEmpty())
-        return fail(ErrorCode::InvalidInput, tr("%1: the cue list names no language.").arg(file));
+        return fail(ErrorCode::InvalidInput,
+            CueListText::tr("%1: the cue list names no language.").arg(file));
     for (const QJsonValue &categoryValue : root.value(QLatin1String("categories")).toArray()) {
         const QJsonObject o = categoryValue.toObject();
         Category category;
@@ -81,7 +82,7 @@ Result<CueList> CueList::fromJson(const QByteArray &json, const QString &file)
         const auto function = functionFromKey(o.value(QLatin1String("function")).toString());
         if (category.name.isEmpty() || !function)
             return fail(ErrorCode::InvalidInput,
-                tr("%1: every category needs a name and a function.").arg(file));
+                CueListText::tr("%1: every category needs a name and a function.").arg(file));
         category.function = *function;
         category.sentenceInitial = o.value(QLatin1String("sentenceInitial")).toBool();
         category.attributes = o.value(QLatin1String("attributes")).toObject();
@@ -96,14 +97,14 @@ Result<CueList> CueList::fromJson(const QByteArray &json, const QString &file)
                     part.chop(1);
                 if (part.isEmpty())
                     return fail(ErrorCode::InvalidInput,
-                        tr("%1: cue \"%2\" of category %3 has an empty word.")
+                        CueListText::tr("%1: cue \"%2\" of category %3 has an empty word.")
                             .arg(file, cue.text, category.name));
                 cue.words.append(part);
                 cue.prefix.push_back(prefix);
             }
             if (cue.words.isEmpty())
                 return fail(ErrorCode::InvalidInput,
-                    tr("%1: category %2 has an empty cue.").arg(file, category.name));
+                    CueListText::tr("%1: category %2 has an empty cue.").arg(file, category.name));
             category.cues.push_back(std::move(cue));
         }
         list.m_categories.push_back(std::move(category));

@@ -16,10 +16,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ExtractorProtocol", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ExtractorProtocolText {
+    Q_DECLARE_TR_FUNCTIONS(ExtractorProtocolText)
+};
 
 QJsonArray rangesJson(const std::vector<TextRange> &ranges)
 {
@@ -45,12 +45,13 @@ qint64 offsetValue(const QJsonObject &o, const QString &key, QString &what)
 {
     const QJsonValue v = o.value(key);
     if (v.isUndefined()) {
-        what = tr("missing field \"%1\"").arg(key);
+        what = ExtractorProtocolText::tr("missing field \"%1\"").arg(key);
         return -1;
     }
     const double d = v.toDouble(std::nan(""));
     if (!v.isDouble() || !std::isfinite(d) || d != std::floor(d) || d < 0 || d > 9.0e15) {
-        what = tr("field \"%1\" must be a whole number of code points of at least 0, got %2")
+        what = ExtractorProtocolText::tr(
+            "field \"%1\" must be a whole number of code points of at least 0, got %2")
                    .arg(key, v.isDouble() ? QString::number(d) : jsonTypeName(v));
         return -1;
     }
@@ -87,10 +88,10 @@ Result<QJsonObject> objectOfLine(const Line &line, const QString &file)
     if (error.error != QJsonParseError::NoError)
         return failAt(ErrorCode::InvalidInput, file, line.number,
             columnOfByte(line.bytes, error.offset),
-            tr("not valid JSON (%1)").arg(error.errorString()));
+            ExtractorProtocolText::tr("not valid JSON (%1)").arg(error.errorString()));
     if (!doc.isObject())
         return failAt(ErrorCode::InvalidInput, file, line.number, 0,
-            tr("expected a JSON object, got an array"));
+            ExtractorProtocolText::tr("expected a JSON object, got an array"));
     return doc.object();
 }
 
@@ -123,18 +124,19 @@ std::expected<ExtractedSpan, QString> spanFromJson(
     for (auto it = object.begin(); it != object.end(); ++it)
         if (!known.contains(it.key()) && !extraFields.contains(it.key()))
             return std::unexpected(
-                tr("unknown field \"%1\"; a span has the fields %2 (put further data inside "
-                   "\"attributes\")")
+                ExtractorProtocolText::tr(
+                    "unknown field \"%1\"; a span has the fields %2 (put further data inside "
+                    "\"attributes\")")
                     .arg(it.key(), (extraFields + known).join(QStringLiteral(", "))));
     ExtractedSpan span;
     const QJsonValue function = object.value(QLatin1String("function"));
     if (function.isUndefined())
-        return std::unexpected(tr("missing field \"function\""));
+        return std::unexpected(ExtractorProtocolText::tr("missing field \"function\""));
     const auto f = function.isString() ? functionFromKey(function.toString()) : std::nullopt;
     if (!f)
         return std::unexpected(
-            tr("field \"function\" must be problem, cause, evaluation or "
-               "remedy, got %1")
+            ExtractorProtocolText::tr("field \"function\" must be problem, cause, evaluation or "
+                                      "remedy, got %1")
                 .arg(function.isString() ? QStringLiteral("\"%1\"").arg(function.toString())
                                          : jsonTypeName(function)));
     span.function = *f;
@@ -146,28 +148,32 @@ std::expected<ExtractedSpan, QString> spanFromJson(
     if (!what.isEmpty())
         return std::unexpected(what);
     if (span.range.end <= span.range.start)
-        return std::unexpected(tr("the span [%1, %2) is empty: \"end\" must be greater than "
-                                  "\"start\"")
-                                   .arg(span.range.start)
-                                   .arg(span.range.end));
+        return std::unexpected(
+            ExtractorProtocolText::tr("the span [%1, %2) is empty: \"end\" must be greater than "
+                                      "\"start\"")
+                .arg(span.range.start)
+                .arg(span.range.end));
     if (span.range.end > length)
-        return std::unexpected(tr("the span [%1, %2) ends past the end of the article, which "
-                                  "has %3 code points")
-                                   .arg(span.range.start)
-                                   .arg(span.range.end)
-                                   .arg(length));
+        return std::unexpected(
+            ExtractorProtocolText::tr("the span [%1, %2) ends past the end of the article, which "
+                                      "has %3 code points")
+                .arg(span.range.start)
+                .arg(span.range.end)
+                .arg(length));
     const QJsonValue score = object.value(QLatin1String("score"));
     if (score.isDouble() && std::isfinite(score.toDouble()))
         span.score = score.toDouble();
     else if (!score.isUndefined() && !score.isNull())
         return std::unexpected(
-            tr("field \"score\" must be a number or null, got %1").arg(jsonTypeName(score)));
+            ExtractorProtocolText::tr("field \"score\" must be a number or null, got %1")
+                .arg(jsonTypeName(score)));
     const QJsonValue attributes = object.value(QLatin1String("attributes"));
     if (attributes.isObject())
         span.attributes = attributes.toObject();
     else if (!attributes.isUndefined() && !attributes.isNull())
-        return std::unexpected(tr("field \"attributes\" must be an object or null, got %1")
-                                   .arg(jsonTypeName(attributes)));
+        return std::unexpected(
+            ExtractorProtocolText::tr("field \"attributes\" must be an object or null, got %1")
+                .arg(jsonTypeName(attributes)));
     return span;
 }
 
@@ -187,36 +193,43 @@ Result<std::vector<ExtractedSpan>> readExtractorOutput(
         };
         for (auto it = object->begin(); it != object->end(); ++it)
             if (it.key() != QLatin1String("id") && it.key() != QLatin1String("spans"))
-                return lineError(tr("unknown field \"%1\"; an answer has the fields \"id\" and "
-                                    "\"spans\"")
+                return lineError(ExtractorProtocolText::tr(
+                    "unknown field \"%1\"; an answer has the fields \"id\" and "
+                    "\"spans\"")
                                      .arg(it.key()));
         const QJsonValue id = object->value(QLatin1String("id"));
         if (!id.isString())
             return lineError(id.isUndefined()
-                    ? tr("missing field \"id\"")
-                    : tr("field \"id\" must be a string, got %1").arg(jsonTypeName(id)));
+                    ? ExtractorProtocolText::tr("missing field \"id\"")
+                    : ExtractorProtocolText::tr("field \"id\" must be a string, got %1")
+                          .arg(jsonTypeName(id)));
         const auto target = articles.constFind(id.toString());
         if (target == articles.constEnd())
-            return lineError(tr("article \"%1\" was not sent to the extractor").arg(id.toString()));
+            return lineError(
+                ExtractorProtocolText::tr("article \"%1\" was not sent to the extractor")
+                    .arg(id.toString()));
         if (answeredOn.contains(id.toString()))
-            return lineError(tr("article \"%1\" was already answered on line %2")
-                                 .arg(id.toString())
-                                 .arg(answeredOn.value(id.toString())));
+            return lineError(
+                ExtractorProtocolText::tr("article \"%1\" was already answered on line %2")
+                    .arg(id.toString())
+                    .arg(answeredOn.value(id.toString())));
         answeredOn.insert(id.toString(), line.number);
         const QJsonValue list = object->value(QLatin1String("spans"));
         if (!list.isArray())
             return lineError(list.isUndefined()
-                    ? tr("missing field \"spans\"")
-                    : tr("field \"spans\" must be an array, got %1").arg(jsonTypeName(list)));
+                    ? ExtractorProtocolText::tr("missing field \"spans\"")
+                    : ExtractorProtocolText::tr("field \"spans\" must be an array, got %1")
+                          .arg(jsonTypeName(list)));
         const QJsonArray array = list.toArray();
         for (qsizetype i = 0; i < array.size(); ++i) {
             if (!array.at(i).isObject())
-                return lineError(tr("span %1 of article \"%2\" must be an object, got %3")
-                                     .arg(i + 1)
-                                     .arg(id.toString(), jsonTypeName(array.at(i))));
+                return lineError(
+                    ExtractorProtocolText::tr("span %1 of article \"%2\" must be an object, got %3")
+                        .arg(i + 1)
+                        .arg(id.toString(), jsonTypeName(array.at(i))));
             auto span = spanFromJson(array.at(i).toObject(), target->length);
             if (!span)
-                return lineError(tr("span %1 of article \"%2\": %3")
+                return lineError(ExtractorProtocolText::tr("span %1 of article \"%2\": %3")
                                      .arg(i + 1)
                                      .arg(id.toString(), span.error()));
             span->article = target->id;
@@ -231,8 +244,8 @@ Result<std::vector<ExtractedSpan>> readExtractorOutput(
         missing.sort();
         const qsizetype shown = std::min<qsizetype>(missing.size(), 5);
         return failAt(ErrorCode::InvalidInput, file, 0, 0,
-            QCoreApplication::translate("ExtractorProtocol", "%n article(s) got no answer: %1%2",
-                nullptr, int(missing.size()))
+            ExtractorProtocolText::tr(
+                "%n article(s) got no answer: %1%2", nullptr, int(missing.size()))
                 .arg(QStringList(missing.mid(0, shown)).join(QStringLiteral(", ")),
                     missing.size() > shown ? QStringLiteral(", …") : QString()));
     }
@@ -246,7 +259,8 @@ Result<std::vector<ExtractedSpan>> readSpanFile(
     std::vector<ExtractedSpan> spans;
     const std::vector<Line> lines = nonBlankLines(bytes);
     if (lines.empty())
-        return failAt(ErrorCode::InvalidInput, file, 0, 0, tr("the file holds no spans"));
+        return failAt(ErrorCode::InvalidInput, file, 0, 0,
+            ExtractorProtocolText::tr("the file holds no spans"));
     for (const Line &line : lines) {
         auto object = objectOfLine(line, file);
         if (!object)
@@ -255,12 +269,14 @@ Result<std::vector<ExtractedSpan>> readSpanFile(
         if (!id.isString())
             return failAt(ErrorCode::InvalidInput, file, line.number, 0,
                 id.isUndefined()
-                    ? tr("missing field \"article\"")
-                    : tr("field \"article\" must be a string, got %1").arg(jsonTypeName(id)));
+                    ? ExtractorProtocolText::tr("missing field \"article\"")
+                    : ExtractorProtocolText::tr("field \"article\" must be a string, got %1")
+                          .arg(jsonTypeName(id)));
         const auto target = articles.constFind(id.toString());
         if (target == articles.constEnd())
             return failAt(ErrorCode::InvalidInput, file, line.number, 0,
-                tr("there is no article \"%1\" in the project").arg(id.toString()));
+                ExtractorProtocolText::tr("there is no article \"%1\" in the project")
+                    .arg(id.toString()));
         auto span = spanFromJson(*object, target->length, {QStringLiteral("article")});
         if (!span)
             return failAt(ErrorCode::InvalidInput, file, line.number, 0, span.error());

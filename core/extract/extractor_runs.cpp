@@ -22,25 +22,27 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ExtractorRuns", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ExtractorRunsText {
+    Q_DECLARE_TR_FUNCTIONS(ExtractorRunsText)
+};
 
 // InvalidArgument for an unusable name, Duplicate for a taken one.
 Status checkNewName(const Project &project, const QString &name)
 {
     if (name.trimmed().isEmpty() || name != name.trimmed())
         return fail(ErrorCode::InvalidArgument,
-            tr("A run needs a name without leading or trailing spaces."));
+            ExtractorRunsText::tr("A run needs a name without leading or trailing spaces."));
     if (std::ranges::any_of(name, [](QChar c) { return c.category() == QChar::Other_Control; }))
-        return fail(ErrorCode::InvalidArgument, tr("A run name may not hold control characters."));
+        return fail(ErrorCode::InvalidArgument,
+            ExtractorRunsText::tr("A run name may not hold control characters."));
     auto existing = ExtractorRuns::runByName(project, name);
     if (!existing)
         return std::unexpected(existing.error());
     if (existing->has_value())
         return fail(ErrorCode::Duplicate,
-            tr("There is already a run called \"%1\"; choose another name or delete it first.")
+            ExtractorRunsText::tr(
+                "There is already a run called \"%1\"; choose another name or delete it first.")
                 .arg(name));
     return {};
 }
@@ -159,14 +161,16 @@ Result<ExtractorRun> ExtractorRuns::storeRun(
         const ArticleSummary *article = byId.value(span.article, nullptr);
         if (!article)
             return fail(ErrorCode::NotFound,
-                tr("A span of run \"%1\" names article #%2, which is not in the project.")
+                ExtractorRunsText::tr(
+                    "A span of run \"%1\" names article #%2, which is not in the project.")
                     .arg(run.name)
                     .arg(span.article.value));
         if (span.range.start < 0 || span.range.end <= span.range.start
             || span.range.end > article->length)
             return fail(ErrorCode::InvalidInput,
-                tr("A span of run \"%1\", [%2, %3), does not lie inside article %4 (%5 code "
-                   "points) or is empty.")
+                ExtractorRunsText::tr(
+                    "A span of run \"%1\", [%2, %3), does not lie inside article %4 (%5 code "
+                    "points) or is empty.")
                     .arg(run.name)
                     .arg(span.range.start)
                     .arg(span.range.end)
@@ -207,7 +211,8 @@ Status ExtractorRuns::deleteRun(Project &project, const QString &name)
     if (!run)
         return std::unexpected(run.error());
     if (!run->has_value())
-        return fail(ErrorCode::NotFound, tr("There is no run called \"%1\".").arg(name));
+        return fail(
+            ErrorCode::NotFound, ExtractorRunsText::tr("There is no run called \"%1\".").arg(name));
     auto count = spanCount(project, (*run)->id);
     if (!count)
         return std::unexpected(count.error());

@@ -8,10 +8,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("PositionBaseline", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct PositionBaselineText {
+    Q_DECLARE_TR_FUNCTIONS(PositionBaselineText)
+};
 
 } // namespace
 
@@ -41,8 +41,9 @@ Result<PositionBaseline> PositionBaseline::create(const QJsonObject &parameters)
         const std::optional<FramingFunction> f = functionFromKey(value);
         if (!f)
             return fail(ErrorCode::InvalidArgument,
-                tr("parameter \"%1\" of the position extractor must be problem, cause, "
-                   "evaluation, remedy or none, got \"%2\".")
+                PositionBaselineText::tr(
+                    "parameter \"%1\" of the position extractor must be problem, cause, "
+                    "evaluation, remedy or none, got \"%2\".")
                     .arg(key, value));
         baseline.m_functionOfRole[size_t(role)] = *f;
         baseline.m_parameters.insert(key, functionKey(*f));
@@ -50,8 +51,9 @@ Result<PositionBaseline> PositionBaseline::create(const QJsonObject &parameters)
     const QString unit = merged->value(QStringLiteral("unit")).toString();
     if (unit != QLatin1String("paragraph") && unit != QLatin1String("sentence"))
         return fail(ErrorCode::InvalidArgument,
-            tr("parameter \"unit\" of the position extractor must be paragraph or sentence, got "
-               "\"%1\".")
+            PositionBaselineText::tr(
+                "parameter \"unit\" of the position extractor must be paragraph or sentence, got "
+                "\"%1\".")
                 .arg(unit));
     baseline.m_perSentence = unit == QLatin1String("sentence");
     return baseline;

@@ -25,14 +25,14 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 QString noArticles()
 {
-    return tr("the file contains no articles");
+    return ArticleReaderText::tr("the file contains no articles");
 }
 
 // The checks every format shares, one article at a time as the reader hands them over: a
@@ -84,15 +84,16 @@ private:
             return failAt(code, m_file, article.sourceLine, 0, what).error();
         };
         if (QStringView(article.externalId).trimmed().isEmpty())
-            return failed(ErrorCode::InvalidInput, tr("the article has no id"));
+            return failed(ErrorCode::InvalidInput, ArticleReaderText::tr("the article has no id"));
         // A control character (a line break, a tab, NUL, ...) in an id would break every
         // line-based export that names the article (IOB2 comments, CSV, terminals).
         if (const auto control = std::ranges::find_if(
                 article.externalId, [](QChar c) { return c.category() == QChar::Other_Control; });
             control != article.externalId.cend()) {
             return failed(ErrorCode::InvalidInput,
-                tr("the id \"%1\" holds a control character (U+%2); ids are one line of "
-                   "printable text")
+                ArticleReaderText::tr(
+                    "the id \"%1\" holds a control character (U+%2); ids are one line of "
+                    "printable text")
                     .arg(QString(article.externalId)
                              .replace(QRegularExpression(QStringLiteral("\\p{Cc}")),
                                  QStringLiteral("\uFFFD")))
@@ -108,17 +109,18 @@ private:
                 std::pair {"language", &article.language}})
             if (value->contains(QChar(0)))
                 return failed(ErrorCode::InvalidInput,
-                    tr("the %1 of the article \"%2\" holds a NUL character (U+0000), which no "
-                       "text holds")
+                    ArticleReaderText::tr(
+                        "the %1 of the article \"%2\" holds a NUL character (U+0000), which no "
+                        "text holds")
                         .arg(QLatin1String(field), article.externalId));
         if (QStringView(article.text).trimmed().isEmpty()) {
             return failed(ErrorCode::InvalidInput,
-                tr("the article \"%1\" has no text").arg(article.externalId));
+                ArticleReaderText::tr("the article \"%1\" has no text").arg(article.externalId));
         }
         const auto seen = m_firstLine.constFind(article.externalId);
         if (seen != m_firstLine.cend()) {
             return failed(ErrorCode::Duplicate,
-                tr("duplicate id \"%1\" (first seen on line %2)")
+                ArticleReaderText::tr("duplicate id \"%1\" (first seen on line %2)")
                     .arg(article.externalId)
                     .arg(*seen));
         }
@@ -151,8 +153,9 @@ Status readXmlArticles(
     if (format == ImportFormat::NewsXml || (!format && isNewsXmlRoot(root)))
         return readNewsXmlArticles(root, path, take);
     return failAt(ErrorCode::Unsupported, path, xmlLine(root), 0,
-        tr("the XML root element <%1> is neither a feed's (<rss>, Atom's <feed>) nor a news "
-           "item's (<nitf>, NewsML-G2's <newsItem> or <newsMessage>)")
+        ArticleReaderText::tr(
+            "the XML root element <%1> is neither a feed's (<rss>, Atom's <feed>) nor a news "
+            "item's (<nitf>, NewsML-G2's <newsItem> or <newsMessage>)")
             .arg(xmlQualifiedName(root)));
 }
 
@@ -189,8 +192,9 @@ Result<ImportFormat> zipContainerFormat(
     if (archive->contains(QStringLiteral("word/document.xml")))
         return ImportFormat::Docx;
     return failAt(ErrorCode::Unsupported, path, 0, 0,
-        tr("the file is a zip archive but not a DOCX, ODT or EPUB document; choose the format if "
-           "it is one"));
+        ArticleReaderText::tr(
+            "the file is a zip archive but not a DOCX, ODT or EPUB document; choose the format if "
+            "it is one"));
 }
 
 // Reads one opened file of `format` (none: XML told from its root element), handing each
@@ -203,7 +207,7 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
     const bool whole = format != ImportFormat::JsonLines && format != ImportFormat::Csv;
     if (whole && input.size() > maxImportFileSize) {
         return failAt(ErrorCode::InvalidInput, path, 0, 0,
-            tr("the file is %1 MiB long; a file may be at most %2 MiB")
+            ArticleReaderText::tr("the file is %1 MiB long; a file may be at most %2 MiB")
                 .arg(input.size() >> 20)
                 .arg(maxImportFileSize >> 20));
     }
@@ -211,8 +215,8 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
     if (!any)
         return std::unexpected(any.error());
     if (!*any)
-        return failAt(
-            ErrorCode::InvalidInput, path, 0, 0, tr("the file is empty: it contains no articles"));
+        return failAt(ErrorCode::InvalidInput, path, 0, 0,
+            ArticleReaderText::tr("the file is empty: it contains no articles"));
 
     ArticleChecks checks(path, options, [&](ImportedArticle &&article) {
         return visit(std::move(article), ReadProgress {before + input.position(), total});
@@ -247,9 +251,10 @@ Status readOpenFile(ChunkedInput &input, std::optional<ImportFormat> format,
     if (!format || format == ImportFormat::Feed || format == ImportFormat::NewsXml) {
         if (!format && !looksLikeXml(input.pending())) {
             return failAt(ErrorCode::Unsupported, path, 0, 0,
-                tr("the format cannot be told from the file name or its content; name the file "
-                   ".txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf, .epub or .xml, or "
-                   "choose the format"));
+                ArticleReaderText::tr(
+                    "the format cannot be told from the file name or its content; name the file "
+                    ".txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf, .epub or .xml, or "
+                    "choose the format"));
         }
         FOURFOLD_TRY_STATUS(readXmlArticles(input, format, take));
         return checks.finish();
@@ -311,7 +316,8 @@ Status readTextFolder(const QString &path, const ImportOptions &options, const A
         return importFormatFromPath(entry.fileName()) != ImportFormat::Text;
     });
     if (entries.isEmpty())
-        return failAt(ErrorCode::InvalidInput, path, 0, 0, tr("the folder contains no .txt files"));
+        return failAt(ErrorCode::InvalidInput, path, 0, 0,
+            ArticleReaderText::tr("the folder contains no .txt files"));
     // Code-unit order of the names: the same on every system and locale.
     std::ranges::sort(entries,
         [](const QFileInfo &a, const QFileInfo &b) { return a.fileName() < b.fileName(); });
@@ -332,7 +338,7 @@ Status readTextFolder(const QString &path, const ImportOptions &options, const A
                 const auto seen = firstFile.constFind(article.externalId);
                 if (seen != firstFile.cend()) {
                     return failAt(ErrorCode::Duplicate, file, 0, 0,
-                        tr("duplicate id \"%1\" (first seen in %2)")
+                        ArticleReaderText::tr("duplicate id \"%1\" (first seen in %2)")
                             .arg(article.externalId, *seen));
                 }
                 firstFile.insert(article.externalId, file);
@@ -413,7 +419,7 @@ Status forEachArticle(const QString &path, const ImportOptions &options, const A
     if (info.isDir()) {
         if (options.format && *options.format != ImportFormat::Text) {
             return failAt(ErrorCode::Unsupported, path, 0, 0,
-                tr("a folder can only be read as plain text (its .txt files)"));
+                ArticleReaderText::tr("a folder can only be read as plain text (its .txt files)"));
         }
         return readTextFolder(path, options, visit);
     }

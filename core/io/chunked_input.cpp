@@ -12,10 +12,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 } // namespace
 
@@ -23,7 +23,7 @@ Result<ChunkedInput> ChunkedInput::open(const QString &path, qsizetype chunkSize
 {
     const QFileInfo info(path);
     if (!info.exists())
-        return failAt(ErrorCode::Io, path, 0, 0, tr("the file does not exist"));
+        return failAt(ErrorCode::Io, path, 0, 0, ArticleReaderText::tr("the file does not exist"));
     FOURFOLD_TRY_STATUS(requireRegularFile(path));
     ChunkedInput input;
     input.m_path = path;
@@ -31,7 +31,8 @@ Result<ChunkedInput> ChunkedInput::open(const QString &path, qsizetype chunkSize
     input.m_size = info.size();
     input.m_chunkSize = std::max<qsizetype>(chunkSize, 1);
     if (!input.m_file->open(QIODevice::ReadOnly)) {
-        auto error = failAt(ErrorCode::Io, path, 0, 0, tr("the file cannot be opened for reading"));
+        auto error = failAt(ErrorCode::Io, path, 0, 0,
+            ArticleReaderText::tr("the file cannot be opened for reading"));
         error.error().cause = input.m_file->errorString();
         return error;
     }
@@ -55,7 +56,8 @@ Result<bool> ChunkedInput::readMore()
     const qint64 got = m_file->read(m_buffer.data() + old, m_chunkSize);
     m_buffer.resize(old + std::max<qint64>(got, 0));
     if (got < 0 || m_file->error() != QFileDevice::NoError) {
-        auto error = failAt(ErrorCode::Io, m_path, 0, 0, tr("the file cannot be read"));
+        auto error =
+            failAt(ErrorCode::Io, m_path, 0, 0, ArticleReaderText::tr("the file cannot be read"));
         error.error().cause = m_file->errorString();
         return error;
     }

@@ -12,10 +12,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 // Finds where a record ends in the file's bytes, resuming where it stopped when more bytes
 // came. Only the quotes and line breaks count (they are ASCII, so UTF-8 cannot hide them): in a
@@ -116,12 +116,14 @@ Status recordTooLong(
     }
     if (!scan.quoted) {
         return failAt(ErrorCode::InvalidInput, file, firstLine, 0,
-            tr("the record is longer than %1 MiB; a record may be at most %1 MiB")
+            ArticleReaderText::tr(
+                "the record is longer than %1 MiB; a record may be at most %1 MiB")
                 .arg(maxCsvRecordSize >> 20));
     }
     return failAt(ErrorCode::InvalidInput, file, quoteLine, quoteColumn,
-        tr("the quoted field that begins here is not closed within %1 MiB, the most a record may "
-           "hold: a closing double quote is missing")
+        ArticleReaderText::tr(
+            "the quoted field that begins here is not closed within %1 MiB, the most a record may "
+            "hold: a closing double quote is missing")
             .arg(maxCsvRecordSize >> 20));
 }
 

@@ -25,10 +25,10 @@ const QString wordStrict = QStringLiteral("http://purl.oclc.org/ooxml/wordproces
 const QString markupCompatibility =
     QStringLiteral("http://schemas.openxmlformats.org/markup-compatibility/2006");
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 bool isWord(const xmlNode *node)
 {
@@ -261,8 +261,10 @@ private:
         const auto found = notes.constFind(id);
         if (found == notes.cend()) {
             return zipPartFailed(m_archive, mainPart, reference,
-                (footnote ? tr("the footnote %1 is referred to but %2 does not hold it")
-                          : tr("the endnote %1 is referred to but %2 does not hold it"))
+                (footnote ? ArticleReaderText::tr(
+                     "the footnote %1 is referred to but %2 does not hold it")
+                          : ArticleReaderText::tr(
+                              "the endnote %1 is referred to but %2 does not hold it"))
                     .arg(id,
                         footnote ? (footnotesPart.isEmpty() ? QStringLiteral("word/footnotes.xml")
                                                             : footnotesPart)
@@ -298,9 +300,10 @@ Result<ImportedArticle> readDocxArticle(
     // binary .doc.
     if (bytes.startsWith("\xD0\xCF\x11\xE0\xA1\xB1\x1A\xE1"))
         return failAt(ErrorCode::InvalidInput, file, 0, 0,
-            tr("the file is an OLE compound file, not a zip package: a password-protected "
-               "(encrypted) Office document or an old binary .doc; save it as .docx without a "
-               "password first"));
+            ArticleReaderText::tr(
+                "the file is an OLE compound file, not a zip package: a password-protected "
+                "(encrypted) Office document or an old binary .doc; save it as .docx without a "
+                "password first"));
     Result<ZipArchive> opened = ZipArchive::open(bytes, file, limits);
     if (!opened)
         return std::unexpected(opened.error());
@@ -315,7 +318,8 @@ Result<ImportedArticle> readDocxArticle(
         package->value(QStringLiteral("officeDocument"), QStringLiteral("word/document.xml"));
     if (!archive.contains(mainPart))
         return failAt(ErrorCode::InvalidInput, file, 0, 0,
-            tr("the archive holds no %1: it is not a word-processing document (DOCX)")
+            ArticleReaderText::tr(
+                "the archive holds no %1: it is not a word-processing document (DOCX)")
                 .arg(mainPart));
     Result<XmlDocument> document = parseZipPart(archive, mainPart);
     if (!document)
@@ -323,12 +327,14 @@ Result<ImportedArticle> readDocxArticle(
     xmlNode *root = document->root();
     if (!isWord(root, u"document"))
         return zipPartFailed(archive, mainPart, root,
-            tr("the root element is <%1>, not WordprocessingML's <w:document>: the file is not a "
-               "word-processing document")
+            ArticleReaderText::tr(
+                "the root element is <%1>, not WordprocessingML's <w:document>: the file is not a "
+                "word-processing document")
                 .arg(xmlQualifiedName(root)));
     xmlNode *body = xmlFirstChild(root, "body");
     if (!body)
-        return zipPartFailed(archive, mainPart, root, tr("the document has no <w:body>"));
+        return zipPartFailed(
+            archive, mainPart, root, ArticleReaderText::tr("the document has no <w:body>"));
 
     Result<QHash<QString, QString>> parts = relationships(archive, mainPart);
     if (!parts)

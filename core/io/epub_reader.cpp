@@ -27,10 +27,10 @@ const QString epubMediaType = QStringLiteral("application/epub+zip");
 const QString idpfObfuscation = QStringLiteral("http://www.idpf.org/2008/embedding");
 const QString adobeObfuscation = QStringLiteral("http://ns.adobe.com/pdf/enc#RC");
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 std::unexpected<Error> failed(const QString &file, const QString &what)
 {
@@ -44,7 +44,8 @@ Result<QString> packagePath(ZipArchive &archive)
     const QString container = QStringLiteral("META-INF/container.xml");
     if (!archive.contains(container))
         return failed(archive.file(),
-            tr("the archive holds no META-INF/container.xml: it is not an EPUB publication"));
+            ArticleReaderText::tr(
+                "the archive holds no META-INF/container.xml: it is not an EPUB publication"));
     Result<XmlDocument> parsed = parseZipPart(archive, container);
     if (!parsed)
         return std::unexpected(parsed.error());
@@ -57,8 +58,8 @@ Result<QString> packagePath(ZipArchive &archive)
         }
     }
     return zipPartFailed(archive, container, parsed->root(),
-        tr("it names no package document (<rootfile "
-           "media-type=\"application/oebps-package+xml\">)"));
+        ArticleReaderText::tr("it names no package document (<rootfile "
+                              "media-type=\"application/oebps-package+xml\">)"));
 }
 
 // The entries META-INF/encryption.xml says are encrypted (OCF §3.5.2.2), font obfuscation left
@@ -109,7 +110,8 @@ Status readEpubArticles(const QByteArray &bytes, const QString &file, const ZipL
         const QString type = QString::fromUtf8(*mimetype).trimmed();
         if (type != epubMediaType)
             return failed(file,
-                tr("the package is of the type \"%1\", not an EPUB publication (%2)")
+                ArticleReaderText::tr(
+                    "the package is of the type \"%1\", not an EPUB publication (%2)")
                     .arg(type, epubMediaType));
     }
     Result<QString> opf = packagePath(archive);
@@ -117,7 +119,8 @@ Status readEpubArticles(const QByteArray &bytes, const QString &file, const ZipL
         return std::unexpected(opf.error());
     if (!archive.contains(*opf))
         return failed(file,
-            tr("the archive holds no %1, the package document META-INF/container.xml names")
+            ArticleReaderText::tr(
+                "the archive holds no %1, the package document META-INF/container.xml names")
                 .arg(*opf));
     Result<QSet<QString>> encrypted = encryptedEntries(archive);
     if (!encrypted)
@@ -128,7 +131,8 @@ Status readEpubArticles(const QByteArray &bytes, const QString &file, const ZipL
     xmlNode *root = package->root();
     if (xmlLocalName(root) != u"package")
         return zipPartFailed(archive, *opf, root,
-            tr("the root element is <%1>, not <package>").arg(xmlQualifiedName(root)));
+            ArticleReaderText::tr("the root element is <%1>, not <package>")
+                .arg(xmlQualifiedName(root)));
 
     // Metadata (Packages §3.4.3, Dublin Core elements): title, creator, language, date,
     // publisher.
@@ -166,7 +170,8 @@ Status readEpubArticles(const QByteArray &bytes, const QString &file, const ZipL
     }
     xmlNode *spine = xmlFirstChild(root, "spine");
     if (!spine)
-        return zipPartFailed(archive, *opf, root, tr("the package has no <spine>"));
+        return zipPartFailed(
+            archive, *opf, root, ArticleReaderText::tr("the package has no <spine>"));
     std::vector<Chapter> chapters;
     int position = 0;
     for (xmlNode *itemref : xmlChildElements(spine)) {
@@ -179,16 +184,19 @@ Status readEpubArticles(const QByteArray &bytes, const QString &file, const ZipL
         const auto item = manifest.constFind(idref);
         if (item == manifest.cend())
             return zipPartFailed(archive, *opf, itemref,
-                tr("the spine refers to \"%1\", which the manifest does not hold").arg(idref));
+                ArticleReaderText::tr(
+                    "the spine refers to \"%1\", which the manifest does not hold")
+                    .arg(idref));
         const auto &[part, type] = *item;
         if (type != u"application/xhtml+xml" && type != u"text/html")
             continue; // an SVG page or another kind of content: no running text
         if (!archive.contains(part))
             return zipPartFailed(archive, *opf, itemref,
-                tr("the spine's document %1 is not in the archive").arg(part));
+                ArticleReaderText::tr("the spine's document %1 is not in the archive").arg(part));
         if (encrypted->contains(part))
             return failed(file,
-                tr("the chapter %1 is encrypted (DRM); Fourfold reads only books without it")
+                ArticleReaderText::tr(
+                    "the chapter %1 is encrypted (DRM); Fourfold reads only books without it")
                     .arg(part));
         chapters.push_back({idref, part, position});
     }
@@ -253,7 +261,8 @@ Status readEpubArticles(const QByteArray &bytes, const QString &file, const ZipL
         ++handed;
     }
     if (handed == 0)
-        return failed(file, tr("the book holds no text: it contains no articles"));
+        return failed(
+            file, ArticleReaderText::tr("the book holds no text: it contains no articles"));
     return {};
 }
 

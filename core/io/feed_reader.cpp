@@ -23,10 +23,10 @@ const QString atomNamespace = QStringLiteral("http://www.w3.org/2005/Atom");
 const QString contentNamespace = QStringLiteral("http://purl.org/rss/1.0/modules/content/");
 const QString xhtmlNamespace = QStringLiteral("http://www.w3.org/1999/xhtml");
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 std::unexpected<Error> failed(const QString &file, const _xmlNode *node, const QString &what)
 {
@@ -142,8 +142,9 @@ Status readRssItem(_xmlNode *item, const QString &file, const QString &channelTi
             const QDateTime date = rfc822Date(raw);
             if (!date.isValid())
                 return failed(file, child,
-                    tr("the pubDate \"%1\" is not an RFC 822 date (such as \"Sat, 07 Sep 2002 "
-                       "09:42:31 GMT\")")
+                    ArticleReaderText::tr(
+                        "the pubDate \"%1\" is not an RFC 822 date (such as \"Sat, 07 Sep 2002 "
+                        "09:42:31 GMT\")")
                         .arg(raw));
             article.published = date.toString(Qt::ISODate);
         } else if (name == u"source") {
@@ -156,16 +157,18 @@ Status readRssItem(_xmlNode *item, const QString &file, const QString &channelTi
             addMeta(article.meta, name, xmlAttribute(child, "url").trimmed());
         } else {
             return failed(file, child,
-                tr("<%1> is not an element of an RSS 2.0 item").arg(xmlQualifiedName(child)));
+                ArticleReaderText::tr("<%1> is not an element of an RSS 2.0 item")
+                    .arg(xmlQualifiedName(child)));
         }
     }
     article.externalId = !guid.isEmpty() ? guid : link;
     if (article.externalId.isEmpty())
-        return failed(file, item, tr("the item has neither a guid nor a link to take its id from"));
+        return failed(file, item,
+            ArticleReaderText::tr("the item has neither a guid nor a link to take its id from"));
     const std::optional<QString> &html = encoded ? encoded : description;
     if (!html)
         return failed(file, item,
-            tr("the item \"%1\" has neither a description nor a content:encoded")
+            ArticleReaderText::tr("the item \"%1\" has neither a description nor a content:encoded")
                 .arg(article.externalId));
     Result<QStringList> paragraphs = htmlFragmentParagraphs(*html, file, htmlLine);
     if (!paragraphs)
@@ -182,19 +185,22 @@ Status readRss(_xmlNode *root, const QString &file, const ImportedArticleSink &t
     const QString version = xmlAttribute(root, "version").trimmed();
     if (version != u"2.0")
         return failed(file, root,
-            tr("the RSS version is \"%1\"; Fourfold reads RSS 2.0 (<rss version=\"2.0\">)")
+            ArticleReaderText::tr(
+                "the RSS version is \"%1\"; Fourfold reads RSS 2.0 (<rss version=\"2.0\">)")
                 .arg(version));
     std::vector<_xmlNode *> channels;
     for (_xmlNode *child : xmlChildElements(root)) {
         if (xmlNamespace(child).isEmpty() && xmlLocalName(child) == u"channel")
             channels.push_back(child);
         else if (xmlNamespace(child).isEmpty())
-            return failed(
-                file, child, tr("<%1> is not an element of <rss>").arg(xmlQualifiedName(child)));
+            return failed(file, child,
+                ArticleReaderText::tr("<%1> is not an element of <rss>")
+                    .arg(xmlQualifiedName(child)));
     }
     if (channels.size() != 1)
         return failed(file, root,
-            tr("<rss> holds %1 channels; an RSS 2.0 feed has exactly one").arg(channels.size()));
+            ArticleReaderText::tr("<rss> holds %1 channels; an RSS 2.0 feed has exactly one")
+                .arg(channels.size()));
     _xmlNode *channel = channels.front();
     QString title;
     QString language;
@@ -205,7 +211,8 @@ Status readRss(_xmlNode *root, const QString &file, const ImportedArticleSink &t
             continue; // an extension module's channel element: not about any one article
         if (!isOneOf(name, rssChannelElements))
             return failed(file, child,
-                tr("<%1> is not an element of an RSS 2.0 channel").arg(xmlQualifiedName(child)));
+                ArticleReaderText::tr("<%1> is not an element of an RSS 2.0 channel")
+                    .arg(xmlQualifiedName(child)));
         if (name == u"title")
             title = xmlSimpleText(child);
         else if (name == u"language")
@@ -214,7 +221,8 @@ Status readRss(_xmlNode *root, const QString &file, const ImportedArticleSink &t
             items.push_back(child);
     }
     if (items.empty())
-        return failed(file, channel, tr("the feed holds no items: it contains no articles"));
+        return failed(file, channel,
+            ArticleReaderText::tr("the feed holds no items: it contains no articles"));
     for (_xmlNode *item : items)
         FOURFOLD_TRY_STATUS(readRssItem(item, file, title, language, take));
     return {};
@@ -234,12 +242,14 @@ Result<QStringList> atomParagraphs(_xmlNode *node, const QString &file, bool con
         _xmlNode *div = xmlFirstChild(node, "div");
         if (!div || xmlNamespace(div) != xhtmlNamespace)
             return failed(file, node,
-                tr("<%1 type=\"xhtml\"> must hold one XHTML <div> (RFC 4287 §3.1.1.3)")
+                ArticleReaderText::tr(
+                    "<%1 type=\"xhtml\"> must hold one XHTML <div> (RFC 4287 §3.1.1.3)")
                     .arg(xmlQualifiedName(node)));
         return htmlParagraphs(div);
     }
     return failed(file, node,
-        tr("<%1> has the type \"%2\"; Fourfold reads text, html, xhtml and text/* content")
+        ArticleReaderText::tr(
+            "<%1> has the type \"%2\"; Fourfold reads text, html, xhtml and text/* content")
             .arg(xmlQualifiedName(node), type));
 }
 
@@ -262,8 +272,8 @@ Result<QString> atomDate(_xmlNode *node, const QString &file)
     const QString raw = xmlText(node).trimmed();
     if (!QDateTime::fromString(raw, Qt::ISODateWithMs).isValid())
         return failed(file, node,
-            tr("<%1> \"%2\" is not an RFC 3339 date-time (such as "
-               "\"2003-12-13T18:30:02Z\")")
+            ArticleReaderText::tr("<%1> \"%2\" is not an RFC 3339 date-time (such as "
+                                  "\"2003-12-13T18:30:02Z\")")
                 .arg(xmlQualifiedName(node), raw));
     return raw;
 }
@@ -293,7 +303,8 @@ Status readAtomEntry(
         }
         if (!isOneOf(name, atomEntryElements))
             return failed(file, child,
-                tr("<%1> is not an element of an Atom entry").arg(xmlQualifiedName(child)));
+                ArticleReaderText::tr("<%1> is not an element of an Atom entry")
+                    .arg(xmlQualifiedName(child)));
         if (name == u"id") {
             article.externalId = xmlText(child).trimmed();
         } else if (name == u"title") {
@@ -331,7 +342,8 @@ Status readAtomEntry(
         }
     }
     if (article.externalId.isEmpty())
-        return failed(file, entry, tr("the entry has no <id> (RFC 4287 §4.1.2 requires one)"));
+        return failed(file, entry,
+            ArticleReaderText::tr("the entry has no <id> (RFC 4287 §4.1.2 requires one)"));
     if (article.published.isEmpty())
         article.published = updated;
     // Content given by reference (src, RFC 4287 §4.1.3.2) is not fetched; the summary, which
@@ -341,7 +353,8 @@ Status readAtomEntry(
     _xmlNode *body = content ? content : summary;
     if (!body)
         return failed(file, entry,
-            tr("the entry \"%1\" has neither a content held in the feed nor a summary")
+            ArticleReaderText::tr(
+                "the entry \"%1\" has neither a content held in the feed nor a summary")
                 .arg(article.externalId));
     Result<QStringList> paragraphs = atomParagraphs(body, file, body == content);
     if (!paragraphs)
@@ -360,7 +373,8 @@ Status readAtom(_xmlNode *root, const QString &file, const ImportedArticleSink &
         const QString name = xmlLocalName(child);
         if (!isOneOf(name, atomFeedElements))
             return failed(file, child,
-                tr("<%1> is not an element of an Atom feed").arg(xmlQualifiedName(child)));
+                ArticleReaderText::tr("<%1> is not an element of an Atom feed")
+                    .arg(xmlQualifiedName(child)));
         if (name == u"title") {
             Result<QStringList> paragraphs = atomParagraphs(child, file, false);
             if (!paragraphs)
@@ -371,7 +385,8 @@ Status readAtom(_xmlNode *root, const QString &file, const ImportedArticleSink &
         }
     }
     if (entries.empty())
-        return failed(file, root, tr("the feed holds no entries: it contains no articles"));
+        return failed(file, root,
+            ArticleReaderText::tr("the feed holds no entries: it contains no articles"));
     for (_xmlNode *entry : entries)
         FOURFOLD_TRY_STATUS(readAtomEntry(entry, file, title, take));
     return {};
@@ -393,7 +408,7 @@ Status readFeedArticles(_xmlNode *root, const QString &file, const ImportedArtic
     if (xmlLocalName(root) == u"feed" && xmlNamespace(root) == atomNamespace)
         return readAtom(root, file, take);
     return failAt(ErrorCode::Unsupported, file, xmlLine(root), 0,
-        tr("the root element <%1> is not a feed's (<rss> or Atom's <feed>)")
+        ArticleReaderText::tr("the root element <%1> is not a feed's (<rss> or Atom's <feed>)")
             .arg(xmlQualifiedName(root)));
 }
 

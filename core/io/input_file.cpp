@@ -10,10 +10,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("InputFile", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct InputFileText {
+    Q_DECLARE_TR_FUNCTIONS(InputFileText)
+};
 
 } // namespace
 
@@ -21,7 +21,7 @@ Status requireRegularFile(const QString &path)
 {
     const QFileInfo info(path); // follows symbolic links
     if (info.exists() && !info.isFile())
-        return failAt(ErrorCode::Io, path, 0, 0, tr("this is not a regular file"));
+        return failAt(ErrorCode::Io, path, 0, 0, InputFileText::tr("this is not a regular file"));
     return {};
 }
 
@@ -30,13 +30,15 @@ Result<QByteArray> readWholeFile(const QString &path, qint64 maxBytes)
     FOURFOLD_TRY_STATUS(requireRegularFile(path));
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly)) {
-        auto error = failAt(ErrorCode::Io, path, 0, 0, tr("the file cannot be opened for reading"));
+        auto error = failAt(
+            ErrorCode::Io, path, 0, 0, InputFileText::tr("the file cannot be opened for reading"));
         error.error().cause = file.errorString();
         return error;
     }
     const auto tooLong = [&] {
         return failAt(ErrorCode::InvalidInput, path, 0, 0,
-            tr("the file is longer than %1 MiB, the most this reader takes").arg(maxBytes >> 20));
+            InputFileText::tr("the file is longer than %1 MiB, the most this reader takes")
+                .arg(maxBytes >> 20));
     };
     if (file.size() > maxBytes)
         return tooLong();
@@ -52,7 +54,8 @@ Result<QByteArray> readWholeFile(const QString &path, qint64 maxBytes)
         bytes.resize(at + qsizetype(want));
         const qint64 got = file.read(bytes.data() + at, want);
         if (got < 0) {
-            auto error = failAt(ErrorCode::Io, path, 0, 0, tr("the file cannot be read"));
+            auto error =
+                failAt(ErrorCode::Io, path, 0, 0, InputFileText::tr("the file cannot be read"));
             error.error().cause = file.errorString();
             return error;
         }

@@ -19,10 +19,10 @@ namespace {
 
 using Json = nlohmann::json;
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("JsonItemStream", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct JsonItemStreamText {
+    Q_DECLARE_TR_FUNCTIONS(JsonItemStreamText)
+};
 
 // The file read in blocks, with the line and column of the last character read.
 struct Source {
@@ -136,8 +136,9 @@ Result<QJsonValue> streamJsonItems(
     FOURFOLD_TRY_STATUS(requireRegularFile(path));
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
-        return fail(
-            ErrorCode::Io, tr("The file %1 could not be read: %2.").arg(path, file.errorString()));
+        return fail(ErrorCode::Io,
+            JsonItemStreamText::tr("The file %1 could not be read: %2.")
+                .arg(path, file.errorString()));
     Source source;
     source.file = &file;
 
@@ -200,7 +201,8 @@ Result<QJsonValue> streamJsonItems(
     } catch (const Json::exception &e) {
         if (source.failed)
             return fail(ErrorCode::Io,
-                tr("The file %1 could not be read: %2.").arg(path, file.errorString()));
+                JsonItemStreamText::tr("The file %1 could not be read: %2.")
+                    .arg(path, file.errorString()));
         // "[json.exception.parse_error.101] parse error at line 2, column 12: syntax error ...":
         // the place is ours already; the reason follows the first ": ".
         QString reason = QString::fromUtf8(e.what());
@@ -208,7 +210,8 @@ Result<QJsonValue> streamJsonItems(
         if (colon >= 0)
             reason = reason.mid(colon + 2);
         return failAt(ErrorCode::InvalidInput, path, source.line,
-            std::max<qint64>(1, source.column), tr("This is not valid JSON: %1.").arg(reason));
+            std::max<qint64>(1, source.column),
+            JsonItemStreamText::tr("This is not valid JSON: %1.").arg(reason));
     }
     return toQt(root);
 }

@@ -19,10 +19,10 @@ namespace {
 const QString g2Namespace = QStringLiteral("http://iptc.org/std/nar/2006-10-01/");
 const QString nitfNamespacePrefix = QStringLiteral("http://iptc.org/std/NITF/");
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 std::unexpected<Error> failed(const QString &file, const _xmlNode *node, const QString &what)
 {
@@ -85,7 +85,7 @@ Result<QStringList> nitfBody(const _xmlNode *nitf, const QString &file)
 {
     _xmlNode *content = descend(nitf, {"body", "body.content"});
     if (!content)
-        return failed(file, nitf, tr("the NITF document has no <body.content>"));
+        return failed(file, nitf, ArticleReaderText::tr("the NITF document has no <body.content>"));
     return htmlParagraphs(content);
 }
 
@@ -159,14 +159,15 @@ Result<QStringList> newsItemText(_xmlNode *item, const QString &file)
 {
     _xmlNode *contentSet = xmlFirstChild(item, "contentSet");
     if (!contentSet)
-        return failed(file, item, tr("the newsItem has no <contentSet>"));
+        return failed(file, item, ArticleReaderText::tr("the newsItem has no <contentSet>"));
     for (_xmlNode *content : xmlChildElements(contentSet)) {
         const QString name = xmlLocalName(content);
         const QString type = xmlAttribute(content, "contenttype").trimmed();
         if (name == u"inlineData") {
             if (!type.isEmpty() && type != u"text/plain")
                 return failed(file, content,
-                    tr("<inlineData> of type \"%1\" cannot be read; Fourfold reads text/plain")
+                    ArticleReaderText::tr(
+                        "<inlineData> of type \"%1\" cannot be read; Fourfold reads text/plain")
                         .arg(type));
             return plainTextParagraphs(xmlText(content), file, xmlLine(content));
         }
@@ -174,7 +175,8 @@ Result<QStringList> newsItemText(_xmlNode *item, const QString &file)
             continue;
         const std::vector<_xmlNode *> children = xmlChildElements(content);
         if (children.size() != 1)
-            return failed(file, content, tr("<inlineXML> must hold one element (NITF or XHTML)"));
+            return failed(file, content,
+                ArticleReaderText::tr("<inlineXML> must hold one element (NITF or XHTML)"));
         _xmlNode *document = children.front();
         if (isNitf(document))
             return nitfBody(document, file);
@@ -183,12 +185,13 @@ Result<QStringList> newsItemText(_xmlNode *item, const QString &file)
             return htmlParagraphs(body ? body : document);
         }
         return failed(file, document,
-            tr("<inlineXML> holds <%1>; Fourfold reads NITF and XHTML")
+            ArticleReaderText::tr("<inlineXML> holds <%1>; Fourfold reads NITF and XHTML")
                 .arg(xmlQualifiedName(document)));
     }
     return failed(file, contentSet,
-        tr("the newsItem holds no text inline (no <inlineXML> or <inlineData>); remote content "
-           "is not fetched"));
+        ArticleReaderText::tr(
+            "the newsItem holds no text inline (no <inlineXML> or <inlineData>); remote content "
+            "is not fetched"));
 }
 
 // A NewsML-G2 newsItem (IPTC NewsML-G2 specification: itemMeta, contentMeta, contentSet).
@@ -198,7 +201,7 @@ Status readNewsItem(_xmlNode *item, const QString &file, const ImportedArticleSi
     article.sourceLine = xmlLine(item);
     article.externalId = xmlAttribute(item, "guid").trimmed();
     if (article.externalId.isEmpty())
-        return failed(file, item, tr("the newsItem has no guid"));
+        return failed(file, item, ArticleReaderText::tr("the newsItem has no guid"));
     article.language = xmlLanguage(item);
     _xmlNode *itemMeta = xmlFirstChild(item, "itemMeta");
     _xmlNode *contentMeta = xmlFirstChild(item, "contentMeta");
@@ -254,11 +257,12 @@ Status readNewsMessage(_xmlNode *message, const QString &file, const ImportedArt
         itemSet ? xmlChildElements(itemSet) : std::vector<_xmlNode *> {};
     if (items.empty())
         return failed(file, itemSet ? itemSet : message,
-            tr("the newsMessage holds no newsItem: it contains no articles"));
+            ArticleReaderText::tr("the newsMessage holds no newsItem: it contains no articles"));
     for (_xmlNode *item : items) {
         if (xmlLocalName(item) != u"newsItem" || xmlNamespace(item) != g2Namespace)
             return failed(file, item,
-                tr("the newsMessage holds a <%1>; Fourfold imports newsItems only")
+                ArticleReaderText::tr(
+                    "the newsMessage holds a <%1>; Fourfold imports newsItems only")
                     .arg(xmlQualifiedName(item)));
         FOURFOLD_TRY_STATUS(readNewsItem(item, file, take));
     }
@@ -283,8 +287,9 @@ Status readNewsXmlArticles(_xmlNode *root, const QString &file, const ImportedAr
     if (xmlNamespace(root) == g2Namespace && xmlLocalName(root) == u"newsMessage")
         return readNewsMessage(root, file, take);
     return failAt(ErrorCode::Unsupported, file, xmlLine(root), 0,
-        tr("the root element <%1> is not a news item's (<nitf>, or NewsML-G2's <newsItem> or "
-           "<newsMessage>)")
+        ArticleReaderText::tr(
+            "the root element <%1> is not a news item's (<nitf>, or NewsML-G2's <newsItem> or "
+            "<newsMessage>)")
             .arg(xmlQualifiedName(root)));
 }
 

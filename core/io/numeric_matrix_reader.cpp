@@ -13,10 +13,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
-{
-    return QCoreApplication::translate("NumericMatrixReader", text, disambiguation, n);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct NumericMatrixReaderText {
+    Q_DECLARE_TR_FUNCTIONS(NumericMatrixReaderText)
+};
 
 } // namespace
 
@@ -42,28 +42,35 @@ Result<NumericMatrix> readNumericMatrix(const QString &path)
                 const QString name = fields[size_t(i)].trimmed().toString();
                 if (name.isEmpty())
                     return failAt(ErrorCode::InvalidInput, path, line, i + 1,
-                        tr("column %1 of the header has no variable name.").arg(i + 1));
+                        NumericMatrixReaderText::tr("column %1 of the header has no variable name.")
+                            .arg(i + 1));
                 if (matrix.variables.contains(name))
                     return failAt(ErrorCode::InvalidInput, path, line, i + 1,
-                        tr("the variable \"%1\" appears twice in the header.").arg(name));
+                        NumericMatrixReaderText::tr(
+                            "the variable \"%1\" appears twice in the header.")
+                            .arg(name));
                 matrix.variables << name;
             }
             if (matrix.variables.isEmpty())
                 return failAt(ErrorCode::InvalidInput, path, line, 0,
-                    tr("the header names no variable; expected \"article,<variable>,...\"."));
+                    NumericMatrixReaderText::tr(
+                        "the header names no variable; expected \"article,<variable>,...\"."));
             return {};
         }
         if (qsizetype(fields.size()) != columns)
             return failAt(ErrorCode::InvalidInput, path, line, 0,
-                tr("this row has %1 fields but the header has %2.")
+                NumericMatrixReaderText::tr("this row has %1 fields but the header has %2.")
                     .arg(fields.size())
                     .arg(columns));
         const QString id = fields[0].trimmed().toString();
         if (id.isEmpty())
-            return failAt(ErrorCode::InvalidInput, path, line, 1, tr("the article id is empty."));
+            return failAt(ErrorCode::InvalidInput, path, line, 1,
+                NumericMatrixReaderText::tr("the article id is empty."));
         if (const auto it = seen.constFind(id); it != seen.constEnd())
             return failAt(ErrorCode::InvalidInput, path, line, 1,
-                tr("the article \"%1\" appears twice (first on line %2).").arg(id).arg(*it));
+                NumericMatrixReaderText::tr("the article \"%1\" appears twice (first on line %2).")
+                    .arg(id)
+                    .arg(*it));
         seen.insert(id, line);
         matrix.rows << id;
         for (qsizetype c = 1; c < columns; ++c) {
@@ -72,10 +79,12 @@ Result<NumericMatrix> readNumericMatrix(const QString &path)
             const double value = cell.toDouble(&ok); // C locale: a point, no grouping
             if (!ok || !std::isfinite(value))
                 return failAt(ErrorCode::InvalidInput, path, line, c + 1,
-                    cell.isEmpty() ? tr("column %1 (\"%2\") is empty; every cell needs a number.")
+                    cell.isEmpty() ? NumericMatrixReaderText::tr(
+                        "column %1 (\"%2\") is empty; every cell needs a number.")
                                          .arg(c + 1)
                                          .arg(matrix.variables[c - 1])
-                                   : tr("column %1 (\"%2\") holds \"%3\", which is not a number.")
+                                   : NumericMatrixReaderText::tr(
+                                       "column %1 (\"%2\") holds \"%3\", which is not a number.")
                                          .arg(c + 1)
                                          .arg(matrix.variables[c - 1], cell.toString()));
             matrix.values.push_back(value);
@@ -85,10 +94,11 @@ Result<NumericMatrix> readNumericMatrix(const QString &path)
     FOURFOLD_TRY_STATUS(forEachCsvRecord(*text, path, readRecord));
     if (columns == 0)
         return failAt(ErrorCode::InvalidInput, path, 1, 0,
-            tr("the file is empty; expected a header row \"article,<variable>,...\"."));
+            NumericMatrixReaderText::tr(
+                "the file is empty; expected a header row \"article,<variable>,...\"."));
     if (matrix.rows.isEmpty())
         return failAt(ErrorCode::InvalidInput, path, headerLine, 0,
-            tr("the file has a header but no articles."));
+            NumericMatrixReaderText::tr("the file has a header but no articles."));
     return matrix;
 }
 

@@ -23,10 +23,10 @@ const QString styleNamespace = QStringLiteral("urn:oasis:names:tc:opendocument:x
 // The media type of a text document (part 3 §3.3, the mimetype entry; appendix C).
 const QString textMediaType = QStringLiteral("application/vnd.oasis.opendocument.text");
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 bool is(const xmlNode *node, const QString &ns, const char16_t *localName)
 {
@@ -218,7 +218,8 @@ Result<ImportedArticle> readOdtArticle(
         const QString type = QString::fromUtf8(*mimetype).trimmed();
         if (type != textMediaType && type != textMediaType + QStringLiteral("-template"))
             return failAt(ErrorCode::InvalidInput, file, 0, 0,
-                tr("the package is of the type \"%1\", not an OpenDocument text (%2)")
+                ArticleReaderText::tr(
+                    "the package is of the type \"%1\", not an OpenDocument text (%2)")
                     .arg(type, textMediaType));
     }
     Result<bool> encrypted = manifestSaysEncrypted(archive);
@@ -226,25 +227,28 @@ Result<ImportedArticle> readOdtArticle(
         return std::unexpected(encrypted.error());
     if (*encrypted)
         return failAt(ErrorCode::InvalidInput, file, 0, 0,
-            tr("the document is encrypted (its manifest holds encryption data); save it without "
-               "a password first"));
+            ArticleReaderText::tr(
+                "the document is encrypted (its manifest holds encryption data); save it without "
+                "a password first"));
     const QString contentPart = QStringLiteral("content.xml");
     if (!archive.contains(contentPart))
         return failAt(ErrorCode::InvalidInput, file, 0, 0,
-            tr("the archive holds no content.xml: it is not an OpenDocument text"));
+            ArticleReaderText::tr(
+                "the archive holds no content.xml: it is not an OpenDocument text"));
     Result<XmlDocument> content = parseZipPart(archive, contentPart);
     if (!content)
         return std::unexpected(content.error());
     xmlNode *root = content->root();
     if (!is(root, officeNamespace, u"document-content"))
         return zipPartFailed(archive, contentPart, root,
-            tr("the root element is <%1>, not <office:document-content>")
+            ArticleReaderText::tr("the root element is <%1>, not <office:document-content>")
                 .arg(xmlQualifiedName(root)));
     xmlNode *body = xmlFirstChild(root, "body");
     xmlNode *officeText = body ? xmlFirstChild(body, "text") : nullptr;
     if (!officeText)
         return zipPartFailed(archive, contentPart, body ? body : root,
-            tr("the document has no <office:text> body: it is not a text document"));
+            ArticleReaderText::tr(
+                "the document has no <office:text> body: it is not a text document"));
 
     Styles styles;
     const QString stylesPart = QStringLiteral("styles.xml");

@@ -42,10 +42,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 QString fromUstring(const poppler::ustring &text)
 {
@@ -282,7 +282,7 @@ Result<ImportedArticle> readPdfArticle(const QByteArray &bytes, const QString &f
     // The header (ISO 32000-1 §7.5.2) is "%PDF-" and the version; readers accept it anywhere in
     // the first 1024 bytes (common practice, as the PDF Reference's implementation notes allow).
     if (!bytes.first(std::min<qsizetype>(bytes.size(), 1024)).contains("%PDF-"))
-        return failed(tr("the file is not a PDF (it has no \"%PDF-\" header)"));
+        return failed(ArticleReaderText::tr("the file is not a PDF (it has no \"%PDF-\" header)"));
     static const bool quiet = [] {
         poppler::set_debug_error_function(quietPoppler, nullptr);
         return true;
@@ -291,22 +291,26 @@ Result<ImportedArticle> readPdfArticle(const QByteArray &bytes, const QString &f
     std::unique_ptr<poppler::document> document(
         poppler::document::load_from_raw_data(bytes.constData(), int(bytes.size())));
     if (!document)
-        return failed(tr("the PDF cannot be read: it is damaged, cut off or encrypted in a way "
-                         "poppler cannot open"));
+        return failed(ArticleReaderText::tr(
+            "the PDF cannot be read: it is damaged, cut off or encrypted in a way "
+            "poppler cannot open"));
     if (document->is_locked())
-        return failed(tr("the PDF is encrypted with a password; save a copy without the password "
-                         "first"));
+        return failed(ArticleReaderText::tr(
+            "the PDF is encrypted with a password; save a copy without the password "
+            "first"));
 
     const int pageCount = document->pages();
     if (pageCount <= 0)
-        return failed(tr("the PDF has no pages: it is damaged or cut off"));
+        return failed(ArticleReaderText::tr("the PDF has no pages: it is damaged or cut off"));
     std::vector<std::vector<Line>> pages;
     std::vector<double> heights;
     qsizetype characters = 0;
     for (int p = 0; p < pageCount; ++p) {
         std::unique_ptr<poppler::page> page(document->create_page(p));
         if (!page) {
-            return failed(tr("page %1 of the PDF cannot be read: the file is damaged").arg(p + 1));
+            return failed(
+                ArticleReaderText::tr("page %1 of the PDF cannot be read: the file is damaged")
+                    .arg(p + 1));
         }
         pages.push_back(pageLines(*page, p));
         heights.push_back(page->page_rect(poppler::media_box).height());
@@ -314,15 +318,16 @@ Result<ImportedArticle> readPdfArticle(const QByteArray &bytes, const QString &f
             characters += line.text.size();
     }
     if (characters == 0)
-        return failed(tr("the PDF has no text layer on any of its %1 page(s): it looks scanned "
-                         "(pages as images); run it through OCR (text recognition) first and "
-                         "import the result")
+        return failed(ArticleReaderText::tr(
+            "the PDF has no text layer on any of its %1 page(s): it looks scanned "
+            "(pages as images); run it through OCR (text recognition) first and "
+            "import the result")
                           .arg(pageCount));
     dropRunningLines(pages, heights);
     QStringList paragraphs = paragraphsOf(pages);
     if (paragraphs.isEmpty())
-        return failed(
-            tr("the PDF holds no text besides running headers, footers and page numbers"));
+        return failed(ArticleReaderText::tr(
+            "the PDF holds no text besides running headers, footers and page numbers"));
 
     ImportedArticle article;
     const QString baseName = QFileInfo(file).completeBaseName();
@@ -340,7 +345,7 @@ Result<ImportedArticle> readPdfArticle(const QByteArray &bytes, const QString &f
         article.title = baseName;
     }
     if (paragraphs.isEmpty())
-        return failed(tr("the PDF holds no text besides its title"));
+        return failed(ArticleReaderText::tr("the PDF holds no text besides its title"));
     article.text = paragraphs.join(QStringLiteral("\n\n"));
     const QString author = fromUstring(document->get_author()).simplified();
     if (!author.isEmpty())

@@ -18,10 +18,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text, const char *disambiguation = nullptr, int n = -1)
-{
-    return QCoreApplication::translate("ReliabilityTableReader", text, disambiguation, n);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ReliabilityTableReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ReliabilityTableReaderText)
+};
 
 // The units read so far, for finding a repeated unit id without a second string per unit: an
 // open-addressing set of positions in the table with their ids' hashes, so that a probe compares
@@ -116,33 +116,39 @@ Result<ReliabilityTable> readReliabilityTableDecoded(const QByteArray &bytes, co
             columns = qsizetype(fields.size());
             if (fields[0].trimmed().compare(QLatin1String("unit"), Qt::CaseInsensitive) != 0)
                 return failAt(ErrorCode::InvalidInput, path, line, 1,
-                    tr("the first column of the header must be \"unit\", found \"%1\".")
+                    ReliabilityTableReaderText::tr(
+                        "the first column of the header must be \"unit\", found \"%1\".")
                         .arg(fields[0]));
             for (qsizetype i = 1; i < columns; ++i) {
                 const QString coder = fields[size_t(i)].trimmed().toString();
                 if (coder.isEmpty())
                     return failAt(ErrorCode::InvalidInput, path, line, 0,
-                        tr("column %1 of the header has no coder name.").arg(i + 1));
+                        ReliabilityTableReaderText::tr("column %1 of the header has no coder name.")
+                            .arg(i + 1));
                 if (table.coders.contains(coder))
                     return failAt(ErrorCode::InvalidInput, path, line, 0,
-                        tr("the coder \"%1\" appears twice in the header.").arg(coder));
+                        ReliabilityTableReaderText::tr(
+                            "the coder \"%1\" appears twice in the header.")
+                            .arg(coder));
                 table.coders << coder;
             }
             if (table.coders.size() < 2)
                 return failAt(ErrorCode::InvalidInput, path, line, 0,
-                    tr("reliability needs at least two coders; the header names %n.", nullptr,
+                    ReliabilityTableReaderText::tr(
+                        "reliability needs at least two coders; the header names %n.", nullptr,
                         int(table.coders.size())));
             table.reserve(size_t(lines));
             return {};
         }
         if (qsizetype(fields.size()) != columns)
             return failAt(ErrorCode::InvalidInput, path, line, 0,
-                tr("this row has %1 fields but the header has %2.")
+                ReliabilityTableReaderText::tr("this row has %1 fields but the header has %2.")
                     .arg(fields.size())
                     .arg(columns));
         const QStringView unit = fields[0].trimmed();
         if (unit.isEmpty())
-            return failAt(ErrorCode::InvalidInput, path, line, 1, tr("the unit id is empty."));
+            return failAt(ErrorCode::InvalidInput, path, line, 1,
+                ReliabilityTableReaderText::tr("the unit id is empty."));
         cells.clear();
         for (qsizetype c = 1; c < columns; ++c) {
             const QStringView cell = fields[size_t(c)].trimmed();
@@ -151,7 +157,7 @@ Result<ReliabilityTable> readReliabilityTableDecoded(const QByteArray &bytes, co
         table.appendUnit(unit, cells, line);
         if (const qsizetype first = seen.insertLast(); first >= 0)
             return failAt(ErrorCode::InvalidInput, path, line, 1,
-                tr("the unit \"%1\" appears twice (first on line %2).")
+                ReliabilityTableReaderText::tr("the unit \"%1\" appears twice (first on line %2).")
                     .arg(unit)
                     .arg(table.unitLine(size_t(first))));
         return {};
@@ -159,10 +165,11 @@ Result<ReliabilityTable> readReliabilityTableDecoded(const QByteArray &bytes, co
     FOURFOLD_TRY_STATUS(forEachCsvRecord(*text, path, readRecord));
     if (columns == 0)
         return failAt(ErrorCode::InvalidInput, path, 1, 0,
-            tr("the file is empty; expected a header row \"unit,<coder>,<coder>,...\"."));
+            ReliabilityTableReaderText::tr(
+                "the file is empty; expected a header row \"unit,<coder>,<coder>,...\"."));
     if (table.isEmpty())
         return failAt(ErrorCode::InvalidInput, path, headerLine, 0,
-            tr("the file has a header but no units."));
+            ReliabilityTableReaderText::tr("the file has a header but no units."));
     return table;
 }
 

@@ -16,10 +16,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 struct ContextFree {
     void operator()(xmlParserCtxt *context) const { xmlFreeParserCtxt(context); }
@@ -84,8 +84,9 @@ Status checkEntities(xmlDoc *doc, const QByteArray &bytes, const QString &file)
             if (external) {
                 const QString name = fromXml(entity->name);
                 return failAt(ErrorCode::InvalidInput, file, declarationLine(bytes, name), 0,
-                    tr("the file declares the external entity \"%1\" (%2); Fourfold reads "
-                       "nothing from outside the file")
+                    ArticleReaderText::tr(
+                        "the file declares the external entity \"%1\" (%2); Fourfold reads "
+                        "nothing from outside the file")
                         .arg(name, fromXml(entity->SystemID)));
             }
         }
@@ -97,7 +98,8 @@ Status checkEntities(xmlDoc *doc, const QByteArray &bytes, const QString &file)
             if (!node->children) {
                 const qint64 line = node->parent ? xmlGetLineNo(node->parent) : 0;
                 return failAt(ErrorCode::InvalidInput, file, line, 0,
-                    tr("the entity \"&%1;\" is not declared in the file").arg(fromXml(node->name)));
+                    ArticleReaderText::tr("the entity \"&%1;\" is not declared in the file")
+                        .arg(fromXml(node->name)));
             }
         } else if (node->children) {
             node = node->children;
@@ -147,7 +149,8 @@ Result<XmlDocument> XmlDocument::parse(const QByteArray &bytes, const QString &f
         if (encoding.compare(u"utf-8", Qt::CaseInsensitive) != 0
             && encoding.compare(u"utf8", Qt::CaseInsensitive) != 0) {
             return failAt(ErrorCode::InvalidInput, file, 1, 0,
-                tr("the file declares the encoding \"%1\"; convert it to UTF-8 first")
+                ArticleReaderText::tr(
+                    "the file declares the encoding \"%1\"; convert it to UTF-8 first")
                     .arg(encoding));
         }
     }
@@ -159,11 +162,12 @@ Result<XmlDocument> XmlDocument::parse(const QByteArray &bytes, const QString &f
     Q_UNUSED(initialised);
     const qsizetype skip = bytes.startsWith("\xEF\xBB\xBF") ? 3 : 0;
     if (bytes.size() - skip > std::numeric_limits<int>::max())
-        return failAt(
-            ErrorCode::InvalidInput, file, 0, 0, tr("the file is too large for the XML parser"));
+        return failAt(ErrorCode::InvalidInput, file, 0, 0,
+            ArticleReaderText::tr("the file is too large for the XML parser"));
     const std::unique_ptr<xmlParserCtxt, ContextFree> context(xmlNewParserCtxt());
     if (!context)
-        return failAt(ErrorCode::Internal, file, 0, 0, tr("the XML parser could not be started"));
+        return failAt(ErrorCode::Internal, file, 0, 0,
+            ArticleReaderText::tr("the XML parser could not be started"));
     FirstError first;
     first.main = context.get();
     context->_private = &first;
@@ -184,16 +188,18 @@ Result<XmlDocument> XmlDocument::parse(const QByteArray &bytes, const QString &f
         const bool amplified = cause.contains(u"entity reference loop")
             || cause.contains(u"amplification") || cause.contains(u"Maximum entity");
         auto error = failAt(ErrorCode::InvalidInput, file, line, 0,
-            amplified ? tr("the XML is refused: its entities expand too far (an entity-expansion "
-                           "bomb?): %1")
+            amplified ? ArticleReaderText::tr(
+                "the XML is refused: its entities expand too far (an entity-expansion "
+                "bomb?): %1")
                             .arg(cause)
-                      : tr("the file is not well-formed XML: %1").arg(cause));
+                      : ArticleReaderText::tr("the file is not well-formed XML: %1").arg(cause));
         error.error().cause = cause;
         return error;
     }
     FOURFOLD_TRY_STATUS(checkEntities(doc.get(), bytes, file));
     if (!xmlDocGetRootElement(doc.get()))
-        return failAt(ErrorCode::InvalidInput, file, 0, 0, tr("the file holds no XML element"));
+        return failAt(ErrorCode::InvalidInput, file, 0, 0,
+            ArticleReaderText::tr("the file holds no XML element"));
     return XmlDocument(doc.release());
 }
 

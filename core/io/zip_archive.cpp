@@ -13,17 +13,17 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ArticleReader", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ArticleReaderText {
+    Q_DECLARE_TR_FUNCTIONS(ArticleReaderText)
+};
 
 QString mebibytes(qint64 bytes)
 {
     // Limits are whole MiB; a test's smaller limit is said in bytes.
     if (bytes % (qint64(1) << 20) == 0)
-        return tr("%1 MiB").arg(bytes >> 20);
-    return tr("%1 bytes").arg(bytes);
+        return ArticleReaderText::tr("%1 MiB").arg(bytes >> 20);
+    return ArticleReaderText::tr("%1 bytes").arg(bytes);
 }
 
 struct FileClose {
@@ -53,7 +53,8 @@ Result<ZipArchive> ZipArchive::open(QByteArray bytes, const QString &file, ZipLi
         archive.m_bytes->constData(), zip_uint64_t(archive.m_bytes->size()), 0, &error);
     if (!source) {
         zip_error_fini(&error);
-        return failAt(ErrorCode::Internal, file, 0, 0, tr("the zip reader could not be started"));
+        return failAt(ErrorCode::Internal, file, 0, 0,
+            ArticleReaderText::tr("the zip reader could not be started"));
     }
     // ZIP_CHECKCONS: the central directory is checked against the local headers, so a cut-off
     // or patched archive is refused here rather than half read.
@@ -65,10 +66,11 @@ Result<ZipArchive> ZipArchive::open(QByteArray bytes, const QString &file, ZipLi
         zip_error_fini(&error);
         auto failed = failAt(ErrorCode::InvalidInput, file, 0, 0,
             code == ZIP_ER_NOZIP
-                ? tr("the file is not a readable zip archive (not one at all, or cut off or "
-                     "damaged): %1")
+                ? ArticleReaderText::tr(
+                    "the file is not a readable zip archive (not one at all, or cut off or "
+                    "damaged): %1")
                       .arg(cause)
-                : tr("the file is a damaged zip archive: %1").arg(cause));
+                : ArticleReaderText::tr("the file is a damaged zip archive: %1").arg(cause));
         failed.error().cause = cause;
         return failed;
     }
@@ -100,22 +102,23 @@ Result<QByteArray> ZipArchive::read(const QString &name)
     };
     const zip_int64_t index = zip_name_locate(m_zip.get(), name.toUtf8().constData(), 0);
     if (index < 0)
-        return failed(tr("the archive holds no %1").arg(name));
+        return failed(ArticleReaderText::tr("the archive holds no %1").arg(name));
     zip_stat_t stat;
     zip_stat_init(&stat);
     if (zip_stat_index(m_zip.get(), zip_uint64_t(index), 0, &stat) != 0)
-        return failed(tr("the entry %1 of the archive cannot be read: %2")
+        return failed(ArticleReaderText::tr("the entry %1 of the archive cannot be read: %2")
                           .arg(name, QString::fromUtf8(zip_strerror(m_zip.get()))));
     // APPNOTE.TXT §4.4.4 (general purpose bit 0) and the strong-encryption header: libzip
     // reports either as an encryption method.
     if ((stat.valid & ZIP_STAT_ENCRYPTION_METHOD) && stat.encryption_method != ZIP_EM_NONE)
-        return failed(tr("the entry %1 of the archive is encrypted; save the document without a "
-                         "password first")
+        return failed(ArticleReaderText::tr(
+            "the entry %1 of the archive is encrypted; save the document without a "
+            "password first")
                           .arg(name));
     std::unique_ptr<zip_file_t, FileClose> entry(
         zip_fopen_index(m_zip.get(), zip_uint64_t(index), 0));
     if (!entry)
-        return failed(tr("the entry %1 of the archive cannot be opened: %2")
+        return failed(ArticleReaderText::tr("the entry %1 of the archive cannot be opened: %2")
                           .arg(name, QString::fromUtf8(zip_strerror(m_zip.get()))));
     QByteArray bytes;
     std::array<char, 64 * 1024> buffer {};
@@ -123,7 +126,8 @@ Result<QByteArray> ZipArchive::read(const QString &name)
         const zip_int64_t n = zip_fread(entry.get(), buffer.data(), buffer.size());
         if (n < 0) {
             const QString cause = QString::fromUtf8(zip_file_strerror(entry.get()));
-            auto error = failed(tr("the entry %1 of the archive is damaged: %2").arg(name, cause));
+            auto error = failed(ArticleReaderText::tr("the entry %1 of the archive is damaged: %2")
+                                    .arg(name, cause));
             error.error().cause = cause;
             return error;
         }
@@ -131,12 +135,14 @@ Result<QByteArray> ZipArchive::read(const QString &name)
             break;
         m_unpacked += n;
         if (bytes.size() + n > m_limits.entry)
-            return failed(tr("the entry %1 unpacks to more than %2; Fourfold unpacks at most %2 "
-                             "from one entry (is it a zip bomb?)")
+            return failed(ArticleReaderText::tr(
+                "the entry %1 unpacks to more than %2; Fourfold unpacks at most %2 "
+                "from one entry (is it a zip bomb?)")
                               .arg(name, mebibytes(m_limits.entry)));
         if (m_unpacked > m_limits.total)
-            return failed(tr("the archive unpacks to more than %1 in all; Fourfold unpacks at most "
-                             "%1 from one archive (is it a zip bomb?)")
+            return failed(ArticleReaderText::tr(
+                "the archive unpacks to more than %1 in all; Fourfold unpacks at most "
+                "%1 from one archive (is it a zip bomb?)")
                               .arg(mebibytes(m_limits.total)));
         bytes.append(buffer.data(), qsizetype(n));
     }
@@ -179,7 +185,8 @@ Error inZipPart(Error error, const QString &file, const QString &part)
     prefix += QStringLiteral(": ");
     const QString sentence =
         error.message.startsWith(prefix) ? error.message.sliced(prefix.size()) : error.message;
-    const QString where = error.line > 0 ? tr("%1, line %2").arg(part).arg(error.line) : part;
+    const QString where =
+        error.line > 0 ? ArticleReaderText::tr("%1, line %2").arg(part).arg(error.line) : part;
     Error moved = failAt(error.code, file, 0, 0, where + QStringLiteral(": ") + sentence).error();
     moved.cause = error.cause;
     return moved;

@@ -6,10 +6,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("Codebook", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CodebookText {
+    Q_DECLARE_TR_FUNCTIONS(CodebookText)
+};
 
 } // namespace
 
@@ -87,17 +87,18 @@ Status Codebook::validateAttributes(FramingFunction f, const QJsonObject &attrib
             for (const AttributeSpec &a : def.attributes)
                 keys << a.key;
             return fail(ErrorCode::InvalidInput,
-                tr("The codebook has no attribute \"%1\" for %2 (it has: %3).")
+                CodebookText::tr("The codebook has no attribute \"%1\" for %2 (it has: %3).")
                     .arg(it.key(), functionKey(f),
-                        keys.isEmpty() ? tr("none") : keys.join(QStringLiteral(", "))));
+                        keys.isEmpty() ? CodebookText::tr("none")
+                                       : keys.join(QStringLiteral(", "))));
         }
         if (!it.value().isString())
-            return fail(
-                ErrorCode::InvalidInput, tr("The attribute \"%1\" must be text.").arg(it.key()));
+            return fail(ErrorCode::InvalidInput,
+                CodebookText::tr("The attribute \"%1\" must be text.").arg(it.key()));
         if (spec->type == AttributeSpec::Type::Choice
             && !spec->values.contains(it.value().toString()))
             return fail(ErrorCode::InvalidInput,
-                tr("\"%1\" is not a value of the attribute \"%2\" (allowed: %3).")
+                CodebookText::tr("\"%1\" is not a value of the attribute \"%2\" (allowed: %3).")
                     .arg(it.value().toString(), it.key(), spec->values.join(QStringLiteral(", "))));
     }
     return {};
@@ -107,11 +108,11 @@ Status Codebook::validateJudgement(const QString &key, const QString &value) con
 {
     const ArticleItem *i = item(key);
     if (!i)
-        return fail(
-            ErrorCode::NotFound, tr("The codebook has no article-level item \"%1\".").arg(key));
+        return fail(ErrorCode::NotFound,
+            CodebookText::tr("The codebook has no article-level item \"%1\".").arg(key));
     if (!i->values.contains(value))
         return fail(ErrorCode::InvalidInput,
-            tr("\"%1\" is not an answer to \"%2\" (allowed: %3).")
+            CodebookText::tr("\"%1\" is not an answer to \"%2\" (allowed: %3).")
                 .arg(value, key, i->values.join(QStringLiteral(", "))));
     return {};
 }

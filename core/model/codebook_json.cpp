@@ -11,30 +11,30 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("Codebook", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CodebookText {
+    Q_DECLARE_TR_FUNCTIONS(CodebookText)
+};
 
 QString typeName(const QJsonValue &value)
 {
     switch (value.type()) {
     case QJsonValue::Null:
-        return tr("null");
+        return CodebookText::tr("null");
     case QJsonValue::Bool:
-        return tr("a boolean");
+        return CodebookText::tr("a boolean");
     case QJsonValue::Double:
-        return tr("a number");
+        return CodebookText::tr("a number");
     case QJsonValue::String:
-        return tr("a string");
+        return CodebookText::tr("a string");
     case QJsonValue::Array:
-        return tr("an array");
+        return CodebookText::tr("an array");
     case QJsonValue::Object:
-        return tr("an object");
+        return CodebookText::tr("an object");
     case QJsonValue::Undefined:
         break;
     }
-    return tr("nothing");
+    return CodebookText::tr("nothing");
 }
 
 // A text from the file as a message shows it: control characters as \uXXXX, so that none reaches
@@ -87,7 +87,8 @@ public:
     {
         if (m_places && !m_places->repeatedKey().isEmpty())
             return failAt(ErrorCode::InvalidInput, m_source, m_places->repeatedKeyLine(), 0,
-                tr("the key \"%1\" appears twice.").arg(shown(m_places->repeatedKey())));
+                CodebookText::tr("the key \"%1\" appears twice.")
+                    .arg(shown(m_places->repeatedKey())));
         FOURFOLD_TRY_STATUS(onlyKeys(root, QString(), {"name", "functions", "items"}));
         Codebook book;
         auto name = text(root, QString(), QStringLiteral("name"), QString(), Lines::One);
@@ -108,8 +109,9 @@ public:
             const size_t at = size_t(def->function);
             if (defined[at])
                 return wrong(member(path, QStringLiteral("key")),
-                    tr("\"%1\" defines the function \"%2\" a second time; a codebook defines "
-                       "problem, cause, evaluation and remedy once each.")
+                    CodebookText::tr(
+                        "\"%1\" defines the function \"%2\" a second time; a codebook defines "
+                        "problem, cause, evaluation and remedy once each.")
                         .arg(member(path, QStringLiteral("key")), functionKey(def->function)));
             defined[at] = true;
             book.functions[at] = std::move(*def);
@@ -117,7 +119,8 @@ public:
         for (FramingFunction f : kFramingFunctions)
             if (!defined[size_t(f)])
                 return wrong(QStringLiteral("functions"),
-                    tr("the codebook does not define the function \"%1\".").arg(functionKey(f)));
+                    CodebookText::tr("the codebook does not define the function \"%1\".")
+                        .arg(functionKey(f)));
 
         auto items = array(root, QString(), QStringLiteral("items"), false);
         if (!items)
@@ -129,7 +132,7 @@ public:
                 return std::unexpected(item.error());
             if (book.item(item->key))
                 return wrong(member(path, QStringLiteral("key")),
-                    tr("\"%1\" repeats the item \"%2\".")
+                    CodebookText::tr("\"%1\" repeats the item \"%2\".")
                         .arg(member(path, QStringLiteral("key")), shown(item->key)));
             book.items.push_back(std::move(*item));
         }
@@ -146,8 +149,9 @@ private:
     std::unexpected<Error> wrongType(
         const QString &path, const QJsonValue &value, const QString &expected) const
     {
-        return wrong(
-            path, tr("\"%1\" must be %2, not %3.").arg(shown(path), expected, typeName(value)));
+        return wrong(path,
+            CodebookText::tr("\"%1\" must be %2, not %3.")
+                .arg(shown(path), expected, typeName(value)));
     }
 
     Status onlyKeys(const QJsonObject &o, const QString &path,
@@ -159,7 +163,7 @@ private:
         for (auto it = o.begin(); it != o.end(); ++it)
             if (!names.contains(it.key()))
                 return wrong(member(path, it.key()),
-                    tr("unknown key \"%1\" (expected one of: %2).")
+                    CodebookText::tr("unknown key \"%1\" (expected one of: %2).")
                         .arg(shown(member(path, it.key())), names.join(QStringLiteral(", "))));
         return {};
     }
@@ -175,10 +179,11 @@ private:
                 continue;
             return wrong(path,
                 lines == Lines::Many
-                    ? tr("\"%1\" contains the control character U+%2; only line breaks and tabs "
-                         "may stand in definitions, rules, examples and questions.")
+                    ? CodebookText::tr(
+                        "\"%1\" contains the control character U+%2; only line breaks and tabs "
+                        "may stand in definitions, rules, examples and questions.")
                           .arg(shown(path), codePoint(c))
-                    : tr("\"%1\" contains the control character U+%2.")
+                    : CodebookText::tr("\"%1\" contains the control character U+%2.")
                           .arg(shown(path), codePoint(c)));
         }
         return {};
@@ -192,11 +197,11 @@ private:
         if (!o.contains(key)) {
             if (fallback)
                 return *fallback;
-            return wrong(path, tr("\"%1\" is missing.").arg(shown(at)));
+            return wrong(path, CodebookText::tr("\"%1\" is missing.").arg(shown(at)));
         }
         const QJsonValue v = o.value(key);
         if (!v.isString())
-            return wrongType(at, v, tr("a string"));
+            return wrongType(at, v, CodebookText::tr("a string"));
         FOURFOLD_TRY_STATUS(checkText(at, v.toString(), lines));
         return v.toString();
     }
@@ -209,11 +214,11 @@ private:
         if (!o.contains(key)) {
             if (!required)
                 return QJsonArray();
-            return wrong(path, tr("\"%1\" is missing.").arg(shown(at)));
+            return wrong(path, CodebookText::tr("\"%1\" is missing.").arg(shown(at)));
         }
         const QJsonValue v = o.value(key);
         if (!v.isArray())
-            return wrongType(at, v, tr("an array"));
+            return wrongType(at, v, CodebookText::tr("an array"));
         return v.toArray();
     }
 
@@ -228,7 +233,7 @@ private:
             const QString at = element(member(path, key), i);
             const QJsonValue v = a->at(i);
             if (!v.isString())
-                return wrongType(at, v, tr("a string"));
+                return wrongType(at, v, CodebookText::tr("a string"));
             FOURFOLD_TRY_STATUS(checkText(at, v.toString(), lines));
             out << v.toString();
         }
@@ -243,16 +248,16 @@ private:
             return out;
         const QString at = member(path, QStringLiteral("values"));
         if (out->isEmpty())
-            return wrong(at, tr("\"%1\" lists no values.").arg(shown(at)));
+            return wrong(at, CodebookText::tr("\"%1\" lists no values.").arg(shown(at)));
         if (m_check == CodebookCheck::Stored)
             return out;
         for (qsizetype i = 0; i < out->size(); ++i) {
             if (out->at(i).trimmed().isEmpty())
-                return wrong(
-                    element(at, i), tr("\"%1\" is an empty value.").arg(shown(element(at, i))));
+                return wrong(element(at, i),
+                    CodebookText::tr("\"%1\" is an empty value.").arg(shown(element(at, i))));
             if (out->indexOf(out->at(i)) < i)
                 return wrong(element(at, i),
-                    tr("\"%1\" repeats the value \"%2\".")
+                    CodebookText::tr("\"%1\" repeats the value \"%2\".")
                         .arg(shown(element(at, i)), shown(out->at(i))));
         }
         return out;
@@ -268,23 +273,26 @@ private:
             return out;
         const QJsonValue v = o.value(QStringLiteral("recode"));
         if (!v.isObject())
-            return wrongType(at, v, tr("an object"));
+            return wrongType(at, v, CodebookText::tr("an object"));
         const QJsonObject map = v.toObject();
         for (auto it = map.begin(); it != map.end(); ++it) {
             const QString from = member(at, it.key());
             FOURFOLD_TRY_STATUS(checkText(from, it.key(), Lines::One));
             if (!it.value().isString())
-                return wrongType(from, it.value(), tr("a string"));
+                return wrongType(from, it.value(), CodebookText::tr("a string"));
             if (it.key().trimmed().isEmpty())
-                return wrong(from, tr("\"%1\" recodes an empty value.").arg(shown(from)));
+                return wrong(
+                    from, CodebookText::tr("\"%1\" recodes an empty value.").arg(shown(from)));
             if (values.contains(it.key()))
                 return wrong(from,
-                    tr("\"%1\" recodes \"%2\", which is still one of the values; recode only "
-                       "values that were dropped.")
+                    CodebookText::tr(
+                        "\"%1\" recodes \"%2\", which is still one of the values; recode only "
+                        "values that were dropped.")
                         .arg(shown(from), shown(it.key())));
             if (!values.contains(it.value().toString()))
                 return wrong(from,
-                    tr("\"%1\" recodes to \"%2\", which is not one of the values (%3).")
+                    CodebookText::tr(
+                        "\"%1\" recodes to \"%2\", which is not one of the values (%3).")
                         .arg(shown(from), shown(it.value().toString()),
                             shown(values.join(QStringLiteral(", ")))));
             out.insert(it.key(), it.value().toString());
@@ -300,8 +308,9 @@ private:
         auto l = measurementLevelFromKey(*key);
         if (!l)
             return wrong(member(path, QStringLiteral("level")),
-                tr("\"%1\" is \"%2\", not a level of measurement (nominal, ordinal, interval or "
-                   "ratio).")
+                CodebookText::tr(
+                    "\"%1\" is \"%2\", not a level of measurement (nominal, ordinal, interval or "
+                    "ratio).")
                     .arg(member(path, QStringLiteral("level")), shown(*key)));
         return *l;
     }
@@ -309,7 +318,7 @@ private:
     Result<QJsonObject> object(const QJsonValue &v, const QString &path) const
     {
         if (!v.isObject())
-            return wrongType(path, v, tr("an object"));
+            return wrongType(path, v, CodebookText::tr("an object"));
         return v.toObject();
     }
 
@@ -319,7 +328,7 @@ private:
         auto k = text(o, path, QStringLiteral("key"), std::nullopt, Lines::One);
         if (k && k->trimmed().isEmpty())
             return wrong(member(path, QStringLiteral("key")),
-                tr("\"%1\" is empty.").arg(member(path, QStringLiteral("key"))));
+                CodebookText::tr("\"%1\" is empty.").arg(member(path, QStringLiteral("key"))));
         return k;
     }
 
@@ -336,8 +345,9 @@ private:
         const std::optional<FramingFunction> f = functionFromKey(*k);
         if (!f || functionKey(*f) != *k)
             return wrong(member(path, QStringLiteral("key")),
-                tr("\"%1\" is \"%2\", not one of the four functions (problem, cause, evaluation, "
-                   "remedy).")
+                CodebookText::tr(
+                    "\"%1\" is \"%2\", not one of the four functions (problem, cause, evaluation, "
+                    "remedy).")
                     .arg(member(path, QStringLiteral("key")), shown(*k)));
         FunctionDefinition def;
         def.function = *f;
@@ -368,7 +378,7 @@ private:
             if (std::ranges::find(def.attributes, spec->key, &AttributeSpec::key)
                 != def.attributes.end())
                 return wrong(member(at, QStringLiteral("key")),
-                    tr("\"%1\" repeats the attribute \"%2\" of %3.")
+                    CodebookText::tr("\"%1\" repeats the attribute \"%2\" of %3.")
                         .arg(member(at, QStringLiteral("key")), shown(spec->key), *k));
             def.attributes.push_back(std::move(*spec));
         }
@@ -399,7 +409,8 @@ private:
             for (const char *only : {"values", "recode"})
                 if (o->contains(QLatin1String(only)))
                     return wrong(member(path, QLatin1String(only)),
-                        tr("\"%1\" is only for choice attributes; \"%2\" is a text attribute.")
+                        CodebookText::tr(
+                            "\"%1\" is only for choice attributes; \"%2\" is a text attribute.")
                             .arg(member(path, QLatin1String(only)), shown(spec.key)));
         } else if (*type == QLatin1String("choice")) {
             spec.type = AttributeSpec::Type::Choice;
@@ -413,7 +424,7 @@ private:
             spec.recode = *map;
         } else {
             return wrong(member(path, QStringLiteral("type")),
-                tr("\"%1\" is \"%2\", not an attribute type (choice or text).")
+                CodebookText::tr("\"%1\" is \"%2\", not an attribute type (choice or text).")
                     .arg(member(path, QStringLiteral("type")), shown(*type)));
         }
         auto l = level(*o, path);
@@ -478,11 +489,11 @@ Result<Codebook> Codebook::fromJson(
         const qsizetype lineStart = before.lastIndexOf('\n') + 1;
         return failAt(ErrorCode::InvalidInput, source, before.count('\n') + 1,
             QString::fromUtf8(before.mid(lineStart)).size() + 1,
-            tr("the codebook is not valid JSON: %1.").arg(error.errorString()));
+            CodebookText::tr("the codebook is not valid JSON: %1.").arg(error.errorString()));
     }
     if (!doc.isObject())
         return failAt(ErrorCode::InvalidInput, source, 1, 0,
-            tr("the codebook must be a JSON object, not %1.")
+            CodebookText::tr("the codebook must be a JSON object, not %1.")
                 .arg(typeName(doc.isArray() ? QJsonValue(doc.array()) : QJsonValue())));
     return Reader(json, source, check).read(doc.object());
 }

@@ -13,10 +13,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("AnnotationEdits", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct AnnotationEditsText {
+    Q_DECLARE_TR_FUNCTIONS(AnnotationEditsText)
+};
 
 // The quote at `range` of the article, after checking that the range lies inside its text.
 Result<QString> quoteAt(const Database &db, ArticleId article, const TextRange &range)
@@ -26,7 +26,8 @@ Result<QString> quoteAt(const Database &db, ArticleId article, const TextRange &
         return std::unexpected(slice.error());
     if (!range.isValid() || range.isEmpty() || range.end > slice->length)
         return fail(ErrorCode::InvalidArgument,
-            tr("The span [%1, %2) does not lie inside the article's text of %3 characters.")
+            AnnotationEditsText::tr(
+                "The span [%1, %2) does not lie inside the article's text of %3 characters.")
                 .arg(range.start)
                 .arg(range.end)
                 .arg(slice->length));
@@ -39,7 +40,8 @@ Result<Annotation> liveAnnotation(const Database &db, AnnotationId id)
     if (!row)
         return std::unexpected(row.error());
     if (row->deleted)
-        return fail(ErrorCode::NotFound, tr("Annotation #%1 has been deleted.").arg(id.value));
+        return fail(ErrorCode::NotFound,
+            AnnotationEditsText::tr("Annotation #%1 has been deleted.").arg(id.value));
     return row;
 }
 
@@ -56,7 +58,8 @@ Status validateSpanContent(const Database &db, ArticleId article, const Annotati
         return std::unexpected(book.error());
     FOURFOLD_TRY_STATUS(book->validateAttributes(content.function, content.attributes));
     if (content.confidence && (*content.confidence < 0.0 || *content.confidence > 1.0))
-        return fail(ErrorCode::InvalidArgument, tr("A confidence must lie between 0 and 1."));
+        return fail(ErrorCode::InvalidArgument,
+            AnnotationEditsText::tr("A confidence must lie between 0 and 1."));
     *quote = *q;
     *version = book->versionId;
     return {};
@@ -77,7 +80,7 @@ AddAnnotationEdit::AddAnnotationEdit(
 
 QString AddAnnotationEdit::text() const
 {
-    return tr("Add %1 span").arg(functionKey(m_row.content.function));
+    return AnnotationEditsText::tr("Add %1 span").arg(functionKey(m_row.content.function));
 }
 
 Status AddAnnotationEdit::apply(Database &db)
@@ -94,7 +97,8 @@ Status AddAnnotationEdit::apply(Database &db)
     if (!id) {
         Error e = id.error();
         if (e.code == ErrorCode::Constraint)
-            e.message = tr("The span could not be added: its article or coder does not exist.");
+            e.message = AnnotationEditsText::tr(
+                "The span could not be added: its article or coder does not exist.");
         return std::unexpected(e);
     }
     row.id = *id;
@@ -116,7 +120,7 @@ ChangeAnnotationEdit::ChangeAnnotationEdit(
 
 QString ChangeAnnotationEdit::text() const
 {
-    return tr("Change %1 span").arg(functionKey(m_content.function));
+    return AnnotationEditsText::tr("Change %1 span").arg(functionKey(m_content.function));
 }
 
 Status ChangeAnnotationEdit::apply(Database &db)
@@ -137,7 +141,8 @@ Status ChangeAnnotationEdit::apply(Database &db)
 Status ChangeAnnotationEdit::revert(Database &db)
 {
     if (!FOURFOLD_SOFT_ASSERT(lcProject(), m_before))
-        return fail(ErrorCode::Internal, tr("An edit that was never applied cannot be undone."));
+        return fail(ErrorCode::Internal,
+            AnnotationEditsText::tr("An edit that was never applied cannot be undone."));
     return store::updateAnnotation(db, *m_before);
 }
 
@@ -148,8 +153,9 @@ DeleteAnnotationEdit::DeleteAnnotationEdit(AnnotationId id, CoderId actor)
 
 QString DeleteAnnotationEdit::text() const
 {
-    return m_before ? tr("Delete %1 span").arg(functionKey(m_before->content.function))
-                    : tr("Delete span");
+    return m_before
+        ? AnnotationEditsText::tr("Delete %1 span").arg(functionKey(m_before->content.function))
+        : AnnotationEditsText::tr("Delete span");
 }
 
 Status DeleteAnnotationEdit::apply(Database &db)
@@ -168,7 +174,8 @@ Status DeleteAnnotationEdit::apply(Database &db)
 Status DeleteAnnotationEdit::revert(Database &db)
 {
     if (!FOURFOLD_SOFT_ASSERT(lcProject(), m_before))
-        return fail(ErrorCode::Internal, tr("An edit that was never applied cannot be undone."));
+        return fail(ErrorCode::Internal,
+            AnnotationEditsText::tr("An edit that was never applied cannot be undone."));
     return store::updateAnnotation(db, *m_before);
 }
 
@@ -185,15 +192,16 @@ LinkAnnotationsEdit::LinkAnnotationsEdit(
 
 QString LinkAnnotationsEdit::text() const
 {
-    return tr("Link spans (%1)").arg(m_row.type);
+    return AnnotationEditsText::tr("Link spans (%1)").arg(m_row.type);
 }
 
 Status LinkAnnotationsEdit::apply(Database &db)
 {
     if (m_row.source == m_row.target)
-        return fail(ErrorCode::InvalidArgument, tr("A span cannot be linked to itself."));
+        return fail(ErrorCode::InvalidArgument,
+            AnnotationEditsText::tr("A span cannot be linked to itself."));
     if (m_row.type.trimmed().isEmpty())
-        return fail(ErrorCode::InvalidArgument, tr("A link needs a type."));
+        return fail(ErrorCode::InvalidArgument, AnnotationEditsText::tr("A link needs a type."));
     auto source = liveAnnotation(db, m_row.source);
     if (!source)
         return std::unexpected(source.error());
@@ -201,8 +209,8 @@ Status LinkAnnotationsEdit::apply(Database &db)
     if (!target)
         return std::unexpected(target.error());
     if (source->article != target->article)
-        return fail(
-            ErrorCode::InvalidArgument, tr("Only spans of the same article can be linked."));
+        return fail(ErrorCode::InvalidArgument,
+            AnnotationEditsText::tr("Only spans of the same article can be linked."));
     auto id = store::insertLink(db, m_row);
     if (!id)
         return std::unexpected(id.error());
@@ -222,7 +230,7 @@ UnlinkAnnotationsEdit::UnlinkAnnotationsEdit(LinkId id, CoderId actor)
 
 QString UnlinkAnnotationsEdit::text() const
 {
-    return tr("Remove link (%1)").arg(m_before ? m_before->type : QString());
+    return AnnotationEditsText::tr("Remove link (%1)").arg(m_before ? m_before->type : QString());
 }
 
 Status UnlinkAnnotationsEdit::apply(Database &db)
@@ -231,7 +239,7 @@ Status UnlinkAnnotationsEdit::apply(Database &db)
     if (!row)
         return std::unexpected(row.error());
     if (row->deleted)
-        return fail(ErrorCode::NotFound, tr("The link was removed already."));
+        return fail(ErrorCode::NotFound, AnnotationEditsText::tr("The link was removed already."));
     m_before = *row;
     return store::updateLinkDeleted(db, m_id, true);
 }
@@ -257,7 +265,7 @@ SetJudgementEdit::SetJudgementEdit(
 
 QString SetJudgementEdit::text() const
 {
-    return tr("Answer \"%1\"").arg(m_after.itemKey);
+    return AnnotationEditsText::tr("Answer \"%1\"").arg(m_after.itemKey);
 }
 
 Status SetJudgementEdit::apply(Database &db)
@@ -290,8 +298,8 @@ Status SetJudgementEdit::apply(Database &db)
         if (!id) {
             Error e = id.error();
             if (e.code == ErrorCode::Constraint)
-                e.message =
-                    tr("The answer could not be stored: its article or coder does not exist.");
+                e.message = AnnotationEditsText::tr(
+                    "The answer could not be stored: its article or coder does not exist.");
             return std::unexpected(e);
         }
         after.id = *id;

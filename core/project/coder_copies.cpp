@@ -21,10 +21,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("CoderCopies", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CoderCopiesText {
+    Q_DECLARE_TR_FUNCTIONS(CoderCopiesText)
+};
 
 const QString kProjectUuidKey = QStringLiteral("project_uuid");
 const QString kCopyUuidKey = QStringLiteral("copy_uuid");
@@ -63,11 +63,12 @@ Result<Coder> findCoder(const Database &db, const QString &nameOrPseudonym)
             byName.push_back(c);
     if (byName.size() > 1)
         return fail(ErrorCode::InvalidArgument,
-            tr("Several coders are called \"%1\"; name the coder by pseudonym.")
+            CoderCopiesText::tr("Several coders are called \"%1\"; name the coder by pseudonym.")
                 .arg(nameOrPseudonym));
     if (byName.empty())
         return fail(ErrorCode::NotFound,
-            tr("There is no coder with the pseudonym or name \"%1\" in the project.")
+            CoderCopiesText::tr(
+                "There is no coder with the pseudonym or name \"%1\" in the project.")
                 .arg(nameOrPseudonym));
     return byName.front();
 }
@@ -102,7 +103,8 @@ Status writeCopy(Database &copyDb, const QString &sourcePath, const Coder &coder
         if (!name)
             return std::unexpected(name.error());
         FOURFOLD_TRY_STATUS(store::setSetting(copyDb, QStringLiteral("name"),
-            tr("%1 (copy for %2)").arg(name->value_or(QString()), coder.pseudonym)));
+            CoderCopiesText::tr("%1 (copy for %2)")
+                .arg(name->value_or(QString()), coder.pseudonym)));
         FOURFOLD_TRY_STATUS(store::setSetting(copyDb, kProjectUuidKey, copyUuid));
         FOURFOLD_TRY_STATUS(store::setSetting(copyDb, kCopyUuidKey, copyUuid));
         FOURFOLD_TRY_STATUS(store::setSetting(copyDb, kCopyOfKey, originUuid));
@@ -158,10 +160,11 @@ Result<std::pair<CopyInfo, Coder>> checkCopy(
         return std::unexpected(version.error());
     if (*appId != kApplicationId)
         return fail(ErrorCode::InvalidInput,
-            tr("%1 is not a Fourfold project file; it was not merged.").arg(path));
+            CoderCopiesText::tr("%1 is not a Fourfold project file; it was not merged.").arg(path));
     if (*version > kSchemaVersion)
         return fail(ErrorCode::NewerSchema,
-            tr("%1 was written by a newer Fourfold (schema version %2); it was not merged.")
+            CoderCopiesText::tr(
+                "%1 was written by a newer Fourfold (schema version %2); it was not merged.")
                 .arg(path)
                 .arg(*version));
     auto info = *version >= 4 ? readCopyInfo(copyDb) : std::optional<CopyInfo> {};
@@ -169,19 +172,22 @@ Result<std::pair<CopyInfo, Coder>> checkCopy(
         return std::unexpected(info.error());
     if (!*info)
         return fail(ErrorCode::InvalidInput,
-            tr("%1 is a project file but not a coder copy; it was not merged.").arg(path));
+            CoderCopiesText::tr("%1 is a project file but not a coder copy; it was not merged.")
+                .arg(path));
     const CopyInfo copy = **info;
     if (mainUuid.isEmpty() || copy.originProjectUuid != mainUuid)
         return fail(ErrorCode::InvalidInput,
-            tr("%1 is a coder copy of another project (%2), not of this one (%3); it was not "
-               "merged.")
+            CoderCopiesText::tr(
+                "%1 is a coder copy of another project (%2), not of this one (%3); it was not "
+                "merged.")
                 .arg(path, copy.originProjectUuid, mainUuid));
     auto coder = coderByUuid(mainDb, copy.coderUuid);
     if (!coder)
         return std::unexpected(coder.error());
     if (!*coder)
         return fail(ErrorCode::InvalidInput,
-            tr("The coder of %1 is no longer in the project; it was not merged.").arg(path));
+            CoderCopiesText::tr("The coder of %1 is no longer in the project; it was not merged.")
+                .arg(path));
 
     auto articles = store::articleFingerprints(copyDb);
     if (!articles)
@@ -192,13 +198,15 @@ Result<std::pair<CopyInfo, Coder>> checkCopy(
             return std::unexpected(mainSha.error());
         if (!*mainSha)
             return fail(ErrorCode::InvalidInput,
-                tr("%1 holds article \"%2\", which is not in the project; it was not merged.")
+                CoderCopiesText::tr(
+                    "%1 holds article \"%2\", which is not in the project; it was not merged.")
                     .arg(path, a.externalId));
         const QString copySha = textSha256(a.text);
         if (copySha != **mainSha || a.sha256 != **mainSha)
             return fail(ErrorCode::InvalidInput,
-                tr("The text of article \"%1\" in %2 differs from the project's (SHA-256 %3 "
-                   "instead of %4): the copy was changed outside Fourfold; it was not merged.")
+                CoderCopiesText::tr(
+                    "The text of article \"%1\" in %2 differs from the project's (SHA-256 %3 "
+                    "instead of %4): the copy was changed outside Fourfold; it was not merged.")
                     .arg(a.externalId, path, copySha, **mainSha));
     }
     auto copyBooks = store::codebookVersionUuids(copyDb);
@@ -210,16 +218,18 @@ Result<std::pair<CopyInfo, Coder>> checkCopy(
     for (const QString &book : *copyBooks)
         if (!mainBooks->contains(book))
             return fail(ErrorCode::InvalidInput,
-                tr("%1 holds a codebook version (%2) that is not in the project; it was not "
-                   "merged.")
+                CoderCopiesText::tr(
+                    "%1 holds a codebook version (%2) that is not in the project; it was not "
+                    "merged.")
                     .arg(path, book));
     auto others = store::rowsOfOtherCoders(copyDb, copy.coderUuid);
     if (!others)
         return std::unexpected(others.error());
     if (*others > 0)
         return fail(ErrorCode::InvalidInput,
-            tr("%1 holds %2 annotations, answers or assignments of people other than its coder "
-               "%3; it was not merged.")
+            CoderCopiesText::tr(
+                "%1 holds %2 annotations, answers or assignments of people other than its coder "
+                "%3; it was not merged.")
                 .arg(path)
                 .arg(*others)
                 .arg((*coder)->pseudonym));
@@ -353,7 +363,8 @@ Result<CopyHandout> handoutRecord(const Database &mainDb, const Database &copyDb
         return std::unexpected(at.error());
     if (!*at)
         return fail(ErrorCode::InvalidInput,
-            tr("%1 names a copy (%2) that this project never handed out; it was not merged.")
+            CoderCopiesText::tr(
+                "%1 names a copy (%2) that this project never handed out; it was not merged.")
                 .arg(path, info.copyUuid));
     h.handedOutAt = parseStoredTime(**at);
     auto base = store::copyBase(mainDb, info.copyUuid);
@@ -373,7 +384,8 @@ Result<CopyHandout> handoutRecord(const Database &mainDb, const Database &copyDb
 Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QString &path)
 {
     if (!QFileInfo::exists(path))
-        return fail(ErrorCode::NotFound, tr("There is no coder copy %1.").arg(path));
+        return fail(
+            ErrorCode::NotFound, CoderCopiesText::tr("There is no coder copy %1.").arg(path));
     auto copyDb = Database::open(path, Database::OpenMode::ReadOnly);
     if (!copyDb)
         return std::unexpected(copyDb.error());
@@ -499,8 +511,9 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
             if (delta > 0 && inProject) {
                 if (mine->seconds > std::numeric_limits<qint64>::max() - delta)
                     return fail(ErrorCode::InvalidInput,
-                        tr("The coding time in %1 would overflow the project's; it was not "
-                           "merged.")
+                        CoderCopiesText::tr(
+                            "The coding time in %1 would overflow the project's; it was not "
+                            "merged.")
                             .arg(path));
                 FOURFOLD_TRY_STATUS(store::addPortableSeconds(mainDb, row, delta));
                 report.seconds += delta;
@@ -554,21 +567,23 @@ Result<HandoutReport> CoderCopies::handout(
         return std::unexpected(own.error());
     if (*own)
         return fail(ErrorCode::Unsupported,
-            tr("%1 is itself a coder copy; hand out copies from the main project.")
+            CoderCopiesText::tr("%1 is itself a coder copy; hand out copies from the main project.")
                 .arg(project.path()));
     auto coder = findCoder(project.m_db, coderName);
     if (!coder)
         return std::unexpected(coder.error());
     if (QFileInfo::exists(outPath))
         return fail(ErrorCode::Duplicate,
-            tr("%1 already exists; choose another name for the coder copy.").arg(outPath));
+            CoderCopiesText::tr("%1 already exists; choose another name for the coder copy.")
+                .arg(outPath));
     auto assignments = project.assignments();
     if (!assignments)
         return std::unexpected(assignments.error());
     if (std::ranges::none_of(
             *assignments, [&](const Assignment &a) { return a.coder == coder->id; }))
         return fail(ErrorCode::NotFound,
-            tr("Coder %1 has no assigned articles; assign some before handing out a copy.")
+            CoderCopiesText::tr(
+                "Coder %1 has no assigned articles; assign some before handing out a copy.")
                 .arg(coder->pseudonym));
 
     auto origin = store::setting(project.m_db, kProjectUuidKey);
@@ -628,7 +643,7 @@ Result<std::vector<MergeReport>> CoderCopies::merge(Project &project, const QStr
         return std::unexpected(own.error());
     if (*own)
         return fail(ErrorCode::Unsupported,
-            tr("%1 is itself a coder copy; merge copies into the main project.")
+            CoderCopiesText::tr("%1 is itself a coder copy; merge copies into the main project.")
                 .arg(project.path()));
     auto mainUuid = store::setting(project.m_db, kProjectUuidKey);
     if (!mainUuid)
@@ -656,8 +671,9 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
 {
     if (keep != QLatin1String("mine") && keep != QLatin1String("theirs"))
         return fail(ErrorCode::InvalidArgument,
-            tr("Keep \"mine\" (the version the project holds) or \"theirs\" (the version that "
-               "lost), not \"%1\".")
+            CoderCopiesText::tr(
+                "Keep \"mine\" (the version the project holds) or \"theirs\" (the version that "
+                "lost), not \"%1\".")
                 .arg(keep));
     auto open = store::mergeConflicts(project.m_db, false);
     if (!open)
@@ -671,10 +687,12 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
             if (c.objectUuid == uuid)
                 matches.push_back(c);
     if (matches.empty())
-        return fail(ErrorCode::NotFound, tr("There is no open conflict %1.").arg(uuid));
+        return fail(
+            ErrorCode::NotFound, CoderCopiesText::tr("There is no open conflict %1.").arg(uuid));
     if (matches.size() > 1)
         return fail(ErrorCode::InvalidArgument,
-            tr("%1 has %2 open conflicts (from several copies); name the conflict's uuid.")
+            CoderCopiesText::tr(
+                "%1 has %2 open conflicts (from several copies); name the conflict's uuid.")
                 .arg(uuid)
                 .arg(matches.size()));
     const store::MergeConflict &c = matches.front();

@@ -25,10 +25,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("CodingImport", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CodingImportText {
+    Q_DECLARE_TR_FUNCTIONS(CodingImportText)
+};
 
 Result<QString> requiredString(
     const QJsonObject &o, const char *key, const QString &file, qint64 line)
@@ -36,10 +36,11 @@ Result<QString> requiredString(
     const QJsonValue v = o.value(QLatin1String(key));
     if (v.isUndefined())
         return failAt(ErrorCode::InvalidInput, file, line, 0,
-            tr("missing required field \"%1\".").arg(QLatin1String(key)));
+            CodingImportText::tr("missing required field \"%1\".").arg(QLatin1String(key)));
     if (!v.isString() || v.toString().isEmpty())
         return failAt(ErrorCode::InvalidInput, file, line, 0,
-            tr("field \"%1\" must be a non-empty string.").arg(QLatin1String(key)));
+            CodingImportText::tr("field \"%1\" must be a non-empty string.")
+                .arg(QLatin1String(key)));
     return v.toString();
 }
 
@@ -51,7 +52,8 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
     FOURFOLD_TRY_STATUS(project.checkBeforeImport());
     QFile file(path);
     if (!file.open(QIODevice::ReadOnly))
-        return fail(ErrorCode::Io, tr("Cannot read %1: %2").arg(path, file.errorString()));
+        return fail(ErrorCode::Io,
+            CodingImportText::tr("Cannot read %1: %2").arg(path, file.errorString()));
 
     auto coders = project.coders();
     if (!coders)
@@ -96,7 +98,8 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             line = file.readLine(maxJsonLineSize + 2);
             if (line.size() > maxJsonLineSize && !line.endsWith('\n'))
                 return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                    tr("the line is longer than %1 MiB").arg(maxJsonLineSize >> 20));
+                    CodingImportText::tr("the line is longer than %1 MiB")
+                        .arg(maxJsonLineSize >> 20));
             if (lineNo == 1 && line.startsWith("\xEF\xBB\xBF"))
                 line.remove(0, 3);
             if (auto valid = decodeUtf8Strict(line, path); !valid) {
@@ -114,30 +117,35 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             if (error.error != QJsonParseError::NoError || !doc.isObject())
                 return failAt(ErrorCode::InvalidInput, path, lineNo,
                     error.error != QJsonParseError::NoError ? error.offset + 1 : 0,
-                    tr("not a JSON object (%1).")
-                        .arg(error.error != QJsonParseError::NoError ? error.errorString()
-                                                                     : tr("another JSON value")));
+                    CodingImportText::tr("not a JSON object (%1).")
+                        .arg(error.error != QJsonParseError::NoError
+                                ? error.errorString()
+                                : CodingImportText::tr("another JSON value")));
             const QJsonObject o = doc.object();
             for (auto it = o.begin(); it != o.end(); ++it)
                 if (const QString key = it.key(); !known.contains(key))
                     return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                        tr("unknown field \"%1\" (expected article, coder, function, quote, "
-                           "occurrence, attributes, note, confidence, gold, rationale, item, "
-                           "value).")
+                        CodingImportText::tr(
+                            "unknown field \"%1\" (expected article, coder, function, quote, "
+                            "occurrence, attributes, note, confidence, gold, rationale, item, "
+                            "value).")
                             .arg(key));
             const auto typed = [&](const char *key, QJsonValue::Type type,
                                    const QString &what) -> Status {
                 const QJsonValue v = o.value(QLatin1String(key));
                 if (!v.isUndefined() && v.type() != type)
                     return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                        tr("field \"%1\" must be %2.").arg(QLatin1String(key), what));
+                        CodingImportText::tr("field \"%1\" must be %2.")
+                            .arg(QLatin1String(key), what));
                 return {};
             };
-            FOURFOLD_TRY_STATUS(typed("attributes", QJsonValue::Object, tr("an object")));
-            FOURFOLD_TRY_STATUS(typed("note", QJsonValue::String, tr("text")));
             FOURFOLD_TRY_STATUS(
-                typed("confidence", QJsonValue::Double, tr("a number from 0 to 1")));
-            FOURFOLD_TRY_STATUS(typed("rationale", QJsonValue::String, tr("text")));
+                typed("attributes", QJsonValue::Object, CodingImportText::tr("an object")));
+            FOURFOLD_TRY_STATUS(typed("note", QJsonValue::String, CodingImportText::tr("text")));
+            FOURFOLD_TRY_STATUS(typed(
+                "confidence", QJsonValue::Double, CodingImportText::tr("a number from 0 to 1")));
+            FOURFOLD_TRY_STATUS(
+                typed("rationale", QJsonValue::String, CodingImportText::tr("text")));
             auto articleKey = requiredString(o, "article", path, lineNo);
             if (!articleKey)
                 return std::unexpected(articleKey.error());
@@ -146,7 +154,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 return std::unexpected(coderKey.error());
             if (!coderIds.contains(*coderKey))
                 return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                    tr("unknown coder \"%1\".").arg(*coderKey));
+                    CodingImportText::tr("unknown coder \"%1\".").arg(*coderKey));
             auto articleId = articleIds.constFind(*articleKey);
             if (articleId == articleIds.constEnd()) {
                 auto id = project.articleByExternalId(*articleKey);
@@ -154,7 +162,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                     return std::unexpected(id.error());
                 if (!*id)
                     return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                        tr("unknown article \"%1\".").arg(*articleKey));
+                        CodingImportText::tr("unknown article \"%1\".").arg(*articleKey));
                 articleId = articleIds.insert(*articleKey, **id);
             }
             if (article.id != *articleId) {
@@ -214,7 +222,8 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             const auto function = functionFromKey(*functionName);
             if (!function)
                 return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                    tr("unknown function \"%1\" (expected problem, cause, evaluation or remedy).")
+                    CodingImportText::tr(
+                        "unknown function \"%1\" (expected problem, cause, evaluation or remedy).")
                         .arg(*functionName));
             auto quoteRaw = requiredString(o, "quote", path, lineNo);
             if (!quoteRaw)
@@ -224,14 +233,15 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             if (!occurrenceValue.isUndefined()
                 && (!occurrenceValue.isDouble() || occurrenceValue.toInt() < 1))
                 return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                    tr("field \"occurrence\" must be a whole number from 1."));
+                    CodingImportText::tr("field \"occurrence\" must be a whole number from 1."));
             const int occurrence = occurrenceValue.isUndefined() ? 1 : occurrenceValue.toInt();
             qsizetype at = -1;
             for (int n = 0; n < occurrence; ++n) {
                 at = article.text.indexOf(quote, at + 1);
                 if (at < 0)
                     return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                        tr("the quote \"%1\" does not occur %2 time(s) in article \"%3\".")
+                        CodingImportText::tr(
+                            "the quote \"%1\" does not occur %2 time(s) in article \"%3\".")
                             .arg(quote.left(60))
                             .arg(occurrence)
                             .arg(*articleKey));
@@ -246,7 +256,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             const QJsonValue goldValue = o.value(QLatin1String("gold"));
             if (!goldValue.isUndefined() && !goldValue.isBool())
                 return failAt(ErrorCode::InvalidInput, path, lineNo, 0,
-                    tr("field \"gold\" must be true or false."));
+                    CodingImportText::tr("field \"gold\" must be true or false."));
             if (goldValue.toBool()) {
                 if (!article.goldKeys
                          .insert({int(content.function), content.range.start, content.range.end})

@@ -14,10 +14,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("GoldEdits", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct GoldEditsText {
+    Q_DECLARE_TR_FUNCTIONS(GoldEditsText)
+};
 
 Status requireLead(const Database &db, CoderId id)
 {
@@ -26,7 +26,8 @@ Status requireLead(const Database &db, CoderId id)
         return std::unexpected(all.error());
     const auto it = std::ranges::find(*all, id, &Coder::id);
     if (it == all->end() || it->role != CoderRole::Lead)
-        return fail(ErrorCode::InvalidArgument, tr("Only a lead can decide the gold standard."));
+        return fail(ErrorCode::InvalidArgument,
+            GoldEditsText::tr("Only a lead can decide the gold standard."));
     return {};
 }
 
@@ -49,7 +50,7 @@ AdjudicateSpanEdit::AdjudicateSpanEdit(ArticleId article, CoderId lead, Annotati
 
 QString AdjudicateSpanEdit::text() const
 {
-    return tr("Decide gold %1 span").arg(functionKey(m_row.content.function));
+    return GoldEditsText::tr("Decide gold %1 span").arg(functionKey(m_row.content.function));
 }
 
 Status AdjudicateSpanEdit::apply(Database &db)
@@ -61,7 +62,8 @@ Status AdjudicateSpanEdit::apply(Database &db)
             return std::unexpected(a.error());
         if (a->deleted || a->article != m_row.article)
             return fail(ErrorCode::InvalidArgument,
-                tr("A gold span can only come from live spans of the same article."));
+                GoldEditsText::tr(
+                    "A gold span can only come from live spans of the same article."));
     }
     GoldAnnotation row = m_row;
     CodebookVersionId version;
@@ -86,7 +88,7 @@ WithdrawGoldEdit::WithdrawGoldEdit(GoldId id, CoderId lead)
 
 QString WithdrawGoldEdit::text() const
 {
-    return tr("Withdraw gold span");
+    return GoldEditsText::tr("Withdraw gold span");
 }
 
 Status WithdrawGoldEdit::apply(Database &db)
@@ -96,7 +98,8 @@ Status WithdrawGoldEdit::apply(Database &db)
     if (!g)
         return std::unexpected(g.error());
     if (g->deleted)
-        return fail(ErrorCode::NotFound, tr("This gold span has already been withdrawn."));
+        return fail(
+            ErrorCode::NotFound, GoldEditsText::tr("This gold span has already been withdrawn."));
     FOURFOLD_TRY_STATUS(store::setGoldDeleted(db, m_id, true));
     m_uuid = g->uuid;
     return {};
@@ -124,8 +127,7 @@ RejectSpansEdit::RejectSpansEdit(std::vector<AnnotationId> spans, CoderId lead, 
 
 QString RejectSpansEdit::text() const
 {
-    return QCoreApplication::translate(
-        "GoldEdits", "Reject %n span(s)", nullptr, int(m_rows.size()));
+    return GoldEditsText::tr("Reject %n span(s)", nullptr, int(m_rows.size()));
 }
 
 QString RejectSpansEdit::objectUuid() const
@@ -137,7 +139,8 @@ Status RejectSpansEdit::apply(Database &db)
 {
     FOURFOLD_TRY_STATUS(requireLead(db, actor()));
     if (m_rows.empty())
-        return fail(ErrorCode::InvalidArgument, tr("Choose at least one span to reject."));
+        return fail(
+            ErrorCode::InvalidArgument, GoldEditsText::tr("Choose at least one span to reject."));
     auto live = store::goldRejections(db, ArticleId {});
     if (!live)
         return std::unexpected(live.error());
@@ -147,13 +150,14 @@ Status RejectSpansEdit::apply(Database &db)
         if (!a)
             return std::unexpected(a.error());
         if (a->deleted)
-            return fail(ErrorCode::InvalidArgument, tr("Only a live span can be rejected."));
+            return fail(
+                ErrorCode::InvalidArgument, GoldEditsText::tr("Only a live span can be rejected."));
         const bool already = std::ranges::any_of(
             *live, [&](const GoldRejection &x) { return x.annotation == r.annotation; });
         const bool twice = std::ranges::count(rows, r.annotation, &GoldRejection::annotation) > 1;
         if (already || twice)
             return fail(ErrorCode::InvalidArgument,
-                tr("A span is already rejected: %1").arg(a->quote.left(40)));
+                GoldEditsText::tr("A span is already rejected: %1").arg(a->quote.left(40)));
         auto id = store::insertRejection(db, r);
         if (!id)
             return std::unexpected(id.error());
@@ -180,8 +184,7 @@ AcceptSpansEdit::AcceptSpansEdit(
 
 QString AcceptSpansEdit::text() const
 {
-    return QCoreApplication::translate(
-        "GoldEdits", "Accept %n agreed span(s) into gold", nullptr, int(m_spans.size()));
+    return GoldEditsText::tr("Accept %n agreed span(s) into gold", nullptr, int(m_spans.size()));
 }
 
 QString AcceptSpansEdit::objectUuid() const
@@ -192,7 +195,7 @@ QString AcceptSpansEdit::objectUuid() const
 Status AcceptSpansEdit::apply(Database &db)
 {
     if (m_spans.empty())
-        return fail(ErrorCode::InvalidArgument, tr("There are no spans to accept."));
+        return fail(ErrorCode::InvalidArgument, GoldEditsText::tr("There are no spans to accept."));
     for (AdjudicateSpanEdit &e : m_spans)
         FOURFOLD_TRY_STATUS(e.apply(db)); // the caller's savepoint undoes the earlier ones
     return {};

@@ -22,10 +22,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("Project", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ProjectText {
+    Q_DECLARE_TR_FUNCTIONS(ProjectText)
+};
 
 const QString kNameKey = QStringLiteral("name");
 const QString kLanguageKey = QStringLiteral("default_language");
@@ -35,7 +35,8 @@ Result<Codebook> defaultCodebook()
 {
     QFile file(QStringLiteral(":/fourfold/codebook/default_codebook.json"));
     if (!file.open(QIODevice::ReadOnly))
-        return fail(ErrorCode::Internal, tr("The default codebook is missing from this build."));
+        return fail(ErrorCode::Internal,
+            ProjectText::tr("The default codebook is missing from this build."));
     return Codebook::fromJson(file.readAll(), file.fileName());
 }
 
@@ -51,7 +52,7 @@ Result<Project> Project::create(const QString &path, const Settings &settings)
 {
     if (QFileInfo::exists(path))
         return fail(ErrorCode::Duplicate,
-            tr("%1 already exists; choose another name or open it.").arg(path));
+            ProjectText::tr("%1 already exists; choose another name or open it.").arg(path));
     auto book = defaultCodebook();
     if (!book)
         return std::unexpected(book.error());
@@ -69,8 +70,8 @@ Result<Project> Project::create(const QString &path, const Settings &settings)
                 settings.defaultLanguage.isEmpty() ? QStringLiteral("en")
                                                    : settings.defaultLanguage));
             FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kUuidKey, store::newUuid()));
-            auto version =
-                store::insertCodebookVersion(project.m_db, *book, tr("Default codebook"));
+            auto version = store::insertCodebookVersion(
+                project.m_db, *book, ProjectText::tr("Default codebook"));
             if (!version)
                 return std::unexpected(version.error());
             return store::appendEvent(project.m_db, CoderId {}, QStringLiteral("project.create"),
@@ -94,7 +95,7 @@ Result<Project> Project::create(const QString &path, const Settings &settings)
 Result<Project> Project::open(const QString &path)
 {
     if (!QFileInfo::exists(path))
-        return fail(ErrorCode::NotFound, tr("There is no project file %1.").arg(path));
+        return fail(ErrorCode::NotFound, ProjectText::tr("There is no project file %1.").arg(path));
     auto db = Database::open(path, Database::OpenMode::ReadWrite);
     if (!db)
         return std::unexpected(db.error());
@@ -171,7 +172,8 @@ Result<std::vector<ArticleId>> Project::searchArticles(const QString &query) con
 Result<CoderId> Project::addCoder(const QString &name, const QString &pseudonym, CoderRole role)
 {
     if (name.trimmed().isEmpty() || pseudonym.trimmed().isEmpty())
-        return fail(ErrorCode::InvalidArgument, tr("A coder needs a name and a pseudonym."));
+        return fail(
+            ErrorCode::InvalidArgument, ProjectText::tr("A coder needs a name and a pseudonym."));
     auto sp = Savepoint::begin(m_db);
     if (!sp)
         return std::unexpected(sp.error());
@@ -219,7 +221,7 @@ Status Project::assign(ArticleId article, CoderId coder, Phase phase)
     const auto who = std::ranges::find(*people, coder, &Coder::id);
     if (who != people->end() && who->disabled)
         return fail(ErrorCode::InvalidArgument,
-            tr("%1 is disabled and takes no new assignments; enable them first.")
+            ProjectText::tr("%1 is disabled and takes no new assignments; enable them first.")
                 .arg(who->pseudonym));
     auto sp = Savepoint::begin(m_db);
     if (!sp)
@@ -337,7 +339,8 @@ Status Project::batch(const std::function<Status()> &work)
 Status Project::applyInBatch(Edit &edit)
 {
     if (!FOURFOLD_SOFT_ASSERT(lcProject(), m_batchDepth > 0))
-        return fail(ErrorCode::Internal, tr("An edit without its own savepoint needs a batch."));
+        return fail(ErrorCode::Internal,
+            ProjectText::tr("An edit without its own savepoint needs a batch."));
     Status st = edit.apply(m_db);
     if (st)
         st = store::appendEvent(

@@ -12,10 +12,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ProjectCheck", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ProjectCheckText {
+    Q_DECLARE_TR_FUNCTIONS(ProjectCheckText)
+};
 
 } // namespace
 
@@ -45,16 +45,17 @@ Result<IntegrityReport> Project::check() const
         ++report.articlesChecked;
         auto known = std::make_shared<Known>(Known {a.text, a.externalId, OffsetMap(a.text)});
         if (textSha256(a.text) != a.sha256)
-            report.problems << tr("Article \"%1\": its text does not match its stored SHA-256.")
+            report.problems << ProjectCheckText::tr(
+                "Article \"%1\": its text does not match its stored SHA-256.")
                                    .arg(a.externalId);
         if (known->map.codePointCount() != a.length)
-            report.problems << tr(
+            report.problems << ProjectCheckText::tr(
                 "Article \"%1\": stored length %2 but the text has %3 characters.")
                                    .arg(a.externalId)
                                    .arg(a.length)
                                    .arg(known->map.codePointCount());
         if (!isCanonicalText(a.text))
-            report.problems << tr(
+            report.problems << ProjectCheckText::tr(
                 "Article \"%1\": the text is not in canonical form (NFC, LF line ends).")
                                    .arg(a.externalId);
         byId.insert(a.id.value, known);
@@ -67,14 +68,14 @@ Result<IntegrityReport> Project::check() const
         ++report.spansChecked;
         const auto known = byId.value(s.article.value);
         if (!known) {
-            report.problems << tr("%1 #%2 refers to a missing article #%3.")
+            report.problems << ProjectCheckText::tr("%1 #%2 refers to a missing article #%3.")
                                    .arg(s.layer)
                                    .arg(s.rowId)
                                    .arg(s.article.value);
             continue;
         }
         if (!s.range.isValid() || s.range.isEmpty() || s.range.end > known->map.codePointCount()) {
-            report.problems << tr(
+            report.problems << ProjectCheckText::tr(
                 "%1 #%2 in article \"%3\": [%4, %5) lies outside the text of %6 characters.")
                                    .arg(s.layer)
                                    .arg(s.rowId)
@@ -85,7 +86,7 @@ Result<IntegrityReport> Project::check() const
             continue;
         }
         if (s.quote && *s.quote != OffsetMap::slice(known->text, s.range))
-            report.problems << tr(
+            report.problems << ProjectCheckText::tr(
                 "%1 #%2 in article \"%3\": the stored quote differs from the text at [%4, %5).")
                                    .arg(s.layer)
                                    .arg(s.rowId)

@@ -18,10 +18,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ProjectImport", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ProjectImportText {
+    Q_DECLARE_TR_FUNCTIONS(ProjectImportText)
+};
 
 // Makes one stored article from an imported record, or an error naming its source line.
 Result<Article> prepareArticle(
@@ -32,7 +32,7 @@ Result<Article> prepareArticle(
     a.text = canonicalText(in.text);
     if (a.text.trimmed().isEmpty())
         return failAt(ErrorCode::InvalidInput, file, in.sourceLine, 0,
-            tr("the article \"%1\" has no text.").arg(in.externalId));
+            ProjectImportText::tr("the article \"%1\" has no text.").arg(in.externalId));
     a.summary.uuid = store::newUuid();
     a.summary.externalId = in.externalId;
     a.summary.title = canonicalText(in.title).simplified();
@@ -47,7 +47,7 @@ Result<Article> prepareArticle(
     auto units = segmentText(a.text, a.summary.language);
     if (!units)
         return failAt(units.error().code, file, in.sourceLine, 0,
-            tr("the article \"%1\" cannot be segmented: %2")
+            ProjectImportText::tr("the article \"%1\" cannot be segmented: %2")
                 .arg(in.externalId, units.error().message));
     const qsizetype n = qsizetype(units->paragraphs.size());
     for (qsizetype i = 0; i < n; ++i)
@@ -73,7 +73,7 @@ Result<ImportReport> Project::importFile(
 
     QHash<QString, QString> shaInThisImport; // sha256 → external id of its first article
     const auto add = [&](const ImportedArticle &in) -> Status {
-    NearCopyCheck nearCopies(options.nearCopyThreshold);
+        NearCopyCheck nearCopies(options.nearCopyThreshold);
         auto prepared = prepareArticle(in, path, m_settings.defaultLanguage);
         if (!prepared)
             return std::unexpected(prepared.error());
@@ -89,7 +89,8 @@ Result<ImportReport> Project::importFile(
                 other = existing ? existing->summary.externalId : QString();
             }
             report.skipped.push_back(SkippedArticle {in.externalId, in.sourceLine,
-                tr("same text as the article \"%1\" already in the project").arg(other)});
+                ProjectImportText::tr("same text as the article \"%1\" already in the project")
+                    .arg(other)});
             return {};
         }
         auto sameId = store::articleIdByExternalId(m_db, in.externalId);
@@ -97,8 +98,9 @@ Result<ImportReport> Project::importFile(
             return std::unexpected(sameId.error());
         if (*sameId)
             return failAt(ErrorCode::Duplicate, prepared->source, in.sourceLine, 0,
-                tr("the id \"%1\" is already used by another article in the project, with a "
-                   "different text.")
+                ProjectImportText::tr(
+                    "the id \"%1\" is already used by another article in the project, with a "
+                    "different text.")
                     .arg(in.externalId));
         auto id = store::insertArticle(m_db, *prepared);
         if (!id)
@@ -112,7 +114,8 @@ Result<ImportReport> Project::importFile(
         FOURFOLD_TRY_STATUS(add(in));
         if (progress && !progress(read.bytesRead, read.totalBytes))
             return fail(ErrorCode::Cancelled,
-                tr("The import of %1 was cancelled; nothing was added.").arg(path));
+                ProjectImportText::tr("The import of %1 was cancelled; nothing was added.")
+                    .arg(path));
         return {};
     };
     FOURFOLD_TRY_STATUS(forEachArticle(path, options, visit));

@@ -29,10 +29,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("StudyDesign", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct StudyDesignText {
+    Q_DECLARE_TR_FUNCTIONS(StudyDesignText)
+};
 
 const QString kEffortKey = QStringLiteral("study.effort_per_coder");
 
@@ -115,12 +115,16 @@ Result<std::vector<Coder>> resolveCoders(const Names &names, const QStringList &
     for (const QString &p : pseudonyms) {
         const auto it = names.coderByPseudonym.constFind(p);
         if (it == names.coderByPseudonym.constEnd())
-            return fail(ErrorCode::NotFound, tr("There is no coder \"%1\" in the project.").arg(p));
+            return fail(ErrorCode::NotFound,
+                StudyDesignText::tr("There is no coder \"%1\" in the project.").arg(p));
         if (seen.contains(p))
-            return fail(ErrorCode::InvalidArgument, tr("The coder \"%1\" is named twice.").arg(p));
+            return fail(ErrorCode::InvalidArgument,
+                StudyDesignText::tr("The coder \"%1\" is named twice.").arg(p));
         if (it->disabled) // keeps their codings, takes no new work
             return fail(ErrorCode::InvalidArgument,
-                tr("%1 is disabled and takes no new assignments; enable them first.").arg(p));
+                StudyDesignText::tr(
+                    "%1 is disabled and takes no new assignments; enable them first.")
+                    .arg(p));
         seen.insert(p);
         out.push_back(*it);
     }
@@ -391,17 +395,19 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
     const Database &db = project.m_db;
     if (request.phase != Phase::Reliability && request.phase != Phase::Pilot)
         return fail(ErrorCode::InvalidArgument,
-            tr("A subsample is drawn for the reliability or the pilot phase, not for %1.")
+            StudyDesignText::tr(
+                "A subsample is drawn for the reliability or the pilot phase, not for %1.")
                 .arg(phaseKey(request.phase)));
     if (request.size.has_value() == request.fraction.has_value())
         return fail(ErrorCode::InvalidArgument,
-            tr("Give either the size of the subsample or its fraction of the articles."));
+            StudyDesignText::tr(
+                "Give either the size of the subsample or its fraction of the articles."));
     if (request.fraction && !(*request.fraction > 0.0 && *request.fraction <= 1.0))
         return fail(ErrorCode::InvalidArgument,
-            tr("The fraction %1 does not lie in (0, 1].").arg(*request.fraction));
+            StudyDesignText::tr("The fraction %1 does not lie in (0, 1].").arg(*request.fraction));
     if (request.coders.size() < 2)
         return fail(ErrorCode::InvalidArgument,
-            tr("A reliability subsample needs at least two coders; %1 given.")
+            StudyDesignText::tr("A reliability subsample needs at least two coders; %1 given.")
                 .arg(request.coders.size()));
     auto names = loadNames(db, project);
     if (!names)
@@ -414,7 +420,7 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
         return std::unexpected(recorded.error());
     if (*recorded)
         return fail(ErrorCode::Duplicate,
-            tr("The %1 phase already has a subsample (drawn %2 with seed %3).")
+            StudyDesignText::tr("The %1 phase already has a subsample (drawn %2 with seed %3).")
                 .arg(phaseKey(request.phase), (*recorded)->drawnAt)
                 .arg((*recorded)->seed));
 
@@ -435,19 +441,19 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
 
     int size = 0;
     if (request.size)
-    if (request.leaveOutNearCopies) {
-        auto nearCopies = NearCopies::list(project);
-        if (!nearCopies)
-            return std::unexpected(nearCopies.error());
-        for (const store::NearCopyRow &row : *nearCopies)
-            excluded.insert(row.article.value);
-    }
-        size = *request.size;
-    else
-        size = int(std::ceil(*request.fraction * frameSize - 1e-9));
+        if (request.leaveOutNearCopies) {
+            auto nearCopies = NearCopies::list(project);
+            if (!nearCopies)
+                return std::unexpected(nearCopies.error());
+            for (const store::NearCopyRow &row : *nearCopies)
+                excluded.insert(row.article.value);
+        }
+    size = *request.size;
+    else size = int(std::ceil(*request.fraction * frameSize - 1e-9));
     if (size < 1 || size > frameSize)
         return fail(ErrorCode::InvalidArgument,
-            tr("A subsample of %1 articles cannot be drawn from a sampling frame of %2 articles.")
+            StudyDesignText::tr(
+                "A subsample of %1 articles cannot be drawn from a sampling frame of %2 articles.")
                 .arg(size)
                 .arg(frameSize));
 
@@ -465,7 +471,7 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
         std::vector<std::size_t> order(frame.size());
         for (std::size_t i = 0; i < order.size(); ++i)
             order[i] = i;
-    draw.nearCopiesLeftOut = request.leaveOutNearCopies;
+        draw.nearCopiesLeftOut = request.leaveOutNearCopies;
         shuffle(order, engine);
         drawn.assign(order.begin(), order.begin() + size);
     } else {
@@ -564,7 +570,7 @@ Status StudyDesign::commitDraw(Project &project, Draw &draw)
         return std::unexpected(recorded.error());
     if (*recorded)
         return fail(ErrorCode::Duplicate,
-            tr("The %1 phase already has a subsample.").arg(phaseKey(draw.phase)));
+            StudyDesignText::tr("The %1 phase already has a subsample.").arg(phaseKey(draw.phase)));
     const QString drawnAt = store::now();
     Draw stored = draw;
     stored.drawnAt = drawnAt;
@@ -588,7 +594,8 @@ Result<std::optional<Draw>> StudyDesign::recordedDraw(const Project &project, Ph
     const QJsonDocument doc = QJsonDocument::fromJson((*text)->toUtf8(), &parseError);
     if (!doc.isObject())
         return fail(ErrorCode::Corrupt,
-            tr("The record of the %1 subsample is not a JSON object.").arg(phaseKey(phase)),
+            StudyDesignText::tr("The record of the %1 subsample is not a JSON object.")
+                .arg(phaseKey(phase)),
             parseError.errorString());
     auto draw = drawFromJson(doc.object());
     if (!draw)
@@ -621,7 +628,7 @@ QJsonObject StudyDesign::drawJson(const Draw &draw)
                 {QStringLiteral("minimum_values"), a.minimumValues},
                 {QStringLiteral("article_values"), a.articleValues},
                 {QStringLiteral("paragraph_values"), a.paragraphValues},
-        {QStringLiteral("near_copies_left_out"), draw.nearCopiesLeftOut},
+                {QStringLiteral("near_copies_left_out"), draw.nearCopiesLeftOut},
                 {QStringLiteral("sentence_values"), a.sentenceValues},
                 {QStringLiteral("sufficient_units"),
                     QJsonArray::fromStringList(a.sufficientUnits)}}},
@@ -632,7 +639,8 @@ QJsonObject StudyDesign::drawJson(const Draw &draw)
 Result<Draw> StudyDesign::drawFromJson(const QJsonObject &json)
 {
     auto bad = [](const QString &what) {
-        return fail(ErrorCode::Corrupt, tr("The subsample record is damaged: %1.").arg(what));
+        return fail(ErrorCode::Corrupt,
+            StudyDesignText::tr("The subsample record is damaged: %1.").arg(what));
     };
     auto strings = [](const QJsonValue &v) {
         QStringList out;
@@ -643,21 +651,21 @@ Result<Draw> StudyDesign::drawFromJson(const QJsonObject &json)
     Draw d;
     const auto phase = phaseFromKey(json.value(QStringLiteral("phase")).toString());
     if (!phase)
-        return bad(tr("no valid phase"));
+        return bad(StudyDesignText::tr("no valid phase"));
     d.phase = *phase;
     d.method = json.value(QStringLiteral("method")).toString();
     if (d.method != QStringLiteral("random") && d.method != QStringLiteral("stratified"))
-        return bad(tr("unknown method \"%1\"").arg(d.method));
+        return bad(StudyDesignText::tr("unknown method \"%1\"").arg(d.method));
     const QJsonValue stratify = json.value(QStringLiteral("stratify"));
     if (stratify.isString()) {
         d.stratify = stratumFromKey(stratify.toString());
         if (!d.stratify)
-            return bad(tr("unknown stratum \"%1\"").arg(stratify.toString()));
+            return bad(StudyDesignText::tr("unknown stratum \"%1\"").arg(stratify.toString()));
     }
     bool ok = false;
     d.seed = json.value(QStringLiteral("seed")).toString().toULongLong(&ok);
     if (!ok)
-        return bad(tr("no valid seed"));
+        return bad(StudyDesignText::tr("no valid seed"));
     d.coders = strings(json.value(QStringLiteral("coders")));
     d.frameArticles = json.value(QStringLiteral("frame_articles")).toInt();
     d.articles = strings(json.value(QStringLiteral("articles")));
@@ -692,9 +700,9 @@ Result<AssignmentPlan> StudyDesign::planRest(const Project &project, const RestR
     if (request.coders.size() < need)
         return fail(ErrorCode::InvalidArgument,
             request.coding == RestCoding::Double
-                ? tr("Double coding needs at least two coders; %1 given.")
+                ? StudyDesignText::tr("Double coding needs at least two coders; %1 given.")
                       .arg(request.coders.size())
-                : tr("Name at least one coder for the remaining articles."));
+                : StudyDesignText::tr("Name at least one coder for the remaining articles."));
     auto names = loadNames(project.m_db, project);
     if (!names)
         return std::unexpected(names.error());
@@ -745,7 +753,8 @@ Result<AssignmentPlan> StudyDesign::planArticles(
     const Project &project, Phase phase, const QStringList &articles, const QStringList &coders)
 {
     if (articles.isEmpty() || coders.isEmpty())
-        return fail(ErrorCode::InvalidArgument, tr("Name at least one article and one coder."));
+        return fail(ErrorCode::InvalidArgument,
+            StudyDesignText::tr("Name at least one article and one coder."));
     auto names = loadNames(project.m_db, project);
     if (!names)
         return std::unexpected(names.error());
@@ -754,8 +763,8 @@ Result<AssignmentPlan> StudyDesign::planArticles(
         return std::unexpected(resolved.error());
     for (const QString &a : articles)
         if (!names->articleIndex.contains(a))
-            return fail(
-                ErrorCode::NotFound, tr("There is no article \"%1\" in the project.").arg(a));
+            return fail(ErrorCode::NotFound,
+                StudyDesignText::tr("There is no article \"%1\" in the project.").arg(a));
     auto assignments = project.assignments();
     if (!assignments)
         return std::unexpected(assignments.error());
@@ -800,14 +809,15 @@ Status StudyDesign::commitPlan(
         const auto article = names->articleIndex.constFind(row.article);
         if (article == names->articleIndex.constEnd())
             return fail(ErrorCode::NotFound,
-                tr("There is no article \"%1\" in the project.").arg(row.article));
+                StudyDesignText::tr("There is no article \"%1\" in the project.").arg(row.article));
         const auto coder = names->coderByPseudonym.constFind(row.coder);
         if (coder == names->coderByPseudonym.constEnd())
-            return fail(
-                ErrorCode::NotFound, tr("There is no coder \"%1\" in the project.").arg(row.coder));
+            return fail(ErrorCode::NotFound,
+                StudyDesignText::tr("There is no coder \"%1\" in the project.").arg(row.coder));
         if (coder->disabled)
             return fail(ErrorCode::InvalidArgument,
-                tr("%1 is disabled and takes no new assignments; enable them first.")
+                StudyDesignText::tr(
+                    "%1 is disabled and takes no new assignments; enable them first.")
                     .arg(row.coder));
         const ArticleId articleId = names->articles[size_t(*article)].id;
         const QString key = QStringLiteral("%1/%2/%3")
@@ -816,7 +826,7 @@ Status StudyDesign::commitPlan(
                                 .arg(phaseKey(row.phase));
         if (present.contains(key))
             return fail(ErrorCode::Duplicate,
-                tr("Article \"%1\" is already assigned to %2 in the %3 phase.")
+                StudyDesignText::tr("Article \"%1\" is already assigned to %2 in the %3 phase.")
                     .arg(row.article, row.coder, phaseKey(row.phase)));
         present.insert(key);
         FOURFOLD_TRY_STATUS(store::insertAssignment(db, articleId, coder->id, row.phase));
@@ -921,9 +931,10 @@ Status checkValuesInUse(const Database &db, const Codebook &current, const Codeb
             for (const store::ValueInUse &u : *used)
                 if (!countedValue(spec.values, spec.recode, u.value))
                     return fail(ErrorCode::InvalidInput,
-                        tr("%1 span(s) of %2 carry the value \"%3\" of the attribute \"%4\", "
-                           "which the new version neither lists nor recodes; add \"recode\": "
-                           "{\"%3\": \"…\"} to the attribute with one of its values (%5).")
+                        StudyDesignText::tr(
+                            "%1 span(s) of %2 carry the value \"%3\" of the attribute \"%4\", "
+                            "which the new version neither lists nor recodes; add \"recode\": "
+                            "{\"%3\": \"…\"} to the attribute with one of its values (%5).")
                             .arg(u.count)
                             .arg(functionKey(f), u.value, spec.key,
                                 spec.values.join(QStringLiteral(", "))));
@@ -939,9 +950,10 @@ Status checkValuesInUse(const Database &db, const Codebook &current, const Codeb
         for (const store::ValueInUse &u : *used)
             if (!countedValue(item.values, item.recode, u.value))
                 return fail(ErrorCode::InvalidInput,
-                    tr("%1 answer(s) to the item \"%2\" are \"%3\", which the new version "
-                       "neither lists nor recodes; add \"recode\": {\"%3\": \"…\"} to the item "
-                       "with one of its values (%4).")
+                    StudyDesignText::tr(
+                        "%1 answer(s) to the item \"%2\" are \"%3\", which the new version "
+                        "neither lists nor recodes; add \"recode\": {\"%3\": \"…\"} to the item "
+                        "with one of its values (%4).")
                         .arg(u.count)
                         .arg(item.key, u.value, item.values.join(QStringLiteral(", "))));
     }
@@ -971,13 +983,14 @@ Result<CodebookVersionInfo> StudyDesign::addCodebookVersion(
 {
     if (note.trimmed().isEmpty())
         return fail(ErrorCode::InvalidArgument,
-            tr("A new codebook version needs a note that says what changed and why."));
+            StudyDesignText::tr(
+                "A new codebook version needs a note that says what changed and why."));
     auto current = store::currentCodebook(project.m_db);
     if (!current)
         return std::unexpected(current.error());
     if (diffCodebooks(*current, codebook).changes.empty())
         return fail(ErrorCode::InvalidArgument,
-            tr("The codebook is the same as version %1; no new version was made.")
+            StudyDesignText::tr("The codebook is the same as version %1; no new version was made.")
                 .arg(current->number));
     FOURFOLD_TRY_STATUS(checkValuesInUse(project.m_db, *current, codebook));
     auto sp = Savepoint::begin(project.m_db);
@@ -1081,9 +1094,9 @@ Result<CodebookDiff> StudyDesign::codebookDiff(const Project &project, int from,
 QString StudyDesign::codebookDiffText(const CodebookDiff &diff)
 {
     QStringList lines;
-    lines << tr("Codebook version %1 → %2").arg(diff.from).arg(diff.to);
+    lines << StudyDesignText::tr("Codebook version %1 → %2").arg(diff.from).arg(diff.to);
     if (diff.changes.empty())
-        lines << tr("no changes");
+        lines << StudyDesignText::tr("no changes");
     for (const CodebookChange &c : diff.changes) {
         switch (c.kind) {
         case CodebookChange::Kind::Added:
@@ -1179,8 +1192,9 @@ Result<TrainingFeedback> StudyDesign::trainingFeedback(
     if (request.unit != UnitKind::Paragraph && request.unit != UnitKind::Sentence
         && request.unit != UnitKind::Token)
         return fail(ErrorCode::InvalidArgument,
-            tr("Training feedback is computed on paragraphs, sentences or tokens, not on %1 "
-               "units.")
+            StudyDesignText::tr(
+                "Training feedback is computed on paragraphs, sentences or tokens, not on %1 "
+                "units.")
                 .arg(unitKindKey(request.unit)));
     auto names = loadNames(project.m_db, project);
     if (!names)
@@ -1196,8 +1210,9 @@ Result<TrainingFeedback> StudyDesign::trainingFeedback(
         auto lead = soleTrainingLead(*names, *all);
         if (!lead)
             return fail(ErrorCode::InvalidArgument,
-                tr("Name the lead whose training coding is the master: there is not exactly one "
-                   "lead with training annotations."));
+                StudyDesignText::tr(
+                    "Name the lead whose training coding is the master: there is not exactly one "
+                    "lead with training annotations."));
         master = *lead;
     } else {
         auto m = resolveCoders(*names, {request.master});

@@ -11,10 +11,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ElementIndicators", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ElementIndicatorsText {
+    Q_DECLARE_TR_FUNCTIONS(ElementIndicatorsText)
+};
 
 // One indicator: a function, and for an attribute value also the attribute's key and the value.
 struct Element {
@@ -66,8 +66,9 @@ Result<ElementIndicators> elementIndicators(const Project &project, const QStrin
         auto parsed = LayerSpec::parse(layer);
         if (!parsed || parsed->kind == LayerKind::Coders)
             return fail(ErrorCode::InvalidArgument,
-                tr("\"%1\" is not a layer for frames; use gold, consensus, coder:PSEUDONYM or "
-                   "run:NAME.")
+                ElementIndicatorsText::tr(
+                    "\"%1\" is not a layer for frames; use gold, consensus, coder:PSEUDONYM or "
+                    "run:NAME.")
                     .arg(layer));
         spec = *parsed;
     }

@@ -14,10 +14,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("RunAgreement", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct RunAgreementText {
+    Q_DECLARE_TR_FUNCTIONS(RunAgreementText)
+};
 
 // Nominal alpha of the columns `columns` of `table` (Krippendorff 2011, §B).
 PairAlpha alphaOf(const ReliabilityTable &table, const std::vector<qsizetype> &columns)
@@ -58,7 +58,8 @@ Result<RunAgreement> runAgreement(
     if (options.unit != UnitKind::Paragraph && options.unit != UnitKind::Sentence
         && options.unit != UnitKind::Token)
         return fail(ErrorCode::InvalidArgument,
-            tr("The run joins the humans on paragraph, sentence or token units."));
+            RunAgreementText::tr(
+                "The run joins the humans on paragraph, sentence or token units."));
     auto runLayer = resolveLayer(project, LayerSpec {LayerKind::Run, run});
     if (!runLayer)
         return std::unexpected(runLayer.error());

@@ -12,10 +12,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("RunErrors", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct RunErrorsText {
+    Q_DECLARE_TR_FUNCTIONS(RunErrorsText)
+};
 
 bool spanLess(const LayerSpan &a, const LayerSpan &b)
 {
@@ -133,7 +133,7 @@ Result<RunErrors> runErrors(const Project &project, const QString &run, const La
 {
     if (against.kind != LayerKind::Gold && against.kind != LayerKind::Coder)
         return fail(ErrorCode::InvalidArgument,
-            tr("A run is compared with the gold standard or one coder, not \"%1\".")
+            RunErrorsText::tr("A run is compared with the gold standard or one coder, not \"%1\".")
                 .arg(against.key()));
     auto reference = resolveLayer(project, against);
     if (!reference)
@@ -153,8 +153,10 @@ Result<RunErrors> runErrors(const Project &project, const QString &run, const La
     if (scored.empty())
         return fail(ErrorCode::InvalidArgument,
             against.kind == LayerKind::Gold
-                ? tr("The project has no gold spans yet, so there is nothing to compare with.")
-                : tr("Coder \"%1\" has coded no article, so there is nothing to compare with.")
+                ? RunErrorsText::tr(
+                    "The project has no gold spans yet, so there is nothing to compare with.")
+                : RunErrorsText::tr(
+                    "Coder \"%1\" has coded no article, so there is nothing to compare with.")
                       .arg(against.name));
     RunErrors out = errorsOfLayers(*reference, *predicted, scored, mode, texts);
     out.run = run;

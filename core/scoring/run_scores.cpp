@@ -12,10 +12,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("RunScores", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct RunScoresText {
+    Q_DECLARE_TR_FUNCTIONS(RunScoresText)
+};
 
 using reliability::SpanCounts;
 
@@ -201,7 +201,7 @@ Result<RunScores> scoreRun(const Project &project, const QString &run, const Lay
 {
     if (against.kind != LayerKind::Gold && against.kind != LayerKind::Coder)
         return fail(ErrorCode::InvalidArgument,
-            tr("A run is scored against the gold standard or one coder, not \"%1\".")
+            RunScoresText::tr("A run is scored against the gold standard or one coder, not \"%1\".")
                 .arg(against.key()));
     auto reference = resolveLayer(project, against);
     if (!reference)
@@ -221,8 +221,10 @@ Result<RunScores> scoreRun(const Project &project, const QString &run, const Lay
     if (scored.empty())
         return fail(ErrorCode::InvalidArgument,
             against.kind == LayerKind::Gold
-                ? tr("The project has no gold spans yet, so there is nothing to score against.")
-                : tr("Coder \"%1\" has coded no article, so there is nothing to score against.")
+                ? RunScoresText::tr(
+                    "The project has no gold spans yet, so there is nothing to score against.")
+                : RunScoresText::tr(
+                    "Coder \"%1\" has coded no article, so there is nothing to score against.")
                       .arg(against.name));
     RunScores out = scoreLayers(*reference, *predicted, scored, options);
     out.run = run;

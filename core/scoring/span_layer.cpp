@@ -17,10 +17,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("SpanLayer", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct SpanLayerText {
+    Q_DECLARE_TR_FUNCTIONS(SpanLayerText)
+};
 
 } // namespace
 
@@ -51,7 +51,9 @@ Result<LayerSpec> LayerSpec::parse(const QString &text)
     if (t.startsWith(QLatin1String("run:")) && t.size() > 4)
         return LayerSpec {LayerKind::Run, t.mid(4)};
     return fail(ErrorCode::InvalidArgument,
-        tr("Unknown layer \"%1\" (expected gold, coders, coder:PSEUDONYM or run:NAME).").arg(text));
+        SpanLayerText::tr(
+            "Unknown layer \"%1\" (expected gold, coders, coder:PSEUDONYM or run:NAME).")
+            .arg(text));
 }
 
 std::vector<ArticleId> SpanLayer::articles() const
@@ -102,8 +104,8 @@ Result<LayerReader> LayerReader::open(
             if (spec.kind == LayerKind::Coders || c.pseudonym == spec.name)
                 chosen.push_back(&c);
         if (spec.kind == LayerKind::Coder && chosen.empty())
-            return fail(
-                ErrorCode::NotFound, tr("There is no coder \"%1\" in the project.").arg(spec.name));
+            return fail(ErrorCode::NotFound,
+                SpanLayerText::tr("There is no coder \"%1\" in the project.").arg(spec.name));
         // A coder covers the articles whose coding counts (CodingScope): spans of articles in
         // progress are neither scored nor exported unless asked for.
         auto scope = CodingScope::load(project, CodingScopeOptions {includeUnfinished, {}});
@@ -144,7 +146,8 @@ Result<LayerReader> LayerReader::open(
             return std::unexpected(run.error());
         if (!*run)
             return fail(ErrorCode::NotFound,
-                tr("There is no extractor run \"%1\" in the project.").arg(spec.name));
+                SpanLayerText::tr("There is no extractor run \"%1\" in the project.")
+                    .arg(spec.name));
         reader.m_sources << spec.key();
         reader.m_run = (*run)->id;
         reader.m_runCreatedAt = (*run)->createdAt;

@@ -10,10 +10,10 @@ namespace fourfold::store {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("CopyTables", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CopyTablesText {
+    Q_DECLARE_TR_FUNCTIONS(CopyTablesText)
+};
 
 QJsonValue optionalDouble(const Statement &s, int column)
 {
@@ -55,7 +55,8 @@ Status requireOneChange(const Database &db, const PortableRow &row)
 {
     if (db.changes() != 1)
         return fail(ErrorCode::Constraint,
-            tr("The %1 %2 of the copy belongs to another coder or article in the project.")
+            CopyTablesText::tr(
+                "The %1 %2 of the copy belongs to another coder or article in the project.")
                 .arg(row.type, row.uuid));
     return {};
 }
@@ -293,12 +294,14 @@ Status writePortableRow(Database &db, const PortableRow &row)
             .bind(7, integer("deleted"))
             .bind(8, row.seconds);
     } else {
-        return fail(ErrorCode::Internal, tr("Unknown object type %1.").arg(row.type));
+        return fail(
+            ErrorCode::Internal, CopyTablesText::tr("Unknown object type %1.").arg(row.type));
     }
     if (auto st = stmt->run(); !st) {
         Error e = st.error();
         if (e.code == ErrorCode::Constraint)
-            e.message = tr("The %1 %2 of the copy refers to an object that is not in the project.")
+            e.message = CopyTablesText::tr(
+                "The %1 %2 of the copy refers to an object that is not in the project.")
                             .arg(row.type, row.uuid);
         return std::unexpected(e);
     }
@@ -657,7 +660,8 @@ Status setConflictResolution(Database &db, const QString &uuid, const QString &r
     stmt->bind(1, uuid).bind(2, resolution).bind(3, now());
     FOURFOLD_TRY_STATUS(stmt->run());
     if (db.changes() != 1)
-        return fail(ErrorCode::NotFound, tr("There is no open conflict %1.").arg(uuid));
+        return fail(
+            ErrorCode::NotFound, CopyTablesText::tr("There is no open conflict %1.").arg(uuid));
     return {};
 }
 

@@ -11,10 +11,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ServerConnection", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ServerConnectionText {
+    Q_DECLARE_TR_FUNCTIONS(ServerConnectionText)
+};
 
 QString serverText(const char *text)
 {
@@ -88,7 +88,8 @@ Result<ServerConnection> ServerConnection::open(const QString &conninfo)
     const QByteArray info = conninfo.toUtf8();
     PGconn *raw = PQconnectdb(info.constData());
     if (!raw)
-        return fail(ErrorCode::Internal, tr("Out of memory while connecting to the server."));
+        return fail(ErrorCode::Internal,
+            ServerConnectionText::tr("Out of memory while connecting to the server."));
     ServerConnection conn(raw);
     if (PQstatus(raw) != CONNECTION_OK) {
         const QString cause = serverText(PQerrorMessage(raw));
@@ -96,13 +97,16 @@ Result<ServerConnection> ServerConnection::open(const QString &conninfo)
         const bool refused = cause.contains(QLatin1String("authentication failed"))
             || cause.contains(QLatin1String("password")) || cause.contains(QLatin1String("role"));
         return fail(refused ? ErrorCode::NotAllowed : ErrorCode::Io,
-            refused ? tr("The server refused the login %1.").arg(conn.describe())
-                    : tr("Could not connect to the server %1.").arg(conn.describe()),
+            refused
+                ? ServerConnectionText::tr("The server refused the login %1.").arg(conn.describe())
+                : ServerConnectionText::tr("Could not connect to the server %1.")
+                      .arg(conn.describe()),
             cause);
     }
     // Every text this program sends and reads is UTF-8; times are text, so the zone is moot.
     if (PQsetClientEncoding(raw, "UTF8") != 0)
-        return fail(ErrorCode::Io, tr("The server %1 cannot speak UTF-8.").arg(conn.describe()),
+        return fail(ErrorCode::Io,
+            ServerConnectionText::tr("The server %1 cannot speak UTF-8.").arg(conn.describe()),
             serverText(PQerrorMessage(raw)));
     return conn;
 }
@@ -116,7 +120,8 @@ Result<QString> ServerConnection::withoutPassword(const QString &conninfo)
         const QString cause = serverText(error);
         PQfreemem(error);
         return fail(ErrorCode::InvalidArgument,
-            tr("\"%1\" is not a PostgreSQL connection string.").arg(conninfo), cause);
+            ServerConnectionText::tr("\"%1\" is not a PostgreSQL connection string.").arg(conninfo),
+            cause);
     }
     QStringList pairs;
     for (PQconninfoOption *o = options; o->keyword; ++o) {
@@ -163,17 +168,21 @@ Result<ServerResult> ServerConnection::query(const QString &sql, const QList<QBy
     QString message;
     switch (code) {
     case ErrorCode::NotAllowed:
-        message = tr("The server %1 does not allow this for the role %2.").arg(describe(), user());
+        message = ServerConnectionText::tr("The server %1 does not allow this for the role %2.")
+                      .arg(describe(), user());
         break;
     case ErrorCode::Constraint:
-        message = tr("The server %1 refused a row that breaks a rule of the team project.")
+        message = ServerConnectionText::tr(
+            "The server %1 refused a row that breaks a rule of the team project.")
                       .arg(describe());
         break;
     case ErrorCode::Io:
-        message = tr("The connection to the server %1 was lost.").arg(describe());
+        message =
+            ServerConnectionText::tr("The connection to the server %1 was lost.").arg(describe());
         break;
     default:
-        message = tr("The server %1 could not run a statement.").arg(describe());
+        message =
+            ServerConnectionText::tr("The server %1 could not run a statement.").arg(describe());
     }
     return fail(code, message, cause);
 }
@@ -213,7 +222,7 @@ Result<QString> ServerConnection::passwordVerifier(
         PQencryptPasswordConn(m_conn.get(), pw.constData(), user.constData(), "scram-sha-256");
     if (!verifier)
         return fail(ErrorCode::Internal,
-            tr("Could not make a SCRAM verifier for the role %1.").arg(role),
+            ServerConnectionText::tr("Could not make a SCRAM verifier for the role %1.").arg(role),
             serverText(PQerrorMessage(m_conn.get())));
     const QString out = QString::fromUtf8(verifier);
     PQfreemem(verifier);

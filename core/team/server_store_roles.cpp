@@ -8,10 +8,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("ServerRoles", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct ServerRolesText {
+    Q_DECLARE_TR_FUNCTIONS(ServerRolesText)
+};
 
 // Lower case ASCII letters, digits and _, at most 63 bytes (NAMEDATALEN - 1).
 QString roleName(const QString &raw)
@@ -34,8 +34,9 @@ Status refuseExisting(ServerConnection &conn, const QString &role)
         return std::unexpected(found.error());
     if (found->integer(0, 0) != 0)
         return fail(ErrorCode::Duplicate,
-            tr("The server %1 has a role %2 already; a team project needs a new role for each "
-               "person (use another database name, or drop the old role).")
+            ServerRolesText::tr(
+                "The server %1 has a role %2 already; a team project needs a new role for each "
+                "person (use another database name, or drop the old role).")
                 .arg(conn.describe(), role));
     return {};
 }

@@ -20,10 +20,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("TeamProject", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct TeamProjectText {
+    Q_DECLARE_TR_FUNCTIONS(TeamProjectText)
+};
 
 void removeFiles(const QString &path)
 {
@@ -59,7 +59,8 @@ Result<JoinReport> TeamProject::join(
 {
     if (QFileInfo::exists(outPath) || QFileInfo(outPath).isSymLink())
         return fail(ErrorCode::Duplicate,
-            tr("%1 already exists; name a new file for the working file.").arg(outPath));
+            TeamProjectText::tr("%1 already exists; name a new file for the working file.")
+                .arg(outPath));
     auto recordable = ServerConnection::withoutPassword(server);
     if (!recordable)
         return std::unexpected(recordable.error());
@@ -77,12 +78,13 @@ Result<JoinReport> TeamProject::join(
     if (!version)
         return std::unexpected(version.error());
     if (*version == 0)
-        return fail(
-            ErrorCode::NotFound, tr("The database %1 holds no team project.").arg(report.server));
+        return fail(ErrorCode::NotFound,
+            TeamProjectText::tr("The database %1 holds no team project.").arg(report.server));
     if (*version > kServerSchemaVersion)
         return fail(ErrorCode::NewerSchema,
-            tr("The team project on %1 was written by a newer Fourfold (server schema version "
-               "%2; this version reads up to %3).")
+            TeamProjectText::tr(
+                "The team project on %1 was written by a newer Fourfold (server schema version "
+                "%2; this version reads up to %3).")
                 .arg(report.server)
                 .arg(*version)
                 .arg(kServerSchemaVersion));
@@ -93,12 +95,14 @@ Result<JoinReport> TeamProject::join(
         return std::unexpected(me.error());
     if (me->rows() != 1)
         return fail(ErrorCode::NotAllowed,
-            tr("The login %1 is not a person of the team project.").arg(report.server));
+            TeamProjectText::tr("The login %1 is not a person of the team project.")
+                .arg(report.server));
     report.pseudonym = me->text(0, 0);
     report.lead = me->text(0, 1) == QLatin1String("t");
     if (report.pseudonym != pseudonym)
         return fail(ErrorCode::InvalidArgument,
-            tr("The login %1 is %2, not %3.").arg(report.server, report.pseudonym, pseudonym));
+            TeamProjectText::tr("The login %1 is %2, not %3.")
+                .arg(report.server, report.pseudonym, pseudonym));
 
     auto xmin = serverSnapshotXmin(*conn);
     if (!xmin)

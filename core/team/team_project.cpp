@@ -28,10 +28,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("TeamProject", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct TeamProjectText {
+    Q_DECLARE_TR_FUNCTIONS(TeamProjectText)
+};
 
 // Rows go to the server in batches: one statement per table and about a megabyte of JSON.
 class RowBatch
@@ -106,7 +106,8 @@ Status writePrivateFile(const QString &path, const QByteArray &text)
         || !file.setPermissions(QFileDevice::ReadOwner | QFileDevice::WriteOwner)
         || file.write(text) != text.size() || !file.flush()) {
         file.remove();
-        return fail(ErrorCode::Io, tr("Could not write the password file %1.").arg(path),
+        return fail(ErrorCode::Io,
+            TeamProjectText::tr("Could not write the password file %1.").arg(path),
             file.errorString());
     }
     return {};
@@ -119,22 +120,26 @@ Status prepareCredentialsDir(const QString &dir, bool *created)
     *created = false;
     if (info.isSymLink())
         return fail(ErrorCode::InvalidArgument,
-            tr("%1 is a symbolic link; name a new folder for the password files.").arg(dir));
+            TeamProjectText::tr("%1 is a symbolic link; name a new folder for the password files.")
+                .arg(dir));
     if (info.exists()) {
         if (!info.isDir()
             || !QDir(dir).isEmpty(
                 QDir::AllEntries | QDir::NoDotAndDotDot | QDir::Hidden | QDir::System))
             return fail(ErrorCode::Duplicate,
-                tr("%1 is not an empty folder; name a new folder for the password files.")
+                TeamProjectText::tr(
+                    "%1 is not an empty folder; name a new folder for the password files.")
                     .arg(dir));
     } else {
         if (!QDir().mkpath(dir))
-            return fail(ErrorCode::Io, tr("Could not create the folder %1.").arg(dir));
+            return fail(
+                ErrorCode::Io, TeamProjectText::tr("Could not create the folder %1.").arg(dir));
         *created = true;
     }
     if (!QFile::setPermissions(
             dir, QFileDevice::ReadOwner | QFileDevice::WriteOwner | QFileDevice::ExeOwner))
-        return fail(ErrorCode::Io, tr("Could not make %1 private to its owner.").arg(dir));
+        return fail(
+            ErrorCode::Io, TeamProjectText::tr("Could not make %1 private to its owner.").arg(dir));
     return {};
 }
 
@@ -155,13 +160,15 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         return std::unexpected(copy.error());
     if (*copy)
         return fail(ErrorCode::Unsupported,
-            tr("%1 is a coder copy; publish the main project.").arg(project.path()));
+            TeamProjectText::tr("%1 is a coder copy; publish the main project.")
+                .arg(project.path()));
     auto people = store::coders(project.m_db);
     if (!people)
         return std::unexpected(people.error());
     if (people->empty())
         return fail(ErrorCode::InvalidArgument,
-            tr("%1 has no people; add the lead and the coders before publishing it.")
+            TeamProjectText::tr(
+                "%1 has no people; add the lead and the coders before publishing it.")
                 .arg(project.path()));
     QStringList leads;
     for (const Coder &c : *people)
@@ -173,11 +180,12 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
     if (!leads.contains(lead))
         return fail(ErrorCode::InvalidArgument,
             lead.isEmpty()
-                ? tr("%1 has several leads (%2); name the one publishing it.")
+                ? TeamProjectText::tr("%1 has several leads (%2); name the one publishing it.")
                       .arg(project.path(), leads.join(QStringLiteral(", ")))
-                : tr("%1 has no lead with the pseudonym %2 (leads: %3).")
+                : TeamProjectText::tr("%1 has no lead with the pseudonym %2 (leads: %3).")
                       .arg(project.path(), lead,
-                          leads.isEmpty() ? tr("none") : leads.join(QStringLiteral(", "))));
+                          leads.isEmpty() ? TeamProjectText::tr("none")
+                                          : leads.join(QStringLiteral(", "))));
     auto recordable = ServerConnection::withoutPassword(server);
     if (!recordable)
         return std::unexpected(recordable.error());
@@ -197,7 +205,8 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         const QString role = personRole(conn->database(), c.pseudonym);
         if (pseudonymOfRole.contains(role))
             return fail(ErrorCode::Duplicate,
-                tr("The pseudonyms %1 and %2 make the same login role %3; rename one of them.")
+                TeamProjectText::tr(
+                    "The pseudonyms %1 and %2 make the same login role %3; rename one of them.")
                     .arg(pseudonymOfRole.value(role), c.pseudonym, role));
         pseudonymOfRole.insert(role, c.pseudonym);
         logins.push_back({c, role, newPassword(),
@@ -225,7 +234,8 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         return abandon(version.error());
     if (*version != 0)
         return abandon(fail(ErrorCode::Duplicate,
-            tr("The database %1 holds a team project already; publish into an empty database.")
+            TeamProjectText::tr(
+                "The database %1 holds a team project already; publish into an empty database.")
                 .arg(report.server))
                            .error());
     if (auto st = prepareServerSchema(*conn); !st)
@@ -322,7 +332,7 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
     // The server holds the project now; the file records where, and whose working file it is.
     if (auto st = store::setSetting(project.m_db, serverSettingKey(), *recordable); !st) {
         Error e = st.error();
-        e.message = tr("The team project is on %1, but %2 could not record it: %3")
+        e.message = TeamProjectText::tr("The team project is on %1, but %2 could not record it: %3")
                         .arg(report.server, project.path(), e.message);
         return std::unexpected(e);
     }

@@ -20,10 +20,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("TeamProject", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct TeamProjectText {
+    Q_DECLARE_TR_FUNCTIONS(TeamProjectText)
+};
 
 const char *const kTypes[] = {"assignment", "annotation", "judgement", "link"};
 
@@ -73,7 +73,8 @@ Result<SyncReport> TeamProject::sync(Project &project)
             return std::unexpected(r->error());
     if (!server->has_value() || !lastXmin->has_value())
         return fail(ErrorCode::InvalidArgument,
-            tr("%1 is not a team working file (made by team publish or team join).")
+            TeamProjectText::tr(
+                "%1 is not a team working file (made by team publish or team join).")
                 .arg(project.path()));
     auto conn = ServerConnection::open(**server);
     if (!conn)
@@ -92,10 +93,11 @@ Result<SyncReport> TeamProject::sync(Project &project)
     const bool owner = me->rows() == 1 && me->isNull(0, 0);
     if (me->rows() != 1 || (owner && me->text(0, 1) != QLatin1String("t")))
         return fail(ErrorCode::NotAllowed,
-            tr("The login %1 is not a person of the team project.").arg(report.server));
+            TeamProjectText::tr("The login %1 is not a person of the team project.")
+                .arg(report.server));
     if (!owner && me->text(0, 0) != pseudonym->value_or(QString()))
         return fail(ErrorCode::InvalidArgument,
-            tr("The login %1 is %2, but %3 is the working file of %4.")
+            TeamProjectText::tr("The login %1 is %2, but %3 is the working file of %4.")
                 .arg(
                     report.server, me->text(0, 0), project.path(), pseudonym->value_or(QString())));
     const bool lead = owner || me->text(0, 1) == QLatin1String("t");

@@ -14,10 +14,10 @@ namespace {
 constexpr char16_t kByteOrderMark = 0xFEFF;
 constexpr char16_t kReplacementCharacter = 0xFFFD;
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("CanonicalText", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CanonicalText {
+    Q_DECLARE_TR_FUNCTIONS(CanonicalText)
+};
 
 // Why a UTF-8 sequence is ill-formed; see the Unicode Standard 15.0, §3.9, Table 3-7
 // "Well-Formed UTF-8 Byte Sequences" (and RFC 3629, §4).
@@ -29,27 +29,32 @@ std::unexpected<Error> utf8Error(
     QString what;
     switch (fault) {
     case Utf8Fault::LoneContinuation:
-        what = tr("invalid UTF-8 (byte 0x%1): a continuation byte without a lead byte.");
+        what = CanonicalText::tr(
+            "invalid UTF-8 (byte 0x%1): a continuation byte without a lead byte.");
         break;
     case Utf8Fault::NeverValid:
-        what = tr("invalid UTF-8 (byte 0x%1): this byte never occurs in UTF-8.");
+        what = CanonicalText::tr("invalid UTF-8 (byte 0x%1): this byte never occurs in UTF-8.");
         break;
     case Utf8Fault::Overlong:
-        what = tr("invalid UTF-8 (byte 0x%1): an overlong encoding, which UTF-8 forbids.");
+        what = CanonicalText::tr(
+            "invalid UTF-8 (byte 0x%1): an overlong encoding, which UTF-8 forbids.");
         break;
     case Utf8Fault::Truncated:
-        what = tr("invalid UTF-8 (byte 0x%1): the multi-byte sequence it starts is cut short.");
+        what = CanonicalText::tr(
+            "invalid UTF-8 (byte 0x%1): the multi-byte sequence it starts is cut short.");
         break;
     case Utf8Fault::Surrogate:
-        what = tr("invalid UTF-8 (byte 0x%1): it encodes a UTF-16 surrogate (U+D800..U+DFFF), "
-                  "which UTF-8 forbids.");
+        what = CanonicalText::tr(
+            "invalid UTF-8 (byte 0x%1): it encodes a UTF-16 surrogate (U+D800..U+DFFF), "
+            "which UTF-8 forbids.");
         break;
     case Utf8Fault::TooHigh:
-        what = tr("invalid UTF-8 (byte 0x%1): it encodes a code point above U+10FFFF.");
+        what =
+            CanonicalText::tr("invalid UTF-8 (byte 0x%1): it encodes a code point above U+10FFFF.");
         break;
     }
     what = what.arg(QString::number(byte, 16).rightJustified(2, QLatin1Char('0')).toUpper());
-    what += QLatin1Char(' ') + tr("Save the file as UTF-8 and import it again.");
+    what += QLatin1Char(' ') + CanonicalText::tr("Save the file as UTF-8 and import it again.");
     return failAt(ErrorCode::InvalidInput, sourceName, line, column, what);
 }
 
@@ -134,8 +139,8 @@ Result<QString> decodeStrict(
         if (b < 0x80) {
             if (b == 0) {
                 return failAt(ErrorCode::InvalidInput, sourceName, line, column(),
-                    tr("NUL byte (0x00): the file looks binary, not like text. "
-                       "Import a UTF-8 text file."));
+                    CanonicalText::tr("NUL byte (0x00): the file looks binary, not like text. "
+                                      "Import a UTF-8 text file."));
             }
             // CRLF, LF and a lone CR each end one line, as canonicalText() counts them.
             if (b == '\n' || (b == '\r' && (i + 1 == n || p[i + 1] != '\n'))) {

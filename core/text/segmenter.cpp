@@ -23,10 +23,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("Segmenter", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct SegmenterText {
+    Q_DECLARE_TR_FUNCTIONS(SegmenterText)
+};
 
 // Unicode White_Space; every such character is in the BMP, so testing UTF-16 units is exact.
 bool isSpace(char16_t c)
@@ -254,15 +254,17 @@ Result<Segmentation> segmentText(const QString &text, const QString &languageTag
 {
     if (text.size() > std::numeric_limits<int32_t>::max()) {
         return fail(ErrorCode::InvalidArgument,
-            tr("The text is too long to segment (more than 2^31 UTF-16 code units)."));
+            SegmenterText::tr(
+                "The text is too long to segment (more than 2^31 UTF-16 code units)."));
     }
     const QString tag = languageTag.trimmed().isEmpty() ? QStringLiteral("en") : languageTag;
     UErrorCode status = U_ZERO_ERROR;
     const icu::Locale parsed = icu::Locale::forLanguageTag(tag.toStdString(), status);
     if (U_FAILURE(status) || parsed.isBogus()) {
         return fail(ErrorCode::InvalidArgument,
-            tr("\"%1\" is not a valid BCP 47 language tag (for example \"en\", \"nl\" "
-               "or \"de-AT\").")
+            SegmenterText::tr(
+                "\"%1\" is not a valid BCP 47 language tag (for example \"en\", \"nl\" "
+                "or \"de-AT\").")
                 .arg(languageTag),
             QString::fromLatin1(u_errorName(status)));
     }
@@ -273,7 +275,8 @@ Result<Segmentation> segmentText(const QString &text, const QString &languageTag
     LanguageSegmenters *segmenters = segmentersFor(locale, status);
     if (segmenters == nullptr) {
         return fail(ErrorCode::Internal,
-            tr("ICU could not create its break iterators for \"%1\".").arg(languageTag),
+            SegmenterText::tr("ICU could not create its break iterators for \"%1\".")
+                .arg(languageTag),
             QString::fromLatin1(u_errorName(status)));
     }
 
@@ -328,7 +331,7 @@ Result<Segmentation> segmentText(const QString &text, const QString &languageTag
         }
     }
     if (U_FAILURE(status)) {
-        return fail(ErrorCode::Internal, tr("ICU could not segment the text."),
+        return fail(ErrorCode::Internal, SegmenterText::tr("ICU could not segment the text."),
             QString::fromLatin1(u_errorName(status)));
     }
     return result;

@@ -8,10 +8,10 @@ namespace fourfold {
 
 namespace {
 
-QString tr(const char *text)
-{
-    return QCoreApplication::translate("CodebookEditor", text);
-}
+// The sentences of this file, under a context that lupdate collects.
+struct CodebookEditorText {
+    Q_DECLARE_TR_FUNCTIONS(CodebookEditorText)
+};
 
 // The first key path the reader's sentence names ("functions[2].attributes[0].values[1]").
 QString namedPath(const QString &message)
@@ -52,13 +52,13 @@ int indexIn(const QString &path, const QString &list)
 QString valuesSentence(const QStringList &values)
 {
     if (values.isEmpty())
-        return tr("A choice list needs at least one value (one per line).");
+        return CodebookEditorText::tr("A choice list needs at least one value (one per line).");
     for (qsizetype i = 0; i < values.size(); ++i) {
         if (values[i].trimmed().isEmpty())
-            return tr("Line %1 is empty: every value needs a name.").arg(i + 1);
+            return CodebookEditorText::tr("Line %1 is empty: every value needs a name.").arg(i + 1);
         const qsizetype first = values.indexOf(values[i]);
         if (first < i)
-            return tr("“%1” is listed twice (lines %2 and %3).")
+            return CodebookEditorText::tr("“%1” is listed twice (lines %2 and %3).")
                 .arg(values[i])
                 .arg(first + 1)
                 .arg(i + 1);
@@ -83,11 +83,14 @@ QString sentenceFor(const Codebook &draft, const QString &field, const QString &
     else if (field.endsWith(QLatin1String(".key")) && (attribute || item)) {
         const QString key = attribute ? attribute->key : item->key;
         if (key.isEmpty())
-            sentence = tr("The key is empty: give a short name such as “polarity”.");
+            sentence =
+                CodebookEditorText::tr("The key is empty: give a short name such as “polarity”.");
         else if (attribute)
-            sentence = tr("Another attribute of this function already has the key “%1”.").arg(key);
+            sentence = CodebookEditorText::tr(
+                "Another attribute of this function already has the key “%1”.")
+                           .arg(key);
         else
-            sentence = tr("Another item already has the key “%1”.").arg(key);
+            sentence = CodebookEditorText::tr("Another item already has the key “%1”.").arg(key);
     }
     return sentence.isEmpty() ? fallback : sentence;
 }
@@ -97,7 +100,8 @@ QString sentenceFor(const Codebook &draft, const QString &field, const QString &
 CodebookCheckResult checkCodebookDraft(const Codebook &draft)
 {
     const QByteArray json = QJsonDocument(draft.toJson()).toJson(QJsonDocument::Indented);
-    auto book = Codebook::fromJson(json, tr("the codebook being edited"), CodebookCheck::File);
+    auto book = Codebook::fromJson(
+        json, CodebookEditorText::tr("the codebook being edited"), CodebookCheck::File);
     if (book)
         return {std::move(*book), std::nullopt};
     const QString field = editedField(namedPath(book.error().message));

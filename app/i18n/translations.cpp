@@ -1,0 +1,45 @@
+#include "app/i18n/translations.h"
+
+#include <QCoreApplication>
+#include <QLibraryInfo>
+#include <QTranslator>
+
+#include <memory>
+#include <vector>
+
+namespace fourfold {
+
+namespace {
+
+std::vector<std::unique_ptr<QTranslator>> &installed()
+{
+    static std::vector<std::unique_ptr<QTranslator>> translators;
+    return translators;
+}
+
+} // namespace
+
+QString useLanguage(const QLocale &locale)
+{
+    for (const auto &t : installed())
+        QCoreApplication::removeTranslator(t.get());
+    installed().clear();
+
+    auto own = std::make_unique<QTranslator>();
+    if (!own->load(
+            locale, QStringLiteral("fourfold"), QStringLiteral("_"), QStringLiteral(":/i18n")))
+        return {};
+    const QLocale language(own->language());
+    QCoreApplication::installTranslator(own.get());
+    installed().push_back(std::move(own));
+
+    auto qt = std::make_unique<QTranslator>();
+    if (qt->load(language, QStringLiteral("qtbase"), QStringLiteral("_"),
+            QLibraryInfo::path(QLibraryInfo::TranslationsPath))) {
+        QCoreApplication::installTranslator(qt.get());
+        installed().push_back(std::move(qt));
+    }
+    return QLocale::languageToCode(language.language());
+}
+
+} // namespace fourfold

@@ -1,0 +1,142 @@
+// What the user meets in German: fourfold-cli follows LANGUAGE as other command-line tools do,
+// the core's error messages and undo texts come translated, and Qt's own texts follow the same
+// language. Expected sentences are read from translations/fourfold_<lang>.ts, never written here.
+#include "app/i18n/translations.h"
+#include "core/project/edit.h"
+#include "core/project/people.h"
+#include "core/project/project.h"
+#include "tests/support/cli_run.h"
+#include "tests/support/test_support.h"
+#include "tests/translations/ts_file.h"
+
+#include <QCoreApplication>
+#include <QLibraryInfo>
+#include <QTranslator>
+
+#include <catch2/catch.hpp>
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+// This process's environment with the language variables set as a user's shell would.
+QProcessEnvironment languageEnvironment(const QString &language)
+{
+    QProcessEnvironment env = QProcessEnvironment::systemEnvironment();
+    env.remove(QStringLiteral("LC_ALL"));
+    env.remove(QStringLiteral("LC_MESSAGES"));
+    env.insert(QStringLiteral("LANG"), QStringLiteral("C.UTF-8"));
+    if (language.isEmpty())
+        env.remove(QStringLiteral("LANGUAGE"));
+    else
+        env.insert(QStringLiteral("LANGUAGE"), language);
+    return env;
+}
+
+// The error a JSON Lines article without its text gets (core/io/jsonl_reader.cpp).
+const char *const kMissingField = "missing required field \"%1\"";
+
+// Imports a JSON Lines file whose one article lacks its text into a new project, with
+// LANGUAGE=`language`, and returns what fourfold-cli wrote to stderr.
+QString brokenImportError(const QString &language)
+{
+    QTemporaryDir dir;
+    const QString project = dir.filePath(QStringLiteral("lang.fourfold"));
+    const auto env = languageEnvironment(language);
+    REQUIRE(
+        runCli(QStringLiteral(FOURFOLD_CLI), {QStringLiteral("new"), project}, 60000, env).exitCode
+        == 0);
+    const QString broken = writeFile(
+        dir, QStringLiteral("broken.jsonl"), "{\"id\":\"a1\",\"title\":\"No text here\"}\n");
+    const CliRun run = runCli(
+        QStringLiteral(FOURFOLD_CLI), {QStringLiteral("import"), project, broken}, 60000, env);
+    CHECK(run.exitCode != 0);
+    return run.err;
+}
+
+} // namespace
+
+TEST_CASE("With LANGUAGE=de or nl a broken import's error from fourfold-cli is in that language")
+{
+    const QString english = QString::fromLatin1(kMissingField).arg(QStringLiteral("text"));
+    for (const QString &lang : {QStringLiteral("de"), QStringLiteral("nl")}) {
+        const QString expected =
+            readTsFile(lang)
+                .translation(QStringLiteral("ArticleReader"), QString::fromLatin1(kMissingField))
+                .arg(QStringLiteral("text"));
+        REQUIRE(expected != english);
+        const QString err = brokenImportError(lang);
+        INFO(lang.toStdString() << " stderr: " << err.toStdString());
+        CHECK(err.contains(expected));
+        CHECK_FALSE(err.contains(english));
+    }
+}
+
+TEST_CASE("Without LANGUAGE and with LANG=C fourfold-cli speaks English")
+{
+    const QString err = brokenImportError(QString());
+    INFO(err.toStdString());
+    CHECK(err.contains(QString::fromLatin1(kMissingField).arg(QStringLiteral("text"))));
+}
+
+TEST_CASE("fourfold-cli's own messages follow LANGUAGE")
+{
+    const TsFile de = readTsFile(QStringLiteral("de"));
+    const CliRun run = runCli(QStringLiteral(FOURFOLD_CLI), {QStringLiteral("no-such-command")},
+        60000, languageEnvironment(QStringLiteral("de")));
+    CHECK(run.exitCode != 0);
+    INFO(run.err.toStdString());
+    CHECK(run.err.contains(de.translation(QStringLiteral("cli"),
+                                 QStringLiteral("fourfold-cli: unknown command \"%1\"."))
+                               .arg(QStringLiteral("no-such-command"))));
+}
+
+TEST_CASE("An undo text from the core is German once German is chosen")
+{
+    QTemporaryDir dir;
+    auto project = Project::create(dir.filePath(QStringLiteral("undo.fourfold")));
+    REQUIRE(project);
+    const TsFile de = readTsFile(QStringLiteral("de"));
+
+    CHECK(useLanguage(QLocale(QLocale::German, QLocale::Germany)) == QStringLiteral("de"));
+    auto add = People::add(*project, nullptr,
+        {QStringLiteral("Cora Coder"), QStringLiteral("C07"), CoderRole::Coder, QString()});
+    REQUIRE(add);
+    const QString german =
+        de.translation(QStringLiteral("PersonEdits"), QStringLiteral("Add %1")).arg(u"C07");
+    CHECK(german != QStringLiteral("Add C07"));
+    CHECK((*add)->text() == german);
+    // The error of a refused edit is German too (core/project/people.cpp).
+    REQUIRE(project->apply(**add));
+    auto again = People::add(*project, nullptr,
+        {QStringLiteral("Cora Coder"), QStringLiteral("C07"), CoderRole::Coder, QString()});
+    REQUIRE_FALSE(again);
+    CHECK(again.error().message
+        == de.translation(
+                 QStringLiteral("People"), QStringLiteral("The pseudonym \"%1\" is already taken."))
+               .arg(u"C07"));
+
+    CHECK(useLanguage(QLocale(QLocale::English)).isEmpty());
+    CHECK((*add)->text() == QStringLiteral("Add C07"));
+}
+
+TEST_CASE("Qt's own texts follow the chosen language")
+{
+    // Qt's buttons ("Cancel") come from qtbase_<lang>.qm in Qt's translations folder (Debian
+    // package qt6-translations-l10n); the expected text is read from that file.
+    const char *context = "QPlatformTheme";
+    const char *source = "Cancel";
+    for (const QString &lang : {QStringLiteral("de"), QStringLiteral("nl")}) {
+        QTranslator qt;
+        REQUIRE(qt.load(
+            QStringLiteral("qtbase_") + lang, QLibraryInfo::path(QLibraryInfo::TranslationsPath)));
+        const QString expected = qt.translate(context, source);
+        REQUIRE_FALSE(expected.isEmpty());
+        CHECK(expected != QLatin1String(source));
+        CHECK(useLanguage(QLocale(lang)) == lang);
+        CHECK(QCoreApplication::translate(context, source) == expected);
+    }
+    useLanguage(QLocale(QLocale::English));
+    CHECK(QCoreApplication::translate(context, source) == QLatin1String(source));
+}

@@ -1,0 +1,107 @@
+// The translation files themselves: every message of Dutch and German is translated, and lupdate
+// reads core, the CLI, the report and the desktop, so that a sentence the core says (an error,
+// an undo text) reaches the translators under the context it is looked up in at run time.
+#include "tests/translations/ts_file.h"
+
+#include <QDirIterator>
+#include <QFile>
+#include <QRegularExpression>
+
+#include <catch2/catch.hpp>
+
+using namespace fourfold::test;
+
+namespace {
+
+// The C++ sources under `folder` of the repository, relative to it.
+QStringList sources(const QString &folder)
+{
+    QStringList files;
+    const QString root = QStringLiteral(FOURFOLD_SOURCE_DIR "/");
+    QDirIterator it(root + folder, {QStringLiteral("*.cpp"), QStringLiteral("*.h")}, QDir::Files,
+        QDirIterator::Subdirectories);
+    while (it.hasNext())
+        files << it.next().mid(root.size());
+    files.sort();
+    return files;
+}
+
+// A source's code without its // comments (a comment may show a call; only code counts).
+QString code(const QString &relative)
+{
+    QFile f(QStringLiteral(FOURFOLD_SOURCE_DIR "/") + relative);
+    REQUIRE(f.open(QIODevice::ReadOnly));
+    return QString::fromUtf8(f.readAll()).remove(QRegularExpression(QStringLiteral("//[^\n]*")));
+}
+
+} // namespace
+
+TEST_CASE("Every message of the Dutch and German translations is translated")
+{
+    for (const QString &lang : {QStringLiteral("de"), QStringLiteral("nl")}) {
+        const TsFile ts = readTsFile(lang);
+        INFO(lang.toStdString() << " unfinished: " << ts.unfinished.join(u'\n').toStdString());
+        CHECK(ts.messages > 1000);
+        CHECK(ts.unfinished.isEmpty());
+    }
+}
+
+TEST_CASE("The Dutch and German translations hold the same messages")
+{
+    const TsFile de = readTsFile(QStringLiteral("de"));
+    const TsFile nl = readTsFile(QStringLiteral("nl"));
+    CHECK(de.translations.keys() == nl.translations.keys());
+}
+
+TEST_CASE("lupdate reads core the CLI the report and the desktop")
+{
+    const TsFile ts = readTsFile(QStringLiteral("de"));
+    CHECK(ts.coreContexts.size() > 0);
+    for (const QString &folder : {QStringLiteral("core/"), QStringLiteral("app/cli/"),
+             QStringLiteral("app/report/"), QStringLiteral("app/desktop/")}) {
+        INFO(folder.toStdString());
+        CHECK(std::ranges::any_of(
+            ts.sourceFiles, [&](const QString &f) { return f.startsWith(folder); }));
+    }
+}
+
+TEST_CASE("Every source with a translated sentence is in the translations")
+{
+    // A file that translates something must appear among lupdate's locations: if it does not,
+    // lupdate was not run since the sentence was added, or it does not read the file.
+    const TsFile ts = readTsFile(QStringLiteral("de"));
+    const QRegularExpression translates(
+        QStringLiteral(R"(\b(\w+::)?tr\(\s*"|QCoreApplication::translate\(\s*")"));
+    int checked = 0;
+    for (const QString &folder : {QStringLiteral("core"), QStringLiteral("app")}) {
+        for (const QString &file : sources(folder)) {
+            if (!code(file).contains(translates))
+                continue;
+            ++checked;
+            INFO(file.toStdString());
+            CHECK(ts.sourceFiles.contains(file));
+        }
+    }
+    CHECK(checked > 50);
+}
+
+TEST_CASE("No source hides its sentences from lupdate behind a file-local tr function")
+{
+    // `QString tr(const char *text) { return QCoreApplication::translate("X", text); }` translates
+    // at run time under "X", but lupdate files the calls under the enclosing class or namespace,
+    // so no translation ever matches. Files use a struct with Q_DECLARE_TR_FUNCTIONS and call
+    // Struct::tr() instead; an unqualified tr() outside a QObject is the same mistake.
+    const QRegularExpression helper(QStringLiteral(R"(^\s*(static\s+)?QString\s+tr\s*\()"),
+        QRegularExpression::MultilineOption);
+    const QRegularExpression unqualified(QStringLiteral(R"((?<![\w:.>])tr\()"));
+    for (const QString &folder : {QStringLiteral("core"), QStringLiteral("app/cli"),
+             QStringLiteral("app/report"), QStringLiteral("app/i18n")}) {
+        for (const QString &file : sources(folder)) {
+            const QString source = code(file);
+            INFO(file.toStdString());
+            CHECK_FALSE(source.contains(helper));
+            if (!source.contains(QLatin1String("Q_OBJECT")))
+                CHECK_FALSE(source.contains(unqualified));
+        }
+    }
+}
