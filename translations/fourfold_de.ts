@@ -1799,27 +1799,27 @@
     <message>
         <location filename="../core/io/document_split.cpp" line="39"/>
         <source>The split pattern is empty.</source>
-        <translation type="unfinished"></translation>
+        <translation>Das Trennmuster ist leer.</translation>
     </message>
     <message>
         <location filename="../core/io/document_split.cpp" line="42"/>
         <source>The split pattern &quot;%1&quot; is not a valid regular expression: %2 (at character %3).</source>
-        <translation type="unfinished"></translation>
+        <translation>Das Trennmuster „%1“ ist kein gültiger regulärer Ausdruck: %2 (bei Zeichen %3).</translation>
     </message>
     <message>
         <location filename="../core/io/document_split.cpp" line="50"/>
         <source>The split pattern &quot;%1&quot; names the group &quot;%2&quot;; the groups it may name are title, outlet and date.</source>
-        <translation type="unfinished"></translation>
+        <translation>Das Trennmuster „%1“ nennt die Gruppe „%2“; es darf nur die Gruppen title, outlet und date nennen.</translation>
     </message>
     <message>
         <location filename="../core/io/document_split.cpp" line="82"/>
         <source>the split pattern &quot;%1&quot; matches no line of the document</source>
-        <translation type="unfinished"></translation>
+        <translation>das Trennmuster „%1“ trifft auf keine Zeile des Dokuments zu</translation>
     </message>
     <message>
         <location filename="../core/io/document_split.cpp" line="104"/>
         <source>part %1 of the document (from this line) holds no text besides its title</source>
-        <translation type="unfinished"></translation>
+        <translation>Teil %1 des Dokuments (ab dieser Zeile) enthält außer seinem Titel keinen Text</translation>
     </message>
 </context>
 <context>
@@ -3511,7 +3511,7 @@
         <location filename="../app/report/report_document.cpp" line="925"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
-        <translation type="unfinished"></translation>
+        <translation>de</translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="942"/>
@@ -4096,7 +4096,7 @@
     <message>
         <location filename="../core/team/team_status.cpp" line="38"/>
         <source>%1 is not a team working file (made by team publish or team join).</source>
-        <translation type="unfinished">%1 ist keine Team-Arbeitsdatei (erstellt mit team publish oder team join).</translation>
+        <translation>%1 ist keine Team-Arbeitsdatei (erstellt mit team publish oder team join).</translation>
     </message>
 </context>
 <context>
@@ -4492,7 +4492,7 @@
     <message>
         <location filename="../app/cli/command_assign.cpp" line="69"/>
         <source>  near copies left out of the sampling frame</source>
-        <translation type="unfinished"></translation>
+        <translation>  Beinahe-Kopien aus der Auswahlgesamtheit ausgelassen</translation>
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="71"/>
@@ -4683,7 +4683,7 @@
     <message>
         <location filename="../app/cli/command_assign.cpp" line="260"/>
         <source>With --draw: leave articles found to be near copies of older ones at import out of the sampling frame.</source>
-        <translation type="unfinished"></translation>
+        <translation>Mit --draw: Artikel, die beim Import als Beinahe-Kopien älterer erkannt wurden, aus der Auswahlgesamtheit auslassen.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="263"/>
@@ -5718,7 +5718,7 @@
     <message>
         <location filename="../app/cli/command_import.cpp" line="99"/>
         <source>List and record an added article as a near copy of an article in the project when the estimated Jaccard similarity of their 5-word shingles is at least J, in (0, 1] (default 0.8).</source>
-        <translation type="unfinished"></translation>
+        <translation>Einen hinzugefügten Artikel als Beinahe-Kopie eines Artikels im Projekt auflisten und speichern, wenn die geschätzte Jaccard-Ähnlichkeit ihrer 5-Wort-Shingles mindestens J beträgt, in (0, 1] (Standard 0.8).</translation>
     </message>
     <message>
         <location filename="../app/cli/command_import.cpp" line="105"/>
@@ -5763,7 +5763,7 @@
     <message>
         <location filename="../app/cli/command_import.cpp" line="155"/>
         <source>--near-copy-threshold expects a number in (0, 1], got &quot;%1&quot;.</source>
-        <translation type="unfinished"></translation>
+        <translation>--near-copy-threshold erwartet eine Zahl in (0, 1], erhalten: „%1“.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_import.cpp" line="163"/>
@@ -5801,7 +5801,7 @@
     <message>
         <location filename="../app/cli/command_import.cpp" line="229"/>
         <source>  line %1 (%2): added, a near copy of &quot;%3&quot; (similarity %4)</source>
-        <translation type="unfinished"></translation>
+        <translation>  Zeile %1 (%2): hinzugefügt, eine Beinahe-Kopie von „%3“ (Ähnlichkeit %4)</translation>
     </message>
     <message>
         <location filename="../app/cli/command_info.cpp" line="40"/>
@@ -5826,7 +5826,7 @@
     <message>
         <location filename="../app/cli/command_info.cpp" line="116"/>
         <source>Near copies  %1 article(s) a near copy of an older one (%2 pair(s))</source>
-        <translation type="unfinished"></translation>
+        <translation>Beinahe-Kopien %1 Artikel sind Beinahe-Kopie eines älteren (%2 Paar(e))</translation>
     </message>
     <message>
         <location filename="../app/cli/command_info.cpp" line="120"/>
@@ -6207,7 +6207,7 @@
     <message>
         <location filename="../app/cli/command_report.cpp" line="60"/>
         <source>The report&apos;s language: en, nl or de (default: the language of the messages, from LANGUAGE or LANG).</source>
-        <translation type="unfinished"></translation>
+        <translation>Die Sprache des Berichts: en, nl oder de (Standard: die Sprache der Meldungen, aus LANGUAGE oder LANG).</translation>
     </message>
     <message>
         <location filename="../app/cli/command_report.cpp" line="64"/>
@@ -6242,7 +6242,7 @@
     <message>
         <location filename="../app/cli/command_report.cpp" line="112"/>
         <source>--language takes en, nl or de, not &quot;%1&quot;.</source>
-        <translation type="unfinished"></translation>
+        <translation>--language nimmt en, nl oder de, nicht „%1“.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_report.cpp" line="123"/>
@@ -6475,47 +6475,47 @@
     <message>
         <location filename="../app/cli/command_team.cpp" line="225"/>
         <source>Show a working file&apos;s team project: its server, whose file it is, when it last synced and what the next sync would send. Reads the file only (works offline).</source>
-        <translation type="unfinished"></translation>
+        <translation>Das Teamprojekt einer Arbeitsdatei zeigen: seinen Server, wem die Datei gehört, wann sie zuletzt synchronisiert wurde und was die nächste Synchronisation senden würde. Liest nur die Datei (funktioniert offline).</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="255"/>
         <source>Working file of %1 (%2) on %3, through change %4.</source>
-        <translation type="unfinished"></translation>
+        <translation>Arbeitsdatei von %1 (%2) auf %3, bis Änderung %4.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="257"/>
         <source>lead</source>
-        <translation type="unfinished">Leitung</translation>
+        <translation>Leitung</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="262"/>
         <source>Not synced since it was made.</source>
-        <translation type="unfinished"></translation>
+        <translation>Seit der Erstellung nicht synchronisiert.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="263"/>
         <source>Last synced %1.</source>
-        <translation type="unfinished"></translation>
+        <translation>Zuletzt synchronisiert %1.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="268"/>
         <source>Nothing waiting to be sent.</source>
-        <translation type="unfinished"></translation>
+        <translation>Nichts wartet auf das Senden.</translation>
     </message>
     <message numerus="yes">
         <location filename="../app/cli/command_team.cpp" line="269"/>
         <source>%n change(s) waiting to be sent (%1).</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>%n Änderung wartet auf das Senden (%1).</numerusform>
+            <numerusform>%n Änderungen warten auf das Senden (%1).</numerusform>
         </translation>
     </message>
     <message numerus="yes">
         <location filename="../app/cli/command_team.cpp" line="273"/>
         <source>%n conflict(s) from syncs wait for the lead.</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>%n Konflikt aus Synchronisationen wartet auf die Leitung.</numerusform>
+            <numerusform>%n Konflikte aus Synchronisationen warten auf die Leitung.</numerusform>
         </translation>
     </message>
     <message>
@@ -6541,7 +6541,7 @@
     <message>
         <location filename="../app/cli/command_team.cpp" line="299"/>
         <source>  status    What a working file last synced and what waits to be sent.</source>
-        <translation type="unfinished"></translation>
+        <translation>  status    Was eine Arbeitsdatei zuletzt synchronisiert hat und was auf das Senden wartet.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="304"/>
@@ -6659,17 +6659,17 @@
     <message>
         <location filename="../app/desktop/frames/frames_job.cpp" line="18"/>
         <source>The computation was cancelled.</source>
-        <translation type="unfinished">Die Berechnung wurde abgebrochen.</translation>
+        <translation>Die Berechnung wurde abgebrochen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_job.cpp" line="35"/>
         <source>The layer %1 holds %n article(s); frames need at least 3.</source>
-        <translation type="unfinished"></translation>
+        <translation>Die Ebene %1 enthält %n Artikel; Frames brauchen mindestens 3.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_job.cpp" line="55"/>
         <source>%1: %2</source>
-        <translation type="unfinished">%1: %2</translation>
+        <translation>%1: %2</translation>
     </message>
 </context>
 <context>
@@ -6693,7 +6693,8 @@
         <location filename="../app/desktop/article_list_model.cpp" line="91"/>
         <source>%1
 Near copy of %2</source>
-        <translation type="unfinished"></translation>
+        <translation>%1
+Beinahe-Kopie von %2</translation>
     </message>
     <message>
         <location filename="../app/desktop/article_list_model.cpp" line="124"/>
@@ -7228,7 +7229,7 @@ Near copy of %2</source>
     <message>
         <location filename="../app/desktop/coding_session.cpp" line="103"/>
         <source>“%1” (%2), similarity %3</source>
-        <translation type="unfinished"></translation>
+        <translation>„%1“ (%2), Ähnlichkeit %3</translation>
     </message>
     <message>
         <location filename="../app/desktop/coding_session.cpp" line="197"/>
@@ -7685,7 +7686,7 @@ Near copy of %2</source>
     <message>
         <location filename="../app/desktop/frames/dendrogram_view.cpp" line="84"/>
         <source>No tree yet.</source>
-        <translation type="unfinished"></translation>
+        <translation>Noch kein Baum.</translation>
     </message>
 </context>
 <context>
@@ -8215,463 +8216,465 @@ Near copy of %2</source>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="70"/>
         <source>Frames — %1</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames — %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="78"/>
         <source>Gold</source>
-        <translation type="unfinished">Goldstandard</translation>
+        <translation>Goldstandard</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="79"/>
         <source>Consensus of the coders</source>
-        <translation type="unfinished"></translation>
+        <translation>Konsens der Codierenden</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="84"/>
         <source>Coder %1</source>
-        <translation type="unfinished">Codierende %1</translation>
+        <translation>Codierende Person %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="87"/>
         <source>Extractor run %1</source>
-        <translation type="unfinished"></translation>
+        <translation>Extraktorlauf %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="88"/>
         <source>Layer</source>
-        <translation type="unfinished"></translation>
+        <translation>Ebene</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="91"/>
         <source>where the indices point</source>
-        <translation type="unfinished"></translation>
+        <translation>worauf die Indizes zeigen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="92"/>
         <source>Number of frames</source>
-        <translation type="unfinished"></translation>
+        <translation>Anzahl der Frames</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="96"/>
         <source>Largest k for the indices</source>
-        <translation type="unfinished"></translation>
+        <translation>Größtes k für die Indizes</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="100"/>
         <source>none</source>
-        <translation type="unfinished">keine</translation>
+        <translation>keine</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="101"/>
         <source>Bootstrap replicates</source>
-        <translation type="unfinished"></translation>
+        <translation>Bootstrap-Replikationen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="105"/>
         <source>Start value of the bootstrap</source>
-        <translation type="unfinished"></translation>
+        <translation>Seed des Bootstraps</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="106"/>
         <source>&amp;Compute</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Berechnen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="107"/>
         <source>Cancel</source>
-        <translation type="unfinished">Abbrechen</translation>
+        <translation>Abbrechen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="111"/>
         <source>&amp;Layer:</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Ebene:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="114"/>
         <source>&amp;Frames (k):</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Frames (k):</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="118"/>
         <source>Indices up to k =</source>
-        <translation type="unfinished"></translation>
+        <translation>Indizes bis k =</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="122"/>
         <source>&amp;Stability replicates:</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Stabilitäts-Replikationen:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="126"/>
         <source>start value:</source>
-        <translation type="unfinished"></translation>
+        <translation>Seed:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="156"/>
         <source>Ward&apos;s tree: the last %1 merges (each leaf: its number of articles; dashed: the cut into the chosen k)</source>
-        <translation type="unfinished"></translation>
+        <translation>Ward-Baum: die letzten %1 Fusionen (jedes Blatt: seine Anzahl Artikel; gestrichelt: der Schnitt in das gewählte k)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="172"/>
         <source>Choosing &amp;k</source>
-        <translation type="unfinished"></translation>
+        <translation>Wahl von &amp;k</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="182"/>
         <source>Frames</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="183"/>
         <source>Element profile of each frame</source>
-        <translation type="unfinished"></translation>
+        <translation>Elementprofil jedes Frames</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="185"/>
         <source>Share of each frame&apos;s articles holding the element, beside the share in all articles; bold: the element characterises the frame (adjusted residual above 1.96).</source>
-        <translation type="unfinished"></translation>
+        <translation>Anteil der Artikel jedes Frames, die das Element enthalten, neben dem Anteil an allen Artikeln; fett: das Element kennzeichnet den Frame (standardisiertes Residuum über 1.96).</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="192"/>
         <source>F&amp;rames</source>
-        <translation type="unfinished"></translation>
+        <translation>F&amp;rames</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="197"/>
         <source>By outlet</source>
-        <translation type="unfinished"></translation>
+        <translation>Nach Medium</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="198"/>
         <source>By month</source>
-        <translation type="unfinished"></translation>
+        <translation>Nach Monat</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="210"/>
         <source>By &amp;outlet and month</source>
-        <translation type="unfinished"></translation>
+        <translation>Nach &amp;Medium und Monat</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="217"/>
         <source>Frame</source>
-        <translation type="unfinished"></translation>
+        <translation>Frame</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="218"/>
         <source>Fr&amp;ame:</source>
-        <translation type="unfinished"></translation>
+        <translation>Fr&amp;ame:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="222"/>
         <source>Double-click an article to open it on the desk.</source>
-        <translation type="unfinished"></translation>
+        <translation>Doppelklicken Sie auf einen Artikel, um ihn zum Codieren zu öffnen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="225"/>
         <source>Articles of the frame</source>
-        <translation type="unfinished"></translation>
+        <translation>Artikel des Frames</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="227"/>
         <source>&amp;Articles</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Artikel</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="232"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="233"/>
         <source>Name of the analysis</source>
-        <translation type="unfinished"></translation>
+        <translation>Name der Analyse</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
         <source>Sa&amp;ve frames</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames &amp;speichern</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="236"/>
         <source>Saved analyses</source>
-        <translation type="unfinished"></translation>
+        <translation>Gespeicherte Analysen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="238"/>
         <source>O&amp;pen</source>
-        <translation type="unfinished"></translation>
+        <translation>Ö&amp;ffnen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="239"/>
         <source>&amp;Delete</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Löschen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
         <source>Save as:</source>
-        <translation type="unfinished"></translation>
+        <translation>Speichern als:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="246"/>
         <source>Saved:</source>
-        <translation type="unfinished"></translation>
+        <translation>Gespeichert:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="265"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="406"/>
         <source>F%1 %2</source>
-        <translation type="unfinished">F%1 %2</translation>
+        <translation>F%1 %2</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="276"/>
         <source>Choose a layer and the number of frames, then press Compute. Gold is the usual layer; the consensus of the coders or one coder serve before gold is adjudicated.</source>
-        <translation type="unfinished"></translation>
+        <translation>Wählen Sie eine Ebene und die Anzahl der Frames und klicken Sie dann auf Berechnen. Der Goldstandard ist die übliche Ebene; der Konsens der Codierenden oder eine codierende Person dienen, bevor der Goldstandard entschieden ist.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="338"/>
         <source>Computing the frames…</source>
-        <translation type="unfinished"></translation>
+        <translation>Die Frames werden berechnet…</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="367"/>
         <source>Cancelled; the frames shown are from before.</source>
-        <translation type="unfinished"></translation>
+        <translation>Abgebrochen; die angezeigten Frames sind die vorherigen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="367"/>
         <source>Cancelled.</source>
-        <translation type="unfinished"></translation>
+        <translation>Abgebrochen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="371"/>
         <source>%1
 
 Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choose the consensus of the coders or one coder as the layer above.</source>
-        <translation type="unfinished"></translation>
+        <translation>%1
+
+Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und entscheiden…) oder wählen Sie oben den Konsens der Codierenden oder eine codierende Person als Ebene.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="415"/>
         <source>k-choice indices, each relative to its largest value</source>
-        <translation type="unfinished"></translation>
+        <translation>k-Wahl-Indizes, jeweils relativ zu ihrem größten Wert</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="417"/>
         <source>k (frames)</source>
-        <translation type="unfinished"></translation>
+        <translation>k (Frames)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="420"/>
         <source>share of the largest value</source>
-        <translation type="unfinished"></translation>
+        <translation>Anteil am größten Wert</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="441"/>
         <source>mean silhouette</source>
-        <translation type="unfinished"></translation>
+        <translation>mittlere Silhouette</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="443"/>
         <source>Calinski–Harabasz</source>
-        <translation type="unfinished">Calinski–Harabasz</translation>
+        <translation>Calinski–Harabasz</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="445"/>
         <source>fusion jump (elbow)</source>
-        <translation type="unfinished"></translation>
+        <translation>Fusionssprung (Ellbogen)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="448"/>
         <source>chosen k = %1</source>
-        <translation type="unfinished"></translation>
+        <translation>gewähltes k = %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="465"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="510"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="580"/>
         <source>–</source>
-        <translation type="unfinished"></translation>
+        <translation>–</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="467"/>
         <source>Largest mean silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k = %3. %4 %5 articles × %6 element variables of %7.</source>
-        <translation type="unfinished"></translation>
+        <translation>Größte mittlere Silhouette bei k = %1, Calinski–Harabasz bei k = %2, Fusionssprung bei k = %3. %4 %5 Artikel × %6 Elementvariablen von %7.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
         <source>Frames: k = %1, as chosen.</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames: k = %1, wie gewählt.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="471"/>
         <source>Frames: k = %1, where most indices point.</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames: k = %1, worauf die meisten Indizes zeigen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="490"/>
         <source>Name (double-click to edit)</source>
-        <translation type="unfinished"></translation>
+        <translation>Name (zum Bearbeiten doppelklicken)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="490"/>
         <source>Articles</source>
-        <translation type="unfinished">Artikel</translation>
+        <translation>Artikel</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Share</source>
-        <translation type="unfinished"></translation>
+        <translation>Anteil</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Stability</source>
-        <translation type="unfinished"></translation>
+        <translation>Stabilität</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Characteristic elements (share in frame, in all)</source>
-        <translation type="unfinished"></translation>
+        <translation>Kennzeichnende Elemente (Anteil im Frame, in allen)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="508"/>
         <source>%1 — dissolves on resampling</source>
-        <translation type="unfinished"></translation>
+        <translation>%1 — löst sich beim Neuziehen auf</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="512"/>
         <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
-        <translation type="unfinished"></translation>
+        <translation>Mittlere Jaccard-Ähnlichkeit zum am besten passenden Cluster über %1 Bootstrap-Replikationen (Hennig 2007); %2 aufgelöst (≤ 0.5), %3 wiedergefunden (≥ 0.75).</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="518"/>
         <source>not computed</source>
-        <translation type="unfinished"></translation>
+        <translation>nicht berechnet</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="533"/>
         <source>%1 (%2, %3)</source>
-        <translation type="unfinished"></translation>
+        <translation>%1 (%2, %3)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="540"/>
         <source>none stands out</source>
-        <translation type="unfinished">keines sticht heraus</translation>
+        <translation>keines sticht heraus</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="554"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="604"/>
         <source>F%1</source>
-        <translation type="unfinished">F%1</translation>
+        <translation>F%1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="555"/>
         <source>All</source>
-        <translation type="unfinished">Alle</translation>
+        <translation>Alle</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="575"/>
         <source>%1: %2 of all articles</source>
-        <translation type="unfinished"></translation>
+        <translation>%1: %2 aller Artikel</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="576"/>
         <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
-        <translation type="unfinished"></translation>
+        <translation>%1 in F%2: %3 seiner Artikel, %4 aller; standardisiertes Residuum %5</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="605"/>
         <source>Total</source>
-        <translation type="unfinished">Gesamt</translation>
+        <translation>Gesamt</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="616"/>
         <source>%1 (%2)</source>
-        <translation type="unfinished">%1 (%2)</translation>
+        <translation>%1 (%2)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="625"/>
         <source>Chi-square undefined: %1</source>
-        <translation type="unfinished"></translation>
+        <translation>Chi-Quadrat nicht definiert: %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="628"/>
         <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
-        <translation type="unfinished"></translation>
+        <translation>Pearsons X² = %1, df = %2, p = %3; Cramérs V = %4.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="631"/>
         <source>&lt; 0.001</source>
-        <translation type="unfinished"></translation>
+        <translation>&lt; 0.001</translation>
     </message>
     <message numerus="yes">
         <location filename="../app/desktop/frames/frames_window.cpp" line="635"/>
         <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>Bei %n Zelle ist der Erwartungswert kleiner als 5 Artikel: lesen Sie den Test mit Vorsicht.</numerusform>
+            <numerusform>Bei %n Zellen ist der Erwartungswert kleiner als 5 Artikel: lesen Sie den Test mit Vorsicht.</numerusform>
         </translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Title</source>
-        <translation type="unfinished">Titel</translation>
+        <translation>Titel</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Outlet</source>
-        <translation type="unfinished">Medium</translation>
+        <translation>Medium</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Date</source>
-        <translation type="unfinished"></translation>
+        <translation>Datum</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Id</source>
-        <translation type="unfinished"></translation>
+        <translation>ID</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Near the centre</source>
-        <translation type="unfinished"></translation>
+        <translation>Nahe am Zentrum</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="663"/>
         <source>%1.</source>
-        <translation type="unfinished">%1.</translation>
+        <translation>%1.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="696"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="697"/>
         <source>Compute the frames before saving them.</source>
-        <translation type="unfinished"></translation>
+        <translation>Berechnen Sie die Frames, bevor Sie sie speichern.</translation>
     </message>
     <message numerus="yes">
         <location filename="../app/desktop/frames/frames_window.cpp" line="713"/>
         <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>Der %n Frame wurde als „%1“ gespeichert (Bearbeiten → Rückgängig nimmt es zurück).</numerusform>
+            <numerusform>Die %n Frames wurden als „%1“ gespeichert (Bearbeiten → Rückgängig nimmt es zurück).</numerusform>
         </translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="738"/>
         <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
-        <translation type="unfinished"></translation>
+        <translation>Die Ebene %1 von „%2“ ist nicht mehr im Projekt.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="740"/>
         <source>The layer %1 is no longer in the project.</source>
-        <translation type="unfinished"></translation>
+        <translation>Die Ebene %1 ist nicht mehr im Projekt.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="765"/>
         <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
-        <translation type="unfinished"></translation>
+        <translation>Die gespeicherten Frames „%1“ wurden gelöscht (Bearbeiten → Rückgängig holt sie zurück).</translation>
     </message>
     <message numerus="yes">
         <location filename="../app/desktop/frames/frames_window.cpp" line="780"/>
         <source>%1 — %2, k = %3, %n article(s)</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>%1 — %2, k = %3, %n Artikel</numerusform>
+            <numerusform>%1 — %2, k = %3, %n Artikel</numerusform>
         </translation>
     </message>
 </context>
@@ -10777,12 +10780,12 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="262"/>
         <source>Leave near copies out of the sampling frame</source>
-        <translation type="unfinished"></translation>
+        <translation>Beinahe-Kopien aus der Auswahlgesamtheit auslassen</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="265"/>
         <source>An article found at import to be a near copy of an older one (the same story with small edits) is not drawn; the older article stays in the frame.</source>
-        <translation type="unfinished"></translation>
+        <translation>Ein Artikel, der beim Import als Beinahe-Kopie eines älteren erkannt wurde (dieselbe Geschichte mit kleinen Änderungen), wird nicht gezogen; der ältere Artikel bleibt in der Auswahlgesamtheit.</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="274"/>

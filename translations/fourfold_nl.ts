@@ -1799,27 +1799,27 @@
     <message>
         <location filename="../core/io/document_split.cpp" line="39"/>
         <source>The split pattern is empty.</source>
-        <translation type="unfinished"></translation>
+        <translation>Het splitspatroon is leeg.</translation>
     </message>
     <message>
         <location filename="../core/io/document_split.cpp" line="42"/>
         <source>The split pattern &quot;%1&quot; is not a valid regular expression: %2 (at character %3).</source>
-        <translation type="unfinished"></translation>
+        <translation>Het splitspatroon ‘%1’ is geen geldige reguliere expressie: %2 (bij teken %3).</translation>
     </message>
     <message>
         <location filename="../core/io/document_split.cpp" line="50"/>
         <source>The split pattern &quot;%1&quot; names the group &quot;%2&quot;; the groups it may name are title, outlet and date.</source>
-        <translation type="unfinished"></translation>
+        <translation>Het splitspatroon ‘%1’ noemt de groep ‘%2’; de groepen die het mag noemen zijn title, outlet en date.</translation>
     </message>
     <message>
         <location filename="../core/io/document_split.cpp" line="82"/>
         <source>the split pattern &quot;%1&quot; matches no line of the document</source>
-        <translation type="unfinished"></translation>
+        <translation>het splitspatroon ‘%1’ komt met geen enkele regel van het document overeen</translation>
     </message>
     <message>
         <location filename="../core/io/document_split.cpp" line="104"/>
         <source>part %1 of the document (from this line) holds no text besides its title</source>
-        <translation type="unfinished"></translation>
+        <translation>deel %1 van het document (vanaf deze regel) bevat geen tekst behalve de titel</translation>
     </message>
 </context>
 <context>
@@ -3511,7 +3511,7 @@
         <location filename="../app/report/report_document.cpp" line="925"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
-        <translation type="unfinished"></translation>
+        <translation>nl</translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="942"/>
@@ -4096,7 +4096,7 @@
     <message>
         <location filename="../core/team/team_status.cpp" line="38"/>
         <source>%1 is not a team working file (made by team publish or team join).</source>
-        <translation type="unfinished">%1 is geen teamwerkbestand (gemaakt met team publish of team join).</translation>
+        <translation>%1 is geen teamwerkbestand (gemaakt met team publish of team join).</translation>
     </message>
 </context>
 <context>
@@ -4492,7 +4492,7 @@
     <message>
         <location filename="../app/cli/command_assign.cpp" line="69"/>
         <source>  near copies left out of the sampling frame</source>
-        <translation type="unfinished"></translation>
+        <translation>  bijna-kopieën uit het steekproefkader weggelaten</translation>
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="71"/>
@@ -4683,7 +4683,7 @@
     <message>
         <location filename="../app/cli/command_assign.cpp" line="260"/>
         <source>With --draw: leave articles found to be near copies of older ones at import out of the sampling frame.</source>
-        <translation type="unfinished"></translation>
+        <translation>Met --draw: artikelen die bij de import zijn herkend als bijna-kopie van een ouder artikel, uit het steekproefkader weglaten.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="263"/>
@@ -5718,7 +5718,7 @@
     <message>
         <location filename="../app/cli/command_import.cpp" line="99"/>
         <source>List and record an added article as a near copy of an article in the project when the estimated Jaccard similarity of their 5-word shingles is at least J, in (0, 1] (default 0.8).</source>
-        <translation type="unfinished"></translation>
+        <translation>Een toegevoegd artikel opsommen en vastleggen als bijna-kopie van een artikel in het project wanneer de geschatte Jaccard-gelijkenis van hun shingles van 5 woorden ten minste J is, in (0, 1] (standaard 0.8).</translation>
     </message>
     <message>
         <location filename="../app/cli/command_import.cpp" line="105"/>
@@ -5763,7 +5763,7 @@
     <message>
         <location filename="../app/cli/command_import.cpp" line="155"/>
         <source>--near-copy-threshold expects a number in (0, 1], got &quot;%1&quot;.</source>
-        <translation type="unfinished"></translation>
+        <translation>--near-copy-threshold verwacht een getal in (0, 1], gekregen: ‘%1’.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_import.cpp" line="163"/>
@@ -5801,7 +5801,7 @@
     <message>
         <location filename="../app/cli/command_import.cpp" line="229"/>
         <source>  line %1 (%2): added, a near copy of &quot;%3&quot; (similarity %4)</source>
-        <translation type="unfinished"></translation>
+        <translation>  regel %1 (%2): toegevoegd, een bijna-kopie van ‘%3’ (gelijkenis %4)</translation>
     </message>
     <message>
         <location filename="../app/cli/command_info.cpp" line="40"/>
@@ -5826,7 +5826,7 @@
     <message>
         <location filename="../app/cli/command_info.cpp" line="116"/>
         <source>Near copies  %1 article(s) a near copy of an older one (%2 pair(s))</source>
-        <translation type="unfinished"></translation>
+        <translation>Bijna-kopieën %1 artikel(en) een bijna-kopie van een ouder artikel (%2 paar/paren)</translation>
     </message>
     <message>
         <location filename="../app/cli/command_info.cpp" line="120"/>
@@ -6207,7 +6207,7 @@
     <message>
         <location filename="../app/cli/command_report.cpp" line="60"/>
         <source>The report&apos;s language: en, nl or de (default: the language of the messages, from LANGUAGE or LANG).</source>
-        <translation type="unfinished"></translation>
+        <translation>De taal van het rapport: en, nl of de (standaard: de taal van de meldingen, uit LANGUAGE of LANG).</translation>
     </message>
     <message>
         <location filename="../app/cli/command_report.cpp" line="64"/>
@@ -6242,7 +6242,7 @@
     <message>
         <location filename="../app/cli/command_report.cpp" line="112"/>
         <source>--language takes en, nl or de, not &quot;%1&quot;.</source>
-        <translation type="unfinished"></translation>
+        <translation>--language neemt en, nl of de, niet ‘%1’.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_report.cpp" line="123"/>
@@ -6475,47 +6475,47 @@
     <message>
         <location filename="../app/cli/command_team.cpp" line="225"/>
         <source>Show a working file&apos;s team project: its server, whose file it is, when it last synced and what the next sync would send. Reads the file only (works offline).</source>
-        <translation type="unfinished"></translation>
+        <translation>Het teamproject van een werkbestand tonen: de server, van wie het bestand is, wanneer het voor het laatst is gesynchroniseerd en wat de volgende synchronisatie zou versturen. Leest alleen het bestand (werkt offline).</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="255"/>
         <source>Working file of %1 (%2) on %3, through change %4.</source>
-        <translation type="unfinished"></translation>
+        <translation>Werkbestand van %1 (%2) op %3, tot en met wijziging %4.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="257"/>
         <source>lead</source>
-        <translation type="unfinished">coördinator</translation>
+        <translation>coördinator</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="262"/>
         <source>Not synced since it was made.</source>
-        <translation type="unfinished"></translation>
+        <translation>Niet gesynchroniseerd sinds het is gemaakt.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="263"/>
         <source>Last synced %1.</source>
-        <translation type="unfinished"></translation>
+        <translation>Laatst gesynchroniseerd %1.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="268"/>
         <source>Nothing waiting to be sent.</source>
-        <translation type="unfinished"></translation>
+        <translation>Er wacht niets om te worden verzonden.</translation>
     </message>
     <message numerus="yes">
         <location filename="../app/cli/command_team.cpp" line="269"/>
         <source>%n change(s) waiting to be sent (%1).</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>%n wijziging wacht om te worden verzonden (%1).</numerusform>
+            <numerusform>%n wijzigingen wachten om te worden verzonden (%1).</numerusform>
         </translation>
     </message>
     <message numerus="yes">
         <location filename="../app/cli/command_team.cpp" line="273"/>
         <source>%n conflict(s) from syncs wait for the lead.</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>%n conflict uit synchronisaties wacht op de coördinator.</numerusform>
+            <numerusform>%n conflicten uit synchronisaties wachten op de coördinator.</numerusform>
         </translation>
     </message>
     <message>
@@ -6541,7 +6541,7 @@
     <message>
         <location filename="../app/cli/command_team.cpp" line="299"/>
         <source>  status    What a working file last synced and what waits to be sent.</source>
-        <translation type="unfinished"></translation>
+        <translation>  status    Wat een werkbestand het laatst heeft gesynchroniseerd en wat wacht om te worden verzonden.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="304"/>
@@ -6659,17 +6659,17 @@
     <message>
         <location filename="../app/desktop/frames/frames_job.cpp" line="18"/>
         <source>The computation was cancelled.</source>
-        <translation type="unfinished">De berekening is geannuleerd.</translation>
+        <translation>De berekening is geannuleerd.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_job.cpp" line="35"/>
         <source>The layer %1 holds %n article(s); frames need at least 3.</source>
-        <translation type="unfinished"></translation>
+        <translation>De laag %1 bevat %n artikel(en); frames hebben er ten minste 3 nodig.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_job.cpp" line="55"/>
         <source>%1: %2</source>
-        <translation type="unfinished">%1: %2</translation>
+        <translation>%1: %2</translation>
     </message>
 </context>
 <context>
@@ -6693,7 +6693,8 @@
         <location filename="../app/desktop/article_list_model.cpp" line="91"/>
         <source>%1
 Near copy of %2</source>
-        <translation type="unfinished"></translation>
+        <translation>%1
+Bijna-kopie van %2</translation>
     </message>
     <message>
         <location filename="../app/desktop/article_list_model.cpp" line="124"/>
@@ -7228,7 +7229,7 @@ Near copy of %2</source>
     <message>
         <location filename="../app/desktop/coding_session.cpp" line="103"/>
         <source>“%1” (%2), similarity %3</source>
-        <translation type="unfinished"></translation>
+        <translation>‘%1’ (%2), gelijkenis %3</translation>
     </message>
     <message>
         <location filename="../app/desktop/coding_session.cpp" line="197"/>
@@ -7685,7 +7686,7 @@ Near copy of %2</source>
     <message>
         <location filename="../app/desktop/frames/dendrogram_view.cpp" line="84"/>
         <source>No tree yet.</source>
-        <translation type="unfinished"></translation>
+        <translation>Nog geen boom.</translation>
     </message>
 </context>
 <context>
@@ -8215,463 +8216,465 @@ Near copy of %2</source>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="70"/>
         <source>Frames — %1</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames — %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="78"/>
         <source>Gold</source>
-        <translation type="unfinished">Gouden standaard</translation>
+        <translation>Gouden standaard</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="79"/>
         <source>Consensus of the coders</source>
-        <translation type="unfinished"></translation>
+        <translation>Consensus van de codeurs</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="84"/>
         <source>Coder %1</source>
-        <translation type="unfinished">Codeur %1</translation>
+        <translation>Codeur %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="87"/>
         <source>Extractor run %1</source>
-        <translation type="unfinished"></translation>
+        <translation>Extractorrun %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="88"/>
         <source>Layer</source>
-        <translation type="unfinished"></translation>
+        <translation>Laag</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="91"/>
         <source>where the indices point</source>
-        <translation type="unfinished"></translation>
+        <translation>waar de indices naar wijzen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="92"/>
         <source>Number of frames</source>
-        <translation type="unfinished"></translation>
+        <translation>Aantal frames</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="96"/>
         <source>Largest k for the indices</source>
-        <translation type="unfinished"></translation>
+        <translation>Grootste k voor de indices</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="100"/>
         <source>none</source>
-        <translation type="unfinished">geen</translation>
+        <translation>geen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="101"/>
         <source>Bootstrap replicates</source>
-        <translation type="unfinished"></translation>
+        <translation>Bootstrapreplicaties</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="105"/>
         <source>Start value of the bootstrap</source>
-        <translation type="unfinished"></translation>
+        <translation>Seed van de bootstrap</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="106"/>
         <source>&amp;Compute</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Berekenen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="107"/>
         <source>Cancel</source>
-        <translation type="unfinished">Annuleren</translation>
+        <translation>Annuleren</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="111"/>
         <source>&amp;Layer:</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Laag:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="114"/>
         <source>&amp;Frames (k):</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Frames (k):</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="118"/>
         <source>Indices up to k =</source>
-        <translation type="unfinished"></translation>
+        <translation>Indices tot k =</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="122"/>
         <source>&amp;Stability replicates:</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Stabiliteitsreplicaties:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="126"/>
         <source>start value:</source>
-        <translation type="unfinished"></translation>
+        <translation>seed:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="156"/>
         <source>Ward&apos;s tree: the last %1 merges (each leaf: its number of articles; dashed: the cut into the chosen k)</source>
-        <translation type="unfinished"></translation>
+        <translation>Boom van Ward: de laatste %1 samenvoegingen (elk blad: het aantal artikelen; gestreept: de snede in de gekozen k)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="172"/>
         <source>Choosing &amp;k</source>
-        <translation type="unfinished"></translation>
+        <translation>Keuze van &amp;k</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="182"/>
         <source>Frames</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="183"/>
         <source>Element profile of each frame</source>
-        <translation type="unfinished"></translation>
+        <translation>Elementprofiel van elk frame</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="185"/>
         <source>Share of each frame&apos;s articles holding the element, beside the share in all articles; bold: the element characterises the frame (adjusted residual above 1.96).</source>
-        <translation type="unfinished"></translation>
+        <translation>Aandeel van de artikelen van elk frame dat het element bevat, naast het aandeel in alle artikelen; vet: het element kenmerkt het frame (gecorrigeerd residu boven 1.96).</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="192"/>
         <source>F&amp;rames</source>
-        <translation type="unfinished"></translation>
+        <translation>F&amp;rames</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="197"/>
         <source>By outlet</source>
-        <translation type="unfinished"></translation>
+        <translation>Naar medium</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="198"/>
         <source>By month</source>
-        <translation type="unfinished"></translation>
+        <translation>Naar maand</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="210"/>
         <source>By &amp;outlet and month</source>
-        <translation type="unfinished"></translation>
+        <translation>Naar &amp;medium en maand</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="217"/>
         <source>Frame</source>
-        <translation type="unfinished"></translation>
+        <translation>Frame</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="218"/>
         <source>Fr&amp;ame:</source>
-        <translation type="unfinished"></translation>
+        <translation>Fr&amp;ame:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="222"/>
         <source>Double-click an article to open it on the desk.</source>
-        <translation type="unfinished"></translation>
+        <translation>Dubbelklik op een artikel om het te openen om te coderen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="225"/>
         <source>Articles of the frame</source>
-        <translation type="unfinished"></translation>
+        <translation>Artikelen van het frame</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="227"/>
         <source>&amp;Articles</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Artikelen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="232"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="233"/>
         <source>Name of the analysis</source>
-        <translation type="unfinished"></translation>
+        <translation>Naam van de analyse</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
         <source>Sa&amp;ve frames</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames &amp;opslaan</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="236"/>
         <source>Saved analyses</source>
-        <translation type="unfinished"></translation>
+        <translation>Opgeslagen analyses</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="238"/>
         <source>O&amp;pen</source>
-        <translation type="unfinished"></translation>
+        <translation>O&amp;penen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="239"/>
         <source>&amp;Delete</source>
-        <translation type="unfinished"></translation>
+        <translation>&amp;Verwijderen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
         <source>Save as:</source>
-        <translation type="unfinished"></translation>
+        <translation>Opslaan als:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="246"/>
         <source>Saved:</source>
-        <translation type="unfinished"></translation>
+        <translation>Opgeslagen:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="265"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="406"/>
         <source>F%1 %2</source>
-        <translation type="unfinished">F%1 %2</translation>
+        <translation>F%1 %2</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="276"/>
         <source>Choose a layer and the number of frames, then press Compute. Gold is the usual layer; the consensus of the coders or one coder serve before gold is adjudicated.</source>
-        <translation type="unfinished"></translation>
+        <translation>Kies een laag en het aantal frames en klik dan op Berekenen. De gouden standaard is de gebruikelijke laag; de consensus van de codeurs of één codeur dienen zolang over de gouden standaard nog niet is beslist.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="338"/>
         <source>Computing the frames…</source>
-        <translation type="unfinished"></translation>
+        <translation>De frames worden berekend…</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="367"/>
         <source>Cancelled; the frames shown are from before.</source>
-        <translation type="unfinished"></translation>
+        <translation>Geannuleerd; de getoonde frames zijn de vorige.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="367"/>
         <source>Cancelled.</source>
-        <translation type="unfinished"></translation>
+        <translation>Geannuleerd.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="371"/>
         <source>%1
 
 Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choose the consensus of the coders or one coder as the layer above.</source>
-        <translation type="unfinished"></translation>
+        <translation>%1
+
+Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en beslissen…) of kies hierboven de consensus van de codeurs of één codeur als laag.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="415"/>
         <source>k-choice indices, each relative to its largest value</source>
-        <translation type="unfinished"></translation>
+        <translation>k-keuze-indices, elk ten opzichte van de eigen grootste waarde</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="417"/>
         <source>k (frames)</source>
-        <translation type="unfinished"></translation>
+        <translation>k (frames)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="420"/>
         <source>share of the largest value</source>
-        <translation type="unfinished"></translation>
+        <translation>aandeel van de grootste waarde</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="441"/>
         <source>mean silhouette</source>
-        <translation type="unfinished"></translation>
+        <translation>gemiddeld silhouet</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="443"/>
         <source>Calinski–Harabasz</source>
-        <translation type="unfinished">Calinski–Harabasz</translation>
+        <translation>Calinski–Harabasz</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="445"/>
         <source>fusion jump (elbow)</source>
-        <translation type="unfinished"></translation>
+        <translation>fusiesprong (elleboog)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="448"/>
         <source>chosen k = %1</source>
-        <translation type="unfinished"></translation>
+        <translation>gekozen k = %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="465"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="510"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="580"/>
         <source>–</source>
-        <translation type="unfinished"></translation>
+        <translation>–</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="467"/>
         <source>Largest mean silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k = %3. %4 %5 articles × %6 element variables of %7.</source>
-        <translation type="unfinished"></translation>
+        <translation>Grootste gemiddelde silhouet bij k = %1, Calinski–Harabasz bij k = %2, fusiesprong bij k = %3. %4 %5 artikelen × %6 elementvariabelen van %7.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
         <source>Frames: k = %1, as chosen.</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames: k = %1, zoals gekozen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="471"/>
         <source>Frames: k = %1, where most indices point.</source>
-        <translation type="unfinished"></translation>
+        <translation>Frames: k = %1, waar de meeste indices naar wijzen.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="490"/>
         <source>Name (double-click to edit)</source>
-        <translation type="unfinished"></translation>
+        <translation>Naam (dubbelklik om te bewerken)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="490"/>
         <source>Articles</source>
-        <translation type="unfinished">Artikelen</translation>
+        <translation>Artikelen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Share</source>
-        <translation type="unfinished"></translation>
+        <translation>Aandeel</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Stability</source>
-        <translation type="unfinished"></translation>
+        <translation>Stabiliteit</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Characteristic elements (share in frame, in all)</source>
-        <translation type="unfinished"></translation>
+        <translation>Kenmerkende elementen (aandeel in frame, in alle)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="508"/>
         <source>%1 — dissolves on resampling</source>
-        <translation type="unfinished"></translation>
+        <translation>%1 — valt uiteen bij opnieuw trekken</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="512"/>
         <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
-        <translation type="unfinished"></translation>
+        <translation>Gemiddelde Jaccard-gelijkenis met de best passende cluster over %1 bootstrapreplicaties (Hennig 2007); %2 uiteengevallen (≤ 0.5), %3 teruggevonden (≥ 0.75).</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="518"/>
         <source>not computed</source>
-        <translation type="unfinished"></translation>
+        <translation>niet berekend</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="533"/>
         <source>%1 (%2, %3)</source>
-        <translation type="unfinished"></translation>
+        <translation>%1 (%2, %3)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="540"/>
         <source>none stands out</source>
-        <translation type="unfinished">geen enkel valt op</translation>
+        <translation>geen enkel valt op</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="554"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="604"/>
         <source>F%1</source>
-        <translation type="unfinished">F%1</translation>
+        <translation>F%1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="555"/>
         <source>All</source>
-        <translation type="unfinished">Alle</translation>
+        <translation>Alle</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="575"/>
         <source>%1: %2 of all articles</source>
-        <translation type="unfinished"></translation>
+        <translation>%1: %2 van alle artikelen</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="576"/>
         <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
-        <translation type="unfinished"></translation>
+        <translation>%1 in F%2: %3 van zijn artikelen, %4 van alle; gecorrigeerd residu %5</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="605"/>
         <source>Total</source>
-        <translation type="unfinished">Totaal</translation>
+        <translation>Totaal</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="616"/>
         <source>%1 (%2)</source>
-        <translation type="unfinished">%1 (%2)</translation>
+        <translation>%1 (%2)</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="625"/>
         <source>Chi-square undefined: %1</source>
-        <translation type="unfinished"></translation>
+        <translation>Chikwadraat niet gedefinieerd: %1</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="628"/>
         <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
-        <translation type="unfinished"></translation>
+        <translation>Pearsons X² = %1, df = %2, p = %3; Cramérs V = %4.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="631"/>
         <source>&lt; 0.001</source>
-        <translation type="unfinished"></translation>
+        <translation>&lt; 0.001</translation>
     </message>
     <message numerus="yes">
         <location filename="../app/desktop/frames/frames_window.cpp" line="635"/>
         <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>%n cel verwacht minder dan 5 artikelen: lees de toets met zorg.</numerusform>
+            <numerusform>%n cellen verwachten minder dan 5 artikelen: lees de toets met zorg.</numerusform>
         </translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Title</source>
-        <translation type="unfinished">Titel</translation>
+        <translation>Titel</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Outlet</source>
-        <translation type="unfinished">Medium</translation>
+        <translation>Medium</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Date</source>
-        <translation type="unfinished"></translation>
+        <translation>Datum</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Id</source>
-        <translation type="unfinished"></translation>
+        <translation>Id</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
         <source>Near the centre</source>
-        <translation type="unfinished"></translation>
+        <translation>Dicht bij het centrum</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="663"/>
         <source>%1.</source>
-        <translation type="unfinished">%1.</translation>
+        <translation>%1.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="696"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="697"/>
         <source>Compute the frames before saving them.</source>
-        <translation type="unfinished"></translation>
+        <translation>Bereken de frames voordat u ze opslaat.</translation>
     </message>
     <message numerus="yes">
         <location filename="../app/desktop/frames/frames_window.cpp" line="713"/>
         <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>Het %n frame is opgeslagen als ‘%1’ (Bewerken → Ongedaan maken draait het terug).</numerusform>
+            <numerusform>De %n frames zijn opgeslagen als ‘%1’ (Bewerken → Ongedaan maken draait het terug).</numerusform>
         </translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="738"/>
         <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
-        <translation type="unfinished"></translation>
+        <translation>De laag %1 van ‘%2’ staat niet meer in het project.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="740"/>
         <source>The layer %1 is no longer in the project.</source>
-        <translation type="unfinished"></translation>
+        <translation>De laag %1 staat niet meer in het project.</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="765"/>
         <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
-        <translation type="unfinished"></translation>
+        <translation>De opgeslagen frames ‘%1’ zijn verwijderd (Bewerken → Ongedaan maken haalt ze terug).</translation>
     </message>
     <message numerus="yes">
         <location filename="../app/desktop/frames/frames_window.cpp" line="780"/>
         <source>%1 — %2, k = %3, %n article(s)</source>
-        <translation type="unfinished">
-            <numerusform></numerusform>
-            <numerusform></numerusform>
+        <translation>
+            <numerusform>%1 — %2, k = %3, %n artikel</numerusform>
+            <numerusform>%1 — %2, k = %3, %n artikelen</numerusform>
         </translation>
     </message>
 </context>
@@ -10777,12 +10780,12 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="262"/>
         <source>Leave near copies out of the sampling frame</source>
-        <translation type="unfinished"></translation>
+        <translation>Bijna-kopieën uit het steekproefkader weglaten</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="265"/>
         <source>An article found at import to be a near copy of an older one (the same story with small edits) is not drawn; the older article stays in the frame.</source>
-        <translation type="unfinished"></translation>
+        <translation>Een artikel dat bij de import is herkend als bijna-kopie van een ouder artikel (hetzelfde verhaal met kleine wijzigingen), wordt niet getrokken; het oudere artikel blijft in het steekproefkader.</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="274"/>

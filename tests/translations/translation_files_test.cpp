@@ -94,14 +94,12 @@ TEST_CASE("No source hides its sentences from lupdate behind a file-local tr fun
     const QRegularExpression helper(QStringLiteral(R"(^\s*(static\s+)?QString\s+tr\s*\()"),
         QRegularExpression::MultilineOption);
     const QRegularExpression unqualified(QStringLiteral(R"((?<![\w:.>])tr\()"));
-    for (const QString &folder : {QStringLiteral("core"), QStringLiteral("app/cli"),
-             QStringLiteral("app/report"), QStringLiteral("app/i18n")}) {
-        for (const QString &file : sources(folder)) {
-            const QString source = code(file);
-            INFO(file.toStdString());
-            CHECK_FALSE(source.contains(helper));
-            if (!source.contains(QLatin1String("Q_OBJECT")))
-                CHECK_FALSE(source.contains(unqualified));
-        }
+    for (const QString &file : sources(QStringLiteral("app")) + sources(QStringLiteral("core"))) {
+        const QString source = code(file);
+        INFO(file.toStdString());
+        CHECK_FALSE(source.contains(helper));
+        // The desktop's QObject classes have a tr() of their own (declared in their headers).
+        if (!file.startsWith(QLatin1String("app/desktop/")))
+            CHECK_FALSE(source.contains(unqualified));
     }
 }
