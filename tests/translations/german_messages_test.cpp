@@ -140,3 +140,57 @@ TEST_CASE("Qt's own texts follow the chosen language")
     useLanguage(QLocale(QLocale::English));
     CHECK(QCoreApplication::translate(context, source) == QLatin1String(source));
 }
+
+#ifdef FOURFOLD_HAVE_REPORT
+TEST_CASE("report --language writes the method text and tables in that language")
+{
+    // The sample project (sample-project/, invented demo data), reported without bootstrap.
+    QTemporaryDir dir;
+    const QString project = dir.filePath(QStringLiteral("demo.fourfold"));
+    const auto english = languageEnvironment(QString());
+    const CliRun built = runCli(QStringLiteral(FOURFOLD_CLI),
+        {QStringLiteral("build-sample"), QStringLiteral(FOURFOLD_SAMPLE_DIR), project}, 180000,
+        english);
+    INFO(built.err.toStdString());
+    REQUIRE(built.exitCode == 0);
+    const QStringList sources = {QStringLiteral("Inter-coder reliability"),
+        QStringLiteral("Method text"), QStringLiteral("Reliability per variable"),
+        QStringLiteral("Krippendorff's alpha per variable")};
+    for (const QString &lang : {QStringLiteral("de"), QStringLiteral("nl"), QStringLiteral("en")}) {
+        const QString html = dir.filePath(lang + QStringLiteral(".html"));
+        // The messages stay English (LANGUAGE unset); only --language chooses the report's.
+        const CliRun written = runCli(QStringLiteral(FOURFOLD_CLI),
+            {QStringLiteral("report"), project, QStringLiteral("--out"), html,
+                QStringLiteral("--bootstrap"), QStringLiteral("0"), QStringLiteral("--language"),
+                lang},
+            180000, english);
+        INFO(lang.toStdString() << ": " << written.err.toStdString());
+        REQUIRE(written.exitCode == 0);
+        const QString text = QString::fromUtf8(readFile(html));
+        if (lang == QLatin1String("en")) {
+            CHECK(text.contains(QStringLiteral("<html lang=\"en\">")));
+            for (const QString &source : sources)
+                CHECK(text.contains(source));
+            continue;
+        }
+        const TsFile ts = readTsFile(lang);
+        const QString tag =
+            ts.translation(QStringLiteral("ReportDocumentText"), QStringLiteral("en"));
+        CHECK(tag == lang);
+        CHECK(text.contains(QStringLiteral("<html lang=\"%1\">").arg(tag)));
+        for (const QString &source : sources) {
+            const QString translated = ts.translation(QStringLiteral("ReportDocumentText"), source);
+            INFO(source.toStdString() << " -> " << translated.toStdString());
+            CHECK(translated != source);
+            CHECK(text.contains(translated.toHtmlEscaped()));
+        }
+    }
+    const CliRun refused = runCli(QStringLiteral(FOURFOLD_CLI),
+        {QStringLiteral("report"), project, QStringLiteral("--out"),
+            dir.filePath(QStringLiteral("fr.html")), QStringLiteral("--language"),
+            QStringLiteral("fr")},
+        60000, english);
+    CHECK(refused.exitCode != 0);
+    CHECK(refused.err.contains(QStringLiteral("--language takes en, nl or de, not \"fr\".")));
+}
+#endif
