@@ -3011,7 +3011,7 @@
     <message>
         <location filename="../app/report/report_document.cpp" line="271"/>
         <source>Inter-coder reliability was assessed on a reliability sample of %1 articles that two or more coders coded independently (%2 of them by all %3 coders), out of %4 articles in the project. </source>
-        <translation>Die Intercoder-Reliabilität wurde an einer Reliabilitätsstichprobe von %1 Artikeln bestimmt, die zwei oder mehr Codierende unabhängig voneinander codierten (%2 davon alle %3 Codierenden), von %4 Artikeln im Projekt. </translation>
+        <translation>Die Intercoder-Reliabilität wurde an einer Reliabilitätsstichprobe von %1 Artikeln bestimmt, die zwei oder mehr Codierende unabhängig voneinander codierten (%2 davon von allen %3 Codierenden), von %4 Artikeln im Projekt. </translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="283"/>
@@ -3081,7 +3081,7 @@
     <message>
         <location filename="../app/report/report_document.cpp" line="331"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
-        <translation>Jede der vier Framing-Funktionen nach Entman (1993) wurde als Textstelle codiert; für die Reliabilität wurde jede Funktion zu einer binären Variablen (vorhanden oder nicht vorhanden) je %1, wobei ein(e) %2 eine Funktion trägt, wenn die Textstelle einer codierenden Person mit dieser Funktion sie überlappt. </translation>
+        <translation>Jede der vier Framing-Funktionen nach Entman (1993) wurde als Textstelle codiert; für die Reliabilität wurde jede Funktion zu einer binären Variablen (vorhanden oder nicht vorhanden) je %1: eine Einheit (%2) trägt eine Funktion, wenn die Textstelle einer codierenden Person mit dieser Funktion sie überlappt. </translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="336"/>
@@ -3247,13 +3247,13 @@
         <location filename="../app/report/report_document.cpp" line="473"/>
         <location filename="../app/report/report_document.cpp" line="643"/>
         <source>Units</source>
-        <translation>Einheiten</translation>
+        <translation>Einh.</translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="474"/>
         <location filename="../app/report/report_document.cpp" line="562"/>
         <source>Pairable values</source>
-        <translation>Paarbare Werte</translation>
+        <translation>Paarb. Werte</translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="475"/>
@@ -3269,7 +3269,7 @@
         <location filename="../app/report/report_document.cpp" line="477"/>
         <location filename="../app/report/report_document.cpp" line="643"/>
         <source>Agreement</source>
-        <translation>Übereinstimmung</translation>
+        <translation>Übereinst.</translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="477"/>
@@ -8284,164 +8284,164 @@ Beinahe-Kopie von %2</translation>
         <translation>Abbrechen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="111"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="112"/>
         <source>&amp;Layer:</source>
         <translation>&amp;Ebene:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="114"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="115"/>
         <source>&amp;Frames (k):</source>
         <translation>&amp;Frames (k):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="118"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="119"/>
         <source>Indices up to k =</source>
         <translation>Indizes bis k =</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="122"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="123"/>
         <source>&amp;Stability replicates:</source>
         <translation>&amp;Stabilitäts-Replikationen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="126"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="127"/>
         <source>start value:</source>
         <translation>Seed:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="156"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="157"/>
         <source>Ward&apos;s tree: the last %1 merges (each leaf: its number of articles; dashed: the cut into the chosen k)</source>
         <translation>Ward-Baum: die letzten %1 Fusionen (jedes Blatt: seine Anzahl Artikel; gestrichelt: der Schnitt in das gewählte k)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="172"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="173"/>
         <source>Choosing &amp;k</source>
         <translation>Wahl von &amp;k</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="182"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="183"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="183"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="184"/>
         <source>Element profile of each frame</source>
         <translation>Elementprofil jedes Frames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="185"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="186"/>
         <source>Share of each frame&apos;s articles holding the element, beside the share in all articles; bold: the element characterises the frame (adjusted residual above 1.96).</source>
         <translation>Anteil der Artikel jedes Frames, die das Element enthalten, neben dem Anteil an allen Artikeln; fett: das Element kennzeichnet den Frame (standardisiertes Residuum über 1.96).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="192"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="193"/>
         <source>F&amp;rames</source>
         <translation>F&amp;rames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="197"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="198"/>
         <source>By outlet</source>
         <translation>Nach Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="198"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="199"/>
         <source>By month</source>
         <translation>Nach Monat</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="210"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="211"/>
         <source>By &amp;outlet and month</source>
         <translation>Nach &amp;Medium und Monat</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="217"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="218"/>
         <source>Frame</source>
         <translation>Frame</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="218"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="219"/>
         <source>Fr&amp;ame:</source>
         <translation>Fr&amp;ame:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="222"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="223"/>
         <source>Double-click an article to open it on the desk.</source>
         <translation>Doppelklicken Sie auf einen Artikel, um ihn zum Codieren zu öffnen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="225"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="226"/>
         <source>Articles of the frame</source>
         <translation>Artikel des Frames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="227"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="228"/>
         <source>&amp;Articles</source>
         <translation>&amp;Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="232"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="233"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
         <source>Name of the analysis</source>
         <translation>Name der Analyse</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="235"/>
         <source>Sa&amp;ve frames</source>
         <translation>Frames &amp;speichern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="236"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="237"/>
         <source>Saved analyses</source>
         <translation>Gespeicherte Analysen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="238"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="239"/>
         <source>O&amp;pen</source>
         <translation>Ö&amp;ffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="239"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
         <source>&amp;Delete</source>
         <translation>&amp;Löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="241"/>
         <source>Save as:</source>
         <translation>Speichern als:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="246"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="247"/>
         <source>Saved:</source>
         <translation>Gespeichert:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="265"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="406"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="266"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="407"/>
         <source>F%1 %2</source>
         <translation>F%1 %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="276"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="277"/>
         <source>Choose a layer and the number of frames, then press Compute. Gold is the usual layer; the consensus of the coders or one coder serve before gold is adjudicated.</source>
         <translation>Wählen Sie eine Ebene und die Anzahl der Frames und klicken Sie dann auf Berechnen. Der Goldstandard ist die übliche Ebene; der Konsens der Codierenden oder eine codierende Person dienen, bevor der Goldstandard entschieden ist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="338"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="340"/>
         <source>Computing the frames…</source>
         <translation>Die Frames werden berechnet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="367"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="368"/>
         <source>Cancelled; the frames shown are from before.</source>
         <translation>Abgebrochen; die angezeigten Frames sind die vorherigen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="367"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="368"/>
         <source>Cancelled.</source>
         <translation>Abgebrochen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="371"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
         <source>%1
 
 Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choose the consensus of the coders or one coder as the layer above.</source>
@@ -8450,160 +8450,160 @@ Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choo
 Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und entscheiden…) oder wählen Sie oben den Konsens der Codierenden oder eine codierende Person als Ebene.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="415"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="416"/>
         <source>k-choice indices, each relative to its largest value</source>
         <translation>k-Wahl-Indizes, jeweils relativ zu ihrem größten Wert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="417"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="418"/>
         <source>k (frames)</source>
         <translation>k (Frames)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="420"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="421"/>
         <source>share of the largest value</source>
         <translation>Anteil am größten Wert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="441"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="442"/>
         <source>mean silhouette</source>
         <translation>mittlere Silhouette</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="443"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="444"/>
         <source>Calinski–Harabasz</source>
         <translation>Calinski–Harabasz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="445"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="446"/>
         <source>fusion jump (elbow)</source>
         <translation>Fusionssprung (Ellbogen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="448"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="449"/>
         <source>chosen k = %1</source>
         <translation>gewähltes k = %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="465"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="510"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="580"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="466"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="511"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="581"/>
         <source>–</source>
         <translation>–</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="467"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="468"/>
         <source>Largest mean silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k = %3. %4 %5 articles × %6 element variables of %7.</source>
         <translation>Größte mittlere Silhouette bei k = %1, Calinski–Harabasz bei k = %2, Fusionssprung bei k = %3. %4 %5 Artikel × %6 Elementvariablen von %7.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="471"/>
         <source>Frames: k = %1, as chosen.</source>
         <translation>Frames: k = %1, wie gewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="471"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="472"/>
         <source>Frames: k = %1, where most indices point.</source>
         <translation>Frames: k = %1, worauf die meisten Indizes zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="490"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Name (double-click to edit)</source>
         <translation>Name (zum Bearbeiten doppelklicken)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="490"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
         <source>Share</source>
         <translation>Anteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
         <source>Stability</source>
         <translation>Stabilität</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
         <source>Characteristic elements (share in frame, in all)</source>
         <translation>Kennzeichnende Elemente (Anteil im Frame, in allen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="508"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="509"/>
         <source>%1 — dissolves on resampling</source>
         <translation>%1 — löst sich beim Neuziehen auf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="512"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="513"/>
         <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
         <translation>Mittlere Jaccard-Ähnlichkeit zum am besten passenden Cluster über %1 Bootstrap-Replikationen (Hennig 2007); %2 aufgelöst (≤ 0.5), %3 wiedergefunden (≥ 0.75).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="518"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="519"/>
         <source>not computed</source>
         <translation>nicht berechnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="533"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="534"/>
         <source>%1 (%2, %3)</source>
         <translation>%1 (%2, %3)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="540"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="541"/>
         <source>none stands out</source>
         <translation>keines sticht heraus</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="554"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="604"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="555"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="605"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="555"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="556"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="575"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="576"/>
         <source>%1: %2 of all articles</source>
         <translation>%1: %2 aller Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="576"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="577"/>
         <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
         <translation>%1 in F%2: %3 seiner Artikel, %4 aller; standardisiertes Residuum %5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="605"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="606"/>
         <source>Total</source>
         <translation>Gesamt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="616"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="617"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="625"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="626"/>
         <source>Chi-square undefined: %1</source>
         <translation>Chi-Quadrat nicht definiert: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="628"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="629"/>
         <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
         <translation>Pearsons X² = %1, df = %2, p = %3; Cramérs V = %4.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="631"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="632"/>
         <source>&lt; 0.001</source>
         <translation>&lt; 0.001</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="635"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="636"/>
         <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
         <translation>
             <numerusform>Bei %n Zelle ist der Erwartungswert kleiner als 5 Artikel: lesen Sie den Test mit Vorsicht.</numerusform>
@@ -8611,43 +8611,43 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Date</source>
         <translation>Datum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Id</source>
         <translation>ID</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Near the centre</source>
         <translation>Nahe am Zentrum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="663"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="664"/>
         <source>%1.</source>
         <translation>%1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="696"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="697"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="698"/>
         <source>Compute the frames before saving them.</source>
         <translation>Berechnen Sie die Frames, bevor Sie sie speichern.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="713"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="714"/>
         <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
         <translation>
             <numerusform>Der %n Frame wurde als „%1“ gespeichert (Bearbeiten → Rückgängig nimmt es zurück).</numerusform>
@@ -8655,22 +8655,22 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="738"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="739"/>
         <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
         <translation>Die Ebene %1 von „%2“ ist nicht mehr im Projekt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="740"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="741"/>
         <source>The layer %1 is no longer in the project.</source>
         <translation>Die Ebene %1 ist nicht mehr im Projekt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="765"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="766"/>
         <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
         <translation>Die gespeicherten Frames „%1“ wurden gelöscht (Bearbeiten → Rückgängig holt sie zurück).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="780"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="781"/>
         <source>%1 — %2, k = %3, %n article(s)</source>
         <translation>
             <numerusform>%1 — %2, k = %3, %n Artikel</numerusform>

@@ -3081,7 +3081,7 @@
     <message>
         <location filename="../app/report/report_document.cpp" line="331"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
-        <translation>Elk van de vier framingfuncties van Entman (1993) is gecodeerd als een tekstfragment; voor de betrouwbaarheid werd elke functie een binaire variabele (aanwezig of afwezig) per %1, waarbij een %2 een functie draagt wanneer het fragment van een codeur met die functie ermee overlapt. </translation>
+        <translation>Elk van de vier framingfuncties van Entman (1993) is gecodeerd als een tekstfragment; voor de betrouwbaarheid werd elke functie een binaire variabele (aanwezig of afwezig) per %1: een eenheid (%2) draagt een functie wanneer het fragment van een codeur met die functie ermee overlapt. </translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="336"/>
@@ -3247,13 +3247,13 @@
         <location filename="../app/report/report_document.cpp" line="473"/>
         <location filename="../app/report/report_document.cpp" line="643"/>
         <source>Units</source>
-        <translation>Eenheden</translation>
+        <translation>Eenh.</translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="474"/>
         <location filename="../app/report/report_document.cpp" line="562"/>
         <source>Pairable values</source>
-        <translation>Paarbare waarden</translation>
+        <translation>Paarb. waarden</translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="475"/>
@@ -3269,7 +3269,7 @@
         <location filename="../app/report/report_document.cpp" line="477"/>
         <location filename="../app/report/report_document.cpp" line="643"/>
         <source>Agreement</source>
-        <translation>Overeenstemming</translation>
+        <translation>Overeenst.</translation>
     </message>
     <message>
         <location filename="../app/report/report_document.cpp" line="477"/>
@@ -8284,164 +8284,164 @@ Bijna-kopie van %2</translation>
         <translation>Annuleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="111"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="112"/>
         <source>&amp;Layer:</source>
         <translation>&amp;Laag:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="114"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="115"/>
         <source>&amp;Frames (k):</source>
         <translation>&amp;Frames (k):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="118"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="119"/>
         <source>Indices up to k =</source>
         <translation>Indices tot k =</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="122"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="123"/>
         <source>&amp;Stability replicates:</source>
         <translation>&amp;Stabiliteitsreplicaties:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="126"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="127"/>
         <source>start value:</source>
         <translation>seed:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="156"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="157"/>
         <source>Ward&apos;s tree: the last %1 merges (each leaf: its number of articles; dashed: the cut into the chosen k)</source>
         <translation>Boom van Ward: de laatste %1 samenvoegingen (elk blad: het aantal artikelen; gestreept: de snede in de gekozen k)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="172"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="173"/>
         <source>Choosing &amp;k</source>
         <translation>Keuze van &amp;k</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="182"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="183"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="183"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="184"/>
         <source>Element profile of each frame</source>
         <translation>Elementprofiel van elk frame</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="185"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="186"/>
         <source>Share of each frame&apos;s articles holding the element, beside the share in all articles; bold: the element characterises the frame (adjusted residual above 1.96).</source>
         <translation>Aandeel van de artikelen van elk frame dat het element bevat, naast het aandeel in alle artikelen; vet: het element kenmerkt het frame (gecorrigeerd residu boven 1.96).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="192"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="193"/>
         <source>F&amp;rames</source>
         <translation>F&amp;rames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="197"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="198"/>
         <source>By outlet</source>
         <translation>Naar medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="198"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="199"/>
         <source>By month</source>
         <translation>Naar maand</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="210"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="211"/>
         <source>By &amp;outlet and month</source>
         <translation>Naar &amp;medium en maand</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="217"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="218"/>
         <source>Frame</source>
         <translation>Frame</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="218"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="219"/>
         <source>Fr&amp;ame:</source>
         <translation>Fr&amp;ame:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="222"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="223"/>
         <source>Double-click an article to open it on the desk.</source>
         <translation>Dubbelklik op een artikel om het te openen om te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="225"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="226"/>
         <source>Articles of the frame</source>
         <translation>Artikelen van het frame</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="227"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="228"/>
         <source>&amp;Articles</source>
         <translation>&amp;Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="232"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="233"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
         <source>Name of the analysis</source>
         <translation>Naam van de analyse</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="235"/>
         <source>Sa&amp;ve frames</source>
         <translation>Frames &amp;opslaan</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="236"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="237"/>
         <source>Saved analyses</source>
         <translation>Opgeslagen analyses</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="238"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="239"/>
         <source>O&amp;pen</source>
         <translation>O&amp;penen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="239"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
         <source>&amp;Delete</source>
         <translation>&amp;Verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="241"/>
         <source>Save as:</source>
         <translation>Opslaan als:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="246"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="247"/>
         <source>Saved:</source>
         <translation>Opgeslagen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="265"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="406"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="266"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="407"/>
         <source>F%1 %2</source>
         <translation>F%1 %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="276"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="277"/>
         <source>Choose a layer and the number of frames, then press Compute. Gold is the usual layer; the consensus of the coders or one coder serve before gold is adjudicated.</source>
         <translation>Kies een laag en het aantal frames en klik dan op Berekenen. De gouden standaard is de gebruikelijke laag; de consensus van de codeurs of één codeur dienen zolang over de gouden standaard nog niet is beslist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="338"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="340"/>
         <source>Computing the frames…</source>
         <translation>De frames worden berekend…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="367"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="368"/>
         <source>Cancelled; the frames shown are from before.</source>
         <translation>Geannuleerd; de getoonde frames zijn de vorige.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="367"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="368"/>
         <source>Cancelled.</source>
         <translation>Geannuleerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="371"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
         <source>%1
 
 Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choose the consensus of the coders or one coder as the layer above.</source>
@@ -8450,160 +8450,160 @@ Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choo
 Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en beslissen…) of kies hierboven de consensus van de codeurs of één codeur als laag.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="415"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="416"/>
         <source>k-choice indices, each relative to its largest value</source>
         <translation>k-keuze-indices, elk ten opzichte van de eigen grootste waarde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="417"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="418"/>
         <source>k (frames)</source>
         <translation>k (frames)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="420"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="421"/>
         <source>share of the largest value</source>
         <translation>aandeel van de grootste waarde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="441"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="442"/>
         <source>mean silhouette</source>
         <translation>gemiddeld silhouet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="443"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="444"/>
         <source>Calinski–Harabasz</source>
         <translation>Calinski–Harabasz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="445"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="446"/>
         <source>fusion jump (elbow)</source>
         <translation>fusiesprong (elleboog)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="448"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="449"/>
         <source>chosen k = %1</source>
         <translation>gekozen k = %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="465"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="510"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="580"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="466"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="511"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="581"/>
         <source>–</source>
         <translation>–</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="467"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="468"/>
         <source>Largest mean silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k = %3. %4 %5 articles × %6 element variables of %7.</source>
         <translation>Grootste gemiddelde silhouet bij k = %1, Calinski–Harabasz bij k = %2, fusiesprong bij k = %3. %4 %5 artikelen × %6 elementvariabelen van %7.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="471"/>
         <source>Frames: k = %1, as chosen.</source>
         <translation>Frames: k = %1, zoals gekozen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="471"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="472"/>
         <source>Frames: k = %1, where most indices point.</source>
         <translation>Frames: k = %1, waar de meeste indices naar wijzen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="490"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Name (double-click to edit)</source>
         <translation>Naam (dubbelklik om te bewerken)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="490"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
         <source>Share</source>
         <translation>Aandeel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
         <source>Stability</source>
         <translation>Stabiliteit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
         <source>Characteristic elements (share in frame, in all)</source>
         <translation>Kenmerkende elementen (aandeel in frame, in alle)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="508"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="509"/>
         <source>%1 — dissolves on resampling</source>
         <translation>%1 — valt uiteen bij opnieuw trekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="512"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="513"/>
         <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
         <translation>Gemiddelde Jaccard-gelijkenis met de best passende cluster over %1 bootstrapreplicaties (Hennig 2007); %2 uiteengevallen (≤ 0.5), %3 teruggevonden (≥ 0.75).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="518"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="519"/>
         <source>not computed</source>
         <translation>niet berekend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="533"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="534"/>
         <source>%1 (%2, %3)</source>
         <translation>%1 (%2, %3)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="540"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="541"/>
         <source>none stands out</source>
         <translation>geen enkel valt op</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="554"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="604"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="555"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="605"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="555"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="556"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="575"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="576"/>
         <source>%1: %2 of all articles</source>
         <translation>%1: %2 van alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="576"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="577"/>
         <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
         <translation>%1 in F%2: %3 van zijn artikelen, %4 van alle; gecorrigeerd residu %5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="605"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="606"/>
         <source>Total</source>
         <translation>Totaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="616"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="617"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="625"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="626"/>
         <source>Chi-square undefined: %1</source>
         <translation>Chikwadraat niet gedefinieerd: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="628"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="629"/>
         <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
         <translation>Pearsons X² = %1, df = %2, p = %3; Cramérs V = %4.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="631"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="632"/>
         <source>&lt; 0.001</source>
         <translation>&lt; 0.001</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="635"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="636"/>
         <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
         <translation>
             <numerusform>%n cel verwacht minder dan 5 artikelen: lees de toets met zorg.</numerusform>
@@ -8611,43 +8611,43 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Date</source>
         <translation>Datum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Id</source>
         <translation>Id</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="645"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
         <source>Near the centre</source>
         <translation>Dicht bij het centrum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="663"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="664"/>
         <source>%1.</source>
         <translation>%1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="696"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="697"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="698"/>
         <source>Compute the frames before saving them.</source>
         <translation>Bereken de frames voordat u ze opslaat.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="713"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="714"/>
         <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
         <translation>
             <numerusform>Het %n frame is opgeslagen als ‘%1’ (Bewerken → Ongedaan maken draait het terug).</numerusform>
@@ -8655,22 +8655,22 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="738"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="739"/>
         <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
         <translation>De laag %1 van ‘%2’ staat niet meer in het project.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="740"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="741"/>
         <source>The layer %1 is no longer in the project.</source>
         <translation>De laag %1 staat niet meer in het project.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="765"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="766"/>
         <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
         <translation>De opgeslagen frames ‘%1’ zijn verwijderd (Bewerken → Ongedaan maken haalt ze terug).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="780"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="781"/>
         <source>%1 — %2, k = %3, %n article(s)</source>
         <translation>
             <numerusform>%1 — %2, k = %3, %n artikel</numerusform>
