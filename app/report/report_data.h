@@ -3,7 +3,7 @@
 // is the JSON that `fourfold-cli agree --json` prints for the same selection, kept together with
 // the agree arguments that reproduce it, so the report and the CLI can never disagree.
 
-#include "core/agreement/project_units.h"
+#include "core/agreement/agreement_run.h"
 #include "core/model/annotation.h"
 #include "core/model/error.h"
 

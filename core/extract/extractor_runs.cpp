@@ -4,6 +4,7 @@
 #include "core/extract/extractor_protocol.h"
 #include "core/io/input_file.h"
 #include "core/project/project.h"
+#include "core/store/database.h"
 #include "core/store/event_log.h"
 #include "core/store/extractor_run_table.h"
 #include "core/store/savepoint.h"
@@ -51,30 +52,30 @@ Status checkNewName(const Project &project, const QString &name)
 
 Result<std::vector<ExtractorRun>> ExtractorRuns::runs(const Project &project)
 {
-    return store::runs(project.m_db);
+    return store::runs(project.db());
 }
 
 Result<std::optional<ExtractorRun>> ExtractorRuns::runByName(
     const Project &project, const QString &name)
 {
-    return store::runByName(project.m_db, name);
+    return store::runByName(project.db(), name);
 }
 
 Result<std::vector<ExtractedSpan>> ExtractorRuns::spans(
     const Project &project, RunId run, ArticleId article)
 {
-    return store::extractedSpans(project.m_db, run, article);
+    return store::extractedSpans(project.db(), run, article);
 }
 
 Status ExtractorRuns::forEachSpan(
     const Project &project, RunId run, const std::function<Status(ExtractedSpan &&)> &visit)
 {
-    return store::forEachExtractedSpan(project.m_db, run, visit);
+    return store::forEachExtractedSpan(project.db(), run, visit);
 }
 
 Result<qint64> ExtractorRuns::spanCount(const Project &project, RunId run)
 {
-    return store::extractedSpanCount(project.m_db, run);
+    return store::extractedSpanCount(project.db(), run);
 }
 
 Result<ExtractorRun> ExtractorRuns::create(Project &project, Extractor &extractor,
@@ -186,7 +187,7 @@ Result<ExtractorRun> ExtractorRuns::storeRun(
     run.uuid = store::newUuid();
     run.createdAt = store::now();
 
-    Database &db = project.m_db;
+    Database &db = project.db();
     auto sp = Savepoint::begin(db);
     if (!sp)
         return std::unexpected(sp.error());
@@ -216,7 +217,7 @@ Status ExtractorRuns::deleteRun(Project &project, const QString &name)
     auto count = spanCount(project, (*run)->id);
     if (!count)
         return std::unexpected(count.error());
-    Database &db = project.m_db;
+    Database &db = project.db();
     auto sp = Savepoint::begin(db);
     if (!sp)
         return std::unexpected(sp.error());

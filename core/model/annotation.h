@@ -66,6 +66,18 @@ struct GoldAnnotation {
     bool deleted = false;
 };
 
+// A lead's decision that a coder's span does not belong in gold, with its reason. The span
+// itself is not changed.
+struct GoldRejection {
+    qint64 id = 0;
+    QString uuid;
+    AnnotationId annotation;
+    CoderId decidedBy;
+    QString decidedAt; // ISO 8601 UTC
+    QString rationale;
+    bool deleted = false;
+};
+
 // Which coder codes which article in which phase.
 struct Assignment {
     ArticleId article;

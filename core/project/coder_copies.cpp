@@ -3,6 +3,7 @@
 #include "core/project/copy_validation.h"
 #include "core/project/project.h"
 #include "core/store/coder_table.h"
+#include "core/store/database.h"
 #include "core/store/event_log.h"
 #include "core/store/project_tables.h"
 #include "core/store/savepoint.h"
@@ -556,20 +557,20 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
 
 Result<std::optional<CopyInfo>> CoderCopies::copyInfo(const Project &project)
 {
-    return readCopyInfo(project.m_db);
+    return readCopyInfo(project.db());
 }
 
 Result<HandoutReport> CoderCopies::handout(
     Project &project, const QString &coderName, const QString &outPath)
 {
-    auto own = readCopyInfo(project.m_db);
+    auto own = readCopyInfo(project.db());
     if (!own)
         return std::unexpected(own.error());
     if (*own)
         return fail(ErrorCode::Unsupported,
             CoderCopiesText::tr("%1 is itself a coder copy; hand out copies from the main project.")
                 .arg(project.path()));
-    auto coder = findCoder(project.m_db, coderName);
+    auto coder = findCoder(project.db(), coderName);
     if (!coder)
         return std::unexpected(coder.error());
     if (QFileInfo::exists(outPath))
@@ -586,14 +587,14 @@ Result<HandoutReport> CoderCopies::handout(
                 "Coder %1 has no assigned articles; assign some before handing out a copy.")
                 .arg(coder->pseudonym));
 
-    auto origin = store::setting(project.m_db, kProjectUuidKey);
+    auto origin = store::setting(project.db(), kProjectUuidKey);
     if (!origin)
         return std::unexpected(origin.error());
     QString originUuid = origin->value_or(QString());
     if (originUuid.isEmpty()) {
         // Files made before projects had an identity get one now; their copies refer to it.
         originUuid = store::newUuid();
-        FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kProjectUuidKey, originUuid));
+        FOURFOLD_TRY_STATUS(store::setSetting(project.db(), kProjectUuidKey, originUuid));
     }
 
     const QString copyUuid = store::newUuid();
@@ -621,7 +622,7 @@ Result<HandoutReport> CoderCopies::handout(
             ? store::portableRows(*copyDb, coder->uuid)
             : Result<std::vector<store::PortableRow>>(std::unexpected(written.error()));
         if (handedOut)
-            written = recordHandout(project.m_db, copyUuid, *coder, *handedOut);
+            written = recordHandout(project.db(), copyUuid, *coder, *handedOut);
         else
             written = std::unexpected(handedOut.error());
         if (!written) {
@@ -638,22 +639,22 @@ Result<HandoutReport> CoderCopies::handout(
 
 Result<std::vector<MergeReport>> CoderCopies::merge(Project &project, const QStringList &paths)
 {
-    auto own = readCopyInfo(project.m_db);
+    auto own = readCopyInfo(project.db());
     if (!own)
         return std::unexpected(own.error());
     if (*own)
         return fail(ErrorCode::Unsupported,
             CoderCopiesText::tr("%1 is itself a coder copy; merge copies into the main project.")
                 .arg(project.path()));
-    auto mainUuid = store::setting(project.m_db, kProjectUuidKey);
+    auto mainUuid = store::setting(project.db(), kProjectUuidKey);
     if (!mainUuid)
         return std::unexpected(mainUuid.error());
-    auto sp = Savepoint::begin(project.m_db);
+    auto sp = Savepoint::begin(project.db());
     if (!sp)
         return std::unexpected(sp.error());
     std::vector<MergeReport> reports;
     for (const QString &path : paths) {
-        auto one = mergeOne(project.m_db, mainUuid->value_or(QString()), path);
+        auto one = mergeOne(project.db(), mainUuid->value_or(QString()), path);
         if (!one)
             return std::unexpected(one.error());
         reports.push_back(*one);
@@ -664,7 +665,7 @@ Result<std::vector<MergeReport>> CoderCopies::merge(Project &project, const QStr
 
 Result<std::vector<store::MergeConflict>> CoderCopies::conflicts(const Project &project, bool all)
 {
-    return store::mergeConflicts(project.m_db, all);
+    return store::mergeConflicts(project.db(), all);
 }
 
 Status CoderCopies::resolve(Project &project, const QString &uuid, const QString &keep)
@@ -675,7 +676,7 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
                 "Keep \"mine\" (the version the project holds) or \"theirs\" (the version that "
                 "lost), not \"%1\".")
                 .arg(keep));
-    auto open = store::mergeConflicts(project.m_db, false);
+    auto open = store::mergeConflicts(project.db(), false);
     if (!open)
         return std::unexpected(open.error());
     std::vector<store::MergeConflict> matches;
@@ -698,30 +699,30 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
     const store::MergeConflict &c = matches.front();
     store::PortableRow theirs {c.objectType, c.objectUuid, c.theirs, 0};
 
-    auto sp = Savepoint::begin(project.m_db);
+    auto sp = Savepoint::begin(project.db());
     if (!sp)
         return std::unexpected(sp.error());
-    auto base = store::copyBase(project.m_db, c.copyUuid);
+    auto base = store::copyBase(project.db(), c.copyUuid);
     if (!base)
         return std::unexpected(base.error());
     const auto seen = base->constFind(theirs.key());
     if (keep == QLatin1String("theirs")) {
         if (theirs.type == QLatin1String("judgement") && !theirs.isDeleted()) {
-            auto other = store::otherLiveJudgement(project.m_db, theirs);
+            auto other = store::otherLiveJudgement(project.db(), theirs);
             if (!other)
                 return std::unexpected(other.error());
             if (*other)
-                FOURFOLD_TRY_STATUS(store::tombstoneJudgement(project.m_db, **other));
+                FOURFOLD_TRY_STATUS(store::tombstoneJudgement(project.db(), **other));
         }
-        FOURFOLD_TRY_STATUS(store::writePortableRow(project.m_db, theirs));
+        FOURFOLD_TRY_STATUS(store::writePortableRow(project.db(), theirs));
     }
     // Either way the losing version is now settled: merging its copy again changes nothing.
     // (Merges record it as the copy's base already; conflicts from older merges did not.)
     if (!c.copyUuid.isEmpty() && seen != base->cend() && seen->digest != theirs.digest())
         FOURFOLD_TRY_STATUS(store::setCopyBase(
-            project.m_db, c.copyUuid, theirs, store::BaseEntry {theirs.digest(), seen->seconds}));
-    FOURFOLD_TRY_STATUS(store::setConflictResolution(project.m_db, c.uuid, keep));
-    FOURFOLD_TRY_STATUS(store::appendEvent(project.m_db, CoderId {},
+            project.db(), c.copyUuid, theirs, store::BaseEntry {theirs.digest(), seen->seconds}));
+    FOURFOLD_TRY_STATUS(store::setConflictResolution(project.db(), c.uuid, keep));
+    FOURFOLD_TRY_STATUS(store::appendEvent(project.db(), CoderId {},
         QStringLiteral("conflict.resolve"), c.objectType, c.objectUuid,
         QJsonObject {{QStringLiteral("keep"), keep}, {QStringLiteral("conflict"), c.uuid}}));
     return sp->commit();

@@ -1,6 +1,7 @@
 #include "core/project/coding_scope.h"
 
 #include "core/project/project.h"
+#include "core/store/database.h"
 #include "core/store/project_tables.h"
 
 namespace fourfold {
@@ -23,10 +24,10 @@ Result<CodingScope> CodingScope::load(const Project &project, const CodingScopeO
 Result<CodingScope> CodingScope::loadArticle(
     const Project &project, ArticleId article, const CodingScopeOptions &options)
 {
-    auto assignments = store::assignments(project.m_db, article);
+    auto assignments = store::assignments(project.db(), article);
     if (!assignments)
         return std::unexpected(assignments.error());
-    auto coded = store::codedTriples(project.m_db, article);
+    auto coded = store::codedTriples(project.db(), article);
     if (!coded)
         return std::unexpected(coded.error());
     const auto wanted = [&](Phase p) { return !options.phase || *options.phase == p; };

@@ -5,7 +5,6 @@
 
 #include "core/model/annotation.h"
 #include "core/project/edit.h"
-#include "core/store/gold_table.h"
 
 #include <vector>
 

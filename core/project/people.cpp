@@ -5,6 +5,7 @@
 #include "core/project/person_edits.h"
 #include "core/project/project.h"
 #include "core/store/coder_table.h"
+#include "core/store/database.h"
 #include "core/store/store_util.h"
 
 #include <QCoreApplication>
@@ -77,7 +78,7 @@ Status checkLead(const Project &project, const std::vector<Coder> &all, const Si
 
 Result<std::vector<Coder>> People::list(const Project &project)
 {
-    return store::coders(project.m_db);
+    return store::coders(project.db());
 }
 
 Result<PassphraseState> People::passphraseState(const Project &project, const QString &pseudonym)
@@ -93,7 +94,7 @@ Result<PassphraseState> People::passphraseState(const Project &project, const QS
         return std::unexpected(copy.error());
     if (person->role != CoderRole::Lead || *copy)
         return PassphraseState::NotNeeded;
-    auto hash = store::coderPassphraseHash(project.m_db, person->id);
+    auto hash = store::coderPassphraseHash(project.db(), person->id);
     if (!hash)
         return std::unexpected(hash.error());
     return hash->isEmpty() ? PassphraseState::NotSetYet : PassphraseState::Set;
@@ -122,7 +123,7 @@ Result<SignedIn> People::signIn(
     }
     if (person->role != CoderRole::Lead)
         return SignedIn(*person);
-    auto hash = store::coderPassphraseHash(project.m_db, person->id);
+    auto hash = store::coderPassphraseHash(project.db(), person->id);
     if (!hash)
         return std::unexpected(hash.error());
     if (hash->isEmpty()) {

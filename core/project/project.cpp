@@ -6,6 +6,7 @@
 #include "core/store/article_table.h"
 #include "core/store/codebook_table.h"
 #include "core/store/coder_table.h"
+#include "core/store/database.h"
 #include "core/store/event_log.h"
 #include "core/store/gold_table.h"
 #include "core/store/project_tables.h"
@@ -48,6 +49,19 @@ void removeProjectFiles(const QString &path)
 
 } // namespace
 
+Project::Project(Database db)
+    : m_db(std::make_unique<Database>(std::move(db)))
+{ }
+
+Project::Project(Project &&) noexcept = default;
+Project &Project::operator=(Project &&) noexcept = default;
+Project::~Project() = default;
+
+QString Project::path() const
+{
+    return db().path();
+}
+
 Result<Project> Project::create(const QString &path, const Settings &settings)
 {
     if (QFileInfo::exists(path))
@@ -61,30 +75,30 @@ Result<Project> Project::create(const QString &path, const Settings &settings)
         return std::unexpected(db.error());
     Project project(std::move(*db));
     auto build = [&]() -> Status {
-        FOURFOLD_TRY_STATUS(prepareSchema(project.m_db));
-        FOURFOLD_TRY_STATUS(project.m_db.exec(QStringLiteral("BEGIN IMMEDIATE")));
+        FOURFOLD_TRY_STATUS(prepareSchema(project.db()));
+        FOURFOLD_TRY_STATUS(project.db().exec(QStringLiteral("BEGIN IMMEDIATE")));
         auto body = [&]() -> Status {
-            FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kNameKey,
+            FOURFOLD_TRY_STATUS(store::setSetting(project.db(), kNameKey,
                 settings.name.isEmpty() ? QFileInfo(path).completeBaseName() : settings.name));
-            FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kLanguageKey,
+            FOURFOLD_TRY_STATUS(store::setSetting(project.db(), kLanguageKey,
                 settings.defaultLanguage.isEmpty() ? QStringLiteral("en")
                                                    : settings.defaultLanguage));
-            FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kUuidKey, store::newUuid()));
+            FOURFOLD_TRY_STATUS(store::setSetting(project.db(), kUuidKey, store::newUuid()));
             auto version = store::insertCodebookVersion(
-                project.m_db, *book, ProjectText::tr("Default codebook"));
+                project.db(), *book, ProjectText::tr("Default codebook"));
             if (!version)
                 return std::unexpected(version.error());
-            return store::appendEvent(project.m_db, CoderId {}, QStringLiteral("project.create"),
+            return store::appendEvent(project.db(), CoderId {}, QStringLiteral("project.create"),
                 QStringLiteral("project"), QString());
         };
         if (auto st = body(); !st) {
-            (void)project.m_db.exec(QStringLiteral("ROLLBACK"));
+            (void)project.db().exec(QStringLiteral("ROLLBACK"));
             return st;
         }
-        return project.m_db.exec(QStringLiteral("COMMIT"));
+        return project.db().exec(QStringLiteral("COMMIT"));
     };
     if (auto st = build(); !st) {
-        project.m_db = Database();
+        project.db() = Database();
         removeProjectFiles(path);
         return std::unexpected(st.error());
     }
@@ -100,32 +114,32 @@ Result<Project> Project::open(const QString &path)
     if (!db)
         return std::unexpected(db.error());
     Project project(std::move(*db));
-    FOURFOLD_TRY_STATUS(prepareSchema(project.m_db, &project.m_backupPath));
+    FOURFOLD_TRY_STATUS(prepareSchema(project.db(), &project.m_backupPath));
     FOURFOLD_TRY_STATUS(project.loadSettings());
     return project;
 }
 
 Status Project::loadSettings()
 {
-    auto name = store::setting(m_db, kNameKey);
+    auto name = store::setting(db(), kNameKey);
     if (!name)
         return std::unexpected(name.error());
-    auto language = store::setting(m_db, kLanguageKey);
+    auto language = store::setting(db(), kLanguageKey);
     if (!language)
         return std::unexpected(language.error());
-    m_settings.name = name->value_or(QFileInfo(m_db.path()).completeBaseName());
+    m_settings.name = name->value_or(QFileInfo(db().path()).completeBaseName());
     m_settings.defaultLanguage = language->value_or(QStringLiteral("en"));
     return {};
 }
 
 Result<std::vector<ArticleSummary>> Project::articles() const
 {
-    return store::articleSummaries(m_db);
+    return store::articleSummaries(db());
 }
 
 Result<Article> Project::article(ArticleId id) const
 {
-    return store::article(m_db, id);
+    return store::article(db(), id);
 }
 
 int Project::schemaVersion()
@@ -136,37 +150,37 @@ int Project::schemaVersion()
 Status Project::forEachSegmentation(SegmentKind kind,
     const std::function<Status(ArticleId, std::vector<TextRange> &&)> &visit) const
 {
-    return store::forEachSegmentation(m_db, kind, visit);
+    return store::forEachSegmentation(db(), kind, visit);
 }
 
 Status Project::forEachAnnotation(const std::function<Status(Annotation &&)> &visit) const
 {
-    return store::forEachAnnotation(m_db, visit);
+    return store::forEachAnnotation(db(), visit);
 }
 
 Result<std::vector<std::pair<CoderId, Phase>>> Project::spanCoderPhases() const
 {
-    return store::spanCoderPhases(m_db);
+    return store::spanCoderPhases(db());
 }
 
 Status Project::forEachAnnotationOutline(const std::function<Status(Annotation &&)> &visit) const
 {
-    return store::forEachAnnotationOutline(m_db, visit);
+    return store::forEachAnnotationOutline(db(), visit);
 }
 
 Status Project::forEachGoldAnnotation(const std::function<Status(GoldAnnotation &&)> &visit) const
 {
-    return store::forEachGoldAnnotation(m_db, visit);
+    return store::forEachGoldAnnotation(db(), visit);
 }
 
 Result<std::optional<ArticleId>> Project::articleByExternalId(const QString &externalId) const
 {
-    return store::articleIdByExternalId(m_db, externalId);
+    return store::articleIdByExternalId(db(), externalId);
 }
 
 Result<std::vector<ArticleId>> Project::searchArticles(const QString &query) const
 {
-    return store::searchArticles(m_db, query);
+    return store::searchArticles(db(), query);
 }
 
 Result<CoderId> Project::addCoder(const QString &name, const QString &pseudonym, CoderRole role)
@@ -174,7 +188,7 @@ Result<CoderId> Project::addCoder(const QString &name, const QString &pseudonym,
     if (name.trimmed().isEmpty() || pseudonym.trimmed().isEmpty())
         return fail(
             ErrorCode::InvalidArgument, ProjectText::tr("A coder needs a name and a pseudonym."));
-    auto sp = Savepoint::begin(m_db);
+    auto sp = Savepoint::begin(db());
     if (!sp)
         return std::unexpected(sp.error());
     Coder coder;
@@ -182,11 +196,11 @@ Result<CoderId> Project::addCoder(const QString &name, const QString &pseudonym,
     coder.name = name.trimmed();
     coder.pseudonym = pseudonym.trimmed();
     coder.role = role;
-    auto id = store::insertCoder(m_db, coder);
+    auto id = store::insertCoder(db(), coder);
     if (!id)
         return std::unexpected(id.error());
     FOURFOLD_TRY_STATUS(
-        store::appendEvent(m_db, CoderId {}, QStringLiteral("coder.add"), QStringLiteral("coder"),
+        store::appendEvent(db(), CoderId {}, QStringLiteral("coder.add"), QStringLiteral("coder"),
             coder.uuid, QJsonObject {{QStringLiteral("pseudonym"), coder.pseudonym}}));
     FOURFOLD_TRY_STATUS(sp->commit());
     return id;
@@ -194,12 +208,12 @@ Result<CoderId> Project::addCoder(const QString &name, const QString &pseudonym,
 
 Result<std::vector<Coder>> Project::coders() const
 {
-    return store::coders(m_db);
+    return store::coders(db());
 }
 
 Result<std::optional<Coder>> Project::coderByPseudonym(const QString &pseudonym) const
 {
-    auto all = store::coders(m_db);
+    auto all = store::coders(db());
     if (!all)
         return std::unexpected(all.error());
     for (const Coder &c : *all)
@@ -210,12 +224,12 @@ Result<std::optional<Coder>> Project::coderByPseudonym(const QString &pseudonym)
 
 Result<Codebook> Project::codebook() const
 {
-    return store::currentCodebook(m_db);
+    return store::currentCodebook(db());
 }
 
 Status Project::assign(ArticleId article, CoderId coder, Phase phase)
 {
-    auto people = store::coders(m_db);
+    auto people = store::coders(db());
     if (!people)
         return std::unexpected(people.error());
     const auto who = std::ranges::find(*people, coder, &Coder::id);
@@ -223,11 +237,11 @@ Status Project::assign(ArticleId article, CoderId coder, Phase phase)
         return fail(ErrorCode::InvalidArgument,
             ProjectText::tr("%1 is disabled and takes no new assignments; enable them first.")
                 .arg(who->pseudonym));
-    auto sp = Savepoint::begin(m_db);
+    auto sp = Savepoint::begin(db());
     if (!sp)
         return std::unexpected(sp.error());
-    FOURFOLD_TRY_STATUS(store::insertAssignment(m_db, article, coder, phase));
-    FOURFOLD_TRY_STATUS(store::appendEvent(m_db, CoderId {}, QStringLiteral("assignment.add"),
+    FOURFOLD_TRY_STATUS(store::insertAssignment(db(), article, coder, phase));
+    FOURFOLD_TRY_STATUS(store::appendEvent(db(), CoderId {}, QStringLiteral("assignment.add"),
         QStringLiteral("assignment"), QString(),
         QJsonObject {{QStringLiteral("article"), article.value},
             {QStringLiteral("coder"), coder.value}, {QStringLiteral("phase"), phaseKey(phase)}}));
@@ -237,92 +251,92 @@ Status Project::assign(ArticleId article, CoderId coder, Phase phase)
 Result<std::vector<Annotation>> Project::annotations(
     ArticleId article, std::optional<CoderId> coder) const
 {
-    return store::annotations(m_db, article, coder);
+    return store::annotations(db(), article, coder);
 }
 
 Result<Annotation> Project::annotation(AnnotationId id) const
 {
-    return store::annotation(m_db, id);
+    return store::annotation(db(), id);
 }
 
 Result<std::vector<AnnotationLink>> Project::links(ArticleId article) const
 {
-    return store::links(m_db, article);
+    return store::links(db(), article);
 }
 
 Result<std::vector<Judgement>> Project::judgements(ArticleId article) const
 {
-    return store::judgements(m_db, article);
+    return store::judgements(db(), article);
 }
 
 Result<std::vector<GoldAnnotation>> Project::goldAnnotations(ArticleId article) const
 {
-    return store::goldAnnotations(m_db, article);
+    return store::goldAnnotations(db(), article);
 }
 
 Result<std::vector<GoldRejection>> Project::goldRejections(ArticleId article) const
 {
-    return store::goldRejections(m_db, article);
+    return store::goldRejections(db(), article);
 }
 
 Result<std::vector<Annotation>> Project::allAnnotations() const
 {
-    return store::allAnnotations(m_db);
+    return store::allAnnotations(db());
 }
 
 Result<std::vector<Judgement>> Project::allJudgements() const
 {
-    return store::allJudgements(m_db);
+    return store::allJudgements(db());
 }
 
 Result<std::vector<Assignment>> Project::assignments() const
 {
-    return store::assignments(m_db);
+    return store::assignments(db());
 }
 
 Result<std::vector<Assignment>> Project::assignments(ArticleId article, CoderId coder) const
 {
-    return store::coderAssignments(m_db, article, coder);
+    return store::coderAssignments(db(), article, coder);
 }
 
 Status Project::addCodingTime(ArticleId article, CoderId coder, qint64 seconds)
 {
     if (seconds <= 0)
         return {};
-    auto all = store::assignments(m_db);
+    auto all = store::assignments(db());
     if (!all)
         return std::unexpected(all.error());
     for (const Assignment &a : *all)
         if (a.article == article && a.coder == coder)
-            return store::addAssignmentSeconds(m_db, article, coder, a.phase, seconds);
+            return store::addAssignmentSeconds(db(), article, coder, a.phase, seconds);
     return {};
 }
 
 Status Project::apply(Edit &edit)
 {
-    auto sp = Savepoint::begin(m_db);
+    auto sp = Savepoint::begin(db());
     if (!sp)
         return std::unexpected(sp.error());
-    FOURFOLD_TRY_STATUS(edit.apply(m_db));
+    FOURFOLD_TRY_STATUS(edit.apply(db()));
     FOURFOLD_TRY_STATUS(store::appendEvent(
-        m_db, edit.actor(), edit.action(), edit.objectType(), edit.objectUuid()));
+        db(), edit.actor(), edit.action(), edit.objectType(), edit.objectUuid()));
     return sp->commit();
 }
 
 Status Project::revert(Edit &edit)
 {
-    auto sp = Savepoint::begin(m_db);
+    auto sp = Savepoint::begin(db());
     if (!sp)
         return std::unexpected(sp.error());
-    FOURFOLD_TRY_STATUS(edit.revert(m_db));
-    FOURFOLD_TRY_STATUS(store::appendEvent(m_db, edit.actor(),
+    FOURFOLD_TRY_STATUS(edit.revert(db()));
+    FOURFOLD_TRY_STATUS(store::appendEvent(db(), edit.actor(),
         QStringLiteral("undo:") + edit.action(), edit.objectType(), edit.objectUuid()));
     return sp->commit();
 }
 
 Status Project::batch(const std::function<Status()> &work)
 {
-    auto sp = Savepoint::begin(m_db);
+    auto sp = Savepoint::begin(db());
     if (!sp)
         return std::unexpected(sp.error());
     std::optional<Error> outerError = std::exchange(m_batchError, std::nullopt);
@@ -341,10 +355,10 @@ Status Project::applyInBatch(Edit &edit)
     if (!FOURFOLD_SOFT_ASSERT(lcProject(), m_batchDepth > 0))
         return fail(ErrorCode::Internal,
             ProjectText::tr("An edit without its own savepoint needs a batch."));
-    Status st = edit.apply(m_db);
+    Status st = edit.apply(db());
     if (st)
         st = store::appendEvent(
-            m_db, edit.actor(), edit.action(), edit.objectType(), edit.objectUuid());
+            db(), edit.actor(), edit.action(), edit.objectType(), edit.objectUuid());
     if (!st && !m_batchError)
         m_batchError = st.error();
     return st;
@@ -352,7 +366,7 @@ Status Project::applyInBatch(Edit &edit)
 
 Result<ProjectCounts> Project::counts() const
 {
-    return store::projectCounts(m_db);
+    return store::projectCounts(db());
 }
 
 } // namespace fourfold

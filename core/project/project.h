@@ -11,17 +11,17 @@
 #include "core/model/project_counts.h"
 #include "core/project/import_report.h"
 #include "core/project/integrity_report.h"
-#include "core/store/database.h"
-#include "core/store/gold_table.h"
 
 #include <QString>
 
 #include <functional>
+#include <memory>
 #include <optional>
 #include <vector>
 
 namespace fourfold {
 
+class Database;
 class Edit;
 
 class Project
@@ -52,10 +52,11 @@ public:
     // The schema version this program writes (older files are migrated up to it when opened).
     static int schemaVersion();
 
-    Project(Project &&) noexcept = default;
-    Project &operator=(Project &&) noexcept = default;
+    Project(Project &&) noexcept;
+    Project &operator=(Project &&) noexcept;
+    ~Project();
 
-    QString path() const { return m_db.path(); }
+    QString path() const;
     // Where the pre-upgrade copy went if open() upgraded the file; empty otherwise.
     QString backupPath() const { return m_backupPath; }
     Settings settings() const { return m_settings; }
@@ -146,9 +147,6 @@ public:
     // file when it is damaged (see store::quickCheck). Takes time in proportion to the file.
     Status checkBeforeImport() const;
 
-    // For tests: the underlying connection (fault injection, dumps). Not for front ends.
-    Database &databaseForTesting() { return m_db; }
-
 private:
     // Facades of core that sit beside Project and share its connection (design.md §2).
     friend class ExtractorRuns;
@@ -157,17 +155,19 @@ private:
     friend class CodingScope;
     friend class TeamProject;
     friend class People;
-
-    explicit Project(Database db)
-        : m_db(std::move(db))
-    { }
     friend class NearCopies;
     friend class SavedFrames;
     // Tests reach the connection through core/project/testing/project_database.h.
     friend struct ProjectTestAccess;
-    Status loadSettings();
 
-    Database m_db;
+    explicit Project(Database db);
+    Status loadSettings();
+    // The connection; the store's Database is private to core, so it is held behind a pointer
+    // and front ends that include this header never see its definition.
+    Database &db() { return *m_db; }
+    const Database &db() const { return *m_db; }
+
+    std::unique_ptr<Database> m_db;
     Settings m_settings;
     QString m_backupPath;
     int m_batchDepth = 0;

@@ -1,6 +1,7 @@
 // Project::check: SQLite's own checks, then a recomputation of everything that can be
 // recomputed from the stored texts (hash, length, canonical form, spans and quotes).
 #include "core/project/project.h"
+#include "core/store/database.h"
 #include "core/store/project_tables.h"
 #include "core/text/canonical_text.h"
 #include "core/text/offset_map.h"
@@ -21,18 +22,18 @@ struct ProjectCheckText {
 
 Status Project::checkBeforeImport() const
 {
-    return store::quickCheck(m_db);
+    return store::quickCheck(db());
 }
 
 Result<IntegrityReport> Project::check() const
 {
     IntegrityReport report;
-    auto sqliteProblems = store::sqliteChecks(m_db);
+    auto sqliteProblems = store::sqliteChecks(db());
     if (!sqliteProblems)
         return std::unexpected(sqliteProblems.error());
     report.problems << *sqliteProblems;
 
-    auto articles = store::allStoredArticles(m_db);
+    auto articles = store::allStoredArticles(db());
     if (!articles)
         return std::unexpected(articles.error());
     struct Known {
@@ -61,7 +62,7 @@ Result<IntegrityReport> Project::check() const
         byId.insert(a.id.value, known);
     }
 
-    auto spans = store::allStoredSpans(m_db);
+    auto spans = store::allStoredSpans(db());
     if (!spans)
         return std::unexpected(spans.error());
     for (const store::StoredSpan &s : *spans) {

@@ -4,6 +4,7 @@
 #include "core/project/near_copy_check.h"
 #include "core/project/project.h"
 #include "core/store/article_table.h"
+#include "core/store/database.h"
 #include "core/store/event_log.h"
 #include "core/store/savepoint.h"
 #include "core/store/store_util.h"
@@ -67,7 +68,7 @@ Result<ImportReport> Project::importFile(
     FOURFOLD_TRY_STATUS(NearCopyCheck::checkThreshold(options.nearCopyThreshold));
     ImportReport report;
     report.source = path;
-    auto sp = Savepoint::begin(m_db);
+    auto sp = Savepoint::begin(db());
     if (!sp)
         return std::unexpected(sp.error());
 
@@ -79,13 +80,13 @@ Result<ImportReport> Project::importFile(
             return std::unexpected(prepared.error());
         const QString &sha = prepared->summary.sha256;
 
-        auto sameText = store::articleIdBySha256(m_db, sha);
+        auto sameText = store::articleIdBySha256(db(), sha);
         if (!sameText)
             return std::unexpected(sameText.error());
         if (*sameText || shaInThisImport.contains(sha)) {
             QString other = shaInThisImport.value(sha);
             if (other.isEmpty()) {
-                auto existing = store::article(m_db, **sameText);
+                auto existing = store::article(db(), **sameText);
                 other = existing ? existing->summary.externalId : QString();
             }
             report.skipped.push_back(SkippedArticle {in.externalId, in.sourceLine,
@@ -93,7 +94,7 @@ Result<ImportReport> Project::importFile(
                     .arg(other)});
             return {};
         }
-        auto sameId = store::articleIdByExternalId(m_db, in.externalId);
+        auto sameId = store::articleIdByExternalId(db(), in.externalId);
         if (!sameId)
             return std::unexpected(sameId.error());
         if (*sameId)
@@ -102,7 +103,7 @@ Result<ImportReport> Project::importFile(
                     "the id \"%1\" is already used by another article in the project, with a "
                     "different text.")
                     .arg(in.externalId));
-        auto id = store::insertArticle(m_db, *prepared);
+        auto id = store::insertArticle(db(), *prepared);
         if (!id)
             return std::unexpected(id.error());
         shaInThisImport.insert(sha, in.externalId);
@@ -119,7 +120,7 @@ Result<ImportReport> Project::importFile(
         return {};
     };
     FOURFOLD_TRY_STATUS(forEachArticle(path, options, visit));
-    FOURFOLD_TRY_STATUS(store::appendEvent(m_db, CoderId {}, QStringLiteral("articles.import"),
+    FOURFOLD_TRY_STATUS(store::appendEvent(db(), CoderId {}, QStringLiteral("articles.import"),
         QStringLiteral("source"), QString(),
         QJsonObject {{QStringLiteral("source"), path},
             {QStringLiteral("added"), qint64(report.added.size())},

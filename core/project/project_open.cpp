@@ -1,6 +1,7 @@
 // Project::openForReading: a project opened read-only by the commands that only read it.
 
 #include "core/project/project.h"
+#include "core/store/database.h"
 #include "core/store/schema.h"
 
 #include <QCoreApplication>
@@ -42,7 +43,7 @@ Result<Project> Project::openForReading(const QString &path)
 
 bool Project::isReadOnly() const
 {
-    return m_db.isReadOnly();
+    return db().isReadOnly();
 }
 
 } // namespace fourfold

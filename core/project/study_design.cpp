@@ -6,6 +6,7 @@
 #include "core/reliability/krippendorff_alpha.h"
 #include "core/reliability/sample_size.h"
 #include "core/store/codebook_table.h"
+#include "core/store/database.h"
 #include "core/store/event_log.h"
 #include "core/store/project_tables.h"
 #include "core/store/savepoint.h"
@@ -392,7 +393,7 @@ std::vector<FramingFunction> CodebookDiff::changedFunctions() const
 
 Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &request)
 {
-    const Database &db = project.m_db;
+    const Database &db = project.db();
     if (request.phase != Phase::Reliability && request.phase != Phase::Pilot)
         return fail(ErrorCode::InvalidArgument,
             StudyDesignText::tr(
@@ -562,7 +563,7 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
 
 Status StudyDesign::commitDraw(Project &project, Draw &draw)
 {
-    auto sp = Savepoint::begin(project.m_db);
+    auto sp = Savepoint::begin(project.db());
     if (!sp)
         return std::unexpected(sp.error());
     auto recorded = recordedDraw(project, draw.phase);
@@ -577,7 +578,7 @@ Status StudyDesign::commitDraw(Project &project, Draw &draw)
     const QJsonObject record = drawJson(stored);
     FOURFOLD_TRY_STATUS(commitPlan(project, draw.plan, record));
     FOURFOLD_TRY_STATUS(
-        store::setSetting(project.m_db, drawSettingKey(draw.phase), store::toJsonText(record)));
+        store::setSetting(project.db(), drawSettingKey(draw.phase), store::toJsonText(record)));
     FOURFOLD_TRY_STATUS(sp->commit());
     draw.drawnAt = drawnAt;
     return {};
@@ -585,7 +586,7 @@ Status StudyDesign::commitDraw(Project &project, Draw &draw)
 
 Result<std::optional<Draw>> StudyDesign::recordedDraw(const Project &project, Phase phase)
 {
-    auto text = store::setting(project.m_db, drawSettingKey(phase));
+    auto text = store::setting(project.db(), drawSettingKey(phase));
     if (!text)
         return std::unexpected(text.error());
     if (!*text)
@@ -703,7 +704,7 @@ Result<AssignmentPlan> StudyDesign::planRest(const Project &project, const RestR
                 ? StudyDesignText::tr("Double coding needs at least two coders; %1 given.")
                       .arg(request.coders.size())
                 : StudyDesignText::tr("Name at least one coder for the remaining articles."));
-    auto names = loadNames(project.m_db, project);
+    auto names = loadNames(project.db(), project);
     if (!names)
         return std::unexpected(names.error());
     auto coders = resolveCoders(*names, request.coders);
@@ -755,7 +756,7 @@ Result<AssignmentPlan> StudyDesign::planArticles(
     if (articles.isEmpty() || coders.isEmpty())
         return fail(ErrorCode::InvalidArgument,
             StudyDesignText::tr("Name at least one article and one coder."));
-    auto names = loadNames(project.m_db, project);
+    auto names = loadNames(project.db(), project);
     if (!names)
         return std::unexpected(names.error());
     auto resolved = resolveCoders(*names, coders);
@@ -789,7 +790,7 @@ Result<AssignmentPlan> StudyDesign::planArticles(
 Status StudyDesign::commitPlan(
     Project &project, const AssignmentPlan &plan, const QJsonObject &record)
 {
-    Database &db = project.m_db;
+    Database &db = project.db();
     auto names = loadNames(db, project);
     if (!names)
         return std::unexpected(names.error());
@@ -845,7 +846,7 @@ Status StudyDesign::commitPlan(
 Result<std::vector<AssignmentRow>> StudyDesign::assignmentRows(
     const Project &project, std::optional<Phase> phase)
 {
-    auto names = loadNames(project.m_db, project);
+    auto names = loadNames(project.db(), project);
     if (!names)
         return std::unexpected(names.error());
     auto assignments = project.assignments();
@@ -964,7 +965,7 @@ Status checkValuesInUse(const Database &db, const Codebook &current, const Codeb
 
 Result<std::vector<CodebookVersionInfo>> StudyDesign::codebookVersions(const Project &project)
 {
-    auto rows = store::codebookVersionRows(project.m_db);
+    auto rows = store::codebookVersionRows(project.db());
     if (!rows)
         return std::unexpected(rows.error());
     std::vector<CodebookVersionInfo> out;
@@ -975,7 +976,7 @@ Result<std::vector<CodebookVersionInfo>> StudyDesign::codebookVersions(const Pro
 
 Result<Codebook> StudyDesign::codebookVersion(const Project &project, int number)
 {
-    return store::codebookByNumber(project.m_db, number);
+    return store::codebookByNumber(project.db(), number);
 }
 
 Result<CodebookVersionInfo> StudyDesign::addCodebookVersion(
@@ -985,28 +986,28 @@ Result<CodebookVersionInfo> StudyDesign::addCodebookVersion(
         return fail(ErrorCode::InvalidArgument,
             StudyDesignText::tr(
                 "A new codebook version needs a note that says what changed and why."));
-    auto current = store::currentCodebook(project.m_db);
+    auto current = store::currentCodebook(project.db());
     if (!current)
         return std::unexpected(current.error());
     if (diffCodebooks(*current, codebook).changes.empty())
         return fail(ErrorCode::InvalidArgument,
             StudyDesignText::tr("The codebook is the same as version %1; no new version was made.")
                 .arg(current->number));
-    FOURFOLD_TRY_STATUS(checkValuesInUse(project.m_db, *current, codebook));
-    auto sp = Savepoint::begin(project.m_db);
+    FOURFOLD_TRY_STATUS(checkValuesInUse(project.db(), *current, codebook));
+    auto sp = Savepoint::begin(project.db());
     if (!sp)
         return std::unexpected(sp.error());
-    auto id = store::insertCodebookVersion(project.m_db, codebook, note.trimmed(), author);
+    auto id = store::insertCodebookVersion(project.db(), codebook, note.trimmed(), author);
     if (!id)
         return std::unexpected(id.error());
-    auto stored = store::currentCodebook(project.m_db);
+    auto stored = store::currentCodebook(project.db());
     if (!stored)
         return std::unexpected(stored.error());
     const CodebookDiff diff = diffCodebooks(*current, *stored);
     QJsonObject detail =
         codebookDiffJson(CodebookDiff {current->number, stored->number, diff.changes});
     detail.insert(QStringLiteral("note"), note.trimmed());
-    FOURFOLD_TRY_STATUS(store::appendEvent(project.m_db, author, QStringLiteral("codebook.version"),
+    FOURFOLD_TRY_STATUS(store::appendEvent(project.db(), author, QStringLiteral("codebook.version"),
         QStringLiteral("codebook"), QString(), detail));
     FOURFOLD_TRY_STATUS(sp->commit());
     auto versions = codebookVersions(project);
@@ -1133,13 +1134,13 @@ QJsonObject StudyDesign::codebookDiffJson(const CodebookDiff &diff)
 
 Result<std::vector<OutdatedAnnotation>> StudyDesign::outdatedAnnotations(const Project &project)
 {
-    auto names = loadNames(project.m_db, project);
+    auto names = loadNames(project.db(), project);
     if (!names)
         return std::unexpected(names.error());
-    auto current = store::currentCodebook(project.m_db);
+    auto current = store::currentCodebook(project.db());
     if (!current)
         return std::unexpected(current.error());
-    auto versions = store::codebookVersionRows(project.m_db);
+    auto versions = store::codebookVersionRows(project.db());
     if (!versions)
         return std::unexpected(versions.error());
     QHash<qint64, int> numberOf;
@@ -1150,7 +1151,7 @@ Result<std::vector<OutdatedAnnotation>> StudyDesign::outdatedAnnotations(const P
     for (const store::CodebookVersionRow &v : *versions) {
         if (v.number >= current->number)
             continue;
-        auto old = store::codebookByNumber(project.m_db, v.number);
+        auto old = store::codebookByNumber(project.db(), v.number);
         if (!old)
             return std::unexpected(old.error());
         changedSince[v.number] = diffCodebooks(*old, *current).changedFunctions();
@@ -1196,7 +1197,7 @@ Result<TrainingFeedback> StudyDesign::trainingFeedback(
                 "Training feedback is computed on paragraphs, sentences or tokens, not on %1 "
                 "units.")
                 .arg(unitKindKey(request.unit)));
-    auto names = loadNames(project.m_db, project);
+    auto names = loadNames(project.db(), project);
     if (!names)
         return std::unexpected(names.error());
     auto coder = resolveCoders(*names, {request.coder});
@@ -1302,7 +1303,7 @@ QJsonObject StudyDesign::trainingFeedbackJson(const TrainingFeedback &feedback)
 
 Result<bool> StudyDesign::effortPerCoderVisible(const Project &project)
 {
-    auto value = store::setting(project.m_db, kEffortKey);
+    auto value = store::setting(project.db(), kEffortKey);
     if (!value)
         return std::unexpected(value.error());
     return *value && **value == QStringLiteral("on");
@@ -1310,12 +1311,12 @@ Result<bool> StudyDesign::effortPerCoderVisible(const Project &project)
 
 Status StudyDesign::setEffortPerCoderVisible(Project &project, bool visible, CoderId lead)
 {
-    auto sp = Savepoint::begin(project.m_db);
+    auto sp = Savepoint::begin(project.db());
     if (!sp)
         return std::unexpected(sp.error());
     const QString value = visible ? QStringLiteral("on") : QStringLiteral("off");
-    FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, kEffortKey, value));
-    FOURFOLD_TRY_STATUS(store::appendEvent(project.m_db, lead,
+    FOURFOLD_TRY_STATUS(store::setSetting(project.db(), kEffortKey, value));
+    FOURFOLD_TRY_STATUS(store::appendEvent(project.db(), lead,
         QStringLiteral("setting.effort_per_coder"), QStringLiteral("project_setting"), QString(),
         QJsonObject {{QStringLiteral("value"), value}}));
     return sp->commit();
@@ -1323,7 +1324,7 @@ Status StudyDesign::setEffortPerCoderVisible(Project &project, bool visible, Cod
 
 Result<ProgressBoard> StudyDesign::progressBoard(const Project &project, std::optional<Phase> phase)
 {
-    auto names = loadNames(project.m_db, project);
+    auto names = loadNames(project.db(), project);
     if (!names)
         return std::unexpected(names.error());
     auto visible = effortPerCoderVisible(project);

@@ -11,18 +11,6 @@
 namespace fourfold {
 class Database;
 
-// A lead's decision that a coder's span does not belong in gold, with its reason. The span
-// itself is not changed.
-struct GoldRejection {
-    qint64 id = 0;
-    QString uuid;
-    AnnotationId annotation;
-    CoderId decidedBy;
-    QString decidedAt; // ISO 8601 UTC
-    QString rationale;
-    bool deleted = false;
-};
-
 namespace store {
 
 // Inserts `g` (uuid, times, deleted flag as given; `g.id` ignored) and one provenance row per

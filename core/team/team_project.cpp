@@ -4,6 +4,7 @@
 #include "core/project/project.h"
 #include "core/store/coder_table.h"
 #include "core/store/copy_tables.h"
+#include "core/store/database.h"
 #include "core/store/project_tables.h"
 #include "core/store/shared_rows.h"
 #include "core/store/store_util.h"
@@ -162,7 +163,7 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         return fail(ErrorCode::Unsupported,
             TeamProjectText::tr("%1 is a coder copy; publish the main project.")
                 .arg(project.path()));
-    auto people = store::coders(project.m_db);
+    auto people = store::coders(project.db());
     if (!people)
         return std::unexpected(people.error());
     if (people->empty())
@@ -246,7 +247,7 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
 
     // The shared rows, references first.
     RowBatch batch(*conn);
-    const Database &db = project.m_db;
+    const Database &db = project.db();
     auto sendKind = [&](store::SharedKind kind, ServerTable table, qint64 *count) {
         return store::forEachSharedRow(db, kind, [&](const QByteArray &json) {
             if (count)
@@ -330,20 +331,20 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         return abandon(st.error());
 
     // The server holds the project now; the file records where, and whose working file it is.
-    if (auto st = store::setSetting(project.m_db, serverSettingKey(), *recordable); !st) {
+    if (auto st = store::setSetting(project.db(), serverSettingKey(), *recordable); !st) {
         Error e = st.error();
         e.message = TeamProjectText::tr("The team project is on %1, but %2 could not record it: %3")
                         .arg(report.server, project.path(), e.message);
         return std::unexpected(e);
     }
-    if (auto st = store::setSetting(project.m_db, pseudonymSettingKey(), lead); !st)
+    if (auto st = store::setSetting(project.db(), pseudonymSettingKey(), lead); !st)
         return std::unexpected(st.error());
     auto recorded = project.batch([&]() -> Status {
         FOURFOLD_TRY_STATUS(store::setSetting(
-            project.m_db, lastChangeSettingKey(), QString::number(report.lastChange)));
-        FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, lastXminSettingKey(), *xmin));
+            project.db(), lastChangeSettingKey(), QString::number(report.lastChange)));
+        FOURFOLD_TRY_STATUS(store::setSetting(project.db(), lastXminSettingKey(), *xmin));
         for (const auto &[key, value] : bases)
-            FOURFOLD_TRY_STATUS(store::setSetting(project.m_db, key, value));
+            FOURFOLD_TRY_STATUS(store::setSetting(project.db(), key, value));
         return {};
     });
     if (!recorded)

@@ -3,6 +3,7 @@
 #include "core/project/project.h"
 #include "core/store/coder_table.h"
 #include "core/store/copy_tables.h"
+#include "core/store/database.h"
 #include "core/store/project_tables.h"
 #include "core/store/shared_rows.h"
 #include "core/store/store_util.h"
@@ -63,7 +64,7 @@ struct Versions {
 
 Result<SyncReport> TeamProject::sync(Project &project)
 {
-    Database &db = project.m_db;
+    Database &db = project.db();
     auto server = store::setting(db, serverSettingKey());
     auto pseudonym = store::setting(db, pseudonymSettingKey());
     auto lastChange = store::setting(db, lastChangeSettingKey());

@@ -1,5 +1,6 @@
 // fourfold-cli as a script sees it: exit codes, one-line errors, JSON output.
 #include "core/project/project.h"
+#include "core/project/testing/project_database.h"
 #include "tests/support/cli_run.h"
 #include "tests/support/test_support.h"
 
@@ -104,7 +105,7 @@ TEST_CASE("check reports a tampered project with exit 1")
         REQUIRE(p->importFile(writeFile(dir, QStringLiteral("a.jsonl"),
                                   "{\"id\":\"a\",\"title\":\"T\",\"text\":\"Some text.\"}\n"),
             ImportOptions {}));
-        REQUIRE(p->databaseForTesting().exec(QStringLiteral("UPDATE article SET sha256 = 'x'")));
+        REQUIRE(databaseForTesting(*p).exec(QStringLiteral("UPDATE article SET sha256 = 'x'")));
     }
     const CliRun r = cli({QStringLiteral("check"), path, QStringLiteral("--json")});
     CHECK(r.exitCode == 1);

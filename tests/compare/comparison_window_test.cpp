@@ -6,6 +6,7 @@
 #include "app/desktop/compare/disagreement_queue_model.h"
 #include "app/desktop/compare/gold_span_dialog.h"
 #include "core/project/project.h"
+#include "core/project/testing/project_database.h"
 #include "core/text/offset_map.h"
 #include "tests/support/db_dump.h"
 #include "tests/support/test_support.h"
@@ -41,11 +42,11 @@ struct CompareFixture {
     }
     Project &project() { return session->project(); }
     // Every table but the event log: the whole content of the project file.
-    QString dump() { return dumpDatabase(project().databaseForTesting()); }
+    QString dump() { return dumpDatabase(databaseForTesting(project())); }
     // The coders' own work: every table but gold, rejections and the event log.
     QString rawDump()
     {
-        return dumpDatabase(project().databaseForTesting(),
+        return dumpDatabase(databaseForTesting(project()),
             {QStringLiteral("event_log"), QStringLiteral("gold_annotation"),
                 QStringLiteral("gold_source"), QStringLiteral("gold_rejection")});
     }

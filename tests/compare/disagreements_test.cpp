@@ -6,6 +6,7 @@
 #include "core/agreement/disagreements.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/gold_edits.h"
+#include "core/project/testing/project_database.h"
 #include "tests/project/double_coded_project.h"
 #include "tests/project/project_fixture.h"
 #include "tests/support/db_dump.h"
@@ -216,7 +217,7 @@ struct CompareFixture : ProjectFixture {
     }
     QString rawDump()
     {
-        return dumpDatabase(project.databaseForTesting(),
+        return dumpDatabase(databaseForTesting(project),
             {QStringLiteral("event_log"), QStringLiteral("gold_annotation"),
                 QStringLiteral("gold_source"), QStringLiteral("gold_rejection")});
     }
@@ -260,7 +261,7 @@ TEST_CASE("accepting agreed spans and rejecting spans change gold only, and undo
 {
     CompareFixture f;
     const QString raw = f.rawDump();
-    const QString before = dumpDatabase(f.project.databaseForTesting());
+    const QString before = dumpDatabase(databaseForTesting(f.project));
     auto c = compareArticle(f.project, f.f1);
     REQUIRE(c);
     auto agreed = agreedCandidates(*c);
@@ -306,7 +307,7 @@ TEST_CASE("accepting agreed spans and rejecting spans change gold only, and undo
     CHECK(f.rawDump() == raw);
     REQUIRE(f.project.revert(reject));
     REQUIRE(f.project.revert(accept));
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
     REQUIRE(f.project.apply(accept)); // redo keeps the same gold uuids
     CHECK(f.project.goldAnnotations(f.f1)->size() == 1);
 }
@@ -314,13 +315,13 @@ TEST_CASE("accepting agreed spans and rejecting spans change gold only, and undo
 TEST_CASE("accepting spans is all-or-nothing")
 {
     CompareFixture f;
-    const QString before = dumpDatabase(f.project.databaseForTesting());
+    const QString before = dumpDatabase(databaseForTesting(f.project));
     std::vector<GoldCandidate> spans {
         GoldCandidate {AnnotationContent {F::Problem, {0, 40}, {}, {}, {}}, {}},
         GoldCandidate {AnnotationContent {F::Problem, {0, 4000}, {}, {}, {}}, {}}};
     AcceptSpansEdit accept(f.f1, f.lead, spans, {});
     REQUIRE_FALSE(f.project.apply(accept));
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
     AcceptSpansEdit none(f.f1, f.lead, {}, {});
     CHECK_FALSE(f.project.apply(none));
 }

@@ -5,6 +5,7 @@
 #include "copies_fixture.h"
 #include "copy_files.h"
 #include "core/project/article_status_edit.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/schema.h"
 #include "tests/support/db_dump.h"
 
@@ -148,11 +149,10 @@ QStringList everyCell(const QString &path)
 TEST_CASE("a coder copy holds that coder's articles and work and nobody else's")
 {
     CopiesFixture f;
-    const QStringList others =
-        annotationUuidsOf(f.main->databaseForTesting(), QStringLiteral("C02"))
-        + annotationUuidsOf(f.main->databaseForTesting(), QStringLiteral("C03"));
+    const QStringList others = annotationUuidsOf(databaseForTesting(*f.main), QStringLiteral("C02"))
+        + annotationUuidsOf(databaseForTesting(*f.main), QStringLiteral("C03"));
     REQUIRE(others.size() == 5);
-    const QStringList mine = annotationUuidsOf(f.main->databaseForTesting(), QStringLiteral("C01"));
+    const QStringList mine = annotationUuidsOf(databaseForTesting(*f.main), QStringLiteral("C01"));
     REQUIRE(mine.size() == 3);
     auto coders = f.main->coders();
     REQUIRE(coders);
@@ -292,17 +292,17 @@ TEST_CASE("three coder copies merged in every order give the same project")
             CHECK_FALSE(reports[0].alreadyMerged);
             CHECK(reports[0].conflicts == 0);
         }
-        const QString dump = uuidDump(p.databaseForTesting(), kOrderFree);
+        const QString dump = uuidDump(databaseForTesting(p), kOrderFree);
         if (orders == 0)
             first = dump;
         else
             CHECK(dump == first);
 
         // Merging every copy again changes nothing at all, event log included.
-        const QString full = dumpDatabase(p.databaseForTesting(), {});
+        const QString full = dumpDatabase(databaseForTesting(p), {});
         for (const MergeReport &r : mergeInto(p, copies))
             CHECK(r.alreadyMerged);
-        CHECK(dumpDatabase(p.databaseForTesting(), {}) == full);
+        CHECK(dumpDatabase(databaseForTesting(p), {}) == full);
         ++orders;
     } while (std::ranges::next_permutation(order).found);
     CHECK(orders == 6);
@@ -312,7 +312,7 @@ TEST_CASE("three coder copies merged in every order give the same project")
     REQUIRE(QFile::copy(base, together));
     Project p = openProject(together);
     const auto reports = mergeInto(p, {copies[2], copies[0], copies[1]});
-    CHECK(uuidDump(p.databaseForTesting(), kOrderFree) == first);
+    CHECK(uuidDump(databaseForTesting(p), kOrderFree) == first);
 
     // And the merged project holds what the coders did.
     const MergeReport &c01 = reports[1];
@@ -374,7 +374,7 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     CopiesFixture f;
     const QString good = f.handout(QStringLiteral("C01"), QStringLiteral("c01.fourfold"));
     editC01(good);
-    const QString before = dumpDatabase(f.main->databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(*f.main), {});
 
     // 1. An article text changed (the stored hash left as it was).
     const QString tampered = f.dir.filePath(QStringLiteral("tampered.fourfold"));
@@ -385,7 +385,7 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     CHECK(r.error().code == ErrorCode::InvalidInput);
     CHECK(r.error().message.contains(QStringLiteral("The text of article \"f1\"")));
     CHECK(r.error().message.contains(tampered));
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == before);
 
     // 2. Text and hash changed together: still not the project's text.
     const QString rehashed = f.dir.filePath(QStringLiteral("rehashed.fourfold"));
@@ -395,7 +395,7 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     r = CoderCopies::merge(*f.main, {rehashed});
     REQUIRE_FALSE(r);
     CHECK(r.error().message.contains(QStringLiteral("differs from the project's")));
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == before);
 
     // 3. A copy of another project with the same articles and coder pseudonym.
     QTemporaryDir otherDir;
@@ -413,7 +413,7 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     REQUIRE_FALSE(r);
     CHECK(r.error().code == ErrorCode::InvalidInput);
     CHECK(r.error().message.contains(QStringLiteral("a coder copy of another project")));
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == before);
 
     // 4. The same, claiming to be a copy of this project: its articles are not ours.
     auto mainUuid =
@@ -424,7 +424,7 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     {
         QString uuid;
         {
-            auto s = f.main->databaseForTesting().prepare(
+            auto s = databaseForTesting(*f.main).prepare(
                 QStringLiteral("SELECT value FROM project_setting WHERE key = 'project_uuid'"));
             REQUIRE(s);
             REQUIRE(*s->step());
@@ -439,7 +439,7 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     r = CoderCopies::merge(*f.main, {forged});
     REQUIRE_FALSE(r);
     CHECK(r.error().code == ErrorCode::InvalidInput);
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == before);
 
     // 5. An ordinary project file, and a file that is not there.
     r = CoderCopies::merge(*f.main, {otherDir.filePath(QStringLiteral("other.fourfold"))});
@@ -448,7 +448,7 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     r = CoderCopies::merge(*f.main, {f.dir.filePath(QStringLiteral("missing.fourfold"))});
     REQUIRE_FALSE(r);
     CHECK(r.error().code == ErrorCode::NotFound);
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == before);
 
     // 6. Rows of another coder slipped into a copy.
     const QString mixed = f.dir.filePath(QStringLiteral("mixed.fourfold"));
@@ -461,7 +461,7 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     r = CoderCopies::merge(*f.main, {mixed});
     REQUIRE_FALSE(r);
     CHECK(r.error().message.contains(QStringLiteral("people other than its coder")));
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == before);
 
     // 7. A span's quote edited outside Fourfold, and a span beyond its text.
     const QString requoted = f.dir.filePath(QStringLiteral("requoted.fourfold"));
@@ -478,11 +478,11 @@ TEST_CASE("a tampered, foreign or plain project file is refused and the project 
     r = CoderCopies::merge(*f.main, {stretched});
     REQUIRE_FALSE(r);
     CHECK(r.error().message.contains(QStringLiteral("100000")));
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == before);
 
     // The untouched copy still merges.
     REQUIRE(CoderCopies::merge(*f.main, {good}));
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) != before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) != before);
 }
 
 TEST_CASE("an object changed in the copy and in the project keeps the later change and leaves "
@@ -579,9 +579,9 @@ TEST_CASE("an object changed in the copy and in the project keeps the later chan
         answerConflict->mine.value(QStringLiteral("value")).toString() == QStringLiteral("remedy"));
 
     // Merging again adds no second conflict and changes nothing.
-    const QString full = dumpDatabase(f.main->databaseForTesting(), {});
+    const QString full = dumpDatabase(databaseForTesting(*f.main), {});
     CHECK(mergeInto(*f.main, {path})[0].alreadyMerged);
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == full);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == full);
 
     // The lead takes back the project's cause and keeps the copy's evaluation.
     auto bad = CoderCopies::resolve(*f.main, cause.uuid, QStringLiteral("both"));
@@ -608,9 +608,9 @@ TEST_CASE("an object changed in the copy and in the project keeps the later chan
     REQUIRE_FALSE(again);
     CHECK(again.error().code == ErrorCode::NotFound);
     // Settled: the copy merged once more changes nothing.
-    const QString settled = dumpDatabase(f.main->databaseForTesting(), {});
+    const QString settled = dumpDatabase(databaseForTesting(*f.main), {});
     CHECK(mergeInto(*f.main, {path})[0].alreadyMerged);
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == settled);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == settled);
 }
 
 TEST_CASE("two copies for one coder give the same project in either order and lose nothing")
@@ -657,8 +657,8 @@ TEST_CASE("a merge that fails at any step writes nothing")
     CopiesFixture f;
     const QString path = f.handout(QStringLiteral("C01"), QStringLiteral("c01.fourfold"));
     editC01(path);
-    const QString before = dumpDatabase(f.main->databaseForTesting(), {});
-    Database &db = f.main->databaseForTesting();
+    const QString before = dumpDatabase(databaseForTesting(*f.main), {});
+    Database &db = databaseForTesting(*f.main);
     bool succeeded = false;
     for (int failAt = 1; failAt < 500 && !succeeded; ++failAt) {
         int steps = 0;

@@ -6,6 +6,7 @@
 #include "copies_fixture.h"
 #include "copy_files.h"
 #include "core/project/article_status_edit.h"
+#include "core/project/testing/project_database.h"
 #include "tests/support/db_dump.h"
 
 #include <QFile>
@@ -135,7 +136,7 @@ TEST_CASE("Issue 20 item 8: conflicting copies of one coder merge to the same pr
         for (const QStringList &call : order.calls)
             mergeInto(p, call);
         const QString rows = uuidDump(
-            p.databaseForTesting(), kOrderFree + QStringList {QStringLiteral("merge_conflict")});
+            databaseForTesting(p), kOrderFree + QStringList {QStringLiteral("merge_conflict")});
         const QString conflicts = conflictDump(path);
         if (firstRows.isEmpty()) {
             firstRows = rows;
@@ -203,10 +204,10 @@ TEST_CASE("Issue 20 item 8: conflicting copies of one coder merge to the same pr
         CHECK(c02->size() == 1);
 
         // Merging everything again changes nothing at all.
-        const QString full = dumpDatabase(p.databaseForTesting(), {});
+        const QString full = dumpDatabase(databaseForTesting(p), {});
         for (const MergeReport &r : mergeInto(p, {a, b, a2}))
             CHECK(r.alreadyMerged);
-        CHECK(dumpDatabase(p.databaseForTesting(), {}) == full);
+        CHECK(dumpDatabase(databaseForTesting(p), {}) == full);
         auto check = p.check();
         REQUIRE(check);
         CHECK(check->problems == QStringList {});

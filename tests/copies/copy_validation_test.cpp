@@ -4,6 +4,7 @@
 // left as it was (a full dump before and after, event log included).
 #include "copies_fixture.h"
 #include "copy_files.h"
+#include "core/project/testing/project_database.h"
 #include "tests/support/db_dump.h"
 
 #include <QDateTime>
@@ -47,7 +48,7 @@ QString tampered(CopiesFixture &f, const QString &good, const QString &name, con
 // project is exactly as it was.
 void refused(CopiesFixture &f, const QString &path, std::initializer_list<QString> words)
 {
-    const QString before = dumpDatabase(f.main->databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(*f.main), {});
     auto r = CoderCopies::merge(*f.main, {path});
     REQUIRE_FALSE(r);
     INFO(r.error().message.toStdString());
@@ -57,7 +58,7 @@ void refused(CopiesFixture &f, const QString &path, std::initializer_list<QStrin
         INFO(w.toStdString());
         CHECK(r.error().message.contains(w));
     }
-    CHECK(dumpDatabase(f.main->databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(*f.main), {}) == before);
 }
 
 QString isoSecondsFromNow(qint64 seconds)

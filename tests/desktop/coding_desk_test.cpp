@@ -6,6 +6,7 @@
 #include "app/desktop/message_bar.h"
 #include "app/desktop/reading_view.h"
 #include "core/project/project.h"
+#include "core/project/testing/project_database.h"
 #include "core/text/offset_map.h"
 #include "tests/support/test_support.h"
 
@@ -304,7 +305,7 @@ TEST_CASE("a key press and a relabel run a handful of statements")
     w.show();
     const ArticleId article = articleId(w, "emoji-01");
     w.openArticle(article);
-    Database &db = w.session()->project().databaseForTesting();
+    Database &db = databaseForTesting(w.session()->project());
     const TextRange blame = rangeOf(w, article, QStringLiteral("blame the"));
     const TextRange families = rangeOf(w, article, QStringLiteral("Families"));
     const auto statementsOf = [&](const auto &action) {
@@ -351,7 +352,7 @@ TEST_CASE("a span the file cannot take while another program writes stays unsave
     w.show();
     const ArticleId article = articleId(w, "emoji-01");
     w.openArticle(article);
-    w.session()->project().databaseForTesting().setBusyTimeout(50);
+    databaseForTesting(w.session()->project()).setBusyTimeout(50);
     auto other = Database::open(f.path, Database::OpenMode::ReadWrite);
     REQUIRE(other);
     REQUIRE(other->exec(QStringLiteral("BEGIN IMMEDIATE")));

@@ -9,6 +9,7 @@
 #include "app/desktop/frame_card.h"
 #include "app/desktop/item_form.h"
 #include "app/desktop/span_editor.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/database.h"
 #include "tests/project/double_coded_project.h"
 #include "tests/project/project_fixture.h"
@@ -531,7 +532,7 @@ TEST_CASE("the article list reads the same few statements for 6 and for 18 artic
         const Coder coder = coders->front();
         REQUIRE(lead.role == CoderRole::Lead);
         CodingSession asLead(std::move(p.project), lead);
-        Database &db = asLead.project().databaseForTesting();
+        Database &db = databaseForTesting(asLead.project());
         qint64 before = db.statementsRun();
         const std::vector<ArticleRow> all = asLead.articleRows();
         counts[i][0] = db.statementsRun() - before;
@@ -539,7 +540,7 @@ TEST_CASE("the article list reads the same few statements for 6 and for 18 artic
         auto reopened = Project::open(asLead.project().path());
         REQUIRE(reopened);
         CodingSession asCoder(std::move(*reopened), coder);
-        Database &own = asCoder.project().databaseForTesting();
+        Database &own = databaseForTesting(asCoder.project());
         before = own.statementsRun();
         const std::vector<ArticleRow> mine = asCoder.articleRows();
         counts[i][1] = own.statementsRun() - before;

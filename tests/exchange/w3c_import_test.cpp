@@ -1,5 +1,6 @@
 #include "core/exchange/layer_export.h"
 #include "core/exchange/w3c_import.h"
+#include "core/project/testing/project_database.h"
 #include "tests/project/double_coded_project.h"
 #include "tests/scoring/scoring_fixture.h"
 #include "tests/support/db_dump.h"
@@ -144,7 +145,7 @@ TEST_CASE_METHOD(RoundTrip, "the W3C import refuses bad files whole, naming file
         Project fresh = freshProject(
             QStringLiteral("f-%1.fourfold")
                 .arg(QString::fromUtf8(c.name).replace(QLatin1Char(' '), QLatin1Char('-'))));
-        const QString before = test::dumpDatabase(fresh.databaseForTesting());
+        const QString before = test::dumpDatabase(databaseForTesting(fresh));
         const QString path = test::writeFile(dir, QStringLiteral("bad.jsonld"), c.bytes);
         auto r = importW3cAnnotations(fresh, path);
         REQUIRE_FALSE(r);
@@ -158,7 +159,7 @@ TEST_CASE_METHOD(RoundTrip, "the W3C import refuses bad files whole, naming file
             && QByteArray(c.name) != "wrong root")
             CHECK(r.error().line > 1);
         // All-or-nothing: neither spans nor coders were added.
-        CHECK(test::dumpDatabase(fresh.databaseForTesting()) == before);
+        CHECK(test::dumpDatabase(databaseForTesting(fresh)) == before);
     }
 }
 
@@ -182,13 +183,12 @@ TEST_CASE_METHOD(
 {
     // Into the project the spans came from: every annotation is there already (same ids).
     const QString before =
-        test::dumpDatabase(project.databaseForTesting(), {QStringLiteral("event_log")});
+        test::dumpDatabase(databaseForTesting(project), {QStringLiteral("event_log")});
     auto again = importW3cAnnotations(project, exported);
     REQUIRE(again);
     CHECK(again->spans == 0);
     CHECK(again->skipped == 5);
-    CHECK(
-        test::dumpDatabase(project.databaseForTesting(), {QStringLiteral("event_log")}) == before);
+    CHECK(test::dumpDatabase(databaseForTesting(project), {QStringLiteral("event_log")}) == before);
 
     // Into a fresh project twice: the second import finds the same coder, function and range.
     Project fresh = freshProject(QStringLiteral("twice.fourfold"));
@@ -225,7 +225,7 @@ TEST_CASE("a W3C import compiles the same statements for 6 articles as for 24", 
                          .arg(a)
                          .toUtf8();
         target.importJsonl(jsonl);
-        const Database &db = target.project.databaseForTesting();
+        const Database &db = databaseForTesting(target.project);
         const qint64 preparedBefore = db.statementsPrepared();
         const qint64 runBefore = db.statementsRun();
         auto r = importW3cAnnotations(target.project, out + QStringLiteral("/all.jsonld"));

@@ -4,6 +4,7 @@
 // failure the project must hold no run and be unchanged (all-or-nothing, design.md §7).
 #include "core/extract/command_extractor.h"
 #include "core/extract/extractor_runs.h"
+#include "core/project/testing/project_database.h"
 #include "tests/extract/extract_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -32,14 +33,14 @@ struct Fixture : ProjectFixture {
     // Runs `command` as run "r" and requires it to fail leaving the project as it was.
     Error runFails(const QString &command, double timeout = 30)
     {
-        const QString before = dumpDatabase(project.databaseForTesting(), {});
+        const QString before = dumpDatabase(databaseForTesting(project), {});
         CommandExtractor extractor(command, timeout);
         auto run = ExtractorRuns::create(project, extractor, QStringLiteral("r"));
         REQUIRE_FALSE(run);
         auto runs = ExtractorRuns::runs(project);
         REQUIRE(runs);
         CHECK(runs->empty());
-        CHECK(dumpDatabase(project.databaseForTesting(), {}) == before);
+        CHECK(dumpDatabase(databaseForTesting(project), {}) == before);
         return run.error();
     }
 };
@@ -267,7 +268,7 @@ TEST_CASE("external extractor: the input lines follow the protocol")
 TEST_CASE("external extractor: a program that goes silent is stopped at the idle timeout")
 {
     Fixture f;
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
     // No total limit; one second without output stops it.
     CommandExtractor extractor(script("hanging_extractor.py"), 0);
     extractor.setIdleTimeout(1);
@@ -278,7 +279,7 @@ TEST_CASE("external extractor: a program that goes silent is stopped at the idle
         == QStringLiteral("The extractor \"%1\" wrote nothing for 1 s and was stopped; nothing "
                           "was stored.")
                .arg(script("hanging_extractor.py")));
-    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
 }
 
 TEST_CASE("external extractor: a slow program that keeps answering is not stopped")
@@ -328,7 +329,7 @@ TEST_CASE("Issue 20 item 6: an extractor that floods stdout is stopped at the ou
     Fixture f;
     const QString command = QStringLiteral("/bin/sh %1/flooding_extractor.sh stdout")
                                 .arg(QStringLiteral(FOURFOLD_EXTRACT_SCRIPTS));
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
     CommandExtractor extractor(command, 60);
     extractor.setOutputLimits(qint64(1) << 20, qint64(256) << 10);
     auto run = ExtractorRuns::create(f.project, extractor, QStringLiteral("r"));
@@ -339,7 +340,7 @@ TEST_CASE("Issue 20 item 6: an extractor that floods stdout is stopped at the ou
                           "may write; it was stopped and nothing was stored.")
                .arg(command));
     CHECK(ExtractorRuns::runs(f.project)->empty());
-    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
 }
 
 TEST_CASE("Issue 20 item 6: an extractor line beyond the line limit is refused with its line")

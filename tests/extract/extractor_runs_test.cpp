@@ -3,6 +3,7 @@
 // prove nothing was written — the SQLite project's own testing practice).
 #include "core/extract/extractor_runs.h"
 #include "core/extract/position_baseline.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/statement.h"
 #include "tests/extract/extract_fixture.h"
 #include "tests/support/db_dump.h"
@@ -33,7 +34,7 @@ public:
 
 QStringList events(Project &project)
 {
-    auto stmt = project.databaseForTesting().prepare(QStringLiteral(
+    auto stmt = databaseForTesting(project).prepare(QStringLiteral(
         "SELECT action, json_extract(detail, '$.name') FROM event_log WHERE object_type = "
         "'extractor_run' ORDER BY id"));
     REQUIRE(stmt);
@@ -129,14 +130,14 @@ TEST_CASE("runs: an extractor's span outside its article stores nothing")
     bad.article = f.articleId(QStringLiteral("dyke"));
     bad.range = {20, 28};
     fake.spans = {good, bad};
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
     auto r = ExtractorRuns::create(f.project, fake, QStringLiteral("bad"));
     REQUIRE_FALSE(r);
     CHECK(r.error().code == ErrorCode::InvalidInput);
     CHECK(r.error().message
         == QStringLiteral("A span of run \"bad\", [20, 28), does not lie inside article dyke (27 "
                           "code points) or is empty."));
-    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
 }
 
 TEST_CASE("runs: a failure at any SQLite step of storing a run writes nothing")
@@ -144,21 +145,21 @@ TEST_CASE("runs: a failure at any SQLite step of storing a run writes nothing")
     Fixture f;
     auto baseline = PositionBaseline::create();
     REQUIRE(baseline);
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
     int failures = 0;
     for (int n = 1; n < 100; ++n) {
         int steps = 0;
-        f.project.databaseForTesting().setFaultHook(
+        databaseForTesting(f.project).setFaultHook(
             [&] { return ++steps == n ? SQLITE_IOERR : SQLITE_OK; });
         auto r = ExtractorRuns::create(f.project, *baseline, QStringLiteral("p"));
-        f.project.databaseForTesting().setFaultHook({});
+        databaseForTesting(f.project).setFaultHook({});
         if (r) {
             CHECK(ExtractorRuns::spanCount(f.project, r->id) == 3);
             break;
         }
         ++failures;
         CHECK(r.error().code == ErrorCode::Io);
-        REQUIRE(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+        REQUIRE(dumpDatabase(databaseForTesting(f.project), {}) == before);
     }
     // Reading the project, one run row, three spans, one event: well over five steps.
     CHECK(failures > 5);
@@ -263,7 +264,7 @@ TEST_CASE("runs: a malformed span file is refused with file, line and column, no
         INFO(row.content.toStdString());
         Fixture f;
         const QString path = writeFile(f.dir, QStringLiteral("bad.jsonl"), row.content);
-        const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+        const QString before = dumpDatabase(databaseForTesting(f.project), {});
         auto r = ExtractorRuns::importRun(f.project, QStringLiteral("imported"), path);
         REQUIRE_FALSE(r);
         CHECK(r.error().code == ErrorCode::InvalidInput);
@@ -277,7 +278,7 @@ TEST_CASE("runs: a malformed span file is refused with file, line and column, no
             where += QStringLiteral(":%1").arg(row.column);
         CHECK(r.error().message.startsWith(
             where + QStringLiteral(": ") + QString::fromUtf8(row.what)));
-        CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+        CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
     }
 
     Fixture f;

@@ -1,6 +1,7 @@
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/paragraph_role_edit.h"
+#include "core/project/testing/project_database.h"
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -28,7 +29,7 @@ struct EditFixture : ProjectFixture {
         f1 = articleId(QStringLiteral("f1"));
         c1 = addCoder(QStringLiteral("C01"));
     }
-    QString dump() { return dumpDatabase(project.databaseForTesting()); }
+    QString dump() { return dumpDatabase(databaseForTesting(project)); }
 
     AnnotationId add(FramingFunction function, TextRange range, QJsonObject attributes = {})
     {

@@ -1,4 +1,5 @@
 #include "core/project/coding_import.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/codebook_table.h"
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
@@ -61,7 +62,7 @@ TEST_CASE("quote-anchored codings land on the right code points")
 TEST_CASE("a bad codings file names the line and changes nothing")
 {
     CodingFixture f;
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
     struct Case {
         QByteArray second;
         const char *expected;
@@ -113,7 +114,7 @@ TEST_CASE("a bad codings file names the line and changes nothing")
         CHECK(r.error().line == 2);
         CHECK(r.error().message.contains(QString::fromUtf8(c.expected)));
         CHECK(r.error().message.contains(QStringLiteral("codings.jsonl:2")));
-        CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+        CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
     }
 }
 
@@ -205,7 +206,7 @@ TEST_CASE("a codings import compiles the same statements for 40 lines as for 160
             jsonl += "{\"article\":\"f1\",\"coder\":\"L01\",\"gold\":true,\"function\":"
                      "\"problem\",\"quote\":\""
                 + f1.left(k + 1) + "\"}\n";
-        const Database &db = f.project.databaseForTesting();
+        const Database &db = databaseForTesting(f.project);
         const qint64 preparedBefore = db.statementsPrepared();
         const qint64 runBefore = db.statementsRun();
         auto r = f.run(jsonl);
@@ -227,7 +228,7 @@ TEST_CASE("a codings import compiles the same statements for 40 lines as for 160
 TEST_CASE("invalid UTF-8 in a codings file names its line and column and changes nothing")
 {
     CodingFixture f;
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
     auto r = f.run("{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
                    "\"ferry\"}\n"
                    "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
@@ -237,7 +238,7 @@ TEST_CASE("invalid UTF-8 in a codings file names its line and column and changes
     CHECK(r.error().line == 2);
     CHECK(r.error().column == 62);
     CHECK(r.error().message.contains(QStringLiteral("codings.jsonl:2:62")));
-    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
 }
 
 TEST_CASE("importing the same codings file twice adds nothing the second time")
@@ -259,7 +260,7 @@ TEST_CASE("importing the same codings file twice adds nothing the second time")
     CHECK(first->judgements == 1);
     CHECK(first->gold == 1);
     CHECK(first->skipped == 0);
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
 
     auto second = f.run(lines);
     REQUIRE(second);
@@ -268,7 +269,7 @@ TEST_CASE("importing the same codings file twice adds nothing the second time")
     CHECK(second->gold == 0);
     CHECK(second->articlesDone == 0);
     CHECK(second->skipped == 3);
-    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
 
     // A line repeated inside one file is added once.
     CodingFixture g;

@@ -6,6 +6,7 @@
 
 #include "core/project/annotation_edits.h"
 #include "core/project/gold_edits.h"
+#include "core/project/testing/project_database.h"
 #include "tests/project/project_fixture.h"
 
 #include <array>
@@ -60,18 +61,18 @@ struct DoubleCodedProject : ProjectFixture {
     template<typename Work>
     qint64 rowsReadBy(Work &&work)
     {
-        const qint64 before = project.databaseForTesting().rowsRead();
+        const qint64 before = databaseForTesting(project).rowsRead();
         work();
-        return project.databaseForTesting().rowsRead() - before;
+        return databaseForTesting(project).rowsRead() - before;
     }
 
     // Statements run on the project's connection while `work` runs.
     template<typename Work>
     qint64 statementsRunBy(Work &&work)
     {
-        const qint64 before = project.databaseForTesting().statementsRun();
+        const qint64 before = databaseForTesting(project).statementsRun();
         work();
-        return project.databaseForTesting().statementsRun() - before;
+        return databaseForTesting(project).statementsRun() - before;
     }
 };
 

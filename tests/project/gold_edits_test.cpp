@@ -1,5 +1,6 @@
 #include "core/project/annotation_edits.h"
 #include "core/project/gold_edits.h"
+#include "core/project/testing/project_database.h"
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -34,10 +35,10 @@ struct GoldFixture : ProjectFixture {
 TEST_CASE("a lead's gold span keeps its provenance and leaves the raw coding untouched")
 {
     GoldFixture f;
-    const QString rawBefore = dumpDatabase(f.project.databaseForTesting(),
+    const QString rawBefore = dumpDatabase(databaseForTesting(f.project),
         {QStringLiteral("event_log"), QStringLiteral("gold_annotation"),
             QStringLiteral("gold_source")});
-    const QString before = dumpDatabase(f.project.databaseForTesting());
+    const QString before = dumpDatabase(databaseForTesting(f.project));
     // Merged boundaries: the lead narrows the coder's sentence to the attribution itself.
     AdjudicateSpanEdit edit(f.f1, f.lead,
         AnnotationContent {FramingFunction::Cause, {55, 72},
@@ -53,7 +54,7 @@ TEST_CASE("a lead's gold span keeps its provenance and leaves the raw coding unt
     CHECK(g.sources == std::vector<AnnotationId> {f.span});
     CHECK(g.rationale == QStringLiteral("Only the attribution, not who says it."));
     // The coder's own annotation is exactly as it was.
-    CHECK(dumpDatabase(f.project.databaseForTesting(),
+    CHECK(dumpDatabase(databaseForTesting(f.project),
               {QStringLiteral("event_log"), QStringLiteral("gold_annotation"),
                   QStringLiteral("gold_source")})
         == rawBefore);
@@ -64,7 +65,7 @@ TEST_CASE("a lead's gold span keeps its provenance and leaves the raw coding unt
     REQUIRE(f.project.revert(withdraw));
     CHECK(f.project.goldAnnotations(f.f1)->size() == 1);
     REQUIRE(f.project.revert(edit));
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
 }
 
 TEST_CASE("gold is decided by leads only, from spans of the same article")

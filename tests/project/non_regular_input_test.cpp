@@ -5,6 +5,7 @@
 #include "core/io/json_item_stream.h"
 #include "core/io/reliability_table_reader.h"
 #include "core/project/coding_import.h"
+#include "core/project/testing/project_database.h"
 #include "project_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -21,7 +22,7 @@ TEST_CASE("readers refuse a symbolic link to /dev/zero and a folder as not a reg
     REQUIRE(QFile::link(QStringLiteral("/dev/zero"), zero));
     const QString folder = f.dir.filePath(QStringLiteral("folder.csv"));
     REQUIRE(QDir().mkpath(folder));
-    const QString before = dumpDatabase(f.project.databaseForTesting());
+    const QString before = dumpDatabase(databaseForTesting(f.project));
     const auto refused = [](const Error &e, const QString &path) {
         CHECK(e.code == ErrorCode::Io);
         CHECK(e.file == path);
@@ -54,5 +55,5 @@ TEST_CASE("readers refuse a symbolic link to /dev/zero and a folder as not a reg
     file.close();
     CHECK(requireRegularFile(plain));
     CHECK(requireRegularFile(f.dir.filePath(QStringLiteral("missing.csv"))));
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
 }

@@ -6,6 +6,7 @@
 #include "core/project/passphrase.h"
 #include "core/project/people.h"
 #include "core/project/study_design.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/schema.h"
 #include "core/store/statement.h"
 #include "tests/project/project_fixture.h"
@@ -25,7 +26,7 @@ const QString kPass = QStringLiteral("ferry budget 2026");
 // The stored hash of a person, read back through the file (for the checks that look at it).
 QString storedHash(Project &p, const QString &pseudonym)
 {
-    auto db = p.databaseForTesting().prepare(
+    auto db = databaseForTesting(p).prepare(
         QStringLiteral("SELECT passphrase_hash FROM coder WHERE pseudonym = ?1"));
     REQUIRE(db);
     db->bind(1, pseudonym);
@@ -252,7 +253,7 @@ TEST_CASE("Rename disable and enable are undoable edits logged without the name"
     REQUIRE(f.project.assign(f2, c1, Phase::Production));
 
     // The event log names the changes by action and uuid, never by name.
-    auto log = f.project.databaseForTesting().prepare(QStringLiteral(
+    auto log = databaseForTesting(f.project).prepare(QStringLiteral(
         "SELECT group_concat(action || ' ' || detail, ';') FROM event_log WHERE object_type = "
         "'coder'"));
     REQUIRE(log);
@@ -274,7 +275,7 @@ TEST_CASE("Undoing an added person restores the whole file", "[people]")
         {QStringLiteral("Nina New"), QStringLiteral("L02"), CoderRole::Lead, kPass});
     REQUIRE(add);
     // The event log is left out: an undo is logged, not unwritten.
-    auto tables = [&] { return dumpDatabase(f.project.databaseForTesting()); };
+    auto tables = [&] { return dumpDatabase(databaseForTesting(f.project)); };
     const auto before = tables();
     REQUIRE(f.project.apply(**add));
     CHECK(tables() != before);

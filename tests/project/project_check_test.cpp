@@ -1,4 +1,5 @@
 #include "core/project/annotation_edits.h"
+#include "core/project/testing/project_database.h"
 #include "project_fixture.h"
 
 #include <QCryptographicHash>
@@ -39,7 +40,7 @@ TEST_CASE("a healthy project passes every check")
 TEST_CASE("the check finds tampered quotes, spans, texts and hashes")
 {
     CheckFixture f;
-    Database &db = f.project.databaseForTesting();
+    Database &db = databaseForTesting(f.project);
     SECTION("a quote that differs from the text")
     {
         REQUIRE(db.exec(QStringLiteral(

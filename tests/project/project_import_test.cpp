@@ -1,4 +1,5 @@
 #include "core/project/coding_import.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/statement.h"
 #include "core/text/canonical_text.h"
 #include "core/text/offset_map.h"
@@ -80,7 +81,7 @@ TEST_CASE("an import that fails leaves the project exactly as it was")
 {
     ProjectFixture f;
     f.importJsonl(kTwoArticles);
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
 
     SECTION("an id already used by another text")
     {
@@ -126,7 +127,7 @@ TEST_CASE("an import that fails leaves the project exactly as it was")
         CHECK(r.error().code == ErrorCode::Cancelled);
         CHECK(calls == 2);
     }
-    CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
 }
 
 TEST_CASE("fault injection: a failure at any step of an import writes nothing")
@@ -134,14 +135,14 @@ TEST_CASE("fault injection: a failure at any step of an import writes nothing")
     // After SQLite's own test practice: fail the Nth step and prove nothing was written.
     ProjectFixture f;
     const QString path = writeFile(f.dir, QStringLiteral("a.jsonl"), kTwoArticles);
-    const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+    const QString before = dumpDatabase(databaseForTesting(f.project), {});
     int failures = 0;
     for (int n = 1; n < 200; ++n) {
         int steps = 0;
-        f.project.databaseForTesting().setFaultHook(
+        databaseForTesting(f.project).setFaultHook(
             [&] { return ++steps == n ? SQLITE_IOERR : SQLITE_OK; });
         auto r = f.project.importFile(path, ImportOptions {});
-        f.project.databaseForTesting().setFaultHook({});
+        databaseForTesting(f.project).setFaultHook({});
         if (r) {
             // The first n that no longer fails: the import needed fewer than n steps.
             CHECK(r->added.size() == 2);
@@ -149,7 +150,7 @@ TEST_CASE("fault injection: a failure at any step of an import writes nothing")
         }
         ++failures;
         CHECK(r.error().code == ErrorCode::Io);
-        REQUIRE(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+        REQUIRE(dumpDatabase(databaseForTesting(f.project), {}) == before);
     }
     CHECK(failures > 10);
 }
@@ -237,7 +238,7 @@ TEST_CASE("an error on the last line of a large file leaves the project unchange
         INFO((csv ? "CSV" : "JSON Lines"));
         ProjectFixture f;
         f.importJsonl(kTwoArticles);
-        const QString before = dumpDatabase(f.project.databaseForTesting(), {});
+        const QString before = dumpDatabase(databaseForTesting(f.project), {});
         // 3,000 good articles, then a record with a field too few (CSV) or a line that is no
         // JSON object (JSON Lines), read in small chunks: the articles before it were added
         // (the progress saw each) and are undone.
@@ -256,7 +257,7 @@ TEST_CASE("an error on the last line of a large file leaves the project unchange
         // CSV: the header, then 3,000 records of two lines each.
         CHECK(r.error().line == (csv ? 6002 : 3001));
         CHECK(calls == 3000);
-        CHECK(dumpDatabase(f.project.databaseForTesting(), {}) == before);
+        CHECK(dumpDatabase(databaseForTesting(f.project), {}) == before);
     }
 }
 
@@ -300,7 +301,7 @@ TEST_CASE("issue 20 item 10: an import into a damaged project file is refused an
     auto project = Project::open(path);
     REQUIRE(project);
     const QString before =
-        dumpDatabase(project->databaseForTesting(), {QStringLiteral("codebook_version")});
+        dumpDatabase(databaseForTesting(*project), {QStringLiteral("codebook_version")});
     auto imported =
         project->importFile(writeFile(dir, QStringLiteral("b.jsonl"),
                                 "{\"id\":\"n1\",\"title\":\"New\",\"text\":\"A new article.\"}\n"),
@@ -316,6 +317,6 @@ TEST_CASE("issue 20 item 10: an import into a damaged project file is refused an
         Phase::Production);
     REQUIRE_FALSE(codings);
     CHECK(codings.error().code == ErrorCode::Corrupt);
-    CHECK(dumpDatabase(project->databaseForTesting(), {QStringLiteral("codebook_version")})
-        == before);
+    CHECK(
+        dumpDatabase(databaseForTesting(*project), {QStringLiteral("codebook_version")}) == before);
 }

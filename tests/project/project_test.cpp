@@ -1,5 +1,6 @@
 #include "core/project/annotation_edits.h"
 #include "core/project/project.h"
+#include "core/project/testing/project_database.h"
 #include "project_fixture.h"
 
 #include <QFile>
@@ -143,7 +144,7 @@ TEST_CASE("an edit that cannot get the write lock in time fails once and writes 
     f.importJsonl(kTwoArticles);
     const ArticleId f1 = f.articleId(QStringLiteral("f1"));
     const CoderId c1 = f.addCoder(QStringLiteral("C01"));
-    f.project.databaseForTesting().setBusyTimeout(100);
+    databaseForTesting(f.project).setBusyTimeout(100);
     LockHolder other(f.project.path(), 2.0);
     AddAnnotationEdit edit(
         f1, c1, AnnotationContent {FramingFunction::Problem, {0, 9}, {}, {}, {}});

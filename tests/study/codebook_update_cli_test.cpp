@@ -4,6 +4,7 @@
 // file recodes it; and agree counts a value of an older version as the current one recodes it.
 
 #include "core/project/article_status_edit.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/codebook_table.h"
 #include "tests/study/study_fixture.h"
 #include "tests/support/cli_run.h"
@@ -148,7 +149,7 @@ TEST_CASE("Issue 20 item 3: codebook --update refuses wrong types and unknown ke
           "the project")
 {
     PolarityFixture f;
-    const QString before = dumpDatabase(f.project.databaseForTesting());
+    const QString before = dumpDatabase(databaseForTesting(f.project));
     struct Case {
         const char *what;
         std::function<void(QJsonObject &)> edit;
@@ -219,13 +220,13 @@ TEST_CASE("Issue 20 item 3: codebook --update refuses wrong types and unknown ke
         CHECK_FALSE(run.err.contains(QChar(0x1B)));
         CHECK(f.versions() == 1);
     }
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
 }
 
 TEST_CASE("Issue 20 item 3: dropping a polarity value that annotations carry needs a recode")
 {
     PolarityFixture f;
-    const QString before = dumpDatabase(f.project.databaseForTesting());
+    const QString before = dumpDatabase(databaseForTesting(f.project));
 
     // neutral dropped without saying what it counts as: refused, nothing stored.
     const QString dropped = editedCodebook(f, QStringLiteral("dropped.json"), [](QJsonObject &b) {
@@ -239,7 +240,7 @@ TEST_CASE("Issue 20 item 3: dropping a polarity value that annotations carry nee
                        "\"polarity\", which the new version neither lists nor recodes")));
     CHECK(run.err.contains(QStringLiteral("\"recode\": {\"neutral\": \"…\"}")));
     CHECK(f.versions() == 1);
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
 
     // A recoding that leaves another value in use out is refused as well.
     const QString partial = editedCodebook(f, QStringLiteral("partial.json"), [](QJsonObject &b) {
@@ -306,7 +307,7 @@ TEST_CASE("Issue 20 item 3: agree counts a value no version lists or recodes as 
     auto &polarity = book->functions[size_t(FramingFunction::Evaluation)].attributes.front();
     polarity.values = QStringList {QStringLiteral("negative"), QStringLiteral("positive")};
     REQUIRE(store::insertCodebookVersion(
-        f.project.databaseForTesting(), *book, QStringLiteral("old rules")));
+        databaseForTesting(f.project), *book, QStringLiteral("old rules")));
 
     const QJsonObject project = f.agreePolarity();
     const QJsonObject matrix = f.agreeMatrix("unit,C01,C02\n"

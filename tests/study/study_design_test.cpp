@@ -3,6 +3,7 @@
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/study_design.h"
+#include "core/project/testing/project_database.h"
 #include "tests/study/study_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -205,7 +206,7 @@ TEST_CASE("committing a draw records it; a second draw and bad requests change n
     CHECK((*recorded)->coders == d->coders);
     CHECK((*recorded)->advice.minimumValues == 139);
 
-    const auto before = dumpDatabase(f.project.databaseForTesting());
+    const auto before = dumpDatabase(databaseForTesting(f.project));
     auto again = StudyDesign::planDraw(f.project, request(5, 12));
     REQUIRE_FALSE(again);
     CHECK(again.error().code == ErrorCode::Duplicate);
@@ -227,13 +228,13 @@ TEST_CASE("committing a draw records it; a second draw and bad requests change n
     bad = request(3, 1);
     bad.phase = Phase::Production;
     CHECK(StudyDesign::planDraw(f.project, bad).error().code == ErrorCode::InvalidArgument);
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
 
     // A failing plan writes nothing: the second row is a duplicate of the first.
     AssignmentPlan plan {{{QStringLiteral("a20"), QStringLiteral("C04"), Phase::Production},
         {QStringLiteral("a20"), QStringLiteral("C04"), Phase::Production}}};
     CHECK(StudyDesign::commitPlan(f.project, plan).error().code == ErrorCode::Duplicate);
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
 }
 
 TEST_CASE("training and pilot articles stay out of the reliability frame")
@@ -456,7 +457,7 @@ TEST_CASE("a new codebook version has a readable diff; older annotations are fla
     CHECK(StudyDesign::outdatedAnnotations(f.project)->size() == 2);
 
     // Nothing to record, no note, a malformed file: refused, nothing written.
-    const auto before = dumpDatabase(f.project.databaseForTesting());
+    const auto before = dumpDatabase(databaseForTesting(f.project));
     CHECK(StudyDesign::addCodebookVersionFromFile(f.project, path, QStringLiteral("again"), f.lead)
               .error()
               .code
@@ -470,7 +471,7 @@ TEST_CASE("a new codebook version has a readable diff; older annotations are fla
     CHECK(bad.error().code == ErrorCode::InvalidInput);
     CHECK(bad.error().toString().contains(QStringLiteral("broken.json")));
     CHECK(StudyDesign::codebookDiff(f.project, 1, 9).error().code == ErrorCode::NotFound);
-    CHECK(dumpDatabase(f.project.databaseForTesting()) == before);
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
 }
 
 TEST_CASE("training feedback: agreement with the master per function, hand-computed")

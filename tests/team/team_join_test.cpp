@@ -4,6 +4,7 @@
 // (store::portableRows) must come back unchanged through the server.
 
 #include "core/project/project.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/copy_tables.h"
 #include "core/store/project_tables.h"
 #include "core/team/team_project.h"
@@ -77,9 +78,9 @@ TEST_CASE("A coder's working file holds the coder's articles and own codings and
 
     // The coder's objects come back as they were published (same keys, digests and times):
     // two assignments and three spans.
-    CHECK(objectsOf(c1.databaseForTesting(), me).size() == 5);
-    CHECK(objectsOf(c1.databaseForTesting(), me) == objectsOf(p.main->databaseForTesting(), me));
-    auto others = store::rowsOfOtherCoders(c1.databaseForTesting(), me);
+    CHECK(objectsOf(databaseForTesting(c1), me).size() == 5);
+    CHECK(objectsOf(databaseForTesting(c1), me) == objectsOf(databaseForTesting(*p.main), me));
+    auto others = store::rowsOfOtherCoders(databaseForTesting(c1), me);
     REQUIRE(others);
     CHECK(*others == 0);
     // Texts, units and spans are whole: the file's own integrity check finds nothing.
@@ -97,7 +98,7 @@ TEST_CASE("A coder's working file holds the coder's articles and own codings and
     CHECK(article->text == p.text1);
 
     // The file records where it came from, and no password.
-    Database &db = c1.databaseForTesting();
+    Database &db = databaseForTesting(c1);
     CHECK(store::setting(db, TeamProject::pseudonymSettingKey())->value_or(QString()) == "C01");
     const QString server = store::setting(db, TeamProject::serverSettingKey())->value_or(QString());
     CHECK(server.contains(p.db.name));
@@ -127,8 +128,8 @@ TEST_CASE("A lead's working file holds the whole project")
     for (const QString &pseudonym : {QStringLiteral("C01"), QStringLiteral("C02"),
              QStringLiteral("C03"), QStringLiteral("L01")}) {
         const QString uuid = p.uuidOf(pseudonym);
-        CHECK(objectsOf(lead.databaseForTesting(), uuid)
-            == objectsOf(p.main->databaseForTesting(), uuid));
+        CHECK(objectsOf(databaseForTesting(lead), uuid)
+            == objectsOf(databaseForTesting(*p.main), uuid));
     }
     auto gold = lead.goldAnnotations();
     auto goldThere = p.main->goldAnnotations();

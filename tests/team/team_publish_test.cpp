@@ -5,6 +5,7 @@
 // (Appendix A).
 
 #include "core/project/project.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/project_tables.h"
 #include "core/team/team_project.h"
 #include "tests/support/cli_run.h"
@@ -85,17 +86,17 @@ TEST_CASE("Publishing sends every shared row and writes one private password fil
     }
 
     // The project file records the server without the admin's password, and whose file it is.
-    auto server = store::setting(p.main->databaseForTesting(), TeamProject::serverSettingKey());
+    auto server = store::setting(databaseForTesting(*p.main), TeamProject::serverSettingKey());
     REQUIRE(server);
     REQUIRE(server->has_value());
     CHECK((*server)->contains(p.db.name));
     CHECK_FALSE((*server)->contains(QLatin1String("password")));
     auto pseudonym =
-        store::setting(p.main->databaseForTesting(), TeamProject::pseudonymSettingKey());
+        store::setting(databaseForTesting(*p.main), TeamProject::pseudonymSettingKey());
     REQUIRE(pseudonym);
     CHECK(pseudonym->value_or(QString()) == QLatin1String("L01"));
     auto lastChange =
-        store::setting(p.main->databaseForTesting(), TeamProject::lastChangeSettingKey());
+        store::setting(databaseForTesting(*p.main), TeamProject::lastChangeSettingKey());
     REQUIRE(lastChange);
     CHECK(lastChange->value_or(QString()).toLongLong() == p.report.lastChange);
 
@@ -312,7 +313,7 @@ TEST_CASE("A refused publish leaves the server and the credentials folder as the
     CHECK(admin.value(QStringLiteral("SELECT count(*) FROM pg_roles WHERE rolname LIKE '%1\\_%'")
                           .arg(db.name))
         == "2"); // the admin and the role made above
-    auto server = store::setting(f.main->databaseForTesting(), TeamProject::serverSettingKey());
+    auto server = store::setting(databaseForTesting(*f.main), TeamProject::serverSettingKey());
     REQUIRE(server);
     CHECK_FALSE(server->has_value());
 

@@ -7,6 +7,7 @@
 #include "core/project/article_status_edit.h"
 #include "core/project/coder_copies.h"
 #include "core/project/project.h"
+#include "core/project/testing/project_database.h"
 #include "core/store/copy_tables.h"
 #include "core/store/project_tables.h"
 #include "core/team/team_project.h"
@@ -74,7 +75,7 @@ TEST_CASE("Two coders and the lead converge by sync and a second sync changes no
 {
     PublishedProject p;
     // The lead's file must use the server's login of the lead, not the administrator's.
-    REQUIRE(store::setSetting(p.main->databaseForTesting(), TeamProject::serverSettingKey(),
+    REQUIRE(store::setSetting(databaseForTesting(*p.main), TeamProject::serverSettingKey(),
         p.loginOf(QStringLiteral("L01"))));
     Project c1 = joinAs(p, QStringLiteral("C01"));
     Project c2 = joinAs(p, QStringLiteral("C02"));
@@ -116,13 +117,13 @@ TEST_CASE("Two coders and the lead converge by sync and a second sync changes no
     // The lead's file holds each coder's objects exactly as the coder's file does.
     const QString u1 = p.uuidOf(QStringLiteral("C01"));
     const QString u2 = p.uuidOf(QStringLiteral("C02"));
-    CHECK(objectsOf(p.main->databaseForTesting(), u1) == objectsOf(c1.databaseForTesting(), u1));
-    CHECK(objectsOf(p.main->databaseForTesting(), u2) == objectsOf(c2.databaseForTesting(), u2));
+    CHECK(objectsOf(databaseForTesting(*p.main), u1) == objectsOf(databaseForTesting(c1), u1));
+    CHECK(objectsOf(databaseForTesting(*p.main), u2) == objectsOf(databaseForTesting(c2), u2));
     auto counts = p.main->counts();
     REQUIRE(counts);
     CHECK(counts->annotations == 10);
     // The coders never receive each other's work.
-    auto others = store::rowsOfOtherCoders(c1.databaseForTesting(), u1);
+    auto others = store::rowsOfOtherCoders(databaseForTesting(c1), u1);
     REQUIRE(others);
     CHECK(*others == 0);
     auto c1Counts = c1.counts();
@@ -138,7 +139,7 @@ TEST_CASE("Two coders and the lead converge by sync and a second sync changes no
     }
     // Coding time adds up: 30 s more on C01's f1 assignment, once.
     ServerSql sql(p.loginOf(QStringLiteral("L01")));
-    CHECK(objectsOf(p.main->databaseForTesting(), u1) == objectsOf(c1.databaseForTesting(), u1));
+    CHECK(objectsOf(databaseForTesting(*p.main), u1) == objectsOf(databaseForTesting(c1), u1));
     CHECK(sql.value(QStringLiteral("SELECT sum(active_seconds) FROM fourfold.assignment WHERE "
                                    "coder = '%1'")
                         .arg(u1))
@@ -148,7 +149,7 @@ TEST_CASE("Two coders and the lead converge by sync and a second sync changes no
 TEST_CASE("A span changed on both sides keeps the later version and records a conflict")
 {
     PublishedProject p;
-    REQUIRE(store::setSetting(p.main->databaseForTesting(), TeamProject::serverSettingKey(),
+    REQUIRE(store::setSetting(databaseForTesting(*p.main), TeamProject::serverSettingKey(),
         p.loginOf(QStringLiteral("L01"))));
     Project c1 = joinAs(p, QStringLiteral("C01"));
     const CoderId me = idOf(c1, QStringLiteral("C01"));
