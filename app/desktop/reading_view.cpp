@@ -65,7 +65,7 @@ QString roleLabel(ParagraphRole role)
     return {};
 }
 
-quint64 rangeKey(const TextRange &r16)
+quint64 rangeKey(const Utf16Range &r16)
 {
     return (quint64(r16.start) << 32) | quint64(r16.end);
 }
@@ -130,7 +130,7 @@ void ReadingView::setArticle(const Article &article)
     m_paragraphStarts16.clear();
     m_paragraphRoles.clear();
     for (const Paragraph &paragraph : m_article.paragraphs) {
-        const TextRange r16 = m_map.utf16Range(paragraph.range);
+        const Utf16Range r16 = m_map.utf16Range(paragraph.range);
         if (r16.start < 0)
             continue;
         m_paragraphStarts16.push_back(r16.start);
@@ -160,7 +160,7 @@ void ReadingView::setSpans(const std::vector<Annotation> &spans)
             continue;
         // Every stored span lies in its text (the store checks it, `check` verifies it); one that
         // does not is left undrawn rather than drawn wrong.
-        const TextRange r16 = m_map.utf16Range(a.content.range);
+        const Utf16Range r16 = m_map.utf16Range(a.content.range);
         if (!FOURFOLD_SOFT_ASSERT(lcDesktop(), r16.start >= 0 && !r16.isEmpty()))
             continue;
         m_spans.push_back({a.id, a.content.function, a.content.range, r16});
@@ -239,7 +239,7 @@ TextRange ReadingView::selectionRange(bool exact) const
     if (!cursor.hasSelection())
         return {-1, -1};
     const TextRange raw =
-        m_map.codePointRangeFromUtf16(cursor.selectionStart(), cursor.selectionEnd());
+        m_map.codePointRange(Utf16Range {cursor.selectionStart(), cursor.selectionEnd()});
     if (raw.start < 0 || raw.isEmpty())
         return {-1, -1};
     // A span must hold at least part of a word token; white space alone is no span.
@@ -257,7 +257,7 @@ TextRange ReadingView::selectionRange(bool exact) const
 
 void ReadingView::setTextSelection(const TextRange &codePoints)
 {
-    const TextRange r16 = m_map.utf16Range(codePoints);
+    const Utf16Range r16 = m_map.utf16Range(codePoints);
     QTextCursor cursor = textCursor();
     if (r16.start < 0) {
         cursor.clearSelection();
@@ -847,7 +847,7 @@ int ReadingView::setSearchHighlight(const QString &query)
             continue;
         for (qsizetype at = text.indexOf(term, 0, Qt::CaseInsensitive); at >= 0;
              at = text.indexOf(term, at + term.size(), Qt::CaseInsensitive))
-            m_searchHits.push_back(TextRange {at, at + term.size()});
+            m_searchHits.push_back(Utf16Range {at, at + term.size()});
     }
     updateEmphasis();
     return int(m_searchHits.size());
@@ -856,7 +856,7 @@ int ReadingView::setSearchHighlight(const QString &query)
 void ReadingView::updateEmphasis()
 {
     QList<QTextEdit::ExtraSelection> selections;
-    for (const TextRange &hit : m_searchHits) {
+    for (const Utf16Range &hit : m_searchHits) {
         QTextEdit::ExtraSelection mark;
         mark.cursor = QTextCursor(document());
         mark.cursor.setPosition(int(hit.start));
@@ -870,7 +870,7 @@ void ReadingView::updateEmphasis()
     }
     const Span *span = spanById(m_drag.active ? m_drag.id : m_selected);
     if (span) {
-        const TextRange r16 = m_drag.active ? m_map.utf16Range(m_drag.preview) : span->range16;
+        const Utf16Range r16 = m_drag.active ? m_map.utf16Range(m_drag.preview) : span->range16;
         if (r16.start >= 0) {
             QTextEdit::ExtraSelection tint;
             tint.cursor = QTextCursor(document());
@@ -919,7 +919,7 @@ qreal ReadingView::laneY(qreal lineBottom, int lane) const
     return std::floor(lineBottom + m_metrics.gap + m_metrics.pitch * (lane + 0.5));
 }
 
-const ReadingView::Geometry &ReadingView::geometry(const TextRange &range16) const
+const ReadingView::Geometry &ReadingView::geometry(const Utf16Range &range16) const
 {
     if (m_geometryWidth != viewport()->width()) {
         m_geometry.clear();
@@ -1003,7 +1003,7 @@ void ReadingView::addPieces(const QTextBlock &block, const QTextLine &line, qint
         pieces.push_back({origin.x() + x1, origin.x() + x2, top, bottom, key});
 }
 
-ReadingView::Geometry ReadingView::computeGeometry(const TextRange &range16) const
+ReadingView::Geometry ReadingView::computeGeometry(const Utf16Range &range16) const
 {
     Geometry g;
     QTextDocument *doc = document();
@@ -1059,7 +1059,7 @@ ReadingView::Geometry ReadingView::computeGeometry(const TextRange &range16) con
     return g;
 }
 
-TextRange ReadingView::visibleRange16(const QRect &viewportRect) const
+Utf16Range ReadingView::visibleRange16(const QRect &viewportRect) const
 {
     const QAbstractTextDocumentLayout *layout = document()->documentLayout();
     const qreal dy = verticalScrollBar()->value();
@@ -1078,7 +1078,7 @@ TextRange ReadingView::visibleRange16(const QRect &viewportRect) const
         b.isValid() ? b.position() + b.length() : document()->characterCount()};
 }
 
-std::vector<const ReadingView::Span *> ReadingView::spansIn(const TextRange &range16) const
+std::vector<const ReadingView::Span *> ReadingView::spansIn(const Utf16Range &range16) const
 {
     std::vector<const Span *> out;
     for (const Span &span : m_spans) {
@@ -1148,13 +1148,13 @@ void ReadingView::paintEvent(QPaintEvent *e)
     p.translate(offset);
     const QRectF clip = QRectF(e->rect()).translated(-offset);
     p.setClipRect(clip);
-    const TextRange visible = visibleRange16(e->rect());
+    const Utf16Range visible = visibleRange16(e->rect());
     paintRoleLabels(p, visible);
     paintLanes(p, spansIn(visible), clip);
     paintSelection(p);
 }
 
-void ReadingView::paintRoleLabels(QPainter &p, const TextRange &visible16)
+void ReadingView::paintRoleLabels(QPainter &p, const Utf16Range &visible16)
 {
     p.setFont(m_metrics.labelFont);
     p.setPen(palette().color(QPalette::PlaceholderText));

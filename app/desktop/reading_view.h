@@ -6,7 +6,8 @@
 //
 // Positions in this class's API are half-open code-point ranges (TextRange) into the canonical
 // text, as everywhere in Fourfold; the view converts to and from Qt's UTF-16 positions with
-// OffsetMap only (design.md §3).
+// OffsetMap only (design.md §3), and holds those as Utf16Range, a type of its own, so that a
+// UTF-16 position given where a code point is meant does not compile.
 //
 // Keys (while the view has focus; they take precedence over window shortcuts):
 //   1-4                with a text selection: create a span of that function, snapped to whole
@@ -130,13 +131,13 @@ protected:
     void contextMenuEvent(QContextMenuEvent *e) override;
 
 private:
-    std::vector<TextRange> m_searchHits; // UTF-16 ranges of search hits
+    std::vector<Utf16Range> m_searchHits; // UTF-16 ranges of search hits
     // A span as drawn: its function and both position units.
     struct Span {
         AnnotationId id;
         FramingFunction function = FramingFunction::Problem;
         TextRange range; // code points
-        TextRange range16; // UTF-16 positions in the document
+        Utf16Range range16; // UTF-16 positions in the document
     };
     // One visual piece of a range on one text line, in document coordinates.
     struct Piece {
@@ -197,19 +198,19 @@ private:
     const Span *spanById(AnnotationId id) const;
     QColor laneColour(FramingFunction f) const { return m_laneColours[std::size_t(f)]; }
     qreal laneY(qreal lineBottom, int lane) const;
-    const Geometry &geometry(const TextRange &range16) const;
-    Geometry computeGeometry(const TextRange &range16) const;
+    const Geometry &geometry(const Utf16Range &range16) const;
+    Geometry computeGeometry(const Utf16Range &range16) const;
     void addPieces(const QTextBlock &block, const QTextLine &line, qint64 from16, qint64 to16,
         std::vector<Piece> &pieces) const;
     bool isRtlAt(qint64 pos16, const QTextBlock &block) const;
-    TextRange visibleRange16(const QRect &viewportRect) const;
-    std::vector<const Span *> spansIn(const TextRange &range16) const;
+    Utf16Range visibleRange16(const QRect &viewportRect) const;
+    std::vector<const Span *> spansIn(const Utf16Range &range16) const;
     QRectF badgeRect(const Geometry &g) const;
     std::vector<Badge> layoutBadges(const std::vector<const Span *> &spans) const;
 
     void paintLanes(QPainter &p, const std::vector<const Span *> &visible, const QRectF &clip);
     void paintSelection(QPainter &p);
-    void paintRoleLabels(QPainter &p, const TextRange &visible16);
+    void paintRoleLabels(QPainter &p, const Utf16Range &visible16);
 
     Hit hitTest(const QPoint &viewportPos) const;
     qint64 codePointAt(const QPoint &viewportPos) const;

@@ -37,7 +37,7 @@ std::vector<TextRange> mergedRanges(const std::vector<Iob2Span> &spans, FramingF
 // The token's text in UTF-8, "_" for none.
 QByteArray tokenText(const QString &text, const OffsetMap &map, const TextRange &token)
 {
-    const TextRange u = map.utf16Range(token);
+    const Utf16Range u = map.utf16Range(token);
     if (u.start < 0 || u.isEmpty())
         return QByteArrayLiteral("_");
     QByteArray t = QStringView(text).mid(u.start, u.length()).toUtf8();

@@ -446,10 +446,10 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
                 w.created = sp.createdAt;
                 if (text) {
                     const QString &t = current->text;
-                    const TextRange u = map->utf16Range(sp.range);
-                    const TextRange before = map->utf16Range(
+                    const Utf16Range u = map->utf16Range(sp.range);
+                    const Utf16Range before = map->utf16Range(
                         TextRange {std::max<qint64>(0, sp.range.start - 32), sp.range.start});
-                    const TextRange after = map->utf16Range(TextRange {
+                    const Utf16Range after = map->utf16Range(TextRange {
                         sp.range.end, std::min(map->codePointCount(), sp.range.end + 32)});
                     w.quote = t.mid(u.start, u.length());
                     w.prefix = t.mid(before.start, before.length());

@@ -103,7 +103,7 @@ std::vector<ExtractedSpan> CueBaseline::sentenceSpans(
     for (auto it = first; it != article.tokens.end() && it->start < sentence.end; ++it) {
         if (!sentence.contains(*it))
             continue;
-        const TextRange utf16 = map.utf16Range(*it);
+        const Utf16Range utf16 = map.utf16Range(*it);
         const QString token = article.text.mid(utf16.start, utf16.length());
         if (isWordToken(token))
             words.append(token);

@@ -248,7 +248,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             }
             AnnotationContent content;
             content.function = *function;
-            content.range = article.map.codePointRangeFromUtf16(at, at + quote.size());
+            content.range = article.map.codePointRange(Utf16Range {at, at + quote.size()});
             content.attributes = o.value(QLatin1String("attributes")).toObject();
             content.note = o.value(QLatin1String("note")).toString();
             if (o.value(QLatin1String("confidence")).isDouble())

@@ -42,7 +42,7 @@ RunErrorKind kindOf(reliability::SpanOutcome outcome, const RunSpanOutcome &o)
 
 QString quoteOf(const OffsetMap &map, const QString &text, const TextRange &range)
 {
-    const TextRange r16 = map.utf16Range(range);
+    const Utf16Range r16 = map.utf16Range(range);
     return text.mid(r16.start, r16.length());
 }
 

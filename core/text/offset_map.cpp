@@ -115,20 +115,20 @@ qint64 OffsetMap::codePointFromUtf8(qint64 utf8) const
     return m_utf8Wide.empty() ? utf8 : codePointFromUnits(m_utf8Wide, utf8);
 }
 
-TextRange OffsetMap::utf16Range(const TextRange &codePoints) const
+Utf16Range OffsetMap::utf16Range(const TextRange &codePoints) const
 {
     if (!codePoints.isValid() || codePoints.end > m_codePointCount)
         return {-1, -1};
     return {utf16FromCodePoint(codePoints.start), utf16FromCodePoint(codePoints.end)};
 }
 
-TextRange OffsetMap::codePointRangeFromUtf16(qint64 start16, qint64 end16) const
+TextRange OffsetMap::codePointRange(const Utf16Range &utf16) const
 {
-    if (start16 < 0 || end16 < start16 || end16 > m_utf16Length)
+    if (utf16.start < 0 || utf16.end < utf16.start || utf16.end > m_utf16Length)
         return {-1, -1};
-    const qint64 start = codePointFromUtf16(start16);
-    qint64 end = codePointFromUtf16(end16);
-    if (utf16FromCodePoint(end) < end16)
+    const qint64 start = codePointFromUtf16(utf16.start);
+    qint64 end = codePointFromUtf16(utf16.end);
+    if (utf16FromCodePoint(end) < utf16.end)
         ++end;
     return {start, end};
 }

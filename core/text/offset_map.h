@@ -4,6 +4,7 @@
 // converts offsets (design.md §3).
 
 #include "core/model/text_range.h"
+#include "core/text/utf16_range.h"
 
 #include <QString>
 
@@ -37,8 +38,8 @@ public:
 
     // Range conversions; the start rounds down and the end rounds up to a whole code point.
     // An invalid or out-of-bounds range gives an empty range {-1, -1}.
-    TextRange utf16Range(const TextRange &codePoints) const;
-    TextRange codePointRangeFromUtf16(qint64 start16, qint64 end16) const;
+    Utf16Range utf16Range(const TextRange &codePoints) const;
+    TextRange codePointRange(const Utf16Range &utf16) const;
 
     // The substring of `text` at a code-point range, walking `text` in O(range end); an invalid
     // or out-of-bounds range gives an empty string.

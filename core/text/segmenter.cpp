@@ -298,7 +298,7 @@ Result<Segmentation> segmentText(const QString &text, const QString &languageTag
     icu::BreakIterator &wordIt = *segmenters->word;
 
     for (const auto &[paraStart, paraEnd] : paragraphs16(s, n)) {
-        result.paragraphs.push_back(map.codePointRangeFromUtf16(paraStart, paraEnd));
+        result.paragraphs.push_back(map.codePointRange(Utf16Range {paraStart, paraEnd}));
 
         const std::u16string_view paragraph(
             f + paraStart, static_cast<size_t>(paraEnd - paraStart));
@@ -315,7 +315,7 @@ Result<Segmentation> segmentText(const QString &text, const QString &languageTag
             sentenceStart = boundary;
             if (start == end)
                 continue;
-            result.sentences.push_back(map.codePointRangeFromUtf16(start, end));
+            result.sentences.push_back(map.codePointRange(Utf16Range {start, end}));
 
             // Words per sentence, so that no token can cross a sentence boundary.
             setText(wordIt, f + start, end - start, status);
@@ -324,7 +324,7 @@ Result<Segmentation> segmentText(const QString &text, const QString &languageTag
                  wordEnd = wordIt.next()) {
                 if (!isInvisibleSegment(f, start + wordStart, start + wordEnd)) {
                     result.tokens.push_back(
-                        map.codePointRangeFromUtf16(start + wordStart, start + wordEnd));
+                        map.codePointRange(Utf16Range {start + wordStart, start + wordEnd}));
                 }
                 wordStart = wordEnd;
             }
@@ -362,7 +362,7 @@ std::vector<qint64> graphemeBoundaries(const QString &text)
 TextRange snapToGraphemes(const QString &text, const TextRange &range)
 {
     const OffsetMap map(text);
-    const TextRange range16 = map.utf16Range(range);
+    const Utf16Range range16 = map.utf16Range(range);
     if (range16.start < 0)
         return {-1, -1};
     icu::BreakIterator *it = graphemeIterator();
@@ -378,7 +378,7 @@ TextRange snapToGraphemes(const QString &text, const TextRange &range)
         start = it->preceding(start);
     if (!it->isBoundary(end))
         end = it->following(end);
-    return map.codePointRangeFromUtf16(start, end);
+    return map.codePointRange(Utf16Range {start, end});
 }
 
 TextRange snapToWords(const QString &text, const Segmentation &segmentation, const TextRange &range)

@@ -65,7 +65,7 @@ TextRange rangeOf(MainWindow &w, ArticleId article, const QString &needle)
     REQUIRE(a);
     const qsizetype at = a->text.indexOf(needle);
     REQUIRE(at >= 0);
-    return OffsetMap(a->text).codePointRangeFromUtf16(at, at + needle.size());
+    return OffsetMap(a->text).codePointRange(Utf16Range {at, at + needle.size()});
 }
 
 } // namespace

@@ -82,20 +82,20 @@ TEST_CASE("OffsetMap rounds positions inside a code point down, range ends up")
         CHECK(map.codePointFromUtf8(byte) == 1);
     CHECK(map.codePointFromUtf8(5) == 2);
 
-    CHECK(map.utf16Range(TextRange {1, 2}) == TextRange {1, 3});
-    CHECK(map.utf16Range(TextRange {0, 3}) == TextRange {0, 4});
-    CHECK(map.codePointRangeFromUtf16(2, 3) == TextRange {1, 2}); // start rounds down
-    CHECK(map.codePointRangeFromUtf16(1, 2) == TextRange {1, 2}); // end rounds up
-    CHECK(map.codePointRangeFromUtf16(2, 2) == TextRange {1, 2});
-    CHECK(map.codePointRangeFromUtf16(3, 3) == TextRange {2, 2});
-    CHECK(map.codePointRangeFromUtf16(0, 4) == TextRange {0, 3});
+    CHECK(map.utf16Range(TextRange {1, 2}) == Utf16Range {1, 3});
+    CHECK(map.utf16Range(TextRange {0, 3}) == Utf16Range {0, 4});
+    CHECK(map.codePointRange(Utf16Range {2, 3}) == TextRange {1, 2}); // start rounds down
+    CHECK(map.codePointRange(Utf16Range {1, 2}) == TextRange {1, 2}); // end rounds up
+    CHECK(map.codePointRange(Utf16Range {2, 2}) == TextRange {1, 2});
+    CHECK(map.codePointRange(Utf16Range {3, 3}) == TextRange {2, 2});
+    CHECK(map.codePointRange(Utf16Range {0, 4}) == TextRange {0, 3});
 
-    CHECK(map.utf16Range(TextRange {2, 1}) == TextRange {-1, -1});
-    CHECK(map.utf16Range(TextRange {0, 4}) == TextRange {-1, -1});
-    CHECK(map.utf16Range(TextRange {-1, 1}) == TextRange {-1, -1});
-    CHECK(map.codePointRangeFromUtf16(3, 2) == TextRange {-1, -1});
-    CHECK(map.codePointRangeFromUtf16(0, 5) == TextRange {-1, -1});
-    CHECK(map.codePointRangeFromUtf16(-1, 1) == TextRange {-1, -1});
+    CHECK(map.utf16Range(TextRange {2, 1}) == Utf16Range {-1, -1});
+    CHECK(map.utf16Range(TextRange {0, 4}) == Utf16Range {-1, -1});
+    CHECK(map.utf16Range(TextRange {-1, 1}) == Utf16Range {-1, -1});
+    CHECK(map.codePointRange(Utf16Range {3, 2}) == TextRange {-1, -1});
+    CHECK(map.codePointRange(Utf16Range {0, 5}) == TextRange {-1, -1});
+    CHECK(map.codePointRange(Utf16Range {-1, 1}) == TextRange {-1, -1});
 
     CHECK(OffsetMap::slice(text, TextRange {1, 2}) == QStringLiteral("😀"));
     CHECK(OffsetMap::slice(text, TextRange {2, 3}) == QStringLiteral("b"));
@@ -203,9 +203,9 @@ TEST_CASE("OffsetMap round-trips and agrees with Qt's encoders on random strings
             if (a > b)
                 std::swap(a, b);
             const TextRange range {qint64(a), qint64(b)};
-            const TextRange range16 = map.utf16Range(range);
+            const Utf16Range range16 = map.utf16Range(range);
             CHECK(range16.length() == fromUcs4(cps, a, b - a).size());
-            CHECK(map.codePointRangeFromUtf16(range16.start, range16.end) == range);
+            CHECK(map.codePointRange(range16) == range);
             CHECK(OffsetMap::slice(text, range) == fromUcs4(cps, a, b - a));
             CHECK(text.mid(range16.start, range16.length()) == fromUcs4(cps, a, b - a));
         }

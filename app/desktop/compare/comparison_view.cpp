@@ -103,12 +103,12 @@ void ComparisonView::relayout()
     QTextOption option;
     option.setWrapMode(QTextOption::WordWrap);
     option.setTextDirection(Qt::LeftToRight);
-    std::vector<TextRange> ranges;
+    std::vector<Utf16Range> ranges;
     for (const Paragraph &p : m_article.paragraphs)
         ranges.push_back(m_map.utf16Range(p.range));
     if (ranges.empty() && !m_article.text.isEmpty())
-        ranges.push_back(TextRange {0, m_article.text.size()});
-    for (const TextRange &r16 : ranges) {
+        ranges.push_back(Utf16Range {0, m_article.text.size()});
+    for (const Utf16Range &r16 : ranges) {
         Para para;
         para.range16 = r16;
         para.layout = std::make_unique<QTextLayout>(
@@ -135,7 +135,7 @@ void ComparisonView::relayout()
     verticalScrollBar()->setRange(0, std::max(0, int(m_contentHeight) - viewport()->height()));
 }
 
-std::vector<QRectF> ComparisonView::lineRects(const TextRange &range16) const
+std::vector<QRectF> ComparisonView::lineRects(const Utf16Range &range16) const
 {
     std::vector<QRectF> out;
     const qreal textHeight = QFontMetricsF(font()).height();

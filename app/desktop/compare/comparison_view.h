@@ -5,7 +5,8 @@
 // function's colour and line pattern (function_style.h). Passages with a disagreement carry a
 // mark in the left gutter (its kind as a symbol); the current passage is banded across every
 // column; a coder without a span in a passage has the passage hatched in their column.
-// Positions in this class's API are code-point ranges (TextRange) and passage indices.
+// Positions in this class's API are code-point ranges (TextRange) and passage indices; inside,
+// Qt's UTF-16 positions are Utf16Range, converted with OffsetMap.
 
 #include "core/agreement/disagreements.h"
 #include "core/model/article.h"
@@ -61,7 +62,7 @@ protected:
 
 private:
     struct Para {
-        TextRange range16; // into the article's UTF-16 text
+        Utf16Range range16; // into the article's UTF-16 text
         std::unique_ptr<QTextLayout> layout;
         qreal top = 0; // in content coordinates
         qreal height = 0;
@@ -73,7 +74,7 @@ private:
     qreal lineAdvance() const;
     qreal lanePitch() const;
     // Rectangles (content coordinates, relative to a column's left edge) covering `range16`.
-    std::vector<QRectF> lineRects(const TextRange &range16) const;
+    std::vector<QRectF> lineRects(const Utf16Range &range16) const;
     int passageAt(qint64 pos16) const;
     QString kindSymbols(const Passage &p) const;
     QString passageToolTip(const Passage &p) const;
@@ -82,7 +83,7 @@ private:
     OffsetMap m_map {QString()};
     std::vector<Column> m_columns;
     std::vector<Passage> m_passages;
-    std::vector<TextRange> m_passages16;
+    std::vector<Utf16Range> m_passages16;
     int m_current = -1;
     std::vector<Para> m_paragraphs;
     qreal m_contentHeight = 0;
