@@ -2153,6 +2153,27 @@
     </message>
 </context>
 <context>
+    <name>FramesJob</name>
+    <message>
+        <location filename="../app/desktop/frames/frames_job.cpp" line="18"/>
+        <source>The computation was cancelled.</source>
+        <translation>Die Berechnung wurde abgebrochen.</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/frames/frames_job.cpp" line="35"/>
+        <source>The layer %1 holds %n article(s); frames need at least 3.</source>
+        <translation>
+            <numerusform>Die Ebene %1 enthält %n Artikel; Frames brauchen mindestens 3.</numerusform>
+            <numerusform>Die Ebene %1 enthält %n Artikel; Frames brauchen mindestens 3.</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_job.cpp" line="57"/>
+        <source>%1: %2</source>
+        <translation>%1: %2</translation>
+    </message>
+</context>
+<context>
     <name>FunctionStyle</name>
     <message>
         <location filename="../app/desktop/function_style.cpp" line="30"/>
@@ -2678,6 +2699,11 @@
         <source>The project file %1 is damaged, so nothing was added to it; `fourfold-cli check` lists the damage. Restore it from a backup.</source>
         <translation>Die Projektdatei %1 ist beschädigt, daher wurde ihr nichts hinzugefügt; `fourfold-cli check` listet die Schäden auf. Stellen Sie sie aus einer Sicherung wieder her.</translation>
     </message>
+    <message>
+        <location filename="../core/store/project_tables.cpp" line="289"/>
+        <source>foreign_key_check: row %1 of %2 refers to a missing row of %3</source>
+        <translation>foreign_key_check: Zeile %1 von %2 verweist auf eine fehlende Zeile von %3</translation>
+    </message>
 </context>
 <context>
     <name>ProjectText</name>
@@ -2772,6 +2798,14 @@
         <location filename="../core/agreement/project_units.cpp" line="474"/>
         <source>the codebook has no attribute &quot;%1&quot; for %2.</source>
         <translation>das Codebuch hat kein Merkmal „%1“ für %2.</translation>
+    </message>
+</context>
+<context>
+    <name>RangeBlob</name>
+    <message>
+        <location filename="../core/store/range_blob.cpp" line="24"/>
+        <source>A stored list of text ranges is damaged (%1 bytes).</source>
+        <translation>Eine gespeicherte Liste von Textbereichen ist beschädigt (%1 Bytes).</translation>
     </message>
 </context>
 <context>
@@ -5826,7 +5860,7 @@
     <message>
         <location filename="../app/cli/command_info.cpp" line="116"/>
         <source>Near copies  %1 article(s) a near copy of an older one (%2 pair(s))</source>
-        <translation>Beinahe-Kopien %1 Artikel sind Beinahe-Kopie eines älteren (%2 Paar(e))</translation>
+        <translation>Kopien        %1 Artikel sind Beinahe-Kopie eines älteren (%2 Paar(e))</translation>
     </message>
     <message>
         <location filename="../app/cli/command_info.cpp" line="120"/>
@@ -6655,24 +6689,6 @@
     </message>
 </context>
 <context>
-    <name>fourfold</name>
-    <message>
-        <location filename="../app/desktop/frames/frames_job.cpp" line="18"/>
-        <source>The computation was cancelled.</source>
-        <translation>Die Berechnung wurde abgebrochen.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/frames/frames_job.cpp" line="35"/>
-        <source>The layer %1 holds %n article(s); frames need at least 3.</source>
-        <translation>Die Ebene %1 enthält %n Artikel; Frames brauchen mindestens 3.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/frames/frames_job.cpp" line="55"/>
-        <source>%1: %2</source>
-        <translation>%1: %2</translation>
-    </message>
-</context>
-<context>
     <name>fourfold::ArticleListModel</name>
     <message>
         <location filename="../app/desktop/article_list_model.cpp" line="50"/>
@@ -7240,52 +7256,52 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::ComparisonView</name>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="34"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="35"/>
         <source>Coders side by side</source>
         <translation>Codierende nebeneinander</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="193"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="187"/>
         <source>only one coder has a span here</source>
         <translation>nur eine codierende Person hat hier eine Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="194"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="188"/>
         <source>not every coder has a span here</source>
         <translation>nicht alle Codierenden haben hier eine Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="196"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="190"/>
         <source>different functions</source>
         <translation>unterschiedliche Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="198"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="192"/>
         <source>different boundaries</source>
         <translation>unterschiedliche Grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="200"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="194"/>
         <source>different attributes</source>
         <translation>unterschiedliche Merkmale</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="201"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="195"/>
         <source>The coders agree here.</source>
         <translation>Die Codierenden stimmen hier überein.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="202"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="196"/>
         <source>Disagreement: %1.</source>
         <translation>Abweichung: %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="202"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="196"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="204"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="198"/>
         <source>Decided.</source>
         <translation>Entschieden.</translation>
     </message>
@@ -8314,134 +8330,135 @@ Beinahe-Kopie von %2</translation>
         <translation>Ward-Baum: die letzten %1 Fusionen (jedes Blatt: seine Anzahl Artikel; gestrichelt: der Schnitt in das gewählte k)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="173"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="174"/>
         <source>Choosing &amp;k</source>
         <translation>Wahl von &amp;k</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="183"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="184"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="184"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="185"/>
         <source>Element profile of each frame</source>
         <translation>Elementprofil jedes Frames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="186"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="187"/>
         <source>Share of each frame&apos;s articles holding the element, beside the share in all articles; bold: the element characterises the frame (adjusted residual above 1.96).</source>
         <translation>Anteil der Artikel jedes Frames, die das Element enthalten, neben dem Anteil an allen Artikeln; fett: das Element kennzeichnet den Frame (standardisiertes Residuum über 1.96).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="193"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="194"/>
         <source>F&amp;rames</source>
         <translation>F&amp;rames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="198"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="199"/>
         <source>By outlet</source>
         <translation>Nach Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="199"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="200"/>
         <source>By month</source>
         <translation>Nach Monat</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="211"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="212"/>
         <source>By &amp;outlet and month</source>
         <translation>Nach &amp;Medium und Monat</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="218"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="219"/>
         <source>Frame</source>
         <translation>Frame</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="219"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="220"/>
         <source>Fr&amp;ame:</source>
         <translation>Fr&amp;ame:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="223"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="224"/>
         <source>Double-click an article to open it on the desk.</source>
         <translation>Doppelklicken Sie auf einen Artikel, um ihn zum Codieren zu öffnen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="226"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="227"/>
         <source>Articles of the frame</source>
         <translation>Artikel des Frames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="228"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="229"/>
         <source>&amp;Articles</source>
         <translation>&amp;Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="233"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="235"/>
         <source>Name of the analysis</source>
         <translation>Name der Analyse</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="235"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="236"/>
         <source>Sa&amp;ve frames</source>
         <translation>Frames &amp;speichern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="237"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="238"/>
         <source>Saved analyses</source>
         <translation>Gespeicherte Analysen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="239"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
         <source>O&amp;pen</source>
         <translation>Ö&amp;ffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="241"/>
         <source>&amp;Delete</source>
         <translation>&amp;Löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="241"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="242"/>
         <source>Save as:</source>
         <translation>Speichern als:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="247"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="248"/>
         <source>Saved:</source>
         <translation>Gespeichert:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="266"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="407"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="411"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="559"/>
         <source>F%1 %2</source>
         <translation>F%1 %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="277"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="281"/>
         <source>Choose a layer and the number of frames, then press Compute. Gold is the usual layer; the consensus of the coders or one coder serve before gold is adjudicated.</source>
         <translation>Wählen Sie eine Ebene und die Anzahl der Frames und klicken Sie dann auf Berechnen. Der Goldstandard ist die übliche Ebene; der Konsens der Codierenden oder eine codierende Person dienen, bevor der Goldstandard entschieden ist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="340"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="344"/>
         <source>Computing the frames…</source>
         <translation>Die Frames werden berechnet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="368"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
         <source>Cancelled; the frames shown are from before.</source>
         <translation>Abgebrochen; die angezeigten Frames sind die vorherigen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="368"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
         <source>Cancelled.</source>
         <translation>Abgebrochen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="376"/>
         <source>%1
 
 Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choose the consensus of the coders or one coder as the layer above.</source>
@@ -8450,160 +8467,159 @@ Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choo
 Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und entscheiden…) oder wählen Sie oben den Konsens der Codierenden oder eine codierende Person als Ebene.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="416"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="420"/>
         <source>k-choice indices, each relative to its largest value</source>
         <translation>k-Wahl-Indizes, jeweils relativ zu ihrem größten Wert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="418"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="422"/>
         <source>k (frames)</source>
         <translation>k (Frames)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="421"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="425"/>
         <source>share of the largest value</source>
         <translation>Anteil am größten Wert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="442"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="446"/>
         <source>mean silhouette</source>
         <translation>mittlere Silhouette</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="444"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="448"/>
         <source>Calinski–Harabasz</source>
         <translation>Calinski–Harabasz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="446"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="450"/>
         <source>fusion jump (elbow)</source>
         <translation>Fusionssprung (Ellbogen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="449"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="453"/>
         <source>chosen k = %1</source>
         <translation>gewähltes k = %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="466"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="511"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="581"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="515"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="585"/>
         <source>–</source>
         <translation>–</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="468"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="472"/>
         <source>Largest mean silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k = %3. %4 %5 articles × %6 element variables of %7.</source>
         <translation>Größte mittlere Silhouette bei k = %1, Calinski–Harabasz bei k = %2, Fusionssprung bei k = %3. %4 %5 Artikel × %6 Elementvariablen von %7.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="471"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="475"/>
         <source>Frames: k = %1, as chosen.</source>
         <translation>Frames: k = %1, wie gewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="472"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="476"/>
         <source>Frames: k = %1, where most indices point.</source>
         <translation>Frames: k = %1, worauf die meisten Indizes zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="495"/>
         <source>Name (double-click to edit)</source>
         <translation>Name (zum Bearbeiten doppelklicken)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="495"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
         <source>Share</source>
         <translation>Anteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
         <source>Stability</source>
         <translation>Stabilität</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
         <source>Characteristic elements (share in frame, in all)</source>
         <translation>Kennzeichnende Elemente (Anteil im Frame, in allen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="509"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="513"/>
         <source>%1 — dissolves on resampling</source>
         <translation>%1 — löst sich beim Neuziehen auf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="513"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="517"/>
         <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
         <translation>Mittlere Jaccard-Ähnlichkeit zum am besten passenden Cluster über %1 Bootstrap-Replikationen (Hennig 2007); %2 aufgelöst (≤ 0.5), %3 wiedergefunden (≥ 0.75).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="519"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="523"/>
         <source>not computed</source>
         <translation>nicht berechnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="534"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="538"/>
         <source>%1 (%2, %3)</source>
         <translation>%1 (%2, %3)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="541"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="545"/>
         <source>none stands out</source>
         <translation>keines sticht heraus</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="555"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="605"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="609"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="556"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="560"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="576"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="580"/>
         <source>%1: %2 of all articles</source>
         <translation>%1: %2 aller Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="577"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="581"/>
         <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
         <translation>%1 in F%2: %3 seiner Artikel, %4 aller; standardisiertes Residuum %5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="606"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="610"/>
         <source>Total</source>
         <translation>Gesamt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="617"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="621"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="626"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="630"/>
         <source>Chi-square undefined: %1</source>
         <translation>Chi-Quadrat nicht definiert: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="629"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="633"/>
         <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
         <translation>Pearsons X² = %1, df = %2, p = %3; Cramérs V = %4.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="632"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="636"/>
         <source>&lt; 0.001</source>
         <translation>&lt; 0.001</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="636"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="640"/>
         <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
         <translation>
             <numerusform>Bei %n Zelle ist der Erwartungswert kleiner als 5 Artikel: lesen Sie den Test mit Vorsicht.</numerusform>
@@ -8611,43 +8627,43 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Date</source>
         <translation>Datum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Id</source>
         <translation>ID</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Near the centre</source>
         <translation>Nahe am Zentrum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="664"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="668"/>
         <source>%1.</source>
         <translation>%1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="697"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="698"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="701"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="702"/>
         <source>Compute the frames before saving them.</source>
         <translation>Berechnen Sie die Frames, bevor Sie sie speichern.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="714"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="718"/>
         <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
         <translation>
             <numerusform>Der %n Frame wurde als „%1“ gespeichert (Bearbeiten → Rückgängig nimmt es zurück).</numerusform>
@@ -8655,22 +8671,22 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="739"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="743"/>
         <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
         <translation>Die Ebene %1 von „%2“ ist nicht mehr im Projekt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="741"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="745"/>
         <source>The layer %1 is no longer in the project.</source>
         <translation>Die Ebene %1 ist nicht mehr im Projekt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="766"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="770"/>
         <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
         <translation>Die gespeicherten Frames „%1“ wurden gelöscht (Bearbeiten → Rückgängig holt sie zurück).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="781"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="785"/>
         <source>%1 — %2, k = %3, %n article(s)</source>
         <translation>
             <numerusform>%1 — %2, k = %3, %n Artikel</numerusform>
@@ -9653,47 +9669,47 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::ReadingView</name>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="59"/>
+        <location filename="../app/desktop/reading_view.cpp" line="38"/>
         <source>intro</source>
         <translation>Einleitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="61"/>
+        <location filename="../app/desktop/reading_view.cpp" line="40"/>
         <source>body</source>
         <translation>Hauptteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="63"/>
+        <location filename="../app/desktop/reading_view.cpp" line="42"/>
         <source>conclusion</source>
         <translation>Schluss</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="88"/>
+        <location filename="../app/desktop/reading_view.cpp" line="63"/>
         <source>Article text</source>
         <translation>Artikeltext</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="632"/>
+        <location filename="../app/desktop/reading_view.cpp" line="588"/>
         <source>Mark as %1</source>
         <translation>Als %1 markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="633"/>
+        <location filename="../app/desktop/reading_view.cpp" line="589"/>
         <source>Change to %1</source>
         <translation>In %1 ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="638"/>
+        <location filename="../app/desktop/reading_view.cpp" line="594"/>
         <source>Delete span</source>
         <translation>Textstelle löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="664"/>
+        <location filename="../app/desktop/reading_view.cpp" line="620"/>
         <source>%1: “%2”</source>
         <translation>%1: „%2“</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="893"/>
+        <location filename="../app/desktop/reading_view.cpp" line="833"/>
         <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Alt+Down and Alt+Up move between spans.</source>
         <translation>
             <numerusform>%n Textstelle. Wählen Sie Text aus und drücken Sie 1 bis 4, um eine Framing-Funktion zu markieren; Alt+Pfeil nach unten und Alt+Pfeil nach oben wechseln zwischen Textstellen.</numerusform>
@@ -9701,7 +9717,7 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="902"/>
+        <location filename="../app/desktop/reading_view.cpp" line="842"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Alt+Left/Right and Alt+Shift+Left/Right to resize.</source>
         <translation>Ausgewählte Textstelle: %1, „%2“. 1 bis 4 ändert die Funktion, Entf löscht, Alt+Links/Rechts und Alt+Umschalt+Links/Rechts ändern die Länge.</translation>
     </message>
@@ -10481,42 +10497,42 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::SpanEditor</name>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="91"/>
+        <location filename="../app/desktop/span_editor.cpp" line="93"/>
         <source>judges</source>
         <translation>bewertet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="91"/>
+        <location filename="../app/desktop/span_editor.cpp" line="93"/>
         <source>judged by</source>
         <translation>bewertet von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="93"/>
+        <location filename="../app/desktop/span_editor.cpp" line="95"/>
         <source>addresses</source>
         <translation>behandelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="93"/>
+        <location filename="../app/desktop/span_editor.cpp" line="95"/>
         <source>addressed by</source>
         <translation>behandelt von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="94"/>
+        <location filename="../app/desktop/span_editor.cpp" line="96"/>
         <source>%1 →</source>
         <translation>%1 →</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="94"/>
+        <location filename="../app/desktop/span_editor.cpp" line="96"/>
         <source>← %1</source>
         <translation>← %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="103"/>
+        <location filename="../app/desktop/span_editor.cpp" line="105"/>
         <source>Span editor</source>
         <translation>Textstellen-Editor</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="109"/>
+        <location filename="../app/desktop/span_editor.cpp" line="111"/>
         <source>No span selected.
 
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
@@ -10525,144 +10541,144 @@ Click a span in the text or on the frame card to edit it, or select text and pre
 Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bearbeiten, oder wählen Sie Text aus und drücken Sie 1&#xa0;bis&#xa0;4, um ihn zu codieren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="175"/>
+        <location filename="../app/desktop/span_editor.cpp" line="177"/>
         <source>Another coder&apos;s span: shown, not editable.</source>
         <translation>Textstelle einer anderen codierenden Person: sichtbar, nicht bearbeitbar.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="192"/>
+        <location filename="../app/desktop/span_editor.cpp" line="194"/>
         <source>Function: %1</source>
         <translation>Funktion: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="196"/>
+        <location filename="../app/desktop/span_editor.cpp" line="198"/>
         <source>&amp;Function:</source>
         <translation>&amp;Funktion:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="203"/>
+        <location filename="../app/desktop/span_editor.cpp" line="205"/>
         <source>Note</source>
         <translation>Notiz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="207"/>
+        <location filename="../app/desktop/span_editor.cpp" line="209"/>
         <source>&amp;Note:</source>
         <translation>&amp;Notiz:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="212"/>
+        <location filename="../app/desktop/span_editor.cpp" line="214"/>
         <source>Confidence</source>
         <translation>Sicherheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="216"/>
-        <location filename="../app/desktop/span_editor.cpp" line="363"/>
-        <location filename="../app/desktop/span_editor.cpp" line="371"/>
+        <location filename="../app/desktop/span_editor.cpp" line="218"/>
+        <location filename="../app/desktop/span_editor.cpp" line="365"/>
+        <location filename="../app/desktop/span_editor.cpp" line="373"/>
         <source>not set</source>
         <translation>nicht angegeben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="219"/>
+        <location filename="../app/desktop/span_editor.cpp" line="221"/>
         <source>How sure you are of this span, from 0 (a guess) to 1 (certain).</source>
         <translation>Wie sicher Sie sich bei dieser Textstelle sind, von 0 (geraten) bis 1 (sicher).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="220"/>
+        <location filename="../app/desktop/span_editor.cpp" line="222"/>
         <source>&amp;Confidence:</source>
         <translation>&amp;Sicherheit:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="229"/>
+        <location filename="../app/desktop/span_editor.cpp" line="231"/>
         <source>Links</source>
         <translation>Verknüpfungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="231"/>
+        <location filename="../app/desktop/span_editor.cpp" line="233"/>
         <source>Links start from an evaluation (to the cause it judges) or from a remedy (to the problem it addresses).</source>
         <translation>Verknüpfungen gehen von einer Bewertung (zur bewerteten Ursache) oder von einer Lösung (zum behandelten Problem) aus.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="241"/>
+        <location filename="../app/desktop/span_editor.cpp" line="243"/>
         <source>Span to link to</source>
         <translation>Zu verknüpfende Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="245"/>
+        <location filename="../app/desktop/span_editor.cpp" line="247"/>
         <source>&amp;Link</source>
         <translation>&amp;Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="246"/>
+        <location filename="../app/desktop/span_editor.cpp" line="248"/>
         <source>Link to the chosen span</source>
         <translation>Mit der gewählten Textstelle verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="258"/>
+        <location filename="../app/desktop/span_editor.cpp" line="260"/>
         <source>Links of this span</source>
         <translation>Verknüpfungen dieser Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="266"/>
+        <location filename="../app/desktop/span_editor.cpp" line="268"/>
         <source>No links yet.</source>
         <translation>Noch keine Verknüpfungen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="269"/>
+        <location filename="../app/desktop/span_editor.cpp" line="271"/>
         <source>&amp;Remove link</source>
         <translation>Verknüpfung &amp;entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="270"/>
+        <location filename="../app/desktop/span_editor.cpp" line="272"/>
         <source>Remove the chosen link</source>
         <translation>Die gewählte Verknüpfung entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="382"/>
+        <location filename="../app/desktop/span_editor.cpp" line="384"/>
         <source>%1:</source>
         <translation>%1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="436"/>
+        <location filename="../app/desktop/span_editor.cpp" line="438"/>
         <source>No note.</source>
         <translation>Keine Notiz.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="436"/>
+        <location filename="../app/desktop/span_editor.cpp" line="438"/>
         <source>Why this span, doubts, a question for the lead…</source>
         <translation>Warum diese Textstelle, Zweifel, eine Frage an die Leitung…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="454"/>
+        <location filename="../app/desktop/span_editor.cpp" line="456"/>
         <source>&amp;Judges:</source>
         <translation>Be&amp;wertet:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="454"/>
+        <location filename="../app/desktop/span_editor.cpp" line="456"/>
         <source>&amp;Addresses:</source>
         <translation>Behan&amp;delt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="456"/>
+        <location filename="../app/desktop/span_editor.cpp" line="458"/>
         <source>no cause span to link</source>
         <translation>keine Ursachen-Textstelle zum Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="456"/>
+        <location filename="../app/desktop/span_editor.cpp" line="458"/>
         <source>no problem span to link</source>
         <translation>keine Problem-Textstelle zum Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="486"/>
+        <location filename="../app/desktop/span_editor.cpp" line="488"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="502"/>
+        <location filename="../app/desktop/span_editor.cpp" line="504"/>
         <source>a span not shown here</source>
         <translation>eine hier nicht angezeigte Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="503"/>
+        <location filename="../app/desktop/span_editor.cpp" line="505"/>
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>

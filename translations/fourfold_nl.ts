@@ -2153,6 +2153,27 @@
     </message>
 </context>
 <context>
+    <name>FramesJob</name>
+    <message>
+        <location filename="../app/desktop/frames/frames_job.cpp" line="18"/>
+        <source>The computation was cancelled.</source>
+        <translation>De berekening is geannuleerd.</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/frames/frames_job.cpp" line="35"/>
+        <source>The layer %1 holds %n article(s); frames need at least 3.</source>
+        <translation>
+            <numerusform>De laag %1 bevat %n artikel; frames hebben er ten minste 3 nodig.</numerusform>
+            <numerusform>De laag %1 bevat %n artikelen; frames hebben er ten minste 3 nodig.</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_job.cpp" line="57"/>
+        <source>%1: %2</source>
+        <translation>%1: %2</translation>
+    </message>
+</context>
+<context>
     <name>FunctionStyle</name>
     <message>
         <location filename="../app/desktop/function_style.cpp" line="30"/>
@@ -2678,6 +2699,11 @@
         <source>The project file %1 is damaged, so nothing was added to it; `fourfold-cli check` lists the damage. Restore it from a backup.</source>
         <translation>Het projectbestand %1 is beschadigd, dus er is niets aan toegevoegd; `fourfold-cli check` somt de schade op. Zet het terug vanuit een back-up.</translation>
     </message>
+    <message>
+        <location filename="../core/store/project_tables.cpp" line="289"/>
+        <source>foreign_key_check: row %1 of %2 refers to a missing row of %3</source>
+        <translation>foreign_key_check: rij %1 van %2 verwijst naar een ontbrekende rij van %3</translation>
+    </message>
 </context>
 <context>
     <name>ProjectText</name>
@@ -2772,6 +2798,14 @@
         <location filename="../core/agreement/project_units.cpp" line="474"/>
         <source>the codebook has no attribute &quot;%1&quot; for %2.</source>
         <translation>het codeboek heeft geen kenmerk ‘%1’ voor %2.</translation>
+    </message>
+</context>
+<context>
+    <name>RangeBlob</name>
+    <message>
+        <location filename="../core/store/range_blob.cpp" line="24"/>
+        <source>A stored list of text ranges is damaged (%1 bytes).</source>
+        <translation>Een opgeslagen lijst van tekstbereiken is beschadigd (%1 bytes).</translation>
     </message>
 </context>
 <context>
@@ -5826,7 +5860,7 @@
     <message>
         <location filename="../app/cli/command_info.cpp" line="116"/>
         <source>Near copies  %1 article(s) a near copy of an older one (%2 pair(s))</source>
-        <translation>Bijna-kopieën %1 artikel(en) een bijna-kopie van een ouder artikel (%2 paar/paren)</translation>
+        <translation>Kopieën      %1 artikel(en) een bijna-kopie van een ouder artikel (%2 paar/paren)</translation>
     </message>
     <message>
         <location filename="../app/cli/command_info.cpp" line="120"/>
@@ -6655,24 +6689,6 @@
     </message>
 </context>
 <context>
-    <name>fourfold</name>
-    <message>
-        <location filename="../app/desktop/frames/frames_job.cpp" line="18"/>
-        <source>The computation was cancelled.</source>
-        <translation>De berekening is geannuleerd.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/frames/frames_job.cpp" line="35"/>
-        <source>The layer %1 holds %n article(s); frames need at least 3.</source>
-        <translation>De laag %1 bevat %n artikel(en); frames hebben er ten minste 3 nodig.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/frames/frames_job.cpp" line="55"/>
-        <source>%1: %2</source>
-        <translation>%1: %2</translation>
-    </message>
-</context>
-<context>
     <name>fourfold::ArticleListModel</name>
     <message>
         <location filename="../app/desktop/article_list_model.cpp" line="50"/>
@@ -7240,52 +7256,52 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::ComparisonView</name>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="34"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="35"/>
         <source>Coders side by side</source>
         <translation>Codeurs naast elkaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="193"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="187"/>
         <source>only one coder has a span here</source>
         <translation>slechts één codeur heeft hier een fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="194"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="188"/>
         <source>not every coder has a span here</source>
         <translation>niet elke codeur heeft hier een fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="196"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="190"/>
         <source>different functions</source>
         <translation>verschillende functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="198"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="192"/>
         <source>different boundaries</source>
         <translation>verschillende grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="200"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="194"/>
         <source>different attributes</source>
         <translation>verschillende kenmerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="201"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="195"/>
         <source>The coders agree here.</source>
         <translation>De codeurs zijn het hier eens.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="202"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="196"/>
         <source>Disagreement: %1.</source>
         <translation>Verschil: %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="202"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="196"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_view.cpp" line="204"/>
+        <location filename="../app/desktop/compare/comparison_view.cpp" line="198"/>
         <source>Decided.</source>
         <translation>Beslist.</translation>
     </message>
@@ -8314,134 +8330,135 @@ Bijna-kopie van %2</translation>
         <translation>Boom van Ward: de laatste %1 samenvoegingen (elk blad: het aantal artikelen; gestreept: de snede in de gekozen k)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="173"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="174"/>
         <source>Choosing &amp;k</source>
         <translation>Keuze van &amp;k</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="183"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="184"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="184"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="185"/>
         <source>Element profile of each frame</source>
         <translation>Elementprofiel van elk frame</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="186"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="187"/>
         <source>Share of each frame&apos;s articles holding the element, beside the share in all articles; bold: the element characterises the frame (adjusted residual above 1.96).</source>
         <translation>Aandeel van de artikelen van elk frame dat het element bevat, naast het aandeel in alle artikelen; vet: het element kenmerkt het frame (gecorrigeerd residu boven 1.96).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="193"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="194"/>
         <source>F&amp;rames</source>
         <translation>F&amp;rames</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="198"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="199"/>
         <source>By outlet</source>
         <translation>Naar medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="199"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="200"/>
         <source>By month</source>
         <translation>Naar maand</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="211"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="212"/>
         <source>By &amp;outlet and month</source>
         <translation>Naar &amp;medium en maand</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="218"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="219"/>
         <source>Frame</source>
         <translation>Frame</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="219"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="220"/>
         <source>Fr&amp;ame:</source>
         <translation>Fr&amp;ame:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="223"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="224"/>
         <source>Double-click an article to open it on the desk.</source>
         <translation>Dubbelklik op een artikel om het te openen om te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="226"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="227"/>
         <source>Articles of the frame</source>
         <translation>Artikelen van het frame</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="228"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="229"/>
         <source>&amp;Articles</source>
         <translation>&amp;Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="233"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="235"/>
         <source>Name of the analysis</source>
         <translation>Naam van de analyse</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="235"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="236"/>
         <source>Sa&amp;ve frames</source>
         <translation>Frames &amp;opslaan</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="237"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="238"/>
         <source>Saved analyses</source>
         <translation>Opgeslagen analyses</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="239"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
         <source>O&amp;pen</source>
         <translation>O&amp;penen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="241"/>
         <source>&amp;Delete</source>
         <translation>&amp;Verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="241"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="242"/>
         <source>Save as:</source>
         <translation>Opslaan als:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="247"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="248"/>
         <source>Saved:</source>
         <translation>Opgeslagen:</translation>
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="266"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="407"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="411"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="559"/>
         <source>F%1 %2</source>
         <translation>F%1 %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="277"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="281"/>
         <source>Choose a layer and the number of frames, then press Compute. Gold is the usual layer; the consensus of the coders or one coder serve before gold is adjudicated.</source>
         <translation>Kies een laag en het aantal frames en klik dan op Berekenen. De gouden standaard is de gebruikelijke laag; de consensus van de codeurs of één codeur dienen zolang over de gouden standaard nog niet is beslist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="340"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="344"/>
         <source>Computing the frames…</source>
         <translation>De frames worden berekend…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="368"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
         <source>Cancelled; the frames shown are from before.</source>
         <translation>Geannuleerd; de getoonde frames zijn de vorige.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="368"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
         <source>Cancelled.</source>
         <translation>Geannuleerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="376"/>
         <source>%1
 
 Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choose the consensus of the coders or one coder as the layer above.</source>
@@ -8450,160 +8467,159 @@ Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choo
 Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en beslissen…) of kies hierboven de consensus van de codeurs of één codeur als laag.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="416"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="420"/>
         <source>k-choice indices, each relative to its largest value</source>
         <translation>k-keuze-indices, elk ten opzichte van de eigen grootste waarde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="418"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="422"/>
         <source>k (frames)</source>
         <translation>k (frames)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="421"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="425"/>
         <source>share of the largest value</source>
         <translation>aandeel van de grootste waarde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="442"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="446"/>
         <source>mean silhouette</source>
         <translation>gemiddeld silhouet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="444"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="448"/>
         <source>Calinski–Harabasz</source>
         <translation>Calinski–Harabasz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="446"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="450"/>
         <source>fusion jump (elbow)</source>
         <translation>fusiesprong (elleboog)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="449"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="453"/>
         <source>chosen k = %1</source>
         <translation>gekozen k = %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="466"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="511"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="581"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="515"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="585"/>
         <source>–</source>
         <translation>–</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="468"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="472"/>
         <source>Largest mean silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k = %3. %4 %5 articles × %6 element variables of %7.</source>
         <translation>Grootste gemiddelde silhouet bij k = %1, Calinski–Harabasz bij k = %2, fusiesprong bij k = %3. %4 %5 artikelen × %6 elementvariabelen van %7.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="471"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="475"/>
         <source>Frames: k = %1, as chosen.</source>
         <translation>Frames: k = %1, zoals gekozen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="472"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="476"/>
         <source>Frames: k = %1, where most indices point.</source>
         <translation>Frames: k = %1, waar de meeste indices naar wijzen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="495"/>
         <source>Name (double-click to edit)</source>
         <translation>Naam (dubbelklik om te bewerken)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="491"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="495"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
         <source>Share</source>
         <translation>Aandeel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
         <source>Stability</source>
         <translation>Stabiliteit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="492"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
         <source>Characteristic elements (share in frame, in all)</source>
         <translation>Kenmerkende elementen (aandeel in frame, in alle)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="509"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="513"/>
         <source>%1 — dissolves on resampling</source>
         <translation>%1 — valt uiteen bij opnieuw trekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="513"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="517"/>
         <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
         <translation>Gemiddelde Jaccard-gelijkenis met de best passende cluster over %1 bootstrapreplicaties (Hennig 2007); %2 uiteengevallen (≤ 0.5), %3 teruggevonden (≥ 0.75).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="519"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="523"/>
         <source>not computed</source>
         <translation>niet berekend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="534"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="538"/>
         <source>%1 (%2, %3)</source>
         <translation>%1 (%2, %3)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="541"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="545"/>
         <source>none stands out</source>
         <translation>geen enkel valt op</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="555"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="605"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="609"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="556"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="560"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="576"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="580"/>
         <source>%1: %2 of all articles</source>
         <translation>%1: %2 van alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="577"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="581"/>
         <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
         <translation>%1 in F%2: %3 van zijn artikelen, %4 van alle; gecorrigeerd residu %5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="606"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="610"/>
         <source>Total</source>
         <translation>Totaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="617"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="621"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="626"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="630"/>
         <source>Chi-square undefined: %1</source>
         <translation>Chikwadraat niet gedefinieerd: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="629"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="633"/>
         <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
         <translation>Pearsons X² = %1, df = %2, p = %3; Cramérs V = %4.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="632"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="636"/>
         <source>&lt; 0.001</source>
         <translation>&lt; 0.001</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="636"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="640"/>
         <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
         <translation>
             <numerusform>%n cel verwacht minder dan 5 artikelen: lees de toets met zorg.</numerusform>
@@ -8611,43 +8627,43 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Date</source>
         <translation>Datum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Id</source>
         <translation>Id</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="646"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
         <source>Near the centre</source>
         <translation>Dicht bij het centrum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="664"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="668"/>
         <source>%1.</source>
         <translation>%1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="697"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="698"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="701"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="702"/>
         <source>Compute the frames before saving them.</source>
         <translation>Bereken de frames voordat u ze opslaat.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="714"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="718"/>
         <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
         <translation>
             <numerusform>Het %n frame is opgeslagen als ‘%1’ (Bewerken → Ongedaan maken draait het terug).</numerusform>
@@ -8655,22 +8671,22 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="739"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="743"/>
         <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
         <translation>De laag %1 van ‘%2’ staat niet meer in het project.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="741"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="745"/>
         <source>The layer %1 is no longer in the project.</source>
         <translation>De laag %1 staat niet meer in het project.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="766"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="770"/>
         <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
         <translation>De opgeslagen frames ‘%1’ zijn verwijderd (Bewerken → Ongedaan maken haalt ze terug).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="781"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="785"/>
         <source>%1 — %2, k = %3, %n article(s)</source>
         <translation>
             <numerusform>%1 — %2, k = %3, %n artikel</numerusform>
@@ -9653,47 +9669,47 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::ReadingView</name>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="59"/>
+        <location filename="../app/desktop/reading_view.cpp" line="38"/>
         <source>intro</source>
         <translation>inleiding</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="61"/>
+        <location filename="../app/desktop/reading_view.cpp" line="40"/>
         <source>body</source>
         <translation>kern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="63"/>
+        <location filename="../app/desktop/reading_view.cpp" line="42"/>
         <source>conclusion</source>
         <translation>slot</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="88"/>
+        <location filename="../app/desktop/reading_view.cpp" line="63"/>
         <source>Article text</source>
         <translation>Artikeltekst</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="632"/>
+        <location filename="../app/desktop/reading_view.cpp" line="588"/>
         <source>Mark as %1</source>
         <translation>Markeren als %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="633"/>
+        <location filename="../app/desktop/reading_view.cpp" line="589"/>
         <source>Change to %1</source>
         <translation>Wijzigen in %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="638"/>
+        <location filename="../app/desktop/reading_view.cpp" line="594"/>
         <source>Delete span</source>
         <translation>Fragment verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="664"/>
+        <location filename="../app/desktop/reading_view.cpp" line="620"/>
         <source>%1: “%2”</source>
         <translation>%1: ‘%2’</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="893"/>
+        <location filename="../app/desktop/reading_view.cpp" line="833"/>
         <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Alt+Down and Alt+Up move between spans.</source>
         <translation>
             <numerusform>%n fragment. Selecteer tekst en druk op 1 tot en met 4 om een framingfunctie te markeren; met Alt+Pijl-omlaag en Alt+Pijl-omhoog ga je van fragment naar fragment.</numerusform>
@@ -9701,7 +9717,7 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="902"/>
+        <location filename="../app/desktop/reading_view.cpp" line="842"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Alt+Left/Right and Alt+Shift+Left/Right to resize.</source>
         <translation>Geselecteerd fragment: %1, ‘%2’. Druk op 1 tot en met 4 om de functie te wijzigen, op Delete om het te verwijderen, en op Alt+Links/Rechts en Alt+Shift+Links/Rechts om het groter of kleiner te maken.</translation>
     </message>
@@ -10481,42 +10497,42 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::SpanEditor</name>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="91"/>
+        <location filename="../app/desktop/span_editor.cpp" line="93"/>
         <source>judges</source>
         <translation>beoordeelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="91"/>
+        <location filename="../app/desktop/span_editor.cpp" line="93"/>
         <source>judged by</source>
         <translation>beoordeeld door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="93"/>
+        <location filename="../app/desktop/span_editor.cpp" line="95"/>
         <source>addresses</source>
         <translation>behandelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="93"/>
+        <location filename="../app/desktop/span_editor.cpp" line="95"/>
         <source>addressed by</source>
         <translation>behandeld door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="94"/>
+        <location filename="../app/desktop/span_editor.cpp" line="96"/>
         <source>%1 →</source>
         <translation>%1 →</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="94"/>
+        <location filename="../app/desktop/span_editor.cpp" line="96"/>
         <source>← %1</source>
         <translation>← %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="103"/>
+        <location filename="../app/desktop/span_editor.cpp" line="105"/>
         <source>Span editor</source>
         <translation>Fragmenteditor</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="109"/>
+        <location filename="../app/desktop/span_editor.cpp" line="111"/>
         <source>No span selected.
 
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
@@ -10525,144 +10541,144 @@ Click a span in the text or on the frame card to edit it, or select text and pre
 Klik op een fragment in de tekst of op de framekaart om het te bewerken, of selecteer tekst en druk op 1&#xa0;tot&#xa0;en&#xa0;met&#xa0;4 om die te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="175"/>
+        <location filename="../app/desktop/span_editor.cpp" line="177"/>
         <source>Another coder&apos;s span: shown, not editable.</source>
         <translation>Fragment van een andere codeur: zichtbaar, niet bewerkbaar.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="192"/>
+        <location filename="../app/desktop/span_editor.cpp" line="194"/>
         <source>Function: %1</source>
         <translation>Functie: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="196"/>
+        <location filename="../app/desktop/span_editor.cpp" line="198"/>
         <source>&amp;Function:</source>
         <translation>&amp;Functie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="203"/>
+        <location filename="../app/desktop/span_editor.cpp" line="205"/>
         <source>Note</source>
         <translation>Notitie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="207"/>
+        <location filename="../app/desktop/span_editor.cpp" line="209"/>
         <source>&amp;Note:</source>
         <translation>&amp;Notitie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="212"/>
+        <location filename="../app/desktop/span_editor.cpp" line="214"/>
         <source>Confidence</source>
         <translation>Zekerheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="216"/>
-        <location filename="../app/desktop/span_editor.cpp" line="363"/>
-        <location filename="../app/desktop/span_editor.cpp" line="371"/>
+        <location filename="../app/desktop/span_editor.cpp" line="218"/>
+        <location filename="../app/desktop/span_editor.cpp" line="365"/>
+        <location filename="../app/desktop/span_editor.cpp" line="373"/>
         <source>not set</source>
         <translation>niet opgegeven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="219"/>
+        <location filename="../app/desktop/span_editor.cpp" line="221"/>
         <source>How sure you are of this span, from 0 (a guess) to 1 (certain).</source>
         <translation>Hoe zeker je bent van dit fragment, van 0 (een gok) tot 1 (zeker).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="220"/>
+        <location filename="../app/desktop/span_editor.cpp" line="222"/>
         <source>&amp;Confidence:</source>
         <translation>&amp;Zekerheid:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="229"/>
+        <location filename="../app/desktop/span_editor.cpp" line="231"/>
         <source>Links</source>
         <translation>Koppelingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="231"/>
+        <location filename="../app/desktop/span_editor.cpp" line="233"/>
         <source>Links start from an evaluation (to the cause it judges) or from a remedy (to the problem it addresses).</source>
         <translation>Koppelingen beginnen bij een evaluatie (naar de oorzaak die ze beoordeelt) of bij een oplossing (naar het probleem dat ze behandelt).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="241"/>
+        <location filename="../app/desktop/span_editor.cpp" line="243"/>
         <source>Span to link to</source>
         <translation>Fragment om aan te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="245"/>
+        <location filename="../app/desktop/span_editor.cpp" line="247"/>
         <source>&amp;Link</source>
         <translation>&amp;Koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="246"/>
+        <location filename="../app/desktop/span_editor.cpp" line="248"/>
         <source>Link to the chosen span</source>
         <translation>Koppelen aan het gekozen fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="258"/>
+        <location filename="../app/desktop/span_editor.cpp" line="260"/>
         <source>Links of this span</source>
         <translation>Koppelingen van dit fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="266"/>
+        <location filename="../app/desktop/span_editor.cpp" line="268"/>
         <source>No links yet.</source>
         <translation>Nog geen koppelingen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="269"/>
+        <location filename="../app/desktop/span_editor.cpp" line="271"/>
         <source>&amp;Remove link</source>
         <translation>Koppeling &amp;verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="270"/>
+        <location filename="../app/desktop/span_editor.cpp" line="272"/>
         <source>Remove the chosen link</source>
         <translation>De gekozen koppeling verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="382"/>
+        <location filename="../app/desktop/span_editor.cpp" line="384"/>
         <source>%1:</source>
         <translation>%1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="436"/>
+        <location filename="../app/desktop/span_editor.cpp" line="438"/>
         <source>No note.</source>
         <translation>Geen notitie.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="436"/>
+        <location filename="../app/desktop/span_editor.cpp" line="438"/>
         <source>Why this span, doubts, a question for the lead…</source>
         <translation>Waarom dit fragment, twijfels, een vraag voor de coördinator…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="454"/>
+        <location filename="../app/desktop/span_editor.cpp" line="456"/>
         <source>&amp;Judges:</source>
         <translation>Be&amp;oordeelt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="454"/>
+        <location filename="../app/desktop/span_editor.cpp" line="456"/>
         <source>&amp;Addresses:</source>
         <translation>Behan&amp;delt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="456"/>
+        <location filename="../app/desktop/span_editor.cpp" line="458"/>
         <source>no cause span to link</source>
         <translation>geen oorzaakfragment om te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="456"/>
+        <location filename="../app/desktop/span_editor.cpp" line="458"/>
         <source>no problem span to link</source>
         <translation>geen probleemfragment om te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="486"/>
+        <location filename="../app/desktop/span_editor.cpp" line="488"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="502"/>
+        <location filename="../app/desktop/span_editor.cpp" line="504"/>
         <source>a span not shown here</source>
         <translation>een fragment dat hier niet wordt getoond</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="503"/>
+        <location filename="../app/desktop/span_editor.cpp" line="505"/>
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>

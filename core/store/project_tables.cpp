@@ -286,7 +286,8 @@ Result<QStringList> sqliteChecks(const Database &db)
             return std::unexpected(row.error());
         if (!*row)
             break;
-        problems << QStringLiteral("foreign_key_check: row %1 of %2 refers to a missing row of %3")
+        problems << QCoreApplication::translate(
+            "ProjectTables", "foreign_key_check: row %1 of %2 refers to a missing row of %3")
                         .arg(fk->columnInt(1))
                         .arg(fk->columnText(0), fk->columnText(2));
     }

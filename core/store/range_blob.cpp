@@ -1,5 +1,6 @@
 #include "core/store/range_blob.h"
 
+#include <QCoreApplication>
 #include <QtEndian>
 
 namespace fourfold {
@@ -20,7 +21,9 @@ Result<std::vector<TextRange>> decodeRanges(const QByteArray &blob)
 {
     if (blob.size() % 8 != 0)
         return fail(ErrorCode::Corrupt,
-            QStringLiteral("A stored list of text ranges is damaged (%1 bytes).").arg(blob.size()));
+            QCoreApplication::translate(
+                "RangeBlob", "A stored list of text ranges is damaged (%1 bytes).")
+                .arg(blob.size()));
     std::vector<TextRange> ranges;
     ranges.reserve(size_t(blob.size() / 8));
     const char *p = blob.constData();
