@@ -9,8 +9,10 @@
 #include "core/frames/cluster_stability.h"
 #include "core/frames/frame_analysis.h"
 #include "core/io/numeric_matrix_reader.h"
+#include "core/project/frame_analysis_edits.h"
 #include "core/project/project.h"
-#include "core/scoring/element_indicators.h"
+#include "core/project/saved_frames.h"
+#include "core/scoring/frame_input.h"
 
 #include <QCoreApplication>
 #include <QFileInfo>
@@ -34,67 +36,6 @@ struct CliText {
 };
 
 using frames::FrameAnalysis;
-using frames::FrameMatrix;
-
-// The articles and variables one analysis runs on, and the groups each article belongs to.
-struct FrameInput {
-    QString source; // the file or "layer gold"
-    QStringList variables;
-    QStringList ids; // the articles as the user knows them
-    std::vector<ArticleId> articles; // project articles (empty for --data)
-    FrameMatrix matrix;
-    // "outlet", "month", "language" -> each article's group
-    std::map<QString, QStringList> groups;
-    // The consensus layer: the share of each article's coders who coded each element (row-major
-    // as the matrix); empty otherwise.
-    std::vector<double> coderShares;
-};
-
-FrameInput fromIndicators(ElementIndicators &&indicators)
-{
-    FrameInput input;
-    input.source = CliText::tr("layer %1").arg(indicators.layer);
-    input.variables = indicators.variables;
-    input.matrix.rows = indicators.articles.size();
-    input.matrix.columns = size_t(indicators.variables.size());
-    input.matrix.values = std::move(indicators.values);
-    if (indicators.layer == QLatin1String("consensus"))
-        input.coderShares = std::move(indicators.shares);
-    QStringList &outlet = input.groups[QStringLiteral("outlet")];
-    QStringList &month = input.groups[QStringLiteral("month")];
-    QStringList &language = input.groups[QStringLiteral("language")];
-    const QString unknown = CliText::tr("(unknown)");
-    for (const ArticleSummary &a : indicators.articles) {
-        input.articles.push_back(a.id);
-        input.ids << (a.externalId.isEmpty() ? a.uuid : a.externalId);
-        outlet << (a.outlet.isEmpty() ? unknown : a.outlet);
-        // ISO 8601 dates: the month is the first seven characters (YYYY-MM).
-        month << (a.published.size() >= 7 && a.published.at(4) == QLatin1Char('-')
-                ? a.published.left(7)
-                : unknown);
-        language << (a.language.isEmpty() ? unknown : a.language);
-    }
-    return input;
-}
-
-// The rows of `input` whose articles are in `keep` (in input order).
-FrameInput restricted(const FrameInput &input, const QSet<qint64> &keep)
-{
-    FrameInput out;
-    out.source = input.source;
-    out.variables = input.variables;
-    out.matrix.columns = input.matrix.columns;
-    for (size_t r = 0; r < input.matrix.rows; ++r) {
-        if (!keep.contains(input.articles[r].value))
-            continue;
-        out.articles.push_back(input.articles[r]);
-        out.ids << input.ids[qsizetype(r)];
-        out.matrix.values.insert(out.matrix.values.end(), input.matrix.row(r),
-            input.matrix.row(r) + input.matrix.columns);
-        ++out.matrix.rows;
-    }
-    return out;
-}
 
 QJsonValue optionalJson(const std::optional<double> &v)
 {
@@ -110,34 +51,6 @@ QString kText(int k)
 QString number(const std::optional<double> &v, int decimals)
 {
     return v ? QString::number(*v, 'f', decimals) : QStringLiteral("–");
-}
-
-// A frames × groups table with chi-square and Cramér's V.
-struct GroupTable {
-    QString name;
-    QStringList groups; // sorted
-    std::vector<long long> counts; // frames × groups
-    frames::ChiSquareResult test;
-};
-
-GroupTable groupTable(const QString &name, const QStringList &groupOf, const frames::Partition &p)
-{
-    GroupTable table;
-    table.name = name;
-    QStringList groups = groupOf;
-    groups.sort();
-    groups.removeDuplicates();
-    table.groups = groups;
-    QHash<QString, int> column;
-    for (qsizetype g = 0; g < groups.size(); ++g)
-        column.insert(groups[g], int(g));
-    table.counts.assign(size_t(p.clusters) * size_t(groups.size()), 0);
-    for (size_t i = 0; i < p.labels.size(); ++i)
-        ++table.counts[size_t(p.labels[i]) * size_t(groups.size())
-            + size_t(column.value(groupOf[qsizetype(i)]))];
-    if (auto test = frames::chiSquare(table.counts, p.clusters, int(groups.size())))
-        table.test = *test;
-    return table;
 }
 
 QJsonObject chiSquareJson(const frames::ChiSquareResult &t)
@@ -163,22 +76,6 @@ QString chiSquareText(const frames::ChiSquareResult &t)
         .arg(t.smallExpected > 0
                 ? CliText::tr("; %n cell(s) expect fewer than 5", nullptr, t.smallExpected)
                 : QString());
-}
-
-// Ward + k-means with k clusters on `matrix` (one thread: replicates run side by side).
-frames::ClusterMethod twoStepMethod(int k)
-{
-    return [k](const FrameMatrix &sample) -> frames::Outcome<frames::Partition> {
-        frames::WardOptions options;
-        options.threads = 1;
-        const auto schedule = frames::wardLinkage(sample, options);
-        if (!schedule)
-            return std::unexpected(schedule.error());
-        auto clusters = frames::twoStepClusters(sample, *schedule, k, 1);
-        if (!clusters)
-            return std::unexpected(clusters.error());
-        return clusters->partition;
-    };
 }
 
 // Writes `article,frame` rows (frames counted from 1), replacing the file whole.
@@ -208,6 +105,71 @@ Status writeAssignments(const QString &path, const FrameInput &input, const fram
 int reportFailure(const std::unexpected<Error> &failure)
 {
     return report(failure.error());
+}
+
+// Lists the saved frame analyses of the project at `path` (--saved).
+int listSaved(const QString &path, bool asJson)
+{
+    auto project = Project::openForReading(path);
+    if (!project)
+        return report(project.error());
+    auto analyses = SavedFrames::list(*project);
+    if (!analyses)
+        return report(analyses.error());
+    if (asJson) {
+        QJsonArray list;
+        for (const SavedFrameAnalysis &a : *analyses) {
+            QJsonArray framesJson;
+            for (const SavedFrame &f : a.frames)
+                framesJson.append(QJsonObject {{QStringLiteral("frame"), f.cluster + 1},
+                    {QStringLiteral("name"), f.name},
+                    {QStringLiteral("size"), f.profile.value(QStringLiteral("size")).toInt()}});
+            list.append(QJsonObject {{QStringLiteral("name"), a.name},
+                {QStringLiteral("uuid"), a.uuid}, {QStringLiteral("created_at"), a.createdAt},
+                {QStringLiteral("settings"), a.settings},
+                {QStringLiteral("articles"), a.memberCount},
+                {QStringLiteral("frames"), framesJson}});
+        }
+        printJson(QJsonObject {{QStringLiteral("analyses"), list}});
+        return ExitOk;
+    }
+    if (analyses->empty()) {
+        out(CliText::tr(
+            "%1 holds no saved frame analysis (save one with frames PROJECT --save NAME).")
+                .arg(path));
+        return ExitOk;
+    }
+    QStringList lines;
+    for (const SavedFrameAnalysis &a : *analyses) {
+        lines << CliText::tr(
+            "%1  (%2; layer %3, k = %4, %n article(s))", nullptr, int(a.memberCount))
+                     .arg(a.name, a.createdAt.left(16).replace(QLatin1Char('T'), QLatin1Char(' ')),
+                         a.settings.value(QStringLiteral("layer")).toString())
+                     .arg(a.settings.value(QStringLiteral("k")).toInt());
+        for (const SavedFrame &f : a.frames)
+            lines << CliText::tr("  F%1  %2  %n article(s)", nullptr,
+                f.profile.value(QStringLiteral("size")).toInt())
+                         .arg(f.cluster + 1)
+                         .arg(f.name.isEmpty() ? CliText::tr("(no name)") : f.name);
+    }
+    out(lines.join(QLatin1Char('\n')));
+    return ExitOk;
+}
+
+// Deletes the saved analysis `name` of the project at `path` (--delete-saved).
+int deleteSavedAnalysis(const QString &path, const QString &name)
+{
+    auto project = Project::open(path);
+    if (!project)
+        return report(project.error());
+    auto analysis = SavedFrames::load(*project, name);
+    if (!analysis)
+        return report(analysis.error());
+    DeleteFrameAnalysisEdit edit(analysis->uuid, analysis->name, CoderId {});
+    if (auto deleted = project->apply(edit); !deleted)
+        return report(deleted.error());
+    out(CliText::tr("Deleted the saved frame analysis \"%1\".").arg(name));
+    return ExitOk;
 }
 
 } // namespace
@@ -253,7 +215,22 @@ int runFrames(const QStringList &arguments)
         QStringLiteral("FILE"));
     const QCommandLineOption force(
         QStringLiteral("force"), CliText::tr("Replace the --out file if it exists."));
-    parser.addOptions({data, layer, k, maxK, bootstrap, seed, compare, json, outFile, force});
+    const QCommandLineOption save(QStringLiteral("save"),
+        CliText::tr(
+            "With a project: save the analysis in the project under this name (its settings, each "
+            "frame's profile and name, each article's frame)."),
+        QStringLiteral("NAME"));
+    const QCommandLineOption frameName(QStringLiteral("frame-name"),
+        CliText::tr(
+            "With --save: the name of the next frame (give it once per frame, largest first)."),
+        QStringLiteral("NAME"));
+    const QCommandLineOption saved(
+        QStringLiteral("saved"), CliText::tr("List the frame analyses saved in the project."));
+    const QCommandLineOption deleteSaved(QStringLiteral("delete-saved"),
+        CliText::tr("Delete the saved frame analysis of this name from the project."),
+        QStringLiteral("NAME"));
+    parser.addOptions({data, layer, k, maxK, bootstrap, seed, compare, json, outFile, force, save,
+        frameName, saved, deleteSaved});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), CliText::tr("The project file (unless --data is given)."));
     if (int rc = parseCommandLine(parser, command,
@@ -265,6 +242,19 @@ int runFrames(const QStringList &arguments)
             arguments);
         rc >= 0)
         return rc;
+
+    if (parser.isSet(saved) || parser.isSet(deleteSaved)) {
+        if (parser.isSet(data) || parser.positionalArguments().size() != 1)
+            return usageError(
+                command, CliText::tr("--saved and --delete-saved expect a project file."));
+        return parser.isSet(saved)
+            ? listSaved(parser.positionalArguments().first(), parser.isSet(json))
+            : deleteSavedAnalysis(parser.positionalArguments().first(), parser.value(deleteSaved));
+    }
+    if (parser.isSet(save) && parser.isSet(data))
+        return usageError(command, CliText::tr("--save is for a project, not --data."));
+    if (parser.isSet(frameName) && !parser.isSet(save))
+        return usageError(command, CliText::tr("--frame-name goes with --save."));
 
     bool ok = false;
     frames::FrameAnalysisOptions options;
@@ -291,6 +281,7 @@ int runFrames(const QStringList &arguments)
 
     FrameInput input;
     std::optional<FrameInput> other;
+    std::optional<Project> project;
     if (parser.isSet(data)) {
         if (!parser.positionalArguments().isEmpty())
             return usageError(
@@ -310,18 +301,21 @@ int runFrames(const QStringList &arguments)
     } else {
         if (parser.positionalArguments().size() != 1)
             return usageError(command, CliText::tr("expected a project file, or --data FILE."));
-        auto project = Project::openForReading(parser.positionalArguments().first());
-        if (!project)
-            return report(project.error());
-        auto indicators = elementIndicators(*project, parser.value(layer));
-        if (!indicators)
-            return report(indicators.error());
-        input = fromIndicators(std::move(*indicators));
+        const QString path = parser.positionalArguments().first();
+        // Saving writes; everything else only reads the file.
+        auto opened = parser.isSet(save) ? Project::open(path) : Project::openForReading(path);
+        if (!opened)
+            return report(opened.error());
+        project.emplace(std::move(*opened));
+        auto first = frameInput(*project, parser.value(layer));
+        if (!first)
+            return report(first.error());
+        input = std::move(*first);
         if (parser.isSet(compare)) {
-            auto second = elementIndicators(*project, parser.value(compare));
+            auto second = frameInput(*project, parser.value(compare));
             if (!second)
                 return report(second.error());
-            other = fromIndicators(std::move(*second));
+            other = std::move(*second);
         }
     }
     if (input.matrix.rows < 3)
@@ -358,23 +352,21 @@ int runFrames(const QStringList &arguments)
         stability = std::move(*computed);
     }
 
-    std::vector<GroupTable> tables;
-    for (const auto &[name, groupOf] : input.groups)
-        tables.push_back(groupTable(name, groupOf, partition));
+    const std::vector<FrameGroupTable> tables = frameGroupTables(input, partition);
 
     // The comparison: both layers clustered on the articles they share, with the same k.
     QJsonObject comparison;
     QStringList comparisonText;
     if (other) {
         QSet<qint64> inFirst;
-        for (ArticleId a : input.articles)
-            inFirst.insert(a.value);
+        for (const ArticleSummary &a : input.articles)
+            inFirst.insert(a.id.value);
         QSet<qint64> common;
-        for (ArticleId a : other->articles)
-            if (inFirst.contains(a.value))
-                common.insert(a.value);
-        const FrameInput a = restricted(input, common);
-        const FrameInput b = restricted(*other, common);
+        for (const ArticleSummary &a : other->articles)
+            if (inFirst.contains(a.id.value))
+                common.insert(a.id.value);
+        const FrameInput a = restrictedFrameInput(input, common);
+        const FrameInput b = restrictedFrameInput(*other, common);
         if (a.matrix.rows < std::max<size_t>(3, size_t(analysis.k)))
             return reportFailure(fail(ErrorCode::InvalidInput,
                 CliText::tr("%1 and %2 share %n article(s); comparing %3 frames needs more.",
@@ -438,6 +430,25 @@ int runFrames(const QStringList &arguments)
         }
     }
 
+    if (parser.isSet(save)) {
+        const QStringList names = parser.values(frameName);
+        if (names.size() > partition.clusters)
+            return usageError(command,
+                CliText::tr("%n --frame-name given for %1 frame(s).", nullptr, int(names.size()))
+                    .arg(partition.clusters));
+        FrameRunSettings settings;
+        settings.maxK = options.maxK;
+        settings.bootstrap = replicates;
+        settings.seed = seedValue;
+        SaveFrameAnalysisEdit edit(
+            frameAnalysisRecord(input, analysis, stability, settings, parser.value(save), names),
+            CoderId {});
+        if (auto stored = project->apply(edit); !stored)
+            return report(stored.error());
+        err(CliText::tr("Saved the frames as \"%1\" in %2.")
+                .arg(edit.analysis().name, project->path()));
+    }
+
     if (parser.isSet(outFile)) {
         if (auto written = writeAssignments(parser.value(outFile), input, partition); !written)
             return report(written.error());
@@ -493,7 +504,7 @@ int runFrames(const QStringList &arguments)
             framesJson.append(frame);
         }
         QJsonObject byGroup;
-        for (const GroupTable &t : tables) {
+        for (const FrameGroupTable &t : tables) {
             QJsonArray rows;
             for (int f = 0; f < partition.clusters; ++f) {
                 QJsonArray row;
@@ -617,7 +628,7 @@ int runFrames(const QStringList &arguments)
         lines
             << CliText::tr("    closest to the centre: %1").arg(closest.join(QStringLiteral(", ")));
     }
-    for (const GroupTable &t : tables) {
+    for (const FrameGroupTable &t : tables) {
         lines << CliText::tr("Frames by %1: %2").arg(t.name, chiSquareText(t.test));
         QString header = QStringLiteral("  %1").arg(QString(), -24);
         for (int f = 0; f < partition.clusters; ++f)

@@ -312,3 +312,70 @@ TEST_CASE("frames of a project layer equal frames of the indicators built from t
     CHECK(cli({"frames", project, "--layer", "coders"}).err.contains("not a layer for frames"));
     CHECK(cli({"frames", project, "--layer", "coder:NOBODY"}).exitCode == 1);
 }
+
+TEST_CASE("frames --save stores the analysis --saved lists it and --delete-saved removes it")
+{
+    QTemporaryDir dir;
+    const QString project = dir.filePath("demo.fourfold");
+    REQUIRE(cli({"build-sample", FOURFOLD_SAMPLE_DIR, project}).exitCode == 0);
+    CHECK(cli({"frames", project, "--saved"}).out.contains("no saved frame analysis"));
+    const QString assignments = dir.filePath("frames.csv");
+    const CliRun saved = cli({"frames", project, "--layer", "coder:C01", "--k", "3", "--max-k", "4",
+        "--save", "C01 frames", "--frame-name", "First", "--frame-name", "Second", "--json",
+        "--out", assignments});
+    INFO(saved.err.toStdString());
+    REQUIRE(saved.exitCode == 0);
+    CHECK(saved.err.contains("Saved the frames as \"C01 frames\""));
+    const QJsonObject computed = cliJson(saved);
+
+    const CliRun list = cli({"frames", project, "--saved", "--json"});
+    REQUIRE(list.exitCode == 0);
+    const QJsonArray analyses = cliJson(list).value("analyses").toArray();
+    REQUIRE(analyses.size() == 1);
+    const QJsonObject a = analyses[0].toObject();
+    CHECK(a.value("name").toString() == "C01 frames");
+    CHECK(a.value("articles").toInt() == computed.value("articles").toInt());
+    const QJsonObject settings = a.value("settings").toObject();
+    CHECK(settings.value("layer").toString() == "coder:C01");
+    CHECK(settings.value("k").toInt() == 3);
+    CHECK(settings.value("max_k").toInt() == 4);
+    CHECK(settings.value("seed").toString() == "1");
+    CHECK(settings.value("variables") == computed.value("variables"));
+    const QJsonArray frames = a.value("frames").toArray();
+    REQUIRE(frames.size() == 3);
+    CHECK(frames[0].toObject().value("name").toString() == "First");
+    CHECK(frames[1].toObject().value("name").toString() == "Second");
+    CHECK(frames[2].toObject().value("name").toString().isEmpty());
+    // Each frame's size is the one the analysis printed and the one --out wrote.
+    QMap<int, int> written;
+    QFile out(assignments);
+    REQUIRE(out.open(QIODevice::ReadOnly));
+    for (const QByteArray &line : out.readAll().trimmed().split('\n').mid(1))
+        ++written[line.split(',')[1].toInt()];
+    for (qsizetype f = 0; f < 3; ++f) {
+        const int size = frames[f].toObject().value("size").toInt();
+        CHECK(size == computed.value("frames").toArray()[f].toObject().value("size").toInt());
+        CHECK(size == written.value(int(f) + 1));
+    }
+    CHECK(cli({"frames", project, "--saved"}).out.contains("F1  First"));
+
+    // Names are unique; --frame-name needs --save; --save is for a project.
+    const CliRun again = cli({"frames", project, "--layer", "coder:C01", "--save", "C01 frames"});
+    CHECK(again.exitCode != 0);
+    CHECK(again.err.contains("already called \"C01 frames\""));
+    CHECK(cli({"frames", project, "--frame-name", "x"}).exitCode == 2);
+    const QString matrix = dir.filePath("m.csv");
+    writeFile(matrix, "article,a\nx,1\ny,0\nz,1\n");
+    CHECK(cli({"frames", "--data", matrix, "--save", "x"}).exitCode == 2);
+    const CliRun tooMany = cli({"frames", project, "--layer", "coder:C01", "--k", "2", "--save",
+        "two", "--frame-name", "a", "--frame-name", "b", "--frame-name", "c"});
+    CHECK(tooMany.exitCode == 2);
+
+    // Deleting: gone from the list, the name free again; an unknown name is NotFound.
+    REQUIRE(cli({"frames", project, "--delete-saved", "C01 frames"}).exitCode == 0);
+    CHECK(cli({"frames", project, "--saved", "--json"}).out.contains("\"analyses\": [\n    ]"));
+    const CliRun missing = cli({"frames", project, "--delete-saved", "C01 frames"});
+    CHECK(missing.exitCode != 0);
+    CHECK(missing.err.contains("no saved frame analysis \"C01 frames\""));
+    CHECK(cli({"frames", project, "--layer", "coder:C01", "--save", "C01 frames"}).exitCode == 0);
+}
