@@ -3,6 +3,7 @@
 #include "app/desktop/codebook/codebook_editor.h"
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
+#include "app/desktop/frames/frames_window.h"
 #include "app/desktop/message_bar.h"
 #include "app/desktop/people/people_window.h"
 #include "app/desktop/reliability/reliability_window.h"
@@ -46,7 +47,7 @@ void LeadWindows::closeAll()
 {
     // Deleted at once, not later: each window holds a reference to the session's project.
     for (QPointer<QWidget> *w : {&m_comparison, &m_reliability, &m_studyDesign, &m_progress,
-             &m_extractors, &m_people, &m_codebook})
+             &m_extractors, &m_people, &m_codebook, &m_frames})
         delete w->data();
 }
 
@@ -142,6 +143,22 @@ void LeadWindows::writeReport()
     if (!m_session)
         return;
     ReportOptionsDialog choose(m_session->project(), m_owner);
+void LeadWindows::openFrames()
+{
+    if (!m_session)
+        return;
+    const bool first = !m_frames;
+    if (first) {
+        auto *w = new FramesWindow(m_session);
+        connect(m_session, &QObject::destroyed, w, &QObject::deleteLater);
+        connect(w, &FramesWindow::articleRequested, this, &LeadWindows::articleRequested);
+        m_frames = w;
+    }
+    raise(m_frames);
+    if (first)
+        static_cast<FramesWindow *>(m_frames.data())->compute();
+}
+
     // Start from what the lead is looking at in the Reliability window.
     if (auto *window = qobject_cast<ReliabilityWindow *>(m_reliability.data()))
         choose.setOptions(reportOptionsFor(window->request()));

@@ -4,6 +4,8 @@
 // Each window is opened once and raised when asked again; all are closed before the project they
 // show goes away.
 
+#include "core/model/ids.h"
+
 #include <QObject>
 #include <QPointer>
 
@@ -36,6 +38,8 @@ public:
     void openExtractors();
     void openPeople();
     void openCodebook();
+    // Lead → Frames…: computes the gold layer's frames when first opened.
+    void openFrames();
     // Asks for a file name and writes the reliability report (HTML or PDF by its suffix).
     void writeReport();
     // Asks for a coder and a file name and writes that coder's copy.
@@ -51,10 +55,13 @@ public:
     QWidget *extractors() const { return m_extractors; }
     QWidget *people() const { return m_people; }
     QWidget *codebook() const { return m_codebook; }
+    QWidget *frames() const { return m_frames; }
 
 signals:
     // Assignments or codings changed outside the desk (study design, merge): reload the list.
     void projectChanged();
+    // A window asks for an article to be opened on the desk (Frames: a double-clicked article).
+    void articleRequested(ArticleId article);
 
 private:
     void raise(QWidget *window);
@@ -69,6 +76,7 @@ private:
     QPointer<QWidget> m_extractors;
     QPointer<QWidget> m_people;
     QPointer<QWidget> m_codebook;
+    QPointer<QWidget> m_frames;
 };
 
 } // namespace fourfold

@@ -378,6 +378,7 @@ void MainWindow::buildMenus()
         {std::pair {QStringLiteral("system"), tr("System language")},
             std::pair {QStringLiteral("en"), QStringLiteral("English")},
             std::pair {QStringLiteral("nl"), QStringLiteral("Nederlands")},
+    m_leadMenu->addAction(tr("&Frames…"), m_lead, &LeadWindows::openFrames);
             std::pair {QStringLiteral("de"), QStringLiteral("Deutsch")}}) {
         QAction *a = language->addAction(name);
         a->setCheckable(true);
@@ -390,6 +391,10 @@ void MainWindow::buildMenus()
     help->addAction(
         tr("&Keyboard shortcuts"), QKeySequence::HelpContents, this, &MainWindow::showShortcuts);
 }
+    connect(m_lead, &LeadWindows::articleRequested, this, [this](ArticleId article) {
+        openArticle(article);
+        activateWindow();
+    });
 
 Status MainWindow::openProject(
     const QString &path, const QString &pseudonym, const std::optional<QString> &passphrase)
