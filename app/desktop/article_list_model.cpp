@@ -1,5 +1,8 @@
 #include "app/desktop/article_list_model.h"
 
+#include <QPainter>
+#include <QPixmap>
+
 namespace fourfold {
 
 ArticleListModel::ArticleListModel(QObject *parent)
@@ -50,6 +53,26 @@ QString ArticleListModel::statusLabel(const QString &status)
     return tr("not started");
 }
 
+namespace {
+
+// The near-copy mark: two small overlapping sheets, drawn once in the palette's text colour.
+QPixmap nearCopyMark()
+{
+    static const QPixmap mark = [] {
+        QPixmap pixmap(12, 12);
+        pixmap.fill(Qt::transparent);
+        QPainter painter(&pixmap);
+        painter.setPen(QPen(QColor(90, 90, 90), 1));
+        painter.setBrush(Qt::white);
+        painter.drawRect(QRectF(0.5, 0.5, 7, 8));
+        painter.drawRect(QRectF(3.5, 2.5, 7, 8));
+        return pixmap;
+    }();
+    return mark;
+}
+
+} // namespace
+
 QVariant ArticleListModel::data(const QModelIndex &index, int role) const
 {
     if (!checkIndex(index, CheckIndexOption::IndexIsValid))
@@ -59,6 +82,15 @@ QVariant ArticleListModel::data(const QModelIndex &index, int role) const
         return r.summary.id.value;
     if (role == StatusRole)
         return r.status;
+    if (role == NearCopyRole)
+        return !r.nearCopyOf.isEmpty();
+    if (index.column() == Title && !r.nearCopyOf.isEmpty()) {
+        if (role == Qt::DecorationRole)
+            return nearCopyMark();
+        if (role == Qt::ToolTipRole)
+            return tr("%1\nNear copy of %2")
+                .arg(r.summary.title, r.nearCopyOf.join(QStringLiteral("; ")));
+    }
     if (role == Qt::TextAlignmentRole && (index.column() == Length || index.column() == Time))
         return int(Qt::AlignRight | Qt::AlignVCenter);
     if (role != Qt::DisplayRole && role != Qt::ToolTipRole)

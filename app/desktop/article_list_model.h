@@ -14,6 +14,9 @@ struct ArticleRow {
     ArticleSummary summary;
     QString status; // "assigned", "started", "done"
     qint64 seconds = 0;
+    // The older articles this one is a near copy of (found at import), each as
+    // "“title” (id), similarity 0.93"; the title shows a mark and its tooltip lists them.
+    QStringList nearCopyOf;
 };
 
 class ArticleListModel : public QAbstractTableModel
@@ -23,6 +26,8 @@ public:
     enum Column { Title, Outlet, Language, Length, Status, Time, ColumnCount };
     static constexpr int ArticleIdRole = Qt::UserRole + 1;
     static constexpr int StatusRole = Qt::UserRole + 2;
+    // True for an article that is a near copy of an older one.
+    static constexpr int NearCopyRole = Qt::UserRole + 3;
 
     explicit ArticleListModel(QObject *parent = nullptr);
 

@@ -5,6 +5,7 @@
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/coding_scope.h"
+#include "core/project/near_copies.h"
 
 #include <QHash>
 #include <QSet>
@@ -70,7 +71,8 @@ std::vector<ArticleRow> CodingSession::articleRows() const
     // Spans or answers mean the work has started, whatever the assignment says (CodingScope
     // knows who holds codings where).
     auto scope = CodingScope::load(m_project);
-    if (!all || !assignments || !scope)
+    auto nearCopies = NearCopies::byArticle(m_project);
+    if (!all || !assignments || !scope || !nearCopies)
         return {};
     struct Mine {
         QString status = QStringLiteral("assigned");
@@ -97,6 +99,10 @@ std::vector<ArticleRow> CodingSession::articleRows() const
         if (row.status == QLatin1String("assigned")
             && scope->state(s.id, m_coder.id) != CodingState::Untouched)
             row.status = QStringLiteral("started");
+        for (const store::NearCopyRow &n : nearCopies->value(s.id))
+            row.nearCopyOf << tr("“%1” (%2), similarity %3")
+                                  .arg(n.otherTitle, n.otherExternalId)
+                                  .arg(n.similarity, 0, 'f', 2);
         out.push_back(std::move(row));
     }
     return out;

@@ -259,6 +259,13 @@ QWidget *StudyDesignWindow::buildDrawPage()
                               "to its size in the frame."));
     formLayout->addRow(tr("Method:"), m_stratify);
 
+    m_leaveOutNearCopies = new QCheckBox(tr("Leave near copies out of the sampling frame"), form);
+    m_leaveOutNearCopies->setObjectName(QStringLiteral("draw-leave-out-near-copies"));
+    m_leaveOutNearCopies->setToolTip(
+        tr("An article found at import to be a near copy of an older one (the same story with "
+           "small edits) is not drawn; the older article stays in the frame."));
+    formLayout->addRow(QString(), m_leaveOutNearCopies);
+
     auto *seedRow = new QWidget(form);
     auto *seedLayout = new QHBoxLayout(seedRow);
     seedLayout->setContentsMargins(0, 0, 0, 0);
@@ -366,6 +373,7 @@ QWidget *StudyDesignWindow::buildDrawPage()
     connect(m_drawSize, &QSpinBox::valueChanged, this, invalidate);
     connect(m_drawPercent, &QDoubleSpinBox::valueChanged, this, invalidate);
     connect(m_stratify, &QComboBox::currentIndexChanged, this, invalidate);
+    connect(m_leaveOutNearCopies, &QCheckBox::toggled, this, invalidate);
     connect(m_drawSeed, &QLineEdit::textChanged, this, invalidate);
     connect(m_drawCoders, &QListWidget::itemChanged, this, invalidate);
     connect(m_alphaMin, &QDoubleSpinBox::valueChanged, this, invalidate);
@@ -430,6 +438,7 @@ void StudyDesignWindow::planDraw()
     request.alphaMin = m_alphaMin->value();
     request.significance = m_significance->currentData().toDouble();
     request.rarestProportion = m_rarest->value();
+    request.leaveOutNearCopies = m_leaveOutNearCopies->isChecked();
     auto draw = StudyDesign::planDraw(m_project, request);
     if (!draw) {
         showError(m_drawError, draw.error().message);

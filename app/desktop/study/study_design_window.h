@@ -14,6 +14,7 @@
 #include <vector>
 
 class QButtonGroup;
+class QCheckBox;
 class QComboBox;
 class QDoubleSpinBox;
 class QLabel;
@@ -92,6 +93,7 @@ private:
     QSpinBox *m_drawSize = nullptr;
     QDoubleSpinBox *m_drawPercent = nullptr;
     QComboBox *m_stratify = nullptr;
+    QCheckBox *m_leaveOutNearCopies = nullptr;
     QLineEdit *m_drawSeed = nullptr;
     QListWidget *m_drawCoders = nullptr;
     QDoubleSpinBox *m_alphaMin = nullptr;
