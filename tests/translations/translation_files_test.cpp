@@ -103,3 +103,31 @@ TEST_CASE("No source hides its sentences from lupdate behind a file-local tr fun
             CHECK_FALSE(source.contains(unqualified));
     }
 }
+
+TEST_CASE("Every translation keeps the placeholders of its source")
+{
+    // A lost %2 prints the argument nowhere; an extra one prints "%3" to the user.
+    const QRegularExpression placeholder(QStringLiteral("%(\\d+|n)"));
+    auto placeholders = [&](const QString &s) {
+        QStringList found;
+        for (auto it = placeholder.globalMatch(s); it.hasNext();)
+            found << it.next().captured(0);
+        found.removeDuplicates();
+        found.sort();
+        return found;
+    };
+    for (const QString &lang : {QStringLiteral("de"), QStringLiteral("nl")}) {
+        const TsFile ts = readTsFile(lang);
+        int compared = 0;
+        for (auto it = ts.translations.cbegin(); it != ts.translations.cend(); ++it) {
+            for (const QString &form : it.value()) {
+                INFO(lang.toStdString()
+                    << " " << it.key().first.toStdString() << ": " << it.key().second.toStdString()
+                    << " -> " << form.toStdString());
+                CHECK(placeholders(form) == placeholders(it.key().second));
+                ++compared;
+            }
+        }
+        CHECK(compared >= ts.messages);
+    }
+}
