@@ -212,6 +212,69 @@ int runTeamSync(const QStringList &arguments)
     return ExitOk;
 }
 
+int runTeamStatus(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("team status");
+    QCommandLineParser parser;
+    const QCommandLineOption json(
+        QStringLiteral("json"), QCoreApplication::translate("cli", "Print the result as JSON."));
+    parser.addOption(json);
+    parser.addPositionalArgument(
+        QStringLiteral("FILE"), QCoreApplication::translate("cli", "Your team working file."));
+    if (int rc = parseCommandLine(parser, command,
+            QCoreApplication::translate("cli",
+                "Show a working file's team project: its server, whose file it is, when it last "
+                "synced and what the next sync would send. Reads the file only (works offline)."),
+            arguments);
+        rc >= 0)
+        return rc;
+    if (parser.positionalArguments().size() != 1)
+        return usageError(
+            command, QCoreApplication::translate("cli", "expected exactly one working file."));
+    auto project = Project::openForReading(parser.positionalArguments().first());
+    if (!project)
+        return report(project.error());
+    auto result = TeamProject::status(*project);
+    if (!result)
+        return report(result.error());
+    if (parser.isSet(json)) {
+        QJsonObject byType;
+        for (auto it = result->waitingByType.cbegin(); it != result->waitingByType.cend(); ++it)
+            byType.insert(it.key(), it.value());
+        printJson(QJsonObject {{QStringLiteral("server"), result->server},
+            {QStringLiteral("pseudonym"), result->pseudonym},
+            {QStringLiteral("lead"), result->lead},
+            {QStringLiteral("last_change"), result->lastChange},
+            {QStringLiteral("last_sync"),
+                result->lastSync.isEmpty() ? QJsonValue() : QJsonValue(result->lastSync)},
+            {QStringLiteral("waiting"), result->waiting},
+            {QStringLiteral("waiting_by_type"), byType},
+            {QStringLiteral("open_conflicts"), result->openConflicts}});
+        return ExitOk;
+    }
+    out(QCoreApplication::translate("cli", "Working file of %1 (%2) on %3, through change %4.")
+            .arg(result->pseudonym,
+                result->lead ? QCoreApplication::translate("cli", "lead")
+                             : QCoreApplication::translate("cli", "coder"),
+                result->server)
+            .arg(result->lastChange));
+    out(result->lastSync.isEmpty()
+            ? QCoreApplication::translate("cli", "Not synced since it was made.")
+            : QCoreApplication::translate("cli", "Last synced %1.").arg(result->lastSync));
+    QStringList parts;
+    for (auto it = result->waitingByType.cbegin(); it != result->waitingByType.cend(); ++it)
+        parts << QStringLiteral("%1 %2").arg(it.value()).arg(it.key());
+    out(result->waiting == 0
+            ? QCoreApplication::translate("cli", "Nothing waiting to be sent.")
+            : QCoreApplication::translate(
+                "cli", "%n change(s) waiting to be sent (%1).", nullptr, int(result->waiting))
+                  .arg(parts.join(QStringLiteral(", "))));
+    if (result->openConflicts > 0)
+        out(QCoreApplication::translate("cli", "%n conflict(s) from syncs wait for the lead.",
+            nullptr, int(result->openConflicts)));
+    return ExitOk;
+}
+
 } // namespace
 
 int runTeam(const QStringList &arguments)
@@ -223,6 +286,8 @@ int runTeam(const QStringList &arguments)
         return runTeamJoin(arguments.mid(1));
     if (sub == QLatin1String("sync"))
         return runTeamSync(arguments.mid(1));
+    if (sub == QLatin1String("status"))
+        return runTeamStatus(arguments.mid(1));
     if (sub.isEmpty() || sub == QLatin1String("--help") || sub == QLatin1String("-h")) {
         out(QCoreApplication::translate("cli", "Usage: fourfold-cli team SUBCOMMAND [options]"));
         out(QCoreApplication::translate("cli",
@@ -231,6 +296,8 @@ int runTeam(const QStringList &arguments)
             "cli", "  join      Write your working file of a team project from its server."));
         out(QCoreApplication::translate(
             "cli", "  sync      Push and pull a working file's codings once."));
+        out(QCoreApplication::translate(
+            "cli", "  status    What a working file last synced and what waits to be sent."));
         return sub.isEmpty() ? ExitUsage : ExitOk;
     }
     return usageError(QStringLiteral("team"),

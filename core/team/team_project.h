@@ -6,6 +6,7 @@
 
 #include "core/model/error.h"
 
+#include <QMap>
 #include <QString>
 
 #include <vector>
@@ -62,6 +63,20 @@ struct SyncReport {
     qint64 lastChange = 0;
 };
 
+// A working file's state, read from the file alone (it works without the server).
+struct TeamStatus {
+    QString server; // the connection string the file records (no password)
+    QString pseudonym; // whose working file it is
+    bool lead = false;
+    qint64 lastChange = 0; // the highest server change number the file holds
+    QString lastSync; // ISO 8601 UTC of the last sync that completed; empty if none yet
+    // Objects the next sync would send: changed here since they were last synced, or new, or
+    // with coding time not yet sent; by portable type ("annotation", "assignment", …).
+    qint64 waiting = 0;
+    QMap<QString, qint64> waitingByType;
+    qint64 openConflicts = 0; // conflicts found by syncs that the lead has not decided
+};
+
 class TeamProject
 {
 public:
@@ -76,6 +91,8 @@ public:
     // The oldest server transaction running at the last pull: the next pull reads again what
     // such transactions wrote (they may hold change numbers below the last one).
     static QString lastXminSettingKey() { return QStringLiteral("team.last_xmin"); }
+    // When the last sync completed (ISO 8601 UTC).
+    static QString lastSyncSettingKey() { return QStringLiteral("team.last_sync"); }
 
     // Creates the team project of `project` on the empty database `server` (a libpq connection
     // string; the login must own the database and may create roles): the schema, a group role
@@ -117,6 +134,12 @@ public:
     // nothing is kept. People, articles, codebook versions and gold are not synced yet.
     // Fails with InvalidArgument for a file that is not a team working file, or as join.
     static Result<SyncReport> sync(Project &project);
+
+    // What `project`, a working file, holds of its team project and what its next sync would
+    // send (the objects sync compares with their last synced version, counted the same way).
+    // Reads only the file: it answers offline too. Fails with InvalidArgument for a file that is
+    // not a team working file, or the store's error.
+    static Result<TeamStatus> status(const Project &project);
 };
 
 } // namespace fourfold

@@ -56,4 +56,12 @@ QString teamBaseValue(const store::PortableRow &row)
     return row.digest() + QLatin1Char(' ') + QString::number(row.seconds);
 }
 
+std::optional<TeamBase> parseTeamBase(const QString &value)
+{
+    const qsizetype space = value.indexOf(QLatin1Char(' '));
+    if (space < 0)
+        return std::nullopt;
+    return TeamBase {value.left(space), value.mid(space + 1).toLongLong()};
+}
+
 } // namespace fourfold

@@ -8,6 +8,8 @@
 
 #include <QByteArray>
 
+#include <optional>
+
 namespace fourfold {
 
 // The server table holding objects of the portable type `type` ("assignment", "annotation",
@@ -28,5 +30,11 @@ QString teamObjectKey(const store::PortableRow &row);
 QString teamBaseKey(const store::PortableRow &row);
 QString teamBaseValue(const store::PortableRow &row);
 inline constexpr const char *kTeamBasePrefix = "team.base:";
+// A teamBaseValue read back; none for a malformed value.
+struct TeamBase {
+    QString digest;
+    qint64 seconds = 0;
+};
+std::optional<TeamBase> parseTeamBase(const QString &value);
 
 } // namespace fourfold

@@ -13,6 +13,7 @@
 #include "core/team/team_rows.h"
 
 #include <QCoreApplication>
+#include <QDateTime>
 
 #include <map>
 #include <optional>
@@ -27,19 +28,6 @@ struct TeamProjectText {
 };
 
 const char *const kTypes[] = {"assignment", "annotation", "judgement", "link"};
-
-struct Base {
-    QString digest;
-    qint64 seconds = 0;
-};
-
-std::optional<Base> parseBase(const QString &value)
-{
-    const qsizetype space = value.indexOf(QLatin1Char(' '));
-    if (space < 0)
-        return std::nullopt;
-    return Base {value.left(space), value.mid(space + 1).toLongLong()};
-}
 
 // The coder-copy rule for two versions changed on both sides: the later modification wins,
 // ties (and objects without a modification time) by the higher digest.
@@ -56,7 +44,7 @@ bool serverWins(const store::PortableRow &local, const store::PortableRow &serve
 struct Versions {
     std::optional<store::PortableRow> local;
     std::optional<store::PortableRow> server;
-    std::optional<Base> base;
+    std::optional<TeamBase> base;
     QString coder; // the coder the object belongs to
 };
 
@@ -135,7 +123,7 @@ Result<SyncReport> TeamProject::sync(Project &project)
             const int order = int(serverTableOf(row.type));
             Versions &v = objects[{order, teamObjectKey(row)}];
             v.coder = c.uuid;
-            v.base = parseBase(bases->value(teamBaseKey(row)));
+            v.base = parseTeamBase(bases->value(teamBaseKey(row)));
             v.local = std::move(row);
         }
     }
@@ -154,7 +142,7 @@ Result<SyncReport> TeamProject::sync(Project &project)
                           .toString()
                     : row.content.value(QLatin1String("coder")).toString();
             if (!v.base)
-                v.base = parseBase(bases->value(teamBaseKey(row)));
+                v.base = parseTeamBase(bases->value(teamBaseKey(row)));
             v.server = std::move(row);
         }
     }
@@ -235,6 +223,10 @@ Result<SyncReport> TeamProject::sync(Project &project)
         !st)
         return abandon(st.error());
     if (auto st = store::setSetting(db, lastXminSettingKey(), *xmin); !st)
+        return abandon(st.error());
+    if (auto st = store::setSetting(
+            db, lastSyncSettingKey(), QDateTime::currentDateTimeUtc().toString(Qt::ISODate));
+        !st)
         return abandon(st.error());
     if (auto st = conn->exec(QStringLiteral("COMMIT")); !st)
         return abandon(st.error());
