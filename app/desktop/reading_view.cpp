@@ -1,6 +1,5 @@
 #include "app/desktop/reading_view.h"
 
-#include "app/colour/colour.h"
 #include "app/desktop/function_style.h"
 #include "core/model/logging.h"
 
@@ -8,7 +7,6 @@
 #include <QApplication>
 #include <QContextMenuEvent>
 #include <QFontMetricsF>
-#include <QGlyphRun>
 #include <QHelpEvent>
 #include <QKeyEvent>
 #include <QLoggingCategory>
@@ -32,25 +30,6 @@ namespace fourfold {
 
 namespace {
 
-// `c` moved towards `target` in small steps until it reaches `ratio` against `against`.
-QColor withContrast(QColor c, const QColor &target, const QColor &against, qreal ratio)
-{
-    for (int i = 0; i < 20 && contrastRatio(c, against) < ratio; ++i)
-        c = mixColours(c, target, 0.1);
-    return c;
-}
-
-bool isRtlDirection(QChar::Direction d)
-{
-    return d == QChar::DirR || d == QChar::DirAL || d == QChar::DirRLE || d == QChar::DirRLO
-        || d == QChar::DirRLI;
-}
-
-bool isStrongDirection(QChar::Direction d)
-{
-    return d == QChar::DirL || d == QChar::DirR || d == QChar::DirAL;
-}
-
 // The role label in the margin.
 QString roleLabel(ParagraphRole role)
 {
@@ -65,15 +44,11 @@ QString roleLabel(ParagraphRole role)
     return {};
 }
 
-quint64 rangeKey(const Utf16Range &r16)
-{
-    return (quint64(r16.start) << 32) | quint64(r16.end);
-}
-
 } // namespace
 
 ReadingView::ReadingView(QWidget *parent)
     : QTextEdit(parent)
+    , m_lanes(viewport())
 {
     setReadOnly(true);
     setAcceptRichText(false);
@@ -119,13 +94,7 @@ void ReadingView::setArticle(const Article &article)
     m_segmentation.sentences = m_article.sentences;
     m_segmentation.tokens = m_article.tokens;
 
-    m_hasRtl = false;
-    for (const uint c : m_article.text.toUcs4()) {
-        if (isRtlDirection(QChar::direction(char32_t(c)))) {
-            m_hasRtl = true;
-            break;
-        }
-    }
+    m_lanes.setText(m_article.text);
 
     m_paragraphStarts16.clear();
     m_paragraphRoles.clear();
@@ -138,8 +107,7 @@ void ReadingView::setArticle(const Article &article)
     }
 
     m_annotations.clear();
-    m_spans.clear();
-    m_indexById.clear();
+    m_lanes.setSpans({});
     m_drag = {};
     const bool hadSelection = m_selected.isValid();
     m_selected = {};
@@ -153,8 +121,8 @@ void ReadingView::setArticle(const Article &article)
 void ReadingView::setSpans(const std::vector<Annotation> &spans)
 {
     m_annotations = spans;
-    m_spans.clear();
-    m_spans.reserve(spans.size());
+    std::vector<LaneSpan> shown;
+    shown.reserve(spans.size());
     for (const Annotation &a : spans) {
         if (a.deleted || !a.id.isValid())
             continue;
@@ -163,23 +131,9 @@ void ReadingView::setSpans(const std::vector<Annotation> &spans)
         const Utf16Range r16 = m_map.utf16Range(a.content.range);
         if (!FOURFOLD_SOFT_ASSERT(lcDesktop(), r16.start >= 0 && !r16.isEmpty()))
             continue;
-        m_spans.push_back({a.id, a.content.function, a.content.range, r16});
+        shown.push_back({a.id, a.content.function, a.content.range, r16});
     }
-    std::sort(m_spans.begin(), m_spans.end(), [](const Span &a, const Span &b) {
-        if (a.range16.start != b.range16.start)
-            return a.range16.start < b.range16.start;
-        if (a.range16.end != b.range16.end)
-            return a.range16.end < b.range16.end;
-        return a.id < b.id;
-    });
-    m_indexById.clear();
-    m_indexById.reserve(qsizetype(m_spans.size()));
-    for (std::size_t i = 0; i < m_spans.size(); ++i)
-        m_indexById.insert(m_spans[i].id.value, qsizetype(i));
-
-    // Stale ranges (spans resized or deleted) only cost memory; drop them now and then.
-    if (m_geometry.size() > 4 * qsizetype(m_spans.size()) + 256)
-        m_geometry.clear();
+    m_lanes.setSpans(std::move(shown));
 
     if (m_drag.active && !spanById(m_drag.id))
         m_drag = {};
@@ -210,10 +164,10 @@ void ReadingView::setSelectedSpan(AnnotationId id)
 
 void ReadingView::scrollToSpan(AnnotationId id)
 {
-    const Span *span = spanById(id);
+    const LaneSpan *span = spanById(id);
     if (!span)
         return;
-    const Geometry &g = geometry(span->range16);
+    const SpanGeometry &g = m_lanes.geometry(span->range16);
     if (g.pieces.empty())
         return;
     QScrollBar *bar = verticalScrollBar();
@@ -283,49 +237,51 @@ void ReadingView::applyFunction(FramingFunction f, bool exact)
             emit createSpanRequested(f, range);
         return;
     }
-    if (const Span *span = spanById(m_selected); span && span->function != f)
+    if (const LaneSpan *span = spanById(m_selected); span && span->function != f)
         emit relabelSpanRequested(span->id, f);
 }
 
 void ReadingView::selectNextSpan()
 {
-    if (m_spans.empty())
+    const std::vector<LaneSpan> &shown = m_lanes.spans();
+    if (shown.empty())
         return;
     std::size_t next = 0;
-    if (const Span *span = spanById(m_selected)) {
-        next = std::size_t(span - m_spans.data()) + 1;
-        if (next >= m_spans.size())
+    if (const LaneSpan *span = spanById(m_selected)) {
+        next = std::size_t(span - shown.data()) + 1;
+        if (next >= shown.size())
             return;
     } else {
         const qint64 caret = textCursor().selectionStart();
-        const auto it = std::lower_bound(m_spans.begin(), m_spans.end(), caret,
-            [](const Span &s, qint64 pos) { return s.range16.start < pos; });
-        if (it == m_spans.end())
+        const auto it = std::lower_bound(shown.begin(), shown.end(), caret,
+            [](const LaneSpan &s, qint64 pos) { return s.range16.start < pos; });
+        if (it == shown.end())
             return;
-        next = std::size_t(it - m_spans.begin());
+        next = std::size_t(it - shown.begin());
     }
-    selectSpanByUser(m_spans[next].id);
+    selectSpanByUser(shown[next].id);
 }
 
 void ReadingView::selectPreviousSpan()
 {
-    if (m_spans.empty())
+    const std::vector<LaneSpan> &shown = m_lanes.spans();
+    if (shown.empty())
         return;
     std::size_t previous = 0;
-    if (const Span *span = spanById(m_selected)) {
-        previous = std::size_t(span - m_spans.data());
+    if (const LaneSpan *span = spanById(m_selected)) {
+        previous = std::size_t(span - shown.data());
         if (previous == 0)
             return;
         --previous;
     } else {
         const qint64 caret = textCursor().selectionStart();
-        const auto it = std::lower_bound(m_spans.begin(), m_spans.end(), caret,
-            [](const Span &s, qint64 pos) { return s.range16.start < pos; });
-        if (it == m_spans.begin())
+        const auto it = std::lower_bound(shown.begin(), shown.end(), caret,
+            [](const LaneSpan &s, qint64 pos) { return s.range16.start < pos; });
+        if (it == shown.begin())
             return;
-        previous = std::size_t(it - m_spans.begin()) - 1;
+        previous = std::size_t(it - shown.begin()) - 1;
     }
-    selectSpanByUser(m_spans[previous].id);
+    selectSpanByUser(shown[previous].id);
 }
 
 void ReadingView::selectSpanByUser(AnnotationId id)
@@ -339,7 +295,7 @@ void ReadingView::selectSpanByUser(AnnotationId id)
 
 void ReadingView::resizeByWord(bool moveStart, int direction)
 {
-    const Span *span = spanById(m_selected);
+    const LaneSpan *span = spanById(m_selected);
     if (!span)
         return;
     const std::vector<TextRange> &tokens = m_segmentation.tokens;
@@ -395,7 +351,7 @@ bool ReadingView::wantsKey(const QKeyEvent *e) const
     if ((key == Qt::Key_Delete || key == Qt::Key_Backspace) && mods == Qt::NoModifier)
         return hasSpan;
     if ((key == Qt::Key_Up || key == Qt::Key_Down) && mods == Qt::AltModifier)
-        return !m_spans.empty();
+        return !m_lanes.spans().empty();
     if ((key == Qt::Key_Left || key == Qt::Key_Right)
         && (mods == Qt::AltModifier || mods == (Qt::AltModifier | Qt::ShiftModifier)))
         return hasSpan;
@@ -444,9 +400,9 @@ void ReadingView::keyPressEvent(QKeyEvent *e)
         // forwards, as the caret does.
         const bool moveStart = !(mods & Qt::ShiftModifier);
         int direction = e->key() == Qt::Key_Right ? 1 : -1;
-        if (const Span *span = spanById(m_selected)) {
+        if (const LaneSpan *span = spanById(m_selected)) {
             const qint64 at = moveStart ? span->range16.start : span->range16.end - 1;
-            if (isRtlAt(at, document()->findBlock(int(at))))
+            if (m_lanes.isRtlAt(at, document()->findBlock(int(at))))
                 direction = -direction;
         }
         resizeByWord(moveStart, direction);
@@ -477,15 +433,15 @@ void ReadingView::mousePressEvent(QMouseEvent *e)
     m_pressOnText = false;
     if (e->button() == Qt::LeftButton) {
         const QPoint pos = e->position().toPoint();
-        const Hit hit = hitTest(pos);
-        if (hit.kind == Hit::StartHandle || hit.kind == Hit::EndHandle) {
-            const Span *span = spanById(m_selected);
-            m_drag = {true, hit.kind == Hit::StartHandle, span->id, span->range, span->range};
+        const LaneHit hit = hitTest(pos);
+        if (hit.kind == LaneHit::StartHandle || hit.kind == LaneHit::EndHandle) {
+            const LaneSpan *span = spanById(m_selected);
+            m_drag = {true, hit.kind == LaneHit::StartHandle, span->id, span->range, span->range};
             setFocus(Qt::MouseFocusReason);
             e->accept();
             return;
         }
-        if (hit.kind == Hit::Lane || hit.kind == Hit::Badge) {
+        if (hit.kind == LaneHit::Lane || hit.kind == LaneHit::Badge) {
             // A lane is not text: do not move the caret.
             m_pendingSpanClick = hit.spans.front();
             m_pressPos = pos;
@@ -503,8 +459,8 @@ void ReadingView::mouseDoubleClickEvent(QMouseEvent *e)
 {
     // A double click on a lane, badge or handle is two clicks on the span, not a word selection
     // in the line next to it.
-    const Hit::Kind kind = hitTest(e->position().toPoint()).kind;
-    if (e->button() == Qt::LeftButton && kind != Hit::Nothing && kind != Hit::Text) {
+    const LaneHit::Kind kind = hitTest(e->position().toPoint()).kind;
+    if (e->button() == Qt::LeftButton && kind != LaneHit::Nothing && kind != LaneHit::Text) {
         e->accept();
         return;
     }
@@ -529,11 +485,11 @@ void ReadingView::mouseMoveEvent(QMouseEvent *e)
     }
     QTextEdit::mouseMoveEvent(e);
     if (e->buttons() == Qt::NoButton) {
-        const Hit::Kind kind = hitTest(pos).kind;
+        const LaneHit::Kind kind = hitTest(pos).kind;
         Qt::CursorShape shape = Qt::IBeamCursor;
-        if (kind == Hit::StartHandle || kind == Hit::EndHandle)
+        if (kind == LaneHit::StartHandle || kind == LaneHit::EndHandle)
             shape = Qt::SizeHorCursor;
-        else if (kind == Hit::Lane || kind == Hit::Badge)
+        else if (kind == LaneHit::Lane || kind == LaneHit::Badge)
             shape = Qt::PointingHandCursor;
         viewport()->setCursor(shape);
     }
@@ -555,8 +511,8 @@ void ReadingView::mouseReleaseEvent(QMouseEvent *e)
     }
     if (m_pendingSpanClick.isValid()) {
         m_pendingSpanClick = {};
-        const Hit hit = hitTest(pos);
-        if (hit.kind == Hit::Lane || hit.kind == Hit::Badge)
+        const LaneHit hit = hitTest(pos);
+        if (hit.kind == LaneHit::Lane || hit.kind == LaneHit::Badge)
             selectFromHit(hit);
         e->accept();
         return;
@@ -564,8 +520,8 @@ void ReadingView::mouseReleaseEvent(QMouseEvent *e)
     QTextEdit::mouseReleaseEvent(e);
     if (m_pressOnText && e->button() == Qt::LeftButton && !textCursor().hasSelection()
         && (pos - m_pressPos).manhattanLength() < QApplication::startDragDistance()) {
-        const Hit hit = hitTest(pos);
-        if (hit.kind == Hit::Text)
+        const LaneHit hit = hitTest(pos);
+        if (hit.kind == LaneHit::Text)
             selectFromHit(hit);
         else
             setSelectedSpan({});
@@ -573,7 +529,7 @@ void ReadingView::mouseReleaseEvent(QMouseEvent *e)
     m_pressOnText = false;
 }
 
-void ReadingView::selectFromHit(const Hit &hit)
+void ReadingView::selectFromHit(const LaneHit &hit)
 {
     if (hit.spans.empty())
         return;
@@ -620,14 +576,14 @@ void ReadingView::contextMenuEvent(QContextMenuEvent *e)
     const bool hasSelection = textCursor().hasSelection();
     // A right click on a span (with no text selected) acts on that span.
     if (!hasSelection && e->reason() == QContextMenuEvent::Mouse) {
-        const Hit hit = hitTest(e->pos());
+        const LaneHit hit = hitTest(e->pos());
         if (!hit.spans.empty()
             && std::find(hit.spans.begin(), hit.spans.end(), m_selected) == hit.spans.end())
             selectFromHit(hit);
     }
     QMenu *menu = createStandardContextMenu();
     menu->addSeparator();
-    const Span *span = spanById(m_selected);
+    const LaneSpan *span = spanById(m_selected);
     for (FramingFunction f : kFramingFunctions) {
         const QString label = hasSelection ? tr("Mark as %1").arg(functionName(f))
                                            : tr("Change to %1").arg(functionName(f));
@@ -649,15 +605,15 @@ bool ReadingView::viewportEvent(QEvent *e)
 {
     if (e->type() == QEvent::ToolTip) {
         auto *help = static_cast<QHelpEvent *>(e);
-        const Hit hit = hitTest(help->pos());
-        if (hit.spans.empty() || hit.kind == Hit::Nothing) {
+        const LaneHit hit = hitTest(help->pos());
+        if (hit.spans.empty() || hit.kind == LaneHit::Nothing) {
             QToolTip::hideText();
             e->ignore();
             return true;
         }
         QStringList lines;
         for (AnnotationId id : hit.spans) {
-            const Span *span = spanById(id);
+            const LaneSpan *span = spanById(id);
             QString quote = m_article.text.mid(span->range16.start, span->range16.length());
             if (quote.size() > 60)
                 quote = quote.left(59) + QChar(0x2026);
@@ -676,7 +632,7 @@ void ReadingView::updateMetrics()
 {
     const QFontMetricsF fm(font());
     const qreal em = fm.height();
-    Metrics m;
+    LaneMetrics m;
     // Lanes are spaced about a quarter of a line apart: four of them, plus a gap, fit under the
     // glyphs' descent; everything follows the font, so it scales with the DPI.
     m.pitch = std::max<qreal>(4, std::round(em * 0.3));
@@ -707,27 +663,12 @@ void ReadingView::updateMetrics()
         widest = std::max(widest, lm.horizontalAdvance(roleLabel(role)));
     m.labelColumn = std::ceil(widest + 2 * em);
     m_metrics = m;
+    m_lanes.setMetrics(m);
 }
 
 void ReadingView::updateColours()
 {
-    const QPalette pal = palette();
-    const QColor base = pal.color(QPalette::Base);
-    m_dark = base.lightnessF() < 0.5;
-    const QColor white(Qt::white);
-    const QColor black(Qt::black);
-    for (FramingFunction f : kFramingFunctions) {
-        const auto i = std::size_t(f);
-        QColor lane = functionStyle(f).colour;
-        // On a dark background the palette's darker hues (blue above all) are lightened until
-        // they read as well as text would (WCAG 2.1 SC 1.4.3, 4.5:1); on light backgrounds the
-        // colours stay exactly as defined.
-        if (m_dark)
-            lane = withContrast(lane, white, base, 4.5);
-        m_laneColours[i] = lane;
-        m_badgeFill[i] = mixColours(base, lane, m_dark ? 0.22 : 0.12);
-        m_badgeText[i] = withContrast(lane, m_dark ? white : black, m_badgeFill[i], 4.5);
-    }
+    m_colours = LaneColours::on(palette().color(QPalette::Base));
 }
 
 void ReadingView::rebuildDocument()
@@ -756,7 +697,7 @@ void ReadingView::rebuildDocument()
     }
 
     m_leftMargin = m_rightMargin = -1;
-    m_geometry.clear();
+    m_lanes.setDocument(doc);
     {
         const QScopedValueRollback guard(m_changingSelection, true);
         setExtraSelections({});
@@ -791,8 +732,7 @@ void ReadingView::updateMargins()
 
 void ReadingView::invalidateGeometry()
 {
-    m_geometry.clear();
-    m_geometryWidth = -1;
+    m_lanes.invalidate();
 }
 
 void ReadingView::resizeEvent(QResizeEvent *e)
@@ -864,11 +804,11 @@ void ReadingView::updateEmphasis()
         // Okabe–Ito yellow, which no function uses; background only, so the layout (and the
         // cached span geometry) stays as it is.
         QColor yellow(0xF0, 0xE4, 0x42);
-        yellow.setAlphaF(m_dark ? 0.35f : 0.55f);
+        yellow.setAlphaF(m_colours.dark ? 0.35f : 0.55f);
         mark.format.setBackground(yellow);
         selections << mark;
     }
-    const Span *span = spanById(m_drag.active ? m_drag.id : m_selected);
+    const LaneSpan *span = spanById(m_drag.active ? m_drag.id : m_selected);
     if (span) {
         const Utf16Range r16 = m_drag.active ? m_map.utf16Range(m_drag.preview) : span->range16;
         if (r16.start >= 0) {
@@ -877,7 +817,7 @@ void ReadingView::updateEmphasis()
             tint.cursor.setPosition(int(r16.start));
             tint.cursor.setPosition(int(r16.end), QTextCursor::KeepAnchor);
             QColor colour = laneColour(span->function);
-            colour.setAlphaF(m_dark ? 0.30f : 0.16f);
+            colour.setAlphaF(m_colours.dark ? 0.30f : 0.16f);
             tint.format.setBackground(colour);
             selections << tint;
         }
@@ -888,11 +828,11 @@ void ReadingView::updateEmphasis()
 
 void ReadingView::updateAccessibleDescription()
 {
-    const Span *span = spanById(m_selected);
+    const LaneSpan *span = spanById(m_selected);
     if (!span) {
         setAccessibleDescription(tr("%n span(s). Select text and press 1 to 4 to mark a framing "
                                     "function; Alt+Down and Alt+Up move between spans.",
-            nullptr, int(m_spans.size())));
+            nullptr, int(m_lanes.spans().size())));
         return;
     }
     QString quote = m_article.text.mid(span->range16.start, span->range16.length());
@@ -905,159 +845,6 @@ void ReadingView::updateAccessibleDescription()
 }
 
 // --- geometry --------------------------------------------------------------------------------
-
-const ReadingView::Span *ReadingView::spanById(AnnotationId id) const
-{
-    if (!id.isValid())
-        return nullptr;
-    const auto it = m_indexById.constFind(id.value);
-    return it == m_indexById.cend() ? nullptr : &m_spans[std::size_t(*it)];
-}
-
-qreal ReadingView::laneY(qreal lineBottom, int lane) const
-{
-    return std::floor(lineBottom + m_metrics.gap + m_metrics.pitch * (lane + 0.5));
-}
-
-const ReadingView::Geometry &ReadingView::geometry(const Utf16Range &range16) const
-{
-    if (m_geometryWidth != viewport()->width()) {
-        m_geometry.clear();
-        m_geometryWidth = viewport()->width();
-    }
-    const quint64 key = rangeKey(range16);
-    auto it = m_geometry.find(key);
-    if (it == m_geometry.end()) {
-        Geometry g = computeGeometry(range16);
-        if (g.pieces.empty()) {
-            // Not laid out yet (or nothing visible): do not cache the empty answer.
-            static const Geometry empty;
-            return empty;
-        }
-        it = m_geometry.insert(key, std::move(g));
-    }
-    return *it;
-}
-
-bool ReadingView::isRtlAt(qint64 pos16, const QTextBlock &block) const
-{
-    if (pos16 >= 0 && pos16 < m_article.text.size()) {
-        char32_t c = m_article.text.at(pos16).unicode();
-        if (QChar::isHighSurrogate(c) && pos16 + 1 < m_article.text.size())
-            c = QChar::surrogateToUcs4(m_article.text.at(pos16), m_article.text.at(pos16 + 1));
-        const QChar::Direction d = QChar::direction(c);
-        if (isStrongDirection(d))
-            return isRtlDirection(d);
-    }
-    return block.textDirection() == Qt::RightToLeft;
-}
-
-void ReadingView::addPieces(const QTextBlock &block, const QTextLine &line, qint64 from16,
-    qint64 to16, std::vector<Piece> &pieces) const
-{
-    const QTextLayout *layout = block.layout();
-    const QPointF origin = layout->position();
-    const qreal top = origin.y() + line.y();
-    const qreal bottom = top + line.height();
-    const qint64 key = (qint64(block.blockNumber()) << 24) | line.lineNumber();
-    const int bpos = block.position();
-    const int from = int(from16) - bpos;
-    const int to = int(to16) - bpos;
-
-    bool mixed = false;
-    if (m_hasRtl) {
-        const int lineStart = bpos + line.textStart();
-        const int lineEnd = lineStart + line.textLength();
-        bool rtl = false;
-        bool ltr = false;
-        for (int i = lineStart; i < lineEnd; ++i) {
-            const QChar::Direction d = m_article.text.at(i).direction();
-            rtl = rtl || isRtlDirection(d);
-            ltr = ltr || d == QChar::DirL;
-        }
-        mixed = rtl && ltr;
-    }
-    if (!mixed) {
-        const qreal x1 = line.cursorToX(from);
-        const qreal x2 = line.cursorToX(to);
-        pieces.push_back(
-            {origin.x() + std::min(x1, x2), origin.x() + std::max(x1, x2), top, bottom, key});
-        return;
-    }
-    // A line mixing directions: a logical range may show as several visual pieces.
-    std::vector<std::pair<qreal, qreal>> runs;
-    for (const QGlyphRun &run : line.glyphRuns(from, to - from)) {
-        const QRectF r = run.boundingRect();
-        if (r.width() > 0)
-            runs.emplace_back(r.left(), r.right());
-    }
-    std::sort(runs.begin(), runs.end());
-    std::vector<std::pair<qreal, qreal>> merged;
-    for (const auto &run : runs) {
-        if (!merged.empty() && run.first <= merged.back().second + 0.5)
-            merged.back().second = std::max(merged.back().second, run.second);
-        else
-            merged.push_back(run);
-    }
-    for (const auto &[x1, x2] : merged)
-        pieces.push_back({origin.x() + x1, origin.x() + x2, top, bottom, key});
-}
-
-ReadingView::Geometry ReadingView::computeGeometry(const Utf16Range &range16) const
-{
-    Geometry g;
-    QTextDocument *doc = document();
-    const QTextBlock first = doc->findBlock(int(range16.start));
-    const QTextBlock last = doc->findBlock(int(range16.end - 1));
-    if (!first.isValid() || !last.isValid())
-        return g;
-    // Lays the document out up to the range's last block (the layout is lazy).
-    doc->documentLayout()->blockBoundingRect(last);
-
-    for (QTextBlock block = first; block.isValid() && block.position() < range16.end;
-         block = block.next()) {
-        const QTextLayout *layout = block.layout();
-        if (!layout || layout->lineCount() == 0)
-            continue;
-        const qint64 bpos = block.position();
-        const qint64 from = std::max(range16.start, bpos);
-        const qint64 to = std::min(range16.end, bpos + block.length() - 1);
-        if (to <= from)
-            continue; // the range only crosses this block's separator
-        const QTextLine firstLine = layout->lineForTextPosition(int(from - bpos));
-        for (int i = firstLine.isValid() ? firstLine.lineNumber() : 0; i < layout->lineCount();
-             ++i) {
-            const QTextLine line = layout->lineAt(i);
-            const qint64 lineStart = bpos + line.textStart();
-            const qint64 lineEnd = lineStart + line.textLength();
-            if (lineStart >= to)
-                break;
-            const qint64 a = std::max(from, lineStart);
-            const qint64 b = std::min(to, lineEnd);
-            if (b > a)
-                addPieces(block, line, a, b, g.pieces);
-        }
-    }
-    if (g.pieces.empty())
-        return g;
-
-    auto anchor = [&](qint64 pos16, qint64 charPos16, QPointF &point, qreal &bottom, bool &rtl) {
-        const QTextBlock block = doc->findBlock(int(charPos16));
-        const QTextLayout *layout = block.layout();
-        const int rel = int(pos16 - block.position());
-        const QTextLine line = layout->lineForTextPosition(int(charPos16 - block.position()));
-        if (!line.isValid())
-            return;
-        const int clamped = std::clamp(rel, line.textStart(), line.textStart() + line.textLength());
-        point = {
-            layout->position().x() + line.cursorToX(clamped), layout->position().y() + line.y()};
-        bottom = point.y() + line.height();
-        rtl = isRtlAt(charPos16, block);
-    };
-    anchor(range16.start, range16.start, g.start, g.startBottom, g.startRtl);
-    anchor(range16.end, range16.end - 1, g.end, g.endBottom, g.endRtl);
-    return g;
-}
 
 Utf16Range ReadingView::visibleRange16(const QRect &viewportRect) const
 {
@@ -1078,64 +865,6 @@ Utf16Range ReadingView::visibleRange16(const QRect &viewportRect) const
         b.isValid() ? b.position() + b.length() : document()->characterCount()};
 }
 
-std::vector<const ReadingView::Span *> ReadingView::spansIn(const Utf16Range &range16) const
-{
-    std::vector<const Span *> out;
-    for (const Span &span : m_spans) {
-        if (span.range16.start >= range16.end)
-            break;
-        if (span.range16.end > range16.start)
-            out.push_back(&span);
-    }
-    return out;
-}
-
-QRectF ReadingView::badgeRect(const Geometry &g) const
-{
-    const QFontMetricsF fm(m_metrics.badgeFont);
-    const qreal width = std::ceil(fm.horizontalAdvance(QLatin1Char('M')) + m_metrics.pitch);
-    const qreal top = g.startBottom + m_metrics.gap - 1;
-    const qreal height = 4 * m_metrics.pitch + 1;
-    const qreal left = g.startRtl ? g.start.x() - width : g.start.x();
-    return {std::round(left), top, width, height};
-}
-
-std::vector<ReadingView::Badge> ReadingView::layoutBadges(
-    const std::vector<const Span *> &spans) const
-{
-    std::vector<Badge> badges;
-    for (const Span *span : spans) {
-        const Geometry &g = geometry(span->range16);
-        if (!g.pieces.empty())
-            badges.push_back({badgeRect(g), span, g.startRtl});
-    }
-    // Badges that would collide on one line move along it in their reading direction: left to
-    // right text pushes later badges rightwards, right to left text leftwards.
-    std::stable_sort(badges.begin(), badges.end(), [](const Badge &a, const Badge &b) {
-        return a.rect.top() != b.rect.top() ? a.rect.top() < b.rect.top()
-                                            : a.rect.left() < b.rect.left();
-    });
-    const Badge *previous = nullptr;
-    for (Badge &badge : badges) {
-        if (badge.rtl)
-            continue;
-        if (previous && badge.rect.top() == previous->rect.top()
-            && badge.rect.left() < previous->rect.right() + 1)
-            badge.rect.moveLeft(previous->rect.right() + 1);
-        previous = &badge;
-    }
-    previous = nullptr;
-    for (auto it = badges.rbegin(); it != badges.rend(); ++it) {
-        if (!it->rtl)
-            continue;
-        if (previous && it->rect.top() == previous->rect.top()
-            && it->rect.right() > previous->rect.left() - 1)
-            it->rect.moveRight(previous->rect.left() - 1);
-        previous = &*it;
-    }
-    return badges;
-}
-
 // --- painting --------------------------------------------------------------------------------
 
 void ReadingView::paintEvent(QPaintEvent *e)
@@ -1150,7 +879,7 @@ void ReadingView::paintEvent(QPaintEvent *e)
     p.setClipRect(clip);
     const Utf16Range visible = visibleRange16(e->rect());
     paintRoleLabels(p, visible);
-    paintLanes(p, spansIn(visible), clip);
+    paintSpanLanes(p, m_lanes, m_colours, m_lanes.spansIn(visible), clip);
     paintSelection(p);
 }
 
@@ -1177,219 +906,34 @@ void ReadingView::paintRoleLabels(QPainter &p, const Utf16Range &visible16)
     }
 }
 
-void ReadingView::paintLanes(
-    QPainter &p, const std::vector<const Span *> &visible, const QRectF &clip)
-{
-    p.setRenderHint(QPainter::Antialiasing, false);
-    const qreal stroke = m_metrics.stroke;
-
-    struct Edge {
-        qreal x;
-        int delta;
-    };
-    for (FramingFunction f : kFramingFunctions) {
-        const FunctionStyle style = functionStyle(f);
-        std::vector<Piece> pieces;
-        for (const Span *span : visible) {
-            if (span->function != f)
-                continue;
-            for (const Piece &piece : geometry(span->range16).pieces) {
-                if (piece.lineBottom + m_metrics.zone >= clip.top()
-                    && piece.lineTop <= clip.bottom())
-                    pieces.push_back(piece);
-            }
-        }
-        std::sort(pieces.begin(), pieces.end(), [](const Piece &a, const Piece &b) {
-            return a.lineKey != b.lineKey ? a.lineKey < b.lineKey : a.x1 < b.x1;
-        });
-        QPen pen(laneColour(f), stroke, style.line, Qt::FlatCap);
-        QPen thin(
-            laneColour(f), std::max<qreal>(1, std::floor(stroke / 2)), style.line, Qt::FlatCap);
-        // Per line, sweep the pieces' edges: depth 1 is one rule, depth 2 and more a double rule.
-        for (std::size_t i = 0; i < pieces.size();) {
-            std::size_t j = i;
-            std::vector<Edge> edges;
-            while (j < pieces.size() && pieces[j].lineKey == pieces[i].lineKey) {
-                edges.push_back({pieces[j].x1, +1});
-                edges.push_back({pieces[j].x2, -1});
-                ++j;
-            }
-            std::sort(edges.begin(), edges.end(), [](const Edge &a, const Edge &b) {
-                return a.x != b.x ? a.x < b.x : a.delta > b.delta;
-            });
-            const qreal y = laneY(pieces[i].lineBottom, style.lane);
-            int depth = 0;
-            for (std::size_t k = 0; k < edges.size(); ++k) {
-                depth += edges[k].delta;
-                if (depth <= 0 || k + 1 >= edges.size())
-                    continue;
-                const qreal x1 = edges[k].x;
-                const qreal x2 = edges[k + 1].x;
-                if (x2 - x1 < 0.5)
-                    continue;
-                // The pattern's phase follows x, so dashes line up across neighbouring stretches.
-                if (depth == 1) {
-                    pen.setDashOffset(x1 / stroke);
-                    p.setPen(pen);
-                    p.drawLine(QPointF(x1, y), QPointF(x2, y));
-                } else {
-                    thin.setDashOffset(x1 / thin.widthF());
-                    p.setPen(thin);
-                    const qreal half = thin.widthF();
-                    p.drawLine(QPointF(x1, y - half - 1), QPointF(x2, y - half - 1));
-                    p.drawLine(QPointF(x1, y + half), QPointF(x2, y + half));
-                }
-            }
-            i = j;
-        }
-    }
-
-    // End ticks: a short upright mark where each span ends, so overlapping spans of one function
-    // still show where each stops.
-    for (const Span *span : visible) {
-        const Geometry &g = geometry(span->range16);
-        if (g.pieces.empty())
-            continue;
-        const qreal y = laneY(g.endBottom, functionStyle(span->function).lane);
-        const qreal x = std::round(g.end.x()) + (g.endRtl ? 0 : -1);
-        p.fillRect(QRectF(x, y - m_metrics.pitch * 0.5 - 1, std::max<qreal>(1, stroke - 1),
-                       m_metrics.pitch + 1),
-            laneColour(span->function));
-    }
-
-    const std::vector<Badge> badges = layoutBadges(visible);
-    p.setRenderHint(QPainter::Antialiasing, true);
-    p.setFont(m_metrics.badgeFont);
-    const qreal radius = std::max<qreal>(1.5, m_metrics.pitch * 0.45);
-    for (const Badge &badge : badges) {
-        if (!badge.rect.intersects(clip))
-            continue;
-        const auto i = std::size_t(badge.span->function);
-        const QRectF r = badge.rect.adjusted(0.5, 0.5, -0.5, -0.5);
-        p.setPen(QPen(m_laneColours[i], 1));
-        p.setBrush(m_badgeFill[i]);
-        p.drawRoundedRect(r, radius, radius);
-        p.setPen(m_badgeText[i]);
-        p.drawText(
-            badge.rect, Qt::AlignCenter, QString(functionStyle(badge.span->function).letter));
-    }
-    p.setBrush(Qt::NoBrush);
-}
-
 void ReadingView::paintSelection(QPainter &p)
 {
-    const Span *span = spanById(m_drag.active ? m_drag.id : m_selected);
+    const LaneSpan *span = spanById(m_drag.active ? m_drag.id : m_selected);
     if (!span)
         return;
-    Geometry previewGeometry;
-    const Geometry *g = nullptr;
     if (m_drag.active) {
-        previewGeometry = computeGeometry(m_map.utf16Range(m_drag.preview));
-        g = &previewGeometry;
+        paintSpanHandles(p, m_metrics, m_lanes.computeGeometry(m_map.utf16Range(m_drag.preview)),
+            laneColour(span->function), palette().color(QPalette::Base));
     } else {
-        g = &geometry(span->range16);
+        paintSpanHandles(p, m_metrics, m_lanes.geometry(span->range16), laneColour(span->function),
+            palette().color(QPalette::Base));
     }
-    if (g->pieces.empty())
-        return;
-    const QColor colour = laneColour(span->function);
-
-    // Handles: an upright bar through the line and its lanes, with a knob on top at the start and
-    // at the bottom at the end.
-    p.setRenderHint(QPainter::Antialiasing, true);
-    const qreal r = m_metrics.handleRadius;
-    auto handle = [&](const QPointF &top, qreal bottom, bool knobOnTop) {
-        const qreal x = std::round(top.x());
-        const qreal barBottom = bottom + m_metrics.zone;
-        p.fillRect(QRectF(x - 1, top.y(), 2, barBottom - top.y()), colour);
-        const QPointF knob(x, knobOnTop ? top.y() - r + 1 : barBottom + r - 1);
-        p.setPen(QPen(palette().color(QPalette::Base), 1.5));
-        p.setBrush(colour);
-        p.drawEllipse(knob, r, r);
-        p.setBrush(Qt::NoBrush);
-    };
-    handle(g->start, g->startBottom, true);
-    handle(g->end, g->endBottom, false);
 }
 
 // --- hit testing -----------------------------------------------------------------------------
 
-ReadingView::Hit ReadingView::hitTest(const QPoint &viewportPos) const
+LaneHit ReadingView::hitTest(const QPoint &viewportPos) const
 {
-    Hit hit;
     if (m_article.text.isEmpty())
-        return hit;
+        return {};
     const QPointF pos(viewportPos.x() + horizontalScrollBar()->value(),
         viewportPos.y() + verticalScrollBar()->value());
     const qreal zone = m_metrics.zone;
-
-    if (const Span *span = spanById(m_selected)) {
-        const Geometry &g = geometry(span->range16);
-        const qreal slop =
-            std::max<qreal>(m_metrics.handleRadius + 2, QFontMetricsF(font()).height() * 0.3);
-        auto near = [&](const QPointF &top, qreal bottom, bool knobOnTop) {
-            const qreal knobExtra = 2 * m_metrics.handleRadius;
-            const qreal y1 = top.y() - (knobOnTop ? knobExtra : 0);
-            const qreal y2 = bottom + zone + (knobOnTop ? 0 : knobExtra);
-            return std::abs(pos.x() - top.x()) <= slop && pos.y() >= y1 && pos.y() <= y2;
-        };
-        if (!g.pieces.empty()) {
-            if (near(g.start, g.startBottom, true)) {
-                hit.kind = Hit::StartHandle;
-                hit.spans = {span->id};
-                return hit;
-            }
-            if (near(g.end, g.endBottom, false)) {
-                hit.kind = Hit::EndHandle;
-                hit.spans = {span->id};
-                return hit;
-            }
-        }
-    }
-
+    const qreal slop =
+        std::max<qreal>(m_metrics.handleRadius + 2, QFontMetricsF(font()).height() * 0.3);
     const QRect around(viewportPos.x(), int(viewportPos.y() - 2 * zone), 1, int(4 * zone));
-    const std::vector<const Span *> candidates = spansIn(visibleRange16(around));
-    std::vector<const Span *> lane;
-    std::vector<const Span *> text;
-    std::vector<const Span *> badge;
-    for (const Badge &b : layoutBadges(candidates)) {
-        if (b.rect.contains(pos))
-            badge.push_back(b.span);
-    }
-    for (const Span *span : candidates) {
-        const Geometry &g = geometry(span->range16);
-        if (g.pieces.empty())
-            continue;
-        const int laneIndex = functionStyle(span->function).lane;
-        for (const Piece &piece : g.pieces) {
-            if (pos.x() < piece.x1 - 1 || pos.x() > piece.x2 + 1)
-                continue;
-            const qreal y = laneY(piece.lineBottom, laneIndex);
-            if (std::abs(pos.y() - y) <= m_metrics.pitch * 0.5 + 0.5)
-                lane.push_back(span);
-            else if (pos.y() >= piece.lineTop && pos.y() < piece.lineBottom)
-                text.push_back(span);
-        }
-    }
-    auto finish = [&](Hit::Kind kind, std::vector<const Span *> spans) {
-        std::sort(spans.begin(), spans.end(), [](const Span *a, const Span *b) {
-            if (a->range.length() != b->range.length())
-                return a->range.length() < b->range.length();
-            return a->range.start != b->range.start ? a->range.start < b->range.start
-                                                    : a->id < b->id;
-        });
-        spans.erase(std::unique(spans.begin(), spans.end()), spans.end());
-        hit.kind = kind;
-        for (const Span *span : spans)
-            hit.spans.push_back(span->id);
-        return hit;
-    };
-    if (!badge.empty())
-        return finish(Hit::Badge, badge);
-    if (!lane.empty())
-        return finish(Hit::Lane, lane);
-    if (!text.empty())
-        return finish(Hit::Text, text);
-    return hit;
+    return m_lanes.hitTest(
+        pos, spanById(m_selected), slop, m_lanes.spansIn(visibleRange16(around)));
 }
 
 } // namespace fourfold

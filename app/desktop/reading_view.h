@@ -30,6 +30,8 @@
 // a double rule over the shared stretch; each span keeps its own start badge and end tick, so
 // the count and extent of each stays visible. Hovering a lane lists the spans under the pointer.
 
+#include "app/desktop/span_lane_layout.h"
+#include "app/desktop/span_lane_painter.h"
 #include "core/model/annotation.h"
 #include "core/model/article.h"
 #include "core/text/offset_map.h"
@@ -132,53 +134,6 @@ protected:
 
 private:
     std::vector<Utf16Range> m_searchHits; // UTF-16 ranges of search hits
-    // A span as drawn: its function and both position units.
-    struct Span {
-        AnnotationId id;
-        FramingFunction function = FramingFunction::Problem;
-        TextRange range; // code points
-        Utf16Range range16; // UTF-16 positions in the document
-    };
-    // One visual piece of a range on one text line, in document coordinates.
-    struct Piece {
-        qreal x1 = 0;
-        qreal x2 = 0;
-        qreal lineTop = 0;
-        qreal lineBottom = 0; // bottom of the glyphs; the lanes start below it
-        qint64 lineKey = 0; // block number and line index: same value, same line
-    };
-    // Where a range lies on screen, computed once from the text layout and cached.
-    struct Geometry {
-        std::vector<Piece> pieces;
-        QPointF start; // caret x at the range's start, top of its line
-        qreal startBottom = 0;
-        bool startRtl = false;
-        QPointF end; // caret x at the range's end, top of its line
-        qreal endBottom = 0;
-        bool endRtl = false;
-    };
-    // Sizes derived from the font, so everything scales with it (and with the screen's DPI).
-    struct Metrics {
-        qreal pitch = 4; // distance between lanes
-        qreal stroke = 2; // lane line width
-        qreal gap = 2; // between the glyphs and the first lane
-        qreal zone = 20; // lanes' total height under a line
-        qreal readingWidth = 600; // the text column
-        qreal labelColumn = 80; // the paragraph-role margin
-        qreal handleRadius = 4;
-        QFont badgeFont;
-        QFont labelFont;
-    };
-    // What a pointer position hits.
-    struct Hit {
-        enum Kind { Nothing, Text, Lane, Badge, StartHandle, EndHandle } kind = Nothing;
-        std::vector<AnnotationId> spans; // shortest first
-    };
-    struct Badge {
-        QRectF rect; // document coordinates
-        const Span *span = nullptr;
-        bool rtl = false;
-    };
     struct Drag {
         bool active = false;
         bool moveStart = false;
@@ -195,27 +150,17 @@ private:
     void updateAccessibleDescription();
     void invalidateGeometry();
 
-    const Span *spanById(AnnotationId id) const;
-    QColor laneColour(FramingFunction f) const { return m_laneColours[std::size_t(f)]; }
-    qreal laneY(qreal lineBottom, int lane) const;
-    const Geometry &geometry(const Utf16Range &range16) const;
-    Geometry computeGeometry(const Utf16Range &range16) const;
-    void addPieces(const QTextBlock &block, const QTextLine &line, qint64 from16, qint64 to16,
-        std::vector<Piece> &pieces) const;
-    bool isRtlAt(qint64 pos16, const QTextBlock &block) const;
+    const LaneSpan *spanById(AnnotationId id) const { return m_lanes.spanById(id); }
+    QColor laneColour(FramingFunction f) const { return m_colours.lane[std::size_t(f)]; }
     Utf16Range visibleRange16(const QRect &viewportRect) const;
-    std::vector<const Span *> spansIn(const Utf16Range &range16) const;
-    QRectF badgeRect(const Geometry &g) const;
-    std::vector<Badge> layoutBadges(const std::vector<const Span *> &spans) const;
 
-    void paintLanes(QPainter &p, const std::vector<const Span *> &visible, const QRectF &clip);
     void paintSelection(QPainter &p);
     void paintRoleLabels(QPainter &p, const Utf16Range &visible16);
 
-    Hit hitTest(const QPoint &viewportPos) const;
+    LaneHit hitTest(const QPoint &viewportPos) const;
     qint64 codePointAt(const QPoint &viewportPos) const;
     void selectSpanByUser(AnnotationId id);
-    void selectFromHit(const Hit &hit);
+    void selectFromHit(const LaneHit &hit);
     void applyFunction(FramingFunction f, bool exact);
     void resizeByWord(bool moveStart, int direction);
     void clearTextSelection();
@@ -225,27 +170,19 @@ private:
     Article m_article;
     OffsetMap m_map {QString()};
     Segmentation m_segmentation;
-    bool m_hasRtl = false;
     std::vector<qint64> m_paragraphStarts16; // sorted, with m_paragraphRoles
     std::vector<ParagraphRole> m_paragraphRoles;
 
     std::vector<Annotation> m_annotations;
-    std::vector<Span> m_spans; // sorted by UTF-16 start, then end, then id
-    QHash<qint64, qsizetype> m_indexById;
     AnnotationId m_selected;
     Drag m_drag;
 
-    Metrics m_metrics;
-    std::array<QColor, 4> m_laneColours;
-    std::array<QColor, 4> m_badgeFill;
-    std::array<QColor, 4> m_badgeText;
+    LaneMetrics m_metrics;
+    SpanLaneLayout m_lanes; // the spans shown, their geometry and hit testing
+    LaneColours m_colours;
     bool m_dark = false;
     qreal m_leftMargin = -1;
     qreal m_rightMargin = -1;
-
-    // Range geometry keyed by (start16, end16); valid for m_geometryWidth.
-    mutable QHash<quint64, Geometry> m_geometry;
-    mutable int m_geometryWidth = -1;
 
     QPoint m_pressPos;
     bool m_pressOnText = false;

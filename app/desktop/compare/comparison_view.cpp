@@ -1,6 +1,7 @@
 #include "app/desktop/compare/comparison_view.h"
 
 #include "app/desktop/function_style.h"
+#include "app/desktop/span_lane_layout.h"
 
 #include <QEvent>
 #include <QFontMetricsF>
@@ -142,21 +143,14 @@ std::vector<QRectF> ComparisonView::lineRects(const Utf16Range &range16) const
     for (const Para &para : m_paragraphs) {
         const qint64 from = std::max(range16.start, para.range16.start);
         const qint64 to = std::min(range16.end, para.range16.end);
-        if (from >= to)
-            continue;
-        for (int i = 0; i < para.layout->lineCount(); ++i) {
-            const QTextLine line = para.layout->lineAt(i);
-            const qint64 ls = para.range16.start + line.textStart();
-            const qint64 le = ls + line.textLength();
-            const qint64 a = std::max(from, ls);
-            const qint64 b = std::min(to, le);
-            if (a >= b)
-                continue;
-            const qreal x1 = line.cursorToX(int(a - para.range16.start));
-            const qreal x2 = line.cursorToX(int(b - para.range16.start));
-            out.emplace_back(QPointF(std::min(x1, x2), para.top + line.y()),
-                QPointF(std::max(x1, x2), para.top + line.y() + textHeight));
-        }
+        // The same line pieces as the reading desk's lanes (span_lane_layout.h); the columns
+        // are laid out left to right, so each line holds one piece.
+        forEachLineOf(*para.layout, from - para.range16.start, to - para.range16.start,
+            [&](const QTextLine &line, qint64 a, qint64 b) {
+                for (const auto &[x1, x2] : lineExtents(line, int(a), int(b), false))
+                    out.emplace_back(QPointF(x1, para.top + line.y()),
+                        QPointF(x2, para.top + line.y() + textHeight));
+            });
     }
     return out;
 }
