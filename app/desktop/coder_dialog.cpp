@@ -1,5 +1,6 @@
 #include "app/desktop/coder_dialog.h"
 
+#include "core/project/coder_copies.h"
 #include "core/project/edit.h"
 #include "core/project/passphrase.h"
 #include "core/project/project.h"
@@ -115,11 +116,19 @@ void CoderDialog::reload()
         showMessage(m_message, all.error().message);
         return;
     }
+    // A coder copy is its coder's alone: nobody else is offered (the lead and the other coders are
+    // in it only as the authors of the codebook and assignments).
+    auto copy = CoderCopies::copyInfo(m_project);
+    const QString copyCoder = copy && *copy ? (*copy)->coderUuid : QString();
     for (const Coder &c : *all) {
         if (c.disabled)
             continue; // kept in the project, but nobody chooses them
+        if (!copyCoder.isEmpty() && c.uuid != copyCoder)
+            continue;
         m_people.push_back(c);
-        m_list->addItem(QStringLiteral("%1 — %2 (%3)").arg(c.pseudonym, c.name, roleText(c.role)));
+        // In a copy everyone codes as a coder, a lead included.
+        const CoderRole shown = copyCoder.isEmpty() ? c.role : CoderRole::Coder;
+        m_list->addItem(QStringLiteral("%1 — %2 (%3)").arg(c.pseudonym, c.name, roleText(shown)));
     }
     if (!m_people.empty())
         m_list->setCurrentRow(0);

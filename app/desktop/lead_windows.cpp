@@ -11,6 +11,7 @@
 #include "app/desktop/runs/extractor_window.h"
 #include "app/desktop/study/progress_board_window.h"
 #include "app/desktop/study/study_design_window.h"
+#include "app/desktop/window_placement.h"
 #include "app/report/report_writer.h"
 #include "core/project/coder_copies.h"
 
@@ -54,6 +55,9 @@ void LeadWindows::closeAll()
 void LeadWindows::raise(QWidget *window)
 {
     window->setAttribute(Qt::WA_DeleteOnClose);
+    if (!window->isVisible()) // each window opens where it was left, at a size that fits
+        placeWindow(window, QString::fromLatin1(window->metaObject()->className()),
+            window->testAttribute(Qt::WA_Resized) ? window->size() : window->sizeHint());
     window->show();
     window->raise();
     window->activateWindow();
@@ -138,11 +142,6 @@ void LeadWindows::openCodebook()
     raise(m_codebook);
 }
 
-void LeadWindows::writeReport()
-{
-    if (!m_session)
-        return;
-    ReportOptionsDialog choose(m_session->project(), m_owner);
 void LeadWindows::openFrames()
 {
     if (!m_session)
@@ -159,6 +158,11 @@ void LeadWindows::openFrames()
         static_cast<FramesWindow *>(m_frames.data())->compute();
 }
 
+void LeadWindows::writeReport()
+{
+    if (!m_session)
+        return;
+    ReportOptionsDialog choose(m_session->project(), m_owner);
     // Start from what the lead is looking at in the Reliability window.
     if (auto *window = qobject_cast<ReliabilityWindow *>(m_reliability.data()))
         choose.setOptions(reportOptionsFor(window->request()));

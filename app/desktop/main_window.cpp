@@ -15,6 +15,7 @@
 #include "app/desktop/reading_view.h"
 #include "app/desktop/span_editor.h"
 #include "app/desktop/study/training_feedback_dialog.h"
+#include "app/desktop/window_placement.h"
 
 #include <QActionGroup>
 #include <QApplication>
@@ -81,7 +82,7 @@ MainWindow::MainWindow(QWidget *parent)
     m_who = new QLabel(this);
     statusBar()->addPermanentWidget(m_who);
     updateTitle();
-    resize(1500, 920);
+    placeWindow(this, QStringLiteral("MainWindow"), QSize(1500, 920));
 
     // Hand active time to the project every half minute, so a crash loses little of it.
     auto *flush = new QTimer(this);
@@ -106,8 +107,13 @@ QWidget *MainWindow::buildStartPage()
             page);
     title->setAlignment(Qt::AlignCenter);
     outer->addWidget(title);
-    auto *buttons = new QHBoxLayout;
+    m_startButtons = new QWidget(page);
+    auto *buttons = new QHBoxLayout(m_startButtons);
     buttons->addStretch();
+    auto *create = new QPushButton(tr("New project…"), page);
+    create->setToolTip(tr("Start a study: a new project file, then import its articles."));
+    connect(create, &QPushButton::clicked, this, &MainWindow::createProject);
+    buttons->addWidget(create);
     auto *open = new QPushButton(tr("Open a project…"), page);
     connect(open, &QPushButton::clicked, this, &MainWindow::chooseProject);
     buttons->addWidget(open);
@@ -117,7 +123,7 @@ QWidget *MainWindow::buildStartPage()
     connect(sample, &QPushButton::clicked, this, &MainWindow::openSample);
     buttons->addWidget(sample);
     buttons->addStretch();
-    outer->addLayout(buttons);
+    outer->addWidget(m_startButtons);
     auto *recent = new QListWidget(page);
     recent->setAccessibleName(tr("Recent projects"));
     recent->setMaximumWidth(640);
@@ -239,6 +245,22 @@ QWidget *MainWindow::buildDesk()
     bar->addWidget(done);
     middleLayout->addLayout(bar);
     middleLayout->addWidget(m_reading, 1);
+    m_middlePages = new QStackedWidget(splitter);
+    auto *empty = new QWidget(m_middlePages);
+    auto *emptyLayout = new QVBoxLayout(empty);
+    emptyLayout->addStretch(2);
+    m_emptyText = new QLabel(empty);
+    m_emptyText->setTextFormat(Qt::RichText);
+    m_emptyText->setWordWrap(true);
+    m_emptyText->setAlignment(Qt::AlignCenter);
+    m_emptyText->setMaximumWidth(560);
+    emptyLayout->addWidget(m_emptyText, 0, Qt::AlignHCenter);
+    m_emptyAction = new QPushButton(tr("Import articles…"), empty);
+    connect(m_emptyAction, &QPushButton::clicked, this, &MainWindow::importArticles);
+    emptyLayout->addWidget(m_emptyAction, 0, Qt::AlignHCenter);
+    emptyLayout->addStretch(3);
+    m_middlePages->addWidget(empty);
+    m_middlePages->addWidget(middle);
 
     // Right: the frame card, the items under it, then the span editor and the codebook.
     auto *right = new QSplitter(Qt::Vertical, splitter);
@@ -251,7 +273,7 @@ QWidget *MainWindow::buildDesk()
     right->setStretchFactor(1, 2);
 
     splitter->addWidget(left);
-    splitter->addWidget(middle);
+    splitter->addWidget(m_middlePages);
     splitter->addWidget(right);
     splitter->setStretchFactor(0, 2);
     splitter->setStretchFactor(1, 5);
@@ -356,6 +378,7 @@ void MainWindow::buildMenus()
         m_lead, &LeadWindows::openComparison);
     m_leadMenu->addAction(tr("&Reliability…"), QKeySequence(Qt::CTRL | Qt::Key_R), m_lead,
         &LeadWindows::openReliability);
+    m_leadMenu->addAction(tr("&Frames…"), m_lead, &LeadWindows::openFrames);
     m_leadMenu->addAction(tr("Write the reliability &report…"), m_lead, &LeadWindows::writeReport);
     m_leadMenu->addSeparator();
     m_leadMenu->addAction(tr("&Study design…"), m_lead, &LeadWindows::openStudyDesign);
@@ -368,6 +391,10 @@ void MainWindow::buildMenus()
     m_leadMenu->addAction(tr("&Extractor runs…"), m_lead, &LeadWindows::openExtractors);
     m_leadMenu->menuAction()->setVisible(false);
     connect(m_lead, &LeadWindows::projectChanged, this, &MainWindow::refreshList);
+    connect(m_lead, &LeadWindows::articleRequested, this, [this](ArticleId article) {
+        openArticle(article);
+        activateWindow();
+    });
 
     QMenu *settings = menuBar()->addMenu(tr("&Settings"));
     QMenu *language = settings->addMenu(tr("&Language"));
@@ -378,7 +405,6 @@ void MainWindow::buildMenus()
         {std::pair {QStringLiteral("system"), tr("System language")},
             std::pair {QStringLiteral("en"), QStringLiteral("English")},
             std::pair {QStringLiteral("nl"), QStringLiteral("Nederlands")},
-    m_leadMenu->addAction(tr("&Frames…"), m_lead, &LeadWindows::openFrames);
             std::pair {QStringLiteral("de"), QStringLiteral("Deutsch")}}) {
         QAction *a = language->addAction(name);
         a->setCheckable(true);
@@ -391,10 +417,6 @@ void MainWindow::buildMenus()
     help->addAction(
         tr("&Keyboard shortcuts"), QKeySequence::HelpContents, this, &MainWindow::showShortcuts);
 }
-    connect(m_lead, &LeadWindows::articleRequested, this, [this](ArticleId article) {
-        openArticle(article);
-        activateWindow();
-    });
 
 Status MainWindow::openProject(
     const QString &path, const QString &pseudonym, const std::optional<QString> &passphrase)
@@ -498,6 +520,7 @@ Status MainWindow::openProject(
     updateTitle();
     if (m_filter->rowCount() > 0)
         m_list->selectRow(0);
+    updateEmptyState();
     if (m_session->isReadOnly())
         m_messages->showMessage(MessageBar::Kind::Warning, m_session->readOnlyMessage());
     return {};
@@ -537,6 +560,7 @@ void MainWindow::openArticle(ArticleId id)
     if (!m_search->text().trimmed().isEmpty())
         m_reading->setSearchHighlight(m_search->text());
     refreshArticle();
+    updateEmptyState();
     const int row = m_filter->mapFromSource(m_articles->index(m_articles->rowOf(id), 0)).row();
     if (row >= 0 && m_list->currentIndex().row() != row)
         m_list->selectRow(row);
@@ -668,7 +692,51 @@ void MainWindow::importArticles()
         return;
     const ImportOutcome outcome = importWithProgress(m_session->project(), files, this);
     refreshList();
+    if (!m_article.isValid() && m_filter->rowCount() > 0)
+        m_list->selectRow(0);
+    updateEmptyState();
     showImportReport(outcome, this);
+}
+
+QString MainWindow::emptyStateText() const
+{
+    return m_middlePages && m_middlePages->currentIndex() == 0 ? m_emptyText->text() : QString();
+}
+
+QPushButton *MainWindow::startPageButton(int index) const
+{
+    const auto buttons = m_startButtons->findChildren<QPushButton *>();
+    return index >= 0 && index < buttons.size() ? buttons[index] : nullptr;
+}
+
+void MainWindow::updateEmptyState()
+{
+    if (!m_session)
+        return;
+    if (m_article.isValid() && m_session->document().isOpen()) {
+        m_middlePages->setCurrentIndex(1);
+        return;
+    }
+    const bool lead = m_session->isLead();
+    const bool listed = m_articles->rowCount() > 0;
+    QString text;
+    bool canImport = false;
+    if (listed) {
+        text = tr("<h3>Choose an article</h3><p>Pick an article in the list on the left to "
+                  "start coding it.</p>");
+    } else if (lead) {
+        text = tr("<h3>No articles yet</h3><p>Import the articles of the study: plain text, "
+                  "HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or "
+                  "NewsML-G2. Then assign them to coders in Lead → Study design.</p>");
+        canImport = !m_session->isReadOnly();
+    } else {
+        text = tr("<h3>Nothing to code yet</h3><p>No articles are assigned to you in this "
+                  "project. Your lead assigns them; when they have, open the project again, or "
+                  "open the coder copy they send you.</p>");
+    }
+    m_emptyText->setText(text);
+    m_emptyAction->setVisible(canImport);
+    m_middlePages->setCurrentIndex(0);
 }
 
 void MainWindow::chooseProject()

@@ -15,6 +15,7 @@ class QComboBox;
 class QLabel;
 class QLineEdit;
 class QMenu;
+class QPushButton;
 class QStackedWidget;
 class QTabWidget;
 class QTableView;
@@ -58,6 +59,11 @@ public:
     QTableView *articleList() const { return m_list; }
     QLineEdit *searchField() const { return m_search; }
     ArticleId currentArticle() const { return m_article; }
+    // What the middle of the desk shows when there is no article to code, and its button (hidden
+    // when there is nothing to do here); for tests. Empty text: an article is shown.
+    QString emptyStateText() const;
+    QPushButton *emptyStateButton() const { return m_emptyAction; }
+    QPushButton *startPageButton(int index) const;
     void openArticle(ArticleId id);
     void selectSpan(AnnotationId id);
     void showShortcuts();
@@ -83,6 +89,7 @@ private:
     void showError(const QString &message);
     void showUnsavedEdit(const QString &editText, const QString &message);
     void updateTitle();
+    void updateEmptyState();
 
     std::unique_ptr<CodingSession> m_session;
     ArticleId m_article;
@@ -96,6 +103,10 @@ private:
     QComboBox *m_statusFilter = nullptr;
     ReadingView *m_reading = nullptr;
     QLabel *m_articleHeader = nullptr;
+    QStackedWidget *m_middlePages = nullptr; // 0: what to do next, 1: the open article
+    QLabel *m_emptyText = nullptr;
+    QPushButton *m_emptyAction = nullptr;
+    QWidget *m_startButtons = nullptr;
     FrameCard *m_card = nullptr;
     ItemForm *m_items = nullptr;
     QTabWidget *m_tabs = nullptr;

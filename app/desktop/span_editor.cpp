@@ -5,6 +5,7 @@
 
 #include <QButtonGroup>
 #include <QComboBox>
+#include <QCompleter>
 #include <QDoubleSpinBox>
 #include <QEvent>
 #include <QFormLayout>
@@ -32,6 +33,8 @@ namespace fourfold {
 namespace {
 
 const QString kJudges = QStringLiteral("judges");
+// The property naming the attribute whose used values a free-text field completes.
+constexpr const char *kCompletionKey = "fourfoldCompletionKey";
 const QString kAddresses = QStringLiteral("addresses");
 // The spin box's value below 0 that stands for "not set".
 constexpr double kNotSet = -0.1;
@@ -370,6 +373,10 @@ void SpanEditor::buildAttributeFields(FramingFunction function, const QJsonObjec
             text->setPlaceholderText(tr("not set"));
             text->setClearButtonEnabled(true);
             connect(text, &QLineEdit::editingFinished, this, &SpanEditor::commit);
+            // Its completions are read when the field is first entered (eventFilter), not with
+            // every span selected.
+            text->setProperty(kCompletionKey, spec.key);
+            text->installEventFilter(this);
             field = text;
         }
         field->setAccessibleName(spec.label);
@@ -383,6 +390,20 @@ void SpanEditor::buildAttributeFields(FramingFunction function, const QJsonObjec
     }
     m_attributeFunction = function;
     m_attributesBuilt = true;
+}
+
+QStringList SpanEditor::completionsFor(const QString &key)
+{
+    if (!m_session)
+        return {};
+    if (auto known = m_completions.constFind(key); known != m_completions.constEnd())
+        return *known;
+    // A coder is offered only their own values; a lead every coder's and gold's.
+    const Coder &me = m_session->coder();
+    auto values = m_session->project().attributeValues(
+        key, me.role == CoderRole::Lead ? std::nullopt : std::optional(me.id));
+    m_completions.insert(key, values ? *values : QStringList());
+    return m_completions.value(key);
 }
 
 void SpanEditor::loadSpan()
@@ -552,6 +573,13 @@ void SpanEditor::commit()
     if (sameContent(content, m_span->content))
         return;
     m_span->content = content;
+    // A value typed now is offered from the next field on.
+    for (const auto &[spec, field] : m_attributeFields) {
+        const QString value = content.attributes.value(spec.key).toString().trimmed();
+        if (auto known = m_completions.find(spec.key);
+            known != m_completions.end() && !value.isEmpty() && !known->contains(value))
+            known->append(value);
+    }
     emit contentEdited(m_span->id, content);
 }
 
@@ -565,6 +593,15 @@ void SpanEditor::revertToStored()
 
 bool SpanEditor::eventFilter(QObject *watched, QEvent *event)
 {
+    if (event->type() == QEvent::FocusIn)
+        if (auto *text = qobject_cast<QLineEdit *>(watched);
+            text && !text->completer() && text->property(kCompletionKey).isValid()) {
+            auto *completer =
+                new QCompleter(completionsFor(text->property(kCompletionKey).toString()), text);
+            completer->setCaseSensitivity(Qt::CaseInsensitive);
+            completer->setFilterMode(Qt::MatchContains);
+            text->setCompleter(completer);
+        }
     if (watched == m_note && event->type() == QEvent::FocusOut)
         commit();
     return QWidget::eventFilter(watched, event);

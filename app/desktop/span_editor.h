@@ -8,6 +8,8 @@
 #include "core/model/annotation.h"
 #include "core/model/codebook.h"
 
+#include <QHash>
+#include <QStringList>
 #include <QWidget>
 
 #include <optional>
@@ -95,6 +97,10 @@ private:
     QWidget *m_attributeBox = nullptr;
     QFormLayout *m_form = nullptr;
     std::vector<std::pair<AttributeSpec, QWidget *>> m_attributeFields;
+    // What a free-text attribute field offers to complete (e.g. actor names already used, so
+    // that one actor keeps one spelling), read once per key per session.
+    QStringList completionsFor(const QString &key);
+    QHash<QString, QStringList> m_completions;
     FramingFunction m_attributeFunction = FramingFunction::Problem;
     bool m_attributesBuilt = false;
     QPlainTextEdit *m_note = nullptr;

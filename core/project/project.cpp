@@ -279,6 +279,11 @@ Result<std::vector<GoldRejection>> Project::goldRejections(ArticleId article) co
     return store::goldRejections(db(), article);
 }
 
+Result<QStringList> Project::attributeValues(const QString &key, std::optional<CoderId> coder) const
+{
+    return store::attributeTextValues(db(), key, coder);
+}
+
 Result<std::vector<Annotation>> Project::allAnnotations() const
 {
     return store::allAnnotations(db());

@@ -13,6 +13,7 @@
 #include "core/project/integrity_report.h"
 
 #include <QString>
+#include <QStringList>
 
 #include <functional>
 #include <memory>
@@ -107,6 +108,11 @@ public:
     Result<std::vector<GoldRejection>> goldRejections(ArticleId article = {}) const;
     // Every live annotation / judgement / assignment of the project (for reliability work).
     Result<std::vector<Annotation>> allAnnotations() const;
+    // The distinct values of the text attribute `key` on live spans of any function, most used
+    // first (ties by value): what a field offers to complete. With `coder`, only that coder's own
+    // spans — a coder never sees another coder's values — else every coder's and gold.
+    Result<QStringList> attributeValues(
+        const QString &key, std::optional<CoderId> coder = std::nullopt) const;
     // The same annotations (by article, coder, start) and the live gold spans (by article, start,
     // without their sources), handed over one at a time: one statement each, one row held.
     Status forEachAnnotation(const std::function<Status(Annotation &&)> &visit) const;

@@ -151,6 +151,28 @@ Result<std::vector<ValueInUse>> attributeValuesInUse(
     return valuesInUse(*stmt);
 }
 
+Result<QStringList> attributeTextValues(
+    const Database &db, const QString &key, std::optional<CoderId> coder)
+{
+    // ?3 = -1 stands for "every coder, and gold".
+    auto stmt = db.prepare(
+        QStringLiteral("SELECT value, count(*) AS uses FROM ("
+                       " SELECT e.value AS value FROM annotation a, json_each(a.attributes) e"
+                       "  WHERE a.deleted = 0 AND e.key = ?1 AND e.type = 'text'"
+                       "    AND (?2 = -1 OR a.coder_id = ?2)"
+                       " UNION ALL"
+                       " SELECT e.value FROM gold_annotation g, json_each(g.attributes) e"
+                       "  WHERE g.deleted = 0 AND e.key = ?1 AND e.type = 'text' AND ?2 = -1"
+                       ") WHERE trim(value) <> '' GROUP BY value ORDER BY uses DESC, value"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, key).bind(2, coder ? coder->value : qint64(-1));
+    auto values = collectRows(*stmt, [](const Statement &row) { return row.columnText(0); });
+    if (!values)
+        return std::unexpected(values.error());
+    return QStringList(values->begin(), values->end());
+}
+
 Result<std::vector<ValueInUse>> itemValuesInUse(const Database &db, const QString &key)
 {
     auto stmt = db.prepare(

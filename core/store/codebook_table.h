@@ -4,6 +4,9 @@
 #include "core/model/codebook.h"
 #include "core/model/error.h"
 
+#include <QStringList>
+
+#include <optional>
 #include <vector>
 
 namespace fourfold {
@@ -42,6 +45,10 @@ struct ValueInUse {
 // order of value.
 Result<std::vector<ValueInUse>> attributeValuesInUse(
     const Database &db, FramingFunction function, const QString &key);
+// The distinct string values of the attribute `key` on live spans of any function, most used first
+// (ties by value): of `coder`'s spans only when given, else of every coder's and gold spans.
+Result<QStringList> attributeTextValues(
+    const Database &db, const QString &key, std::optional<CoderId> coder);
 // The answers to the item `key` in live coders' and gold judgements, in order of value.
 Result<std::vector<ValueInUse>> itemValuesInUse(const Database &db, const QString &key);
 

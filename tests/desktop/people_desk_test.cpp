@@ -246,6 +246,12 @@ TEST_CASE("A coder copy of a lead opens as a coder and takes no new lead")
     dialog.show();
     REQUIRE(dialog.select(QStringLiteral("L01")));
     CHECK_FALSE(dialog.passphraseField()->isVisible());
+    // Only the copy's own person is offered, and as what they are here: a coder.
+    auto *people = dialog.findChild<QListWidget *>();
+    REQUIRE(people);
+    REQUIRE(people->count() == 1);
+    CHECK(people->item(0)->text() == QStringLiteral("L01 — Lena Lead (coder)"));
+    CHECK_FALSE(dialog.select(QStringLiteral("C01")));
     FormRun run = addThroughForm(dialog, QStringLiteral("Mallory"), QStringLiteral("L09"), true,
         QStringLiteral("mallory's passphrase"), QStringLiteral("L01"), kLeadPass);
     CHECK_FALSE(run.accepted);
