@@ -1,10 +1,10 @@
 #pragma once
-// The coder-copies test project (tests/copies/copies_fixture.h: three coders, a lead, six
+// The coder-copies test project (tests/project/copies_fixture.h: three coders, a lead, six
 // assignments, eight spans, a link, two answers, a gold span) published to a new database of the
 // test program's throwaway cluster.
 
 #include "core/team/team_project.h"
-#include "tests/copies/copies_fixture.h"
+#include "tests/project/copies_fixture.h"
 #include "tests/support/postgres_cluster.h"
 
 #include <catch2/catch.hpp>

@@ -1,6 +1,6 @@
 // `fourfold-cli handout` and `merge` as a script sees them: exit codes (0 ok, 1 failed, 2 usage),
 // one-line errors on stderr, JSON output; the project file checked before and after.
-#include "copies_fixture.h"
+#include "tests/project/copies_fixture.h"
 #include "tests/support/cli_run.h"
 
 #include <QJsonArray>

@@ -1,7 +1,7 @@
 // A coder copy in the desktop program's coding session: the same program opens it, the coder
 // codes blind (only their articles and spans exist), and the session's undoable edits merge back.
 #include "app/desktop/coding_session.h"
-#include "copies_fixture.h"
+#include "tests/project/copies_fixture.h"
 
 using namespace fourfold;
 using namespace fourfold::test;

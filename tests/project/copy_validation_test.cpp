@@ -2,9 +2,9 @@
 // backdated log rows, impossible coding time, work on articles never handed out, uuids of other
 // objects. Each is refused with a message naming the file and what is wrong, and the project is
 // left as it was (a full dump before and after, event log included).
-#include "copies_fixture.h"
-#include "copy_files.h"
 #include "core/project/testing/project_database.h"
+#include "tests/project/copies_fixture.h"
+#include "tests/project/copy_files.h"
 #include "tests/support/db_dump.h"
 
 #include <QDateTime>

@@ -2,11 +2,11 @@
 // repeated merges, refused copies, conflicts and their resolution, all-or-nothing under faults.
 // The merge rules are a three-way merge against a common base (common practice in version
 // control, e.g. diff3); the expected values below follow from the edits each test makes.
-#include "copies_fixture.h"
-#include "copy_files.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/testing/project_database.h"
 #include "core/store/schema.h"
+#include "tests/project/copies_fixture.h"
+#include "tests/project/copy_files.h"
 #include "tests/support/db_dump.h"
 
 #include <QFile>

@@ -3,10 +3,10 @@
 // order of the merges, in one call or in several: the same rows, the same coding time and the
 // same conflicts left for the lead (compared as full dumps of every table but the event log and
 // the merge records, and of the conflicts without their own uuid and detection time).
-#include "copies_fixture.h"
-#include "copy_files.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/testing/project_database.h"
+#include "tests/project/copies_fixture.h"
+#include "tests/project/copy_files.h"
 #include "tests/support/db_dump.h"
 
 #include <QFile>

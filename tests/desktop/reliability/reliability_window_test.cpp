@@ -7,7 +7,7 @@
 #include "app/desktop/reliability/reliability_window.h"
 #include "app/desktop/reliability/report_options_dialog.h"
 #include "core/agreement/agreement_report.h"
-#include "tests/diagnostics/planted_project.h"
+#include "tests/agreement/planted_project.h"
 #include "tests/project/double_coded_project.h"
 
 #include <QCheckBox>

@@ -2,7 +2,7 @@
 // the JSON names the planted coder, article and boundary habit first, and the report's own keys
 // are those of `agree --json` without the flag (the diagnostics are one added key).
 
-#include "tests/diagnostics/planted_project.h"
+#include "tests/agreement/planted_project.h"
 #include "tests/support/cli_run.h"
 #include "tests/support/test_support.h"
 

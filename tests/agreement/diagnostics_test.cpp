@@ -2,7 +2,7 @@
 // they must come first, with alpha values that a naive, independent alpha confirms.
 
 #include "core/agreement/diagnostics.h"
-#include "tests/diagnostics/planted_project.h"
+#include "tests/agreement/planted_project.h"
 
 #include <cstdint>
 #include <random>

@@ -3,7 +3,7 @@
 // the same for the same objects whatever their row ids, SQL run with the SQLite C API (as a
 // hostile user would), and short ways to find a project's coders, articles and spans.
 
-#include "copies_fixture.h"
+#include "tests/project/copies_fixture.h"
 
 #include <QString>
 #include <QStringList>
