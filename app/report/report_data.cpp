@@ -2,6 +2,7 @@
 
 #include "core/agreement/agreement_run.h"
 #include "core/project/project.h"
+#include "core/project/saved_frames.h"
 #include "core/project/study_design.h"
 
 #include <QCoreApplication>
@@ -89,6 +90,34 @@ const ReportAnalysis *ReportData::analysis(const QString &id) const
     return nullptr;
 }
 
+namespace {
+
+// The saved analysis in the report's JSON (null when there is none).
+QJsonValue framesJson(
+    const std::optional<SavedFrameAnalysis> &frames, const std::vector<ElementAlpha> &alphas)
+{
+    if (!frames)
+        return QJsonValue(QJsonValue::Null);
+    QJsonArray list;
+    for (const SavedFrame &f : frames->frames)
+        list.append(
+            QJsonObject {{QStringLiteral("frame"), f.cluster + 1}, {QStringLiteral("name"), f.name},
+                {QStringLiteral("size"), f.profile.value(QStringLiteral("size"))},
+                {QStringLiteral("share"), f.profile.value(QStringLiteral("share"))}});
+    QJsonArray elements;
+    for (const ElementAlpha &a : alphas)
+        elements.append(QJsonObject {{QStringLiteral("variable"), a.variable},
+            {QStringLiteral("alpha"),
+                a.alpha ? QJsonValue(*a.alpha) : QJsonValue(QJsonValue::Null)},
+            {QStringLiteral("pairable_units"), a.pairableUnits}});
+    return QJsonObject {{QStringLiteral("name"), frames->name},
+        {QStringLiteral("created_at"), frames->createdAt},
+        {QStringLiteral("settings"), frames->settings}, {QStringLiteral("frames"), list},
+        {QStringLiteral("element_alpha"), elements}};
+}
+
+} // namespace
+
 QJsonObject ReportData::toJson() const
 {
     QJsonArray analysisArray;
@@ -142,6 +171,7 @@ QJsonObject ReportData::toJson() const
                 {QStringLiteral("articles"), goldArticles},
                 {QStringLiteral("with_rationale"), goldWithRationale},
                 {QStringLiteral("decided_by"), QJsonArray::fromStringList(goldDeciders)}}},
+        {QStringLiteral("frames"), framesJson(frames, elementAlphas)},
         {QStringLiteral("codebook"),
             QJsonObject {{QStringLiteral("version"), codebookNumber},
                 {QStringLiteral("name"), codebookName}, {QStringLiteral("codings"), codingsTotal},
@@ -337,6 +367,20 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     }
     d.goldDeciders = QStringList(deciders.begin(), deciders.end());
     d.goldDeciders.sort();
+    // Frames: the newest saved analysis, and how reliable its element variables are.
+    auto saved = SavedFrames::list(project);
+    if (!saved)
+        return std::unexpected(saved.error());
+    if (!saved->empty()) {
+        d.frames = saved->back();
+        QStringList pseudonymsCoded;
+        for (const ReportCoder &c : d.coders)
+            pseudonymsCoded << c.pseudonym;
+        auto alphas = elementAlphas(project, pseudonymsCoded);
+        if (!alphas)
+            return std::unexpected(alphas.error());
+        d.elementAlphas = std::move(*alphas);
+    }
     return d;
 }
 

@@ -6,6 +6,8 @@
 #include "core/agreement/agreement_run.h"
 #include "core/model/annotation.h"
 #include "core/model/error.h"
+#include "core/model/saved_frame_analysis.h"
+#include "core/scoring/element_reliability.h"
 
 #include <QJsonObject>
 #include <QString>
@@ -83,6 +85,11 @@ struct ReportData {
     int codingsOtherVersion = 0;
     int trainingArticles = 0; // articles with training-phase assignments (any coder)
     int pilotArticles = 0;
+
+    // The newest saved frame analysis (SavedFrames), if any, and the alpha of each element
+    // variable over the coders above (counted codings of any phase, as the frames' layers).
+    std::optional<SavedFrameAnalysis> frames;
+    std::vector<ElementAlpha> elementAlphas;
 
     // The analysis with `id`, or nullptr.
     const ReportAnalysis *analysis(const QString &id) const;
