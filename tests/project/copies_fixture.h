@@ -6,6 +6,7 @@
 #include "core/project/coder_copies.h"
 #include "core/project/gold_edits.h"
 #include "core/project/project.h"
+#include "core/store/database.h"
 #include "core/store/statement.h"
 #include "tests/support/test_support.h"
 
