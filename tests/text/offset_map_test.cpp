@@ -5,6 +5,7 @@
 #include <QList>
 
 #include <random>
+#include <type_traits>
 #include <vector>
 
 using namespace fourfold;
@@ -18,6 +19,17 @@ QString fromUcs4(const std::vector<char32_t> &cps, size_t from = 0, size_t count
 }
 
 } // namespace
+
+// UTF-16 positions (Qt's, ICU's) and code points are distinct types: neither converts to the
+// other, so a UTF-16 range handed where a code-point range is meant does not compile.
+static_assert(!std::is_convertible_v<Utf16Range, TextRange>);
+static_assert(!std::is_convertible_v<TextRange, Utf16Range>);
+static_assert(std::is_invocable_v<decltype(&OffsetMap::codePointRange), const OffsetMap &,
+    const Utf16Range &>);
+static_assert(!std::is_invocable_v<decltype(&OffsetMap::codePointRange), const OffsetMap &,
+              const TextRange &>);
+static_assert(
+    !std::is_invocable_v<decltype(&OffsetMap::utf16Range), const OffsetMap &, const Utf16Range &>);
 
 TEST_CASE("OffsetMap gives exact positions for known strings")
 {
