@@ -1,5 +1,6 @@
 #include "app/cli/cli_output.h"
 #include "core/exchange/w3c_import.h"
+#include "core/io/document_split.h"
 #include "core/project/coding_import.h"
 #include "core/project/project.h"
 
@@ -95,6 +96,12 @@ int runImport(const QStringList &arguments)
     const QCommandLineOption wholeBook(QStringLiteral("whole-book"),
         QCoreApplication::translate(
             "cli", "EPUB: import each book as one article instead of one article per chapter."));
+    const QCommandLineOption splitOn(QStringLiteral("split-on"),
+        QCoreApplication::translate("cli",
+            "txt, docx, odt, pdf: cut each document into articles at the lines matching REGEX; "
+            "named groups (?<title>...), (?<outlet>...), (?<date>...) fill those fields, else "
+            "the first line of each part is its title."),
+        QStringLiteral("REGEX"));
     const QCommandLineOption nearCopyThreshold(QStringLiteral("near-copy-threshold"),
         QCoreApplication::translate("cli",
             "List and record an added article as a near copy of an article in the project when "
@@ -115,13 +122,14 @@ int runImport(const QStringList &arguments)
             "With --w3c or --codings: the phase of the imported codings (training, pilot, "
             "reliability, production; default production)."),
         QStringLiteral("PHASE"));
-    parser.addOptions(
-        {format, language, column, wholeBook, nearCopyThreshold, json, w3c, codings, phase});
+    parser.addOptions({format, language, column, wholeBook, splitOn, nearCopyThreshold, json, w3c,
+        codings, phase});
     parser.addPositionalArgument(
         QStringLiteral("PROJECT"), QCoreApplication::translate("cli", "The project file."));
     parser.addPositionalArgument(QStringLiteral("FILE..."),
         QCoreApplication::translate("cli",
-            "Files (or, for text, folders) to import. Each file is imported whole or not at all."));
+            "Files or folders to import. Each file is imported whole or not at all; a folder "
+            "(with its subfolders) likewise, as one."));
     if (int rc = parseCommandLine(parser, command,
             QCoreApplication::translate("cli",
                 "Import articles into a project (or, with --w3c or --codings, codings of its "
@@ -147,6 +155,13 @@ int runImport(const QStringList &arguments)
     }
     options.language = parser.value(language);
     options.epubWholeBook = parser.isSet(wholeBook);
+    if (parser.isSet(splitOn)) {
+        auto pattern = compileSplitPattern(parser.value(splitOn));
+        if (!pattern)
+            return usageError(command,
+                QCoreApplication::translate("cli", "--split-on: %1").arg(pattern.error().message));
+        options.splitOn = parser.value(splitOn);
+    }
     if (parser.isSet(nearCopyThreshold)) {
         bool ok = false;
         options.nearCopyThreshold = parser.value(nearCopyThreshold).toDouble(&ok);
@@ -213,14 +228,40 @@ int runImport(const QStringList &arguments)
                 QJsonObject {{QStringLiteral("id"), n.externalId}, {QStringLiteral("line"), n.line},
                     {QStringLiteral("near_copy_of"), n.otherExternalId},
                     {QStringLiteral("similarity"), n.similarity}});
+        QJsonArray read;
+        for (const ImportedFile &f : result->files)
+            read.append(QJsonObject {{QStringLiteral("file"), f.path},
+                {QStringLiteral("articles"), QJsonArray::fromStringList(f.articles)},
+                {QStringLiteral("skipped"), f.skipped},
+                {QStringLiteral("passed_over"),
+                    f.passedOver ? QJsonValue(f.reason) : QJsonValue()}});
         files.append(QJsonObject {{QStringLiteral("file"), file},
             {QStringLiteral("added"), qint64(result->added.size())},
-            {QStringLiteral("skipped"), skipped}, {QStringLiteral("near_copies"), nearCopies}});
+            {QStringLiteral("skipped"), skipped}, {QStringLiteral("near_copies"), nearCopies},
+            {QStringLiteral("files_read"), read}});
         if (!parser.isSet(json)) {
             out(QCoreApplication::translate("cli", "%1: %2 added, %3 skipped")
                     .arg(file)
                     .arg(result->added.size())
                     .arg(result->skipped.size()));
+            // A folder: each of its files and the articles it gave.
+            if (result->files.size() > 1
+                || (result->files.size() == 1 && result->files[0].path != file))
+                for (const ImportedFile &f : result->files) {
+                    if (f.passedOver) {
+                        out(QCoreApplication::translate("cli", "  %1: %2").arg(f.path, f.reason));
+                        continue;
+                    }
+                    QStringList shown = f.articles.mid(0, 10);
+                    if (f.articles.size() > 10)
+                        shown << QCoreApplication::translate(
+                            "cli", "… %n more", nullptr, int(f.articles.size() - 10));
+                    out(QCoreApplication::translate("cli", "  %1: %2 added (%3), %4 skipped")
+                            .arg(f.path)
+                            .arg(f.articles.size())
+                            .arg(shown.join(QStringLiteral(", ")))
+                            .arg(f.skipped));
+                }
             for (const SkippedArticle &s : result->skipped)
                 out(QCoreApplication::translate("cli", "  line %1 (%2): skipped, %3")
                         .arg(s.line)

@@ -2,6 +2,7 @@
 
 #include "core/io/chunked_input.h"
 #include "core/io/csv_reader.h"
+#include "core/io/document_split.h"
 #include "core/io/docx_reader.h"
 #include "core/io/epub_reader.h"
 #include "core/io/feed_reader.h"
@@ -350,6 +351,33 @@ Status readTextFolder(const QString &path, const ImportOptions &options, const A
     return {};
 }
 
+// A text-like document cut at the lines matching options.splitOn (document_split.h).
+Status readFileSplit(const QString &path, std::optional<ImportFormat> format,
+    const ImportOptions &options, const ArticleVisit &visit)
+{
+    if (!format
+        || !(*format == ImportFormat::Text || *format == ImportFormat::Docx
+            || *format == ImportFormat::Odt || *format == ImportFormat::Pdf))
+        return failAt(ErrorCode::Unsupported, path, 0, 0,
+            ArticleReaderText::tr("a split pattern cuts plain text, DOCX, ODT and PDF documents "
+                                  "(told by their suffix); this file is %1")
+                .arg(format ? importFormatKey(*format) : ArticleReaderText::tr("of another kind")));
+    auto pattern = compileSplitPattern(options.splitOn);
+    if (!pattern)
+        return failAt(pattern.error().code, path, 0, 0, pattern.error().message);
+    return readFile(path, format, options, [&](ImportedArticle &&document, ReadProgress progress) {
+        if (document.sourceFile.isEmpty())
+            document.sourceFile = path;
+        // The readers take a document's first line out of its text when it is its title; the
+        // split puts it back, as it may be the first matching line.
+        if (!document.title.isEmpty() && document.title != QFileInfo(path).completeBaseName()
+            && !document.text.startsWith(document.title))
+            document.text = document.title + QStringLiteral("\n\n") + document.text;
+        return splitDocument(document, *pattern,
+            [&](ImportedArticle &&part) { return visit(std::move(part), progress); });
+    });
+}
+
 } // namespace
 
 QString importFormatKey(ImportFormat format)
@@ -426,7 +454,9 @@ Status forEachArticle(const QString &path, const ImportOptions &options, const A
     // No format: .xml and unknown suffixes are told from the content (readOpenFile).
     const std::optional<ImportFormat> format =
         options.format ? options.format : importFormatFromPath(path);
-    return readFile(path, format, options, visit);
+    if (options.splitOn.isEmpty())
+        return readFile(path, format, options, visit);
+    return readFileSplit(path, format, options, visit);
 }
 
 Result<std::vector<ImportedArticle>> readArticles(const QString &path, const ImportOptions &options)

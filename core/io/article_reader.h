@@ -238,6 +238,10 @@ struct ImportOptions {
     ZipLimits zipLimits;
     // EPUB: the whole book as one article instead of one article per chapter.
     bool epubWholeBook = false;
+    // Plain text, DOCX, ODT and PDF: cut each document into articles at the lines that match this
+    // regular expression (core/io/document_split.h); empty = one article per document. Another
+    // format, or a file whose format is told from its content, is Unsupported with a pattern.
+    QString splitOn;
     // Project::importFile: an added article whose estimated word-shingle Jaccard similarity to
     // an article of the project reaches this (in (0, 1]) is recorded as its near copy.
     double nearCopyThreshold = 0.8;

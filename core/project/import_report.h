@@ -5,6 +5,7 @@
 #include "core/model/ids.h"
 
 #include <QString>
+#include <QStringList>
 
 #include <vector>
 
@@ -27,11 +28,21 @@ struct NearCopyFound {
     double similarity = 0.0; // MinHash estimate of the Jaccard similarity
 };
 
+// One file of an import (a folder's files each have one), with what it gave.
+struct ImportedFile {
+    QString path;
+    QStringList articles; // the external ids of the articles added from it, in file order
+    qint64 skipped = 0; // its articles whose text was already in the project
+    QString reason; // why it was refused or passed over; empty when it was read
+    bool passedOver = false; // a folder's file of no format Fourfold reads
+};
+
 struct ImportReport {
     QString source;
     std::vector<ArticleId> added;
     std::vector<SkippedArticle> skipped;
     std::vector<NearCopyFound> nearCopies; // in the order the articles were added
+    std::vector<ImportedFile> files; // every file read (one for a file; a folder's, by path)
 };
 
 } // namespace fourfold

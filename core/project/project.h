@@ -71,7 +71,11 @@ public:
     // is already in the project (same SHA-256) are skipped and listed in the report. All-or-
     // nothing: on any error (including an external id that is already in the project with
     // another text, or a bad line after many good ones) nothing is added. `progress`, if given,
-    // is called after each article; returning false cancels (Cancelled).
+    // is called after each article; returning false cancels (Cancelled). Added articles close to
+    // one already there are near copies (ImportOptions::nearCopyThreshold, near_copy_check.h). A
+    // folder `path` is read with its subfolders, every file by its own format, as one import:
+    // any refused file makes it fail (InvalidInput, the message listing every file with its
+    // articles or why it was refused); files of no known format are passed over and listed.
     Result<ImportReport> importFile(
         const QString &path, const ImportOptions &options, const ImportProgress &progress = {});
 

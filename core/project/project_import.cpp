@@ -13,7 +13,12 @@
 #include "core/text/segmenter.h"
 
 #include <QCoreApplication>
+#include <QDir>
+#include <QDirIterator>
+#include <QFileInfo>
 #include <QHash>
+
+#include <algorithm>
 
 namespace fourfold {
 
@@ -59,13 +64,31 @@ Result<Article> prepareArticle(
     return a;
 }
 
+// The files of a folder and its subfolders, by path relative to it in code-unit order (the same
+// on every system); hidden files and folders (names starting with ".") are left out.
+QStringList folderFiles(const QString &folder)
+{
+    QStringList files;
+    QDirIterator it(folder, QDir::Files | QDir::NoDotAndDotDot, QDirIterator::Subdirectories);
+    const QDir base(folder);
+    while (it.hasNext()) {
+        const QString file = it.next();
+        const QString relative = base.relativeFilePath(file);
+        if (relative.startsWith(QLatin1Char('.')) || relative.contains(QStringLiteral("/.")))
+            continue;
+        files << relative;
+    }
+    std::ranges::sort(files);
+    return files;
+}
+
 } // namespace
 
 Result<ImportReport> Project::importFile(
     const QString &path, const ImportOptions &options, const ImportProgress &progress)
 {
-    FOURFOLD_TRY_STATUS(checkBeforeImport());
     FOURFOLD_TRY_STATUS(NearCopyCheck::checkThreshold(options.nearCopyThreshold));
+    FOURFOLD_TRY_STATUS(checkBeforeImport());
     ImportReport report;
     report.source = path;
     auto sp = Savepoint::begin(db());
@@ -73,9 +96,12 @@ Result<ImportReport> Project::importFile(
         return std::unexpected(sp.error());
 
     QHash<QString, QString> shaInThisImport; // sha256 → external id of its first article
+    NearCopyCheck nearCopies(options.nearCopyThreshold);
+    ImportedFile *current = nullptr; // the entry of report.files being read
+    qint64 readBefore = 0; // a folder: the bytes of the files read before this one
+    qint64 folderBytes = 0; // a folder: the bytes of all its files
     const auto add = [&](const ImportedArticle &in) -> Status {
-        NearCopyCheck nearCopies(options.nearCopyThreshold);
-        auto prepared = prepareArticle(in, path, m_settings.defaultLanguage);
+        auto prepared = prepareArticle(in, current->path, m_settings.defaultLanguage);
         if (!prepared)
             return std::unexpected(prepared.error());
         const QString &sha = prepared->summary.sha256;
@@ -89,6 +115,7 @@ Result<ImportReport> Project::importFile(
                 auto existing = store::article(db(), **sameText);
                 other = existing ? existing->summary.externalId : QString();
             }
+            ++current->skipped;
             report.skipped.push_back(SkippedArticle {in.externalId, in.sourceLine,
                 ProjectImportText::tr("same text as the article \"%1\" already in the project")
                     .arg(other)});
@@ -108,18 +135,77 @@ Result<ImportReport> Project::importFile(
             return std::unexpected(id.error());
         shaInThisImport.insert(sha, in.externalId);
         report.added.push_back(*id);
+        current->articles << in.externalId;
         return nearCopies.check(
             db(), *id, in.externalId, in.sourceLine, prepared->text, report.nearCopies);
     };
     const ArticleVisit visit = [&](ImportedArticle &&in, ReadProgress read) -> Status {
         FOURFOLD_TRY_STATUS(add(in));
-        if (progress && !progress(read.bytesRead, read.totalBytes))
+        const qint64 total = folderBytes > 0 ? folderBytes : read.totalBytes;
+        if (progress && !progress(readBefore + read.bytesRead, total))
             return fail(ErrorCode::Cancelled,
                 ProjectImportText::tr("The import of %1 was cancelled; nothing was added.")
                     .arg(path));
         return {};
     };
-    FOURFOLD_TRY_STATUS(forEachArticle(path, options, visit));
+    if (!QFileInfo(path).isDir()) {
+        report.files.push_back(ImportedFile {path, {}, 0, {}});
+        current = &report.files.back();
+        FOURFOLD_TRY_STATUS(forEachArticle(path, options, visit));
+    } else {
+        // A folder: every file in it and its subfolders, all or nothing. A file that fails does
+        // not stop the reading, so that the report can say what is wrong with each; a file of no
+        // format Fourfold reads (told neither by the forced format nor its suffix nor its
+        // content) is passed over and listed.
+        const QStringList files = folderFiles(path);
+        const QDir folder(path);
+        for (const QString &file : files)
+            folderBytes += QFileInfo(folder.filePath(file)).size();
+        report.files.reserve(size_t(files.size()));
+        qint64 refused = 0;
+        for (const QString &file : files) {
+            const QString full = folder.filePath(file);
+            report.files.push_back(ImportedFile {full, {}, 0, {}});
+            current = &report.files.back();
+            const auto added = report.added.size();
+            const Status read = forEachArticle(full, options, visit);
+            readBefore += QFileInfo(full).size();
+            if (read)
+                continue;
+            if (read.error().code == ErrorCode::Cancelled)
+                return std::unexpected(read.error());
+            // What a refused file added goes with the rest when the whole folder is undone.
+            current->articles.clear();
+            if (read.error().code == ErrorCode::Unsupported && !options.format
+                && !importFormatFromPath(full)) {
+                current->passedOver = true;
+                current->reason = ProjectImportText::tr("passed over: not a format Fourfold reads");
+                report.added.resize(added);
+                continue;
+            }
+            current->reason = read.error().toString();
+            ++refused;
+        }
+        if (files.isEmpty())
+            return fail(ErrorCode::InvalidInput,
+                ProjectImportText::tr("The folder %1 holds no files.").arg(path));
+        if (refused > 0) {
+            QStringList lines;
+            for (const ImportedFile &f : report.files)
+                lines << (f.reason.isEmpty()
+                        ? ProjectImportText::tr(
+                            "%1: %n article(s)", nullptr, int(f.articles.size()))
+                              .arg(folder.relativeFilePath(f.path))
+                        : QStringLiteral("%1: %2").arg(folder.relativeFilePath(f.path), f.reason));
+            return fail(ErrorCode::InvalidInput,
+                ProjectImportText::tr(
+                    "The folder %1 was not imported: %n of its files could not be "
+                    "read, so nothing was added.",
+                    nullptr, int(refused))
+                        .arg(path)
+                    + QLatin1Char('\n') + lines.join(QLatin1Char('\n')));
+        }
+    }
     FOURFOLD_TRY_STATUS(store::appendEvent(db(), CoderId {}, QStringLiteral("articles.import"),
         QStringLiteral("source"), QString(),
         QJsonObject {{QStringLiteral("source"), path},
