@@ -389,72 +389,82 @@
 <context>
     <name>ArticleReaderText</name>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="35"/>
+        <location filename="../core/io/article_reader.cpp" line="36"/>
         <source>the file contains no articles</source>
         <translation>die Datei enthält keine Artikel</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="87"/>
+        <location filename="../core/io/article_reader.cpp" line="88"/>
         <source>the article has no id</source>
         <translation>der Artikel hat keine ID</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="94"/>
+        <location filename="../core/io/article_reader.cpp" line="95"/>
         <source>the id &quot;%1&quot; holds a control character (U+%2); ids are one line of printable text</source>
         <translation>die ID „%1“ enthält ein Steuerzeichen (U+%2); IDs sind eine Zeile druckbaren Texts</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="112"/>
+        <location filename="../core/io/article_reader.cpp" line="113"/>
         <source>the %1 of the article &quot;%2&quot; holds a NUL character (U+0000), which no text holds</source>
         <translation>%1 des Artikels „%2“ enthält ein NUL-Zeichen (U+0000), das in keinem Text vorkommt</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="118"/>
+        <location filename="../core/io/article_reader.cpp" line="119"/>
         <source>the article &quot;%1&quot; has no text</source>
         <translation>der Artikel „%1“ hat keinen Text</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="123"/>
+        <location filename="../core/io/article_reader.cpp" line="124"/>
         <source>duplicate id &quot;%1&quot; (first seen on line %2)</source>
         <translation>doppelte ID „%1“ (zuerst in Zeile %2)</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="156"/>
+        <location filename="../core/io/article_reader.cpp" line="157"/>
         <source>the XML root element &lt;%1&gt; is neither a feed&apos;s (&lt;rss&gt;, Atom&apos;s &lt;feed&gt;) nor a news item&apos;s (&lt;nitf&gt;, NewsML-G2&apos;s &lt;newsItem&gt; or &lt;newsMessage&gt;)</source>
         <translation>das XML-Wurzelelement &lt;%1&gt; gehört weder zu einem Feed (&lt;rss&gt;, Atoms &lt;feed&gt;) noch zu einer Nachrichtenmeldung (&lt;nitf&gt;, &lt;newsItem&gt; oder &lt;newsMessage&gt; von NewsML-G2)</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="195"/>
+        <location filename="../core/io/article_reader.cpp" line="196"/>
         <source>the file is a zip archive but not a DOCX, ODT or EPUB document; choose the format if it is one</source>
         <translation>die Datei ist ein ZIP-Archiv, aber kein DOCX-, ODT- oder EPUB-Dokument; wählen Sie das Format, wenn sie eines ist</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="210"/>
+        <location filename="../core/io/article_reader.cpp" line="211"/>
         <source>the file is %1 MiB long; a file may be at most %2 MiB</source>
         <translation>die Datei ist %1 MiB groß; eine Datei darf höchstens %2 MiB groß sein</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="219"/>
+        <location filename="../core/io/article_reader.cpp" line="220"/>
         <source>the file is empty: it contains no articles</source>
         <translation>die Datei ist leer: sie enthält keine Artikel</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="254"/>
+        <location filename="../core/io/article_reader.cpp" line="255"/>
         <source>the format cannot be told from the file name or its content; name the file .txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf, .epub or .xml, or choose the format</source>
         <translation>das Format lässt sich weder am Dateinamen noch am Inhalt erkennen; benennen Sie die Datei .txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf, .epub oder .xml, oder wählen Sie das Format</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="320"/>
+        <location filename="../core/io/article_reader.cpp" line="321"/>
         <source>the folder contains no .txt files</source>
         <translation>der Ordner enthält keine .txt-Dateien</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="341"/>
+        <location filename="../core/io/article_reader.cpp" line="342"/>
         <source>duplicate id &quot;%1&quot; (first seen in %2)</source>
         <translation>doppelte ID „%1“ (zuerst in %2)</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="422"/>
+        <location filename="../core/io/article_reader.cpp" line="362"/>
+        <source>a split pattern cuts plain text, DOCX, ODT and PDF documents (told by their suffix); this file is %1</source>
+        <translation>ein Trennmuster teilt reinen Text sowie DOCX-, ODT- und PDF-Dokumente (erkannt an ihrer Endung); diese Datei ist %1</translation>
+    </message>
+    <message>
+        <location filename="../core/io/article_reader.cpp" line="364"/>
+        <source>of another kind</source>
+        <translation>von anderer Art</translation>
+    </message>
+    <message>
+        <location filename="../core/io/article_reader.cpp" line="450"/>
         <source>a folder can only be read as plain text (its .txt files)</source>
         <translation>ein Ordner kann nur als reiner Text gelesen werden (seine .txt-Dateien)</translation>
     </message>
@@ -1216,112 +1226,112 @@
 <context>
     <name>CoderCopiesText</name>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="67"/>
+        <location filename="../core/project/coder_copies.cpp" line="68"/>
         <source>Several coders are called &quot;%1&quot;; name the coder by pseudonym.</source>
         <translation>Mehrere Codierende heißen „%1“; nennen Sie die codierende Person beim Pseudonym.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="71"/>
+        <location filename="../core/project/coder_copies.cpp" line="72"/>
         <source>There is no coder with the pseudonym or name &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keine codierende Person mit dem Pseudonym oder Namen „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="107"/>
+        <location filename="../core/project/coder_copies.cpp" line="108"/>
         <source>%1 (copy for %2)</source>
         <translation>%1 (Kopie für %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="164"/>
+        <location filename="../core/project/coder_copies.cpp" line="165"/>
         <source>%1 is not a Fourfold project file; it was not merged.</source>
         <translation>%1 ist keine Fourfold-Projektdatei; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="167"/>
+        <location filename="../core/project/coder_copies.cpp" line="168"/>
         <source>%1 was written by a newer Fourfold (schema version %2); it was not merged.</source>
         <translation>%1 wurde von einem neueren Fourfold geschrieben (Schemaversion %2); sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="176"/>
+        <location filename="../core/project/coder_copies.cpp" line="177"/>
         <source>%1 is a project file but not a coder copy; it was not merged.</source>
         <translation>%1 ist eine Projektdatei, aber keine Kopie für Codierende; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="181"/>
+        <location filename="../core/project/coder_copies.cpp" line="182"/>
         <source>%1 is a coder copy of another project (%2), not of this one (%3); it was not merged.</source>
         <translation>%1 ist eine Kopie für Codierende aus einem anderen Projekt (%2), nicht aus diesem (%3); sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="190"/>
+        <location filename="../core/project/coder_copies.cpp" line="191"/>
         <source>The coder of %1 is no longer in the project; it was not merged.</source>
         <translation>Die codierende Person von %1 ist nicht mehr im Projekt; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="202"/>
+        <location filename="../core/project/coder_copies.cpp" line="203"/>
         <source>%1 holds article &quot;%2&quot;, which is not in the project; it was not merged.</source>
         <translation>%1 enthält den Artikel „%2“, der nicht im Projekt ist; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="208"/>
+        <location filename="../core/project/coder_copies.cpp" line="209"/>
         <source>The text of article &quot;%1&quot; in %2 differs from the project&apos;s (SHA-256 %3 instead of %4): the copy was changed outside Fourfold; it was not merged.</source>
         <translation>Der Text des Artikels „%1“ in %2 weicht von dem des Projekts ab (SHA-256 %3 statt %4): die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="222"/>
+        <location filename="../core/project/coder_copies.cpp" line="223"/>
         <source>%1 holds a codebook version (%2) that is not in the project; it was not merged.</source>
         <translation>%1 enthält eine Codebuchversion (%2), die nicht im Projekt ist; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="231"/>
+        <location filename="../core/project/coder_copies.cpp" line="232"/>
         <source>%1 holds %2 annotations, answers or assignments of people other than its coder %3; it was not merged.</source>
         <translation>%1 enthält %2 Annotationen, Antworten oder Zuweisungen anderer Personen als ihrer codierenden Person %3; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="367"/>
+        <location filename="../core/project/coder_copies.cpp" line="368"/>
         <source>%1 names a copy (%2) that this project never handed out; it was not merged.</source>
         <translation>%1 nennt eine Kopie (%2), die dieses Projekt nie ausgegeben hat; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="389"/>
+        <location filename="../core/project/coder_copies.cpp" line="390"/>
         <source>There is no coder copy %1.</source>
         <translation>Es gibt keine Kopie für Codierende %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="515"/>
+        <location filename="../core/project/coder_copies.cpp" line="516"/>
         <source>The coding time in %1 would overflow the project&apos;s; it was not merged.</source>
         <translation>Die Codierzeit in %1 würde die des Projekts überlaufen lassen; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="571"/>
+        <location filename="../core/project/coder_copies.cpp" line="572"/>
         <source>%1 is itself a coder copy; hand out copies from the main project.</source>
         <translation>%1 ist selbst eine Kopie für Codierende; geben Sie Kopien aus dem Hauptprojekt aus.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="578"/>
+        <location filename="../core/project/coder_copies.cpp" line="579"/>
         <source>%1 already exists; choose another name for the coder copy.</source>
         <translation>%1 existiert bereits; wählen Sie einen anderen Namen für die Kopie.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="586"/>
+        <location filename="../core/project/coder_copies.cpp" line="587"/>
         <source>Coder %1 has no assigned articles; assign some before handing out a copy.</source>
         <translation>Der codierenden Person %1 sind keine Artikel zugewiesen; weisen Sie welche zu, bevor Sie eine Kopie ausgeben.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="647"/>
+        <location filename="../core/project/coder_copies.cpp" line="648"/>
         <source>%1 is itself a coder copy; merge copies into the main project.</source>
         <translation>%1 ist selbst eine Kopie für Codierende; führen Sie Kopien im Hauptprojekt zusammen.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="675"/>
+        <location filename="../core/project/coder_copies.cpp" line="676"/>
         <source>Keep &quot;mine&quot; (the version the project holds) or &quot;theirs&quot; (the version that lost), not &quot;%1&quot;.</source>
         <translation>Behalten Sie „mine“ (die Version im Projekt) oder „theirs“ (die unterlegene Version), nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="692"/>
+        <location filename="../core/project/coder_copies.cpp" line="693"/>
         <source>There is no open conflict %1.</source>
         <translation>Es gibt keinen offenen Konflikt %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="695"/>
+        <location filename="../core/project/coder_copies.cpp" line="696"/>
         <source>%1 has %2 open conflicts (from several copies); name the conflict&apos;s uuid.</source>
         <translation>%1 hat %2 offene Konflikte (aus mehreren Kopien); nennen Sie die UUID des Konflikts.</translation>
     </message>
@@ -1489,6 +1499,34 @@
     </message>
 </context>
 <context>
+    <name>ConflictEditsText</name>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="58"/>
+        <source>Keep the other version</source>
+        <translation>Die andere Version behalten</translation>
+    </message>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="59"/>
+        <source>Keep the project&apos;s version</source>
+        <translation>Die Version des Projekts behalten</translation>
+    </message>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="70"/>
+        <source>There is no open conflict %1.</source>
+        <translation>Es gibt keinen offenen Konflikt %1.</translation>
+    </message>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="100"/>
+        <source>The object of conflict %1 is missing from the project.</source>
+        <translation>Das Objekt des Konflikts %1 fehlt im Projekt.</translation>
+    </message>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="109"/>
+        <source>The decision on conflict %1 was never made.</source>
+        <translation>Die Entscheidung über Konflikt %1 wurde nie getroffen.</translation>
+    </message>
+</context>
+<context>
     <name>CopyTablesText</name>
     <message>
         <location filename="../core/store/copy_tables.cpp" line="58"/>
@@ -1509,6 +1547,11 @@
         <location filename="../core/store/copy_tables.cpp" line="664"/>
         <source>There is no open conflict %1.</source>
         <translation>Es gibt keinen offenen Konflikt %1.</translation>
+    </message>
+    <message>
+        <location filename="../core/store/copy_tables.cpp" line="678"/>
+        <source>There is no decided conflict %1.</source>
+        <translation>Es gibt keinen entschiedenen Konflikt %1.</translation>
     </message>
 </context>
 <context>
@@ -2277,32 +2320,32 @@
 <context>
     <name>ImportDialog</name>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="22"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="24"/>
         <source>Importing articles…</source>
         <translation>Artikel werden importiert…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="23"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="25"/>
         <source>Cancel</source>
         <translation>Abbrechen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="28"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="30"/>
         <source>Importing %1 (%2 of %3)…</source>
         <translation>%1 wird importiert (%2 von %3)…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="49"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="51"/>
         <source>%1: not imported — %2</source>
         <translation>%1: nicht importiert — %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="44"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="46"/>
         <source>%1: cancelled; nothing from this file was added.</source>
         <translation>%1: abgebrochen; aus dieser Datei wurde nichts hinzugefügt.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/import_dialog.cpp" line="54"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="56"/>
         <source>%1: %n article(s) added</source>
         <translation>
             <numerusform>%1: %n Artikel hinzugefügt</numerusform>
@@ -2310,18 +2353,36 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="58"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="60"/>
         <source>    line %1 (%2): skipped, %3</source>
         <translation>    Zeile %1 (%2): übersprungen, %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="71"/>
-        <location filename="../app/desktop/import_dialog.cpp" line="77"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="65"/>
+        <source>    line %1 (%2): added, a near copy of &quot;%3&quot; (similarity %4)</source>
+        <translation>    Zeile %1 (%2): hinzugefügt, eine Beinahe-Kopie von „%3“ (Ähnlichkeit %4)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="73"/>
+        <source>    %1: %2</source>
+        <translation>    %1: %2</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/import_dialog.cpp" line="75"/>
+        <source>    %1: %n article(s) added</source>
+        <translation>
+            <numerusform>    %1: %n Artikel hinzugefügt</numerusform>
+            <numerusform>    %1: %n Artikel hinzugefügt</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="87"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="93"/>
         <source>Import report</source>
         <translation>Importbericht</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/import_dialog.cpp" line="73"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="89"/>
         <source>%n article(s) added.</source>
         <translation>
             <numerusform>%n Artikel hinzugefügt.</numerusform>
@@ -2662,29 +2723,55 @@
 <context>
     <name>ProjectImportText</name>
     <message>
-        <location filename="../core/project/project_import.cpp" line="36"/>
+        <location filename="../core/project/project_import.cpp" line="41"/>
         <source>the article &quot;%1&quot; has no text.</source>
         <translation>der Artikel „%1“ hat keinen Text.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="51"/>
+        <location filename="../core/project/project_import.cpp" line="56"/>
         <source>the article &quot;%1&quot; cannot be segmented: %2</source>
         <translation>der Artikel „%1“ kann nicht segmentiert werden: %2</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="93"/>
+        <location filename="../core/project/project_import.cpp" line="120"/>
         <source>same text as the article &quot;%1&quot; already in the project</source>
         <translation>gleicher Text wie der Artikel „%1“, der bereits im Projekt ist</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="102"/>
+        <location filename="../core/project/project_import.cpp" line="129"/>
         <source>the id &quot;%1&quot; is already used by another article in the project, with a different text.</source>
         <translation>die ID „%1“ wird im Projekt bereits von einem anderen Artikel mit anderem Text verwendet.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="118"/>
+        <location filename="../core/project/project_import.cpp" line="147"/>
         <source>The import of %1 was cancelled; nothing was added.</source>
         <translation>Der Import von %1 wurde abgebrochen; nichts wurde hinzugefügt.</translation>
+    </message>
+    <message>
+        <location filename="../core/project/project_import.cpp" line="182"/>
+        <source>passed over: not a format Fourfold reads</source>
+        <translation>übergangen: kein Format, das Fourfold liest</translation>
+    </message>
+    <message>
+        <location filename="../core/project/project_import.cpp" line="191"/>
+        <source>The folder %1 holds no files.</source>
+        <translation>Der Ordner %1 enthält keine Dateien.</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../core/project/project_import.cpp" line="196"/>
+        <source>%1: %n article(s)</source>
+        <translation>
+            <numerusform>%1: %n Artikel</numerusform>
+            <numerusform>%1: %n Artikel</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../core/project/project_import.cpp" line="201"/>
+        <source>The folder %1 was not imported: %n of its files could not be read, so nothing was added.</source>
+        <translation>
+            <numerusform>Der Ordner %1 wurde nicht importiert: %n seiner Dateien konnte nicht gelesen werden, daher wurde nichts hinzugefügt.</numerusform>
+            <numerusform>Der Ordner %1 wurde nicht importiert: %n seiner Dateien konnten nicht gelesen werden, daher wurde nichts hinzugefügt.</numerusform>
+        </translation>
     </message>
 </context>
 <context>
@@ -2903,52 +2990,52 @@
 <context>
     <name>ReportDataText</name>
     <message>
-        <location filename="../app/report/report_data.cpp" line="67"/>
+        <location filename="../app/report/report_data.cpp" line="68"/>
         <source>a sample stratified by %1</source>
         <translation>eine nach %1 geschichtete Stichprobe</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="68"/>
+        <location filename="../app/report/report_data.cpp" line="69"/>
         <source>a simple random sample</source>
         <translation>eine einfache Zufallsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="69"/>
+        <location filename="../app/report/report_data.cpp" line="70"/>
         <source>The %1 articles of the %2 phase were drawn as %3 (seed %4) from a frame of %5 articles with no earlier assignment, on %6.</source>
         <translation>Die %1 Artikel der Phase %2 wurden als %3 (Seed %4) aus einer Auswahlgesamtheit von %5 Artikeln ohne frühere Zuweisung gezogen, am %6.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="156"/>
+        <location filename="../app/report/report_data.cpp" line="186"/>
         <source>The report&apos;s unit must be paragraph, sentence or token.</source>
         <translation>Die Einheit des Berichts muss paragraph, sentence oder token sein.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="161"/>
+        <location filename="../app/report/report_data.cpp" line="191"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="162"/>
+        <location filename="../app/report/report_data.cpp" line="192"/>
         <source>Reliability report: %1</source>
         <translation>Reliabilitätsbericht: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="207"/>
+        <location filename="../app/report/report_data.cpp" line="237"/>
         <source>All four functions (MASI)</source>
         <translation>Alle vier Funktionen (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="207"/>
+        <location filename="../app/report/report_data.cpp" line="237"/>
         <source>All four (MASI)</source>
         <translation>Alle vier (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="250"/>
+        <location filename="../app/report/report_data.cpp" line="280"/>
         <source>Spans on the continuum</source>
         <translation>Textstellen auf dem Kontinuum</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="251"/>
+        <location filename="../app/report/report_data.cpp" line="281"/>
         <source>continuum</source>
         <translation>Kontinuum</translation>
     </message>
@@ -2956,649 +3043,711 @@
 <context>
     <name>ReportDocumentText</name>
     <message>
-        <location filename="../app/report/report_document.cpp" line="160"/>
-        <location filename="../app/report/report_document.cpp" line="1007"/>
-        <location filename="../app/report/report_document.cpp" line="1009"/>
+        <location filename="../app/report/report_document.cpp" line="161"/>
+        <location filename="../app/report/report_document.cpp" line="924"/>
+        <location filename="../app/report/report_document.cpp" line="1079"/>
+        <location filename="../app/report/report_document.cpp" line="1081"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="162"/>
+        <location filename="../app/report/report_document.cpp" line="163"/>
         <source>reliable</source>
         <translation>reliabel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="164"/>
+        <location filename="../app/report/report_document.cpp" line="165"/>
         <source>tentative</source>
         <translation>vorläufig</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="168"/>
+        <location filename="../app/report/report_document.cpp" line="169"/>
         <source>unreliable</source>
         <translation>nicht reliabel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="224"/>
+        <location filename="../app/report/report_document.cpp" line="226"/>
         <source>paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="224"/>
+        <location filename="../app/report/report_document.cpp" line="226"/>
         <source>paragraphs</source>
         <translation>Absätze</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="226"/>
+        <location filename="../app/report/report_document.cpp" line="228"/>
         <source>token</source>
         <translation>Token</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="226"/>
+        <location filename="../app/report/report_document.cpp" line="228"/>
         <source>tokens</source>
         <translation>Tokens</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="228"/>
+        <location filename="../app/report/report_document.cpp" line="230"/>
         <source>sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="228"/>
+        <location filename="../app/report/report_document.cpp" line="230"/>
         <source>sentences</source>
         <translation>Sätze</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="235"/>
+        <location filename="../app/report/report_document.cpp" line="237"/>
         <source>unit: %1</source>
         <translation>Einheit: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="236"/>
+        <location filename="../app/report/report_document.cpp" line="238"/>
         <source>phase: %1</source>
         <translation>Phase: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="238"/>
+        <location filename="../app/report/report_document.cpp" line="240"/>
         <source>all phases</source>
         <translation>alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="239"/>
+        <location filename="../app/report/report_document.cpp" line="241"/>
         <source>bootstrap: %1 replicates, seed %2</source>
         <translation>Bootstrap: %1 Replikationen, Seed %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="243"/>
+        <location filename="../app/report/report_document.cpp" line="245"/>
         <source>Inter-coder reliability</source>
         <translation>Intercoder-Reliabilität</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="246"/>
+        <location filename="../app/report/report_document.cpp" line="248"/>
         <source>Project “%1” · written %2 by %3 · %4</source>
         <translation>Projekt „%1“ · geschrieben %2 von %3 · %4</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="261"/>
+        <location filename="../app/report/report_document.cpp" line="263"/>
         <source>%1 coded %2 articles (%3 spans)</source>
         <translation>%1 codierte %2 Artikel (%3 Textstellen)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="271"/>
+        <location filename="../app/report/report_document.cpp" line="273"/>
         <source>Inter-coder reliability was assessed on a reliability sample of %1 articles that two or more coders coded independently (%2 of them by all %3 coders), out of %4 articles in the project. </source>
         <translation>Die Intercoder-Reliabilität wurde an einer Reliabilitätsstichprobe von %1 Artikeln bestimmt, die zwei oder mehr Codierende unabhängig voneinander codierten (%2 davon von allen %3 Codierenden), von %4 Artikeln im Projekt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="283"/>
+        <location filename="../app/report/report_document.cpp" line="285"/>
         <source>The sample was drawn %1. </source>
         <translation>Die Stichprobe wurde %1 gezogen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="284"/>
+        <location filename="../app/report/report_document.cpp" line="286"/>
         <source>state how the articles were drawn, e.g. a simple random sample of the study&apos;s articles, with its size and seed</source>
         <translation>geben Sie an, wie die Artikel gezogen wurden, z. B. als einfache Zufallsstichprobe aus den Artikeln der Studie, mit Umfang und Seed</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="288"/>
+        <location filename="../app/report/report_document.cpp" line="290"/>
         <source>%1 coders (%2) took part: %3. </source>
         <translation>%1 Codierende (%2) nahmen teil: %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="292"/>
+        <location filename="../app/report/report_document.cpp" line="294"/>
         <source>Articles that coders had started but not yet marked as finished were included. </source>
         <translation>Artikel, die Codierende begonnen, aber noch nicht als abgeschlossen markiert hatten, wurden einbezogen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="295"/>
+        <location filename="../app/report/report_document.cpp" line="297"/>
         <source>Only articles that a coder had marked as finished count for that coder. </source>
         <translation>Für jede codierende Person zählen nur Artikel, die sie als abgeschlossen markiert hatte. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="299"/>
+        <location filename="../app/report/report_document.cpp" line="301"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="301"/>
+        <location filename="../app/report/report_document.cpp" line="303"/>
         <source>Articles still in progress were left out: %1. </source>
         <translation>Noch begonnene Artikel wurden ausgelassen: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="305"/>
+        <location filename="../app/report/report_document.cpp" line="307"/>
         <source>Before the reliability coding, coders trained on %1 articles and coded a pilot of %2 articles; %3. </source>
         <translation>Vor der Reliabilitätscodierung übten die Codierenden an %1 Artikeln und codierten einen Pretest von %2 Artikeln; %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="312"/>
+        <location filename="../app/report/report_document.cpp" line="314"/>
         <source>hours of training</source>
         <translation>Stunden Schulung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="314"/>
+        <location filename="../app/report/report_document.cpp" line="316"/>
         <source>Coder training: %1. </source>
         <translation>Codiererschulung: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="316"/>
+        <location filename="../app/report/report_document.cpp" line="318"/>
         <source>describe the training and its approximate hours</source>
         <translation>beschreiben Sie die Schulung und ihren ungefähren Umfang in Stunden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="322"/>
+        <location filename="../app/report/report_document.cpp" line="324"/>
         <source>%1 α = %2</source>
         <translation>%1 α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="326"/>
+        <location filename="../app/report/report_document.cpp" line="328"/>
         <source> (95% CI %1)</source>
         <translation> (95%-KI %1)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="331"/>
+        <location filename="../app/report/report_document.cpp" line="333"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
         <translation>Jede der vier Framing-Funktionen nach Entman (1993) wurde als Textstelle codiert; für die Reliabilität wurde jede Funktion zu einer binären Variablen (vorhanden oder nicht vorhanden) je %1: eine Einheit (%2) trägt eine Funktion, wenn die Textstelle einer codierenden Person mit dieser Funktion sie überlappt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="336"/>
+        <location filename="../app/report/report_document.cpp" line="338"/>
         <source>We report Krippendorff&apos;s alpha (Krippendorff, 2004) because it handles any number of coders, missing data and any level of measurement (Hayes &amp; Krippendorff, 2007). </source>
         <translation>Wir berichten Krippendorffs Alpha (Krippendorff, 2004), weil es beliebig viele Codierende, fehlende Daten und jedes Skalenniveau zulässt (Hayes &amp; Krippendorff, 2007). </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="340"/>
+        <location filename="../app/report/report_document.cpp" line="342"/>
         <source>Alpha was %1</source>
         <translation>Alpha betrug %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="342"/>
+        <location filename="../app/report/report_document.cpp" line="344"/>
         <source>; for the set of functions per %1, compared with the MASI distance (Passonneau, 2006), α = %2</source>
         <translation>; für die Menge der Funktionen je %1, verglichen mit der MASI-Distanz (Passonneau, 2006), α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="349"/>
+        <location filename="../app/report/report_document.cpp" line="351"/>
         <source>Intervals are 95% percentile bootstrap intervals from %1 resamples of the units; the table also gives the interval from resampled pairable values (Hayes &amp; Krippendorff, 2007), which is narrower than its nominal level when more than two coders are compared. </source>
         <translation>Die Intervalle sind 95%-Perzentil-Bootstrap-Intervalle aus %1 Neuziehungen der Einheiten; die Tabelle nennt auch das Intervall aus neu gezogenen paarbaren Werten (Hayes &amp; Krippendorff, 2007), das enger als sein nominales Niveau ist, wenn mehr als zwei Codierende verglichen werden. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="355"/>
+        <location filename="../app/report/report_document.cpp" line="357"/>
         <source>Following Krippendorff (2004), variables with α&#xa0;≥&#xa0;0.800 are relied on and variables with 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 support tentative conclusions only. </source>
         <translation>Nach Krippendorff (2004) wird Variablen mit α&#xa0;≥&#xa0;0.800 vertraut, und Variablen mit 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 tragen nur vorläufige Schlüsse. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="366"/>
+        <location filename="../app/report/report_document.cpp" line="368"/>
         <source>%1 (%2) α = %3</source>
         <translation>%1 (%2) α = %3</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="372"/>
+        <location filename="../app/report/report_document.cpp" line="374"/>
         <source>For the other variables alpha was: %1.</source>
         <translation>Für die übrigen Variablen betrug Alpha: %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="377"/>
+        <location filename="../app/report/report_document.cpp" line="379"/>
         <source>Disagreements were resolved by adjudication into a separate gold standard: %1 spans on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Abweichungen wurden durch Entscheidung in einen getrennten Goldstandard aufgelöst: %1 Textstellen in %2 Artikeln, entschieden von %3, %4 davon mit schriftlicher Begründung. Die unabhängigen Codierungen blieben unverändert; alle obigen Werte stammen aus ihnen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="389"/>
+        <location filename="../app/report/report_document.cpp" line="391"/>
         <source>No adjudication is recorded in the project yet: %1. </source>
         <translation>Im Projekt ist noch keine Entscheidung verzeichnet: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="390"/>
+        <location filename="../app/report/report_document.cpp" line="392"/>
         <source>say how disagreements were resolved, e.g. by discussion or by the lead</source>
         <translation>geben Sie an, wie Abweichungen aufgelöst wurden, z. B. durch Diskussion oder durch die Leitung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="393"/>
+        <location filename="../app/report/report_document.cpp" line="395"/>
         <source>Coding followed version %1 of the codebook (“%2”)</source>
         <translation>Die Codierung folgte Version %1 des Codebuchs („%2“)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="398"/>
+        <location filename="../app/report/report_document.cpp" line="400"/>
         <source>; %1 of %2 codings were made under an earlier version</source>
         <translation>; %1 von %2 Codierungen entstanden unter einer früheren Version</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="403"/>
+        <location filename="../app/report/report_document.cpp" line="405"/>
         <source>, which is available at %1.</source>
         <translation>, das unter %1 verfügbar ist.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="404"/>
+        <location filename="../app/report/report_document.cpp" line="406"/>
         <source>where readers can obtain it</source>
         <translation>wo Lesende es erhalten können</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="408"/>
+        <location filename="../app/report/report_document.cpp" line="410"/>
         <source>Highlighted brackets are for the authors to complete: the project does not record these facts.</source>
         <translation>Hervorgehobene Klammern ergänzen die Autorinnen und Autoren: das Projekt verzeichnet diese Angaben nicht.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="425"/>
+        <location filename="../app/report/report_document.cpp" line="427"/>
         <source>Size of the reliability sample and how it was selected</source>
         <translation>Umfang der Reliabilitätsstichprobe und wie sie ausgewählt wurde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="427"/>
+        <location filename="../app/report/report_document.cpp" line="429"/>
         <source>Relationship of the reliability sample to the full sample</source>
         <translation>Verhältnis der Reliabilitätsstichprobe zur Gesamtstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="429"/>
+        <location filename="../app/report/report_document.cpp" line="431"/>
         <source>Number of reliability coders</source>
         <translation>Anzahl der Codierenden in der Reliabilitätsprüfung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="430"/>
+        <location filename="../app/report/report_document.cpp" line="432"/>
         <source>Amount of coding conducted by each coder</source>
         <translation>Umfang der Codierung je codierender Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="431"/>
+        <location filename="../app/report/report_document.cpp" line="433"/>
         <source>Index or indices selected and why</source>
         <translation>Gewählte Koeffizienten und Begründung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="432"/>
+        <location filename="../app/report/report_document.cpp" line="434"/>
         <source>Reliability for each variable, for each index</source>
         <translation>Reliabilität jeder Variablen, für jeden Koeffizienten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="433"/>
+        <location filename="../app/report/report_document.cpp" line="435"/>
         <source>Amount of coder training required to reach reliability</source>
         <translation>Umfang der Codiererschulung bis zum Erreichen der Reliabilität</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="435"/>
+        <location filename="../app/report/report_document.cpp" line="437"/>
         <source>How disagreements were resolved</source>
         <translation>Wie Abweichungen aufgelöst wurden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="436"/>
+        <location filename="../app/report/report_document.cpp" line="438"/>
         <source>Where the codebook and coding instructions can be obtained</source>
         <translation>Wo Codebuch und Codieranweisungen erhältlich sind</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="441"/>
+        <location filename="../app/report/report_document.cpp" line="443"/>
         <source>#</source>
         <translation>#</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="441"/>
+        <location filename="../app/report/report_document.cpp" line="443"/>
         <source>Item</source>
         <translation>Punkt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="442"/>
+        <location filename="../app/report/report_document.cpp" line="444"/>
         <source>In this report</source>
         <translation>In diesem Bericht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="450"/>
+        <location filename="../app/report/report_document.cpp" line="452"/>
         <source>filled in from the project</source>
         <translation>aus dem Projekt ausgefüllt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="451"/>
+        <location filename="../app/report/report_document.cpp" line="453"/>
         <source>partly filled in; complete the bracket</source>
         <translation>teilweise ausgefüllt; ergänzen Sie die Klammer</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="464"/>
         <location filename="../app/report/report_document.cpp" line="466"/>
-        <location filename="../app/report/report_document.cpp" line="561"/>
-        <location filename="../app/report/report_document.cpp" line="642"/>
-        <location filename="../app/report/report_document.cpp" line="678"/>
-        <location filename="../app/report/report_document.cpp" line="808"/>
+        <location filename="../app/report/report_document.cpp" line="468"/>
+        <location filename="../app/report/report_document.cpp" line="563"/>
+        <location filename="../app/report/report_document.cpp" line="644"/>
+        <location filename="../app/report/report_document.cpp" line="680"/>
+        <location filename="../app/report/report_document.cpp" line="810"/>
         <source>Variable</source>
         <translation>Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="466"/>
+        <location filename="../app/report/report_document.cpp" line="468"/>
         <source>Level</source>
         <translation>Niveau</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="473"/>
-        <location filename="../app/report/report_document.cpp" line="643"/>
+        <location filename="../app/report/report_document.cpp" line="475"/>
+        <location filename="../app/report/report_document.cpp" line="645"/>
         <source>Units</source>
         <translation>Einh.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="474"/>
-        <location filename="../app/report/report_document.cpp" line="562"/>
+        <location filename="../app/report/report_document.cpp" line="476"/>
+        <location filename="../app/report/report_document.cpp" line="564"/>
         <source>Pairable values</source>
         <translation>Paarb. Werte</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="475"/>
+        <location filename="../app/report/report_document.cpp" line="477"/>
         <source>95% CI, units</source>
         <translation>95%-KI, Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="476"/>
+        <location filename="../app/report/report_document.cpp" line="478"/>
         <source>95% CI, pairs</source>
         <translation>95%-KI, Paare</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="477"/>
-        <location filename="../app/report/report_document.cpp" line="643"/>
+        <location filename="../app/report/report_document.cpp" line="479"/>
+        <location filename="../app/report/report_document.cpp" line="645"/>
         <source>Agreement</source>
         <translation>Übereinst.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="477"/>
-        <location filename="../app/report/report_document.cpp" line="731"/>
+        <location filename="../app/report/report_document.cpp" line="479"/>
+        <location filename="../app/report/report_document.cpp" line="733"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="484"/>
+        <location filename="../app/report/report_document.cpp" line="486"/>
         <source>not computed: %1</source>
         <translation>nicht berechnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="513"/>
+        <location filename="../app/report/report_document.cpp" line="515"/>
         <source>Units: %1 (articles for article-level items; passages matched across coders for span attributes). Agreement: percent agreement, which is not chance-corrected and is never reported alone (Lombard et al., 2002). Units: units resampled, percentile interval (the interval to report); pairs: pairable values resampled with the expected disagreement held fixed (Hayes &amp; Krippendorff, 2007), too narrow with more than two coders.</source>
         <translation>Einheiten: %1 (Artikel für Items auf Artikelebene; zwischen Codierenden zugeordnete Passagen für Merkmale von Textstellen). Übereinstimmung: prozentuale Übereinstimmung, die nicht zufallskorrigiert ist und nie allein berichtet wird (Lombard et al., 2002). Einheiten: Einheiten neu gezogen, Perzentilintervall (das zu berichtende Intervall); Paare: paarbare Werte neu gezogen bei festgehaltener erwarteter Nichtübereinstimmung (Hayes &amp; Krippendorff, 2007), bei mehr als zwei Codierenden zu eng.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="548"/>
+        <location filename="../app/report/report_document.cpp" line="550"/>
         <source>Krippendorff&apos;s alpha per variable</source>
         <translation>Krippendorffs Alpha je Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="549"/>
+        <location filename="../app/report/report_document.cpp" line="551"/>
         <source>Krippendorff&apos;s alpha per variable (dots) with 95% bootstrap intervals: whiskers resample pairable values (Hayes &amp; Krippendorff, 2007), bands resample units. The lines mark 0.667 and 0.800 (Krippendorff, 2004).</source>
         <translation>Krippendorffs Alpha je Variable (Punkte) mit 95%-Bootstrap-Intervallen: Whisker ziehen paarbare Werte neu (Hayes &amp; Krippendorff, 2007), Bänder ziehen Einheiten neu. Die Linien markieren 0.667 und 0.800 (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="563"/>
+        <location filename="../app/report/report_document.cpp" line="565"/>
         <source>Rarest value</source>
         <translation>Seltenster Wert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="564"/>
+        <location filename="../app/report/report_document.cpp" line="566"/>
         <source>Minimum for α ≥ 0.800</source>
         <translation>Minimum für α ≥ 0.800</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="565"/>
+        <location filename="../app/report/report_document.cpp" line="567"/>
         <source>Enough?</source>
         <translation>Ausreichend?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="580"/>
+        <location filename="../app/report/report_document.cpp" line="582"/>
         <source>yes</source>
         <translation>ja</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="581"/>
+        <location filename="../app/report/report_document.cpp" line="583"/>
         <source>too few values</source>
         <translation>zu wenige Werte</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="584"/>
+        <location filename="../app/report/report_document.cpp" line="586"/>
         <source>Krippendorff&apos;s (2004, §11.4) minimum number of pairable values for α ≥ 0.800 at p = 0.05, after Bloch &amp; Kraemer (1989), given the share of the rarest value.</source>
         <translation>Krippendorffs (2004, §11.4) Mindestzahl paarbarer Werte für α ≥ 0.800 bei p = 0.05 nach Bloch &amp; Kraemer (1989), gegeben den Anteil des seltensten Werts.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="596"/>
+        <location filename="../app/report/report_document.cpp" line="598"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="596"/>
+        <location filename="../app/report/report_document.cpp" line="598"/>
         <source>Role</source>
         <translation>Rolle</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="597"/>
+        <location filename="../app/report/report_document.cpp" line="599"/>
+        <location filename="../app/report/report_document.cpp" line="887"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="598"/>
+        <location filename="../app/report/report_document.cpp" line="600"/>
         <source>Shared articles</source>
         <translation>Gemeinsame Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="599"/>
+        <location filename="../app/report/report_document.cpp" line="601"/>
         <source>Spans</source>
         <translation>Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="605"/>
+        <location filename="../app/report/report_document.cpp" line="607"/>
         <source>Answers</source>
         <translation>Antworten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="621"/>
+        <location filename="../app/report/report_document.cpp" line="623"/>
         <source>Coders appear by pseudonym only. Articles: coded by the coder (assigned, or with a span or an answer); shared: also coded by another coder in this report.</source>
         <translation>Codierende erscheinen nur unter Pseudonym. Artikel: von der Person codiert (zugewiesen oder mit einer Textstelle oder Antwort); gemeinsam: in diesem Bericht auch von einer anderen Person codiert.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="632"/>
+        <location filename="../app/report/report_document.cpp" line="634"/>
         <source>Cohen&apos;s kappa per coder pair</source>
         <translation>Cohens Kappa je Codierpaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="633"/>
+        <location filename="../app/report/report_document.cpp" line="635"/>
         <source>Cohen&apos;s kappa (Cohen, 1960) for each pair of coders and each function, on the %1 both coded. Darker is higher; hatched cells are undefined.</source>
         <translation>Cohens Kappa (Cohen, 1960) für jedes Paar von Codierenden und jede Funktion, auf den %1, die beide codierten. Dunkler ist höher; schraffierte Zellen sind nicht definiert.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="642"/>
+        <location filename="../app/report/report_document.cpp" line="644"/>
         <source>Pair</source>
         <translation>Paar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="644"/>
+        <location filename="../app/report/report_document.cpp" line="646"/>
         <source>95% CI</source>
         <translation>95%-KI</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="664"/>
+        <location filename="../app/report/report_document.cpp" line="666"/>
         <source>95% CI: large-sample interval with the standard error of Fleiss, Cohen &amp; Everitt (1969). A coder whose kappa is low with everyone else is worth a look before the coders are retrained.</source>
         <translation>95%-KI: Intervall für große Stichproben mit dem Standardfehler nach Fleiss, Cohen &amp; Everitt (1969). Eine codierende Person, deren Kappa mit allen anderen niedrig ist, verdient einen Blick, bevor die Codierenden nachgeschult werden.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="678"/>
+        <location filename="../app/report/report_document.cpp" line="680"/>
         <source>Fleiss&apos; κ</source>
         <translation>Fleiss&apos; κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="679"/>
+        <location filename="../app/report/report_document.cpp" line="681"/>
         <source>Light&apos;s κ</source>
         <translation>Lights κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="679"/>
+        <location filename="../app/report/report_document.cpp" line="681"/>
         <source>Cohen&apos;s κ</source>
         <translation>Cohens κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="680"/>
+        <location filename="../app/report/report_document.cpp" line="682"/>
         <source>Scott&apos;s π</source>
         <translation>Scotts π</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="681"/>
+        <location filename="../app/report/report_document.cpp" line="683"/>
         <source>Bennett&apos;s S</source>
         <translation>Bennetts S</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="686"/>
+        <location filename="../app/report/report_document.cpp" line="688"/>
         <source>n/a</source>
         <translation>n. v.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="700"/>
+        <location filename="../app/report/report_document.cpp" line="702"/>
         <source>For comparison with older studies: Fleiss (1971) and Light (1971) for any number of coders, Cohen (1960), Scott (1955) and Bennett, Alpert &amp; Goldstein (1954) for two; n/a where their assumptions (complete data, two coders) do not hold.</source>
         <translation>Zum Vergleich mit älteren Studien: Fleiss (1971) und Light (1971) für beliebig viele Codierende, Cohen (1960), Scott (1955) und Bennett, Alpert &amp; Goldstein (1954) für zwei; n. v., wo ihre Voraussetzungen (vollständige Daten, zwei Codierende) nicht erfüllt sind.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="715"/>
+        <location filename="../app/report/report_document.cpp" line="717"/>
         <source>Not computed: %1</source>
         <translation>Nicht berechnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="718"/>
+        <location filename="../app/report/report_document.cpp" line="720"/>
         <source>Unitizing alpha (Krippendorff, 2004) compares where the coders put their spans, character by character, on the %1 articles that every coder coded (%2 characters laid end to end).</source>
         <translation>Unitizing-Alpha (Krippendorff, 2004) vergleicht Zeichen für Zeichen, wo die Codierenden ihre Textstellen setzen, auf den %1 Artikeln, die alle Codierenden codierten (%2 Zeichen aneinandergereiht).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="728"/>
+        <location filename="../app/report/report_document.cpp" line="730"/>
         <source>Function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="729"/>
+        <location filename="../app/report/report_document.cpp" line="731"/>
         <source>Observed disagreement</source>
         <translation>Beobachtete Nichtübereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="730"/>
+        <location filename="../app/report/report_document.cpp" line="732"/>
         <source>Expected disagreement</source>
         <translation>Erwartete Nichtübereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="746"/>
+        <location filename="../app/report/report_document.cpp" line="748"/>
         <source>all four</source>
         <translation>alle vier</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="765"/>
+        <location filename="../app/report/report_document.cpp" line="767"/>
         <source>Alpha without each coder</source>
         <translation>Alpha ohne jeweils eine codierende Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="767"/>
+        <location filename="../app/report/report_document.cpp" line="769"/>
         <source>Left out</source>
         <translation>Ausgelassen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="797"/>
+        <location filename="../app/report/report_document.cpp" line="799"/>
         <source>Alpha recomputed without the coder&apos;s codings; in brackets the change against all coders (positive: the coder pulls alpha down). A diagnostic for retraining, not a licence to report the better figure (Krippendorff, 2004).</source>
         <translation>Alpha ohne die Codierungen der Person neu berechnet; in Klammern die Änderung gegenüber allen Codierenden (positiv: die Person senkt Alpha). Eine Diagnose für die Nachschulung, keine Erlaubnis, den besseren Wert zu berichten (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="804"/>
+        <location filename="../app/report/report_document.cpp" line="806"/>
         <source>The article that costs most</source>
         <translation>Der Artikel, der am meisten kostet</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="808"/>
+        <location filename="../app/report/report_document.cpp" line="810"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="809"/>
+        <location filename="../app/report/report_document.cpp" line="811"/>
         <source>α without it</source>
         <translation>α ohne ihn</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="810"/>
+        <location filename="../app/report/report_document.cpp" line="812"/>
         <source>Change</source>
         <translation>Änderung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="833"/>
+        <location filename="../app/report/report_document.cpp" line="835"/>
         <source>Function confusion between coders</source>
         <translation>Funktionsverwechslungen zwischen Codierenden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="835"/>
+        <location filename="../app/report/report_document.cpp" line="837"/>
         <source>A coder&apos;s span</source>
         <translation>Textstelle einer Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="853"/>
+        <location filename="../app/report/report_document.cpp" line="855"/>
         <source>For each coder&apos;s span, the function the other coder gave the span that overlaps it most (none: nothing there), summed over ordered pairs of coders. Off the diagonal are the confusions a codebook rule could settle.</source>
         <translation>Für jede Textstelle einer codierenden Person die Funktion, die die andere Person der am stärksten überlappenden Textstelle gab (keine: dort ist nichts), summiert über geordnete Paare von Codierenden. Abseits der Diagonale stehen die Verwechslungen, die eine Codebuchregel klären könnte.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="865"/>
+        <location filename="../app/report/report_document.cpp" line="868"/>
+        <source>The newest saved frame analysis, “%1” (saved %2): %3 frames of the layer %4 over %5 articles, by Ward&apos;s hierarchical clustering refined by k-means (Matthes &amp; Kohring 2008). A frame&apos;s characteristic elements are those with an adjusted residual above 1.96 (Haberman 1973), with their share in the frame and in all articles. The frames are only as good as their elements: beside each element variable stands its Krippendorff&apos;s alpha (nominal, articles as units) over the coders of this report.</source>
+        <translation>Die neueste gespeicherte Frame-Analyse, „%1“ (gespeichert %2): %3 Frames der Ebene %4 über %5 Artikel, mit hierarchischer Clusteranalyse nach Ward, verfeinert durch k-Means (Matthes &amp; Kohring 2008). Die kennzeichnenden Elemente eines Frames sind jene mit einem standardisierten Residuum über 1.96 (Haberman 1973), mit ihrem Anteil im Frame und in allen Artikeln. Die Frames sind nur so gut wie ihre Elemente: neben jeder Elementvariable steht ihr Krippendorffs Alpha (nominal, Artikel als Einheiten) über die Codierenden dieses Berichts.</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="886"/>
+        <source>Frame</source>
+        <translation>Frame</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="886"/>
+        <source>Name</source>
+        <translation>Name</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="887"/>
+        <source>Share</source>
+        <translation>Anteil</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="888"/>
+        <source>Characteristic elements</source>
+        <translation>Kennzeichnende Elemente</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="890"/>
+        <source>F%1</source>
+        <translation>F%1</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="898"/>
+        <source>%1 (%2% / %3%)</source>
+        <translation>%1 (%2% / %3%)</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="909"/>
+        <source>none stands out</source>
+        <translation>keines sticht heraus</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="916"/>
+        <source>Element variable</source>
+        <translation>Elementvariable</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="917"/>
+        <source>Pairable articles</source>
+        <translation>Paarbare Artikel</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="918"/>
+        <source>Characterises</source>
+        <translation>Kennzeichnet</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="935"/>
         <source>Every figure above is what these commands print (add --json for all digits):</source>
         <translation>Jeder Wert oben ist das, was diese Befehle ausgeben (mit --json alle Stellen):</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="925"/>
+        <location filename="../app/report/report_document.cpp" line="995"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
         <translation>de</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="942"/>
+        <location filename="../app/report/report_document.cpp" line="1012"/>
         <source>Method text</source>
         <translation>Methodentext</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="944"/>
+        <location filename="../app/report/report_document.cpp" line="1014"/>
         <source>Reporting checklist (Lombard, Snyder-Duch &amp; Bracken, 2002)</source>
         <translation>Checkliste für die Berichterstattung (Lombard, Snyder-Duch &amp; Bracken, 2002)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="946"/>
+        <location filename="../app/report/report_document.cpp" line="1016"/>
         <source>Reliability per variable</source>
         <translation>Reliabilität je Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="948"/>
+        <location filename="../app/report/report_document.cpp" line="1018"/>
         <source>Is the sample large enough?</source>
         <translation>Ist die Stichprobe groß genug?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="950"/>
+        <location filename="../app/report/report_document.cpp" line="1020"/>
         <source>Coders and the amount each coded</source>
         <translation>Codierende und ihr Codierumfang</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="952"/>
+        <location filename="../app/report/report_document.cpp" line="1022"/>
         <source>Coder pairs</source>
         <translation>Codierpaare</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="953"/>
+        <location filename="../app/report/report_document.cpp" line="1023"/>
         <source>Other coefficients</source>
         <translation>Weitere Koeffizienten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="955"/>
+        <location filename="../app/report/report_document.cpp" line="1025"/>
         <source>Span boundaries: unitizing alpha</source>
         <translation>Grenzen der Textstellen: Unitizing-Alpha</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="959"/>
+        <location filename="../app/report/report_document.cpp" line="1029"/>
         <source>Where reliability is lost</source>
         <translation>Wo Reliabilität verloren geht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="961"/>
+        <location filename="../app/report/report_document.cpp" line="1032"/>
+        <source>Frames</source>
+        <translation>Frames</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="1033"/>
         <source>Reproducing the figures</source>
         <translation>Die Werte reproduzieren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="963"/>
+        <location filename="../app/report/report_document.cpp" line="1035"/>
         <source>References</source>
         <translation>Literatur</translation>
     </message>
@@ -3812,6 +3961,129 @@
         <location filename="../core/store/shared_rows.cpp" line="127"/>
         <source>The units of the article %1 are not pairs of 32-bit offsets.</source>
         <translation>Die Einheiten des Artikels %1 sind keine Paare von 32-Bit-Offsets.</translation>
+    </message>
+</context>
+<context>
+    <name>ShortcutTableText</name>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="53"/>
+        <source>Mark the selected text as problem, cause, evaluation or remedy, snapped to whole words; with a span selected: relabel it</source>
+        <translation>Den markierten Text als Problem, Ursache, Bewertung oder Lösung kennzeichnen, an ganzen Wörtern ausgerichtet; bei gewählter Textstelle: ihre Funktion ändern</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="56"/>
+        <source>%1+1 – 4 (or Alt+1 – 4)</source>
+        <translation>%1+1 – 4 (oder Alt+1 – 4)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="57"/>
+        <source>Mark exactly the selected text, without snapping to words</source>
+        <translation>Genau den markierten Text kennzeichnen, ohne Ausrichtung an Wörtern</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="59"/>
+        <source>Exact selection on or off (View menu): while on, 1 – 4 and handle drags take the text exactly as selected</source>
+        <translation>Exakte Auswahl ein oder aus (Menü Ansicht): solange ein, übernehmen 1 – 4 und das Ziehen an Griffen den Text genau wie markiert</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="62"/>
+        <source>%1 while dragging a handle (or Alt)</source>
+        <translation>%1 beim Ziehen eines Griffs (oder Alt)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="63"/>
+        <source>Resize the selected span to the exact character</source>
+        <translation>Die gewählte Textstelle zeichengenau in der Länge ändern</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="64"/>
+        <source>Delete or Backspace</source>
+        <translation>Entf oder Rücktaste</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="65"/>
+        <source>Delete the selected span</source>
+        <translation>Die gewählte Textstelle löschen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="66"/>
+        <source>%1+Left / Right (or Alt+Left / Right)</source>
+        <translation>%1+Links / Rechts (oder Alt+Links / Rechts)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="67"/>
+        <source>Move the selected span&apos;s start by a word</source>
+        <translation>Den Anfang der gewählten Textstelle um ein Wort verschieben</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="68"/>
+        <source>%1+Shift+Left / Right (or Alt+Shift+Left / Right)</source>
+        <translation>%1+Umschalt+Links / Rechts (oder Alt+Umschalt+Links / Rechts)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="69"/>
+        <source>Move the selected span&apos;s end by a word</source>
+        <translation>Das Ende der gewählten Textstelle um ein Wort verschieben</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="70"/>
+        <source>%1+Up / Down (or Alt+Up / Down)</source>
+        <translation>%1+Hoch / Runter (oder Alt+Hoch / Runter)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="71"/>
+        <source>Select the previous / next span</source>
+        <translation>Die vorige / nächste Textstelle wählen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="72"/>
+        <source>Esc</source>
+        <translation>Esc</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="73"/>
+        <source>Clear the span selection, then the text selection; cancel a drag</source>
+        <translation>Erst die Auswahl der Textstelle, dann die Textauswahl aufheben; ein Ziehen abbrechen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="75"/>
+        <source>Undo the last change</source>
+        <translation>Die letzte Änderung rückgängig machen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="76"/>
+        <source>Redo</source>
+        <translation>Wiederholen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="78"/>
+        <source>Mark the article as done and open the next</source>
+        <translation>Den Artikel als erledigt markieren und den nächsten öffnen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="79"/>
+        <source>Next article that is not done</source>
+        <translation>Nächster Artikel, der nicht erledigt ist</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="80"/>
+        <source>Search the texts</source>
+        <translation>In den Texten suchen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="82"/>
+        <source>Compare coders and adjudicate (leads)</source>
+        <translation>Codierende vergleichen und entscheiden (Leitung)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="83"/>
+        <source>Reliability (leads)</source>
+        <translation>Reliabilität (Leitung)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="84"/>
+        <source>This list of keys</source>
+        <translation>Diese Liste der Tasten</translation>
     </message>
 </context>
 <context>
@@ -4810,7 +5082,7 @@
         <location filename="../app/cli/command_export.cpp" line="73"/>
         <location filename="../app/cli/command_extract.cpp" line="166"/>
         <location filename="../app/cli/command_handout.cpp" line="25"/>
-        <location filename="../app/cli/command_import.cpp" line="121"/>
+        <location filename="../app/cli/command_import.cpp" line="128"/>
         <location filename="../app/cli/command_info.cpp" line="38"/>
         <location filename="../app/cli/command_merge.cpp" line="75"/>
         <location filename="../app/cli/command_people.cpp" line="109"/>
@@ -5277,7 +5549,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_extract.cpp" line="194"/>
-        <location filename="../app/cli/command_import.cpp" line="186"/>
+        <location filename="../app/cli/command_import.cpp" line="201"/>
         <source>Upgraded the project file; the old version is kept as %1.</source>
         <translation>Die Projektdatei wurde aktualisiert; die alte Version bleibt als %1 erhalten.</translation>
     </message>
@@ -5710,112 +5982,122 @@
         <translation>Sie enthält %1 Artikel, %2 Annotationen, %3 Verknüpfungen und %4 Urteile auf Artikelebene.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="48"/>
+        <location filename="../app/cli/command_import.cpp" line="49"/>
         <source>%1: %2 spans, %3 answers, %4 gold spans added</source>
         <translation>%1: %2 Textstellen, %3 Antworten, %4 Goldstandard-Textstellen hinzugefügt</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="54"/>
+        <location filename="../app/cli/command_import.cpp" line="55"/>
         <source>  %1 line(s) skipped: already in the project (the same annotation, or the same coder, function and range; the same answer; the same gold span)</source>
         <translation>  %1 Zeile(n) übersprungen: bereits im Projekt (dieselbe Annotation oder dieselbe Person, Funktion und derselbe Bereich; dieselbe Antwort; dieselbe Goldstandard-Textstelle)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="59"/>
+        <location filename="../app/cli/command_import.cpp" line="60"/>
         <source>  %1 article(s) marked done for their coders (imported codings count as finished)</source>
         <translation>  %1 Artikel für ihre Codierenden als erledigt markiert (importierte Codierungen gelten als abgeschlossen)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="64"/>
+        <location filename="../app/cli/command_import.cpp" line="65"/>
         <source>  new coders: %1</source>
         <translation>  neue Codierende: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="81"/>
+        <location filename="../app/cli/command_import.cpp" line="82"/>
         <source>Read every file as txt, html, jsonl, csv, feed (RSS or Atom), newsxml (NITF or NewsML-G2), docx, odt, pdf or epub (default: from each file&apos;s suffix; .xml and unknown suffixes from the content).</source>
         <translation>Jede Datei als txt, html, jsonl, csv, feed (RSS oder Atom), newsxml (NITF oder NewsML-G2), docx, odt, pdf oder epub lesen (Standard: nach der Endung jeder Datei; .xml und unbekannte Endungen nach dem Inhalt).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="87"/>
+        <location filename="../app/cli/command_import.cpp" line="88"/>
         <source>Language (BCP 47 tag) of articles that name none (default: the project&apos;s).</source>
         <translation>Sprache (BCP-47-Kennzeichen) von Artikeln, die keine nennen (Standard: die des Projekts).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="91"/>
+        <location filename="../app/cli/command_import.cpp" line="92"/>
         <source>CSV: take FIELD (id, title, text, outlet, published, language) from the column HEADER. Repeatable.</source>
         <translation>CSV: FELD (id, title, text, outlet, published, language) aus der Spalte HEADER nehmen. Wiederholbar.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="96"/>
+        <location filename="../app/cli/command_import.cpp" line="97"/>
         <source>EPUB: import each book as one article instead of one article per chapter.</source>
         <translation>EPUB: jedes Buch als einen Artikel importieren statt eines Artikels je Kapitel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="99"/>
+        <location filename="../app/cli/command_import.cpp" line="100"/>
+        <source>txt, docx, odt, pdf: cut each document into articles at the lines matching REGEX; named groups (?&lt;title&gt;...), (?&lt;outlet&gt;...), (?&lt;date&gt;...) fill those fields, else the first line of each part is its title.</source>
+        <translation>txt, docx, odt, pdf: jedes Dokument an den Zeilen, auf die REGEX passt, in Artikel teilen; benannte Gruppen (?&lt;title&gt;...), (?&lt;outlet&gt;...), (?&lt;date&gt;...) füllen diese Felder, sonst ist die erste Zeile jedes Teils sein Titel.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_import.cpp" line="106"/>
         <source>List and record an added article as a near copy of an article in the project when the estimated Jaccard similarity of their 5-word shingles is at least J, in (0, 1] (default 0.8).</source>
         <translation>Einen hinzugefügten Artikel als Beinahe-Kopie eines Artikels im Projekt auflisten und speichern, wenn die geschätzte Jaccard-Ähnlichkeit ihrer 5-Wort-Shingles mindestens J beträgt, in (0, 1] (Standard 0.8).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="105"/>
+        <location filename="../app/cli/command_import.cpp" line="112"/>
         <source>Print the report as JSON.</source>
         <translation>Den Bericht als JSON ausgeben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="107"/>
+        <location filename="../app/cli/command_import.cpp" line="114"/>
         <source>The files hold W3C Web Annotations (from &quot;export --format w3c&quot;): import them as codings of the articles already in the project.</source>
         <translation>Die Dateien enthalten W3C-Web-Annotationen (aus „export --format w3c“): als Codierungen der bereits im Projekt vorhandenen Artikel importieren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="111"/>
+        <location filename="../app/cli/command_import.cpp" line="118"/>
         <source>The files hold quote-anchored codings (JSON Lines, see sample-project/README.md).</source>
         <translation>Die Dateien enthalten an Zitaten verankerte Codierungen (JSON Lines, siehe sample-project/README.md).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="114"/>
+        <location filename="../app/cli/command_import.cpp" line="121"/>
         <source>With --w3c or --codings: the phase of the imported codings (training, pilot, reliability, production; default production).</source>
         <translation>Mit --w3c oder --codings: die Phase der importierten Codierungen (training, pilot, reliability, production; Standard production).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="123"/>
-        <source>Files (or, for text, folders) to import. Each file is imported whole or not at all.</source>
-        <translation>Zu importierende Dateien (oder, für Text, Ordner). Jede Datei wird ganz oder gar nicht importiert.</translation>
+        <location filename="../app/cli/command_import.cpp" line="130"/>
+        <source>Files or folders to import. Each file is imported whole or not at all; a folder (with its subfolders) likewise, as one.</source>
+        <translation>Zu importierende Dateien oder Ordner. Jede Datei wird ganz oder gar nicht importiert; ein Ordner (mit seinen Unterordnern) ebenso, als Ganzes.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="126"/>
+        <location filename="../app/cli/command_import.cpp" line="134"/>
         <source>Import articles into a project (or, with --w3c or --codings, codings of its articles).</source>
         <translation>Artikel in ein Projekt importieren (oder, mit --w3c oder --codings, Codierungen seiner Artikel).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="135"/>
+        <location filename="../app/cli/command_import.cpp" line="143"/>
         <source>expected a project file and at least one file to import.</source>
         <translation>Projektdatei und mindestens eine zu importierende Datei erwartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="143"/>
+        <location filename="../app/cli/command_import.cpp" line="151"/>
         <source>unknown format &quot;%1&quot; (expected txt, html, jsonl, csv, feed, newsxml, docx, odt, pdf or epub).</source>
         <translation>unbekanntes Format „%1“ (erwartet: txt, html, jsonl, csv, feed, newsxml, docx, odt, pdf oder epub).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="155"/>
+        <location filename="../app/cli/command_import.cpp" line="162"/>
+        <source>--split-on: %1</source>
+        <translation>--split-on: %1</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_import.cpp" line="170"/>
         <source>--near-copy-threshold expects a number in (0, 1], got &quot;%1&quot;.</source>
         <translation>--near-copy-threshold erwartet eine Zahl in (0, 1], erhalten: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="163"/>
+        <location filename="../app/cli/command_import.cpp" line="178"/>
         <source>--column expects FIELD=HEADER, got &quot;%1&quot;.</source>
         <translation>--column erwartet FELD=HEADER, erhalten: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="170"/>
+        <location filename="../app/cli/command_import.cpp" line="185"/>
         <source>choose either --w3c or --codings.</source>
         <translation>wählen Sie entweder --w3c oder --codings.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="176"/>
+        <location filename="../app/cli/command_import.cpp" line="191"/>
         <source>unknown phase &quot;%1&quot; (expected training, pilot, reliability or production).</source>
         <translation>unbekannte Phase „%1“ (erwartet: training, pilot, reliability oder production).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_import.cpp" line="199"/>
+        <location filename="../app/cli/command_import.cpp" line="214"/>
         <source>fourfold-cli: the %n article(s) imported before this file stay in the project.</source>
         <translation>
             <numerusform>fourfold-cli: der %n vor dieser Datei importierte Artikel bleibt im Projekt.</numerusform>
@@ -5823,17 +6105,35 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="220"/>
+        <location filename="../app/cli/command_import.cpp" line="243"/>
         <source>%1: %2 added, %3 skipped</source>
         <translation>%1: %2 hinzugefügt, %3 übersprungen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="225"/>
+        <location filename="../app/cli/command_import.cpp" line="252"/>
+        <source>  %1: %2</source>
+        <translation>  %1: %2</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/cli/command_import.cpp" line="259"/>
+        <source>… %n more</source>
+        <translation>
+            <numerusform>… %n weiterer</numerusform>
+            <numerusform>… %n weitere</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_import.cpp" line="260"/>
+        <source>  %1: %2 added (%3), %4 skipped</source>
+        <translation>  %1: %2 hinzugefügt (%3), %4 übersprungen</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_import.cpp" line="267"/>
         <source>  line %1 (%2): skipped, %3</source>
         <translation>  Zeile %1 (%2): übersprungen, %3</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="229"/>
+        <location filename="../app/cli/command_import.cpp" line="271"/>
         <source>  line %1 (%2): added, a near copy of &quot;%3&quot; (similarity %4)</source>
         <translation>  Zeile %1 (%2): hinzugefügt, eine Beinahe-Kopie von „%3“ (Ähnlichkeit %4)</translation>
     </message>
@@ -7698,6 +7998,184 @@ Beinahe-Kopie von %2</translation>
     </message>
 </context>
 <context>
+    <name>fourfold::ConflictsWindow</name>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="47"/>
+        <source>Merge conflicts — %1</source>
+        <translation>Konflikte beim Zusammenführen — %1</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="50"/>
+        <source>A conflict is a coder&apos;s span, answer or link that was changed both in the project and in a coder copy (or on the team server). The later change was kept; the other version waits here. Keep the project&apos;s version or take the other one: each decision can be undone with Edit → Undo.</source>
+        <translation>Ein Konflikt ist eine Textstelle, Antwort oder Verknüpfung einer codierenden Person, die sowohl im Projekt als auch in einer Kopie für Codierende (oder auf dem Teamserver) geändert wurde. Die spätere Änderung wurde behalten; die andere Version wartet hier. Behalten Sie die Version des Projekts oder übernehmen Sie die andere: jede Entscheidung lässt sich mit Bearbeiten → Rückgängig zurücknehmen.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="57"/>
+        <source>Show decided conflicts</source>
+        <translation>Entschiedene Konflikte zeigen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="62"/>
+        <source>Coder</source>
+        <translation>Codierende</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="62"/>
+        <source>Article</source>
+        <translation>Artikel</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="62"/>
+        <source>What</source>
+        <translation>Was</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="63"/>
+        <source>Other version from</source>
+        <translation>Andere Version von</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="63"/>
+        <source>Found</source>
+        <translation>Gefunden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="63"/>
+        <source>Decision</source>
+        <translation>Entscheidung</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="69"/>
+        <source>Conflicts</source>
+        <translation>Konflikte</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="85"/>
+        <source>In the project now</source>
+        <translation>Jetzt im Projekt</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="85"/>
+        <source>&amp;Keep the project&apos;s version</source>
+        <translation>Version des Projekts &amp;behalten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="86"/>
+        <source>The other version</source>
+        <translation>Die andere Version</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="86"/>
+        <source>&amp;Take the other version</source>
+        <translation>Andere Version &amp;übernehmen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="134"/>
+        <source>%1 span</source>
+        <translation>%1-Textstelle</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="136"/>
+        <source>answer to %1</source>
+        <translation>Antwort auf %1</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="138"/>
+        <source>project&apos;s version kept</source>
+        <translation>Version des Projekts behalten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="139"/>
+        <source>other version taken</source>
+        <translation>andere Version übernommen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="140"/>
+        <source>open</source>
+        <translation>offen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="143"/>
+        <source>the project</source>
+        <translation>das Projekt</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="144"/>
+        <source>the team server</source>
+        <translation>der Teamserver</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="145"/>
+        <source>copy %1</source>
+        <translation>Kopie %1</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="160"/>
+        <source>?</source>
+        <translation>?</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="182"/>
+        <source>&lt;p&gt;&lt;i&gt;(none)&lt;/i&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;&lt;i&gt;(keine)&lt;/i&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="185"/>
+        <source>&lt;p&gt;&lt;b&gt;Deleted&lt;/b&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;&lt;b&gt;Gelöscht&lt;/b&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="201"/>
+        <source>&lt;p&gt;Note: %1&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Notiz: %1&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="203"/>
+        <source>&lt;p&gt;Confidence: %1&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Konfidenz: %1&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="205"/>
+        <source>&lt;p&gt;Answer to %1: &lt;b&gt;%2&lt;/b&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Antwort auf %1: &lt;b&gt;%2&lt;/b&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="210"/>
+        <source>&lt;p&gt;Status: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Status: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="212"/>
+        <source>&lt;p&gt;Link: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Verknüpfung: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="216"/>
+        <source>&lt;p&gt;&lt;small&gt;Changed %1&lt;/small&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;&lt;small&gt;Geändert %1&lt;/small&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="232"/>
+        <source>No merge has found a conflict.</source>
+        <translation>Kein Zusammenführen hat einen Konflikt gefunden.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="233"/>
+        <source>No conflicts wait for a decision.</source>
+        <translation>Keine Konflikte warten auf eine Entscheidung.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="257"/>
+        <source>Choose an open conflict first.</source>
+        <translation>Wählen Sie zuerst einen offenen Konflikt.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="273"/>
+        <source>%1. Undo with Edit → Undo.</source>
+        <translation>%1. Rückgängig mit Bearbeiten → Rückgängig.</translation>
+    </message>
+</context>
+<context>
     <name>fourfold::DendrogramView</name>
     <message>
         <location filename="../app/desktop/frames/dendrogram_view.cpp" line="84"/>
@@ -8759,6 +9237,85 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
     </message>
 </context>
 <context>
+    <name>fourfold::ImportOptionsDialog</name>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="53"/>
+        <source>Import articles</source>
+        <translation>Artikel importieren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="56"/>
+        <source>Import %1</source>
+        <translation>%1 importieren</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/import_options_dialog.cpp" line="57"/>
+        <source>Import %n files</source>
+        <translation>
+            <numerusform>%n Datei importieren</numerusform>
+            <numerusform>%n Dateien importieren</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="64"/>
+        <source>e.g. ^=+$ or ^Item \d+</source>
+        <translation>z. B. ^=+$ oder ^Item \d+</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="66"/>
+        <source>A regular expression. Each text, DOCX, ODT or PDF document is cut into articles at the lines where it is found. Named groups (?&lt;title&gt;…), (?&lt;outlet&gt;…) and (?&lt;date&gt;…) fill those fields; otherwise the first line of each part is its title. Leave empty for one article per document.</source>
+        <translation>Ein regulärer Ausdruck. Jedes Text-, DOCX-, ODT- oder PDF-Dokument wird an den Zeilen, an denen er gefunden wird, in Artikel geteilt. Benannte Gruppen (?&lt;title&gt;…), (?&lt;outlet&gt;…) und (?&lt;date&gt;…) füllen diese Felder; sonst ist die erste Zeile jedes Teils sein Titel. Leer lassen für einen Artikel je Dokument.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="70"/>
+        <source>Split each document at lines matching:</source>
+        <translation>Jedes Dokument an Zeilen teilen, auf die passt:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="78"/>
+        <source>Preview the cuts</source>
+        <translation>Schnitte vorab ansehen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="82"/>
+        <source>Preview of the cuts</source>
+        <translation>Vorschau der Schnitte</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="86"/>
+        <source>Import</source>
+        <translation>Importieren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="118"/>
+        <source>No pattern: each document is one article.</source>
+        <translation>Kein Muster: jedes Dokument ist ein Artikel.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="123"/>
+        <source>None of the chosen files is a text, DOCX, ODT or PDF document.</source>
+        <translation>Keine der gewählten Dateien ist ein Text-, DOCX-, ODT- oder PDF-Dokument.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="130"/>
+        <source>%1: not cut — %2</source>
+        <translation>%1: nicht geteilt — %2</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="134"/>
+        <source>(no title)</source>
+        <translation>(ohne Titel)</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/import_options_dialog.cpp" line="139"/>
+        <source>%1 (line %2): %3 (%n characters)</source>
+        <translation>
+            <numerusform>%1 (Zeile %2): %3 (%n Zeichen)</numerusform>
+            <numerusform>%1 (Zeile %2): %3 (%n Zeichen)</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>fourfold::ItemForm</name>
     <message>
         <location filename="../app/desktop/item_form.cpp" line="29"/>
@@ -8779,61 +9336,61 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="188"/>
         <source>Write the reliability report</source>
         <translation>Reliabilitätsbericht schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="174"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webseite (*.html);;PDF-Dokument (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="181"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="185"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
         <source>The reliability report was written to %1.</source>
         <translation>Der Reliabilitätsbericht wurde nach %1 geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="186"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="201"/>
         <source>&amp;Open</source>
         <translation>&amp;Öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="187"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="226"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="202"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="241"/>
         <source>Open the &amp;folder</source>
         <translation>&amp;Ordner öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="198"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="206"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="219"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="213"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="221"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="234"/>
         <source>Coder copy</source>
         <translation>Kopie für Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="207"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="222"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Eine Kopie für Codierende enthält nur die dieser Person zugewiesenen Artikel, das Codebuch und ihre eigenen Codierungen. Für wen ist die Kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="213"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="228"/>
         <source>Write the coder copy</source>
         <translation>Kopie für Codierende schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="214"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="236"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-Projekt (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="223"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="238"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 für %2 geschrieben: %n Artikel, %3 Textstelle(n).</numerusform>
@@ -8841,17 +9398,17 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="236"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
         <source>Merge returned coder copies</source>
         <translation>Zurückgegebene Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="241"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="256"/>
         <source>Merge coder copies</source>
         <translation>Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="242"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="257"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -8860,25 +9417,30 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="249"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): bereits zusammengeführt, nichts Neues.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="266"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 neu, %4 geändert (%5 gelöscht), %6 Konflikt(e).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
-        <source>Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits for you to decide (fourfold-cli merge PROJECT --conflicts lists them).</source>
+        <location filename="../app/desktop/lead_windows.cpp" line="274"/>
+        <source>Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits for you to decide (Lead → Merge conflicts…).</source>
         <translation>
-            <numerusform>%n Kopie zusammengeführt; %1 Konflikt(e): die spätere Änderung bleibt, die andere wartet auf Ihre Entscheidung (fourfold-cli merge PROJEKT --conflicts listet sie auf).</numerusform>
-            <numerusform>%n Kopien zusammengeführt; %1 Konflikt(e): die spätere Änderung bleibt, die andere wartet auf Ihre Entscheidung (fourfold-cli merge PROJEKT --conflicts listet sie auf).</numerusform>
+            <numerusform>%n Kopie zusammengeführt; %1 Konflikt(e): die spätere Änderung bleibt, die andere wartet auf Ihre Entscheidung (Leitung → Konflikte beim Zusammenführen…).</numerusform>
+            <numerusform>%n Kopien zusammengeführt; %1 Konflikt(e): die spätere Änderung bleibt, die andere wartet auf Ihre Entscheidung (Leitung → Konflikte beim Zusammenführen…).</numerusform>
         </translation>
     </message>
+    <message>
+        <location filename="../app/desktop/lead_windows.cpp" line="281"/>
+        <source>&amp;Decide conflicts</source>
+        <translation>Konflikte &amp;entscheiden</translation>
+    </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="263"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="278"/>
         <source>Merged %n copy(ies).</source>
         <translation>
             <numerusform>%n Kopie zusammengeführt.</numerusform>
@@ -8889,315 +9451,345 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="794"/>
+        <location filename="../app/desktop/main_window.cpp" line="826"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="189"/>
+        <location filename="../app/desktop/main_window.cpp" line="191"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="105"/>
+        <location filename="../app/desktop/main_window.cpp" line="107"/>
         <source>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manual frame analysis of news and opinion articles: problem, cause, evaluation, remedy.&lt;/p&gt;</source>
         <translation>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manuelle Frame-Analyse von Nachrichten- und Meinungsartikeln: Problem, Ursache, Bewertung, Lösung.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="113"/>
+        <location filename="../app/desktop/main_window.cpp" line="115"/>
         <source>New project…</source>
         <translation>Neues Projekt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="114"/>
+        <location filename="../app/desktop/main_window.cpp" line="116"/>
         <source>Start a study: a new project file, then import its articles.</source>
         <translation>Eine Studie beginnen: eine neue Projektdatei, dann ihre Artikel importieren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="117"/>
+        <location filename="../app/desktop/main_window.cpp" line="119"/>
         <source>Open a project…</source>
         <translation>Projekt öffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="120"/>
+        <location filename="../app/desktop/main_window.cpp" line="122"/>
         <source>Open the sample project</source>
         <translation>Beispielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="122"/>
+        <location filename="../app/desktop/main_window.cpp" line="124"/>
         <source>Invented demo data: three local controversies, three coders.</source>
         <translation>Erfundene Demodaten: drei lokale Streitfragen, drei Codierende.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="128"/>
-        <location filename="../app/desktop/main_window.cpp" line="141"/>
+        <location filename="../app/desktop/main_window.cpp" line="130"/>
+        <location filename="../app/desktop/main_window.cpp" line="143"/>
         <source>Recent projects</source>
         <translation>Zuletzt geöffnete Projekte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="160"/>
+        <location filename="../app/desktop/main_window.cpp" line="162"/>
         <source>Search the texts…</source>
         <translation>Texte durchsuchen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="162"/>
+        <location filename="../app/desktop/main_window.cpp" line="164"/>
         <source>Search articles</source>
         <translation>Artikel durchsuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="169"/>
+        <location filename="../app/desktop/main_window.cpp" line="171"/>
         <source>Status filter</source>
         <translation>Statusfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="170"/>
+        <location filename="../app/desktop/main_window.cpp" line="172"/>
         <source>All articles</source>
         <translation>Alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="171"/>
+        <location filename="../app/desktop/main_window.cpp" line="173"/>
         <source>Not started</source>
         <translation>Nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="172"/>
+        <location filename="../app/desktop/main_window.cpp" line="174"/>
         <source>In progress</source>
         <translation>In Arbeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="173"/>
+        <location filename="../app/desktop/main_window.cpp" line="175"/>
         <source>Done</source>
         <translation>Erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="231"/>
+        <location filename="../app/desktop/main_window.cpp" line="233"/>
         <source>Mark the selected text as %1 (key %2)</source>
         <translation>Ausgewählten Text als %1 markieren (Taste %2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="242"/>
+        <location filename="../app/desktop/main_window.cpp" line="244"/>
         <source>Mark as done</source>
         <translation>Als erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="243"/>
-        <source>Mark this article as done and open the next one (Ctrl+Return)</source>
-        <translation>Diesen Artikel als erledigt markieren und den nächsten öffnen (Strg+Eingabe)</translation>
+        <location filename="../app/desktop/main_window.cpp" line="245"/>
+        <source>Mark this article as done and open the next one (%1)</source>
+        <translation>Diesen Artikel als erledigt markieren und den nächsten öffnen (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="258"/>
+        <location filename="../app/desktop/main_window.cpp" line="261"/>
         <source>Import articles…</source>
         <translation>Artikel importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="327"/>
+        <location filename="../app/desktop/main_window.cpp" line="330"/>
         <source>&amp;Project</source>
         <translation>&amp;Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="328"/>
+        <location filename="../app/desktop/main_window.cpp" line="331"/>
         <source>&amp;New project…</source>
         <translation>&amp;Neues Projekt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="329"/>
+        <location filename="../app/desktop/main_window.cpp" line="332"/>
         <source>&amp;Open…</source>
         <translation>Ö&amp;ffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="330"/>
+        <location filename="../app/desktop/main_window.cpp" line="333"/>
         <source>&amp;Import articles…</source>
         <translation>Artikel &amp;importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="332"/>
+        <location filename="../app/desktop/main_window.cpp" line="335"/>
+        <source>Import a &amp;folder…</source>
+        <translation>Einen &amp;Ordner importieren…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="336"/>
+        <source>Import a folder</source>
+        <translation>Einen Ordner importieren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="342"/>
         <source>Open the &amp;sample project</source>
         <translation>Bei&amp;spielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="334"/>
+        <location filename="../app/desktop/main_window.cpp" line="344"/>
         <source>&amp;Quit</source>
         <translation>&amp;Beenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="336"/>
+        <location filename="../app/desktop/main_window.cpp" line="346"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="337"/>
-        <location filename="../app/desktop/main_window.cpp" line="493"/>
+        <location filename="../app/desktop/main_window.cpp" line="347"/>
+        <location filename="../app/desktop/main_window.cpp" line="515"/>
         <source>&amp;Undo</source>
         <translation>&amp;Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="340"/>
-        <location filename="../app/desktop/main_window.cpp" line="496"/>
+        <location filename="../app/desktop/main_window.cpp" line="350"/>
+        <location filename="../app/desktop/main_window.cpp" line="518"/>
         <source>&amp;Redo</source>
         <translation>&amp;Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="344"/>
+        <location filename="../app/desktop/main_window.cpp" line="354"/>
         <source>&amp;Code</source>
         <translation>&amp;Codieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="348"/>
+        <location filename="../app/desktop/main_window.cpp" line="358"/>
         <source>Mark as %1	%2</source>
         <translation>Als %1 markieren	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="352"/>
+        <location filename="../app/desktop/main_window.cpp" line="362"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel als &amp;erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="354"/>
+        <location filename="../app/desktop/main_window.cpp" line="363"/>
         <source>&amp;Next article</source>
         <translation>&amp;Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="357"/>
+        <location filename="../app/desktop/main_window.cpp" line="365"/>
         <source>&amp;Find in texts</source>
         <translation>In Texten &amp;suchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="358"/>
+        <location filename="../app/desktop/main_window.cpp" line="366"/>
         <source>&amp;Training feedback…</source>
         <translation>&amp;Trainingsfeedback…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="365"/>
+        <location filename="../app/desktop/main_window.cpp" line="373"/>
         <source>&amp;View</source>
         <translation>&amp;Ansicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="366"/>
+        <location filename="../app/desktop/main_window.cpp" line="374"/>
+        <source>E&amp;xact selection (no snapping to words)</source>
+        <translation>E&amp;xakte Auswahl (nicht an Wörtern ausrichten)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="382"/>
+        <source>Exact selection: spans take the text as selected.</source>
+        <translation>Exakte Auswahl: Textstellen übernehmen den Text wie markiert.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="383"/>
+        <source>Spans snap to whole words again.</source>
+        <translation>Textstellen richten sich wieder an ganzen Wörtern aus.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="387"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Textstellen &amp;aller Codierenden zeigen (nur Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="376"/>
+        <location filename="../app/desktop/main_window.cpp" line="397"/>
         <source>&amp;Lead</source>
         <translation>&amp;Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="377"/>
+        <location filename="../app/desktop/main_window.cpp" line="399"/>
         <source>&amp;Compare and adjudicate…</source>
         <translation>&amp;Vergleichen und entscheiden…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="379"/>
+        <location filename="../app/desktop/main_window.cpp" line="401"/>
         <source>&amp;Reliability…</source>
         <translation>&amp;Reliabilität…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="381"/>
+        <location filename="../app/desktop/main_window.cpp" line="402"/>
         <source>&amp;Frames…</source>
         <translation>&amp;Frames…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="382"/>
+        <location filename="../app/desktop/main_window.cpp" line="403"/>
         <source>Write the reliability &amp;report…</source>
         <translation>Reliabilitäts&amp;bericht schreiben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="384"/>
+        <location filename="../app/desktop/main_window.cpp" line="405"/>
         <source>&amp;Study design…</source>
         <translation>&amp;Studiendesign…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="385"/>
+        <location filename="../app/desktop/main_window.cpp" line="406"/>
         <source>C&amp;odebook…</source>
         <translation>C&amp;odebuch…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="386"/>
+        <location filename="../app/desktop/main_window.cpp" line="407"/>
         <source>&amp;Progress…</source>
         <translation>&amp;Fortschritt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="387"/>
+        <location filename="../app/desktop/main_window.cpp" line="408"/>
         <source>P&amp;eople…</source>
         <translation>P&amp;ersonen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="388"/>
+        <location filename="../app/desktop/main_window.cpp" line="409"/>
         <source>&amp;Hand out a coder copy…</source>
         <translation>&amp;Kopie für Codierende ausgeben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="389"/>
+        <location filename="../app/desktop/main_window.cpp" line="410"/>
         <source>&amp;Merge returned coder copies…</source>
         <translation>Zurückgegebene Kopien &amp;zusammenführen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="391"/>
+        <location filename="../app/desktop/main_window.cpp" line="411"/>
+        <source>Merge co&amp;nflicts…</source>
+        <translation>Ko&amp;nflikte beim Zusammenführen…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="413"/>
         <source>&amp;Extractor runs…</source>
         <translation>&amp;Extraktorläufe…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="399"/>
+        <location filename="../app/desktop/main_window.cpp" line="421"/>
         <source>&amp;Settings</source>
         <translation>&amp;Einstellungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="400"/>
+        <location filename="../app/desktop/main_window.cpp" line="422"/>
         <source>&amp;Language</source>
         <translation>&amp;Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="405"/>
+        <location filename="../app/desktop/main_window.cpp" line="427"/>
         <source>System language</source>
         <translation>Systemsprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="416"/>
+        <location filename="../app/desktop/main_window.cpp" line="438"/>
         <source>&amp;Help</source>
         <translation>&amp;Hilfe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="418"/>
+        <location filename="../app/desktop/main_window.cpp" line="440"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="435"/>
+        <location filename="../app/desktop/main_window.cpp" line="457"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Im Projekt gibt es keine Codierenden mit dem Pseudonym „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="449"/>
+        <location filename="../app/desktop/main_window.cpp" line="471"/>
         <source>Nobody was chosen to code.</source>
         <translation>Es wurde niemand zum Codieren ausgewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="475"/>
+        <location filename="../app/desktop/main_window.cpp" line="497"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="476"/>
+        <location filename="../app/desktop/main_window.cpp" line="498"/>
         <source>Codebook</source>
         <translation>Codebuch</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="493"/>
+        <location filename="../app/desktop/main_window.cpp" line="515"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Rückgängig: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="496"/>
+        <location filename="../app/desktop/main_window.cpp" line="518"/>
         <source>&amp;Redo %1</source>
         <translation>&amp;Wiederholen: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="638"/>
+        <location filename="../app/desktop/main_window.cpp" line="660"/>
         <source>Every article in the list is done.</source>
         <translation>Alle Artikel in der Liste sind erledigt.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="660"/>
+        <location filename="../app/desktop/main_window.cpp" line="682"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n Artikel enthält „%1“.</numerusform>
@@ -9205,166 +9797,121 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="666"/>
+        <location filename="../app/desktop/main_window.cpp" line="688"/>
         <source>New project</source>
         <translation>Neues Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="676"/>
+        <location filename="../app/desktop/main_window.cpp" line="698"/>
         <source>Cannot create project</source>
         <translation>Projekt kann nicht erstellt werden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="688"/>
+        <location filename="../app/desktop/main_window.cpp" line="710"/>
         <source>Import articles</source>
         <translation>Artikel importieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="689"/>
+        <location filename="../app/desktop/main_window.cpp" line="711"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikel (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="725"/>
+        <location filename="../app/desktop/main_window.cpp" line="757"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Wählen Sie einen Artikel&lt;/h3&gt;&lt;p&gt;Wählen Sie links in der Liste einen Artikel, um mit dem Codieren zu beginnen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="728"/>
+        <location filename="../app/desktop/main_window.cpp" line="760"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch keine Artikel&lt;/h3&gt;&lt;p&gt;Importieren Sie die Artikel der Studie: reiner Text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- oder Atom-Feeds, NITF oder NewsML-G2. Weisen Sie sie dann unter Leitung → Studiendesign Codierenden zu.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="733"/>
+        <location filename="../app/desktop/main_window.cpp" line="765"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch nichts zu codieren&lt;/h3&gt;&lt;p&gt;In diesem Projekt sind Ihnen keine Artikel zugewiesen. Ihre Leitung weist sie zu; öffnen Sie danach das Projekt erneut oder die Kopie, die sie Ihnen schickt.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="765"/>
+        <location filename="../app/desktop/main_window.cpp" line="797"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>Die Sprache wechselt beim nächsten Start von Fourfold.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="778"/>
+        <location filename="../app/desktop/main_window.cpp" line="810"/>
         <source>Not saved: %1. %2</source>
         <translation>Nicht gespeichert: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="779"/>
+        <location filename="../app/desktop/main_window.cpp" line="811"/>
         <source>&amp;Retry</source>
         <translation>&amp;Erneut versuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="785"/>
+        <location filename="../app/desktop/main_window.cpp" line="817"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="795"/>
+        <location filename="../app/desktop/main_window.cpp" line="827"/>
         <source>No project open</source>
         <translation>Kein Projekt geöffnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="799"/>
+        <location filename="../app/desktop/main_window.cpp" line="831"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="799"/>
+        <location filename="../app/desktop/main_window.cpp" line="831"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="801"/>
+        <location filename="../app/desktop/main_window.cpp" line="833"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — schreibgeschützt, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="803"/>
+        <location filename="../app/desktop/main_window.cpp" line="835"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — Codieren als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="807"/>
+        <location filename="../app/desktop/main_window.cpp" line="839"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lesen als %1 · %2 · schreibgeschützte Datei: nichts wird gespeichert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="810"/>
+        <location filename="../app/desktop/main_window.cpp" line="842"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Codieren als %1 · %2 · Leitung: alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="811"/>
+        <location filename="../app/desktop/main_window.cpp" line="843"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Codieren als %1 · %2 · blind: nur eigene Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="823"/>
-        <source>Mark the selected text as %1 (snapped to whole words; hold Alt for the exact selection); with a span selected: relabel it</source>
-        <translation>Ausgewählten Text als %1 markieren (auf ganze Wörter erweitert; Alt gedrückt halten für die genaue Auswahl); bei ausgewählter Textstelle: deren Funktion ändern</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="827"/>
-        <source>Delete</source>
-        <translation>Entf</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="827"/>
-        <source>Delete the selected span</source>
-        <translation>Ausgewählte Textstelle löschen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="829"/>
-        <source>Undo the last change</source>
-        <translation>Letzte Änderung rückgängig machen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="830"/>
-        <source>Redo</source>
-        <translation>Wiederholen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="831"/>
-        <source>Mark the article as done and open the next</source>
-        <translation>Artikel als erledigt markieren und den nächsten öffnen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="832"/>
-        <source>Next article that is not done</source>
-        <translation>Nächster noch nicht erledigter Artikel</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="834"/>
-        <source>Search the texts</source>
-        <translation>Texte durchsuchen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="836"/>
+        <location filename="../app/desktop/main_window.cpp" line="853"/>
         <source>Keyboard shortcuts</source>
         <translation>Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="839"/>
-        <source>Span resizing keys are listed in the reading desk&apos;s tooltip.</source>
-        <translation>Die Tasten zum Ändern der Länge einer Textstelle stehen im Tooltip des Lesebereichs.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="745"/>
+        <location filename="../app/desktop/main_window.cpp" line="777"/>
         <source>Open project</source>
         <translation>Projekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="666"/>
-        <location filename="../app/desktop/main_window.cpp" line="745"/>
+        <location filename="../app/desktop/main_window.cpp" line="688"/>
+        <location filename="../app/desktop/main_window.cpp" line="777"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-Projekte (*.fourfold)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="135"/>
-        <location filename="../app/desktop/main_window.cpp" line="681"/>
-        <location filename="../app/desktop/main_window.cpp" line="749"/>
-        <location filename="../app/desktop/main_window.cpp" line="758"/>
+        <location filename="../app/desktop/main_window.cpp" line="137"/>
+        <location filename="../app/desktop/main_window.cpp" line="703"/>
+        <location filename="../app/desktop/main_window.cpp" line="781"/>
+        <location filename="../app/desktop/main_window.cpp" line="790"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
     </message>
@@ -9689,37 +10236,37 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <translation>Artikeltext</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="588"/>
+        <location filename="../app/desktop/reading_view.cpp" line="598"/>
         <source>Mark as %1</source>
         <translation>Als %1 markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="589"/>
+        <location filename="../app/desktop/reading_view.cpp" line="599"/>
         <source>Change to %1</source>
         <translation>In %1 ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="594"/>
+        <location filename="../app/desktop/reading_view.cpp" line="604"/>
         <source>Delete span</source>
         <translation>Textstelle löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="620"/>
+        <location filename="../app/desktop/reading_view.cpp" line="630"/>
         <source>%1: “%2”</source>
         <translation>%1: „%2“</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="833"/>
-        <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Alt+Down and Alt+Up move between spans.</source>
+        <location filename="../app/desktop/reading_view.cpp" line="843"/>
+        <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Ctrl+Down and Ctrl+Up move between spans.</source>
         <translation>
-            <numerusform>%n Textstelle. Wählen Sie Text aus und drücken Sie 1 bis 4, um eine Framing-Funktion zu markieren; Alt+Pfeil nach unten und Alt+Pfeil nach oben wechseln zwischen Textstellen.</numerusform>
-            <numerusform>%n Textstellen. Wählen Sie Text aus und drücken Sie 1 bis 4, um eine Framing-Funktion zu markieren; Alt+Pfeil nach unten und Alt+Pfeil nach oben wechseln zwischen Textstellen.</numerusform>
+            <numerusform>%n Textstelle. Markieren Sie Text und drücken Sie 1 bis 4, um eine Framing-Funktion zu vergeben; Strg+Runter und Strg+Hoch wechseln zwischen Textstellen.</numerusform>
+            <numerusform>%n Textstellen. Markieren Sie Text und drücken Sie 1 bis 4, um eine Framing-Funktion zu vergeben; Strg+Runter und Strg+Hoch wechseln zwischen Textstellen.</numerusform>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="842"/>
-        <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Alt+Left/Right and Alt+Shift+Left/Right to resize.</source>
-        <translation>Ausgewählte Textstelle: %1, „%2“. 1 bis 4 ändert die Funktion, Entf löscht, Alt+Links/Rechts und Alt+Umschalt+Links/Rechts ändern die Länge.</translation>
+        <location filename="../app/desktop/reading_view.cpp" line="852"/>
+        <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Ctrl+Left/Right and Ctrl+Shift+Left/Right to resize.</source>
+        <translation>Gewählte Textstelle: %1, „%2“. Drücken Sie 1 bis 4 zum Ändern der Funktion, Entf zum Löschen, Strg+Links/Rechts und Strg+Umschalt+Links/Rechts zum Ändern der Länge.</translation>
     </message>
 </context>
 <context>

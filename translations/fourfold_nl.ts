@@ -389,72 +389,82 @@
 <context>
     <name>ArticleReaderText</name>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="35"/>
+        <location filename="../core/io/article_reader.cpp" line="36"/>
         <source>the file contains no articles</source>
         <translation>het bestand bevat geen artikelen</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="87"/>
+        <location filename="../core/io/article_reader.cpp" line="88"/>
         <source>the article has no id</source>
         <translation>het artikel heeft geen id</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="94"/>
+        <location filename="../core/io/article_reader.cpp" line="95"/>
         <source>the id &quot;%1&quot; holds a control character (U+%2); ids are one line of printable text</source>
         <translation>de id ‘%1’ bevat een stuurteken (U+%2); id&apos;s zijn één regel afdrukbare tekst</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="112"/>
+        <location filename="../core/io/article_reader.cpp" line="113"/>
         <source>the %1 of the article &quot;%2&quot; holds a NUL character (U+0000), which no text holds</source>
         <translation>de %1 van het artikel ‘%2’ bevat een NUL-teken (U+0000), dat in geen enkele tekst voorkomt</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="118"/>
+        <location filename="../core/io/article_reader.cpp" line="119"/>
         <source>the article &quot;%1&quot; has no text</source>
         <translation>het artikel ‘%1’ heeft geen tekst</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="123"/>
+        <location filename="../core/io/article_reader.cpp" line="124"/>
         <source>duplicate id &quot;%1&quot; (first seen on line %2)</source>
         <translation>dubbele id ‘%1’ (eerst gezien op regel %2)</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="156"/>
+        <location filename="../core/io/article_reader.cpp" line="157"/>
         <source>the XML root element &lt;%1&gt; is neither a feed&apos;s (&lt;rss&gt;, Atom&apos;s &lt;feed&gt;) nor a news item&apos;s (&lt;nitf&gt;, NewsML-G2&apos;s &lt;newsItem&gt; or &lt;newsMessage&gt;)</source>
         <translation>het XML-hoofdelement &lt;%1&gt; is niet dat van een feed (&lt;rss&gt;, Atoms &lt;feed&gt;) en niet dat van een nieuwsbericht (&lt;nitf&gt;, &lt;newsItem&gt; of &lt;newsMessage&gt; van NewsML-G2)</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="195"/>
+        <location filename="../core/io/article_reader.cpp" line="196"/>
         <source>the file is a zip archive but not a DOCX, ODT or EPUB document; choose the format if it is one</source>
         <translation>het bestand is een zip-archief, maar geen DOCX-, ODT- of EPUB-document; kies het formaat als het er een is</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="210"/>
+        <location filename="../core/io/article_reader.cpp" line="211"/>
         <source>the file is %1 MiB long; a file may be at most %2 MiB</source>
         <translation>het bestand is %1 MiB groot; een bestand mag hoogstens %2 MiB groot zijn</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="219"/>
+        <location filename="../core/io/article_reader.cpp" line="220"/>
         <source>the file is empty: it contains no articles</source>
         <translation>het bestand is leeg: het bevat geen artikelen</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="254"/>
+        <location filename="../core/io/article_reader.cpp" line="255"/>
         <source>the format cannot be told from the file name or its content; name the file .txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf, .epub or .xml, or choose the format</source>
         <translation>het formaat is niet af te leiden uit de bestandsnaam of de inhoud; geef het bestand de extensie .txt, .html, .jsonl, .csv, .rss, .atom, .docx, .odt, .pdf, .epub of .xml, of kies het formaat</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="320"/>
+        <location filename="../core/io/article_reader.cpp" line="321"/>
         <source>the folder contains no .txt files</source>
         <translation>de map bevat geen .txt-bestanden</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="341"/>
+        <location filename="../core/io/article_reader.cpp" line="342"/>
         <source>duplicate id &quot;%1&quot; (first seen in %2)</source>
         <translation>dubbele id ‘%1’ (eerst gezien in %2)</translation>
     </message>
     <message>
-        <location filename="../core/io/article_reader.cpp" line="422"/>
+        <location filename="../core/io/article_reader.cpp" line="362"/>
+        <source>a split pattern cuts plain text, DOCX, ODT and PDF documents (told by their suffix); this file is %1</source>
+        <translation>een splitspatroon knipt platte tekst en DOCX-, ODT- en PDF-documenten (herkend aan hun extensie); dit bestand is %1</translation>
+    </message>
+    <message>
+        <location filename="../core/io/article_reader.cpp" line="364"/>
+        <source>of another kind</source>
+        <translation>van een andere soort</translation>
+    </message>
+    <message>
+        <location filename="../core/io/article_reader.cpp" line="450"/>
         <source>a folder can only be read as plain text (its .txt files)</source>
         <translation>een map kan alleen als platte tekst worden gelezen (de .txt-bestanden ervan)</translation>
     </message>
@@ -1216,112 +1226,112 @@
 <context>
     <name>CoderCopiesText</name>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="67"/>
+        <location filename="../core/project/coder_copies.cpp" line="68"/>
         <source>Several coders are called &quot;%1&quot;; name the coder by pseudonym.</source>
         <translation>Meerdere codeurs heten ‘%1’; noem de codeur bij het pseudoniem.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="71"/>
+        <location filename="../core/project/coder_copies.cpp" line="72"/>
         <source>There is no coder with the pseudonym or name &quot;%1&quot; in the project.</source>
         <translation>Er is geen codeur met het pseudoniem of de naam ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="107"/>
+        <location filename="../core/project/coder_copies.cpp" line="108"/>
         <source>%1 (copy for %2)</source>
         <translation>%1 (kopie voor %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="164"/>
+        <location filename="../core/project/coder_copies.cpp" line="165"/>
         <source>%1 is not a Fourfold project file; it was not merged.</source>
         <translation>%1 is geen Fourfold-projectbestand; het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="167"/>
+        <location filename="../core/project/coder_copies.cpp" line="168"/>
         <source>%1 was written by a newer Fourfold (schema version %2); it was not merged.</source>
         <translation>%1 is geschreven door een nieuwere Fourfold (schemaversie %2); het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="176"/>
+        <location filename="../core/project/coder_copies.cpp" line="177"/>
         <source>%1 is a project file but not a coder copy; it was not merged.</source>
         <translation>%1 is een projectbestand, maar geen codeurskopie; het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="181"/>
+        <location filename="../core/project/coder_copies.cpp" line="182"/>
         <source>%1 is a coder copy of another project (%2), not of this one (%3); it was not merged.</source>
         <translation>%1 is een codeurskopie van een ander project (%2), niet van dit project (%3); het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="190"/>
+        <location filename="../core/project/coder_copies.cpp" line="191"/>
         <source>The coder of %1 is no longer in the project; it was not merged.</source>
         <translation>De codeur van %1 zit niet meer in het project; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="202"/>
+        <location filename="../core/project/coder_copies.cpp" line="203"/>
         <source>%1 holds article &quot;%2&quot;, which is not in the project; it was not merged.</source>
         <translation>%1 bevat het artikel ‘%2’, dat niet in het project staat; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="208"/>
+        <location filename="../core/project/coder_copies.cpp" line="209"/>
         <source>The text of article &quot;%1&quot; in %2 differs from the project&apos;s (SHA-256 %3 instead of %4): the copy was changed outside Fourfold; it was not merged.</source>
         <translation>De tekst van artikel ‘%1’ in %2 verschilt van die van het project (SHA-256 %3 in plaats van %4): de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="222"/>
+        <location filename="../core/project/coder_copies.cpp" line="223"/>
         <source>%1 holds a codebook version (%2) that is not in the project; it was not merged.</source>
         <translation>%1 bevat een codeboekversie (%2) die niet in het project staat; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="231"/>
+        <location filename="../core/project/coder_copies.cpp" line="232"/>
         <source>%1 holds %2 annotations, answers or assignments of people other than its coder %3; it was not merged.</source>
         <translation>%1 bevat %2 annotaties, antwoorden of toewijzingen van anderen dan de codeur %3; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="367"/>
+        <location filename="../core/project/coder_copies.cpp" line="368"/>
         <source>%1 names a copy (%2) that this project never handed out; it was not merged.</source>
         <translation>%1 noemt een kopie (%2) die dit project nooit heeft uitgegeven; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="389"/>
+        <location filename="../core/project/coder_copies.cpp" line="390"/>
         <source>There is no coder copy %1.</source>
         <translation>Er is geen codeurskopie %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="515"/>
+        <location filename="../core/project/coder_copies.cpp" line="516"/>
         <source>The coding time in %1 would overflow the project&apos;s; it was not merged.</source>
         <translation>De codeertijd in %1 zou die van het project laten overlopen; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="571"/>
+        <location filename="../core/project/coder_copies.cpp" line="572"/>
         <source>%1 is itself a coder copy; hand out copies from the main project.</source>
         <translation>%1 is zelf een codeurskopie; geef kopieën uit vanuit het hoofdproject.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="578"/>
+        <location filename="../core/project/coder_copies.cpp" line="579"/>
         <source>%1 already exists; choose another name for the coder copy.</source>
         <translation>%1 bestaat al; kies een andere naam voor de codeurskopie.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="586"/>
+        <location filename="../core/project/coder_copies.cpp" line="587"/>
         <source>Coder %1 has no assigned articles; assign some before handing out a copy.</source>
         <translation>Aan codeur %1 zijn geen artikelen toegewezen; wijs er een aantal toe voordat u een kopie uitgeeft.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="647"/>
+        <location filename="../core/project/coder_copies.cpp" line="648"/>
         <source>%1 is itself a coder copy; merge copies into the main project.</source>
         <translation>%1 is zelf een codeurskopie; voeg kopieën samen in het hoofdproject.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="675"/>
+        <location filename="../core/project/coder_copies.cpp" line="676"/>
         <source>Keep &quot;mine&quot; (the version the project holds) or &quot;theirs&quot; (the version that lost), not &quot;%1&quot;.</source>
         <translation>Behoud ‘mine’ (de versie in het project) of ‘theirs’ (de versie die verloor), niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="692"/>
+        <location filename="../core/project/coder_copies.cpp" line="693"/>
         <source>There is no open conflict %1.</source>
         <translation>Er is geen open conflict %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="695"/>
+        <location filename="../core/project/coder_copies.cpp" line="696"/>
         <source>%1 has %2 open conflicts (from several copies); name the conflict&apos;s uuid.</source>
         <translation>%1 heeft %2 open conflicten (uit meerdere kopieën); noem de uuid van het conflict.</translation>
     </message>
@@ -1489,6 +1499,34 @@
     </message>
 </context>
 <context>
+    <name>ConflictEditsText</name>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="58"/>
+        <source>Keep the other version</source>
+        <translation>De andere versie behouden</translation>
+    </message>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="59"/>
+        <source>Keep the project&apos;s version</source>
+        <translation>De versie van het project behouden</translation>
+    </message>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="70"/>
+        <source>There is no open conflict %1.</source>
+        <translation>Er is geen open conflict %1.</translation>
+    </message>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="100"/>
+        <source>The object of conflict %1 is missing from the project.</source>
+        <translation>Het object van conflict %1 ontbreekt in het project.</translation>
+    </message>
+    <message>
+        <location filename="../core/project/conflict_edits.cpp" line="109"/>
+        <source>The decision on conflict %1 was never made.</source>
+        <translation>De beslissing over conflict %1 is nooit genomen.</translation>
+    </message>
+</context>
+<context>
     <name>CopyTablesText</name>
     <message>
         <location filename="../core/store/copy_tables.cpp" line="58"/>
@@ -1509,6 +1547,11 @@
         <location filename="../core/store/copy_tables.cpp" line="664"/>
         <source>There is no open conflict %1.</source>
         <translation>Er is geen open conflict %1.</translation>
+    </message>
+    <message>
+        <location filename="../core/store/copy_tables.cpp" line="678"/>
+        <source>There is no decided conflict %1.</source>
+        <translation>Er is geen beslist conflict %1.</translation>
     </message>
 </context>
 <context>
@@ -2277,32 +2320,32 @@
 <context>
     <name>ImportDialog</name>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="22"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="24"/>
         <source>Importing articles…</source>
         <translation>Artikelen worden geïmporteerd…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="23"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="25"/>
         <source>Cancel</source>
         <translation>Annuleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="28"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="30"/>
         <source>Importing %1 (%2 of %3)…</source>
         <translation>%1 wordt geïmporteerd (%2 van %3)…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="49"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="51"/>
         <source>%1: not imported — %2</source>
         <translation>%1: niet geïmporteerd — %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="44"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="46"/>
         <source>%1: cancelled; nothing from this file was added.</source>
         <translation>%1: geannuleerd; er is niets uit dit bestand toegevoegd.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/import_dialog.cpp" line="54"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="56"/>
         <source>%1: %n article(s) added</source>
         <translation>
             <numerusform>%1: %n artikel toegevoegd</numerusform>
@@ -2310,18 +2353,36 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="58"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="60"/>
         <source>    line %1 (%2): skipped, %3</source>
         <translation>    regel %1 (%2): overgeslagen, %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/import_dialog.cpp" line="71"/>
-        <location filename="../app/desktop/import_dialog.cpp" line="77"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="65"/>
+        <source>    line %1 (%2): added, a near copy of &quot;%3&quot; (similarity %4)</source>
+        <translation>    regel %1 (%2): toegevoegd, een bijna-kopie van ‘%3’ (gelijkenis %4)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="73"/>
+        <source>    %1: %2</source>
+        <translation>    %1: %2</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/import_dialog.cpp" line="75"/>
+        <source>    %1: %n article(s) added</source>
+        <translation>
+            <numerusform>    %1: %n artikel toegevoegd</numerusform>
+            <numerusform>    %1: %n artikelen toegevoegd</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_dialog.cpp" line="87"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="93"/>
         <source>Import report</source>
         <translation>Importrapport</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/import_dialog.cpp" line="73"/>
+        <location filename="../app/desktop/import_dialog.cpp" line="89"/>
         <source>%n article(s) added.</source>
         <translation>
             <numerusform>%n artikel toegevoegd.</numerusform>
@@ -2662,29 +2723,55 @@
 <context>
     <name>ProjectImportText</name>
     <message>
-        <location filename="../core/project/project_import.cpp" line="36"/>
+        <location filename="../core/project/project_import.cpp" line="41"/>
         <source>the article &quot;%1&quot; has no text.</source>
         <translation>het artikel ‘%1’ heeft geen tekst.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="51"/>
+        <location filename="../core/project/project_import.cpp" line="56"/>
         <source>the article &quot;%1&quot; cannot be segmented: %2</source>
         <translation>het artikel ‘%1’ kan niet worden gesegmenteerd: %2</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="93"/>
+        <location filename="../core/project/project_import.cpp" line="120"/>
         <source>same text as the article &quot;%1&quot; already in the project</source>
         <translation>dezelfde tekst als het artikel ‘%1’ dat al in het project staat</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="102"/>
+        <location filename="../core/project/project_import.cpp" line="129"/>
         <source>the id &quot;%1&quot; is already used by another article in the project, with a different text.</source>
         <translation>de id ‘%1’ wordt in het project al gebruikt door een ander artikel met een andere tekst.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="118"/>
+        <location filename="../core/project/project_import.cpp" line="147"/>
         <source>The import of %1 was cancelled; nothing was added.</source>
         <translation>De import van %1 is geannuleerd; er is niets toegevoegd.</translation>
+    </message>
+    <message>
+        <location filename="../core/project/project_import.cpp" line="182"/>
+        <source>passed over: not a format Fourfold reads</source>
+        <translation>overgeslagen: geen formaat dat Fourfold leest</translation>
+    </message>
+    <message>
+        <location filename="../core/project/project_import.cpp" line="191"/>
+        <source>The folder %1 holds no files.</source>
+        <translation>De map %1 bevat geen bestanden.</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../core/project/project_import.cpp" line="196"/>
+        <source>%1: %n article(s)</source>
+        <translation>
+            <numerusform>%1: %n artikel</numerusform>
+            <numerusform>%1: %n artikelen</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../core/project/project_import.cpp" line="201"/>
+        <source>The folder %1 was not imported: %n of its files could not be read, so nothing was added.</source>
+        <translation>
+            <numerusform>De map %1 is niet geïmporteerd: %n van de bestanden kon niet worden gelezen, dus er is niets toegevoegd.</numerusform>
+            <numerusform>De map %1 is niet geïmporteerd: %n van de bestanden konden niet worden gelezen, dus er is niets toegevoegd.</numerusform>
+        </translation>
     </message>
 </context>
 <context>
@@ -2903,52 +2990,52 @@
 <context>
     <name>ReportDataText</name>
     <message>
-        <location filename="../app/report/report_data.cpp" line="67"/>
+        <location filename="../app/report/report_data.cpp" line="68"/>
         <source>a sample stratified by %1</source>
         <translation>een naar %1 gestratificeerde steekproef</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="68"/>
+        <location filename="../app/report/report_data.cpp" line="69"/>
         <source>a simple random sample</source>
         <translation>een enkelvoudige aselecte steekproef</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="69"/>
+        <location filename="../app/report/report_data.cpp" line="70"/>
         <source>The %1 articles of the %2 phase were drawn as %3 (seed %4) from a frame of %5 articles with no earlier assignment, on %6.</source>
         <translation>De %1 artikelen van fase %2 zijn getrokken als %3 (seed %4) uit een steekproefkader van %5 artikelen zonder eerdere toewijzing, op %6.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="156"/>
+        <location filename="../app/report/report_data.cpp" line="186"/>
         <source>The report&apos;s unit must be paragraph, sentence or token.</source>
         <translation>De eenheid van het rapport moet paragraph, sentence of token zijn.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="161"/>
+        <location filename="../app/report/report_data.cpp" line="191"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="162"/>
+        <location filename="../app/report/report_data.cpp" line="192"/>
         <source>Reliability report: %1</source>
         <translation>Betrouwbaarheidsrapport: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="207"/>
+        <location filename="../app/report/report_data.cpp" line="237"/>
         <source>All four functions (MASI)</source>
         <translation>Alle vier functies (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="207"/>
+        <location filename="../app/report/report_data.cpp" line="237"/>
         <source>All four (MASI)</source>
         <translation>Alle vier (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="250"/>
+        <location filename="../app/report/report_data.cpp" line="280"/>
         <source>Spans on the continuum</source>
         <translation>Fragmenten op het continuüm</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="251"/>
+        <location filename="../app/report/report_data.cpp" line="281"/>
         <source>continuum</source>
         <translation>continuüm</translation>
     </message>
@@ -2956,649 +3043,711 @@
 <context>
     <name>ReportDocumentText</name>
     <message>
-        <location filename="../app/report/report_document.cpp" line="160"/>
-        <location filename="../app/report/report_document.cpp" line="1007"/>
-        <location filename="../app/report/report_document.cpp" line="1009"/>
+        <location filename="../app/report/report_document.cpp" line="161"/>
+        <location filename="../app/report/report_document.cpp" line="924"/>
+        <location filename="../app/report/report_document.cpp" line="1079"/>
+        <location filename="../app/report/report_document.cpp" line="1081"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="162"/>
+        <location filename="../app/report/report_document.cpp" line="163"/>
         <source>reliable</source>
         <translation>betrouwbaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="164"/>
+        <location filename="../app/report/report_document.cpp" line="165"/>
         <source>tentative</source>
         <translation>voorlopig</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="168"/>
+        <location filename="../app/report/report_document.cpp" line="169"/>
         <source>unreliable</source>
         <translation>onbetrouwbaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="224"/>
+        <location filename="../app/report/report_document.cpp" line="226"/>
         <source>paragraph</source>
         <translation>alinea</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="224"/>
+        <location filename="../app/report/report_document.cpp" line="226"/>
         <source>paragraphs</source>
         <translation>alinea&apos;s</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="226"/>
+        <location filename="../app/report/report_document.cpp" line="228"/>
         <source>token</source>
         <translation>token</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="226"/>
+        <location filename="../app/report/report_document.cpp" line="228"/>
         <source>tokens</source>
         <translation>tokens</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="228"/>
+        <location filename="../app/report/report_document.cpp" line="230"/>
         <source>sentence</source>
         <translation>zin</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="228"/>
+        <location filename="../app/report/report_document.cpp" line="230"/>
         <source>sentences</source>
         <translation>zinnen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="235"/>
+        <location filename="../app/report/report_document.cpp" line="237"/>
         <source>unit: %1</source>
         <translation>eenheid: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="236"/>
+        <location filename="../app/report/report_document.cpp" line="238"/>
         <source>phase: %1</source>
         <translation>fase: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="238"/>
+        <location filename="../app/report/report_document.cpp" line="240"/>
         <source>all phases</source>
         <translation>alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="239"/>
+        <location filename="../app/report/report_document.cpp" line="241"/>
         <source>bootstrap: %1 replicates, seed %2</source>
         <translation>bootstrap: %1 replicaties, seed %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="243"/>
+        <location filename="../app/report/report_document.cpp" line="245"/>
         <source>Inter-coder reliability</source>
         <translation>Intercodeursbetrouwbaarheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="246"/>
+        <location filename="../app/report/report_document.cpp" line="248"/>
         <source>Project “%1” · written %2 by %3 · %4</source>
         <translation>Project ‘%1’ · geschreven %2 door %3 · %4</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="261"/>
+        <location filename="../app/report/report_document.cpp" line="263"/>
         <source>%1 coded %2 articles (%3 spans)</source>
         <translation>%1 codeerde %2 artikelen (%3 fragmenten)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="271"/>
+        <location filename="../app/report/report_document.cpp" line="273"/>
         <source>Inter-coder reliability was assessed on a reliability sample of %1 articles that two or more coders coded independently (%2 of them by all %3 coders), out of %4 articles in the project. </source>
         <translation>De intercodeursbetrouwbaarheid is bepaald op een betrouwbaarheidssteekproef van %1 artikelen die twee of meer codeurs onafhankelijk van elkaar codeerden (%2 daarvan door alle %3 codeurs), van de %4 artikelen in het project. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="283"/>
+        <location filename="../app/report/report_document.cpp" line="285"/>
         <source>The sample was drawn %1. </source>
         <translation>De steekproef is %1 getrokken. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="284"/>
+        <location filename="../app/report/report_document.cpp" line="286"/>
         <source>state how the articles were drawn, e.g. a simple random sample of the study&apos;s articles, with its size and seed</source>
         <translation>vermeld hoe de artikelen zijn getrokken, bijv. als enkelvoudige aselecte steekproef uit de artikelen van het onderzoek, met omvang en seed</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="288"/>
+        <location filename="../app/report/report_document.cpp" line="290"/>
         <source>%1 coders (%2) took part: %3. </source>
         <translation>%1 codeurs (%2) namen deel: %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="292"/>
+        <location filename="../app/report/report_document.cpp" line="294"/>
         <source>Articles that coders had started but not yet marked as finished were included. </source>
         <translation>Artikelen die codeurs waren begonnen maar nog niet als afgerond hadden gemarkeerd, zijn meegenomen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="295"/>
+        <location filename="../app/report/report_document.cpp" line="297"/>
         <source>Only articles that a coder had marked as finished count for that coder. </source>
         <translation>Voor elke codeur tellen alleen de artikelen die hij of zij als afgerond had gemarkeerd. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="299"/>
+        <location filename="../app/report/report_document.cpp" line="301"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="301"/>
+        <location filename="../app/report/report_document.cpp" line="303"/>
         <source>Articles still in progress were left out: %1. </source>
         <translation>Artikelen die nog in bewerking waren, zijn weggelaten: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="305"/>
+        <location filename="../app/report/report_document.cpp" line="307"/>
         <source>Before the reliability coding, coders trained on %1 articles and coded a pilot of %2 articles; %3. </source>
         <translation>Vóór de betrouwbaarheidscodering oefenden de codeurs op %1 artikelen en codeerden ze een pilot van %2 artikelen; %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="312"/>
+        <location filename="../app/report/report_document.cpp" line="314"/>
         <source>hours of training</source>
         <translation>uren training</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="314"/>
+        <location filename="../app/report/report_document.cpp" line="316"/>
         <source>Coder training: %1. </source>
         <translation>Codeurstraining: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="316"/>
+        <location filename="../app/report/report_document.cpp" line="318"/>
         <source>describe the training and its approximate hours</source>
         <translation>beschrijf de training en de geschatte duur in uren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="322"/>
+        <location filename="../app/report/report_document.cpp" line="324"/>
         <source>%1 α = %2</source>
         <translation>%1 α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="326"/>
+        <location filename="../app/report/report_document.cpp" line="328"/>
         <source> (95% CI %1)</source>
         <translation> (95%-BI %1)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="331"/>
+        <location filename="../app/report/report_document.cpp" line="333"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
         <translation>Elk van de vier framingfuncties van Entman (1993) is gecodeerd als een tekstfragment; voor de betrouwbaarheid werd elke functie een binaire variabele (aanwezig of afwezig) per %1: een eenheid (%2) draagt een functie wanneer het fragment van een codeur met die functie ermee overlapt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="336"/>
+        <location filename="../app/report/report_document.cpp" line="338"/>
         <source>We report Krippendorff&apos;s alpha (Krippendorff, 2004) because it handles any number of coders, missing data and any level of measurement (Hayes &amp; Krippendorff, 2007). </source>
         <translation>We rapporteren Krippendorffs alfa (Krippendorff, 2004) omdat die met elk aantal codeurs, ontbrekende gegevens en elk meetniveau overweg kan (Hayes &amp; Krippendorff, 2007). </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="340"/>
+        <location filename="../app/report/report_document.cpp" line="342"/>
         <source>Alpha was %1</source>
         <translation>Alfa was %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="342"/>
+        <location filename="../app/report/report_document.cpp" line="344"/>
         <source>; for the set of functions per %1, compared with the MASI distance (Passonneau, 2006), α = %2</source>
         <translation>; voor de verzameling functies per %1, vergeleken met de MASI-afstand (Passonneau, 2006), α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="349"/>
+        <location filename="../app/report/report_document.cpp" line="351"/>
         <source>Intervals are 95% percentile bootstrap intervals from %1 resamples of the units; the table also gives the interval from resampled pairable values (Hayes &amp; Krippendorff, 2007), which is narrower than its nominal level when more than two coders are compared. </source>
         <translation>De intervallen zijn 95%-percentiel-bootstrapintervallen uit %1 hersteekproeven van de eenheden; de tabel geeft ook het interval uit opnieuw getrokken paarbare waarden (Hayes &amp; Krippendorff, 2007), dat smaller is dan het nominale niveau wanneer meer dan twee codeurs worden vergeleken. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="355"/>
+        <location filename="../app/report/report_document.cpp" line="357"/>
         <source>Following Krippendorff (2004), variables with α&#xa0;≥&#xa0;0.800 are relied on and variables with 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 support tentative conclusions only. </source>
         <translation>In navolging van Krippendorff (2004) wordt op variabelen met α&#xa0;≥&#xa0;0.800 vertrouwd en ondersteunen variabelen met 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 alleen voorlopige conclusies. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="366"/>
+        <location filename="../app/report/report_document.cpp" line="368"/>
         <source>%1 (%2) α = %3</source>
         <translation>%1 (%2) α = %3</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="372"/>
+        <location filename="../app/report/report_document.cpp" line="374"/>
         <source>For the other variables alpha was: %1.</source>
         <translation>Voor de overige variabelen was alfa: %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="377"/>
+        <location filename="../app/report/report_document.cpp" line="379"/>
         <source>Disagreements were resolved by adjudication into a separate gold standard: %1 spans on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Verschillen zijn opgelost door beslissing in een aparte gouden standaard: %1 fragmenten in %2 artikelen, beslist door %3, %4 daarvan met een schriftelijke motivering. De onafhankelijke coderingen bleven ongewijzigd; alle bovenstaande cijfers komen daaruit. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="389"/>
+        <location filename="../app/report/report_document.cpp" line="391"/>
         <source>No adjudication is recorded in the project yet: %1. </source>
         <translation>In het project is nog geen beslissing vastgelegd: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="390"/>
+        <location filename="../app/report/report_document.cpp" line="392"/>
         <source>say how disagreements were resolved, e.g. by discussion or by the lead</source>
         <translation>vermeld hoe verschillen zijn opgelost, bijv. door overleg of door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="393"/>
+        <location filename="../app/report/report_document.cpp" line="395"/>
         <source>Coding followed version %1 of the codebook (“%2”)</source>
         <translation>De codering volgde versie %1 van het codeboek (‘%2’)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="398"/>
+        <location filename="../app/report/report_document.cpp" line="400"/>
         <source>; %1 of %2 codings were made under an earlier version</source>
         <translation>; %1 van de %2 coderingen zijn gemaakt onder een eerdere versie</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="403"/>
+        <location filename="../app/report/report_document.cpp" line="405"/>
         <source>, which is available at %1.</source>
         <translation>, dat beschikbaar is op %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="404"/>
+        <location filename="../app/report/report_document.cpp" line="406"/>
         <source>where readers can obtain it</source>
         <translation>waar lezers het kunnen verkrijgen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="408"/>
+        <location filename="../app/report/report_document.cpp" line="410"/>
         <source>Highlighted brackets are for the authors to complete: the project does not record these facts.</source>
         <translation>Gemarkeerde haakjes vullen de auteurs zelf in: het project legt deze gegevens niet vast.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="425"/>
+        <location filename="../app/report/report_document.cpp" line="427"/>
         <source>Size of the reliability sample and how it was selected</source>
         <translation>Omvang van de betrouwbaarheidssteekproef en hoe die is geselecteerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="427"/>
+        <location filename="../app/report/report_document.cpp" line="429"/>
         <source>Relationship of the reliability sample to the full sample</source>
         <translation>Verhouding van de betrouwbaarheidssteekproef tot de volledige steekproef</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="429"/>
+        <location filename="../app/report/report_document.cpp" line="431"/>
         <source>Number of reliability coders</source>
         <translation>Aantal codeurs in de betrouwbaarheidstoets</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="430"/>
+        <location filename="../app/report/report_document.cpp" line="432"/>
         <source>Amount of coding conducted by each coder</source>
         <translation>Hoeveelheid codeerwerk per codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="431"/>
+        <location filename="../app/report/report_document.cpp" line="433"/>
         <source>Index or indices selected and why</source>
         <translation>Gekozen index of indices en waarom</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="432"/>
+        <location filename="../app/report/report_document.cpp" line="434"/>
         <source>Reliability for each variable, for each index</source>
         <translation>Betrouwbaarheid per variabele, per index</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="433"/>
+        <location filename="../app/report/report_document.cpp" line="435"/>
         <source>Amount of coder training required to reach reliability</source>
         <translation>Hoeveelheid codeurstraining die nodig was om betrouwbaarheid te bereiken</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="435"/>
+        <location filename="../app/report/report_document.cpp" line="437"/>
         <source>How disagreements were resolved</source>
         <translation>Hoe verschillen zijn opgelost</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="436"/>
+        <location filename="../app/report/report_document.cpp" line="438"/>
         <source>Where the codebook and coding instructions can be obtained</source>
         <translation>Waar het codeboek en de codeerinstructies te verkrijgen zijn</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="441"/>
+        <location filename="../app/report/report_document.cpp" line="443"/>
         <source>#</source>
         <translation>#</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="441"/>
+        <location filename="../app/report/report_document.cpp" line="443"/>
         <source>Item</source>
         <translation>Punt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="442"/>
+        <location filename="../app/report/report_document.cpp" line="444"/>
         <source>In this report</source>
         <translation>In dit rapport</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="450"/>
+        <location filename="../app/report/report_document.cpp" line="452"/>
         <source>filled in from the project</source>
         <translation>ingevuld uit het project</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="451"/>
+        <location filename="../app/report/report_document.cpp" line="453"/>
         <source>partly filled in; complete the bracket</source>
         <translation>deels ingevuld; vul de haakjes aan</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="464"/>
         <location filename="../app/report/report_document.cpp" line="466"/>
-        <location filename="../app/report/report_document.cpp" line="561"/>
-        <location filename="../app/report/report_document.cpp" line="642"/>
-        <location filename="../app/report/report_document.cpp" line="678"/>
-        <location filename="../app/report/report_document.cpp" line="808"/>
+        <location filename="../app/report/report_document.cpp" line="468"/>
+        <location filename="../app/report/report_document.cpp" line="563"/>
+        <location filename="../app/report/report_document.cpp" line="644"/>
+        <location filename="../app/report/report_document.cpp" line="680"/>
+        <location filename="../app/report/report_document.cpp" line="810"/>
         <source>Variable</source>
         <translation>Variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="466"/>
+        <location filename="../app/report/report_document.cpp" line="468"/>
         <source>Level</source>
         <translation>Niveau</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="473"/>
-        <location filename="../app/report/report_document.cpp" line="643"/>
+        <location filename="../app/report/report_document.cpp" line="475"/>
+        <location filename="../app/report/report_document.cpp" line="645"/>
         <source>Units</source>
         <translation>Eenh.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="474"/>
-        <location filename="../app/report/report_document.cpp" line="562"/>
+        <location filename="../app/report/report_document.cpp" line="476"/>
+        <location filename="../app/report/report_document.cpp" line="564"/>
         <source>Pairable values</source>
         <translation>Paarb. waarden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="475"/>
+        <location filename="../app/report/report_document.cpp" line="477"/>
         <source>95% CI, units</source>
         <translation>95%-BI, eenheden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="476"/>
+        <location filename="../app/report/report_document.cpp" line="478"/>
         <source>95% CI, pairs</source>
         <translation>95%-BI, paren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="477"/>
-        <location filename="../app/report/report_document.cpp" line="643"/>
+        <location filename="../app/report/report_document.cpp" line="479"/>
+        <location filename="../app/report/report_document.cpp" line="645"/>
         <source>Agreement</source>
         <translation>Overeenst.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="477"/>
-        <location filename="../app/report/report_document.cpp" line="731"/>
+        <location filename="../app/report/report_document.cpp" line="479"/>
+        <location filename="../app/report/report_document.cpp" line="733"/>
         <source>Verdict</source>
         <translation>Oordeel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="484"/>
+        <location filename="../app/report/report_document.cpp" line="486"/>
         <source>not computed: %1</source>
         <translation>niet berekend: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="513"/>
+        <location filename="../app/report/report_document.cpp" line="515"/>
         <source>Units: %1 (articles for article-level items; passages matched across coders for span attributes). Agreement: percent agreement, which is not chance-corrected and is never reported alone (Lombard et al., 2002). Units: units resampled, percentile interval (the interval to report); pairs: pairable values resampled with the expected disagreement held fixed (Hayes &amp; Krippendorff, 2007), too narrow with more than two coders.</source>
         <translation>Eenheden: %1 (artikelen voor items op artikelniveau; tussen codeurs gekoppelde passages voor kenmerken van fragmenten). Overeenstemming: procentuele overeenstemming, die niet voor toeval gecorrigeerd is en nooit alleen wordt gerapporteerd (Lombard et al., 2002). Eenheden: eenheden opnieuw getrokken, percentielinterval (het interval om te rapporteren); paren: paarbare waarden opnieuw getrokken met de verwachte onenigheid vastgehouden (Hayes &amp; Krippendorff, 2007), te smal bij meer dan twee codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="548"/>
+        <location filename="../app/report/report_document.cpp" line="550"/>
         <source>Krippendorff&apos;s alpha per variable</source>
         <translation>Krippendorffs alfa per variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="549"/>
+        <location filename="../app/report/report_document.cpp" line="551"/>
         <source>Krippendorff&apos;s alpha per variable (dots) with 95% bootstrap intervals: whiskers resample pairable values (Hayes &amp; Krippendorff, 2007), bands resample units. The lines mark 0.667 and 0.800 (Krippendorff, 2004).</source>
         <translation>Krippendorffs alfa per variabele (punten) met 95%-bootstrapintervallen: de snorharen trekken paarbare waarden opnieuw (Hayes &amp; Krippendorff, 2007), de banden trekken eenheden opnieuw. De lijnen markeren 0.667 en 0.800 (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="563"/>
+        <location filename="../app/report/report_document.cpp" line="565"/>
         <source>Rarest value</source>
         <translation>Zeldzaamste waarde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="564"/>
+        <location filename="../app/report/report_document.cpp" line="566"/>
         <source>Minimum for α ≥ 0.800</source>
         <translation>Minimum voor α ≥ 0.800</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="565"/>
+        <location filename="../app/report/report_document.cpp" line="567"/>
         <source>Enough?</source>
         <translation>Genoeg?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="580"/>
+        <location filename="../app/report/report_document.cpp" line="582"/>
         <source>yes</source>
         <translation>ja</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="581"/>
+        <location filename="../app/report/report_document.cpp" line="583"/>
         <source>too few values</source>
         <translation>te weinig waarden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="584"/>
+        <location filename="../app/report/report_document.cpp" line="586"/>
         <source>Krippendorff&apos;s (2004, §11.4) minimum number of pairable values for α ≥ 0.800 at p = 0.05, after Bloch &amp; Kraemer (1989), given the share of the rarest value.</source>
         <translation>Krippendorffs (2004, §11.4) minimale aantal paarbare waarden voor α ≥ 0.800 bij p = 0.05, naar Bloch &amp; Kraemer (1989), gegeven het aandeel van de zeldzaamste waarde.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="596"/>
+        <location filename="../app/report/report_document.cpp" line="598"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="596"/>
+        <location filename="../app/report/report_document.cpp" line="598"/>
         <source>Role</source>
         <translation>Rol</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="597"/>
+        <location filename="../app/report/report_document.cpp" line="599"/>
+        <location filename="../app/report/report_document.cpp" line="887"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="598"/>
+        <location filename="../app/report/report_document.cpp" line="600"/>
         <source>Shared articles</source>
         <translation>Gedeelde artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="599"/>
+        <location filename="../app/report/report_document.cpp" line="601"/>
         <source>Spans</source>
         <translation>Fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="605"/>
+        <location filename="../app/report/report_document.cpp" line="607"/>
         <source>Answers</source>
         <translation>Antwoorden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="621"/>
+        <location filename="../app/report/report_document.cpp" line="623"/>
         <source>Coders appear by pseudonym only. Articles: coded by the coder (assigned, or with a span or an answer); shared: also coded by another coder in this report.</source>
         <translation>Codeurs verschijnen alleen onder pseudoniem. Artikelen: door de codeur gecodeerd (toegewezen, of met een fragment of een antwoord); gedeeld: in dit rapport ook door een andere codeur gecodeerd.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="632"/>
+        <location filename="../app/report/report_document.cpp" line="634"/>
         <source>Cohen&apos;s kappa per coder pair</source>
         <translation>Cohens kappa per codeurspaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="633"/>
+        <location filename="../app/report/report_document.cpp" line="635"/>
         <source>Cohen&apos;s kappa (Cohen, 1960) for each pair of coders and each function, on the %1 both coded. Darker is higher; hatched cells are undefined.</source>
         <translation>Cohens kappa (Cohen, 1960) voor elk paar codeurs en elke functie, op de %1 die beiden codeerden. Donkerder is hoger; gearceerde cellen zijn niet gedefinieerd.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="642"/>
+        <location filename="../app/report/report_document.cpp" line="644"/>
         <source>Pair</source>
         <translation>Paar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="644"/>
+        <location filename="../app/report/report_document.cpp" line="646"/>
         <source>95% CI</source>
         <translation>95%-BI</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="664"/>
+        <location filename="../app/report/report_document.cpp" line="666"/>
         <source>95% CI: large-sample interval with the standard error of Fleiss, Cohen &amp; Everitt (1969). A coder whose kappa is low with everyone else is worth a look before the coders are retrained.</source>
         <translation>95%-BI: interval voor grote steekproeven met de standaardfout van Fleiss, Cohen &amp; Everitt (1969). Een codeur wiens kappa met alle anderen laag is, verdient een nadere blik voordat de codeurs opnieuw worden getraind.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="678"/>
+        <location filename="../app/report/report_document.cpp" line="680"/>
         <source>Fleiss&apos; κ</source>
         <translation>Fleiss&apos; κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="679"/>
+        <location filename="../app/report/report_document.cpp" line="681"/>
         <source>Light&apos;s κ</source>
         <translation>Lights κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="679"/>
+        <location filename="../app/report/report_document.cpp" line="681"/>
         <source>Cohen&apos;s κ</source>
         <translation>Cohens κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="680"/>
+        <location filename="../app/report/report_document.cpp" line="682"/>
         <source>Scott&apos;s π</source>
         <translation>Scotts π</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="681"/>
+        <location filename="../app/report/report_document.cpp" line="683"/>
         <source>Bennett&apos;s S</source>
         <translation>Bennetts S</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="686"/>
+        <location filename="../app/report/report_document.cpp" line="688"/>
         <source>n/a</source>
         <translation>n.v.t.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="700"/>
+        <location filename="../app/report/report_document.cpp" line="702"/>
         <source>For comparison with older studies: Fleiss (1971) and Light (1971) for any number of coders, Cohen (1960), Scott (1955) and Bennett, Alpert &amp; Goldstein (1954) for two; n/a where their assumptions (complete data, two coders) do not hold.</source>
         <translation>Ter vergelijking met oudere studies: Fleiss (1971) en Light (1971) voor elk aantal codeurs, Cohen (1960), Scott (1955) en Bennett, Alpert &amp; Goldstein (1954) voor twee; n.v.t. waar hun aannames (volledige gegevens, twee codeurs) niet opgaan.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="715"/>
+        <location filename="../app/report/report_document.cpp" line="717"/>
         <source>Not computed: %1</source>
         <translation>Niet berekend: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="718"/>
+        <location filename="../app/report/report_document.cpp" line="720"/>
         <source>Unitizing alpha (Krippendorff, 2004) compares where the coders put their spans, character by character, on the %1 articles that every coder coded (%2 characters laid end to end).</source>
         <translation>Unitizing-alfa (Krippendorff, 2004) vergelijkt teken voor teken waar de codeurs hun fragmenten plaatsen, op de %1 artikelen die elke codeur codeerde (%2 tekens achter elkaar).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="728"/>
+        <location filename="../app/report/report_document.cpp" line="730"/>
         <source>Function</source>
         <translation>Functie</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="729"/>
+        <location filename="../app/report/report_document.cpp" line="731"/>
         <source>Observed disagreement</source>
         <translation>Waargenomen onenigheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="730"/>
+        <location filename="../app/report/report_document.cpp" line="732"/>
         <source>Expected disagreement</source>
         <translation>Verwachte onenigheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="746"/>
+        <location filename="../app/report/report_document.cpp" line="748"/>
         <source>all four</source>
         <translation>alle vier</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="765"/>
+        <location filename="../app/report/report_document.cpp" line="767"/>
         <source>Alpha without each coder</source>
         <translation>Alfa zonder elke codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="767"/>
+        <location filename="../app/report/report_document.cpp" line="769"/>
         <source>Left out</source>
         <translation>Weggelaten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="797"/>
+        <location filename="../app/report/report_document.cpp" line="799"/>
         <source>Alpha recomputed without the coder&apos;s codings; in brackets the change against all coders (positive: the coder pulls alpha down). A diagnostic for retraining, not a licence to report the better figure (Krippendorff, 2004).</source>
         <translation>Alfa opnieuw berekend zonder de coderingen van de codeur; tussen haakjes de verandering ten opzichte van alle codeurs (positief: de codeur trekt alfa omlaag). Een diagnose voor hertraining, geen vrijbrief om het betere cijfer te rapporteren (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="804"/>
+        <location filename="../app/report/report_document.cpp" line="806"/>
         <source>The article that costs most</source>
         <translation>Het artikel dat het meest kost</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="808"/>
+        <location filename="../app/report/report_document.cpp" line="810"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="809"/>
+        <location filename="../app/report/report_document.cpp" line="811"/>
         <source>α without it</source>
         <translation>α zonder dit artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="810"/>
+        <location filename="../app/report/report_document.cpp" line="812"/>
         <source>Change</source>
         <translation>Verandering</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="833"/>
+        <location filename="../app/report/report_document.cpp" line="835"/>
         <source>Function confusion between coders</source>
         <translation>Functieverwarring tussen codeurs</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="835"/>
+        <location filename="../app/report/report_document.cpp" line="837"/>
         <source>A coder&apos;s span</source>
         <translation>Fragment van een codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="853"/>
+        <location filename="../app/report/report_document.cpp" line="855"/>
         <source>For each coder&apos;s span, the function the other coder gave the span that overlaps it most (none: nothing there), summed over ordered pairs of coders. Off the diagonal are the confusions a codebook rule could settle.</source>
         <translation>Voor elk fragment van een codeur de functie die de andere codeur gaf aan het fragment dat het meest ermee overlapt (geen: daar staat niets), opgeteld over geordende paren codeurs. Buiten de diagonaal staan de verwarringen die een codeboekregel kan beslechten.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="865"/>
+        <location filename="../app/report/report_document.cpp" line="868"/>
+        <source>The newest saved frame analysis, “%1” (saved %2): %3 frames of the layer %4 over %5 articles, by Ward&apos;s hierarchical clustering refined by k-means (Matthes &amp; Kohring 2008). A frame&apos;s characteristic elements are those with an adjusted residual above 1.96 (Haberman 1973), with their share in the frame and in all articles. The frames are only as good as their elements: beside each element variable stands its Krippendorff&apos;s alpha (nominal, articles as units) over the coders of this report.</source>
+        <translation>De nieuwste opgeslagen frameanalyse, ‘%1’ (opgeslagen %2): %3 frames van de laag %4 over %5 artikelen, met hiërarchische clustering volgens Ward, verfijnd met k-means (Matthes &amp; Kohring 2008). De kenmerkende elementen van een frame zijn die met een gecorrigeerd residu boven 1.96 (Haberman 1973), met hun aandeel in het frame en in alle artikelen. De frames zijn maar zo goed als hun elementen: naast elke elementvariabele staat haar Krippendorffs alfa (nominaal, artikelen als eenheden) over de codeurs van dit rapport.</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="886"/>
+        <source>Frame</source>
+        <translation>Frame</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="886"/>
+        <source>Name</source>
+        <translation>Naam</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="887"/>
+        <source>Share</source>
+        <translation>Aandeel</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="888"/>
+        <source>Characteristic elements</source>
+        <translation>Kenmerkende elementen</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="890"/>
+        <source>F%1</source>
+        <translation>F%1</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="898"/>
+        <source>%1 (%2% / %3%)</source>
+        <translation>%1 (%2% / %3%)</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="909"/>
+        <source>none stands out</source>
+        <translation>geen enkel valt op</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="916"/>
+        <source>Element variable</source>
+        <translation>Elementvariabele</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="917"/>
+        <source>Pairable articles</source>
+        <translation>Paarbare artikelen</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="918"/>
+        <source>Characterises</source>
+        <translation>Kenmerkt</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="935"/>
         <source>Every figure above is what these commands print (add --json for all digits):</source>
         <translation>Elk cijfer hierboven is wat deze opdrachten afdrukken (voeg --json toe voor alle cijfers):</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="925"/>
+        <location filename="../app/report/report_document.cpp" line="995"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
         <translation>nl</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="942"/>
+        <location filename="../app/report/report_document.cpp" line="1012"/>
         <source>Method text</source>
         <translation>Methodetekst</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="944"/>
+        <location filename="../app/report/report_document.cpp" line="1014"/>
         <source>Reporting checklist (Lombard, Snyder-Duch &amp; Bracken, 2002)</source>
         <translation>Checklist voor de verslaglegging (Lombard, Snyder-Duch &amp; Bracken, 2002)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="946"/>
+        <location filename="../app/report/report_document.cpp" line="1016"/>
         <source>Reliability per variable</source>
         <translation>Betrouwbaarheid per variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="948"/>
+        <location filename="../app/report/report_document.cpp" line="1018"/>
         <source>Is the sample large enough?</source>
         <translation>Is de steekproef groot genoeg?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="950"/>
+        <location filename="../app/report/report_document.cpp" line="1020"/>
         <source>Coders and the amount each coded</source>
         <translation>Codeurs en hoeveel elk codeerde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="952"/>
+        <location filename="../app/report/report_document.cpp" line="1022"/>
         <source>Coder pairs</source>
         <translation>Codeursparen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="953"/>
+        <location filename="../app/report/report_document.cpp" line="1023"/>
         <source>Other coefficients</source>
         <translation>Andere coëfficiënten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="955"/>
+        <location filename="../app/report/report_document.cpp" line="1025"/>
         <source>Span boundaries: unitizing alpha</source>
         <translation>Grenzen van fragmenten: unitizing-alfa</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="959"/>
+        <location filename="../app/report/report_document.cpp" line="1029"/>
         <source>Where reliability is lost</source>
         <translation>Waar betrouwbaarheid verloren gaat</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="961"/>
+        <location filename="../app/report/report_document.cpp" line="1032"/>
+        <source>Frames</source>
+        <translation>Frames</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_document.cpp" line="1033"/>
         <source>Reproducing the figures</source>
         <translation>De cijfers reproduceren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="963"/>
+        <location filename="../app/report/report_document.cpp" line="1035"/>
         <source>References</source>
         <translation>Literatuur</translation>
     </message>
@@ -3812,6 +3961,129 @@
         <location filename="../core/store/shared_rows.cpp" line="127"/>
         <source>The units of the article %1 are not pairs of 32-bit offsets.</source>
         <translation>De eenheden van artikel %1 zijn geen paren van 32-bits offsets.</translation>
+    </message>
+</context>
+<context>
+    <name>ShortcutTableText</name>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="53"/>
+        <source>Mark the selected text as problem, cause, evaluation or remedy, snapped to whole words; with a span selected: relabel it</source>
+        <translation>De geselecteerde tekst markeren als probleem, oorzaak, evaluatie of oplossing, uitgelijnd op hele woorden; met een fragment geselecteerd: de functie ervan wijzigen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="56"/>
+        <source>%1+1 – 4 (or Alt+1 – 4)</source>
+        <translation>%1+1 – 4 (of Alt+1 – 4)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="57"/>
+        <source>Mark exactly the selected text, without snapping to words</source>
+        <translation>Precies de geselecteerde tekst markeren, zonder uitlijning op woorden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="59"/>
+        <source>Exact selection on or off (View menu): while on, 1 – 4 and handle drags take the text exactly as selected</source>
+        <translation>Exacte selectie aan of uit (menu Beeld): zolang die aan staat, nemen 1 – 4 en het slepen aan grepen de tekst precies zoals geselecteerd</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="62"/>
+        <source>%1 while dragging a handle (or Alt)</source>
+        <translation>%1 tijdens het slepen aan een greep (of Alt)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="63"/>
+        <source>Resize the selected span to the exact character</source>
+        <translation>Het geselecteerde fragment tot op het teken groter of kleiner maken</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="64"/>
+        <source>Delete or Backspace</source>
+        <translation>Delete of Backspace</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="65"/>
+        <source>Delete the selected span</source>
+        <translation>Het geselecteerde fragment verwijderen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="66"/>
+        <source>%1+Left / Right (or Alt+Left / Right)</source>
+        <translation>%1+Links / Rechts (of Alt+Links / Rechts)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="67"/>
+        <source>Move the selected span&apos;s start by a word</source>
+        <translation>Het begin van het geselecteerde fragment een woord verplaatsen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="68"/>
+        <source>%1+Shift+Left / Right (or Alt+Shift+Left / Right)</source>
+        <translation>%1+Shift+Links / Rechts (of Alt+Shift+Links / Rechts)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="69"/>
+        <source>Move the selected span&apos;s end by a word</source>
+        <translation>Het einde van het geselecteerde fragment een woord verplaatsen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="70"/>
+        <source>%1+Up / Down (or Alt+Up / Down)</source>
+        <translation>%1+Omhoog / Omlaag (of Alt+Omhoog / Omlaag)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="71"/>
+        <source>Select the previous / next span</source>
+        <translation>Het vorige / volgende fragment selecteren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="72"/>
+        <source>Esc</source>
+        <translation>Esc</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="73"/>
+        <source>Clear the span selection, then the text selection; cancel a drag</source>
+        <translation>Eerst de fragmentselectie opheffen, dan de tekstselectie; een sleepbeweging annuleren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="75"/>
+        <source>Undo the last change</source>
+        <translation>De laatste wijziging ongedaan maken</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="76"/>
+        <source>Redo</source>
+        <translation>Opnieuw</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="78"/>
+        <source>Mark the article as done and open the next</source>
+        <translation>Het artikel als klaar markeren en het volgende openen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="79"/>
+        <source>Next article that is not done</source>
+        <translation>Volgend artikel dat niet klaar is</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="80"/>
+        <source>Search the texts</source>
+        <translation>In de teksten zoeken</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="82"/>
+        <source>Compare coders and adjudicate (leads)</source>
+        <translation>Codeurs vergelijken en beslissen (coördinatoren)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="83"/>
+        <source>Reliability (leads)</source>
+        <translation>Betrouwbaarheid (coördinatoren)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="84"/>
+        <source>This list of keys</source>
+        <translation>Deze lijst met toetsen</translation>
     </message>
 </context>
 <context>
@@ -4810,7 +5082,7 @@
         <location filename="../app/cli/command_export.cpp" line="73"/>
         <location filename="../app/cli/command_extract.cpp" line="166"/>
         <location filename="../app/cli/command_handout.cpp" line="25"/>
-        <location filename="../app/cli/command_import.cpp" line="121"/>
+        <location filename="../app/cli/command_import.cpp" line="128"/>
         <location filename="../app/cli/command_info.cpp" line="38"/>
         <location filename="../app/cli/command_merge.cpp" line="75"/>
         <location filename="../app/cli/command_people.cpp" line="109"/>
@@ -5277,7 +5549,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_extract.cpp" line="194"/>
-        <location filename="../app/cli/command_import.cpp" line="186"/>
+        <location filename="../app/cli/command_import.cpp" line="201"/>
         <source>Upgraded the project file; the old version is kept as %1.</source>
         <translation>Het projectbestand is bijgewerkt; de oude versie is bewaard als %1.</translation>
     </message>
@@ -5710,112 +5982,122 @@
         <translation>Ze bevat %1 artikelen, %2 annotaties, %3 koppelingen en %4 oordelen op artikelniveau.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="48"/>
+        <location filename="../app/cli/command_import.cpp" line="49"/>
         <source>%1: %2 spans, %3 answers, %4 gold spans added</source>
         <translation>%1: %2 fragmenten, %3 antwoorden, %4 fragmenten in de gouden standaard toegevoegd</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="54"/>
+        <location filename="../app/cli/command_import.cpp" line="55"/>
         <source>  %1 line(s) skipped: already in the project (the same annotation, or the same coder, function and range; the same answer; the same gold span)</source>
         <translation>  %1 regel(s) overgeslagen: al in het project (dezelfde annotatie, of dezelfde codeur, functie en hetzelfde bereik; hetzelfde antwoord; hetzelfde fragment in de gouden standaard)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="59"/>
+        <location filename="../app/cli/command_import.cpp" line="60"/>
         <source>  %1 article(s) marked done for their coders (imported codings count as finished)</source>
         <translation>  %1 artikel(en) als klaar gemarkeerd voor hun codeurs (geïmporteerde coderingen tellen als afgerond)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="64"/>
+        <location filename="../app/cli/command_import.cpp" line="65"/>
         <source>  new coders: %1</source>
         <translation>  nieuwe codeurs: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="81"/>
+        <location filename="../app/cli/command_import.cpp" line="82"/>
         <source>Read every file as txt, html, jsonl, csv, feed (RSS or Atom), newsxml (NITF or NewsML-G2), docx, odt, pdf or epub (default: from each file&apos;s suffix; .xml and unknown suffixes from the content).</source>
         <translation>Elk bestand lezen als txt, html, jsonl, csv, feed (RSS of Atom), newsxml (NITF of NewsML-G2), docx, odt, pdf of epub (standaard: naar de extensie van elk bestand; .xml en onbekende extensies naar de inhoud).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="87"/>
+        <location filename="../app/cli/command_import.cpp" line="88"/>
         <source>Language (BCP 47 tag) of articles that name none (default: the project&apos;s).</source>
         <translation>Taal (BCP 47-tag) van artikelen die er geen noemen (standaard: die van het project).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="91"/>
+        <location filename="../app/cli/command_import.cpp" line="92"/>
         <source>CSV: take FIELD (id, title, text, outlet, published, language) from the column HEADER. Repeatable.</source>
         <translation>CSV: VELD (id, title, text, outlet, published, language) uit de kolom HEADER nemen. Herhaalbaar.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="96"/>
+        <location filename="../app/cli/command_import.cpp" line="97"/>
         <source>EPUB: import each book as one article instead of one article per chapter.</source>
         <translation>EPUB: elk boek als één artikel importeren in plaats van één artikel per hoofdstuk.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="99"/>
+        <location filename="../app/cli/command_import.cpp" line="100"/>
+        <source>txt, docx, odt, pdf: cut each document into articles at the lines matching REGEX; named groups (?&lt;title&gt;...), (?&lt;outlet&gt;...), (?&lt;date&gt;...) fill those fields, else the first line of each part is its title.</source>
+        <translation>txt, docx, odt, pdf: elk document in artikelen knippen bij de regels die met REGEX overeenkomen; benoemde groepen (?&lt;title&gt;...), (?&lt;outlet&gt;...), (?&lt;date&gt;...) vullen die velden, anders is de eerste regel van elk deel de titel.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_import.cpp" line="106"/>
         <source>List and record an added article as a near copy of an article in the project when the estimated Jaccard similarity of their 5-word shingles is at least J, in (0, 1] (default 0.8).</source>
         <translation>Een toegevoegd artikel opsommen en vastleggen als bijna-kopie van een artikel in het project wanneer de geschatte Jaccard-gelijkenis van hun shingles van 5 woorden ten minste J is, in (0, 1] (standaard 0.8).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="105"/>
+        <location filename="../app/cli/command_import.cpp" line="112"/>
         <source>Print the report as JSON.</source>
         <translation>Het verslag als JSON afdrukken.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="107"/>
+        <location filename="../app/cli/command_import.cpp" line="114"/>
         <source>The files hold W3C Web Annotations (from &quot;export --format w3c&quot;): import them as codings of the articles already in the project.</source>
         <translation>De bestanden bevatten W3C-webannotaties (uit ‘export --format w3c’): importeer ze als coderingen van de artikelen die al in het project staan.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="111"/>
+        <location filename="../app/cli/command_import.cpp" line="118"/>
         <source>The files hold quote-anchored codings (JSON Lines, see sample-project/README.md).</source>
         <translation>De bestanden bevatten aan citaten verankerde coderingen (JSON Lines, zie sample-project/README.md).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="114"/>
+        <location filename="../app/cli/command_import.cpp" line="121"/>
         <source>With --w3c or --codings: the phase of the imported codings (training, pilot, reliability, production; default production).</source>
         <translation>Met --w3c of --codings: de fase van de geïmporteerde coderingen (training, pilot, reliability, production; standaard production).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="123"/>
-        <source>Files (or, for text, folders) to import. Each file is imported whole or not at all.</source>
-        <translation>Te importeren bestanden (of, voor tekst, mappen). Elk bestand wordt helemaal of helemaal niet geïmporteerd.</translation>
+        <location filename="../app/cli/command_import.cpp" line="130"/>
+        <source>Files or folders to import. Each file is imported whole or not at all; a folder (with its subfolders) likewise, as one.</source>
+        <translation>Te importeren bestanden of mappen. Elk bestand wordt helemaal of helemaal niet geïmporteerd; een map (met submappen) evenzo, als geheel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="126"/>
+        <location filename="../app/cli/command_import.cpp" line="134"/>
         <source>Import articles into a project (or, with --w3c or --codings, codings of its articles).</source>
         <translation>Artikelen in een project importeren (of, met --w3c of --codings, coderingen van de artikelen ervan).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="135"/>
+        <location filename="../app/cli/command_import.cpp" line="143"/>
         <source>expected a project file and at least one file to import.</source>
         <translation>een projectbestand en ten minste één te importeren bestand verwacht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="143"/>
+        <location filename="../app/cli/command_import.cpp" line="151"/>
         <source>unknown format &quot;%1&quot; (expected txt, html, jsonl, csv, feed, newsxml, docx, odt, pdf or epub).</source>
         <translation>onbekend formaat ‘%1’ (verwacht: txt, html, jsonl, csv, feed, newsxml, docx, odt, pdf of epub).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="155"/>
+        <location filename="../app/cli/command_import.cpp" line="162"/>
+        <source>--split-on: %1</source>
+        <translation>--split-on: %1</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_import.cpp" line="170"/>
         <source>--near-copy-threshold expects a number in (0, 1], got &quot;%1&quot;.</source>
         <translation>--near-copy-threshold verwacht een getal in (0, 1], gekregen: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="163"/>
+        <location filename="../app/cli/command_import.cpp" line="178"/>
         <source>--column expects FIELD=HEADER, got &quot;%1&quot;.</source>
         <translation>--column verwacht VELD=HEADER, gekregen: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="170"/>
+        <location filename="../app/cli/command_import.cpp" line="185"/>
         <source>choose either --w3c or --codings.</source>
         <translation>kies --w3c of --codings.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="176"/>
+        <location filename="../app/cli/command_import.cpp" line="191"/>
         <source>unknown phase &quot;%1&quot; (expected training, pilot, reliability or production).</source>
         <translation>onbekende fase ‘%1’ (verwacht: training, pilot, reliability of production).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_import.cpp" line="199"/>
+        <location filename="../app/cli/command_import.cpp" line="214"/>
         <source>fourfold-cli: the %n article(s) imported before this file stay in the project.</source>
         <translation>
             <numerusform>fourfold-cli: het %n artikel dat vóór dit bestand is geïmporteerd, blijft in het project.</numerusform>
@@ -5823,17 +6105,35 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="220"/>
+        <location filename="../app/cli/command_import.cpp" line="243"/>
         <source>%1: %2 added, %3 skipped</source>
         <translation>%1: %2 toegevoegd, %3 overgeslagen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="225"/>
+        <location filename="../app/cli/command_import.cpp" line="252"/>
+        <source>  %1: %2</source>
+        <translation>  %1: %2</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/cli/command_import.cpp" line="259"/>
+        <source>… %n more</source>
+        <translation>
+            <numerusform>… %n andere</numerusform>
+            <numerusform>… %n andere</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_import.cpp" line="260"/>
+        <source>  %1: %2 added (%3), %4 skipped</source>
+        <translation>  %1: %2 toegevoegd (%3), %4 overgeslagen</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_import.cpp" line="267"/>
         <source>  line %1 (%2): skipped, %3</source>
         <translation>  regel %1 (%2): overgeslagen, %3</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="229"/>
+        <location filename="../app/cli/command_import.cpp" line="271"/>
         <source>  line %1 (%2): added, a near copy of &quot;%3&quot; (similarity %4)</source>
         <translation>  regel %1 (%2): toegevoegd, een bijna-kopie van ‘%3’ (gelijkenis %4)</translation>
     </message>
@@ -7698,6 +7998,184 @@ Bijna-kopie van %2</translation>
     </message>
 </context>
 <context>
+    <name>fourfold::ConflictsWindow</name>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="47"/>
+        <source>Merge conflicts — %1</source>
+        <translation>Samenvoegconflicten — %1</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="50"/>
+        <source>A conflict is a coder&apos;s span, answer or link that was changed both in the project and in a coder copy (or on the team server). The later change was kept; the other version waits here. Keep the project&apos;s version or take the other one: each decision can be undone with Edit → Undo.</source>
+        <translation>Een conflict is een fragment, antwoord of koppeling van een codeur dat zowel in het project als in een codeurskopie (of op de teamserver) is gewijzigd. De latere wijziging is behouden; de andere versie wacht hier. Behoud de versie van het project of neem de andere: elke beslissing kan met Bewerken → Ongedaan maken worden teruggedraaid.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="57"/>
+        <source>Show decided conflicts</source>
+        <translation>Besliste conflicten tonen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="62"/>
+        <source>Coder</source>
+        <translation>Codeur</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="62"/>
+        <source>Article</source>
+        <translation>Artikel</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="62"/>
+        <source>What</source>
+        <translation>Wat</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="63"/>
+        <source>Other version from</source>
+        <translation>Andere versie van</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="63"/>
+        <source>Found</source>
+        <translation>Gevonden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="63"/>
+        <source>Decision</source>
+        <translation>Beslissing</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="69"/>
+        <source>Conflicts</source>
+        <translation>Conflicten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="85"/>
+        <source>In the project now</source>
+        <translation>Nu in het project</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="85"/>
+        <source>&amp;Keep the project&apos;s version</source>
+        <translation>Versie van het project &amp;behouden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="86"/>
+        <source>The other version</source>
+        <translation>De andere versie</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="86"/>
+        <source>&amp;Take the other version</source>
+        <translation>Andere versie &amp;overnemen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="134"/>
+        <source>%1 span</source>
+        <translation>%1-fragment</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="136"/>
+        <source>answer to %1</source>
+        <translation>antwoord op %1</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="138"/>
+        <source>project&apos;s version kept</source>
+        <translation>versie van het project behouden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="139"/>
+        <source>other version taken</source>
+        <translation>andere versie overgenomen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="140"/>
+        <source>open</source>
+        <translation>open</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="143"/>
+        <source>the project</source>
+        <translation>het project</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="144"/>
+        <source>the team server</source>
+        <translation>de teamserver</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="145"/>
+        <source>copy %1</source>
+        <translation>kopie %1</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="160"/>
+        <source>?</source>
+        <translation>?</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="182"/>
+        <source>&lt;p&gt;&lt;i&gt;(none)&lt;/i&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;&lt;i&gt;(geen)&lt;/i&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="185"/>
+        <source>&lt;p&gt;&lt;b&gt;Deleted&lt;/b&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;&lt;b&gt;Verwijderd&lt;/b&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="201"/>
+        <source>&lt;p&gt;Note: %1&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Notitie: %1&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="203"/>
+        <source>&lt;p&gt;Confidence: %1&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Betrouwbaarheidsscore: %1&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="205"/>
+        <source>&lt;p&gt;Answer to %1: &lt;b&gt;%2&lt;/b&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Antwoord op %1: &lt;b&gt;%2&lt;/b&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="210"/>
+        <source>&lt;p&gt;Status: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Status: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="212"/>
+        <source>&lt;p&gt;Link: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Koppeling: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="216"/>
+        <source>&lt;p&gt;&lt;small&gt;Changed %1&lt;/small&gt;&lt;/p&gt;</source>
+        <translation>&lt;p&gt;&lt;small&gt;Gewijzigd %1&lt;/small&gt;&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="232"/>
+        <source>No merge has found a conflict.</source>
+        <translation>Geen enkele samenvoeging heeft een conflict gevonden.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="233"/>
+        <source>No conflicts wait for a decision.</source>
+        <translation>Er wachten geen conflicten op een beslissing.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="257"/>
+        <source>Choose an open conflict first.</source>
+        <translation>Kies eerst een open conflict.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="273"/>
+        <source>%1. Undo with Edit → Undo.</source>
+        <translation>%1. Ongedaan maken met Bewerken → Ongedaan maken.</translation>
+    </message>
+</context>
+<context>
     <name>fourfold::DendrogramView</name>
     <message>
         <location filename="../app/desktop/frames/dendrogram_view.cpp" line="84"/>
@@ -8759,6 +9237,85 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
     </message>
 </context>
 <context>
+    <name>fourfold::ImportOptionsDialog</name>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="53"/>
+        <source>Import articles</source>
+        <translation>Artikelen importeren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="56"/>
+        <source>Import %1</source>
+        <translation>%1 importeren</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/import_options_dialog.cpp" line="57"/>
+        <source>Import %n files</source>
+        <translation>
+            <numerusform>%n bestand importeren</numerusform>
+            <numerusform>%n bestanden importeren</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="64"/>
+        <source>e.g. ^=+$ or ^Item \d+</source>
+        <translation>bijv. ^=+$ of ^Item \d+</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="66"/>
+        <source>A regular expression. Each text, DOCX, ODT or PDF document is cut into articles at the lines where it is found. Named groups (?&lt;title&gt;…), (?&lt;outlet&gt;…) and (?&lt;date&gt;…) fill those fields; otherwise the first line of each part is its title. Leave empty for one article per document.</source>
+        <translation>Een reguliere expressie. Elk tekst-, DOCX-, ODT- of PDF-document wordt in artikelen geknipt bij de regels waar ze wordt gevonden. Benoemde groepen (?&lt;title&gt;…), (?&lt;outlet&gt;…) en (?&lt;date&gt;…) vullen die velden; anders is de eerste regel van elk deel de titel. Laat leeg voor één artikel per document.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="70"/>
+        <source>Split each document at lines matching:</source>
+        <translation>Elk document knippen bij regels die overeenkomen met:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="78"/>
+        <source>Preview the cuts</source>
+        <translation>Knippen vooraf bekijken</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="82"/>
+        <source>Preview of the cuts</source>
+        <translation>Voorbeeld van het knippen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="86"/>
+        <source>Import</source>
+        <translation>Importeren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="118"/>
+        <source>No pattern: each document is one article.</source>
+        <translation>Geen patroon: elk document is één artikel.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="123"/>
+        <source>None of the chosen files is a text, DOCX, ODT or PDF document.</source>
+        <translation>Geen van de gekozen bestanden is een tekst-, DOCX-, ODT- of PDF-document.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="130"/>
+        <source>%1: not cut — %2</source>
+        <translation>%1: niet geknipt — %2</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/import_options_dialog.cpp" line="134"/>
+        <source>(no title)</source>
+        <translation>(zonder titel)</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/import_options_dialog.cpp" line="139"/>
+        <source>%1 (line %2): %3 (%n characters)</source>
+        <translation>
+            <numerusform>%1 (regel %2): %3 (%n teken)</numerusform>
+            <numerusform>%1 (regel %2): %3 (%n tekens)</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>fourfold::ItemForm</name>
     <message>
         <location filename="../app/desktop/item_form.cpp" line="29"/>
@@ -8779,61 +9336,61 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="173"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="188"/>
         <source>Write the reliability report</source>
         <translation>Het betrouwbaarheidsrapport schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="174"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webpagina (*.html);;PDF-document (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="181"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="185"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
         <source>The reliability report was written to %1.</source>
         <translation>Het betrouwbaarheidsrapport is geschreven naar %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="186"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="201"/>
         <source>&amp;Open</source>
         <translation>&amp;Openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="187"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="226"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="202"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="241"/>
         <source>Open the &amp;folder</source>
         <translation>De &amp;map openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="198"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="206"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="219"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="213"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="221"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="234"/>
         <source>Coder copy</source>
         <translation>Codeurskopie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="207"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="222"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Een codeurskopie bevat alleen de artikelen die aan deze codeur zijn toegewezen, het codeboek en de eigen coderingen van de codeur. Voor wie is de kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="213"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="228"/>
         <source>Write the coder copy</source>
         <translation>De codeurskopie schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="214"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="236"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-project (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="223"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="238"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 geschreven voor %2: %n artikel, %3 fragment(en).</numerusform>
@@ -8841,17 +9398,17 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="236"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
         <source>Merge returned coder copies</source>
         <translation>Teruggekomen codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="241"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="256"/>
         <source>Merge coder copies</source>
         <translation>Codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="242"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="257"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -8860,25 +9417,30 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="249"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): al samengevoegd, niets nieuws.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="266"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 nieuw, %4 gewijzigd (%5 verwijderd), %6 conflict(en).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
-        <source>Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits for you to decide (fourfold-cli merge PROJECT --conflicts lists them).</source>
+        <location filename="../app/desktop/lead_windows.cpp" line="274"/>
+        <source>Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits for you to decide (Lead → Merge conflicts…).</source>
         <translation>
-            <numerusform>%n kopie samengevoegd; %1 conflict(en): de latere wijziging blijft, de andere wacht op uw beslissing (fourfold-cli merge PROJECT --conflicts somt ze op).</numerusform>
-            <numerusform>%n kopieën samengevoegd; %1 conflict(en): de latere wijziging blijft, de andere wacht op uw beslissing (fourfold-cli merge PROJECT --conflicts somt ze op).</numerusform>
+            <numerusform>%n kopie samengevoegd; %1 conflict(en): de latere wijziging blijft, de andere wacht op uw beslissing (Coördinator → Samenvoegconflicten…).</numerusform>
+            <numerusform>%n kopieën samengevoegd; %1 conflict(en): de latere wijziging blijft, de andere wacht op uw beslissing (Coördinator → Samenvoegconflicten…).</numerusform>
         </translation>
     </message>
+    <message>
+        <location filename="../app/desktop/lead_windows.cpp" line="281"/>
+        <source>&amp;Decide conflicts</source>
+        <translation>Conflicten &amp;beslissen</translation>
+    </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="263"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="278"/>
         <source>Merged %n copy(ies).</source>
         <translation>
             <numerusform>%n kopie samengevoegd.</numerusform>
@@ -8889,315 +9451,345 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="794"/>
+        <location filename="../app/desktop/main_window.cpp" line="826"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="189"/>
+        <location filename="../app/desktop/main_window.cpp" line="191"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="105"/>
+        <location filename="../app/desktop/main_window.cpp" line="107"/>
         <source>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manual frame analysis of news and opinion articles: problem, cause, evaluation, remedy.&lt;/p&gt;</source>
         <translation>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Handmatige frame-analyse van nieuws- en opinieartikelen: probleem, oorzaak, evaluatie, oplossing.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="113"/>
+        <location filename="../app/desktop/main_window.cpp" line="115"/>
         <source>New project…</source>
         <translation>Nieuw project…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="114"/>
+        <location filename="../app/desktop/main_window.cpp" line="116"/>
         <source>Start a study: a new project file, then import its articles.</source>
         <translation>Een onderzoek beginnen: een nieuw projectbestand, daarna de artikelen importeren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="117"/>
+        <location filename="../app/desktop/main_window.cpp" line="119"/>
         <source>Open a project…</source>
         <translation>Project openen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="120"/>
+        <location filename="../app/desktop/main_window.cpp" line="122"/>
         <source>Open the sample project</source>
         <translation>Voorbeeldproject openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="122"/>
+        <location filename="../app/desktop/main_window.cpp" line="124"/>
         <source>Invented demo data: three local controversies, three coders.</source>
         <translation>Verzonnen demogegevens: drie lokale kwesties, drie codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="128"/>
-        <location filename="../app/desktop/main_window.cpp" line="141"/>
+        <location filename="../app/desktop/main_window.cpp" line="130"/>
+        <location filename="../app/desktop/main_window.cpp" line="143"/>
         <source>Recent projects</source>
         <translation>Recente projecten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="160"/>
+        <location filename="../app/desktop/main_window.cpp" line="162"/>
         <source>Search the texts…</source>
         <translation>Zoeken in de teksten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="162"/>
+        <location filename="../app/desktop/main_window.cpp" line="164"/>
         <source>Search articles</source>
         <translation>Artikelen doorzoeken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="169"/>
+        <location filename="../app/desktop/main_window.cpp" line="171"/>
         <source>Status filter</source>
         <translation>Statusfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="170"/>
+        <location filename="../app/desktop/main_window.cpp" line="172"/>
         <source>All articles</source>
         <translation>Alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="171"/>
+        <location filename="../app/desktop/main_window.cpp" line="173"/>
         <source>Not started</source>
         <translation>Niet begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="172"/>
+        <location filename="../app/desktop/main_window.cpp" line="174"/>
         <source>In progress</source>
         <translation>Bezig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="173"/>
+        <location filename="../app/desktop/main_window.cpp" line="175"/>
         <source>Done</source>
         <translation>Klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="231"/>
+        <location filename="../app/desktop/main_window.cpp" line="233"/>
         <source>Mark the selected text as %1 (key %2)</source>
         <translation>De geselecteerde tekst markeren als %1 (toets %2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="242"/>
+        <location filename="../app/desktop/main_window.cpp" line="244"/>
         <source>Mark as done</source>
         <translation>Markeren als klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="243"/>
-        <source>Mark this article as done and open the next one (Ctrl+Return)</source>
-        <translation>Dit artikel markeren als klaar en het volgende openen (Ctrl+Return)</translation>
+        <location filename="../app/desktop/main_window.cpp" line="245"/>
+        <source>Mark this article as done and open the next one (%1)</source>
+        <translation>Dit artikel als klaar markeren en het volgende openen (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="258"/>
+        <location filename="../app/desktop/main_window.cpp" line="261"/>
         <source>Import articles…</source>
         <translation>Artikelen importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="327"/>
+        <location filename="../app/desktop/main_window.cpp" line="330"/>
         <source>&amp;Project</source>
         <translation>&amp;Project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="328"/>
+        <location filename="../app/desktop/main_window.cpp" line="331"/>
         <source>&amp;New project…</source>
         <translation>&amp;Nieuw project…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="329"/>
+        <location filename="../app/desktop/main_window.cpp" line="332"/>
         <source>&amp;Open…</source>
         <translation>&amp;Openen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="330"/>
+        <location filename="../app/desktop/main_window.cpp" line="333"/>
         <source>&amp;Import articles…</source>
         <translation>Artikelen &amp;importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="332"/>
+        <location filename="../app/desktop/main_window.cpp" line="335"/>
+        <source>Import a &amp;folder…</source>
+        <translation>Een &amp;map importeren…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="336"/>
+        <source>Import a folder</source>
+        <translation>Een map importeren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="342"/>
         <source>Open the &amp;sample project</source>
         <translation>&amp;Voorbeeldproject openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="334"/>
+        <location filename="../app/desktop/main_window.cpp" line="344"/>
         <source>&amp;Quit</source>
         <translation>&amp;Afsluiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="336"/>
+        <location filename="../app/desktop/main_window.cpp" line="346"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="337"/>
-        <location filename="../app/desktop/main_window.cpp" line="493"/>
+        <location filename="../app/desktop/main_window.cpp" line="347"/>
+        <location filename="../app/desktop/main_window.cpp" line="515"/>
         <source>&amp;Undo</source>
         <translation>&amp;Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="340"/>
-        <location filename="../app/desktop/main_window.cpp" line="496"/>
+        <location filename="../app/desktop/main_window.cpp" line="350"/>
+        <location filename="../app/desktop/main_window.cpp" line="518"/>
         <source>&amp;Redo</source>
         <translation>Opn&amp;ieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="344"/>
+        <location filename="../app/desktop/main_window.cpp" line="354"/>
         <source>&amp;Code</source>
         <translation>&amp;Coderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="348"/>
+        <location filename="../app/desktop/main_window.cpp" line="358"/>
         <source>Mark as %1	%2</source>
         <translation>Markeren als %1	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="352"/>
+        <location filename="../app/desktop/main_window.cpp" line="362"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel markeren als &amp;klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="354"/>
+        <location filename="../app/desktop/main_window.cpp" line="363"/>
         <source>&amp;Next article</source>
         <translation>&amp;Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="357"/>
+        <location filename="../app/desktop/main_window.cpp" line="365"/>
         <source>&amp;Find in texts</source>
         <translation>&amp;Zoeken in teksten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="358"/>
+        <location filename="../app/desktop/main_window.cpp" line="366"/>
         <source>&amp;Training feedback…</source>
         <translation>&amp;Trainingsfeedback…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="365"/>
+        <location filename="../app/desktop/main_window.cpp" line="373"/>
         <source>&amp;View</source>
         <translation>&amp;Weergave</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="366"/>
+        <location filename="../app/desktop/main_window.cpp" line="374"/>
+        <source>E&amp;xact selection (no snapping to words)</source>
+        <translation>E&amp;xacte selectie (niet uitlijnen op woorden)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="382"/>
+        <source>Exact selection: spans take the text as selected.</source>
+        <translation>Exacte selectie: fragmenten nemen de tekst zoals geselecteerd.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="383"/>
+        <source>Spans snap to whole words again.</source>
+        <translation>Fragmenten worden weer uitgelijnd op hele woorden.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="387"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Fragmenten van &amp;alle codeurs tonen (alleen coördinatoren)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="376"/>
+        <location filename="../app/desktop/main_window.cpp" line="397"/>
         <source>&amp;Lead</source>
         <translation>C&amp;oördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="377"/>
+        <location filename="../app/desktop/main_window.cpp" line="399"/>
         <source>&amp;Compare and adjudicate…</source>
         <translation>&amp;Vergelijken en beslissen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="379"/>
+        <location filename="../app/desktop/main_window.cpp" line="401"/>
         <source>&amp;Reliability…</source>
         <translation>&amp;Betrouwbaarheid…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="381"/>
+        <location filename="../app/desktop/main_window.cpp" line="402"/>
         <source>&amp;Frames…</source>
         <translation>&amp;Frames…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="382"/>
+        <location filename="../app/desktop/main_window.cpp" line="403"/>
         <source>Write the reliability &amp;report…</source>
         <translation>Betrouwbaarheids&amp;rapport schrijven…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="384"/>
+        <location filename="../app/desktop/main_window.cpp" line="405"/>
         <source>&amp;Study design…</source>
         <translation>&amp;Onderzoeksopzet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="385"/>
+        <location filename="../app/desktop/main_window.cpp" line="406"/>
         <source>C&amp;odebook…</source>
         <translation>C&amp;odeboek…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="386"/>
+        <location filename="../app/desktop/main_window.cpp" line="407"/>
         <source>&amp;Progress…</source>
         <translation>Voort&amp;gang…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="387"/>
+        <location filename="../app/desktop/main_window.cpp" line="408"/>
         <source>P&amp;eople…</source>
         <translation>P&amp;ersonen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="388"/>
+        <location filename="../app/desktop/main_window.cpp" line="409"/>
         <source>&amp;Hand out a coder copy…</source>
         <translation>Codeurs&amp;kopie uitdelen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="389"/>
+        <location filename="../app/desktop/main_window.cpp" line="410"/>
         <source>&amp;Merge returned coder copies…</source>
         <translation>Teruggekomen codeurskopieën &amp;samenvoegen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="391"/>
+        <location filename="../app/desktop/main_window.cpp" line="411"/>
+        <source>Merge co&amp;nflicts…</source>
+        <translation>Samenvoeg&amp;conflicten…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="413"/>
         <source>&amp;Extractor runs…</source>
         <translation>&amp;Extractorruns…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="399"/>
+        <location filename="../app/desktop/main_window.cpp" line="421"/>
         <source>&amp;Settings</source>
         <translation>&amp;Instellingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="400"/>
+        <location filename="../app/desktop/main_window.cpp" line="422"/>
         <source>&amp;Language</source>
         <translation>&amp;Taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="405"/>
+        <location filename="../app/desktop/main_window.cpp" line="427"/>
         <source>System language</source>
         <translation>Systeemtaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="416"/>
+        <location filename="../app/desktop/main_window.cpp" line="438"/>
         <source>&amp;Help</source>
         <translation>&amp;Help</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="418"/>
+        <location filename="../app/desktop/main_window.cpp" line="440"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="435"/>
+        <location filename="../app/desktop/main_window.cpp" line="457"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Het project heeft geen codeur ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="449"/>
+        <location filename="../app/desktop/main_window.cpp" line="471"/>
         <source>Nobody was chosen to code.</source>
         <translation>Er is niemand gekozen om te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="475"/>
+        <location filename="../app/desktop/main_window.cpp" line="497"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="476"/>
+        <location filename="../app/desktop/main_window.cpp" line="498"/>
         <source>Codebook</source>
         <translation>Codeboek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="493"/>
+        <location filename="../app/desktop/main_window.cpp" line="515"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Ongedaan maken: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="496"/>
+        <location filename="../app/desktop/main_window.cpp" line="518"/>
         <source>&amp;Redo %1</source>
         <translation>Opn&amp;ieuw: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="638"/>
+        <location filename="../app/desktop/main_window.cpp" line="660"/>
         <source>Every article in the list is done.</source>
         <translation>Alle artikelen in de lijst zijn klaar.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="660"/>
+        <location filename="../app/desktop/main_window.cpp" line="682"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n artikel bevat ‘%1’.</numerusform>
@@ -9205,166 +9797,121 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="666"/>
+        <location filename="../app/desktop/main_window.cpp" line="688"/>
         <source>New project</source>
         <translation>Nieuw project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="676"/>
+        <location filename="../app/desktop/main_window.cpp" line="698"/>
         <source>Cannot create project</source>
         <translation>Project kan niet worden aangemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="688"/>
+        <location filename="../app/desktop/main_window.cpp" line="710"/>
         <source>Import articles</source>
         <translation>Artikelen importeren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="689"/>
+        <location filename="../app/desktop/main_window.cpp" line="711"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikelen (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="725"/>
+        <location filename="../app/desktop/main_window.cpp" line="757"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Kies een artikel&lt;/h3&gt;&lt;p&gt;Kies links in de lijst een artikel om het te gaan coderen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="728"/>
+        <location filename="../app/desktop/main_window.cpp" line="760"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog geen artikelen&lt;/h3&gt;&lt;p&gt;Importeer de artikelen van het onderzoek: platte tekst, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- of Atom-feeds, NITF of NewsML-G2. Wijs ze daarna toe aan codeurs in Coördinator → Onderzoeksopzet.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="733"/>
+        <location filename="../app/desktop/main_window.cpp" line="765"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog niets te coderen&lt;/h3&gt;&lt;p&gt;In dit project zijn geen artikelen aan u toegewezen. Uw coördinator wijst ze toe; open daarna het project opnieuw, of open de codeurskopie die u wordt gestuurd.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="765"/>
+        <location filename="../app/desktop/main_window.cpp" line="797"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>De taal verandert wanneer Fourfold opnieuw wordt gestart.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="778"/>
+        <location filename="../app/desktop/main_window.cpp" line="810"/>
         <source>Not saved: %1. %2</source>
         <translation>Niet opgeslagen: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="779"/>
+        <location filename="../app/desktop/main_window.cpp" line="811"/>
         <source>&amp;Retry</source>
         <translation>&amp;Opnieuw proberen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="785"/>
+        <location filename="../app/desktop/main_window.cpp" line="817"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="795"/>
+        <location filename="../app/desktop/main_window.cpp" line="827"/>
         <source>No project open</source>
         <translation>Geen project geopend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="799"/>
+        <location filename="../app/desktop/main_window.cpp" line="831"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="799"/>
+        <location filename="../app/desktop/main_window.cpp" line="831"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="801"/>
+        <location filename="../app/desktop/main_window.cpp" line="833"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — alleen-lezen, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="803"/>
+        <location filename="../app/desktop/main_window.cpp" line="835"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — coderen als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="807"/>
+        <location filename="../app/desktop/main_window.cpp" line="839"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lezen als %1 · %2 · alleen-lezenbestand: er wordt niets opgeslagen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="810"/>
+        <location filename="../app/desktop/main_window.cpp" line="842"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Coderen als %1 · %2 · coördinator: alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="811"/>
+        <location filename="../app/desktop/main_window.cpp" line="843"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Coderen als %1 · %2 · blind: alleen je eigen fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="823"/>
-        <source>Mark the selected text as %1 (snapped to whole words; hold Alt for the exact selection); with a span selected: relabel it</source>
-        <translation>De geselecteerde tekst markeren als %1 (afgerond op hele woorden; houd Alt ingedrukt voor de exacte selectie); met een fragment geselecteerd: de functie ervan wijzigen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="827"/>
-        <source>Delete</source>
-        <translation>Delete</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="827"/>
-        <source>Delete the selected span</source>
-        <translation>Het geselecteerde fragment verwijderen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="829"/>
-        <source>Undo the last change</source>
-        <translation>De laatste wijziging ongedaan maken</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="830"/>
-        <source>Redo</source>
-        <translation>Opnieuw</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="831"/>
-        <source>Mark the article as done and open the next</source>
-        <translation>Het artikel markeren als klaar en het volgende openen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="832"/>
-        <source>Next article that is not done</source>
-        <translation>Volgend artikel dat nog niet klaar is</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="834"/>
-        <source>Search the texts</source>
-        <translation>Zoeken in de teksten</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="836"/>
+        <location filename="../app/desktop/main_window.cpp" line="853"/>
         <source>Keyboard shortcuts</source>
         <translation>Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="839"/>
-        <source>Span resizing keys are listed in the reading desk&apos;s tooltip.</source>
-        <translation>De toetsen om een fragment groter of kleiner te maken staan in de tooltip van het leesvenster.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/main_window.cpp" line="745"/>
+        <location filename="../app/desktop/main_window.cpp" line="777"/>
         <source>Open project</source>
         <translation>Project openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="666"/>
-        <location filename="../app/desktop/main_window.cpp" line="745"/>
+        <location filename="../app/desktop/main_window.cpp" line="688"/>
+        <location filename="../app/desktop/main_window.cpp" line="777"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-projecten (*.fourfold)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="135"/>
-        <location filename="../app/desktop/main_window.cpp" line="681"/>
-        <location filename="../app/desktop/main_window.cpp" line="749"/>
-        <location filename="../app/desktop/main_window.cpp" line="758"/>
+        <location filename="../app/desktop/main_window.cpp" line="137"/>
+        <location filename="../app/desktop/main_window.cpp" line="703"/>
+        <location filename="../app/desktop/main_window.cpp" line="781"/>
+        <location filename="../app/desktop/main_window.cpp" line="790"/>
         <source>Cannot open project</source>
         <translation>Project kan niet worden geopend</translation>
     </message>
@@ -9689,37 +10236,37 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <translation>Artikeltekst</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="588"/>
+        <location filename="../app/desktop/reading_view.cpp" line="598"/>
         <source>Mark as %1</source>
         <translation>Markeren als %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="589"/>
+        <location filename="../app/desktop/reading_view.cpp" line="599"/>
         <source>Change to %1</source>
         <translation>Wijzigen in %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="594"/>
+        <location filename="../app/desktop/reading_view.cpp" line="604"/>
         <source>Delete span</source>
         <translation>Fragment verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="620"/>
+        <location filename="../app/desktop/reading_view.cpp" line="630"/>
         <source>%1: “%2”</source>
         <translation>%1: ‘%2’</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="833"/>
-        <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Alt+Down and Alt+Up move between spans.</source>
+        <location filename="../app/desktop/reading_view.cpp" line="843"/>
+        <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Ctrl+Down and Ctrl+Up move between spans.</source>
         <translation>
-            <numerusform>%n fragment. Selecteer tekst en druk op 1 tot en met 4 om een framingfunctie te markeren; met Alt+Pijl-omlaag en Alt+Pijl-omhoog ga je van fragment naar fragment.</numerusform>
-            <numerusform>%n fragmenten. Selecteer tekst en druk op 1 tot en met 4 om een framingfunctie te markeren; met Alt+Pijl-omlaag en Alt+Pijl-omhoog ga je van fragment naar fragment.</numerusform>
+            <numerusform>%n fragment. Selecteer tekst en druk op 1 tot 4 om een framingfunctie te markeren; Ctrl+Omlaag en Ctrl+Omhoog gaan van fragment naar fragment.</numerusform>
+            <numerusform>%n fragmenten. Selecteer tekst en druk op 1 tot 4 om een framingfunctie te markeren; Ctrl+Omlaag en Ctrl+Omhoog gaan van fragment naar fragment.</numerusform>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="842"/>
-        <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Alt+Left/Right and Alt+Shift+Left/Right to resize.</source>
-        <translation>Geselecteerd fragment: %1, ‘%2’. Druk op 1 tot en met 4 om de functie te wijzigen, op Delete om het te verwijderen, en op Alt+Links/Rechts en Alt+Shift+Links/Rechts om het groter of kleiner te maken.</translation>
+        <location filename="../app/desktop/reading_view.cpp" line="852"/>
+        <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Ctrl+Left/Right and Ctrl+Shift+Left/Right to resize.</source>
+        <translation>Geselecteerd fragment: %1, ‘%2’. Druk op 1 tot 4 om de functie te wijzigen, Delete om te verwijderen, Ctrl+Links/Rechts en Ctrl+Shift+Links/Rechts om de grootte te wijzigen.</translation>
     </message>
 </context>
 <context>

@@ -131,3 +131,21 @@ TEST_CASE("Every translation keeps the placeholders of its source")
         CHECK(compared >= ts.messages);
     }
 }
+
+TEST_CASE("Every message sits under a context that is looked up at run time")
+{
+    // An empty context or a namespace ("fourfold") is what lupdate gives a tr() it cannot place
+    // (a free function, a type alias of a struct with Q_DECLARE_TR_FUNCTIONS): at run time the
+    // call asks another context and the translation is never found.
+    const QRegularExpression runTimeContext(
+        QStringLiteral("^(cli|main|([A-Za-z]\\w*::)*[A-Z]\\w*)$"));
+    const TsFile ts = readTsFile(QStringLiteral("de"));
+    QSet<QString> contexts;
+    for (auto it = ts.translations.cbegin(); it != ts.translations.cend(); ++it)
+        contexts.insert(it.key().first);
+    CHECK(contexts.size() > 50);
+    for (const QString &context : contexts) {
+        INFO("context \"" << context.toStdString() << "\"");
+        CHECK(runTimeContext.match(context).hasMatch());
+    }
+}
