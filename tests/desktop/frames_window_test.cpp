@@ -12,9 +12,13 @@
 #include "core/scoring/frame_input.h"
 #include "tests/support/test_support.h"
 
+#include <QAction>
 #include <QComboBox>
 #include <QFile>
 #include <QLabel>
+#include <QMenu>
+#include <QMenuBar>
+#include <QPointer>
 #include <QSignalSpy>
 #include <QTableWidget>
 #include <QTemporaryDir>
@@ -201,4 +205,36 @@ TEST_CASE("the Frames window tells what to do when a layer holds too few article
     CHECK(w.showsEmptyState());
     CHECK(w.emptyState()->text().contains(QStringLiteral("holds 0 article")));
     CHECK(w.emptyState()->text().contains(QStringLiteral("Compare and adjudicate")));
+}
+
+TEST_CASE("Lead menu Frames opens the window once and it closes while computing")
+{
+    SampleProject f;
+    MainWindow desk;
+    REQUIRE(
+        desk.openProject(f.path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));
+    QStringList entries;
+    for (QAction *a : desk.menuBar()->actions())
+        if (a->menu() && a->text().remove(QLatin1Char('&')) == QStringLiteral("Lead"))
+            for (QAction *entry : a->menu()->actions())
+                entries << entry->text().remove(QLatin1Char('&'));
+    CHECK(entries.contains(QStringLiteral("Frames…")));
+    desk.leadWindows()->openFrames();
+    QPointer<QWidget> window = desk.leadWindows()->frames();
+    REQUIRE(window);
+    CHECK(window->isVisible());
+    desk.leadWindows()->openFrames(); // asked again: the same window
+    CHECK(desk.leadWindows()->frames() == window.data());
+    // With a long bootstrap running, opening the project as a coder closes the window: its
+    // destructor cancels the worker and waits for it.
+    auto *frames = qobject_cast<FramesWindow *>(window.data());
+    FramesRequest request = frames->request();
+    request.layer = QStringLiteral("consensus");
+    request.bootstrap = 10000;
+    frames->setRequest(request);
+    frames->compute();
+    CHECK(frames->isRunning());
+    REQUIRE(desk.openProject(f.path, QStringLiteral("C02")));
+    CHECK(window.isNull());
+    CHECK(desk.leadWindows()->frames() == nullptr);
 }
