@@ -253,9 +253,10 @@ int runImport(const QStringList &arguments)
                         continue;
                     }
                     QStringList shown = f.articles.mid(0, 10);
-                    if (f.articles.size() > 10)
-                        shown << QCoreApplication::translate(
-                            "cli", "… %n more", nullptr, int(f.articles.size() - 10));
+                    // The count in a variable: lupdate 6.4 loops or skips on an expression.
+                    const int more = int(f.articles.size()) - 10;
+                    if (more > 0)
+                        shown << QCoreApplication::translate("cli", "… %n more", nullptr, more);
                     out(QCoreApplication::translate("cli", "  %1: %2 added (%3), %4 skipped")
                             .arg(f.path)
                             .arg(f.articles.size())
