@@ -3,6 +3,7 @@
 #include <QApplication>
 #include <QDialog>
 #include <QDialogButtonBox>
+#include <QDir>
 #include <QFileInfo>
 #include <QLabel>
 #include <QListWidget>
@@ -13,7 +14,8 @@
 
 namespace fourfold {
 
-ImportOutcome importWithProgress(Project &project, const QStringList &files, QWidget *parent)
+ImportOutcome importWithProgress(
+    Project &project, const QStringList &files, QWidget *parent, const ImportOptions &options)
 {
     ImportOutcome outcome;
     // In thousandths of each file's bytes: a JSON Lines or CSV file is imported as it is read,
@@ -30,8 +32,8 @@ ImportOutcome importWithProgress(Project &project, const QStringList &files, QWi
                                   .arg(i + 1)
                                   .arg(files.size()));
         progress.setValue(0);
-        auto report = project.importFile(
-            files[i], ImportOptions {}, [&](qint64 bytesRead, qint64 totalBytes) {
+        auto report =
+            project.importFile(files[i], options, [&](qint64 bytesRead, qint64 totalBytes) {
                 progress.setValue(totalBytes > 0
                         ? int(std::min(bytesRead, totalBytes) * steps / totalBytes)
                         : steps);
@@ -59,6 +61,20 @@ ImportOutcome importWithProgress(Project &project, const QStringList &files, QWi
                 "ImportDialog", "    line %1 (%2): skipped, %3")
                                  .arg(s.line)
                                  .arg(s.externalId, s.reason);
+        for (const NearCopyFound &n : report->nearCopies)
+            outcome.lines << QApplication::translate(
+                "ImportDialog", "    line %1 (%2): added, a near copy of \"%3\" (similarity %4)")
+                                 .arg(n.line)
+                                 .arg(n.externalId, n.otherExternalId)
+                                 .arg(n.similarity, 0, 'f', 2);
+        if (QFileInfo(files[i]).isDir())
+            for (const ImportedFile &f : report->files)
+                outcome.lines << (f.passedOver
+                        ? QApplication::translate("ImportDialog", "    %1: %2")
+                              .arg(QDir(files[i]).relativeFilePath(f.path), f.reason)
+                        : QApplication::translate("ImportDialog", "    %1: %n article(s) added",
+                            nullptr, int(f.articles.size()))
+                              .arg(QDir(files[i]).relativeFilePath(f.path)));
     }
     progress.setValue(progress.maximum());
     return outcome;

@@ -18,7 +18,9 @@ struct ImportOutcome {
 
 // Imports `files` into `project` one by one (each file whole or not at all), showing progress
 // over `parent`. Returns what happened; never throws up a dialog itself.
-ImportOutcome importWithProgress(Project &project, const QStringList &files, QWidget *parent);
+// `files` may hold folders (each imported with its subfolders as one, all or nothing).
+ImportOutcome importWithProgress(
+    Project &project, const QStringList &files, QWidget *parent, const ImportOptions &options = {});
 
 // Shows the report of an import in one non-blocking list.
 void showImportReport(const ImportOutcome &outcome, QWidget *parent);

@@ -9,6 +9,7 @@
 #include "app/desktop/frame_card.h"
 #include "app/desktop/function_style.h"
 #include "app/desktop/import_dialog.h"
+#include "app/desktop/import_options_dialog.h"
 #include "app/desktop/item_form.h"
 #include "app/desktop/lead_windows.h"
 #include "app/desktop/message_bar.h"
@@ -331,6 +332,13 @@ void MainWindow::buildMenus()
     m_import->setEnabled(false);
     project->addAction(tr("Open the &sample project"), this, &MainWindow::openSample);
     project->addSeparator();
+    QAction *importFolder = project->addAction(tr("Import a &folder…"), this, [this] {
+        const QString folder = QFileDialog::getExistingDirectory(this, tr("Import a folder"));
+        if (!folder.isEmpty())
+            importPaths(QStringList {folder});
+    });
+    importFolder->setEnabled(false);
+    connect(m_import, &QAction::enabledChanged, importFolder, &QAction::setEnabled);
     project->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
 
     QMenu *edit = menuBar()->addMenu(tr("&Edit"));
@@ -690,7 +698,17 @@ void MainWindow::importArticles()
            "*.newsml *.xml *.docx *.odt *.pdf *.epub)"));
     if (files.isEmpty())
         return;
-    const ImportOutcome outcome = importWithProgress(m_session->project(), files, this);
+    importPaths(files);
+}
+
+void MainWindow::importPaths(const QStringList &files)
+{
+    if (!m_session)
+        return;
+    const auto options = ImportOptionsDialog::ask(files, this);
+    if (!options)
+        return;
+    const ImportOutcome outcome = importWithProgress(m_session->project(), files, this, *options);
     refreshList();
     if (!m_article.isValid() && m_filter->rowCount() > 0)
         m_list->selectRow(0);

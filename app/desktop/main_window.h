@@ -84,6 +84,9 @@ private:
     void chooseProject();
     void createProject();
     void importArticles();
+    // Asks for the import's options (the split pattern, with a preview), imports `paths` (files or
+    // a folder) and shows the report.
+    void importPaths(const QStringList &paths);
     void openSample();
     void setLanguage(const QString &code);
     void showError(const QString &message);
