@@ -65,10 +65,10 @@ void printDraw(const Draw &d)
             .arg(d.articles.size())
             .arg(d.frameArticles)
             .arg(d.coders.join(QStringLiteral(", "))));
+    if (d.nearCopiesLeftOut)
+        out(CliText::tr("  near copies left out of the sampling frame"));
     if (!d.drawnAt.isEmpty())
-        if (d.nearCopiesLeftOut)
-            out(CliText::tr("  near copies left out of the sampling frame"));
-    out(CliText::tr("  drawn at %1").arg(d.drawnAt));
+        out(CliText::tr("  drawn at %1").arg(d.drawnAt));
     for (const DrawStratum &s : d.strata)
         out(CliText::tr("  stratum %1: %2 of %3")
                 .arg(s.key)
@@ -256,6 +256,9 @@ int runAssign(const QStringList &arguments)
             "With --draw: draw proportionally within outlet, language or topic (metadata key "
             "\"topic\")."),
         QStringLiteral("KEY"));
+    const QCommandLineOption leaveOutNearCopies(QStringLiteral("leave-out-near-copies"),
+        CliText::tr("With --draw: leave articles found to be near copies of older ones at import "
+                    "out of the sampling frame."));
     const QCommandLineOption seed(QStringLiteral("seed"),
         CliText::tr("Seed of the draw or of dealing the rest (default: a random seed, printed and "
                     "recorded)."),
@@ -270,12 +273,7 @@ int runAssign(const QStringList &arguments)
         QStringLiteral("P"), QStringLiteral("0.25"));
     const QCommandLineOption rest(QStringLiteral("rest"),
         CliText::tr(
-            "Deal every article without any assignment to --coders for production: single "
-            "or " const QCommandLineOption leaveOutNearCopies(
-                QStringLiteral("leave-out-near-copies"),
-                CliText::tr(
-                    "With --draw: leave articles found to be near copies of older ones at import "
-                    "out of the sampling frame."));
+            "Deal every article without any assignment to --coders for production: single or "
             "double coding."),
         QStringLiteral("MODE"));
     const QCommandLineOption phase(QStringLiteral("phase"),
@@ -408,6 +406,7 @@ int runAssign(const QStringList &arguments)
                     .arg(parser.value(rarest)));
         drawRequest.seed = seedValue;
         drawRequest.coders = coderList;
+        drawRequest.leaveOutNearCopies = parser.isSet(leaveOutNearCopies);
     } else if (parser.isSet(rest)) {
         const QString mode = parser.value(rest);
         if (mode == QStringLiteral("single"))
@@ -433,7 +432,6 @@ int runAssign(const QStringList &arguments)
                 kCommand, CliText::tr("unknown unit \"%1\".").arg(parser.value(unit)));
         trainingRequest.unit = *u;
     } else if (parser.isSet(effort)) {
-        drawRequest.leaveOutNearCopies = parser.isSet(leaveOutNearCopies);
         const QString v = parser.value(effort);
         if (v != QStringLiteral("on") && v != QStringLiteral("off"))
             return usageError(

@@ -435,6 +435,13 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
     for (const Assignment &a : *assignments)
         if (a.phase != Phase::Production)
             excluded.insert(a.article.value);
+    if (request.leaveOutNearCopies) {
+        auto nearCopies = NearCopies::list(project);
+        if (!nearCopies)
+            return std::unexpected(nearCopies.error());
+        for (const store::NearCopyRow &row : *nearCopies)
+            excluded.insert(row.article.value);
+    }
     std::vector<store::FrameArticle> frame;
     std::ranges::copy_if(names->articles, std::back_inserter(frame),
         [&](const store::FrameArticle &a) { return !excluded.contains(a.id.value); });
@@ -442,15 +449,9 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
 
     int size = 0;
     if (request.size)
-        if (request.leaveOutNearCopies) {
-            auto nearCopies = NearCopies::list(project);
-            if (!nearCopies)
-                return std::unexpected(nearCopies.error());
-            for (const store::NearCopyRow &row : *nearCopies)
-                excluded.insert(row.article.value);
-        }
-    size = *request.size;
-    else size = int(std::ceil(*request.fraction * frameSize - 1e-9));
+        size = *request.size;
+    else
+        size = int(std::ceil(*request.fraction * frameSize - 1e-9));
     if (size < 1 || size > frameSize)
         return fail(ErrorCode::InvalidArgument,
             StudyDesignText::tr(
@@ -464,6 +465,7 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
     draw.stratify = request.stratify;
     draw.seed = request.seed;
     draw.coders = request.coders;
+    draw.nearCopiesLeftOut = request.leaveOutNearCopies;
     draw.frameArticles = frameSize;
 
     std::mt19937_64 engine(request.seed);
@@ -472,7 +474,6 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
         std::vector<std::size_t> order(frame.size());
         for (std::size_t i = 0; i < order.size(); ++i)
             order[i] = i;
-        draw.nearCopiesLeftOut = request.leaveOutNearCopies;
         shuffle(order, engine);
         drawn.assign(order.begin(), order.begin() + size);
     } else {
@@ -620,6 +621,7 @@ QJsonObject StudyDesign::drawJson(const Draw &draw)
         {QStringLiteral("seed"), QString::number(draw.seed)},
         {QStringLiteral("coders"), QJsonArray::fromStringList(draw.coders)},
         {QStringLiteral("frame_articles"), draw.frameArticles},
+        {QStringLiteral("near_copies_left_out"), draw.nearCopiesLeftOut},
         {QStringLiteral("articles"), QJsonArray::fromStringList(draw.articles)},
         {QStringLiteral("strata"), strata},
         {QStringLiteral("advice"),
@@ -629,7 +631,6 @@ QJsonObject StudyDesign::drawJson(const Draw &draw)
                 {QStringLiteral("minimum_values"), a.minimumValues},
                 {QStringLiteral("article_values"), a.articleValues},
                 {QStringLiteral("paragraph_values"), a.paragraphValues},
-                {QStringLiteral("near_copies_left_out"), draw.nearCopiesLeftOut},
                 {QStringLiteral("sentence_values"), a.sentenceValues},
                 {QStringLiteral("sufficient_units"),
                     QJsonArray::fromStringList(a.sufficientUnits)}}},
@@ -669,6 +670,8 @@ Result<Draw> StudyDesign::drawFromJson(const QJsonObject &json)
         return bad(StudyDesignText::tr("no valid seed"));
     d.coders = strings(json.value(QStringLiteral("coders")));
     d.frameArticles = json.value(QStringLiteral("frame_articles")).toInt();
+    // Absent in records written before near copies were found: nothing was left out then.
+    d.nearCopiesLeftOut = json.value(QStringLiteral("near_copies_left_out")).toBool(false);
     d.articles = strings(json.value(QStringLiteral("articles")));
     for (const QJsonValue &s : json.value(QStringLiteral("strata")).toArray()) {
         const QJsonObject o = s.toObject();
@@ -679,8 +682,6 @@ Result<Draw> StudyDesign::drawFromJson(const QJsonObject &json)
     d.advice.alphaMin = a.value(QStringLiteral("alpha_min")).toDouble();
     d.advice.significance = a.value(QStringLiteral("significance")).toDouble();
     d.advice.rarestProportion = a.value(QStringLiteral("rarest_proportion")).toDouble();
-    // Absent in records written before near copies were found: nothing was left out then.
-    d.nearCopiesLeftOut = json.value(QStringLiteral("near_copies_left_out")).toBool(false);
     d.advice.minimumValues = a.value(QStringLiteral("minimum_values")).toInt();
     d.advice.articleValues = a.value(QStringLiteral("article_values")).toInteger();
     d.advice.paragraphValues = a.value(QStringLiteral("paragraph_values")).toInteger();
