@@ -3,6 +3,7 @@
 #include "app/desktop/codebook/codebook_editor.h"
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
+#include "app/desktop/conflicts/conflicts_window.h"
 #include "app/desktop/frames/frames_window.h"
 #include "app/desktop/message_bar.h"
 #include "app/desktop/people/people_window.h"
@@ -48,7 +49,7 @@ void LeadWindows::closeAll()
 {
     // Deleted at once, not later: each window holds a reference to the session's project.
     for (QPointer<QWidget> *w : {&m_comparison, &m_reliability, &m_studyDesign, &m_progress,
-             &m_extractors, &m_people, &m_codebook, &m_frames})
+             &m_extractors, &m_people, &m_codebook, &m_frames, &m_conflicts})
         delete w->data();
 }
 
@@ -158,6 +159,20 @@ void LeadWindows::openFrames()
         static_cast<FramesWindow *>(m_frames.data())->compute();
 }
 
+void LeadWindows::openConflicts()
+{
+    if (!m_session)
+        return;
+    if (!m_conflicts) {
+        auto *w = new ConflictsWindow(m_session);
+        connect(m_session, &QObject::destroyed, w, &QObject::deleteLater);
+        m_conflicts = w;
+    } else if (auto *w = qobject_cast<ConflictsWindow *>(m_conflicts.data())) {
+        w->reload();
+    }
+    raise(m_conflicts);
+}
+
 void LeadWindows::writeReport()
 {
     if (!m_session)
@@ -257,12 +272,16 @@ void LeadWindows::mergeCopies()
     }
     const QString summary = conflicts > 0
         ? tr("Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits "
-             "for you to decide (fourfold-cli merge PROJECT --conflicts lists them).",
+             "for you to decide (Lead → Merge conflicts…).",
             nullptr, int(reports->size()))
               .arg(conflicts)
         : tr("Merged %n copy(ies).", nullptr, int(reports->size()));
     m_messages->showMessage(conflicts > 0 ? MessageBar::Kind::Warning : MessageBar::Kind::Success,
-        summary, {}, lines.join(QLatin1Char('\n')));
+        summary,
+        conflicts > 0 ? std::vector<MessageBar::Action> {{tr("&Decide conflicts"),
+            [this] { openConflicts(); }}}
+                      : std::vector<MessageBar::Action> {},
+        lines.join(QLatin1Char('\n')));
     emit projectChanged();
 }
 

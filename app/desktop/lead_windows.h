@@ -40,6 +40,7 @@ public:
     void openCodebook();
     // Lead → Frames…: computes the gold layer's frames when first opened.
     void openFrames();
+    void openConflicts();
     // Asks for a file name and writes the reliability report (HTML or PDF by its suffix).
     void writeReport();
     // Asks for a coder and a file name and writes that coder's copy.
@@ -56,6 +57,7 @@ public:
     QWidget *people() const { return m_people; }
     QWidget *codebook() const { return m_codebook; }
     QWidget *frames() const { return m_frames; }
+    QWidget *conflicts() const { return m_conflicts; }
 
 signals:
     // Assignments or codings changed outside the desk (study design, merge): reload the list.
@@ -77,6 +79,7 @@ private:
     QPointer<QWidget> m_people;
     QPointer<QWidget> m_codebook;
     QPointer<QWidget> m_frames;
+    QPointer<QWidget> m_conflicts;
 };
 
 } // namespace fourfold

@@ -1,5 +1,6 @@
 #include "core/project/coder_copies.h"
 
+#include "core/project/conflict_edits.h"
 #include "core/project/copy_validation.h"
 #include "core/project/project.h"
 #include "core/store/coder_table.h"
@@ -697,31 +698,11 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
                 .arg(uuid)
                 .arg(matches.size()));
     const store::MergeConflict &c = matches.front();
-    store::PortableRow theirs {c.objectType, c.objectUuid, c.theirs, 0};
 
     auto sp = Savepoint::begin(project.db());
     if (!sp)
         return std::unexpected(sp.error());
-    auto base = store::copyBase(project.db(), c.copyUuid);
-    if (!base)
-        return std::unexpected(base.error());
-    const auto seen = base->constFind(theirs.key());
-    if (keep == QLatin1String("theirs")) {
-        if (theirs.type == QLatin1String("judgement") && !theirs.isDeleted()) {
-            auto other = store::otherLiveJudgement(project.db(), theirs);
-            if (!other)
-                return std::unexpected(other.error());
-            if (*other)
-                FOURFOLD_TRY_STATUS(store::tombstoneJudgement(project.db(), **other));
-        }
-        FOURFOLD_TRY_STATUS(store::writePortableRow(project.db(), theirs));
-    }
-    // Either way the losing version is now settled: merging its copy again changes nothing.
-    // (Merges record it as the copy's base already; conflicts from older merges did not.)
-    if (!c.copyUuid.isEmpty() && seen != base->cend() && seen->digest != theirs.digest())
-        FOURFOLD_TRY_STATUS(store::setCopyBase(
-            project.db(), c.copyUuid, theirs, store::BaseEntry {theirs.digest(), seen->seconds}));
-    FOURFOLD_TRY_STATUS(store::setConflictResolution(project.db(), c.uuid, keep));
+    FOURFOLD_TRY_STATUS(decideConflict(project.db(), c, keep == QLatin1String("theirs")));
     FOURFOLD_TRY_STATUS(store::appendEvent(project.db(), CoderId {},
         QStringLiteral("conflict.resolve"), c.objectType, c.objectUuid,
         QJsonObject {{QStringLiteral("keep"), keep}, {QStringLiteral("conflict"), c.uuid}}));

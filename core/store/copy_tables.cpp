@@ -665,6 +665,57 @@ Status setConflictResolution(Database &db, const QString &uuid, const QString &r
     return {};
 }
 
+Status reopenConflict(Database &db, const QString &uuid)
+{
+    auto stmt = db.prepare(QStringLiteral("UPDATE merge_conflict SET resolution = '', "
+                                          "resolved_at = '' WHERE uuid = ?1 AND resolution <> ''"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, uuid);
+    FOURFOLD_TRY_STATUS(stmt->run());
+    if (db.changes() != 1)
+        return fail(
+            ErrorCode::NotFound, CopyTablesText::tr("There is no decided conflict %1.").arg(uuid));
+    return {};
+}
+
+Result<std::optional<PortableRow>> portableRowOf(
+    const Database &db, const QString &type, const QString &uuid)
+{
+    QString sql;
+    if (type == QLatin1String("annotation"))
+        sql = QStringLiteral("SELECT c.uuid FROM annotation o JOIN coder c ON c.id = o.coder_id "
+                             "WHERE o.uuid = ?1");
+    else if (type == QLatin1String("judgement"))
+        sql = QStringLiteral("SELECT c.uuid FROM judgement o JOIN coder c ON c.id = o.coder_id "
+                             "WHERE o.uuid = ?1");
+    else if (type == QLatin1String("assignment"))
+        sql = QStringLiteral("SELECT c.uuid FROM assignment o JOIN coder c ON c.id = o.coder_id "
+                             "WHERE o.uuid = ?1");
+    else if (type == QLatin1String("link"))
+        sql = QStringLiteral("SELECT c.uuid FROM annotation_link l JOIN annotation s "
+                             "ON s.id = l.source_id JOIN coder c ON c.id = s.coder_id "
+                             "WHERE l.uuid = ?1");
+    else
+        return std::optional<PortableRow> {};
+    auto stmt = db.prepare(sql);
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, uuid);
+    auto found = stmt->step();
+    if (!found)
+        return std::unexpected(found.error());
+    if (!*found)
+        return std::optional<PortableRow> {};
+    auto rows = portableRows(db, stmt->columnText(0));
+    if (!rows)
+        return std::unexpected(rows.error());
+    for (PortableRow &row : *rows)
+        if (row.type == type && row.uuid == uuid)
+            return std::optional<PortableRow> {std::move(row)};
+    return std::optional<PortableRow> {};
+}
+
 Result<std::vector<MergeConflict>> openConflictsOf(
     const Database &db, const QString &objectType, const QString &objectUuid)
 {

@@ -147,6 +147,12 @@ struct MergeConflict {
 Result<std::vector<MergeConflict>> mergeConflicts(const Database &db, bool all);
 // Marks the conflict `uuid` resolved with "mine" or "theirs" (now). NotFound if not open.
 Status setConflictResolution(Database &db, const QString &uuid, const QString &resolution);
+// Opens the resolved conflict `uuid` again (the undo of a decision). NotFound if not resolved.
+Status reopenConflict(Database &db, const QString &uuid);
+// The object `type`/`uuid` of any coder in portable form (tombstones included); none if no such
+// object. Reads the rows of the coder it belongs to.
+Result<std::optional<PortableRow>> portableRowOf(
+    const Database &db, const QString &type, const QString &uuid);
 // The open conflicts of the object `objectType`/`objectUuid` (of any copy), by detection.
 Result<std::vector<MergeConflict>> openConflictsOf(
     const Database &db, const QString &objectType, const QString &objectUuid);

@@ -341,11 +341,14 @@ TEST_CASE("An upgraded version-6 project asks its lead to set a passphrase", "[p
         REQUIRE(p->addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead));
     }
     {
-        // Back to version 6 as an older Fourfold left it: without the new columns.
+        // Back to version 6 as an older Fourfold left it: without the columns of version 7
+        // and the tables of version 8.
         auto db = Database::open(path, Database::OpenMode::ReadWrite);
         REQUIRE(db);
         REQUIRE(db->exec(QStringLiteral("ALTER TABLE coder DROP COLUMN passphrase_hash;"
                                         "ALTER TABLE coder DROP COLUMN disabled;"
+                                        "DROP TABLE frame_member; DROP TABLE frame_cluster;"
+                                        "DROP TABLE frame_analysis; DROP TABLE article_near_copy;"
                                         "PRAGMA user_version = 6;")));
     }
     auto p = Project::open(path);
