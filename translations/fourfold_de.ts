@@ -4067,21 +4067,31 @@
     </message>
     <message>
         <location filename="../app/desktop/shortcut_table.cpp" line="80"/>
+        <source>Start a new project</source>
+        <translation>Ein neues Projekt beginnen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="81"/>
+        <source>Open a project</source>
+        <translation>Ein Projekt öffnen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="82"/>
         <source>Search the texts</source>
         <translation>In den Texten suchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="82"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="84"/>
         <source>Compare coders and adjudicate (leads)</source>
         <translation>Codierende vergleichen und entscheiden (Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="83"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="85"/>
         <source>Reliability (leads)</source>
         <translation>Reliabilität (Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="84"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="86"/>
         <source>This list of keys</source>
         <translation>Diese Liste der Tasten</translation>
     </message>

@@ -4067,21 +4067,31 @@
     </message>
     <message>
         <location filename="../app/desktop/shortcut_table.cpp" line="80"/>
+        <source>Start a new project</source>
+        <translation>Een nieuw project beginnen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="81"/>
+        <source>Open a project</source>
+        <translation>Een project openen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="82"/>
         <source>Search the texts</source>
         <translation>In de teksten zoeken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="82"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="84"/>
         <source>Compare coders and adjudicate (leads)</source>
         <translation>Codeurs vergelijken en beslissen (coördinatoren)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="83"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="85"/>
         <source>Reliability (leads)</source>
         <translation>Betrouwbaarheid (coördinatoren)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="84"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="86"/>
         <source>This list of keys</source>
         <translation>Deze lijst met toetsen</translation>
     </message>

@@ -14,6 +14,7 @@
 #include "app/desktop/lead_windows.h"
 #include "app/desktop/message_bar.h"
 #include "app/desktop/reading_view.h"
+#include "app/desktop/shortcut_table.h"
 #include "app/desktop/span_editor.h"
 #include "app/desktop/study/training_feedback_dialog.h"
 #include "app/desktop/window_placement.h"
@@ -241,7 +242,8 @@ QWidget *MainWindow::buildDesk()
     }
     bar->addStretch();
     auto *done = new QPushButton(tr("Mark as done"), middle);
-    done->setToolTip(tr("Mark this article as done and open the next one (Ctrl+Return)"));
+    done->setToolTip(tr("Mark this article as done and open the next one (%1)")
+                         .arg(DeskKeys::markDone().toString(QKeySequence::NativeText)));
     connect(done, &QPushButton::clicked, this, &MainWindow::markDone);
     bar->addWidget(done);
     middleLayout->addLayout(bar);
@@ -330,8 +332,6 @@ void MainWindow::buildMenus()
     project->addAction(tr("&Open…"), QKeySequence::Open, this, &MainWindow::chooseProject);
     m_import = project->addAction(tr("&Import articles…"), this, &MainWindow::importArticles);
     m_import->setEnabled(false);
-    project->addAction(tr("Open the &sample project"), this, &MainWindow::openSample);
-    project->addSeparator();
     QAction *importFolder = project->addAction(tr("Import a &folder…"), this, [this] {
         const QString folder = QFileDialog::getExistingDirectory(this, tr("Import a folder"));
         if (!folder.isEmpty())
@@ -339,6 +339,8 @@ void MainWindow::buildMenus()
     });
     importFolder->setEnabled(false);
     connect(m_import, &QAction::enabledChanged, importFolder, &QAction::setEnabled);
+    project->addAction(tr("Open the &sample project"), this, &MainWindow::openSample);
+    project->addSeparator();
     project->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
 
     QMenu *edit = menuBar()->addMenu(tr("&Edit"));
@@ -357,10 +359,8 @@ void MainWindow::buildMenus()
         connect(a, &QAction::triggered, this, [this, f] { m_reading->requestFunction(f); });
     }
     code->addSeparator();
-    code->addAction(tr("Mark article as &done"), QKeySequence(Qt::CTRL | Qt::Key_Return), this,
-        &MainWindow::markDone);
-    code->addAction(tr("&Next article"), QKeySequence(Qt::CTRL | Qt::Key_PageDown), this,
-        &MainWindow::nextArticle);
+    code->addAction(tr("Mark article as &done"), DeskKeys::markDone(), this, &MainWindow::markDone);
+    code->addAction(tr("&Next article"), DeskKeys::nextArticle(), this, &MainWindow::nextArticle);
     code->addAction(
         tr("&Find in texts"), QKeySequence::Find, this, [this] { m_search->setFocus(); });
     code->addAction(tr("&Training feedback…"), this, [this] {
@@ -371,6 +371,19 @@ void MainWindow::buildMenus()
     });
 
     QMenu *view = menuBar()->addMenu(tr("&View"));
+    QAction *exact = view->addAction(tr("E&xact selection (no snapping to words)"));
+    exact->setCheckable(true);
+    exact->setShortcut(DeskKeys::exactSelection());
+    exact->setChecked(QSettings().value(QStringLiteral("desk/exactSelection"), false).toBool());
+    m_reading->setExactSelection(exact->isChecked());
+    connect(exact, &QAction::toggled, this, [this](bool on) {
+        m_reading->setExactSelection(on);
+        QSettings().setValue(QStringLiteral("desk/exactSelection"), on);
+        statusBar()->showMessage(on ? tr("Exact selection: spans take the text as selected.")
+                                    : tr("Spans snap to whole words again."),
+            4000);
+    });
+    view->addSeparator();
     m_showAll = view->addAction(tr("Show &every coder's spans (leads only)"));
     m_showAll->setCheckable(true);
     m_showAll->setEnabled(false);
@@ -382,10 +395,10 @@ void MainWindow::buildMenus()
 
     // The lead's work beside the desk; the menu is there for leads only.
     m_leadMenu = menuBar()->addMenu(tr("&Lead"));
-    m_leadMenu->addAction(tr("&Compare and adjudicate…"), QKeySequence(Qt::CTRL | Qt::Key_K),
-        m_lead, &LeadWindows::openComparison);
-    m_leadMenu->addAction(tr("&Reliability…"), QKeySequence(Qt::CTRL | Qt::Key_R), m_lead,
-        &LeadWindows::openReliability);
+    m_leadMenu->addAction(
+        tr("&Compare and adjudicate…"), DeskKeys::compare(), m_lead, &LeadWindows::openComparison);
+    m_leadMenu->addAction(
+        tr("&Reliability…"), DeskKeys::reliability(), m_lead, &LeadWindows::openReliability);
     m_leadMenu->addAction(tr("&Frames…"), m_lead, &LeadWindows::openFrames);
     m_leadMenu->addAction(tr("Write the reliability &report…"), m_lead, &LeadWindows::writeReport);
     m_leadMenu->addSeparator();
@@ -395,6 +408,7 @@ void MainWindow::buildMenus()
     m_leadMenu->addAction(tr("P&eople…"), m_lead, &LeadWindows::openPeople);
     m_leadMenu->addAction(tr("&Hand out a coder copy…"), m_lead, &LeadWindows::handOutCopy);
     m_leadMenu->addAction(tr("&Merge returned coder copies…"), m_lead, &LeadWindows::mergeCopies);
+    m_leadMenu->addAction(tr("Merge co&nflicts…"), m_lead, &LeadWindows::openConflicts);
     m_leadMenu->addSeparator();
     m_leadMenu->addAction(tr("&Extractor runs…"), m_lead, &LeadWindows::openExtractors);
     m_leadMenu->menuAction()->setVisible(false);
@@ -423,7 +437,7 @@ void MainWindow::buildMenus()
 
     QMenu *help = menuBar()->addMenu(tr("&Help"));
     help->addAction(
-        tr("&Keyboard shortcuts"), QKeySequence::HelpContents, this, &MainWindow::showShortcuts);
+        tr("&Keyboard shortcuts"), DeskKeys::shortcuts(), this, &MainWindow::showShortcuts);
 }
 
 Status MainWindow::openProject(
@@ -832,29 +846,13 @@ void MainWindow::updateTitle()
 void MainWindow::showShortcuts()
 {
     QString rows;
-    auto row = [&rows](const QString &keys, const QString &what) {
+    for (const ShortcutRow &r : deskShortcuts())
         rows += QStringLiteral("<tr><td style='padding-right:18px'><b>%1</b></td><td>%2</td></tr>")
-                    .arg(keys.toHtmlEscaped(), what.toHtmlEscaped());
-    };
-    for (FramingFunction f : kFramingFunctions)
-        row(QString::number(functionShortcutKey(f)),
-            tr("Mark the selected text as %1 (snapped to whole words; hold Alt for the exact "
-               "selection); "
-               "with a span selected: relabel it")
-                .arg(functionName(f)));
-    row(tr("Delete"), tr("Delete the selected span"));
-    row(QKeySequence(QKeySequence::Undo).toString(QKeySequence::NativeText),
-        tr("Undo the last change"));
-    row(QKeySequence(QKeySequence::Redo).toString(QKeySequence::NativeText), tr("Redo"));
-    row(QStringLiteral("Ctrl+Return"), tr("Mark the article as done and open the next"));
-    row(QStringLiteral("Ctrl+PgDown"), tr("Next article that is not done"));
-    row(QKeySequence(QKeySequence::Find).toString(QKeySequence::NativeText),
-        tr("Search the texts"));
+                    .arg(r.keys.toHtmlEscaped(), r.what.toHtmlEscaped());
     QMessageBox box(this);
     box.setWindowTitle(tr("Keyboard shortcuts"));
     box.setTextFormat(Qt::RichText);
-    box.setText(QStringLiteral("<table>%1</table><p>%2</p>")
-                    .arg(rows, tr("Span resizing keys are listed in the reading desk's tooltip.")));
+    box.setText(QStringLiteral("<table>%1</table>").arg(rows));
     box.exec();
 }
 

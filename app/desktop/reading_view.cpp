@@ -341,19 +341,28 @@ void ReadingView::clearTextSelection()
 
 // --- keyboard --------------------------------------------------------------------------------
 
+bool ReadingView::exactDrag(Qt::KeyboardModifiers mods) const
+{
+    return m_exactSelection || (mods & (Qt::AltModifier | Qt::ControlModifier));
+}
+
 bool ReadingView::wantsKey(const QKeyEvent *e) const
 {
     const Qt::KeyboardModifiers mods = e->modifiers() & ~Qt::KeypadModifier;
     const int key = e->key();
     const bool hasSpan = m_selected.isValid();
-    if (key >= Qt::Key_1 && key <= Qt::Key_4 && !(mods & (Qt::ControlModifier | Qt::MetaModifier)))
+    // Ctrl does what Alt does: window managers take some Alt keys before the program sees them.
+    const bool step = mods == Qt::AltModifier || mods == Qt::ControlModifier;
+    const bool stepShift = mods == (Qt::AltModifier | Qt::ShiftModifier)
+        || mods == (Qt::ControlModifier | Qt::ShiftModifier);
+    if (key >= Qt::Key_1 && key <= Qt::Key_4 && !(mods & Qt::MetaModifier)
+        && !(mods & Qt::AltModifier && mods & Qt::ControlModifier))
         return hasSpan || textCursor().hasSelection();
     if ((key == Qt::Key_Delete || key == Qt::Key_Backspace) && mods == Qt::NoModifier)
         return hasSpan;
-    if ((key == Qt::Key_Up || key == Qt::Key_Down) && mods == Qt::AltModifier)
+    if ((key == Qt::Key_Up || key == Qt::Key_Down) && step)
         return !m_lanes.spans().empty();
-    if ((key == Qt::Key_Left || key == Qt::Key_Right)
-        && (mods == Qt::AltModifier || mods == (Qt::AltModifier | Qt::ShiftModifier)))
+    if ((key == Qt::Key_Left || key == Qt::Key_Right) && (step || stepShift))
         return hasSpan;
     if (key == Qt::Key_Escape && mods == Qt::NoModifier)
         return hasSpan || textCursor().hasSelection() || m_drag.active;
@@ -382,7 +391,8 @@ void ReadingView::keyPressEvent(QKeyEvent *e)
     case Qt::Key_2:
     case Qt::Key_3:
     case Qt::Key_4:
-        applyFunction(FramingFunction(e->key() - Qt::Key_1), mods & Qt::AltModifier);
+        applyFunction(FramingFunction(e->key() - Qt::Key_1),
+            m_exactSelection || (mods & (Qt::AltModifier | Qt::ControlModifier)));
         break;
     case Qt::Key_Delete:
     case Qt::Key_Backspace:
@@ -475,7 +485,7 @@ void ReadingView::mouseMoveEvent(QMouseEvent *e)
             QScrollBar *bar = verticalScrollBar();
             bar->setValue(bar->value() + (pos.y() < 0 ? pos.y() : pos.y() - viewport()->height()));
         }
-        updateDragPreview(pos, e->modifiers() & Qt::AltModifier);
+        updateDragPreview(pos, exactDrag(e->modifiers()));
         e->accept();
         return;
     }
@@ -499,7 +509,7 @@ void ReadingView::mouseReleaseEvent(QMouseEvent *e)
 {
     const QPoint pos = e->position().toPoint();
     if (m_drag.active && e->button() == Qt::LeftButton) {
-        updateDragPreview(pos, e->modifiers() & Qt::AltModifier);
+        updateDragPreview(pos, exactDrag(e->modifiers()));
         const Drag drag = m_drag;
         m_drag = {};
         updateEmphasis();
@@ -831,7 +841,7 @@ void ReadingView::updateAccessibleDescription()
     const LaneSpan *span = spanById(m_selected);
     if (!span) {
         setAccessibleDescription(tr("%n span(s). Select text and press 1 to 4 to mark a framing "
-                                    "function; Alt+Down and Alt+Up move between spans.",
+                                    "function; Ctrl+Down and Ctrl+Up move between spans.",
             nullptr, int(m_lanes.spans().size())));
         return;
     }
@@ -840,7 +850,7 @@ void ReadingView::updateAccessibleDescription()
         quote = quote.left(79) + QChar(0x2026);
     setAccessibleDescription(
         tr("Selected span: %1, \u201C%2\u201D. Press 1 to 4 to relabel, Delete "
-           "to delete, Alt+Left/Right and Alt+Shift+Left/Right to resize.")
+           "to delete, Ctrl+Left/Right and Ctrl+Shift+Left/Right to resize.")
             .arg(functionName(span->function), quote));
 }
 

@@ -9,21 +9,23 @@
 // OffsetMap only (design.md §3), and holds those as Utf16Range, a type of its own, so that a
 // UTF-16 position given where a code point is meant does not compile.
 //
-// Keys (while the view has focus; they take precedence over window shortcuts):
+// Keys (while the view has focus; they take precedence over window shortcuts). Ctrl and Alt are
+// interchangeable below: common Linux window managers take Alt+drag and some Alt+Shift+arrows
+// for themselves, so every Alt key also works with Ctrl (the list F1 shows: shortcut_table.h).
 //   1-4                with a text selection: create a span of that function, snapped to whole
-//                      words (UAX #29 word boundaries); Alt+1-4: exactly the selection, snapped
-//                      only to whole grapheme clusters. With no text selection and a span
-//                      selected: relabel that span.
+//                      words (UAX #29 word boundaries); Ctrl+1-4: exactly the selection, snapped
+//                      only to whole grapheme clusters (also plain 1-4 while exact selection is
+//                      on). With no text selection and a span selected: relabel that span.
 //   Delete, Backspace  delete the selected span.
-//   Alt+Down, Alt+Up   select the next / previous span (from the caret when none is selected).
-//   Alt+Left/Right     move the selected span's start one word earlier / later.
-//   Alt+Shift+Left/Right  move the selected span's end one word earlier / later.
+//   Ctrl+Down, Ctrl+Up select the next / previous span (from the caret when none is selected).
+//   Ctrl+Left/Right    move the selected span's start one word earlier / later.
+//   Ctrl+Shift+Left/Right  move the selected span's end one word earlier / later.
 //                      (Mirrored where the text at that end runs right to left, as the caret is.)
 //   Escape             clear the span selection, else the text selection.
 //   Arrows, Shift+arrows, Ctrl+A, Ctrl+C: caret, selection and copy, as in any text view.
 // Mouse: drag to select text; click a span's text, lane or badge to select it (clicking again on
 // nested spans cycles through them, shortest first); drag a handle of the selected span to move
-// that end (snapped to words, exact with Alt held at release).
+// that end (snapped to words; exact with Ctrl held at release, or while exact selection is on).
 //
 // Overlapping spans: each function has its own lane, so spans of different functions never
 // cover each other. Where two or more spans of the SAME function overlap, their lane is drawn as
@@ -115,6 +117,10 @@ public slots:
     // Same as pressing the function's key (1-4) without Alt: create over the word-snapped text
     // selection, else relabel the selected span.
     void requestFunction(FramingFunction f);
+    // Exact selection: while on, new spans and handle drags take the text as selected instead of
+    // snapping to whole words (the same as holding Ctrl).
+    void setExactSelection(bool on) { m_exactSelection = on; }
+    bool exactSelection() const { return m_exactSelection; }
     // Alt+Down / Alt+Up: select the next / previous span in reading order and scroll to it.
     void selectNextSpan();
     void selectPreviousSpan();
@@ -162,6 +168,9 @@ private:
     void selectSpanByUser(AnnotationId id);
     void selectFromHit(const LaneHit &hit);
     void applyFunction(FramingFunction f, bool exact);
+    // A handle drag ends exactly where released (no word snap): Ctrl or Alt held, or exact
+    // selection on.
+    bool exactDrag(Qt::KeyboardModifiers mods) const;
     void resizeByWord(bool moveStart, int direction);
     void clearTextSelection();
     bool wantsKey(const QKeyEvent *e) const;
@@ -188,6 +197,7 @@ private:
     bool m_pressOnText = false;
     AnnotationId m_pendingSpanClick;
     bool m_changingSelection = false;
+    bool m_exactSelection = false;
 };
 
 } // namespace fourfold

@@ -15,6 +15,7 @@
 #include <QAction>
 #include <QApplication>
 #include <QFile>
+#include <QJsonObject>
 #include <QLineEdit>
 #include <QSet>
 #include <QTest>
@@ -254,6 +255,25 @@ TEST_CASE("a coder cannot adjudicate: the window says so and offers nothing")
     CHECK(w.currentPassage() == -1);
 }
 
+TEST_CASE("an empty queue says why and what fills it")
+{
+    QTemporaryDir dir;
+    auto p = Project::create(dir.filePath(QStringLiteral("empty.fourfold")));
+    REQUIRE(p);
+    auto lead = p->addCoder(QStringLiteral("Lotte Lead"), QStringLiteral("L01"), CoderRole::Lead);
+    REQUIRE(lead);
+    auto coder = p->coderByPseudonym(QStringLiteral("L01"));
+    REQUIRE(coder);
+    REQUIRE(coder->has_value());
+    CodingSession session(std::move(*p), **coder);
+    ComparisonWindow w(&session);
+    REQUIRE(w.queueModel());
+    CHECK(w.queueModel()->rowCount() == 0);
+    CHECK(w.currentPassage() == -1);
+    CHECK(w.passageText().startsWith(QStringLiteral("Nothing to compare yet.")));
+    CHECK(w.passageText().contains(QStringLiteral("Study design")));
+}
+
 TEST_CASE("edit decides a gold span with the lead's own function and boundaries")
 {
     CompareFixture f;
@@ -270,6 +290,35 @@ TEST_CASE("edit decides a gold span with the lead's own function and boundaries"
     AnnotationContent same = dialog.content();
     CHECK(same.range == span.content.range);
     CHECK(same.function == span.content.function);
+
+    // Chosen on the text: a selection inside words snaps to them, unless exact.
+    {
+        Article plain;
+        plain.summary.language = QStringLiteral("en");
+        plain.text = QStringLiteral("The ferry levy hurts islanders.");
+        auto codebook = f.project().codebook();
+        REQUIRE(codebook);
+        AnnotationContent cause;
+        cause.function = FramingFunction::Cause;
+        cause.range = {0, 3};
+        GoldSpanDialog onText(plain, cause, *codebook);
+        onText.selectOnText(6, 12); // "rry le"
+        CHECK(onText.content().range == TextRange {4, 14}); // "ferry levy"
+        onText.setExact(true);
+        CHECK(onText.content().range == TextRange {6, 12});
+        // The attribute fields are the function's own (the default codebook's cause has the
+        // free-text actor): what is typed there comes back under its key.
+        const auto causeSpecs = codebook->definition(FramingFunction::Cause).attributes;
+        REQUIRE(causeSpecs.size() == 1);
+        QLineEdit *actor = nullptr;
+        for (QLineEdit *e : onText.findChildren<QLineEdit *>())
+            if (e->accessibleName() == causeSpecs.front().label)
+                actor = e;
+        REQUIRE(actor);
+        actor->setText(QStringLiteral("the island council"));
+        CHECK(onText.content().attributes
+            == QJsonObject {{causeSpecs.front().key, QStringLiteral("the island council")}});
+    }
 
     // A narrower range of another function, decided from that span.
     const TextRange narrower {span.content.range.start, span.content.range.start + 5};

@@ -208,6 +208,19 @@ TEST_CASE("keys 1-4 request a span over the selection in code points snapped to 
         CHECK(rec.created[0].function == FramingFunction::Cause);
         CHECK(rec.created[0].range == TextRange {kOwner.start + 1, kBlamed.start + 2});
     }
+    SECTION("Ctrl+2 keeps the exact selection too (window managers may take Alt)")
+    {
+        QTest::keyClick(&view, Qt::Key_2, Qt::ControlModifier);
+        REQUIRE(rec.created.size() == 1);
+        CHECK(rec.created[0].range == TextRange {kOwner.start + 1, kBlamed.start + 2});
+    }
+    SECTION("with exact selection on, a plain 2 keeps the exact selection")
+    {
+        view.setExactSelection(true);
+        QTest::keyClick(&view, Qt::Key_2);
+        REQUIRE(rec.created.size() == 1);
+        CHECK(rec.created[0].range == TextRange {kOwner.start + 1, kBlamed.start + 2});
+    }
     SECTION("the toolbar's requestFunction does the same as the key")
     {
         view.requestFunction(FramingFunction::Remedy);
@@ -363,6 +376,18 @@ TEST_CASE("with a span selected the keys relabel and delete and resize it")
         QTest::keyClick(&view, Qt::Key_Up, Qt::AltModifier);
         CHECK(view.selectedSpan() == AnnotationId {7});
         CHECK(rec.activated == std::vector<AnnotationId> {AnnotationId {8}, AnnotationId {7}});
+    }
+    SECTION("the Ctrl keys do what the Alt keys do")
+    {
+        QTest::keyClick(&view, Qt::Key_Right, Qt::ControlModifier | Qt::ShiftModifier);
+        QTest::keyClick(&view, Qt::Key_Left, Qt::ControlModifier);
+        REQUIRE(rec.resized.size() == 2);
+        CHECK(rec.resized[0].second == TextRange {kOwner.start, kBlamed.end});
+        CHECK(rec.resized[1].second == TextRange {kCafe.start, kOwner.end});
+        QTest::keyClick(&view, Qt::Key_Down, Qt::ControlModifier);
+        CHECK(view.selectedSpan() == AnnotationId {8});
+        QTest::keyClick(&view, Qt::Key_Up, Qt::ControlModifier);
+        CHECK(view.selectedSpan() == AnnotationId {7});
     }
     SECTION("Escape clears the span selection")
     {

@@ -5,6 +5,8 @@
 #include "app/desktop/coding_session.h"
 #include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/compare/disagreement_queue_model.h"
+#include "app/desktop/compare/gold_span_dialog.h"
+#include "core/text/offset_map.h"
 #include "tools/screenshots/screenshot_support.h"
 
 using namespace fourfold;
@@ -59,6 +61,25 @@ int main(int argc, char *argv[])
                 break;
             }
         ok &= saveGrab(w, out, "comparison-pair.png");
+    }
+    {
+        // Edit…: the gold span chosen on the text, with the cause's actor, from the first cause
+        // passage of hb-01.
+        ComparisonWindow w(&session);
+        for (const ArticleDisagreement &row : w.queueModel()->rows())
+            if (row.article.externalId == QStringLiteral("hb-01"))
+                w.openArticle(row.article.id);
+        auto article = session.project().article(w.currentArticle());
+        for (const Passage &passage : w.passages())
+            if (article && !passage.spans.empty()
+                && passage.spans.front().content.function == FramingFunction::Cause) {
+                GoldSpanDialog dialog(*article, passage.spans.front().content, session.codebook());
+                const Utf16Range r = OffsetMap(article->text).utf16Range(passage.range);
+                dialog.selectOnText(int(r.start + 2), int(r.end - 2)); // snaps to the words
+                dialog.show();
+                ok &= saveGrab(dialog, out, "gold-span-dialog.png");
+                break;
+            }
     }
     return ok ? 0 : 1;
 }

@@ -9,10 +9,13 @@
 #include "app/desktop/reading_view.h"
 #include "app/desktop/reliability/reliability_window.h"
 #include "app/desktop/reliability/report_options_dialog.h"
+#include "core/project/edit.h"
+#include "core/project/people.h"
 #include "tools/screenshots/screenshot_support.h"
 
 #include <QEventLoop>
 #include <QTabWidget>
+#include <QTemporaryDir>
 #include <QToolButton>
 
 using namespace fourfold;
@@ -32,6 +35,28 @@ int main(int argc, char *argv[])
         start.resize(1200, 700);
         start.show();
         ok &= saveGrab(start, out, "start.png");
+    }
+    {
+        // A new project opened by its lead: what to do next instead of a blank desk.
+        QTemporaryDir dir;
+        const QString fresh = dir.filePath(QStringLiteral("new-study.fourfold"));
+        const QString pass = QStringLiteral("screenshot lead passphrase");
+        {
+            auto p = Project::create(fresh);
+            if (!p)
+                return 1;
+            auto lead = People::add(*p, nullptr,
+                {QStringLiteral("Lead of the study"), QStringLiteral("L01"), CoderRole::Lead,
+                    pass});
+            if (!lead || !p->apply(**lead))
+                return 1;
+        }
+        MainWindow w;
+        w.resize(1200, 700);
+        if (!w.openProject(fresh, QStringLiteral("L01"), pass))
+            return 1;
+        w.show();
+        ok &= saveGrab(w, out, "desk-empty-lead.png");
     }
     {
         auto p = Project::open(project);

@@ -110,10 +110,21 @@ ComparisonWindow::ComparisonWindow(CodingSession *session, QWidget *parent)
     reloadQueue();
     if (!m_queueModel->rows().empty())
         openArticle(m_queueModel->rows().front().article.id);
+    else // an empty queue says why and what fills it, instead of blank panes
+        m_passageLabel->setText(
+            tr("Nothing to compare yet. An article comes here once at least two coders have "
+               "coded it and marked it done (or tick “Articles in progress” above). "
+               "Plan double coding in Lead → Study design; the progress board shows who is "
+               "done."));
     updateActions();
 }
 
 ComparisonWindow::~ComparisonWindow() = default;
+
+QString ComparisonWindow::passageText() const
+{
+    return m_passageLabel ? m_passageLabel->text() : QString();
+}
 
 QString ComparisonWindow::coderName(CoderId id) const
 {
@@ -826,7 +837,7 @@ bool ComparisonWindow::editSelected()
         start.content.range.end = std::max(start.content.range.end, a.content.range.end);
         start.sources.push_back(a.id);
     }
-    GoldSpanDialog dialog(m_articleData, start.content, this);
+    GoldSpanDialog dialog(m_articleData, start.content, m_session->codebook(), this);
     if (dialog.exec() != QDialog::Accepted)
         return false;
     start.content = dialog.content();

@@ -41,6 +41,8 @@ public:
     // The passages shown (after the filters) and the current one (-1: none).
     const std::vector<Passage> &passages() const { return m_comparison.passages; }
     int currentPassage() const { return m_current; }
+    // The line above the decision list: the passage's state, or why there is nothing to compare.
+    QString passageText() const;
     void setCurrentPassage(int index);
     // Steps to the next / previous passage with an undecided disagreement (wraps around);
     // false if there is none. With "show decided" on, decided ones count too.
