@@ -256,8 +256,15 @@ QWidget *MainWindow::buildDesk()
     m_emptyText->setTextFormat(Qt::RichText);
     m_emptyText->setWordWrap(true);
     m_emptyText->setAlignment(Qt::AlignCenter);
+    m_emptyText->setMinimumWidth(360);
     m_emptyText->setMaximumWidth(560);
-    emptyLayout->addWidget(m_emptyText, 0, Qt::AlignHCenter);
+    // In a row with stretches rather than aligned: an aligned label gets no height for its width
+    // and its wrapped lines are cut off.
+    auto *emptyRow = new QHBoxLayout;
+    emptyRow->addStretch(1);
+    emptyRow->addWidget(m_emptyText, 4);
+    emptyRow->addStretch(1);
+    emptyLayout->addLayout(emptyRow);
     m_emptyAction = new QPushButton(tr("Import articles…"), empty);
     connect(m_emptyAction, &QPushButton::clicked, this, &MainWindow::importArticles);
     emptyLayout->addWidget(m_emptyAction, 0, Qt::AlignHCenter);
