@@ -135,21 +135,24 @@ AgreementReport computeAgreement(const EncodedData &encoded, const QStringList &
         r.unitBootstrap = bootstrapAlpha(data, encoded.metric, b);
     }
     r.percentAgreement = percentAgreement(data);
-    r.lightKappa = lightKappa(data);
+    // Every pair's table, counted once, for Light's kappa, two coders' figures and the pairs.
+    const std::vector<ContingencyTable> tables = pairContingencyTables(data);
+    r.lightKappa = lightKappa(tables, data.coders);
     if (r.complete && data.coders == 2) {
-        const ContingencyTable table = contingencyTable(data, 0, 1);
+        const ContingencyTable &table = tables.front();
         r.cohenKappa = cohenKappa(table, options.kappaWeights);
         r.scottPi = scottPi(table);
         r.bennettS = bennettS(table);
     }
     if (r.complete)
         r.fleissKappa = fleissKappa(data);
+    std::size_t pair = 0;
     for (int a = 0; a < data.coders; ++a)
-        for (int b = a + 1; b < data.coders; ++b) {
+        for (int b = a + 1; b < data.coders; ++b, ++pair) {
             PairAgreement p;
             p.coderA = a;
             p.coderB = b;
-            const ContingencyTable table = contingencyTable(data, a, b);
+            const ContingencyTable &table = tables[pair];
             p.units = int(table.total());
             p.percentAgreement = percentAgreement(table);
             p.cohenKappa = cohenKappa(table, options.kappaWeights);

@@ -104,14 +104,13 @@ Result<EncodingOptions> encodingFor(const Codebook &codebook, const AnalysisRequ
 Result<AnalysisResult> analyseTable(
     ReliabilityTable table, const EncodingOptions &encoding, const AgreementOptions &options)
 {
-    auto encoded = encodeTable(table, encoding);
+    // The cells live on as the encoded data: one copy of the unit matrix is kept, not two.
+    auto encoded = encodeTableCells(table, encoding);
     if (!encoded)
         return std::unexpected(encoded.error());
     const QString scale =
         encoding.distance ? setDistanceKey(*encoding.distance) : levelKey(encoding.level);
     AgreementReport report = computeAgreement(*encoded, table.coders, scale, options);
-    // The cells live on as the encoded data: one copy of the unit matrix is kept, not two.
-    table.releaseCells();
     return AnalysisResult {std::move(table), encoding, std::move(*encoded), std::move(report)};
 }
 

@@ -10,6 +10,7 @@
 #include <map>
 #include <numeric>
 #include <set>
+#include <type_traits>
 
 namespace fourfold {
 
@@ -108,7 +109,11 @@ std::optional<SetDistance> setDistanceFromKey(const QString &key)
     return std::nullopt;
 }
 
-Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOptions &options)
+namespace {
+
+// Everything of the encoding but the cells: `codeOfLabel` gets each label index's value code.
+Result<EncodedData> encodeLabels(
+    const ReliabilityTable &table, const EncodingOptions &options, std::vector<int> &codeOfLabel)
 {
     EncodedData out;
     const size_t units = table.unitCount();
@@ -216,14 +221,38 @@ Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOpt
         }
         out.data.values = int(out.valueLabels.size());
     }
-    std::vector<int> codeOfLabel(size_t(table.labels().size()), kMissing);
+    codeOfLabel.assign(size_t(table.labels().size()), kMissing);
     for (size_t i = 0; i < used.size(); ++i)
         codeOfLabel[size_t(used[i])] = codeOf[i];
-    out.data.cells.resize(table.cells().size());
+    return out;
+}
+
+} // namespace
+
+Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOptions &options)
+{
+    std::vector<int> codeOfLabel;
+    auto out = encodeLabels(table, options, codeOfLabel);
+    if (!out)
+        return out;
+    out->data.cells.resize(table.cells().size());
     std::transform(
-        table.cells().begin(), table.cells().end(), out.data.cells.begin(), [&](qint32 l) {
+        table.cells().begin(), table.cells().end(), out->data.cells.begin(), [&](qint32 l) {
             return l == ReliabilityTable::kMissing ? kMissing : codeOfLabel[size_t(l)];
         });
+    return out;
+}
+
+Result<EncodedData> encodeTableCells(ReliabilityTable &table, const EncodingOptions &options)
+{
+    std::vector<int> codeOfLabel;
+    auto out = encodeLabels(table, options, codeOfLabel);
+    if (!out)
+        return out;
+    static_assert(std::is_same_v<qint32, int>, "a table's label indices become value codes");
+    out->data.cells = table.takeCells();
+    for (int &cell : out->data.cells)
+        cell = cell == ReliabilityTable::kMissing ? kMissing : codeOfLabel[size_t(cell)];
     return out;
 }
 

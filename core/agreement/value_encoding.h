@@ -33,6 +33,10 @@ struct EncodedData {
 // naming the file, line and cell for a label outside `order`, a non-number, or a negative
 // ratio value; InvalidArgument for a distance combined with a level other than nominal.
 Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOptions &options);
+// The same, taking the table's cells over instead of copying them (one copy of the unit matrix
+// is held, not two): on success the table keeps its coders, labels and units but no cells
+// (ReliabilityTable::releaseCells); on failure it is left as it was.
+Result<EncodedData> encodeTableCells(ReliabilityTable &table, const EncodingOptions &options);
 
 // "nominal", "ordinal", "interval", "ratio".
 QString levelKey(reliability::Level level);

@@ -9,6 +9,8 @@
 #include <QByteArray>
 #include <QString>
 
+#include <string_view>
+
 namespace fourfold {
 
 // The longest codebook file, in bytes (16 MiB).
@@ -26,5 +28,34 @@ Status requireRegularFile(const QString &path);
 // the file and the limit (in MiB) when it is longer; the file's size is checked before reading
 // and the reading stops at the limit, so a file that grows meanwhile is refused too.
 Result<QByteArray> readWholeFile(const QString &path, qint64 maxBytes);
+
+// A whole regular file, at most `maxBytes` long, as bytes in memory without a copy: mapped
+// read-only from the page cache with its pages loaded at once, or, where a file cannot be
+// mapped (an empty file, a file system without mmap), read by readWholeFile. The same checks and
+// errors as readWholeFile. A mapped file that another program shortens while it is held ends the
+// process (SIGBUS), as with any mapping; readers hold one only while they parse.
+class WholeFile
+{
+public:
+    static Result<WholeFile> open(const QString &path, qint64 maxBytes);
+    WholeFile(WholeFile &&other) noexcept;
+    WholeFile &operator=(WholeFile &&other) noexcept;
+    WholeFile(const WholeFile &) = delete;
+    WholeFile &operator=(const WholeFile &) = delete;
+    ~WholeFile();
+
+    std::string_view bytes() const;
+    // The bytes as a QByteArray that does not own them: valid while this lives.
+    QByteArray rawData() const;
+    bool isMapped() const { return m_address != nullptr; }
+
+private:
+    WholeFile() = default;
+    void unmap();
+
+    void *m_address = nullptr; // the mapping, or null when read
+    size_t m_size = 0;
+    QByteArray m_read;
+};
 
 } // namespace fourfold

@@ -4,6 +4,7 @@
 #include <QStringDecoder>
 
 #include <algorithm>
+#include <cstdint>
 #include <cstring>
 #include <deque>
 #include <string>
@@ -133,13 +134,16 @@ public:
 
     qint32 index(std::string_view label)
     {
-        // A handful of labels is the common case: comparing with each beats hashing.
-        for (const auto &[known, index] : m_few)
-            if (known == label)
-                return index;
+        // A handful of short labels is the common case: comparing with each, eight bytes at a
+        // time, beats hashing.
+        const std::uint64_t key = packed(label);
+        for (const Few &known : m_few)
+            if (known.key == key && known.label.size() == label.size()
+                && (label.size() <= 8 || known.label == label))
+                return known.index;
         if (m_few.size() < kFew && m_many.empty()) {
             const qint32 index = add(label);
-            m_few.emplace_back(m_stored.back(), index);
+            m_few.push_back({m_stored.back(), key, index});
             return index;
         }
         if (const auto found = m_many.find(label); found != m_many.end())
@@ -158,8 +162,22 @@ private:
         return m_table.labelIndex(text(label));
     }
 
+    struct Few {
+        std::string_view label;
+        std::uint64_t key; // its first eight bytes
+        qint32 index;
+    };
+
+    // The first eight bytes of `label`, zero-filled.
+    static std::uint64_t packed(std::string_view label)
+    {
+        std::uint64_t key = 0;
+        std::memcpy(&key, label.data(), std::min<size_t>(label.size(), 8));
+        return key;
+    }
+
     ReliabilityTable &m_table;
-    std::vector<std::pair<std::string_view, qint32>> m_few;
+    std::vector<Few> m_few;
     std::unordered_map<std::string, qint32, ViewHash, std::equal_to<>> m_many;
     std::deque<std::string> m_stored; // the labels' bytes, at fixed addresses
 };
@@ -232,7 +250,8 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
             }
             if (table.coders.size() < 2)
                 return false;
-            table.reserve(size_t(lines));
+            // The ids are at most the file's bytes: their text is not copied as it grows.
+            table.reserve(size_t(lines), bytes.size());
             idHashes.reserve(size_t(lines));
             return true;
         }

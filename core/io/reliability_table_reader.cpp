@@ -87,13 +87,12 @@ private:
 
 Result<ReliabilityTable> readReliabilityTable(const QString &path)
 {
-    const auto bytes = readWholeFile(path, maxWholeFileSize);
-    if (!bytes)
-        return std::unexpected(bytes.error());
-    if (auto table = readReliabilityTableBytes(
-            std::string_view(bytes->constData(), size_t(bytes->size())), path))
+    const auto file = WholeFile::open(path, maxWholeFileSize);
+    if (!file)
+        return std::unexpected(file.error());
+    if (auto table = readReliabilityTableBytes(file->bytes(), path))
         return std::move(*table);
-    return readReliabilityTableDecoded(*bytes, path);
+    return readReliabilityTableDecoded(file->rawData(), path);
 }
 
 Result<ReliabilityTable> readReliabilityTableDecoded(const QByteArray &bytes, const QString &path)

@@ -91,11 +91,11 @@ void ReliabilityTable::indexLabels()
         m_labelIndex.insert(m_labels[i], qint32(i));
 }
 
-void ReliabilityTable::reserve(size_t units)
+void ReliabilityTable::reserve(size_t units, size_t idCharacters)
 {
+    m_ownText.reserve(m_ownText.size() + qsizetype(idCharacters));
     m_cells.reserve(m_cells.size() + units * size_t(coders.size()));
     m_ownEnd.reserve(m_ownEnd.size() + units);
-    m_ownLine.reserve(m_ownLine.size() + units);
 }
 
 void ReliabilityTable::appendUnit(QStringView id, std::span<const qint32> cells, qint64 line)
@@ -105,9 +105,34 @@ void ReliabilityTable::appendUnit(QStringView id, std::span<const qint32> cells,
     ++m_blocks.back().count;
     m_ownText += id;
     m_ownEnd.push_back(m_ownText.size());
-    m_ownLine.push_back(line);
+    appendOwnLine(m_ownEnd.size() - 1, line);
     m_cells.insert(m_cells.end(), cells.begin(), cells.end());
     ++m_unitCount;
+}
+
+void ReliabilityTable::appendOwnLine(size_t own, qint64 line)
+{
+    if (own == 0) {
+        m_firstOwnLine = line;
+        m_ownLinesFollow = true;
+        m_ownLine.clear();
+        return;
+    }
+    if (m_ownLinesFollow) {
+        if (line == m_firstOwnLine + qint64(own))
+            return;
+        // The first id off the run: every line so far is written out.
+        m_ownLinesFollow = false;
+        m_ownLine.reserve(own + 1);
+        for (size_t k = 0; k < own; ++k)
+            m_ownLine.push_back(m_firstOwnLine + qint64(k));
+    }
+    m_ownLine.push_back(line);
+}
+
+qint64 ReliabilityTable::ownLine(size_t own) const
+{
+    return m_ownLinesFollow ? m_firstOwnLine + qint64(own) : m_ownLine[own];
 }
 
 void ReliabilityTable::appendUnit(QStringView id, const QStringList &cells, qint64 line)
@@ -181,7 +206,7 @@ qint64 ReliabilityTable::unitLine(size_t unit) const
     if (unit >= m_unitCount)
         return 0;
     const Block &b = blockOf(unit);
-    return b.numbered ? 0 : m_ownLine[b.firstOwn + (unit - b.first)];
+    return b.numbered ? 0 : ownLine(b.firstOwn + (unit - b.first));
 }
 
 std::vector<qint32> ReliabilityTable::unitArticles(QStringList &articles) const
@@ -251,6 +276,8 @@ ReliabilityTable ReliabilityTable::columns(std::span<const qsizetype> columns) c
     out.m_blocks = m_blocks;
     out.m_ownText = m_ownText;
     out.m_ownEnd = m_ownEnd;
+    out.m_firstOwnLine = m_firstOwnLine;
+    out.m_ownLinesFollow = m_ownLinesFollow;
     out.m_ownLine = m_ownLine;
     for (qsizetype c : columns)
         out.coders << coders[c];

@@ -16,6 +16,7 @@
 #include <functional>
 #include <optional>
 #include <span>
+#include <utility>
 #include <vector>
 
 namespace fourfold {
@@ -62,6 +63,8 @@ public:
     // Frees the cells, keeping coders, labels and units (unitCount() stays): for a table whose
     // cells now live elsewhere, e.g. encoded. cell() and row() may not be called afterwards.
     void releaseCells() { m_cells = {}; }
+    // The cells, taken out of the table (which then holds none, as after releaseCells).
+    std::vector<qint32> takeCells() { return std::exchange(m_cells, {}); }
     // Replaces every cell's label index l with relabel[l] (a new index into labels(), which
     // `labels` then become); kMissing stays missing.
     void relabel(const std::vector<qint32> &relabel, const QStringList &labels);
@@ -70,8 +73,9 @@ public:
     void recodeLabels(const std::function<std::optional<QString>(const QString &)> &counted);
 
     // --- units ----------------------------------------------------------------------------
-    // Makes room for `units` more units (of the coders named so far) with ids of their own.
-    void reserve(size_t units);
+    // Makes room for `units` more units (of the coders named so far) with ids of their own,
+    // and for `idCharacters` more characters of those ids.
+    void reserve(size_t units, size_t idCharacters = 0);
     // Appends a unit with its own id (any text; `line`: where a file's row begins, 0 = none)
     // and one label index per coder.
     void appendUnit(QStringView id, std::span<const qint32> cells, qint64 line = 0);
@@ -115,6 +119,9 @@ private:
     const Block &blockOf(size_t unit) const;
     // Fills m_labelIndex from m_labels (once there are more than kScannedLabels).
     void indexLabels();
+    // Records the line of the own id just appended (its index `own`).
+    void appendOwnLine(size_t own, qint64 line);
+    qint64 ownLine(size_t own) const;
     void appendBlockUnit(const Block &from, size_t unit, const ReliabilityTable &origin);
 
     static constexpr qsizetype kScannedLabels = 16;
@@ -125,7 +132,11 @@ private:
     std::vector<Block> m_blocks;
     QString m_ownText; // own ids end to end
     std::vector<qsizetype> m_ownEnd; // where each own id ends in m_ownText
-    std::vector<qint64> m_ownLine; // the line of each own id
+    // The line of each own id: while every id so far is on the line after the one before (a
+    // matrix file of one row a line), only the first line is kept and m_ownLine stays empty.
+    qint64 m_firstOwnLine = 0;
+    bool m_ownLinesFollow = true;
+    std::vector<qint64> m_ownLine;
 };
 
 } // namespace fourfold

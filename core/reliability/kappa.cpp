@@ -374,6 +374,43 @@ ContingencyTable contingencyTable(const ReliabilityData &data, int coderA, int c
     return table;
 }
 
+std::vector<ContingencyTable> pairContingencyTables(const ReliabilityData &data)
+{
+    const int coders = std::max(data.coders, 0);
+    const int k = std::max(data.values, 0);
+    const std::size_t kk = std::size_t(k) * std::size_t(k);
+    std::vector<std::pair<int, int>> pairs;
+    for (int a = 0; a < coders; ++a)
+        for (int b = a + 1; b < coders; ++b)
+            pairs.emplace_back(a, b);
+    std::vector<ContingencyTable> out;
+    // Many categories (or malformed data): pair by pair, as contingencyTable counts them.
+    if (!wellFormed(data) || kk > (std::size_t(1) << 16) || kk > 4 * std::size_t(data.units)) {
+        for (const auto &[a, b] : pairs)
+            out.push_back(contingencyTable(data, a, b));
+        return out;
+    }
+    std::vector<double> counts(pairs.size() * kk, 0.0);
+    std::vector<int> row(static_cast<std::size_t>(coders));
+    for (int u = 0; u < data.units; ++u) {
+        for (int c = 0; c < coders; ++c)
+            row[std::size_t(c)] = data.at(u, c);
+        double *table = counts.data();
+        for (int a = 0; a < coders; ++a)
+            for (int b = a + 1; b < coders; ++b, table += kk) {
+                const int x = row[std::size_t(a)];
+                const int y = row[std::size_t(b)];
+                if (isCode(x, k) && isCode(y, k))
+                    table[at(x, y, k)] += 1.0;
+            }
+    }
+    for (std::size_t p = 0; p < pairs.size(); ++p)
+        out.emplace_back(k,
+            std::vector<double>(counts.begin() + std::ptrdiff_t(p * kk),
+                counts.begin() + std::ptrdiff_t((p + 1) * kk)));
+    return out;
+}
+
 KappaResult cohenKappa(
     const ContingencyTable &table, KappaWeights weights, const std::vector<double> &customWeights)
 {
@@ -831,22 +868,35 @@ SimpleAgreement lightKappa(const ReliabilityData &data)
         r.reason = "Light's kappa needs at least two coders";
         return r;
     }
+    return lightKappa(pairContingencyTables(data), data.coders);
+}
+
+SimpleAgreement lightKappa(const std::vector<ContingencyTable> &pairTables, int coders)
+{
+    SimpleAgreement r;
+    if (coders < 2) {
+        r.reason = "Light's kappa needs at least two coders";
+        return r;
+    }
+    if (pairTables.size() != std::size_t(coders) * std::size_t(coders - 1) / 2) {
+        r.reason = "Light's kappa needs the table of every pair of coders";
+        return r;
+    }
     // Light (1971): the unweighted mean of the pairwise Cohen's kappas.
     double sum = 0;
-    int pairs = 0;
-    for (int a = 0; a < data.coders; ++a) {
-        for (int b = a + 1; b < data.coders; ++b) {
-            const KappaResult pair = cohenKappa(contingencyTable(data, a, b));
-            if (!pair.value) {
+    std::size_t pair = 0;
+    for (int a = 0; a < coders; ++a) {
+        for (int b = a + 1; b < coders; ++b, ++pair) {
+            const KappaResult kappa = cohenKappa(pairTables[pair]);
+            if (!kappa.value) {
                 r.reason = "Cohen's kappa of coders " + std::to_string(a) + " and "
-                    + std::to_string(b) + " is undefined: " + pair.reason;
+                    + std::to_string(b) + " is undefined: " + kappa.reason;
                 return r;
             }
-            sum += *pair.value;
-            ++pairs;
+            sum += *kappa.value;
         }
     }
-    r.value = sum / pairs;
+    r.value = sum / double(pair);
     return r;
 }
 

@@ -46,6 +46,9 @@ struct ContingencyTable {
 // value; categories = data.values. Coder indices out of range, or cells whose size is not
 // units × coders, give an empty table (which every statistic reports as undefined).
 ContingencyTable contingencyTable(const ReliabilityData &data, int coderA, int coderB);
+// The tables of every pair of coders a < b, in the order (0,1), (0,2), …, (1,2), …: the same as
+// contingencyTable for each pair, counted in one pass over the units.
+std::vector<ContingencyTable> pairContingencyTables(const ReliabilityData &data);
 
 enum class KappaWeights { None, Linear, Quadratic, Custom };
 // "none", "linear", "quadratic", "custom".
@@ -154,5 +157,7 @@ SubjectCounts categoryCounts(const ReliabilityData &data);
 // over the units both coded. Undefined with fewer than two coders or when any pair's kappa is
 // undefined (the reason names the pair by coder index, from 0).
 SimpleAgreement lightKappa(const ReliabilityData &data);
+// The same from the tables of every pair, as pairContingencyTables gives them.
+SimpleAgreement lightKappa(const std::vector<ContingencyTable> &pairTables, int coders);
 
 } // namespace fourfold::reliability

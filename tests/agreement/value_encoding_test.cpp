@@ -33,6 +33,29 @@ TEST_CASE("nominal labels become codes in sorted order; empty cells are missing"
     CHECK(e->data.cells == std::vector<int> {1, 0, kMissing, 2});
 }
 
+TEST_CASE("encoding that takes the cells over gives the same data and leaves none behind")
+{
+    ReliabilityTable t = table({{QStringLiteral("b"), QStringLiteral("a")},
+        {QString(), QStringLiteral("c")}, {QStringLiteral("a"), QStringLiteral("a")}});
+    auto copied = encodeTable(t, EncodingOptions {});
+    REQUIRE(copied);
+    auto taken = encodeTableCells(t, EncodingOptions {});
+    REQUIRE(taken);
+    CHECK(taken->data.cells == copied->data.cells);
+    CHECK(taken->data.cells == std::vector<int> {1, 0, kMissing, 2, 0, 0});
+    CHECK(taken->valueLabels == copied->valueLabels);
+    CHECK(t.cells().empty());
+    CHECK(t.unitCount() == 3);
+    // A refused encoding leaves the table as it was, its cells named in the error.
+    ReliabilityTable refused = table({{QStringLiteral("3"), QStringLiteral("three")}});
+    EncodingOptions interval;
+    interval.level = Level::Interval;
+    auto e = encodeTableCells(refused, interval);
+    REQUIRE_FALSE(e);
+    CHECK(e.error().message.contains(QStringLiteral("m.csv:2")));
+    CHECK(refused.cells().size() == 2);
+}
+
 TEST_CASE("ordinal labels follow the given order; numbers follow their size")
 {
     EncodingOptions o;

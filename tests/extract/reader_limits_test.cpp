@@ -168,3 +168,50 @@ TEST_CASE(
     CHECK(report.value(QStringLiteral("alpha")).toObject().value(QStringLiteral("value")).toDouble()
         == Approx(4.0 / 9.0).margin(1e-12));
 }
+
+TEST_CASE(
+    "a whole file mapped gives the file's bytes and the checks of a whole-file read", "[files]")
+{
+    QTemporaryDir dir;
+    const QString path = dir.filePath(QStringLiteral("matrix.csv"));
+    QByteArray content;
+    for (int i = 0; i < 100000; ++i)
+        content += "u" + QByteArray::number(i) + ",a,b\n";
+    {
+        QFile f(path);
+        REQUIRE(f.open(QIODevice::WriteOnly));
+        REQUIRE(f.write(content) == content.size());
+    }
+    auto file = WholeFile::open(path, maxWholeFileSize);
+    REQUIRE(file);
+    CHECK(file->isMapped());
+    CHECK(file->bytes() == std::string_view(content.constData(), size_t(content.size())));
+    CHECK(file->rawData() == content);
+    // Moved, the mapping goes along and stays readable.
+    WholeFile moved = std::move(*file);
+    CHECK(moved.bytes().size() == size_t(content.size()));
+    CHECK(moved.bytes().substr(0, 8) == "u0,a,b\nu");
+
+    // An empty file cannot be mapped: it is read, and empty.
+    const QString empty = dir.filePath(QStringLiteral("empty.csv"));
+    {
+        QFile f(empty);
+        REQUIRE(f.open(QIODevice::WriteOnly));
+    }
+    auto none = WholeFile::open(empty, maxWholeFileSize);
+    REQUIRE(none);
+    CHECK_FALSE(none->isMapped());
+    CHECK(none->bytes().empty());
+
+    // The same refusals as readWholeFile: too long, missing, not a regular file.
+    auto over = WholeFile::open(path, 1 << 20);
+    REQUIRE_FALSE(over);
+    CHECK(over.error().code == ErrorCode::InvalidInput);
+    CHECK(over.error().message.contains(QStringLiteral("longer than 1 MiB")));
+    auto missing = WholeFile::open(dir.filePath(QStringLiteral("nothing.csv")), maxWholeFileSize);
+    REQUIRE_FALSE(missing);
+    CHECK(missing.error().code == ErrorCode::Io);
+    auto folder = WholeFile::open(dir.path(), maxWholeFileSize);
+    REQUIRE_FALSE(folder);
+    CHECK(folder.error().message.contains(QStringLiteral("not a regular file")));
+}

@@ -111,3 +111,37 @@ TEST_CASE("unitArticle strips the unit suffix made by the unitizers")
     CHECK(unitArticle(u"a7#s1#") == QStringLiteral("a7#s1#"));
     CHECK(unitArticle(u"#t4").isEmpty());
 }
+
+TEST_CASE("the lines of units with their own ids are kept in a run and off it")
+{
+    // One row a line (lines 2, 3, 4 …) is held as its first line; a line off the run (a quoted
+    // line break, an empty line) writes the lines out; both give every unit its line.
+    ReliabilityTable t;
+    t.coders = {QStringLiteral("A"), QStringLiteral("B")};
+    const std::vector<qint32> row {0, kMissing};
+    t.labelIndex(u"x");
+    const std::vector<qint64> lines {2, 3, 4, 5, 7, 8, 12};
+    for (size_t i = 0; i < lines.size(); ++i) {
+        t.appendUnit(QStringLiteral("u%1").arg(i), row, lines[i]);
+        for (size_t k = 0; k <= i; ++k)
+            CHECK(t.unitLine(k) == lines[k]);
+    }
+    // Own ids after numbered units go on from the ones before.
+    t.appendNumberedUnits(QStringLiteral("a1"), QStringLiteral("#s"), row);
+    t.appendUnit(u"later", row, 20);
+    t.appendUnit(u"last", row, 21);
+    CHECK(t.unitLine(7) == 0);
+    CHECK(t.unitLine(8) == 20);
+    CHECK(t.unitLine(9) == 21);
+    CHECK(t.unitLine(6) == 12);
+    // Rows and columns keep them.
+    const std::vector<size_t> picked {9, 0, 4};
+    const ReliabilityTable r = t.rows(picked);
+    CHECK(r.unitLine(0) == 21);
+    CHECK(r.unitLine(1) == 2);
+    CHECK(r.unitLine(2) == 7);
+    const std::vector<qsizetype> kept {1};
+    const ReliabilityTable c = t.columns(kept);
+    for (size_t u = 0; u < t.unitCount(); ++u)
+        CHECK(c.unitLine(u) == t.unitLine(u));
+}
