@@ -1,5 +1,7 @@
 #include "core/io/reliability_table_bytes.h"
 
+#include "core/model/huge_pages.h"
+
 #include <QChar>
 #include <QStringDecoder>
 
@@ -187,7 +189,10 @@ private:
 // eight bits a pass: Knuth, TAOCP vol. 3, §5.2.5), so that units with equal ids are neighbours.
 bool hasRepeatedId(const ReliabilityTable &table, std::vector<quint64> &keys)
 {
-    std::vector<quint64> buffer(keys.size());
+    std::vector<quint64> buffer;
+    buffer.reserve(keys.size());
+    adviseHugePagesFor(buffer);
+    buffer.resize(keys.size());
     for (int shift = 32; shift < 64; shift += 8) {
         size_t start[257] = {};
         for (const quint64 key : keys)
@@ -253,6 +258,7 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
             // The ids are at most the file's bytes: their text is not copied as it grows.
             table.reserve(size_t(lines), bytes.size());
             idHashes.reserve(size_t(lines));
+            adviseHugePagesFor(idHashes);
             return true;
         }
         if (qsizetype(fields.size()) != columns)

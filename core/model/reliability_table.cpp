@@ -1,5 +1,7 @@
 #include "core/model/reliability_table.h"
 
+#include "core/model/huge_pages.h"
+
 #include <algorithm>
 
 namespace fourfold {
@@ -96,6 +98,10 @@ void ReliabilityTable::reserve(size_t units, size_t idCharacters)
     m_ownText.reserve(m_ownText.size() + qsizetype(idCharacters));
     m_cells.reserve(m_cells.size() + units * size_t(coders.size()));
     m_ownEnd.reserve(m_ownEnd.size() + units);
+    // Filled from start to end: 2 MiB pages spare a page fault per 4 KiB (huge_pages.h).
+    adviseHugePages(m_ownText.constData(), size_t(m_ownText.capacity()) * sizeof(QChar));
+    adviseHugePagesFor(m_cells);
+    adviseHugePagesFor(m_ownEnd);
 }
 
 void ReliabilityTable::appendUnit(QStringView id, std::span<const qint32> cells, qint64 line)
