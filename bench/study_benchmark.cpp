@@ -2,8 +2,11 @@
 // as a lead would (articles, then quote-anchored codings with gold, then the position baseline as
 // an extractor run), and times every path the study-scale work names, each run three times:
 //   agree on sentences (all functions, 1,000 bootstrap replicates), on tokens, on the continuum,
-//   with diagnostics; the comparison queue; the progress board; the report (HTML and PDF); an
-//   export of every coder's spans as W3C; the desktop opened as the lead (window usable).
+//   with diagnostics; the comparison queue and window; the progress board; the Reliability
+//   window's Compute until its results are shown; the report (HTML and PDF); an export of every
+//   coder's spans as W3C; `fourfold-cli build-sample` of the same study (every article a
+//   reliability article of every coder); the desktop opened as the lead and as a coder (window
+//   usable) and its full-text search.
 // Prints one table row per path: N, min and median seconds, and the peak memory so far.
 // Build in a Release tree; runs offscreen unless QT_QPA_PLATFORM is set.
 //
@@ -13,7 +16,10 @@
 // made again (the imports are then not timed); FOURFOLD_BENCH_ONLY=TEXT times only the paths
 // whose name holds TEXT.
 
+#include "app/desktop/coding_session.h"
+#include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/main_window.h"
+#include "app/desktop/reliability/reliability_window.h"
 #include "app/report/report_writer.h"
 #include "bench/bench_support.h"
 #include "bench/study_generator.h"
@@ -31,7 +37,12 @@
 #include <QApplication>
 #include <QDir>
 #include <QElapsedTimer>
+#include <QEventLoop>
+#include <QJsonArray>
+#include <QJsonDocument>
+#include <QJsonObject>
 #include <QLineEdit>
+#include <QProcess>
 #include <QTemporaryDir>
 
 #include <sys/resource.h>
@@ -90,6 +101,60 @@ void agree(const Project &project, UnitKind unit, int replicates, bool diagnosti
     if (diagnostics) {
         check(leaveOneOutCosts(analysed), "leave one out");
         check(run.matching(), "span matching");
+    }
+}
+
+// A source folder for `fourfold-cli build-sample` made from the generated study: study.json
+// (the coders, the lead and every article as a reliability article), the articles, the codings
+// with their gold lines, and an empty gold.jsonl.
+QString writeBuildSampleSource(
+    const QString &dir, const bench::StudyFiles &files, int articles, int coders)
+{
+    const QString source = QDir(dir).filePath(QStringLiteral("build-sample-source"));
+    QDir(source).removeRecursively();
+    QDir().mkpath(source);
+    QJsonArray people;
+    for (int c = 0; c < coders; ++c) {
+        const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
+        people.append(QJsonObject {{QStringLiteral("name"), pseudonym},
+            {QStringLiteral("pseudonym"), pseudonym},
+            {QStringLiteral("role"), QStringLiteral("coder")}});
+    }
+    people.append(QJsonObject {{QStringLiteral("name"), QStringLiteral("Lead")},
+        {QStringLiteral("pseudonym"), QStringLiteral("L01")},
+        {QStringLiteral("role"), QStringLiteral("lead")}});
+    QJsonArray reliability;
+    for (int a = 0; a < articles; ++a)
+        reliability.append(QStringLiteral("g%1").arg(a + 1, 6, 10, QLatin1Char('0')));
+    QFile study(QDir(source).filePath(QStringLiteral("study.json")));
+    QFile gold(QDir(source).filePath(QStringLiteral("gold.jsonl")));
+    if (!study.open(QIODevice::WriteOnly) || !gold.open(QIODevice::WriteOnly)
+        || study.write(QJsonDocument(
+               QJsonObject {{QStringLiteral("name"), QStringLiteral("Generated study")},
+                   {QStringLiteral("language"), QStringLiteral("en")},
+                   {QStringLiteral("coders"), people},
+                   {QStringLiteral("reliabilityArticles"), reliability}})
+                           .toJson())
+            < 0
+        || !QFile::copy(files.articles, QDir(source).filePath(QStringLiteral("articles.jsonl")))
+        || !QFile::copy(files.codings, QDir(source).filePath(QStringLiteral("codings.jsonl")))) {
+        std::fprintf(stderr, "cannot write the build-sample source in %s\n", qPrintable(source));
+        std::exit(1);
+    }
+    return source;
+}
+
+// Runs fourfold-cli build-sample SOURCE OUT --force as a user would, to its end.
+void buildSample(const QString &source, const QString &out)
+{
+    QProcess cli;
+    cli.setProcessChannelMode(QProcess::ForwardedErrorChannel);
+    cli.start(QStringLiteral(FOURFOLD_CLI),
+        {QStringLiteral("build-sample"), source, out, QStringLiteral("--force")});
+    if (!cli.waitForFinished(-1) || cli.exitStatus() != QProcess::NormalExit
+        || cli.exitCode() != 0) {
+        std::fprintf(stderr, "build-sample failed (exit %d)\n", cli.exitCode());
+        std::exit(1);
     }
 }
 
@@ -156,6 +221,35 @@ int main(int argc, char **argv)
         timed("comparison: one decision's queue row", n, 3,
             [&] { check(articleDisagreement(project, queue.front()), "row"); });
     }
+    if (wanted("comparison window")) {
+        const auto lead = check(project.coderByPseudonym(QStringLiteral("L01")), "lead");
+        if (!lead)
+            fail("lead", Error {ErrorCode::NotFound, QStringLiteral("no lead L01"), {}, {}, 0, 0});
+        CodingSession session(check(Project::open(path), "open"), *lead);
+        timed("comparison window opened (queue and first passage)", n, 3, [&] {
+            ComparisonWindow window(&session);
+            window.resize(1400, 900);
+            window.show();
+            QCoreApplication::processEvents();
+        });
+    }
+    timed("Reliability window: Compute until shown", n, 3, [&] {
+        ReliabilityWindow window(project);
+        window.resize(1200, 800);
+        window.show();
+        QCoreApplication::processEvents();
+        QEventLoop loop;
+        bool ok = false;
+        QObject::connect(&window, &ReliabilityWindow::computed, &loop, [&](bool success) {
+            ok = success;
+            loop.quit();
+        });
+        window.compute();
+        loop.exec();
+        QCoreApplication::processEvents();
+        if (!ok)
+            fail("reliability", Error {ErrorCode::Internal, window.errorMessage(), {}, {}, 0, 0});
+    });
     timed("progress board", n, 3, [&] { check(StudyDesign::progressBoard(project), "progress"); });
     timed("report HTML + PDF (1000 replicates)", n, 3, [&] {
         ReportOptions options;
@@ -172,6 +266,13 @@ int main(int argc, char **argv)
         QDir(o.outDir).removeRecursively();
         check(exportLayer(project, o), "export");
     });
+    if (files && wanted("build-sample")) {
+        const QString source = writeBuildSampleSource(dir, *files, n, coders);
+        const QString out = QDir(dir).filePath(QStringLiteral("built.fourfold"));
+        // Three runs up to 10,000 articles; one at larger sizes (an import, like the others).
+        timed("build-sample (every article a reliability article)", n, n <= 10000 ? 3 : 1,
+            [&] { buildSample(source, out); });
+    }
     const auto openDesktop = [&](const char *label, const QString &as) {
         timed(label, n, 3, [&] {
             MainWindow window;

@@ -38,8 +38,9 @@ Result<QJsonObject> readStudy(const QString &path)
     return doc.object();
 }
 
-// Builds the whole project at `target`; the caller removes it on failure.
-Status build(const QString &sourceDir, const QString &target)
+// Builds the whole project at `target`, to be renamed `finalName`; the caller removes it on
+// failure.
+Status build(const QString &sourceDir, const QString &target, const QString &finalName)
 {
     const QDir dir(sourceDir);
     const QString studyPath = dir.filePath(QStringLiteral("study.json"));
@@ -76,17 +77,21 @@ Status build(const QString &sourceDir, const QString &target)
     if (!imported)
         return std::unexpected(imported.error());
 
-    for (const QJsonValue &v : study->value(QLatin1String("reliabilityArticles")).toArray()) {
-        auto article = project->articleByExternalId(v.toString());
-        if (!article)
-            return std::unexpected(article.error());
-        if (!*article)
-            return fail(ErrorCode::InvalidInput,
-                CliText::tr("%1: the reliability article \"%2\" is not in articles.jsonl.")
-                    .arg(studyPath, v.toString()));
-        for (CoderId coder : reliabilityCoders)
-            FOURFOLD_TRY_STATUS(project->assign(**article, coder, Phase::Reliability));
-    }
+    // Each loop of writes is one transaction (a commit per assignment took most of the time).
+    FOURFOLD_TRY_STATUS(project->batch([&]() -> Status {
+        for (const QJsonValue &v : study->value(QLatin1String("reliabilityArticles")).toArray()) {
+            auto article = project->articleByExternalId(v.toString());
+            if (!article)
+                return std::unexpected(article.error());
+            if (!*article)
+                return fail(ErrorCode::InvalidInput,
+                    CliText::tr("%1: the reliability article \"%2\" is not in articles.jsonl.")
+                        .arg(studyPath, v.toString()));
+            for (CoderId coder : reliabilityCoders)
+                FOURFOLD_TRY_STATUS(project->assign(**article, coder, Phase::Reliability));
+        }
+        return {};
+    }));
 
     auto codings = importQuotedCodings(
         *project, dir.filePath(QStringLiteral("codings.jsonl")), Phase::Reliability);
@@ -102,10 +107,13 @@ Status build(const QString &sourceDir, const QString &target)
     auto assignments = project->assignments();
     if (!assignments)
         return std::unexpected(assignments.error());
-    for (const Assignment &a : *assignments) {
-        SetArticleStatusEdit done(a.article, a.coder, QStringLiteral("done"));
-        FOURFOLD_TRY_STATUS(project->apply(done));
-    }
+    FOURFOLD_TRY_STATUS(project->batch([&]() -> Status {
+        for (const Assignment &a : *assignments) {
+            SetArticleStatusEdit done(a.article, a.coder, QStringLiteral("done"));
+            FOURFOLD_TRY_STATUS(project->applyInBatch(done));
+        }
+        return {};
+    }));
 
     // Both built-in baselines, run with their default parameters, for the extractor window.
     auto position = PositionBaseline::create();
@@ -122,7 +130,7 @@ Status build(const QString &sourceDir, const QString &target)
     out(CliText::tr(
         "Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans, "
         "2 baseline runs.")
-            .arg(target)
+            .arg(finalName)
             .arg(imported->added.size())
             .arg(study->value(QLatin1String("coders")).toArray().size())
             .arg(codings->spans)
@@ -167,7 +175,7 @@ int runBuildSample(const QStringList &arguments)
     // Built beside the target and renamed at the end, so a failed build leaves no half project.
     const QString temporary = target + QStringLiteral(".building");
     removeProjectFiles(temporary);
-    if (auto st = build(source, temporary); !st) {
+    if (auto st = build(source, temporary, target); !st) {
         removeProjectFiles(temporary);
         return report(st.error());
     }

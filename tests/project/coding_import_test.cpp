@@ -59,6 +59,27 @@ TEST_CASE("quote-anchored codings land on the right code points")
     }
 }
 
+TEST_CASE("codings lines longer than one read step and a last line without a break are read whole")
+{
+    // Lines are read in steps of 64 KiB (coding_import.cpp): a note of 200,000 characters
+    // crosses three steps and the last line of the file has no line break.
+    CodingFixture f;
+    const QByteArray note(200000, 'n');
+    auto r = f.run("{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"cause\",\"quote\":"
+                   "\"blames the budget\",\"note\":\""
+        + note
+        + "\"}\n"
+          "{\"article\":\"f1\",\"coder\":\"C01\",\"function\":\"problem\",\"quote\":"
+          "\"The\",\"occurrence\":2}");
+    REQUIRE(r);
+    CHECK(r->spans == 2);
+    auto spans = f.project.annotations(f.articleId(QStringLiteral("f1")));
+    REQUIRE(spans);
+    REQUIRE(spans->size() == 2);
+    CHECK((*spans)[0].content.note == QString::fromLatin1(note));
+    CHECK((*spans)[1].content.range == TextRange {75, 78});
+}
+
 TEST_CASE("a bad codings file names the line and changes nothing")
 {
     CodingFixture f;
