@@ -2680,6 +2680,19 @@
     </message>
 </context>
 <context>
+    <name>ProgressText</name>
+    <message>
+        <location filename="../app/cli/terminal_progress.cpp" line="46"/>
+        <source>%1: %2% (%3 of %4 MB)</source>
+        <translation>%1: %2% (%3 van %4 MB)</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/terminal_progress.cpp" line="50"/>
+        <source>%1: %2 MB</source>
+        <translation>%1: %2 MB</translation>
+    </message>
+</context>
+<context>
     <name>Project</name>
     <message>
         <location filename="../core/project/project_open.cpp" line="19"/>

@@ -1,4 +1,5 @@
 #include "app/cli/cli_output.h"
+#include "app/cli/terminal_progress.h"
 #include "core/exchange/w3c_import.h"
 #include "core/io/document_split.h"
 #include "core/project/coding_import.h"
@@ -208,7 +209,14 @@ int runImport(const QStringList &arguments)
     QJsonArray files;
     qint64 added = 0;
     for (const QString &file : positional.mid(1)) {
-        auto result = project->importFile(file, options);
+        // Progress on a terminal; Ctrl+C ends the command before the import's one transaction
+        // commits, so nothing of the file is stored.
+        TerminalProgress progress(file);
+        auto result = project->importFile(file, options, [&](qint64 read, qint64 total) {
+            progress.bytes(read, total);
+            return true;
+        });
+        progress.finish();
         if (!result) {
             if (added > 0)
                 err(QCoreApplication::translate("cli",
