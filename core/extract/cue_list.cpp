@@ -105,6 +105,11 @@ Result<CueList> CueList::fromJson(const QByteArray &json, const QString &file)
             if (cue.words.isEmpty())
                 return fail(ErrorCode::InvalidInput,
                     CueListText::tr("%1: category %2 has an empty cue.").arg(file, category.name));
+            const qsizetype index = qsizetype(category.cues.size());
+            if (cue.prefix.front())
+                category.prefixFirst.push_back(index);
+            else
+                category.byFirstWord[cue.words.front()].push_back(index);
             category.cues.push_back(std::move(cue));
         }
         list.m_categories.push_back(std::move(category));
@@ -120,6 +125,7 @@ std::vector<CueList::Hit> CueList::match(const QStringList &words) const
         folded.append(foldWord(w));
 
     std::vector<Hit> hits;
+    std::vector<qsizetype> candidates;
     for (qsizetype c = 0; c < qsizetype(m_categories.size()); ++c) {
         const Category &category = m_categories[size_t(c)];
         const qsizetype lastStart =
@@ -129,7 +135,15 @@ std::vector<CueList::Hit> CueList::match(const QStringList &words) const
             Hit best;
             best.category = c;
             best.firstWord = at;
-            for (qsizetype k = 0; k < qsizetype(category.cues.size()); ++k) {
+            // Only cues whose first word can match here, in file order (the first of the
+            // longest wins, as when every cue was tried).
+            candidates = category.prefixFirst;
+            if (const auto exact = category.byFirstWord.constFind(folded[at]);
+                exact != category.byFirstWord.constEnd()) {
+                candidates.insert(candidates.end(), exact->begin(), exact->end());
+                std::ranges::sort(candidates);
+            }
+            for (const qsizetype k : candidates) {
                 const Cue &cue = category.cues[size_t(k)];
                 const qsizetype n = cue.words.size();
                 if (n <= best.wordCount || at + n > folded.size())

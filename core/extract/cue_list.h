@@ -13,6 +13,7 @@
 #include "core/model/framing_function.h"
 
 #include <QByteArray>
+#include <QHash>
 #include <QJsonObject>
 #include <QString>
 #include <QStringList>
@@ -35,6 +36,10 @@ public:
         bool sentenceInitial = false;
         QJsonObject attributes; // given to spans this category decides (e.g. polarity)
         std::vector<Cue> cues;
+        // The cues by their first word, for cues whose first word is whole (not a prefix), and
+        // the cues whose first word is a prefix: the only ones that can start at a word.
+        QHash<QString, std::vector<qsizetype>> byFirstWord;
+        std::vector<qsizetype> prefixFirst;
     };
     struct Hit {
         qsizetype category = 0; // index into categories()

@@ -7,6 +7,7 @@
 #include <QJsonArray>
 
 #include <cmath>
+#include <random>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -244,4 +245,70 @@ TEST_CASE("cue lists: longest match per category, prefixes, sentence-initial cat
     REQUIRE_FALSE(broken);
     CHECK(broken.error().message
         == QStringLiteral("broken.json: every category needs a name and a function."));
+}
+
+TEST_CASE("cue lists: matching by first word finds what trying every cue finds")
+{
+    // The indexed matching (cue_list.cpp) against a deliberately naive one written here: every
+    // cue tried at every word, the first of the longest kept; on random sentences of the
+    // built-in English list's cue words, prefix cues, repeated words and other words.
+    auto list = CueList::builtIn(QStringLiteral("en"));
+    REQUIRE(list);
+    QStringList vocabulary {QStringLiteral("the"), QStringLiteral("ferry"),
+        QStringLiteral("budget"), QStringLiteral("Blames"), QStringLiteral("it\u2019s")};
+    for (const CueList::Category &category : list->categories())
+        for (const CueList::Cue &cue : category.cues)
+            for (qsizetype i = 0; i < cue.words.size(); ++i)
+                vocabulary << cue.words[i]
+                        + (cue.prefix[size_t(i)] ? QStringLiteral("ing") : QString());
+    const auto naive = [&](const QStringList &words) {
+        std::vector<CueList::Hit> hits;
+        QStringList folded;
+        for (const QString &w : words)
+            folded << CueList::foldWord(w);
+        for (qsizetype c = 0; c < qsizetype(list->categories().size()); ++c) {
+            const CueList::Category &category = list->categories()[size_t(c)];
+            const qsizetype last =
+                category.sentenceInitial ? std::min<qsizetype>(1, folded.size()) : folded.size();
+            for (qsizetype at = 0; at < last;) {
+                CueList::Hit best {c, 0, at, 0};
+                for (qsizetype k = 0; k < qsizetype(category.cues.size()); ++k) {
+                    const CueList::Cue &cue = category.cues[size_t(k)];
+                    const qsizetype n = cue.words.size();
+                    if (n <= best.wordCount || at + n > folded.size())
+                        continue;
+                    bool all = true;
+                    for (qsizetype i = 0; i < n && all; ++i)
+                        all = cue.prefix[size_t(i)] ? folded[at + i].startsWith(cue.words[i])
+                                                    : folded[at + i] == cue.words[i];
+                    if (all)
+                        best = {c, k, at, n};
+                }
+                if (best.wordCount > 0) {
+                    hits.push_back(best);
+                    at += best.wordCount;
+                } else {
+                    ++at;
+                }
+            }
+        }
+        return hits;
+    };
+    std::mt19937 rng(2004);
+    for (int t = 0; t < 2000; ++t) {
+        QStringList words;
+        const int n = 1 + int(rng() % 14);
+        for (int i = 0; i < n; ++i)
+            words << vocabulary[qsizetype(rng() % quint32(vocabulary.size()))];
+        const auto indexed = list->match(words);
+        const auto expected = naive(words);
+        INFO(words.join(QLatin1Char(' ')).toStdString());
+        REQUIRE(indexed.size() == expected.size());
+        for (size_t i = 0; i < indexed.size(); ++i) {
+            CHECK(indexed[i].category == expected[i].category);
+            CHECK(indexed[i].cue == expected[i].cue);
+            CHECK(indexed[i].firstWord == expected[i].firstWord);
+            CHECK(indexed[i].wordCount == expected[i].wordCount);
+        }
+    }
 }
