@@ -233,7 +233,6 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
     std::string unescaped; // this record's quoted fields that held doubled quotes, end to end
     std::vector<std::pair<size_t, size_t>> unescapedFields; // (field, offset) into `unescaped`
     std::vector<qint32> cells;
-    QString unit;
     qsizetype columns = 0;
 
     // One record, as the decoded reading takes it; false where that reading would fail (it
@@ -271,18 +270,13 @@ std::optional<ReliabilityTable> readReliabilityTableBytes(
             const std::string_view cell = trimmed(fields[size_t(c)]);
             cells.push_back(cell.empty() ? ReliabilityTable::kMissing : labels.index(cell));
         }
-        // The id as UTF-16 in a buffer that is reused: an ASCII id is widened byte by byte.
-        if (std::ranges::all_of(id, [](char c) { return (c & 0x80) == 0; })) {
-            unit.resize(qsizetype(id.size()));
-            QChar *out = unit.data();
-            for (size_t k = 0; k < id.size(); ++k)
-                out[k] = QChar(char16_t(id[k]));
-        } else {
-            unit = text(id);
-        }
         idHashes.push_back(quint64(quint32(std::hash<std::string_view> {}(id))) << 32
             | quint64(table.unitCount()));
-        table.appendUnit(unit, cells, line);
+        // An ASCII id is widened as the table stores it; any other is decoded first.
+        if (std::ranges::all_of(id, [](char c) { return (c & 0x80) == 0; }))
+            table.appendUnit(QLatin1String(id.data(), qsizetype(id.size())), cells, line);
+        else
+            table.appendUnit(text(id), cells, line);
         return true;
     };
 

@@ -106,10 +106,21 @@ void ReliabilityTable::reserve(size_t units, size_t idCharacters)
 
 void ReliabilityTable::appendUnit(QStringView id, std::span<const qint32> cells, qint64 line)
 {
+    m_ownText += id;
+    appendOwnUnit(cells, line);
+}
+
+void ReliabilityTable::appendUnit(QLatin1String id, std::span<const qint32> cells, qint64 line)
+{
+    m_ownText += id;
+    appendOwnUnit(cells, line);
+}
+
+void ReliabilityTable::appendOwnUnit(std::span<const qint32> cells, qint64 line)
+{
     if (m_blocks.empty() || m_blocks.back().numbered)
         m_blocks.push_back(Block {m_unitCount, 0, false, {}, {}, 0, m_ownEnd.size()});
     ++m_blocks.back().count;
-    m_ownText += id;
     m_ownEnd.push_back(m_ownText.size());
     appendOwnLine(m_ownEnd.size() - 1, line);
     m_cells.insert(m_cells.end(), cells.begin(), cells.end());

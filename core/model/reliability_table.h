@@ -79,6 +79,8 @@ public:
     // Appends a unit with its own id (any text; `line`: where a file's row begins, 0 = none)
     // and one label index per coder.
     void appendUnit(QStringView id, std::span<const qint32> cells, qint64 line = 0);
+    // The same with an id of Latin-1 (ASCII) characters, widened as it is stored.
+    void appendUnit(QLatin1String id, std::span<const qint32> cells, qint64 line = 0);
     // The same with the cells as labels ("" = missing), interned: for tests and small tables.
     void appendUnit(QStringView id, const QStringList &cells, qint64 line = 0);
     // Appends units "<article><marker>1" … "<article><marker>n", n = cells.size() / coders;
@@ -119,6 +121,8 @@ private:
     const Block &blockOf(size_t unit) const;
     // Fills m_labelIndex from m_labels (once there are more than kScannedLabels).
     void indexLabels();
+    // Ends the unit whose own id was just added to m_ownText.
+    void appendOwnUnit(std::span<const qint32> cells, qint64 line);
     // Records the line of the own id just appended (its index `own`).
     void appendOwnLine(size_t own, qint64 line);
     qint64 ownLine(size_t own) const;
