@@ -150,12 +150,12 @@ int runMerge(const QStringList &arguments)
         for (const ArticleSummary &a : *articles)
             externalIds.insert(a.uuid, a.externalId);
         // Links name annotations, not articles: the article is shown for the other objects.
-        auto articleOf = [&](const store::MergeConflict &c) {
+        auto articleOf = [&](const MergeConflict &c) {
             return externalIds.value(c.theirs.value(QLatin1String("article")).toString());
         };
         if (parser.isSet(json)) {
             QJsonArray items;
-            for (const store::MergeConflict &c : *list)
+            for (const MergeConflict &c : *list)
                 items.append(QJsonObject {{QStringLiteral("conflict"), c.uuid},
                     {QStringLiteral("type"), c.objectType},
                     {QStringLiteral("object"), c.objectUuid}, {QStringLiteral("copy"), c.copyUuid},
@@ -172,7 +172,7 @@ int runMerge(const QStringList &arguments)
             out(QCoreApplication::translate("cli", "No open merge conflicts."));
             return ExitOk;
         }
-        for (const store::MergeConflict &c : *list) {
+        for (const MergeConflict &c : *list) {
             const QString article = articleOf(c);
             out(QCoreApplication::translate("cli", "%1  %2 %3 of %4%5%6")
                     .arg(c.uuid, c.objectType, c.objectUuid, pseudonymOf(pseudonyms, c.theirs),

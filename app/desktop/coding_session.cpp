@@ -99,7 +99,7 @@ std::vector<ArticleRow> CodingSession::articleRows() const
         if (row.status == QLatin1String("assigned")
             && scope->state(s.id, m_coder.id) != CodingState::Untouched)
             row.status = QStringLiteral("started");
-        for (const store::NearCopyRow &n : nearCopies->value(s.id))
+        for (const NearCopy &n : nearCopies->value(s.id))
             row.nearCopyOf << tr("“%1” (%2), similarity %3")
                                   .arg(n.otherTitle, n.otherExternalId)
                                   .arg(n.similarity, 0, 'f', 2);

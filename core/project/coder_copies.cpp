@@ -4,6 +4,7 @@
 #include "core/project/copy_validation.h"
 #include "core/project/project.h"
 #include "core/store/coder_table.h"
+#include "core/store/copy_tables.h"
 #include "core/store/database.h"
 #include "core/store/event_log.h"
 #include "core/store/project_tables.h"
@@ -281,7 +282,7 @@ Status reconcileConflicts(Database &db, const store::PortableRow &object,
     if (!open)
         return std::unexpected(open.error());
     std::vector<bool> matched(losers.size(), false);
-    for (const store::MergeConflict &c : *open) {
+    for (const MergeConflict &c : *open) {
         const QString digest = store::PortableRow {object.type, object.uuid, c.theirs, 0}.digest();
         const auto hit = std::ranges::find_if(
             losers, [&](const Version &v) { return v.row.digest() == digest; });
@@ -299,7 +300,7 @@ Status reconcileConflicts(Database &db, const store::PortableRow &object,
     for (std::size_t i = 0; i < losers.size(); ++i) {
         if (matched[i])
             continue;
-        store::MergeConflict c;
+        MergeConflict c;
         c.objectType = object.type;
         c.objectUuid = object.uuid;
         c.copyUuid = losers[i].copy;
@@ -459,7 +460,7 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
             std::vector<Version> versions;
             if (inProject)
                 addVersion(versions, Version {*mine, QString(), true});
-            for (const store::MergeConflict &c : *open)
+            for (const MergeConflict &c : *open)
                 addVersion(versions,
                     Version {store::PortableRow {row.type, row.uuid, c.theirs, 0}, c.copyUuid});
             if (hasBase)
@@ -664,7 +665,7 @@ Result<std::vector<MergeReport>> CoderCopies::merge(Project &project, const QStr
     return reports;
 }
 
-Result<std::vector<store::MergeConflict>> CoderCopies::conflicts(const Project &project, bool all)
+Result<std::vector<MergeConflict>> CoderCopies::conflicts(const Project &project, bool all)
 {
     return store::mergeConflicts(project.db(), all);
 }
@@ -680,12 +681,12 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
     auto open = store::mergeConflicts(project.db(), false);
     if (!open)
         return std::unexpected(open.error());
-    std::vector<store::MergeConflict> matches;
-    for (const store::MergeConflict &c : *open)
+    std::vector<MergeConflict> matches;
+    for (const MergeConflict &c : *open)
         if (c.uuid == uuid)
             matches = {c};
     if (matches.empty())
-        for (const store::MergeConflict &c : *open)
+        for (const MergeConflict &c : *open)
             if (c.objectUuid == uuid)
                 matches.push_back(c);
     if (matches.empty())
@@ -697,7 +698,7 @@ Status CoderCopies::resolve(Project &project, const QString &uuid, const QString
                 "%1 has %2 open conflicts (from several copies); name the conflict's uuid.")
                 .arg(uuid)
                 .arg(matches.size()));
-    const store::MergeConflict &c = matches.front();
+    const MergeConflict &c = matches.front();
 
     auto sp = Savepoint::begin(project.db());
     if (!sp)

@@ -25,7 +25,7 @@
 
 #include "core/model/coder.h"
 #include "core/model/error.h"
-#include "core/store/copy_tables.h"
+#include "core/model/merge_conflict.h"
 
 #include <QJsonObject>
 #include <QString>
@@ -96,7 +96,7 @@ public:
     static Result<std::vector<MergeReport>> merge(Project &project, const QStringList &paths);
 
     // The project's merge conflicts: the open ones, or all when `all`.
-    static Result<std::vector<store::MergeConflict>> conflicts(const Project &project, bool all);
+    static Result<std::vector<MergeConflict>> conflicts(const Project &project, bool all);
     // Resolves the open conflict `uuid` (the conflict's uuid, or the object's when it has one
     // open conflict) by keeping the version the project holds ("mine") or writing the version
     // that lost ("theirs").

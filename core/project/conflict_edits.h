@@ -3,10 +3,10 @@
 // the project holds, or write the version that lost. The lead's conflicts window pushes these;
 // `fourfold-cli merge --resolve` decides the same way without undo.
 
+#include "core/model/merge_conflict.h"
 #include "core/project/edit.h"
-#include "core/store/copy_tables.h"
 
-#include <optional>
+#include <memory>
 
 namespace fourfold {
 
@@ -14,13 +14,14 @@ namespace fourfold {
 // (an answer that would stand beside it is set aside first), the copy's base records the losing
 // version as settled so that merging that copy again changes nothing, and the conflict is marked
 // resolved. NotFound if `conflict` is not open.
-Status decideConflict(Database &db, const store::MergeConflict &conflict, bool keepTheirs);
+Status decideConflict(Database &db, const MergeConflict &conflict, bool keepTheirs);
 
 class ResolveConflictEdit : public Edit
 {
 public:
     // `conflictUuid` names an open conflict; `keepTheirs` writes the version that lost.
     ResolveConflictEdit(CoderId actor, QString conflictUuid, bool keepTheirs);
+    ~ResolveConflictEdit() override;
 
     QString text() const override;
     QString action() const override { return QStringLiteral("conflict.resolve"); }
@@ -34,11 +35,9 @@ public:
 private:
     QString m_conflictUuid;
     bool m_keepTheirs;
-    // Taken by apply(): what revert() restores.
-    std::optional<store::MergeConflict> m_conflict;
-    std::optional<store::PortableRow> m_objectBefore;
-    std::optional<store::PortableRow> m_otherAnswerBefore;
-    std::optional<store::BaseEntry> m_baseBefore;
+    // Taken by apply(): what revert() restores (the store's rows, defined in the .cpp).
+    struct Before;
+    std::unique_ptr<Before> m_before;
 };
 
 } // namespace fourfold

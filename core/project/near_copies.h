@@ -3,7 +3,7 @@
 // article list and the study design's sampling frame.
 
 #include "core/model/error.h"
-#include "core/store/near_copy_table.h"
+#include "core/model/near_copy.h"
 
 #include <QHash>
 
@@ -17,12 +17,11 @@ class NearCopies
 {
 public:
     // Every pair of live articles recorded as near copies (the newer article first).
-    static Result<std::vector<store::NearCopyRow>> list(const Project &project);
+    static Result<std::vector<NearCopy>> list(const Project &project);
     // How many pairs and how many articles that are a near copy of an older one.
-    static Result<store::NearCopyCounts> counts(const Project &project);
+    static Result<NearCopyCounts> counts(const Project &project);
     // Each live article that is a near copy of an older one, with those pairs.
-    static Result<QHash<ArticleId, std::vector<store::NearCopyRow>>> byArticle(
-        const Project &project);
+    static Result<QHash<ArticleId, std::vector<NearCopy>>> byArticle(const Project &project);
 };
 
 } // namespace fourfold

@@ -439,7 +439,7 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
         auto nearCopies = NearCopies::list(project);
         if (!nearCopies)
             return std::unexpected(nearCopies.error());
-        for (const store::NearCopyRow &row : *nearCopies)
+        for (const NearCopy &row : *nearCopies)
             excluded.insert(row.article.value);
     }
     std::vector<store::FrameArticle> frame;

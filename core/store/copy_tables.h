@@ -5,6 +5,7 @@
 
 #include "core/model/error.h"
 #include "core/model/ids.h"
+#include "core/model/merge_conflict.h"
 
 #include <QHash>
 #include <QJsonObject>
@@ -132,17 +133,6 @@ Status appendCopyEvent(
 Status insertCopyMerge(
     Database &db, const QString &copyUuid, CoderId coder, const QJsonObject &detail);
 
-struct MergeConflict {
-    QString uuid;
-    QString objectType;
-    QString objectUuid;
-    QString copyUuid; // the copy that brought the losing version ("" if the project's own)
-    QJsonObject mine; // the version the project keeps (portable row; {} if none)
-    QJsonObject theirs; // the version that lost (portable row)
-    QString detectedAt;
-    QString resolution; // "" (open), "mine" or "theirs"
-    QString resolvedAt;
-};
 // Conflicts ordered by detection; open ones only unless `all`.
 Result<std::vector<MergeConflict>> mergeConflicts(const Database &db, bool all);
 // Marks the conflict `uuid` resolved with "mine" or "theirs" (now). NotFound if not open.

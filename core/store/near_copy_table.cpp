@@ -15,7 +15,7 @@ Status insertNearCopy(Database &db, ArticleId article, ArticleId other, double s
     return stmt->run();
 }
 
-Result<std::vector<NearCopyRow>> nearCopies(const Database &db)
+Result<std::vector<NearCopy>> nearCopies(const Database &db)
 {
     auto stmt = db.prepare(QStringLiteral(
         "SELECT n.article_id, a.external_id, a.title, n.other_id, o.external_id, o.title, "
@@ -25,7 +25,7 @@ Result<std::vector<NearCopyRow>> nearCopies(const Database &db)
     if (!stmt)
         return std::unexpected(stmt.error());
     return collectRows(*stmt, [](const Statement &s) {
-        return NearCopyRow {ArticleId {s.columnInt(0)}, s.columnText(1), s.columnText(2),
+        return NearCopy {ArticleId {s.columnInt(0)}, s.columnText(1), s.columnText(2),
             ArticleId {s.columnInt(3)}, s.columnText(4), s.columnText(5), s.columnDouble(6),
             s.columnText(7)};
     });

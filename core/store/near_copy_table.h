@@ -4,6 +4,7 @@
 
 #include "core/model/error.h"
 #include "core/model/ids.h"
+#include "core/model/near_copy.h"
 
 #include <QString>
 
@@ -16,27 +17,12 @@ class Database;
 
 namespace store {
 
-struct NearCopyRow {
-    ArticleId article; // the newer article
-    QString articleExternalId;
-    QString articleTitle;
-    ArticleId other; // the older article it is a near copy of
-    QString otherExternalId;
-    QString otherTitle;
-    double similarity = 0.0;
-    QString foundAt; // ISO 8601 UTC
-};
-
 // Records that `article` is a near copy of `other` (found now); a pair already recorded keeps
 // its row.
 Status insertNearCopy(Database &db, ArticleId article, ArticleId other, double similarity);
 // Every recorded pair whose two articles are live, by article then other.
-Result<std::vector<NearCopyRow>> nearCopies(const Database &db);
+Result<std::vector<NearCopy>> nearCopies(const Database &db);
 // How many such pairs there are, and how many live articles are a near copy of another.
-struct NearCopyCounts {
-    qint64 pairs = 0;
-    qint64 articles = 0;
-};
 Result<NearCopyCounts> nearCopyCounts(const Database &db);
 
 // Streams the text of every live article in id order, one row held at a time.

@@ -71,8 +71,8 @@ Result<TeamStatus> TeamProject::status(const Project &project)
     auto conflicts = store::mergeConflicts(db, false);
     if (!conflicts)
         return std::unexpected(conflicts.error());
-    status.openConflicts = std::ranges::count(*conflicts, QStringLiteral("team"),
-        [](const store::MergeConflict &c) { return c.copyUuid; });
+    status.openConflicts = std::ranges::count(
+        *conflicts, QStringLiteral("team"), [](const MergeConflict &c) { return c.copyUuid; });
     return status;
 }
 

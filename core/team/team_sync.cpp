@@ -161,7 +161,7 @@ Result<SyncReport> TeamProject::sync(Project &project)
                 writeHere.push_back(*v.server);
             } else if (changedHere && v.server->digest() != v.local->digest()) {
                 const bool theirs = serverWins(*v.local, *v.server);
-                store::MergeConflict conflict;
+                MergeConflict conflict;
                 conflict.objectType = v.local->type;
                 conflict.objectUuid = v.local->uuid;
                 conflict.copyUuid = QStringLiteral("team");

@@ -105,7 +105,7 @@ TEST_CASE("Import lists and records planted near copies and not other articles o
     auto rows = NearCopies::list(*project);
     REQUIRE(rows);
     REQUIRE(rows->size() == two->nearCopies.size());
-    for (const store::NearCopyRow &row : *rows)
+    for (const NearCopy &row : *rows)
         CHECK(row.similarity >= 0.8);
     CHECK(rows->front().articleExternalId == QStringLiteral("edited"));
     CHECK(rows->front().otherExternalId == QStringLiteral("wire"));

@@ -559,7 +559,7 @@ TEST_CASE("an object changed in the copy and in the project keeps the later chan
             .toString();
     };
     const auto causeConflict = std::ranges::find_if(
-        *open, [&](const store::MergeConflict &c) { return c.objectUuid == cause.uuid; });
+        *open, [&](const MergeConflict &c) { return c.objectUuid == cause.uuid; });
     REQUIRE(causeConflict != open->end());
     CHECK(actorIn(causeConflict->mine) == QStringLiteral("the ferry company"));
     CHECK(actorIn(causeConflict->theirs) == QStringLiteral("the mayor"));
@@ -570,8 +570,8 @@ TEST_CASE("an object changed in the copy and in the project keeps the later chan
     for (const Judgement &j : *answers)
         if (j.coder == f.c1)
             CHECK(j.value == QStringLiteral("remedy"));
-    const auto answerConflict = std::ranges::find_if(*open,
-        [&](const store::MergeConflict &c) { return c.objectType == QLatin1String("judgement"); });
+    const auto answerConflict = std::ranges::find_if(
+        *open, [&](const MergeConflict &c) { return c.objectType == QLatin1String("judgement"); });
     REQUIRE(answerConflict != open->end());
     CHECK(answerConflict->theirs.value(QStringLiteral("value")).toString()
         == QStringLiteral("cause"));

@@ -20,7 +20,7 @@ struct ConflictFixture : CopiesFixture {
     QString copy = handout(QStringLiteral("C01"), QStringLiteral("c01.fourfold"));
     Annotation cause = onlyAnnotation(*main, f1, c1, FramingFunction::Cause);
     Annotation eval = onlyAnnotation(*main, f2, c1, FramingFunction::Evaluation);
-    store::MergeConflict causeConflict, evalConflict;
+    MergeConflict causeConflict, evalConflict;
 
     ConflictFixture()
     {
@@ -50,7 +50,7 @@ struct ConflictFixture : CopiesFixture {
         auto open = CoderCopies::conflicts(*main, false);
         REQUIRE(open);
         REQUIRE(open->size() == 2);
-        for (const store::MergeConflict &c : *open)
+        for (const MergeConflict &c : *open)
             (c.objectUuid == cause.uuid ? causeConflict : evalConflict) = c;
         REQUIRE(causeConflict.copyUuid.isEmpty());
         REQUIRE_FALSE(evalConflict.copyUuid.isEmpty());

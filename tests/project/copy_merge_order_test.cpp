@@ -154,11 +154,11 @@ TEST_CASE("Issue 20 item 8: conflicting copies of one coder merge to the same pr
             == QStringLiteral("A's note"));
         auto open = CoderCopies::conflicts(p, false);
         REQUIRE(open);
-        std::map<QString, const store::MergeConflict *> byObject;
-        for (const store::MergeConflict &c : *open)
+        std::map<QString, const MergeConflict *> byObject;
+        for (const MergeConflict &c : *open)
             byObject[c.objectUuid] = &c;
         REQUIRE(byObject.contains(cause.uuid));
-        const store::MergeConflict &lostCause = *byObject[cause.uuid];
+        const MergeConflict &lostCause = *byObject[cause.uuid];
         CHECK(lostCause.copyUuid == copyA);
         CHECK(lostCause.theirs.value(QStringLiteral("attributes"))
                   .toString()
@@ -181,12 +181,12 @@ TEST_CASE("Issue 20 item 8: conflicting copies of one coder merge to the same pr
                   "SELECT count(*) FROM judgement j JOIN coder c ON c.id = j.coder_id WHERE "
                   "c.pseudonym = 'C01' AND j.deleted = 1 AND j.value = 'cause'")
             == 1);
-        CHECK(std::ranges::count_if(*open, [](const store::MergeConflict &c) {
+        CHECK(std::ranges::count_if(*open, [](const MergeConflict &c) {
             return c.objectType == QLatin1String("judgement")
                 && c.theirs.value(QStringLiteral("value")).toString() == QLatin1String("cause");
         }) == 1);
         // Both statuses of f1 compete too (no modification time: the higher digest wins).
-        CHECK(std::ranges::count_if(*open, [](const store::MergeConflict &c) {
+        CHECK(std::ranges::count_if(*open, [](const MergeConflict &c) {
             return c.objectType == QLatin1String("assignment");
         }) == 1);
         CHECK(open->size() == 4);

@@ -126,7 +126,7 @@ void ConflictsWindow::reload()
     const QSignalBlocker block(m_table);
     m_table->setRowCount(int(m_conflicts.size()));
     for (int i = 0; i < int(m_conflicts.size()); ++i) {
-        const store::MergeConflict &c = m_conflicts[size_t(i)];
+        const MergeConflict &c = m_conflicts[size_t(i)];
         const QJsonObject &shown = c.mine.isEmpty() ? c.theirs : c.mine;
         QString what = c.objectType;
         if (c.objectType == QLatin1String("annotation"))
@@ -154,7 +154,7 @@ void ConflictsWindow::reload()
     showCurrent();
 }
 
-QString ConflictsWindow::coderOf(const store::MergeConflict &c) const
+QString ConflictsWindow::coderOf(const MergeConflict &c) const
 {
     const QJsonObject &shown = c.mine.isEmpty() ? c.theirs : c.mine;
     return m_pseudonyms.value(shown.value(QLatin1String("coder")).toString(), tr("?"));
@@ -234,7 +234,7 @@ void ConflictsWindow::showCurrent()
                 : QString());
         return;
     }
-    const store::MergeConflict &c = m_conflicts[size_t(row)];
+    const MergeConflict &c = m_conflicts[size_t(row)];
     m_mine->setHtml(describe(c.mine, c.objectType));
     m_theirs->setHtml(describe(c.theirs, c.objectType));
 }
@@ -257,7 +257,7 @@ bool ConflictsWindow::decide(bool keepTheirs)
         m_message->setText(tr("Choose an open conflict first."));
         return false;
     }
-    const store::MergeConflict c = m_conflicts[size_t(row)];
+    const MergeConflict c = m_conflicts[size_t(row)];
     auto edit = std::make_unique<ResolveConflictEdit>(m_session->coder().id, c.uuid, keepTheirs);
     if (auto st = m_session->project().apply(*edit); !st) {
         m_message->setText(st.error().toString());

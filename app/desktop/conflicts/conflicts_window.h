@@ -31,7 +31,7 @@ public:
     // Reads the conflicts again (after a merge, an undo).
     void reload();
     // For tests: the listed conflicts (open ones, or all with "Show decided"), the current row.
-    const std::vector<store::MergeConflict> &conflicts() const { return m_conflicts; }
+    const std::vector<MergeConflict> &conflicts() const { return m_conflicts; }
     void setCurrent(int row);
     void setShowDecided(bool on);
     // Decides the current conflict; false (with a message) if none is chosen or it is decided.
@@ -43,10 +43,10 @@ private:
     bool decide(bool keepTheirs);
     void showCurrent();
     QString describe(const QJsonObject &row, const QString &type) const;
-    QString coderOf(const store::MergeConflict &c) const;
+    QString coderOf(const MergeConflict &c) const;
 
     CodingSession *m_session;
-    std::vector<store::MergeConflict> m_conflicts;
+    std::vector<MergeConflict> m_conflicts;
     QHash<QString, QString> m_articleTitles; // article uuid → title
     QHash<QString, qint64> m_articleIds; // article uuid → id
     QHash<QString, QString> m_pseudonyms; // coder uuid → pseudonym
