@@ -6,7 +6,7 @@
 #include "core/project/article_status_edit.h"
 #include "core/project/testing/project_database.h"
 #include "core/store/codebook_table.h"
-#include "tests/study/study_fixture.h"
+#include "tests/project/study_fixture.h"
 #include "tests/support/cli_run.h"
 #include "tests/support/db_dump.h"
 

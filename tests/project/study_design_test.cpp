@@ -4,7 +4,7 @@
 #include "core/project/article_status_edit.h"
 #include "core/project/study_design.h"
 #include "core/project/testing/project_database.h"
-#include "tests/study/study_fixture.h"
+#include "tests/project/study_fixture.h"
 #include "tests/support/db_dump.h"
 
 #include <QJsonArray>

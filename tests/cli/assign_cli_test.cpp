@@ -2,7 +2,7 @@
 // and the same draw as the core for the same seed.
 #include "core/project/article_status_edit.h"
 #include "core/project/study_design.h"
-#include "tests/study/study_fixture.h"
+#include "tests/project/study_fixture.h"
 #include "tests/support/cli_run.h"
 
 #include <QJsonArray>
