@@ -3056,711 +3056,711 @@
 <context>
     <name>ReportDocumentText</name>
     <message>
-        <location filename="../app/report/report_document.cpp" line="161"/>
-        <location filename="../app/report/report_document.cpp" line="924"/>
-        <location filename="../app/report/report_document.cpp" line="1079"/>
-        <location filename="../app/report/report_document.cpp" line="1081"/>
+        <location filename="../app/report/report_document.cpp" line="157"/>
+        <location filename="../app/report/report_document.cpp" line="159"/>
+        <location filename="../app/report/report_markup.cpp" line="92"/>
+        <location filename="../app/report/report_frames_section.cpp" line="86"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="163"/>
+        <location filename="../app/report/report_markup.cpp" line="94"/>
         <source>reliable</source>
         <translation>reliabel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="165"/>
+        <location filename="../app/report/report_markup.cpp" line="96"/>
         <source>tentative</source>
         <translation>vorläufig</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="169"/>
+        <location filename="../app/report/report_markup.cpp" line="100"/>
         <source>unreliable</source>
         <translation>nicht reliabel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="226"/>
+        <location filename="../app/report/report_markup.cpp" line="137"/>
         <source>paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="226"/>
+        <location filename="../app/report/report_markup.cpp" line="137"/>
         <source>paragraphs</source>
         <translation>Absätze</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="228"/>
+        <location filename="../app/report/report_markup.cpp" line="139"/>
         <source>token</source>
         <translation>Token</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="228"/>
+        <location filename="../app/report/report_markup.cpp" line="139"/>
         <source>tokens</source>
         <translation>Tokens</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="230"/>
+        <location filename="../app/report/report_markup.cpp" line="141"/>
         <source>sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="230"/>
+        <location filename="../app/report/report_markup.cpp" line="141"/>
         <source>sentences</source>
         <translation>Sätze</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="237"/>
+        <location filename="../app/report/report_document.cpp" line="50"/>
         <source>unit: %1</source>
         <translation>Einheit: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="238"/>
+        <location filename="../app/report/report_document.cpp" line="51"/>
         <source>phase: %1</source>
         <translation>Phase: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="240"/>
+        <location filename="../app/report/report_document.cpp" line="53"/>
         <source>all phases</source>
         <translation>alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="241"/>
+        <location filename="../app/report/report_document.cpp" line="54"/>
         <source>bootstrap: %1 replicates, seed %2</source>
         <translation>Bootstrap: %1 Replikationen, Seed %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="245"/>
+        <location filename="../app/report/report_document.cpp" line="58"/>
         <source>Inter-coder reliability</source>
         <translation>Intercoder-Reliabilität</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="248"/>
+        <location filename="../app/report/report_document.cpp" line="61"/>
         <source>Project “%1” · written %2 by %3 · %4</source>
         <translation>Projekt „%1“ · geschrieben %2 von %3 · %4</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="263"/>
+        <location filename="../app/report/report_method_text.cpp" line="32"/>
         <source>%1 coded %2 articles (%3 spans)</source>
         <translation>%1 codierte %2 Artikel (%3 Textstellen)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="273"/>
+        <location filename="../app/report/report_method_text.cpp" line="42"/>
         <source>Inter-coder reliability was assessed on a reliability sample of %1 articles that two or more coders coded independently (%2 of them by all %3 coders), out of %4 articles in the project. </source>
         <translation>Die Intercoder-Reliabilität wurde an einer Reliabilitätsstichprobe von %1 Artikeln bestimmt, die zwei oder mehr Codierende unabhängig voneinander codierten (%2 davon von allen %3 Codierenden), von %4 Artikeln im Projekt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="285"/>
+        <location filename="../app/report/report_method_text.cpp" line="54"/>
         <source>The sample was drawn %1. </source>
         <translation>Die Stichprobe wurde %1 gezogen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="286"/>
+        <location filename="../app/report/report_method_text.cpp" line="55"/>
         <source>state how the articles were drawn, e.g. a simple random sample of the study&apos;s articles, with its size and seed</source>
         <translation>geben Sie an, wie die Artikel gezogen wurden, z. B. als einfache Zufallsstichprobe aus den Artikeln der Studie, mit Umfang und Seed</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="290"/>
+        <location filename="../app/report/report_method_text.cpp" line="59"/>
         <source>%1 coders (%2) took part: %3. </source>
         <translation>%1 Codierende (%2) nahmen teil: %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="294"/>
+        <location filename="../app/report/report_method_text.cpp" line="63"/>
         <source>Articles that coders had started but not yet marked as finished were included. </source>
         <translation>Artikel, die Codierende begonnen, aber noch nicht als abgeschlossen markiert hatten, wurden einbezogen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="297"/>
+        <location filename="../app/report/report_method_text.cpp" line="66"/>
         <source>Only articles that a coder had marked as finished count for that coder. </source>
         <translation>Für jede codierende Person zählen nur Artikel, die sie als abgeschlossen markiert hatte. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="301"/>
+        <location filename="../app/report/report_method_text.cpp" line="70"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="303"/>
+        <location filename="../app/report/report_method_text.cpp" line="72"/>
         <source>Articles still in progress were left out: %1. </source>
         <translation>Noch begonnene Artikel wurden ausgelassen: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="307"/>
+        <location filename="../app/report/report_method_text.cpp" line="76"/>
         <source>Before the reliability coding, coders trained on %1 articles and coded a pilot of %2 articles; %3. </source>
         <translation>Vor der Reliabilitätscodierung übten die Codierenden an %1 Artikeln und codierten einen Pretest von %2 Artikeln; %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="314"/>
+        <location filename="../app/report/report_method_text.cpp" line="83"/>
         <source>hours of training</source>
         <translation>Stunden Schulung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="316"/>
+        <location filename="../app/report/report_method_text.cpp" line="85"/>
         <source>Coder training: %1. </source>
         <translation>Codiererschulung: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="318"/>
+        <location filename="../app/report/report_method_text.cpp" line="87"/>
         <source>describe the training and its approximate hours</source>
         <translation>beschreiben Sie die Schulung und ihren ungefähren Umfang in Stunden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="324"/>
+        <location filename="../app/report/report_method_text.cpp" line="93"/>
         <source>%1 α = %2</source>
         <translation>%1 α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="328"/>
+        <location filename="../app/report/report_method_text.cpp" line="97"/>
         <source> (95% CI %1)</source>
         <translation> (95%-KI %1)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="333"/>
+        <location filename="../app/report/report_method_text.cpp" line="102"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
         <translation>Jede der vier Framing-Funktionen nach Entman (1993) wurde als Textstelle codiert; für die Reliabilität wurde jede Funktion zu einer binären Variablen (vorhanden oder nicht vorhanden) je %1: eine Einheit (%2) trägt eine Funktion, wenn die Textstelle einer codierenden Person mit dieser Funktion sie überlappt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="338"/>
+        <location filename="../app/report/report_method_text.cpp" line="107"/>
         <source>We report Krippendorff&apos;s alpha (Krippendorff, 2004) because it handles any number of coders, missing data and any level of measurement (Hayes &amp; Krippendorff, 2007). </source>
         <translation>Wir berichten Krippendorffs Alpha (Krippendorff, 2004), weil es beliebig viele Codierende, fehlende Daten und jedes Skalenniveau zulässt (Hayes &amp; Krippendorff, 2007). </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="342"/>
+        <location filename="../app/report/report_method_text.cpp" line="111"/>
         <source>Alpha was %1</source>
         <translation>Alpha betrug %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="344"/>
+        <location filename="../app/report/report_method_text.cpp" line="113"/>
         <source>; for the set of functions per %1, compared with the MASI distance (Passonneau, 2006), α = %2</source>
         <translation>; für die Menge der Funktionen je %1, verglichen mit der MASI-Distanz (Passonneau, 2006), α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="351"/>
+        <location filename="../app/report/report_method_text.cpp" line="120"/>
         <source>Intervals are 95% percentile bootstrap intervals from %1 resamples of the units; the table also gives the interval from resampled pairable values (Hayes &amp; Krippendorff, 2007), which is narrower than its nominal level when more than two coders are compared. </source>
         <translation>Die Intervalle sind 95%-Perzentil-Bootstrap-Intervalle aus %1 Neuziehungen der Einheiten; die Tabelle nennt auch das Intervall aus neu gezogenen paarbaren Werten (Hayes &amp; Krippendorff, 2007), das enger als sein nominales Niveau ist, wenn mehr als zwei Codierende verglichen werden. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="357"/>
+        <location filename="../app/report/report_method_text.cpp" line="126"/>
         <source>Following Krippendorff (2004), variables with α&#xa0;≥&#xa0;0.800 are relied on and variables with 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 support tentative conclusions only. </source>
         <translation>Nach Krippendorff (2004) wird Variablen mit α&#xa0;≥&#xa0;0.800 vertraut, und Variablen mit 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 tragen nur vorläufige Schlüsse. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="368"/>
+        <location filename="../app/report/report_method_text.cpp" line="137"/>
         <source>%1 (%2) α = %3</source>
         <translation>%1 (%2) α = %3</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="374"/>
+        <location filename="../app/report/report_method_text.cpp" line="144"/>
         <source>For the other variables alpha was: %1.</source>
         <translation>Für die übrigen Variablen betrug Alpha: %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="379"/>
+        <location filename="../app/report/report_method_text.cpp" line="149"/>
         <source>Disagreements were resolved by adjudication into a separate gold standard: %1 spans on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Abweichungen wurden durch Entscheidung in einen getrennten Goldstandard aufgelöst: %1 Textstellen in %2 Artikeln, entschieden von %3, %4 davon mit schriftlicher Begründung. Die unabhängigen Codierungen blieben unverändert; alle obigen Werte stammen aus ihnen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="391"/>
+        <location filename="../app/report/report_method_text.cpp" line="161"/>
         <source>No adjudication is recorded in the project yet: %1. </source>
         <translation>Im Projekt ist noch keine Entscheidung verzeichnet: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="392"/>
+        <location filename="../app/report/report_method_text.cpp" line="162"/>
         <source>say how disagreements were resolved, e.g. by discussion or by the lead</source>
         <translation>geben Sie an, wie Abweichungen aufgelöst wurden, z. B. durch Diskussion oder durch die Leitung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="395"/>
+        <location filename="../app/report/report_method_text.cpp" line="165"/>
         <source>Coding followed version %1 of the codebook (“%2”)</source>
         <translation>Die Codierung folgte Version %1 des Codebuchs („%2“)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="400"/>
+        <location filename="../app/report/report_method_text.cpp" line="170"/>
         <source>; %1 of %2 codings were made under an earlier version</source>
         <translation>; %1 von %2 Codierungen entstanden unter einer früheren Version</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="405"/>
+        <location filename="../app/report/report_method_text.cpp" line="175"/>
         <source>, which is available at %1.</source>
         <translation>, das unter %1 verfügbar ist.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="406"/>
+        <location filename="../app/report/report_method_text.cpp" line="176"/>
         <source>where readers can obtain it</source>
         <translation>wo Lesende es erhalten können</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="410"/>
+        <location filename="../app/report/report_method_text.cpp" line="180"/>
         <source>Highlighted brackets are for the authors to complete: the project does not record these facts.</source>
         <translation>Hervorgehobene Klammern ergänzen die Autorinnen und Autoren: das Projekt verzeichnet diese Angaben nicht.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="427"/>
+        <location filename="../app/report/report_method_text.cpp" line="198"/>
         <source>Size of the reliability sample and how it was selected</source>
         <translation>Umfang der Reliabilitätsstichprobe und wie sie ausgewählt wurde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="429"/>
+        <location filename="../app/report/report_method_text.cpp" line="200"/>
         <source>Relationship of the reliability sample to the full sample</source>
         <translation>Verhältnis der Reliabilitätsstichprobe zur Gesamtstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="431"/>
+        <location filename="../app/report/report_method_text.cpp" line="202"/>
         <source>Number of reliability coders</source>
         <translation>Anzahl der Codierenden in der Reliabilitätsprüfung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="432"/>
+        <location filename="../app/report/report_method_text.cpp" line="203"/>
         <source>Amount of coding conducted by each coder</source>
         <translation>Umfang der Codierung je codierender Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="433"/>
+        <location filename="../app/report/report_method_text.cpp" line="204"/>
         <source>Index or indices selected and why</source>
         <translation>Gewählte Koeffizienten und Begründung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="434"/>
+        <location filename="../app/report/report_method_text.cpp" line="205"/>
         <source>Reliability for each variable, for each index</source>
         <translation>Reliabilität jeder Variablen, für jeden Koeffizienten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="435"/>
+        <location filename="../app/report/report_method_text.cpp" line="206"/>
         <source>Amount of coder training required to reach reliability</source>
         <translation>Umfang der Codiererschulung bis zum Erreichen der Reliabilität</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="437"/>
+        <location filename="../app/report/report_method_text.cpp" line="208"/>
         <source>How disagreements were resolved</source>
         <translation>Wie Abweichungen aufgelöst wurden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="438"/>
+        <location filename="../app/report/report_method_text.cpp" line="209"/>
         <source>Where the codebook and coding instructions can be obtained</source>
         <translation>Wo Codebuch und Codieranweisungen erhältlich sind</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="443"/>
+        <location filename="../app/report/report_method_text.cpp" line="214"/>
         <source>#</source>
         <translation>#</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="443"/>
+        <location filename="../app/report/report_method_text.cpp" line="214"/>
         <source>Item</source>
         <translation>Punkt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="444"/>
+        <location filename="../app/report/report_method_text.cpp" line="215"/>
         <source>In this report</source>
         <translation>In diesem Bericht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="452"/>
+        <location filename="../app/report/report_method_text.cpp" line="223"/>
         <source>filled in from the project</source>
         <translation>aus dem Projekt ausgefüllt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="453"/>
+        <location filename="../app/report/report_method_text.cpp" line="224"/>
         <source>partly filled in; complete the bracket</source>
         <translation>teilweise ausgefüllt; ergänzen Sie die Klammer</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="466"/>
-        <location filename="../app/report/report_document.cpp" line="468"/>
-        <location filename="../app/report/report_document.cpp" line="563"/>
-        <location filename="../app/report/report_document.cpp" line="644"/>
-        <location filename="../app/report/report_document.cpp" line="680"/>
-        <location filename="../app/report/report_document.cpp" line="810"/>
+        <location filename="../app/report/report_sections.cpp" line="36"/>
+        <location filename="../app/report/report_sections.cpp" line="38"/>
+        <location filename="../app/report/report_sections.cpp" line="117"/>
+        <location filename="../app/report/report_sections.cpp" line="201"/>
+        <location filename="../app/report/report_sections.cpp" line="238"/>
+        <location filename="../app/report/report_sections.cpp" line="372"/>
         <source>Variable</source>
         <translation>Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="468"/>
+        <location filename="../app/report/report_sections.cpp" line="38"/>
         <source>Level</source>
         <translation>Niveau</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="475"/>
-        <location filename="../app/report/report_document.cpp" line="645"/>
+        <location filename="../app/report/report_sections.cpp" line="39"/>
+        <location filename="../app/report/report_sections.cpp" line="202"/>
         <source>Units</source>
         <translation>Einh.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="476"/>
-        <location filename="../app/report/report_document.cpp" line="564"/>
+        <location filename="../app/report/report_sections.cpp" line="40"/>
+        <location filename="../app/report/report_sections.cpp" line="118"/>
         <source>Pairable values</source>
         <translation>Paarb. Werte</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="477"/>
+        <location filename="../app/report/report_sections.cpp" line="41"/>
         <source>95% CI, units</source>
         <translation>95%-KI, Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="478"/>
+        <location filename="../app/report/report_sections.cpp" line="41"/>
         <source>95% CI, pairs</source>
         <translation>95%-KI, Paare</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="479"/>
-        <location filename="../app/report/report_document.cpp" line="645"/>
+        <location filename="../app/report/report_sections.cpp" line="42"/>
+        <location filename="../app/report/report_sections.cpp" line="202"/>
         <source>Agreement</source>
         <translation>Übereinst.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="479"/>
-        <location filename="../app/report/report_document.cpp" line="733"/>
+        <location filename="../app/report/report_sections.cpp" line="42"/>
+        <location filename="../app/report/report_sections.cpp" line="292"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="486"/>
+        <location filename="../app/report/report_sections.cpp" line="56"/>
         <source>not computed: %1</source>
         <translation>nicht berechnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="515"/>
+        <location filename="../app/report/report_sections.cpp" line="86"/>
         <source>Units: %1 (articles for article-level items; passages matched across coders for span attributes). Agreement: percent agreement, which is not chance-corrected and is never reported alone (Lombard et al., 2002). Units: units resampled, percentile interval (the interval to report); pairs: pairable values resampled with the expected disagreement held fixed (Hayes &amp; Krippendorff, 2007), too narrow with more than two coders.</source>
         <translation>Einheiten: %1 (Artikel für Items auf Artikelebene; zwischen Codierenden zugeordnete Passagen für Merkmale von Textstellen). Übereinstimmung: prozentuale Übereinstimmung, die nicht zufallskorrigiert ist und nie allein berichtet wird (Lombard et al., 2002). Einheiten: Einheiten neu gezogen, Perzentilintervall (das zu berichtende Intervall); Paare: paarbare Werte neu gezogen bei festgehaltener erwarteter Nichtübereinstimmung (Hayes &amp; Krippendorff, 2007), bei mehr als zwei Codierenden zu eng.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="550"/>
+        <location filename="../app/report/report_sections.cpp" line="103"/>
         <source>Krippendorff&apos;s alpha per variable</source>
         <translation>Krippendorffs Alpha je Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="551"/>
+        <location filename="../app/report/report_sections.cpp" line="104"/>
         <source>Krippendorff&apos;s alpha per variable (dots) with 95% bootstrap intervals: whiskers resample pairable values (Hayes &amp; Krippendorff, 2007), bands resample units. The lines mark 0.667 and 0.800 (Krippendorff, 2004).</source>
         <translation>Krippendorffs Alpha je Variable (Punkte) mit 95%-Bootstrap-Intervallen: Whisker ziehen paarbare Werte neu (Hayes &amp; Krippendorff, 2007), Bänder ziehen Einheiten neu. Die Linien markieren 0.667 und 0.800 (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="565"/>
+        <location filename="../app/report/report_sections.cpp" line="119"/>
         <source>Rarest value</source>
         <translation>Seltenster Wert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="566"/>
+        <location filename="../app/report/report_sections.cpp" line="120"/>
         <source>Minimum for α ≥ 0.800</source>
         <translation>Minimum für α ≥ 0.800</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="567"/>
+        <location filename="../app/report/report_sections.cpp" line="121"/>
         <source>Enough?</source>
         <translation>Ausreichend?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="582"/>
+        <location filename="../app/report/report_sections.cpp" line="137"/>
         <source>yes</source>
         <translation>ja</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="583"/>
+        <location filename="../app/report/report_sections.cpp" line="138"/>
         <source>too few values</source>
         <translation>zu wenige Werte</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="586"/>
+        <location filename="../app/report/report_sections.cpp" line="141"/>
         <source>Krippendorff&apos;s (2004, §11.4) minimum number of pairable values for α ≥ 0.800 at p = 0.05, after Bloch &amp; Kraemer (1989), given the share of the rarest value.</source>
         <translation>Krippendorffs (2004, §11.4) Mindestzahl paarbarer Werte für α ≥ 0.800 bei p = 0.05 nach Bloch &amp; Kraemer (1989), gegeben den Anteil des seltensten Werts.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="598"/>
+        <location filename="../app/report/report_sections.cpp" line="154"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="598"/>
+        <location filename="../app/report/report_sections.cpp" line="154"/>
         <source>Role</source>
         <translation>Rolle</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="599"/>
-        <location filename="../app/report/report_document.cpp" line="887"/>
+        <location filename="../app/report/report_sections.cpp" line="155"/>
+        <location filename="../app/report/report_frames_section.cpp" line="49"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="600"/>
+        <location filename="../app/report/report_sections.cpp" line="156"/>
         <source>Shared articles</source>
         <translation>Gemeinsame Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="601"/>
+        <location filename="../app/report/report_sections.cpp" line="157"/>
         <source>Spans</source>
         <translation>Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="607"/>
+        <location filename="../app/report/report_sections.cpp" line="163"/>
         <source>Answers</source>
         <translation>Antworten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="623"/>
+        <location filename="../app/report/report_sections.cpp" line="179"/>
         <source>Coders appear by pseudonym only. Articles: coded by the coder (assigned, or with a span or an answer); shared: also coded by another coder in this report.</source>
         <translation>Codierende erscheinen nur unter Pseudonym. Artikel: von der Person codiert (zugewiesen oder mit einer Textstelle oder Antwort); gemeinsam: in diesem Bericht auch von einer anderen Person codiert.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="634"/>
+        <location filename="../app/report/report_sections.cpp" line="191"/>
         <source>Cohen&apos;s kappa per coder pair</source>
         <translation>Cohens Kappa je Codierpaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="635"/>
+        <location filename="../app/report/report_sections.cpp" line="192"/>
         <source>Cohen&apos;s kappa (Cohen, 1960) for each pair of coders and each function, on the %1 both coded. Darker is higher; hatched cells are undefined.</source>
         <translation>Cohens Kappa (Cohen, 1960) für jedes Paar von Codierenden und jede Funktion, auf den %1, die beide codierten. Dunkler ist höher; schraffierte Zellen sind nicht definiert.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="644"/>
+        <location filename="../app/report/report_sections.cpp" line="201"/>
         <source>Pair</source>
         <translation>Paar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="646"/>
+        <location filename="../app/report/report_sections.cpp" line="203"/>
         <source>95% CI</source>
         <translation>95%-KI</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="666"/>
+        <location filename="../app/report/report_sections.cpp" line="223"/>
         <source>95% CI: large-sample interval with the standard error of Fleiss, Cohen &amp; Everitt (1969). A coder whose kappa is low with everyone else is worth a look before the coders are retrained.</source>
         <translation>95%-KI: Intervall für große Stichproben mit dem Standardfehler nach Fleiss, Cohen &amp; Everitt (1969). Eine codierende Person, deren Kappa mit allen anderen niedrig ist, verdient einen Blick, bevor die Codierenden nachgeschult werden.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="680"/>
+        <location filename="../app/report/report_sections.cpp" line="238"/>
         <source>Fleiss&apos; κ</source>
         <translation>Fleiss&apos; κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="681"/>
+        <location filename="../app/report/report_sections.cpp" line="239"/>
         <source>Light&apos;s κ</source>
         <translation>Lights κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="681"/>
+        <location filename="../app/report/report_sections.cpp" line="239"/>
         <source>Cohen&apos;s κ</source>
         <translation>Cohens κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="682"/>
+        <location filename="../app/report/report_sections.cpp" line="240"/>
         <source>Scott&apos;s π</source>
         <translation>Scotts π</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="683"/>
+        <location filename="../app/report/report_sections.cpp" line="241"/>
         <source>Bennett&apos;s S</source>
         <translation>Bennetts S</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="688"/>
+        <location filename="../app/report/report_sections.cpp" line="246"/>
         <source>n/a</source>
         <translation>n. v.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="702"/>
+        <location filename="../app/report/report_sections.cpp" line="260"/>
         <source>For comparison with older studies: Fleiss (1971) and Light (1971) for any number of coders, Cohen (1960), Scott (1955) and Bennett, Alpert &amp; Goldstein (1954) for two; n/a where their assumptions (complete data, two coders) do not hold.</source>
         <translation>Zum Vergleich mit älteren Studien: Fleiss (1971) und Light (1971) für beliebig viele Codierende, Cohen (1960), Scott (1955) und Bennett, Alpert &amp; Goldstein (1954) für zwei; n. v., wo ihre Voraussetzungen (vollständige Daten, zwei Codierende) nicht erfüllt sind.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="717"/>
+        <location filename="../app/report/report_sections.cpp" line="276"/>
         <source>Not computed: %1</source>
         <translation>Nicht berechnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="720"/>
+        <location filename="../app/report/report_sections.cpp" line="279"/>
         <source>Unitizing alpha (Krippendorff, 2004) compares where the coders put their spans, character by character, on the %1 articles that every coder coded (%2 characters laid end to end).</source>
         <translation>Unitizing-Alpha (Krippendorff, 2004) vergleicht Zeichen für Zeichen, wo die Codierenden ihre Textstellen setzen, auf den %1 Artikeln, die alle Codierenden codierten (%2 Zeichen aneinandergereiht).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="730"/>
+        <location filename="../app/report/report_sections.cpp" line="289"/>
         <source>Function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="731"/>
+        <location filename="../app/report/report_sections.cpp" line="290"/>
         <source>Observed disagreement</source>
         <translation>Beobachtete Nichtübereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="732"/>
+        <location filename="../app/report/report_sections.cpp" line="291"/>
         <source>Expected disagreement</source>
         <translation>Erwartete Nichtübereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="748"/>
+        <location filename="../app/report/report_sections.cpp" line="308"/>
         <source>all four</source>
         <translation>alle vier</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="767"/>
+        <location filename="../app/report/report_sections.cpp" line="328"/>
         <source>Alpha without each coder</source>
         <translation>Alpha ohne jeweils eine codierende Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="769"/>
+        <location filename="../app/report/report_sections.cpp" line="330"/>
         <source>Left out</source>
         <translation>Ausgelassen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="799"/>
+        <location filename="../app/report/report_sections.cpp" line="361"/>
         <source>Alpha recomputed without the coder&apos;s codings; in brackets the change against all coders (positive: the coder pulls alpha down). A diagnostic for retraining, not a licence to report the better figure (Krippendorff, 2004).</source>
         <translation>Alpha ohne die Codierungen der Person neu berechnet; in Klammern die Änderung gegenüber allen Codierenden (positiv: die Person senkt Alpha). Eine Diagnose für die Nachschulung, keine Erlaubnis, den besseren Wert zu berichten (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="806"/>
+        <location filename="../app/report/report_sections.cpp" line="368"/>
         <source>The article that costs most</source>
         <translation>Der Artikel, der am meisten kostet</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="810"/>
+        <location filename="../app/report/report_sections.cpp" line="372"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="811"/>
+        <location filename="../app/report/report_sections.cpp" line="373"/>
         <source>α without it</source>
         <translation>α ohne ihn</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="812"/>
+        <location filename="../app/report/report_sections.cpp" line="374"/>
         <source>Change</source>
         <translation>Änderung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="835"/>
+        <location filename="../app/report/report_sections.cpp" line="397"/>
         <source>Function confusion between coders</source>
         <translation>Funktionsverwechslungen zwischen Codierenden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="837"/>
+        <location filename="../app/report/report_sections.cpp" line="399"/>
         <source>A coder&apos;s span</source>
         <translation>Textstelle einer Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="855"/>
+        <location filename="../app/report/report_sections.cpp" line="417"/>
         <source>For each coder&apos;s span, the function the other coder gave the span that overlaps it most (none: nothing there), summed over ordered pairs of coders. Off the diagonal are the confusions a codebook rule could settle.</source>
         <translation>Für jede Textstelle einer codierenden Person die Funktion, die die andere Person der am stärksten überlappenden Textstelle gab (keine: dort ist nichts), summiert über geordnete Paare von Codierenden. Abseits der Diagonale stehen die Verwechslungen, die eine Codebuchregel klären könnte.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="868"/>
+        <location filename="../app/report/report_frames_section.cpp" line="30"/>
         <source>The newest saved frame analysis, “%1” (saved %2): %3 frames of the layer %4 over %5 articles, by Ward&apos;s hierarchical clustering refined by k-means (Matthes &amp; Kohring 2008). A frame&apos;s characteristic elements are those with an adjusted residual above 1.96 (Haberman 1973), with their share in the frame and in all articles. The frames are only as good as their elements: beside each element variable stands its Krippendorff&apos;s alpha (nominal, articles as units) over the coders of this report.</source>
         <translation>Die neueste gespeicherte Frame-Analyse, „%1“ (gespeichert %2): %3 Frames der Ebene %4 über %5 Artikel, mit hierarchischer Clusteranalyse nach Ward, verfeinert durch k-Means (Matthes &amp; Kohring 2008). Die kennzeichnenden Elemente eines Frames sind jene mit einem standardisierten Residuum über 1.96 (Haberman 1973), mit ihrem Anteil im Frame und in allen Artikeln. Die Frames sind nur so gut wie ihre Elemente: neben jeder Elementvariable steht ihr Krippendorffs Alpha (nominal, Artikel als Einheiten) über die Codierenden dieses Berichts.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="886"/>
+        <location filename="../app/report/report_frames_section.cpp" line="48"/>
         <source>Frame</source>
         <translation>Frame</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="886"/>
+        <location filename="../app/report/report_frames_section.cpp" line="48"/>
         <source>Name</source>
         <translation>Name</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="887"/>
+        <location filename="../app/report/report_frames_section.cpp" line="49"/>
         <source>Share</source>
         <translation>Anteil</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="888"/>
+        <location filename="../app/report/report_frames_section.cpp" line="50"/>
         <source>Characteristic elements</source>
         <translation>Kennzeichnende Elemente</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="890"/>
+        <location filename="../app/report/report_frames_section.cpp" line="52"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="898"/>
+        <location filename="../app/report/report_frames_section.cpp" line="60"/>
         <source>%1 (%2% / %3%)</source>
         <translation>%1 (%2% / %3%)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="909"/>
+        <location filename="../app/report/report_frames_section.cpp" line="71"/>
         <source>none stands out</source>
         <translation>keines sticht heraus</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="916"/>
+        <location filename="../app/report/report_frames_section.cpp" line="78"/>
         <source>Element variable</source>
         <translation>Elementvariable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="917"/>
+        <location filename="../app/report/report_frames_section.cpp" line="79"/>
         <source>Pairable articles</source>
         <translation>Paarbare Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="918"/>
+        <location filename="../app/report/report_frames_section.cpp" line="80"/>
         <source>Characterises</source>
         <translation>Kennzeichnet</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="935"/>
+        <location filename="../app/report/report_method_text.cpp" line="234"/>
         <source>Every figure above is what these commands print (add --json for all digits):</source>
         <translation>Jeder Wert oben ist das, was diese Befehle ausgeben (mit --json alle Stellen):</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="995"/>
+        <location filename="../app/report/report_document.cpp" line="73"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
         <translation>de</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1012"/>
+        <location filename="../app/report/report_document.cpp" line="90"/>
         <source>Method text</source>
         <translation>Methodentext</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1014"/>
+        <location filename="../app/report/report_document.cpp" line="92"/>
         <source>Reporting checklist (Lombard, Snyder-Duch &amp; Bracken, 2002)</source>
         <translation>Checkliste für die Berichterstattung (Lombard, Snyder-Duch &amp; Bracken, 2002)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1016"/>
+        <location filename="../app/report/report_document.cpp" line="94"/>
         <source>Reliability per variable</source>
         <translation>Reliabilität je Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1018"/>
+        <location filename="../app/report/report_document.cpp" line="96"/>
         <source>Is the sample large enough?</source>
         <translation>Ist die Stichprobe groß genug?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1020"/>
+        <location filename="../app/report/report_document.cpp" line="98"/>
         <source>Coders and the amount each coded</source>
         <translation>Codierende und ihr Codierumfang</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1022"/>
+        <location filename="../app/report/report_document.cpp" line="100"/>
         <source>Coder pairs</source>
         <translation>Codierpaare</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1023"/>
+        <location filename="../app/report/report_document.cpp" line="101"/>
         <source>Other coefficients</source>
         <translation>Weitere Koeffizienten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1025"/>
+        <location filename="../app/report/report_document.cpp" line="103"/>
         <source>Span boundaries: unitizing alpha</source>
         <translation>Grenzen der Textstellen: Unitizing-Alpha</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1029"/>
+        <location filename="../app/report/report_document.cpp" line="107"/>
         <source>Where reliability is lost</source>
         <translation>Wo Reliabilität verloren geht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1032"/>
+        <location filename="../app/report/report_document.cpp" line="110"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1033"/>
+        <location filename="../app/report/report_document.cpp" line="111"/>
         <source>Reproducing the figures</source>
         <translation>Die Werte reproduzieren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1035"/>
+        <location filename="../app/report/report_document.cpp" line="113"/>
         <source>References</source>
         <translation>Literatur</translation>
     </message>
@@ -4128,152 +4128,183 @@
     </message>
 </context>
 <context>
-    <name>StudyDesignText</name>
+    <name>StudyEditText</name>
     <message>
-        <location filename="../core/project/study_design.cpp" line="120"/>
-        <location filename="../core/project/study_design.cpp" line="818"/>
+        <location filename="../core/project/study_edits.cpp" line="39"/>
+        <source>The project already holds %1.</source>
+        <translation>Das Projekt enthält %1 bereits.</translation>
+    </message>
+</context>
+<context>
+    <name>StudyDesignText</name>
+    <message numerus="yes">
+        <location filename="../core/project/study_design.cpp" line="847"/>
+        <source>Assign %n article(s)</source>
+        <translation>
+            <numerusform>%n Artikel zuweisen</numerusform>
+            <numerusform>%n Artikel zuweisen</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../core/project/study_design.cpp" line="579"/>
+        <source>Draw the %1 subsample</source>
+        <translation>Die Teilstichprobe der Phase %1 ziehen</translation>
+    </message>
+    <message>
+        <location filename="../core/project/study_design.cpp" line="1329"/>
+        <source>Show effort per coder</source>
+        <translation>Aufwand je Person zeigen</translation>
+    </message>
+    <message>
+        <location filename="../core/project/study_design.cpp" line="1330"/>
+        <source>Hide effort per coder</source>
+        <translation>Aufwand je Person ausblenden</translation>
+    </message>
+    <message>
+        <location filename="../core/project/study_design.cpp" line="121"/>
+        <location filename="../core/project/study_design.cpp" line="827"/>
         <source>There is no coder &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keine codierende Person „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="123"/>
+        <location filename="../core/project/study_design.cpp" line="124"/>
         <source>The coder &quot;%1&quot; is named twice.</source>
         <translation>Die codierende Person „%1“ ist zweimal genannt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="126"/>
-        <location filename="../core/project/study_design.cpp" line="821"/>
+        <location filename="../core/project/study_design.cpp" line="127"/>
+        <location filename="../core/project/study_design.cpp" line="830"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 ist deaktiviert und erhält keine neuen Zuweisungen; aktivieren Sie die Person zuerst.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="399"/>
+        <location filename="../core/project/study_design.cpp" line="400"/>
         <source>A subsample is drawn for the reliability or the pilot phase, not for %1.</source>
         <translation>Eine Teilstichprobe wird für die Reliabilitäts- oder die Pretest-Phase gezogen, nicht für %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="404"/>
+        <location filename="../core/project/study_design.cpp" line="405"/>
         <source>Give either the size of the subsample or its fraction of the articles.</source>
         <translation>Geben Sie entweder den Umfang der Teilstichprobe oder ihren Anteil an den Artikeln an.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="408"/>
+        <location filename="../core/project/study_design.cpp" line="409"/>
         <source>The fraction %1 does not lie in (0, 1].</source>
         <translation>Der Anteil %1 liegt nicht in (0, 1].</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="411"/>
+        <location filename="../core/project/study_design.cpp" line="412"/>
         <source>A reliability subsample needs at least two coders; %1 given.</source>
         <translation>Eine Reliabilitäts-Teilstichprobe braucht mindestens zwei Codierende; angegeben: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="424"/>
+        <location filename="../core/project/study_design.cpp" line="425"/>
         <source>The %1 phase already has a subsample (drawn %2 with seed %3).</source>
         <translation>Die Phase %1 hat bereits eine Teilstichprobe (gezogen %2 mit Seed %3).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="457"/>
+        <location filename="../core/project/study_design.cpp" line="458"/>
         <source>A subsample of %1 articles cannot be drawn from a sampling frame of %2 articles.</source>
         <translation>Eine Teilstichprobe von %1 Artikeln kann nicht aus einer Auswahlgesamtheit von %2 Artikeln gezogen werden.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="575"/>
+        <location filename="../core/project/study_design.cpp" line="574"/>
         <source>The %1 phase already has a subsample.</source>
         <translation>Die Phase %1 hat bereits eine Teilstichprobe.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="599"/>
+        <location filename="../core/project/study_design.cpp" line="609"/>
         <source>The record of the %1 subsample is not a JSON object.</source>
         <translation>Der Eintrag der Teilstichprobe %1 ist kein JSON-Objekt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="645"/>
+        <location filename="../core/project/study_design.cpp" line="655"/>
         <source>The subsample record is damaged: %1.</source>
         <translation>Der Eintrag der Teilstichprobe ist beschädigt: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="656"/>
+        <location filename="../core/project/study_design.cpp" line="666"/>
         <source>no valid phase</source>
         <translation>keine gültige Phase</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="660"/>
+        <location filename="../core/project/study_design.cpp" line="670"/>
         <source>unknown method &quot;%1&quot;</source>
         <translation>unbekannte Methode „%1“</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="665"/>
+        <location filename="../core/project/study_design.cpp" line="675"/>
         <source>unknown stratum &quot;%1&quot;</source>
         <translation>unbekannte Schicht „%1“</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="670"/>
+        <location filename="../core/project/study_design.cpp" line="680"/>
         <source>no valid seed</source>
         <translation>kein gültiger Seed</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="705"/>
+        <location filename="../core/project/study_design.cpp" line="715"/>
         <source>Double coding needs at least two coders; %1 given.</source>
         <translation>Doppelcodierung braucht mindestens zwei Codierende; angegeben: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="707"/>
+        <location filename="../core/project/study_design.cpp" line="717"/>
         <source>Name at least one coder for the remaining articles.</source>
         <translation>Nennen Sie mindestens eine codierende Person für die übrigen Artikel.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="759"/>
+        <location filename="../core/project/study_design.cpp" line="769"/>
         <source>Name at least one article and one coder.</source>
         <translation>Nennen Sie mindestens einen Artikel und eine codierende Person.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="769"/>
-        <location filename="../core/project/study_design.cpp" line="814"/>
+        <location filename="../core/project/study_design.cpp" line="779"/>
+        <location filename="../core/project/study_design.cpp" line="823"/>
         <source>There is no article &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keinen Artikel „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="831"/>
+        <location filename="../core/project/study_design.cpp" line="840"/>
         <source>Article &quot;%1&quot; is already assigned to %2 in the %3 phase.</source>
         <translation>Artikel „%1“ ist %2 in der Phase %3 bereits zugewiesen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="936"/>
+        <location filename="../core/project/study_design.cpp" line="949"/>
         <source>%1 span(s) of %2 carry the value &quot;%3&quot; of the attribute &quot;%4&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the attribute with one of its values (%5).</source>
         <translation>%1 Textstelle(n) von %2 tragen den Wert „%3“ des Merkmals „%4“, den die neue Version weder aufführt noch recodiert; fügen Sie dem Merkmal &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%5).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="955"/>
+        <location filename="../core/project/study_design.cpp" line="968"/>
         <source>%1 answer(s) to the item &quot;%2&quot; are &quot;%3&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the item with one of its values (%4).</source>
         <translation>%1 Antwort(en) auf das Item „%2“ lauten „%3“, was die neue Version weder aufführt noch recodiert; fügen Sie dem Item &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%4).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="988"/>
+        <location filename="../core/project/study_design.cpp" line="1001"/>
         <source>A new codebook version needs a note that says what changed and why.</source>
         <translation>Eine neue Codebuchversion braucht eine Notiz, die sagt, was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="995"/>
+        <location filename="../core/project/study_design.cpp" line="1008"/>
         <source>The codebook is the same as version %1; no new version was made.</source>
         <translation>Das Codebuch ist identisch mit Version %1; es wurde keine neue Version erstellt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1099"/>
+        <location filename="../core/project/study_design.cpp" line="1112"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codebuchversion %1 → %2</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1101"/>
+        <location filename="../core/project/study_design.cpp" line="1114"/>
         <source>no changes</source>
         <translation>keine Änderungen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1197"/>
+        <location filename="../core/project/study_design.cpp" line="1210"/>
         <source>Training feedback is computed on paragraphs, sentences or tokens, not on %1 units.</source>
         <translation>Trainingsfeedback wird auf Absätzen, Sätzen oder Tokens berechnet, nicht auf %1-Einheiten.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1215"/>
+        <location filename="../core/project/study_design.cpp" line="1228"/>
         <source>Name the lead whose training coding is the master: there is not exactly one lead with training annotations.</source>
         <translation>Nennen Sie die Leitung, deren Trainingscodierung die Vorlage ist: es gibt nicht genau eine Leitung mit Trainingsannotationen.</translation>
     </message>

@@ -3056,711 +3056,711 @@
 <context>
     <name>ReportDocumentText</name>
     <message>
-        <location filename="../app/report/report_document.cpp" line="161"/>
-        <location filename="../app/report/report_document.cpp" line="924"/>
-        <location filename="../app/report/report_document.cpp" line="1079"/>
-        <location filename="../app/report/report_document.cpp" line="1081"/>
+        <location filename="../app/report/report_document.cpp" line="157"/>
+        <location filename="../app/report/report_document.cpp" line="159"/>
+        <location filename="../app/report/report_markup.cpp" line="92"/>
+        <location filename="../app/report/report_frames_section.cpp" line="86"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="163"/>
+        <location filename="../app/report/report_markup.cpp" line="94"/>
         <source>reliable</source>
         <translation>betrouwbaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="165"/>
+        <location filename="../app/report/report_markup.cpp" line="96"/>
         <source>tentative</source>
         <translation>voorlopig</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="169"/>
+        <location filename="../app/report/report_markup.cpp" line="100"/>
         <source>unreliable</source>
         <translation>onbetrouwbaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="226"/>
+        <location filename="../app/report/report_markup.cpp" line="137"/>
         <source>paragraph</source>
         <translation>alinea</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="226"/>
+        <location filename="../app/report/report_markup.cpp" line="137"/>
         <source>paragraphs</source>
         <translation>alinea&apos;s</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="228"/>
+        <location filename="../app/report/report_markup.cpp" line="139"/>
         <source>token</source>
         <translation>token</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="228"/>
+        <location filename="../app/report/report_markup.cpp" line="139"/>
         <source>tokens</source>
         <translation>tokens</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="230"/>
+        <location filename="../app/report/report_markup.cpp" line="141"/>
         <source>sentence</source>
         <translation>zin</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="230"/>
+        <location filename="../app/report/report_markup.cpp" line="141"/>
         <source>sentences</source>
         <translation>zinnen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="237"/>
+        <location filename="../app/report/report_document.cpp" line="50"/>
         <source>unit: %1</source>
         <translation>eenheid: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="238"/>
+        <location filename="../app/report/report_document.cpp" line="51"/>
         <source>phase: %1</source>
         <translation>fase: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="240"/>
+        <location filename="../app/report/report_document.cpp" line="53"/>
         <source>all phases</source>
         <translation>alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="241"/>
+        <location filename="../app/report/report_document.cpp" line="54"/>
         <source>bootstrap: %1 replicates, seed %2</source>
         <translation>bootstrap: %1 replicaties, seed %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="245"/>
+        <location filename="../app/report/report_document.cpp" line="58"/>
         <source>Inter-coder reliability</source>
         <translation>Intercodeursbetrouwbaarheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="248"/>
+        <location filename="../app/report/report_document.cpp" line="61"/>
         <source>Project “%1” · written %2 by %3 · %4</source>
         <translation>Project ‘%1’ · geschreven %2 door %3 · %4</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="263"/>
+        <location filename="../app/report/report_method_text.cpp" line="32"/>
         <source>%1 coded %2 articles (%3 spans)</source>
         <translation>%1 codeerde %2 artikelen (%3 fragmenten)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="273"/>
+        <location filename="../app/report/report_method_text.cpp" line="42"/>
         <source>Inter-coder reliability was assessed on a reliability sample of %1 articles that two or more coders coded independently (%2 of them by all %3 coders), out of %4 articles in the project. </source>
         <translation>De intercodeursbetrouwbaarheid is bepaald op een betrouwbaarheidssteekproef van %1 artikelen die twee of meer codeurs onafhankelijk van elkaar codeerden (%2 daarvan door alle %3 codeurs), van de %4 artikelen in het project. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="285"/>
+        <location filename="../app/report/report_method_text.cpp" line="54"/>
         <source>The sample was drawn %1. </source>
         <translation>De steekproef is %1 getrokken. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="286"/>
+        <location filename="../app/report/report_method_text.cpp" line="55"/>
         <source>state how the articles were drawn, e.g. a simple random sample of the study&apos;s articles, with its size and seed</source>
         <translation>vermeld hoe de artikelen zijn getrokken, bijv. als enkelvoudige aselecte steekproef uit de artikelen van het onderzoek, met omvang en seed</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="290"/>
+        <location filename="../app/report/report_method_text.cpp" line="59"/>
         <source>%1 coders (%2) took part: %3. </source>
         <translation>%1 codeurs (%2) namen deel: %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="294"/>
+        <location filename="../app/report/report_method_text.cpp" line="63"/>
         <source>Articles that coders had started but not yet marked as finished were included. </source>
         <translation>Artikelen die codeurs waren begonnen maar nog niet als afgerond hadden gemarkeerd, zijn meegenomen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="297"/>
+        <location filename="../app/report/report_method_text.cpp" line="66"/>
         <source>Only articles that a coder had marked as finished count for that coder. </source>
         <translation>Voor elke codeur tellen alleen de artikelen die hij of zij als afgerond had gemarkeerd. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="301"/>
+        <location filename="../app/report/report_method_text.cpp" line="70"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="303"/>
+        <location filename="../app/report/report_method_text.cpp" line="72"/>
         <source>Articles still in progress were left out: %1. </source>
         <translation>Artikelen die nog in bewerking waren, zijn weggelaten: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="307"/>
+        <location filename="../app/report/report_method_text.cpp" line="76"/>
         <source>Before the reliability coding, coders trained on %1 articles and coded a pilot of %2 articles; %3. </source>
         <translation>Vóór de betrouwbaarheidscodering oefenden de codeurs op %1 artikelen en codeerden ze een pilot van %2 artikelen; %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="314"/>
+        <location filename="../app/report/report_method_text.cpp" line="83"/>
         <source>hours of training</source>
         <translation>uren training</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="316"/>
+        <location filename="../app/report/report_method_text.cpp" line="85"/>
         <source>Coder training: %1. </source>
         <translation>Codeurstraining: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="318"/>
+        <location filename="../app/report/report_method_text.cpp" line="87"/>
         <source>describe the training and its approximate hours</source>
         <translation>beschrijf de training en de geschatte duur in uren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="324"/>
+        <location filename="../app/report/report_method_text.cpp" line="93"/>
         <source>%1 α = %2</source>
         <translation>%1 α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="328"/>
+        <location filename="../app/report/report_method_text.cpp" line="97"/>
         <source> (95% CI %1)</source>
         <translation> (95%-BI %1)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="333"/>
+        <location filename="../app/report/report_method_text.cpp" line="102"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
         <translation>Elk van de vier framingfuncties van Entman (1993) is gecodeerd als een tekstfragment; voor de betrouwbaarheid werd elke functie een binaire variabele (aanwezig of afwezig) per %1: een eenheid (%2) draagt een functie wanneer het fragment van een codeur met die functie ermee overlapt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="338"/>
+        <location filename="../app/report/report_method_text.cpp" line="107"/>
         <source>We report Krippendorff&apos;s alpha (Krippendorff, 2004) because it handles any number of coders, missing data and any level of measurement (Hayes &amp; Krippendorff, 2007). </source>
         <translation>We rapporteren Krippendorffs alfa (Krippendorff, 2004) omdat die met elk aantal codeurs, ontbrekende gegevens en elk meetniveau overweg kan (Hayes &amp; Krippendorff, 2007). </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="342"/>
+        <location filename="../app/report/report_method_text.cpp" line="111"/>
         <source>Alpha was %1</source>
         <translation>Alfa was %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="344"/>
+        <location filename="../app/report/report_method_text.cpp" line="113"/>
         <source>; for the set of functions per %1, compared with the MASI distance (Passonneau, 2006), α = %2</source>
         <translation>; voor de verzameling functies per %1, vergeleken met de MASI-afstand (Passonneau, 2006), α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="351"/>
+        <location filename="../app/report/report_method_text.cpp" line="120"/>
         <source>Intervals are 95% percentile bootstrap intervals from %1 resamples of the units; the table also gives the interval from resampled pairable values (Hayes &amp; Krippendorff, 2007), which is narrower than its nominal level when more than two coders are compared. </source>
         <translation>De intervallen zijn 95%-percentiel-bootstrapintervallen uit %1 hersteekproeven van de eenheden; de tabel geeft ook het interval uit opnieuw getrokken paarbare waarden (Hayes &amp; Krippendorff, 2007), dat smaller is dan het nominale niveau wanneer meer dan twee codeurs worden vergeleken. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="357"/>
+        <location filename="../app/report/report_method_text.cpp" line="126"/>
         <source>Following Krippendorff (2004), variables with α&#xa0;≥&#xa0;0.800 are relied on and variables with 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 support tentative conclusions only. </source>
         <translation>In navolging van Krippendorff (2004) wordt op variabelen met α&#xa0;≥&#xa0;0.800 vertrouwd en ondersteunen variabelen met 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 alleen voorlopige conclusies. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="368"/>
+        <location filename="../app/report/report_method_text.cpp" line="137"/>
         <source>%1 (%2) α = %3</source>
         <translation>%1 (%2) α = %3</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="374"/>
+        <location filename="../app/report/report_method_text.cpp" line="144"/>
         <source>For the other variables alpha was: %1.</source>
         <translation>Voor de overige variabelen was alfa: %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="379"/>
+        <location filename="../app/report/report_method_text.cpp" line="149"/>
         <source>Disagreements were resolved by adjudication into a separate gold standard: %1 spans on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Verschillen zijn opgelost door beslissing in een aparte gouden standaard: %1 fragmenten in %2 artikelen, beslist door %3, %4 daarvan met een schriftelijke motivering. De onafhankelijke coderingen bleven ongewijzigd; alle bovenstaande cijfers komen daaruit. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="391"/>
+        <location filename="../app/report/report_method_text.cpp" line="161"/>
         <source>No adjudication is recorded in the project yet: %1. </source>
         <translation>In het project is nog geen beslissing vastgelegd: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="392"/>
+        <location filename="../app/report/report_method_text.cpp" line="162"/>
         <source>say how disagreements were resolved, e.g. by discussion or by the lead</source>
         <translation>vermeld hoe verschillen zijn opgelost, bijv. door overleg of door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="395"/>
+        <location filename="../app/report/report_method_text.cpp" line="165"/>
         <source>Coding followed version %1 of the codebook (“%2”)</source>
         <translation>De codering volgde versie %1 van het codeboek (‘%2’)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="400"/>
+        <location filename="../app/report/report_method_text.cpp" line="170"/>
         <source>; %1 of %2 codings were made under an earlier version</source>
         <translation>; %1 van de %2 coderingen zijn gemaakt onder een eerdere versie</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="405"/>
+        <location filename="../app/report/report_method_text.cpp" line="175"/>
         <source>, which is available at %1.</source>
         <translation>, dat beschikbaar is op %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="406"/>
+        <location filename="../app/report/report_method_text.cpp" line="176"/>
         <source>where readers can obtain it</source>
         <translation>waar lezers het kunnen verkrijgen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="410"/>
+        <location filename="../app/report/report_method_text.cpp" line="180"/>
         <source>Highlighted brackets are for the authors to complete: the project does not record these facts.</source>
         <translation>Gemarkeerde haakjes vullen de auteurs zelf in: het project legt deze gegevens niet vast.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="427"/>
+        <location filename="../app/report/report_method_text.cpp" line="198"/>
         <source>Size of the reliability sample and how it was selected</source>
         <translation>Omvang van de betrouwbaarheidssteekproef en hoe die is geselecteerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="429"/>
+        <location filename="../app/report/report_method_text.cpp" line="200"/>
         <source>Relationship of the reliability sample to the full sample</source>
         <translation>Verhouding van de betrouwbaarheidssteekproef tot de volledige steekproef</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="431"/>
+        <location filename="../app/report/report_method_text.cpp" line="202"/>
         <source>Number of reliability coders</source>
         <translation>Aantal codeurs in de betrouwbaarheidstoets</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="432"/>
+        <location filename="../app/report/report_method_text.cpp" line="203"/>
         <source>Amount of coding conducted by each coder</source>
         <translation>Hoeveelheid codeerwerk per codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="433"/>
+        <location filename="../app/report/report_method_text.cpp" line="204"/>
         <source>Index or indices selected and why</source>
         <translation>Gekozen index of indices en waarom</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="434"/>
+        <location filename="../app/report/report_method_text.cpp" line="205"/>
         <source>Reliability for each variable, for each index</source>
         <translation>Betrouwbaarheid per variabele, per index</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="435"/>
+        <location filename="../app/report/report_method_text.cpp" line="206"/>
         <source>Amount of coder training required to reach reliability</source>
         <translation>Hoeveelheid codeurstraining die nodig was om betrouwbaarheid te bereiken</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="437"/>
+        <location filename="../app/report/report_method_text.cpp" line="208"/>
         <source>How disagreements were resolved</source>
         <translation>Hoe verschillen zijn opgelost</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="438"/>
+        <location filename="../app/report/report_method_text.cpp" line="209"/>
         <source>Where the codebook and coding instructions can be obtained</source>
         <translation>Waar het codeboek en de codeerinstructies te verkrijgen zijn</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="443"/>
+        <location filename="../app/report/report_method_text.cpp" line="214"/>
         <source>#</source>
         <translation>#</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="443"/>
+        <location filename="../app/report/report_method_text.cpp" line="214"/>
         <source>Item</source>
         <translation>Punt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="444"/>
+        <location filename="../app/report/report_method_text.cpp" line="215"/>
         <source>In this report</source>
         <translation>In dit rapport</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="452"/>
+        <location filename="../app/report/report_method_text.cpp" line="223"/>
         <source>filled in from the project</source>
         <translation>ingevuld uit het project</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="453"/>
+        <location filename="../app/report/report_method_text.cpp" line="224"/>
         <source>partly filled in; complete the bracket</source>
         <translation>deels ingevuld; vul de haakjes aan</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="466"/>
-        <location filename="../app/report/report_document.cpp" line="468"/>
-        <location filename="../app/report/report_document.cpp" line="563"/>
-        <location filename="../app/report/report_document.cpp" line="644"/>
-        <location filename="../app/report/report_document.cpp" line="680"/>
-        <location filename="../app/report/report_document.cpp" line="810"/>
+        <location filename="../app/report/report_sections.cpp" line="36"/>
+        <location filename="../app/report/report_sections.cpp" line="38"/>
+        <location filename="../app/report/report_sections.cpp" line="117"/>
+        <location filename="../app/report/report_sections.cpp" line="201"/>
+        <location filename="../app/report/report_sections.cpp" line="238"/>
+        <location filename="../app/report/report_sections.cpp" line="372"/>
         <source>Variable</source>
         <translation>Variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="468"/>
+        <location filename="../app/report/report_sections.cpp" line="38"/>
         <source>Level</source>
         <translation>Niveau</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="475"/>
-        <location filename="../app/report/report_document.cpp" line="645"/>
+        <location filename="../app/report/report_sections.cpp" line="39"/>
+        <location filename="../app/report/report_sections.cpp" line="202"/>
         <source>Units</source>
         <translation>Eenh.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="476"/>
-        <location filename="../app/report/report_document.cpp" line="564"/>
+        <location filename="../app/report/report_sections.cpp" line="40"/>
+        <location filename="../app/report/report_sections.cpp" line="118"/>
         <source>Pairable values</source>
         <translation>Paarb. waarden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="477"/>
+        <location filename="../app/report/report_sections.cpp" line="41"/>
         <source>95% CI, units</source>
         <translation>95%-BI, eenheden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="478"/>
+        <location filename="../app/report/report_sections.cpp" line="41"/>
         <source>95% CI, pairs</source>
         <translation>95%-BI, paren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="479"/>
-        <location filename="../app/report/report_document.cpp" line="645"/>
+        <location filename="../app/report/report_sections.cpp" line="42"/>
+        <location filename="../app/report/report_sections.cpp" line="202"/>
         <source>Agreement</source>
         <translation>Overeenst.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="479"/>
-        <location filename="../app/report/report_document.cpp" line="733"/>
+        <location filename="../app/report/report_sections.cpp" line="42"/>
+        <location filename="../app/report/report_sections.cpp" line="292"/>
         <source>Verdict</source>
         <translation>Oordeel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="486"/>
+        <location filename="../app/report/report_sections.cpp" line="56"/>
         <source>not computed: %1</source>
         <translation>niet berekend: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="515"/>
+        <location filename="../app/report/report_sections.cpp" line="86"/>
         <source>Units: %1 (articles for article-level items; passages matched across coders for span attributes). Agreement: percent agreement, which is not chance-corrected and is never reported alone (Lombard et al., 2002). Units: units resampled, percentile interval (the interval to report); pairs: pairable values resampled with the expected disagreement held fixed (Hayes &amp; Krippendorff, 2007), too narrow with more than two coders.</source>
         <translation>Eenheden: %1 (artikelen voor items op artikelniveau; tussen codeurs gekoppelde passages voor kenmerken van fragmenten). Overeenstemming: procentuele overeenstemming, die niet voor toeval gecorrigeerd is en nooit alleen wordt gerapporteerd (Lombard et al., 2002). Eenheden: eenheden opnieuw getrokken, percentielinterval (het interval om te rapporteren); paren: paarbare waarden opnieuw getrokken met de verwachte onenigheid vastgehouden (Hayes &amp; Krippendorff, 2007), te smal bij meer dan twee codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="550"/>
+        <location filename="../app/report/report_sections.cpp" line="103"/>
         <source>Krippendorff&apos;s alpha per variable</source>
         <translation>Krippendorffs alfa per variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="551"/>
+        <location filename="../app/report/report_sections.cpp" line="104"/>
         <source>Krippendorff&apos;s alpha per variable (dots) with 95% bootstrap intervals: whiskers resample pairable values (Hayes &amp; Krippendorff, 2007), bands resample units. The lines mark 0.667 and 0.800 (Krippendorff, 2004).</source>
         <translation>Krippendorffs alfa per variabele (punten) met 95%-bootstrapintervallen: de snorharen trekken paarbare waarden opnieuw (Hayes &amp; Krippendorff, 2007), de banden trekken eenheden opnieuw. De lijnen markeren 0.667 en 0.800 (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="565"/>
+        <location filename="../app/report/report_sections.cpp" line="119"/>
         <source>Rarest value</source>
         <translation>Zeldzaamste waarde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="566"/>
+        <location filename="../app/report/report_sections.cpp" line="120"/>
         <source>Minimum for α ≥ 0.800</source>
         <translation>Minimum voor α ≥ 0.800</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="567"/>
+        <location filename="../app/report/report_sections.cpp" line="121"/>
         <source>Enough?</source>
         <translation>Genoeg?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="582"/>
+        <location filename="../app/report/report_sections.cpp" line="137"/>
         <source>yes</source>
         <translation>ja</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="583"/>
+        <location filename="../app/report/report_sections.cpp" line="138"/>
         <source>too few values</source>
         <translation>te weinig waarden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="586"/>
+        <location filename="../app/report/report_sections.cpp" line="141"/>
         <source>Krippendorff&apos;s (2004, §11.4) minimum number of pairable values for α ≥ 0.800 at p = 0.05, after Bloch &amp; Kraemer (1989), given the share of the rarest value.</source>
         <translation>Krippendorffs (2004, §11.4) minimale aantal paarbare waarden voor α ≥ 0.800 bij p = 0.05, naar Bloch &amp; Kraemer (1989), gegeven het aandeel van de zeldzaamste waarde.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="598"/>
+        <location filename="../app/report/report_sections.cpp" line="154"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="598"/>
+        <location filename="../app/report/report_sections.cpp" line="154"/>
         <source>Role</source>
         <translation>Rol</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="599"/>
-        <location filename="../app/report/report_document.cpp" line="887"/>
+        <location filename="../app/report/report_sections.cpp" line="155"/>
+        <location filename="../app/report/report_frames_section.cpp" line="49"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="600"/>
+        <location filename="../app/report/report_sections.cpp" line="156"/>
         <source>Shared articles</source>
         <translation>Gedeelde artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="601"/>
+        <location filename="../app/report/report_sections.cpp" line="157"/>
         <source>Spans</source>
         <translation>Fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="607"/>
+        <location filename="../app/report/report_sections.cpp" line="163"/>
         <source>Answers</source>
         <translation>Antwoorden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="623"/>
+        <location filename="../app/report/report_sections.cpp" line="179"/>
         <source>Coders appear by pseudonym only. Articles: coded by the coder (assigned, or with a span or an answer); shared: also coded by another coder in this report.</source>
         <translation>Codeurs verschijnen alleen onder pseudoniem. Artikelen: door de codeur gecodeerd (toegewezen, of met een fragment of een antwoord); gedeeld: in dit rapport ook door een andere codeur gecodeerd.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="634"/>
+        <location filename="../app/report/report_sections.cpp" line="191"/>
         <source>Cohen&apos;s kappa per coder pair</source>
         <translation>Cohens kappa per codeurspaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="635"/>
+        <location filename="../app/report/report_sections.cpp" line="192"/>
         <source>Cohen&apos;s kappa (Cohen, 1960) for each pair of coders and each function, on the %1 both coded. Darker is higher; hatched cells are undefined.</source>
         <translation>Cohens kappa (Cohen, 1960) voor elk paar codeurs en elke functie, op de %1 die beiden codeerden. Donkerder is hoger; gearceerde cellen zijn niet gedefinieerd.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="644"/>
+        <location filename="../app/report/report_sections.cpp" line="201"/>
         <source>Pair</source>
         <translation>Paar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="646"/>
+        <location filename="../app/report/report_sections.cpp" line="203"/>
         <source>95% CI</source>
         <translation>95%-BI</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="666"/>
+        <location filename="../app/report/report_sections.cpp" line="223"/>
         <source>95% CI: large-sample interval with the standard error of Fleiss, Cohen &amp; Everitt (1969). A coder whose kappa is low with everyone else is worth a look before the coders are retrained.</source>
         <translation>95%-BI: interval voor grote steekproeven met de standaardfout van Fleiss, Cohen &amp; Everitt (1969). Een codeur wiens kappa met alle anderen laag is, verdient een nadere blik voordat de codeurs opnieuw worden getraind.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="680"/>
+        <location filename="../app/report/report_sections.cpp" line="238"/>
         <source>Fleiss&apos; κ</source>
         <translation>Fleiss&apos; κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="681"/>
+        <location filename="../app/report/report_sections.cpp" line="239"/>
         <source>Light&apos;s κ</source>
         <translation>Lights κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="681"/>
+        <location filename="../app/report/report_sections.cpp" line="239"/>
         <source>Cohen&apos;s κ</source>
         <translation>Cohens κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="682"/>
+        <location filename="../app/report/report_sections.cpp" line="240"/>
         <source>Scott&apos;s π</source>
         <translation>Scotts π</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="683"/>
+        <location filename="../app/report/report_sections.cpp" line="241"/>
         <source>Bennett&apos;s S</source>
         <translation>Bennetts S</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="688"/>
+        <location filename="../app/report/report_sections.cpp" line="246"/>
         <source>n/a</source>
         <translation>n.v.t.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="702"/>
+        <location filename="../app/report/report_sections.cpp" line="260"/>
         <source>For comparison with older studies: Fleiss (1971) and Light (1971) for any number of coders, Cohen (1960), Scott (1955) and Bennett, Alpert &amp; Goldstein (1954) for two; n/a where their assumptions (complete data, two coders) do not hold.</source>
         <translation>Ter vergelijking met oudere studies: Fleiss (1971) en Light (1971) voor elk aantal codeurs, Cohen (1960), Scott (1955) en Bennett, Alpert &amp; Goldstein (1954) voor twee; n.v.t. waar hun aannames (volledige gegevens, twee codeurs) niet opgaan.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="717"/>
+        <location filename="../app/report/report_sections.cpp" line="276"/>
         <source>Not computed: %1</source>
         <translation>Niet berekend: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="720"/>
+        <location filename="../app/report/report_sections.cpp" line="279"/>
         <source>Unitizing alpha (Krippendorff, 2004) compares where the coders put their spans, character by character, on the %1 articles that every coder coded (%2 characters laid end to end).</source>
         <translation>Unitizing-alfa (Krippendorff, 2004) vergelijkt teken voor teken waar de codeurs hun fragmenten plaatsen, op de %1 artikelen die elke codeur codeerde (%2 tekens achter elkaar).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="730"/>
+        <location filename="../app/report/report_sections.cpp" line="289"/>
         <source>Function</source>
         <translation>Functie</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="731"/>
+        <location filename="../app/report/report_sections.cpp" line="290"/>
         <source>Observed disagreement</source>
         <translation>Waargenomen onenigheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="732"/>
+        <location filename="../app/report/report_sections.cpp" line="291"/>
         <source>Expected disagreement</source>
         <translation>Verwachte onenigheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="748"/>
+        <location filename="../app/report/report_sections.cpp" line="308"/>
         <source>all four</source>
         <translation>alle vier</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="767"/>
+        <location filename="../app/report/report_sections.cpp" line="328"/>
         <source>Alpha without each coder</source>
         <translation>Alfa zonder elke codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="769"/>
+        <location filename="../app/report/report_sections.cpp" line="330"/>
         <source>Left out</source>
         <translation>Weggelaten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="799"/>
+        <location filename="../app/report/report_sections.cpp" line="361"/>
         <source>Alpha recomputed without the coder&apos;s codings; in brackets the change against all coders (positive: the coder pulls alpha down). A diagnostic for retraining, not a licence to report the better figure (Krippendorff, 2004).</source>
         <translation>Alfa opnieuw berekend zonder de coderingen van de codeur; tussen haakjes de verandering ten opzichte van alle codeurs (positief: de codeur trekt alfa omlaag). Een diagnose voor hertraining, geen vrijbrief om het betere cijfer te rapporteren (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="806"/>
+        <location filename="../app/report/report_sections.cpp" line="368"/>
         <source>The article that costs most</source>
         <translation>Het artikel dat het meest kost</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="810"/>
+        <location filename="../app/report/report_sections.cpp" line="372"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="811"/>
+        <location filename="../app/report/report_sections.cpp" line="373"/>
         <source>α without it</source>
         <translation>α zonder dit artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="812"/>
+        <location filename="../app/report/report_sections.cpp" line="374"/>
         <source>Change</source>
         <translation>Verandering</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="835"/>
+        <location filename="../app/report/report_sections.cpp" line="397"/>
         <source>Function confusion between coders</source>
         <translation>Functieverwarring tussen codeurs</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="837"/>
+        <location filename="../app/report/report_sections.cpp" line="399"/>
         <source>A coder&apos;s span</source>
         <translation>Fragment van een codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="855"/>
+        <location filename="../app/report/report_sections.cpp" line="417"/>
         <source>For each coder&apos;s span, the function the other coder gave the span that overlaps it most (none: nothing there), summed over ordered pairs of coders. Off the diagonal are the confusions a codebook rule could settle.</source>
         <translation>Voor elk fragment van een codeur de functie die de andere codeur gaf aan het fragment dat het meest ermee overlapt (geen: daar staat niets), opgeteld over geordende paren codeurs. Buiten de diagonaal staan de verwarringen die een codeboekregel kan beslechten.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="868"/>
+        <location filename="../app/report/report_frames_section.cpp" line="30"/>
         <source>The newest saved frame analysis, “%1” (saved %2): %3 frames of the layer %4 over %5 articles, by Ward&apos;s hierarchical clustering refined by k-means (Matthes &amp; Kohring 2008). A frame&apos;s characteristic elements are those with an adjusted residual above 1.96 (Haberman 1973), with their share in the frame and in all articles. The frames are only as good as their elements: beside each element variable stands its Krippendorff&apos;s alpha (nominal, articles as units) over the coders of this report.</source>
         <translation>De nieuwste opgeslagen frameanalyse, ‘%1’ (opgeslagen %2): %3 frames van de laag %4 over %5 artikelen, met hiërarchische clustering volgens Ward, verfijnd met k-means (Matthes &amp; Kohring 2008). De kenmerkende elementen van een frame zijn die met een gecorrigeerd residu boven 1.96 (Haberman 1973), met hun aandeel in het frame en in alle artikelen. De frames zijn maar zo goed als hun elementen: naast elke elementvariabele staat haar Krippendorffs alfa (nominaal, artikelen als eenheden) over de codeurs van dit rapport.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="886"/>
+        <location filename="../app/report/report_frames_section.cpp" line="48"/>
         <source>Frame</source>
         <translation>Frame</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="886"/>
+        <location filename="../app/report/report_frames_section.cpp" line="48"/>
         <source>Name</source>
         <translation>Naam</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="887"/>
+        <location filename="../app/report/report_frames_section.cpp" line="49"/>
         <source>Share</source>
         <translation>Aandeel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="888"/>
+        <location filename="../app/report/report_frames_section.cpp" line="50"/>
         <source>Characteristic elements</source>
         <translation>Kenmerkende elementen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="890"/>
+        <location filename="../app/report/report_frames_section.cpp" line="52"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="898"/>
+        <location filename="../app/report/report_frames_section.cpp" line="60"/>
         <source>%1 (%2% / %3%)</source>
         <translation>%1 (%2% / %3%)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="909"/>
+        <location filename="../app/report/report_frames_section.cpp" line="71"/>
         <source>none stands out</source>
         <translation>geen enkel valt op</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="916"/>
+        <location filename="../app/report/report_frames_section.cpp" line="78"/>
         <source>Element variable</source>
         <translation>Elementvariabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="917"/>
+        <location filename="../app/report/report_frames_section.cpp" line="79"/>
         <source>Pairable articles</source>
         <translation>Paarbare artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="918"/>
+        <location filename="../app/report/report_frames_section.cpp" line="80"/>
         <source>Characterises</source>
         <translation>Kenmerkt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="935"/>
+        <location filename="../app/report/report_method_text.cpp" line="234"/>
         <source>Every figure above is what these commands print (add --json for all digits):</source>
         <translation>Elk cijfer hierboven is wat deze opdrachten afdrukken (voeg --json toe voor alle cijfers):</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="995"/>
+        <location filename="../app/report/report_document.cpp" line="73"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
         <translation>nl</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1012"/>
+        <location filename="../app/report/report_document.cpp" line="90"/>
         <source>Method text</source>
         <translation>Methodetekst</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1014"/>
+        <location filename="../app/report/report_document.cpp" line="92"/>
         <source>Reporting checklist (Lombard, Snyder-Duch &amp; Bracken, 2002)</source>
         <translation>Checklist voor de verslaglegging (Lombard, Snyder-Duch &amp; Bracken, 2002)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1016"/>
+        <location filename="../app/report/report_document.cpp" line="94"/>
         <source>Reliability per variable</source>
         <translation>Betrouwbaarheid per variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1018"/>
+        <location filename="../app/report/report_document.cpp" line="96"/>
         <source>Is the sample large enough?</source>
         <translation>Is de steekproef groot genoeg?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1020"/>
+        <location filename="../app/report/report_document.cpp" line="98"/>
         <source>Coders and the amount each coded</source>
         <translation>Codeurs en hoeveel elk codeerde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1022"/>
+        <location filename="../app/report/report_document.cpp" line="100"/>
         <source>Coder pairs</source>
         <translation>Codeursparen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1023"/>
+        <location filename="../app/report/report_document.cpp" line="101"/>
         <source>Other coefficients</source>
         <translation>Andere coëfficiënten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1025"/>
+        <location filename="../app/report/report_document.cpp" line="103"/>
         <source>Span boundaries: unitizing alpha</source>
         <translation>Grenzen van fragmenten: unitizing-alfa</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1029"/>
+        <location filename="../app/report/report_document.cpp" line="107"/>
         <source>Where reliability is lost</source>
         <translation>Waar betrouwbaarheid verloren gaat</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1032"/>
+        <location filename="../app/report/report_document.cpp" line="110"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1033"/>
+        <location filename="../app/report/report_document.cpp" line="111"/>
         <source>Reproducing the figures</source>
         <translation>De cijfers reproduceren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="1035"/>
+        <location filename="../app/report/report_document.cpp" line="113"/>
         <source>References</source>
         <translation>Literatuur</translation>
     </message>
@@ -4128,152 +4128,183 @@
     </message>
 </context>
 <context>
-    <name>StudyDesignText</name>
+    <name>StudyEditText</name>
     <message>
-        <location filename="../core/project/study_design.cpp" line="120"/>
-        <location filename="../core/project/study_design.cpp" line="818"/>
+        <location filename="../core/project/study_edits.cpp" line="39"/>
+        <source>The project already holds %1.</source>
+        <translation>Het project bevat %1 al.</translation>
+    </message>
+</context>
+<context>
+    <name>StudyDesignText</name>
+    <message numerus="yes">
+        <location filename="../core/project/study_design.cpp" line="847"/>
+        <source>Assign %n article(s)</source>
+        <translation>
+            <numerusform>%n artikel toewijzen</numerusform>
+            <numerusform>%n artikelen toewijzen</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../core/project/study_design.cpp" line="579"/>
+        <source>Draw the %1 subsample</source>
+        <translation>De deelsteekproef van de fase %1 trekken</translation>
+    </message>
+    <message>
+        <location filename="../core/project/study_design.cpp" line="1329"/>
+        <source>Show effort per coder</source>
+        <translation>Inspanning per persoon tonen</translation>
+    </message>
+    <message>
+        <location filename="../core/project/study_design.cpp" line="1330"/>
+        <source>Hide effort per coder</source>
+        <translation>Inspanning per persoon verbergen</translation>
+    </message>
+    <message>
+        <location filename="../core/project/study_design.cpp" line="121"/>
+        <location filename="../core/project/study_design.cpp" line="827"/>
         <source>There is no coder &quot;%1&quot; in the project.</source>
         <translation>Er is geen codeur ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="123"/>
+        <location filename="../core/project/study_design.cpp" line="124"/>
         <source>The coder &quot;%1&quot; is named twice.</source>
         <translation>De codeur ‘%1’ is twee keer genoemd.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="126"/>
-        <location filename="../core/project/study_design.cpp" line="821"/>
+        <location filename="../core/project/study_design.cpp" line="127"/>
+        <location filename="../core/project/study_design.cpp" line="830"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 is uitgeschakeld en krijgt geen nieuwe toewijzingen; schakel deze persoon eerst in.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="399"/>
+        <location filename="../core/project/study_design.cpp" line="400"/>
         <source>A subsample is drawn for the reliability or the pilot phase, not for %1.</source>
         <translation>Een deelsteekproef wordt getrokken voor de betrouwbaarheids- of de pilotfase, niet voor %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="404"/>
+        <location filename="../core/project/study_design.cpp" line="405"/>
         <source>Give either the size of the subsample or its fraction of the articles.</source>
         <translation>Geef ofwel de omvang van de deelsteekproef ofwel haar aandeel in de artikelen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="408"/>
+        <location filename="../core/project/study_design.cpp" line="409"/>
         <source>The fraction %1 does not lie in (0, 1].</source>
         <translation>Het aandeel %1 ligt niet in (0, 1].</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="411"/>
+        <location filename="../core/project/study_design.cpp" line="412"/>
         <source>A reliability subsample needs at least two coders; %1 given.</source>
         <translation>Een betrouwbaarheidsdeelsteekproef heeft ten minste twee codeurs nodig; opgegeven: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="424"/>
+        <location filename="../core/project/study_design.cpp" line="425"/>
         <source>The %1 phase already has a subsample (drawn %2 with seed %3).</source>
         <translation>De fase %1 heeft al een deelsteekproef (getrokken %2 met seed %3).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="457"/>
+        <location filename="../core/project/study_design.cpp" line="458"/>
         <source>A subsample of %1 articles cannot be drawn from a sampling frame of %2 articles.</source>
         <translation>Een deelsteekproef van %1 artikelen kan niet worden getrokken uit een steekproefkader van %2 artikelen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="575"/>
+        <location filename="../core/project/study_design.cpp" line="574"/>
         <source>The %1 phase already has a subsample.</source>
         <translation>De fase %1 heeft al een deelsteekproef.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="599"/>
+        <location filename="../core/project/study_design.cpp" line="609"/>
         <source>The record of the %1 subsample is not a JSON object.</source>
         <translation>Het record van de deelsteekproef %1 is geen JSON-object.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="645"/>
+        <location filename="../core/project/study_design.cpp" line="655"/>
         <source>The subsample record is damaged: %1.</source>
         <translation>Het record van de deelsteekproef is beschadigd: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="656"/>
+        <location filename="../core/project/study_design.cpp" line="666"/>
         <source>no valid phase</source>
         <translation>geen geldige fase</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="660"/>
+        <location filename="../core/project/study_design.cpp" line="670"/>
         <source>unknown method &quot;%1&quot;</source>
         <translation>onbekende methode ‘%1’</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="665"/>
+        <location filename="../core/project/study_design.cpp" line="675"/>
         <source>unknown stratum &quot;%1&quot;</source>
         <translation>onbekende stratum ‘%1’</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="670"/>
+        <location filename="../core/project/study_design.cpp" line="680"/>
         <source>no valid seed</source>
         <translation>geen geldige seed</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="705"/>
+        <location filename="../core/project/study_design.cpp" line="715"/>
         <source>Double coding needs at least two coders; %1 given.</source>
         <translation>Dubbele codering heeft ten minste twee codeurs nodig; opgegeven: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="707"/>
+        <location filename="../core/project/study_design.cpp" line="717"/>
         <source>Name at least one coder for the remaining articles.</source>
         <translation>Noem ten minste één codeur voor de overige artikelen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="759"/>
+        <location filename="../core/project/study_design.cpp" line="769"/>
         <source>Name at least one article and one coder.</source>
         <translation>Noem ten minste één artikel en één codeur.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="769"/>
-        <location filename="../core/project/study_design.cpp" line="814"/>
+        <location filename="../core/project/study_design.cpp" line="779"/>
+        <location filename="../core/project/study_design.cpp" line="823"/>
         <source>There is no article &quot;%1&quot; in the project.</source>
         <translation>Er is geen artikel ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="831"/>
+        <location filename="../core/project/study_design.cpp" line="840"/>
         <source>Article &quot;%1&quot; is already assigned to %2 in the %3 phase.</source>
         <translation>Artikel ‘%1’ is in de fase %3 al aan %2 toegewezen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="936"/>
+        <location filename="../core/project/study_design.cpp" line="949"/>
         <source>%1 span(s) of %2 carry the value &quot;%3&quot; of the attribute &quot;%4&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the attribute with one of its values (%5).</source>
         <translation>%1 fragment(en) van %2 dragen de waarde ‘%3’ van het kenmerk ‘%4’, die de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het kenmerk toe (%5).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="955"/>
+        <location filename="../core/project/study_design.cpp" line="968"/>
         <source>%1 answer(s) to the item &quot;%2&quot; are &quot;%3&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the item with one of its values (%4).</source>
         <translation>%1 antwoord(en) op het item ‘%2’ zijn ‘%3’, dat de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het item toe (%4).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="988"/>
+        <location filename="../core/project/study_design.cpp" line="1001"/>
         <source>A new codebook version needs a note that says what changed and why.</source>
         <translation>Een nieuwe codeboekversie heeft een notitie nodig die zegt wat er is veranderd en waarom.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="995"/>
+        <location filename="../core/project/study_design.cpp" line="1008"/>
         <source>The codebook is the same as version %1; no new version was made.</source>
         <translation>Het codeboek is gelijk aan versie %1; er is geen nieuwe versie gemaakt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1099"/>
+        <location filename="../core/project/study_design.cpp" line="1112"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codeboekversie %1 → %2</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1101"/>
+        <location filename="../core/project/study_design.cpp" line="1114"/>
         <source>no changes</source>
         <translation>geen wijzigingen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1197"/>
+        <location filename="../core/project/study_design.cpp" line="1210"/>
         <source>Training feedback is computed on paragraphs, sentences or tokens, not on %1 units.</source>
         <translation>Trainingsfeedback wordt berekend op alinea&apos;s, zinnen of tokens, niet op %1-eenheden.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1215"/>
+        <location filename="../core/project/study_design.cpp" line="1228"/>
         <source>Name the lead whose training coding is the master: there is not exactly one lead with training annotations.</source>
         <translation>Noem de coördinator wiens trainingscodering de maatstaf is: er is niet precies één coördinator met trainingsannotaties.</translation>
     </message>

@@ -25,6 +25,9 @@ public:
     virtual QString action() const = 0;
     virtual QString objectType() const = 0;
     virtual QString objectUuid() const = 0;
+    // What the event log records with the edit's action (empty for most edits: the object
+    // names it); e.g. the record of a sampling draw.
+    virtual QJsonObject detail() const { return {}; }
     // Who makes the edit (for the event log); may be invalid for program actions.
     CoderId actor() const { return m_actor; }
 

@@ -324,7 +324,7 @@ Status Project::apply(Edit &edit)
         return std::unexpected(sp.error());
     FOURFOLD_TRY_STATUS(edit.apply(db()));
     FOURFOLD_TRY_STATUS(store::appendEvent(
-        db(), edit.actor(), edit.action(), edit.objectType(), edit.objectUuid()));
+        db(), edit.actor(), edit.action(), edit.objectType(), edit.objectUuid(), edit.detail()));
     return sp->commit();
 }
 
@@ -363,7 +363,7 @@ Status Project::applyInBatch(Edit &edit)
     Status st = edit.apply(db());
     if (st)
         st = store::appendEvent(
-            db(), edit.actor(), edit.action(), edit.objectType(), edit.objectUuid());
+            db(), edit.actor(), edit.action(), edit.objectType(), edit.objectUuid(), edit.detail());
     if (!st && !m_batchError)
         m_batchError = st.error();
     return st;

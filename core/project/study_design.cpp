@@ -3,6 +3,7 @@
 #include "core/io/input_file.h"
 #include "core/project/near_copies.h"
 #include "core/project/project.h"
+#include "core/project/study_edits.h"
 #include "core/reliability/krippendorff_alpha.h"
 #include "core/reliability/sample_size.h"
 #include "core/store/codebook_table.h"
@@ -562,26 +563,35 @@ Result<Draw> StudyDesign::planDraw(const Project &project, const DrawRequest &re
     return draw;
 }
 
-Status StudyDesign::commitDraw(Project &project, Draw &draw)
+Result<std::unique_ptr<AssignEdit>> StudyDesign::drawEdit(
+    const Project &project, Draw &draw, CoderId actor)
 {
-    auto sp = Savepoint::begin(project.db());
-    if (!sp)
-        return std::unexpected(sp.error());
     auto recorded = recordedDraw(project, draw.phase);
     if (!recorded)
         return std::unexpected(recorded.error());
     if (*recorded)
         return fail(ErrorCode::Duplicate,
             StudyDesignText::tr("The %1 phase already has a subsample.").arg(phaseKey(draw.phase)));
-    const QString drawnAt = store::now();
     Draw stored = draw;
-    stored.drawnAt = drawnAt;
+    stored.drawnAt = store::now();
     const QJsonObject record = drawJson(stored);
-    FOURFOLD_TRY_STATUS(commitPlan(project, draw.plan, record));
-    FOURFOLD_TRY_STATUS(
-        store::setSetting(project.db(), drawSettingKey(draw.phase), store::toJsonText(record)));
-    FOURFOLD_TRY_STATUS(sp->commit());
-    draw.drawnAt = drawnAt;
+    auto edit = assignEdit(project, draw.plan, record, actor,
+        StudyDesignText::tr("Draw the %1 subsample").arg(phaseKey(draw.phase)));
+    if (!edit)
+        return std::unexpected(edit.error());
+    draw.drawnAt = stored.drawnAt;
+    return std::make_unique<AssignEdit>(actor, (*edit)->text(), (*edit)->rows(), record,
+        drawSettingKey(draw.phase), store::toJsonText(record));
+}
+
+Status StudyDesign::commitDraw(Project &project, Draw &draw)
+{
+    Draw planned = draw;
+    auto edit = drawEdit(project, planned, CoderId {});
+    if (!edit)
+        return std::unexpected(edit.error());
+    FOURFOLD_TRY_STATUS(project.apply(**edit));
+    draw.drawnAt = planned.drawnAt;
     return {};
 }
 
@@ -788,10 +798,10 @@ Result<AssignmentPlan> StudyDesign::planArticles(
     return plan;
 }
 
-Status StudyDesign::commitPlan(
-    Project &project, const AssignmentPlan &plan, const QJsonObject &record)
+Result<std::unique_ptr<AssignEdit>> StudyDesign::assignEdit(const Project &project,
+    const AssignmentPlan &plan, const QJsonObject &record, CoderId actor, const QString &text)
 {
-    Database &db = project.db();
+    const Database &db = project.db();
     auto names = loadNames(db, project);
     if (!names)
         return std::unexpected(names.error());
@@ -804,9 +814,8 @@ Status StudyDesign::commitPlan(
                            .arg(a.article.value)
                            .arg(a.coder.value)
                            .arg(phaseKey(a.phase)));
-    auto sp = Savepoint::begin(db);
-    if (!sp)
-        return std::unexpected(sp.error());
+    std::vector<AssignmentToWrite> rows;
+    rows.reserve(plan.rows.size());
     for (const PlannedAssignment &row : plan.rows) {
         const auto article = names->articleIndex.constFind(row.article);
         if (article == names->articleIndex.constEnd())
@@ -831,17 +840,21 @@ Status StudyDesign::commitPlan(
                 StudyDesignText::tr("Article \"%1\" is already assigned to %2 in the %3 phase.")
                     .arg(row.article, row.coder, phaseKey(row.phase)));
         present.insert(key);
-        FOURFOLD_TRY_STATUS(store::insertAssignment(db, articleId, coder->id, row.phase));
-        FOURFOLD_TRY_STATUS(store::appendEvent(db, CoderId {}, QStringLiteral("assignment.add"),
-            QStringLiteral("assignment"), QString(),
-            QJsonObject {{QStringLiteral("article"), articleId.value},
-                {QStringLiteral("coder"), coder->id.value},
-                {QStringLiteral("phase"), phaseKey(row.phase)}}));
+        rows.push_back({articleId, coder->id, row.phase, store::newUuid()});
     }
-    if (!record.isEmpty())
-        FOURFOLD_TRY_STATUS(store::appendEvent(db, CoderId {}, QStringLiteral("assignment.plan"),
-            QStringLiteral("assignment"), QString(), record));
-    return sp->commit();
+    const QString undoText = !text.isEmpty()
+        ? text
+        : StudyDesignText::tr("Assign %n article(s)", nullptr, int(rows.size()));
+    return std::make_unique<AssignEdit>(actor, undoText, std::move(rows), record);
+}
+
+Status StudyDesign::commitPlan(
+    Project &project, const AssignmentPlan &plan, const QJsonObject &record)
+{
+    auto edit = assignEdit(project, plan, record);
+    if (!edit)
+        return std::unexpected(edit.error());
+    return project.apply(**edit);
 }
 
 Result<std::vector<AssignmentRow>> StudyDesign::assignmentRows(
@@ -1310,17 +1323,18 @@ Result<bool> StudyDesign::effortPerCoderVisible(const Project &project)
     return *value && **value == QStringLiteral("on");
 }
 
+std::unique_ptr<Edit> StudyDesign::effortEdit(bool visible, CoderId lead)
+{
+    return std::make_unique<SetProjectSettingEdit>(lead,
+        visible ? StudyDesignText::tr("Show effort per coder")
+                : StudyDesignText::tr("Hide effort per coder"),
+        QStringLiteral("setting.effort_per_coder"), kEffortKey,
+        visible ? QStringLiteral("on") : QStringLiteral("off"));
+}
+
 Status StudyDesign::setEffortPerCoderVisible(Project &project, bool visible, CoderId lead)
 {
-    auto sp = Savepoint::begin(project.db());
-    if (!sp)
-        return std::unexpected(sp.error());
-    const QString value = visible ? QStringLiteral("on") : QStringLiteral("off");
-    FOURFOLD_TRY_STATUS(store::setSetting(project.db(), kEffortKey, value));
-    FOURFOLD_TRY_STATUS(store::appendEvent(project.db(), lead,
-        QStringLiteral("setting.effort_per_coder"), QStringLiteral("project_setting"), QString(),
-        QJsonObject {{QStringLiteral("value"), value}}));
-    return sp->commit();
+    return project.apply(*effortEdit(visible, lead));
 }
 
 Result<ProgressBoard> StudyDesign::progressBoard(const Project &project, std::optional<Phase> phase)

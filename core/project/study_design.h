@@ -7,14 +7,16 @@
 // Coders are named by pseudonym and articles by external id in every value below, so the front
 // ends can show them and write them to JSON without looking anything up.
 //
-// Writing functions run in one savepoint (all-or-nothing) and append to the event log; they are
-// not undoable edits (like Project::assign). Reading functions never write.
+// Writes are undoable edits (core/project/study_edits.h): the *Edit functions check and resolve
+// a write and return it for Project::apply or the desktop's undo stack; commitPlan, commitDraw
+// and setEffortPerCoderVisible apply it at once (the CLI). Reading functions never write.
 
 #include "core/model/annotation.h"
 #include "core/model/codebook.h"
 #include "core/model/error.h"
 #include "core/model/framing_function.h"
 #include "core/model/unit_kind.h"
+#include "core/project/study_edits.h"
 
 #include <QJsonObject>
 #include <QString>
@@ -22,6 +24,7 @@
 
 #include <array>
 #include <cstdint>
+#include <memory>
 #include <optional>
 #include <vector>
 
@@ -253,8 +256,12 @@ public:
     // outside (0, 1]; NotFound for an unknown coder (naming it); Duplicate if the phase already has
     // a draw.
     static Result<Draw> planDraw(const Project &project, const DrawRequest &request);
-    // Writes the draw's assignments and its record in one savepoint. Fails as commitPlan, or with
-    // Duplicate if a draw of the phase was recorded meanwhile; nothing is written then.
+    // The draw's assignments and its record (setting study.draw.<phase>, logged with the
+    // "assignment.plan" event) as one edit; sets draw.drawnAt (now). Fails as assignEdit, or
+    // with Duplicate if the phase has a recorded draw (apply() checks again).
+    static Result<std::unique_ptr<AssignEdit>> drawEdit(
+        const Project &project, Draw &draw, CoderId actor);
+    // Applies drawEdit(project, draw, no actor); nothing is written on failure.
     static Status commitDraw(Project &project, Draw &draw);
     // The recorded draw of `phase`, if any. Fails with Corrupt if the record cannot be read.
     static Result<std::optional<Draw>> recordedDraw(const Project &project, Phase phase);
@@ -279,9 +286,14 @@ public:
     static Result<AssignmentPlan> planArticles(const Project &project, Phase phase,
         const QStringList &articles, const QStringList &coders);
 
-    // Writes a plan in one savepoint, with one "assignment.add" event per row plus one
-    // "assignment.plan" event holding `record` (may be empty). Duplicate if a row exists already,
-    // NotFound for an unknown article or coder; nothing is written on failure.
+    // A plan as one edit: one "assignment.add" event per row, the edit logged as
+    // "assignment.plan" holding `record` (may be empty); `text` names it in an undo menu (empty:
+    // "Assign N articles"). Duplicate if a row exists already, NotFound for an unknown article or
+    // coder, InvalidArgument for a disabled coder.
+    static Result<std::unique_ptr<AssignEdit>> assignEdit(const Project &project,
+        const AssignmentPlan &plan, const QJsonObject &record = {}, CoderId actor = {},
+        const QString &text = {});
+    // Applies assignEdit(project, plan, record); nothing is written on failure.
     static Status commitPlan(
         Project &project, const AssignmentPlan &plan, const QJsonObject &record = {});
 
@@ -346,7 +358,9 @@ public:
     // Project setting "study.effort_per_coder": whether active time is shown per coder (off by
     // default; monitoring coders can be regulated at work, so a lead turns it on deliberately).
     static Result<bool> effortPerCoderVisible(const Project &project);
-    // Sets it, logging "setting.effort_per_coder" by `lead` (may be invalid).
+    // Setting it as one edit, logged as "setting.effort_per_coder" by `lead` (may be invalid).
+    static std::unique_ptr<Edit> effortEdit(bool visible, CoderId lead);
+    // Applies effortEdit(visible, lead).
     static Status setEffortPerCoderVisible(Project &project, bool visible, CoderId lead);
 
     // The progress board; `phase` filters. The master for training agreement is the one lead with

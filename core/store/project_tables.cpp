@@ -34,6 +34,15 @@ Status setSetting(Database &db, const QString &key, const QString &value)
     return stmt->run();
 }
 
+Status removeSetting(Database &db, const QString &key)
+{
+    auto stmt = db.prepare(QStringLiteral("DELETE FROM project_setting WHERE key = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, key);
+    return stmt->run();
+}
+
 Status insertAssignment(
     Database &db, ArticleId article, CoderId coder, Phase phase, const QString &uuid)
 {

@@ -19,6 +19,8 @@ namespace store {
 
 Result<std::optional<QString>> setting(const Database &db, const QString &key);
 Status setSetting(Database &db, const QString &key, const QString &value);
+// Removes the setting `key` (nothing if there is none): the undo of setting it first.
+Status removeSetting(Database &db, const QString &key);
 
 // Assigns `article` to `coder` in `phase` with `uuid` (made here when empty). Duplicate if it
 // already is.

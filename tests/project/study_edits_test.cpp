@@ -1,0 +1,147 @@
+// The study design's writes as edits (core/project/study_edits): a draw, a plan and the effort
+// setting each undo to the same database dump and redo to the same rows (times blanked: the
+// assignments' created_at is the redo's), through Project::apply as the CLI and the desk do.
+#include "core/project/study_design.h"
+#include "core/project/study_edits.h"
+#include "core/project/testing/project_database.h"
+#include "tests/project/study_fixture.h"
+#include "tests/support/db_dump.h"
+
+#include <QRegularExpression>
+
+using namespace fourfold;
+using namespace fourfold::test;
+
+namespace {
+
+// A dump with every ISO 8601 time blanked: what a redo must restore exactly.
+QString withoutTimes(QString dump)
+{
+    static const QRegularExpression time(QStringLiteral(
+        "\\d{4}-\\d\\d-\\d\\dT\\d\\d:\\d\\d:\\d\\d(\\.\\d+)?(Z|[+-]\\d\\d:\\d\\d)?"));
+    return dump.replace(time, QStringLiteral("TIME"));
+}
+
+struct StudyEditFixture : ProjectFixture {
+    StudyEditFixture()
+    {
+        importJsonl(twentyArticles());
+        for (const char *p : {"C01", "C02", "C03"})
+            addCoder(QString::fromLatin1(p));
+        lead = addCoder(QStringLiteral("L01"), CoderRole::Lead);
+    }
+    QString dump() { return dumpDatabase(databaseForTesting(project)); }
+    // The event log too (left out of dump(): undo appends to it).
+    QString log() { return dumpDatabase(databaseForTesting(project), {}); }
+    CoderId lead;
+};
+
+} // namespace
+
+TEST_CASE("a draw is one edit: undo restores the full dump and redo the same rows")
+{
+    StudyEditFixture f;
+    DrawRequest request;
+    request.size = 5;
+    request.seed = 11;
+    request.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+    auto draw = StudyDesign::planDraw(f.project, request);
+    REQUIRE(draw);
+    const QString before = f.dump();
+
+    auto edit = StudyDesign::drawEdit(f.project, *draw, f.lead);
+    REQUIRE(edit);
+    CHECK_FALSE(draw->drawnAt.isEmpty());
+    CHECK((*edit)->rows().size() == 10); // 5 articles × 2 coders
+    REQUIRE(f.project.apply(**edit));
+    auto rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+    REQUIRE(rows);
+    CHECK(rows->size() == 10);
+    auto recorded = StudyDesign::recordedDraw(f.project, Phase::Reliability);
+    REQUIRE(recorded);
+    REQUIRE(recorded->has_value());
+    CHECK((*recorded)->articles == draw->articles);
+    CHECK((*recorded)->drawnAt == draw->drawnAt);
+    // The log holds one event per assignment and the edit with the draw's record.
+    const QString log = f.log();
+    CHECK(log.count(QStringLiteral("assignment.add")) == 10);
+    CHECK(log.count(QStringLiteral("assignment.plan")) == 1);
+    CHECK(log.contains(QStringLiteral("\"drawn_at\"")));
+    const QString applied = f.dump();
+
+    REQUIRE(f.project.revert(**edit));
+    CHECK(f.dump() == before);
+    recorded = StudyDesign::recordedDraw(f.project, Phase::Reliability);
+    REQUIRE(recorded);
+    CHECK_FALSE(recorded->has_value());
+
+    REQUIRE(f.project.apply(**edit));
+    CHECK(withoutTimes(f.dump()) == withoutTimes(applied));
+    REQUIRE(f.project.revert(**edit));
+    CHECK(f.dump() == before);
+}
+
+TEST_CASE("a draw edit made before another draw was recorded is refused and writes nothing")
+{
+    StudyEditFixture f;
+    DrawRequest request;
+    request.size = 3;
+    request.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+    auto first = StudyDesign::planDraw(f.project, request);
+    REQUIRE(first);
+    auto second = *first;
+    auto late = StudyDesign::drawEdit(f.project, second, f.lead);
+    REQUIRE(late);
+    REQUIRE(StudyDesign::commitDraw(f.project, *first));
+    const QString before = f.dump();
+    const Status refused = f.project.apply(**late);
+    REQUIRE_FALSE(refused);
+    CHECK(refused.error().code == ErrorCode::Duplicate);
+    CHECK(f.dump() == before);
+}
+
+TEST_CASE("dealing the rest is one edit that undo takes back whole")
+{
+    StudyEditFixture f;
+    auto plan = StudyDesign::planRest(f.project,
+        RestRequest {RestCoding::Double,
+            {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")}, 7});
+    REQUIRE(plan);
+    REQUIRE(plan->rows.size() == 40); // 20 articles, two coders each
+    const QString before = f.dump();
+    auto edit = StudyDesign::assignEdit(f.project, *plan, {}, f.lead);
+    REQUIRE(edit);
+    CHECK((*edit)->text() == QStringLiteral("Assign 40 article(s)"));
+    REQUIRE(f.project.apply(**edit));
+    auto rows = StudyDesign::assignmentRows(f.project, Phase::Production);
+    REQUIRE(rows);
+    CHECK(rows->size() == 40);
+    const QString applied = f.dump();
+    REQUIRE(f.project.revert(**edit));
+    CHECK(f.dump() == before);
+    REQUIRE(f.project.apply(**edit));
+    CHECK(withoutTimes(f.dump()) == withoutTimes(applied));
+
+    // A plan whose assignments exist already is refused before anything is written.
+    auto again = StudyDesign::assignEdit(f.project, *plan);
+    REQUIRE_FALSE(again);
+    CHECK(again.error().code == ErrorCode::Duplicate);
+}
+
+TEST_CASE("the effort setting is one edit: undo restores the value before or its absence")
+{
+    StudyEditFixture f;
+    const QString before = f.dump();
+    auto on = StudyDesign::effortEdit(true, f.lead);
+    REQUIRE(f.project.apply(*on));
+    CHECK(*StudyDesign::effortPerCoderVisible(f.project));
+    const QString turnedOn = f.dump();
+    auto off = StudyDesign::effortEdit(false, f.lead);
+    REQUIRE(f.project.apply(*off));
+    CHECK_FALSE(*StudyDesign::effortPerCoderVisible(f.project));
+    REQUIRE(f.project.revert(*off));
+    CHECK(f.dump() == turnedOn);
+    REQUIRE(f.project.revert(*on));
+    CHECK(f.dump() == before);
+    CHECK(f.log().count(QStringLiteral("setting.effort_per_coder")) == 4); // 2 applied, 2 undone
+}
