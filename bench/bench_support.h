@@ -3,6 +3,8 @@
 // error with its message, and the people of a generated study.
 
 #include "core/model/error.h"
+#include "core/project/edit.h"
+#include "core/project/people.h"
 #include "core/project/project.h"
 
 #include <sys/resource.h>
@@ -49,7 +51,11 @@ inline void addStudyPeople(Project &project, int coders)
         const QString pseudonym = QStringLiteral("C%1").arg(c + 1, 2, 10, QLatin1Char('0'));
         check(project.addCoder(pseudonym, pseudonym, CoderRole::Coder), "coder");
     }
-    check(project.addCoder(QStringLiteral("Lead"), QStringLiteral("L01"), CoderRole::Lead), "lead");
+    // The first lead of a new project, without a passphrase (people.h).
+    auto lead = check(
+        People::addLeadWithoutPassphrase(project, QStringLiteral("Lead"), QStringLiteral("L01")),
+        "lead");
+    check(project.apply(*lead), "lead");
 }
 
 } // namespace fourfold::bench

@@ -1,6 +1,8 @@
 #include "fuzz/fuzz_support.h"
 
 #include "core/io/article_reader.h"
+#include "core/project/edit.h"
+#include "core/project/people.h"
 
 #include <QDir>
 #include <QFile>
@@ -65,7 +67,8 @@ QString templateProject()
         for (const char *pseudonym : {"C01", "C02", "C03"})
             check(project->addCoder(pseudonym, pseudonym, CoderRole::Coder).has_value(),
                 "a coder is added");
-        check(project->addCoder("L01", "L01", CoderRole::Lead).has_value(), "the lead is added");
+        auto lead = People::addLeadWithoutPassphrase(*project, "L01", "L01");
+        check(lead.has_value() && project->apply(**lead).has_value(), "the lead is added");
         return file;
     }();
     return path;

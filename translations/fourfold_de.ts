@@ -11,8 +11,8 @@
     <message>
         <location filename="../core/agreement/agreement_report.cpp" line="85"/>
         <location filename="../core/agreement/agreement_report.cpp" line="103"/>
-        <location filename="../core/agreement/agreement_report.cpp" line="274"/>
-        <location filename="../core/agreement/agreement_report.cpp" line="302"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="277"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="305"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
@@ -32,82 +32,82 @@
         <translation>nicht reliabel (&lt; 0.667)</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="238"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="241"/>
         <source>Coders        %1 (%2)</source>
         <translation>Codierende    %1 (%2)</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="241"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="244"/>
         <source>Units         %1; pairable units %2; pairable values %3</source>
         <translation>Einheiten     %1; paarbare Einheiten %2; paarbare Werte %3</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="246"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="249"/>
         <source>Alpha (%1)  %2</source>
         <translation>Alpha (%1)  %2</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="263"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="266"/>
         <source>  95% CI      [%1, %2]  %3, %4 replicates, seed %5</source>
         <translation>  95%-KI      [%1, %2]  %3, %4 Replikationen, Seed %5</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="270"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="273"/>
         <source>Percent agreement  %1</source>
         <translation>Prozentuale Übereinstimmung  %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="278"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="281"/>
         <source>, linear weights</source>
         <translation>, lineare Gewichte</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="279"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="282"/>
         <source>, quadratic weights</source>
         <translation>, quadratische Gewichte</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="281"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="284"/>
         <source>Cohen&apos;s kappa %1  (SE %2, 95% CI [%3, %4]%5)</source>
         <translation>Cohens Kappa  %1  (SE %2, 95%-KI [%3, %4]%5)</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="286"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="289"/>
         <source>Scott&apos;s pi    %1</source>
         <translation>Scotts Pi     %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="288"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="291"/>
         <source>Bennett&apos;s S   %1</source>
         <translation>Bennetts S    %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="290"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="293"/>
         <source>Fleiss&apos; kappa %1</source>
         <translation>Fleiss&apos; Kappa %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="292"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="295"/>
         <source>Light&apos;s kappa %1</source>
         <translation>Lights Kappa  %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="294"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="297"/>
         <source>Pairs</source>
         <translation>Paare</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="296"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="299"/>
         <source>  %1 × %2  units %3  agreement %4  kappa %5</source>
         <translation>  %1 × %2  Einheiten %3  Übereinstimmung %4  Kappa %5</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="306"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="309"/>
         <source>Sample size   %1 pairable values; Krippendorff&apos;s minimum for alpha ≥ %2 at p = 0.05 with the rarest value at %3%: %4</source>
         <translation>Stichprobe    %1 paarbare Werte; Krippendorffs Minimum für Alpha ≥ %2 bei p = 0.05, wenn der seltenste Wert %3% ausmacht: %4</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="314"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="317"/>
         <source> — the sample is too small</source>
         <translation> — die Stichprobe ist zu klein</translation>
     </message>
@@ -115,12 +115,12 @@
 <context>
     <name>AgreementRunText</name>
     <message>
-        <location filename="../core/agreement/agreement_run.cpp" line="159"/>
+        <location filename="../core/agreement/agreement_run.cpp" line="158"/>
         <source>The continuum is compared with unitizing alpha, not as a table of units.</source>
         <translation>Das Kontinuum wird mit Unitizing-Alpha verglichen, nicht als Tabelle von Einheiten.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_run.cpp" line="198"/>
+        <location filename="../core/agreement/agreement_run.cpp" line="197"/>
         <source>The continuum could not be compared.</source>
         <translation>Das Kontinuum konnte nicht verglichen werden.</translation>
     </message>
@@ -368,7 +368,7 @@
         <location filename="../core/io/jsonl_reader.cpp" line="180"/>
         <location filename="../core/io/jsonl_reader.cpp" line="189"/>
         <source>expected a JSON object, got %1</source>
-        <translation>JSON-Objekt erwartet, aber %1 erhalten</translation>
+        <translation>JSON-Objekt erwartet, erhalten: %1</translation>
     </message>
     <message>
         <location filename="../core/io/jsonl_reader.cpp" line="184"/>
@@ -1226,112 +1226,112 @@
 <context>
     <name>CoderCopiesText</name>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="68"/>
+        <location filename="../core/project/coder_copies.cpp" line="69"/>
         <source>Several coders are called &quot;%1&quot;; name the coder by pseudonym.</source>
         <translation>Mehrere Codierende heißen „%1“; nennen Sie die codierende Person beim Pseudonym.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="72"/>
+        <location filename="../core/project/coder_copies.cpp" line="73"/>
         <source>There is no coder with the pseudonym or name &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keine codierende Person mit dem Pseudonym oder Namen „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="108"/>
+        <location filename="../core/project/coder_copies.cpp" line="109"/>
         <source>%1 (copy for %2)</source>
         <translation>%1 (Kopie für %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="165"/>
+        <location filename="../core/project/coder_copies.cpp" line="166"/>
         <source>%1 is not a Fourfold project file; it was not merged.</source>
         <translation>%1 ist keine Fourfold-Projektdatei; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="168"/>
+        <location filename="../core/project/coder_copies.cpp" line="169"/>
         <source>%1 was written by a newer Fourfold (schema version %2); it was not merged.</source>
         <translation>%1 wurde von einem neueren Fourfold geschrieben (Schemaversion %2); sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="177"/>
+        <location filename="../core/project/coder_copies.cpp" line="178"/>
         <source>%1 is a project file but not a coder copy; it was not merged.</source>
         <translation>%1 ist eine Projektdatei, aber keine Kopie für Codierende; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="182"/>
+        <location filename="../core/project/coder_copies.cpp" line="183"/>
         <source>%1 is a coder copy of another project (%2), not of this one (%3); it was not merged.</source>
         <translation>%1 ist eine Kopie für Codierende aus einem anderen Projekt (%2), nicht aus diesem (%3); sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="191"/>
+        <location filename="../core/project/coder_copies.cpp" line="192"/>
         <source>The coder of %1 is no longer in the project; it was not merged.</source>
         <translation>Die codierende Person von %1 ist nicht mehr im Projekt; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="203"/>
+        <location filename="../core/project/coder_copies.cpp" line="204"/>
         <source>%1 holds article &quot;%2&quot;, which is not in the project; it was not merged.</source>
         <translation>%1 enthält den Artikel „%2“, der nicht im Projekt ist; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="209"/>
+        <location filename="../core/project/coder_copies.cpp" line="210"/>
         <source>The text of article &quot;%1&quot; in %2 differs from the project&apos;s (SHA-256 %3 instead of %4): the copy was changed outside Fourfold; it was not merged.</source>
         <translation>Der Text des Artikels „%1“ in %2 weicht von dem des Projekts ab (SHA-256 %3 statt %4): die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="223"/>
+        <location filename="../core/project/coder_copies.cpp" line="224"/>
         <source>%1 holds a codebook version (%2) that is not in the project; it was not merged.</source>
         <translation>%1 enthält eine Codebuchversion (%2), die nicht im Projekt ist; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="232"/>
+        <location filename="../core/project/coder_copies.cpp" line="233"/>
         <source>%1 holds %2 annotations, answers or assignments of people other than its coder %3; it was not merged.</source>
         <translation>%1 enthält %2 Annotationen, Antworten oder Zuweisungen anderer Personen als ihrer codierenden Person %3; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="368"/>
+        <location filename="../core/project/coder_copies.cpp" line="369"/>
         <source>%1 names a copy (%2) that this project never handed out; it was not merged.</source>
         <translation>%1 nennt eine Kopie (%2), die dieses Projekt nie ausgegeben hat; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="390"/>
+        <location filename="../core/project/coder_copies.cpp" line="391"/>
         <source>There is no coder copy %1.</source>
         <translation>Es gibt keine Kopie für Codierende %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="516"/>
+        <location filename="../core/project/coder_copies.cpp" line="517"/>
         <source>The coding time in %1 would overflow the project&apos;s; it was not merged.</source>
         <translation>Die Codierzeit in %1 würde die des Projekts überlaufen lassen; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="572"/>
+        <location filename="../core/project/coder_copies.cpp" line="573"/>
         <source>%1 is itself a coder copy; hand out copies from the main project.</source>
         <translation>%1 ist selbst eine Kopie für Codierende; geben Sie Kopien aus dem Hauptprojekt aus.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="579"/>
+        <location filename="../core/project/coder_copies.cpp" line="580"/>
         <source>%1 already exists; choose another name for the coder copy.</source>
         <translation>%1 existiert bereits; wählen Sie einen anderen Namen für die Kopie.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="587"/>
+        <location filename="../core/project/coder_copies.cpp" line="588"/>
         <source>Coder %1 has no assigned articles; assign some before handing out a copy.</source>
         <translation>Der codierenden Person %1 sind keine Artikel zugewiesen; weisen Sie welche zu, bevor Sie eine Kopie ausgeben.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="648"/>
+        <location filename="../core/project/coder_copies.cpp" line="649"/>
         <source>%1 is itself a coder copy; merge copies into the main project.</source>
         <translation>%1 ist selbst eine Kopie für Codierende; führen Sie Kopien im Hauptprojekt zusammen.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="676"/>
+        <location filename="../core/project/coder_copies.cpp" line="677"/>
         <source>Keep &quot;mine&quot; (the version the project holds) or &quot;theirs&quot; (the version that lost), not &quot;%1&quot;.</source>
         <translation>Behalten Sie „mine“ (die Version im Projekt) oder „theirs“ (die unterlegene Version), nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="693"/>
+        <location filename="../core/project/coder_copies.cpp" line="694"/>
         <source>There is no open conflict %1.</source>
         <translation>Es gibt keinen offenen Konflikt %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="696"/>
+        <location filename="../core/project/coder_copies.cpp" line="697"/>
         <source>%1 has %2 open conflicts (from several copies); name the conflict&apos;s uuid.</source>
         <translation>%1 hat %2 offene Konflikte (aus mehreren Kopien); nennen Sie die UUID des Konflikts.</translation>
     </message>
@@ -1354,88 +1354,88 @@
 <context>
     <name>CodingImportText</name>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="39"/>
+        <location filename="../core/project/coding_import.cpp" line="58"/>
         <source>missing required field &quot;%1&quot;.</source>
         <translation>erforderliches Feld „%1“ fehlt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="42"/>
+        <location filename="../core/project/coding_import.cpp" line="61"/>
         <source>field &quot;%1&quot; must be a non-empty string.</source>
         <translation>Feld „%1“ muss eine nicht leere Zeichenkette sein.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="56"/>
+        <location filename="../core/project/coding_import.cpp" line="75"/>
         <source>Cannot read %1: %2</source>
         <translation>%1 kann nicht gelesen werden: %2</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="101"/>
+        <location filename="../core/project/coding_import.cpp" line="120"/>
         <source>the line is longer than %1 MiB</source>
         <translation>die Zeile ist länger als %1 MiB</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="120"/>
+        <location filename="../core/project/coding_import.cpp" line="139"/>
         <source>not a JSON object (%1).</source>
         <translation>kein JSON-Objekt (%1).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="123"/>
+        <location filename="../core/project/coding_import.cpp" line="142"/>
         <source>another JSON value</source>
         <translation>ein anderer JSON-Wert</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="128"/>
+        <location filename="../core/project/coding_import.cpp" line="147"/>
         <source>unknown field &quot;%1&quot; (expected article, coder, function, quote, occurrence, attributes, note, confidence, gold, rationale, item, value).</source>
         <translation>unbekanntes Feld „%1“ (erwartet: article, coder, function, quote, occurrence, attributes, note, confidence, gold, rationale, item, value).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="138"/>
+        <location filename="../core/project/coding_import.cpp" line="157"/>
         <source>field &quot;%1&quot; must be %2.</source>
         <translation>Feld „%1“ muss %2 sein.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="143"/>
+        <location filename="../core/project/coding_import.cpp" line="162"/>
         <source>an object</source>
         <translation>ein Objekt</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="144"/>
-        <location filename="../core/project/coding_import.cpp" line="148"/>
+        <location filename="../core/project/coding_import.cpp" line="163"/>
+        <location filename="../core/project/coding_import.cpp" line="167"/>
         <source>text</source>
         <translation>Text</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="146"/>
+        <location filename="../core/project/coding_import.cpp" line="165"/>
         <source>a number from 0 to 1</source>
         <translation>eine Zahl von 0 bis 1</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="157"/>
+        <location filename="../core/project/coding_import.cpp" line="176"/>
         <source>unknown coder &quot;%1&quot;.</source>
         <translation>unbekannte codierende Person „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="165"/>
+        <location filename="../core/project/coding_import.cpp" line="184"/>
         <source>unknown article &quot;%1&quot;.</source>
         <translation>unbekannter Artikel „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="225"/>
+        <location filename="../core/project/coding_import.cpp" line="244"/>
         <source>unknown function &quot;%1&quot; (expected problem, cause, evaluation or remedy).</source>
         <translation>unbekannte Funktion „%1“ (erwartet: problem, cause, evaluation oder remedy).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="236"/>
+        <location filename="../core/project/coding_import.cpp" line="255"/>
         <source>field &quot;occurrence&quot; must be a whole number from 1.</source>
         <translation>Feld „occurrence“ muss eine ganze Zahl ab 1 sein.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="243"/>
+        <location filename="../core/project/coding_import.cpp" line="262"/>
         <source>the quote &quot;%1&quot; does not occur %2 time(s) in article &quot;%3&quot;.</source>
         <translation>das Zitat „%1“ kommt im Artikel „%3“ nicht %2-mal vor.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="259"/>
+        <location filename="../core/project/coding_import.cpp" line="278"/>
         <source>field &quot;gold&quot; must be true or false.</source>
         <translation>Feld „gold“ muss true oder false sein.</translation>
     </message>
@@ -1501,27 +1501,27 @@
 <context>
     <name>ConflictEditsText</name>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="58"/>
+        <location filename="../core/project/conflict_edits.cpp" line="61"/>
         <source>Keep the other version</source>
         <translation>Die andere Version behalten</translation>
     </message>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="59"/>
+        <location filename="../core/project/conflict_edits.cpp" line="62"/>
         <source>Keep the project&apos;s version</source>
         <translation>Die Version des Projekts behalten</translation>
     </message>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="70"/>
+        <location filename="../core/project/conflict_edits.cpp" line="83"/>
         <source>There is no open conflict %1.</source>
         <translation>Es gibt keinen offenen Konflikt %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="100"/>
+        <location filename="../core/project/conflict_edits.cpp" line="111"/>
         <source>The object of conflict %1 is missing from the project.</source>
         <translation>Das Objekt des Konflikts %1 fehlt im Projekt.</translation>
     </message>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="109"/>
+        <location filename="../core/project/conflict_edits.cpp" line="122"/>
         <source>The decision on conflict %1 was never made.</source>
         <translation>Die Entscheidung über Konflikt %1 wurde nie getroffen.</translation>
     </message>
@@ -2393,22 +2393,22 @@
 <context>
     <name>InputFileText</name>
     <message>
-        <location filename="../core/io/input_file.cpp" line="24"/>
+        <location filename="../core/io/input_file.cpp" line="27"/>
         <source>this is not a regular file</source>
         <translation>dies ist keine reguläre Datei</translation>
     </message>
     <message>
-        <location filename="../core/io/input_file.cpp" line="34"/>
+        <location filename="../core/io/input_file.cpp" line="37"/>
         <source>the file cannot be opened for reading</source>
         <translation>die Datei kann nicht zum Lesen geöffnet werden</translation>
     </message>
     <message>
-        <location filename="../core/io/input_file.cpp" line="40"/>
+        <location filename="../core/io/input_file.cpp" line="43"/>
         <source>the file is longer than %1 MiB, the most this reader takes</source>
         <translation>die Datei ist länger als %1 MiB, das Höchstmaß dieses Lesers</translation>
     </message>
     <message>
-        <location filename="../core/io/input_file.cpp" line="58"/>
+        <location filename="../core/io/input_file.cpp" line="61"/>
         <source>the file cannot be read</source>
         <translation>die Datei kann nicht gelesen werden</translation>
     </message>
@@ -2450,9 +2450,64 @@
         <translation>Die Datei %1 konnte nicht gelesen werden: %2.</translation>
     </message>
     <message>
-        <location filename="../core/io/json_item_stream.cpp" line="214"/>
-        <source>This is not valid JSON: %1.</source>
-        <translation>Das ist kein gültiges JSON: %1.</translation>
+        <location filename="../core/io/json_item_stream.cpp" line="218"/>
+        <source>This is not valid JSON: the file ends before the JSON is complete.</source>
+        <translation>Das ist kein gültiges JSON: Die Datei endet, bevor das JSON vollständig ist.</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_item_stream.cpp" line="221"/>
+        <source>This is not valid JSON at &quot;%1&quot;.</source>
+        <translation>Das ist kein gültiges JSON bei „%1“.</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_item_stream.cpp" line="223"/>
+        <source>This is not valid JSON.</source>
+        <translation>Das ist kein gültiges JSON.</translation>
+    </message>
+</context>
+<context>
+    <name>JsonTypeNameText</name>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="22"/>
+        <source>null</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>null</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="24"/>
+        <source>boolean</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>Wahrheitswert</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="26"/>
+        <source>number</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>Zahl</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="28"/>
+        <source>string</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>Zeichenkette</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="30"/>
+        <source>array</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>Array</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="32"/>
+        <source>object</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>Objekt</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="36"/>
+        <source>undefined</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>undefiniert</translation>
     </message>
 </context>
 <context>
@@ -2608,32 +2663,32 @@
         <translation>Das ist nicht die Passphrase von %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="171"/>
+        <location filename="../core/project/people.cpp" line="184"/>
         <source>A person needs a name and a pseudonym.</source>
         <translation>Eine Person braucht einen Namen und ein Pseudonym.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="174"/>
+        <location filename="../core/project/people.cpp" line="187"/>
         <source>The pseudonym &quot;%1&quot; is already taken.</source>
         <translation>Das Pseudonym „%1“ ist bereits vergeben.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="200"/>
+        <location filename="../core/project/people.cpp" line="213"/>
         <source>A person needs a name.</source>
         <translation>Eine Person braucht einen Namen.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="216"/>
+        <location filename="../core/project/people.cpp" line="229"/>
         <source>%1 is already disabled.</source>
         <translation>%1 ist bereits deaktiviert.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="218"/>
+        <location filename="../core/project/people.cpp" line="231"/>
         <source>%1 is already enabled.</source>
         <translation>%1 ist bereits aktiviert.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="225"/>
+        <location filename="../core/project/people.cpp" line="238"/>
         <source>%1 is the project&apos;s only enabled lead; add or enable another lead first.</source>
         <translation>%1 ist die einzige aktive Leitung des Projekts; fügen Sie zuerst eine andere Leitung hinzu oder aktivieren Sie eine.</translation>
     </message>
@@ -2766,12 +2821,12 @@
         <translation>übergangen: kein Format, das Fourfold liest</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="191"/>
+        <location filename="../core/project/project_import.cpp" line="193"/>
         <source>The folder %1 holds no files.</source>
         <translation>Der Ordner %1 enthält keine Dateien.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/project_import.cpp" line="196"/>
+        <location filename="../core/project/project_import.cpp" line="198"/>
         <source>%1: %n article(s)</source>
         <translation>
             <numerusform>%1: %n Artikel</numerusform>
@@ -2779,7 +2834,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/project_import.cpp" line="201"/>
+        <location filename="../core/project/project_import.cpp" line="203"/>
         <source>The folder %1 was not imported: %n of its files could not be read, so nothing was added.</source>
         <translation>
             <numerusform>Der Ordner %1 wurde nicht importiert: %n seiner Dateien konnte nicht gelesen werden, daher wurde nichts hinzugefügt.</numerusform>
@@ -2790,17 +2845,17 @@
 <context>
     <name>ProjectTables</name>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="52"/>
+        <location filename="../core/store/project_tables.cpp" line="61"/>
         <source>The article is already assigned to this coder in this phase, or one of them does not exist.</source>
         <translation>Der Artikel ist dieser codierenden Person in dieser Phase bereits zugewiesen, oder einer von beiden existiert nicht.</translation>
     </message>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="257"/>
+        <location filename="../core/store/project_tables.cpp" line="266"/>
         <source>The project file %1 is damaged, so nothing was added to it; `fourfold-cli check` lists the damage. Restore it from a backup.</source>
         <translation>Die Projektdatei %1 ist beschädigt, daher wurde ihr nichts hinzugefügt; `fourfold-cli check` listet die Schäden auf. Stellen Sie sie aus einer Sicherung wieder her.</translation>
     </message>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="289"/>
+        <location filename="../core/store/project_tables.cpp" line="298"/>
         <source>foreign_key_check: row %1 of %2 refers to a missing row of %3</source>
         <translation>foreign_key_check: Zeile %1 von %2 verweist auf eine fehlende Zeile von %3</translation>
     </message>
@@ -2833,12 +2888,17 @@
         <translation>Eine codierende Person braucht einen Namen und ein Pseudonym.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="238"/>
+        <location filename="../core/project/project.cpp" line="195"/>
+        <source>%1 was not added: a lead is added with a passphrase (Lead → People or fourfold-cli people --add).</source>
+        <translation>%1 wurde nicht hinzugefügt: Eine Leitung wird mit einer Passphrase hinzugefügt (Leitung → Personen oder fourfold-cli people --add).</translation>
+    </message>
+    <message>
+        <location filename="../core/project/project.cpp" line="245"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 ist deaktiviert und erhält keine neuen Zuweisungen; aktivieren Sie die Person zuerst.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="362"/>
+        <location filename="../core/project/project.cpp" line="369"/>
         <source>An edit without its own savepoint needs a batch.</source>
         <translation>Eine Änderung ohne eigenen Sicherungspunkt braucht einen Stapel.</translation>
     </message>
@@ -2924,22 +2984,22 @@
 <context>
     <name>ReliabilityTableReaderText</name>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="119"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="118"/>
         <source>the first column of the header must be &quot;unit&quot;, found &quot;%1&quot;.</source>
         <translation>die erste Spalte der Kopfzeile muss „unit“ sein, gefunden: „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="126"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="125"/>
         <source>column %1 of the header has no coder name.</source>
         <translation>Spalte %1 der Kopfzeile hat keinen Namen einer codierenden Person.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="130"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="129"/>
         <source>the coder &quot;%1&quot; appears twice in the header.</source>
         <translation>die codierende Person „%1“ kommt in der Kopfzeile zweimal vor.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/io/reliability_table_reader.cpp" line="137"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="136"/>
         <source>reliability needs at least two coders; the header names %n.</source>
         <translation>
             <numerusform>Reliabilität braucht mindestens zwei Codierende; die Kopfzeile nennt %n.</numerusform>
@@ -2947,27 +3007,27 @@
         </translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="145"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="144"/>
         <source>this row has %1 fields but the header has %2.</source>
         <translation>diese Zeile hat %1 Felder, die Kopfzeile aber %2.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="151"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="150"/>
         <source>the unit id is empty.</source>
         <translation>die Einheiten-ID ist leer.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="160"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="159"/>
         <source>the unit &quot;%1&quot; appears twice (first on line %2).</source>
         <translation>die Einheit „%1“ kommt zweimal vor (zuerst in Zeile %2).</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="168"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="167"/>
         <source>the file is empty; expected a header row &quot;unit,&lt;coder&gt;,&lt;coder&gt;,...&quot;.</source>
         <translation>die Datei ist leer; erwartet wird eine Kopfzeile „unit,&lt;Codierende&gt;,&lt;Codierende&gt;,...“.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="172"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="171"/>
         <source>the file has a header but no units.</source>
         <translation>die Datei hat eine Kopfzeile, aber keine Einheiten.</translation>
     </message>
@@ -2975,27 +3035,27 @@
 <context>
     <name>ReportChartsText</name>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="138"/>
+        <location filename="../app/report/report_charts.cpp" line="144"/>
         <source>undef.</source>
         <translation>n. def.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="151"/>
+        <location filename="../app/report/report_charts.cpp" line="157"/>
         <source>95% CI, pairs resampled</source>
         <translation>95%-KI, Paare neu gezogen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="159"/>
+        <location filename="../app/report/report_charts.cpp" line="165"/>
         <source>95% CI, units resampled</source>
         <translation>95%-KI, Einheiten neu gezogen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="196"/>
+        <location filename="../app/report/report_charts.cpp" line="202"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="213"/>
+        <location filename="../app/report/report_charts.cpp" line="219"/>
         <source>Cohen&apos;s kappa</source>
         <translation>Cohens Kappa</translation>
     </message>
@@ -3058,8 +3118,8 @@
     <message>
         <location filename="../app/report/report_document.cpp" line="157"/>
         <location filename="../app/report/report_document.cpp" line="159"/>
-        <location filename="../app/report/report_markup.cpp" line="92"/>
         <location filename="../app/report/report_frames_section.cpp" line="86"/>
+        <location filename="../app/report/report_markup.cpp" line="92"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
@@ -3473,8 +3533,8 @@
         <translation>Rolle</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="155"/>
         <location filename="../app/report/report_frames_section.cpp" line="49"/>
+        <location filename="../app/report/report_sections.cpp" line="155"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
@@ -3979,134 +4039,202 @@
 <context>
     <name>ShortcutTableText</name>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="53"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="25"/>
+        <source> or </source>
+        <translation> oder </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="114"/>
         <source>Mark the selected text as problem, cause, evaluation or remedy, snapped to whole words; with a span selected: relabel it</source>
         <translation>Den markierten Text als Problem, Ursache, Bewertung oder Lösung kennzeichnen, an ganzen Wörtern ausgerichtet; bei gewählter Textstelle: ihre Funktion ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="56"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="117"/>
         <source>%1+1 – 4 (or Alt+1 – 4)</source>
         <translation>%1+1 – 4 (oder Alt+1 – 4)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="57"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="118"/>
         <source>Mark exactly the selected text, without snapping to words</source>
         <translation>Genau den markierten Text kennzeichnen, ohne Ausrichtung an Wörtern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="59"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="120"/>
         <source>Exact selection on or off (View menu): while on, 1 – 4 and handle drags take the text exactly as selected</source>
         <translation>Exakte Auswahl ein oder aus (Menü Ansicht): solange ein, übernehmen 1 – 4 und das Ziehen an Griffen den Text genau wie markiert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="62"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="123"/>
         <source>%1 while dragging a handle (or Alt)</source>
         <translation>%1 beim Ziehen eines Griffs (oder Alt)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="63"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="124"/>
         <source>Resize the selected span to the exact character</source>
         <translation>Die gewählte Textstelle zeichengenau in der Länge ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="64"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="125"/>
         <source>Delete or Backspace</source>
         <translation>Entf oder Rücktaste</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="65"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="126"/>
         <source>Delete the selected span</source>
         <translation>Die gewählte Textstelle löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="66"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="127"/>
         <source>%1+Left / Right (or Alt+Left / Right)</source>
         <translation>%1+Links / Rechts (oder Alt+Links / Rechts)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="67"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="128"/>
         <source>Move the selected span&apos;s start by a word</source>
         <translation>Den Anfang der gewählten Textstelle um ein Wort verschieben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="68"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="129"/>
         <source>%1+Shift+Left / Right (or Alt+Shift+Left / Right)</source>
         <translation>%1+Umschalt+Links / Rechts (oder Alt+Umschalt+Links / Rechts)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="69"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="130"/>
         <source>Move the selected span&apos;s end by a word</source>
         <translation>Das Ende der gewählten Textstelle um ein Wort verschieben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="70"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="131"/>
         <source>%1+Up / Down (or Alt+Up / Down)</source>
         <translation>%1+Hoch / Runter (oder Alt+Hoch / Runter)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="71"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="132"/>
         <source>Select the previous / next span</source>
         <translation>Die vorige / nächste Textstelle wählen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="72"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="133"/>
         <source>Esc</source>
         <translation>Esc</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="73"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="134"/>
         <source>Clear the span selection, then the text selection; cancel a drag</source>
         <translation>Erst die Auswahl der Textstelle, dann die Textauswahl aufheben; ein Ziehen abbrechen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="75"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="136"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="179"/>
         <source>Undo the last change</source>
         <translation>Die letzte Änderung rückgängig machen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="76"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="137"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="180"/>
         <source>Redo</source>
         <translation>Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="78"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="139"/>
         <source>Mark the article as done and open the next</source>
         <translation>Den Artikel als erledigt markieren und den nächsten öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="79"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="140"/>
         <source>Next article that is not done</source>
         <translation>Nächster Artikel, der nicht erledigt ist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="80"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="141"/>
         <source>Start a new project</source>
         <translation>Ein neues Projekt beginnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="81"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="142"/>
         <source>Open a project</source>
         <translation>Ein Projekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="82"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="143"/>
         <source>Search the texts</source>
         <translation>In den Texten suchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="84"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="145"/>
         <source>Compare coders and adjudicate (leads)</source>
         <translation>Codierende vergleichen und entscheiden (Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="85"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="146"/>
         <source>Reliability (leads)</source>
         <translation>Reliabilität (Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="86"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="147"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="181"/>
         <source>This list of keys</source>
         <translation>Diese Liste der Tasten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="155"/>
+        <source>Next undecided disagreement</source>
+        <translation>Nächste nicht entschiedene Abweichung</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="157"/>
+        <source>Previous undecided disagreement</source>
+        <translation>Vorherige nicht entschiedene Abweichung</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="158"/>
+        <source>Next article in the queue</source>
+        <translation>Nächster Artikel in der Warteschlange</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="160"/>
+        <source>Previous article in the queue</source>
+        <translation>Vorheriger Artikel in der Warteschlange</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="162"/>
+        <source>Re-sort the queue: most undecided disagreements first (the queue keeps its order while you decide)</source>
+        <translation>Die Warteschlange neu sortieren: die meisten nicht entschiedenen Abweichungen zuerst (bis dahin behält sie ihre Reihenfolge, während Sie entscheiden)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="165"/>
+        <source>Accept the chosen coder&apos;s span into gold</source>
+        <translation>Die Textstelle der gewählten codierenden Person in den Goldstandard übernehmen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="167"/>
+        <source>Put one span covering the chosen spans into gold</source>
+        <translation>Eine Textstelle, die die gewählten Textstellen umfasst, in den Goldstandard aufnehmen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="169"/>
+        <source>Decide a gold span with a function and boundaries of your own</source>
+        <translation>Eine Goldstandard-Textstelle mit eigener Funktion und eigenen Grenzen festlegen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="171"/>
+        <source>Record that the chosen spans do not belong in gold</source>
+        <translation>Festhalten, dass die gewählten Textstellen nicht in den Goldstandard gehören</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="172"/>
+        <source>Withdraw the chosen gold span</source>
+        <translation>Die gewählte Goldstandard-Textstelle zurückziehen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="174"/>
+        <source>Accept every span all coders of the article agree on</source>
+        <translation>Jede Textstelle übernehmen, in der alle Codierenden des Artikels übereinstimmen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="176"/>
+        <source>Write the rationale kept with the next decision</source>
+        <translation>Die Begründung schreiben, die mit der nächsten Entscheidung festgehalten wird</translation>
     </message>
 </context>
 <context>
@@ -4125,14 +4253,6 @@
         <location filename="../core/scoring/span_layer.cpp" line="149"/>
         <source>There is no extractor run &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keinen Extraktorlauf „%1“.</translation>
-    </message>
-</context>
-<context>
-    <name>StudyEditText</name>
-    <message>
-        <location filename="../core/project/study_edits.cpp" line="39"/>
-        <source>The project already holds %1.</source>
-        <translation>Das Projekt enthält %1 bereits.</translation>
     </message>
 </context>
 <context>
@@ -4310,6 +4430,14 @@
     </message>
 </context>
 <context>
+    <name>StudyEditText</name>
+    <message>
+        <location filename="../core/project/study_edits.cpp" line="39"/>
+        <source>The project already holds %1.</source>
+        <translation>Das Projekt enthält %1 bereits.</translation>
+    </message>
+</context>
+<context>
     <name>StudyText</name>
     <message>
         <location filename="../app/desktop/study/study_text.cpp" line="13"/>
@@ -4462,27 +4590,27 @@
 <context>
     <name>ValueEncodingText</name>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="29"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="30"/>
         <source>unit &quot;%1&quot;, coder &quot;%2&quot;: %3</source>
         <translation>Einheit „%1“, codierende Person „%2“: %3</translation>
     </message>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="121"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="126"/>
         <source>A set distance (Jaccard, MASI) cannot be combined with the %1 level.</source>
         <translation>Eine Mengendistanz (Jaccard, MASI) lässt sich nicht mit dem Niveau %1 kombinieren.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="174"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="179"/>
         <source>&quot;%1&quot; is not one of the ordered values (%2).</source>
         <translation>„%1“ ist keiner der geordneten Werte (%2).</translation>
     </message>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="181"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="186"/>
         <source>&quot;%1&quot; is not a number, as the %2 level needs.</source>
         <translation>„%1“ ist keine Zahl, wie das Niveau %2 sie verlangt.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="185"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="190"/>
         <source>%1 is negative; ratio values cannot be.</source>
         <translation>%1 ist negativ; Verhältniswerte können das nicht sein.</translation>
     </message>
@@ -5136,7 +5264,7 @@
         <location filename="../app/cli/command_export.cpp" line="73"/>
         <location filename="../app/cli/command_extract.cpp" line="166"/>
         <location filename="../app/cli/command_handout.cpp" line="25"/>
-        <location filename="../app/cli/command_import.cpp" line="128"/>
+        <location filename="../app/cli/command_import.cpp" line="129"/>
         <location filename="../app/cli/command_info.cpp" line="38"/>
         <location filename="../app/cli/command_merge.cpp" line="75"/>
         <location filename="../app/cli/command_people.cpp" line="109"/>
@@ -5262,62 +5390,62 @@
         <translation>Seed %1.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="32"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="34"/>
         <source>Cannot read %1: %2</source>
         <translation>%1 kann nicht gelesen werden: %2</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="37"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="39"/>
         <source>%1: not a JSON object (%2).</source>
         <translation>%1: kein JSON-Objekt (%2).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="65"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="68"/>
         <source>%1: a coder&apos;s role must be &quot;coder&quot; or &quot;lead&quot;.</source>
         <translation>%1: die Rolle einer Person muss „coder“ oder „lead“ sein.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="85"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="100"/>
         <source>%1: the reliability article &quot;%2&quot; is not in articles.jsonl.</source>
         <translation>%1: der Reliabilitätsartikel „%2“ ist nicht in articles.jsonl.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="122"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="142"/>
         <source>Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans, 2 baseline runs.</source>
         <translation>%1 erstellt: %2 Artikel, %3 Codierende, %4 Textstellen, %5 Urteile auf Artikelebene, %6 Goldstandard-Textstellen, 2 Baseline-Läufe.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="147"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="167"/>
         <source>Replace OUT if it exists.</source>
         <translation>OUT ersetzen, falls vorhanden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="150"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="170"/>
         <source>The folder with study.json, articles.jsonl, codings.jsonl and gold.jsonl.</source>
         <translation>Der Ordner mit study.json, articles.jsonl, codings.jsonl und gold.jsonl.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="152"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="172"/>
         <source>The project file to write (*.fourfold).</source>
         <translation>Die zu schreibende Projektdatei (*.fourfold).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="154"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="174"/>
         <source>Build the demo project (invented data) from its source files.</source>
         <translation>Das Demoprojekt (erfundene Daten) aus seinen Quelldateien erstellen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="159"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="179"/>
         <source>expected a source folder and an output file.</source>
         <translation>Quellordner und Ausgabedatei erwartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="164"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="184"/>
         <source>%1 already exists; add --force to replace it.</source>
         <translation>%1 existiert bereits; ergänzen Sie --force, um es zu ersetzen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="178"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="198"/>
         <source>Cannot move the new project to %1.</source>
         <translation>Das neue Projekt kann nicht nach %1 verschoben werden.</translation>
     </message>
@@ -5603,7 +5731,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_extract.cpp" line="194"/>
-        <location filename="../app/cli/command_import.cpp" line="201"/>
+        <location filename="../app/cli/command_import.cpp" line="202"/>
         <source>Upgraded the project file; the old version is kept as %1.</source>
         <translation>Die Projektdatei wurde aktualisiert; die alte Version bleibt als %1 erhalten.</translation>
     </message>
@@ -6036,122 +6164,122 @@
         <translation>Sie enthält %1 Artikel, %2 Annotationen, %3 Verknüpfungen und %4 Urteile auf Artikelebene.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="49"/>
+        <location filename="../app/cli/command_import.cpp" line="50"/>
         <source>%1: %2 spans, %3 answers, %4 gold spans added</source>
         <translation>%1: %2 Textstellen, %3 Antworten, %4 Goldstandard-Textstellen hinzugefügt</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="55"/>
+        <location filename="../app/cli/command_import.cpp" line="56"/>
         <source>  %1 line(s) skipped: already in the project (the same annotation, or the same coder, function and range; the same answer; the same gold span)</source>
         <translation>  %1 Zeile(n) übersprungen: bereits im Projekt (dieselbe Annotation oder dieselbe Person, Funktion und derselbe Bereich; dieselbe Antwort; dieselbe Goldstandard-Textstelle)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="60"/>
+        <location filename="../app/cli/command_import.cpp" line="61"/>
         <source>  %1 article(s) marked done for their coders (imported codings count as finished)</source>
         <translation>  %1 Artikel für ihre Codierenden als erledigt markiert (importierte Codierungen gelten als abgeschlossen)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="65"/>
+        <location filename="../app/cli/command_import.cpp" line="66"/>
         <source>  new coders: %1</source>
         <translation>  neue Codierende: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="82"/>
+        <location filename="../app/cli/command_import.cpp" line="83"/>
         <source>Read every file as txt, html, jsonl, csv, feed (RSS or Atom), newsxml (NITF or NewsML-G2), docx, odt, pdf or epub (default: from each file&apos;s suffix; .xml and unknown suffixes from the content).</source>
         <translation>Jede Datei als txt, html, jsonl, csv, feed (RSS oder Atom), newsxml (NITF oder NewsML-G2), docx, odt, pdf oder epub lesen (Standard: nach der Endung jeder Datei; .xml und unbekannte Endungen nach dem Inhalt).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="88"/>
+        <location filename="../app/cli/command_import.cpp" line="89"/>
         <source>Language (BCP 47 tag) of articles that name none (default: the project&apos;s).</source>
         <translation>Sprache (BCP-47-Kennzeichen) von Artikeln, die keine nennen (Standard: die des Projekts).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="92"/>
+        <location filename="../app/cli/command_import.cpp" line="93"/>
         <source>CSV: take FIELD (id, title, text, outlet, published, language) from the column HEADER. Repeatable.</source>
         <translation>CSV: FELD (id, title, text, outlet, published, language) aus der Spalte HEADER nehmen. Wiederholbar.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="97"/>
+        <location filename="../app/cli/command_import.cpp" line="98"/>
         <source>EPUB: import each book as one article instead of one article per chapter.</source>
         <translation>EPUB: jedes Buch als einen Artikel importieren statt eines Artikels je Kapitel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="100"/>
+        <location filename="../app/cli/command_import.cpp" line="101"/>
         <source>txt, docx, odt, pdf: cut each document into articles at the lines matching REGEX; named groups (?&lt;title&gt;...), (?&lt;outlet&gt;...), (?&lt;date&gt;...) fill those fields, else the first line of each part is its title.</source>
         <translation>txt, docx, odt, pdf: jedes Dokument an den Zeilen, auf die REGEX passt, in Artikel teilen; benannte Gruppen (?&lt;title&gt;...), (?&lt;outlet&gt;...), (?&lt;date&gt;...) füllen diese Felder, sonst ist die erste Zeile jedes Teils sein Titel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="106"/>
+        <location filename="../app/cli/command_import.cpp" line="107"/>
         <source>List and record an added article as a near copy of an article in the project when the estimated Jaccard similarity of their 5-word shingles is at least J, in (0, 1] (default 0.8).</source>
         <translation>Einen hinzugefügten Artikel als Beinahe-Kopie eines Artikels im Projekt auflisten und speichern, wenn die geschätzte Jaccard-Ähnlichkeit ihrer 5-Wort-Shingles mindestens J beträgt, in (0, 1] (Standard 0.8).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="112"/>
+        <location filename="../app/cli/command_import.cpp" line="113"/>
         <source>Print the report as JSON.</source>
         <translation>Den Bericht als JSON ausgeben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="114"/>
+        <location filename="../app/cli/command_import.cpp" line="115"/>
         <source>The files hold W3C Web Annotations (from &quot;export --format w3c&quot;): import them as codings of the articles already in the project.</source>
         <translation>Die Dateien enthalten W3C-Web-Annotationen (aus „export --format w3c“): als Codierungen der bereits im Projekt vorhandenen Artikel importieren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="118"/>
+        <location filename="../app/cli/command_import.cpp" line="119"/>
         <source>The files hold quote-anchored codings (JSON Lines, see sample-project/README.md).</source>
         <translation>Die Dateien enthalten an Zitaten verankerte Codierungen (JSON Lines, siehe sample-project/README.md).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="121"/>
+        <location filename="../app/cli/command_import.cpp" line="122"/>
         <source>With --w3c or --codings: the phase of the imported codings (training, pilot, reliability, production; default production).</source>
         <translation>Mit --w3c oder --codings: die Phase der importierten Codierungen (training, pilot, reliability, production; Standard production).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="130"/>
+        <location filename="../app/cli/command_import.cpp" line="131"/>
         <source>Files or folders to import. Each file is imported whole or not at all; a folder (with its subfolders) likewise, as one.</source>
         <translation>Zu importierende Dateien oder Ordner. Jede Datei wird ganz oder gar nicht importiert; ein Ordner (mit seinen Unterordnern) ebenso, als Ganzes.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="134"/>
+        <location filename="../app/cli/command_import.cpp" line="135"/>
         <source>Import articles into a project (or, with --w3c or --codings, codings of its articles).</source>
         <translation>Artikel in ein Projekt importieren (oder, mit --w3c oder --codings, Codierungen seiner Artikel).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="143"/>
+        <location filename="../app/cli/command_import.cpp" line="144"/>
         <source>expected a project file and at least one file to import.</source>
         <translation>Projektdatei und mindestens eine zu importierende Datei erwartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="151"/>
+        <location filename="../app/cli/command_import.cpp" line="152"/>
         <source>unknown format &quot;%1&quot; (expected txt, html, jsonl, csv, feed, newsxml, docx, odt, pdf or epub).</source>
         <translation>unbekanntes Format „%1“ (erwartet: txt, html, jsonl, csv, feed, newsxml, docx, odt, pdf oder epub).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="162"/>
+        <location filename="../app/cli/command_import.cpp" line="163"/>
         <source>--split-on: %1</source>
         <translation>--split-on: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="170"/>
+        <location filename="../app/cli/command_import.cpp" line="171"/>
         <source>--near-copy-threshold expects a number in (0, 1], got &quot;%1&quot;.</source>
         <translation>--near-copy-threshold erwartet eine Zahl in (0, 1], erhalten: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="178"/>
+        <location filename="../app/cli/command_import.cpp" line="179"/>
         <source>--column expects FIELD=HEADER, got &quot;%1&quot;.</source>
         <translation>--column erwartet FELD=HEADER, erhalten: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="185"/>
+        <location filename="../app/cli/command_import.cpp" line="186"/>
         <source>choose either --w3c or --codings.</source>
         <translation>wählen Sie entweder --w3c oder --codings.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="191"/>
+        <location filename="../app/cli/command_import.cpp" line="192"/>
         <source>unknown phase &quot;%1&quot; (expected training, pilot, reliability or production).</source>
         <translation>unbekannte Phase „%1“ (erwartet: training, pilot, reliability oder production).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_import.cpp" line="214"/>
+        <location filename="../app/cli/command_import.cpp" line="222"/>
         <source>fourfold-cli: the %n article(s) imported before this file stay in the project.</source>
         <translation>
             <numerusform>fourfold-cli: der %n vor dieser Datei importierte Artikel bleibt im Projekt.</numerusform>
@@ -6159,17 +6287,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="243"/>
+        <location filename="../app/cli/command_import.cpp" line="251"/>
         <source>%1: %2 added, %3 skipped</source>
         <translation>%1: %2 hinzugefügt, %3 übersprungen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="252"/>
+        <location filename="../app/cli/command_import.cpp" line="260"/>
         <source>  %1: %2</source>
         <translation>  %1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_import.cpp" line="259"/>
+        <location filename="../app/cli/command_import.cpp" line="267"/>
         <source>… %n more</source>
         <translation>
             <numerusform>… %n weiterer</numerusform>
@@ -6177,17 +6305,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="260"/>
+        <location filename="../app/cli/command_import.cpp" line="268"/>
         <source>  %1: %2 added (%3), %4 skipped</source>
         <translation>  %1: %2 hinzugefügt (%3), %4 übersprungen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="267"/>
+        <location filename="../app/cli/command_import.cpp" line="275"/>
         <source>  line %1 (%2): skipped, %3</source>
         <translation>  Zeile %1 (%2): übersprungen, %3</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="271"/>
+        <location filename="../app/cli/command_import.cpp" line="279"/>
         <source>  line %1 (%2): added, a near copy of &quot;%3&quot; (similarity %4)</source>
         <translation>  Zeile %1 (%2): hinzugefügt, eine Beinahe-Kopie von „%3“ (Ähnlichkeit %4)</translation>
     </message>
@@ -7663,390 +7791,418 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::ComparisonWindow</name>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="89"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="93"/>
         <source>Compare coders and decide gold — %1</source>
         <translation>Codierende vergleichen und Goldstandard entscheiden — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="91"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="95"/>
         <source>Only a lead compares coders and decides the gold standard. Open the project as a lead to use this window.</source>
         <translation>Nur die Leitung vergleicht Codierende und entscheidet über den Goldstandard. Öffnen Sie das Projekt als Leitung, um dieses Fenster zu verwenden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="115"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="119"/>
         <source>Nothing to compare yet. An article comes here once at least two coders have coded it and marked it done (or tick “Articles in progress” above). Plan double coding in Lead → Study design; the progress board shows who is done.</source>
         <translation>Noch nichts zu vergleichen. Ein Artikel erscheint hier, sobald mindestens zwei Codierende ihn codiert und als erledigt markiert haben (oder setzen Sie oben „Artikel in Bearbeitung“). Planen Sie Doppelcodierung unter Leitung → Studiendesign; die Fortschrittsübersicht zeigt, wer fertig ist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="152"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="169"/>
         <source>Articles to adjudicate</source>
         <translation>Zu entscheidende Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="153"/>
-        <source>Articles coded by several coders, most undecided disagreements first. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
-        <translation>Von mehreren Codierenden codierte Artikel, die mit den meisten nicht entschiedenen Abweichungen zuerst. Offen: nicht entschiedene Abweichungen; Übereinstimmend: Passagen, in denen alle Codierenden übereinstimmen und die noch nicht im Goldstandard sind.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="170"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="188"/>
         <source>Margin: ∅ a coder has no span here · ≠ different functions · ↔ different boundaries · ≈ different attributes · ✓ decided. Lanes under each line: problem (solid), cause (dashed), evaluation (dotted), remedy (dash-dot). Hatched: this coder has no span in the passage.</source>
         <translation>Rand: ∅ eine codierende Person hat hier keine Textstelle · ≠ unterschiedliche Funktionen · ↔ unterschiedliche Grenzen · ≈ unterschiedliche Merkmale · ✓ entschieden. Spuren unter jeder Zeile: Problem (durchgezogen), Ursache (gestrichelt), Bewertung (gepunktet), Lösung (Strich-Punkt). Schraffiert: diese codierende Person hat in der Passage keine Textstelle.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="207"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
         <source>Who</source>
         <translation>Wer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="207"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="207"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
         <source>Decision</source>
         <translation>Entscheidung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="212"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="230"/>
         <source>Spans of the passage</source>
         <translation>Textstellen der Passage</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="223"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="241"/>
         <source>&amp;Rationale (optional, kept with the decision):</source>
         <translation>&amp;Begründung (optional, wird mit der Entscheidung gespeichert):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="243"/>
         <source>Why this decision, for the method section</source>
         <translation>Warum diese Entscheidung, für den Methodenteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="229"/>
-        <source>Keys: N / P next and previous disagreement, Alt+Down / Alt+Up next and previous article; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; Ctrl+Shift+A accept all agreed; Ctrl+L rationale; Ctrl+Z undo.</source>
-        <translation>Tasten: N / P nächste und vorherige Abweichung, Alt+Pfeil nach unten / Alt+Pfeil nach oben nächster und vorheriger Artikel; A gewählte Textstelle übernehmen, M gewählte Textstellen vereinen, E bearbeiten, R verwerfen, W Goldstandard-Textstelle zurückziehen; Strg+Umschalt+A alle übereinstimmenden übernehmen; Strg+L Begründung; Strg+Z rückgängig.</translation>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="170"/>
+        <source>Articles coded by several coders, most undecided disagreements first when sorted; the order is kept while you decide until you re-sort. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
+        <translation>Von mehreren Codierenden codierte Artikel, sortiert die mit den meisten nicht entschiedenen Abweichungen zuerst; während Sie entscheiden, bleibt die Reihenfolge, bis Sie neu sortieren. Offen: nicht entschiedene Abweichungen; Übereinstimmend: Passagen, in denen alle Codierenden übereinstimmen und die noch nicht im Goldstandard sind.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="262"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="249"/>
+        <source>Keys: N / P next and previous disagreement, %1 / %2 next and previous article, %3 re-sort the queue; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; %4 accept all agreed; %5 rationale; %6 undo; %7 every key.</source>
+        <translation>Tasten: N / P nächste und vorherige Abweichung, %1 / %2 nächster und vorheriger Artikel, %3 Warteschlange neu sortieren; A gewählte Textstelle übernehmen, M gewählte Textstellen vereinen, E bearbeiten, R verwerfen, W Goldstandard-Textstelle zurückziehen; %4 alle übereinstimmenden übernehmen; %5 Begründung; %6 rückgängig; %7 alle Tasten.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="286"/>
         <source>Comparison</source>
         <translation>Vergleich</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="276"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="596"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="652"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="648"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
         <source>, </source>
         <translation>, </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="282"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="306"/>
         <source>Function: </source>
         <translation>Funktion: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="284"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="308"/>
         <source>All functions</source>
         <translation>Alle Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="287"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="311"/>
         <source>Function filter</source>
         <translation>Funktionsfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="293"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="317"/>
         <source>  Coders: </source>
         <translation>  Codierende: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="295"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
         <source>All coders</source>
         <translation>Alle Codierenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="302"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
         <source>%1 and %2</source>
         <translation>%1 und %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="304"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="328"/>
         <source>Coder pair filter</source>
         <translation>Filter nach Codierpaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
         <source>Show decided</source>
         <translation>Entschiedene zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="311"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
         <source>Also step through disagreements already decided</source>
         <translation>Auch bereits entschiedene Abweichungen durchgehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="314"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
         <source>Articles in progress</source>
         <translation>Artikel in Bearbeitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="315"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="339"/>
         <source>Also compare coders on articles they have started but not yet marked done</source>
         <translation>Codierer auch bei Artikeln vergleichen, die sie begonnen, aber noch nicht als fertig markiert haben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="317"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="341"/>
         <source>Show articles in progress</source>
         <translation>Artikel in Bearbeitung zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
         <source>Previous</source>
         <translation>Zurück</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="350"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorherige nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="351"/>
         <source>Next</source>
         <translation>Weiter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
         <source>Next undecided disagreement</source>
         <translation>Nächste nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="329"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
         <source>Previous article</source>
         <translation>Vorheriger Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="330"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="354"/>
         <source>Previous article in the queue</source>
         <translation>Vorheriger Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
         <source>Next article</source>
         <translation>Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
         <source>Next article in the queue</source>
         <translation>Nächster Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="344"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
+        <source>Re-sort queue</source>
+        <translation>Warteschlange neu sortieren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="366"/>
+        <source>Sort the queue again, most undecided disagreements first; until then it keeps its order while you decide</source>
+        <translation>Die Warteschlange neu sortieren, die meisten nicht entschiedenen Abweichungen zuerst; bis dahin behält sie ihre Reihenfolge, während Sie entscheiden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="375"/>
         <source>Accept</source>
         <translation>Übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="344"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="376"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Die Textstelle der gewählten codierenden Person in den Goldstandard übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="346"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="377"/>
         <source>Merge</source>
         <translation>Vereinen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="347"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="378"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eine Textstelle, die die gewählten Textstellen umfasst, in den Goldstandard aufnehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
         <source>Edit…</source>
         <translation>Bearbeiten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Eine Goldstandard-Textstelle mit eigener Funktion und eigenen Grenzen festlegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="351"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="382"/>
         <source>Reject</source>
         <translation>Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="383"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Festhalten, dass die gewählten Textstellen nicht in den Goldstandard gehören</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="384"/>
         <source>Withdraw gold</source>
         <translation>Zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="385"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Die gewählte Goldstandard-Textstelle zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="355"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="386"/>
         <source>Accept all agreed</source>
         <translation>Übereinstimmende übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="357"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="387"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Jede Textstelle übernehmen, in der alle Codierenden des Artikels übereinstimmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="363"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="393"/>
         <source>Undo</source>
         <translation>Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="395"/>
         <source>Redo</source>
         <translation>Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="507"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
+        <source>Keys of the comparison window</source>
+        <translation>Tasten des Vergleichsfensters</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="463"/>
+        <source>%n article(s) to adjudicate</source>
+        <translation>
+            <numerusform>%n Artikel zu entscheiden</numerusform>
+            <numerusform>%n Artikel zu entscheiden</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="471"/>
+        <source>Queue sorted again: most undecided disagreements first.</source>
+        <translation>Warteschlange neu sortiert: die meisten nicht entschiedenen Abweichungen zuerst.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="559"/>
         <source>Gold (%1)</source>
         <translation>Goldstandard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="507"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="644"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="559"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="696"/>
         <source>Gold</source>
         <translation>Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="552"/>
-        <source>No undecided disagreement left in this article. Alt+Down opens the next article.</source>
-        <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel. Alt+Pfeil nach unten öffnet den nächsten Artikel.</translation>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="604"/>
+        <source>No undecided disagreement left in this article. %1 opens the next article.</source>
+        <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel. %1 öffnet den nächsten Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="569"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="621"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="585"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="637"/>
         <source>No spans to compare in this article.</source>
         <translation>Keine Textstellen zum Vergleichen in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="586"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="638"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klicken Sie auf eine Passage oder drücken Sie N für die nächste Abweichung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="596"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="648"/>
         <source>no span by %1</source>
         <translation>keine Textstelle von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="599"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="651"/>
         <source>different functions</source>
         <translation>unterschiedliche Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="601"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="653"/>
         <source>different boundaries</source>
         <translation>unterschiedliche Grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="603"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="655"/>
         <source>different attributes</source>
         <translation>unterschiedliche Merkmale</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="611"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="663"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 von %2 (Absatz %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="615"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="667"/>
         <source>the coders agree</source>
         <translation>die Codierenden stimmen überein</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="615"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="667"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="616"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="668"/>
         <source> — decided</source>
         <translation> — entschieden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="687"/>
         <source>Characters %1 to %2</source>
         <translation>Zeichen %1 bis %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="636"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
         <source>rejected</source>
         <translation>verworfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="636"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
         <source>in gold</source>
         <translation>im Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="652"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
         <source>drawn by the lead</source>
         <translation>von der Leitung gezogen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="652"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
         <source>from %1</source>
         <translation>von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="654"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="706"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Entschieden von %1 am %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="656"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="708"/>
         <source> Rationale: %1</source>
         <translation> Begründung: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="664"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="716"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Goldstandard %1 entschieden von %2 am %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="771"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="823"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Rückgängig mit %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="798"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="850"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Wählen Sie die Textstelle einer codierenden Person zum Übernehmen (oder mehrere zum Vereinen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="825"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="877"/>
         <source>Choose a passage first.</source>
         <translation>Wählen Sie zuerst eine Passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="863"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="915"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Wählen Sie die zu verwerfenden Textstellen (die noch nicht verworfen sind).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="874"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="926"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Wählen Sie eine Goldstandard-Textstelle zum Zurückziehen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="894"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="946"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>In diesem Artikel ist keine übereinstimmende Passage mehr zu übernehmen.</translation>
     </message>
@@ -8728,22 +8884,22 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::FrameCard</name>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="162"/>
+        <location filename="../app/desktop/frame_card.cpp" line="163"/>
         <source>Frame card</source>
         <translation>Frame-Karte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="209"/>
+        <location filename="../app/desktop/frame_card.cpp" line="210"/>
         <source>— nothing coded yet</source>
         <translation>— noch nichts codiert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="263"/>
+        <location filename="../app/desktop/frame_card.cpp" line="264"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frame_card.cpp" line="279"/>
+        <location filename="../app/desktop/frame_card.cpp" line="280"/>
         <source>%n span(s)</source>
         <translation>
             <numerusform>%n Textstelle</numerusform>
@@ -8751,7 +8907,7 @@ Beinahe-Kopie von %2</translation>
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frame_card.cpp" line="281"/>
+        <location filename="../app/desktop/frame_card.cpp" line="282"/>
         <source>%1: %n span(s)</source>
         <translation>
             <numerusform>%1: %n Textstelle</numerusform>
@@ -9505,7 +9661,7 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="826"/>
+        <location filename="../app/desktop/main_window.cpp" line="833"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
@@ -9601,249 +9757,249 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <translation>Diesen Artikel als erledigt markieren und den nächsten öffnen (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="261"/>
+        <location filename="../app/desktop/main_window.cpp" line="268"/>
         <source>Import articles…</source>
         <translation>Artikel importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="330"/>
+        <location filename="../app/desktop/main_window.cpp" line="337"/>
         <source>&amp;Project</source>
         <translation>&amp;Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="331"/>
+        <location filename="../app/desktop/main_window.cpp" line="338"/>
         <source>&amp;New project…</source>
         <translation>&amp;Neues Projekt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="332"/>
+        <location filename="../app/desktop/main_window.cpp" line="339"/>
         <source>&amp;Open…</source>
         <translation>Ö&amp;ffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="333"/>
+        <location filename="../app/desktop/main_window.cpp" line="340"/>
         <source>&amp;Import articles…</source>
         <translation>Artikel &amp;importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="335"/>
+        <location filename="../app/desktop/main_window.cpp" line="342"/>
         <source>Import a &amp;folder…</source>
         <translation>Einen &amp;Ordner importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="336"/>
+        <location filename="../app/desktop/main_window.cpp" line="343"/>
         <source>Import a folder</source>
         <translation>Einen Ordner importieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="342"/>
+        <location filename="../app/desktop/main_window.cpp" line="349"/>
         <source>Open the &amp;sample project</source>
         <translation>Bei&amp;spielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="344"/>
+        <location filename="../app/desktop/main_window.cpp" line="351"/>
         <source>&amp;Quit</source>
         <translation>&amp;Beenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="346"/>
+        <location filename="../app/desktop/main_window.cpp" line="353"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="347"/>
-        <location filename="../app/desktop/main_window.cpp" line="515"/>
+        <location filename="../app/desktop/main_window.cpp" line="354"/>
+        <location filename="../app/desktop/main_window.cpp" line="522"/>
         <source>&amp;Undo</source>
         <translation>&amp;Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="350"/>
-        <location filename="../app/desktop/main_window.cpp" line="518"/>
+        <location filename="../app/desktop/main_window.cpp" line="357"/>
+        <location filename="../app/desktop/main_window.cpp" line="525"/>
         <source>&amp;Redo</source>
         <translation>&amp;Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="354"/>
+        <location filename="../app/desktop/main_window.cpp" line="361"/>
         <source>&amp;Code</source>
         <translation>&amp;Codieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="358"/>
+        <location filename="../app/desktop/main_window.cpp" line="365"/>
         <source>Mark as %1	%2</source>
         <translation>Als %1 markieren	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="362"/>
+        <location filename="../app/desktop/main_window.cpp" line="369"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel als &amp;erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="363"/>
+        <location filename="../app/desktop/main_window.cpp" line="370"/>
         <source>&amp;Next article</source>
         <translation>&amp;Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="365"/>
+        <location filename="../app/desktop/main_window.cpp" line="372"/>
         <source>&amp;Find in texts</source>
         <translation>In Texten &amp;suchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="366"/>
+        <location filename="../app/desktop/main_window.cpp" line="373"/>
         <source>&amp;Training feedback…</source>
         <translation>&amp;Trainingsfeedback…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="373"/>
+        <location filename="../app/desktop/main_window.cpp" line="380"/>
         <source>&amp;View</source>
         <translation>&amp;Ansicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="374"/>
+        <location filename="../app/desktop/main_window.cpp" line="381"/>
         <source>E&amp;xact selection (no snapping to words)</source>
         <translation>E&amp;xakte Auswahl (nicht an Wörtern ausrichten)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="382"/>
+        <location filename="../app/desktop/main_window.cpp" line="389"/>
         <source>Exact selection: spans take the text as selected.</source>
         <translation>Exakte Auswahl: Textstellen übernehmen den Text wie markiert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="383"/>
+        <location filename="../app/desktop/main_window.cpp" line="390"/>
         <source>Spans snap to whole words again.</source>
         <translation>Textstellen richten sich wieder an ganzen Wörtern aus.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="387"/>
+        <location filename="../app/desktop/main_window.cpp" line="394"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Textstellen &amp;aller Codierenden zeigen (nur Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="397"/>
+        <location filename="../app/desktop/main_window.cpp" line="404"/>
         <source>&amp;Lead</source>
         <translation>&amp;Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="399"/>
+        <location filename="../app/desktop/main_window.cpp" line="406"/>
         <source>&amp;Compare and adjudicate…</source>
         <translation>&amp;Vergleichen und entscheiden…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="401"/>
+        <location filename="../app/desktop/main_window.cpp" line="408"/>
         <source>&amp;Reliability…</source>
         <translation>&amp;Reliabilität…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="402"/>
+        <location filename="../app/desktop/main_window.cpp" line="409"/>
         <source>&amp;Frames…</source>
         <translation>&amp;Frames…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="403"/>
+        <location filename="../app/desktop/main_window.cpp" line="410"/>
         <source>Write the reliability &amp;report…</source>
         <translation>Reliabilitäts&amp;bericht schreiben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="405"/>
+        <location filename="../app/desktop/main_window.cpp" line="412"/>
         <source>&amp;Study design…</source>
         <translation>&amp;Studiendesign…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="406"/>
+        <location filename="../app/desktop/main_window.cpp" line="413"/>
         <source>C&amp;odebook…</source>
         <translation>C&amp;odebuch…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="407"/>
+        <location filename="../app/desktop/main_window.cpp" line="414"/>
         <source>&amp;Progress…</source>
         <translation>&amp;Fortschritt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="408"/>
+        <location filename="../app/desktop/main_window.cpp" line="415"/>
         <source>P&amp;eople…</source>
         <translation>P&amp;ersonen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="409"/>
+        <location filename="../app/desktop/main_window.cpp" line="416"/>
         <source>&amp;Hand out a coder copy…</source>
         <translation>&amp;Kopie für Codierende ausgeben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="410"/>
+        <location filename="../app/desktop/main_window.cpp" line="417"/>
         <source>&amp;Merge returned coder copies…</source>
         <translation>Zurückgegebene Kopien &amp;zusammenführen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="411"/>
+        <location filename="../app/desktop/main_window.cpp" line="418"/>
         <source>Merge co&amp;nflicts…</source>
         <translation>Ko&amp;nflikte beim Zusammenführen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="413"/>
+        <location filename="../app/desktop/main_window.cpp" line="420"/>
         <source>&amp;Extractor runs…</source>
         <translation>&amp;Extraktorläufe…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="421"/>
+        <location filename="../app/desktop/main_window.cpp" line="428"/>
         <source>&amp;Settings</source>
         <translation>&amp;Einstellungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="422"/>
+        <location filename="../app/desktop/main_window.cpp" line="429"/>
         <source>&amp;Language</source>
         <translation>&amp;Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="427"/>
+        <location filename="../app/desktop/main_window.cpp" line="434"/>
         <source>System language</source>
         <translation>Systemsprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="438"/>
+        <location filename="../app/desktop/main_window.cpp" line="445"/>
         <source>&amp;Help</source>
         <translation>&amp;Hilfe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="440"/>
+        <location filename="../app/desktop/main_window.cpp" line="447"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="457"/>
+        <location filename="../app/desktop/main_window.cpp" line="464"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Im Projekt gibt es keine Codierenden mit dem Pseudonym „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="471"/>
+        <location filename="../app/desktop/main_window.cpp" line="478"/>
         <source>Nobody was chosen to code.</source>
         <translation>Es wurde niemand zum Codieren ausgewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="497"/>
+        <location filename="../app/desktop/main_window.cpp" line="504"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="498"/>
+        <location filename="../app/desktop/main_window.cpp" line="505"/>
         <source>Codebook</source>
         <translation>Codebuch</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="515"/>
+        <location filename="../app/desktop/main_window.cpp" line="522"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Rückgängig: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="518"/>
+        <location filename="../app/desktop/main_window.cpp" line="525"/>
         <source>&amp;Redo %1</source>
         <translation>&amp;Wiederholen: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="660"/>
+        <location filename="../app/desktop/main_window.cpp" line="667"/>
         <source>Every article in the list is done.</source>
         <translation>Alle Artikel in der Liste sind erledigt.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="682"/>
+        <location filename="../app/desktop/main_window.cpp" line="689"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n Artikel enthält „%1“.</numerusform>
@@ -9851,121 +10007,126 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="688"/>
+        <location filename="../app/desktop/main_window.cpp" line="695"/>
         <source>New project</source>
         <translation>Neues Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="698"/>
+        <location filename="../app/desktop/main_window.cpp" line="705"/>
         <source>Cannot create project</source>
         <translation>Projekt kann nicht erstellt werden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="710"/>
+        <location filename="../app/desktop/main_window.cpp" line="717"/>
         <source>Import articles</source>
         <translation>Artikel importieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="711"/>
+        <location filename="../app/desktop/main_window.cpp" line="718"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikel (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="757"/>
+        <location filename="../app/desktop/main_window.cpp" line="764"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Wählen Sie einen Artikel&lt;/h3&gt;&lt;p&gt;Wählen Sie links in der Liste einen Artikel, um mit dem Codieren zu beginnen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="760"/>
+        <location filename="../app/desktop/main_window.cpp" line="767"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch keine Artikel&lt;/h3&gt;&lt;p&gt;Importieren Sie die Artikel der Studie: reiner Text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- oder Atom-Feeds, NITF oder NewsML-G2. Weisen Sie sie dann unter Leitung → Studiendesign Codierenden zu.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="765"/>
+        <location filename="../app/desktop/main_window.cpp" line="772"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch nichts zu codieren&lt;/h3&gt;&lt;p&gt;In diesem Projekt sind Ihnen keine Artikel zugewiesen. Ihre Leitung weist sie zu; öffnen Sie danach das Projekt erneut oder die Kopie, die sie Ihnen schickt.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="797"/>
+        <location filename="../app/desktop/main_window.cpp" line="804"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>Die Sprache wechselt beim nächsten Start von Fourfold.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="810"/>
+        <location filename="../app/desktop/main_window.cpp" line="817"/>
         <source>Not saved: %1. %2</source>
         <translation>Nicht gespeichert: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="811"/>
+        <location filename="../app/desktop/main_window.cpp" line="818"/>
         <source>&amp;Retry</source>
         <translation>&amp;Erneut versuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="817"/>
+        <location filename="../app/desktop/main_window.cpp" line="824"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="827"/>
+        <location filename="../app/desktop/main_window.cpp" line="834"/>
         <source>No project open</source>
         <translation>Kein Projekt geöffnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="831"/>
+        <location filename="../app/desktop/main_window.cpp" line="838"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="831"/>
+        <location filename="../app/desktop/main_window.cpp" line="838"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="833"/>
+        <location filename="../app/desktop/main_window.cpp" line="840"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — schreibgeschützt, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="835"/>
+        <location filename="../app/desktop/main_window.cpp" line="842"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — Codieren als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="839"/>
+        <location filename="../app/desktop/main_window.cpp" line="846"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lesen als %1 · %2 · schreibgeschützte Datei: nichts wird gespeichert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="842"/>
+        <location filename="../app/desktop/main_window.cpp" line="849"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Codieren als %1 · %2 · Leitung: alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="843"/>
+        <location filename="../app/desktop/main_window.cpp" line="850"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Codieren als %1 · %2 · blind: nur eigene Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="853"/>
+        <location filename="../app/desktop/main_window.cpp" line="858"/>
+        <source>The comparison window lists its own keys with %1.</source>
+        <translation>Das Vergleichsfenster listet seine eigenen Tasten mit %1 auf.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="862"/>
         <source>Keyboard shortcuts</source>
         <translation>Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="777"/>
+        <location filename="../app/desktop/main_window.cpp" line="784"/>
         <source>Open project</source>
         <translation>Projekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="688"/>
-        <location filename="../app/desktop/main_window.cpp" line="777"/>
+        <location filename="../app/desktop/main_window.cpp" line="695"/>
+        <location filename="../app/desktop/main_window.cpp" line="784"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-Projekte (*.fourfold)</translation>
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="137"/>
-        <location filename="../app/desktop/main_window.cpp" line="703"/>
-        <location filename="../app/desktop/main_window.cpp" line="781"/>
-        <location filename="../app/desktop/main_window.cpp" line="790"/>
+        <location filename="../app/desktop/main_window.cpp" line="710"/>
+        <location filename="../app/desktop/main_window.cpp" line="788"/>
+        <location filename="../app/desktop/main_window.cpp" line="797"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
     </message>
@@ -10218,8 +10379,8 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
     </message>
     <message>
         <location filename="../app/desktop/study/progress_board_window.cpp" line="87"/>
-        <source>Krippendorff&apos;s alpha on the articles the coder finished: in training with the lead&apos;s master coding, in the other phases the mean over every coder who finished the same articles. ✓ at .800 or more, ~ from .667 (tentative), ✗ below.</source>
-        <translation>Krippendorffs Alpha auf den Artikeln, die die Person abgeschlossen hat: im Training mit der Mastercodierung der Leitung, in den anderen Phasen der Mittelwert über alle Codierenden, die dieselben Artikel abgeschlossen haben. ✓ ab .800, ~ ab .667 (vorläufig), ✗ darunter.</translation>
+        <source>Krippendorff&apos;s alpha on the articles the coder finished: in training with the lead&apos;s master coding, in the other phases the mean over every coder who finished the same articles. ✓ at 0.800 or more, ~ from 0.667 (tentative), ✗ below.</source>
+        <translation>Krippendorffs Alpha auf den Artikeln, die die Person abgeschlossen hat: im Training mit der Mastercodierung der Leitung, in den anderen Phasen der Mittelwert über alle Codierenden, die dieselben Artikel abgeschlossen haben. ✓ ab 0.800, ~ ab 0.667 (vorläufig), ✗ darunter.</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/progress_board_window.cpp" line="94"/>
@@ -10326,231 +10487,231 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::ReliabilityWindow</name>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="115"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="123"/>
         <source>0.800: rely on the variable</source>
         <translation>0.800: auf die Variable verlassen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="116"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="125"/>
         <source>0.667: tentative conclusions only</source>
         <translation>0.667: nur vorläufige Schlüsse</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="156"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="575"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="678"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="174"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="593"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="696"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="158"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="176"/>
         <source>reliable (≥ 0.800)</source>
         <translation>reliabel (≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="160"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="178"/>
         <source>tentative (≥ 0.667)</source>
         <translation>vorläufig (≥ 0.667)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="164"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="182"/>
         <source>unreliable (&lt; 0.667)</source>
         <translation>nicht reliabel (&lt; 0.667)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="174"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="192"/>
         <source>Reliability — %1</source>
         <translation>Reliabilität — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="212"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="230"/>
         <source>Table</source>
         <translation>Tabelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="226"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="244"/>
         <source>Alpha without each coder</source>
         <translation>Alpha ohne jeweils eine codierende Person</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="229"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="707"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="247"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="725"/>
         <source>Alpha without each article (the costliest first)</source>
         <translation>Alpha ohne jeweils einen Artikel (der teuerste zuerst)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="233"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="251"/>
         <source>Change = alpha without it − alpha with everything: positive means leaving it out raises alpha, so it costs reliability (leave-one-out, common practice). A diagnostic for training and codebook work, not a licence to report the higher figure.</source>
         <translation>Änderung = Alpha ohne − Alpha mit allem: positiv heißt, Weglassen erhöht Alpha, es kostet also Reliabilität (Leave-one-out, gängige Praxis). Eine Diagnose für Schulung und Codebucharbeit, kein Freibrief, die höhere Zahl zu berichten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="238"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="256"/>
         <source>Boundary habits on matched spans</source>
         <translation>Grenzgewohnheiten bei zugeordneten Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="241"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="259"/>
         <source>Each span against the other coder&apos;s span of the same function that overlaps it most; differences are this coder&apos;s minus the other&apos;s, in characters (code points). Systematic: the mean differs from 0 by more than two standard errors over at least 5 matches (a rough screen, common practice).</source>
         <translation>Jede Textstelle gegen die am stärksten überlappende Textstelle derselben Funktion der anderen Person; Differenzen sind die dieser Person minus die der anderen, in Zeichen (Codepunkten). Systematisch: Der Mittelwert weicht über mindestens 5 Zuordnungen um mehr als zwei Standardfehler von 0 ab (grobe Prüfung, gängige Praxis).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="266"/>
         <source>Diagnostics</source>
         <translation>Diagnose</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="253"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="271"/>
         <source>Alpha per function</source>
         <translation>Alpha je Funktion</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="255"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="273"/>
         <source>Coder pairs</source>
         <translation>Codierpaare</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="257"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="275"/>
         <source>Function confusion</source>
         <translation>Funktionsverwechslung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="260"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="278"/>
         <source>Alpha over time</source>
         <translation>Alpha im Zeitverlauf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="285"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="303"/>
         <source>Article item</source>
         <translation>Artikel-Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="286"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="304"/>
         <source>Paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="287"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="305"/>
         <source>Sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="288"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="306"/>
         <source>Token (word)</source>
         <translation>Token (Wort)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="289"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="307"/>
         <source>Continuum (spans, unitizing alpha)</source>
         <translation>Kontinuum (Textstellen, Unitizing-Alpha)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="294"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="312"/>
         <source>&amp;Unit</source>
         <translation>&amp;Einheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="300"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="318"/>
         <source>&amp;Item</source>
         <translation>&amp;Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="316"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="334"/>
         <source>Functions</source>
         <translation>Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="335"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="353"/>
         <source>&amp;Coders</source>
         <translation>&amp;Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="338"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
         <source>All phases</source>
         <translation>Alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="342"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
         <source>&amp;Phase</source>
         <translation>&amp;Phase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="344"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="362"/>
         <source>Gold joins as a coder</source>
         <translation>Goldstandard als weitere Codierung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="346"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="364"/>
         <source>Count articles in progress</source>
         <translation>Artikel in Bearbeitung mitzählen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="347"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
         <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
         <translation>Standardmäßig zählt ein Artikel eines Codierers erst, wenn er ihn als fertig markiert hat; ankreuzen, um auch Artikel in Bearbeitung mitzuzählen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="373"/>
         <source>none</source>
         <translation>keine</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="374"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="377"/>
         <source>Batches of articles</source>
         <translation>Artikelblöcke</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="378"/>
         <source>Weeks</source>
         <translation>Wochen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="379"/>
         <source>&amp;Drift by</source>
         <translation>&amp;Drift nach</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="383"/>
         <source> articles</source>
         <translation> Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="366"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="384"/>
         <source>Batch &amp;size</source>
         <translation>Block&amp;größe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="368"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="386"/>
         <source>Co&amp;mpute</source>
         <translation>Be&amp;rechnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="370"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="388"/>
         <source>Cancel</source>
         <translation>Abbrechen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="478"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="496"/>
         <source>Computing…</source>
         <translation>Wird berechnet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="488"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="506"/>
         <source>Cancelling after the current step…</source>
         <translation>Abbruch nach dem aktuellen Schritt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="505"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="523"/>
         <source>Cancelled; the results shown are from before.</source>
         <translation>Abgebrochen; die angezeigten Ergebnisse sind von vorher.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="510"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="528"/>
         <source>%n coder(s) compared.</source>
         <translation>
             <numerusform>%n codierende Person verglichen.</numerusform>
@@ -10558,282 +10719,282 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="525"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
         <source>Chosen functions (sets)</source>
         <translation>Funktionsmenge</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="562"/>
         <source>Alpha</source>
         <translation>Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="201"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="219"/>
         <source>Alpha: Krippendorff&apos;s alpha, coincidence form (Krippendorff 2011). Interval: 95% bootstrap, units resampled (percentile; the pair interval of Hayes &amp; Krippendorff 2007 is in the report, and it is too narrow with more than two coders); q(α &lt; 0.800): share of replicates below 0.800. Verdict: Krippendorff (2004, §12.2). Minimum values: Krippendorff (2004, §11.4) after Bloch &amp; Kraemer (1989), for the rarest value at p = 0.05. Cohen&apos;s kappa per pair over the units both coded (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) needs every coder on every unit.</source>
         <translation>Alpha: Krippendorffs Alpha, Koinzidenzform (Krippendorff 2011). Intervall: 95-%-Bootstrap, Einheiten neu gezogen (Perzentil; das Paarintervall nach Hayes &amp; Krippendorff 2007 steht im Bericht und ist bei mehr als zwei Codierenden zu schmal); q(α &lt; 0.800): Anteil der Replikationen unter 0.800. Urteil: Krippendorff (2004, §12.2). Mindestzahl an Werten: Krippendorff (2004, §11.4) nach Bloch &amp; Kraemer (1989), für den seltensten Wert bei p = 0.05. Cohens Kappa je Paar über die von beiden codierten Einheiten (Cohen 1960); Fleiss&apos; Kappa (Fleiss 1971) braucht alle Codierenden auf jeder Einheit.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="562"/>
         <source>q(α &lt; 0.800)</source>
         <translation>q(α &lt; 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="562"/>
         <source>95% interval (units resampled)</source>
         <translation>95-%-Intervall (Einheiten neu gezogen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="563"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="563"/>
         <source>Percent agreement</source>
         <translation>Prozentuale Übereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="563"/>
         <source>Fleiss&apos; kappa</source>
         <translation>Fleiss&apos; Kappa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="549"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="567"/>
         <source>Cohen&apos;s kappa %1 × %2</source>
         <translation>Cohens Kappa %1 × %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="569"/>
         <source>Pairable values</source>
         <translation>Paarbare Werte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="569"/>
         <source>Pairable units</source>
         <translation>Paarbare Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="569"/>
         <source>Rarest value</source>
         <translation>Seltenster Wert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="570"/>
         <source>Minimum values (α ≥ 0.800)</source>
         <translation>Mindestzahl an Werten (α ≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="570"/>
         <source>Sample</source>
         <translation>Stichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="557"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="667"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="575"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="685"/>
         <source>Statistic</source>
         <translation>Kennwert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="583"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="601"/>
         <source>%1, %2 replicates, seed %3</source>
         <translation>%1, %2 Replikationen, Seed %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="609"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="627"/>
         <source>Fleiss&apos; kappa needs every coder on every unit; some cells are missing.</source>
         <translation>Fleiss&apos; Kappa braucht alle Codierenden auf jeder Einheit; einige Zellen fehlen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="627"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="645"/>
         <source>below the minimum</source>
         <translation>unter dem Minimum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="628"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="646"/>
         <source>large enough</source>
         <translation>groß genug</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="644"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="662"/>
         <source>The sample is smaller than Krippendorff&apos;s minimum for the rarest value (alpha ≥ 0.800 at p = 0.05) in: %1. Code more units before relying on these figures.</source>
         <translation>Die Stichprobe ist kleiner als Krippendorffs Minimum für den seltensten Wert (Alpha ≥ 0.800 bei p = 0.05) in: %1. Codieren Sie mehr Einheiten, bevor Sie sich auf diese Werte verlassen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
         <source>Unitizing alpha</source>
         <translation>Unitizing-Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
         <source>Observed disagreement D_o</source>
         <translation>Beobachtete Nichtübereinstimmung D_o</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="682"/>
         <source>Expected disagreement D_e</source>
         <translation>Erwartete Nichtübereinstimmung D_e</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="682"/>
         <source>Continuum</source>
         <translation>Kontinuum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="687"/>
         <source>All four, pooled</source>
         <translation>Alle vier, gepoolt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="686"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="704"/>
         <source>%1 articles, %2 characters</source>
         <translation>%1 Artikel, %2 Zeichen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="704"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>Alpha without each article: the %1 costliest of %2</source>
         <translation>Alpha ohne jeweils einen Artikel: die %1 teuersten von %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="709"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="727"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="709"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="892"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="727"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="757"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="910"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="729"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="730"/>
         <source>Alpha without</source>
         <translation>Alpha ohne</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="730"/>
         <source>Change</source>
         <translation>Änderung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="730"/>
         <source>Units</source>
         <translation>Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="757"/>
         <source>Matches</source>
         <translation>Zuordnungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="757"/>
         <source>Length ± SE</source>
         <translation>Länge ± SE</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="757"/>
         <source>Start</source>
         <translation>Beginn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="758"/>
         <source>End</source>
         <translation>Ende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="758"/>
         <source>Longer</source>
         <translation>Länger</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="758"/>
         <source>Shorter</source>
         <translation>Kürzer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="758"/>
         <source>Habit</source>
         <translation>Gewohnheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="762"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="780"/>
         <source>spans systematically longer</source>
         <translation>Textstellen systematisch länger</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="763"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="781"/>
         <source>spans systematically shorter</source>
         <translation>Textstellen systematisch kürzer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="776"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="794"/>
         <source>Alpha per function, with 95% bootstrap intervals</source>
         <translation>Alpha je Funktion, mit 95-%-Bootstrap-Intervallen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="780"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="943"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="798"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="961"/>
         <source>Krippendorff&apos;s alpha</source>
         <translation>Krippendorffs Alpha</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="800"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="818"/>
         <source>pooled</source>
         <translation>gepoolt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="884"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
         <source>Cohen&apos;s kappa of each pair of coders over the units both coded (%1). Darker: higher agreement; hatched: not defined.</source>
         <translation>Cohens Kappa jedes Paars von Codierenden über die von beiden codierten Einheiten (%1). Dunkler: höhere Übereinstimmung; schraffiert: nicht definiert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="889"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="907"/>
         <source>Continuum units have no per-pair kappa; see the span agreement in the function confusion.</source>
         <translation>Kontinuum-Einheiten haben kein Kappa je Paar; siehe die Übereinstimmung der Textstellen in der Funktionsverwechslung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="906"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="924"/>
         <source>nothing</source>
         <translation>nichts</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="925"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="943"/>
         <source>A coder&apos;s span</source>
         <translation>Textstelle einer Person</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="925"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="943"/>
         <source>What another coder gave it</source>
         <translation>Was eine andere Person vergab</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="926"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="944"/>
         <source>Each span of each coder against the best-overlapping span of every other coder (both directions of each pair). Darker: a larger share of the row. &quot;nothing&quot;: no overlapping span.</source>
         <translation>Jede Textstelle jeder codierenden Person gegen die am besten überlappende Textstelle jeder anderen (beide Richtungen jedes Paars). Dunkler: größerer Anteil der Zeile. „nichts“: keine überlappende Textstelle.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="938"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="956"/>
         <source>Alpha by week of first coding — %1</source>
         <translation>Alpha nach Woche der ersten Codierung — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="939"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="957"/>
         <source>Alpha by batch of articles, in coding order — %1</source>
         <translation>Alpha nach Artikelblock, in Codierreihenfolge — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="981"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="999"/>
         <source>ISO week</source>
         <translation>ISO-Woche</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="981"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="999"/>
         <source>articles (in coding order)</source>
         <translation>Artikel (in Codierreihenfolge)</translation>
     </message>
@@ -11098,42 +11259,42 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::SpanEditor</name>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="93"/>
+        <location filename="../app/desktop/span_editor.cpp" line="94"/>
         <source>judges</source>
         <translation>bewertet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="93"/>
+        <location filename="../app/desktop/span_editor.cpp" line="94"/>
         <source>judged by</source>
         <translation>bewertet von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="95"/>
+        <location filename="../app/desktop/span_editor.cpp" line="96"/>
         <source>addresses</source>
         <translation>behandelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="95"/>
+        <location filename="../app/desktop/span_editor.cpp" line="96"/>
         <source>addressed by</source>
         <translation>behandelt von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="96"/>
+        <location filename="../app/desktop/span_editor.cpp" line="97"/>
         <source>%1 →</source>
         <translation>%1 →</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="96"/>
+        <location filename="../app/desktop/span_editor.cpp" line="97"/>
         <source>← %1</source>
         <translation>← %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="105"/>
+        <location filename="../app/desktop/span_editor.cpp" line="106"/>
         <source>Span editor</source>
         <translation>Textstellen-Editor</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="111"/>
+        <location filename="../app/desktop/span_editor.cpp" line="112"/>
         <source>No span selected.
 
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
@@ -11142,144 +11303,144 @@ Click a span in the text or on the frame card to edit it, or select text and pre
 Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bearbeiten, oder wählen Sie Text aus und drücken Sie 1&#xa0;bis&#xa0;4, um ihn zu codieren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="177"/>
+        <location filename="../app/desktop/span_editor.cpp" line="178"/>
         <source>Another coder&apos;s span: shown, not editable.</source>
         <translation>Textstelle einer anderen codierenden Person: sichtbar, nicht bearbeitbar.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="194"/>
+        <location filename="../app/desktop/span_editor.cpp" line="195"/>
         <source>Function: %1</source>
         <translation>Funktion: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="198"/>
+        <location filename="../app/desktop/span_editor.cpp" line="199"/>
         <source>&amp;Function:</source>
         <translation>&amp;Funktion:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="205"/>
+        <location filename="../app/desktop/span_editor.cpp" line="206"/>
         <source>Note</source>
         <translation>Notiz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="209"/>
+        <location filename="../app/desktop/span_editor.cpp" line="210"/>
         <source>&amp;Note:</source>
         <translation>&amp;Notiz:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="214"/>
+        <location filename="../app/desktop/span_editor.cpp" line="215"/>
         <source>Confidence</source>
         <translation>Sicherheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="218"/>
-        <location filename="../app/desktop/span_editor.cpp" line="365"/>
-        <location filename="../app/desktop/span_editor.cpp" line="373"/>
+        <location filename="../app/desktop/span_editor.cpp" line="219"/>
+        <location filename="../app/desktop/span_editor.cpp" line="366"/>
+        <location filename="../app/desktop/span_editor.cpp" line="374"/>
         <source>not set</source>
         <translation>nicht angegeben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="221"/>
+        <location filename="../app/desktop/span_editor.cpp" line="222"/>
         <source>How sure you are of this span, from 0 (a guess) to 1 (certain).</source>
         <translation>Wie sicher Sie sich bei dieser Textstelle sind, von 0 (geraten) bis 1 (sicher).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="222"/>
+        <location filename="../app/desktop/span_editor.cpp" line="223"/>
         <source>&amp;Confidence:</source>
         <translation>&amp;Sicherheit:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="231"/>
+        <location filename="../app/desktop/span_editor.cpp" line="232"/>
         <source>Links</source>
         <translation>Verknüpfungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="233"/>
+        <location filename="../app/desktop/span_editor.cpp" line="234"/>
         <source>Links start from an evaluation (to the cause it judges) or from a remedy (to the problem it addresses).</source>
         <translation>Verknüpfungen gehen von einer Bewertung (zur bewerteten Ursache) oder von einer Lösung (zum behandelten Problem) aus.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="243"/>
+        <location filename="../app/desktop/span_editor.cpp" line="244"/>
         <source>Span to link to</source>
         <translation>Zu verknüpfende Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="247"/>
+        <location filename="../app/desktop/span_editor.cpp" line="248"/>
         <source>&amp;Link</source>
         <translation>&amp;Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="248"/>
+        <location filename="../app/desktop/span_editor.cpp" line="249"/>
         <source>Link to the chosen span</source>
         <translation>Mit der gewählten Textstelle verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="260"/>
+        <location filename="../app/desktop/span_editor.cpp" line="261"/>
         <source>Links of this span</source>
         <translation>Verknüpfungen dieser Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="268"/>
+        <location filename="../app/desktop/span_editor.cpp" line="269"/>
         <source>No links yet.</source>
         <translation>Noch keine Verknüpfungen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="271"/>
+        <location filename="../app/desktop/span_editor.cpp" line="272"/>
         <source>&amp;Remove link</source>
         <translation>Verknüpfung &amp;entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="272"/>
+        <location filename="../app/desktop/span_editor.cpp" line="273"/>
         <source>Remove the chosen link</source>
         <translation>Die gewählte Verknüpfung entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="384"/>
+        <location filename="../app/desktop/span_editor.cpp" line="385"/>
         <source>%1:</source>
         <translation>%1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="438"/>
+        <location filename="../app/desktop/span_editor.cpp" line="439"/>
         <source>No note.</source>
         <translation>Keine Notiz.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="438"/>
+        <location filename="../app/desktop/span_editor.cpp" line="439"/>
         <source>Why this span, doubts, a question for the lead…</source>
         <translation>Warum diese Textstelle, Zweifel, eine Frage an die Leitung…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="456"/>
+        <location filename="../app/desktop/span_editor.cpp" line="457"/>
         <source>&amp;Judges:</source>
         <translation>Be&amp;wertet:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="456"/>
+        <location filename="../app/desktop/span_editor.cpp" line="457"/>
         <source>&amp;Addresses:</source>
         <translation>Behan&amp;delt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="458"/>
+        <location filename="../app/desktop/span_editor.cpp" line="459"/>
         <source>no cause span to link</source>
         <translation>keine Ursachen-Textstelle zum Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="458"/>
+        <location filename="../app/desktop/span_editor.cpp" line="459"/>
         <source>no problem span to link</source>
         <translation>keine Problem-Textstelle zum Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="488"/>
+        <location filename="../app/desktop/span_editor.cpp" line="489"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="504"/>
+        <location filename="../app/desktop/span_editor.cpp" line="505"/>
         <source>a span not shown here</source>
         <translation>eine hier nicht angezeigte Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="505"/>
+        <location filename="../app/desktop/span_editor.cpp" line="506"/>
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>
@@ -11287,252 +11448,252 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
 <context>
     <name>fourfold::StudyDesignWindow</name>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="112"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="113"/>
         <source>Study design — %1</source>
         <translation>Studiendesign — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="114"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="115"/>
         <source>Plan who codes what: draw the reliability sample that every reliability coder codes, deal the rest of the articles, and keep the codebook&apos;s versions in view. Nothing is written until you commit a plan.</source>
         <translation>Planen Sie, wer was codiert: Ziehen Sie die Reliabilitätsstichprobe, die alle Reliabilitätscodierenden codieren, verteilen Sie die übrigen Artikel und behalten Sie die Versionen des Codebuchs im Blick. Gespeichert wird erst, wenn Sie einen Plan festschreiben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="123"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="124"/>
         <source>Reliability sample</source>
         <translation>Reliabilitätsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="124"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="125"/>
         <source>Assign the rest</source>
         <translation>Rest zuweisen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="125"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="126"/>
         <source>Assignments</source>
         <translation>Zuweisungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="126"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="127"/>
         <source>Codebook versions</source>
         <translation>Codebuchversionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="165"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="166"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="165"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="166"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="195"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="196"/>
         <source>The seed must be a whole number from 0 to 18446744073709551615; &quot;%1&quot; is not.</source>
         <translation>Der Seed muss eine ganze Zahl von 0 bis 18446744073709551615 sein; „%1“ ist das nicht.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="215"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="320"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="216"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="326"/>
         <source>Draw</source>
         <translation>Ziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="221"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="222"/>
         <source>A pilot sample is coded before the codebook is final and is not part of the reliability sample.</source>
         <translation>Eine Pilotstichprobe wird codiert, bevor das Codebuch endgültig ist, und gehört nicht zur Reliabilitätsstichprobe.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="223"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="753"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="224"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="759"/>
         <source>Phase:</source>
         <translation>Phase:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="228"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="755"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="229"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="761"/>
         <source>Articles:</source>
         <translation>Artikel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="230"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="231"/>
         <source>Share of the frame:</source>
         <translation>Anteil der Auswahlgesamtheit:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="250"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="254"/>
         <source>Size:</source>
         <translation>Umfang:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="254"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="258"/>
         <source>Simple random sample</source>
         <translation>Einfache Zufallsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="255"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="259"/>
         <source>Stratified by outlet</source>
         <translation>Geschichtet nach Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="256"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="260"/>
         <source>Stratified by language</source>
         <translation>Geschichtet nach Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="257"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="261"/>
         <source>Stratified by topic</source>
         <translation>Geschichtet nach Thema</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="258"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="262"/>
         <source>Stratified draws allocate the sample to each group in proportion to its size in the frame.</source>
         <translation>Geschichtete Ziehungen teilen die Stichprobe jeder Gruppe proportional zu ihrer Größe in der Auswahlgesamtheit zu.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="260"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="264"/>
         <source>Method:</source>
         <translation>Methode:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="262"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="266"/>
         <source>Leave near copies out of the sampling frame</source>
         <translation>Beinahe-Kopien aus der Auswahlgesamtheit auslassen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="265"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="269"/>
         <source>An article found at import to be a near copy of an older one (the same story with small edits) is not drawn; the older article stays in the frame.</source>
         <translation>Ein Artikel, der beim Import als Beinahe-Kopie eines älteren erkannt wurde (dieselbe Geschichte mit kleinen Änderungen), wird nicht gezogen; der ältere Artikel bleibt in der Auswahlgesamtheit.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="274"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="594"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="278"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="600"/>
         <source>Seed</source>
         <translation>Seed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="276"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="280"/>
         <source>New seed</source>
         <translation>Neuer Seed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="281"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="596"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="285"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="602"/>
         <source>Seed:</source>
         <translation>Seed:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="282"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="286"/>
         <source>The seed is recorded with the draw: the same seed on the same project draws the same articles on any computer.</source>
         <translation>Der Seed wird mit der Ziehung gespeichert: Derselbe Seed zieht im selben Projekt auf jedem Computer dieselben Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="288"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="292"/>
         <source>Reliability coders</source>
         <translation>Reliabilitätscodierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="290"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="294"/>
         <source>Coded by all of:</source>
         <translation>Codiert von allen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="292"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="296"/>
         <source>Minimum sample (Krippendorff)</source>
         <translation>Mindeststichprobe (Krippendorff)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="300"/>
-        <source>The smallest alpha you would still accept: .800 for firm conclusions, .667 for tentative ones (Krippendorff).</source>
-        <translation>Das kleinste Alpha, das Sie noch akzeptieren würden: .800 für belastbare Schlüsse, .667 für vorläufige (Krippendorff).</translation>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="305"/>
+        <source>The smallest alpha you would still accept: 0.800 for firm conclusions, 0.667 for tentative ones (Krippendorff).</source>
+        <translation>Das kleinste Alpha, das Sie noch akzeptieren würden: 0.800 für belastbare Schlüsse, 0.667 für vorläufige (Krippendorff).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="302"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="307"/>
         <source>α_min:</source>
         <translation>α_min:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="307"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="312"/>
         <source>Significance level:</source>
         <translation>Signifikanzniveau:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="314"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="320"/>
         <source>The expected share of the rarest value: 0.25 when four values are equally frequent.</source>
         <translation>Der erwartete Anteil des seltensten Werts: 0.25, wenn vier Werte gleich häufig sind.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="316"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="322"/>
         <source>Rarest value&apos;s share:</source>
         <translation>Anteil seltenster Wert:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="322"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="328"/>
         <source>Draw the sample and show it; nothing is written yet.</source>
         <translation>Stichprobe ziehen und anzeigen; noch wird nichts gespeichert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="323"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="329"/>
         <source>Commit the draw</source>
         <translation>Ziehung festschreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="325"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="331"/>
         <source>Assign the drawn articles to every chosen coder and record the draw with its seed.</source>
         <translation>Die gezogenen Artikel allen gewählten Codierenden zuweisen und die Ziehung mit ihrem Seed speichern.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="354"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
         <source>Stratum</source>
         <translation>Schicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="354"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
         <source>In the frame</source>
         <translation>In der Auswahlgesamtheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="354"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
         <source>Drawn</source>
         <translation>Gezogen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="356"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="362"/>
         <source>Drawn articles:</source>
         <translation>Gezogene Artikel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="359"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="365"/>
         <source>Drawn articles</source>
         <translation>Gezogene Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="414"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="420"/>
         <source>&lt;b&gt;No sample is drawn yet for the phase %1.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
         <translation>&lt;b&gt;Für die Phase %1 ist noch keine Stichprobe gezogen.&lt;/b&gt; Wählen Sie Umfang, Methode, Seed und Codierende und drücken Sie dann &lt;i&gt;Ziehen&lt;/i&gt;, um die Stichprobe zu sehen und ob sie groß genug ist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="474"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="480"/>
         <source>simple random sample</source>
         <translation>einfache Zufallsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="476"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="482"/>
         <source>stratified by outlet</source>
         <translation>geschichtet nach Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="478"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="484"/>
         <source>stratified by language</source>
         <translation>geschichtet nach Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="480"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="486"/>
         <source>stratified by topic</source>
         <translation>geschichtet nach Thema</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="481"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="487"/>
         <source>%n article(s) of a frame of %1, %2, seed %3, coded by %4.</source>
         <translation>
             <numerusform>%n Artikel aus einer Auswahlgesamtheit von %1, %2, Seed %3, codiert von %4.</numerusform>
@@ -11540,42 +11701,42 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="489"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="495"/>
         <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded and cannot be drawn again.</source>
         <translation>&lt;b&gt;Stichprobe der Phase %1 gezogen am %2.&lt;/b&gt; %3 Die Ziehung ist gespeichert und kann nicht erneut gezogen werden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="495"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="501"/>
         <source>&lt;b&gt;Planned draw, not yet committed.&lt;/b&gt; %1 Press &lt;i&gt;Commit the draw&lt;/i&gt; to assign it.</source>
         <translation>&lt;b&gt;Geplante Ziehung, noch nicht festgeschrieben.&lt;/b&gt; %1 Drücken Sie &lt;i&gt;Ziehung festschreiben&lt;/i&gt;, um sie zuzuweisen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="504"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="510"/>
         <source>No minimum sample can be computed for these settings.</source>
         <translation>Für diese Einstellungen lässt sich keine Mindeststichprobe berechnen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="506"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="512"/>
         <source>&lt;b&gt;Krippendorff&apos;s minimum: %1 values&lt;/b&gt; per variable for α_min = %2 at p = %3, with the rarest value at %4 %.</source>
         <translation>&lt;b&gt;Krippendorffs Minimum: %1 Werte&lt;/b&gt; je Variable für α_min = %2 bei p = %3, mit dem seltensten Wert bei %4 %.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="515"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
         <source>Unit</source>
         <translation>Einheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="515"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
         <source>Values the draw delivers</source>
         <translation>Werte aus der Ziehung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="519"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="525"/>
         <source>✓ enough</source>
         <translation>✓ genug</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="520"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="526"/>
         <source>✗ %n short</source>
         <translation>
             <numerusform>✗ %n zu wenig</numerusform>
@@ -11583,103 +11744,103 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="528"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="534"/>
         <source>Article-level items</source>
         <translation>Items auf Artikelebene</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="529"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="535"/>
         <source>Paragraphs</source>
         <translation>Absätze</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="530"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="536"/>
         <source>Sentences</source>
         <translation>Sätze</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="533"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="539"/>
         <source>Values are units × coders. For spans, count the codings of each function: a rare function (often the remedy) may need a larger or stratified sample.</source>
         <translation>Werte sind Einheiten × Codierende. Zählen Sie bei Textstellen die Codierungen jeder Funktion: Eine seltene Funktion (oft die Lösung) kann eine größere oder geschichtete Stichprobe erfordern.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="570"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="576"/>
         <source>Deal the rest</source>
         <translation>Rest verteilen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="572"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="578"/>
         <source>Every article with no assignment yet goes to production coding, shuffled with the seed and dealt in turn.</source>
         <translation>Jeder noch nicht zugewiesene Artikel geht in die Hauptcodierung, mit dem Seed gemischt und reihum verteilt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="578"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="584"/>
         <source>Single-coded: one coder per article</source>
         <translation>Einfach codiert: eine Person je Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="581"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="587"/>
         <source>Double-coded: two coders per article, pairs rotating</source>
         <translation>Doppelt codiert: zwei Personen je Artikel, wechselnde Paare</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="586"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="592"/>
         <source>Coding:</source>
         <translation>Codierung:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="589"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="595"/>
         <source>Production coders</source>
         <translation>Codierende der Hauptcodierung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="591"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="761"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="597"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="767"/>
         <source>Coders:</source>
         <translation>Codierende:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="598"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="604"/>
         <source>Plan</source>
         <translation>Planen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="600"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="606"/>
         <source>Assign</source>
         <translation>Zuweisen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="620"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="734"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="620"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="723"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="734"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="729"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="639"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="645"/>
         <source>Press &lt;i&gt;Plan&lt;/i&gt; to see who would code which article.</source>
         <translation>Drücken Sie &lt;i&gt;Planen&lt;/i&gt;, um zu sehen, wer welchen Artikel codieren würde.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="679"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="685"/>
         <source>Every article is assigned already: there is no rest to deal.</source>
         <translation>Jeder Artikel ist bereits zugewiesen: Es gibt keinen Rest zu verteilen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="684"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="690"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="685"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="691"/>
         <source>&lt;b&gt;Planned, not yet assigned:&lt;/b&gt; %n article(s); load per coder %1. Press &lt;i&gt;Assign&lt;/i&gt; to write the plan.</source>
         <translation>
             <numerusform>&lt;b&gt;Geplant, noch nicht zugewiesen:&lt;/b&gt; %n Artikel; Last je Person %1. Drücken Sie &lt;i&gt;Zuweisen&lt;/i&gt;, um den Plan zu speichern.</numerusform>
@@ -11687,163 +11848,163 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="707"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="713"/>
         <source>The rest is assigned.</source>
         <translation>Der Rest ist zugewiesen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="722"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="728"/>
         <source>&lt;b&gt;Articles per coder and phase&lt;/b&gt; (done / assigned)</source>
         <translation>&lt;b&gt;Artikel je Person und Phase&lt;/b&gt; (erledigt / zugewiesen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="726"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="732"/>
         <source>Total</source>
         <translation>Gesamt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="733"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="739"/>
         <source>&lt;b&gt;Every assignment&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle Zuweisungen&lt;/b&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="734"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Phase</source>
         <translation>Phase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="734"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="743"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="749"/>
         <source>Give articles to coders</source>
         <translation>Artikel an Codierende geben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="745"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="751"/>
         <source>Every chosen coder gets every chosen article, e.g. the training articles that the lead has master-coded.</source>
         <translation>Alle gewählten Codierenden erhalten alle gewählten Artikel, z.&#xa0;B. die Trainingsartikel, für die die Leitung eine Mastercodierung erstellt hat.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="758"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="764"/>
         <source>Articles to give</source>
         <translation>Zu vergebende Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="764"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="770"/>
         <source>Coders to give to</source>
         <translation>Empfangende Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="766"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="772"/>
         <source>Give</source>
         <translation>Vergeben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="796"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="802"/>
         <source>done</source>
         <translation>erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="797"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="803"/>
         <source>started</source>
         <translation>begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="798"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="804"/>
         <source>not started</source>
         <translation>nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="854"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="860"/>
         <source>Every chosen coder has every chosen article in this phase already.</source>
         <translation>Alle gewählten Codierenden haben alle gewählten Artikel in dieser Phase bereits.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="876"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
         <source>Version</source>
         <translation>Version</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="876"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
         <source>Made</source>
         <translation>Erstellt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="876"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
         <source>By</source>
         <translation>Von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="876"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
         <source>Note</source>
         <translation>Notiz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="880"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="886"/>
         <source>Add a version from a file…</source>
         <translation>Version aus Datei hinzufügen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="888"/>
         <source>Read a codebook JSON file and store it as the next version, with a note that says what changed and why.</source>
         <translation>Eine Codebuch-JSON-Datei einlesen und als nächste Version speichern, mit einer Notiz, was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="895"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="901"/>
         <source>Compare version</source>
         <translation>Version vergleichen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="897"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="903"/>
         <source>with</source>
         <translation>mit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="905"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="911"/>
         <source>Changes between the versions</source>
         <translation>Änderungen zwischen den Versionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="913"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="919"/>
         <source>Only those to re-check</source>
         <translation>Nur erneut zu prüfende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Made under</source>
         <translation>Erstellt unter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Re-check</source>
         <translation>Erneut prüfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="987"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="993"/>
         <source>yes — its function changed</source>
         <translation>ja — ihre Funktion hat sich geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="987"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="993"/>
         <source>no</source>
         <translation>nein</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="997"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1003"/>
         <source>&lt;b&gt;Every annotation was made under the current version (%1).&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle Annotationen wurden unter der aktuellen Version (%1) erstellt.&lt;/b&gt;</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="998"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1004"/>
         <source>&lt;b&gt;%n annotation(s) were made under an older version&lt;/b&gt; than the current one (%1); %2 of them belong to a function whose definition, rules, examples or attributes changed since, and should be re-checked.</source>
         <translation>
             <numerusform>&lt;b&gt;%n Annotation wurde unter einer älteren Version&lt;/b&gt; als der aktuellen (%1) erstellt; %2 davon gehören zu einer Funktion, deren Definition, Regeln, Beispiele oder Merkmale sich seither geändert haben, und sollten erneut geprüft werden.</numerusform>
@@ -11851,78 +12012,78 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1013"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1019"/>
         <source>&lt;p&gt;There is only version %1: nothing to compare yet. Add a version when the codebook changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Es gibt nur Version %1: noch nichts zu vergleichen. Fügen Sie eine Version hinzu, wenn sich das Codebuch ändert.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1017"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1023"/>
         <source>&lt;p&gt;Choose two different versions to compare.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Wählen Sie zwei verschiedene Versionen zum Vergleichen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1026"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1032"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codebuchversion %1 → %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1028"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1034"/>
         <source>&lt;p&gt;No changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Keine Änderungen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1036"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1042"/>
         <source>added</source>
         <translation>hinzugefügt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1040"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1046"/>
         <source>removed</source>
         <translation>entfernt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1044"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1050"/>
         <source>changed</source>
         <translation>geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1069"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1075"/>
         <source>item removed:</source>
         <translation>Item entfernt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1073"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1079"/>
         <source>item added:</source>
         <translation>Item hinzugefügt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1077"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1083"/>
         <source>the order changed</source>
         <translation>die Reihenfolge hat sich geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1081"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1087"/>
         <source>was:</source>
         <translation>vorher:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1084"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1090"/>
         <source>now:</source>
         <translation>jetzt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1096"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1100"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1102"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1106"/>
         <source>Add a codebook version</source>
         <translation>Codebuchversion hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1096"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1102"/>
         <source>Codebooks (*.json)</source>
         <translation>Codebücher (*.json)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1101"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1107"/>
         <source>What changed, and why?</source>
         <translation>Was hat sich geändert, und warum?</translation>
     </message>
@@ -11991,8 +12152,8 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
     </message>
     <message>
         <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="71"/>
-        <source>Most units carry no function, so &quot;same as the master&quot; is high even when your spans differ; α corrects for that agreement by chance (Krippendorff). Aim for α of .800 or more.</source>
-        <translation>Die meisten Einheiten tragen keine Funktion, daher ist „wie der Master“ hoch, auch wenn Ihre Textstellen abweichen; α korrigiert diese zufällige Übereinstimmung (Krippendorff). Ziel ist ein α von .800 oder mehr.</translation>
+        <source>Most units carry no function, so &quot;same as the master&quot; is high even when your spans differ; α corrects for that agreement by chance (Krippendorff). Aim for α of 0.800 or more.</source>
+        <translation>Die meisten Einheiten tragen keine Funktion, daher ist „wie der Master“ hoch, auch wenn Ihre Textstellen abweichen; α korrigiert diese zufällige Übereinstimmung (Krippendorff). Ziel ist ein α von 0.800 oder mehr.</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="85"/>

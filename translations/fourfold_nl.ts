@@ -11,8 +11,8 @@
     <message>
         <location filename="../core/agreement/agreement_report.cpp" line="85"/>
         <location filename="../core/agreement/agreement_report.cpp" line="103"/>
-        <location filename="../core/agreement/agreement_report.cpp" line="274"/>
-        <location filename="../core/agreement/agreement_report.cpp" line="302"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="277"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="305"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
@@ -32,82 +32,82 @@
         <translation>onbetrouwbaar (&lt; 0.667)</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="238"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="241"/>
         <source>Coders        %1 (%2)</source>
         <translation>Codeurs       %1 (%2)</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="241"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="244"/>
         <source>Units         %1; pairable units %2; pairable values %3</source>
         <translation>Eenheden      %1; paarbare eenheden %2; paarbare waarden %3</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="246"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="249"/>
         <source>Alpha (%1)  %2</source>
         <translation>Alfa (%1)   %2</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="263"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="266"/>
         <source>  95% CI      [%1, %2]  %3, %4 replicates, seed %5</source>
         <translation>  95%-BI      [%1, %2]  %3, %4 replicaties, seed %5</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="270"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="273"/>
         <source>Percent agreement  %1</source>
         <translation>Procentuele overeenstemming  %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="278"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="281"/>
         <source>, linear weights</source>
         <translation>, lineaire gewichten</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="279"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="282"/>
         <source>, quadratic weights</source>
         <translation>, kwadratische gewichten</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="281"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="284"/>
         <source>Cohen&apos;s kappa %1  (SE %2, 95% CI [%3, %4]%5)</source>
         <translation>Cohens kappa  %1  (SE %2, 95%-BI [%3, %4]%5)</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="286"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="289"/>
         <source>Scott&apos;s pi    %1</source>
         <translation>Scotts pi     %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="288"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="291"/>
         <source>Bennett&apos;s S   %1</source>
         <translation>Bennetts S    %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="290"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="293"/>
         <source>Fleiss&apos; kappa %1</source>
         <translation>Fleiss&apos; kappa %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="292"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="295"/>
         <source>Light&apos;s kappa %1</source>
         <translation>Lights kappa  %1</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="294"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="297"/>
         <source>Pairs</source>
         <translation>Paren</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="296"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="299"/>
         <source>  %1 × %2  units %3  agreement %4  kappa %5</source>
         <translation>  %1 × %2  eenheden %3  overeenstemming %4  kappa %5</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="306"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="309"/>
         <source>Sample size   %1 pairable values; Krippendorff&apos;s minimum for alpha ≥ %2 at p = 0.05 with the rarest value at %3%: %4</source>
         <translation>Steekproef    %1 paarbare waarden; Krippendorffs minimum voor alfa ≥ %2 bij p = 0.05 met de zeldzaamste waarde op %3%: %4</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_report.cpp" line="314"/>
+        <location filename="../core/agreement/agreement_report.cpp" line="317"/>
         <source> — the sample is too small</source>
         <translation> — de steekproef is te klein</translation>
     </message>
@@ -115,12 +115,12 @@
 <context>
     <name>AgreementRunText</name>
     <message>
-        <location filename="../core/agreement/agreement_run.cpp" line="159"/>
+        <location filename="../core/agreement/agreement_run.cpp" line="158"/>
         <source>The continuum is compared with unitizing alpha, not as a table of units.</source>
         <translation>Het continuüm wordt vergeleken met unitizing-alfa, niet als tabel van eenheden.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/agreement_run.cpp" line="198"/>
+        <location filename="../core/agreement/agreement_run.cpp" line="197"/>
         <source>The continuum could not be compared.</source>
         <translation>Het continuüm kon niet worden vergeleken.</translation>
     </message>
@@ -368,7 +368,7 @@
         <location filename="../core/io/jsonl_reader.cpp" line="180"/>
         <location filename="../core/io/jsonl_reader.cpp" line="189"/>
         <source>expected a JSON object, got %1</source>
-        <translation>JSON-object verwacht, maar %1 gekregen</translation>
+        <translation>JSON-object verwacht, gekregen: %1</translation>
     </message>
     <message>
         <location filename="../core/io/jsonl_reader.cpp" line="184"/>
@@ -1226,112 +1226,112 @@
 <context>
     <name>CoderCopiesText</name>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="68"/>
+        <location filename="../core/project/coder_copies.cpp" line="69"/>
         <source>Several coders are called &quot;%1&quot;; name the coder by pseudonym.</source>
         <translation>Meerdere codeurs heten ‘%1’; noem de codeur bij het pseudoniem.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="72"/>
+        <location filename="../core/project/coder_copies.cpp" line="73"/>
         <source>There is no coder with the pseudonym or name &quot;%1&quot; in the project.</source>
         <translation>Er is geen codeur met het pseudoniem of de naam ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="108"/>
+        <location filename="../core/project/coder_copies.cpp" line="109"/>
         <source>%1 (copy for %2)</source>
         <translation>%1 (kopie voor %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="165"/>
+        <location filename="../core/project/coder_copies.cpp" line="166"/>
         <source>%1 is not a Fourfold project file; it was not merged.</source>
         <translation>%1 is geen Fourfold-projectbestand; het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="168"/>
+        <location filename="../core/project/coder_copies.cpp" line="169"/>
         <source>%1 was written by a newer Fourfold (schema version %2); it was not merged.</source>
         <translation>%1 is geschreven door een nieuwere Fourfold (schemaversie %2); het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="177"/>
+        <location filename="../core/project/coder_copies.cpp" line="178"/>
         <source>%1 is a project file but not a coder copy; it was not merged.</source>
         <translation>%1 is een projectbestand, maar geen codeurskopie; het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="182"/>
+        <location filename="../core/project/coder_copies.cpp" line="183"/>
         <source>%1 is a coder copy of another project (%2), not of this one (%3); it was not merged.</source>
         <translation>%1 is een codeurskopie van een ander project (%2), niet van dit project (%3); het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="191"/>
+        <location filename="../core/project/coder_copies.cpp" line="192"/>
         <source>The coder of %1 is no longer in the project; it was not merged.</source>
         <translation>De codeur van %1 zit niet meer in het project; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="203"/>
+        <location filename="../core/project/coder_copies.cpp" line="204"/>
         <source>%1 holds article &quot;%2&quot;, which is not in the project; it was not merged.</source>
         <translation>%1 bevat het artikel ‘%2’, dat niet in het project staat; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="209"/>
+        <location filename="../core/project/coder_copies.cpp" line="210"/>
         <source>The text of article &quot;%1&quot; in %2 differs from the project&apos;s (SHA-256 %3 instead of %4): the copy was changed outside Fourfold; it was not merged.</source>
         <translation>De tekst van artikel ‘%1’ in %2 verschilt van die van het project (SHA-256 %3 in plaats van %4): de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="223"/>
+        <location filename="../core/project/coder_copies.cpp" line="224"/>
         <source>%1 holds a codebook version (%2) that is not in the project; it was not merged.</source>
         <translation>%1 bevat een codeboekversie (%2) die niet in het project staat; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="232"/>
+        <location filename="../core/project/coder_copies.cpp" line="233"/>
         <source>%1 holds %2 annotations, answers or assignments of people other than its coder %3; it was not merged.</source>
         <translation>%1 bevat %2 annotaties, antwoorden of toewijzingen van anderen dan de codeur %3; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="368"/>
+        <location filename="../core/project/coder_copies.cpp" line="369"/>
         <source>%1 names a copy (%2) that this project never handed out; it was not merged.</source>
         <translation>%1 noemt een kopie (%2) die dit project nooit heeft uitgegeven; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="390"/>
+        <location filename="../core/project/coder_copies.cpp" line="391"/>
         <source>There is no coder copy %1.</source>
         <translation>Er is geen codeurskopie %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="516"/>
+        <location filename="../core/project/coder_copies.cpp" line="517"/>
         <source>The coding time in %1 would overflow the project&apos;s; it was not merged.</source>
         <translation>De codeertijd in %1 zou die van het project laten overlopen; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="572"/>
+        <location filename="../core/project/coder_copies.cpp" line="573"/>
         <source>%1 is itself a coder copy; hand out copies from the main project.</source>
         <translation>%1 is zelf een codeurskopie; geef kopieën uit vanuit het hoofdproject.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="579"/>
+        <location filename="../core/project/coder_copies.cpp" line="580"/>
         <source>%1 already exists; choose another name for the coder copy.</source>
         <translation>%1 bestaat al; kies een andere naam voor de codeurskopie.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="587"/>
+        <location filename="../core/project/coder_copies.cpp" line="588"/>
         <source>Coder %1 has no assigned articles; assign some before handing out a copy.</source>
         <translation>Aan codeur %1 zijn geen artikelen toegewezen; wijs er een aantal toe voordat u een kopie uitgeeft.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="648"/>
+        <location filename="../core/project/coder_copies.cpp" line="649"/>
         <source>%1 is itself a coder copy; merge copies into the main project.</source>
         <translation>%1 is zelf een codeurskopie; voeg kopieën samen in het hoofdproject.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="676"/>
+        <location filename="../core/project/coder_copies.cpp" line="677"/>
         <source>Keep &quot;mine&quot; (the version the project holds) or &quot;theirs&quot; (the version that lost), not &quot;%1&quot;.</source>
         <translation>Behoud ‘mine’ (de versie in het project) of ‘theirs’ (de versie die verloor), niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="693"/>
+        <location filename="../core/project/coder_copies.cpp" line="694"/>
         <source>There is no open conflict %1.</source>
         <translation>Er is geen open conflict %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="696"/>
+        <location filename="../core/project/coder_copies.cpp" line="697"/>
         <source>%1 has %2 open conflicts (from several copies); name the conflict&apos;s uuid.</source>
         <translation>%1 heeft %2 open conflicten (uit meerdere kopieën); noem de uuid van het conflict.</translation>
     </message>
@@ -1354,88 +1354,88 @@
 <context>
     <name>CodingImportText</name>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="39"/>
+        <location filename="../core/project/coding_import.cpp" line="58"/>
         <source>missing required field &quot;%1&quot;.</source>
         <translation>verplicht veld ‘%1’ ontbreekt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="42"/>
+        <location filename="../core/project/coding_import.cpp" line="61"/>
         <source>field &quot;%1&quot; must be a non-empty string.</source>
         <translation>veld ‘%1’ moet een niet-lege tekenreeks zijn.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="56"/>
+        <location filename="../core/project/coding_import.cpp" line="75"/>
         <source>Cannot read %1: %2</source>
         <translation>Kan %1 niet lezen: %2</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="101"/>
+        <location filename="../core/project/coding_import.cpp" line="120"/>
         <source>the line is longer than %1 MiB</source>
         <translation>de regel is langer dan %1 MiB</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="120"/>
+        <location filename="../core/project/coding_import.cpp" line="139"/>
         <source>not a JSON object (%1).</source>
         <translation>geen JSON-object (%1).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="123"/>
+        <location filename="../core/project/coding_import.cpp" line="142"/>
         <source>another JSON value</source>
         <translation>een andere JSON-waarde</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="128"/>
+        <location filename="../core/project/coding_import.cpp" line="147"/>
         <source>unknown field &quot;%1&quot; (expected article, coder, function, quote, occurrence, attributes, note, confidence, gold, rationale, item, value).</source>
         <translation>onbekend veld ‘%1’ (verwacht: article, coder, function, quote, occurrence, attributes, note, confidence, gold, rationale, item, value).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="138"/>
+        <location filename="../core/project/coding_import.cpp" line="157"/>
         <source>field &quot;%1&quot; must be %2.</source>
         <translation>veld ‘%1’ moet %2 zijn.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="143"/>
+        <location filename="../core/project/coding_import.cpp" line="162"/>
         <source>an object</source>
         <translation>een object</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="144"/>
-        <location filename="../core/project/coding_import.cpp" line="148"/>
+        <location filename="../core/project/coding_import.cpp" line="163"/>
+        <location filename="../core/project/coding_import.cpp" line="167"/>
         <source>text</source>
         <translation>tekst</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="146"/>
+        <location filename="../core/project/coding_import.cpp" line="165"/>
         <source>a number from 0 to 1</source>
         <translation>een getal van 0 tot 1</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="157"/>
+        <location filename="../core/project/coding_import.cpp" line="176"/>
         <source>unknown coder &quot;%1&quot;.</source>
         <translation>onbekende codeur ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="165"/>
+        <location filename="../core/project/coding_import.cpp" line="184"/>
         <source>unknown article &quot;%1&quot;.</source>
         <translation>onbekend artikel ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="225"/>
+        <location filename="../core/project/coding_import.cpp" line="244"/>
         <source>unknown function &quot;%1&quot; (expected problem, cause, evaluation or remedy).</source>
         <translation>onbekende functie ‘%1’ (verwacht: problem, cause, evaluation of remedy).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="236"/>
+        <location filename="../core/project/coding_import.cpp" line="255"/>
         <source>field &quot;occurrence&quot; must be a whole number from 1.</source>
         <translation>veld ‘occurrence’ moet een geheel getal vanaf 1 zijn.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="243"/>
+        <location filename="../core/project/coding_import.cpp" line="262"/>
         <source>the quote &quot;%1&quot; does not occur %2 time(s) in article &quot;%3&quot;.</source>
         <translation>het citaat ‘%1’ komt niet %2 keer voor in artikel ‘%3’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="259"/>
+        <location filename="../core/project/coding_import.cpp" line="278"/>
         <source>field &quot;gold&quot; must be true or false.</source>
         <translation>veld ‘gold’ moet true of false zijn.</translation>
     </message>
@@ -1501,27 +1501,27 @@
 <context>
     <name>ConflictEditsText</name>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="58"/>
+        <location filename="../core/project/conflict_edits.cpp" line="61"/>
         <source>Keep the other version</source>
         <translation>De andere versie behouden</translation>
     </message>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="59"/>
+        <location filename="../core/project/conflict_edits.cpp" line="62"/>
         <source>Keep the project&apos;s version</source>
         <translation>De versie van het project behouden</translation>
     </message>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="70"/>
+        <location filename="../core/project/conflict_edits.cpp" line="83"/>
         <source>There is no open conflict %1.</source>
         <translation>Er is geen open conflict %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="100"/>
+        <location filename="../core/project/conflict_edits.cpp" line="111"/>
         <source>The object of conflict %1 is missing from the project.</source>
         <translation>Het object van conflict %1 ontbreekt in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/conflict_edits.cpp" line="109"/>
+        <location filename="../core/project/conflict_edits.cpp" line="122"/>
         <source>The decision on conflict %1 was never made.</source>
         <translation>De beslissing over conflict %1 is nooit genomen.</translation>
     </message>
@@ -2393,22 +2393,22 @@
 <context>
     <name>InputFileText</name>
     <message>
-        <location filename="../core/io/input_file.cpp" line="24"/>
+        <location filename="../core/io/input_file.cpp" line="27"/>
         <source>this is not a regular file</source>
         <translation>dit is geen gewoon bestand</translation>
     </message>
     <message>
-        <location filename="../core/io/input_file.cpp" line="34"/>
+        <location filename="../core/io/input_file.cpp" line="37"/>
         <source>the file cannot be opened for reading</source>
         <translation>het bestand kan niet worden geopend om te lezen</translation>
     </message>
     <message>
-        <location filename="../core/io/input_file.cpp" line="40"/>
+        <location filename="../core/io/input_file.cpp" line="43"/>
         <source>the file is longer than %1 MiB, the most this reader takes</source>
         <translation>het bestand is groter dan %1 MiB, het maximum dat deze lezer aanneemt</translation>
     </message>
     <message>
-        <location filename="../core/io/input_file.cpp" line="58"/>
+        <location filename="../core/io/input_file.cpp" line="61"/>
         <source>the file cannot be read</source>
         <translation>het bestand kan niet worden gelezen</translation>
     </message>
@@ -2450,9 +2450,64 @@
         <translation>Het bestand %1 kon niet worden gelezen: %2.</translation>
     </message>
     <message>
-        <location filename="../core/io/json_item_stream.cpp" line="214"/>
-        <source>This is not valid JSON: %1.</source>
-        <translation>Dit is geen geldige JSON: %1.</translation>
+        <location filename="../core/io/json_item_stream.cpp" line="218"/>
+        <source>This is not valid JSON: the file ends before the JSON is complete.</source>
+        <translation>Dit is geen geldige JSON: het bestand eindigt voordat de JSON compleet is.</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_item_stream.cpp" line="221"/>
+        <source>This is not valid JSON at &quot;%1&quot;.</source>
+        <translation>Dit is geen geldige JSON bij ‘%1’.</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_item_stream.cpp" line="223"/>
+        <source>This is not valid JSON.</source>
+        <translation>Dit is geen geldige JSON.</translation>
+    </message>
+</context>
+<context>
+    <name>JsonTypeNameText</name>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="22"/>
+        <source>null</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>null</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="24"/>
+        <source>boolean</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>booleaanse waarde</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="26"/>
+        <source>number</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>getal</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="28"/>
+        <source>string</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>tekenreeks</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="30"/>
+        <source>array</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>array</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="32"/>
+        <source>object</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>object</translation>
+    </message>
+    <message>
+        <location filename="../core/io/json_type_name.cpp" line="36"/>
+        <source>undefined</source>
+        <comment>a JSON value&apos;s type</comment>
+        <translation>ongedefinieerd</translation>
     </message>
 </context>
 <context>
@@ -2608,32 +2663,32 @@
         <translation>Dat is niet de wachtwoordzin van %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="171"/>
+        <location filename="../core/project/people.cpp" line="184"/>
         <source>A person needs a name and a pseudonym.</source>
         <translation>Een persoon heeft een naam en een pseudoniem nodig.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="174"/>
+        <location filename="../core/project/people.cpp" line="187"/>
         <source>The pseudonym &quot;%1&quot; is already taken.</source>
         <translation>Het pseudoniem ‘%1’ is al in gebruik.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="200"/>
+        <location filename="../core/project/people.cpp" line="213"/>
         <source>A person needs a name.</source>
         <translation>Een persoon heeft een naam nodig.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="216"/>
+        <location filename="../core/project/people.cpp" line="229"/>
         <source>%1 is already disabled.</source>
         <translation>%1 is al uitgeschakeld.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="218"/>
+        <location filename="../core/project/people.cpp" line="231"/>
         <source>%1 is already enabled.</source>
         <translation>%1 is al ingeschakeld.</translation>
     </message>
     <message>
-        <location filename="../core/project/people.cpp" line="225"/>
+        <location filename="../core/project/people.cpp" line="238"/>
         <source>%1 is the project&apos;s only enabled lead; add or enable another lead first.</source>
         <translation>%1 is de enige actieve coördinator van het project; voeg eerst een andere coördinator toe of schakel er een in.</translation>
     </message>
@@ -2766,12 +2821,12 @@
         <translation>overgeslagen: geen formaat dat Fourfold leest</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="191"/>
+        <location filename="../core/project/project_import.cpp" line="193"/>
         <source>The folder %1 holds no files.</source>
         <translation>De map %1 bevat geen bestanden.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/project_import.cpp" line="196"/>
+        <location filename="../core/project/project_import.cpp" line="198"/>
         <source>%1: %n article(s)</source>
         <translation>
             <numerusform>%1: %n artikel</numerusform>
@@ -2779,7 +2834,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/project_import.cpp" line="201"/>
+        <location filename="../core/project/project_import.cpp" line="203"/>
         <source>The folder %1 was not imported: %n of its files could not be read, so nothing was added.</source>
         <translation>
             <numerusform>De map %1 is niet geïmporteerd: %n van de bestanden kon niet worden gelezen, dus er is niets toegevoegd.</numerusform>
@@ -2790,17 +2845,17 @@
 <context>
     <name>ProjectTables</name>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="52"/>
+        <location filename="../core/store/project_tables.cpp" line="61"/>
         <source>The article is already assigned to this coder in this phase, or one of them does not exist.</source>
         <translation>Het artikel is in deze fase al aan deze codeur toegewezen, of een van beide bestaat niet.</translation>
     </message>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="257"/>
+        <location filename="../core/store/project_tables.cpp" line="266"/>
         <source>The project file %1 is damaged, so nothing was added to it; `fourfold-cli check` lists the damage. Restore it from a backup.</source>
         <translation>Het projectbestand %1 is beschadigd, dus er is niets aan toegevoegd; `fourfold-cli check` somt de schade op. Zet het terug vanuit een back-up.</translation>
     </message>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="289"/>
+        <location filename="../core/store/project_tables.cpp" line="298"/>
         <source>foreign_key_check: row %1 of %2 refers to a missing row of %3</source>
         <translation>foreign_key_check: rij %1 van %2 verwijst naar een ontbrekende rij van %3</translation>
     </message>
@@ -2833,12 +2888,17 @@
         <translation>Een codeur heeft een naam en een pseudoniem nodig.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="238"/>
+        <location filename="../core/project/project.cpp" line="195"/>
+        <source>%1 was not added: a lead is added with a passphrase (Lead → People or fourfold-cli people --add).</source>
+        <translation>%1 is niet toegevoegd: een coördinator wordt met een wachtwoordzin toegevoegd (Coördinator → Personen of fourfold-cli people --add).</translation>
+    </message>
+    <message>
+        <location filename="../core/project/project.cpp" line="245"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 is uitgeschakeld en krijgt geen nieuwe toewijzingen; schakel deze persoon eerst in.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="362"/>
+        <location filename="../core/project/project.cpp" line="369"/>
         <source>An edit without its own savepoint needs a batch.</source>
         <translation>Een wijziging zonder eigen savepoint heeft een batch nodig.</translation>
     </message>
@@ -2924,22 +2984,22 @@
 <context>
     <name>ReliabilityTableReaderText</name>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="119"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="118"/>
         <source>the first column of the header must be &quot;unit&quot;, found &quot;%1&quot;.</source>
         <translation>de eerste kolom van de kopregel moet ‘unit’ zijn, gevonden: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="126"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="125"/>
         <source>column %1 of the header has no coder name.</source>
         <translation>kolom %1 van de kopregel heeft geen codeursnaam.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="130"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="129"/>
         <source>the coder &quot;%1&quot; appears twice in the header.</source>
         <translation>de codeur ‘%1’ komt twee keer voor in de kopregel.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/io/reliability_table_reader.cpp" line="137"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="136"/>
         <source>reliability needs at least two coders; the header names %n.</source>
         <translation>
             <numerusform>betrouwbaarheid vereist ten minste twee codeurs; de kopregel noemt er %n.</numerusform>
@@ -2947,27 +3007,27 @@
         </translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="145"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="144"/>
         <source>this row has %1 fields but the header has %2.</source>
         <translation>deze rij heeft %1 velden, maar de kopregel %2.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="151"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="150"/>
         <source>the unit id is empty.</source>
         <translation>de eenheid-id is leeg.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="160"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="159"/>
         <source>the unit &quot;%1&quot; appears twice (first on line %2).</source>
         <translation>de eenheid ‘%1’ komt twee keer voor (eerst op regel %2).</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="168"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="167"/>
         <source>the file is empty; expected a header row &quot;unit,&lt;coder&gt;,&lt;coder&gt;,...&quot;.</source>
         <translation>het bestand is leeg; verwacht een kopregel ‘unit,&lt;codeur&gt;,&lt;codeur&gt;,...’.</translation>
     </message>
     <message>
-        <location filename="../core/io/reliability_table_reader.cpp" line="172"/>
+        <location filename="../core/io/reliability_table_reader.cpp" line="171"/>
         <source>the file has a header but no units.</source>
         <translation>het bestand heeft een kopregel, maar geen eenheden.</translation>
     </message>
@@ -2975,27 +3035,27 @@
 <context>
     <name>ReportChartsText</name>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="138"/>
+        <location filename="../app/report/report_charts.cpp" line="144"/>
         <source>undef.</source>
         <translation>ongedef.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="151"/>
+        <location filename="../app/report/report_charts.cpp" line="157"/>
         <source>95% CI, pairs resampled</source>
         <translation>95%-BI, paren opnieuw getrokken</translation>
     </message>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="159"/>
+        <location filename="../app/report/report_charts.cpp" line="165"/>
         <source>95% CI, units resampled</source>
         <translation>95%-BI, eenheden opnieuw getrokken</translation>
     </message>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="196"/>
+        <location filename="../app/report/report_charts.cpp" line="202"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_charts.cpp" line="213"/>
+        <location filename="../app/report/report_charts.cpp" line="219"/>
         <source>Cohen&apos;s kappa</source>
         <translation>Cohens kappa</translation>
     </message>
@@ -3058,8 +3118,8 @@
     <message>
         <location filename="../app/report/report_document.cpp" line="157"/>
         <location filename="../app/report/report_document.cpp" line="159"/>
-        <location filename="../app/report/report_markup.cpp" line="92"/>
         <location filename="../app/report/report_frames_section.cpp" line="86"/>
+        <location filename="../app/report/report_markup.cpp" line="92"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
@@ -3473,8 +3533,8 @@
         <translation>Rol</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="155"/>
         <location filename="../app/report/report_frames_section.cpp" line="49"/>
+        <location filename="../app/report/report_sections.cpp" line="155"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
@@ -3979,134 +4039,202 @@
 <context>
     <name>ShortcutTableText</name>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="53"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="25"/>
+        <source> or </source>
+        <translation> of </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="114"/>
         <source>Mark the selected text as problem, cause, evaluation or remedy, snapped to whole words; with a span selected: relabel it</source>
         <translation>De geselecteerde tekst markeren als probleem, oorzaak, evaluatie of oplossing, uitgelijnd op hele woorden; met een fragment geselecteerd: de functie ervan wijzigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="56"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="117"/>
         <source>%1+1 – 4 (or Alt+1 – 4)</source>
         <translation>%1+1 – 4 (of Alt+1 – 4)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="57"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="118"/>
         <source>Mark exactly the selected text, without snapping to words</source>
         <translation>Precies de geselecteerde tekst markeren, zonder uitlijning op woorden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="59"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="120"/>
         <source>Exact selection on or off (View menu): while on, 1 – 4 and handle drags take the text exactly as selected</source>
         <translation>Exacte selectie aan of uit (menu Beeld): zolang die aan staat, nemen 1 – 4 en het slepen aan grepen de tekst precies zoals geselecteerd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="62"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="123"/>
         <source>%1 while dragging a handle (or Alt)</source>
         <translation>%1 tijdens het slepen aan een greep (of Alt)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="63"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="124"/>
         <source>Resize the selected span to the exact character</source>
         <translation>Het geselecteerde fragment tot op het teken groter of kleiner maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="64"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="125"/>
         <source>Delete or Backspace</source>
         <translation>Delete of Backspace</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="65"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="126"/>
         <source>Delete the selected span</source>
         <translation>Het geselecteerde fragment verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="66"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="127"/>
         <source>%1+Left / Right (or Alt+Left / Right)</source>
         <translation>%1+Links / Rechts (of Alt+Links / Rechts)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="67"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="128"/>
         <source>Move the selected span&apos;s start by a word</source>
         <translation>Het begin van het geselecteerde fragment een woord verplaatsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="68"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="129"/>
         <source>%1+Shift+Left / Right (or Alt+Shift+Left / Right)</source>
         <translation>%1+Shift+Links / Rechts (of Alt+Shift+Links / Rechts)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="69"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="130"/>
         <source>Move the selected span&apos;s end by a word</source>
         <translation>Het einde van het geselecteerde fragment een woord verplaatsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="70"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="131"/>
         <source>%1+Up / Down (or Alt+Up / Down)</source>
         <translation>%1+Omhoog / Omlaag (of Alt+Omhoog / Omlaag)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="71"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="132"/>
         <source>Select the previous / next span</source>
         <translation>Het vorige / volgende fragment selecteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="72"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="133"/>
         <source>Esc</source>
         <translation>Esc</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="73"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="134"/>
         <source>Clear the span selection, then the text selection; cancel a drag</source>
         <translation>Eerst de fragmentselectie opheffen, dan de tekstselectie; een sleepbeweging annuleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="75"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="136"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="179"/>
         <source>Undo the last change</source>
         <translation>De laatste wijziging ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="76"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="137"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="180"/>
         <source>Redo</source>
         <translation>Opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="78"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="139"/>
         <source>Mark the article as done and open the next</source>
         <translation>Het artikel als klaar markeren en het volgende openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="79"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="140"/>
         <source>Next article that is not done</source>
         <translation>Volgend artikel dat niet klaar is</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="80"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="141"/>
         <source>Start a new project</source>
         <translation>Een nieuw project beginnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="81"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="142"/>
         <source>Open a project</source>
         <translation>Een project openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="82"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="143"/>
         <source>Search the texts</source>
         <translation>In de teksten zoeken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="84"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="145"/>
         <source>Compare coders and adjudicate (leads)</source>
         <translation>Codeurs vergelijken en beslissen (coördinatoren)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="85"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="146"/>
         <source>Reliability (leads)</source>
         <translation>Betrouwbaarheid (coördinatoren)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/shortcut_table.cpp" line="86"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="147"/>
+        <location filename="../app/desktop/shortcut_table.cpp" line="181"/>
         <source>This list of keys</source>
         <translation>Deze lijst met toetsen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="155"/>
+        <source>Next undecided disagreement</source>
+        <translation>Volgend onbeslist verschil</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="157"/>
+        <source>Previous undecided disagreement</source>
+        <translation>Vorig onbeslist verschil</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="158"/>
+        <source>Next article in the queue</source>
+        <translation>Volgend artikel in de wachtrij</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="160"/>
+        <source>Previous article in the queue</source>
+        <translation>Vorig artikel in de wachtrij</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="162"/>
+        <source>Re-sort the queue: most undecided disagreements first (the queue keeps its order while you decide)</source>
+        <translation>De wachtrij opnieuw sorteren: de meeste onbesliste verschillen eerst (tot dan houdt de wachtrij haar volgorde terwijl je beslist)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="165"/>
+        <source>Accept the chosen coder&apos;s span into gold</source>
+        <translation>Het fragment van de gekozen codeur in de gouden standaard opnemen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="167"/>
+        <source>Put one span covering the chosen spans into gold</source>
+        <translation>Eén fragment dat de gekozen fragmenten omvat in de gouden standaard opnemen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="169"/>
+        <source>Decide a gold span with a function and boundaries of your own</source>
+        <translation>Een fragment voor de gouden standaard vastleggen met een eigen functie en eigen grenzen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="171"/>
+        <source>Record that the chosen spans do not belong in gold</source>
+        <translation>Vastleggen dat de gekozen fragmenten niet in de gouden standaard horen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="172"/>
+        <source>Withdraw the chosen gold span</source>
+        <translation>Het gekozen fragment uit de gouden standaard terugtrekken</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="174"/>
+        <source>Accept every span all coders of the article agree on</source>
+        <translation>Elk fragment accepteren waarover alle codeurs van het artikel het eens zijn</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/shortcut_table.cpp" line="176"/>
+        <source>Write the rationale kept with the next decision</source>
+        <translation>De motivering schrijven die bij de volgende beslissing wordt bewaard</translation>
     </message>
 </context>
 <context>
@@ -4125,14 +4253,6 @@
         <location filename="../core/scoring/span_layer.cpp" line="149"/>
         <source>There is no extractor run &quot;%1&quot; in the project.</source>
         <translation>Er is geen extractorrun ‘%1’ in het project.</translation>
-    </message>
-</context>
-<context>
-    <name>StudyEditText</name>
-    <message>
-        <location filename="../core/project/study_edits.cpp" line="39"/>
-        <source>The project already holds %1.</source>
-        <translation>Het project bevat %1 al.</translation>
     </message>
 </context>
 <context>
@@ -4310,6 +4430,14 @@
     </message>
 </context>
 <context>
+    <name>StudyEditText</name>
+    <message>
+        <location filename="../core/project/study_edits.cpp" line="39"/>
+        <source>The project already holds %1.</source>
+        <translation>Het project bevat %1 al.</translation>
+    </message>
+</context>
+<context>
     <name>StudyText</name>
     <message>
         <location filename="../app/desktop/study/study_text.cpp" line="13"/>
@@ -4462,27 +4590,27 @@
 <context>
     <name>ValueEncodingText</name>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="29"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="30"/>
         <source>unit &quot;%1&quot;, coder &quot;%2&quot;: %3</source>
         <translation>eenheid ‘%1’, codeur ‘%2’: %3</translation>
     </message>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="121"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="126"/>
         <source>A set distance (Jaccard, MASI) cannot be combined with the %1 level.</source>
         <translation>Een verzamelingsafstand (Jaccard, MASI) kan niet worden gecombineerd met het niveau %1.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="174"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="179"/>
         <source>&quot;%1&quot; is not one of the ordered values (%2).</source>
         <translation>‘%1’ is geen van de geordende waarden (%2).</translation>
     </message>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="181"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="186"/>
         <source>&quot;%1&quot; is not a number, as the %2 level needs.</source>
         <translation>‘%1’ is geen getal, zoals het niveau %2 vereist.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/value_encoding.cpp" line="185"/>
+        <location filename="../core/agreement/value_encoding.cpp" line="190"/>
         <source>%1 is negative; ratio values cannot be.</source>
         <translation>%1 is negatief; ratiowaarden kunnen dat niet zijn.</translation>
     </message>
@@ -5136,7 +5264,7 @@
         <location filename="../app/cli/command_export.cpp" line="73"/>
         <location filename="../app/cli/command_extract.cpp" line="166"/>
         <location filename="../app/cli/command_handout.cpp" line="25"/>
-        <location filename="../app/cli/command_import.cpp" line="128"/>
+        <location filename="../app/cli/command_import.cpp" line="129"/>
         <location filename="../app/cli/command_info.cpp" line="38"/>
         <location filename="../app/cli/command_merge.cpp" line="75"/>
         <location filename="../app/cli/command_people.cpp" line="109"/>
@@ -5262,62 +5390,62 @@
         <translation>Seed %1.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="32"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="34"/>
         <source>Cannot read %1: %2</source>
         <translation>Kan %1 niet lezen: %2</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="37"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="39"/>
         <source>%1: not a JSON object (%2).</source>
         <translation>%1: geen JSON-object (%2).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="65"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="68"/>
         <source>%1: a coder&apos;s role must be &quot;coder&quot; or &quot;lead&quot;.</source>
         <translation>%1: de rol van een persoon moet ‘coder’ of ‘lead’ zijn.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="85"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="100"/>
         <source>%1: the reliability article &quot;%2&quot; is not in articles.jsonl.</source>
         <translation>%1: het betrouwbaarheidsartikel ‘%2’ staat niet in articles.jsonl.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="122"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="142"/>
         <source>Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans, 2 baseline runs.</source>
         <translation>%1 gebouwd: %2 artikelen, %3 codeurs, %4 fragmenten, %5 oordelen op artikelniveau, %6 fragmenten in de gouden standaard, 2 baselineruns.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="147"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="167"/>
         <source>Replace OUT if it exists.</source>
         <translation>OUT vervangen als het bestaat.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="150"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="170"/>
         <source>The folder with study.json, articles.jsonl, codings.jsonl and gold.jsonl.</source>
         <translation>De map met study.json, articles.jsonl, codings.jsonl en gold.jsonl.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="152"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="172"/>
         <source>The project file to write (*.fourfold).</source>
         <translation>Het projectbestand om te schrijven (*.fourfold).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="154"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="174"/>
         <source>Build the demo project (invented data) from its source files.</source>
         <translation>Het demoproject (verzonnen gegevens) bouwen uit de bronbestanden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="159"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="179"/>
         <source>expected a source folder and an output file.</source>
         <translation>een bronmap en een uitvoerbestand verwacht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="164"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="184"/>
         <source>%1 already exists; add --force to replace it.</source>
         <translation>%1 bestaat al; voeg --force toe om het te vervangen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="178"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="198"/>
         <source>Cannot move the new project to %1.</source>
         <translation>Kan het nieuwe project niet naar %1 verplaatsen.</translation>
     </message>
@@ -5603,7 +5731,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_extract.cpp" line="194"/>
-        <location filename="../app/cli/command_import.cpp" line="201"/>
+        <location filename="../app/cli/command_import.cpp" line="202"/>
         <source>Upgraded the project file; the old version is kept as %1.</source>
         <translation>Het projectbestand is bijgewerkt; de oude versie is bewaard als %1.</translation>
     </message>
@@ -6036,122 +6164,122 @@
         <translation>Ze bevat %1 artikelen, %2 annotaties, %3 koppelingen en %4 oordelen op artikelniveau.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="49"/>
+        <location filename="../app/cli/command_import.cpp" line="50"/>
         <source>%1: %2 spans, %3 answers, %4 gold spans added</source>
         <translation>%1: %2 fragmenten, %3 antwoorden, %4 fragmenten in de gouden standaard toegevoegd</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="55"/>
+        <location filename="../app/cli/command_import.cpp" line="56"/>
         <source>  %1 line(s) skipped: already in the project (the same annotation, or the same coder, function and range; the same answer; the same gold span)</source>
         <translation>  %1 regel(s) overgeslagen: al in het project (dezelfde annotatie, of dezelfde codeur, functie en hetzelfde bereik; hetzelfde antwoord; hetzelfde fragment in de gouden standaard)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="60"/>
+        <location filename="../app/cli/command_import.cpp" line="61"/>
         <source>  %1 article(s) marked done for their coders (imported codings count as finished)</source>
         <translation>  %1 artikel(en) als klaar gemarkeerd voor hun codeurs (geïmporteerde coderingen tellen als afgerond)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="65"/>
+        <location filename="../app/cli/command_import.cpp" line="66"/>
         <source>  new coders: %1</source>
         <translation>  nieuwe codeurs: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="82"/>
+        <location filename="../app/cli/command_import.cpp" line="83"/>
         <source>Read every file as txt, html, jsonl, csv, feed (RSS or Atom), newsxml (NITF or NewsML-G2), docx, odt, pdf or epub (default: from each file&apos;s suffix; .xml and unknown suffixes from the content).</source>
         <translation>Elk bestand lezen als txt, html, jsonl, csv, feed (RSS of Atom), newsxml (NITF of NewsML-G2), docx, odt, pdf of epub (standaard: naar de extensie van elk bestand; .xml en onbekende extensies naar de inhoud).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="88"/>
+        <location filename="../app/cli/command_import.cpp" line="89"/>
         <source>Language (BCP 47 tag) of articles that name none (default: the project&apos;s).</source>
         <translation>Taal (BCP 47-tag) van artikelen die er geen noemen (standaard: die van het project).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="92"/>
+        <location filename="../app/cli/command_import.cpp" line="93"/>
         <source>CSV: take FIELD (id, title, text, outlet, published, language) from the column HEADER. Repeatable.</source>
         <translation>CSV: VELD (id, title, text, outlet, published, language) uit de kolom HEADER nemen. Herhaalbaar.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="97"/>
+        <location filename="../app/cli/command_import.cpp" line="98"/>
         <source>EPUB: import each book as one article instead of one article per chapter.</source>
         <translation>EPUB: elk boek als één artikel importeren in plaats van één artikel per hoofdstuk.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="100"/>
+        <location filename="../app/cli/command_import.cpp" line="101"/>
         <source>txt, docx, odt, pdf: cut each document into articles at the lines matching REGEX; named groups (?&lt;title&gt;...), (?&lt;outlet&gt;...), (?&lt;date&gt;...) fill those fields, else the first line of each part is its title.</source>
         <translation>txt, docx, odt, pdf: elk document in artikelen knippen bij de regels die met REGEX overeenkomen; benoemde groepen (?&lt;title&gt;...), (?&lt;outlet&gt;...), (?&lt;date&gt;...) vullen die velden, anders is de eerste regel van elk deel de titel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="106"/>
+        <location filename="../app/cli/command_import.cpp" line="107"/>
         <source>List and record an added article as a near copy of an article in the project when the estimated Jaccard similarity of their 5-word shingles is at least J, in (0, 1] (default 0.8).</source>
         <translation>Een toegevoegd artikel opsommen en vastleggen als bijna-kopie van een artikel in het project wanneer de geschatte Jaccard-gelijkenis van hun shingles van 5 woorden ten minste J is, in (0, 1] (standaard 0.8).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="112"/>
+        <location filename="../app/cli/command_import.cpp" line="113"/>
         <source>Print the report as JSON.</source>
         <translation>Het verslag als JSON afdrukken.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="114"/>
+        <location filename="../app/cli/command_import.cpp" line="115"/>
         <source>The files hold W3C Web Annotations (from &quot;export --format w3c&quot;): import them as codings of the articles already in the project.</source>
         <translation>De bestanden bevatten W3C-webannotaties (uit ‘export --format w3c’): importeer ze als coderingen van de artikelen die al in het project staan.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="118"/>
+        <location filename="../app/cli/command_import.cpp" line="119"/>
         <source>The files hold quote-anchored codings (JSON Lines, see sample-project/README.md).</source>
         <translation>De bestanden bevatten aan citaten verankerde coderingen (JSON Lines, zie sample-project/README.md).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="121"/>
+        <location filename="../app/cli/command_import.cpp" line="122"/>
         <source>With --w3c or --codings: the phase of the imported codings (training, pilot, reliability, production; default production).</source>
         <translation>Met --w3c of --codings: de fase van de geïmporteerde coderingen (training, pilot, reliability, production; standaard production).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="130"/>
+        <location filename="../app/cli/command_import.cpp" line="131"/>
         <source>Files or folders to import. Each file is imported whole or not at all; a folder (with its subfolders) likewise, as one.</source>
         <translation>Te importeren bestanden of mappen. Elk bestand wordt helemaal of helemaal niet geïmporteerd; een map (met submappen) evenzo, als geheel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="134"/>
+        <location filename="../app/cli/command_import.cpp" line="135"/>
         <source>Import articles into a project (or, with --w3c or --codings, codings of its articles).</source>
         <translation>Artikelen in een project importeren (of, met --w3c of --codings, coderingen van de artikelen ervan).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="143"/>
+        <location filename="../app/cli/command_import.cpp" line="144"/>
         <source>expected a project file and at least one file to import.</source>
         <translation>een projectbestand en ten minste één te importeren bestand verwacht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="151"/>
+        <location filename="../app/cli/command_import.cpp" line="152"/>
         <source>unknown format &quot;%1&quot; (expected txt, html, jsonl, csv, feed, newsxml, docx, odt, pdf or epub).</source>
         <translation>onbekend formaat ‘%1’ (verwacht: txt, html, jsonl, csv, feed, newsxml, docx, odt, pdf of epub).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="162"/>
+        <location filename="../app/cli/command_import.cpp" line="163"/>
         <source>--split-on: %1</source>
         <translation>--split-on: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="170"/>
+        <location filename="../app/cli/command_import.cpp" line="171"/>
         <source>--near-copy-threshold expects a number in (0, 1], got &quot;%1&quot;.</source>
         <translation>--near-copy-threshold verwacht een getal in (0, 1], gekregen: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="178"/>
+        <location filename="../app/cli/command_import.cpp" line="179"/>
         <source>--column expects FIELD=HEADER, got &quot;%1&quot;.</source>
         <translation>--column verwacht VELD=HEADER, gekregen: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="185"/>
+        <location filename="../app/cli/command_import.cpp" line="186"/>
         <source>choose either --w3c or --codings.</source>
         <translation>kies --w3c of --codings.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="191"/>
+        <location filename="../app/cli/command_import.cpp" line="192"/>
         <source>unknown phase &quot;%1&quot; (expected training, pilot, reliability or production).</source>
         <translation>onbekende fase ‘%1’ (verwacht: training, pilot, reliability of production).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_import.cpp" line="214"/>
+        <location filename="../app/cli/command_import.cpp" line="222"/>
         <source>fourfold-cli: the %n article(s) imported before this file stay in the project.</source>
         <translation>
             <numerusform>fourfold-cli: het %n artikel dat vóór dit bestand is geïmporteerd, blijft in het project.</numerusform>
@@ -6159,17 +6287,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="243"/>
+        <location filename="../app/cli/command_import.cpp" line="251"/>
         <source>%1: %2 added, %3 skipped</source>
         <translation>%1: %2 toegevoegd, %3 overgeslagen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="252"/>
+        <location filename="../app/cli/command_import.cpp" line="260"/>
         <source>  %1: %2</source>
         <translation>  %1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_import.cpp" line="259"/>
+        <location filename="../app/cli/command_import.cpp" line="267"/>
         <source>… %n more</source>
         <translation>
             <numerusform>… %n andere</numerusform>
@@ -6177,17 +6305,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="260"/>
+        <location filename="../app/cli/command_import.cpp" line="268"/>
         <source>  %1: %2 added (%3), %4 skipped</source>
         <translation>  %1: %2 toegevoegd (%3), %4 overgeslagen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="267"/>
+        <location filename="../app/cli/command_import.cpp" line="275"/>
         <source>  line %1 (%2): skipped, %3</source>
         <translation>  regel %1 (%2): overgeslagen, %3</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_import.cpp" line="271"/>
+        <location filename="../app/cli/command_import.cpp" line="279"/>
         <source>  line %1 (%2): added, a near copy of &quot;%3&quot; (similarity %4)</source>
         <translation>  regel %1 (%2): toegevoegd, een bijna-kopie van ‘%3’ (gelijkenis %4)</translation>
     </message>
@@ -7663,390 +7791,418 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::ComparisonWindow</name>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="89"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="93"/>
         <source>Compare coders and decide gold — %1</source>
         <translation>Codeurs vergelijken en gouden standaard beslissen — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="91"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="95"/>
         <source>Only a lead compares coders and decides the gold standard. Open the project as a lead to use this window.</source>
         <translation>Alleen een coördinator vergelijkt codeurs en beslist over de gouden standaard. Open het project als coördinator om dit venster te gebruiken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="115"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="119"/>
         <source>Nothing to compare yet. An article comes here once at least two coders have coded it and marked it done (or tick “Articles in progress” above). Plan double coding in Lead → Study design; the progress board shows who is done.</source>
         <translation>Nog niets te vergelijken. Een artikel verschijnt hier zodra ten minste twee codeurs het hebben gecodeerd en als klaar hebben gemarkeerd (of vink hierboven ‘Artikelen in bewerking’ aan). Plan dubbele codering in Coördinator → Onderzoeksopzet; het voortgangsoverzicht toont wie klaar is.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="152"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="169"/>
         <source>Articles to adjudicate</source>
         <translation>Te beslissen artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="153"/>
-        <source>Articles coded by several coders, most undecided disagreements first. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
-        <translation>Artikelen die door meerdere codeurs zijn gecodeerd, die met de meeste onbesliste verschillen eerst. Open: onbesliste verschillen; Eens: passages waarover alle codeurs het eens zijn en die nog niet in de gouden standaard staan.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="170"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="188"/>
         <source>Margin: ∅ a coder has no span here · ≠ different functions · ↔ different boundaries · ≈ different attributes · ✓ decided. Lanes under each line: problem (solid), cause (dashed), evaluation (dotted), remedy (dash-dot). Hatched: this coder has no span in the passage.</source>
         <translation>Marge: ∅ een codeur heeft hier geen fragment · ≠ verschillende functies · ↔ verschillende grenzen · ≈ verschillende kenmerken · ✓ beslist. Banen onder elke regel: probleem (doorgetrokken), oorzaak (gestreept), evaluatie (gestippeld), oplossing (streep-punt). Gearceerd: deze codeur heeft geen fragment in de passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="207"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
         <source>Who</source>
         <translation>Wie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="207"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="207"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
         <source>Decision</source>
         <translation>Beslissing</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="212"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="230"/>
         <source>Spans of the passage</source>
         <translation>Fragmenten van de passage</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="223"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="241"/>
         <source>&amp;Rationale (optional, kept with the decision):</source>
         <translation>&amp;Motivering (optioneel, wordt bij de beslissing bewaard):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="243"/>
         <source>Why this decision, for the method section</source>
         <translation>Waarom deze beslissing, voor de methodesectie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="229"/>
-        <source>Keys: N / P next and previous disagreement, Alt+Down / Alt+Up next and previous article; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; Ctrl+Shift+A accept all agreed; Ctrl+L rationale; Ctrl+Z undo.</source>
-        <translation>Toetsen: N / P volgend en vorig verschil, Alt+Pijl-omlaag / Alt+Pijl-omhoog volgend en vorig artikel; A het gekozen fragment accepteren, M de gekozen fragmenten samenvoegen, E bewerken, R verwerpen, W een fragment uit de gouden standaard terugtrekken; Ctrl+Shift+A alle overeenstemmende accepteren; Ctrl+L motivering; Ctrl+Z ongedaan maken.</translation>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="170"/>
+        <source>Articles coded by several coders, most undecided disagreements first when sorted; the order is kept while you decide until you re-sort. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
+        <translation>Artikelen die door meerdere codeurs zijn gecodeerd, gesorteerd met de meeste onbesliste verschillen eerst; terwijl je beslist blijft de volgorde staan tot je opnieuw sorteert. Open: onbesliste verschillen; Eens: passages waarover alle codeurs het eens zijn en die nog niet in de gouden standaard staan.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="262"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="249"/>
+        <source>Keys: N / P next and previous disagreement, %1 / %2 next and previous article, %3 re-sort the queue; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; %4 accept all agreed; %5 rationale; %6 undo; %7 every key.</source>
+        <translation>Toetsen: N / P volgend en vorig verschil, %1 / %2 volgend en vorig artikel, %3 de wachtrij opnieuw sorteren; A het gekozen fragment accepteren, M de gekozen fragmenten samenvoegen, E bewerken, R verwerpen, W een fragment uit de gouden standaard terugtrekken; %4 alle overeenstemmende accepteren; %5 motivering; %6 ongedaan maken; %7 alle toetsen.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="286"/>
         <source>Comparison</source>
         <translation>Vergelijking</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="276"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="596"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="652"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="648"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
         <source>, </source>
         <translation>, </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="282"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="306"/>
         <source>Function: </source>
         <translation>Functie: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="284"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="308"/>
         <source>All functions</source>
         <translation>Alle functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="287"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="311"/>
         <source>Function filter</source>
         <translation>Functiefilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="293"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="317"/>
         <source>  Coders: </source>
         <translation>  Codeurs: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="295"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
         <source>All coders</source>
         <translation>Alle codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="302"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
         <source>%1 and %2</source>
         <translation>%1 en %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="304"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="328"/>
         <source>Coder pair filter</source>
         <translation>Filter op codeurspaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="310"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
         <source>Show decided</source>
         <translation>Besliste tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="311"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
         <source>Also step through disagreements already decided</source>
         <translation>Ook langs verschillen gaan die al beslist zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="314"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
         <source>Articles in progress</source>
         <translation>Artikelen in bewerking</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="315"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="339"/>
         <source>Also compare coders on articles they have started but not yet marked done</source>
         <translation>Vergelijk codeurs ook op artikelen die ze begonnen maar nog niet als klaar gemarkeerd hebben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="317"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="341"/>
         <source>Show articles in progress</source>
         <translation>Artikelen in bewerking tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
         <source>Previous</source>
         <translation>Vorige</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="350"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorig onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="351"/>
         <source>Next</source>
         <translation>Volgende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="327"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
         <source>Next undecided disagreement</source>
         <translation>Volgend onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="329"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
         <source>Previous article</source>
         <translation>Vorig artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="330"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="354"/>
         <source>Previous article in the queue</source>
         <translation>Vorig artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
         <source>Next article</source>
         <translation>Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="336"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
         <source>Next article in the queue</source>
         <translation>Volgend artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="344"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
+        <source>Re-sort queue</source>
+        <translation>Wachtrij opnieuw sorteren</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="366"/>
+        <source>Sort the queue again, most undecided disagreements first; until then it keeps its order while you decide</source>
+        <translation>De wachtrij opnieuw sorteren, de meeste onbesliste verschillen eerst; tot dan houdt ze haar volgorde terwijl je beslist</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="375"/>
         <source>Accept</source>
         <translation>Accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="344"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="376"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Het fragment van de gekozen codeur in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="346"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="377"/>
         <source>Merge</source>
         <translation>Samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="347"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="378"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eén fragment dat de gekozen fragmenten omvat in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
         <source>Edit…</source>
         <translation>Bewerken…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Een fragment voor de gouden standaard vastleggen met een eigen functie en eigen grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="351"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="382"/>
         <source>Reject</source>
         <translation>Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="383"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Vastleggen dat de gekozen fragmenten niet in de gouden standaard horen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="384"/>
         <source>Withdraw gold</source>
         <translation>Terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="385"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Het gekozen fragment uit de gouden standaard terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="355"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="386"/>
         <source>Accept all agreed</source>
         <translation>Alle overeenstemmende accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="357"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="387"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Elk fragment accepteren waarover alle codeurs van het artikel het eens zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="363"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="393"/>
         <source>Undo</source>
         <translation>Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="395"/>
         <source>Redo</source>
         <translation>Opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="507"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
+        <source>Keys of the comparison window</source>
+        <translation>Toetsen van het vergelijkingsvenster</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="463"/>
+        <source>%n article(s) to adjudicate</source>
+        <translation>
+            <numerusform>%n artikel om te beslissen</numerusform>
+            <numerusform>%n artikelen om te beslissen</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="471"/>
+        <source>Queue sorted again: most undecided disagreements first.</source>
+        <translation>Wachtrij opnieuw gesorteerd: de meeste onbesliste verschillen eerst.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="559"/>
         <source>Gold (%1)</source>
         <translation>Gouden standaard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="507"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="644"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="559"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="696"/>
         <source>Gold</source>
         <translation>Gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="552"/>
-        <source>No undecided disagreement left in this article. Alt+Down opens the next article.</source>
-        <translation>Geen onbeslist verschil meer in dit artikel. Alt+Pijl-omlaag opent het volgende artikel.</translation>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="604"/>
+        <source>No undecided disagreement left in this article. %1 opens the next article.</source>
+        <translation>Geen onbeslist verschil meer in dit artikel. %1 opent het volgende artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="569"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="621"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="585"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="637"/>
         <source>No spans to compare in this article.</source>
         <translation>Geen fragmenten om te vergelijken in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="586"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="638"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klik op een passage of druk op N voor het volgende verschil.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="596"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="648"/>
         <source>no span by %1</source>
         <translation>geen fragment van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="599"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="651"/>
         <source>different functions</source>
         <translation>verschillende functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="601"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="653"/>
         <source>different boundaries</source>
         <translation>verschillende grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="603"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="655"/>
         <source>different attributes</source>
         <translation>verschillende kenmerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="611"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="663"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 van %2 (alinea %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="615"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="667"/>
         <source>the coders agree</source>
         <translation>de codeurs zijn het eens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="615"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="667"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="616"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="668"/>
         <source> — decided</source>
         <translation> — beslist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="635"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="687"/>
         <source>Characters %1 to %2</source>
         <translation>Tekens %1 tot %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="636"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
         <source>rejected</source>
         <translation>verworpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="636"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
         <source>in gold</source>
         <translation>in gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="652"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
         <source>drawn by the lead</source>
         <translation>getekend door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="652"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
         <source>from %1</source>
         <translation>van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="654"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="706"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Beslist door %1 op %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="656"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="708"/>
         <source> Rationale: %1</source>
         <translation> Motivering: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="664"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="716"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Gouden standaard %1 beslist door %2 op %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="771"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="823"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Ongedaan maken met %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="798"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="850"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Kies het fragment van één codeur om te accepteren (of meerdere om samen te voegen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="825"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="877"/>
         <source>Choose a passage first.</source>
         <translation>Kies eerst een passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="863"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="915"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Kies de fragmenten om te verwerpen (die nog niet verworpen zijn).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="874"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="926"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Kies één fragment uit de gouden standaard om terug te trekken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="894"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="946"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>Er is in dit artikel geen overeenstemmende passage meer om te accepteren.</translation>
     </message>
@@ -8728,22 +8884,22 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::FrameCard</name>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="162"/>
+        <location filename="../app/desktop/frame_card.cpp" line="163"/>
         <source>Frame card</source>
         <translation>Framekaart</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="209"/>
+        <location filename="../app/desktop/frame_card.cpp" line="210"/>
         <source>— nothing coded yet</source>
         <translation>— nog niets gecodeerd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="263"/>
+        <location filename="../app/desktop/frame_card.cpp" line="264"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frame_card.cpp" line="279"/>
+        <location filename="../app/desktop/frame_card.cpp" line="280"/>
         <source>%n span(s)</source>
         <translation>
             <numerusform>%n fragment</numerusform>
@@ -8751,7 +8907,7 @@ Bijna-kopie van %2</translation>
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frame_card.cpp" line="281"/>
+        <location filename="../app/desktop/frame_card.cpp" line="282"/>
         <source>%1: %n span(s)</source>
         <translation>
             <numerusform>%1: %n fragment</numerusform>
@@ -9505,7 +9661,7 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="826"/>
+        <location filename="../app/desktop/main_window.cpp" line="833"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
@@ -9601,249 +9757,249 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <translation>Dit artikel als klaar markeren en het volgende openen (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="261"/>
+        <location filename="../app/desktop/main_window.cpp" line="268"/>
         <source>Import articles…</source>
         <translation>Artikelen importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="330"/>
+        <location filename="../app/desktop/main_window.cpp" line="337"/>
         <source>&amp;Project</source>
         <translation>&amp;Project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="331"/>
+        <location filename="../app/desktop/main_window.cpp" line="338"/>
         <source>&amp;New project…</source>
         <translation>&amp;Nieuw project…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="332"/>
+        <location filename="../app/desktop/main_window.cpp" line="339"/>
         <source>&amp;Open…</source>
         <translation>&amp;Openen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="333"/>
+        <location filename="../app/desktop/main_window.cpp" line="340"/>
         <source>&amp;Import articles…</source>
         <translation>Artikelen &amp;importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="335"/>
+        <location filename="../app/desktop/main_window.cpp" line="342"/>
         <source>Import a &amp;folder…</source>
         <translation>Een &amp;map importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="336"/>
+        <location filename="../app/desktop/main_window.cpp" line="343"/>
         <source>Import a folder</source>
         <translation>Een map importeren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="342"/>
+        <location filename="../app/desktop/main_window.cpp" line="349"/>
         <source>Open the &amp;sample project</source>
         <translation>&amp;Voorbeeldproject openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="344"/>
+        <location filename="../app/desktop/main_window.cpp" line="351"/>
         <source>&amp;Quit</source>
         <translation>&amp;Afsluiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="346"/>
+        <location filename="../app/desktop/main_window.cpp" line="353"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="347"/>
-        <location filename="../app/desktop/main_window.cpp" line="515"/>
+        <location filename="../app/desktop/main_window.cpp" line="354"/>
+        <location filename="../app/desktop/main_window.cpp" line="522"/>
         <source>&amp;Undo</source>
         <translation>&amp;Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="350"/>
-        <location filename="../app/desktop/main_window.cpp" line="518"/>
+        <location filename="../app/desktop/main_window.cpp" line="357"/>
+        <location filename="../app/desktop/main_window.cpp" line="525"/>
         <source>&amp;Redo</source>
         <translation>Opn&amp;ieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="354"/>
+        <location filename="../app/desktop/main_window.cpp" line="361"/>
         <source>&amp;Code</source>
         <translation>&amp;Coderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="358"/>
+        <location filename="../app/desktop/main_window.cpp" line="365"/>
         <source>Mark as %1	%2</source>
         <translation>Markeren als %1	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="362"/>
+        <location filename="../app/desktop/main_window.cpp" line="369"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel markeren als &amp;klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="363"/>
+        <location filename="../app/desktop/main_window.cpp" line="370"/>
         <source>&amp;Next article</source>
         <translation>&amp;Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="365"/>
+        <location filename="../app/desktop/main_window.cpp" line="372"/>
         <source>&amp;Find in texts</source>
         <translation>&amp;Zoeken in teksten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="366"/>
+        <location filename="../app/desktop/main_window.cpp" line="373"/>
         <source>&amp;Training feedback…</source>
         <translation>&amp;Trainingsfeedback…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="373"/>
+        <location filename="../app/desktop/main_window.cpp" line="380"/>
         <source>&amp;View</source>
         <translation>&amp;Weergave</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="374"/>
+        <location filename="../app/desktop/main_window.cpp" line="381"/>
         <source>E&amp;xact selection (no snapping to words)</source>
         <translation>E&amp;xacte selectie (niet uitlijnen op woorden)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="382"/>
+        <location filename="../app/desktop/main_window.cpp" line="389"/>
         <source>Exact selection: spans take the text as selected.</source>
         <translation>Exacte selectie: fragmenten nemen de tekst zoals geselecteerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="383"/>
+        <location filename="../app/desktop/main_window.cpp" line="390"/>
         <source>Spans snap to whole words again.</source>
         <translation>Fragmenten worden weer uitgelijnd op hele woorden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="387"/>
+        <location filename="../app/desktop/main_window.cpp" line="394"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Fragmenten van &amp;alle codeurs tonen (alleen coördinatoren)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="397"/>
+        <location filename="../app/desktop/main_window.cpp" line="404"/>
         <source>&amp;Lead</source>
         <translation>C&amp;oördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="399"/>
+        <location filename="../app/desktop/main_window.cpp" line="406"/>
         <source>&amp;Compare and adjudicate…</source>
         <translation>&amp;Vergelijken en beslissen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="401"/>
+        <location filename="../app/desktop/main_window.cpp" line="408"/>
         <source>&amp;Reliability…</source>
         <translation>&amp;Betrouwbaarheid…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="402"/>
+        <location filename="../app/desktop/main_window.cpp" line="409"/>
         <source>&amp;Frames…</source>
         <translation>&amp;Frames…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="403"/>
+        <location filename="../app/desktop/main_window.cpp" line="410"/>
         <source>Write the reliability &amp;report…</source>
         <translation>Betrouwbaarheids&amp;rapport schrijven…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="405"/>
+        <location filename="../app/desktop/main_window.cpp" line="412"/>
         <source>&amp;Study design…</source>
         <translation>&amp;Onderzoeksopzet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="406"/>
+        <location filename="../app/desktop/main_window.cpp" line="413"/>
         <source>C&amp;odebook…</source>
         <translation>C&amp;odeboek…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="407"/>
+        <location filename="../app/desktop/main_window.cpp" line="414"/>
         <source>&amp;Progress…</source>
         <translation>Voort&amp;gang…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="408"/>
+        <location filename="../app/desktop/main_window.cpp" line="415"/>
         <source>P&amp;eople…</source>
         <translation>P&amp;ersonen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="409"/>
+        <location filename="../app/desktop/main_window.cpp" line="416"/>
         <source>&amp;Hand out a coder copy…</source>
         <translation>Codeurs&amp;kopie uitdelen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="410"/>
+        <location filename="../app/desktop/main_window.cpp" line="417"/>
         <source>&amp;Merge returned coder copies…</source>
         <translation>Teruggekomen codeurskopieën &amp;samenvoegen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="411"/>
+        <location filename="../app/desktop/main_window.cpp" line="418"/>
         <source>Merge co&amp;nflicts…</source>
         <translation>Samenvoeg&amp;conflicten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="413"/>
+        <location filename="../app/desktop/main_window.cpp" line="420"/>
         <source>&amp;Extractor runs…</source>
         <translation>&amp;Extractorruns…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="421"/>
+        <location filename="../app/desktop/main_window.cpp" line="428"/>
         <source>&amp;Settings</source>
         <translation>&amp;Instellingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="422"/>
+        <location filename="../app/desktop/main_window.cpp" line="429"/>
         <source>&amp;Language</source>
         <translation>&amp;Taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="427"/>
+        <location filename="../app/desktop/main_window.cpp" line="434"/>
         <source>System language</source>
         <translation>Systeemtaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="438"/>
+        <location filename="../app/desktop/main_window.cpp" line="445"/>
         <source>&amp;Help</source>
         <translation>&amp;Help</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="440"/>
+        <location filename="../app/desktop/main_window.cpp" line="447"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="457"/>
+        <location filename="../app/desktop/main_window.cpp" line="464"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Het project heeft geen codeur ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="471"/>
+        <location filename="../app/desktop/main_window.cpp" line="478"/>
         <source>Nobody was chosen to code.</source>
         <translation>Er is niemand gekozen om te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="497"/>
+        <location filename="../app/desktop/main_window.cpp" line="504"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="498"/>
+        <location filename="../app/desktop/main_window.cpp" line="505"/>
         <source>Codebook</source>
         <translation>Codeboek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="515"/>
+        <location filename="../app/desktop/main_window.cpp" line="522"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Ongedaan maken: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="518"/>
+        <location filename="../app/desktop/main_window.cpp" line="525"/>
         <source>&amp;Redo %1</source>
         <translation>Opn&amp;ieuw: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="660"/>
+        <location filename="../app/desktop/main_window.cpp" line="667"/>
         <source>Every article in the list is done.</source>
         <translation>Alle artikelen in de lijst zijn klaar.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="682"/>
+        <location filename="../app/desktop/main_window.cpp" line="689"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n artikel bevat ‘%1’.</numerusform>
@@ -9851,121 +10007,126 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="688"/>
+        <location filename="../app/desktop/main_window.cpp" line="695"/>
         <source>New project</source>
         <translation>Nieuw project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="698"/>
+        <location filename="../app/desktop/main_window.cpp" line="705"/>
         <source>Cannot create project</source>
         <translation>Project kan niet worden aangemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="710"/>
+        <location filename="../app/desktop/main_window.cpp" line="717"/>
         <source>Import articles</source>
         <translation>Artikelen importeren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="711"/>
+        <location filename="../app/desktop/main_window.cpp" line="718"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikelen (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="757"/>
+        <location filename="../app/desktop/main_window.cpp" line="764"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Kies een artikel&lt;/h3&gt;&lt;p&gt;Kies links in de lijst een artikel om het te gaan coderen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="760"/>
+        <location filename="../app/desktop/main_window.cpp" line="767"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog geen artikelen&lt;/h3&gt;&lt;p&gt;Importeer de artikelen van het onderzoek: platte tekst, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- of Atom-feeds, NITF of NewsML-G2. Wijs ze daarna toe aan codeurs in Coördinator → Onderzoeksopzet.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="765"/>
+        <location filename="../app/desktop/main_window.cpp" line="772"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog niets te coderen&lt;/h3&gt;&lt;p&gt;In dit project zijn geen artikelen aan u toegewezen. Uw coördinator wijst ze toe; open daarna het project opnieuw, of open de codeurskopie die u wordt gestuurd.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="797"/>
+        <location filename="../app/desktop/main_window.cpp" line="804"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>De taal verandert wanneer Fourfold opnieuw wordt gestart.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="810"/>
+        <location filename="../app/desktop/main_window.cpp" line="817"/>
         <source>Not saved: %1. %2</source>
         <translation>Niet opgeslagen: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="811"/>
+        <location filename="../app/desktop/main_window.cpp" line="818"/>
         <source>&amp;Retry</source>
         <translation>&amp;Opnieuw proberen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="817"/>
+        <location filename="../app/desktop/main_window.cpp" line="824"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="827"/>
+        <location filename="../app/desktop/main_window.cpp" line="834"/>
         <source>No project open</source>
         <translation>Geen project geopend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="831"/>
+        <location filename="../app/desktop/main_window.cpp" line="838"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="831"/>
+        <location filename="../app/desktop/main_window.cpp" line="838"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="833"/>
+        <location filename="../app/desktop/main_window.cpp" line="840"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — alleen-lezen, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="835"/>
+        <location filename="../app/desktop/main_window.cpp" line="842"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — coderen als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="839"/>
+        <location filename="../app/desktop/main_window.cpp" line="846"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lezen als %1 · %2 · alleen-lezenbestand: er wordt niets opgeslagen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="842"/>
+        <location filename="../app/desktop/main_window.cpp" line="849"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Coderen als %1 · %2 · coördinator: alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="843"/>
+        <location filename="../app/desktop/main_window.cpp" line="850"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Coderen als %1 · %2 · blind: alleen je eigen fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="853"/>
+        <location filename="../app/desktop/main_window.cpp" line="858"/>
+        <source>The comparison window lists its own keys with %1.</source>
+        <translation>Het vergelijkingsvenster toont zijn eigen toetsen met %1.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="862"/>
         <source>Keyboard shortcuts</source>
         <translation>Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="777"/>
+        <location filename="../app/desktop/main_window.cpp" line="784"/>
         <source>Open project</source>
         <translation>Project openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="688"/>
-        <location filename="../app/desktop/main_window.cpp" line="777"/>
+        <location filename="../app/desktop/main_window.cpp" line="695"/>
+        <location filename="../app/desktop/main_window.cpp" line="784"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-projecten (*.fourfold)</translation>
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="137"/>
-        <location filename="../app/desktop/main_window.cpp" line="703"/>
-        <location filename="../app/desktop/main_window.cpp" line="781"/>
-        <location filename="../app/desktop/main_window.cpp" line="790"/>
+        <location filename="../app/desktop/main_window.cpp" line="710"/>
+        <location filename="../app/desktop/main_window.cpp" line="788"/>
+        <location filename="../app/desktop/main_window.cpp" line="797"/>
         <source>Cannot open project</source>
         <translation>Project kan niet worden geopend</translation>
     </message>
@@ -10218,8 +10379,8 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
     </message>
     <message>
         <location filename="../app/desktop/study/progress_board_window.cpp" line="87"/>
-        <source>Krippendorff&apos;s alpha on the articles the coder finished: in training with the lead&apos;s master coding, in the other phases the mean over every coder who finished the same articles. ✓ at .800 or more, ~ from .667 (tentative), ✗ below.</source>
-        <translation>Krippendorffs alfa over de artikelen die de codeur heeft afgerond: in de training met de mastercodering van de coördinator, in de andere fasen het gemiddelde over alle codeurs die dezelfde artikelen hebben afgerond. ✓ bij .800 of hoger, ~ vanaf .667 (voorlopig), ✗ daaronder.</translation>
+        <source>Krippendorff&apos;s alpha on the articles the coder finished: in training with the lead&apos;s master coding, in the other phases the mean over every coder who finished the same articles. ✓ at 0.800 or more, ~ from 0.667 (tentative), ✗ below.</source>
+        <translation>Krippendorffs alfa over de artikelen die de codeur heeft afgerond: in de training met de mastercodering van de coördinator, in de andere fasen het gemiddelde over alle codeurs die dezelfde artikelen hebben afgerond. ✓ bij 0.800 of hoger, ~ vanaf 0.667 (voorlopig), ✗ daaronder.</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/progress_board_window.cpp" line="94"/>
@@ -10326,231 +10487,231 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::ReliabilityWindow</name>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="115"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="123"/>
         <source>0.800: rely on the variable</source>
         <translation>0.800: op de variabele vertrouwen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="116"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="125"/>
         <source>0.667: tentative conclusions only</source>
         <translation>0.667: alleen voorlopige conclusies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="156"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="575"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="678"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="174"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="593"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="696"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="158"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="176"/>
         <source>reliable (≥ 0.800)</source>
         <translation>betrouwbaar (≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="160"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="178"/>
         <source>tentative (≥ 0.667)</source>
         <translation>voorlopig (≥ 0.667)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="164"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="182"/>
         <source>unreliable (&lt; 0.667)</source>
         <translation>onbetrouwbaar (&lt; 0.667)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="174"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="192"/>
         <source>Reliability — %1</source>
         <translation>Betrouwbaarheid — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="212"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="230"/>
         <source>Table</source>
         <translation>Tabel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="226"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="244"/>
         <source>Alpha without each coder</source>
         <translation>Alfa zonder elke codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="229"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="707"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="247"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="725"/>
         <source>Alpha without each article (the costliest first)</source>
         <translation>Alfa zonder elk artikel (het duurste eerst)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="233"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="251"/>
         <source>Change = alpha without it − alpha with everything: positive means leaving it out raises alpha, so it costs reliability (leave-one-out, common practice). A diagnostic for training and codebook work, not a licence to report the higher figure.</source>
         <translation>Verandering = alfa zonder − alfa met alles: positief betekent dat weglaten de alfa verhoogt, het kost dus betrouwbaarheid (leave-one-out, gangbare praktijk). Een diagnose voor training en codeboekwerk, geen vrijbrief om het hogere cijfer te rapporteren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="238"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="256"/>
         <source>Boundary habits on matched spans</source>
         <translation>Grensgewoonten bij gekoppelde fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="241"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="259"/>
         <source>Each span against the other coder&apos;s span of the same function that overlaps it most; differences are this coder&apos;s minus the other&apos;s, in characters (code points). Systematic: the mean differs from 0 by more than two standard errors over at least 5 matches (a rough screen, common practice).</source>
         <translation>Elk fragment tegenover het fragment van de andere codeur met dezelfde functie dat het het meest overlapt; verschillen zijn die van deze codeur min die van de ander, in tekens (codepunten). Systematisch: het gemiddelde wijkt meer dan twee standaardfouten van 0 af over ten minste 5 koppelingen (een ruwe screening, gangbare praktijk).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="248"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="266"/>
         <source>Diagnostics</source>
         <translation>Diagnose</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="253"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="271"/>
         <source>Alpha per function</source>
         <translation>Alfa per functie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="255"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="273"/>
         <source>Coder pairs</source>
         <translation>Codeursparen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="257"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="275"/>
         <source>Function confusion</source>
         <translation>Functieverwarring</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="260"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="278"/>
         <source>Alpha over time</source>
         <translation>Alfa door de tijd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="285"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="303"/>
         <source>Article item</source>
         <translation>Artikelitem</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="286"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="304"/>
         <source>Paragraph</source>
         <translation>Alinea</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="287"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="305"/>
         <source>Sentence</source>
         <translation>Zin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="288"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="306"/>
         <source>Token (word)</source>
         <translation>Token (woord)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="289"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="307"/>
         <source>Continuum (spans, unitizing alpha)</source>
         <translation>Continuüm (fragmenten, unitizing-alfa)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="294"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="312"/>
         <source>&amp;Unit</source>
         <translation>&amp;Eenheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="300"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="318"/>
         <source>&amp;Item</source>
         <translation>&amp;Item</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="316"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="334"/>
         <source>Functions</source>
         <translation>Functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="335"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="353"/>
         <source>&amp;Coders</source>
         <translation>&amp;Codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="338"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
         <source>All phases</source>
         <translation>Alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="342"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
         <source>&amp;Phase</source>
         <translation>&amp;Fase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="344"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="362"/>
         <source>Gold joins as a coder</source>
         <translation>Gouden standaard als codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="346"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="364"/>
         <source>Count articles in progress</source>
         <translation>Artikelen in bewerking meetellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="347"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
         <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
         <translation>Standaard telt een artikel van een codeur pas mee als de codeur het als klaar gemarkeerd heeft; vink aan om ook artikelen in bewerking mee te tellen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="355"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="373"/>
         <source>none</source>
         <translation>geen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="356"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="374"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="359"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="377"/>
         <source>Batches of articles</source>
         <translation>Groepen artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="360"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="378"/>
         <source>Weeks</source>
         <translation>Weken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="361"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="379"/>
         <source>&amp;Drift by</source>
         <translation>&amp;Drift per</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="365"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="383"/>
         <source> articles</source>
         <translation> artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="366"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="384"/>
         <source>Batch &amp;size</source>
         <translation>Groeps&amp;grootte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="368"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="386"/>
         <source>Co&amp;mpute</source>
         <translation>Be&amp;rekenen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="370"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="388"/>
         <source>Cancel</source>
         <translation>Annuleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="478"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="496"/>
         <source>Computing…</source>
         <translation>Bezig met berekenen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="488"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="506"/>
         <source>Cancelling after the current step…</source>
         <translation>Annuleren na de huidige stap…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="505"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="523"/>
         <source>Cancelled; the results shown are from before.</source>
         <translation>Geannuleerd; de getoonde resultaten zijn van eerder.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="510"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="528"/>
         <source>%n coder(s) compared.</source>
         <translation>
             <numerusform>%n codeur vergeleken.</numerusform>
@@ -10558,282 +10719,282 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="525"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="543"/>
         <source>Chosen functions (sets)</source>
         <translation>Functieverzameling</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="562"/>
         <source>Alpha</source>
         <translation>Alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="201"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="219"/>
         <source>Alpha: Krippendorff&apos;s alpha, coincidence form (Krippendorff 2011). Interval: 95% bootstrap, units resampled (percentile; the pair interval of Hayes &amp; Krippendorff 2007 is in the report, and it is too narrow with more than two coders); q(α &lt; 0.800): share of replicates below 0.800. Verdict: Krippendorff (2004, §12.2). Minimum values: Krippendorff (2004, §11.4) after Bloch &amp; Kraemer (1989), for the rarest value at p = 0.05. Cohen&apos;s kappa per pair over the units both coded (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) needs every coder on every unit.</source>
         <translation>Alfa: Krippendorffs alfa, coïncidentievorm (Krippendorff 2011). Interval: 95%-bootstrap, eenheden opnieuw getrokken (percentiel; het paarinterval van Hayes &amp; Krippendorff 2007 staat in het rapport en is te smal bij meer dan twee codeurs); q(α &lt; 0.800): aandeel replicaties onder 0.800. Oordeel: Krippendorff (2004, §12.2). Benodigde waarden: Krippendorff (2004, §11.4) naar Bloch &amp; Kraemer (1989), voor de zeldzaamste waarde bij p = 0.05. Cohens kappa per paar over de eenheden die beide codeerden (Cohen 1960); Fleiss&apos; kappa (Fleiss 1971) vereist elke codeur op elke eenheid.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="562"/>
         <source>q(α &lt; 0.800)</source>
         <translation>q(α &lt; 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="544"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="562"/>
         <source>95% interval (units resampled)</source>
         <translation>95%-interval (eenheden opnieuw getrokken)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="563"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
         <source>Verdict</source>
         <translation>Oordeel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="563"/>
         <source>Percent agreement</source>
         <translation>Procentuele overeenstemming</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="545"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="563"/>
         <source>Fleiss&apos; kappa</source>
         <translation>Fleiss&apos; kappa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="549"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="567"/>
         <source>Cohen&apos;s kappa %1 × %2</source>
         <translation>Cohens kappa %1 × %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="569"/>
         <source>Pairable values</source>
         <translation>Paarbare waarden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="569"/>
         <source>Pairable units</source>
         <translation>Paarbare eenheden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="551"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="569"/>
         <source>Rarest value</source>
         <translation>Zeldzaamste waarde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="570"/>
         <source>Minimum values (α ≥ 0.800)</source>
         <translation>Benodigde waarden (α ≥ 0.800)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="552"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="570"/>
         <source>Sample</source>
         <translation>Steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="557"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="667"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="575"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="685"/>
         <source>Statistic</source>
         <translation>Statistiek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="583"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="601"/>
         <source>%1, %2 replicates, seed %3</source>
         <translation>%1, %2 replicaties, seed %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="609"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="627"/>
         <source>Fleiss&apos; kappa needs every coder on every unit; some cells are missing.</source>
         <translation>Fleiss&apos; kappa vereist elke codeur op elke eenheid; er ontbreken cellen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="627"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="645"/>
         <source>below the minimum</source>
         <translation>onder het minimum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="628"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="646"/>
         <source>large enough</source>
         <translation>groot genoeg</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="644"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="662"/>
         <source>The sample is smaller than Krippendorff&apos;s minimum for the rarest value (alpha ≥ 0.800 at p = 0.05) in: %1. Code more units before relying on these figures.</source>
         <translation>De steekproef is kleiner dan Krippendorffs minimum voor de zeldzaamste waarde (alfa ≥ 0.800 bij p = 0.05) in: %1. Codeer meer eenheden voordat je op deze cijfers vertrouwt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
         <source>Unitizing alpha</source>
         <translation>Unitizing-alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="663"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="681"/>
         <source>Observed disagreement D_o</source>
         <translation>Waargenomen onenigheid D_o</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="682"/>
         <source>Expected disagreement D_e</source>
         <translation>Verwachte onenigheid D_e</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="664"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="682"/>
         <source>Continuum</source>
         <translation>Continuüm</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="669"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="687"/>
         <source>All four, pooled</source>
         <translation>Alle vier, samengenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="686"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="704"/>
         <source>%1 articles, %2 characters</source>
         <translation>%1 artikelen, %2 tekens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="704"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="722"/>
         <source>Alpha without each article: the %1 costliest of %2</source>
         <translation>Alfa zonder elk artikel: de %1 duurste van %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="709"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="727"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="709"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="892"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="727"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="757"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="910"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="711"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="729"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="730"/>
         <source>Alpha without</source>
         <translation>Alfa zonder</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="730"/>
         <source>Change</source>
         <translation>Verandering</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="712"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="730"/>
         <source>Units</source>
         <translation>Eenheden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="757"/>
         <source>Matches</source>
         <translation>Koppelingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="757"/>
         <source>Length ± SE</source>
         <translation>Lengte ± SE</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="739"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="757"/>
         <source>Start</source>
         <translation>Begin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="758"/>
         <source>End</source>
         <translation>Einde</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="758"/>
         <source>Longer</source>
         <translation>Langer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="758"/>
         <source>Shorter</source>
         <translation>Korter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="740"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="758"/>
         <source>Habit</source>
         <translation>Gewoonte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="762"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="780"/>
         <source>spans systematically longer</source>
         <translation>fragmenten systematisch langer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="763"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="781"/>
         <source>spans systematically shorter</source>
         <translation>fragmenten systematisch korter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="776"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="794"/>
         <source>Alpha per function, with 95% bootstrap intervals</source>
         <translation>Alfa per functie, met 95%-bootstrapintervallen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="780"/>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="943"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="798"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="961"/>
         <source>Krippendorff&apos;s alpha</source>
         <translation>Krippendorffs alfa</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="800"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="818"/>
         <source>pooled</source>
         <translation>samengenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="884"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="902"/>
         <source>Cohen&apos;s kappa of each pair of coders over the units both coded (%1). Darker: higher agreement; hatched: not defined.</source>
         <translation>Cohens kappa van elk paar codeurs over de eenheden die beide codeerden (%1). Donkerder: hogere overeenstemming; gearceerd: niet gedefinieerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="889"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="907"/>
         <source>Continuum units have no per-pair kappa; see the span agreement in the function confusion.</source>
         <translation>Continuümeenheden hebben geen kappa per paar; zie de overeenstemming van fragmenten in de functieverwarring.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="906"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="924"/>
         <source>nothing</source>
         <translation>niets</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="925"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="943"/>
         <source>A coder&apos;s span</source>
         <translation>Fragment van een codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="925"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="943"/>
         <source>What another coder gave it</source>
         <translation>Wat een andere codeur eraan gaf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="926"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="944"/>
         <source>Each span of each coder against the best-overlapping span of every other coder (both directions of each pair). Darker: a larger share of the row. &quot;nothing&quot;: no overlapping span.</source>
         <translation>Elk fragment van elke codeur tegenover het best overlappende fragment van elke andere codeur (beide richtingen van elk paar). Donkerder: een groter deel van de rij. ‘niets’: geen overlappend fragment.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="938"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="956"/>
         <source>Alpha by week of first coding — %1</source>
         <translation>Alfa per week van eerste codering — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="939"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="957"/>
         <source>Alpha by batch of articles, in coding order — %1</source>
         <translation>Alfa per groep artikelen, in codeervolgorde — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="981"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="999"/>
         <source>ISO week</source>
         <translation>ISO-week</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/reliability_window.cpp" line="981"/>
+        <location filename="../app/desktop/reliability/reliability_window.cpp" line="999"/>
         <source>articles (in coding order)</source>
         <translation>artikelen (in codeervolgorde)</translation>
     </message>
@@ -11098,42 +11259,42 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::SpanEditor</name>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="93"/>
+        <location filename="../app/desktop/span_editor.cpp" line="94"/>
         <source>judges</source>
         <translation>beoordeelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="93"/>
+        <location filename="../app/desktop/span_editor.cpp" line="94"/>
         <source>judged by</source>
         <translation>beoordeeld door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="95"/>
+        <location filename="../app/desktop/span_editor.cpp" line="96"/>
         <source>addresses</source>
         <translation>behandelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="95"/>
+        <location filename="../app/desktop/span_editor.cpp" line="96"/>
         <source>addressed by</source>
         <translation>behandeld door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="96"/>
+        <location filename="../app/desktop/span_editor.cpp" line="97"/>
         <source>%1 →</source>
         <translation>%1 →</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="96"/>
+        <location filename="../app/desktop/span_editor.cpp" line="97"/>
         <source>← %1</source>
         <translation>← %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="105"/>
+        <location filename="../app/desktop/span_editor.cpp" line="106"/>
         <source>Span editor</source>
         <translation>Fragmenteditor</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="111"/>
+        <location filename="../app/desktop/span_editor.cpp" line="112"/>
         <source>No span selected.
 
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
@@ -11142,144 +11303,144 @@ Click a span in the text or on the frame card to edit it, or select text and pre
 Klik op een fragment in de tekst of op de framekaart om het te bewerken, of selecteer tekst en druk op 1&#xa0;tot&#xa0;en&#xa0;met&#xa0;4 om die te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="177"/>
+        <location filename="../app/desktop/span_editor.cpp" line="178"/>
         <source>Another coder&apos;s span: shown, not editable.</source>
         <translation>Fragment van een andere codeur: zichtbaar, niet bewerkbaar.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="194"/>
+        <location filename="../app/desktop/span_editor.cpp" line="195"/>
         <source>Function: %1</source>
         <translation>Functie: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="198"/>
+        <location filename="../app/desktop/span_editor.cpp" line="199"/>
         <source>&amp;Function:</source>
         <translation>&amp;Functie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="205"/>
+        <location filename="../app/desktop/span_editor.cpp" line="206"/>
         <source>Note</source>
         <translation>Notitie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="209"/>
+        <location filename="../app/desktop/span_editor.cpp" line="210"/>
         <source>&amp;Note:</source>
         <translation>&amp;Notitie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="214"/>
+        <location filename="../app/desktop/span_editor.cpp" line="215"/>
         <source>Confidence</source>
         <translation>Zekerheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="218"/>
-        <location filename="../app/desktop/span_editor.cpp" line="365"/>
-        <location filename="../app/desktop/span_editor.cpp" line="373"/>
+        <location filename="../app/desktop/span_editor.cpp" line="219"/>
+        <location filename="../app/desktop/span_editor.cpp" line="366"/>
+        <location filename="../app/desktop/span_editor.cpp" line="374"/>
         <source>not set</source>
         <translation>niet opgegeven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="221"/>
+        <location filename="../app/desktop/span_editor.cpp" line="222"/>
         <source>How sure you are of this span, from 0 (a guess) to 1 (certain).</source>
         <translation>Hoe zeker je bent van dit fragment, van 0 (een gok) tot 1 (zeker).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="222"/>
+        <location filename="../app/desktop/span_editor.cpp" line="223"/>
         <source>&amp;Confidence:</source>
         <translation>&amp;Zekerheid:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="231"/>
+        <location filename="../app/desktop/span_editor.cpp" line="232"/>
         <source>Links</source>
         <translation>Koppelingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="233"/>
+        <location filename="../app/desktop/span_editor.cpp" line="234"/>
         <source>Links start from an evaluation (to the cause it judges) or from a remedy (to the problem it addresses).</source>
         <translation>Koppelingen beginnen bij een evaluatie (naar de oorzaak die ze beoordeelt) of bij een oplossing (naar het probleem dat ze behandelt).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="243"/>
+        <location filename="../app/desktop/span_editor.cpp" line="244"/>
         <source>Span to link to</source>
         <translation>Fragment om aan te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="247"/>
+        <location filename="../app/desktop/span_editor.cpp" line="248"/>
         <source>&amp;Link</source>
         <translation>&amp;Koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="248"/>
+        <location filename="../app/desktop/span_editor.cpp" line="249"/>
         <source>Link to the chosen span</source>
         <translation>Koppelen aan het gekozen fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="260"/>
+        <location filename="../app/desktop/span_editor.cpp" line="261"/>
         <source>Links of this span</source>
         <translation>Koppelingen van dit fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="268"/>
+        <location filename="../app/desktop/span_editor.cpp" line="269"/>
         <source>No links yet.</source>
         <translation>Nog geen koppelingen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="271"/>
+        <location filename="../app/desktop/span_editor.cpp" line="272"/>
         <source>&amp;Remove link</source>
         <translation>Koppeling &amp;verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="272"/>
+        <location filename="../app/desktop/span_editor.cpp" line="273"/>
         <source>Remove the chosen link</source>
         <translation>De gekozen koppeling verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="384"/>
+        <location filename="../app/desktop/span_editor.cpp" line="385"/>
         <source>%1:</source>
         <translation>%1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="438"/>
+        <location filename="../app/desktop/span_editor.cpp" line="439"/>
         <source>No note.</source>
         <translation>Geen notitie.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="438"/>
+        <location filename="../app/desktop/span_editor.cpp" line="439"/>
         <source>Why this span, doubts, a question for the lead…</source>
         <translation>Waarom dit fragment, twijfels, een vraag voor de coördinator…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="456"/>
+        <location filename="../app/desktop/span_editor.cpp" line="457"/>
         <source>&amp;Judges:</source>
         <translation>Be&amp;oordeelt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="456"/>
+        <location filename="../app/desktop/span_editor.cpp" line="457"/>
         <source>&amp;Addresses:</source>
         <translation>Behan&amp;delt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="458"/>
+        <location filename="../app/desktop/span_editor.cpp" line="459"/>
         <source>no cause span to link</source>
         <translation>geen oorzaakfragment om te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="458"/>
+        <location filename="../app/desktop/span_editor.cpp" line="459"/>
         <source>no problem span to link</source>
         <translation>geen probleemfragment om te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="488"/>
+        <location filename="../app/desktop/span_editor.cpp" line="489"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="504"/>
+        <location filename="../app/desktop/span_editor.cpp" line="505"/>
         <source>a span not shown here</source>
         <translation>een fragment dat hier niet wordt getoond</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="505"/>
+        <location filename="../app/desktop/span_editor.cpp" line="506"/>
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>
@@ -11287,252 +11448,252 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
 <context>
     <name>fourfold::StudyDesignWindow</name>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="112"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="113"/>
         <source>Study design — %1</source>
         <translation>Onderzoeksopzet — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="114"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="115"/>
         <source>Plan who codes what: draw the reliability sample that every reliability coder codes, deal the rest of the articles, and keep the codebook&apos;s versions in view. Nothing is written until you commit a plan.</source>
         <translation>Plan wie wat codeert: trek de betrouwbaarheidssteekproef die elke betrouwbaarheidscodeur codeert, verdeel de overige artikelen en houd de versies van het codeboek in het oog. Er wordt niets weggeschreven totdat je een plan vastlegt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="123"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="124"/>
         <source>Reliability sample</source>
         <translation>Betrouwbaarheidssteekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="124"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="125"/>
         <source>Assign the rest</source>
         <translation>De rest toewijzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="125"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="126"/>
         <source>Assignments</source>
         <translation>Toewijzingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="126"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="127"/>
         <source>Codebook versions</source>
         <translation>Codeboekversies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="165"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="166"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="165"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="166"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="195"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="196"/>
         <source>The seed must be a whole number from 0 to 18446744073709551615; &quot;%1&quot; is not.</source>
         <translation>De seed moet een geheel getal van 0 tot 18446744073709551615 zijn; ‘%1’ is dat niet.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="215"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="320"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="216"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="326"/>
         <source>Draw</source>
         <translation>Trekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="221"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="222"/>
         <source>A pilot sample is coded before the codebook is final and is not part of the reliability sample.</source>
         <translation>Een pilotsteekproef wordt gecodeerd voordat het codeboek definitief is en hoort niet bij de betrouwbaarheidssteekproef.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="223"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="753"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="224"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="759"/>
         <source>Phase:</source>
         <translation>Fase:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="228"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="755"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="229"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="761"/>
         <source>Articles:</source>
         <translation>Artikelen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="230"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="231"/>
         <source>Share of the frame:</source>
         <translation>Aandeel van het steekproefkader:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="250"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="254"/>
         <source>Size:</source>
         <translation>Omvang:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="254"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="258"/>
         <source>Simple random sample</source>
         <translation>Enkelvoudige aselecte steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="255"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="259"/>
         <source>Stratified by outlet</source>
         <translation>Gestratificeerd naar medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="256"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="260"/>
         <source>Stratified by language</source>
         <translation>Gestratificeerd naar taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="257"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="261"/>
         <source>Stratified by topic</source>
         <translation>Gestratificeerd naar onderwerp</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="258"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="262"/>
         <source>Stratified draws allocate the sample to each group in proportion to its size in the frame.</source>
         <translation>Bij gestratificeerde trekkingen krijgt elke groep een deel van de steekproef naar verhouding van haar omvang in het kader.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="260"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="264"/>
         <source>Method:</source>
         <translation>Methode:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="262"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="266"/>
         <source>Leave near copies out of the sampling frame</source>
         <translation>Bijna-kopieën uit het steekproefkader weglaten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="265"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="269"/>
         <source>An article found at import to be a near copy of an older one (the same story with small edits) is not drawn; the older article stays in the frame.</source>
         <translation>Een artikel dat bij de import is herkend als bijna-kopie van een ouder artikel (hetzelfde verhaal met kleine wijzigingen), wordt niet getrokken; het oudere artikel blijft in het steekproefkader.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="274"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="594"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="278"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="600"/>
         <source>Seed</source>
         <translation>Seed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="276"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="280"/>
         <source>New seed</source>
         <translation>Nieuwe seed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="281"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="596"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="285"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="602"/>
         <source>Seed:</source>
         <translation>Seed:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="282"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="286"/>
         <source>The seed is recorded with the draw: the same seed on the same project draws the same articles on any computer.</source>
         <translation>De seed wordt bij de trekking vastgelegd: dezelfde seed op hetzelfde project trekt op elke computer dezelfde artikelen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="288"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="292"/>
         <source>Reliability coders</source>
         <translation>Betrouwbaarheidscodeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="290"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="294"/>
         <source>Coded by all of:</source>
         <translation>Gecodeerd door allen van:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="292"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="296"/>
         <source>Minimum sample (Krippendorff)</source>
         <translation>Minimale steekproef (Krippendorff)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="300"/>
-        <source>The smallest alpha you would still accept: .800 for firm conclusions, .667 for tentative ones (Krippendorff).</source>
-        <translation>De kleinste alfa die je nog zou accepteren: .800 voor stellige conclusies, .667 voor voorlopige (Krippendorff).</translation>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="305"/>
+        <source>The smallest alpha you would still accept: 0.800 for firm conclusions, 0.667 for tentative ones (Krippendorff).</source>
+        <translation>De kleinste alfa die je nog zou accepteren: 0.800 voor stellige conclusies, 0.667 voor voorlopige (Krippendorff).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="302"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="307"/>
         <source>α_min:</source>
         <translation>α_min:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="307"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="312"/>
         <source>Significance level:</source>
         <translation>Significantieniveau:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="314"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="320"/>
         <source>The expected share of the rarest value: 0.25 when four values are equally frequent.</source>
         <translation>Het verwachte aandeel van de zeldzaamste waarde: 0.25 als vier waarden even vaak voorkomen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="316"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="322"/>
         <source>Rarest value&apos;s share:</source>
         <translation>Aandeel zeldzaamste waarde:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="322"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="328"/>
         <source>Draw the sample and show it; nothing is written yet.</source>
         <translation>De steekproef trekken en tonen; er wordt nog niets weggeschreven.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="323"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="329"/>
         <source>Commit the draw</source>
         <translation>Trekking vastleggen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="325"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="331"/>
         <source>Assign the drawn articles to every chosen coder and record the draw with its seed.</source>
         <translation>De getrokken artikelen aan elke gekozen codeur toewijzen en de trekking met haar seed vastleggen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="354"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
         <source>Stratum</source>
         <translation>Stratum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="354"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
         <source>In the frame</source>
         <translation>In het kader</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="354"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
         <source>Drawn</source>
         <translation>Getrokken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="356"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="362"/>
         <source>Drawn articles:</source>
         <translation>Getrokken artikelen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="359"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="365"/>
         <source>Drawn articles</source>
         <translation>Getrokken artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="414"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="420"/>
         <source>&lt;b&gt;No sample is drawn yet for the phase %1.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
         <translation>&lt;b&gt;Er is nog geen steekproef voor de fase %1 getrokken.&lt;/b&gt; Kies de omvang, methode, seed en codeurs en druk dan op &lt;i&gt;Trekken&lt;/i&gt; om de steekproef te zien en of die groot genoeg is.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="474"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="480"/>
         <source>simple random sample</source>
         <translation>enkelvoudige aselecte steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="476"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="482"/>
         <source>stratified by outlet</source>
         <translation>gestratificeerd naar medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="478"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="484"/>
         <source>stratified by language</source>
         <translation>gestratificeerd naar taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="480"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="486"/>
         <source>stratified by topic</source>
         <translation>gestratificeerd naar onderwerp</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="481"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="487"/>
         <source>%n article(s) of a frame of %1, %2, seed %3, coded by %4.</source>
         <translation>
             <numerusform>%n artikel uit een kader van %1, %2, seed %3, gecodeerd door %4.</numerusform>
@@ -11540,42 +11701,42 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="489"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="495"/>
         <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded and cannot be drawn again.</source>
         <translation>&lt;b&gt;Steekproef voor fase %1 getrokken op %2.&lt;/b&gt; %3 De trekking is vastgelegd en kan niet opnieuw worden getrokken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="495"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="501"/>
         <source>&lt;b&gt;Planned draw, not yet committed.&lt;/b&gt; %1 Press &lt;i&gt;Commit the draw&lt;/i&gt; to assign it.</source>
         <translation>&lt;b&gt;Geplande trekking, nog niet vastgelegd.&lt;/b&gt; %1 Druk op &lt;i&gt;Trekking vastleggen&lt;/i&gt; om haar toe te wijzen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="504"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="510"/>
         <source>No minimum sample can be computed for these settings.</source>
         <translation>Voor deze instellingen kan geen minimale steekproef worden berekend.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="506"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="512"/>
         <source>&lt;b&gt;Krippendorff&apos;s minimum: %1 values&lt;/b&gt; per variable for α_min = %2 at p = %3, with the rarest value at %4 %.</source>
         <translation>&lt;b&gt;Krippendorffs minimum: %1 waarden&lt;/b&gt; per variabele voor α_min = %2 bij p = %3, met de zeldzaamste waarde op %4 %.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="515"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
         <source>Unit</source>
         <translation>Eenheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="515"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
         <source>Values the draw delivers</source>
         <translation>Waarden die de trekking oplevert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="519"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="525"/>
         <source>✓ enough</source>
         <translation>✓ genoeg</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="520"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="526"/>
         <source>✗ %n short</source>
         <translation>
             <numerusform>✗ %n te weinig</numerusform>
@@ -11583,103 +11744,103 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="528"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="534"/>
         <source>Article-level items</source>
         <translation>Items op artikelniveau</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="529"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="535"/>
         <source>Paragraphs</source>
         <translation>Alinea&apos;s</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="530"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="536"/>
         <source>Sentences</source>
         <translation>Zinnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="533"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="539"/>
         <source>Values are units × coders. For spans, count the codings of each function: a rare function (often the remedy) may need a larger or stratified sample.</source>
         <translation>Waarden zijn eenheden × codeurs. Tel voor fragmenten de coderingen van elke functie: een zeldzame functie (vaak de oplossing) kan een grotere of gestratificeerde steekproef nodig hebben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="570"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="576"/>
         <source>Deal the rest</source>
         <translation>De rest verdelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="572"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="578"/>
         <source>Every article with no assignment yet goes to production coding, shuffled with the seed and dealt in turn.</source>
         <translation>Elk artikel zonder toewijzing gaat naar de hoofdcodering, geschud met de seed en om de beurt uitgedeeld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="578"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="584"/>
         <source>Single-coded: one coder per article</source>
         <translation>Enkel gecodeerd: één codeur per artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="581"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="587"/>
         <source>Double-coded: two coders per article, pairs rotating</source>
         <translation>Dubbel gecodeerd: twee codeurs per artikel, wisselende paren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="586"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="592"/>
         <source>Coding:</source>
         <translation>Codering:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="589"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="595"/>
         <source>Production coders</source>
         <translation>Codeurs hoofdcodering</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="591"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="761"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="597"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="767"/>
         <source>Coders:</source>
         <translation>Codeurs:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="598"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="604"/>
         <source>Plan</source>
         <translation>Plannen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="600"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="606"/>
         <source>Assign</source>
         <translation>Toewijzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="620"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="734"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="620"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="723"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="734"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="729"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="639"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="645"/>
         <source>Press &lt;i&gt;Plan&lt;/i&gt; to see who would code which article.</source>
         <translation>Druk op &lt;i&gt;Plannen&lt;/i&gt; om te zien wie welk artikel zou coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="679"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="685"/>
         <source>Every article is assigned already: there is no rest to deal.</source>
         <translation>Elk artikel is al toegewezen: er is geen rest te verdelen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="684"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="690"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="685"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="691"/>
         <source>&lt;b&gt;Planned, not yet assigned:&lt;/b&gt; %n article(s); load per coder %1. Press &lt;i&gt;Assign&lt;/i&gt; to write the plan.</source>
         <translation>
             <numerusform>&lt;b&gt;Gepland, nog niet toegewezen:&lt;/b&gt; %n artikel; belasting per codeur %1. Druk op &lt;i&gt;Toewijzen&lt;/i&gt; om het plan weg te schrijven.</numerusform>
@@ -11687,163 +11848,163 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="707"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="713"/>
         <source>The rest is assigned.</source>
         <translation>De rest is toegewezen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="722"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="728"/>
         <source>&lt;b&gt;Articles per coder and phase&lt;/b&gt; (done / assigned)</source>
         <translation>&lt;b&gt;Artikelen per codeur en fase&lt;/b&gt; (klaar / toegewezen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="726"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="732"/>
         <source>Total</source>
         <translation>Totaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="733"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="739"/>
         <source>&lt;b&gt;Every assignment&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle toewijzingen&lt;/b&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="734"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Phase</source>
         <translation>Fase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="734"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="743"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="749"/>
         <source>Give articles to coders</source>
         <translation>Artikelen aan codeurs geven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="745"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="751"/>
         <source>Every chosen coder gets every chosen article, e.g. the training articles that the lead has master-coded.</source>
         <translation>Elke gekozen codeur krijgt elk gekozen artikel, bijv. de trainingsartikelen die de coördinator als master heeft gecodeerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="758"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="764"/>
         <source>Articles to give</source>
         <translation>Te geven artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="764"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="770"/>
         <source>Coders to give to</source>
         <translation>Codeurs die ze krijgen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="766"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="772"/>
         <source>Give</source>
         <translation>Geven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="796"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="802"/>
         <source>done</source>
         <translation>klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="797"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="803"/>
         <source>started</source>
         <translation>begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="798"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="804"/>
         <source>not started</source>
         <translation>niet begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="854"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="860"/>
         <source>Every chosen coder has every chosen article in this phase already.</source>
         <translation>Elke gekozen codeur heeft elk gekozen artikel in deze fase al.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="876"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
         <source>Version</source>
         <translation>Versie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="876"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
         <source>Made</source>
         <translation>Gemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="876"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
         <source>By</source>
         <translation>Door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="876"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
         <source>Note</source>
         <translation>Notitie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="880"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="886"/>
         <source>Add a version from a file…</source>
         <translation>Versie uit een bestand toevoegen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="888"/>
         <source>Read a codebook JSON file and store it as the next version, with a note that says what changed and why.</source>
         <translation>Een JSON-codeboekbestand inlezen en als volgende versie opslaan, met een notitie die zegt wat er veranderd is en waarom.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="895"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="901"/>
         <source>Compare version</source>
         <translation>Versie vergelijken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="897"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="903"/>
         <source>with</source>
         <translation>met</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="905"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="911"/>
         <source>Changes between the versions</source>
         <translation>Wijzigingen tussen de versies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="913"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="919"/>
         <source>Only those to re-check</source>
         <translation>Alleen die opnieuw te controleren zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Function</source>
         <translation>Functie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Made under</source>
         <translation>Gemaakt onder</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="917"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
         <source>Re-check</source>
         <translation>Opnieuw controleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="987"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="993"/>
         <source>yes — its function changed</source>
         <translation>ja — de functie is veranderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="987"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="993"/>
         <source>no</source>
         <translation>nee</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="997"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1003"/>
         <source>&lt;b&gt;Every annotation was made under the current version (%1).&lt;/b&gt;</source>
         <translation>&lt;b&gt;Elke annotatie is gemaakt onder de huidige versie (%1).&lt;/b&gt;</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="998"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1004"/>
         <source>&lt;b&gt;%n annotation(s) were made under an older version&lt;/b&gt; than the current one (%1); %2 of them belong to a function whose definition, rules, examples or attributes changed since, and should be re-checked.</source>
         <translation>
             <numerusform>&lt;b&gt;%n annotatie is gemaakt onder een oudere versie&lt;/b&gt; dan de huidige (%1); %2 daarvan hoort bij een functie waarvan de definitie, regels, voorbeelden of kenmerken sindsdien veranderd zijn, en moet opnieuw worden gecontroleerd.</numerusform>
@@ -11851,78 +12012,78 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1013"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1019"/>
         <source>&lt;p&gt;There is only version %1: nothing to compare yet. Add a version when the codebook changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Er is alleen versie %1: nog niets te vergelijken. Voeg een versie toe wanneer het codeboek verandert.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1017"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1023"/>
         <source>&lt;p&gt;Choose two different versions to compare.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Kies twee verschillende versies om te vergelijken.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1026"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1032"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codeboekversie %1 → %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1028"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1034"/>
         <source>&lt;p&gt;No changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Geen wijzigingen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1036"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1042"/>
         <source>added</source>
         <translation>toegevoegd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1040"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1046"/>
         <source>removed</source>
         <translation>verwijderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1044"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1050"/>
         <source>changed</source>
         <translation>gewijzigd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1069"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1075"/>
         <source>item removed:</source>
         <translation>item verwijderd:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1073"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1079"/>
         <source>item added:</source>
         <translation>item toegevoegd:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1077"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1083"/>
         <source>the order changed</source>
         <translation>de volgorde is veranderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1081"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1087"/>
         <source>was:</source>
         <translation>was:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1084"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1090"/>
         <source>now:</source>
         <translation>nu:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1096"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1100"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1102"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1106"/>
         <source>Add a codebook version</source>
         <translation>Een codeboekversie toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1096"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1102"/>
         <source>Codebooks (*.json)</source>
         <translation>Codeboeken (*.json)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1101"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1107"/>
         <source>What changed, and why?</source>
         <translation>Wat is er veranderd, en waarom?</translation>
     </message>
@@ -11991,8 +12152,8 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
     </message>
     <message>
         <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="71"/>
-        <source>Most units carry no function, so &quot;same as the master&quot; is high even when your spans differ; α corrects for that agreement by chance (Krippendorff). Aim for α of .800 or more.</source>
-        <translation>De meeste eenheden dragen geen functie, dus ‘gelijk aan de master’ is hoog, ook als je fragmenten verschillen; α corrigeert voor die toevallige overeenstemming (Krippendorff). Streef naar een α van .800 of meer.</translation>
+        <source>Most units carry no function, so &quot;same as the master&quot; is high even when your spans differ; α corrects for that agreement by chance (Krippendorff). Aim for α of 0.800 or more.</source>
+        <translation>De meeste eenheden dragen geen functie, dus ‘gelijk aan de master’ is hoog, ook als je fragmenten verschillen; α corrigeert voor die toevallige overeenstemming (Krippendorff). Streef naar een α van 0.800 of meer.</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/training_feedback_dialog.cpp" line="85"/>

@@ -7,6 +7,8 @@
 #include "core/extract/position_baseline.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/coding_import.h"
+#include "core/project/edit.h"
+#include "core/project/people.h"
 #include "core/project/project.h"
 
 #include <QCoreApplication>
@@ -64,12 +66,22 @@ Status build(const QString &sourceDir, const QString &target, const QString &fin
         if (!role)
             return fail(ErrorCode::InvalidInput,
                 CliText::tr("%1: a coder's role must be \"coder\" or \"lead\".").arg(studyPath));
-        auto id = project->addCoder(c.value(QLatin1String("name")).toString(),
-            c.value(QLatin1String("pseudonym")).toString(), *role);
+        const QString name = c.value(QLatin1String("name")).toString();
+        const QString pseudonym = c.value(QLatin1String("pseudonym")).toString();
+        if (*role == CoderRole::Lead) {
+            // The demo's lead has no passphrase: whoever first chooses them sets it, as for a
+            // lead of a project from before passphrases (People allows this for the first lead
+            // of a new project only).
+            auto add = People::addLeadWithoutPassphrase(*project, name, pseudonym);
+            if (!add)
+                return std::unexpected(add.error());
+            FOURFOLD_TRY_STATUS(project->apply(**add));
+            continue;
+        }
+        auto id = project->addCoder(name, pseudonym, *role);
         if (!id)
             return std::unexpected(id.error());
-        if (*role == CoderRole::Coder)
-            reliabilityCoders.push_back(*id);
+        reliabilityCoders.push_back(*id);
     }
 
     ImportOptions options;

@@ -1,6 +1,7 @@
 #include "app/desktop/frame_card.h"
 
 #include "app/desktop/function_style.h"
+#include "app/desktop/span_quote.h"
 #include "core/text/offset_map.h"
 
 #include <QAbstractButton>
@@ -90,7 +91,7 @@ public:
     QuoteButton(const QString &quote, QWidget *parent)
         : QAbstractButton(parent)
     {
-        setText(QLocale().quoteString(quote.simplified()));
+        setText(spanQuote(quote.simplified()));
         // The card takes the focus and moves through its quotes itself.
         setFocusPolicy(Qt::NoFocus);
         setCursor(Qt::PointingHandCursor);

@@ -852,14 +852,16 @@ void MainWindow::updateTitle()
 
 void MainWindow::showShortcuts()
 {
-    QString rows;
-    for (const ShortcutRow &r : deskShortcuts())
-        rows += QStringLiteral("<tr><td style='padding-right:18px'><b>%1</b></td><td>%2</td></tr>")
-                    .arg(r.keys.toHtmlEscaped(), r.what.toHtmlEscaped());
+    QString text = shortcutTableHtml(deskShortcuts());
+    if (m_session && m_session->isLead())
+        text += QStringLiteral("<p>%1</p>")
+                    .arg(tr("The comparison window lists its own keys with %1.")
+                             .arg(DeskKeys::shortcuts().toString(QKeySequence::NativeText))
+                             .toHtmlEscaped());
     QMessageBox box(this);
     box.setWindowTitle(tr("Keyboard shortcuts"));
     box.setTextFormat(Qt::RichText);
-    box.setText(QStringLiteral("<table>%1</table>").arg(rows));
+    box.setText(text);
     box.exec();
 }
 

@@ -16,6 +16,15 @@ QString native(const QKeySequence &keys)
     return keys.toString(QKeySequence::NativeText);
 }
 
+// Several sequences of one action, the first one first ("Ctrl+PgDown or Alt+Down").
+QString native(const QList<QKeySequence> &keys)
+{
+    QStringList names;
+    for (const QKeySequence &k : keys)
+        names << native(k);
+    return names.join(ShortcutTableText::tr(" or "));
+}
+
 } // namespace
 
 namespace DeskKeys {
@@ -44,6 +53,58 @@ QKeySequence shortcuts()
     return QKeySequence(Qt::Key_F1);
 }
 } // namespace DeskKeys
+
+namespace CompareKeys {
+QList<QKeySequence> nextDisagreement()
+{
+    return {QKeySequence(Qt::Key_N), QKeySequence(Qt::Key_F8)};
+}
+QList<QKeySequence> previousDisagreement()
+{
+    return {QKeySequence(Qt::Key_P), QKeySequence(Qt::SHIFT | Qt::Key_F8)};
+}
+QList<QKeySequence> nextArticle()
+{
+    // Ctrl+PgDown as on the desk; Alt+Down kept for those whose window manager leaves it alone.
+    return {QKeySequence(Qt::CTRL | Qt::Key_PageDown), QKeySequence(Qt::ALT | Qt::Key_Down)};
+}
+QList<QKeySequence> previousArticle()
+{
+    return {QKeySequence(Qt::CTRL | Qt::Key_PageUp), QKeySequence(Qt::ALT | Qt::Key_Up)};
+}
+QKeySequence resortQueue()
+{
+    return QKeySequence(Qt::Key_F5);
+}
+QKeySequence accept()
+{
+    return QKeySequence(Qt::Key_A);
+}
+QKeySequence merge()
+{
+    return QKeySequence(Qt::Key_M);
+}
+QKeySequence edit()
+{
+    return QKeySequence(Qt::Key_E);
+}
+QKeySequence reject()
+{
+    return QKeySequence(Qt::Key_R);
+}
+QKeySequence withdraw()
+{
+    return QKeySequence(Qt::Key_W);
+}
+QKeySequence acceptAgreed()
+{
+    return QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_A);
+}
+QKeySequence rationale()
+{
+    return QKeySequence(Qt::CTRL | Qt::Key_L);
+}
+} // namespace CompareKeys
 
 std::vector<ShortcutRow> deskShortcuts()
 {
@@ -85,6 +146,49 @@ std::vector<ShortcutRow> deskShortcuts()
         {native(DeskKeys::reliability()), ShortcutTableText::tr("Reliability (leads)")},
         {native(DeskKeys::shortcuts()), ShortcutTableText::tr("This list of keys")},
     };
+}
+
+std::vector<ShortcutRow> comparisonShortcuts()
+{
+    return {
+        {native(CompareKeys::nextDisagreement()),
+            ShortcutTableText::tr("Next undecided disagreement")},
+        {native(CompareKeys::previousDisagreement()),
+            ShortcutTableText::tr("Previous undecided disagreement")},
+        {native(CompareKeys::nextArticle()), ShortcutTableText::tr("Next article in the queue")},
+        {native(CompareKeys::previousArticle()),
+            ShortcutTableText::tr("Previous article in the queue")},
+        {native(CompareKeys::resortQueue()),
+            ShortcutTableText::tr("Re-sort the queue: most undecided disagreements first (the "
+                                  "queue keeps its order while you decide)")},
+        {native(CompareKeys::accept()),
+            ShortcutTableText::tr("Accept the chosen coder's span into gold")},
+        {native(CompareKeys::merge()),
+            ShortcutTableText::tr("Put one span covering the chosen spans into gold")},
+        {native(CompareKeys::edit()),
+            ShortcutTableText::tr("Decide a gold span with a function and boundaries of your own")},
+        {native(CompareKeys::reject()),
+            ShortcutTableText::tr("Record that the chosen spans do not belong in gold")},
+        {native(CompareKeys::withdraw()), ShortcutTableText::tr("Withdraw the chosen gold span")},
+        {native(CompareKeys::acceptAgreed()),
+            ShortcutTableText::tr("Accept every span all coders of the article agree on")},
+        {native(CompareKeys::rationale()),
+            ShortcutTableText::tr("Write the rationale kept with the next decision")},
+        // The window takes every platform binding of undo and redo (QAction::setShortcuts).
+        {native(QKeySequence::keyBindings(QKeySequence::Undo)),
+            ShortcutTableText::tr("Undo the last change")},
+        {native(QKeySequence::keyBindings(QKeySequence::Redo)), ShortcutTableText::tr("Redo")},
+        {native(DeskKeys::shortcuts()), ShortcutTableText::tr("This list of keys")},
+    };
+}
+
+QString shortcutTableHtml(const std::vector<ShortcutRow> &rows)
+{
+    QString html;
+    for (const ShortcutRow &r : rows)
+        html += QStringLiteral("<tr><td style='padding-right:18px'><b>%1</b></td><td>%2</td></tr>")
+                    .arg(r.keys.toHtmlEscaped(), r.what.toHtmlEscaped());
+    return QStringLiteral("<table>%1</table>").arg(html);
 }
 
 } // namespace fourfold

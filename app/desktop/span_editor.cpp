@@ -2,6 +2,7 @@
 
 #include "app/desktop/coding_session.h"
 #include "app/desktop/function_style.h"
+#include "app/desktop/span_quote.h"
 
 #include <QButtonGroup>
 #include <QComboBox>
@@ -78,7 +79,7 @@ QString shortQuote(const QString &quote)
             --cut;
         s = s.left(cut) + QChar(0x2026);
     }
-    return QLocale().quoteString(s);
+    return spanQuote(s);
 }
 
 bool sameContent(const AnnotationContent &a, const AnnotationContent &b)

@@ -88,15 +88,21 @@ void paintAlphaChart(QPainter &p, const std::vector<AlphaChartRow> &rows)
         p.drawText(QRectF(x(v) - 30, plotBottom + 4, 60, 16), Qt::AlignHCenter | Qt::AlignTop,
             QString::number(v, 'f', 1));
     }
-    for (const auto &[value, style, name] :
-        {std::tuple {kAlphaTentative, Qt::DashLine, QStringLiteral("0.667")},
-            std::tuple {kAlphaReliable, Qt::SolidLine, QStringLiteral("0.800")}}) {
-        p.setPen(QPen(QColor(0x55, 0x5B, 0x66), 1.4, style));
-        p.drawLine(QPointF(x(value), plotTop - 6), QPointF(x(value), plotBottom));
-        p.setPen(kInk);
+    // Each line in a shade and pattern of its own (the reliability window's), named at its top:
+    // 0.667 to the left of its line and 0.800 to the right of its, so the two names never run
+    // into each other however close a wide axis puts the lines.
+    for (const auto &[value, colour, style, name, alignment] :
+        {std::tuple {kAlphaTentative, QColor(0x85, 0x8B, 0x94), Qt::DashLine,
+             QStringLiteral("0.667"), Qt::AlignRight},
+            std::tuple {kAlphaReliable, QColor(0x2B, 0x33, 0x40), Qt::SolidLine,
+                QStringLiteral("0.800"), Qt::AlignLeft}}) {
+        p.setPen(QPen(colour, 1.6, style));
+        p.drawLine(QPointF(x(value), plotTop - 8), QPointF(x(value), plotBottom));
+        p.setPen(colour.darker(120));
         p.setFont(chartFont(11, true));
-        p.drawText(
-            QRectF(x(value) - 30, plotTop - 24, 60, 16), Qt::AlignHCenter | Qt::AlignBottom, name);
+        const QRectF box = alignment == Qt::AlignRight ? QRectF(x(value) - 63, plotTop - 24, 60, 16)
+                                                       : QRectF(x(value) + 3, plotTop - 24, 60, 16);
+        p.drawText(box, alignment | Qt::AlignBottom, name);
     }
 
     for (size_t i = 0; i < rows.size(); ++i) {

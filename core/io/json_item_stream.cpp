@@ -203,15 +203,28 @@ Result<QJsonValue> streamJsonItems(
             return fail(ErrorCode::Io,
                 JsonItemStreamText::tr("The file %1 could not be read: %2.")
                     .arg(path, file.errorString()));
-        // "[json.exception.parse_error.101] parse error at line 2, column 12: syntax error ...":
-        // the place is ours already; the reason follows the first ": ".
-        QString reason = QString::fromUtf8(e.what());
-        const qsizetype colon = reason.indexOf(QStringLiteral(": "));
-        if (colon >= 0)
-            reason = reason.mid(colon + 2);
-        return failAt(ErrorCode::InvalidInput, path, source.line,
-            std::max<qint64>(1, source.column),
-            JsonItemStreamText::tr("This is not valid JSON: %1.").arg(reason));
+        // "[json.exception.parse_error.101] parse error at line 2, column 12: syntax error while
+        // parsing value - invalid literal; last read: 'Annotation'": the place is ours already.
+        // The parser's English goes into the cause; the message says in the user's language
+        // what it read last, so that a German line is German throughout.
+        const QString raw = QString::fromUtf8(e.what());
+        const qsizetype lastRead = raw.lastIndexOf(QStringLiteral("last read: '"));
+        QString token = lastRead >= 0 ? raw.mid(lastRead + 12) : QString();
+        if (token.endsWith(QLatin1Char('\'')))
+            token.chop(1);
+        token = token.simplified();
+        QString sentence;
+        if (raw.contains(QLatin1String("unexpected end of input")))
+            sentence = JsonItemStreamText::tr(
+                "This is not valid JSON: the file ends before the JSON is complete.");
+        else if (!token.isEmpty())
+            sentence = JsonItemStreamText::tr("This is not valid JSON at \"%1\".").arg(token);
+        else
+            sentence = JsonItemStreamText::tr("This is not valid JSON.");
+        auto error = failAt(ErrorCode::InvalidInput, path, source.line,
+            std::max<qint64>(1, source.column), sentence);
+        error.error().cause = raw;
+        return error;
     }
     return toQt(root);
 }

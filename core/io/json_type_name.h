@@ -6,7 +6,8 @@
 
 namespace fourfold {
 
-// "null", "boolean", "number", "string", "array", "object" or "undefined".
+// "null", "boolean", "number", "string", "array", "object" or "undefined", in the language of
+// the messages (translated).
 QString jsonTypeName(const QJsonValue &value);
 
 } // namespace fourfold

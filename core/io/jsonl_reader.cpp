@@ -187,7 +187,7 @@ Status readLine(QByteArrayView bytes, const QString &file, qint64 lineNumber, bo
     if (!document.isObject()) {
         return failAt(ErrorCode::InvalidInput, file, lineNumber, 0,
             QCoreApplication::translate("ArticleReader", "expected a JSON object, got %1")
-                .arg(QStringLiteral("array")));
+                .arg(jsonTypeName(QJsonValue(QJsonArray()))));
     }
 
     ImportedArticle article;

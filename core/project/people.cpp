@@ -157,6 +157,19 @@ Result<bool> People::mayAddWithoutLead(const Project &project)
 Result<std::unique_ptr<Edit>> People::add(
     const Project &project, const SignedIn *by, const NewPerson &person)
 {
+    return addPerson(project, by, person, true);
+}
+
+Result<std::unique_ptr<Edit>> People::addLeadWithoutPassphrase(
+    const Project &project, const QString &name, const QString &pseudonym)
+{
+    // Nobody signed in: allowed only while the project has no enabled lead (checkLead).
+    return addPerson(project, nullptr, {name, pseudonym, CoderRole::Lead, QString()}, false);
+}
+
+Result<std::unique_ptr<Edit>> People::addPerson(
+    const Project &project, const SignedIn *by, const NewPerson &person, bool withPassphrase)
+{
     auto all = list(project);
     if (!all)
         return std::unexpected(all.error());
@@ -174,7 +187,7 @@ Result<std::unique_ptr<Edit>> People::add(
             QCoreApplication::translate("People", "The pseudonym \"%1\" is already taken.")
                 .arg(c.pseudonym));
     QString hash;
-    if (c.role == CoderRole::Lead) {
+    if (c.role == CoderRole::Lead && withPassphrase) {
         FOURFOLD_TRY_STATUS(checkNewPassphrase(person.passphrase));
         auto made = hashPassphrase(person.passphrase);
         if (!made)

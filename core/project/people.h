@@ -83,6 +83,12 @@ public:
     // or a lead's passphrase that is too short; Duplicate for a pseudonym in use.
     static Result<std::unique_ptr<Edit>> add(
         const Project &project, const SignedIn *by, const NewPerson &person);
+    // The first lead of a project built from files (fourfold-cli build-sample), without a
+    // passphrase: as a lead of a file from before passphrases, whoever chooses them first sets
+    // it. Allowed only while add() needs nobody signed in (no enabled lead yet, not a coder
+    // copy), so it never adds a lead beside one who has a passphrase; else as add().
+    static Result<std::unique_ptr<Edit>> addLeadWithoutPassphrase(
+        const Project &project, const QString &name, const QString &pseudonym);
     // NotFound for an unknown pseudonym; InvalidArgument for an empty name.
     static Result<std::unique_ptr<Edit>> rename(
         const Project &project, const SignedIn &by, const QString &pseudonym, const QString &name);
@@ -90,6 +96,10 @@ public:
     // when the person already is in that state.
     static Result<std::unique_ptr<Edit>> setDisabled(
         const Project &project, const SignedIn &by, const QString &pseudonym, bool disabled);
+
+private:
+    static Result<std::unique_ptr<Edit>> addPerson(
+        const Project &project, const SignedIn *by, const NewPerson &person, bool withPassphrase);
 };
 
 } // namespace fourfold

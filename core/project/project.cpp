@@ -188,6 +188,13 @@ Result<CoderId> Project::addCoder(const QString &name, const QString &pseudonym,
     if (name.trimmed().isEmpty() || pseudonym.trimmed().isEmpty())
         return fail(
             ErrorCode::InvalidArgument, ProjectText::tr("A coder needs a name and a pseudonym."));
+    // A lead sees every coder's spans: only People adds one, with a passphrase or as the first
+    // lead of a project built from files, so no import or builder makes a lead on its own.
+    if (role == CoderRole::Lead)
+        return fail(ErrorCode::NotAllowed,
+            ProjectText::tr("%1 was not added: a lead is added with a passphrase (Lead → People "
+                            "or fourfold-cli people --add).")
+                .arg(pseudonym.trimmed()));
     auto sp = Savepoint::begin(db());
     if (!sp)
         return std::unexpected(sp.error());

@@ -90,9 +90,9 @@ public:
     Result<std::vector<ArticleId>> searchArticles(const QString &query) const;
 
     // --- coders and codebook --------------------------------------------------------------
-    // Adds a coder for a program building a project (tests, build-sample, imports); Duplicate if
-    // the pseudonym is taken, InvalidArgument if name or pseudonym is empty. A person adding
-    // someone goes through People::add, which checks who asks and takes a lead's passphrase.
+    // Adds a coder for a program building a project (tests, build-sample, W3C import); never a
+    // lead (NotAllowed, nothing written: leads come through People, people.h). Duplicate if the
+    // pseudonym is taken, InvalidArgument if name or pseudonym is empty.
     Result<CoderId> addCoder(const QString &name, const QString &pseudonym, CoderRole role);
     Result<std::vector<Coder>> coders() const;
     Result<std::optional<Coder>> coderByPseudonym(const QString &pseudonym) const;

@@ -183,7 +183,9 @@ Result<ImportReport> Project::importFile(
                 report.added.resize(added);
                 continue;
             }
-            current->reason = read.error().toString();
+            // The translated sentence only: a raw cause (a library's or the system's English) is
+            // left out, as it would mix languages on the report's line.
+            current->reason = read.error().message;
             ++refused;
         }
         if (files.isEmpty())

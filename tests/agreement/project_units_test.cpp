@@ -205,7 +205,7 @@ TEST_CASE("the gold standard can join as one more coder")
 {
     UnitsFixture f;
     auto lead =
-        f.project.addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead);
+        addOlderLeadForTesting(f.project, QStringLiteral("Test lead"), QStringLiteral("L01"));
     REQUIRE(lead);
     AdjudicateSpanEdit gold(
         f.f1, *lead, AnnotationContent {FramingFunction::Problem, {0, 40}, {}, {}, {}}, {}, {});

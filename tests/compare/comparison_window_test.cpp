@@ -5,7 +5,9 @@
 #include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/compare/disagreement_queue_model.h"
 #include "app/desktop/compare/gold_span_dialog.h"
+#include "app/desktop/shortcut_table.h"
 #include "core/project/project.h"
+#include "core/project/testing/older_lead.h"
 #include "core/project/testing/project_database.h"
 #include "core/text/offset_map.h"
 #include "tests/support/db_dump.h"
@@ -16,6 +18,7 @@
 #include <QApplication>
 #include <QFile>
 #include <QJsonObject>
+#include <QLabel>
 #include <QLineEdit>
 #include <QSet>
 #include <QTest>
@@ -260,7 +263,7 @@ TEST_CASE("an empty queue says why and what fills it")
     QTemporaryDir dir;
     auto p = Project::create(dir.filePath(QStringLiteral("empty.fourfold")));
     REQUIRE(p);
-    auto lead = p->addCoder(QStringLiteral("Lotte Lead"), QStringLiteral("L01"), CoderRole::Lead);
+    auto lead = addOlderLeadForTesting(*p, QStringLiteral("Lotte Lead"), QStringLiteral("L01"));
     REQUIRE(lead);
     auto coder = p->coderByPseudonym(QStringLiteral("L01"));
     REQUIRE(coder);
@@ -402,4 +405,99 @@ TEST_CASE("after a decision with a rationale the next key steps on and the queue
     for (const ArticleDisagreement &row : w.queueModel()->rows())
         after.push_back(row.article.id);
     CHECK(after == order);
+}
+
+TEST_CASE("the queue keeps its order through decisions until the lead re-sorts it")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    activate(w);
+    const auto &rows = w.queueModel()->rows();
+    REQUIRE(rows.size() >= 2);
+    const ArticleId article = w.currentArticle();
+    REQUIRE(article == rows.front().article.id);
+    std::vector<ArticleId> order;
+    for (const ArticleDisagreement &row : rows)
+        order.push_back(row.article.id);
+    // Decide the top article's disagreements one by one until it has fewer undecided ones than
+    // the second row: sorted, it would no longer be first.
+    const int below = rows[1].unresolved;
+    int decisions = 0;
+    while (rows.front().unresolved >= below && w.currentPassage() >= 0) {
+        const Passage &p = w.passages()[size_t(w.currentPassage())];
+        REQUIRE_FALSE(p.spans.empty());
+        w.selectSpans({p.spans.front().id});
+        REQUIRE(w.acceptSelected());
+        ++decisions;
+        // Each decision updates the row where it stands: same order, same article open.
+        std::vector<ArticleId> now;
+        for (const ArticleDisagreement &row : rows)
+            now.push_back(row.article.id);
+        CHECK(now == order);
+        CHECK(w.currentArticle() == article);
+        if (!w.nextDisagreement())
+            break;
+    }
+    REQUIRE(decisions > 0);
+    REQUIRE(rows.front().unresolved < below); // the queue is now out of its sort order
+    CHECK(w.queueModel()->rowOf(article) == 0);
+
+    // F5 (from the shortcut table) sorts it again by the rule of disagreementQueue
+    // (disagreements.h: most undecided first, then most disagreements, then title); the article
+    // stays open in its new row.
+    QTest::keyClick(&w, Qt::Key_F5);
+    REQUIRE(rows.size() == order.size());
+    for (size_t i = 1; i < rows.size(); ++i)
+        CHECK(std::tuple(
+                  -rows[i - 1].unresolved, -rows[i - 1].disagreements, rows[i - 1].article.title)
+            <= std::tuple(-rows[i].unresolved, -rows[i].disagreements, rows[i].article.title));
+    CHECK(w.queueModel()->rowOf(article) > 0);
+    CHECK(w.currentArticle() == article);
+    // The same order as a queue computed afresh for the project.
+    auto fresh = disagreementQueue(f.project());
+    REQUIRE(fresh);
+    REQUIRE(fresh->size() == rows.size());
+    for (size_t i = 0; i < rows.size(); ++i)
+        CHECK((*fresh)[i].article.id == rows[i].article.id);
+}
+
+TEST_CASE("the comparison window steps through articles with Ctrl keys and lists every key")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    activate(w);
+    const auto &rows = w.queueModel()->rows();
+    REQUIRE(rows.size() >= 2);
+    REQUIRE(w.currentArticle() == rows[0].article.id);
+    // Ctrl+PgDown / Ctrl+PgUp, as on the desk (common Linux window managers take Alt+arrows).
+    QTest::keyClick(&w, Qt::Key_PageDown, Qt::ControlModifier);
+    CHECK(w.currentArticle() == rows[1].article.id);
+    QTest::keyClick(&w, Qt::Key_PageUp, Qt::ControlModifier);
+    CHECK(w.currentArticle() == rows[0].article.id);
+    // Alt+Down stays as a second key where the window manager leaves it alone.
+    QTest::keyClick(&w, Qt::Key_Down, Qt::AltModifier);
+    CHECK(w.currentArticle() == rows[1].article.id);
+
+    // Every shortcut of every action of the window is in the table F1 shows, spelled the same.
+    QStringList listed;
+    for (const ShortcutRow &row : comparisonShortcuts())
+        listed << row.keys.split(QStringLiteral(" or "));
+    int withKeys = 0;
+    for (QAction *a : w.actions())
+        for (const QKeySequence &k : a->shortcuts()) {
+            if (k.isEmpty())
+                continue;
+            ++withKeys;
+            const QString keys = k.toString(QKeySequence::NativeText);
+            INFO(a->text().toStdString() << " " << keys.toStdString());
+            CHECK(listed.contains(keys));
+        }
+    CHECK(withKeys >= 16);
+    // The hint under the rationale names the article keys of the table, not Alt alone.
+    bool hinted = false;
+    for (QLabel *label : w.findChildren<QLabel *>())
+        if (label->text().startsWith(QStringLiteral("Keys:")))
+            hinted = label->text().contains(
+                CompareKeys::nextArticle().front().toString(QKeySequence::NativeText));
+    CHECK(hinted);
 }

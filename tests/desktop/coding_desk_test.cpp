@@ -6,6 +6,7 @@
 #include "app/desktop/message_bar.h"
 #include "app/desktop/reading_view.h"
 #include "core/project/project.h"
+#include "core/project/testing/older_lead.h"
 #include "core/project/testing/project_database.h"
 #include "core/text/offset_map.h"
 #include "tests/support/test_support.h"
@@ -260,7 +261,7 @@ TEST_CASE("importing from the window reports added, skipped and refused articles
     {
         auto p = Project::create(path);
         REQUIRE(p);
-        REQUIRE(p->addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead));
+        REQUIRE(addOlderLeadForTesting(*p, QStringLiteral("Test lead"), QStringLiteral("L01")));
     }
     MainWindow w;
     REQUIRE(w.openProject(path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));

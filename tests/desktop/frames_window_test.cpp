@@ -9,6 +9,7 @@
 #include "app/desktop/main_window.h"
 #include "app/desktop/message_bar.h"
 #include "core/project/saved_frames.h"
+#include "core/project/testing/older_lead.h"
 #include "core/scoring/frame_input.h"
 #include "tests/support/test_support.h"
 
@@ -193,7 +194,7 @@ TEST_CASE("the Frames window tells what to do when a layer holds too few article
     QTemporaryDir dir;
     auto project = Project::create(dir.filePath(QStringLiteral("empty.fourfold")));
     REQUIRE(project);
-    REQUIRE(project->addCoder(QStringLiteral("Lee Lead"), QStringLiteral("L01"), CoderRole::Lead));
+    REQUIRE(addOlderLeadForTesting(*project, QStringLiteral("Lee Lead"), QStringLiteral("L01")));
     auto lead = project->coderByPseudonym(QStringLiteral("L01"));
     REQUIRE(lead);
     REQUIRE(*lead);

@@ -5,6 +5,7 @@
 #include "app/desktop/article_list_model.h"
 #include "app/desktop/coding_session.h"
 #include "core/project/project.h"
+#include "core/project/testing/older_lead.h"
 #include "tests/support/test_support.h"
 #include "tests/text/near_copy_texts.h"
 
@@ -47,7 +48,7 @@ TEST_CASE("the article list marks a near copy and names the other article in its
     REQUIRE(report);
     REQUIRE(report->nearCopies.size() == 1);
     const double similarity = report->nearCopies[0].similarity;
-    auto lead = project->addCoder(QStringLiteral("Lead"), QStringLiteral("L01"), CoderRole::Lead);
+    auto lead = addOlderLeadForTesting(*project, QStringLiteral("Lead"), QStringLiteral("L01"));
     REQUIRE(lead);
     auto coders = project->coders();
     REQUIRE(coders);

@@ -8,6 +8,7 @@
 #include "core/project/edit.h"
 #include "core/project/people.h"
 #include "core/project/project.h"
+#include "core/project/testing/older_lead.h"
 #include "tests/support/test_support.h"
 
 #include <QComboBox>
@@ -44,7 +45,7 @@ struct PeopleFixture {
         auto c01 =
             p->addCoder(QStringLiteral("Cas Coder"), QStringLiteral("C01"), CoderRole::Coder);
         REQUIRE(c01);
-        auto l02 = p->addCoder(QStringLiteral("Lou Lead"), QStringLiteral("L02"), CoderRole::Lead);
+        auto l02 = addOlderLeadForTesting(*p, QStringLiteral("Lou Lead"), QStringLiteral("L02"));
         REQUIRE(l02);
         const QString jsonl = writeFile(dir, QStringLiteral("a.jsonl"),
             "{\"id\":\"f1\",\"title\":\"Ferry\",\"language\":\"en\",\"text\":\"The ferry to "

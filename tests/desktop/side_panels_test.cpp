@@ -9,6 +9,7 @@
 #include "app/desktop/frame_card.h"
 #include "app/desktop/item_form.h"
 #include "app/desktop/span_editor.h"
+#include "app/desktop/span_quote.h"
 #include "core/project/testing/project_database.h"
 #include "core/store/database.h"
 #include "tests/project/double_coded_project.h"
@@ -22,6 +23,7 @@
 #include <QLabel>
 #include <QLineEdit>
 #include <QListWidget>
+#include <QLocale>
 #include <QPlainTextEdit>
 #include <QPushButton>
 #include <QSignalSpy>
@@ -89,6 +91,46 @@ const QString kText = QStringLiteral("The ferry stops in May. 🙂 The council b
                                      "That is unfair. Keep the ferry.");
 
 } // namespace
+
+TEST_CASE("a quote never sits between doubled quotation marks")
+{
+    // The marks of each locale as QLocale carries them (CLDR: en “ ” and ‘ ’; de „ “ and ‚ ‘; nl
+    // ‘ ’), checked below for the plain case.
+    const QLocale en(QLocale::English, QLocale::UnitedStates);
+    const QLocale de(QLocale::German, QLocale::Germany);
+    const QLocale nl(QLocale::Dutch, QLocale::Netherlands);
+    CHECK(spanQuote(QStringLiteral("the ferry"), en) == QStringLiteral("“the ferry”"));
+    CHECK(spanQuote(QStringLiteral("die Fähre"), de) == QStringLiteral("„die Fähre“"));
+    CHECK(spanQuote(QStringLiteral("de veerboot"), nl) == QStringLiteral("‘de veerboot’"));
+    // A span that is a whole quotation, marks included, keeps its own marks only.
+    CHECK(spanQuote(QStringLiteral("“run the ferry down”"), en)
+        == QStringLiteral("“run the ferry down”"));
+    CHECK(spanQuote(QStringLiteral("„nicht mit uns“"), de) == QStringLiteral("„nicht mit uns“"));
+    // A span ending in a quotation (the sample's C01 span on hb-02) gets the alternate marks.
+    CHECK(spanQuote(QStringLiteral("the council had “run the ferry down”"), en)
+        == QStringLiteral("‘the council had “run the ferry down”’"));
+    CHECK(spanQuote(QStringLiteral("sagte „nicht mit uns“"), de)
+        == QStringLiteral("‚sagte „nicht mit uns“‘"));
+    // A closing apostrophe beside single marks: Dutch takes double marks around it.
+    CHECK(spanQuote(QStringLiteral("de chauffeurs’"), nl) == QStringLiteral("“de chauffeurs’”"));
+    CHECK(spanQuote(QStringLiteral("the drivers’"), en) == QStringLiteral("“the drivers’”"));
+
+    // On the frame card (the default locale's marks).
+    const QLocale before;
+    QLocale::setDefault(en);
+    FrameCard card;
+    card.setSpans(kText,
+        {span(1, FramingFunction::Problem, {0, 23}, QStringLiteral("“The ferry stops in May.”")),
+            span(
+                2, FramingFunction::Cause, {26, 56}, QStringLiteral("The council said “budget”"))});
+    const QStringList problem = quotesIn(section(card, FramingFunction::Problem));
+    const QStringList cause = quotesIn(section(card, FramingFunction::Cause));
+    QLocale::setDefault(before);
+    REQUIRE(problem.size() == 1);
+    REQUIRE(cause.size() == 1);
+    CHECK(problem[0] == QStringLiteral("“The ferry stops in May.”"));
+    CHECK(cause[0] == QStringLiteral("‘The council said “budget”’"));
+}
 
 TEST_CASE("the frame card shows all four functions, with counts, in reading order")
 {

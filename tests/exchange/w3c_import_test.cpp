@@ -110,6 +110,36 @@ TEST_CASE_METHOD(RoundTrip, "importing the W3C export reproduces every span", "[
     }
 }
 
+TEST_CASE_METHOD(RoundTrip, "a W3C import never makes a lead, not even of a lead's spans",
+    "[exchange][w3c][people]")
+{
+    // A lead's own spans in the export carry the lead's pseudonym as their creator.
+    const CoderId lead = addCoder(QStringLiteral("L09"), CoderRole::Lead);
+    code(f2, lead, F::Problem, 0, 20);
+    ExportOptions o = exportOptions(LayerSpec {LayerKind::Coders, {}}, ExportFormat::W3c,
+        dir.filePath(QStringLiteral("w3c-lead")));
+    REQUIRE(exportLayer(project, o));
+    Project fresh = freshProject(QStringLiteral("fresh-lead.fourfold"));
+    auto report =
+        importW3cAnnotations(fresh, QDir(o.outDir).filePath(QStringLiteral("all.jsonld")));
+    REQUIRE(report);
+    CHECK(report->codersCreated.contains(QStringLiteral("L09")));
+    auto people = fresh.coders();
+    REQUIRE(people);
+    for (const Coder &c : *people) {
+        INFO(c.pseudonym.toStdString());
+        CHECK(c.role == CoderRole::Coder);
+    }
+    // The import makes coders through Project::addCoder, which refuses a lead outright.
+    auto refused =
+        fresh.addCoder(QStringLiteral("Someone"), QStringLiteral("L10"), CoderRole::Lead);
+    REQUIRE_FALSE(refused);
+    CHECK(refused.error().code == ErrorCode::NotAllowed);
+    auto after = fresh.coderByPseudonym(QStringLiteral("L10"));
+    REQUIRE(after);
+    CHECK_FALSE(after->has_value());
+}
+
 TEST_CASE_METHOD(RoundTrip, "the W3C import refuses bad files whole, naming file and position",
     "[exchange][w3c]")
 {

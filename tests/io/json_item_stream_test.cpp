@@ -103,7 +103,10 @@ TEST_CASE("text that is not JSON fails naming file and line and column")
         CHECK(r.error().file == path);
         CHECK(r.error().line == c.line);
         CHECK(r.error().column == c.column);
-        CHECK(r.error().message.contains(QStringLiteral(": This is not valid JSON: ")));
+        CHECK(r.error().message.contains(QStringLiteral(": This is not valid JSON")));
+        // The parser's own English is the raw cause, never part of the (translated) message.
+        CHECK_FALSE(r.error().cause.isEmpty());
+        CHECK_FALSE(r.error().message.contains(QStringLiteral("syntax error")));
     }
     auto missing = streamJsonItems(
         dir.filePath(QStringLiteral("none.json")), [](const QStringList &) { return true; },

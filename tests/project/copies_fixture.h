@@ -6,6 +6,7 @@
 #include "core/project/coder_copies.h"
 #include "core/project/gold_edits.h"
 #include "core/project/project.h"
+#include "core/project/testing/older_lead.h"
 #include "core/store/database.h"
 #include "core/store/statement.h"
 #include "tests/support/test_support.h"
@@ -129,7 +130,8 @@ struct CopiesFixture {
 
     CoderId coder(const QString &name, const QString &pseudonym, CoderRole role)
     {
-        auto id = main->addCoder(name, pseudonym, role);
+        auto id = role == CoderRole::Lead ? addOlderLeadForTesting(*main, name, pseudonym)
+                                          : main->addCoder(name, pseudonym, role);
         REQUIRE(id);
         return *id;
     }

@@ -20,7 +20,7 @@ struct GoldFixture : ProjectFixture {
         f2 = articleId(QStringLiteral("f2"));
         c1 = addCoder(QStringLiteral("C01"));
         auto l =
-            project.addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead);
+            addOlderLeadForTesting(project, QStringLiteral("Test lead"), QStringLiteral("L01"));
         REQUIRE(l);
         lead = *l;
         AddAnnotationEdit add(

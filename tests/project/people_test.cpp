@@ -6,6 +6,7 @@
 #include "core/project/passphrase.h"
 #include "core/project/people.h"
 #include "core/project/study_design.h"
+#include "core/project/testing/older_lead.h"
 #include "core/project/testing/project_database.h"
 #include "core/store/schema.h"
 #include "core/store/statement.h"
@@ -338,7 +339,7 @@ TEST_CASE("An upgraded version-6 project asks its lead to set a passphrase", "[p
     {
         auto p = Project::create(path);
         REQUIRE(p);
-        REQUIRE(p->addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead));
+        REQUIRE(addOlderLeadForTesting(*p, QStringLiteral("Test lead"), QStringLiteral("L01")));
     }
     {
         // Back to version 6 as an older Fourfold left it: without the columns of version 7
@@ -358,4 +359,47 @@ TEST_CASE("An upgraded version-6 project asks its lead to set a passphrase", "[p
     REQUIRE(People::signIn(*p, QStringLiteral("L01"), kPass));
     CHECK(People::signIn(*p, QStringLiteral("L01"), QStringLiteral("wrong passphrase")).error().code
         == ErrorCode::NotAllowed);
+}
+
+TEST_CASE("Project::addCoder never adds a lead", "[people]")
+{
+    ProjectFixture f;
+    const QString before = dumpDatabase(databaseForTesting(f.project));
+    auto lead =
+        f.project.addCoder(QStringLiteral("Mallory"), QStringLiteral("L09"), CoderRole::Lead);
+    REQUIRE_FALSE(lead);
+    CHECK(lead.error().code == ErrorCode::NotAllowed);
+    CHECK(lead.error().message.contains(QStringLiteral("L09")));
+    // Nothing written: no person, no event.
+    CHECK(dumpDatabase(databaseForTesting(f.project)) == before);
+    // A coder it adds as before.
+    CHECK(f.project.addCoder(QStringLiteral("Cas"), QStringLiteral("C09"), CoderRole::Coder));
+}
+
+TEST_CASE("A lead without a passphrase only as the first lead of a new project", "[people]")
+{
+    ProjectFixture f;
+    f.addCoder(QStringLiteral("C01"));
+    // A new project without a lead: the first may come without a passphrase (build-sample's
+    // demo lead); whoever chooses them first sets it.
+    auto first = People::addLeadWithoutPassphrase(
+        f.project, QStringLiteral("Demo lead"), QStringLiteral("L01"));
+    REQUIRE(first);
+    REQUIRE(f.project.apply(**first));
+    CHECK(People::passphraseState(f.project, QStringLiteral("L01")).value()
+        == PassphraseState::NotSetYet);
+    // Once there is a lead, none is added without a passphrase, nor is the passphrase-less one
+    // a way around it after they have set theirs.
+    auto second = People::addLeadWithoutPassphrase(
+        f.project, QStringLiteral("Mallory"), QStringLiteral("L09"));
+    REQUIRE_FALSE(second);
+    CHECK(second.error().code == ErrorCode::NotAllowed);
+    REQUIRE(People::signIn(f.project, QStringLiteral("L01"), kPass));
+    auto third = People::addLeadWithoutPassphrase(
+        f.project, QStringLiteral("Mallory"), QStringLiteral("L09"));
+    REQUIRE_FALSE(third);
+    CHECK(third.error().code == ErrorCode::NotAllowed);
+    auto nobody = f.project.coderByPseudonym(QStringLiteral("L09"));
+    REQUIRE(nobody);
+    CHECK_FALSE(nobody->has_value());
 }

@@ -3,6 +3,7 @@
 
 #include "core/project/article_status_edit.h"
 #include "core/project/project.h"
+#include "core/project/testing/older_lead.h"
 #include "tests/support/test_support.h"
 
 #include <set>
@@ -67,7 +68,10 @@ struct ProjectFixture {
 
     CoderId addCoder(const QString &pseudonym, CoderRole role = CoderRole::Coder)
     {
-        auto id = project.addCoder(QStringLiteral("Test person ") + pseudonym, pseudonym, role);
+        const QString name = QStringLiteral("Test person ") + pseudonym;
+        // A lead as a file from before passphrases holds them (people_test sets theirs).
+        auto id = role == CoderRole::Lead ? addOlderLeadForTesting(project, name, pseudonym)
+                                          : project.addCoder(name, pseudonym, role);
         REQUIRE(id);
         return *id;
     }

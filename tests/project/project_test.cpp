@@ -86,7 +86,7 @@ TEST_CASE("coders need a name and a unique pseudonym")
     ProjectFixture f;
     f.addCoder(QStringLiteral("C01"));
     auto dup =
-        f.project.addCoder(QStringLiteral("Someone else"), QStringLiteral("C01"), CoderRole::Lead);
+        f.project.addCoder(QStringLiteral("Someone else"), QStringLiteral("C01"), CoderRole::Coder);
     REQUIRE_FALSE(dup);
     CHECK(dup.error().code == ErrorCode::Duplicate);
     auto empty = f.project.addCoder(QStringLiteral(" "), QStringLiteral("C02"), CoderRole::Coder);

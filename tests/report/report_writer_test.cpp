@@ -3,6 +3,7 @@
 // the published worked examples of tests/reliability), the project's own records for the counts,
 // and poppler's pdftoppm / pdftotext for the PDF. The items the method text must cover are those
 // of Lombard, Snyder-Duch & Bracken (2002), Human Communication Research 28(4).
+#include "app/report/report_charts.h"
 #include "app/report/report_document.h"
 #include "app/report/report_writer.h"
 #include "core/project/project.h"
@@ -16,13 +17,17 @@
 #include <QJsonArray>
 #include <QJsonDocument>
 #include <QJsonObject>
+#include <QPaintEngine>
+#include <QPainter>
 #include <QRegularExpression>
 #include <QSet>
 #include <QStandardPaths>
 #include <QSvgRenderer>
 #include <QTemporaryDir>
 
+#include <climits>
 #include <cmath>
+#include <optional>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -559,4 +564,115 @@ TEST_CASE("report --out refuses a symbolic link and replaces a file only with --
     INFO(r.err.toStdString());
     CHECK(r.exitCode == 0);
     CHECK(readText(existing).contains(QStringLiteral("<html")));
+}
+
+namespace {
+
+// A paint device that records each piece of text drawn on it with the box it takes: what the
+// alpha chart's reference-line names are checked against.
+class TextRecorder : public QPaintDevice
+{
+public:
+    struct Text {
+        QString text;
+        QRectF box;
+    };
+    explicit TextRecorder(QSize size)
+        : m_size(size)
+        , m_engine(this)
+    { }
+    QPaintEngine *paintEngine() const override { return &m_engine; }
+    std::vector<Text> texts;
+
+protected:
+    int metric(PaintDeviceMetric m) const override
+    {
+        switch (m) {
+        case PdmWidth:
+            return m_size.width();
+        case PdmHeight:
+            return m_size.height();
+        case PdmWidthMM:
+            return m_size.width() * 254 / 960;
+        case PdmHeightMM:
+            return m_size.height() * 254 / 960;
+        case PdmDpiX:
+        case PdmDpiY:
+        case PdmPhysicalDpiX:
+        case PdmPhysicalDpiY:
+            return 96;
+        case PdmDepth:
+            return 32;
+        case PdmNumColors:
+            return INT_MAX;
+        case PdmDevicePixelRatio:
+            return 1;
+        case PdmDevicePixelRatioScaled:
+            return int(devicePixelRatioFScale());
+        default:
+            return 0;
+        }
+    }
+
+private:
+    class Engine : public QPaintEngine
+    {
+    public:
+        explicit Engine(TextRecorder *device)
+            : m_device(device)
+        { }
+        bool begin(QPaintDevice *) override { return true; }
+        bool end() override { return true; }
+        void updateState(const QPaintEngineState &) override { }
+        void drawPixmap(const QRectF &, const QPixmap &, const QRectF &) override { }
+        // Shapes are not recorded (QPaintEngine's own two polygon overloads call each other).
+        void drawPolygon(const QPointF *, int, PolygonDrawMode) override { }
+        void drawPath(const QPainterPath &) override { }
+        void drawTextItem(const QPointF &p, const QTextItem &item) override
+        {
+            const QPointF at = painter()->transform().map(p);
+            m_device->texts.push_back({item.text(),
+                QRectF(
+                    at.x(), at.y() - item.ascent(), item.width(), item.ascent() + item.descent())});
+        }
+        Type type() const override { return QPaintEngine::User; }
+
+    private:
+        TextRecorder *m_device;
+    };
+    QSize m_size;
+    mutable Engine m_engine;
+};
+
+} // namespace
+
+TEST_CASE("the alpha chart names its 0.667 and 0.800 lines apart even on a wide axis")
+{
+    // Alphas down to -1 stretch the axis over [-1, 1], which puts the two lines closest
+    // (Krippendorff's alpha is at least -1 for two or more values; Krippendorff 2011).
+    for (double lowest : {0.5, -0.3, -1.0}) {
+        INFO(lowest);
+        std::vector<AlphaChartRow> rows {
+            {QStringLiteral("Problem"), Qt::darkBlue, lowest, {}, {}, {}, {}},
+            {QStringLiteral("Cause"), Qt::darkRed, 0.9, 0.85, 0.95, 0.8, 0.97},
+        };
+        const QSizeF size = alphaChartSize(rows);
+        TextRecorder device(size.toSize());
+        {
+            QPainter p(&device);
+            paintAlphaChart(p, rows);
+        }
+        std::optional<QRectF> tentative, reliable;
+        for (const TextRecorder::Text &t : device.texts) {
+            if (t.text == QStringLiteral("0.667"))
+                tentative = t.box;
+            if (t.text == QStringLiteral("0.800"))
+                reliable = t.box;
+        }
+        REQUIRE(tentative);
+        REQUIRE(reliable);
+        // Side by side at the top, in value order, never overlapping.
+        CHECK(tentative->right() <= reliable->left());
+        CHECK_FALSE(tentative->intersects(*reliable));
+    }
 }

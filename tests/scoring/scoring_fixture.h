@@ -19,7 +19,7 @@ struct ScoringFixture : ProjectFixture {
         f1 = articleId(QStringLiteral("f1"));
         f2 = articleId(QStringLiteral("f2"));
         auto l =
-            project.addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead);
+            addOlderLeadForTesting(project, QStringLiteral("Test lead"), QStringLiteral("L01"));
         REQUIRE(l);
         lead = *l;
     }

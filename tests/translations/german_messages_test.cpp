@@ -2,6 +2,7 @@
 // the core's error messages and undo texts come translated, and Qt's own texts follow the same
 // language. Expected sentences are read from translations/fourfold_<lang>.ts, never written here.
 #include "app/i18n/translations.h"
+#include "core/io/json_item_stream.h"
 #include "core/project/edit.h"
 #include "core/project/people.h"
 #include "core/project/project.h"
@@ -119,6 +120,47 @@ TEST_CASE("An undo text from the core is German once German is chosen")
 
     CHECK(useLanguage(QLocale(QLocale::English)).isEmpty());
     CHECK((*add)->text() == QStringLiteral("Add C07"));
+}
+
+TEST_CASE("An import's refusal is German throughout once German is chosen")
+{
+    // The import report puts the core's message on one line: no English word of a JSON type or
+    // of the JSON parser may sit in the German sentence.
+    const TsFile de = readTsFile(QStringLiteral("de"));
+    QTemporaryDir dir;
+    auto project = Project::create(dir.filePath(QStringLiteral("import.fourfold")));
+    REQUIRE(project);
+    const QString scalarFile = writeFile(dir, QStringLiteral("titel.jsonl"), "\"nur ein Titel\"\n");
+    const QString listFile = writeFile(dir, QStringLiteral("liste.jsonl"), "[1, 2]\n");
+    const QString brokenFile =
+        writeFile(dir, QStringLiteral("kaputt.json"), "{\n  \"type\": AnnotationCollection\n}");
+    REQUIRE(useLanguage(QLocale(QLocale::German, QLocale::Germany)) == QStringLiteral("de"));
+    auto scalar = project->importFile(scalarFile, ImportOptions {});
+    auto list = project->importFile(listFile, ImportOptions {});
+    auto broken = streamJsonItems(
+        brokenFile, [](const QStringList &) { return true; },
+        [](QJsonObject &&, JsonPlace) { return Status {}; });
+    useLanguage(QLocale(QLocale::English));
+
+    const QString got = de.translation(
+        QStringLiteral("ArticleReader"), QStringLiteral("expected a JSON object, got %1"));
+    REQUIRE_FALSE(scalar);
+    INFO(scalar.error().message.toStdString());
+    CHECK(scalar.error().message.contains(
+        got.arg(de.translation(QStringLiteral("JsonTypeNameText"), QStringLiteral("string")))));
+    CHECK_FALSE(scalar.error().message.contains(QStringLiteral("string")));
+    REQUIRE_FALSE(list);
+    INFO(list.error().message.toStdString());
+    CHECK(list.error().message.contains(
+        got.arg(de.translation(QStringLiteral("JsonTypeNameText"), QStringLiteral("array")))));
+    CHECK_FALSE(list.error().message.contains(QStringLiteral(" array")));
+    REQUIRE_FALSE(broken);
+    INFO(broken.error().message.toStdString());
+    const QString notJson = de.translation(
+        QStringLiteral("JsonItemStreamText"), QStringLiteral("This is not valid JSON at \"%1\"."));
+    CHECK(broken.error().message.contains(notJson.left(notJson.indexOf(QStringLiteral("%1")))));
+    CHECK_FALSE(broken.error().message.contains(QStringLiteral("syntax error")));
+    CHECK_FALSE(broken.error().message.contains(QStringLiteral("last read")));
 }
 
 TEST_CASE("Qt's own texts follow the chosen language")

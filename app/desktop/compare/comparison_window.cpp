@@ -5,15 +5,19 @@
 #include "app/desktop/compare/gold_span_dialog.h"
 #include "app/desktop/edit_command.h"
 #include "app/desktop/function_style.h"
+#include "app/desktop/shortcut_table.h"
+#include "app/desktop/span_quote.h"
 #include "core/project/gold_edits.h"
 #include "core/text/offset_map.h"
 
 #include <QAction>
 #include <QCheckBox>
 #include <QComboBox>
+#include <QHBoxLayout>
 #include <QHeaderView>
 #include <QLabel>
 #include <QLineEdit>
+#include <QMessageBox>
 #include <QPainter>
 #include <QSplitter>
 #include <QStatusBar>
@@ -66,7 +70,7 @@ QString shortQuote(QString text)
     text.replace(QLatin1Char('\n'), QLatin1Char(' '));
     if (text.size() > 90)
         text = text.left(89) + QChar(0x2026);
-    return QChar(0x201C) + text + QChar(0x201D);
+    return spanQuote(text);
 }
 
 // The function, the quote and the attributes of a span, on up to three lines.
@@ -137,7 +141,20 @@ void ComparisonWindow::buildUi()
     auto *splitter = new QSplitter(Qt::Horizontal, this);
 
     m_queueModel = new DisagreementQueueModel(this);
-    m_queueView = new QTableView(splitter);
+    auto *queuePane = new QWidget(splitter);
+    auto *queueLayout = new QVBoxLayout(queuePane);
+    queueLayout->setContentsMargins(0, 0, 0, 0);
+    queueLayout->setSpacing(2);
+    auto *queueHeader = new QHBoxLayout;
+    queueHeader->setContentsMargins(4, 0, 0, 0);
+    m_queueLabel = new QLabel(queuePane);
+    m_queueLabel->setWordWrap(true);
+    queueHeader->addWidget(m_queueLabel, 1);
+    m_resortButton = new QToolButton(queuePane);
+    queueHeader->addWidget(m_resortButton);
+    queueLayout->addLayout(queueHeader);
+    m_queueView = new QTableView(queuePane);
+    queueLayout->addWidget(m_queueView, 1);
     m_queueView->setModel(m_queueModel);
     m_queueView->setSelectionBehavior(QAbstractItemView::SelectRows);
     m_queueView->setSelectionMode(QAbstractItemView::SingleSelection);
@@ -151,7 +168,8 @@ void ComparisonWindow::buildUi()
     m_queueView->setColumnHidden(DisagreementQueueModel::Coders, true);
     m_queueView->setAccessibleName(tr("Articles to adjudicate"));
     m_queueView->setToolTip(tr("Articles coded by several coders, most undecided disagreements "
-                               "first. Open: undecided disagreements; Agreed: passages all "
+                               "first when sorted; the order is kept while you decide until you "
+                               "re-sort. Open: undecided disagreements; Agreed: passages all "
                                "coders agree on that are not yet in gold."));
     connect(m_queueView->selectionModel(), &QItemSelectionModel::currentRowChanged, this,
         [this](const QModelIndex &index) {
@@ -226,10 +244,16 @@ void ComparisonWindow::buildUi()
     rationaleLabel->setBuddy(m_rationale);
     panelLayout->addWidget(rationaleLabel);
     panelLayout->addWidget(m_rationale);
-    auto *keys = new QLabel(tr("Keys: N / P next and previous disagreement, Alt+Down / Alt+Up "
-                               "next and previous article; A accept the chosen span, M merge the "
-                               "chosen spans, E edit, R reject, W withdraw a gold span; "
-                               "Ctrl+Shift+A accept all agreed; Ctrl+L rationale; Ctrl+Z undo."),
+    const auto key = [](const QKeySequence &k) { return k.toString(QKeySequence::NativeText); };
+    auto *keys = new QLabel(
+        tr("Keys: N / P next and previous disagreement, %1 / %2 next and "
+           "previous article, %3 re-sort the queue; A accept the chosen span, "
+           "M merge the chosen spans, E edit, R reject, W withdraw a gold "
+           "span; %4 accept all agreed; %5 rationale; %6 undo; %7 every key.")
+            .arg(key(CompareKeys::nextArticle().front()),
+                key(CompareKeys::previousArticle().front()), key(CompareKeys::resortQueue()),
+                key(CompareKeys::acceptAgreed()), key(CompareKeys::rationale()),
+                key(QKeySequence(QKeySequence::Undo)), key(DeskKeys::shortcuts())),
         panel);
     keys->setWordWrap(true);
     QFont keysFont = keys->font();
@@ -243,7 +267,7 @@ void ComparisonWindow::buildUi()
         reloadArticle();
     });
 
-    splitter->addWidget(m_queueView);
+    splitter->addWidget(queuePane);
     splitter->addWidget(middle);
     splitter->addWidget(panel);
     splitter->setStretchFactor(0, 0);
@@ -322,38 +346,44 @@ void ComparisonWindow::buildActions()
     });
     bar->addSeparator();
 
-    m_previous = makeAction(tr("Previous"), {Qt::Key_P, QKeySequence(Qt::SHIFT | Qt::Key_F8)},
+    m_previous = makeAction(tr("Previous"), CompareKeys::previousDisagreement(),
         tr("Previous undecided disagreement"), [this] { previousDisagreement(); });
-    m_next = makeAction(tr("Next"), {Qt::Key_N, Qt::Key_F8}, tr("Next undecided disagreement"),
-        [this] { nextDisagreement(); });
-    m_previousArticle = makeAction(tr("Previous article"), {QKeySequence(Qt::ALT | Qt::Key_Up)},
+    m_next = makeAction(tr("Next"), CompareKeys::nextDisagreement(),
+        tr("Next undecided disagreement"), [this] { nextDisagreement(); });
+    m_previousArticle = makeAction(tr("Previous article"), CompareKeys::previousArticle(),
         tr("Previous article in the queue"), [this] {
             const int row = m_queueModel->rowOf(m_article);
             if (row > 0)
                 openArticle(m_queueModel->rows()[size_t(row - 1)].article.id);
         });
-    m_nextArticle = makeAction(tr("Next article"), {QKeySequence(Qt::ALT | Qt::Key_Down)},
-        tr("Next article in the queue"), [this] {
+    m_nextArticle = makeAction(
+        tr("Next article"), CompareKeys::nextArticle(), tr("Next article in the queue"), [this] {
             const int row = m_queueModel->rowOf(m_article);
             if (row + 1 < m_queueModel->rowCount())
                 openArticle(m_queueModel->rows()[size_t(row + 1)].article.id);
         });
+    m_resort = makeAction(tr("Re-sort queue"), {CompareKeys::resortQueue()},
+        tr("Sort the queue again, most undecided disagreements first; until then it keeps its "
+           "order while you decide"),
+        [this] { resortQueue(); });
+    m_resortButton->setDefaultAction(m_resort);
+    m_queueView->setContextMenuPolicy(Qt::ActionsContextMenu);
+    m_queueView->addAction(m_resort);
     bar->addAction(m_previous);
     bar->addAction(m_next);
     bar->addSeparator();
-    m_accept = makeAction(tr("Accept"), {Qt::Key_A}, tr("Accept the chosen coder's span into gold"),
-        [this] { acceptSelected(); });
-    m_merge = makeAction(tr("Merge"), {Qt::Key_M},
+    m_accept = makeAction(tr("Accept"), {CompareKeys::accept()},
+        tr("Accept the chosen coder's span into gold"), [this] { acceptSelected(); });
+    m_merge = makeAction(tr("Merge"), {CompareKeys::merge()},
         tr("Put one span covering the chosen spans into gold"), [this] { mergeSelected(); });
-    m_edit = makeAction(tr("Edit\u2026"), {Qt::Key_E},
+    m_edit = makeAction(tr("Edit\u2026"), {CompareKeys::edit()},
         tr("Decide a gold span with a function and boundaries of your own"),
         [this] { editSelected(); });
-    m_reject = makeAction(tr("Reject"), {Qt::Key_R},
+    m_reject = makeAction(tr("Reject"), {CompareKeys::reject()},
         tr("Record that the chosen spans do not belong in gold"), [this] { rejectSelected(); });
-    m_withdraw = makeAction(tr("Withdraw gold"), {Qt::Key_W}, tr("Withdraw the chosen gold span"),
-        [this] { withdrawSelectedGold(); });
-    m_acceptAgreed = makeAction(tr("Accept all agreed"),
-        {QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_A)},
+    m_withdraw = makeAction(tr("Withdraw gold"), {CompareKeys::withdraw()},
+        tr("Withdraw the chosen gold span"), [this] { withdrawSelectedGold(); });
+    m_acceptAgreed = makeAction(tr("Accept all agreed"), {CompareKeys::acceptAgreed()},
         tr("Accept every span all coders of the article agree on"), [this] { acceptAllAgreed(); });
     for (QAction *a : {m_accept, m_merge, m_edit, m_reject, m_withdraw})
         bar->addAction(a);
@@ -369,9 +399,19 @@ void ComparisonWindow::buildActions()
     bar->addAction(m_undo);
     bar->addAction(m_redo);
     auto *focusRationale = new QAction(this);
-    focusRationale->setShortcut(QKeySequence(Qt::CTRL | Qt::Key_L));
+    focusRationale->setShortcut(CompareKeys::rationale());
     connect(focusRationale, &QAction::triggered, this, [this] { m_rationale->setFocus(); });
     addAction(focusRationale);
+    auto *help = new QAction(this);
+    help->setShortcut(DeskKeys::shortcuts());
+    connect(help, &QAction::triggered, this, [this] {
+        QMessageBox box(this);
+        box.setWindowTitle(tr("Keys of the comparison window"));
+        box.setTextFormat(Qt::RichText);
+        box.setText(shortcutTableHtml(comparisonShortcuts()));
+        box.exec();
+    });
+    addAction(help);
 }
 
 ComparisonFilter ComparisonWindow::filter() const
@@ -414,9 +454,21 @@ void ComparisonWindow::reloadQueue()
     const QSignalBlocker block(m_queueView->selectionModel());
     m_queueModel->setRows(std::move(*rows), names);
     const int row = m_queueModel->rowOf(m_article);
-    if (row >= 0)
+    if (row >= 0) {
         m_queueView->selectionModel()->setCurrentIndex(m_queueModel->index(row, 0),
             QItemSelectionModel::ClearAndSelect | QItemSelectionModel::Rows);
+        m_queueView->scrollTo(m_queueModel->index(row, 0));
+    }
+    m_queueLabel->setText(
+        tr("%n article(s) to adjudicate", nullptr, int(m_queueModel->rowCount())));
+}
+
+void ComparisonWindow::resortQueue()
+{
+    reloadQueue();
+    // The article open stays open; one the queue no longer holds (all of its coders' work
+    // withdrawn meanwhile) stays shown until another is chosen.
+    showMessage(tr("Queue sorted again: most undecided disagreements first."), false);
 }
 
 bool ComparisonWindow::openArticle(ArticleId article)
@@ -549,8 +601,8 @@ bool ComparisonWindow::nextDisagreement()
             return true;
         }
     }
-    showMessage(tr("No undecided disagreement left in this article. Alt+Down opens the next "
-                   "article."),
+    showMessage(tr("No undecided disagreement left in this article. %1 opens the next article.")
+                    .arg(CompareKeys::nextArticle().front().toString(QKeySequence::NativeText)),
         false);
     return false;
 }

@@ -19,6 +19,7 @@ class QComboBox;
 class QLabel;
 class QLineEdit;
 class QTableView;
+class QToolButton;
 class QTreeWidget;
 
 namespace fourfold {
@@ -51,6 +52,10 @@ public:
     // Filters: one function (none = all), one pair of coders (invalid ids = all coders).
     void setFunctionFilter(std::optional<FramingFunction> function);
     void setCoderPair(CoderId first, CoderId second);
+    // The queue keeps its order while the lead decides (a decision updates its article's row
+    // where it stands); this sorts it again by the queue's rule (disagreementQueue: most
+    // undecided first) and takes in articles that have come or gone. The open article stays.
+    void resortQueue();
 
     // The current passage's coder spans that are selected in the decision list.
     std::vector<Annotation> selectedSpans() const;
@@ -102,6 +107,8 @@ private:
 
     DisagreementQueueModel *m_queueModel = nullptr;
     QTableView *m_queueView = nullptr;
+    QLabel *m_queueLabel = nullptr;
+    QToolButton *m_resortButton = nullptr;
     ComparisonView *m_view = nullptr;
     QComboBox *m_functionBox = nullptr;
     QComboBox *m_pairBox = nullptr;
@@ -118,6 +125,7 @@ private:
     QAction *m_previous = nullptr;
     QAction *m_nextArticle = nullptr;
     QAction *m_previousArticle = nullptr;
+    QAction *m_resort = nullptr;
     QAction *m_accept = nullptr;
     QAction *m_merge = nullptr;
     QAction *m_edit = nullptr;

@@ -22,6 +22,7 @@
 #include <QtCharts/QCategoryAxis>
 #include <QtCharts/QChart>
 #include <QtCharts/QChartView>
+#include <QtCharts/QLegend>
 #include <QtCharts/QLegendMarker>
 #include <QtCharts/QLineSeries>
 #include <QtCharts/QScatterSeries>
@@ -104,24 +105,33 @@ QScatterSeries::MarkerShape markerShape(const std::optional<FramingFunction> &f)
     return QScatterSeries::MarkerShapeCircle;
 }
 
-// Horizontal reference lines at 0.800 and 0.667 across [from, to], named for the legend.
+// The property that marks a reference line among a chart's series (its alpha).
+constexpr const char *kThresholdProperty = "fourfoldThreshold";
+
+// Horizontal reference lines at 0.800 and 0.667 across [from, to], named for the legend. Each has
+// a shade of its own (greys, apart from the functions' colours) and a line pattern of its own, so
+// that its legend marker, drawn with the line's pen, tells the two apart on screen and in print.
 void addThresholds(QChart *chart, double from, double to, QAbstractAxis *x, QAbstractAxis *y)
 {
     const struct {
         double value;
         QString name;
+        QColor colour;
         Qt::PenStyle style;
     } lines[] = {
-        {kAlphaReliable, ReliabilityWindow::tr("0.800: rely on the variable"), Qt::DashLine},
-        {kAlphaTentative, ReliabilityWindow::tr("0.667: tentative conclusions only"), Qt::DotLine},
+        {kAlphaReliable, ReliabilityWindow::tr("0.800: rely on the variable"),
+            QColor(0x2B, 0x33, 0x40), Qt::SolidLine},
+        {kAlphaTentative, ReliabilityWindow::tr("0.667: tentative conclusions only"),
+            QColor(0x85, 0x8B, 0x94), Qt::DashLine},
     };
     for (const auto &l : lines) {
         auto *s = new QLineSeries(chart);
         s->setName(l.name);
+        s->setProperty(kThresholdProperty, l.value);
         s->append(from, l.value);
         s->append(to, l.value);
-        QPen pen(QColor(0x55, 0x55, 0x55));
-        pen.setWidthF(1.5);
+        QPen pen(l.colour);
+        pen.setWidthF(2);
         pen.setStyle(l.style);
         s->setPen(pen);
         chart->addSeries(s);
@@ -130,11 +140,18 @@ void addThresholds(QChart *chart, double from, double to, QAbstractAxis *x, QAbs
     }
 }
 
-// Hides the legend entries of every series but the named reference lines.
+// Hides the legend entries of every series but the reference lines, whose markers show their
+// own line.
 void legendForThresholdsOnly(QChart *chart)
 {
-    for (QLegendMarker *m : chart->legend()->markers())
-        m->setVisible(m->label().startsWith(QStringLiteral("0.")));
+    for (QLegendMarker *m : chart->legend()->markers()) {
+        const bool threshold = m->series()->property(kThresholdProperty).isValid();
+        m->setVisible(threshold);
+        // The marker is drawn with its line's own pen: colour and pattern.
+        if (auto *line = qobject_cast<QLineSeries *>(m->series()); line && threshold)
+            m->setPen(line->pen());
+    }
+    chart->legend()->setMarkerShape(QLegend::MarkerShapeFromSeries);
     chart->legend()->setAlignment(Qt::AlignBottom);
 }
 

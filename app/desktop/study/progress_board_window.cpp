@@ -86,7 +86,7 @@ ProgressBoardWindow::ProgressBoardWindow(Project &project, CoderId current, QWid
     m_board->horizontalHeaderItem(AgreementColumn)
         ->setToolTip(tr("Krippendorff's alpha on the articles the coder finished: in training "
                         "with the lead's master coding, in the other phases the mean over every "
-                        "coder who finished the same articles. ✓ at .800 or more, ~ from .667 "
+                        "coder who finished the same articles. ✓ at 0.800 or more, ~ from 0.667 "
                         "(tentative), ✗ below."));
     m_board->horizontalHeader()->setSectionResizeMode(QHeaderView::Stretch);
     layout->addWidget(m_board, 2);

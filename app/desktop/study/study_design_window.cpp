@@ -18,6 +18,7 @@
 #include <QLabel>
 #include <QLineEdit>
 #include <QListWidget>
+#include <QLocale>
 #include <QMap>
 #include <QPushButton>
 #include <QRadioButton>
@@ -243,6 +244,9 @@ QWidget *StudyDesignWindow::buildDrawPage()
     m_drawPercent->setDecimals(1);
     m_drawPercent->setValue(20);
     m_drawPercent->setSuffix(QStringLiteral(" %"));
+    // Figures are written with a decimal point in every language, as in the report and the
+    // command line (studyCoefficient); the boxes show and read them the same way.
+    m_drawPercent->setLocale(QLocale::c());
     sizeLayout->addWidget(m_bySize, 0, 0);
     sizeLayout->addWidget(m_drawSize, 0, 1);
     sizeLayout->addWidget(byFraction, 1, 0);
@@ -296,9 +300,10 @@ QWidget *StudyDesignWindow::buildDrawPage()
     m_alphaMin->setRange(0.5, 0.99);
     m_alphaMin->setDecimals(3);
     m_alphaMin->setSingleStep(0.01);
+    m_alphaMin->setLocale(QLocale::c());
     m_alphaMin->setValue(0.8);
-    m_alphaMin->setToolTip(tr("The smallest alpha you would still accept: .800 for firm "
-                              "conclusions, .667 for tentative ones (Krippendorff)."));
+    m_alphaMin->setToolTip(tr("The smallest alpha you would still accept: 0.800 for firm "
+                              "conclusions, 0.667 for tentative ones (Krippendorff)."));
     adviceForm->addRow(tr("α_min:"), m_alphaMin);
     m_significance = new QComboBox(adviceBox);
     m_significance->setObjectName(QStringLiteral("draw-significance"));
@@ -310,6 +315,7 @@ QWidget *StudyDesignWindow::buildDrawPage()
     m_rarest->setRange(0.01, 0.5);
     m_rarest->setDecimals(2);
     m_rarest->setSingleStep(0.05);
+    m_rarest->setLocale(QLocale::c());
     m_rarest->setValue(0.25);
     m_rarest->setToolTip(tr("The expected share of the rarest value: 0.25 when four values are "
                             "equally frequent."));

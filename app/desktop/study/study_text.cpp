@@ -39,12 +39,11 @@ QString studyCoefficient(std::optional<double> value)
 {
     if (!value)
         return QStringLiteral("—");
-    // APA style drops the leading zero of a value that cannot exceed 1 (APA Publication Manual,
-    // 7th ed., 6.36); the minus sign is U+2212.
-    QString text = QString::number(std::abs(*value), 'f', 3);
-    if (text.startsWith(QLatin1String("0.")))
-        text.remove(0, 1);
-    return *value < 0 && text != QLatin1String(".000") ? QStringLiteral("−") + text : text;
+    // Written as every screen, the report and the command line write a coefficient: three
+    // decimals after a decimal point, with the leading zero, whatever the language, so that
+    // one figure looks the same on every screen; the minus sign is U+2212.
+    const QString text = QString::number(std::abs(*value), 'f', 3);
+    return *value < 0 && text != QLatin1String("0.000") ? QStringLiteral("−") + text : text;
 }
 
 QColor studyPale(const QColor &colour)

@@ -14,8 +14,9 @@ namespace fourfold {
 QString studyPhaseName(Phase phase);
 // A duration in seconds as "2 h 05 min", "12 min", "40 s"; "—" for a negative value.
 QString studyDuration(qint64 seconds);
-// A coefficient with three decimals, as reliability reports write it (".812", "−.105", "1.000");
-// "—" when there is none.
+// A coefficient with three decimals after a decimal point, with its leading zero, in every
+// language, as the reliability window, the report and the command line write it ("0.812",
+// "−0.105", "1.000"); "—" when there is none.
 QString studyCoefficient(std::optional<double> value);
 
 // `colour` mixed with 60 % white: a background that black text stays readable on.

@@ -69,7 +69,7 @@ TrainingFeedbackDialog::TrainingFeedbackDialog(Project &project, CoderId coder, 
 
     auto *note = new QLabel(
         tr("Most units carry no function, so \"same as the master\" is high even when your spans "
-           "differ; α corrects for that agreement by chance (Krippendorff). Aim for α of .800 or "
+           "differ; α corrects for that agreement by chance (Krippendorff). Aim for α of 0.800 or "
            "more."),
         this);
     note->setWordWrap(true);

@@ -18,6 +18,8 @@
 #include <QTableWidget>
 #include <QtCharts/QChart>
 #include <QtCharts/QChartView>
+#include <QtCharts/QLegend>
+#include <QtCharts/QLegendMarker>
 
 #include <algorithm>
 #include <set>
@@ -139,6 +141,23 @@ TEST_CASE("the reliability window shows the planted bad coder, article and habit
     CHECK(w.functionChart()->chart()->series().size() >= 6 + 2);
     REQUIRE(w.outcome()->periods.size() == 3);
     CHECK(w.tabs()->count() == 6);
+
+    // Each reference line (Krippendorff 2004, §12.2: 0.800 and 0.667) has a legend marker of its
+    // own, drawn from its line and in a colour of its own; no other series is in the legend.
+    for (QChartView *view : {w.functionChart(), w.driftChart()}) {
+        QChart *chart = view->chart();
+        CHECK(chart->legend()->markerShape() == QLegend::MarkerShapeFromSeries);
+        std::vector<QLegendMarker *> shown;
+        for (QLegendMarker *m : chart->legend()->markers())
+            if (m->isVisible())
+                shown.push_back(m);
+        REQUIRE(shown.size() == 2);
+        CHECK(shown[0]->label().startsWith(QStringLiteral("0.800")));
+        CHECK(shown[1]->label().startsWith(QStringLiteral("0.667")));
+        CHECK(shown[0]->pen().color() != shown[1]->pen().color());
+        CHECK(shown[0]->brush().color() != shown[1]->brush().color());
+        CHECK(shown[0]->pen().style() != shown[1]->pen().style());
+    }
 }
 
 TEST_CASE("the reliability window on the continuum gives unitizing alpha")

@@ -472,7 +472,7 @@ TEST_CASE("Training feedback per function against the master coding", "[studygui
     // one unit marked by one coder only, with no other "present" value, gives exactly 0:
     // 1 − (n−1)·2 / (2·(n−1)·1) with n = 2N values (worked by hand from that formula).
     CHECK(t->item(0, 2)->text() == QStringLiteral("1.000"));
-    CHECK(t->item(3, 2)->text() == QStringLiteral(".000"));
+    CHECK(t->item(3, 2)->text() == QStringLiteral("0.000"));
     CHECK(t->item(3, 3)->text() == QStringLiteral("1 / 0"));
     // Cause and evaluation: neither marked anything, so alpha is undefined (no variation).
     CHECK(t->item(1, 2)->text() == QStringLiteral("—"));
@@ -490,10 +490,37 @@ TEST_CASE("Durations and coefficients as the study screens write them", "[studyg
     CHECK(studyDuration(150) == QStringLiteral("3 min"));
     CHECK(studyDuration(3660) == QStringLiteral("1 h 01 min"));
     CHECK(studyDuration(-1) == QStringLiteral("—"));
-    // APA Publication Manual (7th ed., 6.36): no leading zero for values that cannot exceed 1.
-    CHECK(studyCoefficient(0.8123) == QStringLiteral(".812"));
-    CHECK(studyCoefficient(-0.105) == QStringLiteral("−.105"));
+    // Coefficients as the reliability window, the report and the command line write them: a
+    // decimal point with the leading zero, three decimals, in every language.
+    CHECK(studyCoefficient(0.8123) == QStringLiteral("0.812"));
+    CHECK(studyCoefficient(-0.105) == QStringLiteral("−0.105"));
     CHECK(studyCoefficient(1.0) == QStringLiteral("1.000"));
-    CHECK(studyCoefficient(-0.0001) == QStringLiteral(".000"));
+    CHECK(studyCoefficient(-0.0001) == QStringLiteral("0.000"));
     CHECK(studyCoefficient(std::nullopt) == QStringLiteral("—"));
+}
+
+TEST_CASE("The minimum-sample figures use one number format on a German screen", "[studygui][text]")
+{
+    // One rule on every screen: a decimal point with the leading zero (as the reliability window,
+    // the report and the command line write figures), never a German decimal comma beside a
+    // point, nor ".800" beside "0.800".
+    const QLocale before;
+    QLocale::setDefault(QLocale(QLocale::German, QLocale::Germany));
+    SampleCopy s;
+    StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+    auto *alphaMin = child<QDoubleSpinBox>(w, "draw-alpha-min");
+    auto *rarest = child<QDoubleSpinBox>(w, "draw-rarest");
+    auto *percent = child<QDoubleSpinBox>(w, "draw-percent");
+    auto *significance = child<QComboBox>(w, "draw-significance");
+    const QString alphaText = alphaMin->text();
+    const QString rarestText = rarest->text();
+    const QString percentText = percent->text();
+    const QString tip = alphaMin->toolTip();
+    QLocale::setDefault(before);
+    CHECK(alphaText == QStringLiteral("0.800"));
+    CHECK(rarestText == QStringLiteral("0.25"));
+    CHECK(percentText == QStringLiteral("20.0 %"));
+    CHECK(significance->itemText(0) == QStringLiteral("0.05"));
+    CHECK(tip.contains(QStringLiteral("0.800")));
+    CHECK_FALSE(tip.contains(QStringLiteral(" .800")));
 }
