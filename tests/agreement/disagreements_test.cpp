@@ -198,7 +198,7 @@ struct CompareFixture : ProjectFixture {
         c1 = addCoder(QStringLiteral("C01"));
         c2 = addCoder(QStringLiteral("C02"));
         auto l =
-            project.addCoder(QStringLiteral("Test lead"), QStringLiteral("L01"), CoderRole::Lead);
+            addOlderLeadForTesting(project, QStringLiteral("Test lead"), QStringLiteral("L01"));
         REQUIRE(l);
         lead = *l;
         add(c1, F::Problem, 0, 40); // both: agreed
