@@ -94,7 +94,7 @@ void paintAlphaChart(QPainter &p, const std::vector<AlphaChartRow> &rows)
     for (const auto &[value, colour, style, name, alignment] :
         {std::tuple {kAlphaTentative, QColor(0x85, 0x8B, 0x94), Qt::DashLine,
              QStringLiteral("0.667"), Qt::AlignRight},
-            std::tuple {kAlphaReliable, QColor(0x2B, 0x33, 0x40), Qt::SolidLine,
+            std::tuple {kAlphaReliable, QColor(0x5A, 0x3A, 0x8C), Qt::SolidLine,
                 QStringLiteral("0.800"), Qt::AlignLeft}}) {
         p.setPen(QPen(colour, 1.6, style));
         p.drawLine(QPointF(x(value), plotTop - 8), QPointF(x(value), plotBottom));

@@ -109,8 +109,9 @@ QScatterSeries::MarkerShape markerShape(const std::optional<FramingFunction> &f)
 constexpr const char *kThresholdProperty = "fourfoldThreshold";
 
 // Horizontal reference lines at 0.800 and 0.667 across [from, to], named for the legend. Each has
-// a shade of its own (greys, apart from the functions' colours) and a line pattern of its own, so
-// that its legend marker, drawn with the line's pen, tells the two apart on screen and in print.
+// a colour of its own (violet and grey, apart from the functions' colours and the dark grey of
+// the four as sets) and a line pattern of its own, so that its legend marker, drawn with the
+// line's pen, tells the two apart on screen and in print.
 void addThresholds(QChart *chart, double from, double to, QAbstractAxis *x, QAbstractAxis *y)
 {
     const struct {
@@ -120,7 +121,7 @@ void addThresholds(QChart *chart, double from, double to, QAbstractAxis *x, QAbs
         Qt::PenStyle style;
     } lines[] = {
         {kAlphaReliable, ReliabilityWindow::tr("0.800: rely on the variable"),
-            QColor(0x2B, 0x33, 0x40), Qt::SolidLine},
+            QColor(0x5A, 0x3A, 0x8C), Qt::SolidLine},
         {kAlphaTentative, ReliabilityWindow::tr("0.667: tentative conclusions only"),
             QColor(0x85, 0x8B, 0x94), Qt::DashLine},
     };
