@@ -4,6 +4,7 @@
 #include "app/report/report_markup.h"
 #include "app/report/report_method_text.h"
 #include "app/report/report_sections.h"
+#include "app/report/report_text.h"
 #include "core/model/logging.h"
 
 #include <QCoreApplication>
@@ -17,16 +18,6 @@
 namespace fourfold {
 
 namespace {
-
-// The sentences of this file, under a context that lupdate collects.
-struct ReportDocumentText {
-    Q_DECLARE_TR_FUNCTIONS(ReportDocumentText)
-};
-
-QString esc(const QString &s)
-{
-    return s.toHtmlEscaped();
-}
 
 // The style sheet of `flavour`, from the resources (app/report/resources, compiled in under
 // :/report): the full CSS for the HTML file, QTextDocument's subset for the PDF.
@@ -55,12 +46,12 @@ QString header(const ReportData &d)
                      .arg(d.options.bootstrapReplicates)
                      .arg(d.options.seed);
     QString h = QStringLiteral("<header class=\"masthead\"><div class=\"kicker\">%1</div>")
-                    .arg(esc(ReportDocumentText::tr("Inter-coder reliability")));
-    h += QStringLiteral("<h1>%1</h1>").arg(esc(d.title));
+                    .arg(htmlEscaped(ReportDocumentText::tr("Inter-coder reliability")));
+    h += QStringLiteral("<h1>%1</h1>").arg(htmlEscaped(d.title));
     h += QStringLiteral("<p class=\"meta\">%1</p>")
-             .arg(esc(ReportDocumentText::tr("Project “%1” · written %2 by %3 · %4")
-                          .arg(d.projectName, d.generatedAt, d.program,
-                              selection.join(QStringLiteral(" · ")))));
+             .arg(htmlEscaped(ReportDocumentText::tr("Project “%1” · written %2 by %3 · %4")
+                                  .arg(d.projectName, d.generatedAt, d.program,
+                                      selection.join(QStringLiteral(" · ")))));
     h += QStringLiteral("</header>");
     return h;
 }
@@ -74,10 +65,11 @@ QString build(const ReportData &d, ReportFlavour flavour)
     QString html = QStringLiteral("<!DOCTYPE html>\n<html lang=\"%1\"><head><meta "
                                   "charset=\"utf-8\">\n<meta name=\"viewport\" "
                                   "content=\"width=device-width, initial-scale=1\">\n")
-                       .arg(esc(lang));
-    html += QStringLiteral("<meta name=\"generator\" content=\"%1\">\n").arg(esc(d.program));
+                       .arg(htmlEscaped(lang));
+    html +=
+        QStringLiteral("<meta name=\"generator\" content=\"%1\">\n").arg(htmlEscaped(d.program));
     html += QStringLiteral("<title>%1</title>\n<style>\n%2</style>\n</head>\n<body><main>\n")
-                .arg(esc(d.title), styleSheet(flavour));
+                .arg(htmlEscaped(d.title), styleSheet(flavour));
     html += header(d);
     auto section = [&](const QString &id, const QString &title, const QString &body,
                        bool newPage = false) {
@@ -85,7 +77,7 @@ QString build(const ReportData &d, ReportFlavour flavour)
                     .arg(id,
                         print && newPage ? QStringLiteral(" style=\"page-break-before: always\"")
                                          : QString(),
-                        esc(title), body);
+                        htmlEscaped(title), body);
     };
     section(QStringLiteral("method"), ReportDocumentText::tr("Method text"), reportMethodText(m));
     section(QStringLiteral("checklist"),

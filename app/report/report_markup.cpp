@@ -1,5 +1,6 @@
 #include "app/report/report_markup.h"
 
+#include "app/report/report_text.h"
 #include "core/agreement/agreement_report.h"
 
 #include <QCoreApplication>
@@ -7,20 +8,6 @@
 #include <algorithm>
 
 namespace fourfold {
-
-namespace {
-
-// The sentences of this file, under a context that lupdate collects.
-struct ReportDocumentText {
-    Q_DECLARE_TR_FUNCTIONS(ReportDocumentText)
-};
-
-QString esc(const QString &s)
-{
-    return s.toHtmlEscaped();
-}
-
-} // namespace
 
 QColor reportFunctionColour(const QString &analysisId)
 {
@@ -57,7 +44,8 @@ QJsonValue ReportMarkup::value(const QString &analysis, const QString &path) con
 QString ReportMarkup::fig(const QString &analysis, const QString &path, const QString &format) const
 {
     return QStringLiteral("<span class=\"fig\" data-figure=\"%1:%2\" data-format=\"%3\">%4</span>")
-        .arg(esc(analysis), esc(path), format, esc(formatFigure(value(analysis, path), format)));
+        .arg(htmlEscaped(analysis), htmlEscaped(path), format,
+            htmlEscaped(formatFigure(value(analysis, path), format)));
 }
 
 QString ReportMarkup::interval(const QString &analysis, const QString &key) const
@@ -118,7 +106,7 @@ QString ReportMarkup::tableOpen() const
 
 QString ReportMarkup::fillIn(const QString &text)
 {
-    return QStringLiteral("<span class=\"fill\">[%1]</span>").arg(esc(text));
+    return QStringLiteral("<span class=\"fill\">[%1]</span>").arg(htmlEscaped(text));
 }
 
 std::vector<const ReportAnalysis *> ReportMarkup::ofKind(const QString &kind) const
@@ -156,8 +144,8 @@ QString ReportMarkup::chart(const QString &name, const QSizeF &size, const QStri
                     .arg(name)
                     .arg(int(size.width() * fit))
                     .arg(int(size.height() * fit));
-    html +=
-        QStringLiteral("<figcaption class=\"note\">%1</figcaption></figure>").arg(esc(description));
+    html += QStringLiteral("<figcaption class=\"note\">%1</figcaption></figure>")
+                .arg(htmlEscaped(description));
     return html;
 }
 

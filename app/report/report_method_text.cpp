@@ -1,24 +1,12 @@
 #include "app/report/report_method_text.h"
 
+#include "app/report/report_text.h"
+
 #include <QCoreApplication>
 
 #include <vector>
 
 namespace fourfold {
-
-namespace {
-
-// The sentences of this file, under a context that lupdate collects.
-struct ReportDocumentText {
-    Q_DECLARE_TR_FUNCTIONS(ReportDocumentText)
-};
-
-QString esc(const QString &s)
-{
-    return s.toHtmlEscaped();
-}
-
-} // namespace
 
 QString reportMethodText(const ReportMarkup &m)
 {
@@ -27,10 +15,10 @@ QString reportMethodText(const ReportMarkup &m)
     QStringList pseudonyms, amounts;
     for (size_t i = 0; i < d.coders.size(); ++i) {
         const ReportCoder &c = d.coders[i];
-        pseudonyms << esc(c.pseudonym);
+        pseudonyms << htmlEscaped(c.pseudonym);
         const QString base = QStringLiteral("coders.%1.").arg(i);
         amounts << ReportDocumentText::tr("%1 coded %2 articles (%3 spans)")
-                       .arg(esc(c.pseudonym),
+                       .arg(htmlEscaped(c.pseudonym),
                            m.fig(QStringLiteral("report"), base + QStringLiteral("articles"),
                                QStringLiteral("int")),
                            m.fig(QStringLiteral("report"), base + QStringLiteral("spans"),
@@ -55,7 +43,7 @@ QString reportMethodText(const ReportMarkup &m)
               .arg(ReportMarkup::fillIn(ReportDocumentText::tr(
                   "state how the articles were drawn, e.g. a simple random sample "
                   "of the study's articles, with its size and seed")))
-        : esc(d.sampleDraw) + QLatin1Char(' ');
+        : htmlEscaped(d.sampleDraw) + QLatin1Char(' ');
     p += ReportDocumentText::tr("%1 coders (%2) took part: %3. ")
              .arg(QString::number(coders), pseudonyms.join(QStringLiteral(", ")),
                  amounts.join(QStringLiteral("; ")));
@@ -67,7 +55,9 @@ QString reportMethodText(const ReportMarkup &m)
             "Only articles that a coder had marked as finished count for that coder. ");
         QStringList left;
         for (const CountedCodings::LeftOut &l : d.leftOut)
-            left << ReportDocumentText::tr("%1 (%2)").arg(esc(l.coder)).arg(l.articles.size());
+            left << ReportDocumentText::tr("%1 (%2)")
+                        .arg(htmlEscaped(l.coder))
+                        .arg(l.articles.size());
         if (!left.isEmpty())
             p += ReportDocumentText::tr("Articles still in progress were left out: %1. ")
                      .arg(left.join(QStringLiteral(", ")));
@@ -91,7 +81,7 @@ QString reportMethodText(const ReportMarkup &m)
     QStringList values;
     for (const ReportAnalysis *a : m.ofKind(QStringLiteral("function"))) {
         QString v = ReportDocumentText::tr("%1 α = %2")
-                        .arg(esc(a->label.toLower()),
+                        .arg(htmlEscaped(a->label.toLower()),
                             m.fig(a->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
         if (a->result.contains(QStringLiteral("bootstrap_units")))
             v += ReportDocumentText::tr(" (95% CI %1)")
@@ -104,7 +94,7 @@ QString reportMethodText(const ReportMarkup &m)
         "reliability, each function became a binary variable (present or absent) per %1, a "
         "%2 carrying a function when a coder's span of that function overlaps it. ")
             .arg(m.unitWord(1), m.unitWord(1));
-    p += esc(ReportDocumentText::tr(
+    p += htmlEscaped(ReportDocumentText::tr(
         "We report Krippendorff's alpha (Krippendorff, 2004) because it handles any "
         "number of coders, missing data and any level of measurement (Hayes & "
         "Krippendorff, 2007). "));
@@ -117,17 +107,18 @@ QString reportMethodText(const ReportMarkup &m)
                      m.fig(all->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
     p += QStringLiteral(". ");
     if (d.options.bootstrapReplicates > 0)
-        p += esc(ReportDocumentText::tr(
+        p += htmlEscaped(ReportDocumentText::tr(
             "Intervals are 95% percentile bootstrap intervals from %1 resamples of the "
             "units; the table also gives the interval from resampled pairable values "
             "(Hayes & Krippendorff, 2007), which is narrower than its nominal level when "
             "more than two coders are compared. ")
-                     .arg(d.options.bootstrapReplicates));
-    p += esc(ReportDocumentText::tr("Following Krippendorff (2004), variables with α\u00a0≥\u00a0"
-                                    "0.800 are relied on "
-                                    "and variables with 0.667\u00a0≤\u00a0α\u00a0<\u00a0"
-                                    "0.800 support tentative "
-                                    "conclusions only. "));
+                             .arg(d.options.bootstrapReplicates));
+    p += htmlEscaped(
+        ReportDocumentText::tr("Following Krippendorff (2004), variables with α\u00a0≥\u00a0"
+                               "0.800 are relied on "
+                               "and variables with 0.667\u00a0≤\u00a0α\u00a0<\u00a0"
+                               "0.800 support tentative "
+                               "conclusions only. "));
     html += QStringLiteral("<p>%1</p>").arg(p);
 
     QStringList others;
@@ -135,8 +126,9 @@ QString reportMethodText(const ReportMarkup &m)
         for (const ReportAnalysis *a : m.ofKind(kind))
             if (a->error.isEmpty())
                 others << ReportDocumentText::tr("%1 (%2) α = %3")
-                              .arg(esc(a->label),
-                                  esc(m.value(a->id, QStringLiteral("alpha.level")).toString()),
+                              .arg(htmlEscaped(a->label),
+                                  htmlEscaped(
+                                      m.value(a->id, QStringLiteral("alpha.level")).toString()),
                                   m.fig(
                                       a->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
     if (!others.isEmpty())
@@ -154,7 +146,7 @@ QString reportMethodText(const ReportMarkup &m)
                          QStringLiteral("int")),
                     m.fig(QStringLiteral("report"), QStringLiteral("gold.articles"),
                         QStringLiteral("int")),
-                    esc(d.goldDeciders.join(QStringLiteral(", "))),
+                    htmlEscaped(d.goldDeciders.join(QStringLiteral(", "))),
                     m.fig(QStringLiteral("report"), QStringLiteral("gold.with_rationale"),
                         QStringLiteral("int")));
     else
@@ -165,7 +157,7 @@ QString reportMethodText(const ReportMarkup &m)
     p += ReportDocumentText::tr("Coding followed version %1 of the codebook (“%2”)")
              .arg(m.fig(QStringLiteral("report"), QStringLiteral("codebook.version"),
                       QStringLiteral("int")),
-                 esc(d.codebookName));
+                 htmlEscaped(d.codebookName));
     if (d.codingsOtherVersion > 0)
         p += ReportDocumentText::tr("; %1 of %2 codings were made under an earlier version")
                  .arg(m.fig(QStringLiteral("report"),
@@ -177,7 +169,7 @@ QString reportMethodText(const ReportMarkup &m)
     html += QStringLiteral("<p>%1</p>").arg(p);
     html += QStringLiteral("</div>");
     html += QStringLiteral("<p class=\"note\">%1</p>")
-                .arg(esc(ReportDocumentText::tr(
+                .arg(htmlEscaped(ReportDocumentText::tr(
                     "Highlighted brackets are for the authors to complete: the project "
                     "does not record these facts.")));
     return html;
@@ -211,15 +203,17 @@ QString reportChecklist(const ReportMarkup &m)
     };
     QString html = m.tableOpen();
     html += QStringLiteral("<tr><th>%1</th><th>%2</th><th>%3</th></tr>")
-                .arg(esc(ReportDocumentText::tr("#")), esc(ReportDocumentText::tr("Item")),
-                    esc(ReportDocumentText::tr("In this report")));
+                .arg(htmlEscaped(ReportDocumentText::tr("#")),
+                    htmlEscaped(ReportDocumentText::tr("Item")),
+                    htmlEscaped(ReportDocumentText::tr("In this report")));
     int n = 0;
     for (const Item &i : items)
         html +=
             QStringLiteral("<tr><td class=\"num\">%1</td><td>%2</td><td class=\"%3\">%4</td></tr>")
                 .arg(++n)
-                .arg(esc(i.text), i.fromProject ? QStringLiteral("ok") : QStringLiteral("todo"),
-                    esc(i.fromProject
+                .arg(htmlEscaped(i.text),
+                    i.fromProject ? QStringLiteral("ok") : QStringLiteral("todo"),
+                    htmlEscaped(i.fromProject
                             ? ReportDocumentText::tr("filled in from the project")
                             : ReportDocumentText::tr("partly filled in; complete the bracket")));
     html += QStringLiteral("</table>");
@@ -229,16 +223,16 @@ QString reportChecklist(const ReportMarkup &m)
 QString reportReproduce(const ReportMarkup &m)
 {
     const ReportData &d = m.data();
-    QString html =
-        QStringLiteral("<p>%1</p>")
-            .arg(esc(ReportDocumentText::tr("Every figure above is what these commands print (add "
-                                            "--json for all digits):")));
+    QString html = QStringLiteral("<p>%1</p>")
+                       .arg(htmlEscaped(ReportDocumentText::tr(
+                           "Every figure above is what these commands print (add "
+                           "--json for all digits):")));
     QStringList lines;
     for (const ReportAnalysis &a : d.analyses)
         lines << QStringLiteral("fourfold-cli agree PROJECT %1")
                      .arg(a.agreeArguments.join(QLatin1Char(' ')));
     for (QString &line : lines)
-        line = esc(line);
+        line = htmlEscaped(line);
     if (m.print())
         html +=
             QStringLiteral("<p class=\"commands\">%1</p>").arg(lines.join(QStringLiteral("<br>")));
@@ -283,7 +277,7 @@ QString reportReferences()
     };
     QString html = QStringLiteral("<ol class=\"refs\">");
     for (const QString &r : refs)
-        html += QStringLiteral("<li>%1</li>").arg(esc(r));
+        html += QStringLiteral("<li>%1</li>").arg(htmlEscaped(r));
     return html + QStringLiteral("</ol>");
 }
 
