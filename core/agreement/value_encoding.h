@@ -35,7 +35,7 @@ struct EncodedData {
 Result<EncodedData> encodeTable(const ReliabilityTable &table, const EncodingOptions &options);
 // The same, taking the table's cells over instead of copying them (one copy of the unit matrix
 // is held, not two): on success the table keeps its coders, labels and units but no cells
-// (ReliabilityTable::releaseCells); on failure it is left as it was.
+// (ReliabilityTable::takeCells); on failure it is left as it was.
 Result<EncodedData> encodeTableCells(ReliabilityTable &table, const EncodingOptions &options);
 
 // "nominal", "ordinal", "interval", "ratio".

@@ -60,10 +60,9 @@ public:
     QStringList rowText(size_t unit) const;
     // Every cell, unit by unit (units × coders).
     const std::vector<qint32> &cells() const { return m_cells; }
-    // Frees the cells, keeping coders, labels and units (unitCount() stays): for a table whose
-    // cells now live elsewhere, e.g. encoded. cell() and row() may not be called afterwards.
-    void releaseCells() { m_cells = {}; }
-    // The cells, taken out of the table (which then holds none, as after releaseCells).
+    // The cells, taken out of the table, which keeps its coders, labels and units (unitCount()
+    // stays): for cells that now live elsewhere, e.g. encoded. cell() and row() may not be
+    // called afterwards.
     std::vector<qint32> takeCells() { return std::exchange(m_cells, {}); }
     // Replaces every cell's label index l with relabel[l] (a new index into labels(), which
     // `labels` then become); kMissing stays missing.
