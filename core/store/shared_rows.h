@@ -7,8 +7,10 @@
 #include "core/model/error.h"
 
 #include <QByteArray>
+#include <QByteArrayList>
 #include <QHash>
 #include <QString>
+#include <QStringList>
 
 #include <functional>
 
@@ -19,7 +21,7 @@ namespace store {
 // The kinds of shared rows read here, in the order a server must receive them (a row's
 // references come before it).
 enum class SharedKind {
-    Person, // coder: uuid, name, pseudonym, role, created_at, deleted
+    Person, // coder: uuid, name, pseudonym, role, created_at, deleted, disabled
     CodebookVersion, // uuid, number, created_at, created_by (person uuid or null), note, content
     Article, // uuid, external_id, title, outlet, published, language, text, length, sha256,
              // metadata, imported_at, deleted, paragraphs [{start,end,role}], sentences and
@@ -39,11 +41,27 @@ enum class SharedKind {
 Status forEachSharedRow(
     const Database &db, SharedKind kind, const std::function<Status(const QByteArray &)> &visit);
 
+// Hands every row of `kind` to `visit` with its key (its uuid; a gold source's
+// "GOLD_UUID/ANNOTATION_UUID"; an event's row id) in the file's row order, an article without
+// its text and units (its sha256 stands for them): what a team sync compares.
+Status forEachSharedRowKey(const Database &db, SharedKind kind,
+    const std::function<Status(const QString &key, const QByteArray &json)> &visit);
+
+// The rows of `kind` whose keys (as forEachSharedRowKey gives them) are in `keys`, whole, in the
+// file's row order.
+Result<QByteArrayList> sharedRowsOf(const Database &db, SharedKind kind, const QStringList &keys);
+
+// Hands the events of the file's log after the row id `afterId` to `visit` with their row ids,
+// in order (JSON as forEachSharedRow hands it).
+Status forEachEventAfter(const Database &db, qint64 afterId,
+    const std::function<Status(qint64 id, const QByteArray &json)> &visit);
+
 // Writes one shared row (JSON as forEachSharedRow hands it, or as a team project's server sends
 // it) into this file, mapping uuids to row ids; references the file lacks become NULL where the
-// column allows it (a codebook version's author) and fail with Constraint otherwise. Events are
-// not written. InvalidInput for a row that is not a JSON object or an article whose units are
-// not "\x" + hex.
+// column allows it (a codebook version's author) and fail with Constraint otherwise. A row the
+// file holds already (by uuid) is written over where it may change (an article's text and units
+// never do; a gold source is there or not). Events are not written. InvalidInput for a row that is
+// not a JSON object or an article whose units are not "\x" + hex.
 Status writeSharedRow(Database &db, SharedKind kind, const QByteArray &json);
 
 // Every project setting whose key starts with `prefix`, by key (a team working file keeps the

@@ -88,4 +88,25 @@ Status createPersonLogin(ServerConnection &conn, const QString &role, const QStr
         {role.toUtf8(), personUuid.toUtf8(), isLead ? QByteArray("true") : QByteArray("false")});
 }
 
+Result<QString> loginRoleOf(ServerConnection &conn, const QString &personUuid)
+{
+    auto r =
+        conn.query(QStringLiteral("SELECT role_name FROM fourfold.login WHERE person = $1::uuid"),
+            {personUuid.toUtf8()});
+    if (!r)
+        return std::unexpected(r.error());
+    if (r->rows() != 1)
+        return fail(ErrorCode::NotFound,
+            ServerRolesText::tr("The server %1 has no login for the person %2.")
+                .arg(conn.describe(), personUuid));
+    return r->text(0, 0);
+}
+
+Status setLoginAllowed(ServerConnection &conn, const QString &role, bool allowed)
+{
+    return conn.exec(QStringLiteral("ALTER ROLE %1 %2")
+                         .arg(conn.quotedIdentifier(role),
+                             allowed ? QStringLiteral("LOGIN") : QStringLiteral("NOLOGIN")));
+}
+
 } // namespace fourfold

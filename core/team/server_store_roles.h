@@ -29,4 +29,11 @@ Status createTeamGroup(ServerConnection &conn, const QString &groupRole);
 Status createPersonLogin(ServerConnection &conn, const QString &role, const QString &verifier,
     const QString &groupRole, const QString &personUuid, bool isLead);
 
+// The login role of the person `personUuid` (fourfold.login). NotFound when there is none.
+Result<QString> loginRoleOf(ServerConnection &conn, const QString &personUuid);
+
+// Lets the login role `role` log in, or not (its rows and rights stay). Needs a login that may
+// change roles (the administrator's); NotAllowed otherwise.
+Status setLoginAllowed(ServerConnection &conn, const QString &role, bool allowed);
+
 } // namespace fourfold

@@ -16,7 +16,7 @@ const char *columnsOf(ServerTable table)
 {
     switch (table) {
     case ServerTable::Person:
-        return "uuid, name, pseudonym, role, created_at, deleted";
+        return "uuid, name, pseudonym, role, created_at, deleted, disabled";
     case ServerTable::CodebookVersion:
         return "uuid, number, created_at, created_by, note, content";
     case ServerTable::Article:
@@ -129,6 +129,23 @@ Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByt
         return {};
     const QString name = QLatin1String(serverTableName(table));
     const QStringList columns = QString::fromLatin1(columnsOf(table)).split(QStringLiteral(", "));
+    if (table == ServerTable::GoldSource || table == ServerTable::Event) {
+        // Rows without a uuid that never change: what the server has already stays.
+        QByteArray array = "[";
+        for (qsizetype i = 0; i < rows.size(); ++i) {
+            if (i)
+                array += ',';
+            array += rows[i];
+        }
+        array += ']';
+        return conn.run(QStringLiteral("INSERT INTO fourfold.%1 (%2) SELECT %2 FROM "
+                                       "jsonb_populate_recordset(NULL::fourfold.%1, $1::jsonb) "
+                                       "ON CONFLICT (%3) DO NOTHING")
+                            .arg(name, columns.join(QStringLiteral(", ")),
+                                table == ServerTable::Event ? QStringLiteral("source, source_id")
+                                                            : QStringLiteral("gold, annotation")),
+            {array});
+    }
     QStringList sets;
     for (const QString &c : columns) {
         if (c == QLatin1String("uuid"))
@@ -197,6 +214,26 @@ Result<QByteArrayList> selectServerRowsSince(ServerConnection &conn, ServerTable
         if (lastChange)
             *lastChange = std::max(*lastChange, r->integer(i, 1));
     }
+    return out;
+}
+
+Result<QByteArrayList> selectServerRowsByUuid(
+    ServerConnection &conn, ServerTable table, const QStringList &uuids)
+{
+    if (uuids.isEmpty())
+        return QByteArrayList {};
+    const QString name = QLatin1String(serverTableName(table));
+    auto r = conn.query(
+        QStringLiteral("SELECT (to_jsonb(t) - 'change' - 'change_xact' - 'id')::text FROM "
+                       "fourfold.%1 t WHERE t.uuid = ANY($1::uuid[]) ORDER BY t.change")
+            .arg(name),
+        {QStringLiteral("{%1}").arg(uuids.join(QLatin1Char(','))).toLatin1()});
+    if (!r)
+        return std::unexpected(r.error());
+    QByteArrayList out;
+    out.reserve(r->rows());
+    for (int i = 0; i < r->rows(); ++i)
+        out.push_back(r->bytes(i, 0));
     return out;
 }
 

@@ -7,6 +7,7 @@
 
 #include <QByteArray>
 #include <QByteArrayList>
+#include <QStringList>
 
 namespace fourfold {
 
@@ -42,10 +43,10 @@ Status insertServerRows(ServerConnection &conn, ServerTable table, const QByteAr
 Result<QByteArrayList> selectServerRows(
     ServerConnection &conn, ServerTable table, qint64 *lastChange);
 
-// Inserts or overwrites by uuid the coders' objects `rows` of `table` (Assignment, Annotation,
-// Judgement or Link) in one statement; an assignment's "active_seconds" is added to the
-// server's, not written over it. Fails with the server's error (NotAllowed when a row is not the
-// role's to write).
+// Inserts or overwrites by uuid `rows` of `table` in one statement; an assignment's
+// "active_seconds" is added to the server's, not written over it; gold sources and events the
+// server has already are left as they are. Fails with the server's error (NotAllowed when a row
+// is not the role's to write).
 Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByteArrayList &rows);
 
 // The rows of `table` the role may see that changed after `afterChange` or were written by a
@@ -54,6 +55,11 @@ Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByt
 // selectServerRows.
 Result<QByteArrayList> selectServerRowsSince(ServerConnection &conn, ServerTable table,
     qint64 afterChange, const QString &fromXact, qint64 *lastChange);
+
+// The rows of `table` (one with a uuid) the role may see whose uuid is in `uuids` (lower-case
+// uuid text), in change order.
+Result<QByteArrayList> selectServerRowsByUuid(
+    ServerConnection &conn, ServerTable table, const QStringList &uuids);
 
 // The oldest transaction still running as this one sees it (pg_snapshot_xmin of the current
 // snapshot), as text: the next pull reads again whatever such transactions wrote.

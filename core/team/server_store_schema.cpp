@@ -371,7 +371,43 @@ CREATE POLICY write_events ON fourfold.event FOR INSERT
   WITH CHECK ((SELECT fourfold.i_am_lead()) OR person = (SELECT fourfold.my_person()));
 )sql";
 
-constexpr std::array<const char *, kServerSchemaVersion> kServerMigrations {kServerMigration1};
+// Migration 2. A notice to listening clients when shared rows change, so that a working file
+// pulls at once instead of at its next poll: after each insert or update statement on a shared
+// table, NOTIFY on the channel "fourfold_change" with an empty payload, which says nothing about
+// whose rows, which or how many changed (PostgreSQL 15 documentation, NOTIFY: delivered when the
+// transaction commits, and a transaction's identical notices are folded into one). Statement
+// triggers, not row triggers: a push of a thousand rows sends one notice.
+constexpr const char *kServerMigration2 = R"sql(
+CREATE FUNCTION fourfold.notify_change() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  PERFORM pg_notify('fourfold_change', '');
+  RETURN NULL;
+END
+$$;
+
+DO $$
+DECLARE
+  t text;
+BEGIN
+  FOREACH t IN ARRAY ARRAY['person', 'codebook_version', 'article', 'assignment', 'annotation',
+      'link', 'judgement', 'gold_annotation', 'gold_source', 'gold_judgement', 'gold_rejection',
+      'event'] LOOP
+    EXECUTE format('CREATE TRIGGER notify_change AFTER INSERT OR UPDATE ON fourfold.%I '
+                   'FOR EACH STATEMENT EXECUTE FUNCTION fourfold.notify_change()', t);
+  END LOOP;
+END
+$$;
+)sql";
+
+// Migration 3. A person can be disabled (team people --disable): their rows stay, their login
+// role may no longer log in (ALTER ROLE ... NOLOGIN), and every lead's file learns it by sync.
+constexpr const char *kServerMigration3 = R"sql(
+ALTER TABLE fourfold.person ADD COLUMN disabled smallint NOT NULL DEFAULT 0
+  CHECK (disabled IN (0, 1));
+)sql";
+
+constexpr std::array<const char *, kServerSchemaVersion> kServerMigrations {
+    kServerMigration1, kServerMigration2, kServerMigration3};
 static_assert(std::ranges::none_of(kServerMigrations, [](const char *m) { return m == nullptr; }),
     "kServerSchemaVersion is higher than the number of migrations in kServerMigrations");
 

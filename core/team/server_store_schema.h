@@ -2,8 +2,9 @@
 // The schema of a team project on a PostgreSQL server: the rows people share (people, codebook
 // versions, articles with their frozen units, assignments, annotations, links, answers, gold
 // with its provenance, the event log), each stamped with a server-assigned change number, and
-// the row-level security policies that keep coders blind. Ordered migrations and a schema
-// version, as in the project file (core/store/schema.cpp); all of it lives in the schema
+// the row-level security policies that keep coders blind, and a notice to listening clients
+// (NOTIFY fourfold_change, see TeamListener) when shared rows change. Ordered migrations and a
+// schema version, as in the project file (core/store/schema.cpp); all of it lives in the schema
 // "fourfold" of one database.
 
 #include "core/model/error.h"
@@ -13,7 +14,7 @@ namespace fourfold {
 class ServerConnection;
 
 // The server schema version this build writes. Migration n takes a server from n-1 to n.
-inline constexpr int kServerSchemaVersion = 1;
+inline constexpr int kServerSchemaVersion = 3;
 
 // The server's schema version: 0 when the database holds no team project.
 Result<int> serverSchemaVersion(ServerConnection &conn);

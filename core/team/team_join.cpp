@@ -11,10 +11,12 @@
 #include "core/team/server_store_schema.h"
 #include "core/team/team_project.h"
 #include "core/team/team_rows.h"
+#include "core/team/team_shared_sync.h"
 
 #include <QCoreApplication>
 #include <QFile>
 #include <QFileInfo>
+#include <QUuid>
 
 namespace fourfold {
 
@@ -141,6 +143,15 @@ Result<JoinReport> TeamProject::join(
             FOURFOLD_TRY_STATUS(
                 store::setSetting(*db, lastChangeSettingKey(), QString::number(report.lastChange)));
             FOURFOLD_TRY_STATUS(store::setSetting(*db, lastXminSettingKey(), *xmin));
+            FOURFOLD_TRY_STATUS(recordSharedBases(*db));
+            FOURFOLD_TRY_STATUS(store::setSetting(
+                *db, fileSettingKey(), QUuid::createUuid().toString(QUuid::WithoutBraces)));
+            auto lastEvent =
+                store::scalar(*db, QStringLiteral("SELECT coalesce(max(id), 0) FROM event_log"));
+            if (!lastEvent)
+                return std::unexpected(lastEvent.error());
+            FOURFOLD_TRY_STATUS(
+                store::setSetting(*db, lastEventSettingKey(), QString::number(*lastEvent)));
             auto counts = store::projectCounts(*db);
             if (!counts)
                 return std::unexpected(counts.error());

@@ -12,15 +12,15 @@
 #include "core/team/server_store_roles.h"
 #include "core/team/server_store_rows.h"
 #include "core/team/server_store_schema.h"
+#include "core/team/team_password_files.h"
 #include "core/team/team_rows.h"
+#include "core/team/team_shared_sync.h"
 
 #include <QCoreApplication>
 #include <QDir>
 #include <QFile>
 #include <QFileInfo>
 #include <QHash>
-#include <QRandomGenerator>
-#include <QRegularExpression>
 #include <QSaveFile>
 
 #include <algorithm>
@@ -70,79 +70,6 @@ private:
     QByteArrayList m_rows;
     qint64 m_bytes = 0;
 };
-
-// A password of 24 letters and digits (about 143 bits) from the system's random source.
-QString newPassword()
-{
-    static constexpr char kAlphabet[] =
-        "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789";
-    QString out;
-    for (int i = 0; i < 24; ++i)
-        out += QLatin1Char(kAlphabet[QRandomGenerator::system()->bounded(62)]);
-    return out;
-}
-
-// A field of a password file: ':' and '\' escaped with '\' (PostgreSQL 15 documentation,
-// 34.16 "The Password File").
-QString pgpassField(QString value)
-{
-    value.replace(QLatin1String("\\"), QLatin1String("\\\\"));
-    value.replace(QLatin1String(":"), QLatin1String("\\:"));
-    return value;
-}
-
-// The file name for a person's password file: the pseudonym when it makes a plain file name,
-// else the role's name (letters, digits and _ only).
-QString passwordFileName(const QString &pseudonym, const QString &role)
-{
-    static const QRegularExpression plain(QStringLiteral("^[A-Za-z0-9_-][A-Za-z0-9._-]*$"));
-    return (plain.match(pseudonym).hasMatch() ? pseudonym : role) + QStringLiteral(".pgpass");
-}
-
-// Writes `text` to `path` readable and writable by its owner only.
-Status writePrivateFile(const QString &path, const QByteArray &text)
-{
-    QFile file(path);
-    if (!file.open(QIODevice::WriteOnly | QIODevice::NewOnly)
-        || !file.setPermissions(QFileDevice::ReadOwner | QFileDevice::WriteOwner)
-        || file.write(text) != text.size() || !file.flush()) {
-        file.remove();
-        return fail(ErrorCode::Io,
-            TeamProjectText::tr("Could not write the password file %1.").arg(path),
-            file.errorString());
-    }
-    return {};
-}
-
-// Creates `dir` with mode 0700, or takes an existing empty one (and sets 0700).
-Status prepareCredentialsDir(const QString &dir, bool *created)
-{
-    QFileInfo info(dir);
-    *created = false;
-    if (info.isSymLink())
-        return fail(ErrorCode::InvalidArgument,
-            TeamProjectText::tr("%1 is a symbolic link; name a new folder for the password files.")
-                .arg(dir));
-    if (info.exists()) {
-        if (!info.isDir()
-            || !QDir(dir).isEmpty(
-                QDir::AllEntries | QDir::NoDotAndDotDot | QDir::Hidden | QDir::System))
-            return fail(ErrorCode::Duplicate,
-                TeamProjectText::tr(
-                    "%1 is not an empty folder; name a new folder for the password files.")
-                    .arg(dir));
-    } else {
-        if (!QDir().mkpath(dir))
-            return fail(
-                ErrorCode::Io, TeamProjectText::tr("Could not create the folder %1.").arg(dir));
-        *created = true;
-    }
-    if (!QFile::setPermissions(
-            dir, QFileDevice::ReadOwner | QFileDevice::WriteOwner | QFileDevice::ExeOwner))
-        return fail(
-            ErrorCode::Io, TeamProjectText::tr("Could not make %1 private to its owner.").arg(dir));
-    return {};
-}
 
 struct PlannedLogin {
     Coder person;
@@ -294,7 +221,11 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
     if (sent)
         sent = sendKind(store::SharedKind::GoldRejection, ServerTable::GoldRejection, &report.gold);
     if (sent)
-        sent = sendKind(store::SharedKind::Event, ServerTable::Event, &report.events);
+        sent = store::forEachEventAfter(db, 0, [&](qint64 id, const QByteArray &json) {
+            ++report.events;
+            report.lastEvent = std::max(report.lastEvent, id);
+            return batch.add(ServerTable::Event, json);
+        });
     if (sent)
         sent = batch.flush();
     if (!sent)
@@ -324,11 +255,13 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
     if (!last)
         return abandon(last.error());
     report.lastChange = last->integer(0, 0);
-    auto xmin = serverSnapshotXmin(*conn);
-    if (!xmin)
-        return abandon(xmin.error());
     if (auto st = conn->exec(QStringLiteral("COMMIT")); !st)
         return abandon(st.error());
+    // Taken after the commit, so the first pull does not read the published rows again (a
+    // snapshot inside the publishing transaction would name that transaction as still running).
+    auto xmin = serverSnapshotXmin(*conn);
+    if (!xmin)
+        return std::unexpected(xmin.error());
 
     // The server holds the project now; the file records where, and whose working file it is.
     if (auto st = store::setSetting(project.db(), serverSettingKey(), *recordable); !st) {
@@ -345,6 +278,11 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
         FOURFOLD_TRY_STATUS(store::setSetting(project.db(), lastXminSettingKey(), *xmin));
         for (const auto &[key, value] : bases)
             FOURFOLD_TRY_STATUS(store::setSetting(project.db(), key, value));
+        FOURFOLD_TRY_STATUS(recordSharedBases(project.db()));
+        // Publish sent the whole event log, unmarked.
+        FOURFOLD_TRY_STATUS(store::setSetting(project.db(), fileSettingKey(), QString()));
+        FOURFOLD_TRY_STATUS(store::setSetting(
+            project.db(), lastEventSettingKey(), QString::number(report.lastEvent)));
         return {};
     });
     if (!recorded)

@@ -14,6 +14,8 @@
 namespace fourfold {
 
 class Project;
+struct NewPerson;
+struct SignedIn;
 
 // One person's login on the server, as publish made it.
 struct TeamLogin {
@@ -38,6 +40,7 @@ struct PublishReport {
     qint64 judgements = 0;
     qint64 gold = 0; // gold spans, answers and rejections
     qint64 events = 0;
+    qint64 lastEvent = 0; // the row id of the last event sent
 };
 
 struct JoinReport {
@@ -60,6 +63,7 @@ struct SyncReport {
     qint64 pushed = 0; // objects sent to the server (new or changed here, or coding time)
     qint64 pulled = 0; // objects written into the file from the server
     qint64 conflicts = 0; // objects changed both here and there: the later kept, both recorded
+    qint64 events = 0; // events of this file's log sent
     qint64 lastChange = 0;
 };
 
@@ -71,10 +75,21 @@ struct TeamStatus {
     qint64 lastChange = 0; // the highest server change number the file holds
     QString lastSync; // ISO 8601 UTC of the last sync that completed; empty if none yet
     // Objects the next sync would send: changed here since they were last synced, or new, or
-    // with coding time not yet sent; by portable type ("annotation", "assignment", …).
+    // with coding time not yet sent; by type ("annotation", "assignment", … and in a lead's
+    // file "person", "codebook_version", "article", "gold_annotation", "gold_source",
+    // "gold_judgement", "gold_rejection").
     qint64 waiting = 0;
     QMap<QString, qint64> waitingByType;
     qint64 openConflicts = 0; // conflicts found by syncs that the lead has not decided
+};
+
+// A person's login on a running team project, as addPerson or setPersonDisabled left it.
+struct TeamPersonReport {
+    QString pseudonym;
+    QString role; // the PostgreSQL login role
+    bool lead = false;
+    bool loginAllowed = true;
+    QString passwordFile; // a new person's password file (empty when disabling or enabling)
 };
 
 class TeamProject
@@ -93,6 +108,11 @@ public:
     static QString lastXminSettingKey() { return QStringLiteral("team.last_xmin"); }
     // When the last sync completed (ISO 8601 UTC).
     static QString lastSyncSettingKey() { return QStringLiteral("team.last_sync"); }
+    // The row id of the last event of this file's log sent to the server.
+    static QString lastEventSettingKey() { return QStringLiteral("team.last_event"); }
+    // What marks this file's events on the server (empty for the published file; a uuid for
+    // a joined one), so events of several files never take each other's place.
+    static QString fileSettingKey() { return QStringLiteral("team.file"); }
 
     // Creates the team project of `project` on the empty database `server` (a libpq connection
     // string; the login must own the database and may create roles): the schema, a group role
@@ -130,10 +150,33 @@ public:
     // only on the server → written here, changed on both → the version modified later is kept
     // (ties by the higher digest) on both sides and both versions are recorded as a conflict in
     // this file for the lead; coding time adds up. A coder's file sends only the coder's own
-    // objects (the server refuses anything else). One transaction on each side: on failure
-    // nothing is kept. People, articles, codebook versions and gold are not synced yet.
+    // objects (the server refuses anything else). The shared rows (people, codebook versions,
+    // articles, gold) come into every file as far as its person may read them, and a lead's
+    // file sends those it changed (team_shared_sync.h: the rule for a row changed in two
+    // leads' files); each file's new events go to the server's log. One transaction on each
+    // side: on failure nothing is kept.
     // Fails with InvalidArgument for a file that is not a team working file, or as join.
     static Result<SyncReport> sync(Project &project);
+
+    // Adds `person` to the team project of the lead's working file `project`, as the signed-in
+    // lead `by` (People::add, logged): in the file, on the server, and as a login role with a
+    // random password, written to a new password file in `credentialsDir` (created with mode
+    // 0700 when new; the folder publish wrote may be used again). `admin` is a connection
+    // string of a login that may create roles — the administrator who published (empty: the
+    // file's server). The file's change commits only after the server's: on any failure
+    // neither changed and no password file is left. Fails as People::add; NotAllowed (saying
+    // so) when the login may not create roles; Duplicate when the role or the password file
+    // exists; InvalidArgument for a file that is not a team working file; the server's error.
+    static Result<TeamPersonReport> addPerson(Project &project, const SignedIn &by,
+        const NewPerson &person, const QString &credentialsDir, const QString &admin = {});
+
+    // Disables the person `pseudonym` (or enables them again) in the file and on the server,
+    // and takes their login role's right to log in away (or gives it back): their codings
+    // stay, they take no new assignments and cannot reach the server. As addPerson: both or
+    // neither; fails as People::setDisabled, NotFound for a person without a login, NotAllowed
+    // when the login may not change roles.
+    static Result<TeamPersonReport> setPersonDisabled(Project &project, const SignedIn &by,
+        const QString &pseudonym, bool disabled, const QString &admin = {});
 
     // What `project`, a working file, holds of its team project and what its next sync would
     // send (the objects sync compares with their last synced version, counted the same way).

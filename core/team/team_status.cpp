@@ -9,6 +9,7 @@
 #include "core/store/shared_rows.h"
 #include "core/team/team_project.h"
 #include "core/team/team_rows.h"
+#include "core/team/team_shared_sync.h"
 
 #include <QCoreApplication>
 
@@ -66,6 +67,17 @@ Result<TeamStatus> TeamProject::status(const Project &project)
                 ++status.waiting;
                 ++status.waitingByType[row.type];
             }
+        }
+    }
+    // A lead's file also sends the shared rows it changed (people, codebook versions,
+    // articles, gold).
+    if (status.lead) {
+        auto shared = sharedRowsWaiting(db, *bases);
+        if (!shared)
+            return std::unexpected(shared.error());
+        for (auto it = shared->cbegin(); it != shared->cend(); ++it) {
+            status.waiting += it.value();
+            status.waitingByType[it.key()] += it.value();
         }
     }
     auto conflicts = store::mergeConflicts(db, false);

@@ -11,9 +11,11 @@
 #include "core/team/server_store_rows.h"
 #include "core/team/team_project.h"
 #include "core/team/team_rows.h"
+#include "core/team/team_shared_sync.h"
 
 #include <QCoreApplication>
 #include <QDateTime>
+#include <QUuid>
 
 #include <map>
 #include <optional>
@@ -97,6 +99,19 @@ Result<SyncReport> TeamProject::sync(Project &project)
     auto bases = store::settingsWithPrefix(db, QLatin1String(kTeamBasePrefix));
     if (!bases)
         return std::unexpected(bases.error());
+    QString myUuid;
+    for (const Coder &c : *people)
+        if (c.pseudonym == pseudonym->value_or(QString()))
+            myUuid = c.uuid;
+    // The events this file sends are marked with the file (a working file made before files
+    // were named gets its name now); the published file's are unmarked, as publish sent them.
+    auto source = store::setting(db, fileSettingKey());
+    auto lastEventSetting = store::setting(db, lastEventSettingKey());
+    for (auto *r : {&source, &lastEventSetting})
+        if (!*r)
+            return std::unexpected(r->error());
+    const QString fileSource = source->value_or(QUuid::createUuid().toString(QUuid::WithoutBraces));
+    qint64 lastEvent = lastEventSetting->value_or(QString()).toLongLong();
 
     auto abandon = [&](const Error &e) -> Result<SyncReport> {
         (void)conn->exec(QStringLiteral("ROLLBACK"));
@@ -110,6 +125,12 @@ Result<SyncReport> TeamProject::sync(Project &project)
     auto xmin = serverSnapshotXmin(*conn);
     if (!xmin)
         return abandon(xmin.error());
+
+    // The shared rows: what the file changed (a lead's) and what the server did.
+    const qint64 pulledFrom = report.lastChange;
+    SharedRowSync shared(db, *conn, lead, *bases);
+    if (auto st = shared.read(pulledFrom, **lastXmin, &report.lastChange); !st)
+        return abandon(st.error());
 
     // Every object's versions, by key, in the order objects must be written (type, then key).
     std::map<std::pair<int, QString>, Versions> objects;
@@ -127,13 +148,17 @@ Result<SyncReport> TeamProject::sync(Project &project)
             v.local = std::move(row);
         }
     }
+    QStringList articlesNamed; // by the server's rows of coders' objects
     for (const char *type : kTypes) {
-        auto rows = selectServerRowsSince(*conn, serverTableOf(QLatin1String(type)),
-            report.lastChange, **lastXmin, &report.lastChange);
+        auto rows = selectServerRowsSince(
+            *conn, serverTableOf(QLatin1String(type)), pulledFrom, **lastXmin, &report.lastChange);
         if (!rows)
             return abandon(rows.error());
         for (const QByteArray &json : *rows) {
             store::PortableRow row = portableFromServer(QLatin1String(type), json);
+            if (const QString article = row.content.value(QLatin1String("article")).toString();
+                !article.isEmpty())
+                articlesNamed.push_back(article);
             Versions &v = objects[{int(serverTableOf(row.type)), teamObjectKey(row)}];
             if (v.coder.isEmpty())
                 v.coder = row.type == QLatin1String("link")
@@ -146,6 +171,11 @@ Result<SyncReport> TeamProject::sync(Project &project)
             v.server = std::move(row);
         }
     }
+
+    if (auto st = shared.fetchMissingArticles(articlesNamed); !st)
+        return abandon(st.error());
+    if (auto st = shared.decide(&report.conflicts); !st)
+        return abandon(st.error());
 
     // Decide each object; what goes up is sent per table, what comes down is written here.
     std::map<int, QByteArrayList> push;
@@ -188,14 +218,30 @@ Result<SyncReport> TeamProject::sync(Project &project)
             ++report.pushed;
         }
     }
+    // References first on both sides: people, codebook versions and articles, then the coders'
+    // objects, then gold (which refers to coders' spans) and the event log.
+    if (auto st = shared.push(true, &report.pushed); !st)
+        return abandon(st.error());
     for (auto &[table, rows] : push)
         if (auto st = upsertServerObjects(*conn, ServerTable(table), rows); !st)
             return abandon(st.error());
+    if (auto st = shared.push(false, &report.pushed); !st)
+        return abandon(st.error());
+    if (auto st = pushEvents(
+            db, *conn, fileSource, lead ? QString() : myUuid, &lastEvent, &report.events);
+        !st)
+        return abandon(st.error());
+    if (auto st = shared.writeHere(true, &report.pulled); !st)
+        return abandon(st.error());
     for (const store::PortableRow &row : writeHere) {
         if (auto st = store::writePortableRow(db, row); !st)
             return abandon(st.error());
         ++report.pulled;
     }
+    if (auto st = shared.writeHere(false, &report.pulled); !st)
+        return abandon(st.error());
+    if (auto st = shared.recordBases(); !st)
+        return abandon(st.error());
 
     // After the push the server holds every changed object as it now is: the new base, and the
     // coding time of each assignment (which adds up on the server).
@@ -223,6 +269,10 @@ Result<SyncReport> TeamProject::sync(Project &project)
         !st)
         return abandon(st.error());
     if (auto st = store::setSetting(db, lastXminSettingKey(), *xmin); !st)
+        return abandon(st.error());
+    if (auto st = store::setSetting(db, lastEventSettingKey(), QString::number(lastEvent)); !st)
+        return abandon(st.error());
+    if (auto st = store::setSetting(db, fileSettingKey(), fileSource); !st)
         return abandon(st.error());
     if (auto st = store::setSetting(
             db, lastSyncSettingKey(), QDateTime::currentDateTimeUtc().toString(Qt::ISODate));

@@ -7,6 +7,7 @@
 #include "core/project/project.h"
 #include "core/project/testing/project_database.h"
 #include "core/store/project_tables.h"
+#include "core/team/server_store_schema.h"
 #include "core/team/team_project.h"
 #include "tests/support/cli_run.h"
 #include "tests/team/published_project.h"
@@ -35,7 +36,7 @@ const QStringList kGoldTables {QStringLiteral("gold_annotation"), QStringLiteral
 TEST_CASE("Publishing sends every shared row and writes one private password file per person")
 {
     PublishedProject p;
-    CHECK(p.report.schemaVersion == 1);
+    CHECK(p.report.schemaVersion == kServerSchemaVersion);
     CHECK(p.report.people == 4);
     CHECK(p.report.articles == 3);
     CHECK(p.report.assignments == 6);
@@ -102,7 +103,8 @@ TEST_CASE("Publishing sends every shared row and writes one private password fil
 
     // The lead's role reads everything, and every row carries its own change number.
     ServerSql lead(p.loginOf(QStringLiteral("L01")));
-    CHECK(lead.value(QStringLiteral("SELECT version FROM fourfold.schema_version")) == "1");
+    CHECK(lead.value(QStringLiteral("SELECT version FROM fourfold.schema_version"))
+        == QString::number(kServerSchemaVersion));
     CHECK(lead.value(QStringLiteral("SELECT count(*) FROM fourfold.person")) == "4");
     CHECK(lead.value(QStringLiteral("SELECT count(*) FROM fourfold.article")) == "3");
     CHECK(lead.value(QStringLiteral("SELECT count(*) FROM fourfold.assignment")) == "6");
@@ -347,7 +349,7 @@ TEST_CASE("The CLI publishes a project and names each person's password file")
     REQUIRE(run.exitCode == 0);
     const QJsonObject json = cliJson(run);
     CHECK(json.value(QStringLiteral("annotations")).toInteger() == 8);
-    CHECK(json.value(QStringLiteral("schema_version")).toInteger() == 1);
+    CHECK(json.value(QStringLiteral("schema_version")).toInteger() == kServerSchemaVersion);
     const QJsonArray logins = json.value(QStringLiteral("logins")).toArray();
     REQUIRE(logins.size() == 4);
     CHECK(logins[0].toObject().value(QStringLiteral("pseudonym")).toString() == "C01");
