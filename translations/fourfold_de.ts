@@ -4009,6 +4009,11 @@
         <source>The server %1 has a role %2 already; a team project needs a new role for each person (use another database name, or drop the old role).</source>
         <translation>Der Server %1 hat bereits eine Rolle %2; ein Teamprojekt braucht für jede Person eine neue Rolle (verwenden Sie einen anderen Datenbanknamen oder löschen Sie die alte Rolle).</translation>
     </message>
+    <message>
+        <location filename="../core/team/server_store_roles.cpp" line="100"/>
+        <source>The server %1 has no login for the person %2.</source>
+        <translation>Der Server %1 hat keine Anmeldung für die Person %2.</translation>
+    </message>
 </context>
 <context>
     <name>ServerSchema</name>
@@ -4476,6 +4481,24 @@
     </message>
 </context>
 <context>
+    <name>TeamPeopleText</name>
+    <message>
+        <location filename="../core/team/team_people.cpp" line="38"/>
+        <source>%1 is not a team working file (made by team publish or team join).</source>
+        <translation>%1 ist keine Team-Arbeitsdatei (erstellt mit team publish oder team join).</translation>
+    </message>
+    <message>
+        <location filename="../core/team/team_people.cpp" line="47"/>
+        <source>The login %1 may not create or change login roles. Adding or disabling a person needs the administrator&apos;s login that published the team project (give it with --server).</source>
+        <translation>Die Anmeldung %1 darf keine Anmelderollen anlegen oder ändern. Eine Person hinzuzufügen oder zu deaktivieren erfordert die Anmeldung der Administration, die das Teamprojekt veröffentlicht hat (mit --server angeben).</translation>
+    </message>
+    <message>
+        <location filename="../core/team/team_people.cpp" line="88"/>
+        <source>%1 exists already; a new person&apos;s password file needs a new name.</source>
+        <translation>%1 existiert bereits; die Passwortdatei einer neuen Person braucht einen neuen Namen.</translation>
+    </message>
+</context>
+<context>
     <name>TeamProjectText</name>
     <message>
         <location filename="../core/team/team_join.cpp" line="62"/>
@@ -4505,26 +4528,31 @@
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="111"/>
+        <location filename="../core/team/team_password_files.cpp" line="53"/>
         <source>Could not write the password file %1.</source>
         <translation>Die Passwortdatei %1 konnte nicht geschrieben werden.</translation>
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="124"/>
+        <location filename="../core/team/team_password_files.cpp" line="65"/>
         <source>%1 is a symbolic link; name a new folder for the password files.</source>
         <translation>%1 ist ein symbolischer Link; nennen Sie einen neuen Ordner für die Passwortdateien.</translation>
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="131"/>
+        <location filename="../core/team/team_password_files.cpp" line="73"/>
         <source>%1 is not an empty folder; name a new folder for the password files.</source>
         <translation>%1 ist kein leerer Ordner; nennen Sie einen neuen Ordner für die Passwortdateien.</translation>
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="137"/>
+        <location filename="../core/team/team_password_files.cpp" line="79"/>
         <source>Could not create the folder %1.</source>
         <translation>Der Ordner %1 konnte nicht angelegt werden.</translation>
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="143"/>
+        <location filename="../core/team/team_password_files.cpp" line="85"/>
         <source>Could not make %1 private to its owner.</source>
         <translation>%1 konnte nicht nur für seinen Besitzer zugänglich gemacht werden.</translation>
     </message>
@@ -5254,6 +5282,7 @@
         <location filename="../app/cli/command_team.cpp" line="117"/>
         <location filename="../app/cli/command_team.cpp" line="176"/>
         <location filename="../app/cli/command_team.cpp" line="220"/>
+        <location filename="../app/cli/command_team_people.cpp" line="63"/>
         <source>Print the result as JSON.</source>
         <translation>Das Ergebnis als JSON ausgeben.</translation>
     </message>
@@ -6532,11 +6561,13 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="40"/>
+        <location filename="../app/cli/passphrase_input.cpp" line="22"/>
         <source>The passphrase file %1 could not be read.</source>
         <translation>Die Passphrase-Datei %1 konnte nicht gelesen werden.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="49"/>
+        <location filename="../app/cli/passphrase_input.cpp" line="31"/>
         <source>The passphrase in %1 is not UTF-8.</source>
         <translation>Die Passphrase in %1 ist kein UTF-8.</translation>
     </message>
@@ -6557,6 +6588,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="81"/>
+        <location filename="../app/cli/command_team_people.cpp" line="35"/>
         <source>coder (the default) or lead.</source>
         <translation>coder (Standard) oder lead.</translation>
     </message>
@@ -6577,6 +6609,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="96"/>
+        <location filename="../app/cli/command_team_people.cpp" line="46"/>
         <source>Enable a disabled person again.</source>
         <translation>Eine deaktivierte Person wieder aktivieren.</translation>
     </message>
@@ -6587,6 +6620,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="101"/>
+        <location filename="../app/cli/command_team_people.cpp" line="51"/>
         <source>That lead&apos;s passphrase: the first line of FILE (- or left out: standard input).</source>
         <translation>Die Passphrase dieser Leitung: die erste Zeile von DATEI (- oder weggelassen: Standardeingabe).</translation>
     </message>
@@ -6617,21 +6651,25 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="136"/>
+        <location filename="../app/cli/command_team_people.cpp" line="92"/>
         <source>--role takes coder or lead, not &quot;%1&quot;.</source>
         <translation>--role nimmt coder oder lead, nicht „%1“.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="139"/>
+        <location filename="../app/cli/command_team_people.cpp" line="95"/>
         <source>name the new person&apos;s pseudonym with --pseudonym.</source>
         <translation>nennen Sie das Pseudonym der neuen Person mit --pseudonym.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="142"/>
+        <location filename="../app/cli/command_team_people.cpp" line="98"/>
         <source>a lead needs a passphrase: give it with --passphrase-file FILE (- for standard input).</source>
         <translation>eine Leitung braucht eine Passphrase: geben Sie sie mit --passphrase-file DATEI an (- für die Standardeingabe).</translation>
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="150"/>
+        <location filename="../app/cli/command_team_people.cpp" line="104"/>
         <source>only one passphrase can come from standard input; give the other in a file.</source>
         <translation>nur eine Passphrase kann aus der Standardeingabe kommen; geben Sie die andere in einer Datei an.</translation>
     </message>
@@ -6657,6 +6695,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="204"/>
+        <location filename="../app/cli/command_team_people.cpp" line="85"/>
         <source>changing people needs a lead: name yourself with --lead L (your passphrase on standard input or with --lead-passphrase-file FILE).</source>
         <translation>Personen zu ändern braucht eine Leitung: nennen Sie sich mit --lead L (Ihre Passphrase über die Standardeingabe oder mit --lead-passphrase-file DATEI).</translation>
     </message>
@@ -6980,6 +7019,7 @@
     <message>
         <location filename="../app/cli/command_team.cpp" line="191"/>
         <location filename="../app/cli/command_team.cpp" line="233"/>
+        <location filename="../app/cli/command_team_people.cpp" line="82"/>
         <source>expected exactly one working file.</source>
         <translation>genau eine Arbeitsdatei erwartet.</translation>
     </message>
@@ -7168,6 +7208,76 @@
         <location filename="../app/cli/main.cpp" line="162"/>
         <source>Run &quot;fourfold-cli --help&quot; for the list of commands.</source>
         <translation>„fourfold-cli --help“ zeigt die Liste der Befehle.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="30"/>
+        <source>Add a person with this name (kept in the project files, never printed).</source>
+        <translation>Eine Person mit diesem Namen hinzufügen (bleibt in den Projektdateien, wird nie ausgegeben).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="33"/>
+        <source>The new person&apos;s pseudonym, unique in the project.</source>
+        <translation>Das Pseudonym der neuen Person, eindeutig im Projekt.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="38"/>
+        <source>A new lead&apos;s passphrase for the desk: the first line of FILE (- for standard input).</source>
+        <translation>Die Passphrase einer neuen Leitung für den Arbeitsplatz: die erste Zeile von FILE (- für die Standardeingabe).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="42"/>
+        <source>Disable the person with pseudonym P: their codings stay; their login may no longer reach the server.</source>
+        <translation>Die Person mit dem Pseudonym P deaktivieren: ihre Codierungen bleiben; ihre Anmeldung erreicht den Server nicht mehr.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="48"/>
+        <source>The lead making the change (your pseudonym in the working file).</source>
+        <translation>Die Leitung, die die Änderung vornimmt (Ihr Pseudonym in der Arbeitsdatei).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="55"/>
+        <source>The administrator&apos;s login that may create roles, as a libpq connection string or URI (default: the working file&apos;s server); its password comes from ~/.pgpass, PGPASSFILE or PGPASSWORD.</source>
+        <translation>Die Anmeldung der Administration, die Rollen anlegen darf, als libpq-Verbindungszeichenfolge oder URI (Standard: der Server der Arbeitsdatei); ihr Passwort kommt aus ~/.pgpass, PGPASSFILE oder PGPASSWORD.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="60"/>
+        <source>The folder for a new person&apos;s password file (default: FILE.credentials beside the working file; created private if new).</source>
+        <translation>Der Ordner für die Passwortdatei einer neuen Person (Standard: FILE.credentials neben der Arbeitsdatei; neu angelegt nur für Sie lesbar).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="67"/>
+        <source>The lead&apos;s working file of the team project.</source>
+        <translation>Die Arbeitsdatei der Leitung im Teamprojekt.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="69"/>
+        <source>Add a person to a running team project (in the working file, on the server and as a login role with its own password file), or disable or enable one. Needs a lead of the project and the administrator&apos;s login.</source>
+        <translation>Einem laufenden Teamprojekt eine Person hinzufügen (in der Arbeitsdatei, auf dem Server und als Anmelderolle mit eigener Passwortdatei) oder eine deaktivieren oder aktivieren. Erfordert eine Leitung des Projekts und die Anmeldung der Administration.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="80"/>
+        <source>give exactly one of --add, --disable and --enable.</source>
+        <translation>geben Sie genau eines von --add, --disable und --enable an.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="153"/>
+        <source>Added %1 with the login %2; the password is in %3 (hand it to them alone).</source>
+        <translation>%1 mit der Anmeldung %2 hinzugefügt; das Passwort steht in %3 (nur dieser Person geben).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="157"/>
+        <source>Enabled %1: the login %2 may log in again.</source>
+        <translation>%1 aktiviert: die Anmeldung %2 darf sich wieder anmelden.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="160"/>
+        <source>Disabled %1: the login %2 may no longer log in; their codings stay.</source>
+        <translation>%1 deaktiviert: die Anmeldung %2 darf sich nicht mehr anmelden; die Codierungen bleiben.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="304"/>
+        <source>  people    Add a person to a running team project, or disable one.</source>
+        <translation>  people    Einem laufenden Teamprojekt eine Person hinzufügen oder eine deaktivieren.</translation>
     </message>
 </context>
 <context>

@@ -4009,6 +4009,11 @@
         <source>The server %1 has a role %2 already; a team project needs a new role for each person (use another database name, or drop the old role).</source>
         <translation>De server %1 heeft al een rol %2; een teamproject heeft voor elke persoon een nieuwe rol nodig (gebruik een andere databasenaam of verwijder de oude rol).</translation>
     </message>
+    <message>
+        <location filename="../core/team/server_store_roles.cpp" line="100"/>
+        <source>The server %1 has no login for the person %2.</source>
+        <translation>De server %1 heeft geen aanmelding voor de persoon %2.</translation>
+    </message>
 </context>
 <context>
     <name>ServerSchema</name>
@@ -4476,6 +4481,24 @@
     </message>
 </context>
 <context>
+    <name>TeamPeopleText</name>
+    <message>
+        <location filename="../core/team/team_people.cpp" line="38"/>
+        <source>%1 is not a team working file (made by team publish or team join).</source>
+        <translation>%1 is geen werkbestand van een teamproject (gemaakt met team publish of team join).</translation>
+    </message>
+    <message>
+        <location filename="../core/team/team_people.cpp" line="47"/>
+        <source>The login %1 may not create or change login roles. Adding or disabling a person needs the administrator&apos;s login that published the team project (give it with --server).</source>
+        <translation>De aanmelding %1 mag geen aanmeldrollen aanmaken of wijzigen. Een persoon toevoegen of uitschakelen vraagt de aanmelding van de beheerder die het teamproject publiceerde (geef die met --server).</translation>
+    </message>
+    <message>
+        <location filename="../core/team/team_people.cpp" line="88"/>
+        <source>%1 exists already; a new person&apos;s password file needs a new name.</source>
+        <translation>%1 bestaat al; het wachtwoordbestand van een nieuwe persoon heeft een nieuwe naam nodig.</translation>
+    </message>
+</context>
+<context>
     <name>TeamProjectText</name>
     <message>
         <location filename="../core/team/team_join.cpp" line="62"/>
@@ -4505,26 +4528,31 @@
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="111"/>
+        <location filename="../core/team/team_password_files.cpp" line="53"/>
         <source>Could not write the password file %1.</source>
         <translation>Kon het wachtwoordbestand %1 niet schrijven.</translation>
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="124"/>
+        <location filename="../core/team/team_password_files.cpp" line="65"/>
         <source>%1 is a symbolic link; name a new folder for the password files.</source>
         <translation>%1 is een symbolische koppeling; noem een nieuwe map voor de wachtwoordbestanden.</translation>
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="131"/>
+        <location filename="../core/team/team_password_files.cpp" line="73"/>
         <source>%1 is not an empty folder; name a new folder for the password files.</source>
         <translation>%1 is geen lege map; noem een nieuwe map voor de wachtwoordbestanden.</translation>
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="137"/>
+        <location filename="../core/team/team_password_files.cpp" line="79"/>
         <source>Could not create the folder %1.</source>
         <translation>Kon de map %1 niet aanmaken.</translation>
     </message>
     <message>
         <location filename="../core/team/team_project.cpp" line="143"/>
+        <location filename="../core/team/team_password_files.cpp" line="85"/>
         <source>Could not make %1 private to its owner.</source>
         <translation>Kon %1 niet alleen voor de eigenaar toegankelijk maken.</translation>
     </message>
@@ -5254,6 +5282,7 @@
         <location filename="../app/cli/command_team.cpp" line="117"/>
         <location filename="../app/cli/command_team.cpp" line="176"/>
         <location filename="../app/cli/command_team.cpp" line="220"/>
+        <location filename="../app/cli/command_team_people.cpp" line="63"/>
         <source>Print the result as JSON.</source>
         <translation>Het resultaat als JSON afdrukken.</translation>
     </message>
@@ -6532,11 +6561,13 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="40"/>
+        <location filename="../app/cli/passphrase_input.cpp" line="22"/>
         <source>The passphrase file %1 could not be read.</source>
         <translation>Het bestand met de wachtwoordzin %1 kon niet worden gelezen.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="49"/>
+        <location filename="../app/cli/passphrase_input.cpp" line="31"/>
         <source>The passphrase in %1 is not UTF-8.</source>
         <translation>De wachtwoordzin in %1 is geen UTF-8.</translation>
     </message>
@@ -6557,6 +6588,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="81"/>
+        <location filename="../app/cli/command_team_people.cpp" line="35"/>
         <source>coder (the default) or lead.</source>
         <translation>coder (standaard) of lead.</translation>
     </message>
@@ -6577,6 +6609,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="96"/>
+        <location filename="../app/cli/command_team_people.cpp" line="46"/>
         <source>Enable a disabled person again.</source>
         <translation>Een uitgeschakelde persoon weer inschakelen.</translation>
     </message>
@@ -6587,6 +6620,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="101"/>
+        <location filename="../app/cli/command_team_people.cpp" line="51"/>
         <source>That lead&apos;s passphrase: the first line of FILE (- or left out: standard input).</source>
         <translation>De wachtwoordzin van die coördinator: de eerste regel van BESTAND (- of weggelaten: standaardinvoer).</translation>
     </message>
@@ -6617,21 +6651,25 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="136"/>
+        <location filename="../app/cli/command_team_people.cpp" line="92"/>
         <source>--role takes coder or lead, not &quot;%1&quot;.</source>
         <translation>--role neemt coder of lead, niet ‘%1’.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="139"/>
+        <location filename="../app/cli/command_team_people.cpp" line="95"/>
         <source>name the new person&apos;s pseudonym with --pseudonym.</source>
         <translation>noem het pseudoniem van de nieuwe persoon met --pseudonym.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="142"/>
+        <location filename="../app/cli/command_team_people.cpp" line="98"/>
         <source>a lead needs a passphrase: give it with --passphrase-file FILE (- for standard input).</source>
         <translation>een coördinator heeft een wachtwoordzin nodig: geef die met --passphrase-file BESTAND (- voor standaardinvoer).</translation>
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="150"/>
+        <location filename="../app/cli/command_team_people.cpp" line="104"/>
         <source>only one passphrase can come from standard input; give the other in a file.</source>
         <translation>maar één wachtwoordzin kan uit standaardinvoer komen; geef de andere in een bestand.</translation>
     </message>
@@ -6657,6 +6695,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_people.cpp" line="204"/>
+        <location filename="../app/cli/command_team_people.cpp" line="85"/>
         <source>changing people needs a lead: name yourself with --lead L (your passphrase on standard input or with --lead-passphrase-file FILE).</source>
         <translation>personen wijzigen vereist een coördinator: noem uzelf met --lead L (uw wachtwoordzin via standaardinvoer of met --lead-passphrase-file BESTAND).</translation>
     </message>
@@ -6980,6 +7019,7 @@
     <message>
         <location filename="../app/cli/command_team.cpp" line="191"/>
         <location filename="../app/cli/command_team.cpp" line="233"/>
+        <location filename="../app/cli/command_team_people.cpp" line="82"/>
         <source>expected exactly one working file.</source>
         <translation>precies één werkbestand verwacht.</translation>
     </message>
@@ -7168,6 +7208,76 @@
         <location filename="../app/cli/main.cpp" line="162"/>
         <source>Run &quot;fourfold-cli --help&quot; for the list of commands.</source>
         <translation>Voer ‘fourfold-cli --help’ uit voor de lijst met opdrachten.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="30"/>
+        <source>Add a person with this name (kept in the project files, never printed).</source>
+        <translation>Een persoon met deze naam toevoegen (blijft in de projectbestanden, wordt nooit getoond).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="33"/>
+        <source>The new person&apos;s pseudonym, unique in the project.</source>
+        <translation>Het pseudoniem van de nieuwe persoon, uniek in het project.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="38"/>
+        <source>A new lead&apos;s passphrase for the desk: the first line of FILE (- for standard input).</source>
+        <translation>Het wachtwoord van een nieuwe coördinator voor de werkplek: de eerste regel van FILE (- voor standaardinvoer).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="42"/>
+        <source>Disable the person with pseudonym P: their codings stay; their login may no longer reach the server.</source>
+        <translation>De persoon met pseudoniem P uitschakelen: de coderingen blijven; de aanmelding bereikt de server niet meer.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="48"/>
+        <source>The lead making the change (your pseudonym in the working file).</source>
+        <translation>De coördinator die de wijziging maakt (uw pseudoniem in het werkbestand).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="55"/>
+        <source>The administrator&apos;s login that may create roles, as a libpq connection string or URI (default: the working file&apos;s server); its password comes from ~/.pgpass, PGPASSFILE or PGPASSWORD.</source>
+        <translation>De aanmelding van de beheerder die rollen mag aanmaken, als libpq-verbindingstekst of URI (standaard: de server van het werkbestand); het wachtwoord komt uit ~/.pgpass, PGPASSFILE of PGPASSWORD.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="60"/>
+        <source>The folder for a new person&apos;s password file (default: FILE.credentials beside the working file; created private if new).</source>
+        <translation>De map voor het wachtwoordbestand van een nieuwe persoon (standaard: FILE.credentials naast het werkbestand; nieuw aangemaakt alleen voor u leesbaar).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="67"/>
+        <source>The lead&apos;s working file of the team project.</source>
+        <translation>Het werkbestand van de coördinator in het teamproject.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="69"/>
+        <source>Add a person to a running team project (in the working file, on the server and as a login role with its own password file), or disable or enable one. Needs a lead of the project and the administrator&apos;s login.</source>
+        <translation>Een persoon toevoegen aan een lopend teamproject (in het werkbestand, op de server en als aanmeldrol met een eigen wachtwoordbestand), of een persoon uit- of inschakelen. Vraagt een coördinator van het project en de aanmelding van de beheerder.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="80"/>
+        <source>give exactly one of --add, --disable and --enable.</source>
+        <translation>geef precies een van --add, --disable en --enable.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="153"/>
+        <source>Added %1 with the login %2; the password is in %3 (hand it to them alone).</source>
+        <translation>%1 toegevoegd met de aanmelding %2; het wachtwoord staat in %3 (geef het alleen aan die persoon).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="157"/>
+        <source>Enabled %1: the login %2 may log in again.</source>
+        <translation>%1 ingeschakeld: de aanmelding %2 mag weer aanmelden.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team_people.cpp" line="160"/>
+        <source>Disabled %1: the login %2 may no longer log in; their codings stay.</source>
+        <translation>%1 uitgeschakeld: de aanmelding %2 mag niet meer aanmelden; de coderingen blijven.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="304"/>
+        <source>  people    Add a person to a running team project, or disable one.</source>
+        <translation>  people    Een persoon toevoegen aan een lopend teamproject, of een persoon uitschakelen.</translation>
     </message>
 </context>
 <context>

@@ -53,5 +53,6 @@ int runHandout(const QStringList &arguments);
 int runMerge(const QStringList &arguments);
 int runPeople(const QStringList &arguments);
 int runTeam(const QStringList &arguments);
+int runTeamPeople(const QStringList &arguments); // `team people`, called by runTeam
 
 } // namespace fourfold::cli

@@ -4,16 +4,13 @@
 // never from the command line (where other users of the machine could read them).
 
 #include "app/cli/cli_output.h"
+#include "app/cli/passphrase_input.h"
 #include "core/project/edit.h"
 #include "core/project/people.h"
 #include "core/project/project.h"
 
 #include <QCoreApplication>
-#include <QFile>
 #include <QJsonArray>
-#include <QTextStream>
-
-#include <cstdio>
 
 namespace fourfold::cli {
 
@@ -23,32 +20,6 @@ namespace {
 struct CliText {
     Q_DECLARE_TR_FUNCTIONS(cli)
 };
-
-// The first line of `path` ("-" = standard input), without its line end.
-Result<QString> readPassphrase(const QString &path)
-{
-    QFile file;
-    bool opened = false;
-    if (path == QLatin1String("-"))
-        opened = file.open(stdin, QIODevice::ReadOnly);
-    else {
-        file.setFileName(path);
-        opened = file.open(QIODevice::ReadOnly);
-    }
-    if (!opened)
-        return fail(ErrorCode::Io,
-            QCoreApplication::translate("cli", "The passphrase file %1 could not be read.")
-                .arg(path),
-            file.errorString());
-    QByteArray line = file.readLine(4096);
-    while (line.endsWith('\n') || line.endsWith('\r'))
-        line.chop(1);
-    auto text = QString::fromUtf8(line);
-    if (text.contains(QChar::ReplacementCharacter))
-        return fail(ErrorCode::InvalidInput,
-            QCoreApplication::translate("cli", "The passphrase in %1 is not UTF-8.").arg(path));
-    return text;
-}
 
 QString stateText(const Coder &c, PassphraseState state)
 {

@@ -199,6 +199,7 @@ int runTeamSync(const QStringList &arguments)
         printJson(QJsonObject {{QStringLiteral("server"), result->server},
             {QStringLiteral("pushed"), result->pushed}, {QStringLiteral("pulled"), result->pulled},
             {QStringLiteral("conflicts"), result->conflicts},
+            {QStringLiteral("events"), result->events},
             {QStringLiteral("last_change"), result->lastChange}});
         return ExitOk;
     }
@@ -288,6 +289,8 @@ int runTeam(const QStringList &arguments)
         return runTeamSync(arguments.mid(1));
     if (sub == QLatin1String("status"))
         return runTeamStatus(arguments.mid(1));
+    if (sub == QLatin1String("people"))
+        return runTeamPeople(arguments.mid(1));
     if (sub.isEmpty() || sub == QLatin1String("--help") || sub == QLatin1String("-h")) {
         out(QCoreApplication::translate("cli", "Usage: fourfold-cli team SUBCOMMAND [options]"));
         out(QCoreApplication::translate("cli",
@@ -298,6 +301,8 @@ int runTeam(const QStringList &arguments)
             "cli", "  sync      Push and pull a working file's codings once."));
         out(QCoreApplication::translate(
             "cli", "  status    What a working file last synced and what waits to be sent."));
+        out(QCoreApplication::translate(
+            "cli", "  people    Add a person to a running team project, or disable one."));
         return sub.isEmpty() ? ExitUsage : ExitOk;
     }
     return usageError(QStringLiteral("team"),

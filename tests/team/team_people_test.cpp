@@ -9,11 +9,13 @@
 #include "core/project/testing/project_database.h"
 #include "core/store/project_tables.h"
 #include "core/team/team_project.h"
+#include "tests/support/cli_run.h"
 #include "tests/team/published_project.h"
 #include "tests/team/server_sql.h"
 
 #include <QFile>
 #include <QFileInfo>
+#include <QJsonObject>
 
 #include <catch2/catch.hpp>
 #include <libpq-fe.h>
@@ -166,4 +168,51 @@ TEST_CASE("The lead's own login may not create roles and adding a person changes
     CHECK(
         admin.value(QStringLiteral("SELECT count(*) FROM fourfold.person WHERE pseudonym = 'C04'"))
         == "0");
+}
+
+TEST_CASE("The CLI adds a person with the administrator's login and disables them")
+{
+    PublishedProject p;
+    const QString passphraseFile =
+        writeFile(p.dir, QStringLiteral("pass.txt"), "ferry harbour dyke\n");
+    const QString logins = p.dir.filePath(QStringLiteral("new-logins"));
+    const CliRun added = runCli(QStringLiteral(FOURFOLD_CLI),
+        {QStringLiteral("team"), QStringLiteral("people"), p.mainPath, QStringLiteral("--add"),
+            QStringLiteral("Rosa Testperson"), QStringLiteral("--pseudonym"), QStringLiteral("C04"),
+            QStringLiteral("--lead"), QStringLiteral("L01"),
+            QStringLiteral("--lead-passphrase-file"), passphraseFile, QStringLiteral("--server"),
+            p.db.adminConninfo, QStringLiteral("--credentials-out"), logins,
+            QStringLiteral("--json")});
+    INFO(added.err.toStdString());
+    REQUIRE(added.exitCode == 0);
+    const QJsonObject json = cliJson(added);
+    CHECK(json.value(QStringLiteral("pseudonym")).toString() == "C04");
+    CHECK(json.value(QStringLiteral("login_allowed")).toBool());
+    const QString file = json.value(QStringLiteral("password_file")).toString();
+    CHECK(QFileInfo(file).dir() == QDir(logins));
+    // The name stays in the files: the output names the person by pseudonym alone.
+    CHECK_FALSE(added.out.contains(QStringLiteral("Rosa")));
+
+    TeamPersonReport r;
+    r.role = json.value(QStringLiteral("login_role")).toString();
+    r.passwordFile = file;
+    CHECK(canConnect(loginWith(p, r)));
+    const CliRun disabled = runCli(QStringLiteral(FOURFOLD_CLI),
+        {QStringLiteral("team"), QStringLiteral("people"), p.mainPath, QStringLiteral("--disable"),
+            QStringLiteral("C04"), QStringLiteral("--lead"), QStringLiteral("L01"),
+            QStringLiteral("--lead-passphrase-file"), passphraseFile, QStringLiteral("--server"),
+            p.db.adminConninfo});
+    INFO(disabled.err.toStdString());
+    REQUIRE(disabled.exitCode == 0);
+    CHECK_FALSE(canConnect(loginWith(p, r)));
+
+    // A wrong passphrase changes nothing.
+    const QString wrong = writeFile(p.dir, QStringLiteral("wrong.txt"), "not the passphrase\n");
+    const CliRun refused = runCli(QStringLiteral(FOURFOLD_CLI),
+        {QStringLiteral("team"), QStringLiteral("people"), p.mainPath, QStringLiteral("--enable"),
+            QStringLiteral("C04"), QStringLiteral("--lead"), QStringLiteral("L01"),
+            QStringLiteral("--lead-passphrase-file"), wrong, QStringLiteral("--server"),
+            p.db.adminConninfo});
+    CHECK(refused.exitCode != 0);
+    CHECK_FALSE(canConnect(loginWith(p, r)));
 }
