@@ -70,6 +70,7 @@ Status createTeamGroup(ServerConnection &conn, const QString &groupRole)
         "fourfold.judgement, fourfold.gold_annotation, fourfold.gold_source, "
         "fourfold.gold_judgement, fourfold.gold_rejection TO %1;"
         "GRANT SELECT, INSERT ON fourfold.event TO %1;"
+        "GRANT SELECT, INSERT, UPDATE ON fourfold.coding_time TO %1;"
         "GRANT USAGE ON SEQUENCE fourfold.change_number TO %1;")
                          .arg(g, db));
 }

@@ -171,13 +171,11 @@ Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByt
     if (table == ServerTable::Assignment) {
         // A coder may change its assignments but never insert one, and INSERT ... ON CONFLICT
         // needs the insert policy even where it updates: update first, then insert what is new
-        // (only a lead has any).
+        // (only a lead has any). Coding time is not written here but by sendCodingTimes.
         QStringList updates;
         for (const QString &c : columns)
-            if (c != QLatin1String("uuid"))
-                updates << (c == QLatin1String("active_seconds")
-                        ? QStringLiteral("active_seconds = a.active_seconds + r.active_seconds")
-                        : QStringLiteral("%1 = r.%1").arg(c));
+            if (c != QLatin1String("uuid") && c != QLatin1String("active_seconds"))
+                updates << QStringLiteral("%1 = r.%1").arg(c);
         FOURFOLD_TRY_STATUS(conn.run(
             QStringLiteral("UPDATE fourfold.assignment a SET %1 FROM "
                            "jsonb_populate_recordset(NULL::fourfold.assignment, $1::jsonb) r "
@@ -215,6 +213,26 @@ Result<QByteArrayList> selectServerRowsSince(ServerConnection &conn, ServerTable
             *lastChange = std::max(*lastChange, r->integer(i, 1));
     }
     return out;
+}
+
+Status sendCodingTimes(ServerConnection &conn, const QByteArrayList &rows)
+{
+    if (rows.isEmpty())
+        return {};
+    QByteArray array = "[";
+    for (qsizetype i = 0; i < rows.size(); ++i) {
+        if (i)
+            array += ',';
+        array += rows[i];
+    }
+    array += ']';
+    return conn.run(
+        QStringLiteral("INSERT INTO fourfold.coding_time (assignment, source, seconds) SELECT "
+                       "assignment, source, seconds FROM jsonb_populate_recordset(NULL::"
+                       "fourfold.coding_time, $1::jsonb) ON CONFLICT (assignment, source) DO "
+                       "UPDATE SET seconds = excluded.seconds WHERE excluded.seconds > "
+                       "fourfold.coding_time.seconds"),
+        {array});
 }
 
 Result<QByteArrayList> selectServerRowsByUuid(

@@ -44,9 +44,9 @@ Result<QByteArrayList> selectServerRows(
     ServerConnection &conn, ServerTable table, qint64 *lastChange);
 
 // Inserts or overwrites by uuid `rows` of `table` in one statement; an assignment's
-// "active_seconds" is added to the server's, not written over it; gold sources and events the
-// server has already are left as they are. Fails with the server's error (NotAllowed when a row
-// is not the role's to write).
+// "active_seconds" is written only with a new assignment (coding time goes by sendCodingTimes);
+// gold sources and events the server has already are left as they are. Fails with the server's
+// error (NotAllowed when a row is not the role's to write).
 Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByteArrayList &rows);
 
 // The rows of `table` the role may see that changed after `afterChange` or were written by a
@@ -55,6 +55,12 @@ Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByt
 // selectServerRows.
 Result<QByteArrayList> selectServerRowsSince(ServerConnection &conn, ServerTable table,
     qint64 afterChange, const QString &fromXact, qint64 *lastChange);
+
+// Records each working file's total coding time on an assignment: `rows` are JSON objects
+// {"assignment": UUID, "source": FILE MARK, "seconds": TOTAL}; a total only grows, and what it
+// grew by is added to the assignment's active_seconds (by the server's trigger). Sending the same
+// totals again changes nothing. Fails with the server's error.
+Status sendCodingTimes(ServerConnection &conn, const QByteArrayList &rows);
 
 // The rows of `table` (one with a uuid) the role may see whose uuid is in `uuids` (lower-case
 // uuid text), in change order.

@@ -406,8 +406,56 @@ ALTER TABLE fourfold.person ADD COLUMN disabled smallint NOT NULL DEFAULT 0
   CHECK (disabled IN (0, 1));
 )sql";
 
+// Migration 4. Coding time per working file: each file sends the total of its own coding time
+// on an assignment (never a difference), kept per file, and a trigger adds what grew to the
+// assignment's active_seconds. A sync sent twice — cut off after the server's commit and before
+// the file's — so counts its time once. A file's total only grows (GREATEST on conflict).
+constexpr const char *kServerMigration4 = R"sql(
+CREATE TABLE fourfold.coding_time (
+  assignment uuid NOT NULL REFERENCES fourfold.assignment(uuid),
+  source     text NOT NULL,
+  seconds    bigint NOT NULL CHECK (seconds >= 0),
+  PRIMARY KEY (assignment, source)
+);
+
+CREATE FUNCTION fourfold.add_coding_time() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  UPDATE fourfold.assignment
+     SET active_seconds = active_seconds + NEW.seconds
+         - (CASE WHEN TG_OP = 'UPDATE' THEN OLD.seconds ELSE 0 END)
+   WHERE uuid = NEW.assignment;
+  RETURN NULL;
+END
+$$;
+CREATE TRIGGER add_coding_time AFTER INSERT OR UPDATE ON fourfold.coding_time
+  FOR EACH ROW EXECUTE FUNCTION fourfold.add_coding_time();
+
+ALTER TABLE fourfold.coding_time ENABLE ROW LEVEL SECURITY;
+ALTER TABLE fourfold.coding_time FORCE ROW LEVEL SECURITY;
+CREATE POLICY lead_all ON fourfold.coding_time USING ((SELECT fourfold.i_am_lead()))
+  WITH CHECK ((SELECT fourfold.i_am_lead()));
+CREATE POLICY coder_own ON fourfold.coding_time
+  USING (EXISTS (SELECT 1 FROM fourfold.assignment a WHERE a.uuid = coding_time.assignment
+                 AND a.coder = (SELECT fourfold.my_person())))
+  WITH CHECK (EXISTS (SELECT 1 FROM fourfold.assignment a WHERE a.uuid = coding_time.assignment
+                      AND a.coder = (SELECT fourfold.my_person())));
+
+-- A team project published before this migration: its group role gets the table too.
+DO $$
+DECLARE
+  g name;
+BEGIN
+  FOR g IN SELECT DISTINCT grantee FROM information_schema.role_table_grants
+           WHERE table_schema = 'fourfold' AND table_name = 'login' AND privilege_type = 'SELECT'
+             AND grantee <> current_user LOOP
+    EXECUTE format('GRANT SELECT, INSERT, UPDATE ON fourfold.coding_time TO %I', g);
+  END LOOP;
+END
+$$;
+)sql";
+
 constexpr std::array<const char *, kServerSchemaVersion> kServerMigrations {
-    kServerMigration1, kServerMigration2, kServerMigration3};
+    kServerMigration1, kServerMigration2, kServerMigration3, kServerMigration4};
 static_assert(std::ranges::none_of(kServerMigrations, [](const char *m) { return m == nullptr; }),
     "kServerSchemaVersion is higher than the number of migrations in kServerMigrations");
 

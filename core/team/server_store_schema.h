@@ -14,7 +14,7 @@ namespace fourfold {
 class ServerConnection;
 
 // The server schema version this build writes. Migration n takes a server from n-1 to n.
-inline constexpr int kServerSchemaVersion = 3;
+inline constexpr int kServerSchemaVersion = 4;
 
 // The server's schema version: 0 when the database holds no team project.
 Result<int> serverSchemaVersion(ServerConnection &conn);

@@ -9,6 +9,7 @@
 #include <QMap>
 #include <QString>
 
+#include <functional>
 #include <vector>
 
 namespace fourfold {
@@ -56,6 +57,14 @@ struct JoinReport {
     qint64 links = 0;
     qint64 judgements = 0;
     qint64 gold = 0; // gold spans, answers and rejections
+};
+
+// The points a sync passes, in order, for a caller that shows where it is (and for tests that
+// stop a sync there).
+enum class SyncStage {
+    Read, // both sides read; nothing written yet
+    ServerWritten, // everything sent, the server's transaction not yet committed
+    ServerCommitted, // the server committed; the file's transaction not yet
 };
 
 struct SyncReport {
@@ -156,7 +165,9 @@ public:
     // leads' files); each file's new events go to the server's log. One transaction on each
     // side: on failure nothing is kept.
     // Fails with InvalidArgument for a file that is not a team working file, or as join.
-    static Result<SyncReport> sync(Project &project);
+    // `observer`, when given, is called at each SyncStage.
+    static Result<SyncReport> sync(
+        Project &project, const std::function<void(SyncStage)> &observer = {});
 
     // Adds `person` to the team project of the lead's working file `project`, as the signed-in
     // lead `by` (People::add, logged): in the file, on the server, and as a login role with a

@@ -30,6 +30,9 @@ QString teamObjectKey(const store::PortableRow &row);
 QString teamBaseKey(const store::PortableRow &row);
 QString teamBaseValue(const store::PortableRow &row);
 inline constexpr const char *kTeamBasePrefix = "team.base:";
+// The setting under which a working file keeps the total coding time it has sent on an
+// assignment: "team.time:" + the assignment's uuid.
+inline constexpr const char *kTeamTimePrefix = "team.time:";
 // A teamBaseValue read back; none for a malformed value.
 struct TeamBase {
     QString digest;

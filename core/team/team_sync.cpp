@@ -15,6 +15,7 @@
 
 #include <QCoreApplication>
 #include <QDateTime>
+#include <QJsonObject>
 #include <QUuid>
 
 #include <map>
@@ -52,8 +53,13 @@ struct Versions {
 
 } // namespace
 
-Result<SyncReport> TeamProject::sync(Project &project)
+Result<SyncReport> TeamProject::sync(
+    Project &project, const std::function<void(SyncStage)> &observer)
 {
+    auto reached = [&](SyncStage stage) {
+        if (observer)
+            observer(stage);
+    };
     Database &db = project.db();
     auto server = store::setting(db, serverSettingKey());
     auto pseudonym = store::setting(db, pseudonymSettingKey());
@@ -99,6 +105,9 @@ Result<SyncReport> TeamProject::sync(Project &project)
     auto bases = store::settingsWithPrefix(db, QLatin1String(kTeamBasePrefix));
     if (!bases)
         return std::unexpected(bases.error());
+    auto times = store::settingsWithPrefix(db, QLatin1String(kTeamTimePrefix));
+    if (!times)
+        return std::unexpected(times.error());
     QString myUuid;
     for (const Coder &c : *people)
         if (c.pseudonym == pseudonym->value_or(QString()))
@@ -177,9 +186,13 @@ Result<SyncReport> TeamProject::sync(Project &project)
     if (auto st = shared.decide(&report.conflicts); !st)
         return abandon(st.error());
 
+    reached(SyncStage::Read);
+
     // Decide each object; what goes up is sent per table, what comes down is written here.
     std::map<int, QByteArrayList> push;
     std::vector<store::PortableRow> writeHere;
+    QByteArrayList codingTimes;
+    std::vector<std::pair<QString, qint64>> newTotals;
     for (auto &[key, v] : objects) {
         const bool changedHere = v.local && (!v.base || v.base->digest != v.local->digest());
         const qint64 secondsHere = v.local ? v.local->seconds - (v.base ? v.base->seconds : 0) : 0;
@@ -210,13 +223,23 @@ Result<SyncReport> TeamProject::sync(Project &project)
         } else {
             send = changedHere;
         }
-        if (secondsHere > 0)
-            send = true;
-        if (send) {
-            push[key.first].push_back(
-                serverFromPortable(*final, v.coder, std::max<qint64>(secondsHere, 0)));
-            ++report.pushed;
+        // Coding time goes up as this file's new total on the assignment (team.time:UUID), so a
+        // sync sent again after its server side committed counts it once.
+        if (secondsHere > 0) {
+            const qint64 total =
+                times->value(QLatin1String(kTeamTimePrefix) + v.local->uuid).toLongLong()
+                + secondsHere;
+            codingTimes.push_back(store::toJsonText(
+                QJsonObject {{QStringLiteral("assignment"), v.local->uuid},
+                    {QStringLiteral("source"), fileSource},
+                    {QStringLiteral("seconds"),
+                        total}}).toUtf8());
+            newTotals.emplace_back(QLatin1String(kTeamTimePrefix) + v.local->uuid, total);
         }
+        if (send)
+            push[key.first].push_back(serverFromPortable(*final, v.coder, 0));
+        if (send || secondsHere > 0)
+            ++report.pushed;
     }
     // References first on both sides: people, codebook versions and articles, then the coders'
     // objects, then gold (which refers to coders' spans) and the event log.
@@ -224,6 +247,11 @@ Result<SyncReport> TeamProject::sync(Project &project)
         return abandon(st.error());
     for (auto &[table, rows] : push)
         if (auto st = upsertServerObjects(*conn, ServerTable(table), rows); !st)
+            return abandon(st.error());
+    if (auto st = sendCodingTimes(*conn, codingTimes); !st)
+        return abandon(st.error());
+    for (const auto &[setting, total] : newTotals)
+        if (auto st = store::setSetting(db, setting, QString::number(total)); !st)
             return abandon(st.error());
     if (auto st = shared.push(false, &report.pushed); !st)
         return abandon(st.error());
@@ -278,10 +306,17 @@ Result<SyncReport> TeamProject::sync(Project &project)
             db, lastSyncSettingKey(), QDateTime::currentDateTimeUtc().toString(Qt::ISODate));
         !st)
         return abandon(st.error());
+    reached(SyncStage::ServerWritten);
     if (auto st = conn->exec(QStringLiteral("COMMIT")); !st)
         return abandon(st.error());
-    if (auto st = db.exec(QStringLiteral("COMMIT")); !st)
+    // Cut off here, the file keeps its last synced versions and sends again what the server
+    // has: an object equal on both sides is not a conflict, coding time goes as a total, gold
+    // sources and events are ignored when present, so nothing arrives twice.
+    reached(SyncStage::ServerCommitted);
+    if (auto st = db.exec(QStringLiteral("COMMIT")); !st) {
+        (void)db.exec(QStringLiteral("ROLLBACK"));
         return std::unexpected(st.error());
+    }
     return report;
 }
 

@@ -130,12 +130,27 @@ void PostgresCluster::start()
             QStringLiteral("--pwfile=") + pwfile, QStringLiteral("-U"), QStringLiteral("postgres"),
             QStringLiteral("-E"), QStringLiteral("UTF8"), QStringLiteral("--locale=C.UTF-8"),
             QStringLiteral("--no-sync"), QStringLiteral("--no-instructions")});
+    startServer();
+}
+
+void PostgresCluster::startServer()
+{
     runServerBinary(QStringLiteral("pg_ctl"),
-        {QStringLiteral("-D"), data, QStringLiteral("-l"), m_dir.filePath(QStringLiteral("log")),
-            QStringLiteral("-w"), QStringLiteral("-t"), QStringLiteral("60"), QStringLiteral("-o"),
+        {QStringLiteral("-D"), m_dir.filePath(QStringLiteral("data")), QStringLiteral("-l"),
+            m_dir.filePath(QStringLiteral("log")), QStringLiteral("-w"), QStringLiteral("-t"),
+            QStringLiteral("60"), QStringLiteral("-o"),
             QStringLiteral("-F -k %1 -c listen_addresses=''").arg(m_dir.path()),
             QStringLiteral("start")});
     m_running = true;
+}
+
+void PostgresCluster::stopServer()
+{
+    runServerBinary(QStringLiteral("pg_ctl"),
+        {QStringLiteral("-D"), m_dir.filePath(QStringLiteral("data")), QStringLiteral("-m"),
+            QStringLiteral("fast"), QStringLiteral("-w"), QStringLiteral("-t"),
+            QStringLiteral("60"), QStringLiteral("stop")});
+    m_running = false;
 }
 
 void PostgresCluster::stop()

@@ -39,6 +39,12 @@ public:
     };
     TestDatabase newDatabase();
 
+    // Stops the server as an administrator's restart would (pg_ctl stop -m fast: open
+    // connections are cut, running transactions roll back) and starts it again on the same
+    // data; for tests of a server that goes away in the middle of a sync.
+    void stopServer();
+    void startServer();
+
     // Runs `sql` as the superuser on `database`; fails the test on error.
     void superuserExec(const QString &sql, const QString &database = QStringLiteral("postgres"));
 
