@@ -2240,6 +2240,29 @@
     </message>
 </context>
 <context>
+    <name>GoldAnswerEditsText</name>
+    <message>
+        <location filename="../core/project/gold_answer_edits.cpp" line="36"/>
+        <source>Decide gold answer &quot;%1&quot;</source>
+        <translation>Goldstandard-Antwort „%1“ entscheiden</translation>
+    </message>
+    <message>
+        <location filename="../core/project/gold_answer_edits.cpp" line="56"/>
+        <source>The gold answer could not be stored: there is no article #%1 in the project.</source>
+        <translation>Die Goldstandard-Antwort konnte nicht gespeichert werden: Das Projekt hat keinen Artikel #%1.</translation>
+    </message>
+    <message>
+        <location filename="../core/project/gold_answer_edits.cpp" line="82"/>
+        <source>Withdraw gold answer &quot;%1&quot;</source>
+        <translation>Goldstandard-Antwort „%1“ zurückziehen</translation>
+    </message>
+    <message>
+        <location filename="../core/project/gold_answer_edits.cpp" line="93"/>
+        <source>This gold answer has already been withdrawn.</source>
+        <translation>Diese Goldstandard-Antwort wurde bereits zurückgezogen.</translation>
+    </message>
+</context>
+<context>
     <name>GoldEditsText</name>
     <message>
         <location filename="../core/project/gold_edits.cpp" line="30"/>
@@ -2301,6 +2324,14 @@
         <location filename="../core/project/gold_edits.cpp" line="198"/>
         <source>There are no spans to accept.</source>
         <translation>Es gibt keine Textstellen zum Übernehmen.</translation>
+    </message>
+</context>
+<context>
+    <name>GoldJudgementTableText</name>
+    <message>
+        <location filename="../core/store/gold_judgement_table.cpp" line="37"/>
+        <source>There is no gold answer #%1 in the project.</source>
+        <translation>Das Projekt hat keine Goldstandard-Antwort #%1.</translation>
     </message>
 </context>
 <context>
@@ -3823,6 +3854,16 @@
         <location filename="../app/report/report_document.cpp" line="113"/>
         <source>References</source>
         <translation>Literatur</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_method_text.cpp" line="154"/>
+        <source>Answers to article-level items were adjudicated as well: %1 gold answers on %2 articles, %3 of them with a written rationale. </source>
+        <translation>Auch Antworten auf Items auf Artikelebene wurden entschieden: %1 Goldstandard-Antworten zu %2 Artikeln, %3 davon mit schriftlicher Begründung. </translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_method_text.cpp" line="164"/>
+        <source>Disagreements on article-level items were resolved by adjudication into a separate gold standard: %1 gold answers on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
+        <translation>Abweichungen bei Items auf Artikelebene wurden durch Entscheidung in einen getrennten Goldstandard aufgelöst: %1 Goldstandard-Antworten zu %2 Artikeln, entschieden von %3, %4 davon mit schriftlicher Begründung. Die unabhängigen Codierungen blieben unverändert; alle obigen Werte stammen aus ihnen. </translation>
     </message>
 </context>
 <context>
@@ -7281,6 +7322,124 @@
     </message>
 </context>
 <context>
+    <name>fourfold::AnswerPanel</name>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="49"/>
+        <source>Answers to article-level items</source>
+        <translation>Antworten auf Items auf Artikelebene</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="62"/>
+        <source>Gold answer</source>
+        <translation>Goldstandard-Antwort</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="63"/>
+        <source>Gold &amp;answer:</source>
+        <translation>Goldstandard-&amp;Antwort:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="65"/>
+        <source>Why this answer, for the method section</source>
+        <translation>Warum diese Antwort, für den Methodenteil</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="66"/>
+        <source>Ra&amp;tionale:</source>
+        <translation>Begrün&amp;dung:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="69"/>
+        <source>&amp;Decide gold answer</source>
+        <translation>Goldstandard-Antwort &amp;entscheiden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="70"/>
+        <source>Put the chosen value into gold as the answer to this item; it replaces a gold answer decided before</source>
+        <translation>Den gewählten Wert als Antwort auf dieses Item in den Goldstandard übernehmen; er ersetzt eine zuvor entschiedene Goldstandard-Antwort</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="72"/>
+        <source>&amp;Withdraw gold answer</source>
+        <translation>Goldstandard-Antwort &amp;zurückziehen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="73"/>
+        <source>Withdraw the gold answer to this item</source>
+        <translation>Die Goldstandard-Antwort auf dieses Item zurückziehen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="97"/>
+        <source>No article open.</source>
+        <translation>Kein Artikel geöffnet.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="140"/>
+        <source>Item</source>
+        <translation>Item</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="141"/>
+        <source>Agreement</source>
+        <translation>Übereinstimmung</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="141"/>
+        <source>Gold</source>
+        <translation>Goldstandard</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="153"/>
+        <source>%1 has not answered</source>
+        <translation>%1 hat nicht geantwortet</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="158"/>
+        <source>no answers</source>
+        <translation>keine Antworten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="161"/>
+        <source>✓ agree</source>
+        <translation>✓ übereinstimmend</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="164"/>
+        <source>agree, not all answered</source>
+        <translation>übereinstimmend, nicht alle geantwortet</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="167"/>
+        <source>≠ differ</source>
+        <translation>≠ abweichend</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="177"/>
+        <source>Decided by %1.</source>
+        <translation>Entschieden von %1.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="178"/>
+        <source>Decided by %1: “%2”</source>
+        <translation>Entschieden von %1: „%2“</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="183"/>
+        <source>The codebook has no article-level items.</source>
+        <translation>Das Codebuch hat keine Items auf Artikelebene.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="248"/>
+        <source>%1 (given by %2)</source>
+        <translation>%1 (von %2)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="248"/>
+        <source>, </source>
+        <translation>, </translation>
+    </message>
+</context>
+<context>
     <name>fourfold::ArticleListModel</name>
     <message>
         <location filename="../app/desktop/article_list_model.cpp" line="50"/>
@@ -8315,6 +8474,16 @@ Beinahe-Kopie von %2</translation>
         <location filename="../app/desktop/compare/comparison_window.cpp" line="946"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>In diesem Artikel ist keine übereinstimmende Passage mehr zu übernehmen.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="249"/>
+        <source>Answers to article-level items</source>
+        <translation>Antworten auf Items auf Artikelebene</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="985"/>
+        <source>Choose an item with a gold answer to withdraw.</source>
+        <translation>Wählen Sie ein Item mit einer Goldstandard-Antwort, die zurückgezogen werden soll.</translation>
     </message>
 </context>
 <context>

@@ -2240,6 +2240,29 @@
     </message>
 </context>
 <context>
+    <name>GoldAnswerEditsText</name>
+    <message>
+        <location filename="../core/project/gold_answer_edits.cpp" line="36"/>
+        <source>Decide gold answer &quot;%1&quot;</source>
+        <translation>Antwoord ‘%1’ voor de gouden standaard vastleggen</translation>
+    </message>
+    <message>
+        <location filename="../core/project/gold_answer_edits.cpp" line="56"/>
+        <source>The gold answer could not be stored: there is no article #%1 in the project.</source>
+        <translation>Het antwoord van de gouden standaard kon niet worden opgeslagen: het project heeft geen artikel #%1.</translation>
+    </message>
+    <message>
+        <location filename="../core/project/gold_answer_edits.cpp" line="82"/>
+        <source>Withdraw gold answer &quot;%1&quot;</source>
+        <translation>Antwoord ‘%1’ uit de gouden standaard intrekken</translation>
+    </message>
+    <message>
+        <location filename="../core/project/gold_answer_edits.cpp" line="93"/>
+        <source>This gold answer has already been withdrawn.</source>
+        <translation>Dit antwoord van de gouden standaard is al ingetrokken.</translation>
+    </message>
+</context>
+<context>
     <name>GoldEditsText</name>
     <message>
         <location filename="../core/project/gold_edits.cpp" line="30"/>
@@ -2301,6 +2324,14 @@
         <location filename="../core/project/gold_edits.cpp" line="198"/>
         <source>There are no spans to accept.</source>
         <translation>Er zijn geen fragmenten om te accepteren.</translation>
+    </message>
+</context>
+<context>
+    <name>GoldJudgementTableText</name>
+    <message>
+        <location filename="../core/store/gold_judgement_table.cpp" line="37"/>
+        <source>There is no gold answer #%1 in the project.</source>
+        <translation>Het project heeft geen antwoord #%1 van de gouden standaard.</translation>
     </message>
 </context>
 <context>
@@ -3823,6 +3854,16 @@
         <location filename="../app/report/report_document.cpp" line="113"/>
         <source>References</source>
         <translation>Literatuur</translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_method_text.cpp" line="154"/>
+        <source>Answers to article-level items were adjudicated as well: %1 gold answers on %2 articles, %3 of them with a written rationale. </source>
+        <translation>Ook antwoorden op items op artikelniveau zijn beslist: %1 antwoorden van de gouden standaard bij %2 artikelen, %3 daarvan met een schriftelijke motivering. </translation>
+    </message>
+    <message>
+        <location filename="../app/report/report_method_text.cpp" line="164"/>
+        <source>Disagreements on article-level items were resolved by adjudication into a separate gold standard: %1 gold answers on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
+        <translation>Verschillen bij items op artikelniveau zijn opgelost door beslissing in een aparte gouden standaard: %1 antwoorden van de gouden standaard bij %2 artikelen, beslist door %3, %4 daarvan met een schriftelijke motivering. De onafhankelijke coderingen bleven ongewijzigd; alle bovenstaande cijfers komen daaruit. </translation>
     </message>
 </context>
 <context>
@@ -7281,6 +7322,124 @@
     </message>
 </context>
 <context>
+    <name>fourfold::AnswerPanel</name>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="49"/>
+        <source>Answers to article-level items</source>
+        <translation>Antwoorden op items op artikelniveau</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="62"/>
+        <source>Gold answer</source>
+        <translation>Antwoord van de gouden standaard</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="63"/>
+        <source>Gold &amp;answer:</source>
+        <translation>&amp;Antwoord gouden standaard:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="65"/>
+        <source>Why this answer, for the method section</source>
+        <translation>Waarom dit antwoord, voor de methodesectie</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="66"/>
+        <source>Ra&amp;tionale:</source>
+        <translation>Mo&amp;tivering:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="69"/>
+        <source>&amp;Decide gold answer</source>
+        <translation>Antwoord gouden standaard &amp;vastleggen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="70"/>
+        <source>Put the chosen value into gold as the answer to this item; it replaces a gold answer decided before</source>
+        <translation>De gekozen waarde als antwoord op dit item in de gouden standaard opnemen; die vervangt een eerder vastgelegd antwoord van de gouden standaard</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="72"/>
+        <source>&amp;Withdraw gold answer</source>
+        <translation>Antwoord gouden standaard &amp;intrekken</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="73"/>
+        <source>Withdraw the gold answer to this item</source>
+        <translation>Het antwoord van de gouden standaard op dit item intrekken</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="97"/>
+        <source>No article open.</source>
+        <translation>Geen artikel geopend.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="140"/>
+        <source>Item</source>
+        <translation>Item</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="141"/>
+        <source>Agreement</source>
+        <translation>Overeenstemming</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="141"/>
+        <source>Gold</source>
+        <translation>Gouden standaard</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="153"/>
+        <source>%1 has not answered</source>
+        <translation>%1 heeft niet geantwoord</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="158"/>
+        <source>no answers</source>
+        <translation>geen antwoorden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="161"/>
+        <source>✓ agree</source>
+        <translation>✓ eens</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="164"/>
+        <source>agree, not all answered</source>
+        <translation>eens, niet iedereen heeft geantwoord</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="167"/>
+        <source>≠ differ</source>
+        <translation>≠ verschillend</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="177"/>
+        <source>Decided by %1.</source>
+        <translation>Beslist door %1.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="178"/>
+        <source>Decided by %1: “%2”</source>
+        <translation>Beslist door %1: ‘%2’</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="183"/>
+        <source>The codebook has no article-level items.</source>
+        <translation>Het codeboek heeft geen items op artikelniveau.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="248"/>
+        <source>%1 (given by %2)</source>
+        <translation>%1 (door %2)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/answer_panel.cpp" line="248"/>
+        <source>, </source>
+        <translation>, </translation>
+    </message>
+</context>
+<context>
     <name>fourfold::ArticleListModel</name>
     <message>
         <location filename="../app/desktop/article_list_model.cpp" line="50"/>
@@ -8315,6 +8474,16 @@ Bijna-kopie van %2</translation>
         <location filename="../app/desktop/compare/comparison_window.cpp" line="946"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>Er is in dit artikel geen overeenstemmende passage meer om te accepteren.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="249"/>
+        <source>Answers to article-level items</source>
+        <translation>Antwoorden op items op artikelniveau</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="985"/>
+        <source>Choose an item with a gold answer to withdraw.</source>
+        <translation>Kies een item met een antwoord van de gouden standaard om in te trekken.</translation>
     </message>
 </context>
 <context>

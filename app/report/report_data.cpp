@@ -170,6 +170,9 @@ QJsonObject ReportData::toJson() const
             QJsonObject {{QStringLiteral("spans"), goldSpans},
                 {QStringLiteral("articles"), goldArticles},
                 {QStringLiteral("with_rationale"), goldWithRationale},
+                {QStringLiteral("answers"), goldAnswers},
+                {QStringLiteral("answer_articles"), goldAnswerArticles},
+                {QStringLiteral("answers_with_rationale"), goldAnswersWithRationale},
                 {QStringLiteral("decided_by"), QJsonArray::fromStringList(goldDeciders)}}},
         {QStringLiteral("frames"), framesJson(frames, elementAlphas)},
         {QStringLiteral("codebook"),
@@ -295,6 +298,9 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     auto gold = project.goldAnnotations();
     if (!gold)
         return std::unexpected(gold.error());
+    auto goldAnswers = project.goldJudgements();
+    if (!goldAnswers)
+        return std::unexpected(goldAnswers.error());
     auto coders = project.coders();
     if (!coders)
         return std::unexpected(coders.error());
@@ -356,6 +362,16 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
         deciders.insert(pseudonyms.value(g.decidedBy.value));
     }
     d.goldArticles = int(goldArticles.size());
+    QSet<qint64> goldAnswerArticles;
+    for (const GoldJudgement &g : *goldAnswers) {
+        if (!codedBy.contains(g.article.value))
+            continue;
+        ++d.goldAnswers;
+        goldAnswerArticles.insert(g.article.value);
+        d.goldAnswersWithRationale += g.rationale.trimmed().isEmpty() ? 0 : 1;
+        deciders.insert(pseudonyms.value(g.decidedBy.value));
+    }
+    d.goldAnswerArticles = int(goldAnswerArticles.size());
     if (!options.phase || *options.phase == Phase::Reliability) {
         auto draw = StudyDesign::recordedDraw(project, Phase::Reliability);
         if (!draw)

@@ -77,7 +77,11 @@ struct ReportData {
     int goldSpans = 0;
     int goldArticles = 0;
     int goldWithRationale = 0;
-    QStringList goldDeciders; // pseudonyms
+    // Gold answers to article-level items (gold_answer_edits.h) on the selected articles.
+    int goldAnswers = 0;
+    int goldAnswerArticles = 0;
+    int goldAnswersWithRationale = 0;
+    QStringList goldDeciders; // pseudonyms of whoever decided gold spans or answers
     // Codebook: the current version and how many selected codings used another one.
     int codebookNumber = 0;
     QString codebookName;

@@ -137,7 +137,7 @@ QString reportMethodText(const ReportMarkup &m)
                              .arg(others.join(QStringLiteral("; "))));
 
     // Disagreements (item 8) and the codebook (item 9).
-    if (d.goldSpans > 0)
+    if (d.goldSpans > 0) {
         p = ReportDocumentText::tr(
             "Disagreements were resolved by adjudication into a separate gold standard: %1 "
             "spans on %2 articles, decided by %3, %4 of them with a written rationale. The "
@@ -149,11 +149,35 @@ QString reportMethodText(const ReportMarkup &m)
                     htmlEscaped(d.goldDeciders.join(QStringLiteral(", "))),
                     m.fig(QStringLiteral("report"), QStringLiteral("gold.with_rationale"),
                         QStringLiteral("int")));
-    else
+        if (d.goldAnswers > 0)
+            p += ReportDocumentText::tr(
+                "Answers to article-level items were adjudicated as well: %1 gold answers on %2 "
+                "articles, %3 of them with a written rationale. ")
+                     .arg(m.fig(QStringLiteral("report"), QStringLiteral("gold.answers"),
+                              QStringLiteral("int")),
+                         m.fig(QStringLiteral("report"), QStringLiteral("gold.answer_articles"),
+                             QStringLiteral("int")),
+                         m.fig(QStringLiteral("report"),
+                             QStringLiteral("gold.answers_with_rationale"), QStringLiteral("int")));
+    } else if (d.goldAnswers > 0) {
+        p = ReportDocumentText::tr(
+            "Disagreements on article-level items were resolved by adjudication into a separate "
+            "gold standard: %1 gold answers on %2 articles, decided by %3, %4 of them with a "
+            "written rationale. The independent codings were kept unchanged; every figure above "
+            "comes from them. ")
+                .arg(m.fig(QStringLiteral("report"), QStringLiteral("gold.answers"),
+                         QStringLiteral("int")),
+                    m.fig(QStringLiteral("report"), QStringLiteral("gold.answer_articles"),
+                        QStringLiteral("int")),
+                    htmlEscaped(d.goldDeciders.join(QStringLiteral(", "))),
+                    m.fig(QStringLiteral("report"), QStringLiteral("gold.answers_with_rationale"),
+                        QStringLiteral("int")));
+    } else {
         p = ReportDocumentText::tr("No adjudication is recorded in the project yet: %1. ")
                 .arg(ReportMarkup::fillIn(ReportDocumentText::tr(
                     "say how disagreements were resolved, e.g. by discussion or by "
                     "the lead")));
+    }
     p += ReportDocumentText::tr("Coding followed version %1 of the codebook (“%2”)")
              .arg(m.fig(QStringLiteral("report"), QStringLiteral("codebook.version"),
                       QStringLiteral("int")),
@@ -197,7 +221,8 @@ QString reportChecklist(const ReportMarkup &m)
         {ReportDocumentText::tr("Reliability for each variable, for each index"), true},
         {ReportDocumentText::tr("Amount of coder training required to reach reliability"),
             trainingKnown},
-        {ReportDocumentText::tr("How disagreements were resolved"), d.goldSpans > 0},
+        {ReportDocumentText::tr("How disagreements were resolved"),
+            d.goldSpans > 0 || d.goldAnswers > 0},
         {ReportDocumentText::tr("Where the codebook and coding instructions can be obtained"),
             false},
     };

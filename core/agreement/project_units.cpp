@@ -137,6 +137,26 @@ Result<CountedCodings> countedCodings(const Project &project, const UnitSelectio
         if (inPhase(sel.phase, j.phase) && s.counts(j.article.value, j.coder.value)
             && s.coderIndex.contains(j.coder.value))
             s.judgements.push_back(std::move(j));
+    if (sel.includeGold) {
+        // Gold answers are gold's answers to the article-level items. They do not make gold count
+        // on an article for the units of the text: there only gold spans do.
+        auto golds = project.goldJudgements();
+        if (!golds)
+            return std::unexpected(golds.error());
+        for (const GoldJudgement &g : *golds) {
+            if (!articleIds.contains(g.article.value))
+                continue;
+            Judgement j;
+            j.id = JudgementId {-g.id.value};
+            j.uuid = g.uuid;
+            j.article = g.article;
+            j.coder = CoderId {kGold};
+            j.itemKey = g.itemKey;
+            j.value = g.value;
+            j.createdAt = j.modifiedAt = g.decidedAt;
+            s.judgements.push_back(std::move(j));
+        }
+    }
     return s;
 }
 

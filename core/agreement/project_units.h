@@ -45,7 +45,8 @@ struct UnitSelection {
     QString item = QStringLiteral("dominant_function");
     // The span attribute for UnitKind::Span (e.g. "polarity" of evaluation spans).
     QString attribute;
-    // Adds the gold standard as one more coder, "gold", on the articles that have gold spans.
+    // Adds the gold standard as one more coder, "gold": its spans on the articles that have gold
+    // spans, and for article units its answers (gold answers) to the item.
     bool includeGold = false;
 };
 
@@ -58,7 +59,7 @@ struct CountedCodings {
     QSet<QPair<qint64, qint64>> counted; // (article id, coder id) whose codings count
     // Live, in phase, of counted pairs, as outlines (Project::forEachAnnotationOutline).
     std::vector<Annotation> annotations;
-    std::vector<Judgement> judgements; // likewise
+    std::vector<Judgement> judgements; // likewise; gold answers with gold's id (-1), ids < 0
     // Articles in progress left out per coder (selected coders, or any coder when none were
     // named), in coder then article order; empty when the selection takes them in.
     struct LeftOut {

@@ -237,6 +237,7 @@ struct SplitOutput {
     QByteArray indent; // w3c: of each item
     std::array<qint64, 4> spanCount {}, articleCount {};
     qint64 articles = 0, spans = 0;
+    qint64 answers = 0; // gold answers (gold layer, jsonl)
 };
 
 } // namespace
@@ -303,6 +304,25 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
         return options.afterFile ? options.afterFile(name) : Status {};
     };
 
+    // The gold layer's JSON Lines carry the gold answers of its articles too: one per article and
+    // item, so the project's are held (by article), with the deciding lead's pseudonym.
+    const bool withAnswers =
+        options.layer.kind == LayerKind::Gold && options.format == ExportFormat::Jsonl;
+    QHash<qint64, std::vector<GoldJudgement>> goldAnswers;
+    QHash<qint64, QString> pseudonyms;
+    if (withAnswers) {
+        auto answers = project.goldJudgements();
+        if (!answers)
+            return std::unexpected(answers.error());
+        for (GoldJudgement &g : *answers)
+            goldAnswers[g.article.value].push_back(std::move(g));
+        auto coders = project.coders();
+        if (!coders)
+            return std::unexpected(coders.error());
+        for (const Coder &c : *coders)
+            pseudonyms.insert(c.id.value, c.pseudonym);
+    }
+
     // Every split's files are open at once and written in one pass over the layer.
     const QStringList &sources = layer->sources();
     const QStringList sourceParts = sourceFileParts(sources);
@@ -315,6 +335,8 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
         case ExportFormat::Jsonl:
             names << out.name + QStringLiteral(".jsonl")
                   << out.name + QStringLiteral(".articles.jsonl");
+            if (withAnswers)
+                names << out.name + QStringLiteral(".answers.jsonl");
             break;
         case ExportFormat::W3c:
             names << out.name + QStringLiteral(".jsonld");
@@ -424,6 +446,17 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
                 o.insert(QStringLiteral("text"), current->text);
             }
             out.files[1]->write(jsonLine(o));
+            if (withAnswers)
+                for (const GoldJudgement &g : goldAnswers.value(la.article.value)) {
+                    out.files[2]->write(
+                        jsonLine(QJsonObject {{QStringLiteral("article"), a.externalId},
+                            {QStringLiteral("sha256"), a.sha256},
+                            {QStringLiteral("item"), g.itemKey}, {QStringLiteral("value"), g.value},
+                            {QStringLiteral("coder"), pseudonyms.value(g.decidedBy.value)},
+                            {QStringLiteral("source"), QStringLiteral("gold")},
+                            {QStringLiteral("id"), QStringLiteral("urn:uuid:") + g.uuid}}));
+                    ++out.answers;
+                }
             break;
         }
         case ExportFormat::W3c: {
@@ -529,10 +562,11 @@ Result<ExportReport> exportLayer(const Project &project, const ExportOptions &op
             perFunction.insert(functionKey(f),
                 QJsonObject {{QStringLiteral("spans"), out.spanCount[std::size_t(f)]},
                     {QStringLiteral("articles"), out.articleCount[std::size_t(f)]}});
-        splitCounts.insert(out.name,
-            QJsonObject {{QStringLiteral("articles"), out.articles},
-                {QStringLiteral("spans"), out.spans},
-                {QStringLiteral("per_function"), perFunction}});
+        QJsonObject counts {{QStringLiteral("articles"), out.articles},
+            {QStringLiteral("spans"), out.spans}, {QStringLiteral("per_function"), perFunction}};
+        if (withAnswers)
+            counts.insert(QStringLiteral("answers"), out.answers);
+        splitCounts.insert(out.name, counts);
     }
 
     QJsonObject ratioObject;

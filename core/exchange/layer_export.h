@@ -9,6 +9,9 @@
 //                                  source, id, score (runs), quote (unless the text is withheld)
 //          <split>.articles.jsonl  one article per line: article, sha256, language, length,
 //                                  title and text (unless withheld)
+//          <split>.answers.jsonl   gold layer only: one gold answer per line (the gold answers
+//                                  of the split's articles): article, sha256, item, value,
+//                                  coder (the deciding lead's pseudonym), source "gold", id
 //   w3c    <split>.jsonld          a W3C AnnotationCollection (w3c_format.h)
 //   bio    <split>.bio             IOB2 tokens, one column per function (iob2_format.h); with the
 //                                  coders layer one file per coder: <split>.<pseudonym>.bio
@@ -17,7 +20,8 @@
 //                                  length)
 //   manifest.json                  every file's SHA-256 and size, the codebook version, the layer,
 //                                  the format, the seed, the split ratios, and per split the
-//                                  articles and spans per function
+//                                  articles and spans per function (and the gold layer's
+//                                  JSON Lines: the gold answers)
 // Coders appear only by pseudonym. With the text withheld, no text, quote, token or title is
 // written: only offsets and hashes.
 

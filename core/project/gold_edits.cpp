@@ -19,6 +19,8 @@ struct GoldEditsText {
     Q_DECLARE_TR_FUNCTIONS(GoldEditsText)
 };
 
+} // namespace
+
 Status requireLead(const Database &db, CoderId id)
 {
     auto all = store::coders(db);
@@ -30,8 +32,6 @@ Status requireLead(const Database &db, CoderId id)
             GoldEditsText::tr("Only a lead can decide the gold standard."));
     return {};
 }
-
-} // namespace
 
 AdjudicateSpanEdit::AdjudicateSpanEdit(ArticleId article, CoderId lead, AnnotationContent content,
     std::vector<AnnotationId> sources, QString rationale)

@@ -10,6 +10,11 @@
 
 namespace fourfold {
 
+// Succeeds when the person `id` is a lead; fails with InvalidArgument ("Only a lead can decide the
+// gold standard.") otherwise, and with the store's error when the people cannot be read. Every
+// gold decision (spans, rejections, answers) checks it first.
+Status requireLead(const Database &db, CoderId id);
+
 // Adds a gold span. apply() fails with InvalidArgument if `lead` is not a lead, if a source is
 // not a live annotation of the same article, or the range is not inside the text; InvalidInput
 // if the attributes do not fit the codebook.

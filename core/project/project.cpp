@@ -8,6 +8,7 @@
 #include "core/store/coder_table.h"
 #include "core/store/database.h"
 #include "core/store/event_log.h"
+#include "core/store/gold_judgement_table.h"
 #include "core/store/gold_table.h"
 #include "core/store/project_tables.h"
 #include "core/store/savepoint.h"
@@ -284,6 +285,11 @@ Result<std::vector<GoldAnnotation>> Project::goldAnnotations(ArticleId article) 
 Result<std::vector<GoldRejection>> Project::goldRejections(ArticleId article) const
 {
     return store::goldRejections(db(), article);
+}
+
+Result<std::vector<GoldJudgement>> Project::goldJudgements(ArticleId article) const
+{
+    return store::goldJudgements(db(), article);
 }
 
 Result<QStringList> Project::attributeValues(const QString &key, std::optional<CoderId> coder) const

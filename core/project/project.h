@@ -8,6 +8,7 @@
 #include "core/model/codebook.h"
 #include "core/model/coder.h"
 #include "core/model/error.h"
+#include "core/model/gold_judgement.h"
 #include "core/model/project_counts.h"
 #include "core/project/import_report.h"
 #include "core/project/integrity_report.h"
@@ -110,6 +111,9 @@ public:
     Result<std::vector<GoldAnnotation>> goldAnnotations(ArticleId article = {}) const;
     // The live rejections of coders' spans of an article (every article when invalid).
     Result<std::vector<GoldRejection>> goldRejections(ArticleId article = {}) const;
+    // The live gold answers to article-level items of an article (every article when invalid),
+    // by article, item and id: at most one per article and item (gold_answer_edits.h).
+    Result<std::vector<GoldJudgement>> goldJudgements(ArticleId article = {}) const;
     // Every live annotation / judgement / assignment of the project (for reliability work).
     Result<std::vector<Annotation>> allAnnotations() const;
     // The distinct values of the text attribute `key` on live spans of any function, most used

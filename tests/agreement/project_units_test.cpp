@@ -1,6 +1,7 @@
 #include "core/agreement/agreement_report.h"
 #include "core/agreement/project_units.h"
 #include "core/project/annotation_edits.h"
+#include "core/project/gold_answer_edits.h"
 #include "core/project/gold_edits.h"
 #include "tests/project/project_fixture.h"
 
@@ -239,4 +240,58 @@ TEST_CASE("one verdict for alpha: Krippendorff's 0.800 and 0.667")
     CHECK(alphaBand(0.6669) == AlphaBand::Unreliable);
     CHECK(alphaBand(-0.2) == AlphaBand::Unreliable);
     CHECK(alphaVerdict(0.75) == QStringLiteral("tentative conclusions only (0.667–0.800)"));
+}
+
+TEST_CASE("gold answers join article units as gold's answers and leave the text's units alone")
+{
+    UnitsFixture f;
+    auto lead =
+        addOlderLeadForTesting(f.project, QStringLiteral("Test lead"), QStringLiteral("L01"));
+    REQUIRE(lead);
+    const QString item = QStringLiteral("dominant_function");
+    for (auto [coder, value] : {std::pair {f.c1, "problem"}, std::pair {f.c2, "cause"}}) {
+        SetJudgementEdit answer(f.f1, coder, item, QString::fromLatin1(value), Phase::Reliability);
+        REQUIRE(f.project.apply(answer));
+    }
+    SetJudgementEdit third(f.f2, f.c3, item, QStringLiteral("remedy"), Phase::Reliability);
+    REQUIRE(f.project.apply(third));
+    // Gold answers on both articles; the one on f1 replaces an earlier decision.
+    AdjudicateAnswerEdit earlier(f.f1, *lead, item, QStringLiteral("problem"), {});
+    REQUIRE(f.project.apply(earlier));
+    AdjudicateAnswerEdit onF1(f.f1, *lead, item, QStringLiteral("cause"), {});
+    REQUIRE(f.project.apply(onF1));
+    AdjudicateAnswerEdit onF2(f.f2, *lead, item, QStringLiteral("remedy"), {});
+    REQUIRE(f.project.apply(onF2));
+
+    UnitSelection s;
+    s.unit = UnitKind::Article;
+    s.includeGold = true;
+    auto t = unitTable(f.project, s);
+    REQUIRE(t);
+    CHECK(t->coders
+        == QStringList {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03"),
+            QStringLiteral("gold")});
+    REQUIRE(t->unitIds() == QStringList {QStringLiteral("f1"), QStringLiteral("f2")});
+    // The live gold answer only (the withdrawn-by-replacement "problem" is not gold's).
+    CHECK(t->rowText(0)
+        == QStringList {QStringLiteral("problem"), QStringLiteral("cause"), QString(),
+            QStringLiteral("cause")});
+    CHECK(t->rowText(1)
+        == QStringList {QString(), QString(), QStringLiteral("remedy"), QStringLiteral("remedy")});
+    // Without --with-gold there is no gold column.
+    s.includeGold = false;
+    t = unitTable(f.project, s);
+    REQUIRE(t);
+    CHECK(t->coders.size() == 3);
+
+    // Sentence units: gold has no span anywhere, so its answers do not make it a coder of the
+    // text ("absent" everywhere would be a claim gold never made); its column stays empty.
+    s.unit = UnitKind::Sentence;
+    s.function = FramingFunction::Problem;
+    s.includeGold = true;
+    t = unitTable(f.project, s);
+    REQUIRE(t);
+    REQUIRE(t->coders.last() == QStringLiteral("gold"));
+    for (size_t u = 0; u < t->unitCount(); ++u)
+        CHECK(t->rowText(u).last().isEmpty());
 }
