@@ -1,5 +1,6 @@
 #include "app/desktop/compare/comparison_window.h"
 
+#include "app/desktop/compare/answer_panel.h"
 #include "app/desktop/compare/comparison_view.h"
 #include "app/desktop/compare/disagreement_queue_model.h"
 #include "app/desktop/compare/gold_span_dialog.h"
@@ -7,6 +8,7 @@
 #include "app/desktop/function_style.h"
 #include "app/desktop/shortcut_table.h"
 #include "app/desktop/span_quote.h"
+#include "core/project/gold_answer_edits.h"
 #include "core/project/gold_edits.h"
 #include "core/text/offset_map.h"
 
@@ -244,6 +246,18 @@ void ComparisonWindow::buildUi()
     rationaleLabel->setBuddy(m_rationale);
     panelLayout->addWidget(rationaleLabel);
     panelLayout->addWidget(m_rationale);
+    auto *answersLabel = new QLabel(tr("Answers to article-level items"), panel);
+    answersLabel->setFont(bold);
+    panelLayout->addSpacing(6);
+    panelLayout->addWidget(answersLabel);
+    m_answers = new AnswerPanel(panel);
+    panelLayout->addWidget(m_answers);
+    connect(m_answers, &AnswerPanel::decideRequested, this,
+        [this](const QString &item, const QString &value, const QString &rationale) {
+            decideAnswer(item, value, rationale);
+        });
+    connect(m_answers, &AnswerPanel::withdrawRequested, this,
+        [this](GoldJudgementId id) { withdrawGoldAnswer(id); });
     const auto key = [](const QKeySequence &k) { return k.toString(QKeySequence::NativeText); };
     auto *keys = new QLabel(
         tr("Keys: N / P next and previous disagreement, %1 / %2 next and "
@@ -563,6 +577,27 @@ void ComparisonWindow::reloadArticle()
     columns.push_back(std::move(goldColumn));
     m_view->setContent(m_articleData, std::move(columns), m_comparison.passages, m_current);
     refreshDecisionList();
+    refreshAnswers();
+}
+
+void ComparisonWindow::refreshAnswers()
+{
+    if (!m_article.isValid()) {
+        m_answers->clear();
+        return;
+    }
+    auto answers = m_session->project().judgements(m_article);
+    auto gold = m_session->project().goldJudgements(m_article);
+    if (!answers || !gold) {
+        showMessage((answers ? gold.error() : answers.error()).toString(), true);
+        return;
+    }
+    // The coders whose columns are shown, by pseudonym only.
+    std::vector<Coder> coders;
+    for (CoderId id : m_comparison.coders)
+        if (const auto it = std::ranges::find(m_coders, id, &Coder::id); it != m_coders.end())
+            coders.push_back(*it);
+    m_answers->setContent(m_session->codebook(), coders, *answers, *gold, m_coders);
 }
 
 const Passage *ComparisonWindow::passage() const
@@ -927,6 +962,30 @@ bool ComparisonWindow::withdrawSelectedGold()
         return false;
     }
     return push(std::make_unique<WithdrawGoldEdit>(gold.front(), m_session->coder().id));
+}
+
+bool ComparisonWindow::decideAnswer(
+    const QString &item, const QString &value, const QString &rationale)
+{
+    if (!m_article.isValid())
+        return false;
+    // push() clears the spans' rationale field, which this decision did not use.
+    const QString spanRationale = m_rationale->text();
+    if (!push(std::make_unique<AdjudicateAnswerEdit>(
+            m_article, m_session->coder().id, item, value, rationale.trimmed())))
+        return false;
+    m_rationale->setText(spanRationale);
+    m_answers->setRationale(QString());
+    return true;
+}
+
+bool ComparisonWindow::withdrawGoldAnswer(GoldJudgementId id)
+{
+    if (!m_article.isValid() || !id.isValid()) {
+        showMessage(tr("Choose an item with a gold answer to withdraw."), true);
+        return false;
+    }
+    return push(std::make_unique<WithdrawGoldAnswerEdit>(id, m_session->coder().id));
 }
 
 bool ComparisonWindow::acceptAllAgreed()

@@ -3,11 +3,13 @@
 // (most undecided disagreements first), the open article for every coder side by side (and gold),
 // and the current passage's spans with the decisions a lead can take — accept a coder's span
 // into gold, merge boundaries, edit, reject, or accept everything the coders agree on — each with
-// an optional rationale. Every decision is one command on the session's undo stack, written to
-// the project at once; the coders' own spans are never changed.
+// an optional rationale; below, the article-level items with every coder's answer and the gold
+// answer the lead decides (AnswerPanel). Every decision is one command on the session's undo
+// stack, written to the project at once; the coders' own spans and answers are never changed.
 
 #include "app/desktop/coding_session.h"
 #include "core/agreement/disagreements.h"
+#include "core/model/gold_judgement.h"
 
 #include <QMainWindow>
 
@@ -24,6 +26,7 @@ class QTreeWidget;
 
 namespace fourfold {
 
+class AnswerPanel;
 class ComparisonView;
 class DisagreementQueueModel;
 
@@ -73,9 +76,14 @@ public:
     bool rejectSelected();
     bool withdrawSelectedGold();
     bool acceptAllAgreed();
+    // Decides the gold answer `value` of the article-level item `item` on the open article (it
+    // replaces the one decided before), and withdraws a gold answer.
+    bool decideAnswer(const QString &item, const QString &value, const QString &rationale);
+    bool withdrawGoldAnswer(GoldJudgementId id);
 
     DisagreementQueueModel *queueModel() const { return m_queueModel; }
     ComparisonView *view() const { return m_view; }
+    AnswerPanel *answerPanel() const { return m_answers; }
     // The last message shown in the message bar (errors and confirmations).
     QString lastMessage() const { return m_lastMessage; }
 
@@ -87,6 +95,7 @@ private:
     bool refreshQueueRow(ArticleId article);
     void reloadArticle();
     void refreshDecisionList();
+    void refreshAnswers();
     void updateActions();
     void showMessage(const QString &text, bool error);
     bool push(std::unique_ptr<Edit> edit);
@@ -120,6 +129,7 @@ private:
     QLineEdit *m_rationale = nullptr;
     QLabel *m_message = nullptr;
     QLabel *m_legend = nullptr;
+    AnswerPanel *m_answers = nullptr;
 
     QAction *m_next = nullptr;
     QAction *m_previous = nullptr;

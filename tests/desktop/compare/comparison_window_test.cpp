@@ -1,6 +1,7 @@
 // The comparison window driven through its widgets and keys, offscreen, on a copy of the sample
 // project (three coders C01..C03 on nine reliability articles, lead L01; gold on a few articles).
 #include "app/desktop/coding_session.h"
+#include "app/desktop/compare/answer_panel.h"
 #include "app/desktop/compare/comparison_view.h"
 #include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/compare/disagreement_queue_model.h"
@@ -20,8 +21,10 @@
 #include <QJsonObject>
 #include <QLabel>
 #include <QLineEdit>
+#include <QPushButton>
 #include <QSet>
 #include <QTest>
+#include <QTreeWidget>
 #include <QUndoStack>
 
 using namespace fourfold;
@@ -47,12 +50,14 @@ struct CompareFixture {
     Project &project() { return session->project(); }
     // Every table but the event log: the whole content of the project file.
     QString dump() { return dumpDatabase(databaseForTesting(project())); }
-    // The coders' own work: every table but gold, rejections and the event log.
+    // The coders' own work: every table but gold (spans and answers), rejections and the event
+    // log.
     QString rawDump()
     {
         return dumpDatabase(databaseForTesting(project()),
             {QStringLiteral("event_log"), QStringLiteral("gold_annotation"),
-                QStringLiteral("gold_source"), QStringLiteral("gold_rejection")});
+                QStringLiteral("gold_source"), QStringLiteral("gold_rejection"),
+                QStringLiteral("gold_judgement")});
     }
 };
 
@@ -500,4 +505,124 @@ TEST_CASE("the comparison window steps through articles with Ctrl keys and lists
             hinted = label->text().contains(
                 CompareKeys::nextArticle().front().toString(QKeySequence::NativeText));
     CHECK(hinted);
+}
+
+TEST_CASE("a gold answer is decided in the window from the coders' answers, undone and redone")
+{
+    CompareFixture f;
+    ComparisonWindow w(f.session.get());
+    activate(w);
+    // hb-01: C01 and C02 answer "problem", C03 "cause" (sample-project/codings.jsonl).
+    auto id = f.project().articleByExternalId(QStringLiteral("hb-01"));
+    REQUIRE(id);
+    REQUIRE(id->has_value());
+    const ArticleId article = **id;
+    REQUIRE(w.openArticle(article));
+    AnswerPanel *panel = w.answerPanel();
+    REQUIRE(panel);
+    const QString item = QStringLiteral("dominant_function");
+    REQUIRE(panel->rows().size() == f.session->codebook().items.size());
+    const auto row = [&] {
+        const auto it = std::ranges::find(panel->rows(), item, &AnswerPanel::Row::item);
+        REQUIRE(it != panel->rows().end());
+        return *it;
+    };
+    // Every coder's answer side by side, by pseudonym, as the project holds them.
+    const QStringList names = panel->coderNames();
+    CHECK(
+        names == QStringList {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")});
+    auto answers = f.project().judgements(article);
+    REQUIRE(answers);
+    for (qsizetype c = 0; c < names.size(); ++c) {
+        auto coder = f.project().coderByPseudonym(names[c]);
+        REQUIRE((coder && *coder));
+        const auto it = std::ranges::find_if(*answers,
+            [&](const Judgement &j) { return j.coder == (*coder)->id && j.itemKey == item; });
+        REQUIRE(it != answers->end());
+        CHECK(row().answers[size_t(c)] == it->value);
+    }
+    CHECK(row().answers
+        == std::vector<QString> {
+            QStringLiteral("problem"), QStringLiteral("problem"), QStringLiteral("cause")});
+    CHECK(row().agreement == AnswerPanel::Agreement::Differ);
+    CHECK(row().gold.isEmpty());
+    // The coders' answers are offered first, then the rest of the item's value set.
+    CHECK(panel->offeredValues()
+        == QStringList {QStringLiteral("problem"), QStringLiteral("cause"),
+            QStringLiteral("evaluation"), QStringLiteral("remedy"), QStringLiteral("none")});
+    const QString before = f.dump();
+    const QString raw = f.rawDump();
+    QUndoStack *undo = f.session->undoStack();
+    const int steps = undo->count();
+    // The lead takes C03's answer, with a rationale, through the panel's button.
+    REQUIRE(panel->setChosenValue(QStringLiteral("cause")));
+    panel->setRationale(QStringLiteral("The headline and the lead name the cause."));
+    QPushButton *decide = nullptr;
+    for (QPushButton *b : panel->findChildren<QPushButton *>())
+        if (b->text().contains(QStringLiteral("Decide")))
+            decide = b;
+    REQUIRE(decide);
+    REQUIRE(decide->isEnabled());
+    QTest::mouseClick(decide, Qt::LeftButton);
+    CHECK(undo->count() == steps + 1);
+    auto gold = f.project().goldJudgements(article);
+    REQUIRE(gold);
+    REQUIRE(gold->size() == 1);
+    const GoldJudgement first = gold->front();
+    CHECK(first.itemKey == item);
+    CHECK(first.value == QStringLiteral("cause"));
+    CHECK(first.rationale == QStringLiteral("The headline and the lead name the cause."));
+    CHECK(first.decidedBy == f.session->coder().id);
+    CHECK(row().gold == QStringLiteral("cause"));
+    CHECK(panel->rationale().isEmpty());
+    // Pseudonyms only: no person's name in any label, table cell or header of the window, the
+    // gold answer's "decided by" included.
+    QStringList shown;
+    for (const QLabel *label : w.findChildren<QLabel *>())
+        shown << label->text();
+    for (const QTreeWidget *tree : w.findChildren<QTreeWidget *>())
+        for (int c = 0; c < tree->columnCount(); ++c) {
+            shown << tree->headerItem()->text(c);
+            for (int i = 0; i < tree->topLevelItemCount(); ++i)
+                shown << tree->topLevelItem(i)->text(c) << tree->topLevelItem(i)->toolTip(c);
+        }
+    auto people = f.project().coders();
+    REQUIRE(people);
+    for (const Coder &c : *people)
+        CHECK_FALSE(shown.join(QLatin1Char('\n')).contains(c.name));
+
+    // The coders' answers and everything else but gold answers are untouched.
+    CHECK(f.rawDump() == raw);
+    const QString decided = f.dump();
+    CHECK(decided != before);
+
+    // Undo removes it, row for row; redo writes the same row again.
+    undo->undo();
+    CHECK(f.dump() == before);
+    CHECK(f.project().goldJudgements(article)->empty());
+    CHECK(row().gold.isEmpty());
+    undo->redo();
+    CHECK(f.dump() == decided);
+    CHECK(row().gold == QStringLiteral("cause"));
+
+    // A second decision (a value no coder gave) replaces the first; its undo brings it back.
+    REQUIRE(w.decideAnswer(item, QStringLiteral("evaluation"), {}));
+    gold = f.project().goldJudgements(article);
+    REQUIRE(gold->size() == 1);
+    CHECK(gold->front().value == QStringLiteral("evaluation"));
+    CHECK(row().gold == QStringLiteral("evaluation"));
+    undo->undo();
+    CHECK(f.dump() == decided);
+    CHECK(row().gold == QStringLiteral("cause"));
+
+    // A look at the window with the answers (tests run offscreen: the grab is as drawn).
+    const QString shot = qEnvironmentVariable("FOURFOLD_GOLD_ANSWER_SHOT");
+    if (!shot.isEmpty())
+        CHECK(w.grab().save(shot));
+
+    // Withdrawing is one more undoable step.
+    REQUIRE(w.withdrawGoldAnswer(first.id));
+    CHECK(f.project().goldJudgements(article)->empty());
+    undo->undo();
+    CHECK(f.dump() == decided);
 }
