@@ -3,6 +3,7 @@
 // (CMake target `screenshots` runs it into docs/screenshots.) Nothing here is edited by hand.
 
 #include "app/desktop/coding_session.h"
+#include "app/desktop/compare/answer_panel.h"
 #include "app/desktop/compare/comparison_window.h"
 #include "app/desktop/compare/disagreement_queue_model.h"
 #include "app/desktop/compare/gold_span_dialog.h"
@@ -45,6 +46,22 @@ int main(int argc, char *argv[])
             }
         w.setCurrentPassage(0);
         ok &= saveGrab(w, out, "comparison-gold.png");
+    }
+    {
+        // hb-01's dominant function: two coders say problem, one cause; the lead decides cause.
+        ComparisonWindow w(&session);
+        w.resize(1600, 960);
+        w.show();
+        for (const ArticleDisagreement &row : w.queueModel()->rows())
+            if (row.article.externalId == QStringLiteral("hb-01")) {
+                w.openArticle(row.article.id);
+                break;
+            }
+        ok &= w.decideAnswer(QStringLiteral("dominant_function"), QStringLiteral("cause"),
+            QStringLiteral("The headline and the lead paragraph name the grant cuts."));
+        w.answerPanel()->setChosenValue(QStringLiteral("cause"));
+        ok &= saveGrab(w, out, "comparison-gold-answer.png");
+        session.undoStack()->undo(); // the other pictures show the sample as it is
     }
     {
         // Two coders only, at a span one of them does not have.
