@@ -290,4 +290,20 @@ Result<PublishReport> TeamProject::publish(Project &project, const QString &serv
     return report;
 }
 
+Status TeamProject::setServer(Project &project, const QString &server)
+{
+    auto recorded = store::setting(project.db(), serverSettingKey());
+    if (!recorded)
+        return std::unexpected(recorded.error());
+    if (!recorded->has_value())
+        return fail(ErrorCode::InvalidArgument,
+            TeamProjectText::tr(
+                "%1 is not a team working file (made by team publish or team join).")
+                .arg(project.path()));
+    auto recordable = ServerConnection::withoutPassword(server);
+    if (!recordable)
+        return std::unexpected(recordable.error());
+    return store::setSetting(project.db(), serverSettingKey(), *recordable);
+}
+
 } // namespace fourfold

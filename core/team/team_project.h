@@ -189,6 +189,12 @@ public:
     static Result<TeamPersonReport> setPersonDisabled(Project &project, const SignedIn &by,
         const QString &pseudonym, bool disabled, const QString &admin = {});
 
+    // Makes the working file `project` sync through the login `server` (a libpq connection
+    // string; recorded without any password): e.g. the published file through the lead's own
+    // login rather than the administrator's. InvalidArgument for a file that is not a team
+    // working file or a malformed connection string.
+    static Status setServer(Project &project, const QString &server);
+
     // What `project`, a working file, holds of its team project and what its next sync would
     // send (the objects sync compares with their last synced version, counted the same way).
     // Reads only the file: it answers offline too. Fails with InvalidArgument for a file that is

@@ -7,6 +7,7 @@
 #include "core/store/project_tables.h"
 #include "core/store/shared_rows.h"
 #include "core/store/store_util.h"
+#include "core/team/server_connection_pool.h"
 #include "core/team/server_store_connection.h"
 #include "core/team/server_store_rows.h"
 #include "core/team/team_project.h"
@@ -73,9 +74,16 @@ Result<SyncReport> TeamProject::sync(
             TeamProjectText::tr(
                 "%1 is not a team working file (made by team publish or team join).")
                 .arg(project.path()));
-    auto conn = ServerConnection::open(**server);
+    auto conn = ServerConnectionPool::take(**server);
     if (!conn)
         return std::unexpected(conn.error());
+    // The connection is kept for the next sync however this one ends (outside any transaction:
+    // every path after BEGIN rolls back or commits).
+    struct GiveBack {
+        const QString &server;
+        Result<ServerConnection> &conn;
+        ~GiveBack() { ServerConnectionPool::give(server, std::move(*conn)); }
+    } giveBack {**server, conn};
     SyncReport report;
     report.server = conn->describe();
     report.lastChange = lastChange->value_or(QString()).toLongLong();
