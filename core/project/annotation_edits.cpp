@@ -316,4 +316,46 @@ Status SetJudgementEdit::revert(Database &db)
     return store::removeJudgementRow(db, m_after.id);
 }
 
+WithdrawJudgementEdit::WithdrawJudgementEdit(
+    ArticleId article, CoderId coder, QString itemKey, Phase phase)
+    : Edit(coder)
+    , m_article(article)
+    , m_coder(coder)
+    , m_itemKey(std::move(itemKey))
+    , m_phase(phase)
+{ }
+
+QString WithdrawJudgementEdit::text() const
+{
+    return AnnotationEditsText::tr("Withdraw answer \"%1\"").arg(m_itemKey);
+}
+
+Status WithdrawJudgementEdit::apply(Database &db)
+{
+    // The answer in the phase the coder codes the article in, as SetJudgementEdit stored it.
+    auto phase = StudyDesign::phaseForNewCoding(db, m_article, m_coder, m_phase);
+    if (!phase)
+        return std::unexpected(phase.error());
+    auto existing = store::judgement(db, m_article, m_coder, m_itemKey, *phase);
+    if (!existing)
+        return std::unexpected(existing.error());
+    if (!*existing)
+        return fail(ErrorCode::NotFound,
+            AnnotationEditsText::tr("There is no answer to \"%1\" to withdraw.").arg(m_itemKey));
+    Judgement after = **existing;
+    after.deleted = true;
+    after.modifiedAt = store::now();
+    FOURFOLD_TRY_STATUS(store::updateJudgement(db, after));
+    m_before = **existing;
+    return {};
+}
+
+Status WithdrawJudgementEdit::revert(Database &db)
+{
+    if (!FOURFOLD_SOFT_ASSERT(lcProject(), m_before))
+        return fail(ErrorCode::Internal,
+            AnnotationEditsText::tr("An edit that was never applied cannot be undone."));
+    return store::updateJudgement(db, *m_before);
+}
+
 } // namespace fourfold

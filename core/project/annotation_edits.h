@@ -128,4 +128,27 @@ private:
     std::optional<Judgement> m_before;
 };
 
+// Withdraws a coder's answer to an article-level item (a tombstone, as for annotations): the item
+// is unanswered again, and undo brings the answer back. NotFound if the coder has no live answer
+// to the item on the article in `phase`.
+class WithdrawJudgementEdit : public Edit
+{
+public:
+    WithdrawJudgementEdit(
+        ArticleId article, CoderId coder, QString itemKey, Phase phase = Phase::Production);
+    QString text() const override;
+    QString action() const override { return QStringLiteral("judgement.withdraw"); }
+    QString objectType() const override { return QStringLiteral("judgement"); }
+    QString objectUuid() const override { return m_before ? m_before->uuid : QString(); }
+    Status apply(Database &db) override;
+    Status revert(Database &db) override;
+
+private:
+    ArticleId m_article;
+    CoderId m_coder;
+    QString m_itemKey;
+    Phase m_phase;
+    std::optional<Judgement> m_before;
+};
+
 } // namespace fourfold

@@ -111,6 +111,15 @@ TEST_CASE("edits apply and revert to an identical database dump")
         before = f.dump();
         edit = std::make_unique<UnlinkAnnotationsEdit>(link.linkId(), f.c1);
     }
+    SECTION("withdraw an answer")
+    {
+        SetJudgementEdit answer(
+            f.f1, f.c1, QStringLiteral("dominant_function"), QStringLiteral("cause"));
+        REQUIRE(f.project.apply(answer));
+        before = f.dump();
+        edit = std::make_unique<WithdrawJudgementEdit>(
+            f.f1, f.c1, QStringLiteral("dominant_function"));
+    }
     SECTION("answer an article-level item, first time and again")
     {
         SetJudgementEdit first(
@@ -294,6 +303,43 @@ TEST_CASE("a removed link leaves the article's links and comes back on undo")
     CHECK(linksNow() == 1);
     UnlinkAnnotationsEdit unknown(LinkId {9999}, f.c1);
     CHECK_FALSE(f.project.apply(unknown));
+}
+
+TEST_CASE("a withdrawn answer leaves the item unanswered and comes back on undo")
+{
+    EditFixture f;
+    const QString item = QStringLiteral("dominant_function");
+    auto answersNow = [&] {
+        auto j = f.project.judgements(f.f1);
+        REQUIRE(j);
+        return *j;
+    };
+    SetJudgementEdit answer(f.f1, f.c1, item, QStringLiteral("remedy"));
+    REQUIRE(f.project.apply(answer));
+    REQUIRE(answersNow().size() == 1);
+    const QString uuid = answersNow().front().uuid;
+
+    WithdrawJudgementEdit withdraw(f.f1, f.c1, item);
+    REQUIRE(f.project.apply(withdraw));
+    CHECK(answersNow().empty());
+    CHECK(withdraw.text() == QStringLiteral("Withdraw answer \"dominant_function\""));
+    // Withdrawing again is refused: there is no answer left.
+    WithdrawJudgementEdit again(f.f1, f.c1, item);
+    auto st = f.project.apply(again);
+    REQUIRE_FALSE(st);
+    CHECK(st.error().code == ErrorCode::NotFound);
+    // A new answer after the withdrawal is a row of its own beside the tombstone.
+    SetJudgementEdit anew(f.f1, f.c1, item, QStringLiteral("problem"));
+    REQUIRE(f.project.apply(anew));
+    REQUIRE(answersNow().size() == 1);
+    CHECK(answersNow().front().value == QStringLiteral("problem"));
+    CHECK(answersNow().front().uuid != uuid);
+    REQUIRE(f.project.revert(anew));
+
+    REQUIRE(f.project.revert(withdraw));
+    REQUIRE(answersNow().size() == 1);
+    CHECK(answersNow().front().value == QStringLiteral("remedy"));
+    CHECK(answersNow().front().uuid == uuid);
 }
 
 TEST_CASE("every edit and its undo are written to the event log")
