@@ -6,9 +6,12 @@
 #include <QProcess>
 #include <QUuid>
 
+#include <arpa/inet.h>
 #include <catch2/catch.hpp>
 #include <libpq-fe.h>
+#include <netinet/in.h>
 #include <pwd.h>
+#include <sys/socket.h>
 #include <unistd.h>
 
 namespace fourfold::test {
@@ -30,6 +33,67 @@ QString quoted(QString value)
     value.replace(QLatin1String("\\"), QLatin1String("\\\\"));
     value.replace(QLatin1String("'"), QLatin1String("\\'"));
     return QLatin1Char('\'') + value + QLatin1Char('\'');
+}
+
+// A TCP port on 127.0.0.1 that nothing listens on now (the kernel's choice for port 0), so
+// several test programs' clusters can run at once.
+int freePort()
+{
+    const int fd = socket(AF_INET, SOCK_STREAM, 0);
+    REQUIRE(fd >= 0);
+    sockaddr_in address {};
+    address.sin_family = AF_INET;
+    address.sin_addr.s_addr = htonl(INADDR_LOOPBACK);
+    address.sin_port = 0;
+    socklen_t length = sizeof address;
+    const bool bound = bind(fd, reinterpret_cast<sockaddr *>(&address), sizeof address) == 0
+        && getsockname(fd, reinterpret_cast<sockaddr *>(&address), &length) == 0;
+    close(fd);
+    REQUIRE(bound);
+    return ntohs(address.sin_port);
+}
+
+// Runs openssl (a dependency of Debian's postgresql, through ssl-cert) with `args` in `dir`.
+void openssl(const QString &dir, const QStringList &args)
+{
+    QProcess process;
+    process.setProcessChannelMode(QProcess::MergedChannels);
+    process.setWorkingDirectory(dir);
+    process.start(QStringLiteral("openssl"), args);
+    const bool finished = process.waitForFinished(60000);
+    INFO("openssl " << args.join(QLatin1Char(' ')).toStdString() << "\n"
+                    << process.readAll().toStdString()
+                    << "\n(install the Debian package openssl; tools/setup-debian does)");
+    REQUIRE(finished);
+    REQUIRE(process.exitStatus() == QProcess::NormalExit);
+    REQUIRE(process.exitCode() == 0);
+}
+
+// A certificate authority (ca.crt) and a server certificate it signed for localhost and
+// 127.0.0.1 (server.crt, server.key), valid for a day, in `dir`.
+void makeCertificates(const QString &dir)
+{
+    openssl(dir,
+        {QStringLiteral("req"), QStringLiteral("-x509"), QStringLiteral("-newkey"),
+            QStringLiteral("rsa:2048"), QStringLiteral("-nodes"), QStringLiteral("-keyout"),
+            QStringLiteral("ca.key"), QStringLiteral("-out"), QStringLiteral("ca.crt"),
+            QStringLiteral("-days"), QStringLiteral("1"), QStringLiteral("-subj"),
+            QStringLiteral("/CN=Fourfold test authority")});
+    openssl(dir,
+        {QStringLiteral("req"), QStringLiteral("-newkey"), QStringLiteral("rsa:2048"),
+            QStringLiteral("-nodes"), QStringLiteral("-keyout"), QStringLiteral("server.key"),
+            QStringLiteral("-out"), QStringLiteral("server.csr"), QStringLiteral("-subj"),
+            QStringLiteral("/CN=localhost")});
+    QFile names(QDir(dir).filePath(QStringLiteral("names.ext")));
+    REQUIRE(names.open(QIODevice::WriteOnly));
+    names.write("subjectAltName=DNS:localhost,IP:127.0.0.1\n");
+    names.close();
+    openssl(dir,
+        {QStringLiteral("x509"), QStringLiteral("-req"), QStringLiteral("-in"),
+            QStringLiteral("server.csr"), QStringLiteral("-CA"), QStringLiteral("ca.crt"),
+            QStringLiteral("-CAkey"), QStringLiteral("ca.key"), QStringLiteral("-CAcreateserial"),
+            QStringLiteral("-out"), QStringLiteral("server.crt"), QStringLiteral("-days"),
+            QStringLiteral("1"), QStringLiteral("-extfile"), QStringLiteral("names.ext")});
 }
 
 QString runuserPath()
@@ -123,6 +187,22 @@ void PostgresCluster::start()
         for (const QString &p : {m_dir.path(), pwfile})
             REQUIRE(chown(QFile::encodeName(p).constData(), pg->pw_uid, pg->pw_gid) == 0);
     }
+    // TLS on a TCP port of 127.0.0.1 beside the Unix socket: every libpq client of this
+    // program (and the programs it starts) uses the port through PGPORT.
+    m_port = freePort();
+    qputenv("PGPORT", QByteArray::number(m_port));
+    const QString tls = m_dir.filePath(QStringLiteral("tls"));
+    REQUIRE(QDir().mkpath(tls));
+    makeCertificates(tls);
+    REQUIRE(QFile::setPermissions(QDir(tls).filePath(QStringLiteral("server.key")),
+        QFileDevice::ReadOwner | QFileDevice::WriteOwner));
+    if (geteuid() == 0) {
+        const passwd *pg = getpwnam("postgres");
+        for (const char *f : {"", "/server.key", "/server.crt"})
+            REQUIRE(
+                chown(QFile::encodeName(tls + QLatin1String(f)).constData(), pg->pw_uid, pg->pw_gid)
+                == 0);
+    }
     const QString data = m_dir.filePath(QStringLiteral("data"));
     // No fsync: a throwaway cluster needs no durability, and starts in about a second.
     runServerBinary(QStringLiteral("initdb"),
@@ -139,7 +219,11 @@ void PostgresCluster::startServer()
         {QStringLiteral("-D"), m_dir.filePath(QStringLiteral("data")), QStringLiteral("-l"),
             m_dir.filePath(QStringLiteral("log")), QStringLiteral("-w"), QStringLiteral("-t"),
             QStringLiteral("60"), QStringLiteral("-o"),
-            QStringLiteral("-F -k %1 -c listen_addresses=''").arg(m_dir.path()),
+            QStringLiteral("-F -k %1 -p %2 -c listen_addresses=127.0.0.1 -c ssl=on -c "
+                           "ssl_cert_file=%3/server.crt -c ssl_key_file=%3/server.key")
+                .arg(m_dir.path())
+                .arg(m_port)
+                .arg(m_dir.filePath(QStringLiteral("tls"))),
             QStringLiteral("start")});
     m_running = true;
 }

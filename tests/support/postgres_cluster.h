@@ -26,6 +26,11 @@ public:
 
     // The folder holding the server's socket (the libpq "host").
     QString socketDir() const { return m_dir.path(); }
+    // The server also listens on this TCP port of 127.0.0.1 with TLS (PGPORT is set to it for
+    // the Unix socket too), its certificate for localhost and 127.0.0.1 signed by the authority
+    // whose certificate is caCertificate().
+    int port() const { return m_port; }
+    QString caCertificate() const { return m_dir.filePath(QStringLiteral("tls/ca.crt")); }
     // A libpq connection string for `user` with `password` on database `database`.
     QString conninfo(const QString &database, const QString &user, const QString &password) const;
     QString superuserConninfo(const QString &database = QStringLiteral("postgres")) const;
@@ -61,6 +66,7 @@ private:
     QString m_password;
     bool m_running = false;
     int m_databases = 0;
+    int m_port = 0;
 };
 
 } // namespace fourfold::test

@@ -75,7 +75,7 @@ TEST_CASE("Publishing sends every shared row and writes one private password fil
         const QList<QByteArray> fields = f.readAll().trimmed().split(':');
         REQUIRE(fields.size() == 5);
         CHECK(fields[0] == QFile::encodeName(p.cluster.socketDir()));
-        CHECK(fields[1] == "5432");
+        CHECK(fields[1] == QByteArray::number(p.cluster.port())); // PGPORT, as libpq reads it
         CHECK(fields[2] == p.db.name.toUtf8());
         CHECK(fields[3] == l.role.toUtf8());
         CHECK(fields[4].size() == 24);
