@@ -2872,6 +2872,11 @@
             <numerusform>Der Ordner %1 wurde nicht importiert: %n seiner Dateien konnten nicht gelesen werden, daher wurde nichts hinzugefügt.</numerusform>
         </translation>
     </message>
+    <message>
+        <location filename="../core/project/project_import.cpp" line="178"/>
+        <source>passed over: a Fourfold project file</source>
+        <translation>übergangen: eine Fourfold-Projektdatei</translation>
+    </message>
 </context>
 <context>
     <name>ProjectTables</name>

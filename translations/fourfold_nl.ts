@@ -2872,6 +2872,11 @@
             <numerusform>De map %1 is niet geïmporteerd: %n van de bestanden konden niet worden gelezen, dus er is niets toegevoegd.</numerusform>
         </translation>
     </message>
+    <message>
+        <location filename="../core/project/project_import.cpp" line="178"/>
+        <source>passed over: a Fourfold project file</source>
+        <translation>overgeslagen: een Fourfold-projectbestand</translation>
+    </message>
 </context>
 <context>
     <name>ProjectTables</name>

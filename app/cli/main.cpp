@@ -2,6 +2,7 @@
 
 #include "app/cli/cli_output.h"
 #include "app/i18n/translations.h"
+#include "core/model/heap_tuning.h"
 
 #include <QCoreApplication>
 #ifdef FOURFOLD_HAVE_REPORT
@@ -112,6 +113,7 @@ void printUsage()
 
 int main(int argc, char *argv[])
 {
+    fourfold::keepFreedHeapMemory();
     // `report` paints (QTextDocument, QPdfWriter) and needs a QGuiApplication; without a display
     // it uses the offscreen platform. Every other command stays on QCoreApplication.
     std::unique_ptr<QCoreApplication> application;

@@ -3,6 +3,7 @@
 
 #include "app/desktop/main_window.h"
 #include "app/i18n/translations.h"
+#include "core/model/heap_tuning.h"
 
 #include <QApplication>
 #include <QCommandLineParser>
@@ -12,6 +13,7 @@
 
 int main(int argc, char *argv[])
 {
+    fourfold::keepFreedHeapMemory();
     QApplication app(argc, argv);
     QApplication::setApplicationName(QStringLiteral("Fourfold"));
     QApplication::setOrganizationName(QStringLiteral("Fourfold"));

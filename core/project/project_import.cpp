@@ -17,6 +17,7 @@
 #include <QDirIterator>
 #include <QFileInfo>
 #include <QHash>
+#include <QRegularExpression>
 
 #include <algorithm>
 
@@ -167,6 +168,17 @@ Result<ImportReport> Project::importFile(
             const QString full = folder.filePath(file);
             report.files.push_back(ImportedFile {full, {}, 0, {}});
             current = &report.files.back();
+            // A project kept in the folder it imports (this one or another) and SQLite's files
+            // beside it hold no articles; an empty write-ahead log would otherwise fail the
+            // whole folder as an empty file.
+            static const QRegularExpression projectFile(
+                QStringLiteral("\\.fourfold(-wal|-shm|-journal)?$"));
+            if (!options.format && projectFile.match(file).hasMatch()) {
+                current->passedOver = true;
+                current->reason = ProjectImportText::tr("passed over: a Fourfold project file");
+                readBefore += QFileInfo(full).size();
+                continue;
+            }
             const auto added = report.added.size();
             const Status read = forEachArticle(full, options, visit);
             readBefore += QFileInfo(full).size();

@@ -121,3 +121,29 @@ TEST_CASE("fourfold-cli import of a folder lists its files", "[io][folder][cli]"
     CHECK(run.out.contains(QStringLiteral("/wire/batch.jsonl: 2 added (w1, w2), 0 skipped")));
     CHECK(run.out.contains(QStringLiteral("/notes.md: passed over")));
 }
+
+TEST_CASE("A project kept in the folder it imports is passed over with its journal files",
+    "[io][folder][project]")
+{
+    // Found by the import benchmark: an empty write-ahead log beside the project (SQLite's
+    // -wal file, sqlite.org "Write-Ahead Logging") failed the whole folder as an empty file.
+    QTemporaryDir dir;
+    REQUIRE(dir.isValid());
+    const QString folder = makeFolder(dir);
+    auto project = Project::create(QDir(folder).filePath(QStringLiteral("p.fourfold")));
+    REQUIRE(project);
+    put(dir, QStringLiteral("in/p.fourfold-wal"), "");
+    put(dir, QStringLiteral("in/old/other.fourfold-journal"), "");
+    auto report = project->importFile(folder, ImportOptions {});
+    INFO((report ? QString() : report.error().toString()).toStdString());
+    REQUIRE(report);
+    CHECK(report->added.size() == 4);
+    QStringList passedOver;
+    for (const ImportedFile &f : report->files)
+        if (f.passedOver && f.reason == QStringLiteral("passed over: a Fourfold project file"))
+            passedOver << QDir(folder).relativeFilePath(f.path);
+    passedOver.sort();
+    CHECK(passedOver.contains(QStringLiteral("p.fourfold")));
+    CHECK(passedOver.contains(QStringLiteral("p.fourfold-wal")));
+    CHECK(passedOver.contains(QStringLiteral("old/other.fourfold-journal")));
+}
