@@ -595,6 +595,42 @@ Status StudyDesign::commitDraw(Project &project, Draw &draw)
     return {};
 }
 
+Result<std::unique_ptr<WithdrawDrawEdit>> StudyDesign::withdrawDrawEdit(
+    const Project &project, Phase phase, CoderId actor)
+{
+    auto recorded = recordedDraw(project, phase);
+    if (!recorded)
+        return std::unexpected(recorded.error());
+    if (!*recorded)
+        return fail(ErrorCode::NotFound,
+            StudyDesignText::tr("The %1 phase has no subsample to withdraw.").arg(phaseKey(phase)));
+    auto names = loadNames(project.db(), project);
+    if (!names)
+        return std::unexpected(names.error());
+    std::vector<AssignmentToWrite> rows;
+    for (const PlannedAssignment &row : (*recorded)->plan.rows) {
+        const auto article = names->articleIndex.constFind(row.article);
+        const auto coder = names->coderByPseudonym.constFind(row.coder);
+        if (article == names->articleIndex.constEnd()
+            || coder == names->coderByPseudonym.constEnd())
+            continue; // an article or person gone since holds no assignment to withdraw
+        rows.push_back({names->articles[size_t(*article)].id, coder->id, row.phase, {}});
+    }
+    auto edit = std::make_unique<WithdrawDrawEdit>(actor,
+        StudyDesignText::tr("Withdraw the %1 subsample").arg(phaseKey(phase)), phaseKey(phase),
+        std::move(rows), drawJson(**recorded), drawSettingKey(phase));
+    return edit;
+}
+
+Result<qsizetype> StudyDesign::withdrawDraw(Project &project, Phase phase)
+{
+    auto edit = withdrawDrawEdit(project, phase, CoderId {});
+    if (!edit)
+        return std::unexpected(edit.error());
+    FOURFOLD_TRY_STATUS(project.apply(**edit));
+    return (*edit)->withdrawnAssignments();
+}
+
 Result<std::optional<Draw>> StudyDesign::recordedDraw(const Project &project, Phase phase)
 {
     auto text = store::setting(project.db(), drawSettingKey(phase));

@@ -263,6 +263,15 @@ public:
         const Project &project, Draw &draw, CoderId actor);
     // Applies drawEdit(project, draw, no actor); nothing is written on failure.
     static Status commitDraw(Project &project, Draw &draw);
+    // Withdraws the recorded draw of `phase` (see WithdrawDrawEdit, which apply() checks again):
+    // its assignments become tombstones, its record goes, and the phase can be drawn anew.
+    // NotFound when the phase has no draw, NotAllowed (naming how many) when coding started on
+    // any of its assignments, Corrupt when its record cannot be read.
+    static Result<std::unique_ptr<WithdrawDrawEdit>> withdrawDrawEdit(
+        const Project &project, Phase phase, CoderId actor);
+    // Applies withdrawDrawEdit(project, phase, no actor); returns how many assignments were
+    // withdrawn. Nothing is written on failure.
+    static Result<qsizetype> withdrawDraw(Project &project, Phase phase);
     // The recorded draw of `phase`, if any. Fails with Corrupt if the record cannot be read.
     static Result<std::optional<Draw>> recordedDraw(const Project &project, Phase phase);
     // The draw as JSON (keys: phase, method, stratify, seed (string, to keep all 64 bits), coders,

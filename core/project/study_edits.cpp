@@ -5,6 +5,7 @@
 
 #include <QCoreApplication>
 
+#include <algorithm>
 #include <ranges>
 
 namespace fourfold {
@@ -17,6 +18,11 @@ struct StudyEditText {
 };
 
 } // namespace
+
+struct AssignEdit::Before {
+    // Per row of m_rows: the tombstone it brought back to life, if it did.
+    std::vector<std::optional<store::AssignmentRecord>> tombstones;
+};
 
 AssignEdit::AssignEdit(CoderId actor, QString text, std::vector<AssignmentToWrite> rows,
     QJsonObject record, QString settingKey, QString settingValue)
@@ -38,7 +44,14 @@ Status AssignEdit::apply(Database &db)
             return fail(ErrorCode::Duplicate,
                 StudyEditText::tr("The project already holds %1.").arg(m_settingKey));
     }
+    auto before = std::make_shared<Before>();
     for (const AssignmentToWrite &row : m_rows) {
+        auto existing = store::assignmentRecord(db, row.article, row.coder, row.phase);
+        if (!existing)
+            return std::unexpected(existing.error());
+        before->tombstones.push_back(*existing && (*existing)->deleted
+                ? *existing
+                : std::optional<store::AssignmentRecord> {});
         FOURFOLD_TRY_STATUS(
             store::insertAssignment(db, row.article, row.coder, row.phase, row.uuid));
         FOURFOLD_TRY_STATUS(store::appendEvent(db, actor(), QStringLiteral("assignment.add"),
@@ -49,6 +62,7 @@ Status AssignEdit::apply(Database &db)
     }
     if (!m_settingKey.isEmpty())
         FOURFOLD_TRY_STATUS(store::setSetting(db, m_settingKey, m_settingValue));
+    m_before = std::move(before);
     return {};
 }
 
@@ -56,8 +70,103 @@ Status AssignEdit::revert(Database &db)
 {
     if (!m_settingKey.isEmpty())
         FOURFOLD_TRY_STATUS(store::removeSetting(db, m_settingKey));
-    for (const AssignmentToWrite &row : std::views::reverse(m_rows))
-        FOURFOLD_TRY_STATUS(store::removeAssignment(db, row.article, row.coder, row.phase));
+    for (std::size_t i = m_rows.size(); i-- > 0;) {
+        const AssignmentToWrite &row = m_rows[i];
+        if (m_before && i < m_before->tombstones.size() && m_before->tombstones[i])
+            FOURFOLD_TRY_STATUS(store::writeAssignmentRecord(
+                db, row.article, row.coder, row.phase, *m_before->tombstones[i]));
+        else
+            FOURFOLD_TRY_STATUS(store::removeAssignment(db, row.article, row.coder, row.phase));
+    }
+    return {};
+}
+
+struct WithdrawDrawEdit::Before {
+    // Per row of m_rows: the live row made a tombstone (none where there was no live row).
+    std::vector<std::optional<store::AssignmentRecord>> rows;
+    QString setting;
+};
+
+WithdrawDrawEdit::WithdrawDrawEdit(CoderId actor, QString text, QString phase,
+    std::vector<AssignmentToWrite> rows, QJsonObject record, QString settingKey)
+    : Edit(actor)
+    , m_text(std::move(text))
+    , m_phase(std::move(phase))
+    , m_rows(std::move(rows))
+    , m_record(std::move(record))
+    , m_settingKey(std::move(settingKey))
+{ }
+
+qsizetype WithdrawDrawEdit::withdrawnAssignments() const
+{
+    if (!m_before)
+        return 0;
+    return std::ranges::count_if(m_before->rows, [](const auto &row) { return row.has_value(); });
+}
+
+Status WithdrawDrawEdit::apply(Database &db)
+{
+    auto setting = store::setting(db, m_settingKey);
+    if (!setting)
+        return std::unexpected(setting.error());
+    if (!*setting)
+        return fail(ErrorCode::NotFound,
+            StudyEditText::tr("The %1 phase has no subsample to withdraw.").arg(m_phase));
+    auto before = std::make_shared<Before>();
+    before->setting = **setting;
+    int withWork = 0;
+    int live = 0;
+    for (const AssignmentToWrite &row : m_rows) {
+        auto record = store::assignmentRecord(db, row.article, row.coder, row.phase);
+        if (!record)
+            return std::unexpected(record.error());
+        if (!*record || (*record)->deleted) {
+            before->rows.emplace_back(); // gone already: nothing to withdraw
+            continue;
+        }
+        ++live;
+        if ((*record)->hasWork())
+            ++withWork;
+        before->rows.push_back(*record);
+    }
+    if (withWork > 0)
+        return fail(ErrorCode::NotAllowed,
+            StudyEditText::tr("The %1 subsample cannot be withdrawn: coding has started on %n of "
+                              "its %2 assignment(s) (spans, answers, coding time, or a status of "
+                              "started or done). A draw can be withdrawn only before anyone "
+                              "codes it.",
+                nullptr, withWork)
+                .arg(m_phase)
+                .arg(live));
+    for (std::size_t i = 0; i < m_rows.size(); ++i) {
+        if (!before->rows[i])
+            continue;
+        const AssignmentToWrite &row = m_rows[i];
+        store::AssignmentRecord tombstone = *before->rows[i];
+        tombstone.deleted = true;
+        FOURFOLD_TRY_STATUS(
+            store::writeAssignmentRecord(db, row.article, row.coder, row.phase, tombstone));
+        FOURFOLD_TRY_STATUS(store::appendEvent(db, actor(), QStringLiteral("assignment.remove"),
+            QStringLiteral("assignment"), tombstone.uuid,
+            QJsonObject {{QStringLiteral("article"), row.article.value},
+                {QStringLiteral("coder"), row.coder.value},
+                {QStringLiteral("phase"), phaseKey(row.phase)}}));
+    }
+    FOURFOLD_TRY_STATUS(store::removeSetting(db, m_settingKey));
+    m_before = std::move(before);
+    return {};
+}
+
+Status WithdrawDrawEdit::revert(Database &db)
+{
+    if (!m_before)
+        return fail(ErrorCode::Internal,
+            StudyEditText::tr("An edit that was never applied cannot be undone."));
+    FOURFOLD_TRY_STATUS(store::setSetting(db, m_settingKey, m_before->setting));
+    for (std::size_t i = 0; i < m_rows.size() && i < m_before->rows.size(); ++i)
+        if (m_before->rows[i])
+            FOURFOLD_TRY_STATUS(store::writeAssignmentRecord(
+                db, m_rows[i].article, m_rows[i].coder, m_rows[i].phase, *m_before->rows[i]));
     return {};
 }
 

@@ -9,6 +9,7 @@
 #include <QJsonObject>
 #include <QString>
 
+#include <memory>
 #include <optional>
 #include <vector>
 
@@ -26,7 +27,8 @@ struct AssignmentToWrite {
 // `record` (a draw's record, or what planned the rows). With `settingKey`, also sets that
 // project setting to `settingValue` (a draw's record, study.draw.<phase>); apply() fails with
 // Duplicate when the setting is there already (a draw recorded meanwhile). Revert removes the
-// rows and the setting again.
+// rows and the setting again (a row that was a tombstone before, of a withdrawn draw, becomes that
+// tombstone again).
 class AssignEdit : public Edit
 {
 public:
@@ -49,6 +51,41 @@ private:
     QJsonObject m_record;
     QString m_settingKey;
     QString m_settingValue;
+    struct Before; // the tombstones the rows replaced, taken by apply()
+    std::shared_ptr<Before> m_before;
+};
+
+// Withdraws a committed draw before anyone codes it: each of its live assignments `rows`
+// becomes a tombstone (one "assignment.remove" event each) and its record, the setting
+// `settingKey`, goes; logged as "draw.withdraw" with the record. apply() fails with NotAllowed
+// when coding started on any of them (a span, an answer, coding time, or the status started or
+// done), naming how many; NotFound when the draw is not recorded any more. Revert brings the
+// rows and the record back as they were.
+class WithdrawDrawEdit : public Edit
+{
+public:
+    WithdrawDrawEdit(CoderId actor, QString text, QString phase,
+        std::vector<AssignmentToWrite> rows, QJsonObject record, QString settingKey);
+
+    QString text() const override { return m_text; }
+    QString action() const override { return QStringLiteral("draw.withdraw"); }
+    QString objectType() const override { return QStringLiteral("assignment"); }
+    QString objectUuid() const override { return {}; }
+    QJsonObject detail() const override { return m_record; }
+    Status apply(Database &db) override;
+    Status revert(Database &db) override;
+
+    // The assignments made tombstones by the last apply().
+    qsizetype withdrawnAssignments() const;
+
+private:
+    QString m_text;
+    QString m_phase;
+    std::vector<AssignmentToWrite> m_rows;
+    QJsonObject m_record;
+    QString m_settingKey;
+    struct Before; // the rows and the record as apply() found them
+    std::shared_ptr<Before> m_before;
 };
 
 // Sets the project setting `key` to `value`, logged as `action` with {"value": value}; revert

@@ -46,8 +46,12 @@ Status removeSetting(Database &db, const QString &key)
 Status insertAssignment(
     Database &db, ArticleId article, CoderId coder, Phase phase, const QString &uuid)
 {
-    auto stmt = db.prepare(QStringLiteral("INSERT INTO assignment (uuid, article_id, coder_id, "
-                                          "phase, created_at) VALUES (?1, ?2, ?3, ?4, ?5)"));
+    // A live row stays as it is (the WHERE), which shows as no change.
+    auto stmt = db.prepare(QStringLiteral(
+        "INSERT INTO assignment (uuid, article_id, coder_id, phase, created_at) VALUES (?1, ?2, "
+        "?3, ?4, ?5) ON CONFLICT (article_id, coder_id, phase) DO UPDATE SET uuid = excluded.uuid, "
+        "status = 'assigned', created_at = excluded.created_at, deleted = 0, active_seconds = 0 "
+        "WHERE assignment.deleted = 1"));
     if (!stmt)
         return std::unexpected(stmt.error());
     stmt->bind(1, uuid.isEmpty() ? newUuid() : uuid)
@@ -55,14 +59,64 @@ Status insertAssignment(
         .bind(3, coder.value)
         .bind(4, phaseKey(phase))
         .bind(5, now());
+    const QString duplicate = QCoreApplication::translate("ProjectTables",
+        "The article is already assigned to this coder in this phase, or one of them does "
+        "not exist.");
     if (auto st = stmt->run(); !st) {
         Error e = st.error();
         if (e.code == ErrorCode::Constraint)
-            e.message = QCoreApplication::translate("ProjectTables",
-                "The article is already assigned to this coder in this phase, or one of them does "
-                "not exist.");
+            e.message = duplicate;
         return std::unexpected(e);
     }
+    if (db.changes() == 0)
+        return fail(ErrorCode::Constraint, duplicate);
+    return {};
+}
+
+Result<std::optional<AssignmentRecord>> assignmentRecord(
+    const Database &db, ArticleId article, CoderId coder, Phase phase)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT s.uuid, s.status, s.created_at, s.deleted, s.active_seconds, "
+        "(SELECT count(*) FROM annotation a WHERE a.article_id = s.article_id AND a.coder_id = "
+        "s.coder_id AND a.phase = s.phase AND a.deleted = 0), "
+        "(SELECT count(*) FROM judgement j WHERE j.article_id = s.article_id AND j.coder_id = "
+        "s.coder_id AND j.phase = s.phase AND j.deleted = 0) "
+        "FROM assignment s WHERE s.article_id = ?1 AND s.coder_id = ?2 AND s.phase = ?3"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, article.value).bind(2, coder.value).bind(3, phaseKey(phase));
+    auto rows = collectRows(*stmt, [](const Statement &row) {
+        return AssignmentRecord {row.columnText(0), row.columnText(1), row.columnText(2),
+            row.columnInt(3) != 0, row.columnInt(4), row.columnInt(5), row.columnInt(6)};
+    });
+    if (!rows)
+        return std::unexpected(rows.error());
+    if (rows->empty())
+        return std::optional<AssignmentRecord> {};
+    return std::optional<AssignmentRecord> {rows->front()};
+}
+
+Status writeAssignmentRecord(
+    Database &db, ArticleId article, CoderId coder, Phase phase, const AssignmentRecord &record)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "UPDATE assignment SET uuid = ?4, status = ?5, created_at = ?6, deleted = ?7, "
+        "active_seconds = ?8 WHERE article_id = ?1 AND coder_id = ?2 AND phase = ?3"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, article.value)
+        .bind(2, coder.value)
+        .bind(3, phaseKey(phase))
+        .bind(4, record.uuid)
+        .bind(5, record.status)
+        .bind(6, record.createdAt)
+        .bind(7, qint64(record.deleted))
+        .bind(8, record.activeSeconds);
+    FOURFOLD_TRY_STATUS(stmt->run());
+    if (db.changes() == 0)
+        return fail(ErrorCode::NotFound,
+            QCoreApplication::translate("ProjectTables", "The assignment is not in the project."));
     return {};
 }
 

@@ -22,8 +22,9 @@ Status setSetting(Database &db, const QString &key, const QString &value);
 // Removes the setting `key` (nothing if there is none): the undo of setting it first.
 Status removeSetting(Database &db, const QString &key);
 
-// Assigns `article` to `coder` in `phase` with `uuid` (made here when empty). Duplicate if it
-// already is.
+// Assigns `article` to `coder` in `phase` with `uuid` (made here when empty). A tombstone of the
+// same assignment (a withdrawn draw's) comes alive again as a new one: `uuid`, not started, no
+// time. Constraint if the assignment is live already or the article or coder does not exist.
 Status insertAssignment(
     Database &db, ArticleId article, CoderId coder, Phase phase, const QString &uuid = {});
 
@@ -50,6 +51,30 @@ Status addAssignmentSeconds(
     Database &db, ArticleId article, CoderId coder, Phase phase, qint64 seconds);
 // Removes an assignment row for good (only to revert the edit that created it).
 Status removeAssignment(Database &db, ArticleId article, CoderId coder, Phase phase);
+
+// One assignment row as stored, tombstone or not, with the work on it: the coder's live spans
+// and answers on the article in the assignment's phase.
+struct AssignmentRecord {
+    QString uuid;
+    QString status;
+    QString createdAt;
+    bool deleted = false;
+    qint64 activeSeconds = 0;
+    qint64 spans = 0;
+    qint64 answers = 0;
+    // Whether anyone started coding it: spans, answers, coding time, or started / done.
+    bool hasWork() const
+    {
+        return spans > 0 || answers > 0 || activeSeconds > 0 || status != QLatin1String("assigned");
+    }
+};
+// The row of (article, coder, phase), if there is one (one indexed query).
+Result<std::optional<AssignmentRecord>> assignmentRecord(
+    const Database &db, ArticleId article, CoderId coder, Phase phase);
+// Writes the stored columns of `record` (uuid, status, created_at, deleted, active_seconds) back
+// to the row of (article, coder, phase): a withdrawal and its undo. NotFound without a row.
+Status writeAssignmentRecord(
+    Database &db, ArticleId article, CoderId coder, Phase phase, const AssignmentRecord &record);
 
 // The figures of `fourfold-cli info`: live rows only; every live coder appears in perCoder,
 // also those with no annotations.

@@ -1,9 +1,11 @@
 // The study design's writes as edits (core/project/study_edits): a draw, a plan and the effort
 // setting each undo to the same database dump and redo to the same rows (times blanked: the
 // assignments' created_at is the redo's), through Project::apply as the CLI and the desk do.
+#include "core/project/annotation_edits.h"
 #include "core/project/study_design.h"
 #include "core/project/study_edits.h"
 #include "core/project/testing/project_database.h"
+#include "core/store/project_tables.h"
 #include "tests/project/study_fixture.h"
 #include "tests/support/db_dump.h"
 
@@ -144,4 +146,112 @@ TEST_CASE("the effort setting is one edit: undo restores the value before or its
     REQUIRE(f.project.revert(*on));
     CHECK(f.dump() == before);
     CHECK(f.log().count(QStringLiteral("setting.effort_per_coder")) == 4); // 2 applied, 2 undone
+}
+
+namespace {
+
+// The draw of five articles for C01 and C02 (seed 11), committed by the lead.
+Draw commitFiveByTwo(StudyEditFixture &f)
+{
+    DrawRequest request;
+    request.size = 5;
+    request.seed = 11;
+    request.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+    auto draw = StudyDesign::planDraw(f.project, request);
+    REQUIRE(draw);
+    auto edit = StudyDesign::drawEdit(f.project, *draw, f.lead);
+    REQUIRE(edit);
+    REQUIRE(f.project.apply(**edit));
+    return *draw;
+}
+
+} // namespace
+
+TEST_CASE("a draw nobody coded is withdrawn: its assignments are tombstones and the log says so")
+{
+    StudyEditFixture f;
+    const QString beforeDraw = f.dump();
+    const Draw draw = commitFiveByTwo(f);
+    const QString drawn = f.dump();
+
+    auto edit = StudyDesign::withdrawDrawEdit(f.project, Phase::Reliability, f.lead);
+    REQUIRE(edit);
+    CHECK((*edit)->text() == QStringLiteral("Withdraw the reliability subsample"));
+    REQUIRE(f.project.apply(**edit));
+    CHECK((*edit)->withdrawnAssignments() == 10);
+    auto rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+    REQUIRE(rows);
+    CHECK(rows->empty());
+    auto recorded = StudyDesign::recordedDraw(f.project, Phase::Reliability);
+    REQUIRE(recorded);
+    CHECK_FALSE(recorded->has_value());
+    // The rows stay as tombstones (10 of them), unlike before the draw.
+    CHECK(f.dump() != beforeDraw);
+    {
+        auto article = f.project.articleByExternalId(draw.articles.front());
+        auto c01 = f.project.coderByPseudonym(QStringLiteral("C01"));
+        REQUIRE((article && *article && c01 && *c01));
+        auto row = store::assignmentRecord(
+            databaseForTesting(f.project), **article, (*c01)->id, Phase::Reliability);
+        REQUIRE(row);
+        REQUIRE(row->has_value());
+        CHECK((*row)->deleted);
+    }
+    const QString log = f.log();
+    CHECK(log.count(QStringLiteral("assignment.remove")) == 10);
+    CHECK(log.count(QStringLiteral("draw.withdraw")) == 1);
+    const QString withdrawn = f.dump();
+
+    // Undo brings the draw back exactly; redo withdraws it again.
+    REQUIRE(f.project.revert(**edit));
+    CHECK(f.dump() == drawn);
+    REQUIRE(f.project.apply(**edit));
+    CHECK(withoutTimes(f.dump()) == withoutTimes(withdrawn));
+
+    // The same draw again (same seed, same articles) brings the tombstones back to life, and
+    // its undo leaves them tombstones.
+    Draw again = draw;
+    again.drawnAt.clear();
+    auto redraw = StudyDesign::drawEdit(f.project, again, f.lead);
+    REQUIRE(redraw);
+    REQUIRE(f.project.apply(**redraw));
+    rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+    REQUIRE(rows);
+    CHECK(rows->size() == 10);
+    REQUIRE(f.project.revert(**redraw));
+    CHECK(f.dump() == withdrawn);
+}
+
+TEST_CASE("a draw with one span on it is not withdrawn, and the refusal says how many have work")
+{
+    StudyEditFixture f;
+    const Draw draw = commitFiveByTwo(f);
+    auto article = f.project.articleByExternalId(draw.articles.front());
+    REQUIRE(article);
+    REQUIRE(article->has_value());
+    auto c02 = f.project.coderByPseudonym(QStringLiteral("C02"));
+    REQUIRE(c02);
+    AddAnnotationEdit span(**article, (*c02)->id,
+        AnnotationContent {FramingFunction::Problem, {0, 3}, {}, {}, {}}, Phase::Reliability);
+    REQUIRE(f.project.apply(span));
+    const QString before = f.dump();
+
+    auto refused = StudyDesign::withdrawDraw(f.project, Phase::Reliability);
+    REQUIRE_FALSE(refused);
+    CHECK(refused.error().code == ErrorCode::NotAllowed);
+    CHECK(refused.error().message.contains(QStringLiteral("coding has started on 1 of its 10")));
+    CHECK(f.dump() == before);
+
+    // Coding time on another assignment counts as work too.
+    auto c01 = f.project.coderByPseudonym(QStringLiteral("C01"));
+    REQUIRE(c01);
+    REQUIRE(f.project.addCodingTime(**article, (*c01)->id, 30));
+    refused = StudyDesign::withdrawDraw(f.project, Phase::Reliability);
+    REQUIRE_FALSE(refused);
+    CHECK(refused.error().message.contains(QStringLiteral("on 2 of its 10")));
+
+    // A phase without a draw has nothing to withdraw.
+    auto none = StudyDesign::withdrawDraw(f.project, Phase::Pilot);
+    REQUIRE_FALSE(none);
+    CHECK(none.error().code == ErrorCode::NotFound);
 }
