@@ -246,6 +246,10 @@ int runAssign(const QStringList &arguments)
         CliText::tr(
             "Draw the subsample of this phase (reliability or pilot) that every --coders codes."),
         QStringLiteral("PHASE"));
+    const QCommandLineOption withdrawDraw(QStringLiteral("withdraw-draw"),
+        CliText::tr("Withdraw the committed subsample of this phase (reliability or pilot) while "
+                    "nobody has coded any of its assignments yet."),
+        QStringLiteral("PHASE"));
     const QCommandLineOption size(QStringLiteral("size"),
         CliText::tr("With --draw: the number of articles."), QStringLiteral("N"));
     const QCommandLineOption fraction(QStringLiteral("fraction"),
@@ -308,15 +312,16 @@ int runAssign(const QStringList &arguments)
         CliText::tr("Show active time per coder (on) or only in aggregate (off, the default)."),
         QStringLiteral("on|off"));
     const QCommandLineOption json(QStringLiteral("json"), CliText::tr("Print the result as JSON."));
-    parser.addOptions(
-        {draw, size, fraction, stratify, leaveOutNearCopies, seed, alphaMin, rarest, rest, phase,
-            articles, coders, dryRun, show, progress, training, master, unit, effort, json});
+    parser.addOptions({draw, withdrawDraw, size, fraction, stratify, leaveOutNearCopies, seed,
+        alphaMin, rarest, rest, phase, articles, coders, dryRun, show, progress, training, master,
+        unit, effort, json});
     parser.addPositionalArgument(QStringLiteral("PROJECT"), CliText::tr("The project file."));
     if (int rc = parseCommandLine(parser, kCommand,
             CliText::tr(
                 "Assign articles to coders per phase (training, pilot, reliability, production), "
                 "draw the reliability subsample with a recorded seed, and follow progress. Give "
-                "one of --draw, --rest, --articles, --show, --progress, --training, --effort."),
+                "one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, "
+                "--training, --effort."),
             arguments);
         rc >= 0)
         return rc;
@@ -325,13 +330,12 @@ int runAssign(const QStringList &arguments)
 
     int actions = 0;
     for (const QCommandLineOption *o :
-        {&draw, &rest, &articles, &show, &progress, &training, &effort})
+        {&draw, &withdrawDraw, &rest, &articles, &show, &progress, &training, &effort})
         actions += parser.isSet(*o) ? 1 : 0;
     if (actions != 1)
         return usageError(kCommand,
-            CliText::tr(
-                "give exactly one of --draw, --rest, --articles, --show, --progress, --training, "
-                "--effort."));
+            CliText::tr("give exactly one of --draw, --withdraw-draw, --rest, --articles, --show, "
+                        "--progress, --training, --effort."));
 
     std::optional<Phase> phaseFilter;
     if (parser.isSet(phase)) {
@@ -440,9 +444,32 @@ int runAssign(const QStringList &arguments)
     if ((parser.isSet(draw) || parser.isSet(rest)) && coderList.isEmpty())
         return usageError(kCommand, CliText::tr("name the coders with --coders."));
 
+    std::optional<Phase> withdrawnPhase;
+    if (parser.isSet(withdrawDraw)) {
+        withdrawnPhase = phaseFromKey(parser.value(withdrawDraw));
+        if (!withdrawnPhase)
+            return usageError(
+                kCommand, CliText::tr("unknown phase \"%1\".").arg(parser.value(withdrawDraw)));
+    }
+
     auto project = Project::open(parser.positionalArguments().first());
     if (!project)
         return report(project.error());
+
+    if (withdrawnPhase) {
+        auto withdrawn = StudyDesign::withdrawDraw(*project, *withdrawnPhase);
+        if (!withdrawn)
+            return report(withdrawn.error());
+        const int count = int(*withdrawn);
+        if (asJson)
+            printJson(QJsonObject {{QStringLiteral("phase"), phaseKey(*withdrawnPhase)},
+                {QStringLiteral("withdrawn_assignments"), count}});
+        else
+            out(CliText::tr(
+                "The %1 subsample is withdrawn: %n assignment(s) removed.", nullptr, count)
+                    .arg(phaseKey(*withdrawnPhase)));
+        return ExitOk;
+    }
 
     if (parser.isSet(show))
         return runShow(*project, phaseFilter, asJson);

@@ -131,12 +131,13 @@ Status WithdrawDrawEdit::apply(Database &db)
     }
     if (withWork > 0)
         return fail(ErrorCode::NotAllowed,
-            StudyEditText::tr("The %1 subsample cannot be withdrawn: coding has started on %n of "
-                              "its %2 assignment(s) (spans, answers, coding time, or a status of "
-                              "started or done). A draw can be withdrawn only before anyone "
-                              "codes it.",
-                nullptr, withWork)
+            StudyEditText::tr(
+                "The %1 subsample cannot be withdrawn: coding has started on %2 of its "
+                "%3 assignments (spans, answers, coding time, or a status of "
+                "started or done). A draw can be withdrawn only before anyone "
+                "codes it.")
                 .arg(m_phase)
+                .arg(withWork)
                 .arg(live));
     for (std::size_t i = 0; i < m_rows.size(); ++i) {
         if (!before->rows[i])

@@ -2,8 +2,10 @@
 // and the same draw as the core for the same seed.
 #include "core/project/article_status_edit.h"
 #include "core/project/study_design.h"
+#include "core/project/testing/project_database.h"
 #include "tests/project/study_fixture.h"
 #include "tests/support/cli_run.h"
+#include "tests/support/db_dump.h"
 
 #include <QJsonArray>
 #include <QJsonDocument>
@@ -201,4 +203,69 @@ TEST_CASE("codebook --update and --diff")
         cli({QStringLiteral("codebook"), f.path, QStringLiteral("--diff"), QStringLiteral("1,7")});
     CHECK(run.exitCode == 1);
     CHECK(run.err.contains(QStringLiteral("no codebook version 7")));
+}
+
+TEST_CASE("assign --withdraw-draw: withdrawn before coding, refused after, with exit codes")
+{
+    CliFixture f;
+    CliRun run = cli({QStringLiteral("assign"), f.path, QStringLiteral("--draw"),
+        QStringLiteral("reliability"), QStringLiteral("--size"), QStringLiteral("3"),
+        QStringLiteral("--seed"), QStringLiteral("5"), QStringLiteral("--coders"),
+        QStringLiteral("C01,C02"), QStringLiteral("--json")});
+    REQUIRE(run.exitCode == 0);
+    const QStringList drawn = strings(cliJson(run).value(QStringLiteral("articles")));
+    REQUIRE(drawn.size() == 3);
+    const QStringList withdraw {QStringLiteral("assign"), f.path, QStringLiteral("--withdraw-draw"),
+        QStringLiteral("reliability")};
+
+    SECTION("before anyone codes: the assignments go and the log says so")
+    {
+        run = cli(withdraw + QStringList {QStringLiteral("--json")});
+        REQUIRE(run.exitCode == 0);
+        const QJsonObject o = cliJson(run);
+        CHECK(o.value(QStringLiteral("phase")).toString() == QStringLiteral("reliability"));
+        CHECK(o.value(QStringLiteral("withdrawn_assignments")).toInt() == 6); // 3 articles × 2
+        auto rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+        REQUIRE(rows);
+        CHECK(rows->empty());
+        // The event log (the dump with it) holds the withdrawal and one removal per assignment.
+        const QString log = dumpDatabase(databaseForTesting(f.project), {});
+        CHECK(log.count(QStringLiteral("draw.withdraw")) == 1);
+        CHECK(log.count(QStringLiteral("assignment.remove")) == 6);
+        // Nothing left to withdraw: exit 1 with one line.
+        run = cli(withdraw);
+        CHECK(run.exitCode == 1);
+        CHECK(run.err.startsWith(
+            QStringLiteral("fourfold-cli: The reliability phase has no subsample to withdraw.")));
+        CHECK(run.err.count(QLatin1Char('\n')) == 1);
+        // The phase can be drawn again.
+        run = cli({QStringLiteral("assign"), f.path, QStringLiteral("--draw"),
+            QStringLiteral("reliability"), QStringLiteral("--size"), QStringLiteral("3"),
+            QStringLiteral("--seed"), QStringLiteral("5"), QStringLiteral("--coders"),
+            QStringLiteral("C01,C02")});
+        CHECK(run.exitCode == 0);
+    }
+    SECTION("after one article is marked done: refused, naming how many have work")
+    {
+        auto article = f.project.articleByExternalId(drawn.front());
+        auto c01 = f.project.coderByPseudonym(QStringLiteral("C01"));
+        REQUIRE((article && *article && c01 && *c01));
+        SetArticleStatusEdit done(**article, (*c01)->id, QStringLiteral("done"));
+        REQUIRE(f.project.apply(done));
+        run = cli(withdraw);
+        CHECK(run.exitCode == 1);
+        CHECK(run.err.startsWith(QStringLiteral(
+            "fourfold-cli: The reliability subsample cannot be withdrawn: coding has started on "
+            "1 of its 6 assignments")));
+        auto rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+        REQUIRE(rows);
+        CHECK(rows->size() == 6);
+    }
+    SECTION("an unknown phase is a usage error")
+    {
+        run = cli({QStringLiteral("assign"), f.path, QStringLiteral("--withdraw-draw"),
+            QStringLiteral("main")});
+        CHECK(run.exitCode == 2);
+        CHECK(run.err.startsWith(QStringLiteral("fourfold-cli assign: unknown phase")));
+    }
 }
