@@ -331,8 +331,15 @@ QWidget *StudyDesignWindow::buildDrawPage()
     m_commitDraw->setToolTip(tr("Assign the drawn articles to every chosen coder and record the "
                                 "draw with its seed."));
     m_commitDraw->setEnabled(false);
+    m_withdrawDraw = new QPushButton(tr("Withdraw the draw"), form);
+    m_withdrawDraw->setObjectName(QStringLiteral("draw-withdraw"));
+    m_withdrawDraw->setToolTip(
+        tr("Remove the committed draw and its assignments, so that the phase can be drawn again; "
+           "only while nobody has coded any of its articles."));
+    m_withdrawDraw->setEnabled(false);
     buttons->addWidget(m_drawButton);
     buttons->addWidget(m_commitDraw);
+    buttons->addWidget(m_withdrawDraw);
     formLayout->addRow(buttons);
     m_drawError = errorLabel(form, QStringLiteral("draw-error"));
     formLayout->addRow(m_drawError);
@@ -368,6 +375,7 @@ QWidget *StudyDesignWindow::buildDrawPage()
 
     connect(m_drawButton, &QPushButton::clicked, this, &StudyDesignWindow::planDraw);
     connect(m_commitDraw, &QPushButton::clicked, this, &StudyDesignWindow::commitDraw);
+    connect(m_withdrawDraw, &QPushButton::clicked, this, &StudyDesignWindow::withdrawDraw);
     // Whatever changes the request invalidates the plan on show: what is committed is always
     // exactly what the lead sees.
     auto invalidate = [this] {
@@ -407,9 +415,11 @@ void StudyDesignWindow::loadRecordedDraw()
     m_commitDraw->setEnabled(false);
     auto recorded = StudyDesign::recordedDraw(m_project, drawPhase());
     if (!recorded) {
+        m_withdrawDraw->setEnabled(false);
         showError(m_drawError, recorded.error().message);
         return;
     }
+    m_withdrawDraw->setEnabled(recorded->has_value());
     if (*recorded) {
         showDraw(**recorded, true);
         m_drawButton->setEnabled(false);
@@ -470,6 +480,30 @@ void StudyDesignWindow::commitDraw()
     emit assignmentsChanged();
 }
 
+void StudyDesignWindow::withdrawDraw()
+{
+    showError(m_drawError, {});
+    const Phase phase = drawPhase();
+    auto edit = StudyDesign::withdrawDrawEdit(m_project, phase, m_current);
+    if (!edit) {
+        showError(m_drawError, edit.error().message);
+        return;
+    }
+    // Refused with the reason (how many assignments have work) when coding has started.
+    if (Status st = m_project.apply(**edit); !st) {
+        showError(m_drawError, st.error().message);
+        return;
+    }
+    const int withdrawn = int((*edit)->withdrawnAssignments());
+    refresh();
+    m_drawState->setText(tr("<b>The %1 sample was withdrawn</b>: %n assignment(s) removed, the "
+                            "withdrawal recorded in the project's log. The phase can be drawn "
+                            "again.",
+        nullptr, withdrawn)
+                             .arg(studyPhaseName(phase)));
+    emit assignmentsChanged();
+}
+
 void StudyDesignWindow::showDraw(const Draw &draw, bool recorded)
 {
     QMap<QString, ArticleSummary> byId;
@@ -492,8 +526,8 @@ void StudyDesignWindow::showDraw(const Draw &draw, bool recorded)
                               .arg(draw.coders.join(QStringLiteral(", ")));
     if (recorded)
         m_drawState->setText(
-            tr("<b>%1 sample drawn on %2.</b> %3 The draw is recorded and "
-               "cannot be drawn again.")
+            tr("<b>%1 sample drawn on %2.</b> %3 The draw is recorded; it can be withdrawn "
+               "until someone codes one of its articles, and then drawn again.")
                 .arg(studyPhaseName(draw.phase),
                     draw.drawnAt.left(16).replace(QLatin1Char('T'), QLatin1Char(' ')),
                     facts.toHtmlEscaped()));

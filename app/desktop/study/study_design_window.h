@@ -64,6 +64,8 @@ private:
 
     void planDraw();
     void commitDraw();
+    // Withdraws the recorded draw of the phase shown (refused once coding started on it).
+    void withdrawDraw();
     void clearDrawPlan();
     void showDraw(const Draw &draw, bool recorded);
     void loadRecordedDraw();
@@ -101,6 +103,7 @@ private:
     QDoubleSpinBox *m_rarest = nullptr;
     QPushButton *m_drawButton = nullptr;
     QPushButton *m_commitDraw = nullptr;
+    QPushButton *m_withdrawDraw = nullptr;
     QLabel *m_drawState = nullptr;
     QLabel *m_drawError = nullptr;
     QLabel *m_advice = nullptr;

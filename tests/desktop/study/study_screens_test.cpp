@@ -214,6 +214,46 @@ TEST_CASE("Changing the request after a draw withdraws the plan", "[studygui][dr
     CHECK(child<QLabel>(w, "draw-error")->text().contains(QStringLiteral("\"12a\"")));
 }
 
+TEST_CASE(
+    "A committed draw is withdrawn from the window until someone codes it", "[studygui][draw]")
+{
+    SampleCopy s;
+    StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+    w.show();
+    CHECK_FALSE(child<QPushButton>(w, "draw-withdraw")->isEnabled()); // nothing drawn yet
+    auto drawThree = [&] {
+        child<QSpinBox>(w, "draw-size")->setValue(3);
+        child<QLineEdit>(w, "draw-seed")->setText(QStringLiteral("7"));
+        click(w, "draw-plan");
+        click(w, "draw-commit");
+        REQUIRE(rowsOf(s.project, Phase::Reliability).size() == 27 + 9);
+        auto recorded = StudyDesign::recordedDraw(s.project, Phase::Reliability);
+        REQUIRE(recorded);
+        REQUIRE(recorded->has_value());
+        return (*recorded)->articles;
+    };
+    const QStringList drawn = drawThree();
+
+    // Nobody has coded the draw: withdrawn, the sample's 27 assignments stay.
+    click(w, "draw-withdraw");
+    CHECK(child<QLabel>(w, "draw-error")->isHidden());
+    CHECK(rowsOf(s.project, Phase::Reliability).size() == 27);
+    CHECK(child<QLabel>(w, "draw-state")->text().contains(QStringLiteral("withdrawn")));
+    CHECK(child<QPushButton>(w, "draw-plan")->isEnabled());
+    CHECK_FALSE(child<QPushButton>(w, "draw-withdraw")->isEnabled());
+
+    // Drawn again (the same seed: the same articles), then C02 codes a span on one of them.
+    CHECK(drawThree() == drawn);
+    AddAnnotationEdit span(s.article(drawn.front()), s.coder(QStringLiteral("C02")),
+        AnnotationContent {FramingFunction::Problem, {0, 3}, {}, {}, {}}, Phase::Reliability);
+    REQUIRE(s.project.apply(span));
+    click(w, "draw-withdraw");
+    auto *error = child<QLabel>(w, "draw-error");
+    CHECK_FALSE(error->isHidden());
+    CHECK(error->text().contains(QStringLiteral("coding has started on 1 of its 9 assignments")));
+    CHECK(rowsOf(s.project, Phase::Reliability).size() == 27 + 9);
+}
+
 TEST_CASE("The rest is dealt single- or double-coded from the window", "[studygui][rest]")
 {
     SECTION("single-coded: each free article once, loads differ by at most one")
