@@ -3,6 +3,7 @@
 #include "core/project/project.h"
 
 #include <algorithm>
+#include <iterator>
 
 namespace fourfold {
 
@@ -29,6 +30,7 @@ Status ArticleDocument::open(ArticleId article, bool allCoders)
 void ArticleDocument::close()
 {
     m_article.reset();
+    m_read.clear();
     m_spans.clear();
     m_links.clear();
     m_answers.clear();
@@ -41,6 +43,23 @@ Status ArticleDocument::setAllCoders(bool allCoders)
     return reload(Part::Spans);
 }
 
+void ArticleDocument::setCoderFilter(CoderId coder)
+{
+    m_filter = coder;
+    applyFilter();
+}
+
+void ArticleDocument::applyFilter()
+{
+    if (!m_allCoders || !m_filter.isValid()) {
+        m_spans = m_read;
+        return;
+    }
+    m_spans.clear();
+    std::ranges::copy_if(m_read, std::back_inserter(m_spans),
+        [this](const Annotation &a) { return a.coder == m_filter; });
+}
+
 Status ArticleDocument::reload(Parts parts)
 {
     if (!m_article)
@@ -51,7 +70,8 @@ Status ArticleDocument::reload(Parts parts)
                                  : m_project.annotations(article, m_coder.id);
         if (!spans)
             return std::unexpected(spans.error());
-        m_spans = std::move(*spans);
+        m_read = std::move(*spans);
+        applyFilter();
     }
     if (parts.testFlag(Part::Links)) {
         auto links = m_project.links(article);
@@ -95,7 +115,7 @@ QString ArticleDocument::status() const
             status = x.status;
     }
     // Spans or answers mean the work has started, whatever the assignment says.
-    const bool ownSpans = std::any_of(m_spans.begin(), m_spans.end(),
+    const bool ownSpans = std::any_of(m_read.begin(), m_read.end(),
         [this](const Annotation &a) { return a.coder == m_coder.id; });
     if (status == QLatin1String("assigned") && (ownSpans || !m_answers.empty()))
         status = QStringLiteral("started");

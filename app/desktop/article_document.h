@@ -40,12 +40,19 @@ public:
     Status reload(Parts parts);
     // Shows every coder's spans (a lead) or the person's own; reads the spans again.
     Status setAllCoders(bool allCoders);
+    // With every coder's spans: shows only those of `coder` (an invalid id: all of them). No
+    // read: the spans are at hand.
+    void setCoderFilter(CoderId coder);
+    CoderId coderFilter() const { return m_filter; }
 
     bool isOpen() const { return m_article.has_value(); }
     ArticleId id() const { return m_article ? m_article->summary.id : ArticleId {}; }
     const Article &article() const { return *m_article; }
-    // The spans shown: the person's own, or everyone's with allCoders.
+    // The spans shown: the person's own, or everyone's with allCoders (only the filter's coder's
+    // when one is set).
     const std::vector<Annotation> &spans() const { return m_spans; }
+    // The spans read, before the coder filter: what the legend counts.
+    const std::vector<Annotation> &unfilteredSpans() const { return m_read; }
     std::optional<Annotation> span(AnnotationId id) const;
     const std::vector<AnnotationLink> &links() const { return m_links; }
     // The person's own answers to article-level items.
@@ -60,9 +67,13 @@ public:
 private:
     const Project &m_project;
     const Coder &m_coder;
+    void applyFilter();
+
     bool m_allCoders = false;
+    CoderId m_filter;
     std::optional<Article> m_article;
-    std::vector<Annotation> m_spans;
+    std::vector<Annotation> m_read; // as read: the person's own or everyone's
+    std::vector<Annotation> m_spans; // m_read through the coder filter
     std::vector<AnnotationLink> m_links;
     std::vector<Judgement> m_answers;
     std::vector<Assignment> m_assignments;

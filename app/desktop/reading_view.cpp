@@ -131,7 +131,8 @@ void ReadingView::setSpans(const std::vector<Annotation> &spans)
         const Utf16Range r16 = m_map.utf16Range(a.content.range);
         if (!FOURFOLD_SOFT_ASSERT(lcDesktop(), r16.start >= 0 && !r16.isEmpty()))
             continue;
-        shown.push_back({a.id, a.content.function, a.content.range, r16});
+        shown.push_back(
+            {a.id, a.content.function, a.content.range, r16, m_ownerNames.value(a.coder.value)});
     }
     m_lanes.setSpans(std::move(shown));
 
@@ -144,6 +145,20 @@ void ReadingView::setSpans(const std::vector<Annotation> &spans)
     updateEmphasis();
     updateAccessibleDescription();
     viewport()->update();
+}
+
+void ReadingView::setSpanOwners(const QHash<qint64, QString> &pseudonymByCoder)
+{
+    if (pseudonymByCoder == m_ownerNames)
+        return;
+    m_ownerNames = pseudonymByCoder;
+    viewport()->update();
+}
+
+QString ReadingView::spanOwner(AnnotationId id) const
+{
+    const LaneSpan *span = spanById(id);
+    return span ? span->owner : QString();
 }
 
 void ReadingView::setSelectedSpan(AnnotationId id)
@@ -607,6 +622,8 @@ void ReadingView::contextMenuEvent(QContextMenuEvent *e)
     });
     remove->setShortcut(QKeySequence(Qt::Key_Delete));
     remove->setEnabled(span != nullptr);
+    menu->addSeparator();
+    emit contextMenuAboutToShow(menu);
     menu->setAttribute(Qt::WA_DeleteOnClose);
     menu->popup(e->globalPos());
 }
@@ -615,25 +632,36 @@ bool ReadingView::viewportEvent(QEvent *e)
 {
     if (e->type() == QEvent::ToolTip) {
         auto *help = static_cast<QHelpEvent *>(e);
-        const LaneHit hit = hitTest(help->pos());
-        if (hit.spans.empty() || hit.kind == LaneHit::Nothing) {
+        const QString text = toolTipAt(help->pos());
+        if (text.isEmpty()) {
             QToolTip::hideText();
             e->ignore();
             return true;
         }
-        QStringList lines;
-        for (AnnotationId id : hit.spans) {
-            const LaneSpan *span = spanById(id);
-            QString quote = m_article.text.mid(span->range16.start, span->range16.length());
-            if (quote.size() > 60)
-                quote = quote.left(59) + QChar(0x2026);
-            lines << tr("%1: \u201C%2\u201D")
-                         .arg(functionName(span->function), quote.toHtmlEscaped());
-        }
-        QToolTip::showText(help->globalPos(), lines.join(QStringLiteral("<br>")), viewport());
+        QToolTip::showText(help->globalPos(), text, viewport());
         return true;
     }
     return QTextEdit::viewportEvent(e);
+}
+
+QString ReadingView::toolTipAt(const QPoint &viewportPos) const
+{
+    const LaneHit hit = hitTest(viewportPos);
+    if (hit.spans.empty() || hit.kind == LaneHit::Nothing)
+        return {};
+    QStringList lines;
+    for (AnnotationId id : hit.spans) {
+        const LaneSpan *span = spanById(id);
+        QString quote = m_article.text.mid(span->range16.start, span->range16.length());
+        if (quote.size() > 60)
+            quote = quote.left(59) + QChar(0x2026);
+        const QString line =
+            tr("%1: \u201C%2\u201D").arg(functionName(span->function), quote.toHtmlEscaped());
+        lines << (span->owner.isEmpty()
+                ? line
+                : tr("%1 \u00B7 %2").arg(span->owner.toHtmlEscaped(), line));
+    }
+    return lines.join(QStringLiteral("<br>"));
 }
 
 // --- layout, metrics, colours ----------------------------------------------------------------

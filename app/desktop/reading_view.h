@@ -46,6 +46,7 @@
 #include <array>
 #include <vector>
 
+class QMenu;
 class QTextBlock;
 class QTextLine;
 
@@ -70,6 +71,14 @@ public:
     // resending the list with one span more or changed costs only that span.
     void setSpans(const std::vector<Annotation> &spans);
     const std::vector<Annotation> &spans() const { return m_annotations; }
+    // The pseudonyms of the spans' coders, by coder id: when set (a lead showing every coder's
+    // spans), each badge carries its coder's pseudonym after the letter and the tooltip names it.
+    // Empty (the default): one person's spans, no names. Call setSpans() after it.
+    void setSpanOwners(const QHash<qint64, QString> &pseudonymByCoder);
+    // The pseudonym shown with span `id`, or empty.
+    QString spanOwner(AnnotationId id) const;
+    // What the tooltip at `viewportPos` says (empty: none), one line per span under it.
+    QString toolTipAt(const QPoint &viewportPos) const;
 
     // Selects span `id` (an invalid id or one not shown clears the selection) and draws it
     // emphasised. Collapses the text selection. Emits selectedSpanChanged() if it changed, never
@@ -112,6 +121,9 @@ signals:
     void spanActivated(AnnotationId id);
     // The selected span changed for any reason; an invalid id when none is selected.
     void selectedSpanChanged(AnnotationId id);
+    // The context menu is about to show (the span under the pointer already selected): a
+    // receiver may add actions of its own (removing the span's links, withdrawing answers).
+    void contextMenuAboutToShow(QMenu *menu);
 
 public slots:
     // Same as pressing the function's key (1-4) without Alt: create over the word-snapped text
@@ -183,6 +195,7 @@ private:
     std::vector<ParagraphRole> m_paragraphRoles;
 
     std::vector<Annotation> m_annotations;
+    QHash<qint64, QString> m_ownerNames; // coder id → pseudonym; empty: no owners shown
     AnnotationId m_selected;
     Drag m_drag;
 

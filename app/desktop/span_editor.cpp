@@ -17,6 +17,7 @@
 #include <QLineEdit>
 #include <QListWidget>
 #include <QLocale>
+#include <QMenu>
 #include <QPainter>
 #include <QPlainTextEdit>
 #include <QPushButton>
@@ -284,9 +285,31 @@ QWidget *SpanEditor::makeEditorPage()
         if (!chosen.isEmpty() && !isReadOnly())
             emit unlinkRequested(LinkId {chosen.front()->data(Qt::UserRole).toLongLong()});
     });
+    m_linkList->setContextMenuPolicy(Qt::CustomContextMenu);
+    connect(m_linkList, &QWidget::customContextMenuRequested, this, [this](const QPoint &pos) {
+        QListWidgetItem *item = m_linkList->itemAt(pos);
+        if (!item || isReadOnly())
+            return;
+        const LinkId id {item->data(Qt::UserRole).toLongLong()};
+        QMenu menu(this);
+        menu.addAction(tr("&Remove link"), this, [this, id] { emit unlinkRequested(id); });
+        menu.exec(m_linkList->viewport()->mapToGlobal(pos));
+    });
     column->addWidget(links);
     column->addStretch(1);
     return page;
+}
+
+void SpanEditor::addLinkActions(QMenu *menu)
+{
+    if (!m_span || isReadOnly())
+        return;
+    for (int i = 0; i < m_linkList->count(); ++i) {
+        const QListWidgetItem *item = m_linkList->item(i);
+        const LinkId id {item->data(Qt::UserRole).toLongLong()};
+        menu->addAction(item->icon(), tr("Remove link: %1").arg(item->text()), this,
+            [this, id] { emit unlinkRequested(id); });
+    }
 }
 
 QString SpanEditor::linkTypeFrom(FramingFunction function)

@@ -21,6 +21,7 @@ class QDoubleSpinBox;
 class QFormLayout;
 class QLabel;
 class QListWidget;
+class QMenu;
 class QPlainTextEdit;
 class QPushButton;
 class QStackedWidget;
@@ -55,6 +56,10 @@ public:
     void commitPendingEdits();
     // The span being edited, with the edits made so far, or nothing.
     std::optional<Annotation> span() const { return m_span; }
+
+    // Adds "Remove link …" to `menu` for each link of the span shown (none for another coder's
+    // span), each asking as the Remove link button does: the desk's context menu offers them.
+    void addLinkActions(QMenu *menu);
 
     // The link type an evaluation ("judges") or a remedy ("addresses") starts; empty for others.
     static QString linkTypeFrom(FramingFunction function);

@@ -263,10 +263,13 @@ SpanGeometry SpanLaneLayout::computeGeometry(const Utf16Range &range16) const
     return g;
 }
 
-QRectF SpanLaneLayout::badgeRect(const SpanGeometry &g) const
+QRectF SpanLaneLayout::badgeRect(const SpanGeometry &g, const LaneSpan &span) const
 {
     const QFontMetricsF fm(m_metrics.badgeFont);
-    const qreal width = std::ceil(fm.horizontalAdvance(QLatin1Char('M')) + m_metrics.pitch);
+    qreal text = fm.horizontalAdvance(QLatin1Char('M'));
+    if (!span.owner.isEmpty())
+        text += fm.horizontalAdvance(QChar(0x2009) + span.owner);
+    const qreal width = std::ceil(text + m_metrics.pitch);
     const qreal top = g.startBottom + m_metrics.gap - 1;
     const qreal height = 4 * m_metrics.pitch + 1;
     const qreal left = g.startRtl ? g.start.x() - width : g.start.x();
@@ -280,7 +283,7 @@ std::vector<LaneBadge> SpanLaneLayout::layoutBadges(
     for (const LaneSpan *span : spans) {
         const SpanGeometry &g = geometry(span->range16);
         if (!g.pieces.empty())
-            badges.push_back({badgeRect(g), span, g.startRtl});
+            badges.push_back({badgeRect(g, *span), span, g.startRtl});
     }
     // Badges that would collide on one line move along it in their reading direction: left to
     // right text pushes later badges rightwards, right to left text leftwards.

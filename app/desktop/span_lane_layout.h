@@ -58,6 +58,7 @@ struct LaneSpan {
     FramingFunction function = FramingFunction::Problem;
     TextRange range; // code points
     Utf16Range range16; // UTF-16 positions in the document
+    QString owner; // the coder's pseudonym, shown in the badge after the letter; empty: none
 };
 
 // One visual piece of a range on one text line, in document coordinates.
@@ -80,7 +81,7 @@ struct SpanGeometry {
     bool endRtl = false;
 };
 
-// A span's letter badge at its start.
+// A span's letter badge at its start (with its coder's pseudonym when LaneSpan::owner is set).
 struct LaneBadge {
     QRectF rect; // document coordinates
     const LaneSpan *span = nullptr;
@@ -134,7 +135,7 @@ public:
         const std::vector<const LaneSpan *> &candidates) const;
 
 private:
-    QRectF badgeRect(const SpanGeometry &g) const;
+    QRectF badgeRect(const SpanGeometry &g, const LaneSpan &span) const;
     void addPieces(const QTextBlock &block, const QTextLine &line, qint64 from16, qint64 to16,
         std::vector<LanePiece> &pieces) const;
 

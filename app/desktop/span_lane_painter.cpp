@@ -134,8 +134,10 @@ void paintSpanLanes(QPainter &p, const SpanLaneLayout &layout, const LaneColours
         p.setBrush(colours.badgeFill[i]);
         p.drawRoundedRect(r, radius, radius);
         p.setPen(colours.badgeText[i]);
-        p.drawText(
-            badge.rect, Qt::AlignCenter, QString(functionStyle(badge.span->function).letter));
+        QString label(functionStyle(badge.span->function).letter);
+        if (!badge.span->owner.isEmpty())
+            label += QChar(0x2009) + badge.span->owner; // a thin space, then the pseudonym
+        p.drawText(badge.rect, Qt::AlignCenter, label);
     }
     p.setBrush(Qt::NoBrush);
 }
