@@ -1,10 +1,13 @@
 #include "core/team/server_store_connection.h"
 
+#include "core/team/team_credentials.h"
+
 #include <QCoreApplication>
 #include <QStringList>
 
 #include <libpq-fe.h>
 
+#include <optional>
 #include <vector>
 
 namespace fourfold {
@@ -33,6 +36,39 @@ ErrorCode codeForState(const QByteArray &state)
     if (state == "40001" || state == "40P01" || state == "55P03")
         return ErrorCode::Busy; // serialization failure, deadlock, lock not available
     return ErrorCode::InvalidInput;
+}
+
+// The options libpq reads from `options` but the password, as "key='value'" pairs.
+QString pairsWithoutPassword(const PQconninfoOption *options)
+{
+    QStringList pairs;
+    for (const PQconninfoOption *o = options; o->keyword; ++o) {
+        if (!o->val || qstrcmp(o->keyword, "password") == 0)
+            continue;
+        QString value = QString::fromUtf8(o->val);
+        value.replace(QLatin1String("\\"), QLatin1String("\\\\"));
+        value.replace(QLatin1String("'"), QLatin1String("\\'"));
+        pairs << QStringLiteral("%1='%2'").arg(QLatin1String(o->keyword), value);
+    }
+    return pairs.join(QLatin1Char(' '));
+}
+
+// The password remembered in this session for the server of `conninfo`, when the string names
+// no password of its own.
+std::optional<QByteArray> sessionPassword(const QByteArray &conninfo)
+{
+    PQconninfoOption *options = PQconninfoParse(conninfo.constData(), nullptr);
+    if (!options)
+        return std::nullopt; // connecting fails with libpq's reason
+    bool named = false;
+    for (const PQconninfoOption *o = options; o->keyword; ++o)
+        if (qstrcmp(o->keyword, "password") == 0 && o->val)
+            named = true;
+    const QString server = pairsWithoutPassword(options);
+    PQconninfoFree(options);
+    if (named)
+        return std::nullopt;
+    return TeamCredentials::rememberedPassword(server);
 }
 
 } // namespace
@@ -86,7 +122,12 @@ ServerConnection::ServerConnection(pg_conn *conn)
 Result<ServerConnection> ServerConnection::open(const QString &conninfo)
 {
     const QByteArray info = conninfo.toUtf8();
-    PGconn *raw = PQconnectdb(info.constData());
+    // A remembered password goes to libpq as one more keyword after the string's own (which it
+    // expands from "dbname"), never into a string that could be recorded or logged.
+    const std::optional<QByteArray> password = sessionPassword(info);
+    const char *keywords[] = {"dbname", "password", nullptr};
+    const char *values[] = {info.constData(), password ? password->constData() : nullptr, nullptr};
+    PGconn *raw = password ? PQconnectdbParams(keywords, values, 1) : PQconnectdb(info.constData());
     if (!raw)
         return fail(ErrorCode::Internal,
             ServerConnectionText::tr("Out of memory while connecting to the server."));
@@ -123,17 +164,9 @@ Result<QString> ServerConnection::withoutPassword(const QString &conninfo)
             ServerConnectionText::tr("\"%1\" is not a PostgreSQL connection string.").arg(conninfo),
             cause);
     }
-    QStringList pairs;
-    for (PQconninfoOption *o = options; o->keyword; ++o) {
-        if (!o->val || qstrcmp(o->keyword, "password") == 0)
-            continue;
-        QString value = QString::fromUtf8(o->val);
-        value.replace(QLatin1String("\\"), QLatin1String("\\\\"));
-        value.replace(QLatin1String("'"), QLatin1String("\\'"));
-        pairs << QStringLiteral("%1='%2'").arg(QLatin1String(o->keyword), value);
-    }
+    const QString pairs = pairsWithoutPassword(options);
     PQconninfoFree(options);
-    return pairs.join(QLatin1Char(' '));
+    return pairs;
 }
 
 Status ServerConnection::exec(const QString &sql)
@@ -252,6 +285,25 @@ QString ServerConnection::user() const
 QString ServerConnection::describe() const
 {
     return QStringLiteral("%1@%2:%3/%4").arg(user(), host(), port(), database());
+}
+
+int ServerConnection::socket() const
+{
+    return PQsocket(m_conn.get());
+}
+
+Result<QStringList> ServerConnection::notifications()
+{
+    if (PQconsumeInput(m_conn.get()) == 0 || PQstatus(m_conn.get()) != CONNECTION_OK)
+        return fail(ErrorCode::Io,
+            ServerConnectionText::tr("The connection to the server %1 was lost.").arg(describe()),
+            serverText(PQerrorMessage(m_conn.get())));
+    QStringList channels;
+    while (PGnotify *n = PQnotifies(m_conn.get())) {
+        channels << QString::fromUtf8(n->relname);
+        PQfreemem(n);
+    }
+    return channels;
 }
 
 } // namespace fourfold

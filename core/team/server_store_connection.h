@@ -9,6 +9,7 @@
 #include <QByteArray>
 #include <QList>
 #include <QString>
+#include <QStringList>
 
 #include <memory>
 #include <optional>
@@ -41,8 +42,10 @@ class ServerConnection
 {
 public:
     // Connects with a libpq connection string (a "postgresql://" URI or "key=value" pairs; the
-    // password comes from libpq's conventions: a password file, PGPASSFILE, PGPASSWORD). Fails
-    // with Io naming the server when it cannot be reached, NotAllowed when the login is refused.
+    // password comes from libpq's conventions: a password file, PGPASSFILE, PGPASSWORD; a string
+    // that names no password uses the one remembered for its server in this session,
+    // TeamCredentials::rememberPassword, handed to libpq in memory only). Fails with Io naming
+    // the server when it cannot be reached, NotAllowed when the login is refused.
     static Result<ServerConnection> open(const QString &conninfo);
 
     // `conninfo` without any password, as "key='value'" pairs: what a project file may record.
@@ -75,6 +78,13 @@ public:
     QString user() const;
     // "user@host:port/database", for messages.
     QString describe() const;
+
+    // The connection's socket, to wait on for notifications (-1 when there is none).
+    int socket() const;
+    // Reads what the server has sent, without waiting, and returns the channels of the
+    // notifications (LISTEN / NOTIFY) received since the last call, in order. Fails with Io when
+    // the connection is lost.
+    Result<QStringList> notifications();
 
 private:
     struct Free {
