@@ -40,6 +40,7 @@ const QHash<QString, QString> &codingActions()
         {QStringLiteral("link.add"), QStringLiteral("link")},
         {QStringLiteral("link.remove"), QStringLiteral("link")},
         {QStringLiteral("judgement.set"), QStringLiteral("judgement")},
+        {QStringLiteral("judgement.withdraw"), QStringLiteral("judgement")},
         {QStringLiteral("article.status"), QStringLiteral("assignment")},
     };
     return actions;

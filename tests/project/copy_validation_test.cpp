@@ -203,6 +203,31 @@ TEST_CASE("Issue 20 item 8: an undone edit in a copy is an event the merge accep
         == 1);
 }
 
+TEST_CASE("An answer withdrawn in a copy is an event the merge accepts")
+{
+    CopiesFixture f;
+    const QString path = f.handout(QStringLiteral("C01"), QStringLiteral("c01.fourfold"));
+    {
+        Project p = openProject(path);
+        const CoderId me = coderIn(p, QStringLiteral("C01"));
+        const ArticleId f1 = articleIn(p, QStringLiteral("f1"));
+        SetJudgementEdit answer(f1, me, QStringLiteral("dominant_function"),
+            QStringLiteral("cause"), Phase::Reliability);
+        REQUIRE(p.apply(answer));
+        WithdrawJudgementEdit withdraw(
+            f1, me, QStringLiteral("dominant_function"), Phase::Reliability);
+        REQUIRE(p.apply(withdraw));
+    }
+    mergeInto(*f.main, {path});
+    CHECK(count(f.mainPath, "SELECT count(*) FROM event_log WHERE action = 'judgement.withdraw'")
+        == 1);
+    // The answer arrives as the tombstone it is in the copy: the item is unanswered.
+    CHECK(count(f.mainPath,
+              "SELECT count(*) FROM judgement WHERE item_key = 'dominant_function' AND deleted = 0 "
+              "AND coder_id = (SELECT id FROM coder WHERE pseudonym = 'C01')")
+        == 0);
+}
+
 TEST_CASE("Issue 20 item 8: impossible coding time in a copy is refused and never overflows")
 {
     CopiesFixture f;
