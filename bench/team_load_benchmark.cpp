@@ -175,10 +175,10 @@ int main(int argc, char **argv)
         }
     }
     const PublishReport report = check(TeamProject::publish(lead,
-                                              QStringLiteral("host='%1' port='%2' dbname='%3' "
-                                                             "user='%4'")
-                                                  .arg(h, p, d, parser.value(admin)),
-                                              work.filePath(QStringLiteral("logins"))),
+                                           QStringLiteral("host='%1' port='%2' dbname='%3' "
+                                                          "user='%4'")
+                                               .arg(h, p, d, parser.value(admin)),
+                                           work.filePath(QStringLiteral("logins"))),
         "publish");
     QHash<QString, QString> loginOf;
     for (const TeamLogin &l : report.logins)
