@@ -61,9 +61,22 @@ QByteArray plantedMatrix(std::vector<int> &truth)
 QByteArray indicatorsFromSampleFile(
     const QStringList &coders, QMap<QString, QList<double>> *shares = nullptr)
 {
-    const QStringList variables {"problem", "cause", "evaluation", "evaluation:polarity=negative",
-        "evaluation:polarity=neutral", "evaluation:polarity=positive", "remedy",
-        "remedy:explicitness=explicit", "remedy:explicitness=implicit"};
+    // The element variables by the rule of README "Frames", read from the codebook file the
+    // sample project uses: each function, then each value of its closed-list attributes.
+    QStringList variables;
+    QFile codebook(QStringLiteral(FOURFOLD_SOURCE_DIR "/resources/codebook/default_codebook.json"));
+    REQUIRE(codebook.open(QIODevice::ReadOnly));
+    for (const QJsonValue &function :
+        QJsonDocument::fromJson(codebook.readAll()).object().value("functions").toArray()) {
+        const QString key = function.toObject().value("key").toString();
+        variables << key;
+        for (const QJsonValue &attribute : function.toObject().value("attributes").toArray())
+            if (attribute.toObject().value("type").toString() == "choice")
+                for (const QJsonValue &value : attribute.toObject().value("values").toArray())
+                    variables << key + ":" + attribute.toObject().value("key").toString() + "="
+                            + value.toString();
+    }
+    REQUIRE(variables.size() > 4);
     QStringList articleOrder;
     QFile articles(QStringLiteral(FOURFOLD_SAMPLE_DIR "/articles.jsonl"));
     REQUIRE(articles.open(QIODevice::ReadOnly));

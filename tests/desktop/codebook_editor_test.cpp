@@ -231,12 +231,13 @@ TEST_CASE("an invalid codebook draft is shown at its field and nothing is stored
     CHECK(w.fieldError(valuesPath).isEmpty());
     CHECK_FALSE(values->styleSheet().contains(QStringLiteral("border")));
 
-    // A second attribute of remedy with the key of the first.
+    // A third attribute of remedy (after explicitness and the kind of remedy) with the key of
+    // the first.
     w.showFunction(FramingFunction::Remedy);
     w.addRow();
-    const QString keyPath = QStringLiteral("functions[3].attributes[1].key");
+    const QString keyPath = QStringLiteral("functions[3].attributes[2].key");
     QLineEdit *key = lineField(w, keyPath);
-    textField(w, QStringLiteral("functions[3].attributes[1].values"))
+    textField(w, QStringLiteral("functions[3].attributes[2].values"))
         ->setPlainText(QStringLiteral("yes\nno"));
     CHECK(w.fieldError(keyPath).isEmpty());
     key->setText(QStringLiteral("explicitness"));

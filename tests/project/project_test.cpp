@@ -20,8 +20,19 @@ TEST_CASE("a new project holds the default codebook with the four functions")
     CHECK_FALSE(book->definition(FramingFunction::Remedy).definition.isEmpty());
     CHECK_FALSE(book->definition(FramingFunction::Problem).rules.isEmpty());
     CHECK_FALSE(book->definition(FramingFunction::Evaluation).examples.isEmpty());
-    // The attribute schema of the issue: polarity, actor, explicit/implicit; one article item.
-    REQUIRE(book->definition(FramingFunction::Evaluation).attributes.size() == 1);
+    // The attribute schema: polarity, actor, explicit/implicit, and a closed category list per
+    // function for the frame elements (Matthes & Kohring 2008: problem, the responsible actor's
+    // kind, what is evaluated, the kind of remedy); one article item.
+    REQUIRE(book->definition(FramingFunction::Evaluation).attributes.size() == 2);
+    CHECK(book->definition(FramingFunction::Evaluation).attributes[1].key
+        == QStringLiteral("object"));
+    CHECK(book->definition(FramingFunction::Problem).attributes[0].key == QStringLiteral("issue"));
+    CHECK(book->definition(FramingFunction::Cause).attributes[1].key
+        == QStringLiteral("actor_category"));
+    CHECK(
+        book->definition(FramingFunction::Cause).attributes[1].type == AttributeSpec::Type::Choice);
+    CHECK(book->definition(FramingFunction::Remedy).attributes[1].key
+        == QStringLiteral("remedy_type"));
     CHECK(book->definition(FramingFunction::Evaluation).attributes[0].values
         == QStringList {
             QStringLiteral("negative"), QStringLiteral("neutral"), QStringLiteral("positive")});

@@ -361,12 +361,14 @@ TEST_CASE("the PDF report renders with pdftoppm and carries the same alpha value
         const QImage image(dir.filePath(page));
         REQUIRE(!image.isNull());
         CHECK(image.width() < image.height()); // A4 portrait
-        // Something is printed on every page.
+        // Something is printed on every page, not only its number: at 30 dpi the page number
+        // alone inks fewer than 10 of the sampled pixels, the last two lines of the references
+        // about 30.
         int ink = 0;
         for (int y = 0; y < image.height(); y += 2)
             for (int x = 0; x < image.width(); x += 2)
                 ink += qGray(image.pixel(x, y)) < 160 ? 1 : 0;
-        CHECK(ink > 50);
+        CHECK(ink > 15);
     }
 
     const CliRun text = run(pdftotext, {QStringLiteral("-layout"), s.pdf, QStringLiteral("-")});

@@ -315,9 +315,11 @@ TEST_CASE("edit decides a gold span with the lead's own function and boundaries"
         onText.setExact(true);
         CHECK(onText.content().range == TextRange {6, 12});
         // The attribute fields are the function's own (the default codebook's cause has the
-        // free-text actor): what is typed there comes back under its key.
+        // free-text actor and the closed list of the actor's kind): what is typed there comes
+        // back under its key, and a list left unset adds nothing.
         const auto causeSpecs = codebook->definition(FramingFunction::Cause).attributes;
-        REQUIRE(causeSpecs.size() == 1);
+        REQUIRE(causeSpecs.size() == 2);
+        REQUIRE(causeSpecs.front().type == AttributeSpec::Type::Text);
         QLineEdit *actor = nullptr;
         for (QLineEdit *e : onText.findChildren<QLineEdit *>())
             if (e->accessibleName() == causeSpecs.front().label)
