@@ -109,6 +109,10 @@ int runTeamPeople(const QStringList &arguments)
     auto project = Project::open(path);
     if (!project)
         return report(project.error());
+    // A file that is no team working file is refused before anyone signs in (signing in
+    // sets a first passphrase).
+    if (auto team = TeamProject::status(*project); !team)
+        return report(team.error());
     auto passphrase = readPassphrase(
         parser.isSet(leadPassphraseFile) ? parser.value(leadPassphraseFile) : QStringLiteral("-"));
     if (!passphrase)
