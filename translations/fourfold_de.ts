@@ -1222,6 +1222,26 @@
         <source>the codebook must be a JSON object, not %1.</source>
         <translation>das Codebuch muss ein JSON-Objekt sein, nicht %1.</translation>
     </message>
+    <message>
+        <location filename="../core/model/codebook_json.cpp" line="152"/>
+        <source>&quot;%1&quot; is not a language code (two or three lower-case letters, ISO 639, such as &quot;nl&quot; or &quot;de&quot;).</source>
+        <translation>„%1“ ist kein Sprachcode (zwei oder drei Kleinbuchstaben nach ISO 639, etwa „nl“ oder „de“).</translation>
+    </message>
+    <message>
+        <location filename="../core/model/codebook_json.cpp" line="496"/>
+        <source>&quot;%1&quot; gives the texts of &quot;%2&quot; a second time.</source>
+        <translation>„%1“ gibt die Texte von „%2“ ein zweites Mal an.</translation>
+    </message>
+    <message>
+        <location filename="../core/model/codebook_json.cpp" line="530"/>
+        <source>&quot;%1&quot; names the attribute &quot;%2&quot;, which %3 does not have.</source>
+        <translation>„%1“ nennt das Merkmal „%2“, das %3 nicht hat.</translation>
+    </message>
+    <message>
+        <location filename="../core/model/codebook_json.cpp" line="554"/>
+        <source>&quot;%1&quot; names the item &quot;%2&quot;, which the codebook does not have.</source>
+        <translation>„%1“ nennt die Frage „%2“, die das Codebuch nicht hat.</translation>
+    </message>
 </context>
 <context>
     <name>CoderCopiesText</name>

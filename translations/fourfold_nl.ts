@@ -1222,6 +1222,26 @@
         <source>the codebook must be a JSON object, not %1.</source>
         <translation>het codeboek moet een JSON-object zijn, geen %1.</translation>
     </message>
+    <message>
+        <location filename="../core/model/codebook_json.cpp" line="152"/>
+        <source>&quot;%1&quot; is not a language code (two or three lower-case letters, ISO 639, such as &quot;nl&quot; or &quot;de&quot;).</source>
+        <translation>‘%1’ is geen taalcode (twee of drie kleine letters volgens ISO 639, zoals ‘nl’ of ‘de’).</translation>
+    </message>
+    <message>
+        <location filename="../core/model/codebook_json.cpp" line="496"/>
+        <source>&quot;%1&quot; gives the texts of &quot;%2&quot; a second time.</source>
+        <translation>‘%1’ geeft de teksten van ‘%2’ een tweede keer.</translation>
+    </message>
+    <message>
+        <location filename="../core/model/codebook_json.cpp" line="530"/>
+        <source>&quot;%1&quot; names the attribute &quot;%2&quot;, which %3 does not have.</source>
+        <translation>‘%1’ noemt het kenmerk ‘%2’, dat %3 niet heeft.</translation>
+    </message>
+    <message>
+        <location filename="../core/model/codebook_json.cpp" line="554"/>
+        <source>&quot;%1&quot; names the item &quot;%2&quot;, which the codebook does not have.</source>
+        <translation>‘%1’ noemt de vraag ‘%2’, die het codeboek niet heeft.</translation>
+    </message>
 </context>
 <context>
     <name>CoderCopiesText</name>

@@ -115,6 +115,8 @@ int runReport(const QStringList &arguments)
     }
 
     ReportOptions options;
+    // The codebook's texts follow the report's language where the codebook has them.
+    options.language = currentLanguage();
     const auto unitKind = unitKindFromKey(parser.value(unit));
     if (!unitKind
         || (*unitKind != UnitKind::Paragraph && *unitKind != UnitKind::Sentence

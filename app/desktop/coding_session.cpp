@@ -1,6 +1,7 @@
 #include "app/desktop/coding_session.h"
 
 #include "app/desktop/edit_command.h"
+#include "app/desktop/interface_language.h"
 #include "core/model/logging.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
@@ -33,8 +34,9 @@ CodingSession::CodingSession(Project project, Coder coder, QObject *parent)
     , m_project(std::move(project))
     , m_coder(std::move(coder))
 {
+    // The codebook's texts in the user's language where it has them (the keys and values stay).
     if (auto book = m_project.codebook())
-        m_codebook = *book;
+        m_codebook = book->inLanguage(interfaceLanguage());
 }
 
 CodingSession::~CodingSession()

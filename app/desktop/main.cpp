@@ -1,6 +1,7 @@
 // fourfold: the desktop workbench. `fourfold [PROJECT] [--coder PSEUDONYM]` opens a project
 // (asking who codes unless --coder says it; a lead is asked their passphrase).
 
+#include "app/desktop/interface_language.h"
 #include "app/desktop/main_window.h"
 #include "app/i18n/translations.h"
 #include "core/model/heap_tuning.h"
@@ -21,7 +22,8 @@ int main(int argc, char *argv[])
     // The language chosen in Settings, else the system's; Qt's own buttons follow it.
     const QString language =
         QSettings().value(QStringLiteral("language"), QStringLiteral("system")).toString();
-    fourfold::useLanguage(language == QLatin1String("system") ? QLocale() : QLocale(language));
+    fourfold::setInterfaceLanguage(
+        fourfold::useLanguage(language == QLatin1String("system") ? QLocale() : QLocale(language)));
 
     QCommandLineParser parser;
     parser.setApplicationDescription(QApplication::translate(

@@ -19,8 +19,24 @@ std::vector<std::unique_ptr<QTranslator>> &installed()
 
 } // namespace
 
+namespace {
+
+QString &installedLanguage()
+{
+    static QString code;
+    return code;
+}
+
+} // namespace
+
+QString currentLanguage()
+{
+    return installedLanguage();
+}
+
 QString useLanguage(const QLocale &locale)
 {
+    installedLanguage().clear();
     for (const auto &t : installed())
         QCoreApplication::removeTranslator(t.get());
     installed().clear();
@@ -39,7 +55,8 @@ QString useLanguage(const QLocale &locale)
         QCoreApplication::installTranslator(qt.get());
         installed().push_back(std::move(qt));
     }
-    return QLocale::languageToCode(language.language());
+    installedLanguage() = QLocale::languageToCode(language.language());
+    return installedLanguage();
 }
 
 } // namespace fourfold

@@ -10,5 +10,7 @@ namespace fourfold {
 // of those installed before. English (or a language without a translation) installs none.
 // Returns the language installed ("de", "nl"), or an empty string for English.
 QString useLanguage(const QLocale &locale);
+// What the last useLanguage installed ("de", "nl"; empty for English or before any call).
+QString currentLanguage();
 
 } // namespace fourfold

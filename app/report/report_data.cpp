@@ -207,9 +207,11 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     if (!run)
         return std::unexpected(run.error());
     const Codebook *book = &run->codebook();
+    // Labels and questions in the report's language; the keys are the codebook's own.
+    const Codebook texts = book->inLanguage(options.language);
     const CountedCodings *counted = &run->codings();
     d.codebookNumber = book->number;
-    d.codebookName = book->name;
+    d.codebookName = texts.name;
 
     // Span matching looks at all four functions whatever the selection says: once for all.
     auto matching = run->matching();
@@ -224,7 +226,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
         if (!json)
             return std::unexpected(json.error());
         d.analyses.push_back({QStringLiteral("function-%1").arg(functionKey(f)),
-            functionLabel(*book, f), functionLabel(*book, f), QStringLiteral("function"),
+            functionLabel(texts, f), functionLabel(texts, f), QStringLiteral("function"),
             QStringList {QStringLiteral("--unit"), unitKindKey(options.unit),
                 QStringLiteral("--function"), functionKey(f), QStringLiteral("--diagnostics")}
                 + common,
@@ -243,7 +245,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     }
     // Article-level items and the spans' choice attributes: their own errors do not stop the
     // report (an attribute nobody filled in has no units).
-    for (const ArticleItem &item : book->items) {
+    for (const ArticleItem &item : texts.items) {
         AnalysisRequest r;
         r.unit = UnitKind::Article;
         r.item = item.key;
@@ -257,7 +259,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
             json ? *json : QJsonObject {}, json ? QString() : json.error().message});
     }
     for (FramingFunction f : kFramingFunctions)
-        for (const AttributeSpec &a : book->definition(f).attributes) {
+        for (const AttributeSpec &a : texts.definition(f).attributes) {
             if (a.type != AttributeSpec::Type::Choice)
                 continue;
             AnalysisRequest r;
@@ -267,7 +269,7 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
             auto json = agreeJson(*run, r, options);
             d.analyses.push_back({QStringLiteral("attribute-%1-%2").arg(functionKey(f), a.key),
                 QStringLiteral("%1: %2").arg(
-                    functionLabel(*book, f), a.label.isEmpty() ? a.key : a.label),
+                    functionLabel(texts, f), a.label.isEmpty() ? a.key : a.label),
                 QStringLiteral("%1: %2").arg(functionKey(f), a.key), QStringLiteral("attribute"),
                 QStringList {QStringLiteral("--unit"), QStringLiteral("span"),
                     QStringLiteral("--function"), functionKey(f), QStringLiteral("--attribute"),

@@ -32,6 +32,9 @@ struct ReportOptions {
     int bootstrapReplicates = 1000; // 0 = no confidence intervals
     std::uint64_t seed = 1;
     QString title; // empty = "Reliability report: <project name>"
+    // The codebook's texts (function labels, questions, attribute labels) in this language where
+    // it has them (an ISO 639 code, Codebook::inLanguage); empty: its own.
+    QString language;
 };
 
 // One call of the agreement engine: its id in the report (e.g. "function-problem"), what it

@@ -117,4 +117,33 @@ Status Codebook::validateJudgement(const QString &key, const QString &value) con
     return {};
 }
 
+Codebook Codebook::inLanguage(const QString &language) const
+{
+    const QString code = language.section(QLatin1Char('_'), 0, 0).section(QLatin1Char('-'), 0, 0);
+    const auto texts = translations.constFind(code.toLower());
+    if (texts == translations.cend())
+        return *this;
+    Codebook out = *this;
+    if (!texts->name.isEmpty())
+        out.name = texts->name;
+    for (FunctionDefinition &def : out.functions) {
+        const auto t = texts->functions.constFind(def.function);
+        if (t == texts->functions.cend())
+            continue;
+        if (!t->label.isEmpty())
+            def.label = t->label;
+        if (!t->definition.isEmpty())
+            def.definition = t->definition;
+        if (!t->rules.isEmpty())
+            def.rules = t->rules;
+        if (!t->examples.isEmpty())
+            def.examples = t->examples;
+        for (AttributeSpec &a : def.attributes)
+            a.label = t->attributeLabels.value(a.key, a.label);
+    }
+    for (ArticleItem &item : out.items)
+        item.question = texts->questions.value(item.key, item.question);
+    return out;
+}
+
 } // namespace fourfold

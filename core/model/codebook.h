@@ -53,6 +53,22 @@ struct ArticleItem {
     QMap<QString, QString> recode;
 };
 
+// A codebook's texts in another language, for coders who read that language better: the desk
+// shows them in place of the codebook's own where they are given. Keys, values, levels and
+// recodings stay the codebook's own, so answers given in any language are compared as one.
+struct FunctionTexts {
+    QString label;
+    QString definition;
+    QStringList rules;
+    QStringList examples;
+    QMap<QString, QString> attributeLabels; // by attribute key
+};
+struct CodebookTexts {
+    QString name;
+    QMap<FramingFunction, FunctionTexts> functions;
+    QMap<QString, QString> questions; // by item key
+};
+
 // What `value`, given under any version, counts as under a version with `values` and `recode`:
 // itself when `values` holds it, its recoding, or nothing (a value this version does not know).
 std::optional<QString> countedValue(
@@ -69,6 +85,13 @@ struct Codebook {
     QString name;
     std::vector<FunctionDefinition> functions; // exactly four, in kFramingFunctions order
     std::vector<ArticleItem> items;
+    // The texts in other languages, by ISO 639 language code ("nl", "de").
+    QMap<QString, CodebookTexts> translations;
+
+    // This codebook with the texts of `language` (an ISO 639 code, or a locale name such as
+    // "de_AT" whose language is looked up) wherever it gives one, its own texts elsewhere; the
+    // codebook itself when it has no texts in that language.
+    Codebook inLanguage(const QString &language) const;
 
     // Parses the JSON form (its schema is in the README, "Codebook versions"). Fails with
     // InvalidInput made by failAt: `source`, the line where the JSON text has one, and what is

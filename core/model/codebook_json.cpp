@@ -6,6 +6,7 @@
 #include <QCoreApplication>
 #include <QJsonArray>
 #include <QJsonDocument>
+#include <QRegularExpression>
 
 namespace fourfold {
 
@@ -89,7 +90,8 @@ public:
             return failAt(ErrorCode::InvalidInput, m_source, m_places->repeatedKeyLine(), 0,
                 CodebookText::tr("the key \"%1\" appears twice.")
                     .arg(shown(m_places->repeatedKey())));
-        FOURFOLD_TRY_STATUS(onlyKeys(root, QString(), {"name", "functions", "items"}));
+        FOURFOLD_TRY_STATUS(
+            onlyKeys(root, QString(), {"name", "functions", "items", "translations"}));
         Codebook book;
         auto name = text(root, QString(), QStringLiteral("name"), QString(), Lines::One);
         if (!name)
@@ -135,6 +137,27 @@ public:
                     CodebookText::tr("\"%1\" repeats the item \"%2\".")
                         .arg(member(path, QStringLiteral("key")), shown(item->key)));
             book.items.push_back(std::move(*item));
+        }
+
+        if (root.contains(QStringLiteral("translations"))) {
+            auto all =
+                object(root.value(QStringLiteral("translations")), QStringLiteral("translations"));
+            if (!all)
+                return std::unexpected(all.error());
+            for (auto it = all->begin(); it != all->end(); ++it) {
+                const QString path = member(QStringLiteral("translations"), it.key());
+                static const QRegularExpression code(QStringLiteral("^[a-z]{2,3}$"));
+                if (!code.match(it.key()).hasMatch())
+                    return wrong(path,
+                        CodebookText::tr(
+                            "\"%1\" is not a language code (two or three lower-case letters, "
+                            "ISO 639, such as \"nl\" or \"de\").")
+                            .arg(shown(it.key())));
+                auto texts = translation(it.value(), path, book);
+                if (!texts)
+                    return std::unexpected(texts.error());
+                book.translations.insert(it.key(), std::move(*texts));
+            }
         }
         return book;
     }
@@ -434,6 +457,108 @@ private:
         return spec;
     }
 
+    // The texts of one language (see CodebookTexts): every function, attribute and item they
+    // name must be the codebook's; what they leave out stays the codebook's own.
+    Result<CodebookTexts> translation(
+        const QJsonValue &v, const QString &path, const Codebook &book) const
+    {
+        auto o = object(v, path);
+        if (!o)
+            return std::unexpected(o.error());
+        FOURFOLD_TRY_STATUS(onlyKeys(*o, path, {"name", "functions", "items"}));
+        CodebookTexts out;
+        auto name = text(*o, path, QStringLiteral("name"), QString(), Lines::One);
+        if (!name)
+            return std::unexpected(name.error());
+        out.name = *name;
+        auto functions = array(*o, path, QStringLiteral("functions"), false);
+        if (!functions)
+            return std::unexpected(functions.error());
+        for (qsizetype i = 0; i < functions->size(); ++i) {
+            const QString at = element(member(path, QStringLiteral("functions")), i);
+            auto f = object(functions->at(i), at);
+            if (!f)
+                return std::unexpected(f.error());
+            FOURFOLD_TRY_STATUS(onlyKeys(
+                *f, at, {"key", "label", "definition", "rules", "examples", "attributes"}));
+            auto k = text(*f, at, QStringLiteral("key"), std::nullopt, Lines::One);
+            if (!k)
+                return std::unexpected(k.error());
+            const std::optional<FramingFunction> function = functionFromKey(*k);
+            if (!function || functionKey(*function) != *k)
+                return wrong(member(at, QStringLiteral("key")),
+                    CodebookText::tr(
+                        "\"%1\" is \"%2\", not one of the four functions (problem, cause, "
+                        "evaluation, remedy).")
+                        .arg(member(at, QStringLiteral("key")), shown(*k)));
+            if (out.functions.contains(*function))
+                return wrong(member(at, QStringLiteral("key")),
+                    CodebookText::tr("\"%1\" gives the texts of \"%2\" a second time.")
+                        .arg(member(at, QStringLiteral("key")), *k));
+            FunctionTexts t;
+            auto label = text(*f, at, QStringLiteral("label"), QString(), Lines::One);
+            auto definition = text(*f, at, QStringLiteral("definition"), QString(), Lines::Many);
+            auto rules = texts(*f, at, QStringLiteral("rules"), false, Lines::Many);
+            auto examples = texts(*f, at, QStringLiteral("examples"), false, Lines::Many);
+            auto attributes = array(*f, at, QStringLiteral("attributes"), false);
+            for (const Status &st : {label ? Status {} : Status(std::unexpected(label.error())),
+                     definition ? Status {} : Status(std::unexpected(definition.error())),
+                     rules ? Status {} : Status(std::unexpected(rules.error())),
+                     examples ? Status {} : Status(std::unexpected(examples.error())),
+                     attributes ? Status {} : Status(std::unexpected(attributes.error()))})
+                FOURFOLD_TRY_STATUS(st);
+            t.label = *label;
+            t.definition = *definition;
+            t.rules = *rules;
+            t.examples = *examples;
+            const FunctionDefinition &def = book.definition(*function);
+            for (qsizetype j = 0; j < attributes->size(); ++j) {
+                const QString aat = element(member(at, QStringLiteral("attributes")), j);
+                auto a = object(attributes->at(j), aat);
+                if (!a)
+                    return std::unexpected(a.error());
+                FOURFOLD_TRY_STATUS(onlyKeys(*a, aat, {"key", "label"}));
+                auto key = keyOf(*a, aat);
+                auto alabel = text(*a, aat, QStringLiteral("label"), std::nullopt, Lines::One);
+                if (!key)
+                    return std::unexpected(key.error());
+                if (!alabel)
+                    return std::unexpected(alabel.error());
+                if (std::ranges::find(def.attributes, *key, &AttributeSpec::key)
+                    == def.attributes.end())
+                    return wrong(member(aat, QStringLiteral("key")),
+                        CodebookText::tr(
+                            "\"%1\" names the attribute \"%2\", which %3 does not have.")
+                            .arg(member(aat, QStringLiteral("key")), shown(*key), *k));
+                t.attributeLabels.insert(*key, *alabel);
+            }
+            out.functions.insert(*function, std::move(t));
+        }
+        auto items = array(*o, path, QStringLiteral("items"), false);
+        if (!items)
+            return std::unexpected(items.error());
+        for (qsizetype i = 0; i < items->size(); ++i) {
+            const QString at = element(member(path, QStringLiteral("items")), i);
+            auto item = object(items->at(i), at);
+            if (!item)
+                return std::unexpected(item.error());
+            FOURFOLD_TRY_STATUS(onlyKeys(*item, at, {"key", "question"}));
+            auto key = keyOf(*item, at);
+            auto question = text(*item, at, QStringLiteral("question"), std::nullopt, Lines::Many);
+            if (!key)
+                return std::unexpected(key.error());
+            if (!question)
+                return std::unexpected(question.error());
+            if (!book.item(*key))
+                return wrong(member(at, QStringLiteral("key")),
+                    CodebookText::tr(
+                        "\"%1\" names the item \"%2\", which the codebook does not have.")
+                        .arg(member(at, QStringLiteral("key")), shown(*key)));
+            out.questions.insert(*key, *question);
+        }
+        return out;
+    }
+
     Result<ArticleItem> articleItem(const QJsonValue &v, const QString &path) const
     {
         auto o = object(v, path);
@@ -531,8 +656,51 @@ QJsonObject Codebook::toJson() const
             io.insert(QStringLiteral("recode"), recodeJson(item.recode));
         itemsJson.append(io);
     }
-    return QJsonObject {{QStringLiteral("name"), name},
-        {QStringLiteral("functions"), functionsJson}, {QStringLiteral("items"), itemsJson}};
+    QJsonObject out {{QStringLiteral("name"), name}, {QStringLiteral("functions"), functionsJson},
+        {QStringLiteral("items"), itemsJson}};
+    if (translations.isEmpty())
+        return out;
+    QJsonObject translationsJson;
+    for (auto it = translations.cbegin(); it != translations.cend(); ++it) {
+        QJsonObject t;
+        if (!it->name.isEmpty())
+            t.insert(QStringLiteral("name"), it->name);
+        QJsonArray fs;
+        for (FramingFunction f : kFramingFunctions) {
+            const auto ft = it->functions.constFind(f);
+            if (ft == it->functions.cend())
+                continue;
+            QJsonObject fo {{QStringLiteral("key"), functionKey(f)}};
+            if (!ft->label.isEmpty())
+                fo.insert(QStringLiteral("label"), ft->label);
+            if (!ft->definition.isEmpty())
+                fo.insert(QStringLiteral("definition"), ft->definition);
+            if (!ft->rules.isEmpty())
+                fo.insert(QStringLiteral("rules"), QJsonArray::fromStringList(ft->rules));
+            if (!ft->examples.isEmpty())
+                fo.insert(QStringLiteral("examples"), QJsonArray::fromStringList(ft->examples));
+            QJsonArray as;
+            for (const AttributeSpec &a : definition(f).attributes)
+                if (ft->attributeLabels.contains(a.key))
+                    as.append(QJsonObject {{QStringLiteral("key"), a.key},
+                        {QStringLiteral("label"), ft->attributeLabels.value(a.key)}});
+            if (!as.isEmpty())
+                fo.insert(QStringLiteral("attributes"), as);
+            fs.append(fo);
+        }
+        if (!fs.isEmpty())
+            t.insert(QStringLiteral("functions"), fs);
+        QJsonArray is;
+        for (const ArticleItem &item : items)
+            if (it->questions.contains(item.key))
+                is.append(QJsonObject {{QStringLiteral("key"), item.key},
+                    {QStringLiteral("question"), it->questions.value(item.key)}});
+        if (!is.isEmpty())
+            t.insert(QStringLiteral("items"), is);
+        translationsJson.insert(it.key(), t);
+    }
+    out.insert(QStringLiteral("translations"), translationsJson);
+    return out;
 }
 
 } // namespace fourfold

@@ -7,6 +7,7 @@
 #include "app/desktop/codebook_panel.h"
 #include "app/desktop/coding_session.h"
 #include "app/desktop/frame_card.h"
+#include "app/desktop/interface_language.h"
 #include "app/desktop/item_form.h"
 #include "app/desktop/span_editor.h"
 #include "app/desktop/span_quote.h"
@@ -596,4 +597,47 @@ TEST_CASE("the article list reads the same few statements for 6 and for 18 artic
     CHECK(counts[0][1] == counts[1][1]);
     CHECK(counts[1][0] > 0);
     CHECK(counts[1][0] <= 6);
+}
+
+TEST_CASE("a coder who works in German reads the codebook in German and answers with its keys")
+{
+    // The default codebook carries German and Dutch texts (Codebook::inLanguage); the desk shows
+    // those of the program's language, and what is stored keeps the codebook's keys and values.
+    ProjectFixture f;
+    f.importJsonl(kTwoArticles);
+    const ArticleId article = f.articleId(QStringLiteral("f1"));
+    f.addCoder(QStringLiteral("C01"));
+    auto coder = f.project.coderByPseudonym(QStringLiteral("C01"));
+    REQUIRE(coder);
+    const Codebook german = defaultCodebook().inLanguage(QStringLiteral("de"));
+    setInterfaceLanguage(QStringLiteral("de"));
+    CodingSession session(std::move(f.project), **coder);
+    setInterfaceLanguage(QString());
+    CHECK(session.codebook().definition(FramingFunction::Evaluation).label
+        == QStringLiteral("Moralische Bewertung"));
+
+    CodebookPanel panel;
+    panel.setCodebook(session.codebook());
+    panel.showFunction(FramingFunction::Remedy);
+    auto *text = panel.findChild<QTextBrowser *>();
+    REQUIRE(text);
+    CHECK(text->toPlainText().contains(german.definition(FramingFunction::Remedy).definition));
+    CHECK(text->toPlainText().contains(QStringLiteral("Handlungsempfehlung")));
+
+    REQUIRE(session.addSpan(article, FramingFunction::Evaluation, TextRange {108, 125}));
+    const AnnotationId id = session.lastAddedSpan();
+    SpanEditor editor(&session);
+    editor.setSpan(session.visibleAnnotations(article)[0], session.visibleAnnotations(article), {});
+    auto *object = childNamed<QComboBox>(editor, QStringLiteral("Was bewertet wird"));
+    object->setFocus();
+    QTest::keyClick(object, Qt::Key_Down); // not set → the first value
+    auto stored = session.project().annotation(id);
+    REQUIRE(stored);
+    CHECK(stored->content.attributes
+        == QJsonObject {{QStringLiteral("object"), QStringLiteral("government")}});
+
+    ItemForm items(&session);
+    items.setArticle(article, session.ownJudgements(article));
+    CHECK(childNamed<QComboBox>(
+        items, QStringLiteral("Welche Framing-Funktion dominiert den Artikel als Ganzes?")));
 }

@@ -132,7 +132,7 @@ TEST_CASE(
          "unknown key \"functions[3].defintion\""},
         {"an unknown key at the root", "\"name\": \"Test codebook\",",
          "\"name\": \"Test codebook\",\n  \"version\": 2,", "\"version\"",
-         "unknown key \"version\" (expected one of: name, functions, items)"},
+         "unknown key \"version\" (expected one of: name, functions, items, translations)"},
         {"a definition left out", ", \"definition\": \"What should be done.\"", "",
          "{\"key\": \"remedy\"", "\"functions[3].definition\" is missing"},
         {"a control character in a definition", "What goes wrong.", "What \\u0007goes wrong.",
@@ -215,4 +215,69 @@ TEST_CASE("Codebook keeps reading a stored version with control characters", "[m
     CHECK(stored.error().message
         == QStringLiteral(
             "codebook version 2: \"functions[0].definition\" must be a string, not a number."));
+}
+
+TEST_CASE("Codebook texts in another language replace the codebook's own and keep every key",
+    "[model][codebook]")
+{
+    // The translation form of README "The default codebook": what a language gives replaces the
+    // codebook's text, what it leaves out stays; keys, values and levels are never translated.
+    QByteArray json = kValid;
+    json.replace("\n}\n",
+        ",\n  \"translations\": {\"nl\": {\"name\": \"Testcodeboek\", \"functions\": [\n"
+        "    {\"key\": \"evaluation\", \"label\": \"Evaluatie\", \"rules\": [\"Codeer "
+        "oordelen.\"],\n"
+        "     \"attributes\": [{\"key\": \"polarity\", \"label\": \"Polariteit\"}]}],\n"
+        "    \"items\": [{\"key\": \"dominant_function\", \"question\": \"Welke "
+        "functie?\"}]}}\n}\n");
+    auto book = Codebook::fromJson(json, QStringLiteral("nl.json"));
+    INFO((book ? QString() : book.error().toString()).toStdString());
+    REQUIRE(book);
+    REQUIRE(book->translations.contains(QStringLiteral("nl")));
+
+    const Codebook dutch = book->inLanguage(QStringLiteral("nl_BE"));
+    CHECK(dutch.name == "Testcodeboek");
+    const FunctionDefinition &evaluation = dutch.definition(FramingFunction::Evaluation);
+    CHECK(evaluation.label == "Evaluatie");
+    CHECK(evaluation.definition == "A judgement.\nOn two lines."); // not given: the codebook's
+    CHECK(evaluation.rules == QStringList {QStringLiteral("Codeer oordelen.")});
+    REQUIRE(evaluation.attributes.size() == 1);
+    CHECK(evaluation.attributes[0].label == "Polariteit");
+    CHECK(evaluation.attributes[0].key == "polarity");
+    CHECK(evaluation.attributes[0].values
+        == QStringList {QStringLiteral("negative"), QStringLiteral("positive")});
+    CHECK(dutch.items[0].question == "Welke functie?");
+    CHECK(dutch.items[0].values == book->items[0].values);
+    CHECK(dutch.definition(FramingFunction::Problem).label == "Problem");
+    // A language without texts is the codebook itself.
+    CHECK(book->inLanguage(QStringLiteral("fr")).definition(FramingFunction::Evaluation).label
+        == book->definition(FramingFunction::Evaluation).label);
+    // Written back and read again: the same texts.
+    auto again = Codebook::fromJson(QJsonDocument(book->toJson()).toJson(), QStringLiteral("x"));
+    REQUIRE(again);
+    CHECK(again->toJson() == book->toJson());
+    CHECK(again->inLanguage(QStringLiteral("nl")).definition(FramingFunction::Evaluation).label
+        == "Evaluatie");
+
+    // What a language names must be the codebook's.
+    const std::vector<std::pair<QByteArray, const char *>> bad {
+        {"\"nl\": {\"functions\": [{\"key\": \"frame\"}]}", "not one of the four functions"},
+        {"\"nl\": {\"functions\": [{\"key\": \"cause\", \"attributes\": [{\"key\": \"blame\", "
+         "\"label\": \"Schuld\"}]}]}",
+            "names the attribute \"blame\", which cause does not have"},
+        {"\"nl\": {\"items\": [{\"key\": \"tone\", \"question\": \"Toon?\"}]}",
+            "names the item \"tone\", which the codebook does not have"},
+        {"\"dutch\": {\"name\": \"x\"}", "is not a language code"},
+        {"\"nl\": {\"name\": \"x\", \"values\": []}", "unknown key \"translations.nl.values\""},
+        {"\"nl\": {\"functions\": [{\"key\": \"cause\", \"label\": 5}]}", "must be a string"},
+    };
+    for (const auto &[translations, message] : bad) {
+        QByteArray wrong = kValid;
+        wrong.replace("\n}\n", ",\n  \"translations\": {" + translations + "}\n}\n");
+        auto refused = Codebook::fromJson(wrong, QStringLiteral("bad.json"));
+        INFO(translations.toStdString());
+        REQUIRE_FALSE(refused);
+        CHECK(refused.error().message.contains(QString::fromUtf8(message)));
+        CHECK(refused.error().line > 0);
+    }
 }

@@ -169,3 +169,32 @@ TEST_CASE("an edit that cannot get the write lock in time fails once and writes 
     // Once the other writer is done, the same edit lands.
     REQUIRE(f.project.apply(edit));
 }
+
+TEST_CASE("the default codebook speaks Dutch and German wherever it speaks English")
+{
+    // Every text of the default codebook (name, labels, definitions, each rule and example,
+    // attribute labels, the item's question) has a Dutch and a German version, rule for rule.
+    ProjectFixture f;
+    auto book = f.project.codebook();
+    REQUIRE(book);
+    for (const QString &language : {QStringLiteral("nl"), QStringLiteral("de")}) {
+        INFO(language.toStdString());
+        REQUIRE(book->translations.contains(language));
+        const CodebookTexts &t = book->translations.value(language);
+        CHECK_FALSE(t.name.isEmpty());
+        for (const FunctionDefinition &def : book->functions) {
+            INFO(functionKey(def.function).toStdString());
+            REQUIRE(t.functions.contains(def.function));
+            const FunctionTexts &ft = t.functions.value(def.function);
+            CHECK_FALSE(ft.label.isEmpty());
+            CHECK_FALSE(ft.definition.isEmpty());
+            CHECK(ft.rules.size() == def.rules.size());
+            CHECK(ft.examples.size() == def.examples.size());
+            for (const AttributeSpec &a : def.attributes)
+                CHECK(ft.attributeLabels.contains(a.key));
+            CHECK(ft.definition != def.definition);
+        }
+        for (const ArticleItem &item : book->items)
+            CHECK(t.questions.contains(item.key));
+    }
+}

@@ -11,6 +11,9 @@
 #include "tests/translations/ts_file.h"
 
 #include <QCoreApplication>
+#include <QJsonArray>
+#include <QJsonDocument>
+#include <QJsonObject>
 #include <QLibraryInfo>
 #include <QTranslator>
 
@@ -226,6 +229,25 @@ TEST_CASE("report --language writes the method text and tables in that language"
             CHECK(translated != source);
             CHECK(text.contains(translated.toHtmlEscaped()));
         }
+        // The variables carry the codebook's own texts in that language (the codebook file's
+        // "translations"), not the English labels.
+        const QJsonObject codebook = QJsonDocument::fromJson(
+            readFile(
+                QStringLiteral(FOURFOLD_SOURCE_DIR "/resources/codebook/default_codebook.json")))
+                                         .object();
+        const QJsonArray functions = codebook.value(QStringLiteral("translations"))
+                                         .toObject()
+                                         .value(lang)
+                                         .toObject()
+                                         .value(QStringLiteral("functions"))
+                                         .toArray();
+        REQUIRE(functions.size() == 4);
+        for (const QJsonValue &f : functions) {
+            const QString label = f.toObject().value(QStringLiteral("label")).toString();
+            INFO(label.toStdString());
+            CHECK(text.contains(label.toHtmlEscaped()));
+        }
+        CHECK_FALSE(text.contains(QStringLiteral("Treatment recommendation")));
     }
     const CliRun refused = runCli(QStringLiteral(FOURFOLD_CLI),
         {QStringLiteral("report"), project, QStringLiteral("--out"),

@@ -1,5 +1,6 @@
 #include "app/desktop/reliability/report_options_dialog.h"
 
+#include "app/desktop/interface_language.h"
 #include "app/desktop/reliability/reliability_job.h"
 #include "core/project/project.h"
 
@@ -89,6 +90,7 @@ ReportOptionsDialog::ReportOptionsDialog(const Project &project, QWidget *parent
 ReportOptions ReportOptionsDialog::options() const
 {
     ReportOptions o;
+    o.language = interfaceLanguage(); // the codebook's texts as the desk shows them
     o.unit = unitKindFromKey(m_unit->currentData().toString()).value_or(UnitKind::Sentence);
     o.phase = phaseFromKey(m_phase->currentData().toString());
     bool all = true;
