@@ -47,6 +47,24 @@ const char *columnsOf(ServerTable table)
     return "";
 }
 
+// `rows` (compact JSON objects) as one JSON array: the one parameter a batch statement binds.
+QByteArray jsonArrayOf(const QByteArrayList &rows)
+{
+    qsizetype bytes = 2;
+    for (const QByteArray &row : rows)
+        bytes += row.size() + 1;
+    QByteArray array;
+    array.reserve(bytes);
+    array += '[';
+    for (qsizetype i = 0; i < rows.size(); ++i) {
+        if (i)
+            array += ',';
+        array += rows[i];
+    }
+    array += ']';
+    return array;
+}
+
 } // namespace
 
 const char *serverTableName(ServerTable table)
@@ -91,15 +109,7 @@ Status insertServerRows(ServerConnection &conn, ServerTable table, const QByteAr
     const QString sql = QStringLiteral("INSERT INTO fourfold.%1 (%2) SELECT %2 FROM "
                                        "jsonb_populate_recordset(NULL::fourfold.%1, $1::jsonb)")
                             .arg(name, columns);
-    QByteArray array;
-    array.reserve(rows.size() * 2 + 2);
-    array += '[';
-    for (qsizetype i = 0; i < rows.size(); ++i) {
-        if (i)
-            array += ',';
-        array += rows[i];
-    }
-    array += ']';
+    const QByteArray array = jsonArrayOf(rows);
     return conn.run(sql, {array});
 }
 
@@ -131,13 +141,7 @@ Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByt
     const QStringList columns = QString::fromLatin1(columnsOf(table)).split(QStringLiteral(", "));
     if (table == ServerTable::GoldSource || table == ServerTable::Event) {
         // Rows without a uuid that never change: what the server has already stays.
-        QByteArray array = "[";
-        for (qsizetype i = 0; i < rows.size(); ++i) {
-            if (i)
-                array += ',';
-            array += rows[i];
-        }
-        array += ']';
+        const QByteArray array = jsonArrayOf(rows);
         return conn.run(QStringLiteral("INSERT INTO fourfold.%1 (%2) SELECT %2 FROM "
                                        "jsonb_populate_recordset(NULL::fourfold.%1, $1::jsonb) "
                                        "ON CONFLICT (%3) DO NOTHING")
@@ -161,13 +165,7 @@ Status upsertServerObjects(ServerConnection &conn, ServerTable table, const QByt
                        "jsonb_populate_recordset(NULL::fourfold.%1, $1::jsonb) "
                        "ON CONFLICT (uuid) DO UPDATE SET %3")
             .arg(name, columns.join(QStringLiteral(", ")), sets.join(QStringLiteral(", ")));
-    QByteArray array = "[";
-    for (qsizetype i = 0; i < rows.size(); ++i) {
-        if (i)
-            array += ',';
-        array += rows[i];
-    }
-    array += ']';
+    const QByteArray array = jsonArrayOf(rows);
     if (table == ServerTable::Assignment) {
         // A coder may change its assignments but never insert one, and INSERT ... ON CONFLICT
         // needs the insert policy even where it updates: update first, then insert what is new
@@ -219,13 +217,7 @@ Status sendCodingTimes(ServerConnection &conn, const QByteArrayList &rows)
 {
     if (rows.isEmpty())
         return {};
-    QByteArray array = "[";
-    for (qsizetype i = 0; i < rows.size(); ++i) {
-        if (i)
-            array += ',';
-        array += rows[i];
-    }
-    array += ']';
+    const QByteArray array = jsonArrayOf(rows);
     return conn.run(
         QStringLiteral("INSERT INTO fourfold.coding_time (assignment, source, seconds) SELECT "
                        "assignment, source, seconds FROM jsonb_populate_recordset(NULL::"

@@ -25,25 +25,6 @@ using namespace fourfold::test;
 
 namespace {
 
-QStringList objectsOf(Project &project, const QString &coderUuid)
-{
-    auto rows = store::portableRows(databaseForTesting(project), coderUuid);
-    REQUIRE(rows);
-    QStringList out;
-    for (const store::PortableRow &row : *rows)
-        out << QStringLiteral("%1 %2 %3").arg(row.key(), row.digest()).arg(row.seconds);
-    out.sort();
-    return out;
-}
-
-SyncReport synced(Project &project)
-{
-    auto r = TeamProject::sync(project);
-    INFO((r ? QString() : r.error().toString()).toStdString());
-    REQUIRE(r);
-    return *r;
-}
-
 // C01's working file with one new span on f1 and 30 s of coding time there, not yet synced.
 struct CoderWithWork {
     PublishedProject &p;
@@ -110,7 +91,8 @@ struct CoderWithWork {
         synced(*c1);
         CHECK(onServer() == "4 30"); // three published spans and the new one; 30 s once
         synced(*p.main);
-        CHECK(objectsOf(*p.main, uuid) == objectsOf(*c1, uuid));
+        CHECK(objectsOf(databaseForTesting(*p.main), uuid)
+            == objectsOf(databaseForTesting(*c1), uuid));
         // A further round moves nothing.
         for (Project *f : {&*c1, &*p.main}) {
             const SyncReport r = synced(*f);

@@ -22,16 +22,6 @@ using namespace fourfold::test;
 namespace {
 
 // The portable rows of `coderUuid` as "KEY DIGEST SECONDS" lines.
-QStringList objectsOf(const Database &db, const QString &coderUuid)
-{
-    auto rows = store::portableRows(db, coderUuid);
-    REQUIRE(rows);
-    QStringList out;
-    for (const store::PortableRow &row : *rows)
-        out << QStringLiteral("%1 %2 %3").arg(row.key(), row.digest()).arg(row.seconds);
-    out.sort();
-    return out;
-}
 
 Project joined(PublishedProject &p, const QString &pseudonym, const QString &file)
 {

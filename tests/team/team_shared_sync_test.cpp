@@ -28,25 +28,6 @@ using namespace fourfold::test;
 
 namespace {
 
-Project joinAs(PublishedProject &p, const QString &pseudonym, const QString &name)
-{
-    const QString file = p.dir.filePath(name);
-    auto r = TeamProject::join(p.loginOf(pseudonym), pseudonym, file);
-    INFO((r ? QString() : r.error().toString()).toStdString());
-    REQUIRE(r);
-    auto project = Project::open(file);
-    REQUIRE(project);
-    return std::move(*project);
-}
-
-SyncReport synced(Project &project)
-{
-    auto r = TeamProject::sync(project);
-    INFO((r ? QString() : r.error().toString()).toStdString());
-    REQUIRE(r);
-    return *r;
-}
-
 // Every row of `kind` in the file, whole, with sorted keys (the server keeps JSON as jsonb, which
 // orders keys its own way), sorted (row ids are not in them).
 QStringList sharedRows(Project &project, store::SharedKind kind)

@@ -23,36 +23,6 @@ using namespace fourfold::test;
 
 namespace {
 
-QStringList objectsOf(const Database &db, const QString &coderUuid)
-{
-    auto rows = store::portableRows(db, coderUuid);
-    REQUIRE(rows);
-    QStringList out;
-    for (const store::PortableRow &row : *rows)
-        out << QStringLiteral("%1 %2 %3").arg(row.key(), row.digest()).arg(row.seconds);
-    out.sort();
-    return out;
-}
-
-Project joinAs(PublishedProject &p, const QString &pseudonym)
-{
-    const QString file = p.dir.filePath(pseudonym + QStringLiteral(".fourfold"));
-    auto r = TeamProject::join(p.loginOf(pseudonym), pseudonym, file);
-    INFO((r ? QString() : r.error().toString()).toStdString());
-    REQUIRE(r);
-    auto project = Project::open(file);
-    REQUIRE(project);
-    return std::move(*project);
-}
-
-SyncReport synced(Project &project)
-{
-    auto r = TeamProject::sync(project);
-    INFO((r ? QString() : r.error().toString()).toStdString());
-    REQUIRE(r);
-    return *r;
-}
-
 CoderId idOf(Project &project, const QString &pseudonym)
 {
     auto c = project.coderByPseudonym(pseudonym);
