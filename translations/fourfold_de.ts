@@ -213,6 +213,14 @@
         <source>The answer could not be stored: its article or coder does not exist.</source>
         <translation>Die Antwort konnte nicht gespeichert werden: Ihr Artikel oder ihre codierende Person existiert nicht.</translation>
     </message>
+    <message>
+        <source>Withdraw answer &quot;%1&quot;</source>
+        <translation>Antwort „%1“ zurückziehen</translation>
+    </message>
+    <message>
+        <source>There is no answer to &quot;%1&quot; to withdraw.</source>
+        <translation>Es gibt keine Antwort auf „%1“, die zurückgezogen werden könnte.</translation>
+    </message>
 </context>
 <context>
     <name>AnnotationTable</name>
@@ -2915,6 +2923,10 @@
         <source>foreign_key_check: row %1 of %2 refers to a missing row of %3</source>
         <translation>foreign_key_check: Zeile %1 von %2 verweist auf eine fehlende Zeile von %3</translation>
     </message>
+    <message>
+        <source>The assignment is not in the project.</source>
+        <translation>Die Zuweisung ist nicht im Projekt.</translation>
+    </message>
 </context>
 <context>
     <name>ProjectText</name>
@@ -4499,6 +4511,14 @@
         <source>Name the lead whose training coding is the master: there is not exactly one lead with training annotations.</source>
         <translation>Nennen Sie die Leitung, deren Trainingscodierung die Vorlage ist: es gibt nicht genau eine Leitung mit Trainingsannotationen.</translation>
     </message>
+    <message>
+        <source>The %1 phase has no subsample to withdraw.</source>
+        <translation>Die Phase %1 hat keine Teilstichprobe, die zurückgezogen werden könnte.</translation>
+    </message>
+    <message>
+        <source>Withdraw the %1 subsample</source>
+        <translation>Teilstichprobe der Phase %1 zurückziehen</translation>
+    </message>
 </context>
 <context>
     <name>StudyEditText</name>
@@ -4506,6 +4526,18 @@
         <location filename="../core/project/study_edits.cpp" line="39"/>
         <source>The project already holds %1.</source>
         <translation>Das Projekt enthält %1 bereits.</translation>
+    </message>
+    <message>
+        <source>The %1 phase has no subsample to withdraw.</source>
+        <translation>Die Phase %1 hat keine Teilstichprobe, die zurückgezogen werden könnte.</translation>
+    </message>
+    <message>
+        <source>The %1 subsample cannot be withdrawn: coding has started on %2 of its %3 assignments (spans, answers, coding time, or a status of started or done). A draw can be withdrawn only before anyone codes it.</source>
+        <translation>Die Teilstichprobe der Phase %1 kann nicht zurückgezogen werden: bei %2 ihrer %3 Zuweisungen hat das Codieren begonnen (Textstellen, Antworten, Codierzeit oder der Status begonnen oder fertig). Eine Ziehung kann nur zurückgezogen werden, bevor jemand sie codiert.</translation>
+    </message>
+    <message>
+        <source>An edit that was never applied cannot be undone.</source>
+        <translation>Eine Änderung, die nie ausgeführt wurde, kann nicht rückgängig gemacht werden.</translation>
     </message>
 </context>
 <context>
@@ -5371,8 +5403,8 @@
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="316"/>
-        <source>Assign articles to coders per phase (training, pilot, reliability, production), draw the reliability subsample with a recorded seed, and follow progress. Give one of --draw, --rest, --articles, --show, --progress, --training, --effort.</source>
-        <translation>Artikel je Phase (training, pilot, reliability, production) Codierenden zuweisen, die Reliabilitäts-Teilstichprobe mit gespeichertem Seed ziehen und den Fortschritt verfolgen. Geben Sie eine der Optionen --draw, --rest, --articles, --show, --progress, --training, --effort an.</translation>
+        <source>Assign articles to coders per phase (training, pilot, reliability, production), draw the reliability subsample with a recorded seed, and follow progress. Give one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
+        <translation>Artikel je Phase (training, pilot, reliability, production) Codierenden zuweisen, die Reliabilitäts-Teilstichprobe mit gespeichertem Seed ziehen und den Fortschritt verfolgen. Geben Sie eine der Optionen --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort an.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="324"/>
@@ -5389,8 +5421,8 @@
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="332"/>
-        <source>give exactly one of --draw, --rest, --articles, --show, --progress, --training, --effort.</source>
-        <translation>geben Sie genau eine der Optionen --draw, --rest, --articles, --show, --progress, --training, --effort an.</translation>
+        <source>give exactly one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
+        <translation>geben Sie genau eine der Optionen --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort an.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="350"/>
@@ -7344,6 +7376,17 @@
         <location filename="../app/cli/command_team.cpp" line="304"/>
         <source>  people    Add a person to a running team project, or disable one.</source>
         <translation>  people    Einem laufenden Teamprojekt eine Person hinzufügen oder eine deaktivieren.</translation>
+    </message>
+    <message>
+        <source>Withdraw the committed subsample of this phase (reliability or pilot) while nobody has coded any of its assignments yet.</source>
+        <translation>Die gespeicherte Teilstichprobe dieser Phase (reliability oder pilot) zurückziehen, solange noch niemand eine ihrer Zuweisungen codiert hat.</translation>
+    </message>
+    <message numerus="yes">
+        <source>The %1 subsample is withdrawn: %n assignment(s) removed.</source>
+        <translation>
+            <numerusform>Die Teilstichprobe der Phase %1 ist zurückgezogen: %n Zuweisung entfernt.</numerusform>
+            <numerusform>Die Teilstichprobe der Phase %1 ist zurückgezogen: %n Zuweisungen entfernt.</numerusform>
+        </translation>
     </message>
 </context>
 <context>
@@ -9846,6 +9889,18 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <source>not answered</source>
         <translation>nicht beantwortet</translation>
     </message>
+    <message>
+        <source>&amp;Withdraw answer</source>
+        <translation>Antwort &amp;zurückziehen</translation>
+    </message>
+    <message>
+        <source>Withdraw the answer: the item is unanswered again</source>
+        <translation>Antwort zurückziehen: die Frage ist wieder unbeantwortet</translation>
+    </message>
+    <message>
+        <source>Withdraw answer: %1 (%2)</source>
+        <translation>Antwort zurückziehen: %1 (%2)</translation>
+    </message>
 </context>
 <context>
     <name>fourfold::LeadWindows</name>
@@ -10786,6 +10841,10 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <location filename="../app/desktop/reading_view.cpp" line="852"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Ctrl+Left/Right and Ctrl+Shift+Left/Right to resize.</source>
         <translation>Gewählte Textstelle: %1, „%2“. Drücken Sie 1 bis 4 zum Ändern der Funktion, Entf zum Löschen, Strg+Links/Rechts und Strg+Umschalt+Links/Rechts zum Ändern der Länge.</translation>
+    </message>
+    <message>
+        <source>%1 · %2</source>
+        <translation>%1 · %2</translation>
     </message>
 </context>
 <context>
@@ -11748,6 +11807,10 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>
+    <message>
+        <source>Remove link: %1</source>
+        <translation>Verknüpfung entfernen: %1</translation>
+    </message>
 </context>
 <context>
     <name>fourfold::StudyDesignWindow</name>
@@ -12006,8 +12069,8 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="495"/>
-        <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded and cannot be drawn again.</source>
-        <translation>&lt;b&gt;Stichprobe der Phase %1 gezogen am %2.&lt;/b&gt; %3 Die Ziehung ist gespeichert und kann nicht erneut gezogen werden.</translation>
+        <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded; it can be withdrawn until someone codes one of its articles, and then drawn again.</source>
+        <translation>&lt;b&gt;Stichprobe der Phase %1 gezogen am %2.&lt;/b&gt; %3 Die Ziehung ist gespeichert; sie kann zurückgezogen werden, bis jemand einen ihrer Artikel codiert, und dann neu gezogen werden.</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="501"/>
@@ -12391,6 +12454,21 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         <source>What changed, and why?</source>
         <translation>Was hat sich geändert, und warum?</translation>
     </message>
+    <message>
+        <source>Withdraw the draw</source>
+        <translation>Ziehung zurückziehen</translation>
+    </message>
+    <message>
+        <source>Remove the committed draw and its assignments, so that the phase can be drawn again; only while nobody has coded any of its articles.</source>
+        <translation>Die gespeicherte Ziehung und ihre Zuweisungen entfernen, damit die Phase neu gezogen werden kann; nur solange niemand einen ihrer Artikel codiert hat.</translation>
+    </message>
+    <message numerus="yes">
+        <source>&lt;b&gt;The %1 sample was withdrawn&lt;/b&gt;: %n assignment(s) removed, the withdrawal recorded in the project&apos;s log. The phase can be drawn again.</source>
+        <translation>
+            <numerusform>&lt;b&gt;Die Stichprobe der Phase %1 wurde zurückgezogen&lt;/b&gt;: %n Zuweisung entfernt, das Zurückziehen im Protokoll des Projekts festgehalten. Die Phase kann neu gezogen werden.</numerusform>
+            <numerusform>&lt;b&gt;Die Stichprobe der Phase %1 wurde zurückgezogen&lt;/b&gt;: %n Zuweisungen entfernt, das Zurückziehen im Protokoll des Projekts festgehalten. Die Phase kann neu gezogen werden.</numerusform>
+        </translation>
+    </message>
 </context>
 <context>
     <name>fourfold::TrainingFeedbackDialog</name>
@@ -12552,6 +12630,57 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         <location filename="../app/desktop/main.cpp" line="42"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
+    </message>
+</context>
+<context>
+    <name>fourfold::CoderLegend</name>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="15"/>
+        <source>Coders of the spans shown</source>
+        <translation>Codierende der gezeigten Textstellen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="21"/>
+        <source>Each span&apos;s badge carries its coder&apos;s pseudonym after the letter.</source>
+        <translation>Das Kennzeichen jeder Textstelle trägt nach dem Buchstaben das Pseudonym der oder des Codierenden.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="23"/>
+        <source>Show the spans of</source>
+        <translation>Textstellen zeigen von</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="24"/>
+        <source>&amp;Show spans of:</source>
+        <translation>Textstellen &amp;zeigen von:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="46"/>
+        <source>All coders</source>
+        <translation>Alle Codierenden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="68"/>
+        <source>unknown</source>
+        <translation>unbekannt</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/coder_legend.cpp" line="74"/>
+        <source>&lt;b&gt;%1&lt;/b&gt; %n span(s)</source>
+        <translation>
+            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n Textstelle</numerusform>
+            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n Textstellen</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="80"/>
+        <source>No coder has spans on this article.</source>
+        <translation>Niemand hat in diesem Artikel Textstellen codiert.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="81"/>
+        <source>Spans by: %1</source>
+        <translation>Textstellen von: %1</translation>
     </message>
 </context>
 </TS>

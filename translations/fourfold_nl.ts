@@ -213,6 +213,14 @@
         <source>The answer could not be stored: its article or coder does not exist.</source>
         <translation>Het antwoord kon niet worden opgeslagen: het artikel of de codeur ervan bestaat niet.</translation>
     </message>
+    <message>
+        <source>Withdraw answer &quot;%1&quot;</source>
+        <translation>Antwoord ‘%1’ intrekken</translation>
+    </message>
+    <message>
+        <source>There is no answer to &quot;%1&quot; to withdraw.</source>
+        <translation>Er is geen antwoord op ‘%1’ om in te trekken.</translation>
+    </message>
 </context>
 <context>
     <name>AnnotationTable</name>
@@ -2915,6 +2923,10 @@
         <source>foreign_key_check: row %1 of %2 refers to a missing row of %3</source>
         <translation>foreign_key_check: rij %1 van %2 verwijst naar een ontbrekende rij van %3</translation>
     </message>
+    <message>
+        <source>The assignment is not in the project.</source>
+        <translation>De toewijzing staat niet in het project.</translation>
+    </message>
 </context>
 <context>
     <name>ProjectText</name>
@@ -4499,6 +4511,14 @@
         <source>Name the lead whose training coding is the master: there is not exactly one lead with training annotations.</source>
         <translation>Noem de coördinator wiens trainingscodering de maatstaf is: er is niet precies één coördinator met trainingsannotaties.</translation>
     </message>
+    <message>
+        <source>The %1 phase has no subsample to withdraw.</source>
+        <translation>De fase %1 heeft geen deelsteekproef om in te trekken.</translation>
+    </message>
+    <message>
+        <source>Withdraw the %1 subsample</source>
+        <translation>Deelsteekproef van fase %1 intrekken</translation>
+    </message>
 </context>
 <context>
     <name>StudyEditText</name>
@@ -4506,6 +4526,18 @@
         <location filename="../core/project/study_edits.cpp" line="39"/>
         <source>The project already holds %1.</source>
         <translation>Het project bevat %1 al.</translation>
+    </message>
+    <message>
+        <source>The %1 phase has no subsample to withdraw.</source>
+        <translation>De fase %1 heeft geen deelsteekproef om in te trekken.</translation>
+    </message>
+    <message>
+        <source>The %1 subsample cannot be withdrawn: coding has started on %2 of its %3 assignments (spans, answers, coding time, or a status of started or done). A draw can be withdrawn only before anyone codes it.</source>
+        <translation>De deelsteekproef van fase %1 kan niet worden ingetrokken: bij %2 van haar %3 toewijzingen is het coderen begonnen (fragmenten, antwoorden, codeertijd, of de status begonnen of klaar). Een trekking kan alleen worden ingetrokken voordat iemand haar codeert.</translation>
+    </message>
+    <message>
+        <source>An edit that was never applied cannot be undone.</source>
+        <translation>Een wijziging die nooit is uitgevoerd, kan niet ongedaan worden gemaakt.</translation>
     </message>
 </context>
 <context>
@@ -5371,8 +5403,8 @@
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="316"/>
-        <source>Assign articles to coders per phase (training, pilot, reliability, production), draw the reliability subsample with a recorded seed, and follow progress. Give one of --draw, --rest, --articles, --show, --progress, --training, --effort.</source>
-        <translation>Artikelen per fase (training, pilot, reliability, production) aan codeurs toewijzen, de betrouwbaarheidsdeelsteekproef met een vastgelegde seed trekken en de voortgang volgen. Geef een van --draw, --rest, --articles, --show, --progress, --training, --effort.</translation>
+        <source>Assign articles to coders per phase (training, pilot, reliability, production), draw the reliability subsample with a recorded seed, and follow progress. Give one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
+        <translation>Artikelen per fase (training, pilot, reliability, production) aan codeurs toewijzen, de betrouwbaarheidsdeelsteekproef met een vastgelegde seed trekken en de voortgang volgen. Geef een van --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="324"/>
@@ -5389,8 +5421,8 @@
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="332"/>
-        <source>give exactly one of --draw, --rest, --articles, --show, --progress, --training, --effort.</source>
-        <translation>geef precies een van --draw, --rest, --articles, --show, --progress, --training, --effort.</translation>
+        <source>give exactly one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
+        <translation>geef precies een van --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</translation>
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="350"/>
@@ -7344,6 +7376,17 @@
         <location filename="../app/cli/command_team.cpp" line="304"/>
         <source>  people    Add a person to a running team project, or disable one.</source>
         <translation>  people    Een persoon toevoegen aan een lopend teamproject, of een persoon uitschakelen.</translation>
+    </message>
+    <message>
+        <source>Withdraw the committed subsample of this phase (reliability or pilot) while nobody has coded any of its assignments yet.</source>
+        <translation>De vastgelegde deelsteekproef van deze fase (reliability of pilot) intrekken zolang nog niemand een van haar toewijzingen heeft gecodeerd.</translation>
+    </message>
+    <message numerus="yes">
+        <source>The %1 subsample is withdrawn: %n assignment(s) removed.</source>
+        <translation>
+            <numerusform>De deelsteekproef van fase %1 is ingetrokken: %n toewijzing verwijderd.</numerusform>
+            <numerusform>De deelsteekproef van fase %1 is ingetrokken: %n toewijzingen verwijderd.</numerusform>
+        </translation>
     </message>
 </context>
 <context>
@@ -9846,6 +9889,18 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <source>not answered</source>
         <translation>niet beantwoord</translation>
     </message>
+    <message>
+        <source>&amp;Withdraw answer</source>
+        <translation>Antwoord &amp;intrekken</translation>
+    </message>
+    <message>
+        <source>Withdraw the answer: the item is unanswered again</source>
+        <translation>Antwoord intrekken: de vraag is weer onbeantwoord</translation>
+    </message>
+    <message>
+        <source>Withdraw answer: %1 (%2)</source>
+        <translation>Antwoord intrekken: %1 (%2)</translation>
+    </message>
 </context>
 <context>
     <name>fourfold::LeadWindows</name>
@@ -10786,6 +10841,10 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <location filename="../app/desktop/reading_view.cpp" line="852"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Ctrl+Left/Right and Ctrl+Shift+Left/Right to resize.</source>
         <translation>Geselecteerd fragment: %1, ‘%2’. Druk op 1 tot 4 om de functie te wijzigen, Delete om te verwijderen, Ctrl+Links/Rechts en Ctrl+Shift+Links/Rechts om de grootte te wijzigen.</translation>
+    </message>
+    <message>
+        <source>%1 · %2</source>
+        <translation>%1 · %2</translation>
     </message>
 </context>
 <context>
@@ -11748,6 +11807,10 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>
+    <message>
+        <source>Remove link: %1</source>
+        <translation>Koppeling verwijderen: %1</translation>
+    </message>
 </context>
 <context>
     <name>fourfold::StudyDesignWindow</name>
@@ -12006,8 +12069,8 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="495"/>
-        <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded and cannot be drawn again.</source>
-        <translation>&lt;b&gt;Steekproef voor fase %1 getrokken op %2.&lt;/b&gt; %3 De trekking is vastgelegd en kan niet opnieuw worden getrokken.</translation>
+        <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded; it can be withdrawn until someone codes one of its articles, and then drawn again.</source>
+        <translation>&lt;b&gt;Steekproef voor fase %1 getrokken op %2.&lt;/b&gt; %3 De trekking is vastgelegd; ze kan worden ingetrokken tot iemand een van haar artikelen codeert, en daarna opnieuw worden getrokken.</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="501"/>
@@ -12391,6 +12454,21 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         <source>What changed, and why?</source>
         <translation>Wat is er veranderd, en waarom?</translation>
     </message>
+    <message>
+        <source>Withdraw the draw</source>
+        <translation>Trekking intrekken</translation>
+    </message>
+    <message>
+        <source>Remove the committed draw and its assignments, so that the phase can be drawn again; only while nobody has coded any of its articles.</source>
+        <translation>De vastgelegde trekking en haar toewijzingen verwijderen, zodat de fase opnieuw kan worden getrokken; alleen zolang niemand een van haar artikelen heeft gecodeerd.</translation>
+    </message>
+    <message numerus="yes">
+        <source>&lt;b&gt;The %1 sample was withdrawn&lt;/b&gt;: %n assignment(s) removed, the withdrawal recorded in the project&apos;s log. The phase can be drawn again.</source>
+        <translation>
+            <numerusform>&lt;b&gt;De steekproef voor fase %1 is ingetrokken&lt;/b&gt;: %n toewijzing verwijderd, de intrekking vastgelegd in het logboek van het project. De fase kan opnieuw worden getrokken.</numerusform>
+            <numerusform>&lt;b&gt;De steekproef voor fase %1 is ingetrokken&lt;/b&gt;: %n toewijzingen verwijderd, de intrekking vastgelegd in het logboek van het project. De fase kan opnieuw worden getrokken.</numerusform>
+        </translation>
+    </message>
 </context>
 <context>
     <name>fourfold::TrainingFeedbackDialog</name>
@@ -12552,6 +12630,57 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         <location filename="../app/desktop/main.cpp" line="42"/>
         <source>Cannot open project</source>
         <translation>Project kan niet worden geopend</translation>
+    </message>
+</context>
+<context>
+    <name>fourfold::CoderLegend</name>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="15"/>
+        <source>Coders of the spans shown</source>
+        <translation>Codeurs van de getoonde fragmenten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="21"/>
+        <source>Each span&apos;s badge carries its coder&apos;s pseudonym after the letter.</source>
+        <translation>Het label van elk fragment draagt na de letter het pseudoniem van de codeur.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="23"/>
+        <source>Show the spans of</source>
+        <translation>Fragmenten tonen van</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="24"/>
+        <source>&amp;Show spans of:</source>
+        <translation>Fragmenten &amp;tonen van:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="46"/>
+        <source>All coders</source>
+        <translation>Alle codeurs</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="68"/>
+        <source>unknown</source>
+        <translation>onbekend</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/coder_legend.cpp" line="74"/>
+        <source>&lt;b&gt;%1&lt;/b&gt; %n span(s)</source>
+        <translation>
+            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n fragment</numerusform>
+            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n fragmenten</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="80"/>
+        <source>No coder has spans on this article.</source>
+        <translation>Geen codeur heeft fragmenten in dit artikel.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="81"/>
+        <source>Spans by: %1</source>
+        <translation>Fragmenten van: %1</translation>
     </message>
 </context>
 </TS>

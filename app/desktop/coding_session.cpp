@@ -52,6 +52,24 @@ void CodingSession::setShowAllCoders(bool on)
         emit errorOccurred(st.error().toString());
 }
 
+void CodingSession::setCoderFilter(CoderId coder)
+{
+    m_document.setCoderFilter(coder);
+    if (m_document.isOpen())
+        emit articleChanged(m_document.id());
+}
+
+const QHash<qint64, QString> &CodingSession::pseudonyms() const
+{
+    if (!m_pseudonyms) {
+        m_pseudonyms.emplace();
+        if (auto coders = m_project.coders())
+            for (const Coder &c : *coders)
+                m_pseudonyms->insert(c.id.value, c.pseudonym);
+    }
+    return *m_pseudonyms;
+}
+
 Status CodingSession::openDocument(ArticleId article)
 {
     return m_document.open(article, showsAllCoders());
@@ -59,6 +77,8 @@ Status CodingSession::openDocument(ArticleId article)
 
 void CodingSession::changed(ArticleId article, ArticleDocument::Parts touched)
 {
+    if (!article.isValid())
+        m_pseudonyms.reset(); // an edit about no article may be People's: read the names again
     if (m_document.isOpen() && m_document.id() == article) {
         if (auto st = m_document.reload(touched); !st)
             emit errorOccurred(st.error().toString());
@@ -293,6 +313,13 @@ Status CodingSession::markDone(ArticleId article)
 
 void CodingSession::addCodingTime(ArticleId article, qint64 seconds)
 {
+Status CodingSession::withdrawAnswer(ArticleId article, const QString &itemKey)
+{
+    return push(
+        std::make_unique<WithdrawJudgementEdit>(article, m_coder.id, itemKey, phaseOf(article)),
+        article, ArticleDocument::Part::Answers);
+}
+
     if (m_project.isReadOnly())
         return; // reading a read-only file is not coding time to record
     if (auto st = m_project.addCodingTime(article, m_coder.id, seconds); !st) {

@@ -9,6 +9,7 @@
 #include "core/project/people.h"
 #include "core/project/project.h"
 
+#include <QHash>
 #include <QObject>
 #include <QUndoStack>
 
@@ -41,6 +42,14 @@ public:
     // Leads may show every coder's spans on the desk; coders never can.
     bool showsAllCoders() const { return isLead() && m_showAll; }
     void setShowAllCoders(bool on);
+    // With every coder's spans shown: only those of `coder` (an invalid id: every coder's), on
+    // every article opened until it changes; emits articleChanged for the open article.
+    void setCoderFilter(CoderId coder);
+    CoderId coderFilter() const { return m_document.coderFilter(); }
+    // Every person's pseudonym by coder id (the names stay in the project): what the all-coders
+    // view labels spans with. Read when first asked and again after an edit about no article
+    // (People's changes) or its undo.
+    const QHash<qint64, QString> &pseudonyms() const;
 
     // The article open on the desk, kept up to date by every change made through the session
     // (and its undo and redo): views read it instead of the project.
@@ -73,6 +82,9 @@ public:
     // Removes link `id` of a span of `article` (undoable).
     Status unlinkSpans(LinkId id, ArticleId article);
     Status answerItem(ArticleId article, const QString &itemKey, const QString &value);
+    // Withdraws this person's answer to `itemKey` on `article`: the item is unanswered again
+    // (undoable).
+    Status withdrawAnswer(ArticleId article, const QString &itemKey);
     Status markDone(ArticleId article);
     // Records active coding time (not undoable, not a user edit).
     void addCodingTime(ArticleId article, qint64 seconds);
@@ -126,6 +138,7 @@ private:
     ArticleDocument m_document {m_project, m_coder};
     struct Unsaved;
     std::unique_ptr<Unsaved> m_unsaved;
+    mutable std::optional<QHash<qint64, QString>> m_pseudonyms;
 };
 
 } // namespace fourfold

@@ -4,7 +4,7 @@
 
 #include <QComboBox>
 #include <QLabel>
-#include <QStandardItemModel>
+#include <QMenu>
 #include <QVBoxLayout>
 
 namespace fourfold {
@@ -44,6 +44,11 @@ ItemForm::ItemForm(CodingSession *session, QWidget *parent)
                 if (!session->answerItem(article, key, value))
                     setArticle(m_article, m_judgements);
             });
+        connect(this, &ItemForm::answerWithdrawn, this,
+            [this, session](ArticleId article, const QString &key) {
+                if (!session->withdrawAnswer(article, key))
+                    setArticle(m_article, m_judgements);
+            });
         setCodebook(session->codebook());
     } else {
         setCodebook(Codebook {});
@@ -74,11 +79,23 @@ void ItemForm::setCodebook(const Codebook &codebook)
         m_questions->addWidget(question);
         m_questions->addWidget(values);
         m_questions->addSpacing(fontMetrics().height() / 3);
-        m_rows.push_back(Row {item.key, values});
+        m_rows.push_back(Row {item.key, item.question, values});
     }
-    for (size_t i = 0; i < m_rows.size(); ++i)
-        connect(m_rows[i].values, &QComboBox::activated, this,
+    for (size_t i = 0; i < m_rows.size(); ++i) {
+        QComboBox *values = m_rows[i].values;
+        connect(values, &QComboBox::activated, this,
             [this, i](int index) { choose(m_rows[i], index); });
+        values->setContextMenuPolicy(Qt::CustomContextMenu);
+        connect(values, &QWidget::customContextMenuRequested, this,
+            [this, i, values](const QPoint &pos) {
+                QMenu menu(this);
+                const QString key = m_rows[i].key;
+                QAction *withdrawing =
+                    menu.addAction(tr("&Withdraw answer"), this, [this, key] { withdraw(key); });
+                withdrawing->setEnabled(!answerOf(m_judgements, key).isEmpty());
+                menu.exec(values->mapToGlobal(pos));
+            });
+    }
     m_noItems->setVisible(m_rows.empty());
     setArticle(m_article, m_judgements);
 }
@@ -97,9 +114,10 @@ void ItemForm::setArticle(ArticleId article, const std::vector<Judgement> &ownJu
             index = row.values->count() - 1;
         }
         row.values->setCurrentIndex(index);
-        // There is no withdrawing an answer, only changing it (undo takes a new one back).
-        if (auto *model = qobject_cast<QStandardItemModel *>(row.values->model()))
-            model->item(0)->setEnabled(answer.isEmpty());
+        // "not answered" withdraws an answer given.
+        row.values->setItemData(0,
+            answer.isEmpty() ? QString() : tr("Withdraw the answer: the item is unanswered again"),
+            Qt::ToolTipRole);
     }
     setEnabled(m_article.isValid());
 }
@@ -107,9 +125,33 @@ void ItemForm::setArticle(ArticleId article, const std::vector<Judgement> &ownJu
 void ItemForm::choose(const Row &row, int index)
 {
     const QString value = row.values->itemData(index).toString();
-    if (!m_article.isValid() || value.isEmpty() || value == answerOf(m_judgements, row.key))
+    const QString answer = answerOf(m_judgements, row.key);
+    if (!m_article.isValid() || value == answer)
         return;
-    emit answerChosen(m_article, row.key, value);
+    if (value.isEmpty())
+        emit answerWithdrawn(m_article, row.key);
+    else
+        emit answerChosen(m_article, row.key, value);
+}
+
+void ItemForm::withdraw(const QString &itemKey)
+{
+    if (m_article.isValid() && !answerOf(m_judgements, itemKey).isEmpty())
+        emit answerWithdrawn(m_article, itemKey);
+}
+
+void ItemForm::addAnswerActions(QMenu *menu)
+{
+    if (!m_article.isValid())
+        return;
+    for (const Row &row : m_rows) {
+        const QString answer = answerOf(m_judgements, row.key);
+        if (answer.isEmpty())
+            continue;
+        const QString key = row.key;
+        menu->addAction(tr("Withdraw answer: %1 (%2)").arg(row.question, answer), this,
+            [this, key] { withdraw(key); });
+    }
 }
 
 } // namespace fourfold

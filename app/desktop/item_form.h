@@ -1,7 +1,8 @@
 #pragma once
 // The article-level items of the codebook (e.g. the dominant framing function) as a small form:
 // one row per item with its question and a choice of its values. Choosing a value answers the
-// item for the open article through the coding session, as one undoable change.
+// item for the open article through the coding session, as one undoable change; choosing "not
+// answered" again (or Withdraw answer on a row's context menu) withdraws the answer, undoably too.
 
 #include "core/model/annotation.h"
 #include "core/model/codebook.h"
@@ -12,6 +13,7 @@
 
 class QComboBox;
 class QLabel;
+class QMenu;
 class QVBoxLayout;
 
 namespace fourfold {
@@ -23,7 +25,8 @@ class ItemForm : public QWidget
     Q_OBJECT
 public:
     // With a session, the form shows the session's codebook and every answer chosen is sent to
-    // session->answerItem(). Without one (nullptr) it only emits answerChosen().
+    // session->answerItem() and every withdrawal to session->withdrawAnswer(). Without one
+    // (nullptr) it only emits answerChosen() and answerWithdrawn().
     explicit ItemForm(CodingSession *session, QWidget *parent = nullptr);
 
     // Builds one row per article-level item of `codebook`. Keeps the article shown.
@@ -31,14 +34,22 @@ public:
     // Shows the answers in `ownJudgements` (the coder's own, of `article`; deleted ones are
     // ignored) and makes the form answer for `article`. An invalid id disables the form.
     void setArticle(ArticleId article, const std::vector<Judgement> &ownJudgements);
+    // Asks to withdraw the answer to `itemKey` (nothing when it is not answered).
+    void withdraw(const QString &itemKey);
+    // Adds "Withdraw answer: …" to `menu` for each answered item: the desk's context menu offers
+    // them.
+    void addAnswerActions(QMenu *menu);
 
 signals:
     // The user chose `value` for item `itemKey` of `article` (never "not answered").
     void answerChosen(ArticleId article, const QString &itemKey, const QString &value);
+    // The user withdrew the answer to item `itemKey` of `article`.
+    void answerWithdrawn(ArticleId article, const QString &itemKey);
 
 private:
     struct Row {
         QString key;
+        QString question;
         QComboBox *values = nullptr;
     };
     void choose(const Row &row, int index);

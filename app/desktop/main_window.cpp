@@ -5,6 +5,7 @@
 #include "app/desktop/article_list_model.h"
 #include "app/desktop/codebook_panel.h"
 #include "app/desktop/coder_dialog.h"
+#include "app/desktop/coder_legend.h"
 #include "app/desktop/coding_session.h"
 #include "app/desktop/frame_card.h"
 #include "app/desktop/function_style.h"
@@ -255,6 +256,8 @@ QWidget *MainWindow::buildDesk()
     m_emptyText = new QLabel(empty);
     m_emptyText->setTextFormat(Qt::RichText);
     m_emptyText->setWordWrap(true);
+    m_legend = new CoderLegend(middle);
+    middleLayout->addWidget(m_legend);
     m_emptyText->setAlignment(Qt::AlignCenter);
     m_emptyText->setMinimumWidth(360);
     m_emptyText->setMaximumWidth(560);
@@ -327,6 +330,13 @@ QWidget *MainWindow::buildDesk()
     });
     connect(m_card, &FrameCard::spanActivated, this, [this](AnnotationId id) {
         selectSpan(id);
+    // The context menu also removes the selected span's links and withdraws answers.
+    connect(m_reading, &ReadingView::contextMenuAboutToShow, this, [this](QMenu *menu) {
+        if (m_spanEditor)
+            m_spanEditor->addLinkActions(menu);
+        if (m_items)
+            m_items->addAnswerActions(menu);
+    });
         m_reading->scrollToSpan(id);
     });
     return splitter;
@@ -551,6 +561,7 @@ Status MainWindow::openProject(
         m_list->selectRow(0);
     updateEmptyState();
     if (m_session->isReadOnly())
+    m_legend->setSession(m_session.get());
         m_messages->showMessage(MessageBar::Kind::Warning, m_session->readOnlyMessage());
     return {};
 }
@@ -674,7 +685,11 @@ void MainWindow::search(const QString &query)
     m_reading->setSearchHighlight(query);
     if (query.trimmed().isEmpty()) {
         m_filter->setMatches(std::nullopt);
+    // Every coder's spans carry their coder's pseudonym.
+    m_reading->setSpanOwners(
+        m_session->showsAllCoders() ? m_session->pseudonyms() : QHash<qint64, QString> {});
         return;
+    m_legend->refresh();
     }
     auto hits = m_session->project().searchArticles(query);
     if (!hits) {

@@ -27,6 +27,7 @@ class ArticleFilter;
 class ArticleListModel;
 class CodebookPanel;
 class CodingSession;
+class CoderLegend;
 class LeadWindows;
 class MessageBar;
 class FrameCard;
@@ -60,6 +61,7 @@ public:
     QLineEdit *searchField() const { return m_search; }
     ArticleId currentArticle() const { return m_article; }
     // What the middle of the desk shows when there is no article to code, and its button (hidden
+    CoderLegend *coderLegend() const { return m_legend; }
     // when there is nothing to do here); for tests. Empty text: an article is shown.
     QString emptyStateText() const;
     QPushButton *emptyStateButton() const { return m_emptyAction; }
@@ -125,6 +127,7 @@ private:
     LeadWindows *m_lead = nullptr;
     QMenu *m_leadMenu = nullptr;
     bool m_columnsChosen = false;
+    CoderLegend *m_legend = nullptr; // whose spans, while a lead shows every coder's
 };
 
 } // namespace fourfold

@@ -1,7 +1,9 @@
 // The coding desk driven through its real widgets, offscreen, on a copy of the sample project.
+#include "app/desktop/coder_legend.h"
 #include "app/desktop/coding_session.h"
 #include "app/desktop/frame_card.h"
 #include "app/desktop/import_dialog.h"
+#include "app/desktop/item_form.h"
 #include "app/desktop/main_window.h"
 #include "app/desktop/message_bar.h"
 #include "app/desktop/reading_view.h"
@@ -11,13 +13,18 @@
 #include "core/text/offset_map.h"
 #include "tests/support/test_support.h"
 
+#include <QComboBox>
 #include <QFile>
 #include <QLabel>
 #include <QLineEdit>
+#include <QMenu>
 #include <QSet>
 #include <QTableView>
 #include <QTest>
+#include <QTextCursor>
 #include <QUndoStack>
+
+#include <map>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -280,6 +287,198 @@ TEST_CASE("importing from the window reports added, skipped and refused articles
     CHECK(report.contains(QStringLiteral("bad.jsonl: not imported")));
     CHECK(report.contains(QStringLiteral("bad.jsonl:2")));
     CHECK(w.session()->project().articles()->size() == 1);
+}
+
+// Opens the reading view's context menu (as the menu key does) and triggers the action whose
+// text starts with `prefix`; false when the menu holds none.
+bool triggerContextAction(MainWindow &w, const QString &prefix)
+{
+    ReadingView *view = w.readingView();
+    const QPoint at = view->viewport()->rect().center();
+    QContextMenuEvent event(QContextMenuEvent::Keyboard, at, view->viewport()->mapToGlobal(at));
+    QApplication::sendEvent(view, &event);
+    QMenu *menu = nullptr;
+    for (QMenu *m : view->findChildren<QMenu *>())
+        if (m->isVisible())
+            menu = m;
+    REQUIRE(menu);
+    QAction *found = nullptr;
+    for (QAction *a : menu->actions())
+        if (a->text().startsWith(prefix) && a->isEnabled())
+            found = a;
+    if (found)
+        found->trigger();
+    menu->close();
+    return found != nullptr;
+}
+
+TEST_CASE("a link removed from the desk's context menu comes back with undo")
+{
+    DeskFixture f;
+    MainWindow w;
+    REQUIRE(w.openProject(f.path, QStringLiteral("C01")));
+    w.show();
+    const ArticleId article = articleId(w, "emoji-01");
+    w.openArticle(article);
+    CodingSession *session = w.session();
+    REQUIRE(session->addSpan(
+        article, FramingFunction::Problem, rangeOf(w, article, QStringLiteral("is closing"))));
+    const AnnotationId problem = session->lastAddedSpan();
+    REQUIRE(session->addSpan(article, FramingFunction::Remedy,
+        rangeOf(w, article, QStringLiteral("blame the na\u00efve council"))));
+    const AnnotationId remedy = session->lastAddedSpan();
+    REQUIRE(session->linkSpans(remedy, problem, QStringLiteral("addresses")));
+    auto liveLinks = [&] {
+        auto links = session->project().links(article);
+        REQUIRE(links);
+        return std::ranges::count_if(*links, [](const AnnotationLink &l) { return !l.deleted; });
+    };
+    REQUIRE(liveLinks() == 1);
+    const int steps = session->undoStack()->count();
+
+    w.selectSpan(remedy);
+    // The menu names the link as the span editor lists it ("addresses …").
+    REQUIRE(triggerContextAction(w, QStringLiteral("Remove link: addresses")));
+    CHECK(liveLinks() == 0); // the stored row is a tombstone now
+    CHECK(session->undoStack()->count() == steps + 1);
+    CHECK(session->undoStack()->undoText() == QStringLiteral("Remove link (addresses)"));
+    CHECK_FALSE(triggerContextAction(w, QStringLiteral("Remove link:"))); // nothing left to remove
+
+    session->undoStack()->undo();
+    CHECK(liveLinks() == 1);
+    // The restored link is the same row, and the desk shows it again.
+    auto links = session->project().links(article);
+    REQUIRE(links);
+    REQUIRE(links->size() == 1);
+    CHECK(links->front().source == remedy);
+    CHECK(links->front().target == problem);
+    CHECK(session->document().links().size() == 1);
+    session->undoStack()->redo();
+    CHECK(liveLinks() == 0);
+}
+
+TEST_CASE("an answer withdrawn on the desk is unanswered and comes back with undo")
+{
+    DeskFixture f;
+    MainWindow w;
+    REQUIRE(w.openProject(f.path, QStringLiteral("C01")));
+    w.show();
+    const ArticleId article = articleId(w, "emoji-01");
+    w.openArticle(article);
+    CodingSession *session = w.session();
+    const QString item = QStringLiteral("dominant_function");
+    REQUIRE(session->answerItem(article, item, QStringLiteral("cause")));
+    auto storedAnswers = [&] {
+        auto all = session->project().judgements(article);
+        REQUIRE(all);
+        return *all; // live rows only
+    };
+    REQUIRE(storedAnswers().size() == 1);
+    const QString uuid = storedAnswers().front().uuid;
+    // The form's one row (rows of an earlier codebook are hidden until they are deleted).
+    QComboBox *combo = nullptr;
+    for (QComboBox *c : w.itemForm()->findChildren<QComboBox *>())
+        if (c->isVisibleTo(w.itemForm()))
+            combo = c;
+    REQUIRE(combo);
+    CHECK(combo->currentData().toString() == QStringLiteral("cause"));
+
+    SECTION("from the context menu")
+    {
+        REQUIRE(triggerContextAction(w, QStringLiteral("Withdraw answer:")));
+    }
+    SECTION("in the item form, by choosing not answered")
+    {
+        combo->setCurrentIndex(0);
+        emit combo->activated(0);
+    }
+    CHECK(storedAnswers().empty());
+    CHECK(combo->currentData().toString().isEmpty()); // "not answered"
+    CHECK(session->undoStack()->undoText()
+        == QStringLiteral("Withdraw answer \"dominant_function\""));
+
+    session->undoStack()->undo();
+    REQUIRE(storedAnswers().size() == 1);
+    CHECK(storedAnswers().front().value == QStringLiteral("cause"));
+    CHECK(storedAnswers().front().uuid == uuid);
+    CHECK(combo->currentData().toString() == QStringLiteral("cause"));
+    session->undoStack()->redo();
+    CHECK(storedAnswers().empty());
+}
+
+TEST_CASE("a lead's all-coders view names each span's coder by pseudonym and filters to one coder")
+{
+    DeskFixture f;
+    MainWindow w;
+    REQUIRE(w.openProject(f.path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));
+    w.resize(1500, 920);
+    w.show();
+    const ArticleId article = articleId(w, "hb-01");
+    w.openArticle(article);
+    CoderLegend *legend = w.coderLegend();
+    CHECK_FALSE(legend->isVisible()); // the lead's own spans only, so far
+    QAction *showAll = nullptr;
+    for (QAction *a : w.findChildren<QAction *>())
+        if (a->text().startsWith(QStringLiteral("Show &every coder")))
+            showAll = a;
+    REQUIRE(showAll);
+    showAll->trigger();
+    REQUIRE(legend->isVisible());
+
+    // The sample's three coders coded hb-01 (sample-project/README.md).
+    Project &project = w.session()->project();
+    auto coders = project.coders();
+    REQUIRE(coders);
+    std::map<qint64, Coder> byId;
+    for (const Coder &c : *coders)
+        byId[c.id.value] = c;
+    auto every = project.annotations(article);
+    REQUIRE(every);
+    ReadingView *view = w.readingView();
+    CHECK(view->spans().size() == every->size());
+    for (const QString &pseudonym :
+        {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")})
+        CHECK(legend->legendText().contains(QStringLiteral("<b>%1</b>").arg(pseudonym)));
+    // Each span shown carries its coder's pseudonym, never a name.
+    for (const Annotation &a : view->spans())
+        CHECK(view->spanOwner(a.id) == byId.at(a.coder.value).pseudonym);
+    const auto c02 = std::ranges::find_if(
+        *coders, [](const Coder &c) { return c.pseudonym == QStringLiteral("C02"); });
+    REQUIRE(c02 != coders->end());
+    auto ofC02 = project.annotations(article, c02->id);
+    REQUIRE(ofC02);
+    REQUIRE_FALSE(ofC02->empty());
+    // The tooltip over the text of one of C02's spans names C02 with the span.
+    const Annotation &span = ofC02->front();
+    const OffsetMap map(view->article().text);
+    QTextCursor at(view->document());
+    at.setPosition(int(map.utf16Range(span.content.range).start + 1));
+    const QString tip = view->toolTipAt(view->cursorRect(at).center());
+    CHECK(tip.contains(QStringLiteral("C02 \u00B7 ")));
+    for (const Coder &c : *coders) {
+        CHECK_FALSE(tip.contains(c.name));
+        CHECK_FALSE(legend->legendText().contains(c.name));
+    }
+
+    // Filtered to C02: the view is given only C02's spans, as many as the project holds.
+    QComboBox *filter = legend->filter();
+    const int index = filter->findText(QStringLiteral("C02"));
+    REQUIRE(index > 0);
+    filter->setCurrentIndex(index);
+    emit filter->activated(index);
+    CHECK(view->spans().size() == ofC02->size());
+    CHECK(std::ranges::all_of(
+        view->spans(), [&](const Annotation &a) { return a.coder == c02->id; }));
+    CHECK(w.session()->document().spans().size() == ofC02->size());
+    // All coders shows everyone again.
+    filter->setCurrentIndex(0);
+    emit filter->activated(0);
+    CHECK(view->spans().size() == every->size());
+    // Back to the lead's own spans: no legend, no pseudonyms on the badges.
+    showAll->trigger();
+    CHECK_FALSE(legend->isVisible());
+    for (const Annotation &a : view->spans())
+        CHECK(view->spanOwner(a.id).isEmpty());
 }
 
 TEST_CASE("a refused change keeps its error and never reaches the undo stack")
