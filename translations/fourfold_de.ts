@@ -160,6 +160,7 @@
     <message>
         <location filename="../core/project/annotation_edits.cpp" line="145"/>
         <location filename="../core/project/annotation_edits.cpp" line="178"/>
+        <location filename="../core/project/annotation_edits.cpp" line="357"/>
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Eine Änderung, die nie ausgeführt wurde, kann nicht rückgängig gemacht werden.</translation>
     </message>
@@ -214,10 +215,12 @@
         <translation>Die Antwort konnte nicht gespeichert werden: Ihr Artikel oder ihre codierende Person existiert nicht.</translation>
     </message>
     <message>
+        <location filename="../core/project/annotation_edits.cpp" line="330"/>
         <source>Withdraw answer &quot;%1&quot;</source>
         <translation>Antwort „%1“ zurückziehen</translation>
     </message>
     <message>
+        <location filename="../core/project/annotation_edits.cpp" line="344"/>
         <source>There is no answer to &quot;%1&quot; to withdraw.</source>
         <translation>Es gibt keine Antwort auf „%1“, die zurückgezogen werden könnte.</translation>
     </message>
@@ -1074,159 +1077,160 @@
         <translation>„%1“ ist keine Antwort auf „%2“ (erlaubt: %3).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="23"/>
+        <location filename="../core/model/codebook_json.cpp" line="24"/>
         <source>null</source>
         <translation>null</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="25"/>
+        <location filename="../core/model/codebook_json.cpp" line="26"/>
         <source>a boolean</source>
         <translation>ein Wahrheitswert</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="27"/>
+        <location filename="../core/model/codebook_json.cpp" line="28"/>
         <source>a number</source>
         <translation>eine Zahl</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="29"/>
-        <location filename="../core/model/codebook_json.cpp" line="204"/>
-        <location filename="../core/model/codebook_json.cpp" line="236"/>
-        <location filename="../core/model/codebook_json.cpp" line="282"/>
+        <location filename="../core/model/codebook_json.cpp" line="30"/>
+        <location filename="../core/model/codebook_json.cpp" line="227"/>
+        <location filename="../core/model/codebook_json.cpp" line="259"/>
+        <location filename="../core/model/codebook_json.cpp" line="305"/>
         <source>a string</source>
         <translation>eine Zeichenkette</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="31"/>
-        <location filename="../core/model/codebook_json.cpp" line="221"/>
+        <location filename="../core/model/codebook_json.cpp" line="32"/>
+        <location filename="../core/model/codebook_json.cpp" line="244"/>
         <source>an array</source>
         <translation>ein Array</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="33"/>
-        <location filename="../core/model/codebook_json.cpp" line="276"/>
-        <location filename="../core/model/codebook_json.cpp" line="321"/>
+        <location filename="../core/model/codebook_json.cpp" line="34"/>
+        <location filename="../core/model/codebook_json.cpp" line="299"/>
+        <location filename="../core/model/codebook_json.cpp" line="344"/>
         <source>an object</source>
         <translation>ein Objekt</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="37"/>
+        <location filename="../core/model/codebook_json.cpp" line="38"/>
         <source>nothing</source>
         <translation>nichts</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="90"/>
+        <location filename="../core/model/codebook_json.cpp" line="91"/>
         <source>the key &quot;%1&quot; appears twice.</source>
         <translation>der Schlüssel „%1“ kommt zweimal vor.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="112"/>
+        <location filename="../core/model/codebook_json.cpp" line="114"/>
         <source>&quot;%1&quot; defines the function &quot;%2&quot; a second time; a codebook defines problem, cause, evaluation and remedy once each.</source>
         <translation>„%1“ definiert die Funktion „%2“ ein zweites Mal; ein Codebuch definiert Problem, Ursache, Bewertung und Lösung je einmal.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="122"/>
+        <location filename="../core/model/codebook_json.cpp" line="124"/>
         <source>the codebook does not define the function &quot;%1&quot;.</source>
         <translation>das Codebuch definiert die Funktion „%1“ nicht.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="135"/>
+        <location filename="../core/model/codebook_json.cpp" line="137"/>
         <source>&quot;%1&quot; repeats the item &quot;%2&quot;.</source>
         <translation>„%1“ wiederholt das Item „%2“.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="153"/>
+        <location filename="../core/model/codebook_json.cpp" line="176"/>
         <source>&quot;%1&quot; must be %2, not %3.</source>
         <translation>„%1“ muss %2 sein, nicht %3.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="166"/>
+        <location filename="../core/model/codebook_json.cpp" line="189"/>
         <source>unknown key &quot;%1&quot; (expected one of: %2).</source>
         <translation>unbekannter Schlüssel „%1“ (erwartet wird einer von: %2).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="182"/>
+        <location filename="../core/model/codebook_json.cpp" line="205"/>
         <source>&quot;%1&quot; contains the control character U+%2; only line breaks and tabs may stand in definitions, rules, examples and questions.</source>
         <translation>„%1“ enthält das Steuerzeichen U+%2; in Definitionen, Regeln, Beispielen und Fragen dürfen nur Zeilenumbrüche und Tabulatoren stehen.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="186"/>
+        <location filename="../core/model/codebook_json.cpp" line="209"/>
         <source>&quot;%1&quot; contains the control character U+%2.</source>
         <translation>„%1“ enthält das Steuerzeichen U+%2.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="200"/>
-        <location filename="../core/model/codebook_json.cpp" line="217"/>
+        <location filename="../core/model/codebook_json.cpp" line="223"/>
+        <location filename="../core/model/codebook_json.cpp" line="240"/>
         <source>&quot;%1&quot; is missing.</source>
         <translation>„%1“ fehlt.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="251"/>
+        <location filename="../core/model/codebook_json.cpp" line="274"/>
         <source>&quot;%1&quot; lists no values.</source>
         <translation>„%1“ nennt keine Werte.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="257"/>
+        <location filename="../core/model/codebook_json.cpp" line="280"/>
         <source>&quot;%1&quot; is an empty value.</source>
         <translation>„%1“ ist ein leerer Wert.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="260"/>
+        <location filename="../core/model/codebook_json.cpp" line="283"/>
         <source>&quot;%1&quot; repeats the value &quot;%2&quot;.</source>
         <translation>„%1“ wiederholt den Wert „%2“.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="285"/>
+        <location filename="../core/model/codebook_json.cpp" line="308"/>
         <source>&quot;%1&quot; recodes an empty value.</source>
         <translation>„%1“ recodiert einen leeren Wert.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="288"/>
+        <location filename="../core/model/codebook_json.cpp" line="311"/>
         <source>&quot;%1&quot; recodes &quot;%2&quot;, which is still one of the values; recode only values that were dropped.</source>
         <translation>„%1“ recodiert „%2“, der noch einer der Werte ist; recodieren Sie nur Werte, die weggefallen sind.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="294"/>
+        <location filename="../core/model/codebook_json.cpp" line="317"/>
         <source>&quot;%1&quot; recodes to &quot;%2&quot;, which is not one of the values (%3).</source>
         <translation>„%1“ recodiert zu „%2“, der keiner der Werte ist (%3).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="311"/>
+        <location filename="../core/model/codebook_json.cpp" line="334"/>
         <source>&quot;%1&quot; is &quot;%2&quot;, not a level of measurement (nominal, ordinal, interval or ratio).</source>
         <translation>„%1“ ist „%2“, kein Skalenniveau (nominal, ordinal, interval oder ratio).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="331"/>
+        <location filename="../core/model/codebook_json.cpp" line="354"/>
         <source>&quot;%1&quot; is empty.</source>
         <translation>„%1“ ist leer.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="348"/>
+        <location filename="../core/model/codebook_json.cpp" line="371"/>
+        <location filename="../core/model/codebook_json.cpp" line="490"/>
         <source>&quot;%1&quot; is &quot;%2&quot;, not one of the four functions (problem, cause, evaluation, remedy).</source>
         <translation>„%1“ ist „%2“, keine der vier Funktionen (problem, cause, evaluation, remedy).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="381"/>
+        <location filename="../core/model/codebook_json.cpp" line="404"/>
         <source>&quot;%1&quot; repeats the attribute &quot;%2&quot; of %3.</source>
         <translation>„%1“ wiederholt das Merkmal „%2“ von %3.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="412"/>
+        <location filename="../core/model/codebook_json.cpp" line="435"/>
         <source>&quot;%1&quot; is only for choice attributes; &quot;%2&quot; is a text attribute.</source>
         <translation>„%1“ gilt nur für Auswahlmerkmale; „%2“ ist ein Textmerkmal.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="427"/>
+        <location filename="../core/model/codebook_json.cpp" line="450"/>
         <source>&quot;%1&quot; is &quot;%2&quot;, not an attribute type (choice or text).</source>
         <translation>„%1“ ist „%2“, kein Merkmalstyp (choice oder text).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="492"/>
+        <location filename="../core/model/codebook_json.cpp" line="617"/>
         <source>the codebook is not valid JSON: %1.</source>
         <translation>das Codebuch ist kein gültiges JSON: %1.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="496"/>
+        <location filename="../core/model/codebook_json.cpp" line="621"/>
         <source>the codebook must be a JSON object, not %1.</source>
         <translation>das Codebuch muss ein JSON-Objekt sein, nicht %1.</translation>
     </message>
@@ -1605,92 +1609,92 @@
         <translation>Zuweisung</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="53"/>
+        <location filename="../core/project/copy_validation.cpp" line="54"/>
         <source>is not a time</source>
         <translation>ist keine Zeitangabe</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="55"/>
+        <location filename="../core/project/copy_validation.cpp" line="56"/>
         <source>is dated %1, before the copy was handed out (%2)</source>
         <translation>ist auf %1 datiert, vor der Ausgabe der Kopie (%2)</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="58"/>
+        <location filename="../core/project/copy_validation.cpp" line="59"/>
         <source>is dated %1, in the future (now %2)</source>
         <translation>ist auf %1 datiert, in der Zukunft (jetzt %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="71"/>
+        <location filename="../core/project/copy_validation.cpp" line="72"/>
         <source>The %1 %2 in %3 reuses the uuid of another object in the project (%4); the copy was changed outside Fourfold; it was not merged.</source>
         <translation>%1 %2 in %3 verwendet die UUID eines anderen Objekts im Projekt (%4) erneut; die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="83"/>
+        <location filename="../core/project/copy_validation.cpp" line="84"/>
         <source>The coding time of article &quot;%1&quot; in %2 is %3 s, less than the %4 s it was handed out with; the copy was changed outside Fourfold; it was not merged.</source>
         <translation>Die Codierzeit des Artikels „%1“ in %2 beträgt %3 s, weniger als die %4 s, mit denen er ausgegeben wurde; die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="92"/>
+        <location filename="../core/project/copy_validation.cpp" line="93"/>
         <source>%1 adds more coding time (%2 s on article &quot;%3&quot;, %4 s before it) than has passed since it was handed out (%5 s, with a day&apos;s allowance for clocks); the copy was changed outside Fourfold; it was not merged.</source>
         <translation>%1 fügt mehr Codierzeit hinzu (%2 s bei Artikel „%3“, vorher %4 s), als seit der Ausgabe vergangen ist (%5 s, mit einem Tag Spielraum für Uhren); die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="114"/>
+        <location filename="../core/project/copy_validation.cpp" line="115"/>
         <source>Span %1 in %2 does not quote its article&apos;s text at [%3, %4); the copy was changed outside Fourfold; it was not merged.</source>
         <translation>Textstelle %1 in %2 zitiert den Text ihres Artikels bei [%3, %4) nicht; die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="152"/>
+        <location filename="../core/project/copy_validation.cpp" line="153"/>
         <source>%1 holds two objects (%2, %3) with the same uuid %4; the copy was changed outside Fourfold; it was not merged.</source>
         <translation>%1 enthält zwei Objekte (%2, %3) mit derselben UUID %4; die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="170"/>
+        <location filename="../core/project/copy_validation.cpp" line="171"/>
         <source>%1 holds an assignment of article &quot;%2&quot; (phase %3) that was not handed out in this copy; it was not merged.</source>
         <translation>%1 enthält eine Zuweisung des Artikels „%2“ (Phase %3), die mit dieser Kopie nicht ausgegeben wurde; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="178"/>
+        <location filename="../core/project/copy_validation.cpp" line="179"/>
         <source>The link %1 in %2 joins a span that is not in the copy; it was not merged.</source>
         <translation>Die Verknüpfung %1 in %2 verbindet eine Textstelle, die nicht in der Kopie ist; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="184"/>
+        <location filename="../core/project/copy_validation.cpp" line="185"/>
         <source>The %1 %2 in %3 is on article &quot;%4&quot;, which was not handed out to %5 in this copy; it was not merged.</source>
         <translation>%1 %2 in %3 betrifft den Artikel „%4“, der %5 mit dieser Kopie nicht ausgegeben wurde; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="202"/>
+        <location filename="../core/project/copy_validation.cpp" line="203"/>
         <source>The %1 %2 in %3 %4 (%5 &quot;%6&quot;); the copy was changed outside Fourfold; it was not merged.</source>
         <translation>%1 %2 in %3 %4 (%5 „%6“); die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="217"/>
+        <location filename="../core/project/copy_validation.cpp" line="218"/>
         <source>Event %1 (%2) of %3</source>
         <translation>Ereignis %1 (%2) von %3</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="219"/>
+        <location filename="../core/project/copy_validation.cpp" line="220"/>
         <source>%1 %2; the copy&apos;s log was changed outside Fourfold; it was not merged.</source>
         <translation>%1 %2; das Protokoll der Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="228"/>
+        <location filename="../core/project/copy_validation.cpp" line="229"/>
         <source>%1 is not one a coder&apos;s program writes; the copy&apos;s log was changed outside Fourfold; it was not merged.</source>
         <translation>%1 ist keines, das das Programm einer codierenden Person schreibt; das Protokoll der Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="235"/>
+        <location filename="../core/project/copy_validation.cpp" line="236"/>
         <source>%1 is not by the copy&apos;s coder %2; it was not merged.</source>
         <translation>%1 stammt nicht von der codierenden Person %2 der Kopie; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="247"/>
+        <location filename="../core/project/copy_validation.cpp" line="248"/>
         <source>%1 is not an edit a coder can make (object %2 %3); the copy&apos;s log was changed outside Fourfold; it was not merged.</source>
         <translation>%1 ist keine Änderung, die eine codierende Person vornehmen kann (Objekt %2 %3); das Protokoll der Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="258"/>
+        <location filename="../core/project/copy_validation.cpp" line="259"/>
         <source>%1 is about %2, which is not the coder&apos;s own in the project (%3); it was not merged.</source>
         <translation>%1 betrifft %2, das im Projekt nicht der codierenden Person gehört (%3); sie wurde nicht zusammengeführt.</translation>
     </message>
@@ -2293,7 +2297,7 @@
 <context>
     <name>GoldEditsText</name>
     <message>
-        <location filename="../core/project/gold_edits.cpp" line="30"/>
+        <location filename="../core/project/gold_edits.cpp" line="32"/>
         <source>Only a lead can decide the gold standard.</source>
         <translation>Nur die Leitung kann den Goldstandard entscheiden.</translation>
     </message>
@@ -2582,12 +2586,12 @@
         <translation>Fourfold-%1-Textstellen, Aufteilung %2</translation>
     </message>
     <message>
-        <location filename="../core/exchange/layer_export.cpp" line="252"/>
+        <location filename="../core/exchange/layer_export.cpp" line="253"/>
         <source>The layer &quot;%1&quot; covers no article, so there is nothing to export.</source>
         <translation>Die Ebene „%1“ deckt keinen Artikel ab, es gibt also nichts zu exportieren.</translation>
     </message>
     <message>
-        <location filename="../core/exchange/layer_export.cpp" line="392"/>
+        <location filename="../core/exchange/layer_export.cpp" line="414"/>
         <source>The text of article &quot;%1&quot; does not match its stored SHA-256 (the project file is damaged); nothing was exported.</source>
         <translation>Der Text des Artikels „%1“ passt nicht zu seinem gespeicherten SHA-256 (die Projektdatei ist beschädigt); nichts wurde exportiert.</translation>
     </message>
@@ -2850,42 +2854,42 @@
 <context>
     <name>ProjectImportText</name>
     <message>
-        <location filename="../core/project/project_import.cpp" line="41"/>
+        <location filename="../core/project/project_import.cpp" line="42"/>
         <source>the article &quot;%1&quot; has no text.</source>
         <translation>der Artikel „%1“ hat keinen Text.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="56"/>
+        <location filename="../core/project/project_import.cpp" line="57"/>
         <source>the article &quot;%1&quot; cannot be segmented: %2</source>
         <translation>der Artikel „%1“ kann nicht segmentiert werden: %2</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="120"/>
+        <location filename="../core/project/project_import.cpp" line="121"/>
         <source>same text as the article &quot;%1&quot; already in the project</source>
         <translation>gleicher Text wie der Artikel „%1“, der bereits im Projekt ist</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="129"/>
+        <location filename="../core/project/project_import.cpp" line="130"/>
         <source>the id &quot;%1&quot; is already used by another article in the project, with a different text.</source>
         <translation>die ID „%1“ wird im Projekt bereits von einem anderen Artikel mit anderem Text verwendet.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="147"/>
+        <location filename="../core/project/project_import.cpp" line="148"/>
         <source>The import of %1 was cancelled; nothing was added.</source>
         <translation>Der Import von %1 wurde abgebrochen; nichts wurde hinzugefügt.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="182"/>
+        <location filename="../core/project/project_import.cpp" line="194"/>
         <source>passed over: not a format Fourfold reads</source>
         <translation>übergangen: kein Format, das Fourfold liest</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="193"/>
+        <location filename="../core/project/project_import.cpp" line="205"/>
         <source>The folder %1 holds no files.</source>
         <translation>Der Ordner %1 enthält keine Dateien.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/project_import.cpp" line="198"/>
+        <location filename="../core/project/project_import.cpp" line="210"/>
         <source>%1: %n article(s)</source>
         <translation>
             <numerusform>%1: %n Artikel</numerusform>
@@ -2893,7 +2897,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/project_import.cpp" line="203"/>
+        <location filename="../core/project/project_import.cpp" line="215"/>
         <source>The folder %1 was not imported: %n of its files could not be read, so nothing was added.</source>
         <translation>
             <numerusform>Der Ordner %1 wurde nicht importiert: %n seiner Dateien konnte nicht gelesen werden, daher wurde nichts hinzugefügt.</numerusform>
@@ -2909,21 +2913,22 @@
 <context>
     <name>ProjectTables</name>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="61"/>
+        <location filename="../core/store/project_tables.cpp" line="62"/>
         <source>The article is already assigned to this coder in this phase, or one of them does not exist.</source>
         <translation>Der Artikel ist dieser codierenden Person in dieser Phase bereits zugewiesen, oder einer von beiden existiert nicht.</translation>
     </message>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="266"/>
+        <location filename="../core/store/project_tables.cpp" line="320"/>
         <source>The project file %1 is damaged, so nothing was added to it; `fourfold-cli check` lists the damage. Restore it from a backup.</source>
         <translation>Die Projektdatei %1 ist beschädigt, daher wurde ihr nichts hinzugefügt; `fourfold-cli check` listet die Schäden auf. Stellen Sie sie aus einer Sicherung wieder her.</translation>
     </message>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="298"/>
+        <location filename="../core/store/project_tables.cpp" line="352"/>
         <source>foreign_key_check: row %1 of %2 refers to a missing row of %3</source>
         <translation>foreign_key_check: Zeile %1 von %2 verweist auf eine fehlende Zeile von %3</translation>
     </message>
     <message>
+        <location filename="../core/store/project_tables.cpp" line="119"/>
         <source>The assignment is not in the project.</source>
         <translation>Die Zuweisung ist nicht im Projekt.</translation>
     </message>
@@ -2931,42 +2936,42 @@
 <context>
     <name>ProjectText</name>
     <message>
-        <location filename="../core/project/project.cpp" line="40"/>
+        <location filename="../core/project/project.cpp" line="41"/>
         <source>The default codebook is missing from this build.</source>
         <translation>Das Standard-Codebuch fehlt in diesem Build.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="69"/>
+        <location filename="../core/project/project.cpp" line="70"/>
         <source>%1 already exists; choose another name or open it.</source>
         <translation>%1 existiert bereits; wählen Sie einen anderen Namen oder öffnen Sie es.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="88"/>
+        <location filename="../core/project/project.cpp" line="89"/>
         <source>Default codebook</source>
         <translation>Standard-Codebuch</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="112"/>
+        <location filename="../core/project/project.cpp" line="113"/>
         <source>There is no project file %1.</source>
         <translation>Es gibt keine Projektdatei %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="190"/>
+        <location filename="../core/project/project.cpp" line="191"/>
         <source>A coder needs a name and a pseudonym.</source>
         <translation>Eine codierende Person braucht einen Namen und ein Pseudonym.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="195"/>
+        <location filename="../core/project/project.cpp" line="196"/>
         <source>%1 was not added: a lead is added with a passphrase (Lead → People or fourfold-cli people --add).</source>
         <translation>%1 wurde nicht hinzugefügt: Eine Leitung wird mit einer Passphrase hinzugefügt (Leitung → Personen oder fourfold-cli people --add).</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="245"/>
+        <location filename="../core/project/project.cpp" line="246"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 ist deaktiviert und erhält keine neuen Zuweisungen; aktivieren Sie die Person zuerst.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="369"/>
+        <location filename="../core/project/project.cpp" line="375"/>
         <source>An edit without its own savepoint needs a batch.</source>
         <translation>Eine Änderung ohne eigenen Sicherungspunkt braucht einen Stapel.</translation>
     </message>
@@ -2985,7 +2990,7 @@
     </message>
     <message numerus="yes">
         <location filename="../core/agreement/project_units.cpp" line="92"/>
-        <location filename="../core/agreement/project_units.cpp" line="402"/>
+        <location filename="../core/agreement/project_units.cpp" line="422"/>
         <source>Reliability needs at least two coders; the selection has %n.</source>
         <translation>
             <numerusform>Reliabilität braucht mindestens zwei Codierende; die Auswahl hat %n.</numerusform>
@@ -2993,37 +2998,37 @@
         </translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="148"/>
+        <location filename="../core/agreement/project_units.cpp" line="168"/>
         <source>%1: 1 article in progress left out</source>
         <translation>%1: 1 begonnener Artikel ausgelassen</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="149"/>
+        <location filename="../core/agreement/project_units.cpp" line="169"/>
         <source>%1: %2 articles in progress left out</source>
         <translation>%1: %2 begonnene Artikel ausgelassen</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="299"/>
+        <location filename="../core/agreement/project_units.cpp" line="319"/>
         <source>Continuum units are compared with unitizing alpha, not as a table.</source>
         <translation>Kontinuum-Einheiten werden mit Unitizing-Alpha verglichen, nicht als Tabelle.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="303"/>
+        <location filename="../core/agreement/project_units.cpp" line="323"/>
         <source>Span units compare an attribute: name one function and one of its attributes.</source>
         <translation>Textstellen-Einheiten vergleichen ein Merkmal: nennen Sie eine Funktion und eines ihrer Merkmale.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="379"/>
+        <location filename="../core/agreement/project_units.cpp" line="399"/>
         <source>None of the selected coders has marked any of the selected articles done.</source>
         <translation>Keine der gewählten codierenden Personen hat einen der gewählten Artikel als erledigt markiert.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="455"/>
+        <location filename="../core/agreement/project_units.cpp" line="475"/>
         <source>No article was marked done by all of the selected coders, so there is no common continuum.</source>
         <translation>Kein Artikel wurde von allen gewählten Codierenden als erledigt markiert, es gibt also kein gemeinsames Kontinuum.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="474"/>
+        <location filename="../core/agreement/project_units.cpp" line="494"/>
         <source>the codebook has no attribute &quot;%1&quot; for %2.</source>
         <translation>das Codebuch hat kein Merkmal „%1“ für %2.</translation>
     </message>
@@ -3146,37 +3151,37 @@
         <translation>Die %1 Artikel der Phase %2 wurden als %3 (Seed %4) aus einer Auswahlgesamtheit von %5 Artikeln ohne frühere Zuweisung gezogen, am %6.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="186"/>
+        <location filename="../app/report/report_data.cpp" line="189"/>
         <source>The report&apos;s unit must be paragraph, sentence or token.</source>
         <translation>Die Einheit des Berichts muss paragraph, sentence oder token sein.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="191"/>
+        <location filename="../app/report/report_data.cpp" line="194"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="192"/>
+        <location filename="../app/report/report_data.cpp" line="195"/>
         <source>Reliability report: %1</source>
         <translation>Reliabilitätsbericht: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="237"/>
+        <location filename="../app/report/report_data.cpp" line="242"/>
         <source>All four functions (MASI)</source>
         <translation>Alle vier Funktionen (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="237"/>
+        <location filename="../app/report/report_data.cpp" line="242"/>
         <source>All four (MASI)</source>
         <translation>Alle vier (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="280"/>
+        <location filename="../app/report/report_data.cpp" line="285"/>
         <source>Spans on the continuum</source>
         <translation>Textstellen auf dem Kontinuum</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="281"/>
+        <location filename="../app/report/report_data.cpp" line="286"/>
         <source>continuum</source>
         <translation>Kontinuum</translation>
     </message>
@@ -3184,575 +3189,575 @@
 <context>
     <name>ReportDocumentText</name>
     <message>
-        <location filename="../app/report/report_document.cpp" line="157"/>
-        <location filename="../app/report/report_document.cpp" line="159"/>
-        <location filename="../app/report/report_frames_section.cpp" line="86"/>
-        <location filename="../app/report/report_markup.cpp" line="92"/>
+        <location filename="../app/report/report_document.cpp" line="149"/>
+        <location filename="../app/report/report_document.cpp" line="151"/>
+        <location filename="../app/report/report_frames_section.cpp" line="77"/>
+        <location filename="../app/report/report_markup.cpp" line="80"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="94"/>
+        <location filename="../app/report/report_markup.cpp" line="82"/>
         <source>reliable</source>
         <translation>reliabel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="96"/>
+        <location filename="../app/report/report_markup.cpp" line="84"/>
         <source>tentative</source>
         <translation>vorläufig</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="100"/>
+        <location filename="../app/report/report_markup.cpp" line="88"/>
         <source>unreliable</source>
         <translation>nicht reliabel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="137"/>
+        <location filename="../app/report/report_markup.cpp" line="125"/>
         <source>paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="137"/>
+        <location filename="../app/report/report_markup.cpp" line="125"/>
         <source>paragraphs</source>
         <translation>Absätze</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="139"/>
+        <location filename="../app/report/report_markup.cpp" line="127"/>
         <source>token</source>
         <translation>Token</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="139"/>
+        <location filename="../app/report/report_markup.cpp" line="127"/>
         <source>tokens</source>
         <translation>Tokens</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="141"/>
+        <location filename="../app/report/report_markup.cpp" line="129"/>
         <source>sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="141"/>
+        <location filename="../app/report/report_markup.cpp" line="129"/>
         <source>sentences</source>
         <translation>Sätze</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="50"/>
+        <location filename="../app/report/report_document.cpp" line="41"/>
         <source>unit: %1</source>
         <translation>Einheit: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="51"/>
+        <location filename="../app/report/report_document.cpp" line="42"/>
         <source>phase: %1</source>
         <translation>Phase: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="53"/>
+        <location filename="../app/report/report_document.cpp" line="44"/>
         <source>all phases</source>
         <translation>alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="54"/>
+        <location filename="../app/report/report_document.cpp" line="45"/>
         <source>bootstrap: %1 replicates, seed %2</source>
         <translation>Bootstrap: %1 Replikationen, Seed %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="58"/>
+        <location filename="../app/report/report_document.cpp" line="49"/>
         <source>Inter-coder reliability</source>
         <translation>Intercoder-Reliabilität</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="61"/>
+        <location filename="../app/report/report_document.cpp" line="52"/>
         <source>Project “%1” · written %2 by %3 · %4</source>
         <translation>Projekt „%1“ · geschrieben %2 von %3 · %4</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="32"/>
+        <location filename="../app/report/report_method_text.cpp" line="20"/>
         <source>%1 coded %2 articles (%3 spans)</source>
         <translation>%1 codierte %2 Artikel (%3 Textstellen)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="42"/>
+        <location filename="../app/report/report_method_text.cpp" line="30"/>
         <source>Inter-coder reliability was assessed on a reliability sample of %1 articles that two or more coders coded independently (%2 of them by all %3 coders), out of %4 articles in the project. </source>
         <translation>Die Intercoder-Reliabilität wurde an einer Reliabilitätsstichprobe von %1 Artikeln bestimmt, die zwei oder mehr Codierende unabhängig voneinander codierten (%2 davon von allen %3 Codierenden), von %4 Artikeln im Projekt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="54"/>
+        <location filename="../app/report/report_method_text.cpp" line="42"/>
         <source>The sample was drawn %1. </source>
         <translation>Die Stichprobe wurde %1 gezogen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="55"/>
+        <location filename="../app/report/report_method_text.cpp" line="43"/>
         <source>state how the articles were drawn, e.g. a simple random sample of the study&apos;s articles, with its size and seed</source>
         <translation>geben Sie an, wie die Artikel gezogen wurden, z. B. als einfache Zufallsstichprobe aus den Artikeln der Studie, mit Umfang und Seed</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="59"/>
+        <location filename="../app/report/report_method_text.cpp" line="47"/>
         <source>%1 coders (%2) took part: %3. </source>
         <translation>%1 Codierende (%2) nahmen teil: %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="63"/>
+        <location filename="../app/report/report_method_text.cpp" line="51"/>
         <source>Articles that coders had started but not yet marked as finished were included. </source>
         <translation>Artikel, die Codierende begonnen, aber noch nicht als abgeschlossen markiert hatten, wurden einbezogen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="66"/>
+        <location filename="../app/report/report_method_text.cpp" line="54"/>
         <source>Only articles that a coder had marked as finished count for that coder. </source>
         <translation>Für jede codierende Person zählen nur Artikel, die sie als abgeschlossen markiert hatte. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="70"/>
+        <location filename="../app/report/report_method_text.cpp" line="58"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="72"/>
+        <location filename="../app/report/report_method_text.cpp" line="62"/>
         <source>Articles still in progress were left out: %1. </source>
         <translation>Noch begonnene Artikel wurden ausgelassen: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="76"/>
+        <location filename="../app/report/report_method_text.cpp" line="66"/>
         <source>Before the reliability coding, coders trained on %1 articles and coded a pilot of %2 articles; %3. </source>
         <translation>Vor der Reliabilitätscodierung übten die Codierenden an %1 Artikeln und codierten einen Pretest von %2 Artikeln; %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="83"/>
+        <location filename="../app/report/report_method_text.cpp" line="73"/>
         <source>hours of training</source>
         <translation>Stunden Schulung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="85"/>
+        <location filename="../app/report/report_method_text.cpp" line="75"/>
         <source>Coder training: %1. </source>
         <translation>Codiererschulung: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="87"/>
+        <location filename="../app/report/report_method_text.cpp" line="77"/>
         <source>describe the training and its approximate hours</source>
         <translation>beschreiben Sie die Schulung und ihren ungefähren Umfang in Stunden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="93"/>
+        <location filename="../app/report/report_method_text.cpp" line="83"/>
         <source>%1 α = %2</source>
         <translation>%1 α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="97"/>
+        <location filename="../app/report/report_method_text.cpp" line="87"/>
         <source> (95% CI %1)</source>
         <translation> (95%-KI %1)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="102"/>
+        <location filename="../app/report/report_method_text.cpp" line="92"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
         <translation>Jede der vier Framing-Funktionen nach Entman (1993) wurde als Textstelle codiert; für die Reliabilität wurde jede Funktion zu einer binären Variablen (vorhanden oder nicht vorhanden) je %1: eine Einheit (%2) trägt eine Funktion, wenn die Textstelle einer codierenden Person mit dieser Funktion sie überlappt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="107"/>
+        <location filename="../app/report/report_method_text.cpp" line="97"/>
         <source>We report Krippendorff&apos;s alpha (Krippendorff, 2004) because it handles any number of coders, missing data and any level of measurement (Hayes &amp; Krippendorff, 2007). </source>
         <translation>Wir berichten Krippendorffs Alpha (Krippendorff, 2004), weil es beliebig viele Codierende, fehlende Daten und jedes Skalenniveau zulässt (Hayes &amp; Krippendorff, 2007). </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="111"/>
+        <location filename="../app/report/report_method_text.cpp" line="101"/>
         <source>Alpha was %1</source>
         <translation>Alpha betrug %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="113"/>
+        <location filename="../app/report/report_method_text.cpp" line="103"/>
         <source>; for the set of functions per %1, compared with the MASI distance (Passonneau, 2006), α = %2</source>
         <translation>; für die Menge der Funktionen je %1, verglichen mit der MASI-Distanz (Passonneau, 2006), α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="120"/>
+        <location filename="../app/report/report_method_text.cpp" line="110"/>
         <source>Intervals are 95% percentile bootstrap intervals from %1 resamples of the units; the table also gives the interval from resampled pairable values (Hayes &amp; Krippendorff, 2007), which is narrower than its nominal level when more than two coders are compared. </source>
         <translation>Die Intervalle sind 95%-Perzentil-Bootstrap-Intervalle aus %1 Neuziehungen der Einheiten; die Tabelle nennt auch das Intervall aus neu gezogenen paarbaren Werten (Hayes &amp; Krippendorff, 2007), das enger als sein nominales Niveau ist, wenn mehr als zwei Codierende verglichen werden. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="126"/>
+        <location filename="../app/report/report_method_text.cpp" line="117"/>
         <source>Following Krippendorff (2004), variables with α&#xa0;≥&#xa0;0.800 are relied on and variables with 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 support tentative conclusions only. </source>
         <translation>Nach Krippendorff (2004) wird Variablen mit α&#xa0;≥&#xa0;0.800 vertraut, und Variablen mit 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 tragen nur vorläufige Schlüsse. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="137"/>
+        <location filename="../app/report/report_method_text.cpp" line="128"/>
         <source>%1 (%2) α = %3</source>
         <translation>%1 (%2) α = %3</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="144"/>
+        <location filename="../app/report/report_method_text.cpp" line="136"/>
         <source>For the other variables alpha was: %1.</source>
         <translation>Für die übrigen Variablen betrug Alpha: %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="149"/>
+        <location filename="../app/report/report_method_text.cpp" line="141"/>
         <source>Disagreements were resolved by adjudication into a separate gold standard: %1 spans on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Abweichungen wurden durch Entscheidung in einen getrennten Goldstandard aufgelöst: %1 Textstellen in %2 Artikeln, entschieden von %3, %4 davon mit schriftlicher Begründung. Die unabhängigen Codierungen blieben unverändert; alle obigen Werte stammen aus ihnen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="161"/>
+        <location filename="../app/report/report_method_text.cpp" line="176"/>
         <source>No adjudication is recorded in the project yet: %1. </source>
         <translation>Im Projekt ist noch keine Entscheidung verzeichnet: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="162"/>
+        <location filename="../app/report/report_method_text.cpp" line="177"/>
         <source>say how disagreements were resolved, e.g. by discussion or by the lead</source>
         <translation>geben Sie an, wie Abweichungen aufgelöst wurden, z. B. durch Diskussion oder durch die Leitung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="165"/>
+        <location filename="../app/report/report_method_text.cpp" line="181"/>
         <source>Coding followed version %1 of the codebook (“%2”)</source>
         <translation>Die Codierung folgte Version %1 des Codebuchs („%2“)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="170"/>
+        <location filename="../app/report/report_method_text.cpp" line="186"/>
         <source>; %1 of %2 codings were made under an earlier version</source>
         <translation>; %1 von %2 Codierungen entstanden unter einer früheren Version</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="175"/>
+        <location filename="../app/report/report_method_text.cpp" line="191"/>
         <source>, which is available at %1.</source>
         <translation>, das unter %1 verfügbar ist.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="176"/>
+        <location filename="../app/report/report_method_text.cpp" line="192"/>
         <source>where readers can obtain it</source>
         <translation>wo Lesende es erhalten können</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="180"/>
+        <location filename="../app/report/report_method_text.cpp" line="196"/>
         <source>Highlighted brackets are for the authors to complete: the project does not record these facts.</source>
         <translation>Hervorgehobene Klammern ergänzen die Autorinnen und Autoren: das Projekt verzeichnet diese Angaben nicht.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="198"/>
+        <location filename="../app/report/report_method_text.cpp" line="214"/>
         <source>Size of the reliability sample and how it was selected</source>
         <translation>Umfang der Reliabilitätsstichprobe und wie sie ausgewählt wurde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="200"/>
+        <location filename="../app/report/report_method_text.cpp" line="216"/>
         <source>Relationship of the reliability sample to the full sample</source>
         <translation>Verhältnis der Reliabilitätsstichprobe zur Gesamtstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="202"/>
+        <location filename="../app/report/report_method_text.cpp" line="218"/>
         <source>Number of reliability coders</source>
         <translation>Anzahl der Codierenden in der Reliabilitätsprüfung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="203"/>
+        <location filename="../app/report/report_method_text.cpp" line="219"/>
         <source>Amount of coding conducted by each coder</source>
         <translation>Umfang der Codierung je codierender Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="204"/>
+        <location filename="../app/report/report_method_text.cpp" line="220"/>
         <source>Index or indices selected and why</source>
         <translation>Gewählte Koeffizienten und Begründung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="205"/>
+        <location filename="../app/report/report_method_text.cpp" line="221"/>
         <source>Reliability for each variable, for each index</source>
         <translation>Reliabilität jeder Variablen, für jeden Koeffizienten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="206"/>
+        <location filename="../app/report/report_method_text.cpp" line="222"/>
         <source>Amount of coder training required to reach reliability</source>
         <translation>Umfang der Codiererschulung bis zum Erreichen der Reliabilität</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="208"/>
+        <location filename="../app/report/report_method_text.cpp" line="224"/>
         <source>How disagreements were resolved</source>
         <translation>Wie Abweichungen aufgelöst wurden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="209"/>
+        <location filename="../app/report/report_method_text.cpp" line="226"/>
         <source>Where the codebook and coding instructions can be obtained</source>
         <translation>Wo Codebuch und Codieranweisungen erhältlich sind</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="214"/>
+        <location filename="../app/report/report_method_text.cpp" line="231"/>
         <source>#</source>
         <translation>#</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="214"/>
+        <location filename="../app/report/report_method_text.cpp" line="232"/>
         <source>Item</source>
         <translation>Punkt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="215"/>
+        <location filename="../app/report/report_method_text.cpp" line="233"/>
         <source>In this report</source>
         <translation>In diesem Bericht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="223"/>
+        <location filename="../app/report/report_method_text.cpp" line="242"/>
         <source>filled in from the project</source>
         <translation>aus dem Projekt ausgefüllt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="224"/>
+        <location filename="../app/report/report_method_text.cpp" line="243"/>
         <source>partly filled in; complete the bracket</source>
         <translation>teilweise ausgefüllt; ergänzen Sie die Klammer</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="36"/>
-        <location filename="../app/report/report_sections.cpp" line="38"/>
-        <location filename="../app/report/report_sections.cpp" line="117"/>
-        <location filename="../app/report/report_sections.cpp" line="201"/>
-        <location filename="../app/report/report_sections.cpp" line="238"/>
-        <location filename="../app/report/report_sections.cpp" line="372"/>
+        <location filename="../app/report/report_sections.cpp" line="23"/>
+        <location filename="../app/report/report_sections.cpp" line="25"/>
+        <location filename="../app/report/report_sections.cpp" line="108"/>
+        <location filename="../app/report/report_sections.cpp" line="193"/>
+        <location filename="../app/report/report_sections.cpp" line="233"/>
+        <location filename="../app/report/report_sections.cpp" line="370"/>
         <source>Variable</source>
         <translation>Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="38"/>
+        <location filename="../app/report/report_sections.cpp" line="26"/>
         <source>Level</source>
         <translation>Niveau</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="39"/>
-        <location filename="../app/report/report_sections.cpp" line="202"/>
+        <location filename="../app/report/report_sections.cpp" line="27"/>
+        <location filename="../app/report/report_sections.cpp" line="195"/>
         <source>Units</source>
         <translation>Einh.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="40"/>
-        <location filename="../app/report/report_sections.cpp" line="118"/>
+        <location filename="../app/report/report_sections.cpp" line="28"/>
+        <location filename="../app/report/report_sections.cpp" line="109"/>
         <source>Pairable values</source>
         <translation>Paarb. Werte</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="41"/>
+        <location filename="../app/report/report_sections.cpp" line="29"/>
         <source>95% CI, units</source>
         <translation>95%-KI, Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="41"/>
+        <location filename="../app/report/report_sections.cpp" line="30"/>
         <source>95% CI, pairs</source>
         <translation>95%-KI, Paare</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="42"/>
-        <location filename="../app/report/report_sections.cpp" line="202"/>
+        <location filename="../app/report/report_sections.cpp" line="31"/>
+        <location filename="../app/report/report_sections.cpp" line="196"/>
         <source>Agreement</source>
         <translation>Übereinst.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="42"/>
-        <location filename="../app/report/report_sections.cpp" line="292"/>
+        <location filename="../app/report/report_sections.cpp" line="32"/>
+        <location filename="../app/report/report_sections.cpp" line="289"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="56"/>
+        <location filename="../app/report/report_sections.cpp" line="47"/>
         <source>not computed: %1</source>
         <translation>nicht berechnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="86"/>
+        <location filename="../app/report/report_sections.cpp" line="77"/>
         <source>Units: %1 (articles for article-level items; passages matched across coders for span attributes). Agreement: percent agreement, which is not chance-corrected and is never reported alone (Lombard et al., 2002). Units: units resampled, percentile interval (the interval to report); pairs: pairable values resampled with the expected disagreement held fixed (Hayes &amp; Krippendorff, 2007), too narrow with more than two coders.</source>
         <translation>Einheiten: %1 (Artikel für Items auf Artikelebene; zwischen Codierenden zugeordnete Passagen für Merkmale von Textstellen). Übereinstimmung: prozentuale Übereinstimmung, die nicht zufallskorrigiert ist und nie allein berichtet wird (Lombard et al., 2002). Einheiten: Einheiten neu gezogen, Perzentilintervall (das zu berichtende Intervall); Paare: paarbare Werte neu gezogen bei festgehaltener erwarteter Nichtübereinstimmung (Hayes &amp; Krippendorff, 2007), bei mehr als zwei Codierenden zu eng.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="103"/>
+        <location filename="../app/report/report_sections.cpp" line="94"/>
         <source>Krippendorff&apos;s alpha per variable</source>
         <translation>Krippendorffs Alpha je Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="104"/>
+        <location filename="../app/report/report_sections.cpp" line="95"/>
         <source>Krippendorff&apos;s alpha per variable (dots) with 95% bootstrap intervals: whiskers resample pairable values (Hayes &amp; Krippendorff, 2007), bands resample units. The lines mark 0.667 and 0.800 (Krippendorff, 2004).</source>
         <translation>Krippendorffs Alpha je Variable (Punkte) mit 95%-Bootstrap-Intervallen: Whisker ziehen paarbare Werte neu (Hayes &amp; Krippendorff, 2007), Bänder ziehen Einheiten neu. Die Linien markieren 0.667 und 0.800 (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="119"/>
+        <location filename="../app/report/report_sections.cpp" line="110"/>
         <source>Rarest value</source>
         <translation>Seltenster Wert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="120"/>
+        <location filename="../app/report/report_sections.cpp" line="111"/>
         <source>Minimum for α ≥ 0.800</source>
         <translation>Minimum für α ≥ 0.800</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="121"/>
+        <location filename="../app/report/report_sections.cpp" line="112"/>
         <source>Enough?</source>
         <translation>Ausreichend?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="137"/>
+        <location filename="../app/report/report_sections.cpp" line="128"/>
         <source>yes</source>
         <translation>ja</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="138"/>
+        <location filename="../app/report/report_sections.cpp" line="129"/>
         <source>too few values</source>
         <translation>zu wenige Werte</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="141"/>
+        <location filename="../app/report/report_sections.cpp" line="132"/>
         <source>Krippendorff&apos;s (2004, §11.4) minimum number of pairable values for α ≥ 0.800 at p = 0.05, after Bloch &amp; Kraemer (1989), given the share of the rarest value.</source>
         <translation>Krippendorffs (2004, §11.4) Mindestzahl paarbarer Werte für α ≥ 0.800 bei p = 0.05 nach Bloch &amp; Kraemer (1989), gegeben den Anteil des seltensten Werts.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="154"/>
+        <location filename="../app/report/report_sections.cpp" line="145"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="154"/>
+        <location filename="../app/report/report_sections.cpp" line="146"/>
         <source>Role</source>
         <translation>Rolle</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="49"/>
-        <location filename="../app/report/report_sections.cpp" line="155"/>
+        <location filename="../app/report/report_frames_section.cpp" line="39"/>
+        <location filename="../app/report/report_sections.cpp" line="147"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="156"/>
+        <location filename="../app/report/report_sections.cpp" line="148"/>
         <source>Shared articles</source>
         <translation>Gemeinsame Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="157"/>
+        <location filename="../app/report/report_sections.cpp" line="149"/>
         <source>Spans</source>
         <translation>Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="163"/>
+        <location filename="../app/report/report_sections.cpp" line="155"/>
         <source>Answers</source>
         <translation>Antworten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="179"/>
+        <location filename="../app/report/report_sections.cpp" line="171"/>
         <source>Coders appear by pseudonym only. Articles: coded by the coder (assigned, or with a span or an answer); shared: also coded by another coder in this report.</source>
         <translation>Codierende erscheinen nur unter Pseudonym. Artikel: von der Person codiert (zugewiesen oder mit einer Textstelle oder Antwort); gemeinsam: in diesem Bericht auch von einer anderen Person codiert.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="191"/>
+        <location filename="../app/report/report_sections.cpp" line="183"/>
         <source>Cohen&apos;s kappa per coder pair</source>
         <translation>Cohens Kappa je Codierpaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="192"/>
+        <location filename="../app/report/report_sections.cpp" line="184"/>
         <source>Cohen&apos;s kappa (Cohen, 1960) for each pair of coders and each function, on the %1 both coded. Darker is higher; hatched cells are undefined.</source>
         <translation>Cohens Kappa (Cohen, 1960) für jedes Paar von Codierenden und jede Funktion, auf den %1, die beide codierten. Dunkler ist höher; schraffierte Zellen sind nicht definiert.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="201"/>
+        <location filename="../app/report/report_sections.cpp" line="194"/>
         <source>Pair</source>
         <translation>Paar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="203"/>
+        <location filename="../app/report/report_sections.cpp" line="197"/>
         <source>95% CI</source>
         <translation>95%-KI</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="223"/>
+        <location filename="../app/report/report_sections.cpp" line="219"/>
         <source>95% CI: large-sample interval with the standard error of Fleiss, Cohen &amp; Everitt (1969). A coder whose kappa is low with everyone else is worth a look before the coders are retrained.</source>
         <translation>95%-KI: Intervall für große Stichproben mit dem Standardfehler nach Fleiss, Cohen &amp; Everitt (1969). Eine codierende Person, deren Kappa mit allen anderen niedrig ist, verdient einen Blick, bevor die Codierenden nachgeschult werden.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="238"/>
+        <location filename="../app/report/report_sections.cpp" line="234"/>
         <source>Fleiss&apos; κ</source>
         <translation>Fleiss&apos; κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="239"/>
+        <location filename="../app/report/report_sections.cpp" line="235"/>
         <source>Light&apos;s κ</source>
         <translation>Lights κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="239"/>
+        <location filename="../app/report/report_sections.cpp" line="236"/>
         <source>Cohen&apos;s κ</source>
         <translation>Cohens κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="240"/>
+        <location filename="../app/report/report_sections.cpp" line="237"/>
         <source>Scott&apos;s π</source>
         <translation>Scotts π</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="241"/>
+        <location filename="../app/report/report_sections.cpp" line="238"/>
         <source>Bennett&apos;s S</source>
         <translation>Bennetts S</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="246"/>
+        <location filename="../app/report/report_sections.cpp" line="243"/>
         <source>n/a</source>
         <translation>n. v.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="260"/>
+        <location filename="../app/report/report_sections.cpp" line="257"/>
         <source>For comparison with older studies: Fleiss (1971) and Light (1971) for any number of coders, Cohen (1960), Scott (1955) and Bennett, Alpert &amp; Goldstein (1954) for two; n/a where their assumptions (complete data, two coders) do not hold.</source>
         <translation>Zum Vergleich mit älteren Studien: Fleiss (1971) und Light (1971) für beliebig viele Codierende, Cohen (1960), Scott (1955) und Bennett, Alpert &amp; Goldstein (1954) für zwei; n. v., wo ihre Voraussetzungen (vollständige Daten, zwei Codierende) nicht erfüllt sind.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="276"/>
+        <location filename="../app/report/report_sections.cpp" line="273"/>
         <source>Not computed: %1</source>
         <translation>Nicht berechnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="279"/>
+        <location filename="../app/report/report_sections.cpp" line="276"/>
         <source>Unitizing alpha (Krippendorff, 2004) compares where the coders put their spans, character by character, on the %1 articles that every coder coded (%2 characters laid end to end).</source>
         <translation>Unitizing-Alpha (Krippendorff, 2004) vergleicht Zeichen für Zeichen, wo die Codierenden ihre Textstellen setzen, auf den %1 Artikeln, die alle Codierenden codierten (%2 Zeichen aneinandergereiht).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="289"/>
+        <location filename="../app/report/report_sections.cpp" line="286"/>
         <source>Function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="290"/>
+        <location filename="../app/report/report_sections.cpp" line="287"/>
         <source>Observed disagreement</source>
         <translation>Beobachtete Nichtübereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="291"/>
+        <location filename="../app/report/report_sections.cpp" line="288"/>
         <source>Expected disagreement</source>
         <translation>Erwartete Nichtübereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="308"/>
+        <location filename="../app/report/report_sections.cpp" line="306"/>
         <source>all four</source>
         <translation>alle vier</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="328"/>
+        <location filename="../app/report/report_sections.cpp" line="326"/>
         <source>Alpha without each coder</source>
         <translation>Alpha ohne jeweils eine codierende Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="330"/>
+        <location filename="../app/report/report_sections.cpp" line="328"/>
         <source>Left out</source>
         <translation>Ausgelassen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="361"/>
+        <location filename="../app/report/report_sections.cpp" line="359"/>
         <source>Alpha recomputed without the coder&apos;s codings; in brackets the change against all coders (positive: the coder pulls alpha down). A diagnostic for retraining, not a licence to report the better figure (Krippendorff, 2004).</source>
         <translation>Alpha ohne die Codierungen der Person neu berechnet; in Klammern die Änderung gegenüber allen Codierenden (positiv: die Person senkt Alpha). Eine Diagnose für die Nachschulung, keine Erlaubnis, den besseren Wert zu berichten (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="368"/>
+        <location filename="../app/report/report_sections.cpp" line="366"/>
         <source>The article that costs most</source>
         <translation>Der Artikel, der am meisten kostet</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="372"/>
+        <location filename="../app/report/report_sections.cpp" line="371"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="373"/>
+        <location filename="../app/report/report_sections.cpp" line="372"/>
         <source>α without it</source>
         <translation>α ohne ihn</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="374"/>
+        <location filename="../app/report/report_sections.cpp" line="373"/>
         <source>Change</source>
         <translation>Änderung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="397"/>
+        <location filename="../app/report/report_sections.cpp" line="396"/>
         <source>Function confusion between coders</source>
         <translation>Funktionsverwechslungen zwischen Codierenden</translation>
     </message>
@@ -3762,143 +3767,143 @@
         <translation>Textstelle einer Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="417"/>
+        <location filename="../app/report/report_sections.cpp" line="418"/>
         <source>For each coder&apos;s span, the function the other coder gave the span that overlaps it most (none: nothing there), summed over ordered pairs of coders. Off the diagonal are the confusions a codebook rule could settle.</source>
         <translation>Für jede Textstelle einer codierenden Person die Funktion, die die andere Person der am stärksten überlappenden Textstelle gab (keine: dort ist nichts), summiert über geordnete Paare von Codierenden. Abseits der Diagonale stehen die Verwechslungen, die eine Codebuchregel klären könnte.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="30"/>
+        <location filename="../app/report/report_frames_section.cpp" line="19"/>
         <source>The newest saved frame analysis, “%1” (saved %2): %3 frames of the layer %4 over %5 articles, by Ward&apos;s hierarchical clustering refined by k-means (Matthes &amp; Kohring 2008). A frame&apos;s characteristic elements are those with an adjusted residual above 1.96 (Haberman 1973), with their share in the frame and in all articles. The frames are only as good as their elements: beside each element variable stands its Krippendorff&apos;s alpha (nominal, articles as units) over the coders of this report.</source>
         <translation>Die neueste gespeicherte Frame-Analyse, „%1“ (gespeichert %2): %3 Frames der Ebene %4 über %5 Artikel, mit hierarchischer Clusteranalyse nach Ward, verfeinert durch k-Means (Matthes &amp; Kohring 2008). Die kennzeichnenden Elemente eines Frames sind jene mit einem standardisierten Residuum über 1.96 (Haberman 1973), mit ihrem Anteil im Frame und in allen Artikeln. Die Frames sind nur so gut wie ihre Elemente: neben jeder Elementvariable steht ihr Krippendorffs Alpha (nominal, Artikel als Einheiten) über die Codierenden dieses Berichts.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="48"/>
+        <location filename="../app/report/report_frames_section.cpp" line="37"/>
         <source>Frame</source>
         <translation>Frame</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="48"/>
+        <location filename="../app/report/report_frames_section.cpp" line="38"/>
         <source>Name</source>
         <translation>Name</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="49"/>
+        <location filename="../app/report/report_frames_section.cpp" line="40"/>
         <source>Share</source>
         <translation>Anteil</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="50"/>
+        <location filename="../app/report/report_frames_section.cpp" line="41"/>
         <source>Characteristic elements</source>
         <translation>Kennzeichnende Elemente</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="52"/>
+        <location filename="../app/report/report_frames_section.cpp" line="43"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="60"/>
+        <location filename="../app/report/report_frames_section.cpp" line="51"/>
         <source>%1 (%2% / %3%)</source>
         <translation>%1 (%2% / %3%)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="71"/>
+        <location filename="../app/report/report_frames_section.cpp" line="62"/>
         <source>none stands out</source>
         <translation>keines sticht heraus</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="78"/>
+        <location filename="../app/report/report_frames_section.cpp" line="69"/>
         <source>Element variable</source>
         <translation>Elementvariable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="79"/>
+        <location filename="../app/report/report_frames_section.cpp" line="70"/>
         <source>Pairable articles</source>
         <translation>Paarbare Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="80"/>
+        <location filename="../app/report/report_frames_section.cpp" line="71"/>
         <source>Characterises</source>
         <translation>Kennzeichnet</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="234"/>
+        <location filename="../app/report/report_method_text.cpp" line="252"/>
         <source>Every figure above is what these commands print (add --json for all digits):</source>
         <translation>Jeder Wert oben ist das, was diese Befehle ausgeben (mit --json alle Stellen):</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="73"/>
+        <location filename="../app/report/report_document.cpp" line="64"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
         <translation>de</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="90"/>
+        <location filename="../app/report/report_document.cpp" line="82"/>
         <source>Method text</source>
         <translation>Methodentext</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="92"/>
+        <location filename="../app/report/report_document.cpp" line="84"/>
         <source>Reporting checklist (Lombard, Snyder-Duch &amp; Bracken, 2002)</source>
         <translation>Checkliste für die Berichterstattung (Lombard, Snyder-Duch &amp; Bracken, 2002)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="94"/>
+        <location filename="../app/report/report_document.cpp" line="86"/>
         <source>Reliability per variable</source>
         <translation>Reliabilität je Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="96"/>
+        <location filename="../app/report/report_document.cpp" line="88"/>
         <source>Is the sample large enough?</source>
         <translation>Ist die Stichprobe groß genug?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="98"/>
+        <location filename="../app/report/report_document.cpp" line="90"/>
         <source>Coders and the amount each coded</source>
         <translation>Codierende und ihr Codierumfang</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="100"/>
+        <location filename="../app/report/report_document.cpp" line="92"/>
         <source>Coder pairs</source>
         <translation>Codierpaare</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="101"/>
+        <location filename="../app/report/report_document.cpp" line="93"/>
         <source>Other coefficients</source>
         <translation>Weitere Koeffizienten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="103"/>
+        <location filename="../app/report/report_document.cpp" line="95"/>
         <source>Span boundaries: unitizing alpha</source>
         <translation>Grenzen der Textstellen: Unitizing-Alpha</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="107"/>
+        <location filename="../app/report/report_document.cpp" line="99"/>
         <source>Where reliability is lost</source>
         <translation>Wo Reliabilität verloren geht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="110"/>
+        <location filename="../app/report/report_document.cpp" line="102"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="111"/>
+        <location filename="../app/report/report_document.cpp" line="103"/>
         <source>Reproducing the figures</source>
         <translation>Die Werte reproduzieren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="113"/>
+        <location filename="../app/report/report_document.cpp" line="105"/>
         <source>References</source>
         <translation>Literatur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="154"/>
+        <location filename="../app/report/report_method_text.cpp" line="153"/>
         <source>Answers to article-level items were adjudicated as well: %1 gold answers on %2 articles, %3 of them with a written rationale. </source>
         <translation>Auch Antworten auf Items auf Artikelebene wurden entschieden: %1 Goldstandard-Antworten zu %2 Artikeln, %3 davon mit schriftlicher Begründung. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="164"/>
+        <location filename="../app/report/report_method_text.cpp" line="163"/>
         <source>Disagreements on article-level items were resolved by adjudication into a separate gold standard: %1 gold answers on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Abweichungen bei Items auf Artikelebene wurden durch Entscheidung in einen getrennten Goldstandard aufgelöst: %1 Goldstandard-Antworten zu %2 Artikeln, entschieden von %3, %4 davon mit schriftlicher Begründung. Die unabhängigen Codierungen blieben unverändert; alle obigen Werte stammen aus ihnen. </translation>
     </message>
@@ -4030,52 +4035,53 @@
 <context>
     <name>ServerConnectionText</name>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="92"/>
+        <location filename="../core/team/server_store_connection.cpp" line="133"/>
         <source>Out of memory while connecting to the server.</source>
         <translation>Kein Speicher mehr beim Verbinden mit dem Server.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="101"/>
+        <location filename="../core/team/server_store_connection.cpp" line="142"/>
         <source>The server refused the login %1.</source>
         <translation>Der Server hat die Anmeldung %1 abgewiesen.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="102"/>
+        <location filename="../core/team/server_store_connection.cpp" line="143"/>
         <source>Could not connect to the server %1.</source>
         <translation>Keine Verbindung zum Server %1 möglich.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="109"/>
+        <location filename="../core/team/server_store_connection.cpp" line="150"/>
         <source>The server %1 cannot speak UTF-8.</source>
         <translation>Der Server %1 kann kein UTF-8.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="123"/>
+        <location filename="../core/team/server_store_connection.cpp" line="164"/>
         <source>&quot;%1&quot; is not a PostgreSQL connection string.</source>
         <translation>„%1“ ist keine PostgreSQL-Verbindungszeichenkette.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="171"/>
+        <location filename="../core/team/server_store_connection.cpp" line="204"/>
         <source>The server %1 does not allow this for the role %2.</source>
         <translation>Der Server %1 erlaubt dies der Rolle %2 nicht.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="175"/>
+        <location filename="../core/team/server_store_connection.cpp" line="208"/>
         <source>The server %1 refused a row that breaks a rule of the team project.</source>
         <translation>Der Server %1 hat eine Zeile abgewiesen, die gegen eine Regel des Teamprojekts verstößt.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="181"/>
+        <location filename="../core/team/server_store_connection.cpp" line="214"/>
+        <location filename="../core/team/server_store_connection.cpp" line="299"/>
         <source>The connection to the server %1 was lost.</source>
         <translation>Die Verbindung zum Server %1 ist abgebrochen.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="185"/>
+        <location filename="../core/team/server_store_connection.cpp" line="218"/>
         <source>The server %1 could not run a statement.</source>
         <translation>Der Server %1 konnte eine Anweisung nicht ausführen.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="225"/>
+        <location filename="../core/team/server_store_connection.cpp" line="258"/>
         <source>Could not make a SCRAM verifier for the role %1.</source>
         <translation>Für die Rolle %1 konnte kein SCRAM-Verifier erzeugt werden.</translation>
     </message>
@@ -4088,7 +4094,7 @@
         <translation>Der Server %1 hat bereits eine Rolle %2; ein Teamprojekt braucht für jede Person eine neue Rolle (verwenden Sie einen anderen Datenbanknamen oder löschen Sie die alte Rolle).</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_roles.cpp" line="100"/>
+        <location filename="../core/team/server_store_roles.cpp" line="101"/>
         <source>The server %1 has no login for the person %2.</source>
         <translation>Der Server %1 hat keine Anmeldung für die Person %2.</translation>
     </message>
@@ -4096,12 +4102,12 @@
 <context>
     <name>ServerSchema</name>
     <message>
-        <location filename="../core/team/server_store_schema.cpp" line="401"/>
+        <location filename="../core/team/server_store_schema.cpp" line="485"/>
         <source>The team project on %1 was written by a newer Fourfold (server schema version %2; this version reads up to %3); nothing was changed.</source>
         <translation>Das Teamprojekt auf %1 wurde von einem neueren Fourfold geschrieben (Server-Schemaversion %2; diese Version liest bis %3); nichts wurde verändert.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_schema.cpp" line="410"/>
+        <location filename="../core/team/server_store_schema.cpp" line="494"/>
         <source>Upgrading the team project on %1 to server schema version %2 failed.</source>
         <translation>Das Aktualisieren des Teamprojekts auf %1 auf Server-Schemaversion %2 ist fehlgeschlagen.</translation>
     </message>
@@ -4109,12 +4115,12 @@
 <context>
     <name>SharedRows</name>
     <message>
-        <location filename="../core/store/shared_rows.cpp" line="106"/>
+        <location filename="../core/store/shared_rows.cpp" line="131"/>
         <source>A shared row is not a JSON object.</source>
         <translation>Eine gemeinsame Zeile ist kein JSON-Objekt.</translation>
     </message>
     <message>
-        <location filename="../core/store/shared_rows.cpp" line="127"/>
+        <location filename="../core/store/shared_rows.cpp" line="156"/>
         <source>The units of the article %1 are not pairs of 32-bit offsets.</source>
         <translation>Die Einheiten des Artikels %1 sind keine Paare von 32-Bit-Offsets.</translation>
     </message>
@@ -4341,7 +4347,7 @@
 <context>
     <name>StudyDesignText</name>
     <message numerus="yes">
-        <location filename="../core/project/study_design.cpp" line="847"/>
+        <location filename="../core/project/study_design.cpp" line="883"/>
         <source>Assign %n article(s)</source>
         <translation>
             <numerusform>%n Artikel zuweisen</numerusform>
@@ -4354,18 +4360,18 @@
         <translation>Die Teilstichprobe der Phase %1 ziehen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1329"/>
+        <location filename="../core/project/study_design.cpp" line="1365"/>
         <source>Show effort per coder</source>
         <translation>Aufwand je Person zeigen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1330"/>
+        <location filename="../core/project/study_design.cpp" line="1366"/>
         <source>Hide effort per coder</source>
         <translation>Aufwand je Person ausblenden</translation>
     </message>
     <message>
         <location filename="../core/project/study_design.cpp" line="121"/>
-        <location filename="../core/project/study_design.cpp" line="827"/>
+        <location filename="../core/project/study_design.cpp" line="863"/>
         <source>There is no coder &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keine codierende Person „%1“.</translation>
     </message>
@@ -4376,7 +4382,7 @@
     </message>
     <message>
         <location filename="../core/project/study_design.cpp" line="127"/>
-        <location filename="../core/project/study_design.cpp" line="830"/>
+        <location filename="../core/project/study_design.cpp" line="866"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 ist deaktiviert und erhält keine neuen Zuweisungen; aktivieren Sie die Person zuerst.</translation>
     </message>
@@ -4416,106 +4422,108 @@
         <translation>Die Phase %1 hat bereits eine Teilstichprobe.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="609"/>
+        <location filename="../core/project/study_design.cpp" line="645"/>
         <source>The record of the %1 subsample is not a JSON object.</source>
         <translation>Der Eintrag der Teilstichprobe %1 ist kein JSON-Objekt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="655"/>
+        <location filename="../core/project/study_design.cpp" line="691"/>
         <source>The subsample record is damaged: %1.</source>
         <translation>Der Eintrag der Teilstichprobe ist beschädigt: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="666"/>
+        <location filename="../core/project/study_design.cpp" line="702"/>
         <source>no valid phase</source>
         <translation>keine gültige Phase</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="670"/>
+        <location filename="../core/project/study_design.cpp" line="706"/>
         <source>unknown method &quot;%1&quot;</source>
         <translation>unbekannte Methode „%1“</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="675"/>
+        <location filename="../core/project/study_design.cpp" line="711"/>
         <source>unknown stratum &quot;%1&quot;</source>
         <translation>unbekannte Schicht „%1“</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="680"/>
+        <location filename="../core/project/study_design.cpp" line="716"/>
         <source>no valid seed</source>
         <translation>kein gültiger Seed</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="715"/>
+        <location filename="../core/project/study_design.cpp" line="751"/>
         <source>Double coding needs at least two coders; %1 given.</source>
         <translation>Doppelcodierung braucht mindestens zwei Codierende; angegeben: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="717"/>
+        <location filename="../core/project/study_design.cpp" line="753"/>
         <source>Name at least one coder for the remaining articles.</source>
         <translation>Nennen Sie mindestens eine codierende Person für die übrigen Artikel.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="769"/>
+        <location filename="../core/project/study_design.cpp" line="805"/>
         <source>Name at least one article and one coder.</source>
         <translation>Nennen Sie mindestens einen Artikel und eine codierende Person.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="779"/>
-        <location filename="../core/project/study_design.cpp" line="823"/>
+        <location filename="../core/project/study_design.cpp" line="815"/>
+        <location filename="../core/project/study_design.cpp" line="859"/>
         <source>There is no article &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keinen Artikel „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="840"/>
+        <location filename="../core/project/study_design.cpp" line="876"/>
         <source>Article &quot;%1&quot; is already assigned to %2 in the %3 phase.</source>
         <translation>Artikel „%1“ ist %2 in der Phase %3 bereits zugewiesen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="949"/>
+        <location filename="../core/project/study_design.cpp" line="985"/>
         <source>%1 span(s) of %2 carry the value &quot;%3&quot; of the attribute &quot;%4&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the attribute with one of its values (%5).</source>
         <translation>%1 Textstelle(n) von %2 tragen den Wert „%3“ des Merkmals „%4“, den die neue Version weder aufführt noch recodiert; fügen Sie dem Merkmal &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%5).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="968"/>
+        <location filename="../core/project/study_design.cpp" line="1004"/>
         <source>%1 answer(s) to the item &quot;%2&quot; are &quot;%3&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the item with one of its values (%4).</source>
         <translation>%1 Antwort(en) auf das Item „%2“ lauten „%3“, was die neue Version weder aufführt noch recodiert; fügen Sie dem Item &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%4).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1001"/>
+        <location filename="../core/project/study_design.cpp" line="1037"/>
         <source>A new codebook version needs a note that says what changed and why.</source>
         <translation>Eine neue Codebuchversion braucht eine Notiz, die sagt, was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1008"/>
+        <location filename="../core/project/study_design.cpp" line="1044"/>
         <source>The codebook is the same as version %1; no new version was made.</source>
         <translation>Das Codebuch ist identisch mit Version %1; es wurde keine neue Version erstellt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1112"/>
+        <location filename="../core/project/study_design.cpp" line="1148"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codebuchversion %1 → %2</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1114"/>
+        <location filename="../core/project/study_design.cpp" line="1150"/>
         <source>no changes</source>
         <translation>keine Änderungen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1210"/>
+        <location filename="../core/project/study_design.cpp" line="1246"/>
         <source>Training feedback is computed on paragraphs, sentences or tokens, not on %1 units.</source>
         <translation>Trainingsfeedback wird auf Absätzen, Sätzen oder Tokens berechnet, nicht auf %1-Einheiten.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1228"/>
+        <location filename="../core/project/study_design.cpp" line="1264"/>
         <source>Name the lead whose training coding is the master: there is not exactly one lead with training annotations.</source>
         <translation>Nennen Sie die Leitung, deren Trainingscodierung die Vorlage ist: es gibt nicht genau eine Leitung mit Trainingsannotationen.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_design.cpp" line="606"/>
         <source>The %1 phase has no subsample to withdraw.</source>
         <translation>Die Phase %1 hat keine Teilstichprobe, die zurückgezogen werden könnte.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_design.cpp" line="620"/>
         <source>Withdraw the %1 subsample</source>
         <translation>Teilstichprobe der Phase %1 zurückziehen</translation>
     </message>
@@ -4523,19 +4531,22 @@
 <context>
     <name>StudyEditText</name>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="39"/>
+        <location filename="../core/project/study_edits.cpp" line="45"/>
         <source>The project already holds %1.</source>
         <translation>Das Projekt enthält %1 bereits.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_edits.cpp" line="114"/>
         <source>The %1 phase has no subsample to withdraw.</source>
         <translation>Die Phase %1 hat keine Teilstichprobe, die zurückgezogen werden könnte.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_edits.cpp" line="134"/>
         <source>The %1 subsample cannot be withdrawn: coding has started on %2 of its %3 assignments (spans, answers, coding time, or a status of started or done). A draw can be withdrawn only before anyone codes it.</source>
         <translation>Die Teilstichprobe der Phase %1 kann nicht zurückgezogen werden: bei %2 ihrer %3 Zuweisungen hat das Codieren begonnen (Textstellen, Antworten, Codierzeit oder der Status begonnen oder fertig). Eine Ziehung kann nur zurückgezogen werden, bevor jemand sie codiert.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_edits.cpp" line="165"/>
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Eine Änderung, die nie ausgeführt wurde, kann nicht rückgängig gemacht werden.</translation>
     </message>
@@ -4599,108 +4610,104 @@
 <context>
     <name>TeamProjectText</name>
     <message>
-        <location filename="../core/team/team_join.cpp" line="62"/>
+        <location filename="../core/team/team_join.cpp" line="64"/>
         <source>%1 already exists; name a new file for the working file.</source>
         <translation>%1 existiert bereits; nennen Sie eine neue Datei für die Arbeitsdatei.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_join.cpp" line="82"/>
+        <location filename="../core/team/team_join.cpp" line="84"/>
         <source>The database %1 holds no team project.</source>
         <translation>Die Datenbank %1 enthält kein Teamprojekt.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_join.cpp" line="85"/>
+        <location filename="../core/team/team_join.cpp" line="87"/>
         <source>The team project on %1 was written by a newer Fourfold (server schema version %2; this version reads up to %3).</source>
         <translation>Das Teamprojekt auf %1 wurde von einem neueren Fourfold geschrieben (Server-Schemaversion %2; diese Version liest bis %3).</translation>
     </message>
     <message>
-        <location filename="../core/team/team_join.cpp" line="98"/>
-        <location filename="../core/team/team_sync.cpp" line="85"/>
+        <location filename="../core/team/team_join.cpp" line="100"/>
+        <location filename="../core/team/team_sync.cpp" line="101"/>
         <source>The login %1 is not a person of the team project.</source>
         <translation>Die Anmeldung %1 gehört zu keiner Person des Teamprojekts.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_join.cpp" line="104"/>
+        <location filename="../core/team/team_join.cpp" line="106"/>
         <source>The login %1 is %2, not %3.</source>
         <translation>Die Anmeldung %1 ist %2, nicht %3.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="111"/>
         <location filename="../core/team/team_password_files.cpp" line="53"/>
         <source>Could not write the password file %1.</source>
         <translation>Die Passwortdatei %1 konnte nicht geschrieben werden.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="124"/>
         <location filename="../core/team/team_password_files.cpp" line="65"/>
         <source>%1 is a symbolic link; name a new folder for the password files.</source>
         <translation>%1 ist ein symbolischer Link; nennen Sie einen neuen Ordner für die Passwortdateien.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="131"/>
         <location filename="../core/team/team_password_files.cpp" line="73"/>
         <source>%1 is not an empty folder; name a new folder for the password files.</source>
         <translation>%1 ist kein leerer Ordner; nennen Sie einen neuen Ordner für die Passwortdateien.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="137"/>
         <location filename="../core/team/team_password_files.cpp" line="79"/>
         <source>Could not create the folder %1.</source>
         <translation>Der Ordner %1 konnte nicht angelegt werden.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="143"/>
         <location filename="../core/team/team_password_files.cpp" line="85"/>
         <source>Could not make %1 private to its owner.</source>
         <translation>%1 konnte nicht nur für seinen Besitzer zugänglich gemacht werden.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="164"/>
+        <location filename="../core/team/team_project.cpp" line="91"/>
         <source>%1 is a coder copy; publish the main project.</source>
         <translation>%1 ist eine Kopie für Codierende; veröffentlichen Sie das Hauptprojekt.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="171"/>
+        <location filename="../core/team/team_project.cpp" line="98"/>
         <source>%1 has no people; add the lead and the coders before publishing it.</source>
         <translation>%1 hat keine Personen; fügen Sie die Leitung und die Codierenden hinzu, bevor Sie es veröffentlichen.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="184"/>
+        <location filename="../core/team/team_project.cpp" line="111"/>
         <source>%1 has several leads (%2); name the one publishing it.</source>
         <translation>%1 hat mehrere Leitungen (%2); nennen Sie die, die es veröffentlicht.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="186"/>
+        <location filename="../core/team/team_project.cpp" line="113"/>
         <source>%1 has no lead with the pseudonym %2 (leads: %3).</source>
         <translation>%1 hat keine Leitung mit dem Pseudonym %2 (Leitungen: %3).</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="188"/>
+        <location filename="../core/team/team_project.cpp" line="115"/>
         <source>none</source>
         <translation>keine</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="209"/>
+        <location filename="../core/team/team_project.cpp" line="136"/>
         <source>The pseudonyms %1 and %2 make the same login role %3; rename one of them.</source>
         <translation>Die Pseudonyme %1 und %2 ergeben dieselbe Anmelderolle %3; benennen Sie eines davon um.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="238"/>
+        <location filename="../core/team/team_project.cpp" line="165"/>
         <source>The database %1 holds a team project already; publish into an empty database.</source>
         <translation>Die Datenbank %1 enthält bereits ein Teamprojekt; veröffentlichen Sie in eine leere Datenbank.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="336"/>
+        <location filename="../core/team/team_project.cpp" line="269"/>
         <source>The team project is on %1, but %2 could not record it: %3</source>
         <translation>Das Teamprojekt liegt auf %1, aber %2 konnte das nicht festhalten: %3</translation>
     </message>
     <message>
-        <location filename="../core/team/team_sync.cpp" line="65"/>
+        <location filename="../core/team/team_project.cpp" line="300"/>
+        <location filename="../core/team/team_sync.cpp" line="74"/>
         <source>%1 is not a team working file (made by team publish or team join).</source>
         <translation>%1 ist keine Team-Arbeitsdatei (erstellt mit team publish oder team join).</translation>
     </message>
     <message>
-        <location filename="../core/team/team_sync.cpp" line="89"/>
+        <location filename="../core/team/team_sync.cpp" line="105"/>
         <source>The login %1 is %2, but %3 is the working file of %4.</source>
         <translation>Die Anmeldung %1 ist %2, aber %3 ist die Arbeitsdatei von %4.</translation>
     </message>
@@ -4708,7 +4715,7 @@
 <context>
     <name>TeamStatusText</name>
     <message>
-        <location filename="../core/team/team_status.cpp" line="38"/>
+        <location filename="../core/team/team_status.cpp" line="39"/>
         <source>%1 is not a team working file (made by team publish or team join).</source>
         <translation>%1 ist keine Team-Arbeitsdatei (erstellt mit team publish oder team join).</translation>
     </message>
@@ -5018,7 +5025,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="271"/>
-        <location filename="../app/cli/command_report.cpp" line="138"/>
+        <location filename="../app/cli/command_report.cpp" line="140"/>
         <location filename="../app/cli/command_score.cpp" line="159"/>
         <source>--bootstrap expects a number of replicates from 0 to 1000000.</source>
         <translation>--bootstrap erwartet eine Anzahl Replikationen von 0 bis 1000000.</translation>
@@ -5027,7 +5034,7 @@
         <location filename="../app/cli/command_agree.cpp" line="274"/>
         <location filename="../app/cli/command_export.cpp" line="111"/>
         <location filename="../app/cli/command_frames.cpp" line="276"/>
-        <location filename="../app/cli/command_report.cpp" line="141"/>
+        <location filename="../app/cli/command_report.cpp" line="143"/>
         <location filename="../app/cli/command_score.cpp" line="162"/>
         <source>--seed expects a non-negative whole number.</source>
         <translation>--seed erwartet eine nicht negative ganze Zahl.</translation>
@@ -5076,7 +5083,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="338"/>
-        <location filename="../app/cli/command_assign.cpp" line="432"/>
+        <location filename="../app/cli/command_assign.cpp" line="436"/>
         <source>unknown unit &quot;%1&quot;.</source>
         <translation>unbekannte Einheit „%1“.</translation>
     </message>
@@ -5087,9 +5094,10 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="357"/>
-        <location filename="../app/cli/command_assign.cpp" line="341"/>
-        <location filename="../app/cli/command_assign.cpp" line="367"/>
-        <location filename="../app/cli/command_report.cpp" line="130"/>
+        <location filename="../app/cli/command_assign.cpp" line="345"/>
+        <location filename="../app/cli/command_assign.cpp" line="371"/>
+        <location filename="../app/cli/command_assign.cpp" line="452"/>
+        <location filename="../app/cli/command_report.cpp" line="132"/>
         <source>unknown phase &quot;%1&quot;.</source>
         <translation>unbekannte Phase „%1“.</translation>
     </message>
@@ -5165,7 +5173,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="167"/>
-        <location filename="../app/cli/command_team.cpp" line="258"/>
+        <location filename="../app/cli/command_team.cpp" line="259"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
@@ -5280,97 +5288,97 @@
         <translation>Die Teilstichprobe dieser Phase (reliability oder pilot) ziehen, die alle --coders codieren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="250"/>
+        <location filename="../app/cli/command_assign.cpp" line="254"/>
         <source>With --draw: the number of articles.</source>
         <translation>Mit --draw: die Anzahl der Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="252"/>
+        <location filename="../app/cli/command_assign.cpp" line="256"/>
         <source>With --draw: the share of the sampling frame (0 &lt; F &lt;= 1, rounded up).</source>
         <translation>Mit --draw: der Anteil an der Auswahlgesamtheit (0 &lt; F &lt;= 1, aufgerundet).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="255"/>
+        <location filename="../app/cli/command_assign.cpp" line="259"/>
         <source>With --draw: draw proportionally within outlet, language or topic (metadata key &quot;topic&quot;).</source>
         <translation>Mit --draw: proportional innerhalb von Medium, Sprache oder Thema ziehen (Metadatenschlüssel „topic“).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="260"/>
+        <location filename="../app/cli/command_assign.cpp" line="264"/>
         <source>With --draw: leave articles found to be near copies of older ones at import out of the sampling frame.</source>
         <translation>Mit --draw: Artikel, die beim Import als Beinahe-Kopien älterer erkannt wurden, aus der Auswahlgesamtheit auslassen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="263"/>
+        <location filename="../app/cli/command_assign.cpp" line="267"/>
         <source>Seed of the draw or of dealing the rest (default: a random seed, printed and recorded).</source>
         <translation>Seed der Ziehung oder der Verteilung des Rests (Standard: ein zufälliger Seed, ausgegeben und gespeichert).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="267"/>
+        <location filename="../app/cli/command_assign.cpp" line="271"/>
         <source>With --draw: the smallest acceptable alpha for the sample-size advice (default 0.8).</source>
         <translation>Mit --draw: das kleinste akzeptable Alpha für die Empfehlung zum Stichprobenumfang (Standard 0.8).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="272"/>
+        <location filename="../app/cli/command_assign.cpp" line="276"/>
         <source>With --draw: the expected share of the rarest value (default 0.25).</source>
         <translation>Mit --draw: der erwartete Anteil des seltensten Werts (Standard 0.25).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="275"/>
+        <location filename="../app/cli/command_assign.cpp" line="279"/>
         <source>Deal every article without any assignment to --coders for production: single or double coding.</source>
         <translation>Jeden Artikel ohne Zuweisung den --coders für die Produktion zuteilen: Einfach- oder Doppelcodierung.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="280"/>
+        <location filename="../app/cli/command_assign.cpp" line="284"/>
         <source>With --articles: assign in this phase (training, pilot, reliability, production); with --show or --progress: only this phase.</source>
         <translation>Mit --articles: in dieser Phase zuweisen (training, pilot, reliability, production); mit --show oder --progress: nur diese Phase.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="285"/>
+        <location filename="../app/cli/command_assign.cpp" line="289"/>
         <source>Assign these articles (ids) to every one of --coders in --phase.</source>
         <translation>Diese Artikel (IDs) allen --coders in --phase zuweisen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="288"/>
+        <location filename="../app/cli/command_assign.cpp" line="292"/>
         <source>The coders&apos; pseudonyms.</source>
         <translation>Die Pseudonyme der Codierenden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="290"/>
+        <location filename="../app/cli/command_assign.cpp" line="294"/>
         <source>With --draw, --rest or --articles: show the plan, write nothing.</source>
         <translation>Mit --draw, --rest oder --articles: den Plan zeigen, nichts schreiben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="292"/>
+        <location filename="../app/cli/command_assign.cpp" line="296"/>
         <source>Show the assignments and the draws with their advice.</source>
         <translation>Die Zuweisungen und die Ziehungen mit ihrer Empfehlung zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="294"/>
+        <location filename="../app/cli/command_assign.cpp" line="298"/>
         <source>Show per coder and phase the articles done, agreement so far and effort.</source>
         <translation>Je Person und Phase die erledigten Artikel, die bisherige Übereinstimmung und den Aufwand zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="296"/>
+        <location filename="../app/cli/command_assign.cpp" line="300"/>
         <source>Show this coder&apos;s agreement with the master coding on finished training articles.</source>
         <translation>Die Übereinstimmung dieser Person mit der Vorlage-Codierung bei abgeschlossenen Trainingsartikeln zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="300"/>
+        <location filename="../app/cli/command_assign.cpp" line="304"/>
         <source>With --training: the lead whose training coding is the master (default: the one lead who coded training articles).</source>
         <translation>Mit --training: die Leitung, deren Trainingscodierung die Vorlage ist (Standard: die eine Leitung, die Trainingsartikel codiert hat).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="305"/>
+        <location filename="../app/cli/command_assign.cpp" line="309"/>
         <source>With --training: paragraph, sentence (default) or token.</source>
         <translation>Mit --training: paragraph, sentence (Standard) oder token.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="308"/>
+        <location filename="../app/cli/command_assign.cpp" line="312"/>
         <source>Show active time per coder (on) or only in aggregate (off, the default).</source>
         <translation>Aktive Zeit je Person zeigen (on) oder nur insgesamt (off, der Standard).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="310"/>
+        <location filename="../app/cli/command_assign.cpp" line="314"/>
         <location filename="../app/cli/command_check.cpp" line="13"/>
         <location filename="../app/cli/command_codebook.cpp" line="52"/>
         <location filename="../app/cli/command_extract.cpp" line="163"/>
@@ -5379,13 +5387,13 @@
         <location filename="../app/cli/command_team.cpp" line="35"/>
         <location filename="../app/cli/command_team.cpp" line="117"/>
         <location filename="../app/cli/command_team.cpp" line="176"/>
-        <location filename="../app/cli/command_team.cpp" line="220"/>
+        <location filename="../app/cli/command_team.cpp" line="221"/>
         <location filename="../app/cli/command_team_people.cpp" line="63"/>
         <source>Print the result as JSON.</source>
         <translation>Das Ergebnis als JSON ausgeben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="314"/>
+        <location filename="../app/cli/command_assign.cpp" line="318"/>
         <location filename="../app/cli/command_check.cpp" line="16"/>
         <location filename="../app/cli/command_codebook.cpp" line="54"/>
         <location filename="../app/cli/command_export.cpp" line="73"/>
@@ -5394,7 +5402,7 @@
         <location filename="../app/cli/command_import.cpp" line="129"/>
         <location filename="../app/cli/command_info.cpp" line="38"/>
         <location filename="../app/cli/command_merge.cpp" line="75"/>
-        <location filename="../app/cli/command_people.cpp" line="109"/>
+        <location filename="../app/cli/command_people.cpp" line="80"/>
         <location filename="../app/cli/command_report.cpp" line="69"/>
         <location filename="../app/cli/command_score.cpp" line="135"/>
         <location filename="../app/cli/command_team.cpp" line="38"/>
@@ -5402,117 +5410,117 @@
         <translation>Die Projektdatei.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="316"/>
+        <location filename="../app/cli/command_assign.cpp" line="320"/>
         <source>Assign articles to coders per phase (training, pilot, reliability, production), draw the reliability subsample with a recorded seed, and follow progress. Give one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
         <translation>Artikel je Phase (training, pilot, reliability, production) Codierenden zuweisen, die Reliabilitäts-Teilstichprobe mit gespeichertem Seed ziehen und den Fortschritt verfolgen. Geben Sie eine der Optionen --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort an.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="324"/>
+        <location filename="../app/cli/command_assign.cpp" line="329"/>
         <location filename="../app/cli/command_check.cpp" line="27"/>
         <location filename="../app/cli/command_codebook.cpp" line="71"/>
         <location filename="../app/cli/command_extract.cpp" line="175"/>
         <location filename="../app/cli/command_handout.cpp" line="37"/>
         <location filename="../app/cli/command_info.cpp" line="47"/>
         <location filename="../app/cli/command_new.cpp" line="30"/>
-        <location filename="../app/cli/command_people.cpp" line="130"/>
+        <location filename="../app/cli/command_people.cpp" line="101"/>
         <location filename="../app/cli/command_team.cpp" line="50"/>
         <source>expected exactly one project file.</source>
         <translation>genau eine Projektdatei erwartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="332"/>
+        <location filename="../app/cli/command_assign.cpp" line="337"/>
         <source>give exactly one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
         <translation>geben Sie genau eine der Optionen --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort an.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="350"/>
+        <location filename="../app/cli/command_assign.cpp" line="354"/>
         <source>the seed &quot;%1&quot; is not a whole number from 0 to 18446744073709551615.</source>
         <translation>der Seed „%1“ ist keine ganze Zahl von 0 bis 18446744073709551615.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="371"/>
+        <location filename="../app/cli/command_assign.cpp" line="375"/>
         <source>give --size or --fraction, not both.</source>
         <translation>geben Sie --size oder --fraction an, nicht beides.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="372"/>
+        <location filename="../app/cli/command_assign.cpp" line="376"/>
         <source>--draw needs --size or --fraction.</source>
         <translation>--draw braucht --size oder --fraction.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="378"/>
+        <location filename="../app/cli/command_assign.cpp" line="382"/>
         <source>--size must be a whole number of articles, at least 1; &quot;%1&quot; given.</source>
         <translation>--size muss eine ganze Zahl von Artikeln sein, mindestens 1; angegeben: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="386"/>
+        <location filename="../app/cli/command_assign.cpp" line="390"/>
         <source>--fraction must be a number above 0 and at most 1; &quot;%1&quot; given.</source>
         <translation>--fraction muss eine Zahl über 0 und höchstens 1 sein; angegeben: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="394"/>
+        <location filename="../app/cli/command_assign.cpp" line="398"/>
         <source>--stratify takes outlet, language or topic, not &quot;%1&quot;.</source>
         <translation>--stratify nimmt outlet, language oder topic, nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="400"/>
+        <location filename="../app/cli/command_assign.cpp" line="404"/>
         <source>--alpha-min must lie between 0 and 1; &quot;%1&quot; given.</source>
         <translation>--alpha-min muss zwischen 0 und 1 liegen; angegeben: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="405"/>
+        <location filename="../app/cli/command_assign.cpp" line="409"/>
         <source>--rarest must lie above 0 and at most 0.5; &quot;%1&quot; given.</source>
         <translation>--rarest muss über 0 und höchstens bei 0.5 liegen; angegeben: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="418"/>
+        <location filename="../app/cli/command_assign.cpp" line="422"/>
         <source>--rest takes single or double, not &quot;%1&quot;.</source>
         <translation>--rest nimmt single oder double, nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="423"/>
+        <location filename="../app/cli/command_assign.cpp" line="427"/>
         <source>--articles needs --phase.</source>
         <translation>--articles braucht --phase.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="425"/>
+        <location filename="../app/cli/command_assign.cpp" line="429"/>
         <source>--articles needs --coders.</source>
         <translation>--articles braucht --coders.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="438"/>
+        <location filename="../app/cli/command_assign.cpp" line="442"/>
         <source>--effort takes on or off, not &quot;%1&quot;.</source>
         <translation>--effort nimmt on oder off, nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="441"/>
+        <location filename="../app/cli/command_assign.cpp" line="445"/>
         <source>name the coders with --coders.</source>
         <translation>nennen Sie die Codierenden mit --coders.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="460"/>
+        <location filename="../app/cli/command_assign.cpp" line="487"/>
         <source>Active time is now shown per coder.</source>
         <translation>Aktive Zeit wird jetzt je Person angezeigt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="461"/>
+        <location filename="../app/cli/command_assign.cpp" line="488"/>
         <source>Active time is now shown in aggregate only.</source>
         <translation>Aktive Zeit wird jetzt nur insgesamt angezeigt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="479"/>
-        <location filename="../app/cli/command_assign.cpp" line="510"/>
+        <location filename="../app/cli/command_assign.cpp" line="506"/>
+        <location filename="../app/cli/command_assign.cpp" line="537"/>
         <source>Dry run: nothing was written.</source>
         <translation>Probelauf: nichts wurde geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="480"/>
-        <location filename="../app/cli/command_assign.cpp" line="511"/>
+        <location filename="../app/cli/command_assign.cpp" line="507"/>
+        <location filename="../app/cli/command_assign.cpp" line="538"/>
         <source>%1 assignments written.</source>
         <translation>%1 Zuweisungen geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="509"/>
+        <location filename="../app/cli/command_assign.cpp" line="536"/>
         <source>Seed %1.</source>
         <translation>Seed %1.</translation>
     </message>
@@ -6648,7 +6656,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_new.cpp" line="23"/>
-        <location filename="../app/cli/main.cpp" line="34"/>
+        <location filename="../app/cli/main.cpp" line="35"/>
         <source>Create an empty project file with the default codebook.</source>
         <translation>Eine leere Projektdatei mit dem Standard-Codebuch anlegen.</translation>
     </message>
@@ -6658,162 +6666,160 @@
         <translation>%1 angelegt (Standardsprache %2).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="40"/>
         <location filename="../app/cli/passphrase_input.cpp" line="22"/>
         <source>The passphrase file %1 could not be read.</source>
         <translation>Die Passphrase-Datei %1 konnte nicht gelesen werden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="49"/>
         <location filename="../app/cli/passphrase_input.cpp" line="31"/>
         <source>The passphrase in %1 is not UTF-8.</source>
         <translation>Die Passphrase in %1 ist kein UTF-8.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="69"/>
+        <location filename="../app/cli/command_people.cpp" line="40"/>
         <source>List everyone: pseudonym, role, enabled or disabled, and whether a lead&apos;s passphrase is set (names are not printed).</source>
         <translation>Alle auflisten: Pseudonym, Rolle, aktiviert oder deaktiviert und ob die Passphrase einer Leitung gesetzt ist (Namen werden nicht ausgegeben).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="73"/>
+        <location filename="../app/cli/command_people.cpp" line="44"/>
         <source>Add a person with this name (kept in the project, never printed or exported).</source>
         <translation>Eine Person mit diesem Namen hinzufügen (im Projekt gespeichert, nie ausgegeben oder exportiert).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="77"/>
+        <location filename="../app/cli/command_people.cpp" line="48"/>
         <source>The new person&apos;s pseudonym, unique in the project (the only name in exports).</source>
         <translation>Das Pseudonym der neuen Person, eindeutig im Projekt (der einzige Name in Exporten).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="81"/>
+        <location filename="../app/cli/command_people.cpp" line="52"/>
         <location filename="../app/cli/command_team_people.cpp" line="35"/>
         <source>coder (the default) or lead.</source>
         <translation>coder (Standard) oder lead.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="84"/>
+        <location filename="../app/cli/command_people.cpp" line="55"/>
         <source>A new lead&apos;s passphrase: the first line of FILE, or of standard input when FILE is -.</source>
         <translation>Die Passphrase einer neuen Leitung: die erste Zeile von DATEI oder der Standardeingabe, wenn DATEI - ist.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="89"/>
+        <location filename="../app/cli/command_people.cpp" line="60"/>
         <source>Give the person with pseudonym P the name NAME (the second argument).</source>
         <translation>Der Person mit dem Pseudonym P den Namen NAME (das zweite Argument) geben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="92"/>
+        <location filename="../app/cli/command_people.cpp" line="63"/>
         <source>Disable the person with pseudonym P: their codings stay; they take no new assignments and cannot be chosen on the desk.</source>
         <translation>Die Person mit dem Pseudonym P deaktivieren: ihre Codierungen bleiben; sie erhält keine neuen Zuweisungen und kann beim Codieren nicht gewählt werden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="96"/>
+        <location filename="../app/cli/command_people.cpp" line="67"/>
         <location filename="../app/cli/command_team_people.cpp" line="46"/>
         <source>Enable a disabled person again.</source>
         <translation>Eine deaktivierte Person wieder aktivieren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="98"/>
+        <location filename="../app/cli/command_people.cpp" line="69"/>
         <source>The lead making the change (needed once the project has a lead).</source>
         <translation>Die Leitung, die die Änderung vornimmt (nötig, sobald das Projekt eine Leitung hat).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="101"/>
+        <location filename="../app/cli/command_people.cpp" line="72"/>
         <location filename="../app/cli/command_team_people.cpp" line="51"/>
         <source>That lead&apos;s passphrase: the first line of FILE (- or left out: standard input).</source>
         <translation>Die Passphrase dieser Leitung: die erste Zeile von DATEI (- oder weggelassen: Standardeingabe).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="105"/>
+        <location filename="../app/cli/command_people.cpp" line="76"/>
         <source>Print the list or the result as JSON.</source>
         <translation>Die Liste oder das Ergebnis als JSON ausgeben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="111"/>
+        <location filename="../app/cli/command_people.cpp" line="82"/>
         <source>The new name, with --rename.</source>
         <translation>Der neue Name, mit --rename.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="113"/>
+        <location filename="../app/cli/command_people.cpp" line="84"/>
         <source>List and change the people of a project. Changes need a lead (--lead and its passphrase) once the project has one; each is logged. Output names people by pseudonym only.</source>
         <translation>Die Personen eines Projekts auflisten und ändern. Änderungen brauchen eine Leitung (--lead und ihre Passphrase), sobald das Projekt eine hat; jede wird protokolliert. Die Ausgabe nennt Personen nur beim Pseudonym.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="125"/>
+        <location filename="../app/cli/command_people.cpp" line="96"/>
         <source>give exactly one of --list, --add, --rename, --disable and --enable.</source>
         <translation>geben Sie genau eine der Optionen --list, --add, --rename, --disable und --enable an.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="129"/>
+        <location filename="../app/cli/command_people.cpp" line="100"/>
         <source>expected the project file and the new name.</source>
         <translation>Projektdatei und neuer Name erwartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="136"/>
+        <location filename="../app/cli/command_people.cpp" line="107"/>
         <location filename="../app/cli/command_team_people.cpp" line="92"/>
         <source>--role takes coder or lead, not &quot;%1&quot;.</source>
         <translation>--role nimmt coder oder lead, nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="139"/>
+        <location filename="../app/cli/command_people.cpp" line="110"/>
         <location filename="../app/cli/command_team_people.cpp" line="95"/>
         <source>name the new person&apos;s pseudonym with --pseudonym.</source>
         <translation>nennen Sie das Pseudonym der neuen Person mit --pseudonym.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="142"/>
+        <location filename="../app/cli/command_people.cpp" line="113"/>
         <location filename="../app/cli/command_team_people.cpp" line="98"/>
         <source>a lead needs a passphrase: give it with --passphrase-file FILE (- for standard input).</source>
         <translation>eine Leitung braucht eine Passphrase: geben Sie sie mit --passphrase-file DATEI an (- für die Standardeingabe).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="150"/>
+        <location filename="../app/cli/command_people.cpp" line="121"/>
         <location filename="../app/cli/command_team_people.cpp" line="104"/>
         <source>only one passphrase can come from standard input; give the other in a file.</source>
         <translation>nur eine Passphrase kann aus der Standardeingabe kommen; geben Sie die andere in einer Datei an.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="174"/>
+        <location filename="../app/cli/command_people.cpp" line="145"/>
         <source>disabled</source>
         <translation>deaktiviert</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="174"/>
+        <location filename="../app/cli/command_people.cpp" line="145"/>
         <source>enabled</source>
         <translation>aktiviert</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="176"/>
+        <location filename="../app/cli/command_people.cpp" line="147"/>
         <source>passphrase set</source>
         <translation>Passphrase gesetzt</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="177"/>
+        <location filename="../app/cli/command_people.cpp" line="148"/>
         <source>no passphrase yet (set when first chosen)</source>
         <translation>noch keine Passphrase (wird bei der ersten Wahl gesetzt)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="204"/>
+        <location filename="../app/cli/command_people.cpp" line="175"/>
         <location filename="../app/cli/command_team_people.cpp" line="85"/>
         <source>changing people needs a lead: name yourself with --lead L (your passphrase on standard input or with --lead-passphrase-file FILE).</source>
         <translation>Personen zu ändern braucht eine Leitung: nennen Sie sich mit --lead L (Ihre Passphrase über die Standardeingabe oder mit --lead-passphrase-file DATEI).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="223"/>
+        <location filename="../app/cli/command_people.cpp" line="194"/>
         <source>Added %1 (%2).</source>
         <translation>%1 (%2) hinzugefügt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="227"/>
+        <location filename="../app/cli/command_people.cpp" line="198"/>
         <source>Renamed %1.</source>
         <translation>%1 umbenannt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="234"/>
+        <location filename="../app/cli/command_people.cpp" line="205"/>
         <source>Disabled %1: their codings stay; they take no new assignments.</source>
         <translation>%1 deaktiviert: die Codierungen bleiben; die Person erhält keine neuen Zuweisungen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="235"/>
+        <location filename="../app/cli/command_people.cpp" line="206"/>
         <source>Enabled %1.</source>
         <translation>%1 aktiviert.</translation>
     </message>
@@ -6898,23 +6904,23 @@
         <translation>--language nimmt en, nl oder de, nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_report.cpp" line="123"/>
+        <location filename="../app/cli/command_report.cpp" line="125"/>
         <location filename="../app/cli/command_score.cpp" line="169"/>
         <source>unknown unit &quot;%1&quot; (expected paragraph, sentence or token).</source>
         <translation>unbekannte Einheit „%1“ (erwartet: paragraph, sentence oder token).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_report.cpp" line="166"/>
+        <location filename="../app/cli/command_report.cpp" line="168"/>
         <source>Wrote %1</source>
         <translation>%1 geschrieben</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_report.cpp" line="179"/>
+        <location filename="../app/cli/command_report.cpp" line="181"/>
         <source>Write the reliability report (needs a build with FOURFOLD_BUILD_DESKTOP=ON).</source>
         <translation>Den Reliabilitätsbericht schreiben (braucht einen Build mit FOURFOLD_BUILD_DESKTOP=ON).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_report.cpp" line="185"/>
+        <location filename="../app/cli/command_report.cpp" line="187"/>
         <source>This fourfold-cli was built without the graphical libraries, so it cannot write reports; rebuild with FOURFOLD_BUILD_DESKTOP=ON.</source>
         <translation>Dieses fourfold-cli wurde ohne die Grafikbibliotheken gebaut und kann daher keine Berichte schreiben; bauen Sie es mit FOURFOLD_BUILD_DESKTOP=ON neu.</translation>
     </message>
@@ -7105,7 +7111,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="179"/>
-        <location filename="../app/cli/command_team.cpp" line="223"/>
+        <location filename="../app/cli/command_team.cpp" line="224"/>
         <source>Your team working file.</source>
         <translation>Ihre Team-Arbeitsdatei.</translation>
     </message>
@@ -7116,48 +7122,48 @@
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="191"/>
-        <location filename="../app/cli/command_team.cpp" line="233"/>
+        <location filename="../app/cli/command_team.cpp" line="234"/>
         <location filename="../app/cli/command_team_people.cpp" line="82"/>
         <source>expected exactly one working file.</source>
         <translation>genau eine Arbeitsdatei erwartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="205"/>
+        <location filename="../app/cli/command_team.cpp" line="206"/>
         <source>Synced with %1: %2 sent, %3 received, %4 conflicts (through change %5).</source>
         <translation>Mit %1 synchronisiert: %2 gesendet, %3 empfangen, %4 Konflikte (bis Änderung %5).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="225"/>
+        <location filename="../app/cli/command_team.cpp" line="226"/>
         <source>Show a working file&apos;s team project: its server, whose file it is, when it last synced and what the next sync would send. Reads the file only (works offline).</source>
         <translation>Das Teamprojekt einer Arbeitsdatei zeigen: seinen Server, wem die Datei gehört, wann sie zuletzt synchronisiert wurde und was die nächste Synchronisation senden würde. Liest nur die Datei (funktioniert offline).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="255"/>
+        <location filename="../app/cli/command_team.cpp" line="256"/>
         <source>Working file of %1 (%2) on %3, through change %4.</source>
         <translation>Arbeitsdatei von %1 (%2) auf %3, bis Änderung %4.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="257"/>
+        <location filename="../app/cli/command_team.cpp" line="258"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="262"/>
+        <location filename="../app/cli/command_team.cpp" line="263"/>
         <source>Not synced since it was made.</source>
         <translation>Seit der Erstellung nicht synchronisiert.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="263"/>
+        <location filename="../app/cli/command_team.cpp" line="264"/>
         <source>Last synced %1.</source>
         <translation>Zuletzt synchronisiert %1.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="268"/>
+        <location filename="../app/cli/command_team.cpp" line="269"/>
         <source>Nothing waiting to be sent.</source>
         <translation>Nichts wartet auf das Senden.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_team.cpp" line="269"/>
+        <location filename="../app/cli/command_team.cpp" line="270"/>
         <source>%n change(s) waiting to be sent (%1).</source>
         <translation>
             <numerusform>%n Änderung wartet auf das Senden (%1).</numerusform>
@@ -7165,7 +7171,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_team.cpp" line="273"/>
+        <location filename="../app/cli/command_team.cpp" line="274"/>
         <source>%n conflict(s) from syncs wait for the lead.</source>
         <translation>
             <numerusform>%n Konflikt aus Synchronisationen wartet auf die Leitung.</numerusform>
@@ -7173,137 +7179,137 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="292"/>
+        <location filename="../app/cli/command_team.cpp" line="295"/>
         <source>Usage: fourfold-cli team SUBCOMMAND [options]</source>
         <translation>Aufruf: fourfold-cli team UNTERBEFEHL [Optionen]</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="293"/>
+        <location filename="../app/cli/command_team.cpp" line="296"/>
         <source>  publish   Create the team project of a project file on a PostgreSQL server.</source>
         <translation>  publish   Das Teamprojekt einer Projektdatei auf einem PostgreSQL-Server anlegen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="295"/>
+        <location filename="../app/cli/command_team.cpp" line="298"/>
         <source>  join      Write your working file of a team project from its server.</source>
         <translation>  join      Ihre Arbeitsdatei eines Teamprojekts von seinem Server schreiben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="297"/>
+        <location filename="../app/cli/command_team.cpp" line="300"/>
         <source>  sync      Push and pull a working file&apos;s codings once.</source>
         <translation>  sync      Die Codierungen einer Arbeitsdatei einmal senden und abholen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="299"/>
+        <location filename="../app/cli/command_team.cpp" line="302"/>
         <source>  status    What a working file last synced and what waits to be sent.</source>
         <translation>  status    Was eine Arbeitsdatei zuletzt synchronisiert hat und was auf das Senden wartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="304"/>
+        <location filename="../app/cli/command_team.cpp" line="309"/>
         <source>unknown subcommand &quot;%1&quot;.</source>
         <translation>unbekannter Unterbefehl „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="37"/>
+        <location filename="../app/cli/main.cpp" line="38"/>
         <source>Import articles from text, HTML, JSON Lines or CSV files.</source>
         <translation>Artikel aus Text-, HTML-, JSON-Lines- oder CSV-Dateien importieren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="40"/>
+        <location filename="../app/cli/main.cpp" line="41"/>
         <source>Show what a project holds: articles, units, coders, annotations.</source>
         <translation>Zeigen, was ein Projekt enthält: Artikel, Einheiten, Codierende, Annotationen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="44"/>
+        <location filename="../app/cli/main.cpp" line="45"/>
         <source>Check a project file&apos;s integrity.</source>
         <translation>Die Integrität einer Projektdatei prüfen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="46"/>
+        <location filename="../app/cli/main.cpp" line="47"/>
         <source>Inter-coder reliability of a matrix file or of a project&apos;s codings.</source>
         <translation>Intercoder-Reliabilität einer Matrixdatei oder der Codierungen eines Projekts.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="50"/>
+        <location filename="../app/cli/main.cpp" line="51"/>
         <source>Frames as clusters of articles by their frame elements (Ward, then k-means).</source>
         <translation>Frames als Cluster von Artikeln nach ihren Frame-Elementen (Ward, dann k-Means).</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="54"/>
+        <location filename="../app/cli/main.cpp" line="55"/>
         <source>Run an extractor (built-in baseline or external command) over a project&apos;s articles.</source>
         <translation>Einen Extraktor (eingebaute Baseline oder externer Befehl) über die Artikel eines Projekts laufen lassen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="59"/>
+        <location filename="../app/cli/main.cpp" line="60"/>
         <source>Score an extractor run against gold or a coder.</source>
         <translation>Einen Extraktorlauf gegen den Goldstandard oder eine codierende Person bewerten.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="62"/>
+        <location filename="../app/cli/main.cpp" line="63"/>
         <source>Export gold, codings or a run as JSON Lines, W3C Web Annotation, IOB2 or CSV.</source>
         <translation>Goldstandard, Codierungen oder einen Lauf als JSON Lines, W3C Web Annotation, IOB2 oder CSV exportieren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="66"/>
+        <location filename="../app/cli/main.cpp" line="67"/>
         <source>Write the reliability report (HTML or PDF).</source>
         <translation>Den Reliabilitätsbericht schreiben (HTML oder PDF).</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="68"/>
+        <location filename="../app/cli/main.cpp" line="69"/>
         <source>Assign articles to coders and draw the reliability subsample.</source>
         <translation>Artikel Codierenden zuweisen und die Reliabilitäts-Teilstichprobe ziehen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="72"/>
+        <location filename="../app/cli/main.cpp" line="73"/>
         <source>List codebook versions, add one from a JSON file, and show what changed.</source>
         <translation>Codebuchversionen auflisten, eine aus einer JSON-Datei hinzufügen und zeigen, was sich geändert hat.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="76"/>
+        <location filename="../app/cli/main.cpp" line="77"/>
         <source>Write a coder copy holding only that coder&apos;s articles and annotations.</source>
         <translation>Eine Kopie für Codierende schreiben, die nur die Artikel und Annotationen dieser Person enthält.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="80"/>
+        <location filename="../app/cli/main.cpp" line="81"/>
         <source>Merge returned coder copies into the project.</source>
         <translation>Zurückgegebene Kopien für Codierende in das Projekt zusammenführen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="82"/>
+        <location filename="../app/cli/main.cpp" line="83"/>
         <source>Team projects on a PostgreSQL server: publish a project, join one (team publish, team join).</source>
         <translation>Teamprojekte auf einem PostgreSQL-Server: ein Projekt veröffentlichen, einem beitreten (team publish, team join).</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="87"/>
+        <location filename="../app/cli/main.cpp" line="88"/>
         <source>List, add, rename, disable and enable the people of a project (by pseudonym).</source>
         <translation>Die Personen eines Projekts auflisten, hinzufügen, umbenennen, deaktivieren und aktivieren (nach Pseudonym).</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="91"/>
+        <location filename="../app/cli/main.cpp" line="92"/>
         <source>Build the demo project from its source files.</source>
         <translation>Das Demoprojekt aus seinen Quelldateien erstellen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="99"/>
+        <location filename="../app/cli/main.cpp" line="100"/>
         <source>Usage: fourfold-cli COMMAND [options] [arguments]</source>
         <translation>Aufruf: fourfold-cli BEFEHL [Optionen] [Argumente]</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="101"/>
+        <location filename="../app/cli/main.cpp" line="102"/>
         <source>Commands:</source>
         <translation>Befehle:</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="107"/>
+        <location filename="../app/cli/main.cpp" line="108"/>
         <source>Run &quot;fourfold-cli COMMAND --help&quot; for a command&apos;s options.</source>
         <translation>„fourfold-cli BEFEHL --help“ zeigt die Optionen eines Befehls.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="161"/>
+        <location filename="../app/cli/main.cpp" line="163"/>
         <source>fourfold-cli: unknown command &quot;%1&quot;.</source>
         <translation>fourfold-cli: unbekannter Befehl „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="162"/>
+        <location filename="../app/cli/main.cpp" line="164"/>
         <source>Run &quot;fourfold-cli --help&quot; for the list of commands.</source>
         <translation>„fourfold-cli --help“ zeigt die Liste der Befehle.</translation>
     </message>
@@ -7358,17 +7364,17 @@
         <translation>geben Sie genau eines von --add, --disable und --enable an.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team_people.cpp" line="153"/>
+        <location filename="../app/cli/command_team_people.cpp" line="157"/>
         <source>Added %1 with the login %2; the password is in %3 (hand it to them alone).</source>
         <translation>%1 mit der Anmeldung %2 hinzugefügt; das Passwort steht in %3 (nur dieser Person geben).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team_people.cpp" line="157"/>
+        <location filename="../app/cli/command_team_people.cpp" line="161"/>
         <source>Enabled %1: the login %2 may log in again.</source>
         <translation>%1 aktiviert: die Anmeldung %2 darf sich wieder anmelden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team_people.cpp" line="160"/>
+        <location filename="../app/cli/command_team_people.cpp" line="164"/>
         <source>Disabled %1: the login %2 may no longer log in; their codings stay.</source>
         <translation>%1 deaktiviert: die Anmeldung %2 darf sich nicht mehr anmelden; die Codierungen bleiben.</translation>
     </message>
@@ -7378,10 +7384,12 @@
         <translation>  people    Einem laufenden Teamprojekt eine Person hinzufügen oder eine deaktivieren.</translation>
     </message>
     <message>
+        <location filename="../app/cli/command_assign.cpp" line="250"/>
         <source>Withdraw the committed subsample of this phase (reliability or pilot) while nobody has coded any of its assignments yet.</source>
         <translation>Die gespeicherte Teilstichprobe dieser Phase (reliability oder pilot) zurückziehen, solange noch niemand eine ihrer Zuweisungen codiert hat.</translation>
     </message>
     <message numerus="yes">
+        <location filename="../app/cli/command_assign.cpp" line="468"/>
         <source>The %1 subsample is withdrawn: %n assignment(s) removed.</source>
         <translation>
             <numerusform>Die Teilstichprobe der Phase %1 ist zurückgezogen: %n Zuweisung entfernt.</numerusform>
@@ -7560,6 +7568,35 @@ Beinahe-Kopie von %2</translation>
         <location filename="../app/desktop/article_list_model.cpp" line="130"/>
         <source>Characters</source>
         <translation>Zeichen</translation>
+    </message>
+</context>
+<context>
+    <name>fourfold::BackgroundSync</name>
+    <message numerus="yes">
+        <location filename="../app/desktop/team/background_sync.cpp" line="104"/>
+        <source>offline — %n change(s) waiting</source>
+        <translation>
+            <numerusform>offline — %n Änderung wartet</numerusform>
+            <numerusform>offline — %n Änderungen warten</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/background_sync.cpp" line="106"/>
+        <source>syncing…</source>
+        <translation>wird synchronisiert…</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/team/background_sync.cpp" line="110"/>
+        <source>synced %n s ago</source>
+        <translation>
+            <numerusform>vor %n s synchronisiert</numerusform>
+            <numerusform>vor %n s synchronisiert</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/background_sync.cpp" line="112"/>
+        <source>conflict — lead decides</source>
+        <translation>Konflikt — die Leitung entscheidet</translation>
     </message>
 </context>
 <context>
@@ -8060,14 +8097,65 @@ Beinahe-Kopie von %2</translation>
     </message>
 </context>
 <context>
+    <name>fourfold::CoderLegend</name>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="15"/>
+        <source>Coders of the spans shown</source>
+        <translation>Codierende der gezeigten Textstellen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="21"/>
+        <source>Each span&apos;s badge carries its coder&apos;s pseudonym after the letter.</source>
+        <translation>Das Kennzeichen jeder Textstelle trägt nach dem Buchstaben das Pseudonym der oder des Codierenden.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="23"/>
+        <source>Show the spans of</source>
+        <translation>Textstellen zeigen von</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="24"/>
+        <source>&amp;Show spans of:</source>
+        <translation>Textstellen &amp;zeigen von:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="46"/>
+        <source>All coders</source>
+        <translation>Alle Codierenden</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="70"/>
+        <source>unknown</source>
+        <translation>unbekannt</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/coder_legend.cpp" line="76"/>
+        <source>&lt;b&gt;%1&lt;/b&gt; %n span(s)</source>
+        <translation>
+            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n Textstelle</numerusform>
+            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n Textstellen</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="82"/>
+        <source>No coder has spans on this article.</source>
+        <translation>Niemand hat in diesem Artikel Textstellen codiert.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="83"/>
+        <source>Spans by: %1</source>
+        <translation>Textstellen von: %1</translation>
+    </message>
+</context>
+<context>
     <name>fourfold::CodingSession</name>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="103"/>
+        <location filename="../app/desktop/coding_session.cpp" line="133"/>
         <source>“%1” (%2), similarity %3</source>
         <translation>„%1“ (%2), Ähnlichkeit %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="197"/>
+        <location filename="../app/desktop/coding_session.cpp" line="227"/>
         <source>%1 is read-only: you can read, compare and compute, but nothing is saved. To code, copy the file to a folder you may write to and open the copy.</source>
         <translation>%1 ist schreibgeschützt: Sie können lesen, vergleichen und berechnen, aber nichts wird gespeichert. Um zu codieren, kopieren Sie die Datei in einen Ordner, in den Sie schreiben dürfen, und öffnen Sie die Kopie.</translation>
     </message>
@@ -8128,269 +8216,269 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::ComparisonWindow</name>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="93"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="95"/>
         <source>Compare coders and decide gold — %1</source>
         <translation>Codierende vergleichen und Goldstandard entscheiden — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="95"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="97"/>
         <source>Only a lead compares coders and decides the gold standard. Open the project as a lead to use this window.</source>
         <translation>Nur die Leitung vergleicht Codierende und entscheidet über den Goldstandard. Öffnen Sie das Projekt als Leitung, um dieses Fenster zu verwenden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="119"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="121"/>
         <source>Nothing to compare yet. An article comes here once at least two coders have coded it and marked it done (or tick “Articles in progress” above). Plan double coding in Lead → Study design; the progress board shows who is done.</source>
         <translation>Noch nichts zu vergleichen. Ein Artikel erscheint hier, sobald mindestens zwei Codierende ihn codiert und als erledigt markiert haben (oder setzen Sie oben „Artikel in Bearbeitung“). Planen Sie Doppelcodierung unter Leitung → Studiendesign; die Fortschrittsübersicht zeigt, wer fertig ist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="169"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="171"/>
         <source>Articles to adjudicate</source>
         <translation>Zu entscheidende Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="188"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="190"/>
         <source>Margin: ∅ a coder has no span here · ≠ different functions · ↔ different boundaries · ≈ different attributes · ✓ decided. Lanes under each line: problem (solid), cause (dashed), evaluation (dotted), remedy (dash-dot). Hatched: this coder has no span in the passage.</source>
         <translation>Rand: ∅ eine codierende Person hat hier keine Textstelle · ≠ unterschiedliche Funktionen · ↔ unterschiedliche Grenzen · ≈ unterschiedliche Merkmale · ✓ entschieden. Spuren unter jeder Zeile: Problem (durchgezogen), Ursache (gestrichelt), Bewertung (gepunktet), Lösung (Strich-Punkt). Schraffiert: diese codierende Person hat in der Passage keine Textstelle.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
         <source>Who</source>
         <translation>Wer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
         <source>Decision</source>
         <translation>Entscheidung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="230"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="232"/>
         <source>Spans of the passage</source>
         <translation>Textstellen der Passage</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="241"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="243"/>
         <source>&amp;Rationale (optional, kept with the decision):</source>
         <translation>&amp;Begründung (optional, wird mit der Entscheidung gespeichert):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="243"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="245"/>
         <source>Why this decision, for the method section</source>
         <translation>Warum diese Entscheidung, für den Methodenteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="170"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="172"/>
         <source>Articles coded by several coders, most undecided disagreements first when sorted; the order is kept while you decide until you re-sort. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
         <translation>Von mehreren Codierenden codierte Artikel, sortiert die mit den meisten nicht entschiedenen Abweichungen zuerst; während Sie entscheiden, bleibt die Reihenfolge, bis Sie neu sortieren. Offen: nicht entschiedene Abweichungen; Übereinstimmend: Passagen, in denen alle Codierenden übereinstimmen und die noch nicht im Goldstandard sind.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="249"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="263"/>
         <source>Keys: N / P next and previous disagreement, %1 / %2 next and previous article, %3 re-sort the queue; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; %4 accept all agreed; %5 rationale; %6 undo; %7 every key.</source>
         <translation>Tasten: N / P nächste und vorherige Abweichung, %1 / %2 nächster und vorheriger Artikel, %3 Warteschlange neu sortieren; A gewählte Textstelle übernehmen, M gewählte Textstellen vereinen, E bearbeiten, R verwerfen, W Goldstandard-Textstelle zurückziehen; %4 alle übereinstimmenden übernehmen; %5 Begründung; %6 rückgängig; %7 alle Tasten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="286"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
         <source>Comparison</source>
         <translation>Vergleich</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="648"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="314"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="683"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
         <source>, </source>
         <translation>, </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="306"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="320"/>
         <source>Function: </source>
         <translation>Funktion: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="308"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="322"/>
         <source>All functions</source>
         <translation>Alle Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="311"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
         <source>Function filter</source>
         <translation>Funktionsfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="317"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
         <source>  Coders: </source>
         <translation>  Codierende: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="333"/>
         <source>All coders</source>
         <translation>Alle Codierenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
         <source>%1 and %2</source>
         <translation>%1 und %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="328"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="342"/>
         <source>Coder pair filter</source>
         <translation>Filter nach Codierpaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
         <source>Show decided</source>
         <translation>Entschiedene zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
         <source>Also step through disagreements already decided</source>
         <translation>Auch bereits entschiedene Abweichungen durchgehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
         <source>Articles in progress</source>
         <translation>Artikel in Bearbeitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="339"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
         <source>Also compare coders on articles they have started but not yet marked done</source>
         <translation>Codierer auch bei Artikeln vergleichen, die sie begonnen, aber noch nicht als fertig markiert haben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="341"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="355"/>
         <source>Show articles in progress</source>
         <translation>Artikel in Bearbeitung zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="363"/>
         <source>Previous</source>
         <translation>Zurück</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="350"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="364"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorherige nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="351"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
         <source>Next</source>
         <translation>Weiter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="366"/>
         <source>Next undecided disagreement</source>
         <translation>Nächste nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="367"/>
         <source>Previous article</source>
         <translation>Vorheriger Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="354"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="368"/>
         <source>Previous article in the queue</source>
         <translation>Vorheriger Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="374"/>
         <source>Next article</source>
         <translation>Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="374"/>
         <source>Next article in the queue</source>
         <translation>Nächster Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
         <source>Re-sort queue</source>
         <translation>Warteschlange neu sortieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="366"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
         <source>Sort the queue again, most undecided disagreements first; until then it keeps its order while you decide</source>
         <translation>Die Warteschlange neu sortieren, die meisten nicht entschiedenen Abweichungen zuerst; bis dahin behält sie ihre Reihenfolge, während Sie entscheiden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="375"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="389"/>
         <source>Accept</source>
         <translation>Übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="376"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="390"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Die Textstelle der gewählten codierenden Person in den Goldstandard übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="377"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="391"/>
         <source>Merge</source>
         <translation>Vereinen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="378"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="392"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eine Textstelle, die die gewählten Textstellen umfasst, in den Goldstandard aufnehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="393"/>
         <source>Edit…</source>
         <translation>Bearbeiten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="394"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Eine Goldstandard-Textstelle mit eigener Funktion und eigenen Grenzen festlegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="382"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="396"/>
         <source>Reject</source>
         <translation>Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="383"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="397"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Festhalten, dass die gewählten Textstellen nicht in den Goldstandard gehören</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="384"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="398"/>
         <source>Withdraw gold</source>
         <translation>Zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="385"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="399"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Die gewählte Goldstandard-Textstelle zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="386"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="400"/>
         <source>Accept all agreed</source>
         <translation>Übereinstimmende übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="387"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="401"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Jede Textstelle übernehmen, in der alle Codierenden des Artikels übereinstimmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="393"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="407"/>
         <source>Undo</source>
         <translation>Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="395"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
         <source>Redo</source>
         <translation>Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="423"/>
         <source>Keys of the comparison window</source>
         <translation>Tasten des Vergleichsfensters</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="463"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="477"/>
         <source>%n article(s) to adjudicate</source>
         <translation>
             <numerusform>%n Artikel zu entscheiden</numerusform>
@@ -8398,148 +8486,148 @@ Beinahe-Kopie von %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="471"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="485"/>
         <source>Queue sorted again: most undecided disagreements first.</source>
         <translation>Warteschlange neu sortiert: die meisten nicht entschiedenen Abweichungen zuerst.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="559"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
         <source>Gold (%1)</source>
         <translation>Goldstandard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="559"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="696"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="731"/>
         <source>Gold</source>
         <translation>Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="604"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="639"/>
         <source>No undecided disagreement left in this article. %1 opens the next article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel. %1 öffnet den nächsten Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="621"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="656"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="637"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="672"/>
         <source>No spans to compare in this article.</source>
         <translation>Keine Textstellen zum Vergleichen in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="638"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="673"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klicken Sie auf eine Passage oder drücken Sie N für die nächste Abweichung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="648"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="683"/>
         <source>no span by %1</source>
         <translation>keine Textstelle von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="651"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="686"/>
         <source>different functions</source>
         <translation>unterschiedliche Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="653"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
         <source>different boundaries</source>
         <translation>unterschiedliche Grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="655"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="690"/>
         <source>different attributes</source>
         <translation>unterschiedliche Merkmale</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="663"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="698"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 von %2 (Absatz %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="667"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="702"/>
         <source>the coders agree</source>
         <translation>die Codierenden stimmen überein</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="667"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="702"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="668"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="703"/>
         <source> — decided</source>
         <translation> — entschieden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="687"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="722"/>
         <source>Characters %1 to %2</source>
         <translation>Zeichen %1 bis %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="723"/>
         <source>rejected</source>
         <translation>verworfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="723"/>
         <source>in gold</source>
         <translation>im Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
         <source>drawn by the lead</source>
         <translation>von der Leitung gezogen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
         <source>from %1</source>
         <translation>von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="706"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="741"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Entschieden von %1 am %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="708"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="743"/>
         <source> Rationale: %1</source>
         <translation> Begründung: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="716"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="751"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Goldstandard %1 entschieden von %2 am %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="823"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="858"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Rückgängig mit %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="850"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="885"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Wählen Sie die Textstelle einer codierenden Person zum Übernehmen (oder mehrere zum Vereinen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="877"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="912"/>
         <source>Choose a passage first.</source>
         <translation>Wählen Sie zuerst eine Passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="915"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="950"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Wählen Sie die zu verwerfenden Textstellen (die noch nicht verworfen sind).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="926"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="961"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Wählen Sie eine Goldstandard-Textstelle zum Zurückziehen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="946"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="1005"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>In diesem Artikel ist keine übereinstimmende Passage mehr zu übernehmen.</translation>
     </message>
@@ -9885,81 +9973,208 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <translation>Das Codebuch stellt keine Fragen zum Artikel als Ganzem.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/item_form.cpp" line="68"/>
+        <location filename="../app/desktop/item_form.cpp" line="73"/>
         <source>not answered</source>
         <translation>nicht beantwortet</translation>
     </message>
     <message>
+        <location filename="../app/desktop/item_form.cpp" line="94"/>
         <source>&amp;Withdraw answer</source>
         <translation>Antwort &amp;zurückziehen</translation>
     </message>
     <message>
+        <location filename="../app/desktop/item_form.cpp" line="119"/>
         <source>Withdraw the answer: the item is unanswered again</source>
         <translation>Antwort zurückziehen: die Frage ist wieder unbeantwortet</translation>
     </message>
     <message>
+        <location filename="../app/desktop/item_form.cpp" line="152"/>
         <source>Withdraw answer: %1 (%2)</source>
         <translation>Antwort zurückziehen: %1 (%2)</translation>
     </message>
 </context>
 <context>
+    <name>fourfold::JoinTeamDialog</name>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="24"/>
+        <source>Join a team project</source>
+        <translation>Einem Teamprojekt beitreten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="28"/>
+        <source>Your lead gives you the server, your pseudonym and your password. Your working file is kept on this computer and syncs with the server while it is open.</source>
+        <translation>Ihre Leitung nennt Ihnen den Server, Ihr Pseudonym und Ihr Passwort. Ihre Arbeitsdatei bleibt auf diesem Computer und wird mit dem Server synchronisiert, solange sie geöffnet ist.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="36"/>
+        <source>Host and database</source>
+        <translation>Host und Datenbank</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="37"/>
+        <source>Connection string</source>
+        <translation>Verbindungszeichenfolge</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="43"/>
+        <source>Server:</source>
+        <translation>Server:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="46"/>
+        <source>e.g. db.example.org</source>
+        <translation>z. B. db.example.org</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="51"/>
+        <source>Port</source>
+        <translation>Port</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="54"/>
+        <source>Port:</source>
+        <translation>Port:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="56"/>
+        <source>Host:</source>
+        <translation>Host:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="58"/>
+        <source>Database:</source>
+        <translation>Datenbank:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="61"/>
+        <source>Connection string:</source>
+        <translation>Verbindungszeichenfolge:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="64"/>
+        <source>Your pseudonym:</source>
+        <translation>Ihr Pseudonym:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="67"/>
+        <source>Kept in memory while Fourfold runs, never written to a file. Leave it empty when your password file (~/.pgpass) holds it.</source>
+        <translation>Wird im Speicher gehalten, solange Fourfold läuft, und nie in eine Datei geschrieben. Leer lassen, wenn Ihre Passwortdatei (~/.pgpass) es enthält.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="69"/>
+        <source>Password:</source>
+        <translation>Passwort:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="72"/>
+        <source>Where to keep your working file</source>
+        <translation>Wo Ihre Arbeitsdatei liegen soll</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="73"/>
+        <source>Choose…</source>
+        <translation>Wählen…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="78"/>
+        <source>Working file:</source>
+        <translation>Arbeitsdatei:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="82"/>
+        <source>&amp;Join</source>
+        <translation>&amp;Beitreten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="125"/>
+        <source>Working file</source>
+        <translation>Arbeitsdatei</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="125"/>
+        <source>Fourfold projects (*.fourfold)</source>
+        <translation>Fourfold-Projekte (*.fourfold)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="136"/>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="144"/>
+        <source>Name the server: its host and database, or a connection string.</source>
+        <translation>Nennen Sie den Server: Host und Datenbank oder eine Verbindungszeichenfolge.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="157"/>
+        <source>Give your pseudonym, as your lead gave it to you.</source>
+        <translation>Geben Sie Ihr Pseudonym an, wie Ihre Leitung es Ihnen genannt hat.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="163"/>
+        <source>Choose where to keep your working file.</source>
+        <translation>Wählen Sie, wo Ihre Arbeitsdatei liegen soll.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="177"/>
+        <source>Joining the team project…</source>
+        <translation>Dem Teamprojekt wird beigetreten…</translation>
+    </message>
+</context>
+<context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="188"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
         <source>Write the reliability report</source>
         <translation>Reliabilitätsbericht schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="197"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webseite (*.html);;PDF-Dokument (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="204"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="208"/>
         <source>The reliability report was written to %1.</source>
         <translation>Der Reliabilitätsbericht wurde nach %1 geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="201"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="209"/>
         <source>&amp;Open</source>
         <translation>&amp;Öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="202"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="241"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="210"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="249"/>
         <source>Open the &amp;folder</source>
         <translation>&amp;Ordner öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="213"/>
         <location filename="../app/desktop/lead_windows.cpp" line="221"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="234"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="242"/>
         <source>Coder copy</source>
         <translation>Kopie für Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="222"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="230"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Eine Kopie für Codierende enthält nur die dieser Person zugewiesenen Artikel, das Codebuch und ihre eigenen Codierungen. Für wen ist die Kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="228"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="236"/>
         <source>Write the coder copy</source>
         <translation>Kopie für Codierende schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="237"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-Projekt (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="238"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="246"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 für %2 geschrieben: %n Artikel, %3 Textstelle(n).</numerusform>
@@ -9967,17 +10182,17 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
         <source>Merge returned coder copies</source>
         <translation>Zurückgegebene Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="256"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
         <source>Merge coder copies</source>
         <translation>Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="257"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="265"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -9986,17 +10201,17 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="272"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): bereits zusammengeführt, nichts Neues.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="266"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="274"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 neu, %4 geändert (%5 gelöscht), %6 Konflikt(e).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="274"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="282"/>
         <source>Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits for you to decide (Lead → Merge conflicts…).</source>
         <translation>
             <numerusform>%n Kopie zusammengeführt; %1 Konflikt(e): die spätere Änderung bleibt, die andere wartet auf Ihre Entscheidung (Leitung → Konflikte beim Zusammenführen…).</numerusform>
@@ -10004,12 +10219,12 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="281"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="289"/>
         <source>&amp;Decide conflicts</source>
         <translation>Konflikte &amp;entscheiden</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="278"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="286"/>
         <source>Merged %n copy(ies).</source>
         <translation>
             <numerusform>%n Kopie zusammengeführt.</numerusform>
@@ -10020,345 +10235,370 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="833"/>
+        <location filename="../app/desktop/main_window.cpp" line="921"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="191"/>
+        <location filename="../app/desktop/main_window.cpp" line="200"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="107"/>
+        <location filename="../app/desktop/main_window.cpp" line="116"/>
         <source>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manual frame analysis of news and opinion articles: problem, cause, evaluation, remedy.&lt;/p&gt;</source>
         <translation>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manuelle Frame-Analyse von Nachrichten- und Meinungsartikeln: Problem, Ursache, Bewertung, Lösung.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="115"/>
+        <location filename="../app/desktop/main_window.cpp" line="124"/>
         <source>New project…</source>
         <translation>Neues Projekt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="116"/>
+        <location filename="../app/desktop/main_window.cpp" line="125"/>
         <source>Start a study: a new project file, then import its articles.</source>
         <translation>Eine Studie beginnen: eine neue Projektdatei, dann ihre Artikel importieren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="119"/>
+        <location filename="../app/desktop/main_window.cpp" line="128"/>
         <source>Open a project…</source>
         <translation>Projekt öffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="122"/>
+        <location filename="../app/desktop/main_window.cpp" line="131"/>
         <source>Open the sample project</source>
         <translation>Beispielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="124"/>
+        <location filename="../app/desktop/main_window.cpp" line="133"/>
         <source>Invented demo data: three local controversies, three coders.</source>
         <translation>Erfundene Demodaten: drei lokale Streitfragen, drei Codierende.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="130"/>
-        <location filename="../app/desktop/main_window.cpp" line="143"/>
+        <location filename="../app/desktop/main_window.cpp" line="139"/>
+        <location filename="../app/desktop/main_window.cpp" line="152"/>
         <source>Recent projects</source>
         <translation>Zuletzt geöffnete Projekte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="162"/>
+        <location filename="../app/desktop/main_window.cpp" line="171"/>
         <source>Search the texts…</source>
         <translation>Texte durchsuchen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="164"/>
+        <location filename="../app/desktop/main_window.cpp" line="173"/>
         <source>Search articles</source>
         <translation>Artikel durchsuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="171"/>
+        <location filename="../app/desktop/main_window.cpp" line="180"/>
         <source>Status filter</source>
         <translation>Statusfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="172"/>
+        <location filename="../app/desktop/main_window.cpp" line="181"/>
         <source>All articles</source>
         <translation>Alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="173"/>
+        <location filename="../app/desktop/main_window.cpp" line="182"/>
         <source>Not started</source>
         <translation>Nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="174"/>
+        <location filename="../app/desktop/main_window.cpp" line="183"/>
         <source>In progress</source>
         <translation>In Arbeit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="175"/>
+        <location filename="../app/desktop/main_window.cpp" line="184"/>
         <source>Done</source>
         <translation>Erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="233"/>
+        <location filename="../app/desktop/main_window.cpp" line="242"/>
         <source>Mark the selected text as %1 (key %2)</source>
         <translation>Ausgewählten Text als %1 markieren (Taste %2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="244"/>
+        <location filename="../app/desktop/main_window.cpp" line="253"/>
         <source>Mark as done</source>
         <translation>Als erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="245"/>
+        <location filename="../app/desktop/main_window.cpp" line="254"/>
         <source>Mark this article as done and open the next one (%1)</source>
         <translation>Diesen Artikel als erledigt markieren und den nächsten öffnen (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="268"/>
+        <location filename="../app/desktop/main_window.cpp" line="279"/>
         <source>Import articles…</source>
         <translation>Artikel importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="337"/>
+        <location filename="../app/desktop/main_window.cpp" line="355"/>
         <source>&amp;Project</source>
         <translation>&amp;Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="338"/>
+        <location filename="../app/desktop/main_window.cpp" line="356"/>
         <source>&amp;New project…</source>
         <translation>&amp;Neues Projekt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="339"/>
+        <location filename="../app/desktop/main_window.cpp" line="357"/>
         <source>&amp;Open…</source>
         <translation>Ö&amp;ffnen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="340"/>
+        <location filename="../app/desktop/main_window.cpp" line="358"/>
         <source>&amp;Import articles…</source>
         <translation>Artikel &amp;importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="342"/>
+        <location filename="../app/desktop/main_window.cpp" line="360"/>
         <source>Import a &amp;folder…</source>
         <translation>Einen &amp;Ordner importieren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="343"/>
+        <location filename="../app/desktop/main_window.cpp" line="361"/>
         <source>Import a folder</source>
         <translation>Einen Ordner importieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="349"/>
+        <location filename="../app/desktop/main_window.cpp" line="367"/>
         <source>Open the &amp;sample project</source>
         <translation>Bei&amp;spielprojekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="351"/>
+        <location filename="../app/desktop/main_window.cpp" line="368"/>
+        <source>Join a &amp;team project…</source>
+        <translation>Einem &amp;Teamprojekt beitreten…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="370"/>
         <source>&amp;Quit</source>
         <translation>&amp;Beenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="353"/>
+        <location filename="../app/desktop/main_window.cpp" line="372"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="354"/>
-        <location filename="../app/desktop/main_window.cpp" line="522"/>
+        <location filename="../app/desktop/main_window.cpp" line="373"/>
+        <location filename="../app/desktop/main_window.cpp" line="543"/>
         <source>&amp;Undo</source>
         <translation>&amp;Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="357"/>
-        <location filename="../app/desktop/main_window.cpp" line="525"/>
+        <location filename="../app/desktop/main_window.cpp" line="376"/>
+        <location filename="../app/desktop/main_window.cpp" line="546"/>
         <source>&amp;Redo</source>
         <translation>&amp;Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="361"/>
+        <location filename="../app/desktop/main_window.cpp" line="380"/>
         <source>&amp;Code</source>
         <translation>&amp;Codieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="365"/>
+        <location filename="../app/desktop/main_window.cpp" line="384"/>
         <source>Mark as %1	%2</source>
         <translation>Als %1 markieren	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="369"/>
+        <location filename="../app/desktop/main_window.cpp" line="388"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel als &amp;erledigt markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="370"/>
+        <location filename="../app/desktop/main_window.cpp" line="389"/>
         <source>&amp;Next article</source>
         <translation>&amp;Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="372"/>
+        <location filename="../app/desktop/main_window.cpp" line="391"/>
         <source>&amp;Find in texts</source>
         <translation>In Texten &amp;suchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="373"/>
+        <location filename="../app/desktop/main_window.cpp" line="392"/>
         <source>&amp;Training feedback…</source>
         <translation>&amp;Trainingsfeedback…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="380"/>
+        <location filename="../app/desktop/main_window.cpp" line="399"/>
         <source>&amp;View</source>
         <translation>&amp;Ansicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="381"/>
+        <location filename="../app/desktop/main_window.cpp" line="400"/>
         <source>E&amp;xact selection (no snapping to words)</source>
         <translation>E&amp;xakte Auswahl (nicht an Wörtern ausrichten)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="389"/>
+        <location filename="../app/desktop/main_window.cpp" line="408"/>
         <source>Exact selection: spans take the text as selected.</source>
         <translation>Exakte Auswahl: Textstellen übernehmen den Text wie markiert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="390"/>
+        <location filename="../app/desktop/main_window.cpp" line="409"/>
         <source>Spans snap to whole words again.</source>
         <translation>Textstellen richten sich wieder an ganzen Wörtern aus.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="394"/>
+        <location filename="../app/desktop/main_window.cpp" line="413"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Textstellen &amp;aller Codierenden zeigen (nur Leitung)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="404"/>
+        <location filename="../app/desktop/main_window.cpp" line="423"/>
         <source>&amp;Lead</source>
         <translation>&amp;Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="406"/>
+        <location filename="../app/desktop/main_window.cpp" line="425"/>
         <source>&amp;Compare and adjudicate…</source>
         <translation>&amp;Vergleichen und entscheiden…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="408"/>
+        <location filename="../app/desktop/main_window.cpp" line="427"/>
         <source>&amp;Reliability…</source>
         <translation>&amp;Reliabilität…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="409"/>
+        <location filename="../app/desktop/main_window.cpp" line="428"/>
         <source>&amp;Frames…</source>
         <translation>&amp;Frames…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="410"/>
+        <location filename="../app/desktop/main_window.cpp" line="429"/>
         <source>Write the reliability &amp;report…</source>
         <translation>Reliabilitäts&amp;bericht schreiben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="412"/>
+        <location filename="../app/desktop/main_window.cpp" line="431"/>
         <source>&amp;Study design…</source>
         <translation>&amp;Studiendesign…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="413"/>
+        <location filename="../app/desktop/main_window.cpp" line="432"/>
         <source>C&amp;odebook…</source>
         <translation>C&amp;odebuch…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="414"/>
+        <location filename="../app/desktop/main_window.cpp" line="433"/>
         <source>&amp;Progress…</source>
         <translation>&amp;Fortschritt…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="415"/>
+        <location filename="../app/desktop/main_window.cpp" line="434"/>
         <source>P&amp;eople…</source>
         <translation>P&amp;ersonen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="416"/>
+        <location filename="../app/desktop/main_window.cpp" line="435"/>
         <source>&amp;Hand out a coder copy…</source>
         <translation>&amp;Kopie für Codierende ausgeben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="417"/>
+        <location filename="../app/desktop/main_window.cpp" line="436"/>
         <source>&amp;Merge returned coder copies…</source>
         <translation>Zurückgegebene Kopien &amp;zusammenführen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="418"/>
+        <location filename="../app/desktop/main_window.cpp" line="437"/>
         <source>Merge co&amp;nflicts…</source>
         <translation>Ko&amp;nflikte beim Zusammenführen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="420"/>
+        <location filename="../app/desktop/main_window.cpp" line="439"/>
         <source>&amp;Extractor runs…</source>
         <translation>&amp;Extraktorläufe…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="428"/>
+        <location filename="../app/desktop/main_window.cpp" line="447"/>
         <source>&amp;Settings</source>
         <translation>&amp;Einstellungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="429"/>
+        <location filename="../app/desktop/main_window.cpp" line="448"/>
         <source>&amp;Language</source>
         <translation>&amp;Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="434"/>
+        <location filename="../app/desktop/main_window.cpp" line="453"/>
         <source>System language</source>
         <translation>Systemsprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="445"/>
+        <location filename="../app/desktop/main_window.cpp" line="464"/>
         <source>&amp;Help</source>
         <translation>&amp;Hilfe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="447"/>
+        <location filename="../app/desktop/main_window.cpp" line="466"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="464"/>
+        <location filename="../app/desktop/main_window.cpp" line="483"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Im Projekt gibt es keine Codierenden mit dem Pseudonym „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="478"/>
+        <location filename="../app/desktop/main_window.cpp" line="497"/>
         <source>Nobody was chosen to code.</source>
         <translation>Es wurde niemand zum Codieren ausgewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="504"/>
+        <location filename="../app/desktop/main_window.cpp" line="525"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="505"/>
+        <location filename="../app/desktop/main_window.cpp" line="526"/>
         <source>Codebook</source>
         <translation>Codebuch</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="522"/>
+        <location filename="../app/desktop/main_window.cpp" line="543"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Rückgängig: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="525"/>
+        <location filename="../app/desktop/main_window.cpp" line="546"/>
         <source>&amp;Redo %1</source>
         <translation>&amp;Wiederholen: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="667"/>
+        <location filename="../app/desktop/main_window.cpp" line="606"/>
+        <source>The team server asks for your password to sync. Your work stays in this file until it can be sent.</source>
+        <translation>Der Teamserver verlangt zum Synchronisieren Ihr Passwort. Ihre Arbeit bleibt in dieser Datei, bis sie gesendet werden kann.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="608"/>
+        <source>Enter &amp;password…</source>
+        <translation>&amp;Passwort eingeben…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="620"/>
+        <source>Team server password</source>
+        <translation>Passwort des Teamservers</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="621"/>
+        <source>Password of %1 on the team server:</source>
+        <translation>Passwort von %1 auf dem Teamserver:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="755"/>
         <source>Every article in the list is done.</source>
         <translation>Alle Artikel in der Liste sind erledigt.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="689"/>
+        <location filename="../app/desktop/main_window.cpp" line="777"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n Artikel enthält „%1“.</numerusform>
@@ -10366,126 +10606,127 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="695"/>
+        <location filename="../app/desktop/main_window.cpp" line="783"/>
         <source>New project</source>
         <translation>Neues Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="705"/>
+        <location filename="../app/desktop/main_window.cpp" line="793"/>
         <source>Cannot create project</source>
         <translation>Projekt kann nicht erstellt werden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="717"/>
+        <location filename="../app/desktop/main_window.cpp" line="805"/>
         <source>Import articles</source>
         <translation>Artikel importieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="718"/>
+        <location filename="../app/desktop/main_window.cpp" line="806"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikel (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="764"/>
+        <location filename="../app/desktop/main_window.cpp" line="852"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Wählen Sie einen Artikel&lt;/h3&gt;&lt;p&gt;Wählen Sie links in der Liste einen Artikel, um mit dem Codieren zu beginnen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="767"/>
+        <location filename="../app/desktop/main_window.cpp" line="855"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch keine Artikel&lt;/h3&gt;&lt;p&gt;Importieren Sie die Artikel der Studie: reiner Text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- oder Atom-Feeds, NITF oder NewsML-G2. Weisen Sie sie dann unter Leitung → Studiendesign Codierenden zu.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="772"/>
+        <location filename="../app/desktop/main_window.cpp" line="860"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch nichts zu codieren&lt;/h3&gt;&lt;p&gt;In diesem Projekt sind Ihnen keine Artikel zugewiesen. Ihre Leitung weist sie zu; öffnen Sie danach das Projekt erneut oder die Kopie, die sie Ihnen schickt.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="804"/>
+        <location filename="../app/desktop/main_window.cpp" line="892"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>Die Sprache wechselt beim nächsten Start von Fourfold.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="817"/>
+        <location filename="../app/desktop/main_window.cpp" line="905"/>
         <source>Not saved: %1. %2</source>
         <translation>Nicht gespeichert: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="818"/>
+        <location filename="../app/desktop/main_window.cpp" line="906"/>
         <source>&amp;Retry</source>
         <translation>&amp;Erneut versuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="824"/>
+        <location filename="../app/desktop/main_window.cpp" line="912"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="834"/>
+        <location filename="../app/desktop/main_window.cpp" line="922"/>
         <source>No project open</source>
         <translation>Kein Projekt geöffnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="838"/>
+        <location filename="../app/desktop/main_window.cpp" line="926"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="838"/>
+        <location filename="../app/desktop/main_window.cpp" line="926"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="840"/>
+        <location filename="../app/desktop/main_window.cpp" line="928"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — schreibgeschützt, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="842"/>
+        <location filename="../app/desktop/main_window.cpp" line="930"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — Codieren als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="846"/>
+        <location filename="../app/desktop/main_window.cpp" line="934"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lesen als %1 · %2 · schreibgeschützte Datei: nichts wird gespeichert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="849"/>
+        <location filename="../app/desktop/main_window.cpp" line="937"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Codieren als %1 · %2 · Leitung: alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="850"/>
+        <location filename="../app/desktop/main_window.cpp" line="938"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Codieren als %1 · %2 · blind: nur eigene Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="858"/>
+        <location filename="../app/desktop/main_window.cpp" line="946"/>
         <source>The comparison window lists its own keys with %1.</source>
         <translation>Das Vergleichsfenster listet seine eigenen Tasten mit %1 auf.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="862"/>
+        <location filename="../app/desktop/main_window.cpp" line="950"/>
         <source>Keyboard shortcuts</source>
         <translation>Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="784"/>
+        <location filename="../app/desktop/main_window.cpp" line="872"/>
         <source>Open project</source>
         <translation>Projekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="695"/>
-        <location filename="../app/desktop/main_window.cpp" line="784"/>
+        <location filename="../app/desktop/main_window.cpp" line="783"/>
+        <location filename="../app/desktop/main_window.cpp" line="872"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-Projekte (*.fourfold)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="137"/>
-        <location filename="../app/desktop/main_window.cpp" line="710"/>
-        <location filename="../app/desktop/main_window.cpp" line="788"/>
-        <location filename="../app/desktop/main_window.cpp" line="797"/>
+        <location filename="../app/desktop/main_window.cpp" line="146"/>
+        <location filename="../app/desktop/main_window.cpp" line="639"/>
+        <location filename="../app/desktop/main_window.cpp" line="798"/>
+        <location filename="../app/desktop/main_window.cpp" line="876"/>
+        <location filename="../app/desktop/main_window.cpp" line="885"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
     </message>
@@ -10810,27 +11051,27 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <translation>Artikeltext</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="598"/>
+        <location filename="../app/desktop/reading_view.cpp" line="613"/>
         <source>Mark as %1</source>
         <translation>Als %1 markieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="599"/>
+        <location filename="../app/desktop/reading_view.cpp" line="614"/>
         <source>Change to %1</source>
         <translation>In %1 ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="604"/>
+        <location filename="../app/desktop/reading_view.cpp" line="619"/>
         <source>Delete span</source>
         <translation>Textstelle löschen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="630"/>
+        <location filename="../app/desktop/reading_view.cpp" line="659"/>
         <source>%1: “%2”</source>
         <translation>%1: „%2“</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="843"/>
+        <location filename="../app/desktop/reading_view.cpp" line="871"/>
         <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Ctrl+Down and Ctrl+Up move between spans.</source>
         <translation>
             <numerusform>%n Textstelle. Markieren Sie Text und drücken Sie 1 bis 4, um eine Framing-Funktion zu vergeben; Strg+Runter und Strg+Hoch wechseln zwischen Textstellen.</numerusform>
@@ -10838,11 +11079,12 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="852"/>
+        <location filename="../app/desktop/reading_view.cpp" line="880"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Ctrl+Left/Right and Ctrl+Shift+Left/Right to resize.</source>
         <translation>Gewählte Textstelle: %1, „%2“. Drücken Sie 1 bis 4 zum Ändern der Funktion, Entf zum Löschen, Strg+Links/Rechts und Strg+Umschalt+Links/Rechts zum Ändern der Länge.</translation>
     </message>
     <message>
+        <location filename="../app/desktop/reading_view.cpp" line="662"/>
         <source>%1 · %2</source>
         <translation>%1 · %2</translation>
     </message>
@@ -11365,87 +11607,87 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::ReportOptionsDialog</name>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="22"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="23"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="26"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="27"/>
         <source>Paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="27"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="28"/>
         <source>Sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="28"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="29"/>
         <source>Token (word)</source>
         <translation>Token (Wort)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="30"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="31"/>
         <source>&amp;Unit of the functions</source>
         <translation>&amp;Einheit der Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="33"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="34"/>
         <source>All phases</source>
         <translation>Alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="36"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="37"/>
         <source>&amp;Phase</source>
         <translation>&amp;Phase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="54"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="55"/>
         <source>&amp;Coders</source>
         <translation>&amp;Codierer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="60"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="61"/>
         <source>none</source>
         <translation>keine</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="61"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="62"/>
         <source> replicates</source>
         <translation> Replikationen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="62"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="63"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="66"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="67"/>
         <source>S&amp;eed</source>
         <translation>S&amp;eed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="68"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="69"/>
         <source>Count articles in progress</source>
         <translation>Artikel in Bearbeitung mitzählen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="69"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="70"/>
         <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
         <translation>Standardmäßig zählt ein Artikel eines Codierers erst, wenn er ihn als fertig markiert hat; ankreuzen, um auch Artikel in Bearbeitung mitzuzählen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="74"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="75"/>
         <source>Reliability report: %1</source>
         <translation>Reliabilitätsbericht: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="75"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="76"/>
         <source>&amp;Title</source>
         <translation>&amp;Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="78"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="79"/>
         <source>&amp;Write…</source>
         <translation>&amp;Schreiben…</translation>
     </message>
@@ -11622,42 +11864,42 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::SpanEditor</name>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="94"/>
+        <location filename="../app/desktop/span_editor.cpp" line="95"/>
         <source>judges</source>
         <translation>bewertet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="94"/>
+        <location filename="../app/desktop/span_editor.cpp" line="95"/>
         <source>judged by</source>
         <translation>bewertet von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="96"/>
+        <location filename="../app/desktop/span_editor.cpp" line="97"/>
         <source>addresses</source>
         <translation>behandelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="96"/>
+        <location filename="../app/desktop/span_editor.cpp" line="97"/>
         <source>addressed by</source>
         <translation>behandelt von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="97"/>
+        <location filename="../app/desktop/span_editor.cpp" line="98"/>
         <source>%1 →</source>
         <translation>%1 →</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="97"/>
+        <location filename="../app/desktop/span_editor.cpp" line="98"/>
         <source>← %1</source>
         <translation>← %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="106"/>
+        <location filename="../app/desktop/span_editor.cpp" line="107"/>
         <source>Span editor</source>
         <translation>Textstellen-Editor</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="112"/>
+        <location filename="../app/desktop/span_editor.cpp" line="113"/>
         <source>No span selected.
 
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
@@ -11666,148 +11908,150 @@ Click a span in the text or on the frame card to edit it, or select text and pre
 Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bearbeiten, oder wählen Sie Text aus und drücken Sie 1&#xa0;bis&#xa0;4, um ihn zu codieren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="178"/>
+        <location filename="../app/desktop/span_editor.cpp" line="179"/>
         <source>Another coder&apos;s span: shown, not editable.</source>
         <translation>Textstelle einer anderen codierenden Person: sichtbar, nicht bearbeitbar.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="195"/>
+        <location filename="../app/desktop/span_editor.cpp" line="196"/>
         <source>Function: %1</source>
         <translation>Funktion: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="199"/>
+        <location filename="../app/desktop/span_editor.cpp" line="200"/>
         <source>&amp;Function:</source>
         <translation>&amp;Funktion:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="206"/>
+        <location filename="../app/desktop/span_editor.cpp" line="207"/>
         <source>Note</source>
         <translation>Notiz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="210"/>
+        <location filename="../app/desktop/span_editor.cpp" line="211"/>
         <source>&amp;Note:</source>
         <translation>&amp;Notiz:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="215"/>
+        <location filename="../app/desktop/span_editor.cpp" line="216"/>
         <source>Confidence</source>
         <translation>Sicherheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="219"/>
-        <location filename="../app/desktop/span_editor.cpp" line="366"/>
-        <location filename="../app/desktop/span_editor.cpp" line="374"/>
+        <location filename="../app/desktop/span_editor.cpp" line="220"/>
+        <location filename="../app/desktop/span_editor.cpp" line="389"/>
+        <location filename="../app/desktop/span_editor.cpp" line="397"/>
         <source>not set</source>
         <translation>nicht angegeben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="222"/>
+        <location filename="../app/desktop/span_editor.cpp" line="223"/>
         <source>How sure you are of this span, from 0 (a guess) to 1 (certain).</source>
         <translation>Wie sicher Sie sich bei dieser Textstelle sind, von 0 (geraten) bis 1 (sicher).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="223"/>
+        <location filename="../app/desktop/span_editor.cpp" line="224"/>
         <source>&amp;Confidence:</source>
         <translation>&amp;Sicherheit:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="232"/>
+        <location filename="../app/desktop/span_editor.cpp" line="233"/>
         <source>Links</source>
         <translation>Verknüpfungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="234"/>
+        <location filename="../app/desktop/span_editor.cpp" line="235"/>
         <source>Links start from an evaluation (to the cause it judges) or from a remedy (to the problem it addresses).</source>
         <translation>Verknüpfungen gehen von einer Bewertung (zur bewerteten Ursache) oder von einer Lösung (zum behandelten Problem) aus.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="244"/>
+        <location filename="../app/desktop/span_editor.cpp" line="245"/>
         <source>Span to link to</source>
         <translation>Zu verknüpfende Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="248"/>
+        <location filename="../app/desktop/span_editor.cpp" line="249"/>
         <source>&amp;Link</source>
         <translation>&amp;Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="249"/>
+        <location filename="../app/desktop/span_editor.cpp" line="250"/>
         <source>Link to the chosen span</source>
         <translation>Mit der gewählten Textstelle verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="261"/>
+        <location filename="../app/desktop/span_editor.cpp" line="262"/>
         <source>Links of this span</source>
         <translation>Verknüpfungen dieser Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="269"/>
+        <location filename="../app/desktop/span_editor.cpp" line="270"/>
         <source>No links yet.</source>
         <translation>Noch keine Verknüpfungen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="272"/>
+        <location filename="../app/desktop/span_editor.cpp" line="273"/>
+        <location filename="../app/desktop/span_editor.cpp" line="295"/>
         <source>&amp;Remove link</source>
         <translation>Verknüpfung &amp;entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="273"/>
+        <location filename="../app/desktop/span_editor.cpp" line="274"/>
         <source>Remove the chosen link</source>
         <translation>Die gewählte Verknüpfung entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="385"/>
+        <location filename="../app/desktop/span_editor.cpp" line="408"/>
         <source>%1:</source>
         <translation>%1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="439"/>
+        <location filename="../app/desktop/span_editor.cpp" line="462"/>
         <source>No note.</source>
         <translation>Keine Notiz.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="439"/>
+        <location filename="../app/desktop/span_editor.cpp" line="462"/>
         <source>Why this span, doubts, a question for the lead…</source>
         <translation>Warum diese Textstelle, Zweifel, eine Frage an die Leitung…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="457"/>
+        <location filename="../app/desktop/span_editor.cpp" line="480"/>
         <source>&amp;Judges:</source>
         <translation>Be&amp;wertet:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="457"/>
+        <location filename="../app/desktop/span_editor.cpp" line="480"/>
         <source>&amp;Addresses:</source>
         <translation>Behan&amp;delt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="459"/>
+        <location filename="../app/desktop/span_editor.cpp" line="482"/>
         <source>no cause span to link</source>
         <translation>keine Ursachen-Textstelle zum Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="459"/>
+        <location filename="../app/desktop/span_editor.cpp" line="482"/>
         <source>no problem span to link</source>
         <translation>keine Problem-Textstelle zum Verknüpfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="489"/>
+        <location filename="../app/desktop/span_editor.cpp" line="512"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="505"/>
+        <location filename="../app/desktop/span_editor.cpp" line="528"/>
         <source>a span not shown here</source>
         <translation>eine hier nicht angezeigte Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="506"/>
+        <location filename="../app/desktop/span_editor.cpp" line="529"/>
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>
     <message>
+        <location filename="../app/desktop/span_editor.cpp" line="310"/>
         <source>Remove link: %1</source>
         <translation>Verknüpfung entfernen: %1</translation>
     </message>
@@ -11872,13 +12116,13 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="224"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="759"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="793"/>
         <source>Phase:</source>
         <translation>Phase:</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="229"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="761"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="795"/>
         <source>Articles:</source>
         <translation>Artikel:</translation>
     </message>
@@ -11934,7 +12178,7 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="278"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="600"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="634"/>
         <source>Seed</source>
         <translation>Seed</translation>
     </message>
@@ -11945,7 +12189,7 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="285"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="602"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="636"/>
         <source>Seed:</source>
         <translation>Seed:</translation>
     </message>
@@ -12010,57 +12254,57 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         <translation>Die gezogenen Artikel allen gewählten Codierenden zuweisen und die Ziehung mit ihrem Seed speichern.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
         <source>Stratum</source>
         <translation>Schicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
         <source>In the frame</source>
         <translation>In der Auswahlgesamtheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
         <source>Drawn</source>
         <translation>Gezogen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="362"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="369"/>
         <source>Drawn articles:</source>
         <translation>Gezogene Artikel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="365"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="372"/>
         <source>Drawn articles</source>
         <translation>Gezogene Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="420"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="430"/>
         <source>&lt;b&gt;No sample is drawn yet for the phase %1.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
         <translation>&lt;b&gt;Für die Phase %1 ist noch keine Stichprobe gezogen.&lt;/b&gt; Wählen Sie Umfang, Methode, Seed und Codierende und drücken Sie dann &lt;i&gt;Ziehen&lt;/i&gt;, um die Stichprobe zu sehen und ob sie groß genug ist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="480"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="514"/>
         <source>simple random sample</source>
         <translation>einfache Zufallsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="482"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="516"/>
         <source>stratified by outlet</source>
         <translation>geschichtet nach Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="484"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="518"/>
         <source>stratified by language</source>
         <translation>geschichtet nach Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="486"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="520"/>
         <source>stratified by topic</source>
         <translation>geschichtet nach Thema</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="487"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
         <source>%n article(s) of a frame of %1, %2, seed %3, coded by %4.</source>
         <translation>
             <numerusform>%n Artikel aus einer Auswahlgesamtheit von %1, %2, Seed %3, codiert von %4.</numerusform>
@@ -12068,42 +12312,42 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="495"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="529"/>
         <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded; it can be withdrawn until someone codes one of its articles, and then drawn again.</source>
         <translation>&lt;b&gt;Stichprobe der Phase %1 gezogen am %2.&lt;/b&gt; %3 Die Ziehung ist gespeichert; sie kann zurückgezogen werden, bis jemand einen ihrer Artikel codiert, und dann neu gezogen werden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="501"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="535"/>
         <source>&lt;b&gt;Planned draw, not yet committed.&lt;/b&gt; %1 Press &lt;i&gt;Commit the draw&lt;/i&gt; to assign it.</source>
         <translation>&lt;b&gt;Geplante Ziehung, noch nicht festgeschrieben.&lt;/b&gt; %1 Drücken Sie &lt;i&gt;Ziehung festschreiben&lt;/i&gt;, um sie zuzuweisen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="510"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="544"/>
         <source>No minimum sample can be computed for these settings.</source>
         <translation>Für diese Einstellungen lässt sich keine Mindeststichprobe berechnen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="512"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="546"/>
         <source>&lt;b&gt;Krippendorff&apos;s minimum: %1 values&lt;/b&gt; per variable for α_min = %2 at p = %3, with the rarest value at %4 %.</source>
         <translation>&lt;b&gt;Krippendorffs Minimum: %1 Werte&lt;/b&gt; je Variable für α_min = %2 bei p = %3, mit dem seltensten Wert bei %4 %.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="555"/>
         <source>Unit</source>
         <translation>Einheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="555"/>
         <source>Values the draw delivers</source>
         <translation>Werte aus der Ziehung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="525"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="559"/>
         <source>✓ enough</source>
         <translation>✓ genug</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="526"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="560"/>
         <source>✗ %n short</source>
         <translation>
             <numerusform>✗ %n zu wenig</numerusform>
@@ -12111,103 +12355,103 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="534"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="568"/>
         <source>Article-level items</source>
         <translation>Items auf Artikelebene</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="535"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="569"/>
         <source>Paragraphs</source>
         <translation>Absätze</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="536"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="570"/>
         <source>Sentences</source>
         <translation>Sätze</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="539"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="573"/>
         <source>Values are units × coders. For spans, count the codings of each function: a rare function (often the remedy) may need a larger or stratified sample.</source>
         <translation>Werte sind Einheiten × Codierende. Zählen Sie bei Textstellen die Codierungen jeder Funktion: Eine seltene Funktion (oft die Lösung) kann eine größere oder geschichtete Stichprobe erfordern.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="576"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="610"/>
         <source>Deal the rest</source>
         <translation>Rest verteilen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="578"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="612"/>
         <source>Every article with no assignment yet goes to production coding, shuffled with the seed and dealt in turn.</source>
         <translation>Jeder noch nicht zugewiesene Artikel geht in die Hauptcodierung, mit dem Seed gemischt und reihum verteilt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="584"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="618"/>
         <source>Single-coded: one coder per article</source>
         <translation>Einfach codiert: eine Person je Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="587"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="621"/>
         <source>Double-coded: two coders per article, pairs rotating</source>
         <translation>Doppelt codiert: zwei Personen je Artikel, wechselnde Paare</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="592"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
         <source>Coding:</source>
         <translation>Codierung:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="595"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="629"/>
         <source>Production coders</source>
         <translation>Codierende der Hauptcodierung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="597"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="767"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="631"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="801"/>
         <source>Coders:</source>
         <translation>Codierende:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="604"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="638"/>
         <source>Plan</source>
         <translation>Planen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="606"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="640"/>
         <source>Assign</source>
         <translation>Zuweisen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="660"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="729"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="660"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="763"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="645"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="679"/>
         <source>Press &lt;i&gt;Plan&lt;/i&gt; to see who would code which article.</source>
         <translation>Drücken Sie &lt;i&gt;Planen&lt;/i&gt;, um zu sehen, wer welchen Artikel codieren würde.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="685"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="719"/>
         <source>Every article is assigned already: there is no rest to deal.</source>
         <translation>Jeder Artikel ist bereits zugewiesen: Es gibt keinen Rest zu verteilen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="690"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="724"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="691"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="725"/>
         <source>&lt;b&gt;Planned, not yet assigned:&lt;/b&gt; %n article(s); load per coder %1. Press &lt;i&gt;Assign&lt;/i&gt; to write the plan.</source>
         <translation>
             <numerusform>&lt;b&gt;Geplant, noch nicht zugewiesen:&lt;/b&gt; %n Artikel; Last je Person %1. Drücken Sie &lt;i&gt;Zuweisen&lt;/i&gt;, um den Plan zu speichern.</numerusform>
@@ -12215,163 +12459,163 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="713"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="747"/>
         <source>The rest is assigned.</source>
         <translation>Der Rest ist zugewiesen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="728"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="762"/>
         <source>&lt;b&gt;Articles per coder and phase&lt;/b&gt; (done / assigned)</source>
         <translation>&lt;b&gt;Artikel je Person und Phase&lt;/b&gt; (erledigt / zugewiesen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="732"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="766"/>
         <source>Total</source>
         <translation>Gesamt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="739"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="773"/>
         <source>&lt;b&gt;Every assignment&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle Zuweisungen&lt;/b&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Phase</source>
         <translation>Phase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="749"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="783"/>
         <source>Give articles to coders</source>
         <translation>Artikel an Codierende geben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="751"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="785"/>
         <source>Every chosen coder gets every chosen article, e.g. the training articles that the lead has master-coded.</source>
         <translation>Alle gewählten Codierenden erhalten alle gewählten Artikel, z.&#xa0;B. die Trainingsartikel, für die die Leitung eine Mastercodierung erstellt hat.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="764"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="798"/>
         <source>Articles to give</source>
         <translation>Zu vergebende Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="770"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="804"/>
         <source>Coders to give to</source>
         <translation>Empfangende Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="772"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="806"/>
         <source>Give</source>
         <translation>Vergeben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="802"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="836"/>
         <source>done</source>
         <translation>erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="803"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="837"/>
         <source>started</source>
         <translation>begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="804"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="838"/>
         <source>not started</source>
         <translation>nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="860"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="894"/>
         <source>Every chosen coder has every chosen article in this phase already.</source>
         <translation>Alle gewählten Codierenden haben alle gewählten Artikel in dieser Phase bereits.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
         <source>Version</source>
         <translation>Version</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
         <source>Made</source>
         <translation>Erstellt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
         <source>By</source>
         <translation>Von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
         <source>Note</source>
         <translation>Notiz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="886"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="920"/>
         <source>Add a version from a file…</source>
         <translation>Version aus Datei hinzufügen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="888"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="922"/>
         <source>Read a codebook JSON file and store it as the next version, with a note that says what changed and why.</source>
         <translation>Eine Codebuch-JSON-Datei einlesen und als nächste Version speichern, mit einer Notiz, was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="901"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="935"/>
         <source>Compare version</source>
         <translation>Version vergleichen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="903"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="937"/>
         <source>with</source>
         <translation>mit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="911"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="945"/>
         <source>Changes between the versions</source>
         <translation>Änderungen zwischen den Versionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="919"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="953"/>
         <source>Only those to re-check</source>
         <translation>Nur erneut zu prüfende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Made under</source>
         <translation>Erstellt unter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Re-check</source>
         <translation>Erneut prüfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="993"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1027"/>
         <source>yes — its function changed</source>
         <translation>ja — ihre Funktion hat sich geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="993"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1027"/>
         <source>no</source>
         <translation>nein</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1003"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1037"/>
         <source>&lt;b&gt;Every annotation was made under the current version (%1).&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle Annotationen wurden unter der aktuellen Version (%1) erstellt.&lt;/b&gt;</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1004"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1038"/>
         <source>&lt;b&gt;%n annotation(s) were made under an older version&lt;/b&gt; than the current one (%1); %2 of them belong to a function whose definition, rules, examples or attributes changed since, and should be re-checked.</source>
         <translation>
             <numerusform>&lt;b&gt;%n Annotation wurde unter einer älteren Version&lt;/b&gt; als der aktuellen (%1) erstellt; %2 davon gehören zu einer Funktion, deren Definition, Regeln, Beispiele oder Merkmale sich seither geändert haben, und sollten erneut geprüft werden.</numerusform>
@@ -12379,90 +12623,93 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1019"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1053"/>
         <source>&lt;p&gt;There is only version %1: nothing to compare yet. Add a version when the codebook changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Es gibt nur Version %1: noch nichts zu vergleichen. Fügen Sie eine Version hinzu, wenn sich das Codebuch ändert.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1023"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1057"/>
         <source>&lt;p&gt;Choose two different versions to compare.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Wählen Sie zwei verschiedene Versionen zum Vergleichen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1032"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1066"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codebuchversion %1 → %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1034"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1068"/>
         <source>&lt;p&gt;No changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Keine Änderungen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1042"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1076"/>
         <source>added</source>
         <translation>hinzugefügt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1046"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1080"/>
         <source>removed</source>
         <translation>entfernt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1050"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1084"/>
         <source>changed</source>
         <translation>geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1075"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1109"/>
         <source>item removed:</source>
         <translation>Item entfernt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1079"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1113"/>
         <source>item added:</source>
         <translation>Item hinzugefügt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1083"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1117"/>
         <source>the order changed</source>
         <translation>die Reihenfolge hat sich geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1087"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1121"/>
         <source>was:</source>
         <translation>vorher:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1090"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1124"/>
         <source>now:</source>
         <translation>jetzt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1102"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1106"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1136"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1140"/>
         <source>Add a codebook version</source>
         <translation>Codebuchversion hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1102"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1136"/>
         <source>Codebooks (*.json)</source>
         <translation>Codebücher (*.json)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1107"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1141"/>
         <source>What changed, and why?</source>
         <translation>Was hat sich geändert, und warum?</translation>
     </message>
     <message>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="334"/>
         <source>Withdraw the draw</source>
         <translation>Ziehung zurückziehen</translation>
     </message>
     <message>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="337"/>
         <source>Remove the committed draw and its assignments, so that the phase can be drawn again; only while nobody has coded any of its articles.</source>
         <translation>Die gespeicherte Ziehung und ihre Zuweisungen entfernen, damit die Phase neu gezogen werden kann; nur solange niemand einen ihrer Artikel codiert hat.</translation>
     </message>
     <message numerus="yes">
+        <location filename="../app/desktop/study/study_design_window.cpp" line="499"/>
         <source>&lt;b&gt;The %1 sample was withdrawn&lt;/b&gt;: %n assignment(s) removed, the withdrawal recorded in the project&apos;s log. The phase can be drawn again.</source>
         <translation>
             <numerusform>&lt;b&gt;Die Stichprobe der Phase %1 wurde zurückgezogen&lt;/b&gt;: %n Zuweisung entfernt, das Zurückziehen im Protokoll des Projekts festgehalten. Die Phase kann neu gezogen werden.</numerusform>
@@ -12612,75 +12859,24 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
 <context>
     <name>main</name>
     <message>
-        <location filename="../app/desktop/main.cpp" line="25"/>
+        <location filename="../app/desktop/main.cpp" line="29"/>
         <source>Fourfold: manual frame analysis of news and opinion articles.</source>
         <translation>Fourfold: manuelle Frame-Analyse von Nachrichten- und Meinungsartikeln.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main.cpp" line="29"/>
+        <location filename="../app/desktop/main.cpp" line="33"/>
         <source>Code as the coder with this pseudonym.</source>
         <translation>Unter diesem Pseudonym codieren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main.cpp" line="33"/>
+        <location filename="../app/desktop/main.cpp" line="37"/>
         <source>A project file to open (*.fourfold).</source>
         <translation>Eine zu öffnende Projektdatei (*.fourfold).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main.cpp" line="42"/>
+        <location filename="../app/desktop/main.cpp" line="46"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
-    </message>
-</context>
-<context>
-    <name>fourfold::CoderLegend</name>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="15"/>
-        <source>Coders of the spans shown</source>
-        <translation>Codierende der gezeigten Textstellen</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="21"/>
-        <source>Each span&apos;s badge carries its coder&apos;s pseudonym after the letter.</source>
-        <translation>Das Kennzeichen jeder Textstelle trägt nach dem Buchstaben das Pseudonym der oder des Codierenden.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="23"/>
-        <source>Show the spans of</source>
-        <translation>Textstellen zeigen von</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="24"/>
-        <source>&amp;Show spans of:</source>
-        <translation>Textstellen &amp;zeigen von:</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="46"/>
-        <source>All coders</source>
-        <translation>Alle Codierenden</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="68"/>
-        <source>unknown</source>
-        <translation>unbekannt</translation>
-    </message>
-    <message numerus="yes">
-        <location filename="../app/desktop/coder_legend.cpp" line="74"/>
-        <source>&lt;b&gt;%1&lt;/b&gt; %n span(s)</source>
-        <translation>
-            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n Textstelle</numerusform>
-            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n Textstellen</numerusform>
-        </translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="80"/>
-        <source>No coder has spans on this article.</source>
-        <translation>Niemand hat in diesem Artikel Textstellen codiert.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="81"/>
-        <source>Spans by: %1</source>
-        <translation>Textstellen von: %1</translation>
     </message>
 </context>
 </TS>

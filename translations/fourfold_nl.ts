@@ -160,6 +160,7 @@
     <message>
         <location filename="../core/project/annotation_edits.cpp" line="145"/>
         <location filename="../core/project/annotation_edits.cpp" line="178"/>
+        <location filename="../core/project/annotation_edits.cpp" line="357"/>
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Een wijziging die nooit is uitgevoerd, kan niet ongedaan worden gemaakt.</translation>
     </message>
@@ -214,10 +215,12 @@
         <translation>Het antwoord kon niet worden opgeslagen: het artikel of de codeur ervan bestaat niet.</translation>
     </message>
     <message>
+        <location filename="../core/project/annotation_edits.cpp" line="330"/>
         <source>Withdraw answer &quot;%1&quot;</source>
         <translation>Antwoord ‘%1’ intrekken</translation>
     </message>
     <message>
+        <location filename="../core/project/annotation_edits.cpp" line="344"/>
         <source>There is no answer to &quot;%1&quot; to withdraw.</source>
         <translation>Er is geen antwoord op ‘%1’ om in te trekken.</translation>
     </message>
@@ -1074,159 +1077,160 @@
         <translation>‘%1’ is geen antwoord op ‘%2’ (toegestaan: %3).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="23"/>
+        <location filename="../core/model/codebook_json.cpp" line="24"/>
         <source>null</source>
         <translation>null</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="25"/>
+        <location filename="../core/model/codebook_json.cpp" line="26"/>
         <source>a boolean</source>
         <translation>een booleaanse waarde</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="27"/>
+        <location filename="../core/model/codebook_json.cpp" line="28"/>
         <source>a number</source>
         <translation>een getal</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="29"/>
-        <location filename="../core/model/codebook_json.cpp" line="204"/>
-        <location filename="../core/model/codebook_json.cpp" line="236"/>
-        <location filename="../core/model/codebook_json.cpp" line="282"/>
+        <location filename="../core/model/codebook_json.cpp" line="30"/>
+        <location filename="../core/model/codebook_json.cpp" line="227"/>
+        <location filename="../core/model/codebook_json.cpp" line="259"/>
+        <location filename="../core/model/codebook_json.cpp" line="305"/>
         <source>a string</source>
         <translation>een tekenreeks</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="31"/>
-        <location filename="../core/model/codebook_json.cpp" line="221"/>
+        <location filename="../core/model/codebook_json.cpp" line="32"/>
+        <location filename="../core/model/codebook_json.cpp" line="244"/>
         <source>an array</source>
         <translation>een array</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="33"/>
-        <location filename="../core/model/codebook_json.cpp" line="276"/>
-        <location filename="../core/model/codebook_json.cpp" line="321"/>
+        <location filename="../core/model/codebook_json.cpp" line="34"/>
+        <location filename="../core/model/codebook_json.cpp" line="299"/>
+        <location filename="../core/model/codebook_json.cpp" line="344"/>
         <source>an object</source>
         <translation>een object</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="37"/>
+        <location filename="../core/model/codebook_json.cpp" line="38"/>
         <source>nothing</source>
         <translation>niets</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="90"/>
+        <location filename="../core/model/codebook_json.cpp" line="91"/>
         <source>the key &quot;%1&quot; appears twice.</source>
         <translation>de sleutel ‘%1’ komt twee keer voor.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="112"/>
+        <location filename="../core/model/codebook_json.cpp" line="114"/>
         <source>&quot;%1&quot; defines the function &quot;%2&quot; a second time; a codebook defines problem, cause, evaluation and remedy once each.</source>
         <translation>‘%1’ definieert de functie ‘%2’ een tweede keer; een codeboek definieert probleem, oorzaak, evaluatie en oplossing elk één keer.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="122"/>
+        <location filename="../core/model/codebook_json.cpp" line="124"/>
         <source>the codebook does not define the function &quot;%1&quot;.</source>
         <translation>het codeboek definieert de functie ‘%1’ niet.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="135"/>
+        <location filename="../core/model/codebook_json.cpp" line="137"/>
         <source>&quot;%1&quot; repeats the item &quot;%2&quot;.</source>
         <translation>‘%1’ herhaalt het item ‘%2’.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="153"/>
+        <location filename="../core/model/codebook_json.cpp" line="176"/>
         <source>&quot;%1&quot; must be %2, not %3.</source>
         <translation>‘%1’ moet %2 zijn, niet %3.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="166"/>
+        <location filename="../core/model/codebook_json.cpp" line="189"/>
         <source>unknown key &quot;%1&quot; (expected one of: %2).</source>
         <translation>onbekende sleutel ‘%1’ (verwacht een van: %2).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="182"/>
+        <location filename="../core/model/codebook_json.cpp" line="205"/>
         <source>&quot;%1&quot; contains the control character U+%2; only line breaks and tabs may stand in definitions, rules, examples and questions.</source>
         <translation>‘%1’ bevat het stuurteken U+%2; in definities, regels, voorbeelden en vragen mogen alleen regeleinden en tabs staan.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="186"/>
+        <location filename="../core/model/codebook_json.cpp" line="209"/>
         <source>&quot;%1&quot; contains the control character U+%2.</source>
         <translation>‘%1’ bevat het stuurteken U+%2.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="200"/>
-        <location filename="../core/model/codebook_json.cpp" line="217"/>
+        <location filename="../core/model/codebook_json.cpp" line="223"/>
+        <location filename="../core/model/codebook_json.cpp" line="240"/>
         <source>&quot;%1&quot; is missing.</source>
         <translation>‘%1’ ontbreekt.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="251"/>
+        <location filename="../core/model/codebook_json.cpp" line="274"/>
         <source>&quot;%1&quot; lists no values.</source>
         <translation>‘%1’ noemt geen waarden.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="257"/>
+        <location filename="../core/model/codebook_json.cpp" line="280"/>
         <source>&quot;%1&quot; is an empty value.</source>
         <translation>‘%1’ is een lege waarde.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="260"/>
+        <location filename="../core/model/codebook_json.cpp" line="283"/>
         <source>&quot;%1&quot; repeats the value &quot;%2&quot;.</source>
         <translation>‘%1’ herhaalt de waarde ‘%2’.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="285"/>
+        <location filename="../core/model/codebook_json.cpp" line="308"/>
         <source>&quot;%1&quot; recodes an empty value.</source>
         <translation>‘%1’ hercodeert een lege waarde.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="288"/>
+        <location filename="../core/model/codebook_json.cpp" line="311"/>
         <source>&quot;%1&quot; recodes &quot;%2&quot;, which is still one of the values; recode only values that were dropped.</source>
         <translation>‘%1’ hercodeert ‘%2’, dat nog een van de waarden is; hercodeer alleen waarden die zijn vervallen.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="294"/>
+        <location filename="../core/model/codebook_json.cpp" line="317"/>
         <source>&quot;%1&quot; recodes to &quot;%2&quot;, which is not one of the values (%3).</source>
         <translation>‘%1’ hercodeert naar ‘%2’, dat geen van de waarden is (%3).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="311"/>
+        <location filename="../core/model/codebook_json.cpp" line="334"/>
         <source>&quot;%1&quot; is &quot;%2&quot;, not a level of measurement (nominal, ordinal, interval or ratio).</source>
         <translation>‘%1’ is ‘%2’, geen meetniveau (nominal, ordinal, interval of ratio).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="331"/>
+        <location filename="../core/model/codebook_json.cpp" line="354"/>
         <source>&quot;%1&quot; is empty.</source>
         <translation>‘%1’ is leeg.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="348"/>
+        <location filename="../core/model/codebook_json.cpp" line="371"/>
+        <location filename="../core/model/codebook_json.cpp" line="490"/>
         <source>&quot;%1&quot; is &quot;%2&quot;, not one of the four functions (problem, cause, evaluation, remedy).</source>
         <translation>‘%1’ is ‘%2’, geen van de vier functies (problem, cause, evaluation, remedy).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="381"/>
+        <location filename="../core/model/codebook_json.cpp" line="404"/>
         <source>&quot;%1&quot; repeats the attribute &quot;%2&quot; of %3.</source>
         <translation>‘%1’ herhaalt het kenmerk ‘%2’ van %3.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="412"/>
+        <location filename="../core/model/codebook_json.cpp" line="435"/>
         <source>&quot;%1&quot; is only for choice attributes; &quot;%2&quot; is a text attribute.</source>
         <translation>‘%1’ geldt alleen voor keuzekenmerken; ‘%2’ is een tekstkenmerk.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="427"/>
+        <location filename="../core/model/codebook_json.cpp" line="450"/>
         <source>&quot;%1&quot; is &quot;%2&quot;, not an attribute type (choice or text).</source>
         <translation>‘%1’ is ‘%2’, geen kenmerktype (choice of text).</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="492"/>
+        <location filename="../core/model/codebook_json.cpp" line="617"/>
         <source>the codebook is not valid JSON: %1.</source>
         <translation>het codeboek is geen geldige JSON: %1.</translation>
     </message>
     <message>
-        <location filename="../core/model/codebook_json.cpp" line="496"/>
+        <location filename="../core/model/codebook_json.cpp" line="621"/>
         <source>the codebook must be a JSON object, not %1.</source>
         <translation>het codeboek moet een JSON-object zijn, geen %1.</translation>
     </message>
@@ -1605,92 +1609,92 @@
         <translation>toewijzing</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="53"/>
+        <location filename="../core/project/copy_validation.cpp" line="54"/>
         <source>is not a time</source>
         <translation>is geen tijd</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="55"/>
+        <location filename="../core/project/copy_validation.cpp" line="56"/>
         <source>is dated %1, before the copy was handed out (%2)</source>
         <translation>is gedateerd op %1, vóór de kopie werd uitgegeven (%2)</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="58"/>
+        <location filename="../core/project/copy_validation.cpp" line="59"/>
         <source>is dated %1, in the future (now %2)</source>
         <translation>is gedateerd op %1, in de toekomst (nu %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="71"/>
+        <location filename="../core/project/copy_validation.cpp" line="72"/>
         <source>The %1 %2 in %3 reuses the uuid of another object in the project (%4); the copy was changed outside Fourfold; it was not merged.</source>
         <translation>%1 %2 in %3 hergebruikt de uuid van een ander object in het project (%4); de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="83"/>
+        <location filename="../core/project/copy_validation.cpp" line="84"/>
         <source>The coding time of article &quot;%1&quot; in %2 is %3 s, less than the %4 s it was handed out with; the copy was changed outside Fourfold; it was not merged.</source>
         <translation>De codeertijd van artikel ‘%1’ in %2 is %3 s, minder dan de %4 s waarmee het is uitgegeven; de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="92"/>
+        <location filename="../core/project/copy_validation.cpp" line="93"/>
         <source>%1 adds more coding time (%2 s on article &quot;%3&quot;, %4 s before it) than has passed since it was handed out (%5 s, with a day&apos;s allowance for clocks); the copy was changed outside Fourfold; it was not merged.</source>
         <translation>%1 voegt meer codeertijd toe (%2 s bij artikel ‘%3’, eerder %4 s) dan er sinds het uitgeven is verstreken (%5 s, met een dag speling voor klokken); de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="114"/>
+        <location filename="../core/project/copy_validation.cpp" line="115"/>
         <source>Span %1 in %2 does not quote its article&apos;s text at [%3, %4); the copy was changed outside Fourfold; it was not merged.</source>
         <translation>Fragment %1 in %2 citeert de tekst van zijn artikel op [%3, %4) niet; de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="152"/>
+        <location filename="../core/project/copy_validation.cpp" line="153"/>
         <source>%1 holds two objects (%2, %3) with the same uuid %4; the copy was changed outside Fourfold; it was not merged.</source>
         <translation>%1 bevat twee objecten (%2, %3) met dezelfde uuid %4; de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="170"/>
+        <location filename="../core/project/copy_validation.cpp" line="171"/>
         <source>%1 holds an assignment of article &quot;%2&quot; (phase %3) that was not handed out in this copy; it was not merged.</source>
         <translation>%1 bevat een toewijzing van artikel ‘%2’ (fase %3) die niet met deze kopie is uitgegeven; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="178"/>
+        <location filename="../core/project/copy_validation.cpp" line="179"/>
         <source>The link %1 in %2 joins a span that is not in the copy; it was not merged.</source>
         <translation>De koppeling %1 in %2 verbindt een fragment dat niet in de kopie staat; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="184"/>
+        <location filename="../core/project/copy_validation.cpp" line="185"/>
         <source>The %1 %2 in %3 is on article &quot;%4&quot;, which was not handed out to %5 in this copy; it was not merged.</source>
         <translation>%1 %2 in %3 hoort bij artikel ‘%4’, dat met deze kopie niet aan %5 is uitgegeven; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="202"/>
+        <location filename="../core/project/copy_validation.cpp" line="203"/>
         <source>The %1 %2 in %3 %4 (%5 &quot;%6&quot;); the copy was changed outside Fourfold; it was not merged.</source>
         <translation>%1 %2 in %3 %4 (%5 ‘%6’); de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="217"/>
+        <location filename="../core/project/copy_validation.cpp" line="218"/>
         <source>Event %1 (%2) of %3</source>
         <translation>Gebeurtenis %1 (%2) van %3</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="219"/>
+        <location filename="../core/project/copy_validation.cpp" line="220"/>
         <source>%1 %2; the copy&apos;s log was changed outside Fourfold; it was not merged.</source>
         <translation>%1 %2; het logboek van de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="228"/>
+        <location filename="../core/project/copy_validation.cpp" line="229"/>
         <source>%1 is not one a coder&apos;s program writes; the copy&apos;s log was changed outside Fourfold; it was not merged.</source>
         <translation>%1 is er geen die het programma van een codeur schrijft; het logboek van de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="235"/>
+        <location filename="../core/project/copy_validation.cpp" line="236"/>
         <source>%1 is not by the copy&apos;s coder %2; it was not merged.</source>
         <translation>%1 is niet van de codeur %2 van de kopie; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="247"/>
+        <location filename="../core/project/copy_validation.cpp" line="248"/>
         <source>%1 is not an edit a coder can make (object %2 %3); the copy&apos;s log was changed outside Fourfold; it was not merged.</source>
         <translation>%1 is geen wijziging die een codeur kan maken (object %2 %3); het logboek van de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/copy_validation.cpp" line="258"/>
+        <location filename="../core/project/copy_validation.cpp" line="259"/>
         <source>%1 is about %2, which is not the coder&apos;s own in the project (%3); it was not merged.</source>
         <translation>%1 gaat over %2, dat in het project niet van de codeur zelf is (%3); ze is niet samengevoegd.</translation>
     </message>
@@ -2293,7 +2297,7 @@
 <context>
     <name>GoldEditsText</name>
     <message>
-        <location filename="../core/project/gold_edits.cpp" line="30"/>
+        <location filename="../core/project/gold_edits.cpp" line="32"/>
         <source>Only a lead can decide the gold standard.</source>
         <translation>Alleen een coördinator kan over de gouden standaard beslissen.</translation>
     </message>
@@ -2582,12 +2586,12 @@
         <translation>Fourfold-%1-fragmenten, verdeling %2</translation>
     </message>
     <message>
-        <location filename="../core/exchange/layer_export.cpp" line="252"/>
+        <location filename="../core/exchange/layer_export.cpp" line="253"/>
         <source>The layer &quot;%1&quot; covers no article, so there is nothing to export.</source>
         <translation>De laag ‘%1’ omvat geen enkel artikel, dus er is niets te exporteren.</translation>
     </message>
     <message>
-        <location filename="../core/exchange/layer_export.cpp" line="392"/>
+        <location filename="../core/exchange/layer_export.cpp" line="414"/>
         <source>The text of article &quot;%1&quot; does not match its stored SHA-256 (the project file is damaged); nothing was exported.</source>
         <translation>De tekst van artikel ‘%1’ komt niet overeen met de opgeslagen SHA-256 (het projectbestand is beschadigd); er is niets geëxporteerd.</translation>
     </message>
@@ -2850,42 +2854,42 @@
 <context>
     <name>ProjectImportText</name>
     <message>
-        <location filename="../core/project/project_import.cpp" line="41"/>
+        <location filename="../core/project/project_import.cpp" line="42"/>
         <source>the article &quot;%1&quot; has no text.</source>
         <translation>het artikel ‘%1’ heeft geen tekst.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="56"/>
+        <location filename="../core/project/project_import.cpp" line="57"/>
         <source>the article &quot;%1&quot; cannot be segmented: %2</source>
         <translation>het artikel ‘%1’ kan niet worden gesegmenteerd: %2</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="120"/>
+        <location filename="../core/project/project_import.cpp" line="121"/>
         <source>same text as the article &quot;%1&quot; already in the project</source>
         <translation>dezelfde tekst als het artikel ‘%1’ dat al in het project staat</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="129"/>
+        <location filename="../core/project/project_import.cpp" line="130"/>
         <source>the id &quot;%1&quot; is already used by another article in the project, with a different text.</source>
         <translation>de id ‘%1’ wordt in het project al gebruikt door een ander artikel met een andere tekst.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="147"/>
+        <location filename="../core/project/project_import.cpp" line="148"/>
         <source>The import of %1 was cancelled; nothing was added.</source>
         <translation>De import van %1 is geannuleerd; er is niets toegevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="182"/>
+        <location filename="../core/project/project_import.cpp" line="194"/>
         <source>passed over: not a format Fourfold reads</source>
         <translation>overgeslagen: geen formaat dat Fourfold leest</translation>
     </message>
     <message>
-        <location filename="../core/project/project_import.cpp" line="193"/>
+        <location filename="../core/project/project_import.cpp" line="205"/>
         <source>The folder %1 holds no files.</source>
         <translation>De map %1 bevat geen bestanden.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/project_import.cpp" line="198"/>
+        <location filename="../core/project/project_import.cpp" line="210"/>
         <source>%1: %n article(s)</source>
         <translation>
             <numerusform>%1: %n artikel</numerusform>
@@ -2893,7 +2897,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/project_import.cpp" line="203"/>
+        <location filename="../core/project/project_import.cpp" line="215"/>
         <source>The folder %1 was not imported: %n of its files could not be read, so nothing was added.</source>
         <translation>
             <numerusform>De map %1 is niet geïmporteerd: %n van de bestanden kon niet worden gelezen, dus er is niets toegevoegd.</numerusform>
@@ -2909,21 +2913,22 @@
 <context>
     <name>ProjectTables</name>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="61"/>
+        <location filename="../core/store/project_tables.cpp" line="62"/>
         <source>The article is already assigned to this coder in this phase, or one of them does not exist.</source>
         <translation>Het artikel is in deze fase al aan deze codeur toegewezen, of een van beide bestaat niet.</translation>
     </message>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="266"/>
+        <location filename="../core/store/project_tables.cpp" line="320"/>
         <source>The project file %1 is damaged, so nothing was added to it; `fourfold-cli check` lists the damage. Restore it from a backup.</source>
         <translation>Het projectbestand %1 is beschadigd, dus er is niets aan toegevoegd; `fourfold-cli check` somt de schade op. Zet het terug vanuit een back-up.</translation>
     </message>
     <message>
-        <location filename="../core/store/project_tables.cpp" line="298"/>
+        <location filename="../core/store/project_tables.cpp" line="352"/>
         <source>foreign_key_check: row %1 of %2 refers to a missing row of %3</source>
         <translation>foreign_key_check: rij %1 van %2 verwijst naar een ontbrekende rij van %3</translation>
     </message>
     <message>
+        <location filename="../core/store/project_tables.cpp" line="119"/>
         <source>The assignment is not in the project.</source>
         <translation>De toewijzing staat niet in het project.</translation>
     </message>
@@ -2931,42 +2936,42 @@
 <context>
     <name>ProjectText</name>
     <message>
-        <location filename="../core/project/project.cpp" line="40"/>
+        <location filename="../core/project/project.cpp" line="41"/>
         <source>The default codebook is missing from this build.</source>
         <translation>Het standaardcodeboek ontbreekt in deze build.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="69"/>
+        <location filename="../core/project/project.cpp" line="70"/>
         <source>%1 already exists; choose another name or open it.</source>
         <translation>%1 bestaat al; kies een andere naam of open het.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="88"/>
+        <location filename="../core/project/project.cpp" line="89"/>
         <source>Default codebook</source>
         <translation>Standaardcodeboek</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="112"/>
+        <location filename="../core/project/project.cpp" line="113"/>
         <source>There is no project file %1.</source>
         <translation>Er is geen projectbestand %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="190"/>
+        <location filename="../core/project/project.cpp" line="191"/>
         <source>A coder needs a name and a pseudonym.</source>
         <translation>Een codeur heeft een naam en een pseudoniem nodig.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="195"/>
+        <location filename="../core/project/project.cpp" line="196"/>
         <source>%1 was not added: a lead is added with a passphrase (Lead → People or fourfold-cli people --add).</source>
         <translation>%1 is niet toegevoegd: een coördinator wordt met een wachtwoordzin toegevoegd (Coördinator → Personen of fourfold-cli people --add).</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="245"/>
+        <location filename="../core/project/project.cpp" line="246"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 is uitgeschakeld en krijgt geen nieuwe toewijzingen; schakel deze persoon eerst in.</translation>
     </message>
     <message>
-        <location filename="../core/project/project.cpp" line="369"/>
+        <location filename="../core/project/project.cpp" line="375"/>
         <source>An edit without its own savepoint needs a batch.</source>
         <translation>Een wijziging zonder eigen savepoint heeft een batch nodig.</translation>
     </message>
@@ -2985,7 +2990,7 @@
     </message>
     <message numerus="yes">
         <location filename="../core/agreement/project_units.cpp" line="92"/>
-        <location filename="../core/agreement/project_units.cpp" line="402"/>
+        <location filename="../core/agreement/project_units.cpp" line="422"/>
         <source>Reliability needs at least two coders; the selection has %n.</source>
         <translation>
             <numerusform>Betrouwbaarheid vereist ten minste twee codeurs; de selectie heeft er %n.</numerusform>
@@ -2993,37 +2998,37 @@
         </translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="148"/>
+        <location filename="../core/agreement/project_units.cpp" line="168"/>
         <source>%1: 1 article in progress left out</source>
         <translation>%1: 1 artikel in bewerking weggelaten</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="149"/>
+        <location filename="../core/agreement/project_units.cpp" line="169"/>
         <source>%1: %2 articles in progress left out</source>
         <translation>%1: %2 artikelen in bewerking weggelaten</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="299"/>
+        <location filename="../core/agreement/project_units.cpp" line="319"/>
         <source>Continuum units are compared with unitizing alpha, not as a table.</source>
         <translation>Continuüm-eenheden worden vergeleken met unitizing-alfa, niet als tabel.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="303"/>
+        <location filename="../core/agreement/project_units.cpp" line="323"/>
         <source>Span units compare an attribute: name one function and one of its attributes.</source>
         <translation>Fragmenteenheden vergelijken een kenmerk: noem één functie en een van haar kenmerken.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="379"/>
+        <location filename="../core/agreement/project_units.cpp" line="399"/>
         <source>None of the selected coders has marked any of the selected articles done.</source>
         <translation>Geen van de gekozen codeurs heeft een van de gekozen artikelen als klaar gemarkeerd.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="455"/>
+        <location filename="../core/agreement/project_units.cpp" line="475"/>
         <source>No article was marked done by all of the selected coders, so there is no common continuum.</source>
         <translation>Geen enkel artikel is door alle gekozen codeurs als klaar gemarkeerd, dus er is geen gemeenschappelijk continuüm.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="474"/>
+        <location filename="../core/agreement/project_units.cpp" line="494"/>
         <source>the codebook has no attribute &quot;%1&quot; for %2.</source>
         <translation>het codeboek heeft geen kenmerk ‘%1’ voor %2.</translation>
     </message>
@@ -3146,37 +3151,37 @@
         <translation>De %1 artikelen van fase %2 zijn getrokken als %3 (seed %4) uit een steekproefkader van %5 artikelen zonder eerdere toewijzing, op %6.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="186"/>
+        <location filename="../app/report/report_data.cpp" line="189"/>
         <source>The report&apos;s unit must be paragraph, sentence or token.</source>
         <translation>De eenheid van het rapport moet paragraph, sentence of token zijn.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="191"/>
+        <location filename="../app/report/report_data.cpp" line="194"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="192"/>
+        <location filename="../app/report/report_data.cpp" line="195"/>
         <source>Reliability report: %1</source>
         <translation>Betrouwbaarheidsrapport: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="237"/>
+        <location filename="../app/report/report_data.cpp" line="242"/>
         <source>All four functions (MASI)</source>
         <translation>Alle vier functies (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="237"/>
+        <location filename="../app/report/report_data.cpp" line="242"/>
         <source>All four (MASI)</source>
         <translation>Alle vier (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="280"/>
+        <location filename="../app/report/report_data.cpp" line="285"/>
         <source>Spans on the continuum</source>
         <translation>Fragmenten op het continuüm</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="281"/>
+        <location filename="../app/report/report_data.cpp" line="286"/>
         <source>continuum</source>
         <translation>continuüm</translation>
     </message>
@@ -3184,575 +3189,575 @@
 <context>
     <name>ReportDocumentText</name>
     <message>
-        <location filename="../app/report/report_document.cpp" line="157"/>
-        <location filename="../app/report/report_document.cpp" line="159"/>
-        <location filename="../app/report/report_frames_section.cpp" line="86"/>
-        <location filename="../app/report/report_markup.cpp" line="92"/>
+        <location filename="../app/report/report_document.cpp" line="149"/>
+        <location filename="../app/report/report_document.cpp" line="151"/>
+        <location filename="../app/report/report_frames_section.cpp" line="77"/>
+        <location filename="../app/report/report_markup.cpp" line="80"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="94"/>
+        <location filename="../app/report/report_markup.cpp" line="82"/>
         <source>reliable</source>
         <translation>betrouwbaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="96"/>
+        <location filename="../app/report/report_markup.cpp" line="84"/>
         <source>tentative</source>
         <translation>voorlopig</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="100"/>
+        <location filename="../app/report/report_markup.cpp" line="88"/>
         <source>unreliable</source>
         <translation>onbetrouwbaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="137"/>
+        <location filename="../app/report/report_markup.cpp" line="125"/>
         <source>paragraph</source>
         <translation>alinea</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="137"/>
+        <location filename="../app/report/report_markup.cpp" line="125"/>
         <source>paragraphs</source>
         <translation>alinea&apos;s</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="139"/>
+        <location filename="../app/report/report_markup.cpp" line="127"/>
         <source>token</source>
         <translation>token</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="139"/>
+        <location filename="../app/report/report_markup.cpp" line="127"/>
         <source>tokens</source>
         <translation>tokens</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="141"/>
+        <location filename="../app/report/report_markup.cpp" line="129"/>
         <source>sentence</source>
         <translation>zin</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="141"/>
+        <location filename="../app/report/report_markup.cpp" line="129"/>
         <source>sentences</source>
         <translation>zinnen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="50"/>
+        <location filename="../app/report/report_document.cpp" line="41"/>
         <source>unit: %1</source>
         <translation>eenheid: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="51"/>
+        <location filename="../app/report/report_document.cpp" line="42"/>
         <source>phase: %1</source>
         <translation>fase: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="53"/>
+        <location filename="../app/report/report_document.cpp" line="44"/>
         <source>all phases</source>
         <translation>alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="54"/>
+        <location filename="../app/report/report_document.cpp" line="45"/>
         <source>bootstrap: %1 replicates, seed %2</source>
         <translation>bootstrap: %1 replicaties, seed %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="58"/>
+        <location filename="../app/report/report_document.cpp" line="49"/>
         <source>Inter-coder reliability</source>
         <translation>Intercodeursbetrouwbaarheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="61"/>
+        <location filename="../app/report/report_document.cpp" line="52"/>
         <source>Project “%1” · written %2 by %3 · %4</source>
         <translation>Project ‘%1’ · geschreven %2 door %3 · %4</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="32"/>
+        <location filename="../app/report/report_method_text.cpp" line="20"/>
         <source>%1 coded %2 articles (%3 spans)</source>
         <translation>%1 codeerde %2 artikelen (%3 fragmenten)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="42"/>
+        <location filename="../app/report/report_method_text.cpp" line="30"/>
         <source>Inter-coder reliability was assessed on a reliability sample of %1 articles that two or more coders coded independently (%2 of them by all %3 coders), out of %4 articles in the project. </source>
         <translation>De intercodeursbetrouwbaarheid is bepaald op een betrouwbaarheidssteekproef van %1 artikelen die twee of meer codeurs onafhankelijk van elkaar codeerden (%2 daarvan door alle %3 codeurs), van de %4 artikelen in het project. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="54"/>
+        <location filename="../app/report/report_method_text.cpp" line="42"/>
         <source>The sample was drawn %1. </source>
         <translation>De steekproef is %1 getrokken. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="55"/>
+        <location filename="../app/report/report_method_text.cpp" line="43"/>
         <source>state how the articles were drawn, e.g. a simple random sample of the study&apos;s articles, with its size and seed</source>
         <translation>vermeld hoe de artikelen zijn getrokken, bijv. als enkelvoudige aselecte steekproef uit de artikelen van het onderzoek, met omvang en seed</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="59"/>
+        <location filename="../app/report/report_method_text.cpp" line="47"/>
         <source>%1 coders (%2) took part: %3. </source>
         <translation>%1 codeurs (%2) namen deel: %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="63"/>
+        <location filename="../app/report/report_method_text.cpp" line="51"/>
         <source>Articles that coders had started but not yet marked as finished were included. </source>
         <translation>Artikelen die codeurs waren begonnen maar nog niet als afgerond hadden gemarkeerd, zijn meegenomen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="66"/>
+        <location filename="../app/report/report_method_text.cpp" line="54"/>
         <source>Only articles that a coder had marked as finished count for that coder. </source>
         <translation>Voor elke codeur tellen alleen de artikelen die hij of zij als afgerond had gemarkeerd. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="70"/>
+        <location filename="../app/report/report_method_text.cpp" line="58"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="72"/>
+        <location filename="../app/report/report_method_text.cpp" line="62"/>
         <source>Articles still in progress were left out: %1. </source>
         <translation>Artikelen die nog in bewerking waren, zijn weggelaten: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="76"/>
+        <location filename="../app/report/report_method_text.cpp" line="66"/>
         <source>Before the reliability coding, coders trained on %1 articles and coded a pilot of %2 articles; %3. </source>
         <translation>Vóór de betrouwbaarheidscodering oefenden de codeurs op %1 artikelen en codeerden ze een pilot van %2 artikelen; %3. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="83"/>
+        <location filename="../app/report/report_method_text.cpp" line="73"/>
         <source>hours of training</source>
         <translation>uren training</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="85"/>
+        <location filename="../app/report/report_method_text.cpp" line="75"/>
         <source>Coder training: %1. </source>
         <translation>Codeurstraining: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="87"/>
+        <location filename="../app/report/report_method_text.cpp" line="77"/>
         <source>describe the training and its approximate hours</source>
         <translation>beschrijf de training en de geschatte duur in uren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="93"/>
+        <location filename="../app/report/report_method_text.cpp" line="83"/>
         <source>%1 α = %2</source>
         <translation>%1 α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="97"/>
+        <location filename="../app/report/report_method_text.cpp" line="87"/>
         <source> (95% CI %1)</source>
         <translation> (95%-BI %1)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="102"/>
+        <location filename="../app/report/report_method_text.cpp" line="92"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
         <translation>Elk van de vier framingfuncties van Entman (1993) is gecodeerd als een tekstfragment; voor de betrouwbaarheid werd elke functie een binaire variabele (aanwezig of afwezig) per %1: een eenheid (%2) draagt een functie wanneer het fragment van een codeur met die functie ermee overlapt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="107"/>
+        <location filename="../app/report/report_method_text.cpp" line="97"/>
         <source>We report Krippendorff&apos;s alpha (Krippendorff, 2004) because it handles any number of coders, missing data and any level of measurement (Hayes &amp; Krippendorff, 2007). </source>
         <translation>We rapporteren Krippendorffs alfa (Krippendorff, 2004) omdat die met elk aantal codeurs, ontbrekende gegevens en elk meetniveau overweg kan (Hayes &amp; Krippendorff, 2007). </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="111"/>
+        <location filename="../app/report/report_method_text.cpp" line="101"/>
         <source>Alpha was %1</source>
         <translation>Alfa was %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="113"/>
+        <location filename="../app/report/report_method_text.cpp" line="103"/>
         <source>; for the set of functions per %1, compared with the MASI distance (Passonneau, 2006), α = %2</source>
         <translation>; voor de verzameling functies per %1, vergeleken met de MASI-afstand (Passonneau, 2006), α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="120"/>
+        <location filename="../app/report/report_method_text.cpp" line="110"/>
         <source>Intervals are 95% percentile bootstrap intervals from %1 resamples of the units; the table also gives the interval from resampled pairable values (Hayes &amp; Krippendorff, 2007), which is narrower than its nominal level when more than two coders are compared. </source>
         <translation>De intervallen zijn 95%-percentiel-bootstrapintervallen uit %1 hersteekproeven van de eenheden; de tabel geeft ook het interval uit opnieuw getrokken paarbare waarden (Hayes &amp; Krippendorff, 2007), dat smaller is dan het nominale niveau wanneer meer dan twee codeurs worden vergeleken. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="126"/>
+        <location filename="../app/report/report_method_text.cpp" line="117"/>
         <source>Following Krippendorff (2004), variables with α&#xa0;≥&#xa0;0.800 are relied on and variables with 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 support tentative conclusions only. </source>
         <translation>In navolging van Krippendorff (2004) wordt op variabelen met α&#xa0;≥&#xa0;0.800 vertrouwd en ondersteunen variabelen met 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 alleen voorlopige conclusies. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="137"/>
+        <location filename="../app/report/report_method_text.cpp" line="128"/>
         <source>%1 (%2) α = %3</source>
         <translation>%1 (%2) α = %3</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="144"/>
+        <location filename="../app/report/report_method_text.cpp" line="136"/>
         <source>For the other variables alpha was: %1.</source>
         <translation>Voor de overige variabelen was alfa: %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="149"/>
+        <location filename="../app/report/report_method_text.cpp" line="141"/>
         <source>Disagreements were resolved by adjudication into a separate gold standard: %1 spans on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Verschillen zijn opgelost door beslissing in een aparte gouden standaard: %1 fragmenten in %2 artikelen, beslist door %3, %4 daarvan met een schriftelijke motivering. De onafhankelijke coderingen bleven ongewijzigd; alle bovenstaande cijfers komen daaruit. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="161"/>
+        <location filename="../app/report/report_method_text.cpp" line="176"/>
         <source>No adjudication is recorded in the project yet: %1. </source>
         <translation>In het project is nog geen beslissing vastgelegd: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="162"/>
+        <location filename="../app/report/report_method_text.cpp" line="177"/>
         <source>say how disagreements were resolved, e.g. by discussion or by the lead</source>
         <translation>vermeld hoe verschillen zijn opgelost, bijv. door overleg of door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="165"/>
+        <location filename="../app/report/report_method_text.cpp" line="181"/>
         <source>Coding followed version %1 of the codebook (“%2”)</source>
         <translation>De codering volgde versie %1 van het codeboek (‘%2’)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="170"/>
+        <location filename="../app/report/report_method_text.cpp" line="186"/>
         <source>; %1 of %2 codings were made under an earlier version</source>
         <translation>; %1 van de %2 coderingen zijn gemaakt onder een eerdere versie</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="175"/>
+        <location filename="../app/report/report_method_text.cpp" line="191"/>
         <source>, which is available at %1.</source>
         <translation>, dat beschikbaar is op %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="176"/>
+        <location filename="../app/report/report_method_text.cpp" line="192"/>
         <source>where readers can obtain it</source>
         <translation>waar lezers het kunnen verkrijgen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="180"/>
+        <location filename="../app/report/report_method_text.cpp" line="196"/>
         <source>Highlighted brackets are for the authors to complete: the project does not record these facts.</source>
         <translation>Gemarkeerde haakjes vullen de auteurs zelf in: het project legt deze gegevens niet vast.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="198"/>
+        <location filename="../app/report/report_method_text.cpp" line="214"/>
         <source>Size of the reliability sample and how it was selected</source>
         <translation>Omvang van de betrouwbaarheidssteekproef en hoe die is geselecteerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="200"/>
+        <location filename="../app/report/report_method_text.cpp" line="216"/>
         <source>Relationship of the reliability sample to the full sample</source>
         <translation>Verhouding van de betrouwbaarheidssteekproef tot de volledige steekproef</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="202"/>
+        <location filename="../app/report/report_method_text.cpp" line="218"/>
         <source>Number of reliability coders</source>
         <translation>Aantal codeurs in de betrouwbaarheidstoets</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="203"/>
+        <location filename="../app/report/report_method_text.cpp" line="219"/>
         <source>Amount of coding conducted by each coder</source>
         <translation>Hoeveelheid codeerwerk per codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="204"/>
+        <location filename="../app/report/report_method_text.cpp" line="220"/>
         <source>Index or indices selected and why</source>
         <translation>Gekozen index of indices en waarom</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="205"/>
+        <location filename="../app/report/report_method_text.cpp" line="221"/>
         <source>Reliability for each variable, for each index</source>
         <translation>Betrouwbaarheid per variabele, per index</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="206"/>
+        <location filename="../app/report/report_method_text.cpp" line="222"/>
         <source>Amount of coder training required to reach reliability</source>
         <translation>Hoeveelheid codeurstraining die nodig was om betrouwbaarheid te bereiken</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="208"/>
+        <location filename="../app/report/report_method_text.cpp" line="224"/>
         <source>How disagreements were resolved</source>
         <translation>Hoe verschillen zijn opgelost</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="209"/>
+        <location filename="../app/report/report_method_text.cpp" line="226"/>
         <source>Where the codebook and coding instructions can be obtained</source>
         <translation>Waar het codeboek en de codeerinstructies te verkrijgen zijn</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="214"/>
+        <location filename="../app/report/report_method_text.cpp" line="231"/>
         <source>#</source>
         <translation>#</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="214"/>
+        <location filename="../app/report/report_method_text.cpp" line="232"/>
         <source>Item</source>
         <translation>Punt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="215"/>
+        <location filename="../app/report/report_method_text.cpp" line="233"/>
         <source>In this report</source>
         <translation>In dit rapport</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="223"/>
+        <location filename="../app/report/report_method_text.cpp" line="242"/>
         <source>filled in from the project</source>
         <translation>ingevuld uit het project</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="224"/>
+        <location filename="../app/report/report_method_text.cpp" line="243"/>
         <source>partly filled in; complete the bracket</source>
         <translation>deels ingevuld; vul de haakjes aan</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="36"/>
-        <location filename="../app/report/report_sections.cpp" line="38"/>
-        <location filename="../app/report/report_sections.cpp" line="117"/>
-        <location filename="../app/report/report_sections.cpp" line="201"/>
-        <location filename="../app/report/report_sections.cpp" line="238"/>
-        <location filename="../app/report/report_sections.cpp" line="372"/>
+        <location filename="../app/report/report_sections.cpp" line="23"/>
+        <location filename="../app/report/report_sections.cpp" line="25"/>
+        <location filename="../app/report/report_sections.cpp" line="108"/>
+        <location filename="../app/report/report_sections.cpp" line="193"/>
+        <location filename="../app/report/report_sections.cpp" line="233"/>
+        <location filename="../app/report/report_sections.cpp" line="370"/>
         <source>Variable</source>
         <translation>Variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="38"/>
+        <location filename="../app/report/report_sections.cpp" line="26"/>
         <source>Level</source>
         <translation>Niveau</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="39"/>
-        <location filename="../app/report/report_sections.cpp" line="202"/>
+        <location filename="../app/report/report_sections.cpp" line="27"/>
+        <location filename="../app/report/report_sections.cpp" line="195"/>
         <source>Units</source>
         <translation>Eenh.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="40"/>
-        <location filename="../app/report/report_sections.cpp" line="118"/>
+        <location filename="../app/report/report_sections.cpp" line="28"/>
+        <location filename="../app/report/report_sections.cpp" line="109"/>
         <source>Pairable values</source>
         <translation>Paarb. waarden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="41"/>
+        <location filename="../app/report/report_sections.cpp" line="29"/>
         <source>95% CI, units</source>
         <translation>95%-BI, eenheden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="41"/>
+        <location filename="../app/report/report_sections.cpp" line="30"/>
         <source>95% CI, pairs</source>
         <translation>95%-BI, paren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="42"/>
-        <location filename="../app/report/report_sections.cpp" line="202"/>
+        <location filename="../app/report/report_sections.cpp" line="31"/>
+        <location filename="../app/report/report_sections.cpp" line="196"/>
         <source>Agreement</source>
         <translation>Overeenst.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="42"/>
-        <location filename="../app/report/report_sections.cpp" line="292"/>
+        <location filename="../app/report/report_sections.cpp" line="32"/>
+        <location filename="../app/report/report_sections.cpp" line="289"/>
         <source>Verdict</source>
         <translation>Oordeel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="56"/>
+        <location filename="../app/report/report_sections.cpp" line="47"/>
         <source>not computed: %1</source>
         <translation>niet berekend: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="86"/>
+        <location filename="../app/report/report_sections.cpp" line="77"/>
         <source>Units: %1 (articles for article-level items; passages matched across coders for span attributes). Agreement: percent agreement, which is not chance-corrected and is never reported alone (Lombard et al., 2002). Units: units resampled, percentile interval (the interval to report); pairs: pairable values resampled with the expected disagreement held fixed (Hayes &amp; Krippendorff, 2007), too narrow with more than two coders.</source>
         <translation>Eenheden: %1 (artikelen voor items op artikelniveau; tussen codeurs gekoppelde passages voor kenmerken van fragmenten). Overeenstemming: procentuele overeenstemming, die niet voor toeval gecorrigeerd is en nooit alleen wordt gerapporteerd (Lombard et al., 2002). Eenheden: eenheden opnieuw getrokken, percentielinterval (het interval om te rapporteren); paren: paarbare waarden opnieuw getrokken met de verwachte onenigheid vastgehouden (Hayes &amp; Krippendorff, 2007), te smal bij meer dan twee codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="103"/>
+        <location filename="../app/report/report_sections.cpp" line="94"/>
         <source>Krippendorff&apos;s alpha per variable</source>
         <translation>Krippendorffs alfa per variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="104"/>
+        <location filename="../app/report/report_sections.cpp" line="95"/>
         <source>Krippendorff&apos;s alpha per variable (dots) with 95% bootstrap intervals: whiskers resample pairable values (Hayes &amp; Krippendorff, 2007), bands resample units. The lines mark 0.667 and 0.800 (Krippendorff, 2004).</source>
         <translation>Krippendorffs alfa per variabele (punten) met 95%-bootstrapintervallen: de snorharen trekken paarbare waarden opnieuw (Hayes &amp; Krippendorff, 2007), de banden trekken eenheden opnieuw. De lijnen markeren 0.667 en 0.800 (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="119"/>
+        <location filename="../app/report/report_sections.cpp" line="110"/>
         <source>Rarest value</source>
         <translation>Zeldzaamste waarde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="120"/>
+        <location filename="../app/report/report_sections.cpp" line="111"/>
         <source>Minimum for α ≥ 0.800</source>
         <translation>Minimum voor α ≥ 0.800</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="121"/>
+        <location filename="../app/report/report_sections.cpp" line="112"/>
         <source>Enough?</source>
         <translation>Genoeg?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="137"/>
+        <location filename="../app/report/report_sections.cpp" line="128"/>
         <source>yes</source>
         <translation>ja</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="138"/>
+        <location filename="../app/report/report_sections.cpp" line="129"/>
         <source>too few values</source>
         <translation>te weinig waarden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="141"/>
+        <location filename="../app/report/report_sections.cpp" line="132"/>
         <source>Krippendorff&apos;s (2004, §11.4) minimum number of pairable values for α ≥ 0.800 at p = 0.05, after Bloch &amp; Kraemer (1989), given the share of the rarest value.</source>
         <translation>Krippendorffs (2004, §11.4) minimale aantal paarbare waarden voor α ≥ 0.800 bij p = 0.05, naar Bloch &amp; Kraemer (1989), gegeven het aandeel van de zeldzaamste waarde.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="154"/>
+        <location filename="../app/report/report_sections.cpp" line="145"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="154"/>
+        <location filename="../app/report/report_sections.cpp" line="146"/>
         <source>Role</source>
         <translation>Rol</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="49"/>
-        <location filename="../app/report/report_sections.cpp" line="155"/>
+        <location filename="../app/report/report_frames_section.cpp" line="39"/>
+        <location filename="../app/report/report_sections.cpp" line="147"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="156"/>
+        <location filename="../app/report/report_sections.cpp" line="148"/>
         <source>Shared articles</source>
         <translation>Gedeelde artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="157"/>
+        <location filename="../app/report/report_sections.cpp" line="149"/>
         <source>Spans</source>
         <translation>Fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="163"/>
+        <location filename="../app/report/report_sections.cpp" line="155"/>
         <source>Answers</source>
         <translation>Antwoorden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="179"/>
+        <location filename="../app/report/report_sections.cpp" line="171"/>
         <source>Coders appear by pseudonym only. Articles: coded by the coder (assigned, or with a span or an answer); shared: also coded by another coder in this report.</source>
         <translation>Codeurs verschijnen alleen onder pseudoniem. Artikelen: door de codeur gecodeerd (toegewezen, of met een fragment of een antwoord); gedeeld: in dit rapport ook door een andere codeur gecodeerd.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="191"/>
+        <location filename="../app/report/report_sections.cpp" line="183"/>
         <source>Cohen&apos;s kappa per coder pair</source>
         <translation>Cohens kappa per codeurspaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="192"/>
+        <location filename="../app/report/report_sections.cpp" line="184"/>
         <source>Cohen&apos;s kappa (Cohen, 1960) for each pair of coders and each function, on the %1 both coded. Darker is higher; hatched cells are undefined.</source>
         <translation>Cohens kappa (Cohen, 1960) voor elk paar codeurs en elke functie, op de %1 die beiden codeerden. Donkerder is hoger; gearceerde cellen zijn niet gedefinieerd.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="201"/>
+        <location filename="../app/report/report_sections.cpp" line="194"/>
         <source>Pair</source>
         <translation>Paar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="203"/>
+        <location filename="../app/report/report_sections.cpp" line="197"/>
         <source>95% CI</source>
         <translation>95%-BI</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="223"/>
+        <location filename="../app/report/report_sections.cpp" line="219"/>
         <source>95% CI: large-sample interval with the standard error of Fleiss, Cohen &amp; Everitt (1969). A coder whose kappa is low with everyone else is worth a look before the coders are retrained.</source>
         <translation>95%-BI: interval voor grote steekproeven met de standaardfout van Fleiss, Cohen &amp; Everitt (1969). Een codeur wiens kappa met alle anderen laag is, verdient een nadere blik voordat de codeurs opnieuw worden getraind.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="238"/>
+        <location filename="../app/report/report_sections.cpp" line="234"/>
         <source>Fleiss&apos; κ</source>
         <translation>Fleiss&apos; κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="239"/>
+        <location filename="../app/report/report_sections.cpp" line="235"/>
         <source>Light&apos;s κ</source>
         <translation>Lights κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="239"/>
+        <location filename="../app/report/report_sections.cpp" line="236"/>
         <source>Cohen&apos;s κ</source>
         <translation>Cohens κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="240"/>
+        <location filename="../app/report/report_sections.cpp" line="237"/>
         <source>Scott&apos;s π</source>
         <translation>Scotts π</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="241"/>
+        <location filename="../app/report/report_sections.cpp" line="238"/>
         <source>Bennett&apos;s S</source>
         <translation>Bennetts S</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="246"/>
+        <location filename="../app/report/report_sections.cpp" line="243"/>
         <source>n/a</source>
         <translation>n.v.t.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="260"/>
+        <location filename="../app/report/report_sections.cpp" line="257"/>
         <source>For comparison with older studies: Fleiss (1971) and Light (1971) for any number of coders, Cohen (1960), Scott (1955) and Bennett, Alpert &amp; Goldstein (1954) for two; n/a where their assumptions (complete data, two coders) do not hold.</source>
         <translation>Ter vergelijking met oudere studies: Fleiss (1971) en Light (1971) voor elk aantal codeurs, Cohen (1960), Scott (1955) en Bennett, Alpert &amp; Goldstein (1954) voor twee; n.v.t. waar hun aannames (volledige gegevens, twee codeurs) niet opgaan.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="276"/>
+        <location filename="../app/report/report_sections.cpp" line="273"/>
         <source>Not computed: %1</source>
         <translation>Niet berekend: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="279"/>
+        <location filename="../app/report/report_sections.cpp" line="276"/>
         <source>Unitizing alpha (Krippendorff, 2004) compares where the coders put their spans, character by character, on the %1 articles that every coder coded (%2 characters laid end to end).</source>
         <translation>Unitizing-alfa (Krippendorff, 2004) vergelijkt teken voor teken waar de codeurs hun fragmenten plaatsen, op de %1 artikelen die elke codeur codeerde (%2 tekens achter elkaar).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="289"/>
+        <location filename="../app/report/report_sections.cpp" line="286"/>
         <source>Function</source>
         <translation>Functie</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="290"/>
+        <location filename="../app/report/report_sections.cpp" line="287"/>
         <source>Observed disagreement</source>
         <translation>Waargenomen onenigheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="291"/>
+        <location filename="../app/report/report_sections.cpp" line="288"/>
         <source>Expected disagreement</source>
         <translation>Verwachte onenigheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="308"/>
+        <location filename="../app/report/report_sections.cpp" line="306"/>
         <source>all four</source>
         <translation>alle vier</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="328"/>
+        <location filename="../app/report/report_sections.cpp" line="326"/>
         <source>Alpha without each coder</source>
         <translation>Alfa zonder elke codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="330"/>
+        <location filename="../app/report/report_sections.cpp" line="328"/>
         <source>Left out</source>
         <translation>Weggelaten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="361"/>
+        <location filename="../app/report/report_sections.cpp" line="359"/>
         <source>Alpha recomputed without the coder&apos;s codings; in brackets the change against all coders (positive: the coder pulls alpha down). A diagnostic for retraining, not a licence to report the better figure (Krippendorff, 2004).</source>
         <translation>Alfa opnieuw berekend zonder de coderingen van de codeur; tussen haakjes de verandering ten opzichte van alle codeurs (positief: de codeur trekt alfa omlaag). Een diagnose voor hertraining, geen vrijbrief om het betere cijfer te rapporteren (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="368"/>
+        <location filename="../app/report/report_sections.cpp" line="366"/>
         <source>The article that costs most</source>
         <translation>Het artikel dat het meest kost</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="372"/>
+        <location filename="../app/report/report_sections.cpp" line="371"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="373"/>
+        <location filename="../app/report/report_sections.cpp" line="372"/>
         <source>α without it</source>
         <translation>α zonder dit artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="374"/>
+        <location filename="../app/report/report_sections.cpp" line="373"/>
         <source>Change</source>
         <translation>Verandering</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="397"/>
+        <location filename="../app/report/report_sections.cpp" line="396"/>
         <source>Function confusion between coders</source>
         <translation>Functieverwarring tussen codeurs</translation>
     </message>
@@ -3762,143 +3767,143 @@
         <translation>Fragment van een codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="417"/>
+        <location filename="../app/report/report_sections.cpp" line="418"/>
         <source>For each coder&apos;s span, the function the other coder gave the span that overlaps it most (none: nothing there), summed over ordered pairs of coders. Off the diagonal are the confusions a codebook rule could settle.</source>
         <translation>Voor elk fragment van een codeur de functie die de andere codeur gaf aan het fragment dat het meest ermee overlapt (geen: daar staat niets), opgeteld over geordende paren codeurs. Buiten de diagonaal staan de verwarringen die een codeboekregel kan beslechten.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="30"/>
+        <location filename="../app/report/report_frames_section.cpp" line="19"/>
         <source>The newest saved frame analysis, “%1” (saved %2): %3 frames of the layer %4 over %5 articles, by Ward&apos;s hierarchical clustering refined by k-means (Matthes &amp; Kohring 2008). A frame&apos;s characteristic elements are those with an adjusted residual above 1.96 (Haberman 1973), with their share in the frame and in all articles. The frames are only as good as their elements: beside each element variable stands its Krippendorff&apos;s alpha (nominal, articles as units) over the coders of this report.</source>
         <translation>De nieuwste opgeslagen frameanalyse, ‘%1’ (opgeslagen %2): %3 frames van de laag %4 over %5 artikelen, met hiërarchische clustering volgens Ward, verfijnd met k-means (Matthes &amp; Kohring 2008). De kenmerkende elementen van een frame zijn die met een gecorrigeerd residu boven 1.96 (Haberman 1973), met hun aandeel in het frame en in alle artikelen. De frames zijn maar zo goed als hun elementen: naast elke elementvariabele staat haar Krippendorffs alfa (nominaal, artikelen als eenheden) over de codeurs van dit rapport.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="48"/>
+        <location filename="../app/report/report_frames_section.cpp" line="37"/>
         <source>Frame</source>
         <translation>Frame</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="48"/>
+        <location filename="../app/report/report_frames_section.cpp" line="38"/>
         <source>Name</source>
         <translation>Naam</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="49"/>
+        <location filename="../app/report/report_frames_section.cpp" line="40"/>
         <source>Share</source>
         <translation>Aandeel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="50"/>
+        <location filename="../app/report/report_frames_section.cpp" line="41"/>
         <source>Characteristic elements</source>
         <translation>Kenmerkende elementen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="52"/>
+        <location filename="../app/report/report_frames_section.cpp" line="43"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="60"/>
+        <location filename="../app/report/report_frames_section.cpp" line="51"/>
         <source>%1 (%2% / %3%)</source>
         <translation>%1 (%2% / %3%)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="71"/>
+        <location filename="../app/report/report_frames_section.cpp" line="62"/>
         <source>none stands out</source>
         <translation>geen enkel valt op</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="78"/>
+        <location filename="../app/report/report_frames_section.cpp" line="69"/>
         <source>Element variable</source>
         <translation>Elementvariabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="79"/>
+        <location filename="../app/report/report_frames_section.cpp" line="70"/>
         <source>Pairable articles</source>
         <translation>Paarbare artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_frames_section.cpp" line="80"/>
+        <location filename="../app/report/report_frames_section.cpp" line="71"/>
         <source>Characterises</source>
         <translation>Kenmerkt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="234"/>
+        <location filename="../app/report/report_method_text.cpp" line="252"/>
         <source>Every figure above is what these commands print (add --json for all digits):</source>
         <translation>Elk cijfer hierboven is wat deze opdrachten afdrukken (voeg --json toe voor alle cijfers):</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="73"/>
+        <location filename="../app/report/report_document.cpp" line="64"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
         <translation>nl</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="90"/>
+        <location filename="../app/report/report_document.cpp" line="82"/>
         <source>Method text</source>
         <translation>Methodetekst</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="92"/>
+        <location filename="../app/report/report_document.cpp" line="84"/>
         <source>Reporting checklist (Lombard, Snyder-Duch &amp; Bracken, 2002)</source>
         <translation>Checklist voor de verslaglegging (Lombard, Snyder-Duch &amp; Bracken, 2002)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="94"/>
+        <location filename="../app/report/report_document.cpp" line="86"/>
         <source>Reliability per variable</source>
         <translation>Betrouwbaarheid per variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="96"/>
+        <location filename="../app/report/report_document.cpp" line="88"/>
         <source>Is the sample large enough?</source>
         <translation>Is de steekproef groot genoeg?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="98"/>
+        <location filename="../app/report/report_document.cpp" line="90"/>
         <source>Coders and the amount each coded</source>
         <translation>Codeurs en hoeveel elk codeerde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="100"/>
+        <location filename="../app/report/report_document.cpp" line="92"/>
         <source>Coder pairs</source>
         <translation>Codeursparen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="101"/>
+        <location filename="../app/report/report_document.cpp" line="93"/>
         <source>Other coefficients</source>
         <translation>Andere coëfficiënten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="103"/>
+        <location filename="../app/report/report_document.cpp" line="95"/>
         <source>Span boundaries: unitizing alpha</source>
         <translation>Grenzen van fragmenten: unitizing-alfa</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="107"/>
+        <location filename="../app/report/report_document.cpp" line="99"/>
         <source>Where reliability is lost</source>
         <translation>Waar betrouwbaarheid verloren gaat</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="110"/>
+        <location filename="../app/report/report_document.cpp" line="102"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="111"/>
+        <location filename="../app/report/report_document.cpp" line="103"/>
         <source>Reproducing the figures</source>
         <translation>De cijfers reproduceren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="113"/>
+        <location filename="../app/report/report_document.cpp" line="105"/>
         <source>References</source>
         <translation>Literatuur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="154"/>
+        <location filename="../app/report/report_method_text.cpp" line="153"/>
         <source>Answers to article-level items were adjudicated as well: %1 gold answers on %2 articles, %3 of them with a written rationale. </source>
         <translation>Ook antwoorden op items op artikelniveau zijn beslist: %1 antwoorden van de gouden standaard bij %2 artikelen, %3 daarvan met een schriftelijke motivering. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="164"/>
+        <location filename="../app/report/report_method_text.cpp" line="163"/>
         <source>Disagreements on article-level items were resolved by adjudication into a separate gold standard: %1 gold answers on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Verschillen bij items op artikelniveau zijn opgelost door beslissing in een aparte gouden standaard: %1 antwoorden van de gouden standaard bij %2 artikelen, beslist door %3, %4 daarvan met een schriftelijke motivering. De onafhankelijke coderingen bleven ongewijzigd; alle bovenstaande cijfers komen daaruit. </translation>
     </message>
@@ -4030,52 +4035,53 @@
 <context>
     <name>ServerConnectionText</name>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="92"/>
+        <location filename="../core/team/server_store_connection.cpp" line="133"/>
         <source>Out of memory while connecting to the server.</source>
         <translation>Onvoldoende geheugen bij het verbinden met de server.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="101"/>
+        <location filename="../core/team/server_store_connection.cpp" line="142"/>
         <source>The server refused the login %1.</source>
         <translation>De server heeft de aanmelding %1 geweigerd.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="102"/>
+        <location filename="../core/team/server_store_connection.cpp" line="143"/>
         <source>Could not connect to the server %1.</source>
         <translation>Kon geen verbinding maken met de server %1.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="109"/>
+        <location filename="../core/team/server_store_connection.cpp" line="150"/>
         <source>The server %1 cannot speak UTF-8.</source>
         <translation>De server %1 ondersteunt geen UTF-8.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="123"/>
+        <location filename="../core/team/server_store_connection.cpp" line="164"/>
         <source>&quot;%1&quot; is not a PostgreSQL connection string.</source>
         <translation>‘%1’ is geen PostgreSQL-verbindingsreeks.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="171"/>
+        <location filename="../core/team/server_store_connection.cpp" line="204"/>
         <source>The server %1 does not allow this for the role %2.</source>
         <translation>De server %1 staat dit niet toe voor de rol %2.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="175"/>
+        <location filename="../core/team/server_store_connection.cpp" line="208"/>
         <source>The server %1 refused a row that breaks a rule of the team project.</source>
         <translation>De server %1 heeft een rij geweigerd die een regel van het teamproject overtreedt.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="181"/>
+        <location filename="../core/team/server_store_connection.cpp" line="214"/>
+        <location filename="../core/team/server_store_connection.cpp" line="299"/>
         <source>The connection to the server %1 was lost.</source>
         <translation>De verbinding met de server %1 is verbroken.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="185"/>
+        <location filename="../core/team/server_store_connection.cpp" line="218"/>
         <source>The server %1 could not run a statement.</source>
         <translation>De server %1 kon een opdracht niet uitvoeren.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_connection.cpp" line="225"/>
+        <location filename="../core/team/server_store_connection.cpp" line="258"/>
         <source>Could not make a SCRAM verifier for the role %1.</source>
         <translation>Kon geen SCRAM-verifier maken voor de rol %1.</translation>
     </message>
@@ -4088,7 +4094,7 @@
         <translation>De server %1 heeft al een rol %2; een teamproject heeft voor elke persoon een nieuwe rol nodig (gebruik een andere databasenaam of verwijder de oude rol).</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_roles.cpp" line="100"/>
+        <location filename="../core/team/server_store_roles.cpp" line="101"/>
         <source>The server %1 has no login for the person %2.</source>
         <translation>De server %1 heeft geen aanmelding voor de persoon %2.</translation>
     </message>
@@ -4096,12 +4102,12 @@
 <context>
     <name>ServerSchema</name>
     <message>
-        <location filename="../core/team/server_store_schema.cpp" line="401"/>
+        <location filename="../core/team/server_store_schema.cpp" line="485"/>
         <source>The team project on %1 was written by a newer Fourfold (server schema version %2; this version reads up to %3); nothing was changed.</source>
         <translation>Het teamproject op %1 is geschreven door een nieuwere Fourfold (serverschemaversie %2; deze versie leest tot en met %3); er is niets gewijzigd.</translation>
     </message>
     <message>
-        <location filename="../core/team/server_store_schema.cpp" line="410"/>
+        <location filename="../core/team/server_store_schema.cpp" line="494"/>
         <source>Upgrading the team project on %1 to server schema version %2 failed.</source>
         <translation>Het bijwerken van het teamproject op %1 naar serverschemaversie %2 is mislukt.</translation>
     </message>
@@ -4109,12 +4115,12 @@
 <context>
     <name>SharedRows</name>
     <message>
-        <location filename="../core/store/shared_rows.cpp" line="106"/>
+        <location filename="../core/store/shared_rows.cpp" line="131"/>
         <source>A shared row is not a JSON object.</source>
         <translation>Een gedeelde rij is geen JSON-object.</translation>
     </message>
     <message>
-        <location filename="../core/store/shared_rows.cpp" line="127"/>
+        <location filename="../core/store/shared_rows.cpp" line="156"/>
         <source>The units of the article %1 are not pairs of 32-bit offsets.</source>
         <translation>De eenheden van artikel %1 zijn geen paren van 32-bits offsets.</translation>
     </message>
@@ -4341,7 +4347,7 @@
 <context>
     <name>StudyDesignText</name>
     <message numerus="yes">
-        <location filename="../core/project/study_design.cpp" line="847"/>
+        <location filename="../core/project/study_design.cpp" line="883"/>
         <source>Assign %n article(s)</source>
         <translation>
             <numerusform>%n artikel toewijzen</numerusform>
@@ -4354,18 +4360,18 @@
         <translation>De deelsteekproef van de fase %1 trekken</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1329"/>
+        <location filename="../core/project/study_design.cpp" line="1365"/>
         <source>Show effort per coder</source>
         <translation>Inspanning per persoon tonen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1330"/>
+        <location filename="../core/project/study_design.cpp" line="1366"/>
         <source>Hide effort per coder</source>
         <translation>Inspanning per persoon verbergen</translation>
     </message>
     <message>
         <location filename="../core/project/study_design.cpp" line="121"/>
-        <location filename="../core/project/study_design.cpp" line="827"/>
+        <location filename="../core/project/study_design.cpp" line="863"/>
         <source>There is no coder &quot;%1&quot; in the project.</source>
         <translation>Er is geen codeur ‘%1’ in het project.</translation>
     </message>
@@ -4376,7 +4382,7 @@
     </message>
     <message>
         <location filename="../core/project/study_design.cpp" line="127"/>
-        <location filename="../core/project/study_design.cpp" line="830"/>
+        <location filename="../core/project/study_design.cpp" line="866"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 is uitgeschakeld en krijgt geen nieuwe toewijzingen; schakel deze persoon eerst in.</translation>
     </message>
@@ -4416,106 +4422,108 @@
         <translation>De fase %1 heeft al een deelsteekproef.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="609"/>
+        <location filename="../core/project/study_design.cpp" line="645"/>
         <source>The record of the %1 subsample is not a JSON object.</source>
         <translation>Het record van de deelsteekproef %1 is geen JSON-object.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="655"/>
+        <location filename="../core/project/study_design.cpp" line="691"/>
         <source>The subsample record is damaged: %1.</source>
         <translation>Het record van de deelsteekproef is beschadigd: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="666"/>
+        <location filename="../core/project/study_design.cpp" line="702"/>
         <source>no valid phase</source>
         <translation>geen geldige fase</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="670"/>
+        <location filename="../core/project/study_design.cpp" line="706"/>
         <source>unknown method &quot;%1&quot;</source>
         <translation>onbekende methode ‘%1’</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="675"/>
+        <location filename="../core/project/study_design.cpp" line="711"/>
         <source>unknown stratum &quot;%1&quot;</source>
         <translation>onbekende stratum ‘%1’</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="680"/>
+        <location filename="../core/project/study_design.cpp" line="716"/>
         <source>no valid seed</source>
         <translation>geen geldige seed</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="715"/>
+        <location filename="../core/project/study_design.cpp" line="751"/>
         <source>Double coding needs at least two coders; %1 given.</source>
         <translation>Dubbele codering heeft ten minste twee codeurs nodig; opgegeven: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="717"/>
+        <location filename="../core/project/study_design.cpp" line="753"/>
         <source>Name at least one coder for the remaining articles.</source>
         <translation>Noem ten minste één codeur voor de overige artikelen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="769"/>
+        <location filename="../core/project/study_design.cpp" line="805"/>
         <source>Name at least one article and one coder.</source>
         <translation>Noem ten minste één artikel en één codeur.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="779"/>
-        <location filename="../core/project/study_design.cpp" line="823"/>
+        <location filename="../core/project/study_design.cpp" line="815"/>
+        <location filename="../core/project/study_design.cpp" line="859"/>
         <source>There is no article &quot;%1&quot; in the project.</source>
         <translation>Er is geen artikel ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="840"/>
+        <location filename="../core/project/study_design.cpp" line="876"/>
         <source>Article &quot;%1&quot; is already assigned to %2 in the %3 phase.</source>
         <translation>Artikel ‘%1’ is in de fase %3 al aan %2 toegewezen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="949"/>
+        <location filename="../core/project/study_design.cpp" line="985"/>
         <source>%1 span(s) of %2 carry the value &quot;%3&quot; of the attribute &quot;%4&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the attribute with one of its values (%5).</source>
         <translation>%1 fragment(en) van %2 dragen de waarde ‘%3’ van het kenmerk ‘%4’, die de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het kenmerk toe (%5).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="968"/>
+        <location filename="../core/project/study_design.cpp" line="1004"/>
         <source>%1 answer(s) to the item &quot;%2&quot; are &quot;%3&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the item with one of its values (%4).</source>
         <translation>%1 antwoord(en) op het item ‘%2’ zijn ‘%3’, dat de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het item toe (%4).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1001"/>
+        <location filename="../core/project/study_design.cpp" line="1037"/>
         <source>A new codebook version needs a note that says what changed and why.</source>
         <translation>Een nieuwe codeboekversie heeft een notitie nodig die zegt wat er is veranderd en waarom.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1008"/>
+        <location filename="../core/project/study_design.cpp" line="1044"/>
         <source>The codebook is the same as version %1; no new version was made.</source>
         <translation>Het codeboek is gelijk aan versie %1; er is geen nieuwe versie gemaakt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1112"/>
+        <location filename="../core/project/study_design.cpp" line="1148"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codeboekversie %1 → %2</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1114"/>
+        <location filename="../core/project/study_design.cpp" line="1150"/>
         <source>no changes</source>
         <translation>geen wijzigingen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1210"/>
+        <location filename="../core/project/study_design.cpp" line="1246"/>
         <source>Training feedback is computed on paragraphs, sentences or tokens, not on %1 units.</source>
         <translation>Trainingsfeedback wordt berekend op alinea&apos;s, zinnen of tokens, niet op %1-eenheden.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1228"/>
+        <location filename="../core/project/study_design.cpp" line="1264"/>
         <source>Name the lead whose training coding is the master: there is not exactly one lead with training annotations.</source>
         <translation>Noem de coördinator wiens trainingscodering de maatstaf is: er is niet precies één coördinator met trainingsannotaties.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_design.cpp" line="606"/>
         <source>The %1 phase has no subsample to withdraw.</source>
         <translation>De fase %1 heeft geen deelsteekproef om in te trekken.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_design.cpp" line="620"/>
         <source>Withdraw the %1 subsample</source>
         <translation>Deelsteekproef van fase %1 intrekken</translation>
     </message>
@@ -4523,19 +4531,22 @@
 <context>
     <name>StudyEditText</name>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="39"/>
+        <location filename="../core/project/study_edits.cpp" line="45"/>
         <source>The project already holds %1.</source>
         <translation>Het project bevat %1 al.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_edits.cpp" line="114"/>
         <source>The %1 phase has no subsample to withdraw.</source>
         <translation>De fase %1 heeft geen deelsteekproef om in te trekken.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_edits.cpp" line="134"/>
         <source>The %1 subsample cannot be withdrawn: coding has started on %2 of its %3 assignments (spans, answers, coding time, or a status of started or done). A draw can be withdrawn only before anyone codes it.</source>
         <translation>De deelsteekproef van fase %1 kan niet worden ingetrokken: bij %2 van haar %3 toewijzingen is het coderen begonnen (fragmenten, antwoorden, codeertijd, of de status begonnen of klaar). Een trekking kan alleen worden ingetrokken voordat iemand haar codeert.</translation>
     </message>
     <message>
+        <location filename="../core/project/study_edits.cpp" line="165"/>
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Een wijziging die nooit is uitgevoerd, kan niet ongedaan worden gemaakt.</translation>
     </message>
@@ -4599,108 +4610,104 @@
 <context>
     <name>TeamProjectText</name>
     <message>
-        <location filename="../core/team/team_join.cpp" line="62"/>
+        <location filename="../core/team/team_join.cpp" line="64"/>
         <source>%1 already exists; name a new file for the working file.</source>
         <translation>%1 bestaat al; noem een nieuw bestand voor het werkbestand.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_join.cpp" line="82"/>
+        <location filename="../core/team/team_join.cpp" line="84"/>
         <source>The database %1 holds no team project.</source>
         <translation>De database %1 bevat geen teamproject.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_join.cpp" line="85"/>
+        <location filename="../core/team/team_join.cpp" line="87"/>
         <source>The team project on %1 was written by a newer Fourfold (server schema version %2; this version reads up to %3).</source>
         <translation>Het teamproject op %1 is geschreven door een nieuwere Fourfold (serverschemaversie %2; deze versie leest tot en met %3).</translation>
     </message>
     <message>
-        <location filename="../core/team/team_join.cpp" line="98"/>
-        <location filename="../core/team/team_sync.cpp" line="85"/>
+        <location filename="../core/team/team_join.cpp" line="100"/>
+        <location filename="../core/team/team_sync.cpp" line="101"/>
         <source>The login %1 is not a person of the team project.</source>
         <translation>De aanmelding %1 is geen persoon van het teamproject.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_join.cpp" line="104"/>
+        <location filename="../core/team/team_join.cpp" line="106"/>
         <source>The login %1 is %2, not %3.</source>
         <translation>De aanmelding %1 is %2, niet %3.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="111"/>
         <location filename="../core/team/team_password_files.cpp" line="53"/>
         <source>Could not write the password file %1.</source>
         <translation>Kon het wachtwoordbestand %1 niet schrijven.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="124"/>
         <location filename="../core/team/team_password_files.cpp" line="65"/>
         <source>%1 is a symbolic link; name a new folder for the password files.</source>
         <translation>%1 is een symbolische koppeling; noem een nieuwe map voor de wachtwoordbestanden.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="131"/>
         <location filename="../core/team/team_password_files.cpp" line="73"/>
         <source>%1 is not an empty folder; name a new folder for the password files.</source>
         <translation>%1 is geen lege map; noem een nieuwe map voor de wachtwoordbestanden.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="137"/>
         <location filename="../core/team/team_password_files.cpp" line="79"/>
         <source>Could not create the folder %1.</source>
         <translation>Kon de map %1 niet aanmaken.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="143"/>
         <location filename="../core/team/team_password_files.cpp" line="85"/>
         <source>Could not make %1 private to its owner.</source>
         <translation>Kon %1 niet alleen voor de eigenaar toegankelijk maken.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="164"/>
+        <location filename="../core/team/team_project.cpp" line="91"/>
         <source>%1 is a coder copy; publish the main project.</source>
         <translation>%1 is een codeurskopie; publiceer het hoofdproject.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="171"/>
+        <location filename="../core/team/team_project.cpp" line="98"/>
         <source>%1 has no people; add the lead and the coders before publishing it.</source>
         <translation>%1 heeft geen personen; voeg de coördinator en de codeurs toe voordat u het publiceert.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="184"/>
+        <location filename="../core/team/team_project.cpp" line="111"/>
         <source>%1 has several leads (%2); name the one publishing it.</source>
         <translation>%1 heeft meerdere coördinatoren (%2); noem degene die het publiceert.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="186"/>
+        <location filename="../core/team/team_project.cpp" line="113"/>
         <source>%1 has no lead with the pseudonym %2 (leads: %3).</source>
         <translation>%1 heeft geen coördinator met het pseudoniem %2 (coördinatoren: %3).</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="188"/>
+        <location filename="../core/team/team_project.cpp" line="115"/>
         <source>none</source>
         <translation>geen</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="209"/>
+        <location filename="../core/team/team_project.cpp" line="136"/>
         <source>The pseudonyms %1 and %2 make the same login role %3; rename one of them.</source>
         <translation>De pseudoniemen %1 en %2 leveren dezelfde aanmeldrol %3 op; hernoem er een.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="238"/>
+        <location filename="../core/team/team_project.cpp" line="165"/>
         <source>The database %1 holds a team project already; publish into an empty database.</source>
         <translation>De database %1 bevat al een teamproject; publiceer in een lege database.</translation>
     </message>
     <message>
-        <location filename="../core/team/team_project.cpp" line="336"/>
+        <location filename="../core/team/team_project.cpp" line="269"/>
         <source>The team project is on %1, but %2 could not record it: %3</source>
         <translation>Het teamproject staat op %1, maar %2 kon dat niet vastleggen: %3</translation>
     </message>
     <message>
-        <location filename="../core/team/team_sync.cpp" line="65"/>
+        <location filename="../core/team/team_project.cpp" line="300"/>
+        <location filename="../core/team/team_sync.cpp" line="74"/>
         <source>%1 is not a team working file (made by team publish or team join).</source>
         <translation>%1 is geen teamwerkbestand (gemaakt met team publish of team join).</translation>
     </message>
     <message>
-        <location filename="../core/team/team_sync.cpp" line="89"/>
+        <location filename="../core/team/team_sync.cpp" line="105"/>
         <source>The login %1 is %2, but %3 is the working file of %4.</source>
         <translation>De aanmelding %1 is %2, maar %3 is het werkbestand van %4.</translation>
     </message>
@@ -4708,7 +4715,7 @@
 <context>
     <name>TeamStatusText</name>
     <message>
-        <location filename="../core/team/team_status.cpp" line="38"/>
+        <location filename="../core/team/team_status.cpp" line="39"/>
         <source>%1 is not a team working file (made by team publish or team join).</source>
         <translation>%1 is geen teamwerkbestand (gemaakt met team publish of team join).</translation>
     </message>
@@ -5018,7 +5025,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="271"/>
-        <location filename="../app/cli/command_report.cpp" line="138"/>
+        <location filename="../app/cli/command_report.cpp" line="140"/>
         <location filename="../app/cli/command_score.cpp" line="159"/>
         <source>--bootstrap expects a number of replicates from 0 to 1000000.</source>
         <translation>--bootstrap verwacht een aantal replicaties van 0 tot 1000000.</translation>
@@ -5027,7 +5034,7 @@
         <location filename="../app/cli/command_agree.cpp" line="274"/>
         <location filename="../app/cli/command_export.cpp" line="111"/>
         <location filename="../app/cli/command_frames.cpp" line="276"/>
-        <location filename="../app/cli/command_report.cpp" line="141"/>
+        <location filename="../app/cli/command_report.cpp" line="143"/>
         <location filename="../app/cli/command_score.cpp" line="162"/>
         <source>--seed expects a non-negative whole number.</source>
         <translation>--seed verwacht een niet-negatief geheel getal.</translation>
@@ -5076,7 +5083,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="338"/>
-        <location filename="../app/cli/command_assign.cpp" line="432"/>
+        <location filename="../app/cli/command_assign.cpp" line="436"/>
         <source>unknown unit &quot;%1&quot;.</source>
         <translation>onbekende eenheid ‘%1’.</translation>
     </message>
@@ -5087,9 +5094,10 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="357"/>
-        <location filename="../app/cli/command_assign.cpp" line="341"/>
-        <location filename="../app/cli/command_assign.cpp" line="367"/>
-        <location filename="../app/cli/command_report.cpp" line="130"/>
+        <location filename="../app/cli/command_assign.cpp" line="345"/>
+        <location filename="../app/cli/command_assign.cpp" line="371"/>
+        <location filename="../app/cli/command_assign.cpp" line="452"/>
+        <location filename="../app/cli/command_report.cpp" line="132"/>
         <source>unknown phase &quot;%1&quot;.</source>
         <translation>onbekende fase ‘%1’.</translation>
     </message>
@@ -5165,7 +5173,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_assign.cpp" line="167"/>
-        <location filename="../app/cli/command_team.cpp" line="258"/>
+        <location filename="../app/cli/command_team.cpp" line="259"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
@@ -5280,97 +5288,97 @@
         <translation>De deelsteekproef van deze fase (reliability of pilot) trekken die elke --coders codeert.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="250"/>
+        <location filename="../app/cli/command_assign.cpp" line="254"/>
         <source>With --draw: the number of articles.</source>
         <translation>Met --draw: het aantal artikelen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="252"/>
+        <location filename="../app/cli/command_assign.cpp" line="256"/>
         <source>With --draw: the share of the sampling frame (0 &lt; F &lt;= 1, rounded up).</source>
         <translation>Met --draw: het aandeel van het steekproefkader (0 &lt; F &lt;= 1, naar boven afgerond).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="255"/>
+        <location filename="../app/cli/command_assign.cpp" line="259"/>
         <source>With --draw: draw proportionally within outlet, language or topic (metadata key &quot;topic&quot;).</source>
         <translation>Met --draw: proportioneel trekken binnen medium, taal of onderwerp (metadatasleutel ‘topic’).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="260"/>
+        <location filename="../app/cli/command_assign.cpp" line="264"/>
         <source>With --draw: leave articles found to be near copies of older ones at import out of the sampling frame.</source>
         <translation>Met --draw: artikelen die bij de import zijn herkend als bijna-kopie van een ouder artikel, uit het steekproefkader weglaten.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="263"/>
+        <location filename="../app/cli/command_assign.cpp" line="267"/>
         <source>Seed of the draw or of dealing the rest (default: a random seed, printed and recorded).</source>
         <translation>Seed van de trekking of van het verdelen van de rest (standaard: een willekeurige seed, afgedrukt en vastgelegd).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="267"/>
+        <location filename="../app/cli/command_assign.cpp" line="271"/>
         <source>With --draw: the smallest acceptable alpha for the sample-size advice (default 0.8).</source>
         <translation>Met --draw: de kleinste aanvaardbare alfa voor het advies over de steekproefomvang (standaard 0.8).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="272"/>
+        <location filename="../app/cli/command_assign.cpp" line="276"/>
         <source>With --draw: the expected share of the rarest value (default 0.25).</source>
         <translation>Met --draw: het verwachte aandeel van de zeldzaamste waarde (standaard 0.25).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="275"/>
+        <location filename="../app/cli/command_assign.cpp" line="279"/>
         <source>Deal every article without any assignment to --coders for production: single or double coding.</source>
         <translation>Elk artikel zonder toewijzing verdelen over --coders voor de productie: enkele of dubbele codering.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="280"/>
+        <location filename="../app/cli/command_assign.cpp" line="284"/>
         <source>With --articles: assign in this phase (training, pilot, reliability, production); with --show or --progress: only this phase.</source>
         <translation>Met --articles: in deze fase toewijzen (training, pilot, reliability, production); met --show of --progress: alleen deze fase.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="285"/>
+        <location filename="../app/cli/command_assign.cpp" line="289"/>
         <source>Assign these articles (ids) to every one of --coders in --phase.</source>
         <translation>Deze artikelen (id&apos;s) aan elk van --coders in --phase toewijzen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="288"/>
+        <location filename="../app/cli/command_assign.cpp" line="292"/>
         <source>The coders&apos; pseudonyms.</source>
         <translation>De pseudoniemen van de codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="290"/>
+        <location filename="../app/cli/command_assign.cpp" line="294"/>
         <source>With --draw, --rest or --articles: show the plan, write nothing.</source>
         <translation>Met --draw, --rest of --articles: het plan tonen, niets wegschrijven.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="292"/>
+        <location filename="../app/cli/command_assign.cpp" line="296"/>
         <source>Show the assignments and the draws with their advice.</source>
         <translation>De toewijzingen en de trekkingen met hun advies tonen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="294"/>
+        <location filename="../app/cli/command_assign.cpp" line="298"/>
         <source>Show per coder and phase the articles done, agreement so far and effort.</source>
         <translation>Per codeur en fase de afgeronde artikelen, de overeenstemming tot nu toe en de inspanning tonen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="296"/>
+        <location filename="../app/cli/command_assign.cpp" line="300"/>
         <source>Show this coder&apos;s agreement with the master coding on finished training articles.</source>
         <translation>De overeenstemming van deze codeur met de mastercodering op afgeronde trainingsartikelen tonen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="300"/>
+        <location filename="../app/cli/command_assign.cpp" line="304"/>
         <source>With --training: the lead whose training coding is the master (default: the one lead who coded training articles).</source>
         <translation>Met --training: de coördinator wiens trainingscodering de master is (standaard: de enige coördinator die trainingsartikelen heeft gecodeerd).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="305"/>
+        <location filename="../app/cli/command_assign.cpp" line="309"/>
         <source>With --training: paragraph, sentence (default) or token.</source>
         <translation>Met --training: paragraph, sentence (standaard) of token.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="308"/>
+        <location filename="../app/cli/command_assign.cpp" line="312"/>
         <source>Show active time per coder (on) or only in aggregate (off, the default).</source>
         <translation>Actieve tijd per codeur tonen (on) of alleen in totaal (off, de standaard).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="310"/>
+        <location filename="../app/cli/command_assign.cpp" line="314"/>
         <location filename="../app/cli/command_check.cpp" line="13"/>
         <location filename="../app/cli/command_codebook.cpp" line="52"/>
         <location filename="../app/cli/command_extract.cpp" line="163"/>
@@ -5379,13 +5387,13 @@
         <location filename="../app/cli/command_team.cpp" line="35"/>
         <location filename="../app/cli/command_team.cpp" line="117"/>
         <location filename="../app/cli/command_team.cpp" line="176"/>
-        <location filename="../app/cli/command_team.cpp" line="220"/>
+        <location filename="../app/cli/command_team.cpp" line="221"/>
         <location filename="../app/cli/command_team_people.cpp" line="63"/>
         <source>Print the result as JSON.</source>
         <translation>Het resultaat als JSON afdrukken.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="314"/>
+        <location filename="../app/cli/command_assign.cpp" line="318"/>
         <location filename="../app/cli/command_check.cpp" line="16"/>
         <location filename="../app/cli/command_codebook.cpp" line="54"/>
         <location filename="../app/cli/command_export.cpp" line="73"/>
@@ -5394,7 +5402,7 @@
         <location filename="../app/cli/command_import.cpp" line="129"/>
         <location filename="../app/cli/command_info.cpp" line="38"/>
         <location filename="../app/cli/command_merge.cpp" line="75"/>
-        <location filename="../app/cli/command_people.cpp" line="109"/>
+        <location filename="../app/cli/command_people.cpp" line="80"/>
         <location filename="../app/cli/command_report.cpp" line="69"/>
         <location filename="../app/cli/command_score.cpp" line="135"/>
         <location filename="../app/cli/command_team.cpp" line="38"/>
@@ -5402,117 +5410,117 @@
         <translation>Het projectbestand.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="316"/>
+        <location filename="../app/cli/command_assign.cpp" line="320"/>
         <source>Assign articles to coders per phase (training, pilot, reliability, production), draw the reliability subsample with a recorded seed, and follow progress. Give one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
         <translation>Artikelen per fase (training, pilot, reliability, production) aan codeurs toewijzen, de betrouwbaarheidsdeelsteekproef met een vastgelegde seed trekken en de voortgang volgen. Geef een van --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="324"/>
+        <location filename="../app/cli/command_assign.cpp" line="329"/>
         <location filename="../app/cli/command_check.cpp" line="27"/>
         <location filename="../app/cli/command_codebook.cpp" line="71"/>
         <location filename="../app/cli/command_extract.cpp" line="175"/>
         <location filename="../app/cli/command_handout.cpp" line="37"/>
         <location filename="../app/cli/command_info.cpp" line="47"/>
         <location filename="../app/cli/command_new.cpp" line="30"/>
-        <location filename="../app/cli/command_people.cpp" line="130"/>
+        <location filename="../app/cli/command_people.cpp" line="101"/>
         <location filename="../app/cli/command_team.cpp" line="50"/>
         <source>expected exactly one project file.</source>
         <translation>precies één projectbestand verwacht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="332"/>
+        <location filename="../app/cli/command_assign.cpp" line="337"/>
         <source>give exactly one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
         <translation>geef precies een van --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="350"/>
+        <location filename="../app/cli/command_assign.cpp" line="354"/>
         <source>the seed &quot;%1&quot; is not a whole number from 0 to 18446744073709551615.</source>
         <translation>de seed ‘%1’ is geen geheel getal van 0 tot 18446744073709551615.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="371"/>
+        <location filename="../app/cli/command_assign.cpp" line="375"/>
         <source>give --size or --fraction, not both.</source>
         <translation>geef --size of --fraction, niet allebei.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="372"/>
+        <location filename="../app/cli/command_assign.cpp" line="376"/>
         <source>--draw needs --size or --fraction.</source>
         <translation>--draw heeft --size of --fraction nodig.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="378"/>
+        <location filename="../app/cli/command_assign.cpp" line="382"/>
         <source>--size must be a whole number of articles, at least 1; &quot;%1&quot; given.</source>
         <translation>--size moet een geheel aantal artikelen zijn, ten minste 1; opgegeven: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="386"/>
+        <location filename="../app/cli/command_assign.cpp" line="390"/>
         <source>--fraction must be a number above 0 and at most 1; &quot;%1&quot; given.</source>
         <translation>--fraction moet een getal boven 0 en hoogstens 1 zijn; opgegeven: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="394"/>
+        <location filename="../app/cli/command_assign.cpp" line="398"/>
         <source>--stratify takes outlet, language or topic, not &quot;%1&quot;.</source>
         <translation>--stratify neemt outlet, language of topic, niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="400"/>
+        <location filename="../app/cli/command_assign.cpp" line="404"/>
         <source>--alpha-min must lie between 0 and 1; &quot;%1&quot; given.</source>
         <translation>--alpha-min moet tussen 0 en 1 liggen; opgegeven: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="405"/>
+        <location filename="../app/cli/command_assign.cpp" line="409"/>
         <source>--rarest must lie above 0 and at most 0.5; &quot;%1&quot; given.</source>
         <translation>--rarest moet boven 0 en hoogstens 0.5 liggen; opgegeven: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="418"/>
+        <location filename="../app/cli/command_assign.cpp" line="422"/>
         <source>--rest takes single or double, not &quot;%1&quot;.</source>
         <translation>--rest neemt single of double, niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="423"/>
+        <location filename="../app/cli/command_assign.cpp" line="427"/>
         <source>--articles needs --phase.</source>
         <translation>--articles heeft --phase nodig.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="425"/>
+        <location filename="../app/cli/command_assign.cpp" line="429"/>
         <source>--articles needs --coders.</source>
         <translation>--articles heeft --coders nodig.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="438"/>
+        <location filename="../app/cli/command_assign.cpp" line="442"/>
         <source>--effort takes on or off, not &quot;%1&quot;.</source>
         <translation>--effort neemt on of off, niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="441"/>
+        <location filename="../app/cli/command_assign.cpp" line="445"/>
         <source>name the coders with --coders.</source>
         <translation>noem de codeurs met --coders.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="460"/>
+        <location filename="../app/cli/command_assign.cpp" line="487"/>
         <source>Active time is now shown per coder.</source>
         <translation>Actieve tijd wordt nu per codeur getoond.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="461"/>
+        <location filename="../app/cli/command_assign.cpp" line="488"/>
         <source>Active time is now shown in aggregate only.</source>
         <translation>Actieve tijd wordt nu alleen in totaal getoond.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="479"/>
-        <location filename="../app/cli/command_assign.cpp" line="510"/>
+        <location filename="../app/cli/command_assign.cpp" line="506"/>
+        <location filename="../app/cli/command_assign.cpp" line="537"/>
         <source>Dry run: nothing was written.</source>
         <translation>Proefrun: er is niets weggeschreven.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="480"/>
-        <location filename="../app/cli/command_assign.cpp" line="511"/>
+        <location filename="../app/cli/command_assign.cpp" line="507"/>
+        <location filename="../app/cli/command_assign.cpp" line="538"/>
         <source>%1 assignments written.</source>
         <translation>%1 toewijzingen weggeschreven.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="509"/>
+        <location filename="../app/cli/command_assign.cpp" line="536"/>
         <source>Seed %1.</source>
         <translation>Seed %1.</translation>
     </message>
@@ -6648,7 +6656,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_new.cpp" line="23"/>
-        <location filename="../app/cli/main.cpp" line="34"/>
+        <location filename="../app/cli/main.cpp" line="35"/>
         <source>Create an empty project file with the default codebook.</source>
         <translation>Een leeg projectbestand met het standaardcodeboek aanmaken.</translation>
     </message>
@@ -6658,162 +6666,160 @@
         <translation>%1 aangemaakt (standaardtaal %2).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="40"/>
         <location filename="../app/cli/passphrase_input.cpp" line="22"/>
         <source>The passphrase file %1 could not be read.</source>
         <translation>Het bestand met de wachtwoordzin %1 kon niet worden gelezen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="49"/>
         <location filename="../app/cli/passphrase_input.cpp" line="31"/>
         <source>The passphrase in %1 is not UTF-8.</source>
         <translation>De wachtwoordzin in %1 is geen UTF-8.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="69"/>
+        <location filename="../app/cli/command_people.cpp" line="40"/>
         <source>List everyone: pseudonym, role, enabled or disabled, and whether a lead&apos;s passphrase is set (names are not printed).</source>
         <translation>Iedereen opsommen: pseudoniem, rol, in- of uitgeschakeld, en of de wachtwoordzin van een coördinator is ingesteld (namen worden niet afgedrukt).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="73"/>
+        <location filename="../app/cli/command_people.cpp" line="44"/>
         <source>Add a person with this name (kept in the project, never printed or exported).</source>
         <translation>Een persoon met deze naam toevoegen (bewaard in het project, nooit afgedrukt of geëxporteerd).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="77"/>
+        <location filename="../app/cli/command_people.cpp" line="48"/>
         <source>The new person&apos;s pseudonym, unique in the project (the only name in exports).</source>
         <translation>Het pseudoniem van de nieuwe persoon, uniek in het project (de enige naam in exports).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="81"/>
+        <location filename="../app/cli/command_people.cpp" line="52"/>
         <location filename="../app/cli/command_team_people.cpp" line="35"/>
         <source>coder (the default) or lead.</source>
         <translation>coder (standaard) of lead.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="84"/>
+        <location filename="../app/cli/command_people.cpp" line="55"/>
         <source>A new lead&apos;s passphrase: the first line of FILE, or of standard input when FILE is -.</source>
         <translation>De wachtwoordzin van een nieuwe coördinator: de eerste regel van BESTAND, of van standaardinvoer als BESTAND - is.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="89"/>
+        <location filename="../app/cli/command_people.cpp" line="60"/>
         <source>Give the person with pseudonym P the name NAME (the second argument).</source>
         <translation>De persoon met pseudoniem P de naam NAME (het tweede argument) geven.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="92"/>
+        <location filename="../app/cli/command_people.cpp" line="63"/>
         <source>Disable the person with pseudonym P: their codings stay; they take no new assignments and cannot be chosen on the desk.</source>
         <translation>De persoon met pseudoniem P uitschakelen: de coderingen blijven; de persoon krijgt geen nieuwe toewijzingen en kan bij het coderen niet worden gekozen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="96"/>
+        <location filename="../app/cli/command_people.cpp" line="67"/>
         <location filename="../app/cli/command_team_people.cpp" line="46"/>
         <source>Enable a disabled person again.</source>
         <translation>Een uitgeschakelde persoon weer inschakelen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="98"/>
+        <location filename="../app/cli/command_people.cpp" line="69"/>
         <source>The lead making the change (needed once the project has a lead).</source>
         <translation>De coördinator die de wijziging maakt (nodig zodra het project een coördinator heeft).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="101"/>
+        <location filename="../app/cli/command_people.cpp" line="72"/>
         <location filename="../app/cli/command_team_people.cpp" line="51"/>
         <source>That lead&apos;s passphrase: the first line of FILE (- or left out: standard input).</source>
         <translation>De wachtwoordzin van die coördinator: de eerste regel van BESTAND (- of weggelaten: standaardinvoer).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="105"/>
+        <location filename="../app/cli/command_people.cpp" line="76"/>
         <source>Print the list or the result as JSON.</source>
         <translation>De lijst of het resultaat als JSON afdrukken.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="111"/>
+        <location filename="../app/cli/command_people.cpp" line="82"/>
         <source>The new name, with --rename.</source>
         <translation>De nieuwe naam, met --rename.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="113"/>
+        <location filename="../app/cli/command_people.cpp" line="84"/>
         <source>List and change the people of a project. Changes need a lead (--lead and its passphrase) once the project has one; each is logged. Output names people by pseudonym only.</source>
         <translation>De personen van een project opsommen en wijzigen. Wijzigingen vereisen een coördinator (--lead en diens wachtwoordzin) zodra het project er een heeft; elke wijziging wordt gelogd. De uitvoer noemt personen alleen bij pseudoniem.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="125"/>
+        <location filename="../app/cli/command_people.cpp" line="96"/>
         <source>give exactly one of --list, --add, --rename, --disable and --enable.</source>
         <translation>geef precies een van --list, --add, --rename, --disable en --enable.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="129"/>
+        <location filename="../app/cli/command_people.cpp" line="100"/>
         <source>expected the project file and the new name.</source>
         <translation>het projectbestand en de nieuwe naam verwacht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="136"/>
+        <location filename="../app/cli/command_people.cpp" line="107"/>
         <location filename="../app/cli/command_team_people.cpp" line="92"/>
         <source>--role takes coder or lead, not &quot;%1&quot;.</source>
         <translation>--role neemt coder of lead, niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="139"/>
+        <location filename="../app/cli/command_people.cpp" line="110"/>
         <location filename="../app/cli/command_team_people.cpp" line="95"/>
         <source>name the new person&apos;s pseudonym with --pseudonym.</source>
         <translation>noem het pseudoniem van de nieuwe persoon met --pseudonym.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="142"/>
+        <location filename="../app/cli/command_people.cpp" line="113"/>
         <location filename="../app/cli/command_team_people.cpp" line="98"/>
         <source>a lead needs a passphrase: give it with --passphrase-file FILE (- for standard input).</source>
         <translation>een coördinator heeft een wachtwoordzin nodig: geef die met --passphrase-file BESTAND (- voor standaardinvoer).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="150"/>
+        <location filename="../app/cli/command_people.cpp" line="121"/>
         <location filename="../app/cli/command_team_people.cpp" line="104"/>
         <source>only one passphrase can come from standard input; give the other in a file.</source>
         <translation>maar één wachtwoordzin kan uit standaardinvoer komen; geef de andere in een bestand.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="174"/>
+        <location filename="../app/cli/command_people.cpp" line="145"/>
         <source>disabled</source>
         <translation>uitgeschakeld</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="174"/>
+        <location filename="../app/cli/command_people.cpp" line="145"/>
         <source>enabled</source>
         <translation>ingeschakeld</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="176"/>
+        <location filename="../app/cli/command_people.cpp" line="147"/>
         <source>passphrase set</source>
         <translation>wachtwoordzin ingesteld</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="177"/>
+        <location filename="../app/cli/command_people.cpp" line="148"/>
         <source>no passphrase yet (set when first chosen)</source>
         <translation>nog geen wachtwoordzin (ingesteld bij de eerste keuze)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="204"/>
+        <location filename="../app/cli/command_people.cpp" line="175"/>
         <location filename="../app/cli/command_team_people.cpp" line="85"/>
         <source>changing people needs a lead: name yourself with --lead L (your passphrase on standard input or with --lead-passphrase-file FILE).</source>
         <translation>personen wijzigen vereist een coördinator: noem uzelf met --lead L (uw wachtwoordzin via standaardinvoer of met --lead-passphrase-file BESTAND).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="223"/>
+        <location filename="../app/cli/command_people.cpp" line="194"/>
         <source>Added %1 (%2).</source>
         <translation>%1 (%2) toegevoegd.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="227"/>
+        <location filename="../app/cli/command_people.cpp" line="198"/>
         <source>Renamed %1.</source>
         <translation>%1 hernoemd.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="234"/>
+        <location filename="../app/cli/command_people.cpp" line="205"/>
         <source>Disabled %1: their codings stay; they take no new assignments.</source>
         <translation>%1 uitgeschakeld: de coderingen blijven; de persoon krijgt geen nieuwe toewijzingen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_people.cpp" line="235"/>
+        <location filename="../app/cli/command_people.cpp" line="206"/>
         <source>Enabled %1.</source>
         <translation>%1 ingeschakeld.</translation>
     </message>
@@ -6898,23 +6904,23 @@
         <translation>--language neemt en, nl of de, niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_report.cpp" line="123"/>
+        <location filename="../app/cli/command_report.cpp" line="125"/>
         <location filename="../app/cli/command_score.cpp" line="169"/>
         <source>unknown unit &quot;%1&quot; (expected paragraph, sentence or token).</source>
         <translation>onbekende eenheid ‘%1’ (verwacht: paragraph, sentence of token).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_report.cpp" line="166"/>
+        <location filename="../app/cli/command_report.cpp" line="168"/>
         <source>Wrote %1</source>
         <translation>%1 geschreven</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_report.cpp" line="179"/>
+        <location filename="../app/cli/command_report.cpp" line="181"/>
         <source>Write the reliability report (needs a build with FOURFOLD_BUILD_DESKTOP=ON).</source>
         <translation>Het betrouwbaarheidsrapport schrijven (vereist een build met FOURFOLD_BUILD_DESKTOP=ON).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_report.cpp" line="185"/>
+        <location filename="../app/cli/command_report.cpp" line="187"/>
         <source>This fourfold-cli was built without the graphical libraries, so it cannot write reports; rebuild with FOURFOLD_BUILD_DESKTOP=ON.</source>
         <translation>Deze fourfold-cli is gebouwd zonder de grafische bibliotheken en kan dus geen rapporten schrijven; bouw opnieuw met FOURFOLD_BUILD_DESKTOP=ON.</translation>
     </message>
@@ -7105,7 +7111,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="179"/>
-        <location filename="../app/cli/command_team.cpp" line="223"/>
+        <location filename="../app/cli/command_team.cpp" line="224"/>
         <source>Your team working file.</source>
         <translation>Uw teamwerkbestand.</translation>
     </message>
@@ -7116,48 +7122,48 @@
     </message>
     <message>
         <location filename="../app/cli/command_team.cpp" line="191"/>
-        <location filename="../app/cli/command_team.cpp" line="233"/>
+        <location filename="../app/cli/command_team.cpp" line="234"/>
         <location filename="../app/cli/command_team_people.cpp" line="82"/>
         <source>expected exactly one working file.</source>
         <translation>precies één werkbestand verwacht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="205"/>
+        <location filename="../app/cli/command_team.cpp" line="206"/>
         <source>Synced with %1: %2 sent, %3 received, %4 conflicts (through change %5).</source>
         <translation>Gesynchroniseerd met %1: %2 verzonden, %3 ontvangen, %4 conflicten (tot en met wijziging %5).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="225"/>
+        <location filename="../app/cli/command_team.cpp" line="226"/>
         <source>Show a working file&apos;s team project: its server, whose file it is, when it last synced and what the next sync would send. Reads the file only (works offline).</source>
         <translation>Het teamproject van een werkbestand tonen: de server, van wie het bestand is, wanneer het voor het laatst is gesynchroniseerd en wat de volgende synchronisatie zou versturen. Leest alleen het bestand (werkt offline).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="255"/>
+        <location filename="../app/cli/command_team.cpp" line="256"/>
         <source>Working file of %1 (%2) on %3, through change %4.</source>
         <translation>Werkbestand van %1 (%2) op %3, tot en met wijziging %4.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="257"/>
+        <location filename="../app/cli/command_team.cpp" line="258"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="262"/>
+        <location filename="../app/cli/command_team.cpp" line="263"/>
         <source>Not synced since it was made.</source>
         <translation>Niet gesynchroniseerd sinds het is gemaakt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="263"/>
+        <location filename="../app/cli/command_team.cpp" line="264"/>
         <source>Last synced %1.</source>
         <translation>Laatst gesynchroniseerd %1.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="268"/>
+        <location filename="../app/cli/command_team.cpp" line="269"/>
         <source>Nothing waiting to be sent.</source>
         <translation>Er wacht niets om te worden verzonden.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_team.cpp" line="269"/>
+        <location filename="../app/cli/command_team.cpp" line="270"/>
         <source>%n change(s) waiting to be sent (%1).</source>
         <translation>
             <numerusform>%n wijziging wacht om te worden verzonden (%1).</numerusform>
@@ -7165,7 +7171,7 @@
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_team.cpp" line="273"/>
+        <location filename="../app/cli/command_team.cpp" line="274"/>
         <source>%n conflict(s) from syncs wait for the lead.</source>
         <translation>
             <numerusform>%n conflict uit synchronisaties wacht op de coördinator.</numerusform>
@@ -7173,137 +7179,137 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="292"/>
+        <location filename="../app/cli/command_team.cpp" line="295"/>
         <source>Usage: fourfold-cli team SUBCOMMAND [options]</source>
         <translation>Gebruik: fourfold-cli team SUBOPDRACHT [opties]</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="293"/>
+        <location filename="../app/cli/command_team.cpp" line="296"/>
         <source>  publish   Create the team project of a project file on a PostgreSQL server.</source>
         <translation>  publish   Het teamproject van een projectbestand op een PostgreSQL-server aanmaken.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="295"/>
+        <location filename="../app/cli/command_team.cpp" line="298"/>
         <source>  join      Write your working file of a team project from its server.</source>
         <translation>  join      Uw werkbestand van een teamproject vanaf de server schrijven.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="297"/>
+        <location filename="../app/cli/command_team.cpp" line="300"/>
         <source>  sync      Push and pull a working file&apos;s codings once.</source>
         <translation>  sync      De coderingen van een werkbestand één keer versturen en ophalen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="299"/>
+        <location filename="../app/cli/command_team.cpp" line="302"/>
         <source>  status    What a working file last synced and what waits to be sent.</source>
         <translation>  status    Wat een werkbestand het laatst heeft gesynchroniseerd en wat wacht om te worden verzonden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team.cpp" line="304"/>
+        <location filename="../app/cli/command_team.cpp" line="309"/>
         <source>unknown subcommand &quot;%1&quot;.</source>
         <translation>onbekende subopdracht ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="37"/>
+        <location filename="../app/cli/main.cpp" line="38"/>
         <source>Import articles from text, HTML, JSON Lines or CSV files.</source>
         <translation>Artikelen importeren uit tekst-, HTML-, JSON Lines- of CSV-bestanden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="40"/>
+        <location filename="../app/cli/main.cpp" line="41"/>
         <source>Show what a project holds: articles, units, coders, annotations.</source>
         <translation>Tonen wat een project bevat: artikelen, eenheden, codeurs, annotaties.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="44"/>
+        <location filename="../app/cli/main.cpp" line="45"/>
         <source>Check a project file&apos;s integrity.</source>
         <translation>De integriteit van een projectbestand controleren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="46"/>
+        <location filename="../app/cli/main.cpp" line="47"/>
         <source>Inter-coder reliability of a matrix file or of a project&apos;s codings.</source>
         <translation>Intercodeursbetrouwbaarheid van een matrixbestand of van de coderingen van een project.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="50"/>
+        <location filename="../app/cli/main.cpp" line="51"/>
         <source>Frames as clusters of articles by their frame elements (Ward, then k-means).</source>
         <translation>Frames als clusters van artikelen naar hun frame-elementen (Ward, daarna k-means).</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="54"/>
+        <location filename="../app/cli/main.cpp" line="55"/>
         <source>Run an extractor (built-in baseline or external command) over a project&apos;s articles.</source>
         <translation>Een extractor (ingebouwde baseline of externe opdracht) over de artikelen van een project laten lopen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="59"/>
+        <location filename="../app/cli/main.cpp" line="60"/>
         <source>Score an extractor run against gold or a coder.</source>
         <translation>Een extractorrun scoren tegen de gouden standaard of een codeur.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="62"/>
+        <location filename="../app/cli/main.cpp" line="63"/>
         <source>Export gold, codings or a run as JSON Lines, W3C Web Annotation, IOB2 or CSV.</source>
         <translation>De gouden standaard, coderingen of een run exporteren als JSON Lines, W3C Web Annotation, IOB2 of CSV.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="66"/>
+        <location filename="../app/cli/main.cpp" line="67"/>
         <source>Write the reliability report (HTML or PDF).</source>
         <translation>Het betrouwbaarheidsrapport schrijven (HTML of PDF).</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="68"/>
+        <location filename="../app/cli/main.cpp" line="69"/>
         <source>Assign articles to coders and draw the reliability subsample.</source>
         <translation>Artikelen aan codeurs toewijzen en de betrouwbaarheidsdeelsteekproef trekken.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="72"/>
+        <location filename="../app/cli/main.cpp" line="73"/>
         <source>List codebook versions, add one from a JSON file, and show what changed.</source>
         <translation>Codeboekversies opsommen, er een toevoegen uit een JSON-bestand en tonen wat er is veranderd.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="76"/>
+        <location filename="../app/cli/main.cpp" line="77"/>
         <source>Write a coder copy holding only that coder&apos;s articles and annotations.</source>
         <translation>Een codeurskopie schrijven met alleen de artikelen en annotaties van die codeur.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="80"/>
+        <location filename="../app/cli/main.cpp" line="81"/>
         <source>Merge returned coder copies into the project.</source>
         <translation>Teruggekomen codeurskopieën in het project samenvoegen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="82"/>
+        <location filename="../app/cli/main.cpp" line="83"/>
         <source>Team projects on a PostgreSQL server: publish a project, join one (team publish, team join).</source>
         <translation>Teamprojecten op een PostgreSQL-server: een project publiceren, aan een project deelnemen (team publish, team join).</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="87"/>
+        <location filename="../app/cli/main.cpp" line="88"/>
         <source>List, add, rename, disable and enable the people of a project (by pseudonym).</source>
         <translation>De personen van een project opsommen, toevoegen, hernoemen, uitschakelen en inschakelen (op pseudoniem).</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="91"/>
+        <location filename="../app/cli/main.cpp" line="92"/>
         <source>Build the demo project from its source files.</source>
         <translation>Het demoproject bouwen uit de bronbestanden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="99"/>
+        <location filename="../app/cli/main.cpp" line="100"/>
         <source>Usage: fourfold-cli COMMAND [options] [arguments]</source>
         <translation>Gebruik: fourfold-cli OPDRACHT [opties] [argumenten]</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="101"/>
+        <location filename="../app/cli/main.cpp" line="102"/>
         <source>Commands:</source>
         <translation>Opdrachten:</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="107"/>
+        <location filename="../app/cli/main.cpp" line="108"/>
         <source>Run &quot;fourfold-cli COMMAND --help&quot; for a command&apos;s options.</source>
         <translation>Voer ‘fourfold-cli OPDRACHT --help’ uit voor de opties van een opdracht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="161"/>
+        <location filename="../app/cli/main.cpp" line="163"/>
         <source>fourfold-cli: unknown command &quot;%1&quot;.</source>
         <translation>fourfold-cli: onbekende opdracht ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/main.cpp" line="162"/>
+        <location filename="../app/cli/main.cpp" line="164"/>
         <source>Run &quot;fourfold-cli --help&quot; for the list of commands.</source>
         <translation>Voer ‘fourfold-cli --help’ uit voor de lijst met opdrachten.</translation>
     </message>
@@ -7358,17 +7364,17 @@
         <translation>geef precies een van --add, --disable en --enable.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team_people.cpp" line="153"/>
+        <location filename="../app/cli/command_team_people.cpp" line="157"/>
         <source>Added %1 with the login %2; the password is in %3 (hand it to them alone).</source>
         <translation>%1 toegevoegd met de aanmelding %2; het wachtwoord staat in %3 (geef het alleen aan die persoon).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team_people.cpp" line="157"/>
+        <location filename="../app/cli/command_team_people.cpp" line="161"/>
         <source>Enabled %1: the login %2 may log in again.</source>
         <translation>%1 ingeschakeld: de aanmelding %2 mag weer aanmelden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_team_people.cpp" line="160"/>
+        <location filename="../app/cli/command_team_people.cpp" line="164"/>
         <source>Disabled %1: the login %2 may no longer log in; their codings stay.</source>
         <translation>%1 uitgeschakeld: de aanmelding %2 mag niet meer aanmelden; de coderingen blijven.</translation>
     </message>
@@ -7378,10 +7384,12 @@
         <translation>  people    Een persoon toevoegen aan een lopend teamproject, of een persoon uitschakelen.</translation>
     </message>
     <message>
+        <location filename="../app/cli/command_assign.cpp" line="250"/>
         <source>Withdraw the committed subsample of this phase (reliability or pilot) while nobody has coded any of its assignments yet.</source>
         <translation>De vastgelegde deelsteekproef van deze fase (reliability of pilot) intrekken zolang nog niemand een van haar toewijzingen heeft gecodeerd.</translation>
     </message>
     <message numerus="yes">
+        <location filename="../app/cli/command_assign.cpp" line="468"/>
         <source>The %1 subsample is withdrawn: %n assignment(s) removed.</source>
         <translation>
             <numerusform>De deelsteekproef van fase %1 is ingetrokken: %n toewijzing verwijderd.</numerusform>
@@ -7560,6 +7568,35 @@ Bijna-kopie van %2</translation>
         <location filename="../app/desktop/article_list_model.cpp" line="130"/>
         <source>Characters</source>
         <translation>Tekens</translation>
+    </message>
+</context>
+<context>
+    <name>fourfold::BackgroundSync</name>
+    <message numerus="yes">
+        <location filename="../app/desktop/team/background_sync.cpp" line="104"/>
+        <source>offline — %n change(s) waiting</source>
+        <translation>
+            <numerusform>offline — %n wijziging wacht</numerusform>
+            <numerusform>offline — %n wijzigingen wachten</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/background_sync.cpp" line="106"/>
+        <source>syncing…</source>
+        <translation>synchroniseren…</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/team/background_sync.cpp" line="110"/>
+        <source>synced %n s ago</source>
+        <translation>
+            <numerusform>%n s geleden gesynchroniseerd</numerusform>
+            <numerusform>%n s geleden gesynchroniseerd</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/background_sync.cpp" line="112"/>
+        <source>conflict — lead decides</source>
+        <translation>conflict — de coördinator beslist</translation>
     </message>
 </context>
 <context>
@@ -8060,14 +8097,65 @@ Bijna-kopie van %2</translation>
     </message>
 </context>
 <context>
+    <name>fourfold::CoderLegend</name>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="15"/>
+        <source>Coders of the spans shown</source>
+        <translation>Codeurs van de getoonde fragmenten</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="21"/>
+        <source>Each span&apos;s badge carries its coder&apos;s pseudonym after the letter.</source>
+        <translation>Het label van elk fragment draagt na de letter het pseudoniem van de codeur.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="23"/>
+        <source>Show the spans of</source>
+        <translation>Fragmenten tonen van</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="24"/>
+        <source>&amp;Show spans of:</source>
+        <translation>Fragmenten &amp;tonen van:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="46"/>
+        <source>All coders</source>
+        <translation>Alle codeurs</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="70"/>
+        <source>unknown</source>
+        <translation>onbekend</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/coder_legend.cpp" line="76"/>
+        <source>&lt;b&gt;%1&lt;/b&gt; %n span(s)</source>
+        <translation>
+            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n fragment</numerusform>
+            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n fragmenten</numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="82"/>
+        <source>No coder has spans on this article.</source>
+        <translation>Geen codeur heeft fragmenten in dit artikel.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/coder_legend.cpp" line="83"/>
+        <source>Spans by: %1</source>
+        <translation>Fragmenten van: %1</translation>
+    </message>
+</context>
+<context>
     <name>fourfold::CodingSession</name>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="103"/>
+        <location filename="../app/desktop/coding_session.cpp" line="133"/>
         <source>“%1” (%2), similarity %3</source>
         <translation>‘%1’ (%2), gelijkenis %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="197"/>
+        <location filename="../app/desktop/coding_session.cpp" line="227"/>
         <source>%1 is read-only: you can read, compare and compute, but nothing is saved. To code, copy the file to a folder you may write to and open the copy.</source>
         <translation>%1 is alleen-lezen: u kunt lezen, vergelijken en berekenen, maar er wordt niets opgeslagen. Kopieer het bestand om te coderen naar een map waarin u mag schrijven en open de kopie.</translation>
     </message>
@@ -8128,269 +8216,269 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::ComparisonWindow</name>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="93"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="95"/>
         <source>Compare coders and decide gold — %1</source>
         <translation>Codeurs vergelijken en gouden standaard beslissen — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="95"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="97"/>
         <source>Only a lead compares coders and decides the gold standard. Open the project as a lead to use this window.</source>
         <translation>Alleen een coördinator vergelijkt codeurs en beslist over de gouden standaard. Open het project als coördinator om dit venster te gebruiken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="119"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="121"/>
         <source>Nothing to compare yet. An article comes here once at least two coders have coded it and marked it done (or tick “Articles in progress” above). Plan double coding in Lead → Study design; the progress board shows who is done.</source>
         <translation>Nog niets te vergelijken. Een artikel verschijnt hier zodra ten minste twee codeurs het hebben gecodeerd en als klaar hebben gemarkeerd (of vink hierboven ‘Artikelen in bewerking’ aan). Plan dubbele codering in Coördinator → Onderzoeksopzet; het voortgangsoverzicht toont wie klaar is.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="169"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="171"/>
         <source>Articles to adjudicate</source>
         <translation>Te beslissen artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="188"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="190"/>
         <source>Margin: ∅ a coder has no span here · ≠ different functions · ↔ different boundaries · ≈ different attributes · ✓ decided. Lanes under each line: problem (solid), cause (dashed), evaluation (dotted), remedy (dash-dot). Hatched: this coder has no span in the passage.</source>
         <translation>Marge: ∅ een codeur heeft hier geen fragment · ≠ verschillende functies · ↔ verschillende grenzen · ≈ verschillende kenmerken · ✓ beslist. Banen onder elke regel: probleem (doorgetrokken), oorzaak (gestreept), evaluatie (gestippeld), oplossing (streep-punt). Gearceerd: deze codeur heeft geen fragment in de passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
         <source>Who</source>
         <translation>Wie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="225"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
         <source>Decision</source>
         <translation>Beslissing</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="230"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="232"/>
         <source>Spans of the passage</source>
         <translation>Fragmenten van de passage</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="241"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="243"/>
         <source>&amp;Rationale (optional, kept with the decision):</source>
         <translation>&amp;Motivering (optioneel, wordt bij de beslissing bewaard):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="243"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="245"/>
         <source>Why this decision, for the method section</source>
         <translation>Waarom deze beslissing, voor de methodesectie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="170"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="172"/>
         <source>Articles coded by several coders, most undecided disagreements first when sorted; the order is kept while you decide until you re-sort. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
         <translation>Artikelen die door meerdere codeurs zijn gecodeerd, gesorteerd met de meeste onbesliste verschillen eerst; terwijl je beslist blijft de volgorde staan tot je opnieuw sorteert. Open: onbesliste verschillen; Eens: passages waarover alle codeurs het eens zijn en die nog niet in de gouden standaard staan.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="249"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="263"/>
         <source>Keys: N / P next and previous disagreement, %1 / %2 next and previous article, %3 re-sort the queue; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; %4 accept all agreed; %5 rationale; %6 undo; %7 every key.</source>
         <translation>Toetsen: N / P volgend en vorig verschil, %1 / %2 volgend en vorig artikel, %3 de wachtrij opnieuw sorteren; A het gekozen fragment accepteren, M de gekozen fragmenten samenvoegen, E bewerken, R verwerpen, W een fragment uit de gouden standaard terugtrekken; %4 alle overeenstemmende accepteren; %5 motivering; %6 ongedaan maken; %7 alle toetsen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="286"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
         <source>Comparison</source>
         <translation>Vergelijking</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="648"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="314"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="683"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
         <source>, </source>
         <translation>, </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="306"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="320"/>
         <source>Function: </source>
         <translation>Functie: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="308"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="322"/>
         <source>All functions</source>
         <translation>Alle functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="311"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
         <source>Function filter</source>
         <translation>Functiefilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="317"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
         <source>  Coders: </source>
         <translation>  Codeurs: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="319"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="333"/>
         <source>All coders</source>
         <translation>Alle codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
         <source>%1 and %2</source>
         <translation>%1 en %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="328"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="342"/>
         <source>Coder pair filter</source>
         <translation>Filter op codeurspaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
         <source>Show decided</source>
         <translation>Besliste tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="335"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
         <source>Also step through disagreements already decided</source>
         <translation>Ook langs verschillen gaan die al beslist zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="338"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
         <source>Articles in progress</source>
         <translation>Artikelen in bewerking</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="339"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
         <source>Also compare coders on articles they have started but not yet marked done</source>
         <translation>Vergelijk codeurs ook op artikelen die ze begonnen maar nog niet als klaar gemarkeerd hebben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="341"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="355"/>
         <source>Show articles in progress</source>
         <translation>Artikelen in bewerking tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="363"/>
         <source>Previous</source>
         <translation>Vorige</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="350"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="364"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorig onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="351"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
         <source>Next</source>
         <translation>Volgende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="366"/>
         <source>Next undecided disagreement</source>
         <translation>Volgend onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="367"/>
         <source>Previous article</source>
         <translation>Vorig artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="354"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="368"/>
         <source>Previous article in the queue</source>
         <translation>Vorig artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="374"/>
         <source>Next article</source>
         <translation>Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="374"/>
         <source>Next article in the queue</source>
         <translation>Volgend artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
         <source>Re-sort queue</source>
         <translation>Wachtrij opnieuw sorteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="366"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
         <source>Sort the queue again, most undecided disagreements first; until then it keeps its order while you decide</source>
         <translation>De wachtrij opnieuw sorteren, de meeste onbesliste verschillen eerst; tot dan houdt ze haar volgorde terwijl je beslist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="375"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="389"/>
         <source>Accept</source>
         <translation>Accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="376"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="390"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Het fragment van de gekozen codeur in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="377"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="391"/>
         <source>Merge</source>
         <translation>Samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="378"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="392"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eén fragment dat de gekozen fragmenten omvat in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="393"/>
         <source>Edit…</source>
         <translation>Bewerken…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="394"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Een fragment voor de gouden standaard vastleggen met een eigen functie en eigen grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="382"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="396"/>
         <source>Reject</source>
         <translation>Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="383"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="397"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Vastleggen dat de gekozen fragmenten niet in de gouden standaard horen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="384"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="398"/>
         <source>Withdraw gold</source>
         <translation>Terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="385"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="399"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Het gekozen fragment uit de gouden standaard terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="386"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="400"/>
         <source>Accept all agreed</source>
         <translation>Alle overeenstemmende accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="387"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="401"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Elk fragment accepteren waarover alle codeurs van het artikel het eens zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="393"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="407"/>
         <source>Undo</source>
         <translation>Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="395"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
         <source>Redo</source>
         <translation>Opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="423"/>
         <source>Keys of the comparison window</source>
         <translation>Toetsen van het vergelijkingsvenster</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="463"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="477"/>
         <source>%n article(s) to adjudicate</source>
         <translation>
             <numerusform>%n artikel om te beslissen</numerusform>
@@ -8398,148 +8486,148 @@ Bijna-kopie van %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="471"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="485"/>
         <source>Queue sorted again: most undecided disagreements first.</source>
         <translation>Wachtrij opnieuw gesorteerd: de meeste onbesliste verschillen eerst.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="559"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
         <source>Gold (%1)</source>
         <translation>Gouden standaard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="559"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="696"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="731"/>
         <source>Gold</source>
         <translation>Gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="604"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="639"/>
         <source>No undecided disagreement left in this article. %1 opens the next article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel. %1 opent het volgende artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="621"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="656"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="637"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="672"/>
         <source>No spans to compare in this article.</source>
         <translation>Geen fragmenten om te vergelijken in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="638"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="673"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klik op een passage of druk op N voor het volgende verschil.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="648"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="683"/>
         <source>no span by %1</source>
         <translation>geen fragment van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="651"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="686"/>
         <source>different functions</source>
         <translation>verschillende functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="653"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
         <source>different boundaries</source>
         <translation>verschillende grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="655"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="690"/>
         <source>different attributes</source>
         <translation>verschillende kenmerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="663"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="698"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 van %2 (alinea %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="667"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="702"/>
         <source>the coders agree</source>
         <translation>de codeurs zijn het eens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="667"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="702"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="668"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="703"/>
         <source> — decided</source>
         <translation> — beslist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="687"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="722"/>
         <source>Characters %1 to %2</source>
         <translation>Tekens %1 tot %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="723"/>
         <source>rejected</source>
         <translation>verworpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="723"/>
         <source>in gold</source>
         <translation>in gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
         <source>drawn by the lead</source>
         <translation>getekend door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="704"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
         <source>from %1</source>
         <translation>van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="706"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="741"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Beslist door %1 op %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="708"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="743"/>
         <source> Rationale: %1</source>
         <translation> Motivering: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="716"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="751"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Gouden standaard %1 beslist door %2 op %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="823"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="858"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Ongedaan maken met %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="850"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="885"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Kies het fragment van één codeur om te accepteren (of meerdere om samen te voegen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="877"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="912"/>
         <source>Choose a passage first.</source>
         <translation>Kies eerst een passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="915"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="950"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Kies de fragmenten om te verwerpen (die nog niet verworpen zijn).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="926"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="961"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Kies één fragment uit de gouden standaard om terug te trekken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="946"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="1005"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>Er is in dit artikel geen overeenstemmende passage meer om te accepteren.</translation>
     </message>
@@ -9885,81 +9973,208 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <translation>Het codeboek stelt geen vragen over het artikel als geheel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/item_form.cpp" line="68"/>
+        <location filename="../app/desktop/item_form.cpp" line="73"/>
         <source>not answered</source>
         <translation>niet beantwoord</translation>
     </message>
     <message>
+        <location filename="../app/desktop/item_form.cpp" line="94"/>
         <source>&amp;Withdraw answer</source>
         <translation>Antwoord &amp;intrekken</translation>
     </message>
     <message>
+        <location filename="../app/desktop/item_form.cpp" line="119"/>
         <source>Withdraw the answer: the item is unanswered again</source>
         <translation>Antwoord intrekken: de vraag is weer onbeantwoord</translation>
     </message>
     <message>
+        <location filename="../app/desktop/item_form.cpp" line="152"/>
         <source>Withdraw answer: %1 (%2)</source>
         <translation>Antwoord intrekken: %1 (%2)</translation>
     </message>
 </context>
 <context>
+    <name>fourfold::JoinTeamDialog</name>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="24"/>
+        <source>Join a team project</source>
+        <translation>Deelnemen aan een teamproject</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="28"/>
+        <source>Your lead gives you the server, your pseudonym and your password. Your working file is kept on this computer and syncs with the server while it is open.</source>
+        <translation>Uw coördinator geeft u de server, uw pseudoniem en uw wachtwoord. Uw werkbestand blijft op deze computer en wordt met de server gesynchroniseerd zolang het open is.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="36"/>
+        <source>Host and database</source>
+        <translation>Host en database</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="37"/>
+        <source>Connection string</source>
+        <translation>Verbindingsreeks</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="43"/>
+        <source>Server:</source>
+        <translation>Server:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="46"/>
+        <source>e.g. db.example.org</source>
+        <translation>bijv. db.example.org</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="51"/>
+        <source>Port</source>
+        <translation>Poort</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="54"/>
+        <source>Port:</source>
+        <translation>Poort:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="56"/>
+        <source>Host:</source>
+        <translation>Host:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="58"/>
+        <source>Database:</source>
+        <translation>Database:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="61"/>
+        <source>Connection string:</source>
+        <translation>Verbindingsreeks:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="64"/>
+        <source>Your pseudonym:</source>
+        <translation>Uw pseudoniem:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="67"/>
+        <source>Kept in memory while Fourfold runs, never written to a file. Leave it empty when your password file (~/.pgpass) holds it.</source>
+        <translation>Wordt in het geheugen bewaard zolang Fourfold draait en nooit naar een bestand geschreven. Laat het leeg als uw wachtwoordbestand (~/.pgpass) het bevat.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="69"/>
+        <source>Password:</source>
+        <translation>Wachtwoord:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="72"/>
+        <source>Where to keep your working file</source>
+        <translation>Waar uw werkbestand komt</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="73"/>
+        <source>Choose…</source>
+        <translation>Kiezen…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="78"/>
+        <source>Working file:</source>
+        <translation>Werkbestand:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="82"/>
+        <source>&amp;Join</source>
+        <translation>&amp;Deelnemen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="125"/>
+        <source>Working file</source>
+        <translation>Werkbestand</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="125"/>
+        <source>Fourfold projects (*.fourfold)</source>
+        <translation>Fourfold-projecten (*.fourfold)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="136"/>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="144"/>
+        <source>Name the server: its host and database, or a connection string.</source>
+        <translation>Geef de server op: host en database, of een verbindingsreeks.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="157"/>
+        <source>Give your pseudonym, as your lead gave it to you.</source>
+        <translation>Geef uw pseudoniem op, zoals uw coördinator het u gaf.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="163"/>
+        <source>Choose where to keep your working file.</source>
+        <translation>Kies waar uw werkbestand komt.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/team/join_team_dialog.cpp" line="177"/>
+        <source>Joining the team project…</source>
+        <translation>Deelnemen aan het teamproject…</translation>
+    </message>
+</context>
+<context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="188"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
         <source>Write the reliability report</source>
         <translation>Het betrouwbaarheidsrapport schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="197"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webpagina (*.html);;PDF-document (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="204"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="208"/>
         <source>The reliability report was written to %1.</source>
         <translation>Het betrouwbaarheidsrapport is geschreven naar %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="201"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="209"/>
         <source>&amp;Open</source>
         <translation>&amp;Openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="202"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="241"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="210"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="249"/>
         <source>Open the &amp;folder</source>
         <translation>De &amp;map openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="213"/>
         <location filename="../app/desktop/lead_windows.cpp" line="221"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="234"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="242"/>
         <source>Coder copy</source>
         <translation>Codeurskopie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="222"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="230"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Een codeurskopie bevat alleen de artikelen die aan deze codeur zijn toegewezen, het codeboek en de eigen coderingen van de codeur. Voor wie is de kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="228"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="236"/>
         <source>Write the coder copy</source>
         <translation>De codeurskopie schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="237"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-project (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="238"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="246"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 geschreven voor %2: %n artikel, %3 fragment(en).</numerusform>
@@ -9967,17 +10182,17 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
         <source>Merge returned coder copies</source>
         <translation>Teruggekomen codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="256"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
         <source>Merge coder copies</source>
         <translation>Codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="257"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="265"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -9986,17 +10201,17 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="272"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): al samengevoegd, niets nieuws.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="266"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="274"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 nieuw, %4 gewijzigd (%5 verwijderd), %6 conflict(en).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="274"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="282"/>
         <source>Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits for you to decide (Lead → Merge conflicts…).</source>
         <translation>
             <numerusform>%n kopie samengevoegd; %1 conflict(en): de latere wijziging blijft, de andere wacht op uw beslissing (Coördinator → Samenvoegconflicten…).</numerusform>
@@ -10004,12 +10219,12 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="281"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="289"/>
         <source>&amp;Decide conflicts</source>
         <translation>Conflicten &amp;beslissen</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="278"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="286"/>
         <source>Merged %n copy(ies).</source>
         <translation>
             <numerusform>%n kopie samengevoegd.</numerusform>
@@ -10020,345 +10235,370 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="833"/>
+        <location filename="../app/desktop/main_window.cpp" line="921"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="191"/>
+        <location filename="../app/desktop/main_window.cpp" line="200"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="107"/>
+        <location filename="../app/desktop/main_window.cpp" line="116"/>
         <source>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Manual frame analysis of news and opinion articles: problem, cause, evaluation, remedy.&lt;/p&gt;</source>
         <translation>&lt;h1&gt;Fourfold&lt;/h1&gt;&lt;p&gt;Handmatige frame-analyse van nieuws- en opinieartikelen: probleem, oorzaak, evaluatie, oplossing.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="115"/>
+        <location filename="../app/desktop/main_window.cpp" line="124"/>
         <source>New project…</source>
         <translation>Nieuw project…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="116"/>
+        <location filename="../app/desktop/main_window.cpp" line="125"/>
         <source>Start a study: a new project file, then import its articles.</source>
         <translation>Een onderzoek beginnen: een nieuw projectbestand, daarna de artikelen importeren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="119"/>
+        <location filename="../app/desktop/main_window.cpp" line="128"/>
         <source>Open a project…</source>
         <translation>Project openen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="122"/>
+        <location filename="../app/desktop/main_window.cpp" line="131"/>
         <source>Open the sample project</source>
         <translation>Voorbeeldproject openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="124"/>
+        <location filename="../app/desktop/main_window.cpp" line="133"/>
         <source>Invented demo data: three local controversies, three coders.</source>
         <translation>Verzonnen demogegevens: drie lokale kwesties, drie codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="130"/>
-        <location filename="../app/desktop/main_window.cpp" line="143"/>
+        <location filename="../app/desktop/main_window.cpp" line="139"/>
+        <location filename="../app/desktop/main_window.cpp" line="152"/>
         <source>Recent projects</source>
         <translation>Recente projecten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="162"/>
+        <location filename="../app/desktop/main_window.cpp" line="171"/>
         <source>Search the texts…</source>
         <translation>Zoeken in de teksten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="164"/>
+        <location filename="../app/desktop/main_window.cpp" line="173"/>
         <source>Search articles</source>
         <translation>Artikelen doorzoeken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="171"/>
+        <location filename="../app/desktop/main_window.cpp" line="180"/>
         <source>Status filter</source>
         <translation>Statusfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="172"/>
+        <location filename="../app/desktop/main_window.cpp" line="181"/>
         <source>All articles</source>
         <translation>Alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="173"/>
+        <location filename="../app/desktop/main_window.cpp" line="182"/>
         <source>Not started</source>
         <translation>Niet begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="174"/>
+        <location filename="../app/desktop/main_window.cpp" line="183"/>
         <source>In progress</source>
         <translation>Bezig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="175"/>
+        <location filename="../app/desktop/main_window.cpp" line="184"/>
         <source>Done</source>
         <translation>Klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="233"/>
+        <location filename="../app/desktop/main_window.cpp" line="242"/>
         <source>Mark the selected text as %1 (key %2)</source>
         <translation>De geselecteerde tekst markeren als %1 (toets %2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="244"/>
+        <location filename="../app/desktop/main_window.cpp" line="253"/>
         <source>Mark as done</source>
         <translation>Markeren als klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="245"/>
+        <location filename="../app/desktop/main_window.cpp" line="254"/>
         <source>Mark this article as done and open the next one (%1)</source>
         <translation>Dit artikel als klaar markeren en het volgende openen (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="268"/>
+        <location filename="../app/desktop/main_window.cpp" line="279"/>
         <source>Import articles…</source>
         <translation>Artikelen importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="337"/>
+        <location filename="../app/desktop/main_window.cpp" line="355"/>
         <source>&amp;Project</source>
         <translation>&amp;Project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="338"/>
+        <location filename="../app/desktop/main_window.cpp" line="356"/>
         <source>&amp;New project…</source>
         <translation>&amp;Nieuw project…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="339"/>
+        <location filename="../app/desktop/main_window.cpp" line="357"/>
         <source>&amp;Open…</source>
         <translation>&amp;Openen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="340"/>
+        <location filename="../app/desktop/main_window.cpp" line="358"/>
         <source>&amp;Import articles…</source>
         <translation>Artikelen &amp;importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="342"/>
+        <location filename="../app/desktop/main_window.cpp" line="360"/>
         <source>Import a &amp;folder…</source>
         <translation>Een &amp;map importeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="343"/>
+        <location filename="../app/desktop/main_window.cpp" line="361"/>
         <source>Import a folder</source>
         <translation>Een map importeren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="349"/>
+        <location filename="../app/desktop/main_window.cpp" line="367"/>
         <source>Open the &amp;sample project</source>
         <translation>&amp;Voorbeeldproject openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="351"/>
+        <location filename="../app/desktop/main_window.cpp" line="368"/>
+        <source>Join a &amp;team project…</source>
+        <translation>Deelnemen aan een &amp;teamproject…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="370"/>
         <source>&amp;Quit</source>
         <translation>&amp;Afsluiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="353"/>
+        <location filename="../app/desktop/main_window.cpp" line="372"/>
         <source>&amp;Edit</source>
         <translation>&amp;Bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="354"/>
-        <location filename="../app/desktop/main_window.cpp" line="522"/>
+        <location filename="../app/desktop/main_window.cpp" line="373"/>
+        <location filename="../app/desktop/main_window.cpp" line="543"/>
         <source>&amp;Undo</source>
         <translation>&amp;Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="357"/>
-        <location filename="../app/desktop/main_window.cpp" line="525"/>
+        <location filename="../app/desktop/main_window.cpp" line="376"/>
+        <location filename="../app/desktop/main_window.cpp" line="546"/>
         <source>&amp;Redo</source>
         <translation>Opn&amp;ieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="361"/>
+        <location filename="../app/desktop/main_window.cpp" line="380"/>
         <source>&amp;Code</source>
         <translation>&amp;Coderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="365"/>
+        <location filename="../app/desktop/main_window.cpp" line="384"/>
         <source>Mark as %1	%2</source>
         <translation>Markeren als %1	%2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="369"/>
+        <location filename="../app/desktop/main_window.cpp" line="388"/>
         <source>Mark article as &amp;done</source>
         <translation>Artikel markeren als &amp;klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="370"/>
+        <location filename="../app/desktop/main_window.cpp" line="389"/>
         <source>&amp;Next article</source>
         <translation>&amp;Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="372"/>
+        <location filename="../app/desktop/main_window.cpp" line="391"/>
         <source>&amp;Find in texts</source>
         <translation>&amp;Zoeken in teksten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="373"/>
+        <location filename="../app/desktop/main_window.cpp" line="392"/>
         <source>&amp;Training feedback…</source>
         <translation>&amp;Trainingsfeedback…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="380"/>
+        <location filename="../app/desktop/main_window.cpp" line="399"/>
         <source>&amp;View</source>
         <translation>&amp;Weergave</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="381"/>
+        <location filename="../app/desktop/main_window.cpp" line="400"/>
         <source>E&amp;xact selection (no snapping to words)</source>
         <translation>E&amp;xacte selectie (niet uitlijnen op woorden)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="389"/>
+        <location filename="../app/desktop/main_window.cpp" line="408"/>
         <source>Exact selection: spans take the text as selected.</source>
         <translation>Exacte selectie: fragmenten nemen de tekst zoals geselecteerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="390"/>
+        <location filename="../app/desktop/main_window.cpp" line="409"/>
         <source>Spans snap to whole words again.</source>
         <translation>Fragmenten worden weer uitgelijnd op hele woorden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="394"/>
+        <location filename="../app/desktop/main_window.cpp" line="413"/>
         <source>Show &amp;every coder&apos;s spans (leads only)</source>
         <translation>Fragmenten van &amp;alle codeurs tonen (alleen coördinatoren)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="404"/>
+        <location filename="../app/desktop/main_window.cpp" line="423"/>
         <source>&amp;Lead</source>
         <translation>C&amp;oördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="406"/>
+        <location filename="../app/desktop/main_window.cpp" line="425"/>
         <source>&amp;Compare and adjudicate…</source>
         <translation>&amp;Vergelijken en beslissen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="408"/>
+        <location filename="../app/desktop/main_window.cpp" line="427"/>
         <source>&amp;Reliability…</source>
         <translation>&amp;Betrouwbaarheid…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="409"/>
+        <location filename="../app/desktop/main_window.cpp" line="428"/>
         <source>&amp;Frames…</source>
         <translation>&amp;Frames…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="410"/>
+        <location filename="../app/desktop/main_window.cpp" line="429"/>
         <source>Write the reliability &amp;report…</source>
         <translation>Betrouwbaarheids&amp;rapport schrijven…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="412"/>
+        <location filename="../app/desktop/main_window.cpp" line="431"/>
         <source>&amp;Study design…</source>
         <translation>&amp;Onderzoeksopzet…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="413"/>
+        <location filename="../app/desktop/main_window.cpp" line="432"/>
         <source>C&amp;odebook…</source>
         <translation>C&amp;odeboek…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="414"/>
+        <location filename="../app/desktop/main_window.cpp" line="433"/>
         <source>&amp;Progress…</source>
         <translation>Voort&amp;gang…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="415"/>
+        <location filename="../app/desktop/main_window.cpp" line="434"/>
         <source>P&amp;eople…</source>
         <translation>P&amp;ersonen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="416"/>
+        <location filename="../app/desktop/main_window.cpp" line="435"/>
         <source>&amp;Hand out a coder copy…</source>
         <translation>Codeurs&amp;kopie uitdelen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="417"/>
+        <location filename="../app/desktop/main_window.cpp" line="436"/>
         <source>&amp;Merge returned coder copies…</source>
         <translation>Teruggekomen codeurskopieën &amp;samenvoegen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="418"/>
+        <location filename="../app/desktop/main_window.cpp" line="437"/>
         <source>Merge co&amp;nflicts…</source>
         <translation>Samenvoeg&amp;conflicten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="420"/>
+        <location filename="../app/desktop/main_window.cpp" line="439"/>
         <source>&amp;Extractor runs…</source>
         <translation>&amp;Extractorruns…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="428"/>
+        <location filename="../app/desktop/main_window.cpp" line="447"/>
         <source>&amp;Settings</source>
         <translation>&amp;Instellingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="429"/>
+        <location filename="../app/desktop/main_window.cpp" line="448"/>
         <source>&amp;Language</source>
         <translation>&amp;Taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="434"/>
+        <location filename="../app/desktop/main_window.cpp" line="453"/>
         <source>System language</source>
         <translation>Systeemtaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="445"/>
+        <location filename="../app/desktop/main_window.cpp" line="464"/>
         <source>&amp;Help</source>
         <translation>&amp;Help</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="447"/>
+        <location filename="../app/desktop/main_window.cpp" line="466"/>
         <source>&amp;Keyboard shortcuts</source>
         <translation>&amp;Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="464"/>
+        <location filename="../app/desktop/main_window.cpp" line="483"/>
         <source>The project has no coder &quot;%1&quot;.</source>
         <translation>Het project heeft geen codeur ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="478"/>
+        <location filename="../app/desktop/main_window.cpp" line="497"/>
         <source>Nobody was chosen to code.</source>
         <translation>Er is niemand gekozen om te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="504"/>
+        <location filename="../app/desktop/main_window.cpp" line="525"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="505"/>
+        <location filename="../app/desktop/main_window.cpp" line="526"/>
         <source>Codebook</source>
         <translation>Codeboek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="522"/>
+        <location filename="../app/desktop/main_window.cpp" line="543"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Ongedaan maken: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="525"/>
+        <location filename="../app/desktop/main_window.cpp" line="546"/>
         <source>&amp;Redo %1</source>
         <translation>Opn&amp;ieuw: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="667"/>
+        <location filename="../app/desktop/main_window.cpp" line="606"/>
+        <source>The team server asks for your password to sync. Your work stays in this file until it can be sent.</source>
+        <translation>De teamserver vraagt uw wachtwoord om te synchroniseren. Uw werk blijft in dit bestand tot het verzonden kan worden.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="608"/>
+        <source>Enter &amp;password…</source>
+        <translation>&amp;Wachtwoord invoeren…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="620"/>
+        <source>Team server password</source>
+        <translation>Wachtwoord van de teamserver</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="621"/>
+        <source>Password of %1 on the team server:</source>
+        <translation>Wachtwoord van %1 op de teamserver:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/main_window.cpp" line="755"/>
         <source>Every article in the list is done.</source>
         <translation>Alle artikelen in de lijst zijn klaar.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="689"/>
+        <location filename="../app/desktop/main_window.cpp" line="777"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n artikel bevat ‘%1’.</numerusform>
@@ -10366,126 +10606,127 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="695"/>
+        <location filename="../app/desktop/main_window.cpp" line="783"/>
         <source>New project</source>
         <translation>Nieuw project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="705"/>
+        <location filename="../app/desktop/main_window.cpp" line="793"/>
         <source>Cannot create project</source>
         <translation>Project kan niet worden aangemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="717"/>
+        <location filename="../app/desktop/main_window.cpp" line="805"/>
         <source>Import articles</source>
         <translation>Artikelen importeren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="718"/>
+        <location filename="../app/desktop/main_window.cpp" line="806"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikelen (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="764"/>
+        <location filename="../app/desktop/main_window.cpp" line="852"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Kies een artikel&lt;/h3&gt;&lt;p&gt;Kies links in de lijst een artikel om het te gaan coderen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="767"/>
+        <location filename="../app/desktop/main_window.cpp" line="855"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog geen artikelen&lt;/h3&gt;&lt;p&gt;Importeer de artikelen van het onderzoek: platte tekst, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- of Atom-feeds, NITF of NewsML-G2. Wijs ze daarna toe aan codeurs in Coördinator → Onderzoeksopzet.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="772"/>
+        <location filename="../app/desktop/main_window.cpp" line="860"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog niets te coderen&lt;/h3&gt;&lt;p&gt;In dit project zijn geen artikelen aan u toegewezen. Uw coördinator wijst ze toe; open daarna het project opnieuw, of open de codeurskopie die u wordt gestuurd.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="804"/>
+        <location filename="../app/desktop/main_window.cpp" line="892"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>De taal verandert wanneer Fourfold opnieuw wordt gestart.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="817"/>
+        <location filename="../app/desktop/main_window.cpp" line="905"/>
         <source>Not saved: %1. %2</source>
         <translation>Niet opgeslagen: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="818"/>
+        <location filename="../app/desktop/main_window.cpp" line="906"/>
         <source>&amp;Retry</source>
         <translation>&amp;Opnieuw proberen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="824"/>
+        <location filename="../app/desktop/main_window.cpp" line="912"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="834"/>
+        <location filename="../app/desktop/main_window.cpp" line="922"/>
         <source>No project open</source>
         <translation>Geen project geopend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="838"/>
+        <location filename="../app/desktop/main_window.cpp" line="926"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="838"/>
+        <location filename="../app/desktop/main_window.cpp" line="926"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="840"/>
+        <location filename="../app/desktop/main_window.cpp" line="928"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — alleen-lezen, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="842"/>
+        <location filename="../app/desktop/main_window.cpp" line="930"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — coderen als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="846"/>
+        <location filename="../app/desktop/main_window.cpp" line="934"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lezen als %1 · %2 · alleen-lezenbestand: er wordt niets opgeslagen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="849"/>
+        <location filename="../app/desktop/main_window.cpp" line="937"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Coderen als %1 · %2 · coördinator: alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="850"/>
+        <location filename="../app/desktop/main_window.cpp" line="938"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Coderen als %1 · %2 · blind: alleen je eigen fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="858"/>
+        <location filename="../app/desktop/main_window.cpp" line="946"/>
         <source>The comparison window lists its own keys with %1.</source>
         <translation>Het vergelijkingsvenster toont zijn eigen toetsen met %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="862"/>
+        <location filename="../app/desktop/main_window.cpp" line="950"/>
         <source>Keyboard shortcuts</source>
         <translation>Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="784"/>
+        <location filename="../app/desktop/main_window.cpp" line="872"/>
         <source>Open project</source>
         <translation>Project openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="695"/>
-        <location filename="../app/desktop/main_window.cpp" line="784"/>
+        <location filename="../app/desktop/main_window.cpp" line="783"/>
+        <location filename="../app/desktop/main_window.cpp" line="872"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-projecten (*.fourfold)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="137"/>
-        <location filename="../app/desktop/main_window.cpp" line="710"/>
-        <location filename="../app/desktop/main_window.cpp" line="788"/>
-        <location filename="../app/desktop/main_window.cpp" line="797"/>
+        <location filename="../app/desktop/main_window.cpp" line="146"/>
+        <location filename="../app/desktop/main_window.cpp" line="639"/>
+        <location filename="../app/desktop/main_window.cpp" line="798"/>
+        <location filename="../app/desktop/main_window.cpp" line="876"/>
+        <location filename="../app/desktop/main_window.cpp" line="885"/>
         <source>Cannot open project</source>
         <translation>Project kan niet worden geopend</translation>
     </message>
@@ -10810,27 +11051,27 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <translation>Artikeltekst</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="598"/>
+        <location filename="../app/desktop/reading_view.cpp" line="613"/>
         <source>Mark as %1</source>
         <translation>Markeren als %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="599"/>
+        <location filename="../app/desktop/reading_view.cpp" line="614"/>
         <source>Change to %1</source>
         <translation>Wijzigen in %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="604"/>
+        <location filename="../app/desktop/reading_view.cpp" line="619"/>
         <source>Delete span</source>
         <translation>Fragment verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="630"/>
+        <location filename="../app/desktop/reading_view.cpp" line="659"/>
         <source>%1: “%2”</source>
         <translation>%1: ‘%2’</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/reading_view.cpp" line="843"/>
+        <location filename="../app/desktop/reading_view.cpp" line="871"/>
         <source>%n span(s). Select text and press 1 to 4 to mark a framing function; Ctrl+Down and Ctrl+Up move between spans.</source>
         <translation>
             <numerusform>%n fragment. Selecteer tekst en druk op 1 tot 4 om een framingfunctie te markeren; Ctrl+Omlaag en Ctrl+Omhoog gaan van fragment naar fragment.</numerusform>
@@ -10838,11 +11079,12 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/reading_view.cpp" line="852"/>
+        <location filename="../app/desktop/reading_view.cpp" line="880"/>
         <source>Selected span: %1, “%2”. Press 1 to 4 to relabel, Delete to delete, Ctrl+Left/Right and Ctrl+Shift+Left/Right to resize.</source>
         <translation>Geselecteerd fragment: %1, ‘%2’. Druk op 1 tot 4 om de functie te wijzigen, Delete om te verwijderen, Ctrl+Links/Rechts en Ctrl+Shift+Links/Rechts om de grootte te wijzigen.</translation>
     </message>
     <message>
+        <location filename="../app/desktop/reading_view.cpp" line="662"/>
         <source>%1 · %2</source>
         <translation>%1 · %2</translation>
     </message>
@@ -11365,87 +11607,87 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::ReportOptionsDialog</name>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="22"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="23"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="26"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="27"/>
         <source>Paragraph</source>
         <translation>Alinea</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="27"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="28"/>
         <source>Sentence</source>
         <translation>Zin</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="28"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="29"/>
         <source>Token (word)</source>
         <translation>Token (woord)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="30"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="31"/>
         <source>&amp;Unit of the functions</source>
         <translation>&amp;Eenheid van de functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="33"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="34"/>
         <source>All phases</source>
         <translation>Alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="36"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="37"/>
         <source>&amp;Phase</source>
         <translation>&amp;Fase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="54"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="55"/>
         <source>&amp;Coders</source>
         <translation>&amp;Codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="60"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="61"/>
         <source>none</source>
         <translation>geen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="61"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="62"/>
         <source> replicates</source>
         <translation> replicaties</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="62"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="63"/>
         <source>&amp;Bootstrap</source>
         <translation>&amp;Bootstrap</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="66"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="67"/>
         <source>S&amp;eed</source>
         <translation>Z&amp;aad</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="68"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="69"/>
         <source>Count articles in progress</source>
         <translation>Artikelen in bewerking meetellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="69"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="70"/>
         <source>By default a coder&apos;s article counts only once the coder has marked it done; tick to count articles still in progress too.</source>
         <translation>Standaard telt een artikel van een codeur pas mee als de codeur het als klaar gemarkeerd heeft; vink aan om ook artikelen in bewerking mee te tellen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="74"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="75"/>
         <source>Reliability report: %1</source>
         <translation>Betrouwbaarheidsrapport: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="75"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="76"/>
         <source>&amp;Title</source>
         <translation>&amp;Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="78"/>
+        <location filename="../app/desktop/reliability/report_options_dialog.cpp" line="79"/>
         <source>&amp;Write…</source>
         <translation>&amp;Schrijven…</translation>
     </message>
@@ -11622,42 +11864,42 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::SpanEditor</name>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="94"/>
+        <location filename="../app/desktop/span_editor.cpp" line="95"/>
         <source>judges</source>
         <translation>beoordeelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="94"/>
+        <location filename="../app/desktop/span_editor.cpp" line="95"/>
         <source>judged by</source>
         <translation>beoordeeld door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="96"/>
+        <location filename="../app/desktop/span_editor.cpp" line="97"/>
         <source>addresses</source>
         <translation>behandelt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="96"/>
+        <location filename="../app/desktop/span_editor.cpp" line="97"/>
         <source>addressed by</source>
         <translation>behandeld door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="97"/>
+        <location filename="../app/desktop/span_editor.cpp" line="98"/>
         <source>%1 →</source>
         <translation>%1 →</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="97"/>
+        <location filename="../app/desktop/span_editor.cpp" line="98"/>
         <source>← %1</source>
         <translation>← %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="106"/>
+        <location filename="../app/desktop/span_editor.cpp" line="107"/>
         <source>Span editor</source>
         <translation>Fragmenteditor</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="112"/>
+        <location filename="../app/desktop/span_editor.cpp" line="113"/>
         <source>No span selected.
 
 Click a span in the text or on the frame card to edit it, or select text and press 1–4 to code it.</source>
@@ -11666,148 +11908,150 @@ Click a span in the text or on the frame card to edit it, or select text and pre
 Klik op een fragment in de tekst of op de framekaart om het te bewerken, of selecteer tekst en druk op 1&#xa0;tot&#xa0;en&#xa0;met&#xa0;4 om die te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="178"/>
+        <location filename="../app/desktop/span_editor.cpp" line="179"/>
         <source>Another coder&apos;s span: shown, not editable.</source>
         <translation>Fragment van een andere codeur: zichtbaar, niet bewerkbaar.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="195"/>
+        <location filename="../app/desktop/span_editor.cpp" line="196"/>
         <source>Function: %1</source>
         <translation>Functie: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="199"/>
+        <location filename="../app/desktop/span_editor.cpp" line="200"/>
         <source>&amp;Function:</source>
         <translation>&amp;Functie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="206"/>
+        <location filename="../app/desktop/span_editor.cpp" line="207"/>
         <source>Note</source>
         <translation>Notitie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="210"/>
+        <location filename="../app/desktop/span_editor.cpp" line="211"/>
         <source>&amp;Note:</source>
         <translation>&amp;Notitie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="215"/>
+        <location filename="../app/desktop/span_editor.cpp" line="216"/>
         <source>Confidence</source>
         <translation>Zekerheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="219"/>
-        <location filename="../app/desktop/span_editor.cpp" line="366"/>
-        <location filename="../app/desktop/span_editor.cpp" line="374"/>
+        <location filename="../app/desktop/span_editor.cpp" line="220"/>
+        <location filename="../app/desktop/span_editor.cpp" line="389"/>
+        <location filename="../app/desktop/span_editor.cpp" line="397"/>
         <source>not set</source>
         <translation>niet opgegeven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="222"/>
+        <location filename="../app/desktop/span_editor.cpp" line="223"/>
         <source>How sure you are of this span, from 0 (a guess) to 1 (certain).</source>
         <translation>Hoe zeker je bent van dit fragment, van 0 (een gok) tot 1 (zeker).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="223"/>
+        <location filename="../app/desktop/span_editor.cpp" line="224"/>
         <source>&amp;Confidence:</source>
         <translation>&amp;Zekerheid:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="232"/>
+        <location filename="../app/desktop/span_editor.cpp" line="233"/>
         <source>Links</source>
         <translation>Koppelingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="234"/>
+        <location filename="../app/desktop/span_editor.cpp" line="235"/>
         <source>Links start from an evaluation (to the cause it judges) or from a remedy (to the problem it addresses).</source>
         <translation>Koppelingen beginnen bij een evaluatie (naar de oorzaak die ze beoordeelt) of bij een oplossing (naar het probleem dat ze behandelt).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="244"/>
+        <location filename="../app/desktop/span_editor.cpp" line="245"/>
         <source>Span to link to</source>
         <translation>Fragment om aan te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="248"/>
+        <location filename="../app/desktop/span_editor.cpp" line="249"/>
         <source>&amp;Link</source>
         <translation>&amp;Koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="249"/>
+        <location filename="../app/desktop/span_editor.cpp" line="250"/>
         <source>Link to the chosen span</source>
         <translation>Koppelen aan het gekozen fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="261"/>
+        <location filename="../app/desktop/span_editor.cpp" line="262"/>
         <source>Links of this span</source>
         <translation>Koppelingen van dit fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="269"/>
+        <location filename="../app/desktop/span_editor.cpp" line="270"/>
         <source>No links yet.</source>
         <translation>Nog geen koppelingen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="272"/>
+        <location filename="../app/desktop/span_editor.cpp" line="273"/>
+        <location filename="../app/desktop/span_editor.cpp" line="295"/>
         <source>&amp;Remove link</source>
         <translation>Koppeling &amp;verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="273"/>
+        <location filename="../app/desktop/span_editor.cpp" line="274"/>
         <source>Remove the chosen link</source>
         <translation>De gekozen koppeling verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="385"/>
+        <location filename="../app/desktop/span_editor.cpp" line="408"/>
         <source>%1:</source>
         <translation>%1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="439"/>
+        <location filename="../app/desktop/span_editor.cpp" line="462"/>
         <source>No note.</source>
         <translation>Geen notitie.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="439"/>
+        <location filename="../app/desktop/span_editor.cpp" line="462"/>
         <source>Why this span, doubts, a question for the lead…</source>
         <translation>Waarom dit fragment, twijfels, een vraag voor de coördinator…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="457"/>
+        <location filename="../app/desktop/span_editor.cpp" line="480"/>
         <source>&amp;Judges:</source>
         <translation>Be&amp;oordeelt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="457"/>
+        <location filename="../app/desktop/span_editor.cpp" line="480"/>
         <source>&amp;Addresses:</source>
         <translation>Behan&amp;delt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="459"/>
+        <location filename="../app/desktop/span_editor.cpp" line="482"/>
         <source>no cause span to link</source>
         <translation>geen oorzaakfragment om te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="459"/>
+        <location filename="../app/desktop/span_editor.cpp" line="482"/>
         <source>no problem span to link</source>
         <translation>geen probleemfragment om te koppelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="489"/>
+        <location filename="../app/desktop/span_editor.cpp" line="512"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="505"/>
+        <location filename="../app/desktop/span_editor.cpp" line="528"/>
         <source>a span not shown here</source>
         <translation>een fragment dat hier niet wordt getoond</translation>
     </message>
     <message>
-        <location filename="../app/desktop/span_editor.cpp" line="506"/>
+        <location filename="../app/desktop/span_editor.cpp" line="529"/>
         <source>%1 %2</source>
         <translation>%1 %2</translation>
     </message>
     <message>
+        <location filename="../app/desktop/span_editor.cpp" line="310"/>
         <source>Remove link: %1</source>
         <translation>Koppeling verwijderen: %1</translation>
     </message>
@@ -11872,13 +12116,13 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="224"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="759"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="793"/>
         <source>Phase:</source>
         <translation>Fase:</translation>
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="229"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="761"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="795"/>
         <source>Articles:</source>
         <translation>Artikelen:</translation>
     </message>
@@ -11934,7 +12178,7 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="278"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="600"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="634"/>
         <source>Seed</source>
         <translation>Seed</translation>
     </message>
@@ -11945,7 +12189,7 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
     </message>
     <message>
         <location filename="../app/desktop/study/study_design_window.cpp" line="285"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="602"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="636"/>
         <source>Seed:</source>
         <translation>Seed:</translation>
     </message>
@@ -12010,57 +12254,57 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         <translation>De getrokken artikelen aan elke gekozen codeur toewijzen en de trekking met haar seed vastleggen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
         <source>Stratum</source>
         <translation>Stratum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
         <source>In the frame</source>
         <translation>In het kader</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="360"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
         <source>Drawn</source>
         <translation>Getrokken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="362"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="369"/>
         <source>Drawn articles:</source>
         <translation>Getrokken artikelen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="365"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="372"/>
         <source>Drawn articles</source>
         <translation>Getrokken artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="420"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="430"/>
         <source>&lt;b&gt;No sample is drawn yet for the phase %1.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
         <translation>&lt;b&gt;Er is nog geen steekproef voor de fase %1 getrokken.&lt;/b&gt; Kies de omvang, methode, seed en codeurs en druk dan op &lt;i&gt;Trekken&lt;/i&gt; om de steekproef te zien en of die groot genoeg is.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="480"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="514"/>
         <source>simple random sample</source>
         <translation>enkelvoudige aselecte steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="482"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="516"/>
         <source>stratified by outlet</source>
         <translation>gestratificeerd naar medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="484"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="518"/>
         <source>stratified by language</source>
         <translation>gestratificeerd naar taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="486"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="520"/>
         <source>stratified by topic</source>
         <translation>gestratificeerd naar onderwerp</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="487"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
         <source>%n article(s) of a frame of %1, %2, seed %3, coded by %4.</source>
         <translation>
             <numerusform>%n artikel uit een kader van %1, %2, seed %3, gecodeerd door %4.</numerusform>
@@ -12068,42 +12312,42 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="495"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="529"/>
         <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded; it can be withdrawn until someone codes one of its articles, and then drawn again.</source>
         <translation>&lt;b&gt;Steekproef voor fase %1 getrokken op %2.&lt;/b&gt; %3 De trekking is vastgelegd; ze kan worden ingetrokken tot iemand een van haar artikelen codeert, en daarna opnieuw worden getrokken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="501"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="535"/>
         <source>&lt;b&gt;Planned draw, not yet committed.&lt;/b&gt; %1 Press &lt;i&gt;Commit the draw&lt;/i&gt; to assign it.</source>
         <translation>&lt;b&gt;Geplande trekking, nog niet vastgelegd.&lt;/b&gt; %1 Druk op &lt;i&gt;Trekking vastleggen&lt;/i&gt; om haar toe te wijzen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="510"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="544"/>
         <source>No minimum sample can be computed for these settings.</source>
         <translation>Voor deze instellingen kan geen minimale steekproef worden berekend.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="512"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="546"/>
         <source>&lt;b&gt;Krippendorff&apos;s minimum: %1 values&lt;/b&gt; per variable for α_min = %2 at p = %3, with the rarest value at %4 %.</source>
         <translation>&lt;b&gt;Krippendorffs minimum: %1 waarden&lt;/b&gt; per variabele voor α_min = %2 bij p = %3, met de zeldzaamste waarde op %4 %.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="555"/>
         <source>Unit</source>
         <translation>Eenheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="555"/>
         <source>Values the draw delivers</source>
         <translation>Waarden die de trekking oplevert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="525"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="559"/>
         <source>✓ enough</source>
         <translation>✓ genoeg</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="526"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="560"/>
         <source>✗ %n short</source>
         <translation>
             <numerusform>✗ %n te weinig</numerusform>
@@ -12111,103 +12355,103 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="534"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="568"/>
         <source>Article-level items</source>
         <translation>Items op artikelniveau</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="535"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="569"/>
         <source>Paragraphs</source>
         <translation>Alinea&apos;s</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="536"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="570"/>
         <source>Sentences</source>
         <translation>Zinnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="539"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="573"/>
         <source>Values are units × coders. For spans, count the codings of each function: a rare function (often the remedy) may need a larger or stratified sample.</source>
         <translation>Waarden zijn eenheden × codeurs. Tel voor fragmenten de coderingen van elke functie: een zeldzame functie (vaak de oplossing) kan een grotere of gestratificeerde steekproef nodig hebben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="576"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="610"/>
         <source>Deal the rest</source>
         <translation>De rest verdelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="578"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="612"/>
         <source>Every article with no assignment yet goes to production coding, shuffled with the seed and dealt in turn.</source>
         <translation>Elk artikel zonder toewijzing gaat naar de hoofdcodering, geschud met de seed en om de beurt uitgedeeld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="584"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="618"/>
         <source>Single-coded: one coder per article</source>
         <translation>Enkel gecodeerd: één codeur per artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="587"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="621"/>
         <source>Double-coded: two coders per article, pairs rotating</source>
         <translation>Dubbel gecodeerd: twee codeurs per artikel, wisselende paren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="592"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
         <source>Coding:</source>
         <translation>Codering:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="595"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="629"/>
         <source>Production coders</source>
         <translation>Codeurs hoofdcodering</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="597"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="767"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="631"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="801"/>
         <source>Coders:</source>
         <translation>Codeurs:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="604"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="638"/>
         <source>Plan</source>
         <translation>Plannen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="606"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="640"/>
         <source>Assign</source>
         <translation>Toewijzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="660"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="729"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="660"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="763"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="645"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="679"/>
         <source>Press &lt;i&gt;Plan&lt;/i&gt; to see who would code which article.</source>
         <translation>Druk op &lt;i&gt;Plannen&lt;/i&gt; om te zien wie welk artikel zou coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="685"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="719"/>
         <source>Every article is assigned already: there is no rest to deal.</source>
         <translation>Elk artikel is al toegewezen: er is geen rest te verdelen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="690"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="724"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="691"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="725"/>
         <source>&lt;b&gt;Planned, not yet assigned:&lt;/b&gt; %n article(s); load per coder %1. Press &lt;i&gt;Assign&lt;/i&gt; to write the plan.</source>
         <translation>
             <numerusform>&lt;b&gt;Gepland, nog niet toegewezen:&lt;/b&gt; %n artikel; belasting per codeur %1. Druk op &lt;i&gt;Toewijzen&lt;/i&gt; om het plan weg te schrijven.</numerusform>
@@ -12215,163 +12459,163 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="713"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="747"/>
         <source>The rest is assigned.</source>
         <translation>De rest is toegewezen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="728"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="762"/>
         <source>&lt;b&gt;Articles per coder and phase&lt;/b&gt; (done / assigned)</source>
         <translation>&lt;b&gt;Artikelen per codeur en fase&lt;/b&gt; (klaar / toegewezen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="732"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="766"/>
         <source>Total</source>
         <translation>Totaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="739"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="773"/>
         <source>&lt;b&gt;Every assignment&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle toewijzingen&lt;/b&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Phase</source>
         <translation>Fase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="740"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="749"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="783"/>
         <source>Give articles to coders</source>
         <translation>Artikelen aan codeurs geven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="751"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="785"/>
         <source>Every chosen coder gets every chosen article, e.g. the training articles that the lead has master-coded.</source>
         <translation>Elke gekozen codeur krijgt elk gekozen artikel, bijv. de trainingsartikelen die de coördinator als master heeft gecodeerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="764"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="798"/>
         <source>Articles to give</source>
         <translation>Te geven artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="770"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="804"/>
         <source>Coders to give to</source>
         <translation>Codeurs die ze krijgen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="772"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="806"/>
         <source>Give</source>
         <translation>Geven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="802"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="836"/>
         <source>done</source>
         <translation>klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="803"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="837"/>
         <source>started</source>
         <translation>begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="804"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="838"/>
         <source>not started</source>
         <translation>niet begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="860"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="894"/>
         <source>Every chosen coder has every chosen article in this phase already.</source>
         <translation>Elke gekozen codeur heeft elk gekozen artikel in deze fase al.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
         <source>Version</source>
         <translation>Versie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
         <source>Made</source>
         <translation>Gemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
         <source>By</source>
         <translation>Door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="882"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
         <source>Note</source>
         <translation>Notitie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="886"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="920"/>
         <source>Add a version from a file…</source>
         <translation>Versie uit een bestand toevoegen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="888"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="922"/>
         <source>Read a codebook JSON file and store it as the next version, with a note that says what changed and why.</source>
         <translation>Een JSON-codeboekbestand inlezen en als volgende versie opslaan, met een notitie die zegt wat er veranderd is en waarom.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="901"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="935"/>
         <source>Compare version</source>
         <translation>Versie vergelijken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="903"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="937"/>
         <source>with</source>
         <translation>met</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="911"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="945"/>
         <source>Changes between the versions</source>
         <translation>Wijzigingen tussen de versies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="919"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="953"/>
         <source>Only those to re-check</source>
         <translation>Alleen die opnieuw te controleren zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Function</source>
         <translation>Functie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Made under</source>
         <translation>Gemaakt onder</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="923"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
         <source>Re-check</source>
         <translation>Opnieuw controleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="993"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1027"/>
         <source>yes — its function changed</source>
         <translation>ja — de functie is veranderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="993"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1027"/>
         <source>no</source>
         <translation>nee</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1003"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1037"/>
         <source>&lt;b&gt;Every annotation was made under the current version (%1).&lt;/b&gt;</source>
         <translation>&lt;b&gt;Elke annotatie is gemaakt onder de huidige versie (%1).&lt;/b&gt;</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1004"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1038"/>
         <source>&lt;b&gt;%n annotation(s) were made under an older version&lt;/b&gt; than the current one (%1); %2 of them belong to a function whose definition, rules, examples or attributes changed since, and should be re-checked.</source>
         <translation>
             <numerusform>&lt;b&gt;%n annotatie is gemaakt onder een oudere versie&lt;/b&gt; dan de huidige (%1); %2 daarvan hoort bij een functie waarvan de definitie, regels, voorbeelden of kenmerken sindsdien veranderd zijn, en moet opnieuw worden gecontroleerd.</numerusform>
@@ -12379,90 +12623,93 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1019"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1053"/>
         <source>&lt;p&gt;There is only version %1: nothing to compare yet. Add a version when the codebook changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Er is alleen versie %1: nog niets te vergelijken. Voeg een versie toe wanneer het codeboek verandert.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1023"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1057"/>
         <source>&lt;p&gt;Choose two different versions to compare.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Kies twee verschillende versies om te vergelijken.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1032"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1066"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codeboekversie %1 → %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1034"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1068"/>
         <source>&lt;p&gt;No changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Geen wijzigingen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1042"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1076"/>
         <source>added</source>
         <translation>toegevoegd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1046"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1080"/>
         <source>removed</source>
         <translation>verwijderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1050"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1084"/>
         <source>changed</source>
         <translation>gewijzigd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1075"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1109"/>
         <source>item removed:</source>
         <translation>item verwijderd:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1079"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1113"/>
         <source>item added:</source>
         <translation>item toegevoegd:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1083"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1117"/>
         <source>the order changed</source>
         <translation>de volgorde is veranderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1087"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1121"/>
         <source>was:</source>
         <translation>was:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1090"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1124"/>
         <source>now:</source>
         <translation>nu:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1102"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1106"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1136"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1140"/>
         <source>Add a codebook version</source>
         <translation>Een codeboekversie toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1102"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1136"/>
         <source>Codebooks (*.json)</source>
         <translation>Codeboeken (*.json)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1107"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1141"/>
         <source>What changed, and why?</source>
         <translation>Wat is er veranderd, en waarom?</translation>
     </message>
     <message>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="334"/>
         <source>Withdraw the draw</source>
         <translation>Trekking intrekken</translation>
     </message>
     <message>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="337"/>
         <source>Remove the committed draw and its assignments, so that the phase can be drawn again; only while nobody has coded any of its articles.</source>
         <translation>De vastgelegde trekking en haar toewijzingen verwijderen, zodat de fase opnieuw kan worden getrokken; alleen zolang niemand een van haar artikelen heeft gecodeerd.</translation>
     </message>
     <message numerus="yes">
+        <location filename="../app/desktop/study/study_design_window.cpp" line="499"/>
         <source>&lt;b&gt;The %1 sample was withdrawn&lt;/b&gt;: %n assignment(s) removed, the withdrawal recorded in the project&apos;s log. The phase can be drawn again.</source>
         <translation>
             <numerusform>&lt;b&gt;De steekproef voor fase %1 is ingetrokken&lt;/b&gt;: %n toewijzing verwijderd, de intrekking vastgelegd in het logboek van het project. De fase kan opnieuw worden getrokken.</numerusform>
@@ -12612,75 +12859,24 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
 <context>
     <name>main</name>
     <message>
-        <location filename="../app/desktop/main.cpp" line="25"/>
+        <location filename="../app/desktop/main.cpp" line="29"/>
         <source>Fourfold: manual frame analysis of news and opinion articles.</source>
         <translation>Fourfold: handmatige frame-analyse van nieuws- en opinieartikelen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main.cpp" line="29"/>
+        <location filename="../app/desktop/main.cpp" line="33"/>
         <source>Code as the coder with this pseudonym.</source>
         <translation>Coderen als de codeur met dit pseudoniem.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main.cpp" line="33"/>
+        <location filename="../app/desktop/main.cpp" line="37"/>
         <source>A project file to open (*.fourfold).</source>
         <translation>Een projectbestand om te openen (*.fourfold).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main.cpp" line="42"/>
+        <location filename="../app/desktop/main.cpp" line="46"/>
         <source>Cannot open project</source>
         <translation>Project kan niet worden geopend</translation>
-    </message>
-</context>
-<context>
-    <name>fourfold::CoderLegend</name>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="15"/>
-        <source>Coders of the spans shown</source>
-        <translation>Codeurs van de getoonde fragmenten</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="21"/>
-        <source>Each span&apos;s badge carries its coder&apos;s pseudonym after the letter.</source>
-        <translation>Het label van elk fragment draagt na de letter het pseudoniem van de codeur.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="23"/>
-        <source>Show the spans of</source>
-        <translation>Fragmenten tonen van</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="24"/>
-        <source>&amp;Show spans of:</source>
-        <translation>Fragmenten &amp;tonen van:</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="46"/>
-        <source>All coders</source>
-        <translation>Alle codeurs</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="68"/>
-        <source>unknown</source>
-        <translation>onbekend</translation>
-    </message>
-    <message numerus="yes">
-        <location filename="../app/desktop/coder_legend.cpp" line="74"/>
-        <source>&lt;b&gt;%1&lt;/b&gt; %n span(s)</source>
-        <translation>
-            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n fragment</numerusform>
-            <numerusform>&lt;b&gt;%1&lt;/b&gt; %n fragmenten</numerusform>
-        </translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="80"/>
-        <source>No coder has spans on this article.</source>
-        <translation>Geen codeur heeft fragmenten in dit artikel.</translation>
-    </message>
-    <message>
-        <location filename="../app/desktop/coder_legend.cpp" line="81"/>
-        <source>Spans by: %1</source>
-        <translation>Fragmenten van: %1</translation>
     </message>
 </context>
 </TS>

@@ -86,6 +86,14 @@ void CodingSession::changed(ArticleId article, ArticleDocument::Parts touched)
     emit articleChanged(article);
 }
 
+void CodingSession::reloadAfterSync()
+{
+    if (m_document.isOpen())
+        if (auto st = m_document.reload(ArticleDocument::Part::Everything); !st)
+            emit errorOccurred(st.error().toString());
+    emit articleChanged(ArticleId {});
+}
+
 std::vector<ArticleRow> CodingSession::articleRows() const
 {
     auto all = m_project.articles();
@@ -305,6 +313,13 @@ Status CodingSession::answerItem(ArticleId article, const QString &itemKey, cons
         article, ArticleDocument::Part::Answers);
 }
 
+Status CodingSession::withdrawAnswer(ArticleId article, const QString &itemKey)
+{
+    return push(
+        std::make_unique<WithdrawJudgementEdit>(article, m_coder.id, itemKey, phaseOf(article)),
+        article, ArticleDocument::Part::Answers);
+}
+
 Status CodingSession::markDone(ArticleId article)
 {
     return push(std::make_unique<SetArticleStatusEdit>(article, m_coder.id, QStringLiteral("done")),
@@ -313,13 +328,6 @@ Status CodingSession::markDone(ArticleId article)
 
 void CodingSession::addCodingTime(ArticleId article, qint64 seconds)
 {
-Status CodingSession::withdrawAnswer(ArticleId article, const QString &itemKey)
-{
-    return push(
-        std::make_unique<WithdrawJudgementEdit>(article, m_coder.id, itemKey, phaseOf(article)),
-        article, ArticleDocument::Part::Answers);
-}
-
     if (m_project.isReadOnly())
         return; // reading a read-only file is not coding time to record
     if (auto st = m_project.addCodingTime(article, m_coder.id, seconds); !st) {

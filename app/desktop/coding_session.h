@@ -88,6 +88,9 @@ public:
     Status markDone(ArticleId article);
     // Records active coding time (not undoable, not a user edit).
     void addCodingTime(ArticleId article, qint64 seconds);
+    // Another connection wrote the file (a team sync brought others' work): reads the open
+    // document again and emits articleChanged with an invalid id.
+    void reloadAfterSync();
 
     // The phase this person codes the article in: that of their assignment (production if none);
     // the open document's without a read.
@@ -114,7 +117,8 @@ public:
 
 signals:
     // After any change to spans, links, answers or the status of `article` (including undo and
-    // redo), once the open document holds it.
+    // redo), once the open document holds it. An invalid `article`: any article may have changed
+    // (reloadAfterSync), so views read again whatever they show.
     void articleChanged(ArticleId article);
     void errorOccurred(const QString &message);
     // An edit could not be written and is kept as unsaved (see hasUnsavedEdit()).
@@ -134,11 +138,11 @@ private:
     Codebook m_codebook;
     QUndoStack m_undo;
     bool m_showAll = false;
+    mutable std::optional<QHash<qint64, QString>> m_pseudonyms;
     AnnotationId m_lastAdded;
     ArticleDocument m_document {m_project, m_coder};
     struct Unsaved;
     std::unique_ptr<Unsaved> m_unsaved;
-    mutable std::optional<QHash<qint64, QString>> m_pseudonyms;
 };
 
 } // namespace fourfold

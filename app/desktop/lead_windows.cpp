@@ -43,6 +43,14 @@ void LeadWindows::setSession(CodingSession *session)
 {
     closeAll();
     m_session = session;
+    // A team sync brought coders' work into the file: the progress board shows it. (The
+    // comparison window reads its queue again by itself.)
+    if (session)
+        connect(session, &CodingSession::articleChanged, this, [this](ArticleId article) {
+            if (auto *board = qobject_cast<ProgressBoardWindow *>(m_progress.data());
+                board && !article.isValid())
+                board->refresh();
+        });
 }
 
 void LeadWindows::closeAll()

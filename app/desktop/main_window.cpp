@@ -18,7 +18,10 @@
 #include "app/desktop/shortcut_table.h"
 #include "app/desktop/span_editor.h"
 #include "app/desktop/study/training_feedback_dialog.h"
+#include "app/desktop/team/background_sync.h"
+#include "app/desktop/team/join_team_dialog.h"
 #include "app/desktop/window_placement.h"
+#include "core/team/team_credentials.h"
 
 #include <QActionGroup>
 #include <QApplication>
@@ -29,6 +32,7 @@
 #include <QFileInfo>
 #include <QHBoxLayout>
 #include <QHeaderView>
+#include <QInputDialog>
 #include <QKeySequence>
 #include <QLabel>
 #include <QLineEdit>
@@ -83,6 +87,10 @@ MainWindow::MainWindow(QWidget *parent)
     setCentralWidget(central);
     buildMenus();
     m_who = new QLabel(this);
+    m_syncStatus = new QLabel(this);
+    m_syncStatus->setContentsMargins(0, 0, 16, 0); // apart from who is coding
+    m_syncStatus->hide();
+    statusBar()->addPermanentWidget(m_syncStatus);
     statusBar()->addPermanentWidget(m_who);
     updateTitle();
     placeWindow(this, QStringLiteral("MainWindow"), QSize(1500, 920));
@@ -248,6 +256,8 @@ QWidget *MainWindow::buildDesk()
     connect(done, &QPushButton::clicked, this, &MainWindow::markDone);
     bar->addWidget(done);
     middleLayout->addLayout(bar);
+    m_legend = new CoderLegend(middle);
+    middleLayout->addWidget(m_legend);
     middleLayout->addWidget(m_reading, 1);
     m_middlePages = new QStackedWidget(splitter);
     auto *empty = new QWidget(m_middlePages);
@@ -256,8 +266,6 @@ QWidget *MainWindow::buildDesk()
     m_emptyText = new QLabel(empty);
     m_emptyText->setTextFormat(Qt::RichText);
     m_emptyText->setWordWrap(true);
-    m_legend = new CoderLegend(middle);
-    middleLayout->addWidget(m_legend);
     m_emptyText->setAlignment(Qt::AlignCenter);
     m_emptyText->setMinimumWidth(360);
     m_emptyText->setMaximumWidth(560);
@@ -322,6 +330,13 @@ QWidget *MainWindow::buildDesk()
         if (m_session->deleteSpan(id))
             selectSpan(AnnotationId {});
     });
+    // The context menu also removes the selected span's links and withdraws answers.
+    connect(m_reading, &ReadingView::contextMenuAboutToShow, this, [this](QMenu *menu) {
+        if (m_spanEditor)
+            m_spanEditor->addLinkActions(menu);
+        if (m_items)
+            m_items->addAnswerActions(menu);
+    });
     connect(m_reading, &ReadingView::spanActivated, this, &MainWindow::selectSpan);
     // A new text selection clears the view's span selection: the panels follow.
     connect(m_reading, &ReadingView::selectedSpanChanged, this, [this](AnnotationId id) {
@@ -330,13 +345,6 @@ QWidget *MainWindow::buildDesk()
     });
     connect(m_card, &FrameCard::spanActivated, this, [this](AnnotationId id) {
         selectSpan(id);
-    // The context menu also removes the selected span's links and withdraws answers.
-    connect(m_reading, &ReadingView::contextMenuAboutToShow, this, [this](QMenu *menu) {
-        if (m_spanEditor)
-            m_spanEditor->addLinkActions(menu);
-        if (m_items)
-            m_items->addAnswerActions(menu);
-    });
         m_reading->scrollToSpan(id);
     });
     return splitter;
@@ -357,6 +365,7 @@ void MainWindow::buildMenus()
     importFolder->setEnabled(false);
     connect(m_import, &QAction::enabledChanged, importFolder, &QAction::setEnabled);
     project->addAction(tr("Open the &sample project"), this, &MainWindow::openSample);
+    project->addAction(tr("Join a &team project…"), this, &MainWindow::joinTeam);
     project->addSeparator();
     project->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
 
@@ -490,6 +499,8 @@ Status MainWindow::openProject(
     }
 
     flushTime();
+    m_sync.reset();
+    m_syncStatus->hide();
     m_lead->setSession(nullptr);
     if (m_items) {
         delete m_items;
@@ -535,12 +546,22 @@ Status MainWindow::openProject(
         m_redo->setText(t.isEmpty() ? tr("&Redo") : tr("&Redo %1").arg(t));
     });
     connect(m_session.get(), &CodingSession::articleChanged, this, [this](ArticleId id) {
+        if (!id.isValid()) { // a sync wrote others' work: the list and the article again
+            refreshList();
+            const int row =
+                m_filter->mapFromSource(m_articles->index(m_articles->rowOf(m_article), 0)).row();
+            if (row >= 0)
+                m_list->selectRow(row);
+            refreshArticle();
+            return;
+        }
         if (id == m_article)
             refreshArticle();
         m_articles->updateArticle(id, m_session->articleStatus(id), m_session->secondsSpent(id));
     });
     connect(m_session.get(), &CodingSession::errorOccurred, this, &MainWindow::showError);
     connect(m_session.get(), &CodingSession::editNotSaved, this, &MainWindow::showUnsavedEdit);
+    m_legend->setSession(m_session.get());
     m_showAll->setEnabled(m_session->isLead());
     m_import->setEnabled(m_session->isLead());
     m_leadMenu->menuAction()->setVisible(m_session->isLead());
@@ -561,9 +582,61 @@ Status MainWindow::openProject(
         m_list->selectRow(0);
     updateEmptyState();
     if (m_session->isReadOnly())
-    m_legend->setSession(m_session.get());
         m_messages->showMessage(MessageBar::Kind::Warning, m_session->readOnlyMessage());
+    startTeamSync(path);
     return {};
+}
+
+void MainWindow::startTeamSync(const QString &path)
+{
+    auto team = TeamProject::status(m_session->project());
+    if (!team || m_session->isReadOnly())
+        return; // not a team working file (or one this process may not write)
+    m_sync = std::make_unique<BackgroundSync>(path, *team);
+    m_syncStatus->setText(m_sync->statusText());
+    m_syncStatus->show();
+    connect(m_sync.get(), &BackgroundSync::statusChanged, m_syncStatus, [this](const QString &t) {
+        m_syncStatus->setText(t);
+        m_syncStatus->setToolTip(m_sync->problem());
+    });
+    connect(
+        m_sync.get(), &BackgroundSync::pulled, m_session.get(), &CodingSession::reloadAfterSync);
+    connect(m_sync.get(), &BackgroundSync::passwordNeeded, this, [this](const QString &server) {
+        m_messages->showMessage(MessageBar::Kind::Warning,
+            tr("The team server asks for your password to sync. Your work stays in this file "
+               "until it can be sent."),
+            {{tr("Enter &password…"), [this, server] { askTeamPassword(server); }}});
+    });
+    // Every change made on the desk or in the lead's windows goes on the undo stack.
+    connect(m_session->undoStack(), &QUndoStack::indexChanged, m_sync.get(),
+        &BackgroundSync::localChange);
+}
+
+void MainWindow::askTeamPassword(const QString &server)
+{
+    if (!m_sync || !m_session)
+        return;
+    bool ok = false;
+    const QString password = QInputDialog::getText(this, tr("Team server password"),
+        tr("Password of %1 on the team server:").arg(m_session->coder().pseudonym),
+        QLineEdit::Password, QString(), &ok);
+    if (!ok || password.isEmpty())
+        return;
+    if (auto st = TeamCredentials::rememberPassword(server, password); !st) {
+        showError(st.error().message);
+        return;
+    }
+    m_sync->syncNow();
+}
+
+void MainWindow::joinTeam()
+{
+    JoinTeamDialog dialog(this);
+    if (dialog.exec() != QDialog::Accepted)
+        return;
+    if (auto st = openProject(dialog.workingFile(), dialog.pseudonym());
+        !st && st.error().code != ErrorCode::Cancelled)
+        QMessageBox::warning(this, tr("Cannot open project"), st.error().toString());
 }
 
 void MainWindow::refreshList()
@@ -612,7 +685,11 @@ void MainWindow::refreshArticle()
         return;
     const ArticleDocument &doc = m_session->document();
     const std::vector<Annotation> &spans = doc.spans();
+    // Every coder's spans carry their coder's pseudonym.
+    m_reading->setSpanOwners(
+        m_session->showsAllCoders() ? m_session->pseudonyms() : QHash<qint64, QString> {});
     m_reading->setSpans(spans);
+    m_legend->refresh();
     m_card->setSpans(doc.article().text, spans);
     m_items->setArticle(m_article, doc.answers());
     if (std::none_of(
@@ -685,11 +762,7 @@ void MainWindow::search(const QString &query)
     m_reading->setSearchHighlight(query);
     if (query.trimmed().isEmpty()) {
         m_filter->setMatches(std::nullopt);
-    // Every coder's spans carry their coder's pseudonym.
-    m_reading->setSpanOwners(
-        m_session->showsAllCoders() ? m_session->pseudonyms() : QHash<qint64, QString> {});
         return;
-    m_legend->refresh();
     }
     auto hits = m_session->project().searchArticles(query);
     if (!hits) {

@@ -24,10 +24,11 @@ namespace fourfold {
 
 class ActivityClock;
 class ArticleFilter;
+class BackgroundSync;
 class ArticleListModel;
 class CodebookPanel;
-class CodingSession;
 class CoderLegend;
+class CodingSession;
 class LeadWindows;
 class MessageBar;
 class FrameCard;
@@ -51,9 +52,16 @@ public:
 
     // For tests and screenshots.
     LeadWindows *leadWindows() const { return m_lead; }
+    // The background sync of a team working file (null for any other project); its line in
+    // the status bar.
+    BackgroundSync *backgroundSync() const { return m_sync.get(); }
+    QLabel *syncStatusLabel() const { return m_syncStatus; }
+    // Project → Join a team project…: the dialog, then the new working file opens.
+    void joinTeam();
     MessageBar *messageBar() const { return m_messages; }
     CodingSession *session() const { return m_session.get(); }
     ReadingView *readingView() const { return m_reading; }
+    CoderLegend *coderLegend() const { return m_legend; }
     FrameCard *frameCard() const { return m_card; }
     SpanEditor *spanEditor() const { return m_spanEditor; }
     ItemForm *itemForm() const { return m_items; }
@@ -61,7 +69,6 @@ public:
     QLineEdit *searchField() const { return m_search; }
     ArticleId currentArticle() const { return m_article; }
     // What the middle of the desk shows when there is no article to code, and its button (hidden
-    CoderLegend *coderLegend() const { return m_legend; }
     // when there is nothing to do here); for tests. Empty text: an article is shown.
     QString emptyStateText() const;
     QPushButton *emptyStateButton() const { return m_emptyAction; }
@@ -93,10 +100,14 @@ private:
     void setLanguage(const QString &code);
     void showError(const QString &message);
     void showUnsavedEdit(const QString &editText, const QString &message);
+    // Starts the background sync when the open project is a team working file.
+    void startTeamSync(const QString &path);
+    void askTeamPassword(const QString &server);
     void updateTitle();
     void updateEmptyState();
 
     std::unique_ptr<CodingSession> m_session;
+    std::unique_ptr<BackgroundSync> m_sync; // has its own connection to the file
     ArticleId m_article;
     AnnotationId m_selected;
 
@@ -116,8 +127,10 @@ private:
     ItemForm *m_items = nullptr;
     QTabWidget *m_tabs = nullptr;
     SpanEditor *m_spanEditor = nullptr;
+    CoderLegend *m_legend = nullptr; // whose spans, while a lead shows every coder's
     CodebookPanel *m_codebook = nullptr;
     QLabel *m_who = nullptr;
+    QLabel *m_syncStatus = nullptr;
     QAction *m_showAll = nullptr;
     QAction *m_import = nullptr;
     QAction *m_undo = nullptr;
@@ -127,7 +140,6 @@ private:
     LeadWindows *m_lead = nullptr;
     QMenu *m_leadMenu = nullptr;
     bool m_columnsChosen = false;
-    CoderLegend *m_legend = nullptr; // whose spans, while a lead shows every coder's
 };
 
 } // namespace fourfold
