@@ -21,12 +21,18 @@ class Project;
 class ArticleDocument
 {
 public:
+    // What an edit touches. The desk's document holds the first four; the comparison's
+    // (ComparisonDocument) the spans, answers and assignments and the lead's decisions: gold
+    // spans, rejections of coders' spans and gold answers.
     enum class Part {
         Spans = 0x1,
         Links = 0x2,
         Answers = 0x4,
         Assignments = 0x8,
-        Everything = 0xF,
+        Gold = 0x10,
+        Rejections = 0x20,
+        GoldAnswers = 0x40,
+        Everything = 0x7F,
     };
     Q_DECLARE_FLAGS(Parts, Part)
 

@@ -83,6 +83,10 @@ void CodingSession::changed(ArticleId article, ArticleDocument::Parts touched)
         if (auto st = m_document.reload(touched); !st)
             emit errorOccurred(st.error().toString());
     }
+    if (m_comparison.isOpen() && m_comparison.id() == article) {
+        if (auto st = m_comparison.reload(touched); !st)
+            emit errorOccurred(st.error().toString());
+    }
     emit articleChanged(article);
 }
 
@@ -90,6 +94,10 @@ void CodingSession::reloadAfterSync()
 {
     if (m_document.isOpen())
         if (auto st = m_document.reload(ArticleDocument::Part::Everything); !st)
+            emit errorOccurred(st.error().toString());
+    // Opened again: a sync may also bring people (and their spans) the document did not know.
+    if (m_comparison.isOpen())
+        if (auto st = m_comparison.open(m_comparison.id()); !st)
             emit errorOccurred(st.error().toString());
     emit articleChanged(ArticleId {});
 }
@@ -250,6 +258,12 @@ void CodingSession::discardUnsavedEdit()
 Status CodingSession::applyProjectEdit(std::unique_ptr<Edit> edit)
 {
     return push(std::move(edit), ArticleId {}, {});
+}
+
+Status CodingSession::applyArticleEdit(
+    std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched)
+{
+    return push(std::move(edit), article, touched);
 }
 
 Status CodingSession::addSpan(ArticleId article, FramingFunction function, TextRange range)

@@ -6,6 +6,7 @@
 
 #include "app/desktop/article_document.h"
 #include "app/desktop/article_list_model.h"
+#include "app/desktop/compare/comparison_document.h"
 #include "core/project/people.h"
 #include "core/project/project.h"
 
@@ -56,6 +57,12 @@ public:
     const ArticleDocument &document() const { return m_document; }
     Status openDocument(ArticleId article);
 
+    // The article open in the comparison window (a lead's), kept up to date by every change
+    // made through the session the same way.
+    const ComparisonDocument &comparisonDocument() const { return m_comparison; }
+    Status openComparison(ArticleId article) { return m_comparison.open(article); }
+    void closeComparison() { m_comparison.close(); }
+
     // The articles this person may open (their assignments; a lead: all articles) with this
     // person's status and active seconds on each, read with a fixed number of queries whatever
     // the number of articles (for the article list).
@@ -76,6 +83,10 @@ public:
     // An edit about no article (People's changes): applied and put on the undo stack the same
     // way.
     Status applyProjectEdit(std::unique_ptr<Edit> edit);
+    // An edit about `article` that changes `touched` of its documents (a lead's decision in the
+    // comparison window): applied and put on the undo stack the same way.
+    Status applyArticleEdit(
+        std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched);
     Status changeSpan(AnnotationId id, const AnnotationContent &content);
     Status deleteSpan(AnnotationId id);
     Status linkSpans(AnnotationId source, AnnotationId target, const QString &type);
@@ -129,7 +140,7 @@ private:
     Status push(std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched);
     // The article of span `id`.
     Result<ArticleId> articleOf(AnnotationId id) const;
-    // Reads what changed into the open document (if it is `article`), then says so.
+    // Reads what changed into the open documents (those of `article`), then says so.
     void changed(ArticleId article, ArticleDocument::Parts touched);
 
     Project m_project;
@@ -141,6 +152,7 @@ private:
     mutable std::optional<QHash<qint64, QString>> m_pseudonyms;
     AnnotationId m_lastAdded;
     ArticleDocument m_document {m_project, m_coder};
+    ComparisonDocument m_comparison {m_project};
     struct Unsaved;
     std::unique_ptr<Unsaved> m_unsaved;
 };

@@ -183,20 +183,9 @@ std::vector<Coder> countingCoders(
     return out;
 }
 
-// What one article's comparison needs, read per article (compareArticle) or for every article
-// at once (disagreementQueue).
-struct ArticleCodings {
-    std::vector<Annotation> spans;
-    std::vector<GoldAnnotation> gold;
-    std::vector<AnnotationId> rejected;
-};
+} // namespace
 
-// Compares `codings` of the article titled `title` between `coded` under `filter` (in memory).
-Result<Comparison> compareLoaded(ArticleId article, const QString &title,
-    const std::vector<Coder> &coded, const ArticleCodings &codings, const ComparisonFilter &filter);
-
-// The queue's counts for one compared article.
-ArticleDisagreement queueRow(const ArticleSummary &summary, const Comparison &comparison)
+ArticleDisagreement disagreementRow(const ArticleSummary &summary, const Comparison &comparison)
 {
     ArticleDisagreement row;
     row.article = summary;
@@ -214,8 +203,6 @@ ArticleDisagreement queueRow(const ArticleSummary &summary, const Comparison &co
     }
     return row;
 }
-
-} // namespace
 
 Result<std::vector<Coder>> articleCoders(
     const Project &project, ArticleId article, bool includeUnfinished)
@@ -253,12 +240,10 @@ Result<Comparison> compareArticle(
         return std::unexpected(rejections.error());
     for (const GoldRejection &r : *rejections)
         codings.rejected.push_back(r.annotation);
-    return compareLoaded(article, summary->summary.title, *coded, codings, filter);
+    return compareCodings(article, summary->summary.title, *coded, codings, filter);
 }
 
-namespace {
-
-Result<Comparison> compareLoaded(ArticleId article, const QString &title,
+Result<Comparison> compareCodings(ArticleId article, const QString &title,
     const std::vector<Coder> &coded, const ArticleCodings &codings, const ComparisonFilter &filter)
 {
     Comparison out;
@@ -281,8 +266,6 @@ Result<Comparison> compareLoaded(ArticleId article, const QString &title,
             out.passages.push_back(std::move(p));
     return out;
 }
-
-} // namespace
 
 GoldCandidate acceptCandidate(const Passage &passage, const Annotation &span)
 {
@@ -390,10 +373,10 @@ Result<std::vector<ArticleDisagreement>> disagreementQueue(
                 codings = std::move(current);
             if (auto g = goldOf.find(summary.id.value); g != goldOf.end())
                 codings.gold = std::move(g->second);
-            auto comparison = compareLoaded(summary.id, summary.title, coded, codings, filter);
+            auto comparison = compareCodings(summary.id, summary.title, coded, codings, filter);
             if (!comparison)
                 return std::unexpected(comparison.error());
-            out.push_back(queueRow(summary, *comparison));
+            out.push_back(disagreementRow(summary, *comparison));
         }
         return {};
     };
@@ -444,10 +427,10 @@ Result<ArticleDisagreement> articleDisagreement(
     }
     ComparisonFilter all = filter;
     all.coderPair.reset(); // the row's coders already are the pair when one is chosen
-    auto comparison = compareLoaded(row.article.id, row.article.title, coders, codings, all);
+    auto comparison = compareCodings(row.article.id, row.article.title, coders, codings, all);
     if (!comparison)
         return std::unexpected(comparison.error());
-    return queueRow(row.article, *comparison);
+    return disagreementRow(row.article, *comparison);
 }
 
 } // namespace fourfold

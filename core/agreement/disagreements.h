@@ -78,6 +78,21 @@ Result<std::vector<Coder>> articleCoders(
 Result<Comparison> compareArticle(
     const Project &project, ArticleId article, const ComparisonFilter &filter = {});
 
+// What one article's comparison needs: every coder's spans, its gold spans and the ids of the
+// spans a lead rejected.
+struct ArticleCodings {
+    std::vector<Annotation> spans;
+    std::vector<GoldAnnotation> gold;
+    std::vector<AnnotationId> rejected;
+};
+
+// compareArticle on codings at hand, without a read: `codings` of the article titled `title`
+// between `coded` (the coders whose coding counts, in pseudonym order) under `filter`.
+// InvalidArgument if a coder of the pair is not among `coded`.
+Result<Comparison> compareCodings(ArticleId article, const QString &title,
+    const std::vector<Coder> &coded, const ArticleCodings &codings,
+    const ComparisonFilter &filter = {});
+
 // The gold spans a lead can accept at once: for every agreed passage that is not resolved, one
 // candidate per distinct (function, range) with the attributes all its coders gave; the sources
 // are every coder's span with that content.
@@ -102,6 +117,9 @@ struct ArticleDisagreement {
     int agreedOpen = 0; // agreed passages not yet in gold
     std::array<int, 4> byKind {}; // passages with each DisagreementKind
 };
+
+// The queue's row of an article compared as `comparison`.
+ArticleDisagreement disagreementRow(const ArticleSummary &summary, const Comparison &comparison);
 
 // Every article whose coding counts for at least two coders (or for both coders of the filter's
 // pair), compared

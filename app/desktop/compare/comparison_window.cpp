@@ -4,7 +4,6 @@
 #include "app/desktop/compare/comparison_view.h"
 #include "app/desktop/compare/disagreement_queue_model.h"
 #include "app/desktop/compare/gold_span_dialog.h"
-#include "app/desktop/edit_command.h"
 #include "app/desktop/function_style.h"
 #include "app/desktop/shortcut_table.h"
 #include "app/desktop/span_quote.h"
@@ -90,6 +89,7 @@ QString spanText(const QString &function, const QString &quote, const QJsonObjec
 ComparisonWindow::ComparisonWindow(CodingSession *session, QWidget *parent)
     : QMainWindow(parent)
     , m_session(session)
+    , m_sessionAlive(session)
 {
     setWindowTitle(
         tr("Compare coders and decide gold \u2014 %1").arg(session->project().settings().name));
@@ -125,7 +125,19 @@ ComparisonWindow::ComparisonWindow(CodingSession *session, QWidget *parent)
     updateActions();
 }
 
-ComparisonWindow::~ComparisonWindow() = default;
+ComparisonWindow::~ComparisonWindow()
+{
+    // Nothing more to keep up to date (the session may be gone already: it deletes this window
+    // later).
+    if (m_sessionAlive)
+        m_session->closeComparison();
+}
+
+bool ComparisonWindow::isArticleOpen() const
+{
+    const ComparisonDocument &doc = m_session->comparisonDocument();
+    return m_article.isValid() && doc.isOpen() && doc.id() == m_article;
+}
 
 QString ComparisonWindow::passageText() const
 {
@@ -490,13 +502,12 @@ bool ComparisonWindow::openArticle(ArticleId article)
     const int row = m_queueModel->rowOf(article);
     if (row < 0)
         return false;
-    auto loaded = m_session->project().article(article);
-    if (!loaded) {
-        showMessage(loaded.error().toString(), true);
+    // Read whole once; afterwards the session keeps it up to date, edit by edit.
+    if (auto st = m_session->openComparison(article); !st) {
+        showMessage(st.error().toString(), true);
         return false;
     }
     m_article = article;
-    m_articleData = std::move(*loaded);
     m_current = -1;
     {
         const QSignalBlocker block(m_queueView->selectionModel());
@@ -517,15 +528,15 @@ bool ComparisonWindow::isOpenDisagreement(const Passage &p) const
 
 void ComparisonWindow::reloadArticle()
 {
-    if (!m_article.isValid())
+    if (!isArticleOpen())
         return;
+    const ComparisonDocument &doc = m_session->comparisonDocument();
     const qint64 currentStart = passage() ? passage()->range.start : -1;
     const qint64 currentEnd = passage() ? passage()->range.end : -1;
-    auto comparison = compareArticle(m_session->project(), m_article, filter());
+    auto comparison = doc.compare(filter());
     if (!comparison) {
         // The pair did not code this article: show every coder instead.
-        comparison = compareArticle(
-            m_session->project(), m_article, {filter().function, {}, filter().includeUnfinished});
+        comparison = doc.compare({filter().function, {}, filter().includeUnfinished});
         if (!comparison) {
             showMessage(comparison.error().toString(), true);
             return;
@@ -546,58 +557,48 @@ void ComparisonWindow::reloadArticle()
         if (!item->data(0, IsGoldRole).toBool())
             chosen.push_back(AnnotationId {item->data(0, IdRole).toLongLong()});
 
-    auto spans = m_session->project().annotations(m_article);
-    auto gold = m_session->project().goldAnnotations(m_article);
-    auto rejections = m_session->project().goldRejections(m_article);
     std::vector<ComparisonView::Column> columns;
     for (CoderId c : m_comparison.coders) {
         ComparisonView::Column column;
         column.title = coderName(c);
         column.coder = c;
-        if (spans)
-            for (const Annotation &a : *spans) {
-                if (a.coder != c || a.deleted)
-                    continue;
-                ComparisonView::Mark mark;
-                mark.function = a.content.function;
-                mark.range = a.content.range;
-                mark.selected = std::ranges::find(chosen, a.id) != chosen.end();
-                mark.rejected = rejections
-                    && std::ranges::any_of(
-                        *rejections, [&](const GoldRejection &r) { return r.annotation == a.id; });
-                column.marks.push_back(mark);
-            }
+        for (const Annotation &a : doc.spans()) {
+            if (a.coder != c || a.deleted)
+                continue;
+            ComparisonView::Mark mark;
+            mark.function = a.content.function;
+            mark.range = a.content.range;
+            mark.selected = std::ranges::find(chosen, a.id) != chosen.end();
+            mark.rejected = doc.isRejected(a.id);
+            column.marks.push_back(mark);
+        }
         columns.push_back(std::move(column));
     }
+    const std::vector<GoldAnnotation> &gold = doc.gold();
     ComparisonView::Column goldColumn;
-    goldColumn.title = gold && !gold->empty() ? tr("Gold (%1)").arg(gold->size()) : tr("Gold");
-    if (gold)
-        for (const GoldAnnotation &g : *gold)
-            goldColumn.marks.push_back({g.content.function, g.content.range, false, false});
+    goldColumn.title = gold.empty() ? tr("Gold") : tr("Gold (%1)").arg(gold.size());
+    for (const GoldAnnotation &g : gold)
+        goldColumn.marks.push_back({g.content.function, g.content.range, false, false});
     columns.push_back(std::move(goldColumn));
-    m_view->setContent(m_articleData, std::move(columns), m_comparison.passages, m_current);
+    m_view->setContent(doc.article(), std::move(columns), m_comparison.passages, m_current);
     refreshDecisionList();
     refreshAnswers();
 }
 
 void ComparisonWindow::refreshAnswers()
 {
-    if (!m_article.isValid()) {
+    if (!isArticleOpen()) {
         m_answers->clear();
         return;
     }
-    auto answers = m_session->project().judgements(m_article);
-    auto gold = m_session->project().goldJudgements(m_article);
-    if (!answers || !gold) {
-        showMessage((answers ? gold.error() : answers.error()).toString(), true);
-        return;
-    }
+    const ComparisonDocument &doc = m_session->comparisonDocument();
     // The coders whose columns are shown, by pseudonym only.
     std::vector<Coder> coders;
     for (CoderId id : m_comparison.coders)
         if (const auto it = std::ranges::find(m_coders, id, &Coder::id); it != m_coders.end())
             coders.push_back(*it);
-    m_answers->setContent(m_session->codebook(), coders, *answers, *gold, m_coders);
+    m_answers->setContent(
+        m_session->codebook(), coders, doc.answers(), doc.goldAnswers(), m_coders);
 }
 
 const Passage *ComparisonWindow::passage() const
@@ -689,11 +690,15 @@ void ComparisonWindow::refreshDecisionList()
     if (p->has(DisagreementKind::Attributes))
         kinds << tr("different attributes");
     int paragraph = 0;
-    for (size_t i = 0; i < m_articleData.paragraphs.size(); ++i)
-        if (m_articleData.paragraphs[i].range.overlaps(p->range)) {
-            paragraph = int(i) + 1;
-            break;
-        }
+    if (isArticleOpen()) {
+        const std::vector<Paragraph> &paragraphs =
+            m_session->comparisonDocument().article().paragraphs;
+        for (size_t i = 0; i < paragraphs.size(); ++i)
+            if (paragraphs[i].range.overlaps(p->range)) {
+                paragraph = int(i) + 1;
+                break;
+            }
+    }
     m_passageLabel->setText(
         tr("Passage %1 of %2 (paragraph %3): %4%5")
             .arg(m_current + 1)
@@ -840,17 +845,16 @@ void ComparisonWindow::showMessage(const QString &text, bool error)
                                    : QString());
 }
 
-bool ComparisonWindow::push(std::unique_ptr<Edit> edit)
+bool ComparisonWindow::push(std::unique_ptr<Edit> edit, ArticleDocument::Parts touched)
 {
-    if (auto st = m_session->project().apply(*edit); !st) {
+    const QString text = edit->text();
+    // The session applies it, puts it on the undo stack and reads `touched` into the comparison
+    // document; its articleChanged then updates the queue's row and the article shown here (as
+    // on undo and redo).
+    if (auto st = m_session->applyArticleEdit(std::move(edit), m_article, touched); !st) {
         showMessage(st.error().toString(), true);
         return false;
     }
-    const QString text = edit->text();
-    // Gold and rejections are not on the desk's document; whatever the edit, its undo reads the
-    // open article again whole if it is this one.
-    m_session->undoStack()->push(
-        new EditCommand(m_session, std::move(edit), m_article, ArticleDocument::Part::Everything));
     m_rationale->clear();
     // The next key (N, A, …) goes to the comparison, not into the rationale just used.
     if (m_rationale->hasFocus())
@@ -858,9 +862,6 @@ bool ComparisonWindow::push(std::unique_ptr<Edit> edit)
     showMessage(tr("%1. Undo with %2.")
                     .arg(text, QKeySequence(QKeySequence::Undo).toString(QKeySequence::NativeText)),
         false);
-    if (!refreshQueueRow(m_article))
-        reloadQueue();
-    reloadArticle();
     return true;
 }
 
@@ -869,8 +870,12 @@ bool ComparisonWindow::refreshQueueRow(ArticleId article)
     const int at = m_queueModel->rowOf(article);
     if (at < 0)
         return false;
-    auto row =
-        articleDisagreement(m_session->project(), m_queueModel->rows()[size_t(at)], filter());
+    const ArticleDisagreement &old = m_queueModel->rows()[size_t(at)];
+    // The open article's row from its document, another's (a coder's edit on the desk) read.
+    const ComparisonDocument &doc = m_session->comparisonDocument();
+    auto row = doc.isOpen() && doc.id() == article
+        ? doc.queueRow(old, filter())
+        : articleDisagreement(m_session->project(), old, filter());
     if (!row) {
         showMessage(row.error().toString(), true);
         return false;
@@ -902,13 +907,14 @@ bool ComparisonWindow::mergeSelected()
 bool ComparisonWindow::decide(const GoldCandidate &candidate)
 {
     return push(std::make_unique<AdjudicateSpanEdit>(m_article, m_session->coder().id,
-        candidate.content, candidate.sources, m_rationale->text().trimmed()));
+                    candidate.content, candidate.sources, m_rationale->text().trimmed()),
+        ArticleDocument::Part::Gold);
 }
 
 bool ComparisonWindow::editSelected()
 {
     const Passage *p = passage();
-    if (!p) {
+    if (!p || !isArticleOpen()) {
         showMessage(tr("Choose a passage first."), true);
         return false;
     }
@@ -924,7 +930,8 @@ bool ComparisonWindow::editSelected()
         start.content.range.end = std::max(start.content.range.end, a.content.range.end);
         start.sources.push_back(a.id);
     }
-    GoldSpanDialog dialog(m_articleData, start.content, m_session->codebook(), this);
+    GoldSpanDialog dialog(
+        m_session->comparisonDocument().article(), start.content, m_session->codebook(), this);
     if (dialog.exec() != QDialog::Accepted)
         return false;
     start.content = dialog.content();
@@ -951,7 +958,8 @@ bool ComparisonWindow::rejectSelected()
         return false;
     }
     return push(std::make_unique<RejectSpansEdit>(
-        ids, m_session->coder().id, m_rationale->text().trimmed()));
+                    ids, m_session->coder().id, m_rationale->text().trimmed()),
+        ArticleDocument::Part::Rejections);
 }
 
 bool ComparisonWindow::withdrawSelectedGold()
@@ -961,7 +969,8 @@ bool ComparisonWindow::withdrawSelectedGold()
         showMessage(tr("Choose one gold span to withdraw."), true);
         return false;
     }
-    return push(std::make_unique<WithdrawGoldEdit>(gold.front(), m_session->coder().id));
+    return push(std::make_unique<WithdrawGoldEdit>(gold.front(), m_session->coder().id),
+        ArticleDocument::Part::Gold);
 }
 
 bool ComparisonWindow::decideAnswer(
@@ -972,7 +981,8 @@ bool ComparisonWindow::decideAnswer(
     // push() clears the spans' rationale field, which this decision did not use.
     const QString spanRationale = m_rationale->text();
     if (!push(std::make_unique<AdjudicateAnswerEdit>(
-            m_article, m_session->coder().id, item, value, rationale.trimmed())))
+                  m_article, m_session->coder().id, item, value, rationale.trimmed()),
+            ArticleDocument::Part::GoldAnswers))
         return false;
     m_rationale->setText(spanRationale);
     m_answers->setRationale(QString());
@@ -985,17 +995,17 @@ bool ComparisonWindow::withdrawGoldAnswer(GoldJudgementId id)
         showMessage(tr("Choose an item with a gold answer to withdraw."), true);
         return false;
     }
-    return push(std::make_unique<WithdrawGoldAnswerEdit>(id, m_session->coder().id));
+    return push(std::make_unique<WithdrawGoldAnswerEdit>(id, m_session->coder().id),
+        ArticleDocument::Part::GoldAnswers);
 }
 
 bool ComparisonWindow::acceptAllAgreed()
 {
-    if (!m_article.isValid())
+    if (!isArticleOpen())
         return false;
     // Agreement among every coder of the article whose coding is shown, whatever the function
     // and pair filters say.
-    auto all =
-        compareArticle(m_session->project(), m_article, {{}, {}, filter().includeUnfinished});
+    auto all = m_session->comparisonDocument().compare({{}, {}, filter().includeUnfinished});
     if (!all) {
         showMessage(all.error().toString(), true);
         return false;
@@ -1005,8 +1015,9 @@ bool ComparisonWindow::acceptAllAgreed()
         showMessage(tr("There is no agreed passage left to accept in this article."), false);
         return false;
     }
-    return push(std::make_unique<AcceptSpansEdit>(
-        m_article, m_session->coder().id, std::move(candidates), m_rationale->text().trimmed()));
+    return push(std::make_unique<AcceptSpansEdit>(m_article, m_session->coder().id,
+                    std::move(candidates), m_rationale->text().trimmed()),
+        ArticleDocument::Part::Gold);
 }
 
 } // namespace fourfold

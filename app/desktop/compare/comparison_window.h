@@ -12,6 +12,7 @@
 #include "core/model/gold_judgement.h"
 
 #include <QMainWindow>
+#include <QPointer>
 
 #include <memory>
 
@@ -98,7 +99,10 @@ private:
     void refreshAnswers();
     void updateActions();
     void showMessage(const QString &text, bool error);
-    bool push(std::unique_ptr<Edit> edit);
+    // Applies `edit` through the session; `touched`: the parts of the article it changes.
+    bool push(std::unique_ptr<Edit> edit, ArticleDocument::Parts touched);
+    // Whether the session's comparison document holds the article shown.
+    bool isArticleOpen() const;
     ComparisonFilter filter() const;
     bool isOpenDisagreement(const Passage &p) const;
     QString coderName(CoderId id) const;
@@ -106,9 +110,8 @@ private:
     std::vector<GoldId> selectedGold() const;
 
     CodingSession *m_session;
-    ArticleId m_article;
-    Article m_articleData;
-    std::vector<Coder> m_articleCoders;
+    QPointer<CodingSession> m_sessionAlive;
+    ArticleId m_article; // the article shown, held by the session's comparisonDocument()
     Comparison m_comparison;
     int m_current = -1;
     std::vector<Coder> m_coders;
