@@ -38,11 +38,10 @@ QStringList commonArguments(const ReportOptions &options, bool bootstrap)
     return args;
 }
 
-// What `fourfold-cli agree --json` prints for one analysis of the run; with `matching` (the span
-// matching of the selection, the same for every function) the diagnostics are added as
-// `agree --diagnostics` writes them.
-Result<QJsonObject> agreeJson(const AgreementRun &run, const AnalysisRequest &request,
-    const ReportOptions &options, const SpanMatching *matching = nullptr)
+// One table analysis of the run, as `fourfold-cli agree` computes it; with `diagnostics` also
+// alpha without each coder and each article (`agree --diagnostics`). Fails with the run's error.
+Status analyseInto(ReportAnalysis &analysis, const AgreementRun &run,
+    const AnalysisRequest &request, const ReportOptions &options, bool diagnostics = false)
 {
     AgreementOptions agreementOptions;
     agreementOptions.bootstrapReplicates = options.bootstrapReplicates;
@@ -50,15 +49,14 @@ Result<QJsonObject> agreeJson(const AgreementRun &run, const AnalysisRequest &re
     auto analysed = run.analyse(request, agreementOptions);
     if (!analysed)
         return std::unexpected(analysed.error());
-    QJsonObject json = agreementJson(analysed->report);
-    if (!matching)
-        return json;
-    auto costs = leaveOneOutCosts(*analysed);
-    if (!costs)
-        return std::unexpected(costs.error());
-    json.insert(
-        QStringLiteral("diagnostics"), diagnosticsJson(costs->coders, costs->articles, matching));
-    return json;
+    if (diagnostics) {
+        auto costs = leaveOneOutCosts(*analysed);
+        if (!costs)
+            return std::unexpected(costs.error());
+        analysis.diagnostics = std::move(*costs);
+    }
+    analysis.agreement = std::move(analysed->report);
+    return {};
 }
 
 // "The 9 articles were drawn as a simple random sample (seed 7) from 40 articles on 2026-…".
@@ -91,6 +89,20 @@ const ReportAnalysis *ReportData::analysis(const QString &id) const
 }
 
 namespace {
+
+// What `fourfold-cli agree --json` prints for `a` (without the "left_out" of the selection, which
+// the report's JSON holds once).
+QJsonObject agreeJson(const ReportAnalysis &a, const std::optional<SpanMatching> &matching)
+{
+    if (a.continuum)
+        return continuumJson(*a.continuum);
+    QJsonObject json = a.agreement ? agreementJson(*a.agreement) : QJsonObject {};
+    if (a.diagnostics)
+        json.insert(QStringLiteral("diagnostics"),
+            diagnosticsJson(
+                a.diagnostics->coders, a.diagnostics->articles, matching ? &*matching : nullptr));
+    return json;
+}
 
 // The saved analysis in the report's JSON (null when there is none).
 QJsonValue framesJson(
@@ -126,7 +138,7 @@ QJsonObject ReportData::toJson() const
             {QStringLiteral("kind"), a.kind},
             {QStringLiteral("agree_arguments"), QJsonArray::fromStringList(a.agreeArguments)}};
         if (a.error.isEmpty())
-            o.insert(QStringLiteral("result"), a.result);
+            o.insert(QStringLiteral("result"), agreeJson(a, matching));
         else
             o.insert(QStringLiteral("error"), a.error);
         analysisArray.append(o);
@@ -217,76 +229,82 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     auto matching = run->matching();
     if (!matching)
         return std::unexpected(matching.error());
+    d.matching = std::move(*matching);
     // The four functions, one binary variable each, then all four as one set-valued variable.
     for (FramingFunction f : kFramingFunctions) {
-        AnalysisRequest r;
-        r.unit = options.unit;
-        r.function = f;
-        auto json = agreeJson(*run, r, options, &*matching);
-        if (!json)
-            return std::unexpected(json.error());
-        d.analyses.push_back({QStringLiteral("function-%1").arg(functionKey(f)),
+        ReportAnalysis a {QStringLiteral("function-%1").arg(functionKey(f)),
             functionLabel(texts, f), functionLabel(texts, f), QStringLiteral("function"),
             QStringList {QStringLiteral("--unit"), unitKindKey(options.unit),
                 QStringLiteral("--function"), functionKey(f), QStringLiteral("--diagnostics")}
                 + common,
-            *json, {}});
-    }
-    {
+            {}, {}, {}, {}};
         AnalysisRequest r;
         r.unit = options.unit;
-        auto json = agreeJson(*run, r, options);
-        if (!json)
-            return std::unexpected(json.error());
-        d.analyses.push_back({QStringLiteral("functions"),
+        r.function = f;
+        FOURFOLD_TRY_STATUS(analyseInto(a, *run, r, options, true));
+        d.analyses.push_back(std::move(a));
+    }
+    {
+        ReportAnalysis a {QStringLiteral("functions"),
             ReportDataText::tr("All four functions (MASI)"), ReportDataText::tr("All four (MASI)"),
             QStringLiteral("functions"),
-            QStringList {QStringLiteral("--unit"), unitKindKey(options.unit)} + common, *json, {}});
+            QStringList {QStringLiteral("--unit"), unitKindKey(options.unit)} + common, {}, {}, {},
+            {}};
+        AnalysisRequest r;
+        r.unit = options.unit;
+        FOURFOLD_TRY_STATUS(analyseInto(a, *run, r, options));
+        d.analyses.push_back(std::move(a));
     }
     // Article-level items and the spans' choice attributes: their own errors do not stop the
     // report (an attribute nobody filled in has no units).
     for (const ArticleItem &item : texts.items) {
-        AnalysisRequest r;
-        r.unit = UnitKind::Article;
-        r.item = item.key;
-        auto json = agreeJson(*run, r, options);
-        d.analyses.push_back({QStringLiteral("item-%1").arg(item.key),
+        ReportAnalysis a {QStringLiteral("item-%1").arg(item.key),
             item.question.isEmpty() ? item.key : item.question,
             QString(item.key).replace(QLatin1Char('_'), QLatin1Char(' ')), QStringLiteral("item"),
             QStringList {QStringLiteral("--unit"), QStringLiteral("article"),
                 QStringLiteral("--item"), item.key}
                 + common,
-            json ? *json : QJsonObject {}, json ? QString() : json.error().message});
+            {}, {}, {}, {}};
+        AnalysisRequest r;
+        r.unit = UnitKind::Article;
+        r.item = item.key;
+        if (Status done = analyseInto(a, *run, r, options); !done)
+            a.error = done.error().message;
+        d.analyses.push_back(std::move(a));
     }
     for (FramingFunction f : kFramingFunctions)
-        for (const AttributeSpec &a : texts.definition(f).attributes) {
-            if (a.type != AttributeSpec::Type::Choice)
+        for (const AttributeSpec &spec : texts.definition(f).attributes) {
+            if (spec.type != AttributeSpec::Type::Choice)
                 continue;
+            ReportAnalysis a {QStringLiteral("attribute-%1-%2").arg(functionKey(f), spec.key),
+                QStringLiteral("%1: %2").arg(
+                    functionLabel(texts, f), spec.label.isEmpty() ? spec.key : spec.label),
+                QStringLiteral("%1: %2").arg(functionKey(f), spec.key), QStringLiteral("attribute"),
+                QStringList {QStringLiteral("--unit"), QStringLiteral("span"),
+                    QStringLiteral("--function"), functionKey(f), QStringLiteral("--attribute"),
+                    spec.key}
+                    + common,
+                {}, {}, {}, {}};
             AnalysisRequest r;
             r.unit = UnitKind::Span;
             r.function = f;
-            r.attribute = a.key;
-            auto json = agreeJson(*run, r, options);
-            d.analyses.push_back({QStringLiteral("attribute-%1-%2").arg(functionKey(f), a.key),
-                QStringLiteral("%1: %2").arg(
-                    functionLabel(texts, f), a.label.isEmpty() ? a.key : a.label),
-                QStringLiteral("%1: %2").arg(functionKey(f), a.key), QStringLiteral("attribute"),
-                QStringList {QStringLiteral("--unit"), QStringLiteral("span"),
-                    QStringLiteral("--function"), functionKey(f), QStringLiteral("--attribute"),
-                    a.key}
-                    + common,
-                json ? *json : QJsonObject {}, json ? QString() : json.error().message});
+            r.attribute = spec.key;
+            if (Status done = analyseInto(a, *run, r, options); !done)
+                a.error = done.error().message;
+            d.analyses.push_back(std::move(a));
         }
     {
+        ReportAnalysis a {QStringLiteral("continuum"), ReportDataText::tr("Spans on the continuum"),
+            ReportDataText::tr("continuum"), QStringLiteral("continuum"),
+            QStringList {QStringLiteral("--unit"), QStringLiteral("continuum")}
+                + commonArguments(options, false),
+            {}, {}, {}, {}};
         auto continuum = run->continuum(std::nullopt);
-        auto json = continuum ? Result<QJsonObject>(continuumJson(*continuum))
-                              : Result<QJsonObject>(std::unexpected(continuum.error()));
-        d.analyses.push_back(
-            {QStringLiteral("continuum"), ReportDataText::tr("Spans on the continuum"),
-                ReportDataText::tr("continuum"), QStringLiteral("continuum"),
-                QStringList {QStringLiteral("--unit"), QStringLiteral("continuum")}
-                    + commonArguments(options, false),
-                json ? *json : QJsonObject {}, json ? QString() : json.error().message});
+        if (continuum)
+            a.continuum = std::move(*continuum);
+        else
+            a.error = continuum.error().message;
+        d.analyses.push_back(std::move(a));
     }
 
     // Who coded how much: the codings that count (the unitizers' rule), for the coders the

@@ -1,7 +1,10 @@
 #pragma once
 // The figures of a reliability report, gathered once from a project: every reliability figure
-// is the JSON that `fourfold-cli agree --json` prints for the same selection, kept together with
-// the agree arguments that reproduce it, so the report and the CLI can never disagree.
+// is a result of the one agreement run (AgreementRun) that `fourfold-cli agree` makes for the
+// same selection, kept as its typed result together with the agree arguments that reproduce it,
+// so the report and the CLI can never disagree. ReportData::toJson() writes them as agree's JSON
+// (for `report --json` and the figures embedded in the HTML report); the report never reads that
+// JSON back.
 
 #include "core/agreement/agreement_run.h"
 #include "core/model/annotation.h"
@@ -38,15 +41,21 @@ struct ReportOptions {
 };
 
 // One call of the agreement engine: its id in the report (e.g. "function-problem"), what it
-// measures, the agree arguments after the project file, and agree's JSON (or why it failed).
+// measures, the agree arguments after the project file, and its result (or why it failed).
 struct ReportAnalysis {
     QString id;
     QString label; // e.g. "Problem definition"
     QString shortLabel; // for charts, e.g. "dominant function", "evaluation: polarity"
     QString kind; // "function", "functions", "item", "attribute", "continuum"
     QStringList agreeArguments;
-    QJsonObject result; // empty when `error` is set
-    QString error;
+    // Every kind but "continuum": the agreement of the table of units (AgreementRun::analyse).
+    std::optional<AgreementReport> agreement;
+    // "function": alpha without each coder and each article (`agree --diagnostics`; the span
+    // matching they are shown with is ReportData::matching, the same for every function).
+    std::optional<LeaveOneOutCosts> diagnostics;
+    // "continuum": unitizing alpha and span agreement per pair (AgreementRun::continuum).
+    std::optional<ContinuumResult> continuum;
+    QString error; // why it was not computed; the results above are then empty
 };
 
 // How much one coder coded in the selection (pseudonym only: names are personal data).
@@ -67,6 +76,9 @@ struct ReportData {
     QString generatedAt; // ISO 8601 UTC
     QString program; // "Fourfold <version>"
     std::vector<ReportAnalysis> analyses;
+    // Span matching over all four functions (function confusion), part of each function
+    // analysis's diagnostics.
+    std::optional<SpanMatching> matching;
     std::vector<ReportCoder> coders;
     int projectArticles = 0; // every article in the project
     int codedArticles = 0; // articles coded by at least one selected coder
@@ -75,7 +87,7 @@ struct ReportData {
     // Articles in progress left out, per coder (empty when taken in or when there are none).
     std::vector<CountedCodings::LeftOut> leftOut;
     QString sampleDraw; // how the reliability sample was drawn, if the project records it
-    QJsonObject drawRecord; // the recorded draw (StudyDesign::drawJson), or empty
+    QJsonObject drawRecord; // the recorded draw (SubsampleDraw::toJson), or empty
     // Gold standard (adjudication) on the selected articles.
     int goldSpans = 0;
     int goldArticles = 0;

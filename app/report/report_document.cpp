@@ -9,7 +9,6 @@
 
 #include <QCoreApplication>
 #include <QFile>
-#include <QJsonArray>
 #include <QJsonDocument>
 #include <QJsonObject>
 
@@ -107,8 +106,7 @@ QString build(const ReportData &d, ReportFlavour flavour)
         // The figures in machine-readable form. In JSON a "<" can only stand inside a string,
         // where \u003c means the same: so no pseudonym or title ("<!--<script", "</script>") can
         // end the element early or switch the HTML parser's script state.
-        QString json =
-            QString::fromUtf8(QJsonDocument(m.reportJson()).toJson(QJsonDocument::Compact));
+        QString json = QString::fromUtf8(QJsonDocument(d.toJson()).toJson(QJsonDocument::Compact));
         json.replace(QLatin1Char('<'), QStringLiteral("\\u003c"));
         html += QStringLiteral("<script type=\"application/json\" id=\"fourfold-figures\">%1"
                                "</script>\n")
@@ -120,42 +118,36 @@ QString build(const ReportData &d, ReportFlavour flavour)
 
 } // namespace
 
-QJsonValue figureValue(const QJsonObject &object, const QString &path)
+QString figureFormatKey(FigureFormat format)
 {
-    QJsonValue v = object;
-    for (const QString &step : path.split(QLatin1Char('.'))) {
-        bool isIndex = false;
-        const int index = step.toInt(&isIndex);
-        if (v.isArray() && isIndex) {
-            const QJsonArray a = v.toArray();
-            if (index < 0 || index >= a.size())
-                return QJsonValue(QJsonValue::Undefined);
-            v = a.at(index);
-        } else if (v.isObject()) {
-            const QJsonObject o = v.toObject();
-            if (!o.contains(step))
-                return QJsonValue(QJsonValue::Undefined);
-            v = o.value(step);
-        } else {
-            return QJsonValue(QJsonValue::Undefined);
-        }
+    switch (format) {
+    case FigureFormat::Percent:
+        return QStringLiteral("pct");
+    case FigureFormat::Integer:
+        return QStringLiteral("int");
+    case FigureFormat::Significant3:
+        return QStringLiteral("g3");
+    case FigureFormat::Fixed3:
+        break;
     }
-    return v;
+    return QStringLiteral("f3");
 }
 
-QString formatFigure(const QJsonValue &value, const QString &format)
+QString formatFigure(const std::optional<double> &value, FigureFormat format)
 {
-    if (format == QLatin1String("text"))
-        return value.isString() ? value.toString() : ReportDocumentText::tr("undefined");
-    if (!value.isDouble())
+    if (!value)
         return ReportDocumentText::tr("undefined");
-    const double v = value.toDouble();
-    if (format == QLatin1String("pct"))
+    const double v = *value;
+    switch (format) {
+    case FigureFormat::Percent:
         return QString::number(v * 100.0, 'f', 1) + QLatin1Char('%');
-    if (format == QLatin1String("int"))
+    case FigureFormat::Integer:
         return QString::number(std::llround(v));
-    if (format == QLatin1String("g3"))
+    case FigureFormat::Significant3:
         return QString::number(v, 'g', 3);
+    case FigureFormat::Fixed3:
+        break;
+    }
     return QString::number(v, 'f', 3);
 }
 
@@ -163,17 +155,22 @@ std::vector<AlphaChartRow> alphaChartRows(const ReportData &data)
 {
     std::vector<AlphaChartRow> rows;
     for (const ReportAnalysis &a : data.analyses) {
-        if (a.kind == QLatin1String("continuum") || !a.error.isEmpty())
+        if (!a.agreement)
             continue;
+        const AgreementReport &r = *a.agreement;
         AlphaChartRow row;
         row.label = a.shortLabel;
         row.colour = reportFunctionColour(a.id);
-        row.alpha = reportNumber(figureValue(a.result, QStringLiteral("alpha.value")));
-        row.pairLow = reportNumber(figureValue(a.result, QStringLiteral("bootstrap.ci95.0")));
-        row.pairHigh = reportNumber(figureValue(a.result, QStringLiteral("bootstrap.ci95.1")));
-        row.unitLow = reportNumber(figureValue(a.result, QStringLiteral("bootstrap_units.ci95.0")));
-        row.unitHigh =
-            reportNumber(figureValue(a.result, QStringLiteral("bootstrap_units.ci95.1")));
+        row.alpha = r.alpha.value;
+        // An interval needs both ends (agree's "ci95" is null otherwise).
+        if (r.pairBootstrap && r.pairBootstrap->ciLow && r.pairBootstrap->ciHigh) {
+            row.pairLow = r.pairBootstrap->ciLow;
+            row.pairHigh = r.pairBootstrap->ciHigh;
+        }
+        if (r.unitBootstrap && r.unitBootstrap->ciLow && r.unitBootstrap->ciHigh) {
+            row.unitLow = r.unitBootstrap->ciLow;
+            row.unitHigh = r.unitBootstrap->ciHigh;
+        }
         rows.push_back(row);
     }
     return rows;
@@ -182,21 +179,20 @@ std::vector<AlphaChartRow> alphaChartRows(const ReportData &data)
 KappaGrid kappaGrid(const ReportData &data)
 {
     KappaGrid grid;
-    std::vector<const ReportAnalysis *> functions;
+    std::vector<const AgreementReport *> functions;
     for (const ReportAnalysis &a : data.analyses)
-        if (a.kind == QLatin1String("function")) {
-            functions.push_back(&a);
+        if (a.kind == QLatin1String("function") && a.agreement) {
+            functions.push_back(&*a.agreement);
             grid.columns << a.id.section(QLatin1Char('-'), 1);
         }
     if (functions.empty())
         return grid;
-    const QJsonArray pairs = functions.front()->result.value(QStringLiteral("pairs")).toArray();
-    for (qsizetype i = 0; i < pairs.size(); ++i) {
-        const QJsonArray names = pairs[i].toObject().value(QStringLiteral("coders")).toArray();
-        grid.rows << QStringLiteral("%1 × %2").arg(names.at(0).toString(), names.at(1).toString());
-        for (const ReportAnalysis *a : functions)
-            grid.cells.push_back(reportNumber(
-                figureValue(a->result, QStringLiteral("pairs.%1.cohen_kappa.value").arg(i))));
+    const AgreementReport &first = *functions.front();
+    for (size_t i = 0; i < first.pairs.size(); ++i) {
+        grid.rows << QStringLiteral("%1 × %2").arg(
+            first.coders.value(first.pairs[i].coderA), first.coders.value(first.pairs[i].coderB));
+        for (const AgreementReport *r : functions)
+            grid.cells.push_back(i < r->pairs.size() ? r->pairs[i].cohenKappa.value : std::nullopt);
     }
     return grid;
 }

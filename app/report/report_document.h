@@ -2,15 +2,18 @@
 // The report as HTML: the method text a paper needs (the items of Lombard, Snyder-Duch &
 // Bracken 2002), the tables and the charts, filled from ReportData. Every figure is written as
 // <span class="fig" data-figure="ANALYSIS:PATH" data-format="FORMAT">text</span>, where PATH
-// is a dotted path into that analysis's agree JSON (or into ReportData::toJson() for ANALYSIS
-// "report") and FORMAT says how the text was made from the value: f3 (three decimals), pct
-// (percent, one decimal), int, g3 (three significant digits), or text.
+// is the figure's dotted path in that analysis's agree JSON (or in ReportData::toJson() for
+// ANALYSIS "report"), so a reader of the embedded figures finds it there; the text is made from
+// the typed result the path names, in FORMAT: f3 (three decimals), pct (percent, one decimal),
+// int, g3 (three significant digits), or text.
 
 #include "app/report/report_charts.h"
 #include "app/report/report_data.h"
 
-#include <QJsonValue>
 #include <QString>
+
+#include <optional>
+#include <vector>
 
 namespace fourfold {
 
@@ -22,14 +25,20 @@ enum class ReportFlavour {
 // The whole document. Never fails: figures that could not be computed say so in words.
 QString reportHtml(const ReportData &data, ReportFlavour flavour);
 
-// The charts' data, taken from the analyses' JSON.
+// How a number figure is written (data-format in the HTML, see above).
+enum class FigureFormat {
+    Fixed3, // "f3"
+    Percent, // "pct"
+    Integer, // "int"
+    Significant3, // "g3"
+};
+// The key of `format` in data-format.
+QString figureFormatKey(FigureFormat format);
+// The text of a number in `format`; "undefined" when there is none.
+QString formatFigure(const std::optional<double> &value, FigureFormat format);
+
+// The charts' data, taken from the analyses' results.
 std::vector<AlphaChartRow> alphaChartRows(const ReportData &data);
 KappaGrid kappaGrid(const ReportData &data);
-
-// The value at dotted `path` ("alpha.value", "pairs.0.cohen_kappa.ci95.1") in `object`;
-// undefined if any step is missing.
-QJsonValue figureValue(const QJsonObject &object, const QString &path);
-// The text of a figure in `format` (see above); "undefined" for null or missing values.
-QString formatFigure(const QJsonValue &value, const QString &format);
 
 } // namespace fourfold

@@ -22,40 +22,50 @@ QColor reportFunctionColour(const QString &analysisId)
     return QColor(0x55, 0x5B, 0x66);
 }
 
-std::optional<double> reportNumber(const QJsonValue &value)
-{
-    return value.isDouble() ? std::optional<double>(value.toDouble()) : std::nullopt;
-}
-
 ReportMarkup::ReportMarkup(const ReportData &data, ReportFlavour flavour)
     : m_d(data)
     , m_flavour(flavour)
-    , m_reportJson(data.toJson())
 { }
 
-QJsonValue ReportMarkup::value(const QString &analysis, const QString &path) const
-{
-    if (analysis == QLatin1String("report"))
-        return figureValue(m_reportJson, path);
-    const ReportAnalysis *a = m_d.analysis(analysis);
-    return a ? figureValue(a->result, path) : QJsonValue(QJsonValue::Undefined);
-}
+namespace {
 
-QString ReportMarkup::fig(const QString &analysis, const QString &path, const QString &format) const
+QString markedFigure(
+    const QString &analysis, const QString &path, const QString &format, const QString &text)
 {
     return QStringLiteral("<span class=\"fig\" data-figure=\"%1:%2\" data-format=\"%3\">%4</span>")
-        .arg(htmlEscaped(analysis), htmlEscaped(path), format,
-            htmlEscaped(formatFigure(value(analysis, path), format)));
+        .arg(htmlEscaped(analysis), htmlEscaped(path), format, htmlEscaped(text));
 }
 
-QString ReportMarkup::interval(const QString &analysis, const QString &key) const
+} // namespace
+
+QString ReportMarkup::fig(const QString &analysis, const QString &path,
+    const std::optional<double> &value, FigureFormat format)
 {
-    if (value(analysis, key + QStringLiteral(".ci95.0")).isUndefined()
-        || !value(analysis, key + QStringLiteral(".ci95")).isArray())
+    return markedFigure(analysis, path, figureFormatKey(format), formatFigure(value, format));
+}
+
+QString ReportMarkup::figText(
+    const QString &analysis, const QString &path, const std::optional<QString> &text)
+{
+    return markedFigure(
+        analysis, path, QStringLiteral("text"), text ? *text : ReportDocumentText::tr("undefined"));
+}
+
+QString ReportMarkup::interval(const QString &analysis, const QString &key,
+    const std::optional<double> &low, const std::optional<double> &high)
+{
+    if (!low || !high)
         return QStringLiteral("–");
     return QStringLiteral("[%1, %2]")
-        .arg(fig(analysis, key + QStringLiteral(".ci95.0"), QStringLiteral("f3")),
-            fig(analysis, key + QStringLiteral(".ci95.1"), QStringLiteral("f3")));
+        .arg(fig(analysis, key + QStringLiteral(".ci95.0"), low, FigureFormat::Fixed3),
+            fig(analysis, key + QStringLiteral(".ci95.1"), high, FigureFormat::Fixed3));
+}
+
+QString ReportMarkup::interval(const QString &analysis, const QString &key,
+    const std::optional<reliability::BootstrapResult> &bootstrap)
+{
+    return bootstrap ? interval(analysis, key, bootstrap->ciLow, bootstrap->ciHigh)
+                     : QStringLiteral("–");
 }
 
 QString ReportMarkup::verdictClass(const std::optional<double> &alpha)

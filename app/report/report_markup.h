@@ -8,8 +8,6 @@
 #include "app/report/report_document.h"
 
 #include <QColor>
-#include <QJsonObject>
-#include <QJsonValue>
 #include <QSizeF>
 #include <QString>
 
@@ -22,9 +20,6 @@ namespace fourfold {
 // desktop's function_style), or a neutral for the set-valued variable and the rest.
 QColor reportFunctionColour(const QString &analysisId);
 
-// The number in `value`, or none when it is not a number.
-std::optional<double> reportNumber(const QJsonValue &value);
-
 class ReportMarkup
 {
 public:
@@ -33,15 +28,20 @@ public:
     const ReportData &data() const { return m_d; }
     ReportFlavour flavour() const { return m_flavour; }
     bool print() const { return m_flavour == ReportFlavour::Print; }
-    // ReportData::toJson(), made once: the figures of ANALYSIS "report" and the embedded JSON.
-    const QJsonObject &reportJson() const { return m_reportJson; }
 
-    // The value at `path` of `analysis` ("report": the report's own JSON); undefined if missing.
-    QJsonValue value(const QString &analysis, const QString &path) const;
-    // A figure as marked-up text (see report_document.h).
-    QString fig(const QString &analysis, const QString &path, const QString &format) const;
-    // "[low, high]" of the 95% interval at `key`.ci95, or "–" when there is none.
-    QString interval(const QString &analysis, const QString &key) const;
+    // A figure as marked-up text (see report_document.h): `value` in `format`, marked as the
+    // value at `path` of `analysis` ("report": the report's own JSON).
+    static QString fig(const QString &analysis, const QString &path,
+        const std::optional<double> &value, FigureFormat format);
+    // A text figure; "undefined" when there is none.
+    static QString figText(
+        const QString &analysis, const QString &path, const std::optional<QString> &text);
+    // "[low, high]" of a 95% interval, marked as `key`.ci95.0 and .1, or "–" without both ends.
+    static QString interval(const QString &analysis, const QString &key,
+        const std::optional<double> &low, const std::optional<double> &high);
+    // The same for a bootstrap's interval at `key` ("–" without the bootstrap).
+    static QString interval(const QString &analysis, const QString &key,
+        const std::optional<reliability::BootstrapResult> &bootstrap);
     // The CSS class of alpha's verdict (Krippendorff 2004, §12.2, as alphaBand()).
     static QString verdictClass(const std::optional<double> &alpha);
     // The verdict in one word, for the printed table.
@@ -62,7 +62,6 @@ public:
 private:
     const ReportData &m_d;
     ReportFlavour m_flavour;
-    QJsonObject m_reportJson;
 };
 
 } // namespace fourfold

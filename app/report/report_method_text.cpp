@@ -20,9 +20,9 @@ QString reportMethodText(const ReportMarkup &m)
         amounts << ReportDocumentText::tr("%1 coded %2 articles (%3 spans)")
                        .arg(htmlEscaped(c.pseudonym),
                            m.fig(QStringLiteral("report"), base + QStringLiteral("articles"),
-                               QStringLiteral("int")),
-                           m.fig(QStringLiteral("report"), base + QStringLiteral("spans"),
-                               QStringLiteral("int")));
+                               c.articles, FigureFormat::Integer),
+                           m.fig(QStringLiteral("report"), base + QStringLiteral("spans"), c.spans,
+                               FigureFormat::Integer));
     }
     QString html = QStringLiteral("<div class=\"method\">");
 
@@ -32,12 +32,12 @@ QString reportMethodText(const ReportMarkup &m)
         "that two or more coders coded independently (%2 of them by all %3 coders), "
         "out of %4 articles in the project. ")
                     .arg(m.fig(QStringLiteral("report"), QStringLiteral("sample.shared_articles"),
-                             QStringLiteral("int")),
+                             d.sharedArticles, FigureFormat::Integer),
                         m.fig(QStringLiteral("report"), QStringLiteral("sample.all_coder_articles"),
-                            QStringLiteral("int")),
+                            d.allCoderArticles, FigureFormat::Integer),
                         QString::number(coders),
                         m.fig(QStringLiteral("report"), QStringLiteral("sample.project_articles"),
-                            QStringLiteral("int")));
+                            d.projectArticles, FigureFormat::Integer));
     p += d.sampleDraw.isEmpty()
         ? ReportDocumentText::tr("The sample was drawn %1. ")
               .arg(ReportMarkup::fillIn(ReportDocumentText::tr(
@@ -67,9 +67,9 @@ QString reportMethodText(const ReportMarkup &m)
             "Before the reliability coding, coders trained on %1 articles and coded a pilot "
             "of %2 articles; %3. ")
                  .arg(m.fig(QStringLiteral("report"), QStringLiteral("sample.training_articles"),
-                          QStringLiteral("int")),
+                          d.trainingArticles, FigureFormat::Integer),
                      m.fig(QStringLiteral("report"), QStringLiteral("sample.pilot_articles"),
-                         QStringLiteral("int")),
+                         d.pilotArticles, FigureFormat::Integer),
                      ReportMarkup::fillIn(ReportDocumentText::tr("hours of training")));
     else
         p += ReportDocumentText::tr("Coder training: %1. ")
@@ -80,12 +80,16 @@ QString reportMethodText(const ReportMarkup &m)
     // Index and why, value per variable (items 5 and 6).
     QStringList values;
     for (const ReportAnalysis *a : m.ofKind(QStringLiteral("function"))) {
+        if (!a->agreement)
+            continue;
+        const AgreementReport &r = *a->agreement;
         QString v = ReportDocumentText::tr("%1 α = %2")
                         .arg(htmlEscaped(a->label.toLower()),
-                            m.fig(a->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
-        if (a->result.contains(QStringLiteral("bootstrap_units")))
+                            m.fig(a->id, QStringLiteral("alpha.value"), r.alpha.value,
+                                FigureFormat::Fixed3));
+        if (r.unitBootstrap)
             v += ReportDocumentText::tr(" (95% CI %1)")
-                     .arg(m.interval(a->id, QStringLiteral("bootstrap_units")));
+                     .arg(m.interval(a->id, QStringLiteral("bootstrap_units"), r.unitBootstrap));
         values << v;
     }
     const ReportAnalysis *all = d.analysis(QStringLiteral("functions"));
@@ -99,12 +103,13 @@ QString reportMethodText(const ReportMarkup &m)
         "number of coders, missing data and any level of measurement (Hayes & "
         "Krippendorff, 2007). "));
     p += ReportDocumentText::tr("Alpha was %1").arg(values.join(QStringLiteral("; ")));
-    if (all)
+    if (all && all->agreement)
         p += ReportDocumentText::tr(
             "; for the set of functions per %1, compared with the MASI distance (Passonneau, "
             "2006), α = %2")
                  .arg(m.unitWord(1),
-                     m.fig(all->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
+                     m.fig(all->id, QStringLiteral("alpha.value"), all->agreement->alpha.value,
+                         FigureFormat::Fixed3));
     p += QStringLiteral(". ");
     if (d.options.bootstrapReplicates > 0)
         p += htmlEscaped(ReportDocumentText::tr(
@@ -124,13 +129,11 @@ QString reportMethodText(const ReportMarkup &m)
     QStringList others;
     for (const QString &kind : {QStringLiteral("item"), QStringLiteral("attribute")})
         for (const ReportAnalysis *a : m.ofKind(kind))
-            if (a->error.isEmpty())
+            if (a->agreement)
                 others << ReportDocumentText::tr("%1 (%2) α = %3")
-                              .arg(htmlEscaped(a->label),
-                                  htmlEscaped(
-                                      m.value(a->id, QStringLiteral("alpha.level")).toString()),
-                                  m.fig(
-                                      a->id, QStringLiteral("alpha.value"), QStringLiteral("f3")));
+                              .arg(htmlEscaped(a->label), htmlEscaped(a->agreement->scale),
+                                  m.fig(a->id, QStringLiteral("alpha.value"),
+                                      a->agreement->alpha.value, FigureFormat::Fixed3));
     if (!others.isEmpty())
         html += QStringLiteral("<p>%1</p>")
                     .arg(ReportDocumentText::tr("For the other variables alpha was: %1.")
@@ -142,36 +145,37 @@ QString reportMethodText(const ReportMarkup &m)
             "Disagreements were resolved by adjudication into a separate gold standard: %1 "
             "spans on %2 articles, decided by %3, %4 of them with a written rationale. The "
             "independent codings were kept unchanged; every figure above comes from them. ")
-                .arg(m.fig(QStringLiteral("report"), QStringLiteral("gold.spans"),
-                         QStringLiteral("int")),
-                    m.fig(QStringLiteral("report"), QStringLiteral("gold.articles"),
-                        QStringLiteral("int")),
+                .arg(m.fig(QStringLiteral("report"), QStringLiteral("gold.spans"), d.goldSpans,
+                         FigureFormat::Integer),
+                    m.fig(QStringLiteral("report"), QStringLiteral("gold.articles"), d.goldArticles,
+                        FigureFormat::Integer),
                     htmlEscaped(d.goldDeciders.join(QStringLiteral(", "))),
                     m.fig(QStringLiteral("report"), QStringLiteral("gold.with_rationale"),
-                        QStringLiteral("int")));
+                        d.goldWithRationale, FigureFormat::Integer));
         if (d.goldAnswers > 0)
             p += ReportDocumentText::tr(
                 "Answers to article-level items were adjudicated as well: %1 gold answers on %2 "
                 "articles, %3 of them with a written rationale. ")
                      .arg(m.fig(QStringLiteral("report"), QStringLiteral("gold.answers"),
-                              QStringLiteral("int")),
+                              d.goldAnswers, FigureFormat::Integer),
                          m.fig(QStringLiteral("report"), QStringLiteral("gold.answer_articles"),
-                             QStringLiteral("int")),
+                             d.goldAnswerArticles, FigureFormat::Integer),
                          m.fig(QStringLiteral("report"),
-                             QStringLiteral("gold.answers_with_rationale"), QStringLiteral("int")));
+                             QStringLiteral("gold.answers_with_rationale"),
+                             d.goldAnswersWithRationale, FigureFormat::Integer));
     } else if (d.goldAnswers > 0) {
         p = ReportDocumentText::tr(
             "Disagreements on article-level items were resolved by adjudication into a separate "
             "gold standard: %1 gold answers on %2 articles, decided by %3, %4 of them with a "
             "written rationale. The independent codings were kept unchanged; every figure above "
             "comes from them. ")
-                .arg(m.fig(QStringLiteral("report"), QStringLiteral("gold.answers"),
-                         QStringLiteral("int")),
+                .arg(m.fig(QStringLiteral("report"), QStringLiteral("gold.answers"), d.goldAnswers,
+                         FigureFormat::Integer),
                     m.fig(QStringLiteral("report"), QStringLiteral("gold.answer_articles"),
-                        QStringLiteral("int")),
+                        d.goldAnswerArticles, FigureFormat::Integer),
                     htmlEscaped(d.goldDeciders.join(QStringLiteral(", "))),
                     m.fig(QStringLiteral("report"), QStringLiteral("gold.answers_with_rationale"),
-                        QStringLiteral("int")));
+                        d.goldAnswersWithRationale, FigureFormat::Integer));
     } else {
         p = ReportDocumentText::tr("No adjudication is recorded in the project yet: %1. ")
                 .arg(ReportMarkup::fillIn(ReportDocumentText::tr(
@@ -180,14 +184,15 @@ QString reportMethodText(const ReportMarkup &m)
     }
     p += ReportDocumentText::tr("Coding followed version %1 of the codebook (“%2”)")
              .arg(m.fig(QStringLiteral("report"), QStringLiteral("codebook.version"),
-                      QStringLiteral("int")),
+                      d.codebookNumber, FigureFormat::Integer),
                  htmlEscaped(d.codebookName));
     if (d.codingsOtherVersion > 0)
         p += ReportDocumentText::tr("; %1 of %2 codings were made under an earlier version")
                  .arg(m.fig(QStringLiteral("report"),
-                          QStringLiteral("codebook.codings_other_version"), QStringLiteral("int")),
+                          QStringLiteral("codebook.codings_other_version"), d.codingsOtherVersion,
+                          FigureFormat::Integer),
                      m.fig(QStringLiteral("report"), QStringLiteral("codebook.codings"),
-                         QStringLiteral("int")));
+                         d.codingsTotal, FigureFormat::Integer));
     p += ReportDocumentText::tr(", which is available at %1.")
              .arg(ReportMarkup::fillIn(ReportDocumentText::tr("where readers can obtain it")));
     html += QStringLiteral("<p>%1</p>").arg(p);

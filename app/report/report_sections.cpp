@@ -3,8 +3,6 @@
 #include "app/report/report_text.h"
 
 #include <QCoreApplication>
-#include <QJsonArray>
-#include <QJsonObject>
 
 #include <array>
 
@@ -47,8 +45,9 @@ QString reportVariableTable(const ReportMarkup &m)
                         htmlEscaped(ReportDocumentText::tr("not computed: %1").arg(a.error)));
             continue;
         }
-        const auto alpha = reportNumber(m.value(a.id, QStringLiteral("alpha.value")));
-        const QString level = htmlEscaped(m.value(a.id, QStringLiteral("alpha.level")).toString());
+        const AgreementReport &r = *a.agreement;
+        const std::optional<double> alpha = r.alpha.value;
+        const QString level = htmlEscaped(r.scale);
         const QString name =
             (a.kind == QLatin1String("function") || a.kind == QLatin1String("functions")
                     ? m.chip(a.id)
@@ -60,17 +59,19 @@ QString reportVariableTable(const ReportMarkup &m)
         html += QStringLiteral("<td class=\"num\">%1</td><td class=\"num\">%2</td>"
                                "<td class=\"num\"><b>%3</b></td><td class=\"num\">%4</td>"
                                "<td class=\"num\">%5</td><td class=\"num\">%6</td>")
-                    .arg(m.fig(a.id, QStringLiteral("units"), QStringLiteral("int")),
-                        m.fig(a.id, QStringLiteral("pairable_values"), QStringLiteral("int")),
-                        m.fig(a.id, QStringLiteral("alpha.value"), QStringLiteral("f3")),
-                        m.interval(a.id, QStringLiteral("bootstrap_units")),
-                        m.interval(a.id, QStringLiteral("bootstrap")),
-                        m.fig(a.id, QStringLiteral("percent_agreement"), QStringLiteral("pct")));
+                    .arg(m.fig(a.id, QStringLiteral("units"), r.units, FigureFormat::Integer),
+                        m.fig(a.id, QStringLiteral("pairable_values"), r.alpha.pairableValues,
+                            FigureFormat::Integer),
+                        m.fig(a.id, QStringLiteral("alpha.value"), alpha, FigureFormat::Fixed3),
+                        m.interval(a.id, QStringLiteral("bootstrap_units"), r.unitBootstrap),
+                        m.interval(a.id, QStringLiteral("bootstrap"), r.pairBootstrap),
+                        m.fig(a.id, QStringLiteral("percent_agreement"), r.percentAgreement.value,
+                            FigureFormat::Percent));
         html +=
             QStringLiteral("<td class=\"%1\">%2</td></tr>")
                 .arg(ReportMarkup::verdictClass(alpha),
                     print ? htmlEscaped(ReportMarkup::shortVerdict(alpha))
-                          : m.fig(a.id, QStringLiteral("alpha.verdict"), QStringLiteral("text")));
+                          : m.figText(a.id, QStringLiteral("alpha.verdict"), alphaVerdict(alpha)));
     }
     html += QStringLiteral("</table>");
     html += QStringLiteral("<p class=\"note\">%1</p>")
@@ -111,19 +112,20 @@ QString reportSampleSize(const ReportMarkup &m)
                     htmlEscaped(ReportDocumentText::tr("Minimum for α ≥ 0.800")),
                     htmlEscaped(ReportDocumentText::tr("Enough?")));
     for (const ReportAnalysis &a : d.analyses) {
-        if (!a.result.contains(QStringLiteral("sample_size")))
+        if (!a.agreement || !a.agreement->minimumValues)
             continue;
-        const int have = m.value(a.id, QStringLiteral("sample_size.pairable_values")).toInt();
-        const int need = m.value(a.id, QStringLiteral("sample_size.minimum_values")).toInt();
+        const AgreementReport &r = *a.agreement;
+        const double have = r.alpha.pairableValues;
+        const int need = *r.minimumValues;
         html += QStringLiteral("<tr><td>%1</td><td class=\"num\">%2</td><td class=\"num\">%3</td>"
                                "<td class=\"num\">%4</td><td class=\"%5\">%6</td></tr>")
                     .arg(htmlEscaped(a.label),
-                        m.fig(a.id, QStringLiteral("sample_size.pairable_values"),
-                            QStringLiteral("int")),
+                        m.fig(a.id, QStringLiteral("sample_size.pairable_values"), have,
+                            FigureFormat::Integer),
                         m.fig(a.id, QStringLiteral("sample_size.rarest_proportion"),
-                            QStringLiteral("pct")),
-                        m.fig(a.id, QStringLiteral("sample_size.minimum_values"),
-                            QStringLiteral("int")),
+                            r.rarestProportion, FigureFormat::Percent),
+                        m.fig(a.id, QStringLiteral("sample_size.minimum_values"), need,
+                            FigureFormat::Integer),
                         have >= need ? QStringLiteral("ok") : QStringLiteral("low"),
                         htmlEscaped(have >= need ? ReportDocumentText::tr("yes")
                                                  : ReportDocumentText::tr("too few values")));
@@ -154,18 +156,21 @@ QString reportCoderTable(const ReportMarkup &m)
     html += QStringLiteral("<th class=\"num\">%1</th></tr>")
                 .arg(htmlEscaped(ReportDocumentText::tr("Answers")));
     for (size_t i = 0; i < d.coders.size(); ++i) {
+        const ReportCoder &c = d.coders[i];
         const QString base = QStringLiteral("coders.%1.").arg(i);
-        auto cell = [&](const QString &key) {
+        auto cell = [&](const QString &key, int value) {
             return QStringLiteral("<td class=\"num\">%1</td>")
-                .arg(m.fig(QStringLiteral("report"), base + key, QStringLiteral("int")));
+                .arg(m.fig(QStringLiteral("report"), base + key, value, FigureFormat::Integer));
         };
         html += QStringLiteral("<tr><td><b>%1</b></td><td>%2</td>")
-                    .arg(htmlEscaped(d.coders[i].pseudonym), htmlEscaped(d.coders[i].role));
-        html += cell(QStringLiteral("articles")) + cell(QStringLiteral("shared_articles"))
-            + cell(QStringLiteral("spans"));
+                    .arg(htmlEscaped(c.pseudonym), htmlEscaped(c.role));
+        html += cell(QStringLiteral("articles"), c.articles)
+            + cell(QStringLiteral("shared_articles"), c.reliabilityArticles)
+            + cell(QStringLiteral("spans"), c.spans);
         for (FramingFunction f : kFramingFunctions)
-            html += cell(QStringLiteral("spans_per_function.") + functionKey(f));
-        html += cell(QStringLiteral("answers")) + QStringLiteral("</tr>");
+            html += cell(
+                QStringLiteral("spans_per_function.") + functionKey(f), c.perFunction[size_t(f)]);
+        html += cell(QStringLiteral("answers"), c.answers) + QStringLiteral("</tr>");
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
                 .arg(htmlEscaped(ReportDocumentText::tr(
@@ -196,23 +201,27 @@ QString reportPairSection(const ReportMarkup &m)
                     htmlEscaped(ReportDocumentText::tr("Agreement")),
                     htmlEscaped(ReportDocumentText::tr("95% CI")));
     for (const ReportAnalysis *a : m.ofKind(QStringLiteral("function"))) {
-        const QJsonArray pairs = a->result.value(QStringLiteral("pairs")).toArray();
-        for (qsizetype i = 0; i < pairs.size(); ++i) {
+        if (!a->agreement)
+            continue;
+        const AgreementReport &r = *a->agreement;
+        for (size_t i = 0; i < r.pairs.size(); ++i) {
+            const PairAgreement &pair = r.pairs[i];
             const QString base = QStringLiteral("pairs.%1.").arg(i);
-            const QJsonArray names = pairs[i].toObject().value(QStringLiteral("coders")).toArray();
-            html +=
-                QStringLiteral("<tr><td>%1%2</td><td>%3 × %4</td><td class=\"num\">%5</td>"
-                               "<td class=\"num\">%6</td><td class=\"num\">%7</td>"
-                               "<td class=\"num\">%8</td></tr>")
-                    .arg(i == 0 ? m.chip(a->id) : QString(),
-                        i == 0 ? htmlEscaped(a->label) : QString(),
-                        htmlEscaped(names.at(0).toString()), htmlEscaped(names.at(1).toString()),
-                        m.fig(a->id, base + QStringLiteral("units"), QStringLiteral("int")),
-                        m.fig(a->id, base + QStringLiteral("percent_agreement"),
-                            QStringLiteral("pct")),
-                        m.fig(a->id, base + QStringLiteral("cohen_kappa.value"),
-                            QStringLiteral("f3")),
-                        m.interval(a->id, base + QStringLiteral("cohen_kappa")));
+            html += QStringLiteral("<tr><td>%1%2</td><td>%3 × %4</td><td class=\"num\">%5</td>"
+                                   "<td class=\"num\">%6</td><td class=\"num\">%7</td>"
+                                   "<td class=\"num\">%8</td></tr>")
+                        .arg(i == 0 ? m.chip(a->id) : QString(),
+                            i == 0 ? htmlEscaped(a->label) : QString(),
+                            htmlEscaped(r.coders.value(pair.coderA)),
+                            htmlEscaped(r.coders.value(pair.coderB)),
+                            m.fig(a->id, base + QStringLiteral("units"), pair.units,
+                                FigureFormat::Integer),
+                            m.fig(a->id, base + QStringLiteral("percent_agreement"),
+                                pair.percentAgreement.value, FigureFormat::Percent),
+                            m.fig(a->id, base + QStringLiteral("cohen_kappa.value"),
+                                pair.cohenKappa.value, FigureFormat::Fixed3),
+                            m.interval(a->id, base + QStringLiteral("cohen_kappa"),
+                                pair.cohenKappa.ciLow, pair.cohenKappa.ciHigh));
         }
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
@@ -236,21 +245,29 @@ QString reportOtherCoefficients(const ReportMarkup &m)
                     htmlEscaped(ReportDocumentText::tr("Cohen's κ")),
                     htmlEscaped(ReportDocumentText::tr("Scott's π")),
                     htmlEscaped(ReportDocumentText::tr("Bennett's S")));
-    auto cell = [&](const ReportAnalysis &a, const QString &path) {
+    // A coefficient whose assumptions do not hold is left out of agree's JSON: n/a.
+    auto cell = [&](const ReportAnalysis &a, const QString &path, bool computed,
+                    const std::optional<double> &value) {
         return QStringLiteral("<td class=\"num\">%1</td>")
-            .arg(a.result.contains(path.section(QLatin1Char('.'), 0, 0))
-                    ? m.fig(a.id, path, QStringLiteral("f3"))
-                    : htmlEscaped(ReportDocumentText::tr("n/a")));
+            .arg(computed ? m.fig(a.id, path, value, FigureFormat::Fixed3)
+                          : htmlEscaped(ReportDocumentText::tr("n/a")));
     };
     for (const ReportAnalysis &a : d.analyses) {
         if (a.kind != QLatin1String("function") && a.kind != QLatin1String("item"))
             continue;
-        if (!a.error.isEmpty())
+        if (!a.agreement)
             continue;
+        const AgreementReport &r = *a.agreement;
         html += QStringLiteral("<tr><td>%1</td>").arg(htmlEscaped(a.label));
-        html += cell(a, QStringLiteral("fleiss_kappa.value"))
-            + cell(a, QStringLiteral("light_kappa")) + cell(a, QStringLiteral("cohen_kappa.value"))
-            + cell(a, QStringLiteral("scott_pi")) + cell(a, QStringLiteral("bennett_s"))
+        html += cell(a, QStringLiteral("fleiss_kappa.value"), r.fleissKappa.has_value(),
+                    r.fleissKappa ? r.fleissKappa->value : std::nullopt)
+            + cell(a, QStringLiteral("light_kappa"), true, r.lightKappa.value)
+            + cell(a, QStringLiteral("cohen_kappa.value"), r.cohenKappa.has_value(),
+                r.cohenKappa ? r.cohenKappa->value : std::nullopt)
+            + cell(a, QStringLiteral("scott_pi"), r.scottPi.has_value(),
+                r.scottPi ? r.scottPi->value : std::nullopt)
+            + cell(a, QStringLiteral("bennett_s"), r.bennettS.has_value(),
+                r.bennettS ? r.bennettS->value : std::nullopt)
             + QStringLiteral("</tr>");
     }
     html += QStringLiteral("</table><p class=\"note\">%1</p>")
@@ -271,15 +288,15 @@ QString reportContinuumSection(const ReportMarkup &m)
     if (!a->error.isEmpty())
         return QStringLiteral("<p class=\"note\">%1</p>")
             .arg(htmlEscaped(ReportDocumentText::tr("Not computed: %1").arg(a->error)));
-    QString html =
-        QStringLiteral("<p>%1</p>")
-            .arg(ReportDocumentText::tr(
-                "Unitizing alpha (Krippendorff, 2004) compares where the coders "
-                "put their spans, character by character, on the %1 articles "
-                "that every coder coded (%2 characters laid end to end).")
-                     .arg(QString::number(
-                              a->result.value(QStringLiteral("articles")).toArray().size()),
-                         m.fig(a->id, QStringLiteral("length"), QStringLiteral("int"))));
+    const ContinuumResult &c = *a->continuum;
+    QString html = QStringLiteral("<p>%1</p>")
+                       .arg(ReportDocumentText::tr(
+                           "Unitizing alpha (Krippendorff, 2004) compares where the coders "
+                           "put their spans, character by character, on the %1 articles "
+                           "that every coder coded (%2 characters laid end to end).")
+                                .arg(QString::number(c.data.articles.size()),
+                                    m.fig(a->id, QStringLiteral("length"), double(c.data.length),
+                                        FigureFormat::Integer)));
     html += m.tableOpen();
     html += QStringLiteral("<tr><th>%1</th><th class=\"num\">%2</th><th class=\"num\">%3</th>"
                            "<th class=\"num\">α<sub>U</sub></th><th>%4</th></tr>")
@@ -295,7 +312,14 @@ QString reportContinuumSection(const ReportMarkup &m)
         const QString base = key == QLatin1String("overall")
             ? QStringLiteral("unitizing_alpha.overall.")
             : QStringLiteral("unitizing_alpha.per_function.%1.").arg(key);
-        const auto alpha = reportNumber(m.value(a->id, base + QStringLiteral("value")));
+        // agree names each category by its function key; a function without one has no figures.
+        const qsizetype category = c.categories.indexOf(key);
+        const reliability::UnitizingCategoryResult *u = key == QLatin1String("overall")
+            ? &c.unitizing.overall
+            : category >= 0 && size_t(category) < c.unitizing.perCategory.size()
+            ? &c.unitizing.perCategory[size_t(category)]
+            : nullptr;
+        const std::optional<double> alpha = u ? u->value : std::nullopt;
         html +=
             QStringLiteral("<tr><td>%1%2</td><td class=\"num\">%3</td><td class=\"num\">%4</td>"
                            "<td class=\"num\"><b>%5</b></td><td class=\"%6\">%7</td></tr>")
@@ -305,12 +329,15 @@ QString reportContinuumSection(const ReportMarkup &m)
                     htmlEscaped(
                         key == QLatin1String("overall") ? ReportDocumentText::tr("all four") : key),
                     m.fig(a->id, base + QStringLiteral("observed_disagreement"),
-                        QStringLiteral("g3")),
+                        u ? std::optional(u->observedDisagreement) : std::nullopt,
+                        FigureFormat::Significant3),
                     m.fig(a->id, base + QStringLiteral("expected_disagreement"),
-                        QStringLiteral("g3")),
-                    m.fig(a->id, base + QStringLiteral("value"), QStringLiteral("f3")),
+                        u ? std::optional(u->expectedDisagreement) : std::nullopt,
+                        FigureFormat::Significant3),
+                    m.fig(a->id, base + QStringLiteral("value"), alpha, FigureFormat::Fixed3),
                     ReportMarkup::verdictClass(alpha),
-                    m.fig(a->id, base + QStringLiteral("verdict"), QStringLiteral("text")));
+                    m.figText(a->id, base + QStringLiteral("verdict"),
+                        u ? std::optional(alphaVerdict(alpha)) : std::nullopt));
     }
     html += QStringLiteral("</table>");
     return html;
@@ -320,7 +347,7 @@ QString reportDiagnosticsSection(const ReportMarkup &m)
 {
     const ReportData &d = m.data();
     const std::vector<const ReportAnalysis *> functions = m.ofKind(QStringLiteral("function"));
-    if (functions.empty() || !functions.front()->result.contains(QStringLiteral("diagnostics")))
+    if (functions.empty() || !functions.front()->diagnostics)
         return {};
     QString html = QStringLiteral("<h3>%1</h3>")
                        .arg(htmlEscaped(ReportDocumentText::tr("Alpha without each coder")));
@@ -333,23 +360,25 @@ QString reportDiagnosticsSection(const ReportMarkup &m)
     for (const ReportCoder &c : d.coders) {
         html += QStringLiteral("<tr><td><b>%1</b></td>").arg(htmlEscaped(c.pseudonym));
         for (const ReportAnalysis *a : functions) {
-            const QJsonArray entries =
-                figureValue(a->result, QStringLiteral("diagnostics.leave_one_coder_out")).toArray();
             QString cell = QStringLiteral("–");
-            for (qsizetype i = 0; i < entries.size(); ++i)
-                if (entries[i].toObject().value(QStringLiteral("coder")).toString()
-                    == c.pseudonym) {
+            if (!a->diagnostics) {
+                html += QStringLiteral("<td class=\"num\">%1</td>").arg(cell);
+                continue;
+            }
+            const std::vector<LeaveOneOut> &entries = a->diagnostics->coders;
+            for (size_t i = 0; i < entries.size(); ++i)
+                if (entries[i].name == c.pseudonym) {
                     const QString base =
                         QStringLiteral("diagnostics.leave_one_coder_out.%1.").arg(i);
-                    const double change =
-                        entries[i].toObject().value(QStringLiteral("change")).toDouble();
+                    const std::optional<double> change = entries[i].change;
+                    const bool costs = change && *change > 0;
                     cell = QStringLiteral("%1 <span class=\"%2\">(%3%4)</span>")
                                .arg(m.fig(a->id, base + QStringLiteral("alpha_without"),
-                                        QStringLiteral("f3")),
-                                   change > 0 ? QStringLiteral("low") : QStringLiteral("note"),
-                                   change > 0 ? QStringLiteral("+") : QString(),
-                                   m.fig(a->id, base + QStringLiteral("change"),
-                                       QStringLiteral("f3")));
+                                        entries[i].alpha, FigureFormat::Fixed3),
+                                   costs ? QStringLiteral("low") : QStringLiteral("note"),
+                                   costs ? QStringLiteral("+") : QString(),
+                                   m.fig(a->id, base + QStringLiteral("change"), change,
+                                       FigureFormat::Fixed3));
                 }
             html += QStringLiteral("<td class=\"num\">%1</td>").arg(cell);
         }
@@ -372,45 +401,54 @@ QString reportDiagnosticsSection(const ReportMarkup &m)
                   htmlEscaped(ReportDocumentText::tr("α without it")),
                   htmlEscaped(ReportDocumentText::tr("Change")));
     for (const ReportAnalysis *a : functions) {
-        const QString base = QStringLiteral("diagnostics.leave_one_article_out.0.");
-        if (m.value(a->id, base + QStringLiteral("article")).isUndefined())
+        // The articles come costliest first: the first one.
+        if (!a->diagnostics || a->diagnostics->articles.empty())
             continue;
+        const LeaveOneOut &costliest = a->diagnostics->articles.front();
+        const QString base = QStringLiteral("diagnostics.leave_one_article_out.0.");
         html += QStringLiteral("<tr><td>%1%2</td><td>%3</td><td class=\"num\">%4</td>"
                                "<td class=\"num\">%5</td></tr>")
                     .arg(m.chip(a->id), htmlEscaped(a->label),
-                        m.fig(a->id, base + QStringLiteral("article"), QStringLiteral("text")),
-                        m.fig(a->id, base + QStringLiteral("alpha_without"), QStringLiteral("f3")),
-                        m.fig(a->id, base + QStringLiteral("change"), QStringLiteral("f3")));
+                        m.figText(a->id, base + QStringLiteral("article"), costliest.name),
+                        m.fig(a->id, base + QStringLiteral("alpha_without"), costliest.alpha,
+                            FigureFormat::Fixed3),
+                        m.fig(a->id, base + QStringLiteral("change"), costliest.change,
+                            FigureFormat::Fixed3));
     }
     html += QStringLiteral("</table>");
 
-    // Which function the other coder gave the same passage.
-    const ReportAnalysis *first = functions.front();
-    const QJsonArray rows =
-        figureValue(first->result, QStringLiteral("diagnostics.span_matching.confusion")).toArray();
-    if (rows.isEmpty())
+    // Which function the other coder gave the same passage (the span matching is the same for
+    // every function; agree writes it into each function's diagnostics).
+    if (!d.matching)
         return html;
-    const QStringList columns {QStringLiteral("problem"), QStringLiteral("cause"),
-        QStringLiteral("evaluation"), QStringLiteral("remedy"), QStringLiteral("none")};
+    const FunctionConfusion &confusion = d.matching->confusion;
+    const ReportAnalysis *first = functions.front();
     html += QStringLiteral("<h3>%1</h3>")
                 .arg(htmlEscaped(ReportDocumentText::tr("Function confusion between coders")));
     html += m.tableOpen()
         + QStringLiteral("<tr><th>%1</th>")
               .arg(htmlEscaped(ReportDocumentText::tr("A coder's span")));
+    // The four functions in their order, then "none": the columns of FunctionConfusion.
+    QStringList columns;
+    for (FramingFunction f : kFramingFunctions)
+        columns << functionKey(f);
+    columns << QStringLiteral("none");
     for (const QString &c : columns)
         html += QStringLiteral("<th class=\"num\">%1</th>").arg(htmlEscaped(c));
     html += QStringLiteral("</tr>");
-    for (qsizetype r = 0; r < rows.size(); ++r) {
-        const QString function = rows[r].toObject().value(QStringLiteral("function")).toString();
+    // Rows: a coder's span of each function (row "none" stays empty and is not shown).
+    for (int r = 0; r < int(kFramingFunctions.size()); ++r) {
+        const QString function = columns[r];
         html +=
             QStringLiteral("<tr><td>%1%2</td>")
                 .arg(m.chip(QStringLiteral("function-%1").arg(function)), htmlEscaped(function));
-        for (const QString &c : columns) {
-            const QString path =
-                QStringLiteral("diagnostics.span_matching.confusion.%1.other.%2").arg(r).arg(c);
-            const QString cell = m.fig(first->id, path, QStringLiteral("int"));
+        for (int c = 0; c < FunctionConfusion::kSize; ++c) {
+            const QString path = QStringLiteral("diagnostics.span_matching.confusion.%1.other.%2")
+                                     .arg(r)
+                                     .arg(columns[c]);
+            const QString cell = m.fig(first->id, path, confusion.at(r, c), FigureFormat::Integer);
             html += QStringLiteral("<td class=\"num\">%1</td>")
-                        .arg(c == function ? QStringLiteral("<b>%1</b>").arg(cell) : cell);
+                        .arg(c == r ? QStringLiteral("<b>%1</b>").arg(cell) : cell);
         }
         html += QStringLiteral("</tr>");
     }

@@ -93,6 +93,30 @@ QString unescapeHtml(QString s)
     return s;
 }
 
+// The value a figure's data-figure address names: the dotted `path` ("alpha.value",
+// "pairs.0.cohen_kappa.ci95.1") in `object`, array steps by index (README, The reliability
+// report); undefined if any step is missing. The report writes these addresses but never reads
+// them, so the test follows them on its own.
+QJsonValue valueAt(const QJsonObject &object, const QString &path)
+{
+    QJsonValue v = object;
+    for (const QString &step : path.split(QLatin1Char('.'))) {
+        bool isIndex = false;
+        const int index = step.toInt(&isIndex);
+        if (v.isArray() && isIndex) {
+            const QJsonArray a = v.toArray();
+            if (index < 0 || index >= a.size())
+                return QJsonValue(QJsonValue::Undefined);
+            v = a.at(index);
+        } else if (v.isObject() && v.toObject().contains(step)) {
+            v = v.toObject().value(step);
+        } else {
+            return QJsonValue(QJsonValue::Undefined);
+        }
+    }
+    return v;
+}
+
 // The text a figure must show, written independently of the report's own formatter.
 QString expectedText(const QJsonValue &v, const QString &format)
 {
@@ -211,10 +235,10 @@ TEST_CASE("every figure of the HTML report equals fourfold-cli agree --json for 
         INFO(id.toStdString() << ":" << path.toStdString() << " shows " << shown.toStdString());
         QJsonValue expected;
         if (id == QLatin1String("report")) {
-            expected = figureValue(figures, path);
+            expected = valueAt(figures, path);
         } else {
             REQUIRE(agree.contains(id));
-            expected = figureValue(agree.value(id), path);
+            expected = valueAt(agree.value(id), path);
             ++fromAgree;
             seenAnalyses.insert(id);
         }
@@ -447,7 +471,7 @@ TEST_CASE("a recorded draw of the reliability sample is stated in the method tex
                                        "sample stratified by topic (seed 11) from a frame of 7 "
                                        "articles")));
     const QJsonObject record =
-        figureValue(embeddedFigures(text), QStringLiteral("sample.draw_record")).toObject();
+        valueAt(embeddedFigures(text), QStringLiteral("sample.draw_record")).toObject();
     CHECK(record.value(QStringLiteral("seed")).toString() == QLatin1String("11"));
     CHECK(record.value(QStringLiteral("articles")).toArray().size() == 3);
     // C01 and C02 finished the 9 reliability articles; the 3 drawn ones are assigned but nobody
@@ -494,20 +518,23 @@ TEST_CASE("writeReport: the desktop's entry point writes by suffix and refuses o
     CHECK_FALSE(QFileInfo::exists(dir.filePath(QStringLiteral("r.docx"))));
 }
 
-TEST_CASE("figureValue and formatFigure follow dotted paths and mark undefined values")
+TEST_CASE("formatFigure writes each data-format and marks missing values undefined")
 {
-    const QJsonObject o {{QStringLiteral("alpha"), QJsonObject {{QStringLiteral("value"), 0.6925}}},
-        {QStringLiteral("ci95"), QJsonArray {0.1, 0.25}},
-        {QStringLiteral("none"), QJsonValue(QJsonValue::Null)}};
-    CHECK(figureValue(o, QStringLiteral("alpha.value")).toDouble() == 0.6925);
-    CHECK(figureValue(o, QStringLiteral("ci95.1")).toDouble() == 0.25);
-    CHECK(figureValue(o, QStringLiteral("ci95.2")).isUndefined());
-    CHECK(figureValue(o, QStringLiteral("alpha.missing")).isUndefined());
-    CHECK(formatFigure(figureValue(o, QStringLiteral("none")), QStringLiteral("f3"))
-        == QLatin1String("undefined"));
-    CHECK(formatFigure(QJsonValue(0.6925), QStringLiteral("f3")) == QLatin1String("0.693"));
-    CHECK(formatFigure(QJsonValue(0.8966), QStringLiteral("pct")) == QLatin1String("89.7%"));
-    CHECK(formatFigure(QJsonValue(218.0), QStringLiteral("int")) == QLatin1String("218"));
+    // Rounding as printf does it (C standard, 7.21.6.1: %.3f, %.1f, %.3g); common practice for
+    // the rest.
+    CHECK(formatFigure(0.6925, FigureFormat::Fixed3) == QString::asprintf("%.3f", 0.6925));
+    CHECK(formatFigure(0.6925, FigureFormat::Fixed3) == QLatin1String("0.693"));
+    CHECK(formatFigure(-0.0104, FigureFormat::Fixed3) == QLatin1String("-0.010"));
+    CHECK(formatFigure(0.8966, FigureFormat::Percent) == QLatin1String("89.7%"));
+    CHECK(formatFigure(218.0, FigureFormat::Integer) == QLatin1String("218"));
+    CHECK(formatFigure(0.0015756996, FigureFormat::Significant3) == QLatin1String("0.00158"));
+    for (FigureFormat f : {FigureFormat::Fixed3, FigureFormat::Percent, FigureFormat::Integer,
+             FigureFormat::Significant3})
+        CHECK(formatFigure(std::nullopt, f) == QLatin1String("undefined"));
+    CHECK(figureFormatKey(FigureFormat::Fixed3) == QLatin1String("f3"));
+    CHECK(figureFormatKey(FigureFormat::Percent) == QLatin1String("pct"));
+    CHECK(figureFormatKey(FigureFormat::Integer) == QLatin1String("int"));
+    CHECK(figureFormatKey(FigureFormat::Significant3) == QLatin1String("g3"));
 }
 
 TEST_CASE("no title or pseudonym can end the embedded figures early")
