@@ -1854,17 +1854,17 @@
 <context>
     <name>DisagreementsText</name>
     <message>
-        <location filename="../core/agreement/disagreements.cpp" line="270"/>
+        <location filename="../core/agreement/disagreements.cpp" line="255"/>
         <source>Both coders of the pair must have marked the article &quot;%1&quot; done.</source>
         <translation>Beide Codierenden des Paars müssen den Artikel „%1“ als erledigt markiert haben.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/disagreements.cpp" line="305"/>
+        <location filename="../core/agreement/disagreements.cpp" line="288"/>
         <source>Choose the spans whose boundaries to merge.</source>
         <translation>Wählen Sie die Textstellen, deren Grenzen vereint werden sollen.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/disagreements.cpp" line="313"/>
+        <location filename="../core/agreement/disagreements.cpp" line="296"/>
         <source>Only spans of one function can be merged; accept one of them instead.</source>
         <translation>Nur Textstellen einer Funktion können vereint werden; übernehmen Sie stattdessen eine von ihnen.</translation>
     </message>
@@ -8150,12 +8150,12 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::CodingSession</name>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="133"/>
+        <location filename="../app/desktop/coding_session.cpp" line="141"/>
         <source>“%1” (%2), similarity %3</source>
         <translation>„%1“ (%2), Ähnlichkeit %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="227"/>
+        <location filename="../app/desktop/coding_session.cpp" line="235"/>
         <source>%1 is read-only: you can read, compare and compute, but nothing is saved. To code, copy the file to a folder you may write to and open the copy.</source>
         <translation>%1 ist schreibgeschützt: Sie können lesen, vergleichen und berechnen, aber nichts wird gespeichert. Um zu codieren, kopieren Sie die Datei in einen Ordner, in den Sie schreiben dürfen, und öffnen Sie die Kopie.</translation>
     </message>
@@ -8231,254 +8231,254 @@ Beinahe-Kopie von %2</translation>
         <translation>Noch nichts zu vergleichen. Ein Artikel erscheint hier, sobald mindestens zwei Codierende ihn codiert und als erledigt markiert haben (oder setzen Sie oben „Artikel in Bearbeitung“). Planen Sie Doppelcodierung unter Leitung → Studiendesign; die Fortschrittsübersicht zeigt, wer fertig ist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="171"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="183"/>
         <source>Articles to adjudicate</source>
         <translation>Zu entscheidende Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="190"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="202"/>
         <source>Margin: ∅ a coder has no span here · ≠ different functions · ↔ different boundaries · ≈ different attributes · ✓ decided. Lanes under each line: problem (solid), cause (dashed), evaluation (dotted), remedy (dash-dot). Hatched: this coder has no span in the passage.</source>
         <translation>Rand: ∅ eine codierende Person hat hier keine Textstelle · ≠ unterschiedliche Funktionen · ↔ unterschiedliche Grenzen · ≈ unterschiedliche Merkmale · ✓ entschieden. Spuren unter jeder Zeile: Problem (durchgezogen), Ursache (gestrichelt), Bewertung (gepunktet), Lösung (Strich-Punkt). Schraffiert: diese codierende Person hat in der Passage keine Textstelle.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="239"/>
         <source>Who</source>
         <translation>Wer</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="239"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="239"/>
         <source>Decision</source>
         <translation>Entscheidung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="232"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="244"/>
         <source>Spans of the passage</source>
         <translation>Textstellen der Passage</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="243"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="255"/>
         <source>&amp;Rationale (optional, kept with the decision):</source>
         <translation>&amp;Begründung (optional, wird mit der Entscheidung gespeichert):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="245"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="257"/>
         <source>Why this decision, for the method section</source>
         <translation>Warum diese Entscheidung, für den Methodenteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="172"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="184"/>
         <source>Articles coded by several coders, most undecided disagreements first when sorted; the order is kept while you decide until you re-sort. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
         <translation>Von mehreren Codierenden codierte Artikel, sortiert die mit den meisten nicht entschiedenen Abweichungen zuerst; während Sie entscheiden, bleibt die Reihenfolge, bis Sie neu sortieren. Offen: nicht entschiedene Abweichungen; Übereinstimmend: Passagen, in denen alle Codierenden übereinstimmen und die noch nicht im Goldstandard sind.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="263"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="275"/>
         <source>Keys: N / P next and previous disagreement, %1 / %2 next and previous article, %3 re-sort the queue; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; %4 accept all agreed; %5 rationale; %6 undo; %7 every key.</source>
         <translation>Tasten: N / P nächste und vorherige Abweichung, %1 / %2 nächster und vorheriger Artikel, %3 Warteschlange neu sortieren; A gewählte Textstelle übernehmen, M gewählte Textstellen vereinen, E bearbeiten, R verwerfen, W Goldstandard-Textstelle zurückziehen; %4 alle übereinstimmenden übernehmen; %5 Begründung; %6 rückgängig; %7 alle Tasten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="312"/>
         <source>Comparison</source>
         <translation>Vergleich</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="314"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="683"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="684"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="744"/>
         <source>, </source>
         <translation>, </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="320"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="332"/>
         <source>Function: </source>
         <translation>Funktion: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="322"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
         <source>All functions</source>
         <translation>Alle Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="337"/>
         <source>Function filter</source>
         <translation>Funktionsfilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="343"/>
         <source>  Coders: </source>
         <translation>  Codierende: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="333"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="345"/>
         <source>All coders</source>
         <translation>Alle Codierenden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
         <source>%1 and %2</source>
         <translation>%1 und %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="342"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="354"/>
         <source>Coder pair filter</source>
         <translation>Filter nach Codierpaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
         <source>Show decided</source>
         <translation>Entschiedene zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="361"/>
         <source>Also step through disagreements already decided</source>
         <translation>Auch bereits entschiedene Abweichungen durchgehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="364"/>
         <source>Articles in progress</source>
         <translation>Artikel in Bearbeitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
         <source>Also compare coders on articles they have started but not yet marked done</source>
         <translation>Codierer auch bei Artikeln vergleichen, die sie begonnen, aber noch nicht als fertig markiert haben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="355"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="367"/>
         <source>Show articles in progress</source>
         <translation>Artikel in Bearbeitung zeigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="363"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="375"/>
         <source>Previous</source>
         <translation>Zurück</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="364"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="376"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorherige nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="377"/>
         <source>Next</source>
         <translation>Weiter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="366"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="378"/>
         <source>Next undecided disagreement</source>
         <translation>Nächste nicht entschiedene Abweichung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="367"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
         <source>Previous article</source>
         <translation>Vorheriger Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="368"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
         <source>Previous article in the queue</source>
         <translation>Vorheriger Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="374"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="386"/>
         <source>Next article</source>
         <translation>Nächster Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="374"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="386"/>
         <source>Next article in the queue</source>
         <translation>Nächster Artikel in der Warteschlange</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="391"/>
         <source>Re-sort queue</source>
         <translation>Warteschlange neu sortieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="392"/>
         <source>Sort the queue again, most undecided disagreements first; until then it keeps its order while you decide</source>
         <translation>Die Warteschlange neu sortieren, die meisten nicht entschiedenen Abweichungen zuerst; bis dahin behält sie ihre Reihenfolge, während Sie entscheiden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="389"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="401"/>
         <source>Accept</source>
         <translation>Übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="390"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="402"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Die Textstelle der gewählten codierenden Person in den Goldstandard übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="391"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="403"/>
         <source>Merge</source>
         <translation>Vereinen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="392"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="404"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eine Textstelle, die die gewählten Textstellen umfasst, in den Goldstandard aufnehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="393"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="405"/>
         <source>Edit…</source>
         <translation>Bearbeiten…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="394"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="406"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Eine Goldstandard-Textstelle mit eigener Funktion und eigenen Grenzen festlegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="396"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="408"/>
         <source>Reject</source>
         <translation>Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="397"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Festhalten, dass die gewählten Textstellen nicht in den Goldstandard gehören</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="398"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="410"/>
         <source>Withdraw gold</source>
         <translation>Zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="399"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="411"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Die gewählte Goldstandard-Textstelle zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="400"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="412"/>
         <source>Accept all agreed</source>
         <translation>Übereinstimmende übernehmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="401"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="413"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Jede Textstelle übernehmen, in der alle Codierenden des Artikels übereinstimmen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="407"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="419"/>
         <source>Undo</source>
         <translation>Rückgängig</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="421"/>
         <source>Redo</source>
         <translation>Wiederholen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="423"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="435"/>
         <source>Keys of the comparison window</source>
         <translation>Tasten des Vergleichsfensters</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="477"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="489"/>
         <source>%n article(s) to adjudicate</source>
         <translation>
             <numerusform>%n Artikel zu entscheiden</numerusform>
@@ -8486,158 +8486,158 @@ Beinahe-Kopie von %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="485"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="497"/>
         <source>Queue sorted again: most undecided disagreements first.</source>
         <translation>Warteschlange neu sortiert: die meisten nicht entschiedenen Abweichungen zuerst.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
         <source>Gold (%1)</source>
         <translation>Goldstandard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="731"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="736"/>
         <source>Gold</source>
         <translation>Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="639"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="640"/>
         <source>No undecided disagreement left in this article. %1 opens the next article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel. %1 öffnet den nächsten Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="656"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="657"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Keine nicht entschiedene Abweichung mehr in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="672"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="673"/>
         <source>No spans to compare in this article.</source>
         <translation>Keine Textstellen zum Vergleichen in diesem Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="673"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="674"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klicken Sie auf eine Passage oder drücken Sie N für die nächste Abweichung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="683"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="684"/>
         <source>no span by %1</source>
         <translation>keine Textstelle von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="686"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="687"/>
         <source>different functions</source>
         <translation>unterschiedliche Funktionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="689"/>
         <source>different boundaries</source>
         <translation>unterschiedliche Grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="690"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="691"/>
         <source>different attributes</source>
         <translation>unterschiedliche Merkmale</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="698"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="703"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 von %2 (Absatz %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="702"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="707"/>
         <source>the coders agree</source>
         <translation>die Codierenden stimmen überein</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="702"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="707"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="703"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="708"/>
         <source> — decided</source>
         <translation> — entschieden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="722"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="727"/>
         <source>Characters %1 to %2</source>
         <translation>Zeichen %1 bis %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="723"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="728"/>
         <source>rejected</source>
         <translation>verworfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="723"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="728"/>
         <source>in gold</source>
         <translation>im Goldstandard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="744"/>
         <source>drawn by the lead</source>
         <translation>von der Leitung gezogen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="744"/>
         <source>from %1</source>
         <translation>von %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="741"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="746"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Entschieden von %1 am %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="743"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="748"/>
         <source> Rationale: %1</source>
         <translation> Begründung: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="751"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="756"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Goldstandard %1 entschieden von %2 am %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="858"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="862"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Rückgängig mit %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="885"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="890"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Wählen Sie die Textstelle einer codierenden Person zum Übernehmen (oder mehrere zum Vereinen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="912"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="918"/>
         <source>Choose a passage first.</source>
         <translation>Wählen Sie zuerst eine Passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="950"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="957"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Wählen Sie die zu verwerfenden Textstellen (die noch nicht verworfen sind).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="961"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="969"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Wählen Sie eine Goldstandard-Textstelle zum Zurückziehen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="1005"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="1015"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>In diesem Artikel ist keine übereinstimmende Passage mehr zu übernehmen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="249"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="261"/>
         <source>Answers to article-level items</source>
         <translation>Antworten auf Items auf Artikelebene</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="985"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="995"/>
         <source>Choose an item with a gold answer to withdraw.</source>
         <translation>Wählen Sie ein Item mit einer Goldstandard-Antwort, die zurückgezogen werden soll.</translation>
     </message>
@@ -9319,22 +9319,32 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::FrameCard</name>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="163"/>
+        <location filename="../app/desktop/frame_card.cpp" line="106"/>
+        <source>%1 · %2</source>
+        <translation>%1 · %2</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frame_card.cpp" line="194"/>
         <source>Frame card</source>
         <translation>Frame-Karte</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="210"/>
+        <location filename="../app/desktop/frame_card.cpp" line="241"/>
         <source>— nothing coded yet</source>
         <translation>— noch nichts codiert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="264"/>
+        <location filename="../app/desktop/frame_card.cpp" line="313"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
+    <message>
+        <location filename="../app/desktop/frame_card.cpp" line="314"/>
+        <source>%1, coded by %2: %3</source>
+        <translation>%1, codiert von %2: %3</translation>
+    </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frame_card.cpp" line="280"/>
+        <location filename="../app/desktop/frame_card.cpp" line="330"/>
         <source>%n span(s)</source>
         <translation>
             <numerusform>%n Textstelle</numerusform>
@@ -9342,7 +9352,7 @@ Beinahe-Kopie von %2</translation>
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frame_card.cpp" line="282"/>
+        <location filename="../app/desktop/frame_card.cpp" line="332"/>
         <source>%1: %n span(s)</source>
         <translation>
             <numerusform>%1: %n Textstelle</numerusform>
@@ -10235,7 +10245,7 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="921"/>
+        <location filename="../app/desktop/main_window.cpp" line="923"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
@@ -10593,12 +10603,12 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <translation>Passwort von %1 auf dem Teamserver:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="755"/>
+        <location filename="../app/desktop/main_window.cpp" line="757"/>
         <source>Every article in the list is done.</source>
         <translation>Alle Artikel in der Liste sind erledigt.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="777"/>
+        <location filename="../app/desktop/main_window.cpp" line="779"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n Artikel enthält „%1“.</numerusform>
@@ -10606,127 +10616,127 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="783"/>
+        <location filename="../app/desktop/main_window.cpp" line="785"/>
         <source>New project</source>
         <translation>Neues Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="793"/>
+        <location filename="../app/desktop/main_window.cpp" line="795"/>
         <source>Cannot create project</source>
         <translation>Projekt kann nicht erstellt werden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="805"/>
+        <location filename="../app/desktop/main_window.cpp" line="807"/>
         <source>Import articles</source>
         <translation>Artikel importieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="806"/>
+        <location filename="../app/desktop/main_window.cpp" line="808"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikel (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="852"/>
+        <location filename="../app/desktop/main_window.cpp" line="854"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Wählen Sie einen Artikel&lt;/h3&gt;&lt;p&gt;Wählen Sie links in der Liste einen Artikel, um mit dem Codieren zu beginnen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="855"/>
+        <location filename="../app/desktop/main_window.cpp" line="857"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch keine Artikel&lt;/h3&gt;&lt;p&gt;Importieren Sie die Artikel der Studie: reiner Text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- oder Atom-Feeds, NITF oder NewsML-G2. Weisen Sie sie dann unter Leitung → Studiendesign Codierenden zu.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="860"/>
+        <location filename="../app/desktop/main_window.cpp" line="862"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch nichts zu codieren&lt;/h3&gt;&lt;p&gt;In diesem Projekt sind Ihnen keine Artikel zugewiesen. Ihre Leitung weist sie zu; öffnen Sie danach das Projekt erneut oder die Kopie, die sie Ihnen schickt.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="892"/>
+        <location filename="../app/desktop/main_window.cpp" line="894"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>Die Sprache wechselt beim nächsten Start von Fourfold.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="905"/>
+        <location filename="../app/desktop/main_window.cpp" line="907"/>
         <source>Not saved: %1. %2</source>
         <translation>Nicht gespeichert: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="906"/>
+        <location filename="../app/desktop/main_window.cpp" line="908"/>
         <source>&amp;Retry</source>
         <translation>&amp;Erneut versuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="912"/>
+        <location filename="../app/desktop/main_window.cpp" line="914"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="922"/>
+        <location filename="../app/desktop/main_window.cpp" line="924"/>
         <source>No project open</source>
         <translation>Kein Projekt geöffnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="926"/>
+        <location filename="../app/desktop/main_window.cpp" line="928"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="926"/>
+        <location filename="../app/desktop/main_window.cpp" line="928"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="928"/>
+        <location filename="../app/desktop/main_window.cpp" line="930"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — schreibgeschützt, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="930"/>
+        <location filename="../app/desktop/main_window.cpp" line="932"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — Codieren als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="934"/>
+        <location filename="../app/desktop/main_window.cpp" line="936"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lesen als %1 · %2 · schreibgeschützte Datei: nichts wird gespeichert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="937"/>
+        <location filename="../app/desktop/main_window.cpp" line="939"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Codieren als %1 · %2 · Leitung: alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="938"/>
+        <location filename="../app/desktop/main_window.cpp" line="940"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Codieren als %1 · %2 · blind: nur eigene Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="946"/>
+        <location filename="../app/desktop/main_window.cpp" line="948"/>
         <source>The comparison window lists its own keys with %1.</source>
         <translation>Das Vergleichsfenster listet seine eigenen Tasten mit %1 auf.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="950"/>
+        <location filename="../app/desktop/main_window.cpp" line="952"/>
         <source>Keyboard shortcuts</source>
         <translation>Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="872"/>
+        <location filename="../app/desktop/main_window.cpp" line="874"/>
         <source>Open project</source>
         <translation>Projekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="783"/>
-        <location filename="../app/desktop/main_window.cpp" line="872"/>
+        <location filename="../app/desktop/main_window.cpp" line="785"/>
+        <location filename="../app/desktop/main_window.cpp" line="874"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-Projekte (*.fourfold)</translation>
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="146"/>
         <location filename="../app/desktop/main_window.cpp" line="639"/>
-        <location filename="../app/desktop/main_window.cpp" line="798"/>
-        <location filename="../app/desktop/main_window.cpp" line="876"/>
-        <location filename="../app/desktop/main_window.cpp" line="885"/>
+        <location filename="../app/desktop/main_window.cpp" line="800"/>
+        <location filename="../app/desktop/main_window.cpp" line="878"/>
+        <location filename="../app/desktop/main_window.cpp" line="887"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
     </message>

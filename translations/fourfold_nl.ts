@@ -1854,17 +1854,17 @@
 <context>
     <name>DisagreementsText</name>
     <message>
-        <location filename="../core/agreement/disagreements.cpp" line="270"/>
+        <location filename="../core/agreement/disagreements.cpp" line="255"/>
         <source>Both coders of the pair must have marked the article &quot;%1&quot; done.</source>
         <translation>Beide codeurs van het paar moeten het artikel ‘%1’ als klaar hebben gemarkeerd.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/disagreements.cpp" line="305"/>
+        <location filename="../core/agreement/disagreements.cpp" line="288"/>
         <source>Choose the spans whose boundaries to merge.</source>
         <translation>Kies de fragmenten waarvan de grenzen moeten worden samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/disagreements.cpp" line="313"/>
+        <location filename="../core/agreement/disagreements.cpp" line="296"/>
         <source>Only spans of one function can be merged; accept one of them instead.</source>
         <translation>Alleen fragmenten van één functie kunnen worden samengevoegd; accepteer in plaats daarvan een van hen.</translation>
     </message>
@@ -8150,12 +8150,12 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::CodingSession</name>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="133"/>
+        <location filename="../app/desktop/coding_session.cpp" line="141"/>
         <source>“%1” (%2), similarity %3</source>
         <translation>‘%1’ (%2), gelijkenis %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="227"/>
+        <location filename="../app/desktop/coding_session.cpp" line="235"/>
         <source>%1 is read-only: you can read, compare and compute, but nothing is saved. To code, copy the file to a folder you may write to and open the copy.</source>
         <translation>%1 is alleen-lezen: u kunt lezen, vergelijken en berekenen, maar er wordt niets opgeslagen. Kopieer het bestand om te coderen naar een map waarin u mag schrijven en open de kopie.</translation>
     </message>
@@ -8231,254 +8231,254 @@ Bijna-kopie van %2</translation>
         <translation>Nog niets te vergelijken. Een artikel verschijnt hier zodra ten minste twee codeurs het hebben gecodeerd en als klaar hebben gemarkeerd (of vink hierboven ‘Artikelen in bewerking’ aan). Plan dubbele codering in Coördinator → Onderzoeksopzet; het voortgangsoverzicht toont wie klaar is.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="171"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="183"/>
         <source>Articles to adjudicate</source>
         <translation>Te beslissen artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="190"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="202"/>
         <source>Margin: ∅ a coder has no span here · ≠ different functions · ↔ different boundaries · ≈ different attributes · ✓ decided. Lanes under each line: problem (solid), cause (dashed), evaluation (dotted), remedy (dash-dot). Hatched: this coder has no span in the passage.</source>
         <translation>Marge: ∅ een codeur heeft hier geen fragment · ≠ verschillende functies · ↔ verschillende grenzen · ≈ verschillende kenmerken · ✓ beslist. Banen onder elke regel: probleem (doorgetrokken), oorzaak (gestreept), evaluatie (gestippeld), oplossing (streep-punt). Gearceerd: deze codeur heeft geen fragment in de passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="239"/>
         <source>Who</source>
         <translation>Wie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="239"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="227"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="239"/>
         <source>Decision</source>
         <translation>Beslissing</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="232"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="244"/>
         <source>Spans of the passage</source>
         <translation>Fragmenten van de passage</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="243"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="255"/>
         <source>&amp;Rationale (optional, kept with the decision):</source>
         <translation>&amp;Motivering (optioneel, wordt bij de beslissing bewaard):</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="245"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="257"/>
         <source>Why this decision, for the method section</source>
         <translation>Waarom deze beslissing, voor de methodesectie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="172"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="184"/>
         <source>Articles coded by several coders, most undecided disagreements first when sorted; the order is kept while you decide until you re-sort. Open: undecided disagreements; Agreed: passages all coders agree on that are not yet in gold.</source>
         <translation>Artikelen die door meerdere codeurs zijn gecodeerd, gesorteerd met de meeste onbesliste verschillen eerst; terwijl je beslist blijft de volgorde staan tot je opnieuw sorteert. Open: onbesliste verschillen; Eens: passages waarover alle codeurs het eens zijn en die nog niet in de gouden standaard staan.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="263"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="275"/>
         <source>Keys: N / P next and previous disagreement, %1 / %2 next and previous article, %3 re-sort the queue; A accept the chosen span, M merge the chosen spans, E edit, R reject, W withdraw a gold span; %4 accept all agreed; %5 rationale; %6 undo; %7 every key.</source>
         <translation>Toetsen: N / P volgend en vorig verschil, %1 / %2 volgend en vorig artikel, %3 de wachtrij opnieuw sorteren; A het gekozen fragment accepteren, M de gekozen fragmenten samenvoegen, E bewerken, R verwerpen, W een fragment uit de gouden standaard terugtrekken; %4 alle overeenstemmende accepteren; %5 motivering; %6 ongedaan maken; %7 alle toetsen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="300"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="312"/>
         <source>Comparison</source>
         <translation>Vergelijking</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="314"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="683"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="326"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="684"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="744"/>
         <source>, </source>
         <translation>, </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="320"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="332"/>
         <source>Function: </source>
         <translation>Functie: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="322"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="334"/>
         <source>All functions</source>
         <translation>Alle functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="325"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="337"/>
         <source>Function filter</source>
         <translation>Functiefilter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="331"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="343"/>
         <source>  Coders: </source>
         <translation>  Codeurs: </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="333"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="345"/>
         <source>All coders</source>
         <translation>Alle codeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="340"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
         <source>%1 and %2</source>
         <translation>%1 en %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="342"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="354"/>
         <source>Coder pair filter</source>
         <translation>Filter op codeurspaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="348"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="360"/>
         <source>Show decided</source>
         <translation>Besliste tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="349"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="361"/>
         <source>Also step through disagreements already decided</source>
         <translation>Ook langs verschillen gaan die al beslist zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="352"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="364"/>
         <source>Articles in progress</source>
         <translation>Artikelen in bewerking</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="353"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
         <source>Also compare coders on articles they have started but not yet marked done</source>
         <translation>Vergelijk codeurs ook op artikelen die ze begonnen maar nog niet als klaar gemarkeerd hebben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="355"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="367"/>
         <source>Show articles in progress</source>
         <translation>Artikelen in bewerking tonen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="363"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="375"/>
         <source>Previous</source>
         <translation>Vorige</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="364"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="376"/>
         <source>Previous undecided disagreement</source>
         <translation>Vorig onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="365"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="377"/>
         <source>Next</source>
         <translation>Volgende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="366"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="378"/>
         <source>Next undecided disagreement</source>
         <translation>Volgend onbeslist verschil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="367"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
         <source>Previous article</source>
         <translation>Vorig artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="368"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
         <source>Previous article in the queue</source>
         <translation>Vorig artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="374"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="386"/>
         <source>Next article</source>
         <translation>Volgend artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="374"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="386"/>
         <source>Next article in the queue</source>
         <translation>Volgend artikel in de wachtrij</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="379"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="391"/>
         <source>Re-sort queue</source>
         <translation>Wachtrij opnieuw sorteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="380"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="392"/>
         <source>Sort the queue again, most undecided disagreements first; until then it keeps its order while you decide</source>
         <translation>De wachtrij opnieuw sorteren, de meeste onbesliste verschillen eerst; tot dan houdt ze haar volgorde terwijl je beslist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="389"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="401"/>
         <source>Accept</source>
         <translation>Accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="390"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="402"/>
         <source>Accept the chosen coder&apos;s span into gold</source>
         <translation>Het fragment van de gekozen codeur in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="391"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="403"/>
         <source>Merge</source>
         <translation>Samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="392"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="404"/>
         <source>Put one span covering the chosen spans into gold</source>
         <translation>Eén fragment dat de gekozen fragmenten omvat in de gouden standaard opnemen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="393"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="405"/>
         <source>Edit…</source>
         <translation>Bewerken…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="394"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="406"/>
         <source>Decide a gold span with a function and boundaries of your own</source>
         <translation>Een fragment voor de gouden standaard vastleggen met een eigen functie en eigen grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="396"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="408"/>
         <source>Reject</source>
         <translation>Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="397"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
         <source>Record that the chosen spans do not belong in gold</source>
         <translation>Vastleggen dat de gekozen fragmenten niet in de gouden standaard horen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="398"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="410"/>
         <source>Withdraw gold</source>
         <translation>Terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="399"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="411"/>
         <source>Withdraw the chosen gold span</source>
         <translation>Het gekozen fragment uit de gouden standaard terugtrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="400"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="412"/>
         <source>Accept all agreed</source>
         <translation>Alle overeenstemmende accepteren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="401"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="413"/>
         <source>Accept every span all coders of the article agree on</source>
         <translation>Elk fragment accepteren waarover alle codeurs van het artikel het eens zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="407"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="419"/>
         <source>Undo</source>
         <translation>Ongedaan maken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="409"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="421"/>
         <source>Redo</source>
         <translation>Opnieuw</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="423"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="435"/>
         <source>Keys of the comparison window</source>
         <translation>Toetsen van het vergelijkingsvenster</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="477"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="489"/>
         <source>%n article(s) to adjudicate</source>
         <translation>
             <numerusform>%n artikel om te beslissen</numerusform>
@@ -8486,158 +8486,158 @@ Bijna-kopie van %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="485"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="497"/>
         <source>Queue sorted again: most undecided disagreements first.</source>
         <translation>Wachtrij opnieuw gesorteerd: de meeste onbesliste verschillen eerst.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
         <source>Gold (%1)</source>
         <translation>Gouden standaard (%1)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="573"/>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="731"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="579"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="736"/>
         <source>Gold</source>
         <translation>Gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="639"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="640"/>
         <source>No undecided disagreement left in this article. %1 opens the next article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel. %1 opent het volgende artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="656"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="657"/>
         <source>No undecided disagreement left in this article.</source>
         <translation>Geen onbeslist verschil meer in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="672"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="673"/>
         <source>No spans to compare in this article.</source>
         <translation>Geen fragmenten om te vergelijken in dit artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="673"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="674"/>
         <source>Click a passage or press N for the next disagreement.</source>
         <translation>Klik op een passage of druk op N voor het volgende verschil.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="683"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="684"/>
         <source>no span by %1</source>
         <translation>geen fragment van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="686"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="687"/>
         <source>different functions</source>
         <translation>verschillende functies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="688"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="689"/>
         <source>different boundaries</source>
         <translation>verschillende grenzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="690"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="691"/>
         <source>different attributes</source>
         <translation>verschillende kenmerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="698"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="703"/>
         <source>Passage %1 of %2 (paragraph %3): %4%5</source>
         <translation>Passage %1 van %2 (alinea %3): %4%5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="702"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="707"/>
         <source>the coders agree</source>
         <translation>de codeurs zijn het eens</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="702"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="707"/>
         <source>; </source>
         <translation>; </translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="703"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="708"/>
         <source> — decided</source>
         <translation> — beslist</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="722"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="727"/>
         <source>Characters %1 to %2</source>
         <translation>Tekens %1 tot %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="723"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="728"/>
         <source>rejected</source>
         <translation>verworpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="723"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="728"/>
         <source>in gold</source>
         <translation>in gouden standaard</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="744"/>
         <source>drawn by the lead</source>
         <translation>getekend door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="739"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="744"/>
         <source>from %1</source>
         <translation>van %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="741"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="746"/>
         <source>Decided by %1 at %2.%3</source>
         <translation>Beslist door %1 op %2.%3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="743"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="748"/>
         <source> Rationale: %1</source>
         <translation> Motivering: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="751"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="756"/>
         <source>Gold %1 decided by %2 at %3%4</source>
         <translation>Gouden standaard %1 beslist door %2 op %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="858"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="862"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Ongedaan maken met %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="885"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="890"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Kies het fragment van één codeur om te accepteren (of meerdere om samen te voegen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="912"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="918"/>
         <source>Choose a passage first.</source>
         <translation>Kies eerst een passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="950"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="957"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Kies de fragmenten om te verwerpen (die nog niet verworpen zijn).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="961"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="969"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Kies één fragment uit de gouden standaard om terug te trekken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="1005"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="1015"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>Er is in dit artikel geen overeenstemmende passage meer om te accepteren.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="249"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="261"/>
         <source>Answers to article-level items</source>
         <translation>Antwoorden op items op artikelniveau</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="985"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="995"/>
         <source>Choose an item with a gold answer to withdraw.</source>
         <translation>Kies een item met een antwoord van de gouden standaard om in te trekken.</translation>
     </message>
@@ -9319,22 +9319,32 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::FrameCard</name>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="163"/>
+        <location filename="../app/desktop/frame_card.cpp" line="106"/>
+        <source>%1 · %2</source>
+        <translation>%1 · %2</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frame_card.cpp" line="194"/>
         <source>Frame card</source>
         <translation>Framekaart</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="210"/>
+        <location filename="../app/desktop/frame_card.cpp" line="241"/>
         <source>— nothing coded yet</source>
         <translation>— nog niets gecodeerd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frame_card.cpp" line="264"/>
+        <location filename="../app/desktop/frame_card.cpp" line="313"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
+    <message>
+        <location filename="../app/desktop/frame_card.cpp" line="314"/>
+        <source>%1, coded by %2: %3</source>
+        <translation>%1, gecodeerd door %2: %3</translation>
+    </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frame_card.cpp" line="280"/>
+        <location filename="../app/desktop/frame_card.cpp" line="330"/>
         <source>%n span(s)</source>
         <translation>
             <numerusform>%n fragment</numerusform>
@@ -9342,7 +9352,7 @@ Bijna-kopie van %2</translation>
         </translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frame_card.cpp" line="282"/>
+        <location filename="../app/desktop/frame_card.cpp" line="332"/>
         <source>%1: %n span(s)</source>
         <translation>
             <numerusform>%1: %n fragment</numerusform>
@@ -10235,7 +10245,7 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="921"/>
+        <location filename="../app/desktop/main_window.cpp" line="923"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
@@ -10593,12 +10603,12 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <translation>Wachtwoord van %1 op de teamserver:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="755"/>
+        <location filename="../app/desktop/main_window.cpp" line="757"/>
         <source>Every article in the list is done.</source>
         <translation>Alle artikelen in de lijst zijn klaar.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="777"/>
+        <location filename="../app/desktop/main_window.cpp" line="779"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n artikel bevat ‘%1’.</numerusform>
@@ -10606,127 +10616,127 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="783"/>
+        <location filename="../app/desktop/main_window.cpp" line="785"/>
         <source>New project</source>
         <translation>Nieuw project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="793"/>
+        <location filename="../app/desktop/main_window.cpp" line="795"/>
         <source>Cannot create project</source>
         <translation>Project kan niet worden aangemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="805"/>
+        <location filename="../app/desktop/main_window.cpp" line="807"/>
         <source>Import articles</source>
         <translation>Artikelen importeren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="806"/>
+        <location filename="../app/desktop/main_window.cpp" line="808"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikelen (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="852"/>
+        <location filename="../app/desktop/main_window.cpp" line="854"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Kies een artikel&lt;/h3&gt;&lt;p&gt;Kies links in de lijst een artikel om het te gaan coderen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="855"/>
+        <location filename="../app/desktop/main_window.cpp" line="857"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog geen artikelen&lt;/h3&gt;&lt;p&gt;Importeer de artikelen van het onderzoek: platte tekst, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- of Atom-feeds, NITF of NewsML-G2. Wijs ze daarna toe aan codeurs in Coördinator → Onderzoeksopzet.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="860"/>
+        <location filename="../app/desktop/main_window.cpp" line="862"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog niets te coderen&lt;/h3&gt;&lt;p&gt;In dit project zijn geen artikelen aan u toegewezen. Uw coördinator wijst ze toe; open daarna het project opnieuw, of open de codeurskopie die u wordt gestuurd.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="892"/>
+        <location filename="../app/desktop/main_window.cpp" line="894"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>De taal verandert wanneer Fourfold opnieuw wordt gestart.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="905"/>
+        <location filename="../app/desktop/main_window.cpp" line="907"/>
         <source>Not saved: %1. %2</source>
         <translation>Niet opgeslagen: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="906"/>
+        <location filename="../app/desktop/main_window.cpp" line="908"/>
         <source>&amp;Retry</source>
         <translation>&amp;Opnieuw proberen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="912"/>
+        <location filename="../app/desktop/main_window.cpp" line="914"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="922"/>
+        <location filename="../app/desktop/main_window.cpp" line="924"/>
         <source>No project open</source>
         <translation>Geen project geopend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="926"/>
+        <location filename="../app/desktop/main_window.cpp" line="928"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="926"/>
+        <location filename="../app/desktop/main_window.cpp" line="928"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="928"/>
+        <location filename="../app/desktop/main_window.cpp" line="930"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — alleen-lezen, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="930"/>
+        <location filename="../app/desktop/main_window.cpp" line="932"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — coderen als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="934"/>
+        <location filename="../app/desktop/main_window.cpp" line="936"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lezen als %1 · %2 · alleen-lezenbestand: er wordt niets opgeslagen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="937"/>
+        <location filename="../app/desktop/main_window.cpp" line="939"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Coderen als %1 · %2 · coördinator: alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="938"/>
+        <location filename="../app/desktop/main_window.cpp" line="940"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Coderen als %1 · %2 · blind: alleen je eigen fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="946"/>
+        <location filename="../app/desktop/main_window.cpp" line="948"/>
         <source>The comparison window lists its own keys with %1.</source>
         <translation>Het vergelijkingsvenster toont zijn eigen toetsen met %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="950"/>
+        <location filename="../app/desktop/main_window.cpp" line="952"/>
         <source>Keyboard shortcuts</source>
         <translation>Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="872"/>
+        <location filename="../app/desktop/main_window.cpp" line="874"/>
         <source>Open project</source>
         <translation>Project openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="783"/>
-        <location filename="../app/desktop/main_window.cpp" line="872"/>
+        <location filename="../app/desktop/main_window.cpp" line="785"/>
+        <location filename="../app/desktop/main_window.cpp" line="874"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-projecten (*.fourfold)</translation>
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="146"/>
         <location filename="../app/desktop/main_window.cpp" line="639"/>
-        <location filename="../app/desktop/main_window.cpp" line="798"/>
-        <location filename="../app/desktop/main_window.cpp" line="876"/>
-        <location filename="../app/desktop/main_window.cpp" line="885"/>
+        <location filename="../app/desktop/main_window.cpp" line="800"/>
+        <location filename="../app/desktop/main_window.cpp" line="878"/>
+        <location filename="../app/desktop/main_window.cpp" line="887"/>
         <source>Cannot open project</source>
         <translation>Project kan niet worden geopend</translation>
     </message>

@@ -84,12 +84,16 @@ private:
     FunctionStyle m_style;
 };
 
-// One span as a one-line quote: elided to the width it gets, focusable, clickable.
+// One span as a one-line quote: elided to the width it gets, focusable, clickable. With an owner
+// (a lead's view of every coder's spans) the coder's pseudonym stands before the quote, in a
+// column `ownerWidth` pixels wide that the card gives all its quotes alike.
 class QuoteButton : public QAbstractButton
 {
 public:
-    QuoteButton(const QString &quote, QWidget *parent)
+    QuoteButton(const QString &quote, const QString &owner, int ownerWidth, QWidget *parent)
         : QAbstractButton(parent)
+        , m_owner(owner)
+        , m_ownerWidth(owner.isEmpty() ? 0 : ownerWidth)
     {
         setText(spanQuote(quote.simplified()));
         // The card takes the focus and moves through its quotes itself.
@@ -97,8 +101,12 @@ public:
         setCursor(Qt::PointingHandCursor);
         setAttribute(Qt::WA_Hover);
         setSizePolicy(QSizePolicy::Expanding, QSizePolicy::Fixed);
-        setToolTip(QStringLiteral("<p>%1</p>").arg(text().toHtmlEscaped()));
+        const QString tip = owner.isEmpty()
+            ? text().toHtmlEscaped()
+            : FrameCard::tr("%1 \u00B7 %2").arg(owner.toHtmlEscaped(), text().toHtmlEscaped());
+        setToolTip(QStringLiteral("<p>%1</p>").arg(tip));
     }
+    const QString &owner() const { return m_owner; }
     void setMarks(bool selected, bool current)
     {
         if (selected != m_selected || current != m_current) {
@@ -110,13 +118,21 @@ public:
     QSize sizeHint() const override
     {
         const QFontMetrics fm = fontMetrics();
-        return {std::min(fm.horizontalAdvance(text()), fm.averageCharWidth() * 30) + 2 * kPad,
+        return {std::min(fm.horizontalAdvance(text()), fm.averageCharWidth() * 30) + 2 * kPad
+                + ownerSpace(),
             fm.height() + 2 * kPad};
     }
     QSize minimumSizeHint() const override
     {
         const QFontMetrics fm = fontMetrics();
-        return {fm.averageCharWidth() * 8, fm.height() + 2 * kPad};
+        return {fm.averageCharWidth() * 8 + ownerSpace(), fm.height() + 2 * kPad};
+    }
+    // The font the pseudonym is drawn in (FrameCard measures its column with it).
+    static QFont ownerFont(QFont font)
+    {
+        font.setBold(true);
+        font.setPointSizeF(font.pointSizeF() * 0.85);
+        return font;
     }
 
 protected:
@@ -143,14 +159,29 @@ protected:
             p.setBrush(Qt::NoBrush);
             p.drawRoundedRect(box, 3, 3);
         }
+        if (!m_owner.isEmpty()) {
+            // Quieter than the quote, unless the quote is selected (then the highlight's ink).
+            QColor quiet = ink;
+            if (!m_selected)
+                quiet = palette().color(QPalette::PlaceholderText);
+            p.setPen(quiet);
+            p.setFont(ownerFont(font()));
+            p.drawText(
+                QRect(kPad, 0, m_ownerWidth, height()), Qt::AlignLeft | Qt::AlignVCenter, m_owner);
+            p.setFont(font());
+        }
         p.setPen(ink);
-        const QRect textBox = rect().adjusted(kPad, 0, -kPad, 0);
+        const QRect textBox = rect().adjusted(kPad + ownerSpace(), 0, -kPad, 0);
         p.drawText(textBox, Qt::AlignLeft | Qt::AlignVCenter,
             fontMetrics().elidedText(text(), Qt::ElideRight, textBox.width()));
     }
 
 private:
     static constexpr int kPad = 3;
+    // The pseudonym's column and the gap after it, or nothing.
+    int ownerSpace() const { return m_ownerWidth == 0 ? 0 : m_ownerWidth + 2 * kPad; }
+    QString m_owner;
+    int m_ownerWidth = 0;
     bool m_selected = false;
     bool m_current = false; // the keyboard's current quote while the card has the focus
 };
@@ -226,7 +257,8 @@ void FrameCard::setSpans(const QString &articleText, const std::vector<Annotatio
     for (const Annotation &a : spans)
         if (!a.deleted)
             shown.push_back({a.id, a.content.function, a.content.range,
-                a.quote.isEmpty() ? OffsetMap::slice(articleText, a.content.range) : a.quote});
+                a.quote.isEmpty() ? OffsetMap::slice(articleText, a.content.range) : a.quote,
+                m_owners.value(a.coder.value)});
     std::ranges::stable_sort(shown, [](const Shown &a, const Shown &b) {
         return std::tuple(a.function, a.range.start, a.range.end)
             < std::tuple(b.function, b.range.start, b.range.end);
@@ -246,6 +278,17 @@ void FrameCard::setSpans(const QString &articleText, const std::vector<Annotatio
     rebuild();
 }
 
+void FrameCard::setSpanOwners(const QHash<qint64, QString> &pseudonymByCoder)
+{
+    m_owners = pseudonymByCoder;
+}
+
+QString FrameCard::spanOwner(AnnotationId id) const
+{
+    const auto found = std::ranges::find(m_shown, id, &Shown::id);
+    return found == m_shown.end() ? QString() : found->owner;
+}
+
 void FrameCard::rebuild()
 {
     // A handler of spanActivated may call setSpans() while the clicked quote is still emitting,
@@ -256,12 +299,19 @@ void FrameCard::rebuild()
     }
     m_quoteButtons.clear();
 
+    // One column for the pseudonyms, as wide as the widest of them.
+    const QFontMetrics ownerMetrics(QuoteButton::ownerFont(font()));
+    int ownerWidth = 0;
+    for (const Shown &q : m_shown)
+        ownerWidth = std::max(ownerWidth, ownerMetrics.horizontalAdvance(q.owner));
     std::array<int, 4> counts {};
     for (size_t i = 0; i < m_shown.size(); ++i) {
         const Shown &q = m_shown[i];
         Section &s = m_sections[size_t(q.function)];
-        auto *button = new QuoteButton(q.quote, s.empty->parentWidget());
-        button->setAccessibleName(tr("%1: %2").arg(functionName(q.function), button->text()));
+        auto *button = new QuoteButton(q.quote, q.owner, ownerWidth, s.empty->parentWidget());
+        button->setAccessibleName(q.owner.isEmpty()
+                ? tr("%1: %2").arg(functionName(q.function), button->text())
+                : tr("%1, coded by %2: %3").arg(functionName(q.function), q.owner, button->text()));
         const AnnotationId id = q.id;
         connect(button, &QAbstractButton::clicked, this, [this, i, id] {
             setCurrent(int(i));

@@ -3,10 +3,12 @@
 // function has a section, always all four and always in the order problem, cause, evaluation,
 // remedy: a header with the function's badge, name and number of spans, then its spans as
 // one-line quotes in reading order. A function with nothing coded keeps its section and says so,
-// because a missing function is itself part of how an article frames its issue.
+// because a missing function is itself part of how an article frames its issue. In a lead's view
+// of every coder's spans each quote says whose it is (the coder's pseudonym, never a name).
 
 #include "core/model/annotation.h"
 
+#include <QHash>
 #include <QWidget>
 
 #include <array>
@@ -30,6 +32,12 @@ public:
     // the keyboard's current quote if they are still among `spans`; if nothing shown changes
     // (an edit of a note or an attribute), the quotes themselves stay as they are.
     void setSpans(const QString &articleText, const std::vector<Annotation> &spans);
+    // The pseudonyms of the spans' coders, by coder id: when set (a lead showing every coder's
+    // spans), each quote starts with its coder's pseudonym, and its tooltip and accessible name
+    // name it. Empty (the default): one person's spans, no names. Call setSpans() after it.
+    void setSpanOwners(const QHash<qint64, QString> &pseudonymByCoder);
+    // The pseudonym shown with span `id`'s quote, or empty.
+    QString spanOwner(AnnotationId id) const;
     // Marks the quote of span `id` as selected and scrolls it into view. An id that is not on
     // the card, or an invalid id, clears the mark.
     void setSelectedSpan(AnnotationId id);
@@ -60,6 +68,7 @@ private:
         FramingFunction function;
         TextRange range;
         QString quote;
+        QString owner; // the coder's pseudonym, or empty
         friend bool operator==(const Shown &, const Shown &) = default;
     };
     QWidget *makeSection(FramingFunction function, Section &section);
@@ -71,6 +80,7 @@ private:
     std::array<Section, 4> m_sections;
     std::vector<Shown> m_shown; // in the order shown: by function, then reading order
     std::vector<QWidget *> m_quoteButtons; // one per entry of m_shown
+    QHash<qint64, QString> m_owners; // pseudonym by coder id (setSpanOwners)
     AnnotationId m_selected;
     int m_current = -1; // index of the keyboard's current quote, or -1
 };

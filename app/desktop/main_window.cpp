@@ -685,11 +685,13 @@ void MainWindow::refreshArticle()
         return;
     const ArticleDocument &doc = m_session->document();
     const std::vector<Annotation> &spans = doc.spans();
-    // Every coder's spans carry their coder's pseudonym.
-    m_reading->setSpanOwners(
-        m_session->showsAllCoders() ? m_session->pseudonyms() : QHash<qint64, QString> {});
+    // Every coder's spans carry their coder's pseudonym, in the text and on the frame card.
+    const QHash<qint64, QString> owners =
+        m_session->showsAllCoders() ? m_session->pseudonyms() : QHash<qint64, QString> {};
+    m_reading->setSpanOwners(owners);
     m_reading->setSpans(spans);
     m_legend->refresh();
+    m_card->setSpanOwners(owners);
     m_card->setSpans(doc.article().text, spans);
     m_items->setArticle(m_article, doc.answers());
     if (std::none_of(
