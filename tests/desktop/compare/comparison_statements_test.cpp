@@ -125,7 +125,8 @@ Costs adjudicationCosts(int articles, int sentences)
     REQUIRE(second.spans.size() == 2);
     const auto byC01 = std::ranges::find(second.spans, study.c01, &Annotation::coder);
     REQUIRE(byC01 != second.spans.end());
-    w.selectSpans({byC01->id});
+    // Choosing spans shows them in the columns from the document: no read at all.
+    CHECK(costOf([&] { w.selectSpans({byC01->id}); }) == Cost {});
     costs.accept = costOf([&] { REQUIRE(w.acceptSelected()); });
     CHECK(w.passages()[1].isResolved());
     auto gold = session.project().goldAnnotations(article);
