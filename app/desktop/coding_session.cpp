@@ -260,10 +260,11 @@ Status CodingSession::applyProjectEdit(std::unique_ptr<Edit> edit)
     return push(std::move(edit), ArticleId {}, {});
 }
 
-Status CodingSession::applyArticleEdit(
+void CodingSession::pushApplied(
     std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched)
 {
-    return push(std::move(edit), article, touched);
+    m_undo.push(new EditCommand(this, std::move(edit), article, touched));
+    changed(article, touched);
 }
 
 Status CodingSession::addSpan(ArticleId article, FramingFunction function, TextRange range)

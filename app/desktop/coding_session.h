@@ -83,10 +83,10 @@ public:
     // An edit about no article (People's changes): applied and put on the undo stack the same
     // way.
     Status applyProjectEdit(std::unique_ptr<Edit> edit);
-    // An edit about `article` that changes `touched` of its documents (a lead's decision in the
-    // comparison window): applied and put on the undo stack the same way.
-    Status applyArticleEdit(
-        std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched);
+    // An edit about `article` that the caller has applied and whose refusal it reports itself (a
+    // lead's decision in the comparison window, which says so in its own window): put on the
+    // undo stack, and `touched` of the open documents read again, as after the changes above.
+    void pushApplied(std::unique_ptr<Edit> edit, ArticleId article, ArticleDocument::Parts touched);
     Status changeSpan(AnnotationId id, const AnnotationContent &content);
     Status deleteSpan(AnnotationId id);
     Status linkSpans(AnnotationId source, AnnotationId target, const QString &type);

@@ -847,14 +847,16 @@ void ComparisonWindow::showMessage(const QString &text, bool error)
 
 bool ComparisonWindow::push(std::unique_ptr<Edit> edit, ArticleDocument::Parts touched)
 {
-    const QString text = edit->text();
-    // The session applies it, puts it on the undo stack and reads `touched` into the comparison
-    // document; its articleChanged then updates the queue's row and the article shown here (as
-    // on undo and redo).
-    if (auto st = m_session->applyArticleEdit(std::move(edit), m_article, touched); !st) {
+    // A refusal is said here, in the window the lead decides in.
+    if (auto st = m_session->project().apply(*edit); !st) {
         showMessage(st.error().toString(), true);
         return false;
     }
+    const QString text = edit->text();
+    // The session puts it on the undo stack and reads `touched` into the comparison document;
+    // its articleChanged then updates the queue's row and the article shown here (as on undo and
+    // redo).
+    m_session->pushApplied(std::move(edit), m_article, touched);
     m_rationale->clear();
     // The next key (N, A, …) goes to the comparison, not into the rationale just used.
     if (m_rationale->hasFocus())

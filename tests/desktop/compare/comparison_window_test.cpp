@@ -23,6 +23,7 @@
 #include <QLineEdit>
 #include <QPushButton>
 #include <QSet>
+#include <QSignalSpy>
 #include <QTest>
 #include <QTreeWidget>
 #include <QUndoStack>
@@ -349,12 +350,15 @@ TEST_CASE("edit decides a gold span with the lead's own function and boundaries"
     CHECK(it->content.function == FramingFunction::Remedy);
     CHECK(it->quote == OffsetMap::slice(text->text, narrower));
 
-    // An empty range is refused with a message, and nothing is pushed.
+    // An empty range is refused with a message in this window (not also on the desk, which
+    // shows the session's errors), and nothing is pushed.
     const int steps = f.session->undoStack()->count();
+    QSignalSpy deskErrors(f.session.get(), &CodingSession::errorOccurred);
     c.content.range = TextRange {narrower.start, narrower.start};
     CHECK_FALSE(w.decide(c));
     CHECK_FALSE(w.lastMessage().isEmpty());
     CHECK(f.session->undoStack()->count() == steps);
+    CHECK(deskErrors.isEmpty());
 }
 
 TEST_CASE("a click in a coder's column makes the passage current and chooses that coder's spans")
