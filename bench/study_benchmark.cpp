@@ -33,7 +33,7 @@
 #include "core/extract/position_baseline.h"
 #include "core/project/coding_import.h"
 #include "core/project/project.h"
-#include "core/project/study_design.h"
+#include "core/project/study_progress.h"
 
 #include <QApplication>
 #include <QDir>
@@ -251,7 +251,7 @@ int main(int argc, char **argv)
         if (!ok)
             fail("reliability", Error {ErrorCode::Internal, window.errorMessage(), {}, {}, 0, 0});
     });
-    timed("progress board", n, 3, [&] { check(StudyDesign::progressBoard(project), "progress"); });
+    timed("progress board", n, 3, [&] { check(StudyProgress::board(project), "progress"); });
     timed("report HTML + PDF (1000 replicates)", n, 3, [&] {
         ReportOptions options;
         check(writeReport(project, options, QDir(dir).filePath(QStringLiteral("r.html"))),

@@ -2,8 +2,11 @@
 // articles, training feedback, the progress board and the effort setting (issue 7).
 
 #include "app/cli/cli_output.h"
+#include "core/project/assignment_plans.h"
 #include "core/project/project.h"
-#include "core/project/study_design.h"
+#include "core/project/study_progress.h"
+#include "core/project/subsample_draw.h"
+#include "core/project/training_feedback.h"
 
 #include <QCoreApplication>
 #include <QJsonArray>
@@ -105,14 +108,14 @@ QString optionalNumber(const std::optional<double> &v, int decimals = 3)
 
 int runShow(Project &project, std::optional<Phase> phase, bool json)
 {
-    auto rows = StudyDesign::assignmentRows(project, phase);
+    auto rows = AssignmentPlans::rows(project, phase);
     if (!rows)
         return report(rows.error());
     std::vector<Draw> draws;
     for (Phase p : {Phase::Pilot, Phase::Reliability}) {
         if (phase && *phase != p)
             continue;
-        auto d = StudyDesign::recordedDraw(project, p);
+        auto d = SubsampleDraw::recorded(project, p);
         if (!d)
             return report(d.error());
         if (*d)
@@ -126,7 +129,7 @@ int runShow(Project &project, std::optional<Phase> phase, bool json)
                 {QStringLiteral("status"), r.status}});
         QJsonArray drawList;
         for (const Draw &d : draws)
-            drawList.append(StudyDesign::drawJson(d));
+            drawList.append(SubsampleDraw::toJson(d));
         printJson(QJsonObject {
             {QStringLiteral("assignments"), list}, {QStringLiteral("draws"), drawList}});
         return ExitOk;
@@ -155,11 +158,11 @@ int runShow(Project &project, std::optional<Phase> phase, bool json)
 
 int runProgress(Project &project, std::optional<Phase> phase, bool json)
 {
-    auto board = StudyDesign::progressBoard(project, phase);
+    auto board = StudyProgress::board(project, phase);
     if (!board)
         return report(board.error());
     if (json) {
-        printJson(StudyDesign::progressBoardJson(*board));
+        printJson(StudyProgress::boardJson(*board));
         return ExitOk;
     }
     out(CliText::tr("%1  %2  %3  %4  %5  %6  %7")
@@ -202,11 +205,11 @@ int runProgress(Project &project, std::optional<Phase> phase, bool json)
 
 int runTraining(Project &project, const TrainingRequest &request, bool json)
 {
-    auto fb = StudyDesign::trainingFeedback(project, request);
+    auto fb = Training::feedback(project, request);
     if (!fb)
         return report(fb.error());
     if (json) {
-        printJson(StudyDesign::trainingFeedbackJson(*fb));
+        printJson(Training::feedbackJson(*fb));
         return ExitOk;
     }
     out(CliText::tr("Training feedback for %1 against the master coding of %2 (%3 units)")
@@ -457,7 +460,7 @@ int runAssign(const QStringList &arguments)
         return report(project.error());
 
     if (withdrawnPhase) {
-        auto withdrawn = StudyDesign::withdrawDraw(*project, *withdrawnPhase);
+        auto withdrawn = SubsampleDraw::withdraw(*project, *withdrawnPhase);
         if (!withdrawn)
             return report(withdrawn.error());
         const int count = int(*withdrawn);
@@ -479,7 +482,7 @@ int runAssign(const QStringList &arguments)
         return runTraining(*project, trainingRequest, asJson);
     if (parser.isSet(effort)) {
         const bool on = parser.value(effort) == QStringLiteral("on");
-        if (auto st = StudyDesign::setEffortPerCoderVisible(*project, on, CoderId {}); !st)
+        if (auto st = StudyProgress::setEffortPerCoderVisible(*project, on, CoderId {}); !st)
             return report(st.error());
         if (asJson)
             printJson(QJsonObject {{QStringLiteral("effort_per_coder"), on}});
@@ -490,14 +493,14 @@ int runAssign(const QStringList &arguments)
     }
 
     if (parser.isSet(draw)) {
-        auto planned = StudyDesign::planDraw(*project, drawRequest);
+        auto planned = SubsampleDraw::plan(*project, drawRequest);
         if (!planned)
             return report(planned.error());
         if (!parser.isSet(dryRun))
-            if (auto st = StudyDesign::commitDraw(*project, *planned); !st)
+            if (auto st = SubsampleDraw::commit(*project, *planned); !st)
                 return report(st.error());
         if (asJson) {
-            QJsonObject o = StudyDesign::drawJson(*planned);
+            QJsonObject o = SubsampleDraw::toJson(*planned);
             o.insert(QStringLiteral("written"), !parser.isSet(dryRun));
             printJson(o);
         } else {
@@ -510,8 +513,8 @@ int runAssign(const QStringList &arguments)
     }
 
     Result<AssignmentPlan> plan = parser.isSet(rest)
-        ? StudyDesign::planRest(*project, restRequest)
-        : StudyDesign::planArticles(
+        ? AssignmentPlans::planRest(*project, restRequest)
+        : AssignmentPlans::planArticles(
             *project, *phaseFilter, splitList(parser.value(articles)), coderList);
     if (!plan)
         return report(plan.error());
@@ -521,7 +524,7 @@ int runAssign(const QStringList &arguments)
             {QStringLiteral("seed"), QString::number(seedValue)},
             {QStringLiteral("coders"), QJsonArray::fromStringList(coderList)}};
     if (!parser.isSet(dryRun))
-        if (auto st = StudyDesign::commitPlan(*project, *plan, record); !st)
+        if (auto st = AssignmentPlans::commit(*project, *plan, record); !st)
             return report(st.error());
     if (asJson) {
         QJsonObject o = planJson(*plan);

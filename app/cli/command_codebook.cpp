@@ -2,8 +2,9 @@
 // between two versions, and list annotations made under an older version (issue 7).
 
 #include "app/cli/cli_output.h"
+#include "core/project/codebook_versions.h"
+#include "core/project/outdated_annotations.h"
 #include "core/project/project.h"
-#include "core/project/study_design.h"
 
 #include <QCoreApplication>
 #include <QJsonArray>
@@ -118,20 +119,20 @@ int runCodebook(const QStringList &arguments)
         auto before = project->codebook();
         if (!before)
             return report(before.error());
-        auto added = StudyDesign::addCodebookVersionFromFile(
+        auto added = CodebookVersions::addFromFile(
             *project, parser.value(update), parser.value(note), author);
         if (!added)
             return report(added.error());
-        auto d = StudyDesign::codebookDiff(*project, before->number, added->number);
+        auto d = CodebookVersions::diffBetween(*project, before->number, added->number);
         if (!d)
             return report(d.error());
         if (asJson) {
-            QJsonObject o = StudyDesign::codebookDiffJson(*d);
+            QJsonObject o = CodebookVersions::diffJson(*d);
             o.insert(QStringLiteral("version"), added->number);
             printJson(o);
         } else {
             out(CliText::tr("Codebook version %1 added.").arg(added->number));
-            out(StudyDesign::codebookDiffText(*d));
+            out(CodebookVersions::diffText(*d));
         }
         return ExitOk;
     }
@@ -143,18 +144,18 @@ int runCodebook(const QStringList &arguments)
                 return report(current.error());
             to = current->number;
         }
-        auto d = StudyDesign::codebookDiff(*project, *from, *to);
+        auto d = CodebookVersions::diffBetween(*project, *from, *to);
         if (!d)
             return report(d.error());
         if (asJson)
-            printJson(StudyDesign::codebookDiffJson(*d));
+            printJson(CodebookVersions::diffJson(*d));
         else
-            out(StudyDesign::codebookDiffText(*d));
+            out(CodebookVersions::diffText(*d));
         return ExitOk;
     }
 
     if (showNumber) {
-        auto book = StudyDesign::codebookVersion(*project, *showNumber);
+        auto book = CodebookVersions::version(*project, *showNumber);
         if (!book)
             return report(book.error());
         printJson(book->toJson());
@@ -162,7 +163,7 @@ int runCodebook(const QStringList &arguments)
     }
 
     if (parser.isSet(outdated)) {
-        auto list = StudyDesign::outdatedAnnotations(*project);
+        auto list = OutdatedAnnotations::list(*project);
         if (!list)
             return report(list.error());
         if (asJson) {
@@ -191,7 +192,7 @@ int runCodebook(const QStringList &arguments)
         return ExitOk;
     }
 
-    auto versions = StudyDesign::codebookVersions(*project);
+    auto versions = CodebookVersions::list(*project);
     if (!versions)
         return report(versions.error());
     if (asJson) {

@@ -3,7 +3,7 @@
 #include "core/agreement/agreement_run.h"
 #include "core/project/project.h"
 #include "core/project/saved_frames.h"
-#include "core/project/study_design.h"
+#include "core/project/subsample_draw.h"
 
 #include <QCoreApplication>
 #include <QDateTime>
@@ -393,12 +393,12 @@ Result<ReportData> gatherReportData(const Project &project, const ReportOptions 
     }
     d.goldAnswerArticles = int(goldAnswerArticles.size());
     if (!options.phase || *options.phase == Phase::Reliability) {
-        auto draw = StudyDesign::recordedDraw(project, Phase::Reliability);
+        auto draw = SubsampleDraw::recorded(project, Phase::Reliability);
         if (!draw)
             return std::unexpected(draw.error());
         if (*draw) {
             d.sampleDraw = drawText(**draw);
-            d.drawRecord = StudyDesign::drawJson(**draw);
+            d.drawRecord = SubsampleDraw::toJson(**draw);
         }
     }
     d.goldDeciders = QStringList(deciders.begin(), deciders.end());

@@ -1,7 +1,7 @@
 #include "core/project/annotation_edits.h"
 
 #include "core/model/logging.h"
-#include "core/project/study_design.h"
+#include "core/project/assignment_plans.h"
 #include "core/store/annotation_table.h"
 #include "core/store/article_table.h"
 #include "core/store/codebook_table.h"
@@ -89,7 +89,7 @@ Status AddAnnotationEdit::apply(Database &db)
     FOURFOLD_TRY_STATUS(
         validateSpanContent(db, row.article, row.content, &row.quote, &row.codebookVersion));
     // The phase follows the coder's assignment of the article (issue 7).
-    auto phase = StudyDesign::phaseForNewCoding(db, row.article, row.coder, row.phase);
+    auto phase = AssignmentPlans::phaseForNewCoding(db, row.article, row.coder, row.phase);
     if (!phase)
         return std::unexpected(phase.error());
     row.phase = *phase;
@@ -275,7 +275,8 @@ Status SetJudgementEdit::apply(Database &db)
         return std::unexpected(book.error());
     FOURFOLD_TRY_STATUS(book->validateJudgement(m_after.itemKey, m_after.value));
     // The phase follows the coder's assignment of the article (issue 7).
-    auto phase = StudyDesign::phaseForNewCoding(db, m_after.article, m_after.coder, m_after.phase);
+    auto phase =
+        AssignmentPlans::phaseForNewCoding(db, m_after.article, m_after.coder, m_after.phase);
     if (!phase)
         return std::unexpected(phase.error());
     m_after.phase = *phase;
@@ -333,7 +334,7 @@ QString WithdrawJudgementEdit::text() const
 Status WithdrawJudgementEdit::apply(Database &db)
 {
     // The answer in the phase the coder codes the article in, as SetJudgementEdit stored it.
-    auto phase = StudyDesign::phaseForNewCoding(db, m_article, m_coder, m_phase);
+    auto phase = AssignmentPlans::phaseForNewCoding(db, m_article, m_coder, m_phase);
     if (!phase)
         return std::unexpected(phase.error());
     auto existing = store::judgement(db, m_article, m_coder, m_itemKey, *phase);

@@ -10,7 +10,7 @@
 //   first lead of a project that has no enabled lead yet. A lead is added with a passphrase;
 //   nobody is added to a coder copy. The last enabled lead cannot be disabled.
 // - Pseudonyms are unique; a disabled person keeps their codings and takes no new assignments
-//   (StudyDesign and Project::assign refuse them).
+//   (AssignmentPlans, SubsampleDraw and Project::assign refuse them).
 //
 // What this protects: the shared desk, against a careless or curious look at other coders'
 // spans. Not someone who reads the SQLite file directly (or runs any program on it): for real

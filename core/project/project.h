@@ -165,7 +165,12 @@ private:
     // Facades of core that sit beside Project and share its connection (design.md §2).
     friend class ExtractorRuns;
     friend class CoderCopies;
-    friend class StudyDesign;
+    friend class AssignmentPlans;
+    friend class SubsampleDraw;
+    friend class CodebookVersions;
+    friend class OutdatedAnnotations;
+    friend class Training;
+    friend class StudyProgress;
     friend class CodingScope;
     friend class TeamProject;
     friend class People;

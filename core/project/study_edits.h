@@ -1,7 +1,8 @@
 #pragma once
-// The study design's writes as undoable edits (made and checked by StudyDesign: assignEdit,
-// drawEdit, effortEdit; see core/project/study_design.h). Each holds resolved ids and copied
-// values; the CLI applies it through Project::apply, the desktop pushes it on its undo stack.
+// The study design's writes as undoable edits (made and checked by AssignmentPlans::edit,
+// SubsampleDraw::edit and withdrawEdit, StudyProgress::effortEdit). Each holds resolved ids and
+// copied values; the CLI applies it through Project::apply, the desktop pushes it on its undo
+// stack.
 
 #include "core/model/annotation.h"
 #include "core/project/edit.h"

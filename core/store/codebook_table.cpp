@@ -10,8 +10,8 @@
 
 namespace fourfold::store {
 
-Result<CodebookVersionId> insertCodebookVersion(
-    Database &db, const Codebook &codebook, const QString &note, CoderId author)
+Result<CodebookVersionId> insertCodebookVersion(Database &db, const Codebook &codebook,
+    const QString &note, CoderId author, const QString &uuid)
 {
     auto next =
         scalar(db, QStringLiteral("SELECT coalesce(max(number), 0) + 1 FROM codebook_version"));
@@ -22,7 +22,7 @@ Result<CodebookVersionId> insertCodebookVersion(
                                           "nullif(?6, 0))"));
     if (!stmt)
         return std::unexpected(stmt.error());
-    stmt->bind(1, newUuid())
+    stmt->bind(1, uuid.isEmpty() ? newUuid() : uuid)
         .bind(2, *next)
         .bind(3, now())
         .bind(4, note)
@@ -30,6 +30,30 @@ Result<CodebookVersionId> insertCodebookVersion(
         .bind(6, author.value);
     FOURFOLD_TRY_STATUS(stmt->run());
     return CodebookVersionId {db.lastInsertRowId()};
+}
+
+Result<qint64> codebookVersionUses(const Database &db, const QString &uuid)
+{
+    auto stmt = db.prepare(QStringLiteral(
+        "SELECT (SELECT count(*) FROM annotation WHERE codebook_version_id = v.id) + "
+        "(SELECT count(*) FROM judgement WHERE codebook_version_id = v.id) "
+        "FROM codebook_version v WHERE v.uuid = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, uuid);
+    auto row = stmt->step();
+    if (!row)
+        return std::unexpected(row.error());
+    return *row ? stmt->columnInt(0) : qint64(0);
+}
+
+Status deleteCodebookVersion(Database &db, const QString &uuid)
+{
+    auto stmt = db.prepare(QStringLiteral("DELETE FROM codebook_version WHERE uuid = ?1"));
+    if (!stmt)
+        return std::unexpected(stmt.error());
+    stmt->bind(1, uuid);
+    return stmt->run();
 }
 
 namespace {

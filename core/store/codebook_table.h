@@ -14,9 +14,13 @@ class Database;
 namespace store {
 
 // Stores `codebook` as the next version (number = current + 1), made by `author` (invalid =
-// unknown), and returns its row id.
-Result<CodebookVersionId> insertCodebookVersion(
-    Database &db, const Codebook &codebook, const QString &note, CoderId author = {});
+// unknown), under `uuid` (empty: a new one), and returns its row id.
+Result<CodebookVersionId> insertCodebookVersion(Database &db, const Codebook &codebook,
+    const QString &note, CoderId author = {}, const QString &uuid = {});
+// How many spans and answers (live or not) refer to the version `uuid`.
+Result<qint64> codebookVersionUses(const Database &db, const QString &uuid);
+// Removes the version `uuid` (nothing may refer to it: codebookVersionUses).
+Status deleteCodebookVersion(Database &db, const QString &uuid);
 // How many times a stored codebook was parsed in this process (parsed codebooks are kept by
 // their version's uuid, so this counts distinct versions read). For tests that count work.
 qint64 codebookParses();

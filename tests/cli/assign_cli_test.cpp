@@ -1,7 +1,8 @@
 // fourfold-cli assign and codebook as a script sees them: JSON, exit codes, one-line errors,
 // and the same draw as the core for the same seed.
 #include "core/project/article_status_edit.h"
-#include "core/project/study_design.h"
+#include "core/project/assignment_plans.h"
+#include "core/project/subsample_draw.h"
 #include "core/project/testing/project_database.h"
 #include "tests/project/study_fixture.h"
 #include "tests/support/cli_run.h"
@@ -50,7 +51,7 @@ TEST_CASE("assign --draw: the core's sample for the seed, recorded and shown")
     r.stratify = Stratum::Outlet;
     r.seed = 99;
     r.coders = {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")};
-    auto expected = StudyDesign::planDraw(f.project, r);
+    auto expected = SubsampleDraw::plan(f.project, r);
     REQUIRE(expected);
 
     CliRun run = cli(
@@ -225,7 +226,7 @@ TEST_CASE("assign --withdraw-draw: withdrawn before coding, refused after, with 
         const QJsonObject o = cliJson(run);
         CHECK(o.value(QStringLiteral("phase")).toString() == QStringLiteral("reliability"));
         CHECK(o.value(QStringLiteral("withdrawn_assignments")).toInt() == 6); // 3 articles × 2
-        auto rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+        auto rows = AssignmentPlans::rows(f.project, Phase::Reliability);
         REQUIRE(rows);
         CHECK(rows->empty());
         // The event log (the dump with it) holds the withdrawal and one removal per assignment.
@@ -257,7 +258,7 @@ TEST_CASE("assign --withdraw-draw: withdrawn before coding, refused after, with 
         CHECK(run.err.startsWith(QStringLiteral(
             "fourfold-cli: The reliability subsample cannot be withdrawn: coding has started on "
             "1 of its 6 assignments")));
-        auto rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+        auto rows = AssignmentPlans::rows(f.project, Phase::Reliability);
         REQUIRE(rows);
         CHECK(rows->size() == 6);
     }

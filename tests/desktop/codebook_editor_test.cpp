@@ -5,8 +5,8 @@
 #include "app/desktop/lead_windows.h"
 #include "app/desktop/main_window.h"
 #include "app/desktop/message_bar.h"
+#include "core/project/codebook_versions.h"
 #include "core/project/project.h"
-#include "core/project/study_design.h"
 #include "tests/support/cli_run.h"
 #include "tests/support/test_support.h"
 
@@ -200,7 +200,7 @@ TEST_CASE("a codebook change in the editor gives the version diff and outdated l
     textField(w, QStringLiteral("functions[1].definition"))->setPlainText(kDefinition);
     CHECK_FALSE(w.saveAsNewVersion(QStringLiteral("too late")));
     CHECK(w.messageBar()->kind() == MessageBar::Kind::Warning);
-    auto versions = StudyDesign::codebookVersions(*project);
+    auto versions = CodebookVersions::list(*project);
     REQUIRE(versions);
     CHECK(versions->back().number == from + 2);
 }
@@ -210,7 +210,7 @@ TEST_CASE("an invalid codebook draft is shown at its field and nothing is stored
     SampleCopy f;
     auto project = Project::open(f.path);
     REQUIRE(project);
-    auto versionsBefore = StudyDesign::codebookVersions(*project);
+    auto versionsBefore = CodebookVersions::list(*project);
     REQUIRE(versionsBefore);
     CodebookEditor w(*project, leadOf(*project));
     w.show();
@@ -261,7 +261,7 @@ TEST_CASE("an invalid codebook draft is shown at its field and nothing is stored
     answers->setPlainText(answers->toPlainText() + QStringLiteral("\nnone"));
     CHECK(w.fieldError(itemValues) == QStringLiteral("“none” is listed twice (lines 5 and 6)."));
 
-    auto versionsAfter = StudyDesign::codebookVersions(*project);
+    auto versionsAfter = CodebookVersions::list(*project);
     REQUIRE(versionsAfter);
     CHECK(versionsAfter->size() == versionsBefore->size());
     auto stored = project->codebook();

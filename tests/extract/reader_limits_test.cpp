@@ -6,8 +6,8 @@
 #include "core/io/article_reader.h"
 #include "core/io/input_file.h"
 #include "core/io/reliability_table_reader.h"
+#include "core/project/codebook_versions.h"
 #include "core/project/coding_import.h"
-#include "core/project/study_design.h"
 #include "tests/project/project_fixture.h"
 #include "tests/support/cli_run.h"
 
@@ -41,7 +41,7 @@ std::vector<std::pair<const char *, std::function<std::optional<Error>(const QSt
     return {
         {"codebook",
             [&fx, errorOf](const QString &path) {
-                return errorOf(StudyDesign::addCodebookVersionFromFile(
+                return errorOf(CodebookVersions::addFromFile(
                     fx.project, path, QStringLiteral("limits"), CoderId {}));
             }},
         {"span file",

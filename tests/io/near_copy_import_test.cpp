@@ -6,7 +6,7 @@
 
 #include "core/project/near_copies.h"
 #include "core/project/project.h"
-#include "core/project/study_design.h"
+#include "core/project/subsample_draw.h"
 #include "tests/support/test_support.h"
 #include "tests/text/near_copy_texts.h"
 
@@ -207,12 +207,12 @@ TEST_CASE("A draw can leave near copies out of its sampling frame", "[io][nearco
     DrawRequest request;
     request.fraction = 1.0;
     request.coders = {QStringLiteral("ann"), QStringLiteral("bob")};
-    auto all = StudyDesign::planDraw(*project, request);
+    auto all = SubsampleDraw::plan(*project, request);
     REQUIRE(all);
     CHECK(all->frameArticles == 8);
     CHECK_FALSE(all->nearCopiesLeftOut);
     request.leaveOutNearCopies = true;
-    auto without = StudyDesign::planDraw(*project, request);
+    auto without = SubsampleDraw::plan(*project, request);
     REQUIRE(without);
     CHECK(without->frameArticles == 6);
     CHECK(without->nearCopiesLeftOut);
@@ -220,7 +220,7 @@ TEST_CASE("A draw can leave near copies out of its sampling frame", "[io][nearco
     CHECK_FALSE(without->articles.contains(QStringLiteral("copy-of-a1")));
     CHECK(without->articles.contains(QStringLiteral("a0")));
     // The choice is kept in the draw's record.
-    auto back = StudyDesign::drawFromJson(StudyDesign::drawJson(*without));
+    auto back = SubsampleDraw::fromJson(SubsampleDraw::toJson(*without));
     REQUIRE(back);
     CHECK(back->nearCopiesLeftOut);
 }

@@ -1,11 +1,11 @@
 // People and who may lead (core/project/people.h): passphrases as Argon2id hashes, sign-in,
 // the lead-only changes, disabled people and coder copies.
 
+#include "core/project/assignment_plans.h"
 #include "core/project/coder_copies.h"
 #include "core/project/edit.h"
 #include "core/project/passphrase.h"
 #include "core/project/people.h"
-#include "core/project/study_design.h"
 #include "core/project/testing/older_lead.h"
 #include "core/project/testing/project_database.h"
 #include "core/store/schema.h"
@@ -236,7 +236,7 @@ TEST_CASE("Rename disable and enable are undoable edits logged without the name"
     REQUIRE_FALSE(refused);
     CHECK(refused.error().code == ErrorCode::InvalidArgument);
     CHECK(refused.error().message.contains(QStringLiteral("C01")));
-    auto plan = StudyDesign::planArticles(f.project, Phase::Production,
+    auto plan = AssignmentPlans::planArticles(f.project, Phase::Production,
         QStringList {QStringLiteral("f2")}, QStringList {QStringLiteral("C01")});
     REQUIRE_FALSE(plan);
     CHECK(plan.error().message.contains(QStringLiteral("disabled")));

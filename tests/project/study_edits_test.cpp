@@ -2,8 +2,10 @@
 // setting each undo to the same database dump and redo to the same rows (times blanked: the
 // assignments' created_at is the redo's), through Project::apply as the CLI and the desk do.
 #include "core/project/annotation_edits.h"
-#include "core/project/study_design.h"
+#include "core/project/assignment_plans.h"
 #include "core/project/study_edits.h"
+#include "core/project/study_progress.h"
+#include "core/project/subsample_draw.h"
 #include "core/project/testing/project_database.h"
 #include "core/store/project_tables.h"
 #include "tests/project/study_fixture.h"
@@ -47,19 +49,19 @@ TEST_CASE("a draw is one edit: undo restores the full dump and redo the same row
     request.size = 5;
     request.seed = 11;
     request.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
-    auto draw = StudyDesign::planDraw(f.project, request);
+    auto draw = SubsampleDraw::plan(f.project, request);
     REQUIRE(draw);
     const QString before = f.dump();
 
-    auto edit = StudyDesign::drawEdit(f.project, *draw, f.lead);
+    auto edit = SubsampleDraw::edit(f.project, *draw, f.lead);
     REQUIRE(edit);
     CHECK_FALSE(draw->drawnAt.isEmpty());
     CHECK((*edit)->rows().size() == 10); // 5 articles × 2 coders
     REQUIRE(f.project.apply(**edit));
-    auto rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+    auto rows = AssignmentPlans::rows(f.project, Phase::Reliability);
     REQUIRE(rows);
     CHECK(rows->size() == 10);
-    auto recorded = StudyDesign::recordedDraw(f.project, Phase::Reliability);
+    auto recorded = SubsampleDraw::recorded(f.project, Phase::Reliability);
     REQUIRE(recorded);
     REQUIRE(recorded->has_value());
     CHECK((*recorded)->articles == draw->articles);
@@ -73,7 +75,7 @@ TEST_CASE("a draw is one edit: undo restores the full dump and redo the same row
 
     REQUIRE(f.project.revert(**edit));
     CHECK(f.dump() == before);
-    recorded = StudyDesign::recordedDraw(f.project, Phase::Reliability);
+    recorded = SubsampleDraw::recorded(f.project, Phase::Reliability);
     REQUIRE(recorded);
     CHECK_FALSE(recorded->has_value());
 
@@ -89,12 +91,12 @@ TEST_CASE("a draw edit made before another draw was recorded is refused and writ
     DrawRequest request;
     request.size = 3;
     request.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
-    auto first = StudyDesign::planDraw(f.project, request);
+    auto first = SubsampleDraw::plan(f.project, request);
     REQUIRE(first);
     auto second = *first;
-    auto late = StudyDesign::drawEdit(f.project, second, f.lead);
+    auto late = SubsampleDraw::edit(f.project, second, f.lead);
     REQUIRE(late);
-    REQUIRE(StudyDesign::commitDraw(f.project, *first));
+    REQUIRE(SubsampleDraw::commit(f.project, *first));
     const QString before = f.dump();
     const Status refused = f.project.apply(**late);
     REQUIRE_FALSE(refused);
@@ -105,17 +107,17 @@ TEST_CASE("a draw edit made before another draw was recorded is refused and writ
 TEST_CASE("dealing the rest is one edit that undo takes back whole")
 {
     StudyEditFixture f;
-    auto plan = StudyDesign::planRest(f.project,
+    auto plan = AssignmentPlans::planRest(f.project,
         RestRequest {RestCoding::Double,
             {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")}, 7});
     REQUIRE(plan);
     REQUIRE(plan->rows.size() == 40); // 20 articles, two coders each
     const QString before = f.dump();
-    auto edit = StudyDesign::assignEdit(f.project, *plan, {}, f.lead);
+    auto edit = AssignmentPlans::edit(f.project, *plan, {}, f.lead);
     REQUIRE(edit);
     CHECK((*edit)->text() == QStringLiteral("Assign 40 article(s)"));
     REQUIRE(f.project.apply(**edit));
-    auto rows = StudyDesign::assignmentRows(f.project, Phase::Production);
+    auto rows = AssignmentPlans::rows(f.project, Phase::Production);
     REQUIRE(rows);
     CHECK(rows->size() == 40);
     const QString applied = f.dump();
@@ -125,7 +127,7 @@ TEST_CASE("dealing the rest is one edit that undo takes back whole")
     CHECK(withoutTimes(f.dump()) == withoutTimes(applied));
 
     // A plan whose assignments exist already is refused before anything is written.
-    auto again = StudyDesign::assignEdit(f.project, *plan);
+    auto again = AssignmentPlans::edit(f.project, *plan);
     REQUIRE_FALSE(again);
     CHECK(again.error().code == ErrorCode::Duplicate);
 }
@@ -134,13 +136,13 @@ TEST_CASE("the effort setting is one edit: undo restores the value before or its
 {
     StudyEditFixture f;
     const QString before = f.dump();
-    auto on = StudyDesign::effortEdit(true, f.lead);
+    auto on = StudyProgress::effortEdit(true, f.lead);
     REQUIRE(f.project.apply(*on));
-    CHECK(*StudyDesign::effortPerCoderVisible(f.project));
+    CHECK(*StudyProgress::effortPerCoderVisible(f.project));
     const QString turnedOn = f.dump();
-    auto off = StudyDesign::effortEdit(false, f.lead);
+    auto off = StudyProgress::effortEdit(false, f.lead);
     REQUIRE(f.project.apply(*off));
-    CHECK_FALSE(*StudyDesign::effortPerCoderVisible(f.project));
+    CHECK_FALSE(*StudyProgress::effortPerCoderVisible(f.project));
     REQUIRE(f.project.revert(*off));
     CHECK(f.dump() == turnedOn);
     REQUIRE(f.project.revert(*on));
@@ -157,9 +159,9 @@ Draw commitFiveByTwo(StudyEditFixture &f)
     request.size = 5;
     request.seed = 11;
     request.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
-    auto draw = StudyDesign::planDraw(f.project, request);
+    auto draw = SubsampleDraw::plan(f.project, request);
     REQUIRE(draw);
-    auto edit = StudyDesign::drawEdit(f.project, *draw, f.lead);
+    auto edit = SubsampleDraw::edit(f.project, *draw, f.lead);
     REQUIRE(edit);
     REQUIRE(f.project.apply(**edit));
     return *draw;
@@ -174,15 +176,15 @@ TEST_CASE("a draw nobody coded is withdrawn: its assignments are tombstones and 
     const Draw draw = commitFiveByTwo(f);
     const QString drawn = f.dump();
 
-    auto edit = StudyDesign::withdrawDrawEdit(f.project, Phase::Reliability, f.lead);
+    auto edit = SubsampleDraw::withdrawEdit(f.project, Phase::Reliability, f.lead);
     REQUIRE(edit);
     CHECK((*edit)->text() == QStringLiteral("Withdraw the reliability subsample"));
     REQUIRE(f.project.apply(**edit));
     CHECK((*edit)->withdrawnAssignments() == 10);
-    auto rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+    auto rows = AssignmentPlans::rows(f.project, Phase::Reliability);
     REQUIRE(rows);
     CHECK(rows->empty());
-    auto recorded = StudyDesign::recordedDraw(f.project, Phase::Reliability);
+    auto recorded = SubsampleDraw::recorded(f.project, Phase::Reliability);
     REQUIRE(recorded);
     CHECK_FALSE(recorded->has_value());
     // The rows stay as tombstones (10 of them), unlike before the draw.
@@ -212,10 +214,10 @@ TEST_CASE("a draw nobody coded is withdrawn: its assignments are tombstones and 
     // its undo leaves them tombstones.
     Draw again = draw;
     again.drawnAt.clear();
-    auto redraw = StudyDesign::drawEdit(f.project, again, f.lead);
+    auto redraw = SubsampleDraw::edit(f.project, again, f.lead);
     REQUIRE(redraw);
     REQUIRE(f.project.apply(**redraw));
-    rows = StudyDesign::assignmentRows(f.project, Phase::Reliability);
+    rows = AssignmentPlans::rows(f.project, Phase::Reliability);
     REQUIRE(rows);
     CHECK(rows->size() == 10);
     REQUIRE(f.project.revert(**redraw));
@@ -236,7 +238,7 @@ TEST_CASE("a draw with one span on it is not withdrawn, and the refusal says how
     REQUIRE(f.project.apply(span));
     const QString before = f.dump();
 
-    auto refused = StudyDesign::withdrawDraw(f.project, Phase::Reliability);
+    auto refused = SubsampleDraw::withdraw(f.project, Phase::Reliability);
     REQUIRE_FALSE(refused);
     CHECK(refused.error().code == ErrorCode::NotAllowed);
     CHECK(refused.error().message.contains(QStringLiteral("coding has started on 1 of its 10")));
@@ -246,12 +248,12 @@ TEST_CASE("a draw with one span on it is not withdrawn, and the refusal says how
     auto c01 = f.project.coderByPseudonym(QStringLiteral("C01"));
     REQUIRE(c01);
     REQUIRE(f.project.addCodingTime(**article, (*c01)->id, 30));
-    refused = StudyDesign::withdrawDraw(f.project, Phase::Reliability);
+    refused = SubsampleDraw::withdraw(f.project, Phase::Reliability);
     REQUIRE_FALSE(refused);
     CHECK(refused.error().message.contains(QStringLiteral("on 2 of its 10")));
 
     // A phase without a draw has nothing to withdraw.
-    auto none = StudyDesign::withdrawDraw(f.project, Phase::Pilot);
+    auto none = SubsampleDraw::withdraw(f.project, Phase::Pilot);
     REQUIRE_FALSE(none);
     CHECK(none.error().code == ErrorCode::NotFound);
 }

@@ -32,6 +32,25 @@ inline QByteArray twentyArticles()
     return out;
 }
 
+// The twenty articles, four coders C01–C04 and a lead L01.
+struct StudyFixture : ProjectFixture {
+    StudyFixture()
+    {
+        importJsonl(twentyArticles());
+        for (const char *p : {"C01", "C02", "C03", "C04"})
+            addCoder(QString::fromLatin1(p));
+        lead = addCoder(QStringLiteral("L01"), CoderRole::Lead);
+    }
+    CoderId coder(const char *pseudonym)
+    {
+        auto c = project.coderByPseudonym(QString::fromLatin1(pseudonym));
+        REQUIRE(c);
+        REQUIRE(c->has_value());
+        return (*c)->id;
+    }
+    CoderId lead;
+};
+
 // One invented article of exactly ten sentences in one paragraph.
 inline const QByteArray kTenSentences =
     "{\"id\":\"t1\",\"title\":\"Ten\",\"language\":\"en\",\"text\":\"Alpha is the first. Bravo "

@@ -12,7 +12,8 @@
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/project.h"
-#include "core/project/study_design.h"
+#include "core/project/study_progress.h"
+#include "core/project/subsample_draw.h"
 #include "core/scoring/run_agreement.h"
 #include "tests/support/cli_run.h"
 #include "tests/support/test_support.h"
@@ -87,7 +88,7 @@ Snapshot snapshot(const QString &path)
     }
     s.figures.insert(QStringLiteral("agree"), agree);
 
-    auto board = StudyDesign::progressBoard(*project);
+    auto board = StudyProgress::board(*project);
     REQUIRE(board);
     QJsonArray progress;
     for (const ProgressRow &row : board->rows)
@@ -223,7 +224,7 @@ TEST_CASE("a draw nobody coded and an article in progress change no figure until
     {
         auto project = Project::open(path);
         REQUIRE(project);
-        auto draw = StudyDesign::recordedDraw(*project, Phase::Reliability);
+        auto draw = SubsampleDraw::recorded(*project, Phase::Reliability);
         REQUIRE(draw);
         REQUIRE(*draw);
         drawnArticle = (*draw)->articles.front();

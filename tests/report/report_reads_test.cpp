@@ -2,7 +2,7 @@
 // whatever the size of the study (the report's figures themselves are checked against
 // `fourfold-cli agree` in report_writer_test.cpp, the board's in tests/study).
 #include "app/report/report_data.h"
-#include "core/project/study_design.h"
+#include "core/project/study_progress.h"
 #include "tests/project/double_coded_project.h"
 
 using namespace fourfold;
@@ -29,12 +29,12 @@ TEST_CASE("the progress board reads the same number of statements for 8 and for 
     qint64 atSmall = 0, atLarge = 0;
     std::optional<double> agreement;
     atSmall = small.statementsRunBy([&] {
-        auto board = StudyDesign::progressBoard(small.project);
+        auto board = StudyProgress::board(small.project);
         REQUIRE(board);
         REQUIRE_FALSE(board->rows.empty());
         agreement = board->rows.front().agreement;
     });
-    atLarge = large.statementsRunBy([&] { REQUIRE(StudyDesign::progressBoard(large.project)); });
+    atLarge = large.statementsRunBy([&] { REQUIRE(StudyProgress::board(large.project)); });
     CHECK(atSmall == atLarge);
     CHECK(atLarge < 20);
     // The coders' agreement was computed (the board compares finished articles).

@@ -5,10 +5,10 @@
 // keeps one version on both sides and the other in the event log. The server's row-level
 // security is the reference for who may see what (README "What the server enforces").
 
+#include "core/project/codebook_versions.h"
 #include "core/project/gold_edits.h"
 #include "core/project/people.h"
 #include "core/project/project.h"
-#include "core/project/study_design.h"
 #include "core/project/testing/project_database.h"
 #include "core/store/event_log.h"
 #include "core/store/project_tables.h"
@@ -203,11 +203,11 @@ TEST_CASE("A new codebook version and a renamed person reach the files that may 
     Project lead2 = joinAs(p, QStringLiteral("L01"), QStringLiteral("L01-laptop.fourfold"));
     Project c1 = joinAs(p, QStringLiteral("C01"), QStringLiteral("C01.fourfold"));
 
-    auto current = StudyDesign::codebookVersion(*p.main, 1);
+    auto current = CodebookVersions::version(*p.main, 1);
     REQUIRE(current);
     Codebook next = *current;
     next.functions[0].definition += QStringLiteral(" Name the problem as the article does.");
-    REQUIRE(StudyDesign::addCodebookVersion(*p.main, next, QStringLiteral("sharper"), p.lead));
+    REQUIRE(CodebookVersions::add(*p.main, next, QStringLiteral("sharper"), p.lead));
     auto signedIn =
         People::signIn(*p.main, QStringLiteral("L01"), QStringLiteral("ferry harbour dyke"));
     REQUIRE(signedIn);

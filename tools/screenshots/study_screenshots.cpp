@@ -10,6 +10,7 @@
 #include "app/desktop/study/training_feedback_dialog.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
+#include "core/project/codebook_versions.h"
 #include "core/project/project.h"
 #include "tools/screenshots/screenshot_support.h"
 
@@ -83,9 +84,9 @@ int main(int argc, char *argv[])
     bool ok = true;
 
     // Training: every coder and the lead get hb-06; the lead's coding is the master.
-    auto training = StudyDesign::planArticles(p, Phase::Training, {QStringLiteral("hb-06")},
+    auto training = AssignmentPlans::planArticles(p, Phase::Training, {QStringLiteral("hb-06")},
         coders + QStringList {QStringLiteral("L01")});
-    if (!training || !check(StudyDesign::commitPlan(p, *training), "training plan"))
+    if (!training || !check(AssignmentPlans::commit(p, *training), "training plan"))
         return 1;
     using F = FramingFunction;
     ok &= codeTraining(p, QStringLiteral("hb-06"), lead,
@@ -126,7 +127,7 @@ int main(int argc, char *argv[])
                            "take it named or clearly implied.");
         next.functions[size_t(F::Cause)].rules << QStringLiteral(
             "A cause attributed only through a quoted source is still coded as cause.");
-        ok &= bool(StudyDesign::addCodebookVersion(
+        ok &= bool(CodebookVersions::add(
             p, next, QStringLiteral("Pilot: remedies without an actor were coded unevenly"), lead));
     }
     // Work done: the coders finished reliability articles (their sample codings) and took time.

@@ -3,8 +3,9 @@
 #include "app/desktop/codebook/codebook_edit_command.h"
 #include "app/desktop/function_style.h"
 #include "app/desktop/message_bar.h"
+#include "core/project/codebook_versions.h"
+#include "core/project/outdated_annotations.h"
 #include "core/project/project.h"
-#include "core/project/study_design.h"
 
 #include <QAction>
 #include <QComboBox>
@@ -697,10 +698,10 @@ QString CodebookEditor::diffText() const
 {
     if (!m_check.candidate)
         return {};
-    CodebookDiff diff = StudyDesign::diffCodebooks(m_stored, *m_check.candidate);
+    CodebookDiff diff = CodebookVersions::diff(m_stored, *m_check.candidate);
     diff.from = m_stored.number;
     diff.to = m_stored.number + 1;
-    return StudyDesign::codebookDiffText(diff);
+    return CodebookVersions::diffText(diff);
 }
 
 bool CodebookEditor::currentIsStored()
@@ -731,19 +732,19 @@ bool CodebookEditor::saveAsNewVersion(const QString &note)
             tr("The codebook was not saved: the marked field needs a change first."));
         return false;
     }
-    if (StudyDesign::diffCodebooks(m_stored, *m_check.candidate).changes.empty()) {
+    if (CodebookVersions::diff(m_stored, *m_check.candidate).changes.empty()) {
         m_messages->showMessage(MessageBar::Kind::Information,
             tr("Nothing was saved: the draft is the same as version %1.").arg(m_stored.number), {},
             {}, 8);
         return false;
     }
-    auto added = StudyDesign::addCodebookVersion(m_project, *m_check.candidate, note, m_current);
+    auto added = CodebookVersions::add(m_project, *m_check.candidate, note, m_current);
     if (!added) {
         m_messages->showMessage(MessageBar::Kind::Error, added.error().message);
         return false;
     }
     auto book = m_project.codebook();
-    auto outdated = StudyDesign::outdatedAnnotations(m_project);
+    auto outdated = OutdatedAnnotations::list(m_project);
     if (!book || !outdated) {
         m_messages->showMessage(
             MessageBar::Kind::Error, (!book ? book.error() : outdated.error()).message);

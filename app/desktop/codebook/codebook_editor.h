@@ -4,7 +4,7 @@
 // list), and the article-level items (key, question, values, level). Every edit is a step on the
 // editor's own undo stack. The draft is checked with the rules a codebook file is read with, and
 // a failure is shown at its field. "Save as new version…" shows the diff against the current
-// version, asks for a note and stores the draft through StudyDesign::addCodebookVersion — the
+// version, asks for a note and stores the draft through CodebookVersions::add — the
 // call `fourfold-cli codebook --update` makes — then says in the message bar how many annotations
 // are now outdated.
 

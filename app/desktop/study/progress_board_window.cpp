@@ -4,6 +4,7 @@
 #include "app/desktop/study/study_text.h"
 #include "core/agreement/agreement_report.h"
 #include "core/project/project.h"
+#include "core/project/study_progress.h"
 
 #include <QCheckBox>
 #include <QComboBox>
@@ -132,7 +133,7 @@ ProgressBoardWindow::ProgressBoardWindow(Project &project, CoderId current, QWid
 
 void ProgressBoardWindow::setEffortPerCoder(bool on)
 {
-    if (Status st = StudyDesign::setEffortPerCoderVisible(m_project, on, m_current); !st) {
+    if (Status st = StudyProgress::setEffortPerCoderVisible(m_project, on, m_current); !st) {
         m_error->setText(st.error().message);
         m_error->show();
         const QSignalBlocker block(m_effortSwitch);
@@ -148,7 +149,7 @@ void ProgressBoardWindow::refresh()
     const int phaseIndex = m_phase->currentData().toInt();
     const std::optional<Phase> phase =
         phaseIndex < 0 ? std::nullopt : std::optional<Phase>(Phase(phaseIndex));
-    auto board = StudyDesign::progressBoard(m_project, phase);
+    auto board = StudyProgress::board(m_project, phase);
     if (!board) {
         m_error->setText(board.error().message);
         m_error->show();

@@ -5,7 +5,6 @@
 // explanation of why it is off by default (monitoring coders can be regulated at work).
 
 #include "core/model/coder.h"
-#include "core/project/study_design.h"
 
 #include <QWidget>
 

@@ -2,6 +2,8 @@
 
 #include "app/desktop/function_style.h"
 #include "app/desktop/study/study_text.h"
+#include "core/project/codebook_versions.h"
+#include "core/project/outdated_annotations.h"
 #include "core/project/project.h"
 
 #include <QButtonGroup>
@@ -413,7 +415,7 @@ void StudyDesignWindow::loadRecordedDraw()
     showError(m_drawError, {});
     m_plannedDraw.reset();
     m_commitDraw->setEnabled(false);
-    auto recorded = StudyDesign::recordedDraw(m_project, drawPhase());
+    auto recorded = SubsampleDraw::recorded(m_project, drawPhase());
     if (!recorded) {
         m_withdrawDraw->setEnabled(false);
         showError(m_drawError, recorded.error().message);
@@ -455,7 +457,7 @@ void StudyDesignWindow::planDraw()
     request.significance = m_significance->currentData().toDouble();
     request.rarestProportion = m_rarest->value();
     request.leaveOutNearCopies = m_leaveOutNearCopies->isChecked();
-    auto draw = StudyDesign::planDraw(m_project, request);
+    auto draw = SubsampleDraw::plan(m_project, request);
     if (!draw) {
         showError(m_drawError, draw.error().message);
         return;
@@ -471,7 +473,7 @@ void StudyDesignWindow::commitDraw()
         return;
     showError(m_drawError, {});
     Draw draw = *m_plannedDraw;
-    if (Status st = StudyDesign::commitDraw(m_project, draw); !st) {
+    if (Status st = SubsampleDraw::commit(m_project, draw); !st) {
         showError(m_drawError, st.error().message);
         return;
     }
@@ -484,7 +486,7 @@ void StudyDesignWindow::withdrawDraw()
 {
     showError(m_drawError, {});
     const Phase phase = drawPhase();
-    auto edit = StudyDesign::withdrawDrawEdit(m_project, phase, m_current);
+    auto edit = SubsampleDraw::withdrawEdit(m_project, phase, m_current);
     if (!edit) {
         showError(m_drawError, edit.error().message);
         return;
@@ -689,7 +691,7 @@ void StudyDesignWindow::planRest()
     if (!seed)
         return;
     request.seed = *seed;
-    auto plan = StudyDesign::planRest(m_project, request);
+    auto plan = AssignmentPlans::planRest(m_project, request);
     if (!plan) {
         showError(m_restError, plan.error().message);
         return;
@@ -739,7 +741,7 @@ void StudyDesignWindow::commitRest()
     record.insert(QStringLiteral("coding"),
         m_single->isChecked() ? QStringLiteral("single") : QStringLiteral("double"));
     record.insert(QStringLiteral("seed"), m_restSeed->text().trimmed());
-    if (Status st = StudyDesign::commitPlan(m_project, *m_plannedRest, record); !st) {
+    if (Status st = AssignmentPlans::commit(m_project, *m_plannedRest, record); !st) {
         showError(m_restError, st.error().message);
         return;
     }
@@ -815,7 +817,7 @@ QWidget *StudyDesignWindow::buildAssignmentsPage()
 
 void StudyDesignWindow::loadAssignments()
 {
-    auto rows = StudyDesign::assignmentRows(m_project);
+    auto rows = AssignmentPlans::rows(m_project);
     if (!rows) {
         showError(m_giveError, rows.error().message);
         return;
@@ -884,7 +886,8 @@ void StudyDesignWindow::giveArticles()
     for (const QListWidgetItem *i : m_giveArticles->selectedItems())
         articles << i->data(Qt::UserRole).toString();
     const Phase phase = Phase(m_givePhase->currentData().toInt());
-    auto plan = StudyDesign::planArticles(m_project, phase, articles, checkedCoders(m_giveCoders));
+    auto plan =
+        AssignmentPlans::planArticles(m_project, phase, articles, checkedCoders(m_giveCoders));
     if (!plan) {
         showError(m_giveError, plan.error().message);
         return;
@@ -897,7 +900,7 @@ void StudyDesignWindow::giveArticles()
     QJsonObject record;
     record.insert(QStringLiteral("kind"), QStringLiteral("articles"));
     record.insert(QStringLiteral("phase"), phaseKey(phase));
-    if (Status st = StudyDesign::commitPlan(m_project, *plan, record); !st) {
+    if (Status st = AssignmentPlans::commit(m_project, *plan, record); !st) {
         showError(m_giveError, st.error().message);
         return;
     }
@@ -977,7 +980,7 @@ QWidget *StudyDesignWindow::buildCodebookPage()
 void StudyDesignWindow::loadCodebook()
 {
     showError(m_codebookError, {});
-    auto versions = StudyDesign::codebookVersions(m_project);
+    auto versions = CodebookVersions::list(m_project);
     if (!versions) {
         showError(m_codebookError, versions.error().message);
         return;
@@ -1005,7 +1008,7 @@ void StudyDesignWindow::loadCodebook()
     m_diffFrom->setCurrentIndex(std::max(0, n - 2));
     showDiff();
 
-    auto outdated = StudyDesign::outdatedAnnotations(m_project);
+    auto outdated = OutdatedAnnotations::list(m_project);
     if (!outdated) {
         showError(m_codebookError, outdated.error().message);
         return;
@@ -1057,7 +1060,7 @@ void StudyDesignWindow::showDiff()
             m_diff->setHtml(tr("<p>Choose two different versions to compare.</p>"));
         return;
     }
-    auto diff = StudyDesign::codebookDiff(m_project, from, to);
+    auto diff = CodebookVersions::diffBetween(m_project, from, to);
     if (!diff) {
         m_diff->setPlainText(diff.error().message);
         return;
@@ -1141,7 +1144,7 @@ void StudyDesignWindow::addCodebookVersion()
         tr("What changed, and why?"), QLineEdit::Normal, QString(), &ok);
     if (!ok)
         return;
-    auto added = StudyDesign::addCodebookVersionFromFile(m_project, path, note, m_current);
+    auto added = CodebookVersions::addFromFile(m_project, path, note, m_current);
     if (!added) {
         showError(m_codebookError, added.error().message);
         return;

@@ -6,7 +6,8 @@
 // written until the lead presses the page's commit button.
 
 #include "core/model/coder.h"
-#include "core/project/study_design.h"
+#include "core/project/assignment_plans.h"
+#include "core/project/subsample_draw.h"
 
 #include <QWidget>
 

@@ -115,7 +115,7 @@ void TrainingFeedbackDialog::refresh()
     TrainingRequest request;
     request.coder = m_pseudonym;
     request.unit = UnitKind(m_unit->currentData().toInt());
-    auto feedback = StudyDesign::trainingFeedback(m_project, request);
+    auto feedback = Training::feedback(m_project, request);
     m_table->setRowCount(0);
     if (!feedback) {
         m_feedback.reset();

@@ -4,7 +4,7 @@
 // should know how they are doing; Krippendorff's "accuracy" is agreement with a known standard).
 
 #include "core/model/coder.h"
-#include "core/project/study_design.h"
+#include "core/project/training_feedback.h"
 
 #include <QDialog>
 

@@ -9,7 +9,9 @@
 #include "app/desktop/study/training_feedback_dialog.h"
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
+#include "core/project/codebook_versions.h"
 #include "core/project/project.h"
+#include "core/project/study_progress.h"
 #include "tests/support/test_support.h"
 
 #include <QCheckBox>
@@ -85,7 +87,7 @@ void click(QWidget &parent, const char *button)
 
 std::vector<AssignmentRow> rowsOf(const Project &project, Phase phase)
 {
-    auto rows = StudyDesign::assignmentRows(project, phase);
+    auto rows = AssignmentPlans::rows(project, phase);
     REQUIRE(rows);
     return *rows;
 }
@@ -159,7 +161,7 @@ TEST_CASE("A stratified reliability draw is planned, shown with its advice and c
     REQUIRE(child<QLabel>(w, "draw-error")->isHidden());
     const auto rows = rowsOf(s.project, Phase::Reliability);
     REQUIRE(rows.size() == 27 + 9);
-    auto recorded = StudyDesign::recordedDraw(s.project, Phase::Reliability);
+    auto recorded = SubsampleDraw::recorded(s.project, Phase::Reliability);
     REQUIRE(recorded);
     REQUIRE(recorded->has_value());
     CHECK((*recorded)->seed == 20261202u);
@@ -182,7 +184,7 @@ TEST_CASE("A stratified reliability draw is planned, shown with its advice and c
     request.stratify = Stratum::Topic;
     request.seed = 20261202;
     request.coders = {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")};
-    auto replay = StudyDesign::planDraw(again.project, request);
+    auto replay = SubsampleDraw::plan(again.project, request);
     REQUIRE(replay);
     CHECK(replay->articles == (*recorded)->articles);
 }
@@ -227,7 +229,7 @@ TEST_CASE(
         click(w, "draw-plan");
         click(w, "draw-commit");
         REQUIRE(rowsOf(s.project, Phase::Reliability).size() == 27 + 9);
-        auto recorded = StudyDesign::recordedDraw(s.project, Phase::Reliability);
+        auto recorded = SubsampleDraw::recorded(s.project, Phase::Reliability);
         REQUIRE(recorded);
         REQUIRE(recorded->has_value());
         return (*recorded)->articles;
@@ -355,8 +357,7 @@ TEST_CASE("Codebook versions: the diff and the annotations under an older versio
     const QString before = next.functions[size_t(FramingFunction::Remedy)].definition;
     next.functions[size_t(FramingFunction::Remedy)].definition =
         QStringLiteral("A call for or against a specific action by a named actor.");
-    REQUIRE(
-        StudyDesign::addCodebookVersion(s.project, next, QStringLiteral("Remedy narrowed"), lead));
+    REQUIRE(CodebookVersions::add(s.project, next, QStringLiteral("Remedy narrowed"), lead));
 
     StudyDesignWindow w(s.project, lead);
     CHECK(child<QTableWidget>(w, "codebook-versions")->rowCount() == 2);
@@ -445,7 +446,7 @@ TEST_CASE("Effort per coder is hidden until the lead turns it on", "[studygui][p
     CHECK(t->item(c01Row, ProgressBoardWindow::EffortColumn)->text() == QStringLiteral("—"));
 
     board.effortSwitch()->click();
-    auto visible = StudyDesign::effortPerCoderVisible(s.project);
+    auto visible = StudyProgress::effortPerCoderVisible(s.project);
     REQUIRE(visible);
     CHECK(*visible);
     CHECK_FALSE(t->isColumnHidden(ProgressBoardWindow::EffortColumn));
@@ -461,7 +462,7 @@ TEST_CASE("Effort per coder is hidden until the lead turns it on", "[studygui][p
     CHECK_FALSE(coderView.board()->isColumnHidden(ProgressBoardWindow::EffortColumn));
 
     board.effortSwitch()->click();
-    visible = StudyDesign::effortPerCoderVisible(s.project);
+    visible = StudyProgress::effortPerCoderVisible(s.project);
     REQUIRE(visible);
     CHECK_FALSE(*visible);
     CHECK(t->isColumnHidden(ProgressBoardWindow::EffortColumn));
@@ -473,10 +474,10 @@ TEST_CASE("Training feedback per function against the master coding", "[studygui
     const CoderId c01 = s.coder(QStringLiteral("C01"));
     const CoderId lead = s.coder(QStringLiteral("L01"));
     const ArticleId hb05 = s.article(QStringLiteral("hb-05"));
-    auto plan = StudyDesign::planArticles(s.project, Phase::Training, {QStringLiteral("hb-05")},
+    auto plan = AssignmentPlans::planArticles(s.project, Phase::Training, {QStringLiteral("hb-05")},
         {QStringLiteral("C01"), QStringLiteral("L01")});
     REQUIRE(plan);
-    REQUIRE(StudyDesign::commitPlan(s.project, *plan));
+    REQUIRE(AssignmentPlans::commit(s.project, *plan));
     CHECK_FALSE(TrainingFeedbackDialog::isDue(s.project, c01));
 
     auto article = s.project.article(hb05);
