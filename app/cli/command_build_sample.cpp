@@ -17,6 +17,7 @@
 #include <QFileInfo>
 #include <QJsonArray>
 #include <QJsonDocument>
+#include <QSet>
 
 namespace fourfold::cli {
 
@@ -90,8 +91,10 @@ Status build(const QString &sourceDir, const QString &target, const QString &fin
         return std::unexpected(imported.error());
 
     // Each loop of writes is one transaction (a commit per assignment took most of the time).
+    QSet<QString> reliabilityArticles;
     FOURFOLD_TRY_STATUS(project->batch([&]() -> Status {
         for (const QJsonValue &v : study->value(QLatin1String("reliabilityArticles")).toArray()) {
+            reliabilityArticles.insert(v.toString());
             auto article = project->articleByExternalId(v.toString());
             if (!article)
                 return std::unexpected(article.error());
@@ -105,17 +108,21 @@ Status build(const QString &sourceDir, const QString &target, const QString &fin
         return {};
     }));
 
-    auto codings = importQuotedCodings(
-        *project, dir.filePath(QStringLiteral("codings.jsonl")), Phase::Reliability);
+    // The codings of the reliability articles are the reliability phase's; one coder's codings
+    // of any other article are production work (assigned to that coder when marked done).
+    const auto phaseOf = [&reliabilityArticles](const QString &article) {
+        return reliabilityArticles.contains(article) ? Phase::Reliability : Phase::Production;
+    };
+    auto codings =
+        importQuotedCodings(*project, dir.filePath(QStringLiteral("codings.jsonl")), phaseOf);
     if (!codings)
         return std::unexpected(codings.error());
     // The lead's adjudicated gold for some of the reliability articles (the rest are left for
-    // trying out the comparison).
-    auto gold = importQuotedCodings(
-        *project, dir.filePath(QStringLiteral("gold.jsonl")), Phase::Reliability);
+    // trying out the comparison) and for the production articles.
+    auto gold = importQuotedCodings(*project, dir.filePath(QStringLiteral("gold.jsonl")), phaseOf);
     if (!gold)
         return std::unexpected(gold.error());
-    // The demo coders have finished their reliability articles (so progress shows agreement).
+    // The demo coders have finished their articles (so progress shows agreement).
     auto assignments = project->assignments();
     if (!assignments)
         return std::unexpected(assignments.error());

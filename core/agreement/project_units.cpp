@@ -334,14 +334,25 @@ Result<ReliabilityTable> unitTable(
         if (!sel.function || a.content.function == *sel.function)
             spans[{a.article.value, s.coderIndex.value(a.coder.value)}].push_back(&a);
 
-    // The selected articles some selected coder's coding counts on, in project (id) order.
+    // The selected articles that the codings of at least two selected coders count on (for
+    // article units gold's answers make gold one of them), in project (id) order. An article
+    // that one coder alone coded has nothing to pair: it would only add units without pairable
+    // values (a study's once-coded production articles).
+    QSet<qint64> goldAnswered;
+    if (sel.unit == UnitKind::Article)
+        for (const Judgement &j : s.judgements)
+            if (j.coder.value < 0 && j.itemKey == sel.item) // gold's id is negative
+                goldAnswered.insert(j.article.value);
     std::vector<const ArticleSummary *> coded;
-    for (const ArticleSummary &summary : s.articles)
+    for (const ArticleSummary &summary : s.articles) {
+        int sources = 0;
         for (const Coder &c : s.coders)
-            if (s.counts(summary.id.value, c.id.value)) {
-                coded.push_back(&summary);
-                break;
-            }
+            if (s.counts(summary.id.value, c.id.value)
+                || (c.id.value < 0 && goldAnswered.contains(summary.id.value)))
+                ++sources;
+        if (sources >= 2)
+            coded.push_back(&summary);
+    }
 
     if (sel.unit == UnitKind::Span) {
         for (const ArticleSummary *summary : coded) {

@@ -1,6 +1,7 @@
 #pragma once
 // Unitizers: from a project's annotations to reliability data (design.md §5). A coder who did
-// not code an article is missing for its units, never "absent". Which codings count is
+// not code an article is missing for its units, never "absent"; an article that only one of the
+// compared coders (or gold) counts on gives no units (nothing pairs). Which codings count is
 // CodingScope's rule (core/project/coding_scope.h): an article counts for a coder once the coder
 // has marked it done; articles in progress are left out (and listed) unless the selection takes
 // them in; assigned but untouched articles never count.
@@ -79,7 +80,9 @@ QStringList leftOutLines(const std::vector<CountedCodings::LeftOut> &leftOut);
 // The JSON form: [{"coder": "C02", "articles": ["a7", "a9"]}, ...].
 QJsonArray leftOutJson(const std::vector<CountedCodings::LeftOut> &leftOut);
 
-// The units × coders table for article, paragraph, sentence or token units. A unit's value for
+// The units × coders table for article, paragraph, sentence or token units, of the articles
+// that at least two selected coders' codings count on (gold: its spans, and for article units
+// its answers); an article one coder alone coded gives no units. A unit's value for
 // a coder: "present"/"absent" (one function: a span of that function overlaps the unit by at
 // least one code point), the set of functions of overlapping spans ("cause|problem", "{}" for
 // none), or the answer to the item (article units). Unit ids are "<article id>#p3" (paragraph

@@ -67,6 +67,12 @@ Result<QString> requiredString(
 
 Result<CodingImportReport> importQuotedCodings(Project &project, const QString &path, Phase phase)
 {
+    return importQuotedCodings(project, path, [phase](const QString &) { return phase; });
+}
+
+Result<CodingImportReport> importQuotedCodings(Project &project, const QString &path,
+    const std::function<Phase(const QString &article)> &phaseOf)
+{
     FOURFOLD_TRY_STATUS(requireRegularFile(path));
     FOURFOLD_TRY_STATUS(project.checkBeforeImport());
     QFile file(path);
@@ -99,7 +105,8 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
         std::map<std::tuple<qint64, QString, int>, QString> answers; // (coder, item, phase) → value
     } article;
     CodingImportReport report;
-    std::set<std::pair<qint64, qint64>> finished; // (article, coder) with imported codings
+    // (article, coder) with imported codings, and the phase of their article
+    std::map<std::pair<qint64, qint64>, Phase> finished;
 
     // Known keys of a line. Strict, as the article readers are: a misspelled or unknown key is
     // an error, never silently dropped, and so is a value of the wrong type.
@@ -168,6 +175,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
             auto articleKey = requiredString(o, "article", path, lineNo);
             if (!articleKey)
                 return std::unexpected(articleKey.error());
+            const Phase phase = phaseOf(*articleKey);
             auto coderKey = requiredString(o, "coder", path, lineNo);
             if (!coderKey)
                 return std::unexpected(coderKey.error());
@@ -231,7 +239,7 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 if (auto st = project.applyInBatch(edit); !st)
                     return failAt(st.error().code, path, lineNo, 0, st.error().message);
                 ++report.judgements;
-                finished.insert({article.id.value, coder.value});
+                finished.insert({{article.id.value, coder.value}, phase});
                 continue;
             }
 
@@ -317,13 +325,13 @@ Result<CodingImportReport> importQuotedCodings(Project &project, const QString &
                 return failAt(st.error().code, path, lineNo, 0, st.error().message);
             ++report.spans;
             article.spans.reset();
-            finished.insert({article.id.value, coder.value});
+            finished.insert({{article.id.value, coder.value}, phase});
         }
         // Imported codings are finished work: each article is marked done for its coder, so
         // that it counts (CodingScope).
-        for (const auto &[articleValue, coderValue] : finished) {
+        for (const auto &[pair, phase] : finished) {
             SetArticleStatusEdit done(
-                ArticleId {articleValue}, CoderId {coderValue}, QStringLiteral("done"), phase);
+                ArticleId {pair.first}, CoderId {pair.second}, QStringLiteral("done"), phase);
             FOURFOLD_TRY_STATUS(project.applyInBatch(done));
         }
         report.articlesDone = qint64(finished.size());

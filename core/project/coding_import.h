@@ -15,6 +15,8 @@
 
 #include <QString>
 
+#include <functional>
+
 namespace fourfold {
 
 class Project;
@@ -38,5 +40,9 @@ struct CodingImportReport {
 // unknown article, coder or function, a quote that does not occur (often enough) in the
 // article, attributes the codebook does not allow.
 Result<CodingImportReport> importQuotedCodings(Project &project, const QString &path, Phase phase);
+// The same with each line's phase chosen by its article's external id (build-sample: the study's
+// reliability articles in the reliability phase, the others in production).
+Result<CodingImportReport> importQuotedCodings(Project &project, const QString &path,
+    const std::function<Phase(const QString &article)> &phaseOf);
 
 } // namespace fourfold

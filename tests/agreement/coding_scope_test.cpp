@@ -99,6 +99,7 @@ TEST_CASE("unitizers leave articles in progress out and list them")
     f.add(f.f2, f.c2, FramingFunction::Cause, {0, 10});
     markDone(f.project, f.f1, f.c1);
     markDone(f.project, f.f1, f.c2);
+    markDone(f.project, f.f2, f.c1); // read, nothing to mark
     // C02 started f2 but did not finish it; C03 has an untouched assignment of f2.
     REQUIRE(f.project.assign(f.f2, f.c3, Phase::Reliability));
 
@@ -116,7 +117,7 @@ TEST_CASE("unitizers leave articles in progress out and list them")
         == QStringList {QStringLiteral("C02: 1 article in progress left out")});
     auto table = unitTable(f.project, *counted, s);
     REQUIRE(table);
-    // Only f1's four sentences: f2 counts for nobody.
+    // Only f1's four sentences: f2 counts for C01 alone, so nothing pairs there.
     CHECK(table->unitCount() == 4);
     CHECK(table->unitId(0) == QStringLiteral("f1#s1"));
 
@@ -124,8 +125,9 @@ TEST_CASE("unitizers leave articles in progress out and list them")
     auto taken = unitTable(f.project, s);
     REQUIRE(taken);
     CHECK(taken->unitCount() == 7);
-    // f2's first sentence: C02 "absent" (a cause span, no problem), C01 missing.
-    CHECK(taken->rowText(4) == QStringList {QString(), QStringLiteral("absent")});
+    // f2's first sentence: C02 "absent" (a cause span, no problem), and C01, who read f2 and
+    // marked nothing, "absent".
+    CHECK(taken->rowText(4) == QStringList {QStringLiteral("absent"), QStringLiteral("absent")});
 
     // Named coders are columns even with nothing that counts; the continuum needs all of them.
     UnitSelection named;

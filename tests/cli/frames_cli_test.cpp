@@ -316,12 +316,12 @@ TEST_CASE("frames of a project layer equal frames of the indicators built from t
     const double expected = rowPairs * columnPairs / (n * (n - 1) / 2);
     const double ari = (cells - expected) / ((rowPairs + columnPairs) / 2 - expected);
     CHECK(c.value("adjusted_rand_index").toDouble() == Approx(ari).margin(1e-12));
-    // An extractor run covers every article (16 in the sample); gold only the 3 adjudicated.
+    // An extractor run covers every article (40 in the sample); gold only the 27 adjudicated.
     const CliRun run = cli({"frames", project, "--layer", "run:cues", "--compare", "gold", "--k",
         "2", "--max-k", "3", "--json"});
     REQUIRE(run.exitCode == 0);
-    CHECK(cliJson(run).value("articles").toInt() == 16);
-    CHECK(cliJson(run).value("compare").toObject().value("articles").toInt() == 3);
+    CHECK(cliJson(run).value("articles").toInt() == 40);
+    CHECK(cliJson(run).value("compare").toObject().value("articles").toInt() == 27);
     CHECK(cli({"frames", project, "--layer", "coders"}).err.contains("not a layer for frames"));
     CHECK(cli({"frames", project, "--layer", "coder:NOBODY"}).exitCode == 1);
 }

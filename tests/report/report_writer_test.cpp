@@ -270,7 +270,8 @@ TEST_CASE("the report's counts come from the project: coders, amount coded, samp
     REQUIRE(assignments);
     REQUIRE(gold);
 
-    // sample-project/README.md: three coders C01–C03 coded the nine reliability articles.
+    // sample-project/README.md: three coders C01–C03 coded the nine reliability articles, and
+    // each of them eight of the 24 production articles alone.
     const QJsonArray reported = figures.value(QStringLiteral("coders")).toArray();
     REQUIRE(reported.size() == 3);
     QSet<qint64> shared;
@@ -293,12 +294,13 @@ TEST_CASE("the report's counts come from the project: coders, amount coded, samp
             [&](const Assignment &a) { return a.coder == coder->id; });
         CHECK(c.value(QStringLiteral("spans")).toInt() == spans);
         CHECK(c.value(QStringLiteral("articles")).toInt() == articles);
-        CHECK(c.value(QStringLiteral("articles")).toInt() == 9);
+        CHECK(c.value(QStringLiteral("articles")).toInt() == 17);
+        CHECK(c.value(QStringLiteral("shared_articles")).toInt() == 9);
     }
     const QJsonObject sampleFigures = figures.value(QStringLiteral("sample")).toObject();
     CHECK(sampleFigures.value(QStringLiteral("shared_articles")).toInt() == shared.size());
     CHECK(sampleFigures.value(QStringLiteral("shared_articles")).toInt() == 9);
-    CHECK(sampleFigures.value(QStringLiteral("project_articles")).toInt() == 16);
+    CHECK(sampleFigures.value(QStringLiteral("project_articles")).toInt() == 40);
     CHECK(figures.value(QStringLiteral("gold")).toObject().value(QStringLiteral("spans")).toInt()
         == qsizetype(gold->size()));
     auto book = project->codebook();
@@ -454,8 +456,8 @@ TEST_CASE("a recorded draw of the reliability sample is stated in the method tex
     QTemporaryDir dir;
     const QString copy = dir.filePath(QStringLiteral("draw.fourfold"));
     REQUIRE(QFile::copy(s.project, copy));
-    // The sample has 16 articles, 9 assigned for reliability (sample-project/README.md): the
-    // frame of a new draw is the other 7.
+    // The sample has 40 articles, 9 assigned for reliability (sample-project/README.md): the
+    // frame of a new draw is the other 31 (the 24 production articles among them).
     CliRun r = cli({QStringLiteral("assign"), copy, QStringLiteral("--draw"),
         QStringLiteral("reliability"), QStringLiteral("--size"), QStringLiteral("3"),
         QStringLiteral("--stratify"), QStringLiteral("topic"), QStringLiteral("--seed"),
@@ -468,18 +470,18 @@ TEST_CASE("a recorded draw of the reliability sample is stated in the method tex
     REQUIRE(r.exitCode == 0);
     const QString text = readText(html);
     CHECK(text.contains(QStringLiteral("The 3 articles of the reliability phase were drawn as a "
-                                       "sample stratified by topic (seed 11) from a frame of 7 "
+                                       "sample stratified by topic (seed 11) from a frame of 31 "
                                        "articles")));
     const QJsonObject record =
         valueAt(embeddedFigures(text), QStringLiteral("sample.draw_record")).toObject();
     CHECK(record.value(QStringLiteral("seed")).toString() == QLatin1String("11"));
     CHECK(record.value(QStringLiteral("articles")).toArray().size() == 3);
-    // C01 and C02 finished the 9 reliability articles; the 3 drawn ones are assigned but nobody
-    // has touched them, so they are not "coded" (Lombard et al. 2002: the amount coded by each
-    // coder).
+    // C01 and C02 finished the 9 reliability articles and 8 production articles each; the drawn
+    // ones nobody has touched in the reliability phase are not "coded" (Lombard et al. 2002: the
+    // amount coded by each coder).
     CHECK(text.contains(QStringLiteral("C01 coded <span class=\"fig\" "
                                        "data-figure=\"report:coders.0.articles\" "
-                                       "data-format=\"int\">9</span>")));
+                                       "data-format=\"int\">17</span>")));
     CHECK(text.contains(
         QStringLiteral("Only articles that a coder had marked as finished count for that coder.")));
     CHECK_FALSE(text.contains(QStringLiteral("left out")));
