@@ -34,9 +34,16 @@ CodingSession::CodingSession(Project project, Coder coder, QObject *parent)
     , m_project(std::move(project))
     , m_coder(std::move(coder))
 {
+    readCodebook();
+}
+
+void CodingSession::readCodebook()
+{
     // The codebook's texts in the user's language where it has them (the keys and values stay).
     if (auto book = m_project.codebook())
         m_codebook = book->inLanguage(interfaceLanguage());
+    else
+        emit errorOccurred(book.error().toString());
 }
 
 CodingSession::~CodingSession()
@@ -77,8 +84,11 @@ Status CodingSession::openDocument(ArticleId article)
 
 void CodingSession::changed(ArticleId article, ArticleDocument::Parts touched)
 {
-    if (!article.isValid())
-        m_pseudonyms.reset(); // an edit about no article may be People's: read the names again
+    if (!article.isValid()) {
+        // An edit about no article may be People's or a codebook version: read both again.
+        m_pseudonyms.reset();
+        readCodebook();
+    }
     if (m_document.isOpen() && m_document.id() == article) {
         if (auto st = m_document.reload(touched); !st)
             emit errorOccurred(st.error().toString());
@@ -88,10 +98,15 @@ void CodingSession::changed(ArticleId article, ArticleDocument::Parts touched)
             emit errorOccurred(st.error().toString());
     }
     emit articleChanged(article);
+    if (!article.isValid())
+        emit projectEdited();
 }
 
 void CodingSession::reloadAfterSync()
 {
+    // A sync may bring a codebook version and people.
+    m_pseudonyms.reset();
+    readCodebook();
     if (m_document.isOpen())
         if (auto st = m_document.reload(ArticleDocument::Part::Everything); !st)
             emit errorOccurred(st.error().toString());

@@ -131,6 +131,10 @@ signals:
     // redo), once the open document holds it. An invalid `article`: any article may have changed
     // (reloadAfterSync), so views read again whatever they show.
     void articleChanged(ArticleId article);
+    // After an edit about no article (the study design's, a codebook version, People's) was
+    // applied, undone or redone, once the session read the codebook and the names again: the
+    // lead's study windows read what they show again.
+    void projectEdited();
     void errorOccurred(const QString &message);
     // An edit could not be written and is kept as unsaved (see hasUnsavedEdit()).
     void editNotSaved(const QString &editText, const QString &message);
@@ -142,6 +146,8 @@ private:
     Result<ArticleId> articleOf(AnnotationId id) const;
     // Reads what changed into the open documents (those of `article`), then says so.
     void changed(ArticleId article, ArticleDocument::Parts touched);
+    // Reads the current codebook again, in the user's language.
+    void readCodebook();
 
     Project m_project;
     Coder m_coder;

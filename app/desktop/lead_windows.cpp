@@ -98,9 +98,7 @@ void LeadWindows::openStudyDesign()
     if (!m_session)
         return;
     if (!m_studyDesign) {
-        auto *w = new StudyDesignWindow(m_session->project(), m_session->coder().id);
-        connect(w, &StudyDesignWindow::assignmentsChanged, this, &LeadWindows::projectChanged);
-        m_studyDesign = w;
+        m_studyDesign = new StudyDesignWindow(*m_session);
     }
     raise(m_studyDesign);
 }
@@ -110,7 +108,7 @@ void LeadWindows::openProgress()
     if (!m_session)
         return;
     if (!m_progress)
-        m_progress = new ProgressBoardWindow(m_session->project(), m_session->coder().id);
+        m_progress = new ProgressBoardWindow(*m_session);
     raise(m_progress);
 }
 
@@ -140,13 +138,7 @@ void LeadWindows::openCodebook()
     if (!m_session)
         return;
     if (!m_codebook) {
-        auto *w = new CodebookEditor(m_session->project(), m_session->coder().id);
-        connect(w, &CodebookEditor::versionAdded, this, &LeadWindows::projectChanged);
-        connect(w, &CodebookEditor::versionAdded, this, [this] {
-            if (auto *study = qobject_cast<StudyDesignWindow *>(m_studyDesign.data()))
-                study->refresh();
-        });
-        m_codebook = w;
+        m_codebook = new CodebookEditor(*m_session);
     }
     raise(m_codebook);
 }

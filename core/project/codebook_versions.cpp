@@ -155,13 +155,18 @@ Result<CodebookVersionInfo> CodebookVersions::add(
     return versions->back();
 }
 
-Result<CodebookVersionInfo> CodebookVersions::addFromFile(
-    Project &project, const QString &path, const QString &note, CoderId author)
+Result<Codebook> CodebookVersions::readFile(const QString &path)
 {
     const auto bytes = readWholeFile(path, maxCodebookFileSize);
     if (!bytes)
         return std::unexpected(bytes.error());
-    auto book = Codebook::fromJson(*bytes, path);
+    return Codebook::fromJson(*bytes, path);
+}
+
+Result<CodebookVersionInfo> CodebookVersions::addFromFile(
+    Project &project, const QString &path, const QString &note, CoderId author)
+{
+    auto book = readFile(path);
     if (!book)
         return std::unexpected(book.error());
     return add(project, *book, note, author);

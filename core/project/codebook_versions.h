@@ -68,9 +68,10 @@ public:
     // written on failure.
     static Result<CodebookVersionInfo> add(
         Project &project, const Codebook &codebook, const QString &note, CoderId author);
-    // Reads a codebook JSON file (Codebook::fromJson, every rule) and adds it as above;
-    // InvalidInput naming the file, line and key for a malformed one, Io if it cannot be read or
-    // is not a regular file.
+    // Reads a codebook JSON file (Codebook::fromJson, every rule): InvalidInput naming the file,
+    // line and key for a malformed one, Io if it cannot be read or is not a regular file.
+    static Result<Codebook> readFile(const QString &path);
+    // Reads a codebook JSON file (readFile) and adds it as above.
     static Result<CodebookVersionInfo> addFromFile(
         Project &project, const QString &path, const QString &note, CoderId author);
 

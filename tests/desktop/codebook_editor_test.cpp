@@ -7,7 +7,10 @@
 #include "app/desktop/message_bar.h"
 #include "core/project/codebook_versions.h"
 #include "core/project/project.h"
+#include "core/project/testing/project_database.h"
+#include "tests/desktop/session_on_file.h"
 #include "tests/support/cli_run.h"
+#include "tests/support/db_dump.h"
 #include "tests/support/test_support.h"
 
 #include <QAction>
@@ -40,14 +43,6 @@ struct SampleCopy {
         QFile::setPermissions(path, QFile::ReadOwner | QFile::WriteOwner);
     }
 };
-
-CoderId leadOf(const Project &project)
-{
-    auto lead = project.coderByPseudonym(QStringLiteral("L01"));
-    REQUIRE(lead);
-    REQUIRE(*lead);
-    return (*lead)->id;
-}
 
 QPlainTextEdit *textField(CodebookEditor &w, const QString &field)
 {
@@ -126,7 +121,8 @@ TEST_CASE("a codebook change in the editor gives the version diff and outdated l
     REQUIRE(update.exitCode == 0);
 
     // The same change typed into the editor.
-    CodebookEditor w(*project, leadOf(*project));
+    auto session = sessionOnFile(viaEditor.path, QStringLiteral("L01"));
+    CodebookEditor w(*session);
     w.show();
     textField(w, QStringLiteral("functions[0].definition"))->setPlainText(kDefinition);
     QPlainTextEdit *valuesField = textField(w, QStringLiteral("functions[2].attributes[0].values"));
@@ -212,7 +208,8 @@ TEST_CASE("an invalid codebook draft is shown at its field and nothing is stored
     REQUIRE(project);
     auto versionsBefore = CodebookVersions::list(*project);
     REQUIRE(versionsBefore);
-    CodebookEditor w(*project, leadOf(*project));
+    auto session = sessionOnFile(f.path, QStringLiteral("L01"));
+    CodebookEditor w(*session);
     w.show();
 
     // A choice attribute without values (the file reader's rule: "lists no values").
@@ -274,7 +271,8 @@ TEST_CASE("undo in the codebook editor restores the text and redo brings the edi
     SampleCopy f;
     auto project = Project::open(f.path);
     REQUIRE(project);
-    CodebookEditor w(*project, leadOf(*project));
+    auto session = sessionOnFile(f.path, QStringLiteral("L01"));
+    CodebookEditor w(*session);
     w.show();
     QPlainTextEdit *definition = textField(w, QStringLiteral("functions[1].definition"));
     const QString old = definition->toPlainText();
@@ -321,4 +319,35 @@ TEST_CASE("the lead menu entry Codebook opens the editor once")
     CHECK(desk.leadWindows()->codebook() == editor.data());
     desk.leadWindows()->closeAll();
     CHECK_FALSE(editor);
+}
+
+TEST_CASE("a version saved in the editor is one step on the desk's undo stack: undo restores the "
+          "full dump and the editor follows")
+{
+    SampleCopy f;
+    auto reader = Project::open(f.path); // a connection of the test's own
+    REQUIRE(reader);
+    const QString before = dumpDatabase(databaseForTesting(*reader));
+    auto session = sessionOnFile(f.path, QStringLiteral("L01"));
+    CodebookEditor w(*session);
+    const int from = w.stored().number;
+    textField(w, QStringLiteral("functions[0].definition"))->setPlainText(kDefinition);
+    REQUIRE(w.saveAsNewVersion(QStringLiteral("problem definition names costs")));
+    QUndoStack *desk = session->undoStack();
+    REQUIRE(desk->count() == 1);
+    CHECK(desk->undoText() == QStringLiteral("Save codebook version %1").arg(from + 1));
+    CHECK(reader->codebook()->number == from + 1);
+    // The desk works with the new version at once.
+    CHECK(session->codebook().definition(FramingFunction::Problem).definition == kDefinition);
+
+    desk->undo();
+    CHECK(dumpDatabase(databaseForTesting(*reader)) == before);
+    CHECK(w.stored().number == from);
+    CHECK(w.draft().definition(FramingFunction::Problem).definition != kDefinition);
+    CHECK(session->codebook().number == from);
+
+    desk->redo();
+    CHECK(reader->codebook()->number == from + 1);
+    CHECK(reader->codebook()->definition(FramingFunction::Problem).definition == kDefinition);
+    CHECK(w.stored().number == from + 1);
 }

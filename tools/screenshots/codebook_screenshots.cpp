@@ -5,6 +5,7 @@
 // remedy page with a second attribute whose key repeats the first (the error at the field).
 
 #include "app/desktop/codebook/codebook_editor.h"
+#include "app/desktop/coding_session.h"
 #include "core/project/project.h"
 #include "tools/screenshots/screenshot_support.h"
 
@@ -25,7 +26,8 @@ int main(int argc, char *argv[])
     auto lead = project->coderByPseudonym(QStringLiteral("L01"));
     if (!lead || !*lead)
         return 1;
-    CodebookEditor w(*project, (*lead)->id);
+    CodingSession session(std::move(*project), **lead);
+    CodebookEditor w(session);
     w.resize(1280, 720); // fits a 1366×768 screen with the desktop's panel
     w.show();
     bool ok = true;

@@ -5,6 +5,7 @@
 // reliability draw, the rest dealt, a second codebook version, some finished work); the demo's
 // extra codings and times are invented. Nothing here is edited by hand.
 
+#include "app/desktop/coding_session.h"
 #include "app/desktop/study/progress_board_window.h"
 #include "app/desktop/study/study_design_window.h"
 #include "app/desktop/study/training_feedback_dialog.h"
@@ -80,6 +81,12 @@ int main(int argc, char *argv[])
         return 1;
     Project &p = *project;
     const CoderId lead = coderId(p, QStringLiteral("L01"));
+    // The lead's windows work in a session of their own on the same file, as on the desk.
+    auto leadProject = Project::open(app.project());
+    auto leadCoder = p.coderByPseudonym(QStringLiteral("L01"));
+    if (!leadProject || !leadCoder || !*leadCoder)
+        return 1;
+    CodingSession session(std::move(*leadProject), **leadCoder);
     const QStringList coders {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")};
     bool ok = true;
 
@@ -98,7 +105,7 @@ int main(int argc, char *argv[])
 
     {
         // The draw page with a planned stratified draw, before it is committed.
-        StudyDesignWindow w(p, lead);
+        StudyDesignWindow w(session);
         w.resize(1280, 800);
         w.show();
         w.findChild<QSpinBox *>(QStringLiteral("draw-size"))->setValue(4);
@@ -154,14 +161,14 @@ int main(int argc, char *argv[])
                     articleId(p, QStringLiteral("hb-06")), coderId(p, QStringLiteral("C01")), 1430),
         "time");
     {
-        StudyDesignWindow w(p, lead);
+        StudyDesignWindow w(session);
         w.resize(1280, 800);
         w.show();
         w.showPage(StudyDesignWindow::CodebookPage);
         ok &= saveGrab(w, out, "study-codebook.png");
     }
     {
-        ProgressBoardWindow board(p, lead);
+        ProgressBoardWindow board(session);
         board.resize(1100, 720);
         board.show();
         ok &= saveGrab(board, out, "progress.png");

@@ -1,6 +1,7 @@
 #include "app/desktop/codebook/codebook_editor.h"
 
 #include "app/desktop/codebook/codebook_edit_command.h"
+#include "app/desktop/coding_session.h"
 #include "app/desktop/function_style.h"
 #include "app/desktop/message_bar.h"
 #include "core/project/codebook_versions.h"
@@ -121,10 +122,11 @@ QPlainTextEdit *textBox(QWidget *parent, int lines)
 
 } // namespace
 
-CodebookEditor::CodebookEditor(Project &project, CoderId current, QWidget *parent)
+CodebookEditor::CodebookEditor(CodingSession &session, QWidget *parent)
     : QWidget(parent, Qt::Window)
-    , m_project(project)
-    , m_current(current)
+    , m_session(session)
+    , m_project(session.project())
+    , m_current(session.coder().id)
 {
     setWindowTitle(tr("Codebook"));
     setObjectName(QStringLiteral("codebook-editor"));
@@ -194,6 +196,20 @@ CodebookEditor::CodebookEditor(Project &project, CoderId current, QWidget *paren
     load();
     showCheck(false);
     resize(1180, 720);
+    connect(&m_session, &CodingSession::projectEdited, this, &CodebookEditor::followStored);
+}
+
+void CodebookEditor::followStored()
+{
+    if (m_undo.count() > 0)
+        return; // the draft holds edits: saving says that another version came meanwhile
+    auto book = m_project.codebook();
+    if (!book || book->number == m_stored.number)
+        return;
+    m_stored = *book;
+    m_draft = m_stored;
+    load();
+    showCheck(false);
 }
 
 QWidget *CodebookEditor::withErrorLine(QWidget *editor, const QString &key)
@@ -738,11 +754,15 @@ bool CodebookEditor::saveAsNewVersion(const QString &note)
             {}, 8);
         return false;
     }
-    auto added = CodebookVersions::add(m_project, *m_check.candidate, note, m_current);
-    if (!added) {
-        m_messages->showMessage(MessageBar::Kind::Error, added.error().message);
+    auto edit = CodebookVersions::addEdit(m_project, *m_check.candidate, note, m_current);
+    Status applied = edit ? m_project.apply(**edit) : Status(std::unexpected(edit.error()));
+    if (!applied) {
+        m_messages->showMessage(MessageBar::Kind::Error, applied.error().message);
         return false;
     }
+    const int number = (*edit)->number();
+    m_undo.clear(); // the draft's steps end here; the version is one step on the desk's stack
+    m_session.pushApplied(std::move(*edit), ArticleId {}, {});
     auto book = m_project.codebook();
     auto outdated = OutdatedAnnotations::list(m_project);
     if (!book || !outdated) {
@@ -752,7 +772,6 @@ bool CodebookEditor::saveAsNewVersion(const QString &note)
     }
     m_stored = *book;
     m_draft = m_stored;
-    m_undo.clear();
     load();
     showCheck(false);
     const auto recheck = std::ranges::count_if(
@@ -761,9 +780,8 @@ bool CodebookEditor::saveAsNewVersion(const QString &note)
         tr("Codebook version %1 saved. %n annotation(s) made under an older version are now "
            "outdated; %2 of them belong to a function that changed and need a re-check.",
             nullptr, int(outdated->size()))
-            .arg(added->number)
+            .arg(number)
             .arg(recheck));
-    emit versionAdded();
     return true;
 }
 

@@ -4,9 +4,9 @@
 // list), and the article-level items (key, question, values, level). Every edit is a step on the
 // editor's own undo stack. The draft is checked with the rules a codebook file is read with, and
 // a failure is shown at its field. "Save as new version…" shows the diff against the current
-// version, asks for a note and stores the draft through CodebookVersions::add — the
-// call `fourfold-cli codebook --update` makes — then says in the message bar how many annotations
-// are now outdated.
+// version, asks for a note and stores the draft as one AddCodebookVersionEdit (made by
+// CodebookVersions::addEdit, the check `fourfold-cli codebook --update` makes too) on the desk's
+// undo stack, then says in the message bar how many annotations are now outdated.
 
 #include "app/desktop/codebook/codebook_field_check.h"
 #include "core/model/codebook.h"
@@ -28,6 +28,7 @@ class QTabWidget;
 
 namespace fourfold {
 
+class CodingSession;
 class MessageBar;
 class Project;
 
@@ -35,9 +36,11 @@ class CodebookEditor : public QWidget
 {
     Q_OBJECT
 public:
-    // `project` must outlive the window; `current` is the lead (recorded as the version's
-    // author). The window is a top-level window even with a parent.
-    CodebookEditor(Project &project, CoderId current, QWidget *parent = nullptr);
+    // `session` (a lead's) must outlive the window; its person is recorded as the version's
+    // author. A saved version is a step on the session's undo stack; when it (or another version)
+    // is undone or added there while the draft holds no edit, the editor takes up the current
+    // version. The window is a top-level window even with a parent.
+    explicit CodebookEditor(CodingSession &session, QWidget *parent = nullptr);
 
     const Codebook &stored() const { return m_stored; }
     const Codebook &draft() const { return m_draft; }
@@ -67,10 +70,6 @@ public:
     void addRow();
     // Removes the selected attribute or item.
     void removeRow();
-
-signals:
-    // A version was stored: the desk's codebook panel reads it again.
-    void versionAdded();
 
 protected:
     bool eventFilter(QObject *watched, QEvent *event) override;
@@ -130,7 +129,11 @@ private:
     // not in the message bar.
     bool currentIsStored();
     void askAndSave();
+    // After an edit about no article: with no edit in the draft, takes up the current version
+    // if it is another one now.
+    void followStored();
 
+    CodingSession &m_session;
     Project &m_project;
     CoderId m_current;
     Codebook m_stored;

@@ -1,5 +1,6 @@
 #include "app/desktop/study/progress_board_window.h"
 
+#include "app/desktop/coding_session.h"
 #include "app/desktop/function_style.h"
 #include "app/desktop/study/study_text.h"
 #include "core/agreement/agreement_report.h"
@@ -52,16 +53,14 @@ QTableWidget *makeTable(const QStringList &headers, QWidget *parent, const QStri
 
 } // namespace
 
-ProgressBoardWindow::ProgressBoardWindow(Project &project, CoderId current, QWidget *parent)
+ProgressBoardWindow::ProgressBoardWindow(CodingSession &session, QWidget *parent)
     : QWidget(parent, Qt::Window)
-    , m_project(project)
-    , m_current(current)
+    , m_session(session)
+    , m_project(session.project())
+    , m_current(session.coder().id)
+    , m_isLead(session.isLead())
 {
-    if (auto coders = project.coders())
-        for (const Coder &c : *coders)
-            if (c.id == current)
-                m_isLead = c.role == CoderRole::Lead;
-    setWindowTitle(tr("Progress — %1").arg(project.settings().name));
+    setWindowTitle(tr("Progress — %1").arg(m_project.settings().name));
     auto *layout = new QVBoxLayout(this);
 
     auto *top = new QHBoxLayout;
@@ -128,19 +127,21 @@ ProgressBoardWindow::ProgressBoardWindow(Project &project, CoderId current, QWid
     connect(m_effortSwitch, &QCheckBox::toggled, this, &ProgressBoardWindow::setEffortPerCoder);
     connect(m_phase, &QComboBox::currentIndexChanged, this, &ProgressBoardWindow::refresh);
     connect(reload, &QPushButton::clicked, this, &ProgressBoardWindow::refresh);
+    connect(&m_session, &CodingSession::projectEdited, this, &ProgressBoardWindow::refresh);
     refresh();
 }
 
 void ProgressBoardWindow::setEffortPerCoder(bool on)
 {
-    if (Status st = StudyProgress::setEffortPerCoderVisible(m_project, on, m_current); !st) {
+    std::unique_ptr<Edit> edit = StudyProgress::effortEdit(on, m_current);
+    if (Status st = m_project.apply(*edit); !st) {
         m_error->setText(st.error().message);
         m_error->show();
         const QSignalBlocker block(m_effortSwitch);
         m_effortSwitch->setChecked(!on);
         return;
     }
-    refresh();
+    m_session.pushApplied(std::move(edit), ArticleId {}, {}); // reads the board again
 }
 
 void ProgressBoardWindow::refresh()

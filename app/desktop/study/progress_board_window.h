@@ -15,6 +15,7 @@ class QTableWidget;
 
 namespace fourfold {
 
+class CodingSession;
 class Project;
 
 class ProgressBoardWindow : public QWidget
@@ -34,9 +35,11 @@ public:
         ColumnCount
     };
 
-    // `project` must outlive the window; `current` is the person looking: only a lead can switch
-    // effort per coder on or off. A top-level window even with a parent.
-    ProgressBoardWindow(Project &project, CoderId current, QWidget *parent = nullptr);
+    // `session` must outlive the window; its person is the one looking: only a lead can switch
+    // effort per coder on or off, as one edit on the session's undo stack. The board is read
+    // again after any edit about no article (its undo among them). A top-level window even with
+    // a parent.
+    explicit ProgressBoardWindow(CodingSession &session, QWidget *parent = nullptr);
 
     // Reloads the board from the project (call after coders finished articles).
     void refresh();
@@ -48,6 +51,7 @@ public:
 private:
     void setEffortPerCoder(bool on);
 
+    CodingSession &m_session;
     Project &m_project;
     CoderId m_current;
     bool m_isLead = false;

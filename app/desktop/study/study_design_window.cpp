@@ -1,5 +1,6 @@
 #include "app/desktop/study/study_design_window.h"
 
+#include "app/desktop/coding_session.h"
 #include "app/desktop/function_style.h"
 #include "app/desktop/study/study_text.h"
 #include "core/project/codebook_versions.h"
@@ -107,12 +108,13 @@ constexpr std::array<Phase, 4> kPhases {
 
 } // namespace
 
-StudyDesignWindow::StudyDesignWindow(Project &project, CoderId current, QWidget *parent)
+StudyDesignWindow::StudyDesignWindow(CodingSession &session, QWidget *parent)
     : QWidget(parent, Qt::Window)
-    , m_project(project)
-    , m_current(current)
+    , m_session(session)
+    , m_project(session.project())
+    , m_current(session.coder().id)
 {
-    setWindowTitle(tr("Study design — %1").arg(project.settings().name));
+    setWindowTitle(tr("Study design — %1").arg(m_project.settings().name));
     auto *layout = new QVBoxLayout(this);
     auto *intro = hint(tr("Plan who codes what: draw the reliability sample that every reliability "
                           "coder codes, deal the rest of the articles, and keep the codebook's "
@@ -128,6 +130,17 @@ StudyDesignWindow::StudyDesignWindow(Project &project, CoderId current, QWidget 
     m_tabs->addTab(buildAssignmentsPage(), tr("Assignments"));
     m_tabs->addTab(buildCodebookPage(), tr("Codebook versions"));
     refresh();
+    connect(&m_session, &CodingSession::projectEdited, this, &StudyDesignWindow::refresh);
+}
+
+bool StudyDesignWindow::push(std::unique_ptr<Edit> edit, QLabel *error)
+{
+    if (Status st = m_project.apply(*edit); !st) {
+        showError(error, st.error().message);
+        return false;
+    }
+    m_session.pushApplied(std::move(edit), ArticleId {}, {}); // reads the pages again
+    return true;
 }
 
 void StudyDesignWindow::showPage(Page page)
@@ -473,13 +486,13 @@ void StudyDesignWindow::commitDraw()
         return;
     showError(m_drawError, {});
     Draw draw = *m_plannedDraw;
-    if (Status st = SubsampleDraw::commit(m_project, draw); !st) {
-        showError(m_drawError, st.error().message);
+    auto edit = SubsampleDraw::edit(m_project, draw, m_current);
+    if (!edit) {
+        showError(m_drawError, edit.error().message);
         return;
     }
-    m_plannedDraw.reset();
-    refresh();
-    emit assignmentsChanged();
+    if (push(std::move(*edit), m_drawError))
+        m_plannedDraw.reset();
 }
 
 void StudyDesignWindow::withdrawDraw()
@@ -492,18 +505,15 @@ void StudyDesignWindow::withdrawDraw()
         return;
     }
     // Refused with the reason (how many assignments have work) when coding has started.
-    if (Status st = m_project.apply(**edit); !st) {
-        showError(m_drawError, st.error().message);
+    WithdrawDrawEdit *withdrawal = edit->get();
+    if (!push(std::move(*edit), m_drawError))
         return;
-    }
-    const int withdrawn = int((*edit)->withdrawnAssignments());
-    refresh();
+    const int withdrawn = int(withdrawal->withdrawnAssignments());
     m_drawState->setText(tr("<b>The %1 sample was withdrawn</b>: %n assignment(s) removed, the "
                             "withdrawal recorded in the project's log. The phase can be drawn "
                             "again.",
         nullptr, withdrawn)
                              .arg(studyPhaseName(phase)));
-    emit assignmentsChanged();
 }
 
 void StudyDesignWindow::showDraw(const Draw &draw, bool recorded)
@@ -741,13 +751,13 @@ void StudyDesignWindow::commitRest()
     record.insert(QStringLiteral("coding"),
         m_single->isChecked() ? QStringLiteral("single") : QStringLiteral("double"));
     record.insert(QStringLiteral("seed"), m_restSeed->text().trimmed());
-    if (Status st = AssignmentPlans::commit(m_project, *m_plannedRest, record); !st) {
-        showError(m_restError, st.error().message);
+    auto edit = AssignmentPlans::edit(m_project, *m_plannedRest, record, m_current);
+    if (!edit) {
+        showError(m_restError, edit.error().message);
         return;
     }
-    refresh();
-    m_restSummary->setText(tr("The rest is assigned."));
-    emit assignmentsChanged();
+    if (push(std::move(*edit), m_restError))
+        m_restSummary->setText(tr("The rest is assigned."));
 }
 
 // --- assignments --------------------------------------------------------------------------
@@ -900,13 +910,13 @@ void StudyDesignWindow::giveArticles()
     QJsonObject record;
     record.insert(QStringLiteral("kind"), QStringLiteral("articles"));
     record.insert(QStringLiteral("phase"), phaseKey(phase));
-    if (Status st = AssignmentPlans::commit(m_project, *plan, record); !st) {
-        showError(m_giveError, st.error().message);
+    auto edit = AssignmentPlans::edit(m_project, *plan, record, m_current);
+    if (!edit) {
+        showError(m_giveError, edit.error().message);
         return;
     }
-    m_giveArticles->clearSelection();
-    refresh();
-    emit assignmentsChanged();
+    if (push(std::move(*edit), m_giveError))
+        m_giveArticles->clearSelection();
 }
 
 // --- codebook versions --------------------------------------------------------------------
@@ -1144,13 +1154,17 @@ void StudyDesignWindow::addCodebookVersion()
         tr("What changed, and why?"), QLineEdit::Normal, QString(), &ok);
     if (!ok)
         return;
-    auto added = CodebookVersions::addFromFile(m_project, path, note, m_current);
-    if (!added) {
-        showError(m_codebookError, added.error().message);
+    auto book = CodebookVersions::readFile(path);
+    if (!book) {
+        showError(m_codebookError, book.error().message);
         return;
     }
-    loadCodebook();
-    emit assignmentsChanged();
+    auto edit = CodebookVersions::addEdit(m_project, *book, note, m_current);
+    if (!edit) {
+        showError(m_codebookError, edit.error().message);
+        return;
+    }
+    push(std::move(*edit), m_codebookError);
 }
 
 } // namespace fourfold

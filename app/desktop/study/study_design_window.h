@@ -2,8 +2,9 @@
 // The lead's study design, one window with four pages: draw the reliability (or pilot) sample,
 // deal the rest of the articles to coders, see and give assignments by coder and phase, and
 // compare codebook versions with the annotations made under an older one. Everything goes
-// through core/project/study_design.h; the window only presents plans and errors, and nothing is
-// written until the lead presses the page's commit button.
+// through the study-design units of core/project (subsample_draw, assignment_plans,
+// codebook_versions, outdated_annotations); the window only presents plans and errors, and
+// nothing is written until the lead presses the page's commit button.
 
 #include "core/model/coder.h"
 #include "core/project/assignment_plans.h"
@@ -11,6 +12,7 @@
 
 #include <QWidget>
 
+#include <memory>
 #include <optional>
 #include <vector>
 
@@ -30,15 +32,19 @@ class QTextBrowser;
 
 namespace fourfold {
 
+class CodingSession;
+class Edit;
 class Project;
 
 class StudyDesignWindow : public QWidget
 {
     Q_OBJECT
 public:
-    // `project` must outlive the window; `current` is the lead working in it (named in the event
-    // log). The window is a top-level window even with a parent.
-    StudyDesignWindow(Project &project, CoderId current, QWidget *parent = nullptr);
+    // `session` (a lead's) must outlive the window; its person is named in the event log. Every
+    // write is one edit on the session's undo stack, and the window reads its pages again after
+    // any edit about no article, the undo and redo of its own among them. The window is a
+    // top-level window even with a parent.
+    explicit StudyDesignWindow(CodingSession &session, QWidget *parent = nullptr);
 
     // Reloads every page from the project (after changes made elsewhere).
     void refresh();
@@ -46,10 +52,6 @@ public:
     // The page indexes, for tests and screenshots.
     enum Page { DrawPage = 0, RestPage = 1, AssignmentsPage = 2, CodebookPage = 3 };
     void showPage(Page page);
-
-signals:
-    // After anything was written (a draw, a plan, a codebook version): the desk reloads its list.
-    void assignmentsChanged();
 
 private:
     QWidget *buildDrawPage();
@@ -85,6 +87,10 @@ private:
 
     void showError(QLabel *label, const QString &message);
 
+    // Applies `edit`; on success puts it on the session's undo stack, else shows why in `error`.
+    bool push(std::unique_ptr<Edit> edit, QLabel *error);
+
+    CodingSession &m_session;
     Project &m_project;
     CoderId m_current;
     std::vector<Coder> m_coders;

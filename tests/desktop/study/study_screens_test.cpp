@@ -12,6 +12,9 @@
 #include "core/project/codebook_versions.h"
 #include "core/project/project.h"
 #include "core/project/study_progress.h"
+#include "core/project/testing/project_database.h"
+#include "tests/desktop/session_on_file.h"
+#include "tests/support/db_dump.h"
 #include "tests/support/test_support.h"
 
 #include <QCheckBox>
@@ -28,6 +31,7 @@
 #include <QTemporaryDir>
 #include <QTest>
 #include <QTextBrowser>
+#include <QUndoStack>
 
 #include <algorithm>
 #include <map>
@@ -42,9 +46,16 @@ struct SampleCopy {
     QTemporaryDir dir;
     Project project = open();
 
+    QString path() const { return dir.filePath(QStringLiteral("demo.fourfold")); }
+    // A session of `pseudonym` on the same file, with a connection of its own.
+    std::unique_ptr<CodingSession> session(const QString &pseudonym)
+    {
+        return sessionOnFile(path(), pseudonym);
+    }
+
     Project open()
     {
-        const QString path = dir.filePath(QStringLiteral("demo.fourfold"));
+        const QString path = this->path();
         REQUIRE(QFile::copy(QStringLiteral(FOURFOLD_SAMPLE_PROJECT), path));
         QFile::setPermissions(path, QFile::ReadOwner | QFile::WriteOwner);
         auto p = Project::open(path);
@@ -106,7 +117,8 @@ TEST_CASE("A stratified reliability draw is planned, shown with its advice and c
     "[studygui][draw]")
 {
     SampleCopy s;
-    StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+    auto session = s.session(QStringLiteral("L01"));
+    StudyDesignWindow w(*session);
     w.show();
     REQUIRE(child<QComboBox>(w, "draw-phase")->currentData().toInt() == int(Phase::Reliability));
     child<QSpinBox>(w, "draw-size")->setValue(3);
@@ -157,6 +169,7 @@ TEST_CASE("A stratified reliability draw is planned, shown with its advice and c
 
     // Nothing is written before the commit.
     REQUIRE(rowsOf(s.project, Phase::Reliability).size() == 27);
+    const QString beforeCommit = dumpDatabase(databaseForTesting(s.project));
     click(w, "draw-commit");
     REQUIRE(child<QLabel>(w, "draw-error")->isHidden());
     const auto rows = rowsOf(s.project, Phase::Reliability);
@@ -177,6 +190,25 @@ TEST_CASE("A stratified reliability draw is planned, shown with its advice and c
     CHECK_FALSE(child<QPushButton>(w, "draw-plan")->isEnabled());
     CHECK_FALSE(child<QPushButton>(w, "draw-commit")->isEnabled());
 
+    // The draw is one step on the desk's undo stack: undo takes it back whole and the window
+    // shows the phase free again; redo records the same draw.
+    QUndoStack *undo = session->undoStack();
+    REQUIRE(undo->count() == 1);
+    CHECK(undo->undoText() == QStringLiteral("Draw the reliability subsample"));
+    undo->undo();
+    CHECK(dumpDatabase(databaseForTesting(s.project)) == beforeCommit);
+    CHECK_FALSE(SubsampleDraw::recorded(s.project, Phase::Reliability)->has_value());
+    CHECK(child<QPushButton>(w, "draw-plan")->isEnabled());
+    CHECK_FALSE(child<QLabel>(w, "draw-state")->text().contains(QStringLiteral("20261202")));
+    undo->redo();
+    auto redone = SubsampleDraw::recorded(s.project, Phase::Reliability);
+    REQUIRE(redone);
+    REQUIRE(redone->has_value());
+    CHECK((*redone)->articles == (*recorded)->articles);
+    CHECK(rowsOf(s.project, Phase::Reliability).size() == 27 + 9);
+    CHECK(child<QLabel>(w, "draw-state")->text().contains(QStringLiteral("20261202")));
+    CHECK_FALSE(child<QPushButton>(w, "draw-plan")->isEnabled());
+
     // The same seed on another copy draws the same articles (a recorded seed reproduces it).
     SampleCopy again;
     DrawRequest request;
@@ -192,7 +224,8 @@ TEST_CASE("A stratified reliability draw is planned, shown with its advice and c
 TEST_CASE("Changing the request after a draw withdraws the plan", "[studygui][draw]")
 {
     SampleCopy s;
-    StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+    auto session = s.session(QStringLiteral("L01"));
+    StudyDesignWindow w(*session);
     child<QSpinBox>(w, "draw-size")->setValue(2);
     click(w, "draw-plan");
     REQUIRE(child<QPushButton>(w, "draw-commit")->isEnabled());
@@ -220,7 +253,8 @@ TEST_CASE(
     "A committed draw is withdrawn from the window until someone codes it", "[studygui][draw]")
 {
     SampleCopy s;
-    StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+    auto session = s.session(QStringLiteral("L01"));
+    StudyDesignWindow w(*session);
     w.show();
     CHECK_FALSE(child<QPushButton>(w, "draw-withdraw")->isEnabled()); // nothing drawn yet
     auto drawThree = [&] {
@@ -261,7 +295,8 @@ TEST_CASE("The rest is dealt single- or double-coded from the window", "[studygu
     SECTION("single-coded: each free article once, loads differ by at most one")
     {
         SampleCopy s;
-        StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+        auto session = s.session(QStringLiteral("L01"));
+        StudyDesignWindow w(*session);
         w.showPage(StudyDesignWindow::RestPage);
         checkOnly(
             child<QListWidget>(w, "rest-coders"), {QStringLiteral("C01"), QStringLiteral("C02")});
@@ -294,7 +329,8 @@ TEST_CASE("The rest is dealt single- or double-coded from the window", "[studygu
     SECTION("double-coded: each free article twice, by two different coders")
     {
         SampleCopy s;
-        StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+        auto session = s.session(QStringLiteral("L01"));
+        StudyDesignWindow w(*session);
         checkOnly(child<QListWidget>(w, "rest-coders"),
             {QStringLiteral("C01"), QStringLiteral("C02"), QStringLiteral("C03")});
         child<QRadioButton>(w, "rest-double")->setChecked(true);
@@ -314,7 +350,8 @@ TEST_CASE("The rest is dealt single- or double-coded from the window", "[studygu
 TEST_CASE("Articles are given to coders in a phase", "[studygui][assign]")
 {
     SampleCopy s;
-    StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+    auto session = s.session(QStringLiteral("L01"));
+    StudyDesignWindow w(*session);
     auto *phase = child<QComboBox>(w, "give-phase");
     phase->setCurrentIndex(phase->findData(int(Phase::Training)));
     auto *articles = child<QListWidget>(w, "give-articles");
@@ -346,7 +383,8 @@ TEST_CASE("Codebook versions: the diff and the annotations under an older versio
     SampleCopy s;
     const CoderId lead = s.coder(QStringLiteral("L01"));
     {
-        StudyDesignWindow w(s.project, lead);
+        auto session = s.session(QStringLiteral("L01"));
+        StudyDesignWindow w(*session);
         w.showPage(StudyDesignWindow::CodebookPage);
         CHECK(child<QTableWidget>(w, "codebook-versions")->rowCount() == 1);
         CHECK(child<QTableWidget>(w, "outdated-annotations")->rowCount() == 0);
@@ -359,7 +397,8 @@ TEST_CASE("Codebook versions: the diff and the annotations under an older versio
         QStringLiteral("A call for or against a specific action by a named actor.");
     REQUIRE(CodebookVersions::add(s.project, next, QStringLiteral("Remedy narrowed"), lead));
 
-    StudyDesignWindow w(s.project, lead);
+    auto session = s.session(QStringLiteral("L01"));
+    StudyDesignWindow w(*session);
     CHECK(child<QTableWidget>(w, "codebook-versions")->rowCount() == 2);
     CHECK(child<QComboBox>(w, "diff-from")->currentText() == QStringLiteral("1"));
     CHECK(child<QComboBox>(w, "diff-to")->currentText() == QStringLiteral("2"));
@@ -421,7 +460,8 @@ TEST_CASE("Effort per coder is hidden until the lead turns it on", "[studygui][p
     }
     REQUIRE(c01Seconds >= 125);
 
-    ProgressBoardWindow board(s.project, s.coder(QStringLiteral("L01")));
+    auto session = s.session(QStringLiteral("L01"));
+    ProgressBoardWindow board(*session);
     board.show();
     QTableWidget *t = board.board();
     // Off by default (issue 7): no per-coder time, the aggregate is there.
@@ -449,6 +489,15 @@ TEST_CASE("Effort per coder is hidden until the lead turns it on", "[studygui][p
     auto visible = StudyProgress::effortPerCoderVisible(s.project);
     REQUIRE(visible);
     CHECK(*visible);
+    // One step on the desk's undo stack: undone, the setting and the board are as before.
+    REQUIRE(session->undoStack()->count() == 1);
+    session->undoStack()->undo();
+    CHECK_FALSE(*StudyProgress::effortPerCoderVisible(s.project));
+    CHECK_FALSE(board.effortSwitch()->isChecked());
+    CHECK(t->isColumnHidden(ProgressBoardWindow::EffortColumn));
+    session->undoStack()->redo();
+    CHECK(*StudyProgress::effortPerCoderVisible(s.project));
+    CHECK(board.effortSwitch()->isChecked());
     CHECK_FALSE(t->isColumnHidden(ProgressBoardWindow::EffortColumn));
     for (int r = 0; r < t->rowCount(); ++r)
         if (t->item(r, ProgressBoardWindow::CoderColumn)->text() == QLatin1String("C01"))
@@ -456,7 +505,8 @@ TEST_CASE("Effort per coder is hidden until the lead turns it on", "[studygui][p
                 t->item(r, ProgressBoardWindow::EffortColumn)->text() == studyDuration(c01Seconds));
 
     // The setting is the project's: a second window opens with it on; a coder cannot switch it.
-    ProgressBoardWindow coderView(s.project, c01);
+    auto coderSession = s.session(QStringLiteral("C01"));
+    ProgressBoardWindow coderView(*coderSession);
     CHECK(coderView.effortSwitch()->isChecked());
     CHECK_FALSE(coderView.effortSwitch()->isEnabled());
     CHECK_FALSE(coderView.board()->isColumnHidden(ProgressBoardWindow::EffortColumn));
@@ -548,7 +598,8 @@ TEST_CASE("The minimum-sample figures use one number format on a German screen",
     const QLocale before;
     QLocale::setDefault(QLocale(QLocale::German, QLocale::Germany));
     SampleCopy s;
-    StudyDesignWindow w(s.project, s.coder(QStringLiteral("L01")));
+    auto session = s.session(QStringLiteral("L01"));
+    StudyDesignWindow w(*session);
     auto *alphaMin = child<QDoubleSpinBox>(w, "draw-alpha-min");
     auto *rarest = child<QDoubleSpinBox>(w, "draw-rarest");
     auto *percent = child<QDoubleSpinBox>(w, "draw-percent");
