@@ -4479,11 +4479,13 @@
     </message>
     <message>
         <location filename="../core/project/study_design.cpp" line="985"/>
+        <location filename="../core/project/codebook_version_edit.cpp" line="91"/>
         <source>%1 span(s) of %2 carry the value &quot;%3&quot; of the attribute &quot;%4&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the attribute with one of its values (%5).</source>
         <translation>%1 Textstelle(n) von %2 tragen den Wert „%3“ des Merkmals „%4“, den die neue Version weder aufführt noch recodiert; fügen Sie dem Merkmal &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%5).</translation>
     </message>
     <message>
         <location filename="../core/project/study_design.cpp" line="1004"/>
+        <location filename="../core/project/codebook_version_edit.cpp" line="110"/>
         <source>%1 answer(s) to the item &quot;%2&quot; are &quot;%3&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the item with one of its values (%4).</source>
         <translation>%1 Antwort(en) auf das Item „%2“ lauten „%3“, was die neue Version weder aufführt noch recodiert; fügen Sie dem Item &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%4).</translation>
     </message>
@@ -4526,6 +4528,24 @@
         <location filename="../core/project/study_design.cpp" line="620"/>
         <source>Withdraw the %1 subsample</source>
         <translation>Teilstichprobe der Phase %1 zurückziehen</translation>
+    </message>
+    <message>
+        <location filename="../core/project/codebook_version_edit.cpp" line="38"/>
+        <source>Save codebook version %1</source>
+        <translation>Codebuch-Version %1 speichern</translation>
+    </message>
+    <message>
+        <location filename="../core/project/codebook_version_edit.cpp" line="48"/>
+        <source>The codebook is at version %1 now; this change was made to version %2 and is not saved. Make it again on version %1.</source>
+        <translation>Das Codebuch ist jetzt bei Version %1; diese Änderung wurde an Version %2 vorgenommen und ist nicht gespeichert. Nehmen Sie sie an Version %1 noch einmal vor.</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../core/project/codebook_version_edit.cpp" line="66"/>
+        <source>%n span(s) or answer(s) were made under codebook version %1; undo them before the version.</source>
+        <translation>
+            <numerusform>%n Markierung oder Antwort wurde unter Codebuch-Version %1 gemacht; machen Sie sie vor der Version rückgängig.</numerusform>
+            <numerusform>%n Markierungen oder Antworten wurden unter Codebuch-Version %1 gemacht; machen Sie sie vor der Version rückgängig.</numerusform>
+        </translation>
     </message>
 </context>
 <context>

@@ -4479,11 +4479,13 @@
     </message>
     <message>
         <location filename="../core/project/study_design.cpp" line="985"/>
+        <location filename="../core/project/codebook_version_edit.cpp" line="91"/>
         <source>%1 span(s) of %2 carry the value &quot;%3&quot; of the attribute &quot;%4&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the attribute with one of its values (%5).</source>
         <translation>%1 fragment(en) van %2 dragen de waarde ‘%3’ van het kenmerk ‘%4’, die de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het kenmerk toe (%5).</translation>
     </message>
     <message>
         <location filename="../core/project/study_design.cpp" line="1004"/>
+        <location filename="../core/project/codebook_version_edit.cpp" line="110"/>
         <source>%1 answer(s) to the item &quot;%2&quot; are &quot;%3&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the item with one of its values (%4).</source>
         <translation>%1 antwoord(en) op het item ‘%2’ zijn ‘%3’, dat de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het item toe (%4).</translation>
     </message>
@@ -4526,6 +4528,24 @@
         <location filename="../core/project/study_design.cpp" line="620"/>
         <source>Withdraw the %1 subsample</source>
         <translation>Deelsteekproef van fase %1 intrekken</translation>
+    </message>
+    <message>
+        <location filename="../core/project/codebook_version_edit.cpp" line="38"/>
+        <source>Save codebook version %1</source>
+        <translation>Codeboekversie %1 opslaan</translation>
+    </message>
+    <message>
+        <location filename="../core/project/codebook_version_edit.cpp" line="48"/>
+        <source>The codebook is at version %1 now; this change was made to version %2 and is not saved. Make it again on version %1.</source>
+        <translation>Het codeboek staat nu op versie %1; deze wijziging is op versie %2 gemaakt en niet opgeslagen. Breng haar opnieuw aan op versie %1.</translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../core/project/codebook_version_edit.cpp" line="66"/>
+        <source>%n span(s) or answer(s) were made under codebook version %1; undo them before the version.</source>
+        <translation>
+            <numerusform>%n markering of antwoord is onder codeboekversie %1 gemaakt; maak die eerst ongedaan, dan de versie.</numerusform>
+            <numerusform>%n markeringen of antwoorden zijn onder codeboekversie %1 gemaakt; maak die eerst ongedaan, dan de versie.</numerusform>
+        </translation>
     </message>
 </context>
 <context>
