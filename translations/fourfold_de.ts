@@ -4347,7 +4347,7 @@
 <context>
     <name>StudyDesignText</name>
     <message numerus="yes">
-        <location filename="../core/project/study_design.cpp" line="883"/>
+        <location filename="../core/project/assignment_plans.cpp" line="158"/>
         <source>Assign %n article(s)</source>
         <translation>
             <numerusform>%n Artikel zuweisen</numerusform>
@@ -4355,177 +4355,175 @@
         </translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="579"/>
+        <location filename="../core/project/subsample_draw.cpp" line="239"/>
         <source>Draw the %1 subsample</source>
         <translation>Die Teilstichprobe der Phase %1 ziehen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1365"/>
+        <location filename="../core/project/study_progress.cpp" line="41"/>
         <source>Show effort per coder</source>
         <translation>Aufwand je Person zeigen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1366"/>
+        <location filename="../core/project/study_progress.cpp" line="42"/>
         <source>Hide effort per coder</source>
         <translation>Aufwand je Person ausblenden</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="121"/>
-        <location filename="../core/project/study_design.cpp" line="863"/>
+        <location filename="../core/project/assignment_plans.cpp" line="138"/>
+        <location filename="../core/project/study_names.cpp" line="42"/>
         <source>There is no coder &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keine codierende Person „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="124"/>
+        <location filename="../core/project/study_names.cpp" line="45"/>
         <source>The coder &quot;%1&quot; is named twice.</source>
         <translation>Die codierende Person „%1“ ist zweimal genannt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="127"/>
-        <location filename="../core/project/study_design.cpp" line="866"/>
+        <location filename="../core/project/assignment_plans.cpp" line="141"/>
+        <location filename="../core/project/study_names.cpp" line="48"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 ist deaktiviert und erhält keine neuen Zuweisungen; aktivieren Sie die Person zuerst.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="400"/>
+        <location filename="../core/project/subsample_draw.cpp" line="60"/>
         <source>A subsample is drawn for the reliability or the pilot phase, not for %1.</source>
         <translation>Eine Teilstichprobe wird für die Reliabilitäts- oder die Pretest-Phase gezogen, nicht für %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="405"/>
+        <location filename="../core/project/subsample_draw.cpp" line="65"/>
         <source>Give either the size of the subsample or its fraction of the articles.</source>
         <translation>Geben Sie entweder den Umfang der Teilstichprobe oder ihren Anteil an den Artikeln an.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="409"/>
+        <location filename="../core/project/subsample_draw.cpp" line="69"/>
         <source>The fraction %1 does not lie in (0, 1].</source>
         <translation>Der Anteil %1 liegt nicht in (0, 1].</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="412"/>
+        <location filename="../core/project/subsample_draw.cpp" line="72"/>
         <source>A reliability subsample needs at least two coders; %1 given.</source>
         <translation>Eine Reliabilitäts-Teilstichprobe braucht mindestens zwei Codierende; angegeben: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="425"/>
+        <location filename="../core/project/subsample_draw.cpp" line="85"/>
         <source>The %1 phase already has a subsample (drawn %2 with seed %3).</source>
         <translation>Die Phase %1 hat bereits eine Teilstichprobe (gezogen %2 mit Seed %3).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="458"/>
+        <location filename="../core/project/subsample_draw.cpp" line="118"/>
         <source>A subsample of %1 articles cannot be drawn from a sampling frame of %2 articles.</source>
         <translation>Eine Teilstichprobe von %1 Artikeln kann nicht aus einer Auswahlgesamtheit von %2 Artikeln gezogen werden.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="574"/>
+        <location filename="../core/project/subsample_draw.cpp" line="234"/>
         <source>The %1 phase already has a subsample.</source>
         <translation>Die Phase %1 hat bereits eine Teilstichprobe.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="645"/>
+        <location filename="../core/project/subsample_draw.cpp" line="305"/>
         <source>The record of the %1 subsample is not a JSON object.</source>
         <translation>Der Eintrag der Teilstichprobe %1 ist kein JSON-Objekt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="691"/>
+        <location filename="../core/project/subsample_draw.cpp" line="351"/>
         <source>The subsample record is damaged: %1.</source>
         <translation>Der Eintrag der Teilstichprobe ist beschädigt: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="702"/>
+        <location filename="../core/project/subsample_draw.cpp" line="362"/>
         <source>no valid phase</source>
         <translation>keine gültige Phase</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="706"/>
+        <location filename="../core/project/subsample_draw.cpp" line="366"/>
         <source>unknown method &quot;%1&quot;</source>
         <translation>unbekannte Methode „%1“</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="711"/>
+        <location filename="../core/project/subsample_draw.cpp" line="371"/>
         <source>unknown stratum &quot;%1&quot;</source>
         <translation>unbekannte Schicht „%1“</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="716"/>
+        <location filename="../core/project/subsample_draw.cpp" line="376"/>
         <source>no valid seed</source>
         <translation>kein gültiger Seed</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="751"/>
+        <location filename="../core/project/assignment_plans.cpp" line="26"/>
         <source>Double coding needs at least two coders; %1 given.</source>
         <translation>Doppelcodierung braucht mindestens zwei Codierende; angegeben: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="753"/>
+        <location filename="../core/project/assignment_plans.cpp" line="28"/>
         <source>Name at least one coder for the remaining articles.</source>
         <translation>Nennen Sie mindestens eine codierende Person für die übrigen Artikel.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="805"/>
+        <location filename="../core/project/assignment_plans.cpp" line="80"/>
         <source>Name at least one article and one coder.</source>
         <translation>Nennen Sie mindestens einen Artikel und eine codierende Person.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="815"/>
-        <location filename="../core/project/study_design.cpp" line="859"/>
+        <location filename="../core/project/assignment_plans.cpp" line="90"/>
+        <location filename="../core/project/assignment_plans.cpp" line="134"/>
         <source>There is no article &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keinen Artikel „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="876"/>
+        <location filename="../core/project/assignment_plans.cpp" line="151"/>
         <source>Article &quot;%1&quot; is already assigned to %2 in the %3 phase.</source>
         <translation>Artikel „%1“ ist %2 in der Phase %3 bereits zugewiesen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="985"/>
         <location filename="../core/project/codebook_version_edit.cpp" line="91"/>
         <source>%1 span(s) of %2 carry the value &quot;%3&quot; of the attribute &quot;%4&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the attribute with one of its values (%5).</source>
         <translation>%1 Textstelle(n) von %2 tragen den Wert „%3“ des Merkmals „%4“, den die neue Version weder aufführt noch recodiert; fügen Sie dem Merkmal &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%5).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1004"/>
         <location filename="../core/project/codebook_version_edit.cpp" line="110"/>
         <source>%1 answer(s) to the item &quot;%2&quot; are &quot;%3&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the item with one of its values (%4).</source>
         <translation>%1 Antwort(en) auf das Item „%2“ lauten „%3“, was die neue Version weder aufführt noch recodiert; fügen Sie dem Item &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%4).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1037"/>
+        <location filename="../core/project/codebook_versions.cpp" line="120"/>
         <source>A new codebook version needs a note that says what changed and why.</source>
         <translation>Eine neue Codebuchversion braucht eine Notiz, die sagt, was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1044"/>
+        <location filename="../core/project/codebook_versions.cpp" line="134"/>
         <source>The codebook is the same as version %1; no new version was made.</source>
         <translation>Das Codebuch ist identisch mit Version %1; es wurde keine neue Version erstellt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1148"/>
+        <location filename="../core/project/codebook_versions.cpp" line="242"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codebuchversion %1 → %2</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1150"/>
+        <location filename="../core/project/codebook_versions.cpp" line="244"/>
         <source>no changes</source>
         <translation>keine Änderungen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1246"/>
+        <location filename="../core/project/training_feedback.cpp" line="24"/>
         <source>Training feedback is computed on paragraphs, sentences or tokens, not on %1 units.</source>
         <translation>Trainingsfeedback wird auf Absätzen, Sätzen oder Tokens berechnet, nicht auf %1-Einheiten.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1264"/>
+        <location filename="../core/project/training_feedback.cpp" line="42"/>
         <source>Name the lead whose training coding is the master: there is not exactly one lead with training annotations.</source>
         <translation>Nennen Sie die Leitung, deren Trainingscodierung die Vorlage ist: es gibt nicht genau eine Leitung mit Trainingsannotationen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="606"/>
+        <location filename="../core/project/subsample_draw.cpp" line="266"/>
         <source>The %1 phase has no subsample to withdraw.</source>
         <translation>Die Phase %1 hat keine Teilstichprobe, die zurückgezogen werden könnte.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="620"/>
+        <location filename="../core/project/subsample_draw.cpp" line="280"/>
         <source>Withdraw the %1 subsample</source>
         <translation>Teilstichprobe der Phase %1 zurückziehen</translation>
     </message>

@@ -4347,7 +4347,7 @@
 <context>
     <name>StudyDesignText</name>
     <message numerus="yes">
-        <location filename="../core/project/study_design.cpp" line="883"/>
+        <location filename="../core/project/assignment_plans.cpp" line="158"/>
         <source>Assign %n article(s)</source>
         <translation>
             <numerusform>%n artikel toewijzen</numerusform>
@@ -4355,177 +4355,175 @@
         </translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="579"/>
+        <location filename="../core/project/subsample_draw.cpp" line="239"/>
         <source>Draw the %1 subsample</source>
         <translation>De deelsteekproef van de fase %1 trekken</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1365"/>
+        <location filename="../core/project/study_progress.cpp" line="41"/>
         <source>Show effort per coder</source>
         <translation>Inspanning per persoon tonen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1366"/>
+        <location filename="../core/project/study_progress.cpp" line="42"/>
         <source>Hide effort per coder</source>
         <translation>Inspanning per persoon verbergen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="121"/>
-        <location filename="../core/project/study_design.cpp" line="863"/>
+        <location filename="../core/project/assignment_plans.cpp" line="138"/>
+        <location filename="../core/project/study_names.cpp" line="42"/>
         <source>There is no coder &quot;%1&quot; in the project.</source>
         <translation>Er is geen codeur ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="124"/>
+        <location filename="../core/project/study_names.cpp" line="45"/>
         <source>The coder &quot;%1&quot; is named twice.</source>
         <translation>De codeur ‘%1’ is twee keer genoemd.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="127"/>
-        <location filename="../core/project/study_design.cpp" line="866"/>
+        <location filename="../core/project/assignment_plans.cpp" line="141"/>
+        <location filename="../core/project/study_names.cpp" line="48"/>
         <source>%1 is disabled and takes no new assignments; enable them first.</source>
         <translation>%1 is uitgeschakeld en krijgt geen nieuwe toewijzingen; schakel deze persoon eerst in.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="400"/>
+        <location filename="../core/project/subsample_draw.cpp" line="60"/>
         <source>A subsample is drawn for the reliability or the pilot phase, not for %1.</source>
         <translation>Een deelsteekproef wordt getrokken voor de betrouwbaarheids- of de pilotfase, niet voor %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="405"/>
+        <location filename="../core/project/subsample_draw.cpp" line="65"/>
         <source>Give either the size of the subsample or its fraction of the articles.</source>
         <translation>Geef ofwel de omvang van de deelsteekproef ofwel haar aandeel in de artikelen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="409"/>
+        <location filename="../core/project/subsample_draw.cpp" line="69"/>
         <source>The fraction %1 does not lie in (0, 1].</source>
         <translation>Het aandeel %1 ligt niet in (0, 1].</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="412"/>
+        <location filename="../core/project/subsample_draw.cpp" line="72"/>
         <source>A reliability subsample needs at least two coders; %1 given.</source>
         <translation>Een betrouwbaarheidsdeelsteekproef heeft ten minste twee codeurs nodig; opgegeven: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="425"/>
+        <location filename="../core/project/subsample_draw.cpp" line="85"/>
         <source>The %1 phase already has a subsample (drawn %2 with seed %3).</source>
         <translation>De fase %1 heeft al een deelsteekproef (getrokken %2 met seed %3).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="458"/>
+        <location filename="../core/project/subsample_draw.cpp" line="118"/>
         <source>A subsample of %1 articles cannot be drawn from a sampling frame of %2 articles.</source>
         <translation>Een deelsteekproef van %1 artikelen kan niet worden getrokken uit een steekproefkader van %2 artikelen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="574"/>
+        <location filename="../core/project/subsample_draw.cpp" line="234"/>
         <source>The %1 phase already has a subsample.</source>
         <translation>De fase %1 heeft al een deelsteekproef.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="645"/>
+        <location filename="../core/project/subsample_draw.cpp" line="305"/>
         <source>The record of the %1 subsample is not a JSON object.</source>
         <translation>Het record van de deelsteekproef %1 is geen JSON-object.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="691"/>
+        <location filename="../core/project/subsample_draw.cpp" line="351"/>
         <source>The subsample record is damaged: %1.</source>
         <translation>Het record van de deelsteekproef is beschadigd: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="702"/>
+        <location filename="../core/project/subsample_draw.cpp" line="362"/>
         <source>no valid phase</source>
         <translation>geen geldige fase</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="706"/>
+        <location filename="../core/project/subsample_draw.cpp" line="366"/>
         <source>unknown method &quot;%1&quot;</source>
         <translation>onbekende methode ‘%1’</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="711"/>
+        <location filename="../core/project/subsample_draw.cpp" line="371"/>
         <source>unknown stratum &quot;%1&quot;</source>
         <translation>onbekende stratum ‘%1’</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="716"/>
+        <location filename="../core/project/subsample_draw.cpp" line="376"/>
         <source>no valid seed</source>
         <translation>geen geldige seed</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="751"/>
+        <location filename="../core/project/assignment_plans.cpp" line="26"/>
         <source>Double coding needs at least two coders; %1 given.</source>
         <translation>Dubbele codering heeft ten minste twee codeurs nodig; opgegeven: %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="753"/>
+        <location filename="../core/project/assignment_plans.cpp" line="28"/>
         <source>Name at least one coder for the remaining articles.</source>
         <translation>Noem ten minste één codeur voor de overige artikelen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="805"/>
+        <location filename="../core/project/assignment_plans.cpp" line="80"/>
         <source>Name at least one article and one coder.</source>
         <translation>Noem ten minste één artikel en één codeur.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="815"/>
-        <location filename="../core/project/study_design.cpp" line="859"/>
+        <location filename="../core/project/assignment_plans.cpp" line="90"/>
+        <location filename="../core/project/assignment_plans.cpp" line="134"/>
         <source>There is no article &quot;%1&quot; in the project.</source>
         <translation>Er is geen artikel ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="876"/>
+        <location filename="../core/project/assignment_plans.cpp" line="151"/>
         <source>Article &quot;%1&quot; is already assigned to %2 in the %3 phase.</source>
         <translation>Artikel ‘%1’ is in de fase %3 al aan %2 toegewezen.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="985"/>
         <location filename="../core/project/codebook_version_edit.cpp" line="91"/>
         <source>%1 span(s) of %2 carry the value &quot;%3&quot; of the attribute &quot;%4&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the attribute with one of its values (%5).</source>
         <translation>%1 fragment(en) van %2 dragen de waarde ‘%3’ van het kenmerk ‘%4’, die de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het kenmerk toe (%5).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1004"/>
         <location filename="../core/project/codebook_version_edit.cpp" line="110"/>
         <source>%1 answer(s) to the item &quot;%2&quot; are &quot;%3&quot;, which the new version neither lists nor recodes; add &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} to the item with one of its values (%4).</source>
         <translation>%1 antwoord(en) op het item ‘%2’ zijn ‘%3’, dat de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het item toe (%4).</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1037"/>
+        <location filename="../core/project/codebook_versions.cpp" line="120"/>
         <source>A new codebook version needs a note that says what changed and why.</source>
         <translation>Een nieuwe codeboekversie heeft een notitie nodig die zegt wat er is veranderd en waarom.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1044"/>
+        <location filename="../core/project/codebook_versions.cpp" line="134"/>
         <source>The codebook is the same as version %1; no new version was made.</source>
         <translation>Het codeboek is gelijk aan versie %1; er is geen nieuwe versie gemaakt.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1148"/>
+        <location filename="../core/project/codebook_versions.cpp" line="242"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codeboekversie %1 → %2</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1150"/>
+        <location filename="../core/project/codebook_versions.cpp" line="244"/>
         <source>no changes</source>
         <translation>geen wijzigingen</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1246"/>
+        <location filename="../core/project/training_feedback.cpp" line="24"/>
         <source>Training feedback is computed on paragraphs, sentences or tokens, not on %1 units.</source>
         <translation>Trainingsfeedback wordt berekend op alinea&apos;s, zinnen of tokens, niet op %1-eenheden.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="1264"/>
+        <location filename="../core/project/training_feedback.cpp" line="42"/>
         <source>Name the lead whose training coding is the master: there is not exactly one lead with training annotations.</source>
         <translation>Noem de coördinator wiens trainingscodering de maatstaf is: er is niet precies één coördinator met trainingsannotaties.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="606"/>
+        <location filename="../core/project/subsample_draw.cpp" line="266"/>
         <source>The %1 phase has no subsample to withdraw.</source>
         <translation>De fase %1 heeft geen deelsteekproef om in te trekken.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_design.cpp" line="620"/>
+        <location filename="../core/project/subsample_draw.cpp" line="280"/>
         <source>Withdraw the %1 subsample</source>
         <translation>Deelsteekproef van fase %1 intrekken</translation>
     </message>
