@@ -138,19 +138,20 @@ TEST_CASE("A stratified reliability draw is planned, shown with its advice and c
     REQUIRE(child<QLabel>(w, "draw-error")->isHidden());
     REQUIRE(child<QPushButton>(w, "draw-commit")->isEnabled());
 
-    // The frame is the seven free articles (sample-project/README.md): topics sallow-ferry 2,
-    // marredijk-wind 3, quendstadt-market 2. Three drawn in proportion by largest remainder
-    // (Hamilton): quotas 0.86, 1.29, 0.86 → floors 0, 1, 0, the two largest remainders add one
-    // each → 1, 1, 1 (worked by hand).
+    // The frame is the 31 articles outside the reliability phase (sample-project/README.md: the
+    // seven uncoded and the 24 production articles): topics sallow-ferry 10, marredijk-wind 11,
+    // quendstadt-market 10. Three drawn in proportion by largest remainder (Hamilton): quotas
+    // 0.97, 1.06, 0.97 → floors 0, 1, 0, the two largest remainders add one each → 1, 1, 1
+    // (worked by hand).
     auto *strata = child<QTableWidget>(w, "draw-strata");
     REQUIRE(strata->rowCount() == 3);
     std::map<QString, std::pair<qint64, qint64>> byTopic;
     for (int r = 0; r < strata->rowCount(); ++r)
         byTopic[strata->item(r, 0)->text()] = {strata->item(r, 1)->data(Qt::UserRole).toLongLong(),
             strata->item(r, 2)->data(Qt::UserRole).toLongLong()};
-    CHECK(byTopic[QStringLiteral("sallow-ferry")] == std::pair<qint64, qint64> {2, 1});
-    CHECK(byTopic[QStringLiteral("marredijk-wind")] == std::pair<qint64, qint64> {3, 1});
-    CHECK(byTopic[QStringLiteral("quendstadt-market")] == std::pair<qint64, qint64> {2, 1});
+    CHECK(byTopic[QStringLiteral("sallow-ferry")] == std::pair<qint64, qint64> {10, 1});
+    CHECK(byTopic[QStringLiteral("marredijk-wind")] == std::pair<qint64, qint64> {11, 1});
+    CHECK(byTopic[QStringLiteral("quendstadt-market")] == std::pair<qint64, qint64> {10, 1});
     auto *drawn = child<QListWidget>(w, "draw-articles");
     REQUIRE(drawn->count() == 3);
     std::set<QString> prefixes;
@@ -234,8 +235,8 @@ TEST_CASE("Changing the request after a draw withdraws the plan", "[studygui][dr
     CHECK(child<QListWidget>(w, "draw-articles")->count() == 0);
 
     // A bad request is refused with the core's sentence and nothing is written: more articles
-    // than the frame of seven holds.
-    child<QSpinBox>(w, "draw-size")->setValue(8);
+    // than the frame of 31 holds.
+    child<QSpinBox>(w, "draw-size")->setValue(32);
     click(w, "draw-plan");
     CHECK_FALSE(child<QLabel>(w, "draw-error")->isHidden());
     CHECK_FALSE(child<QLabel>(w, "draw-error")->text().isEmpty());
@@ -302,11 +303,16 @@ TEST_CASE("The rest is dealt single- or double-coded from the window", "[studygu
             child<QListWidget>(w, "rest-coders"), {QStringLiteral("C01"), QStringLiteral("C02")});
         child<QLineEdit>(w, "rest-seed")->setText(QStringLiteral("7"));
         click(w, "rest-plan");
-        // Seven free articles, one row each in the preview.
+        // Seven free articles, one row each in the preview; the 24 production articles were
+        // coded once each before (sample-project/README.md).
         REQUIRE(child<QTableWidget>(w, "rest-table")->rowCount() == 7);
-        REQUIRE(rowsOf(s.project, Phase::Production).empty());
+        const auto before = rowsOf(s.project, Phase::Production);
+        REQUIRE(before.size() == 24);
         click(w, "rest-commit");
-        const auto rows = rowsOf(s.project, Phase::Production);
+        auto rows = rowsOf(s.project, Phase::Production);
+        REQUIRE(rows.size() == 24 + 7);
+        // The new ones are the rows not done yet.
+        std::erase_if(rows, [](const AssignmentRow &r) { return r.status == "done"; });
         REQUIRE(rows.size() == 7);
         std::map<QString, int> load;
         std::set<QString> articles;
@@ -317,14 +323,16 @@ TEST_CASE("The rest is dealt single- or double-coded from the window", "[studygu
         CHECK(articles.size() == 7);
         CHECK(load.size() == 2);
         CHECK(std::abs(load[QStringLiteral("C01")] - load[QStringLiteral("C02")]) <= 1);
-        // The assignments page shows the new load: C01 and C02 with 9 reliability articles.
+        // The assignments page shows the new load (done / assigned): C01 and C02 with their 8
+        // production articles done and the new ones, C03 with its 8.
         auto *matrix = child<QTableWidget>(w, "assignment-matrix");
         QStringList production;
         for (int r = 0; r < matrix->rowCount(); ++r)
             production << matrix->item(r, 0)->text() + QLatin1Char('=')
                     + matrix->item(r, 4)->text();
-        CHECK(production.contains(QStringLiteral("C01=0 / %1").arg(load[QStringLiteral("C01")])));
-        CHECK(production.contains(QStringLiteral("C03=·")));
+        CHECK(
+            production.contains(QStringLiteral("C01=8 / %1").arg(8 + load[QStringLiteral("C01")])));
+        CHECK(production.contains(QStringLiteral("C03=8 / 8")));
     }
     SECTION("double-coded: each free article twice, by two different coders")
     {
@@ -336,7 +344,9 @@ TEST_CASE("The rest is dealt single- or double-coded from the window", "[studygu
         child<QRadioButton>(w, "rest-double")->setChecked(true);
         click(w, "rest-plan");
         click(w, "rest-commit");
-        const auto rows = rowsOf(s.project, Phase::Production);
+        auto rows = rowsOf(s.project, Phase::Production);
+        REQUIRE(rows.size() == 24 + 14); // the sample's 24 production articles, done
+        std::erase_if(rows, [](const AssignmentRow &r) { return r.status == "done"; });
         REQUIRE(rows.size() == 14);
         std::map<QString, std::set<QString>> coders;
         for (const AssignmentRow &r : rows)
@@ -373,8 +383,8 @@ TEST_CASE("Articles are given to coders in a phase", "[studygui][assign]")
     click(w, "give-commit");
     CHECK_FALSE(child<QLabel>(w, "give-error")->isHidden());
     CHECK(rowsOf(s.project, Phase::Training).size() == 4);
-    // The table of every assignment lists 27 reliability + 4 training rows.
-    CHECK(child<QTableWidget>(w, "assignment-rows")->rowCount() == 31);
+    // The table of every assignment lists 27 reliability + 24 production + 4 training rows.
+    CHECK(child<QTableWidget>(w, "assignment-rows")->rowCount() == 55);
 }
 
 TEST_CASE("Codebook versions: the diff and the annotations under an older version",
@@ -468,16 +478,17 @@ TEST_CASE("Effort per coder is hidden until the lead turns it on", "[studygui][p
     CHECK(t->isColumnHidden(ProgressBoardWindow::EffortColumn));
     CHECK_FALSE(board.effortSwitch()->isChecked());
     REQUIRE(board.effortSwitch()->isEnabled());
-    REQUIRE(t->rowCount() == 3); // C01–C03 in the reliability phase
+    REQUIRE(t->rowCount() == 6); // C01–C03 in the reliability and the production phase
     QTableWidget *effort = board.effortTable();
-    REQUIRE(effort->rowCount() == 1);
+    REQUIRE(effort->rowCount() == 2); // reliability and production
     CHECK(effort->item(0, 0)->text() == QStringLiteral("Reliability"));
     CHECK(effort->item(0, 1)->data(Qt::UserRole).toLongLong() == allDone);
     CHECK(effort->item(0, 2)->text() == studyDuration(allSeconds));
     CHECK(studyDuration(125) == QStringLiteral("2 min")); // to the minute
     int c01Row = -1;
     for (int r = 0; r < t->rowCount(); ++r)
-        if (t->item(r, ProgressBoardWindow::CoderColumn)->text() == QLatin1String("C01"))
+        if (t->item(r, ProgressBoardWindow::CoderColumn)->text() == QLatin1String("C01")
+            && t->item(r, ProgressBoardWindow::PhaseColumn)->text() == QLatin1String("Reliability"))
             c01Row = r;
     REQUIRE(c01Row >= 0);
     CHECK(t->item(c01Row, ProgressBoardWindow::AssignedColumn)->data(Qt::UserRole).toInt()
@@ -499,10 +510,7 @@ TEST_CASE("Effort per coder is hidden until the lead turns it on", "[studygui][p
     CHECK(*StudyProgress::effortPerCoderVisible(s.project));
     CHECK(board.effortSwitch()->isChecked());
     CHECK_FALSE(t->isColumnHidden(ProgressBoardWindow::EffortColumn));
-    for (int r = 0; r < t->rowCount(); ++r)
-        if (t->item(r, ProgressBoardWindow::CoderColumn)->text() == QLatin1String("C01"))
-            CHECK(
-                t->item(r, ProgressBoardWindow::EffortColumn)->text() == studyDuration(c01Seconds));
+    CHECK(t->item(c01Row, ProgressBoardWindow::EffortColumn)->text() == studyDuration(c01Seconds));
 
     // The setting is the project's: a second window opens with it on; a coder cannot switch it.
     auto coderSession = s.session(QStringLiteral("C01"));
