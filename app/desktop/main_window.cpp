@@ -522,6 +522,7 @@ Status MainWindow::openProject(
     m_items->setCodebook(m_session->codebook());
     m_codebook = new CodebookPanel(m_tabs);
     m_codebook->setCodebook(m_session->codebook());
+    m_codebookShown = m_session->codebook().versionId;
     m_tabs->addTab(m_spanEditor, tr("Span"));
     m_tabs->addTab(m_codebook, tr("Codebook"));
 
@@ -546,7 +547,13 @@ Status MainWindow::openProject(
         m_redo->setText(t.isEmpty() ? tr("&Redo") : tr("&Redo %1").arg(t));
     });
     connect(m_session.get(), &CodingSession::articleChanged, this, [this](ArticleId id) {
-        if (!id.isValid()) { // a sync wrote others' work: the list and the article again
+        if (!id.isValid()) { // a sync or a project edit: the list and the article again
+            if (m_session->codebook().versionId != m_codebookShown) { // a version added or undone
+                m_codebookShown = m_session->codebook().versionId;
+                m_spanEditor->setCodebook(m_session->codebook());
+                m_items->setCodebook(m_session->codebook());
+                m_codebook->setCodebook(m_session->codebook());
+            }
             refreshList();
             const int row =
                 m_filter->mapFromSource(m_articles->index(m_articles->rowOf(m_article), 0)).row();

@@ -129,6 +129,8 @@ private:
     SpanEditor *m_spanEditor = nullptr;
     CoderLegend *m_legend = nullptr; // whose spans, while a lead shows every coder's
     CodebookPanel *m_codebook = nullptr;
+    // The codebook version the span editor, the item form and the codebook panel show.
+    CodebookVersionId m_codebookShown;
     QLabel *m_who = nullptr;
     QLabel *m_syncStatus = nullptr;
     QAction *m_showAll = nullptr;

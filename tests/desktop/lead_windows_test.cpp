@@ -1,5 +1,7 @@
 // The lead's menu in the workbench window: present for leads only, each window opened once, and
 // every window closed before the project it shows goes away.
+#include "app/desktop/codebook/codebook_editor.h"
+#include "app/desktop/codebook_panel.h"
 #include "app/desktop/coding_session.h"
 #include "app/desktop/lead_windows.h"
 #include "app/desktop/main_window.h"
@@ -9,8 +11,11 @@
 #include <QFile>
 #include <QMenu>
 #include <QMenuBar>
+#include <QPlainTextEdit>
 #include <QPointer>
 #include <QTemporaryDir>
+#include <QTextBrowser>
+#include <QUndoStack>
 
 using namespace fourfold;
 using namespace fourfold::test;
@@ -86,4 +91,38 @@ TEST_CASE("each lead window opens once and all close when another project is ope
         CHECK(window.isNull());
     lead->openComparison();
     CHECK(lead->comparison() == nullptr);
+}
+
+TEST_CASE("a codebook version saved in the lead's editor reaches the desk at once and leaves with "
+          "the desk's undo")
+{
+    SampleCopy f;
+    MainWindow w;
+    REQUIRE(w.openProject(f.path, QStringLiteral("L01"), QStringLiteral("demo lead passphrase")));
+    auto *panel = w.findChild<CodebookPanel *>();
+    REQUIRE(panel);
+    panel->showFunction(FramingFunction::Problem);
+    auto *text = panel->findChild<QTextBrowser *>();
+    REQUIRE(text);
+    const QString sharper = QStringLiteral("What the text presents as the costly issue at stake.");
+    REQUIRE_FALSE(text->toPlainText().contains(sharper));
+    const int before = w.session()->codebook().number;
+
+    w.leadWindows()->openCodebook();
+    auto *editor = qobject_cast<CodebookEditor *>(w.leadWindows()->codebook());
+    REQUIRE(editor);
+    auto *definition = qobject_cast<QPlainTextEdit *>(
+        editor->fieldWidget(QStringLiteral("functions[0].definition")));
+    REQUIRE(definition);
+    definition->setPlainText(sharper);
+    REQUIRE(editor->saveAsNewVersion(QStringLiteral("problem names the cost")));
+    // The desk's session and its codebook panel show the new version without reopening.
+    CHECK(w.session()->codebook().number == before + 1);
+    CHECK(text->toPlainText().contains(sharper));
+
+    w.session()->undoStack()->undo();
+    CHECK(w.session()->codebook().number == before);
+    CHECK_FALSE(text->toPlainText().contains(sharper));
+    CHECK(editor->stored().number == before);
+    w.leadWindows()->closeAll();
 }
