@@ -16,9 +16,12 @@
 #include <QCoreApplication>
 #include <QFile>
 #include <QFileInfo>
+#include <QJsonArray>
+#include <QSet>
 
 #include <algorithm>
 #include <limits>
+#include <tuple>
 
 namespace fourfold {
 
@@ -384,6 +387,41 @@ Result<CopyHandout> handoutRecord(const Database &mainDb, const Database &copyDb
     return h;
 }
 
+// The keys of the copy's live assignments that the project withdrew after the copy's base (no
+// row any more, a tombstone, or a row made anew by another draw, with another uuid) and that the
+// coder worked on in the copy: the assignment changed (its status, or its coding time), or a span
+// or answer on its article and phase new or changed.
+QSet<QString> workOnWithdrawn(const std::vector<store::PortableRow> &rows,
+    const QHash<QString, store::PortableRow> &mainRows,
+    const QHash<QString, store::BaseEntry> &base)
+{
+    const auto changed = [&](const store::PortableRow &row) {
+        const auto b = base.constFind(row.key());
+        return b == base.cend() || b->digest != row.digest()
+            || (row.type == QLatin1String("assignment") && row.seconds > b->seconds);
+    };
+    const auto placeOf = [](const store::PortableRow &row) {
+        return QStringLiteral("assignment/")
+            + row.content.value(QLatin1String("article")).toString() + QLatin1Char('/')
+            + row.content.value(QLatin1String("phase")).toString();
+    };
+    QSet<QString> candidates;
+    for (const store::PortableRow &row : rows) {
+        if (row.type != QLatin1String("assignment") || row.isDeleted() || !base.contains(row.key()))
+            continue;
+        const auto mine = mainRows.constFind(row.key());
+        if (mine == mainRows.cend() || mine->isDeleted() || mine->uuid != row.uuid)
+            candidates.insert(row.key());
+    }
+    QSet<QString> worked;
+    for (const store::PortableRow &row : rows)
+        if ((row.type == QLatin1String("assignment") || row.type == QLatin1String("annotation")
+                || row.type == QLatin1String("judgement"))
+            && candidates.contains(placeOf(row)) && changed(row))
+            worked.insert(placeOf(row));
+    return worked;
+}
+
 Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QString &path)
 {
     if (!QFileInfo::exists(path))
@@ -438,6 +476,8 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
     if (!recordedBase)
         return std::unexpected(recordedBase.error());
 
+    const QSet<QString> withdrawn = workOnWithdrawn(*rows, mainRows, handout->base);
+
     auto sp = Savepoint::begin(mainDb);
     if (!sp)
         return std::unexpected(sp.error());
@@ -450,7 +490,31 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
         const auto mine = mainRows.constFind(key);
         const bool inProject = mine != mainRows.cend();
 
-        if (!hasBase || base->digest != theirs) {
+        if (withdrawn.contains(key)) {
+            // The coder worked on an assignment the project withdrew meanwhile (see the header):
+            // the project's row stands and the copy's version waits for the lead as a conflict.
+            store::PortableRow object = row;
+            if (inProject)
+                object.uuid = mine->uuid;
+            auto open = store::openConflictsOf(mainDb, row.type, object.uuid);
+            if (!open)
+                return std::unexpected(open.error());
+            std::vector<Version> versions;
+            for (const MergeConflict &c : *open)
+                addVersion(versions,
+                    Version {store::PortableRow {row.type, object.uuid, c.theirs, 0}, c.copyUuid});
+            std::erase_if(versions, [&](const Version &v) {
+                return v.row.digest() == base->digest
+                    || (inProject && v.row.digest() == mine->digest());
+            });
+            object.content = row.content;
+            addVersion(versions, Version {object, info.copyUuid});
+            FOURFOLD_TRY_STATUS(reconcileConflicts(mainDb, object, versions,
+                inProject ? mine->content : QJsonObject {}, report.conflicts, writes));
+            report.withdrawn.push_back(WithdrawnWork {
+                externalIds.value(row.content.value(QLatin1String("article")).toString()),
+                row.content.value(QLatin1String("phase")).toString()});
+        } else if (!hasBase || base->digest != theirs) {
             // Changed (or made) in the copy. The competing versions: the project's, the losers
             // of earlier conflicts, and the copy's, which supersedes the version it was made
             // from. The latest wins; the others stay open for the lead.
@@ -533,6 +597,9 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
             ++writes;
         }
     }
+    std::ranges::sort(report.withdrawn, [](const WithdrawnWork &a, const WithdrawnWork &b) {
+        return std::tie(a.phase, a.article) < std::tie(b.phase, b.article);
+    });
     // The coder's own log of the copy joins the project's, once.
     if (writes == 0 && events->empty()) {
         report.alreadyMerged = true;
@@ -540,12 +607,20 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
     }
     for (const store::CopyEvent &e : *events)
         FOURFOLD_TRY_STATUS(store::appendCopyEvent(mainDb, e, coder.id, info.copyUuid));
-    const QJsonObject detail {{QStringLiteral("file"), QFileInfo(path).fileName()},
+    QJsonObject detail {{QStringLiteral("file"), QFileInfo(path).fileName()},
         {QStringLiteral("coder"), coder.pseudonym}, {QStringLiteral("added"), report.added},
         {QStringLiteral("changed"), report.changed}, {QStringLiteral("deleted"), report.deleted},
         {QStringLiteral("conflicts"), report.conflicts},
         {QStringLiteral("seconds"), report.seconds}};
     QJsonObject record = detail;
+    if (!report.withdrawn.empty()) {
+        QJsonArray articles;
+        for (const WithdrawnWork &w : report.withdrawn)
+            articles.append(QJsonObject {
+                {QStringLiteral("article"), w.article}, {QStringLiteral("phase"), w.phase}});
+        detail.insert(QStringLiteral("withdrawn"), articles);
+        record.insert(QStringLiteral("withdrawn"), articles);
+    }
     record.insert(
         QStringLiteral("events_through"), events->empty() ? *lastEvent : events->back().id);
     FOURFOLD_TRY_STATUS(store::insertCopyMerge(mainDb, info.copyUuid, coder.id, record));
@@ -663,6 +738,32 @@ Result<std::vector<MergeReport>> CoderCopies::merge(Project &project, const QStr
     }
     FOURFOLD_TRY_STATUS(sp->commit());
     return reports;
+}
+
+QString CoderCopies::withdrawnNotice(const MergeReport &report)
+{
+    if (report.withdrawn.empty())
+        return {};
+    QStringList articles;
+    for (const WithdrawnWork &w : report.withdrawn)
+        articles << CoderCopiesText::tr("%1 (%2)").arg(w.article, w.phase);
+    return CoderCopiesText::tr(
+        "%1 coded %n article(s) in the copy after the assignment was withdrawn in the project "
+        "(a withdrawn draw): %2. The codings were merged; the assignments stay withdrawn and do "
+        "not count. Decide each in the merge conflicts: keep the withdrawal, or take %1's "
+        "version to assign the article again.",
+        nullptr, int(report.withdrawn.size()))
+        .arg(report.coderPseudonym, articles.join(QStringLiteral(", ")));
+}
+
+bool CoderCopies::isWithdrawnAssignment(const MergeConflict &conflict)
+{
+    if (conflict.objectType != QLatin1String("assignment")
+        || conflict.theirs.value(QLatin1String("deleted")).toInteger() != 0)
+        return false;
+    return conflict.mine.isEmpty() || conflict.mine.value(QLatin1String("deleted")).toInteger() != 0
+        || conflict.mine.value(QLatin1String("created_at"))
+        != conflict.theirs.value(QLatin1String("created_at"));
 }
 
 Result<std::vector<MergeConflict>> CoderCopies::conflicts(const Project &project, bool all)

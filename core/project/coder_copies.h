@@ -22,6 +22,18 @@
 // rule looks at the versions, not at which copy came first, so the order of the copies does not
 // change the outcome. Active coding time adds up. A merge is one transaction; merging the same copy
 // again writes nothing.
+//
+// An assignment the project withdrew while the copy was out (a draw withdrawn, or undone, and
+// perhaps drawn anew) is not brought back by the coder's work on it: the coder's spans, answers
+// and coding time arrive (a coder's codings are never lost), the assignment stays as the project
+// holds it (withdrawn, or as the new draw made it, so the work does not count in that draw by
+// itself), and the copy's version of the assignment becomes an open conflict on it, whatever its
+// modification, for the lead to decide: keep the withdrawal, or take the coder's version (the
+// article assigned to the coder again, the work counting once it is done). The merge report names
+// those articles. Refusing the withdrawal while a copy is out was the alternative; it was not
+// chosen because a copy has no end (its coder may merge it again and again, or never return it),
+// so the lead could be kept from withdrawing forever, and because the project could not tell
+// whether the coder had even opened the article.
 
 #include "core/model/coder.h"
 #include "core/model/error.h"
@@ -57,6 +69,12 @@ struct HandoutReport {
     qint64 judgements = 0;
 };
 
+// An article the coder worked on in a copy after its assignment was withdrawn in the project.
+struct WithdrawnWork {
+    QString article; // external id
+    QString phase; // phaseKey
+};
+
 struct MergeReport {
     QString path;
     QString copyUuid;
@@ -67,6 +85,9 @@ struct MergeReport {
     qint64 deleted = 0; // of those, how many were deletions (tombstones)
     qint64 conflicts = 0; // conflicts found (new or changed) in this merge
     qint64 seconds = 0; // active coding time added
+    // Articles coded in the copy whose assignment the project withdrew meanwhile (each also an
+    // open conflict on the assignment), by phase and external id.
+    std::vector<WithdrawnWork> withdrawn;
 };
 
 class CoderCopies
@@ -103,6 +124,14 @@ public:
     // NotFound if there is no such open conflict; InvalidArgument for another `keep` or an
     // object with several open conflicts.
     static Status resolve(Project &project, const QString &uuid, const QString &keep);
+
+    // The sentence that tells the lead about `report.withdrawn` (which coder, how many articles,
+    // which, and what to decide), or "" when the copy held no such work.
+    static QString withdrawnNotice(const MergeReport &report);
+    // Whether `conflict` is about an assignment withdrawn in the project while the coder worked
+    // on it in a copy: the project holds no live row of it, or one made anew (another creation
+    // time), while the copy's version is live.
+    static bool isWithdrawnAssignment(const MergeConflict &conflict);
 };
 
 } // namespace fourfold
