@@ -187,6 +187,11 @@ int runMerge(const QStringList &arguments)
                     .arg(describe(c.objectType, c.mine)));
             out(QCoreApplication::translate("cli", "    theirs (lost): %1")
                     .arg(describe(c.objectType, c.theirs)));
+            if (CoderCopies::isWithdrawnAssignment(c))
+                out(QCoreApplication::translate("cli",
+                    "    the assignment was withdrawn in the project while %1 coded the article "
+                    "in a copy: keep mine to leave it withdrawn, theirs to assign it again.")
+                        .arg(pseudonymOf(pseudonyms, c.theirs)));
         }
         return ExitOk;
     }
@@ -205,7 +210,14 @@ int runMerge(const QStringList &arguments)
                 {QStringLiteral("alreadyMerged"), r.alreadyMerged},
                 {QStringLiteral("added"), r.added}, {QStringLiteral("changed"), r.changed},
                 {QStringLiteral("deleted"), r.deleted}, {QStringLiteral("conflicts"), r.conflicts},
-                {QStringLiteral("seconds"), r.seconds}});
+                {QStringLiteral("seconds"), r.seconds},
+                {QStringLiteral("withdrawn"), [&] {
+                     QJsonArray withdrawn;
+                     for (const WithdrawnWork &w : r.withdrawn)
+                         withdrawn.append(QJsonObject {{QStringLiteral("article"), w.article},
+                             {QStringLiteral("phase"), w.phase}});
+                     return withdrawn;
+                 }()}});
         printJson(QJsonObject {{QStringLiteral("merged"), items},
             {QStringLiteral("openConflicts"), qint64(open->size())}});
         return ExitOk;
@@ -224,6 +236,8 @@ int runMerge(const QStringList &arguments)
                     .arg(r.deleted)
                     .arg(r.conflicts)
                     .arg(r.seconds));
+        if (const QString notice = CoderCopies::withdrawnNotice(r); !notice.isEmpty())
+            out(notice);
     }
     if (!open->empty())
         out(QCoreApplication::translate("cli",

@@ -1,5 +1,7 @@
 // `fourfold-cli handout` and `merge` as a script sees them: exit codes (0 ok, 1 failed, 2 usage),
 // one-line errors on stderr, JSON output; the project file checked before and after.
+#include "core/project/article_status_edit.h"
+#include "core/project/subsample_draw.h"
 #include "tests/project/copies_fixture.h"
 #include "tests/support/cli_run.h"
 
@@ -175,4 +177,64 @@ TEST_CASE("a coder copy handed out, edited, merged, merged again, tampered and i
     }
     r = cli({QStringLiteral("check"), main});
     CHECK(r.exitCode == 0);
+}
+
+TEST_CASE("merge names the articles a coder coded on a draw withdrawn while the copy was out")
+{
+    // A reliability draw of one article for C01 and C02, C01's copy handed out, the draw
+    // withdrawn, then C01 codes the article in the copy (core/project/coder_copies.h).
+    QTemporaryDir dir;
+    const QString main = dir.filePath(QStringLiteral("main.fourfold"));
+    const QString copy = dir.filePath(QStringLiteral("c01.fourfold"));
+    QString drawn;
+    {
+        auto p = Project::create(main);
+        REQUIRE(p);
+        REQUIRE(p->importFile(
+            writeFile(dir, QStringLiteral("a.jsonl"), kThreeArticles), ImportOptions {}));
+        REQUIRE(p->addCoder(
+            QStringLiteral("Noor Testperson"), QStringLiteral("C01"), CoderRole::Coder));
+        REQUIRE(
+            p->addCoder(QStringLiteral("Sam Testperson"), QStringLiteral("C02"), CoderRole::Coder));
+        DrawRequest request;
+        request.size = 1;
+        request.seed = 7;
+        request.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+        auto d = SubsampleDraw::plan(*p, request);
+        REQUIRE(d);
+        REQUIRE(SubsampleDraw::commit(*p, *d));
+        drawn = d->articles.front();
+        REQUIRE(CoderCopies::handout(*p, QStringLiteral("C01"), copy));
+        REQUIRE(SubsampleDraw::withdraw(*p, Phase::Reliability));
+    }
+    {
+        auto p = Project::open(copy);
+        REQUIRE(p);
+        auto me = p->coderByPseudonym(QStringLiteral("C01"));
+        REQUIRE(me);
+        auto a = p->articleByExternalId(drawn);
+        REQUIRE(a);
+        SetArticleStatusEdit done(**a, (*me)->id, QStringLiteral("done"));
+        REQUIRE(p->apply(done));
+    }
+
+    CliRun r = cli({QStringLiteral("merge"), main, copy});
+    INFO(r.err.toStdString());
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.out.contains(QStringLiteral("C01 coded 1 article")));
+    CHECK(r.out.contains(drawn + QStringLiteral(" (reliability)")));
+    CHECK(r.out.contains(QStringLiteral("assignments stay withdrawn")));
+
+    r = cli({QStringLiteral("merge"), main, QStringLiteral("--conflicts")});
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.out.contains(QStringLiteral("mine (kept):   assigned (deleted)")));
+    CHECK(r.out.contains(QStringLiteral("theirs (lost): done")));
+    CHECK(r.out.contains(QStringLiteral("withdrawn in the project while C01 coded the article")));
+
+    // The JSON report lists the article too; merging again names nothing.
+    r = cli({QStringLiteral("merge"), main, copy, QStringLiteral("--json")});
+    REQUIRE(r.exitCode == 0);
+    const QJsonObject again = cliJson(r).value(QStringLiteral("merged")).toArray().at(0).toObject();
+    CHECK(again.value(QStringLiteral("alreadyMerged")).toBool());
+    CHECK(again.value(QStringLiteral("withdrawn")).toArray().isEmpty());
 }
