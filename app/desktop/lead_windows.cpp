@@ -269,6 +269,8 @@ void LeadWindows::mergeCopies()
                                         .arg(r.changed)
                                         .arg(r.deleted)
                                         .arg(r.conflicts));
+        if (const QString notice = CoderCopies::withdrawnNotice(r); !notice.isEmpty())
+            lines << notice;
     }
     const QString summary = conflicts > 0
         ? tr("Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits "

@@ -4,9 +4,12 @@
 // expected values follow from the edits of the conflict fixture (tests/project).
 #include "app/desktop/coding_session.h"
 #include "app/desktop/conflicts/conflicts_window.h"
+#include "core/project/article_status_edit.h"
+#include "core/project/subsample_draw.h"
 #include "tests/project/conflict_fixture.h"
 
 #include <QPushButton>
+#include <QTableWidget>
 #include <QTextBrowser>
 #include <QUndoStack>
 
@@ -105,4 +108,74 @@ TEST_CASE("Keeping the project's version in the window leaves every coder's row 
     REQUIRE(w.keepProjectVersion()); // the next one is current now
     CHECK(w.conflicts().empty());
     CHECK(w.message().contains(QStringLiteral("Keep the project's version")));
+}
+
+TEST_CASE("An assignment withdrawn while its coder coded it in a copy says so in the window")
+{
+    // A reliability draw of one article for C01 and C02, C01's copy handed out, the draw
+    // withdrawn, the article marked done in the copy and the copy merged
+    // (core/project/coder_copies.h): one conflict on C01's withdrawn assignment.
+    QTemporaryDir dir;
+    const QString mainPath = dir.filePath(QStringLiteral("main.fourfold"));
+    const QString copy = dir.filePath(QStringLiteral("c01.fourfold"));
+    QString drawn;
+    {
+        auto p = Project::create(mainPath);
+        REQUIRE(p);
+        REQUIRE(p->importFile(
+            writeFile(dir, QStringLiteral("a.jsonl"), kThreeArticles), ImportOptions {}));
+        REQUIRE(p->addCoder(
+            QStringLiteral("Noor Testperson"), QStringLiteral("C01"), CoderRole::Coder));
+        REQUIRE(
+            p->addCoder(QStringLiteral("Sam Testperson"), QStringLiteral("C02"), CoderRole::Coder));
+        REQUIRE(addOlderLeadForTesting(*p, QStringLiteral("Mira Testlead"), QStringLiteral("L01")));
+        DrawRequest request;
+        request.size = 1;
+        request.seed = 7;
+        request.coders = {QStringLiteral("C01"), QStringLiteral("C02")};
+        auto d = SubsampleDraw::plan(*p, request);
+        REQUIRE(d);
+        REQUIRE(SubsampleDraw::commit(*p, *d));
+        drawn = d->articles.front();
+        REQUIRE(CoderCopies::handout(*p, QStringLiteral("C01"), copy));
+        REQUIRE(SubsampleDraw::withdraw(*p, Phase::Reliability));
+    }
+    {
+        auto p = Project::open(copy);
+        REQUIRE(p);
+        auto me = p->coderByPseudonym(QStringLiteral("C01"));
+        REQUIRE(me);
+        auto a = p->articleByExternalId(drawn);
+        REQUIRE(a);
+        SetArticleStatusEdit done(**a, (*me)->id, QStringLiteral("done"));
+        REQUIRE(p->apply(done));
+    }
+    auto p = Project::open(mainPath);
+    REQUIRE(p);
+    REQUIRE(CoderCopies::merge(*p, {copy}));
+    auto lead = p->coderByPseudonym(QStringLiteral("L01"));
+    REQUIRE(lead);
+    CodingSession session(std::move(*p), **lead);
+    ConflictsWindow w(&session);
+    REQUIRE(w.conflicts().size() == 1);
+    w.setCurrent(0);
+    auto *table = w.findChild<QTableWidget *>();
+    REQUIRE(table);
+    bool named = false;
+    for (int col = 0; col < table->columnCount(); ++col)
+        named = named
+            || table->item(0, col)->text()
+                == QStringLiteral("withdrawn assignment, coded in a copy");
+    CHECK(named);
+    CHECK(sideText(w, QStringLiteral("In the project now")).contains(QStringLiteral("Deleted")));
+    const QString theirs = sideText(w, QStringLiteral("The other version"));
+    CHECK(theirs.contains(QStringLiteral("Status: done")));
+    CHECK(theirs.contains(QStringLiteral("The project withdrew this assignment")));
+    CHECK(theirs.contains(QStringLiteral("assign the article to C01 again")));
+    if (const QByteArray shot = qgetenv("FOURFOLD_SHOT_DIR"); !shot.isEmpty())
+        w.grab().save(QString::fromLocal8Bit(shot) + QStringLiteral("/withdrawn_conflict.png"));
+
+    // Taking the coder's version assigns the article again.
+    REQUIRE(w.takeOtherVersion());
+    CHECK(w.conflicts().empty());
 }

@@ -134,6 +134,8 @@ void ConflictsWindow::reload()
                 what = tr("%1 span").arg(functionName(*f));
         if (c.objectType == QLatin1String("judgement"))
             what = tr("answer to %1").arg(shown.value(QLatin1String("item")).toString());
+        if (CoderCopies::isWithdrawnAssignment(c))
+            what = tr("withdrawn assignment, coded in a copy");
         const QString decision = c.resolution == QLatin1String("mine")
             ? tr("project's version kept")
             : c.resolution == QLatin1String("theirs") ? tr("other version taken")
@@ -236,7 +238,17 @@ void ConflictsWindow::showCurrent()
     }
     const MergeConflict &c = m_conflicts[size_t(row)];
     m_mine->setHtml(describe(c.mine, c.objectType));
-    m_theirs->setHtml(describe(c.theirs, c.objectType));
+    QString theirs = describe(c.theirs, c.objectType);
+    if (CoderCopies::isWithdrawnAssignment(c))
+        // The version alone does not say why it matters: the lead decides whether work done on a
+        // withdrawn draw counts (core/project/coder_copies.h).
+        theirs += tr("<p>The project withdrew this assignment (a withdrawn draw) while %1 coded "
+                     "the article in a copy; the codings are in the project, but they do not "
+                     "count while the assignment stays withdrawn. Keep the project's version to "
+                     "leave it withdrawn, or take this version to assign the article to %1 "
+                     "again.</p>")
+                      .arg(esc(coderOf(c)));
+    m_theirs->setHtml(theirs);
 }
 
 bool ConflictsWindow::keepProjectVersion()
