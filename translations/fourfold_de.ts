@@ -160,7 +160,7 @@
     <message>
         <location filename="../core/project/annotation_edits.cpp" line="145"/>
         <location filename="../core/project/annotation_edits.cpp" line="178"/>
-        <location filename="../core/project/annotation_edits.cpp" line="357"/>
+        <location filename="../core/project/annotation_edits.cpp" line="358"/>
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Eine Änderung, die nie ausgeführt wurde, kann nicht rückgängig gemacht werden.</translation>
     </message>
@@ -210,17 +210,17 @@
         <translation>Antwort „%1“</translation>
     </message>
     <message>
-        <location filename="../core/project/annotation_edits.cpp" line="301"/>
+        <location filename="../core/project/annotation_edits.cpp" line="302"/>
         <source>The answer could not be stored: its article or coder does not exist.</source>
         <translation>Die Antwort konnte nicht gespeichert werden: Ihr Artikel oder ihre codierende Person existiert nicht.</translation>
     </message>
     <message>
-        <location filename="../core/project/annotation_edits.cpp" line="330"/>
+        <location filename="../core/project/annotation_edits.cpp" line="331"/>
         <source>Withdraw answer &quot;%1&quot;</source>
         <translation>Antwort „%1“ zurückziehen</translation>
     </message>
     <message>
-        <location filename="../core/project/annotation_edits.cpp" line="344"/>
+        <location filename="../core/project/annotation_edits.cpp" line="345"/>
         <source>There is no answer to &quot;%1&quot; to withdraw.</source>
         <translation>Es gibt keine Antwort auf „%1“, die zurückgezogen werden könnte.</translation>
     </message>
@@ -1029,17 +1029,17 @@
 <context>
     <name>CodebookTable</name>
     <message>
-        <location filename="../core/store/codebook_table.cpp" line="57"/>
+        <location filename="../core/store/codebook_table.cpp" line="81"/>
         <source>codebook version %1</source>
         <translation>Codebuchversion %1</translation>
     </message>
     <message>
-        <location filename="../core/store/codebook_table.cpp" line="92"/>
+        <location filename="../core/store/codebook_table.cpp" line="116"/>
         <source>The project has no codebook.</source>
         <translation>Das Projekt hat kein Codebuch.</translation>
     </message>
     <message>
-        <location filename="../core/store/codebook_table.cpp" line="108"/>
+        <location filename="../core/store/codebook_table.cpp" line="132"/>
         <source>The project has no codebook version %1.</source>
         <translation>Das Projekt hat keine Codebuchversion %1.</translation>
     </message>
@@ -1258,112 +1258,120 @@
 <context>
     <name>CoderCopiesText</name>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="69"/>
+        <location filename="../core/project/coder_copies.cpp" line="72"/>
         <source>Several coders are called &quot;%1&quot;; name the coder by pseudonym.</source>
         <translation>Mehrere Codierende heißen „%1“; nennen Sie die codierende Person beim Pseudonym.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="73"/>
+        <location filename="../core/project/coder_copies.cpp" line="76"/>
         <source>There is no coder with the pseudonym or name &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keine codierende Person mit dem Pseudonym oder Namen „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="109"/>
+        <location filename="../core/project/coder_copies.cpp" line="112"/>
         <source>%1 (copy for %2)</source>
         <translation>%1 (Kopie für %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="166"/>
+        <location filename="../core/project/coder_copies.cpp" line="169"/>
         <source>%1 is not a Fourfold project file; it was not merged.</source>
         <translation>%1 ist keine Fourfold-Projektdatei; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="169"/>
+        <location filename="../core/project/coder_copies.cpp" line="172"/>
         <source>%1 was written by a newer Fourfold (schema version %2); it was not merged.</source>
         <translation>%1 wurde von einem neueren Fourfold geschrieben (Schemaversion %2); sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="178"/>
+        <location filename="../core/project/coder_copies.cpp" line="181"/>
         <source>%1 is a project file but not a coder copy; it was not merged.</source>
         <translation>%1 ist eine Projektdatei, aber keine Kopie für Codierende; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="183"/>
+        <location filename="../core/project/coder_copies.cpp" line="186"/>
         <source>%1 is a coder copy of another project (%2), not of this one (%3); it was not merged.</source>
         <translation>%1 ist eine Kopie für Codierende aus einem anderen Projekt (%2), nicht aus diesem (%3); sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="192"/>
+        <location filename="../core/project/coder_copies.cpp" line="195"/>
         <source>The coder of %1 is no longer in the project; it was not merged.</source>
         <translation>Die codierende Person von %1 ist nicht mehr im Projekt; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="204"/>
+        <location filename="../core/project/coder_copies.cpp" line="207"/>
         <source>%1 holds article &quot;%2&quot;, which is not in the project; it was not merged.</source>
         <translation>%1 enthält den Artikel „%2“, der nicht im Projekt ist; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="210"/>
+        <location filename="../core/project/coder_copies.cpp" line="213"/>
         <source>The text of article &quot;%1&quot; in %2 differs from the project&apos;s (SHA-256 %3 instead of %4): the copy was changed outside Fourfold; it was not merged.</source>
         <translation>Der Text des Artikels „%1“ in %2 weicht von dem des Projekts ab (SHA-256 %3 statt %4): die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="224"/>
+        <location filename="../core/project/coder_copies.cpp" line="227"/>
         <source>%1 holds a codebook version (%2) that is not in the project; it was not merged.</source>
         <translation>%1 enthält eine Codebuchversion (%2), die nicht im Projekt ist; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="233"/>
+        <location filename="../core/project/coder_copies.cpp" line="236"/>
         <source>%1 holds %2 annotations, answers or assignments of people other than its coder %3; it was not merged.</source>
         <translation>%1 enthält %2 Annotationen, Antworten oder Zuweisungen anderer Personen als ihrer codierenden Person %3; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="369"/>
+        <location filename="../core/project/coder_copies.cpp" line="372"/>
         <source>%1 names a copy (%2) that this project never handed out; it was not merged.</source>
         <translation>%1 nennt eine Kopie (%2), die dieses Projekt nie ausgegeben hat; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="391"/>
+        <location filename="../core/project/coder_copies.cpp" line="429"/>
         <source>There is no coder copy %1.</source>
         <translation>Es gibt keine Kopie für Codierende %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="517"/>
+        <location filename="../core/project/coder_copies.cpp" line="581"/>
         <source>The coding time in %1 would overflow the project&apos;s; it was not merged.</source>
         <translation>Die Codierzeit in %1 würde die des Projekts überlaufen lassen; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="573"/>
+        <location filename="../core/project/coder_copies.cpp" line="648"/>
         <source>%1 is itself a coder copy; hand out copies from the main project.</source>
         <translation>%1 ist selbst eine Kopie für Codierende; geben Sie Kopien aus dem Hauptprojekt aus.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="580"/>
+        <location filename="../core/project/coder_copies.cpp" line="655"/>
         <source>%1 already exists; choose another name for the coder copy.</source>
         <translation>%1 existiert bereits; wählen Sie einen anderen Namen für die Kopie.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="588"/>
+        <location filename="../core/project/coder_copies.cpp" line="663"/>
         <source>Coder %1 has no assigned articles; assign some before handing out a copy.</source>
         <translation>Der codierenden Person %1 sind keine Artikel zugewiesen; weisen Sie welche zu, bevor Sie eine Kopie ausgeben.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="649"/>
+        <location filename="../core/project/coder_copies.cpp" line="724"/>
         <source>%1 is itself a coder copy; merge copies into the main project.</source>
         <translation>%1 ist selbst eine Kopie für Codierende; führen Sie Kopien im Hauptprojekt zusammen.</translation>
     </message>
+    <message numerus="yes">
+        <location filename="../core/project/coder_copies.cpp" line="751"/>
+        <source>%1 coded %n article(s) in the copy after the assignment was withdrawn in the project (a withdrawn draw): %2. The codings were merged; the assignments stay withdrawn and do not count. Decide each in the merge conflicts: keep the withdrawal, or take %1&apos;s version to assign the article again.</source>
+        <translation>
+            <numerusform>%1 hat %n Artikel in der Kopie codiert, nachdem die Zuweisung im Projekt zurückgezogen wurde (eine zurückgezogene Ziehung): %2. Die Codierungen wurden zusammengeführt; die Zuweisung bleibt zurückgezogen und zählt nicht. Entscheiden Sie jeden Fall unter den Konflikten beim Zusammenführen: den Rückzug behalten oder die Version von %1 übernehmen, um den Artikel erneut zuzuweisen.</numerusform>
+            <numerusform>%1 hat %n Artikel in der Kopie codiert, nachdem ihre Zuweisungen im Projekt zurückgezogen wurden (eine zurückgezogene Ziehung): %2. Die Codierungen wurden zusammengeführt; die Zuweisungen bleiben zurückgezogen und zählen nicht. Entscheiden Sie jeden Fall unter den Konflikten beim Zusammenführen: den Rückzug behalten oder die Version von %1 übernehmen, um den Artikel erneut zuzuweisen.</numerusform>
+        </translation>
+    </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="677"/>
+        <location filename="../core/project/coder_copies.cpp" line="779"/>
         <source>Keep &quot;mine&quot; (the version the project holds) or &quot;theirs&quot; (the version that lost), not &quot;%1&quot;.</source>
         <translation>Behalten Sie „mine“ (die Version im Projekt) oder „theirs“ (die unterlegene Version), nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="694"/>
+        <location filename="../core/project/coder_copies.cpp" line="796"/>
         <source>There is no open conflict %1.</source>
         <translation>Es gibt keinen offenen Konflikt %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="697"/>
+        <location filename="../core/project/coder_copies.cpp" line="799"/>
         <source>%1 has %2 open conflicts (from several copies); name the conflict&apos;s uuid.</source>
         <translation>%1 hat %2 offene Konflikte (aus mehreren Kopien); nennen Sie die UUID des Konflikts.</translation>
     </message>
@@ -1396,78 +1404,78 @@
         <translation>Feld „%1“ muss eine nicht leere Zeichenkette sein.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="75"/>
+        <location filename="../core/project/coding_import.cpp" line="81"/>
         <source>Cannot read %1: %2</source>
         <translation>%1 kann nicht gelesen werden: %2</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="120"/>
+        <location filename="../core/project/coding_import.cpp" line="127"/>
         <source>the line is longer than %1 MiB</source>
         <translation>die Zeile ist länger als %1 MiB</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="139"/>
+        <location filename="../core/project/coding_import.cpp" line="146"/>
         <source>not a JSON object (%1).</source>
         <translation>kein JSON-Objekt (%1).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="142"/>
+        <location filename="../core/project/coding_import.cpp" line="149"/>
         <source>another JSON value</source>
         <translation>ein anderer JSON-Wert</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="147"/>
+        <location filename="../core/project/coding_import.cpp" line="154"/>
         <source>unknown field &quot;%1&quot; (expected article, coder, function, quote, occurrence, attributes, note, confidence, gold, rationale, item, value).</source>
         <translation>unbekanntes Feld „%1“ (erwartet: article, coder, function, quote, occurrence, attributes, note, confidence, gold, rationale, item, value).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="157"/>
+        <location filename="../core/project/coding_import.cpp" line="164"/>
         <source>field &quot;%1&quot; must be %2.</source>
         <translation>Feld „%1“ muss %2 sein.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="162"/>
+        <location filename="../core/project/coding_import.cpp" line="169"/>
         <source>an object</source>
         <translation>ein Objekt</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="163"/>
-        <location filename="../core/project/coding_import.cpp" line="167"/>
+        <location filename="../core/project/coding_import.cpp" line="170"/>
+        <location filename="../core/project/coding_import.cpp" line="174"/>
         <source>text</source>
         <translation>Text</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="165"/>
+        <location filename="../core/project/coding_import.cpp" line="172"/>
         <source>a number from 0 to 1</source>
         <translation>eine Zahl von 0 bis 1</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="176"/>
+        <location filename="../core/project/coding_import.cpp" line="184"/>
         <source>unknown coder &quot;%1&quot;.</source>
         <translation>unbekannte codierende Person „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="184"/>
+        <location filename="../core/project/coding_import.cpp" line="192"/>
         <source>unknown article &quot;%1&quot;.</source>
         <translation>unbekannter Artikel „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="244"/>
+        <location filename="../core/project/coding_import.cpp" line="252"/>
         <source>unknown function &quot;%1&quot; (expected problem, cause, evaluation or remedy).</source>
         <translation>unbekannte Funktion „%1“ (erwartet: problem, cause, evaluation oder remedy).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="255"/>
+        <location filename="../core/project/coding_import.cpp" line="263"/>
         <source>field &quot;occurrence&quot; must be a whole number from 1.</source>
         <translation>Feld „occurrence“ muss eine ganze Zahl ab 1 sein.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="262"/>
+        <location filename="../core/project/coding_import.cpp" line="270"/>
         <source>the quote &quot;%1&quot; does not occur %2 time(s) in article &quot;%3&quot;.</source>
         <translation>das Zitat „%1“ kommt im Artikel „%3“ nicht %2-mal vor.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="278"/>
+        <location filename="../core/project/coding_import.cpp" line="286"/>
         <source>field &quot;gold&quot; must be true or false.</source>
         <translation>Feld „gold“ muss true oder false sein.</translation>
     </message>
@@ -2990,7 +2998,7 @@
     </message>
     <message numerus="yes">
         <location filename="../core/agreement/project_units.cpp" line="92"/>
-        <location filename="../core/agreement/project_units.cpp" line="422"/>
+        <location filename="../core/agreement/project_units.cpp" line="433"/>
         <source>Reliability needs at least two coders; the selection has %n.</source>
         <translation>
             <numerusform>Reliabilität braucht mindestens zwei Codierende; die Auswahl hat %n.</numerusform>
@@ -3018,17 +3026,17 @@
         <translation>Textstellen-Einheiten vergleichen ein Merkmal: nennen Sie eine Funktion und eines ihrer Merkmale.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="399"/>
+        <location filename="../core/agreement/project_units.cpp" line="410"/>
         <source>None of the selected coders has marked any of the selected articles done.</source>
         <translation>Keine der gewählten codierenden Personen hat einen der gewählten Artikel als erledigt markiert.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="475"/>
+        <location filename="../core/agreement/project_units.cpp" line="486"/>
         <source>No article was marked done by all of the selected coders, so there is no common continuum.</source>
         <translation>Kein Artikel wurde von allen gewählten Codierenden als erledigt markiert, es gibt also kein gemeinsames Kontinuum.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="494"/>
+        <location filename="../core/agreement/project_units.cpp" line="505"/>
         <source>the codebook has no attribute &quot;%1&quot; for %2.</source>
         <translation>das Codebuch hat kein Merkmal „%1“ für %2.</translation>
     </message>
@@ -3136,52 +3144,52 @@
 <context>
     <name>ReportDataText</name>
     <message>
-        <location filename="../app/report/report_data.cpp" line="68"/>
+        <location filename="../app/report/report_data.cpp" line="66"/>
         <source>a sample stratified by %1</source>
         <translation>eine nach %1 geschichtete Stichprobe</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="69"/>
+        <location filename="../app/report/report_data.cpp" line="67"/>
         <source>a simple random sample</source>
         <translation>eine einfache Zufallsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="70"/>
+        <location filename="../app/report/report_data.cpp" line="68"/>
         <source>The %1 articles of the %2 phase were drawn as %3 (seed %4) from a frame of %5 articles with no earlier assignment, on %6.</source>
         <translation>Die %1 Artikel der Phase %2 wurden als %3 (Seed %4) aus einer Auswahlgesamtheit von %5 Artikeln ohne frühere Zuweisung gezogen, am %6.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="189"/>
+        <location filename="../app/report/report_data.cpp" line="201"/>
         <source>The report&apos;s unit must be paragraph, sentence or token.</source>
         <translation>Die Einheit des Berichts muss paragraph, sentence oder token sein.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="194"/>
+        <location filename="../app/report/report_data.cpp" line="206"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="195"/>
+        <location filename="../app/report/report_data.cpp" line="207"/>
         <source>Reliability report: %1</source>
         <translation>Reliabilitätsbericht: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="242"/>
+        <location filename="../app/report/report_data.cpp" line="249"/>
         <source>All four functions (MASI)</source>
         <translation>Alle vier Funktionen (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="242"/>
+        <location filename="../app/report/report_data.cpp" line="249"/>
         <source>All four (MASI)</source>
         <translation>Alle vier (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="285"/>
+        <location filename="../app/report/report_data.cpp" line="297"/>
         <source>Spans on the continuum</source>
         <translation>Textstellen auf dem Kontinuum</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="286"/>
+        <location filename="../app/report/report_data.cpp" line="298"/>
         <source>continuum</source>
         <translation>Kontinuum</translation>
     </message>
@@ -3189,85 +3197,85 @@
 <context>
     <name>ReportDocumentText</name>
     <message>
-        <location filename="../app/report/report_document.cpp" line="149"/>
-        <location filename="../app/report/report_document.cpp" line="151"/>
+        <location filename="../app/report/report_document.cpp" line="139"/>
         <location filename="../app/report/report_frames_section.cpp" line="77"/>
-        <location filename="../app/report/report_markup.cpp" line="80"/>
+        <location filename="../app/report/report_markup.cpp" line="51"/>
+        <location filename="../app/report/report_markup.cpp" line="90"/>
         <source>undefined</source>
         <translation>nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="82"/>
+        <location filename="../app/report/report_markup.cpp" line="92"/>
         <source>reliable</source>
         <translation>reliabel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="84"/>
+        <location filename="../app/report/report_markup.cpp" line="94"/>
         <source>tentative</source>
         <translation>vorläufig</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="88"/>
+        <location filename="../app/report/report_markup.cpp" line="98"/>
         <source>unreliable</source>
         <translation>nicht reliabel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="125"/>
+        <location filename="../app/report/report_markup.cpp" line="135"/>
         <source>paragraph</source>
         <translation>Absatz</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="125"/>
+        <location filename="../app/report/report_markup.cpp" line="135"/>
         <source>paragraphs</source>
         <translation>Absätze</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="127"/>
+        <location filename="../app/report/report_markup.cpp" line="137"/>
         <source>token</source>
         <translation>Token</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="127"/>
+        <location filename="../app/report/report_markup.cpp" line="137"/>
         <source>tokens</source>
         <translation>Tokens</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="129"/>
+        <location filename="../app/report/report_markup.cpp" line="139"/>
         <source>sentence</source>
         <translation>Satz</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="129"/>
+        <location filename="../app/report/report_markup.cpp" line="139"/>
         <source>sentences</source>
         <translation>Sätze</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="41"/>
+        <location filename="../app/report/report_document.cpp" line="40"/>
         <source>unit: %1</source>
         <translation>Einheit: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="42"/>
+        <location filename="../app/report/report_document.cpp" line="41"/>
         <source>phase: %1</source>
         <translation>Phase: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="44"/>
+        <location filename="../app/report/report_document.cpp" line="43"/>
         <source>all phases</source>
         <translation>alle Phasen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="45"/>
+        <location filename="../app/report/report_document.cpp" line="44"/>
         <source>bootstrap: %1 replicates, seed %2</source>
         <translation>Bootstrap: %1 Replikationen, Seed %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="49"/>
+        <location filename="../app/report/report_document.cpp" line="48"/>
         <source>Inter-coder reliability</source>
         <translation>Intercoder-Reliabilität</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="52"/>
+        <location filename="../app/report/report_document.cpp" line="51"/>
         <source>Project “%1” · written %2 by %3 · %4</source>
         <translation>Projekt „%1“ · geschrieben %2 von %3 · %4</translation>
     </message>
@@ -3337,437 +3345,437 @@
         <translation>beschreiben Sie die Schulung und ihren ungefähren Umfang in Stunden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="83"/>
+        <location filename="../app/report/report_method_text.cpp" line="86"/>
         <source>%1 α = %2</source>
         <translation>%1 α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="87"/>
+        <location filename="../app/report/report_method_text.cpp" line="91"/>
         <source> (95% CI %1)</source>
         <translation> (95%-KI %1)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="92"/>
+        <location filename="../app/report/report_method_text.cpp" line="96"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
         <translation>Jede der vier Framing-Funktionen nach Entman (1993) wurde als Textstelle codiert; für die Reliabilität wurde jede Funktion zu einer binären Variablen (vorhanden oder nicht vorhanden) je %1: eine Einheit (%2) trägt eine Funktion, wenn die Textstelle einer codierenden Person mit dieser Funktion sie überlappt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="97"/>
+        <location filename="../app/report/report_method_text.cpp" line="101"/>
         <source>We report Krippendorff&apos;s alpha (Krippendorff, 2004) because it handles any number of coders, missing data and any level of measurement (Hayes &amp; Krippendorff, 2007). </source>
         <translation>Wir berichten Krippendorffs Alpha (Krippendorff, 2004), weil es beliebig viele Codierende, fehlende Daten und jedes Skalenniveau zulässt (Hayes &amp; Krippendorff, 2007). </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="101"/>
+        <location filename="../app/report/report_method_text.cpp" line="105"/>
         <source>Alpha was %1</source>
         <translation>Alpha betrug %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="103"/>
+        <location filename="../app/report/report_method_text.cpp" line="107"/>
         <source>; for the set of functions per %1, compared with the MASI distance (Passonneau, 2006), α = %2</source>
         <translation>; für die Menge der Funktionen je %1, verglichen mit der MASI-Distanz (Passonneau, 2006), α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="110"/>
+        <location filename="../app/report/report_method_text.cpp" line="115"/>
         <source>Intervals are 95% percentile bootstrap intervals from %1 resamples of the units; the table also gives the interval from resampled pairable values (Hayes &amp; Krippendorff, 2007), which is narrower than its nominal level when more than two coders are compared. </source>
         <translation>Die Intervalle sind 95%-Perzentil-Bootstrap-Intervalle aus %1 Neuziehungen der Einheiten; die Tabelle nennt auch das Intervall aus neu gezogenen paarbaren Werten (Hayes &amp; Krippendorff, 2007), das enger als sein nominales Niveau ist, wenn mehr als zwei Codierende verglichen werden. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="117"/>
+        <location filename="../app/report/report_method_text.cpp" line="122"/>
         <source>Following Krippendorff (2004), variables with α&#xa0;≥&#xa0;0.800 are relied on and variables with 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 support tentative conclusions only. </source>
         <translation>Nach Krippendorff (2004) wird Variablen mit α&#xa0;≥&#xa0;0.800 vertraut, und Variablen mit 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 tragen nur vorläufige Schlüsse. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="128"/>
+        <location filename="../app/report/report_method_text.cpp" line="133"/>
         <source>%1 (%2) α = %3</source>
         <translation>%1 (%2) α = %3</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="136"/>
+        <location filename="../app/report/report_method_text.cpp" line="139"/>
         <source>For the other variables alpha was: %1.</source>
         <translation>Für die übrigen Variablen betrug Alpha: %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="141"/>
+        <location filename="../app/report/report_method_text.cpp" line="144"/>
         <source>Disagreements were resolved by adjudication into a separate gold standard: %1 spans on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Abweichungen wurden durch Entscheidung in einen getrennten Goldstandard aufgelöst: %1 Textstellen in %2 Artikeln, entschieden von %3, %4 davon mit schriftlicher Begründung. Die unabhängigen Codierungen blieben unverändert; alle obigen Werte stammen aus ihnen. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="176"/>
+        <location filename="../app/report/report_method_text.cpp" line="180"/>
         <source>No adjudication is recorded in the project yet: %1. </source>
         <translation>Im Projekt ist noch keine Entscheidung verzeichnet: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="177"/>
+        <location filename="../app/report/report_method_text.cpp" line="181"/>
         <source>say how disagreements were resolved, e.g. by discussion or by the lead</source>
         <translation>geben Sie an, wie Abweichungen aufgelöst wurden, z. B. durch Diskussion oder durch die Leitung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="181"/>
+        <location filename="../app/report/report_method_text.cpp" line="185"/>
         <source>Coding followed version %1 of the codebook (“%2”)</source>
         <translation>Die Codierung folgte Version %1 des Codebuchs („%2“)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="186"/>
+        <location filename="../app/report/report_method_text.cpp" line="190"/>
         <source>; %1 of %2 codings were made under an earlier version</source>
         <translation>; %1 von %2 Codierungen entstanden unter einer früheren Version</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="191"/>
+        <location filename="../app/report/report_method_text.cpp" line="196"/>
         <source>, which is available at %1.</source>
         <translation>, das unter %1 verfügbar ist.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="192"/>
+        <location filename="../app/report/report_method_text.cpp" line="197"/>
         <source>where readers can obtain it</source>
         <translation>wo Lesende es erhalten können</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="196"/>
+        <location filename="../app/report/report_method_text.cpp" line="201"/>
         <source>Highlighted brackets are for the authors to complete: the project does not record these facts.</source>
         <translation>Hervorgehobene Klammern ergänzen die Autorinnen und Autoren: das Projekt verzeichnet diese Angaben nicht.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="214"/>
+        <location filename="../app/report/report_method_text.cpp" line="219"/>
         <source>Size of the reliability sample and how it was selected</source>
         <translation>Umfang der Reliabilitätsstichprobe und wie sie ausgewählt wurde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="216"/>
+        <location filename="../app/report/report_method_text.cpp" line="221"/>
         <source>Relationship of the reliability sample to the full sample</source>
         <translation>Verhältnis der Reliabilitätsstichprobe zur Gesamtstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="218"/>
+        <location filename="../app/report/report_method_text.cpp" line="223"/>
         <source>Number of reliability coders</source>
         <translation>Anzahl der Codierenden in der Reliabilitätsprüfung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="219"/>
+        <location filename="../app/report/report_method_text.cpp" line="224"/>
         <source>Amount of coding conducted by each coder</source>
         <translation>Umfang der Codierung je codierender Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="220"/>
+        <location filename="../app/report/report_method_text.cpp" line="225"/>
         <source>Index or indices selected and why</source>
         <translation>Gewählte Koeffizienten und Begründung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="221"/>
+        <location filename="../app/report/report_method_text.cpp" line="226"/>
         <source>Reliability for each variable, for each index</source>
         <translation>Reliabilität jeder Variablen, für jeden Koeffizienten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="222"/>
+        <location filename="../app/report/report_method_text.cpp" line="227"/>
         <source>Amount of coder training required to reach reliability</source>
         <translation>Umfang der Codiererschulung bis zum Erreichen der Reliabilität</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="224"/>
+        <location filename="../app/report/report_method_text.cpp" line="229"/>
         <source>How disagreements were resolved</source>
         <translation>Wie Abweichungen aufgelöst wurden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="226"/>
+        <location filename="../app/report/report_method_text.cpp" line="231"/>
         <source>Where the codebook and coding instructions can be obtained</source>
         <translation>Wo Codebuch und Codieranweisungen erhältlich sind</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="231"/>
+        <location filename="../app/report/report_method_text.cpp" line="236"/>
         <source>#</source>
         <translation>#</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="232"/>
+        <location filename="../app/report/report_method_text.cpp" line="237"/>
         <source>Item</source>
         <translation>Punkt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="233"/>
+        <location filename="../app/report/report_method_text.cpp" line="238"/>
         <source>In this report</source>
         <translation>In diesem Bericht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="242"/>
+        <location filename="../app/report/report_method_text.cpp" line="247"/>
         <source>filled in from the project</source>
         <translation>aus dem Projekt ausgefüllt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="243"/>
+        <location filename="../app/report/report_method_text.cpp" line="248"/>
         <source>partly filled in; complete the bracket</source>
         <translation>teilweise ausgefüllt; ergänzen Sie die Klammer</translation>
     </message>
     <message>
+        <location filename="../app/report/report_sections.cpp" line="21"/>
         <location filename="../app/report/report_sections.cpp" line="23"/>
-        <location filename="../app/report/report_sections.cpp" line="25"/>
-        <location filename="../app/report/report_sections.cpp" line="108"/>
-        <location filename="../app/report/report_sections.cpp" line="193"/>
-        <location filename="../app/report/report_sections.cpp" line="233"/>
-        <location filename="../app/report/report_sections.cpp" line="370"/>
+        <location filename="../app/report/report_sections.cpp" line="109"/>
+        <location filename="../app/report/report_sections.cpp" line="198"/>
+        <location filename="../app/report/report_sections.cpp" line="242"/>
+        <location filename="../app/report/report_sections.cpp" line="399"/>
         <source>Variable</source>
         <translation>Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="26"/>
+        <location filename="../app/report/report_sections.cpp" line="24"/>
         <source>Level</source>
         <translation>Niveau</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="27"/>
-        <location filename="../app/report/report_sections.cpp" line="195"/>
+        <location filename="../app/report/report_sections.cpp" line="25"/>
+        <location filename="../app/report/report_sections.cpp" line="200"/>
         <source>Units</source>
         <translation>Einh.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="28"/>
-        <location filename="../app/report/report_sections.cpp" line="109"/>
+        <location filename="../app/report/report_sections.cpp" line="26"/>
+        <location filename="../app/report/report_sections.cpp" line="110"/>
         <source>Pairable values</source>
         <translation>Paarb. Werte</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="29"/>
+        <location filename="../app/report/report_sections.cpp" line="27"/>
         <source>95% CI, units</source>
         <translation>95%-KI, Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="30"/>
+        <location filename="../app/report/report_sections.cpp" line="28"/>
         <source>95% CI, pairs</source>
         <translation>95%-KI, Paare</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="31"/>
-        <location filename="../app/report/report_sections.cpp" line="196"/>
+        <location filename="../app/report/report_sections.cpp" line="29"/>
+        <location filename="../app/report/report_sections.cpp" line="201"/>
         <source>Agreement</source>
         <translation>Übereinst.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="32"/>
-        <location filename="../app/report/report_sections.cpp" line="289"/>
+        <location filename="../app/report/report_sections.cpp" line="30"/>
+        <location filename="../app/report/report_sections.cpp" line="306"/>
         <source>Verdict</source>
         <translation>Urteil</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="47"/>
+        <location filename="../app/report/report_sections.cpp" line="45"/>
         <source>not computed: %1</source>
         <translation>nicht berechnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="77"/>
+        <location filename="../app/report/report_sections.cpp" line="78"/>
         <source>Units: %1 (articles for article-level items; passages matched across coders for span attributes). Agreement: percent agreement, which is not chance-corrected and is never reported alone (Lombard et al., 2002). Units: units resampled, percentile interval (the interval to report); pairs: pairable values resampled with the expected disagreement held fixed (Hayes &amp; Krippendorff, 2007), too narrow with more than two coders.</source>
         <translation>Einheiten: %1 (Artikel für Items auf Artikelebene; zwischen Codierenden zugeordnete Passagen für Merkmale von Textstellen). Übereinstimmung: prozentuale Übereinstimmung, die nicht zufallskorrigiert ist und nie allein berichtet wird (Lombard et al., 2002). Einheiten: Einheiten neu gezogen, Perzentilintervall (das zu berichtende Intervall); Paare: paarbare Werte neu gezogen bei festgehaltener erwarteter Nichtübereinstimmung (Hayes &amp; Krippendorff, 2007), bei mehr als zwei Codierenden zu eng.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="94"/>
+        <location filename="../app/report/report_sections.cpp" line="95"/>
         <source>Krippendorff&apos;s alpha per variable</source>
         <translation>Krippendorffs Alpha je Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="95"/>
+        <location filename="../app/report/report_sections.cpp" line="96"/>
         <source>Krippendorff&apos;s alpha per variable (dots) with 95% bootstrap intervals: whiskers resample pairable values (Hayes &amp; Krippendorff, 2007), bands resample units. The lines mark 0.667 and 0.800 (Krippendorff, 2004).</source>
         <translation>Krippendorffs Alpha je Variable (Punkte) mit 95%-Bootstrap-Intervallen: Whisker ziehen paarbare Werte neu (Hayes &amp; Krippendorff, 2007), Bänder ziehen Einheiten neu. Die Linien markieren 0.667 und 0.800 (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="110"/>
+        <location filename="../app/report/report_sections.cpp" line="111"/>
         <source>Rarest value</source>
         <translation>Seltenster Wert</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="111"/>
+        <location filename="../app/report/report_sections.cpp" line="112"/>
         <source>Minimum for α ≥ 0.800</source>
         <translation>Minimum für α ≥ 0.800</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="112"/>
+        <location filename="../app/report/report_sections.cpp" line="113"/>
         <source>Enough?</source>
         <translation>Ausreichend?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="128"/>
+        <location filename="../app/report/report_sections.cpp" line="130"/>
         <source>yes</source>
         <translation>ja</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="129"/>
+        <location filename="../app/report/report_sections.cpp" line="131"/>
         <source>too few values</source>
         <translation>zu wenige Werte</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="132"/>
+        <location filename="../app/report/report_sections.cpp" line="134"/>
         <source>Krippendorff&apos;s (2004, §11.4) minimum number of pairable values for α ≥ 0.800 at p = 0.05, after Bloch &amp; Kraemer (1989), given the share of the rarest value.</source>
         <translation>Krippendorffs (2004, §11.4) Mindestzahl paarbarer Werte für α ≥ 0.800 bei p = 0.05 nach Bloch &amp; Kraemer (1989), gegeben den Anteil des seltensten Werts.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="145"/>
+        <location filename="../app/report/report_sections.cpp" line="147"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="146"/>
+        <location filename="../app/report/report_sections.cpp" line="148"/>
         <source>Role</source>
         <translation>Rolle</translation>
     </message>
     <message>
         <location filename="../app/report/report_frames_section.cpp" line="39"/>
-        <location filename="../app/report/report_sections.cpp" line="147"/>
+        <location filename="../app/report/report_sections.cpp" line="149"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="148"/>
+        <location filename="../app/report/report_sections.cpp" line="150"/>
         <source>Shared articles</source>
         <translation>Gemeinsame Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="149"/>
+        <location filename="../app/report/report_sections.cpp" line="151"/>
         <source>Spans</source>
         <translation>Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="155"/>
+        <location filename="../app/report/report_sections.cpp" line="157"/>
         <source>Answers</source>
         <translation>Antworten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="171"/>
+        <location filename="../app/report/report_sections.cpp" line="176"/>
         <source>Coders appear by pseudonym only. Articles: coded by the coder (assigned, or with a span or an answer); shared: also coded by another coder in this report.</source>
         <translation>Codierende erscheinen nur unter Pseudonym. Artikel: von der Person codiert (zugewiesen oder mit einer Textstelle oder Antwort); gemeinsam: in diesem Bericht auch von einer anderen Person codiert.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="183"/>
+        <location filename="../app/report/report_sections.cpp" line="188"/>
         <source>Cohen&apos;s kappa per coder pair</source>
         <translation>Cohens Kappa je Codierpaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="184"/>
+        <location filename="../app/report/report_sections.cpp" line="189"/>
         <source>Cohen&apos;s kappa (Cohen, 1960) for each pair of coders and each function, on the %1 both coded. Darker is higher; hatched cells are undefined.</source>
         <translation>Cohens Kappa (Cohen, 1960) für jedes Paar von Codierenden und jede Funktion, auf den %1, die beide codierten. Dunkler ist höher; schraffierte Zellen sind nicht definiert.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="194"/>
+        <location filename="../app/report/report_sections.cpp" line="199"/>
         <source>Pair</source>
         <translation>Paar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="197"/>
+        <location filename="../app/report/report_sections.cpp" line="202"/>
         <source>95% CI</source>
         <translation>95%-KI</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="219"/>
+        <location filename="../app/report/report_sections.cpp" line="228"/>
         <source>95% CI: large-sample interval with the standard error of Fleiss, Cohen &amp; Everitt (1969). A coder whose kappa is low with everyone else is worth a look before the coders are retrained.</source>
         <translation>95%-KI: Intervall für große Stichproben mit dem Standardfehler nach Fleiss, Cohen &amp; Everitt (1969). Eine codierende Person, deren Kappa mit allen anderen niedrig ist, verdient einen Blick, bevor die Codierenden nachgeschult werden.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="234"/>
+        <location filename="../app/report/report_sections.cpp" line="243"/>
         <source>Fleiss&apos; κ</source>
         <translation>Fleiss&apos; κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="235"/>
+        <location filename="../app/report/report_sections.cpp" line="244"/>
         <source>Light&apos;s κ</source>
         <translation>Lights κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="236"/>
+        <location filename="../app/report/report_sections.cpp" line="245"/>
         <source>Cohen&apos;s κ</source>
         <translation>Cohens κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="237"/>
+        <location filename="../app/report/report_sections.cpp" line="246"/>
         <source>Scott&apos;s π</source>
         <translation>Scotts π</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="238"/>
+        <location filename="../app/report/report_sections.cpp" line="247"/>
         <source>Bennett&apos;s S</source>
         <translation>Bennetts S</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="243"/>
+        <location filename="../app/report/report_sections.cpp" line="253"/>
         <source>n/a</source>
         <translation>n. v.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="257"/>
+        <location filename="../app/report/report_sections.cpp" line="274"/>
         <source>For comparison with older studies: Fleiss (1971) and Light (1971) for any number of coders, Cohen (1960), Scott (1955) and Bennett, Alpert &amp; Goldstein (1954) for two; n/a where their assumptions (complete data, two coders) do not hold.</source>
         <translation>Zum Vergleich mit älteren Studien: Fleiss (1971) und Light (1971) für beliebig viele Codierende, Cohen (1960), Scott (1955) und Bennett, Alpert &amp; Goldstein (1954) für zwei; n. v., wo ihre Voraussetzungen (vollständige Daten, zwei Codierende) nicht erfüllt sind.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="273"/>
+        <location filename="../app/report/report_sections.cpp" line="290"/>
         <source>Not computed: %1</source>
         <translation>Nicht berechnet: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="276"/>
+        <location filename="../app/report/report_sections.cpp" line="293"/>
         <source>Unitizing alpha (Krippendorff, 2004) compares where the coders put their spans, character by character, on the %1 articles that every coder coded (%2 characters laid end to end).</source>
         <translation>Unitizing-Alpha (Krippendorff, 2004) vergleicht Zeichen für Zeichen, wo die Codierenden ihre Textstellen setzen, auf den %1 Artikeln, die alle Codierenden codierten (%2 Zeichen aneinandergereiht).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="286"/>
+        <location filename="../app/report/report_sections.cpp" line="303"/>
         <source>Function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="287"/>
+        <location filename="../app/report/report_sections.cpp" line="304"/>
         <source>Observed disagreement</source>
         <translation>Beobachtete Nichtübereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="288"/>
+        <location filename="../app/report/report_sections.cpp" line="305"/>
         <source>Expected disagreement</source>
         <translation>Erwartete Nichtübereinstimmung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="306"/>
+        <location filename="../app/report/report_sections.cpp" line="330"/>
         <source>all four</source>
         <translation>alle vier</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="326"/>
+        <location filename="../app/report/report_sections.cpp" line="353"/>
         <source>Alpha without each coder</source>
         <translation>Alpha ohne jeweils eine codierende Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="328"/>
+        <location filename="../app/report/report_sections.cpp" line="355"/>
         <source>Left out</source>
         <translation>Ausgelassen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="359"/>
+        <location filename="../app/report/report_sections.cpp" line="388"/>
         <source>Alpha recomputed without the coder&apos;s codings; in brackets the change against all coders (positive: the coder pulls alpha down). A diagnostic for retraining, not a licence to report the better figure (Krippendorff, 2004).</source>
         <translation>Alpha ohne die Codierungen der Person neu berechnet; in Klammern die Änderung gegenüber allen Codierenden (positiv: die Person senkt Alpha). Eine Diagnose für die Nachschulung, keine Erlaubnis, den besseren Wert zu berichten (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="366"/>
+        <location filename="../app/report/report_sections.cpp" line="395"/>
         <source>The article that costs most</source>
         <translation>Der Artikel, der am meisten kostet</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="371"/>
+        <location filename="../app/report/report_sections.cpp" line="400"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="372"/>
+        <location filename="../app/report/report_sections.cpp" line="401"/>
         <source>α without it</source>
         <translation>α ohne ihn</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="373"/>
+        <location filename="../app/report/report_sections.cpp" line="402"/>
         <source>Change</source>
         <translation>Änderung</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="396"/>
+        <location filename="../app/report/report_sections.cpp" line="427"/>
         <source>Function confusion between coders</source>
         <translation>Funktionsverwechslungen zwischen Codierenden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="399"/>
+        <location filename="../app/report/report_sections.cpp" line="430"/>
         <source>A coder&apos;s span</source>
         <translation>Textstelle einer Person</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="418"/>
+        <location filename="../app/report/report_sections.cpp" line="456"/>
         <source>For each coder&apos;s span, the function the other coder gave the span that overlaps it most (none: nothing there), summed over ordered pairs of coders. Off the diagonal are the confusions a codebook rule could settle.</source>
         <translation>Für jede Textstelle einer codierenden Person die Funktion, die die andere Person der am stärksten überlappenden Textstelle gab (keine: dort ist nichts), summiert über geordnete Paare von Codierenden. Abseits der Diagonale stehen die Verwechslungen, die eine Codebuchregel klären könnte.</translation>
     </message>
@@ -3827,83 +3835,83 @@
         <translation>Kennzeichnet</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="252"/>
+        <location filename="../app/report/report_method_text.cpp" line="257"/>
         <source>Every figure above is what these commands print (add --json for all digits):</source>
         <translation>Jeder Wert oben ist das, was diese Befehle ausgeben (mit --json alle Stellen):</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="64"/>
+        <location filename="../app/report/report_document.cpp" line="63"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
         <translation>de</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="82"/>
+        <location filename="../app/report/report_document.cpp" line="81"/>
         <source>Method text</source>
         <translation>Methodentext</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="84"/>
+        <location filename="../app/report/report_document.cpp" line="83"/>
         <source>Reporting checklist (Lombard, Snyder-Duch &amp; Bracken, 2002)</source>
         <translation>Checkliste für die Berichterstattung (Lombard, Snyder-Duch &amp; Bracken, 2002)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="86"/>
+        <location filename="../app/report/report_document.cpp" line="85"/>
         <source>Reliability per variable</source>
         <translation>Reliabilität je Variable</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="88"/>
+        <location filename="../app/report/report_document.cpp" line="87"/>
         <source>Is the sample large enough?</source>
         <translation>Ist die Stichprobe groß genug?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="90"/>
+        <location filename="../app/report/report_document.cpp" line="89"/>
         <source>Coders and the amount each coded</source>
         <translation>Codierende und ihr Codierumfang</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="92"/>
+        <location filename="../app/report/report_document.cpp" line="91"/>
         <source>Coder pairs</source>
         <translation>Codierpaare</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="93"/>
+        <location filename="../app/report/report_document.cpp" line="92"/>
         <source>Other coefficients</source>
         <translation>Weitere Koeffizienten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="95"/>
+        <location filename="../app/report/report_document.cpp" line="94"/>
         <source>Span boundaries: unitizing alpha</source>
         <translation>Grenzen der Textstellen: Unitizing-Alpha</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="99"/>
+        <location filename="../app/report/report_document.cpp" line="98"/>
         <source>Where reliability is lost</source>
         <translation>Wo Reliabilität verloren geht</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="102"/>
+        <location filename="../app/report/report_document.cpp" line="101"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="103"/>
+        <location filename="../app/report/report_document.cpp" line="102"/>
         <source>Reproducing the figures</source>
         <translation>Die Werte reproduzieren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="105"/>
+        <location filename="../app/report/report_document.cpp" line="104"/>
         <source>References</source>
         <translation>Literatur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="153"/>
+        <location filename="../app/report/report_method_text.cpp" line="156"/>
         <source>Answers to article-level items were adjudicated as well: %1 gold answers on %2 articles, %3 of them with a written rationale. </source>
         <translation>Auch Antworten auf Items auf Artikelebene wurden entschieden: %1 Goldstandard-Antworten zu %2 Artikeln, %3 davon mit schriftlicher Begründung. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="163"/>
+        <location filename="../app/report/report_method_text.cpp" line="167"/>
         <source>Disagreements on article-level items were resolved by adjudication into a separate gold standard: %1 gold answers on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Abweichungen bei Items auf Artikelebene wurden durch Entscheidung in einen getrennten Goldstandard aufgelöst: %1 Goldstandard-Antworten zu %2 Artikeln, entschieden von %3, %4 davon mit schriftlicher Begründung. Die unabhängigen Codierungen blieben unverändert; alle obigen Werte stammen aus ihnen. </translation>
     </message>
@@ -5101,7 +5109,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="338"/>
-        <location filename="../app/cli/command_assign.cpp" line="436"/>
+        <location filename="../app/cli/command_assign.cpp" line="439"/>
         <source>unknown unit &quot;%1&quot;.</source>
         <translation>unbekannte Einheit „%1“.</translation>
     </message>
@@ -5112,293 +5120,293 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="357"/>
-        <location filename="../app/cli/command_assign.cpp" line="345"/>
-        <location filename="../app/cli/command_assign.cpp" line="371"/>
-        <location filename="../app/cli/command_assign.cpp" line="452"/>
+        <location filename="../app/cli/command_assign.cpp" line="348"/>
+        <location filename="../app/cli/command_assign.cpp" line="374"/>
+        <location filename="../app/cli/command_assign.cpp" line="455"/>
         <location filename="../app/cli/command_report.cpp" line="132"/>
         <source>unknown phase &quot;%1&quot;.</source>
         <translation>unbekannte Phase „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="60"/>
+        <location filename="../app/cli/command_assign.cpp" line="63"/>
         <source>%1 subsample: %2%3, seed %4; %5 of %6 articles in the sampling frame; coders %7</source>
         <translation>Teilstichprobe %1: %2%3, Seed %4; %5 von %6 Artikeln der Auswahlgesamtheit; Codierende %7</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="63"/>
+        <location filename="../app/cli/command_assign.cpp" line="66"/>
         <source> by %1</source>
         <translation> nach %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="69"/>
+        <location filename="../app/cli/command_assign.cpp" line="72"/>
         <source>  near copies left out of the sampling frame</source>
         <translation>  Beinahe-Kopien aus der Auswahlgesamtheit ausgelassen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="71"/>
+        <location filename="../app/cli/command_assign.cpp" line="74"/>
         <source>  drawn at %1</source>
         <translation>  gezogen am %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="73"/>
+        <location filename="../app/cli/command_assign.cpp" line="76"/>
         <source>  stratum %1: %2 of %3</source>
         <translation>  Schicht %1: %2 von %3</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="77"/>
+        <location filename="../app/cli/command_assign.cpp" line="80"/>
         <source>  articles: %1</source>
         <translation>  Artikel: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="80"/>
+        <location filename="../app/cli/command_assign.cpp" line="83"/>
         <source>  Krippendorff&apos;s minimum for alpha_min %1 at p = %2 with the rarest value at %3: %4 values</source>
         <translation>  Krippendorffs Minimum für alpha_min %1 bei p = %2, wenn der seltenste Wert %3 ausmacht: %4 Werte</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="88"/>
+        <location filename="../app/cli/command_assign.cpp" line="91"/>
         <source>  Krippendorff&apos;s minimum: not defined for these arguments</source>
         <translation>  Krippendorffs Minimum: für diese Argumente nicht definiert</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="89"/>
+        <location filename="../app/cli/command_assign.cpp" line="92"/>
         <source>  this draw delivers %1 article values, %2 paragraph values, %3 sentence values (units × coders)</source>
         <translation>  diese Ziehung liefert %1 Artikelwerte, %2 Absatzwerte, %3 Satzwerte (Einheiten × Codierende)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="95"/>
+        <location filename="../app/cli/command_assign.cpp" line="98"/>
         <source>  enough for: none of these units; draw more articles or expect a wider interval</source>
         <translation>  ausreichend für: keine dieser Einheiten; ziehen Sie mehr Artikel oder rechnen Sie mit einem breiteren Intervall</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="97"/>
+        <location filename="../app/cli/command_assign.cpp" line="100"/>
         <source>  enough for: %1 units</source>
         <translation>  ausreichend für: %1-Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="134"/>
+        <location filename="../app/cli/command_assign.cpp" line="137"/>
         <source>Assignments: %1</source>
         <translation>Zuweisungen: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="165"/>
+        <location filename="../app/cli/command_assign.cpp" line="168"/>
         <source>%1  %2  %3  %4  %5  %6  %7</source>
         <translation>%1  %2  %3  %4  %5  %6  %7</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="166"/>
+        <location filename="../app/cli/command_assign.cpp" line="169"/>
         <source>phase</source>
         <translation>Phase</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="167"/>
+        <location filename="../app/cli/command_assign.cpp" line="170"/>
         <location filename="../app/cli/command_team.cpp" line="259"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="168"/>
+        <location filename="../app/cli/command_assign.cpp" line="171"/>
         <source>assigned</source>
         <translation>zugewiesen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="169"/>
+        <location filename="../app/cli/command_assign.cpp" line="172"/>
         <source>started</source>
         <translation>begonnen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="170"/>
+        <location filename="../app/cli/command_assign.cpp" line="173"/>
         <source>done</source>
         <translation>erledigt</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="171"/>
-        <location filename="../app/cli/command_assign.cpp" line="222"/>
+        <location filename="../app/cli/command_assign.cpp" line="174"/>
+        <location filename="../app/cli/command_assign.cpp" line="225"/>
         <source>alpha</source>
         <translation>Alpha</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="172"/>
+        <location filename="../app/cli/command_assign.cpp" line="175"/>
         <source>active</source>
         <translation>aktiv</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="182"/>
+        <location filename="../app/cli/command_assign.cpp" line="185"/>
         <source>%1 min</source>
         <translation>%1 min</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="186"/>
+        <location filename="../app/cli/command_assign.cpp" line="189"/>
         <source>Effort (active time; idle time not counted):</source>
         <translation>Aufwand (aktive Zeit; Leerlauf nicht gezählt):</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="187"/>
+        <location filename="../app/cli/command_assign.cpp" line="190"/>
         <source>Effort in aggregate (active time per coder is off; see --effort):</source>
         <translation>Aufwand insgesamt (aktive Zeit je Person ist ausgeschaltet; siehe --effort):</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="189"/>
+        <location filename="../app/cli/command_assign.cpp" line="192"/>
         <source>  %1  %2 articles done, %3 min active, %4 min per done article</source>
         <translation>  %1  %2 Artikel erledigt, %3 min aktiv, %4 min je erledigtem Artikel</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="196"/>
+        <location filename="../app/cli/command_assign.cpp" line="199"/>
         <source>alpha: Krippendorff&apos;s alpha (nominal) on present/absent per sentence and function, against the lead&apos;s master coding in training, else the mean over the coder&apos;s partners; finished articles only.</source>
         <translation>Alpha: Krippendorffs Alpha (nominal) auf vorhanden/nicht vorhanden je Satz und Funktion, gegen die Vorlage-Codierung der Leitung im Training, sonst der Mittelwert über die Partner der Person; nur abgeschlossene Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="212"/>
+        <location filename="../app/cli/command_assign.cpp" line="215"/>
         <source>Training feedback for %1 against the master coding of %2 (%3 units)</source>
         <translation>Trainingsfeedback für %1 gegen die Vorlage-Codierung von %2 (%3 Einheiten)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="214"/>
+        <location filename="../app/cli/command_assign.cpp" line="217"/>
         <source>Finished training articles compared: %1; still open: %2</source>
         <translation>Verglichene abgeschlossene Trainingsartikel: %1; noch offen: %2</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="215"/>
+        <location filename="../app/cli/command_assign.cpp" line="218"/>
         <location filename="../app/cli/command_extract.cpp" line="105"/>
         <location filename="../app/cli/command_extract.cpp" line="312"/>
         <source>none</source>
         <translation>keine</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="218"/>
+        <location filename="../app/cli/command_assign.cpp" line="221"/>
         <source>%1  %2  %3  %4  %5</source>
         <translation>%1  %2  %3  %4  %5</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="219"/>
+        <location filename="../app/cli/command_assign.cpp" line="222"/>
         <location filename="../app/cli/command_score.cpp" line="242"/>
         <location filename="../app/cli/command_score.cpp" line="284"/>
         <source>function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="220"/>
+        <location filename="../app/cli/command_assign.cpp" line="223"/>
         <source>units</source>
         <translation>Einheiten</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="221"/>
+        <location filename="../app/cli/command_assign.cpp" line="224"/>
         <source>agree %</source>
         <translation>Übereinst. %</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="223"/>
+        <location filename="../app/cli/command_assign.cpp" line="226"/>
         <source>marked (you / master)</source>
         <translation>markiert (Sie / Vorlage)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="235"/>
+        <location filename="../app/cli/command_assign.cpp" line="238"/>
         <source>Training complete: the coder can move on to the real work.</source>
         <translation>Training abgeschlossen: die Person kann mit der eigentlichen Arbeit beginnen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="236"/>
+        <location filename="../app/cli/command_assign.cpp" line="239"/>
         <source>Training not complete yet.</source>
         <translation>Training noch nicht abgeschlossen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="246"/>
+        <location filename="../app/cli/command_assign.cpp" line="249"/>
         <source>Draw the subsample of this phase (reliability or pilot) that every --coders codes.</source>
         <translation>Die Teilstichprobe dieser Phase (reliability oder pilot) ziehen, die alle --coders codieren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="254"/>
+        <location filename="../app/cli/command_assign.cpp" line="257"/>
         <source>With --draw: the number of articles.</source>
         <translation>Mit --draw: die Anzahl der Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="256"/>
+        <location filename="../app/cli/command_assign.cpp" line="259"/>
         <source>With --draw: the share of the sampling frame (0 &lt; F &lt;= 1, rounded up).</source>
         <translation>Mit --draw: der Anteil an der Auswahlgesamtheit (0 &lt; F &lt;= 1, aufgerundet).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="259"/>
+        <location filename="../app/cli/command_assign.cpp" line="262"/>
         <source>With --draw: draw proportionally within outlet, language or topic (metadata key &quot;topic&quot;).</source>
         <translation>Mit --draw: proportional innerhalb von Medium, Sprache oder Thema ziehen (Metadatenschlüssel „topic“).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="264"/>
+        <location filename="../app/cli/command_assign.cpp" line="267"/>
         <source>With --draw: leave articles found to be near copies of older ones at import out of the sampling frame.</source>
         <translation>Mit --draw: Artikel, die beim Import als Beinahe-Kopien älterer erkannt wurden, aus der Auswahlgesamtheit auslassen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="267"/>
+        <location filename="../app/cli/command_assign.cpp" line="270"/>
         <source>Seed of the draw or of dealing the rest (default: a random seed, printed and recorded).</source>
         <translation>Seed der Ziehung oder der Verteilung des Rests (Standard: ein zufälliger Seed, ausgegeben und gespeichert).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="271"/>
+        <location filename="../app/cli/command_assign.cpp" line="274"/>
         <source>With --draw: the smallest acceptable alpha for the sample-size advice (default 0.8).</source>
         <translation>Mit --draw: das kleinste akzeptable Alpha für die Empfehlung zum Stichprobenumfang (Standard 0.8).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="276"/>
+        <location filename="../app/cli/command_assign.cpp" line="279"/>
         <source>With --draw: the expected share of the rarest value (default 0.25).</source>
         <translation>Mit --draw: der erwartete Anteil des seltensten Werts (Standard 0.25).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="279"/>
+        <location filename="../app/cli/command_assign.cpp" line="282"/>
         <source>Deal every article without any assignment to --coders for production: single or double coding.</source>
         <translation>Jeden Artikel ohne Zuweisung den --coders für die Produktion zuteilen: Einfach- oder Doppelcodierung.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="284"/>
+        <location filename="../app/cli/command_assign.cpp" line="287"/>
         <source>With --articles: assign in this phase (training, pilot, reliability, production); with --show or --progress: only this phase.</source>
         <translation>Mit --articles: in dieser Phase zuweisen (training, pilot, reliability, production); mit --show oder --progress: nur diese Phase.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="289"/>
+        <location filename="../app/cli/command_assign.cpp" line="292"/>
         <source>Assign these articles (ids) to every one of --coders in --phase.</source>
         <translation>Diese Artikel (IDs) allen --coders in --phase zuweisen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="292"/>
+        <location filename="../app/cli/command_assign.cpp" line="295"/>
         <source>The coders&apos; pseudonyms.</source>
         <translation>Die Pseudonyme der Codierenden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="294"/>
+        <location filename="../app/cli/command_assign.cpp" line="297"/>
         <source>With --draw, --rest or --articles: show the plan, write nothing.</source>
         <translation>Mit --draw, --rest oder --articles: den Plan zeigen, nichts schreiben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="296"/>
+        <location filename="../app/cli/command_assign.cpp" line="299"/>
         <source>Show the assignments and the draws with their advice.</source>
         <translation>Die Zuweisungen und die Ziehungen mit ihrer Empfehlung zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="298"/>
+        <location filename="../app/cli/command_assign.cpp" line="301"/>
         <source>Show per coder and phase the articles done, agreement so far and effort.</source>
         <translation>Je Person und Phase die erledigten Artikel, die bisherige Übereinstimmung und den Aufwand zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="300"/>
+        <location filename="../app/cli/command_assign.cpp" line="303"/>
         <source>Show this coder&apos;s agreement with the master coding on finished training articles.</source>
         <translation>Die Übereinstimmung dieser Person mit der Vorlage-Codierung bei abgeschlossenen Trainingsartikeln zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="304"/>
+        <location filename="../app/cli/command_assign.cpp" line="307"/>
         <source>With --training: the lead whose training coding is the master (default: the one lead who coded training articles).</source>
         <translation>Mit --training: die Leitung, deren Trainingscodierung die Vorlage ist (Standard: die eine Leitung, die Trainingsartikel codiert hat).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="309"/>
+        <location filename="../app/cli/command_assign.cpp" line="312"/>
         <source>With --training: paragraph, sentence (default) or token.</source>
         <translation>Mit --training: paragraph, sentence (Standard) oder token.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="312"/>
+        <location filename="../app/cli/command_assign.cpp" line="315"/>
         <source>Show active time per coder (on) or only in aggregate (off, the default).</source>
         <translation>Aktive Zeit je Person zeigen (on) oder nur insgesamt (off, der Standard).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="314"/>
+        <location filename="../app/cli/command_assign.cpp" line="317"/>
         <location filename="../app/cli/command_check.cpp" line="13"/>
-        <location filename="../app/cli/command_codebook.cpp" line="52"/>
+        <location filename="../app/cli/command_codebook.cpp" line="53"/>
         <location filename="../app/cli/command_extract.cpp" line="163"/>
         <location filename="../app/cli/command_handout.cpp" line="20"/>
         <location filename="../app/cli/command_merge.cpp" line="71"/>
@@ -5411,9 +5419,9 @@
         <translation>Das Ergebnis als JSON ausgeben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="318"/>
+        <location filename="../app/cli/command_assign.cpp" line="321"/>
         <location filename="../app/cli/command_check.cpp" line="16"/>
-        <location filename="../app/cli/command_codebook.cpp" line="54"/>
+        <location filename="../app/cli/command_codebook.cpp" line="55"/>
         <location filename="../app/cli/command_export.cpp" line="73"/>
         <location filename="../app/cli/command_extract.cpp" line="166"/>
         <location filename="../app/cli/command_handout.cpp" line="25"/>
@@ -5428,14 +5436,14 @@
         <translation>Die Projektdatei.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="320"/>
+        <location filename="../app/cli/command_assign.cpp" line="323"/>
         <source>Assign articles to coders per phase (training, pilot, reliability, production), draw the reliability subsample with a recorded seed, and follow progress. Give one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
         <translation>Artikel je Phase (training, pilot, reliability, production) Codierenden zuweisen, die Reliabilitäts-Teilstichprobe mit gespeichertem Seed ziehen und den Fortschritt verfolgen. Geben Sie eine der Optionen --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort an.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="329"/>
+        <location filename="../app/cli/command_assign.cpp" line="332"/>
         <location filename="../app/cli/command_check.cpp" line="27"/>
-        <location filename="../app/cli/command_codebook.cpp" line="71"/>
+        <location filename="../app/cli/command_codebook.cpp" line="72"/>
         <location filename="../app/cli/command_extract.cpp" line="175"/>
         <location filename="../app/cli/command_handout.cpp" line="37"/>
         <location filename="../app/cli/command_info.cpp" line="47"/>
@@ -5446,159 +5454,159 @@
         <translation>genau eine Projektdatei erwartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="337"/>
+        <location filename="../app/cli/command_assign.cpp" line="340"/>
         <source>give exactly one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
         <translation>geben Sie genau eine der Optionen --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort an.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="354"/>
+        <location filename="../app/cli/command_assign.cpp" line="357"/>
         <source>the seed &quot;%1&quot; is not a whole number from 0 to 18446744073709551615.</source>
         <translation>der Seed „%1“ ist keine ganze Zahl von 0 bis 18446744073709551615.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="375"/>
+        <location filename="../app/cli/command_assign.cpp" line="378"/>
         <source>give --size or --fraction, not both.</source>
         <translation>geben Sie --size oder --fraction an, nicht beides.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="376"/>
+        <location filename="../app/cli/command_assign.cpp" line="379"/>
         <source>--draw needs --size or --fraction.</source>
         <translation>--draw braucht --size oder --fraction.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="382"/>
+        <location filename="../app/cli/command_assign.cpp" line="385"/>
         <source>--size must be a whole number of articles, at least 1; &quot;%1&quot; given.</source>
         <translation>--size muss eine ganze Zahl von Artikeln sein, mindestens 1; angegeben: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="390"/>
+        <location filename="../app/cli/command_assign.cpp" line="393"/>
         <source>--fraction must be a number above 0 and at most 1; &quot;%1&quot; given.</source>
         <translation>--fraction muss eine Zahl über 0 und höchstens 1 sein; angegeben: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="398"/>
+        <location filename="../app/cli/command_assign.cpp" line="401"/>
         <source>--stratify takes outlet, language or topic, not &quot;%1&quot;.</source>
         <translation>--stratify nimmt outlet, language oder topic, nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="404"/>
+        <location filename="../app/cli/command_assign.cpp" line="407"/>
         <source>--alpha-min must lie between 0 and 1; &quot;%1&quot; given.</source>
         <translation>--alpha-min muss zwischen 0 und 1 liegen; angegeben: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="409"/>
+        <location filename="../app/cli/command_assign.cpp" line="412"/>
         <source>--rarest must lie above 0 and at most 0.5; &quot;%1&quot; given.</source>
         <translation>--rarest muss über 0 und höchstens bei 0.5 liegen; angegeben: „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="422"/>
+        <location filename="../app/cli/command_assign.cpp" line="425"/>
         <source>--rest takes single or double, not &quot;%1&quot;.</source>
         <translation>--rest nimmt single oder double, nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="427"/>
+        <location filename="../app/cli/command_assign.cpp" line="430"/>
         <source>--articles needs --phase.</source>
         <translation>--articles braucht --phase.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="429"/>
+        <location filename="../app/cli/command_assign.cpp" line="432"/>
         <source>--articles needs --coders.</source>
         <translation>--articles braucht --coders.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="442"/>
+        <location filename="../app/cli/command_assign.cpp" line="445"/>
         <source>--effort takes on or off, not &quot;%1&quot;.</source>
         <translation>--effort nimmt on oder off, nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="445"/>
+        <location filename="../app/cli/command_assign.cpp" line="448"/>
         <source>name the coders with --coders.</source>
         <translation>nennen Sie die Codierenden mit --coders.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="487"/>
+        <location filename="../app/cli/command_assign.cpp" line="490"/>
         <source>Active time is now shown per coder.</source>
         <translation>Aktive Zeit wird jetzt je Person angezeigt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="488"/>
+        <location filename="../app/cli/command_assign.cpp" line="491"/>
         <source>Active time is now shown in aggregate only.</source>
         <translation>Aktive Zeit wird jetzt nur insgesamt angezeigt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="506"/>
-        <location filename="../app/cli/command_assign.cpp" line="537"/>
+        <location filename="../app/cli/command_assign.cpp" line="509"/>
+        <location filename="../app/cli/command_assign.cpp" line="540"/>
         <source>Dry run: nothing was written.</source>
         <translation>Probelauf: nichts wurde geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="507"/>
-        <location filename="../app/cli/command_assign.cpp" line="538"/>
+        <location filename="../app/cli/command_assign.cpp" line="510"/>
+        <location filename="../app/cli/command_assign.cpp" line="541"/>
         <source>%1 assignments written.</source>
         <translation>%1 Zuweisungen geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="536"/>
+        <location filename="../app/cli/command_assign.cpp" line="539"/>
         <source>Seed %1.</source>
         <translation>Seed %1.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="34"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="35"/>
         <source>Cannot read %1: %2</source>
         <translation>%1 kann nicht gelesen werden: %2</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="39"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="40"/>
         <source>%1: not a JSON object (%2).</source>
         <translation>%1: kein JSON-Objekt (%2).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="68"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="69"/>
         <source>%1: a coder&apos;s role must be &quot;coder&quot; or &quot;lead&quot;.</source>
         <translation>%1: die Rolle einer Person muss „coder“ oder „lead“ sein.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="100"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="103"/>
         <source>%1: the reliability article &quot;%2&quot; is not in articles.jsonl.</source>
         <translation>%1: der Reliabilitätsartikel „%2“ ist nicht in articles.jsonl.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="142"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="149"/>
         <source>Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans, 2 baseline runs.</source>
         <translation>%1 erstellt: %2 Artikel, %3 Codierende, %4 Textstellen, %5 Urteile auf Artikelebene, %6 Goldstandard-Textstellen, 2 Baseline-Läufe.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="167"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="174"/>
         <source>Replace OUT if it exists.</source>
         <translation>OUT ersetzen, falls vorhanden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="170"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="177"/>
         <source>The folder with study.json, articles.jsonl, codings.jsonl and gold.jsonl.</source>
         <translation>Der Ordner mit study.json, articles.jsonl, codings.jsonl und gold.jsonl.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="172"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="179"/>
         <source>The project file to write (*.fourfold).</source>
         <translation>Die zu schreibende Projektdatei (*.fourfold).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="174"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="181"/>
         <source>Build the demo project (invented data) from its source files.</source>
         <translation>Das Demoprojekt (erfundene Daten) aus seinen Quelldateien erstellen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="179"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="186"/>
         <source>expected a source folder and an output file.</source>
         <translation>Quellordner und Ausgabedatei erwartet.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="184"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="191"/>
         <source>%1 already exists; add --force to replace it.</source>
         <translation>%1 existiert bereits; ergänzen Sie --force, um es zu ersetzen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="198"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="205"/>
         <source>Cannot move the new project to %1.</source>
         <translation>Das neue Projekt kann nicht nach %1 verschoben werden.</translation>
     </message>
@@ -5621,87 +5629,87 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="36"/>
+        <location filename="../app/cli/command_codebook.cpp" line="37"/>
         <source>Print what changed from version A to version B (&quot;--diff A B&quot; or &quot;--diff A,B&quot;; B defaults to the current version).</source>
         <translation>Ausgeben, was sich von Version A zu Version B geändert hat („--diff A B“ oder „--diff A,B“; B ist standardmäßig die aktuelle Version).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="41"/>
+        <location filename="../app/cli/command_codebook.cpp" line="42"/>
         <source>Add the codebook in this JSON file as a new version (needs --note).</source>
         <translation>Das Codebuch in dieser JSON-Datei als neue Version hinzufügen (braucht --note).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="44"/>
+        <location filename="../app/cli/command_codebook.cpp" line="45"/>
         <source>With --update: what changed and why.</source>
         <translation>Mit --update: was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="46"/>
+        <location filename="../app/cli/command_codebook.cpp" line="47"/>
         <source>With --update: the lead&apos;s pseudonym, recorded as the author.</source>
         <translation>Mit --update: das Pseudonym der Leitung, als Autor gespeichert.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="49"/>
+        <location filename="../app/cli/command_codebook.cpp" line="50"/>
         <source>Print version N as JSON (the form --update reads).</source>
         <translation>Version N als JSON ausgeben (in der Form, die --update liest).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="51"/>
+        <location filename="../app/cli/command_codebook.cpp" line="52"/>
         <source>List the annotations made under an older version than the current one.</source>
         <translation>Die Annotationen auflisten, die unter einer älteren als der aktuellen Version entstanden sind.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="56"/>
+        <location filename="../app/cli/command_codebook.cpp" line="57"/>
         <source>Codebook versions: without options, list them; editing definitions, decision rules or attributes is recorded as a new version with --update.</source>
         <translation>Codebuchversionen: ohne Optionen werden sie aufgelistet; Änderungen an Definitionen, Entscheidungsregeln oder Merkmalen werden mit --update als neue Version gespeichert.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="67"/>
+        <location filename="../app/cli/command_codebook.cpp" line="68"/>
         <source>give at most one of --diff, --update, --show, --outdated.</source>
         <translation>geben Sie höchstens eine der Optionen --diff, --update, --show, --outdated an.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="80"/>
+        <location filename="../app/cli/command_codebook.cpp" line="81"/>
         <source>--diff takes two version numbers.</source>
         <translation>--diff nimmt zwei Versionsnummern.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="86"/>
+        <location filename="../app/cli/command_codebook.cpp" line="87"/>
         <source>--diff takes version numbers (1, 2, ...), not &quot;%1&quot;.</source>
         <translation>--diff nimmt Versionsnummern (1, 2, ...), nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="94"/>
+        <location filename="../app/cli/command_codebook.cpp" line="95"/>
         <source>--show takes a version number (1, 2, ...), not &quot;%1&quot;.</source>
         <translation>--show nimmt eine Versionsnummer (1, 2, ...), nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="99"/>
+        <location filename="../app/cli/command_codebook.cpp" line="100"/>
         <source>--update needs --note saying what changed and why.</source>
         <translation>--update braucht --note, das sagt, was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="114"/>
+        <location filename="../app/cli/command_codebook.cpp" line="115"/>
         <source>There is no coder &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keine codierende Person „%1“.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="133"/>
+        <location filename="../app/cli/command_codebook.cpp" line="134"/>
         <source>Codebook version %1 added.</source>
         <translation>Codebuchversion %1 hinzugefügt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="180"/>
+        <location filename="../app/cli/command_codebook.cpp" line="181"/>
         <source>%1 annotations were made under an older codebook version.</source>
         <translation>%1 Annotationen entstanden unter einer älteren Codebuchversion.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="183"/>
+        <location filename="../app/cli/command_codebook.cpp" line="184"/>
         <source>  #%1  %2  %3  %4  version %5%6</source>
         <translation>  #%1  %2  %3  %4  Version %5%6</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="189"/>
+        <location filename="../app/cli/command_codebook.cpp" line="190"/>
         <source>  (its function changed since: re-check)</source>
         <translation>  (ihre Funktion hat sich seitdem geändert: erneut prüfen)</translation>
     </message>
@@ -6643,17 +6651,22 @@
         <translation>    theirs (unterlegen): %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_merge.cpp" line="215"/>
+        <location filename="../app/cli/command_merge.cpp" line="191"/>
+        <source>    the assignment was withdrawn in the project while %1 coded the article in a copy: keep mine to leave it withdrawn, theirs to assign it again.</source>
+        <translation>    die Zuweisung wurde im Projekt zurückgezogen, während %1 den Artikel in einer Kopie codierte: mine behält den Rückzug, theirs weist den Artikel erneut zu.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_merge.cpp" line="227"/>
         <source>%1 (%2): nothing new; it was merged before.</source>
         <translation>%1 (%2): nichts Neues; wurde bereits zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_merge.cpp" line="218"/>
+        <location filename="../app/cli/command_merge.cpp" line="230"/>
         <source>%1 (%2): added %3, changed %4 (of which deleted %5), conflicts %6, coding time %7 s.</source>
         <translation>%1 (%2): %3 hinzugefügt, %4 geändert (davon %5 gelöscht), %6 Konflikte, Codierzeit %7 s.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_merge.cpp" line="229"/>
+        <location filename="../app/cli/command_merge.cpp" line="243"/>
         <source>Open conflicts waiting for your decision: %1 (see fourfold-cli merge %2 --conflicts).</source>
         <translation>Offene Konflikte, die auf Ihre Entscheidung warten: %1 (siehe fourfold-cli merge %2 --conflicts).</translation>
     </message>
@@ -7402,12 +7415,12 @@
         <translation>  people    Einem laufenden Teamprojekt eine Person hinzufügen oder eine deaktivieren.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="250"/>
+        <location filename="../app/cli/command_assign.cpp" line="253"/>
         <source>Withdraw the committed subsample of this phase (reliability or pilot) while nobody has coded any of its assignments yet.</source>
         <translation>Die gespeicherte Teilstichprobe dieser Phase (reliability oder pilot) zurückziehen, solange noch niemand eine ihrer Zuweisungen codiert hat.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_assign.cpp" line="468"/>
+        <location filename="../app/cli/command_assign.cpp" line="471"/>
         <source>The %1 subsample is withdrawn: %n assignment(s) removed.</source>
         <translation>
             <numerusform>Die Teilstichprobe der Phase %1 ist zurückgezogen: %n Zuweisung entfernt.</numerusform>
@@ -7620,293 +7633,293 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::CodebookEditor</name>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="72"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="74"/>
         <source>nominal</source>
         <translation>nominalskaliert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="74"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="76"/>
         <source>ordinal</source>
         <translation>ordinalskaliert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="76"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="78"/>
         <source>interval</source>
         <translation>intervallskaliert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="78"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="80"/>
         <source>ratio</source>
         <translation>verhältnisskaliert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="128"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="178"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="131"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
         <source>Codebook</source>
         <translation>Codebuch</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="135"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="138"/>
         <source>&amp;Name:</source>
         <translation>&amp;Name:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="151"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="154"/>
         <source>Article-level items</source>
         <translation>Items auf Artikelebene</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="156"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="159"/>
         <source>&amp;Undo:</source>
         <translation>&amp;Rückgängig:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="158"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="161"/>
         <source>&amp;Redo:</source>
         <translation>&amp;Wiederholen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="172"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="175"/>
         <source>&amp;Save as new version…</source>
         <translation>Als neue Version &amp;speichern…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="178"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
         <source>Codebook (changed)</source>
         <translation>Codebuch (geändert)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="184"/>
         <source>Edit the codebook&apos;s name</source>
         <translation>Namen des Codebuchs bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="222"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="239"/>
         <source>Level of measurement: it decides which agreement coefficient compares the values (Krippendorff 2004, ch. 11).</source>
         <translation>Skalenniveau: es entscheidet, welcher Übereinstimmungskoeffizient die Werte vergleicht (Krippendorff 2004, Kap. 11).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="238"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="255"/>
         <source>&amp;Label:</source>
         <translation>&amp;Bezeichnung:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="241"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="258"/>
         <source>&amp;Definition:</source>
         <translation>&amp;Definition:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="243"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="260"/>
         <source>One decision rule per paragraph (an empty line between two).</source>
         <translation>Eine Entscheidungsregel je Absatz (eine Leerzeile dazwischen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="244"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="261"/>
         <source>Decision &amp;rules:</source>
         <translation>Entscheidungs&amp;regeln:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="246"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="263"/>
         <source>One example per paragraph (an empty line between two).</source>
         <translation>Ein Beispiel je Absatz (eine Leerzeile dazwischen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="247"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="264"/>
         <source>E&amp;xamples:</source>
         <translation>&amp;Beispiele:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="250"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="267"/>
         <source>Attributes of %1 spans</source>
         <translation>Merkmale von %1-Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="257"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="274"/>
         <source>&amp;Add attribute</source>
         <translation>Merkmal &amp;hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="258"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="275"/>
         <source>Re&amp;move attribute</source>
         <translation>Merkmal &amp;entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="267"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="383"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="284"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="400"/>
         <source>&amp;Key:</source>
         <translation>&amp;Schlüssel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="270"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="287"/>
         <source>La&amp;bel:</source>
         <translation>Be&amp;zeichnung:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="272"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="289"/>
         <source>closed list of values</source>
         <translation>geschlossene Werteliste</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="273"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="290"/>
         <source>free text</source>
         <translation>Freitext</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="274"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="291"/>
         <source>&amp;Type:</source>
         <translation>&amp;Typ:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="276"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="390"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="293"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="407"/>
         <source>Le&amp;vel:</source>
         <translation>&amp;Niveau:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="278"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="387"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="295"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="404"/>
         <source>One value per line, in order.</source>
         <translation>Ein Wert je Zeile, in Reihenfolge.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="280"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="388"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="297"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="405"/>
         <source>&amp;Values:</source>
         <translation>&amp;Werte:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="301"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="318"/>
         <source>Edit the label of %1</source>
         <translation>Bezeichnung von %1 bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="306"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="323"/>
         <source>Edit the definition of %1</source>
         <translation>Definition von %1 bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="311"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="328"/>
         <source>Edit the decision rules of %1</source>
         <translation>Entscheidungsregeln von %1 bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="316"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="333"/>
         <source>Edit the examples of %1</source>
         <translation>Beispiele von %1 bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="320"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="337"/>
         <source>Edit an attribute&apos;s key</source>
         <translation>Schlüssel eines Merkmals bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="324"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="341"/>
         <source>Edit an attribute&apos;s label</source>
         <translation>Bezeichnung eines Merkmals bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="330"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="347"/>
         <source>Change an attribute&apos;s type</source>
         <translation>Typ eines Merkmals ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="338"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="355"/>
         <source>Change an attribute&apos;s level</source>
         <translation>Niveau eines Merkmals ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="343"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="360"/>
         <source>Edit an attribute&apos;s values</source>
         <translation>Werte eines Merkmals bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="364"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="381"/>
         <source>Questions answered once per article, such as which function dominates it.</source>
         <translation>Fragen, die einmal je Artikel beantwortet werden, etwa welche Funktion ihn dominiert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="371"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="388"/>
         <source>&amp;Add item</source>
         <translation>Item &amp;hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="372"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="389"/>
         <source>Re&amp;move item</source>
         <translation>Item &amp;entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="385"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="402"/>
         <source>&amp;Question:</source>
         <translation>&amp;Frage:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="406"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="423"/>
         <source>Edit an item&apos;s key</source>
         <translation>Schlüssel eines Items bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="411"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="428"/>
         <source>Edit an item&apos;s question</source>
         <translation>Frage eines Items bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="416"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="433"/>
         <source>Edit an item&apos;s values</source>
         <translation>Werte eines Items bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="421"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="438"/>
         <source>Change an item&apos;s level</source>
         <translation>Niveau eines Items ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="478"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="495"/>
         <source>Editing a draft of version %1; saving makes version %2.</source>
         <translation>Sie bearbeiten einen Entwurf von Version %1; Speichern erstellt Version %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="555"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="572"/>
         <source>Add an item</source>
         <translation>Ein Item hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="564"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="581"/>
         <source>Add an attribute to %1</source>
         <translation>%1 ein Merkmal hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="581"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="598"/>
         <source>Remove the item “%1”</source>
         <translation>Das Item „%1“ entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="589"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="606"/>
         <source>Remove the attribute “%1”</source>
         <translation>Das Merkmal „%1“ entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="660"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="677"/>
         <source>Fix the marked field first.</source>
         <translation>Korrigieren Sie zuerst das markierte Feld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="717"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="734"/>
         <source>Version %1 was added since this draft was started from version %2; nothing was saved. Close the editor and open it again to edit the new version.</source>
         <translation>Version %1 wurde hinzugefügt, seit dieser Entwurf von Version %2 aus begonnen wurde; nichts wurde gespeichert. Schließen Sie den Editor und öffnen Sie ihn erneut, um die neue Version zu bearbeiten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="731"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="776"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="748"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="795"/>
         <source>The codebook was not saved: the marked field needs a change first.</source>
         <translation>Das Codebuch wurde nicht gespeichert: das markierte Feld muss zuerst geändert werden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="736"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="753"/>
         <source>Nothing was saved: the draft is the same as version %1.</source>
         <translation>Nichts wurde gespeichert: der Entwurf ist identisch mit Version %1.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="760"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="780"/>
         <source>Codebook version %1 saved. %n annotation(s) made under an older version are now outdated; %2 of them belong to a function that changed and need a re-check.</source>
         <translation>
             <numerusform>Codebuchversion %1 gespeichert. %n unter einer älteren Version erstellte Annotation ist jetzt veraltet; %2 davon gehören zu einer geänderten Funktion und müssen erneut geprüft werden.</numerusform>
@@ -7914,17 +7927,17 @@ Beinahe-Kopie von %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="780"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="799"/>
         <source>Save as version %1</source>
         <translation>Als Version %1 speichern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="782"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="801"/>
         <source>What changes against version %1:</source>
         <translation>Was sich gegenüber Version %1 ändert:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="788"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="807"/>
         <source>&amp;Note (what changed and why):</source>
         <translation>&amp;Notiz (was sich geändert hat und warum):</translation>
     </message>
@@ -8168,12 +8181,12 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::CodingSession</name>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="141"/>
+        <location filename="../app/desktop/coding_session.cpp" line="156"/>
         <source>“%1” (%2), similarity %3</source>
         <translation>„%1“ (%2), Ähnlichkeit %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="235"/>
+        <location filename="../app/desktop/coding_session.cpp" line="250"/>
         <source>%1 is read-only: you can read, compare and compute, but nothing is saved. To code, copy the file to a folder you may write to and open the copy.</source>
         <translation>%1 ist schreibgeschützt: Sie können lesen, vergleichen und berechnen, aber nichts wird gespeichert. Um zu codieren, kopieren Sie die Datei in einen Ordner, in den Sie schreiben dürfen, und öffnen Sie die Kopie.</translation>
     </message>
@@ -8620,32 +8633,32 @@ Beinahe-Kopie von %2</translation>
         <translation>Goldstandard %1 entschieden von %2 am %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="862"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="864"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Rückgängig mit %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="890"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="892"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Wählen Sie die Textstelle einer codierenden Person zum Übernehmen (oder mehrere zum Vereinen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="918"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="920"/>
         <source>Choose a passage first.</source>
         <translation>Wählen Sie zuerst eine Passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="957"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="959"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Wählen Sie die zu verwerfenden Textstellen (die noch nicht verworfen sind).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="969"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="971"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Wählen Sie eine Goldstandard-Textstelle zum Zurückziehen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="1015"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="1017"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>In diesem Artikel ist keine übereinstimmende Passage mehr zu übernehmen.</translation>
     </message>
@@ -8655,7 +8668,7 @@ Beinahe-Kopie von %2</translation>
         <translation>Antworten auf Items auf Artikelebene</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="995"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="997"/>
         <source>Choose an item with a gold answer to withdraw.</source>
         <translation>Wählen Sie ein Item mit einer Goldstandard-Antwort, die zurückgezogen werden soll.</translation>
     </message>
@@ -8744,96 +8757,106 @@ Beinahe-Kopie von %2</translation>
     </message>
     <message>
         <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="138"/>
+        <source>withdrawn assignment, coded in a copy</source>
+        <translation>zurückgezogene Zuweisung, in einer Kopie codiert</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="140"/>
         <source>project&apos;s version kept</source>
         <translation>Version des Projekts behalten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="139"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="141"/>
         <source>other version taken</source>
         <translation>andere Version übernommen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="140"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="142"/>
         <source>open</source>
         <translation>offen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="143"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="145"/>
         <source>the project</source>
         <translation>das Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="144"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="146"/>
         <source>the team server</source>
         <translation>der Teamserver</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="145"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="147"/>
         <source>copy %1</source>
         <translation>Kopie %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="160"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="162"/>
         <source>?</source>
         <translation>?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="182"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="184"/>
         <source>&lt;p&gt;&lt;i&gt;(none)&lt;/i&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;&lt;i&gt;(keine)&lt;/i&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="185"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="187"/>
         <source>&lt;p&gt;&lt;b&gt;Deleted&lt;/b&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;&lt;b&gt;Gelöscht&lt;/b&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="201"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="203"/>
         <source>&lt;p&gt;Note: %1&lt;/p&gt;</source>
         <translation>&lt;p&gt;Notiz: %1&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="203"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="205"/>
         <source>&lt;p&gt;Confidence: %1&lt;/p&gt;</source>
         <translation>&lt;p&gt;Konfidenz: %1&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="205"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="207"/>
         <source>&lt;p&gt;Answer to %1: &lt;b&gt;%2&lt;/b&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;Antwort auf %1: &lt;b&gt;%2&lt;/b&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="210"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="212"/>
         <source>&lt;p&gt;Status: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;Status: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="212"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="214"/>
         <source>&lt;p&gt;Link: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;Verknüpfung: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="216"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="218"/>
         <source>&lt;p&gt;&lt;small&gt;Changed %1&lt;/small&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;&lt;small&gt;Geändert %1&lt;/small&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="232"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="234"/>
         <source>No merge has found a conflict.</source>
         <translation>Kein Zusammenführen hat einen Konflikt gefunden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="233"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="235"/>
         <source>No conflicts wait for a decision.</source>
         <translation>Keine Konflikte warten auf eine Entscheidung.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="257"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="245"/>
+        <source>&lt;p&gt;The project withdrew this assignment (a withdrawn draw) while %1 coded the article in a copy; the codings are in the project, but they do not count while the assignment stays withdrawn. Keep the project&apos;s version to leave it withdrawn, or take this version to assign the article to %1 again.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Das Projekt hat diese Zuweisung zurückgezogen (eine zurückgezogene Ziehung), während %1 den Artikel in einer Kopie codierte; die Codierungen sind im Projekt, zählen aber nicht, solange die Zuweisung zurückgezogen bleibt. Behalten Sie die Version des Projekts, damit sie zurückgezogen bleibt, oder übernehmen Sie diese Version, um den Artikel %1 erneut zuzuweisen.&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="269"/>
         <source>Choose an open conflict first.</source>
         <translation>Wählen Sie zuerst einen offenen Konflikt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="273"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="285"/>
         <source>%1. Undo with Edit → Undo.</source>
         <translation>%1. Rückgängig mit Bearbeiten → Rückgängig.</translation>
     </message>
@@ -10148,61 +10171,61 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="188"/>
         <source>Write the reliability report</source>
         <translation>Reliabilitätsbericht schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="197"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webseite (*.html);;PDF-Dokument (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="204"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
         <source>Reliability report</source>
         <translation>Reliabilitätsbericht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="208"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
         <source>The reliability report was written to %1.</source>
         <translation>Der Reliabilitätsbericht wurde nach %1 geschrieben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="209"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="201"/>
         <source>&amp;Open</source>
         <translation>&amp;Öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="210"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="249"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="202"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="241"/>
         <source>Open the &amp;folder</source>
         <translation>&amp;Ordner öffnen</translation>
     </message>
     <message>
+        <location filename="../app/desktop/lead_windows.cpp" line="213"/>
         <location filename="../app/desktop/lead_windows.cpp" line="221"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="242"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="234"/>
         <source>Coder copy</source>
         <translation>Kopie für Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="230"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="222"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Eine Kopie für Codierende enthält nur die dieser Person zugewiesenen Artikel, das Codebuch und ihre eigenen Codierungen. Für wen ist die Kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="236"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="228"/>
         <source>Write the coder copy</source>
         <translation>Kopie für Codierende schreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="237"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-Projekt (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="246"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="238"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 für %2 geschrieben: %n Artikel, %3 Textstelle(n).</numerusform>
@@ -10210,17 +10233,17 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
         <source>Merge returned coder copies</source>
         <translation>Zurückgegebene Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="256"/>
         <source>Merge coder copies</source>
         <translation>Kopien zusammenführen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="265"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="257"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -10229,17 +10252,17 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="272"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): bereits zusammengeführt, nichts Neues.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="274"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="266"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 neu, %4 geändert (%5 gelöscht), %6 Konflikt(e).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="282"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="276"/>
         <source>Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits for you to decide (Lead → Merge conflicts…).</source>
         <translation>
             <numerusform>%n Kopie zusammengeführt; %1 Konflikt(e): die spätere Änderung bleibt, die andere wartet auf Ihre Entscheidung (Leitung → Konflikte beim Zusammenführen…).</numerusform>
@@ -10247,12 +10270,12 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="289"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="283"/>
         <source>&amp;Decide conflicts</source>
         <translation>Konflikte &amp;entscheiden</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="286"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="280"/>
         <source>Merged %n copy(ies).</source>
         <translation>
             <numerusform>%n Kopie zusammengeführt.</numerusform>
@@ -10263,7 +10286,7 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="923"/>
+        <location filename="../app/desktop/main_window.cpp" line="930"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
@@ -10415,13 +10438,13 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="373"/>
-        <location filename="../app/desktop/main_window.cpp" line="543"/>
+        <location filename="../app/desktop/main_window.cpp" line="544"/>
         <source>&amp;Undo</source>
         <translation>&amp;Rückgängig</translation>
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="376"/>
-        <location filename="../app/desktop/main_window.cpp" line="546"/>
+        <location filename="../app/desktop/main_window.cpp" line="547"/>
         <source>&amp;Redo</source>
         <translation>&amp;Wiederholen</translation>
     </message>
@@ -10581,52 +10604,52 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <translation>Es wurde niemand zum Codieren ausgewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="525"/>
+        <location filename="../app/desktop/main_window.cpp" line="526"/>
         <source>Span</source>
         <translation>Textstelle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="526"/>
+        <location filename="../app/desktop/main_window.cpp" line="527"/>
         <source>Codebook</source>
         <translation>Codebuch</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="543"/>
+        <location filename="../app/desktop/main_window.cpp" line="544"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Rückgängig: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="546"/>
+        <location filename="../app/desktop/main_window.cpp" line="547"/>
         <source>&amp;Redo %1</source>
         <translation>&amp;Wiederholen: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="606"/>
+        <location filename="../app/desktop/main_window.cpp" line="613"/>
         <source>The team server asks for your password to sync. Your work stays in this file until it can be sent.</source>
         <translation>Der Teamserver verlangt zum Synchronisieren Ihr Passwort. Ihre Arbeit bleibt in dieser Datei, bis sie gesendet werden kann.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="608"/>
+        <location filename="../app/desktop/main_window.cpp" line="615"/>
         <source>Enter &amp;password…</source>
         <translation>&amp;Passwort eingeben…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="620"/>
+        <location filename="../app/desktop/main_window.cpp" line="627"/>
         <source>Team server password</source>
         <translation>Passwort des Teamservers</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="621"/>
+        <location filename="../app/desktop/main_window.cpp" line="628"/>
         <source>Password of %1 on the team server:</source>
         <translation>Passwort von %1 auf dem Teamserver:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="757"/>
+        <location filename="../app/desktop/main_window.cpp" line="764"/>
         <source>Every article in the list is done.</source>
         <translation>Alle Artikel in der Liste sind erledigt.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="779"/>
+        <location filename="../app/desktop/main_window.cpp" line="786"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n Artikel enthält „%1“.</numerusform>
@@ -10634,127 +10657,127 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="785"/>
+        <location filename="../app/desktop/main_window.cpp" line="792"/>
         <source>New project</source>
         <translation>Neues Projekt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="795"/>
+        <location filename="../app/desktop/main_window.cpp" line="802"/>
         <source>Cannot create project</source>
         <translation>Projekt kann nicht erstellt werden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="807"/>
+        <location filename="../app/desktop/main_window.cpp" line="814"/>
         <source>Import articles</source>
         <translation>Artikel importieren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="808"/>
+        <location filename="../app/desktop/main_window.cpp" line="815"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikel (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="854"/>
+        <location filename="../app/desktop/main_window.cpp" line="861"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Wählen Sie einen Artikel&lt;/h3&gt;&lt;p&gt;Wählen Sie links in der Liste einen Artikel, um mit dem Codieren zu beginnen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="857"/>
+        <location filename="../app/desktop/main_window.cpp" line="864"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch keine Artikel&lt;/h3&gt;&lt;p&gt;Importieren Sie die Artikel der Studie: reiner Text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- oder Atom-Feeds, NITF oder NewsML-G2. Weisen Sie sie dann unter Leitung → Studiendesign Codierenden zu.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="862"/>
+        <location filename="../app/desktop/main_window.cpp" line="869"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Noch nichts zu codieren&lt;/h3&gt;&lt;p&gt;In diesem Projekt sind Ihnen keine Artikel zugewiesen. Ihre Leitung weist sie zu; öffnen Sie danach das Projekt erneut oder die Kopie, die sie Ihnen schickt.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="894"/>
+        <location filename="../app/desktop/main_window.cpp" line="901"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>Die Sprache wechselt beim nächsten Start von Fourfold.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="907"/>
+        <location filename="../app/desktop/main_window.cpp" line="914"/>
         <source>Not saved: %1. %2</source>
         <translation>Nicht gespeichert: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="908"/>
+        <location filename="../app/desktop/main_window.cpp" line="915"/>
         <source>&amp;Retry</source>
         <translation>&amp;Erneut versuchen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="914"/>
+        <location filename="../app/desktop/main_window.cpp" line="921"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="924"/>
+        <location filename="../app/desktop/main_window.cpp" line="931"/>
         <source>No project open</source>
         <translation>Kein Projekt geöffnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="928"/>
+        <location filename="../app/desktop/main_window.cpp" line="935"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="928"/>
+        <location filename="../app/desktop/main_window.cpp" line="935"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="930"/>
+        <location filename="../app/desktop/main_window.cpp" line="937"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — schreibgeschützt, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="932"/>
+        <location filename="../app/desktop/main_window.cpp" line="939"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — Codieren als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="936"/>
+        <location filename="../app/desktop/main_window.cpp" line="943"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lesen als %1 · %2 · schreibgeschützte Datei: nichts wird gespeichert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="939"/>
+        <location filename="../app/desktop/main_window.cpp" line="946"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Codieren als %1 · %2 · Leitung: alle Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="940"/>
+        <location filename="../app/desktop/main_window.cpp" line="947"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Codieren als %1 · %2 · blind: nur eigene Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="948"/>
+        <location filename="../app/desktop/main_window.cpp" line="955"/>
         <source>The comparison window lists its own keys with %1.</source>
         <translation>Das Vergleichsfenster listet seine eigenen Tasten mit %1 auf.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="952"/>
+        <location filename="../app/desktop/main_window.cpp" line="959"/>
         <source>Keyboard shortcuts</source>
         <translation>Tastenkürzel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="874"/>
+        <location filename="../app/desktop/main_window.cpp" line="881"/>
         <source>Open project</source>
         <translation>Projekt öffnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="785"/>
-        <location filename="../app/desktop/main_window.cpp" line="874"/>
+        <location filename="../app/desktop/main_window.cpp" line="792"/>
+        <location filename="../app/desktop/main_window.cpp" line="881"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-Projekte (*.fourfold)</translation>
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="146"/>
-        <location filename="../app/desktop/main_window.cpp" line="639"/>
-        <location filename="../app/desktop/main_window.cpp" line="800"/>
-        <location filename="../app/desktop/main_window.cpp" line="878"/>
-        <location filename="../app/desktop/main_window.cpp" line="887"/>
+        <location filename="../app/desktop/main_window.cpp" line="646"/>
+        <location filename="../app/desktop/main_window.cpp" line="807"/>
+        <location filename="../app/desktop/main_window.cpp" line="885"/>
+        <location filename="../app/desktop/main_window.cpp" line="894"/>
         <source>Cannot open project</source>
         <translation>Projekt kann nicht geöffnet werden</translation>
     </message>
@@ -10986,7 +11009,7 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
     </message>
     <message>
         <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="180"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="182"/>
         <source>Done</source>
         <translation>Erledigt</translation>
     </message>
@@ -11041,17 +11064,17 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <translation>Standardmäßig aus: Zeit wird nur über alle Codierenden summiert angezeigt. Zu erfassen und anzuzeigen, wie lange jede Person arbeitet, kann als Beschäftigtenüberwachung gelten, die das Einverständnis der Codierenden oder die Zustimmung eines Betriebsrats erfordern kann. Schalten Sie es nur ein, wenn Ihre Studie dieses Einverständnis hat; die Änderung wird im Protokoll des Projekts vermerkt. Nur die Leitung kann es umschalten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="179"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="181"/>
         <source>%1 of %2</source>
         <translation>%1 von %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="229"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="231"/>
         <source>&lt;b&gt;No assignments yet.&lt;/b&gt; Plan them in the study design window.</source>
         <translation>&lt;b&gt;Noch keine Zuweisungen.&lt;/b&gt; Planen Sie sie im Fenster Studiendesign.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="230"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="232"/>
         <source>&lt;b&gt;%1 of %2 assignments done&lt;/b&gt; · %3 of active coding time in all.</source>
         <translation>&lt;b&gt;%1 von %2 Zuweisungen erledigt&lt;/b&gt; · insgesamt %3 aktive Codierzeit.</translation>
     </message>
@@ -12087,252 +12110,252 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
 <context>
     <name>fourfold::StudyDesignWindow</name>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="113"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="117"/>
         <source>Study design — %1</source>
         <translation>Studiendesign — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="115"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="119"/>
         <source>Plan who codes what: draw the reliability sample that every reliability coder codes, deal the rest of the articles, and keep the codebook&apos;s versions in view. Nothing is written until you commit a plan.</source>
         <translation>Planen Sie, wer was codiert: Ziehen Sie die Reliabilitätsstichprobe, die alle Reliabilitätscodierenden codieren, verteilen Sie die übrigen Artikel und behalten Sie die Versionen des Codebuchs im Blick. Gespeichert wird erst, wenn Sie einen Plan festschreiben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="124"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="128"/>
         <source>Reliability sample</source>
         <translation>Reliabilitätsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="125"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="129"/>
         <source>Assign the rest</source>
         <translation>Rest zuweisen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="126"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="130"/>
         <source>Assignments</source>
         <translation>Zuweisungen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="127"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="131"/>
         <source>Codebook versions</source>
         <translation>Codebuchversionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="166"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="181"/>
         <source>lead</source>
         <translation>Leitung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="166"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="181"/>
         <source>coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="196"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="211"/>
         <source>The seed must be a whole number from 0 to 18446744073709551615; &quot;%1&quot; is not.</source>
         <translation>Der Seed muss eine ganze Zahl von 0 bis 18446744073709551615 sein; „%1“ ist das nicht.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="216"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="326"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="231"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="341"/>
         <source>Draw</source>
         <translation>Ziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="222"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="237"/>
         <source>A pilot sample is coded before the codebook is final and is not part of the reliability sample.</source>
         <translation>Eine Pilotstichprobe wird codiert, bevor das Codebuch endgültig ist, und gehört nicht zur Reliabilitätsstichprobe.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="224"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="793"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="239"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="805"/>
         <source>Phase:</source>
         <translation>Phase:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="229"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="795"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="244"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="807"/>
         <source>Articles:</source>
         <translation>Artikel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="231"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="246"/>
         <source>Share of the frame:</source>
         <translation>Anteil der Auswahlgesamtheit:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="254"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="269"/>
         <source>Size:</source>
         <translation>Umfang:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="258"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="273"/>
         <source>Simple random sample</source>
         <translation>Einfache Zufallsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="259"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="274"/>
         <source>Stratified by outlet</source>
         <translation>Geschichtet nach Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="260"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="275"/>
         <source>Stratified by language</source>
         <translation>Geschichtet nach Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="261"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="276"/>
         <source>Stratified by topic</source>
         <translation>Geschichtet nach Thema</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="262"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="277"/>
         <source>Stratified draws allocate the sample to each group in proportion to its size in the frame.</source>
         <translation>Geschichtete Ziehungen teilen die Stichprobe jeder Gruppe proportional zu ihrer Größe in der Auswahlgesamtheit zu.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="264"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="279"/>
         <source>Method:</source>
         <translation>Methode:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="266"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="281"/>
         <source>Leave near copies out of the sampling frame</source>
         <translation>Beinahe-Kopien aus der Auswahlgesamtheit auslassen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="269"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="284"/>
         <source>An article found at import to be a near copy of an older one (the same story with small edits) is not drawn; the older article stays in the frame.</source>
         <translation>Ein Artikel, der beim Import als Beinahe-Kopie eines älteren erkannt wurde (dieselbe Geschichte mit kleinen Änderungen), wird nicht gezogen; der ältere Artikel bleibt in der Auswahlgesamtheit.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="278"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="634"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="293"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="646"/>
         <source>Seed</source>
         <translation>Seed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="280"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="295"/>
         <source>New seed</source>
         <translation>Neuer Seed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="285"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="636"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="300"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="648"/>
         <source>Seed:</source>
         <translation>Seed:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="286"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="301"/>
         <source>The seed is recorded with the draw: the same seed on the same project draws the same articles on any computer.</source>
         <translation>Der Seed wird mit der Ziehung gespeichert: Derselbe Seed zieht im selben Projekt auf jedem Computer dieselben Artikel.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="292"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="307"/>
         <source>Reliability coders</source>
         <translation>Reliabilitätscodierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="294"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="309"/>
         <source>Coded by all of:</source>
         <translation>Codiert von allen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="296"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="311"/>
         <source>Minimum sample (Krippendorff)</source>
         <translation>Mindeststichprobe (Krippendorff)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="305"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="320"/>
         <source>The smallest alpha you would still accept: 0.800 for firm conclusions, 0.667 for tentative ones (Krippendorff).</source>
         <translation>Das kleinste Alpha, das Sie noch akzeptieren würden: 0.800 für belastbare Schlüsse, 0.667 für vorläufige (Krippendorff).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="307"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="322"/>
         <source>α_min:</source>
         <translation>α_min:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="312"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="327"/>
         <source>Significance level:</source>
         <translation>Signifikanzniveau:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="320"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="335"/>
         <source>The expected share of the rarest value: 0.25 when four values are equally frequent.</source>
         <translation>Der erwartete Anteil des seltensten Werts: 0.25, wenn vier Werte gleich häufig sind.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="322"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="337"/>
         <source>Rarest value&apos;s share:</source>
         <translation>Anteil seltenster Wert:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="328"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="343"/>
         <source>Draw the sample and show it; nothing is written yet.</source>
         <translation>Stichprobe ziehen und anzeigen; noch wird nichts gespeichert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="329"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="344"/>
         <source>Commit the draw</source>
         <translation>Ziehung festschreiben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="331"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="346"/>
         <source>Assign the drawn articles to every chosen coder and record the draw with its seed.</source>
         <translation>Die gezogenen Artikel allen gewählten Codierenden zuweisen und die Ziehung mit ihrem Seed speichern.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="382"/>
         <source>Stratum</source>
         <translation>Schicht</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="382"/>
         <source>In the frame</source>
         <translation>In der Auswahlgesamtheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="382"/>
         <source>Drawn</source>
         <translation>Gezogen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="369"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="384"/>
         <source>Drawn articles:</source>
         <translation>Gezogene Artikel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="372"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="387"/>
         <source>Drawn articles</source>
         <translation>Gezogene Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="430"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="445"/>
         <source>&lt;b&gt;No sample is drawn yet for the phase %1.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
         <translation>&lt;b&gt;Für die Phase %1 ist noch keine Stichprobe gezogen.&lt;/b&gt; Wählen Sie Umfang, Methode, Seed und Codierende und drücken Sie dann &lt;i&gt;Ziehen&lt;/i&gt;, um die Stichprobe zu sehen und ob sie groß genug ist.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="514"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="526"/>
         <source>simple random sample</source>
         <translation>einfache Zufallsstichprobe</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="516"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="528"/>
         <source>stratified by outlet</source>
         <translation>geschichtet nach Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="518"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="530"/>
         <source>stratified by language</source>
         <translation>geschichtet nach Sprache</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="520"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="532"/>
         <source>stratified by topic</source>
         <translation>geschichtet nach Thema</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="533"/>
         <source>%n article(s) of a frame of %1, %2, seed %3, coded by %4.</source>
         <translation>
             <numerusform>%n Artikel aus einer Auswahlgesamtheit von %1, %2, Seed %3, codiert von %4.</numerusform>
@@ -12340,42 +12363,42 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="529"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="541"/>
         <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded; it can be withdrawn until someone codes one of its articles, and then drawn again.</source>
         <translation>&lt;b&gt;Stichprobe der Phase %1 gezogen am %2.&lt;/b&gt; %3 Die Ziehung ist gespeichert; sie kann zurückgezogen werden, bis jemand einen ihrer Artikel codiert, und dann neu gezogen werden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="535"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="547"/>
         <source>&lt;b&gt;Planned draw, not yet committed.&lt;/b&gt; %1 Press &lt;i&gt;Commit the draw&lt;/i&gt; to assign it.</source>
         <translation>&lt;b&gt;Geplante Ziehung, noch nicht festgeschrieben.&lt;/b&gt; %1 Drücken Sie &lt;i&gt;Ziehung festschreiben&lt;/i&gt;, um sie zuzuweisen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="544"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="556"/>
         <source>No minimum sample can be computed for these settings.</source>
         <translation>Für diese Einstellungen lässt sich keine Mindeststichprobe berechnen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="546"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="558"/>
         <source>&lt;b&gt;Krippendorff&apos;s minimum: %1 values&lt;/b&gt; per variable for α_min = %2 at p = %3, with the rarest value at %4 %.</source>
         <translation>&lt;b&gt;Krippendorffs Minimum: %1 Werte&lt;/b&gt; je Variable für α_min = %2 bei p = %3, mit dem seltensten Wert bei %4 %.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="555"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="567"/>
         <source>Unit</source>
         <translation>Einheit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="555"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="567"/>
         <source>Values the draw delivers</source>
         <translation>Werte aus der Ziehung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="559"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="571"/>
         <source>✓ enough</source>
         <translation>✓ genug</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="560"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="572"/>
         <source>✗ %n short</source>
         <translation>
             <numerusform>✗ %n zu wenig</numerusform>
@@ -12383,103 +12406,103 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="568"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="580"/>
         <source>Article-level items</source>
         <translation>Items auf Artikelebene</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="569"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="581"/>
         <source>Paragraphs</source>
         <translation>Absätze</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="570"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="582"/>
         <source>Sentences</source>
         <translation>Sätze</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="573"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="585"/>
         <source>Values are units × coders. For spans, count the codings of each function: a rare function (often the remedy) may need a larger or stratified sample.</source>
         <translation>Werte sind Einheiten × Codierende. Zählen Sie bei Textstellen die Codierungen jeder Funktion: Eine seltene Funktion (oft die Lösung) kann eine größere oder geschichtete Stichprobe erfordern.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="610"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="622"/>
         <source>Deal the rest</source>
         <translation>Rest verteilen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="612"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="624"/>
         <source>Every article with no assignment yet goes to production coding, shuffled with the seed and dealt in turn.</source>
         <translation>Jeder noch nicht zugewiesene Artikel geht in die Hauptcodierung, mit dem Seed gemischt und reihum verteilt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="618"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="630"/>
         <source>Single-coded: one coder per article</source>
         <translation>Einfach codiert: eine Person je Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="621"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="633"/>
         <source>Double-coded: two coders per article, pairs rotating</source>
         <translation>Doppelt codiert: zwei Personen je Artikel, wechselnde Paare</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="638"/>
         <source>Coding:</source>
         <translation>Codierung:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="629"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="641"/>
         <source>Production coders</source>
         <translation>Codierende der Hauptcodierung</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="631"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="801"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="643"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="813"/>
         <source>Coders:</source>
         <translation>Codierende:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="638"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="650"/>
         <source>Plan</source>
         <translation>Planen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="640"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="652"/>
         <source>Assign</source>
         <translation>Zuweisen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="660"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="672"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="786"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="660"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="763"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="672"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="775"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="786"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Coder</source>
         <translation>Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="679"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="691"/>
         <source>Press &lt;i&gt;Plan&lt;/i&gt; to see who would code which article.</source>
         <translation>Drücken Sie &lt;i&gt;Planen&lt;/i&gt;, um zu sehen, wer welchen Artikel codieren würde.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="719"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="731"/>
         <source>Every article is assigned already: there is no rest to deal.</source>
         <translation>Jeder Artikel ist bereits zugewiesen: Es gibt keinen Rest zu verteilen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="724"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="736"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="725"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="737"/>
         <source>&lt;b&gt;Planned, not yet assigned:&lt;/b&gt; %n article(s); load per coder %1. Press &lt;i&gt;Assign&lt;/i&gt; to write the plan.</source>
         <translation>
             <numerusform>&lt;b&gt;Geplant, noch nicht zugewiesen:&lt;/b&gt; %n Artikel; Last je Person %1. Drücken Sie &lt;i&gt;Zuweisen&lt;/i&gt;, um den Plan zu speichern.</numerusform>
@@ -12487,163 +12510,163 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="747"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="760"/>
         <source>The rest is assigned.</source>
         <translation>Der Rest ist zugewiesen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="762"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
         <source>&lt;b&gt;Articles per coder and phase&lt;/b&gt; (done / assigned)</source>
         <translation>&lt;b&gt;Artikel je Person und Phase&lt;/b&gt; (erledigt / zugewiesen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="766"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="778"/>
         <source>Total</source>
         <translation>Gesamt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="773"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="785"/>
         <source>&lt;b&gt;Every assignment&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle Zuweisungen&lt;/b&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="786"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Phase</source>
         <translation>Phase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="786"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="783"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="795"/>
         <source>Give articles to coders</source>
         <translation>Artikel an Codierende geben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="785"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="797"/>
         <source>Every chosen coder gets every chosen article, e.g. the training articles that the lead has master-coded.</source>
         <translation>Alle gewählten Codierenden erhalten alle gewählten Artikel, z.&#xa0;B. die Trainingsartikel, für die die Leitung eine Mastercodierung erstellt hat.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="798"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="810"/>
         <source>Articles to give</source>
         <translation>Zu vergebende Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="804"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="816"/>
         <source>Coders to give to</source>
         <translation>Empfangende Codierende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="806"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="818"/>
         <source>Give</source>
         <translation>Vergeben</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="836"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="848"/>
         <source>done</source>
         <translation>erledigt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="837"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="849"/>
         <source>started</source>
         <translation>begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="838"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="850"/>
         <source>not started</source>
         <translation>nicht begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="894"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="907"/>
         <source>Every chosen coder has every chosen article in this phase already.</source>
         <translation>Alle gewählten Codierenden haben alle gewählten Artikel in dieser Phase bereits.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="929"/>
         <source>Version</source>
         <translation>Version</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="929"/>
         <source>Made</source>
         <translation>Erstellt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="929"/>
         <source>By</source>
         <translation>Von</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="929"/>
         <source>Note</source>
         <translation>Notiz</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="920"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="933"/>
         <source>Add a version from a file…</source>
         <translation>Version aus Datei hinzufügen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="922"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="935"/>
         <source>Read a codebook JSON file and store it as the next version, with a note that says what changed and why.</source>
         <translation>Eine Codebuch-JSON-Datei einlesen und als nächste Version speichern, mit einer Notiz, was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="935"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="948"/>
         <source>Compare version</source>
         <translation>Version vergleichen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="937"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="950"/>
         <source>with</source>
         <translation>mit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="945"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="958"/>
         <source>Changes between the versions</source>
         <translation>Änderungen zwischen den Versionen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="953"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="966"/>
         <source>Only those to re-check</source>
         <translation>Nur erneut zu prüfende</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Function</source>
         <translation>Funktion</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Made under</source>
         <translation>Erstellt unter</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Re-check</source>
         <translation>Erneut prüfen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1027"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1040"/>
         <source>yes — its function changed</source>
         <translation>ja — ihre Funktion hat sich geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1027"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1040"/>
         <source>no</source>
         <translation>nein</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1037"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1050"/>
         <source>&lt;b&gt;Every annotation was made under the current version (%1).&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle Annotationen wurden unter der aktuellen Version (%1) erstellt.&lt;/b&gt;</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1038"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1051"/>
         <source>&lt;b&gt;%n annotation(s) were made under an older version&lt;/b&gt; than the current one (%1); %2 of them belong to a function whose definition, rules, examples or attributes changed since, and should be re-checked.</source>
         <translation>
             <numerusform>&lt;b&gt;%n Annotation wurde unter einer älteren Version&lt;/b&gt; als der aktuellen (%1) erstellt; %2 davon gehören zu einer Funktion, deren Definition, Regeln, Beispiele oder Merkmale sich seither geändert haben, und sollten erneut geprüft werden.</numerusform>
@@ -12651,93 +12674,93 @@ Klicken Sie auf eine Textstelle im Text oder auf der Frame-Karte, um sie zu bear
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1053"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1066"/>
         <source>&lt;p&gt;There is only version %1: nothing to compare yet. Add a version when the codebook changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Es gibt nur Version %1: noch nichts zu vergleichen. Fügen Sie eine Version hinzu, wenn sich das Codebuch ändert.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1057"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1070"/>
         <source>&lt;p&gt;Choose two different versions to compare.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Wählen Sie zwei verschiedene Versionen zum Vergleichen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1066"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1079"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codebuchversion %1 → %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1068"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1081"/>
         <source>&lt;p&gt;No changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Keine Änderungen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1076"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1089"/>
         <source>added</source>
         <translation>hinzugefügt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1080"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1093"/>
         <source>removed</source>
         <translation>entfernt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1084"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1097"/>
         <source>changed</source>
         <translation>geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1109"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1122"/>
         <source>item removed:</source>
         <translation>Item entfernt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1113"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1126"/>
         <source>item added:</source>
         <translation>Item hinzugefügt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1117"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1130"/>
         <source>the order changed</source>
         <translation>die Reihenfolge hat sich geändert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1121"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1134"/>
         <source>was:</source>
         <translation>vorher:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1124"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1137"/>
         <source>now:</source>
         <translation>jetzt:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1136"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1140"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1149"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1153"/>
         <source>Add a codebook version</source>
         <translation>Codebuchversion hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1136"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1149"/>
         <source>Codebooks (*.json)</source>
         <translation>Codebücher (*.json)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1141"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1154"/>
         <source>What changed, and why?</source>
         <translation>Was hat sich geändert, und warum?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="334"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="349"/>
         <source>Withdraw the draw</source>
         <translation>Ziehung zurückziehen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="337"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="352"/>
         <source>Remove the committed draw and its assignments, so that the phase can be drawn again; only while nobody has coded any of its articles.</source>
         <translation>Die gespeicherte Ziehung und ihre Zuweisungen entfernen, damit die Phase neu gezogen werden kann; nur solange niemand einen ihrer Artikel codiert hat.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="499"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="512"/>
         <source>&lt;b&gt;The %1 sample was withdrawn&lt;/b&gt;: %n assignment(s) removed, the withdrawal recorded in the project&apos;s log. The phase can be drawn again.</source>
         <translation>
             <numerusform>&lt;b&gt;Die Stichprobe der Phase %1 wurde zurückgezogen&lt;/b&gt;: %n Zuweisung entfernt, das Zurückziehen im Protokoll des Projekts festgehalten. Die Phase kann neu gezogen werden.</numerusform>

@@ -160,7 +160,7 @@
     <message>
         <location filename="../core/project/annotation_edits.cpp" line="145"/>
         <location filename="../core/project/annotation_edits.cpp" line="178"/>
-        <location filename="../core/project/annotation_edits.cpp" line="357"/>
+        <location filename="../core/project/annotation_edits.cpp" line="358"/>
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Een wijziging die nooit is uitgevoerd, kan niet ongedaan worden gemaakt.</translation>
     </message>
@@ -210,17 +210,17 @@
         <translation>Antwoord ‘%1’</translation>
     </message>
     <message>
-        <location filename="../core/project/annotation_edits.cpp" line="301"/>
+        <location filename="../core/project/annotation_edits.cpp" line="302"/>
         <source>The answer could not be stored: its article or coder does not exist.</source>
         <translation>Het antwoord kon niet worden opgeslagen: het artikel of de codeur ervan bestaat niet.</translation>
     </message>
     <message>
-        <location filename="../core/project/annotation_edits.cpp" line="330"/>
+        <location filename="../core/project/annotation_edits.cpp" line="331"/>
         <source>Withdraw answer &quot;%1&quot;</source>
         <translation>Antwoord ‘%1’ intrekken</translation>
     </message>
     <message>
-        <location filename="../core/project/annotation_edits.cpp" line="344"/>
+        <location filename="../core/project/annotation_edits.cpp" line="345"/>
         <source>There is no answer to &quot;%1&quot; to withdraw.</source>
         <translation>Er is geen antwoord op ‘%1’ om in te trekken.</translation>
     </message>
@@ -1029,17 +1029,17 @@
 <context>
     <name>CodebookTable</name>
     <message>
-        <location filename="../core/store/codebook_table.cpp" line="57"/>
+        <location filename="../core/store/codebook_table.cpp" line="81"/>
         <source>codebook version %1</source>
         <translation>codeboekversie %1</translation>
     </message>
     <message>
-        <location filename="../core/store/codebook_table.cpp" line="92"/>
+        <location filename="../core/store/codebook_table.cpp" line="116"/>
         <source>The project has no codebook.</source>
         <translation>Het project heeft geen codeboek.</translation>
     </message>
     <message>
-        <location filename="../core/store/codebook_table.cpp" line="108"/>
+        <location filename="../core/store/codebook_table.cpp" line="132"/>
         <source>The project has no codebook version %1.</source>
         <translation>Het project heeft geen codeboekversie %1.</translation>
     </message>
@@ -1258,112 +1258,120 @@
 <context>
     <name>CoderCopiesText</name>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="69"/>
+        <location filename="../core/project/coder_copies.cpp" line="72"/>
         <source>Several coders are called &quot;%1&quot;; name the coder by pseudonym.</source>
         <translation>Meerdere codeurs heten ‘%1’; noem de codeur bij het pseudoniem.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="73"/>
+        <location filename="../core/project/coder_copies.cpp" line="76"/>
         <source>There is no coder with the pseudonym or name &quot;%1&quot; in the project.</source>
         <translation>Er is geen codeur met het pseudoniem of de naam ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="109"/>
+        <location filename="../core/project/coder_copies.cpp" line="112"/>
         <source>%1 (copy for %2)</source>
         <translation>%1 (kopie voor %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="166"/>
+        <location filename="../core/project/coder_copies.cpp" line="169"/>
         <source>%1 is not a Fourfold project file; it was not merged.</source>
         <translation>%1 is geen Fourfold-projectbestand; het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="169"/>
+        <location filename="../core/project/coder_copies.cpp" line="172"/>
         <source>%1 was written by a newer Fourfold (schema version %2); it was not merged.</source>
         <translation>%1 is geschreven door een nieuwere Fourfold (schemaversie %2); het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="178"/>
+        <location filename="../core/project/coder_copies.cpp" line="181"/>
         <source>%1 is a project file but not a coder copy; it was not merged.</source>
         <translation>%1 is een projectbestand, maar geen codeurskopie; het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="183"/>
+        <location filename="../core/project/coder_copies.cpp" line="186"/>
         <source>%1 is a coder copy of another project (%2), not of this one (%3); it was not merged.</source>
         <translation>%1 is een codeurskopie van een ander project (%2), niet van dit project (%3); het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="192"/>
+        <location filename="../core/project/coder_copies.cpp" line="195"/>
         <source>The coder of %1 is no longer in the project; it was not merged.</source>
         <translation>De codeur van %1 zit niet meer in het project; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="204"/>
+        <location filename="../core/project/coder_copies.cpp" line="207"/>
         <source>%1 holds article &quot;%2&quot;, which is not in the project; it was not merged.</source>
         <translation>%1 bevat het artikel ‘%2’, dat niet in het project staat; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="210"/>
+        <location filename="../core/project/coder_copies.cpp" line="213"/>
         <source>The text of article &quot;%1&quot; in %2 differs from the project&apos;s (SHA-256 %3 instead of %4): the copy was changed outside Fourfold; it was not merged.</source>
         <translation>De tekst van artikel ‘%1’ in %2 verschilt van die van het project (SHA-256 %3 in plaats van %4): de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="224"/>
+        <location filename="../core/project/coder_copies.cpp" line="227"/>
         <source>%1 holds a codebook version (%2) that is not in the project; it was not merged.</source>
         <translation>%1 bevat een codeboekversie (%2) die niet in het project staat; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="233"/>
+        <location filename="../core/project/coder_copies.cpp" line="236"/>
         <source>%1 holds %2 annotations, answers or assignments of people other than its coder %3; it was not merged.</source>
         <translation>%1 bevat %2 annotaties, antwoorden of toewijzingen van anderen dan de codeur %3; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="369"/>
+        <location filename="../core/project/coder_copies.cpp" line="372"/>
         <source>%1 names a copy (%2) that this project never handed out; it was not merged.</source>
         <translation>%1 noemt een kopie (%2) die dit project nooit heeft uitgegeven; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="391"/>
+        <location filename="../core/project/coder_copies.cpp" line="429"/>
         <source>There is no coder copy %1.</source>
         <translation>Er is geen codeurskopie %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="517"/>
+        <location filename="../core/project/coder_copies.cpp" line="581"/>
         <source>The coding time in %1 would overflow the project&apos;s; it was not merged.</source>
         <translation>De codeertijd in %1 zou die van het project laten overlopen; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="573"/>
+        <location filename="../core/project/coder_copies.cpp" line="648"/>
         <source>%1 is itself a coder copy; hand out copies from the main project.</source>
         <translation>%1 is zelf een codeurskopie; geef kopieën uit vanuit het hoofdproject.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="580"/>
+        <location filename="../core/project/coder_copies.cpp" line="655"/>
         <source>%1 already exists; choose another name for the coder copy.</source>
         <translation>%1 bestaat al; kies een andere naam voor de codeurskopie.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="588"/>
+        <location filename="../core/project/coder_copies.cpp" line="663"/>
         <source>Coder %1 has no assigned articles; assign some before handing out a copy.</source>
         <translation>Aan codeur %1 zijn geen artikelen toegewezen; wijs er een aantal toe voordat u een kopie uitgeeft.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="649"/>
+        <location filename="../core/project/coder_copies.cpp" line="724"/>
         <source>%1 is itself a coder copy; merge copies into the main project.</source>
         <translation>%1 is zelf een codeurskopie; voeg kopieën samen in het hoofdproject.</translation>
     </message>
+    <message numerus="yes">
+        <location filename="../core/project/coder_copies.cpp" line="751"/>
+        <source>%1 coded %n article(s) in the copy after the assignment was withdrawn in the project (a withdrawn draw): %2. The codings were merged; the assignments stay withdrawn and do not count. Decide each in the merge conflicts: keep the withdrawal, or take %1&apos;s version to assign the article again.</source>
+        <translation>
+            <numerusform>%1 heeft %n artikel in de kopie gecodeerd nadat de toewijzing in het project was ingetrokken (een ingetrokken trekking): %2. De coderingen zijn samengevoegd; de toewijzing blijft ingetrokken en telt niet mee. Beslis elk geval bij de samenvoegconflicten: de intrekking behouden, of de versie van %1 overnemen om het artikel opnieuw toe te wijzen.</numerusform>
+            <numerusform>%1 heeft %n artikelen in de kopie gecodeerd nadat hun toewijzingen in het project waren ingetrokken (een ingetrokken trekking): %2. De coderingen zijn samengevoegd; de toewijzingen blijven ingetrokken en tellen niet mee. Beslis elk geval bij de samenvoegconflicten: de intrekking behouden, of de versie van %1 overnemen om het artikel opnieuw toe te wijzen.</numerusform>
+        </translation>
+    </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="677"/>
+        <location filename="../core/project/coder_copies.cpp" line="779"/>
         <source>Keep &quot;mine&quot; (the version the project holds) or &quot;theirs&quot; (the version that lost), not &quot;%1&quot;.</source>
         <translation>Behoud ‘mine’ (de versie in het project) of ‘theirs’ (de versie die verloor), niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="694"/>
+        <location filename="../core/project/coder_copies.cpp" line="796"/>
         <source>There is no open conflict %1.</source>
         <translation>Er is geen open conflict %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="697"/>
+        <location filename="../core/project/coder_copies.cpp" line="799"/>
         <source>%1 has %2 open conflicts (from several copies); name the conflict&apos;s uuid.</source>
         <translation>%1 heeft %2 open conflicten (uit meerdere kopieën); noem de uuid van het conflict.</translation>
     </message>
@@ -1396,78 +1404,78 @@
         <translation>veld ‘%1’ moet een niet-lege tekenreeks zijn.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="75"/>
+        <location filename="../core/project/coding_import.cpp" line="81"/>
         <source>Cannot read %1: %2</source>
         <translation>Kan %1 niet lezen: %2</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="120"/>
+        <location filename="../core/project/coding_import.cpp" line="127"/>
         <source>the line is longer than %1 MiB</source>
         <translation>de regel is langer dan %1 MiB</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="139"/>
+        <location filename="../core/project/coding_import.cpp" line="146"/>
         <source>not a JSON object (%1).</source>
         <translation>geen JSON-object (%1).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="142"/>
+        <location filename="../core/project/coding_import.cpp" line="149"/>
         <source>another JSON value</source>
         <translation>een andere JSON-waarde</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="147"/>
+        <location filename="../core/project/coding_import.cpp" line="154"/>
         <source>unknown field &quot;%1&quot; (expected article, coder, function, quote, occurrence, attributes, note, confidence, gold, rationale, item, value).</source>
         <translation>onbekend veld ‘%1’ (verwacht: article, coder, function, quote, occurrence, attributes, note, confidence, gold, rationale, item, value).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="157"/>
+        <location filename="../core/project/coding_import.cpp" line="164"/>
         <source>field &quot;%1&quot; must be %2.</source>
         <translation>veld ‘%1’ moet %2 zijn.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="162"/>
+        <location filename="../core/project/coding_import.cpp" line="169"/>
         <source>an object</source>
         <translation>een object</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="163"/>
-        <location filename="../core/project/coding_import.cpp" line="167"/>
+        <location filename="../core/project/coding_import.cpp" line="170"/>
+        <location filename="../core/project/coding_import.cpp" line="174"/>
         <source>text</source>
         <translation>tekst</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="165"/>
+        <location filename="../core/project/coding_import.cpp" line="172"/>
         <source>a number from 0 to 1</source>
         <translation>een getal van 0 tot 1</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="176"/>
+        <location filename="../core/project/coding_import.cpp" line="184"/>
         <source>unknown coder &quot;%1&quot;.</source>
         <translation>onbekende codeur ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="184"/>
+        <location filename="../core/project/coding_import.cpp" line="192"/>
         <source>unknown article &quot;%1&quot;.</source>
         <translation>onbekend artikel ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="244"/>
+        <location filename="../core/project/coding_import.cpp" line="252"/>
         <source>unknown function &quot;%1&quot; (expected problem, cause, evaluation or remedy).</source>
         <translation>onbekende functie ‘%1’ (verwacht: problem, cause, evaluation of remedy).</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="255"/>
+        <location filename="../core/project/coding_import.cpp" line="263"/>
         <source>field &quot;occurrence&quot; must be a whole number from 1.</source>
         <translation>veld ‘occurrence’ moet een geheel getal vanaf 1 zijn.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="262"/>
+        <location filename="../core/project/coding_import.cpp" line="270"/>
         <source>the quote &quot;%1&quot; does not occur %2 time(s) in article &quot;%3&quot;.</source>
         <translation>het citaat ‘%1’ komt niet %2 keer voor in artikel ‘%3’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coding_import.cpp" line="278"/>
+        <location filename="../core/project/coding_import.cpp" line="286"/>
         <source>field &quot;gold&quot; must be true or false.</source>
         <translation>veld ‘gold’ moet true of false zijn.</translation>
     </message>
@@ -2990,7 +2998,7 @@
     </message>
     <message numerus="yes">
         <location filename="../core/agreement/project_units.cpp" line="92"/>
-        <location filename="../core/agreement/project_units.cpp" line="422"/>
+        <location filename="../core/agreement/project_units.cpp" line="433"/>
         <source>Reliability needs at least two coders; the selection has %n.</source>
         <translation>
             <numerusform>Betrouwbaarheid vereist ten minste twee codeurs; de selectie heeft er %n.</numerusform>
@@ -3018,17 +3026,17 @@
         <translation>Fragmenteenheden vergelijken een kenmerk: noem één functie en een van haar kenmerken.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="399"/>
+        <location filename="../core/agreement/project_units.cpp" line="410"/>
         <source>None of the selected coders has marked any of the selected articles done.</source>
         <translation>Geen van de gekozen codeurs heeft een van de gekozen artikelen als klaar gemarkeerd.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="475"/>
+        <location filename="../core/agreement/project_units.cpp" line="486"/>
         <source>No article was marked done by all of the selected coders, so there is no common continuum.</source>
         <translation>Geen enkel artikel is door alle gekozen codeurs als klaar gemarkeerd, dus er is geen gemeenschappelijk continuüm.</translation>
     </message>
     <message>
-        <location filename="../core/agreement/project_units.cpp" line="494"/>
+        <location filename="../core/agreement/project_units.cpp" line="505"/>
         <source>the codebook has no attribute &quot;%1&quot; for %2.</source>
         <translation>het codeboek heeft geen kenmerk ‘%1’ voor %2.</translation>
     </message>
@@ -3136,52 +3144,52 @@
 <context>
     <name>ReportDataText</name>
     <message>
-        <location filename="../app/report/report_data.cpp" line="68"/>
+        <location filename="../app/report/report_data.cpp" line="66"/>
         <source>a sample stratified by %1</source>
         <translation>een naar %1 gestratificeerde steekproef</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="69"/>
+        <location filename="../app/report/report_data.cpp" line="67"/>
         <source>a simple random sample</source>
         <translation>een enkelvoudige aselecte steekproef</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="70"/>
+        <location filename="../app/report/report_data.cpp" line="68"/>
         <source>The %1 articles of the %2 phase were drawn as %3 (seed %4) from a frame of %5 articles with no earlier assignment, on %6.</source>
         <translation>De %1 artikelen van fase %2 zijn getrokken als %3 (seed %4) uit een steekproefkader van %5 artikelen zonder eerdere toewijzing, op %6.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="189"/>
+        <location filename="../app/report/report_data.cpp" line="201"/>
         <source>The report&apos;s unit must be paragraph, sentence or token.</source>
         <translation>De eenheid van het rapport moet paragraph, sentence of token zijn.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="194"/>
+        <location filename="../app/report/report_data.cpp" line="206"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="195"/>
+        <location filename="../app/report/report_data.cpp" line="207"/>
         <source>Reliability report: %1</source>
         <translation>Betrouwbaarheidsrapport: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="242"/>
+        <location filename="../app/report/report_data.cpp" line="249"/>
         <source>All four functions (MASI)</source>
         <translation>Alle vier functies (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="242"/>
+        <location filename="../app/report/report_data.cpp" line="249"/>
         <source>All four (MASI)</source>
         <translation>Alle vier (MASI)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="285"/>
+        <location filename="../app/report/report_data.cpp" line="297"/>
         <source>Spans on the continuum</source>
         <translation>Fragmenten op het continuüm</translation>
     </message>
     <message>
-        <location filename="../app/report/report_data.cpp" line="286"/>
+        <location filename="../app/report/report_data.cpp" line="298"/>
         <source>continuum</source>
         <translation>continuüm</translation>
     </message>
@@ -3189,85 +3197,85 @@
 <context>
     <name>ReportDocumentText</name>
     <message>
-        <location filename="../app/report/report_document.cpp" line="149"/>
-        <location filename="../app/report/report_document.cpp" line="151"/>
+        <location filename="../app/report/report_document.cpp" line="139"/>
         <location filename="../app/report/report_frames_section.cpp" line="77"/>
-        <location filename="../app/report/report_markup.cpp" line="80"/>
+        <location filename="../app/report/report_markup.cpp" line="51"/>
+        <location filename="../app/report/report_markup.cpp" line="90"/>
         <source>undefined</source>
         <translation>niet gedefinieerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="82"/>
+        <location filename="../app/report/report_markup.cpp" line="92"/>
         <source>reliable</source>
         <translation>betrouwbaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="84"/>
+        <location filename="../app/report/report_markup.cpp" line="94"/>
         <source>tentative</source>
         <translation>voorlopig</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="88"/>
+        <location filename="../app/report/report_markup.cpp" line="98"/>
         <source>unreliable</source>
         <translation>onbetrouwbaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="125"/>
+        <location filename="../app/report/report_markup.cpp" line="135"/>
         <source>paragraph</source>
         <translation>alinea</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="125"/>
+        <location filename="../app/report/report_markup.cpp" line="135"/>
         <source>paragraphs</source>
         <translation>alinea&apos;s</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="127"/>
+        <location filename="../app/report/report_markup.cpp" line="137"/>
         <source>token</source>
         <translation>token</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="127"/>
+        <location filename="../app/report/report_markup.cpp" line="137"/>
         <source>tokens</source>
         <translation>tokens</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="129"/>
+        <location filename="../app/report/report_markup.cpp" line="139"/>
         <source>sentence</source>
         <translation>zin</translation>
     </message>
     <message>
-        <location filename="../app/report/report_markup.cpp" line="129"/>
+        <location filename="../app/report/report_markup.cpp" line="139"/>
         <source>sentences</source>
         <translation>zinnen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="41"/>
+        <location filename="../app/report/report_document.cpp" line="40"/>
         <source>unit: %1</source>
         <translation>eenheid: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="42"/>
+        <location filename="../app/report/report_document.cpp" line="41"/>
         <source>phase: %1</source>
         <translation>fase: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="44"/>
+        <location filename="../app/report/report_document.cpp" line="43"/>
         <source>all phases</source>
         <translation>alle fasen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="45"/>
+        <location filename="../app/report/report_document.cpp" line="44"/>
         <source>bootstrap: %1 replicates, seed %2</source>
         <translation>bootstrap: %1 replicaties, seed %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="49"/>
+        <location filename="../app/report/report_document.cpp" line="48"/>
         <source>Inter-coder reliability</source>
         <translation>Intercodeursbetrouwbaarheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="52"/>
+        <location filename="../app/report/report_document.cpp" line="51"/>
         <source>Project “%1” · written %2 by %3 · %4</source>
         <translation>Project ‘%1’ · geschreven %2 door %3 · %4</translation>
     </message>
@@ -3337,437 +3345,437 @@
         <translation>beschrijf de training en de geschatte duur in uren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="83"/>
+        <location filename="../app/report/report_method_text.cpp" line="86"/>
         <source>%1 α = %2</source>
         <translation>%1 α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="87"/>
+        <location filename="../app/report/report_method_text.cpp" line="91"/>
         <source> (95% CI %1)</source>
         <translation> (95%-BI %1)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="92"/>
+        <location filename="../app/report/report_method_text.cpp" line="96"/>
         <source>Each of Entman&apos;s (1993) four framing functions was coded as a span of text; for reliability, each function became a binary variable (present or absent) per %1, a %2 carrying a function when a coder&apos;s span of that function overlaps it. </source>
         <translation>Elk van de vier framingfuncties van Entman (1993) is gecodeerd als een tekstfragment; voor de betrouwbaarheid werd elke functie een binaire variabele (aanwezig of afwezig) per %1: een eenheid (%2) draagt een functie wanneer het fragment van een codeur met die functie ermee overlapt. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="97"/>
+        <location filename="../app/report/report_method_text.cpp" line="101"/>
         <source>We report Krippendorff&apos;s alpha (Krippendorff, 2004) because it handles any number of coders, missing data and any level of measurement (Hayes &amp; Krippendorff, 2007). </source>
         <translation>We rapporteren Krippendorffs alfa (Krippendorff, 2004) omdat die met elk aantal codeurs, ontbrekende gegevens en elk meetniveau overweg kan (Hayes &amp; Krippendorff, 2007). </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="101"/>
+        <location filename="../app/report/report_method_text.cpp" line="105"/>
         <source>Alpha was %1</source>
         <translation>Alfa was %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="103"/>
+        <location filename="../app/report/report_method_text.cpp" line="107"/>
         <source>; for the set of functions per %1, compared with the MASI distance (Passonneau, 2006), α = %2</source>
         <translation>; voor de verzameling functies per %1, vergeleken met de MASI-afstand (Passonneau, 2006), α = %2</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="110"/>
+        <location filename="../app/report/report_method_text.cpp" line="115"/>
         <source>Intervals are 95% percentile bootstrap intervals from %1 resamples of the units; the table also gives the interval from resampled pairable values (Hayes &amp; Krippendorff, 2007), which is narrower than its nominal level when more than two coders are compared. </source>
         <translation>De intervallen zijn 95%-percentiel-bootstrapintervallen uit %1 hersteekproeven van de eenheden; de tabel geeft ook het interval uit opnieuw getrokken paarbare waarden (Hayes &amp; Krippendorff, 2007), dat smaller is dan het nominale niveau wanneer meer dan twee codeurs worden vergeleken. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="117"/>
+        <location filename="../app/report/report_method_text.cpp" line="122"/>
         <source>Following Krippendorff (2004), variables with α&#xa0;≥&#xa0;0.800 are relied on and variables with 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 support tentative conclusions only. </source>
         <translation>In navolging van Krippendorff (2004) wordt op variabelen met α&#xa0;≥&#xa0;0.800 vertrouwd en ondersteunen variabelen met 0.667&#xa0;≤&#xa0;α&#xa0;&lt;&#xa0;0.800 alleen voorlopige conclusies. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="128"/>
+        <location filename="../app/report/report_method_text.cpp" line="133"/>
         <source>%1 (%2) α = %3</source>
         <translation>%1 (%2) α = %3</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="136"/>
+        <location filename="../app/report/report_method_text.cpp" line="139"/>
         <source>For the other variables alpha was: %1.</source>
         <translation>Voor de overige variabelen was alfa: %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="141"/>
+        <location filename="../app/report/report_method_text.cpp" line="144"/>
         <source>Disagreements were resolved by adjudication into a separate gold standard: %1 spans on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Verschillen zijn opgelost door beslissing in een aparte gouden standaard: %1 fragmenten in %2 artikelen, beslist door %3, %4 daarvan met een schriftelijke motivering. De onafhankelijke coderingen bleven ongewijzigd; alle bovenstaande cijfers komen daaruit. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="176"/>
+        <location filename="../app/report/report_method_text.cpp" line="180"/>
         <source>No adjudication is recorded in the project yet: %1. </source>
         <translation>In het project is nog geen beslissing vastgelegd: %1. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="177"/>
+        <location filename="../app/report/report_method_text.cpp" line="181"/>
         <source>say how disagreements were resolved, e.g. by discussion or by the lead</source>
         <translation>vermeld hoe verschillen zijn opgelost, bijv. door overleg of door de coördinator</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="181"/>
+        <location filename="../app/report/report_method_text.cpp" line="185"/>
         <source>Coding followed version %1 of the codebook (“%2”)</source>
         <translation>De codering volgde versie %1 van het codeboek (‘%2’)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="186"/>
+        <location filename="../app/report/report_method_text.cpp" line="190"/>
         <source>; %1 of %2 codings were made under an earlier version</source>
         <translation>; %1 van de %2 coderingen zijn gemaakt onder een eerdere versie</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="191"/>
+        <location filename="../app/report/report_method_text.cpp" line="196"/>
         <source>, which is available at %1.</source>
         <translation>, dat beschikbaar is op %1.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="192"/>
+        <location filename="../app/report/report_method_text.cpp" line="197"/>
         <source>where readers can obtain it</source>
         <translation>waar lezers het kunnen verkrijgen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="196"/>
+        <location filename="../app/report/report_method_text.cpp" line="201"/>
         <source>Highlighted brackets are for the authors to complete: the project does not record these facts.</source>
         <translation>Gemarkeerde haakjes vullen de auteurs zelf in: het project legt deze gegevens niet vast.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="214"/>
+        <location filename="../app/report/report_method_text.cpp" line="219"/>
         <source>Size of the reliability sample and how it was selected</source>
         <translation>Omvang van de betrouwbaarheidssteekproef en hoe die is geselecteerd</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="216"/>
+        <location filename="../app/report/report_method_text.cpp" line="221"/>
         <source>Relationship of the reliability sample to the full sample</source>
         <translation>Verhouding van de betrouwbaarheidssteekproef tot de volledige steekproef</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="218"/>
+        <location filename="../app/report/report_method_text.cpp" line="223"/>
         <source>Number of reliability coders</source>
         <translation>Aantal codeurs in de betrouwbaarheidstoets</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="219"/>
+        <location filename="../app/report/report_method_text.cpp" line="224"/>
         <source>Amount of coding conducted by each coder</source>
         <translation>Hoeveelheid codeerwerk per codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="220"/>
+        <location filename="../app/report/report_method_text.cpp" line="225"/>
         <source>Index or indices selected and why</source>
         <translation>Gekozen index of indices en waarom</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="221"/>
+        <location filename="../app/report/report_method_text.cpp" line="226"/>
         <source>Reliability for each variable, for each index</source>
         <translation>Betrouwbaarheid per variabele, per index</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="222"/>
+        <location filename="../app/report/report_method_text.cpp" line="227"/>
         <source>Amount of coder training required to reach reliability</source>
         <translation>Hoeveelheid codeurstraining die nodig was om betrouwbaarheid te bereiken</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="224"/>
+        <location filename="../app/report/report_method_text.cpp" line="229"/>
         <source>How disagreements were resolved</source>
         <translation>Hoe verschillen zijn opgelost</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="226"/>
+        <location filename="../app/report/report_method_text.cpp" line="231"/>
         <source>Where the codebook and coding instructions can be obtained</source>
         <translation>Waar het codeboek en de codeerinstructies te verkrijgen zijn</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="231"/>
+        <location filename="../app/report/report_method_text.cpp" line="236"/>
         <source>#</source>
         <translation>#</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="232"/>
+        <location filename="../app/report/report_method_text.cpp" line="237"/>
         <source>Item</source>
         <translation>Punt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="233"/>
+        <location filename="../app/report/report_method_text.cpp" line="238"/>
         <source>In this report</source>
         <translation>In dit rapport</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="242"/>
+        <location filename="../app/report/report_method_text.cpp" line="247"/>
         <source>filled in from the project</source>
         <translation>ingevuld uit het project</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="243"/>
+        <location filename="../app/report/report_method_text.cpp" line="248"/>
         <source>partly filled in; complete the bracket</source>
         <translation>deels ingevuld; vul de haakjes aan</translation>
     </message>
     <message>
+        <location filename="../app/report/report_sections.cpp" line="21"/>
         <location filename="../app/report/report_sections.cpp" line="23"/>
-        <location filename="../app/report/report_sections.cpp" line="25"/>
-        <location filename="../app/report/report_sections.cpp" line="108"/>
-        <location filename="../app/report/report_sections.cpp" line="193"/>
-        <location filename="../app/report/report_sections.cpp" line="233"/>
-        <location filename="../app/report/report_sections.cpp" line="370"/>
+        <location filename="../app/report/report_sections.cpp" line="109"/>
+        <location filename="../app/report/report_sections.cpp" line="198"/>
+        <location filename="../app/report/report_sections.cpp" line="242"/>
+        <location filename="../app/report/report_sections.cpp" line="399"/>
         <source>Variable</source>
         <translation>Variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="26"/>
+        <location filename="../app/report/report_sections.cpp" line="24"/>
         <source>Level</source>
         <translation>Niveau</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="27"/>
-        <location filename="../app/report/report_sections.cpp" line="195"/>
+        <location filename="../app/report/report_sections.cpp" line="25"/>
+        <location filename="../app/report/report_sections.cpp" line="200"/>
         <source>Units</source>
         <translation>Eenh.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="28"/>
-        <location filename="../app/report/report_sections.cpp" line="109"/>
+        <location filename="../app/report/report_sections.cpp" line="26"/>
+        <location filename="../app/report/report_sections.cpp" line="110"/>
         <source>Pairable values</source>
         <translation>Paarb. waarden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="29"/>
+        <location filename="../app/report/report_sections.cpp" line="27"/>
         <source>95% CI, units</source>
         <translation>95%-BI, eenheden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="30"/>
+        <location filename="../app/report/report_sections.cpp" line="28"/>
         <source>95% CI, pairs</source>
         <translation>95%-BI, paren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="31"/>
-        <location filename="../app/report/report_sections.cpp" line="196"/>
+        <location filename="../app/report/report_sections.cpp" line="29"/>
+        <location filename="../app/report/report_sections.cpp" line="201"/>
         <source>Agreement</source>
         <translation>Overeenst.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="32"/>
-        <location filename="../app/report/report_sections.cpp" line="289"/>
+        <location filename="../app/report/report_sections.cpp" line="30"/>
+        <location filename="../app/report/report_sections.cpp" line="306"/>
         <source>Verdict</source>
         <translation>Oordeel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="47"/>
+        <location filename="../app/report/report_sections.cpp" line="45"/>
         <source>not computed: %1</source>
         <translation>niet berekend: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="77"/>
+        <location filename="../app/report/report_sections.cpp" line="78"/>
         <source>Units: %1 (articles for article-level items; passages matched across coders for span attributes). Agreement: percent agreement, which is not chance-corrected and is never reported alone (Lombard et al., 2002). Units: units resampled, percentile interval (the interval to report); pairs: pairable values resampled with the expected disagreement held fixed (Hayes &amp; Krippendorff, 2007), too narrow with more than two coders.</source>
         <translation>Eenheden: %1 (artikelen voor items op artikelniveau; tussen codeurs gekoppelde passages voor kenmerken van fragmenten). Overeenstemming: procentuele overeenstemming, die niet voor toeval gecorrigeerd is en nooit alleen wordt gerapporteerd (Lombard et al., 2002). Eenheden: eenheden opnieuw getrokken, percentielinterval (het interval om te rapporteren); paren: paarbare waarden opnieuw getrokken met de verwachte onenigheid vastgehouden (Hayes &amp; Krippendorff, 2007), te smal bij meer dan twee codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="94"/>
+        <location filename="../app/report/report_sections.cpp" line="95"/>
         <source>Krippendorff&apos;s alpha per variable</source>
         <translation>Krippendorffs alfa per variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="95"/>
+        <location filename="../app/report/report_sections.cpp" line="96"/>
         <source>Krippendorff&apos;s alpha per variable (dots) with 95% bootstrap intervals: whiskers resample pairable values (Hayes &amp; Krippendorff, 2007), bands resample units. The lines mark 0.667 and 0.800 (Krippendorff, 2004).</source>
         <translation>Krippendorffs alfa per variabele (punten) met 95%-bootstrapintervallen: de snorharen trekken paarbare waarden opnieuw (Hayes &amp; Krippendorff, 2007), de banden trekken eenheden opnieuw. De lijnen markeren 0.667 en 0.800 (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="110"/>
+        <location filename="../app/report/report_sections.cpp" line="111"/>
         <source>Rarest value</source>
         <translation>Zeldzaamste waarde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="111"/>
+        <location filename="../app/report/report_sections.cpp" line="112"/>
         <source>Minimum for α ≥ 0.800</source>
         <translation>Minimum voor α ≥ 0.800</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="112"/>
+        <location filename="../app/report/report_sections.cpp" line="113"/>
         <source>Enough?</source>
         <translation>Genoeg?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="128"/>
+        <location filename="../app/report/report_sections.cpp" line="130"/>
         <source>yes</source>
         <translation>ja</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="129"/>
+        <location filename="../app/report/report_sections.cpp" line="131"/>
         <source>too few values</source>
         <translation>te weinig waarden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="132"/>
+        <location filename="../app/report/report_sections.cpp" line="134"/>
         <source>Krippendorff&apos;s (2004, §11.4) minimum number of pairable values for α ≥ 0.800 at p = 0.05, after Bloch &amp; Kraemer (1989), given the share of the rarest value.</source>
         <translation>Krippendorffs (2004, §11.4) minimale aantal paarbare waarden voor α ≥ 0.800 bij p = 0.05, naar Bloch &amp; Kraemer (1989), gegeven het aandeel van de zeldzaamste waarde.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="145"/>
+        <location filename="../app/report/report_sections.cpp" line="147"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="146"/>
+        <location filename="../app/report/report_sections.cpp" line="148"/>
         <source>Role</source>
         <translation>Rol</translation>
     </message>
     <message>
         <location filename="../app/report/report_frames_section.cpp" line="39"/>
-        <location filename="../app/report/report_sections.cpp" line="147"/>
+        <location filename="../app/report/report_sections.cpp" line="149"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="148"/>
+        <location filename="../app/report/report_sections.cpp" line="150"/>
         <source>Shared articles</source>
         <translation>Gedeelde artikelen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="149"/>
+        <location filename="../app/report/report_sections.cpp" line="151"/>
         <source>Spans</source>
         <translation>Fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="155"/>
+        <location filename="../app/report/report_sections.cpp" line="157"/>
         <source>Answers</source>
         <translation>Antwoorden</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="171"/>
+        <location filename="../app/report/report_sections.cpp" line="176"/>
         <source>Coders appear by pseudonym only. Articles: coded by the coder (assigned, or with a span or an answer); shared: also coded by another coder in this report.</source>
         <translation>Codeurs verschijnen alleen onder pseudoniem. Artikelen: door de codeur gecodeerd (toegewezen, of met een fragment of een antwoord); gedeeld: in dit rapport ook door een andere codeur gecodeerd.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="183"/>
+        <location filename="../app/report/report_sections.cpp" line="188"/>
         <source>Cohen&apos;s kappa per coder pair</source>
         <translation>Cohens kappa per codeurspaar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="184"/>
+        <location filename="../app/report/report_sections.cpp" line="189"/>
         <source>Cohen&apos;s kappa (Cohen, 1960) for each pair of coders and each function, on the %1 both coded. Darker is higher; hatched cells are undefined.</source>
         <translation>Cohens kappa (Cohen, 1960) voor elk paar codeurs en elke functie, op de %1 die beiden codeerden. Donkerder is hoger; gearceerde cellen zijn niet gedefinieerd.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="194"/>
+        <location filename="../app/report/report_sections.cpp" line="199"/>
         <source>Pair</source>
         <translation>Paar</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="197"/>
+        <location filename="../app/report/report_sections.cpp" line="202"/>
         <source>95% CI</source>
         <translation>95%-BI</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="219"/>
+        <location filename="../app/report/report_sections.cpp" line="228"/>
         <source>95% CI: large-sample interval with the standard error of Fleiss, Cohen &amp; Everitt (1969). A coder whose kappa is low with everyone else is worth a look before the coders are retrained.</source>
         <translation>95%-BI: interval voor grote steekproeven met de standaardfout van Fleiss, Cohen &amp; Everitt (1969). Een codeur wiens kappa met alle anderen laag is, verdient een nadere blik voordat de codeurs opnieuw worden getraind.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="234"/>
+        <location filename="../app/report/report_sections.cpp" line="243"/>
         <source>Fleiss&apos; κ</source>
         <translation>Fleiss&apos; κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="235"/>
+        <location filename="../app/report/report_sections.cpp" line="244"/>
         <source>Light&apos;s κ</source>
         <translation>Lights κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="236"/>
+        <location filename="../app/report/report_sections.cpp" line="245"/>
         <source>Cohen&apos;s κ</source>
         <translation>Cohens κ</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="237"/>
+        <location filename="../app/report/report_sections.cpp" line="246"/>
         <source>Scott&apos;s π</source>
         <translation>Scotts π</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="238"/>
+        <location filename="../app/report/report_sections.cpp" line="247"/>
         <source>Bennett&apos;s S</source>
         <translation>Bennetts S</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="243"/>
+        <location filename="../app/report/report_sections.cpp" line="253"/>
         <source>n/a</source>
         <translation>n.v.t.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="257"/>
+        <location filename="../app/report/report_sections.cpp" line="274"/>
         <source>For comparison with older studies: Fleiss (1971) and Light (1971) for any number of coders, Cohen (1960), Scott (1955) and Bennett, Alpert &amp; Goldstein (1954) for two; n/a where their assumptions (complete data, two coders) do not hold.</source>
         <translation>Ter vergelijking met oudere studies: Fleiss (1971) en Light (1971) voor elk aantal codeurs, Cohen (1960), Scott (1955) en Bennett, Alpert &amp; Goldstein (1954) voor twee; n.v.t. waar hun aannames (volledige gegevens, twee codeurs) niet opgaan.</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="273"/>
+        <location filename="../app/report/report_sections.cpp" line="290"/>
         <source>Not computed: %1</source>
         <translation>Niet berekend: %1</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="276"/>
+        <location filename="../app/report/report_sections.cpp" line="293"/>
         <source>Unitizing alpha (Krippendorff, 2004) compares where the coders put their spans, character by character, on the %1 articles that every coder coded (%2 characters laid end to end).</source>
         <translation>Unitizing-alfa (Krippendorff, 2004) vergelijkt teken voor teken waar de codeurs hun fragmenten plaatsen, op de %1 artikelen die elke codeur codeerde (%2 tekens achter elkaar).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="286"/>
+        <location filename="../app/report/report_sections.cpp" line="303"/>
         <source>Function</source>
         <translation>Functie</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="287"/>
+        <location filename="../app/report/report_sections.cpp" line="304"/>
         <source>Observed disagreement</source>
         <translation>Waargenomen onenigheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="288"/>
+        <location filename="../app/report/report_sections.cpp" line="305"/>
         <source>Expected disagreement</source>
         <translation>Verwachte onenigheid</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="306"/>
+        <location filename="../app/report/report_sections.cpp" line="330"/>
         <source>all four</source>
         <translation>alle vier</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="326"/>
+        <location filename="../app/report/report_sections.cpp" line="353"/>
         <source>Alpha without each coder</source>
         <translation>Alfa zonder elke codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="328"/>
+        <location filename="../app/report/report_sections.cpp" line="355"/>
         <source>Left out</source>
         <translation>Weggelaten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="359"/>
+        <location filename="../app/report/report_sections.cpp" line="388"/>
         <source>Alpha recomputed without the coder&apos;s codings; in brackets the change against all coders (positive: the coder pulls alpha down). A diagnostic for retraining, not a licence to report the better figure (Krippendorff, 2004).</source>
         <translation>Alfa opnieuw berekend zonder de coderingen van de codeur; tussen haakjes de verandering ten opzichte van alle codeurs (positief: de codeur trekt alfa omlaag). Een diagnose voor hertraining, geen vrijbrief om het betere cijfer te rapporteren (Krippendorff, 2004).</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="366"/>
+        <location filename="../app/report/report_sections.cpp" line="395"/>
         <source>The article that costs most</source>
         <translation>Het artikel dat het meest kost</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="371"/>
+        <location filename="../app/report/report_sections.cpp" line="400"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="372"/>
+        <location filename="../app/report/report_sections.cpp" line="401"/>
         <source>α without it</source>
         <translation>α zonder dit artikel</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="373"/>
+        <location filename="../app/report/report_sections.cpp" line="402"/>
         <source>Change</source>
         <translation>Verandering</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="396"/>
+        <location filename="../app/report/report_sections.cpp" line="427"/>
         <source>Function confusion between coders</source>
         <translation>Functieverwarring tussen codeurs</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="399"/>
+        <location filename="../app/report/report_sections.cpp" line="430"/>
         <source>A coder&apos;s span</source>
         <translation>Fragment van een codeur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_sections.cpp" line="418"/>
+        <location filename="../app/report/report_sections.cpp" line="456"/>
         <source>For each coder&apos;s span, the function the other coder gave the span that overlaps it most (none: nothing there), summed over ordered pairs of coders. Off the diagonal are the confusions a codebook rule could settle.</source>
         <translation>Voor elk fragment van een codeur de functie die de andere codeur gaf aan het fragment dat het meest ermee overlapt (geen: daar staat niets), opgeteld over geordende paren codeurs. Buiten de diagonaal staan de verwarringen die een codeboekregel kan beslechten.</translation>
     </message>
@@ -3827,83 +3835,83 @@
         <translation>Kenmerkt</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="252"/>
+        <location filename="../app/report/report_method_text.cpp" line="257"/>
         <source>Every figure above is what these commands print (add --json for all digits):</source>
         <translation>Elk cijfer hierboven is wat deze opdrachten afdrukken (voeg --json toe voor alle cijfers):</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="64"/>
+        <location filename="../app/report/report_document.cpp" line="63"/>
         <source>en</source>
         <extracomment>The report&apos;s language as a BCP 47 tag for &lt;html lang&gt;: nl, de.</extracomment>
         <translation>nl</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="82"/>
+        <location filename="../app/report/report_document.cpp" line="81"/>
         <source>Method text</source>
         <translation>Methodetekst</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="84"/>
+        <location filename="../app/report/report_document.cpp" line="83"/>
         <source>Reporting checklist (Lombard, Snyder-Duch &amp; Bracken, 2002)</source>
         <translation>Checklist voor de verslaglegging (Lombard, Snyder-Duch &amp; Bracken, 2002)</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="86"/>
+        <location filename="../app/report/report_document.cpp" line="85"/>
         <source>Reliability per variable</source>
         <translation>Betrouwbaarheid per variabele</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="88"/>
+        <location filename="../app/report/report_document.cpp" line="87"/>
         <source>Is the sample large enough?</source>
         <translation>Is de steekproef groot genoeg?</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="90"/>
+        <location filename="../app/report/report_document.cpp" line="89"/>
         <source>Coders and the amount each coded</source>
         <translation>Codeurs en hoeveel elk codeerde</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="92"/>
+        <location filename="../app/report/report_document.cpp" line="91"/>
         <source>Coder pairs</source>
         <translation>Codeursparen</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="93"/>
+        <location filename="../app/report/report_document.cpp" line="92"/>
         <source>Other coefficients</source>
         <translation>Andere coëfficiënten</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="95"/>
+        <location filename="../app/report/report_document.cpp" line="94"/>
         <source>Span boundaries: unitizing alpha</source>
         <translation>Grenzen van fragmenten: unitizing-alfa</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="99"/>
+        <location filename="../app/report/report_document.cpp" line="98"/>
         <source>Where reliability is lost</source>
         <translation>Waar betrouwbaarheid verloren gaat</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="102"/>
+        <location filename="../app/report/report_document.cpp" line="101"/>
         <source>Frames</source>
         <translation>Frames</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="103"/>
+        <location filename="../app/report/report_document.cpp" line="102"/>
         <source>Reproducing the figures</source>
         <translation>De cijfers reproduceren</translation>
     </message>
     <message>
-        <location filename="../app/report/report_document.cpp" line="105"/>
+        <location filename="../app/report/report_document.cpp" line="104"/>
         <source>References</source>
         <translation>Literatuur</translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="153"/>
+        <location filename="../app/report/report_method_text.cpp" line="156"/>
         <source>Answers to article-level items were adjudicated as well: %1 gold answers on %2 articles, %3 of them with a written rationale. </source>
         <translation>Ook antwoorden op items op artikelniveau zijn beslist: %1 antwoorden van de gouden standaard bij %2 artikelen, %3 daarvan met een schriftelijke motivering. </translation>
     </message>
     <message>
-        <location filename="../app/report/report_method_text.cpp" line="163"/>
+        <location filename="../app/report/report_method_text.cpp" line="167"/>
         <source>Disagreements on article-level items were resolved by adjudication into a separate gold standard: %1 gold answers on %2 articles, decided by %3, %4 of them with a written rationale. The independent codings were kept unchanged; every figure above comes from them. </source>
         <translation>Verschillen bij items op artikelniveau zijn opgelost door beslissing in een aparte gouden standaard: %1 antwoorden van de gouden standaard bij %2 artikelen, beslist door %3, %4 daarvan met een schriftelijke motivering. De onafhankelijke coderingen bleven ongewijzigd; alle bovenstaande cijfers komen daaruit. </translation>
     </message>
@@ -5101,7 +5109,7 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="338"/>
-        <location filename="../app/cli/command_assign.cpp" line="436"/>
+        <location filename="../app/cli/command_assign.cpp" line="439"/>
         <source>unknown unit &quot;%1&quot;.</source>
         <translation>onbekende eenheid ‘%1’.</translation>
     </message>
@@ -5112,293 +5120,293 @@
     </message>
     <message>
         <location filename="../app/cli/command_agree.cpp" line="357"/>
-        <location filename="../app/cli/command_assign.cpp" line="345"/>
-        <location filename="../app/cli/command_assign.cpp" line="371"/>
-        <location filename="../app/cli/command_assign.cpp" line="452"/>
+        <location filename="../app/cli/command_assign.cpp" line="348"/>
+        <location filename="../app/cli/command_assign.cpp" line="374"/>
+        <location filename="../app/cli/command_assign.cpp" line="455"/>
         <location filename="../app/cli/command_report.cpp" line="132"/>
         <source>unknown phase &quot;%1&quot;.</source>
         <translation>onbekende fase ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="60"/>
+        <location filename="../app/cli/command_assign.cpp" line="63"/>
         <source>%1 subsample: %2%3, seed %4; %5 of %6 articles in the sampling frame; coders %7</source>
         <translation>deelsteekproef %1: %2%3, seed %4; %5 van %6 artikelen in het steekproefkader; codeurs %7</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="63"/>
+        <location filename="../app/cli/command_assign.cpp" line="66"/>
         <source> by %1</source>
         <translation> naar %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="69"/>
+        <location filename="../app/cli/command_assign.cpp" line="72"/>
         <source>  near copies left out of the sampling frame</source>
         <translation>  bijna-kopieën uit het steekproefkader weggelaten</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="71"/>
+        <location filename="../app/cli/command_assign.cpp" line="74"/>
         <source>  drawn at %1</source>
         <translation>  getrokken op %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="73"/>
+        <location filename="../app/cli/command_assign.cpp" line="76"/>
         <source>  stratum %1: %2 of %3</source>
         <translation>  stratum %1: %2 van %3</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="77"/>
+        <location filename="../app/cli/command_assign.cpp" line="80"/>
         <source>  articles: %1</source>
         <translation>  artikelen: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="80"/>
+        <location filename="../app/cli/command_assign.cpp" line="83"/>
         <source>  Krippendorff&apos;s minimum for alpha_min %1 at p = %2 with the rarest value at %3: %4 values</source>
         <translation>  Krippendorffs minimum voor alpha_min %1 bij p = %2 met de zeldzaamste waarde op %3: %4 waarden</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="88"/>
+        <location filename="../app/cli/command_assign.cpp" line="91"/>
         <source>  Krippendorff&apos;s minimum: not defined for these arguments</source>
         <translation>  Krippendorffs minimum: niet gedefinieerd voor deze argumenten</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="89"/>
+        <location filename="../app/cli/command_assign.cpp" line="92"/>
         <source>  this draw delivers %1 article values, %2 paragraph values, %3 sentence values (units × coders)</source>
         <translation>  deze trekking levert %1 artikelwaarden, %2 alineawaarden, %3 zinswaarden op (eenheden × codeurs)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="95"/>
+        <location filename="../app/cli/command_assign.cpp" line="98"/>
         <source>  enough for: none of these units; draw more articles or expect a wider interval</source>
         <translation>  genoeg voor: geen van deze eenheden; trek meer artikelen of reken op een breder interval</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="97"/>
+        <location filename="../app/cli/command_assign.cpp" line="100"/>
         <source>  enough for: %1 units</source>
         <translation>  genoeg voor: %1-eenheden</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="134"/>
+        <location filename="../app/cli/command_assign.cpp" line="137"/>
         <source>Assignments: %1</source>
         <translation>Toewijzingen: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="165"/>
+        <location filename="../app/cli/command_assign.cpp" line="168"/>
         <source>%1  %2  %3  %4  %5  %6  %7</source>
         <translation>%1  %2  %3  %4  %5  %6  %7</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="166"/>
+        <location filename="../app/cli/command_assign.cpp" line="169"/>
         <source>phase</source>
         <translation>fase</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="167"/>
+        <location filename="../app/cli/command_assign.cpp" line="170"/>
         <location filename="../app/cli/command_team.cpp" line="259"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="168"/>
+        <location filename="../app/cli/command_assign.cpp" line="171"/>
         <source>assigned</source>
         <translation>toegewezen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="169"/>
+        <location filename="../app/cli/command_assign.cpp" line="172"/>
         <source>started</source>
         <translation>begonnen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="170"/>
+        <location filename="../app/cli/command_assign.cpp" line="173"/>
         <source>done</source>
         <translation>klaar</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="171"/>
-        <location filename="../app/cli/command_assign.cpp" line="222"/>
+        <location filename="../app/cli/command_assign.cpp" line="174"/>
+        <location filename="../app/cli/command_assign.cpp" line="225"/>
         <source>alpha</source>
         <translation>alfa</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="172"/>
+        <location filename="../app/cli/command_assign.cpp" line="175"/>
         <source>active</source>
         <translation>actief</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="182"/>
+        <location filename="../app/cli/command_assign.cpp" line="185"/>
         <source>%1 min</source>
         <translation>%1 min</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="186"/>
+        <location filename="../app/cli/command_assign.cpp" line="189"/>
         <source>Effort (active time; idle time not counted):</source>
         <translation>Inspanning (actieve tijd; inactieve tijd niet meegeteld):</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="187"/>
+        <location filename="../app/cli/command_assign.cpp" line="190"/>
         <source>Effort in aggregate (active time per coder is off; see --effort):</source>
         <translation>Inspanning in totaal (actieve tijd per codeur staat uit; zie --effort):</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="189"/>
+        <location filename="../app/cli/command_assign.cpp" line="192"/>
         <source>  %1  %2 articles done, %3 min active, %4 min per done article</source>
         <translation>  %1  %2 artikelen klaar, %3 min actief, %4 min per afgerond artikel</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="196"/>
+        <location filename="../app/cli/command_assign.cpp" line="199"/>
         <source>alpha: Krippendorff&apos;s alpha (nominal) on present/absent per sentence and function, against the lead&apos;s master coding in training, else the mean over the coder&apos;s partners; finished articles only.</source>
         <translation>alfa: Krippendorffs alfa (nominaal) op aanwezig/afwezig per zin en functie, tegen de mastercodering van de coördinator in de training, anders het gemiddelde over de partners van de codeur; alleen afgeronde artikelen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="212"/>
+        <location filename="../app/cli/command_assign.cpp" line="215"/>
         <source>Training feedback for %1 against the master coding of %2 (%3 units)</source>
         <translation>Trainingsfeedback voor %1 tegen de mastercodering van %2 (%3 eenheden)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="214"/>
+        <location filename="../app/cli/command_assign.cpp" line="217"/>
         <source>Finished training articles compared: %1; still open: %2</source>
         <translation>Vergeleken afgeronde trainingsartikelen: %1; nog open: %2</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="215"/>
+        <location filename="../app/cli/command_assign.cpp" line="218"/>
         <location filename="../app/cli/command_extract.cpp" line="105"/>
         <location filename="../app/cli/command_extract.cpp" line="312"/>
         <source>none</source>
         <translation>geen</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="218"/>
+        <location filename="../app/cli/command_assign.cpp" line="221"/>
         <source>%1  %2  %3  %4  %5</source>
         <translation>%1  %2  %3  %4  %5</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="219"/>
+        <location filename="../app/cli/command_assign.cpp" line="222"/>
         <location filename="../app/cli/command_score.cpp" line="242"/>
         <location filename="../app/cli/command_score.cpp" line="284"/>
         <source>function</source>
         <translation>functie</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="220"/>
+        <location filename="../app/cli/command_assign.cpp" line="223"/>
         <source>units</source>
         <translation>eenheden</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="221"/>
+        <location filename="../app/cli/command_assign.cpp" line="224"/>
         <source>agree %</source>
         <translation>overeenst. %</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="223"/>
+        <location filename="../app/cli/command_assign.cpp" line="226"/>
         <source>marked (you / master)</source>
         <translation>gemarkeerd (u / master)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="235"/>
+        <location filename="../app/cli/command_assign.cpp" line="238"/>
         <source>Training complete: the coder can move on to the real work.</source>
         <translation>Training afgerond: de codeur kan door naar het echte werk.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="236"/>
+        <location filename="../app/cli/command_assign.cpp" line="239"/>
         <source>Training not complete yet.</source>
         <translation>Training nog niet afgerond.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="246"/>
+        <location filename="../app/cli/command_assign.cpp" line="249"/>
         <source>Draw the subsample of this phase (reliability or pilot) that every --coders codes.</source>
         <translation>De deelsteekproef van deze fase (reliability of pilot) trekken die elke --coders codeert.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="254"/>
+        <location filename="../app/cli/command_assign.cpp" line="257"/>
         <source>With --draw: the number of articles.</source>
         <translation>Met --draw: het aantal artikelen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="256"/>
+        <location filename="../app/cli/command_assign.cpp" line="259"/>
         <source>With --draw: the share of the sampling frame (0 &lt; F &lt;= 1, rounded up).</source>
         <translation>Met --draw: het aandeel van het steekproefkader (0 &lt; F &lt;= 1, naar boven afgerond).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="259"/>
+        <location filename="../app/cli/command_assign.cpp" line="262"/>
         <source>With --draw: draw proportionally within outlet, language or topic (metadata key &quot;topic&quot;).</source>
         <translation>Met --draw: proportioneel trekken binnen medium, taal of onderwerp (metadatasleutel ‘topic’).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="264"/>
+        <location filename="../app/cli/command_assign.cpp" line="267"/>
         <source>With --draw: leave articles found to be near copies of older ones at import out of the sampling frame.</source>
         <translation>Met --draw: artikelen die bij de import zijn herkend als bijna-kopie van een ouder artikel, uit het steekproefkader weglaten.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="267"/>
+        <location filename="../app/cli/command_assign.cpp" line="270"/>
         <source>Seed of the draw or of dealing the rest (default: a random seed, printed and recorded).</source>
         <translation>Seed van de trekking of van het verdelen van de rest (standaard: een willekeurige seed, afgedrukt en vastgelegd).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="271"/>
+        <location filename="../app/cli/command_assign.cpp" line="274"/>
         <source>With --draw: the smallest acceptable alpha for the sample-size advice (default 0.8).</source>
         <translation>Met --draw: de kleinste aanvaardbare alfa voor het advies over de steekproefomvang (standaard 0.8).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="276"/>
+        <location filename="../app/cli/command_assign.cpp" line="279"/>
         <source>With --draw: the expected share of the rarest value (default 0.25).</source>
         <translation>Met --draw: het verwachte aandeel van de zeldzaamste waarde (standaard 0.25).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="279"/>
+        <location filename="../app/cli/command_assign.cpp" line="282"/>
         <source>Deal every article without any assignment to --coders for production: single or double coding.</source>
         <translation>Elk artikel zonder toewijzing verdelen over --coders voor de productie: enkele of dubbele codering.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="284"/>
+        <location filename="../app/cli/command_assign.cpp" line="287"/>
         <source>With --articles: assign in this phase (training, pilot, reliability, production); with --show or --progress: only this phase.</source>
         <translation>Met --articles: in deze fase toewijzen (training, pilot, reliability, production); met --show of --progress: alleen deze fase.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="289"/>
+        <location filename="../app/cli/command_assign.cpp" line="292"/>
         <source>Assign these articles (ids) to every one of --coders in --phase.</source>
         <translation>Deze artikelen (id&apos;s) aan elk van --coders in --phase toewijzen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="292"/>
+        <location filename="../app/cli/command_assign.cpp" line="295"/>
         <source>The coders&apos; pseudonyms.</source>
         <translation>De pseudoniemen van de codeurs.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="294"/>
+        <location filename="../app/cli/command_assign.cpp" line="297"/>
         <source>With --draw, --rest or --articles: show the plan, write nothing.</source>
         <translation>Met --draw, --rest of --articles: het plan tonen, niets wegschrijven.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="296"/>
+        <location filename="../app/cli/command_assign.cpp" line="299"/>
         <source>Show the assignments and the draws with their advice.</source>
         <translation>De toewijzingen en de trekkingen met hun advies tonen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="298"/>
+        <location filename="../app/cli/command_assign.cpp" line="301"/>
         <source>Show per coder and phase the articles done, agreement so far and effort.</source>
         <translation>Per codeur en fase de afgeronde artikelen, de overeenstemming tot nu toe en de inspanning tonen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="300"/>
+        <location filename="../app/cli/command_assign.cpp" line="303"/>
         <source>Show this coder&apos;s agreement with the master coding on finished training articles.</source>
         <translation>De overeenstemming van deze codeur met de mastercodering op afgeronde trainingsartikelen tonen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="304"/>
+        <location filename="../app/cli/command_assign.cpp" line="307"/>
         <source>With --training: the lead whose training coding is the master (default: the one lead who coded training articles).</source>
         <translation>Met --training: de coördinator wiens trainingscodering de master is (standaard: de enige coördinator die trainingsartikelen heeft gecodeerd).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="309"/>
+        <location filename="../app/cli/command_assign.cpp" line="312"/>
         <source>With --training: paragraph, sentence (default) or token.</source>
         <translation>Met --training: paragraph, sentence (standaard) of token.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="312"/>
+        <location filename="../app/cli/command_assign.cpp" line="315"/>
         <source>Show active time per coder (on) or only in aggregate (off, the default).</source>
         <translation>Actieve tijd per codeur tonen (on) of alleen in totaal (off, de standaard).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="314"/>
+        <location filename="../app/cli/command_assign.cpp" line="317"/>
         <location filename="../app/cli/command_check.cpp" line="13"/>
-        <location filename="../app/cli/command_codebook.cpp" line="52"/>
+        <location filename="../app/cli/command_codebook.cpp" line="53"/>
         <location filename="../app/cli/command_extract.cpp" line="163"/>
         <location filename="../app/cli/command_handout.cpp" line="20"/>
         <location filename="../app/cli/command_merge.cpp" line="71"/>
@@ -5411,9 +5419,9 @@
         <translation>Het resultaat als JSON afdrukken.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="318"/>
+        <location filename="../app/cli/command_assign.cpp" line="321"/>
         <location filename="../app/cli/command_check.cpp" line="16"/>
-        <location filename="../app/cli/command_codebook.cpp" line="54"/>
+        <location filename="../app/cli/command_codebook.cpp" line="55"/>
         <location filename="../app/cli/command_export.cpp" line="73"/>
         <location filename="../app/cli/command_extract.cpp" line="166"/>
         <location filename="../app/cli/command_handout.cpp" line="25"/>
@@ -5428,14 +5436,14 @@
         <translation>Het projectbestand.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="320"/>
+        <location filename="../app/cli/command_assign.cpp" line="323"/>
         <source>Assign articles to coders per phase (training, pilot, reliability, production), draw the reliability subsample with a recorded seed, and follow progress. Give one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
         <translation>Artikelen per fase (training, pilot, reliability, production) aan codeurs toewijzen, de betrouwbaarheidsdeelsteekproef met een vastgelegde seed trekken en de voortgang volgen. Geef een van --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="329"/>
+        <location filename="../app/cli/command_assign.cpp" line="332"/>
         <location filename="../app/cli/command_check.cpp" line="27"/>
-        <location filename="../app/cli/command_codebook.cpp" line="71"/>
+        <location filename="../app/cli/command_codebook.cpp" line="72"/>
         <location filename="../app/cli/command_extract.cpp" line="175"/>
         <location filename="../app/cli/command_handout.cpp" line="37"/>
         <location filename="../app/cli/command_info.cpp" line="47"/>
@@ -5446,159 +5454,159 @@
         <translation>precies één projectbestand verwacht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="337"/>
+        <location filename="../app/cli/command_assign.cpp" line="340"/>
         <source>give exactly one of --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</source>
         <translation>geef precies een van --draw, --withdraw-draw, --rest, --articles, --show, --progress, --training, --effort.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="354"/>
+        <location filename="../app/cli/command_assign.cpp" line="357"/>
         <source>the seed &quot;%1&quot; is not a whole number from 0 to 18446744073709551615.</source>
         <translation>de seed ‘%1’ is geen geheel getal van 0 tot 18446744073709551615.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="375"/>
+        <location filename="../app/cli/command_assign.cpp" line="378"/>
         <source>give --size or --fraction, not both.</source>
         <translation>geef --size of --fraction, niet allebei.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="376"/>
+        <location filename="../app/cli/command_assign.cpp" line="379"/>
         <source>--draw needs --size or --fraction.</source>
         <translation>--draw heeft --size of --fraction nodig.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="382"/>
+        <location filename="../app/cli/command_assign.cpp" line="385"/>
         <source>--size must be a whole number of articles, at least 1; &quot;%1&quot; given.</source>
         <translation>--size moet een geheel aantal artikelen zijn, ten minste 1; opgegeven: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="390"/>
+        <location filename="../app/cli/command_assign.cpp" line="393"/>
         <source>--fraction must be a number above 0 and at most 1; &quot;%1&quot; given.</source>
         <translation>--fraction moet een getal boven 0 en hoogstens 1 zijn; opgegeven: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="398"/>
+        <location filename="../app/cli/command_assign.cpp" line="401"/>
         <source>--stratify takes outlet, language or topic, not &quot;%1&quot;.</source>
         <translation>--stratify neemt outlet, language of topic, niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="404"/>
+        <location filename="../app/cli/command_assign.cpp" line="407"/>
         <source>--alpha-min must lie between 0 and 1; &quot;%1&quot; given.</source>
         <translation>--alpha-min moet tussen 0 en 1 liggen; opgegeven: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="409"/>
+        <location filename="../app/cli/command_assign.cpp" line="412"/>
         <source>--rarest must lie above 0 and at most 0.5; &quot;%1&quot; given.</source>
         <translation>--rarest moet boven 0 en hoogstens 0.5 liggen; opgegeven: ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="422"/>
+        <location filename="../app/cli/command_assign.cpp" line="425"/>
         <source>--rest takes single or double, not &quot;%1&quot;.</source>
         <translation>--rest neemt single of double, niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="427"/>
+        <location filename="../app/cli/command_assign.cpp" line="430"/>
         <source>--articles needs --phase.</source>
         <translation>--articles heeft --phase nodig.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="429"/>
+        <location filename="../app/cli/command_assign.cpp" line="432"/>
         <source>--articles needs --coders.</source>
         <translation>--articles heeft --coders nodig.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="442"/>
+        <location filename="../app/cli/command_assign.cpp" line="445"/>
         <source>--effort takes on or off, not &quot;%1&quot;.</source>
         <translation>--effort neemt on of off, niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="445"/>
+        <location filename="../app/cli/command_assign.cpp" line="448"/>
         <source>name the coders with --coders.</source>
         <translation>noem de codeurs met --coders.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="487"/>
+        <location filename="../app/cli/command_assign.cpp" line="490"/>
         <source>Active time is now shown per coder.</source>
         <translation>Actieve tijd wordt nu per codeur getoond.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="488"/>
+        <location filename="../app/cli/command_assign.cpp" line="491"/>
         <source>Active time is now shown in aggregate only.</source>
         <translation>Actieve tijd wordt nu alleen in totaal getoond.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="506"/>
-        <location filename="../app/cli/command_assign.cpp" line="537"/>
+        <location filename="../app/cli/command_assign.cpp" line="509"/>
+        <location filename="../app/cli/command_assign.cpp" line="540"/>
         <source>Dry run: nothing was written.</source>
         <translation>Proefrun: er is niets weggeschreven.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="507"/>
-        <location filename="../app/cli/command_assign.cpp" line="538"/>
+        <location filename="../app/cli/command_assign.cpp" line="510"/>
+        <location filename="../app/cli/command_assign.cpp" line="541"/>
         <source>%1 assignments written.</source>
         <translation>%1 toewijzingen weggeschreven.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="536"/>
+        <location filename="../app/cli/command_assign.cpp" line="539"/>
         <source>Seed %1.</source>
         <translation>Seed %1.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="34"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="35"/>
         <source>Cannot read %1: %2</source>
         <translation>Kan %1 niet lezen: %2</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="39"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="40"/>
         <source>%1: not a JSON object (%2).</source>
         <translation>%1: geen JSON-object (%2).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="68"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="69"/>
         <source>%1: a coder&apos;s role must be &quot;coder&quot; or &quot;lead&quot;.</source>
         <translation>%1: de rol van een persoon moet ‘coder’ of ‘lead’ zijn.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="100"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="103"/>
         <source>%1: the reliability article &quot;%2&quot; is not in articles.jsonl.</source>
         <translation>%1: het betrouwbaarheidsartikel ‘%2’ staat niet in articles.jsonl.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="142"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="149"/>
         <source>Built %1: %2 articles, %3 coders, %4 spans, %5 article judgements, %6 gold spans, 2 baseline runs.</source>
         <translation>%1 gebouwd: %2 artikelen, %3 codeurs, %4 fragmenten, %5 oordelen op artikelniveau, %6 fragmenten in de gouden standaard, 2 baselineruns.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="167"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="174"/>
         <source>Replace OUT if it exists.</source>
         <translation>OUT vervangen als het bestaat.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="170"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="177"/>
         <source>The folder with study.json, articles.jsonl, codings.jsonl and gold.jsonl.</source>
         <translation>De map met study.json, articles.jsonl, codings.jsonl en gold.jsonl.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="172"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="179"/>
         <source>The project file to write (*.fourfold).</source>
         <translation>Het projectbestand om te schrijven (*.fourfold).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="174"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="181"/>
         <source>Build the demo project (invented data) from its source files.</source>
         <translation>Het demoproject (verzonnen gegevens) bouwen uit de bronbestanden.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="179"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="186"/>
         <source>expected a source folder and an output file.</source>
         <translation>een bronmap en een uitvoerbestand verwacht.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="184"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="191"/>
         <source>%1 already exists; add --force to replace it.</source>
         <translation>%1 bestaat al; voeg --force toe om het te vervangen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_build_sample.cpp" line="198"/>
+        <location filename="../app/cli/command_build_sample.cpp" line="205"/>
         <source>Cannot move the new project to %1.</source>
         <translation>Kan het nieuwe project niet naar %1 verplaatsen.</translation>
     </message>
@@ -5621,87 +5629,87 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="36"/>
+        <location filename="../app/cli/command_codebook.cpp" line="37"/>
         <source>Print what changed from version A to version B (&quot;--diff A B&quot; or &quot;--diff A,B&quot;; B defaults to the current version).</source>
         <translation>Afdrukken wat er is veranderd van versie A naar versie B (‘--diff A B’ of ‘--diff A,B’; B is standaard de huidige versie).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="41"/>
+        <location filename="../app/cli/command_codebook.cpp" line="42"/>
         <source>Add the codebook in this JSON file as a new version (needs --note).</source>
         <translation>Het codeboek in dit JSON-bestand als nieuwe versie toevoegen (vereist --note).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="44"/>
+        <location filename="../app/cli/command_codebook.cpp" line="45"/>
         <source>With --update: what changed and why.</source>
         <translation>Met --update: wat er is veranderd en waarom.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="46"/>
+        <location filename="../app/cli/command_codebook.cpp" line="47"/>
         <source>With --update: the lead&apos;s pseudonym, recorded as the author.</source>
         <translation>Met --update: het pseudoniem van de coördinator, vastgelegd als auteur.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="49"/>
+        <location filename="../app/cli/command_codebook.cpp" line="50"/>
         <source>Print version N as JSON (the form --update reads).</source>
         <translation>Versie N als JSON afdrukken (de vorm die --update leest).</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="51"/>
+        <location filename="../app/cli/command_codebook.cpp" line="52"/>
         <source>List the annotations made under an older version than the current one.</source>
         <translation>De annotaties opsommen die zijn gemaakt onder een oudere versie dan de huidige.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="56"/>
+        <location filename="../app/cli/command_codebook.cpp" line="57"/>
         <source>Codebook versions: without options, list them; editing definitions, decision rules or attributes is recorded as a new version with --update.</source>
         <translation>Codeboekversies: zonder opties worden ze opgesomd; het bewerken van definities, beslisregels of kenmerken wordt met --update vastgelegd als nieuwe versie.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="67"/>
+        <location filename="../app/cli/command_codebook.cpp" line="68"/>
         <source>give at most one of --diff, --update, --show, --outdated.</source>
         <translation>geef hoogstens een van --diff, --update, --show, --outdated.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="80"/>
+        <location filename="../app/cli/command_codebook.cpp" line="81"/>
         <source>--diff takes two version numbers.</source>
         <translation>--diff neemt twee versienummers.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="86"/>
+        <location filename="../app/cli/command_codebook.cpp" line="87"/>
         <source>--diff takes version numbers (1, 2, ...), not &quot;%1&quot;.</source>
         <translation>--diff neemt versienummers (1, 2, ...), niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="94"/>
+        <location filename="../app/cli/command_codebook.cpp" line="95"/>
         <source>--show takes a version number (1, 2, ...), not &quot;%1&quot;.</source>
         <translation>--show neemt een versienummer (1, 2, ...), niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="99"/>
+        <location filename="../app/cli/command_codebook.cpp" line="100"/>
         <source>--update needs --note saying what changed and why.</source>
         <translation>--update heeft --note nodig dat zegt wat er is veranderd en waarom.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="114"/>
+        <location filename="../app/cli/command_codebook.cpp" line="115"/>
         <source>There is no coder &quot;%1&quot; in the project.</source>
         <translation>Er is geen codeur ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="133"/>
+        <location filename="../app/cli/command_codebook.cpp" line="134"/>
         <source>Codebook version %1 added.</source>
         <translation>Codeboekversie %1 toegevoegd.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="180"/>
+        <location filename="../app/cli/command_codebook.cpp" line="181"/>
         <source>%1 annotations were made under an older codebook version.</source>
         <translation>%1 annotaties zijn gemaakt onder een oudere codeboekversie.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="183"/>
+        <location filename="../app/cli/command_codebook.cpp" line="184"/>
         <source>  #%1  %2  %3  %4  version %5%6</source>
         <translation>  #%1  %2  %3  %4  versie %5%6</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_codebook.cpp" line="189"/>
+        <location filename="../app/cli/command_codebook.cpp" line="190"/>
         <source>  (its function changed since: re-check)</source>
         <translation>  (de functie ervan is sindsdien veranderd: opnieuw controleren)</translation>
     </message>
@@ -6643,17 +6651,22 @@
         <translation>    theirs (verloren):  %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_merge.cpp" line="215"/>
+        <location filename="../app/cli/command_merge.cpp" line="191"/>
+        <source>    the assignment was withdrawn in the project while %1 coded the article in a copy: keep mine to leave it withdrawn, theirs to assign it again.</source>
+        <translation>    de toewijzing is in het project ingetrokken terwijl %1 het artikel in een kopie codeerde: mine laat haar ingetrokken, theirs wijst het artikel opnieuw toe.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_merge.cpp" line="227"/>
         <source>%1 (%2): nothing new; it was merged before.</source>
         <translation>%1 (%2): niets nieuws; het is al eerder samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_merge.cpp" line="218"/>
+        <location filename="../app/cli/command_merge.cpp" line="230"/>
         <source>%1 (%2): added %3, changed %4 (of which deleted %5), conflicts %6, coding time %7 s.</source>
         <translation>%1 (%2): %3 toegevoegd, %4 gewijzigd (waarvan %5 verwijderd), %6 conflicten, codeertijd %7 s.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_merge.cpp" line="229"/>
+        <location filename="../app/cli/command_merge.cpp" line="243"/>
         <source>Open conflicts waiting for your decision: %1 (see fourfold-cli merge %2 --conflicts).</source>
         <translation>Open conflicten die op uw beslissing wachten: %1 (zie fourfold-cli merge %2 --conflicts).</translation>
     </message>
@@ -7402,12 +7415,12 @@
         <translation>  people    Een persoon toevoegen aan een lopend teamproject, of een persoon uitschakelen.</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_assign.cpp" line="250"/>
+        <location filename="../app/cli/command_assign.cpp" line="253"/>
         <source>Withdraw the committed subsample of this phase (reliability or pilot) while nobody has coded any of its assignments yet.</source>
         <translation>De vastgelegde deelsteekproef van deze fase (reliability of pilot) intrekken zolang nog niemand een van haar toewijzingen heeft gecodeerd.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_assign.cpp" line="468"/>
+        <location filename="../app/cli/command_assign.cpp" line="471"/>
         <source>The %1 subsample is withdrawn: %n assignment(s) removed.</source>
         <translation>
             <numerusform>De deelsteekproef van fase %1 is ingetrokken: %n toewijzing verwijderd.</numerusform>
@@ -7620,293 +7633,293 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::CodebookEditor</name>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="72"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="74"/>
         <source>nominal</source>
         <translation>nominaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="74"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="76"/>
         <source>ordinal</source>
         <translation>ordinaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="76"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="78"/>
         <source>interval</source>
         <translation>interval</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="78"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="80"/>
         <source>ratio</source>
         <translation>ratio</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="128"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="178"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="131"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
         <source>Codebook</source>
         <translation>Codeboek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="135"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="138"/>
         <source>&amp;Name:</source>
         <translation>&amp;Naam:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="151"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="154"/>
         <source>Article-level items</source>
         <translation>Items op artikelniveau</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="156"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="159"/>
         <source>&amp;Undo:</source>
         <translation>&amp;Ongedaan maken:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="158"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="161"/>
         <source>&amp;Redo:</source>
         <translation>Opn&amp;ieuw:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="172"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="175"/>
         <source>&amp;Save as new version…</source>
         <translation>Opslaan als nieuwe &amp;versie…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="178"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
         <source>Codebook (changed)</source>
         <translation>Codeboek (gewijzigd)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="184"/>
         <source>Edit the codebook&apos;s name</source>
         <translation>Naam van het codeboek bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="222"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="239"/>
         <source>Level of measurement: it decides which agreement coefficient compares the values (Krippendorff 2004, ch. 11).</source>
         <translation>Meetniveau: dit bepaalt welke overeenstemmingscoëfficiënt de waarden vergelijkt (Krippendorff 2004, hfst. 11).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="238"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="255"/>
         <source>&amp;Label:</source>
         <translation>&amp;Label:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="241"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="258"/>
         <source>&amp;Definition:</source>
         <translation>&amp;Definitie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="243"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="260"/>
         <source>One decision rule per paragraph (an empty line between two).</source>
         <translation>Eén beslisregel per alinea (een lege regel ertussen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="244"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="261"/>
         <source>Decision &amp;rules:</source>
         <translation>Beslis&amp;regels:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="246"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="263"/>
         <source>One example per paragraph (an empty line between two).</source>
         <translation>Eén voorbeeld per alinea (een lege regel ertussen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="247"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="264"/>
         <source>E&amp;xamples:</source>
         <translation>Voor&amp;beelden:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="250"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="267"/>
         <source>Attributes of %1 spans</source>
         <translation>Kenmerken van %1-fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="257"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="274"/>
         <source>&amp;Add attribute</source>
         <translation>Kenmerk &amp;toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="258"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="275"/>
         <source>Re&amp;move attribute</source>
         <translation>Kenmerk &amp;verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="267"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="383"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="284"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="400"/>
         <source>&amp;Key:</source>
         <translation>&amp;Sleutel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="270"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="287"/>
         <source>La&amp;bel:</source>
         <translation>La&amp;bel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="272"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="289"/>
         <source>closed list of values</source>
         <translation>gesloten lijst van waarden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="273"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="290"/>
         <source>free text</source>
         <translation>vrije tekst</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="274"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="291"/>
         <source>&amp;Type:</source>
         <translation>&amp;Type:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="276"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="390"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="293"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="407"/>
         <source>Le&amp;vel:</source>
         <translation>&amp;Niveau:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="278"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="387"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="295"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="404"/>
         <source>One value per line, in order.</source>
         <translation>Eén waarde per regel, op volgorde.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="280"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="388"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="297"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="405"/>
         <source>&amp;Values:</source>
         <translation>&amp;Waarden:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="301"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="318"/>
         <source>Edit the label of %1</source>
         <translation>Label van %1 bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="306"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="323"/>
         <source>Edit the definition of %1</source>
         <translation>Definitie van %1 bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="311"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="328"/>
         <source>Edit the decision rules of %1</source>
         <translation>Beslisregels van %1 bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="316"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="333"/>
         <source>Edit the examples of %1</source>
         <translation>Voorbeelden van %1 bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="320"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="337"/>
         <source>Edit an attribute&apos;s key</source>
         <translation>Sleutel van een kenmerk bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="324"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="341"/>
         <source>Edit an attribute&apos;s label</source>
         <translation>Label van een kenmerk bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="330"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="347"/>
         <source>Change an attribute&apos;s type</source>
         <translation>Type van een kenmerk wijzigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="338"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="355"/>
         <source>Change an attribute&apos;s level</source>
         <translation>Niveau van een kenmerk wijzigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="343"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="360"/>
         <source>Edit an attribute&apos;s values</source>
         <translation>Waarden van een kenmerk bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="364"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="381"/>
         <source>Questions answered once per article, such as which function dominates it.</source>
         <translation>Vragen die één keer per artikel worden beantwoord, zoals welke functie erin overheerst.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="371"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="388"/>
         <source>&amp;Add item</source>
         <translation>Item &amp;toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="372"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="389"/>
         <source>Re&amp;move item</source>
         <translation>Item &amp;verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="385"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="402"/>
         <source>&amp;Question:</source>
         <translation>&amp;Vraag:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="406"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="423"/>
         <source>Edit an item&apos;s key</source>
         <translation>Sleutel van een item bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="411"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="428"/>
         <source>Edit an item&apos;s question</source>
         <translation>Vraag van een item bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="416"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="433"/>
         <source>Edit an item&apos;s values</source>
         <translation>Waarden van een item bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="421"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="438"/>
         <source>Change an item&apos;s level</source>
         <translation>Niveau van een item wijzigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="478"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="495"/>
         <source>Editing a draft of version %1; saving makes version %2.</source>
         <translation>U bewerkt een concept van versie %1; opslaan maakt versie %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="555"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="572"/>
         <source>Add an item</source>
         <translation>Een item toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="564"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="581"/>
         <source>Add an attribute to %1</source>
         <translation>Een kenmerk toevoegen aan %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="581"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="598"/>
         <source>Remove the item “%1”</source>
         <translation>Het item ‘%1’ verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="589"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="606"/>
         <source>Remove the attribute “%1”</source>
         <translation>Het kenmerk ‘%1’ verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="660"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="677"/>
         <source>Fix the marked field first.</source>
         <translation>Verbeter eerst het gemarkeerde veld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="717"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="734"/>
         <source>Version %1 was added since this draft was started from version %2; nothing was saved. Close the editor and open it again to edit the new version.</source>
         <translation>Versie %1 is toegevoegd sinds dit concept vanuit versie %2 is begonnen; er is niets opgeslagen. Sluit de editor en open hem opnieuw om de nieuwe versie te bewerken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="731"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="776"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="748"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="795"/>
         <source>The codebook was not saved: the marked field needs a change first.</source>
         <translation>Het codeboek is niet opgeslagen: het gemarkeerde veld moet eerst worden gewijzigd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="736"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="753"/>
         <source>Nothing was saved: the draft is the same as version %1.</source>
         <translation>Er is niets opgeslagen: het concept is gelijk aan versie %1.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="760"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="780"/>
         <source>Codebook version %1 saved. %n annotation(s) made under an older version are now outdated; %2 of them belong to a function that changed and need a re-check.</source>
         <translation>
             <numerusform>Codeboekversie %1 opgeslagen. %n annotatie gemaakt onder een oudere versie is nu verouderd; %2 daarvan horen bij een gewijzigde functie en moeten opnieuw worden gecontroleerd.</numerusform>
@@ -7914,17 +7927,17 @@ Bijna-kopie van %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="780"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="799"/>
         <source>Save as version %1</source>
         <translation>Opslaan als versie %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="782"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="801"/>
         <source>What changes against version %1:</source>
         <translation>Wat er verandert ten opzichte van versie %1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="788"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="807"/>
         <source>&amp;Note (what changed and why):</source>
         <translation>&amp;Notitie (wat er is veranderd en waarom):</translation>
     </message>
@@ -8168,12 +8181,12 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::CodingSession</name>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="141"/>
+        <location filename="../app/desktop/coding_session.cpp" line="156"/>
         <source>“%1” (%2), similarity %3</source>
         <translation>‘%1’ (%2), gelijkenis %3</translation>
     </message>
     <message>
-        <location filename="../app/desktop/coding_session.cpp" line="235"/>
+        <location filename="../app/desktop/coding_session.cpp" line="250"/>
         <source>%1 is read-only: you can read, compare and compute, but nothing is saved. To code, copy the file to a folder you may write to and open the copy.</source>
         <translation>%1 is alleen-lezen: u kunt lezen, vergelijken en berekenen, maar er wordt niets opgeslagen. Kopieer het bestand om te coderen naar een map waarin u mag schrijven en open de kopie.</translation>
     </message>
@@ -8620,32 +8633,32 @@ Bijna-kopie van %2</translation>
         <translation>Gouden standaard %1 beslist door %2 op %3%4</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="862"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="864"/>
         <source>%1. Undo with %2.</source>
         <translation>%1. Ongedaan maken met %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="890"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="892"/>
         <source>Choose one coder&apos;s span to accept (or several to merge).</source>
         <translation>Kies het fragment van één codeur om te accepteren (of meerdere om samen te voegen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="918"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="920"/>
         <source>Choose a passage first.</source>
         <translation>Kies eerst een passage.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="957"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="959"/>
         <source>Choose the spans to reject (that are not rejected yet).</source>
         <translation>Kies de fragmenten om te verwerpen (die nog niet verworpen zijn).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="969"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="971"/>
         <source>Choose one gold span to withdraw.</source>
         <translation>Kies één fragment uit de gouden standaard om terug te trekken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="1015"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="1017"/>
         <source>There is no agreed passage left to accept in this article.</source>
         <translation>Er is in dit artikel geen overeenstemmende passage meer om te accepteren.</translation>
     </message>
@@ -8655,7 +8668,7 @@ Bijna-kopie van %2</translation>
         <translation>Antwoorden op items op artikelniveau</translation>
     </message>
     <message>
-        <location filename="../app/desktop/compare/comparison_window.cpp" line="995"/>
+        <location filename="../app/desktop/compare/comparison_window.cpp" line="997"/>
         <source>Choose an item with a gold answer to withdraw.</source>
         <translation>Kies een item met een antwoord van de gouden standaard om in te trekken.</translation>
     </message>
@@ -8744,96 +8757,106 @@ Bijna-kopie van %2</translation>
     </message>
     <message>
         <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="138"/>
+        <source>withdrawn assignment, coded in a copy</source>
+        <translation>ingetrokken toewijzing, gecodeerd in een kopie</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="140"/>
         <source>project&apos;s version kept</source>
         <translation>versie van het project behouden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="139"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="141"/>
         <source>other version taken</source>
         <translation>andere versie overgenomen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="140"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="142"/>
         <source>open</source>
         <translation>open</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="143"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="145"/>
         <source>the project</source>
         <translation>het project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="144"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="146"/>
         <source>the team server</source>
         <translation>de teamserver</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="145"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="147"/>
         <source>copy %1</source>
         <translation>kopie %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="160"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="162"/>
         <source>?</source>
         <translation>?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="182"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="184"/>
         <source>&lt;p&gt;&lt;i&gt;(none)&lt;/i&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;&lt;i&gt;(geen)&lt;/i&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="185"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="187"/>
         <source>&lt;p&gt;&lt;b&gt;Deleted&lt;/b&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;&lt;b&gt;Verwijderd&lt;/b&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="201"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="203"/>
         <source>&lt;p&gt;Note: %1&lt;/p&gt;</source>
         <translation>&lt;p&gt;Notitie: %1&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="203"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="205"/>
         <source>&lt;p&gt;Confidence: %1&lt;/p&gt;</source>
         <translation>&lt;p&gt;Betrouwbaarheidsscore: %1&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="205"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="207"/>
         <source>&lt;p&gt;Answer to %1: &lt;b&gt;%2&lt;/b&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;Antwoord op %1: &lt;b&gt;%2&lt;/b&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="210"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="212"/>
         <source>&lt;p&gt;Status: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;Status: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="212"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="214"/>
         <source>&lt;p&gt;Link: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;Koppeling: &lt;b&gt;%1&lt;/b&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="216"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="218"/>
         <source>&lt;p&gt;&lt;small&gt;Changed %1&lt;/small&gt;&lt;/p&gt;</source>
         <translation>&lt;p&gt;&lt;small&gt;Gewijzigd %1&lt;/small&gt;&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="232"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="234"/>
         <source>No merge has found a conflict.</source>
         <translation>Geen enkele samenvoeging heeft een conflict gevonden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="233"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="235"/>
         <source>No conflicts wait for a decision.</source>
         <translation>Er wachten geen conflicten op een beslissing.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="257"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="245"/>
+        <source>&lt;p&gt;The project withdrew this assignment (a withdrawn draw) while %1 coded the article in a copy; the codings are in the project, but they do not count while the assignment stays withdrawn. Keep the project&apos;s version to leave it withdrawn, or take this version to assign the article to %1 again.&lt;/p&gt;</source>
+        <translation>&lt;p&gt;Het project heeft deze toewijzing ingetrokken (een ingetrokken trekking) terwijl %1 het artikel in een kopie codeerde; de coderingen staan in het project, maar tellen niet mee zolang de toewijzing ingetrokken blijft. Behoud de versie van het project om haar ingetrokken te laten, of neem deze versie over om het artikel opnieuw aan %1 toe te wijzen.&lt;/p&gt;</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="269"/>
         <source>Choose an open conflict first.</source>
         <translation>Kies eerst een open conflict.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="273"/>
+        <location filename="../app/desktop/conflicts/conflicts_window.cpp" line="285"/>
         <source>%1. Undo with Edit → Undo.</source>
         <translation>%1. Ongedaan maken met Bewerken → Ongedaan maken.</translation>
     </message>
@@ -10148,61 +10171,61 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::LeadWindows</name>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="188"/>
         <source>Write the reliability report</source>
         <translation>Het betrouwbaarheidsrapport schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="197"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="189"/>
         <source>Web page (*.html);;PDF document (*.pdf)</source>
         <translation>Webpagina (*.html);;PDF-document (*.pdf)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="204"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="196"/>
         <source>Reliability report</source>
         <translation>Betrouwbaarheidsrapport</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="208"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="200"/>
         <source>The reliability report was written to %1.</source>
         <translation>Het betrouwbaarheidsrapport is geschreven naar %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="209"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="201"/>
         <source>&amp;Open</source>
         <translation>&amp;Openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="210"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="249"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="202"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="241"/>
         <source>Open the &amp;folder</source>
         <translation>De &amp;map openen</translation>
     </message>
     <message>
+        <location filename="../app/desktop/lead_windows.cpp" line="213"/>
         <location filename="../app/desktop/lead_windows.cpp" line="221"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="242"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="234"/>
         <source>Coder copy</source>
         <translation>Codeurskopie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="230"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="222"/>
         <source>A coder copy holds only the articles assigned to this coder, the codebook and the coder&apos;s own codings. Whose copy?</source>
         <translation>Een codeurskopie bevat alleen de artikelen die aan deze codeur zijn toegewezen, het codeboek en de eigen coderingen van de codeur. Voor wie is de kopie?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="236"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="228"/>
         <source>Write the coder copy</source>
         <translation>De codeurskopie schrijven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="237"/>
-        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="229"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
         <source>Fourfold project (*.fourfold)</source>
         <translation>Fourfold-project (*.fourfold)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="246"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="238"/>
         <source>Wrote %1 for %2: %n article(s), %3 span(s).</source>
         <translation>
             <numerusform>%1 geschreven voor %2: %n artikel, %3 fragment(en).</numerusform>
@@ -10210,17 +10233,17 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="259"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="251"/>
         <source>Merge returned coder copies</source>
         <translation>Teruggekomen codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="256"/>
         <source>Merge coder copies</source>
         <translation>Codeurskopieën samenvoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="265"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="257"/>
         <source>Nothing was merged.
 
 %1</source>
@@ -10229,17 +10252,17 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="272"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="264"/>
         <source>%1 (%2): already merged, nothing new.</source>
         <translation>%1 (%2): al samengevoegd, niets nieuws.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="274"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="266"/>
         <source>%1 (%2): %3 new, %4 changed (%5 deleted), %6 conflict(s).</source>
         <translation>%1 (%2): %3 nieuw, %4 gewijzigd (%5 verwijderd), %6 conflict(en).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="282"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="276"/>
         <source>Merged %n copy(ies); %1 conflict(s): the later change is kept, the other waits for you to decide (Lead → Merge conflicts…).</source>
         <translation>
             <numerusform>%n kopie samengevoegd; %1 conflict(en): de latere wijziging blijft, de andere wacht op uw beslissing (Coördinator → Samenvoegconflicten…).</numerusform>
@@ -10247,12 +10270,12 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/lead_windows.cpp" line="289"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="283"/>
         <source>&amp;Decide conflicts</source>
         <translation>Conflicten &amp;beslissen</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/lead_windows.cpp" line="286"/>
+        <location filename="../app/desktop/lead_windows.cpp" line="280"/>
         <source>Merged %n copy(ies).</source>
         <translation>
             <numerusform>%n kopie samengevoegd.</numerusform>
@@ -10263,7 +10286,7 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
 <context>
     <name>fourfold::MainWindow</name>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="923"/>
+        <location filename="../app/desktop/main_window.cpp" line="930"/>
         <source>Fourfold</source>
         <translation>Fourfold</translation>
     </message>
@@ -10415,13 +10438,13 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="373"/>
-        <location filename="../app/desktop/main_window.cpp" line="543"/>
+        <location filename="../app/desktop/main_window.cpp" line="544"/>
         <source>&amp;Undo</source>
         <translation>&amp;Ongedaan maken</translation>
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="376"/>
-        <location filename="../app/desktop/main_window.cpp" line="546"/>
+        <location filename="../app/desktop/main_window.cpp" line="547"/>
         <source>&amp;Redo</source>
         <translation>Opn&amp;ieuw</translation>
     </message>
@@ -10581,52 +10604,52 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <translation>Er is niemand gekozen om te coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="525"/>
+        <location filename="../app/desktop/main_window.cpp" line="526"/>
         <source>Span</source>
         <translation>Fragment</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="526"/>
+        <location filename="../app/desktop/main_window.cpp" line="527"/>
         <source>Codebook</source>
         <translation>Codeboek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="543"/>
+        <location filename="../app/desktop/main_window.cpp" line="544"/>
         <source>&amp;Undo %1</source>
         <translation>&amp;Ongedaan maken: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="546"/>
+        <location filename="../app/desktop/main_window.cpp" line="547"/>
         <source>&amp;Redo %1</source>
         <translation>Opn&amp;ieuw: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="606"/>
+        <location filename="../app/desktop/main_window.cpp" line="613"/>
         <source>The team server asks for your password to sync. Your work stays in this file until it can be sent.</source>
         <translation>De teamserver vraagt uw wachtwoord om te synchroniseren. Uw werk blijft in dit bestand tot het verzonden kan worden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="608"/>
+        <location filename="../app/desktop/main_window.cpp" line="615"/>
         <source>Enter &amp;password…</source>
         <translation>&amp;Wachtwoord invoeren…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="620"/>
+        <location filename="../app/desktop/main_window.cpp" line="627"/>
         <source>Team server password</source>
         <translation>Wachtwoord van de teamserver</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="621"/>
+        <location filename="../app/desktop/main_window.cpp" line="628"/>
         <source>Password of %1 on the team server:</source>
         <translation>Wachtwoord van %1 op de teamserver:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="757"/>
+        <location filename="../app/desktop/main_window.cpp" line="764"/>
         <source>Every article in the list is done.</source>
         <translation>Alle artikelen in de lijst zijn klaar.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/main_window.cpp" line="779"/>
+        <location filename="../app/desktop/main_window.cpp" line="786"/>
         <source>%n article(s) contain &quot;%1&quot;.</source>
         <translation>
             <numerusform>%n artikel bevat ‘%1’.</numerusform>
@@ -10634,127 +10657,127 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="785"/>
+        <location filename="../app/desktop/main_window.cpp" line="792"/>
         <source>New project</source>
         <translation>Nieuw project</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="795"/>
+        <location filename="../app/desktop/main_window.cpp" line="802"/>
         <source>Cannot create project</source>
         <translation>Project kan niet worden aangemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="807"/>
+        <location filename="../app/desktop/main_window.cpp" line="814"/>
         <source>Import articles</source>
         <translation>Artikelen importeren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="808"/>
+        <location filename="../app/desktop/main_window.cpp" line="815"/>
         <source>Articles (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</source>
         <translation>Artikelen (*.txt *.text *.html *.htm *.jsonl *.ndjson *.csv *.rss *.atom *.nitf *.newsml *.xml *.docx *.odt *.pdf *.epub)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="854"/>
+        <location filename="../app/desktop/main_window.cpp" line="861"/>
         <source>&lt;h3&gt;Choose an article&lt;/h3&gt;&lt;p&gt;Pick an article in the list on the left to start coding it.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Kies een artikel&lt;/h3&gt;&lt;p&gt;Kies links in de lijst een artikel om het te gaan coderen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="857"/>
+        <location filename="../app/desktop/main_window.cpp" line="864"/>
         <source>&lt;h3&gt;No articles yet&lt;/h3&gt;&lt;p&gt;Import the articles of the study: plain text, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS or Atom feeds, NITF or NewsML-G2. Then assign them to coders in Lead → Study design.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog geen artikelen&lt;/h3&gt;&lt;p&gt;Importeer de artikelen van het onderzoek: platte tekst, HTML, JSON Lines, CSV, DOCX, ODT, PDF, EPUB, RSS- of Atom-feeds, NITF of NewsML-G2. Wijs ze daarna toe aan codeurs in Coördinator → Onderzoeksopzet.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="862"/>
+        <location filename="../app/desktop/main_window.cpp" line="869"/>
         <source>&lt;h3&gt;Nothing to code yet&lt;/h3&gt;&lt;p&gt;No articles are assigned to you in this project. Your lead assigns them; when they have, open the project again, or open the coder copy they send you.&lt;/p&gt;</source>
         <translation>&lt;h3&gt;Nog niets te coderen&lt;/h3&gt;&lt;p&gt;In dit project zijn geen artikelen aan u toegewezen. Uw coördinator wijst ze toe; open daarna het project opnieuw, of open de codeurskopie die u wordt gestuurd.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="894"/>
+        <location filename="../app/desktop/main_window.cpp" line="901"/>
         <source>The language changes when Fourfold starts again.</source>
         <translation>De taal verandert wanneer Fourfold opnieuw wordt gestart.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="907"/>
+        <location filename="../app/desktop/main_window.cpp" line="914"/>
         <source>Not saved: %1. %2</source>
         <translation>Niet opgeslagen: %1. %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="908"/>
+        <location filename="../app/desktop/main_window.cpp" line="915"/>
         <source>&amp;Retry</source>
         <translation>&amp;Opnieuw proberen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="914"/>
+        <location filename="../app/desktop/main_window.cpp" line="921"/>
         <source>&amp;Discard</source>
         <translation>&amp;Verwerpen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="924"/>
+        <location filename="../app/desktop/main_window.cpp" line="931"/>
         <source>No project open</source>
         <translation>Geen project geopend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="928"/>
+        <location filename="../app/desktop/main_window.cpp" line="935"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="928"/>
+        <location filename="../app/desktop/main_window.cpp" line="935"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="930"/>
+        <location filename="../app/desktop/main_window.cpp" line="937"/>
         <source>%1 — read-only, as %2 (%3) — Fourfold</source>
         <translation>%1 — alleen-lezen, als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="932"/>
+        <location filename="../app/desktop/main_window.cpp" line="939"/>
         <source>%1 — coding as %2 (%3) — Fourfold</source>
         <translation>%1 — coderen als %2 (%3) — Fourfold</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="936"/>
+        <location filename="../app/desktop/main_window.cpp" line="943"/>
         <source>Reading as %1 · %2 · read-only file: nothing is saved</source>
         <translation>Lezen als %1 · %2 · alleen-lezenbestand: er wordt niets opgeslagen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="939"/>
+        <location filename="../app/desktop/main_window.cpp" line="946"/>
         <source>Coding as %1 · %2 · lead: every article</source>
         <translation>Coderen als %1 · %2 · coördinator: alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="940"/>
+        <location filename="../app/desktop/main_window.cpp" line="947"/>
         <source>Coding as %1 · %2 · blind: only your own spans</source>
         <translation>Coderen als %1 · %2 · blind: alleen je eigen fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="948"/>
+        <location filename="../app/desktop/main_window.cpp" line="955"/>
         <source>The comparison window lists its own keys with %1.</source>
         <translation>Het vergelijkingsvenster toont zijn eigen toetsen met %1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="952"/>
+        <location filename="../app/desktop/main_window.cpp" line="959"/>
         <source>Keyboard shortcuts</source>
         <translation>Sneltoetsen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="874"/>
+        <location filename="../app/desktop/main_window.cpp" line="881"/>
         <source>Open project</source>
         <translation>Project openen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/main_window.cpp" line="785"/>
-        <location filename="../app/desktop/main_window.cpp" line="874"/>
+        <location filename="../app/desktop/main_window.cpp" line="792"/>
+        <location filename="../app/desktop/main_window.cpp" line="881"/>
         <source>Fourfold projects (*.fourfold)</source>
         <translation>Fourfold-projecten (*.fourfold)</translation>
     </message>
     <message>
         <location filename="../app/desktop/main_window.cpp" line="146"/>
-        <location filename="../app/desktop/main_window.cpp" line="639"/>
-        <location filename="../app/desktop/main_window.cpp" line="800"/>
-        <location filename="../app/desktop/main_window.cpp" line="878"/>
-        <location filename="../app/desktop/main_window.cpp" line="887"/>
+        <location filename="../app/desktop/main_window.cpp" line="646"/>
+        <location filename="../app/desktop/main_window.cpp" line="807"/>
+        <location filename="../app/desktop/main_window.cpp" line="885"/>
+        <location filename="../app/desktop/main_window.cpp" line="894"/>
         <source>Cannot open project</source>
         <translation>Project kan niet worden geopend</translation>
     </message>
@@ -10986,7 +11009,7 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
     </message>
     <message>
         <location filename="../app/desktop/study/progress_board_window.cpp" line="83"/>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="180"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="182"/>
         <source>Done</source>
         <translation>Klaar</translation>
     </message>
@@ -11041,17 +11064,17 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <translation>Standaard uit: tijd wordt alleen opgeteld over alle codeurs getoond. Vastleggen en tonen hoe lang iedere persoon werkt, kan gelden als het monitoren van werknemers, waarvoor de instemming van de codeurs of van een ondernemingsraad nodig kan zijn. Zet dit alleen aan als je onderzoek die instemming heeft; de wijziging wordt in het logboek van het project geschreven. Alleen een coördinator kan dit omzetten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="179"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="181"/>
         <source>%1 of %2</source>
         <translation>%1 van %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="229"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="231"/>
         <source>&lt;b&gt;No assignments yet.&lt;/b&gt; Plan them in the study design window.</source>
         <translation>&lt;b&gt;Nog geen toewijzingen.&lt;/b&gt; Plan ze in het venster Onderzoeksopzet.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/progress_board_window.cpp" line="230"/>
+        <location filename="../app/desktop/study/progress_board_window.cpp" line="232"/>
         <source>&lt;b&gt;%1 of %2 assignments done&lt;/b&gt; · %3 of active coding time in all.</source>
         <translation>&lt;b&gt;%1 van %2 toewijzingen klaar&lt;/b&gt; · %3 actieve codeertijd in totaal.</translation>
     </message>
@@ -12087,252 +12110,252 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
 <context>
     <name>fourfold::StudyDesignWindow</name>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="113"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="117"/>
         <source>Study design — %1</source>
         <translation>Onderzoeksopzet — %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="115"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="119"/>
         <source>Plan who codes what: draw the reliability sample that every reliability coder codes, deal the rest of the articles, and keep the codebook&apos;s versions in view. Nothing is written until you commit a plan.</source>
         <translation>Plan wie wat codeert: trek de betrouwbaarheidssteekproef die elke betrouwbaarheidscodeur codeert, verdeel de overige artikelen en houd de versies van het codeboek in het oog. Er wordt niets weggeschreven totdat je een plan vastlegt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="124"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="128"/>
         <source>Reliability sample</source>
         <translation>Betrouwbaarheidssteekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="125"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="129"/>
         <source>Assign the rest</source>
         <translation>De rest toewijzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="126"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="130"/>
         <source>Assignments</source>
         <translation>Toewijzingen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="127"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="131"/>
         <source>Codebook versions</source>
         <translation>Codeboekversies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="166"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="181"/>
         <source>lead</source>
         <translation>coördinator</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="166"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="181"/>
         <source>coder</source>
         <translation>codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="196"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="211"/>
         <source>The seed must be a whole number from 0 to 18446744073709551615; &quot;%1&quot; is not.</source>
         <translation>De seed moet een geheel getal van 0 tot 18446744073709551615 zijn; ‘%1’ is dat niet.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="216"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="326"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="231"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="341"/>
         <source>Draw</source>
         <translation>Trekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="222"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="237"/>
         <source>A pilot sample is coded before the codebook is final and is not part of the reliability sample.</source>
         <translation>Een pilotsteekproef wordt gecodeerd voordat het codeboek definitief is en hoort niet bij de betrouwbaarheidssteekproef.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="224"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="793"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="239"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="805"/>
         <source>Phase:</source>
         <translation>Fase:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="229"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="795"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="244"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="807"/>
         <source>Articles:</source>
         <translation>Artikelen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="231"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="246"/>
         <source>Share of the frame:</source>
         <translation>Aandeel van het steekproefkader:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="254"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="269"/>
         <source>Size:</source>
         <translation>Omvang:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="258"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="273"/>
         <source>Simple random sample</source>
         <translation>Enkelvoudige aselecte steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="259"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="274"/>
         <source>Stratified by outlet</source>
         <translation>Gestratificeerd naar medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="260"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="275"/>
         <source>Stratified by language</source>
         <translation>Gestratificeerd naar taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="261"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="276"/>
         <source>Stratified by topic</source>
         <translation>Gestratificeerd naar onderwerp</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="262"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="277"/>
         <source>Stratified draws allocate the sample to each group in proportion to its size in the frame.</source>
         <translation>Bij gestratificeerde trekkingen krijgt elke groep een deel van de steekproef naar verhouding van haar omvang in het kader.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="264"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="279"/>
         <source>Method:</source>
         <translation>Methode:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="266"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="281"/>
         <source>Leave near copies out of the sampling frame</source>
         <translation>Bijna-kopieën uit het steekproefkader weglaten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="269"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="284"/>
         <source>An article found at import to be a near copy of an older one (the same story with small edits) is not drawn; the older article stays in the frame.</source>
         <translation>Een artikel dat bij de import is herkend als bijna-kopie van een ouder artikel (hetzelfde verhaal met kleine wijzigingen), wordt niet getrokken; het oudere artikel blijft in het steekproefkader.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="278"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="634"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="293"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="646"/>
         <source>Seed</source>
         <translation>Seed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="280"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="295"/>
         <source>New seed</source>
         <translation>Nieuwe seed</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="285"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="636"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="300"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="648"/>
         <source>Seed:</source>
         <translation>Seed:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="286"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="301"/>
         <source>The seed is recorded with the draw: the same seed on the same project draws the same articles on any computer.</source>
         <translation>De seed wordt bij de trekking vastgelegd: dezelfde seed op hetzelfde project trekt op elke computer dezelfde artikelen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="292"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="307"/>
         <source>Reliability coders</source>
         <translation>Betrouwbaarheidscodeurs</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="294"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="309"/>
         <source>Coded by all of:</source>
         <translation>Gecodeerd door allen van:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="296"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="311"/>
         <source>Minimum sample (Krippendorff)</source>
         <translation>Minimale steekproef (Krippendorff)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="305"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="320"/>
         <source>The smallest alpha you would still accept: 0.800 for firm conclusions, 0.667 for tentative ones (Krippendorff).</source>
         <translation>De kleinste alfa die je nog zou accepteren: 0.800 voor stellige conclusies, 0.667 voor voorlopige (Krippendorff).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="307"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="322"/>
         <source>α_min:</source>
         <translation>α_min:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="312"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="327"/>
         <source>Significance level:</source>
         <translation>Significantieniveau:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="320"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="335"/>
         <source>The expected share of the rarest value: 0.25 when four values are equally frequent.</source>
         <translation>Het verwachte aandeel van de zeldzaamste waarde: 0.25 als vier waarden even vaak voorkomen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="322"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="337"/>
         <source>Rarest value&apos;s share:</source>
         <translation>Aandeel zeldzaamste waarde:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="328"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="343"/>
         <source>Draw the sample and show it; nothing is written yet.</source>
         <translation>De steekproef trekken en tonen; er wordt nog niets weggeschreven.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="329"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="344"/>
         <source>Commit the draw</source>
         <translation>Trekking vastleggen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="331"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="346"/>
         <source>Assign the drawn articles to every chosen coder and record the draw with its seed.</source>
         <translation>De getrokken artikelen aan elke gekozen codeur toewijzen en de trekking met haar seed vastleggen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="382"/>
         <source>Stratum</source>
         <translation>Stratum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="382"/>
         <source>In the frame</source>
         <translation>In het kader</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="367"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="382"/>
         <source>Drawn</source>
         <translation>Getrokken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="369"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="384"/>
         <source>Drawn articles:</source>
         <translation>Getrokken artikelen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="372"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="387"/>
         <source>Drawn articles</source>
         <translation>Getrokken artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="430"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="445"/>
         <source>&lt;b&gt;No sample is drawn yet for the phase %1.&lt;/b&gt; Choose the size, method, seed and coders, then press &lt;i&gt;Draw&lt;/i&gt; to see the sample and whether it is large enough.</source>
         <translation>&lt;b&gt;Er is nog geen steekproef voor de fase %1 getrokken.&lt;/b&gt; Kies de omvang, methode, seed en codeurs en druk dan op &lt;i&gt;Trekken&lt;/i&gt; om de steekproef te zien en of die groot genoeg is.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="514"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="526"/>
         <source>simple random sample</source>
         <translation>enkelvoudige aselecte steekproef</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="516"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="528"/>
         <source>stratified by outlet</source>
         <translation>gestratificeerd naar medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="518"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="530"/>
         <source>stratified by language</source>
         <translation>gestratificeerd naar taal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="520"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="532"/>
         <source>stratified by topic</source>
         <translation>gestratificeerd naar onderwerp</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="521"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="533"/>
         <source>%n article(s) of a frame of %1, %2, seed %3, coded by %4.</source>
         <translation>
             <numerusform>%n artikel uit een kader van %1, %2, seed %3, gecodeerd door %4.</numerusform>
@@ -12340,42 +12363,42 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="529"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="541"/>
         <source>&lt;b&gt;%1 sample drawn on %2.&lt;/b&gt; %3 The draw is recorded; it can be withdrawn until someone codes one of its articles, and then drawn again.</source>
         <translation>&lt;b&gt;Steekproef voor fase %1 getrokken op %2.&lt;/b&gt; %3 De trekking is vastgelegd; ze kan worden ingetrokken tot iemand een van haar artikelen codeert, en daarna opnieuw worden getrokken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="535"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="547"/>
         <source>&lt;b&gt;Planned draw, not yet committed.&lt;/b&gt; %1 Press &lt;i&gt;Commit the draw&lt;/i&gt; to assign it.</source>
         <translation>&lt;b&gt;Geplande trekking, nog niet vastgelegd.&lt;/b&gt; %1 Druk op &lt;i&gt;Trekking vastleggen&lt;/i&gt; om haar toe te wijzen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="544"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="556"/>
         <source>No minimum sample can be computed for these settings.</source>
         <translation>Voor deze instellingen kan geen minimale steekproef worden berekend.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="546"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="558"/>
         <source>&lt;b&gt;Krippendorff&apos;s minimum: %1 values&lt;/b&gt; per variable for α_min = %2 at p = %3, with the rarest value at %4 %.</source>
         <translation>&lt;b&gt;Krippendorffs minimum: %1 waarden&lt;/b&gt; per variabele voor α_min = %2 bij p = %3, met de zeldzaamste waarde op %4 %.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="555"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="567"/>
         <source>Unit</source>
         <translation>Eenheid</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="555"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="567"/>
         <source>Values the draw delivers</source>
         <translation>Waarden die de trekking oplevert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="559"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="571"/>
         <source>✓ enough</source>
         <translation>✓ genoeg</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="560"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="572"/>
         <source>✗ %n short</source>
         <translation>
             <numerusform>✗ %n te weinig</numerusform>
@@ -12383,103 +12406,103 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="568"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="580"/>
         <source>Article-level items</source>
         <translation>Items op artikelniveau</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="569"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="581"/>
         <source>Paragraphs</source>
         <translation>Alinea&apos;s</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="570"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="582"/>
         <source>Sentences</source>
         <translation>Zinnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="573"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="585"/>
         <source>Values are units × coders. For spans, count the codings of each function: a rare function (often the remedy) may need a larger or stratified sample.</source>
         <translation>Waarden zijn eenheden × codeurs. Tel voor fragmenten de coderingen van elke functie: een zeldzame functie (vaak de oplossing) kan een grotere of gestratificeerde steekproef nodig hebben.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="610"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="622"/>
         <source>Deal the rest</source>
         <translation>De rest verdelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="612"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="624"/>
         <source>Every article with no assignment yet goes to production coding, shuffled with the seed and dealt in turn.</source>
         <translation>Elk artikel zonder toewijzing gaat naar de hoofdcodering, geschud met de seed en om de beurt uitgedeeld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="618"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="630"/>
         <source>Single-coded: one coder per article</source>
         <translation>Enkel gecodeerd: één codeur per artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="621"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="633"/>
         <source>Double-coded: two coders per article, pairs rotating</source>
         <translation>Dubbel gecodeerd: twee codeurs per artikel, wisselende paren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="626"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="638"/>
         <source>Coding:</source>
         <translation>Codering:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="629"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="641"/>
         <source>Production coders</source>
         <translation>Codeurs hoofdcodering</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="631"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="801"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="643"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="813"/>
         <source>Coders:</source>
         <translation>Codeurs:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="638"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="650"/>
         <source>Plan</source>
         <translation>Plannen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="640"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="652"/>
         <source>Assign</source>
         <translation>Toewijzen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="660"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="672"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="786"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Article</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="660"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="763"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="672"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="775"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="786"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Coder</source>
         <translation>Codeur</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="679"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="691"/>
         <source>Press &lt;i&gt;Plan&lt;/i&gt; to see who would code which article.</source>
         <translation>Druk op &lt;i&gt;Plannen&lt;/i&gt; om te zien wie welk artikel zou coderen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="719"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="731"/>
         <source>Every article is assigned already: there is no rest to deal.</source>
         <translation>Elk artikel is al toegewezen: er is geen rest te verdelen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="724"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="736"/>
         <source>%1: %2</source>
         <translation>%1: %2</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="725"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="737"/>
         <source>&lt;b&gt;Planned, not yet assigned:&lt;/b&gt; %n article(s); load per coder %1. Press &lt;i&gt;Assign&lt;/i&gt; to write the plan.</source>
         <translation>
             <numerusform>&lt;b&gt;Gepland, nog niet toegewezen:&lt;/b&gt; %n artikel; belasting per codeur %1. Druk op &lt;i&gt;Toewijzen&lt;/i&gt; om het plan weg te schrijven.</numerusform>
@@ -12487,163 +12510,163 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="747"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="760"/>
         <source>The rest is assigned.</source>
         <translation>De rest is toegewezen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="762"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
         <source>&lt;b&gt;Articles per coder and phase&lt;/b&gt; (done / assigned)</source>
         <translation>&lt;b&gt;Artikelen per codeur en fase&lt;/b&gt; (klaar / toegewezen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="766"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="778"/>
         <source>Total</source>
         <translation>Totaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="773"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="785"/>
         <source>&lt;b&gt;Every assignment&lt;/b&gt;</source>
         <translation>&lt;b&gt;Alle toewijzingen&lt;/b&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="786"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Phase</source>
         <translation>Fase</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="774"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="786"/>
         <source>Status</source>
         <translation>Status</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="783"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="795"/>
         <source>Give articles to coders</source>
         <translation>Artikelen aan codeurs geven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="785"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="797"/>
         <source>Every chosen coder gets every chosen article, e.g. the training articles that the lead has master-coded.</source>
         <translation>Elke gekozen codeur krijgt elk gekozen artikel, bijv. de trainingsartikelen die de coördinator als master heeft gecodeerd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="798"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="810"/>
         <source>Articles to give</source>
         <translation>Te geven artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="804"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="816"/>
         <source>Coders to give to</source>
         <translation>Codeurs die ze krijgen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="806"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="818"/>
         <source>Give</source>
         <translation>Geven</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="836"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="848"/>
         <source>done</source>
         <translation>klaar</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="837"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="849"/>
         <source>started</source>
         <translation>begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="838"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="850"/>
         <source>not started</source>
         <translation>niet begonnen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="894"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="907"/>
         <source>Every chosen coder has every chosen article in this phase already.</source>
         <translation>Elke gekozen codeur heeft elk gekozen artikel in deze fase al.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="929"/>
         <source>Version</source>
         <translation>Versie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="929"/>
         <source>Made</source>
         <translation>Gemaakt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="929"/>
         <source>By</source>
         <translation>Door</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="916"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="929"/>
         <source>Note</source>
         <translation>Notitie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="920"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="933"/>
         <source>Add a version from a file…</source>
         <translation>Versie uit een bestand toevoegen…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="922"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="935"/>
         <source>Read a codebook JSON file and store it as the next version, with a note that says what changed and why.</source>
         <translation>Een JSON-codeboekbestand inlezen en als volgende versie opslaan, met een notitie die zegt wat er veranderd is en waarom.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="935"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="948"/>
         <source>Compare version</source>
         <translation>Versie vergelijken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="937"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="950"/>
         <source>with</source>
         <translation>met</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="945"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="958"/>
         <source>Changes between the versions</source>
         <translation>Wijzigingen tussen de versies</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="953"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="966"/>
         <source>Only those to re-check</source>
         <translation>Alleen die opnieuw te controleren zijn</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Function</source>
         <translation>Functie</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Made under</source>
         <translation>Gemaakt onder</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="957"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="970"/>
         <source>Re-check</source>
         <translation>Opnieuw controleren</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1027"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1040"/>
         <source>yes — its function changed</source>
         <translation>ja — de functie is veranderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1027"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1040"/>
         <source>no</source>
         <translation>nee</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1037"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1050"/>
         <source>&lt;b&gt;Every annotation was made under the current version (%1).&lt;/b&gt;</source>
         <translation>&lt;b&gt;Elke annotatie is gemaakt onder de huidige versie (%1).&lt;/b&gt;</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1038"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1051"/>
         <source>&lt;b&gt;%n annotation(s) were made under an older version&lt;/b&gt; than the current one (%1); %2 of them belong to a function whose definition, rules, examples or attributes changed since, and should be re-checked.</source>
         <translation>
             <numerusform>&lt;b&gt;%n annotatie is gemaakt onder een oudere versie&lt;/b&gt; dan de huidige (%1); %2 daarvan hoort bij een functie waarvan de definitie, regels, voorbeelden of kenmerken sindsdien veranderd zijn, en moet opnieuw worden gecontroleerd.</numerusform>
@@ -12651,93 +12674,93 @@ Klik op een fragment in de tekst of op de framekaart om het te bewerken, of sele
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1053"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1066"/>
         <source>&lt;p&gt;There is only version %1: nothing to compare yet. Add a version when the codebook changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Er is alleen versie %1: nog niets te vergelijken. Voeg een versie toe wanneer het codeboek verandert.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1057"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1070"/>
         <source>&lt;p&gt;Choose two different versions to compare.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Kies twee verschillende versies om te vergelijken.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1066"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1079"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codeboekversie %1 → %2</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1068"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1081"/>
         <source>&lt;p&gt;No changes.&lt;/p&gt;</source>
         <translation>&lt;p&gt;Geen wijzigingen.&lt;/p&gt;</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1076"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1089"/>
         <source>added</source>
         <translation>toegevoegd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1080"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1093"/>
         <source>removed</source>
         <translation>verwijderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1084"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1097"/>
         <source>changed</source>
         <translation>gewijzigd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1109"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1122"/>
         <source>item removed:</source>
         <translation>item verwijderd:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1113"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1126"/>
         <source>item added:</source>
         <translation>item toegevoegd:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1117"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1130"/>
         <source>the order changed</source>
         <translation>de volgorde is veranderd</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1121"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1134"/>
         <source>was:</source>
         <translation>was:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1124"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1137"/>
         <source>now:</source>
         <translation>nu:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1136"/>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1140"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1149"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1153"/>
         <source>Add a codebook version</source>
         <translation>Een codeboekversie toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1136"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1149"/>
         <source>Codebooks (*.json)</source>
         <translation>Codeboeken (*.json)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="1141"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="1154"/>
         <source>What changed, and why?</source>
         <translation>Wat is er veranderd, en waarom?</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="334"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="349"/>
         <source>Withdraw the draw</source>
         <translation>Trekking intrekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/study/study_design_window.cpp" line="337"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="352"/>
         <source>Remove the committed draw and its assignments, so that the phase can be drawn again; only while nobody has coded any of its articles.</source>
         <translation>De vastgelegde trekking en haar toewijzingen verwijderen, zodat de fase opnieuw kan worden getrokken; alleen zolang niemand een van haar artikelen heeft gecodeerd.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/study/study_design_window.cpp" line="499"/>
+        <location filename="../app/desktop/study/study_design_window.cpp" line="512"/>
         <source>&lt;b&gt;The %1 sample was withdrawn&lt;/b&gt;: %n assignment(s) removed, the withdrawal recorded in the project&apos;s log. The phase can be drawn again.</source>
         <translation>
             <numerusform>&lt;b&gt;De steekproef voor fase %1 is ingetrokken&lt;/b&gt;: %n toewijzing verwijderd, de intrekking vastgelegd in het logboek van het project. De fase kan opnieuw worden getrokken.</numerusform>

@@ -744,15 +744,16 @@ QString CoderCopies::withdrawnNotice(const MergeReport &report)
 {
     if (report.withdrawn.empty())
         return {};
+    const int count = int(report.withdrawn.size());
     QStringList articles;
     for (const WithdrawnWork &w : report.withdrawn)
-        articles << CoderCopiesText::tr("%1 (%2)").arg(w.article, w.phase);
+        articles << QStringLiteral("%1 (%2)").arg(w.article, w.phase);
     return CoderCopiesText::tr(
         "%1 coded %n article(s) in the copy after the assignment was withdrawn in the project "
         "(a withdrawn draw): %2. The codings were merged; the assignments stay withdrawn and do "
         "not count. Decide each in the merge conflicts: keep the withdrawal, or take %1's "
         "version to assign the article again.",
-        nullptr, int(report.withdrawn.size()))
+        nullptr, count)
         .arg(report.coderPseudonym, articles.join(QStringLiteral(", ")));
 }
 
