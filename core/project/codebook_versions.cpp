@@ -70,7 +70,73 @@ public:
     {
         changes.push_back({CodebookChange::Kind::Removed, path, f, before, QString()});
     }
+    // A text that a translation may leave out (empty: not given, the codebook's own stands).
+    void text(const QString &path, std::optional<FramingFunction> f, const QString &before,
+        const QString &after)
+    {
+        if (before.isEmpty() && !after.isEmpty())
+            added(path, f, after);
+        else if (!before.isEmpty() && after.isEmpty())
+            removed(path, f, before);
+        else
+            compare(path, f, before, after);
+    }
 };
+
+// The keys of `from`'s list, then those only `to` has.
+template<typename T>
+QStringList keysOfBoth(const std::vector<T> &from, const std::vector<T> &to)
+{
+    QStringList keys;
+    for (const auto &list : {&from, &to})
+        for (const T &x : *list)
+            if (!keys.contains(x.key))
+                keys << x.key;
+    return keys;
+}
+
+// The texts of every language either codebook has, under "translations.<code>.": a text changed
+// for a function counts as a change of that function, as its own text does.
+void compareTranslations(DiffBuilder &d, const Codebook &from, const Codebook &to)
+{
+    QStringList languages = from.translations.keys();
+    for (const QString &l : to.translations.keys())
+        if (!languages.contains(l))
+            languages << l;
+    languages.sort();
+    for (const QString &l : languages) {
+        const CodebookTexts a = from.translations.value(l);
+        const CodebookTexts b = to.translations.value(l);
+        const QString tp = QStringLiteral("translations.%1.").arg(l);
+        d.text(tp + QStringLiteral("name"), std::nullopt, a.name, b.name);
+        for (FramingFunction f : kFramingFunctions) {
+            const FunctionTexts x = a.functions.value(f);
+            const FunctionTexts y = b.functions.value(f);
+            const QString p = tp + functionKey(f) + QLatin1Char('.');
+            d.text(p + QStringLiteral("label"), f, x.label, y.label);
+            d.text(p + QStringLiteral("definition"), f, x.definition, y.definition);
+            d.text(p + QStringLiteral("rules"), f, joined(x.rules), joined(y.rules));
+            d.text(p + QStringLiteral("examples"), f, joined(x.examples), joined(y.examples));
+            const auto &fa = from.definition(f).attributes;
+            const auto &ta = to.definition(f).attributes;
+            for (const QString &key : keysOfBoth(fa, ta)) {
+                // Only a label of an attribute the codebook has is stored with it.
+                const auto label = [&key](const auto &attributes, const FunctionTexts &t) {
+                    return std::ranges::find(attributes, key, &AttributeSpec::key)
+                            == attributes.end()
+                        ? QString()
+                        : t.attributeLabels.value(key);
+                };
+                d.text(p + QStringLiteral("attributes.%1.label").arg(key), f, label(fa, x),
+                    label(ta, y));
+            }
+        }
+        for (const QString &key : keysOfBoth(from.items, to.items))
+            d.text(QStringLiteral("%1items.%2.question").arg(tp, key), std::nullopt,
+                from.item(key) ? a.questions.value(key) : QString(),
+                to.item(key) ? b.questions.value(key) : QString());
+    }
+}
 
 QString changeKindKey(CodebookChange::Kind kind)
 {
@@ -222,6 +288,7 @@ CodebookDiff CodebookVersions::diff(const Codebook &from, const Codebook &to)
     for (const ArticleItem &y : to.items)
         if (!from.item(y.key))
             d.added(QStringLiteral("items.") + y.key, std::nullopt, describe(y));
+    compareTranslations(d, from, to);
     return CodebookDiff {from.number, to.number, std::move(d.changes)};
 }
 

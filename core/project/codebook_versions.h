@@ -32,7 +32,11 @@ struct CodebookChange {
     enum class Kind { Added, Removed, Changed };
     Kind kind = Kind::Changed;
     // Where: "name", "problem.definition", "problem.rules", "evaluation.attributes.polarity",
-    // "evaluation.attributes.polarity.values", "items.dominant_function.question", ...
+    // "evaluation.attributes.polarity.values", "items.dominant_function.question", and a
+    // translation's texts under its language: "translations.de.problem.definition",
+    // "translations.nl.evaluation.attributes.polarity.label",
+    // "translations.de.items.dominant_function.question" (a text a translation gives for the
+    // first time is added, one it no longer gives removed).
     QString path;
     std::optional<FramingFunction> function; // the function the change belongs to, if any
     QString before; // readable old value (lists joined with "; "), empty when added
@@ -43,7 +47,7 @@ struct CodebookDiff {
     int from = 0;
     int to = 0;
     std::vector<CodebookChange> changes; // in codebook order
-    // The functions whose definition, rules, examples or attributes changed.
+    // The functions whose definition, rules, examples or attributes changed (in any language).
     std::vector<FramingFunction> changedFunctions() const;
 };
 
@@ -75,7 +79,8 @@ public:
     static Result<CodebookVersionInfo> addFromFile(
         Project &project, const QString &path, const QString &note, CoderId author);
 
-    // Compares two codebooks field by field (attributes and items matched by key).
+    // Compares two codebooks field by field (attributes and items matched by key), their
+    // translations last, language by language.
     static CodebookDiff diff(const Codebook &from, const Codebook &to);
     // The diff between stored versions; NotFound for a missing version.
     static Result<CodebookDiff> diffBetween(const Project &project, int from, int to);

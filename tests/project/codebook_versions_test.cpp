@@ -181,3 +181,68 @@ TEST_CASE(
     REQUIRE(f.project.revert(**third));
     CHECK(f.project.codebook()->number == 2);
 }
+
+TEST_CASE("the diff names each changed text of a translation under its language")
+{
+    StudyFixture f;
+    auto v1 = f.project.codebook();
+    REQUIRE(v1);
+    // The default codebook's German and Dutch texts (resources/codebook/default_codebook.json).
+    REQUIRE(v1->translations.contains(QStringLiteral("de")));
+    REQUIRE(v1->translations.contains(QStringLiteral("nl")));
+    Codebook v2 = *v1;
+    CodebookTexts &de = v2.translations[QStringLiteral("de")];
+    const QString oldGerman = de.functions[FramingFunction::Problem].definition;
+    CHECK(oldGerman.startsWith(QStringLiteral("Eine Textstelle, die sagt, was schiefläuft")));
+    de.functions[FramingFunction::Problem].definition =
+        QStringLiteral("Eine Textstelle, die sagt, was auf dem Spiel steht und was es kostet.");
+    de.questions[QStringLiteral("dominant_function")] =
+        QStringLiteral("Welche Funktion prägt den Artikel?");
+    // The Dutch label of polarity taken out (the English one stands in again), and a French
+    // name and remedy label given for the first time.
+    v2.translations[QStringLiteral("nl")]
+        .functions[FramingFunction::Evaluation]
+        .attributeLabels.remove(QStringLiteral("polarity"));
+    CodebookTexts &fr = v2.translations[QStringLiteral("fr")];
+    fr.name = QStringLiteral("Quatre fonctions");
+    fr.functions[FramingFunction::Remedy].label = QStringLiteral("Solution proposée");
+    REQUIRE(
+        CodebookVersions::add(f.project, v2, QStringLiteral("German and French texts"), f.lead));
+
+    auto diff = CodebookVersions::diffBetween(f.project, 1, 2);
+    REQUIRE(diff);
+    REQUIRE(diff->changes.size() == 5);
+    // Languages in alphabetical order, each in codebook order: name, functions, items.
+    const CodebookChange &definition = diff->changes[0];
+    CHECK(definition.path == QStringLiteral("translations.de.problem.definition"));
+    CHECK(definition.kind == CodebookChange::Kind::Changed);
+    CHECK(definition.function == FramingFunction::Problem);
+    CHECK(definition.before == oldGerman);
+    CHECK(definition.after.endsWith(QStringLiteral("was es kostet.")));
+    CHECK(diff->changes[1].path
+        == QStringLiteral("translations.de.items.dominant_function.question"));
+    CHECK(diff->changes[1].before
+        == QStringLiteral("Welche Framing-Funktion dominiert den Artikel als Ganzes?"));
+    CHECK_FALSE(diff->changes[1].function);
+    CHECK(diff->changes[2].path == QStringLiteral("translations.fr.name"));
+    CHECK(diff->changes[2].kind == CodebookChange::Kind::Added);
+    CHECK(diff->changes[3].path == QStringLiteral("translations.fr.remedy.label"));
+    CHECK(diff->changes[3].kind == CodebookChange::Kind::Added);
+    CHECK(diff->changes[4].path
+        == QStringLiteral("translations.nl.evaluation.attributes.polarity.label"));
+    CHECK(diff->changes[4].kind == CodebookChange::Kind::Removed);
+    CHECK(diff->changes[4].before == QStringLiteral("Polariteit"));
+    // A function whose text changed in any language is one whose spans need a re-check.
+    CHECK(diff->changedFunctions()
+        == std::vector<FramingFunction> {
+            FramingFunction::Problem, FramingFunction::Evaluation, FramingFunction::Remedy});
+    const QString text = CodebookVersions::diffText(*diff);
+    CHECK(
+        text.contains(QStringLiteral("\n~ translations.de.problem.definition: «Eine Textstelle")));
+    CHECK(text.contains(QStringLiteral("\n+ translations.fr.name: «Quatre fonctions»")));
+    CHECK(text.contains(
+        QStringLiteral("\n- translations.nl.evaluation.attributes.polarity.label: «Polariteit»")));
+
+    // The same texts again: nothing to record.
+    CHECK(CodebookVersions::diff(*f.project.codebook(), v2).changes.empty());
+}
