@@ -18,14 +18,6 @@ using namespace fourfold::test;
 
 namespace {
 
-// A dump with every ISO 8601 time blanked: what a redo must restore exactly.
-QString withoutTimes(QString dump)
-{
-    static const QRegularExpression time(QStringLiteral(
-        "\\d{4}-\\d\\d-\\d\\dT\\d\\d:\\d\\d:\\d\\d(\\.\\d+)?(Z|[+-]\\d\\d:\\d\\d)?"));
-    return dump.replace(time, QStringLiteral("TIME"));
-}
-
 struct StudyEditFixture : ProjectFixture {
     StudyEditFixture()
     {

@@ -2,6 +2,8 @@
 
 #include "core/store/statement.h"
 
+#include <QRegularExpression>
+
 #include <catch2/catch.hpp>
 
 namespace fourfold::test {
@@ -36,6 +38,13 @@ QString dumpDatabase(const Database &db, const QStringList &skip)
         }
     }
     return dump;
+}
+
+QString withoutTimes(QString dump)
+{
+    static const QRegularExpression time(QStringLiteral(
+        "\\d{4}-\\d\\d-\\d\\dT\\d\\d:\\d\\d:\\d\\d(\\.\\d+)?(Z|[+-]\\d\\d:\\d\\d)?"));
+    return dump.replace(time, QStringLiteral("TIME"));
 }
 
 } // namespace fourfold::test

@@ -13,4 +13,8 @@ namespace fourfold::test {
 // leaving out the tables in `skip` and FTS5's shadow tables.
 QString dumpDatabase(const Database &db, const QStringList &skip = {QStringLiteral("event_log")});
 
+// `dump` with every ISO 8601 time blanked: what a redo must restore exactly (it writes the same
+// rows, at another time).
+QString withoutTimes(QString dump);
+
 } // namespace fourfold::test
