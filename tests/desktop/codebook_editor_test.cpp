@@ -14,6 +14,7 @@
 #include "tests/support/test_support.h"
 
 #include <QAction>
+#include <QComboBox>
 #include <QFile>
 #include <QJsonArray>
 #include <QJsonDocument>
@@ -23,6 +24,7 @@
 #include <QMenuBar>
 #include <QPlainTextEdit>
 #include <QPointer>
+#include <QPushButton>
 #include <QTemporaryDir>
 #include <QTest>
 
@@ -65,6 +67,25 @@ QString shownError(QWidget *field)
         QStringLiteral("field-error"), Qt::FindDirectChildrenOnly);
     REQUIRE(labels.size() == 1);
     return labels.front()->isVisibleTo(field->window()) ? labels.front()->text() : QString();
+}
+
+// The note under the widget, as the person sees it.
+QString shownNote(QWidget *field)
+{
+    const auto labels = field->parentWidget()->findChildren<QLabel *>(
+        QStringLiteral("field-note"), Qt::FindDirectChildrenOnly);
+    REQUIRE(labels.size() == 1);
+    return labels.front()->isVisibleTo(field->window()) ? labels.front()->text() : QString();
+}
+
+// The enabled state of the window's visible button `text` ("&Add attribute" on the page shown).
+bool buttonEnabled(CodebookEditor &w, const QString &text)
+{
+    for (QPushButton *b : w.findChildren<QPushButton *>())
+        if (b->text() == text && b->isVisibleTo(&w))
+            return b->isEnabled();
+    FAIL("no visible button " << text.toStdString());
+    return false;
 }
 
 const QString kDefinition = QStringLiteral(
@@ -350,4 +371,240 @@ TEST_CASE("a version saved in the editor is one step on the desk's undo stack: u
     CHECK(reader->codebook()->number == from + 1);
     CHECK(reader->codebook()->definition(FramingFunction::Problem).definition == kDefinition);
     CHECK(w.stored().number == from + 1);
+}
+
+// The sample's codebook is the default one: English, with Dutch and German texts
+// (resources/codebook/default_codebook.json).
+TEST_CASE("the German problem definition edited in the editor is stored in the new version's "
+          "translations and undone like any field")
+{
+    SampleCopy f;
+    auto reader = Project::open(f.path); // a connection of the test's own
+    REQUIRE(reader);
+    const QString before = dumpDatabase(databaseForTesting(*reader));
+    auto session = sessionOnFile(f.path, QStringLiteral("L01"));
+    CodebookEditor w(*session);
+    w.show();
+    CHECK(w.languages() == QStringList {QString(), QStringLiteral("de"), QStringLiteral("nl")});
+    auto *languageBox = w.findChild<QComboBox *>(QStringLiteral("codebook-language"));
+    REQUIRE(languageBox);
+    // The languages by their own names (CLDR, as QLocale gives them).
+    CHECK(languageBox->itemText(languageBox->findData(QStringLiteral("de")))
+        == QStringLiteral("Deutsch (de)"));
+    CHECK(languageBox->itemText(languageBox->findData(QStringLiteral("nl")))
+        == QStringLiteral("Nederlands (nl)"));
+
+    const int from = w.stored().number;
+    const auto problemIn = [](const Codebook &book, const QString &language) {
+        return book.translations.value(language).functions.value(FramingFunction::Problem);
+    };
+    const QString english = w.stored().definition(FramingFunction::Problem).definition;
+    const QString oldGerman = problemIn(w.stored(), QStringLiteral("de")).definition;
+    const QString dutch = problemIn(w.stored(), QStringLiteral("nl")).definition;
+    REQUIRE(oldGerman.startsWith(QStringLiteral("Eine Textstelle, die sagt, was schiefläuft")));
+    const QString newGerman = oldGerman + QStringLiteral(" Auch die Kosten sind gemeint.");
+
+    QPlainTextEdit *definition = textField(w, QStringLiteral("functions[0].definition"));
+    CHECK(definition->toPlainText() == english);
+    REQUIRE(w.showLanguage(QStringLiteral("de")));
+    CHECK(languageBox->currentData().toString() == QStringLiteral("de"));
+    CHECK(w.findChild<QLabel *>(QStringLiteral("codebook-language-hint"))->isVisible());
+    CHECK(definition->toPlainText() == oldGerman);
+    CHECK(definition->placeholderText() == english);
+
+    // Typed a key at a time: one step, named with its language.
+    definition->setFocus();
+    definition->moveCursor(QTextCursor::End);
+    QTest::keyClicks(definition, QStringLiteral(" Auch die Kosten sind gemeint."));
+    CHECK(w.undoStack()->count() == 1);
+    CHECK(w.undoStack()->undoText() == QStringLiteral("Edit the definition of Problem (de)"));
+    CHECK(problemIn(w.draft(), QStringLiteral("de")).definition == newGerman);
+    CHECK(w.draft().definition(FramingFunction::Problem).definition == english);
+    // What the save shows first names the translation's path, and nothing else changed.
+    const QString diff = w.diffText();
+    CHECK(diff.contains(QStringLiteral("\n~ translations.de.problem.definition: «%1» → «%2»")
+                            .arg(oldGerman, newGerman)));
+    CHECK(diff.count(QLatin1Char('\n')) == 1);
+
+    // Undo with the base language shown turns to the language the step was made in.
+    REQUIRE(w.showLanguage(QString()));
+    CHECK(definition->toPlainText() == english);
+    QTest::keyClick(definition, Qt::Key_Z, Qt::ControlModifier);
+    CHECK(w.shownLanguage() == QStringLiteral("de"));
+    CHECK(definition->toPlainText() == oldGerman);
+    CHECK(w.draft().toJson() == w.stored().toJson());
+    QTest::keyClick(definition, Qt::Key_Z, Qt::ControlModifier | Qt::ShiftModifier);
+    CHECK(definition->toPlainText() == newGerman);
+
+    REQUIRE(w.saveAsNewVersion(QStringLiteral("German problem definition names costs")));
+    CHECK(w.undoStack()->count() == 0);
+    auto stored = reader->codebook();
+    REQUIRE(stored);
+    CHECK(stored->number == from + 1);
+    CHECK(problemIn(*stored, QStringLiteral("de")).definition == newGerman);
+    CHECK(stored->definition(FramingFunction::Problem).definition == english);
+    CHECK(problemIn(*stored, QStringLiteral("nl")).definition == dutch);
+    // A desk in German (here Austrian German, looked up by its language) reads the new text.
+    CHECK(
+        stored->inLanguage(QStringLiteral("de_AT")).definition(FramingFunction::Problem).definition
+        == newGerman);
+    auto changes = CodebookVersions::diffBetween(*reader, from, from + 1);
+    REQUIRE(changes);
+    REQUIRE(changes->changes.size() == 1);
+    CHECK(changes->changes[0].path == QStringLiteral("translations.de.problem.definition"));
+    CHECK(w.shownLanguage() == QStringLiteral("de"));
+    CHECK(definition->toPlainText() == newGerman);
+
+    // One step on the desk's stack: undo restores the full dump, the editor shows the old text.
+    QUndoStack *desk = session->undoStack();
+    REQUIRE(desk->count() == 1);
+    CHECK(desk->undoText() == QStringLiteral("Save codebook version %1").arg(from + 1));
+    desk->undo();
+    CHECK(dumpDatabase(databaseForTesting(*reader)) == before);
+    CHECK(w.stored().number == from);
+    CHECK(definition->toPlainText() == oldGerman);
+    desk->redo();
+    CHECK(problemIn(*reader->codebook(), QStringLiteral("de")).definition == newGerman);
+    CHECK(w.stored().number == from + 1);
+    CHECK(definition->toPlainText() == newGerman);
+}
+
+TEST_CASE("keys values levels and the lists are read-only while a translation is shown")
+{
+    SampleCopy f;
+    auto session = sessionOnFile(f.path, QStringLiteral("L01"));
+    CodebookEditor w(*session);
+    w.show();
+    REQUIRE(w.showLanguage(QStringLiteral("nl")));
+    const QString hint = w.findChild<QLabel *>(QStringLiteral("codebook-language-hint"))->text();
+    CHECK(hint.contains(QStringLiteral("Nederlands (nl)")));
+    CHECK(hint.contains(QStringLiteral("change them in the base language")));
+    QLineEdit *key = lineField(w, QStringLiteral("functions[2].attributes[0].key"));
+    QPlainTextEdit *values = textField(w, QStringLiteral("functions[2].attributes[0].values"));
+    QWidget *type = w.fieldWidget(QStringLiteral("functions[2].attributes[0].type"));
+    QWidget *level = w.fieldWidget(QStringLiteral("functions[2].attributes[0].level"));
+    CHECK(key->text() == QStringLiteral("polarity"));
+    CHECK(key->isReadOnly());
+    CHECK(values->isReadOnly());
+    CHECK_FALSE(type->isEnabled());
+    CHECK_FALSE(level->isEnabled());
+    CHECK_FALSE(buttonEnabled(w, QStringLiteral("&Add attribute")));
+    CHECK_FALSE(buttonEnabled(w, QStringLiteral("Re&move attribute")));
+    key->setFocus();
+    QTest::keyClicks(key, QStringLiteral("x"));
+    w.addRow();
+    w.removeRow();
+    CHECK(key->text() == QStringLiteral("polarity"));
+    CHECK(w.undoStack()->count() == 0);
+    CHECK(w.draft().toJson() == w.stored().toJson());
+    w.showItems();
+    w.selectRow(0);
+    CHECK(lineField(w, QStringLiteral("items[0].key"))->isReadOnly());
+    CHECK(textField(w, QStringLiteral("items[0].values"))->isReadOnly());
+    CHECK_FALSE(w.fieldWidget(QStringLiteral("items[0].level"))->isEnabled());
+    CHECK_FALSE(buttonEnabled(w, QStringLiteral("&Add item")));
+
+    // The attribute's label is a text: edited in Dutch; emptied, the English one stands again.
+    QLineEdit *label = lineField(w, QStringLiteral("functions[2].attributes[0].label"));
+    CHECK(label->text() == QStringLiteral("Polariteit"));
+    CHECK(label->placeholderText() == QStringLiteral("Polarity"));
+    label->setText(QStringLiteral("Toon"));
+    const auto dutchLabels = [&w] {
+        return w.draft()
+            .translations.value(QStringLiteral("nl"))
+            .functions.value(FramingFunction::Evaluation)
+            .attributeLabels;
+    };
+    CHECK(dutchLabels().value(QStringLiteral("polarity")) == QStringLiteral("Toon"));
+    label->clear();
+    CHECK_FALSE(dutchLabels().contains(QStringLiteral("polarity")));
+    CHECK(w.draft()
+              .inLanguage(QStringLiteral("nl"))
+              .definition(FramingFunction::Evaluation)
+              .attributes[0]
+              .label
+        == QStringLiteral("Polarity"));
+    CHECK(w.undoStack()->count() == 1);
+    w.undoStack()->undo();
+    CHECK(label->text() == QStringLiteral("Polariteit"));
+
+    // In the base language the shared fields are editable again.
+    REQUIRE(w.showLanguage(QString()));
+    CHECK_FALSE(w.findChild<QLabel *>(QStringLiteral("codebook-language-hint"))->isVisible());
+    key = lineField(w, QStringLiteral("functions[2].attributes[0].key"));
+    CHECK_FALSE(key->isReadOnly());
+    CHECK(type->isEnabled());
+    CHECK(buttonEnabled(w, QStringLiteral("&Add attribute")));
+    CHECK(label->text() == QStringLiteral("Polarity"));
+    // A key renamed takes its translated labels along.
+    key->setText(QStringLiteral("tone"));
+    CHECK(dutchLabels().value(QStringLiteral("tone")) == QStringLiteral("Polariteit"));
+    CHECK_FALSE(dutchLabels().contains(QStringLiteral("polarity")));
+}
+
+TEST_CASE("a changed base text names the translations that may need updating and a language can "
+          "be added")
+{
+    SampleCopy f;
+    auto session = sessionOnFile(f.path, QStringLiteral("L01"));
+    CodebookEditor w(*session);
+    w.show();
+    const QString field = QStringLiteral("functions[0].definition");
+    QPlainTextEdit *definition = textField(w, field);
+    CHECK(w.fieldNote(field).isEmpty());
+    definition->setPlainText(kDefinition);
+    const QString both =
+        QStringLiteral("The translation of this text may need updating too: de, nl "
+                       "(choose the language under “Texts in”).");
+    CHECK(w.fieldNote(field) == both);
+    CHECK(shownNote(definition) == both);
+    // The translations themselves are left as they were.
+    CHECK(w.draft().toJson().value(QStringLiteral("translations"))
+        == w.stored().toJson().value(QStringLiteral("translations")));
+
+    // Once the German text is changed too, only Dutch is named.
+    REQUIRE(w.showLanguage(QStringLiteral("de")));
+    CHECK(shownNote(definition).isEmpty());
+    definition->setPlainText(
+        QStringLiteral("Eine Textstelle, die sagt, was schiefläuft und was es kostet."));
+    REQUIRE(w.showLanguage(QString()));
+    CHECK(w.fieldNote(field).contains(QStringLiteral(" updating too: nl (choose")));
+    w.undoStack()->undo();
+    w.undoStack()->undo();
+    CHECK(w.fieldNote(field).isEmpty());
+    CHECK(shownNote(definition).isEmpty());
+
+    // A language code as the codebook file takes it (ISO 639, two or three lower-case letters).
+    for (const QString &bad : {QStringLiteral("French"), QStringLiteral("FR"), QStringLiteral("f"),
+             QStringLiteral("fr-CA")}) {
+        INFO(bad.toStdString());
+        CHECK_FALSE(w.addLanguage(bad));
+        CHECK(w.messageBar()->kind() == MessageBar::Kind::Warning);
+        CHECK(w.messageBar()->text().startsWith(
+            QStringLiteral("“%1” is not a language code").arg(bad)));
+    }
+    CHECK(w.shownLanguage().isEmpty());
+    REQUIRE(w.addLanguage(QStringLiteral("fr")));
+    CHECK(w.shownLanguage() == QStringLiteral("fr"));
+    CHECK(w.languages()
+        == QStringList {
+            QString(), QStringLiteral("de"), QStringLiteral("fr"), QStringLiteral("nl")});
+    CHECK(definition->toPlainText().isEmpty());
+    CHECK(definition->placeholderText()
+        == w.stored().definition(FramingFunction::Problem).definition);
+    CHECK_FALSE(w.draft().translations.contains(QStringLiteral("fr")));
+    const QString french = QStringLiteral("Un passage qui dit ce qui ne va pas.");
+    definition->setPlainText(french);
+    CHECK(w.draft()
+              .translations.value(QStringLiteral("fr"))
+              .functions.value(FramingFunction::Problem)
+              .definition
+        == french);
+    CHECK(w.diffText().contains(
+        QStringLiteral("\n+ translations.fr.problem.definition: «%1»").arg(french)));
+    // Emptied again, the language gives no text and is not stored; it stays in the list.
+    definition->clear();
+    CHECK_FALSE(w.draft().translations.contains(QStringLiteral("fr")));
+    CHECK(w.draft().toJson() == w.stored().toJson());
+    CHECK(w.languages().contains(QStringLiteral("fr")));
 }

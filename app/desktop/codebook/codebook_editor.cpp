@@ -16,10 +16,13 @@
 #include <QFormLayout>
 #include <QGroupBox>
 #include <QHBoxLayout>
+#include <QInputDialog>
 #include <QKeyEvent>
 #include <QLabel>
 #include <QLineEdit>
 #include <QListWidget>
+#include <QLocale>
+#include <QPalette>
 #include <QPlainTextEdit>
 #include <QPushButton>
 #include <QRegularExpression>
@@ -35,6 +38,8 @@ namespace {
 
 const QString kInvalidStyle = QStringLiteral("border: 2px solid #b3261e; border-radius: 2px;");
 constexpr int kItemsTab = 4;
+// The language list's last entry, which asks for a language to add (not a language code).
+const QString kAddLanguage = QStringLiteral("+");
 
 // Decision rules and examples: one per paragraph (an empty line between two), so that a rule
 // may run over several lines.
@@ -120,6 +125,144 @@ QPlainTextEdit *textBox(QWidget *parent, int lines)
     return edit;
 }
 
+// A key or value list while a translation is shown: read-only, on the window's colour so that it
+// does not look like a field to type in.
+template<typename Edit>
+void setEditable(Edit *edit, bool editable)
+{
+    edit->setReadOnly(!editable);
+    QPalette shared;
+    if (!editable)
+        shared.setColor(QPalette::Base, edit->palette().color(QPalette::Window));
+    edit->setPalette(shared);
+}
+
+QString rulesHint()
+{
+    return CodebookEditor::tr("One decision rule per paragraph (an empty line between two).");
+}
+
+QString examplesHint()
+{
+    return CodebookEditor::tr("One example per paragraph (an empty line between two).");
+}
+
+// "Deutsch (de)": the language's own name, which its readers find whatever the program's language.
+QString languageName(const QString &code)
+{
+    if (code.isEmpty())
+        return CodebookEditor::tr("Base language");
+    const QLocale locale(code);
+    const bool known = locale.language() != QLocale::C && locale.language() != QLocale::AnyLanguage
+        && QLocale::languageToCode(locale.language()) == code;
+    const QString name = known ? locale.nativeLanguageName() : QString();
+    return name.isEmpty() ? code : QStringLiteral("%1 (%2)").arg(name, code);
+}
+
+// The texts of `language` in `book` without the ones left empty (those are not given: the base
+// text stands), and without the language when it gives none.
+void dropEmptyTexts(Codebook &book, const QString &language)
+{
+    const auto texts = book.translations.find(language);
+    if (texts == book.translations.end())
+        return;
+    for (auto f = texts->functions.begin(); f != texts->functions.end();) {
+        for (auto a = f->attributeLabels.begin(); a != f->attributeLabels.end();)
+            a = a->isEmpty() ? f->attributeLabels.erase(a) : std::next(a);
+        const bool empty = f->label.isEmpty() && f->definition.isEmpty() && f->rules.isEmpty()
+            && f->examples.isEmpty() && f->attributeLabels.isEmpty();
+        f = empty ? texts->functions.erase(f) : std::next(f);
+    }
+    for (auto q = texts->questions.begin(); q != texts->questions.end();)
+        q = q->isEmpty() ? texts->questions.erase(q) : std::next(q);
+    if (texts->name.isEmpty() && texts->functions.isEmpty() && texts->questions.isEmpty())
+        book.translations.erase(texts);
+}
+
+// After the key of an attribute of `f` changed from `from` to `to`: its translated labels go
+// with it, unless another attribute still has `from` or already has `to` (the check names that).
+void moveAttributeLabels(Codebook &book, FramingFunction f, const QString &from, const QString &to)
+{
+    const auto &attributes = book.definition(f).attributes;
+    if (std::ranges::count(attributes, from, &AttributeSpec::key) > 0
+        || std::ranges::count(attributes, to, &AttributeSpec::key) != 1)
+        return;
+    for (CodebookTexts &texts : book.translations) {
+        const auto t = texts.functions.find(f);
+        if (t != texts.functions.end() && t->attributeLabels.contains(from)
+            && !t->attributeLabels.contains(to))
+            t->attributeLabels.insert(to, t->attributeLabels.take(from));
+    }
+}
+
+// The same for an article-level item's translated question.
+void moveQuestions(Codebook &book, const QString &from, const QString &to)
+{
+    if (std::ranges::count(book.items, from, &ArticleItem::key) > 0
+        || std::ranges::count(book.items, to, &ArticleItem::key) != 1)
+        return;
+    for (CodebookTexts &texts : book.translations)
+        if (texts.questions.contains(from) && !texts.questions.contains(to))
+            texts.questions.insert(to, texts.questions.take(from));
+}
+
+// A translatable text of `book`: its own with `language` empty, else that language's ("" where
+// it gives none); nothing when `book` has no such field (an attribute or item by key).
+using TextOf = std::function<std::optional<QString>(const Codebook &book, const QString &language)>;
+
+enum class FunctionPart { Label, Definition, Rules, Examples };
+
+// The part of a FunctionDefinition or of a FunctionTexts.
+template<typename T>
+QString partOf(const T &texts, FunctionPart part)
+{
+    switch (part) {
+    case FunctionPart::Label:
+        return texts.label;
+    case FunctionPart::Definition:
+        return texts.definition;
+    case FunctionPart::Rules:
+        return paragraphs(texts.rules);
+    case FunctionPart::Examples:
+        return paragraphs(texts.examples);
+    }
+    return {};
+}
+
+TextOf functionText(FramingFunction f, FunctionPart part)
+{
+    return [f, part](const Codebook &book, const QString &language) -> std::optional<QString> {
+        if (language.isEmpty())
+            return partOf(book.definition(f), part);
+        return partOf(book.translations.value(language).functions.value(f), part);
+    };
+}
+
+TextOf attributeLabelText(FramingFunction f, const QString &key)
+{
+    return [f, key](const Codebook &book, const QString &language) -> std::optional<QString> {
+        const auto &attributes = book.definition(f).attributes;
+        const auto a = std::ranges::find(attributes, key, &AttributeSpec::key);
+        if (a == attributes.end())
+            return std::nullopt;
+        if (language.isEmpty())
+            return a->label;
+        return book.translations.value(language).functions.value(f).attributeLabels.value(key);
+    };
+}
+
+TextOf questionText(const QString &key)
+{
+    return [key](const Codebook &book, const QString &language) -> std::optional<QString> {
+        const ArticleItem *item = book.item(key);
+        if (!item)
+            return std::nullopt;
+        if (language.isEmpty())
+            return item->question;
+        return book.translations.value(language).questions.value(key);
+    };
+}
+
 } // namespace
 
 CodebookEditor::CodebookEditor(CodingSession &session, QWidget *parent)
@@ -140,10 +283,30 @@ CodebookEditor::CodebookEditor(CodingSession &session, QWidget *parent)
     m_name->setObjectName(QStringLiteral("codebook-name"));
     static_cast<QLabel *>(top->itemAt(0)->widget())->setBuddy(m_name);
     top->addWidget(withErrorLine(m_name, QStringLiteral("name")), 1);
+    auto *languageLabel = new QLabel(tr("Texts &in:"), this);
+    top->addWidget(languageLabel);
+    m_languageBox = new QComboBox(this);
+    m_languageBox->setObjectName(QStringLiteral("codebook-language"));
+    m_languageBox->setToolTip(tr("The language whose texts the fields show and edit. Coders "
+                                 "whose program speaks that language read these texts."));
+    languageLabel->setBuddy(m_languageBox);
+    top->addWidget(m_languageBox);
     m_version = new QLabel(this);
     m_version->setObjectName(QStringLiteral("codebook-version"));
     top->addWidget(m_version);
     layout->addLayout(top);
+    m_languageHint = new QLabel(this);
+    m_languageHint->setObjectName(QStringLiteral("codebook-language-hint"));
+    m_languageHint->setWordWrap(true);
+    m_languageHint->hide();
+    layout->addWidget(m_languageHint);
+    connect(m_languageBox, &QComboBox::activated, this, [this](int index) {
+        const QString language = m_languageBox->itemData(index).toString();
+        if (language == kAddLanguage)
+            askLanguage();
+        else
+            showLanguage(language);
+    });
 
     m_tabs = new QTabWidget(this);
     for (FramingFunction f : kFramingFunctions) {
@@ -181,8 +344,9 @@ CodebookEditor::CodebookEditor(CodingSession &session, QWidget *parent)
         [this](bool clean) { setWindowTitle(clean ? tr("Codebook") : tr("Codebook (changed)")); });
 
     connect(m_name, &QLineEdit::textChanged, this, [this](const QString &text) {
-        edit(QStringLiteral("name"), tr("Edit the codebook's name"),
-            [&](Codebook &b) { b.name = text; });
+        editText(
+            QStringLiteral("name"), tr("Edit the codebook's name"),
+            [&](Codebook &b) { b.name = text; }, [&](CodebookTexts &t) { t.name = text; });
     });
 
     auto book = m_project.codebook();
@@ -225,7 +389,13 @@ QWidget *CodebookEditor::withErrorLine(QWidget *editor, const QString &key)
     error->setStyleSheet(QStringLiteral("color: #b3261e;"));
     error->hide();
     column->addWidget(error);
-    m_fields.insert(key, {editor, error});
+    auto *note = new QLabel(box);
+    note->setObjectName(QStringLiteral("field-note"));
+    note->setWordWrap(true);
+    note->setForegroundRole(QPalette::PlaceholderText);
+    note->hide();
+    column->addWidget(note);
+    m_fields.insert(key, {editor, error, note});
     editor->installEventFilter(this);
     return box;
 }
@@ -257,10 +427,10 @@ QWidget *CodebookEditor::buildFunctionPage(FramingFunction f)
     texts->addRow(
         tr("&Definition:"), withErrorLine(p.definition, path + QStringLiteral(".definition")));
     p.rules = textBox(page, 6);
-    p.rules->setPlaceholderText(tr("One decision rule per paragraph (an empty line between two)."));
+    p.rules->setPlaceholderText(rulesHint());
     texts->addRow(tr("Decision &rules:"), withErrorLine(p.rules, path + QStringLiteral(".rules")));
     p.examples = textBox(page, 4);
-    p.examples->setPlaceholderText(tr("One example per paragraph (an empty line between two)."));
+    p.examples->setPlaceholderText(examplesHint());
     texts->addRow(tr("E&xamples:"), withErrorLine(p.examples, path + QStringLiteral(".examples")));
     split->addLayout(texts, 3);
 
@@ -271,9 +441,9 @@ QWidget *CodebookEditor::buildFunctionPage(FramingFunction f)
     p.attributes->setMaximumHeight(p.attributes->fontMetrics().lineSpacing() * 5 + 12);
     attributes->addWidget(p.attributes);
     auto *rowButtons = new QHBoxLayout;
-    auto *add = new QPushButton(tr("&Add attribute"), group);
+    p.add = new QPushButton(tr("&Add attribute"), group);
     p.remove = new QPushButton(tr("Re&move attribute"), group);
-    rowButtons->addWidget(add);
+    rowButtons->addWidget(p.add);
     rowButtons->addWidget(p.remove);
     rowButtons->addStretch(1);
     attributes->addLayout(rowButtons);
@@ -315,36 +485,57 @@ QWidget *CodebookEditor::buildFunctionPage(FramingFunction f)
     };
     const QString name = functionName(f);
     connect(p.label, &QLineEdit::textChanged, this, [=, this](const QString &text) {
-        edit(path + QStringLiteral(".label"), tr("Edit the label of %1").arg(name),
-            [&](Codebook &b) { b.functions[size_t(n)].label = text; });
+        editText(
+            path + QStringLiteral(".label"), tr("Edit the label of %1").arg(name),
+            [&](Codebook &b) { b.functions[size_t(n)].label = text; },
+            [&](CodebookTexts &t) { t.functions[f].label = text; });
     });
     connect(p.definition, &QPlainTextEdit::textChanged, this, [=, this] {
         const QString text = m_functions[size_t(n)].definition->toPlainText();
-        edit(path + QStringLiteral(".definition"), tr("Edit the definition of %1").arg(name),
-            [&](Codebook &b) { b.functions[size_t(n)].definition = text; });
+        editText(
+            path + QStringLiteral(".definition"), tr("Edit the definition of %1").arg(name),
+            [&](Codebook &b) { b.functions[size_t(n)].definition = text; },
+            [&](CodebookTexts &t) { t.functions[f].definition = text; });
     });
     connect(p.rules, &QPlainTextEdit::textChanged, this, [=, this] {
         const QStringList rules = fromParagraphs(m_functions[size_t(n)].rules->toPlainText());
-        edit(path + QStringLiteral(".rules"), tr("Edit the decision rules of %1").arg(name),
-            [&](Codebook &b) { b.functions[size_t(n)].rules = rules; });
+        editText(
+            path + QStringLiteral(".rules"), tr("Edit the decision rules of %1").arg(name),
+            [&](Codebook &b) { b.functions[size_t(n)].rules = rules; },
+            [&](CodebookTexts &t) { t.functions[f].rules = rules; });
     });
     connect(p.examples, &QPlainTextEdit::textChanged, this, [=, this] {
         const QStringList examples = fromParagraphs(m_functions[size_t(n)].examples->toPlainText());
-        edit(path + QStringLiteral(".examples"), tr("Edit the examples of %1").arg(name),
-            [&](Codebook &b) { b.functions[size_t(n)].examples = examples; });
+        editText(
+            path + QStringLiteral(".examples"), tr("Edit the examples of %1").arg(name),
+            [&](Codebook &b) { b.functions[size_t(n)].examples = examples; },
+            [&](CodebookTexts &t) { t.functions[f].examples = examples; });
     });
     connect(p.key, &QLineEdit::textChanged, this, [=, this](const QString &text) {
-        edit(attributeField("key"), tr("Edit an attribute's key"),
-            attribute([text](AttributeSpec &a) { a.key = text; }));
+        const int row = selectedRow(m_functions[size_t(n)].attributes);
+        editShared(attributeField("key"), tr("Edit an attribute's key"), [=](Codebook &b) {
+            auto &list = b.functions[size_t(n)].attributes;
+            if (row < 0 || row >= int(list.size()))
+                return;
+            const QString old = list[size_t(row)].key;
+            list[size_t(row)].key = text;
+            moveAttributeLabels(b, f, old, text);
+        });
     });
     connect(p.attributeLabel, &QLineEdit::textChanged, this, [=, this](const QString &text) {
-        edit(attributeField("label"), tr("Edit an attribute's label"),
-            attribute([text](AttributeSpec &a) { a.label = text; }));
+        const int row = selectedRow(m_functions[size_t(n)].attributes);
+        const auto &list = m_draft.functions[size_t(n)].attributes;
+        const QString key = row >= 0 && row < int(list.size()) ? list[size_t(row)].key : QString();
+        editText(attributeField("label"), tr("Edit an attribute's label"),
+            attribute([text](AttributeSpec &a) { a.label = text; }), [&](CodebookTexts &t) {
+                if (!key.isEmpty())
+                    t.functions[f].attributeLabels.insert(key, text);
+            });
     });
     connect(p.type, &QComboBox::currentIndexChanged, this, [=, this] {
         const bool text =
             m_functions[size_t(n)].type->currentData().toString() == QLatin1String("text");
-        edit({}, tr("Change an attribute's type"), attribute([text](AttributeSpec &a) {
+        editShared({}, tr("Change an attribute's type"), attribute([text](AttributeSpec &a) {
             a.type = text ? AttributeSpec::Type::Text : AttributeSpec::Type::Choice;
             if (text)
                 a.recode.clear();
@@ -352,12 +543,12 @@ QWidget *CodebookEditor::buildFunctionPage(FramingFunction f)
     });
     connect(p.level, &QComboBox::currentIndexChanged, this, [=, this] {
         const MeasurementLevel level = levelOf(m_functions[size_t(n)].level);
-        edit({}, tr("Change an attribute's level"),
+        editShared({}, tr("Change an attribute's level"),
             attribute([level](AttributeSpec &a) { a.level = level; }));
     });
     connect(p.values, &QPlainTextEdit::textChanged, this, [=, this] {
         const QStringList values = fromLines(m_functions[size_t(n)].values->toPlainText());
-        edit(attributeField("values"), tr("Edit an attribute's values"),
+        editShared(attributeField("values"), tr("Edit an attribute's values"),
             attribute([values](AttributeSpec &a) { a.values = values; }));
     });
     connect(p.attributes, &QListWidget::currentRowChanged, this, [this, n] {
@@ -366,7 +557,7 @@ QWidget *CodebookEditor::buildFunctionPage(FramingFunction f)
         loadAttributeForm(n);
         showCheck(false);
     });
-    connect(add, &QPushButton::clicked, this, &CodebookEditor::addRow);
+    connect(p.add, &QPushButton::clicked, this, &CodebookEditor::addRow);
     connect(p.remove, &QPushButton::clicked, this, &CodebookEditor::removeRow);
     return page;
 }
@@ -385,9 +576,9 @@ QWidget *CodebookEditor::buildItemsPage()
     p.items->setObjectName(QStringLiteral("item-list"));
     left->addWidget(p.items, 1);
     auto *rowButtons = new QHBoxLayout;
-    auto *add = new QPushButton(tr("&Add item"), page);
+    p.add = new QPushButton(tr("&Add item"), page);
     p.remove = new QPushButton(tr("Re&move item"), page);
-    rowButtons->addWidget(add);
+    rowButtons->addWidget(p.add);
     rowButtons->addWidget(p.remove);
     rowButtons->addStretch(1);
     left->addLayout(rowButtons);
@@ -420,22 +611,36 @@ QWidget *CodebookEditor::buildItemsPage()
             .arg(QLatin1String(member));
     };
     connect(p.key, &QLineEdit::textChanged, this, [=, this](const QString &text) {
-        edit(itemField("key"), tr("Edit an item's key"),
-            item([text](ArticleItem &i) { i.key = text; }));
+        const int row = selectedRow(m_items.items);
+        editShared(itemField("key"), tr("Edit an item's key"), [=](Codebook &b) {
+            if (row < 0 || row >= int(b.items.size()))
+                return;
+            const QString old = b.items[size_t(row)].key;
+            b.items[size_t(row)].key = text;
+            moveQuestions(b, old, text);
+        });
     });
     connect(p.question, &QPlainTextEdit::textChanged, this, [=, this] {
         const QString text = m_items.question->toPlainText();
-        edit(itemField("question"), tr("Edit an item's question"),
-            item([text](ArticleItem &i) { i.question = text; }));
+        const int row = selectedRow(m_items.items);
+        const QString key = row >= 0 && row < int(m_draft.items.size())
+            ? m_draft.items[size_t(row)].key
+            : QString();
+        editText(itemField("question"), tr("Edit an item's question"),
+            item([text](ArticleItem &i) { i.question = text; }), [&](CodebookTexts &t) {
+                if (!key.isEmpty())
+                    t.questions.insert(key, text);
+            });
     });
     connect(p.values, &QPlainTextEdit::textChanged, this, [=, this] {
         const QStringList values = fromLines(m_items.values->toPlainText());
-        edit(itemField("values"), tr("Edit an item's values"),
+        editShared(itemField("values"), tr("Edit an item's values"),
             item([values](ArticleItem &i) { i.values = values; }));
     });
     connect(p.level, &QComboBox::currentIndexChanged, this, [=, this] {
         const MeasurementLevel level = levelOf(m_items.level);
-        edit({}, tr("Change an item's level"), item([level](ArticleItem &i) { i.level = level; }));
+        editShared(
+            {}, tr("Change an item's level"), item([level](ArticleItem &i) { i.level = level; }));
     });
     connect(p.items, &QListWidget::currentRowChanged, this, [this] {
         if (m_loading)
@@ -443,7 +648,7 @@ QWidget *CodebookEditor::buildItemsPage()
         loadItemForm();
         showCheck(false);
     });
-    connect(add, &QPushButton::clicked, this, &CodebookEditor::addRow);
+    connect(p.add, &QPushButton::clicked, this, &CodebookEditor::addRow);
     connect(p.remove, &QPushButton::clicked, this, &CodebookEditor::removeRow);
     return page;
 }
@@ -462,9 +667,132 @@ void CodebookEditor::edit(
     change(after);
     if (after.toJson() == m_draft.toJson())
         return;
-    m_undo.push(
-        new CodebookEditCommand([this](const Codebook &book, bool first) { setDraft(book, first); },
-            m_draft, after, field, text));
+    m_undo.push(new CodebookEditCommand(
+        [this, language = m_language](const Codebook &book, bool first) {
+            if (!first)
+                m_language = language;
+            setDraft(book, first);
+        },
+        m_draft, after, field, text));
+}
+
+void CodebookEditor::editText(const QString &field, const QString &text,
+    const std::function<void(Codebook &)> &own,
+    const std::function<void(CodebookTexts &)> &translated)
+{
+    if (m_language.isEmpty()) {
+        edit(field, text, own);
+        return;
+    }
+    const QString language = m_language;
+    edit(QStringLiteral("translations.%1.%2").arg(language, field),
+        tr("%1 (%2)").arg(text, language), [&](Codebook &b) {
+            translated(b.translations[language]);
+            dropEmptyTexts(b, language);
+        });
+}
+
+void CodebookEditor::editShared(
+    const QString &field, const QString &text, const std::function<void(Codebook &)> &change)
+{
+    if (m_language.isEmpty())
+        edit(field, text, change);
+}
+
+QStringList CodebookEditor::languages() const
+{
+    QStringList out = m_stored.translations.keys();
+    for (const QStringList &more : {m_draft.translations.keys(), m_addedLanguages})
+        for (const QString &l : more)
+            if (!out.contains(l))
+                out << l;
+    out.sort();
+    out.prepend(QString());
+    return out;
+}
+
+bool CodebookEditor::showLanguage(const QString &language)
+{
+    if (!languages().contains(language))
+        return false;
+    if (language != m_language) {
+        m_language = language;
+        load();
+        showCheck(false);
+    }
+    return true;
+}
+
+bool CodebookEditor::addLanguage(const QString &code)
+{
+    // As Codebook::fromJson reads the keys of "translations".
+    static const QRegularExpression valid(QStringLiteral("^[a-z]{2,3}$"));
+    const QString language = code.trimmed();
+    if (!valid.match(language).hasMatch()) {
+        m_messages->showMessage(MessageBar::Kind::Warning,
+            tr("“%1” is not a language code: a codebook names a language by two or three "
+               "lower-case letters (ISO 639), such as “fr” or “pl”.")
+                .arg(language));
+        loadLanguages();
+        return false;
+    }
+    if (!languages().contains(language))
+        m_addedLanguages << language;
+    showLanguage(language);
+    loadLanguages();
+    return true;
+}
+
+void CodebookEditor::askLanguage()
+{
+    bool ok = false;
+    const QString code = QInputDialog::getText(this, tr("Add a language"),
+        tr("Language code (ISO 639: two or three lower-case letters, such as “fr” or “pl”):"),
+        QLineEdit::Normal, QString(), &ok);
+    if (ok)
+        addLanguage(code);
+    else
+        loadLanguages();
+}
+
+void CodebookEditor::loadLanguages()
+{
+    const bool was = m_loading;
+    m_loading = true;
+    m_languageBox->clear();
+    for (const QString &l : languages())
+        m_languageBox->addItem(languageName(l), l);
+    m_languageBox->insertSeparator(m_languageBox->count());
+    m_languageBox->addItem(tr("Add a language…"), kAddLanguage);
+    m_languageBox->setCurrentIndex(m_languageBox->findData(m_language));
+    m_languageHint->setVisible(!m_language.isEmpty());
+    m_languageHint->setText(
+        tr("Showing the texts in %1. A field left empty shows the base text in grey, and coders "
+           "read that one. Keys, values, levels and the lists of attributes and items are the "
+           "same in every language: change them in the base language.")
+            .arg(languageName(m_language)));
+    m_loading = was;
+}
+
+Codebook CodebookEditor::shownTexts() const
+{
+    if (m_language.isEmpty())
+        return m_draft;
+    const CodebookTexts texts = m_draft.translations.value(m_language);
+    Codebook out = m_draft;
+    out.name = texts.name;
+    for (FunctionDefinition &def : out.functions) {
+        const FunctionTexts t = texts.functions.value(def.function);
+        def.label = t.label;
+        def.definition = t.definition;
+        def.rules = t.rules;
+        def.examples = t.examples;
+        for (AttributeSpec &a : def.attributes)
+            a.label = t.attributeLabels.value(a.key);
+    }
+    for (ArticleItem &item : out.items)
+        item.question = texts.questions.value(item.key);
+    return out;
 }
 
 void CodebookEditor::setDraft(const Codebook &book, bool keepFields)
@@ -491,17 +819,30 @@ void CodebookEditor::setDraft(const Codebook &book, bool keepFields)
 void CodebookEditor::load()
 {
     m_loading = true;
+    if (!languages().contains(m_language))
+        m_language.clear(); // a language added by a version that was undone
+    loadLanguages();
+    const bool own = m_language.isEmpty();
+    const Codebook shown = shownTexts();
     m_version->setText(m_stored.number > 0
             ? tr("Editing a draft of version %1; saving makes version %2.")
                   .arg(m_stored.number)
                   .arg(m_stored.number + 1)
             : QString());
-    setText(m_name, m_draft.name);
+    setText(m_name, shown.name);
+    m_name->setPlaceholderText(own ? QString() : m_draft.name);
     for (size_t f = 0; f < m_functions.size() && f < m_draft.functions.size(); ++f) {
         FunctionPage &p = m_functions[f];
-        const FunctionDefinition &def = m_draft.functions[f];
+        const FunctionDefinition &def = shown.functions[f];
+        const FunctionDefinition &base = m_draft.functions[f];
         setText(p.label, def.label);
         setText(p.definition, def.definition);
+        // In a translation the base text shows where the field is empty: it stands there.
+        p.label->setPlaceholderText(own ? QString() : base.label);
+        p.definition->setPlaceholderText(own ? QString() : base.definition);
+        p.rules->setPlaceholderText(own ? rulesHint() : paragraphs(base.rules));
+        p.examples->setPlaceholderText(own ? examplesHint() : paragraphs(base.examples));
+        p.add->setEnabled(own);
         // A rule or example list that reads back the same keeps its text as typed.
         if (fromParagraphs(p.rules->toPlainText()) != def.rules)
             setText(p.rules, paragraphs(def.rules));
@@ -517,6 +858,7 @@ void CodebookEditor::load()
         loadAttributeForm(int(f));
         m_loading = true;
     }
+    m_items.add->setEnabled(own);
     const int row = m_items.items->currentRow();
     m_items.items->clear();
     for (const ArticleItem &item : m_draft.items)
@@ -533,12 +875,22 @@ void CodebookEditor::loadAttributeForm(int f)
     const auto &attributes = m_draft.functions[size_t(f)].attributes;
     const int row = p.attributes->currentRow();
     const bool has = row >= 0 && row < int(attributes.size());
+    const bool own = m_language.isEmpty();
     p.attributeForm->setEnabled(has);
-    p.remove->setEnabled(has);
+    p.remove->setEnabled(has && own);
     const AttributeSpec shown = has ? attributes[size_t(row)] : AttributeSpec {};
     m_loading = true;
     setText(p.key, shown.key);
-    setText(p.attributeLabel, shown.label);
+    const QString label = own || !has ? shown.label
+                                      : m_draft.translations.value(m_language)
+                                            .functions.value(FramingFunction(f))
+                                            .attributeLabels.value(shown.key);
+    setText(p.attributeLabel, label);
+    p.attributeLabel->setPlaceholderText(own ? QString() : shown.label);
+    setEditable(p.key, own);
+    p.type->setEnabled(own);
+    p.level->setEnabled(own);
+    setEditable(p.values, own);
     p.type->setCurrentIndex(shown.type == AttributeSpec::Type::Text ? 1 : 0);
     setLevel(p.level, shown.level);
     if (fromLines(p.values->toPlainText()) != shown.values || !has)
@@ -552,12 +904,19 @@ void CodebookEditor::loadItemForm()
     ItemsPage &p = m_items;
     const int row = p.items->currentRow();
     const bool has = row >= 0 && row < int(m_draft.items.size());
+    const bool own = m_language.isEmpty();
     p.form->setEnabled(has);
-    p.remove->setEnabled(has);
+    p.remove->setEnabled(has && own);
     const ArticleItem shown = has ? m_draft.items[size_t(row)] : ArticleItem {};
     m_loading = true;
     setText(p.key, shown.key);
-    setText(p.question, shown.question);
+    setText(p.question,
+        own || !has ? shown.question
+                    : m_draft.translations.value(m_language).questions.value(shown.key));
+    p.question->setPlaceholderText(own ? QString() : shown.question);
+    setEditable(p.key, own);
+    setEditable(p.values, own);
+    p.level->setEnabled(own);
     if (fromLines(p.values->toPlainText()) != shown.values || !has)
         setText(p.values, shown.values.join(QLatin1Char('\n')));
     setLevel(p.level, shown.level);
@@ -566,6 +925,8 @@ void CodebookEditor::loadItemForm()
 
 void CodebookEditor::addRow()
 {
+    if (!m_language.isEmpty())
+        return; // the lists are the same in every language
     const int tab = m_tabs->currentIndex();
     if (tab == kItemsTab) {
         const int row = int(m_draft.items.size());
@@ -590,13 +951,22 @@ void CodebookEditor::addRow()
 
 void CodebookEditor::removeRow()
 {
+    if (!m_language.isEmpty())
+        return;
     const int tab = m_tabs->currentIndex();
     if (tab == kItemsTab) {
         const int row = m_items.items->currentRow();
         if (row < 0 || row >= int(m_draft.items.size()))
             return;
-        edit({}, tr("Remove the item “%1”").arg(m_draft.items[size_t(row)].key),
-            [row](Codebook &b) { b.items.erase(b.items.begin() + row); });
+        edit(
+            {}, tr("Remove the item “%1”").arg(m_draft.items[size_t(row)].key), [row](Codebook &b) {
+                const QString key = b.items[size_t(row)].key;
+                b.items.erase(b.items.begin() + row);
+                // Its question in other languages goes with it (a new item may take the key).
+                if (!b.item(key))
+                    for (CodebookTexts &t : b.translations)
+                        t.questions.remove(key);
+            });
         return;
     }
     auto &attributes = m_draft.functions[size_t(tab)].attributes;
@@ -606,7 +976,14 @@ void CodebookEditor::removeRow()
     edit({}, tr("Remove the attribute “%1”").arg(attributes[size_t(row)].key),
         [tab, row](Codebook &b) {
             auto &list = b.functions[size_t(tab)].attributes;
+            const QString key = list[size_t(row)].key;
             list.erase(list.begin() + row);
+            if (std::ranges::find(list, key, &AttributeSpec::key) == list.end())
+                for (CodebookTexts &t : b.translations) {
+                    const auto texts = t.functions.find(FramingFunction(tab));
+                    if (texts != t.functions.end())
+                        texts->attributeLabels.remove(key);
+                }
         });
 }
 
@@ -664,6 +1041,57 @@ QString CodebookEditor::fieldError(const QString &field) const
     return m_check.error->field == field ? m_check.error->sentence : QString();
 }
 
+QString CodebookEditor::fieldNote(const QString &field) const
+{
+    const auto it = m_fields.constFind(fieldKey(field));
+    return it == m_fields.constEnd() ? QString() : it->note->text();
+}
+
+void CodebookEditor::refreshNotes()
+{
+    // A base text that changed while a translation still gives the text of the current version.
+    const auto note = [this](const QString &key, const TextOf &text) {
+        QStringList stale;
+        const auto now = text(m_draft, {});
+        const auto was = text(m_stored, {});
+        if (m_language.isEmpty() && now && was && *now != *was)
+            for (const QString &l : m_draft.translations.keys()) {
+                const auto given = text(m_draft, l);
+                if (given && !given->isEmpty() && given == text(m_stored, l))
+                    stale << l;
+            }
+        QLabel *label = m_fields.value(key).note;
+        label->setText(stale.isEmpty()
+                ? QString()
+                : tr("The translation of this text may need updating too: %1 (choose the language "
+                     "under “Texts in”).")
+                      .arg(stale.join(QStringLiteral(", "))));
+        label->setVisible(!stale.isEmpty());
+    };
+    note(QStringLiteral("name"), [](const Codebook &book, const QString &language) {
+        return std::optional<QString>(
+            language.isEmpty() ? book.name : book.translations.value(language).name);
+    });
+    const TextOf none = [](const Codebook &, const QString &) { return std::nullopt; };
+    for (FramingFunction f : kFramingFunctions) {
+        const QString path = functionPath(int(f));
+        note(path + QStringLiteral(".label"), functionText(f, FunctionPart::Label));
+        note(path + QStringLiteral(".definition"), functionText(f, FunctionPart::Definition));
+        note(path + QStringLiteral(".rules"), functionText(f, FunctionPart::Rules));
+        note(path + QStringLiteral(".examples"), functionText(f, FunctionPart::Examples));
+        const auto &attributes = m_draft.definition(f).attributes;
+        const int row = m_functions[size_t(f)].attributes->currentRow();
+        note(path + QStringLiteral(".attributes.label"),
+            row >= 0 && row < int(attributes.size())
+                ? attributeLabelText(f, attributes[size_t(row)].key)
+                : none);
+    }
+    const int row = m_items.items->currentRow();
+    note(QStringLiteral("items.question"),
+        row >= 0 && row < int(m_draft.items.size()) ? questionText(m_draft.items[size_t(row)].key)
+                                                    : none);
+}
+
 void CodebookEditor::showCheck(bool go)
 {
     if (!m_errorKey.isEmpty()) {
@@ -673,6 +1101,7 @@ void CodebookEditor::showCheck(bool go)
         was.error->clear();
         m_errorKey.clear();
     }
+    refreshNotes();
     m_check = checkCodebookDraft(m_draft);
     m_save->setToolTip(m_check.error ? tr("Fix the marked field first.") : QString());
     if (!m_check.error)

@@ -1,12 +1,15 @@
 #pragma once
 // Lead → Codebook…: the codebook's current version as a draft to edit — each function's label,
 // definition, decision rules, examples and attributes (key, label, type, level, closed value
-// list), and the article-level items (key, question, values, level). Every edit is a step on the
-// editor's own undo stack. The draft is checked with the rules a codebook file is read with, and
-// a failure is shown at its field. "Save as new version…" shows the diff against the current
-// version, asks for a note and stores the draft as one AddCodebookVersionEdit (made by
-// CodebookVersions::addEdit, the check `fourfold-cli codebook --update` makes too) on the desk's
-// undo stack, then says in the message bar how many annotations are now outdated.
+// list), and the article-level items (key, question, values, level). The texts (name, labels,
+// definitions, rules, examples, questions) are shown and edited in the base language or in one of
+// the codebook's translations, chosen above the pages; keys, values, levels and the lists of
+// attributes and items are shared by every language and edited in the base language only. Every
+// edit is a step on the editor's own undo stack. The draft is checked with the rules a codebook
+// file is read with, and a failure is shown at its field. "Save as new version…" shows the diff
+// against the current version, asks for a note and stores the draft as one AddCodebookVersionEdit
+// (made by CodebookVersions::addEdit, the check `fourfold-cli codebook --update` makes too) on the
+// desk's undo stack, then says in the message bar how many annotations are now outdated.
 
 #include "app/desktop/codebook/codebook_field_check.h"
 #include "core/model/codebook.h"
@@ -58,6 +61,21 @@ public:
     QWidget *fieldWidget(const QString &field);
     // The sentence shown under `field`'s widget; empty when the field is fine.
     QString fieldError(const QString &field) const;
+    // The note shown under `field`'s widget when its base text changed while translations of it
+    // stayed as they were; empty when there is none.
+    QString fieldNote(const QString &field) const;
+
+    // The languages whose texts the editor can show: "" (the base language) first, then, by
+    // code, every language the current version or the draft has texts in or that was added.
+    QStringList languages() const;
+    // The language whose texts the text fields show and edit; "" for the base language.
+    QString shownLanguage() const { return m_language; }
+    // Shows the texts of `language`, one of languages(); false (nothing changes) for another.
+    bool showLanguage(const QString &language);
+    // Adds `code` to the languages and shows it. The code is read as Codebook::fromJson reads a
+    // translation's key (two or three lower-case letters, ISO 639); false, with the reason in the
+    // message bar, for another text. The draft holds the language once a text is typed in it.
+    bool addLanguage(const QString &code);
 
     // The diff of the draft against the current version, as `codebook --diff` words it; empty
     // when the draft breaks a rule.
@@ -78,6 +96,7 @@ private:
     struct FieldWidgets {
         QWidget *editor = nullptr;
         QLabel *error = nullptr;
+        QLabel *note = nullptr; // translations that may need updating
     };
     struct FunctionPage {
         QLineEdit *label = nullptr;
@@ -85,6 +104,7 @@ private:
         QPlainTextEdit *rules = nullptr;
         QPlainTextEdit *examples = nullptr;
         QListWidget *attributes = nullptr;
+        QPushButton *add = nullptr;
         QWidget *attributeForm = nullptr;
         QLineEdit *key = nullptr;
         QLineEdit *attributeLabel = nullptr;
@@ -95,6 +115,7 @@ private:
     };
     struct ItemsPage {
         QListWidget *items = nullptr;
+        QPushButton *add = nullptr;
         QWidget *form = nullptr;
         QLineEdit *key = nullptr;
         QPlainTextEdit *question = nullptr;
@@ -105,7 +126,8 @@ private:
 
     QWidget *buildFunctionPage(FramingFunction f);
     QWidget *buildItemsPage();
-    // Puts `editor` with a hidden error line under it into a column and registers it as `key`
+    // Puts `editor` with a hidden error line (and note) under it into a column and registers it
+    // as `key`
     // (a field path with the row's index left out: "functions[2].attributes.key", "items.key").
     QWidget *withErrorLine(QWidget *editor, const QString &key);
     QComboBox *levelBox(QWidget *parent);
@@ -114,11 +136,29 @@ private:
     // one of them), refreshing only lists and forms.
     void setDraft(const Codebook &book, bool keepFields);
     void load();
+    // The language list and the hint above the pages, for the language shown.
+    void loadLanguages();
+    // The draft with the texts of the language shown in place of its own ("" where that language
+    // gives none); the draft itself for the base language.
+    Codebook shownTexts() const;
     void loadAttributeForm(int f);
     void loadItemForm();
-    // One undoable step: `change` applied to a copy of the draft.
+    // One undoable step: `change` applied to a copy of the draft. Undo and redo show the language
+    // the step was made in.
     void edit(
         const QString &field, const QString &text, const std::function<void(Codebook &)> &change);
+    // An edit of a text: `own` in the base language, else `translated` on the texts of the
+    // language shown (a text left empty there is not given: the base text stands).
+    void editText(const QString &field, const QString &text,
+        const std::function<void(Codebook &)> &own,
+        const std::function<void(CodebookTexts &)> &translated);
+    // An edit of a key, value, level or list, shared by every language: nothing while a
+    // translation is shown (the fields are read-only then).
+    void editShared(
+        const QString &field, const QString &text, const std::function<void(Codebook &)> &change);
+    // Shows the notes of the fields on screen.
+    void refreshNotes();
+    void askLanguage();
     int selectedRow(const QListWidget *list) const;
 
     // Checks the draft and shows its first failure at the field when the field is on screen;
@@ -145,6 +185,10 @@ private:
     MessageBar *m_messages = nullptr;
     QLabel *m_version = nullptr;
     QLineEdit *m_name = nullptr;
+    QComboBox *m_languageBox = nullptr;
+    QLabel *m_languageHint = nullptr;
+    QString m_language; // shown; "" for the base language
+    QStringList m_addedLanguages; // added here, perhaps without a text yet
     QTabWidget *m_tabs = nullptr;
     std::array<FunctionPage, 4> m_functions;
     ItemsPage m_items;
