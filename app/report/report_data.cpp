@@ -67,7 +67,7 @@ QString drawText(const Draw &draw)
         : ReportDataText::tr("a simple random sample");
     return ReportDataText::tr(
         "The %1 articles of the %2 phase were drawn as %3 (seed %4) from a frame of %5 "
-        "articles with no earlier assignment, on %6.")
+        "articles not yet assigned to training, pilot or reliability coding, on %6.")
         .arg(QString::number(draw.articles.size()), phaseKey(draw.phase), how,
             QString::number(draw.seed), QString::number(draw.frameArticles), draw.drawnAt.left(10));
 }

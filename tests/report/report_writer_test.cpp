@@ -471,7 +471,8 @@ TEST_CASE("a recorded draw of the reliability sample is stated in the method tex
     const QString text = readText(html);
     CHECK(text.contains(QStringLiteral("The 3 articles of the reliability phase were drawn as a "
                                        "sample stratified by topic (seed 11) from a frame of 31 "
-                                       "articles")));
+                                       "articles not yet assigned to training, pilot or "
+                                       "reliability coding")));
     const QJsonObject record =
         valueAt(embeddedFigures(text), QStringLiteral("sample.draw_record")).toObject();
     CHECK(record.value(QStringLiteral("seed")).toString() == QLatin1String("11"));
