@@ -494,8 +494,22 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
             // The coder worked on an assignment the project withdrew meanwhile (see the header):
             // the project's row stands and the copy's version waits for the lead as a conflict.
             store::PortableRow object = row;
-            if (inProject)
+            QJsonObject kept;
+            if (inProject) {
                 object.uuid = mine->uuid;
+                kept = mine->content;
+            } else {
+                // No row at all (the draw was undone): the project gets the assignment as a
+                // tombstone, as a withdrawal leaves it, which keeps the coder's time and gives
+                // the conflict an object to decide on.
+                store::PortableRow tombstone = row;
+                tombstone.content.insert(QStringLiteral("status"), QStringLiteral("assigned"));
+                tombstone.content.insert(QStringLiteral("deleted"), 1);
+                FOURFOLD_TRY_STATUS(store::writePortableRow(mainDb, tombstone));
+                ++writes;
+                report.seconds += row.seconds - base->seconds;
+                kept = tombstone.content;
+            }
             auto open = store::openConflictsOf(mainDb, row.type, object.uuid);
             if (!open)
                 return std::unexpected(open.error());
@@ -503,14 +517,14 @@ Result<MergeReport> mergeOne(Database &mainDb, const QString &mainUuid, const QS
             for (const MergeConflict &c : *open)
                 addVersion(versions,
                     Version {store::PortableRow {row.type, object.uuid, c.theirs, 0}, c.copyUuid});
+            const QString keptDigest = store::PortableRow {row.type, object.uuid, kept, 0}.digest();
             std::erase_if(versions, [&](const Version &v) {
-                return v.row.digest() == base->digest
-                    || (inProject && v.row.digest() == mine->digest());
+                return v.row.digest() == base->digest || v.row.digest() == keptDigest;
             });
             object.content = row.content;
             addVersion(versions, Version {object, info.copyUuid});
-            FOURFOLD_TRY_STATUS(reconcileConflicts(mainDb, object, versions,
-                inProject ? mine->content : QJsonObject {}, report.conflicts, writes));
+            FOURFOLD_TRY_STATUS(
+                reconcileConflicts(mainDb, object, versions, kept, report.conflicts, writes));
             report.withdrawn.push_back(WithdrawnWork {
                 externalIds.value(row.content.value(QLatin1String("article")).toString()),
                 row.content.value(QLatin1String("phase")).toString()});

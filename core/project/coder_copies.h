@@ -29,11 +29,12 @@
 // holds it (withdrawn, or as the new draw made it, so the work does not count in that draw by
 // itself), and the copy's version of the assignment becomes an open conflict on it, whatever its
 // modification, for the lead to decide: keep the withdrawal, or take the coder's version (the
-// article assigned to the coder again, the work counting once it is done). The merge report names
-// those articles. Refusing the withdrawal while a copy is out was the alternative; it was not
-// chosen because a copy has no end (its coder may merge it again and again, or never return it),
-// so the lead could be kept from withdrawing forever, and because the project could not tell
-// whether the coder had even opened the article.
+// article assigned to the coder again, the work counting once it is done). An assignment whose row
+// is gone (its draw undone) comes back as a tombstone, as a withdrawal leaves it, holding the
+// coder's time. The merge report names those articles. Refusing the withdrawal while a copy is out
+// was the alternative; it was not chosen because a copy has no end (its coder may merge it again
+// and again, or never return it), so the lead could be kept from withdrawing forever, and because
+// the project could not tell whether the coder had even opened the article.
 
 #include "core/model/coder.h"
 #include "core/model/error.h"

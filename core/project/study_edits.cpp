@@ -17,6 +17,20 @@ struct StudyEditText {
     Q_DECLARE_TR_FUNCTIONS(StudyEditText)
 };
 
+// Writes `record` back to the row of `row`, keeping the coding time the row gained since: a merge
+// of a coder copy adds the time its coder spent on a withdrawn assignment to the row (see
+// core/project/coder_copies.h), and time only ever adds up, so an undo must not take it away.
+Status writeBackKeepingTime(
+    Database &db, const AssignmentToWrite &row, store::AssignmentRecord record)
+{
+    auto current = store::assignmentRecord(db, row.article, row.coder, row.phase);
+    if (!current)
+        return std::unexpected(current.error());
+    if (*current)
+        record.activeSeconds = std::max(record.activeSeconds, (*current)->activeSeconds);
+    return store::writeAssignmentRecord(db, row.article, row.coder, row.phase, record);
+}
+
 } // namespace
 
 struct AssignEdit::Before {
@@ -54,6 +68,11 @@ Status AssignEdit::apply(Database &db)
                 : std::optional<store::AssignmentRecord> {});
         FOURFOLD_TRY_STATUS(
             store::insertAssignment(db, row.article, row.coder, row.phase, row.uuid));
+        // A tombstone carries time only when a coder copy brought work on the withdrawn
+        // assignment: the coder's time stays with the coder's assignment of the article.
+        if (before->tombstones.back() && before->tombstones.back()->activeSeconds > 0)
+            FOURFOLD_TRY_STATUS(store::addAssignmentSeconds(
+                db, row.article, row.coder, row.phase, before->tombstones.back()->activeSeconds));
         FOURFOLD_TRY_STATUS(store::appendEvent(db, actor(), QStringLiteral("assignment.add"),
             QStringLiteral("assignment"), row.uuid,
             QJsonObject {{QStringLiteral("article"), row.article.value},
@@ -73,8 +92,7 @@ Status AssignEdit::revert(Database &db)
     for (std::size_t i = m_rows.size(); i-- > 0;) {
         const AssignmentToWrite &row = m_rows[i];
         if (m_before && i < m_before->tombstones.size() && m_before->tombstones[i])
-            FOURFOLD_TRY_STATUS(store::writeAssignmentRecord(
-                db, row.article, row.coder, row.phase, *m_before->tombstones[i]));
+            FOURFOLD_TRY_STATUS(writeBackKeepingTime(db, row, *m_before->tombstones[i]));
         else
             FOURFOLD_TRY_STATUS(store::removeAssignment(db, row.article, row.coder, row.phase));
     }
@@ -166,8 +184,7 @@ Status WithdrawDrawEdit::revert(Database &db)
     FOURFOLD_TRY_STATUS(store::setSetting(db, m_settingKey, m_before->setting));
     for (std::size_t i = 0; i < m_rows.size() && i < m_before->rows.size(); ++i)
         if (m_before->rows[i])
-            FOURFOLD_TRY_STATUS(store::writeAssignmentRecord(
-                db, m_rows[i].article, m_rows[i].coder, m_rows[i].phase, *m_before->rows[i]));
+            FOURFOLD_TRY_STATUS(writeBackKeepingTime(db, m_rows[i], *m_before->rows[i]));
     return {};
 }
 

@@ -14,6 +14,9 @@
 #include "tests/project/copy_files.h"
 #include "tests/support/db_dump.h"
 
+#include <QFile>
+#include <QThread>
+
 using namespace fourfold;
 using namespace fourfold::test;
 
@@ -28,6 +31,7 @@ struct WithdrawnFixture {
     CoderId c1, c2;
     QString drawn; // external id of the drawn article
     QString copyPath = dir.filePath(QStringLiteral("c01.fourfold"));
+    std::unique_ptr<AssignEdit> drawEdit; // the draw, as an edit that can be undone
 
     WithdrawnFixture()
     {
@@ -46,7 +50,10 @@ struct WithdrawnFixture {
         c2 = *b;
         auto d = SubsampleDraw::plan(*main, request(1, 7));
         REQUIRE(d);
-        REQUIRE(SubsampleDraw::commit(*main, *d));
+        auto edit = SubsampleDraw::edit(*main, *d, CoderId {});
+        REQUIRE(edit);
+        drawEdit = std::move(*edit);
+        REQUIRE(main->apply(*drawEdit));
         REQUIRE(d->articles.size() == 1);
         drawn = d->articles.front();
         auto r = CoderCopies::handout(*main, QStringLiteral("C01"), copyPath);
@@ -76,25 +83,44 @@ struct WithdrawnFixture {
         return **r;
     }
 
+    // Commits a reliability draw of `size` articles from `seed` as an edit and returns it.
+    std::unique_ptr<AssignEdit> drawAgain(int size, std::uint64_t seed)
+    {
+        auto d = SubsampleDraw::plan(*main, request(size, seed));
+        REQUIRE(d);
+        auto edit = SubsampleDraw::edit(*main, *d, CoderId {});
+        REQUIRE(edit);
+        REQUIRE(main->apply(**edit));
+        return std::move(*edit);
+    }
+
     // C01 codes the drawn article in the copy: a span, an answer, done, two minutes.
     void codeInCopy() const
     {
-        Project p = openProject(copyPath);
-        const CoderId me = coderIn(p, QStringLiteral("C01"));
+        codeIn(
+            copyPath, QStringLiteral("C01"), FramingFunction::Problem, QStringLiteral("done"), 120);
+    }
+
+    // The coder `pseudonym` codes the drawn article in the copy `path`: a span of `function` on
+    // the first sentence, the answer `function`, the status `status`, `seconds` of coding.
+    void codeIn(const QString &path, const QString &pseudonym, FramingFunction function,
+        const QString &status, qint64 seconds) const
+    {
+        Project p = openProject(path);
+        const CoderId me = coderIn(p, pseudonym);
         const ArticleId a = articleIn(p, drawn);
         const QString text = textOf(p, a);
         // The first sentence of each fixture article, up to its first full stop.
         const QString quote = text.left(text.indexOf(QLatin1Char('.')));
-        AddAnnotationEdit add(a, me,
-            AnnotationContent {FramingFunction::Problem, rangeOf(text, quote), {}, {}, {}},
+        AddAnnotationEdit add(a, me, AnnotationContent {function, rangeOf(text, quote), {}, {}, {}},
             Phase::Reliability);
         REQUIRE(p.apply(add));
-        SetJudgementEdit answer(a, me, QStringLiteral("dominant_function"),
-            QStringLiteral("problem"), Phase::Reliability);
+        SetJudgementEdit answer(
+            a, me, QStringLiteral("dominant_function"), functionKey(function), Phase::Reliability);
         REQUIRE(p.apply(answer));
-        SetArticleStatusEdit done(a, me, QStringLiteral("done"));
-        REQUIRE(p.apply(done));
-        REQUIRE(p.addCodingTime(a, me, 120));
+        SetArticleStatusEdit mark(a, me, status);
+        REQUIRE(p.apply(mark));
+        REQUIRE(p.addCodingTime(a, me, seconds));
     }
 
     qsizetype liveSpansOfC01() const
@@ -297,4 +323,164 @@ TEST_CASE("a merge of work on a withdrawn draw refused for another copy writes n
     CHECK(merged.error().message.contains(plain));
     CHECK(f.dump() == before);
     CHECK(f.liveSpansOfC01() == 0);
+}
+
+TEST_CASE("undoing the withdrawal after the merge keeps the coder's time and work")
+{
+    WithdrawnFixture f;
+    auto withdraw = SubsampleDraw::withdrawEdit(*f.main, Phase::Reliability, CoderId {});
+    REQUIRE(withdraw);
+    REQUIRE(f.main->apply(**withdraw));
+    f.codeInCopy();
+    REQUIRE(CoderCopies::merge(*f.main, {f.copyPath}));
+    REQUIRE(f.record(f.drawn, f.c1).activeSeconds == 120);
+
+    // The draw is back as it was, with the 120 s the merge brought (time only adds up).
+    REQUIRE(f.main->revert(**withdraw));
+    const store::AssignmentRecord back = f.record(f.drawn, f.c1);
+    CHECK_FALSE(back.deleted);
+    CHECK(back.status == QStringLiteral("assigned"));
+    CHECK(back.activeSeconds == 120);
+    CHECK(f.liveSpansOfC01() == 1);
+    auto draw = SubsampleDraw::recorded(*f.main, Phase::Reliability);
+    REQUIRE(draw);
+    CHECK(draw->has_value());
+    // Now the draw has work on it: it cannot be withdrawn again, and the refusal says so.
+    auto again = SubsampleDraw::withdraw(*f.main, Phase::Reliability);
+    REQUIRE_FALSE(again);
+    CHECK(again.error().code == ErrorCode::NotAllowed);
+    CHECK(again.error().message.contains(QStringLiteral("coding has started on 1 of its 2")));
+}
+
+TEST_CASE("a draw drawn again after the merge gives the coder's time to the new assignment")
+{
+    WithdrawnFixture f;
+    REQUIRE(SubsampleDraw::withdraw(*f.main, Phase::Reliability));
+    f.codeInCopy();
+    REQUIRE(CoderCopies::merge(*f.main, {f.copyPath}));
+    const QString merged = f.dump();
+
+    auto redraw = f.drawAgain(3, 3); // every article of the frame, the coded one too
+    const store::AssignmentRecord fresh = f.record(f.drawn, f.c1);
+    CHECK_FALSE(fresh.deleted);
+    CHECK(fresh.status == QStringLiteral("assigned"));
+    CHECK(fresh.activeSeconds == 120);
+    CHECK(f.record(f.drawn, f.c2).activeSeconds == 0);
+    // Undoing the new draw leaves the project as the merge left it.
+    REQUIRE(f.main->revert(*redraw));
+    CHECK(f.dump() == merged);
+}
+
+TEST_CASE("work on a draw undone after the hand-out comes back as a withdrawn assignment")
+{
+    WithdrawnFixture f;
+    REQUIRE(f.main->revert(*f.drawEdit)); // the draw's rows are gone for good
+    auto gone = store::assignmentRecord(
+        databaseForTesting(*f.main), f.article(f.drawn), f.c1, Phase::Reliability);
+    REQUIRE(gone);
+    REQUIRE_FALSE(gone->has_value());
+    f.codeInCopy();
+
+    auto merged = CoderCopies::merge(*f.main, {f.copyPath});
+    INFO((merged ? QString() : merged.error().message).toStdString());
+    REQUIRE(merged);
+    const MergeReport &r = merged->front();
+    REQUIRE(r.withdrawn.size() == 1);
+    CHECK(r.withdrawn.front().article == f.drawn);
+    CHECK(r.seconds == 120);
+    CHECK(r.conflicts == 1);
+    const store::AssignmentRecord a = f.record(f.drawn, f.c1);
+    CHECK(a.deleted);
+    CHECK(a.status == QStringLiteral("assigned"));
+    CHECK(a.activeSeconds == 120);
+    CHECK(f.liveSpansOfC01() == 1);
+    CHECK(f.scopeOfC01() == CodingState::InProgress);
+
+    const MergeConflict c = f.onlyConflict();
+    CHECK(c.objectUuid == a.uuid);
+    CHECK(CoderCopies::isWithdrawnAssignment(c));
+    const QString after = f.dump();
+    auto again = CoderCopies::merge(*f.main, {f.copyPath});
+    REQUIRE(again);
+    CHECK(again->front().alreadyMerged);
+    CHECK(f.dump() == after);
+    ResolveConflictEdit take(f.c2, c.uuid, true);
+    REQUIRE(f.main->apply(take));
+    CHECK_FALSE(f.record(f.drawn, f.c1).deleted);
+    CHECK(f.record(f.drawn, f.c1).status == QStringLiteral("done"));
+    REQUIRE(f.main->revert(take));
+    CHECK(f.dump() == after);
+}
+
+TEST_CASE("copies with work on a withdrawn draw merge to the same project in any order")
+{
+    WithdrawnFixture f;
+    // A second copy for C01 and one for C02, all handed out while the draw stood.
+    const QString a2 = f.dir.filePath(QStringLiteral("c01-second.fourfold"));
+    const QString b = f.dir.filePath(QStringLiteral("c02.fourfold"));
+    REQUIRE(CoderCopies::handout(*f.main, QStringLiteral("C01"), a2));
+    REQUIRE(CoderCopies::handout(*f.main, QStringLiteral("C02"), b));
+    REQUIRE(SubsampleDraw::withdraw(*f.main, Phase::Reliability));
+    f.codeIn(
+        f.copyPath, QStringLiteral("C01"), FramingFunction::Problem, QStringLiteral("done"), 120);
+    QThread::msleep(20); // later edits get later times
+    f.codeIn(a2, QStringLiteral("C01"), FramingFunction::Cause, QStringLiteral("started"), 40);
+    f.codeIn(b, QStringLiteral("C02"), FramingFunction::Remedy, QStringLiteral("done"), 60);
+    f.main.reset();
+    const QString start = f.dir.filePath(QStringLiteral("start.fourfold"));
+    REQUIRE(QFile::copy(f.mainPath, start));
+
+    const std::vector<std::pair<const char *, std::vector<QStringList>>> orders {
+        {"A A2 B in one call", {{f.copyPath, a2, b}}},
+        {"B A2 A in one call", {{b, a2, f.copyPath}}},
+        {"A2 A B one by one", {{a2}, {f.copyPath}, {b}}},
+        {"B A A2 one by one", {{b}, {f.copyPath}, {a2}}},
+    };
+    QString firstRows;
+    QString firstConflicts;
+    for (const auto &[name, calls] : orders) {
+        INFO(name);
+        const QString path = f.dir.filePath(QString::fromLatin1(name) + ".fourfold");
+        REQUIRE(QFile::copy(start, path));
+        Project p = openProject(path);
+        QStringList named;
+        for (const QStringList &call : calls)
+            for (const MergeReport &r : mergeInto(p, call))
+                for (const WithdrawnWork &w : r.withdrawn)
+                    named << r.coderPseudonym + QLatin1Char(':') + w.article;
+        named.sort();
+        CHECK(named
+            == QStringList {QStringLiteral("C01:") + f.drawn, QStringLiteral("C01:") + f.drawn,
+                QStringLiteral("C02:") + f.drawn});
+        const QString rows = uuidDump(
+            databaseForTesting(p), kOrderFree + QStringList {QStringLiteral("merge_conflict")});
+        const QString conflicts = conflictDump(path);
+        if (firstRows.isEmpty()) {
+            firstRows = rows;
+            firstConflicts = conflicts;
+        } else {
+            CHECK(rows == firstRows);
+            CHECK(conflicts == firstConflicts);
+        }
+        // Both coders' assignments stay withdrawn; every copy's version waits for the lead.
+        for (const char *coder : {"C01", "C02"})
+            CHECK(count(path,
+                      QStringLiteral("SELECT s.deleted FROM assignment s JOIN coder c ON c.id = "
+                                     "s.coder_id JOIN article a ON a.id = s.article_id WHERE "
+                                     "c.pseudonym = '%1' AND a.external_id = '%2'")
+                          .arg(QLatin1String(coder), f.drawn)
+                          .toUtf8()
+                          .constData())
+                == 1);
+        auto open = CoderCopies::conflicts(p, false);
+        REQUIRE(open);
+        // C01's two answers to one item compete as well (the later, A2's, stays live).
+        CHECK(open->size() == 4);
+        CHECK(std::ranges::count_if(*open, &CoderCopies::isWithdrawnAssignment) == 3);
+        CHECK(std::ranges::count_if(*open, [](const MergeConflict &c) {
+            return c.objectType == QLatin1String("judgement");
+        }) == 1);
+        // The time of all three copies is kept.
+        CHECK(count(path, "SELECT sum(active_seconds) FROM assignment") == 220);
+    }
 }
