@@ -7633,293 +7633,343 @@ Beinahe-Kopie von %2</translation>
 <context>
     <name>fourfold::CodebookEditor</name>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="74"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="79"/>
         <source>nominal</source>
         <translation>nominalskaliert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="76"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="81"/>
         <source>ordinal</source>
         <translation>ordinalskaliert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="78"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="83"/>
         <source>interval</source>
         <translation>intervallskaliert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="80"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="85"/>
         <source>ratio</source>
         <translation>verhältnisskaliert</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="131"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="274"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="344"/>
         <source>Codebook</source>
         <translation>Codebuch</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="138"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="281"/>
         <source>&amp;Name:</source>
         <translation>&amp;Name:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="154"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="317"/>
         <source>Article-level items</source>
         <translation>Items auf Artikelebene</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="159"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="322"/>
         <source>&amp;Undo:</source>
         <translation>&amp;Rückgängig:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="161"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="324"/>
         <source>&amp;Redo:</source>
         <translation>&amp;Wiederholen:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="175"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="338"/>
         <source>&amp;Save as new version…</source>
         <translation>Als neue Version &amp;speichern…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="344"/>
         <source>Codebook (changed)</source>
         <translation>Codebuch (geändert)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="184"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="348"/>
         <source>Edit the codebook&apos;s name</source>
         <translation>Namen des Codebuchs bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="239"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="409"/>
         <source>Level of measurement: it decides which agreement coefficient compares the values (Krippendorff 2004, ch. 11).</source>
         <translation>Skalenniveau: es entscheidet, welcher Übereinstimmungskoeffizient die Werte vergleicht (Krippendorff 2004, Kap. 11).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="255"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="425"/>
         <source>&amp;Label:</source>
         <translation>&amp;Bezeichnung:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="258"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="428"/>
         <source>&amp;Definition:</source>
         <translation>&amp;Definition:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="260"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="142"/>
         <source>One decision rule per paragraph (an empty line between two).</source>
         <translation>Eine Entscheidungsregel je Absatz (eine Leerzeile dazwischen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="261"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="431"/>
         <source>Decision &amp;rules:</source>
         <translation>Entscheidungs&amp;regeln:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="263"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="147"/>
         <source>One example per paragraph (an empty line between two).</source>
         <translation>Ein Beispiel je Absatz (eine Leerzeile dazwischen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="264"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="154"/>
+        <source>Base language</source>
+        <translation>Basissprache</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="286"/>
+        <source>Texts &amp;in:</source>
+        <translation>Te&amp;xte in:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="290"/>
+        <source>The language whose texts the fields show and edit. Coders whose program speaks that language read these texts.</source>
+        <translation>Die Sprache, deren Texte die Felder zeigen und bearbeiten. Codierende, deren Programm diese Sprache spricht, lesen diese Texte.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="434"/>
         <source>E&amp;xamples:</source>
         <translation>&amp;Beispiele:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="267"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="437"/>
         <source>Attributes of %1 spans</source>
         <translation>Merkmale von %1-Textstellen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="274"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="444"/>
         <source>&amp;Add attribute</source>
         <translation>Merkmal &amp;hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="275"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="445"/>
         <source>Re&amp;move attribute</source>
         <translation>Merkmal &amp;entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="284"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="400"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="454"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="591"/>
         <source>&amp;Key:</source>
         <translation>&amp;Schlüssel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="287"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="457"/>
         <source>La&amp;bel:</source>
         <translation>Be&amp;zeichnung:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="289"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="459"/>
         <source>closed list of values</source>
         <translation>geschlossene Werteliste</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="290"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="460"/>
         <source>free text</source>
         <translation>Freitext</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="291"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="461"/>
         <source>&amp;Type:</source>
         <translation>&amp;Typ:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="293"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="407"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="463"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="598"/>
         <source>Le&amp;vel:</source>
         <translation>&amp;Niveau:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="295"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="404"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="465"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="595"/>
         <source>One value per line, in order.</source>
         <translation>Ein Wert je Zeile, in Reihenfolge.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="297"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="405"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="467"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="596"/>
         <source>&amp;Values:</source>
         <translation>&amp;Werte:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="318"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="489"/>
         <source>Edit the label of %1</source>
         <translation>Bezeichnung von %1 bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="323"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="496"/>
         <source>Edit the definition of %1</source>
         <translation>Definition von %1 bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="328"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="503"/>
         <source>Edit the decision rules of %1</source>
         <translation>Entscheidungsregeln von %1 bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="333"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="510"/>
         <source>Edit the examples of %1</source>
         <translation>Beispiele von %1 bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="337"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="516"/>
         <source>Edit an attribute&apos;s key</source>
         <translation>Schlüssel eines Merkmals bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="341"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="529"/>
         <source>Edit an attribute&apos;s label</source>
         <translation>Bezeichnung eines Merkmals bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="347"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="538"/>
         <source>Change an attribute&apos;s type</source>
         <translation>Typ eines Merkmals ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="355"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="546"/>
         <source>Change an attribute&apos;s level</source>
         <translation>Niveau eines Merkmals ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="360"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="551"/>
         <source>Edit an attribute&apos;s values</source>
         <translation>Werte eines Merkmals bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="381"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="572"/>
         <source>Questions answered once per article, such as which function dominates it.</source>
         <translation>Fragen, die einmal je Artikel beantwortet werden, etwa welche Funktion ihn dominiert.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="388"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="579"/>
         <source>&amp;Add item</source>
         <translation>Item &amp;hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="389"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="580"/>
         <source>Re&amp;move item</source>
         <translation>Item &amp;entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="402"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="593"/>
         <source>&amp;Question:</source>
         <translation>&amp;Frage:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="423"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="615"/>
         <source>Edit an item&apos;s key</source>
         <translation>Schlüssel eines Items bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="428"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="629"/>
         <source>Edit an item&apos;s question</source>
         <translation>Frage eines Items bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="433"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="637"/>
         <source>Edit an item&apos;s values</source>
         <translation>Werte eines Items bearbeiten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="438"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="643"/>
         <source>Change an item&apos;s level</source>
         <translation>Niveau eines Items ändern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="495"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="689"/>
+        <source>%1 (%2)</source>
+        <translation>%1 (%2)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="733"/>
+        <source>“%1” is not a language code: a codebook names a language by two or three lower-case letters (ISO 639), such as “fr” or “pl”.</source>
+        <translation>„%1“ ist kein Sprachcode: Ein Codebuch benennt eine Sprache mit zwei oder drei Kleinbuchstaben (ISO 639), etwa „fr“ oder „pl“.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="749"/>
+        <source>Add a language</source>
+        <translation>Sprache hinzufügen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="750"/>
+        <source>Language code (ISO 639: two or three lower-case letters, such as “fr” or “pl”):</source>
+        <translation>Sprachcode (ISO 639: zwei oder drei Kleinbuchstaben, etwa „fr“ oder „pl“):</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="766"/>
+        <source>Add a language…</source>
+        <translation>Sprache hinzufügen…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="770"/>
+        <source>Showing the texts in %1. A field left empty shows the base text in grey, and coders read that one. Keys, values, levels and the lists of attributes and items are the same in every language: change them in the base language.</source>
+        <translation>Angezeigt werden die Texte in %1. Ein leer gelassenes Feld zeigt den Text der Basissprache in Grau, und diesen lesen die Codierenden. Schlüssel, Werte, Niveaus und die Listen der Merkmale und Items sind in jeder Sprache dieselben: Ändern Sie sie in der Basissprache.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="828"/>
         <source>Editing a draft of version %1; saving makes version %2.</source>
         <translation>Sie bearbeiten einen Entwurf von Version %1; Speichern erstellt Version %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="572"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="933"/>
         <source>Add an item</source>
         <translation>Ein Item hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="581"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="942"/>
         <source>Add an attribute to %1</source>
         <translation>%1 ein Merkmal hinzufügen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="598"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="962"/>
         <source>Remove the item “%1”</source>
         <translation>Das Item „%1“ entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="606"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="976"/>
         <source>Remove the attribute “%1”</source>
         <translation>Das Merkmal „%1“ entfernen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="677"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1066"/>
+        <source>The translation of this text may need updating too: %1 (choose the language under “Texts in”).</source>
+        <translation>Die Übersetzung dieses Textes muss vielleicht ebenfalls angepasst werden: %1 (wählen Sie die Sprache unter „Texte in“).</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1106"/>
         <source>Fix the marked field first.</source>
         <translation>Korrigieren Sie zuerst das markierte Feld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="734"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1163"/>
         <source>Version %1 was added since this draft was started from version %2; nothing was saved. Close the editor and open it again to edit the new version.</source>
         <translation>Version %1 wurde hinzugefügt, seit dieser Entwurf von Version %2 aus begonnen wurde; nichts wurde gespeichert. Schließen Sie den Editor und öffnen Sie ihn erneut, um die neue Version zu bearbeiten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="748"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="795"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1177"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1224"/>
         <source>The codebook was not saved: the marked field needs a change first.</source>
         <translation>Das Codebuch wurde nicht gespeichert: das markierte Feld muss zuerst geändert werden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="753"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1182"/>
         <source>Nothing was saved: the draft is the same as version %1.</source>
         <translation>Nichts wurde gespeichert: der Entwurf ist identisch mit Version %1.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="780"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1209"/>
         <source>Codebook version %1 saved. %n annotation(s) made under an older version are now outdated; %2 of them belong to a function that changed and need a re-check.</source>
         <translation>
             <numerusform>Codebuchversion %1 gespeichert. %n unter einer älteren Version erstellte Annotation ist jetzt veraltet; %2 davon gehören zu einer geänderten Funktion und müssen erneut geprüft werden.</numerusform>
@@ -7927,17 +7977,17 @@ Beinahe-Kopie von %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="799"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1228"/>
         <source>Save as version %1</source>
         <translation>Als Version %1 speichern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="801"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1230"/>
         <source>What changes against version %1:</source>
         <translation>Was sich gegenüber Version %1 ändert:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="807"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1236"/>
         <source>&amp;Note (what changed and why):</source>
         <translation>&amp;Notiz (was sich geändert hat und warum):</translation>
     </message>

@@ -7633,293 +7633,343 @@ Bijna-kopie van %2</translation>
 <context>
     <name>fourfold::CodebookEditor</name>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="74"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="79"/>
         <source>nominal</source>
         <translation>nominaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="76"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="81"/>
         <source>ordinal</source>
         <translation>ordinaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="78"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="83"/>
         <source>interval</source>
         <translation>interval</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="80"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="85"/>
         <source>ratio</source>
         <translation>ratio</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="131"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="274"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="344"/>
         <source>Codebook</source>
         <translation>Codeboek</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="138"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="281"/>
         <source>&amp;Name:</source>
         <translation>&amp;Naam:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="154"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="317"/>
         <source>Article-level items</source>
         <translation>Items op artikelniveau</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="159"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="322"/>
         <source>&amp;Undo:</source>
         <translation>&amp;Ongedaan maken:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="161"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="324"/>
         <source>&amp;Redo:</source>
         <translation>Opn&amp;ieuw:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="175"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="338"/>
         <source>&amp;Save as new version…</source>
         <translation>Opslaan als nieuwe &amp;versie…</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="181"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="344"/>
         <source>Codebook (changed)</source>
         <translation>Codeboek (gewijzigd)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="184"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="348"/>
         <source>Edit the codebook&apos;s name</source>
         <translation>Naam van het codeboek bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="239"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="409"/>
         <source>Level of measurement: it decides which agreement coefficient compares the values (Krippendorff 2004, ch. 11).</source>
         <translation>Meetniveau: dit bepaalt welke overeenstemmingscoëfficiënt de waarden vergelijkt (Krippendorff 2004, hfst. 11).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="255"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="425"/>
         <source>&amp;Label:</source>
         <translation>&amp;Label:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="258"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="428"/>
         <source>&amp;Definition:</source>
         <translation>&amp;Definitie:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="260"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="142"/>
         <source>One decision rule per paragraph (an empty line between two).</source>
         <translation>Eén beslisregel per alinea (een lege regel ertussen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="261"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="431"/>
         <source>Decision &amp;rules:</source>
         <translation>Beslis&amp;regels:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="263"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="147"/>
         <source>One example per paragraph (an empty line between two).</source>
         <translation>Eén voorbeeld per alinea (een lege regel ertussen).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="264"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="154"/>
+        <source>Base language</source>
+        <translation>Basistaal</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="286"/>
+        <source>Texts &amp;in:</source>
+        <translation>Te&amp;ksten in:</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="290"/>
+        <source>The language whose texts the fields show and edit. Coders whose program speaks that language read these texts.</source>
+        <translation>De taal waarvan de velden de teksten tonen en bewerken. Codeurs bij wie het programma die taal spreekt, lezen deze teksten.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="434"/>
         <source>E&amp;xamples:</source>
         <translation>Voor&amp;beelden:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="267"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="437"/>
         <source>Attributes of %1 spans</source>
         <translation>Kenmerken van %1-fragmenten</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="274"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="444"/>
         <source>&amp;Add attribute</source>
         <translation>Kenmerk &amp;toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="275"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="445"/>
         <source>Re&amp;move attribute</source>
         <translation>Kenmerk &amp;verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="284"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="400"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="454"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="591"/>
         <source>&amp;Key:</source>
         <translation>&amp;Sleutel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="287"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="457"/>
         <source>La&amp;bel:</source>
         <translation>La&amp;bel:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="289"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="459"/>
         <source>closed list of values</source>
         <translation>gesloten lijst van waarden</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="290"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="460"/>
         <source>free text</source>
         <translation>vrije tekst</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="291"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="461"/>
         <source>&amp;Type:</source>
         <translation>&amp;Type:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="293"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="407"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="463"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="598"/>
         <source>Le&amp;vel:</source>
         <translation>&amp;Niveau:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="295"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="404"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="465"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="595"/>
         <source>One value per line, in order.</source>
         <translation>Eén waarde per regel, op volgorde.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="297"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="405"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="467"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="596"/>
         <source>&amp;Values:</source>
         <translation>&amp;Waarden:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="318"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="489"/>
         <source>Edit the label of %1</source>
         <translation>Label van %1 bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="323"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="496"/>
         <source>Edit the definition of %1</source>
         <translation>Definitie van %1 bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="328"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="503"/>
         <source>Edit the decision rules of %1</source>
         <translation>Beslisregels van %1 bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="333"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="510"/>
         <source>Edit the examples of %1</source>
         <translation>Voorbeelden van %1 bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="337"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="516"/>
         <source>Edit an attribute&apos;s key</source>
         <translation>Sleutel van een kenmerk bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="341"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="529"/>
         <source>Edit an attribute&apos;s label</source>
         <translation>Label van een kenmerk bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="347"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="538"/>
         <source>Change an attribute&apos;s type</source>
         <translation>Type van een kenmerk wijzigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="355"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="546"/>
         <source>Change an attribute&apos;s level</source>
         <translation>Niveau van een kenmerk wijzigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="360"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="551"/>
         <source>Edit an attribute&apos;s values</source>
         <translation>Waarden van een kenmerk bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="381"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="572"/>
         <source>Questions answered once per article, such as which function dominates it.</source>
         <translation>Vragen die één keer per artikel worden beantwoord, zoals welke functie erin overheerst.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="388"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="579"/>
         <source>&amp;Add item</source>
         <translation>Item &amp;toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="389"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="580"/>
         <source>Re&amp;move item</source>
         <translation>Item &amp;verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="402"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="593"/>
         <source>&amp;Question:</source>
         <translation>&amp;Vraag:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="423"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="615"/>
         <source>Edit an item&apos;s key</source>
         <translation>Sleutel van een item bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="428"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="629"/>
         <source>Edit an item&apos;s question</source>
         <translation>Vraag van een item bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="433"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="637"/>
         <source>Edit an item&apos;s values</source>
         <translation>Waarden van een item bewerken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="438"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="643"/>
         <source>Change an item&apos;s level</source>
         <translation>Niveau van een item wijzigen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="495"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="689"/>
+        <source>%1 (%2)</source>
+        <translation>%1 (%2)</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="733"/>
+        <source>“%1” is not a language code: a codebook names a language by two or three lower-case letters (ISO 639), such as “fr” or “pl”.</source>
+        <translation>‘%1’ is geen taalcode: een codeboek noemt een taal met twee of drie kleine letters (ISO 639), zoals ‘fr’ of ‘pl’.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="749"/>
+        <source>Add a language</source>
+        <translation>Taal toevoegen</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="750"/>
+        <source>Language code (ISO 639: two or three lower-case letters, such as “fr” or “pl”):</source>
+        <translation>Taalcode (ISO 639: twee of drie kleine letters, zoals ‘fr’ of ‘pl’):</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="766"/>
+        <source>Add a language…</source>
+        <translation>Taal toevoegen…</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="770"/>
+        <source>Showing the texts in %1. A field left empty shows the base text in grey, and coders read that one. Keys, values, levels and the lists of attributes and items are the same in every language: change them in the base language.</source>
+        <translation>De teksten in %1 worden getoond. Een leeg gelaten veld toont de tekst in de basistaal in grijs, en die lezen de codeurs. Sleutels, waarden, niveaus en de lijsten van kenmerken en items zijn in elke taal dezelfde: wijzig ze in de basistaal.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="828"/>
         <source>Editing a draft of version %1; saving makes version %2.</source>
         <translation>U bewerkt een concept van versie %1; opslaan maakt versie %2.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="572"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="933"/>
         <source>Add an item</source>
         <translation>Een item toevoegen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="581"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="942"/>
         <source>Add an attribute to %1</source>
         <translation>Een kenmerk toevoegen aan %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="598"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="962"/>
         <source>Remove the item “%1”</source>
         <translation>Het item ‘%1’ verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="606"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="976"/>
         <source>Remove the attribute “%1”</source>
         <translation>Het kenmerk ‘%1’ verwijderen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="677"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1066"/>
+        <source>The translation of this text may need updating too: %1 (choose the language under “Texts in”).</source>
+        <translation>De vertaling van deze tekst moet misschien ook worden bijgewerkt: %1 (kies de taal bij ‘Teksten in’).</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1106"/>
         <source>Fix the marked field first.</source>
         <translation>Verbeter eerst het gemarkeerde veld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="734"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1163"/>
         <source>Version %1 was added since this draft was started from version %2; nothing was saved. Close the editor and open it again to edit the new version.</source>
         <translation>Versie %1 is toegevoegd sinds dit concept vanuit versie %2 is begonnen; er is niets opgeslagen. Sluit de editor en open hem opnieuw om de nieuwe versie te bewerken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="748"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="795"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1177"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1224"/>
         <source>The codebook was not saved: the marked field needs a change first.</source>
         <translation>Het codeboek is niet opgeslagen: het gemarkeerde veld moet eerst worden gewijzigd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="753"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1182"/>
         <source>Nothing was saved: the draft is the same as version %1.</source>
         <translation>Er is niets opgeslagen: het concept is gelijk aan versie %1.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="780"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1209"/>
         <source>Codebook version %1 saved. %n annotation(s) made under an older version are now outdated; %2 of them belong to a function that changed and need a re-check.</source>
         <translation>
             <numerusform>Codeboekversie %1 opgeslagen. %n annotatie gemaakt onder een oudere versie is nu verouderd; %2 daarvan horen bij een gewijzigde functie en moeten opnieuw worden gecontroleerd.</numerusform>
@@ -7927,17 +7977,17 @@ Bijna-kopie van %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="799"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1228"/>
         <source>Save as version %1</source>
         <translation>Opslaan als versie %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="801"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1230"/>
         <source>What changes against version %1:</source>
         <translation>Wat er verandert ten opzichte van versie %1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="807"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1236"/>
         <source>&amp;Note (what changed and why):</source>
         <translation>&amp;Notitie (wat er is veranderd en waarom):</translation>
     </message>
