@@ -540,6 +540,16 @@ TEST_CASE("keys values levels and the lists are read-only while a translation is
     key->setText(QStringLiteral("tone"));
     CHECK(dutchLabels().value(QStringLiteral("tone")) == QStringLiteral("Polariteit"));
     CHECK_FALSE(dutchLabels().contains(QStringLiteral("polarity")));
+
+    // A broken rule found on saving while a translation is shown: the editor turns to the base
+    // language, where the field can be changed.
+    values->setPlainText(QString());
+    REQUIRE(w.showLanguage(QStringLiteral("nl")));
+    CHECK_FALSE(w.saveAsNewVersion(QStringLiteral("no values")));
+    CHECK(w.shownLanguage().isEmpty());
+    CHECK_FALSE(values->isReadOnly());
+    CHECK(shownError(values)
+        == QStringLiteral("A choice list needs at least one value (one per line)."));
 }
 
 TEST_CASE("a changed base text names the translations that may need updating and a language can "

@@ -1107,6 +1107,11 @@ void CodebookEditor::showCheck(bool go)
     if (!m_check.error)
         return;
     const CodebookFieldError &error = *m_check.error;
+    if (go && !m_language.isEmpty()) {
+        // The check reads the codebook's own fields: turning to one shows the base language.
+        m_language.clear();
+        load();
+    }
     static const QRegularExpression place(
         QStringLiteral(R"(^(?:functions\[(\d+)\](?:\.attributes\[(\d+)\])?|items\[(\d+)\]))"));
     const QRegularExpressionMatch m = place.match(error.field);
