@@ -2257,6 +2257,476 @@
     </message>
 </context>
 <context>
+    <name>FramesWindow</name>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="70"/>
+        <source>Frames — %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="78"/>
+        <source>Gold</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="79"/>
+        <source>Consensus of the coders</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="84"/>
+        <source>Coder %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="87"/>
+        <source>Extractor run %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="88"/>
+        <source>Layer</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="91"/>
+        <source>where the indices point</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="92"/>
+        <source>Number of frames</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="96"/>
+        <source>Largest k for the indices</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="100"/>
+        <source>none</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="101"/>
+        <source>Bootstrap replicates</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="105"/>
+        <source>Start value of the bootstrap</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="106"/>
+        <source>&amp;Compute</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="107"/>
+        <source>Cancel</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="112"/>
+        <source>&amp;Layer:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="115"/>
+        <source>&amp;Frames (k):</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="119"/>
+        <source>Indices up to k =</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="123"/>
+        <source>&amp;Stability replicates:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="127"/>
+        <source>start value:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="157"/>
+        <source>Ward&apos;s tree: the last %1 merges (each leaf: its number of articles; dashed: the cut into the chosen k)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="174"/>
+        <source>Choosing &amp;k</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="184"/>
+        <source>Frames</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="185"/>
+        <source>Element profile of each frame</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="187"/>
+        <source>Share of each frame&apos;s articles holding the element, beside the share in all articles; bold: the element characterises the frame (adjusted residual above 1.96).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="194"/>
+        <source>F&amp;rames</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="199"/>
+        <source>By outlet</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="200"/>
+        <source>By month</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="212"/>
+        <source>By &amp;outlet and month</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="219"/>
+        <source>Frame</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="220"/>
+        <source>Fr&amp;ame:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="224"/>
+        <source>Double-click an article to open it on the desk.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="227"/>
+        <source>Articles of the frame</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="229"/>
+        <source>&amp;Articles</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="234"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="235"/>
+        <source>Name of the analysis</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="236"/>
+        <source>Sa&amp;ve frames</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="238"/>
+        <source>Saved analyses</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="240"/>
+        <source>O&amp;pen</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="241"/>
+        <source>&amp;Delete</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="242"/>
+        <source>Save as:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="248"/>
+        <source>Saved:</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="266"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="411"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="563"/>
+        <source>F%1 %2</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="281"/>
+        <source>Choose a layer and the number of frames, then press Compute. Gold is the usual layer; the consensus of the coders or one coder serve before gold is adjudicated.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="344"/>
+        <source>Computing the frames…</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
+        <source>Cancelled; the frames shown are from before.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="372"/>
+        <source>Cancelled.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="376"/>
+        <source>%1
+
+Adjudicate more articles into gold (Lead → Compare and adjudicate…), or choose the consensus of the coders or one coder as the layer above.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="420"/>
+        <source>k-choice indices, each relative to its largest value</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="422"/>
+        <source>k (frames)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="425"/>
+        <source>share of the largest value</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="446"/>
+        <source>mean silhouette</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="448"/>
+        <source>Calinski–Harabasz</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="450"/>
+        <source>fusion jump (elbow)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="453"/>
+        <source>chosen k = %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="519"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="589"/>
+        <source>–</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="472"/>
+        <source>Largest mean silhouette at k = %1, Calinski–Harabasz at k = %2, fusion jump at k = %3. %4 %5 articles × %6 element variables of %7.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="475"/>
+        <source>Frames: k = %1, as chosen.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="477"/>
+        <source>Frames: k = %1, where most indices point.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="478"/>
+        <source>Frames: k = %1, the largest mean silhouette; the three indices point at different k.</source>
+        <translation>Frames: k = %1, het grootste gemiddelde silhouet; de drie indices wijzen verschillende k aan.</translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="499"/>
+        <source>Name (double-click to edit)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="499"/>
+        <source>Articles</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
+        <source>Share</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
+        <source>Stability</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
+        <source>Characteristic elements (share in frame, in all)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="517"/>
+        <source>%1 — dissolves on resampling</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="521"/>
+        <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="527"/>
+        <source>not computed</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="542"/>
+        <source>%1 (%2, %3)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="549"/>
+        <source>none stands out</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="564"/>
+        <source>All</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="584"/>
+        <source>%1: %2 of all articles</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="585"/>
+        <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="613"/>
+        <source>F%1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="614"/>
+        <source>Total</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="625"/>
+        <source>%1 (%2)</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="634"/>
+        <source>Chi-square undefined: %1</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="637"/>
+        <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="640"/>
+        <source>&lt; 0.001</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/frames/frames_window.cpp" line="644"/>
+        <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
+        <source>Title</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
+        <source>Outlet</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
+        <source>Date</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
+        <source>Id</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
+        <source>Near the centre</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="672"/>
+        <source>%1.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="705"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="706"/>
+        <source>Compute the frames before saving them.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/frames/frames_window.cpp" line="722"/>
+        <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="747"/>
+        <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="749"/>
+        <source>The layer %1 is no longer in the project.</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="774"/>
+        <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
+        <translation type="unfinished"></translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../app/desktop/frames/frames_window.cpp" line="789"/>
+        <source>%1 — %2, k = %3, %n article(s)</source>
+        <translation type="unfinished">
+            <numerusform></numerusform>
+            <numerusform></numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>FunctionStyle</name>
     <message>
         <location filename="../app/desktop/function_style.cpp" line="30"/>
@@ -7426,6 +7896,11 @@
             <numerusform>De deelsteekproef van fase %1 is ingetrokken: %n toewijzing verwijderd.</numerusform>
             <numerusform>De deelsteekproef van fase %1 is ingetrokken: %n toewijzingen verwijderd.</numerusform>
         </translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_frames.cpp" line="584"/>
+        <source>Frames (k = %1, the largest mean silhouette: the three indices point at different k)</source>
+        <translation>Frames (k = %1, het grootste gemiddelde silhouet: de drie indices wijzen verschillende k aan)</translation>
     </message>
 </context>
 <context>

@@ -578,9 +578,12 @@ int runFrames(const QStringList &arguments)
         "= %3")
                  .arg(kText(analysis.kBySilhouette), kText(analysis.kByCalinskiHarabasz),
                      kText(analysis.kByFusion));
-    lines << (analysis.kGiven
-            ? CliText::tr("Frames (k = %1, given)").arg(analysis.k)
-            : CliText::tr("Frames (k = %1, where most indices point)").arg(analysis.k));
+    lines << (analysis.kGiven ? CliText::tr("Frames (k = %1, given)").arg(analysis.k)
+            : analysis.indicesAgree()
+            ? CliText::tr("Frames (k = %1, where most indices point)").arg(analysis.k)
+            : CliText::tr("Frames (k = %1, the largest mean silhouette: the three indices point at "
+                          "different k)")
+                  .arg(analysis.k));
     for (size_t f = 0; f < analysis.profiles.size(); ++f) {
         const frames::FrameProfile &profile = analysis.profiles[f];
         QString head = CliText::tr("  Frame %1  %n article(s) (%2%)", nullptr, profile.size)

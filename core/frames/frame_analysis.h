@@ -59,6 +59,12 @@ struct FrameAnalysis {
     int kByFusion = 0;
     int k = 0; // the k used
     bool kGiven = false;
+    // Whether at least two of the three indices point at k (when k was not given): if not, k is
+    // the silhouette's (or, without one, the next index's) and the indices disagree.
+    bool indicesAgree() const
+    {
+        return int(kBySilhouette == k) + int(kByCalinskiHarabasz == k) + int(kByFusion == k) >= 2;
+    }
     // The final frames: labels 0..k−1 numbered by size (largest first; of equal sizes the one
     // holding the earlier article first); centres as k-means left them.
     KMeansResult frames;

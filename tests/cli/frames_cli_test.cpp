@@ -322,6 +322,21 @@ TEST_CASE("frames of a project layer equal frames of the indicators built from t
     REQUIRE(run.exitCode == 0);
     CHECK(cliJson(run).value("articles").toInt() == 40);
     CHECK(cliJson(run).value("compare").toObject().value("articles").toInt() == 27);
+    // The line that names the k used says why: where at least two of the three indices point,
+    // else the largest mean silhouette (the three disagree on the sample's gold layer).
+    const CliRun chosen = cli({"frames", project, "--json"});
+    REQUIRE(chosen.exitCode == 0);
+    const QJsonObject by = cliJson(chosen).value("k_by").toObject();
+    const int k = cliJson(chosen).value("k").toInt();
+    const int pointing = int(by.value("silhouette").toInt() == k)
+        + int(by.value("calinski_harabasz").toInt() == k)
+        + int(by.value("fusion_elbow").toInt() == k);
+    const QString text = cli({"frames", project}).out;
+    CHECK(text.contains(QStringLiteral("Frames (k = %1, where most indices point)").arg(k))
+        == (pointing >= 2));
+    CHECK(text.contains(QStringLiteral("Frames (k = %1, the largest mean silhouette").arg(k))
+        == (pointing < 2));
+    CHECK(by.value("silhouette").toInt() == k);
     CHECK(cli({"frames", project, "--layer", "coders"}).err.contains("not a layer for frames"));
     CHECK(cli({"frames", project, "--layer", "coder:NOBODY"}).exitCode == 1);
 }

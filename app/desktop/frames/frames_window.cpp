@@ -473,7 +473,11 @@ void FramesWindow::showKChoice()
            "%4 %5 articles × %6 element variables of %7.")
             .arg(kText(a.kBySilhouette), kText(a.kByCalinskiHarabasz), kText(a.kByFusion),
                 a.kGiven ? tr("Frames: k = %1, as chosen.").arg(a.k)
-                         : tr("Frames: k = %1, where most indices point.").arg(a.k))
+                    : a.indicesAgree()
+                    ? tr("Frames: k = %1, where most indices point.").arg(a.k)
+                    : tr("Frames: k = %1, the largest mean silhouette; the three "
+                         "indices point at different k.")
+                          .arg(a.k))
             .arg(m_outcome->input.matrix.rows)
             .arg(m_outcome->input.variables.size())
             .arg(m_outcome->input.source));
