@@ -1258,102 +1258,110 @@
 <context>
     <name>CoderCopiesText</name>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="72"/>
+        <location filename="../core/project/coder_copies.cpp" line="74"/>
         <source>Several coders are called &quot;%1&quot;; name the coder by pseudonym.</source>
         <translation>Mehrere Codierende heißen „%1“; nennen Sie die codierende Person beim Pseudonym.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="76"/>
+        <location filename="../core/project/coder_copies.cpp" line="78"/>
         <source>There is no coder with the pseudonym or name &quot;%1&quot; in the project.</source>
         <translation>Im Projekt gibt es keine codierende Person mit dem Pseudonym oder Namen „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="112"/>
+        <location filename="../core/project/coder_copies.cpp" line="114"/>
         <source>%1 (copy for %2)</source>
         <translation>%1 (Kopie für %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="169"/>
+        <location filename="../core/project/coder_copies.cpp" line="171"/>
         <source>%1 is not a Fourfold project file; it was not merged.</source>
         <translation>%1 ist keine Fourfold-Projektdatei; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="172"/>
+        <location filename="../core/project/coder_copies.cpp" line="174"/>
         <source>%1 was written by a newer Fourfold (schema version %2); it was not merged.</source>
         <translation>%1 wurde von einem neueren Fourfold geschrieben (Schemaversion %2); sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="181"/>
+        <location filename="../core/project/coder_copies.cpp" line="183"/>
         <source>%1 is a project file but not a coder copy; it was not merged.</source>
         <translation>%1 ist eine Projektdatei, aber keine Kopie für Codierende; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="186"/>
+        <location filename="../core/project/coder_copies.cpp" line="188"/>
         <source>%1 is a coder copy of another project (%2), not of this one (%3); it was not merged.</source>
         <translation>%1 ist eine Kopie für Codierende aus einem anderen Projekt (%2), nicht aus diesem (%3); sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="195"/>
+        <location filename="../core/project/coder_copies.cpp" line="197"/>
         <source>The coder of %1 is no longer in the project; it was not merged.</source>
         <translation>Die codierende Person von %1 ist nicht mehr im Projekt; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="207"/>
+        <location filename="../core/project/coder_copies.cpp" line="209"/>
         <source>%1 holds article &quot;%2&quot;, which is not in the project; it was not merged.</source>
         <translation>%1 enthält den Artikel „%2“, der nicht im Projekt ist; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="213"/>
+        <location filename="../core/project/coder_copies.cpp" line="215"/>
         <source>The text of article &quot;%1&quot; in %2 differs from the project&apos;s (SHA-256 %3 instead of %4): the copy was changed outside Fourfold; it was not merged.</source>
         <translation>Der Text des Artikels „%1“ in %2 weicht von dem des Projekts ab (SHA-256 %3 statt %4): die Kopie wurde außerhalb von Fourfold verändert; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="227"/>
+        <location filename="../core/project/coder_copies.cpp" line="229"/>
         <source>%1 holds a codebook version (%2) that is not in the project; it was not merged.</source>
         <translation>%1 enthält eine Codebuchversion (%2), die nicht im Projekt ist; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="236"/>
+        <location filename="../core/project/coder_copies.cpp" line="238"/>
         <source>%1 holds %2 annotations, answers or assignments of people other than its coder %3; it was not merged.</source>
         <translation>%1 enthält %2 Annotationen, Antworten oder Zuweisungen anderer Personen als ihrer codierenden Person %3; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="372"/>
+        <location filename="../core/project/coder_copies.cpp" line="374"/>
         <source>%1 names a copy (%2) that this project never handed out; it was not merged.</source>
         <translation>%1 nennt eine Kopie (%2), die dieses Projekt nie ausgegeben hat; sie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="429"/>
+        <location filename="../core/project/coder_copies.cpp" line="431"/>
         <source>There is no coder copy %1.</source>
         <translation>Es gibt keine Kopie für Codierende %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="581"/>
+        <location filename="../core/project/coder_copies.cpp" line="597"/>
         <source>The coding time in %1 would overflow the project&apos;s; it was not merged.</source>
         <translation>Die Codierzeit in %1 würde die des Projekts überlaufen lassen; die Kopie wurde nicht zusammengeführt.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="648"/>
+        <location filename="../core/project/coder_copies.cpp" line="664"/>
         <source>%1 is itself a coder copy; hand out copies from the main project.</source>
         <translation>%1 ist selbst eine Kopie für Codierende; geben Sie Kopien aus dem Hauptprojekt aus.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="655"/>
+        <location filename="../core/project/coder_copies.cpp" line="671"/>
         <source>%1 already exists; choose another name for the coder copy.</source>
         <translation>%1 existiert bereits; wählen Sie einen anderen Namen für die Kopie.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="663"/>
+        <location filename="../core/project/coder_copies.cpp" line="679"/>
         <source>Coder %1 has no assigned articles; assign some before handing out a copy.</source>
         <translation>Der codierenden Person %1 sind keine Artikel zugewiesen; weisen Sie welche zu, bevor Sie eine Kopie ausgeben.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="724"/>
+        <location filename="../core/project/coder_copies.cpp" line="740"/>
         <source>%1 is itself a coder copy; merge copies into the main project.</source>
         <translation>%1 ist selbst eine Kopie für Codierende; führen Sie Kopien im Hauptprojekt zusammen.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/coder_copies.cpp" line="751"/>
+        <location filename="../core/project/coder_copies.cpp" line="785"/>
+        <source>%1&apos;s coder copy, handed out %2, holds %n of the withdrawn assignments (%3): what %1 codes there still comes back at the merge, named, for you to decide.</source>
+        <translation>
+            <numerusform>Die Kopie für Codierende von %1, ausgegeben am %2, enthält %n der zurückgezogenen Zuweisungen (%3): was %1 dort codiert, kommt beim Zusammenführen trotzdem zurück, benannt und zu Ihrer Entscheidung.</numerusform>
+            <numerusform>Die Kopie für Codierende von %1, ausgegeben am %2, enthält %n der zurückgezogenen Zuweisungen (%3): was %1 dort codiert, kommt beim Zusammenführen trotzdem zurück, benannt und zu Ihrer Entscheidung.</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../core/project/coder_copies.cpp" line="801"/>
         <source>%1 coded %n article(s) in the copy after the assignment was withdrawn in the project (a withdrawn draw): %2. The codings were merged; the assignments stay withdrawn and do not count. Decide each in the merge conflicts: keep the withdrawal, or take %1&apos;s version to assign the article again.</source>
         <translation>
             <numerusform>%1 hat %n Artikel in der Kopie codiert, nachdem die Zuweisung im Projekt zurückgezogen wurde (eine zurückgezogene Ziehung): %2. Die Codierungen wurden zusammengeführt; die Zuweisung bleibt zurückgezogen und zählt nicht. Entscheiden Sie jeden Fall unter den Konflikten beim Zusammenführen: den Rückzug behalten oder die Version von %1 übernehmen, um den Artikel erneut zuzuweisen.</numerusform>
@@ -1361,17 +1369,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="779"/>
+        <location filename="../core/project/coder_copies.cpp" line="829"/>
         <source>Keep &quot;mine&quot; (the version the project holds) or &quot;theirs&quot; (the version that lost), not &quot;%1&quot;.</source>
         <translation>Behalten Sie „mine“ (die Version im Projekt) oder „theirs“ (die unterlegene Version), nicht „%1“.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="796"/>
+        <location filename="../core/project/coder_copies.cpp" line="846"/>
         <source>There is no open conflict %1.</source>
         <translation>Es gibt keinen offenen Konflikt %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="799"/>
+        <location filename="../core/project/coder_copies.cpp" line="849"/>
         <source>%1 has %2 open conflicts (from several copies); name the conflict&apos;s uuid.</source>
         <translation>%1 hat %2 offene Konflikte (aus mehreren Kopien); nennen Sie die UUID des Konflikts.</translation>
     </message>
@@ -4496,22 +4504,22 @@
         <translation>%1 Antwort(en) auf das Item „%2“ lauten „%3“, was die neue Version weder aufführt noch recodiert; fügen Sie dem Item &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} mit einem seiner Werte hinzu (%4).</translation>
     </message>
     <message>
-        <location filename="../core/project/codebook_versions.cpp" line="120"/>
+        <location filename="../core/project/codebook_versions.cpp" line="186"/>
         <source>A new codebook version needs a note that says what changed and why.</source>
         <translation>Eine neue Codebuchversion braucht eine Notiz, die sagt, was sich geändert hat und warum.</translation>
     </message>
     <message>
-        <location filename="../core/project/codebook_versions.cpp" line="134"/>
+        <location filename="../core/project/codebook_versions.cpp" line="200"/>
         <source>The codebook is the same as version %1; no new version was made.</source>
         <translation>Das Codebuch ist identisch mit Version %1; es wurde keine neue Version erstellt.</translation>
     </message>
     <message>
-        <location filename="../core/project/codebook_versions.cpp" line="242"/>
+        <location filename="../core/project/codebook_versions.cpp" line="309"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codebuchversion %1 → %2</translation>
     </message>
     <message>
-        <location filename="../core/project/codebook_versions.cpp" line="244"/>
+        <location filename="../core/project/codebook_versions.cpp" line="311"/>
         <source>no changes</source>
         <translation>keine Änderungen</translation>
     </message>
@@ -4557,22 +4565,22 @@
 <context>
     <name>StudyEditText</name>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="45"/>
+        <location filename="../core/project/study_edits.cpp" line="59"/>
         <source>The project already holds %1.</source>
         <translation>Das Projekt enthält %1 bereits.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="114"/>
+        <location filename="../core/project/study_edits.cpp" line="132"/>
         <source>The %1 phase has no subsample to withdraw.</source>
         <translation>Die Phase %1 hat keine Teilstichprobe, die zurückgezogen werden könnte.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="134"/>
+        <location filename="../core/project/study_edits.cpp" line="152"/>
         <source>The %1 subsample cannot be withdrawn: coding has started on %2 of its %3 assignments (spans, answers, coding time, or a status of started or done). A draw can be withdrawn only before anyone codes it.</source>
         <translation>Die Teilstichprobe der Phase %1 kann nicht zurückgezogen werden: bei %2 ihrer %3 Zuweisungen hat das Codieren begonnen (Textstellen, Antworten, Codierzeit oder der Status begonnen oder fertig). Eine Ziehung kann nur zurückgezogen werden, bevor jemand sie codiert.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="165"/>
+        <location filename="../core/project/study_edits.cpp" line="183"/>
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Eine Änderung, die nie ausgeführt wurde, kann nicht rückgängig gemacht werden.</translation>
     </message>
@@ -6164,7 +6172,7 @@
     <message>
         <location filename="../app/cli/command_frames.cpp" line="419"/>
         <location filename="../app/cli/command_frames.cpp" line="424"/>
-        <location filename="../app/cli/command_frames.cpp" line="635"/>
+        <location filename="../app/cli/command_frames.cpp" line="638"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
@@ -6232,7 +6240,7 @@
         <translation>  Größte Werte: Silhouette bei k = %1, Calinski–Harabasz bei k = %2, Fusionssprung bei k = %3</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="582"/>
+        <location filename="../app/cli/command_frames.cpp" line="581"/>
         <source>Frames (k = %1, given)</source>
         <translation>Frames (k = %1, vorgegeben)</translation>
     </message>
@@ -6242,7 +6250,7 @@
         <translation>Frames (k = %1, worauf die meisten Indizes zeigen)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_frames.cpp" line="586"/>
+        <location filename="../app/cli/command_frames.cpp" line="589"/>
         <source>  Frame %1  %n article(s) (%2%)</source>
         <translation>
             <numerusform>  Frame %1  %n Artikel (%2%)</numerusform>
@@ -6250,42 +6258,42 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="590"/>
+        <location filename="../app/cli/command_frames.cpp" line="593"/>
         <source>  stability %1%2</source>
         <translation>  Stabilität %1%2</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="594"/>
+        <location filename="../app/cli/command_frames.cpp" line="597"/>
         <source> (dissolves on resampling)</source>
         <translation> (löst sich beim Neuziehen auf)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="613"/>
+        <location filename="../app/cli/command_frames.cpp" line="616"/>
         <source>%1 %2 (all %3%4)</source>
         <translation>%1 %2 (alle %3%4)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="617"/>
+        <location filename="../app/cli/command_frames.cpp" line="620"/>
         <source>, r = %1</source>
         <translation>, r = %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="622"/>
+        <location filename="../app/cli/command_frames.cpp" line="625"/>
         <source>    elements: %1</source>
         <translation>    Elemente: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="623"/>
+        <location filename="../app/cli/command_frames.cpp" line="626"/>
         <source>none stands out</source>
         <translation>keines sticht heraus</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="629"/>
+        <location filename="../app/cli/command_frames.cpp" line="632"/>
         <source>    closest to the centre: %1</source>
         <translation>    am nächsten am Zentrum: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="632"/>
+        <location filename="../app/cli/command_frames.cpp" line="635"/>
         <source>Frames by %1: %2</source>
         <translation>Frames nach %1: %2</translation>
     </message>
@@ -7958,23 +7966,23 @@ Beinahe-Kopie von %2</translation>
         <translation>Korrigieren Sie zuerst das markierte Feld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1163"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1168"/>
         <source>Version %1 was added since this draft was started from version %2; nothing was saved. Close the editor and open it again to edit the new version.</source>
         <translation>Version %1 wurde hinzugefügt, seit dieser Entwurf von Version %2 aus begonnen wurde; nichts wurde gespeichert. Schließen Sie den Editor und öffnen Sie ihn erneut, um die neue Version zu bearbeiten.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1177"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1224"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1182"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1229"/>
         <source>The codebook was not saved: the marked field needs a change first.</source>
         <translation>Das Codebuch wurde nicht gespeichert: das markierte Feld muss zuerst geändert werden.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1182"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1187"/>
         <source>Nothing was saved: the draft is the same as version %1.</source>
         <translation>Nichts wurde gespeichert: der Entwurf ist identisch mit Version %1.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1209"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1214"/>
         <source>Codebook version %1 saved. %n annotation(s) made under an older version are now outdated; %2 of them belong to a function that changed and need a re-check.</source>
         <translation>
             <numerusform>Codebuchversion %1 gespeichert. %n unter einer älteren Version erstellte Annotation ist jetzt veraltet; %2 davon gehören zu einer geänderten Funktion und müssen erneut geprüft werden.</numerusform>
@@ -7982,17 +7990,17 @@ Beinahe-Kopie von %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1228"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1233"/>
         <source>Save as version %1</source>
         <translation>Als Version %1 speichern</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1230"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1235"/>
         <source>What changes against version %1:</source>
         <translation>Was sich gegenüber Version %1 ändert:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1236"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1241"/>
         <source>&amp;Note (what changed and why):</source>
         <translation>&amp;Notiz (was sich geändert hat und warum):</translation>
     </message>
@@ -9662,7 +9670,7 @@ Beinahe-Kopie von %2</translation>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="266"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="411"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="559"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="563"/>
         <source>F%1 %2</source>
         <translation>F%1 %2</translation>
     </message>
@@ -9732,8 +9740,8 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="515"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="585"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="519"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="589"/>
         <source>–</source>
         <translation>–</translation>
     </message>
@@ -9748,112 +9756,112 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         <translation>Frames: k = %1, wie gewählt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="476"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="477"/>
         <source>Frames: k = %1, where most indices point.</source>
         <translation>Frames: k = %1, worauf die meisten Indizes zeigen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="477"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="478"/>
         <source>Frames: k = %1, the largest mean silhouette; the three indices point at different k.</source>
         <translation>Frames: k = %1, die größte mittlere Silhouette; die drei Indizes zeigen auf verschiedene k.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="495"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="499"/>
         <source>Name (double-click to edit)</source>
         <translation>Name (zum Bearbeiten doppelklicken)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="495"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="499"/>
         <source>Articles</source>
         <translation>Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
         <source>Share</source>
         <translation>Anteil</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
         <source>Stability</source>
         <translation>Stabilität</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
         <source>Characteristic elements (share in frame, in all)</source>
         <translation>Kennzeichnende Elemente (Anteil im Frame, in allen)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="513"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="517"/>
         <source>%1 — dissolves on resampling</source>
         <translation>%1 — löst sich beim Neuziehen auf</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="517"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="521"/>
         <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
         <translation>Mittlere Jaccard-Ähnlichkeit zum am besten passenden Cluster über %1 Bootstrap-Replikationen (Hennig 2007); %2 aufgelöst (≤ 0.5), %3 wiedergefunden (≥ 0.75).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="523"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="527"/>
         <source>not computed</source>
         <translation>nicht berechnet</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="538"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="542"/>
         <source>%1 (%2, %3)</source>
         <translation>%1 (%2, %3)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="545"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="549"/>
         <source>none stands out</source>
         <translation>keines sticht heraus</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="609"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="613"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="560"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="564"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="580"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="584"/>
         <source>%1: %2 of all articles</source>
         <translation>%1: %2 aller Artikel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="581"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="585"/>
         <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
         <translation>%1 in F%2: %3 seiner Artikel, %4 aller; standardisiertes Residuum %5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="610"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="614"/>
         <source>Total</source>
         <translation>Gesamt</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="621"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="625"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="630"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="634"/>
         <source>Chi-square undefined: %1</source>
         <translation>Chi-Quadrat nicht definiert: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="633"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="637"/>
         <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
         <translation>Pearsons X² = %1, df = %2, p = %3; Cramérs V = %4.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="636"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="640"/>
         <source>&lt; 0.001</source>
         <translation>&lt; 0.001</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="640"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="644"/>
         <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
         <translation>
             <numerusform>Bei %n Zelle ist der Erwartungswert kleiner als 5 Artikel: lesen Sie den Test mit Vorsicht.</numerusform>
@@ -9861,43 +9869,43 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Date</source>
         <translation>Datum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Id</source>
         <translation>ID</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Near the centre</source>
         <translation>Nahe am Zentrum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="668"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="672"/>
         <source>%1.</source>
         <translation>%1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="701"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="702"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="705"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="706"/>
         <source>Compute the frames before saving them.</source>
         <translation>Berechnen Sie die Frames, bevor Sie sie speichern.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="718"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="722"/>
         <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
         <translation>
             <numerusform>Der %n Frame wurde als „%1“ gespeichert (Bearbeiten → Rückgängig nimmt es zurück).</numerusform>
@@ -9905,22 +9913,22 @@ Entscheiden Sie mehr Artikel in den Goldstandard (Leitung → Vergleichen und en
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="743"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="747"/>
         <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
         <translation>Die Ebene %1 von „%2“ ist nicht mehr im Projekt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="745"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="749"/>
         <source>The layer %1 is no longer in the project.</source>
         <translation>Die Ebene %1 ist nicht mehr im Projekt.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="770"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="774"/>
         <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
         <translation>Die gespeicherten Frames „%1“ wurden gelöscht (Bearbeiten → Rückgängig holt sie zurück).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="785"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="789"/>
         <source>%1 — %2, k = %3, %n article(s)</source>
         <translation>
             <numerusform>%1 — %2, k = %3, %n Artikel</numerusform>

@@ -1258,102 +1258,110 @@
 <context>
     <name>CoderCopiesText</name>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="72"/>
+        <location filename="../core/project/coder_copies.cpp" line="74"/>
         <source>Several coders are called &quot;%1&quot;; name the coder by pseudonym.</source>
         <translation>Meerdere codeurs heten ‘%1’; noem de codeur bij het pseudoniem.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="76"/>
+        <location filename="../core/project/coder_copies.cpp" line="78"/>
         <source>There is no coder with the pseudonym or name &quot;%1&quot; in the project.</source>
         <translation>Er is geen codeur met het pseudoniem of de naam ‘%1’ in het project.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="112"/>
+        <location filename="../core/project/coder_copies.cpp" line="114"/>
         <source>%1 (copy for %2)</source>
         <translation>%1 (kopie voor %2)</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="169"/>
+        <location filename="../core/project/coder_copies.cpp" line="171"/>
         <source>%1 is not a Fourfold project file; it was not merged.</source>
         <translation>%1 is geen Fourfold-projectbestand; het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="172"/>
+        <location filename="../core/project/coder_copies.cpp" line="174"/>
         <source>%1 was written by a newer Fourfold (schema version %2); it was not merged.</source>
         <translation>%1 is geschreven door een nieuwere Fourfold (schemaversie %2); het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="181"/>
+        <location filename="../core/project/coder_copies.cpp" line="183"/>
         <source>%1 is a project file but not a coder copy; it was not merged.</source>
         <translation>%1 is een projectbestand, maar geen codeurskopie; het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="186"/>
+        <location filename="../core/project/coder_copies.cpp" line="188"/>
         <source>%1 is a coder copy of another project (%2), not of this one (%3); it was not merged.</source>
         <translation>%1 is een codeurskopie van een ander project (%2), niet van dit project (%3); het is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="195"/>
+        <location filename="../core/project/coder_copies.cpp" line="197"/>
         <source>The coder of %1 is no longer in the project; it was not merged.</source>
         <translation>De codeur van %1 zit niet meer in het project; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="207"/>
+        <location filename="../core/project/coder_copies.cpp" line="209"/>
         <source>%1 holds article &quot;%2&quot;, which is not in the project; it was not merged.</source>
         <translation>%1 bevat het artikel ‘%2’, dat niet in het project staat; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="213"/>
+        <location filename="../core/project/coder_copies.cpp" line="215"/>
         <source>The text of article &quot;%1&quot; in %2 differs from the project&apos;s (SHA-256 %3 instead of %4): the copy was changed outside Fourfold; it was not merged.</source>
         <translation>De tekst van artikel ‘%1’ in %2 verschilt van die van het project (SHA-256 %3 in plaats van %4): de kopie is buiten Fourfold gewijzigd; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="227"/>
+        <location filename="../core/project/coder_copies.cpp" line="229"/>
         <source>%1 holds a codebook version (%2) that is not in the project; it was not merged.</source>
         <translation>%1 bevat een codeboekversie (%2) die niet in het project staat; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="236"/>
+        <location filename="../core/project/coder_copies.cpp" line="238"/>
         <source>%1 holds %2 annotations, answers or assignments of people other than its coder %3; it was not merged.</source>
         <translation>%1 bevat %2 annotaties, antwoorden of toewijzingen van anderen dan de codeur %3; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="372"/>
+        <location filename="../core/project/coder_copies.cpp" line="374"/>
         <source>%1 names a copy (%2) that this project never handed out; it was not merged.</source>
         <translation>%1 noemt een kopie (%2) die dit project nooit heeft uitgegeven; ze is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="429"/>
+        <location filename="../core/project/coder_copies.cpp" line="431"/>
         <source>There is no coder copy %1.</source>
         <translation>Er is geen codeurskopie %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="581"/>
+        <location filename="../core/project/coder_copies.cpp" line="597"/>
         <source>The coding time in %1 would overflow the project&apos;s; it was not merged.</source>
         <translation>De codeertijd in %1 zou die van het project laten overlopen; de kopie is niet samengevoegd.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="648"/>
+        <location filename="../core/project/coder_copies.cpp" line="664"/>
         <source>%1 is itself a coder copy; hand out copies from the main project.</source>
         <translation>%1 is zelf een codeurskopie; geef kopieën uit vanuit het hoofdproject.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="655"/>
+        <location filename="../core/project/coder_copies.cpp" line="671"/>
         <source>%1 already exists; choose another name for the coder copy.</source>
         <translation>%1 bestaat al; kies een andere naam voor de codeurskopie.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="663"/>
+        <location filename="../core/project/coder_copies.cpp" line="679"/>
         <source>Coder %1 has no assigned articles; assign some before handing out a copy.</source>
         <translation>Aan codeur %1 zijn geen artikelen toegewezen; wijs er een aantal toe voordat u een kopie uitgeeft.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="724"/>
+        <location filename="../core/project/coder_copies.cpp" line="740"/>
         <source>%1 is itself a coder copy; merge copies into the main project.</source>
         <translation>%1 is zelf een codeurskopie; voeg kopieën samen in het hoofdproject.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../core/project/coder_copies.cpp" line="751"/>
+        <location filename="../core/project/coder_copies.cpp" line="785"/>
+        <source>%1&apos;s coder copy, handed out %2, holds %n of the withdrawn assignments (%3): what %1 codes there still comes back at the merge, named, for you to decide.</source>
+        <translation>
+            <numerusform>De codeurskopie van %1, uitgegeven op %2, bevat %n van de ingetrokken toewijzingen (%3): wat %1 daar codeert, komt bij het samenvoegen toch terug, met naam, zodat u kunt beslissen.</numerusform>
+            <numerusform>De codeurskopie van %1, uitgegeven op %2, bevat %n van de ingetrokken toewijzingen (%3): wat %1 daar codeert, komt bij het samenvoegen toch terug, met naam, zodat u kunt beslissen.</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <location filename="../core/project/coder_copies.cpp" line="801"/>
         <source>%1 coded %n article(s) in the copy after the assignment was withdrawn in the project (a withdrawn draw): %2. The codings were merged; the assignments stay withdrawn and do not count. Decide each in the merge conflicts: keep the withdrawal, or take %1&apos;s version to assign the article again.</source>
         <translation>
             <numerusform>%1 heeft %n artikel in de kopie gecodeerd nadat de toewijzing in het project was ingetrokken (een ingetrokken trekking): %2. De coderingen zijn samengevoegd; de toewijzing blijft ingetrokken en telt niet mee. Beslis elk geval bij de samenvoegconflicten: de intrekking behouden, of de versie van %1 overnemen om het artikel opnieuw toe te wijzen.</numerusform>
@@ -1361,17 +1369,17 @@
         </translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="779"/>
+        <location filename="../core/project/coder_copies.cpp" line="829"/>
         <source>Keep &quot;mine&quot; (the version the project holds) or &quot;theirs&quot; (the version that lost), not &quot;%1&quot;.</source>
         <translation>Behoud ‘mine’ (de versie in het project) of ‘theirs’ (de versie die verloor), niet ‘%1’.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="796"/>
+        <location filename="../core/project/coder_copies.cpp" line="846"/>
         <source>There is no open conflict %1.</source>
         <translation>Er is geen open conflict %1.</translation>
     </message>
     <message>
-        <location filename="../core/project/coder_copies.cpp" line="799"/>
+        <location filename="../core/project/coder_copies.cpp" line="849"/>
         <source>%1 has %2 open conflicts (from several copies); name the conflict&apos;s uuid.</source>
         <translation>%1 heeft %2 open conflicten (uit meerdere kopieën); noem de uuid van het conflict.</translation>
     </message>
@@ -4496,22 +4504,22 @@
         <translation>%1 antwoord(en) op het item ‘%2’ zijn ‘%3’, dat de nieuwe versie niet noemt en niet hercodeert; voeg &quot;recode&quot;: {&quot;%3&quot;: &quot;…&quot;} met een van zijn waarden aan het item toe (%4).</translation>
     </message>
     <message>
-        <location filename="../core/project/codebook_versions.cpp" line="120"/>
+        <location filename="../core/project/codebook_versions.cpp" line="186"/>
         <source>A new codebook version needs a note that says what changed and why.</source>
         <translation>Een nieuwe codeboekversie heeft een notitie nodig die zegt wat er is veranderd en waarom.</translation>
     </message>
     <message>
-        <location filename="../core/project/codebook_versions.cpp" line="134"/>
+        <location filename="../core/project/codebook_versions.cpp" line="200"/>
         <source>The codebook is the same as version %1; no new version was made.</source>
         <translation>Het codeboek is gelijk aan versie %1; er is geen nieuwe versie gemaakt.</translation>
     </message>
     <message>
-        <location filename="../core/project/codebook_versions.cpp" line="242"/>
+        <location filename="../core/project/codebook_versions.cpp" line="309"/>
         <source>Codebook version %1 → %2</source>
         <translation>Codeboekversie %1 → %2</translation>
     </message>
     <message>
-        <location filename="../core/project/codebook_versions.cpp" line="244"/>
+        <location filename="../core/project/codebook_versions.cpp" line="311"/>
         <source>no changes</source>
         <translation>geen wijzigingen</translation>
     </message>
@@ -4557,22 +4565,22 @@
 <context>
     <name>StudyEditText</name>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="45"/>
+        <location filename="../core/project/study_edits.cpp" line="59"/>
         <source>The project already holds %1.</source>
         <translation>Het project bevat %1 al.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="114"/>
+        <location filename="../core/project/study_edits.cpp" line="132"/>
         <source>The %1 phase has no subsample to withdraw.</source>
         <translation>De fase %1 heeft geen deelsteekproef om in te trekken.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="134"/>
+        <location filename="../core/project/study_edits.cpp" line="152"/>
         <source>The %1 subsample cannot be withdrawn: coding has started on %2 of its %3 assignments (spans, answers, coding time, or a status of started or done). A draw can be withdrawn only before anyone codes it.</source>
         <translation>De deelsteekproef van fase %1 kan niet worden ingetrokken: bij %2 van haar %3 toewijzingen is het coderen begonnen (fragmenten, antwoorden, codeertijd, of de status begonnen of klaar). Een trekking kan alleen worden ingetrokken voordat iemand haar codeert.</translation>
     </message>
     <message>
-        <location filename="../core/project/study_edits.cpp" line="165"/>
+        <location filename="../core/project/study_edits.cpp" line="183"/>
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Een wijziging die nooit is uitgevoerd, kan niet ongedaan worden gemaakt.</translation>
     </message>
@@ -6164,7 +6172,7 @@
     <message>
         <location filename="../app/cli/command_frames.cpp" line="419"/>
         <location filename="../app/cli/command_frames.cpp" line="424"/>
-        <location filename="../app/cli/command_frames.cpp" line="635"/>
+        <location filename="../app/cli/command_frames.cpp" line="638"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
@@ -6232,7 +6240,7 @@
         <translation>  Grootste: silhouet bij k = %1, Calinski–Harabasz bij k = %2, fusiesprong bij k = %3</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="582"/>
+        <location filename="../app/cli/command_frames.cpp" line="581"/>
         <source>Frames (k = %1, given)</source>
         <translation>Frames (k = %1, opgegeven)</translation>
     </message>
@@ -6242,7 +6250,7 @@
         <translation>Frames (k = %1, waar de meeste indices naar wijzen)</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/cli/command_frames.cpp" line="586"/>
+        <location filename="../app/cli/command_frames.cpp" line="589"/>
         <source>  Frame %1  %n article(s) (%2%)</source>
         <translation>
             <numerusform>  Frame %1  %n artikel (%2%)</numerusform>
@@ -6250,42 +6258,42 @@
         </translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="590"/>
+        <location filename="../app/cli/command_frames.cpp" line="593"/>
         <source>  stability %1%2</source>
         <translation>  stabiliteit %1%2</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="594"/>
+        <location filename="../app/cli/command_frames.cpp" line="597"/>
         <source> (dissolves on resampling)</source>
         <translation> (valt uiteen bij opnieuw trekken)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="613"/>
+        <location filename="../app/cli/command_frames.cpp" line="616"/>
         <source>%1 %2 (all %3%4)</source>
         <translation>%1 %2 (alle %3%4)</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="617"/>
+        <location filename="../app/cli/command_frames.cpp" line="620"/>
         <source>, r = %1</source>
         <translation>, r = %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="622"/>
+        <location filename="../app/cli/command_frames.cpp" line="625"/>
         <source>    elements: %1</source>
         <translation>    elementen: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="623"/>
+        <location filename="../app/cli/command_frames.cpp" line="626"/>
         <source>none stands out</source>
         <translation>geen enkel valt op</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="629"/>
+        <location filename="../app/cli/command_frames.cpp" line="632"/>
         <source>    closest to the centre: %1</source>
         <translation>    het dichtst bij het centrum: %1</translation>
     </message>
     <message>
-        <location filename="../app/cli/command_frames.cpp" line="632"/>
+        <location filename="../app/cli/command_frames.cpp" line="635"/>
         <source>Frames by %1: %2</source>
         <translation>Frames naar %1: %2</translation>
     </message>
@@ -7958,23 +7966,23 @@ Bijna-kopie van %2</translation>
         <translation>Verbeter eerst het gemarkeerde veld.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1163"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1168"/>
         <source>Version %1 was added since this draft was started from version %2; nothing was saved. Close the editor and open it again to edit the new version.</source>
         <translation>Versie %1 is toegevoegd sinds dit concept vanuit versie %2 is begonnen; er is niets opgeslagen. Sluit de editor en open hem opnieuw om de nieuwe versie te bewerken.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1177"/>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1224"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1182"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1229"/>
         <source>The codebook was not saved: the marked field needs a change first.</source>
         <translation>Het codeboek is niet opgeslagen: het gemarkeerde veld moet eerst worden gewijzigd.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1182"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1187"/>
         <source>Nothing was saved: the draft is the same as version %1.</source>
         <translation>Er is niets opgeslagen: het concept is gelijk aan versie %1.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1209"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1214"/>
         <source>Codebook version %1 saved. %n annotation(s) made under an older version are now outdated; %2 of them belong to a function that changed and need a re-check.</source>
         <translation>
             <numerusform>Codeboekversie %1 opgeslagen. %n annotatie gemaakt onder een oudere versie is nu verouderd; %2 daarvan horen bij een gewijzigde functie en moeten opnieuw worden gecontroleerd.</numerusform>
@@ -7982,17 +7990,17 @@ Bijna-kopie van %2</translation>
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1228"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1233"/>
         <source>Save as version %1</source>
         <translation>Opslaan als versie %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1230"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1235"/>
         <source>What changes against version %1:</source>
         <translation>Wat er verandert ten opzichte van versie %1:</translation>
     </message>
     <message>
-        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1236"/>
+        <location filename="../app/desktop/codebook/codebook_editor.cpp" line="1241"/>
         <source>&amp;Note (what changed and why):</source>
         <translation>&amp;Notitie (wat er is veranderd en waarom):</translation>
     </message>
@@ -9662,7 +9670,7 @@ Bijna-kopie van %2</translation>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="266"/>
         <location filename="../app/desktop/frames/frames_window.cpp" line="411"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="559"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="563"/>
         <source>F%1 %2</source>
         <translation>F%1 %2</translation>
     </message>
@@ -9732,8 +9740,8 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
     </message>
     <message>
         <location filename="../app/desktop/frames/frames_window.cpp" line="470"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="515"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="585"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="519"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="589"/>
         <source>–</source>
         <translation>–</translation>
     </message>
@@ -9748,112 +9756,112 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         <translation>Frames: k = %1, zoals gekozen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="476"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="477"/>
         <source>Frames: k = %1, where most indices point.</source>
         <translation>Frames: k = %1, waar de meeste indices naar wijzen.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="477"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="478"/>
         <source>Frames: k = %1, the largest mean silhouette; the three indices point at different k.</source>
         <translation>Frames: k = %1, het grootste gemiddelde silhouet; de drie indices wijzen verschillende k aan.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="495"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="499"/>
         <source>Name (double-click to edit)</source>
         <translation>Naam (dubbelklik om te bewerken)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="495"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="499"/>
         <source>Articles</source>
         <translation>Artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
         <source>Share</source>
         <translation>Aandeel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
         <source>Stability</source>
         <translation>Stabiliteit</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="496"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="500"/>
         <source>Characteristic elements (share in frame, in all)</source>
         <translation>Kenmerkende elementen (aandeel in frame, in alle)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="513"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="517"/>
         <source>%1 — dissolves on resampling</source>
         <translation>%1 — valt uiteen bij opnieuw trekken</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="517"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="521"/>
         <source>Mean Jaccard similarity to the best-matching cluster over %1 bootstrap replicates (Hennig 2007); %2 dissolved (≤ 0.5), %3 recovered (≥ 0.75).</source>
         <translation>Gemiddelde Jaccard-gelijkenis met de best passende cluster over %1 bootstrapreplicaties (Hennig 2007); %2 uiteengevallen (≤ 0.5), %3 teruggevonden (≥ 0.75).</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="523"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="527"/>
         <source>not computed</source>
         <translation>niet berekend</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="538"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="542"/>
         <source>%1 (%2, %3)</source>
         <translation>%1 (%2, %3)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="545"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="549"/>
         <source>none stands out</source>
         <translation>geen enkel valt op</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="609"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="613"/>
         <source>F%1</source>
         <translation>F%1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="560"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="564"/>
         <source>All</source>
         <translation>Alle</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="580"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="584"/>
         <source>%1: %2 of all articles</source>
         <translation>%1: %2 van alle artikelen</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="581"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="585"/>
         <source>%1 in F%2: %3 of its articles, %4 of all; adjusted residual %5</source>
         <translation>%1 in F%2: %3 van zijn artikelen, %4 van alle; gecorrigeerd residu %5</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="610"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="614"/>
         <source>Total</source>
         <translation>Totaal</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="621"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="625"/>
         <source>%1 (%2)</source>
         <translation>%1 (%2)</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="630"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="634"/>
         <source>Chi-square undefined: %1</source>
         <translation>Chikwadraat niet gedefinieerd: %1</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="633"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="637"/>
         <source>Pearson&apos;s X² = %1, df = %2, p = %3; Cramér&apos;s V = %4.</source>
         <translation>Pearsons X² = %1, df = %2, p = %3; Cramérs V = %4.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="636"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="640"/>
         <source>&lt; 0.001</source>
         <translation>&lt; 0.001</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="640"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="644"/>
         <source>%n cell(s) expect fewer than 5 articles: read the test with care.</source>
         <translation>
             <numerusform>%n cel verwacht minder dan 5 artikelen: lees de toets met zorg.</numerusform>
@@ -9861,43 +9869,43 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Title</source>
         <translation>Titel</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Outlet</source>
         <translation>Medium</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Date</source>
         <translation>Datum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Id</source>
         <translation>Id</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="650"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="654"/>
         <source>Near the centre</source>
         <translation>Dicht bij het centrum</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="668"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="672"/>
         <source>%1.</source>
         <translation>%1.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="701"/>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="702"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="705"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="706"/>
         <source>Compute the frames before saving them.</source>
         <translation>Bereken de frames voordat u ze opslaat.</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="718"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="722"/>
         <source>Saved the %n frame(s) as &quot;%1&quot; (Edit → Undo takes it back).</source>
         <translation>
             <numerusform>Het %n frame is opgeslagen als ‘%1’ (Bewerken → Ongedaan maken draait het terug).</numerusform>
@@ -9905,22 +9913,22 @@ Beslis meer artikelen in de gouden standaard (Coördinator → Vergelijken en be
         </translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="743"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="747"/>
         <source>The layer %1 of &quot;%2&quot; is no longer in the project.</source>
         <translation>De laag %1 van ‘%2’ staat niet meer in het project.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="745"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="749"/>
         <source>The layer %1 is no longer in the project.</source>
         <translation>De laag %1 staat niet meer in het project.</translation>
     </message>
     <message>
-        <location filename="../app/desktop/frames/frames_window.cpp" line="770"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="774"/>
         <source>Deleted the saved frames &quot;%1&quot; (Edit → Undo brings them back).</source>
         <translation>De opgeslagen frames ‘%1’ zijn verwijderd (Bewerken → Ongedaan maken haalt ze terug).</translation>
     </message>
     <message numerus="yes">
-        <location filename="../app/desktop/frames/frames_window.cpp" line="785"/>
+        <location filename="../app/desktop/frames/frames_window.cpp" line="789"/>
         <source>%1 — %2, k = %3, %n article(s)</source>
         <translation>
             <numerusform>%1 — %2, k = %3, %n artikel</numerusform>

@@ -3,6 +3,7 @@
 
 #include "app/cli/cli_output.h"
 #include "core/project/assignment_plans.h"
+#include "core/project/coder_copies.h"
 #include "core/project/project.h"
 #include "core/project/study_progress.h"
 #include "core/project/subsample_draw.h"
@@ -460,17 +461,32 @@ int runAssign(const QStringList &arguments)
         return report(project.error());
 
     if (withdrawnPhase) {
+        // The copies holding the draw's assignments, read before they become tombstones: the
+        // project file is all the withdrawal can check (core/project/coder_copies.h).
+        auto copies = CoderCopies::copiesHoldingDraw(*project, *withdrawnPhase);
+        if (!copies)
+            return report(copies.error());
         auto withdrawn = SubsampleDraw::withdraw(*project, *withdrawnPhase);
         if (!withdrawn)
             return report(withdrawn.error());
         const int count = int(*withdrawn);
-        if (asJson)
+        if (asJson) {
+            QJsonArray held;
+            for (const CopyOut &c : *copies)
+                held.append(QJsonObject {{QStringLiteral("coder"), c.coder},
+                    {QStringLiteral("copy"), c.copyUuid},
+                    {QStringLiteral("handed_out_at"), c.handedOutAt},
+                    {QStringLiteral("articles"), QJsonArray::fromStringList(c.articles)}});
             printJson(QJsonObject {{QStringLiteral("phase"), phaseKey(*withdrawnPhase)},
-                {QStringLiteral("withdrawn_assignments"), count}});
-        else
+                {QStringLiteral("withdrawn_assignments"), count},
+                {QStringLiteral("copies_out"), held}});
+        } else {
             out(CliText::tr(
                 "The %1 subsample is withdrawn: %n assignment(s) removed.", nullptr, count)
                     .arg(phaseKey(*withdrawnPhase)));
+            for (const CopyOut &c : *copies)
+                out(CoderCopies::copyOutNotice(c));
+        }
         return ExitOk;
     }
 

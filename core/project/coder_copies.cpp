@@ -3,7 +3,9 @@
 #include "core/project/conflict_edits.h"
 #include "core/project/copy_validation.h"
 #include "core/project/project.h"
+#include "core/project/subsample_draw.h"
 #include "core/store/coder_table.h"
+#include "core/store/copy_holders.h"
 #include "core/store/copy_tables.h"
 #include "core/store/database.h"
 #include "core/store/event_log.h"
@@ -752,6 +754,40 @@ Result<std::vector<MergeReport>> CoderCopies::merge(Project &project, const QStr
     }
     FOURFOLD_TRY_STATUS(sp->commit());
     return reports;
+}
+
+Result<std::vector<CopyOut>> CoderCopies::copiesHoldingDraw(const Project &project, Phase phase)
+{
+    auto draw = SubsampleDraw::recorded(project, phase);
+    if (!draw)
+        return std::unexpected(draw.error());
+    if (!*draw)
+        return std::vector<CopyOut> {};
+    auto articles = project.articles();
+    if (!articles)
+        return std::unexpected(articles.error());
+    QStringList uuids;
+    for (const ArticleSummary &a : *articles)
+        if ((*draw)->articles.contains(a.externalId))
+            uuids << a.uuid;
+    auto held = store::copiesHolding(project.db(), phaseKey(phase), uuids, (*draw)->coders);
+    if (!held)
+        return std::unexpected(held.error());
+    std::vector<CopyOut> out;
+    for (store::CopyHolding &h : *held)
+        out.push_back(CopyOut {h.coder, h.copyUuid, h.handedOutAt, std::move(h.articles)});
+    return out;
+}
+
+QString CoderCopies::copyOutNotice(const CopyOut &copy)
+{
+    const int count = int(copy.articles.size());
+    return CoderCopiesText::tr(
+        "%1's coder copy, handed out %2, holds %n of the withdrawn assignments (%3): what %1 "
+        "codes there still comes back at the merge, named, for you to decide.",
+        nullptr, count)
+        .arg(copy.coder, copy.handedOutAt.left(16).replace(QLatin1Char('T'), QLatin1Char(' ')),
+            copy.articles.join(QStringLiteral(", ")));
 }
 
 QString CoderCopies::withdrawnNotice(const MergeReport &report)

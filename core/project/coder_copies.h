@@ -36,6 +36,7 @@
 // and again, or never return it), so the lead could be kept from withdrawing forever, and because
 // the project could not tell whether the coder had even opened the article.
 
+#include "core/model/annotation.h"
 #include "core/model/coder.h"
 #include "core/model/error.h"
 #include "core/model/merge_conflict.h"
@@ -74,6 +75,14 @@ struct HandoutReport {
 struct WithdrawnWork {
     QString article; // external id
     QString phase; // phaseKey
+};
+
+// A coder copy handed out with some assignments of a draw.
+struct CopyOut {
+    QString coder; // pseudonym, as recorded at the hand-out
+    QString copyUuid;
+    QString handedOutAt; // ISO 8601 UTC
+    QStringList articles; // external ids of the draw's articles it holds, sorted
 };
 
 struct MergeReport {
@@ -125,6 +134,14 @@ public:
     // NotFound if there is no such open conflict; InvalidArgument for another `keep` or an
     // object with several open conflicts.
     static Status resolve(Project &project, const QString &uuid, const QString &keep);
+
+    // The coder copies the project handed out with assignments of the recorded draw of `phase`
+    // (of its articles, to its coders), by hand-out time; none when the phase has no draw. What
+    // a lead withdrawing the draw is told: work done there comes back at the merge as above.
+    // Fails with Corrupt if the draw's record cannot be read.
+    static Result<std::vector<CopyOut>> copiesHoldingDraw(const Project &project, Phase phase);
+    // The sentence about one such copy, for the lead who withdrew the draw.
+    static QString copyOutNotice(const CopyOut &copy);
 
     // The sentence that tells the lead about `report.withdrawn` (which coder, how many articles,
     // which, and what to decide), or "" when the copy held no such work.

@@ -205,8 +205,16 @@ TEST_CASE("merge names the articles a coder coded on a draw withdrawn while the 
         REQUIRE(SubsampleDraw::commit(*p, *d));
         drawn = d->articles.front();
         REQUIRE(CoderCopies::handout(*p, QStringLiteral("C01"), copy));
-        REQUIRE(SubsampleDraw::withdraw(*p, Phase::Reliability));
     }
+    // The withdrawal names the copy out with the draw's assignments.
+    CliRun r = cli({QStringLiteral("assign"), main, QStringLiteral("--withdraw-draw"),
+        QStringLiteral("reliability"), QStringLiteral("--json")});
+    INFO(r.err.toStdString());
+    REQUIRE(r.exitCode == 0);
+    const QJsonArray out = cliJson(r).value(QStringLiteral("copies_out")).toArray();
+    REQUIRE(out.size() == 1);
+    CHECK(out.at(0).toObject().value(QStringLiteral("coder")).toString() == QStringLiteral("C01"));
+    CHECK(out.at(0).toObject().value(QStringLiteral("articles")).toArray() == QJsonArray {drawn});
     {
         auto p = Project::open(copy);
         REQUIRE(p);
@@ -218,8 +226,7 @@ TEST_CASE("merge names the articles a coder coded on a draw withdrawn while the 
         REQUIRE(p->apply(done));
     }
 
-    CliRun r = cli({QStringLiteral("merge"), main, copy});
-    INFO(r.err.toStdString());
+    r = cli({QStringLiteral("merge"), main, copy});
     REQUIRE(r.exitCode == 0);
     CHECK(r.out.contains(QStringLiteral("C01 coded 1 article")));
     CHECK(r.out.contains(drawn + QStringLiteral(" (reliability)")));
@@ -237,4 +244,35 @@ TEST_CASE("merge names the articles a coder coded on a draw withdrawn while the 
     const QJsonObject again = cliJson(r).value(QStringLiteral("merged")).toArray().at(0).toObject();
     CHECK(again.value(QStringLiteral("alreadyMerged")).toBool());
     CHECK(again.value(QStringLiteral("withdrawn")).toArray().isEmpty());
+}
+
+TEST_CASE("assign --withdraw-draw names in a sentence the coder copy out with the draw")
+{
+    QTemporaryDir dir;
+    const QString main = dir.filePath(QStringLiteral("main.fourfold"));
+    {
+        auto p = Project::create(main);
+        REQUIRE(p);
+        REQUIRE(p->importFile(
+            writeFile(dir, QStringLiteral("a.jsonl"), kThreeArticles), ImportOptions {}));
+        for (const char *c : {"C01", "C02"})
+            REQUIRE(p->addCoder(QStringLiteral("Coder %1").arg(QLatin1String(c)),
+                QString::fromLatin1(c), CoderRole::Coder));
+    }
+    CliRun r = cli(
+        {QStringLiteral("assign"), main, QStringLiteral("--draw"), QStringLiteral("reliability"),
+            QStringLiteral("--size"), QStringLiteral("2"), QStringLiteral("--seed"),
+            QStringLiteral("4"), QStringLiteral("--coders"), QStringLiteral("C01,C02")});
+    INFO(r.err.toStdString());
+    REQUIRE(r.exitCode == 0);
+    r = cli({QStringLiteral("handout"), main, QStringLiteral("--coder"), QStringLiteral("C02"),
+        QStringLiteral("--out"), dir.filePath(QStringLiteral("c02.fourfold"))});
+    REQUIRE(r.exitCode == 0);
+    r = cli({QStringLiteral("assign"), main, QStringLiteral("--withdraw-draw"),
+        QStringLiteral("reliability")});
+    REQUIRE(r.exitCode == 0);
+    CHECK(r.out.contains(QStringLiteral("4 assignment(s) removed")));
+    CHECK(r.out.contains(QStringLiteral("C02's coder copy, handed out ")));
+    CHECK(r.out.contains(QStringLiteral("holds 2 of the withdrawn assignments")));
+    CHECK_FALSE(r.out.contains(QStringLiteral("C01's")));
 }

@@ -484,3 +484,41 @@ TEST_CASE("copies with work on a withdrawn draw merge to the same project in any
         CHECK(count(path, "SELECT sum(active_seconds) FROM assignment") == 220);
     }
 }
+
+TEST_CASE("the copies holding a draw's assignments are named before it is withdrawn")
+{
+    WithdrawnFixture f;
+    // C01's copy holds the draw's one article; C02 has none; a copy for C01 handed out before
+    // the draw holds nothing of it.
+    auto held = CoderCopies::copiesHoldingDraw(*f.main, Phase::Reliability);
+    REQUIRE(held);
+    REQUIRE(held->size() == 1);
+    CHECK(held->front().coder == QStringLiteral("C01"));
+    CHECK(held->front().articles == QStringList {f.drawn});
+    auto info = [&] {
+        Project copy = openProject(f.copyPath);
+        auto i = CoderCopies::copyInfo(copy);
+        REQUIRE(i);
+        REQUIRE(i->has_value());
+        return **i;
+    }();
+    CHECK(held->front().copyUuid == info.copyUuid);
+    CHECK_FALSE(held->front().handedOutAt.isEmpty());
+    const QString notice = CoderCopies::copyOutNotice(held->front());
+    CHECK(notice.startsWith(QStringLiteral("C01's coder copy, handed out ")));
+    CHECK(notice.contains(QStringLiteral("(") + f.drawn + QStringLiteral(")")));
+
+    // A second copy for C02 is named too, after C01's (hand-out order).
+    const QString b = f.dir.filePath(QStringLiteral("c02.fourfold"));
+    REQUIRE(CoderCopies::handout(*f.main, QStringLiteral("C02"), b));
+    held = CoderCopies::copiesHoldingDraw(*f.main, Phase::Reliability);
+    REQUIRE(held);
+    REQUIRE(held->size() == 2);
+    CHECK(held->back().coder == QStringLiteral("C02"));
+    CHECK(held->back().articles == QStringList {f.drawn});
+
+    // The pilot phase has no draw: no copies to name.
+    auto none = CoderCopies::copiesHoldingDraw(*f.main, Phase::Pilot);
+    REQUIRE(none);
+    CHECK(none->empty());
+}
