@@ -4,6 +4,7 @@
 #include "app/desktop/function_style.h"
 #include "app/desktop/study/study_text.h"
 #include "core/project/codebook_versions.h"
+#include "core/project/coder_copies.h"
 #include "core/project/outdated_annotations.h"
 #include "core/project/project.h"
 
@@ -504,16 +505,26 @@ void StudyDesignWindow::withdrawDraw()
         showError(m_drawError, edit.error().message);
         return;
     }
+    // The check sees the project file only: the coder copies out with the draw's assignments
+    // are named, read before they become tombstones (core/project/coder_copies.h).
+    auto copies = CoderCopies::copiesHoldingDraw(m_project, phase);
+    if (!copies) {
+        showError(m_drawError, copies.error().message);
+        return;
+    }
     // Refused with the reason (how many assignments have work) when coding has started.
     WithdrawDrawEdit *withdrawal = edit->get();
     if (!push(std::move(*edit), m_drawError))
         return;
     const int withdrawn = int(withdrawal->withdrawnAssignments());
-    m_drawState->setText(tr("<b>The %1 sample was withdrawn</b>: %n assignment(s) removed, the "
-                            "withdrawal recorded in the project's log. The phase can be drawn "
-                            "again.",
+    QString state = tr("<b>The %1 sample was withdrawn</b>: %n assignment(s) removed, the "
+                       "withdrawal recorded in the project's log. The phase can be drawn "
+                       "again.",
         nullptr, withdrawn)
-                             .arg(studyPhaseName(phase)));
+                        .arg(studyPhaseName(phase));
+    for (const CopyOut &c : *copies)
+        state += QStringLiteral("<br>") + CoderCopies::copyOutNotice(c).toHtmlEscaped();
+    m_drawState->setText(state);
 }
 
 void StudyDesignWindow::showDraw(const Draw &draw, bool recorded)

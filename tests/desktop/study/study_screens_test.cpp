@@ -10,6 +10,7 @@
 #include "core/project/annotation_edits.h"
 #include "core/project/article_status_edit.h"
 #include "core/project/codebook_versions.h"
+#include "core/project/coder_copies.h"
 #include "core/project/project.h"
 #include "core/project/study_progress.h"
 #include "core/project/testing/project_database.h"
@@ -289,6 +290,38 @@ TEST_CASE(
     CHECK_FALSE(error->isHidden());
     CHECK(error->text().contains(QStringLiteral("coding has started on 1 of its 9 assignments")));
     CHECK(rowsOf(s.project, Phase::Reliability).size() == 27 + 9);
+}
+
+TEST_CASE("Withdrawing a draw in the window names the coder copy out with it", "[studygui][draw]")
+{
+    SampleCopy s;
+    auto session = s.session(QStringLiteral("L01"));
+    StudyDesignWindow w(*session);
+    w.show();
+    child<QSpinBox>(w, "draw-size")->setValue(3);
+    child<QLineEdit>(w, "draw-seed")->setText(QStringLiteral("7"));
+    click(w, "draw-plan");
+    click(w, "draw-commit");
+    auto recorded = SubsampleDraw::recorded(s.project, Phase::Reliability);
+    REQUIRE(recorded);
+    REQUIRE(recorded->has_value());
+    REQUIRE((*recorded)->coders.contains(QStringLiteral("C01")));
+    // C01 takes a copy home after the draw (core/project/coder_copies.h).
+    REQUIRE(CoderCopies::handout(
+        s.project, QStringLiteral("C01"), s.dir.filePath(QStringLiteral("c01.fourfold"))));
+
+    click(w, "draw-withdraw");
+    CHECK(child<QLabel>(w, "draw-error")->isHidden());
+    const QString state = child<QLabel>(w, "draw-state")->text();
+    CHECK(state.contains(QStringLiteral("withdrawn")));
+    CHECK(state.contains(QStringLiteral("C01's coder copy, handed out ")));
+    CHECK(state.contains(QStringLiteral("holds 3 of the withdrawn assignments (")
+        + (*recorded)->articles.join(QStringLiteral(", ")) + QStringLiteral(")")));
+    CHECK_FALSE(state.contains(QStringLiteral("C02's")));
+    if (const QByteArray shot = qgetenv("FOURFOLD_SHOT_DIR"); !shot.isEmpty()) {
+        w.resize(1000, 700);
+        w.grab().save(QString::fromLocal8Bit(shot) + QStringLiteral("/withdraw_copies_out.png"));
+    }
 }
 
 TEST_CASE("The rest is dealt single- or double-coded from the window", "[studygui][rest]")
