@@ -4584,6 +4584,11 @@
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Eine Änderung, die nie ausgeführt wurde, kann nicht rückgängig gemacht werden.</translation>
     </message>
+    <message>
+        <location filename="../core/project/study_edits.cpp" line="102"/>
+        <source>&quot;%1&quot; cannot be undone: coding has started on %2 of its %3 assignments (spans, answers, coding time, or a status of started or done).</source>
+        <translation>„%1“ kann nicht rückgängig gemacht werden: bei %2 der %3 Zuweisungen hat das Codieren begonnen (Textstellen, Antworten, Codierzeit oder der Status begonnen oder fertig).</translation>
+    </message>
 </context>
 <context>
     <name>StudyText</name>

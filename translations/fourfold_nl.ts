@@ -4584,6 +4584,11 @@
         <source>An edit that was never applied cannot be undone.</source>
         <translation>Een wijziging die nooit is uitgevoerd, kan niet ongedaan worden gemaakt.</translation>
     </message>
+    <message>
+        <location filename="../core/project/study_edits.cpp" line="102"/>
+        <source>&quot;%1&quot; cannot be undone: coding has started on %2 of its %3 assignments (spans, answers, coding time, or a status of started or done).</source>
+        <translation>„%1” kan niet ongedaan worden gemaakt: bij %2 van de %3 toewijzingen is het coderen begonnen (fragmenten, antwoorden, codeertijd, of de status begonnen of klaar).</translation>
+    </message>
 </context>
 <context>
     <name>StudyText</name>

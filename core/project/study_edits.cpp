@@ -87,6 +87,24 @@ Status AssignEdit::apply(Database &db)
 
 Status AssignEdit::revert(Database &db)
 {
+    // Undoing assignments someone already works on would orphan that work: refused, as a
+    // withdrawal of a draw is (spans, answers, coding time, or a status of started or done).
+    int withWork = 0;
+    for (const AssignmentToWrite &row : m_rows) {
+        auto record = store::assignmentRecord(db, row.article, row.coder, row.phase);
+        if (!record)
+            return std::unexpected(record.error());
+        if (*record && !(*record)->deleted && (*record)->hasWork())
+            ++withWork;
+    }
+    if (withWork > 0)
+        return fail(ErrorCode::NotAllowed,
+            StudyEditText::tr("\"%1\" cannot be undone: coding has started on %2 of its %3 "
+                              "assignments (spans, answers, coding time, or a status of started "
+                              "or done).")
+                .arg(m_text)
+                .arg(withWork)
+                .arg(m_rows.size()));
     if (!m_settingKey.isEmpty())
         FOURFOLD_TRY_STATUS(store::removeSetting(db, m_settingKey));
     for (std::size_t i = m_rows.size(); i-- > 0;) {

@@ -29,9 +29,10 @@ struct AssignmentToWrite {
 // project setting to `settingValue` (a draw's record, study.draw.<phase>); apply() fails with
 // Duplicate when the setting is there already (a draw recorded meanwhile). Revert removes the
 // rows and the setting again (a row that was a tombstone before, of a withdrawn draw, becomes that
-// tombstone again). A tombstone that carries coding time (work merged from a coder copy on the
-// withdrawn assignment) gives it to the row it becomes, and takes it back on revert; no revert
-// here or in WithdrawDrawEdit lowers a row's coding time.
+// tombstone again); it fails with NotAllowed, naming how many, once coding started on any of them.
+// A tombstone that carries coding time (work merged from a coder copy on the withdrawn assignment)
+// gives it to the row it becomes, and takes it back on revert; no revert here or in
+// WithdrawDrawEdit lowers a row's coding time.
 class AssignEdit : public Edit
 {
 public:

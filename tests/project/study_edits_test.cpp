@@ -124,6 +124,38 @@ TEST_CASE("dealing the rest is one edit that undo takes back whole")
     CHECK(again.error().code == ErrorCode::Duplicate);
 }
 
+TEST_CASE("assignments someone started coding are not undone and nothing changes")
+{
+    StudyEditFixture f;
+    AssignmentPlan plan;
+    plan.rows = {{QStringLiteral("a01"), QStringLiteral("C01"), Phase::Production},
+        {QStringLiteral("a02"), QStringLiteral("C01"), Phase::Production},
+        {QStringLiteral("a02"), QStringLiteral("C02"), Phase::Production}};
+    auto edit = AssignmentPlans::edit(f.project, plan, {}, f.lead);
+    REQUIRE(edit);
+    REQUIRE(f.project.apply(**edit));
+    // C01 marks a span on a02: that assignment has work now.
+    auto a02 = f.project.articleByExternalId(QStringLiteral("a02"));
+    REQUIRE(a02);
+    REQUIRE(a02->has_value());
+    auto c01 = f.project.coderByPseudonym(QStringLiteral("C01"));
+    REQUIRE(c01);
+    REQUIRE(c01->has_value());
+    AddAnnotationEdit span(**a02, (*c01)->id,
+        AnnotationContent {FramingFunction::Problem, {0, 5}, {}, {}, {}}, Phase::Production);
+    REQUIRE(f.project.apply(span));
+    const QString before = f.dump();
+    const Status refused = f.project.revert(**edit);
+    REQUIRE_FALSE(refused);
+    CHECK(refused.error().code == ErrorCode::NotAllowed);
+    CHECK(refused.error().message.contains(QStringLiteral("1 of its 3 assignments")));
+    CHECK(f.dump() == before);
+    // Once the span is undone, the plan is undone whole.
+    REQUIRE(f.project.revert(span));
+    REQUIRE(f.project.revert(**edit));
+    CHECK(AssignmentPlans::rows(f.project, Phase::Production)->empty());
+}
+
 TEST_CASE("the effort setting is one edit: undo restores the value before or its absence")
 {
     StudyEditFixture f;
