@@ -4127,6 +4127,21 @@
         <source>Upgrading the team project on %1 to server schema version %2 failed.</source>
         <translation>Das Aktualisieren des Teamprojekts auf %1 auf Server-Schemaversion %2 ist fehlgeschlagen.</translation>
     </message>
+    <message>
+        <location filename="../core/team/server_store_schema.cpp" line="485"/>
+        <source>The database %1 holds no team project.</source>
+        <translation>Die Datenbank %1 enthält kein Teamprojekt.</translation>
+    </message>
+    <message>
+        <location filename="../core/team/server_store_schema.cpp" line="489"/>
+        <source>The team project on %1 was written by a newer Fourfold (server schema version %2; this version reads up to %3).</source>
+        <translation>Das Teamprojekt auf %1 wurde von einem neueren Fourfold geschrieben (Server-Schemaversion %2; diese Version liest bis %3).</translation>
+    </message>
+    <message>
+        <location filename="../core/team/server_store_schema.cpp" line="497"/>
+        <source>The team project on %1 has server schema version %2; this Fourfold works with version %3. The administrator who published it upgrades it first: fourfold-cli team upgrade --server CONNECTION (nothing was changed).</source>
+        <translation>Das Teamprojekt auf %1 hat die Server-Schemaversion %2; dieses Fourfold arbeitet mit Version %3. Wer es als Administrator veröffentlicht hat, aktualisiert es zuerst: fourfold-cli team upgrade --server VERBINDUNG (nichts wurde geändert).</translation>
+    </message>
 </context>
 <context>
     <name>SharedRows</name>
@@ -4757,6 +4772,14 @@
         <location filename="../core/team/team_status.cpp" line="39"/>
         <source>%1 is not a team working file (made by team publish or team join).</source>
         <translation>%1 ist keine Team-Arbeitsdatei (erstellt mit team publish oder team join).</translation>
+    </message>
+</context>
+<context>
+    <name>TeamUpgradeText</name>
+    <message>
+        <location filename="../core/team/team_upgrade.cpp" line="34"/>
+        <source>The database %1 holds no team project.</source>
+        <translation>Die Datenbank %1 enthält kein Teamprojekt.</translation>
     </message>
 </context>
 <context>
@@ -7444,6 +7467,36 @@
         <location filename="../app/cli/command_frames.cpp" line="584"/>
         <source>Frames (k = %1, the largest mean silhouette: the three indices point at different k)</source>
         <translation>Frames (k = %1, die größte mittlere Silhouette: die drei Indizes zeigen auf verschiedene k)</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="286"/>
+        <source>The login that owns the team project&apos;s schema, as a libpq connection string: the administrator who published it.</source>
+        <translation>Die Anmeldung, der das Schema des Teamprojekts gehört, als libpq-Verbindungszeichenkette: die Administration, die es veröffentlicht hat.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="294"/>
+        <source>Bring a team project&apos;s server to the schema this version of Fourfold works with, in one transaction (a project published by an older version: its syncs and joins are refused until then).</source>
+        <translation>Bringt den Server eines Teamprojekts in einer Transaktion auf das Schema, mit dem diese Version von Fourfold arbeitet (ein von einer älteren Version veröffentlichtes Projekt: seine Synchronisierungen und Beitritte werden bis dahin abgelehnt).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="303"/>
+        <source>expected --server and no other argument.</source>
+        <translation>erwartet --server und kein anderes Argument.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="313"/>
+        <source>The team project on %1 has server schema version %2 already.</source>
+        <translation>Das Teamprojekt auf %1 hat bereits die Server-Schemaversion %2.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="317"/>
+        <source>Upgraded the team project on %1 from server schema version %2 to %3.</source>
+        <translation>Das Teamprojekt auf %1 wurde von Server-Schemaversion %2 auf %3 aktualisiert.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="352"/>
+        <source>  upgrade   Bring a team project&apos;s server to this version&apos;s schema.</source>
+        <translation>  upgrade   Bringt den Server eines Teamprojekts auf das Schema dieser Version.</translation>
     </message>
 </context>
 <context>

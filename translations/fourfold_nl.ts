@@ -4127,6 +4127,21 @@
         <source>Upgrading the team project on %1 to server schema version %2 failed.</source>
         <translation>Het bijwerken van het teamproject op %1 naar serverschemaversie %2 is mislukt.</translation>
     </message>
+    <message>
+        <location filename="../core/team/server_store_schema.cpp" line="485"/>
+        <source>The database %1 holds no team project.</source>
+        <translation>De database %1 bevat geen teamproject.</translation>
+    </message>
+    <message>
+        <location filename="../core/team/server_store_schema.cpp" line="489"/>
+        <source>The team project on %1 was written by a newer Fourfold (server schema version %2; this version reads up to %3).</source>
+        <translation>Het teamproject op %1 is geschreven door een nieuwere Fourfold (serverschemaversie %2; deze versie leest tot en met %3).</translation>
+    </message>
+    <message>
+        <location filename="../core/team/server_store_schema.cpp" line="497"/>
+        <source>The team project on %1 has server schema version %2; this Fourfold works with version %3. The administrator who published it upgrades it first: fourfold-cli team upgrade --server CONNECTION (nothing was changed).</source>
+        <translation>Het teamproject op %1 heeft serverschemaversie %2; deze Fourfold werkt met versie %3. De beheerder die het heeft gepubliceerd, werkt het eerst bij: fourfold-cli team upgrade --server VERBINDING (er is niets gewijzigd).</translation>
+    </message>
 </context>
 <context>
     <name>SharedRows</name>
@@ -4757,6 +4772,14 @@
         <location filename="../core/team/team_status.cpp" line="39"/>
         <source>%1 is not a team working file (made by team publish or team join).</source>
         <translation>%1 is geen teamwerkbestand (gemaakt met team publish of team join).</translation>
+    </message>
+</context>
+<context>
+    <name>TeamUpgradeText</name>
+    <message>
+        <location filename="../core/team/team_upgrade.cpp" line="34"/>
+        <source>The database %1 holds no team project.</source>
+        <translation>De database %1 bevat geen teamproject.</translation>
     </message>
 </context>
 <context>
@@ -7444,6 +7467,36 @@
         <location filename="../app/cli/command_frames.cpp" line="584"/>
         <source>Frames (k = %1, the largest mean silhouette: the three indices point at different k)</source>
         <translation>Frames (k = %1, het grootste gemiddelde silhouet: de drie indices wijzen verschillende k aan)</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="286"/>
+        <source>The login that owns the team project&apos;s schema, as a libpq connection string: the administrator who published it.</source>
+        <translation>De login die eigenaar is van het schema van het teamproject, als libpq-verbindingsreeks: de beheerder die het heeft gepubliceerd.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="294"/>
+        <source>Bring a team project&apos;s server to the schema this version of Fourfold works with, in one transaction (a project published by an older version: its syncs and joins are refused until then).</source>
+        <translation>Brengt de server van een teamproject in één transactie naar het schema waarmee deze versie van Fourfold werkt (een project dat door een oudere versie is gepubliceerd: synchronisaties en deelnames worden tot dan geweigerd).</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="303"/>
+        <source>expected --server and no other argument.</source>
+        <translation>verwacht --server en geen ander argument.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="313"/>
+        <source>The team project on %1 has server schema version %2 already.</source>
+        <translation>Het teamproject op %1 heeft al serverschemaversie %2.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="317"/>
+        <source>Upgraded the team project on %1 from server schema version %2 to %3.</source>
+        <translation>Het teamproject op %1 is bijgewerkt van serverschemaversie %2 naar %3.</translation>
+    </message>
+    <message>
+        <location filename="../app/cli/command_team.cpp" line="352"/>
+        <source>  upgrade   Bring a team project&apos;s server to this version&apos;s schema.</source>
+        <translation>  upgrade   Brengt de server van een teamproject naar het schema van deze versie.</translation>
     </message>
 </context>
 <context>

@@ -278,6 +278,50 @@ int runTeamStatus(const QStringList &arguments)
 
 } // namespace
 
+int runTeamUpgrade(const QStringList &arguments)
+{
+    const QString command = QStringLiteral("team upgrade");
+    QCommandLineParser parser;
+    const QCommandLineOption server(QStringLiteral("server"),
+        QCoreApplication::translate("cli",
+            "The login that owns the team project's schema, as a libpq connection string: the "
+            "administrator who published it."),
+        QStringLiteral("CONNECTION"));
+    const QCommandLineOption json(
+        QStringLiteral("json"), QCoreApplication::translate("cli", "Print the result as JSON."));
+    parser.addOptions({server, json});
+    if (int rc = parseCommandLine(parser, command,
+            QCoreApplication::translate("cli",
+                "Bring a team project's server to the schema this version of Fourfold works "
+                "with, in one transaction (a project published by an older version: its syncs "
+                "and joins are refused until then)."),
+            arguments);
+        rc >= 0)
+        return rc;
+    if (!parser.positionalArguments().isEmpty() || !parser.isSet(server))
+        return usageError(command,
+            QCoreApplication::translate("cli", "expected --server and no other argument."));
+    auto result = TeamProject::upgradeServer(parser.value(server));
+    if (!result)
+        return report(result.error());
+    if (parser.isSet(json)) {
+        printJson(QJsonObject {{QStringLiteral("server"), result->server},
+            {QStringLiteral("from"), result->from}, {QStringLiteral("to"), result->to}});
+        return ExitOk;
+    }
+    out(result->from == result->to
+            ? QCoreApplication::translate(
+                "cli", "The team project on %1 has server schema version %2 already.")
+                  .arg(result->server)
+                  .arg(result->to)
+            : QCoreApplication::translate(
+                "cli", "Upgraded the team project on %1 from server schema version %2 to %3.")
+                  .arg(result->server)
+                  .arg(result->from)
+                  .arg(result->to));
+    return ExitOk;
+}
+
 int runTeam(const QStringList &arguments)
 {
     const QString sub = arguments.size() > 1 ? arguments.at(1) : QString();
@@ -291,6 +335,8 @@ int runTeam(const QStringList &arguments)
         return runTeamStatus(arguments.mid(1));
     if (sub == QLatin1String("people"))
         return runTeamPeople(arguments.mid(1));
+    if (sub == QLatin1String("upgrade"))
+        return runTeamUpgrade(arguments.mid(1));
     if (sub.isEmpty() || sub == QLatin1String("--help") || sub == QLatin1String("-h")) {
         out(QCoreApplication::translate("cli", "Usage: fourfold-cli team SUBCOMMAND [options]"));
         out(QCoreApplication::translate("cli",
@@ -303,6 +349,8 @@ int runTeam(const QStringList &arguments)
             "cli", "  status    What a working file last synced and what waits to be sent."));
         out(QCoreApplication::translate(
             "cli", "  people    Add a person to a running team project, or disable one."));
+        out(QCoreApplication::translate(
+            "cli", "  upgrade   Bring a team project's server to this version's schema."));
         return sub.isEmpty() ? ExitUsage : ExitOk;
     }
     return usageError(QStringLiteral("team"),

@@ -475,6 +475,35 @@ Result<int> serverSchemaVersion(ServerConnection &conn)
     return version->rows() == 1 ? int(version->integer(0, 0)) : 0;
 }
 
+Status requireCurrentServerSchema(ServerConnection &conn)
+{
+    auto version = serverSchemaVersion(conn);
+    if (!version)
+        return std::unexpected(version.error());
+    if (*version == 0)
+        return fail(ErrorCode::NotFound,
+            QCoreApplication::translate("ServerSchema", "The database %1 holds no team project.")
+                .arg(conn.describe()));
+    if (*version > kServerSchemaVersion)
+        return fail(ErrorCode::NewerSchema,
+            QCoreApplication::translate("ServerSchema",
+                "The team project on %1 was written by a newer Fourfold (server schema version "
+                "%2; this version reads up to %3).")
+                .arg(conn.describe())
+                .arg(*version)
+                .arg(kServerSchemaVersion));
+    if (*version < kServerSchemaVersion)
+        return fail(ErrorCode::Unsupported,
+            QCoreApplication::translate("ServerSchema",
+                "The team project on %1 has server schema version %2; this Fourfold works with "
+                "version %3. The administrator who published it upgrades it first: fourfold-cli "
+                "team upgrade --server CONNECTION (nothing was changed).")
+                .arg(conn.describe())
+                .arg(*version)
+                .arg(kServerSchemaVersion));
+    return {};
+}
+
 Status prepareServerSchema(ServerConnection &conn)
 {
     auto version = serverSchemaVersion(conn);

@@ -19,6 +19,12 @@ inline constexpr int kServerSchemaVersion = 4;
 // The server's schema version: 0 when the database holds no team project.
 Result<int> serverSchemaVersion(ServerConnection &conn);
 
+// Whether the server holds a team project of exactly this build's schema version: NotFound
+// when it holds none, NewerSchema for a newer one, Unsupported for an older one (saying that the
+// administrator who published it upgrades it with `fourfold-cli team upgrade`). What a join or a
+// sync asks before it reads or writes rows.
+Status requireCurrentServerSchema(ServerConnection &conn);
+
 // Creates or upgrades the schema inside the caller's transaction: every migration after the
 // server's version, then the version. Fails with NewerSchema for a newer server, or with the
 // server's error (nothing is kept when the caller rolls back).

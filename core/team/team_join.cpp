@@ -76,20 +76,7 @@ Result<JoinReport> TeamProject::join(
     // One snapshot of everything this role may see.
     FOURFOLD_TRY_STATUS(
         conn->exec(QStringLiteral("BEGIN ISOLATION LEVEL REPEATABLE READ READ ONLY")));
-    auto version = serverSchemaVersion(*conn);
-    if (!version)
-        return std::unexpected(version.error());
-    if (*version == 0)
-        return fail(ErrorCode::NotFound,
-            TeamProjectText::tr("The database %1 holds no team project.").arg(report.server));
-    if (*version > kServerSchemaVersion)
-        return fail(ErrorCode::NewerSchema,
-            TeamProjectText::tr(
-                "The team project on %1 was written by a newer Fourfold (server schema version "
-                "%2; this version reads up to %3).")
-                .arg(report.server)
-                .arg(*version)
-                .arg(kServerSchemaVersion));
+    FOURFOLD_TRY_STATUS(requireCurrentServerSchema(*conn));
     auto me = conn->query(QStringLiteral(
         "SELECT p.pseudonym, l.is_lead FROM fourfold.login l JOIN fourfold.person p ON p.uuid = "
         "l.person WHERE l.role_name = current_user"));

@@ -76,6 +76,13 @@ struct SyncReport {
     qint64 lastChange = 0;
 };
 
+// What an upgrade of a team project's server schema did.
+struct ServerUpgrade {
+    QString server; // "role@host:port/database"
+    int from = 0; // the server schema version before
+    int to = 0; // after: the version this build writes
+};
+
 // A working file's state, read from the file alone (it works without the server).
 struct TeamStatus {
     QString server; // the connection string the file records (no password)
@@ -188,6 +195,15 @@ public:
     // when the login may not change roles.
     static Result<TeamPersonReport> setPersonDisabled(Project &project, const SignedIn &by,
         const QString &pseudonym, bool disabled, const QString &admin = {});
+
+    // Brings the team project on `server` (a libpq connection string of the login that owns
+    // its schema: the administrator who published it) to the server schema version this build
+    // writes, in one transaction: every migration after the server's version. A server already
+    // there is left alone (from == to). Fails with NotFound when the database holds no team
+    // project, NewerSchema for a newer server, and the server's error (naming the version that
+    // failed; nothing is kept) when the login may not change the schema. Syncs and joins of a
+    // project on an older server are refused until it is upgraded.
+    static Result<ServerUpgrade> upgradeServer(const QString &server);
 
     // Makes the working file `project` sync through the login `server` (a libpq connection
     // string; recorded without any password): e.g. the published file through the lead's own

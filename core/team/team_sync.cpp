@@ -10,6 +10,7 @@
 #include "core/team/server_connection_pool.h"
 #include "core/team/server_store_connection.h"
 #include "core/team/server_store_rows.h"
+#include "core/team/server_store_schema.h"
 #include "core/team/team_project.h"
 #include "core/team/team_rows.h"
 #include "core/team/team_shared_sync.h"
@@ -87,6 +88,9 @@ Result<SyncReport> TeamProject::sync(
     SyncReport report;
     report.server = conn->describe();
     report.lastChange = lastChange->value_or(QString()).toLongLong();
+    // An older server (published by an older build) lacks what this build writes: refused
+    // before anything is read or written, until its administrator upgrades it.
+    FOURFOLD_TRY_STATUS(requireCurrentServerSchema(*conn));
 
     auto me = conn->query(QStringLiteral(
         "SELECT p.pseudonym, fourfold.i_am_lead() FROM fourfold.person p "
