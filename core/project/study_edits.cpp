@@ -87,14 +87,26 @@ Status AssignEdit::apply(Database &db)
 
 Status AssignEdit::revert(Database &db)
 {
-    // Undoing assignments someone already works on would orphan that work: refused, as a
-    // withdrawal of a draw is (spans, answers, coding time, or a status of started or done).
+    // Undoing assignments someone has worked on since would orphan that work: refused, as a
+    // withdrawal of a draw is (spans, answers, coding time, or a status of started or done). A
+    // row that brought a tombstone back counts only with work beyond what the tombstone held,
+    // which the undo keeps (a coder's time on a withdrawn draw).
     int withWork = 0;
-    for (const AssignmentToWrite &row : m_rows) {
+    for (std::size_t i = 0; i < m_rows.size(); ++i) {
+        const AssignmentToWrite &row = m_rows[i];
         auto record = store::assignmentRecord(db, row.article, row.coder, row.phase);
         if (!record)
             return std::unexpected(record.error());
-        if (*record && !(*record)->deleted && (*record)->hasWork())
+        if (!*record || (*record)->deleted)
+            continue;
+        const store::AssignmentRecord &now = **record;
+        const bool revived = m_before && i < m_before->tombstones.size() && m_before->tombstones[i];
+        if (!revived ? now.hasWork()
+                     : now.spans > m_before->tombstones[i]->spans
+                    || now.answers > m_before->tombstones[i]->answers
+                    || now.activeSeconds > m_before->tombstones[i]->activeSeconds
+                    || (now.status != QLatin1String("assigned")
+                        && now.status != m_before->tombstones[i]->status))
             ++withWork;
     }
     if (withWork > 0)
